@@ -1,0 +1,44 @@
+import { defineConfig } from "vitest/config";
+import react from "@vitejs/plugin-react";
+
+// Three suites, one run: pure and API tests in Node, component tests in jsdom (one DOM
+// implementation only), and browser tests that drive Debian's Chromium through playwright-core.
+export default defineConfig({
+  plugins: [react()],
+  test: {
+    projects: [
+      {
+        extends: true,
+        test: {
+          name: "server",
+          environment: "node",
+          include: ["server/**/*.test.ts", "tests/api/**/*.test.ts", "scripts/**/*.test.ts"],
+          globalSetup: ["tests/helpers/global-setup.ts"],
+          testTimeout: 30_000,
+          hookTimeout: 60_000,
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: "client",
+          environment: "jsdom",
+          include: ["src/**/*.test.{ts,tsx}"],
+          setupFiles: ["tests/helpers/client-setup.ts"],
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: "browser",
+          environment: "node",
+          include: ["tests/e2e/**/*.test.ts"],
+          globalSetup: ["tests/helpers/global-setup.ts"],
+          fileParallelism: false,
+          testTimeout: 120_000,
+          hookTimeout: 120_000,
+        },
+      },
+    ],
+  },
+});
