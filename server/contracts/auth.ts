@@ -1,0 +1,50 @@
+import { z } from "zod";
+import { emailSchema, idSchema, passwordSchema, personNameSchema } from "./common";
+import { ROLES } from "../domain/roles";
+import { lengthUnitSchema, massUnitSchema } from "./units";
+
+export const signInInput = z.object({
+  email: emailSchema,
+  password: z.string().min(1, "is required").max(200, "must be at most 200 characters"),
+});
+export type SignInInput = z.infer<typeof signInInput>;
+
+export const passwordResetRequestInput = z.object({ email: emailSchema });
+export const passwordResetConfirmInput = z.object({
+  token: z.string().min(20, "is not a valid reset link").max(200),
+  password: passwordSchema,
+});
+
+export const membershipSummary = z.object({
+  companyId: idSchema,
+  companyName: z.string(),
+  role: z.enum(ROLES),
+});
+
+/** What the client knows about the signed-in person; `csrfToken` goes in the X-CSRF-Token header. */
+export const sessionInfo = z.object({
+  user: z
+    .object({
+      id: idSchema,
+      email: z.string(),
+      name: z.string(),
+      lengthUnit: lengthUnitSchema.nullable(),
+      massUnit: massUnitSchema.nullable(),
+    })
+    .nullable(),
+  activeCompanyId: idSchema.nullable(),
+  memberships: z.array(membershipSummary),
+  csrfToken: z.string(),
+  /** True when mail goes to the built-in fake SMTP server (demo and tests): the Outbox is then shown. */
+  outboxEnabled: z.boolean(),
+});
+export type SessionInfo = z.infer<typeof sessionInfo>;
+
+export const switchCompanyInput = z.object({ companyId: idSchema });
+
+export const profileUpdateInput = z.object({
+  name: personNameSchema,
+  lengthUnit: lengthUnitSchema.nullable(),
+  massUnit: massUnitSchema.nullable(),
+});
+export type ProfileUpdateInput = z.infer<typeof profileUpdateInput>;

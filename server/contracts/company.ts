@@ -1,0 +1,15 @@
+import { z } from "zod";
+import { lengthUnitSchema, massUnitSchema } from "./units";
+
+export const RULE_PROFILES = ["us-federal", "eu-fgas", "custom"] as const;
+export const LEAK_RATE_METHODS = ["annualizing", "rolling-average"] as const;
+
+export const companySettings = z.object({
+  name: z.string().trim().min(1, "is required").max(120, "must be at most 120 characters"),
+  lengthUnit: lengthUnitSchema,
+  massUnit: massUnitSchema,
+  ruleProfile: z.enum(RULE_PROFILES),
+  leakRateMethod: z.enum(LEAK_RATE_METHODS),
+  detectorCheckIntervalDays: z.int("must be a whole number of days").min(1, "must be at least 1 day").max(730, "must be at most 730 days"),
+});
+export type CompanySettings = z.infer<typeof companySettings>;

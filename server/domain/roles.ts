@@ -1,0 +1,55 @@
+// The five roles of ../shared/PRODUCT.md and what each may do. Pure data shared by the
+// server (authorization) and the client (navigation); the server is the one that enforces.
+export const ROLES = ["owner", "lead-tech", "technician", "engineer", "store-contact"] as const;
+export type Role = (typeof ROLES)[number];
+
+export const ROLE_LABELS: Record<Role, string> = {
+  owner: "Owner",
+  "lead-tech": "Lead tech",
+  technician: "Technician",
+  engineer: "Engineer",
+  "store-contact": "Store contact",
+};
+
+export type Permission =
+  | "members.read"
+  | "members.manage"
+  | "settings.manage"
+  | "outbox.read"
+  | "stores.read"
+  | "stores.edit"
+  | "plans.edit"
+  | "detectors.manage"
+  | "sweeps.record"
+  | "sweeps.review"
+  | "findings.record"
+  | "findings.close"
+  | "compliance.manage"
+  | "reports.send";
+
+const GRANTS: Record<Role, readonly Permission[]> = {
+  owner: [
+    "members.read", "members.manage", "settings.manage", "outbox.read", "stores.read", "stores.edit",
+    "plans.edit", "detectors.manage", "sweeps.record", "sweeps.review", "findings.record", "findings.close",
+    "compliance.manage", "reports.send",
+  ],
+  "lead-tech": [
+    "members.read", "stores.read", "stores.edit", "plans.edit", "detectors.manage", "sweeps.record", "findings.record",
+  ],
+  technician: ["members.read", "stores.read", "sweeps.record", "findings.record"],
+  engineer: [
+    "members.read", "outbox.read", "stores.read", "sweeps.review", "findings.record", "findings.close",
+    "compliance.manage", "reports.send",
+  ],
+  // Read-only, and only for the stores named on the membership (enforced per store).
+  "store-contact": ["stores.read"],
+};
+
+export function can(role: Role, permission: Permission): boolean {
+  return GRANTS[role].includes(permission);
+}
+
+/** Store contacts see only the stores their membership names; every other role sees the company's stores. */
+export function isStoreScoped(role: Role): boolean {
+  return role === "store-contact";
+}
