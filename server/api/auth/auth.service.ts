@@ -1,0 +1,62 @@
+import bcrypt from "bcryptjs";
+import type { Request } from "express";
+import { and, eq, gt, isNull } from "drizzle-orm";
+import type { AppContext } from "../../context";
+import { passwordResets, users } from "../../db/schema/index";
+import { HttpError } from "../../lib/http-error";
+import { hashToken, newLinkToken } from "../../lib/tokens";
+import { passwordResetMail } from "../../mail/templates";
+import { rotateCsrfToken } from "../../middleware/csrf";
+import { listMemberships } from "./session-info";
+
+const RESET_VALID_MS = 60 * 60 * 1000;
+// Compared against when the e-mail is unknown, so a wrong e-mail costs the same time as a wrong password.
+const DUMMY_HASH = bcrypt.hashSync("not-a-real-password", 4);
+
+export async function hashPassword(ctx: AppContext, password: string): Promise<string> {
+  return bcrypt.hash(password, ctx.config.bcryptCost);
+}
+
+export async function verifyCredentials(ctx: AppContext, email: string, password: string) {
+  const [user] = await ctx.db.select().from(users).where(eq(users.email, email));
+  const ok = await bcrypt.compare(password, user?.passwordHash ?? DUMMY_HASH);
+  if (!user || !ok) throw new HttpError(401, "invalid_credentials", "That e-mail and password do not match an account.");
+  return user;
+}
+
+/** Starts a fresh session for the user (a new session id defeats session fixation). */
+export async function startSession(ctx: AppContext, req: Request, userId: string, preferredCompanyId?: string) {
+  await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
+  const list = await listMemberships(ctx, userId);
+  req.session.userId = userId;
+  req.session.activeCompanyId = list.find((m) => m.companyId === preferredCompanyId)?.companyId ?? list[0]?.companyId;
+  rotateCsrfToken(req);
+  await new Promise<void>((resolve, reject) => req.session.save((err) => (err ? reject(err) : resolve())));
+}
+
+export async function endSession(req: Request) {
+  await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
+  rotateCsrfToken(req);
+}
+
+export async function requestPasswordReset(ctx: AppContext, email: string) {
+  const [user] = await ctx.db.select().from(users).where(eq(users.email, email));
+  if (!user) return; // same answer either way: the endpoint must not reveal who has an account
+  const { token, hash } = newLinkToken();
+  await ctx.db.insert(passwordResets).values({ userId: user.id, tokenHash: hash, expiresAt: new Date(Date.now() + RESET_VALID_MS) });
+  const mail = passwordResetMail({ name: user.name, link: `${ctx.config.appUrl}/reset-password/${token}` });
+  await ctx.mailer.send({ to: user.email, ...mail });
+}
+
+export async function confirmPasswordReset(ctx: AppContext, token: string, password: string) {
+  const passwordHash = await hashPassword(ctx, password);
+  await ctx.db.transaction(async (tx) => {
+    const [reset] = await tx
+      .select()
+      .from(passwordResets)
+      .where(and(eq(passwordResets.tokenHash, hashToken(token)), isNull(passwordResets.usedAt), gt(passwordResets.expiresAt, new Date())));
+    if (!reset) throw new HttpError(400, "invalid_token", "This reset link is not valid any more. Ask for a new one.", { token: "is expired or already used" });
+    await tx.update(passwordResets).set({ usedAt: new Date() }).where(eq(passwordResets.id, reset.id));
+    await tx.update(users).set({ passwordHash }).where(eq(users.id, reset.userId));
+  });
+}

@@ -1,0 +1,29 @@
+import type { Request } from "express";
+import { asc, eq } from "drizzle-orm";
+import type { AppContext } from "../../context";
+import { companies, memberships } from "../../db/schema/index";
+import type { SessionInfo } from "../../contracts/auth";
+import { issueCsrfToken } from "../../middleware/csrf";
+
+export async function listMemberships(ctx: AppContext, userId: string) {
+  return ctx.db
+    .select({ companyId: memberships.companyId, companyName: companies.name, role: memberships.role })
+    .from(memberships)
+    .innerJoin(companies, eq(companies.id, memberships.companyId))
+    .where(eq(memberships.userId, userId))
+    .orderBy(asc(companies.name));
+}
+
+/** What GET /api/auth/session answers; also the reply to every call that changes the session. */
+export async function sessionInfo(ctx: AppContext, req: Request): Promise<SessionInfo> {
+  const csrfToken = issueCsrfToken(req);
+  const auth = req.auth;
+  if (!auth) return { user: null, activeCompanyId: null, memberships: [], csrfToken, outboxEnabled: ctx.config.outboxEnabled };
+  return {
+    user: auth.user,
+    activeCompanyId: auth.membership?.companyId ?? null,
+    memberships: await listMemberships(ctx, auth.user.id),
+    csrfToken,
+    outboxEnabled: ctx.config.outboxEnabled,
+  };
+}

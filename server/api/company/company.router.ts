@@ -1,0 +1,35 @@
+import { Router } from "express";
+import { eq } from "drizzle-orm";
+import type { AppContext } from "../../context";
+import { companySettings, type CompanySettings } from "../../contracts/company";
+import { companies } from "../../db/schema/index";
+import { member, requireMember } from "../../middleware/auth";
+import { validate } from "../../middleware/validate";
+
+async function readSettings(ctx: AppContext, companyId: string): Promise<CompanySettings> {
+  const [c] = await ctx.db.select().from(companies).where(eq(companies.id, companyId));
+  return {
+    name: c.name,
+    lengthUnit: c.lengthUnit,
+    massUnit: c.massUnit,
+    ruleProfile: c.ruleProfile,
+    leakRateMethod: c.leakRateMethod,
+    detectorCheckIntervalDays: c.detectorCheckIntervalDays,
+  };
+}
+
+export function companyRouter(ctx: AppContext): Router {
+  const router = Router();
+
+  router.get("/company/settings", requireMember(), async (req, res) => {
+    res.json(await readSettings(ctx, member(req).companyId));
+  });
+
+  router.put("/company/settings", requireMember("settings.manage"), validate(companySettings), async (req, res) => {
+    const companyId = member(req).companyId;
+    await ctx.db.update(companies).set(req.body as CompanySettings).where(eq(companies.id, companyId));
+    res.json(await readSettings(ctx, companyId));
+  });
+
+  return router;
+}

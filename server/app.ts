@@ -1,0 +1,76 @@
+import express, { type Express } from "express";
+import session from "express-session";
+import connectPgSimple from "connect-pg-simple";
+import { pinoHttp } from "pino-http";
+import path from "node:path";
+import fs from "node:fs";
+import "./middleware/session-types";
+import type { AppContext } from "./context";
+import { loadAuth } from "./middleware/auth";
+import { csrfProtection } from "./middleware/csrf";
+import { errorHandler, notFoundApi } from "./middleware/error-handler";
+import { authRouter } from "./api/auth/auth.router";
+import { teamRouter } from "./api/team/team.router";
+import { invitationsRouter } from "./api/invitations/invitations.router";
+import { companyRouter } from "./api/company/company.router";
+import { outboxRouter } from "./api/outbox/outbox.router";
+import { storesRouter } from "./api/stores/stores.router";
+
+const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
+
+/** Builds the Express app without listening, so tests drive it with supertest. */
+export function createApp(ctx: AppContext): Express {
+  const app = express();
+  app.disable("x-powered-by");
+  app.set("trust proxy", "loopback");
+  app.use(
+    pinoHttp({
+      logger: ctx.logger,
+      autoLogging: { ignore: (req) => !req.url?.startsWith("/api/") },
+      customProps: (req) => ({ userId: (req as express.Request).session?.userId }),
+      serializers: {
+        req: (req) => ({ method: req.method, url: req.url }),
+        res: (res) => ({ statusCode: res.statusCode }),
+      },
+    }),
+  );
+  app.use(express.json({ limit: "5mb" }));
+
+  const PgStore = connectPgSimple(session);
+  app.use(
+    session({
+      name: "plumeline.sid",
+      store: new PgStore({ pool: ctx.pool, tableName: "session", createTableIfMissing: false, pruneSessionInterval: 15 * 60 }),
+      secret: ctx.config.sessionSecret,
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      cookie: { httpOnly: true, sameSite: "lax", secure: ctx.config.secureCookies, maxAge: 30 * 24 * 60 * 60 * 1000 },
+    }),
+  );
+
+  const api = express.Router();
+  api.get("/health", (_req, res) => {
+    res.json({ ok: true });
+  });
+  api.use(loadAuth(ctx.db));
+  api.use(csrfProtection);
+  api.use(authRouter(ctx));
+  api.use(invitationsRouter(ctx));
+  api.use(teamRouter(ctx));
+  api.use(companyRouter(ctx));
+  api.use(outboxRouter(ctx));
+  api.use(storesRouter(ctx));
+  api.use(notFoundApi);
+  app.use("/api", api);
+
+  if (ctx.config.serveClient && fs.existsSync(CLIENT_DIR)) {
+    app.use(express.static(CLIENT_DIR, { index: false, maxAge: "1h" }));
+    // Client-side routes: every other GET gets the app shell.
+    app.get("/{*splat}", (_req, res) => {
+      res.sendFile(path.join(CLIENT_DIR, "index.html"));
+    });
+  }
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,60 @@
+import pino from "pino";
+import type { Env } from "./env";
+import type { AppContext } from "./context";
+import { createDb, migrateDb } from "./db/client";
+import { createSmtpMailer } from "./mail/mailer";
+import { startFakeSmtp, type FakeSmtp } from "./mail/fake-smtp";
+
+export interface Runtime {
+  ctx: AppContext;
+  fakeSmtp: FakeSmtp | null;
+  close(): Promise<void>;
+}
+
+/** Connects, migrates, starts the fake SMTP server when no real one is configured, and builds the context. */
+export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): Promise<Runtime> {
+  const logger = pino({ level: env.LOG_LEVEL });
+  const { pool, db } = createDb(env.DATABASE_URL);
+  await migrateDb(db);
+
+  const fakeSmtp = env.SMTP_HOST ? null : await startFakeSmtp(db, env.FAKE_SMTP_PORT);
+  const mailer = createSmtpMailer(
+    {
+      host: env.SMTP_HOST ?? "127.0.0.1",
+      port: fakeSmtp ? fakeSmtp.port : env.SMTP_PORT,
+      secure: env.SMTP_SECURE === "true",
+      user: env.SMTP_USER,
+      pass: env.SMTP_PASS,
+      from: env.MAIL_FROM,
+    },
+    Boolean(fakeSmtp),
+  );
+
+  const ctx: AppContext = {
+    db,
+    pool,
+    mailer,
+    logger,
+    config: {
+      sessionSecret: env.SESSION_SECRET,
+      bcryptCost: env.BCRYPT_COST,
+      loginRateLimit: env.LOGIN_RATE_LIMIT,
+      loginRateWindowMs: env.LOGIN_RATE_WINDOW_MS,
+      appUrl: overrides.appUrl ?? env.APP_URL ?? `http://${env.HOST}:${env.PORT}`,
+      outboxEnabled: Boolean(fakeSmtp),
+      uploadsDir: env.UPLOADS_DIR,
+      secureCookies: (env.APP_URL ?? "").startsWith("https://"),
+      serveClient: true,
+    },
+  };
+
+  return {
+    ctx,
+    fakeSmtp,
+    async close() {
+      mailer.close();
+      await fakeSmtp?.close();
+      await pool.end();
+    },
+  };
+}

@@ -1,0 +1,69 @@
+import { index, integer, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import { users } from "./users";
+
+export const companies = pgTable("companies", {
+  id: uuid().primaryKey().defaultRandom(),
+  name: text().notNull(),
+  lengthUnit: text({ enum: ["m", "ft-in"] }).notNull().default("m"),
+  massUnit: text({ enum: ["kg", "lb"] }).notNull().default("kg"),
+  ruleProfile: text({ enum: ["us-federal", "eu-fgas", "custom"] }).notNull().default("us-federal"),
+  leakRateMethod: text({ enum: ["annualizing", "rolling-average"] }).notNull().default("annualizing"),
+  detectorCheckIntervalDays: integer().notNull().default(30),
+  createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+});
+
+export const ROLE_VALUES = ["owner", "lead-tech", "technician", "engineer", "store-contact"] as const;
+
+export const memberships = pgTable(
+  "memberships",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
+    userId: uuid().notNull().references(() => users.id, { onDelete: "cascade" }),
+    role: text({ enum: ROLE_VALUES }).notNull(),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex("memberships_company_user").on(t.companyId, t.userId), index("memberships_user").on(t.userId)],
+);
+
+export const invitations = pgTable(
+  "invitations",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
+    email: text().notNull(),
+    role: text({ enum: ROLE_VALUES }).notNull(),
+    storeIds: uuid().array().notNull().default([]),
+    tokenHash: text().notNull().unique(),
+    invitedById: uuid().notNull().references(() => users.id),
+    expiresAt: timestamp({ withTimezone: true }).notNull(),
+    acceptedAt: timestamp({ withTimezone: true }),
+    revokedAt: timestamp({ withTimezone: true }),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("invitations_company").on(t.companyId)],
+);
+
+export const stores = pgTable(
+  "stores",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
+    name: text().notNull(),
+    address: text().notNull().default(""),
+    timeZone: text().notNull().default("UTC"),
+    archivedAt: timestamp({ withTimezone: true }),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("stores_company").on(t.companyId)],
+);
+
+/** The stores a store contact's membership may read. */
+export const membershipStores = pgTable(
+  "membership_stores",
+  {
+    membershipId: uuid().notNull().references(() => memberships.id, { onDelete: "cascade" }),
+    storeId: uuid().notNull().references(() => stores.id, { onDelete: "cascade" }),
+  },
+  (t) => [primaryKey({ columns: [t.membershipId, t.storeId] })],
+);

@@ -1,0 +1,4 @@
+export * from "./users";
+export * from "./companies";
+export * from "./mail";
+export * from "./sessions";

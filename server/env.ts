@@ -1,0 +1,36 @@
+import { z } from "zod";
+
+// All configuration comes from the environment, checked once at start-up with a clear message.
+const envSchema = z.object({
+  NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
+  DATABASE_URL: z.string().min(1, "DATABASE_URL is required (postgres://user@host:port/db)"),
+  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+  HOST: z.string().default("127.0.0.1"),
+  APP_URL: z.string().optional(),
+  SESSION_SECRET: z.string().min(16, "SESSION_SECRET must be at least 16 characters").default("plumeline-local-development-secret"),
+  BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(12),
+  LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
+  LOGIN_RATE_WINDOW_MS: z.coerce.number().int().min(1000).default(15 * 60 * 1000),
+  // Without SMTP_HOST the server starts its own fake SMTP server and keeps what it catches (the Outbox).
+  SMTP_HOST: z.string().optional(),
+  SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASS: z.string().optional(),
+  SMTP_SECURE: z.enum(["true", "false"]).default("false"),
+  MAIL_FROM: z.string().default("Plumeline <no-reply@plumeline.local>"),
+  FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
+  UPLOADS_DIR: z.string().default("uploads"),
+  LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
+  SEED_DEMO: z.enum(["true", "false"]).default("true"),
+});
+
+export type Env = z.infer<typeof envSchema>;
+
+export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
+  const parsed = envSchema.safeParse(source);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join(".")}: ${i.message}`);
+    throw new Error(`Invalid configuration:\n${lines.join("\n")}`);
+  }
+  return parsed.data;
+}

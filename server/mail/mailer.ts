@@ -1,0 +1,60 @@
+import nodemailer, { type Transporter } from "nodemailer";
+
+export interface MailAttachment {
+  filename: string;
+  content: Buffer;
+  contentType: string;
+}
+
+export interface OutgoingMail {
+  to: string | string[];
+  subject: string;
+  text: string;
+  html?: string;
+  attachments?: MailAttachment[];
+  /** Lets the Outbox show a company only its own mail. */
+  companyId?: string | null;
+}
+
+export interface Mailer {
+  send(mail: OutgoingMail): Promise<void>;
+  close(): void;
+}
+
+export interface SmtpSettings {
+  host: string;
+  port: number;
+  secure: boolean;
+  user?: string;
+  pass?: string;
+  from: string;
+}
+
+/** Sends through any SMTP server: the built-in fake in the demo and tests, a real host in production. */
+export function createSmtpMailer(settings: SmtpSettings, isFake: boolean): Mailer {
+  const transport: Transporter = nodemailer.createTransport({
+    host: settings.host,
+    port: settings.port,
+    secure: settings.secure,
+    // The fake server speaks plain SMTP on loopback (its bundled certificate has expired).
+    ignoreTLS: isFake,
+    auth: settings.user ? { user: settings.user, pass: settings.pass ?? "" } : undefined,
+  });
+  return {
+    async send(mail) {
+      await transport.sendMail({
+        from: settings.from,
+        to: mail.to,
+        subject: mail.subject,
+        text: mail.text,
+        html: mail.html,
+        attachments: mail.attachments,
+        // Read back by the fake server to file the message under its company.
+        headers: mail.companyId ? { "X-Plumeline-Company": mail.companyId } : undefined,
+      });
+    },
+    close() {
+      transport.close();
+    },
+  };
+}

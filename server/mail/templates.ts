@@ -1,0 +1,26 @@
+// Plain-text first: these must read well in any mail client, including the Outbox.
+export function invitationMail(args: { companyName: string; inviterName: string; roleLabel: string; link: string }) {
+  return {
+    subject: `You are invited to ${args.companyName} on Plumeline`,
+    text: [
+      `${args.inviterName} invited you to join ${args.companyName} on Plumeline as ${args.roleLabel}.`,
+      "",
+      `Accept the invitation: ${args.link}`,
+      "",
+      "The link works for 7 days. If you were not expecting this, you can ignore this message.",
+    ].join("\n"),
+  };
+}
+
+export function passwordResetMail(args: { name: string; link: string }) {
+  return {
+    subject: "Reset your Plumeline password",
+    text: [
+      `Hello ${args.name},`,
+      "",
+      `Someone asked to reset the password of your Plumeline account. Choose a new one here: ${args.link}`,
+      "",
+      "The link works for one hour and only once. If it was not you, ignore this message: your password stays as it is.",
+    ].join("\n"),
+  };
+}

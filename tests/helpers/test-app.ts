@@ -1,0 +1,76 @@
+import pino from "pino";
+import type { Express } from "express";
+import request from "supertest";
+import { createApp } from "../../server/app";
+import type { AppConfig, AppContext } from "../../server/context";
+import { createSmtpMailer } from "../../server/mail/mailer";
+import { startFakeSmtp, type FakeSmtp } from "../../server/mail/fake-smtp";
+import { createTestDatabase, type TestDatabase } from "./test-db";
+
+export interface TestApp {
+  app: Express;
+  ctx: AppContext;
+  database: TestDatabase;
+  smtp: FakeSmtp;
+  close(): Promise<void>;
+}
+
+/** The real app on a real, private database with its own fake SMTP server (port 0). */
+export async function createTestApp(config: Partial<AppConfig> = {}): Promise<TestApp> {
+  const database = await createTestDatabase();
+  const smtp = await startFakeSmtp(database.db, 0);
+  const mailer = createSmtpMailer({ host: "127.0.0.1", port: smtp.port, secure: false, from: "Plumeline <no-reply@plumeline.test>" }, true);
+  const ctx: AppContext = {
+    db: database.db,
+    pool: database.pool,
+    mailer,
+    logger: pino({ level: "silent" }),
+    config: {
+      sessionSecret: "test-secret-test-secret",
+      bcryptCost: 4, // fast in tests; production uses 12
+      loginRateLimit: 1000,
+      loginRateWindowMs: 60_000,
+      appUrl: "http://plumeline.test",
+      outboxEnabled: true,
+      uploadsDir: "uploads",
+      secureCookies: false,
+      serveClient: false,
+      ...config,
+    },
+  };
+  const app = createApp(ctx);
+  return {
+    app,
+    ctx,
+    database,
+    smtp,
+    async close() {
+      mailer.close();
+      await smtp.close();
+      await database.drop();
+    },
+  };
+}
+
+/** A supertest agent that keeps cookies and sends the session's CSRF token on writes. */
+export async function agentFor(app: Express) {
+  const agent = request.agent(app);
+  const session = await agent.get("/api/auth/session");
+  let csrf: string = session.body.csrfToken;
+  const remember = (res: request.Response) => {
+    if (res.body && typeof res.body.csrfToken === "string") csrf = res.body.csrfToken;
+    return res;
+  };
+  return {
+    agent,
+    get: (url: string) => agent.get(url).then(remember),
+    post: (url: string, body?: object) => agent.post(url).set("X-CSRF-Token", csrf).send(body ?? {}).then(remember),
+    put: (url: string, body?: object) => agent.put(url).set("X-CSRF-Token", csrf).send(body ?? {}).then(remember),
+    patch: (url: string, body?: object) => agent.patch(url).set("X-CSRF-Token", csrf).send(body ?? {}).then(remember),
+    delete: (url: string) => agent.delete(url).set("X-CSRF-Token", csrf).then(remember),
+    get csrf() {
+      return csrf;
+    },
+  };
+}
+export type Agent = Awaited<ReturnType<typeof agentFor>>;
