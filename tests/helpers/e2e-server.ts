@@ -1,0 +1,28 @@
+import type { AddressInfo } from "node:net";
+import type { Server } from "node:http";
+import { createTestApp, type TestApp } from "./test-app";
+
+export interface E2eServer extends TestApp {
+  url: string;
+  server: Server;
+}
+
+/** The real app with the built client, listening on a free loopback port, on a private database. */
+export async function startE2eServer(): Promise<E2eServer> {
+  const t = await createTestApp({ serveClient: true });
+  const server = await new Promise<Server>((resolve) => {
+    const s = t.app.listen(0, "127.0.0.1", () => resolve(s));
+  });
+  const url = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  t.ctx.config.appUrl = url;
+  return {
+    ...t,
+    url,
+    server,
+    async close() {
+      server.closeAllConnections();
+      await new Promise((r) => server.close(r));
+      await t.close();
+    },
+  };
+}
