@@ -64,6 +64,11 @@ case "$cmd" in
     if [ ! -f "$dir/PG_VERSION" ]; then
       as_pg "$pgbin/initdb" -D "$dir" -U postgres --auth=trust -E UTF8 --locale=C.UTF-8 >/dev/null
     fi
+    # A cluster left running from this folder on another port is stopped first: one folder, one port.
+    if [ -f "$dir/postmaster.pid" ] && as_pg "$pgbin/pg_ctl" -D "$dir" status >/dev/null 2>&1; then
+      running_port=$(sed -n 4p "$dir/postmaster.pid")
+      [ "$running_port" = "$port" ] || as_pg "$pgbin/pg_ctl" -D "$dir" -m fast -w stop >/dev/null
+    fi
     if ! as_pg "$pgbin/pg_isready" -q -h 127.0.0.1 -p "$port"; then
       for attempt in 1 2 3; do
         if as_pg "$pgbin/pg_ctl" -D "$dir" -l "$dir/server.log" -w -t 60 \
