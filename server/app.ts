@@ -15,6 +15,7 @@ import { invitationsRouter } from "./api/invitations/invitations.router";
 import { companyRouter } from "./api/company/company.router";
 import { outboxRouter } from "./api/outbox/outbox.router";
 import { storesRouter } from "./api/stores/stores.router";
+import { detectorsRouter } from "./api/detectors/detectors.router";
 
 const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
 
@@ -61,6 +62,7 @@ export function createApp(ctx: AppContext): Express {
   api.use(companyRouter(ctx));
   api.use(outboxRouter(ctx));
   api.use(storesRouter(ctx));
+  api.use(detectorsRouter(ctx));
   api.use(notFoundApi);
   app.use("/api", api);
 

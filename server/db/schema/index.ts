@@ -2,3 +2,4 @@ export * from "./users";
 export * from "./companies";
 export * from "./mail";
 export * from "./sessions";
+export * from "./detectors";

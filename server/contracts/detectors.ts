@@ -1,0 +1,38 @@
+import { z } from "zod";
+
+export const SENSING_PRINCIPLES = ["heated-diode", "infrared", "other"] as const;
+export const PRINCIPLE_LABELS: Record<(typeof SENSING_PRINCIPLES)[number], string> = {
+  "heated-diode": "Heated diode / heated ceramic",
+  infrared: "Infrared (NDIR)",
+  other: "Other",
+};
+
+const levelBand = z
+  .object({
+    level: z.string().trim().min(1, "is required").max(20, "must be at most 20 characters"),
+    minPpm: z.number("must be a number").finite().min(0, "must be 0 or more"),
+    maxPpm: z.number("must be a number").finite().positive("must be above 0").nullable(),
+  })
+  .refine((b) => b.maxPpm === null || b.maxPpm > b.minPpm, { path: ["maxPpm"], message: "must be above the lower bound" });
+
+export const detectorInput = z.object({
+  name: z.string().trim().min(1, "is required").max(80, "must be at most 80 characters"),
+  principle: z.enum(SENSING_PRINCIPLES, "must be heated-diode, infrared or other"),
+  // Defaults: 5 s transport delay and 2 ppm alarm are common practice for hose-sampling
+  // detectors (no published source); set them from the instrument's manual.
+  transportDelayS: z.number("must be a number").finite().min(0, "must be 0 or more").max(60, "must be at most 60 s").default(5),
+  timeConstantS: z.number("must be a number").finite().min(0, "must be 0 or more").max(60, "must be at most 60 s").default(1.5),
+  alarmPpm: z.number("must be a number").finite().positive("must be above 0").max(10000, "must be at most 10,000 ppm").default(2),
+  lastCheckedOn: z.iso.date("must be a date (YYYY-MM-DD)").nullable().default(null),
+  levelScale: z.array(levelBand).max(20, "must have at most 20 levels").nullable().default(null),
+});
+export type DetectorInput = z.infer<typeof detectorInput>;
+
+export const detector = detectorInput.extend({
+  id: z.uuid(),
+  archivedAt: z.string().nullable(),
+  /** Date the next calibration / bump check falls due, from the company's interval. */
+  checkDueOn: z.string().nullable(),
+  overdue: z.boolean(),
+});
+export type Detector = z.infer<typeof detector>;
