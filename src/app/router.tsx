@@ -1,6 +1,7 @@
 import { createBrowserRouter, type RouteObject } from "react-router";
 import { ErrorPage, RootErrorPage } from "./routes/error-page";
 import { Component as NotFound } from "./routes/not-found";
+import { Spinner } from "../components/ui/spinner";
 import { RequireSession } from "./shell/require-session";
 import { PublicLayout } from "./shell/public-layout";
 
@@ -8,6 +9,8 @@ import { PublicLayout } from "./shell/public-layout";
 export const routes: RouteObject[] = [
   {
     ErrorBoundary: RootErrorPage,
+    // Shown while the first page's module loads.
+    HydrateFallback: () => <Spinner label="Opening Plumeline…" />,
     children: [
       {
         Component: PublicLayout,
