@@ -1,0 +1,48 @@
+import { createBrowserRouter, type RouteObject } from "react-router";
+import { ErrorPage, RootErrorPage } from "./routes/error-page";
+import { Component as NotFound } from "./routes/not-found";
+import { Spinner } from "../components/ui/spinner";
+import { RequireSession } from "./shell/require-session";
+import { PublicLayout } from "./shell/public-layout";
+
+// Each page is a route module loaded on first visit, so the sign-in page stays small on a phone.
+export const routes: RouteObject[] = [
+  {
+    ErrorBoundary: RootErrorPage,
+    // Shown while the first page's module loads.
+    HydrateFallback: () => <Spinner label="Opening Plumeline…" />,
+    children: [
+      {
+        Component: PublicLayout,
+        children: [
+          { path: "/sign-in", lazy: () => import("./routes/sign-in") },
+          { path: "/forgot-password", lazy: () => import("./routes/forgot-password") },
+          { path: "/reset-password/:token", lazy: () => import("./routes/reset-password") },
+          { path: "/invite/:token", lazy: () => import("./routes/invite") },
+        ],
+      },
+      {
+        Component: RequireSession,
+        children: [
+          {
+            // Errors inside a page keep the header and navigation on screen.
+            ErrorBoundary: ErrorPage,
+            children: [
+              { index: true, lazy: () => import("./routes/home") },
+              { path: "/team", lazy: () => import("./routes/team") },
+              { path: "/settings", lazy: () => import("./routes/company-settings") },
+              { path: "/profile", lazy: () => import("./routes/profile") },
+              { path: "/outbox", lazy: () => import("./routes/outbox") },
+              { path: "/outbox/:messageId", lazy: () => import("./routes/outbox") },
+              { path: "*", Component: NotFound },
+            ],
+          },
+        ],
+      },
+    ],
+  },
+];
+
+export function createAppRouter() {
+  return createBrowserRouter(routes);
+}

@@ -1,0 +1,34 @@
+import { useQueryClient } from "@tanstack/react-query";
+import { can } from "../../../server/domain/roles";
+import { PageHeader } from "../../components/ui/page-header";
+import { QueryError } from "../../components/ui/query-error";
+import { Spinner } from "../../components/ui/spinner";
+import { authKeys } from "../../features/auth/api/auth-keys";
+import { useCompanySettings } from "../../features/settings/api/get-company-settings";
+import { CompanySettingsForm } from "../../features/settings/components/company-settings-form";
+import { useDocumentTitle } from "../../lib/use-document-title";
+import { useSignedIn } from "../shell/session-context";
+
+export function Component() {
+  useDocumentTitle("Company settings");
+  const { membership } = useSignedIn();
+  const queryClient = useQueryClient();
+  const settings = useCompanySettings();
+  return (
+    <>
+      <PageHeader title="Company settings" description="Units, the rule profile and the checks the company works under." />
+      {settings.isPending ? <Spinner label="Loading settings…" /> : null}
+      {settings.isError ? <QueryError error={settings.error} what="the settings" onRetry={() => void settings.refetch()} /> : null}
+      {settings.data ? (
+        <CompanySettingsForm
+          // A fresh form per company, so a switch never shows the last company's values.
+          key={membership.companyId}
+          settings={settings.data}
+          editable={can(membership.role, "settings.manage")}
+          // The header shows the company name from the session.
+          onSaved={() => void queryClient.invalidateQueries({ queryKey: authKeys.session() })}
+        />
+      ) : null}
+    </>
+  );
+}

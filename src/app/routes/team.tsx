@@ -1,0 +1,48 @@
+import { can } from "../../../server/domain/roles";
+import { PageHeader } from "../../components/ui/page-header";
+import { QueryError } from "../../components/ui/query-error";
+import { Spinner } from "../../components/ui/spinner";
+import { useStores } from "../../features/stores/api/get-stores";
+import { useTeam } from "../../features/team/api/get-team";
+import { InvitationsList } from "../../features/team/components/invitations-list";
+import { InviteForm } from "../../features/team/components/invite-form";
+import { MembersTable } from "../../features/team/components/members-table";
+import { useDocumentTitle } from "../../lib/use-document-title";
+import { useSignedIn } from "../shell/session-context";
+import { Component as NotFound } from "./not-found";
+
+export function Component() {
+  useDocumentTitle("Team");
+  const { session, user, membership } = useSignedIn();
+  const allowed = can(membership.role, "members.read");
+  const canManage = can(membership.role, "members.manage");
+  const team = useTeam();
+  // Store names for the store contacts' column and the store picker: the stores feature meets team here.
+  const stores = useStores({ enabled: allowed });
+
+  if (!allowed) return <NotFound />;
+  return (
+    <>
+      <PageHeader title="Team" description={`Everyone who works in ${membership.companyName} on Plumeline, and their roles.`} />
+      {team.isPending ? <Spinner label="Loading the team…" /> : null}
+      {team.isError ? <QueryError error={team.error} what="the team" onRetry={() => void team.refetch()} /> : null}
+      {team.data ? (
+        <div className="space-y-8">
+          <section aria-labelledby="members-heading" className="space-y-3">
+            <h2 id="members-heading" className="text-xl font-bold">
+              Members
+            </h2>
+            <MembersTable members={team.data.members} stores={stores.data} canManage={canManage} currentUserId={user.id} companyName={membership.companyName} />
+          </section>
+          <section aria-labelledby="invitations-heading" className="space-y-3">
+            <h2 id="invitations-heading" className="text-xl font-bold">
+              Pending invitations
+            </h2>
+            <InvitationsList invitations={team.data.invitations} canManage={canManage} />
+          </section>
+          {canManage ? <InviteForm stores={stores.data} storesLoading={stores.isPending} outboxHint={session.outboxEnabled} /> : null}
+        </div>
+      ) : null}
+    </>
+  );
+}

@@ -1,0 +1,100 @@
+import { fireEvent, screen, waitFor, within } from "@testing-library/react";
+import { describe, expect, it } from "vitest";
+import type { Role } from "../../../server/domain/roles";
+import { renderApp } from "../../../tests/helpers/render-client";
+import { COMPANY_B, sessionFor, signedOutSession } from "../../../tests/helpers/session-fixtures";
+import { stubFetch } from "../../../tests/helpers/stub-fetch";
+
+async function navLabels() {
+  const nav = await screen.findByRole("navigation", { name: "Main" });
+  return within(nav)
+    .getAllByRole("link")
+    .map((link) => link.textContent);
+}
+
+// Expected menus follow the role table in PRODUCT.md and the grants in server/domain/roles.ts.
+const cases: { role: Role; outboxEnabled: boolean; expected: string[] }[] = [
+  { role: "owner", outboxEnabled: true, expected: ["Stores", "Team", "Company settings", "Outbox"] },
+  { role: "owner", outboxEnabled: false, expected: ["Stores", "Team", "Company settings"] },
+  { role: "engineer", outboxEnabled: true, expected: ["Stores", "Team", "Company settings", "Outbox"] },
+  { role: "lead-tech", outboxEnabled: true, expected: ["Stores", "Team", "Company settings"] },
+  { role: "technician", outboxEnabled: true, expected: ["Stores", "Team", "Company settings"] },
+  { role: "store-contact", outboxEnabled: true, expected: ["Stores", "Company settings"] },
+];
+
+describe("navigation by role", () => {
+  it.each(cases)("shows $role (outbox enabled: $outboxEnabled) exactly $expected", async ({ role, outboxEnabled, expected }) => {
+    stubFetch({
+      "GET /api/auth/session": { body: sessionFor(role, { outboxEnabled }) },
+      "GET /api/stores": { body: { stores: [] } },
+    });
+    renderApp("/");
+    expect(await navLabels()).toEqual(expected);
+  });
+
+  it("offers a company switcher only to people with several memberships", async () => {
+    const calls = stubFetch({
+      "GET /api/auth/session": { body: sessionFor("owner", { twoCompanies: true }) },
+      "GET /api/stores": { body: { stores: [] } },
+      "POST /api/auth/switch-company": { body: { ...sessionFor("owner", { twoCompanies: true, csrfToken: "csrf-b" }), activeCompanyId: COMPANY_B } },
+    });
+    renderApp("/");
+    const switcher = await screen.findByLabelText("Company");
+    fireEvent.change(switcher, { target: { value: COMPANY_B } });
+    await waitFor(() => expect(calls.some((c) => c.method === "POST" && c.path === "/api/auth/switch-company")).toBe(true));
+    const post = calls.find((c) => c.path === "/api/auth/switch-company")!;
+    expect(post.body).toEqual({ companyId: COMPANY_B });
+    await waitFor(() => expect(screen.getByRole("combobox", { name: "Company" })).toHaveProperty("value", COMPANY_B));
+    // The first company's store list is dropped and read again for the new company.
+    await waitFor(() => expect(calls.filter((c) => c.path === "/api/stores")).toHaveLength(2));
+    const switchAt = calls.findIndex((c) => c.path === "/api/auth/switch-company");
+    expect(calls.findLastIndex((c) => c.path === "/api/stores")).toBeGreaterThan(switchAt);
+  });
+
+  it("shows the company name without a switcher for a single membership", async () => {
+    stubFetch({ "GET /api/auth/session": { body: sessionFor("technician") }, "GET /api/stores": { body: { stores: [] } } });
+    renderApp("/");
+    expect(await screen.findByText("Northfield Cold Care")).toBeTruthy();
+    expect(screen.queryByLabelText("Company")).toBeNull();
+  });
+
+  it("hides the Team page itself from a store contact who types its address", async () => {
+    stubFetch({ "GET /api/auth/session": { body: sessionFor("store-contact") } });
+    renderApp("/team");
+    expect(await screen.findByRole("heading", { name: "Page not found" })).toBeTruthy();
+  });
+});
+
+describe("route guard", () => {
+  it("sends a signed-out person to sign-in and back to where they were going", async () => {
+    let session = signedOutSession();
+    stubFetch({
+      "GET /api/auth/session": () => ({ body: session }),
+      "POST /api/auth/sign-in": () => {
+        session = sessionFor("owner");
+        return { body: session };
+      },
+      "GET /api/company/settings": {
+        body: { name: "Northfield Cold Care", lengthUnit: "m", massUnit: "kg", ruleProfile: "eu-fgas", leakRateMethod: "annualizing", detectorCheckIntervalDays: 30 },
+      },
+    });
+    const { router } = renderApp("/settings");
+    expect(await screen.findByRole("heading", { name: "Sign in" })).toBeTruthy();
+    expect(router.state.location.pathname).toBe("/sign-in");
+    expect(router.state.location.search).toBe("?next=%2Fsettings");
+
+    fireEvent.change(screen.getByLabelText("E-mail"), { target: { value: "ines.varga@northfield.example" } });
+    fireEvent.change(screen.getByLabelText("Password"), { target: { value: "correct horse battery" } });
+    fireEvent.click(screen.getByRole("button", { name: "Sign in" }));
+
+    expect(await screen.findByRole("heading", { name: "Company settings" })).toBeTruthy();
+    expect(router.state.location.pathname).toBe("/settings");
+  });
+
+  it("shows the 404 page for an unknown address inside the app", async () => {
+    stubFetch({ "GET /api/auth/session": { body: sessionFor("owner") } });
+    renderApp("/no-such-page");
+    expect(await screen.findByRole("heading", { name: "Page not found" })).toBeTruthy();
+    expect(screen.getByRole("navigation", { name: "Main" })).toBeTruthy();
+  });
+});

@@ -1,0 +1,54 @@
+import { useEffect, useRef } from "react";
+import { Link, Outlet, useLocation } from "react-router";
+import { AppNav } from "./app-nav";
+import { CompanySwitcher } from "./company-switcher";
+import { ContrastToggle } from "./contrast-toggle";
+import { navItems } from "./nav-items";
+import { useSignedIn } from "./session-context";
+import { SignOutButton } from "./sign-out-button";
+import { SkipLink } from "./skip-link";
+
+export function AppShell() {
+  const { session, user, membership } = useSignedIn();
+  const { pathname } = useLocation();
+  const main = useRef<HTMLElement>(null);
+  const first = useRef(true);
+
+  // After a client-side page change, start reading at the new page, as a full load would.
+  useEffect(() => {
+    if (first.current) {
+      first.current = false;
+      return;
+    }
+    main.current?.focus();
+  }, [pathname]);
+
+  return (
+    <div className="min-h-dvh">
+      <SkipLink />
+      <header className="bg-surface edge border-x-0 border-t-0">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-3 px-4 py-3">
+          <div className="flex min-w-0 items-center gap-4">
+            <Link to="/" className="text-2xl font-bold no-underline">
+              Plumeline
+            </Link>
+            <CompanySwitcher memberships={session.memberships} active={membership} />
+          </div>
+          <div className="flex flex-wrap items-center gap-2">
+            <Link to="/profile" className="inline-flex min-h-11 items-center rounded-md px-3 font-bold hover:bg-accent-soft" aria-label={`Profile of ${user.name}`}>
+              {user.name}
+            </Link>
+            <ContrastToggle />
+            <SignOutButton />
+          </div>
+        </div>
+        <div className="mx-auto max-w-6xl px-4 pb-3">
+          <AppNav items={navItems(membership.role, session)} />
+        </div>
+      </header>
+      <main id="main" ref={main} tabIndex={-1} className="mx-auto max-w-6xl px-4 py-6 outline-none">
+        <Outlet />
+      </main>
+    </div>
+  );
+}

@@ -1,0 +1,20 @@
+import type { SessionInfo } from "../../../server/contracts/auth";
+import { can, type Role } from "../../../server/domain/roles";
+
+export interface NavItem {
+  to: string;
+  label: string;
+}
+
+/**
+ * What the navigation offers to a role. It only hides what would be refused: the server
+ * enforces every permission on its own (server/domain/roles.ts is shared by both sides).
+ */
+export function navItems(role: Role, session: Pick<SessionInfo, "outboxEnabled">): NavItem[] {
+  const items: NavItem[] = [{ to: "/", label: "Stores" }];
+  if (can(role, "members.read")) items.push({ to: "/team", label: "Team" });
+  // Every member may read the company's settings; only settings.manage may change them.
+  items.push({ to: "/settings", label: "Company settings" });
+  if (session.outboxEnabled && can(role, "outbox.read")) items.push({ to: "/outbox", label: "Outbox" });
+  return items;
+}

@@ -1,0 +1,5 @@
+export const settingsKeys = {
+  all: ["settings"] as const,
+  details: () => [...settingsKeys.all, "detail"] as const,
+  company: () => [...settingsKeys.details(), "company"] as const,
+};

@@ -1,0 +1,88 @@
+import { useState, type FormEvent } from "react";
+import type { CompanySettings } from "../../../../server/contracts/company";
+import { Alert } from "../../../components/ui/alert";
+import { Button } from "../../../components/ui/button";
+import { Select } from "../../../components/ui/select";
+import { TextField } from "../../../components/ui/text-field";
+import { formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
+import { companySettings, useUpdateCompanySettings } from "../api/update-company-settings";
+import { LEAK_RATE_METHOD_LABELS, LENGTH_LABELS, MASS_LABELS, RULE_PROFILE_LABELS, optionsOf } from "./unit-labels";
+
+export interface CompanySettingsFormProps {
+  settings: CompanySettings;
+  editable: boolean;
+  onSaved?: (saved: CompanySettings) => void;
+}
+
+type Draft = Omit<CompanySettings, "detectorCheckIntervalDays"> & { detectorCheckIntervalDays: string };
+
+export function CompanySettingsForm({ settings, editable, onSaved }: CompanySettingsFormProps) {
+  const [draft, setDraft] = useState<Draft>({ ...settings, detectorCheckIntervalDays: String(settings.detectorCheckIntervalDays) });
+  const [clientErrors, setClientErrors] = useState<FieldErrors>({});
+  const [saved, setSaved] = useState(false);
+  const update = useUpdateCompanySettings({ onSaved });
+  const errors = { ...serverFieldErrors(update.error), ...clientErrors };
+  const formError = formErrorMessage(update.error);
+
+  function set<K extends keyof Draft>(key: K, value: Draft[K]) {
+    setSaved(false);
+    setDraft((d) => ({ ...d, [key]: value }));
+  }
+
+  function submit(event: FormEvent) {
+    event.preventDefault();
+    const days = draft.detectorCheckIntervalDays.trim();
+    const parsed = companySettings.safeParse({ ...draft, detectorCheckIntervalDays: days === "" ? Number.NaN : Number(days) });
+    if (!parsed.success) {
+      setClientErrors(zodFieldErrors(parsed.error));
+      return;
+    }
+    setClientErrors({});
+    update.mutate(parsed.data, { onSuccess: () => setSaved(true) });
+  }
+
+  return (
+    <form noValidate onSubmit={submit} aria-label="Company settings" className="space-y-6">
+      {!editable ? (
+        <Alert tone="note">Only an owner can change these settings. They are shown here so you know what the company works under.</Alert>
+      ) : null}
+      {formError ? <Alert tone="error">{formError}</Alert> : null}
+      {saved ? <Alert tone="success">Settings saved.</Alert> : null}
+      <fieldset disabled={!editable} className="space-y-6">
+        <TextField label="Company name" name="name" value={draft.name} onChange={(e) => set("name", e.target.value)} error={errors.name} />
+        <section className="grid gap-4 sm:grid-cols-2" aria-labelledby="units-heading">
+          <h2 id="units-heading" className="text-xl font-bold sm:col-span-2">
+            Default units
+          </h2>
+          <p className="text-muted sm:col-span-2">Everything is stored in metres and kilograms; these set how figures are shown. Each person may choose their own on their profile.</p>
+          <Select label="Length" name="lengthUnit" options={optionsOf(LENGTH_LABELS)} value={draft.lengthUnit} onChange={(e) => set("lengthUnit", e.target.value as Draft["lengthUnit"])} error={errors.lengthUnit} />
+          <Select label="Mass" name="massUnit" options={optionsOf(MASS_LABELS)} value={draft.massUnit} onChange={(e) => set("massUnit", e.target.value as Draft["massUnit"])} error={errors.massUnit} />
+        </section>
+        <section className="grid gap-4 sm:grid-cols-2" aria-labelledby="rules-heading">
+          <h2 id="rules-heading" className="text-xl font-bold sm:col-span-2">
+            Records and rules
+          </h2>
+          <p className="text-muted sm:col-span-2">
+            The rule profile decides leak-rate thresholds, repair deadlines and inspection intervals. Local codes and certified practice still apply.
+          </p>
+          <Select label="Rule profile" name="ruleProfile" options={optionsOf(RULE_PROFILE_LABELS)} value={draft.ruleProfile} onChange={(e) => set("ruleProfile", e.target.value as Draft["ruleProfile"])} error={errors.ruleProfile} />
+          <Select label="Leak-rate method" name="leakRateMethod" options={optionsOf(LEAK_RATE_METHOD_LABELS)} value={draft.leakRateMethod} onChange={(e) => set("leakRateMethod", e.target.value as Draft["leakRateMethod"])} error={errors.leakRateMethod} />
+          <TextField
+            label="Detector check interval (days)"
+            name="detectorCheckIntervalDays"
+            inputMode="numeric"
+            hint="A sweep with a detector whose last calibration or bump check is older than this shows a warning."
+            value={draft.detectorCheckIntervalDays}
+            onChange={(e) => set("detectorCheckIntervalDays", e.target.value)}
+            error={errors.detectorCheckIntervalDays}
+          />
+        </section>
+      </fieldset>
+      {editable ? (
+        <Button type="submit" busy={update.isPending}>
+          Save settings
+        </Button>
+      ) : null}
+    </form>
+  );
+}

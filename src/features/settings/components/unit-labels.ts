@@ -1,0 +1,20 @@
+import type { LengthUnit, MassUnit } from "../../../../server/contracts/units";
+import type { CompanySettings } from "../../../../server/contracts/company";
+
+export const LENGTH_LABELS: Record<LengthUnit, string> = { m: "Metres", "ft-in": "Feet and inches" };
+export const MASS_LABELS: Record<MassUnit, string> = { kg: "Kilograms (kg)", lb: "Pounds (lb)" };
+
+export const RULE_PROFILE_LABELS: Record<CompanySettings["ruleProfile"], string> = {
+  "us-federal": "US federal (EPA refrigerant management)",
+  "eu-fgas": "EU F-gas",
+  custom: "Custom",
+};
+
+export const LEAK_RATE_METHOD_LABELS: Record<CompanySettings["leakRateMethod"], string> = {
+  annualizing: "Annualizing",
+  "rolling-average": "Rolling average",
+};
+
+export function optionsOf<K extends string>(labels: Record<K, string>) {
+  return (Object.keys(labels) as K[]).map((value) => ({ value, label: labels[value] }));
+}

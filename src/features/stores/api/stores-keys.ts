@@ -1,0 +1,11 @@
+export interface StoreListFilter {
+  includeArchived?: boolean;
+}
+
+export const storesKeys = {
+  all: ["stores"] as const,
+  lists: () => [...storesKeys.all, "list"] as const,
+  list: (filter: StoreListFilter = {}) => [...storesKeys.lists(), filter] as const,
+  details: () => [...storesKeys.all, "detail"] as const,
+  detail: (id: string) => [...storesKeys.details(), id] as const,
+};

@@ -1,0 +1,16 @@
+import { queryOptions, useQuery } from "@tanstack/react-query";
+import { teamResponse } from "../../../../server/contracts/members";
+import { api } from "../../../lib/api-client";
+import { teamKeys } from "./team-keys";
+
+export function getTeam(signal?: AbortSignal) {
+  return api.get("/api/team", teamResponse, signal);
+}
+
+export function teamQueryOptions() {
+  return queryOptions({ queryKey: teamKeys.list(), queryFn: ({ signal }) => getTeam(signal) });
+}
+
+export function useTeam() {
+  return useQuery(teamQueryOptions());
+}

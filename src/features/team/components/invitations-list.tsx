@@ -1,0 +1,53 @@
+import type { Invitation } from "../../../../server/contracts/members";
+import { ROLE_LABELS } from "../../../../server/domain/roles";
+import { Alert } from "../../../components/ui/alert";
+import { Button } from "../../../components/ui/button";
+import { DataTable } from "../../../components/ui/data-table";
+import { EmptyState } from "../../../components/ui/empty-state";
+import { formErrorMessage } from "../../../lib/form-errors";
+import { formatDate } from "../../../lib/format";
+import { useRevokeInvitation } from "../api/revoke-invitation";
+
+export function InvitationsList({ invitations, canManage, now = new Date() }: { invitations: readonly Invitation[]; canManage: boolean; now?: Date }) {
+  const revoke = useRevokeInvitation();
+  const pending = invitations.filter((i) => i.acceptedAt === null);
+  const error = formErrorMessage(revoke.error);
+
+  if (pending.length === 0) return <EmptyState title="No pending invitations" />;
+  return (
+    <div className="space-y-3">
+      {error ? <Alert tone="error">{error}</Alert> : null}
+      <DataTable
+        caption="Pending invitations"
+        rows={pending}
+        rowKey={(i) => i.id}
+        columns={[
+          { header: "E-mail", cell: (i) => <span className="break-all">{i.email}</span> },
+          { header: "Role", cell: (i) => ROLE_LABELS[i.role] },
+          { header: "Invited by", cell: (i) => i.invitedBy },
+          {
+            header: "Expires",
+            cell: (i) => (new Date(i.expiresAt) < now ? <strong>Expired {formatDate(i.expiresAt)}</strong> : formatDate(i.expiresAt)),
+          },
+          ...(canManage
+            ? [
+                {
+                  header: "Actions",
+                  cell: (i: Invitation) => (
+                    <Button
+                      variant="secondary"
+                      aria-label={`Revoke the invitation to ${i.email}`}
+                      busy={revoke.isPending && revoke.variables === i.id}
+                      onClick={() => revoke.mutate(i.id)}
+                    >
+                      Revoke
+                    </Button>
+                  ),
+                },
+              ]
+            : []),
+        ]}
+      />
+    </div>
+  );
+}

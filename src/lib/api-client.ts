@@ -1,0 +1,122 @@
+import type { z } from "zod";
+import { apiErrorSchema } from "../../server/contracts/common";
+
+/** A failed API call, carrying the server's one error shape (server/contracts/common.ts). */
+export class ApiRequestError extends Error {
+  readonly status: number;
+  readonly code: string;
+  /** Dotted field path → message, from the server's zod validation. */
+  readonly fields: Record<string, string>;
+
+  constructor(status: number, code: string, message: string, fields: Record<string, string> = {}) {
+    super(message);
+    this.name = "ApiRequestError";
+    this.status = status;
+    this.code = code;
+    this.fields = fields;
+  }
+}
+
+export function isApiRequestError(error: unknown): error is ApiRequestError {
+  return error instanceof ApiRequestError;
+}
+
+// The CSRF token comes from the latest SessionInfo the server sent; it changes at sign-in,
+// sign-out and company switch, so every response that carries one replaces it.
+let csrfToken: string | null = null;
+
+export function setCsrfToken(token: string | null): void {
+  csrfToken = token;
+}
+
+export function currentCsrfToken(): string | null {
+  return csrfToken;
+}
+
+type Method = "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
+
+export interface RequestOptions {
+  body?: unknown;
+  signal?: AbortSignal;
+}
+
+async function readJson(response: Response): Promise<unknown> {
+  if (response.status === 204) return null;
+  const text = await response.text();
+  if (text === "") return null;
+  try {
+    return JSON.parse(text);
+  } catch {
+    return undefined; // not JSON (a proxy's HTML error page, for instance)
+  }
+}
+
+function rememberCsrf(body: unknown): void {
+  if (body && typeof body === "object" && "csrfToken" in body) {
+    const token = (body as { csrfToken: unknown }).csrfToken;
+    if (typeof token === "string") csrfToken = token;
+  }
+}
+
+function toError(status: number, body: unknown): ApiRequestError {
+  const parsed = apiErrorSchema.safeParse(body);
+  if (parsed.success) {
+    const { code, message, fields } = parsed.data.error;
+    return new ApiRequestError(status, code, message, fields ?? {});
+  }
+  return new ApiRequestError(
+    status,
+    status >= 500 ? "internal" : "unexpected_response",
+    status >= 500
+      ? "The server ran into a problem. Please try again in a moment."
+      : `The server answered with an unexpected response (HTTP ${status}).`,
+  );
+}
+
+/**
+ * Calls the same-origin API with the session cookie and, on state-changing requests, the CSRF
+ * header. Responses are checked against `schema` so a contract drift fails loudly here, not
+ * deep in a component.
+ */
+export async function apiRequest<T>(
+  method: Method,
+  path: string,
+  schema: z.ZodType<T> | null,
+  options: RequestOptions = {},
+): Promise<T> {
+  const headers: Record<string, string> = { Accept: "application/json" };
+  if (options.body !== undefined) headers["Content-Type"] = "application/json";
+  if (method !== "GET" && csrfToken) headers["X-CSRF-Token"] = csrfToken;
+
+  let response: Response;
+  try {
+    response = await fetch(path, {
+      method,
+      headers,
+      credentials: "same-origin",
+      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      signal: options.signal,
+    });
+  } catch (cause) {
+    if (cause instanceof DOMException && cause.name === "AbortError") throw cause;
+    throw new ApiRequestError(0, "network", "Plumeline could not reach the server. Check the connection and try again.");
+  }
+
+  const body = await readJson(response);
+  if (!response.ok) throw toError(response.status, body);
+  rememberCsrf(body);
+  if (schema === null) return undefined as T;
+  const parsed = schema.safeParse(body);
+  if (!parsed.success) {
+    throw new ApiRequestError(response.status, "unexpected_response", `The server's answer to ${method} ${path} did not match the contract.`);
+  }
+  return parsed.data;
+}
+
+export const api = {
+  get: <T>(path: string, schema: z.ZodType<T>, signal?: AbortSignal) => apiRequest("GET", path, schema, { signal }),
+  post: <T>(path: string, schema: z.ZodType<T> | null, body?: unknown) => apiRequest("POST", path, schema, { body: body ?? {} }),
+  put: <T>(path: string, schema: z.ZodType<T> | null, body: unknown) => apiRequest("PUT", path, schema, { body }),
+  patch: <T>(path: string, schema: z.ZodType<T> | null, body: unknown) => apiRequest("PATCH", path, schema, { body }),
+  delete: (path: string) => apiRequest<void>("DELETE", path, null),
+};

@@ -1,0 +1,39 @@
+import type { z } from "zod";
+import { isApiRequestError } from "./api-client";
+
+/** Dotted field path → message; the same shape the server sends in `error.fields`. */
+export type FieldErrors = Record<string, string>;
+
+export function zodFieldErrors(error: z.ZodError): FieldErrors {
+  const fields: FieldErrors = {};
+  for (const issue of error.issues) {
+    const key = issue.path.map(String).join(".") || "_form";
+    if (!(key in fields)) fields[key] = issue.message;
+  }
+  return fields;
+}
+
+/** Field errors from a failed request (the server's zod messages), or none. */
+export function serverFieldErrors(error: unknown): FieldErrors {
+  return isApiRequestError(error) ? error.fields : {};
+}
+
+/** The message to show above a form for a failed request, when it is not only about fields. */
+export function formErrorMessage(error: unknown): string | null {
+  if (!error) return null;
+  if (isApiRequestError(error)) {
+    if (error.code === "validation_failed" && Object.keys(error.fields).length > 0) return "Please correct the marked fields.";
+    return error.message;
+  }
+  return "Something went wrong. Please try again.";
+}
+
+// Schema messages are fragments ("is required", "must be at least 10 characters") so that the
+// server and the form can both put the field's name in front of them.
+const FRAGMENT = /^(is|are|must|should|cannot|can't|has|was|does)\b/;
+
+export function fieldMessage(label: string, message: string): string {
+  const text = FRAGMENT.test(message) ? `${label} ${message}` : message;
+  const sentence = text.charAt(0).toUpperCase() + text.slice(1);
+  return /[.!?]$/.test(sentence) ? sentence : `${sentence}.`;
+}
