@@ -84,6 +84,30 @@ export async function apiRequest<T>(
   schema: z.ZodType<T> | null,
   options: RequestOptions = {},
 ): Promise<T> {
+  // A page that wrote before reading the session (an invitation link opened cold) needs a token first.
+  if (method !== "GET" && !csrfToken) await refreshCsrfToken();
+  try {
+    return await send(method, path, schema, options);
+  } catch (error) {
+    // The token can go stale (another tab signed out): fetch a fresh one and try once more.
+    if (method !== "GET" && isApiRequestError(error) && error.code === "csrf_failed") {
+      await refreshCsrfToken();
+      return send(method, path, schema, options);
+    }
+    throw error;
+  }
+}
+
+async function refreshCsrfToken(): Promise<void> {
+  try {
+    const response = await fetch("/api/auth/session", { headers: { Accept: "application/json" }, credentials: "same-origin" });
+    rememberCsrf(await readJson(response));
+  } catch {
+    // Offline: the write below fails with the usual network error.
+  }
+}
+
+async function send<T>(method: Method, path: string, schema: z.ZodType<T> | null, options: RequestOptions): Promise<T> {
   const headers: Record<string, string> = { Accept: "application/json" };
   if (options.body !== undefined) headers["Content-Type"] = "application/json";
   if (method !== "GET" && csrfToken) headers["X-CSRF-Token"] = csrfToken;
