@@ -24,7 +24,7 @@ describe("built-in rule profiles", () => {
       const values = sourcedValues(p);
       expect(values.length).toBeGreaterThanOrEqual(6);
       // Tags as in standards.md: [S:id], [M] or [D].
-      for (const v of values) expect(String(v.source), `${p.id}${v.path}`).toMatch(/\[(S:[A-Z0-9,]+|M|D)\]/);
+      for (const v of values) expect(String(v.source), `${p.id}${v.path}`).toMatch(/\[(S:[A-Za-z0-9,]+|M|D)\]/);
     }
   });
   it("hold the record retention periods", () => {
