@@ -33,12 +33,17 @@ describe("assessLeakRate", () => {
     expect(assessLeakRate(US_FEDERAL_PROFILE, rack("R-410A", 100, "industrial-process"), adds, "annualizing")[1].exceeds).toBe(false);
     expect(assessLeakRate(US_FEDERAL_PROFILE, rack("R-410A", 100, "comfort-cooling"), adds, "annualizing")[1].exceeds).toBe(true);
   });
-  it("has no threshold before Part 84 takes effect or below 15 lb", () => {
-    // [S:R4]: Part 84 subpart C from 1 Jan 2026 and from 15 lb.
-    const points = assessLeakRate(US_FEDERAL_PROFILE, rack("R-404A", 100), [lb("a", "2025-11-01", 5), lb("b", "2025-12-01", 5), lb("c", "2026-01-01", 5)], "annualizing");
-    expect(points.map((p) => p.partId)).toEqual([null, null, "40-cfr-84-subpart-c"]);
-    expect(points[1].exceeds).toBe(false); // 60.8 % but no part in force yet
-    expect(points[2].exceeds).toBe(true);
+  it("has no threshold before Part 84 takes effect, and restarts its count on 1 Jan 2026", () => {
+    // [S:R4]: Part 84 subpart C from 1 Jan 2026; its first calculation after that date uses 365 days [M].
+    const adds = [lb("a", "2025-11-01", 5), lb("b", "2025-12-01", 5), lb("c", "2026-01-01", 5), lb("d", "2026-01-31", 5)];
+    const points = assessLeakRate(US_FEDERAL_PROFILE, rack("R-404A", 100), adds, "annualizing");
+    expect(points.map((p) => p.partId)).toEqual([null, null, "40-cfr-84-subpart-c", "40-cfr-84-subpart-c"]);
+    expect(roundHalfUp(points[1].percent, 1)).toBe(60.8); // 5 lb / 100 lb over 30 days, but no part in force yet
+    expect(points[1].exceeds).toBe(false);
+    expect(points[2].days).toBe(365);
+    expect(points[2].exceeds).toBe(false); // 5 %
+    expect(points[3].days).toBe(30);
+    expect(points[3].exceeds).toBe(true); // 60.8 % > 20 %
     const small = assessLeakRate(US_FEDERAL_PROFILE, rack("R-404A", 14), [lb("a", "2026-03-01", 1), lb("b", "2026-03-31", 5)], "annualizing");
     expect(small[1].thresholdPercent).toBeNull();
   });
