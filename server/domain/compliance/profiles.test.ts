@@ -67,6 +67,7 @@ describe("custom profiles", () => {
     const eu = copyProfile(EU_FGAS_PROFILE, "y", "Y");
     eu.leakChecks!.co2eBands.value[0] = { ...eu.leakChecks!.co2eBands.value[0], to: 40 };
     expect(() => validateRuleProfile(eu)).toThrow(/^leakChecks\.co2eBands\.value\[0\]\.to: must equal the next band's from \(50\)/);
+    expect(bad((p) => (p.leakRateParts[0].inspectionsAfterBreach!.value.largeEveryMonths = 0))).toThrow(/inspectionsAfterBreach\.value\.largeEveryMonths: must be a whole number/);
     expect(() => copyProfile(US_FEDERAL_PROFILE, "", "X")).toThrow(/^id: is empty/);
   });
 });
