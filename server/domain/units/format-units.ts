@@ -2,8 +2,8 @@ import { formatFixed } from "../numbers/round-half-up";
 import { formatFeetInches, type InchDenominator } from "./length";
 import { kgToPounds } from "./mass";
 
-/** Length preference: metres, or feet and inches. Everything is stored in metres. */
-export type LengthPreference = "metric" | "imperial";
+/** Length preference: metres, or feet and inches (the same ids as server/contracts/units.ts). Stored in metres. */
+export type LengthPreference = "m" | "ft-in";
 /** Mass preference. Everything is stored in kg. */
 export type MassPreference = "kg" | "lb";
 
@@ -16,7 +16,7 @@ export interface LengthFormatOptions {
 
 /** `3.25 m` or `10 ft 8 in`, following the user's preference. */
 export function formatLength(metres: number, preference: LengthPreference, options: LengthFormatOptions = {}): string {
-  if (preference === "imperial") return formatFeetInches(metres, options.denominator ?? 2);
+  if (preference === "ft-in") return formatFeetInches(metres, options.denominator ?? 2);
   return `${formatFixed(metres, options.decimals ?? 2)} m`;
 }
 

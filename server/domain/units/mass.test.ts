@@ -32,9 +32,9 @@ describe("kg and lb", () => {
 
 describe("formatting by preference", () => {
   it("formats lengths", () => {
-    expect(formatLength(3.7465, "imperial")).toBe("12 ft 3 1/2 in");
-    expect(formatLength(3.7465, "metric")).toBe("3.75 m"); // half up: 3.7465 → 3.75 at 2 dp
-    expect(formatLength(12, "metric", { decimals: 1 })).toBe("12.0 m");
+    expect(formatLength(3.7465, "ft-in")).toBe("12 ft 3 1/2 in");
+    expect(formatLength(3.7465, "m")).toBe("3.75 m"); // half up: 3.7465 → 3.75 at 2 dp
+    expect(formatLength(12, "m", { decimals: 1 })).toBe("12.0 m");
   });
   it("formats masses", () => {
     expect(formatMass(12.5, "kg")).toBe("12.50 kg");
