@@ -1,0 +1,26 @@
+import { formatFixed } from "../numbers/round-half-up";
+import { formatFeetInches, type InchDenominator } from "./length";
+import { kgToPounds } from "./mass";
+
+/** Length preference: metres, or feet and inches. Everything is stored in metres. */
+export type LengthPreference = "metric" | "imperial";
+/** Mass preference. Everything is stored in kg. */
+export type MassPreference = "kg" | "lb";
+
+export interface LengthFormatOptions {
+  /** Decimal places for metres (default 2, i.e. centimetres). */
+  decimals?: number;
+  /** Inch fraction for feet and inches (default 1/2 inch). */
+  denominator?: InchDenominator;
+}
+
+/** `3.25 m` or `10 ft 8 in`, following the user's preference. */
+export function formatLength(metres: number, preference: LengthPreference, options: LengthFormatOptions = {}): string {
+  if (preference === "imperial") return formatFeetInches(metres, options.denominator ?? 2);
+  return `${formatFixed(metres, options.decimals ?? 2)} m`;
+}
+
+/** `12.50 kg` or `27.56 lb`, following the user's preference (2 decimals unless told). */
+export function formatMass(kg: number, preference: MassPreference, decimals = 2): string {
+  return preference === "lb" ? `${formatFixed(kgToPounds(kg), decimals)} lb` : `${formatFixed(kg, decimals)} kg`;
+}
