@@ -1,0 +1,77 @@
+import { addMonths, type IsoDate } from "../dates/calendar-date";
+import { requireNonNegative } from "../input-error";
+import { getPure } from "../refrigerants/catalogue";
+import type { Refrigerant } from "../refrigerants/types";
+import { systemCo2e, tonnesForComparison } from "./co2e";
+import type { LeakCheckBand, RuleProfile } from "./rule-profile";
+
+/** Which EU group a refrigerant falls in for leak checks. */
+export type FgasGroup = "annex-I" | "annex-II-hfo" | "not-covered";
+
+/**
+ * HFCs and mixtures containing any HFC are Annex I gases (checked by CO2e); pure HFOs (and mixtures
+ * of HFOs only) are Annex II section 1 (checked by kg, 2024/573). HCFCs fall under the ozone
+ * regulation and natural refrigerants under neither (standards.md §2).
+ */
+export function fgasGroup(r: Refrigerant): FgasGroup {
+  const kinds = r.kind === "blend" ? r.components.map((c) => getPure(c.id).kind) : [r.kind];
+  if (kinds.includes("HFC")) return "annex-I";
+  if (kinds.includes("HFO") && kinds.every((k) => k === "HFO")) return "annex-II-hfo";
+  return "not-covered";
+}
+
+export type LeakCheckInterval =
+  | { required: true; months: number; ldsRequired: boolean; band: LeakCheckBand; measure: "t CO2e" | "kg"; amount: number; reason: string }
+  | { required: false; reason: string };
+
+function findBand(bands: LeakCheckBand[], amount: number): LeakCheckBand | undefined {
+  return bands.find((b) => amount >= b.from && (b.to === null || amount < b.to));
+}
+
+/**
+ * The EU leak-check interval for a system: by CO2e band for Annex I gases, by kg band for HFOs,
+ * longer with a leak detection system (LDS); band edges are inclusive below ("≥ 5 and < 50 t").
+ */
+export function leakCheckInterval(
+  profile: RuleProfile,
+  refrigerant: Refrigerant,
+  chargeKg: number,
+  options: { hasLeakDetection: boolean; hermeticallySealed?: boolean },
+): LeakCheckInterval {
+  requireNonNegative(chargeKg, "chargeKg");
+  const rules = profile.leakChecks;
+  if (!rules) return { required: false, reason: `${profile.name} sets no periodic leak checks` };
+  const group = fgasGroup(refrigerant);
+  if (group === "not-covered") return { required: false, reason: `${refrigerant.id} is not a fluorinated gas covered by leak-check rules` };
+
+  let amount: number;
+  let bands: LeakCheckBand[];
+  let measure: "t CO2e" | "kg";
+  if (group === "annex-I") {
+    const c = systemCo2e(profile, refrigerant, chargeKg);
+    if (!c.known) return { required: false, reason: `CO2e unknown: ${c.reason}` };
+    amount = tonnesForComparison(c.tonnes);
+    bands = rules.co2eBands.value;
+    measure = "t CO2e";
+    if (options.hermeticallySealed && amount < rules.hermeticExemptBelowTonnes.value) {
+      return { required: false, reason: `hermetically sealed and below ${rules.hermeticExemptBelowTonnes.value} t CO2e` };
+    }
+  } else {
+    amount = chargeKg;
+    bands = rules.hfoBands.value;
+    measure = "kg";
+  }
+  const band = findBand(bands, amount);
+  if (!band) return { required: false, reason: `${amount} ${measure} is below the first band (${bands[0].from} ${measure})` };
+  const months = options.hasLeakDetection ? band.monthsWithLds : band.monthsWithoutLds;
+  const top = band.to === null ? `≥ ${band.from}` : `${band.from} to < ${band.to}`;
+  return {
+    required: true, months, ldsRequired: band.ldsRequired, band, measure, amount,
+    reason: `${amount} ${measure} is in the ${top} ${measure} band: every ${months} months ${options.hasLeakDetection ? "with" : "without"} leak detection${band.ldsRequired ? "; a leak detection system is required" : ""}`,
+  };
+}
+
+/** The next leak check: the last check plus the interval in calendar months (month ends clamp). */
+export function nextInspectionDate(lastCheck: IsoDate, intervalMonths: number): IsoDate {
+  return addMonths(lastCheck, intervalMonths, "lastCheck");
+}

@@ -1,0 +1,53 @@
+import type { LeakRatePart, RuleProfile } from "./rule-profile";
+
+/**
+ * US federal rules: 40 CFR 82 subpart F (ODS) and 40 CFR 84 subpart C (HFCs and substitutes under
+ * the AIM Act). Tags refer to standards.md §1. EPA has proposed delays to some dates
+ * (90 FR 47999 [S:R4b]); that is why dates are data here.
+ */
+const shared = {
+  thresholds: {
+    "commercial-refrigeration": { value: 20, source: "[S:R1] 40 CFR 82.157(c); [S:R4] 84.106" },
+    "industrial-process": { value: 30, source: "[S:R1] 40 CFR 82.157(c); [S:R4] 84.106" },
+    "comfort-cooling": { value: 10, source: "[S:R1] 40 CFR 82.157(c); [S:R4] 84.106" },
+  },
+  repairDays: { value: 30, source: "[S:R4] repair within 30 days of learning of the breach" },
+  followUpVerificationDays: { value: 10, source: "[M] follow-up verification within 10 days; definition [S:R8]" },
+  maxDaysSinceLastAddition: { value: 365, source: "[S:R7] annualizing method, shorter of days since last addition or 365" },
+  rollingWindowDays: { value: 365, source: "[S:R7] rolling average, previous 365 days; shortened by a follow-up verification [M]" },
+  chronicLeaker: {
+    percentOfFullCharge: { value: 125, source: "[S:R7] ≥125 % of full charge added in a calendar year" },
+    reportBy: { value: { month: 3, day: 1 }, source: "[S:R7] report by 1 March of the following year" },
+  },
+} satisfies Partial<LeakRatePart>;
+
+export const PART_82_SUBPART_F: LeakRatePart = {
+  id: "40-cfr-82-subpart-f",
+  title: "40 CFR 82 subpart F (ozone-depleting refrigerants)",
+  covers: { value: { ozoneDepleting: true }, source: "[S:R1,R2] since 10 Apr 2020, ODS only" },
+  minFullCharge: { value: { value: 50, unit: "lb" }, source: "[S:R1] 40 CFR 82.157(a), full charge ≥ 50 lb" },
+  firstCalculationDays: { value: 365, source: "[M] no earlier addition: use 365 days (82.152 annualizing method)" },
+  ...shared,
+};
+
+export const PART_84_SUBPART_C: LeakRatePart = {
+  id: "40-cfr-84-subpart-c",
+  title: "40 CFR 84 subpart C (HFCs and substitutes, GWP > 53)",
+  covers: { value: { ozoneDepleting: false, gwpAbove: 53 }, source: "[S:R4] HFC or substitute with GWP > 53" },
+  minFullCharge: { value: { value: 15, unit: "lb" }, source: "[S:R4] full charge ≥ 15 lb" },
+  effectiveFrom: { value: "2026-01-01", source: "[S:R4] from 1 Jan 2026" },
+  firstCalculationDays: { value: 365, source: "[M] the first calculation after 1 Jan 2026 uses 365 days" },
+  ...shared,
+};
+
+export const US_FEDERAL_PROFILE: RuleProfile = {
+  id: "us-federal",
+  name: "US federal (40 CFR 82 subpart F, 40 CFR 84 subpart C)",
+  kind: "us-federal",
+  gwpBases: {
+    value: ["AR4", "AR5", "AR6", "EU-517/2014"],
+    source: "[M] AIM Act exchange values follow AR4; where AR4 lists none, the next basis with a value only decides whether GWP exceeds 53",
+  },
+  leakRateParts: [PART_82_SUBPART_F, PART_84_SUBPART_C],
+  recordRetentionYears: { value: 3, source: "[S:R6,R7] records kept 3 years" },
+};
