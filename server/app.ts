@@ -15,6 +15,8 @@ import { invitationsRouter } from "./api/invitations/invitations.router";
 import { companyRouter } from "./api/company/company.router";
 import { outboxRouter } from "./api/outbox/outbox.router";
 import { storesRouter } from "./api/stores/stores.router";
+import { systemsRouter } from "./api/systems/systems.router";
+import { plansRouter } from "./api/plans/plans.router";
 
 const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
 
@@ -61,6 +63,8 @@ export function createApp(ctx: AppContext): Express {
   api.use(companyRouter(ctx));
   api.use(outboxRouter(ctx));
   api.use(storesRouter(ctx));
+  api.use(systemsRouter(ctx));
+  api.use(plansRouter(ctx));
   api.use(notFoundApi);
   app.use("/api", api);
 

@@ -2,3 +2,5 @@ export * from "./users";
 export * from "./companies";
 export * from "./mail";
 export * from "./sessions";
+export * from "./systems";
+export * from "./plans";
