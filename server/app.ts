@@ -16,6 +16,8 @@ import { companyRouter } from "./api/company/company.router";
 import { outboxRouter } from "./api/outbox/outbox.router";
 import { storesRouter } from "./api/stores/stores.router";
 import { detectorsRouter } from "./api/detectors/detectors.router";
+import { systemsRouter } from "./api/systems/systems.router";
+import { plansRouter } from "./api/plans/plans.router";
 
 const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
 
@@ -63,6 +65,8 @@ export function createApp(ctx: AppContext): Express {
   api.use(outboxRouter(ctx));
   api.use(storesRouter(ctx));
   api.use(detectorsRouter(ctx));
+  api.use(systemsRouter(ctx));
+  api.use(plansRouter(ctx));
   api.use(notFoundApi);
   app.use("/api", api);
 

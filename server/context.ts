@@ -2,6 +2,18 @@ import type pg from "pg";
 import type { Logger } from "pino";
 import type { Db } from "./db/client";
 import type { Mailer } from "./mail/mailer";
+import type { BlobStorage } from "./storage/blob-storage";
+
+/** Plan upload limits; each has a default (server/api/plans/plan-resources.ts). */
+export interface PlanImageLimits {
+  /** Largest upload in bytes (the 25 MB). */
+  maxBytes: number;
+  /** Largest decoded image, width × height, checked from the header before decoding. */
+  maxPixels: number;
+  /** Longest side of the display copy the editor draws on. */
+  displayMaxSide: number;
+  thumbMaxSide: number;
+}
 
 export interface AppConfig {
   sessionSecret: string;
@@ -16,6 +28,7 @@ export interface AppConfig {
   secureCookies: boolean;
   /** Serve the built client from dist/client (off in API-only tests). */
   serveClient: boolean;
+  planImageLimits?: Partial<PlanImageLimits>;
 }
 
 /** Everything a request handler may reach; built once and passed to createApp. */
@@ -25,4 +38,6 @@ export interface AppContext {
   mailer: Mailer;
   config: AppConfig;
   logger: Logger;
+  /** Where plan images live; defaults to a disk store under config.uploadsDir. */
+  storage?: BlobStorage;
 }

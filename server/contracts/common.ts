@@ -6,6 +6,7 @@ export const apiErrorSchema = z.object({
     code: z.string(),
     message: z.string(),
     fields: z.record(z.string(), z.string()).optional(),
+    details: z.record(z.string(), z.unknown()).optional(),
   }),
 });
 export type ApiError = z.infer<typeof apiErrorSchema>;

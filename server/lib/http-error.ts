@@ -5,6 +5,8 @@ export class HttpError extends Error {
     readonly code: string,
     message: string,
     readonly fields?: Record<string, string>,
+    /** Extra facts the client acts on, e.g. the current layoutRevision of a conflict. */
+    readonly details?: Record<string, unknown>,
   ) {
     super(message);
   }

@@ -8,7 +8,7 @@ export const notFoundApi: RequestHandler = (req) => {
 /** The one JSON error handler: known errors keep their message; anything else is logged, never shown. */
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (err instanceof HttpError) {
-    res.status(err.status).json({ error: { code: err.code, message: err.message, fields: err.fields } });
+    res.status(err.status).json({ error: { code: err.code, message: err.message, fields: err.fields, details: err.details } });
     return;
   }
   // body-parser and multer errors carry a status and a type; keep them specific but plain.

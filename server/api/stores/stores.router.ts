@@ -1,24 +1,40 @@
 import { Router } from "express";
-import { and, asc, eq, inArray } from "drizzle-orm";
+import { z } from "zod";
 import type { AppContext } from "../../context";
-import { stores } from "../../db/schema/index";
-import { isStoreScoped } from "../../domain/roles";
+import { storeInput, storeListQuery, storeUpdateInput, type StoreListQuery } from "../../contracts/stores";
 import { member, requireMember } from "../../middleware/auth";
+import { parsedQuery, validate } from "../../middleware/validate";
+import { getStoreDetail } from "./store-detail.service";
+import { createStore, listStores, setArchived, updateStore } from "./stores.service";
+
+const idParam = z.object({ id: z.uuid("must be a valid id") });
 
 export function storesRouter(ctx: AppContext): Router {
   const router = Router();
 
-  router.get("/stores", requireMember("stores.read"), async (req, res) => {
-    const m = member(req);
-    const scope = isStoreScoped(m.role) ? inArray(stores.id, m.storeIds.length ? m.storeIds : ["00000000-0000-0000-0000-000000000000"]) : undefined;
-    const rows = await ctx.db
-      .select()
-      .from(stores)
-      .where(and(eq(stores.companyId, m.companyId), scope))
-      .orderBy(asc(stores.name));
-    res.json({
-      stores: rows.map((s) => ({ id: s.id, name: s.name, address: s.address, timeZone: s.timeZone, archivedAt: s.archivedAt?.toISOString() ?? null })),
-    });
+  // Store contacts get only the stores on their membership (the invite form's picker uses this too).
+  router.get("/stores", requireMember("stores.read"), validate(storeListQuery, "query"), async (req, res) => {
+    res.json({ stores: await listStores(ctx, member(req), parsedQuery<StoreListQuery>(res)) });
+  });
+
+  router.post("/stores", requireMember("stores.edit"), validate(storeInput), async (req, res) => {
+    res.status(201).json(await createStore(ctx, member(req).companyId, req.body));
+  });
+
+  router.get("/stores/:id", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
+    res.json(await getStoreDetail(ctx, member(req), res.locals.params.id));
+  });
+
+  router.patch("/stores/:id", requireMember("stores.edit"), validate(idParam, "params"), validate(storeUpdateInput), async (req, res) => {
+    res.json(await updateStore(ctx, member(req), res.locals.params.id, req.body));
+  });
+
+  router.post("/stores/:id/archive", requireMember("stores.edit"), validate(idParam, "params"), async (req, res) => {
+    res.json(await setArchived(ctx, member(req), res.locals.params.id, true));
+  });
+
+  router.post("/stores/:id/unarchive", requireMember("stores.edit"), validate(idParam, "params"), async (req, res) => {
+    res.json(await setArchived(ctx, member(req), res.locals.params.id, false));
   });
 
   return router;

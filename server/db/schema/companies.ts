@@ -54,6 +54,7 @@ export const stores = pgTable(
     timeZone: text().notNull().default("UTC"),
     archivedAt: timestamp({ withTimezone: true }),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index("stores_company").on(t.companyId)],
 );

@@ -3,3 +3,5 @@ export * from "./companies";
 export * from "./mail";
 export * from "./sessions";
 export * from "./detectors";
+export * from "./systems";
+export * from "./plans";

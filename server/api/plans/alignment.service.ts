@@ -1,0 +1,53 @@
+import { eq, sql } from "drizzle-orm";
+import type { AppContext } from "../../context";
+import type { AlignmentInput, Plan } from "../../contracts/plans";
+import { composeSimilarity, IDENTITY, invertSimilarity, similarityFromTwoPoints, type Similarity } from "../../analysis/geometry/similarity";
+import { fixtures, plans } from "../../db/schema/index";
+import { transformFixture } from "../../domain/plans/transform-fixture";
+import { badRequest, HttpError } from "../../lib/http-error";
+import type { Viewer } from "../stores/store-access";
+import { assertCalibrated, assertCurrentVersion, assertRevision, fixtureCounts, loadVisiblePlan, lockPlan } from "./plan-access";
+import { fixtureToRow, rowToFixture, toPlan } from "./plan-rows";
+import { insertFixtureRows, loadFixtureRows } from "./plan-versions";
+
+function fromTwoPoints(input: AlignmentInput): Similarity {
+  const [p1, p2] = input.previous;
+  const [c1, c2] = input.current;
+  if (p1.x === p2.x && p1.y === p2.y) throw badRequest("Please check the matched points.", { "previous.1": "is the same point as previous.0; pick two points far apart" });
+  if (c1.x === c2.x && c1.y === c2.y) throw badRequest("Please check the matched points.", { "current.1": "is the same point as current.0; pick two points far apart" });
+  return similarityFromTwoPoints([p1.x, p1.y], [p2.x, p2.y], [c1.x, c1.y], [c2.x, c2.y]);
+}
+
+/**
+ * Sets how this version lies over the previous one from two matched points (the same two
+ * corners picked on both drawings). With moveFixtures, the copied fixtures move by the change
+ * of alignment so they land on the new drawing; the previous version never changes.
+ */
+export async function setAlignment(ctx: AppContext, viewer: Viewer, planId: string, input: AlignmentInput): Promise<Plan> {
+  await loadVisiblePlan(ctx, viewer, planId);
+  const next = fromTwoPoints(input);
+  const row = await ctx.db.transaction(async (tx) => {
+    const plan = await lockPlan(tx, planId);
+    if (!plan.previousPlanId) throw new HttpError(409, "no_previous_version", `Plan version ${plan.version} is the store's first; there is no earlier version to align it to.`);
+    await assertCurrentVersion(tx, plan);
+    assertCalibrated(plan);
+    assertRevision(plan, input.layoutRevision);
+    if (input.moveFixtures) {
+      // Fixtures sit where the old alignment put them: undo it, then apply the new one.
+      const delta = composeSimilarity(invertSimilarity(plan.alignment ?? IDENTITY), next);
+      const rows = await loadFixtureRows(tx, plan.id);
+      if (rows.length) {
+        await tx.delete(fixtures).where(eq(fixtures.planId, plan.id));
+        await insertFixtureRows(tx, rows.map((r) => fixtureToRow(plan.id, transformFixture(rowToFixture(r), delta), r.position)));
+      }
+    }
+    const [updated] = await tx
+      .update(plans)
+      .set({ alignment: next, alignmentMatched: true, layoutRevision: sql`${plans.layoutRevision} + 1` })
+      .where(eq(plans.id, plan.id))
+      .returning();
+    return updated;
+  });
+  const counts = await fixtureCounts(ctx.db, [row.id]);
+  return toPlan(row, counts.get(row.id) ?? 0);
+}

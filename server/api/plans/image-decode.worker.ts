@@ -1,0 +1,61 @@
+/**
+ * Runs in a worker_threads worker: decoding a large plan image takes hundreds of milliseconds of
+ * CPU, which must not stall other requests on the event loop. jimp applies the JPEG's EXIF
+ * orientation while reading (Jimp.fromBuffer → attemptExifRotate), so the display copy and the
+ * thumbnail come out upright.
+ */
+import { parentPort } from "node:worker_threads";
+import { Jimp, JimpMime } from "jimp";
+
+export interface DecodeRequest {
+  id: number;
+  data: Uint8Array;
+  mime: "image/png" | "image/jpeg";
+  displayMaxSide: number;
+  thumbMaxSide: number;
+}
+
+export type DecodeResponse =
+  | { id: number; ok: true; width: number; height: number; display: Uint8Array; displayWidth: number; displayHeight: number; thumb: Uint8Array }
+  | { id: number; ok: false; message: string };
+
+type Image = Awaited<ReturnType<typeof Jimp.fromBuffer>>;
+
+/** Shrinks in place (jimp's resize mutates) so the longest side is at most maxSide; never enlarges. */
+function capInPlace(image: Image, maxSide: number): void {
+  const { width, height } = image.bitmap;
+  if (Math.max(width, height) <= maxSide) return;
+  if (width >= height) image.resize({ w: maxSide });
+  else image.resize({ h: maxSide });
+}
+
+async function encode(image: { getBuffer: Image["getBuffer"] }, mime: DecodeRequest["mime"]): Promise<Buffer> {
+  return mime === "image/png" ? image.getBuffer(JimpMime.png) : image.getBuffer(JimpMime.jpeg, { quality: 85 });
+}
+
+async function handle(req: DecodeRequest): Promise<DecodeResponse> {
+  const image = await Jimp.fromBuffer(Buffer.from(req.data.buffer, req.data.byteOffset, req.data.byteLength));
+  const { width, height } = image.bitmap;
+  const display = image.clone();
+  capInPlace(display, req.displayMaxSide);
+  const thumb = image.clone();
+  capInPlace(thumb, req.thumbMaxSide);
+  const [displayBytes, thumbBytes] = [await encode(display, req.mime), await encode(thumb, req.mime)];
+  return {
+    id: req.id,
+    ok: true,
+    width,
+    height,
+    display: displayBytes,
+    displayWidth: display.bitmap.width,
+    displayHeight: display.bitmap.height,
+    thumb: thumbBytes,
+  };
+}
+
+parentPort?.on("message", (req: DecodeRequest) => {
+  handle(req).then(
+    (res) => parentPort!.postMessage(res),
+    (err: unknown) => parentPort!.postMessage({ id: req.id, ok: false, message: err instanceof Error ? err.message : String(err) } satisfies DecodeResponse),
+  );
+});

@@ -1,0 +1,114 @@
+import { and, asc, eq } from "drizzle-orm";
+import type { AppContext } from "../../context";
+import type { ChargeInput, System, SystemInput, SystemUpdateInput } from "../../contracts/systems";
+import { companies, systems } from "../../db/schema/index";
+import { findRefrigerant } from "../../domain/refrigerants/catalogue";
+import type { Refrigerant } from "../../domain/refrigerants/types";
+import { KG_PER_POUND } from "../../domain/units/mass";
+import { badRequest, notFound } from "../../lib/http-error";
+import { loadVisibleStore, type Viewer } from "../stores/store-access";
+import { gwpBasesFor, refrigerantCautions, summarizeRefrigerant } from "./refrigerant-summary";
+
+type SystemRow = typeof systems.$inferSelect;
+type Bases = ReturnType<typeof gwpBasesFor>;
+
+/** kg as stored; lb converted at exactly 0.45359237 kg/lb (NIST SP 811, appendix B.8). */
+export function chargeToKg(charge: ChargeInput): number {
+  return charge.unit === "lb" ? charge.value * KG_PER_POUND : charge.value;
+}
+
+function knownRefrigerant(id: string): Refrigerant {
+  const r = findRefrigerant(id);
+  if (!r) {
+    throw badRequest(`Please check: refrigerantId ${JSON.stringify(id)} is not in the refrigerant catalogue.`, {
+      refrigerantId: `is not a refrigerant in the catalogue (e.g. R-448A, R-744, R-404A)`,
+    });
+  }
+  return r;
+}
+
+export async function companyGwpBases(ctx: AppContext, companyId: string): Promise<Bases> {
+  const [c] = await ctx.db.select({ ruleProfile: companies.ruleProfile }).from(companies).where(eq(companies.id, companyId));
+  return gwpBasesFor(c?.ruleProfile ?? "us-federal");
+}
+
+export function toSystem(row: SystemRow, bases: Bases): System {
+  // Rows only ever hold catalogue ids (checked on write); a missing one is a catalogue regression.
+  const r = findRefrigerant(row.refrigerantId);
+  if (!r) throw new Error(`system ${row.id} names ${row.refrigerantId}, which the catalogue no longer has`);
+  return {
+    id: row.id,
+    storeId: row.storeId,
+    name: row.name,
+    refrigerantId: r.id,
+    fullChargeKg: row.fullChargeKg,
+    applianceType: row.applianceType,
+    automaticLeakDetection: row.automaticLeakDetection,
+    refrigerant: summarizeRefrigerant(r, bases),
+    cautions: refrigerantCautions(r),
+    createdAt: row.createdAt.toISOString(),
+    updatedAt: row.updatedAt.toISOString(),
+  };
+}
+
+export async function listSystems(ctx: AppContext, viewer: Viewer, storeId: string): Promise<System[]> {
+  await loadVisibleStore(ctx, viewer, storeId);
+  const bases = await companyGwpBases(ctx, viewer.companyId);
+  const rows = await ctx.db.select().from(systems).where(eq(systems.storeId, storeId)).orderBy(asc(systems.name), asc(systems.id));
+  return rows.map((r) => toSystem(r, bases));
+}
+
+async function loadSystem(ctx: AppContext, viewer: Viewer, systemId: string): Promise<SystemRow> {
+  const [row] = await ctx.db.select().from(systems).where(and(eq(systems.id, systemId), eq(systems.companyId, viewer.companyId)));
+  if (!row) throw notFound("That system");
+  try {
+    await loadVisibleStore(ctx, viewer, row.storeId);
+  } catch {
+    throw notFound("That system");
+  }
+  return row;
+}
+
+export async function getSystem(ctx: AppContext, viewer: Viewer, systemId: string): Promise<System> {
+  return toSystem(await loadSystem(ctx, viewer, systemId), await companyGwpBases(ctx, viewer.companyId));
+}
+
+export async function createSystem(ctx: AppContext, viewer: Viewer, storeId: string, input: SystemInput): Promise<System> {
+  await loadVisibleStore(ctx, viewer, storeId);
+  const r = knownRefrigerant(input.refrigerantId);
+  const [row] = await ctx.db
+    .insert(systems)
+    .values({
+      companyId: viewer.companyId,
+      storeId,
+      name: input.name,
+      refrigerantId: r.id,
+      fullChargeKg: chargeToKg(input.fullCharge),
+      applianceType: input.applianceType,
+      automaticLeakDetection: input.automaticLeakDetection,
+    })
+    .returning();
+  return toSystem(row, await companyGwpBases(ctx, viewer.companyId));
+}
+
+export async function updateSystem(ctx: AppContext, viewer: Viewer, systemId: string, input: SystemUpdateInput): Promise<System> {
+  await loadSystem(ctx, viewer, systemId);
+  const { fullCharge, refrigerantId, ...rest } = input;
+  const [row] = await ctx.db
+    .update(systems)
+    .set({
+      ...rest,
+      ...(refrigerantId !== undefined ? { refrigerantId: knownRefrigerant(refrigerantId).id } : {}),
+      ...(fullCharge !== undefined ? { fullChargeKg: chargeToKg(fullCharge) } : {}),
+      updatedAt: new Date(),
+    })
+    .where(eq(systems.id, systemId))
+    .returning();
+  return toSystem(row, await companyGwpBases(ctx, viewer.companyId));
+}
+
+/** Fixtures linked to the system keep their place and lose the link (FK on delete set null). */
+export async function deleteSystem(ctx: AppContext, viewer: Viewer, systemId: string): Promise<void> {
+  await loadSystem(ctx, viewer, systemId);
+  await ctx.db.delete(systems).where(eq(systems.id, systemId));
+}

@@ -1,0 +1,54 @@
+import { z } from "zod";
+import { idSchema } from "./common";
+
+/** True when the runtime's Intl knows the IANA zone (what the client formats times with). */
+export function isKnownTimeZone(name: string): boolean {
+  try {
+    new Intl.DateTimeFormat("en-US", { timeZone: name });
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+export const storeNameSchema = z.string({ error: "must be text" }).trim().min(1, "is required").max(120, "must be at most 120 characters");
+export const addressSchema = z.string({ error: "must be text" }).trim().max(300, "must be at most 300 characters");
+export const timeZoneSchema = z
+  .string({ error: "must be an IANA time zone name such as America/Chicago" })
+  .trim()
+  .min(1, "is required")
+  .refine(isKnownTimeZone, { message: "is not a known IANA time zone (e.g. America/Chicago, Europe/Berlin)" });
+
+export const storeInput = z.object({ name: storeNameSchema, address: addressSchema.default(""), timeZone: timeZoneSchema });
+export type StoreInput = z.infer<typeof storeInput>;
+
+export const storeUpdateInput = z
+  .object({ name: storeNameSchema, address: addressSchema, timeZone: timeZoneSchema })
+  .partial()
+  .refine((v) => Object.keys(v).length > 0, { message: "name at least one of name, address, timeZone to change" });
+export type StoreUpdateInput = z.infer<typeof storeUpdateInput>;
+
+const booleanFlag = z
+  .enum(["true", "false", "1", "0"], { error: "must be true or false" })
+  .transform((v) => v === "true" || v === "1");
+
+export const storeListQuery = z.object({
+  search: z.string().trim().max(120, "must be at most 120 characters").optional(),
+  sort: z.enum(["name", "created"], { error: "must be name or created" }).default("name"),
+  order: z.enum(["asc", "desc"], { error: "must be asc or desc" }).default("asc"),
+  includeArchived: booleanFlag.default(false),
+});
+export type StoreListQuery = z.infer<typeof storeListQuery>;
+
+export const store = z.object({
+  id: idSchema,
+  name: z.string(),
+  address: z.string(),
+  timeZone: z.string(),
+  archivedAt: z.string().nullable(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type Store = z.infer<typeof store>;
+
+export const storeListResponse = z.object({ stores: z.array(store) });

@@ -1,0 +1,85 @@
+import { z } from "zod";
+import { idSchema } from "./common";
+
+export const APPLIANCE_TYPES = ["commercial-refrigeration", "industrial-process", "comfort-cooling"] as const;
+export const applianceTypeSchema = z.enum(APPLIANCE_TYPES, {
+  error: `must be one of: ${APPLIANCE_TYPES.join(", ")}`,
+});
+export type ApplianceType = z.infer<typeof applianceTypeSchema>;
+
+export const APPLIANCE_TYPE_NAMES: Readonly<Record<ApplianceType, string>> = {
+  "commercial-refrigeration": "Commercial refrigeration",
+  "industrial-process": "Industrial process refrigeration",
+  "comfort-cooling": "Comfort cooling",
+};
+
+/** A charge as typed: kg or lb; the server keeps kg (1 lb = 0.45359237 kg exactly, NIST SP 811). */
+export const chargeInput = z.object({
+  value: z
+    .number({ error: "must be a number" })
+    .refine(Number.isFinite, { message: "must be a finite number" })
+    .refine((v) => v > 0, { message: "must be more than 0" })
+    .refine((v) => v <= 100_000, { message: "must be at most 100000 (is the unit right?)" }),
+  unit: z.enum(["kg", "lb"], { error: "must be kg or lb" }),
+});
+export type ChargeInput = z.infer<typeof chargeInput>;
+
+const systemFields = {
+  name: z.string({ error: "must be text" }).trim().min(1, "is required").max(120, "must be at most 120 characters"),
+  /** An R-number from the catalogue (GET /api/refrigerants); checked on the server. */
+  refrigerantId: z.string({ error: "must be an R-number such as R-448A" }).trim().min(1, "is required").max(40, "must be at most 40 characters"),
+  fullCharge: chargeInput,
+  applianceType: applianceTypeSchema,
+  automaticLeakDetection: z.boolean({ error: "must be true or false" }),
+};
+
+export const systemInput = z.object(systemFields);
+export type SystemInput = z.infer<typeof systemInput>;
+
+export const systemUpdateInput = z
+  .object(systemFields)
+  .partial()
+  .refine((v) => Object.keys(v).length > 0, { message: "name at least one field to change" });
+export type SystemUpdateInput = z.infer<typeof systemUpdateInput>;
+
+export const gwpSummary = z.object({
+  value: z.number(),
+  /** The GWP-100 basis of the value, e.g. "AR4". */
+  basis: z.string(),
+  source: z.string(),
+});
+
+export const refrigerantSummary = z.object({
+  id: z.string(),
+  name: z.string(),
+  safetyClass: z.string(),
+  safetyClassSource: z.string(),
+  /** null when no basis in the list has a value for every component. */
+  gwp: gwpSummary.nullable(),
+  gwpNote: z.string().nullable(),
+});
+export type RefrigerantSummary = z.infer<typeof refrigerantSummary>;
+
+export const caution = z.object({ id: z.string(), level: z.enum(["warning", "notice"]), text: z.string(), source: z.string() });
+export type Caution = z.infer<typeof caution>;
+
+export const system = z.object({
+  id: idSchema,
+  storeId: idSchema,
+  name: z.string(),
+  refrigerantId: z.string(),
+  fullChargeKg: z.number(),
+  applianceType: applianceTypeSchema,
+  automaticLeakDetection: z.boolean(),
+  refrigerant: refrigerantSummary,
+  /** The usual cautions for this refrigerant, shown on the system form. */
+  cautions: z.array(caution),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type System = z.infer<typeof system>;
+
+export const systemListResponse = z.object({ systems: z.array(system) });
+export const refrigerantListResponse = z.object({
+  refrigerants: z.array(refrigerantSummary.extend({ cautions: z.array(caution) })),
+});

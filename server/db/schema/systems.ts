@@ -1,0 +1,23 @@
+import { boolean, doublePrecision, index, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { companies, stores } from "./companies";
+
+export const APPLIANCE_TYPE_VALUES = ["commercial-refrigeration", "industrial-process", "comfort-cooling"] as const;
+
+/** A rack or condensing unit of a store. The charge is kept in kg whatever unit it was typed in. */
+export const systems = pgTable(
+  "systems",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
+    storeId: uuid().notNull().references(() => stores.id, { onDelete: "cascade" }),
+    name: text().notNull(),
+    /** ASHRAE 34 designation as in server/domain/refrigerants (e.g. "R-448A"). */
+    refrigerantId: text().notNull(),
+    fullChargeKg: doublePrecision().notNull(),
+    applianceType: text({ enum: APPLIANCE_TYPE_VALUES }).notNull(),
+    automaticLeakDetection: boolean().notNull().default(false),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("systems_store").on(t.storeId)],
+);
