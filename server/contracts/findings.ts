@@ -1,0 +1,71 @@
+import { z } from "zod";
+
+// A finding is a leak record: suspected → confirmed → repaired → verified → closed, or dismissed.
+// The Walk screen creates one at a pinpointed leak, the field map from a suspect spot, anyone by hand.
+export const FINDING_STATUSES = ["suspected", "confirmed", "repaired", "verified", "closed", "dismissed"] as const;
+export const FINDING_COMPONENTS = ["brazed-joint", "flare", "valve", "coil", "gasket", "fitting", "other"] as const;
+export const FINDING_SOURCES = ["walk", "suspect-spot", "manual"] as const;
+export const DISMISS_REASONS = ["benign-source", "no-leak-found", "other"] as const;
+
+export const COMPONENT_LABELS: Record<(typeof FINDING_COMPONENTS)[number], string> = {
+  "brazed-joint": "Brazed joint",
+  flare: "Flare fitting",
+  valve: "Valve",
+  coil: "Coil",
+  gasket: "Gasket / seal",
+  fitting: "Other fitting",
+  other: "Other",
+};
+
+const finite = (what: string) => z.number(`${what} must be a number`).finite(`${what} must be a finite number`);
+
+/** Create a finding. `clientId` (made on the device) makes an offline retry store it once. */
+export const createFindingInput = z.object({
+  clientId: z.uuid("must be a valid id").optional(),
+  source: z.enum(FINDING_SOURCES).default("manual"),
+  status: z.enum(["suspected", "confirmed"]).default("suspected"),
+  systemId: z.uuid("must be a valid id").nullable().default(null),
+  planId: z.uuid("must be a valid id").nullable().default(null),
+  sweepId: z.uuid("must be a valid id").nullable().default(null),
+  fixtureId: z.uuid("must be a valid id").nullable().default(null),
+  /** Position on the plan in metres (plan coordinates); both or neither. */
+  x: finite("x").nullable().default(null),
+  y: finite("y").nullable().default(null),
+  component: z.enum(FINDING_COMPONENTS).nullable().default(null),
+  note: z.string().trim().max(2000, "must be at most 2,000 characters").default(""),
+  /** When the leak was found (ISO instant); defaults to now on the server. */
+  foundAt: z.iso.datetime({ offset: true, message: "must be a date and time" }).optional(),
+}).refine((v) => (v.x === null) === (v.y === null), { path: ["y"], message: "x and y must be given together" });
+export type CreateFindingInput = z.input<typeof createFindingInput>;
+
+export const findingPhoto = z.object({ id: z.uuid(), url: z.string(), thumbUrl: z.string(), takenAt: z.string(), by: z.string() });
+
+export const findingEvent = z.object({
+  id: z.uuid(),
+  status: z.enum(FINDING_STATUSES),
+  /** The day it happened, in the store's time zone (YYYY-MM-DD). */
+  on: z.string(),
+  at: z.string(),
+  by: z.string(),
+  note: z.string(),
+});
+
+export const finding = z.object({
+  id: z.uuid(),
+  storeId: z.uuid(),
+  systemId: z.uuid().nullable(),
+  planId: z.uuid().nullable(),
+  sweepId: z.uuid().nullable(),
+  fixtureId: z.uuid().nullable(),
+  x: z.number().nullable(),
+  y: z.number().nullable(),
+  component: z.enum(FINDING_COMPONENTS).nullable(),
+  source: z.enum(FINDING_SOURCES),
+  status: z.enum(FINDING_STATUSES),
+  note: z.string(),
+  foundAt: z.string(),
+  foundBy: z.string(),
+  events: z.array(findingEvent),
+  photos: z.array(findingPhoto),
+});
+export type Finding = z.infer<typeof finding>;
