@@ -5,3 +5,5 @@ export * from "./sessions";
 export * from "./detectors";
 export * from "./systems";
 export * from "./plans";
+export * from "./findings";
+export * from "./compliance";
