@@ -19,6 +19,7 @@ import { detectorsRouter } from "./api/detectors/detectors.router";
 import { systemsRouter } from "./api/systems/systems.router";
 import { plansRouter } from "./api/plans/plans.router";
 import { findingsRouter } from "./api/findings/findings.router";
+import { complianceRouter } from "./api/compliance/compliance.router";
 
 const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
 
@@ -69,6 +70,7 @@ export function createApp(ctx: AppContext): Express {
   api.use(systemsRouter(ctx));
   api.use(plansRouter(ctx));
   api.use(findingsRouter(ctx));
+  api.use(complianceRouter(ctx));
   api.use(notFoundApi);
   app.use("/api", api);
 
