@@ -20,6 +20,7 @@ import { systemsRouter } from "./api/systems/systems.router";
 import { plansRouter } from "./api/plans/plans.router";
 import { findingsRouter } from "./api/findings/findings.router";
 import { complianceRouter } from "./api/compliance/compliance.router";
+import { todayRouter } from "./api/compliance/today.router";
 
 const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
 
@@ -71,6 +72,7 @@ export function createApp(ctx: AppContext): Express {
   api.use(plansRouter(ctx));
   api.use(findingsRouter(ctx));
   api.use(complianceRouter(ctx));
+  api.use(todayRouter(ctx));
   api.use(notFoundApi);
   app.use("/api", api);
 
