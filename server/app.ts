@@ -21,6 +21,7 @@ import { plansRouter } from "./api/plans/plans.router";
 import { findingsRouter } from "./api/findings/findings.router";
 import { complianceRouter } from "./api/compliance/compliance.router";
 import { todayRouter } from "./api/compliance/today.router";
+import { exportsRouter } from "./api/exports/exports.router";
 
 const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
 
@@ -73,6 +74,7 @@ export function createApp(ctx: AppContext): Express {
   api.use(findingsRouter(ctx));
   api.use(complianceRouter(ctx));
   api.use(todayRouter(ctx));
+  api.use(exportsRouter(ctx));
   api.use(notFoundApi);
   app.use("/api", api);
 
