@@ -51,8 +51,10 @@ export async function today(ctx: AppContext, viewer: Viewer, filter: { storeId?:
     }
   }
 
+  // Over threshold and not yet repaired: a system whose breach was repaired stays on its records
+  // page with that rate until the next addition brings a new figure, but needs no action here.
   const overThreshold = statuses
-    .filter((s) => s.status.overThreshold && s.status.latest?.thresholdPercent != null)
+    .filter((s) => s.status.overThreshold && s.status.unrepairedBreach !== null && s.status.latest?.thresholdPercent != null)
     .map((s) => {
       const p = s.status.latest!;
       const part = rules.profile.leakRateParts.find((x) => x.id === p.partId);
