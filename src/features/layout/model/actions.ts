@@ -8,7 +8,7 @@
 import type { Bounds, Vec } from "../../../../server/analysis/geometry/types";
 import { LABEL_MAX, type Fixture, type RoomDoor, type Vertex } from "../../../../server/contracts/fixtures";
 import { arrayCopies, copyFixture } from "./copies";
-import { fitDoor, fixtureCentroid, resizeFixture, rotateFixture, translateFixture, unionBounds } from "./fixture-geometry";
+import { fitDoor, fixtureCentroid, relocateDoor, resizeFixture, rotateFixture, translateFixture, unionBounds } from "./fixture-geometry";
 import type { Scene } from "./scene";
 
 /** Properties the side panel edits; each applies only to fixtures whose kind has it. */
@@ -177,7 +177,7 @@ export function applyAction(scene: Scene, action: SceneAction): Scene {
         existing(scene, [action.id]).flatMap((f): Fixture[] => {
           if ("point" in f) return [];
           const polygon = action.polygon.map(([x, y]): Vertex => [x, y]);
-          return "door" in f ? [{ ...f, polygon, door: f.door && fitDoor(f.door, polygon) }] : [{ ...f, polygon }];
+          return "door" in f ? [{ ...f, polygon, door: f.door && relocateDoor(f.door, f.polygon, polygon) }] : [{ ...f, polygon }];
         }),
       );
     case "duplicate": {
