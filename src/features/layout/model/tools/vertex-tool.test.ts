@@ -3,6 +3,7 @@ import type { PolygonFixture, RoomFixture } from "../../../../../server/contract
 import { applyActions } from "../actions";
 import { createScene, type Scene } from "../scene";
 import { room, uuid } from "../test-builders";
+import { toolContext } from "./context";
 import { dbl, down, drive, key, moveTo, plainContext, up } from "./test-drive";
 import { VERTEX_IDLE, vertexTool } from "./vertex-tool";
 
@@ -43,6 +44,12 @@ describe("vertex tool", () => {
     const t = drive(vertexTool, VERTEX_IDLE, [down(0, 0), up(0, 0), key("Delete")], plainContext({ ...tri, selection: [uuid(2)] }));
     expect(t.actions).toEqual([]);
     expect(t.last.message).toBe("An outline needs at least 3 corners.");
+  });
+
+  it("does not snap a dragged corner back onto its own outline", () => {
+    const ctx = toolContext(scene(), { gridM: null, snapToFixtures: true, toleranceM: 0.2, dragThresholdM: 0.02 }, () => "unused");
+    const r = drive(vertexTool, VERTEX_IDLE, [down(4, 3), moveTo(4.1, 3.1), up(4.1, 3.1)], ctx);
+    expect(outline(applyActions(ctx.scene, r.actions))[2]).toEqual([4.1, 3.1]);
   });
 
   it("refuses a drag that would cross the edges, and cancels on Escape", () => {
