@@ -71,13 +71,8 @@ export function resizeFixture<F extends Fixture>(f: F, box: Bounds): F {
   const from = fixtureBounds(f);
   if ("point" in f) return mapFixture(f, () => [(box.minX + box.maxX) / 2, (box.minY + box.maxY) / 2]);
   if (!("door" in f) || !f.door) return mapFixture(f, (p) => mapBoxPoint(p, from, box));
-  const before = edgeLength(f.polygon, f.door.edge);
-  const centreFraction = before > 0 ? (f.door.offset + f.door.width / 2) / before : 0.5;
   const polygon = f.polygon.map((p) => mapBoxPoint(p, from, box));
-  const after = edgeLength(polygon, f.door.edge);
-  const width = Math.min(f.door.width, after);
-  const door = { ...f.door, width, offset: centreFraction * after - width / 2 };
-  return { ...f, polygon, door: fitDoor(door, polygon) };
+  return { ...f, polygon, door: relocateDoor(f.door, f.polygon, polygon) };
 }
 
 /**
