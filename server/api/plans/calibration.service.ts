@@ -46,6 +46,42 @@ async function rescaleInPlace(tx: DbOrTx, plan: PlanRow, factor: number): Promis
 }
 
 /**
+ * The same drawing with a new scale as the store's next version, for a plan that has sweeps:
+ * the sweeps stay on `plan` untouched; the fixtures are copied with their ids and rescaled, and
+ * the alignment is exactly the scale change about the origin.
+ */
+export async function addRecalibratedVersion(
+  tx: DbOrTx,
+  plan: PlanRow,
+  next: { metresPerPixel: number; calibration: NonNullable<PlanRow["calibration"]>; userId: string | null },
+): Promise<PlanRow> {
+  if (!plan.metresPerPixel || !plan.imageWidthPx || !plan.imageHeightPx) throw new Error("only a calibrated image plan can be re-calibrated into a new version");
+  const factor = next.metresPerPixel / plan.metresPerPixel;
+  return addPlanVersion(
+    tx,
+    {
+      companyId: plan.companyId,
+      storeId: plan.storeId,
+      source: "image",
+      originalKey: plan.originalKey,
+      displayKey: plan.displayKey,
+      thumbKey: plan.thumbKey,
+      originalMime: plan.originalMime,
+      originalWidthPx: plan.originalWidthPx,
+      originalHeightPx: plan.originalHeightPx,
+      imageWidthPx: plan.imageWidthPx,
+      imageHeightPx: plan.imageHeightPx,
+      metresPerPixel: next.metresPerPixel,
+      calibration: next.calibration,
+      widthM: plan.imageWidthPx * next.metresPerPixel,
+      heightM: plan.imageHeightPx * next.metresPerPixel,
+      createdById: next.userId,
+    },
+    { transform: { scale: factor, rotation: 0, tx: 0, ty: 0 }, alignmentKnown: true },
+  );
+}
+
+/**
  * Stores a plan's scale. Fixtures were drawn over the image, so their pixel positions are what
  * the lead tech meant: with a new scale their metres change by new/old. Without sweeps the
  * fixtures are rescaled in place; with sweeps a new version is made and the old one (and its
@@ -72,7 +108,7 @@ export async function calibratePlan(ctx: AppContext, viewer: Viewer, userId: str
       return { row, outcome: "first" as const };
     }
     const factor = mpp / plan.metresPerPixel;
-    if (!(await planHasSweeps(ctx.db, plan.id))) {
+    if (!(await planHasSweeps(tx, plan.id))) {
       await rescaleInPlace(tx, plan, factor);
       const [row] = await tx
         .update(plans)
@@ -82,28 +118,7 @@ export async function calibratePlan(ctx: AppContext, viewer: Viewer, userId: str
       return { row, outcome: "rescaled" as const };
     }
     await assertCurrentVersion(tx, plan);
-    const row = await addPlanVersion(
-      tx,
-      {
-        companyId: plan.companyId,
-        storeId: plan.storeId,
-        source: "image",
-        originalKey: plan.originalKey,
-        displayKey: plan.displayKey,
-        thumbKey: plan.thumbKey,
-        originalMime: plan.originalMime,
-        originalWidthPx: plan.originalWidthPx,
-        originalHeightPx: plan.originalHeightPx,
-        imageWidthPx: plan.imageWidthPx,
-        imageHeightPx: plan.imageHeightPx,
-        metresPerPixel: mpp,
-        calibration,
-        ...extent,
-        createdById: userId,
-      },
-      // Same drawing, new scale: the alignment is exactly the scale change about the origin.
-      { transform: { scale: factor, rotation: 0, tx: 0, ty: 0 }, alignmentKnown: true },
-    );
+    const row = await addRecalibratedVersion(tx, plan, { metresPerPixel: mpp, calibration, userId });
     return { row, outcome: "new-version" as const };
   });
   const counts = await fixtureCounts(ctx.db, [result.row.id]);
