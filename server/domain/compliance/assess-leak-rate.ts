@@ -32,7 +32,7 @@ export function assessLeakRate(
   method: LeakRateMethod,
   followUpVerifiedOn: readonly IsoDate[] = [],
 ): AssessedPoint[] {
-  // The formula's parameters (365-day cap, window, first-calculation days) come from the part in
+  // The formula's parameters (365-day cap, window, first-calculation days and date) come from the part in
   // force at the latest addition, else the profile's first part; a profile without leak-rate rules
   // (EU F-gas) has no leak-rate figures at all.
   validateAdditions(additions);
@@ -45,6 +45,7 @@ export function assessLeakRate(
     maxDaysSinceLastAddition: part.maxDaysSinceLastAddition.value,
     firstCalculationDays: part.firstCalculationDays.value,
     rollingWindowDays: part.rollingWindowDays.value,
+    firstCalculationFrom: part.effectiveFrom?.value,
   };
   const history = leakRateHistory({ fullChargeKg: system.fullChargeKg, additions, method, rules, followUpVerifiedOn });
   return history.map((point) => {

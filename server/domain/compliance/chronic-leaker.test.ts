@@ -23,6 +23,10 @@ describe("chronic leaker (≥ 125 % of full charge added in a calendar year)", (
     expect(years[0].percent).toBeCloseTo(125, 10);
     expect(years[0].chronic).toBe(true);
     expect(years[0].reportDue).toBe("2028-03-01");
+    // In kg with exact binary values: 100 + 25 kg into 100 kg is exactly 125 %.
+    const exact = chronicLeakerYears(PART_84_SUBPART_C, 100, [{ id: "a", date: "2027-02-01", amountKg: 100 }, { id: "b", date: "2027-03-01", amountKg: 25 }]);
+    expect(exact[0].percent).toBe(125);
+    expect(exact[0].chronic).toBe(true);
     const below = chronicLeakerYears(PART_84_SUBPART_C, poundsToKg(100), [lb("a", "2027-01-05", 70), lb("b", "2027-06-01", 54.9)]);
     expect(below[0].chronic).toBe(false);
   });

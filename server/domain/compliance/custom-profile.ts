@@ -67,6 +67,14 @@ export function validateRuleProfile(p: RuleProfile): void {
     if (!(limit.value >= 0) || (limit.unit !== "lb" && limit.unit !== "kg")) {
       throw new DomainInputError(`${f}.minFullCharge.value`, "must be a non-negative amount in lb or kg");
     }
+    if (part.inspectionsAfterBreach) {
+      const g = `${f}.inspectionsAfterBreach`;
+      checkSource(part.inspectionsAfterBreach, g);
+      const v = part.inspectionsAfterBreach.value;
+      for (const k of ["largeEveryMonths", "largeUntilPeriodsBelow", "otherEveryMonths", "otherUntilPeriodsBelow"] as const) {
+        if (!Number.isInteger(v[k]) || v[k] < 1 || v[k] > 120) throw new DomainInputError(`${g}.value.${k}`, `must be a whole number from 1 to 120, got ${v[k]}`);
+      }
+    }
     if (part.effectiveFrom) {
       checkSource(part.effectiveFrom, `${f}.effectiveFrom`);
       parseIsoDate(part.effectiveFrom.value, `${f}.effectiveFrom.value`);

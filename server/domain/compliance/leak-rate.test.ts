@@ -75,6 +75,16 @@ describe("annualizing method (40 CFR 82.152 / 84.102)", () => {
     expect(points.map((p) => p.additionIds)).toEqual([["a"], ["b"]]);
     expect(points[1].days).toBe(30); // our reading: the excluded addition restarts the clock
   });
+  it("treats the first calculation on or after a regime's start date as a first calculation", () => {
+    // standards.md §1 [M]: the first Part 84 calculation after 1 Jan 2026 uses 365 days.
+    const withStart = { ...rules, firstCalculationFrom: "2026-01-01" };
+    const points = leakRateHistory({
+      fullChargeKg: 100, method: "annualizing", rules: withStart,
+      additions: [{ id: "a", date: "2025-12-01", amountKg: 1 }, { id: "b", date: "2026-01-10", amountKg: 4 }, { id: "c", date: "2026-02-09", amountKg: 2 }],
+    });
+    expect(points.map((p) => p.days)).toEqual([365, 365, 30]);
+    expect(points[1].percent).toBeCloseTo(4, 12);
+  });
   it("refuses bad additions by entry", () => {
     expect(() => annual(100, [lb("a", "2026-02-30", 1)])).toThrow(/^additions\[0\].date: 2026-02-30 does not exist/);
     expect(() => annual(100, [{ id: "a", date: "2026-01-01", amountKg: -1 }])).toThrow(/^additions\[0\].amountKg/);

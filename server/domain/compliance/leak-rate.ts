@@ -21,8 +21,14 @@ export interface ChargeAddition {
 
 export interface LeakRateRules {
   maxDaysSinceLastAddition: number;
+  /** Days used by the annualizing method for the first calculation (no earlier addition). */
   firstCalculationDays: number;
   rollingWindowDays: number;
+  /**
+   * When a regime starts on a date (Part 84: 1 Jan 2026), the first calculation on or after it
+   * also counts as a first calculation, whatever was added before (standards.md §1 [M]).
+   */
+  firstCalculationFrom?: IsoDate;
 }
 
 export interface LeakRatePoint {
@@ -107,6 +113,11 @@ export function leakRateHistory(input: LeakRateInput): LeakRatePoint[] {
   const groups = byDate(liveSorted(input.additions));
   const verified = (input.followUpVerifiedOn ?? []).map((d, i) => (parseIsoDate(d, `followUpVerifiedOn[${i}]`), d)).sort(compareDates);
   const points: LeakRatePoint[] = [];
+  if (rules.firstCalculationFrom) parseIsoDate(rules.firstCalculationFrom, "rules.firstCalculationFrom");
+  const startsRegime = (date: IsoDate) =>
+    rules.firstCalculationFrom !== undefined &&
+    compareDates(date, rules.firstCalculationFrom) >= 0 &&
+    !points.some((p) => compareDates(p.date, rules.firstCalculationFrom!) >= 0);
   groups.forEach((group, i) => {
     const counted = group.items.filter((a) => !a.excluded);
     if (counted.length === 0) return;
@@ -114,7 +125,7 @@ export function leakRateHistory(input: LeakRateInput): LeakRatePoint[] {
     const additionIds = counted.map((a) => a.id);
     if (method === "annualizing") {
       const previous = groups[i - 1];
-      const days = previous
+      const days = previous && !startsRegime(group.date)
         ? Math.min(daysBetween(previous.date, group.date), rules.maxDaysSinceLastAddition)
         : rules.firstCalculationDays;
       points.push({ date: group.date, method, percent: annualizedLeakRate(addedKg, fullChargeKg, days), countedKg: addedKg, additionIds, days });

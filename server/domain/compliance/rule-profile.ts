@@ -39,6 +39,21 @@ export interface LeakRatePart {
   maxDaysSinceLastAddition: Sourced<number>;
   /** Rolling average: window in days, shortened by a successful follow-up verification. */
   rollingWindowDays: Sourced<number>;
+  /** Periodic leak inspections after a breach, until the rate stays below the threshold. */
+  inspectionsAfterBreach?: Sourced<{
+    /** Systems of these types at or above `largeFromCharge` are inspected every `largeEveryMonths`. */
+    largeTypes: ApplianceType[];
+    largeFromCharge: MassLimit;
+    largeEveryMonths: number;
+    /** …until this many consecutive inspection periods are below the threshold. */
+    largeUntilPeriodsBelow: number;
+    otherEveryMonths: number;
+    otherUntilPeriodsBelow: number;
+    /** Waived while an automatic leak detection system, calibrated yearly, watches the system. */
+    waivedWithAutomaticLeakDetection: boolean;
+  }>;
+  /** Automatic leak detection required for these types from this full charge. */
+  automaticLeakDetectionRequired?: Sourced<{ types: ApplianceType[]; fromCharge: MassLimit }>;
   chronicLeaker: {
     /** Added in one calendar year, as % of full charge; reaching it ("≥") flags the system. */
     percentOfFullCharge: Sourced<number>;

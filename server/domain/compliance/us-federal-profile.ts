@@ -15,6 +15,18 @@ const shared = {
   followUpVerificationDays: { value: 10, source: "[M] follow-up verification within 10 days; definition [S:R8]" },
   maxDaysSinceLastAddition: { value: 365, source: "[S:R7] annualizing method, shorter of days since last addition or 365" },
   rollingWindowDays: { value: 365, source: "[S:R7] rolling average, previous 365 days; shortened by a follow-up verification [M]" },
+  inspectionsAfterBreach: {
+    value: {
+      largeTypes: ["commercial-refrigeration", "industrial-process"],
+      largeFromCharge: { value: 500, unit: "lb" },
+      largeEveryMonths: 3,
+      largeUntilPeriodsBelow: 4,
+      otherEveryMonths: 12,
+      otherUntilPeriodsBelow: 1,
+      waivedWithAutomaticLeakDetection: true,
+    },
+    source: "[M] CR/IPR ≥ 500 lb quarterly until 4 quarters below; others yearly until 1 year below; waived under yearly-calibrated ALD",
+  },
   chronicLeaker: {
     percentOfFullCharge: { value: 125, source: "[S:R7] ≥125 % of full charge added in a calendar year" },
     reportBy: { value: { month: 3, day: 1 }, source: "[S:R7] report by 1 March of the following year" },
@@ -36,6 +48,10 @@ export const PART_84_SUBPART_C: LeakRatePart = {
   covers: { value: { ozoneDepleting: false, gwpAbove: 53 }, source: "[S:R4] HFC or substitute with GWP > 53" },
   minFullCharge: { value: { value: 15, unit: "lb" }, source: "[S:R4] full charge ≥ 15 lb" },
   effectiveFrom: { value: "2026-01-01", source: "[S:R4] from 1 Jan 2026" },
+  automaticLeakDetectionRequired: {
+    value: { types: ["commercial-refrigeration", "industrial-process"], fromCharge: { value: 1500, unit: "lb" } },
+    source: "[S:R4] ALD required for CR and IPR ≥ 1,500 lb; install deadlines [M]",
+  },
   firstCalculationDays: { value: 365, source: "[M] the first calculation after 1 Jan 2026 uses 365 days" },
   ...shared,
 };

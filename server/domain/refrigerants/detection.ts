@@ -1,5 +1,5 @@
 import { getPure } from "./catalogue";
-import { isHalogenated } from "./formula";
+import { elementCounts, isHalogenated } from "./formula";
 import type { PureRefrigerant, Refrigerant } from "./types";
 
 /** Sensing principles as recorded on a detector. */
@@ -31,7 +31,7 @@ function pureVerdict(principle: SensingPrinciple, r: PureRefrigerant, band?: Inf
       };
     }
     if (band === "C-F") {
-      return (r.formula.includes("F"))
+      return (elementCounts(r.formula).F ?? 0) > 0
         ? { answer: "yes", reason: `${r.id} has C–F bonds, which absorb in this instrument's band.` }
         : { answer: "no", reason: `${r.id} has no C–F bonds, so a C–F band instrument does not see it.` };
     }
