@@ -2,7 +2,7 @@ import { eq, sql } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import type { CalibrationInput, Plan } from "../../contracts/plans";
 import { toMetres } from "../../analysis/geometry/units";
-import { plans } from "../../db/schema/index";
+import { fixtures, plans } from "../../db/schema/index";
 import { transformFixture } from "../../domain/plans/transform-fixture";
 import { badRequest, HttpError } from "../../lib/http-error";
 import type { Viewer } from "../stores/store-access";
@@ -10,7 +10,6 @@ import { assertCurrentVersion, assertRevision, fixtureCounts, loadVisiblePlan, l
 import { fixtureToRow, rowToFixture, toPlan, type PlanRow } from "./plan-rows";
 import { planHasSweeps } from "./plan-sweeps";
 import { addPlanVersion, insertFixtureRows, loadFixtureRows } from "./plan-versions";
-import { fixtures } from "../../db/schema/index";
 
 /** A drawn line shorter than this is too imprecise to calibrate from (a few pixels of error). */
 export const MIN_CALIBRATION_PIXELS = 10;
