@@ -35,6 +35,22 @@ export function currentCsrfToken(): string | null {
 
 type Method = "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
 
+const SESSION_PATH = "/api/auth/session";
+
+/**
+ * A page opened straight from an e-mail link (invitation, password reset) may post before
+ * anything has read the session; read it first so the request carries a token.
+ */
+async function ensureCsrfToken(): Promise<void> {
+  if (csrfToken) return;
+  try {
+    const response = await fetch(SESSION_PATH, { headers: { Accept: "application/json" }, credentials: "same-origin" });
+    if (response.ok) rememberCsrf(await readJson(response));
+  } catch {
+    // the real request below reports the network problem
+  }
+}
+
 export interface RequestOptions {
   body?: unknown;
   signal?: AbortSignal;
@@ -84,6 +100,7 @@ export async function apiRequest<T>(
   schema: z.ZodType<T> | null,
   options: RequestOptions = {},
 ): Promise<T> {
+  if (method !== "GET") await ensureCsrfToken();
   const headers: Record<string, string> = { Accept: "application/json" };
   if (options.body !== undefined) headers["Content-Type"] = "application/json";
   if (method !== "GET" && csrfToken) headers["X-CSRF-Token"] = csrfToken;

@@ -19,7 +19,7 @@ export interface DataTableProps<Row> {
 export function DataTable<Row>({ caption, columns, rows, rowKey, rowDetail }: DataTableProps<Row>) {
   return (
     <div className="overflow-x-auto rounded-md bg-surface edge">
-      <table className="w-full border-collapse text-left">
+      <table className="w-full min-w-max border-collapse text-left">
         <caption className="sr-only">{caption}</caption>
         <thead>
           <tr className="bg-accent-soft">

@@ -22,7 +22,7 @@ export function InvitationsList({ invitations, canManage, now = new Date() }: { 
         rows={pending}
         rowKey={(i) => i.id}
         columns={[
-          { header: "E-mail", cell: (i) => <span className="break-all">{i.email}</span> },
+          { header: "E-mail", cell: (i) => i.email },
           { header: "Role", cell: (i) => ROLE_LABELS[i.role] },
           { header: "Invited by", cell: (i) => i.invitedBy },
           {
