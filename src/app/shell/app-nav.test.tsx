@@ -91,6 +91,24 @@ describe("route guard", () => {
     expect(router.state.location.pathname).toBe("/settings");
   });
 
+  it("signs out and lands on a plain sign-in page", async () => {
+    let session = sessionFor("owner");
+    const calls = stubFetch({
+      "GET /api/auth/session": () => ({ body: session }),
+      "GET /api/team": { body: { members: [], invitations: [] } },
+      "GET /api/stores": { body: { stores: [] } },
+      "POST /api/auth/sign-out": () => {
+        session = signedOutSession("csrf-after");
+        return { body: session };
+      },
+    });
+    const { router } = renderApp("/team");
+    fireEvent.click(await screen.findByRole("button", { name: "Sign out" }));
+    expect(await screen.findByRole("heading", { name: "Sign in" })).toBeTruthy();
+    await waitFor(() => expect(router.state.location.search).toBe(""));
+    expect(calls.find((c) => c.path === "/api/auth/sign-out")!.headers["x-csrf-token"]).toBe("csrf-signed-in");
+  });
+
   it("shows the 404 page for an unknown address inside the app", async () => {
     stubFetch({ "GET /api/auth/session": { body: sessionFor("owner") } });
     renderApp("/no-such-page");
