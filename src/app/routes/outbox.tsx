@@ -17,7 +17,8 @@ export function Component() {
   const { session, membership } = useSignedIn();
   const { messageId } = useParams();
   const allowed = session.outboxEnabled && can(membership.role, "outbox.read");
-  const outbox = useOutbox();
+  // Asking would only earn a 404 or 403: do not.
+  const outbox = useOutbox({ enabled: allowed });
 
   if (!allowed) return <NotFound />;
   const selected = messageId ? outbox.data?.find((m) => m.id === messageId) : undefined;

@@ -16,7 +16,7 @@ export function Component() {
   const { session, user, membership } = useSignedIn();
   const allowed = can(membership.role, "members.read");
   const canManage = can(membership.role, "members.manage");
-  const team = useTeam();
+  const team = useTeam({ enabled: allowed });
   // Store names for the store contacts' column and the store picker: the stores feature meets team here.
   const stores = useStores({ enabled: allowed });
 

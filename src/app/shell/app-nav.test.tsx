@@ -59,9 +59,10 @@ describe("navigation by role", () => {
   });
 
   it("hides the Team page itself from a store contact who types its address", async () => {
-    stubFetch({ "GET /api/auth/session": { body: sessionFor("store-contact") } });
+    const calls = stubFetch({ "GET /api/auth/session": { body: sessionFor("store-contact") } });
     renderApp("/team");
     expect(await screen.findByRole("heading", { name: "Page not found" })).toBeTruthy();
+    expect(calls.some((c) => c.path === "/api/team")).toBe(false);
   });
 });
 
