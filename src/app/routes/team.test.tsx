@@ -39,6 +39,7 @@ describe("team page", () => {
     fireEvent.change(within(form).getByLabelText("Role"), { target: { value: "store-contact" } });
     expect(await within(form).findByLabelText("Maple Street Market")).toBeTruthy();
     expect(screen.getByRole("button", { name: "Revoke the invitation to sam.reyes@northfield.example" })).toBeTruthy();
+    expect(screen.getByRole("table", { name: "Pending invitations" }).textContent).toContain("All stores");
   });
 
   it("shows a technician the members but no invite form and no owner actions", async () => {

@@ -38,7 +38,7 @@ export function Component() {
             <h2 id="invitations-heading" className="text-xl font-bold">
               Pending invitations
             </h2>
-            <InvitationsList invitations={team.data.invitations} canManage={canManage} />
+            <InvitationsList invitations={team.data.invitations} stores={stores.data} canManage={canManage} />
           </section>
           {canManage ? <InviteForm stores={stores.data} storesLoading={stores.isPending} outboxHint={session.outboxEnabled} /> : null}
         </div>

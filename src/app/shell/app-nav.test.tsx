@@ -110,6 +110,14 @@ describe("route guard", () => {
     expect(calls.find((c) => c.path === "/api/auth/sign-out")!.headers["x-csrf-token"]).toBe("csrf-signed-in");
   });
 
+  it("tells a signed-in person without any membership what to do", async () => {
+    stubFetch({ "GET /api/auth/session": { body: { ...sessionFor("owner"), memberships: [], activeCompanyId: null } } });
+    renderApp("/");
+    expect(await screen.findByRole("heading", { name: "You are not a member of any company" })).toBeTruthy();
+    expect(screen.getByRole("button", { name: "Sign out" })).toBeTruthy();
+    expect(screen.queryByRole("navigation", { name: "Main" })).toBeNull();
+  });
+
   it("shows the 404 page for an unknown address inside the app", async () => {
     stubFetch({ "GET /api/auth/session": { body: sessionFor("owner") } });
     renderApp("/no-such-page");
