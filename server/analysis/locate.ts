@@ -118,7 +118,7 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
 
   const dof = Math.max(1, n - 2 - greedy.sources.length - nuisance.length);
   const s2 = Math.max(1, greedy.chi2Final / dof);
-  const maxQ = Math.max(...sources.map((s) => s.q), 1e-12);
+  const topQ = Math.max(sources[0]?.q ?? 0, 1e-12);
   const gPerYearPerQ =
     (wellMixedEmission(ppmToMgPerM3(1, o.molarMassGPerMol), o.airChangesPerH, kernelArea(kernel) * o.mixingHeightM) * HOURS_PER_YEAR) / 1000;
   const candidates: Candidate[] = [];
@@ -149,7 +149,7 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
       y: round2(y0),
       radius: round2(radius),
       score: round2(score),
-      strength: round2(s.q / maxQ),
+      strength: round2(s.q / topQ),
       strengthGPerYear: Math.round(s.q * gPerYearPerQ),
       fixtureId: fixture?.item.id ?? null,
       riskPointId: riskPoint?.item.id ?? null,

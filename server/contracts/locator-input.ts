@@ -97,8 +97,7 @@ const reading = z.object({
   y: finite("y"),
   t: finite("t").refine((v) => v >= 0, "t must not be negative (seconds from the sweep's start)"),
   ppm: z
-    .number({ error: "ppm must be a number" })
-    .refine((v) => !Number.isNaN(v), "ppm must be a number, not NaN")
+    .number({ error: (issue) => (Number.isNaN(issue.input) ? "ppm must be a number, not NaN" : "ppm must be a number") })
     .refine((v) => Number.isFinite(v), "ppm must be finite")
     .refine((v) => v >= 0, "ppm must not be negative"),
   atLeast: z.boolean({ error: "atLeast must be true or false" }).optional(),

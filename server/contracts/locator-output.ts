@@ -9,7 +9,7 @@ export interface Candidate {
   radius: number;
   /** 0..1, for ordering and display only. */
   score: number;
-  /** Relative to the strongest candidate (1.0). */
+  /** Relative to the first candidate (1.0). */
   strength: number;
   /** Emission estimate under the stated well-mixed assumption (see `assumptions`). */
   strengthGPerYear: number;

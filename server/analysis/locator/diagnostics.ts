@@ -100,6 +100,8 @@ export function oneSidedPass(sx: number[], sy: number[], cx: number, cy: number)
   }
   const spread = Math.sqrt(perp2 / n);
   const offset = -(cx - mx) * uy + (cy - my) * ux;
-  const oneSided = spread < 0.4 && Math.abs(offset) > 0.5 && (offset > maxPerp + 0.3 || offset < minPerp - 0.3);
-  return { oneSided, mirror: [cx + 2 * offset * uy, cy - 2 * offset * ux] };
+  // A single line of readings cannot tell a spot on one side from its mirror image on the other; a spot
+  // on the line itself is just as ambiguous (it trades distance against strength).
+  const oneSided = spread < 0.4 && !(offset < maxPerp + 0.3 && offset > minPerp - 0.3 && maxPerp - minPerp > 1.2);
+  return { oneSided, mirror: Math.abs(offset) > 0.5 ? [cx + 2 * offset * uy, cy - 2 * offset * ux] : [cx, cy] };
 }

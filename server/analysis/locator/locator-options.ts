@@ -12,7 +12,7 @@ export interface LocatorOptions {
   truncationM: number;
   /** Gaussian width of the field map, m (about half a tap spacing of 1.2–1.5 m plus jitter). */
   mapSigmaM: number;
-  /** Noise model w = 1/(a + β·y)²: additive floor a (ppm) and multiplicative share β (issue 5 noise figures). */
+  /** Noise model w = 1/(a + β·y)²: floor a ≈ √(0.5² + 1/12) ppm (about 0.5 ppm noise plus whole-ppm rounding) and lognormal share β ≈ 0.3 (issue 5 noise figures). */
   noiseFloorPpm: number;
   noiseFraction: number;
   /** Leaks fitted at once, and candidates listed at most (fitted leaks plus alternatives). */
@@ -48,7 +48,7 @@ export const DEFAULT_LOCATOR_OPTIONS: LocatorOptions = {
   nearCutoffM: 0.5,
   truncationM: 10,
   mapSigmaM: 0.75,
-  noiseFloorPpm: 1,
+  noiseFloorPpm: 0.6,
   noiseFraction: 0.3,
   maxLeaks: 3,
   maxCandidates: 5,
