@@ -21,8 +21,8 @@ export class GeodesicSearch {
   private readonly heap = new MinHeap(4096);
   private readonly offsets: Int32Array;
   private readonly steps: Float64Array;
-  private readonly di: Int8Array;
-  private readonly dj: Int8Array;
+  /** Per cell, a bit per allowed move (in bounds, into a free cell, not cutting a solid corner). */
+  private readonly moves: Uint8Array;
 
   constructor(readonly grid: PlanGrid) {
     const n = grid.width * grid.height;
@@ -32,8 +32,7 @@ export class GeodesicSearch {
     this.dirty = new Int32Array(1024);
     const w = grid.width;
     const h = grid.cellSize;
-    this.di = Int8Array.from([1, -1, 0, 0, 1, 1, -1, -1]);
-    this.dj = Int8Array.from([0, 0, 1, -1, 1, -1, 1, -1]);
+    this.moves = allowedMoves(grid);
     this.offsets = Int32Array.from([1, -1, w, -w, w + 1, -w + 1, w - 1, -w - 1]);
     this.steps = Float64Array.from([h, h, h, h, h * Math.SQRT2, h * Math.SQRT2, h * Math.SQRT2, h * Math.SQRT2]);
   }
@@ -82,8 +81,7 @@ export class GeodesicSearch {
   }
 
   private run(maxDistance: number, target: number): number {
-    const { heap, dist, parent, offsets, steps, di, dj } = this;
-    const { blocked, width, height } = this.grid;
+    const { heap, dist, parent, offsets, steps, moves } = this;
     while (heap.size > 0) {
       const key = heap.peekKey();
       const u = heap.pop();
@@ -92,15 +90,10 @@ export class GeodesicSearch {
       if (this.settledCount === this.settled.length) this.settled = growInt32(this.settled);
       this.settled[this.settledCount++] = u;
       if (u === target) break;
-      const ui = u % width;
-      const uj = (u - ui) / width;
+      const mask = moves[u];
       for (let m = 0; m < 8; m++) {
-        const vi = ui + di[m];
-        const vj = uj + dj[m];
-        if (vi < 0 || vj < 0 || vi >= width || vj >= height) continue;
+        if (!(mask & (1 << m))) continue;
         const v = u + offsets[m];
-        if (blocked[v]) continue;
-        if (m >= 4 && (blocked[u + di[m]] || blocked[u + dj[m] * width])) continue;
         const nd = key + steps[m];
         if (nd < dist[v]) {
           if (dist[v] === Infinity) this.markDirty(v);
@@ -134,6 +127,30 @@ export class GeodesicSearch {
     this.settledCount = 0;
     this.heap.clear();
   }
+}
+
+const DI = [1, -1, 0, 0, 1, 1, -1, -1];
+const DJ = [0, 0, 1, -1, 1, -1, 1, -1];
+
+function allowedMoves(grid: PlanGrid): Uint8Array {
+  const { width, height, blocked } = grid;
+  const out = new Uint8Array(width * height);
+  const free = (i: number, j: number) => i >= 0 && j >= 0 && i < width && j < height && !blocked[j * width + i];
+  for (let j = 0; j < height; j++) {
+    for (let i = 0; i < width; i++) {
+      if (blocked[j * width + i]) continue;
+      let mask = 0;
+      for (let m = 0; m < 8; m++) {
+        const vi = i + DI[m];
+        const vj = j + DJ[m];
+        if (!free(vi, vj)) continue;
+        if (m >= 4 && (!free(vi, j) || !free(i, vj))) continue;
+        mask |= 1 << m;
+      }
+      out[j * width + i] = mask;
+    }
+  }
+  return out;
 }
 
 function growInt32(a: Int32Array): Int32Array {
