@@ -1,4 +1,4 @@
-// The locator's accuracy benchmark (`npm run bench:locate [-- --json] [family ...]`): runs `locate`
+// The locator's accuracy benchmark (`npm run bench:locate [-- --json|--detail] [family ...]`): runs `locate`
 // on every committed store in scripts/bench/scenarios/, scores it against the truth beside each file,
 // and prints per family and overall figures for the locator and for the naive answer, then the
 // issue's targets with pass/fail. It is a report: the exit code is 0 unless the script itself fails.
@@ -12,6 +12,7 @@ const here = dirname(fileURLToPath(import.meta.url));
 const scenarioDir = join(here, "scenarios");
 const args = process.argv.slice(2);
 const asJson = args.includes("--json");
+const detail = args.includes("--detail");
 const onlyFamilies = args.filter((a) => !a.startsWith("--"));
 
 type LocateFn = (input: unknown) => unknown;
@@ -103,6 +104,14 @@ async function main() {
       failures.push(`${s.name}: ${err instanceof Error ? err.message : String(err)}`);
     }
     locatorScores.push(scoreStore(s.truth, suspects, zones));
+    if (detail) {
+      const l = locatorScores[locatorScores.length - 1], n = naiveScores[naiveScores.length - 1];
+      const r = suspects[0]?.radius;
+      console.log(
+        `${s.name.padEnd(16)} suspects ${String(suspects.length).padStart(2)}  top-1 ${fmt(l.top1Error).padStart(6)} m` +
+          `  radius ${fmt(r ?? null).padStart(5)}  top-3<=1.5 ${l.top3Within ? "yes" : "no "}  naive ${fmt(n.top1Error).padStart(6)} m`,
+      );
+    }
   }
   const naive = byFamily(stores, naiveScores);
   const located = locate ? byFamily(stores, locatorScores) : null;
