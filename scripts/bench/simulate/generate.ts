@@ -28,7 +28,7 @@ FAMILIES.forEach((family, fi) => {
     console.log(
       `${name}: ${s.input.plan.width} x ${s.input.plan.height} m, ${s.notes.cells} cells of ${s.notes.cellSize} m, ` +
         `${s.input.readings.length} readings, solver iterations ${s.notes.solveIterations.join("/") || "-"}, ` +
-        `peak ${s.notes.peakPpm.join("/") || "-"} ppm, ${((Date.now() - t0) / 1000).toFixed(1)} s`,
+        `peak ${s.notes.peakPpm.join("/") || "-"} ppm, ${s.notes.samplesInSolid ? `${s.notes.samplesInSolid} probe samples on solid cells, ` : ""}${((Date.now() - t0) / 1000).toFixed(1)} s`,
     );
   }
 });
