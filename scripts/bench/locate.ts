@@ -1,4 +1,4 @@
-// The locator's accuracy benchmark (`npm run bench:locate [-- --json|--detail] [family ...]`): runs `locate`
+// The locator's accuracy benchmark (`npm run bench:locate [-- --json|--detail] [--dir DIR] [family ...]`): runs `locate`
 // on every committed store in scripts/bench/scenarios/, scores it against the truth beside each file,
 // and prints per family and overall figures for the locator and for the naive answer, then the
 // issue's targets with pass/fail. It is a report: the exit code is 0 unless the script itself fails.
@@ -9,8 +9,10 @@ import type { Polygon } from "../../server/analysis/geometry/types";
 import { checkTargets, naiveAnswer, scoreStore, summarise, type StoreScore, type Summary, type Suspect, type Truth } from "./score";
 
 const here = dirname(fileURLToPath(import.meta.url));
-const scenarioDir = join(here, "scenarios");
 const args = process.argv.slice(2);
+const dirFlag = args.indexOf("--dir");
+// --dir scores another set (e.g. a held-out one from generate.ts --first 13 --out DIR).
+const scenarioDir = dirFlag >= 0 ? args.splice(dirFlag, 2)[1] ?? "" : join(here, "scenarios");
 const asJson = args.includes("--json");
 const detail = args.includes("--detail");
 const onlyFamilies = args.filter((a) => !a.startsWith("--"));
@@ -121,7 +123,7 @@ async function main() {
     console.log(JSON.stringify({ stores: stores.length, locatorMissing: locate ? null : why, failures, naive, locator: located, targets }, null, 1));
     return;
   }
-  const out: string[] = [`${stores.length} stores from scripts/bench/scenarios/`];
+  const out: string[] = [`${stores.length} stores from ${scenarioDir}`];
   out.push("", table("Naive answer (the spot of the highest raw reading, when it reaches the alarm):", naive));
   if (!located) {
     out.push("", `Locator not scored: ${why}.`);
