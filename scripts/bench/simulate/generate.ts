@@ -29,6 +29,7 @@ if (!Number.isInteger(perFamily) || perFamily < 1 || perFamily > 100) fail(`stor
 if (!Number.isInteger(first) || first < 1 || first > 9000) fail(`--first must be an integer 1..9000, got ${first}`);
 mkdirSync(outDir, { recursive: true });
 let bytes = 0;
+const faulty: string[] = [];
 const started = Date.now();
 FAMILIES.forEach((family, fi) => {
   for (let n = first; n < first + perFamily; n++) {
@@ -40,6 +41,7 @@ FAMILIES.forEach((family, fi) => {
     writeFileSync(join(outDir, `${name}.json`), input + "\n");
     writeFileSync(join(outDir, `${name}.truth.json`), JSON.stringify(s.truth, null, 1) + "\n");
     bytes += input.length;
+    if (s.notes.samplesInSolid > 0) faulty.push(name);
     console.log(
       `${name}: ${s.input.plan.width} x ${s.input.plan.height} m, ${s.notes.cells} cells of ${s.notes.cellSize} m, ` +
         `${s.input.readings.length} readings, solver iterations ${s.notes.solveIterations.join("/") || "-"}, ` +
@@ -48,3 +50,8 @@ FAMILIES.forEach((family, fi) => {
   }
 });
 console.log(`${FAMILIES.length * perFamily} stores, ${(bytes / 1e6).toFixed(2)} MB, ${((Date.now() - started) / 1000).toFixed(0)} s`);
+if (faulty.length) {
+  // The probe was routed onto a solid body: a layout or routing fault, not a valid benchmark store.
+  console.error(`generate: probe on solid cells in ${faulty.join(", ")}`);
+  process.exit(1);
+}

@@ -121,4 +121,27 @@ describe("steady transport against closed forms", () => {
     expect(far(closed)).toBe(0);
     expect(far(open)).toBeGreaterThan(1e-3);
   });
+
+  it("along a ventilated channel a line source decays as the steady advection-dispersion-decay solution", () => {
+    // c ~ exp(U x (1 -/+ a) / (2E)), a = sqrt(1 + 4 k E / U^2): the steady estuary with first-order decay
+    // (Chapra, Surface Water-Quality Modeling, 1997, distributed systems at steady state).
+    const grid = createGrid(30, 0.5, 0.05);
+    const q = terminalFlows(grid, [
+      { x: 0.3, y: 0.25, radius: 0.3, sign: 1 },
+      { x: 29.7, y: 0.25, radius: 0.3, sign: -1 },
+    ]);
+    const drift = potentialDrift(grid, q, 0.05, 1e-10);
+    const K = 0.02, k = 0.02;
+    const op = buildOperator(grid, uniform(grid, K), k, drift);
+    const src = new Float64Array(grid.nx * grid.ny);
+    const at = (x: number) => Math.round(x / grid.h);
+    for (let j = 0; j < grid.ny; j++) src[j * grid.nx + at(12)] = 1;
+    const { field } = solveSteady(op, src, 1e-11);
+    const U = drift.u[5 * (grid.nx + 1) + at(12)];
+    const a = Math.sqrt(1 + (4 * k * K) / (U * U));
+    const down = (U * (a - 1)) / (2 * K), up = (U * (a + 1)) / (2 * K);
+    const c = (x: number) => field[5 * grid.nx + at(x)];
+    expect(Math.log(c(13) / c(17)) / 4).toBeCloseTo(down, 2);
+    expect(Math.abs(Math.log(c(11.8) / c(11.2)) / 0.6 / up - 1)).toBeLessThan(0.05);
+  });
 });
