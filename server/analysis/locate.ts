@@ -40,7 +40,10 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   const n = readings.length;
 
   // 1. lag correction along the walked route
-  const lagged = lagCorrect(readings, instrument.transportDelayS, instrument.timeConstantS, gridRoute(grid));
+  const lagged = lagCorrect(readings, instrument.transportDelayS, instrument.timeConstantS, {
+    route: gridRoute(grid),
+    walkSpeedMps: o.walkSpeedMps > 0 ? o.walkSpeedMps : undefined,
+  });
   const xs = new Float64Array(n);
   const ys = new Float64Array(n);
   const y = new Float64Array(n);

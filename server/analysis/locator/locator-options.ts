@@ -2,6 +2,8 @@
 // settings are calibrated on the scenario benchmark (npm run bench:locate), never on single stores.
 
 export interface LocatorOptions {
+  /** Walking pace between stops for the stop-and-go lag model, m/s (issue 5: 0.7–1.2); 0 = move evenly between taps. */
+  walkSpeedMps: number;
   /** Grid cell, m (issue 5 default). */
   cellSize: number;
   /** Screening length L = √(K/λ), m: K ≈ 0.01–0.05 m²/s in aisles and λ = 1.5–4 air changes/h give 3–11 m. */
@@ -43,6 +45,7 @@ export interface LocatorOptions {
 }
 
 export const DEFAULT_LOCATOR_OPTIONS: LocatorOptions = {
+  walkSpeedMps: 0,
   cellSize: 0.25,
   screeningLengthM: 5,
   nearCutoffM: 0.5,
