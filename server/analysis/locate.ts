@@ -37,6 +37,8 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
 
   const grid = createPlanGrid(plan.width, plan.height, o.cellSize, plan.obstacles.map((b) => b.polygon));
   const kernel = createSourceKernel(o.screeningLengthM, o.nearCutoffM, o.truncationM);
+  // a benign-source zone is a spread-out source whose gas drifts far, so it gets a longer kernel
+  const zoneKernel = createSourceKernel(o.zoneScreeningLengthM, o.nearCutoffM, 2 * o.zoneScreeningLengthM + o.zoneMarginM);
   const n = readings.length;
 
   // 1. lag correction along the walked route
@@ -61,14 +63,15 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   const cells = grid.width * grid.height;
   const zoneDist = new Float32Array(cells).fill(Infinity);
   const zoneOfReading = new Int32Array(n).fill(-1);
-  const zoneSearch = new GeodesicSearch(grid);
+  const stepScale = o.fanMixingScale < 1 ? fanStepScale(grid, plan, o.fanMixingScale) : null;
+  const zoneSearch = new GeodesicSearch(grid, stepScale);
   const nuisance = plan.backgroundZones.map((zone, z) => {
     let zc = cellsInside(grid, zone.polygon).filter((k) => !grid.blocked[k]);
     if (zc.length === 0) {
       const [cx, cy] = polygonCentroid(zone.polygon);
       zc = [nearestFreeCell(grid, cx, cy)].filter((k) => k >= 0);
     }
-    const reach = Math.max(o.truncationM, o.zoneMarginM);
+    const reach = zoneKernel.truncationM;
     const settled = zoneSearch.fromCells(zc, reach);
     for (let q = 0; q < settled; q++) {
       const k = zoneSearch.settled[q];
@@ -77,10 +80,16 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     const column = new Float64Array(n);
     for (let i = 0; i < n; i++) {
       const d = zoneSearch.dist[readingCell[i]];
-      column[i] = kernel.at(d);
+      column[i] = zoneKernel.at(d);
       if (d <= o.zoneMarginM && zoneOfReading[i] < 0) zoneOfReading[i] = z;
     }
     return column;
+  });
+
+  let zonePeak = 0;
+  plan.backgroundZones.forEach((zone, z) => {
+    for (let i = 0; i < n; i++) if (zoneOfReading[i] === z) zonePeak = Math.max(zonePeak, y[i]);
+    zonePeak = Math.max(zonePeak, zone.ppm ?? 0);
   });
 
   // 3. background and weights (noise is multiplicative plus a floor: w = 1/(a + β·y)²)
@@ -91,7 +100,7 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   for (let i = 0; i < n; i++) w[i] = 1 / (o.noiseFloorPpm + o.noiseFraction * y[i]) ** 2;
 
   // 4. one truncated geodesic search per sampled cell feeds both the field map and the source scan
-  const fields = accumulateReadingFields(grid, xs, ys, y, w, kernel, o.mapSigmaM);
+  const fields = accumulateReadingFields(grid, xs, ys, y, w, kernel, o.mapSigmaM, stepScale);
   const field = fieldMap(fields, grid.width, grid.height, grid.cellSize);
 
   // 5. suspect spots
@@ -118,7 +127,16 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     separationM: o.separationM,
     alternateFraction: o.alternateFraction,
     rankByStrength: o.rankByStrength,
-    credible: (_c, column, _q, b, residual, delta) => delta >= o.minDeltaChi2 && support(column, b, residual).length >= o.minSupport,
+    prior: o.riskPointLogOdds > 0 ? riskPointPrior(grid, plan, o.riskPointLogOdds) : null,
+    credible: (c, column, _q, b, residual, delta) => {
+      if (delta < o.minDeltaChi2) return false;
+      const sup = support(column, b, residual);
+      if (sup.length < o.minSupport) return false;
+      // Within reach of a benign-source zone, a spot must read more than the zone does: gas spreading
+      // from the zone thins out with distance, so weaker readings there are most simply the zone's.
+      if (zoneDist[c] <= zoneKernel.truncationM && zonePeak > 0) return sup.some((i) => y[i] > zonePeak);
+      return true;
+    },
   });
   const sources = addMirrorSpot(greedy.sources);
 
@@ -265,6 +283,26 @@ function equipmentMask(grid: PlanGrid, plan: LocatorInput["plan"], margin: numbe
     for (let q = 0; q < settledRp; q++) mask[search.settled[q]] = 1;
   }
   return mask;
+}
+
+/** Step scale per cell: `scale` inside fixtures whose fans run, 1 elsewhere; null when no fans run. */
+function fanStepScale(grid: PlanGrid, plan: LocatorInput["plan"], scale: number): Float32Array | null {
+  const withFans = plan.fixtures.filter((f) => f.fans);
+  if (withFans.length === 0) return null;
+  const out = new Float32Array(grid.width * grid.height).fill(1);
+  for (const f of withFans) for (const k of cellsInside(grid, f.polygon)) out[k] = scale;
+  return out;
+}
+
+/** Log prior odds per cell: `logOdds` within 0.5 m of a line-set drop, valve or coil, where joints leak most. */
+function riskPointPrior(grid: PlanGrid, plan: LocatorInput["plan"], logOdds: number): Float64Array {
+  const prior = new Float64Array(grid.width * grid.height);
+  const search = new GeodesicSearch(grid);
+  for (const p of plan.riskPoints) {
+    const settled = search.fromPoint(p.x, p.y, 0.5);
+    for (let q = 0; q < settled; q++) prior[search.settled[q]] = logOdds;
+  }
+  return prior;
 }
 
 function cellDistance(a: number, b: number, width: number): number {
