@@ -30,7 +30,7 @@ describe("steady transport against closed forms", () => {
   });
 
   it("a point source in open air approaches the screened 2-D solution Q/(2 pi K) K0(r/L)", () => {
-    // Free-space Green's function of K lap C - lambda C = -Q delta (A&S 9.8; e.g. Carslaw & Jaeger 1959 §10.4).
+    // Free-space Green's function of K lap C - lambda C = -Q delta (K0 per A&S 9.6/9.8; the 2-D screened-diffusion kernel, Carslaw & Jaeger, Conduction of Heat in Solids, 1959).
     const grid = createGrid(24, 24, 0.12);
     const K = 0.05, lambda = 0.005, Q = 1;
     const L = Math.sqrt(K / lambda);
@@ -62,7 +62,7 @@ describe("steady transport against closed forms", () => {
   });
 
   it("at steady state the source equals the removal, with drift and solid bodies (mass balance)", () => {
-    // Conservation of the finite-volume scheme (Patankar 1980, §5.2): sum S = sum (lambda + extraction) C.
+    // Conservation of the finite-volume scheme (Patankar, Numerical Heat Transfer and Fluid Flow, 1980, ch. 5): sum S = sum (lambda + extraction) C.
     const grid = createGrid(12, 8, 0.2);
     fillRect(grid, grid.solid, { x0: 4, y0: 1, x1: 5, y1: 6 }, 1);
     fillRect(grid, grid.solid, { x0: 8, y0: 2, x1: 8.2, y1: 8 }, 1);
@@ -83,7 +83,7 @@ describe("steady transport against closed forms", () => {
   });
 
   it("the drift has no velocity through solid faces and no divergence away from terminals", () => {
-    // Discrete potential flow with Neumann walls (e.g. Ferziger & Peric, Computational Methods for Fluid Dynamics, §7).
+    // Discrete potential flow with Neumann walls (Ferziger & Peric, Computational Methods for Fluid Dynamics: discrete continuity).
     const grid = createGrid(10, 6, 0.2);
     fillRect(grid, grid.solid, { x0: 3, y0: 0, x1: 3.2, y1: 4 }, 1);
     const q = terminalFlows(grid, [
@@ -107,7 +107,7 @@ describe("steady transport against closed forms", () => {
   });
 
   it("no gas passes a wall without a gap, and some passes through a door gap", () => {
-    // No-flux boundary: the far side of a closed partition stays exactly clean (Patankar 1980, §4.2-5).
+    // No-flux boundary: the far side of a closed partition stays exactly clean (Patankar 1980: zero conductance at a solid face).
     const closed = createGrid(8, 4, 0.2);
     fillRect(closed, closed.solid, { x0: 4, y0: 0, x1: 4.2, y1: 4 }, 1);
     const open = createGrid(8, 4, 0.2);
