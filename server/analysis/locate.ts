@@ -10,6 +10,7 @@ import { candidateNextCheck, candidateReason, type CandidateFacts } from "./loca
 import { benignSource, fansMixing, oneSidedPass, sparseCoverage } from "./locator/diagnostics";
 import { fieldMap } from "./locator/field-map";
 import { findSources, type FoundSource } from "./locator/greedy-sources";
+import { fitNonnegative } from "./locator/nonnegative-fit";
 import { DEFAULT_LOCATOR_OPTIONS, type LocatorOptions } from "./locator/locator-options";
 import { nearestFixture, nearestRiskPoint } from "./locator/nearest-features";
 import { equipmentMask, fanStepScale, riskPointPrior } from "./locator/plan-masks";
@@ -63,6 +64,7 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   // 2. benign-source zones: fixed nuisance sources, distance measured from the whole zone
   const cells = grid.width * grid.height;
   const zoneDist = new Float32Array(cells).fill(Infinity);
+  const zoneNearest = new Int32Array(cells).fill(-1);
   const zoneOfReading = new Int32Array(n).fill(-1);
   const stepScale = o.fanMixingScale < 1 ? fanStepScale(grid, plan, o.fanMixingScale) : null;
   const zoneSearch = new GeodesicSearch(grid, stepScale);
@@ -76,7 +78,10 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     const settled = zoneSearch.fromCells(zc, reach);
     for (let q = 0; q < settled; q++) {
       const k = zoneSearch.settled[q];
-      if (zoneSearch.dist[k] < zoneDist[k]) zoneDist[k] = zoneSearch.dist[k];
+      if (zoneSearch.dist[k] < zoneDist[k]) {
+        zoneDist[k] = zoneSearch.dist[k];
+        zoneNearest[k] = z;
+      }
     }
     const column = new Float64Array(n);
     for (let i = 0; i < n; i++) {
@@ -87,18 +92,21 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     return column;
   });
 
-  let zonePeak = 0;
-  plan.backgroundZones.forEach((zone, z) => {
-    for (let i = 0; i < n; i++) if (zoneOfReading[i] === z) zonePeak = Math.max(zonePeak, y[i]);
-    zonePeak = Math.max(zonePeak, zone.ppm ?? 0);
+  // What an active zone can make readings show: its stated typical reading, the readings at it, or by
+  // default `zoneTypicalAlarms` times the alarm level; a zone is active when the zone-only fit gives it gas.
+  const zoneFit = fitNonnegative(y, weightsFor(y, o), nuisance, censored);
+  const zoneActive = plan.backgroundZones.map((_, z) => zoneFit.q[z] > 0.5);
+  const zoneLevel = plan.backgroundZones.map((zone, z) => {
+    let level = zone.ppm ?? o.zoneTypicalAlarms * instrument.alarmPpm;
+    for (let i = 0; i < n; i++) if (zoneOfReading[i] === z) level = Math.max(level, y[i]);
+    return level;
   });
 
   // 3. background and weights (noise is multiplicative plus a floor: w = 1/(a + β·y)²)
   const usable = new Uint8Array(n);
   for (let i = 0; i < n; i++) usable[i] = !censored[i] && zoneOfReading[i] < 0 ? 1 : 0;
   const background = estimateBackground(y, usable);
-  const w = new Float64Array(n);
-  for (let i = 0; i < n; i++) w[i] = 1 / (o.noiseFloorPpm + o.noiseFraction * y[i]) ** 2;
+  const w = weightsFor(y, o);
 
   // 4. one truncated geodesic search per sampled cell feeds both the field map and the source scan
   const fields = accumulateReadingFields(grid, xs, ys, y, w, kernel, o.mapSigmaM, stepScale);
@@ -135,7 +143,8 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
       if (sup.length < o.minSupport) return false;
       // Within reach of a benign-source zone, a spot must read more than the zone does: gas spreading
       // from the zone thins out with distance, so weaker readings there are most simply the zone's.
-      if (zoneDist[c] <= zoneKernel.truncationM && zonePeak > 0) return sup.some((i) => y[i] > zonePeak);
+      const z = zoneNearest[c];
+      if (z >= 0 && zoneActive[z] && zoneDist[c] <= zoneKernel.truncationM) return sup.some((i) => y[i] > zoneLevel[z]);
       return true;
     },
   });
@@ -260,6 +269,11 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     readings: corrected,
     field,
   };
+}
+
+/** Noise model: w = 1/(a + β·y)², an additive floor plus a multiplicative share. */
+function weightsFor(y: Float64Array, o: LocatorOptions): Float64Array {
+  return Float64Array.from(y, (v) => 1 / (o.noiseFloorPpm + o.noiseFraction * v) ** 2);
 }
 
 function cellDistance(a: number, b: number, width: number): number {

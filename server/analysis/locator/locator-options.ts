@@ -46,6 +46,12 @@ export interface LocatorOptions {
   riskPointLogOdds: number;
   /** Screening length of the kernel of benign-source zones, m (their gas is fitted out to twice this). */
   zoneScreeningLengthM: number;
+  /**
+   * Near an active benign-source zone a spot must out-read what the zone can cause: the zone's `ppm`
+   * when given, else this many times the alarm level (aerosol storage read 2.5–6 ppm at a 2 ppm alarm
+   * in the scenario benchmark; no published source).
+   */
+  zoneTypicalAlarms: number;
   /** No suspect spot within this distance of a benign-source zone, m. */
   zoneMarginM: number;
   /** No suspect spot farther than this from every reading, m (unsampled areas are unknown). */
@@ -88,6 +94,7 @@ export const DEFAULT_LOCATOR_OPTIONS: LocatorOptions = {
   equipmentMarginM: 0.3,
   riskPointLogOdds: 1,
   zoneMarginM: 1.5,
+  zoneTypicalAlarms: 3,
   zoneScreeningLengthM: 5,
   maxReachM: 4,
   minRadiusM: 2.5,
