@@ -25,9 +25,25 @@ export interface LaggedPosition {
  * time constant τ reports at time t what it drew in around t − D − τ (the mean delay of the response
  * τ·ẏ + y = u(t − D) is D + τ), so each reading moves back to the probe position at s = t − D − τ,
  * interpolated in time between the taps around s and along the walked route between them (around solid
- * bodies when `route` says so; straight otherwise). Taps must be in time order.
+ * bodies when `route` says so; straight otherwise), evenly or stop-and-go (`walkSpeedMps`).
+ * Taps must be in time order.
  */
-export function lagCorrect(taps: readonly Tap[], delayS: number, timeConstantS: number, route?: Route, maxStepM = 5): LaggedPosition[] {
+export interface LagOptions {
+  /** The walked route between taps; straight when absent. */
+  route?: Route;
+  /** Taps farther apart than this are flagged as a path gap, m. */
+  maxStepM?: number;
+  /**
+   * Walking pace between stops, m/s. When given, the technician is taken to stand at each tap until
+   * leaving for the next one at this pace and arriving on time (stop-and-go, as a sweep is walked);
+   * when absent, the probe moves evenly between taps (plain interpolation by timestamps).
+   */
+  walkSpeedMps?: number;
+}
+
+export function lagCorrect(taps: readonly Tap[], delayS: number, timeConstantS: number, options: LagOptions = {}): LaggedPosition[] {
+  const { route, maxStepM = 5, walkSpeedMps } = options;
+  if (walkSpeedMps !== undefined && !(walkSpeedMps > 0)) throw new Error(`walking speed must be positive, got ${walkSpeedMps} m/s`);
   if (!(delayS >= 0) || !(timeConstantS >= 0)) throw new Error(`delay and time constant must be non-negative, got ${delayS} s and ${timeConstantS} s`);
   for (let k = 1; k < taps.length; k++) {
     if (taps[k].t < taps[k - 1].t) throw new Error(`taps must be in time order: tap ${k} at ${taps[k].t} s follows ${taps[k - 1].t} s`);
@@ -51,8 +67,15 @@ export function lagCorrect(taps: readonly Tap[], delayS: number, timeConstantS: 
     if (j >= taps.length - 1) return { x: taps[j].x, y: taps[j].y, beforeDelay: false, pathGap: false };
     const a = taps[j];
     const b = taps[j + 1];
-    const f = b.t > a.t ? (s - a.t) / (b.t - a.t) : 0;
-    const [x, y] = alongPolyline(routeOf(j), f);
+    const path = routeOf(j);
+    const span = b.t - a.t;
+    let f = span > 0 ? (s - a.t) / span : 0;
+    if (walkSpeedMps !== undefined && span > 0) {
+      const walkS = Math.min(span, polylineLength(path) / walkSpeedMps);
+      const leave = b.t - walkS;
+      f = s <= leave ? 0 : walkS > 0 ? (s - leave) / walkS : 1;
+    }
+    const [x, y] = alongPolyline(path, f);
     return { x, y, beforeDelay: false, pathGap: Math.hypot(b.x - a.x, b.y - a.y) > maxStepM };
   });
 }
@@ -69,12 +92,16 @@ function lastTapAtOrBefore(taps: readonly Tap[], s: number): number {
   return lo;
 }
 
+function polylineLength(points: readonly (readonly [number, number])[]): number {
+  let total = 0;
+  for (let i = 1; i < points.length; i++) total += Math.hypot(points[i][0] - points[i - 1][0], points[i][1] - points[i - 1][1]);
+  return total;
+}
+
 /** The point a fraction f (0..1) of the way along a polyline, by arc length. */
 export function alongPolyline(points: readonly (readonly [number, number])[], f: number): [number, number] {
   if (points.length === 1) return [points[0][0], points[0][1]];
-  let total = 0;
-  for (let i = 1; i < points.length; i++) total += Math.hypot(points[i][0] - points[i - 1][0], points[i][1] - points[i - 1][1]);
-  let left = Math.max(0, Math.min(1, f)) * total;
+  let left = Math.max(0, Math.min(1, f)) * polylineLength(points);
   for (let i = 1; i < points.length; i++) {
     const [ax, ay] = points[i - 1];
     const [bx, by] = points[i];
