@@ -102,11 +102,15 @@ export function SystemRecords({ r, unit, canRecord, findings }: { r: SystemRecor
             {r.chronic.map((y) => (
               <li key={y.year} className={y.chronic ? "font-bold text-danger" : undefined}>
                 {y.year}: {formatMass(y.addedKg, unit)}, {formatPercent(y.percent)} of the full charge
-                {y.chronic ? ` — chronic leaker (125 % or more); report due ${y.reportDue}` : ""}
+                {y.chronic ? ` — chronic leaker; report due ${y.reportDue}` : ""}
               </li>
             ))}
           </ul>
-          <p className="text-sm text-muted">A system that takes 125 % or more of its full charge in one calendar year is a chronic leaker, reported by 1 March of the next year (40 CFR 82 / 84, [S:R7]).</p>
+          {r.chronicRule ? (
+            <p className="text-sm text-muted">
+              A system that takes {r.chronicRule.percent} % or more of its full charge in one calendar year is a chronic leaker, reported by {r.chronicRule.reportBy} ({r.chronicRule.source}).
+            </p>
+          ) : null}
         </section>
       ) : null}
 
