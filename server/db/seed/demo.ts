@@ -4,6 +4,7 @@ import type { AppContext } from "../../context";
 import { companies, memberships, membershipStores, stores, users } from "../schema/index";
 import type { Role } from "../../domain/roles";
 import { seedDemoLayout } from "./demo-store-map";
+import { seedDemoDetectors } from "./demo-detectors";
 
 // An invented grocery chain and its people. Everything here is demo data.
 export const DEMO_SIGN_INS = {
@@ -42,6 +43,7 @@ export async function seedDemoIfEmpty(ctx: AppContext): Promise<boolean> {
       if (person.role === "lead-tech") leadTechId = user.id;
     }
     await seedDemoLayout(ctx, tx, { companyId: company.id, storeId: store.id, createdById: leadTechId });
+    await seedDemoDetectors(tx, company.id);
     return true;
   });
 }

@@ -72,8 +72,15 @@ export function PlanStage(props: PlanStageProps) {
   const moved = useRef(false);
   const img = useBlobImage(props.image);
 
+  const lastBox = useRef({ w: 0, h: 0 });
   useEffect(() => {
-    if (w > 0 && h > 0 && !viewRef.current) setView(fitView(props.widthM, props.heightM, w, h));
+    if (w <= 0 || h <= 0) return;
+    const before = lastBox.current;
+    lastBox.current = { w, h };
+    const v = viewRef.current;
+    if (!v) setView(fitView(props.widthM, props.heightM, w, h));
+    // The keypad opening or closing resizes the box: keep what was in the middle in the middle.
+    else setView({ ...v, panX: v.panX + (w - before.w) / 2, panY: v.panY + (h - before.h) / 2 });
   }, [w, h, props.widthM, props.heightM]);
 
   function local(e: React.PointerEvent) {
@@ -173,7 +180,7 @@ function Fixtures({ fixtures, unsampled, ink, highContrast, pointR }: { fixtures
         const stroke = open ? (highContrast ? "#000000" : "#b35c00") : highContrast ? "#000000" : "#6b7a80";
         if ("point" in f) {
           const d = pointR;
-          return <Line key={f.id} points={[f.point.x - d, f.point.y, f.point.x, f.point.y - d, f.point.x + d, f.point.y, f.point.x, f.point.y + d]} closed stroke={stroke} strokeWidth={open ? 3 : 1.5} dash={open ? [4, 3] : undefined} strokeScaleEnabled={false} fill="#ffffff" />;
+          return <Line key={f.id} points={[f.point.x - d, f.point.y, f.point.x, f.point.y - d, f.point.x + d, f.point.y, f.point.x, f.point.y + d]} closed stroke={stroke} strokeWidth={1.5} strokeScaleEnabled={false} fill={open ? (highContrast ? "#ffd600" : "#f0b45a") : "#ffffff"} />;
         }
         return (
           <Line

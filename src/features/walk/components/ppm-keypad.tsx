@@ -20,10 +20,10 @@ export interface PpmKeypadProps {
   onTyped?(value: KeypadValue): void;
 }
 
-const KEY = "flex h-14 min-w-12 items-center justify-center rounded-md text-2xl font-bold edge bg-surface active:bg-accent-soft";
+const KEY = "flex h-12 min-w-12 items-center justify-center rounded-md text-2xl font-bold edge active:opacity-70 disabled:opacity-50";
 
 /**
- * A large ppm keypad for a gloved thumb: every key at least 56 × 48 px. "0 ppm" saves a zero in
+ * A large ppm keypad for a gloved thumb: every key at least 48 × 48 px. "0 ppm" saves a zero in
  * one tap; "Over range" stores the typed value as "at least" (a pegged display).
  */
 export function PpmKeypad(props: PpmKeypadProps) {
@@ -53,14 +53,18 @@ export function PpmKeypad(props: PpmKeypadProps) {
   }
 
   return (
-    <section aria-label="Enter the detector's reading" className="flex flex-col gap-2 bg-surface p-3 edge border-x-0 border-b-0">
-      <div className="flex items-center justify-between gap-2">
-        <h2 className="text-lg font-bold">{props.title}</h2>
-        <button type="button" className="min-h-12 rounded-md px-3 font-bold text-accent underline" onClick={props.onCancel}>
+    <section aria-label="Enter the detector's reading" className="flex flex-col gap-2 bg-surface p-2 edge border-x-0 border-b-0">
+      <div className="flex items-center gap-2">
+        <h2 className="shrink-0 font-bold">{props.title}</h2>
+        <output aria-live="polite" aria-label="Value" className={`block min-w-0 flex-1 truncate rounded-md px-3 text-right text-3xl font-bold edge ${tooHigh ? "border-danger text-danger" : ""}`}>
+          {atLeast ? "≥ " : ""}
+          {typed === "" ? "0" : typed} <span className="text-lg">ppm</span>
+        </output>
+        <button type="button" className="min-h-12 shrink-0 rounded-md px-2 font-bold text-accent underline" onClick={props.onCancel}>
           {props.cancelLabel}
         </button>
       </div>
-      <div role="radiogroup" aria-label="Sample point" className="flex gap-2 overflow-x-auto pb-1">
+      <div role="radiogroup" aria-label="Sample point" className="flex gap-2 overflow-x-auto">
         {SAMPLE_POINTS.map((p) => (
           <button
             key={p}
@@ -74,10 +78,6 @@ export function PpmKeypad(props: PpmKeypadProps) {
           </button>
         ))}
       </div>
-      <output aria-live="polite" aria-label="Value" className={`block rounded-md px-3 py-1 text-right text-4xl font-bold edge ${tooHigh ? "border-danger text-danger" : ""}`}>
-        {atLeast ? "≥ " : ""}
-        {typed === "" ? "0" : typed} <span className="text-xl">ppm</span>
-      </output>
       {tooHigh ? <p className="text-danger">Above the {PPM_CEILING.toLocaleString("en-US")} ppm ceiling: enter the display's top value and press Over range.</p> : null}
       {props.recent.length ? (
         <div className="flex gap-2" aria-label="Recent values">
@@ -89,30 +89,23 @@ export function PpmKeypad(props: PpmKeypadProps) {
         </div>
       ) : null}
       <div className="grid grid-cols-4 gap-2">
-        {["7", "8", "9"].map((k) => <button key={k} type="button" className={KEY} onClick={() => press(k)}>{k}</button>)}
-        <button type="button" className={KEY} aria-label="Delete last digit" onClick={() => type(typed.slice(0, -1))}>⌫</button>
-        {["4", "5", "6"].map((k) => <button key={k} type="button" className={KEY} onClick={() => press(k)}>{k}</button>)}
-        <button
-          type="button"
-          aria-pressed={atLeast}
-          className={`${KEY} text-base ${atLeast ? "bg-accent text-on-accent" : ""}`}
-          onClick={() => {
-            setAtLeast(!atLeast);
-          }}
-        >
+        {["7", "8", "9"].map((k) => <button key={k} type="button" className={`${KEY} bg-surface`} onClick={() => press(k)}>{k}</button>)}
+        <button type="button" className={`${KEY} bg-surface`} aria-label="Delete last digit" onClick={() => type(typed.slice(0, -1))}>⌫</button>
+        {["4", "5", "6"].map((k) => <button key={k} type="button" className={`${KEY} bg-surface`} onClick={() => press(k)}>{k}</button>)}
+        <button type="button" aria-pressed={atLeast} className={`${KEY} text-base ${atLeast ? "bg-accent text-on-accent" : "bg-surface"}`} onClick={() => setAtLeast(!atLeast)}>
           Over range
         </button>
-        {["1", "2", "3"].map((k) => <button key={k} type="button" className={KEY} onClick={() => press(k)}>{k}</button>)}
-        <button type="button" className={`${KEY} text-base`} aria-expanded={noteOpen} onClick={() => setNoteOpen(!noteOpen)}>Note</button>
-        <button type="button" className={KEY} onClick={() => press(".")} aria-label="Decimal point">.</button>
-        <button type="button" className={KEY} onClick={() => press("0")}>0</button>
+        {["1", "2", "3"].map((k) => <button key={k} type="button" className={`${KEY} bg-surface`} onClick={() => press(k)}>{k}</button>)}
+        <button type="button" className={`${KEY} bg-surface text-base`} aria-expanded={noteOpen} onClick={() => setNoteOpen(!noteOpen)}>Note</button>
+        <button type="button" className={`${KEY} bg-surface`} onClick={() => press(".")} aria-label="Decimal point">.</button>
+        <button type="button" className={`${KEY} bg-surface`} onClick={() => press("0")}>0</button>
         <button type="button" className={`${KEY} col-span-2 bg-accent text-on-accent`} disabled={tooHigh} onClick={() => props.onSave(current())}>
           Save
         </button>
+        <button type="button" className={`${KEY} col-span-4 bg-ok text-xl text-on-accent`} onClick={() => props.onSave({ ...current(false, 0) })}>
+          0 ppm — save
+        </button>
       </div>
-      <button type="button" className="min-h-14 rounded-md text-xl font-bold edge bg-ok text-on-accent" onClick={() => props.onSave({ ...current(false, 0) })}>
-        0 ppm — save
-      </button>
       {noteOpen ? (
         <label className="block">
           <span className="font-bold">Note (optional)</span>

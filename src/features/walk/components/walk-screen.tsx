@@ -21,7 +21,7 @@ import { ReadingsDrawer } from "./readings-drawer";
 import { SubmitSummary } from "./submit-summary";
 import { SyncBanner } from "./sync-banner";
 
-const TOOL = "flex min-h-12 min-w-12 flex-1 items-center justify-center rounded-md px-2 font-bold edge bg-surface disabled:opacity-50";
+const TOOL = "flex min-h-12 min-w-12 flex-1 items-center justify-center rounded-md px-1 font-bold leading-tight edge disabled:opacity-50";
 
 /** The sweep capture screen: the plan fills the screen; one tap drops a reading there. */
 export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { storeId: string; sweepId: string; contrastToggle: ReactNode; leaveTo: string }) {
@@ -39,12 +39,16 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
   const [notice, setNotice] = useState<string | null>(null);
   const [dialog, setDialog] = useState<"list" | "summary" | "import" | null>(null);
   const [dismissedAlarm, setDismissedAlarm] = useState(-1);
+  const [showWarnings, setShowWarnings] = useState(false);
 
   // A tap whose keypad was open when the tab closed or crashed comes back on the keypad.
-  const leftover = walk.readings.findLast((r) => r.draft)?.id ?? null;
+  const restored = useRef(false);
   useEffect(() => {
-    if (!draftId && leftover) setDraftId(leftover);
-  }, [leftover, draftId]);
+    if (walk.loading || restored.current) return;
+    restored.current = true;
+    const leftover = walk.readings.findLast((r) => r.draft);
+    if (leftover) setDraftId(leftover.id);
+  }, [walk.loading, walk.readings]);
 
   const fixtures = planPack.data?.fixtures ?? [];
   const committed = useMemo(() => walk.readings.filter((r) => !r.draft || r.id !== draftId), [walk.readings, draftId]);
@@ -120,15 +124,28 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
     <div className="fixed inset-0 z-30 flex flex-col bg-paper" data-testid="walk-screen">
       <header className="flex flex-col gap-2 bg-surface p-2 edge border-x-0 border-t-0">
         <div className="flex items-center justify-between gap-2">
-          <Link to={leaveTo} className="inline-flex min-h-12 items-center rounded-md px-3 font-bold edge no-underline">← Leave</Link>
-          <p className="min-w-0 truncate text-center">
-            <span className="font-bold">{storePack.data?.store.name ?? "Sweep"}</span>
-            <span className="text-muted"> · {sweep.detectorName} · {committed.length} readings{sweep.status !== "in-progress" ? ` · ${sweep.status}` : sweep.submitPending ? " · submitting" : ""}</span>
+          <Link to={leaveTo} className="inline-flex min-h-12 shrink-0 items-center whitespace-nowrap rounded-md px-3 font-bold edge no-underline">← Leave</Link>
+          <p className="min-w-0 flex-1 text-center leading-tight">
+            <span className="block truncate font-bold">{storePack.data?.store.name ?? "Sweep"}</span>
+            <span className="block truncate text-sm text-muted" data-testid="walk-count">{sweep.detectorName} · {committed.length} readings{sweep.status !== "in-progress" ? ` · ${sweep.status}` : sweep.submitPending ? " · submitting" : ""}</span>
           </p>
           {contrastToggle}
         </div>
-        <SyncBanner status={sync} onShowRejected={() => setDialog("list")} />
-        {sweep.warnings.map((w) => <p key={w.code + (w.systemId ?? "")} className="rounded-md border-l-4 border-note bg-note-soft px-3 py-1 text-note edge">{w.message}</p>)}
+        <div className="flex gap-2">
+          <div className="min-w-0 flex-1">
+            <SyncBanner status={sync} onShowRejected={() => setDialog("list")} />
+          </div>
+          {sweep.warnings.length ? (
+            <button type="button" aria-expanded={showWarnings} onClick={() => setShowWarnings(!showWarnings)} className="min-h-12 shrink-0 rounded-md border-l-4 border-note bg-note-soft px-3 font-bold text-note edge">
+              {sweep.warnings.length} {sweep.warnings.length === 1 ? "warning" : "warnings"}
+            </button>
+          ) : null}
+        </div>
+        {showWarnings ? (
+          <ul className="max-h-48 overflow-auto">
+            {sweep.warnings.map((w) => <li key={w.code + (w.systemId ?? "")} className="mb-1 rounded-md border-l-4 border-note bg-note-soft px-3 py-1 text-note edge">{w.message}</li>)}
+          </ul>
+        ) : null}
         {leakMode ? <Alert tone="info">Tap the plan where the leak is.</Alert> : null}
         {notice ? <Alert tone="success"><span>{notice} </span><button type="button" className="min-h-12 underline" onClick={() => setNotice(null)}>Dismiss</button></Alert> : null}
         {showHint ? (
@@ -171,10 +188,10 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
         />
       ) : (
         <nav aria-label="Sweep tools" className="flex gap-2 bg-surface p-2 edge border-x-0 border-b-0">
-          <button type="button" className={TOOL} onClick={() => void undo()} disabled={readOnly || committed.length === 0}>Undo</button>
-          <button type="button" className={TOOL} onClick={() => setDialog("list")}>Readings</button>
-          <button type="button" className={TOOL} onClick={() => setLeakMode(!leakMode)} aria-pressed={leakMode} disabled={readOnly}>Leak here</button>
-          <button type="button" className={TOOL} onClick={() => setDialog("import")} disabled={readOnly}>Import log</button>
+          <button type="button" className={`${TOOL} bg-surface`} onClick={() => void undo()} disabled={readOnly || committed.length === 0}>Undo</button>
+          <button type="button" className={`${TOOL} bg-surface`} onClick={() => setDialog("list")}>Readings</button>
+          <button type="button" className={`${TOOL} bg-surface`} onClick={() => setLeakMode(!leakMode)} aria-pressed={leakMode} disabled={readOnly}>Leak here</button>
+          <button type="button" className={`${TOOL} bg-surface`} onClick={() => setDialog("import")} disabled={readOnly}>Import log</button>
           <button type="button" className={`${TOOL} bg-accent text-on-accent`} onClick={() => setDialog("summary")} disabled={sweep.status !== "in-progress" || sweep.submitPending}>Submit</button>
         </nav>
       )}
