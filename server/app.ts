@@ -19,6 +19,10 @@ import { detectorsRouter } from "./api/detectors/detectors.router";
 import { systemsRouter } from "./api/systems/systems.router";
 import { plansRouter } from "./api/plans/plans.router";
 import { sweepsRouter } from "./api/sweeps/sweeps.router";
+import { findingsRouter } from "./api/findings/findings.router";
+import { complianceRouter } from "./api/compliance/compliance.router";
+import { todayRouter } from "./api/compliance/today.router";
+import { exportsRouter } from "./api/exports/exports.router";
 
 const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
 
@@ -69,6 +73,10 @@ export function createApp(ctx: AppContext): Express {
   api.use(systemsRouter(ctx));
   api.use(plansRouter(ctx));
   api.use(sweepsRouter(ctx));
+  api.use(findingsRouter(ctx));
+  api.use(complianceRouter(ctx));
+  api.use(todayRouter(ctx));
+  api.use(exportsRouter(ctx));
   api.use(notFoundApi);
   app.use("/api", api);
 

@@ -6,3 +6,5 @@ export * from "./detectors";
 export * from "./systems";
 export * from "./plans";
 export * from "./sweeps";
+export * from "./findings";
+export * from "./compliance";
