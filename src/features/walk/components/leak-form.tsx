@@ -7,6 +7,7 @@ import { Button } from "../../../components/ui/button";
 import { Dialog } from "../../../components/ui/dialog";
 import { Select } from "../../../components/ui/select";
 import { createWalkFinding } from "../api/create-finding";
+import { syncNow } from "../hooks/sync-loop";
 
 export interface LeakSpot {
   x: number;
@@ -30,6 +31,8 @@ export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId
     setBusy(true);
     setError(null);
     try {
+      // A sweep started offline must reach the server before a finding can name it.
+      await syncNow();
       const f = await createWalkFinding(
         props.storeId,
         {
