@@ -18,6 +18,7 @@ import { storesRouter } from "./api/stores/stores.router";
 import { detectorsRouter } from "./api/detectors/detectors.router";
 import { systemsRouter } from "./api/systems/systems.router";
 import { plansRouter } from "./api/plans/plans.router";
+import { sweepsRouter } from "./api/sweeps/sweeps.router";
 import { findingsRouter } from "./api/findings/findings.router";
 import { complianceRouter } from "./api/compliance/compliance.router";
 import { todayRouter } from "./api/compliance/today.router";
@@ -71,6 +72,7 @@ export function createApp(ctx: AppContext): Express {
   api.use(detectorsRouter(ctx));
   api.use(systemsRouter(ctx));
   api.use(plansRouter(ctx));
+  api.use(sweepsRouter(ctx));
   api.use(findingsRouter(ctx));
   api.use(complianceRouter(ctx));
   api.use(todayRouter(ctx));

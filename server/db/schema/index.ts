@@ -5,5 +5,6 @@ export * from "./sessions";
 export * from "./detectors";
 export * from "./systems";
 export * from "./plans";
+export * from "./sweeps";
 export * from "./findings";
 export * from "./compliance";
