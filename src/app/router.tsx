@@ -29,6 +29,8 @@ export const routes: RouteObject[] = [
             ErrorBoundary: ErrorPage,
             children: [
               { index: true, lazy: () => import("./routes/home") },
+              { path: "/stores/:storeId", lazy: () => import("./routes/store") },
+              { path: "/stores/:storeId/plans/:planId/layout", lazy: () => import("./routes/layout-editor") },
               { path: "/team", lazy: () => import("./routes/team") },
               { path: "/settings", lazy: () => import("./routes/company-settings") },
               { path: "/profile", lazy: () => import("./routes/profile") },

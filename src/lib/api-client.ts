@@ -36,6 +36,7 @@ export function currentCsrfToken(): string | null {
 type Method = "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
 
 export interface RequestOptions {
+  /** JSON-encoded, unless it is FormData (a file upload), which the browser encodes itself. */
   body?: unknown;
   signal?: AbortSignal;
 }
@@ -109,7 +110,8 @@ async function refreshCsrfToken(): Promise<void> {
 
 async function send<T>(method: Method, path: string, schema: z.ZodType<T> | null, options: RequestOptions): Promise<T> {
   const headers: Record<string, string> = { Accept: "application/json" };
-  if (options.body !== undefined) headers["Content-Type"] = "application/json";
+  const isForm = typeof FormData !== "undefined" && options.body instanceof FormData;
+  if (options.body !== undefined && !isForm) headers["Content-Type"] = "application/json";
   if (method !== "GET" && csrfToken) headers["X-CSRF-Token"] = csrfToken;
 
   let response: Response;
@@ -118,7 +120,7 @@ async function send<T>(method: Method, path: string, schema: z.ZodType<T> | null
       method,
       headers,
       credentials: "same-origin",
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body: options.body === undefined ? undefined : isForm ? (options.body as FormData) : JSON.stringify(options.body),
       signal: options.signal,
     });
   } catch (cause) {
@@ -143,4 +145,6 @@ export const api = {
   put: <T>(path: string, schema: z.ZodType<T> | null, body: unknown) => apiRequest("PUT", path, schema, { body }),
   patch: <T>(path: string, schema: z.ZodType<T> | null, body: unknown) => apiRequest("PATCH", path, schema, { body }),
   delete: (path: string) => apiRequest<void>("DELETE", path, null),
+  /** A multipart upload (multer on the server reads the named file field). */
+  upload: <T>(path: string, schema: z.ZodType<T>, form: FormData) => apiRequest("POST", path, schema, { body: form }),
 };

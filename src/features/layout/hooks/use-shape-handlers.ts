@@ -1,0 +1,104 @@
+import { useMemo, useRef, type RefObject } from "react";
+import type Konva from "konva";
+import type { SceneAction } from "../model/actions";
+import { move, select, setVertices } from "../model/actions";
+import { bakeAffine, type Affine } from "../model/bake-transform";
+import { unionBounds } from "../model/fixture-geometry";
+import { sceneFixtures, type Scene } from "../model/scene";
+import { snapMove, type SnapGuide } from "../model/snapping";
+import type { ShapeHandlers } from "../components/editor/fixture-shape";
+
+export interface SnapSettings {
+  gridM: number | null;
+  snapToFixtures: boolean;
+  toleranceM: number;
+}
+
+interface Options {
+  scene: RefObject<Scene>;
+  snap: RefObject<SnapSettings>;
+  /** True while the select tool is in hand (pressing a fixture selects it). */
+  selecting: RefObject<boolean>;
+  apply: (actions: readonly SceneAction[], gesture?: string | null) => void;
+  endGesture: () => void;
+  showGuides: (guides: readonly SnapGuide[]) => void;
+  onError: (message: string) => void;
+}
+
+/**
+ * The Konva side of moving and transforming: a drag moves the Konva nodes only (the selection
+ * follows the dragged node imperatively, snapped); on drag end ONE move action is recorded and
+ * the nodes go back to the origin, to be redrawn from the scene. A transform is baked into the
+ * vertices on transform end (react-konva's advice: state holds plain objects, nodes are views).
+ */
+export function useShapeHandlers(o: Options): { handlers: ShapeHandlers; nodes: RefObject<Map<string, Konva.Group>> } {
+  const nodes = useRef(new Map<string, Konva.Group>());
+  const drag = useRef<{ ids: string[] } | null>(null);
+  const transformGesture = useRef(0);
+  const opts = useRef(o);
+  opts.current = o;
+
+  const handlers = useMemo<ShapeHandlers>(() => {
+    const snapped = (ids: readonly string[], dx: number, dy: number) => {
+      const { scene, snap } = opts.current;
+      const s = scene.current;
+      const box = unionBounds(ids.map((id) => s.fixtures[id]).filter((f) => f !== undefined));
+      if (!box) return { dx, dy, guides: [] };
+      const targets = snap.current.snapToFixtures ? sceneFixtures(s).filter((f) => !ids.includes(f.id)) : [];
+      return snapMove(box, dx, dy, { gridM: snap.current.gridM, toleranceM: snap.current.toleranceM, targets });
+    };
+    return {
+      register: (id, node) => {
+        if (node) nodes.current.set(id, node);
+        else nodes.current.delete(id);
+      },
+      onPress: (id, e) => {
+        if (!opts.current.selecting.current) return;
+        e.cancelBubble = true; // not a press on empty plan: no marquee
+        const s = opts.current.scene.current;
+        if (e.evt.shiftKey) opts.current.apply([select([id], "toggle")]);
+        else if (!s.selection.includes(id)) opts.current.apply([select([id])]);
+      },
+      onDragStart: (id) => {
+        const s = opts.current.scene.current;
+        drag.current = { ids: s.selection.includes(id) ? [...s.selection] : [id] };
+      },
+      onDragMove: (id, e) => {
+        const d = drag.current;
+        if (!d) return;
+        const node = e.target;
+        const r = snapped(d.ids, node.x(), node.y());
+        for (const other of d.ids) nodes.current.get(other)?.position({ x: r.dx, y: r.dy });
+        if (!d.ids.includes(id)) node.position({ x: r.dx, y: r.dy });
+        opts.current.showGuides(r.guides);
+      },
+      onDragEnd: (id, e) => {
+        const d = drag.current ?? { ids: [id] };
+        drag.current = null;
+        const dx = e.target.x();
+        const dy = e.target.y();
+        for (const other of d.ids) nodes.current.get(other)?.position({ x: 0, y: 0 });
+        e.target.position({ x: 0, y: 0 });
+        opts.current.showGuides([]);
+        if (dx !== 0 || dy !== 0) opts.current.apply([move(d.ids, dx, dy)]);
+      },
+      onTransformEnd: (id, node) => {
+        const f = opts.current.scene.current.fixtures[id];
+        const m = node.getTransform().getMatrix() as unknown as Affine;
+        node.setAttrs({ x: 0, y: 0, rotation: 0, scaleX: 1, scaleY: 1, skewX: 0, skewY: 0 });
+        if (!f || "point" in f) return;
+        try {
+          // Every node of one transform is one undo step: they share a gesture key.
+          opts.current.apply([setVertices(id, bakeAffine(f.polygon, m))], `transform-${transformGesture.current}`);
+        } catch (err) {
+          opts.current.onError(err instanceof RangeError ? err.message : "The shape could not be changed.");
+        }
+        window.setTimeout(() => {
+          transformGesture.current += 1;
+          opts.current.endGesture();
+        }, 0);
+      },
+    };
+  }, []);
+  return { handlers, nodes };
+}
