@@ -26,6 +26,9 @@ function sameContent(a: Scene | null, b: Scene): boolean {
  */
 export function useAutosave(planId: string, scene: Scene, initialRevision: number, enabled: boolean) {
   const save = useSaveFixtures();
+  // mutate is stable; the result object around it is new on every render.
+  const mutate = useRef(save.mutate);
+  mutate.current = save.mutate;
   const revision = useRef(initialRevision);
   const saved = useRef<Scene | null>(scene);
   const inFlight = useRef(false);
@@ -43,7 +46,7 @@ export function useAutosave(planId: string, scene: Scene, initialRevision: numbe
     }
     inFlight.current = true;
     setState({ status: "saving" });
-    save.mutate(
+    mutate.current(
       { planId, layoutRevision: revision.current, fixtures: sceneFixtures(target) },
       {
         onSuccess: (r) => {
@@ -66,7 +69,7 @@ export function useAutosave(planId: string, scene: Scene, initialRevision: numbe
         },
       },
     );
-  }, [planId, save]);
+  }, [planId]);
 
   const blocked = state.status === "conflict";
   useEffect(() => {
@@ -74,7 +77,7 @@ export function useAutosave(planId: string, scene: Scene, initialRevision: numbe
     setState((s) => (s.status === "saving" ? s : { status: "unsaved" }));
     const t = window.setTimeout(run, AUTOSAVE_DELAY_MS);
     return () => window.clearTimeout(t);
-  }, [scene.fixtures, scene.order, enabled, blocked, run]); // eslint-disable-line react-hooks/exhaustive-deps
+  }, [scene.fixtures, scene.order, enabled, blocked, run]);
 
   // Leaving with edits not yet saved asks first (the browser shows its own wording).
   useEffect(() => {

@@ -21,8 +21,8 @@ describe("drawing geometry", () => {
     const ticks = doorTicks(rect(0, 0, 3, 1), 3);
     expect(ticks).toHaveLength(2);
     expect(closeTo([ticks[0][0], ticks[1][0]], [[1, 0], [2, 0]])).toBe(true);
-    // Each tick runs half way to the centroid (1.5, 0.5).
-    expect(closeTo([ticks[0][1]], [[1.25, 0.25]])).toBe(true);
+    // Each tick runs square into the case, half the 0.5 m from the edge to the centroid.
+    expect(closeTo([ticks[0][1], ticks[1][1]], [[1, 0.25], [2, 0.25]])).toBe(true);
     expect(doorTicks(rect(0, 0, 3, 1), 1)).toEqual([]);
   });
 });

@@ -43,8 +43,8 @@ export function doorGap(polygon: readonly Vertex[], door: RoomDoor): [Vertex, Ve
 
 /**
  * Short ticks across the longest edge of a glass-door case, dividing it into `doorCount`
- * equal doors (the count is the lead tech's, the ticks only show it). Each tick runs from the
- * edge a quarter of the way towards the centroid.
+ * equal doors (the count is the lead tech's, the ticks only show it). Each tick runs square to
+ * the edge, into the case, a quarter of the way to the centroid's distance from the edge.
  */
 export function doorTicks(polygon: readonly Vertex[], doorCount: number): [Vertex, Vertex][] {
   if (polygon.length < 2 || !(Number.isInteger(doorCount) && doorCount >= 2)) return [];
@@ -59,10 +59,18 @@ export function doorTicks(polygon: readonly Vertex[], doorCount: number): [Verte
   const a = polygon[best];
   const b = polygon[(best + 1) % polygon.length];
   const c = polygonCentroid(polygon);
+  const ux = (b[0] - a[0]) / bestLength;
+  const uy = (b[1] - a[1]) / bestLength;
+  // The unit normal, turned to face the centroid; its distance from the edge sets the tick length.
+  let nx = -uy;
+  let ny = ux;
+  let depth = (c[0] - a[0]) * nx + (c[1] - a[1]) * ny;
+  if (depth < 0) [nx, ny, depth] = [-nx, -ny, -depth];
+  const len = depth * 0.5;
   const ticks: [Vertex, Vertex][] = [];
   for (let k = 1; k < doorCount; k++) {
     const p = lerp(a, b, k / doorCount);
-    ticks.push([p, [p[0] + (c[0] - p[0]) * 0.5, p[1] + (c[1] - p[1]) * 0.5]]);
+    ticks.push([p, [p[0] + nx * len, p[1] + ny * len]]);
   }
   return ticks;
 }

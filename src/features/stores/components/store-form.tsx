@@ -30,8 +30,8 @@ export function StoreForm({ store, onDone, onCancel }: { store?: Store; onDone: 
       return;
     }
     setClientErrors({});
-    if (store) update.mutate({ id: store.id, input: values }, { onSuccess: onDone });
-    else create.mutate(createStoreInput.parse(values), { onSuccess: onDone });
+    if (store) update.mutate({ id: store.id, input: values }, { onSuccess: (saved) => onDone(saved) });
+    else create.mutate(createStoreInput.parse(values), { onSuccess: (saved) => onDone(saved) });
   }
 
   const formError = formErrorMessage(mutation.error);

@@ -45,8 +45,8 @@ export function SystemForm({ storeId, system, massUnit, onDone, onCancel }: { st
       return;
     }
     setClientErrors({});
-    if (system) update.mutate({ id: system.id, input: parsed.data }, { onSuccess: onDone });
-    else create.mutate({ storeId, input: parsed.data }, { onSuccess: onDone });
+    if (system) update.mutate({ id: system.id, input: parsed.data }, { onSuccess: () => onDone() });
+    else create.mutate({ storeId, input: parsed.data }, { onSuccess: () => onDone() });
   }
 
   const formError = formErrorMessage(mutation.error);

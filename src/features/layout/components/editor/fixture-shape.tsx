@@ -7,6 +7,11 @@ import { fixtureCentroid } from "../../model/fixture-geometry";
 import { doorGap, doorTicks, wallWithDoorGap } from "../../model/fixture-drawing";
 import { lookOf, PATTERN_SCALE, patternTile, POINT_COLOURS, SELECTION_STROKE } from "./fixture-look";
 
+/** Average glyph width of Atkinson Hyperlegible in em, for guessing whether a label fits. */
+const LABEL_CHAR_EM = 0.56;
+/** Point labels crowd a zoomed-out plan: they show from about 50 screen px per metre, or when selected. */
+const POINT_LABEL_UNIT = 0.021;
+
 /** Callbacks shared by every shape; the editor passes one stable object so memo holds. */
 export interface ShapeHandlers {
   register: (id: string, node: Konva.Group | null) => void;
@@ -49,7 +54,7 @@ export const FixtureShape = memo(function FixtureShape({ fixture: f, selected, d
         <Group x={f.point.x} y={f.point.y}>
           {selected ? <Circle radius={r * 1.7} stroke={SELECTION_STROKE} strokeWidth={3} strokeScaleEnabled={false} /> : null}
           <PointGlyph kind={f.kind} r={r} colour={colour} />
-          {f.label ? <Text x={r * 1.3} y={-fontSize / 2} text={f.label} fontSize={fontSize} fontFamily="Atkinson Hyperlegible" fill="#111" listening={false} /> : null}
+          {f.label && (selected || unit <= POINT_LABEL_UNIT) ? <Text x={r * 1.3} y={-fontSize / 2} text={f.label} fontSize={fontSize} fontFamily="Atkinson Hyperlegible" fill="#111" listening={false} /> : null}
         </Group>
       </Group>
     );
@@ -62,7 +67,9 @@ export const FixtureShape = memo(function FixtureShape({ fixture: f, selected, d
   const wall = "door" in f && look.wall ? wallWithDoorGap(f.polygon, f.door) : null;
   const gap = "door" in f && f.door ? doorGap(f.polygon, f.door) : null;
   const ticks = f.kind === "door-case" ? doorTicks(f.polygon, f.doorCount) : [];
-  const showLabel = f.label !== "" && b.maxX - b.minX > fontSize * 1.5;
+  // A label is drawn only where it fits inside the outline; the list view always has it.
+  const labelWidth = f.label.length * fontSize * LABEL_CHAR_EM;
+  const showLabel = f.label !== "" && (labelWidth <= b.maxX - b.minX || selected) && fontSize <= b.maxY - b.minY;
   return (
     <Group {...common} name="fixture">
       <Line
@@ -91,7 +98,7 @@ export const FixtureShape = memo(function FixtureShape({ fixture: f, selected, d
         <Text
           x={cx}
           y={cy}
-          offsetX={(f.label.length * fontSize * 0.55) / 2}
+          offsetX={labelWidth / 2}
           offsetY={fontSize / 2}
           text={f.label}
           fontSize={fontSize}

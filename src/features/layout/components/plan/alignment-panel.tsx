@@ -46,7 +46,7 @@ export function AlignmentPanel({ plan, onDone }: { plan: Plan; onDone: (plan: Pl
           layoutRevision: plan.layoutRevision,
         },
       },
-      { onSuccess: onDone },
+      { onSuccess: (saved) => onDone(saved) },
     );
   }
 

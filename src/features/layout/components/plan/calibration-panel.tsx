@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from "react";
+import { useEffect, useRef, useState, type FormEvent } from "react";
 import type { Plan } from "../../../../../server/contracts/plans";
 import { formatLength, type LengthPreference } from "../../../../../server/domain/units/format-units";
 import { Alert } from "../../../../components/ui/alert";
@@ -18,13 +18,17 @@ const OUTCOME_TEXT = {
 } as const;
 
 /** Draw a line between two points of known distance on the drawing and type that distance. */
-export function CalibrationPanel({ plan, preference, onDone }: { plan: Plan; preference: LengthPreference; onDone: (plan: Plan) => void }) {
+export function CalibrationPanel({ plan, preference, onDone }: { plan: Plan; preference: LengthPreference; onDone: (plan: Plan, notice: string) => void }) {
   const image = plan.image!;
   const [points, setPoints] = useState<ImagePoint[]>(() => (plan.calibration ? [plan.calibration.a as ImagePoint, plan.calibration.b as ImagePoint] : []));
   const [text, setText] = useState(() => (plan.calibration ? `${plan.calibration.length.value}${plan.calibration.length.unit === "ft" ? " ft" : " m"}` : ""));
   const [lengthError, setLengthError] = useState<string | undefined>();
   const calibrate = useCalibratePlan();
-  const [outcome, setOutcome] = useState<keyof typeof OUTCOME_TEXT | null>(null);
+  const form = useRef<HTMLFormElement>(null);
+  // The panel opens below the plan card (often after an upload): bring it into view.
+  useEffect(() => {
+    form.current?.scrollIntoView({ block: "start", behavior: "smooth" });
+  }, []);
 
   const entry = readLengthEntry(text, preference);
   let preview: string | null = null;
@@ -48,10 +52,7 @@ export function CalibrationPanel({ plan, preference, onDone }: { plan: Plan; pre
     calibrate.mutate(
       { planId: plan.id, input: { a: points[0], b: points[1], length: entry.length, layoutRevision: plan.layoutRevision } },
       {
-        onSuccess: (r) => {
-          setOutcome(r.outcome);
-          onDone(r.plan);
-        },
+        onSuccess: (r) => onDone(r.plan, OUTCOME_TEXT[r.outcome]),
       },
     );
   }
@@ -60,12 +61,11 @@ export function CalibrationPanel({ plan, preference, onDone }: { plan: Plan; pre
   const pointError = fields.a ?? fields.b;
   const formError = formErrorMessage(calibrate.error);
   return (
-    <form onSubmit={submit} noValidate className="space-y-3 rounded-md bg-surface p-4 edge">
+    <form ref={form} onSubmit={submit} noValidate className="space-y-3 rounded-md bg-surface p-4 edge">
       <h3 className="text-lg font-bold">Set the scale</h3>
       <p className="max-w-prose">
         Click both ends of something whose length you know, as long as possible — a wall, a row of cases — then type its real length. Feet and inches are fine: <code>42 ft 6 in</code>.
       </p>
-      {outcome ? <Alert tone="success">{OUTCOME_TEXT[outcome]}</Alert> : null}
       {formError ? <Alert tone="error">{formError}</Alert> : null}
       <ImagePointPicker imageUrl={image.displayUrl} widthPx={image.widthPx} heightPx={image.heightPx} points={points} onChange={setPoints} names={["A", "B"]} label="Calibration line on the drawing" />
       {pointError ? <p className="font-bold text-danger">{fieldMessage("The line's end", pointError)}</p> : null}

@@ -22,9 +22,11 @@ type Panel = "upload" | "calibrate" | "align" | null;
 export function PlanSection({ storeId, canEdit, preference }: { storeId: string; canEdit: boolean; preference: LengthPreference }) {
   const plans = usePlans(storeId);
   const [panel, setPanel] = useState<Panel>(null);
+  const [notice, setNotice] = useState<string | null>(null);
   const current = plans.data?.[0] ?? null;
 
-  function after(plan: Plan) {
+  function after(plan: Plan, message: string | null = null) {
+    setNotice(message);
     // A fresh upload needs its scale next; a fresh version then needs its match.
     if (plan.source === "image" && !plan.calibrated) setPanel("calibrate");
     else if (plan.previousPlanId && !plan.alignmentMatched && plan.image) setPanel("align");
@@ -47,6 +49,7 @@ export function PlanSection({ storeId, canEdit, preference }: { storeId: string;
       ) : null}
       {current ? (
         <>
+          {notice ? <Alert tone="success">{notice}</Alert> : null}
           <PlanCard plan={current} preference={preference} />
           <div className="flex flex-wrap gap-2">
             {current.calibrated ? (
@@ -71,8 +74,8 @@ export function PlanSection({ storeId, canEdit, preference }: { storeId: string;
             ) : null}
           </div>
           {panel === "calibrate" && current.image ? <CalibrationPanel key={current.id} plan={current} preference={preference} onDone={after} /> : null}
-          {panel === "align" ? <AlignmentPanel key={current.id} plan={current} onDone={after} /> : null}
-          {panel === "upload" ? <PlanUploadForm storeId={storeId} hasPlan preference={preference} onDone={after} /> : null}
+          {panel === "align" ? <AlignmentPanel key={current.id} plan={current} onDone={(p) => after(p, "The new version is matched to the previous one.")} /> : null}
+          {panel === "upload" ? <PlanUploadForm storeId={storeId} hasPlan preference={preference} onDone={(p) => after(p, `Version ${p.version} is uploaded; the fixtures were copied onto it.`)} /> : null}
           {plans.data && plans.data.length > 1 ? <VersionList plans={plans.data} /> : null}
         </>
       ) : null}

@@ -24,7 +24,7 @@ export function PlanUploadForm({ storeId, hasPlan, preference, onDone }: { store
       setTypeError("Choose a PNG or JPEG file first.");
       return;
     }
-    upload.mutate({ storeId, file }, { onSuccess: onDone });
+    upload.mutate({ storeId, file }, { onSuccess: (saved) => onDone(saved) });
   }
 
   function pick(f: File | null) {
@@ -94,7 +94,7 @@ function BlankPlanForm({ storeId, preference, onDone }: { storeId: string; prefe
     const input = same
       ? { width: w.length.value, depth: d.length.value, unit: w.length.unit }
       : { width: toMetres(w.length.value, w.length.unit), depth: toMetres(d.length.value, d.length.unit), unit: "m" as const };
-    create.mutate({ storeId, input }, { onSuccess: onDone });
+    create.mutate({ storeId, input }, { onSuccess: (saved) => onDone(saved) });
   }
 
   const unitWord = preference === "ft-in" ? "feet" : "metres";
