@@ -77,6 +77,21 @@ describe("validateFixtureList", () => {
     expect(errors).toContainEqual({ path: "fixtures.5.id", message: "must be a UUID" });
   });
 
+  it("explains missing and wrong-shaped fields, fixture by fixture", () => {
+    const list: unknown[] = valid();
+    (list[0] as { polygon: unknown }).polygon = rect(1, 1, 30, 1); // geometry error on fixture 0
+    delete (list[4] as { point?: unknown }).point;
+    delete (list[2] as { door?: unknown }).door;
+    list[5] = "column";
+    expect(errorsOf(list)).toEqual([
+      { path: "fixtures.0.polygon.1", message: "vertex (31, 1) lies outside the plan (0–20 m × 0–10 m)" },
+      { path: "fixtures.0.polygon.2", message: "vertex (31, 2) lies outside the plan (0–20 m × 0–10 m)" },
+      { path: "fixtures.2.door", message: "must be {edge, offset, width} or null" },
+      { path: "fixtures.4.point", message: "must be an {x, y} position in metres" },
+      { path: "fixtures.5", message: "must be a fixture object" },
+    ]);
+  });
+
   it("refuses infinity (JSON cannot carry it, but a client object can)", () => {
     const list = valid();
     (list[4] as { point: unknown }).point = { x: Infinity, y: 1 };

@@ -25,7 +25,7 @@ export const BOUNDS_TOLERANCE_M = 1e-6;
 
 const metres = z.number({ error: "must be a finite number of metres" });
 
-export const PlanPointSchema = z.object({ x: metres, y: metres });
+export const PlanPointSchema = z.object({ x: metres, y: metres }, { error: "must be an {x, y} position in metres" });
 export const VertexSchema = z.tuple([metres, metres], { error: "must be an [x, y] pair of metres" });
 export const PolygonSchema = z
   .array(VertexSchema, { error: "must be a list of [x, y] vertices" })
@@ -33,11 +33,14 @@ export const PolygonSchema = z
   .max(POLYGON_MAX_VERTICES, { error: `has more than ${POLYGON_MAX_VERTICES} vertices` });
 
 /** A room's door: a gap in one edge (from vertex `edge` to the next), `offset` m from its start. */
-export const RoomDoorSchema = z.object({
-  edge: z.number().int({ error: "must be a whole edge index" }).min(0, { error: "must be 0 or more" }),
-  offset: metres.min(0, { error: "must be 0 m or more along the edge" }),
-  width: metres.gt(0, { error: "must be more than 0 m" }),
-});
+export const RoomDoorSchema = z.object(
+  {
+    edge: z.number().int({ error: "must be a whole edge index" }).min(0, { error: "must be 0 or more" }),
+    offset: metres.min(0, { error: "must be 0 m or more along the edge" }),
+    width: metres.gt(0, { error: "must be more than 0 m" }),
+  },
+  { error: "must be {edge, offset, width} or null" },
+);
 
 const base = {
   id: z.uuid({ error: "must be a UUID" }),
@@ -82,7 +85,12 @@ export const PointFixtureSchema = z.object({
 export const FixtureSchema = z.discriminatedUnion(
   "kind",
   [PlainFixtureSchema, DoorCaseFixtureSchema, RoomFixtureSchema, BenignZoneFixtureSchema, PointFixtureSchema],
-  { error: `must be one of: ${FIXTURE_KINDS.join(", ")}` },
+  {
+    error: (issue) =>
+      typeof issue.input === "object" && issue.input !== null && !Array.isArray(issue.input)
+        ? `must be one of: ${FIXTURE_KINDS.join(", ")}`
+        : "must be a fixture object",
+  },
 );
 
 export type Vertex = z.infer<typeof VertexSchema>;
@@ -177,12 +185,16 @@ export function validateFixtureList(input: unknown, bounds: PlanBounds, root = "
   const b = PlanBoundsSchema.safeParse(bounds);
   if (!b.success) return { ok: false, errors: toFieldErrors(b.error, "plan") };
   const r = fixtureListSchema(b.data).safeParse(input);
-  return r.success ? { ok: true, fixtures: r.data } : { ok: false, errors: toFieldErrors(r.error, root) };
+  if (r.success) return { ok: true, fixtures: r.data };
+  // Geometry issues are added after the shape issues; list them fixture by fixture instead.
+  const byFixture = [...r.error.issues].sort((a, b) => Number(a.path[0] ?? -1) - Number(b.path[0] ?? -1));
+  return { ok: false, errors: byFixture.map((issue) => toFieldError(issue, root)) };
 }
 
 export function toFieldErrors(error: z.ZodError, root: string): FieldError[] {
-  return error.issues.map((issue) => ({
-    path: [root, ...issue.path.map(String)].join("."),
-    message: issue.message,
-  }));
+  return error.issues.map((issue) => toFieldError(issue, root));
+}
+
+function toFieldError(issue: z.core.$ZodIssue, root: string): FieldError {
+  return { path: [root, ...issue.path.map(String)].join("."), message: issue.message };
 }

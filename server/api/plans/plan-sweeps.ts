@@ -1,4 +1,4 @@
-import type { Db } from "../../db/client";
+import type { DbOrTx } from "./plan-access";
 
 /**
  * Whether any sweep was drawn on this plan version. The one place that decides whether a
@@ -6,6 +6,6 @@ import type { Db } from "../../db/client";
  * never move). There is no sweeps table yet: it arrives with issue 4 (sweeps in the field),
  * which must replace this body with a real query. Until then no plan can have sweeps.
  */
-export async function planHasSweeps(_db: Db, _planId: string): Promise<boolean> {
+export async function planHasSweeps(_db: DbOrTx, _planId: string): Promise<boolean> {
   return false;
 }

@@ -1,7 +1,7 @@
 import { useEffect, useRef, type RefObject } from "react";
-import { move, select } from "../model/actions";
+import { move, rotate, select } from "../model/actions";
 import type { Scene } from "../model/scene";
-import { commandFor } from "../model/shortcuts";
+import { commandForKey } from "../model/shortcuts";
 import type { EditorHistory } from "./use-editor-history";
 
 interface Options {
@@ -20,8 +20,23 @@ interface Options {
   onEscape: () => void;
 }
 
-/** Nudges step by the snap grid, or 10 cm without one (Shift: ten steps). */
-const DEFAULT_NUDGE_M = 0.1;
+/** Keys of the view and the tools, beside the model's editing shortcuts (shortcuts.ts). */
+export const VIEW_KEYS: Readonly<Record<string, { tool?: "select" | "pan" | "rectangle" | "polygon"; zoom?: "in" | "out" | "fit" }>> = {
+  v: { tool: "select" },
+  h: { tool: "pan" },
+  b: { tool: "rectangle" },
+  p: { tool: "polygon" },
+  "+": { zoom: "in" },
+  "=": { zoom: "in" },
+  "-": { zoom: "out" },
+  "0": { zoom: "fit" },
+};
+
+export const VIEW_KEY_HELP: readonly { keys: string; does: string }[] = [
+  { keys: "V, H, B, P", does: "Select, pan, rectangle and outline tools" },
+  { keys: "Space + drag, middle button", does: "Pan the plan" },
+  { keys: "Wheel, pinch, + − 0", does: "Zoom in, out, fit the plan" },
+];
 
 function typing(target: EventTarget | null): boolean {
   const el = target as HTMLElement | null;
@@ -47,12 +62,18 @@ export function useEditorShortcuts(o: Options) {
         e.preventDefault();
         return;
       }
-      const c = commandFor({ key: e.key, ctrl: e.ctrlKey, meta: e.metaKey, shift: e.shiftKey, alt: e.altKey });
-      if (!c) return;
-      const editing = ["undo", "redo", "delete", "duplicate", "nudge"].includes(c.type);
-      if (editing && !canEdit) return;
+      const c = commandForKey({ key: e.key, ctrl: e.ctrlKey, meta: e.metaKey, shift: e.shiftKey, alt: e.altKey });
+      if (!c) {
+        const view = !e.ctrlKey && !e.metaKey && !e.altKey && !e.shiftKey ? VIEW_KEYS[e.key.toLowerCase()] : undefined;
+        if (!view) return;
+        e.preventDefault();
+        if (view.tool) opts.current.onTool(view.tool);
+        if (view.zoom) opts.current.onZoom(view.zoom);
+        return;
+      }
+      if (c.command !== "select-all" && c.command !== "clear-selection" && !canEdit) return;
       e.preventDefault();
-      switch (c.type) {
+      switch (c.command) {
         case "undo":
           return editor.undo();
         case "redo":
@@ -63,18 +84,19 @@ export function useEditorShortcuts(o: Options) {
           return opts.current.onDuplicate();
         case "select-all":
           return editor.apply([select(scene.order)]);
-        case "escape":
+        case "clear-selection":
           return opts.current.onEscape();
         case "nudge": {
           if (scene.selection.length === 0) return;
-          const step = (gridM ?? DEFAULT_NUDGE_M) * (c.large ? 10 : 1);
-          // Repeated arrow presses coalesce into one undo step (history.ts gestures).
+          // With a snap grid, one press is one grid step (Shift: ten); repeated presses coalesce
+          // into one undo step (history.ts gestures).
+          const big = Math.abs(c.dx) + Math.abs(c.dy) > 0.1;
+          const step = gridM === null ? 1 : (gridM * (big ? 10 : 1)) / (Math.abs(c.dx) + Math.abs(c.dy));
           return editor.apply([move(scene.selection, c.dx * step, c.dy * step)], "nudge");
         }
-        case "tool":
-          return opts.current.onTool(c.tool);
-        case "zoom":
-          return opts.current.onZoom(c.direction);
+        case "rotate":
+          if (scene.selection.length === 0) return;
+          return editor.apply([rotate(scene.selection, (c.degrees * Math.PI) / 180, "each")]);
       }
     };
     const up = (e: KeyboardEvent) => {

@@ -2,7 +2,7 @@ import { useMemo, useRef, type RefObject } from "react";
 import type Konva from "konva";
 import type { SceneAction } from "../model/actions";
 import { move, select, setVertices } from "../model/actions";
-import { bakeAffine, type Affine } from "../model/bake-transform";
+import { bakeNodeTransform } from "../model/node-transform";
 import { unionBounds } from "../model/fixture-geometry";
 import { sceneFixtures, type Scene } from "../model/scene";
 import { snapMove, type SnapGuide } from "../model/snapping";
@@ -84,12 +84,12 @@ export function useShapeHandlers(o: Options): { handlers: ShapeHandlers; nodes: 
       },
       onTransformEnd: (id, node) => {
         const f = opts.current.scene.current.fixtures[id];
-        const m = node.getTransform().getMatrix() as unknown as Affine;
+        const t = { x: node.x(), y: node.y(), scaleX: node.scaleX(), scaleY: node.scaleY(), rotation: node.rotation() };
         node.setAttrs({ x: 0, y: 0, rotation: 0, scaleX: 1, scaleY: 1, skewX: 0, skewY: 0 });
         if (!f || "point" in f) return;
         try {
           // Every node of one transform is one undo step: they share a gesture key.
-          opts.current.apply([setVertices(id, bakeAffine(f.polygon, m))], `transform-${transformGesture.current}`);
+          opts.current.apply([setVertices(id, bakeNodeTransform(f.polygon, t))], `transform-${transformGesture.current}`);
         } catch (err) {
           opts.current.onError(err instanceof RangeError ? err.message : "The shape could not be changed.");
         }

@@ -108,6 +108,8 @@ describe("actions", () => {
     expect(applyAction(s, act.move(["nope"], 1, 1))).toBe(s);
     expect(applyAction(s, act.rotate([uuid(1)], 0))).toBe(s);
     expect(applyAction(s, act.select([]))).toBe(s);
+    expect(applyAction(s, act.setProperties([uuid(1)], { hasFans: true, doorCount: 3 }))).toBe(s); // already has fans; no door count
+    expect(applyAction(s, act.label(uuid(1), "Dairy 1"))).toBe(s);
   });
 
   it("refuses bad arguments with a named reason", () => {

@@ -10,7 +10,7 @@ import { LABEL_MAX, type Fixture, type RoomDoor, type Vertex } from "../../../..
 import type { FixtureKind } from "../../../../server/contracts/fixture-kinds";
 import { canChangeKind, changeKind } from "./change-kind";
 import { arrayCopies, copyFixture } from "./copies";
-import { fitDoor, fixtureCentroid, resizeFixture, rotateFixture, translateFixture, unionBounds } from "./fixture-geometry";
+import { fitDoor, fixtureCentroid, relocateDoor, resizeFixture, rotateFixture, translateFixture, unionBounds } from "./fixture-geometry";
 import type { Scene } from "./scene";
 
 /** Properties the side panel edits; each applies only to fixtures whose kind has it. */
@@ -72,7 +72,8 @@ export function setVertices(id: string, polygon: readonly Vertex[]): SceneAction
 
 export function duplicate(ids: readonly string[], dx: number, dy: number, newId: () => string): SceneAction {
   finite("duplicate offset", dx, dy);
-  return { type: "duplicate", ids, dx, dy, newIds: ids.map(() => newId()) };
+  const unique = [...new Set(ids)];
+  return { type: "duplicate", ids: unique, dx, dy, newIds: unique.map(() => newId()) };
 }
 
 /**
@@ -84,8 +85,9 @@ export function array(ids: readonly string[], count: number, spacing: number, di
   if (!(Number.isFinite(spacing) && spacing > 0)) throw new RangeError("array spacing must be more than 0 m");
   finite("array direction", direction[0], direction[1]);
   if (direction[0] === 0 && direction[1] === 0) throw new RangeError("array direction must not be the zero vector");
-  const newIds = Array.from({ length: (count - 1) * ids.length }, () => newId());
-  return { type: "array", ids, count, spacing, direction, newIds };
+  const unique = [...new Set(ids)];
+  const newIds = Array.from({ length: (count - 1) * unique.length }, () => newId());
+  return { type: "array", ids: unique, count, spacing, direction, newIds };
 }
 
 export const remove = (ids: readonly string[]): SceneAction => ({ type: "delete", ids });
@@ -112,7 +114,8 @@ export function isSelectionOnly(action: SceneAction): boolean {
   return action.type === "select";
 }
 
-function replaceFixtures(scene: Scene, changed: readonly Fixture[]): Scene {
+function replaceFixtures(scene: Scene, candidates: readonly Fixture[]): Scene {
+  const changed = candidates.filter((f) => f !== scene.fixtures[f.id]);
   if (changed.length === 0) return scene;
   const fixtures = { ...scene.fixtures };
   for (const f of changed) fixtures[f.id] = f;
@@ -141,11 +144,13 @@ function clampMove(scene: Scene, moved: readonly Fixture[], dx: number, dy: numb
 
 function applyProps(f: Fixture, props: FixtureProps): Fixture {
   const next: Record<string, unknown> = { ...f };
+  let changed = false;
   for (const [key, value] of Object.entries(props)) {
     if (value === undefined || !(key in f)) continue;
-    next[key] = key === "door" && value && "polygon" in f ? fitDoor(value as RoomDoor, f.polygon) : value;
+    const v = key === "door" && value && "polygon" in f ? fitDoor(value as RoomDoor, f.polygon) : value;
+    if (JSON.stringify(v) !== JSON.stringify(next[key])) [next[key], changed] = [v, true];
   }
-  return next as Fixture;
+  return changed ? (next as Fixture) : f;
 }
 
 function select_(scene: Scene, ids: readonly string[], mode: SelectMode): Scene {
@@ -183,7 +188,7 @@ export function applyAction(scene: Scene, action: SceneAction): Scene {
         existing(scene, [action.id]).flatMap((f): Fixture[] => {
           if ("point" in f) return [];
           const polygon = action.polygon.map(([x, y]): Vertex => [x, y]);
-          return "door" in f ? [{ ...f, polygon, door: f.door && fitDoor(f.door, polygon) }] : [{ ...f, polygon }];
+          return "door" in f ? [{ ...f, polygon, door: f.door && relocateDoor(f.door, f.polygon, polygon) }] : [{ ...f, polygon }];
         }),
       );
     case "duplicate": {

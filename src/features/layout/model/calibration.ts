@@ -35,6 +35,7 @@ export function metresPerPixelFromLine(a: ImagePoint, b: ImagePoint, length: Rea
  * positions are what the lead tech meant: with a new scale their metres change by
  * newMpp / oldMpp about the origin. Without sweeps the fixtures are rescaled in place; with
  * sweeps a new plan version is made (old sweeps never move), aligned to this one by that scale.
+ * Either way the plan's width and height in metres scale by the same factor.
  */
 export type Recalibration =
   | { kind: "rescale-in-place"; factor: number }

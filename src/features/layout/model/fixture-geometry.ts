@@ -71,13 +71,37 @@ export function resizeFixture<F extends Fixture>(f: F, box: Bounds): F {
   const from = fixtureBounds(f);
   if ("point" in f) return mapFixture(f, () => [(box.minX + box.maxX) / 2, (box.minY + box.maxY) / 2]);
   if (!("door" in f) || !f.door) return mapFixture(f, (p) => mapBoxPoint(p, from, box));
-  const before = edgeLength(f.polygon, f.door.edge);
-  const centreFraction = before > 0 ? (f.door.offset + f.door.width / 2) / before : 0.5;
   const polygon = f.polygon.map((p) => mapBoxPoint(p, from, box));
-  const after = edgeLength(polygon, f.door.edge);
-  const width = Math.min(f.door.width, after);
-  const door = { ...f.door, width, offset: centreFraction * after - width / 2 };
-  return { ...f, polygon, door: fitDoor(door, polygon) };
+  return { ...f, polygon, door: relocateDoor(f.door, f.polygon, polygon) };
+}
+
+/**
+ * Where a room's door goes when its outline's vertices are edited. With the same number of
+ * vertices (a vertex dragged) it stays on the same edge at the same fraction along it; when
+ * vertices were added or removed it goes to the edge nearest its old centre.
+ */
+export function relocateDoor(door: RoomDoor, before: readonly Vertex[], after: readonly Vertex[]): RoomDoor | null {
+  if (door.edge >= before.length) return null;
+  const oldLength = edgeLength(before, door.edge);
+  const fraction = oldLength > 0 ? (door.offset + door.width / 2) / oldLength : 0.5;
+  if (after.length === before.length) {
+    const length = edgeLength(after, door.edge);
+    return fitDoor({ ...door, offset: fraction * length - door.width / 2 }, after);
+  }
+  const a = before[door.edge];
+  const b = before[(door.edge + 1) % before.length];
+  const centre: Vec = [a[0] + (b[0] - a[0]) * fraction, a[1] + (b[1] - a[1]) * fraction];
+  let best = { edge: 0, along: 0, d: Infinity };
+  for (let i = 0; i < after.length; i++) {
+    const p = after[i];
+    const q = after[(i + 1) % after.length];
+    const len = Math.hypot(q[0] - p[0], q[1] - p[1]);
+    if (len === 0) continue;
+    const t = Math.max(0, Math.min(len, ((centre[0] - p[0]) * (q[0] - p[0]) + (centre[1] - p[1]) * (q[1] - p[1])) / len));
+    const d = Math.hypot(p[0] + ((q[0] - p[0]) * t) / len - centre[0], p[1] + ((q[1] - p[1]) * t) / len - centre[1]);
+    if (d < best.d) best = { edge: i, along: t, d };
+  }
+  return best.d === Infinity ? null : fitDoor({ edge: best.edge, offset: best.along - door.width / 2, width: door.width }, after);
 }
 
 export function edgeLength(polygon: readonly Vertex[], edge: number): number {

@@ -1,27 +1,30 @@
 import { describe, expect, it } from "vitest";
-import { commandFor, type KeyPress } from "./shortcuts";
+import * as act from "./actions";
+import { createHistory, endGesture, record, undo } from "./history";
+import { createScene } from "./scene";
+import { commandForKey } from "./shortcuts";
+import { openCase, rect, uuid } from "./test-builders";
 
-const press = (key: string, mods: Partial<KeyPress> = {}): KeyPress => ({ key, ctrl: false, meta: false, shift: false, alt: false, ...mods });
+describe("shortcuts", () => {
+  it("maps the usual editor keys on both Ctrl and Cmd", () => {
+    expect(commandForKey({ key: "z", ctrl: true })).toEqual({ command: "undo" });
+    expect(commandForKey({ key: "Z", meta: true, shift: true })).toEqual({ command: "redo" });
+    expect(commandForKey({ key: "y", ctrl: true })).toEqual({ command: "redo" });
+    expect(commandForKey({ key: "d", meta: true })).toEqual({ command: "duplicate" });
+    expect(commandForKey({ key: "Delete" })).toEqual({ command: "delete" });
+    expect(commandForKey({ key: "ArrowLeft", shift: true })).toEqual({ command: "nudge", dx: -0.5, dy: 0 });
+    expect(commandForKey({ key: "q" })).toBeNull();
+    expect(commandForKey({ key: "r", ctrl: true })).toBeNull(); // leave the browser's reload alone
+  });
 
-describe("editor shortcuts", () => {
-  it("binds undo and both usual redo chords, with Ctrl or Cmd", () => {
-    expect(commandFor(press("z", { ctrl: true }))).toEqual({ type: "undo" });
-    expect(commandFor(press("z", { meta: true }))).toEqual({ type: "undo" });
-    expect(commandFor(press("Z", { ctrl: true, shift: true }))).toEqual({ type: "redo" });
-    expect(commandFor(press("y", { ctrl: true }))).toEqual({ type: "redo" });
-  });
-  it("binds delete, duplicate, escape and nudges", () => {
-    expect(commandFor(press("Delete"))).toEqual({ type: "delete" });
-    expect(commandFor(press("Backspace"))).toEqual({ type: "delete" });
-    expect(commandFor(press("d", { ctrl: true }))).toEqual({ type: "duplicate" });
-    expect(commandFor(press("Escape"))).toEqual({ type: "escape" });
-    expect(commandFor(press("ArrowLeft", { shift: true }))).toEqual({ type: "nudge", dx: -1, dy: 0, large: true });
-    expect(commandFor(press("ArrowDown"))).toEqual({ type: "nudge", dx: 0, dy: 1, large: false });
-  });
-  it("leaves the browser's own chords and plain typing alone", () => {
-    expect(commandFor(press("c", { ctrl: true }))).toBeNull();
-    expect(commandFor(press("x"))).toBeNull();
-    expect(commandFor(press("r", { alt: true }))).toBeNull();
-    expect(commandFor(press("r"))).toEqual({ type: "tool", tool: "rectangle" });
+  it("coalesces a run of nudges into one undo step", () => {
+    let h = createHistory(createScene({ width: 20, height: 10 }, [openCase(1, rect(2, 2, 2, 1))]));
+    for (let i = 0; i < 4; i++) {
+      const c = commandForKey({ key: "ArrowRight" });
+      if (c?.command === "nudge") h = record(h, act.move([uuid(1)], c.dx, c.dy), "nudge");
+    }
+    h = endGesture(h);
+    expect(h.past).toHaveLength(1);
+    expect(undo(h).present.fixtures[uuid(1)]).toEqual(openCase(1, rect(2, 2, 2, 1)));
   });
 });

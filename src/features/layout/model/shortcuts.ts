@@ -1,69 +1,67 @@
 /**
- * The editor's keyboard shortcuts as a pure map from a key press to a named command, so the
- * bindings are tested and listed in one place (the help text reads SHORTCUT_HELP).
- * Ctrl and Cmd are the same key here: Cmd on a Mac, Ctrl elsewhere.
+ * Keyboard shortcuts of the layout editor as data: a pure map from a key press to a named
+ * command, so the view wires one handler and the help panel lists the same table.
+ * Ctrl on Windows and Linux is Cmd (meta) on macOS; both are accepted.
  */
+
 export type EditorCommand =
-  | { type: "undo" }
-  | { type: "redo" }
-  | { type: "delete" }
-  | { type: "duplicate" }
-  | { type: "select-all" }
-  | { type: "escape" }
-  | { type: "nudge"; dx: -1 | 0 | 1; dy: -1 | 0 | 1; large: boolean }
-  | { type: "tool"; tool: "select" | "pan" | "rectangle" | "polygon" }
-  | { type: "zoom"; direction: "in" | "out" | "fit" };
+  | { command: "undo" }
+  | { command: "redo" }
+  | { command: "duplicate" }
+  | { command: "delete" }
+  | { command: "select-all" }
+  | { command: "clear-selection" }
+  | { command: "nudge"; dx: number; dy: number }
+  | { command: "rotate"; degrees: number };
 
 export interface KeyPress {
   key: string;
-  ctrl: boolean;
-  meta: boolean;
-  shift: boolean;
-  alt: boolean;
+  ctrl?: boolean;
+  meta?: boolean;
+  shift?: boolean;
+  alt?: boolean;
 }
 
-const ARROWS: Record<string, [-1 | 0 | 1, -1 | 0 | 1]> = {
+/** Arrow keys move the selection by this much, ten times as far with Shift (metres). */
+export const NUDGE_M = 0.05;
+export const BIG_NUDGE_M = 0.5;
+
+const ARROWS: Record<string, [number, number]> = {
   ArrowLeft: [-1, 0],
   ArrowRight: [1, 0],
   ArrowUp: [0, -1],
   ArrowDown: [0, 1],
 };
 
-const TOOLS: Record<string, "select" | "pan" | "rectangle" | "polygon"> = { v: "select", h: "pan", r: "rectangle", p: "polygon" };
-
-export function commandFor(k: KeyPress): EditorCommand | null {
-  const mod = k.ctrl || k.meta;
+/** The command for a key press, or null when the editor does not use it. */
+export function commandForKey(k: KeyPress): EditorCommand | null {
+  const mod = Boolean(k.ctrl || k.meta);
   const key = k.key.length === 1 ? k.key.toLowerCase() : k.key;
-  if (mod && !k.alt) {
-    if (key === "z") return k.shift ? { type: "redo" } : { type: "undo" };
-    if (key === "y") return { type: "redo" };
-    if (key === "d") return { type: "duplicate" };
-    if (key === "a") return { type: "select-all" };
-    return null;
+  if (mod && key === "z") return k.shift ? { command: "redo" } : { command: "undo" };
+  if (mod && key === "y") return { command: "redo" };
+  if (mod && key === "d") return { command: "duplicate" };
+  if (mod && key === "a") return { command: "select-all" };
+  if (mod || k.alt) return null;
+  if (key === "Delete" || key === "Backspace") return { command: "delete" };
+  if (key === "Escape") return { command: "clear-selection" };
+  if (key === "r") return { command: "rotate", degrees: k.shift ? -90 : 90 };
+  const arrow = ARROWS[key];
+  if (arrow) {
+    const step = k.shift ? BIG_NUDGE_M : NUDGE_M;
+    return { command: "nudge", dx: arrow[0] * step, dy: arrow[1] * step };
   }
-  if (k.alt) return null;
-  if (key === "Delete" || key === "Backspace") return { type: "delete" };
-  if (key === "Escape") return { type: "escape" };
-  if (key in ARROWS) {
-    const [dx, dy] = ARROWS[key];
-    return { type: "nudge", dx, dy, large: k.shift };
-  }
-  if (key in TOOLS && !k.shift) return { type: "tool", tool: TOOLS[key] };
-  if (key === "+" || key === "=") return { type: "zoom", direction: "in" };
-  if (key === "-") return { type: "zoom", direction: "out" };
-  if (key === "0") return { type: "zoom", direction: "fit" };
   return null;
 }
 
-export const SHORTCUT_HELP: readonly [string, string][] = [
-  ["Ctrl/⌘ Z", "Undo"],
-  ["Shift Ctrl/⌘ Z or Ctrl Y", "Redo"],
-  ["Delete", "Delete the selection"],
-  ["Ctrl/⌘ D", "Duplicate the selection"],
-  ["Arrows (Shift: ×10)", "Nudge the selection by one grid step"],
-  ["Escape", "Stop drawing, then clear the selection"],
-  ["V · H · R · P", "Select · pan · rectangle · outline tool"],
-  ["Space + drag, or middle button", "Pan"],
-  ["+ · − · 0", "Zoom in · out · fit"],
-  ["Enter / double-click", "Close an outline"],
+/** The shortcut table for the help panel, in plain words. */
+export const SHORTCUT_HELP: readonly { keys: string; does: string }[] = [
+  { keys: "Ctrl/Cmd + Z", does: "Undo" },
+  { keys: "Ctrl/Cmd + Shift + Z, Ctrl + Y", does: "Redo" },
+  { keys: "Ctrl/Cmd + D", does: "Duplicate the selection" },
+  { keys: "Ctrl/Cmd + A", does: "Select every fixture" },
+  { keys: "Delete, Backspace", does: "Delete the selection" },
+  { keys: "Escape", does: "Cancel the drawing, or clear the selection" },
+  { keys: "Arrow keys", does: `Move the selection ${NUDGE_M * 100} cm (Shift: ${BIG_NUDGE_M * 100} cm)` },
+  { keys: "R, Shift + R", does: "Turn the selection a quarter turn clockwise, anticlockwise" },
+  { keys: "Enter", does: "Close the outline being drawn" },
 ];

@@ -69,7 +69,7 @@ export function EditorToolbar(p: Props) {
         </ToolButton>
         {p.canEdit ? (
           <>
-            <ToolButton pressed={drawing && (p.active.tool === "rectangle" || p.active.tool === "point")} onClick={() => p.onTool("rectangle")} shortcut="R">
+            <ToolButton pressed={drawing && (p.active.tool === "rectangle" || p.active.tool === "point")} onClick={() => p.onTool("rectangle")} shortcut="B">
               {pointKind ? "Place point" : "Rectangle"}
             </ToolButton>
             {pointKind ? null : (

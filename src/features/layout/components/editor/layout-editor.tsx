@@ -9,7 +9,7 @@ import { useHtmlImage } from "../../../../lib/use-html-image";
 import { getFixtures } from "../../api/get-fixtures";
 import { useAutosave } from "../../hooks/use-autosave";
 import { useEditorHistory } from "../../hooks/use-editor-history";
-import { useEditorShortcuts } from "../../hooks/use-editor-shortcuts";
+import { useEditorShortcuts, VIEW_KEY_HELP } from "../../hooks/use-editor-shortcuts";
 import { array, duplicate, remove, select } from "../../model/actions";
 import { fitView, stagePoint, zoomAbout, type View } from "../../model/coordinates";
 import { duplicateOffset } from "../../model/duplicate-offset";
@@ -249,10 +249,10 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
           <details>
             <summary className="min-h-11 cursor-pointer py-2 font-bold">Keyboard shortcuts</summary>
             <dl className="grid grid-cols-[max-content_1fr] gap-x-3 text-sm">
-              {SHORTCUT_HELP.map(([k, what]) => (
-                <div key={k} className="contents">
-                  <dt className="font-bold">{k}</dt>
-                  <dd>{what}</dd>
+              {[...SHORTCUT_HELP, ...VIEW_KEY_HELP].map(({ keys, does }) => (
+                <div key={keys} className="contents">
+                  <dt className="font-bold">{keys}</dt>
+                  <dd>{does}</dd>
                 </div>
               ))}
             </dl>

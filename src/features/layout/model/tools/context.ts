@@ -22,7 +22,7 @@ export function toolContext(scene: Scene, settings: ToolSettings, newId: () => s
   return {
     scene,
     newId,
-    snap: (p: PlanPoint) => snapPoint(p, snapOptions([])).point,
+    snap: (p: PlanPoint, exclude: readonly string[] = []) => snapPoint(p, snapOptions(exclude)).point,
     snapMove: (ids, dx, dy) => {
       const box = unionBounds(ids.map((id) => scene.fixtures[id]).filter((f) => f !== undefined));
       if (!box) return { dx, dy };

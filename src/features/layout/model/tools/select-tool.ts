@@ -26,8 +26,9 @@ function pressed(point: PlanPoint, shift: boolean, ctx: ToolContext): R {
   const hit = hitTest(scene, point, ctx.pickToleranceM);
   if (hit === null) return result({ phase: "marquee", start: point, current: point, shift, dragged: false });
   if (shift) {
-    const after = scene.selection.includes(hit) ? scene.selection.filter((id) => id !== hit) : [...scene.selection, hit];
-    return result({ phase: "pressing", start: point, ids: after }, [select([hit], "toggle")]);
+    // Shift-pressing a selected fixture takes it out; dragging then moves nothing.
+    const ids = scene.selection.includes(hit) ? [] : [...scene.selection, hit];
+    return result({ phase: "pressing", start: point, ids }, [select([hit], "toggle")]);
   }
   if (scene.selection.includes(hit)) return result({ phase: "pressing", start: point, ids: scene.selection });
   return result({ phase: "pressing", start: point, ids: [hit] }, [select([hit])]);

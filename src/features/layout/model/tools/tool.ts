@@ -33,8 +33,8 @@ export interface ToolContext {
   scene: Scene;
   /** Makes the id of a new fixture (crypto.randomUUID in the editor, a counter in tests). */
   newId: () => string;
-  /** Snaps a drawn point (snapping.snapPoint with the scene's other fixtures); identity when off. */
-  snap: (p: PlanPoint) => PlanPoint;
+  /** Snaps a drawn point (snapping.snapPoint) to fixtures other than `exclude`; identity when off. */
+  snap: (p: PlanPoint, exclude?: readonly string[]) => PlanPoint;
   /** Snaps a drag of the selection (snapping.snapMove); identity when off. */
   snapMove: (ids: readonly string[], dx: number, dy: number) => { dx: number; dy: number };
   /** A press turns into a drag past this distance (a few screen px in metres). */
