@@ -25,7 +25,10 @@ export function StoreTable({ scoped }: { scoped: boolean }) {
   const [sort, setSort] = useState("name-asc");
   const [includeArchived, setIncludeArchived] = useState(false);
   const [by, order] = sort.split("-") as [NonNullable<StoreListFilter["sort"]>, NonNullable<StoreListFilter["order"]>];
-  const stores = useStores({ search: search.trim() || undefined, sort: by, order, includeArchived });
+  const query = useStores({ search: search.trim() || undefined, sort: by, order, includeArchived });
+  // The server leaves archived stores out unless asked; the list holds to that too.
+  const rows = query.data?.filter((s) => includeArchived || s.archivedAt === null);
+  const stores = { ...query, data: rows };
 
   return (
     <div className="space-y-4">
