@@ -31,6 +31,8 @@ export interface FrameStats {
   longFrames: number;
   dragMs: number;
   fixturesOnPage: number;
+  /** How far the fixture's centre moved over all drags (a check that the drags really moved it). */
+  movedM: number;
 }
 
 const CHROMIUM = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
@@ -71,18 +73,19 @@ export async function measureEditorDrag(o: EditorBenchOptions): Promise<FrameSta
     // The fixture to drag: the first one in the list, picked by its centre (the list's data-x/y).
     const centre = page.locator("td[data-x]").first();
     let cx = Number(await centre.getAttribute("data-x"));
+    const firstX = cx;
     const cy = Number(await centre.getAttribute("data-y"));
 
-    await page.evaluate(() => {
-      const w = window as unknown as { __frames: number[]; __recording: boolean };
-      w.__frames = [];
-      w.__recording = false;
-      const tick = (t: number) => {
-        if (w.__recording) w.__frames.push(t);
+    // Scripts go to the page as strings: tsx's compiled functions carry helpers the page lacks.
+    await page.evaluate(`(() => {
+      window.__frames = [];
+      window.__recording = false;
+      const tick = (t) => {
+        if (window.__recording) window.__frames.push(t);
         requestAnimationFrame(tick);
       };
       requestAnimationFrame(tick);
-    });
+    })()`);
 
     const gaps: number[] = [];
     let dragMs = 0;
@@ -90,7 +93,7 @@ export async function measureEditorDrag(o: EditorBenchOptions): Promise<FrameSta
       const start = await planToScreen(page, cx, cy);
       await page.mouse.move(start.x, start.y);
       await page.mouse.down();
-      await page.evaluate(() => ((window as unknown as { __recording: boolean }).__recording = true));
+      await page.evaluate("window.__recording = true");
       const t0 = Date.now();
       // Out 240 px to the right and down, and part of the way back: a drag across neighbours.
       for (let i = 1; i <= moves; i++) {
@@ -99,13 +102,7 @@ export async function measureEditorDrag(o: EditorBenchOptions): Promise<FrameSta
         await page.mouse.move(start.x + 240 * along, start.y + 60 * Math.sin(along * Math.PI));
       }
       dragMs += Date.now() - t0;
-      const frames = await page.evaluate(() => {
-        const w = window as unknown as { __frames: number[]; __recording: boolean };
-        w.__recording = false;
-        const f = w.__frames;
-        w.__frames = [];
-        return f;
-      });
+      const frames = (await page.evaluate("(() => { window.__recording = false; const f = window.__frames; window.__frames = []; return f; })()")) as number[];
       await page.mouse.up();
       await page.waitForTimeout(300);
       for (let i = 1; i < frames.length; i++) gaps.push(frames[i] - frames[i - 1]);
@@ -122,6 +119,7 @@ export async function measureEditorDrag(o: EditorBenchOptions): Promise<FrameSta
       longFrames: gaps.filter((g) => g > LONG_FRAME_MS).length,
       dragMs: dragMs / drags,
       fixturesOnPage,
+      movedM: cx - firstX,
     };
   } finally {
     await browser.close();

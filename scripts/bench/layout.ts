@@ -143,15 +143,25 @@ async function main() {
     else {
       // The editor half needs the built client (dist/client): `npx vite build` first.
       const origin = base.replace(/\/api$/, "");
-      const f = await measureEditorDrag({ origin, email: "lead@bench.test", password, storeId: store.id, planId: plan.id });
-      console.log(`  editor, dragging one of ${f.fixturesOnPage} fixtures in Chromium (${f.frames} frames over 3 drags, ${f.dragMs.toFixed(0)} ms a drag):`);
-      console.log(`    frame time median ${f.medianMs.toFixed(1)} ms, p95 ${f.p95Ms.toFixed(1)} ms, max ${f.maxMs.toFixed(1)} ms; frames over 33.4 ms: ${f.longFrames}`);
+      const f = await measureEditorDrag({ origin, email: "lead@bench.test", password, storeId: store.id, planId: plan.id }).catch((err) => {
+        console.error("  editor benchmark failed:", err instanceof Error ? err.message : err);
+        process.exitCode = 1;
+        return null;
+      });
+      if (f) console.log(`  editor, dragging one of ${f.fixturesOnPage} fixtures in Chromium (${f.frames} frames over 3 drags of ${f.dragMs.toFixed(0)} ms; it moved ${f.movedM.toFixed(2)} m in all):`);
+      if (f) console.log(`    frame time median ${f.medianMs.toFixed(1)} ms, p95 ${f.p95Ms.toFixed(1)} ms, max ${f.maxMs.toFixed(1)} ms; frames over 33.4 ms: ${f.longFrames}`);
     }
     if (med >= TARGET_MS) process.exitCode = 1;
   } finally {
     await new Promise<void>((resolve) => (server ? server.close(() => resolve()) : resolve()));
     mailer.close();
+    pool.on("error", () => {}); // a client told to end may still be saying goodbye when the database goes
     await pool.end();
+    for (let i = 0; i < 40; i++) {
+      const { rows } = await admin.query("select count(*)::int as n from pg_stat_activity where datname = $1", [name]);
+      if (rows[0].n === 0) break;
+      await new Promise((r) => setTimeout(r, 50));
+    }
     await admin.query(`drop database if exists ${name} with (force)`);
     await admin.end();
   }

@@ -22,6 +22,8 @@ interface Options {
   apply: (actions: readonly SceneAction[], gesture?: string | null) => void;
   endGesture: () => void;
   showGuides: (guides: readonly SnapGuide[]) => void;
+  /** A group (same metres scale) on a layer of its own: dragged nodes ride on it. */
+  dragGroup: RefObject<Konva.Group | null>;
   onError: (message: string) => void;
 }
 
@@ -33,7 +35,7 @@ interface Options {
  */
 export function useShapeHandlers(o: Options): { handlers: ShapeHandlers; nodes: RefObject<Map<string, Konva.Group>> } {
   const nodes = useRef(new Map<string, Konva.Group>());
-  const drag = useRef<{ ids: string[] } | null>(null);
+  const drag = useRef<{ ids: string[]; homes: { node: Konva.Group; parent: Konva.Container; index: number }[] } | null>(null);
   const transformGesture = useRef(0);
   const opts = useRef(o);
   opts.current = o;
@@ -61,7 +63,22 @@ export function useShapeHandlers(o: Options): { handlers: ShapeHandlers; nodes: 
       },
       onDragStart: (id) => {
         const s = opts.current.scene.current;
-        drag.current = { ids: s.selection.includes(id) ? [...s.selection] : [id] };
+        const ids = s.selection.includes(id) ? [...s.selection] : [id];
+        // Konva's drag advice: move the dragged nodes to a layer of their own for the drag, so
+        // each frame redraws them alone, not the 400 fixtures left behind.
+        const target = opts.current.dragGroup.current;
+        const homes: { node: Konva.Group; parent: Konva.Container; index: number }[] = [];
+        if (target) {
+          for (const other of ids) {
+            const node = nodes.current.get(other);
+            const parent = node?.getParent();
+            if (!node || !parent) continue;
+            homes.push({ node, parent, index: node.zIndex() });
+          }
+          for (const h of homes) h.node.moveTo(target);
+          homes[0]?.parent.getLayer()?.batchDraw();
+        }
+        drag.current = { ids, homes };
       },
       onDragMove: (id, e) => {
         const d = drag.current;
@@ -73,8 +90,13 @@ export function useShapeHandlers(o: Options): { handlers: ShapeHandlers; nodes: 
         opts.current.showGuides(r.guides);
       },
       onDragEnd: (id, e) => {
-        const d = drag.current ?? { ids: [id] };
+        const d = drag.current ?? { ids: [id], homes: [] };
         drag.current = null;
+        // Back home, in drawing order, before React redraws them from the scene.
+        for (const h of [...d.homes].sort((a, b) => a.index - b.index)) {
+          h.node.moveTo(h.parent);
+          h.node.zIndex(Math.min(h.index, h.parent.children.length - 1));
+        }
         const dx = e.target.x();
         const dy = e.target.y();
         for (const other of d.ids) nodes.current.get(other)?.position({ x: 0, y: 0 });

@@ -60,6 +60,7 @@ export function EditorStage(p: EditorStageProps) {
   const guideX = useRef<Konva.Line>(null);
   const guideY = useRef<Konva.Line>(null);
   const transformer = useRef<Konva.Transformer>(null);
+  const dragGroup = useRef<Konva.Group>(null);
   const [preview, setPreview] = useState<ToolPreview | null>(null);
   const toolState = useRef<AnyToolState>(idleState(active));
   const panStart = useRef<{ x: number; y: number; view: View } | null>(null);
@@ -72,6 +73,7 @@ export function EditorStage(p: EditorStageProps) {
     apply: p.apply,
     endGesture: p.endGesture,
     onError: p.onMessage,
+    dragGroup,
     showGuides: (guides: readonly SnapGuide[]) => {
       const x = guides.find((g) => g.axis === "x");
       const y = guides.find((g) => g.axis === "y");
@@ -221,6 +223,10 @@ export function EditorStage(p: EditorStageProps) {
             <FixtureShape key={id} fixture={scene.fixtures[id]} selected={selected.has(id)} draggable={draggable} unit={unit} handlers={handlers} />
           ))}
         </Group>
+      </Layer>
+      {/* Dragged fixtures and the transformer live here, so a drag redraws only this layer. */}
+      <Layer listening={active.tool === "select" && !p.panning}>
+        <Group ref={dragGroup} scaleX={k} scaleY={k} />
         <Transformer
           ref={transformer}
           rotateEnabled

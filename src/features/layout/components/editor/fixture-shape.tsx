@@ -83,6 +83,7 @@ export const FixtureShape = memo(function FixtureShape({ fixture: f, selected, d
         strokeScaleEnabled={false}
         dash={look.dash ?? undefined}
         hitStrokeWidth={12}
+        perfectDrawEnabled={false}
       />
       {tile ? <Line points={flat} closed fill={look.fill} listening={false} /> : null}
       {wall ? <Line points={wall.points} closed={wall.closed} stroke={look.stroke} strokeWidth={look.strokeWidth} strokeScaleEnabled={false} lineJoin="miter" listening={false} /> : null}
