@@ -3,6 +3,7 @@ import { sql } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { companies, memberships, membershipStores, stores, users } from "../schema/index";
 import type { Role } from "../../domain/roles";
+import { seedDemoLayout } from "./demo-store-map";
 
 // An invented grocery chain and its people. Everything here is demo data.
 export const DEMO_SIGN_INS = {
@@ -33,11 +34,14 @@ export async function seedDemoIfEmpty(ctx: AppContext): Promise<boolean> {
       .values({ companyId: company.id, name: "Larkspur Market – Cedar Hollow", address: "1180 Orchard Bend Road, Cedar Hollow", timeZone: "America/Chicago" })
       .returning();
     const passwordHash = await bcrypt.hash(DEMO_SIGN_INS.password, ctx.config.bcryptCost);
+    let leadTechId: string | null = null;
     for (const person of DEMO_SIGN_INS.people) {
       const [user] = await tx.insert(users).values({ email: person.email, name: person.name, passwordHash }).returning();
       const [m] = await tx.insert(memberships).values({ companyId: company.id, userId: user.id, role: person.role }).returning();
       if (person.role === "store-contact") await tx.insert(membershipStores).values({ membershipId: m.id, storeId: store.id });
+      if (person.role === "lead-tech") leadTechId = user.id;
     }
+    await seedDemoLayout(ctx, tx, { companyId: company.id, storeId: store.id, createdById: leadTechId });
     return true;
   });
 }

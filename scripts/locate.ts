@@ -1,0 +1,50 @@
+// npm run -s locate -- FILE.json [--field]
+// Prints exactly one JSON object on stdout (the issue 5 contract); problems go to stderr, exit non-zero.
+import { readFileSync } from "node:fs";
+import { LocatorInputError, parseLocatorInput } from "../server/contracts/locator-input";
+import { locate } from "../server/analysis/locate";
+
+function fail(message: string, code: number): never {
+  process.stderr.write(`locate: ${message}\n`);
+  process.exit(code);
+}
+
+const args = process.argv.slice(2);
+const withField = args.includes("--field");
+const withReadings = args.includes("--readings");
+const files = args.filter((a) => !a.startsWith("--"));
+if (files.length !== 1) fail("usage: npm run -s locate -- FILE.json [--field] [--readings]", 64);
+
+let raw: string;
+try {
+  raw = readFileSync(files[0], "utf8");
+} catch (e) {
+  fail(`cannot read ${files[0]}: ${(e as Error).message}`, 66);
+}
+let json: unknown;
+try {
+  json = JSON.parse(raw);
+} catch (e) {
+  fail(`${files[0]} is not valid JSON: ${(e as Error).message}`, 65);
+}
+
+try {
+  const result = locate(parseLocatorInput(json));
+  const out: Record<string, unknown> = {
+    candidates: result.candidates,
+    background: result.background,
+    diagnostics: result.diagnostics,
+    assumptions: result.assumptions,
+  };
+  if (withReadings) out.readings = result.readings;
+  if (withField) {
+    const f = result.field;
+    // NaN (unknown) is not JSON: unknown cells are written as null
+    const num = (v: number) => (Number.isNaN(v) ? null : Math.round(v * 100) / 100);
+    out.field = { width: f.width, height: f.height, cellSize: f.cellSize, values: Array.from(f.values, num), confidence: Array.from(f.confidence, num) };
+  }
+  process.stdout.write(JSON.stringify(out) + "\n");
+} catch (e) {
+  if (e instanceof LocatorInputError) fail(e.message, 65);
+  fail(`analysis failed: ${(e as Error).stack ?? e}`, 70);
+}

@@ -1,0 +1,64 @@
+import { describe, expect, it } from "vitest";
+import { GeodesicSearch } from "./geodesic-distance";
+import { routeBetween } from "./grid-path";
+import { cellIndexOf, createPlanGrid } from "./plan-grid";
+
+const h = 0.25;
+// 8-connected grid distance between cells Δi, Δj apart (octile metric): (max − min) + √2·min cells.
+const octile = (di: number, dj: number) => h * (Math.max(di, dj) - Math.min(di, dj) + Math.SQRT2 * Math.min(di, dj));
+
+describe("geodesic distance on the plan grid", () => {
+  it("on open floor lies between the Euclidean distance and 8.24% above it (1/cos 22.5°, the 8-connected bound)", () => {
+    const grid = createPlanGrid(10, 10, h, []);
+    const s = new GeodesicSearch(grid);
+    s.fromPoint(1.125, 1.125, 20);
+    for (const [x, y] of [[8.875, 1.125], [8.875, 8.875], [5.125, 9.125], [3.375, 7.625]]) {
+      const e = Math.hypot(x - 1.125, y - 1.125);
+      const d = s.dist[cellIndexOf(grid, x, y)];
+      expect(d).toBeGreaterThanOrEqual(e - 1e-9);
+      expect(d).toBeLessThanOrEqual(e * 1.0824 + 1e-9);
+    }
+  });
+
+  it("around one wall equals the hand-computed path round its end", () => {
+    // A wall from the top edge down to y = 6 m between x = 4.9 and 5.1 blocks cell columns 19-20, rows 0-23.
+    const grid = createPlanGrid(10, 10, h, [[[4.9, 0], [5.1, 0], [5.1, 6], [4.9, 6]]]);
+    expect(grid.blocked[cellIndexOf(grid, 5.0, 5.9)]).toBe(1);
+    expect(grid.blocked[cellIndexOf(grid, 5.0, 6.1)]).toBe(0);
+    const s = new GeodesicSearch(grid);
+    // From cell (8, 8) to cell (31, 8): down to (18, 24), across to (21, 24) under the wall's end, up again.
+    // The diagonal into (19, 24) is refused because (19, 23) is wall (no corner cutting).
+    s.fromPoint(2.125, 2.125, 30);
+    const hand = octile(10, 16) + 3 * h + octile(10, 16);
+    expect(s.dist[cellIndexOf(grid, 7.875, 2.125)]).toBeCloseTo(hand, 9);
+    // The continuous path round the wall's corners (4.75, 6) and (5.25, 6) is 9.86 m; straight through, 5.75 m.
+    const continuous = 2 * Math.hypot(4.75 - 2.125, 6 - 2.125) + 0.5;
+    expect(hand / continuous).toBeLessThan(1.1);
+    expect(hand).toBeGreaterThan(5.75 * 1.7);
+  });
+
+  it("does not cut the corner between two diagonal solid cells", () => {
+    // cells (1,0) and (0,1) are solid: (0,0) and (1,1) touch only at a corner, so they are not connected
+    const grid = createPlanGrid(0.5, 0.5, h, [[[0.25, 0], [0.5, 0], [0.5, 0.25], [0.25, 0.25]], [[0, 0.25], [0.25, 0.25], [0.25, 0.5], [0, 0.5]]]);
+    const s = new GeodesicSearch(grid);
+    s.fromPoint(0.125, 0.125, 10);
+    expect(s.dist[cellIndexOf(grid, 0.375, 0.375)]).toBe(Infinity);
+  });
+
+  it("truncates at the maximum distance and leaves Infinity beyond it", () => {
+    const grid = createPlanGrid(10, 2, h, []);
+    const s = new GeodesicSearch(grid);
+    s.fromPoint(0.125, 0.125, 3);
+    expect(s.dist[cellIndexOf(grid, 2.875, 0.125)]).toBeCloseTo(2.75, 12);
+    expect(s.dist[cellIndexOf(grid, 3.625, 0.125)]).toBe(Infinity);
+  });
+
+  it("routes a walk round a wall instead of through it", () => {
+    const grid = createPlanGrid(10, 10, h, [[[4.9, 0], [5.1, 0], [5.1, 6], [4.9, 6]]]);
+    const route = routeBetween(new GeodesicSearch(grid), 2.125, 2.125, 7.875, 2.125, 30)!;
+    expect(route[0]).toEqual([2.125, 2.125]);
+    expect(route[route.length - 1]).toEqual([7.875, 2.125]);
+    expect(Math.max(...route.map((p) => p[1]))).toBeGreaterThan(6);
+    expect(routeBetween(new GeodesicSearch(grid), 1, 8, 9, 8, 30)).toEqual([[1, 8], [9, 8]]);
+  });
+});

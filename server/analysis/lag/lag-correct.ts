@@ -1,0 +1,117 @@
+// Shared by the server's locator and the Walk screen's lag hint, so both agree by construction.
+// Pure TypeScript: no Node or DOM APIs.
+
+export interface Tap {
+  x: number;
+  y: number;
+  /** Seconds from the sweep's start, at the position tap. */
+  t: number;
+}
+
+/** The walked route from tap a to tap b as a polyline that starts at a and ends at b, or null if unknown. */
+export type Route = (a: Tap, b: Tap) => readonly (readonly [number, number])[] | null;
+
+export interface LaggedPosition {
+  x: number;
+  y: number;
+  /** The reading was taken before one delay had elapsed: it is placed at the first tap. */
+  beforeDelay: boolean;
+  /** The probe was between two taps farther apart than `maxStepM`, so where it went is a guess. */
+  pathGap: boolean;
+}
+
+/**
+ * Where the air behind each reading was sampled. A probe with hose delay D and a first-order sensor of
+ * time constant τ reports at time t what it drew in around t − D − τ (the mean delay of the response
+ * τ·ẏ + y = u(t − D) is D + τ), so each reading moves back to the probe position at s = t − D − τ,
+ * interpolated in time between the taps around s and along the walked route between them (around solid
+ * bodies when `route` says so; straight otherwise), evenly or stop-and-go (`walkSpeedMps`).
+ * Taps must be in time order.
+ */
+export interface LagOptions {
+  /** The walked route between taps; straight when absent. */
+  route?: Route;
+  /** Taps farther apart than this are flagged as a path gap, m. */
+  maxStepM?: number;
+  /**
+   * Walking pace between stops, m/s. When given, the technician is taken to stand at each tap until
+   * leaving for the next one at this pace and arriving on time (stop-and-go, as a sweep is walked);
+   * when absent, the probe moves evenly between taps (plain interpolation by timestamps).
+   */
+  walkSpeedMps?: number;
+}
+
+export function lagCorrect(taps: readonly Tap[], delayS: number, timeConstantS: number, options: LagOptions = {}): LaggedPosition[] {
+  const { route, maxStepM = 5, walkSpeedMps } = options;
+  if (walkSpeedMps !== undefined && !(walkSpeedMps > 0)) throw new Error(`walking speed must be positive, got ${walkSpeedMps} m/s`);
+  if (!(delayS >= 0) || !(timeConstantS >= 0)) throw new Error(`delay and time constant must be non-negative, got ${delayS} s and ${timeConstantS} s`);
+  for (let k = 1; k < taps.length; k++) {
+    if (taps[k].t < taps[k - 1].t) throw new Error(`taps must be in time order: tap ${k} at ${taps[k].t} s follows ${taps[k - 1].t} s`);
+  }
+  const shift = delayS + timeConstantS;
+  const routes = new Map<number, readonly (readonly [number, number])[]>();
+  const routeOf = (j: number) => {
+    let r = routes.get(j);
+    if (!r) {
+      const a = taps[j];
+      const b = taps[j + 1];
+      r = (route && route(a, b)) || [[a.x, a.y], [b.x, b.y]];
+      routes.set(j, r);
+    }
+    return r;
+  };
+  return taps.map((tap) => {
+    const s = tap.t - shift;
+    if (s < taps[0].t) return { x: taps[0].x, y: taps[0].y, beforeDelay: true, pathGap: false };
+    const j = lastTapAtOrBefore(taps, s);
+    if (j >= taps.length - 1) return { x: taps[j].x, y: taps[j].y, beforeDelay: false, pathGap: false };
+    const a = taps[j];
+    const b = taps[j + 1];
+    const path = routeOf(j);
+    const span = b.t - a.t;
+    let f = span > 0 ? (s - a.t) / span : 0;
+    if (walkSpeedMps !== undefined && span > 0) {
+      const walkS = Math.min(span, polylineLength(path) / walkSpeedMps);
+      const leave = b.t - walkS;
+      f = s <= leave ? 0 : walkS > 0 ? (s - leave) / walkS : 1;
+    }
+    const [x, y] = alongPolyline(path, f);
+    return { x, y, beforeDelay: false, pathGap: Math.hypot(b.x - a.x, b.y - a.y) > maxStepM };
+  });
+}
+
+/** Index of the last tap with t ≤ s (binary search); taps[0].t ≤ s is assumed. */
+function lastTapAtOrBefore(taps: readonly Tap[], s: number): number {
+  let lo = 0;
+  let hi = taps.length - 1;
+  while (lo < hi) {
+    const mid = (lo + hi + 1) >> 1;
+    if (taps[mid].t <= s) lo = mid;
+    else hi = mid - 1;
+  }
+  return lo;
+}
+
+function polylineLength(points: readonly (readonly [number, number])[]): number {
+  let total = 0;
+  for (let i = 1; i < points.length; i++) total += Math.hypot(points[i][0] - points[i - 1][0], points[i][1] - points[i - 1][1]);
+  return total;
+}
+
+/** The point a fraction f (0..1) of the way along a polyline, by arc length. */
+export function alongPolyline(points: readonly (readonly [number, number])[], f: number): [number, number] {
+  if (points.length === 1) return [points[0][0], points[0][1]];
+  let left = Math.max(0, Math.min(1, f)) * polylineLength(points);
+  for (let i = 1; i < points.length; i++) {
+    const [ax, ay] = points[i - 1];
+    const [bx, by] = points[i];
+    const len = Math.hypot(bx - ax, by - ay);
+    if (left <= len || i === points.length - 1) {
+      const g = len > 0 ? Math.min(1, left / len) : 0;
+      return [ax + g * (bx - ax), ay + g * (by - ay)];
+    }
+    left -= len;
+  }
+  const last = points[points.length - 1];
+  return [last[0], last[1]];
+}

@@ -1,0 +1,123 @@
+import { describe, expect, it } from "vitest";
+import { parseLocatorInput, type LocatorInputRaw } from "../contracts/locator-input";
+import { locate } from "./locate";
+
+// Small fixed stores whose readings come from a model unlike the locator's kernel (exponential decay
+// over the walking distance round the gondola end, with a sensor lag applied to the walk), so a pass
+// here is not the fit recovering its own model (locator-methods §5, pitfall 1).
+
+const rect = (x0: number, y0: number, x1: number, y1: number): [number, number][] => [[x0, y0], [x1, y0], [x1, y1], [x0, y1]];
+const GONDOLA = rect(4, 5.8, 16, 6.2);
+
+/** Walking distance from p to q round the gondola (via its nearer end when the straight line crosses it). */
+function aroundGondola(p: [number, number], q: [number, number]): number {
+  const crosses = (p[1] - 6) * (q[1] - 6) < 0 && (() => {
+    const x = p[0] + ((6 - p[1]) / (q[1] - p[1])) * (q[0] - p[0]);
+    return x > 3.9 && x < 16.1;
+  })();
+  if (!crosses) return Math.hypot(p[0] - q[0], p[1] - q[1]);
+  const via = (e: [number, number]) => Math.hypot(p[0] - e[0], p[1] - e[1]) + Math.hypot(q[0] - e[0], q[1] - e[1]);
+  return Math.min(via([3.9, 6]), via([16.1, 6]));
+}
+
+/** East along the north aisle, back along the case face, round the west end and east along the south aisle; 1 m/s, a tap every 1.3 m. */
+function walk(): { x: number; y: number; t: number }[] {
+  const legs: [number, number][] = [[1, 3.5], [18, 3.5], [18, 4.6], [1, 4.6], [1, 8.5], [18, 8.5]];
+  const out: { x: number; y: number; t: number }[] = [];
+  let t = 0;
+  for (let k = 1; k < legs.length; k++) {
+    const [ax, ay] = legs[k - 1];
+    const [bx, by] = legs[k];
+    const len = Math.hypot(bx - ax, by - ay);
+    for (let s = 0; s < len; s += 1.3) {
+      out.push({ x: ax + ((bx - ax) * s) / len, y: ay + ((by - ay) * s) / len, t });
+      t += 1.3;
+    }
+  }
+  return out;
+}
+
+const D = 3;
+const TAU = 1;
+
+function store(concentration: (x: number, y: number) => number, zones: LocatorInputRaw["plan"]["backgroundZones"] = []): LocatorInputRaw {
+  const taps = walk();
+  // the reading at a tap is the air sampled D + τ earlier on the walk (taps are 1.3 s apart, so interpolate)
+  const readings = taps.map((tap) => {
+    const s = tap.t - D - TAU;
+    let x = taps[0].x, y = taps[0].y;
+    for (let k = 1; k < taps.length; k++) {
+      if (taps[k].t >= s && taps[k - 1].t <= s) {
+        const f = (s - taps[k - 1].t) / (taps[k].t - taps[k - 1].t);
+        x = taps[k - 1].x + f * (taps[k].x - taps[k - 1].x);
+        y = taps[k - 1].y + f * (taps[k].y - taps[k - 1].y);
+      }
+    }
+    return { x: tap.x, y: tap.y, t: tap.t, ppm: Math.round(concentration(x, y)) };
+  });
+  return {
+    plan: {
+      width: 20,
+      height: 12,
+      obstacles: [{ id: "g1", polygon: GONDOLA }],
+      fixtures: [
+        { id: "c1", kind: "open-case", polygon: rect(4, 4.8, 16, 5.8), fans: false },
+        { id: "c2", kind: "island-case", polygon: rect(4, 6.2, 16, 7.2), fans: false },
+      ],
+      riskPoints: [{ id: "ls1", kind: "line-set", x: 9.5, y: 5.2 }, { id: "v1", kind: "valve", x: 14, y: 6.8 }],
+      backgroundZones: zones,
+    },
+    instrument: { transportDelayS: D, timeConstantS: TAU, alarmPpm: 2 },
+    readings,
+  };
+}
+
+describe("locate on small fixed stores", () => {
+  it("finds a leak at a case back on the correct side of the gondola", () => {
+    const leak: [number, number] = [9.5, 5.3];
+    const input = parseLocatorInput(store((x, y) => 0.3 + 40 * Math.exp(-aroundGondola([x, y], leak) / 1.2)));
+    const r = locate(input);
+    expect(r.candidates.length).toBeGreaterThan(0);
+    const top = r.candidates[0];
+    expect(Math.hypot(top.x - leak[0], top.y - leak[1])).toBeLessThan(1.5);
+    expect(top.y).toBeLessThan(5.8);
+    expect(top.fixtureId).toBe("c1");
+    expect(top.riskPointId).toBe("ls1");
+    expect(top.score).toBeGreaterThan(0);
+    expect(top.score).toBeLessThanOrEqual(1);
+    expect(top.strength).toBe(1);
+    expect(top.reason.length).toBeGreaterThan(20);
+    expect(top.nextCheck).toMatch(/ls1/);
+    // raw and corrected positions side by side; a walk at 1 m/s with D + τ = 4 s moves readings about 4 m back
+    const mid = r.readings[8];
+    expect(Math.hypot(mid.raw.x - mid.corrected.x, mid.raw.y - mid.corrected.y)).toBeCloseTo(4, 0);
+    expect(r.readings[0].flags).toContain("before-delay");
+  });
+
+  it("lists no suspect spot when nothing leaks", () => {
+    const r = locate(parseLocatorInput(store((x, y) => ((x * 7 + y * 3) % 2 < 0.6 ? 1 : 0))));
+    expect(r.candidates).toEqual([]);
+    expect(r.background.ppm).toBeLessThan(1);
+  });
+
+  it("explains readings near a benign-source zone by the zone and puts no suspect inside it", () => {
+    const zone = { id: "bz1", polygon: rect(17, 0.5, 19.5, 3), note: "aerosol storage" };
+    const r = locate(parseLocatorInput(store((x, y) => 8 * Math.exp(-Math.hypot(x - 18.2, y - 1.8) / 1.2), [zone])));
+    for (const c of r.candidates) expect(Math.hypot(c.x - 18.25, c.y - 1.75)).toBeGreaterThan(2);
+    expect(r.diagnostics.some((d) => d.kind === "benign-source" && d.zoneId === "bz1")).toBe(true);
+  });
+
+  it("leaves unsampled areas unknown in the field map instead of inventing values", () => {
+    const r = locate(parseLocatorInput(store(() => 0)));
+    const { width, cellSize, values, confidence } = r.field;
+    const at = (x: number, y: number) => Math.floor(y / cellSize) * width + Math.floor(x / cellSize);
+    expect(Number.isNaN(values[at(10, 11.7)])).toBe(true); // 3.2 m from the south aisle, nobody sampled there
+    expect(confidence[at(10, 11.5)]).toBe(0);
+    expect(values[at(10, 3.5)]).toBe(0);
+    expect(confidence[at(10, 3.5)]).toBeGreaterThan(0.5);
+  });
+
+  it("refuses a cell size whose grid would exceed the memory budget", () => {
+    expect(() => locate(parseLocatorInput(store(() => 0)), { cellSize: 0.01 })).toThrow(/plan: a 20 m x 12 m plan needs 2400000 cells/);
+  });
+});

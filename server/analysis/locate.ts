@@ -1,0 +1,265 @@
+import { gridCellCount, LocatorInputError, MAX_GRID_CELLS, type LocatorInput } from "../contracts/locator-input";
+import type { Candidate, CorrectedReading, Diagnostic, LocatorResult, ReadingFlag } from "../contracts/locator-output";
+import { polygonCentroid } from "./geometry/polygon-area";
+import { GeodesicSearch } from "./grid/geodesic-distance";
+import { cellCentre, cellIndexOf, cellsInside, createPlanGrid, nearestFreeCell } from "./grid/plan-grid";
+import { gridRoute } from "./lag/grid-route";
+import { lagCorrect } from "./lag/lag-correct";
+import { estimateBackground } from "./locator/background";
+import { candidateNextCheck, candidateReason, type CandidateFacts } from "./locator/candidate-words";
+import { benignSource, fansMixing, oneSidedPass, sparseCoverage } from "./locator/diagnostics";
+import { fieldMap } from "./locator/field-map";
+import { findSources, type FoundSource } from "./locator/greedy-sources";
+import { DEFAULT_LOCATOR_OPTIONS, type LocatorOptions } from "./locator/locator-options";
+import { nearestFixture, nearestRiskPoint } from "./locator/nearest-features";
+import { accumulateReadingFields, kernelColumn } from "./locator/reading-fields";
+import { createSourceKernel, kernelArea } from "./locator/source-kernel";
+import { HOURS_PER_YEAR, MOLAR_VOLUME_25C_L, ppmToMgPerM3, wellMixedEmission } from "./locator/units";
+
+export type { LocatorOptions } from "./locator/locator-options";
+
+/**
+ * The locator (issue 5): lag-corrected readings, a confidence-weighted concentration field and ranked
+ * suspect spots with diagnostics. Pure: no I/O, deterministic for the same input and options.
+ * The input must already satisfy locatorInputSchema (parseLocatorInput).
+ */
+export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {}): LocatorResult {
+  const o: LocatorOptions = { ...DEFAULT_LOCATOR_OPTIONS, ...options };
+  const { plan, instrument, readings } = input;
+  if (!(o.cellSize > 0)) throw new LocatorInputError([`options.cellSize: must be a positive number of metres, got ${o.cellSize}`]);
+  const cellsNeeded = gridCellCount(plan.width, plan.height, o.cellSize);
+  if (cellsNeeded > MAX_GRID_CELLS) {
+    throw new LocatorInputError([
+      `plan: a ${plan.width} m x ${plan.height} m plan needs ${cellsNeeded} cells at ${o.cellSize} m, over the memory budget of ${MAX_GRID_CELLS}`,
+    ]);
+  }
+  if (readings.length === 0) throw new LocatorInputError(["readings: must not be empty"]);
+
+  const grid = createPlanGrid(plan.width, plan.height, o.cellSize, plan.obstacles.map((b) => b.polygon));
+  const kernel = createSourceKernel(o.screeningLengthM, o.nearCutoffM, o.truncationM);
+  const n = readings.length;
+
+  // 1. lag correction along the walked route
+  const lagged = lagCorrect(readings, instrument.transportDelayS, instrument.timeConstantS, {
+    route: gridRoute(grid),
+    walkSpeedMps: o.walkSpeedMps > 0 ? o.walkSpeedMps : undefined,
+  });
+  const xs = new Float64Array(n);
+  const ys = new Float64Array(n);
+  const y = new Float64Array(n);
+  const censored = new Uint8Array(n);
+  const readingCell = new Int32Array(n);
+  for (let i = 0; i < n; i++) {
+    xs[i] = lagged[i].x;
+    ys[i] = lagged[i].y;
+    y[i] = readings[i].ppm;
+    censored[i] = readings[i].atLeast ? 1 : 0;
+    readingCell[i] = nearestFreeCell(grid, xs[i], ys[i]);
+  }
+
+  // 2. benign-source zones: fixed nuisance sources, distance measured from the whole zone
+  const cells = grid.width * grid.height;
+  const zoneDist = new Float32Array(cells).fill(Infinity);
+  const zoneOfReading = new Int32Array(n).fill(-1);
+  const zoneSearch = new GeodesicSearch(grid);
+  const nuisance = plan.backgroundZones.map((zone, z) => {
+    let zc = cellsInside(grid, zone.polygon).filter((k) => !grid.blocked[k]);
+    if (zc.length === 0) {
+      const [cx, cy] = polygonCentroid(zone.polygon);
+      zc = [nearestFreeCell(grid, cx, cy)].filter((k) => k >= 0);
+    }
+    const reach = Math.max(o.truncationM, o.zoneMarginM);
+    const settled = zoneSearch.fromCells(zc, reach);
+    for (let q = 0; q < settled; q++) {
+      const k = zoneSearch.settled[q];
+      if (zoneSearch.dist[k] < zoneDist[k]) zoneDist[k] = zoneSearch.dist[k];
+    }
+    const column = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+      const d = zoneSearch.dist[readingCell[i]];
+      column[i] = kernel.at(d);
+      if (d <= o.zoneMarginM && zoneOfReading[i] < 0) zoneOfReading[i] = z;
+    }
+    return column;
+  });
+
+  // 3. background and weights (noise is multiplicative plus a floor: w = 1/(a + β·y)²)
+  const usable = new Uint8Array(n);
+  for (let i = 0; i < n; i++) usable[i] = !censored[i] && zoneOfReading[i] < 0 ? 1 : 0;
+  const background = estimateBackground(y, usable);
+  const w = new Float64Array(n);
+  for (let i = 0; i < n; i++) w[i] = 1 / (o.noiseFloorPpm + o.noiseFraction * y[i]) ** 2;
+
+  // 4. one truncated geodesic search per sampled cell feeds both the field map and the source scan
+  const fields = accumulateReadingFields(grid, xs, ys, y, w, kernel, o.mapSigmaM);
+  const field = fieldMap(fields, grid.width, grid.height, grid.cellSize);
+
+  // 5. suspect spots
+  const allowed = new Uint8Array(cells);
+  for (let c = 0; c < cells; c++) {
+    allowed[c] = !grid.blocked[c] && zoneDist[c] > o.zoneMarginM && fields.nearestReading[c] <= o.maxReachM ? 1 : 0;
+  }
+  const supportThreshold = kernel.at(o.supportRadiusM);
+  const support = (column: Float64Array, b: number, residual: Float64Array) => {
+    const idx: number[] = [];
+    for (let i = 0; i < n; i++) {
+      if (column[i] >= supportThreshold && zoneOfReading[i] < 0 && residual[i] - b >= o.elevatedPpm) idx.push(i);
+    }
+    return idx;
+  };
+  const greedy = findSources({
+    fields, y, w, censored, nuisance, allowed,
+    gridWidth: grid.width,
+    cellSize: grid.cellSize,
+    maxLeaks: o.maxLeaks,
+    maxCandidates: o.maxCandidates,
+    separationM: o.separationM,
+    alternateFraction: o.alternateFraction,
+    credible: (_c, column, _q, b, residual, delta) => delta >= o.minDeltaChi2 && support(column, b, residual).length >= o.minSupport,
+  });
+  const sources = addMirrorSpot(greedy.sources);
+
+  const dof = Math.max(1, n - 2 - greedy.sources.length - nuisance.length);
+  const s2 = Math.max(1, greedy.chi2Final / dof);
+  const topQ = Math.max(sources[0]?.q ?? 0, 1e-12);
+  const gPerYearPerQ =
+    (wellMixedEmission(ppmToMgPerM3(1, o.molarMassGPerMol), o.airChangesPerH, kernelArea(kernel) * o.mixingHeightM) * HOURS_PER_YEAR) / 1000;
+  const candidates: Candidate[] = [];
+  let oneSidedTop = false;
+  sources.forEach((s, rank) => {
+    const [x, y0] = cellCentre(grid, s.cell);
+    const sup = support(s.column, greedy.fit.b, y);
+    const side = oneSidedPass(sup.map((i) => xs[i]), sup.map((i) => ys[i]), x, y0);
+    if (rank === 0) oneSidedTop = side.oneSided;
+    const radius = Math.max(o.minRadiusM, o.radiusScale * misfitRadius(greedy.firstScan.delta, s.cell, 5.99 * s2, grid.width, grid.cellSize));
+    const fixture = nearestFixture(plan.fixtures, x, y0);
+    const riskPoint = nearestRiskPoint(plan.riskPoints, x, y0);
+    const facts: CandidateFacts = {
+      alternate: s.alternate,
+      supportCount: sup.length,
+      peakPpm: sup.reduce((m, i) => Math.max(m, y[i]), 0),
+      backgroundPpm: background.ppm,
+      fixture,
+      riskPoint,
+      oneSided: side.oneSided,
+      radius,
+    };
+    const rawScore = 1 - Math.exp(-0.5 * Math.sqrt(s.delta / (s2 * o.minDeltaChi2)));
+    const score = Math.min(rawScore, rank > 0 ? candidates[rank - 1].score : 1);
+    candidates.push({
+      rank: rank + 1,
+      x: round2(x),
+      y: round2(y0),
+      radius: round2(radius),
+      score: round2(score),
+      strength: round2(s.q / topQ),
+      strengthGPerYear: Math.round(s.q * gPerYearPerQ),
+      fixtureId: fixture?.item.id ?? null,
+      riskPointId: riskPoint?.item.id ?? null,
+      reason: candidateReason(facts),
+      nextCheck: candidateNextCheck(facts),
+    });
+  });
+
+  // mirror of the top spot across a single pass, as an alternative (locator-methods §5.3)
+  function addMirrorSpot(found: FoundSource[]): FoundSource[] {
+    if (found.length === 0 || found.length >= o.maxCandidates) return found;
+    const top = found[0];
+    const [x, y0] = cellCentre(grid, top.cell);
+    const sup = support(top.column, greedy.fit.b, y);
+    const side = oneSidedPass(sup.map((i) => xs[i]), sup.map((i) => ys[i]), x, y0);
+    if (!side.oneSided) return found;
+    const [mx, my] = side.mirror;
+    if (mx < 0 || my < 0 || mx > plan.width || my > plan.height) return found;
+    const mc = cellIndexOf(grid, mx, my);
+    if (!allowed[mc] || found.some((f) => cellDistance(f.cell, mc, grid.width) * grid.cellSize < o.separationM)) return found;
+    const mirror: FoundSource = { cell: mc, delta: greedy.firstScan.delta[mc], column: kernelColumn(fields, mc, n), alternate: true, q: greedy.firstScan.q[mc] };
+    return [top, mirror, ...found.slice(1)].slice(0, o.maxCandidates);
+  }
+
+  // 6. diagnostics
+  const diagnostics: Diagnostic[] = [];
+  for (const f of plan.fixtures) {
+    const d = fansMixing(f, xs, ys, y, background.ppm, instrument.alarmPpm);
+    if (d) diagnostics.push(d);
+  }
+  plan.backgroundZones.forEach((zone, z) => {
+    let explained = 0;
+    let peak = 0;
+    for (let i = 0; i < n; i++) {
+      if (zoneOfReading[i] === z && y[i] - background.ppm >= o.elevatedPpm) {
+        explained++;
+        peak = Math.max(peak, y[i]);
+      }
+    }
+    const d = greedy.fit.q[z] > 0 ? benignSource(zone, explained, peak) : null;
+    if (d) diagnostics.push(d);
+  });
+  const coverage = sparseCoverage(Float64Array.from(readings, (r) => r.x), Float64Array.from(readings, (r) => r.y), o.coverageGapM);
+  if (coverage) diagnostics.push(coverage);
+  if (oneSidedTop) {
+    diagnostics.push({
+      kind: "one-sided-pass",
+      message: "The top suspect spot is seen from one pass only, so which side of the path it is on cannot be told: make a pass along the other face.",
+    });
+  }
+  const early = lagged.filter((l) => l.beforeDelay).length;
+  if (early > 0) {
+    diagnostics.push({
+      kind: "early-readings",
+      message: `${early} reading${early > 1 ? "s were" : " was"} taken before one delay (${round2(instrument.transportDelayS + instrument.timeConstantS)} s) had passed and ${early > 1 ? "are" : "is"} placed at the first tap.`,
+    });
+  }
+  const over = censored.reduce((a, b) => a + b, 0);
+  if (over > 0) {
+    diagnostics.push({ kind: "over-range", message: `${over} reading${over > 1 ? "s were" : " was"} over range and counted as "at least" that value.` });
+  }
+
+  const corrected: CorrectedReading[] = readings.map((r, i) => {
+    const flags: ReadingFlag[] = [];
+    if (lagged[i].beforeDelay) flags.push("before-delay");
+    if (lagged[i].pathGap) flags.push("path-gap");
+    if (grid.blocked[cellIndexOf(grid, xs[i], ys[i])]) flags.push("snapped");
+    if (censored[i]) flags.push("over-range");
+    if (zoneOfReading[i] >= 0) flags.push("in-benign-zone");
+    return { index: i, raw: { x: r.x, y: r.y }, corrected: { x: round2(xs[i]), y: round2(ys[i]) }, t: r.t, ppm: r.ppm, flags };
+  });
+
+  return {
+    candidates,
+    background: { ppm: round2(background.ppm) },
+    diagnostics,
+    assumptions: [
+      `Readings moved back along the walk by the transport delay plus the sensor time constant (${round2(instrument.transportDelayS + instrument.timeConstantS)} s).`,
+      `Strength in g/yr assumes the store air is well mixed over ${o.mixingHeightM} m height with ${o.airChangesPerH} air changes per hour, ` +
+        `a refrigerant of ${o.molarMassGPerMol} g/mol and ${MOLAR_VOLUME_25C_L} L/mol (25 °C, 101.325 kPa); treat it as an order of magnitude.`,
+      "Suspect spots are search zones for a hand check, not pinpoints; follow local codes and certified practice when working on the system.",
+    ],
+    readings: corrected,
+    field,
+  };
+}
+
+function cellDistance(a: number, b: number, width: number): number {
+  const ai = a % width;
+  const bi = b % width;
+  return Math.hypot(ai - bi, (a - ai) / width - (b - bi) / width);
+}
+
+/** √(area/π) of the cells near `c` whose Δχ² is within `tolerance` of the value at c. */
+function misfitRadius(delta: Float64Array, c: number, tolerance: number, width: number, cellSize: number): number {
+  const reach = Math.ceil(6 / cellSize);
+  const ci = c % width;
+  const cj = (c - ci) / width;
+  const height = delta.length / width;
+  const floor = delta[c] - tolerance;
+  let count = 0;
+  for (let j = Math.max(0, cj - reach); j <= Math.min(height - 1, cj + reach); j++) {
+    for (let i = Math.max(0, ci - reach); i <= Math.min(width - 1, ci + reach); i++) {
+      if (delta[j * width + i] >= floor && delta[j * width + i] > 0) count++;
+    }
+  }
+  return Math.sqrt((count * cellSize * cellSize) / Math.PI);
+}
+
+const round2 = (v: number) => Math.round(v * 100) / 100;

@@ -1,0 +1,111 @@
+import { fitNonnegative, type NonnegativeFit } from "./nonnegative-fit";
+import { kernelColumn, sumWeightedKernelTimes, type ReadingFields } from "./reading-fields";
+import { localOptima, scanSources, type ScanResult } from "./source-scan";
+
+export interface FoundSource {
+  cell: number;
+  /** Δχ² of this source when it was picked. */
+  delta: number;
+  /** Kernel value of every reading seen from this source. */
+  column: Float64Array;
+  /** True for an alternative spot of the first scan (e.g. the other side of a pass), not a fitted source. */
+  alternate: boolean;
+  q: number;
+}
+
+export interface GreedyInput {
+  fields: ReadingFields;
+  y: Float64Array;
+  w: Float64Array;
+  censored: Uint8Array;
+  /** Fixed-position nuisance sources (benign-source zones), fitted with free Q ≥ 0 and never listed. */
+  nuisance: Float64Array[];
+  allowed: Uint8Array;
+  gridWidth: number;
+  cellSize: number;
+  maxLeaks: number;
+  maxCandidates: number;
+  separationM: number;
+  alternateFraction: number;
+  credible: (cell: number, column: Float64Array, q: number, b: number, residual: Float64Array, delta: number) => boolean;
+}
+
+export interface GreedyResult {
+  sources: FoundSource[];
+  fit: NonnegativeFit;
+  firstScan: ScanResult;
+  /** χ² of the final joint fit and of the fit with nuisance sources only. */
+  chi2Final: number;
+  chi2NoLeak: number;
+}
+
+/**
+ * Several leaks by greedy forward selection (in the spirit of Yee 2012): scan all cells against the
+ * residual of the current joint fit, take the best credible cell, refit all strengths jointly, repeat
+ * until no credible cell is left. The first scan's other local optima become alternatives.
+ */
+export function findSources(input: GreedyInput): GreedyResult {
+  const { fields, y, w, censored, allowed } = input;
+  const n = y.length;
+  const cells = fields.sumWG.length;
+  const columns = input.nuisance.slice();
+  let fit = fitNonnegative(y, w, columns, censored);
+  const chi2NoLeak = fit.chi2;
+  const sources: FoundSource[] = [];
+  const sumWGR = new Float64Array(cells);
+  const residual = new Float64Array(n);
+  let firstScan: ScanResult | null = null;
+  for (let round = 0; round < input.maxLeaks; round++) {
+    residual.set(y);
+    columns.forEach((col, s) => {
+      const q = fit.q[s];
+      if (q > 0) for (let i = 0; i < n; i++) residual[i] -= q * col[i];
+    });
+    let sw = 0, swr = 0, swrr = 0;
+    for (let i = 0; i < n; i++) {
+      sw += w[i];
+      swr += w[i] * residual[i];
+      swrr += w[i] * residual[i] * residual[i];
+    }
+    sumWeightedKernelTimes(fields, w, residual, sumWGR);
+    const scan = scanSources(fields.sumWG, fields.sumWGG, sumWGR, { sumW: sw, sumWR: swr, sumWRR: swrr }, allowed);
+    if (!firstScan) firstScan = scan;
+    const [best] = localOptima(scan.delta, input.gridWidth, input.cellSize, input.separationM, 1);
+    if (best === undefined) break;
+    const column = kernelColumn(fields, best, n);
+    if (!input.credible(best, column, scan.q[best], scan.b[best], residual, scan.delta[best])) break;
+    columns.push(column);
+    fit = fitNonnegative(y, w, columns, censored);
+    sources.push({ cell: best, delta: scan.delta[best], column, alternate: false, q: 0 });
+  }
+  const nn = input.nuisance.length;
+  sources.forEach((s, k) => (s.q = fit.q[nn + k]));
+  if (firstScan && sources.length > 0 && sources.length < input.maxCandidates) {
+    const sep2 = (input.separationM / input.cellSize) ** 2;
+    const bestDelta = sources[0].delta;
+    const near = (a: number, b: number) => {
+      const ai = a % input.gridWidth, bi = b % input.gridWidth;
+      return (ai - bi) ** 2 + ((a - ai) / input.gridWidth - (b - bi) / input.gridWidth) ** 2 < sep2;
+    };
+    const optima = localOptima(firstScan.delta, input.gridWidth, input.cellSize, input.separationM, 16, input.alternateFraction * bestDelta);
+    const residual0 = new Float64Array(y);
+    input.nuisance.forEach((col, s) => {
+      const q = fit.q[s];
+      if (q > 0) for (let i = 0; i < n; i++) residual0[i] -= q * col[i];
+    });
+    for (const c of optima) {
+      if (sources.length >= input.maxCandidates) break;
+      if (sources.some((s) => near(s.cell, c))) continue;
+      const column = kernelColumn(fields, c, n);
+      if (!input.credible(c, column, firstScan.q[c], firstScan.b[c], residual0, firstScan.delta[c])) continue;
+      sources.push({ cell: c, delta: firstScan.delta[c], column, alternate: true, q: firstScan.q[c] });
+    }
+  }
+  return {
+    sources,
+    fit,
+    firstScan: firstScan ?? { delta: new Float64Array(cells), q: new Float64Array(cells), b: new Float64Array(cells), chi2Background: 0 },
+    chi2Final: fit.chi2,
+    chi2NoLeak,
+  };
+}

@@ -1,0 +1,73 @@
+// Tunable settings of the locator, with the reason for each default. The radius and credibility
+// settings are calibrated on the scenario benchmark (npm run bench:locate), never on single stores.
+
+export interface LocatorOptions {
+  /** Walking pace between stops for the stop-and-go lag model, m/s (issue 5: 0.7–1.2); 0 = move evenly between taps. */
+  walkSpeedMps: number;
+  /** Grid cell, m (issue 5 default). */
+  cellSize: number;
+  /** Screening length L = √(K/λ), m: K ≈ 0.01–0.05 m²/s in aisles and λ = 1.5–4 air changes/h give 3–11 m. */
+  screeningLengthM: number;
+  /** Near-field cut-off d0 of the kernel, m (about two cells; tap jitter is about 0.3 m). */
+  nearCutoffM: number;
+  /** Truncation radius of each per-reading search, m (locator-methods §1d: 12–25 m; cost grows with R²). */
+  truncationM: number;
+  /** Gaussian width of the field map, m (about half a tap spacing of 1.2–1.5 m plus jitter). */
+  mapSigmaM: number;
+  /** Noise model w = 1/(a + β·y)²: floor a ≈ √(0.5² + 1/12) ppm (about 0.5 ppm noise plus whole-ppm rounding) and lognormal share β ≈ 0.3 (issue 5 noise figures). */
+  noiseFloorPpm: number;
+  noiseFraction: number;
+  /** Leaks fitted at once, and candidates listed at most (fitted leaks plus alternatives). */
+  maxLeaks: number;
+  maxCandidates: number;
+  /** Suspect spots are at least this far apart, m. */
+  separationM: number;
+  /** An alternative spot must reach this share of the best spot's Δχ². */
+  alternateFraction: number;
+  /** Credibility: minimum Δχ², and readings within supportRadiusM reading at least elevatedPpm over background. */
+  minDeltaChi2: number;
+  supportRadiusM: number;
+  minSupport: number;
+  elevatedPpm: number;
+  /** No suspect spot within this distance of a benign-source zone, m. */
+  zoneMarginM: number;
+  /** No suspect spot farther than this from every reading, m (unsampled areas are unknown). */
+  maxReachM: number;
+  /** Radius = max(minRadiusM, radiusScale · misfit-contour radius), calibrated on the benchmark. */
+  minRadiusM: number;
+  radiusScale: number;
+  /** Tap gaps longer than this are reported as sparse coverage, m (common practice, no published source). */
+  coverageGapM: number;
+  /** The well-mixed assumption behind the g/yr estimate. */
+  airChangesPerH: number;
+  mixingHeightM: number;
+  molarMassGPerMol: number;
+}
+
+export const DEFAULT_LOCATOR_OPTIONS: LocatorOptions = {
+  walkSpeedMps: 0,
+  cellSize: 0.25,
+  screeningLengthM: 5,
+  nearCutoffM: 0.5,
+  truncationM: 10,
+  mapSigmaM: 0.75,
+  noiseFloorPpm: 0.6,
+  noiseFraction: 0.3,
+  maxLeaks: 3,
+  maxCandidates: 5,
+  separationM: 2,
+  alternateFraction: 0.3,
+  minDeltaChi2: 25,
+  supportRadiusM: 3,
+  minSupport: 2,
+  elevatedPpm: 1.5,
+  zoneMarginM: 1.5,
+  maxReachM: 4,
+  minRadiusM: 1,
+  radiusScale: 1,
+  coverageGapM: 3,
+  airChangesPerH: 2,
+  mixingHeightM: 3,
+  // R-404A, a common supermarket blend (standards.md §3, molar mass derived there)
+  molarMassGPerMol: 97.6,
+};

@@ -1,0 +1,166 @@
+import { GeodesicSearch } from "../grid/geodesic-distance";
+import { nearestFreeCell, type PlanGrid } from "../grid/plan-grid";
+import type { SourceKernel } from "./source-kernel";
+
+/**
+ * One truncated geodesic search per sampled cell (readings in the same cell share it), accumulating
+ * everything later steps need, so no reading-by-cell distance matrix is ever held (locator-methods §2,
+ * route 1). By the symmetry of distance, the kernel value of a reading seen from a cell equals the
+ * cell seen from the reading, so the per-cell source fit needs no per-candidate search.
+ */
+export interface ReadingFields {
+  /** Sampled cell of each group, and the group of each reading. */
+  groupCell: Int32Array;
+  groupOfReading: Int32Array;
+  /** CSR by group: entries[start[g] .. start[g+1]) hold (cell, kernel value). */
+  start: Int32Array;
+  cell: Int32Array;
+  kernel: Float32Array;
+  /** Per cell Σ w·g and Σ w·g² over readings (weights w as given). */
+  sumWG: Float64Array;
+  sumWGG: Float64Array;
+  /** Per cell Gaussian map weights Ω = Σ ω and Σ ω·y (Kernel DM+V, Lilienthal et al. 2009). */
+  omega: Float64Array;
+  omegaY: Float64Array;
+  /** Geodesic distance from each cell to the nearest reading (Infinity beyond the truncation radius). */
+  nearestReading: Float32Array;
+}
+
+export function accumulateReadingFields(
+  grid: PlanGrid,
+  xs: Float64Array,
+  ys: Float64Array,
+  values: Float64Array,
+  weights: Float64Array,
+  kernel: SourceKernel,
+  mapSigmaM: number,
+): ReadingFields {
+  const n = xs.length;
+  const cells = grid.width * grid.height;
+  const cellOfReading = new Int32Array(n);
+  for (let i = 0; i < n; i++) cellOfReading[i] = nearestFreeCell(grid, xs[i], ys[i]);
+  const order = Array.from({ length: n }, (_, i) => i).sort((a, b) => cellOfReading[a] - cellOfReading[b]);
+
+  const groupOfReading = new Int32Array(n);
+  const groupCellList: number[] = [];
+  const groupW: number[] = [];
+  const groupY: number[] = [];
+  const groupCount: number[] = [];
+  const groupFirst: number[] = [];
+  for (const i of order) {
+    const g = groupCellList.length - 1;
+    if (g >= 0 && groupCellList[g] === cellOfReading[i]) {
+      groupW[g] += weights[i];
+      groupY[g] += values[i];
+      groupCount[g]++;
+      groupOfReading[i] = g;
+    } else {
+      groupCellList.push(cellOfReading[i]);
+      groupW.push(weights[i]);
+      groupY.push(values[i]);
+      groupCount.push(1);
+      groupFirst.push(i);
+      groupOfReading[i] = g + 1;
+    }
+  }
+  const groups = groupCellList.length;
+
+  const sumWG = new Float64Array(cells);
+  const sumWGG = new Float64Array(cells);
+  const omega = new Float64Array(cells);
+  const omegaY = new Float64Array(cells);
+  const nearestReading = new Float32Array(cells).fill(Infinity);
+  const start = new Int32Array(groups + 1);
+  const perSearch = Math.ceil((Math.PI * kernel.truncationM ** 2) / grid.cellSize ** 2);
+  let cap = Math.max(1024, groups * perSearch);
+  let cellArr = new Int32Array(cap);
+  let kernArr = new Float32Array(cap);
+  let used = 0;
+
+  const search = new GeodesicSearch(grid);
+  const mapCut = 3 * mapSigmaM;
+  const inv2s2 = 1 / (2 * mapSigmaM * mapSigmaM);
+  for (let g = 0; g < groups; g++) {
+    const i = groupFirst[g];
+    const settled = search.fromPoint(xs[i], ys[i], kernel.truncationM);
+    if (used + settled > cap) {
+      cap = Math.max(cap * 2, used + settled);
+      const c2 = new Int32Array(cap);
+      c2.set(cellArr.subarray(0, used));
+      cellArr = c2;
+      const k2 = new Float32Array(cap);
+      k2.set(kernArr.subarray(0, used));
+      kernArr = k2;
+    }
+    start[g] = used;
+    const w = groupW[g];
+    const ySum = groupY[g];
+    const count = groupCount[g];
+    const { dist } = search;
+    const list = search.settled;
+    for (let q = 0; q < settled; q++) {
+      const c = list[q];
+      const d = dist[c];
+      if (d < nearestReading[c]) nearestReading[c] = d;
+      const gv = kernel.at(d);
+      if (gv > 0) {
+        sumWG[c] += w * gv;
+        sumWGG[c] += w * gv * gv;
+        cellArr[used] = c;
+        kernArr[used] = gv;
+        used++;
+      }
+      if (d <= mapCut) {
+        const om = Math.exp(-d * d * inv2s2);
+        omega[c] += count * om;
+        omegaY[c] += ySum * om;
+      }
+    }
+  }
+  start[groups] = used;
+  return {
+    groupCell: Int32Array.from(groupCellList),
+    groupOfReading,
+    start,
+    cell: cellArr.subarray(0, used),
+    kernel: kernArr.subarray(0, used),
+    sumWG,
+    sumWGG,
+    omega,
+    omegaY,
+    nearestReading,
+  };
+}
+
+/** Per cell Σ_i w_i·g_i(c)·r_i for a per-reading vector r (one pass over the stored entries). */
+export function sumWeightedKernelTimes(fields: ReadingFields, weights: Float64Array, r: Float64Array, out: Float64Array): Float64Array {
+  out.fill(0);
+  const groups = fields.groupCell.length;
+  const perGroup = new Float64Array(groups);
+  for (let i = 0; i < r.length; i++) perGroup[fields.groupOfReading[i]] += weights[i] * r[i];
+  const { start, cell, kernel } = fields;
+  for (let g = 0; g < groups; g++) {
+    const a = perGroup[g];
+    if (a === 0) continue;
+    for (let e = start[g], end = start[g + 1]; e < end; e++) out[cell[e]] += a * kernel[e];
+  }
+  return out;
+}
+
+/** Kernel values g_i(c) of every reading for one source cell c (0 beyond the truncation radius). */
+export function kernelColumn(fields: ReadingFields, c: number, readings: number): Float64Array {
+  const groups = fields.groupCell.length;
+  const perGroup = new Float64Array(groups);
+  const { start, cell, kernel } = fields;
+  for (let g = 0; g < groups; g++) {
+    for (let e = start[g], end = start[g + 1]; e < end; e++) {
+      if (cell[e] === c) {
+        perGroup[g] = kernel[e];
+        break;
+      }
+    }
+  }
+  const out = new Float64Array(readings);
+  for (let i = 0; i < readings; i++) out[i] = perGroup[fields.groupOfReading[i]];
+  return out;
+}

@@ -1,0 +1,86 @@
+/**
+ * Every cell as a candidate source: the weighted least-squares fit of r_i ≈ b + Q·g_i(c) with Q ≥ 0,
+ * b ≥ 0 in closed form from per-cell sums (locator-methods §1d), and the χ² improvement over the
+ * background-only model, Δχ²(c) = χ²₀ − χ²(c).
+ */
+export interface ScanTotals {
+  sumW: number;
+  sumWR: number;
+  sumWRR: number;
+}
+
+export interface ScanResult {
+  delta: Float64Array;
+  q: Float64Array;
+  b: Float64Array;
+  chi2Background: number;
+}
+
+export function scanSources(
+  sumWG: Float64Array,
+  sumWGG: Float64Array,
+  sumWGR: Float64Array,
+  totals: ScanTotals,
+  allowed: Uint8Array,
+): ScanResult {
+  const n = sumWG.length;
+  const delta = new Float64Array(n);
+  const q = new Float64Array(n);
+  const b = new Float64Array(n);
+  const { sumW: sw, sumWR: swr, sumWRR: swrr } = totals;
+  const b0 = Math.max(0, swr / sw);
+  const chi0 = swrr - 2 * b0 * swr + b0 * b0 * sw;
+  for (let c = 0; c < n; c++) {
+    if (!allowed[c]) continue;
+    const swg = sumWG[c];
+    const swgg = sumWGG[c];
+    const swgr = sumWGR[c];
+    if (swgg <= 0) continue;
+    const det = sw * swgg - swg * swg;
+    let qc = det > 1e-12 * sw * swgg ? (sw * swgr - swg * swr) / det : swgr / swgg;
+    let bc = (swr - qc * swg) / sw;
+    if (bc < 0) {
+      bc = 0;
+      qc = swgr / swgg;
+    }
+    if (!(qc > 0)) continue;
+    const chi = swrr - 2 * bc * swr - 2 * qc * swgr + bc * bc * sw + 2 * bc * qc * swg + qc * qc * swgg;
+    const d = chi0 - chi;
+    if (d > 0) {
+      delta[c] = d;
+      q[c] = qc;
+      b[c] = bc;
+    }
+  }
+  return { delta, q, b, chi2Background: chi0 };
+}
+
+/**
+ * Local optima of a score map with non-maximum suppression: cells taken best first, each at least
+ * `separationM` from every cell already taken. At most `limit` cells.
+ */
+export function localOptima(score: Float64Array, gridWidth: number, cellSize: number, separationM: number, limit: number, minScore = 0): number[] {
+  const idx: number[] = [];
+  for (let c = 0; c < score.length; c++) if (score[c] > minScore) idx.push(c);
+  idx.sort((a, b) => score[b] - score[a]);
+  const out: number[] = [];
+  const sep2 = (separationM / cellSize) ** 2;
+  for (const c of idx) {
+    const ci = c % gridWidth;
+    const cj = (c - ci) / gridWidth;
+    let ok = true;
+    for (const o of out) {
+      const oi = o % gridWidth;
+      const oj = (o - oi) / gridWidth;
+      if ((ci - oi) ** 2 + (cj - oj) ** 2 < sep2) {
+        ok = false;
+        break;
+      }
+    }
+    if (ok) {
+      out.push(c);
+      if (out.length >= limit) break;
+    }
+  }
+  return out;
+}
