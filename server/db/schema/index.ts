@@ -5,3 +5,4 @@ export * from "./sessions";
 export * from "./detectors";
 export * from "./systems";
 export * from "./plans";
+export * from "./sweeps";
