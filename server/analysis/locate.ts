@@ -2,7 +2,7 @@ import { gridCellCount, LocatorInputError, MAX_GRID_CELLS, type LocatorInput } f
 import type { Candidate, CorrectedReading, Diagnostic, LocatorResult, ReadingFlag } from "../contracts/locator-output";
 import { polygonCentroid } from "./geometry/polygon-area";
 import { GeodesicSearch } from "./grid/geodesic-distance";
-import { cellCentre, cellIndexOf, cellsInside, createPlanGrid, nearestFreeCell } from "./grid/plan-grid";
+import { cellCentre, cellIndexOf, cellsInside, createPlanGrid, nearestFreeCell, type PlanGrid } from "./grid/plan-grid";
 import { gridRoute } from "./lag/grid-route";
 import { lagCorrect } from "./lag/lag-correct";
 import { estimateBackground } from "./locator/background";
@@ -95,9 +95,11 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   const field = fieldMap(fields, grid.width, grid.height, grid.cellSize);
 
   // 5. suspect spots
+  const onEquipment = o.sourcesOnEquipment ? equipmentMask(grid, plan, o.equipmentMarginM) : null;
   const allowed = new Uint8Array(cells);
   for (let c = 0; c < cells; c++) {
-    allowed[c] = !grid.blocked[c] && zoneDist[c] > o.zoneMarginM && fields.nearestReading[c] <= o.maxReachM ? 1 : 0;
+    allowed[c] =
+      !grid.blocked[c] && zoneDist[c] > o.zoneMarginM && fields.nearestReading[c] <= o.maxReachM && (!onEquipment || onEquipment[c]) ? 1 : 0;
   }
   const supportThreshold = kernel.at(o.supportRadiusM);
   const support = (column: Float64Array, b: number, residual: Float64Array) => {
@@ -115,6 +117,7 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     maxCandidates: o.maxCandidates,
     separationM: o.separationM,
     alternateFraction: o.alternateFraction,
+    rankByStrength: o.rankByStrength,
     credible: (_c, column, _q, b, residual, delta) => delta >= o.minDeltaChi2 && support(column, b, residual).length >= o.minSupport,
   });
   const sources = addMirrorSpot(greedy.sources);
@@ -238,6 +241,30 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     readings: corrected,
     field,
   };
+}
+
+/**
+ * Cells where refrigerant can escape: inside a fixture (cases, walk-ins, machine rooms hold the coils,
+ * valves and piping) or near a drawn risk point, each grown by `margin` for drawing error. Null when
+ * the plan draws no equipment at all, so nothing is excluded.
+ */
+function equipmentMask(grid: PlanGrid, plan: LocatorInput["plan"], margin: number): Uint8Array | null {
+  if (plan.fixtures.length === 0 && plan.riskPoints.length === 0) return null;
+  const mask = new Uint8Array(grid.width * grid.height);
+  const search = new GeodesicSearch(grid);
+  const seeds: number[] = [];
+  for (const f of plan.fixtures) for (const k of cellsInside(grid, f.polygon)) seeds.push(k);
+  for (const p of plan.riskPoints) {
+    const k = nearestFreeCell(grid, p.x, p.y);
+    if (k >= 0) seeds.push(k);
+  }
+  const settled = search.fromCells(seeds, margin);
+  for (let q = 0; q < settled; q++) mask[search.settled[q]] = 1;
+  for (const p of plan.riskPoints) {
+    const settledRp = search.fromPoint(p.x, p.y, 1);
+    for (let q = 0; q < settledRp; q++) mask[search.settled[q]] = 1;
+  }
+  return mask;
 }
 
 function cellDistance(a: number, b: number, width: number): number {

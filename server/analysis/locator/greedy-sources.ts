@@ -27,6 +27,7 @@ export interface GreedyInput {
   maxCandidates: number;
   separationM: number;
   alternateFraction: number;
+  rankByStrength: boolean;
   credible: (cell: number, column: Float64Array, q: number, b: number, residual: Float64Array, delta: number) => boolean;
 }
 
@@ -80,9 +81,12 @@ export function findSources(input: GreedyInput): GreedyResult {
   }
   const nn = input.nuisance.length;
   sources.forEach((s, k) => (s.q = fit.q[nn + k]));
+  const bestDelta = Math.max(0, ...sources.map((s) => s.delta));
+  // Rank fitted sources by strength: a weak source that the greedy step picked early usually mops up
+  // far-field gas of a strong one that the truncated kernel cannot reach.
+  if (input.rankByStrength) sources.sort((a, b) => b.q - a.q);
   if (firstScan && sources.length > 0 && sources.length < input.maxCandidates) {
     const sep2 = (input.separationM / input.cellSize) ** 2;
-    const bestDelta = sources[0].delta;
     const near = (a: number, b: number) => {
       const ai = a % input.gridWidth, bi = b % input.gridWidth;
       return (ai - bi) ** 2 + ((a - ai) / input.gridWidth - (b - bi) / input.gridWidth) ** 2 < sep2;

@@ -22,6 +22,8 @@ export interface LocatorOptions {
   maxCandidates: number;
   /** Suspect spots are at least this far apart, m. */
   separationM: number;
+  /** Order fitted sources by strength (true) or by the order the greedy fit picked them (false). */
+  rankByStrength: boolean;
   /** An alternative spot must reach this share of the best spot's Δχ². */
   alternateFraction: number;
   /** Credibility: minimum Δχ², and readings within supportRadiusM reading at least elevatedPpm over background. */
@@ -29,6 +31,12 @@ export interface LocatorOptions {
   supportRadiusM: number;
   minSupport: number;
   elevatedPpm: number;
+  /**
+   * Refrigerant escapes only from equipment: suspect spots lie inside fixtures or within 1 m of a risk
+   * point, with `equipmentMarginM` for drawing error. Off when the plan draws no equipment.
+   */
+  sourcesOnEquipment: boolean;
+  equipmentMarginM: number;
   /** No suspect spot within this distance of a benign-source zone, m. */
   zoneMarginM: number;
   /** No suspect spot farther than this from every reading, m (unsampled areas are unknown). */
@@ -57,10 +65,13 @@ export const DEFAULT_LOCATOR_OPTIONS: LocatorOptions = {
   maxCandidates: 5,
   separationM: 2,
   alternateFraction: 0.3,
+  rankByStrength: true,
   minDeltaChi2: 25,
   supportRadiusM: 3,
   minSupport: 2,
   elevatedPpm: 1.5,
+  sourcesOnEquipment: true,
+  equipmentMarginM: 0.3,
   zoneMarginM: 1.5,
   maxReachM: 4,
   minRadiusM: 1,
