@@ -18,6 +18,7 @@ import { storesRouter } from "./api/stores/stores.router";
 import { detectorsRouter } from "./api/detectors/detectors.router";
 import { systemsRouter } from "./api/systems/systems.router";
 import { plansRouter } from "./api/plans/plans.router";
+import { analysisRouter } from "./api/analysis/analysis.router";
 import { sweepsRouter } from "./api/sweeps/sweeps.router";
 
 const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
@@ -68,6 +69,7 @@ export function createApp(ctx: AppContext): Express {
   api.use(detectorsRouter(ctx));
   api.use(systemsRouter(ctx));
   api.use(plansRouter(ctx));
+  api.use(analysisRouter(ctx));
   api.use(sweepsRouter(ctx));
   api.use(notFoundApi);
   app.use("/api", api);

@@ -6,3 +6,4 @@ export * from "./detectors";
 export * from "./systems";
 export * from "./plans";
 export * from "./sweeps";
+export * from "./analyses";

@@ -1,0 +1,17 @@
+import { Router } from "express";
+import { z } from "zod";
+import type { AppContext } from "../../context";
+import { analysisQuery } from "../../contracts/analysis";
+import { member, requireMember } from "../../middleware/auth";
+import { validate } from "../../middleware/validate";
+import { getAnalysis } from "./analysis.service";
+
+const idParam = z.object({ id: z.uuid("must be a valid id") });
+
+export function analysisRouter(ctx: AppContext): Router {
+  const router = Router();
+  router.get("/sweeps/:id/analysis", requireMember("stores.read"), validate(idParam, "params"), validate(analysisQuery, "query"), async (req, res) => {
+    res.json(await getAnalysis(ctx, member(req), res.locals.params.id, res.locals.query));
+  });
+  return router;
+}
