@@ -43,6 +43,7 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
       appUrl: overrides.appUrl ?? env.APP_URL ?? `http://${env.HOST}:${env.PORT}`,
       outboxEnabled: Boolean(fakeSmtp),
       uploadsDir: env.UPLOADS_DIR,
+      planImageLimits: { maxPixels: Math.round(env.PLAN_MAX_MEGAPIXELS * 1_000_000) },
       secureCookies: (env.APP_URL ?? "").startsWith("https://"),
       serveClient: true,
     },

@@ -20,6 +20,8 @@ const envSchema = z.object({
   MAIL_FROM: z.string().default("Plumeline <no-reply@plumeline.local>"),
   FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
   UPLOADS_DIR: z.string().default("uploads"),
+  // Plan images: the most pixels a header may declare before it is refused undecoded (decompression bombs).
+  PLAN_MAX_MEGAPIXELS: z.coerce.number().positive("PLAN_MAX_MEGAPIXELS must be more than 0").max(200, "PLAN_MAX_MEGAPIXELS must be at most 200").default(40),
   LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
   SEED_DEMO: z.enum(["true", "false"]).default("true"),
 });

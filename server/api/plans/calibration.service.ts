@@ -2,7 +2,7 @@ import { eq, sql } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import type { CalibrationInput, Plan } from "../../contracts/plans";
 import { toMetres } from "../../analysis/geometry/units";
-import { plans } from "../../db/schema/index";
+import { fixtures, plans } from "../../db/schema/index";
 import { transformFixture } from "../../domain/plans/transform-fixture";
 import { badRequest, HttpError } from "../../lib/http-error";
 import type { Viewer } from "../stores/store-access";
@@ -10,7 +10,6 @@ import { assertCurrentVersion, assertRevision, fixtureCounts, loadVisiblePlan, l
 import { fixtureToRow, rowToFixture, toPlan, type PlanRow } from "./plan-rows";
 import { planHasSweeps } from "./plan-sweeps";
 import { addPlanVersion, insertFixtureRows, loadFixtureRows } from "./plan-versions";
-import { fixtures } from "../../db/schema/index";
 
 /** A drawn line shorter than this is too imprecise to calibrate from (a few pixels of error). */
 export const MIN_CALIBRATION_PIXELS = 10;
@@ -46,6 +45,42 @@ async function rescaleInPlace(tx: DbOrTx, plan: PlanRow, factor: number): Promis
 }
 
 /**
+ * The same drawing with a new scale as the store's next version, for a plan that has sweeps:
+ * the sweeps stay on `plan` untouched; the fixtures are copied with their ids and rescaled, and
+ * the alignment is exactly the scale change about the origin.
+ */
+export async function addRecalibratedVersion(
+  tx: DbOrTx,
+  plan: PlanRow,
+  next: { metresPerPixel: number; calibration: NonNullable<PlanRow["calibration"]>; userId: string | null },
+): Promise<PlanRow> {
+  if (!plan.metresPerPixel || !plan.imageWidthPx || !plan.imageHeightPx) throw new Error("only a calibrated image plan can be re-calibrated into a new version");
+  const factor = next.metresPerPixel / plan.metresPerPixel;
+  return addPlanVersion(
+    tx,
+    {
+      companyId: plan.companyId,
+      storeId: plan.storeId,
+      source: "image",
+      originalKey: plan.originalKey,
+      displayKey: plan.displayKey,
+      thumbKey: plan.thumbKey,
+      originalMime: plan.originalMime,
+      originalWidthPx: plan.originalWidthPx,
+      originalHeightPx: plan.originalHeightPx,
+      imageWidthPx: plan.imageWidthPx,
+      imageHeightPx: plan.imageHeightPx,
+      metresPerPixel: next.metresPerPixel,
+      calibration: next.calibration,
+      widthM: plan.imageWidthPx * next.metresPerPixel,
+      heightM: plan.imageHeightPx * next.metresPerPixel,
+      createdById: next.userId,
+    },
+    { transform: { scale: factor, rotation: 0, tx: 0, ty: 0 }, alignmentKnown: true },
+  );
+}
+
+/**
  * Stores a plan's scale. Fixtures were drawn over the image, so their pixel positions are what
  * the lead tech meant: with a new scale their metres change by new/old. Without sweeps the
  * fixtures are rescaled in place; with sweeps a new version is made and the old one (and its
@@ -72,7 +107,7 @@ export async function calibratePlan(ctx: AppContext, viewer: Viewer, userId: str
       return { row, outcome: "first" as const };
     }
     const factor = mpp / plan.metresPerPixel;
-    if (!(await planHasSweeps(ctx.db, plan.id))) {
+    if (!(await planHasSweeps(tx, plan.id))) {
       await rescaleInPlace(tx, plan, factor);
       const [row] = await tx
         .update(plans)
@@ -82,28 +117,7 @@ export async function calibratePlan(ctx: AppContext, viewer: Viewer, userId: str
       return { row, outcome: "rescaled" as const };
     }
     await assertCurrentVersion(tx, plan);
-    const row = await addPlanVersion(
-      tx,
-      {
-        companyId: plan.companyId,
-        storeId: plan.storeId,
-        source: "image",
-        originalKey: plan.originalKey,
-        displayKey: plan.displayKey,
-        thumbKey: plan.thumbKey,
-        originalMime: plan.originalMime,
-        originalWidthPx: plan.originalWidthPx,
-        originalHeightPx: plan.originalHeightPx,
-        imageWidthPx: plan.imageWidthPx,
-        imageHeightPx: plan.imageHeightPx,
-        metresPerPixel: mpp,
-        calibration,
-        ...extent,
-        createdById: userId,
-      },
-      // Same drawing, new scale: the alignment is exactly the scale change about the origin.
-      { transform: { scale: factor, rotation: 0, tx: 0, ty: 0 }, alignmentKnown: true },
-    );
+    const row = await addRecalibratedVersion(tx, plan, { metresPerPixel: mpp, calibration, userId });
     return { row, outcome: "new-version" as const };
   });
   const counts = await fixtureCounts(ctx.db, [result.row.id]);

@@ -8,6 +8,9 @@ import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 import { makePng } from "../../../tests/helpers/plan-images";
 import type { Fixture } from "../../contracts/fixtures";
 import type { Role } from "../../domain/roles";
+import { eq } from "drizzle-orm";
+import { plans } from "../../db/schema/index";
+import { addRecalibratedVersion } from "./calibration.service";
 
 let t: TestApp;
 let uploads: string;
@@ -252,6 +255,27 @@ describe("plan versions", () => {
     const store = (await lead.get(`/api/stores/${storeId}`)).body;
     expect(store.currentPlan.id).toBe(v2.id);
     expect(store.planVersions.map((p: { version: number; fixtureCount: number }) => [p.version, p.fixtureCount])).toEqual([[2, 1], [1, 3]]);
+  });
+
+  it("re-calibrating once sweeps exist makes a new version; the old one does not move", async () => {
+    // Sweeps arrive with issue 4, so planHasSweeps is false for every plan today; the path it
+    // switches to is exercised directly here, on the real database.
+    const lead = await signedIn("lead-tech");
+    const { storeId, plan: v1 } = await calibratedPlan(lead, "Versions C"); // 0.05 m/px
+    const list = sampleFixtures();
+    const saved = (await lead.put(`/api/plans/${v1.id}/fixtures`, { layoutRevision: v1.layoutRevision, fixtures: list })).body;
+    const [v1Row] = await t.ctx.db.select().from(plans).where(eq(plans.id, v1.id));
+    const calibration = { a: { x: 0, y: 0 }, b: { x: 200, y: 0 }, length: { value: 20, unit: "m" as const } };
+    const v2 = await t.ctx.db.transaction((tx) => addRecalibratedVersion(tx, v1Row, { metresPerPixel: 0.1, calibration, userId: null }));
+    expect(v2).toMatchObject({ version: 2, previousPlanId: v1.id, metresPerPixel: 0.1, widthM: 40, heightM: 30, alignmentMatched: true, displayKey: v1Row.displayKey });
+    expect(v2.alignment).toEqual({ scale: 2, rotation: 0, tx: 0, ty: 0 });
+    const moved = (await lead.get(`/api/plans/${v2.id}/fixtures`)).body.fixtures;
+    expect(moved.map((f: Fixture) => f.id)).toEqual(list.map((f) => f.id));
+    expect(moved[0].polygon).toEqual(rect(1, 1, 6, 2));
+    expect(moved[2].point).toEqual({ x: 10, y: 8 });
+    expect((await lead.get(`/api/plans/${v1.id}/fixtures`)).body).toMatchObject({ layoutRevision: saved.layoutRevision, fixtures: list });
+    expect((await lead.get(`/api/plans/${v1.id}`)).body.metresPerPixel).toBe(0.05);
+    expect((await lead.get(`/api/stores/${storeId}`)).body.currentPlan.id).toBe(v2.id);
   });
 
   it("the first version has nothing to align to; coinciding points are a field error", async () => {
