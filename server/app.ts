@@ -20,6 +20,8 @@ import { systemsRouter } from "./api/systems/systems.router";
 import { plansRouter } from "./api/plans/plans.router";
 import { analysisRouter } from "./api/analysis/analysis.router";
 import { sweepsRouter } from "./api/sweeps/sweeps.router";
+import { findingsRouter } from "./api/findings/findings.router";
+import { complianceRouter } from "./api/compliance/compliance.router";
 
 const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
 
@@ -71,6 +73,8 @@ export function createApp(ctx: AppContext): Express {
   api.use(plansRouter(ctx));
   api.use(analysisRouter(ctx));
   api.use(sweepsRouter(ctx));
+  api.use(findingsRouter(ctx));
+  api.use(complianceRouter(ctx));
   api.use(notFoundApi);
   app.use("/api", api);
 

@@ -7,3 +7,5 @@ export * from "./systems";
 export * from "./plans";
 export * from "./sweeps";
 export * from "./analyses";
+export * from "./findings";
+export * from "./compliance";
