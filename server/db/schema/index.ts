@@ -9,3 +9,4 @@ export * from "./sweeps";
 export * from "./analyses";
 export * from "./findings";
 export * from "./compliance";
+export * from "./reports";
