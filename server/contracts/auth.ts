@@ -37,6 +37,8 @@ export const sessionInfo = z.object({
   csrfToken: z.string(),
   /** True when mail goes to the built-in fake SMTP server (demo and tests): the Outbox is then shown. */
   outboxEnabled: z.boolean(),
+  /** The units to show: the person's own choice, else the active company's default. */
+  units: z.object({ length: lengthUnitSchema, mass: massUnitSchema }),
 });
 export type SessionInfo = z.infer<typeof sessionInfo>;
 

@@ -42,6 +42,16 @@ describe("api client", () => {
     expect(calls[2]!.headers["x-csrf-token"]).toBe("after-sign-in");
   });
 
+  it("reads the session first when a page posts before any token is known", async () => {
+    const calls = stubFetch({
+      "GET /api/auth/session": { body: signedOutSession("fresh-token") },
+      "POST /api/auth/password-reset": { status: 202, body: { ok: true } },
+    });
+    await api.post("/api/auth/password-reset", ok, { email: "a@b.example" });
+    expect(calls.map((c) => `${c.method} ${c.path}`)).toEqual(["GET /api/auth/session", "POST /api/auth/password-reset"]);
+    expect(calls[1]!.headers["x-csrf-token"]).toBe("fresh-token");
+  });
+
   it("sends cookies same-origin", async () => {
     const fetchSpy = vi.fn(async () => new Response(JSON.stringify({ ok: true }), { status: 200 }));
     vi.stubGlobal("fetch", fetchSpy);

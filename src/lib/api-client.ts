@@ -35,6 +35,22 @@ export function currentCsrfToken(): string | null {
 
 type Method = "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
 
+const SESSION_PATH = "/api/auth/session";
+
+/**
+ * A page opened straight from an e-mail link (invitation, password reset) may post before
+ * anything has read the session; read it first so the request carries a token.
+ */
+async function ensureCsrfToken(): Promise<void> {
+  if (csrfToken) return;
+  try {
+    const response = await fetch(SESSION_PATH, { headers: { Accept: "application/json" }, credentials: "same-origin" });
+    if (response.ok) rememberCsrf(await readJson(response));
+  } catch {
+    // the real request below reports the network problem
+  }
+}
+
 export interface RequestOptions {
   body?: unknown;
   signal?: AbortSignal;
@@ -84,26 +100,17 @@ export async function apiRequest<T>(
   schema: z.ZodType<T> | null,
   options: RequestOptions = {},
 ): Promise<T> {
-  // A page that wrote before reading the session (an invitation link opened cold) needs a token first.
-  if (method !== "GET" && !csrfToken) await refreshCsrfToken();
+  if (method !== "GET") await ensureCsrfToken();
   try {
     return await send(method, path, schema, options);
   } catch (error) {
-    // The token can go stale (another tab signed out): fetch a fresh one and try once more.
+    // The token can go stale (another tab signed out and in): read a fresh one and try once more.
     if (method !== "GET" && isApiRequestError(error) && error.code === "csrf_failed") {
-      await refreshCsrfToken();
+      csrfToken = null;
+      await ensureCsrfToken();
       return send(method, path, schema, options);
     }
     throw error;
-  }
-}
-
-async function refreshCsrfToken(): Promise<void> {
-  try {
-    const response = await fetch("/api/auth/session", { headers: { Accept: "application/json" }, credentials: "same-origin" });
-    rememberCsrf(await readJson(response));
-  } catch {
-    // Offline: the write below fails with the usual network error.
   }
 }
 

@@ -37,3 +37,19 @@ export function fieldMessage(label: string, message: string): string {
   const sentence = text.charAt(0).toUpperCase() + text.slice(1);
   return /[.!?]$/.test(sentence) ? sentence : `${sentence}.`;
 }
+
+/**
+ * Moves focus to the first control (in form order) that has an error, so keyboard and
+ * screen-reader users land where the fix is needed. Controls are found by their name.
+ */
+export function focusFirstInvalid(form: HTMLFormElement | null, fields: FieldErrors): void {
+  if (!form) return;
+  const names = new Set(Object.keys(fields).map((key) => key.split(".")[0]));
+  for (const element of Array.from(form.elements)) {
+    const name = element.getAttribute("name");
+    if (name && names.has(name) && element instanceof HTMLElement) {
+      element.focus();
+      return;
+    }
+  }
+}

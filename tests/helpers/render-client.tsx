@@ -3,10 +3,10 @@ import { render } from "@testing-library/react";
 import type { ReactElement } from "react";
 import { createMemoryRouter, RouterProvider, type RouteObject } from "react-router";
 import { routes } from "../../src/app/router";
-import { createQueryClient } from "../../src/lib/query-client";
+import { createAppQueryClient } from "../../src/app/app-query-client";
 
 function testQueryClient() {
-  const client = createQueryClient();
+  const client = createAppQueryClient();
   client.setDefaultOptions({ queries: { retry: false, staleTime: Infinity }, mutations: { retry: false } });
   return client;
 }

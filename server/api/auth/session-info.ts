@@ -14,16 +14,22 @@ export async function listMemberships(ctx: AppContext, userId: string) {
     .orderBy(asc(companies.name));
 }
 
+const METRIC = { length: "m", mass: "kg" } as const;
+
 /** What GET /api/auth/session answers; also the reply to every call that changes the session. */
 export async function sessionInfo(ctx: AppContext, req: Request): Promise<SessionInfo> {
   const csrfToken = issueCsrfToken(req);
   const auth = req.auth;
-  if (!auth) return { user: null, activeCompanyId: null, memberships: [], csrfToken, outboxEnabled: ctx.config.outboxEnabled };
+  if (!auth) return { user: null, activeCompanyId: null, memberships: [], csrfToken, outboxEnabled: ctx.config.outboxEnabled, units: METRIC };
+  const [company] = auth.membership
+    ? await ctx.db.select({ length: companies.lengthUnit, mass: companies.massUnit }).from(companies).where(eq(companies.id, auth.membership.companyId))
+    : [METRIC];
   return {
     user: auth.user,
     activeCompanyId: auth.membership?.companyId ?? null,
     memberships: await listMemberships(ctx, auth.user.id),
     csrfToken,
     outboxEnabled: ctx.config.outboxEnabled,
+    units: { length: auth.user.lengthUnit ?? company.length, mass: auth.user.massUnit ?? company.mass },
   };
 }

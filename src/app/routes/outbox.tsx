@@ -17,7 +17,8 @@ export function Component() {
   const { session, membership } = useSignedIn();
   const { messageId } = useParams();
   const allowed = session.outboxEnabled && can(membership.role, "outbox.read");
-  const outbox = useOutbox();
+  // Asking would only earn a 404 or 403: do not.
+  const outbox = useOutbox({ enabled: allowed });
 
   if (!allowed) return <NotFound />;
   const selected = messageId ? outbox.data?.find((m) => m.id === messageId) : undefined;
@@ -35,7 +36,7 @@ export function Component() {
       {outbox.isPending ? <Spinner label="Loading messages…" /> : null}
       {outbox.isError ? <QueryError error={outbox.error} what="the Outbox" onRetry={() => void outbox.refetch()} /> : null}
       {outbox.data ? (
-        <div className="grid gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
+        <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
           <OutboxList messages={outbox.data} selectedId={messageId} linkTo={(id) => `/outbox/${id}`} />
           <div>
             {selected ? <OutboxMessageView message={selected} /> : null}

@@ -16,7 +16,7 @@ export function Component() {
   const { session, user, membership } = useSignedIn();
   const allowed = can(membership.role, "members.read");
   const canManage = can(membership.role, "members.manage");
-  const team = useTeam();
+  const team = useTeam({ enabled: allowed });
   // Store names for the store contacts' column and the store picker: the stores feature meets team here.
   const stores = useStores({ enabled: allowed });
 
@@ -38,7 +38,7 @@ export function Component() {
             <h2 id="invitations-heading" className="text-xl font-bold">
               Pending invitations
             </h2>
-            <InvitationsList invitations={team.data.invitations} canManage={canManage} />
+            <InvitationsList invitations={team.data.invitations} stores={stores.data} canManage={canManage} />
           </section>
           {canManage ? <InviteForm stores={stores.data} storesLoading={stores.isPending} outboxHint={session.outboxEnabled} /> : null}
         </div>

@@ -59,9 +59,10 @@ describe("navigation by role", () => {
   });
 
   it("hides the Team page itself from a store contact who types its address", async () => {
-    stubFetch({ "GET /api/auth/session": { body: sessionFor("store-contact") } });
+    const calls = stubFetch({ "GET /api/auth/session": { body: sessionFor("store-contact") } });
     renderApp("/team");
     expect(await screen.findByRole("heading", { name: "Page not found" })).toBeTruthy();
+    expect(calls.some((c) => c.path === "/api/team")).toBe(false);
   });
 });
 
@@ -89,6 +90,32 @@ describe("route guard", () => {
 
     expect(await screen.findByRole("heading", { name: "Company settings" })).toBeTruthy();
     expect(router.state.location.pathname).toBe("/settings");
+  });
+
+  it("signs out and lands on a plain sign-in page", async () => {
+    let session = sessionFor("owner");
+    const calls = stubFetch({
+      "GET /api/auth/session": () => ({ body: session }),
+      "GET /api/team": { body: { members: [], invitations: [] } },
+      "GET /api/stores": { body: { stores: [] } },
+      "POST /api/auth/sign-out": () => {
+        session = signedOutSession("csrf-after");
+        return { body: session };
+      },
+    });
+    const { router } = renderApp("/team");
+    fireEvent.click(await screen.findByRole("button", { name: "Sign out" }));
+    expect(await screen.findByRole("heading", { name: "Sign in" })).toBeTruthy();
+    await waitFor(() => expect(router.state.location.search).toBe(""));
+    expect(calls.find((c) => c.path === "/api/auth/sign-out")!.headers["x-csrf-token"]).toBe("csrf-signed-in");
+  });
+
+  it("tells a signed-in person without any membership what to do", async () => {
+    stubFetch({ "GET /api/auth/session": { body: { ...sessionFor("owner"), memberships: [], activeCompanyId: null } } });
+    renderApp("/");
+    expect(await screen.findByRole("heading", { name: "You are not a member of any company" })).toBeTruthy();
+    expect(screen.getByRole("button", { name: "Sign out" })).toBeTruthy();
+    expect(screen.queryByRole("navigation", { name: "Main" })).toBeNull();
   });
 
   it("shows the 404 page for an unknown address inside the app", async () => {

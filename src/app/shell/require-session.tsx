@@ -1,4 +1,4 @@
-import { useMemo } from "react";
+import { useMemo, useRef } from "react";
 import { Navigate, useLocation } from "react-router";
 import { Spinner } from "../../components/ui/spinner";
 import { QueryError } from "../../components/ui/query-error";
@@ -8,11 +8,24 @@ import { AppShell } from "./app-shell";
 import { NoCompany } from "./no-company";
 import { SignedInContext } from "./session-context";
 import { signInPath } from "./safe-next";
+import { SignOutIntentContext } from "./sign-out-intent";
 
 /** Signed-out people go to sign-in and come back here afterwards. */
 export function RequireSession() {
   const location = useLocation();
   const session = useSession();
+  const signingOut = useRef(false);
+  const intent = useMemo(
+    () => ({
+      begin: () => {
+        signingOut.current = true;
+      },
+      cancel: () => {
+        signingOut.current = false;
+      },
+    }),
+    [],
+  );
   const data = session.data;
   const membership = data ? activeMembership(data) : null;
   const value = useMemo(
@@ -28,11 +41,19 @@ export function RequireSession() {
       </main>
     );
   }
-  if (!data?.user) return <Navigate to={signInPath(location.pathname + location.search)} replace />;
-  if (!value) return <NoCompany />;
+  if (!data?.user) {
+    const to = signingOut.current ? "/sign-in" : signInPath(location.pathname + location.search);
+    return <Navigate to={to} replace />;
+  }
   return (
-    <SignedInContext.Provider value={value}>
-      <AppShell />
-    </SignedInContext.Provider>
+    <SignOutIntentContext.Provider value={intent}>
+      {value ? (
+        <SignedInContext.Provider value={value}>
+          <AppShell />
+        </SignedInContext.Provider>
+      ) : (
+        <NoCompany />
+      )}
+    </SignOutIntentContext.Provider>
   );
 }

@@ -18,8 +18,9 @@ export interface DataTableProps<Row> {
 /** A plain table that scrolls sideways on a phone instead of squeezing its columns. */
 export function DataTable<Row>({ caption, columns, rows, rowKey, rowDetail }: DataTableProps<Row>) {
   return (
-    <div className="overflow-x-auto rounded-md bg-surface edge">
-      <table className="w-full border-collapse text-left">
+    // A scrolling region must be reachable by keyboard to be scrolled (WCAG 2.1.1).
+    <div className="overflow-x-auto rounded-md bg-surface edge" role="region" aria-label={caption} tabIndex={0}>
+      <table className="w-full min-w-max border-collapse text-left">
         <caption className="sr-only">{caption}</caption>
         <thead>
           <tr className="bg-accent-soft">

@@ -7,7 +7,7 @@ import { ROLE_LABELS } from "../../../../server/domain/roles";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
-import { formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
+import { focusFirstInvalid, formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
 import { acceptInvitationInput, newAccountPassword, useAcceptInvitation } from "../api/accept-invitation";
 import { NewPasswordFields } from "./new-password-fields";
 
@@ -28,27 +28,31 @@ export function AcceptInvitationForm({ token, preview, onAccepted }: AcceptInvit
   const errors = { ...serverFieldErrors(accept.error), ...clientErrors };
   const formError = formErrorMessage(accept.error);
 
-  function validate(): z.infer<typeof acceptInvitationInput> | null {
+  function validate(): { input: z.infer<typeof acceptInvitationInput> | null; fields: FieldErrors } {
     if (preview.hasAccount) {
       const parsed = acceptInvitationInput.safeParse({ password });
-      setClientErrors(parsed.success ? {} : zodFieldErrors(parsed.error));
-      return parsed.success ? parsed.data : null;
+      return parsed.success ? { input: parsed.data, fields: {} } : { input: null, fields: zodFieldErrors(parsed.error) };
     }
-    // A new account needs a name and a password the server will accept (≥ 10 characters).
+    // A new account needs a name and a password the server will accept (at least 10 characters).
     const parsed = acceptInvitationInput.safeParse({ name, password });
     const fields = parsed.success ? {} : zodFieldErrors(parsed.error);
     if (!parsed.success || !parsed.data.name) fields.name ??= "is required";
     const strong = newAccountPassword.safeParse(password);
     if (!strong.success) fields.password ??= strong.error.issues[0]?.message ?? "is not accepted";
     if (password !== confirm) fields.confirm = "does not match the first one";
-    setClientErrors(fields);
-    return parsed.success && Object.keys(fields).length === 0 ? parsed.data : null;
+    return { input: parsed.success && Object.keys(fields).length === 0 ? parsed.data : null, fields };
   }
 
   function submit(event: FormEvent) {
     event.preventDefault();
-    const input = validate();
-    if (input) accept.mutate({ token, input }, { onSuccess: onAccepted });
+    const form = event.currentTarget as HTMLFormElement;
+    const { input, fields } = validate();
+    setClientErrors(fields);
+    if (!input) {
+      focusFirstInvalid(form, fields);
+      return;
+    }
+    accept.mutate({ token, input }, { onSuccess: onAccepted, onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)) });
   }
 
   return (

@@ -2,7 +2,7 @@ import { useState, type FormEvent } from "react";
 import { Link } from "react-router";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
-import { formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
+import { focusFirstInvalid, formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
 import { passwordResetConfirmInput, useConfirmPasswordReset } from "../api/confirm-password-reset";
 import { NewPasswordFields } from "./new-password-fields";
 
@@ -16,11 +16,13 @@ export function PasswordResetForm({ token }: { token: string }) {
 
   function submit(event: FormEvent) {
     event.preventDefault();
+    const form = event.currentTarget as HTMLFormElement;
     const parsed = passwordResetConfirmInput.safeParse({ token, password });
     const fields = parsed.success ? {} : zodFieldErrors(parsed.error);
     if (password !== confirm) fields.confirm = "does not match the first one";
     setClientErrors(fields);
-    if (parsed.success && !fields.confirm) reset.mutate(parsed.data);
+    if (parsed.success && !fields.confirm) reset.mutate(parsed.data, { onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)) });
+    else focusFirstInvalid(form, fields);
   }
 
   if (reset.isSuccess) {

@@ -24,6 +24,7 @@ describe("sign-in form", () => {
     expect(await screen.findByText("E-mail must be a valid e-mail address.")).toBeTruthy();
     expect(screen.getByText("Password is required.")).toBeTruthy();
     expect(screen.getByLabelText("E-mail").getAttribute("aria-invalid")).toBe("true");
+    expect(document.activeElement).toBe(screen.getByLabelText("E-mail"));
     expect(calls).toHaveLength(0);
   });
 
@@ -44,6 +45,7 @@ describe("sign-in form", () => {
     fill("ines.varga@northfield.example", "secret-password");
 
     expect(await screen.findByText("E-mail must be at most 254 characters.")).toBeTruthy();
+    expect(document.activeElement).toBe(screen.getByLabelText("E-mail"));
     expect(screen.getByRole("alert").textContent).toBe("Please correct the marked fields.");
   });
 

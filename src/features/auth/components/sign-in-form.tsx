@@ -5,7 +5,7 @@ import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
 import { isApiRequestError } from "../../../lib/api-client";
-import { formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
+import { focusFirstInvalid, formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
 import { signInInput, useSignIn } from "../api/sign-in";
 
 export function SignInForm({ onSignedIn }: { onSignedIn: (info: SessionInfo) => void }) {
@@ -22,13 +22,16 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (info: SessionInfo) => 
 
   function submit(event: FormEvent) {
     event.preventDefault();
+    const form = event.currentTarget as HTMLFormElement;
     const parsed = signInInput.safeParse({ email, password });
     if (!parsed.success) {
-      setClientErrors(zodFieldErrors(parsed.error));
+      const fields = zodFieldErrors(parsed.error);
+      setClientErrors(fields);
+      focusFirstInvalid(form, fields);
       return;
     }
     setClientErrors({});
-    signIn.mutate(parsed.data, { onSuccess: onSignedIn });
+    signIn.mutate(parsed.data, { onSuccess: onSignedIn, onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)) });
   }
 
   return (

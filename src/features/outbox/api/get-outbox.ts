@@ -21,6 +21,6 @@ export function outboxQueryOptions() {
   });
 }
 
-export function useOutbox() {
-  return useQuery(outboxQueryOptions());
+export function useOutbox(options: { enabled?: boolean } = {}) {
+  return useQuery({ ...outboxQueryOptions(), enabled: options.enabled ?? true });
 }

@@ -6,7 +6,7 @@ import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { Select } from "../../../components/ui/select";
 import { TextField } from "../../../components/ui/text-field";
-import { formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
+import { focusFirstInvalid, formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
 import { profileUpdateInput, useUpdateProfile } from "../api/update-profile";
 import { LENGTH_LABELS, MASS_LABELS } from "./unit-labels";
 
@@ -36,6 +36,7 @@ export function ProfileForm({ user, companyDefaults, onSaved }: ProfileFormProps
 
   function submit(event: FormEvent) {
     event.preventDefault();
+    const form = event.currentTarget as HTMLFormElement;
     setSaved(false);
     const parsed = profileUpdateInput.safeParse({
       name,
@@ -43,11 +44,13 @@ export function ProfileForm({ user, companyDefaults, onSaved }: ProfileFormProps
       massUnit: massUnit === COMPANY_DEFAULT ? null : (massUnit as MassUnit),
     });
     if (!parsed.success) {
-      setClientErrors(zodFieldErrors(parsed.error));
+      const fields = zodFieldErrors(parsed.error);
+      setClientErrors(fields);
+      focusFirstInvalid(form, fields);
       return;
     }
     setClientErrors({});
-    update.mutate(parsed.data, { onSuccess: () => setSaved(true) });
+    update.mutate(parsed.data, { onSuccess: () => setSaved(true), onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)) });
   }
 
   const lengthOptions = [

@@ -11,6 +11,6 @@ export function teamQueryOptions() {
   return queryOptions({ queryKey: teamKeys.list(), queryFn: ({ signal }) => getTeam(signal) });
 }
 
-export function useTeam() {
-  return useQuery(teamQueryOptions());
+export function useTeam(options: { enabled?: boolean } = {}) {
+  return useQuery({ ...teamQueryOptions(), enabled: options.enabled ?? true });
 }

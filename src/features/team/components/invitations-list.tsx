@@ -7,8 +7,16 @@ import { EmptyState } from "../../../components/ui/empty-state";
 import { formErrorMessage } from "../../../lib/form-errors";
 import { formatDate } from "../../../lib/format";
 import { useRevokeInvitation } from "../api/revoke-invitation";
+import type { StoreOption } from "./store-picker";
 
-export function InvitationsList({ invitations, canManage, now = new Date() }: { invitations: readonly Invitation[]; canManage: boolean; now?: Date }) {
+export interface InvitationsListProps {
+  invitations: readonly Invitation[];
+  stores: readonly StoreOption[] | undefined;
+  canManage: boolean;
+  now?: Date;
+}
+
+export function InvitationsList({ invitations, stores, canManage, now = new Date() }: InvitationsListProps) {
   const revoke = useRevokeInvitation();
   const pending = invitations.filter((i) => i.acceptedAt === null);
   const error = formErrorMessage(revoke.error);
@@ -22,8 +30,13 @@ export function InvitationsList({ invitations, canManage, now = new Date() }: { 
         rows={pending}
         rowKey={(i) => i.id}
         columns={[
-          { header: "E-mail", cell: (i) => <span className="break-all">{i.email}</span> },
+          { header: "E-mail", cell: (i) => i.email },
           { header: "Role", cell: (i) => ROLE_LABELS[i.role] },
+          {
+            header: "Stores",
+            cell: (i) =>
+              i.role === "store-contact" ? i.storeIds.map((id) => stores?.find((s) => s.id === id)?.name ?? "A store not listed").join(", ") : "All stores",
+          },
           { header: "Invited by", cell: (i) => i.invitedBy },
           {
             header: "Expires",

@@ -53,6 +53,7 @@ describe("invite form", () => {
     fireEvent.click(screen.getByRole("button", { name: "Send invitation" }));
 
     expect(await screen.findByText("A store contact must be given at least one store.")).toBeTruthy();
+    expect(document.activeElement).toBe(screen.getByLabelText("Maple Street Market"));
     expect(calls).toHaveLength(0);
   });
 

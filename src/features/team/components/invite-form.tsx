@@ -4,7 +4,7 @@ import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { Select } from "../../../components/ui/select";
 import { TextField } from "../../../components/ui/text-field";
-import { formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
+import { focusFirstInvalid, formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
 import { inviteInput, useInviteMember } from "../api/invite-member";
 import { ROLE_OPTIONS } from "./role-options";
 import { StorePicker, type StoreOption } from "./store-picker";
@@ -29,15 +29,19 @@ export function InviteForm({ stores, storesLoading = false, outboxHint = false }
 
   function submit(event: FormEvent) {
     event.preventDefault();
+    const form = event.currentTarget as HTMLFormElement;
     setSentTo(null);
     // Only a store contact is scoped to stores; other roles see every store of the company.
     const parsed = inviteInput.safeParse({ email, role, storeIds: isStoreContact ? storeIds : [] });
     if (!parsed.success) {
-      setClientErrors(zodFieldErrors(parsed.error));
+      const fields = zodFieldErrors(parsed.error);
+      setClientErrors(fields);
+      focusFirstInvalid(form, fields);
       return;
     }
     setClientErrors({});
     invite.mutate(parsed.data, {
+      onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)),
       onSuccess: (sent) => {
         setSentTo(sent.email);
         setEmail("");

@@ -24,7 +24,7 @@ export function MembersTable({ members, stores, canManage, currentUserId, compan
 
   const columns: Column<Member>[] = [
     { header: "Name", cell: (m) => (m.userId === currentUserId ? `${m.name} (you)` : m.name) },
-    { header: "E-mail", cell: (m) => <span className="break-all">{m.email}</span> },
+    { header: "E-mail", cell: (m) => m.email },
     { header: "Role", cell: (m) => ROLE_LABELS[m.role] },
     {
       header: "Stores",

@@ -15,7 +15,7 @@ export function RemoveMemberConfirm({ member, companyName, onDone }: { member: M
       {error ? <Alert tone="error">{error}</Alert> : null}
       <div className="flex flex-wrap gap-2">
         <Button variant="danger" busy={remove.isPending} onClick={() => remove.mutate(member.membershipId, { onSuccess: onDone })}>
-          Remove {member.name}
+          Yes, remove {member.name}
         </Button>
         <Button variant="secondary" onClick={onDone}>
           Keep

@@ -1,0 +1,48 @@
+import { screen } from "@testing-library/react";
+import { describe, expect, it } from "vitest";
+import { renderApp } from "../../../tests/helpers/render-client";
+import { sessionFor, signedOutSession } from "../../../tests/helpers/session-fixtures";
+import { apiError, stubFetch } from "../../../tests/helpers/stub-fetch";
+
+const store = (id: string, name: string, archivedAt: string | null = null) => ({ id, name, address: "14 Maple Street, Brookfield", timeZone: "America/Chicago", archivedAt });
+
+describe("stores page", () => {
+  it("lists the company's stores with their address and leaves out archived ones", async () => {
+    stubFetch({
+      "GET /api/auth/session": { body: sessionFor("technician") },
+      "GET /api/stores": {
+        body: {
+          stores: [
+            store("1d2c3b4a-5e6f-4a7b-8c9d-0e1f2a3b4c5d", "Maple Street Market"),
+            store("9f8e7d6c-5b4a-4c3d-9e2f-1a0b9c8d7e6f", "Old Quay Depot", "2026-06-01T00:00:00.000Z"),
+          ],
+        },
+      },
+    });
+    renderApp("/");
+    expect(await screen.findByText("Maple Street Market")).toBeTruthy();
+    expect(screen.getByText("14 Maple Street, Brookfield")).toBeTruthy();
+    expect(screen.queryByText("Old Quay Depot")).toBeNull();
+  });
+
+  it("shows an empty state, worded for a store contact, when there are none", async () => {
+    stubFetch({ "GET /api/auth/session": { body: sessionFor("store-contact") }, "GET /api/stores": { body: { stores: [] } } });
+    renderApp("/");
+    expect(await screen.findByText("No stores yet")).toBeTruthy();
+    expect(screen.getByText(/No store has been shared with you/)).toBeTruthy();
+  });
+
+  it("sends someone whose session ran out to sign-in, to come back here", async () => {
+    let expired = false;
+    stubFetch({
+      "GET /api/auth/session": () => ({ body: expired ? signedOutSession() : sessionFor("owner") }),
+      "GET /api/stores": () => {
+        expired = true;
+        return apiError(401, "not_signed_in", "Please sign in.");
+      },
+    });
+    const { router } = renderApp("/?view=all");
+    expect(await screen.findByRole("heading", { name: "Sign in" })).toBeTruthy();
+    expect(router.state.location.search).toBe(`?next=${encodeURIComponent("/?view=all")}`);
+  });
+});

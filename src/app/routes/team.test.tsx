@@ -1,0 +1,52 @@
+import { fireEvent, screen, within } from "@testing-library/react";
+import { describe, expect, it } from "vitest";
+import { renderApp } from "../../../tests/helpers/render-client";
+import { sessionFor } from "../../../tests/helpers/session-fixtures";
+import { stubFetch } from "../../../tests/helpers/stub-fetch";
+
+const STORE = { id: "1d2c3b4a-5e6f-4a7b-8c9d-0e1f2a3b4c5d", name: "Maple Street Market", address: "14 Maple Street", timeZone: "America/Chicago", archivedAt: null };
+const TEAM = {
+  members: [
+    {
+      membershipId: "aa11bb22-cc33-4d44-8e55-ff6677889900",
+      userId: "7c1d2e3f-4a5b-4c6d-8e7f-9a0b1c2d3e4f",
+      name: "Ines Varga",
+      email: "ines.varga@northfield.example",
+      role: "owner",
+      storeIds: [],
+      joinedAt: "2026-01-05T08:00:00.000Z",
+    },
+  ],
+  invitations: [
+    {
+      id: "4e5f6a7b-8c9d-4e0f-a1b2-c3d4e5f6a7b8",
+      email: "sam.reyes@northfield.example",
+      role: "technician",
+      storeIds: [],
+      invitedBy: "Ines Varga",
+      createdAt: "2026-11-30T09:00:00.000Z",
+      expiresAt: "2099-12-07T09:00:00.000Z",
+      acceptedAt: null,
+    },
+  ],
+};
+
+describe("team page", () => {
+  it("gives an owner the invite form with the company's stores in the picker", async () => {
+    stubFetch({ "GET /api/auth/session": { body: sessionFor("owner") }, "GET /api/team": { body: TEAM }, "GET /api/stores": { body: { stores: [STORE] } } });
+    renderApp("/team");
+    const form = await screen.findByRole("form", { name: "Invite a member" });
+    fireEvent.change(within(form).getByLabelText("Role"), { target: { value: "store-contact" } });
+    expect(await within(form).findByLabelText("Maple Street Market")).toBeTruthy();
+    expect(screen.getByRole("button", { name: "Revoke the invitation to sam.reyes@northfield.example" })).toBeTruthy();
+    expect(screen.getByRole("table", { name: "Pending invitations" }).textContent).toContain("All stores");
+  });
+
+  it("shows a technician the members but no invite form and no owner actions", async () => {
+    stubFetch({ "GET /api/auth/session": { body: sessionFor("technician") }, "GET /api/team": { body: TEAM }, "GET /api/stores": { body: { stores: [STORE] } } });
+    renderApp("/team");
+    expect(await screen.findByText("ines.varga@northfield.example")).toBeTruthy();
+    expect(screen.queryByRole("form", { name: "Invite a member" })).toBeNull();
+    expect(screen.queryByRole("button", { name: /Revoke|Remove|Change role/ })).toBeNull();
+  });
+});
