@@ -62,4 +62,24 @@ describe("the demo's leak story", () => {
     expect(Math.hypot(top.x - repaired.x, top.y - repaired.y)).toBeLessThanOrEqual(top.radius + 0.25);
     expect(byDate[3].fans).toBe("stopped");
   });
+
+  it("lists per-fixture peaks over the last 12 months, the fixtures that got worse first", async () => {
+    const res = await eng.get(`/api/stores/${storeId}/fixture-trends`);
+    expect(res.status).toBe(200);
+    const { sweeps, fixtures, a, b } = res.body;
+    expect(sweeps).toHaveLength(6);
+    // default: the latest sweep against the one before; the meat line got worse
+    expect([a, b]).toEqual([sweeps[4].id, sweeps[5].id]);
+    expect(fixtures[0].label).toBe("Meat 2");
+    expect(fixtures[0].change).toBeGreaterThan(0);
+    expect(fixtures[0].levels).toHaveLength(6);
+    // the months the Dairy 3 leak grew
+    const grew = await eng.get(`/api/stores/${storeId}/fixture-trends?a=${sweeps[1].id}&b=${sweeps[3].id}`);
+    expect(grew.body.fixtures[0].label).toMatch(/^Dairy [234]$/);
+    const dairy3 = grew.body.fixtures.find((f: { label: string }) => f.label === "Dairy 3");
+    expect(dairy3.levels[3].peakPpm).toBeGreaterThan(dairy3.levels[0].peakPpm);
+    const bad = await eng.get(`/api/stores/${storeId}/fixture-trends?a=${crypto.randomUUID()}`);
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields.a).toMatch(/not a sweep of this store/);
+  });
 });
