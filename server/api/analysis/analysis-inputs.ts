@@ -13,6 +13,8 @@ export interface AnalysisInputs {
   readings: SweepReadingRow[];
   plan: ReturnType<typeof toLocatorPlan>;
   detectorName: string;
+  /** Fixture id → the name drawn on the plan, for the locator's sentences. */
+  labels: Map<string, string>;
 }
 
 /** Canonical text of a parameter set: the cache key beside the sweep id. */
@@ -40,7 +42,8 @@ export async function loadAnalysisInputs(ctx: AppContext, sweepId: string): Prom
       const fixtureRows = await tx.select().from(fixtures).where(eq(fixtures.planId, sweep.planId)).orderBy(asc(fixtures.position));
       const [det] = await tx.select({ name: detectors.name }).from(detectors).where(eq(detectors.id, sweep.detectorId));
       const plan = toLocatorPlan(bounds, fixtureRows.map(rowToFixture), { fansRunning: sweep.fans === "running" });
-      return { sweep, readings: rows, plan, detectorName: det?.name ?? "The detector" };
+      const labels = new Map(fixtureRows.map((f) => [f.id.toLowerCase(), f.label || f.kind.replace(/-/g, " ")]));
+      return { sweep, readings: rows, plan, detectorName: det?.name ?? "The detector", labels };
     },
     { isolationLevel: "repeatable read", accessMode: "read only" },
   );

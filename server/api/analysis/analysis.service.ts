@@ -11,6 +11,7 @@ import { analyses } from "../../db/schema/index";
 import { detectorDiagnostics } from "../../domain/fieldmap/detector-diagnostics";
 import { bytesToFloat32, float32ToBytes, quantiseConfidence } from "../../domain/fieldmap/field-codec";
 import { sweepLocatorInput } from "../../domain/fieldmap/sweep-locator-input";
+import { nameFixtures } from "../../domain/fieldmap/name-fixtures";
 import { HttpError } from "../../lib/http-error";
 import { createAnalysisRunner, type AnalysisRunner } from "../../jobs/analysis-runner";
 import { JobError } from "../../jobs/worker-pool";
@@ -52,7 +53,8 @@ export function sweepParams(sweep: SweepRow, q: Pick<AnalysisQuery, "transportDe
 }
 
 async function compute(ctx: AppContext, sweepId: string, params: AnalysisParams): Promise<AnalysisRow> {
-  const { sweep, readings, plan, detectorName } = await loadAnalysisInputs(ctx, sweepId);
+  const { sweep, readings, plan, detectorName, labels } = await loadAnalysisInputs(ctx, sweepId);
+  const named = (text: string) => nameFixtures(text, labels);
   const { input: raw, readingIds } = sweepLocatorInput(plan, sweep.startedAt, readings, params);
   let input;
   try {
@@ -72,11 +74,11 @@ async function compute(ctx: AppContext, sweepId: string, params: AnalysisParams)
   const durationMs = Math.round(performance.now() - started);
   const overdue = sweep.warnings.find((w) => w.code === "detector-overdue")?.message ?? null;
   const summary: AnalysisSummary = {
-    candidates: result.candidates,
+    candidates: result.candidates.map((c) => ({ ...c, reason: named(c.reason), nextCheck: named(c.nextCheck) })),
     background: result.background,
     diagnostics: [
       ...detectorDiagnostics({ name: detectorName, transportDelayS: sweep.transportDelayS, timeConstantS: sweep.timeConstantS, alarmPpm: sweep.alarmPpm, overdueMessage: overdue }, params),
-      ...result.diagnostics,
+      ...result.diagnostics.map((d) => ({ ...d, message: named(d.message) })),
     ],
     assumptions: result.assumptions,
     readings: result.readings.map((r) => ({ ...r, readingId: readingIds[r.index] })),

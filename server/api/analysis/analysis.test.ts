@@ -121,6 +121,10 @@ describe("GET /api/sweeps/:id/analysis", () => {
     expect(Math.hypot(top.x - LEAK.x, top.y - LEAK.y)).toBeLessThan(Math.hypot(peak.raw.x - LEAK.x, peak.raw.y - LEAK.y));
     expect(Math.hypot(top.x - LEAK.x, top.y - LEAK.y)).toBeLessThan(1.5);
     expect(top.fixtureId).toBe(caseId);
+    // the locator's sentences name fixtures as drawn, never by id
+    const uuid = /[0-9a-f]{8}-[0-9a-f]{4}-/i;
+    for (const c of body.candidates) expect(`${c.reason} ${c.nextCheck}`).not.toMatch(uuid);
+    for (const d of body.diagnostics) expect(d.message).not.toMatch(uuid);
   });
 
   it("caches per sweep and parameter set: a second ask returns the stored result; another delay is its own entry", async () => {

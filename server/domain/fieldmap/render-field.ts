@@ -17,7 +17,7 @@ export interface RenderOptions {
   hatch?: number;
 }
 
-export const HATCH_RGBA = [84, 88, 96, 150] as const;
+export const HATCH_RGBA = [84, 88, 96, 120] as const;
 
 export function renderFieldRgba(grid: FieldGridLike, options: RenderOptions, out?: Uint8ClampedArray): Uint8ClampedArray {
   checkFieldGrid(grid);
