@@ -28,6 +28,8 @@ export interface GreedyInput {
   separationM: number;
   alternateFraction: number;
   rankByStrength: boolean;
+  /** Per-cell log prior odds of a leak (0 = neutral), weighed against Δχ² in units of the residual variance. */
+  prior: Float64Array | null;
   credible: (cell: number, column: Float64Array, q: number, b: number, residual: Float64Array, delta: number) => boolean;
 }
 
@@ -45,6 +47,25 @@ export interface GreedyResult {
  * residual of the current joint fit, take the best credible cell, refit all strengths jointly, repeat
  * until no credible cell is left. The first scan's other local optima become alternatives.
  */
+/**
+ * The cell maximising Δχ² + 2·s²·log-prior, with s² the residual variance of the best single-source fit
+ * (so the prior counts as much as it would against data of that scatter); -1 when no cell fits.
+ */
+function bestWithPrior(scan: ScanResult, prior: Float64Array | null, n: number): number {
+  let best = -1;
+  let max = 0;
+  for (let c = 0; c < scan.delta.length; c++) if (scan.delta[c] > max) { max = scan.delta[c]; best = c; }
+  if (best < 0 || !prior) return best;
+  const s2 = Math.max(1, (scan.chi2Background - max) / Math.max(1, n - 2));
+  let bestScore = -Infinity;
+  for (let c = 0; c < scan.delta.length; c++) {
+    if (!(scan.delta[c] > 0)) continue;
+    const score = scan.delta[c] + 2 * s2 * prior[c];
+    if (score > bestScore) { bestScore = score; best = c; }
+  }
+  return best;
+}
+
 export function findSources(input: GreedyInput): GreedyResult {
   const { fields, y, w, censored, allowed } = input;
   const n = y.length;
@@ -71,8 +92,8 @@ export function findSources(input: GreedyInput): GreedyResult {
     sumWeightedKernelTimes(fields, w, residual, sumWGR);
     const scan = scanSources(fields.sumWG, fields.sumWGG, sumWGR, { sumW: sw, sumWR: swr, sumWRR: swrr }, allowed);
     if (!firstScan) firstScan = scan;
-    const [best] = localOptima(scan.delta, input.gridWidth, input.cellSize, input.separationM, 1);
-    if (best === undefined) break;
+    const best = bestWithPrior(scan, input.prior, n);
+    if (best < 0) break;
     const column = kernelColumn(fields, best, n);
     if (!input.credible(best, column, scan.q[best], scan.b[best], residual, scan.delta[best])) break;
     columns.push(column);
