@@ -23,6 +23,8 @@ import { reportsRouter } from "./api/reports/reports.router";
 import { sweepsRouter } from "./api/sweeps/sweeps.router";
 import { findingsRouter } from "./api/findings/findings.router";
 import { complianceRouter } from "./api/compliance/compliance.router";
+import { todayRouter } from "./api/compliance/today.router";
+import { exportsRouter } from "./api/exports/exports.router";
 
 const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
 
@@ -77,6 +79,8 @@ export function createApp(ctx: AppContext): Express {
   api.use(sweepsRouter(ctx));
   api.use(findingsRouter(ctx));
   api.use(complianceRouter(ctx));
+  api.use(todayRouter(ctx));
+  api.use(exportsRouter(ctx));
   api.use(notFoundApi);
   app.use("/api", api);
 

@@ -118,6 +118,14 @@ export const todayResponse = z.object({
       percent: z.number(), thresholdPercent: z.number(), on: z.string(), partTitle: z.string(), source: z.string(), link: z.string(),
     }),
   ),
+  /** Every system of the stores shown, with its latest figure: the way into each system's records. */
+  systems: z.array(
+    z.object({
+      id: z.uuid(), name: z.string(), storeId: z.uuid(), storeName: z.string(), refrigerantId: z.string(),
+      latestPercent: z.number().nullable(), latestOn: z.string().nullable(), thresholdPercent: z.number().nullable(), breachOpen: z.boolean(),
+      nextInspection: z.string().nullable(), link: z.string(),
+    }),
+  ),
   openFindings: z.array(
     z.object({
       id: z.uuid(), storeId: z.uuid(), storeName: z.string(), systemId: z.uuid().nullable(), systemName: z.string().nullable(),

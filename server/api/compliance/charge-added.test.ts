@@ -71,8 +71,9 @@ describe("charge added and the leak rate through the API (US federal, annualizin
     const repair = r.body.due.find((d: { kind: string }) => d.kind === "repair");
     expect(repair).toMatchObject({ dueOn: "2026-09-29", systemId, link: `/systems/${systemId}` });
     expect(repair.source).toMatch(/30 days/);
-    // Under 500 lb commercial, no automatic leak detection: yearly inspection after the breach [M].
-    expect(r.body.nextInspection.dueOn).toBe("2027-08-30");
+    // Under 500 lb commercial, no automatic leak detection: yearly inspections from the first breach
+    // of the run (3 Mar), the August breach resetting the clean count only [M].
+    expect(r.body.nextInspection.dueOn).toBe("2027-03-03");
     // 100 lb × 0.45359237 kg/lb (NIST SP 811) and each amount stored in kg.
     expect(r.body.additions[0].amountKg).toBeCloseTo(4.5359237, 9);
   });

@@ -83,7 +83,11 @@ export async function createSweep(ctx: AppContext, viewer: Viewer, userId: strin
   const [company] = await ctx.db.select({ days: companies.detectorCheckIntervalDays }).from(companies).where(eq(companies.id, viewer.companyId));
   const status = checkStatus(det.lastCheckedOn, company.days, startedAt, store.timeZone);
   const warnings = startWarnings({ name: det.name, principle: det.principle, ...status }, hunted);
-  const [row] = await ctx.db
+  // Share lock on the plan: a re-calibration (which locks it for update) either sees this sweep
+  // or finishes first, so it never moves fixtures under a sweep.
+  const row = await ctx.db.transaction(async (tx) => {
+    await tx.select({ id: plans.id }).from(plans).where(eq(plans.id, plan.id)).for("share");
+    const [inserted] = await tx
     .insert(sweeps)
     .values({
       ...(input.id ? { id: input.id } : { id: crypto.randomUUID() }),
@@ -103,6 +107,8 @@ export async function createSweep(ctx: AppContext, viewer: Viewer, userId: strin
     })
     .onConflictDoNothing()
     .returning();
+    return inserted;
+  });
   if (!row) return createSweep(ctx, viewer, userId, storeId, input); // a racing retry stored it first
   return { sweep: await toSweep(ctx, row), created: true };
 }

@@ -115,12 +115,14 @@ export function systemStatus(profile: RuleProfile, method: LeakRateMethod, rec: 
     // "until N periods below the threshold": N consecutive inspections with no leak found since the breach.
     const plan = inspectionsAfterBreach(breachPart, { applianceType: rec.applianceType, fullChargeKg: rec.fullChargeKg, hasAutomaticLeakDetection: rec.automaticLeakDetection });
     if (plan.required) {
-      const since = rec.leakChecks.filter((c) => compareDates(c.checkedOn, lastBreach.date) >= 0).sort((x, y) => compareDates(x.checkedOn, y.checkedOn));
-      let clean = 0;
-      for (const c of since) clean = c.leakFound ? 0 : clean + 1;
-      if (clean < plan.untilPeriodsBelow) {
-        const from = since.at(-1)?.checkedOn ?? lastBreach.date;
-        nextInspection = { dueOn: addMonths(from, plan.everyMonths), reason: `after the breach of ${lastBreach.date}: ${plan.reason} (${clean} clean so far)`, source: breachPart.inspectionsAfterBreach?.source ?? "" };
+      const run = inspectionRun(points.filter((p) => p.exceeds).map((p) => p.date), rec.leakChecks, plan.untilPeriodsBelow);
+      if (run) {
+        const from = run.lastCheck ?? run.start;
+        nextInspection = {
+          dueOn: addMonths(from, plan.everyMonths),
+          reason: `inspections since the breach of ${run.start}: ${plan.reason} (${run.clean} clean so far${run.lastCheck ? `, last ${run.lastCheck}` : ""})`,
+          source: breachPart.inspectionsAfterBreach?.source ?? "",
+        };
       }
     }
   }
@@ -145,4 +147,35 @@ export function systemStatus(profile: RuleProfile, method: LeakRateMethod, rec: 
     nextInspection,
     due: due.sort((x, y) => compareDates(x.dueOn, y.dueOn)),
   };
+}
+
+/**
+ * The open run of US inspections after a breach, or null when none is open. Our reading of
+ * "until N periods below the threshold" (standards.md §1 [M]): a run starts at a breach, counts
+ * consecutive inspections with no leak found, and ends at N; a new breach during a run resets the
+ * count but keeps the schedule, which runs from the latest inspection (or the run's start).
+ */
+export function inspectionRun(
+  breachDates: readonly IsoDate[],
+  checks: readonly { checkedOn: IsoDate; leakFound: boolean }[],
+  untilClean: number,
+): { start: IsoDate; lastCheck: IsoDate | null; clean: number } | null {
+  type Ev = { on: IsoDate; breach: boolean; leakFound: boolean };
+  const evs: Ev[] = [
+    ...breachDates.map((on) => ({ on, breach: true, leakFound: true })),
+    ...checks.map((c) => ({ on: c.checkedOn, breach: false, leakFound: c.leakFound })),
+  ].sort((a, b) => compareDates(a.on, b.on) || (a.breach ? -1 : 1));
+  let run: { start: IsoDate; lastCheck: IsoDate | null; clean: number } | null = null;
+  for (const e of evs) {
+    if (e.breach) {
+      if (run) run.clean = 0;
+      else run = { start: e.on, lastCheck: null, clean: 0 };
+      continue;
+    }
+    if (!run) continue;
+    run.lastCheck = e.on;
+    run.clean = e.leakFound ? 0 : run.clean + 1;
+    if (run.clean >= untilClean) run = null;
+  }
+  return run;
 }

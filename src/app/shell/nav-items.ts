@@ -12,6 +12,8 @@ export interface NavItem {
  */
 export function navItems(role: Role, session: Pick<SessionInfo, "outboxEnabled">): NavItem[] {
   const items: NavItem[] = [{ to: "/", label: "Stores" }];
+  if (can(role, "sweeps.record")) items.push({ to: "/walk", label: "Walk" });
+  if (can(role, "sweeps.record") || can(role, "detectors.manage")) items.push({ to: "/detectors", label: "Detectors" });
   if (can(role, "members.read")) items.push({ to: "/team", label: "Team" });
   // Every member may read the company's settings; only settings.manage may change them.
   items.push({ to: "/settings", label: "Company settings" });

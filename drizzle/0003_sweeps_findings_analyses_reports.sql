@@ -153,6 +153,19 @@ CREATE TABLE "leak_checks" (
 	"recorded_at" timestamp with time zone DEFAULT now() NOT NULL
 );
 --> statement-breakpoint
+CREATE TABLE "report_sends" (
+	"id" uuid PRIMARY KEY DEFAULT gen_random_uuid() NOT NULL,
+	"company_id" uuid NOT NULL,
+	"sweep_id" uuid NOT NULL,
+	"sent_by_id" uuid,
+	"recipients" text[] NOT NULL,
+	"subject" text NOT NULL,
+	"filename" text NOT NULL,
+	"bytes" integer NOT NULL,
+	"readings_revision" integer NOT NULL,
+	"sent_at" timestamp with time zone DEFAULT now() NOT NULL
+);
+--> statement-breakpoint
 ALTER TABLE "reading_audit" ADD CONSTRAINT "reading_audit_sweep_id_sweeps_id_fk" FOREIGN KEY ("sweep_id") REFERENCES "public"."sweeps"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "reading_audit" ADD CONSTRAINT "reading_audit_by_id_users_id_fk" FOREIGN KEY ("by_id") REFERENCES "public"."users"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "readings" ADD CONSTRAINT "readings_sweep_id_sweeps_id_fk" FOREIGN KEY ("sweep_id") REFERENCES "public"."sweeps"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
@@ -185,6 +198,9 @@ ALTER TABLE "digest_runs" ADD CONSTRAINT "digest_runs_company_id_companies_id_fk
 ALTER TABLE "leak_checks" ADD CONSTRAINT "leak_checks_company_id_companies_id_fk" FOREIGN KEY ("company_id") REFERENCES "public"."companies"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "leak_checks" ADD CONSTRAINT "leak_checks_system_id_systems_id_fk" FOREIGN KEY ("system_id") REFERENCES "public"."systems"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "leak_checks" ADD CONSTRAINT "leak_checks_by_id_users_id_fk" FOREIGN KEY ("by_id") REFERENCES "public"."users"("id") ON DELETE no action ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "report_sends" ADD CONSTRAINT "report_sends_company_id_companies_id_fk" FOREIGN KEY ("company_id") REFERENCES "public"."companies"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "report_sends" ADD CONSTRAINT "report_sends_sweep_id_sweeps_id_fk" FOREIGN KEY ("sweep_id") REFERENCES "public"."sweeps"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "report_sends" ADD CONSTRAINT "report_sends_sent_by_id_users_id_fk" FOREIGN KEY ("sent_by_id") REFERENCES "public"."users"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 CREATE INDEX "reading_audit_sweep" ON "reading_audit" USING btree ("sweep_id");--> statement-breakpoint
 CREATE INDEX "reading_audit_reading" ON "reading_audit" USING btree ("reading_id");--> statement-breakpoint
 CREATE INDEX "readings_sweep_taken" ON "readings" USING btree ("sweep_id","taken_at");--> statement-breakpoint
@@ -200,4 +216,6 @@ CREATE INDEX "findings_system" ON "findings" USING btree ("system_id");--> state
 CREATE UNIQUE INDEX "findings_company_client" ON "findings" USING btree ("company_id","client_id");--> statement-breakpoint
 CREATE INDEX "charge_additions_system" ON "charge_additions" USING btree ("system_id");--> statement-breakpoint
 CREATE UNIQUE INDEX "digest_runs_company_date" ON "digest_runs" USING btree ("company_id","local_date");--> statement-breakpoint
-CREATE INDEX "leak_checks_system" ON "leak_checks" USING btree ("system_id");
+CREATE INDEX "leak_checks_system" ON "leak_checks" USING btree ("system_id");--> statement-breakpoint
+CREATE INDEX "report_sends_sweep" ON "report_sends" USING btree ("sweep_id");--> statement-breakpoint
+CREATE INDEX "report_sends_company" ON "report_sends" USING btree ("company_id");
