@@ -29,6 +29,10 @@ export const routes: RouteObject[] = [
             ErrorBoundary: ErrorPage,
             children: [
               { index: true, lazy: () => import("./routes/home") },
+              { path: "/stores", lazy: () => import("./routes/home") },
+              { path: "/today", lazy: () => import("./routes/today") },
+              { path: "/systems/:systemId", lazy: () => import("./routes/system-records") },
+              { path: "/findings/:findingId", lazy: () => import("./routes/finding") },
               { path: "/team", lazy: () => import("./routes/team") },
               { path: "/settings", lazy: () => import("./routes/company-settings") },
               { path: "/profile", lazy: () => import("./routes/profile") },

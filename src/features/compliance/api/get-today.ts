@@ -1,0 +1,16 @@
+import { queryOptions, useQuery } from "@tanstack/react-query";
+import { todayResponse } from "../../../../server/contracts/compliance";
+import { api } from "../../../lib/api-client";
+import { complianceKeys } from "./compliance-keys";
+
+export function getToday(storeId: string | undefined, signal?: AbortSignal) {
+  return api.get(`/api/today${storeId ? `?storeId=${encodeURIComponent(storeId)}` : ""}`, todayResponse, signal);
+}
+
+export function todayQueryOptions(storeId?: string) {
+  return queryOptions({ queryKey: complianceKeys.today(storeId), queryFn: ({ signal }) => getToday(storeId, signal) });
+}
+
+export function useToday(storeId?: string) {
+  return useQuery(todayQueryOptions(storeId));
+}
