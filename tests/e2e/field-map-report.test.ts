@@ -42,10 +42,10 @@ it("an engineer opens the latest sweep's field map, compares it with the month b
   await page.getByTestId("sweep-row").first().getByRole("link", { name: "Open field map" }).click();
   const canvas = page.getByTestId("field-canvas");
   await canvas.waitFor({ timeout: 60_000 });
-  // numbered suspect spots over the plan, listed beside it (the demo's new suspect on the meat line)
+  // numbered suspect spots over the plan, listed beside it (the demo's new leak behind Dairy 3)
   await page.getByTestId("suspect-spot").first().waitFor();
   expect(Number(await canvas.getAttribute("data-suspects"))).toBeGreaterThan(0);
-  await expect(page.getByTestId("suspect-spot").first().textContent()).resolves.toMatch(/^1\s*Meat 2/);
+  await expect(page.getByTestId("suspect-spot").first().textContent()).resolves.toMatch(/^1\s*Dairy 3/);
   // the canvas really holds the field: some pixels are the ramp's dark end, not just the plan
   const painted = await canvas.evaluate((c: HTMLCanvasElement) => {
     const d = c.getContext("2d")!.getImageData(0, 0, c.width, c.height).data;
@@ -61,7 +61,7 @@ it("an engineer opens the latest sweep's field map, compares it with the month b
   // compare with the month before
   await page.getByRole("link", { name: "Compare with the month before" }).click();
   await page.getByTestId("difference-map").waitFor({ timeout: 60_000 });
-  await expect(page.getByTestId("fixture-trends").locator("tbody tr").first().textContent()).resolves.toMatch(/^Meat 2/);
+  await expect(page.getByTestId("fixture-trends").locator("tbody tr").first().textContent()).resolves.toMatch(/^Dairy [234]/);
   await page.screenshot({ path: path.join(shots, "compare.png"), fullPage: true });
   await page.goBack();
   await canvas.waitFor();

@@ -1,14 +1,13 @@
 /**
- * The demo's months of sweeps (all dates counted back from the seeding day): a leak appears at a
- * brazed joint behind Dairy 3, grows over two months, is pinpointed on a fans-stopped re-sweep, turned
- * into a finding and repaired, and is gone from the following months' maps. The latest sweep shows a
- * small new suspect on the meat line for the engineer to act on.
+ * The demo's months of sweeps (all dates counted back from the seeding day; the story is in
+ * demo-story.ts). Runs after the leak records are seeded: it uses their detectors when present and
+ * links each finding of the story to the sweep it was made on, making the finding when absent.
  */
 import { randomUUID } from "node:crypto";
 import { and, eq } from "drizzle-orm";
 import type { DbOrTx } from "../../api/plans/plan-access";
 import { detectors, findingEvents, findings, fixtures, plans, readings, sweeps, systems } from "../schema/index";
-import { DEMO_LEAK_STORY } from "./demo-story";
+import { DEMO_LEAK_STORY, type DemoMonth } from "./demo-story";
 import { mulberry32, simulateDemoWalk } from "./demo-walk";
 
 const DAY_MS = 86_400_000;
@@ -33,17 +32,21 @@ export async function seedDemoSweeps(tx: DbOrTx, ids: DemoSweepIds, timeZone: st
   const rackA = (await tx.select().from(systems).where(and(eq(systems.storeId, ids.storeId), eq(systems.refrigerantId, "R-448A"))))[0];
 
   const day = (offset: number) => new Date(Date.UTC(ids.now.getUTCFullYear(), ids.now.getUTCMonth(), ids.now.getUTCDate()) + offset * DAY_MS);
-  const [diode, infrared] = await tx
-    .insert(detectors)
-    .values([
-      { companyId: ids.companyId, name: "Heated-diode sniffer #2", principle: "heated-diode", transportDelayS: 5, timeConstantS: 1.5, alarmPpm: 2, lastCheckedOn: isoDay(day(-20), timeZone) },
-      { companyId: ids.companyId, name: "Infrared leak detector", principle: "infrared", transportDelayS: 3.5, timeConstantS: 1, alarmPpm: 2, lastCheckedOn: isoDay(day(-170), timeZone) },
-    ])
-    .returning();
+  let dets = await tx.select().from(detectors).where(eq(detectors.companyId, ids.companyId));
+  if (dets.length === 0) {
+    dets = await tx
+      .insert(detectors)
+      .values([
+        { companyId: ids.companyId, name: "Heated-diode sniffer", principle: "heated-diode", transportDelayS: 5, timeConstantS: 1.5, alarmPpm: 2, lastCheckedOn: isoDay(day(-20), timeZone) },
+        { companyId: ids.companyId, name: "Infrared detector", principle: "infrared", transportDelayS: 3.5, timeConstantS: 1, alarmPpm: 2, lastCheckedOn: isoDay(day(-26), timeZone) },
+      ])
+      .returning();
+  }
+  const detectorFor = (principle: string) => dets.find((d) => d.principle === principle) ?? dets[0];
 
   const rand = mulberry32(20261);
   for (const month of DEMO_LEAK_STORY) {
-    const det = month.detector === "infrared" ? infrared : diode;
+    const det = detectorFor(month.detector);
     // 07:10 on the store's clock (Central time is UTC−6 in winter): before the store opens
     const startedAt = new Date(day(month.dayOffset).getTime() + (13 * 60 + 10) * 60_000);
     const taps = simulateDemoWalk({ leaks: month.leaks, fansRunning: month.fans === "running" }, { transportDelayS: det.transportDelayS, timeConstantS: det.timeConstantS, ceilingPpm: 500 }, rand, month.rechecks);
@@ -87,20 +90,35 @@ export async function seedDemoSweeps(tx: DbOrTx, ids: DemoSweepIds, timeZone: st
       })),
     );
 
-    if (month.finding) {
-      const f = month.finding;
-      const fixture = byLabel.get(f.fixtureLabel);
-      const foundAt = new Date(end.getTime() + 10 * 60_000);
-      const [row] = await tx
-        .insert(findings)
-        .values({ companyId: ids.companyId, storeId: ids.storeId, systemId: rackA?.id ?? null, planId: plan.id, sweepId, fixtureId: fixture?.id ?? null, x: f.x, y: f.y, component: f.component, source: "suspect-spot", status: "repaired", note: f.note, foundAt, foundById: ids.technicianId })
-        .returning();
-      const on = (offset: number) => isoDay(new Date(foundAt.getTime() + offset * DAY_MS), timeZone);
-      await tx.insert(findingEvents).values([
-        { findingId: row.id, kind: "found", status: "suspected", on: on(0), at: foundAt, byId: ids.technicianId, note: "Made from suspect spot 1 of the fans-stopped re-sweep." },
-        { findingId: row.id, kind: "confirmed", status: "confirmed", on: on(0), at: new Date(foundAt.getTime() + 3_600_000), byId: ids.technicianId, note: f.confirmNote },
-        { findingId: row.id, kind: "repaired", status: "repaired", on: on(1), at: new Date(foundAt.getTime() + DAY_MS), byId: ids.technicianId, note: f.repairNote },
-      ]);
-    }
+    if (month.finding) await linkOrMakeFinding(tx, ids, { planId: plan.id, sweepId, end, systemId: rackA?.id ?? null, fixtureId: byLabel.get(month.finding.fixtureLabel)?.id ?? null, timeZone }, month.finding);
   }
+}
+
+/** The records' finding on this fixture found within a few days of the sweep gets the sweep's id; else one is made. */
+async function linkOrMakeFinding(
+  tx: DbOrTx,
+  ids: DemoSweepIds,
+  at: { planId: string; sweepId: string; end: Date; systemId: string | null; fixtureId: string | null; timeZone: string },
+  f: NonNullable<DemoMonth["finding"]>,
+): Promise<void> {
+  const onFixture = at.fixtureId ? await tx.select().from(findings).where(and(eq(findings.storeId, ids.storeId), eq(findings.fixtureId, at.fixtureId))) : [];
+  const near = onFixture.find((r) => Math.abs(r.foundAt.getTime() - at.end.getTime()) < 4 * DAY_MS);
+  if (near) {
+    await tx.update(findings).set({ sweepId: at.sweepId, source: "suspect-spot", x: f.x, y: f.y }).where(eq(findings.id, near.id));
+    return;
+  }
+  const foundAt = new Date(at.end.getTime() + 10 * 60_000);
+  const [row] = await tx
+    .insert(findings)
+    .values({ companyId: ids.companyId, storeId: ids.storeId, systemId: at.systemId, planId: at.planId, sweepId: at.sweepId, fixtureId: at.fixtureId, x: f.x, y: f.y, component: f.component, source: "suspect-spot", status: f.status, note: f.note, foundAt, foundById: ids.technicianId })
+    .returning();
+  const on = (offset: number) => isoDay(new Date(foundAt.getTime() + offset * DAY_MS), at.timeZone);
+  const events: (typeof findingEvents.$inferInsert)[] = [{ findingId: row.id, kind: "found", status: "suspected", on: on(0), at: foundAt, byId: ids.technicianId, note: "Made from suspect spot 1." }];
+  if (f.status === "repaired") {
+    events.push(
+      { findingId: row.id, kind: "confirmed", status: "confirmed", on: on(0), at: new Date(foundAt.getTime() + 3_600_000), byId: ids.technicianId, note: "Bubble solution foamed at the joint." },
+      { findingId: row.id, kind: "repaired", status: "repaired", on: on(1), at: new Date(foundAt.getTime() + DAY_MS), byId: ids.technicianId, note: "Re-made and pressure tested with nitrogen." },
+    );
+  }
+  await tx.insert(findingEvents).values(events);
 }
