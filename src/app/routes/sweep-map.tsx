@@ -65,7 +65,8 @@ export function Component() {
   );
   const sweepFindings = (findings.data ?? []).filter((f) => f.sweepId === sweepId);
   const findingRanks = new Set(
-    (a?.candidates ?? []).filter((c) => sweepFindings.some((f) => f.x !== null && f.y !== null && Math.hypot(f.x - c.x, f.y - c.y) < 0.01)).map((c) => c.rank),
+    // a finding from this sweep inside the spot's search radius already answers it
+    (a?.candidates ?? []).filter((c) => sweepFindings.some((f) => f.x !== null && f.y !== null && Math.hypot(f.x - c.x, f.y - c.y) <= c.radius)).map((c) => c.rank),
   );
   const today = new Intl.DateTimeFormat("sv-SE", { timeZone }).format(new Date());
 

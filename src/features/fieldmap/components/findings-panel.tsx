@@ -11,7 +11,7 @@ function RepairForm({ storeId, finding, today }: { storeId: string; finding: Swe
   const noteError = repair.isError && note.trim() === "" ? "Say what was repaired" : undefined;
   return (
     <form
-      className="mt-2 grid gap-2 sm:grid-cols-[10rem_1fr_auto] sm:items-end"
+      className="mt-2 grid gap-2"
       onSubmit={(e) => {
         e.preventDefault();
         if (note.trim() === "") return repair.reset();
@@ -20,7 +20,7 @@ function RepairForm({ storeId, finding, today }: { storeId: string; finding: Swe
     >
       <TextField label="Repaired on" type="date" value={on} max={today} onChange={(e) => setOn(e.currentTarget.value)} />
       <TextField label="What was done" value={note} onChange={(e) => setNote(e.currentTarget.value)} error={noteError} placeholder="e.g. joint re-brazed, pressure tested" />
-      <Button type="submit" busy={repair.isPending} disabled={note.trim() === ""}>
+      <Button type="submit" className="justify-self-start" busy={repair.isPending} disabled={note.trim() === ""}>
         Mark repaired
       </Button>
       {repair.isError ? <Alert tone="error">{repair.error.message}</Alert> : null}
