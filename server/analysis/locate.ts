@@ -136,6 +136,7 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     separationM: o.separationM,
     alternateFraction: o.alternateFraction,
     rankByStrength: o.rankByStrength,
+    sourceSeparationM: o.sourceSeparationM,
     prior: o.riskPointLogOdds > 0 ? riskPointPrior(grid, plan, o.riskPointLogOdds) : null,
     credible: (c, column, _q, b, residual, delta) => {
       if (delta < o.minDeltaChi2) return false;
