@@ -69,6 +69,7 @@ it("creates a store, uploads and calibrates a plan, draws three fixtures and fin
   page.on("console", (m) => m.type() === "error" && failures.push(m.text()));
 
   await signInThroughForm(page, server.url, co.people["lead-tech"].email, PASSWORD);
+  await page.getByRole("link", { name: "Stores", exact: true }).click();
   await page.getByRole("button", { name: "New store" }).click();
   await page.getByLabel("Store name").fill("Quillby Grocers – Fernbank");
   await page.getByLabel("Address").fill("12 Fernbank Parade");
