@@ -3,7 +3,7 @@ import type { z } from "zod";
 import type { AppContext } from "../../context";
 import type { FindingActionInput, FindingDetail } from "../../contracts/finding-actions";
 import type { createFindingInput } from "../../contracts/findings";
-import { findingEvents, findings, fixtures, plans, stores, systems } from "../../db/schema/index";
+import { findingEvents, findings, fixtures, plans, stores, sweeps, systems } from "../../db/schema/index";
 import { compareDates, parseIsoDate } from "../../domain/dates/calendar-date";
 import { localDateOf } from "../../domain/dates/time-zone";
 import { DomainInputError } from "../../domain/input-error";
@@ -60,8 +60,10 @@ async function checkReferences(ctx: AppContext, viewer: Viewer, storeId: string,
     const [f] = await ctx.db.select({ id: fixtures.id }).from(fixtures).innerJoin(plans, eq(plans.id, fixtures.planId)).where(where).limit(1);
     if (!f) throw badRequest("Please check: fixtureId is not a fixture on this store's plan.", { fixtureId: "is not a fixture on this store's plan" });
   }
-  // sweepId is stored as given: the sweeps table arrives with the Walk work. Once it has landed,
-  // check here that the sweep belongs to this store (and add the foreign key in schema/findings.ts).
+  if (input.sweepId) {
+    const [w] = await ctx.db.select({ id: sweeps.id }).from(sweeps).where(and(eq(sweeps.id, input.sweepId), eq(sweeps.storeId, storeId), eq(sweeps.companyId, viewer.companyId)));
+    if (!w) throw badRequest("Please check: sweepId is not a sweep of this store.", { sweepId: "is not a sweep of this store" });
+  }
 }
 
 /**

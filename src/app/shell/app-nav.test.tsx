@@ -14,11 +14,11 @@ async function navLabels() {
 
 // Expected menus follow the role table in PRODUCT.md and the grants in server/domain/roles.ts.
 const cases: { role: Role; outboxEnabled: boolean; expected: string[] }[] = [
-  { role: "owner", outboxEnabled: true, expected: ["Today", "Stores", "Team", "Company settings", "Outbox"] },
-  { role: "owner", outboxEnabled: false, expected: ["Today", "Stores", "Team", "Company settings"] },
+  { role: "owner", outboxEnabled: true, expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings", "Outbox"] },
+  { role: "owner", outboxEnabled: false, expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"] },
   { role: "engineer", outboxEnabled: true, expected: ["Today", "Stores", "Team", "Company settings", "Outbox"] },
-  { role: "lead-tech", outboxEnabled: true, expected: ["Today", "Stores", "Team", "Company settings"] },
-  { role: "technician", outboxEnabled: true, expected: ["Today", "Stores", "Team", "Company settings"] },
+  { role: "lead-tech", outboxEnabled: true, expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"] },
+  { role: "technician", outboxEnabled: true, expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"] },
   { role: "store-contact", outboxEnabled: true, expected: ["Today", "Stores", "Company settings"] },
 ];
 
