@@ -12,9 +12,10 @@ describe("map view", () => {
 
   it("zooms to a suspect spot: the spot lands in the middle and its radius fills about a quarter", () => {
     const base = fitView(60, 36, 900, 540, 0);
-    const v = focusView(12, 9, 1, 900, 540, base);
+    const v = focusView(12, 9, 2, 900, 540, base);
     expect(toPx(v, 12, 9)).toEqual([450, 270]);
-    expect(v.scale).toBeCloseTo(540 / 4, 9);
+    // a quarter of 540 px over a 2 m radius: 67.5 px/m
+    expect(v.scale).toBeCloseTo(540 / 4 / 2, 9);
     // never zooms out past the whole plan, nor in past 8×
     expect(focusView(12, 9, 100, 900, 540, base).scale).toBe(base.scale);
     expect(focusView(12, 9, 0.01, 900, 540, base).scale).toBe(base.scale * 8);
