@@ -4,7 +4,16 @@ import { renderApp } from "../../../tests/helpers/render-client";
 import { sessionFor, signedOutSession } from "../../../tests/helpers/session-fixtures";
 import { apiError, stubFetch } from "../../../tests/helpers/stub-fetch";
 
-const store = (id: string, name: string, archivedAt: string | null = null) => ({ id, name, address: "14 Maple Street, Brookfield", timeZone: "America/Chicago", archivedAt });
+// The server's store shape (server/contracts/stores.ts).
+const store = (id: string, name: string, archivedAt: string | null = null) => ({
+  id,
+  name,
+  address: "14 Maple Street, Brookfield",
+  timeZone: "America/Chicago",
+  archivedAt,
+  createdAt: "2026-01-05T15:00:00.000Z",
+  updatedAt: "2026-01-05T15:00:00.000Z",
+});
 
 describe("stores page", () => {
   it("lists the company's stores with their address and leaves out archived ones", async () => {

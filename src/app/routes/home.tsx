@@ -1,10 +1,10 @@
-import { Navigate, useLocation } from "react-router";
-import { isStoreScoped, type Role } from "../../../server/domain/roles";
+import { useState } from "react";
+import { Navigate, useLocation, useNavigate } from "react-router";
+import { can, isStoreScoped, type Role } from "../../../server/domain/roles";
+import { Button } from "../../components/ui/button";
 import { PageHeader } from "../../components/ui/page-header";
-import { QueryError } from "../../components/ui/query-error";
-import { Spinner } from "../../components/ui/spinner";
-import { useStores } from "../../features/stores/api/get-stores";
-import { StoreList } from "../../features/stores/components/store-list";
+import { StoreForm } from "../../features/stores/components/store-form";
+import { StoreTable } from "../../features/stores/components/store-table";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
 
@@ -21,14 +21,23 @@ export function Component() {
 function Stores() {
   useDocumentTitle("Stores");
   const { membership } = useSignedIn();
-  const stores = useStores();
+  const navigate = useNavigate();
+  const [creating, setCreating] = useState(false);
   const scoped = isStoreScoped(membership.role);
+  const canEdit = can(membership.role, "stores.edit");
   return (
     <>
-      <PageHeader title="Stores" description={scoped ? "The stores shared with you." : `The stores of ${membership.companyName}.`} />
-      {stores.isPending ? <Spinner label="Loading stores…" /> : null}
-      {stores.isError ? <QueryError error={stores.error} what="the stores" onRetry={() => void stores.refetch()} /> : null}
-      {stores.data ? <StoreList stores={stores.data} scoped={scoped} /> : null}
+      <PageHeader
+        title="Stores"
+        description={scoped ? "The stores shared with you." : `The stores of ${membership.companyName}.`}
+        actions={canEdit && !creating ? <Button onClick={() => setCreating(true)}>New store</Button> : null}
+      />
+      {creating ? (
+        <div className="mb-6 max-w-xl">
+          <StoreForm onDone={(s) => navigate(`/stores/${s.id}`)} onCancel={() => setCreating(false)} />
+        </div>
+      ) : null}
+      <StoreTable scoped={scoped} />
     </>
   );
 }

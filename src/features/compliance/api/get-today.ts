@@ -8,7 +8,8 @@ export function getToday(storeId: string | undefined, signal?: AbortSignal) {
 }
 
 export function todayQueryOptions(storeId?: string) {
-  return queryOptions({ queryKey: complianceKeys.today(storeId), queryFn: ({ signal }) => getToday(storeId, signal) });
+  // Deadlines move when anyone records a repair or an addition: read afresh on every visit.
+  return queryOptions({ queryKey: complianceKeys.today(storeId), queryFn: ({ signal }) => getToday(storeId, signal), staleTime: 0 });
 }
 
 export function useToday(storeId?: string) {

@@ -8,7 +8,7 @@ import { DataTable } from "../../../components/ui/data-table";
 import { TextField } from "../../../components/ui/text-field";
 import { serverFieldErrors } from "../../../lib/form-errors";
 import { useRecordCharge } from "../api/record-charge";
-import { daysInWords, DUE_KIND_LABELS, formatMass, formatPercent, STATE_LABELS, type MassUnit } from "../model/figures";
+import { daysInWords, formatMass, formatPercent, STATE_LABELS, type MassUnit } from "../model/figures";
 import { ChargeForm } from "./charge-form";
 import { LeakCheckForm } from "./leak-check-form";
 
@@ -67,7 +67,7 @@ export function SystemRecords({ r, unit, canRecord, findings }: { r: SystemRecor
           <ul className="space-y-2">
             {r.due.map((d) => (
               <li key={`${d.kind}-${d.dueOn}-${d.findingId}`} className="rounded-md bg-surface p-3 edge">
-                <span className="font-bold">{d.dueOn}</span> · {STATE_LABELS[d.state]}, {daysInWords(d.daysLeft)} · {DUE_KIND_LABELS[d.kind]}: {d.findingId ? <Link className="text-accent underline" to={d.link}>{d.what}</Link> : d.what}
+                <span className="font-bold">{d.dueOn}</span> · {STATE_LABELS[d.state]}, {daysInWords(d.daysLeft)} · {d.findingId ? <Link className="text-accent underline" to={d.link}>{d.what}</Link> : d.what}
                 <p className="text-sm text-muted">Rule: {d.source}</p>
               </li>
             ))}

@@ -45,9 +45,18 @@ export function TodayView({ data, storeId, onStoreChange }: { data: TodayData; s
             rowKey={(r) => `${r.kind}-${r.systemId ?? r.detectorId}-${r.findingId ?? ""}-${r.dueOn}`}
             columns={[
               { header: "Due", cell: (r) => <span className={STATE_TONE[r.state]}>{r.dueOn ?? "—"}<br /><span className="text-sm">{STATE_LABELS[r.state]}, {daysInWords(r.daysLeft)}</span></span> },
-              { header: "What", cell: (r) => <><span className="text-sm text-muted">{DUE_KIND_LABELS[r.kind]}</span><br /><Link className="text-accent underline" to={r.link}>{r.what}</Link></> },
-              { header: "Where", cell: (r) => [r.storeName, r.systemName].filter(Boolean).join(" · ") || "Company" },
-              { header: "Rule", cell: (r) => <span className="text-sm text-muted">{r.source}</span>, className: "max-w-xs" },
+              {
+                header: "What",
+                cell: (r) => (
+                  <>
+                    <span className="text-sm text-muted">{DUE_KIND_LABELS[r.kind]}</span>
+                    <br />
+                    <Link className="text-accent underline" to={r.link}>{r.what}</Link>
+                    <p className="mt-1 max-w-prose text-sm text-muted">Rule: {r.source}</p>
+                  </>
+                ),
+              },
+              { header: "Where", cell: (r) => <>{r.storeName ?? "Company"}{r.systemName ? <><br />{r.systemName}</> : null}</> },
             ]}
           />
         )}
@@ -67,8 +76,7 @@ export function TodayView({ data, storeId, onStoreChange }: { data: TodayData; s
               { header: "Store", cell: (r) => r.storeName },
               { header: "Leak rate", cell: (r) => <Link className="font-bold text-danger underline" to={r.link}>{formatPercent(r.percent)}</Link> },
               { header: "Threshold", cell: (r) => `${r.thresholdPercent} %` },
-              { header: "Calculated", cell: (r) => r.on },
-              { header: "Rule", cell: (r) => <span className="text-sm text-muted">{r.partTitle}; {r.source}</span> },
+              { header: "Calculated", cell: (r) => <>{r.on}<p className="max-w-xs text-sm text-muted">{r.partTitle}; {r.source}</p></> },
             ]}
           />
         )}
@@ -88,7 +96,7 @@ export function TodayView({ data, storeId, onStoreChange }: { data: TodayData; s
               { header: "Status", cell: (r) => r.status },
               { header: "Store", cell: (r) => r.storeName },
               { header: "Found", cell: (r) => r.foundOn },
-              { header: "Deadline", cell: (r) => (r.deadline ? <><span className="font-bold">{r.deadline}</span><br /><span className="text-sm text-muted">{r.deadlineSource}</span></> : "—") },
+              { header: "Deadline", cell: (r) => (r.deadline ? <><span className="font-bold">{r.deadline}</span><br /><span className="block max-w-xs text-sm text-muted">{r.deadlineSource}</span></> : "—") },
             ]}
           />
         )}

@@ -10,7 +10,7 @@ export function SyncBanner({ status, onShowRejected }: { status: SyncStatus; onS
       ? "All readings uploaded"
       : "Offline — readings are kept on this device";
   return (
-    <div role="status" data-testid="sync-banner" data-waiting={waiting} className={`flex min-h-12 items-center justify-between gap-2 rounded-md border-l-4 px-3 edge ${tone}`}>
+    <div role="status" data-testid="sync-banner" data-waiting={waiting} data-stopped-by={status.lastReport?.stoppedBy ?? ""} className={`flex min-h-12 items-center justify-between gap-2 rounded-md border-l-4 px-3 edge ${tone}`}>
       <span className="font-bold">{text}</span>
       {rejected ? (
         <button type="button" className="min-h-12 font-bold underline" onClick={onShowRejected}>
