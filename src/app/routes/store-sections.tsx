@@ -4,6 +4,7 @@ import type { Role } from "../../../server/domain/roles";
 import { can } from "../../../server/domain/roles";
 import { PlanSection } from "../../features/layout/components/plan/plan-section";
 import { SystemsSection } from "../../features/systems/components/systems-section";
+import { StoreRecordsSection } from "../../features/compliance/components/store-records-section";
 import type { UnitPreferences } from "../shell/use-unit-preferences";
 
 /** What every section of the store page is given; each feature reads the rest itself. */
@@ -20,4 +21,5 @@ export interface StoreSectionProps {
 export const STORE_SECTIONS: readonly { id: string; Component: ComponentType<StoreSectionProps> }[] = [
   { id: "plan", Component: ({ store, role, units }) => <PlanSection storeId={store.id} canEdit={can(role, "plans.edit") && !store.archivedAt} preference={units.length} /> },
   { id: "systems", Component: ({ store, role, units }) => <SystemsSection storeId={store.id} canEdit={can(role, "stores.edit") && !store.archivedAt} massUnit={units.mass} /> },
+  { id: "records", Component: ({ store }) => <StoreRecordsSection storeId={store.id} /> },
 ];

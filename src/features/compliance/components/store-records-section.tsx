@@ -1,0 +1,55 @@
+import { Link } from "react-router";
+import { QueryError } from "../../../components/ui/query-error";
+import { Spinner } from "../../../components/ui/spinner";
+import { useToday } from "../api/get-today";
+import { daysInWords, formatPercent, STATE_LABELS } from "../model/figures";
+
+/** The store page's records section: each system's latest leak rate, what is due, open findings. */
+export function StoreRecordsSection({ storeId }: { storeId: string }) {
+  const today = useToday(storeId);
+  return (
+    <section aria-labelledby="store-records" className="space-y-3">
+      <h2 id="store-records" className="text-xl font-bold">Leak records</h2>
+      {today.isPending ? <Spinner label="Loading the records…" /> : null}
+      {today.isError ? <QueryError error={today.error} what="the records" onRetry={() => void today.refetch()} /> : null}
+      {today.data ? (
+        <div className="grid gap-4 lg:grid-cols-3">
+          <div>
+            <h3 className="font-bold">Systems</h3>
+            <ul className="space-y-1">
+              {today.data.systems.map((s) => (
+                <li key={s.id}>
+                  <Link className="text-accent underline" to={s.link}>{s.name}</Link>:{" "}
+                  <span className={s.breachOpen ? "font-bold text-danger" : ""}>{s.latestPercent === null ? "no additions" : formatPercent(s.latestPercent)}</span>
+                  {s.thresholdPercent !== null ? ` (threshold ${s.thresholdPercent} %)` : ""}
+                </li>
+              ))}
+            </ul>
+          </div>
+          <div>
+            <h3 className="font-bold">Due</h3>
+            {today.data.due.length === 0 ? <p className="text-muted">Nothing due.</p> : (
+              <ul className="space-y-1">
+                {today.data.due.map((d) => (
+                  <li key={`${d.kind}-${d.systemId}-${d.findingId}-${d.dueOn}`}>
+                    <span className="font-bold">{d.dueOn}</span> ({STATE_LABELS[d.state].toLowerCase()}, {daysInWords(d.daysLeft)}): <Link className="text-accent underline" to={d.link}>{d.what}</Link>
+                  </li>
+                ))}
+              </ul>
+            )}
+          </div>
+          <div>
+            <h3 className="font-bold">Open findings</h3>
+            {today.data.openFindings.length === 0 ? <p className="text-muted">None.</p> : (
+              <ul className="space-y-1">
+                {today.data.openFindings.map((f) => (
+                  <li key={f.id}><Link className="text-accent underline" to={f.link}>{f.component ?? "leak"} on {f.systemName ?? "no system"}</Link> · {f.status}{f.deadline ? ` · due ${f.deadline}` : ""}</li>
+                ))}
+              </ul>
+            )}
+          </div>
+        </div>
+      ) : null}
+    </section>
+  );
+}
