@@ -33,7 +33,7 @@ describe("Today page", () => {
     expect(within(due).getByRole("link", { name: /Repair/ }).getAttribute("href")).toBe(`/systems/${SYS}`);
     expect(within(due).getByText(/Rule: 40 CFR 84 subpart C/)).toBeTruthy();
     expect(screen.getByRole("link", { name: "37.6 %" }).getAttribute("href")).toBe(`/systems/${SYS}`);
-    expect(screen.getByRole("link", { name: /brazed joint on Rack A/ }).getAttribute("href")).toBe(`/findings/${FIND}`);
+    expect(screen.getByRole("link", { name: /Brazed joint on Rack A/ }).getAttribute("href")).toBe(`/findings/${FIND}`);
     fireEvent.change(screen.getByLabelText("Store"), { target: { value: B } });
     expect(within(screen.getByRole("table", { name: "Due and overdue" })).getAllByRole("row")).toHaveLength(2);
     expect(screen.getByText("No open findings.")).toBeTruthy();

@@ -1,4 +1,5 @@
 import { Link } from "react-router";
+import { COMPONENT_LABELS, type FINDING_COMPONENTS } from "../../../../server/contracts/findings";
 import { QueryError } from "../../../components/ui/query-error";
 import { Spinner } from "../../../components/ui/spinner";
 import { useToday } from "../api/get-today";
@@ -21,7 +22,7 @@ export function StoreRecordsSection({ storeId }: { storeId: string }) {
                 <li key={s.id}>
                   <Link className="text-accent underline" to={s.link}>{s.name}</Link>:{" "}
                   <span className={s.breachOpen ? "font-bold text-danger" : ""}>{s.latestPercent === null ? "no additions" : formatPercent(s.latestPercent)}</span>
-                  {s.thresholdPercent !== null ? ` (threshold ${s.thresholdPercent} %)` : ""}
+                  {s.thresholdPercent !== null ? ` (threshold ${s.thresholdPercent} %)` : " (no threshold applies)"}
                 </li>
               ))}
             </ul>
@@ -43,7 +44,7 @@ export function StoreRecordsSection({ storeId }: { storeId: string }) {
             {today.data.openFindings.length === 0 ? <p className="text-muted">None.</p> : (
               <ul className="space-y-1">
                 {today.data.openFindings.map((f) => (
-                  <li key={f.id}><Link className="text-accent underline" to={f.link}>{f.component ?? "leak"} on {f.systemName ?? "no system"}</Link> · {f.status}{f.deadline ? ` · due ${f.deadline}` : ""}</li>
+                  <li key={f.id}><Link className="text-accent underline" to={f.link}>{f.component ? COMPONENT_LABELS[f.component as (typeof FINDING_COMPONENTS)[number]] : "Leak"} on {f.systemName ?? "no system"}</Link> · {f.status}{f.deadline ? ` · due ${f.deadline}` : ""}</li>
                 ))}
               </ul>
             )}

@@ -1,5 +1,6 @@
 import { useState } from "react";
 import { Link } from "react-router";
+import { COMPONENT_LABELS, type FINDING_COMPONENTS } from "../../../../server/contracts/findings";
 import type { TodayView as TodayData } from "../../../../server/contracts/compliance";
 import { DataTable } from "../../../components/ui/data-table";
 import { EmptyState } from "../../../components/ui/empty-state";
@@ -92,7 +93,7 @@ export function TodayView({ data, storeId, onStoreChange }: { data: TodayData; s
             rows={inStore(data.openFindings)}
             rowKey={(r) => r.id}
             columns={[
-              { header: "Finding", cell: (r) => <Link className="text-accent underline" to={r.link}>{r.component ? r.component.replace("-", " ") : "Leak"} on {r.systemName ?? "no system"}</Link> },
+              { header: "Finding", cell: (r) => <Link className="text-accent underline" to={r.link}>{r.component ? COMPONENT_LABELS[r.component as (typeof FINDING_COMPONENTS)[number]] : "Leak"} on {r.systemName ?? "no system"}</Link> },
               { header: "Status", cell: (r) => r.status },
               { header: "Store", cell: (r) => r.storeName },
               { header: "Found", cell: (r) => r.foundOn },
