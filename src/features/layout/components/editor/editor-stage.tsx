@@ -232,7 +232,7 @@ export function EditorStage(p: EditorStageProps) {
           rotateEnabled
           keepRatio={false}
           ignoreStroke
-          anchorSize={14}
+          anchorSize={12}
           anchorStroke={SELECTION_STROKE}
           borderStroke={SELECTION_STROKE}
           rotationSnaps={[0, 45, 90, 135, 180, 225, 270, 315]}

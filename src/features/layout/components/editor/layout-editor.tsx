@@ -190,7 +190,7 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
         </Alert>
       ) : null}
       {message ? <Alert tone="note">{message}</Alert> : null}
-      <div className="grid gap-3 xl:grid-cols-[minmax(0,1fr)_22rem]">
+      <div className="grid items-start gap-3 xl:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="relative">
           <div
             ref={box}
