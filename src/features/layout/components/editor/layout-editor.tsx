@@ -264,7 +264,7 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
         <h2 id="list-heading" className="text-lg font-bold">
           All fixtures ({fixtures.length})
         </h2>
-        <FixtureTable fixtures={fixtures} selection={scene.selection} systems={systems} preference={preference} onSelect={onSelectRow} />
+        <FixtureTable scene={scene} systems={systems} preference={preference} onSelect={onSelectRow} />
       </section>
     </div>
   );
