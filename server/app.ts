@@ -18,6 +18,13 @@ import { storesRouter } from "./api/stores/stores.router";
 import { detectorsRouter } from "./api/detectors/detectors.router";
 import { systemsRouter } from "./api/systems/systems.router";
 import { plansRouter } from "./api/plans/plans.router";
+import { analysisRouter } from "./api/analysis/analysis.router";
+import { reportsRouter } from "./api/reports/reports.router";
+import { sweepsRouter } from "./api/sweeps/sweeps.router";
+import { findingsRouter } from "./api/findings/findings.router";
+import { complianceRouter } from "./api/compliance/compliance.router";
+import { todayRouter } from "./api/compliance/today.router";
+import { exportsRouter } from "./api/exports/exports.router";
 
 const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
 
@@ -67,6 +74,13 @@ export function createApp(ctx: AppContext): Express {
   api.use(detectorsRouter(ctx));
   api.use(systemsRouter(ctx));
   api.use(plansRouter(ctx));
+  api.use(analysisRouter(ctx));
+  api.use(reportsRouter(ctx));
+  api.use(sweepsRouter(ctx));
+  api.use(findingsRouter(ctx));
+  api.use(complianceRouter(ctx));
+  api.use(todayRouter(ctx));
+  api.use(exportsRouter(ctx));
   api.use(notFoundApi);
   app.use("/api", api);
 

@@ -3,6 +3,7 @@ import { readEnv } from "./env";
 import { bootstrap } from "./bootstrap";
 import { createApp } from "./app";
 import { seedDemoIfEmpty, DEMO_SIGN_INS } from "./db/seed/demo";
+import { startDigestSchedule } from "./jobs/digest";
 
 // Listening and shutting down only; the app itself is built in app.ts.
 const env = readEnv();
@@ -13,6 +14,9 @@ if (env.SEED_DEMO === "true") {
   const seeded = await seedDemoIfEmpty(ctx);
   if (seeded) ctx.logger.info("demo company seeded");
 }
+
+// The daily digest runs in the serving process; tests start it only when they ask for it.
+const digest = startDigestSchedule(ctx);
 
 const server = createApp(ctx).listen(env.PORT, env.HOST, () => {
   const { port } = server.address() as AddressInfo;
@@ -36,6 +40,7 @@ async function shutdown(signal: string) {
   if (closing) return;
   closing = true;
   ctx.logger.info({ signal }, "shutting down");
+  digest.stop();
   server.close();
   server.closeAllConnections();
   await runtime.close();

@@ -63,39 +63,47 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
 
   // 2. benign-source zones: fixed nuisance sources, distance measured from the whole zone
   const cells = grid.width * grid.height;
-  const zoneDist = new Float32Array(cells).fill(Infinity);
-  const zoneNearest = new Int32Array(cells).fill(-1);
-  const zoneOfReading = new Int32Array(n).fill(-1);
   const stepScale = o.fanMixingScale < 1 ? fanStepScale(grid, plan, o.fanMixingScale) : null;
   const zoneSearch = new GeodesicSearch(grid, stepScale);
-  const nuisance = plan.backgroundZones.map((zone, z) => {
+  const zoneCellDist: Float32Array[] = [];
+  const zoneReadingDist: Float64Array[] = [];
+  const nuisance = plan.backgroundZones.map((zone) => {
     let zc = cellsInside(grid, zone.polygon).filter((k) => !grid.blocked[k]);
     if (zc.length === 0) {
       const [cx, cy] = polygonCentroid(zone.polygon);
       zc = [nearestFreeCell(grid, cx, cy)].filter((k) => k >= 0);
     }
-    const reach = zoneKernel.truncationM;
-    const settled = zoneSearch.fromCells(zc, reach);
-    for (let q = 0; q < settled; q++) {
-      const k = zoneSearch.settled[q];
-      if (zoneSearch.dist[k] < zoneDist[k]) {
-        zoneDist[k] = zoneSearch.dist[k];
-        zoneNearest[k] = z;
-      }
-    }
-    const column = new Float64Array(n);
-    for (let i = 0; i < n; i++) {
-      const d = zoneSearch.dist[readingCell[i]];
-      column[i] = zoneKernel.at(d);
-      if (d <= o.zoneMarginM && zoneOfReading[i] < 0) zoneOfReading[i] = z;
-    }
-    return column;
+    const settled = zoneSearch.fromCells(zc, zoneKernel.truncationM);
+    const dist = new Float32Array(cells).fill(Infinity);
+    for (let q = 0; q < settled; q++) dist[zoneSearch.settled[q]] = zoneSearch.dist[zoneSearch.settled[q]];
+    zoneCellDist.push(dist);
+    const rd = Float64Array.from(readingCell, (k) => dist[k]);
+    zoneReadingDist.push(rd);
+    return Float64Array.from(rd, (d) => zoneKernel.at(d));
   });
-
-  // What an active zone can make readings show: its stated typical reading, the readings at it, or by
-  // default `zoneTypicalAlarms` times the alarm level; a zone is active when the zone-only fit gives it gas.
+  // A zone is active when the zone-only fit gives it gas. Only an active zone explains the readings
+  // around it and keeps suspect spots off its surroundings; nothing is ever placed inside a zone.
   const zoneFit = fitNonnegative(y, weightsFor(y, o), nuisance, censored);
   const zoneActive = plan.backgroundZones.map((_, z) => zoneFit.q[z] > 0.5);
+  const zoneDist = new Float32Array(cells).fill(Infinity); // to the nearest active zone
+  const zoneNearest = new Int32Array(cells).fill(-1);
+  const insideZone = new Uint8Array(cells);
+  zoneCellDist.forEach((dist, z) => {
+    for (let c = 0; c < cells; c++) {
+      if (dist[c] === 0) insideZone[c] = 1;
+      if (zoneActive[z] && dist[c] < zoneDist[c]) {
+        zoneDist[c] = dist[c];
+        zoneNearest[c] = z;
+      }
+    }
+  });
+  const zoneOfReading = new Int32Array(n).fill(-1);
+  zoneReadingDist.forEach((rd, z) => {
+    if (!zoneActive[z]) return;
+    for (let i = 0; i < n; i++) if (rd[i] <= o.zoneMarginM && zoneOfReading[i] < 0) zoneOfReading[i] = z;
+  });
+  // What an active zone can make readings show: its stated typical reading, the readings at it, or by
+  // default `zoneTypicalAlarms` times the alarm level.
   const zoneLevel = plan.backgroundZones.map((zone, z) => {
     let level = zone.ppm ?? o.zoneTypicalAlarms * instrument.alarmPpm;
     for (let i = 0; i < n; i++) if (zoneOfReading[i] === z) level = Math.max(level, y[i]);
@@ -117,7 +125,7 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   const allowed = new Uint8Array(cells);
   for (let c = 0; c < cells; c++) {
     allowed[c] =
-      !grid.blocked[c] && zoneDist[c] > o.zoneMarginM && fields.nearestReading[c] <= o.maxReachM && (!onEquipment || onEquipment[c]) ? 1 : 0;
+      !grid.blocked[c] && !insideZone[c] && zoneDist[c] > o.zoneMarginM && fields.nearestReading[c] <= o.maxReachM && (!onEquipment || onEquipment[c]) ? 1 : 0;
   }
   const supportThreshold = kernel.at(o.supportRadiusM);
   const support = (column: Float64Array, b: number, residual: Float64Array) => {
@@ -136,6 +144,7 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     separationM: o.separationM,
     alternateFraction: o.alternateFraction,
     rankByStrength: o.rankByStrength,
+    sourceSeparationM: o.sourceSeparationM,
     prior: o.riskPointLogOdds > 0 ? riskPointPrior(grid, plan, o.riskPointLogOdds) : null,
     credible: (c, column, _q, b, residual, delta) => {
       if (delta < o.minDeltaChi2) return false;
@@ -144,7 +153,7 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
       // Within reach of a benign-source zone, a spot must read more than the zone does: gas spreading
       // from the zone thins out with distance, so weaker readings there are most simply the zone's.
       const z = zoneNearest[c];
-      if (z >= 0 && zoneActive[z] && zoneDist[c] <= zoneKernel.truncationM) return sup.some((i) => y[i] > zoneLevel[z]);
+      if (z >= 0 && zoneDist[c] <= zoneKernel.truncationM) return sup.some((i) => y[i] > zoneLevel[z]);
       return true;
     },
   });

@@ -25,13 +25,14 @@ export type Permission =
   | "findings.record"
   | "findings.close"
   | "compliance.manage"
-  | "reports.send";
+  | "reports.send"
+  | "digest.send";
 
 const GRANTS: Record<Role, readonly Permission[]> = {
   owner: [
     "members.read", "members.manage", "settings.manage", "outbox.read", "stores.read", "stores.edit",
     "plans.edit", "detectors.manage", "sweeps.record", "sweeps.review", "findings.record", "findings.close",
-    "compliance.manage", "reports.send",
+    "compliance.manage", "reports.send", "digest.send",
   ],
   "lead-tech": [
     "members.read", "stores.read", "stores.edit", "plans.edit", "detectors.manage", "sweeps.record", "findings.record",

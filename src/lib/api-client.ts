@@ -155,3 +155,19 @@ export const api = {
   /** A multipart upload (multer on the server reads the named file field). */
   upload: <T>(path: string, schema: z.ZodType<T>, form: FormData) => apiRequest("POST", path, schema, { body: form }),
 };
+
+/** A multipart upload (a photo, a plan image): same cookie, CSRF header and error shape as api.post. */
+export async function apiUpload<T>(path: string, form: FormData, schema: z.ZodType<T>): Promise<T> {
+  await ensureCsrfToken();
+  let response: Response;
+  try {
+    response = await fetch(path, { method: "POST", headers: { Accept: "application/json", ...(csrfToken ? { "X-CSRF-Token": csrfToken } : {}) }, credentials: "same-origin", body: form });
+  } catch {
+    throw new ApiRequestError(0, "network", "Plumeline could not reach the server. Check the connection and try again.");
+  }
+  const body = await readJson(response);
+  if (!response.ok) throw toError(response.status, body);
+  const parsed = schema.safeParse(body);
+  if (!parsed.success) throw new ApiRequestError(response.status, "unexpected_response", `The server's answer to POST ${path} did not match the contract.`);
+  return parsed.data;
+}

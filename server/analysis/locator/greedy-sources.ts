@@ -30,6 +30,8 @@ export interface GreedyInput {
   rankByStrength: boolean;
   /** Per-cell log prior odds of a leak (0 = neutral), weighed against Δχ² in units of the residual variance. */
   prior: Float64Array | null;
+  /** Fitted sources are at least this far apart, m. */
+  sourceSeparationM: number;
   credible: (cell: number, column: Float64Array, q: number, b: number, residual: Float64Array, delta: number) => boolean;
 }
 
@@ -66,6 +68,18 @@ function bestWithPrior(scan: ScanResult, prior: Float64Array | null, n: number):
   return best;
 }
 
+function blockAround(mask: Uint8Array, c: number, width: number, cellSize: number, radiusM: number): void {
+  const r = Math.ceil(radiusM / cellSize);
+  const ci = c % width;
+  const cj = (c - ci) / width;
+  const height = mask.length / width;
+  for (let j = Math.max(0, cj - r); j <= Math.min(height - 1, cj + r); j++) {
+    for (let i = Math.max(0, ci - r); i <= Math.min(width - 1, ci + r); i++) {
+      if ((i - ci) ** 2 + (j - cj) ** 2 <= r * r) mask[j * width + i] = 0;
+    }
+  }
+}
+
 export function findSources(input: GreedyInput): GreedyResult {
   const { fields, y, w, censored, allowed } = input;
   const n = y.length;
@@ -77,6 +91,7 @@ export function findSources(input: GreedyInput): GreedyResult {
   const sumWGR = new Float64Array(cells);
   const residual = new Float64Array(n);
   let firstScan: ScanResult | null = null;
+  const roundAllowed = new Uint8Array(allowed);
   for (let round = 0; round < input.maxLeaks; round++) {
     residual.set(y);
     columns.forEach((col, s) => {
@@ -90,7 +105,7 @@ export function findSources(input: GreedyInput): GreedyResult {
       swrr += w[i] * residual[i] * residual[i];
     }
     sumWeightedKernelTimes(fields, w, residual, sumWGR);
-    const scan = scanSources(fields.sumWG, fields.sumWGG, sumWGR, { sumW: sw, sumWR: swr, sumWRR: swrr }, allowed);
+    const scan = scanSources(fields.sumWG, fields.sumWGG, sumWGR, { sumW: sw, sumWR: swr, sumWRR: swrr }, roundAllowed);
     if (!firstScan) firstScan = scan;
     const best = bestWithPrior(scan, input.prior, n);
     if (best < 0) break;
@@ -99,6 +114,8 @@ export function findSources(input: GreedyInput): GreedyResult {
     columns.push(column);
     fit = fitNonnegative(y, w, columns, censored);
     sources.push({ cell: best, delta: scan.delta[best], column, alternate: false, q: 0 });
+    // A second source right beside the first mostly patches the kernel's misfit there, not a leak.
+    blockAround(roundAllowed, best, input.gridWidth, input.cellSize, input.sourceSeparationM);
   }
   const nn = input.nuisance.length;
   sources.forEach((s, k) => (s.q = fit.q[nn + k]));

@@ -28,9 +28,11 @@ export function equipmentMask(grid: PlanGrid, plan: LocatorInput["plan"], margin
   return mask;
 }
 
-/** Step scale per cell: `scale` inside fixtures whose fans run, 1 elsewhere; null when no fans run. */
+/** Step scale per cell: `scale` inside walk-ins and machine rooms whose fans run, 1 elsewhere; null when none. */
 export function fanStepScale(grid: PlanGrid, plan: LocatorInput["plan"], scale: number): Float32Array | null {
-  const withFans = plan.fixtures.filter((f) => f.fans);
+  // Only closed rooms: a walk-in's or machine room's fans stir the whole room, while a case's fans drive
+  // an air curtain along the case, so gas still travels along it.
+  const withFans = plan.fixtures.filter((f) => f.fans && (f.kind === "walk-in" || f.kind === "machine-room"));
   if (withFans.length === 0) return null;
   const out = new Float32Array(grid.width * grid.height).fill(1);
   for (const f of withFans) for (const k of cellsInside(grid, f.polygon)) out[k] = scale;

@@ -5,3 +5,8 @@ export * from "./sessions";
 export * from "./detectors";
 export * from "./systems";
 export * from "./plans";
+export * from "./sweeps";
+export * from "./analyses";
+export * from "./findings";
+export * from "./compliance";
+export * from "./reports";

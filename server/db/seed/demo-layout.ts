@@ -12,7 +12,9 @@ export const DEMO_PLAN = { widthM: 60, heightM: 36, metresPerPixel: 0.05 } as co
 export type DemoSystemKey = "rack-mt" | "rack-lt" | "walk-ins";
 
 export const DEMO_SYSTEMS: { key: DemoSystemKey; name: string; refrigerantId: string; fullChargeLb: number; automaticLeakDetection: boolean }[] = [
-  { key: "rack-mt", name: "Rack A – medium temperature", refrigerantId: "R-448A", fullChargeLb: 1150, automaticLeakDetection: true },
+  // No automatic leak detection on Rack A: below the 1,500 lb where Part 84 requires it [S:R4], so
+  // after a breach it is inspected quarterly (≥ 500 lb commercial [M]); the demo shows that schedule.
+  { key: "rack-mt", name: "Rack A – medium temperature", refrigerantId: "R-448A", fullChargeLb: 1150, automaticLeakDetection: false },
   { key: "rack-lt", name: "Rack B – low temperature (CO2)", refrigerantId: "R-744", fullChargeLb: 420, automaticLeakDetection: true },
   { key: "walk-ins", name: "Condensing unit – walk-ins", refrigerantId: "R-404A", fullChargeLb: 38, automaticLeakDetection: false },
 ];

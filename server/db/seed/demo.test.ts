@@ -51,3 +51,29 @@ describe("demo seed", () => {
     expect(img.headers["content-type"]).toBe("image/png");
   });
 });
+
+describe("demo records", () => {
+  it("show a true picture on Today: one system over threshold with an open finding, one repaired and verified, an inspection due soon", async () => {
+    const engineer = await agentFor(t.app);
+    const person = DEMO_SIGN_INS.people.find((p) => p.role === "engineer")!;
+    expect((await engineer.post("/api/auth/sign-in", { email: person.email, password: DEMO_SIGN_INS.password })).status).toBe(200);
+    const today = (await engineer.get("/api/today")).body;
+    expect(today.overThreshold).toHaveLength(1);
+    const over = today.overThreshold[0];
+    expect(over.refrigerantId).toBe("R-448A");
+    // 90 lb into 1,150 lb 76 days after the previous addition: 37.6 % (40 CFR 84.102 annualizing) > 20 % [S:R4].
+    expect(over.percent).toBeCloseTo((90 / 1150 / (76 / 365)) * 100, 9);
+    const repair = today.due.find((d: { kind: string }) => d.kind === "repair");
+    expect(repair).toMatchObject({ systemId: over.systemId, daysLeft: 18 }); // learned 12 days ago, 30 days to repair [S:R4]
+    // The open leak first (it has a deadline), then the verified repair waiting for an engineer to close it.
+    expect(today.openFindings.map((f: { status: string; deadline: string | null }) => [f.status, f.deadline])).toEqual([["confirmed", repair.dueOn], ["verified", null]]);
+    expect(today.openFindings[0].systemId).toBe(over.systemId);
+    const inspection = today.due.find((d: { kind: string; systemId: string }) => d.kind === "inspection" && d.systemId === over.systemId);
+    // Quarterly since the first breach 88 days ago: three calendar months are 89–92 days [M].
+    expect(inspection.daysLeft).toBeGreaterThanOrEqual(1);
+    expect(inspection.daysLeft).toBeLessThanOrEqual(4);
+    const [store] = today.stores;
+    const findings = (await engineer.get(`/api/stores/${store.id}/findings`)).body.findings;
+    expect(findings.map((f: { status: string }) => f.status).sort()).toEqual(["closed", "confirmed", "verified"]);
+  });
+});

@@ -4,6 +4,8 @@ import type { AppContext } from "../../context";
 import { companies, memberships, membershipStores, stores, users } from "../schema/index";
 import type { Role } from "../../domain/roles";
 import { seedDemoLayout } from "./demo-store-map";
+import { seedDemoSweeps } from "./demo-sweeps";
+import { seedDemoCompliance } from "./demo-compliance";
 
 // An invented grocery chain and its people. Everything here is demo data.
 export const DEMO_SIGN_INS = {
@@ -35,13 +37,17 @@ export async function seedDemoIfEmpty(ctx: AppContext): Promise<boolean> {
       .returning();
     const passwordHash = await bcrypt.hash(DEMO_SIGN_INS.password, ctx.config.bcryptCost);
     let leadTechId: string | null = null;
+    const people = {} as Record<Role, string>;
     for (const person of DEMO_SIGN_INS.people) {
       const [user] = await tx.insert(users).values({ email: person.email, name: person.name, passwordHash }).returning();
       const [m] = await tx.insert(memberships).values({ companyId: company.id, userId: user.id, role: person.role }).returning();
       if (person.role === "store-contact") await tx.insert(membershipStores).values({ membershipId: m.id, storeId: store.id });
       if (person.role === "lead-tech") leadTechId = user.id;
+      people[person.role] = user.id;
     }
     await seedDemoLayout(ctx, tx, { companyId: company.id, storeId: store.id, createdById: leadTechId });
+    await seedDemoCompliance(tx, { companyId: company.id, storeId: store.id, timeZone: store.timeZone, people });
+    await seedDemoSweeps(tx, { companyId: company.id, storeId: store.id, technicianId: people.technician, engineerId: people.engineer, now: new Date() }, store.timeZone);
     return true;
   });
 }

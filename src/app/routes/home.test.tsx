@@ -50,8 +50,9 @@ describe("stores page", () => {
         return apiError(401, "not_signed_in", "Please sign in.");
       },
     });
-    const { router } = renderApp("/?view=all");
+    // Owners land on Today at "/": their store list lives at /stores.
+    const { router } = renderApp("/stores?view=all");
     expect(await screen.findByRole("heading", { name: "Sign in" })).toBeTruthy();
-    expect(router.state.location.search).toBe(`?next=${encodeURIComponent("/?view=all")}`);
+    expect(router.state.location.search).toBe(`?next=${encodeURIComponent("/stores?view=all")}`);
   });
 });

@@ -1,6 +1,6 @@
 import { useState } from "react";
-import { useNavigate } from "react-router";
-import { can, isStoreScoped } from "../../../server/domain/roles";
+import { Navigate, useLocation, useNavigate } from "react-router";
+import { can, isStoreScoped, type Role } from "../../../server/domain/roles";
 import { Button } from "../../components/ui/button";
 import { PageHeader } from "../../components/ui/page-header";
 import { StoreForm } from "../../features/stores/components/store-form";
@@ -8,7 +8,17 @@ import { StoreTable } from "../../features/stores/components/store-table";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
 
+// Owners, engineers and lead techs answer for the books: they land on Today.
+const LANDS_ON_TODAY: readonly Role[] = ["owner", "engineer", "lead-tech"];
+
 export function Component() {
+  const { pathname } = useLocation();
+  const { membership } = useSignedIn();
+  if (pathname === "/" && LANDS_ON_TODAY.includes(membership.role)) return <Navigate to="/today" replace />;
+  return <Stores />;
+}
+
+function Stores() {
   useDocumentTitle("Stores");
   const { membership } = useSignedIn();
   const navigate = useNavigate();

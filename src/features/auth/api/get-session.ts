@@ -1,10 +1,20 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { sessionInfo, type SessionInfo } from "../../../../server/contracts/auth";
-import { api } from "../../../lib/api-client";
+import { api, isApiRequestError } from "../../../lib/api-client";
 import { authKeys } from "./auth-keys";
+import { lastKnownSession, rememberSession } from "./offline-session";
 
-export function getSession(signal?: AbortSignal): Promise<SessionInfo> {
-  return api.get("/api/auth/session", sessionInfo, signal);
+/** The session; without a connection, the last one the server confirmed on this device. */
+export async function getSession(signal?: AbortSignal): Promise<SessionInfo> {
+  try {
+    const info = await api.get("/api/auth/session", sessionInfo, signal);
+    rememberSession(info);
+    return info;
+  } catch (e) {
+    const cached = isApiRequestError(e) && e.code === "network" ? lastKnownSession() : null;
+    if (cached) return cached;
+    throw e;
+  }
 }
 
 export function sessionQueryOptions() {

@@ -1,6 +1,7 @@
 import type { QueryClient } from "@tanstack/react-query";
 import type { SessionInfo } from "../../../../server/contracts/auth";
 import { authKeys } from "./auth-keys";
+import { rememberSession } from "./offline-session";
 
 const notAuth = (query: { queryKey: readonly unknown[] }) => query.queryKey[0] !== authKeys.all[0];
 
@@ -9,6 +10,7 @@ const notAuth = (query: { queryKey: readonly unknown[] }) => query.queryKey[0] !
  * previous session, so all of it goes; only the new session stays.
  */
 export function replaceSession(queryClient: QueryClient, info: SessionInfo): void {
+  rememberSession(info);
   queryClient.setQueryData(authKeys.session(), info);
   queryClient.removeQueries({ predicate: notAuth });
 }
@@ -18,11 +20,13 @@ export function replaceSession(queryClient: QueryClient, info: SessionInfo): voi
  * nothing of it stays on screen, and let the open pages load again for the new company.
  */
 export function switchSession(queryClient: QueryClient, info: SessionInfo): Promise<void> {
+  rememberSession(info);
   queryClient.setQueryData(authKeys.session(), info);
   return queryClient.resetQueries({ predicate: notAuth });
 }
 
 /** Same person, same company, new details (a profile edit): keep the other caches. */
 export function updateSession(queryClient: QueryClient, info: SessionInfo): void {
+  rememberSession(info);
   queryClient.setQueryData(authKeys.session(), info);
 }

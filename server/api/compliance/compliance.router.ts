@@ -1,0 +1,37 @@
+import { Router } from "express";
+import { z } from "zod";
+import type { AppContext } from "../../context";
+import { chargeAdditionInput, chargeCorrectionInput, chargeVoidInput, leakCheckInput } from "../../contracts/compliance";
+import { member, requireMember } from "../../middleware/auth";
+import { validate } from "../../middleware/validate";
+import { addCharge, addLeakCheck, correctCharge, getSystemRecords, voidCharge } from "./records.service";
+
+const idParam = z.object({ id: z.uuid("must be a valid id") });
+
+export function complianceRouter(ctx: AppContext): Router {
+  const router = Router();
+
+  /** The system records page: leak rate at every addition, threshold, due dates, CO2e, audit trail. */
+  router.get("/systems/:id/records", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
+    res.json(await getSystemRecords(ctx, member(req), res.locals.params.id));
+  });
+
+  router.post("/systems/:id/charge-additions", requireMember("findings.record"), validate(idParam, "params"), validate(chargeAdditionInput), async (req, res) => {
+    res.status(201).json(await addCharge(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
+  });
+
+  // Never an edit: a correction is a new entry that voids the old one.
+  router.post("/charge-additions/:id/corrections", requireMember("findings.record"), validate(idParam, "params"), validate(chargeCorrectionInput), async (req, res) => {
+    res.status(201).json(await correctCharge(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
+  });
+
+  router.post("/charge-additions/:id/void", requireMember("findings.record"), validate(idParam, "params"), validate(chargeVoidInput), async (req, res) => {
+    res.json(await voidCharge(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body.voidReason));
+  });
+
+  router.post("/systems/:id/leak-checks", requireMember("findings.record"), validate(idParam, "params"), validate(leakCheckInput), async (req, res) => {
+    res.status(201).json(await addLeakCheck(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
+  });
+
+  return router;
+}

@@ -1,0 +1,169 @@
+import { and, asc, eq, inArray, isNull } from "drizzle-orm";
+import type { z } from "zod";
+import type { AppContext } from "../../context";
+import type { ChargeAdditionView, SystemRecordsView, chargeAdditionInput, chargeCorrectionInput, leakCheckInput } from "../../contracts/compliance";
+import { chargeAdditions, findings, leakChecks, memberships, users } from "../../db/schema/index";
+import type { AssessedPoint } from "../../domain/compliance/assess-leak-rate";
+import { chargeToKg, companyGwpBases, toSystem } from "../systems/systems.service";
+import { badRequest, conflict, notFound } from "../../lib/http-error";
+import { eventDay } from "../findings/findings.service";
+import { loadVisibleStore, type Viewer } from "../stores/store-access";
+import { systemDueItems } from "./due-items";
+import { companyRules, statusesOf, systemWithStore } from "./system-records";
+
+type AdditionInput = z.output<typeof chargeAdditionInput>;
+type CorrectionInput = z.output<typeof chargeCorrectionInput>;
+type LeakCheckInput = z.output<typeof leakCheckInput>;
+
+/** The system and its store when the viewer may see them; 404 otherwise (never 403). */
+export async function visibleSystem(ctx: AppContext, viewer: Viewer, systemId: string) {
+  const row = await systemWithStore(ctx, viewer.companyId, systemId);
+  if (!row) throw notFound("That system");
+  try {
+    await loadVisibleStore(ctx, viewer, row.store.id);
+  } catch {
+    throw notFound("That system");
+  }
+  return row;
+}
+
+const toRow = (p: AssessedPoint) => ({
+  date: p.date, method: p.method, percent: p.percent, countedKg: p.countedKg, days: p.days, windowStart: p.windowStart ?? null,
+  additionIds: p.additionIds, partId: p.partId, thresholdPercent: p.thresholdPercent, exceeds: p.exceeds, repairDue: p.repairDue ?? null,
+});
+
+async function additionViews(ctx: AppContext, systemId: string): Promise<ChargeAdditionView[]> {
+  const rows = await ctx.db.select().from(chargeAdditions).where(eq(chargeAdditions.systemId, systemId)).orderBy(asc(chargeAdditions.addedOn), asc(chargeAdditions.recordedAt));
+  const ids = [...new Set(rows.flatMap((r) => [r.technicianId, r.recordedById, r.voidedById].filter((x): x is string => !!x)))];
+  const names = new Map((ids.length ? await ctx.db.select({ id: users.id, name: users.name }).from(users).where(inArray(users.id, ids)) : []).map((u) => [u.id, u.name]));
+  return rows.map((r) => ({
+    id: r.id, systemId: r.systemId, addedOn: r.addedOn, amountKg: r.amountKg, enteredValue: r.enteredValue, enteredUnit: r.enteredUnit,
+    technician: names.get(r.technicianId) ?? "", reason: r.reason, excluded: r.excluded, findingId: r.findingId, correctsId: r.correctsId,
+    recordedBy: names.get(r.recordedById) ?? "", recordedAt: r.recordedAt.toISOString(),
+    voided: r.voidedAt
+      ? { at: r.voidedAt.toISOString(), by: names.get(r.voidedById ?? "") ?? "", reason: r.voidReason ?? "", byEntryId: rows.find((c) => c.correctsId === r.id)?.id ?? null }
+      : null,
+  }));
+}
+
+export async function getSystemRecords(ctx: AppContext, viewer: Viewer, systemId: string, now = new Date()): Promise<SystemRecordsView> {
+  const row = await visibleSystem(ctx, viewer, systemId);
+  const rules = await companyRules(ctx, viewer.companyId);
+  const [s] = await statusesOf(ctx, rules, [row], now);
+  const st = s.status;
+  const checks = await ctx.db
+    .select({ c: leakChecks, by: users.name })
+    .from(leakChecks)
+    .innerJoin(users, eq(users.id, leakChecks.byId))
+    .where(eq(leakChecks.systemId, systemId))
+    .orderBy(asc(leakChecks.checkedOn), asc(leakChecks.recordedAt));
+  const system = toSystem(row.system, await companyGwpBases(ctx, viewer.companyId));
+  const lc = st.leakCheck;
+  return {
+    system,
+    store: { id: row.store.id, name: row.store.name, timeZone: row.store.timeZone },
+    today: s.today,
+    profile: { id: rules.profile.id, name: rules.profile.name, method: rules.method, retentionYears: rules.profile.recordRetentionYears.value, retentionSource: rules.profile.recordRetentionYears.source },
+    applicability: st.applicability,
+    leakRates: st.points.map(toRow),
+    latest: st.latest ? toRow(st.latest) : null,
+    overThreshold: st.overThreshold,
+    chronic: st.chronic.map((y) => ({ year: y.year, addedKg: y.addedKg, percent: y.percent, chronic: y.chronic, reportDue: y.reportDue ?? null })),
+    co2e: st.co2e.known ? { known: true, tonnes: st.co2e.tonnes, gwp: st.co2e.gwp, source: st.co2e.gwpSource } : { known: false, tonnes: null, gwp: null, source: st.co2e.reason },
+    leakCheck: lc
+      ? {
+          withLdsMonths: lc.withLds.required ? lc.withLds.months : null,
+          withoutLdsMonths: lc.withoutLds.required ? lc.withoutLds.months : null,
+          appliedMonths: lc.applied.required ? lc.applied.months : null,
+          ldsRequired: lc.applied.required ? lc.applied.ldsRequired : false,
+          reason: lc.applied.reason,
+        }
+      : null,
+    nextInspection: st.nextInspection,
+    due: systemDueItems(s, now),
+    additions: await additionViews(ctx, systemId),
+    leakChecks: checks.map((x) => ({ id: x.c.id, checkedOn: x.c.checkedOn, leakFound: x.c.leakFound, note: x.c.note, by: x.by })),
+    cautions: system.cautions,
+  };
+}
+
+async function checkAdditionRefs(ctx: AppContext, viewer: Viewer, systemId: string, input: AdditionInput): Promise<void> {
+  if (input.technicianId) {
+    const [m] = await ctx.db.select({ role: memberships.role }).from(memberships).where(and(eq(memberships.userId, input.technicianId), eq(memberships.companyId, viewer.companyId)));
+    if (!m || m.role === "store-contact") throw badRequest("Please check: technicianId is not a technician of this company.", { technicianId: "is not a member of this company who services systems" });
+  }
+  if (input.findingId) {
+    const [f] = await ctx.db.select({ id: findings.id }).from(findings).where(and(eq(findings.id, input.findingId), eq(findings.systemId, systemId), eq(findings.companyId, viewer.companyId)));
+    if (!f) throw badRequest("Please check: findingId is not a finding on this system.", { findingId: "is not a finding on this system" });
+  }
+}
+
+function values(viewer: Viewer, userId: string, systemId: string, addedOn: string, input: AdditionInput) {
+  return {
+    companyId: viewer.companyId, systemId, addedOn, amountKg: chargeToKg(input.amount), enteredValue: input.amount.value, enteredUnit: input.amount.unit,
+    technicianId: input.technicianId ?? userId, reason: input.reason, excluded: input.excluded, findingId: input.findingId, recordedById: userId,
+  };
+}
+
+export async function addCharge(ctx: AppContext, viewer: Viewer, userId: string, systemId: string, input: AdditionInput) {
+  const { store } = await visibleSystem(ctx, viewer, systemId);
+  const addedOn = eventDay(input.addedOn, store, "addedOn");
+  await checkAdditionRefs(ctx, viewer, systemId, input);
+  const [row] = await ctx.db.insert(chargeAdditions).values(values(viewer, userId, systemId, addedOn, input)).returning({ id: chargeAdditions.id });
+  const records = await getSystemRecords(ctx, viewer, systemId);
+  return { addition: records.additions.find((a) => a.id === row.id)!, records };
+}
+
+async function loadLiveAddition(ctx: AppContext, viewer: Viewer, id: string) {
+  const [row] = await ctx.db.select().from(chargeAdditions).where(and(eq(chargeAdditions.id, id), eq(chargeAdditions.companyId, viewer.companyId)));
+  if (!row) throw notFound("That charge-added entry");
+  await visibleSystem(ctx, viewer, row.systemId).catch(() => {
+    throw notFound("That charge-added entry");
+  });
+  return row;
+}
+
+/**
+ * A correction: a new entry naming the old one, and the old one voided, in one transaction. The
+ * old row keeps its values; only its void columns are set (the audit trail shows both).
+ */
+export async function correctCharge(ctx: AppContext, viewer: Viewer, userId: string, id: string, input: CorrectionInput) {
+  const old = await loadLiveAddition(ctx, viewer, id);
+  const { store } = await visibleSystem(ctx, viewer, old.systemId);
+  const addedOn = eventDay(input.addedOn ?? old.addedOn, store, "addedOn");
+  await checkAdditionRefs(ctx, viewer, old.systemId, input);
+  const newId = await ctx.db.transaction(async (tx) => {
+    const voided = await tx
+      .update(chargeAdditions)
+      .set({ voidedAt: new Date(), voidedById: userId, voidReason: input.voidReason })
+      .where(and(eq(chargeAdditions.id, old.id), eq(chargeAdditions.companyId, viewer.companyId), isLive()))
+      .returning({ id: chargeAdditions.id });
+    if (voided.length === 0) throw conflict("That entry was already voided or corrected; correct the entry that replaced it instead.");
+    const [row] = await tx.insert(chargeAdditions).values({ ...values(viewer, userId, old.systemId, addedOn, input), correctsId: old.id }).returning({ id: chargeAdditions.id });
+    return row.id;
+  });
+  const records = await getSystemRecords(ctx, viewer, old.systemId);
+  return { addition: records.additions.find((a) => a.id === newId)!, records };
+}
+
+export async function voidCharge(ctx: AppContext, viewer: Viewer, userId: string, id: string, voidReason: string) {
+  const old = await loadLiveAddition(ctx, viewer, id);
+  const voided = await ctx.db
+    .update(chargeAdditions)
+    .set({ voidedAt: new Date(), voidedById: userId, voidReason })
+    .where(and(eq(chargeAdditions.id, old.id), isLive()))
+    .returning({ id: chargeAdditions.id });
+  if (voided.length === 0) throw conflict("That entry was already voided.");
+  return getSystemRecords(ctx, viewer, old.systemId);
+}
+
+function isLive() {
+  return isNull(chargeAdditions.voidedAt);
+}
+
+export async function addLeakCheck(ctx: AppContext, viewer: Viewer, userId: string, systemId: string, input: LeakCheckInput) {
+  const { store } = await visibleSystem(ctx, viewer, systemId);
+  const checkedOn = eventDay(input.checkedOn, store, "checkedOn");
+  await ctx.db.insert(leakChecks).values({ companyId: viewer.companyId, systemId, checkedOn, leakFound: input.leakFound, note: input.note, byId: userId });
+  return getSystemRecords(ctx, viewer, systemId);
+}

@@ -1,0 +1,95 @@
+import { and, asc, eq, inArray } from "drizzle-orm";
+import type { AppContext } from "../../context";
+import { chargeAdditions, companies, findingEvents, findings, leakChecks, stores, systems } from "../../db/schema/index";
+import { profileFor } from "../../domain/compliance/company-profile";
+import type { ChargeAddition } from "../../domain/compliance/leak-rate";
+import type { LeakRateMethod, RuleProfile } from "../../domain/compliance/rule-profile";
+import { systemStatus, type SystemStatus } from "../../domain/compliance/system-status";
+import { localDateOf } from "../../domain/dates/time-zone";
+import { getRefrigerant } from "../../domain/refrigerants/catalogue";
+
+export type SystemRow = typeof systems.$inferSelect;
+export type StoreRow = typeof stores.$inferSelect;
+
+export interface CompanyRules {
+  profile: RuleProfile;
+  method: LeakRateMethod;
+}
+
+export async function companyRules(ctx: AppContext, companyId: string): Promise<CompanyRules> {
+  const [c] = await ctx.db.select({ ruleProfile: companies.ruleProfile, method: companies.leakRateMethod }).from(companies).where(eq(companies.id, companyId));
+  return { profile: profileFor(c?.ruleProfile ?? "us-federal"), method: c?.method ?? "annualizing" };
+}
+
+export interface SystemWithStatus {
+  system: SystemRow;
+  store: StoreRow;
+  today: string;
+  status: SystemStatus;
+}
+
+/**
+ * Loads the records of the given systems (charge added, finding events, leak checks) in four
+ * queries and computes each system's status on its store's today.
+ */
+export async function statusesOf(ctx: AppContext, rules: CompanyRules, rows: { system: SystemRow; store: StoreRow }[], now = new Date()): Promise<SystemWithStatus[]> {
+  if (rows.length === 0) return [];
+  const ids = rows.map((r) => r.system.id);
+  const [adds, events, checks] = await Promise.all([
+    ctx.db.select().from(chargeAdditions).where(inArray(chargeAdditions.systemId, ids)).orderBy(asc(chargeAdditions.addedOn), asc(chargeAdditions.recordedAt)),
+    ctx.db
+      .select({ systemId: findings.systemId, findingId: findingEvents.findingId, kind: findingEvents.kind, on: findingEvents.on, result: findingEvents.result, status: findingEvents.status })
+      .from(findingEvents)
+      .innerJoin(findings, eq(findings.id, findingEvents.findingId))
+      .where(inArray(findings.systemId, ids))
+      .orderBy(asc(findingEvents.at), asc(findingEvents.id)),
+    ctx.db.select().from(leakChecks).where(inArray(leakChecks.systemId, ids)),
+  ]);
+  return rows.map(({ system, store }) => {
+    const today = localDateOf(now, store.timeZone);
+    const additions: ChargeAddition[] = adds
+      .filter((a) => a.systemId === system.id)
+      .map((a) => ({ id: a.id, date: a.addedOn, amountKg: a.amountKg, voided: a.voidedAt !== null, ...(a.excluded ? { excluded: a.excluded } : {}) }));
+    const mine = events.filter((e) => e.systemId === system.id);
+    const byFinding = new Map<string, typeof mine>();
+    for (const e of mine) byFinding.set(e.findingId, [...(byFinding.get(e.findingId) ?? []), e]);
+    const pendingFollowUps: { findingId: string; repairedOn: string; initialTestOn: string | null }[] = [];
+    for (const [findingId, list] of byFinding) {
+      const last = list.at(-1)!;
+      if (last.status !== "repaired") continue;
+      const repair = [...list].reverse().find((e) => e.kind === "repaired");
+      if (!repair) continue;
+      const after = list.slice(list.indexOf(repair) + 1);
+      const initial = after.find((e) => e.kind === "initial-test" && e.result === "passed");
+      pendingFollowUps.push({ findingId, repairedOn: repair.on, initialTestOn: initial?.on ?? null });
+    }
+    const status = systemStatus(
+      rules.profile,
+      rules.method,
+      {
+        refrigerant: getRefrigerant(system.refrigerantId),
+        fullChargeKg: system.fullChargeKg,
+        applianceType: system.applianceType,
+        automaticLeakDetection: system.automaticLeakDetection,
+        enteredOn: localDateOf(system.createdAt, store.timeZone),
+        additions,
+        repairedOn: mine.filter((e) => e.kind === "repaired").map((e) => e.on),
+        pendingFollowUps,
+        followUpVerifiedOn: mine.filter((e) => e.kind === "follow-up-test" && e.result === "passed").map((e) => e.on),
+        leakChecks: checks.filter((c) => c.systemId === system.id).map((c) => ({ checkedOn: c.checkedOn, leakFound: c.leakFound })),
+      },
+      today,
+    );
+    return { system, store, today, status };
+  });
+}
+
+/** One system with its store, in the viewer's company (the caller checks store visibility). */
+export async function systemWithStore(ctx: AppContext, companyId: string, systemId: string) {
+  const [row] = await ctx.db
+    .select({ system: systems, store: stores })
+    .from(systems)
+    .innerJoin(stores, eq(stores.id, systems.storeId))
+    .where(and(eq(systems.id, systemId), eq(systems.companyId, companyId)));
+  return row ?? null;
+}

@@ -1,0 +1,74 @@
+import Papa from "papaparse";
+import { PDFDocument } from "pdf-lib";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { agentFor, createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
+import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
+
+let t: TestApp;
+let co: Awaited<ReturnType<typeof seedCompany>>;
+let other: Awaited<ReturnType<typeof seedCompany>>;
+let tech: Agent;
+let systemId: string;
+
+const binary = (res: { on(e: string, f: (c?: Buffer) => void): void }, cb: (err: Error | null, body: Buffer) => void) => {
+  const chunks: Buffer[] = [];
+  res.on("data", (c) => chunks.push(c!));
+  res.on("end", () => cb(null, Buffer.concat(chunks)));
+};
+
+beforeAll(async () => {
+  t = await createTestApp();
+  co = await seedCompany(t.ctx, "Hollyhock Foods");
+  other = await seedCompany(t.ctx, "Windrow Markets");
+  tech = await agentFor(t.app);
+  await tech.post("/api/auth/sign-in", { email: co.people.technician.email, password: PASSWORD });
+  const lead = await agentFor(t.app);
+  await lead.post("/api/auth/sign-in", { email: co.people["lead-tech"].email, password: PASSWORD });
+  systemId = (await lead.post(`/api/stores/${co.store.id}/systems`, { name: "Rack A (MT)", refrigerantId: "R-448A", fullCharge: { value: 100, unit: "lb" }, applianceType: "commercial-refrigeration", automaticLeakDetection: false })).body.id;
+  await tech.post(`/api/systems/${systemId}/charge-additions`, { addedOn: "2026-02-01", amount: { value: 10, unit: "lb" }, reason: "Top-up, \"quoted\", with comma" });
+  const second = await tech.post(`/api/systems/${systemId}/charge-additions`, { addedOn: "2026-03-03", amount: { value: 5, unit: "lb" }, reason: "Low charge" });
+  await tech.post(`/api/charge-additions/${second.body.addition.id}/void`, { voidReason: "Duplicate entry" });
+  const f = (await tech.post(`/api/stores/${co.store.id}/findings`, { systemId, status: "confirmed", component: "flare", foundAt: "2026-02-02T15:00:00Z" })).body;
+  await tech.post(`/api/findings/${f.id}/events`, { action: "repair", on: "2026-02-03", note: "New flare nut" });
+});
+afterAll(() => t.close());
+
+describe("records export", () => {
+  it("writes a CSV of charge added (voided entries kept) and finding steps, with the leak rate at each addition", async () => {
+    const res = await tech.get(`/api/systems/${systemId}/records.csv`);
+    expect(res.status).toBe(200);
+    expect(res.headers["content-type"]).toMatch(/text\/csv/);
+    expect(res.headers["content-disposition"]).toContain("rack-a-mt-records.csv");
+    const parsed = Papa.parse<Record<string, string>>(res.text, { header: true });
+    expect(parsed.errors).toEqual([]);
+    const rows = parsed.data;
+    expect(rows.map((r) => [r.date, r.record])).toEqual([
+      ["2026-02-01", "charge added"],
+      ["2026-02-02", "finding found"],
+      ["2026-02-02", "finding confirmed"],
+      ["2026-02-03", "finding repaired"],
+      ["2026-03-03", "charge added"],
+    ]);
+    // First calculation after 1 Jan 2026 uses 365 days: 10/100 = 10.00 % (40 CFR 84.102 [M]).
+    expect(rows[0]).toMatchObject({ amount_lb: "10.000", amount_kg: "4.5359", leak_rate_percent: "10.00", reason: 'Top-up, "quoted", with comma' });
+    expect(rows[4].voided).toMatch(/Duplicate entry/);
+    expect(rows[4].leak_rate_percent).toBe("");
+  });
+
+  it("makes a PDF statement with the Atkinson Hyperlegible font embedded, for members only", async () => {
+    const res = await tech.agent.get(`/api/systems/${systemId}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+    expect(res.status).toBe(200);
+    expect(res.headers["content-type"]).toBe("application/pdf");
+    const bytes = res.body as Buffer;
+    expect(bytes.subarray(0, 5).toString()).toBe("%PDF-");
+    const pdf = await PDFDocument.load(bytes);
+    expect(pdf.getPageCount()).toBeGreaterThanOrEqual(1);
+    expect(pdf.getTitle()).toBe("Leak-rate statement – Rack A (MT)");
+    // Embedded TrueType subsets are named "ABCDEF+AtkinsonHyperlegible-…" (ISO 32000-1 §9.6.4).
+    expect(bytes.toString("latin1")).toMatch(/\/BaseFont \/[A-Z]{6}\+AtkinsonHyperlegible-Regular/);
+    const stranger = await agentFor(t.app);
+    await stranger.post("/api/auth/sign-in", { email: other.people.owner.email, password: PASSWORD });
+    expect((await stranger.get(`/api/systems/${systemId}/leak-rate-statement.pdf`)).status).toBe(404);
+    expect((await stranger.get(`/api/systems/${systemId}/records.csv`)).status).toBe(404);
+  });
+});

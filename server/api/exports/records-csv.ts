@@ -1,0 +1,38 @@
+import Papa from "papaparse";
+import type { SystemRecordsView } from "../../contracts/compliance";
+import type { FindingDetail } from "../../contracts/finding-actions";
+
+const KG_PER_LB = 0.45359237; // NIST SP 811, appendix B.8
+
+/**
+ * One CSV of a system's records: every charge-added entry (voided ones too, with who voided them
+ * and why: the audit trail) with the leak rate computed at it, then every finding step.
+ */
+export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[]): string {
+  const rateAt = new Map(r.leakRates.flatMap((p) => p.additionIds.map((id) => [id, p] as const)));
+  const rows: Record<string, string | number>[] = [];
+  for (const a of r.additions) {
+    const p = rateAt.get(a.id);
+    rows.push({
+      record: "charge added", date: a.addedOn, system: r.system.name, refrigerant: r.system.refrigerantId,
+      amount_kg: a.amountKg.toFixed(4), amount_lb: (a.amountKg / KG_PER_LB).toFixed(3), entered: `${a.enteredValue} ${a.enteredUnit}`,
+      technician: a.technician, reason: a.reason, excluded: a.excluded ?? "",
+      leak_rate_percent: p ? p.percent.toFixed(2) : "", method: p ? p.method : "", threshold_percent: p?.thresholdPercent ?? "",
+      exceeds: p ? (p.exceeds ? "yes" : "no") : "", repair_due: p?.repairDue ?? "",
+      finding_id: a.findingId ?? "", corrects: a.correctsId ?? "", voided: a.voided ? `${a.voided.at} by ${a.voided.by}: ${a.voided.reason}` : "",
+      status: "", component: "", recorded_by: a.recordedBy, recorded_at: a.recordedAt, entry_id: a.id,
+    });
+  }
+  for (const f of findingList) {
+    for (const e of f.events) {
+      rows.push({
+        record: `finding ${e.kind}${e.result ? ` (${e.result})` : ""}`, date: e.on, system: r.system.name, refrigerant: r.system.refrigerantId,
+        amount_kg: "", amount_lb: "", entered: "", technician: e.by, reason: e.note, excluded: "",
+        leak_rate_percent: "", method: "", threshold_percent: "", exceeds: "", repair_due: "",
+        finding_id: f.id, corrects: "", voided: "", status: e.status, component: f.component ?? "", recorded_by: e.by, recorded_at: e.at, entry_id: e.id,
+      });
+    }
+  }
+  rows.sort((x, y) => String(x.date).localeCompare(String(y.date)));
+  return Papa.unparse(rows, { newline: "\r\n" }); // RFC 4180 line ends
+}

@@ -1,0 +1,57 @@
+import { z } from "zod";
+import { DISMISS_REASONS, FINDING_COMPONENTS, finding, findingEvent } from "./findings";
+
+const isoDate = z.string({ error: "must be a date as YYYY-MM-DD" }).regex(/^\d{4}-\d{2}-\d{2}$/, "must be a date as YYYY-MM-DD");
+const note = z.string({ error: "must be text" }).trim().max(2000, "must be at most 2,000 characters").default("");
+/** The day on the store's calendar; defaults to the store's today. Never in the future. */
+const on = isoDate.optional();
+const result = z.enum(["passed", "failed"], { error: "must be passed or failed" });
+
+/** One step of the lifecycle (POST /api/findings/:id/events). */
+export const findingActionInput = z.discriminatedUnion(
+  "action",
+  [
+    z.object({ action: z.literal("confirm"), on, note, component: z.enum(FINDING_COMPONENTS, { error: `must be one of: ${FINDING_COMPONENTS.join(", ")}` }).optional() }),
+    z.object({ action: z.literal("repair"), on, note }),
+    z.object({ action: z.literal("initial-test"), on, note, result }),
+    z.object({ action: z.literal("follow-up-test"), on, note, result }),
+    z.object({ action: z.literal("close"), on, note }),
+    z.object({
+      action: z.literal("dismiss"),
+      on,
+      note,
+      reason: z.enum(DISMISS_REASONS, { error: `must be one of: ${DISMISS_REASONS.join(", ")}` }),
+    }),
+  ],
+  { error: "must be one of: confirm, repair, initial-test, follow-up-test, close, dismiss" },
+);
+export type FindingActionInput = z.input<typeof findingActionInput>;
+
+export const findingEventDetail = findingEvent.extend({
+  kind: z.enum(["found", "confirmed", "repaired", "initial-test", "follow-up-test", "closed", "dismissed"]),
+  result: z.enum(["passed", "failed"]).nullable(),
+  byId: z.uuid(),
+});
+
+export const findingDeadline = z.object({
+  what: z.string(),
+  dueOn: z.string(),
+  state: z.enum(["overdue", "due-today", "due-soon", "upcoming"]),
+  daysLeft: z.number(),
+  source: z.string(),
+});
+
+/** The Finding contract plus what the finding screen shows; every added field is extra, none changed. */
+export const findingDetail = finding.extend({
+  events: z.array(findingEventDetail),
+  storeName: z.string(),
+  timeZone: z.string(),
+  systemName: z.string().nullable(),
+  refrigerantId: z.string().nullable(),
+  dismissReason: z.enum(DISMISS_REASONS).nullable(),
+  nextActions: z.array(z.enum(["confirm", "repair", "initial-test", "follow-up-test", "close", "dismiss"])),
+  deadlines: z.array(findingDeadline),
+  cautions: z.array(z.object({ id: z.string(), level: z.enum(["warning", "notice"]), text: z.string(), source: z.string() })),
+});
+export type FindingDetail = z.infer<typeof findingDetail>;
+export const findingListResponse = z.object({ findings: z.array(findingDetail) });

@@ -1,0 +1,69 @@
+import { boolean, date, doublePrecision, index, integer, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import { companies } from "./companies";
+import { findings } from "./findings";
+import { systems } from "./systems";
+import { users } from "./users";
+
+/**
+ * Refrigerant put into a system. Rows are never edited: a correction is a new row naming the one
+ * it replaces (`correctsId`), and the old row gets `voidedAt` / `voidedById` / `voidReason` — the
+ * only columns ever set after insert, so the audit trail shows both.
+ */
+export const chargeAdditions = pgTable(
+  "charge_additions",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
+    systemId: uuid().notNull().references(() => systems.id, { onDelete: "cascade" }),
+    addedOn: date({ mode: "string" }).notNull(),
+    amountKg: doublePrecision().notNull(),
+    /** As typed, for the record (the figures use amountKg). */
+    enteredValue: doublePrecision().notNull(),
+    enteredUnit: text({ enum: ["kg", "lb"] }).notNull(),
+    technicianId: uuid().notNull().references(() => users.id),
+    reason: text().notNull(),
+    /** No leak-rate calculation at this addition (40 CFR 82.157 exceptions). */
+    excluded: text({ enum: ["retrofit", "new-installation", "seasonal-variance"] }),
+    findingId: uuid().references(() => findings.id, { onDelete: "set null" }),
+    correctsId: uuid(),
+    recordedById: uuid().notNull().references(() => users.id),
+    recordedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    voidedAt: timestamp({ withTimezone: true }),
+    voidedById: uuid().references(() => users.id),
+    voidReason: text(),
+  },
+  (t) => [index("charge_additions_system").on(t.systemId)],
+);
+
+/** A leak check or periodic inspection of a system; the next due date runs from the latest one. */
+export const leakChecks = pgTable(
+  "leak_checks",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
+    systemId: uuid().notNull().references(() => systems.id, { onDelete: "cascade" }),
+    checkedOn: date({ mode: "string" }).notNull(),
+    leakFound: boolean().notNull(),
+    note: text().notNull().default(""),
+    byId: uuid().notNull().references(() => users.id),
+    recordedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("leak_checks_system").on(t.systemId)],
+);
+
+/** One row per company and local day a digest went out: the unique key is what stops a second send. */
+export const digestRuns = pgTable(
+  "digest_runs",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
+    localDate: date({ mode: "string" }).notNull(),
+    status: text({ enum: ["sending", "sent"] }).notNull(),
+    trigger: text({ enum: ["schedule", "manual"] }).notNull(),
+    recipients: text().array().notNull().default([]),
+    itemCount: integer().notNull().default(0),
+    startedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    sentAt: timestamp({ withTimezone: true }),
+  },
+  (t) => [uniqueIndex("digest_runs_company_date").on(t.companyId, t.localDate)],
+);

@@ -1,0 +1,54 @@
+import { describe, expect, it } from "vitest";
+import { getRefrigerant } from "../refrigerants/catalogue";
+import { KG_PER_POUND } from "../units/mass";
+import { inspectionRun, systemStatus, type SystemRecords } from "./system-status";
+import { US_FEDERAL_PROFILE } from "./us-federal-profile";
+
+const lb = (n: number) => n * KG_PER_POUND; // NIST SP 811: 0.45359237 kg per lb exactly
+
+const base: SystemRecords = {
+  refrigerant: getRefrigerant("R-448A"),
+  fullChargeKg: lb(1150),
+  applianceType: "commercial-refrigeration",
+  automaticLeakDetection: false,
+  enteredOn: "2026-01-01",
+  additions: [],
+  repairedOn: [],
+  pendingFollowUps: [],
+  followUpVerifiedOn: [],
+  leakChecks: [],
+};
+
+describe("inspection runs after a breach (our reading of 'until N periods below', standards.md §1 [M])", () => {
+  it("ends after N clean inspections in a row, and a new breach resets the count", () => {
+    expect(inspectionRun(["2026-03-01"], [], 4)).toEqual({ start: "2026-03-01", lastCheck: null, clean: 0 });
+    const clean = (on: string) => ({ checkedOn: on, leakFound: false });
+    expect(inspectionRun(["2026-03-01"], [clean("2026-06-01"), clean("2026-09-01"), clean("2026-12-01")], 4)?.clean).toBe(3);
+    expect(inspectionRun(["2026-03-01"], [clean("2026-06-01"), clean("2026-09-01"), clean("2026-12-01"), clean("2027-03-01")], 4)).toBeNull();
+    expect(inspectionRun(["2026-03-01", "2026-10-01"], [clean("2026-06-01"), clean("2026-09-01"), clean("2026-12-01")], 4)).toEqual({ start: "2026-03-01", lastCheck: "2026-12-01", clean: 1 });
+    expect(inspectionRun([], [clean("2026-06-01")], 1)).toBeNull();
+  });
+});
+
+describe("system status", () => {
+  it("puts a ≥ 500 lb commercial system on quarterly inspections from the breach, unless automatic leak detection watches it", () => {
+    const rec = { ...base, additions: [{ id: "a", date: "2026-02-01", amountKg: lb(40) }, { id: "b", date: "2026-08-31", amountKg: lb(150) }] };
+    const s = systemStatus(US_FEDERAL_PROFILE, "annualizing", rec, "2026-09-10");
+    // 150/1150 ÷ (211/365) × 100 = 22.56 % > 20 % (40 CFR 84.102 annualizing; 84.106 threshold [S:R4]).
+    expect(s.latest?.percent).toBeCloseTo((150 / 1150 / (211 / 365)) * 100, 9);
+    expect(s.unrepairedBreach?.repairDue).toBe("2026-09-30"); // 30 days [S:R4]
+    // Quarterly for CR ≥ 500 lb [M]; 31 Aug + 3 months clamps to 30 Nov (calendar months).
+    expect(s.nextInspection?.dueOn).toBe("2026-11-30");
+    expect(systemStatus(US_FEDERAL_PROFILE, "annualizing", { ...rec, automaticLeakDetection: true }, "2026-09-10").nextInspection).toBeNull();
+    // A repair recorded on or after the day the rate was learned clears the repair deadline.
+    const repaired = systemStatus(US_FEDERAL_PROFILE, "annualizing", { ...rec, repairedOn: ["2026-09-05"] }, "2026-09-10");
+    expect(repaired.unrepairedBreach).toBeNull();
+    expect(repaired.due.map((d) => d.kind)).toEqual(["inspection"]);
+  });
+
+  it("dates the follow-up verification test 10 days after a passed initial test", () => {
+    const s = systemStatus(US_FEDERAL_PROFILE, "annualizing", { ...base, pendingFollowUps: [{ findingId: "f", repairedOn: "2026-02-25", initialTestOn: "2026-02-25" }] }, "2026-02-26");
+    // 25 Feb + 10 days = 7 Mar in 2026 (not a leap year); follow-up within 10 days [M].
+    expect(s.due).toEqual([expect.objectContaining({ kind: "follow-up-test", dueOn: "2026-03-07", findingId: "f" })]);
+  });
+});

@@ -1,0 +1,181 @@
+import { addMonths, compareDates, type IsoDate } from "../dates/calendar-date";
+import type { Refrigerant } from "../refrigerants/types";
+import { applicableLeakRatePart, leakRateThreshold } from "./applicability";
+import { assessLeakRate, type AssessedPoint } from "./assess-leak-rate";
+import { chronicLeakerYears, type ChronicLeakerYear } from "./chronic-leaker";
+import { systemCo2e, type SystemCo2e } from "./co2e";
+import { followUpVerificationDueDate, recheckAfterRepairDueDate } from "./deadlines";
+import { inspectionsAfterBreach } from "./inspections-after-breach";
+import { leakCheckInterval, nextInspectionDate, type LeakCheckInterval } from "./leak-check-interval";
+import type { ChargeAddition } from "./leak-rate";
+import type { ApplianceType, LeakRateMethod, RuleProfile } from "./rule-profile";
+
+/** What one system's records say, on one day of the store's calendar. Pure: the caller loads the rows. */
+export interface SystemRecords {
+  refrigerant: Refrigerant;
+  fullChargeKg: number;
+  applianceType: ApplianceType;
+  automaticLeakDetection: boolean;
+  /** The day the system was entered, on the store's calendar (first leak check runs from it). */
+  enteredOn: IsoDate;
+  additions: readonly ChargeAddition[];
+  /** Days a repair of a leak on this system was recorded. */
+  repairedOn: readonly IsoDate[];
+  /** Repaired findings whose verification is not finished: the repair day and a passed initial test's day, if any. */
+  pendingFollowUps: readonly { findingId: string; repairedOn: IsoDate; initialTestOn: IsoDate | null }[];
+  /** Days a follow-up verification test passed (shortens the rolling-average window). */
+  followUpVerifiedOn: readonly IsoDate[];
+  leakChecks: readonly { checkedOn: IsoDate; leakFound: boolean }[];
+}
+
+export interface DueDate {
+  kind: "repair" | "follow-up-test" | "recheck-after-repair" | "inspection" | "chronic-leaker-report";
+  dueOn: IsoDate;
+  what: string;
+  source: string;
+  findingId?: string;
+}
+
+export interface SystemStatus {
+  points: AssessedPoint[];
+  latest: AssessedPoint | null;
+  applicability: { applies: boolean; partId: string | null; partTitle: string | null; reason: string; thresholdPercent: number | null; thresholdSource: string | null };
+  /** The latest calculation is above the threshold. */
+  overThreshold: boolean;
+  /** The latest breach not yet followed by a repair. */
+  unrepairedBreach: AssessedPoint | null;
+  chronic: ChronicLeakerYear[];
+  co2e: SystemCo2e;
+  leakCheck: { withLds: LeakCheckInterval; withoutLds: LeakCheckInterval; applied: LeakCheckInterval } | null;
+  nextInspection: { dueOn: IsoDate; reason: string; source: string } | null;
+  due: DueDate[];
+}
+
+const latestOf = (dates: readonly IsoDate[]) => [...dates].sort(compareDates).at(-1) ?? null;
+
+export function systemStatus(profile: RuleProfile, method: LeakRateMethod, rec: SystemRecords, today: IsoDate): SystemStatus {
+  const system = { refrigerant: rec.refrigerant, fullChargeKg: rec.fullChargeKg, applianceType: rec.applianceType };
+  const points = assessLeakRate(profile, system, rec.additions, method, rec.followUpVerifiedOn);
+  const latest = points.at(-1) ?? null;
+  const a = applicableLeakRatePart(profile, rec.refrigerant, rec.fullChargeKg, today);
+  const threshold = a.applies ? leakRateThreshold(a.part, rec.applianceType) : null;
+  const due: DueDate[] = [];
+
+  // A breach stays open until a repair is recorded on or after the day the rate was learned.
+  const lastBreach = [...points].reverse().find((p) => p.exceeds) ?? null;
+  const lastRepair = latestOf(rec.repairedOn);
+  const unrepairedBreach = lastBreach && !(lastRepair && compareDates(lastRepair, lastBreach.date) >= 0) ? lastBreach : null;
+  const breachPart = lastBreach?.partId ? profile.leakRateParts.find((p) => p.id === lastBreach.partId) ?? null : null;
+  if (unrepairedBreach?.repairDue && breachPart) {
+    due.push({
+      kind: "repair",
+      dueOn: unrepairedBreach.repairDue,
+      what: `Repair: leak rate ${unrepairedBreach.percent.toFixed(1)} % on ${unrepairedBreach.date} is above ${unrepairedBreach.thresholdPercent} %`,
+      source: `${breachPart.title}; ${breachPart.repairDays.source}`,
+    });
+  }
+
+  const part = a.applies ? a.part : breachPart;
+  for (const f of rec.pendingFollowUps) {
+    if (part && f.initialTestOn) {
+      due.push({ kind: "follow-up-test", dueOn: followUpVerificationDueDate(part, f.initialTestOn), what: "Follow-up verification test", source: part.followUpVerificationDays.source, findingId: f.findingId });
+    } else if (!part && profile.leakChecks) {
+      due.push({ kind: "recheck-after-repair", dueOn: recheckAfterRepairDueDate(profile, f.repairedOn), what: "Leak check after the repair", source: profile.leakChecks.recheckAfterRepairMonths.source, findingId: f.findingId });
+    }
+  }
+
+  const chronic = part ? chronicLeakerYears(part, rec.fullChargeKg, rec.additions) : [];
+  const thisYear = Number(today.slice(0, 4));
+  for (const y of chronic) {
+    // The report for last year (or this one, once reached) is what can still be acted on.
+    if (y.chronic && y.reportDue && y.year >= thisYear - 1 && part) {
+      due.push({ kind: "chronic-leaker-report", dueOn: y.reportDue, what: `Chronic-leaker report for ${y.year}: ${y.percent.toFixed(0)} % of the full charge added`, source: `${part.chronicLeaker.percentOfFullCharge.source}; ${part.chronicLeaker.reportBy.source}` });
+    }
+  }
+
+  const co2e = systemCo2e(profile, rec.refrigerant, rec.fullChargeKg);
+  const lastCheck = latestOf(rec.leakChecks.map((c) => c.checkedOn));
+  let leakCheck: SystemStatus["leakCheck"] = null;
+  let nextInspection: SystemStatus["nextInspection"] = null;
+  if (profile.leakChecks) {
+    const withLds = leakCheckInterval(profile, rec.refrigerant, rec.fullChargeKg, { hasLeakDetection: true });
+    const withoutLds = leakCheckInterval(profile, rec.refrigerant, rec.fullChargeKg, { hasLeakDetection: false });
+    const applied = rec.automaticLeakDetection ? withLds : withoutLds;
+    leakCheck = { withLds, withoutLds, applied };
+    if (applied.required) {
+      const from = lastCheck ?? rec.enteredOn;
+      nextInspection = {
+        dueOn: nextInspectionDate(from, applied.months),
+        reason: `${lastCheck ? `last leak check ${lastCheck}` : `no leak check recorded since the system was entered on ${rec.enteredOn}`}; ${applied.reason}`,
+        source: profile.leakChecks.co2eBands.source,
+      };
+    }
+  } else if (lastBreach && breachPart) {
+    // US: periodic inspections after a breach until enough clean periods in a row. Our reading of
+    // "until N periods below the threshold": N consecutive inspections with no leak found since the breach.
+    const plan = inspectionsAfterBreach(breachPart, { applianceType: rec.applianceType, fullChargeKg: rec.fullChargeKg, hasAutomaticLeakDetection: rec.automaticLeakDetection });
+    if (plan.required) {
+      const run = inspectionRun(points.filter((p) => p.exceeds).map((p) => p.date), rec.leakChecks, plan.untilPeriodsBelow);
+      if (run) {
+        const from = run.lastCheck ?? run.start;
+        nextInspection = {
+          dueOn: addMonths(from, plan.everyMonths),
+          reason: `inspections since the breach of ${run.start}: ${plan.reason} (${run.clean} clean so far${run.lastCheck ? `, last ${run.lastCheck}` : ""})`,
+          source: breachPart.inspectionsAfterBreach?.source ?? "",
+        };
+      }
+    }
+  }
+  if (nextInspection) due.push({ kind: "inspection", dueOn: nextInspection.dueOn, what: "Leak inspection", source: nextInspection.source });
+
+  return {
+    points,
+    latest,
+    applicability: {
+      applies: a.applies,
+      partId: a.applies ? a.part.id : null,
+      partTitle: a.applies ? a.part.title : null,
+      reason: a.reason,
+      thresholdPercent: threshold?.percent ?? null,
+      thresholdSource: threshold?.source ?? null,
+    },
+    overThreshold: !!latest?.exceeds,
+    unrepairedBreach,
+    chronic,
+    co2e,
+    leakCheck,
+    nextInspection,
+    due: due.sort((x, y) => compareDates(x.dueOn, y.dueOn)),
+  };
+}
+
+/**
+ * The open run of US inspections after a breach, or null when none is open. Our reading of
+ * "until N periods below the threshold" (standards.md §1 [M]): a run starts at a breach, counts
+ * consecutive inspections with no leak found, and ends at N; a new breach during a run resets the
+ * count but keeps the schedule, which runs from the latest inspection (or the run's start).
+ */
+export function inspectionRun(
+  breachDates: readonly IsoDate[],
+  checks: readonly { checkedOn: IsoDate; leakFound: boolean }[],
+  untilClean: number,
+): { start: IsoDate; lastCheck: IsoDate | null; clean: number } | null {
+  type Ev = { on: IsoDate; breach: boolean; leakFound: boolean };
+  const evs: Ev[] = [
+    ...breachDates.map((on) => ({ on, breach: true, leakFound: true })),
+    ...checks.map((c) => ({ on: c.checkedOn, breach: false, leakFound: c.leakFound })),
+  ].sort((a, b) => compareDates(a.on, b.on) || (a.breach ? -1 : 1));
+  let run: { start: IsoDate; lastCheck: IsoDate | null; clean: number } | null = null;
+  for (const e of evs) {
+    if (e.breach) {
+      if (run) run.clean = 0;
+      else run = { start: e.on, lastCheck: null, clean: 0 };
+      continue;
+    }
+    if (!run) continue;
+    run.lastCheck = e.on;
+    run.clean = e.leakFound ? 0 : run.clean + 1;
+    if (run.clean >= untilClean) run = null;
+  }
+  return run;
+}

@@ -1,0 +1,98 @@
+import type { Permission } from "../roles";
+
+/**
+ * The finding lifecycle as data: suspected → confirmed → repaired → (initial verification test,
+ * follow-up verification test) → verified → closed, or dismissed with a reason. A failed test
+ * sends the finding back to confirmed: the leak is still there and needs another repair
+ * (40 CFR 82.152 "verification test" definitions [S:R8]; the loop back is our reading).
+ */
+export type FindingStatus = "suspected" | "confirmed" | "repaired" | "verified" | "closed" | "dismissed";
+export type FindingEventKind = "found" | "confirmed" | "repaired" | "initial-test" | "follow-up-test" | "closed" | "dismissed";
+export type FindingAction = "confirm" | "repair" | "initial-test" | "follow-up-test" | "close" | "dismiss";
+export const FINDING_ACTIONS: readonly FindingAction[] = ["confirm", "repair", "initial-test", "follow-up-test", "close", "dismiss"];
+
+export interface LifecycleEvent {
+  kind: FindingEventKind;
+  status: FindingStatus;
+  on: string;
+  result?: "passed" | "failed" | null;
+}
+
+/** Who may take each action (roles.ts grants): technicians and lead techs record, engineers and owners close and dismiss. */
+export const ACTION_PERMISSION: Record<FindingAction, Permission> = {
+  confirm: "findings.record",
+  repair: "findings.record",
+  "initial-test": "findings.record",
+  "follow-up-test": "findings.record",
+  close: "findings.close",
+  dismiss: "findings.close",
+};
+
+export const ACTION_LABELS: Record<FindingAction, string> = {
+  confirm: "Confirm the leak",
+  repair: "Record the repair",
+  "initial-test": "Record the initial verification test",
+  "follow-up-test": "Record the follow-up verification test",
+  close: "Close the finding",
+  dismiss: "Dismiss the finding",
+};
+
+/** Where the finding stands in its repair: whether an initial test passed since the latest repair. */
+export function initialTestPassedSinceRepair(events: readonly LifecycleEvent[]): LifecycleEvent | null {
+  let passed: LifecycleEvent | null = null;
+  for (const e of events) {
+    if (e.kind === "repaired") passed = null;
+    else if (e.kind === "initial-test") passed = e.result === "passed" ? e : null;
+  }
+  return passed;
+}
+
+export function currentStatus(events: readonly LifecycleEvent[]): FindingStatus {
+  return events.at(-1)?.status ?? "suspected";
+}
+
+export type Transition =
+  | { ok: true; kind: FindingEventKind; status: FindingStatus }
+  | { ok: false; message: string };
+
+/**
+ * The event an action adds and the status it leads to, or why it is not allowed now. The
+ * message is shown as is (409), so it says what state the finding is in and what comes next.
+ */
+export function transition(events: readonly LifecycleEvent[], action: FindingAction, result?: "passed" | "failed"): Transition {
+  const status = currentStatus(events);
+  const refuse = (why: string): Transition => ({ ok: false, message: `This finding is ${status}: ${why}` });
+  switch (action) {
+    case "confirm":
+      return status === "suspected" ? { ok: true, kind: "confirmed", status: "confirmed" } : refuse("only a suspected finding can be confirmed.");
+    case "repair":
+      return status === "confirmed" ? { ok: true, kind: "repaired", status: "repaired" } : refuse("only a confirmed leak can be repaired (confirm it first).");
+    case "initial-test": {
+      if (status !== "repaired") return refuse("the initial verification test follows a repair.");
+      if (initialTestPassedSinceRepair(events)) return refuse("the initial verification test has passed; record the follow-up test next.");
+      if (!result) return { ok: false, message: "Give the test result: passed or failed." };
+      return { ok: true, kind: "initial-test", status: result === "passed" ? "repaired" : "confirmed" };
+    }
+    case "follow-up-test": {
+      if (status !== "repaired") return refuse("the follow-up verification test follows a repair and a passed initial test.");
+      if (!initialTestPassedSinceRepair(events)) return refuse("record a passed initial verification test first.");
+      if (!result) return { ok: false, message: "Give the test result: passed or failed." };
+      return { ok: true, kind: "follow-up-test", status: result === "passed" ? "verified" : "confirmed" };
+    }
+    case "close":
+      return status === "verified" ? { ok: true, kind: "closed", status: "closed" } : refuse("only a verified repair can be closed (both verification tests passed).");
+    case "dismiss":
+      return status === "suspected" || status === "confirmed"
+        ? { ok: true, kind: "dismissed", status: "dismissed" }
+        : refuse("only a suspected or confirmed finding can be dismissed.");
+  }
+}
+
+/** Actions that make sense next, for the buttons on the finding screen. */
+export function nextActions(events: readonly LifecycleEvent[]): FindingAction[] {
+  return FINDING_ACTIONS.filter((a) => transition(events, a, "passed").ok);
+}
+
+export function isOpen(status: FindingStatus): boolean {
+  return status !== "closed" && status !== "dismissed" && status !== "verified";
+}

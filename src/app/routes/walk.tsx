@@ -1,0 +1,10 @@
+import { useParams } from "react-router";
+import { WalkScreen } from "../../features/walk/components/walk-screen";
+import { useDocumentTitle } from "../../lib/use-document-title";
+import { ContrastToggle } from "../shell/contrast-toggle";
+
+export function Component() {
+  useDocumentTitle("Walk");
+  const { storeId, sweepId } = useParams();
+  return <WalkScreen storeId={storeId!} sweepId={sweepId!} contrastToggle={<ContrastToggle />} leaveTo={`/stores/${storeId}/walk`} />;
+}

@@ -1,0 +1,48 @@
+import { useState } from "react";
+import { PRINCIPLE_LABELS, SENSING_PRINCIPLES, type Detector, type DetectorInput } from "../../../../server/contracts/detectors";
+import { Alert } from "../../../components/ui/alert";
+import { Button } from "../../../components/ui/button";
+import { Select } from "../../../components/ui/select";
+import { TextField } from "../../../components/ui/text-field";
+import { isApiRequestError } from "../../../lib/api-client";
+import { useSaveDetector } from "../api/detectors-api";
+
+/** Create or edit a detector. Defaults (5 s delay, 2 ppm alarm) are common practice, no published source. */
+export function DetectorForm({ existing, onDone }: { existing: Detector | null; onDone(): void }) {
+  const [name, setName] = useState(existing?.name ?? "");
+  const [principle, setPrinciple] = useState<DetectorInput["principle"]>(existing?.principle ?? "heated-diode");
+  const [delay, setDelay] = useState(String(existing?.transportDelayS ?? 5));
+  const [tau, setTau] = useState(String(existing?.timeConstantS ?? 1.5));
+  const [alarm, setAlarm] = useState(String(existing?.alarmPpm ?? 2));
+  const [checked, setChecked] = useState(existing?.lastCheckedOn ?? "");
+  const save = useSaveDetector();
+  const fields = isApiRequestError(save.error) ? save.error.fields : {};
+
+  return (
+    <form
+      className="grid max-w-2xl gap-3 sm:grid-cols-2"
+      onSubmit={(e) => {
+        e.preventDefault();
+        save.mutate(
+          {
+            id: existing?.id ?? null,
+            input: { name, principle, transportDelayS: Number(delay), timeConstantS: Number(tau), alarmPpm: Number(alarm), lastCheckedOn: checked || null, levelScale: existing?.levelScale ?? null },
+          },
+          { onSuccess: onDone },
+        );
+      }}
+    >
+      <TextField label="Name" value={name} onChange={(e) => setName(e.target.value)} error={fields.name} />
+      <Select label="Sensing principle" value={principle} onChange={(e) => setPrinciple(e.target.value as DetectorInput["principle"])} options={SENSING_PRINCIPLES.map((p) => ({ value: p, label: PRINCIPLE_LABELS[p] }))} error={fields.principle} />
+      <TextField label="Transport delay (s)" inputMode="decimal" value={delay} onChange={(e) => setDelay(e.target.value)} error={fields.transportDelayS} hint="Hose and pump: time from the probe tip to the sensor" />
+      <TextField label="Response time constant (s)" inputMode="decimal" value={tau} onChange={(e) => setTau(e.target.value)} error={fields.timeConstantS} />
+      <TextField label="Alarm level (ppm)" inputMode="decimal" value={alarm} onChange={(e) => setAlarm(e.target.value)} error={fields.alarmPpm} />
+      <TextField label="Last calibration / bump check" type="date" value={checked} onChange={(e) => setChecked(e.target.value)} error={fields.lastCheckedOn} />
+      {save.isError && !Object.keys(fields).length ? <Alert tone="error">{save.error.message}</Alert> : null}
+      <div className="flex gap-2 sm:col-span-2">
+        <Button type="submit" busy={save.isPending}>{existing ? "Save changes" : "Add detector"}</Button>
+        <Button variant="secondary" onClick={onDone}>Cancel</Button>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,34 @@
+import { z } from "zod";
+import { reading, sweep } from "../../../../server/contracts/sweeps";
+import { api } from "../../../lib/api-client";
+import type { LocalReading, LocalSweep } from "../model/local-types";
+import type { WalkDb } from "../model/walk-db";
+
+/**
+ * A sweep this device does not hold (opened from another device's link): copy it and its
+ * readings from the server into IndexedDB, so the Walk screen works the same from here on.
+ */
+export async function pullSweep(db: WalkDb, sweepId: string): Promise<LocalSweep> {
+  const s = await api.get(`/api/sweeps/${sweepId}`, sweep);
+  const { readings } = await api.get(`/api/sweeps/${sweepId}/readings`, z.object({ readings: z.array(reading) }));
+  const local: LocalSweep = {
+    id: s.id, storeId: s.storeId, planId: s.planId, detectorId: s.detectorId, detectorName: s.detectorName, systemIds: s.systemIds,
+    fans: s.fans, defrost: s.defrost, startedAt: s.startedAt, status: s.status, transportDelayS: s.transportDelayS,
+    timeConstantS: s.timeConstantS, alarmPpm: s.alarmPpm, warnings: s.warnings, onServer: true, submitPending: false, rejected: null,
+  };
+  const tx = db.transaction(["sweeps", "readings", "meta"], "readwrite");
+  await tx.objectStore("sweeps").put(local);
+  let seq = (await tx.objectStore("meta").get("seq")) ?? 0;
+  for (const r of readings) {
+    const existing = await tx.objectStore("readings").get(r.id);
+    if (existing) continue;
+    const row: LocalReading = {
+      id: r.id, sweepId, seq: ++seq, x: r.x, y: r.y, takenAt: r.takenAt, ppm: r.ppm, atLeast: r.atLeast, samplePoint: r.samplePoint, note: r.note,
+      draft: false, state: "synced", onServer: true, editPending: false, deletePending: false, editedAt: null, reasons: null,
+    };
+    await tx.objectStore("readings").put(row);
+  }
+  await tx.objectStore("meta").put(seq, "seq");
+  await tx.done;
+  return local;
+}

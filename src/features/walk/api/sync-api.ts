@@ -1,0 +1,32 @@
+import { readingsBatchResult, type CreateSweepInput, type ReadingEditInput, type ReadingInput } from "../../../../server/contracts/sweeps";
+import { api, isApiRequestError } from "../../../lib/api-client";
+import { RefusedError, type SyncTransport } from "../model/sync-transport";
+
+/** A 4xx with a reason is a refusal the data must be fixed for; anything else is retried later. */
+async function call<T>(run: () => Promise<T>): Promise<T> {
+  try {
+    return await run();
+  } catch (e) {
+    if (isApiRequestError(e) && e.status >= 400 && e.status < 500) throw new RefusedError(e.status, e.message, e.fields);
+    throw e;
+  }
+}
+
+export const httpSyncTransport: SyncTransport = {
+  async createSweep(storeId: string, body: CreateSweepInput) {
+    await call(() => api.post(`/api/stores/${storeId}/sweeps`, null, body));
+  },
+  uploadReadings(sweepId: string, readings: ReadingInput[]) {
+    return call(() => api.post(`/api/sweeps/${sweepId}/readings`, readingsBatchResult, { readings }));
+  },
+  async editReading(sweepId: string, readingId: string, body: ReadingEditInput) {
+    await call(() => api.patch(`/api/sweeps/${sweepId}/readings/${readingId}`, null, body));
+  },
+  async deleteReading(sweepId: string, readingId: string, editedAt: string | null) {
+    const q = editedAt ? `?editedAt=${encodeURIComponent(editedAt)}` : "";
+    await call(() => api.delete(`/api/sweeps/${sweepId}/readings/${readingId}${q}`));
+  },
+  async submitSweep(sweepId: string) {
+    await call(() => api.post(`/api/sweeps/${sweepId}/submit`, null));
+  },
+};

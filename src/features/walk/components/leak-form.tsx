@@ -1,0 +1,92 @@
+import { useState } from "react";
+import { COMPONENT_LABELS, FINDING_COMPONENTS } from "../../../../server/contracts/findings";
+import type { Fixture } from "../../../../server/contracts/fixtures";
+import { FIXTURE_KIND_NAMES } from "../../../../server/contracts/fixture-kinds";
+import { Alert } from "../../../components/ui/alert";
+import { Button } from "../../../components/ui/button";
+import { Dialog } from "../../../components/ui/dialog";
+import { Select } from "../../../components/ui/select";
+import { createWalkFinding } from "../api/create-finding";
+import { syncNow } from "../hooks/sync-loop";
+
+export interface LeakSpot {
+  x: number;
+  y: number;
+  fixtureId: string | null;
+}
+
+/** "Leak found here": position (from the tap), fixture, component, status, photo and note. */
+export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId: string; sweepId: string; fixtures: readonly Fixture[]; onClose(): void; onSaved(id: string): void }) {
+  const [fixtureId, setFixtureId] = useState(props.spot?.fixtureId ?? "");
+  const [component, setComponent] = useState<string>("");
+  const [status, setStatus] = useState<"suspected" | "confirmed">("confirmed");
+  const [note, setNote] = useState("");
+  const [photo, setPhoto] = useState<File | null>(null);
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+  const options = [{ value: "", label: "No fixture" }, ...props.fixtures.filter((f) => f.kind !== "wall" && f.kind !== "column").map((f) => ({ value: f.id, label: f.label || FIXTURE_KIND_NAMES[f.kind] }))];
+
+  async function save() {
+    if (!props.spot) return;
+    setBusy(true);
+    setError(null);
+    try {
+      // A sweep started offline must reach the server before a finding can name it.
+      await syncNow();
+      const f = await createWalkFinding(
+        props.storeId,
+        {
+          clientId: crypto.randomUUID(),
+          source: "walk",
+          status,
+          planId: props.planId,
+          sweepId: props.sweepId,
+          fixtureId: fixtureId || null,
+          systemId: props.fixtures.find((x) => x.id === fixtureId)?.systemId ?? null,
+          x: props.spot.x,
+          y: props.spot.y,
+          component: (component || null) as never,
+          note,
+        },
+        photo,
+      );
+      props.onSaved(f.id);
+    } catch (e) {
+      setError(e instanceof Error ? e.message : String(e));
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  return (
+    <Dialog title="Leak found here" open={props.spot !== null} onClose={props.onClose}>
+      {props.spot ? <p className="text-muted">At {props.spot.x.toFixed(2)} m, {props.spot.y.toFixed(2)} m on the plan.</p> : null}
+      <Select label="Fixture" value={fixtureId} onChange={(e) => setFixtureId(e.target.value)} options={options} />
+      <Select label="Component" value={component} onChange={(e) => setComponent(e.target.value)} options={[{ value: "", label: "Not known yet" }, ...FINDING_COMPONENTS.map((c) => ({ value: c, label: COMPONENT_LABELS[c] }))]} />
+      <fieldset>
+        <legend className="font-bold">Status</legend>
+        <div className="flex gap-2">
+          {(["confirmed", "suspected"] as const).map((s) => (
+            <label key={s} className={`flex min-h-12 flex-1 items-center justify-center gap-2 rounded-md font-bold edge ${status === s ? "bg-accent text-on-accent" : ""}`}>
+              <input type="radio" name="leak-status" value={s} checked={status === s} onChange={() => setStatus(s)} className="size-5" />
+              {s === "confirmed" ? "Confirmed (pinpointed)" : "Suspected"}
+            </label>
+          ))}
+        </div>
+      </fieldset>
+      <label className="block">
+        <span className="font-bold">Photo</span>
+        <input type="file" accept="image/*" capture="environment" onChange={(e) => setPhoto(e.target.files?.[0] ?? null)} className="mt-1 block min-h-12 w-full" />
+      </label>
+      <label className="block">
+        <span className="font-bold">Note</span>
+        <textarea value={note} onChange={(e) => setNote(e.target.value)} maxLength={2000} rows={2} className="mt-1 block w-full rounded-md p-2 edge" />
+      </label>
+      {error ? <Alert tone="error" title="Not saved">{error}</Alert> : null}
+      <div className="flex gap-2">
+        <Button onClick={() => void save()} busy={busy} className="min-h-12">Save finding</Button>
+        <Button variant="secondary" onClick={props.onClose} className="min-h-12">Cancel</Button>
+      </div>
+    </Dialog>
+  );
+}

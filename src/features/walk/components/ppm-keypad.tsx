@@ -1,0 +1,117 @@
+import { useEffect, useRef, useState } from "react";
+import { PPM_CEILING, SAMPLE_POINTS, SAMPLE_POINT_LABELS, type SamplePoint } from "../../../../server/contracts/sweeps";
+
+export interface KeypadValue {
+  ppm: number;
+  atLeast: boolean;
+  samplePoint: SamplePoint;
+  note: string;
+}
+
+export interface PpmKeypadProps {
+  title: string;
+  initial: KeypadValue;
+  /** Recent values, newest first, offered as one-tap picks. */
+  recent: readonly number[];
+  onSave(value: KeypadValue): void;
+  onCancel(): void;
+  cancelLabel: string;
+  /** The keypad's typed text, lifted so a tap on the plan can save what is shown. */
+  onTyped?(value: KeypadValue): void;
+}
+
+const KEY = "flex h-12 min-w-12 items-center justify-center rounded-md text-2xl font-bold edge active:opacity-70 disabled:opacity-50";
+
+/**
+ * A large ppm keypad for a gloved thumb: every key at least 48 × 48 px. "0 ppm" saves a zero in
+ * one tap; "Over range" stores the typed value as "at least" (a pegged display).
+ */
+export function PpmKeypad(props: PpmKeypadProps) {
+  const [typed, setTyped] = useState(props.initial.ppm === 0 ? "" : String(props.initial.ppm));
+  const [atLeast, setAtLeast] = useState(props.initial.atLeast);
+  const [samplePoint, setSamplePoint] = useState<SamplePoint>(props.initial.samplePoint);
+  const [note, setNote] = useState(props.initial.note);
+  const [noteOpen, setNoteOpen] = useState(props.initial.note !== "");
+  const value = typed === "" || typed === "." ? 0 : Number(typed);
+  const tooHigh = value > PPM_CEILING;
+
+  function current(over = atLeast, v = value): KeypadValue {
+    return { ppm: v, atLeast: over, samplePoint, note: note.trim() };
+  }
+  const onTyped = useRef(props.onTyped);
+  onTyped.current = props.onTyped;
+  useEffect(() => {
+    onTyped.current?.({ ppm: value, atLeast, samplePoint, note: note.trim() });
+  }, [value, atLeast, samplePoint, note]);
+  function type(next: string) {
+    setTyped(next);
+  }
+  function press(k: string) {
+    if (k === "." && typed.includes(".")) return;
+    if (typed.replace(".", "").length >= 6) return;
+    type(typed === "0" && k !== "." ? k : typed + k);
+  }
+
+  return (
+    <section aria-label="Enter the detector's reading" className="flex flex-col gap-2 bg-surface p-2 edge border-x-0 border-b-0">
+      <div className="flex items-center gap-2">
+        <h2 className="shrink-0 font-bold">{props.title}</h2>
+        <output aria-live="polite" aria-label="Value" className={`block min-w-0 flex-1 truncate rounded-md px-3 text-right text-3xl font-bold edge ${tooHigh ? "border-danger text-danger" : ""}`}>
+          {atLeast ? "≥ " : ""}
+          {typed === "" ? "0" : typed} <span className="text-lg">ppm</span>
+        </output>
+        <button type="button" className="min-h-12 shrink-0 rounded-md px-2 font-bold text-accent underline" onClick={props.onCancel}>
+          {props.cancelLabel}
+        </button>
+      </div>
+      <div role="radiogroup" aria-label="Sample point" className="flex gap-2 overflow-x-auto">
+        {SAMPLE_POINTS.map((p) => (
+          <button
+            key={p}
+            type="button"
+            role="radio"
+            aria-checked={samplePoint === p}
+            onClick={() => setSamplePoint(p)}
+            className={`min-h-12 shrink-0 rounded-full px-3 font-bold edge ${samplePoint === p ? "bg-accent text-on-accent" : "bg-surface"}`}
+          >
+            {SAMPLE_POINT_LABELS[p]}
+          </button>
+        ))}
+      </div>
+      {tooHigh ? <p className="text-danger">Above the {PPM_CEILING.toLocaleString("en-US")} ppm ceiling: enter the display's top value and press Over range.</p> : null}
+      {props.recent.length ? (
+        <div className="flex gap-2" aria-label="Recent values">
+          {props.recent.map((v) => (
+            <button key={v} type="button" className="min-h-12 flex-1 rounded-md font-bold edge bg-accent-soft" onClick={() => props.onSave(current(false, v))}>
+              {v} ppm
+            </button>
+          ))}
+        </div>
+      ) : null}
+      <div className="grid grid-cols-4 gap-2">
+        {["7", "8", "9"].map((k) => <button key={k} type="button" className={`${KEY} bg-surface`} onClick={() => press(k)}>{k}</button>)}
+        <button type="button" className={`${KEY} bg-surface`} aria-label="Delete last digit" onClick={() => type(typed.slice(0, -1))}>⌫</button>
+        {["4", "5", "6"].map((k) => <button key={k} type="button" className={`${KEY} bg-surface`} onClick={() => press(k)}>{k}</button>)}
+        <button type="button" aria-pressed={atLeast} className={`${KEY} text-base ${atLeast ? "bg-accent text-on-accent" : "bg-surface"}`} onClick={() => setAtLeast(!atLeast)}>
+          Over range
+        </button>
+        {["1", "2", "3"].map((k) => <button key={k} type="button" className={`${KEY} bg-surface`} onClick={() => press(k)}>{k}</button>)}
+        <button type="button" className={`${KEY} bg-surface text-base`} aria-expanded={noteOpen} onClick={() => setNoteOpen(!noteOpen)}>Note</button>
+        <button type="button" className={`${KEY} bg-surface`} onClick={() => press(".")} aria-label="Decimal point">.</button>
+        <button type="button" className={`${KEY} bg-surface`} onClick={() => press("0")}>0</button>
+        <button type="button" className={`${KEY} col-span-2 bg-accent text-on-accent`} disabled={tooHigh} onClick={() => props.onSave(current())}>
+          Save
+        </button>
+        <button type="button" className={`${KEY} col-span-4 bg-ok text-xl text-on-accent`} onClick={() => props.onSave({ ...current(false, 0) })}>
+          0 ppm — save
+        </button>
+      </div>
+      {noteOpen ? (
+        <label className="block">
+          <span className="font-bold">Note (optional)</span>
+          <input value={note} maxLength={500} onChange={(e) => setNote(e.target.value)} className="mt-1 block min-h-12 w-full rounded-md px-3 edge" />
+        </label>
+      ) : null}
+    </section>
+  );
+}

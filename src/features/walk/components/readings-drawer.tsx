@@ -1,0 +1,47 @@
+import { SAMPLE_POINT_LABELS } from "../../../../server/contracts/sweeps";
+import { Dialog } from "../../../components/ui/dialog";
+import type { LocalReading } from "../model/local-types";
+
+function stateWord(r: LocalReading): string {
+  if (r.state === "rejected") return "Refused — fix it";
+  if (r.state === "pending" || r.editPending) return "Waiting to upload";
+  return "Uploaded";
+}
+
+/** Every reading of the sweep, newest first, to edit or delete; refused ones show why. */
+export function ReadingsDrawer(props: { open: boolean; readings: readonly LocalReading[]; timeZone: string; onEdit(r: LocalReading): void; onDelete(r: LocalReading): void; onClose(): void }) {
+  const fmt = new Intl.DateTimeFormat("en-GB", { timeStyle: "medium", timeZone: props.timeZone });
+  const list = [...props.readings].map((r, i) => ({ r, n: i + 1 })).reverse();
+  return (
+    <Dialog title={`Readings (${props.readings.length})`} open={props.open} onClose={props.onClose} wide>
+      {list.length === 0 ? <p>No readings yet: tap the plan where the probe is.</p> : null}
+      <ol className="flex flex-col gap-2">
+        {list.map(({ r, n }) => (
+          <li key={r.id} className={`rounded-md p-3 edge ${r.state === "rejected" ? "border-danger bg-danger-soft" : ""}`} data-testid="reading-row">
+            <div className="flex flex-wrap items-baseline justify-between gap-2">
+              <span className="font-bold">
+                #{n} · {r.atLeast ? "≥ " : ""}
+                {r.ppm} ppm · {SAMPLE_POINT_LABELS[r.samplePoint]}
+              </span>
+              <span className="text-muted">
+                {fmt.format(new Date(r.takenAt))} · {stateWord(r)}
+              </span>
+            </div>
+            {r.note ? <p>{r.note}</p> : null}
+            {r.reasons ? (
+              <ul className="text-danger">
+                {Object.entries(r.reasons).map(([k, m]) => (
+                  <li key={k}>{k ? `${k} ${m}` : m}</li>
+                ))}
+              </ul>
+            ) : null}
+            <div className="mt-2 flex gap-2">
+              <button type="button" className="min-h-12 rounded-md px-4 font-bold edge" onClick={() => props.onEdit(r)}>Edit</button>
+              <button type="button" className="min-h-12 rounded-md px-4 font-bold text-danger edge" onClick={() => props.onDelete(r)}>Delete</button>
+            </div>
+          </li>
+        ))}
+      </ol>
+    </Dialog>
+  );
+}

@@ -1,0 +1,250 @@
+import { useEffect, useMemo, useRef, useState, type ReactNode } from "react";
+import { Link } from "react-router";
+import type { CautionPlace } from "../../../../server/domain/safety/cautions";
+import { FIXTURE_KIND_NAMES } from "../../../../server/contracts/fixture-kinds";
+import { Alert } from "../../../components/ui/alert";
+import { Spinner } from "../../../components/ui/spinner";
+import { usePlanPack, useStorePack } from "../api/store-pack";
+import { useHighContrast } from "../hooks/use-high-contrast";
+import { useSyncStatus } from "../hooks/use-sync-status";
+import { useWalk } from "../hooks/use-walk";
+import { fixtureAt, unsampledFixtures } from "../model/coverage";
+import { latestLagHint } from "../model/lag-hint";
+import type { LocalReading } from "../model/local-types";
+import { enteredRoom } from "../model/room-entry";
+import { CautionDialog } from "./caution-dialog";
+import { LeakForm, type LeakSpot } from "./leak-form";
+import { LogImport } from "./log-import";
+import { PlanStage } from "./plan-stage";
+import { PpmKeypad, type KeypadValue } from "./ppm-keypad";
+import { ReadingsDrawer } from "./readings-drawer";
+import { SubmitSummary } from "./submit-summary";
+import { SyncBanner } from "./sync-banner";
+
+const TOOL = "flex min-h-12 min-w-12 flex-1 items-center justify-center rounded-md px-1 font-bold leading-tight edge disabled:opacity-50";
+
+/** The sweep capture screen: the plan fills the screen; one tap drops a reading there. */
+export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { storeId: string; sweepId: string; contrastToggle: ReactNode; leaveTo: string }) {
+  const walk = useWalk(sweepId);
+  const storePack = useStorePack(storeId);
+  const planPack = usePlanPack(walk.sweep?.planId);
+  const sync = useSyncStatus();
+  const highContrast = useHighContrast();
+  const [draftId, setDraftId] = useState<string | null>(null);
+  const [editing, setEditing] = useState<LocalReading | null>(null);
+  const typed = useRef<KeypadValue | null>(null);
+  const [caution, setCaution] = useState<{ place: CautionPlace; name: string } | null>(null);
+  const [leakMode, setLeakMode] = useState(false);
+  const [leakSpot, setLeakSpot] = useState<LeakSpot | null>(null);
+  const [notice, setNotice] = useState<string | null>(null);
+  const [dialog, setDialog] = useState<"list" | "summary" | "import" | null>(null);
+  const [dismissedAlarm, setDismissedAlarm] = useState(-1);
+  const [showWarnings, setShowWarnings] = useState(false);
+
+  // A tap whose keypad was open when the tab closed or crashed comes back on the keypad.
+  const restored = useRef(false);
+  useEffect(() => {
+    if (walk.loading || restored.current) return;
+    restored.current = true;
+    const leftover = walk.readings.findLast((r) => r.draft);
+    if (leftover) setDraftId(leftover.id);
+  }, [walk.loading, walk.readings]);
+
+  const fixtures = planPack.data?.fixtures ?? [];
+  const committed = useMemo(() => walk.readings.filter((r) => !r.draft || r.id !== draftId), [walk.readings, draftId]);
+  const unsampled = useMemo(() => unsampledFixtures(fixtures, committed), [fixtures, committed]);
+  const unsampledIds = useMemo(() => new Set(unsampled.map((f) => f.id)), [unsampled]);
+  const sweep = walk.sweep;
+  const hint = useMemo(() => (sweep ? latestLagHint(committed, sweep.transportDelayS, sweep.timeConstantS, sweep.alarmPpm) : null), [committed, sweep]);
+  const recent = useMemo(() => {
+    const out: number[] = [];
+    for (let i = committed.length - 1; i >= 0 && out.length < 4; i--) if (committed[i].ppm > 0 && !out.includes(committed[i].ppm)) out.push(committed[i].ppm);
+    return out;
+  }, [committed]);
+
+  if (walk.loading || planPack.isPending) return <Spinner label="Opening the sweep…" />;
+  if (walk.error || !sweep) return <Alert tone="error" title="This sweep could not be opened">{walk.error ?? "It is not on this device, and the server could not be reached."}</Alert>;
+  if (planPack.isError || !planPack.data) return <Alert tone="error" title="The plan is not on this device">Open the store once while online so its plan is kept on this device.</Alert>;
+  const plan = planPack.data.plan;
+  const draft = walk.readings.find((r) => r.id === draftId) ?? null;
+  const readOnly = sweep.status === "reviewed";
+
+  async function commitDraft() {
+    if (!draftId) return;
+    const v = typed.current;
+    const id = draftId;
+    setDraftId(null);
+    await walk.save(id, v ? { ppm: v.ppm, atLeast: v.atLeast, samplePoint: v.samplePoint, note: v.note } : {});
+  }
+
+  async function onTap(x: number, y: number, at: number) {
+    if (readOnly) return;
+    if (leakMode) {
+      setLeakMode(false);
+      setLeakSpot({ x, y, fixtureId: fixtureAt(fixtures, x, y)?.id ?? null });
+      return;
+    }
+    if (editing) setEditing(null);
+    if (draftId) await commitDraft();
+    const previous = committed.length ? committed[committed.length - 1] : null;
+    const room = enteredRoom(fixtures, previous, { x, y });
+    if (room) setCaution({ place: room.place, name: room.fixture.label || FIXTURE_KIND_NAMES[room.fixture.kind] });
+    typed.current = null;
+    const r = await walk.tap(x, y, at);
+    setDraftId(r.id);
+  }
+
+  async function saveKeypad(v: KeypadValue) {
+    if (editing) {
+      await walk.save(editing.id, v);
+      setEditing(null);
+      return;
+    }
+    if (!draftId) return;
+    const id = draftId;
+    setDraftId(null);
+    await walk.save(id, v);
+  }
+
+  async function undo() {
+    if (draftId) {
+      const id = draftId;
+      setDraftId(null);
+      await walk.remove(id);
+      return;
+    }
+    const last = committed[committed.length - 1];
+    if (last) await walk.remove(last.id);
+  }
+
+  const keypadFor = draft ?? editing;
+  const showHint = hint && hint.index !== dismissedAlarm ? hint : null;
+
+  return (
+    <div className="fixed inset-0 z-30 flex flex-col bg-paper" data-testid="walk-screen">
+      <header className="flex flex-col gap-2 bg-surface p-2 edge border-x-0 border-t-0">
+        <div className="flex items-center justify-between gap-2">
+          <Link to={leaveTo} className="inline-flex min-h-12 shrink-0 items-center whitespace-nowrap rounded-md px-3 font-bold edge no-underline">← Leave</Link>
+          <p className="min-w-0 flex-1 text-center leading-tight">
+            <span className="block truncate font-bold">{storePack.data?.store.name ?? "Sweep"}</span>
+            <span className="block truncate text-sm text-muted" data-testid="walk-count">{sweep.detectorName} · {committed.length} readings{sweep.status !== "in-progress" ? ` · ${sweep.status}` : sweep.submitPending ? " · submitting" : ""}</span>
+          </p>
+          {contrastToggle}
+        </div>
+        <div className="flex gap-2">
+          <div className="min-w-0 flex-1">
+            <SyncBanner status={sync} onShowRejected={() => setDialog("list")} />
+          </div>
+          {sweep.warnings.length ? (
+            <button type="button" aria-expanded={showWarnings} onClick={() => setShowWarnings(!showWarnings)} className="min-h-12 shrink-0 rounded-md border-l-4 border-note bg-note-soft px-3 font-bold text-note edge">
+              {sweep.warnings.length} {sweep.warnings.length === 1 ? "warning" : "warnings"}
+            </button>
+          ) : null}
+        </div>
+        {showWarnings ? (
+          <ul className="max-h-48 overflow-auto">
+            {sweep.warnings.map((w) => <li key={w.code + (w.systemId ?? "")} className="mb-1 rounded-md border-l-4 border-note bg-note-soft px-3 py-1 text-note edge">{w.message}</li>)}
+          </ul>
+        ) : null}
+        {leakMode ? <Alert tone="info">Tap the plan where the leak is.</Alert> : null}
+        {notice ? <Alert tone="success"><span>{notice} </span><button type="button" className="min-h-12 underline" onClick={() => setNotice(null)}>Dismiss</button></Alert> : null}
+        {showHint ? (
+          <div role="alert" className="flex items-center justify-between gap-2 rounded-md border-l-4 border-danger bg-danger-soft px-3 py-1 edge" data-testid="lag-hint">
+            <span>
+              <strong>Alarm: {committed[showHint.index]?.ppm} ppm.</strong>{" "}
+              {showHint.beforeDelay
+                ? "The detector had not yet drawn air from beyond the first reading: re-check around the start."
+                : `The air was sampled about ${showHint.backM.toFixed(1)} m back along your path (yellow diamond). Re-check at about 0.6 m spacing from there (rings).`}
+            </span>
+            <button type="button" className="min-h-12 shrink-0 font-bold underline" onClick={() => setDismissedAlarm(showHint.index)}>OK</button>
+          </div>
+        ) : null}
+      </header>
+      <div className="min-h-0 flex-1">
+        <PlanStage
+          widthM={plan.widthM ?? 1}
+          heightM={plan.heightM ?? 1}
+          image={planPack.data.image}
+          fixtures={fixtures}
+          unsampled={unsampledIds}
+          readings={walk.readings}
+          alarmPpm={sweep.alarmPpm}
+          lagHint={showHint}
+          selectedId={keypadFor?.id ?? null}
+          highContrast={highContrast}
+          onTap={(x, y, at) => void onTap(x, y, at)}
+        />
+      </div>
+      {keypadFor ? (
+        <PpmKeypad
+          key={keypadFor.id}
+          title={editing ? `Edit reading #${walk.readings.indexOf(keypadFor) + 1}` : `Reading #${walk.readings.indexOf(keypadFor) + 1}`}
+          initial={{ ppm: keypadFor.ppm, atLeast: keypadFor.atLeast, samplePoint: keypadFor.samplePoint, note: keypadFor.note }}
+          recent={recent}
+          onTyped={(v) => (typed.current = v)}
+          onSave={(v) => void saveKeypad(v)}
+          cancelLabel={editing ? "Cancel edit" : "Discard this tap"}
+          onCancel={() => (editing ? setEditing(null) : void undo())}
+        />
+      ) : (
+        <nav aria-label="Sweep tools" className="flex gap-2 bg-surface p-2 edge border-x-0 border-b-0">
+          <button type="button" className={`${TOOL} bg-surface`} onClick={() => void undo()} disabled={readOnly || committed.length === 0}>Undo</button>
+          <button type="button" className={`${TOOL} bg-surface`} onClick={() => setDialog("list")}>Readings</button>
+          <button type="button" className={`${TOOL} bg-surface`} onClick={() => setLeakMode(!leakMode)} aria-pressed={leakMode} disabled={readOnly}>Leak here</button>
+          <button type="button" className={`${TOOL} bg-surface`} onClick={() => setDialog("import")} disabled={readOnly}>Import log</button>
+          <button type="button" className={`${TOOL} bg-accent text-on-accent`} onClick={() => setDialog("summary")} disabled={sweep.status !== "in-progress" || sweep.submitPending}>Submit</button>
+        </nav>
+      )}
+      <CautionDialog place={caution?.place ?? null} name={caution?.name ?? ""} onClose={() => setCaution(null)} />
+      <ReadingsDrawer
+        open={dialog === "list"}
+        readings={committed}
+        timeZone={storePack.data?.store.timeZone ?? Intl.DateTimeFormat().resolvedOptions().timeZone}
+        onEdit={(r) => {
+          setDialog(null);
+          setEditing(r);
+        }}
+        onDelete={(r) => void walk.remove(r.id)}
+        onClose={() => setDialog(null)}
+      />
+      <SubmitSummary
+        open={dialog === "summary"}
+        readings={committed}
+        alarmPpm={sweep.alarmPpm}
+        unsampled={unsampled}
+        waiting={sync.waiting}
+        onClose={() => setDialog(null)}
+        onSubmit={() => {
+          setDialog(null);
+          void walk.submit();
+          setNotice("Sweep submitted. It goes to the server as soon as every reading is uploaded.");
+        }}
+      />
+      <LogImport
+        open={dialog === "import"}
+        taps={committed.map((r) => ({ x: r.x, y: r.y, takenAtMs: Date.parse(r.takenAt), samplePoint: r.samplePoint }))}
+        sweepStartMs={Date.parse(sweep.startedAt)}
+        onClose={() => setDialog(null)}
+        onImport={(list) => {
+          setDialog(null);
+          void walk.addMany(list);
+          setNotice(`${list.length} readings added from the detector's log.`);
+        }}
+      />
+      {leakSpot ? (
+        <LeakForm
+          spot={leakSpot}
+          storeId={storeId}
+          planId={plan.id}
+          sweepId={sweep.id}
+          fixtures={fixtures}
+          onClose={() => setLeakSpot(null)}
+          onSaved={() => {
+            setLeakSpot(null);
+            setNotice("Finding saved.");
+          }}
+        />
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,113 @@
+import { useCallback, useEffect, useRef, useState } from "react";
+import type { SamplePoint } from "../../../../server/contracts/sweeps";
+import { pullSweep } from "../api/remote-sweep";
+import type { LocalReading, LocalSweep, ReadingValues } from "../model/local-types";
+import { addReading, getLocalSweep, removeReading, saveSweep, sweepReadings, updateReading } from "../model/reading-store";
+import { walkDb } from "../model/walk-db";
+import { refreshCounts, syncNow } from "./sync-loop";
+
+export interface WalkState {
+  sweep: LocalSweep | null;
+  readings: LocalReading[];
+  loading: boolean;
+  error: string | null;
+}
+
+/** Remembered between readings: the sample point of the previous one. */
+function lastSamplePoint(readings: readonly LocalReading[]): SamplePoint {
+  return readings.length ? readings[readings.length - 1].samplePoint : "grille";
+}
+
+/**
+ * The Walk screen's state: the sweep and its readings as the device holds them. Every action
+ * writes IndexedDB first and only then updates the screen and nudges the sync queue.
+ */
+export function useWalk(sweepId: string) {
+  const [state, setState] = useState<WalkState>({ sweep: null, readings: [], loading: true, error: null });
+  const readingsRef = useRef<LocalReading[]>([]);
+  readingsRef.current = state.readings;
+
+  const reload = useCallback(async () => {
+    const db = await walkDb();
+    const readings = await sweepReadings(db, sweepId);
+    const sweep = (await getLocalSweep(db, sweepId)) ?? null;
+    setState((s) => ({ ...s, sweep, readings }));
+  }, [sweepId]);
+
+  useEffect(() => {
+    let cancelled = false;
+    void (async () => {
+      try {
+        const db = await walkDb();
+        let sweep = await getLocalSweep(db, sweepId);
+        if (!sweep) sweep = await pullSweep(db, sweepId);
+        const readings = await sweepReadings(db, sweepId);
+        if (!cancelled) setState({ sweep, readings, loading: false, error: null });
+      } catch (e) {
+        if (!cancelled) setState({ sweep: null, readings: [], loading: false, error: e instanceof Error ? e.message : String(e) });
+      }
+    })();
+    return () => {
+      cancelled = true;
+    };
+  }, [sweepId]);
+
+  const changed = useCallback(() => {
+    void refreshCounts();
+    void syncNow().then(() => reload());
+  }, [reload]);
+
+  /** A tap on the plan: the reading exists (on the device) from this moment, as a keypad draft. */
+  const tap = useCallback(
+    async (x: number, y: number, at: number) => {
+      const db = await walkDb();
+      const values: ReadingValues = { x, y, takenAt: new Date(at).toISOString(), ppm: 0, atLeast: false, samplePoint: lastSamplePoint(readingsRef.current), note: "" };
+      const r = await addReading(db, sweepId, values, { draft: true });
+      setState((s) => ({ ...s, readings: [...s.readings, r] }));
+      return r;
+    },
+    [sweepId],
+  );
+
+  const save = useCallback(
+    async (id: string, values: Partial<ReadingValues>) => {
+      const db = await walkDb();
+      const r = await updateReading(db, id, values, { commit: true });
+      if (r) setState((s) => ({ ...s, readings: s.readings.map((x) => (x.id === id ? r : x)) }));
+      changed();
+      return r;
+    },
+    [changed],
+  );
+
+  const remove = useCallback(
+    async (id: string) => {
+      const db = await walkDb();
+      await removeReading(db, id);
+      setState((s) => ({ ...s, readings: s.readings.filter((x) => x.id !== id) }));
+      changed();
+    },
+    [changed],
+  );
+
+  const addMany = useCallback(
+    async (list: ReadingValues[]) => {
+      const db = await walkDb();
+      for (const v of list) await addReading(db, sweepId, v);
+      await reload();
+      changed();
+    },
+    [sweepId, reload, changed],
+  );
+
+  const submit = useCallback(async () => {
+    const db = await walkDb();
+    const s = await getLocalSweep(db, sweepId);
+    if (!s) return;
+    await saveSweep(db, { ...s, submitPending: true });
+    await reload();
+    changed();
+  }, [sweepId, reload, changed]);
+
+  return { ...state, tap, save, remove, addMany, submit, reload };
+}

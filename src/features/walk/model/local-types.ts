@@ -1,0 +1,51 @@
+import type { SamplePoint, SweepWarning } from "../../../../server/contracts/sweeps";
+
+/** A sweep as the device holds it; `onServer` turns true once the server has it. */
+export interface LocalSweep {
+  id: string;
+  storeId: string;
+  planId: string;
+  detectorId: string;
+  detectorName: string;
+  systemIds: string[];
+  fans: "running" | "stopped";
+  defrost: boolean;
+  startedAt: string;
+  status: "in-progress" | "submitted" | "reviewed";
+  transportDelayS: number;
+  timeConstantS: number;
+  alarmPpm: number;
+  warnings: SweepWarning[];
+  onServer: boolean;
+  /** Submit waits in the queue until the readings before it are uploaded. */
+  submitPending: boolean;
+  /** The server refused the sweep itself (e.g. its plan was removed): reason per field. */
+  rejected: Record<string, string> | null;
+}
+
+export type SyncState = "pending" | "synced" | "rejected";
+
+/** A reading as the device holds it. It is written here FIRST, before any upload. */
+export interface LocalReading {
+  id: string;
+  sweepId: string;
+  /** Local order of taps (a monotonically increasing counter per device). */
+  seq: number;
+  x: number;
+  y: number;
+  takenAt: string;
+  ppm: number;
+  atLeast: boolean;
+  samplePoint: SamplePoint;
+  note: string;
+  /** Still on the keypad: not uploaded until the value is confirmed. */
+  draft: boolean;
+  state: SyncState;
+  onServer: boolean;
+  editPending: boolean;
+  deletePending: boolean;
+  editedAt: string | null;
+  reasons: Record<string, string> | null;
+}
+
+export type ReadingValues = Pick<LocalReading, "x" | "y" | "takenAt" | "ppm" | "atLeast" | "samplePoint" | "note">;

@@ -1,0 +1,93 @@
+import type { WalkDb } from "./walk-db";
+import type { LocalReading, LocalSweep, ReadingValues } from "./local-types";
+
+// Every change to a sweep's readings goes through these functions, which write IndexedDB in one
+// transaction each. The sync queue later reads the flags they leave (pending, editPending,
+// deletePending) and sends the changes.
+
+async function nextSeq(db: WalkDb): Promise<number> {
+  const tx = db.transaction("meta", "readwrite");
+  const seq = ((await tx.store.get("seq")) ?? 0) + 1;
+  await tx.store.put(seq, "seq");
+  await tx.done;
+  return seq;
+}
+
+export async function saveSweep(db: WalkDb, sweep: LocalSweep): Promise<void> {
+  await db.put("sweeps", sweep);
+}
+
+export async function getLocalSweep(db: WalkDb, id: string): Promise<LocalSweep | undefined> {
+  return db.get("sweeps", id);
+}
+
+/** Drops a reading at a tap. With `draft`, it waits for the keypad before it may be uploaded. */
+export async function addReading(db: WalkDb, sweepId: string, values: ReadingValues, options: { id?: string; draft?: boolean } = {}): Promise<LocalReading> {
+  const reading: LocalReading = {
+    id: options.id ?? crypto.randomUUID(),
+    sweepId,
+    seq: await nextSeq(db),
+    ...values,
+    draft: options.draft ?? false,
+    state: "pending",
+    onServer: false,
+    editPending: false,
+    deletePending: false,
+    editedAt: null,
+    reasons: null,
+  };
+  await db.put("readings", reading);
+  return reading;
+}
+
+/** Changes a reading's values (the keypad's confirmation, an edit, or a fix of a rejected one). */
+export async function updateReading(db: WalkDb, id: string, values: Partial<ReadingValues>, options: { commit?: boolean } = {}): Promise<LocalReading | undefined> {
+  const tx = db.transaction("readings", "readwrite");
+  const r = await tx.store.get(id);
+  if (!r) return undefined;
+  const next: LocalReading = { ...r, ...values };
+  if (options.commit) next.draft = false;
+  if (r.onServer) {
+    // Already uploaded: the change travels as an edit (audited on the server).
+    next.editPending = true;
+    next.editedAt = new Date().toISOString();
+    next.state = "pending";
+  } else {
+    // Not uploaded yet: the upload carries the new values; a rejected one is queued again.
+    next.state = "pending";
+    next.reasons = null;
+  }
+  await tx.store.put(next);
+  await tx.done;
+  return next;
+}
+
+/** Undo or delete: a reading the server never saw just goes; one it has waits for its delete. */
+export async function removeReading(db: WalkDb, id: string): Promise<void> {
+  const tx = db.transaction("readings", "readwrite");
+  const r = await tx.store.get(id);
+  if (!r) return;
+  if (r.onServer) await tx.store.put({ ...r, deletePending: true, editedAt: new Date().toISOString(), state: "pending" });
+  else await tx.store.delete(id);
+  await tx.done;
+}
+
+/** The sweep's readings in tap order, without those waiting to be deleted. */
+export async function sweepReadings(db: WalkDb, sweepId: string): Promise<LocalReading[]> {
+  const range = IDBKeyRange.bound([sweepId, -Infinity], [sweepId, Infinity]);
+  const all = await db.getAllFromIndex("readings", "bySweepSeq", range);
+  return all.filter((r) => !r.deletePending);
+}
+
+/** What the banner counts: changes not yet on the server (rejected ones are counted apart). */
+export async function queueCounts(db: WalkDb): Promise<{ waiting: number; rejected: number }> {
+  let waiting = 0;
+  let rejected = 0;
+  for (const r of await db.getAll("readings")) {
+    if (r.draft) continue;
+    if (r.state === "rejected") rejected++;
+    else if (r.state === "pending") waiting++;
+  }
+  for (const s of await db.getAll("sweeps")) if (!s.onServer && !s.rejected) waiting++;
+  return { waiting, rejected };
+}

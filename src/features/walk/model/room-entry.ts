@@ -1,0 +1,24 @@
+import type { Fixture } from "../../../../server/contracts/fixtures";
+import { pointInPolygon } from "../../../../server/analysis/geometry/point-in-polygon";
+import type { CautionPlace } from "../../../../server/domain/safety/cautions";
+
+/** The walk-in or machine room a point lies in, with the caution place it stands for. */
+export function roomAt(fixtures: readonly Fixture[], x: number, y: number): { fixture: Fixture; place: CautionPlace } | null {
+  for (const f of fixtures) {
+    if ("point" in f) continue;
+    if (f.kind !== "walk-in-cooler" && f.kind !== "walk-in-freezer" && f.kind !== "machine-room") continue;
+    if (pointInPolygon([x, y], f.polygon)) return { fixture: f, place: f.kind === "machine-room" ? "machine-room" : "walk-in" };
+  }
+  return null;
+}
+
+/**
+ * Whether a tap enters a room: it is inside one and the previous reading was not in that room.
+ * The caution is shown on entering, not on every tap inside.
+ */
+export function enteredRoom(fixtures: readonly Fixture[], previous: { x: number; y: number } | null, next: { x: number; y: number }) {
+  const now = roomAt(fixtures, next.x, next.y);
+  if (!now) return null;
+  const before = previous ? roomAt(fixtures, previous.x, previous.y) : null;
+  return before?.fixture.id === now.fixture.id ? null : now;
+}

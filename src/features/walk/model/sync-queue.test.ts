@@ -1,0 +1,166 @@
+import "fake-indexeddb/auto";
+import { beforeEach, describe, expect, it } from "vitest";
+import type { CreateSweepInput, ReadingEditInput, ReadingInput, ReadingsBatchResult } from "../../../../server/contracts/sweeps";
+import type { LocalSweep } from "./local-types";
+import { addReading, queueCounts, removeReading, saveSweep, sweepReadings, updateReading } from "./reading-store";
+import { syncOnce } from "./sync-queue";
+import { RefusedError, type SyncTransport } from "./sync-transport";
+import { openWalkDb, type WalkDb } from "./walk-db";
+
+/**
+ * A stand-in for the server's side of the contract (the real one is tested in
+ * server/api/sweeps/sweeps.test.ts against PostgreSQL): it stores by id once, rejects negative
+ * ppm per reading, and can drop the connection after storing, as a server that stored a batch
+ * but whose answer was lost would.
+ */
+class FakeServer implements SyncTransport {
+  sweeps = new Set<string>();
+  readings = new Map<string, ReadingInput>();
+  order: string[] = [];
+  deletes: string[] = [];
+  edits: Array<{ id: string; body: ReadingEditInput }> = [];
+  submitted: string[] = [];
+  offline = false;
+  loseAnswerOnce = false;
+  batchSizes: number[] = [];
+
+  private check() {
+    if (this.offline) throw new Error("network");
+  }
+  async createSweep(_storeId: string, body: CreateSweepInput) {
+    this.check();
+    this.sweeps.add(body.id!);
+  }
+  async uploadReadings(sweepId: string, list: ReadingInput[]): Promise<ReadingsBatchResult> {
+    this.check();
+    if (!this.sweeps.has(sweepId)) throw new RefusedError(404, "That sweep was not found.", {});
+    this.batchSizes.push(list.length);
+    const result: ReadingsBatchResult = { stored: [], duplicates: [], rejected: [], readingsRevision: 0 };
+    list.forEach((r, index) => {
+      if (r.ppm < 0) result.rejected.push({ index, id: r.id, reasons: { ppm: "must be 0 ppm or more" } });
+      else if (this.readings.has(r.id)) result.duplicates.push(r.id);
+      else {
+        this.readings.set(r.id, r);
+        this.order.push(r.id);
+        result.stored.push(r.id);
+      }
+    });
+    if (this.loseAnswerOnce) {
+      this.loseAnswerOnce = false;
+      throw new Error("connection reset after the server stored the batch");
+    }
+    return result;
+  }
+  async editReading(_sweepId: string, id: string, body: ReadingEditInput) {
+    this.check();
+    this.edits.push({ id, body });
+  }
+  async deleteReading(_sweepId: string, id: string) {
+    this.check();
+    this.deletes.push(id);
+  }
+  async submitSweep(id: string) {
+    this.check();
+    this.submitted.push(id);
+  }
+}
+
+let db: WalkDb;
+let server: FakeServer;
+let n = 0;
+const sweep: LocalSweep = {
+  id: "6f1c1e52-1d7b-4b83-9a8e-3c2d1f0e9b7a", storeId: "s", planId: "p", detectorId: "d", detectorName: "Diode", systemIds: [],
+  fans: "running", defrost: false, startedAt: "2026-11-02T14:00:00.000Z", status: "in-progress", transportDelayS: 5, timeConstantS: 1.5,
+  alarmPpm: 2, warnings: [], onServer: false, submitPending: false, rejected: null,
+};
+const values = (i: number, ppm = 0) => ({ x: i, y: 2, takenAt: new Date(Date.parse(sweep.startedAt) + i * 3000).toISOString(), ppm, atLeast: false, samplePoint: "grille" as const, note: "" });
+
+beforeEach(async () => {
+  db = await openWalkDb(`walk-test-${++n}`);
+  server = new FakeServer();
+  await saveSweep(db, sweep);
+});
+
+describe("the sync queue", () => {
+  it("uploads a sweep's readings in tap order and counts nothing waiting afterwards", async () => {
+    for (let i = 0; i < 10; i++) await addReading(db, sweep.id, values(i));
+    expect(await queueCounts(db)).toEqual({ waiting: 11, rejected: 0 }); // 10 readings + the sweep
+    const report = await syncOnce(db, server);
+    expect(report).toEqual({ confirmed: 10, rejected: 0, stoppedBy: null });
+    expect(server.order).toEqual((await sweepReadings(db, sweep.id)).map((r) => r.id));
+    expect(await queueCounts(db)).toEqual({ waiting: 0, rejected: 0 });
+  });
+
+  it("keeps everything queued while offline and stores each reading once when an answer was lost", async () => {
+    for (let i = 0; i < 5; i++) await addReading(db, sweep.id, values(i));
+    server.offline = true;
+    expect((await syncOnce(db, server)).stoppedBy).toBe("network");
+    expect((await queueCounts(db)).waiting).toBe(6);
+    server.offline = false;
+    server.loseAnswerOnce = true;
+    expect((await syncOnce(db, server)).stoppedBy).toMatch(/connection reset/);
+    expect((await queueCounts(db)).waiting).toBe(5); // the sweep made it; the readings' answer was lost
+    await syncOnce(db, server);
+    expect(server.readings.size).toBe(5);
+    expect((await queueCounts(db)).waiting).toBe(0);
+  });
+
+  it("leaves a rejected reading on the device with its reasons, uploads the rest, and resends it once fixed", async () => {
+    await addReading(db, sweep.id, values(0));
+    const bad = await addReading(db, sweep.id, values(1, -3));
+    await addReading(db, sweep.id, values(2));
+    const report = await syncOnce(db, server);
+    expect(report).toMatchObject({ confirmed: 2, rejected: 1 });
+    const kept = (await sweepReadings(db, sweep.id)).find((r) => r.id === bad.id)!;
+    expect(kept).toMatchObject({ state: "rejected", reasons: { ppm: "must be 0 ppm or more" } });
+    // a later reading is not held up by the rejected one
+    await addReading(db, sweep.id, values(3));
+    expect((await syncOnce(db, server)).confirmed).toBe(1);
+    expect(await queueCounts(db)).toEqual({ waiting: 0, rejected: 1 });
+    await updateReading(db, bad.id, { ppm: 3 });
+    await syncOnce(db, server);
+    expect(server.readings.get(bad.id)?.ppm).toBe(3);
+    expect(await queueCounts(db)).toEqual({ waiting: 0, rejected: 0 });
+  });
+
+  it("holds a keypad draft back until it is confirmed", async () => {
+    const d = await addReading(db, sweep.id, values(0), { draft: true });
+    await syncOnce(db, server);
+    expect(server.readings.size).toBe(0);
+    await updateReading(db, d.id, { ppm: 1.5 }, { commit: true });
+    await syncOnce(db, server);
+    expect(server.readings.get(d.id)?.ppm).toBe(1.5);
+  });
+
+  it("sends edits and deletes of uploaded readings, and a submit only after the readings", async () => {
+    const a = await addReading(db, sweep.id, values(0));
+    const b = await addReading(db, sweep.id, values(1));
+    await syncOnce(db, server);
+    await updateReading(db, a.id, { ppm: 4, note: "re-read" });
+    await removeReading(db, b.id);
+    expect((await sweepReadings(db, sweep.id)).map((r) => r.id)).toEqual([a.id]);
+    await saveSweep(db, { ...(await db.get("sweeps", sweep.id))!, submitPending: true });
+    await addReading(db, sweep.id, values(2));
+    await syncOnce(db, server);
+    expect(server.edits).toMatchObject([{ id: a.id, body: { ppm: 4, note: "re-read" } }]);
+    expect(server.deletes).toEqual([b.id]);
+    expect(server.readings.size).toBe(3);
+    expect(server.submitted).toEqual([sweep.id]);
+    expect((await db.get("sweeps", sweep.id))?.status).toBe("submitted");
+    expect(await db.get("readings", b.id)).toBeUndefined();
+  });
+
+  it("undoes a reading the server never saw without sending anything", async () => {
+    const a = await addReading(db, sweep.id, values(0));
+    await removeReading(db, a.id);
+    await syncOnce(db, server);
+    expect(server.readings.size).toBe(0);
+    expect(server.deletes).toEqual([]);
+  });
+
+  it("splits a long queue into batches of at most the batch size", async () => {
+    for (let i = 0; i < 7; i++) await addReading(db, sweep.id, values(i));
+    await syncOnce(db, server, 3);
+    expect(server.batchSizes).toEqual([3, 3, 1]);
+  });
+});

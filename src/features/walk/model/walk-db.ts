@@ -1,0 +1,45 @@
+import { openDB, type DBSchema, type IDBPDatabase } from "idb";
+import type { LocalReading, LocalSweep } from "./local-types";
+
+// The device's own copy of everything a sweep needs. Readings land here before any upload, so a
+// reload, a lost connection, a server restart or a crashed tab loses nothing.
+
+export interface WalkDbSchema extends DBSchema {
+  sweeps: { key: string; value: LocalSweep };
+  readings: { key: string; value: LocalReading; indexes: { bySweep: string; bySweepSeq: [string, number] } };
+  /** Plan, fixtures, image, detectors, systems of a store: cached whenever a store is opened. */
+  cache: { key: string; value: { key: string; value: unknown; savedAt: string } };
+  meta: { key: string; value: number };
+}
+
+export type WalkDb = IDBPDatabase<WalkDbSchema>;
+
+export const WALK_DB_NAME = "plumeline-walk";
+
+export function openWalkDb(name = WALK_DB_NAME, factory?: IDBFactory): Promise<WalkDb> {
+  const previous = globalThis.indexedDB;
+  // idb opens with the global factory; tests pass fake-indexeddb's.
+  if (factory) (globalThis as { indexedDB: IDBFactory }).indexedDB = factory;
+  try {
+    return openDB<WalkDbSchema>(name, 1, {
+      upgrade(db) {
+        db.createObjectStore("sweeps", { keyPath: "id" });
+        const readings = db.createObjectStore("readings", { keyPath: "id" });
+        readings.createIndex("bySweep", "sweepId");
+        readings.createIndex("bySweepSeq", ["sweepId", "seq"]);
+        db.createObjectStore("cache", { keyPath: "key" });
+        db.createObjectStore("meta");
+      },
+    });
+  } finally {
+    if (factory) (globalThis as { indexedDB: IDBFactory }).indexedDB = previous;
+  }
+}
+
+let shared: Promise<WalkDb> | null = null;
+
+/** The app's one connection. */
+export function walkDb(): Promise<WalkDb> {
+  shared ??= openWalkDb();
+  return shared;
+}
