@@ -69,6 +69,8 @@ it("creates a store, uploads and calibrates a plan, draws three fixtures and fin
   page.on("console", (m) => m.type() === "error" && failures.push(m.text()));
 
   await signInThroughForm(page, server.url, co.people["lead-tech"].email, PASSWORD);
+  // A lead tech lands on Today; the stores are one link away.
+  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Stores" }).click();
   await page.getByRole("button", { name: "New store" }).click();
   await page.getByLabel("Store name").fill("Quillby Grocers – Fernbank");
   await page.getByLabel("Address").fill("12 Fernbank Parade");
