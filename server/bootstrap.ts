@@ -53,6 +53,8 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
     ctx,
     fakeSmtp,
     async close() {
+      await ctx.analysisRunner?.close();
+      await ctx.reportRunner?.close();
       mailer.close();
       await fakeSmtp?.close();
       await pool.end();

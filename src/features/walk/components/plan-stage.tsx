@@ -20,6 +20,8 @@ export interface PlanStageProps {
   lagHint: LagHint | null;
   selectedId: string | null;
   highContrast: boolean;
+  /** A point to keep on screen when the box resizes (the reading on the keypad). */
+  focus: { x: number; y: number } | null;
   /** A tap at plan metres (x, y), with the device time of the finger going down. */
   onTap(x: number, y: number, at: number): void;
 }
@@ -72,15 +74,25 @@ export function PlanStage(props: PlanStageProps) {
   const moved = useRef(false);
   const img = useBlobImage(props.image);
 
-  const lastBox = useRef({ w: 0, h: 0 });
+  const focusRef = useRef(props.focus);
+  focusRef.current = props.focus;
   useEffect(() => {
     if (w <= 0 || h <= 0) return;
-    const before = lastBox.current;
-    lastBox.current = { w, h };
     const v = viewRef.current;
-    if (!v) setView(fitView(props.widthM, props.heightM, w, h));
-    // The keypad opening or closing resizes the box: keep what was in the middle in the middle.
-    else setView({ ...v, panX: v.panX + (w - before.w) / 2, panY: v.panY + (h - before.h) / 2 });
+    if (!v) {
+      setView(fitView(props.widthM, props.heightM, w, h));
+      return;
+    }
+    // The keypad opening or closing resizes the box. The plan stays put under the finger; only
+    // when the reading being entered would be hidden does it slide just enough to show it.
+    const f = focusRef.current;
+    if (!f) return;
+    const margin = 40;
+    const sx = f.x * v.scale + v.panX;
+    const sy = f.y * v.scale + v.panY;
+    const dx = sx > w - margin ? w - margin - sx : sx < margin ? margin - sx : 0;
+    const dy = sy > h - margin ? h - margin - sy : sy < margin ? margin - sy : 0;
+    if (dx || dy) setView({ ...v, panX: v.panX + dx, panY: v.panY + dy });
   }, [w, h, props.widthM, props.heightM]);
 
   function local(e: React.PointerEvent) {
@@ -141,6 +153,7 @@ export function PlanStage(props: PlanStageProps) {
     <div
       ref={box}
       data-testid="walk-plan"
+      data-view={view ? `${view.scale} ${view.panX} ${view.panY}` : ""}
       className="relative h-full w-full touch-none select-none overflow-hidden bg-paper"
       onPointerDown={onPointerDown}
       onPointerMove={onPointerMove}

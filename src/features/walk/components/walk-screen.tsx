@@ -30,7 +30,20 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
   const planPack = usePlanPack(walk.sweep?.planId);
   const sync = useSyncStatus();
   const highContrast = useHighContrast();
-  const [draftId, setDraftId] = useState<string | null>(null);
+  const [draftId, setDraftIdState] = useState<string | null>(null);
+  // Taps can come faster than IndexedDB answers: actions run one after another, reading the
+  // latest draft and readings from refs rather than from a render that may be behind.
+  const draftRef = useRef<string | null>(null);
+  const setDraftId = (id: string | null) => {
+    draftRef.current = id;
+    setDraftIdState(id);
+  };
+  const chain = useRef<Promise<unknown>>(Promise.resolve());
+  const serial = <A extends unknown[]>(fn: (...args: A) => Promise<void>) => (...args: A) => {
+    chain.current = chain.current.then(() => fn(...args)).catch((e) => console.error(e));
+  };
+  const readingsRef = useRef(walk.readings);
+  readingsRef.current = walk.readings;
   const [editing, setEditing] = useState<LocalReading | null>(null);
   const typed = useRef<KeypadValue | null>(null);
   const [caution, setCaution] = useState<{ place: CautionPlace; name: string } | null>(null);
@@ -70,14 +83,14 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
   const readOnly = sweep.status === "reviewed";
 
   async function commitDraft() {
-    if (!draftId) return;
+    const id = draftRef.current;
+    if (!id) return;
     const v = typed.current;
-    const id = draftId;
     setDraftId(null);
     await walk.save(id, v ? { ppm: v.ppm, atLeast: v.atLeast, samplePoint: v.samplePoint, note: v.note } : {});
   }
 
-  async function onTap(x: number, y: number, at: number) {
+  const onTap = serial(async (x: number, y: number, at: number) => {
     if (readOnly) return;
     if (leakMode) {
       setLeakMode(false);
@@ -85,37 +98,39 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
       return;
     }
     if (editing) setEditing(null);
-    if (draftId) await commitDraft();
-    const previous = committed.length ? committed[committed.length - 1] : null;
+    await commitDraft();
+    const done = readingsRef.current.filter((r) => !r.draft);
+    const previous = done.length ? done[done.length - 1] : null;
     const room = enteredRoom(fixtures, previous, { x, y });
     if (room) setCaution({ place: room.place, name: room.fixture.label || FIXTURE_KIND_NAMES[room.fixture.kind] });
     typed.current = null;
     const r = await walk.tap(x, y, at);
     setDraftId(r.id);
-  }
+  });
 
-  async function saveKeypad(v: KeypadValue) {
+  const saveKeypad = serial(async (v: KeypadValue) => {
     if (editing) {
       await walk.save(editing.id, v);
       setEditing(null);
       return;
     }
-    if (!draftId) return;
-    const id = draftId;
+    const id = draftRef.current;
+    if (!id) return;
     setDraftId(null);
     await walk.save(id, v);
-  }
+  });
 
-  async function undo() {
-    if (draftId) {
-      const id = draftId;
+  const undo = serial(async () => {
+    const id = draftRef.current;
+    if (id) {
       setDraftId(null);
       await walk.remove(id);
       return;
     }
-    const last = committed[committed.length - 1];
+    const done = readingsRef.current.filter((r) => !r.draft);
+    const last = done[done.length - 1];
     if (last) await walk.remove(last.id);
-  }
+  });
 
   const keypadFor = draft ?? editing;
   const showHint = hint && hint.index !== dismissedAlarm ? hint : null;
@@ -160,7 +175,8 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
           </div>
         ) : null}
       </header>
-      <div className="min-h-0 flex-1">
+      <div className="flex min-h-0 flex-1 flex-col landscape:md:flex-row">
+      <div className="min-h-0 min-w-0 flex-1">
         <PlanStage
           widthM={plan.widthM ?? 1}
           heightM={plan.heightM ?? 1}
@@ -171,24 +187,29 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
           alarmPpm={sweep.alarmPpm}
           lagHint={showHint}
           selectedId={keypadFor?.id ?? null}
+          focus={keypadFor ? { x: keypadFor.x, y: keypadFor.y } : null}
           highContrast={highContrast}
-          onTap={(x, y, at) => void onTap(x, y, at)}
+          onTap={(x, y, at) => onTap(x, y, at)}
         />
       </div>
       {keypadFor ? (
+        <div className="landscape:md:w-96 landscape:md:overflow-y-auto">
         <PpmKeypad
           key={keypadFor.id}
           title={editing ? `Edit reading #${walk.readings.indexOf(keypadFor) + 1}` : `Reading #${walk.readings.indexOf(keypadFor) + 1}`}
           initial={{ ppm: keypadFor.ppm, atLeast: keypadFor.atLeast, samplePoint: keypadFor.samplePoint, note: keypadFor.note }}
           recent={recent}
           onTyped={(v) => (typed.current = v)}
-          onSave={(v) => void saveKeypad(v)}
+          onSave={(v) => saveKeypad(v)}
           cancelLabel={editing ? "Cancel edit" : "Discard this tap"}
-          onCancel={() => (editing ? setEditing(null) : void undo())}
+          onCancel={() => (editing ? setEditing(null) : undo())}
         />
-      ) : (
+        </div>
+      ) : null}
+      </div>
+      {keypadFor ? null : (
         <nav aria-label="Sweep tools" className="flex gap-2 bg-surface p-2 edge border-x-0 border-b-0">
-          <button type="button" className={`${TOOL} bg-surface`} onClick={() => void undo()} disabled={readOnly || committed.length === 0}>Undo</button>
+          <button type="button" className={`${TOOL} bg-surface`} onClick={() => undo()} disabled={readOnly || committed.length === 0}>Undo</button>
           <button type="button" className={`${TOOL} bg-surface`} onClick={() => setDialog("list")}>Readings</button>
           <button type="button" className={`${TOOL} bg-surface`} onClick={() => setLeakMode(!leakMode)} aria-pressed={leakMode} disabled={readOnly}>Leak here</button>
           <button type="button" className={`${TOOL} bg-surface`} onClick={() => setDialog("import")} disabled={readOnly}>Import log</button>
