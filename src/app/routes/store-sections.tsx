@@ -4,6 +4,7 @@ import type { Role } from "../../../server/domain/roles";
 import { can } from "../../../server/domain/roles";
 import { PlanSection } from "../../features/layout/components/plan/plan-section";
 import { SystemsSection } from "../../features/systems/components/systems-section";
+import { StoreSweepsSection } from "../../features/fieldmap/components/store-sweeps-section";
 import { StoreRecordsSection } from "../../features/compliance/components/store-records-section";
 import type { UnitPreferences } from "../shell/use-unit-preferences";
 
@@ -21,5 +22,6 @@ export interface StoreSectionProps {
 export const STORE_SECTIONS: readonly { id: string; Component: ComponentType<StoreSectionProps> }[] = [
   { id: "plan", Component: ({ store, role, units }) => <PlanSection storeId={store.id} canEdit={can(role, "plans.edit") && !store.archivedAt} preference={units.length} /> },
   { id: "systems", Component: ({ store, role, units }) => <SystemsSection storeId={store.id} canEdit={can(role, "stores.edit") && !store.archivedAt} massUnit={units.mass} /> },
+  { id: "sweeps", Component: ({ store, role }) => <StoreSweepsSection storeId={store.id} timeZone={store.timeZone} canRecord={can(role, "sweeps.record") && !store.archivedAt} /> },
   { id: "records", Component: ({ store }) => <StoreRecordsSection storeId={store.id} /> },
 ];

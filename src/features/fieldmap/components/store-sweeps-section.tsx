@@ -1,0 +1,36 @@
+import { Link } from "react-router";
+import { QueryError } from "../../../components/ui/query-error";
+import { Spinner } from "../../../components/ui/spinner";
+import { useStoreSweeps } from "../api/get-sweeps";
+
+const LINK = "inline-flex min-h-11 items-center rounded-md px-4 font-bold no-underline";
+
+/** The store page's sweeps section: the latest few with their field maps, and where to start a new one. */
+export function StoreSweepsSection({ storeId, timeZone, canRecord }: { storeId: string; timeZone: string; canRecord: boolean }) {
+  const sweeps = useStoreSweeps(storeId);
+  const when = (iso: string) => new Intl.DateTimeFormat("en-GB", { timeZone, dateStyle: "medium", timeStyle: "short" }).format(new Date(iso));
+  const latest = [...(sweeps.data ?? [])].sort((a, b) => b.startedAt.localeCompare(a.startedAt)).slice(0, 3);
+  return (
+    <section aria-labelledby="store-sweeps" className="space-y-3">
+      <h2 id="store-sweeps" className="text-xl font-bold">Sweeps</h2>
+      {sweeps.isPending ? <Spinner label="Loading sweeps…" /> : null}
+      {sweeps.isError ? <QueryError error={sweeps.error} what="the sweeps" onRetry={() => void sweeps.refetch()} /> : null}
+      {sweeps.data && latest.length === 0 ? <p className="text-muted">No sweeps of this store yet.</p> : null}
+      {latest.length ? (
+        <ul className="space-y-1">
+          {latest.map((s) => (
+            <li key={s.id}>
+              <Link className="text-accent underline" to={`/stores/${storeId}/sweeps/${s.id}/map`}>{when(s.startedAt)}</Link>
+              <span className="text-muted"> · {s.technicianName} · {s.readingCount} readings · {s.status.replace("-", " ")}</span>
+            </li>
+          ))}
+        </ul>
+      ) : null}
+      <div className="flex flex-wrap gap-2">
+        {canRecord ? <Link className={`${LINK} bg-accent text-on-accent`} to={`/stores/${storeId}/walk`}>Start a sweep</Link> : null}
+        {sweeps.data?.length ? <Link className={`${LINK} edge bg-surface`} to={`/stores/${storeId}/sweeps`}>All sweeps</Link> : null}
+        {(sweeps.data?.length ?? 0) > 1 ? <Link className={`${LINK} edge bg-surface`} to={`/stores/${storeId}/compare`}>Compare months</Link> : null}
+      </div>
+    </section>
+  );
+}
