@@ -66,7 +66,10 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
   const fixtures = planPack.data?.fixtures ?? [];
   const committed = useMemo(() => walk.readings.filter((r) => !r.draft || r.id !== draftId), [walk.readings, draftId]);
   const unsampled = useMemo(() => unsampledFixtures(fixtures, committed), [fixtures, committed]);
-  const unsampledIds = useMemo(() => new Set(unsampled.map((f) => f.id)), [unsampled]);
+  // Keyed by content, so the fixtures layer (and the plan image under it) redraws only when
+  // coverage really changes, not on every tap.
+  const unsampledKey = unsampled.map((f) => f.id).join(",");
+  const unsampledIds = useMemo(() => new Set(unsampledKey ? unsampledKey.split(",") : []), [unsampledKey]);
   const sweep = walk.sweep;
   const hint = useMemo(() => (sweep ? latestLagHint(committed, sweep.transportDelayS, sweep.timeConstantS, sweep.alarmPpm) : null), [committed, sweep]);
   const recent = useMemo(() => {
@@ -82,14 +85,6 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
   const draft = walk.readings.find((r) => r.id === draftId) ?? null;
   const readOnly = sweep.status === "reviewed";
 
-  async function commitDraft() {
-    const id = draftRef.current;
-    if (!id) return;
-    const v = typed.current;
-    setDraftId(null);
-    await walk.save(id, v ? { ppm: v.ppm, atLeast: v.atLeast, samplePoint: v.samplePoint, note: v.note } : {});
-  }
-
   const onTap = serial(async (x: number, y: number, at: number) => {
     if (readOnly) return;
     if (leakMode) {
@@ -98,13 +93,17 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
       return;
     }
     if (editing) setEditing(null);
-    await commitDraft();
-    const done = readingsRef.current.filter((r) => !r.draft);
-    const previous = done.length ? done[done.length - 1] : null;
+    const open = draftRef.current;
+    const before = readingsRef.current.filter((r) => !r.draft || r.id === open);
+    const previous = before.length ? before[before.length - 1] : null;
     const room = enteredRoom(fixtures, previous, { x, y });
     if (room) setCaution({ place: room.place, name: room.fixture.label || FIXTURE_KIND_NAMES[room.fixture.kind] });
+    const v = typed.current;
     typed.current = null;
-    const r = await walk.tap(x, y, at);
+    // The next tap saves what the keypad shows and takes its place, without closing it.
+    const r = open
+      ? await walk.saveAndTap(open, v ? { ppm: v.ppm, atLeast: v.atLeast, samplePoint: v.samplePoint, note: v.note } : {}, x, y, at)
+      : await walk.tap(x, y, at);
     setDraftId(r.id);
   });
 
@@ -228,8 +227,8 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
         onDelete={(r) => void walk.remove(r.id)}
         onClose={() => setDialog(null)}
       />
-      <SubmitSummary
-        open={dialog === "summary"}
+      {dialog === "summary" ? <SubmitSummary
+        open
         readings={committed}
         alarmPpm={sweep.alarmPpm}
         unsampled={unsampled}
@@ -240,9 +239,9 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
           void walk.submit();
           setNotice("Sweep submitted. It goes to the server as soon as every reading is uploaded.");
         }}
-      />
-      <LogImport
-        open={dialog === "import"}
+      /> : null}
+      {dialog === "import" ? <LogImport
+        open
         taps={committed.map((r) => ({ x: r.x, y: r.y, takenAtMs: Date.parse(r.takenAt), samplePoint: r.samplePoint }))}
         sweepStartMs={Date.parse(sweep.startedAt)}
         onClose={() => setDialog(null)}
@@ -251,7 +250,7 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
           void walk.addMany(list);
           setNotice(`${list.length} readings added from the detector's log.`);
         }}
-      />
+      /> : null}
       {leakSpot ? (
         <LeakForm
           spot={leakSpot}
