@@ -18,6 +18,8 @@ import { storesRouter } from "./api/stores/stores.router";
 import { detectorsRouter } from "./api/detectors/detectors.router";
 import { systemsRouter } from "./api/systems/systems.router";
 import { plansRouter } from "./api/plans/plans.router";
+import { analysisRouter } from "./api/analysis/analysis.router";
+import { reportsRouter } from "./api/reports/reports.router";
 import { sweepsRouter } from "./api/sweeps/sweeps.router";
 import { findingsRouter } from "./api/findings/findings.router";
 import { complianceRouter } from "./api/compliance/compliance.router";
@@ -72,6 +74,8 @@ export function createApp(ctx: AppContext): Express {
   api.use(detectorsRouter(ctx));
   api.use(systemsRouter(ctx));
   api.use(plansRouter(ctx));
+  api.use(analysisRouter(ctx));
+  api.use(reportsRouter(ctx));
   api.use(sweepsRouter(ctx));
   api.use(findingsRouter(ctx));
   api.use(complianceRouter(ctx));

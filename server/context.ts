@@ -3,6 +3,7 @@ import type { Logger } from "pino";
 import type { Db } from "./db/client";
 import type { Mailer } from "./mail/mailer";
 import type { BlobStorage } from "./storage/blob-storage";
+import type { AnalysisRunner } from "./jobs/analysis-runner";
 
 /** Plan upload limits; each has a default (server/api/plans/plan-resources.ts). */
 export interface PlanImageLimits {
@@ -40,4 +41,6 @@ export interface AppContext {
   logger: Logger;
   /** Where plan images live; defaults to a disk store under config.uploadsDir. */
   storage?: BlobStorage;
+  /** Worker threads that run the locator; made on first use (server/api/analysis). */
+  analysisRunner?: AnalysisRunner;
 }

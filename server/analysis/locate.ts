@@ -10,8 +10,10 @@ import { candidateNextCheck, candidateReason, type CandidateFacts } from "./loca
 import { benignSource, fansMixing, oneSidedPass, sparseCoverage } from "./locator/diagnostics";
 import { fieldMap } from "./locator/field-map";
 import { findSources, type FoundSource } from "./locator/greedy-sources";
+import { fitNonnegative } from "./locator/nonnegative-fit";
 import { DEFAULT_LOCATOR_OPTIONS, type LocatorOptions } from "./locator/locator-options";
 import { nearestFixture, nearestRiskPoint } from "./locator/nearest-features";
+import { equipmentMask, fanStepScale, riskPointPrior } from "./locator/plan-masks";
 import { accumulateReadingFields, kernelColumn } from "./locator/reading-fields";
 import { createSourceKernel, kernelArea } from "./locator/source-kernel";
 import { HOURS_PER_YEAR, MOLAR_VOLUME_25C_L, ppmToMgPerM3, wellMixedEmission } from "./locator/units";
@@ -37,6 +39,8 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
 
   const grid = createPlanGrid(plan.width, plan.height, o.cellSize, plan.obstacles.map((b) => b.polygon));
   const kernel = createSourceKernel(o.screeningLengthM, o.nearCutoffM, o.truncationM);
+  // a benign-source zone is a spread-out source whose gas drifts far, so it gets a longer kernel
+  const zoneKernel = createSourceKernel(o.zoneScreeningLengthM, o.nearCutoffM, 2 * o.zoneScreeningLengthM + o.zoneMarginM);
   const n = readings.length;
 
   // 1. lag correction along the walked route
@@ -59,45 +63,69 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
 
   // 2. benign-source zones: fixed nuisance sources, distance measured from the whole zone
   const cells = grid.width * grid.height;
-  const zoneDist = new Float32Array(cells).fill(Infinity);
-  const zoneOfReading = new Int32Array(n).fill(-1);
-  const zoneSearch = new GeodesicSearch(grid);
-  const nuisance = plan.backgroundZones.map((zone, z) => {
+  const stepScale = o.fanMixingScale < 1 ? fanStepScale(grid, plan, o.fanMixingScale) : null;
+  const zoneSearch = new GeodesicSearch(grid, stepScale);
+  const zoneCellDist: Float32Array[] = [];
+  const zoneReadingDist: Float64Array[] = [];
+  const nuisance = plan.backgroundZones.map((zone) => {
     let zc = cellsInside(grid, zone.polygon).filter((k) => !grid.blocked[k]);
     if (zc.length === 0) {
       const [cx, cy] = polygonCentroid(zone.polygon);
       zc = [nearestFreeCell(grid, cx, cy)].filter((k) => k >= 0);
     }
-    const reach = Math.max(o.truncationM, o.zoneMarginM);
-    const settled = zoneSearch.fromCells(zc, reach);
-    for (let q = 0; q < settled; q++) {
-      const k = zoneSearch.settled[q];
-      if (zoneSearch.dist[k] < zoneDist[k]) zoneDist[k] = zoneSearch.dist[k];
+    const settled = zoneSearch.fromCells(zc, zoneKernel.truncationM);
+    const dist = new Float32Array(cells).fill(Infinity);
+    for (let q = 0; q < settled; q++) dist[zoneSearch.settled[q]] = zoneSearch.dist[zoneSearch.settled[q]];
+    zoneCellDist.push(dist);
+    const rd = Float64Array.from(readingCell, (k) => dist[k]);
+    zoneReadingDist.push(rd);
+    return Float64Array.from(rd, (d) => zoneKernel.at(d));
+  });
+  // A zone is active when the zone-only fit gives it gas. Only an active zone explains the readings
+  // around it and keeps suspect spots off its surroundings; nothing is ever placed inside a zone.
+  const zoneFit = fitNonnegative(y, weightsFor(y, o), nuisance, censored);
+  const zoneActive = plan.backgroundZones.map((_, z) => zoneFit.q[z] > 0.5);
+  const zoneDist = new Float32Array(cells).fill(Infinity); // to the nearest active zone
+  const zoneNearest = new Int32Array(cells).fill(-1);
+  const insideZone = new Uint8Array(cells);
+  zoneCellDist.forEach((dist, z) => {
+    for (let c = 0; c < cells; c++) {
+      if (dist[c] === 0) insideZone[c] = 1;
+      if (zoneActive[z] && dist[c] < zoneDist[c]) {
+        zoneDist[c] = dist[c];
+        zoneNearest[c] = z;
+      }
     }
-    const column = new Float64Array(n);
-    for (let i = 0; i < n; i++) {
-      const d = zoneSearch.dist[readingCell[i]];
-      column[i] = kernel.at(d);
-      if (d <= o.zoneMarginM && zoneOfReading[i] < 0) zoneOfReading[i] = z;
-    }
-    return column;
+  });
+  const zoneOfReading = new Int32Array(n).fill(-1);
+  zoneReadingDist.forEach((rd, z) => {
+    if (!zoneActive[z]) return;
+    for (let i = 0; i < n; i++) if (rd[i] <= o.zoneMarginM && zoneOfReading[i] < 0) zoneOfReading[i] = z;
+  });
+  // What an active zone can make readings show: its stated typical reading, the readings at it, or by
+  // default `zoneTypicalAlarms` times the alarm level.
+  const zoneLevel = plan.backgroundZones.map((zone, z) => {
+    let level = zone.ppm ?? o.zoneTypicalAlarms * instrument.alarmPpm;
+    for (let i = 0; i < n; i++) if (zoneOfReading[i] === z) level = Math.max(level, y[i]);
+    return level;
   });
 
   // 3. background and weights (noise is multiplicative plus a floor: w = 1/(a + β·y)²)
   const usable = new Uint8Array(n);
   for (let i = 0; i < n; i++) usable[i] = !censored[i] && zoneOfReading[i] < 0 ? 1 : 0;
   const background = estimateBackground(y, usable);
-  const w = new Float64Array(n);
-  for (let i = 0; i < n; i++) w[i] = 1 / (o.noiseFloorPpm + o.noiseFraction * y[i]) ** 2;
+  const w = weightsFor(y, o);
 
   // 4. one truncated geodesic search per sampled cell feeds both the field map and the source scan
-  const fields = accumulateReadingFields(grid, xs, ys, y, w, kernel, o.mapSigmaM);
+  const fields = accumulateReadingFields(grid, xs, ys, y, w, kernel, o.mapSigmaM, stepScale);
   const field = fieldMap(fields, grid.width, grid.height, grid.cellSize);
 
   // 5. suspect spots
+  const onEquipment = o.sourcesOnEquipment ? equipmentMask(grid, plan, o.equipmentMarginM) : null;
   const allowed = new Uint8Array(cells);
   for (let c = 0; c < cells; c++) {
-    allowed[c] = !grid.blocked[c] && zoneDist[c] > o.zoneMarginM && fields.nearestReading[c] <= o.maxReachM ? 1 : 0;
+    allowed[c] =
+      !grid.blocked[c] && !insideZone[c] && zoneDist[c] > o.zoneMarginM && fields.nearestReading[c] <= o.maxReachM && (!onEquipment || onEquipment[c]) ? 1 : 0;
   }
   const supportThreshold = kernel.at(o.supportRadiusM);
   const support = (column: Float64Array, b: number, residual: Float64Array) => {
@@ -115,7 +143,19 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     maxCandidates: o.maxCandidates,
     separationM: o.separationM,
     alternateFraction: o.alternateFraction,
-    credible: (_c, column, _q, b, residual, delta) => delta >= o.minDeltaChi2 && support(column, b, residual).length >= o.minSupport,
+    rankByStrength: o.rankByStrength,
+    sourceSeparationM: o.sourceSeparationM,
+    prior: o.riskPointLogOdds > 0 ? riskPointPrior(grid, plan, o.riskPointLogOdds) : null,
+    credible: (c, column, _q, b, residual, delta) => {
+      if (delta < o.minDeltaChi2) return false;
+      const sup = support(column, b, residual);
+      if (sup.length < o.minSupport) return false;
+      // Within reach of a benign-source zone, a spot must read more than the zone does: gas spreading
+      // from the zone thins out with distance, so weaker readings there are most simply the zone's.
+      const z = zoneNearest[c];
+      if (z >= 0 && zoneDist[c] <= zoneKernel.truncationM) return sup.some((i) => y[i] > zoneLevel[z]);
+      return true;
+    },
   });
   const sources = addMirrorSpot(greedy.sources);
 
@@ -238,6 +278,11 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     readings: corrected,
     field,
   };
+}
+
+/** Noise model: w = 1/(a + β·y)², an additive floor plus a multiplicative share. */
+function weightsFor(y: Float64Array, o: LocatorOptions): Float64Array {
+  return Float64Array.from(y, (v) => 1 / (o.noiseFloorPpm + o.noiseFraction * v) ** 2);
 }
 
 function cellDistance(a: number, b: number, width: number): number {

@@ -52,6 +52,7 @@ async function ensureCsrfToken(): Promise<void> {
 }
 
 export interface RequestOptions {
+  /** JSON-encoded, unless it is FormData (a file upload), which the browser encodes itself. */
   body?: unknown;
   signal?: AbortSignal;
 }
@@ -116,7 +117,8 @@ export async function apiRequest<T>(
 
 async function send<T>(method: Method, path: string, schema: z.ZodType<T> | null, options: RequestOptions): Promise<T> {
   const headers: Record<string, string> = { Accept: "application/json" };
-  if (options.body !== undefined) headers["Content-Type"] = "application/json";
+  const isForm = typeof FormData !== "undefined" && options.body instanceof FormData;
+  if (options.body !== undefined && !isForm) headers["Content-Type"] = "application/json";
   if (method !== "GET" && csrfToken) headers["X-CSRF-Token"] = csrfToken;
 
   let response: Response;
@@ -125,7 +127,7 @@ async function send<T>(method: Method, path: string, schema: z.ZodType<T> | null
       method,
       headers,
       credentials: "same-origin",
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body: options.body === undefined ? undefined : isForm ? (options.body as FormData) : JSON.stringify(options.body),
       signal: options.signal,
     });
   } catch (cause) {
@@ -150,4 +152,22 @@ export const api = {
   put: <T>(path: string, schema: z.ZodType<T> | null, body: unknown) => apiRequest("PUT", path, schema, { body }),
   patch: <T>(path: string, schema: z.ZodType<T> | null, body: unknown) => apiRequest("PATCH", path, schema, { body }),
   delete: (path: string) => apiRequest<void>("DELETE", path, null),
+  /** A multipart upload (multer on the server reads the named file field). */
+  upload: <T>(path: string, schema: z.ZodType<T>, form: FormData) => apiRequest("POST", path, schema, { body: form }),
 };
+
+/** A multipart upload (a photo, a plan image): same cookie, CSRF header and error shape as api.post. */
+export async function apiUpload<T>(path: string, form: FormData, schema: z.ZodType<T>): Promise<T> {
+  await ensureCsrfToken();
+  let response: Response;
+  try {
+    response = await fetch(path, { method: "POST", headers: { Accept: "application/json", ...(csrfToken ? { "X-CSRF-Token": csrfToken } : {}) }, credentials: "same-origin", body: form });
+  } catch {
+    throw new ApiRequestError(0, "network", "Plumeline could not reach the server. Check the connection and try again.");
+  }
+  const body = await readJson(response);
+  if (!response.ok) throw toError(response.status, body);
+  const parsed = schema.safeParse(body);
+  if (!parsed.success) throw new ApiRequestError(response.status, "unexpected_response", `The server's answer to POST ${path} did not match the contract.`);
+  return parsed.data;
+}

@@ -1,5 +1,6 @@
 import type { AddressInfo } from "node:net";
 import type { Server } from "node:http";
+import type { AppConfig } from "../../server/context";
 import { createTestApp, type TestApp } from "./test-app";
 
 export interface E2eServer extends TestApp {
@@ -8,8 +9,8 @@ export interface E2eServer extends TestApp {
 }
 
 /** The real app with the built client, listening on a free loopback port, on a private database. */
-export async function startE2eServer(): Promise<E2eServer> {
-  const t = await createTestApp({ serveClient: true });
+export async function startE2eServer(config: Partial<AppConfig> = {}): Promise<E2eServer> {
+  const t = await createTestApp({ serveClient: true, ...config });
   const server = await new Promise<Server>((resolve) => {
     const s = t.app.listen(0, "127.0.0.1", () => resolve(s));
   });

@@ -34,6 +34,13 @@ export async function createTestDatabase(): Promise<TestDatabase> {
       await pool.end();
       const a = new pg.Client({ connectionString: adminUrl() });
       await a.connect();
+      // pool.end() resolves once its clients are told to end, not once they have gone: wait
+      // (up to 2 s) for them to leave, so "with (force)" does not kill one mid-goodbye (57P01).
+      for (let i = 0; i < 40; i++) {
+        const { rows } = await a.query("select count(*)::int as n from pg_stat_activity where datname = $1", [name]);
+        if (rows[0].n === 0) break;
+        await new Promise((r) => setTimeout(r, 50));
+      }
       await a.query(`drop database if exists ${name} with (force)`);
       await a.end();
     },

@@ -1,4 +1,4 @@
-// Regenerates the committed benchmark stores: `tsx scripts/bench/simulate/generate.ts [perFamily]`.
+// Regenerates the committed benchmark stores: `tsx scripts/bench/simulate/generate.ts 12`.
 // Each store is rebuilt from its family and number alone, so the files are reproducible bit for bit.
 import { mkdirSync, writeFileSync } from "node:fs";
 import { dirname, join } from "node:path";
@@ -6,17 +6,33 @@ import { fileURLToPath } from "node:url";
 import { buildScenario, FAMILIES } from "./scenario";
 
 const here = dirname(fileURLToPath(import.meta.url));
-const outDir = join(here, "..", "scenarios");
-const perFamily = Number(process.argv[2] ?? 10);
-if (!Number.isInteger(perFamily) || perFamily < 1 || perFamily > 100) {
-  console.error(`generate: stores per family must be an integer 1..100, got ${process.argv[2]}`);
+const usage = "usage: tsx scripts/bench/simulate/generate.ts [storesPerFamily] [--first N] [--out DIR]";
+const args = process.argv.slice(2);
+const option = (name: string): string | undefined => {
+  const k = args.indexOf(name);
+  if (k < 0) return undefined;
+  const v = args[k + 1];
+  if (v === undefined) fail(`${name} needs a value`);
+  args.splice(k, 2);
+  return v;
+};
+function fail(message: string): never {
+  console.error(`generate: ${message}\n${usage}`);
   process.exit(2);
 }
+// A held-out set (e.g. --first 13 --out /tmp/holdout) uses store numbers the committed set does not,
+// so a radius calibrated on the committed stores can be checked on stores it has never seen.
+const outDir = option("--out") ?? join(here, "..", "scenarios");
+const first = Number(option("--first") ?? 1);
+const perFamily = Number(args[0] ?? 10);
+if (!Number.isInteger(perFamily) || perFamily < 1 || perFamily > 100) fail(`stores per family must be an integer 1..100, got ${args[0]}`);
+if (!Number.isInteger(first) || first < 1 || first > 9000) fail(`--first must be an integer 1..9000, got ${first}`);
 mkdirSync(outDir, { recursive: true });
 let bytes = 0;
+const faulty: string[] = [];
 const started = Date.now();
 FAMILIES.forEach((family, fi) => {
-  for (let n = 1; n <= perFamily; n++) {
+  for (let n = first; n < first + perFamily; n++) {
     const t0 = Date.now();
     // A fixed, distinct stream per (family, number): adding stores never changes existing ones.
     const s = buildScenario(family, 7919 * (fi + 1) + 104729 * n);
@@ -25,11 +41,17 @@ FAMILIES.forEach((family, fi) => {
     writeFileSync(join(outDir, `${name}.json`), input + "\n");
     writeFileSync(join(outDir, `${name}.truth.json`), JSON.stringify(s.truth, null, 1) + "\n");
     bytes += input.length;
+    if (s.notes.samplesInSolid > 0) faulty.push(name);
     console.log(
       `${name}: ${s.input.plan.width} x ${s.input.plan.height} m, ${s.notes.cells} cells of ${s.notes.cellSize} m, ` +
         `${s.input.readings.length} readings, solver iterations ${s.notes.solveIterations.join("/") || "-"}, ` +
-        `peak ${s.notes.peakPpm.join("/") || "-"} ppm, ${((Date.now() - t0) / 1000).toFixed(1)} s`,
+        `peak ${s.notes.peakPpm.join("/") || "-"} ppm, ${s.notes.samplesInSolid ? `${s.notes.samplesInSolid} probe samples on solid cells, ` : ""}${((Date.now() - t0) / 1000).toFixed(1)} s`,
     );
   }
 });
 console.log(`${FAMILIES.length * perFamily} stores, ${(bytes / 1e6).toFixed(2)} MB, ${((Date.now() - started) / 1000).toFixed(0)} s`);
+if (faulty.length) {
+  // The probe was routed onto a solid body: a layout or routing fault, not a valid benchmark store.
+  console.error(`generate: probe on solid cells in ${faulty.join(", ")}`);
+  process.exit(1);
+}

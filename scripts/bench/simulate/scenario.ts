@@ -30,7 +30,7 @@ export interface Scenario {
   };
   truth: { family: Family; leaks: TrueLeak[]; benignZoneActive: boolean };
   /** Simulation facts for the log, not part of either file. */
-  notes: { cells: number; cellSize: number; solveIterations: number[]; peakPpm: number[] };
+  notes: { cells: number; cellSize: number; solveIterations: number[]; peakPpm: number[]; samplesInSolid: number };
 }
 
 const polygon = (r: Rect) => [[r.x0, r.y0], [r.x1, r.y0], [r.x1, r.y1], [r.x0, r.y1]];
@@ -138,12 +138,16 @@ export function buildScenario(family: Family, key: number): Scenario {
     random,
   );
   const speed = random.uniform(0.7, 1.2);
+  let samplesInSolid = 0; // probe positions on a solid cell: should stay zero (a routing fault otherwise)
   const tech = new Technician(
     {
       speed, stopSpacing: [1.2, 1.5], dwellS: [1, 4], recheckSpacing: [0.55, 0.65], recheckDwellS: [2, 4],
       recheckSpeedFactor: 0.6, tapJitter: 0.3 / Math.SQRT2, alarmPpm: instrument.alarmPpm,
     },
-    sensor, dt, (x, y) => sampleField(grid, total, x, y), random.uniform(0, 0.6), random,
+    sensor, dt, (x, y) => {
+      if (grid.solid[cellOf(grid, x, y)]) samplesInSolid++;
+      return sampleField(grid, total, x, y);
+    }, random.uniform(0, 0.6), random,
     layout, layout.legs[0].points[0], 15,
   );
   const map = buildWalkMap(grid, caseMask);
@@ -162,6 +166,6 @@ export function buildScenario(family: Family, key: number): Scenario {
       readings: tech.readings,
     },
     truth: { family, leaks, benignZoneActive: zoneActive },
-    notes: { cells: grid.nx * grid.ny, cellSize: grid.h, solveIterations: iterations, peakPpm: peaks },
+    notes: { cells: grid.nx * grid.ny, cellSize: grid.h, solveIterations: iterations, peakPpm: peaks, samplesInSolid },
   };
 }

@@ -9,7 +9,7 @@ const quiet: SensorSettings = {
 
 describe("instrument model", () => {
   it("a first-order step response reaches 63.2% at one time constant after the delay", () => {
-    // 1 - e^-1 = 0.632 for a first-order system (Doebelin, Measurement Systems, 5th ed., §3.3).
+    // 1 - e^-1 = 0.632 for a first-order system (Doebelin, Measurement Systems, first-order instruments).
     const sensor = new Sensor(quiet, createRandom(1));
     let out = 0;
     const steps = Math.round((quiet.transportDelayS + quiet.timeConstantS) / quiet.dt);

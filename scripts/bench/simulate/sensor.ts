@@ -1,5 +1,5 @@
 // The instrument between the air and the display: a hose whose transport delay shifts the signal,
-// a sensing cell with a first-order response (dy/dt = (s - y)/tau, Doebelin, Measurement Systems, ch. 3),
+// a sensing cell with a first-order response (dy/dt = (s - y)/tau, Doebelin, Measurement Systems, first-order instruments),
 // turbulent fluctuation of the sampled air as a log-normal multiplier that is partly correlated over
 // seconds (two Ornstein–Uhlenbeck processes, Gillespie 1996 exact update), and display noise plus
 // whole-ppm rounding. It runs sample by sample so the walking technician can react to alarms.

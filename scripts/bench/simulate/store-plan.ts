@@ -94,7 +94,10 @@ function backRoom(b: Builder, width: number, depth: number): { zone: ZoneSpec; d
   }
   const walkinEnd = x;
   // Machine room in the corner: valves, a line-set header, fans (ventilation) always running.
-  const mw = r.uniform(4, 6), md = r.uniform(4, Math.max(4, depth - WALL - 1.6));
+  // The corridor runs between the walk-ins and the partition; the machine room must end above it.
+  const corridorY = (top + maxDepth + depth) / 2 + 0.2;
+  const mdMax = corridorY - 0.8 - top;
+  const mw = r.uniform(4, 6), md = r.uniform(Math.min(4, mdMax), mdMax);
   const mx = width - WALL - mw;
   const mDoor = mx + r.uniform(0.5, 1.2);
   const machineAir = b.room({ x0: mx, y0: top, x1: width - WALL, y1: top + md }, mDoor, 1.0, { top: false, right: false });
@@ -120,7 +123,6 @@ function backRoom(b: Builder, width: number, depth: number): { zone: ZoneSpec; d
   }
   b.solid("wall", { x0: px, y0: depth, x1: width - WALL, y1: depth + 0.25 });
   // Back-room sweep: machine room, then the corridor past the storage, then each walk-in.
-  const corridorY = (top + maxDepth + depth) / 2 + 0.2;
   b.legs.push({ points: roomLoop(machineAir, 0.6, mDoor), label: "machine room" });
   b.legs.push({ points: [[mDoor + 0.5, corridorY], [WALL + 1.0, corridorY]], label: "back-room corridor" });
   for (const w of walkins) b.legs.push({ points: roomLoop(w.air, 0.5, w.doorX), label: "walk-in" });

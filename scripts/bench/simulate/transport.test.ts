@@ -30,7 +30,7 @@ describe("steady transport against closed forms", () => {
   });
 
   it("a point source in open air approaches the screened 2-D solution Q/(2 pi K) K0(r/L)", () => {
-    // Free-space Green's function of K lap C - lambda C = -Q delta (A&S 9.8; e.g. Carslaw & Jaeger 1959 §10.4).
+    // Free-space Green's function of K lap C - lambda C = -Q delta (K0 per A&S 9.6/9.8; the 2-D screened-diffusion kernel, Carslaw & Jaeger, Conduction of Heat in Solids, 1959).
     const grid = createGrid(24, 24, 0.12);
     const K = 0.05, lambda = 0.005, Q = 1;
     const L = Math.sqrt(K / lambda);
@@ -62,7 +62,7 @@ describe("steady transport against closed forms", () => {
   });
 
   it("at steady state the source equals the removal, with drift and solid bodies (mass balance)", () => {
-    // Conservation of the finite-volume scheme (Patankar 1980, §5.2): sum S = sum (lambda + extraction) C.
+    // Conservation of the finite-volume scheme (Patankar, Numerical Heat Transfer and Fluid Flow, 1980, ch. 5): sum S = sum (lambda + extraction) C.
     const grid = createGrid(12, 8, 0.2);
     fillRect(grid, grid.solid, { x0: 4, y0: 1, x1: 5, y1: 6 }, 1);
     fillRect(grid, grid.solid, { x0: 8, y0: 2, x1: 8.2, y1: 8 }, 1);
@@ -83,7 +83,7 @@ describe("steady transport against closed forms", () => {
   });
 
   it("the drift has no velocity through solid faces and no divergence away from terminals", () => {
-    // Discrete potential flow with Neumann walls (e.g. Ferziger & Peric, Computational Methods for Fluid Dynamics, §7).
+    // Discrete potential flow with Neumann walls (Ferziger & Peric, Computational Methods for Fluid Dynamics: discrete continuity).
     const grid = createGrid(10, 6, 0.2);
     fillRect(grid, grid.solid, { x0: 3, y0: 0, x1: 3.2, y1: 4 }, 1);
     const q = terminalFlows(grid, [
@@ -107,7 +107,7 @@ describe("steady transport against closed forms", () => {
   });
 
   it("no gas passes a wall without a gap, and some passes through a door gap", () => {
-    // No-flux boundary: the far side of a closed partition stays exactly clean (Patankar 1980, §4.2-5).
+    // No-flux boundary: the far side of a closed partition stays exactly clean (Patankar 1980: zero conductance at a solid face).
     const closed = createGrid(8, 4, 0.2);
     fillRect(closed, closed.solid, { x0: 4, y0: 0, x1: 4.2, y1: 4 }, 1);
     const open = createGrid(8, 4, 0.2);
@@ -120,5 +120,28 @@ describe("steady transport against closed forms", () => {
     };
     expect(far(closed)).toBe(0);
     expect(far(open)).toBeGreaterThan(1e-3);
+  });
+
+  it("along a ventilated channel a line source decays as the steady advection-dispersion-decay solution", () => {
+    // c ~ exp(U x (1 -/+ a) / (2E)), a = sqrt(1 + 4 k E / U^2): the steady estuary with first-order decay
+    // (Chapra, Surface Water-Quality Modeling, 1997, distributed systems at steady state).
+    const grid = createGrid(30, 0.5, 0.05);
+    const q = terminalFlows(grid, [
+      { x: 0.3, y: 0.25, radius: 0.3, sign: 1 },
+      { x: 29.7, y: 0.25, radius: 0.3, sign: -1 },
+    ]);
+    const drift = potentialDrift(grid, q, 0.05, 1e-10);
+    const K = 0.02, k = 0.02;
+    const op = buildOperator(grid, uniform(grid, K), k, drift);
+    const src = new Float64Array(grid.nx * grid.ny);
+    const at = (x: number) => Math.round(x / grid.h);
+    for (let j = 0; j < grid.ny; j++) src[j * grid.nx + at(12)] = 1;
+    const { field } = solveSteady(op, src, 1e-11);
+    const U = drift.u[5 * (grid.nx + 1) + at(12)];
+    const a = Math.sqrt(1 + (4 * k * K) / (U * U));
+    const down = (U * (a - 1)) / (2 * K), up = (U * (a + 1)) / (2 * K);
+    const c = (x: number) => field[5 * grid.nx + at(x)];
+    expect(Math.log(c(13) / c(17)) / 4).toBeCloseTo(down, 2);
+    expect(Math.abs(Math.log(c(11.8) / c(11.2)) / 0.6 / up - 1)).toBeLessThan(0.05);
   });
 });

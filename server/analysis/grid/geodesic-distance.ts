@@ -24,7 +24,12 @@ export class GeodesicSearch {
   /** Per cell, a bit per allowed move (in bounds, into a free cell, not cutting a solid corner). */
   private readonly moves: Uint8Array;
 
-  constructor(readonly grid: PlanGrid) {
+  /**
+   * `stepScale` (optional, per cell) shortens or stretches steps through a cell: an edge costs its length
+   * times the mean scale of its two cells. Used for fixtures whose fans mix the air, where the screening
+   * length √(K/λ) is longer, which is the same as distances being shorter.
+   */
+  constructor(readonly grid: PlanGrid, readonly stepScale: Float32Array | null = null) {
     const n = grid.width * grid.height;
     this.dist = new Float64Array(n).fill(Infinity);
     this.parent = new Int32Array(n).fill(-1);
@@ -82,6 +87,7 @@ export class GeodesicSearch {
 
   private run(maxDistance: number, target: number): number {
     const { heap, dist, parent, offsets, steps, moves } = this;
+    const scale = this.stepScale;
     while (heap.size > 0) {
       const key = heap.peekKey();
       const u = heap.pop();
@@ -94,7 +100,7 @@ export class GeodesicSearch {
       for (let m = 0; m < 8; m++) {
         if (!(mask & (1 << m))) continue;
         const v = u + offsets[m];
-        const nd = key + steps[m];
+        const nd = scale ? key + steps[m] * 0.5 * (scale[u] + scale[v]) : key + steps[m];
         if (nd < dist[v]) {
           if (dist[v] === Infinity) this.markDirty(v);
           dist[v] = nd;

@@ -34,6 +34,7 @@ export function accumulateReadingFields(
   weights: Float64Array,
   kernel: SourceKernel,
   mapSigmaM: number,
+  stepScale: Float32Array | null = null,
 ): ReadingFields {
   const n = xs.length;
   const cells = grid.width * grid.height;
@@ -77,7 +78,7 @@ export function accumulateReadingFields(
   let kernArr = new Float32Array(cap);
   let used = 0;
 
-  const search = new GeodesicSearch(grid);
+  const search = new GeodesicSearch(grid, stepScale);
   const mapCut = 3 * mapSigmaM;
   const inv2s2 = 1 / (2 * mapSigmaM * mapSigmaM);
   for (let g = 0; g < groups; g++) {

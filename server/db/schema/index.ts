@@ -6,5 +6,7 @@ export * from "./detectors";
 export * from "./systems";
 export * from "./plans";
 export * from "./sweeps";
+export * from "./analyses";
 export * from "./findings";
 export * from "./compliance";
+export * from "./reports";

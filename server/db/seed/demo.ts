@@ -4,6 +4,7 @@ import type { AppContext } from "../../context";
 import { companies, memberships, membershipStores, stores, users } from "../schema/index";
 import type { Role } from "../../domain/roles";
 import { seedDemoLayout } from "./demo-store-map";
+import { seedDemoSweeps } from "./demo-sweeps";
 import { seedDemoCompliance } from "./demo-compliance";
 
 // An invented grocery chain and its people. Everything here is demo data.
@@ -46,6 +47,7 @@ export async function seedDemoIfEmpty(ctx: AppContext): Promise<boolean> {
     }
     await seedDemoLayout(ctx, tx, { companyId: company.id, storeId: store.id, createdById: leadTechId });
     await seedDemoCompliance(tx, { companyId: company.id, storeId: store.id, timeZone: store.timeZone, people });
+    await seedDemoSweeps(tx, { companyId: company.id, storeId: store.id, technicianId: people.technician, engineerId: people.engineer, now: new Date() }, store.timeZone);
     return true;
   });
 }

@@ -4,7 +4,16 @@ import { renderApp } from "../../../tests/helpers/render-client";
 import { sessionFor, signedOutSession } from "../../../tests/helpers/session-fixtures";
 import { apiError, stubFetch } from "../../../tests/helpers/stub-fetch";
 
-const store = (id: string, name: string, archivedAt: string | null = null) => ({ id, name, address: "14 Maple Street, Brookfield", timeZone: "America/Chicago", archivedAt });
+// The server's store shape (server/contracts/stores.ts).
+const store = (id: string, name: string, archivedAt: string | null = null) => ({
+  id,
+  name,
+  address: "14 Maple Street, Brookfield",
+  timeZone: "America/Chicago",
+  archivedAt,
+  createdAt: "2026-01-05T15:00:00.000Z",
+  updatedAt: "2026-01-05T15:00:00.000Z",
+});
 
 describe("stores page", () => {
   it("lists the company's stores with their address and leaves out archived ones", async () => {
@@ -41,8 +50,9 @@ describe("stores page", () => {
         return apiError(401, "not_signed_in", "Please sign in.");
       },
     });
-    const { router } = renderApp("/?view=all");
+    // Owners land on Today at "/": their store list lives at /stores.
+    const { router } = renderApp("/stores?view=all");
     expect(await screen.findByRole("heading", { name: "Sign in" })).toBeTruthy();
-    expect(router.state.location.search).toBe(`?next=${encodeURIComponent("/?view=all")}`);
+    expect(router.state.location.search).toBe(`?next=${encodeURIComponent("/stores?view=all")}`);
   });
 });

@@ -1,23 +1,43 @@
-import { isStoreScoped } from "../../../server/domain/roles";
+import { useState } from "react";
+import { Navigate, useLocation, useNavigate } from "react-router";
+import { can, isStoreScoped, type Role } from "../../../server/domain/roles";
+import { Button } from "../../components/ui/button";
 import { PageHeader } from "../../components/ui/page-header";
-import { QueryError } from "../../components/ui/query-error";
-import { Spinner } from "../../components/ui/spinner";
-import { useStores } from "../../features/stores/api/get-stores";
-import { StoreList } from "../../features/stores/components/store-list";
+import { StoreForm } from "../../features/stores/components/store-form";
+import { StoreTable } from "../../features/stores/components/store-table";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
 
+// Owners, engineers and lead techs answer for the books: they land on Today.
+const LANDS_ON_TODAY: readonly Role[] = ["owner", "engineer", "lead-tech"];
+
 export function Component() {
+  const { pathname } = useLocation();
+  const { membership } = useSignedIn();
+  if (pathname === "/" && LANDS_ON_TODAY.includes(membership.role)) return <Navigate to="/today" replace />;
+  return <Stores />;
+}
+
+function Stores() {
   useDocumentTitle("Stores");
   const { membership } = useSignedIn();
-  const stores = useStores();
+  const navigate = useNavigate();
+  const [creating, setCreating] = useState(false);
   const scoped = isStoreScoped(membership.role);
+  const canEdit = can(membership.role, "stores.edit");
   return (
     <>
-      <PageHeader title="Stores" description={scoped ? "The stores shared with you." : `The stores of ${membership.companyName}.`} />
-      {stores.isPending ? <Spinner label="Loading stores…" /> : null}
-      {stores.isError ? <QueryError error={stores.error} what="the stores" onRetry={() => void stores.refetch()} /> : null}
-      {stores.data ? <StoreList stores={stores.data} scoped={scoped} /> : null}
+      <PageHeader
+        title="Stores"
+        description={scoped ? "The stores shared with you." : `The stores of ${membership.companyName}.`}
+        actions={canEdit && !creating ? <Button onClick={() => setCreating(true)}>New store</Button> : null}
+      />
+      {creating ? (
+        <div className="mb-6 max-w-xl">
+          <StoreForm onDone={(s) => navigate(`/stores/${s.id}`)} onCancel={() => setCreating(false)} />
+        </div>
+      ) : null}
+      <StoreTable scoped={scoped} />
     </>
   );
 }

@@ -4,7 +4,7 @@ import { renderApp } from "../../../tests/helpers/render-client";
 import { sessionFor } from "../../../tests/helpers/session-fixtures";
 import { stubFetch } from "../../../tests/helpers/stub-fetch";
 
-const STORE = { id: "1d2c3b4a-5e6f-4a7b-8c9d-0e1f2a3b4c5d", name: "Maple Street Market", address: "14 Maple Street", timeZone: "America/Chicago", archivedAt: null };
+const STORE = { id: "1d2c3b4a-5e6f-4a7b-8c9d-0e1f2a3b4c5d", name: "Maple Street Market", address: "14 Maple Street", timeZone: "America/Chicago", archivedAt: null, createdAt: "2026-01-05T15:00:00.000Z", updatedAt: "2026-01-05T15:00:00.000Z" };
 const TEAM = {
   members: [
     {

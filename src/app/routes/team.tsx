@@ -18,7 +18,7 @@ export function Component() {
   const canManage = can(membership.role, "members.manage");
   const team = useTeam({ enabled: allowed });
   // Store names for the store contacts' column and the store picker: the stores feature meets team here.
-  const stores = useStores({ enabled: allowed });
+  const stores = useStores({}, { enabled: allowed });
 
   if (!allowed) return <NotFound />;
   return (

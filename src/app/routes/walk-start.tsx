@@ -15,7 +15,7 @@ export function Component() {
   const { storeId } = useParams();
   const navigate = useNavigate();
   const { membership } = useSignedIn();
-  const stores = useStores({ enabled: !storeId });
+  const stores = useStores({}, { enabled: !storeId });
   if (!can(membership.role, "sweeps.record")) return <NotFound />;
   if (!storeId) {
     return (

@@ -14,12 +14,12 @@ async function navLabels() {
 
 // Expected menus follow the role table in PRODUCT.md and the grants in server/domain/roles.ts.
 const cases: { role: Role; outboxEnabled: boolean; expected: string[] }[] = [
-  { role: "owner", outboxEnabled: true, expected: ["Stores", "Walk", "Detectors", "Team", "Company settings", "Outbox"] },
-  { role: "owner", outboxEnabled: false, expected: ["Stores", "Walk", "Detectors", "Team", "Company settings"] },
-  { role: "engineer", outboxEnabled: true, expected: ["Stores", "Team", "Company settings", "Outbox"] },
-  { role: "lead-tech", outboxEnabled: true, expected: ["Stores", "Walk", "Detectors", "Team", "Company settings"] },
-  { role: "technician", outboxEnabled: true, expected: ["Stores", "Walk", "Detectors", "Team", "Company settings"] },
-  { role: "store-contact", outboxEnabled: true, expected: ["Stores", "Company settings"] },
+  { role: "owner", outboxEnabled: true, expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings", "Outbox"] },
+  { role: "owner", outboxEnabled: false, expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"] },
+  { role: "engineer", outboxEnabled: true, expected: ["Today", "Stores", "Team", "Company settings", "Outbox"] },
+  { role: "lead-tech", outboxEnabled: true, expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"] },
+  { role: "technician", outboxEnabled: true, expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"] },
+  { role: "store-contact", outboxEnabled: true, expected: ["Today", "Stores", "Company settings"] },
 ];
 
 describe("navigation by role", () => {
@@ -38,7 +38,7 @@ describe("navigation by role", () => {
       "GET /api/stores": { body: { stores: [] } },
       "POST /api/auth/switch-company": { body: { ...sessionFor("owner", { twoCompanies: true, csrfToken: "csrf-b" }), activeCompanyId: COMPANY_B } },
     });
-    renderApp("/");
+    renderApp("/stores");
     const switcher = await screen.findByLabelText("Company");
     fireEvent.change(switcher, { target: { value: COMPANY_B } });
     await waitFor(() => expect(calls.some((c) => c.method === "POST" && c.path === "/api/auth/switch-company")).toBe(true));

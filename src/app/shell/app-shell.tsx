@@ -46,7 +46,8 @@ export function AppShell() {
           <AppNav items={navItems(membership.role, session)} />
         </div>
       </header>
-      <main id="main" ref={main} tabIndex={-1} className="mx-auto max-w-6xl px-4 py-6 outline-none">
+      {/* The layout editor uses the whole width of the screen; every other page keeps a readable measure. */}
+      <main id="main" ref={main} tabIndex={-1} className={`mx-auto px-4 py-6 outline-none ${pathname.endsWith("/layout") ? "max-w-none" : "max-w-6xl"}`}>
         <Outlet />
       </main>
     </div>

@@ -11,7 +11,8 @@ export interface NavItem {
  * enforces every permission on its own (server/domain/roles.ts is shared by both sides).
  */
 export function navItems(role: Role, session: Pick<SessionInfo, "outboxEnabled">): NavItem[] {
-  const items: NavItem[] = [{ to: "/", label: "Stores" }];
+  // Today first: the landing page for the people who answer for the books (see routes/home.tsx).
+  const items: NavItem[] = [{ to: "/today", label: "Today" }, { to: "/stores", label: "Stores" }];
   if (can(role, "sweeps.record")) items.push({ to: "/walk", label: "Walk" });
   if (can(role, "sweeps.record") || can(role, "detectors.manage")) items.push({ to: "/detectors", label: "Detectors" });
   if (can(role, "members.read")) items.push({ to: "/team", label: "Team" });

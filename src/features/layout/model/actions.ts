@@ -7,6 +7,8 @@
  */
 import type { Bounds, Vec } from "../../../../server/analysis/geometry/types";
 import { LABEL_MAX, type Fixture, type RoomDoor, type Vertex } from "../../../../server/contracts/fixtures";
+import type { FixtureKind } from "../../../../server/contracts/fixture-kinds";
+import { canChangeKind, changeKind } from "./change-kind";
 import { arrayCopies, copyFixture } from "./copies";
 import { fitDoor, fixtureCentroid, relocateDoor, resizeFixture, rotateFixture, translateFixture, unionBounds } from "./fixture-geometry";
 import type { Scene } from "./scene";
@@ -34,6 +36,7 @@ export type SceneAction =
   | { type: "delete"; ids: readonly string[] }
   | { type: "set-properties"; ids: readonly string[]; props: FixtureProps }
   | { type: "label"; id: string; label: string }
+  | { type: "set-kind"; ids: readonly string[]; kind: FixtureKind }
   | { type: "select"; ids: readonly string[]; mode: SelectMode };
 
 function finite(name: string, ...values: number[]): void {
@@ -100,6 +103,9 @@ export function label(id: string, text: string): SceneAction {
   if (text.length > LABEL_MAX) throw new RangeError(`label must be at most ${LABEL_MAX} characters`);
   return { type: "label", id, label: text };
 }
+
+/** Changes the kind of the named fixtures that can take it (outlines to outline kinds, points to point kinds). */
+export const setKind = (ids: readonly string[], kind: FixtureKind): SceneAction => ({ type: "set-kind", ids, kind });
 
 export const select = (ids: readonly string[], mode: SelectMode = "replace"): SceneAction => ({ type: "select", ids, mode });
 
@@ -207,6 +213,10 @@ export function applyAction(scene: Scene, action: SceneAction): Scene {
     case "label": {
       const f = scene.fixtures[action.id];
       return !f || f.label === action.label ? scene : replaceFixtures(scene, [{ ...f, label: action.label }]);
+    }
+    case "set-kind": {
+      const changed = existing(scene, action.ids).filter((f) => f.kind !== action.kind && canChangeKind(f, action.kind));
+      return replaceFixtures(scene, changed.map((f) => changeKind(f, action.kind)));
     }
     case "select":
       return select_(scene, action.ids, action.mode);

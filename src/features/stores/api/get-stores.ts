@@ -1,33 +1,34 @@
-import { queryOptions, useQuery } from "@tanstack/react-query";
-import { z } from "zod";
+import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
+import { storeListResponse, type Store } from "../../../../server/contracts/stores";
 import { api } from "../../../lib/api-client";
-import { storesKeys } from "./stores-keys";
+import { storesKeys, type StoreListFilter } from "./stores-keys";
 
-// server/contracts has no stores schema yet; this mirrors the foundation API note
-// (GET /api/stores) until the stores work adds one to share.
-export const storeSummary = z.object({
-  id: z.uuid(),
-  name: z.string(),
-  address: z.string(),
-  timeZone: z.string(),
-  archivedAt: z.string().nullable(),
-});
-export type StoreSummary = z.infer<typeof storeSummary>;
+export type StoreSummary = Store;
 
-const storesResponse = z.object({ stores: z.array(storeSummary) });
+function queryString(filter: StoreListFilter): string {
+  const params = new URLSearchParams();
+  if (filter.search) params.set("search", filter.search);
+  if (filter.sort) params.set("sort", filter.sort);
+  if (filter.order) params.set("order", filter.order);
+  if (filter.includeArchived) params.set("includeArchived", "true");
+  const q = params.toString();
+  return q ? `?${q}` : "";
+}
 
-export async function getStores(signal?: AbortSignal): Promise<StoreSummary[]> {
-  const { stores } = await api.get("/api/stores", storesResponse, signal);
+export async function getStores(filter: StoreListFilter = {}, signal?: AbortSignal): Promise<Store[]> {
+  const { stores } = await api.get(`/api/stores${queryString(filter)}`, storeListResponse, signal);
   return stores;
 }
 
-export function storesQueryOptions() {
+export function storesQueryOptions(filter: StoreListFilter = {}) {
   return queryOptions({
-    queryKey: storesKeys.list(),
-    queryFn: ({ signal }) => getStores(signal),
+    queryKey: storesKeys.list(filter),
+    queryFn: ({ signal }) => getStores(filter, signal),
+    // Typing in the search box keeps the last rows on screen instead of flashing a spinner.
+    placeholderData: keepPreviousData,
   });
 }
 
-export function useStores(options: { enabled?: boolean } = {}) {
-  return useQuery({ ...storesQueryOptions(), enabled: options.enabled ?? true });
+export function useStores(filter: StoreListFilter = {}, options: { enabled?: boolean } = {}) {
+  return useQuery({ ...storesQueryOptions(filter), enabled: options.enabled ?? true });
 }

@@ -1,6 +1,6 @@
-export interface StoreListFilter {
-  includeArchived?: boolean;
-}
+import type { StoreListQuery } from "../../../../server/contracts/stores";
+
+export type StoreListFilter = Partial<Pick<StoreListQuery, "search" | "sort" | "order" | "includeArchived">>;
 
 export const storesKeys = {
   all: ["stores"] as const,

@@ -1,0 +1,51 @@
+import type { LocatorInput } from "../../contracts/locator-input";
+import { GeodesicSearch } from "../grid/geodesic-distance";
+import { cellsInside, nearestFreeCell, type PlanGrid } from "../grid/plan-grid";
+
+// Per-cell layers the locator derives from the drawn plan.
+
+/**
+ * Cells where refrigerant can escape: inside a fixture (cases, walk-ins, machine rooms hold the coils,
+ * valves and piping) or near a drawn risk point, each grown by `margin` for drawing error. Null when
+ * the plan draws no equipment at all, so nothing is excluded.
+ */
+export function equipmentMask(grid: PlanGrid, plan: LocatorInput["plan"], margin: number): Uint8Array | null {
+  if (plan.fixtures.length === 0 && plan.riskPoints.length === 0) return null;
+  const mask = new Uint8Array(grid.width * grid.height);
+  const search = new GeodesicSearch(grid);
+  const seeds: number[] = [];
+  for (const f of plan.fixtures) for (const k of cellsInside(grid, f.polygon)) seeds.push(k);
+  for (const p of plan.riskPoints) {
+    const k = nearestFreeCell(grid, p.x, p.y);
+    if (k >= 0) seeds.push(k);
+  }
+  const settled = search.fromCells(seeds, margin);
+  for (let q = 0; q < settled; q++) mask[search.settled[q]] = 1;
+  for (const p of plan.riskPoints) {
+    const settledRp = search.fromPoint(p.x, p.y, 1);
+    for (let q = 0; q < settledRp; q++) mask[search.settled[q]] = 1;
+  }
+  return mask;
+}
+
+/** Step scale per cell: `scale` inside walk-ins and machine rooms whose fans run, 1 elsewhere; null when none. */
+export function fanStepScale(grid: PlanGrid, plan: LocatorInput["plan"], scale: number): Float32Array | null {
+  // Only closed rooms: a walk-in's or machine room's fans stir the whole room, while a case's fans drive
+  // an air curtain along the case, so gas still travels along it.
+  const withFans = plan.fixtures.filter((f) => f.fans && (f.kind === "walk-in" || f.kind === "machine-room"));
+  if (withFans.length === 0) return null;
+  const out = new Float32Array(grid.width * grid.height).fill(1);
+  for (const f of withFans) for (const k of cellsInside(grid, f.polygon)) out[k] = scale;
+  return out;
+}
+
+/** Log prior odds per cell: `logOdds` within 0.5 m of a line-set drop, valve or coil, where joints leak most. */
+export function riskPointPrior(grid: PlanGrid, plan: LocatorInput["plan"], logOdds: number): Float64Array {
+  const prior = new Float64Array(grid.width * grid.height);
+  const search = new GeodesicSearch(grid);
+  for (const p of plan.riskPoints) {
+    const settled = search.fromPoint(p.x, p.y, 0.5);
+    for (let q = 0; q < settled; q++) prior[search.settled[q]] = logOdds;
+  }
+  return prior;
+}

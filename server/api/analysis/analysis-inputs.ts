@@ -1,0 +1,50 @@
+import { asc, eq } from "drizzle-orm";
+import type { AppContext } from "../../context";
+import type { AnalysisParams } from "../../contracts/analysis";
+import { detectors, fixtures, plans, readings, sweeps } from "../../db/schema/index";
+import { toLocatorPlan } from "../../domain/layout/to-locator-input";
+import type { SweepReadingRow } from "../../domain/fieldmap/sweep-locator-input";
+import { badRequest, notFound } from "../../lib/http-error";
+import { planBounds, rowToFixture } from "../plans/plan-rows";
+import type { SweepRow } from "../sweeps/sweep-access";
+
+export interface AnalysisInputs {
+  sweep: SweepRow;
+  readings: SweepReadingRow[];
+  plan: ReturnType<typeof toLocatorPlan>;
+  detectorName: string;
+  /** Fixture id → the name drawn on the plan, for the locator's sentences. */
+  labels: Map<string, string>;
+}
+
+/** Canonical text of a parameter set: the cache key beside the sweep id. */
+export function paramsKey(p: AnalysisParams): string {
+  return `delay=${p.transportDelayS};tau=${p.timeConstantS};alarm=${p.alarmPpm};cell=${p.cellSize}`;
+}
+
+/**
+ * The sweep's revision, its readings and its plan read in one repeatable-read transaction, so the
+ * revision stored with the result is the one the readings belong to.
+ */
+export async function loadAnalysisInputs(ctx: AppContext, sweepId: string): Promise<AnalysisInputs> {
+  return ctx.db.transaction(
+    async (tx) => {
+      const [sweep] = await tx.select().from(sweeps).where(eq(sweeps.id, sweepId));
+      if (!sweep) throw notFound("That sweep");
+      const rows = await tx
+        .select({ id: readings.id, x: readings.x, y: readings.y, takenAt: readings.takenAt, ppm: readings.ppm, atLeast: readings.atLeast, samplePoint: readings.samplePoint, note: readings.note })
+        .from(readings)
+        .where(eq(readings.sweepId, sweepId))
+        .orderBy(asc(readings.takenAt), asc(readings.id));
+      const [planRow] = await tx.select().from(plans).where(eq(plans.id, sweep.planId));
+      const bounds = planRow ? planBounds(planRow) : null;
+      if (!bounds) throw badRequest("The sweep's plan has no size in metres yet: calibrate it first.", { planId: "plan is not calibrated" });
+      const fixtureRows = await tx.select().from(fixtures).where(eq(fixtures.planId, sweep.planId)).orderBy(asc(fixtures.position));
+      const [det] = await tx.select({ name: detectors.name }).from(detectors).where(eq(detectors.id, sweep.detectorId));
+      const plan = toLocatorPlan(bounds, fixtureRows.map(rowToFixture), { fansRunning: sweep.fans === "running" });
+      const labels = new Map(fixtureRows.map((f) => [f.id.toLowerCase(), f.label || f.kind.replace(/-/g, " ")]));
+      return { sweep, readings: rows, plan, detectorName: det?.name ?? "The detector", labels };
+    },
+    { isolationLevel: "repeatable read", accessMode: "read only" },
+  );
+}

@@ -1,0 +1,175 @@
+/**
+ * The field map's analysis (issue 5, API part): the locator run off the event loop on a sweep's
+ * readings and plan, cached per sweep and parameter set; a cached result whose readings changed since
+ * is answered as stale while a recompute runs (or awaited with wait=true).
+ */
+import { and, eq } from "drizzle-orm";
+import type { AppContext } from "../../context";
+import type { AnalysisParams, AnalysisQuery, AnalysisResponse, AnalysisSummary } from "../../contracts/analysis";
+import { DEFAULT_CELL_SIZE_M, LocatorInputError, parseLocatorInput } from "../../contracts/locator-input";
+import { analyses } from "../../db/schema/index";
+import { detectorDiagnostics } from "../../domain/fieldmap/detector-diagnostics";
+import { bytesToFloat32, float32ToBytes, quantiseConfidence } from "../../domain/fieldmap/field-codec";
+import { sweepLocatorInput } from "../../domain/fieldmap/sweep-locator-input";
+import { nameFixtures } from "../../domain/fieldmap/name-fixtures";
+import { HttpError } from "../../lib/http-error";
+import { createAnalysisRunner, type AnalysisRunner } from "../../jobs/analysis-runner";
+import { JobError } from "../../jobs/worker-pool";
+import type { Viewer } from "../stores/store-access";
+import { loadVisibleSweep, type SweepRow } from "../sweeps/sweep-access";
+import { loadAnalysisInputs, paramsKey } from "./analysis-inputs";
+
+export type AnalysisRow = typeof analyses.$inferSelect;
+
+const inflight = new Map<string, Promise<AnalysisRow>>();
+
+export function analysisRunner(ctx: AppContext): AnalysisRunner {
+  ctx.analysisRunner ??= createAnalysisRunner();
+  return ctx.analysisRunner;
+}
+
+/** "readings[3].t: t must not be negative" → { "readings[3].t": "t must not be negative" } */
+function problemFields(problems: readonly string[]): Record<string, string> {
+  const fields: Record<string, string> = {};
+  for (const p of problems) {
+    const at = p.indexOf(": ");
+    const key = at > 0 ? p.slice(0, at) : "input";
+    fields[key] = fields[key] ? `${fields[key]}; ${p.slice(at + 2)}` : p.slice(at + 2);
+  }
+  return fields;
+}
+
+function invalid(problems: readonly string[]): HttpError {
+  return new HttpError(400, "validation_failed", `The sweep cannot be analysed: ${problems.join("; ")}`, problemFields(problems));
+}
+
+export function sweepParams(sweep: SweepRow, q: Pick<AnalysisQuery, "transportDelayS" | "timeConstantS">): AnalysisParams {
+  return {
+    transportDelayS: q.transportDelayS ?? sweep.transportDelayS,
+    timeConstantS: q.timeConstantS ?? sweep.timeConstantS,
+    alarmPpm: sweep.alarmPpm,
+    cellSize: DEFAULT_CELL_SIZE_M,
+  };
+}
+
+async function compute(ctx: AppContext, sweepId: string, params: AnalysisParams): Promise<AnalysisRow> {
+  const { sweep, readings, plan, detectorName, labels } = await loadAnalysisInputs(ctx, sweepId);
+  const named = (text: string) => nameFixtures(text, labels);
+  const { input: raw, readingIds } = sweepLocatorInput(plan, sweep.startedAt, readings, params);
+  let input;
+  try {
+    input = parseLocatorInput(raw);
+  } catch (err) {
+    if (err instanceof LocatorInputError) throw invalid(err.problems);
+    throw err;
+  }
+  const started = performance.now();
+  let result;
+  try {
+    result = await analysisRunner(ctx).run({ input, options: { cellSize: params.cellSize } });
+  } catch (err) {
+    if (err instanceof JobError && err.problems) throw invalid(err.problems);
+    throw err;
+  }
+  const durationMs = Math.round(performance.now() - started);
+  const overdue = sweep.warnings.find((w) => w.code === "detector-overdue")?.message ?? null;
+  const summary: AnalysisSummary = {
+    candidates: result.candidates.map((c) => ({ ...c, reason: named(c.reason), nextCheck: named(c.nextCheck) })),
+    background: result.background,
+    diagnostics: [
+      ...detectorDiagnostics({ name: detectorName, transportDelayS: sweep.transportDelayS, timeConstantS: sweep.timeConstantS, alarmPpm: sweep.alarmPpm, overdueMessage: overdue }, params),
+      ...result.diagnostics.map((d) => ({ ...d, message: named(d.message) })),
+    ],
+    assumptions: result.assumptions,
+    readings: result.readings.map((r) => ({ ...r, readingId: readingIds[r.index] })),
+  };
+  const values = {
+    companyId: sweep.companyId,
+    sweepId: sweep.id,
+    paramsKey: paramsKey(params),
+    params,
+    readingsRevision: sweep.readingsRevision,
+    result: summary,
+    fieldWidth: result.field.width,
+    fieldHeight: result.field.height,
+    cellSize: result.field.cellSize,
+    fieldValues: Buffer.from(float32ToBytes(result.field.values)),
+    fieldConfidence: Buffer.from(quantiseConfidence(result.field.confidence)),
+    durationMs,
+    computedAt: new Date(),
+  };
+  const [row] = await ctx.db
+    .insert(analyses)
+    .values(values)
+    .onConflictDoUpdate({ target: [analyses.sweepId, analyses.paramsKey], set: { ...values } })
+    .returning();
+  return row;
+}
+
+/** One computation per sweep, parameter set and readings revision at a time. */
+function computeOnce(ctx: AppContext, sweep: SweepRow, params: AnalysisParams): Promise<AnalysisRow> {
+  const key = `${sweep.id}|${paramsKey(params)}|${sweep.readingsRevision}`;
+  let p = inflight.get(key);
+  if (!p) {
+    p = compute(ctx, sweep.id, params).finally(() => inflight.delete(key));
+    inflight.set(key, p);
+  }
+  return p;
+}
+
+function toResponse(row: AnalysisRow, sweep: SweepRow, recomputing: boolean): AnalysisResponse {
+  return {
+    sweepId: row.sweepId,
+    params: row.params,
+    ...row.result,
+    readingsRevision: row.readingsRevision,
+    currentReadingsRevision: sweep.readingsRevision,
+    stale: row.readingsRevision !== sweep.readingsRevision,
+    recomputing,
+    computedAt: row.computedAt.toISOString(),
+    durationMs: row.durationMs,
+    field: {
+      width: row.fieldWidth,
+      height: row.fieldHeight,
+      cellSize: row.cellSize,
+      values: row.fieldValues.toString("base64"),
+      confidence: row.fieldConfidence.toString("base64"),
+    },
+  };
+}
+
+export async function cachedAnalysis(ctx: AppContext, sweepId: string, params: AnalysisParams): Promise<AnalysisRow | undefined> {
+  const [row] = await ctx.db.select().from(analyses).where(and(eq(analyses.sweepId, sweepId), eq(analyses.paramsKey, paramsKey(params))));
+  return row;
+}
+
+export async function getAnalysis(ctx: AppContext, viewer: Viewer, sweepId: string, q: AnalysisQuery): Promise<AnalysisResponse> {
+  const sweep = await loadVisibleSweep(ctx, viewer, sweepId);
+  const params = sweepParams(sweep, q);
+  const row = await cachedAnalysis(ctx, sweepId, params);
+  if (row && row.readingsRevision === sweep.readingsRevision) return toResponse(row, sweep, false);
+  if (row && q.wait !== "true") {
+    // Show what we have, say it is stale, and recompute in the background; the client asks again.
+    computeOnce(ctx, sweep, params).catch((err) => ctx.logger.warn({ err, sweepId }, "analysis recompute failed"));
+    return toResponse(row, sweep, true);
+  }
+  const fresh = await computeOnce(ctx, sweep, params);
+  return toResponse(fresh, { ...sweep, readingsRevision: Math.max(sweep.readingsRevision, fresh.readingsRevision) }, false);
+}
+
+/** The decoded grid of a stored analysis (for reports and comparisons on the server). */
+export function rowField(row: AnalysisRow) {
+  const conf = new Float32Array(row.fieldConfidence.length);
+  for (let i = 0; i < conf.length; i++) conf[i] = row.fieldConfidence[i] / 255;
+  return { width: row.fieldWidth, height: row.fieldHeight, cellSize: row.cellSize, values: bytesToFloat32(new Uint8Array(row.fieldValues)), confidence: conf };
+}
+
+/** The fresh analysis at the sweep's own settings, computing it when needed (reports, compare). */
+export async function ensureAnalysis(ctx: AppContext, sweep: SweepRow): Promise<AnalysisRow> {
+  const params = sweepParams(sweep, {});
+  const row = await cachedAnalysis(ctx, sweep.id, params);
+  if (row && row.readingsRevision === sweep.readingsRevision) return row;
+  return computeOnce(ctx, sweep, params);
+}
+
+

@@ -1,0 +1,226 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { agentFor, createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
+import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
+import { detectors } from "../../db/schema/index";
+import type { Role } from "../../domain/roles";
+import { decodeField } from "../../domain/fieldmap/field-codec";
+import { analysisRunner } from "./analysis.service";
+
+let t: TestApp;
+let co: Awaited<ReturnType<typeof seedCompany>>;
+let other: Awaited<ReturnType<typeof seedCompany>>;
+let planId: string;
+let diodeId: string;
+let overdueId: string;
+const caseId = crypto.randomUUID();
+const dropId = crypto.randomUUID();
+
+async function as(role: Role, company = co): Promise<Agent> {
+  const a = await agentFor(t.app);
+  await a.post("/api/auth/sign-in", { email: company.people[role].email, password: PASSWORD });
+  return a;
+}
+
+const startedAt = new Date(Date.now() - 30 * 60_000);
+const at = (s: number) => new Date(startedAt.getTime() + s * 1000).toISOString();
+
+/**
+ * Readings made by a model unlike the locator's kernel: exponential decay with straight-line distance
+ * from a leak at (12, 3.0) inside the case, seen by a detector that samples the air one delay plus one
+ * time constant (6.5 s) back along the walk. The walk goes east along the case front, back along the
+ * aisle and east behind the case; a tap every 1.3 m, 1.6 s apart.
+ */
+const LEAK = { x: 12, y: 3 };
+function caseWalk(): Record<string, unknown>[] {
+  const legs: [number, number][] = [[1, 3.9], [22, 3.9], [22, 5.2], [1, 5.2], [1, 1.2], [22, 1.2]];
+  const taps: { x: number; y: number; s: number }[] = [];
+  let s = 10;
+  for (let k = 1; k < legs.length; k++) {
+    const [ax, ay] = legs[k - 1];
+    const [bx, by] = legs[k];
+    const len = Math.hypot(bx - ax, by - ay);
+    for (let d = 0; d < len; d += 1.3) {
+      taps.push({ x: ax + ((bx - ax) * d) / len, y: ay + ((by - ay) * d) / len, s });
+      s += 1.6;
+    }
+  }
+  const conc = (x: number, y: number) => 0.4 + 90 * Math.exp(-Math.hypot(x - LEAK.x, y - LEAK.y) / 1.2);
+  return taps.map((tap) => {
+    const back = tap.s - 6.5;
+    let x = taps[0].x, y = taps[0].y;
+    for (let k = 1; k < taps.length; k++) {
+      if (taps[k].s >= back && taps[k - 1].s <= back) {
+        const f = (back - taps[k - 1].s) / (taps[k].s - taps[k - 1].s);
+        x = taps[k - 1].x + f * (taps[k].x - taps[k - 1].x);
+        y = taps[k - 1].y + f * (taps[k].y - taps[k - 1].y);
+      }
+    }
+    return { id: crypto.randomUUID(), x: tap.x, y: tap.y, takenAt: at(tap.s), ppm: Math.round(conc(x, y)), samplePoint: "grille" };
+  });
+}
+
+async function startSweep(a: Agent, detectorId = diodeId, body: Record<string, unknown> = {}) {
+  const res = await a.post(`/api/stores/${co.store.id}/sweeps`, { id: crypto.randomUUID(), planId, detectorId, fans: "stopped", defrost: false, startedAt: startedAt.toISOString(), ...body });
+  expect(res.status, JSON.stringify(res.body)).toBe(201);
+  return res.body.id as string;
+}
+
+async function sweepWithReadings(readings = caseWalk(), detectorId = diodeId) {
+  const a = await as("technician");
+  const id = await startSweep(a, detectorId);
+  const up = await a.post(`/api/sweeps/${id}/readings`, { readings });
+  expect(up.body.rejected, JSON.stringify(up.body)).toEqual([]);
+  return { id, readings };
+}
+
+beforeAll(async () => {
+  t = await createTestApp();
+  co = await seedCompany(t.ctx, "Larkspur Grocers");
+  other = await seedCompany(t.ctx, "Tamarind Markets");
+  const owner = await as("owner");
+  const plan = await owner.post(`/api/stores/${co.store.id}/plans/blank`, { width: 30, depth: 12, unit: "m" });
+  planId = plan.body.id;
+  const put = await owner.put(`/api/plans/${planId}/fixtures`, {
+    layoutRevision: plan.body.layoutRevision,
+    fixtures: [
+      { id: caseId, kind: "open-case", label: "Dairy 1–4", systemId: null, hasFans: true, polygon: [[1, 2], [22, 2], [22, 3.6], [1, 3.6]] },
+      { id: dropId, kind: "line-set-drop", label: "Drop D2", systemId: null, hasFans: false, point: { x: 12, y: 2.2 } },
+    ],
+  });
+  expect(put.status, JSON.stringify(put.body)).toBe(200);
+  const today = new Date().toISOString().slice(0, 10);
+  const [d] = await t.ctx.db.insert(detectors).values({ companyId: co.company.id, name: "Diode sniffer", principle: "heated-diode", lastCheckedOn: today }).returning();
+  const [o] = await t.ctx.db.insert(detectors).values({ companyId: co.company.id, name: "Old sniffer", principle: "heated-diode", lastCheckedOn: "2020-01-01", alarmPpm: 25 }).returning();
+  diodeId = d.id;
+  overdueId = o.id;
+});
+afterAll(async () => {
+  await t.ctx.analysisRunner?.close();
+  await t.close();
+});
+
+describe("GET /api/sweeps/:id/analysis", () => {
+  it("runs the locator on the sweep's readings and plan and answers suspect spots, corrected readings and the grid", async () => {
+    const { id, readings } = await sweepWithReadings();
+    const res = await (await as("engineer")).get(`/api/sweeps/${id}/analysis`);
+    expect(res.status, JSON.stringify(res.body).slice(0, 500)).toBe(200);
+    const body = res.body;
+    expect(body).toMatchObject({ sweepId: id, stale: false, recomputing: false, readingsRevision: 1, params: { transportDelayS: 5, timeConstantS: 1.5, alarmPpm: 2, cellSize: 0.25 } });
+    // a 30 m × 12 m plan at 0.25 m cells is 120 × 48 cells
+    const field = decodeField(body.field);
+    expect([field.width, field.height]).toEqual([120, 48]);
+    expect(field.values.length).toBe(120 * 48);
+    // every reading comes back with its id, the raw tap and the corrected position side by side
+    expect(body.readings.map((r: { readingId: string }) => r.readingId)).toEqual(readings.map((r) => r.id));
+    const peak = body.readings.reduce((m: { ppm: number }, r: { ppm: number }) => (r.ppm > m.ppm ? r : m));
+    expect(peak.corrected.x).toBeLessThan(peak.raw.x); // moved back along the walk (issue 5, lag correction)
+    expect(body.candidates.length, JSON.stringify({ d: body.diagnostics, r: body.readings.map((r: { ppm: number; corrected: { x: number } }) => [r.ppm, r.corrected.x]) })).toBeGreaterThan(0);
+    expect(body.candidates[0].rank).toBe(1);
+    // the top suspect lies nearer the leak than the highest raw reading does (issue 5's naive answer)
+    const top = body.candidates[0];
+    expect(Math.hypot(top.x - LEAK.x, top.y - LEAK.y)).toBeLessThan(Math.hypot(peak.raw.x - LEAK.x, peak.raw.y - LEAK.y));
+    expect(Math.hypot(top.x - LEAK.x, top.y - LEAK.y)).toBeLessThan(1.5);
+    expect(top.fixtureId).toBe(caseId);
+    // the locator's sentences name fixtures as drawn, never by id
+    const uuid = /[0-9a-f]{8}-[0-9a-f]{4}-/i;
+    for (const c of body.candidates) expect(`${c.reason} ${c.nextCheck}`).not.toMatch(uuid);
+    for (const d of body.diagnostics) expect(d.message).not.toMatch(uuid);
+  });
+
+  it("caches per sweep and parameter set: a second ask returns the stored result; another delay is its own entry", async () => {
+    const { id } = await sweepWithReadings();
+    const a = await as("engineer");
+    const first = await a.get(`/api/sweeps/${id}/analysis`);
+    const again = await a.get(`/api/sweeps/${id}/analysis`);
+    expect(again.body.computedAt).toBe(first.body.computedAt);
+    const slower = await a.get(`/api/sweeps/${id}/analysis?transportDelayS=8`);
+    expect(slower.status).toBe(200);
+    expect(slower.body.params.transportDelayS).toBe(8);
+    expect(slower.body.diagnostics.map((d: { kind: string }) => d.kind)).toContain("delay-changed");
+    const peakIndex = first.body.readings.findIndex((r: { ppm: number }) => r.ppm === Math.max(...first.body.readings.map((x: { ppm: number }) => x.ppm)));
+    // a longer delay moves the sample point further back (issue 5: 1 m/s × 5 s → 5 m back)
+    expect(slower.body.readings[peakIndex].corrected.x).toBeLessThan(first.body.readings[peakIndex].corrected.x);
+    const rows = await t.ctx.pool.query("select params_key from analyses where sweep_id = $1 order by params_key", [id]);
+    expect(rows.rows).toHaveLength(2);
+  });
+
+  it("marks the cached result stale when readings change, recomputes, and answers fresh when asked to wait", async () => {
+    const { id, readings } = await sweepWithReadings();
+    const eng = await as("engineer");
+    const first = await eng.get(`/api/sweeps/${id}/analysis`);
+    expect(first.body.stale).toBe(false);
+    const tech = await as("technician");
+    const edit = await tech.patch(`/api/sweeps/${id}/readings/${readings[2].id}`, { ppm: 40 });
+    expect(edit.status, JSON.stringify(edit.body)).toBe(200);
+    const stale = await eng.get(`/api/sweeps/${id}/analysis`);
+    expect(stale.body).toMatchObject({ stale: true, recomputing: true, readingsRevision: 1, currentReadingsRevision: 2 });
+    const fresh = await eng.get(`/api/sweeps/${id}/analysis?wait=true`);
+    expect(fresh.body).toMatchObject({ stale: false, readingsRevision: 2, currentReadingsRevision: 2 });
+    expect(fresh.body.readings[2].ppm).toBe(40);
+  });
+
+  it("keeps answering other requests while an analysis runs in a worker", async () => {
+    // a large store so the locator runs long enough to overlap: 100 m × 60 m, 500 readings
+    const owner = await as("owner");
+    const big = await owner.post(`/api/stores/${co.store.id}/plans/blank`, { width: 100, depth: 60, unit: "m" });
+    expect(big.status).toBe(201);
+    const tech = await as("technician");
+    const id = await startSweep(tech, diodeId, { planId: big.body.id });
+    const readings = Array.from({ length: 500 }, (_, k) => ({
+      id: crypto.randomUUID(),
+      x: 2 + (k % 50) * 1.9,
+      y: 3 + Math.floor(k / 50) * 5.5,
+      takenAt: at(k * 1.5),
+      ppm: k % 50 === 20 && Math.floor(k / 50) === 4 ? 30 : 0,
+      samplePoint: "grille",
+    }));
+    expect((await tech.post(`/api/sweeps/${id}/readings`, { readings })).body.rejected).toEqual([]);
+    const runner = analysisRunner(t.ctx);
+    let analysisDone = false;
+    const pending = (await as("engineer")).get(`/api/sweeps/${id}/analysis`).then((r) => {
+      analysisDone = true;
+      return r;
+    });
+    while (runner.load === 0 && !analysisDone) await new Promise((r) => setTimeout(r, 5));
+    // the job is in the worker now: the event loop must still answer
+    const health = await (await as("engineer")).get("/api/health");
+    expect(health.status).toBe(200);
+    expect(analysisDone).toBe(false);
+    expect(runner.load).toBeGreaterThan(0);
+    expect((await pending).status).toBe(200);
+    expect(runner.workers).toBeLessThanOrEqual(runner.size);
+  });
+
+  it("adds overdue and mis-set detector diagnostics", async () => {
+    const { id } = await sweepWithReadings(caseWalk(), overdueId);
+    const res = await (await as("engineer")).get(`/api/sweeps/${id}/analysis`);
+    const kinds = res.body.diagnostics.map((d: { kind: string }) => d.kind);
+    expect(kinds).toContain("detector-overdue");
+    expect(kinds).toContain("detector-settings");
+    expect(res.body.diagnostics.find((d: { kind: string }) => d.kind === "detector-settings").message).toMatch(/alarm level of 25 ppm/);
+  });
+
+  it("answers 400 with the locator's field errors for a sweep it cannot analyse, and for a bad delay", async () => {
+    const tech = await as("technician");
+    const empty = await startSweep(tech);
+    const res = await (await as("engineer")).get(`/api/sweeps/${empty}/analysis`);
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields.readings).toMatch(/must not be empty/);
+    const bad = await (await as("engineer")).get(`/api/sweeps/${empty}/analysis?transportDelayS=-2`);
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields.transportDelayS).toMatch(/0 s or more/);
+  });
+
+  it("shows a store contact only their own store's sweeps, and nobody another company's", async () => {
+    const { id } = await sweepWithReadings();
+    expect((await (await as("store-contact")).get(`/api/sweeps/${id}/analysis`)).status).toBe(200);
+    expect((await (await as("engineer", other)).get(`/api/sweeps/${id}/analysis`)).status).toBe(404);
+    // a sweep on the store the contact is not named on
+    const owner = await as("owner");
+    const p2 = await owner.post(`/api/stores/${co.otherStore.id}/plans/blank`, { width: 20, depth: 10, unit: "m" });
+    const tech = await as("technician");
+    const s2 = await tech.post(`/api/stores/${co.otherStore.id}/sweeps`, { id: crypto.randomUUID(), planId: p2.body.id, detectorId: diodeId, fans: "running", defrost: false, startedAt: startedAt.toISOString() });
+    expect(s2.status, JSON.stringify(s2.body)).toBe(201);
+    expect((await (await as("store-contact")).get(`/api/sweeps/${s2.body.id}/analysis`)).status).toBe(404);
+  });
+});

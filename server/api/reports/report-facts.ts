@@ -1,0 +1,156 @@
+/**
+ * Gathers a sweep's report: the fresh analysis at the sweep's own settings, the store, detector,
+ * technician, plan and fixtures, the findings made from the sweep and the readings, all worded in the
+ * reader's length unit and the store's time zone.
+ */
+import { and, asc, eq, inArray } from "drizzle-orm";
+import type { AppContext } from "../../context";
+import { companies, detectors, findings, fixtures, plans, readings, stores, systems, users } from "../../db/schema/index";
+import { SAMPLE_POINT_LABELS } from "../../contracts/sweeps";
+import { COMPONENT_LABELS } from "../../contracts/findings";
+import { createConcentrationScale, niceMaxPpm } from "../../domain/fieldmap/concentration-ramp";
+import type { FieldGridLike } from "../../domain/fieldmap/field-grid";
+import type { CsvReading } from "../../domain/reports/readings-csv";
+import type { SweepReportModel } from "../../domain/reports/sweep-report-model";
+import { findRefrigerant } from "../../domain/refrigerants/catalogue";
+import { cautionsFor, type Caution } from "../../domain/safety/cautions";
+import { formatLength, type LengthPreference } from "../../domain/units/format-units";
+import { HttpError } from "../../lib/http-error";
+import type { Viewer } from "../stores/store-access";
+import { loadVisibleSweep, type SweepRow } from "../sweeps/sweep-access";
+import { ensureAnalysis, rowField, type AnalysisRow } from "../analysis/analysis.service";
+
+export interface ReportFacts {
+  sweep: SweepRow;
+  storeName: string;
+  timeZone: string;
+  model: SweepReportModel;
+  csv: CsvReading[];
+  field: FieldGridLike | null;
+  maxPpm: number;
+  planImage: { displayKey: string | null; widthM: number; heightM: number };
+  outlines: [number, number][][];
+}
+
+export function zonedDateTime(d: Date, timeZone: string): string {
+  return new Intl.DateTimeFormat("en-GB", { timeZone, weekday: "short", day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit", hour12: false, timeZoneName: "short" }).format(d);
+}
+
+function zonedTime(d: Date, timeZone: string): string {
+  return new Intl.DateTimeFormat("en-GB", { timeZone, hour: "2-digit", minute: "2-digit", second: "2-digit", hour12: false }).format(d);
+}
+
+const PRINCIPLES: Record<string, string> = { "heated-diode": "heated diode", infrared: "infrared", other: "other principle" };
+
+export async function loadReportFacts(ctx: AppContext, viewer: Viewer, sweepId: string, unit: LengthPreference): Promise<ReportFacts> {
+  const sweep = await loadVisibleSweep(ctx, viewer, sweepId);
+  let analysis: AnalysisRow | null = null;
+  let analysisProblem: string | null = null;
+  try {
+    analysis = await ensureAnalysis(ctx, sweep);
+  } catch (err) {
+    if (!(err instanceof HttpError)) throw err;
+    analysisProblem = err.message;
+  }
+  const [[store], [company], [det], [tech], [plan]] = await Promise.all([
+    ctx.db.select().from(stores).where(eq(stores.id, sweep.storeId)),
+    ctx.db.select({ name: companies.name }).from(companies).where(eq(companies.id, sweep.companyId)),
+    ctx.db.select().from(detectors).where(eq(detectors.id, sweep.detectorId)),
+    ctx.db.select({ name: users.name }).from(users).where(eq(users.id, sweep.technicianId)),
+    ctx.db.select().from(plans).where(eq(plans.id, sweep.planId)),
+  ]);
+  const tz = store.timeZone;
+  const [fixtureRows, readingRows, findingRows, systemRows] = await Promise.all([
+    ctx.db.select().from(fixtures).where(eq(fixtures.planId, sweep.planId)).orderBy(asc(fixtures.position)),
+    ctx.db.select().from(readings).where(eq(readings.sweepId, sweep.id)).orderBy(asc(readings.takenAt), asc(readings.id)),
+    ctx.db.select().from(findings).where(and(eq(findings.sweepId, sweep.id), eq(findings.companyId, sweep.companyId))).orderBy(asc(findings.foundAt)),
+    sweep.systemIds.length ? ctx.db.select().from(systems).where(inArray(systems.id, sweep.systemIds)) : Promise.resolve([]),
+  ]);
+  const label = new Map(fixtureRows.map((f) => [f.id, f.label || f.kind]));
+  const len = (m: number) => formatLength(m, unit, { decimals: 1 });
+  const pos = (x: number, y: number) => `${len(x)}, ${len(y)}`;
+  const summary = analysis?.result ?? null;
+  const corrected = new Map(summary?.readings.map((r) => [r.readingId, r]) ?? []);
+  const maxPpm = niceMaxPpm(Math.max(0, ...readingRows.map((r) => r.ppm)), sweep.alarmPpm);
+  const scale = createConcentrationScale({ maxPpm, log: true });
+  const t0 = Math.min(sweep.startedAt.getTime(), readingRows[0]?.takenAt.getTime() ?? Infinity);
+
+  const cautions = new Map<string, Caution>();
+  for (const s of systemRows) {
+    const r = findRefrigerant(s.refrigerantId);
+    for (const c of cautionsFor(r ? { refrigerant: r } : {})) cautions.set(c.id, c);
+  }
+  if (cautions.size === 0) for (const c of cautionsFor()) cautions.set(c.id, c);
+
+  const model: SweepReportModel = {
+    title: `Sweep report — ${store.name}`,
+    company: company?.name ?? "",
+    store: { name: store.name, address: store.address, timeZone: tz },
+    sweep: {
+      started: zonedDateTime(sweep.startedAt, tz),
+      submitted: sweep.submittedAt ? zonedDateTime(sweep.submittedAt, tz) : "not yet submitted",
+      status: sweep.status === "reviewed" && sweep.reviewedAt ? `reviewed ${zonedDateTime(sweep.reviewedAt, tz)}` : sweep.status.replace("-", " "),
+      technician: tech?.name ?? "",
+      conditions: `fans ${sweep.fans}${sweep.defrost ? ", in defrost" : ""}`,
+    },
+    detector: {
+      name: det?.name ?? "",
+      principle: PRINCIPLES[det?.principle ?? "other"] ?? "other principle",
+      calibration: det?.lastCheckedOn ? `last checked ${det.lastCheckedOn}` : "no calibration / bump check on record",
+      settings: `transport delay ${sweep.transportDelayS} s, response time constant ${sweep.timeConstantS} s, alarm at ${sweep.alarmPpm} ppm (as at the sweep)`,
+    },
+    background: summary ? `${summary.background.ppm.toFixed(1)} ppm (estimated from the readings)` : "—",
+    suspects: (summary?.candidates ?? []).map((c) => ({
+      rank: c.rank,
+      position: pos(c.x, c.y),
+      radius: len(c.radius),
+      score: c.score,
+      strength: `${c.strength.toFixed(2)} of the strongest${Number.isFinite(c.strengthGPerYear) ? `, about ${Math.round(c.strengthGPerYear)} g/yr if well mixed` : ""}`,
+      fixture: c.fixtureId ? (label.get(c.fixtureId) ?? "a fixture") : "open floor",
+      riskPoint: c.riskPointId ? (label.get(c.riskPointId) ?? "a risk point") : "none near",
+      reason: c.reason,
+      nextCheck: c.nextCheck,
+      x: c.x,
+      y: c.y,
+      radiusM: c.radius,
+    })),
+    diagnostics: [...(analysisProblem ? [analysisProblem] : []), ...(summary?.diagnostics.map((d) => d.message) ?? [])],
+    findings: findingRows.map((f) => ({
+      status: f.status,
+      found: zonedDateTime(f.foundAt, tz),
+      where: [f.fixtureId ? label.get(f.fixtureId) : null, f.component ? COMPONENT_LABELS[f.component as keyof typeof COMPONENT_LABELS] : null, f.x !== null && f.y !== null ? pos(f.x, f.y) : null].filter(Boolean).join(", ") || "on the plan",
+      note: f.note,
+    })),
+    readings: readingRows.map((r, i) => {
+      const c = corrected.get(r.id);
+      return {
+        n: i + 1,
+        time: zonedTime(r.takenAt, tz),
+        raw: pos(r.x, r.y),
+        corrected: c ? pos(c.corrected.x, c.corrected.y) : "—",
+        ppm: `${r.atLeast ? "≥ " : ""}${r.ppm}`,
+        point: SAMPLE_POINT_LABELS[r.samplePoint],
+        note: r.note,
+      };
+    }),
+    cautions: [...cautions.values()].map((c) => ({ text: c.text, source: c.source })),
+    map: null,
+    generated: `made ${zonedDateTime(new Date(), tz)}`,
+  };
+  const csv: CsvReading[] = readingRows.map((r) => {
+    const c = corrected.get(r.id);
+    return { id: r.id, takenAt: r.takenAt, t: (r.takenAt.getTime() - t0) / 1000, raw: { x: r.x, y: r.y }, corrected: c ? c.corrected : null, ppm: r.ppm, atLeast: r.atLeast, samplePoint: r.samplePoint, note: r.note, flags: c?.flags ?? [] };
+  });
+  const outlines = fixtureRows.filter((f) => f.polygon).map((f) => f.polygon as [number, number][]);
+  return {
+    sweep,
+    storeName: store.name,
+    timeZone: tz,
+    model,
+    csv,
+    field: analysis ? rowField(analysis) : null,
+    maxPpm: scale.maxPpm,
+    planImage: { displayKey: plan.source === "image" ? plan.displayKey : null, widthM: plan.widthM ?? 1, heightM: plan.heightM ?? 1 },
+    outlines,
+  };
+}

@@ -1,0 +1,110 @@
+/** The sweep report as PDF and CSV, and sending it by e-mail with a record of each send. */
+import { and, desc, eq } from "drizzle-orm";
+import type { AppContext } from "../../context";
+import type { ReportRecipient, ReportSend, SendReportInput } from "../../contracts/reports";
+import { memberships, membershipStores, reportSends, users } from "../../db/schema/index";
+import { CONCENTRATION_LUT, createConcentrationScale } from "../../domain/fieldmap/concentration-ramp";
+import { readingsCsv } from "../../domain/reports/readings-csv";
+import type { LengthPreference } from "../../domain/units/format-units";
+import { badRequest } from "../../lib/http-error";
+import { renderFieldMapPng } from "../../reports/field-map-png";
+import { buildSweepReportPdf } from "../../reports/sweep-report-pdf";
+import { planStorage } from "../plans/plan-resources";
+import type { Viewer } from "../stores/store-access";
+import { loadVisibleSweep } from "../sweeps/sweep-access";
+import { loadReportFacts, type ReportFacts } from "./report-facts";
+
+const slug = (s: string) => s.normalize("NFKD").replace(/[^\w]+/g, "-").replace(/^-|-$/g, "").toLowerCase();
+
+function fileBase(f: ReportFacts): string {
+  const day = new Intl.DateTimeFormat("sv-SE", { timeZone: f.timeZone }).format(f.sweep.startedAt);
+  return `sweep-${slug(f.storeName)}-${day}`;
+}
+
+export async function buildReportPdf(ctx: AppContext, f: ReportFacts): Promise<Buffer> {
+  if (f.field) {
+    const scale = createConcentrationScale({ maxPpm: f.maxPpm, log: true });
+    const planImage = f.planImage.displayKey ? await planStorage(ctx).get(f.planImage.displayKey) : null;
+    const png = await renderFieldMapPng({
+      planImage: planImage ?? null,
+      widthM: f.planImage.widthM,
+      heightM: f.planImage.heightM,
+      field: f.field,
+      lut: CONCENTRATION_LUT,
+      index: scale.index,
+      outlines: f.outlines,
+      spots: f.model.suspects,
+      widthPx: 1400,
+    });
+    f.model.map = {
+      png,
+      widthM: f.planImage.widthM,
+      heightM: f.planImage.heightM,
+      legend: `Colour: lag-corrected concentration on a log scale from 0 (pale sand) to ${f.maxPpm} ppm (deep plum); ${scale.ticks().join(", ")} ppm. Hatched or clear: not sampled enough to say — unknown, not clean. Numbered rings: suspect spots with their search radius.`,
+    };
+  }
+  return buildSweepReportPdf(f.model);
+}
+
+export async function sweepReportPdf(ctx: AppContext, viewer: Viewer, sweepId: string, unit: LengthPreference): Promise<{ filename: string; pdf: Buffer }> {
+  const facts = await loadReportFacts(ctx, viewer, sweepId, unit);
+  return { filename: `${fileBase(facts)}.pdf`, pdf: await buildReportPdf(ctx, facts) };
+}
+
+export async function sweepReadingsCsv(ctx: AppContext, viewer: Viewer, sweepId: string, unit: LengthPreference): Promise<{ filename: string; csv: string }> {
+  const facts = await loadReportFacts(ctx, viewer, sweepId, unit);
+  return { filename: `${fileBase(facts)}-readings.csv`, csv: readingsCsv(facts.csv, unit, facts.timeZone) };
+}
+
+/** The store contacts named on the sweep's store: the "send to the store contact" choice. */
+export async function storeContacts(ctx: AppContext, companyId: string, storeId: string): Promise<ReportRecipient[]> {
+  const rows = await ctx.db
+    .select({ name: users.name, email: users.email })
+    .from(membershipStores)
+    .innerJoin(memberships, eq(memberships.id, membershipStores.membershipId))
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(and(eq(membershipStores.storeId, storeId), eq(memberships.companyId, companyId), eq(memberships.role, "store-contact")));
+  return rows;
+}
+
+export async function reportRecipients(ctx: AppContext, viewer: Viewer, sweepId: string): Promise<ReportRecipient[]> {
+  const sweep = await loadVisibleSweep(ctx, viewer, sweepId);
+  return storeContacts(ctx, sweep.companyId, sweep.storeId);
+}
+
+type ParsedSend = Required<Pick<SendReportInput, "storeContacts" | "addresses" | "message">>;
+
+export async function sendSweepReport(ctx: AppContext, viewer: Viewer, userId: string, sweepId: string, input: ParsedSend, unit: LengthPreference): Promise<ReportSend> {
+  const facts = await loadReportFacts(ctx, viewer, sweepId, unit);
+  const to = new Set(input.addresses.map((a) => a.toLowerCase()));
+  if (input.storeContacts) {
+    const contacts = await storeContacts(ctx, facts.sweep.companyId, facts.sweep.storeId);
+    if (contacts.length === 0 && to.size === 0) throw badRequest("This store has no store contact yet: type an address instead.", { storeContacts: "the store has no store contact" });
+    for (const c of contacts) to.add(c.email.toLowerCase());
+  }
+  const pdf = await buildReportPdf(ctx, facts);
+  const filename = `${fileBase(facts)}.pdf`;
+  const [sender] = await ctx.db.select({ name: users.name }).from(users).where(eq(users.id, userId));
+  const subject = `Sweep report: ${facts.storeName}, ${facts.model.sweep.started}`;
+  const top = facts.model.suspects[0];
+  const text = [
+    input.message,
+    `${sender?.name ?? "A colleague"} sent you the sweep report for ${facts.storeName} (${facts.model.company}).`,
+    top ? `Top suspect spot: ${top.fixture} at ${top.position} — ${top.reason}` : "No credible leak was found on this sweep.",
+    "The report is attached as a PDF. Safety: leak checks and repairs are for certified technicians; local codes apply.",
+  ].filter(Boolean).join("\n\n");
+  const recipients = [...to];
+  await ctx.mailer.send({ to: recipients, subject, text, attachments: [{ filename, content: pdf, contentType: "application/pdf" }], companyId: facts.sweep.companyId });
+  const [row] = await ctx.db
+    .insert(reportSends)
+    .values({ companyId: facts.sweep.companyId, sweepId, sentById: userId, recipients, subject, filename, bytes: pdf.length, readingsRevision: facts.sweep.readingsRevision })
+    .returning();
+  return { id: row.id, sweepId, sentBy: sender?.name ?? null, recipients, subject, filename, bytes: row.bytes, sentAt: row.sentAt.toISOString() };
+}
+
+export async function listReportSends(ctx: AppContext, viewer: Viewer, sweepId: string): Promise<ReportSend[]> {
+  await loadVisibleSweep(ctx, viewer, sweepId);
+  const rows = await ctx.db.select({ s: reportSends, by: users.name }).from(reportSends).leftJoin(users, eq(users.id, reportSends.sentById)).where(eq(reportSends.sweepId, sweepId)).orderBy(desc(reportSends.sentAt));
+  return rows.map(({ s, by }) => ({ id: s.id, sweepId: s.sweepId, sentBy: by, recipients: s.recipients, subject: s.subject, filename: s.filename, bytes: s.bytes, sentAt: s.sentAt.toISOString() }));
+}
+

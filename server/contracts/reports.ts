@@ -1,0 +1,27 @@
+import { z } from "zod";
+
+export const sendReportInput = z
+  .object({
+    /** Send to every store contact named on the sweep's store. */
+    storeContacts: z.boolean("must be true or false").default(false),
+    /** Any other addresses; recipients need no account. */
+    addresses: z.array(z.email("must be an e-mail address"), "must be a list of e-mail addresses").max(20, "must name at most 20 addresses").default([]),
+    message: z.string("must be text").trim().max(2000, "must be at most 2,000 characters").default(""),
+  })
+  .refine((v) => v.storeContacts || v.addresses.length > 0, { path: ["addresses"], message: "name at least one recipient, or send to the store contacts" });
+export type SendReportInput = z.input<typeof sendReportInput>;
+
+export const reportSend = z.object({
+  id: z.uuid(),
+  sweepId: z.uuid(),
+  sentBy: z.string().nullable(),
+  recipients: z.array(z.string()),
+  subject: z.string(),
+  filename: z.string(),
+  bytes: z.number(),
+  sentAt: z.string(),
+});
+export type ReportSend = z.infer<typeof reportSend>;
+
+export const reportRecipient = z.object({ name: z.string(), email: z.string() });
+export type ReportRecipient = z.infer<typeof reportRecipient>;

@@ -1,0 +1,47 @@
+/**
+ * Everything a sweep report shows, already in words and the reader's units: the PDF builder only lays
+ * it out, so the same model feeds the PDF, the e-mail's text and the tests.
+ */
+export interface ReportSuspect {
+  rank: number;
+  /** "12.1 m, 3.3 m" or "39 ft 8 in, 10 ft 10 in" */
+  position: string;
+  radius: string;
+  score: number;
+  strength: string;
+  fixture: string;
+  riskPoint: string;
+  reason: string;
+  nextCheck: string;
+  /** Plan metres, for drawing the number on the map. */
+  x: number;
+  y: number;
+  radiusM: number;
+}
+
+export interface ReportReading {
+  n: number;
+  time: string;
+  raw: string;
+  corrected: string;
+  ppm: string;
+  point: string;
+  note: string;
+}
+
+export interface SweepReportModel {
+  title: string;
+  company: string;
+  store: { name: string; address: string; timeZone: string };
+  sweep: { started: string; submitted: string; status: string; technician: string; conditions: string };
+  detector: { name: string; principle: string; calibration: string; settings: string };
+  background: string;
+  suspects: ReportSuspect[];
+  diagnostics: string[];
+  findings: { status: string; found: string; where: string; note: string }[];
+  readings: ReportReading[];
+  cautions: { text: string; source: string }[];
+  /** The rendered field map (PNG) and the plan size in metres it covers. */
+  map: { png: Buffer; widthM: number; heightM: number; legend: string } | null;
+  generated: string;
+}

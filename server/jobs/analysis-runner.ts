@@ -1,0 +1,10 @@
+/** The locator behind a worker pool: `run` resolves with the result or rejects with JobError. */
+import type { LocatorResult } from "../contracts/locator-output";
+import type { AnalysisJob } from "./analysis.worker";
+import { createWorkerPool, defaultPoolSize } from "./worker-pool";
+
+export function createAnalysisRunner(size = defaultPoolSize()) {
+  return createWorkerPool<AnalysisJob, LocatorResult>({ module: new URL("./analysis.worker.ts", import.meta.url), size });
+}
+
+export type AnalysisRunner = ReturnType<typeof createAnalysisRunner>;

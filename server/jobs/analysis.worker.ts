@@ -1,0 +1,16 @@
+/** Runs the locator in a worker thread (see analysis-runner.ts). */
+import { locate, type LocatorOptions } from "../analysis/locate";
+import { LocatorInputError, type LocatorInput } from "../contracts/locator-input";
+import type { LocatorResult } from "../contracts/locator-output";
+import { serveJobs } from "./serve-jobs";
+
+export interface AnalysisJob {
+  input: LocatorInput;
+  options?: Partial<LocatorOptions>;
+}
+
+serveJobs<AnalysisJob, LocatorResult>((job) => locate(job.input, job.options), {
+  transferables: (r) => [r.field.values.buffer as ArrayBuffer, r.field.confidence.buffer as ArrayBuffer],
+  describeError: (err) =>
+    err instanceof LocatorInputError ? { message: err.message, problems: err.problems } : { message: err instanceof Error ? err.message : String(err) },
+});

@@ -1,0 +1,12 @@
+import { createRequire } from "node:module";
+
+const require = createRequire(import.meta.url);
+
+/**
+ * Atkinson Hyperlegible as full TTFs (the @fontsource files are subsets that lack accented capitals;
+ * toolchain.md), embedded by pdfkit as subsets of what the report uses.
+ */
+export const REPORT_FONTS = {
+  regular: require.resolve("@expo-google-fonts/atkinson-hyperlegible/400Regular/AtkinsonHyperlegible_400Regular.ttf"),
+  bold: require.resolve("@expo-google-fonts/atkinson-hyperlegible/700Bold/AtkinsonHyperlegible_700Bold.ttf"),
+};

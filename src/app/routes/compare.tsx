@@ -1,0 +1,181 @@
+import { useMemo } from "react";
+import { useParams, useSearchParams } from "react-router";
+import { alignmentBetween } from "../../../server/domain/fieldmap/plan-alignment";
+import { differenceMap } from "../../../server/domain/fieldmap/difference-map";
+import { createDifferenceScale, DIFFERENCE_LUT } from "../../../server/domain/fieldmap/difference-ramp";
+import { niceMaxPpm } from "../../../server/domain/fieldmap/concentration-ramp";
+import { PageHeader } from "../../components/ui/page-header";
+import { QueryError } from "../../components/ui/query-error";
+import { Select } from "../../components/ui/select";
+import { Spinner } from "../../components/ui/spinner";
+import { useStores } from "../../features/stores/api/get-stores";
+import { useAnalysis } from "../../features/fieldmap/api/get-analysis";
+import { useFixtureTrends } from "../../features/fieldmap/api/get-fixture-trends";
+import { usePlanFixtures, useStorePlans } from "../../features/fieldmap/api/get-plans";
+import { FieldCanvas } from "../../features/fieldmap/components/field-canvas";
+import { RampLegend } from "../../features/fieldmap/components/ramp-legend";
+import { TrendSparkline } from "../../features/fieldmap/components/trend-sparkline";
+import { useWidth } from "../../features/fieldmap/components/use-width";
+import { DEFAULT_LAYERS } from "../../features/fieldmap/model/layers";
+import { concentrationPaint } from "../../features/fieldmap/model/scale-paint";
+import { useDocumentTitle } from "../../lib/use-document-title";
+
+const SIDE_LAYERS = { ...DEFAULT_LAYERS, corrected: false, path: false };
+const DIFF_LAYERS = { ...SIDE_LAYERS, suspects: false, riskPoints: false };
+
+export function Component() {
+  const { storeId = "" } = useParams();
+  const [search, setSearch] = useSearchParams();
+  const trends = useFixtureTrends(storeId, search.get("a"), search.get("b"));
+  const stores = useStores();
+  const plans = useStorePlans(storeId);
+  const store = stores.data?.find((s) => s.id === storeId);
+  const timeZone = store?.timeZone ?? "UTC";
+  const day = (iso: string) => new Intl.DateTimeFormat("en-GB", { timeZone, dateStyle: "medium" }).format(new Date(iso));
+  useDocumentTitle(store ? `Compare · ${store.name}` : "Compare sweeps");
+  const t = trends.data;
+  const aId = t?.a ?? null;
+  const bId = t?.b ?? null;
+  const aSweep = t?.sweeps.find((s) => s.id === aId);
+  const bSweep = t?.sweeps.find((s) => s.id === bId);
+  const A = useAnalysis(aId ?? "", null, !!aId);
+  const B = useAnalysis(bId ?? "", null, !!bId);
+  const planA = plans.data?.find((p) => p.id === aSweep?.planId);
+  const planB = plans.data?.find((p) => p.id === bSweep?.planId);
+  const fixA = usePlanFixtures(planA?.id);
+  const fixB = usePlanFixtures(planB?.id);
+  const [wrapRef, width] = useWidth<HTMLDivElement>();
+
+  const { scale, paint } = useMemo(() => concentrationPaint([...(A.data?.readings ?? []), ...(B.data?.readings ?? [])].map((r) => r.ppm), 2, true), [A.data, B.data]);
+  const diff = useMemo(() => {
+    if (!A.data || !B.data || !planA || !planB || !plans.data) return null;
+    const align = alignmentBetween(plans.data, planA.id, planB.id);
+    const grid = differenceMap(A.data.field, B.data.field, align);
+    const ds = createDifferenceScale(niceMaxPpm(grid.maxAbs, 1));
+    return { grid, ds, paint: { lut: DIFFERENCE_LUT, index: ds.index } };
+  }, [A.data, B.data, planA, planB, plans.data]);
+
+  const overlay = (f: typeof fixA.data) => (f?.fixtures ?? []).map((x) => ({ id: x.id, kind: x.kind, label: x.label, polygon: "polygon" in x ? x.polygon : undefined, point: "point" in x ? x.point : undefined }));
+  const maxW = Math.max(planA?.widthM ?? 1, planB?.widthM ?? 1);
+  const half = Math.floor((width - 16) / 2);
+  const pick = (key: "a" | "b", value: string) => {
+    const next = new URLSearchParams(search);
+    next.set(key, value);
+    if (key === "b" && !search.get("a")) next.delete("a");
+    setSearch(next, { replace: true });
+  };
+
+  if (trends.isError) return <QueryError error={trends.error} what="the comparison" onRetry={() => void trends.refetch()} />;
+  if (!t) return <Spinner label="Gathering the store's sweeps…" />;
+  const options = t.sweeps.map((s) => ({ value: s.id, label: day(s.startedAt) }));
+  const ia = t.sweeps.findIndex((s) => s.id === aId);
+  const ib = t.sweeps.findIndex((s) => s.id === bId);
+
+  return (
+    <>
+      <PageHeader title={`Compare sweeps — ${store?.name ?? "store"}`} description="Two sweeps side by side at the same scale and colours, the difference between them, and each fixture over the last 12 months." />
+      <div className="mb-4 flex flex-wrap gap-4">
+        <Select label="Earlier sweep" options={options} value={aId ?? ""} onChange={(e) => pick("a", e.currentTarget.value)} />
+        <Select label="Later sweep" options={options} value={bId ?? ""} onChange={(e) => pick("b", e.currentTarget.value)} />
+      </div>
+      <div ref={wrapRef} className="grid grid-cols-2 gap-4" data-testid="compare-side-by-side">
+        {[
+          { s: aSweep, an: A, plan: planA, fx: fixA, title: "Earlier" },
+          { s: bSweep, an: B, plan: planB, fx: fixB, title: "Later" },
+        ].map(({ s, an, plan, fx, title }) => (
+          <figure key={title}>
+            <figcaption className="mb-1 font-bold">
+              {title}: {s ? day(s.startedAt) : "—"} {an.data ? `· ${an.data.candidates.length} suspect spot${an.data.candidates.length === 1 ? "" : "s"}` : ""}
+            </figcaption>
+            {an.data && plan ? (
+              <FieldCanvas
+                label={`${title} sweep field map`}
+                widthM={plan.widthM ?? 1}
+                heightM={plan.heightM ?? 1}
+                planImageUrl={plan.image?.displayUrl ?? null}
+                field={an.data.field}
+                paint={paint}
+                layers={SIDE_LAYERS}
+                fixtures={overlay(fx.data)}
+                readings={an.data.readings}
+                spots={an.data.candidates}
+                selected={null}
+                width={Math.round((half * (plan.widthM ?? 1)) / maxW)}
+              />
+            ) : an.isError ? (
+              <QueryError error={an.error} what="this sweep's map" />
+            ) : (
+              <Spinner label="Computing…" />
+            )}
+          </figure>
+        ))}
+      </div>
+      <div className="mt-3">
+        <RampLegend title="Both maps: lag-corrected concentration (log scale)" lut={paint.lut} position={scale.position} ticks={scale.ticks()} />
+      </div>
+      <section className="mt-6">
+        <h2 className="mb-2 text-xl font-bold">Difference (later minus earlier)</h2>
+        {diff && planB && B.data ? (
+          <div className="grid items-start gap-4 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]" data-testid="difference-map">
+            <FieldCanvas
+              label="Difference map"
+              widthM={planB.widthM ?? 1}
+              heightM={planB.heightM ?? 1}
+              planImageUrl={planB.image?.displayUrl ?? null}
+              field={diff.grid}
+              paint={diff.paint}
+              layers={DIFF_LAYERS}
+              fixtures={overlay(fixB.data)}
+              readings={[]}
+              spots={[]}
+              selected={null}
+              width={Math.round(width * 0.64)}
+            />
+            <div>
+              <RampLegend title="Change in ppm (blue: lower now, copper: higher now)" lut={DIFFERENCE_LUT} position={(v) => diff.ds.index(v) / 255} ticks={diff.ds.ticks()} />
+              <p className="mt-2 text-sm text-muted">Largest change {diff.grid.maxAbs.toFixed(1)} ppm. Areas either sweep left unsampled are hatched: no change can be told there.</p>
+            </div>
+          </div>
+        ) : (
+          <Spinner label="Working out the difference…" />
+        )}
+      </section>
+      <section className="mt-6">
+        <h2 className="mb-2 text-xl font-bold">Fixtures over the last 12 months</h2>
+        <p className="mb-2 text-sm text-muted">Peak and mean ppm of the field around each fixture, per sweep; the fixtures that got worse from the earlier to the later sweep first.</p>
+        <div className="overflow-x-auto">
+          <table className="w-full text-sm" data-testid="fixture-trends">
+            <thead>
+              <tr className="text-left">
+                <th className="p-2">Fixture</th>
+                <th className="p-2">Trend (peak)</th>
+                <th className="p-2">Earlier peak / mean</th>
+                <th className="p-2">Later peak / mean</th>
+                <th className="p-2">Change</th>
+              </tr>
+            </thead>
+            <tbody>
+              {t.fixtures.map((f) => {
+                const la = ia >= 0 ? f.levels[ia] : null;
+                const lb = ib >= 0 ? f.levels[ib] : null;
+                return (
+                  <tr key={f.id} className="border-t border-line">
+                    <td className="p-2 font-bold">{f.label}</td>
+                    <td className="p-2">
+                      <TrendSparkline values={f.levels.map((l) => (l ? l.peakPpm : null))} highlight={[ia, ib]} label={`${f.label}: peak ppm per sweep`} />
+                    </td>
+                    <td className="p-2">{la ? `${la.peakPpm.toFixed(1)} / ${la.meanPpm.toFixed(1)}` : "not sampled"}</td>
+                    <td className="p-2">{lb ? `${lb.peakPpm.toFixed(1)} / ${lb.meanPpm.toFixed(1)}` : "not sampled"}</td>
+                    <td className={`p-2 font-bold ${f.change !== null && f.change > 1 ? "text-danger" : f.change !== null && f.change < -1 ? "text-ok" : ""}`}>
+                      {f.change === null ? "—" : `${f.change > 0 ? "+" : ""}${f.change.toFixed(1)} ppm`}
+                    </td>
+                  </tr>
+                );
+              })}
+            </tbody>
+          </table>
+        </div>
+      </section>
+    </>
+  );
+}

@@ -1,0 +1,23 @@
+import type { ComponentType } from "react";
+import type { Store } from "../../../server/contracts/stores";
+import type { Role } from "../../../server/domain/roles";
+import { can } from "../../../server/domain/roles";
+import { PlanSection } from "../../features/layout/components/plan/plan-section";
+import { SystemsSection } from "../../features/systems/components/systems-section";
+import type { UnitPreferences } from "../shell/use-unit-preferences";
+
+/** What every section of the store page is given; each feature reads the rest itself. */
+export interface StoreSectionProps {
+  store: Store;
+  role: Role;
+  units: UnitPreferences;
+}
+
+/**
+ * The store page is this list, in order: each feature adds its own section here (sweeps,
+ * findings, records) without the store page knowing its insides. Keep one line per feature.
+ */
+export const STORE_SECTIONS: readonly { id: string; Component: ComponentType<StoreSectionProps> }[] = [
+  { id: "plan", Component: ({ store, role, units }) => <PlanSection storeId={store.id} canEdit={can(role, "plans.edit") && !store.archivedAt} preference={units.length} /> },
+  { id: "systems", Component: ({ store, role, units }) => <SystemsSection storeId={store.id} canEdit={can(role, "stores.edit") && !store.archivedAt} massUnit={units.mass} /> },
+];

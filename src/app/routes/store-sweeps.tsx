@@ -1,0 +1,46 @@
+import { Link, useParams } from "react-router";
+import { EmptyState } from "../../components/ui/empty-state";
+import { PageHeader } from "../../components/ui/page-header";
+import { QueryError } from "../../components/ui/query-error";
+import { Spinner } from "../../components/ui/spinner";
+import { useStores } from "../../features/stores/api/get-stores";
+import { useStoreSweeps } from "../../features/fieldmap/api/get-sweeps";
+import { useDocumentTitle } from "../../lib/use-document-title";
+
+/** A store's sweeps, newest first, each opening its field map. */
+export function Component() {
+  const { storeId = "" } = useParams();
+  const sweeps = useStoreSweeps(storeId);
+  const stores = useStores();
+  const store = stores.data?.find((s) => s.id === storeId);
+  useDocumentTitle(store ? `Sweeps · ${store.name}` : "Sweeps");
+  const tz = store?.timeZone ?? "UTC";
+  const when = (iso: string) => new Intl.DateTimeFormat("en-GB", { timeZone: tz, dateStyle: "full", timeStyle: "short" }).format(new Date(iso));
+  if (sweeps.isError) return <QueryError error={sweeps.error} what="the sweeps" onRetry={() => void sweeps.refetch()} />;
+  if (!sweeps.data) return <Spinner label="Loading sweeps…" />;
+  const list = [...sweeps.data].sort((a, b) => b.startedAt.localeCompare(a.startedAt));
+  return (
+    <>
+      <PageHeader
+        title={`Sweeps — ${store?.name ?? "store"}`}
+        actions={list.length > 1 ? <Link className="inline-flex min-h-11 items-center rounded-md edge bg-surface px-4 font-bold no-underline" to={`/stores/${storeId}/compare`}>Compare months</Link> : null}
+      />
+      {list.length === 0 ? <EmptyState title="No sweeps yet" /> : null}
+      <ul className="space-y-2">
+        {list.map((s) => (
+          <li key={s.id} className="flex flex-wrap items-center justify-between gap-2 rounded-md edge bg-surface p-3" data-testid="sweep-row">
+            <div>
+              <p className="font-bold">{when(s.startedAt)}</p>
+              <p className="text-sm text-muted">
+                {s.technicianName} · {s.detectorName} · fans {s.fans} · {s.readingCount} readings · {s.status.replace("-", " ")}
+              </p>
+            </div>
+            <Link className="inline-flex min-h-11 items-center rounded-md bg-accent px-4 font-bold text-on-accent no-underline" to={`/stores/${storeId}/sweeps/${s.id}/map`}>
+              Open field map
+            </Link>
+          </li>
+        ))}
+      </ul>
+    </>
+  );
+}

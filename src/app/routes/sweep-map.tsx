@@ -1,0 +1,196 @@
+import { useMemo, useState } from "react";
+import { Link, useParams, useSearchParams } from "react-router";
+import { can } from "../../../server/domain/roles";
+import { AIR_VOLUME_KINDS } from "../../../server/contracts/fixture-kinds";
+import { Alert } from "../../components/ui/alert";
+import { Button } from "../../components/ui/button";
+import { PageHeader } from "../../components/ui/page-header";
+import { QueryError } from "../../components/ui/query-error";
+import { Spinner } from "../../components/ui/spinner";
+import { useStores } from "../../features/stores/api/get-stores";
+import { useAnalysis } from "../../features/fieldmap/api/get-analysis";
+import { usePlanFixtures, useStorePlans } from "../../features/fieldmap/api/get-plans";
+import { useSweep } from "../../features/fieldmap/api/get-sweeps";
+import { useFindingFromSpot, useStoreFindings } from "../../features/fieldmap/api/findings";
+import { useReviewSweep } from "../../features/fieldmap/api/reports";
+import { DelayControl } from "../../features/fieldmap/components/delay-control";
+import { FieldCanvas } from "../../features/fieldmap/components/field-canvas";
+import { FindingsPanel } from "../../features/fieldmap/components/findings-panel";
+import { LayerToggles } from "../../features/fieldmap/components/layer-toggles";
+import { RampLegend } from "../../features/fieldmap/components/ramp-legend";
+import { ReportPanel } from "../../features/fieldmap/components/report-panel";
+import { SuspectList } from "../../features/fieldmap/components/suspect-list";
+import { useWidth } from "../../features/fieldmap/components/use-width";
+import { DEFAULT_LAYERS } from "../../features/fieldmap/model/layers";
+import { concentrationPaint } from "../../features/fieldmap/model/scale-paint";
+import { useDocumentTitle } from "../../lib/use-document-title";
+import { useSignedIn } from "../shell/session-context";
+
+const AIR = new Set<string>(AIR_VOLUME_KINDS);
+
+export function Component() {
+  const { storeId = "", sweepId = "" } = useParams();
+  const [search, setSearch] = useSearchParams();
+  const delayParam = search.get("transportDelayS");
+  const delay = delayParam === null || !Number.isFinite(Number(delayParam)) ? null : Number(delayParam);
+  const { session, membership } = useSignedIn();
+  const unit = session.units.length;
+  const sweep = useSweep(sweepId);
+  const plans = useStorePlans(storeId);
+  const stores = useStores();
+  const plan = plans.data?.find((p) => p.id === sweep.data?.planId);
+  const fixtures = usePlanFixtures(sweep.data?.planId);
+  const analysis = useAnalysis(sweepId, delay, !!sweep.data);
+  const findings = useStoreFindings(storeId);
+  const review = useReviewSweep(sweepId);
+  const makeFinding = useFindingFromSpot(storeId, sweepId, sweep.data?.planId ?? "");
+  const [layers, setLayers] = useState(DEFAULT_LAYERS);
+  const [log, setLog] = useState(true);
+  const [selected, setSelected] = useState<number | null>(null);
+  const [wrapRef, width] = useWidth<HTMLDivElement>();
+  const store = stores.data?.find((s) => s.id === storeId);
+  const timeZone = store?.timeZone ?? "UTC";
+  const zoned = (iso: string) => new Intl.DateTimeFormat("en-GB", { timeZone, dateStyle: "medium", timeStyle: "short" }).format(new Date(iso));
+  useDocumentTitle(store ? `Field map · ${store.name}` : "Field map");
+
+  const a = analysis.data;
+  const { scale, paint } = useMemo(() => concentrationPaint(a?.readings.map((r) => r.ppm) ?? [], sweep.data?.alarmPpm ?? 2, log), [a, sweep.data?.alarmPpm, log]);
+  const label = useMemo(() => {
+    const m = new Map((fixtures.data?.fixtures ?? []).map((f) => [f.id, f.label || f.kind]));
+    return (id: string | null) => (id ? (m.get(id) ?? null) : null);
+  }, [fixtures.data]);
+  const overlayFixtures = useMemo(
+    () => (fixtures.data?.fixtures ?? []).map((f) => ({ id: f.id, kind: f.kind, label: f.label, polygon: "polygon" in f ? f.polygon : undefined, point: "point" in f ? f.point : undefined })),
+    [fixtures.data],
+  );
+  const sweepFindings = (findings.data ?? []).filter((f) => f.sweepId === sweepId);
+  const findingRanks = new Set(
+    // a finding from this sweep inside the spot's search radius already answers it
+    (a?.candidates ?? []).filter((c) => sweepFindings.some((f) => f.x !== null && f.y !== null && Math.hypot(f.x - c.x, f.y - c.y) <= c.radius)).map((c) => c.rank),
+  );
+  const today = new Intl.DateTimeFormat("sv-SE", { timeZone }).format(new Date());
+
+  if (sweep.isError) return <QueryError error={sweep.error} what="the sweep" onRetry={() => void sweep.refetch()} />;
+  if (!sweep.data || !plans.data) return <Spinner label="Loading the sweep…" />;
+  const s = sweep.data;
+  const widthM = plan?.widthM ?? 1;
+  const heightM = plan?.heightM ?? 1;
+
+  return (
+    <>
+      <PageHeader
+        title={`Field map — ${store?.name ?? "store"}`}
+        description={`${zoned(s.startedAt)} · ${s.technicianName} · ${s.detectorName} · fans ${s.fans}${s.defrost ? ", defrost" : ""} · ${s.readingCount} readings · ${s.status.replace("-", " ")}`}
+        actions={
+          <>
+            <Link className="inline-flex min-h-11 items-center rounded-md edge bg-surface px-4 font-bold no-underline" to={`/stores/${storeId}/compare?b=${sweepId}`}>
+              Compare with the month before
+            </Link>
+            <Link className="inline-flex min-h-11 items-center rounded-md edge bg-surface px-4 font-bold no-underline" to={`/stores/${storeId}/sweeps`}>
+              All sweeps
+            </Link>
+            {can(membership.role, "sweeps.review") && s.status === "submitted" ? (
+              <Button busy={review.isPending} onClick={() => review.mutate()}>
+                Mark reviewed
+              </Button>
+            ) : null}
+          </>
+        }
+      />
+      {review.isError ? <Alert tone="error">{review.error.message}</Alert> : null}
+      {s.status === "reviewed" && s.reviewedAt ? <p className="mb-3 text-sm text-ok">Reviewed {zoned(s.reviewedAt)}.</p> : null}
+      {analysis.isError ? <QueryError error={analysis.error} what="the analysis" onRetry={() => void analysis.refetch()} /> : null}
+      {a?.stale ? (
+        <div className="mb-3">
+          <Alert tone="note" title="Readings changed since this map was made">
+            Recomputing on the server… the map updates by itself when the new one is ready.
+          </Alert>
+        </div>
+      ) : null}
+      <div className="grid items-start gap-6 xl:grid-cols-[minmax(0,3fr)_minmax(20rem,1.2fr)]">
+        <div className="space-y-4">
+          <div ref={wrapRef} className="relative">
+            {a ? (
+              <FieldCanvas
+                label={`Field map with ${a.candidates.length} numbered suspect spots`}
+                widthM={widthM}
+                heightM={heightM}
+                planImageUrl={plan?.image?.displayUrl ?? null}
+                field={a.field}
+                paint={paint}
+                layers={layers}
+                fixtures={overlayFixtures}
+                readings={a.readings}
+                spots={a.candidates}
+                selected={selected}
+                width={width}
+              />
+            ) : analysis.isPending ? (
+              <Spinner label="Computing the field map on the server…" />
+            ) : null}
+            {analysis.isFetching && a ? <p className="absolute right-2 top-2 rounded bg-surface px-2 text-sm">Updating…</p> : null}
+          </div>
+          <RampLegend title={`Lag-corrected concentration, ${log ? "log" : "linear"} scale`} lut={paint.lut} position={scale.position} ticks={scale.ticks()} />
+          <LayerToggles layers={layers} onChange={setLayers} log={log} onLog={setLog} />
+          <DelayControl
+            detectorDelayS={s.transportDelayS}
+            current={delay ?? s.transportDelayS}
+            busy={analysis.isFetching}
+            onApply={(v) => {
+              const next = new URLSearchParams(search);
+              if (v === null) next.delete("transportDelayS");
+              else next.set("transportDelayS", String(v));
+              setSearch(next, { replace: true });
+            }}
+          />
+          {a ? (
+            <p className="text-sm text-muted">
+              Background {a.background.ppm.toFixed(1)} ppm · transport delay {a.params.transportDelayS} s, time constant {a.params.timeConstantS} s · computed {zoned(a.computedAt)} in {a.durationMs} ms
+            </p>
+          ) : null}
+        </div>
+        <aside className="space-y-5">
+          <section>
+            <h2 className="mb-2 text-xl font-bold">Suspect spots</h2>
+            {a ? (
+              <SuspectList
+                spots={a.candidates}
+                fixtureLabel={label}
+                unit={unit}
+                selected={selected}
+                onSelect={setSelected}
+                findingRanks={findingRanks}
+                busyRank={makeFinding.isPending ? (makeFinding.variables?.rank ?? null) : null}
+                onMakeFinding={
+                  can(membership.role, "findings.record")
+                    ? (spot) => makeFinding.mutate({ ...spot, fixtureIsAirVolume: AIR.has(fixtures.data?.fixtures.find((f) => f.id === spot.fixtureId)?.kind ?? "") })
+                    : undefined
+                }
+              />
+            ) : null}
+            {makeFinding.isError ? <Alert tone="error">{makeFinding.error.message}</Alert> : null}
+          </section>
+          <section>
+            <h2 className="mb-2 text-xl font-bold">Diagnostics</h2>
+            {a && a.diagnostics.length === 0 ? <p className="text-sm">Nothing unusual about this sweep.</p> : null}
+            <ul className="space-y-2">
+              {a?.diagnostics.map((d, i) => (
+                <li key={i}>
+                  <Alert tone={d.kind.startsWith("detector") ? "error" : "note"}>{d.message}</Alert>
+                </li>
+              ))}
+            </ul>
+          </section>
+          <section>
+            <h2 className="mb-2 text-xl font-bold">Findings</h2>
+            <FindingsPanel storeId={storeId} findings={sweepFindings} canRecord={can(membership.role, "findings.record")} today={today} label={label} />
+          </section>
+          <section>
+            <h2 className="mb-2 text-xl font-bold">Report</h2>
+            <ReportPanel sweepId={sweepId} canSend={can(membership.role, "reports.send")} zoned={zoned} />
+          </section>
+        </aside>
+      </div>
+    </>
+  );
+}

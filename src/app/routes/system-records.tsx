@@ -1,0 +1,49 @@
+import { useNavigate, useParams } from "react-router";
+import { can } from "../../../server/domain/roles";
+import { PageHeader } from "../../components/ui/page-header";
+import { QueryError } from "../../components/ui/query-error";
+import { Spinner } from "../../components/ui/spinner";
+import { useSystemRecords } from "../../features/compliance/api/get-system-records";
+import { SystemRecords } from "../../features/compliance/components/system-records-view";
+import { useFindings } from "../../features/findings/api/get-findings";
+import { NewFindingForm } from "../../features/findings/components/new-finding-form";
+import { useCompanySettings } from "../../features/settings/api/get-company-settings";
+import { useDocumentTitle } from "../../lib/use-document-title";
+import { useSignedIn } from "../shell/session-context";
+import { Link } from "react-router";
+
+// Where the compliance records of a system meet its findings.
+export function Component() {
+  const { systemId = "" } = useParams();
+  const { user, membership } = useSignedIn();
+  const records = useSystemRecords(systemId);
+  const settings = useCompanySettings();
+  const findings = useFindings(records.data?.store.id, systemId);
+  const navigate = useNavigate();
+  useDocumentTitle(records.data ? records.data.system.name : "System records");
+  const unit = user.massUnit ?? settings.data?.massUnit ?? "kg";
+  const canRecord = can(membership.role, "findings.record");
+  if (records.isPending) return <Spinner label="Loading the system's records…" />;
+  if (records.isError) return <QueryError error={records.error} what="the system's records" onRetry={() => void records.refetch()} />;
+  const r = records.data;
+  const list = findings.data ?? [];
+  return (
+    <>
+      <PageHeader title={r.system.name} description={`${r.store.name} · records on the store's calendar (${r.store.timeZone}); today is ${r.today}.`} />
+      <div className="space-y-8">
+        <SystemRecords r={r} unit={unit} canRecord={canRecord} findings={list.filter((f) => f.status !== "dismissed").map((f) => ({ id: f.id, label: `${f.events[0]?.on ?? ""} ${f.component ?? "leak"} (${f.status})` }))} />
+        <section aria-labelledby="sys-findings" className="space-y-3">
+          <h2 id="sys-findings" className="text-xl font-bold">Findings on this system</h2>
+          {list.length === 0 ? <p className="text-muted">No findings.</p> : (
+            <ul className="space-y-1">
+              {list.map((f) => (
+                <li key={f.id}><Link className="text-accent underline" to={`/findings/${f.id}`}>{f.events[0]?.on} · {f.component ?? "component not yet known"} · {f.status}</Link>{f.deadlines[0] ? ` · due ${f.deadlines[0].dueOn}` : ""}</li>
+              ))}
+            </ul>
+          )}
+          {canRecord ? <NewFindingForm storeId={r.store.id} systemId={r.system.id} onCreated={(id) => navigate(`/findings/${id}`)} /> : null}
+        </section>
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,18 @@
+import type { LengthPreference, MassPreference } from "../../../server/domain/units/format-units";
+import { useCompanySettings } from "../../features/settings/api/get-company-settings";
+import { useSignedIn } from "./session-context";
+
+export interface UnitPreferences {
+  length: LengthPreference;
+  mass: MassPreference;
+}
+
+/** The person's own units, else the company's default (PRODUCT.md); metres and kg until loaded. */
+export function useUnitPreferences(): UnitPreferences {
+  const { user } = useSignedIn();
+  const company = useCompanySettings();
+  return {
+    length: user.lengthUnit ?? company.data?.lengthUnit ?? "m",
+    mass: user.massUnit ?? company.data?.massUnit ?? "kg",
+  };
+}

@@ -1,0 +1,45 @@
+import type { DueItem } from "../../../../server/contracts/compliance";
+import { KG_PER_POUND } from "../../../../server/domain/units/mass";
+
+export type MassUnit = "kg" | "lb";
+
+/** A mass in the reader's unit, from kg as stored (1 lb = 0.45359237 kg exactly, NIST SP 811). */
+export function formatMass(kg: number, unit: MassUnit): string {
+  return unit === "lb" ? `${(kg / KG_PER_POUND).toFixed(1)} lb` : `${kg.toFixed(2)} kg`;
+}
+
+export function formatPercent(p: number): string {
+  return `${p.toFixed(1)} %`;
+}
+
+export const STATE_LABELS: Record<DueItem["state"], string> = { overdue: "Overdue", "due-today": "Due today", "due-soon": "Due soon", upcoming: "Upcoming" };
+
+export const DUE_KIND_LABELS: Record<DueItem["kind"], string> = {
+  repair: "Repair",
+  "follow-up-test": "Verification test",
+  "recheck-after-repair": "Re-check",
+  inspection: "Inspection",
+  "chronic-leaker-report": "Report",
+  "detector-check": "Detector check",
+};
+
+export type DueSort = "due" | "store" | "kind";
+
+/** In words: "in 3 days", "today", "5 days late". */
+export function daysInWords(daysLeft: number | null): string {
+  if (daysLeft === null) return "never recorded";
+  if (daysLeft === 0) return "today";
+  if (daysLeft < 0) return `${-daysLeft} day${daysLeft === -1 ? "" : "s"} late`;
+  return `in ${daysLeft} day${daysLeft === 1 ? "" : "s"}`;
+}
+
+/** Filters by store (null: all) and sorts the due list; undated items count as most urgent. */
+export function arrangeDue(items: readonly DueItem[], storeId: string | null, sort: DueSort): DueItem[] {
+  const byDate = (a: DueItem, b: DueItem) => (a.dueOn ?? "").localeCompare(b.dueOn ?? "");
+  const list = items.filter((i) => storeId === null || i.storeId === storeId);
+  return list.sort((a, b) => {
+    if (sort === "store") return (a.storeName ?? "").localeCompare(b.storeName ?? "") || byDate(a, b);
+    if (sort === "kind") return DUE_KIND_LABELS[a.kind].localeCompare(DUE_KIND_LABELS[b.kind]) || byDate(a, b);
+    return byDate(a, b);
+  });
+}

@@ -1,0 +1,42 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { z } from "zod";
+import { reportRecipient, reportSend, type SendReportInput } from "../../../../server/contracts/reports";
+import { sweep } from "../../../../server/contracts/sweeps";
+import { api } from "../../../lib/api-client";
+import { fieldmapKeys } from "./fieldmap-keys";
+
+export function useReportSends(sweepId: string) {
+  return useQuery(
+    queryOptions({
+      queryKey: fieldmapKeys.sends(sweepId),
+      queryFn: async ({ signal }) => (await api.get(`/api/sweeps/${sweepId}/report/sends`, z.object({ sends: z.array(reportSend) }), signal)).sends,
+    }),
+  );
+}
+
+export function useReportRecipients(sweepId: string, enabled: boolean) {
+  return useQuery({
+    queryKey: fieldmapKeys.recipients(sweepId),
+    queryFn: async ({ signal }) => (await api.get(`/api/sweeps/${sweepId}/report/recipients`, z.object({ storeContacts: z.array(reportRecipient) }), signal)).storeContacts,
+    enabled,
+  });
+}
+
+export function useSendReport(sweepId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: SendReportInput) => api.post(`/api/sweeps/${sweepId}/report/send`, reportSend, input),
+    onSuccess: () => qc.invalidateQueries({ queryKey: fieldmapKeys.sends(sweepId) }),
+  });
+}
+
+export function useReviewSweep(sweepId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: () => api.post(`/api/sweeps/${sweepId}/review`, sweep),
+    onSuccess: (s) => {
+      qc.setQueryData(fieldmapKeys.sweep(sweepId), s);
+      void qc.invalidateQueries({ queryKey: fieldmapKeys.sweeps(s.storeId) });
+    },
+  });
+}

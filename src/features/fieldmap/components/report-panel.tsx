@@ -1,0 +1,69 @@
+import { useState } from "react";
+import { Alert } from "../../../components/ui/alert";
+import { Button } from "../../../components/ui/button";
+import { Checkbox } from "../../../components/ui/checkbox";
+import { TextField } from "../../../components/ui/text-field";
+import { isApiRequestError } from "../../../lib/api-client";
+import { useReportRecipients, useReportSends, useSendReport } from "../api/reports";
+
+/** Download the PDF or the readings CSV; e-mail the PDF to the store contact or anyone typed in. */
+export function ReportPanel({ sweepId, canSend, zoned }: { sweepId: string; canSend: boolean; zoned(iso: string): string }) {
+  const sends = useReportSends(sweepId);
+  const contacts = useReportRecipients(sweepId, canSend);
+  const send = useSendReport(sweepId);
+  const [toContacts, setToContacts] = useState(true);
+  const [addresses, setAddresses] = useState("");
+  const [message, setMessage] = useState("");
+  const fields = send.error && isApiRequestError(send.error) ? send.error.fields : {};
+  const addressError = Object.entries(fields).find(([k]) => k.startsWith("addresses"))?.[1];
+  return (
+    <div className="space-y-3">
+      <div className="flex flex-wrap gap-2">
+        <a className="inline-flex min-h-11 items-center rounded-md edge bg-surface px-4 font-bold no-underline" href={`/api/sweeps/${sweepId}/report.pdf`} download>
+          Download the PDF report
+        </a>
+        <a className="inline-flex min-h-11 items-center rounded-md edge bg-surface px-4 font-bold no-underline" href={`/api/sweeps/${sweepId}/readings.csv`} download>
+          Readings as CSV
+        </a>
+      </div>
+      {canSend ? (
+        <form
+          className="space-y-2 rounded-md edge bg-surface p-3"
+          aria-label="E-mail the report"
+          onSubmit={(e) => {
+            e.preventDefault();
+            const list = addresses.split(/[\s,;]+/).filter(Boolean);
+            send.mutate({ storeContacts: toContacts && (contacts.data?.length ?? 0) > 0, addresses: list, message });
+          }}
+        >
+          <p className="font-bold">E-mail the report</p>
+          <Checkbox
+            label={contacts.data?.length ? `The store contact: ${contacts.data.map((c) => `${c.name} <${c.email}>`).join(", ")}` : "The store contact (this store has none yet)"}
+            checked={toContacts && (contacts.data?.length ?? 0) > 0}
+            disabled={!contacts.data?.length}
+            onChange={(e) => setToContacts(e.currentTarget.checked)}
+          />
+          <TextField label="Other addresses" hint="Separate several with commas. Recipients need no account." value={addresses} onChange={(e) => setAddresses(e.currentTarget.value)} error={addressError} />
+          <TextField label="Message (optional)" value={message} onChange={(e) => setMessage(e.currentTarget.value)} />
+          <Button type="submit" busy={send.isPending}>
+            Send the report
+          </Button>
+          {send.isSuccess ? <Alert tone="success">Sent to {send.data.recipients.join(", ")}.</Alert> : null}
+          {send.isError && !addressError ? <Alert tone="error">{send.error.message}</Alert> : null}
+        </form>
+      ) : null}
+      {sends.data?.length ? (
+        <div>
+          <p className="font-bold">Sent</p>
+          <ul className="text-sm" data-testid="report-sends">
+            {sends.data.map((s) => (
+              <li key={s.id}>
+                {zoned(s.sentAt)}: {s.sentBy ?? "someone"} sent {s.filename} to {s.recipients.join(", ")}
+              </li>
+            ))}
+          </ul>
+        </div>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,7 @@
+export const findingsKeys = {
+  all: ["findings"] as const,
+  lists: () => [...findingsKeys.all, "list"] as const,
+  list: (storeId: string, systemId?: string) => [...findingsKeys.lists(), storeId, systemId ?? "all"] as const,
+  details: () => [...findingsKeys.all, "detail"] as const,
+  detail: (id: string) => [...findingsKeys.details(), id] as const,
+};

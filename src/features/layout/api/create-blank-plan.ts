@@ -1,0 +1,21 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { blankPlanInput, plan, type BlankPlanInput } from "../../../../server/contracts/plans";
+import { api } from "../../../lib/api-client";
+import { plansKeys } from "./plans-keys";
+
+export const createBlankPlanInput = blankPlanInput;
+
+export function createBlankPlan({ storeId, input }: { storeId: string; input: BlankPlanInput }) {
+  return api.post(`/api/stores/${storeId}/plans/blank`, plan, input);
+}
+
+export function useCreateBlankPlan() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: createBlankPlan,
+    onSuccess: (saved) => {
+      queryClient.setQueryData(plansKeys.detail(saved.id), saved);
+      return queryClient.invalidateQueries({ queryKey: plansKeys.list(saved.storeId) });
+    },
+  });
+}

@@ -1,0 +1,26 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import type { Fixture } from "../../../../server/contracts/fixtures";
+import { fixturesResponse } from "../../../../server/contracts/plans";
+import { api } from "../../../lib/api-client";
+import { layoutKeys } from "./layout-keys";
+import { plansKeys } from "./plans-keys";
+
+/**
+ * Replaces the plan's fixtures if nobody saved since `layoutRevision`; otherwise the server
+ * answers 409 (code "conflict") and nothing changes.
+ */
+export function saveFixtures({ planId, layoutRevision, fixtures }: { planId: string; layoutRevision: number; fixtures: readonly Fixture[] }) {
+  return api.put(`/api/plans/${planId}/fixtures`, fixturesResponse, { layoutRevision, fixtures });
+}
+
+export function useSaveFixtures() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: saveFixtures,
+    onSuccess: (saved) => {
+      queryClient.setQueryData(layoutKeys.planFixtures(saved.planId), saved);
+      // The plan's fixture count and revision changed.
+      return queryClient.invalidateQueries({ queryKey: plansKeys.all });
+    },
+  });
+}

@@ -1,0 +1,22 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { alignmentInput, plan, type AlignmentInput } from "../../../../server/contracts/plans";
+import { api } from "../../../lib/api-client";
+import { plansKeys } from "./plans-keys";
+
+export const setAlignmentInput = alignmentInput;
+
+/** Stores how this version lies on the previous one, from two matched points. */
+export function setAlignment({ planId, input }: { planId: string; input: AlignmentInput }) {
+  return api.put(`/api/plans/${planId}/alignment`, plan, input);
+}
+
+export function useSetAlignment() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: setAlignment,
+    onSuccess: (saved) => {
+      queryClient.setQueryData(plansKeys.detail(saved.id), saved);
+      return queryClient.invalidateQueries({ queryKey: plansKeys.list(saved.storeId) });
+    },
+  });
+}

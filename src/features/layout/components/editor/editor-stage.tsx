@@ -1,0 +1,271 @@
+import { useEffect, useMemo, useRef, useState } from "react";
+import type Konva from "konva";
+import { Group, Layer, Line, Rect, Stage, Transformer } from "react-konva";
+import type { SceneAction } from "../../model/actions";
+import { stagePoint, stageLengthToPlan, stageToPlan, zoomAbout, type PlanPoint, type View } from "../../model/coordinates";
+import type { Scene } from "../../model/scene";
+import type { SnapGuide } from "../../model/snapping";
+import { idleState, runTool, type ActiveTool, type AnyToolState } from "../../model/tools/active-tool";
+import { toolContext } from "../../model/tools/context";
+import type { ToolEvent, ToolPreview } from "../../model/tools/tool";
+import { useShapeHandlers } from "../../hooks/use-shape-handlers";
+import { FixtureShape } from "./fixture-shape";
+import { SELECTION_STROKE } from "./fixture-look";
+import { gridSpacing, StageBackdrop, type Backdrop } from "./stage-backdrop";
+
+export interface EditorStageProps {
+  scene: Scene;
+  backdrop: Backdrop;
+  view: View;
+  onViewChange: (view: View | ((v: View) => View)) => void;
+  width: number;
+  height: number;
+  active: ActiveTool;
+  /** Space held: the pointer pans whatever the tool. */
+  panning: boolean;
+  canEdit: boolean;
+  gridM: number | null;
+  showGrid: boolean;
+  snapToFixtures: boolean;
+  apply: (actions: readonly SceneAction[], gesture?: string | null) => void;
+  endGesture: () => void;
+  onMessage: (message: string | null) => void;
+  /** Keys for the tool in hand (Escape, Enter, Backspace while drawing); set by the stage. */
+  toolKeys: React.MutableRefObject<((key: string) => boolean) | null>;
+}
+
+/** Snap and pick distances are screen distances (the same feel at every zoom). */
+const SNAP_PX = 8;
+const DRAG_PX = 4;
+
+/** Metres per screen pixel in √2 steps, so shapes re-render only when the zoom moves a step. */
+function quantise(metresPerScreenPixel: number): number {
+  return 2 ** (Math.round(Math.log2(metresPerScreenPixel) * 2) / 2);
+}
+
+function newId(): string {
+  return crypto.randomUUID();
+}
+
+export function EditorStage(p: EditorStageProps) {
+  const { scene, backdrop, view, width, height, active } = p;
+  const mpp = backdrop.metresPerPixel;
+  const sceneRef = useRef(scene);
+  sceneRef.current = scene;
+  const tolerance = stageLengthToPlan(SNAP_PX, mpp, view);
+  const snapRef = useRef({ gridM: p.gridM, snapToFixtures: p.snapToFixtures, toleranceM: tolerance });
+  snapRef.current = { gridM: p.gridM, snapToFixtures: p.snapToFixtures, toleranceM: tolerance };
+  const selectingRef = useRef(active.tool === "select" && !p.panning);
+  selectingRef.current = active.tool === "select" && !p.panning;
+  const guideX = useRef<Konva.Line>(null);
+  const guideY = useRef<Konva.Line>(null);
+  const transformer = useRef<Konva.Transformer>(null);
+  const dragGroup = useRef<Konva.Group>(null);
+  const [preview, setPreview] = useState<ToolPreview | null>(null);
+  const toolState = useRef<AnyToolState>(idleState(active));
+  const panStart = useRef<{ x: number; y: number; view: View } | null>(null);
+  const pinch = useRef<{ distance: number; centre: { x: number; y: number } } | null>(null);
+
+  const { handlers, nodes } = useShapeHandlers({
+    scene: sceneRef,
+    snap: snapRef,
+    selecting: selectingRef,
+    apply: p.apply,
+    endGesture: p.endGesture,
+    onError: p.onMessage,
+    dragGroup,
+    showGuides: (guides: readonly SnapGuide[]) => {
+      const x = guides.find((g) => g.axis === "x");
+      const y = guides.find((g) => g.axis === "y");
+      const s = sceneRef.current.plan;
+      guideX.current?.setAttrs({ visible: !!x, points: x ? [x.value, 0, x.value, s.height] : [] });
+      guideY.current?.setAttrs({ visible: !!y, points: y ? [0, y.value, s.width, y.value] : [] });
+    },
+  });
+
+  // A new tool starts idle, with nothing half drawn.
+  useEffect(() => {
+    toolState.current = idleState(active);
+    setPreview(null);
+  }, [active]);
+
+  // The transformer holds the selected outlines (points only move).
+  useEffect(() => {
+    const tr = transformer.current;
+    if (!tr) return;
+    const selected = p.canEdit && active.tool === "select" ? scene.selection.filter((id) => scene.fixtures[id] && !("point" in scene.fixtures[id])) : [];
+    tr.nodes(selected.map((id) => nodes.current.get(id)).filter((n): n is Konva.Group => n !== undefined));
+    tr.getLayer()?.batchDraw();
+  }, [scene.selection, scene.fixtures, active, p.canEdit, nodes]);
+
+  function feed(event: ToolEvent) {
+    const ctx = toolContext(sceneRef.current, { gridM: p.gridM, snapToFixtures: p.snapToFixtures, toleranceM: tolerance, dragThresholdM: stageLengthToPlan(DRAG_PX, mpp, view) }, newId);
+    const r = runTool(active, toolState.current, event, ctx);
+    toolState.current = r.state;
+    setPreview(r.preview && r.preview.kind !== "move" ? r.preview : null);
+    p.onMessage(r.message);
+    if (r.actions.length) p.apply(r.actions);
+  }
+  p.toolKeys.current = (key: string) => {
+    const state = toolState.current as { phase: string };
+    if (active.tool === "select" || state.phase === "idle") return false;
+    feed({ type: "key", key });
+    return true;
+  };
+
+  function pointer(stage: Konva.Stage): PlanPoint | null {
+    const pos = stage.getPointerPosition();
+    return pos ? stageToPlan(stagePoint(pos.x, pos.y), mpp, view) : null;
+  }
+
+  function onDown(e: Konva.KonvaEventObject<PointerEvent>) {
+    const stage = e.target.getStage();
+    if (!stage || pinch.current) return;
+    const pos = stage.getPointerPosition();
+    if (p.panning || active.tool === "pan" || e.evt.button === 1) {
+      if (pos) panStart.current = { x: pos.x, y: pos.y, view };
+      return;
+    }
+    if (!p.canEdit && active.tool !== "select") return;
+    const pt = pointer(stage);
+    if (pt) feed({ type: "pointer-down", point: pt, shift: e.evt.shiftKey });
+  }
+
+  function onMove(e: Konva.KonvaEventObject<PointerEvent>) {
+    const stage = e.target.getStage();
+    if (!stage || pinch.current) return;
+    if (panStart.current) {
+      const pos = stage.getPointerPosition();
+      const s = panStart.current;
+      if (pos) p.onViewChange({ ...s.view, panX: s.view.panX + pos.x - s.x, panY: s.view.panY + pos.y - s.y });
+      return;
+    }
+    if ((toolState.current as { phase: string }).phase === "idle" && active.tool !== "polygon") return;
+    const pt = pointer(stage);
+    if (pt) feed({ type: "pointer-move", point: pt, shift: e.evt.shiftKey });
+  }
+
+  function onUp(e: Konva.KonvaEventObject<PointerEvent>) {
+    const stage = e.target.getStage();
+    if (panStart.current) {
+      panStart.current = null;
+      return;
+    }
+    if (!stage || (toolState.current as { phase: string }).phase === "idle") return;
+    const pt = pointer(stage);
+    if (pt) feed({ type: "pointer-up", point: pt, shift: e.evt.shiftKey });
+  }
+
+  function onWheel(e: Konva.KonvaEventObject<WheelEvent>) {
+    e.evt.preventDefault();
+    const pos = e.target.getStage()?.getPointerPosition();
+    if (!pos) return;
+    // Trackpad pinches arrive as wheel events with ctrlKey and small deltas: zoom smoothly.
+    const factor = Math.exp(-e.evt.deltaY * (e.evt.ctrlKey ? 0.01 : 0.0015));
+    p.onViewChange((v) => zoomAbout(v, stagePoint(pos.x, pos.y), factor));
+  }
+
+  function onTouchMove(e: Konva.KonvaEventObject<TouchEvent>) {
+    const t = e.evt.touches;
+    if (t.length !== 2) return;
+    e.evt.preventDefault();
+    const stage = e.target.getStage();
+    const box = stage?.container().getBoundingClientRect();
+    if (!box) return;
+    const a = { x: t[0].clientX - box.left, y: t[0].clientY - box.top };
+    const b = { x: t[1].clientX - box.left, y: t[1].clientY - box.top };
+    const distance = Math.hypot(a.x - b.x, a.y - b.y);
+    const centre = { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 };
+    const last = pinch.current;
+    pinch.current = { distance, centre };
+    toolState.current = idleState(active);
+    setPreview(null);
+    if (!last || last.distance === 0) return;
+    p.onViewChange((v) => {
+      const zoomed = zoomAbout(v, stagePoint(centre.x, centre.y), distance / last.distance);
+      return { ...zoomed, panX: zoomed.panX + centre.x - last.centre.x, panY: zoomed.panY + centre.y - last.centre.y };
+    });
+  }
+
+  const unit = quantise(mpp / view.zoom);
+  const k = 1 / mpp;
+  const draggable = p.canEdit && active.tool === "select" && !p.panning;
+  const selected = useMemo(() => new Set(scene.selection), [scene.selection]);
+  const gridShown = p.showGrid ? Math.max(p.gridM ?? 1, gridSpacing(unit)) : null;
+
+  return (
+    <Stage
+      width={width}
+      height={height}
+      x={view.panX}
+      y={view.panY}
+      scaleX={view.zoom}
+      scaleY={view.zoom}
+      onPointerDown={onDown}
+      onPointerMove={onMove}
+      onPointerUp={onUp}
+      onDblClick={(e) => {
+        const stage = e.target.getStage();
+        const pt = stage && pointer(stage);
+        if (pt && active.tool === "polygon") feed({ type: "double-click", point: pt });
+      }}
+      onWheel={onWheel}
+      onTouchMove={onTouchMove}
+      onTouchEnd={() => {
+        pinch.current = null;
+      }}
+      style={{ cursor: p.panning || active.tool === "pan" ? "grab" : active.tool === "select" ? "default" : "crosshair", touchAction: "none" }}
+    >
+      <StageBackdrop backdrop={backdrop} plan={scene.plan} gridM={gridShown} />
+      <Layer listening={active.tool === "select" && !p.panning}>
+        <Group scaleX={k} scaleY={k}>
+          {scene.order.map((id) => (
+            <FixtureShape key={id} fixture={scene.fixtures[id]} selected={selected.has(id)} draggable={draggable} unit={unit} handlers={handlers} />
+          ))}
+        </Group>
+      </Layer>
+      {/* Dragged fixtures and the transformer live here, so a drag redraws only this layer. */}
+      <Layer listening={active.tool === "select" && !p.panning}>
+        <Group ref={dragGroup} scaleX={k} scaleY={k} />
+        <Transformer
+          ref={transformer}
+          rotateEnabled
+          keepRatio={false}
+          ignoreStroke
+          anchorSize={14}
+          anchorStroke={SELECTION_STROKE}
+          borderStroke={SELECTION_STROKE}
+          rotationSnaps={[0, 45, 90, 135, 180, 225, 270, 315]}
+          rotationSnapTolerance={4}
+          boundBoxFunc={(old, next) => (Math.abs(next.width) < 4 || Math.abs(next.height) < 4 ? old : next)}
+        />
+      </Layer>
+      <Layer listening={false}>
+        <Group scaleX={k} scaleY={k}>
+          <Line ref={guideX} visible={false} stroke="#CC79A7" strokeWidth={1.5} dash={[6, 4]} strokeScaleEnabled={false} />
+          <Line ref={guideY} visible={false} stroke="#CC79A7" strokeWidth={1.5} dash={[6, 4]} strokeScaleEnabled={false} />
+          <PreviewShape preview={preview} />
+        </Group>
+      </Layer>
+    </Stage>
+  );
+}
+
+function PreviewShape({ preview }: { preview: ToolPreview | null }) {
+  if (!preview) return null;
+  if (preview.kind === "marquee") {
+    const b = preview.box;
+    return <Rect x={b.minX} y={b.minY} width={b.maxX - b.minX} height={b.maxY - b.minY} stroke="#1f4e5f" strokeWidth={1.5} dash={[5, 4]} fill="rgba(31,78,95,0.08)" strokeScaleEnabled={false} />;
+  }
+  if (preview.kind !== "outline") return null;
+  const vs = preview.hover ? [...preview.vertices, preview.hover] : preview.vertices;
+  return (
+    <>
+      <Line points={vs.flatMap((v) => [v.x, v.y])} closed={preview.closed} stroke="#1f4e5f" strokeWidth={2} dash={[6, 4]} fill={preview.closed ? "rgba(31,78,95,0.12)" : undefined} strokeScaleEnabled={false} />
+      {preview.vertices.map((v, i) => (
+        <Rect key={i} x={v.x} y={v.y} width={0.001} height={0.001} stroke="#1f4e5f" strokeWidth={8} strokeScaleEnabled={false} />
+      ))}
+    </>
+  );
+}
+

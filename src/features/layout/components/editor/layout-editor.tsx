@@ -1,0 +1,280 @@
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
+import type { FixtureKind } from "../../../../../server/contracts/fixture-kinds";
+import type { FixturesResponse, Plan } from "../../../../../server/contracts/plans";
+import type { LengthPreference } from "../../../../../server/domain/units/format-units";
+import { Alert } from "../../../../components/ui/alert";
+import { Button } from "../../../../components/ui/button";
+import { Spinner } from "../../../../components/ui/spinner";
+import { useHtmlImage } from "../../../../lib/use-html-image";
+import { getFixtures } from "../../api/get-fixtures";
+import { useAutosave } from "../../hooks/use-autosave";
+import { useEditorHistory } from "../../hooks/use-editor-history";
+import { useEditorShortcuts, VIEW_KEY_HELP } from "../../hooks/use-editor-shortcuts";
+import { array, duplicate, remove, select } from "../../model/actions";
+import { fitView, stagePoint, zoomAbout, type View } from "../../model/coordinates";
+import { duplicateOffset } from "../../model/duplicate-offset";
+import { unionBounds } from "../../model/fixture-geometry";
+import { createScene, sceneFixtures, selectedFixtures } from "../../model/scene";
+import { SHORTCUT_HELP } from "../../model/shortcuts";
+import { drawTool, type ActiveTool } from "../../model/tools/active-tool";
+import { ScaleBar } from "../plan/scale-bar";
+import { ArrayDialog } from "./array-dialog";
+import { EditorStage } from "./editor-stage";
+import { EditorToolbar, type DrawShape } from "./editor-toolbar";
+import { FixtureTable } from "./fixture-table";
+import { PropertiesPanel, type SystemOption } from "./properties-panel";
+import { SaveStatus } from "./save-status";
+import type { Backdrop } from "./stage-backdrop";
+
+/** A blank plan has no pixels: give it a virtual image about 2000 px on its long side. */
+const BLANK_LONG_SIDE_PX = 2000;
+
+function backdropOf(plan: Plan, bounds: { width: number; height: number }, image: HTMLImageElement | null): Backdrop {
+  if (plan.image && plan.metresPerPixel) return { image, widthPx: plan.image.widthPx, heightPx: plan.image.heightPx, metresPerPixel: plan.metresPerPixel };
+  const mpp = Math.max(bounds.width, bounds.height) / BLANK_LONG_SIDE_PX;
+  return { image: null, widthPx: bounds.width / mpp, heightPx: bounds.height / mpp, metresPerPixel: mpp };
+}
+
+export interface LayoutEditorProps {
+  plan: Plan;
+  initial: FixturesResponse;
+  systems: readonly SystemOption[];
+  preference: LengthPreference;
+  canEdit: boolean;
+}
+
+/** The layout editor: the plan with its fixtures, the tools, the selection's properties and the list. */
+export function LayoutEditor(props: LayoutEditorProps) {
+  const image = useHtmlImage(props.plan.image?.displayUrl ?? null);
+  if (props.plan.image && image.status === "loading") return <Spinner label="Loading the drawing…" />;
+  if (props.plan.image && image.status === "failed") return <Alert tone="error">The plan's drawing could not be loaded. Reload the page to try again.</Alert>;
+  return <EditorBody {...props} image={image.image} />;
+}
+
+function EditorBody({ plan, initial, systems, preference, canEdit, image }: LayoutEditorProps & { image: HTMLImageElement | null }) {
+  const bounds = initial.bounds!;
+  const backdrop = useMemo(() => backdropOf(plan, bounds, image), [plan, bounds, image]);
+  const editor = useEditorHistory(() => createScene(bounds, initial.fixtures));
+  const { scene } = editor;
+  const autosave = useAutosave(plan.id, scene, initial.layoutRevision, canEdit);
+  const box = useRef<HTMLDivElement>(null);
+  const [size, setSize] = useState({ width: 800, height: 560 });
+  const [view, setView] = useState<View>({ panX: 0, panY: 0, zoom: 1 });
+  const [kind, setKind] = useState<FixtureKind>("open-case");
+  const [shape, setShape] = useState<DrawShape>("rectangle");
+  const [active, setActive] = useState<ActiveTool>({ tool: "select" });
+  const [gridM, setGridM] = useState<number | null>(preference === "ft-in" ? 0.1524 : 0.1);
+  const [snapToFixtures, setSnapToFixtures] = useState(true);
+  const [message, setMessage] = useState<string | null>(null);
+  const [arrayOpen, setArrayOpen] = useState(false);
+  const [panning, setPanning] = useState(false);
+  const [reloading, setReloading] = useState(false);
+  const toolKeys = useRef<((key: string) => boolean) | null>(null);
+  const fitted = useRef(false);
+
+  useEffect(() => {
+    const el = box.current;
+    if (!el) return;
+    const measure = () => {
+      const width = Math.max(320, el.clientWidth);
+      const height = Math.max(360, Math.min(window.innerHeight - 260, 900));
+      setSize({ width, height });
+      if (!fitted.current) {
+        fitted.current = true;
+        setView(fitView(backdrop.widthPx, backdrop.heightPx, width, height));
+      }
+    };
+    measure();
+    const ro = new ResizeObserver(measure);
+    ro.observe(el);
+    return () => ro.disconnect();
+  }, [backdrop]);
+
+  const zoom = useCallback(
+    (direction: "in" | "out" | "fit") => {
+      if (direction === "fit") setView(fitView(backdrop.widthPx, backdrop.heightPx, size.width, size.height));
+      else setView((v) => zoomAbout(v, stagePoint(size.width / 2, size.height / 2), direction === "in" ? 1.25 : 0.8));
+    },
+    [backdrop, size],
+  );
+
+  const chooseTool = useCallback(
+    (tool: "select" | "pan" | DrawShape, k: FixtureKind = kind) => {
+      if (tool === "select" || tool === "pan") setActive({ tool });
+      else {
+        setShape(tool);
+        setActive(drawTool(k, tool));
+      }
+      setMessage(null);
+    },
+    [kind],
+  );
+
+  const doDuplicate = useCallback(() => {
+    if (scene.selection.length === 0) return;
+    const [dx, dy] = duplicateOffset(scene, scene.selection);
+    editor.apply([duplicate(scene.selection, dx, dy, () => crypto.randomUUID())]);
+  }, [scene, editor]);
+
+  const doDelete = useCallback(() => {
+    if (scene.selection.length) editor.apply([remove(scene.selection)]);
+  }, [scene.selection, editor]);
+
+  useEditorShortcuts({ enabled: true, canEdit, scene, gridM, editor, toolKeys, onDuplicate: doDuplicate, onDelete: doDelete, onTool: chooseTool, onZoom: zoom, onPanning: setPanning, onEscape: () => (active.tool !== "select" ? chooseTool("select") : editor.apply([select([])])) });
+
+  async function reloadTheirs() {
+    setReloading(true);
+    try {
+      const fresh = await getFixtures(plan.id);
+      const loaded = createScene(fresh.bounds ?? bounds, fresh.fixtures);
+      editor.reset(loaded);
+      autosave.rebase(loaded, fresh.layoutRevision);
+    } finally {
+      setReloading(false);
+    }
+  }
+
+  const selection = selectedFixtures(scene);
+  const selBox = unionBounds(selection);
+  const fixtures = useMemo(() => sceneFixtures(scene), [scene]);
+  const onSelectRow = useCallback((id: string, additive: boolean) => editor.apply([select([id], additive ? "toggle" : "replace")]), [editor]);
+  const state = autosave.state;
+
+  return (
+    <div className="space-y-3">
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <EditorToolbar
+          active={active}
+          kind={kind}
+          canEdit={canEdit}
+          canUndo={editor.history.past.length > 0}
+          canRedo={editor.history.future.length > 0}
+          hasSelection={scene.selection.length > 0}
+          gridM={gridM}
+          snapToFixtures={snapToFixtures}
+          preference={preference}
+          onTool={chooseTool}
+          onKind={(k) => {
+            setKind(k);
+            if (active.tool !== "select" && active.tool !== "pan") setActive(drawTool(k, shape));
+          }}
+          onUndo={editor.undo}
+          onRedo={editor.redo}
+          onDuplicate={doDuplicate}
+          onArray={() => setArrayOpen(true)}
+          onDelete={doDelete}
+          onZoom={zoom}
+          onGrid={setGridM}
+          onSnapToFixtures={setSnapToFixtures}
+        />
+        {canEdit ? <SaveStatus state={state} onRetry={autosave.saveNow} /> : <p className="font-bold">Read only</p>}
+      </div>
+      {state.status === "conflict" ? (
+        <Alert tone="error" title="Someone else changed this layout">
+          <p>{state.message}</p>
+          <p>Your recent changes are still on screen but were not saved. Reload their version to go on editing; then redo your change.</p>
+          <Button className="mt-2" busy={reloading} onClick={() => void reloadTheirs()}>
+            Reload theirs
+          </Button>
+        </Alert>
+      ) : null}
+      {state.status === "invalid" ? (
+        <Alert tone="error" title="These problems keep the layout from being saved">
+          <ul className="list-disc pl-5">
+            {state.errors.slice(0, 6).map((e) => (
+              <li key={e.path + e.message}>
+                {describePath(e.path, fixtures)} {e.message}
+              </li>
+            ))}
+          </ul>
+        </Alert>
+      ) : null}
+      {message ? <Alert tone="note">{message}</Alert> : null}
+      <div className="grid gap-3 xl:grid-cols-[minmax(0,1fr)_22rem]">
+        <div className="relative">
+          <div
+            ref={box}
+            className="overflow-hidden rounded-md bg-paper edge"
+            data-testid="layout-stage"
+            data-zoom={view.zoom}
+            data-pan-x={view.panX}
+            data-pan-y={view.panY}
+            data-mpp={backdrop.metresPerPixel}
+            aria-label="Floor plan with fixtures. The list below holds the same fixtures for keyboard and screen reader use."
+            role="application"
+          >
+            <EditorStage
+              scene={scene}
+              backdrop={backdrop}
+              view={view}
+              onViewChange={setView}
+              width={size.width}
+              height={size.height}
+              active={active}
+              panning={panning}
+              canEdit={canEdit && state.status !== "conflict"}
+              gridM={gridM}
+              showGrid={backdrop.image === null || gridM !== null}
+              snapToFixtures={snapToFixtures}
+              apply={editor.apply}
+              endGesture={editor.endGesture}
+              onMessage={setMessage}
+              toolKeys={toolKeys}
+            />
+          </div>
+          <div className="pointer-events-none absolute bottom-2 left-2 rounded bg-surface/90 px-2 py-1 edge">
+            <ScaleBar metresPerScreenPixel={backdrop.metresPerPixel / view.zoom} preference={preference} maxPixels={150} />
+          </div>
+        </div>
+        <aside aria-labelledby="props-heading" className="space-y-3 rounded-md bg-surface p-3 edge">
+          <h2 id="props-heading" className="text-lg font-bold">
+            Selection
+          </h2>
+          {arrayOpen && selBox ? (
+            <ArrayDialog
+              size={{ width: selBox.maxX - selBox.minX, depth: selBox.maxY - selBox.minY }}
+              preference={preference}
+              onClose={() => setArrayOpen(false)}
+              onArray={(count, spacing, direction) => {
+                try {
+                  editor.apply([array(scene.selection, count, spacing, direction, () => crypto.randomUUID())]);
+                  setArrayOpen(false);
+                } catch (e) {
+                  setMessage(e instanceof RangeError ? e.message : "The copies could not be made.");
+                }
+              }}
+            />
+          ) : null}
+          <PropertiesPanel selection={selection} systems={systems} preference={preference} canEdit={canEdit} apply={editor.apply} />
+          <details>
+            <summary className="min-h-11 cursor-pointer py-2 font-bold">Keyboard shortcuts</summary>
+            <dl className="grid grid-cols-[max-content_1fr] gap-x-3 text-sm">
+              {[...SHORTCUT_HELP, ...VIEW_KEY_HELP].map(({ keys, does }) => (
+                <div key={keys} className="contents">
+                  <dt className="font-bold">{keys}</dt>
+                  <dd>{does}</dd>
+                </div>
+              ))}
+            </dl>
+          </details>
+        </aside>
+      </div>
+      <section aria-labelledby="list-heading" className="space-y-2">
+        <h2 id="list-heading" className="text-lg font-bold">
+          All fixtures ({fixtures.length})
+        </h2>
+        <FixtureTable fixtures={fixtures} selection={scene.selection} systems={systems} preference={preference} onSelect={onSelectRow} />
+      </section>
+    </div>
+  );
+}
+
+/** "fixtures.3.polygon.1" → "Dairy 4 (fixture 4), corner 2:" in words the lead tech can act on. */
+function describePath(path: string, fixtures: readonly { label: string }[]): string {
+  const parts = path.split(".");
+  const i = Number(parts[1]);
+  const f = fixtures[i];
+  const who = f ? `${f.label || "Unlabelled fixture"} (fixture ${i + 1})` : path;
+  if (parts[2] === "polygon" && parts[3] !== undefined) return `${who}, corner ${Number(parts[3]) + 1}:`;
+  return parts[2] ? `${who}, ${parts[2]}:` : `${who}:`;
+}

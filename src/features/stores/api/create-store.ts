@@ -1,0 +1,18 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { store, storeInput, type StoreInput } from "../../../../server/contracts/stores";
+import { api } from "../../../lib/api-client";
+import { storesKeys } from "./stores-keys";
+
+export const createStoreInput = storeInput;
+
+export function createStore(input: StoreInput) {
+  return api.post("/api/stores", store, input);
+}
+
+export function useCreateStore() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: createStore,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: storesKeys.lists() }),
+  });
+}

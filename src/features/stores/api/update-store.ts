@@ -1,0 +1,21 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { store, storeUpdateInput, type StoreUpdateInput } from "../../../../server/contracts/stores";
+import { api } from "../../../lib/api-client";
+import { storesKeys } from "./stores-keys";
+
+export const updateStoreInput = storeUpdateInput;
+
+export function updateStore({ id, input }: { id: string; input: StoreUpdateInput }) {
+  return api.patch(`/api/stores/${id}`, store, input);
+}
+
+export function useUpdateStore() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateStore,
+    onSuccess: (saved) => {
+      queryClient.setQueryData(storesKeys.detail(saved.id), saved);
+      return queryClient.invalidateQueries({ queryKey: storesKeys.lists() });
+    },
+  });
+}

@@ -1,0 +1,18 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { system, systemInput, type SystemInput } from "../../../../server/contracts/systems";
+import { api } from "../../../lib/api-client";
+import { systemsKeys } from "./systems-keys";
+
+export const createSystemInput = systemInput;
+
+export function createSystem({ storeId, input }: { storeId: string; input: SystemInput }) {
+  return api.post(`/api/stores/${storeId}/systems`, system, input);
+}
+
+export function useCreateSystem() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: createSystem,
+    onSuccess: (_saved, { storeId }) => queryClient.invalidateQueries({ queryKey: systemsKeys.list(storeId) }),
+  });
+}

@@ -1,0 +1,15 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { api } from "../../../lib/api-client";
+import { systemsKeys } from "./systems-keys";
+
+export function deleteSystem({ id }: { id: string; storeId: string }) {
+  return api.delete(`/api/systems/${id}`);
+}
+
+export function useDeleteSystem() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: deleteSystem,
+    onSuccess: (_r, { storeId }) => queryClient.invalidateQueries({ queryKey: systemsKeys.list(storeId) }),
+  });
+}

@@ -1,0 +1,18 @@
+import { queryOptions, useQuery } from "@tanstack/react-query";
+import { refrigerantListResponse } from "../../../../server/contracts/systems";
+import { api } from "../../../lib/api-client";
+import { systemsKeys } from "./systems-keys";
+
+/** The catalogue with GWP on the company's chosen basis and each refrigerant's cautions. */
+export async function getRefrigerants(signal?: AbortSignal) {
+  const { refrigerants } = await api.get("/api/refrigerants", refrigerantListResponse, signal);
+  return refrigerants;
+}
+
+export function refrigerantsQueryOptions() {
+  return queryOptions({ queryKey: systemsKeys.refrigerants(), queryFn: ({ signal }) => getRefrigerants(signal), staleTime: 60 * 60 * 1000 });
+}
+
+export function useRefrigerants() {
+  return useQuery(refrigerantsQueryOptions());
+}

@@ -1,0 +1,17 @@
+import { queryOptions, useQuery } from "@tanstack/react-query";
+import { systemListResponse } from "../../../../server/contracts/systems";
+import { api } from "../../../lib/api-client";
+import { systemsKeys } from "./systems-keys";
+
+export async function getSystems(storeId: string, signal?: AbortSignal) {
+  const { systems } = await api.get(`/api/stores/${storeId}/systems`, systemListResponse, signal);
+  return systems;
+}
+
+export function systemsQueryOptions(storeId: string) {
+  return queryOptions({ queryKey: systemsKeys.list(storeId), queryFn: ({ signal }) => getSystems(storeId, signal) });
+}
+
+export function useSystems(storeId: string) {
+  return useQuery(systemsQueryOptions(storeId));
+}

@@ -1,0 +1,18 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { system, systemUpdateInput, type SystemUpdateInput } from "../../../../server/contracts/systems";
+import { api } from "../../../lib/api-client";
+import { systemsKeys } from "./systems-keys";
+
+export const updateSystemInput = systemUpdateInput;
+
+export function updateSystem({ id, input }: { id: string; input: SystemUpdateInput }) {
+  return api.patch(`/api/systems/${id}`, system, input);
+}
+
+export function useUpdateSystem() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateSystem,
+    onSuccess: (saved) => queryClient.invalidateQueries({ queryKey: systemsKeys.list(saved.storeId) }),
+  });
+}

@@ -1,0 +1,28 @@
+import type { Caution } from "../../../../server/contracts/systems";
+
+/**
+ * The usual cautions for the picked refrigerant, beside the form. They inform; local codes and
+ * certified practice govern, and the list says so.
+ */
+export function RefrigerantCautions({ refrigerantName, cautions }: { refrigerantName: string | null; cautions: readonly Caution[] }) {
+  return (
+    <aside aria-labelledby="cautions-heading" className="space-y-3 rounded-md border-l-4 border-note bg-note-soft p-4 edge">
+      <h3 id="cautions-heading" className="font-bold">
+        {refrigerantName ? `Working safely with ${refrigerantName}` : "Safety cautions"}
+      </h3>
+      {refrigerantName === null ? <p>Pick a refrigerant to see the cautions for its safety class.</p> : null}
+      <ul className="space-y-2">
+        {cautions.map((c) => (
+          <li key={c.id}>
+            <p>
+              <span className="font-bold">{c.level === "warning" ? "Warning: " : "Note: "}</span>
+              {c.text}
+            </p>
+            <p className="text-sm text-muted">Source: {c.source}</p>
+          </li>
+        ))}
+      </ul>
+      <p className="font-bold">These are the usual cautions only. Local codes and certified practice govern the work.</p>
+    </aside>
+  );
+}

@@ -1,0 +1,62 @@
+import { useId } from "react";
+import type { RefrigerantSummary } from "../../../../server/contracts/systems";
+import { FieldError } from "../../../components/ui/field-error";
+
+/** An R-number picker that shows, for the choice, its safety class and its GWP with basis and source. */
+export function RefrigerantPicker({
+  refrigerants,
+  value,
+  onChange,
+  error,
+}: {
+  refrigerants: readonly RefrigerantSummary[];
+  value: string;
+  onChange: (id: string) => void;
+  error?: string;
+}) {
+  const id = useId();
+  const picked = refrigerants.find((r) => r.id === value) ?? null;
+  return (
+    <div>
+      <label htmlFor={id} className="block font-bold">
+        Refrigerant
+      </label>
+      <select
+        id={id}
+        value={value}
+        onChange={(e) => onChange(e.target.value)}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={`${id}-facts`}
+        className={`mt-1 block min-h-11 w-full rounded-md bg-surface px-3 py-2 text-ink edge ${error ? "border-danger" : ""}`}
+      >
+        <option value="">Choose a refrigerant…</option>
+        {refrigerants.map((r) => (
+          <option key={r.id} value={r.id}>
+            {r.id} · {r.safetyClass}
+            {r.gwp ? ` · GWP ${r.gwp.value}` : ""}
+          </option>
+        ))}
+      </select>
+      <div id={`${id}-facts`} className="mt-1 text-sm text-muted" aria-live="polite">
+        {picked ? (
+          <>
+            <p>
+              {picked.name}: safety class <span className="font-bold text-ink">{picked.safetyClass}</span> ({picked.safetyClassSource}).
+            </p>
+            <p>
+              {picked.gwp ? (
+                <>
+                  GWP-100 <span className="font-bold text-ink">{picked.gwp.value}</span> on the {picked.gwp.basis} basis ({picked.gwp.source})
+                  {picked.gwpNote ? `; ${picked.gwpNote}` : ""}.
+                </>
+              ) : (
+                <>GWP not known on the company's basis{picked.gwpNote ? `: ${picked.gwpNote}` : ""}.</>
+              )}
+            </p>
+          </>
+        ) : null}
+      </div>
+      <FieldError id={`${id}-error`} label="Refrigerant" message={error} />
+    </div>
+  );
+}

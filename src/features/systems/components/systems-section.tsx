@@ -1,0 +1,92 @@
+import { useState } from "react";
+import { APPLIANCE_TYPE_NAMES, type System } from "../../../../server/contracts/systems";
+import { formatMass, type MassPreference } from "../../../../server/domain/units/format-units";
+import { Alert } from "../../../components/ui/alert";
+import { Button } from "../../../components/ui/button";
+import { DataTable } from "../../../components/ui/data-table";
+import { EmptyState } from "../../../components/ui/empty-state";
+import { QueryError } from "../../../components/ui/query-error";
+import { Spinner } from "../../../components/ui/spinner";
+import { formErrorMessage } from "../../../lib/form-errors";
+import { useDeleteSystem } from "../api/delete-system";
+import { useSystems } from "../api/get-systems";
+import { SystemForm } from "./system-form";
+
+/** The store page's systems: racks and condensing units with refrigerant, charge and detection. */
+export function SystemsSection({ storeId, canEdit, massUnit }: { storeId: string; canEdit: boolean; massUnit: MassPreference }) {
+  const systems = useSystems(storeId);
+  const [editing, setEditing] = useState<string | "new" | null>(null);
+  const [confirmDelete, setConfirmDelete] = useState<string | null>(null);
+  const del = useDeleteSystem();
+  const editedSystem = systems.data?.find((s) => s.id === editing);
+  const deleteError = formErrorMessage(del.error);
+
+  return (
+    <section aria-labelledby="systems-heading" className="space-y-3">
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <h2 id="systems-heading" className="text-xl font-bold">
+          Systems
+        </h2>
+        {canEdit && editing === null ? <Button onClick={() => setEditing("new")}>Add system</Button> : null}
+      </div>
+      {systems.isPending ? <Spinner label="Loading systems…" /> : null}
+      {systems.isError ? <QueryError error={systems.error} what="the systems" onRetry={() => void systems.refetch()} /> : null}
+      {deleteError ? <Alert tone="error">{deleteError}</Alert> : null}
+      {editing === "new" || editedSystem ? (
+        <SystemForm key={editing} storeId={storeId} system={editedSystem} massUnit={massUnit} onDone={() => setEditing(null)} onCancel={() => setEditing(null)} />
+      ) : null}
+      {systems.data && systems.data.length === 0 && editing === null ? (
+        <EmptyState title="No systems yet">Add the store's racks and condensing units, so fixtures can be linked to them and leak rates worked out.</EmptyState>
+      ) : null}
+      {systems.data && systems.data.length > 0 ? (
+        <DataTable<System>
+          caption="Systems"
+          rows={systems.data}
+          rowKey={(s) => s.id}
+          columns={[
+            { header: "System", cell: (s) => <span className="font-bold">{s.name}</span> },
+            {
+              header: "Refrigerant",
+              cell: (s) => (
+                <>
+                  {s.refrigerantId} <span className="text-muted">({s.refrigerant.safetyClass})</span>
+                </>
+              ),
+            },
+            { header: "GWP", cell: (s) => (s.refrigerant.gwp ? `${s.refrigerant.gwp.value} (${s.refrigerant.gwp.basis})` : "not known") },
+            { header: "Full charge", cell: (s) => formatMass(s.fullChargeKg, massUnit, 1) },
+            { header: "Appliance type", cell: (s) => APPLIANCE_TYPE_NAMES[s.applianceType] },
+            { header: "Automatic leak detection", cell: (s) => (s.automaticLeakDetection ? "Yes" : "No") },
+            ...(canEdit
+              ? [
+                  {
+                    header: "Actions",
+                    cell: (s: System) =>
+                      confirmDelete === s.id ? (
+                        <div className="flex flex-wrap gap-2">
+                          <Button variant="danger" busy={del.isPending} onClick={() => del.mutate({ id: s.id, storeId }, { onSettled: () => setConfirmDelete(null) })}>
+                            Delete {s.name}
+                          </Button>
+                          <Button variant="secondary" onClick={() => setConfirmDelete(null)}>
+                            Keep
+                          </Button>
+                        </div>
+                      ) : (
+                        <div className="flex flex-wrap gap-2">
+                          <Button variant="secondary" onClick={() => setEditing(s.id)} aria-label={`Edit ${s.name}`}>
+                            Edit
+                          </Button>
+                          <Button variant="quiet" onClick={() => setConfirmDelete(s.id)} aria-label={`Delete ${s.name}`}>
+                            Delete
+                          </Button>
+                        </div>
+                      ),
+                  },
+                ]
+              : []),
+          ]}
+        />
+      ) : null}
+    </section>
+  );
+}

@@ -1,0 +1,110 @@
+import { afterAll, beforeAll, expect, it } from "vitest";
+import type { Browser, Page } from "playwright-core";
+import { chargeAdditions, systems } from "../../server/db/schema/index";
+import { launchBrowser, newContext } from "../helpers/browser";
+import { startE2eServer, type E2eServer } from "../helpers/e2e-server";
+import { PASSWORD, seedCompany } from "../helpers/fixtures";
+import { signInThroughForm } from "../helpers/e2e-session";
+
+let server: E2eServer;
+let browser: Browser;
+let co: Awaited<ReturnType<typeof seedCompany>>;
+let systemId: string;
+
+const KG_PER_LB = 0.45359237; // NIST SP 811
+const localDay = (daysAgo: number) => {
+  const today = new Intl.DateTimeFormat("en-CA", { timeZone: "America/New_York", year: "numeric", month: "2-digit", day: "2-digit" }).format(new Date());
+  return new Date(Date.parse(`${today}T00:00:00Z`) - daysAgo * 86_400_000).toISOString().slice(0, 10);
+};
+
+beforeAll(async () => {
+  server = await startE2eServer();
+  co = await seedCompany(server.ctx, "Fernhollow Grocers");
+  const [row] = await server.ctx.db
+    .insert(systems)
+    .values({ companyId: co.company.id, storeId: co.store.id, name: "Rack A – dairy line", refrigerantId: "R-448A", fullChargeKg: 100 * KG_PER_LB, applianceType: "commercial-refrigeration" })
+    .returning();
+  systemId = row.id;
+  await server.ctx.db.insert(chargeAdditions).values({
+    companyId: co.company.id, systemId, addedOn: localDay(55), amountKg: 3 * KG_PER_LB, enteredValue: 3, enteredUnit: "lb",
+    technicianId: co.people.technician.userId, reason: "Routine top-up", recordedById: co.people.technician.userId,
+  });
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.close();
+});
+
+async function openToday(page: Page) {
+  await page.getByRole("link", { name: "Today", exact: true }).click();
+  await page.getByRole("heading", { name: "Systems", exact: true }).waitFor();
+}
+
+it("a technician confirms a leak and records charge added; the leak rate and Today change; the owner's digest arrives; the repair clears the deadline", async () => {
+  const techContext = await newContext(browser);
+  const tech = await techContext.newPage();
+  const failures: string[] = [];
+  tech.on("pageerror", (e) => failures.push(String(e)));
+  await signInThroughForm(tech, server.url, co.people.technician.email, PASSWORD);
+
+  // Today → the system's records.
+  await openToday(tech);
+  await tech.getByRole("link", { name: "Rack A – dairy line" }).click();
+  await tech.getByRole("heading", { name: "Leak rate at every addition" }).waitFor();
+
+  // A finding by hand, then confirmed at a component.
+  await tech.getByLabel("What was found").fill("Oil stain and 6 ppm at the flare under Dairy 2");
+  await tech.getByRole("button", { name: "Record a suspected leak" }).click();
+  await tech.getByTestId("finding-status").filter({ hasText: "suspected" }).waitFor();
+  await tech.getByRole("button", { name: "Confirm the leak", exact: true }).click();
+  await tech.getByLabel("Component").selectOption("flare");
+  await tech.getByRole("button", { name: "Save: confirm the leak" }).click();
+  await tech.getByTestId("finding-status").filter({ hasText: "confirmed" }).waitFor();
+
+  // Charge added 25 days ago, 30 days after the previous 3 lb: 5/100 ÷ (30/365) × 100 = 60.8 %
+  // (40 CFR 84.102 annualizing; standards.md §1), above the 20 % threshold (84.106 [S:R4]).
+  await tech.getByRole("link", { name: "system records" }).click();
+  await tech.getByLabel("Date added").fill(localDay(25));
+  await tech.getByLabel("Amount added").fill("5");
+  await tech.getByLabel("Unit", { exact: true }).selectOption("lb");
+  await tech.getByLabel("Reason").fill("Recharge after finding the flare leak");
+  await tech.getByRole("button", { name: "Record charge added" }).click();
+  await tech.getByText("60.8 % — above threshold").waitFor();
+
+  // The owner's Today: repair due 30 days after the rate was learned, i.e. in 5 days.
+  const ownerContext = await newContext(browser);
+  const owner = await ownerContext.newPage();
+  owner.on("pageerror", (e) => failures.push(String(e)));
+  await signInThroughForm(owner, server.url, co.people.owner.email, PASSWORD);
+  await owner.waitForURL(/\/today$/); // owners land on Today
+  await owner.getByRole("heading", { name: "Systems over threshold" }).waitFor();
+  const repairDue = localDay(-5);
+  await owner.getByRole("link", { name: /Repair: leak rate 60\.8 %/ }).waitFor();
+  await owner.getByText(repairDue).first().waitFor();
+  await owner.getByRole("link", { name: "60.8 %", exact: true }).waitFor();
+
+  // The digest now, then read it in the Outbox.
+  await owner.getByRole("button", { name: "Send today's digest now" }).click();
+  await owner.getByText(/Sent today's digest/).waitFor();
+  await owner.getByRole("link", { name: "Outbox" }).first().click();
+  await owner.getByRole("link", { name: /due in the next 7 days – Fernhollow Grocers/ }).click();
+  await owner.getByText(/Repair: leak rate 60\.8 %/).first().waitFor();
+  await owner.getByText(new RegExp(`${repairDue} \\(due soon`)).waitFor();
+
+  // The technician records the repair; the deadline and the over-threshold line go.
+  await tech.getByRole("link", { name: /flare \(confirmed\)|flare · confirmed/ }).first().click();
+  await tech.getByRole("button", { name: "Record the repair", exact: true }).click();
+  await tech.getByLabel("Note").fill("New flare nut, leak-tested with nitrogen");
+  await tech.getByRole("button", { name: "Save: record the repair" }).click();
+  await tech.getByTestId("finding-status").filter({ hasText: "repaired" }).waitFor();
+
+  await openToday(owner);
+  await owner.getByText("No system has an unrepaired leak rate above its threshold.").waitFor();
+  expect(await owner.getByRole("link", { name: /Repair: leak rate/ }).count()).toBe(0);
+  await owner.getByRole("cell", { name: "repaired" }).waitFor();
+
+  expect(failures).toEqual([]);
+  await techContext.close();
+  await ownerContext.close();
+});
