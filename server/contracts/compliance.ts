@@ -88,6 +88,8 @@ export const systemRecords = z.object({
   latest: leakRateRow.nullable(),
   overThreshold: z.boolean(),
   chronic: z.array(z.object({ year: z.number(), addedKg: z.number(), percent: z.number(), chronic: z.boolean(), reportDue: z.string().nullable() })),
+  /** The chronic-leaker rule of the part in force, from the profile data (null when none applies). */
+  chronicRule: z.object({ percent: z.number(), reportBy: z.string(), source: z.string() }).nullable(),
   co2e: z.object({ known: z.boolean(), tonnes: z.number().nullable(), gwp: z.number().nullable(), source: z.string() }),
   leakCheck: z
     .object({

@@ -47,6 +47,8 @@ export const findingDetail = finding.extend({
   storeName: z.string(),
   timeZone: z.string(),
   systemName: z.string().nullable(),
+  /** The fixture's label on the plan ("Dairy 3"), when the finding names one. */
+  fixtureLabel: z.string().nullable(),
   refrigerantId: z.string().nullable(),
   dismissReason: z.enum(DISMISS_REASONS).nullable(),
   nextActions: z.array(z.enum(["confirm", "repair", "initial-test", "follow-up-test", "close", "dismiss"])),

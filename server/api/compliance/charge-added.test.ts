@@ -152,6 +152,7 @@ describe("the rolling-average method, the 125 % rule and EU leak checks", () => 
     // 26 lb / 20 lb = 130 % ≥ 125 % in 2026: report by 1 March 2027 [S:R7].
     expect(feb.body.records.chronic.find((y: { year: number }) => y.year === 2026)).toMatchObject({ chronic: true, reportDue: "2027-03-01" });
     expect(feb.body.records.due.map((d: { kind: string }) => d.kind)).toContain("chronic-leaker-report");
+    expect(feb.body.records.chronicRule).toMatchObject({ percent: 125, reportBy: "1 March of the next year" }); // [S:R7]
   });
 
   it("gives the EU leak-check interval from the CO2e band, with and without leak detection, and moves the next date with each check", async () => {

@@ -4,6 +4,7 @@ import type { AppContext } from "../../context";
 import type { ChargeAdditionView, SystemRecordsView, chargeAdditionInput, chargeCorrectionInput, leakCheckInput } from "../../contracts/compliance";
 import { chargeAdditions, findings, leakChecks, memberships, users } from "../../db/schema/index";
 import type { AssessedPoint } from "../../domain/compliance/assess-leak-rate";
+import type { LeakRatePart } from "../../domain/compliance/rule-profile";
 import { chargeToKg, companyGwpBases, toSystem } from "../systems/systems.service";
 import { badRequest, conflict, notFound } from "../../lib/http-error";
 import { eventDay } from "../findings/findings.service";
@@ -68,6 +69,7 @@ export async function getSystemRecords(ctx: AppContext, viewer: Viewer, systemId
     leakRates: st.points.map(toRow),
     latest: st.latest ? toRow(st.latest) : null,
     overThreshold: st.overThreshold,
+    chronicRule: chronicRuleOf(rules.profile.leakRateParts.find((p) => p.id === (st.applicability.partId ?? st.latest?.partId)) ?? null),
     chronic: st.chronic.map((y) => ({ year: y.year, addedKg: y.addedKg, percent: y.percent, chronic: y.chronic, reportDue: y.reportDue ?? null })),
     co2e: st.co2e.known ? { known: true, tonnes: st.co2e.tonnes, gwp: st.co2e.gwp, source: st.co2e.gwpSource } : { known: false, tonnes: null, gwp: null, source: st.co2e.reason },
     leakCheck: lc
@@ -85,6 +87,13 @@ export async function getSystemRecords(ctx: AppContext, viewer: Viewer, systemId
     leakChecks: checks.map((x) => ({ id: x.c.id, checkedOn: x.c.checkedOn, leakFound: x.c.leakFound, note: x.c.note, by: x.by })),
     cautions: system.cautions,
   };
+}
+
+const MONTHS = ["January", "February", "March", "April", "May", "June", "July", "August", "September", "October", "November", "December"];
+function chronicRuleOf(part: LeakRatePart | null) {
+  if (!part) return null;
+  const c = part.chronicLeaker;
+  return { percent: c.percentOfFullCharge.value, reportBy: `${c.reportBy.value.day} ${MONTHS[c.reportBy.value.month - 1]} of the next year`, source: `${c.percentOfFullCharge.source}; ${c.reportBy.source}` };
 }
 
 async function checkAdditionRefs(ctx: AppContext, viewer: Viewer, systemId: string, input: AdditionInput): Promise<void> {

@@ -36,7 +36,7 @@ export async function toFindingDetails(
   const foundBy = await ctx.db.select({ id: users.id, name: users.name }).from(users).where(inArray(users.id, [...new Set(rows.map((r) => r.foundById))]));
   const fixtureIds = rows.map((r) => r.fixtureId).filter((x): x is string => !!x);
   const fixtureKinds = fixtureIds.length
-    ? await ctx.db.select({ planId: fixtures.planId, id: fixtures.id, kind: fixtures.kind }).from(fixtures).where(inArray(fixtures.id, fixtureIds))
+    ? await ctx.db.select({ planId: fixtures.planId, id: fixtures.id, kind: fixtures.kind, label: fixtures.label }).from(fixtures).where(inArray(fixtures.id, fixtureIds))
     : [];
   const names = new Map(foundBy.map((u) => [u.id, u.name]));
   return rows.map((row) => {
@@ -54,7 +54,8 @@ export async function toFindingDetails(
     }
     const refrigerant = system ? findRefrigerant(system.refrigerantId) : undefined;
     // Cautions sit where the risk is: a finding in a walk-in or machine room gets the room's wording.
-    const kind = fixtureKinds.find((f) => f.id === row.fixtureId && (!row.planId || f.planId === row.planId))?.kind;
+    const fixture = fixtureKinds.find((f) => f.id === row.fixtureId && (!row.planId || f.planId === row.planId));
+    const kind = fixture?.kind;
     const place: CautionPlace | undefined = kind === "walk-in-cooler" || kind === "walk-in-freezer" ? "walk-in" : kind === "machine-room" ? "machine-room" : undefined;
     return {
       id: row.id,
@@ -78,6 +79,7 @@ export async function toFindingDetails(
       storeName: store.name,
       timeZone: store.timeZone,
       systemName: system?.name ?? null,
+      fixtureLabel: fixture?.label || null,
       refrigerantId: system?.refrigerantId ?? null,
       dismissReason: row.dismissReason,
       nextActions: nextActions(lifecycle),

@@ -1,6 +1,7 @@
 import { date, doublePrecision, index, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
 import { companies, stores } from "./companies";
 import { plans } from "./plans";
+import { sweeps } from "./sweeps";
 import { systems } from "./systems";
 import { users } from "./users";
 
@@ -9,8 +10,7 @@ export const FINDING_EVENT_KINDS = ["found", "confirmed", "repaired", "initial-t
 
 /**
  * A leak record. The status is the latest event's; the events are the signed, dated history and
- * are only ever appended. sweepId has no foreign key yet: the sweeps table comes with the Walk
- * work (branch `walk`); add `references(() => sweeps.id, { onDelete: "set null" })` once it lands.
+ * are only ever appended. A finding keeps its record when its sweep is removed (sweepId set null).
  */
 export const findings = pgTable(
   "findings",
@@ -20,7 +20,7 @@ export const findings = pgTable(
     storeId: uuid().notNull().references(() => stores.id, { onDelete: "cascade" }),
     systemId: uuid().references(() => systems.id, { onDelete: "set null" }),
     planId: uuid().references(() => plans.id, { onDelete: "set null" }),
-    sweepId: uuid(),
+    sweepId: uuid().references(() => sweeps.id, { onDelete: "set null" }),
     /** Fixture ids are stable across plan versions, so this is the fixture's id, not a row id. */
     fixtureId: uuid(),
     x: doublePrecision(),

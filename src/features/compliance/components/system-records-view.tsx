@@ -95,6 +95,25 @@ export function SystemRecords({ r, unit, canRecord, findings }: { r: SystemRecor
         )}
       </section>
 
+      {r.chronic.length ? (
+        <section aria-labelledby="chronic" className="space-y-2">
+          <h2 id="chronic" className="text-xl font-bold">Added per calendar year</h2>
+          <ul className="space-y-1">
+            {r.chronic.map((y) => (
+              <li key={y.year} className={y.chronic ? "font-bold text-danger" : undefined}>
+                {y.year}: {formatMass(y.addedKg, unit)}, {formatPercent(y.percent)} of the full charge
+                {y.chronic ? ` — chronic leaker; report due ${y.reportDue}` : ""}
+              </li>
+            ))}
+          </ul>
+          {r.chronicRule ? (
+            <p className="text-sm text-muted">
+              A system that takes {r.chronicRule.percent} % or more of its full charge in one calendar year is a chronic leaker, reported by {r.chronicRule.reportBy} ({r.chronicRule.source}).
+            </p>
+          ) : null}
+        </section>
+      ) : null}
+
       <section aria-labelledby="charge" className="space-y-3">
         <h2 id="charge" className="text-xl font-bold">Charge added</h2>
         {canRecord ? <ChargeForm systemId={r.system.id} today={r.today} unit={unit} findings={findings} /> : null}

@@ -22,7 +22,12 @@ export function FindingView({ finding, canAddPhoto }: { finding: FindingDetail; 
         <div className="rounded-md bg-surface p-3 edge"><dt className="text-sm text-muted">System</dt><dd className="font-bold">{finding.systemId ? <Link className="text-accent underline" to={`/systems/${finding.systemId}`}>{finding.systemName}</Link> : "None"}</dd></div>
       </dl>
       {finding.note ? <p>{finding.note}</p> : null}
-      {finding.x !== null && finding.y !== null ? <p className="text-sm text-muted">On the plan at {finding.x.toFixed(1)} m, {finding.y.toFixed(1)} m from the top-left corner.</p> : null}
+      {finding.fixtureLabel || finding.x !== null ? (
+        <p className="text-sm text-muted">
+          {finding.fixtureLabel ? `At ${finding.fixtureLabel}` : "On the plan"}
+          {finding.x !== null && finding.y !== null ? `, ${finding.x.toFixed(1)} m across and ${finding.y.toFixed(1)} m down from the plan's top-left corner` : ""}.
+        </p>
+      ) : null}
 
       {finding.deadlines.length ? (
         <section aria-labelledby="deadlines" className="space-y-2">

@@ -1,0 +1,1 @@
+ALTER TABLE "findings" ADD CONSTRAINT "findings_sweep_id_sweeps_id_fk" FOREIGN KEY ("sweep_id") REFERENCES "public"."sweeps"("id") ON DELETE set null ON UPDATE no action;
