@@ -5,6 +5,16 @@ import { createDb, migrateDb } from "./db/client";
 import { createSmtpMailer } from "./mail/mailer";
 import { startFakeSmtp, type FakeSmtp } from "./mail/fake-smtp";
 
+/** The fake SMTP server on its usual port, or any free one when another checkout already has it. */
+async function startFakeSmtpOnFreePort(db: Parameters<typeof startFakeSmtp>[0], port: number): Promise<FakeSmtp> {
+  try {
+    return await startFakeSmtp(db, port);
+  } catch (err) {
+    if ((err as NodeJS.ErrnoException).code !== "EADDRINUSE" || port === 0) throw err;
+    return startFakeSmtp(db, 0);
+  }
+}
+
 export interface Runtime {
   ctx: AppContext;
   fakeSmtp: FakeSmtp | null;
@@ -17,7 +27,7 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
   const { pool, db } = createDb(env.DATABASE_URL);
   await migrateDb(db);
 
-  const fakeSmtp = env.SMTP_HOST ? null : await startFakeSmtp(db, env.FAKE_SMTP_PORT);
+  const fakeSmtp = env.SMTP_HOST ? null : await startFakeSmtpOnFreePort(db, env.FAKE_SMTP_PORT);
   const mailer = createSmtpMailer(
     {
       host: env.SMTP_HOST ?? "127.0.0.1",
@@ -53,6 +63,8 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
     ctx,
     fakeSmtp,
     async close() {
+      await ctx.analysisRunner?.close();
+      await ctx.reportRunner?.close();
       mailer.close();
       await fakeSmtp?.close();
       await pool.end();

@@ -4,6 +4,7 @@ import type { Db } from "./db/client";
 import type { Mailer } from "./mail/mailer";
 import type { BlobStorage } from "./storage/blob-storage";
 import type { AnalysisRunner } from "./jobs/analysis-runner";
+import type { ReportRunner } from "./jobs/report-runner";
 
 /** Plan upload limits; each has a default (server/api/plans/plan-resources.ts). */
 export interface PlanImageLimits {
@@ -43,4 +44,6 @@ export interface AppContext {
   storage?: BlobStorage;
   /** Worker threads that run the locator; made on first use (server/api/analysis). */
   analysisRunner?: AnalysisRunner;
+  /** The worker that draws and lays out report PDFs; made on first use (server/api/reports). */
+  reportRunner?: ReportRunner;
 }

@@ -45,6 +45,8 @@ export async function createTestApp(config: Partial<AppConfig> = {}): Promise<Te
     database,
     smtp,
     async close() {
+      await ctx.analysisRunner?.close();
+      await ctx.reportRunner?.close();
       mailer.close();
       await smtp.close();
       await database.drop();

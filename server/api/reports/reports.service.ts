@@ -3,12 +3,12 @@ import { and, desc, eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import type { ReportRecipient, ReportSend, SendReportInput } from "../../contracts/reports";
 import { memberships, membershipStores, reportSends, users } from "../../db/schema/index";
-import { CONCENTRATION_LUT, createConcentrationScale } from "../../domain/fieldmap/concentration-ramp";
+import { createConcentrationScale } from "../../domain/fieldmap/concentration-ramp";
 import { readingsCsv } from "../../domain/reports/readings-csv";
 import type { LengthPreference } from "../../domain/units/format-units";
 import { badRequest } from "../../lib/http-error";
-import { renderFieldMapPng } from "../../reports/field-map-png";
-import { buildSweepReportPdf } from "../../reports/sweep-report-pdf";
+import { createReportRunner } from "../../jobs/report-runner";
+import type { ReportJob } from "../../jobs/report.worker";
 import { planStorage } from "../plans/plan-resources";
 import type { Viewer } from "../stores/store-access";
 import { loadVisibleSweep } from "../sweeps/sweep-access";
@@ -21,29 +21,25 @@ function fileBase(f: ReportFacts): string {
   return `sweep-${slug(f.storeName)}-${day}`;
 }
 
+/** The PDF, drawn and laid out in a worker thread so the event loop keeps answering meanwhile. */
 export async function buildReportPdf(ctx: AppContext, f: ReportFacts): Promise<Buffer> {
+  let map: ReportJob["map"] = null;
   if (f.field) {
     const scale = createConcentrationScale({ maxPpm: f.maxPpm, log: true });
     const planImage = f.planImage.displayKey ? await planStorage(ctx).get(f.planImage.displayKey) : null;
-    const png = await renderFieldMapPng({
-      planImage: planImage ?? null,
+    map = {
+      planImage: planImage ? new Uint8Array(planImage) : null,
       widthM: f.planImage.widthM,
       heightM: f.planImage.heightM,
       field: f.field,
-      lut: CONCENTRATION_LUT,
-      index: scale.index,
+      maxPpm: f.maxPpm,
       outlines: f.outlines,
-      spots: f.model.suspects,
-      widthPx: 1400,
-    });
-    f.model.map = {
-      png,
-      widthM: f.planImage.widthM,
-      heightM: f.planImage.heightM,
       legend: `Colour: lag-corrected concentration on a log scale from 0 (pale sand) to ${f.maxPpm} ppm (deep plum); ${scale.ticks().join(", ")} ppm. Hatched or clear: not sampled enough to say — unknown, not clean. Numbered rings: suspect spots with their search radius.`,
     };
   }
-  return buildSweepReportPdf(f.model);
+  ctx.reportRunner ??= createReportRunner();
+  const bytes = await ctx.reportRunner.run({ model: f.model, map });
+  return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
 }
 
 export async function sweepReportPdf(ctx: AppContext, viewer: Viewer, sweepId: string, unit: LengthPreference): Promise<{ filename: string; pdf: Buffer }> {

@@ -124,6 +124,7 @@ export function Component() {
                 spots={a.candidates}
                 selected={selected}
                 width={width}
+                onSelect={setSelected}
               />
             ) : analysis.isPending ? (
               <Spinner label="Computing the field map on the server…" />

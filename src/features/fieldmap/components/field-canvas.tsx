@@ -3,7 +3,7 @@ import type { FieldGridLike } from "../../../../server/domain/fieldmap/field-gri
 import { drawFieldLayer, paintFieldCanvas, type FieldPaint } from "../model/draw-field-layer";
 import { drawFixtures, drawPath, drawRiskPoints, drawSpots, drawTaps, type OverlayFixture, type OverlayReading, type OverlaySpot } from "../model/draw-overlays";
 import type { LayerState } from "../model/layers";
-import { fitView, focusView, type MapView } from "../model/view";
+import { fitView, focusView, spotAt, type MapView } from "../model/view";
 
 export interface FieldCanvasProps {
   label: string;
@@ -19,6 +19,8 @@ export interface FieldCanvasProps {
   selected: number | null;
   /** Canvas width in CSS pixels; the height follows the plan's aspect. */
   width: number;
+  /** Clicking a suspect spot on the map selects (and zooms to) it. */
+  onSelect?: (rank: number | null) => void;
 }
 
 /** The plan with the field and the vector layers; a plain canvas redrawn from props (no retained scene). */
@@ -73,7 +75,13 @@ export function FieldCanvas(p: FieldCanvasProps) {
       aria-label={p.label}
       data-testid="field-canvas"
       data-suspects={p.layers.suspects ? p.spots.length : 0}
-      style={{ width: p.width, height }}
+      style={{ width: p.width, height, cursor: p.onSelect && p.spots.length ? "pointer" : undefined }}
+      onClick={(e) => {
+        if (!p.onSelect || !p.layers.suspects) return;
+        const box = e.currentTarget.getBoundingClientRect();
+        const rank = spotAt(view, e.clientX - box.left, e.clientY - box.top, p.spots);
+        if (rank !== null) p.onSelect(rank === p.selected ? null : rank);
+      }}
       className="block max-w-full rounded-md edge bg-surface"
     />
   );

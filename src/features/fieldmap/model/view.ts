@@ -22,3 +22,17 @@ export function focusView(x: number, y: number, radiusM: number, canvasW: number
 }
 
 export const toPx = (v: MapView, x: number, y: number): [number, number] => [x * v.scale + v.ox, y * v.scale + v.oy];
+
+/** The spot under a click (its ring or its number badge), nearest first; null when none. */
+export function spotAt(v: MapView, px: number, py: number, spots: readonly { rank: number; x: number; y: number; radius: number }[]): number | null {
+  let best: { rank: number; d: number } | null = null;
+  for (const s of spots) {
+    const [cx, cy] = toPx(v, s.x, s.y);
+    const r = Math.max(8, s.radius * v.scale);
+    const dRing = Math.hypot(px - cx, py - cy);
+    const dBadge = Math.hypot(px - (cx + r * 0.71), py - (cy - r * 0.71));
+    const hit = dBadge <= 12 ? dBadge : dRing <= r ? dRing : null;
+    if (hit !== null && (!best || hit < best.d)) best = { rank: s.rank, d: hit };
+  }
+  return best?.rank ?? null;
+}
