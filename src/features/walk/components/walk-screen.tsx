@@ -160,6 +160,11 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
             {sweep.warnings.map((w) => <li key={w.code + (w.systemId ?? "")} className="mb-1 rounded-md border-l-4 border-note bg-note-soft px-3 py-1 text-note edge">{w.message}</li>)}
           </ul>
         ) : null}
+        {sweep.rejected ? (
+          <Alert tone="error" title="The server refused this sweep">
+            {Object.entries(sweep.rejected).map(([k, m]) => (k ? `${k} ${m}` : m)).join("; ")} Its readings stay on this device.
+          </Alert>
+        ) : null}
         {leakMode ? <Alert tone="info">Tap the plan where the leak is.</Alert> : null}
         {notice ? <Alert tone="success"><span>{notice} </span><button type="button" className="min-h-12 underline" onClick={() => setNotice(null)}>Dismiss</button></Alert> : null}
         {showHint ? (
