@@ -203,6 +203,7 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
           title={editing ? `Edit reading #${walk.readings.indexOf(keypadFor) + 1}` : `Reading #${walk.readings.indexOf(keypadFor) + 1}`}
           initial={{ ppm: keypadFor.ppm, atLeast: keypadFor.atLeast, samplePoint: keypadFor.samplePoint, note: keypadFor.note }}
           recent={recent}
+          levels={storePack.data?.detectors.find((d) => d.id === sweep.detectorId)?.levelScale ?? null}
           onTyped={(v) => (typed.current = v)}
           onSave={(v) => saveKeypad(v)}
           cancelLabel={editing ? "Cancel edit" : "Discard this tap"}
