@@ -5,10 +5,15 @@ cd "$root"
 log() { printf '\033[1m[plumeline]\033[0m %s\n' "$*" >&2; }
 
 ensure_node_modules() {
-  # Install when missing, or when the lock changed since the last install.
-  if [ ! -f node_modules/.package-lock.json ] || [ package-lock.json -nt node_modules/.package-lock.json ]; then
+  # Install when missing, or when the lock's content changed since the last install (a content
+  # hash, not file dates: a checkout or merge touches dates without changing what is locked).
+  local want have
+  want=$(sha256sum package-lock.json | cut -d' ' -f1)
+  have=$(cat node_modules/.plumeline-lock-hash 2>/dev/null || true)
+  if [ ! -f node_modules/.package-lock.json ] || [ "$want" != "$have" ]; then
     log "installing npm dependencies (npm ci)..."
     npm ci --no-audit --no-fund --loglevel=error
+    printf %s "$want" > node_modules/.plumeline-lock-hash
   fi
 }
 

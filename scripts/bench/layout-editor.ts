@@ -31,6 +31,8 @@ export interface FrameStats {
   longFrames: number;
   dragMs: number;
   fixturesOnPage: number;
+  /** The same pointer path without pressing (no drag): what the page and machine cost anyway. */
+  hover: { frames: number; medianMs: number; p95Ms: number; longFrames: number };
   /** How far the fixture's centre moved over all drags (a check that the drags really moved it). */
   movedM: number;
 }
@@ -87,6 +89,23 @@ export async function measureEditorDrag(o: EditorBenchOptions): Promise<FrameSta
       requestAnimationFrame(tick);
     })()`);
 
+    const path = async (sx: number, sy: number) => {
+      for (let i = 1; i <= moves; i++) {
+        const f = i / moves;
+        const along = f < 0.7 ? f / 0.7 : 1 - ((f - 0.7) / 0.3) * 0.5;
+        await page.mouse.move(sx + 240 * along, sy + 60 * Math.sin(along * Math.PI));
+      }
+    };
+    const collect = async () => (await page.evaluate("(() => { window.__recording = false; const f = window.__frames; window.__frames = []; return f; })()")) as number[];
+    const toGaps = (frames: number[]) => frames.slice(1).map((t, i) => t - frames[i]);
+
+    // Baseline: the same moves over the plan with no button held (nothing is dragged).
+    const origin = await planToScreen(page, cx, cy);
+    await page.mouse.move(origin.x, origin.y + 400);
+    await page.evaluate("window.__recording = true");
+    await path(origin.x, origin.y + 400);
+    const hoverGaps = toGaps(await collect()).sort((a, b) => a - b);
+
     const gaps: number[] = [];
     let dragMs = 0;
     for (let d = 0; d < drags; d++) {
@@ -96,13 +115,9 @@ export async function measureEditorDrag(o: EditorBenchOptions): Promise<FrameSta
       await page.evaluate("window.__recording = true");
       const t0 = Date.now();
       // Out 240 px to the right and down, and part of the way back: a drag across neighbours.
-      for (let i = 1; i <= moves; i++) {
-        const f = i / moves;
-        const along = f < 0.7 ? f / 0.7 : 1 - ((f - 0.7) / 0.3) * 0.5;
-        await page.mouse.move(start.x + 240 * along, start.y + 60 * Math.sin(along * Math.PI));
-      }
+      await path(start.x, start.y);
       dragMs += Date.now() - t0;
-      const frames = (await page.evaluate("(() => { window.__recording = false; const f = window.__frames; window.__frames = []; return f; })()")) as number[];
+      const frames = await collect();
       await page.mouse.up();
       await page.waitForTimeout(300);
       for (let i = 1; i < frames.length; i++) gaps.push(frames[i] - frames[i - 1]);
@@ -120,6 +135,7 @@ export async function measureEditorDrag(o: EditorBenchOptions): Promise<FrameSta
       dragMs: dragMs / drags,
       fixturesOnPage,
       movedM: cx - firstX,
+      hover: { frames: hoverGaps.length, medianMs: quantile(hoverGaps, 0.5), p95Ms: quantile(hoverGaps, 0.95), longFrames: hoverGaps.filter((g) => g > LONG_FRAME_MS).length },
     };
   } finally {
     await browser.close();

@@ -150,6 +150,7 @@ async function main() {
       });
       if (f) console.log(`  editor, dragging one of ${f.fixturesOnPage} fixtures in Chromium (${f.frames} frames over 3 drags of ${f.dragMs.toFixed(0)} ms; it moved ${f.movedM.toFixed(2)} m in all):`);
       if (f) console.log(`    frame time median ${f.medianMs.toFixed(1)} ms, p95 ${f.p95Ms.toFixed(1)} ms, max ${f.maxMs.toFixed(1)} ms; frames over 33.4 ms: ${f.longFrames}`);
+      if (f) console.log(`    the same pointer path without a drag (page and machine alone): median ${f.hover.medianMs.toFixed(1)} ms, p95 ${f.hover.p95Ms.toFixed(1)} ms; ${f.hover.longFrames} of ${f.hover.frames} frames over 33.4 ms`);
     }
     if (med >= TARGET_MS) process.exitCode = 1;
   } finally {

@@ -1,7 +1,7 @@
 /**
  * A lead tech maps a new store in the browser: creates it, uploads a drawing (a PNG made here
  * with jimp), sets its scale, draws three fixtures of different kinds (one by duplicating and
- * re-kinding a case), reloads, and finds them where they were — checked in metres through the API.
+ * re-kinding a case), drags one, reloads, and finds them where they were — checked in metres through the API.
  */
 import { mkdtemp, writeFile } from "node:fs/promises";
 import { tmpdir } from "node:os";
@@ -69,7 +69,8 @@ it("creates a store, uploads and calibrates a plan, draws three fixtures and fin
   page.on("console", (m) => m.type() === "error" && failures.push(m.text()));
 
   await signInThroughForm(page, server.url, co.people["lead-tech"].email, PASSWORD);
-  await page.getByRole("link", { name: "Stores", exact: true }).click();
+  // A lead tech lands on Today; the stores are one link away.
+  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Stores" }).click();
   await page.getByRole("button", { name: "New store" }).click();
   await page.getByLabel("Store name").fill("Quillby Grocers – Fernbank");
   await page.getByLabel("Address").fill("12 Fernbank Parade");
@@ -131,6 +132,18 @@ it("creates a store, uploads and calibrates a plan, draws three fixtures and fin
   await page.mouse.click(v.x, v.y);
   await page.getByRole("heading", { name: "All fixtures (3)" }).waitFor();
 
+  // Escape goes back to the select tool; dragging the valve moves it to (10, 7) m on drag end.
+  await page.keyboard.press("Escape");
+  await page.getByRole("button", { name: "Select", pressed: true }).waitFor();
+  const from = await editorScreen(page, 8, 6);
+  const to = await editorScreen(page, 10, 7);
+  await page.mouse.move(from.x, from.y);
+  await page.mouse.down();
+  await page.mouse.move(from.x + 10, from.y + 5, { steps: 3 });
+  await page.mouse.move(to.x, to.y, { steps: 8 });
+  await page.mouse.up();
+  await page.getByRole("cell", { name: "10.00 m, 7.00 m" }).waitFor();
+
   await page.waitForTimeout(300);
   await page.locator("[data-save-status=saved]").waitFor({ timeout: 15_000 });
 
@@ -144,8 +157,8 @@ it("creates a store, uploads and calibrates a plan, draws three fixtures and fin
     near(byKind["door-case"].polygon, [[5.5, 2], [9, 2], [9, 3.2], [5.5, 3.2]]);
     // 3.5 m of case at about 0.76 m a door (common practice, no published source) → 5 doors.
     expect(byKind["door-case"].doorCount).toBe(5);
-    expect(byKind.valve.point.x).toBeCloseTo(8, 6);
-    expect(byKind.valve.point.y).toBeCloseTo(6, 6);
+    expect(byKind.valve.point.x).toBeCloseTo(10, 6);
+    expect(byKind.valve.point.y).toBeCloseTo(7, 6);
     return r.fixtures.map((f: { id: string }) => f.id).sort();
   };
   const before = await check();

@@ -14,18 +14,19 @@ interface Options {
   toolKeys: RefObject<((key: string) => boolean) | null>;
   onDuplicate: () => void;
   onDelete: () => void;
-  onTool: (tool: "select" | "pan" | "rectangle" | "polygon") => void;
+  onTool: (tool: "select" | "pan" | "rectangle" | "polygon" | "vertex") => void;
   onZoom: (direction: "in" | "out" | "fit") => void;
   onPanning: (on: boolean) => void;
   onEscape: () => void;
 }
 
 /** Keys of the view and the tools, beside the model's editing shortcuts (shortcuts.ts). */
-export const VIEW_KEYS: Readonly<Record<string, { tool?: "select" | "pan" | "rectangle" | "polygon"; zoom?: "in" | "out" | "fit" }>> = {
+export const VIEW_KEYS: Readonly<Record<string, { tool?: "select" | "pan" | "rectangle" | "polygon" | "vertex"; zoom?: "in" | "out" | "fit" }>> = {
   v: { tool: "select" },
   h: { tool: "pan" },
   b: { tool: "rectangle" },
   p: { tool: "polygon" },
+  c: { tool: "vertex" },
   "+": { zoom: "in" },
   "=": { zoom: "in" },
   "-": { zoom: "out" },
@@ -33,7 +34,8 @@ export const VIEW_KEYS: Readonly<Record<string, { tool?: "select" | "pan" | "rec
 };
 
 export const VIEW_KEY_HELP: readonly { keys: string; does: string }[] = [
-  { keys: "V, H, B, P", does: "Select, pan, rectangle and outline tools" },
+  { keys: "V, H, B, P, C", does: "Select, pan, rectangle, outline and corner tools" },
+  { keys: "Corner tool: drag, double-click, Delete", does: "Move a corner, add one on an edge, remove the last touched" },
   { keys: "Space + drag, middle button", does: "Pan the plan" },
   { keys: "Wheel, pinch, + − 0", does: "Zoom in, out, fit the plan" },
 ];
@@ -58,7 +60,7 @@ export function useEditorShortcuts(o: Options) {
         opts.current.onPanning(true);
         return;
       }
-      if ((e.key === "Escape" || e.key === "Enter" || e.key === "Backspace") && opts.current.toolKeys.current?.(e.key)) {
+      if (["Escape", "Enter", "Backspace", "Delete"].includes(e.key) && opts.current.toolKeys.current?.(e.key)) {
         e.preventDefault();
         return;
       }

@@ -107,7 +107,14 @@ export function EditorStage(p: EditorStageProps) {
     if (r.actions.length) p.apply(r.actions);
   }
   p.toolKeys.current = (key: string) => {
-    const state = toolState.current as { phase: string };
+    const state = toolState.current as { phase: string; active?: unknown };
+    if (active.tool === "vertex") {
+      // Delete removes the corner last touched, not the fixture; Escape with nothing under way leaves the tool.
+      if (key === "Escape" && state.phase === "idle") return false;
+      if ((key === "Delete" || key === "Backspace") && !state.active) return true;
+      feed({ type: "key", key });
+      return true;
+    }
     if (active.tool === "select" || state.phase === "idle") return false;
     feed({ type: "key", key });
     return true;
@@ -207,7 +214,7 @@ export function EditorStage(p: EditorStageProps) {
       onDblClick={(e) => {
         const stage = e.target.getStage();
         const pt = stage && pointer(stage);
-        if (pt && active.tool === "polygon") feed({ type: "double-click", point: pt });
+        if (pt && (active.tool === "polygon" || active.tool === "vertex")) feed({ type: "double-click", point: pt });
       }}
       onWheel={onWheel}
       onTouchMove={onTouchMove}
@@ -232,7 +239,7 @@ export function EditorStage(p: EditorStageProps) {
           rotateEnabled
           keepRatio={false}
           ignoreStroke
-          anchorSize={14}
+          anchorSize={12}
           anchorStroke={SELECTION_STROKE}
           borderStroke={SELECTION_STROKE}
           rotationSnaps={[0, 45, 90, 135, 180, 225, 270, 315]}
@@ -245,9 +252,24 @@ export function EditorStage(p: EditorStageProps) {
           <Line ref={guideX} visible={false} stroke="#CC79A7" strokeWidth={1.5} dash={[6, 4]} strokeScaleEnabled={false} />
           <Line ref={guideY} visible={false} stroke="#CC79A7" strokeWidth={1.5} dash={[6, 4]} strokeScaleEnabled={false} />
           <PreviewShape preview={preview} />
+          {active.tool === "vertex" ? <CornerHandles scene={scene} unit={unit} /> : null}
         </Group>
       </Layer>
     </Stage>
+  );
+}
+
+/** The selected outline's corners, as squares to grab with the corner tool (it hit-tests them itself). */
+function CornerHandles({ scene, unit }: { scene: Scene; unit: number }) {
+  const f = scene.selection.length === 1 ? scene.fixtures[scene.selection[0]] : undefined;
+  if (!f || "point" in f) return null;
+  const h = 10 * unit;
+  return (
+    <>
+      {f.polygon.map(([x, y], i) => (
+        <Rect key={i} x={x - h / 2} y={y - h / 2} width={h} height={h} fill="#ffffff" stroke={SELECTION_STROKE} strokeWidth={2} strokeScaleEnabled={false} />
+      ))}
+    </>
   );
 }
 

@@ -16,7 +16,7 @@ interface Props {
   gridM: number | null;
   snapToFixtures: boolean;
   preference: LengthPreference;
-  onTool: (tool: "select" | "pan" | DrawShape) => void;
+  onTool: (tool: "select" | "pan" | "vertex" | DrawShape) => void;
   onKind: (kind: FixtureKind) => void;
   onUndo: () => void;
   onRedo: () => void;
@@ -71,6 +71,9 @@ export function EditorToolbar(p: Props) {
           <>
             <ToolButton pressed={drawing && (p.active.tool === "rectangle" || p.active.tool === "point")} onClick={() => p.onTool("rectangle")} shortcut="B">
               {pointKind ? "Place point" : "Rectangle"}
+            </ToolButton>
+            <ToolButton pressed={p.active.tool === "vertex"} onClick={() => p.onTool("vertex")} shortcut="C">
+              Corners
             </ToolButton>
             {pointKind ? null : (
               <ToolButton pressed={p.active.tool === "polygon"} onClick={() => p.onTool("polygon")} shortcut="P">

@@ -45,7 +45,7 @@ export const FixtureShape = memo(function FixtureShape({ fixture: f, selected, d
     onDragEnd: (e: Konva.KonvaEventObject<DragEvent>) => handlers.onDragEnd(f.id, e),
     onTransformEnd: (e: Konva.KonvaEventObject<Event>) => handlers.onTransformEnd(f.id, e.currentTarget as unknown as Konva.Group),
   };
-  const fontSize = 13 * unit;
+  let fontSize = 13 * unit;
   if ("point" in f) {
     const colour = POINT_COLOURS[f.kind];
     const r = 8 * unit;
@@ -67,7 +67,10 @@ export const FixtureShape = memo(function FixtureShape({ fixture: f, selected, d
   const wall = "door" in f && look.wall ? wallWithDoorGap(f.polygon, f.door) : null;
   const gap = "door" in f && f.door ? doorGap(f.polygon, f.door) : null;
   const ticks = f.kind === "door-case" ? doorTicks(f.polygon, f.doorCount) : [];
-  // A label is drawn only where it fits inside the outline; the list view always has it.
+  // A label is drawn only where it fits inside the outline, shrunk to 10 px if it must be;
+  // the list view always has it.
+  const boxWidth = b.maxX - b.minX;
+  if (f.label.length * fontSize * LABEL_CHAR_EM > boxWidth) fontSize = Math.max(10 * unit, boxWidth / (f.label.length * LABEL_CHAR_EM));
   const labelWidth = f.label.length * fontSize * LABEL_CHAR_EM;
   const showLabel = f.label !== "" && (labelWidth <= b.maxX - b.minX || selected) && fontSize <= b.maxY - b.minY;
   return (

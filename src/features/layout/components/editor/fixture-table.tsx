@@ -1,23 +1,34 @@
-import { memo } from "react";
-import { FIXTURE_FAMILY, FIXTURE_FAMILY_NAMES, FIXTURE_KIND_NAMES } from "../../../../../server/contracts/fixture-kinds";
-import type { Fixture } from "../../../../../server/contracts/fixtures";
-import { polygonArea } from "../../../../../server/analysis/geometry/polygon-area";
+import { memo, useMemo, useState } from "react";
+import { FIXTURE_FAMILY_NAMES } from "../../../../../server/contracts/fixture-kinds";
 import { formatLength, type LengthPreference } from "../../../../../server/domain/units/format-units";
-import { fixtureBounds, fixtureCentroid } from "../../model/fixture-geometry";
+import { fixtureRows, type RowKey } from "../../model/fixture-table";
+import type { Scene } from "../../model/scene";
 import type { SystemOption } from "./properties-panel";
 
 interface Props {
-  fixtures: readonly Fixture[];
-  selection: readonly string[];
+  scene: Scene;
   systems: readonly SystemOption[];
   preference: LengthPreference;
   onSelect: (id: string, additive: boolean) => void;
 }
 
-/** Every fixture as a row: the list view. Selecting a row selects the fixture on the plan. */
-export const FixtureTable = memo(function FixtureTable({ fixtures, selection, systems, preference, onSelect }: Props) {
+const COLUMNS: { header: string; key: RowKey | null }[] = [
+  { header: "Label", key: "label" },
+  { header: "Kind", key: "kindName" },
+  { header: "Family", key: "family" },
+  { header: "System", key: null },
+  { header: "Fans", key: null },
+  { header: "Centre (x, y)", key: "x" },
+  { header: "Size", key: "areaM2" },
+];
+
+/** Every fixture as a row (the list view), sortable by its headers; a row's button selects the fixture. */
+export const FixtureTable = memo(function FixtureTable({ scene, systems, preference, onSelect }: Props) {
+  const [sort, setSort] = useState<{ key: RowKey; descending: boolean } | null>(null);
+  // Rows depend on the fixtures and order only: a selection change does not recompute them.
+  const rows = useMemo(() => fixtureRows({ ...scene, selection: [] }, sort?.key ?? null, sort?.descending ?? false), [scene.fixtures, scene.order, sort]); // eslint-disable-line react-hooks/exhaustive-deps
   const names = new Map(systems.map((s) => [s.id, s.name]));
-  const selected = new Set(selection);
+  const selected = new Set(scene.selection);
   const len = (m: number) => formatLength(m, preference, { decimals: 2 });
   return (
     <div className="max-h-96 overflow-auto rounded-md bg-surface edge">
@@ -25,34 +36,41 @@ export const FixtureTable = memo(function FixtureTable({ fixtures, selection, sy
         <caption className="sr-only">All fixtures on this plan</caption>
         <thead className="sticky top-0 bg-accent-soft">
           <tr>
-            {["Label", "Kind", "Family", "System", "Fans", "Centre (x, y)", "Size"].map((h) => (
-              <th key={h} scope="col" className="px-3 py-2 font-bold">
-                {h}
-              </th>
-            ))}
+            {COLUMNS.map(({ header, key }) => {
+              const active = key !== null && sort?.key === key;
+              return (
+                <th key={header} scope="col" className="px-3 py-1 font-bold" aria-sort={active ? (sort!.descending ? "descending" : "ascending") : undefined}>
+                  {key ? (
+                    <button type="button" className="min-h-11 font-bold" onClick={() => setSort(active ? (sort!.descending ? null : { key, descending: true }) : { key, descending: false })}>
+                      {header} {active ? (sort!.descending ? "▼" : "▲") : ""}
+                    </button>
+                  ) : (
+                    header
+                  )}
+                </th>
+              );
+            })}
           </tr>
         </thead>
         <tbody>
-          {fixtures.map((f) => {
-            const [cx, cy] = fixtureCentroid(f);
-            const b = fixtureBounds(f);
-            const isSel = selected.has(f.id);
+          {rows.map((r) => {
+            const isSel = selected.has(r.id);
             return (
-              <tr key={f.id} aria-selected={isSel} className={`border-t border-line ${isSel ? "bg-note-soft font-bold" : ""}`}>
+              <tr key={r.id} aria-selected={isSel} className={`border-t border-line ${isSel ? "bg-note-soft font-bold" : ""}`}>
                 <td className="px-3 py-1">
-                  <button type="button" className="min-h-11 w-full text-left underline underline-offset-2" onClick={(e) => onSelect(f.id, e.shiftKey || e.metaKey || e.ctrlKey)}>
+                  <button type="button" className="min-h-11 w-full text-left underline underline-offset-2" onClick={(e) => onSelect(r.id, e.shiftKey || e.metaKey || e.ctrlKey)}>
                     {isSel ? "▶ " : ""}
-                    {f.label || <span className="text-muted">(no label)</span>}
+                    {r.label || <span className="text-muted">(no label)</span>}
                   </button>
                 </td>
-                <td className="px-3 py-1">{FIXTURE_KIND_NAMES[f.kind]}</td>
-                <td className="px-3 py-1">{FIXTURE_FAMILY_NAMES[FIXTURE_FAMILY[f.kind]]}</td>
-                <td className="px-3 py-1">{f.systemId ? (names.get(f.systemId) ?? "—") : "—"}</td>
-                <td className="px-3 py-1">{f.hasFans ? "Yes" : "No"}</td>
-                <td className="px-3 py-1 whitespace-nowrap" data-x={cx} data-y={cy}>
-                  {len(cx)}, {len(cy)}
+                <td className="px-3 py-1">{r.kindName}</td>
+                <td className="px-3 py-1">{FIXTURE_FAMILY_NAMES[r.family]}</td>
+                <td className="px-3 py-1">{r.systemId ? (names.get(r.systemId) ?? "—") : "—"}</td>
+                <td className="px-3 py-1">{r.hasFans ? "Yes" : "No"}</td>
+                <td className="whitespace-nowrap px-3 py-1" data-x={r.x} data-y={r.y}>
+                  {len(r.x)}, {len(r.y)}
                 </td>
-                <td className="px-3 py-1 whitespace-nowrap">{"point" in f ? "point" : `${len(b.maxX - b.minX)} × ${len(b.maxY - b.minY)} (${Math.abs(polygonArea(f.polygon)).toFixed(1)} m²)`}</td>
+                <td className="whitespace-nowrap px-3 py-1">{r.widthM === null ? "point" : `${len(r.widthM)} × ${len(r.depthM!)} (${Math.abs(r.areaM2!).toFixed(1)} m²)`}</td>
               </tr>
             );
           })}

@@ -99,15 +99,16 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
   );
 
   const chooseTool = useCallback(
-    (tool: "select" | "pan" | DrawShape, k: FixtureKind = kind) => {
-      if (tool === "select" || tool === "pan") setActive({ tool });
+    (tool: "select" | "pan" | "vertex" | DrawShape, k: FixtureKind = kind) => {
+      if (tool === "select" || tool === "pan" || tool === "vertex") setActive({ tool });
       else {
         setShape(tool);
         setActive(drawTool(k, tool));
       }
-      setMessage(null);
+      const sel = scene.selection.length === 1 ? scene.fixtures[scene.selection[0]] : undefined;
+      setMessage(tool === "vertex" && (!sel || "point" in sel) ? "The corner tool reshapes one outline: select it first (Select tool, or its row in the list), then drag its corners." : null);
     },
-    [kind],
+    [kind, scene],
   );
 
   const doDuplicate = useCallback(() => {
@@ -156,7 +157,7 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
           onTool={chooseTool}
           onKind={(k) => {
             setKind(k);
-            if (active.tool !== "select" && active.tool !== "pan") setActive(drawTool(k, shape));
+            if (active.tool === "rectangle" || active.tool === "polygon" || active.tool === "point") setActive(drawTool(k, shape));
           }}
           onUndo={editor.undo}
           onRedo={editor.redo}
@@ -190,7 +191,7 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
         </Alert>
       ) : null}
       {message ? <Alert tone="note">{message}</Alert> : null}
-      <div className="grid gap-3 xl:grid-cols-[minmax(0,1fr)_22rem]">
+      <div className="grid items-start gap-3 xl:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="relative">
           <div
             ref={box}
@@ -263,7 +264,7 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
         <h2 id="list-heading" className="text-lg font-bold">
           All fixtures ({fixtures.length})
         </h2>
-        <FixtureTable fixtures={fixtures} selection={scene.selection} systems={systems} preference={preference} onSelect={onSelectRow} />
+        <FixtureTable scene={scene} systems={systems} preference={preference} onSelect={onSelectRow} />
       </section>
     </div>
   );

@@ -7,22 +7,26 @@ import { pointTool, POINT_IDLE, type PointToolState } from "./point-tool";
 import { polygonTool, POLYGON_IDLE, type PolygonToolState } from "./polygon-tool";
 import { rectangleTool, RECTANGLE_IDLE, type RectangleToolState } from "./rectangle-tool";
 import { selectTool, SELECT_IDLE, type SelectToolState } from "./select-tool";
+import { vertexTool, VERTEX_IDLE, type VertexToolState } from "./vertex-tool";
 import { result, type ToolContext, type ToolEvent, type ToolResult } from "./tool";
 
 export type ActiveTool =
   | { tool: "select" }
   | { tool: "pan" }
+  | { tool: "vertex" }
   | { tool: "rectangle"; kind: PolygonKind }
   | { tool: "polygon"; kind: PolygonKind }
   | { tool: "point"; kind: PointKind };
 
-export type AnyToolState = SelectToolState | RectangleToolState | PolygonToolState | PointToolState;
+export type AnyToolState = SelectToolState | RectangleToolState | PolygonToolState | PointToolState | VertexToolState;
 
 export function idleState(active: ActiveTool): AnyToolState {
   switch (active.tool) {
     case "select":
     case "pan":
       return SELECT_IDLE;
+    case "vertex":
+      return VERTEX_IDLE;
     case "rectangle":
       return RECTANGLE_IDLE;
     case "polygon":
@@ -44,6 +48,8 @@ export function runTool(active: ActiveTool, state: AnyToolState, event: ToolEven
       return result(state);
     case "select":
       return selectTool(state as SelectToolState, event, ctx);
+    case "vertex":
+      return vertexTool(state as VertexToolState, event, ctx);
     case "rectangle":
       return rectangleTool(active.kind, state as RectangleToolState, event, ctx);
     case "polygon":
