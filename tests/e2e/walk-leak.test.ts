@@ -24,7 +24,7 @@ afterAll(async () => {
   await server?.close();
 });
 
-it("on a tablet with a mouse, walks the dairy case line one click per reading, then marks a pinpointed leak with a photo", async () => {
+it("on a tablet with a mouse, walks the dairy case line one click per reading, imports the detector's log, then marks a pinpointed leak with a photo", async () => {
   const context = await newContext(browser, { viewport: { width: 1024, height: 768 } });
   const page = await context.newPage();
   page.setDefaultTimeout(15_000);
@@ -72,6 +72,25 @@ it("on a tablet with a mouse, walks the dairy case line one click per reading, t
 
   // The 4 ppm reading is at the alarm level (2 ppm); taps came seconds apart, under one delay.
   await expect(page.getByTestId("lag-hint").textContent()).resolves.toMatch(/Alarm: 4 ppm/);
+
+  // The detector's own log, lined up by time with the taps; a garbled row is reported by line.
+  const t0 = stored[0].takenAt.getTime();
+  const t1 = stored[stored.length - 1].takenAt.getTime();
+  const csv = ["Time,Gas (ppm)", `${new Date(t0 + 100).toISOString()},0.2`, `${new Date(t1 - 100).toISOString()},3.5`, "garbled,7", `${new Date(t1 + 60_000).toISOString()},1`].join("\n");
+  await page.getByRole("button", { name: "Import log" }).click();
+  const importer = page.getByRole("dialog", { name: "Import the detector's log" });
+  await importer.getByLabel("CSV file").setInputFiles({ name: "log.csv", mimeType: "text/csv", buffer: Buffer.from(csv) });
+  await expect(importer.getByTestId("import-counts").textContent()).resolves.toBe("2 rows can be placed; 2 cannot.");
+  await expect(importer.getByText('Line 4: Time "garbled" is not a time').isVisible()).resolves.toBe(true);
+  await expect(importer.getByText("Line 5: at this clock offset its time falls after the last tapped position").isVisible()).resolves.toBe(true);
+  await importer.getByRole("button", { name: "Add 2 readings" }).click();
+  await page.getByTestId("walk-count").filter({ hasText: `${xs.length + 2} readings` }).waitFor();
+  for (let k = 0; k < 100; k++) {
+    const n = (await server.ctx.db.select().from(readings).where(eq(readings.sweepId, sweepId))).length;
+    if (n === xs.length + 2) break;
+    if (k === 99) throw new Error(`imported readings did not reach the server (${n})`);
+    await new Promise((res) => setTimeout(res, 200));
+  }
 
   await page.getByRole("button", { name: "Leak here" }).click();
   const spot = await planToScreen(page, 10, 9.8); // the front of Dairy 3 (x 9.32–12.98 m)

@@ -42,6 +42,27 @@ function assertOpen(sweep: SweepRow): void {
   }
 }
 
+/**
+ * Inserts a batch as ten column arrays through unnest: one statement with ten parameters instead
+ * of twelve thousand, which keeps a 1,000-reading upload well inside the sync target. Ids already
+ * stored are skipped (on conflict do nothing), so only the newly stored ids come back.
+ */
+async function insertReadings(tx: Tx, rows: (typeof readings.$inferInsert)[]): Promise<string[]> {
+  if (rows.length === 0) return [];
+  // sql.param keeps each array ONE parameter (a bare array would expand into a list).
+  const col = <T>(f: (r: typeof readings.$inferInsert) => T) => sql.param(rows.map(f));
+  const result = await tx.execute<{ id: string }>(sql`
+    insert into readings (id, sweep_id, x, y, taken_at, ppm, at_least, sample_point, note, recorded_by_id)
+    select * from unnest(
+      ${col((r) => r.id)}::uuid[], ${col((r) => r.sweepId)}::uuid[], ${col((r) => r.x)}::float8[], ${col((r) => r.y)}::float8[],
+      ${col((r) => (r.takenAt as Date).toISOString())}::timestamptz[], ${col((r) => r.ppm)}::float8[], ${col((r) => r.atLeast ?? false)}::boolean[],
+      ${col((r) => r.samplePoint)}::text[], ${col((r) => r.note ?? "")}::text[], ${col((r) => r.recordedById ?? null)}::uuid[]
+    )
+    on conflict (id) do nothing
+    returning id`);
+  return result.rows.map((r) => r.id);
+}
+
 async function bumpRevision(tx: Tx, sweepId: string): Promise<number> {
   const [row] = await tx.update(sweeps).set({ readingsRevision: sql`${sweeps.readingsRevision} + 1` }).where(eq(sweeps.id, sweepId)).returning({ rev: sweeps.readingsRevision });
   return row.rev;
@@ -83,7 +104,7 @@ export async function uploadReadings(ctx: AppContext, viewer: Viewer, userId: st
   });
 
   return ctx.db.transaction(async (tx) => {
-    const stored = good.length ? (await tx.insert(readings).values(good).onConflictDoNothing().returning({ id: readings.id })).map((r) => r.id) : [];
+    const stored = await insertReadings(tx, good);
     const storedSet = new Set(stored);
     const notInserted = good.filter((g) => !storedSet.has(g.id!)).map((g) => g.id!);
     const duplicates = [...batchDuplicates];

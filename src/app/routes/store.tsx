@@ -5,6 +5,8 @@ import { QueryError } from "../../components/ui/query-error";
 import { Spinner } from "../../components/ui/spinner";
 import { useStore } from "../../features/stores/api/get-store";
 import { StoreSummary } from "../../features/stores/components/store-summary";
+import { StartSweepLink } from "../../features/walk/components/start-sweep-link";
+import { useKeepStoreOnDevice } from "../../features/walk/hooks/use-keep-store-on-device";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
 import { useUnitPreferences } from "../shell/use-unit-preferences";
@@ -15,6 +17,8 @@ export function Component() {
   const { membership } = useSignedIn();
   const units = useUnitPreferences();
   const store = useStore(storeId);
+  const records = can(membership.role, "sweeps.record");
+  useKeepStoreOnDevice(storeId, records);
   useDocumentTitle(store.data?.name ?? "Store");
 
   if (store.isPending) return <Spinner label="Loading the store…" />;
@@ -27,7 +31,7 @@ export function Component() {
           ← All stores
         </Link>
       </p>
-      <PageHeader title={s.name} description={s.archivedAt ? "Archived store" : undefined} />
+      <PageHeader title={s.name} description={s.archivedAt ? "Archived store" : undefined} actions={records && !s.archivedAt ? <StartSweepLink storeId={s.id} /> : undefined} />
       <div className="space-y-10">
         <StoreSummary store={s} canEdit={can(membership.role, "stores.edit")} />
         {STORE_SECTIONS.map(({ id, Component: Section }) => (

@@ -3,6 +3,8 @@ import { WalkScreen } from "../../features/walk/components/walk-screen";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { ContrastToggle } from "../shell/contrast-toggle";
 
+export const handle = { fullScreen: true };
+
 export function Component() {
   useDocumentTitle("Walk");
   const { storeId, sweepId } = useParams();

@@ -1,5 +1,5 @@
 import { useEffect, useRef } from "react";
-import { Link, Outlet, useLocation } from "react-router";
+import { Link, Outlet, useLocation, useMatches } from "react-router";
 import { AppNav } from "./app-nav";
 import { CompanySwitcher } from "./company-switcher";
 import { ContrastToggle } from "./contrast-toggle";
@@ -13,6 +13,9 @@ export function AppShell() {
   const { pathname } = useLocation();
   const main = useRef<HTMLElement>(null);
   const first = useRef(true);
+  // A route whose module exports `handle = { fullScreen: true }` (the Walk screen) gets the whole
+  // screen: no header or navigation around it, for the eye or a screen reader.
+  const fullScreen = useMatches().some((m) => (m.handle as { fullScreen?: boolean } | undefined)?.fullScreen);
 
   // After a client-side page change, start reading at the new page, as a full load would.
   useEffect(() => {
@@ -23,6 +26,13 @@ export function AppShell() {
     main.current?.focus();
   }, [pathname]);
 
+  if (fullScreen) {
+    return (
+      <main id="main" ref={main} tabIndex={-1} className="outline-none">
+        <Outlet />
+      </main>
+    );
+  }
   return (
     <div className="min-h-dvh">
       <SkipLink />

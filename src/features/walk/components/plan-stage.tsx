@@ -216,7 +216,7 @@ function Fixtures({ fixtures, unsampled, ink, highContrast, pointR }: { fixtures
 declare global {
   interface Window {
     /** Read by the Walk benchmark: how many readings the last canvas draw showed, and when. */
-    __plumelineWalkDrawn?: { count: number; at: number };
+    __plumelineWalkDrawn?: { count: number; at: number; drawMs: number };
   }
 }
 
@@ -230,6 +230,7 @@ function ReadingsShape({ readings, alarmPpm, scale, selectedId, highContrast }: 
       listening={false}
       perfectDrawEnabled={false}
       sceneFunc={(ctx: Context) => {
+        const started = performance.now();
         const c = ctx._context;
         const r = 7 / scale;
         c.lineJoin = "round";
@@ -250,7 +251,8 @@ function ReadingsShape({ readings, alarmPpm, scale, selectedId, highContrast }: 
           c.stroke();
         }
         c.setLineDash([]);
-        window.__plumelineWalkDrawn = { count: readings.length, at: performance.now() };
+        const at = performance.now();
+        window.__plumelineWalkDrawn = { count: readings.length, at, drawMs: at - started };
       }}
     />
   );

@@ -16,6 +16,8 @@ export interface PpmKeypadProps {
   onSave(value: KeypadValue): void;
   onCancel(): void;
   cancelLabel: string;
+  /** A detector without a ppm display: its levels and the ppm band each stands for. */
+  levels?: readonly { level: string; minPpm: number; maxPpm: number | null }[] | null;
   /** The keypad's typed text, lifted so a tap on the plan can save what is shown. */
   onTyped?(value: KeypadValue): void;
 }
@@ -84,6 +86,21 @@ export function PpmKeypad(props: PpmKeypadProps) {
           {props.recent.map((v) => (
             <button key={v} type="button" className="min-h-12 flex-1 rounded-md font-bold edge bg-accent-soft" onClick={() => props.onSave(current(false, v))}>
               {v} ppm
+            </button>
+          ))}
+        </div>
+      ) : null}
+      {props.levels?.length ? (
+        <div className="flex flex-wrap gap-2" aria-label="Detector levels">
+          {props.levels.map((b) => (
+            <button
+              key={b.level}
+              type="button"
+              className="min-h-12 flex-1 rounded-md px-2 font-bold edge bg-note-soft"
+              // A level says only that the concentration is in its band: stored as "at least" its floor.
+              onClick={() => props.onSave({ ppm: b.minPpm, atLeast: b.minPpm > 0, samplePoint, note: [`Level ${b.level} (${b.minPpm}${b.maxPpm === null ? "+" : `–${b.maxPpm}`} ppm)`, note.trim()].filter(Boolean).join("; ") })}
+            >
+              Level {b.level}
             </button>
           ))}
         </div>

@@ -10,6 +10,7 @@ function stateWord(r: LocalReading): string {
 
 /** Every reading of the sweep, newest first, to edit or delete; refused ones show why. */
 export function ReadingsDrawer(props: { open: boolean; readings: readonly LocalReading[]; timeZone: string; onEdit(r: LocalReading): void; onDelete(r: LocalReading): void; onClose(): void }) {
+  if (!props.open) return null; // thousands of rows: build them only when the list is shown
   const fmt = new Intl.DateTimeFormat("en-GB", { timeStyle: "medium", timeZone: props.timeZone });
   const list = [...props.readings].map((r, i) => ({ r, n: i + 1 })).reverse();
   return (

@@ -66,7 +66,10 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
   const fixtures = planPack.data?.fixtures ?? [];
   const committed = useMemo(() => walk.readings.filter((r) => !r.draft || r.id !== draftId), [walk.readings, draftId]);
   const unsampled = useMemo(() => unsampledFixtures(fixtures, committed), [fixtures, committed]);
-  const unsampledIds = useMemo(() => new Set(unsampled.map((f) => f.id)), [unsampled]);
+  // Keyed by content, so the fixtures layer (and the plan image under it) redraws only when
+  // coverage really changes, not on every tap.
+  const unsampledKey = unsampled.map((f) => f.id).join(",");
+  const unsampledIds = useMemo(() => new Set(unsampledKey ? unsampledKey.split(",") : []), [unsampledKey]);
   const sweep = walk.sweep;
   const hint = useMemo(() => (sweep ? latestLagHint(committed, sweep.transportDelayS, sweep.timeConstantS, sweep.alarmPpm) : null), [committed, sweep]);
   const recent = useMemo(() => {
@@ -82,14 +85,6 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
   const draft = walk.readings.find((r) => r.id === draftId) ?? null;
   const readOnly = sweep.status === "reviewed";
 
-  async function commitDraft() {
-    const id = draftRef.current;
-    if (!id) return;
-    const v = typed.current;
-    setDraftId(null);
-    await walk.save(id, v ? { ppm: v.ppm, atLeast: v.atLeast, samplePoint: v.samplePoint, note: v.note } : {});
-  }
-
   const onTap = serial(async (x: number, y: number, at: number) => {
     if (readOnly) return;
     if (leakMode) {
@@ -98,13 +93,17 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
       return;
     }
     if (editing) setEditing(null);
-    await commitDraft();
-    const done = readingsRef.current.filter((r) => !r.draft);
-    const previous = done.length ? done[done.length - 1] : null;
+    const open = draftRef.current;
+    const before = readingsRef.current.filter((r) => !r.draft || r.id === open);
+    const previous = before.length ? before[before.length - 1] : null;
     const room = enteredRoom(fixtures, previous, { x, y });
     if (room) setCaution({ place: room.place, name: room.fixture.label || FIXTURE_KIND_NAMES[room.fixture.kind] });
+    const v = typed.current;
     typed.current = null;
-    const r = await walk.tap(x, y, at);
+    // The next tap saves what the keypad shows and takes its place, without closing it.
+    const r = open
+      ? await walk.saveAndTap(open, v ? { ppm: v.ppm, atLeast: v.atLeast, samplePoint: v.samplePoint, note: v.note } : {}, x, y, at)
+      : await walk.tap(x, y, at);
     setDraftId(r.id);
   });
 
@@ -161,6 +160,11 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
             {sweep.warnings.map((w) => <li key={w.code + (w.systemId ?? "")} className="mb-1 rounded-md border-l-4 border-note bg-note-soft px-3 py-1 text-note edge">{w.message}</li>)}
           </ul>
         ) : null}
+        {sweep.rejected ? (
+          <Alert tone="error" title="The server refused this sweep">
+            {Object.entries(sweep.rejected).map(([k, m]) => (k ? `${k} ${m}` : m)).join("; ")} Its readings stay on this device.
+          </Alert>
+        ) : null}
         {leakMode ? <Alert tone="info">Tap the plan where the leak is.</Alert> : null}
         {notice ? <Alert tone="success"><span>{notice} </span><button type="button" className="min-h-12 underline" onClick={() => setNotice(null)}>Dismiss</button></Alert> : null}
         {showHint ? (
@@ -199,6 +203,7 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
           title={editing ? `Edit reading #${walk.readings.indexOf(keypadFor) + 1}` : `Reading #${walk.readings.indexOf(keypadFor) + 1}`}
           initial={{ ppm: keypadFor.ppm, atLeast: keypadFor.atLeast, samplePoint: keypadFor.samplePoint, note: keypadFor.note }}
           recent={recent}
+          levels={storePack.data?.detectors.find((d) => d.id === sweep.detectorId)?.levelScale ?? null}
           onTyped={(v) => (typed.current = v)}
           onSave={(v) => saveKeypad(v)}
           cancelLabel={editing ? "Cancel edit" : "Discard this tap"}
@@ -228,8 +233,8 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
         onDelete={(r) => void walk.remove(r.id)}
         onClose={() => setDialog(null)}
       />
-      <SubmitSummary
-        open={dialog === "summary"}
+      {dialog === "summary" ? <SubmitSummary
+        open
         readings={committed}
         alarmPpm={sweep.alarmPpm}
         unsampled={unsampled}
@@ -240,9 +245,9 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
           void walk.submit();
           setNotice("Sweep submitted. It goes to the server as soon as every reading is uploaded.");
         }}
-      />
-      <LogImport
-        open={dialog === "import"}
+      /> : null}
+      {dialog === "import" ? <LogImport
+        open
         taps={committed.map((r) => ({ x: r.x, y: r.y, takenAtMs: Date.parse(r.takenAt), samplePoint: r.samplePoint }))}
         sweepStartMs={Date.parse(sweep.startedAt)}
         onClose={() => setDialog(null)}
@@ -251,7 +256,7 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
           void walk.addMany(list);
           setNotice(`${list.length} readings added from the detector's log.`);
         }}
-      />
+      /> : null}
       {leakSpot ? (
         <LeakForm
           spot={leakSpot}

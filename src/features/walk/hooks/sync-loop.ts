@@ -55,6 +55,17 @@ export function syncNow(): Promise<SyncReport> {
   return running;
 }
 
+let soon: ReturnType<typeof setTimeout> | null = null;
+
+/** A pass shortly after a burst of taps settles: one upload for a quick run of readings. */
+export function syncSoon(delayMs = 300): void {
+  if (soon) clearTimeout(soon);
+  soon = setTimeout(() => {
+    soon = null;
+    void syncNow();
+  }, delayMs);
+}
+
 export function subscribeSync(listener: (s: SyncStatus) => void): () => void {
   listeners.add(listener);
   listener(status);
@@ -71,6 +82,14 @@ export function subscribeSync(listener: (s: SyncStatus) => void): () => void {
   }
   return () => listeners.delete(listener);
 }
+
+declare global {
+  interface Window {
+    /** Lets the Walk benchmark time one full pass of the queue (scripts/bench/walk.ts). */
+    __plumelineSyncNow?: typeof syncNow;
+  }
+}
+if (typeof window !== "undefined") window.__plumelineSyncNow = syncNow;
 
 export function currentSyncStatus(): SyncStatus {
   return status;

@@ -4,7 +4,7 @@ import { pullSweep } from "../api/remote-sweep";
 import type { LocalReading, LocalSweep, ReadingValues } from "../model/local-types";
 import { addReading, getLocalSweep, removeReading, saveSweep, sweepReadings, updateReading } from "../model/reading-store";
 import { walkDb } from "../model/walk-db";
-import { refreshCounts, syncNow } from "./sync-loop";
+import { refreshCounts, subscribeSync, syncSoon } from "./sync-loop";
 
 export interface WalkState {
   sweep: LocalSweep | null;
@@ -54,7 +54,19 @@ export function useWalk(sweepId: string) {
 
   const changed = useCallback(() => {
     void refreshCounts();
-    void syncNow().then(() => reload());
+    syncSoon();
+  }, []);
+
+  // After a pass that changed something (uploaded or refused readings), read the sweep again so
+  // the marks of refused readings and the list's states follow.
+  useEffect(() => {
+    let last: unknown = null;
+    return subscribeSync((s) => {
+      if (s.lastReport && s.lastReport !== last) {
+        last = s.lastReport;
+        if (s.lastReport.confirmed + s.lastReport.rejected > 0) void reload();
+      }
+    });
   }, [reload]);
 
   /** A tap on the plan: the reading exists (on the device) from this moment, as a keypad draft. */
@@ -67,6 +79,23 @@ export function useWalk(sweepId: string) {
       return r;
     },
     [sweepId],
+  );
+
+  /**
+   * The next tap while the keypad is open: save the reading on it, then drop the new one, and
+   * draw both in ONE render (a tap must show at once, even in a sweep of thousands).
+   */
+  const saveAndTap = useCallback(
+    async (id: string, values: Partial<ReadingValues>, x: number, y: number, at: number) => {
+      const db = await walkDb();
+      const saved = await updateReading(db, id, values, { commit: true });
+      const samplePoint = saved?.samplePoint ?? lastSamplePoint(readingsRef.current);
+      const r = await addReading(db, sweepId, { x, y, takenAt: new Date(at).toISOString(), ppm: 0, atLeast: false, samplePoint, note: "" }, { draft: true });
+      setState((s) => ({ ...s, readings: [...s.readings.map((x) => (x.id === id && saved ? saved : x)), r] }));
+      changed();
+      return r;
+    },
+    [sweepId, changed],
   );
 
   const save = useCallback(
@@ -109,5 +138,5 @@ export function useWalk(sweepId: string) {
     changed();
   }, [sweepId, reload, changed]);
 
-  return { ...state, tap, save, remove, addMany, submit, reload };
+  return { ...state, tap, saveAndTap, save, remove, addMany, submit, reload };
 }

@@ -21,9 +21,22 @@ export function isNear(f: Fixture, x: number, y: number, within = SAMPLED_WITHIN
   return pointInPolygon([x, y], f.polygon) || distanceToPolygonEdge([x, y], f.polygon) <= within;
 }
 
-/** Ids of the sampleable fixtures no reading has reached yet. */
+function reach(f: Fixture, within: number): [number, number, number, number] {
+  const pts = "point" in f ? [[f.point.x, f.point.y]] : f.polygon;
+  let x0 = Infinity, y0 = Infinity, x1 = -Infinity, y1 = -Infinity;
+  for (const [x, y] of pts) {
+    x0 = Math.min(x0, x); y0 = Math.min(y0, y); x1 = Math.max(x1, x); y1 = Math.max(y1, y);
+  }
+  return [x0 - within, y0 - within, x1 + within, y1 + within];
+}
+
+/** The sampleable fixtures no reading has reached yet (a box test first: thousands of readings). */
 export function unsampledFixtures(fixtures: readonly Fixture[], readings: readonly { x: number; y: number }[]): Fixture[] {
-  return fixtures.filter((f) => isSampleable(f) && !readings.some((r) => isNear(f, r.x, r.y)));
+  return fixtures.filter((f) => {
+    if (!isSampleable(f)) return false;
+    const [x0, y0, x1, y1] = reach(f, SAMPLED_WITHIN_M);
+    return !readings.some((r) => r.x >= x0 && r.x <= x1 && r.y >= y0 && r.y <= y1 && isNear(f, r.x, r.y));
+  });
 }
 
 /** The fixture a point falls in (rooms and cases), or the nearest sampleable one within reach. */

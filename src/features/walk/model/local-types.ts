@@ -23,7 +23,8 @@ export interface LocalSweep {
   rejected: Record<string, string> | null;
 }
 
-export type SyncState = "pending" | "synced" | "rejected";
+/** draft: still on the keypad; pending: a change waits for the server; synced; rejected: refused, kept for fixing. */
+export type SyncState = "draft" | "pending" | "synced" | "rejected";
 
 /** A reading as the device holds it. It is written here FIRST, before any upload. */
 export interface LocalReading {

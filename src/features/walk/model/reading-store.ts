@@ -1,17 +1,16 @@
 import type { WalkDb } from "./walk-db";
 import type { LocalReading, LocalSweep, ReadingValues } from "./local-types";
 
+/**
+ * "relaxed": the commit is handed to the operating system without waiting for the disk flush
+ * (IndexedDB 3.0 durability hint). A crashed tab or browser still keeps it; only a power cut in
+ * the same instant could lose the last tap. It makes a tap cost milliseconds, not a disk sync.
+ */
+const RELAXED = { durability: "relaxed" } as const;
+
 // Every change to a sweep's readings goes through these functions, which write IndexedDB in one
 // transaction each. The sync queue later reads the flags they leave (pending, editPending,
 // deletePending) and sends the changes.
-
-async function nextSeq(db: WalkDb): Promise<number> {
-  const tx = db.transaction("meta", "readwrite");
-  const seq = ((await tx.store.get("seq")) ?? 0) + 1;
-  await tx.store.put(seq, "seq");
-  await tx.done;
-  return seq;
-}
 
 export async function saveSweep(db: WalkDb, sweep: LocalSweep): Promise<void> {
   await db.put("sweeps", sweep);
@@ -23,26 +22,31 @@ export async function getLocalSweep(db: WalkDb, id: string): Promise<LocalSweep 
 
 /** Drops a reading at a tap. With `draft`, it waits for the keypad before it may be uploaded. */
 export async function addReading(db: WalkDb, sweepId: string, values: ReadingValues, options: { id?: string; draft?: boolean } = {}): Promise<LocalReading> {
+  // One transaction for the counter and the reading: a tap costs a single IndexedDB commit.
+  const tx = db.transaction(["readings", "meta"], "readwrite", RELAXED);
+  const seq = ((await tx.objectStore("meta").get("seq")) ?? 0) + 1;
   const reading: LocalReading = {
     id: options.id ?? crypto.randomUUID(),
     sweepId,
-    seq: await nextSeq(db),
+    seq,
     ...values,
     draft: options.draft ?? false,
-    state: "pending",
+    state: options.draft ? "draft" : "pending",
     onServer: false,
     editPending: false,
     deletePending: false,
     editedAt: null,
     reasons: null,
   };
-  await db.put("readings", reading);
+  await tx.objectStore("meta").put(seq, "seq");
+  await tx.objectStore("readings").put(reading);
+  await tx.done;
   return reading;
 }
 
 /** Changes a reading's values (the keypad's confirmation, an edit, or a fix of a rejected one). */
 export async function updateReading(db: WalkDb, id: string, values: Partial<ReadingValues>, options: { commit?: boolean } = {}): Promise<LocalReading | undefined> {
-  const tx = db.transaction("readings", "readwrite");
+  const tx = db.transaction("readings", "readwrite", RELAXED);
   const r = await tx.store.get(id);
   if (!r) return undefined;
   const next: LocalReading = { ...r, ...values };
@@ -54,7 +58,7 @@ export async function updateReading(db: WalkDb, id: string, values: Partial<Read
     next.state = "pending";
   } else {
     // Not uploaded yet: the upload carries the new values; a rejected one is queued again.
-    next.state = "pending";
+    next.state = next.draft ? "draft" : "pending";
     next.reasons = null;
   }
   await tx.store.put(next);
@@ -81,13 +85,8 @@ export async function sweepReadings(db: WalkDb, sweepId: string): Promise<LocalR
 
 /** What the banner counts: changes not yet on the server (rejected ones are counted apart). */
 export async function queueCounts(db: WalkDb): Promise<{ waiting: number; rejected: number }> {
-  let waiting = 0;
-  let rejected = 0;
-  for (const r of await db.getAll("readings")) {
-    if (r.draft) continue;
-    if (r.state === "rejected") rejected++;
-    else if (r.state === "pending") waiting++;
-  }
-  for (const s of await db.getAll("sweeps")) if (!s.onServer && !s.rejected) waiting++;
+  let waiting = await db.countFromIndex("readings", "byState", "pending");
+  const rejected = await db.countFromIndex("readings", "byState", "rejected");
+  for (const s of await db.getAll("sweeps")) if ((!s.onServer && !s.rejected) || s.submitPending) waiting++;
   return { waiting, rejected };
 }

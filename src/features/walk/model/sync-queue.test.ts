@@ -27,8 +27,10 @@ class FakeServer implements SyncTransport {
   private check() {
     if (this.offline) throw new Error("network");
   }
+  refuseSweeps = new Set<string>();
   async createSweep(_storeId: string, body: CreateSweepInput) {
     this.check();
+    if (this.refuseSweeps.has(body.id!)) throw new RefusedError(400, "Please check: planId is not calibrated yet.", { planId: "is not calibrated yet" });
     this.sweeps.add(body.id!);
   }
   async uploadReadings(sweepId: string, list: ReadingInput[]): Promise<ReadingsBatchResult> {
@@ -162,5 +164,18 @@ describe("the sync queue", () => {
     for (let i = 0; i < 7; i++) await addReading(db, sweep.id, values(i));
     await syncOnce(db, server, 3);
     expect(server.batchSizes).toEqual([3, 3, 1]);
+  });
+
+  it("keeps a sweep the server refused, with its reason, and still uploads another sweep's readings", async () => {
+    const other = { ...sweep, id: "0d7e2c4a-5b6f-4a1e-9c3d-8b7a6f5e4d3c" };
+    await saveSweep(db, other);
+    server.refuseSweeps.add(sweep.id);
+    await addReading(db, sweep.id, values(0));
+    await addReading(db, other.id, values(1));
+    const report = await syncOnce(db, server);
+    expect(report).toMatchObject({ confirmed: 1, stoppedBy: null });
+    expect((await db.get("sweeps", sweep.id))?.rejected).toEqual({ planId: "is not calibrated yet" });
+    expect([...server.readings.keys()]).toHaveLength(1);
+    expect((await sweepReadings(db, sweep.id))[0].state).toBe("pending"); // still on the device
   });
 });

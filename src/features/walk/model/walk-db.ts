@@ -6,7 +6,7 @@ import type { LocalReading, LocalSweep } from "./local-types";
 
 export interface WalkDbSchema extends DBSchema {
   sweeps: { key: string; value: LocalSweep };
-  readings: { key: string; value: LocalReading; indexes: { bySweep: string; bySweepSeq: [string, number] } };
+  readings: { key: string; value: LocalReading; indexes: { bySweep: string; bySweepSeq: [string, number]; byState: string } };
   /** Plan, fixtures, image, detectors, systems of a store: cached whenever a store is opened. */
   cache: { key: string; value: { key: string; value: unknown; savedAt: string } };
   meta: { key: string; value: number };
@@ -21,14 +21,18 @@ export function openWalkDb(name = WALK_DB_NAME, factory?: IDBFactory): Promise<W
   // idb opens with the global factory; tests pass fake-indexeddb's.
   if (factory) (globalThis as { indexedDB: IDBFactory }).indexedDB = factory;
   try {
-    return openDB<WalkDbSchema>(name, 1, {
-      upgrade(db) {
-        db.createObjectStore("sweeps", { keyPath: "id" });
-        const readings = db.createObjectStore("readings", { keyPath: "id" });
-        readings.createIndex("bySweep", "sweepId");
-        readings.createIndex("bySweepSeq", ["sweepId", "seq"]);
-        db.createObjectStore("cache", { keyPath: "key" });
-        db.createObjectStore("meta");
+    return openDB<WalkDbSchema>(name, 2, {
+      upgrade(db, oldVersion, _newVersion, tx) {
+        if (oldVersion < 1) {
+          db.createObjectStore("sweeps", { keyPath: "id" });
+          const readings = db.createObjectStore("readings", { keyPath: "id" });
+          readings.createIndex("bySweep", "sweepId");
+          readings.createIndex("bySweepSeq", ["sweepId", "seq"]);
+          db.createObjectStore("cache", { keyPath: "key" });
+          db.createObjectStore("meta");
+        }
+        // The queue reads only what waits, not the whole sweep, on every pass.
+        if (oldVersion < 2) tx.objectStore("readings").createIndex("byState", "state");
       },
     });
   } finally {
