@@ -22,6 +22,6 @@ export interface StoreSectionProps {
 export const STORE_SECTIONS: readonly { id: string; Component: ComponentType<StoreSectionProps> }[] = [
   { id: "plan", Component: ({ store, role, units }) => <PlanSection storeId={store.id} canEdit={can(role, "plans.edit") && !store.archivedAt} preference={units.length} /> },
   { id: "systems", Component: ({ store, role, units }) => <SystemsSection storeId={store.id} canEdit={can(role, "stores.edit") && !store.archivedAt} massUnit={units.mass} /> },
-  { id: "sweeps", Component: ({ store, role }) => <StoreSweepsSection storeId={store.id} timeZone={store.timeZone} canRecord={can(role, "sweeps.record") && !store.archivedAt} /> },
+  { id: "sweeps", Component: ({ store }) => <StoreSweepsSection storeId={store.id} timeZone={store.timeZone} /> },
   { id: "records", Component: ({ store }) => <StoreRecordsSection storeId={store.id} /> },
 ];

@@ -5,8 +5,8 @@ import { useStoreSweeps } from "../api/get-sweeps";
 
 const LINK = "inline-flex min-h-11 items-center rounded-md px-4 font-bold no-underline";
 
-/** The store page's sweeps section: the latest few with their field maps, and where to start a new one. */
-export function StoreSweepsSection({ storeId, timeZone, canRecord }: { storeId: string; timeZone: string; canRecord: boolean }) {
+/** The store page's sweeps section: the latest few with their field maps (starting one is in the page header). */
+export function StoreSweepsSection({ storeId, timeZone }: { storeId: string; timeZone: string }) {
   const sweeps = useStoreSweeps(storeId);
   const when = (iso: string) => new Intl.DateTimeFormat("en-GB", { timeZone, dateStyle: "medium", timeStyle: "short" }).format(new Date(iso));
   const latest = [...(sweeps.data ?? [])].sort((a, b) => b.startedAt.localeCompare(a.startedAt)).slice(0, 3);
@@ -27,7 +27,6 @@ export function StoreSweepsSection({ storeId, timeZone, canRecord }: { storeId: 
         </ul>
       ) : null}
       <div className="flex flex-wrap gap-2">
-        {canRecord ? <Link className={`${LINK} bg-accent text-on-accent`} to={`/stores/${storeId}/walk`}>Start a sweep</Link> : null}
         {sweeps.data?.length ? <Link className={`${LINK} edge bg-surface`} to={`/stores/${storeId}/sweeps`}>All sweeps</Link> : null}
         {(sweeps.data?.length ?? 0) > 1 ? <Link className={`${LINK} edge bg-surface`} to={`/stores/${storeId}/compare`}>Compare months</Link> : null}
       </div>
