@@ -39,6 +39,8 @@ export interface LocatorOptions {
   /**
    * Local refinement: each spot moves to the likelihood-weighted mean of the allowed cells within
    * refineRadiusM, with Δχ² tempered by refineInflation times the residual variance (0 radius = off).
+   * 1.5 m and 40–200 lowered the median top-1 error on both the committed benchmark stores
+   * (1.24 -> 1.06–1.16 m) and a held-out set (1.41 -> 1.17 m); 2.5 m or a sharp weighting (2) did not.
    */
   refineRadiusM: number;
   refineInflation: number;
@@ -102,8 +104,8 @@ export const DEFAULT_LOCATOR_OPTIONS: LocatorOptions = {
   sourceSeparationM: 4,
   alternateFraction: 0.3,
   rankByStrength: true,
-  refineRadiusM: 0,
-  refineInflation: 4,
+  refineRadiusM: 1.5,
+  refineInflation: 200,
   minDeltaChi2: 25,
   supportRadiusM: 3,
   minSupport: 2,
