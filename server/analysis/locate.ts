@@ -5,10 +5,12 @@ import { GeodesicSearch } from "./grid/geodesic-distance";
 import { cellCentre, cellIndexOf, cellsInside, createPlanGrid, nearestFreeCell } from "./grid/plan-grid";
 import { gridRoute } from "./lag/grid-route";
 import { lagCorrect } from "./lag/lag-correct";
+import { responseNodes } from "./lag/response-nodes";
 import { estimateBackground } from "./locator/background";
 import { candidateNextCheck, candidateReason, type CandidateFacts } from "./locator/candidate-words";
 import { benignSource, fansMixing, oneSidedPass, sparseCoverage } from "./locator/diagnostics";
 import { fieldMap } from "./locator/field-map";
+import { refineCell } from "./locator/local-refine";
 import { findSources, type FoundSource } from "./locator/greedy-sources";
 import { fitNonnegative } from "./locator/nonnegative-fit";
 import { DEFAULT_LOCATOR_OPTIONS, type LocatorOptions } from "./locator/locator-options";
@@ -117,7 +119,16 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   const w = weightsFor(y, o);
 
   // 4. one truncated geodesic search per sampled cell feeds both the field map and the source scan
-  const fields = accumulateReadingFields(grid, xs, ys, y, w, kernel, o.mapSigmaM, stepScale);
+  // the fit predicts each reading through the sensor's response along the walk (forward model)
+  // (one node is the plain D + τ shift already computed: routing the walk again costs more than the fit)
+  const nodes =
+    o.responseNodes <= 1 || !(instrument.timeConstantS > 0)
+      ? { xs: [xs], ys: [ys], weights: [1] }
+      : responseNodes(readings, instrument.transportDelayS, instrument.timeConstantS, o.responseNodes, {
+          route: gridRoute(grid),
+          walkSpeedMps: o.walkSpeedMps > 0 ? o.walkSpeedMps : undefined,
+        });
+  const fields = accumulateReadingFields(grid, nodes, y, w, kernel, o.mapSigmaM, stepScale);
   const field = fieldMap(fields, grid.width, grid.height, grid.cellSize);
 
   // 5. suspect spots
@@ -157,10 +168,12 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
       return true;
     },
   });
-  const sources = addMirrorSpot(greedy.sources);
-
   const dof = Math.max(1, n - 2 - greedy.sources.length - nuisance.length);
   const s2 = Math.max(1, greedy.chi2Final / dof);
+  const sources = addMirrorSpot(greedy.sources).map((s) => {
+    const cell = refineCell(greedy.firstScan.delta, allowed, s.cell, grid.width, grid.cellSize, o.refineRadiusM, o.refineInflation * s2);
+    return cell === s.cell ? s : { ...s, cell, column: kernelColumn(fields, cell, n) };
+  });
   const topQ = Math.max(sources[0]?.q ?? 0, 1e-12);
   const gPerYearPerQ =
     (wellMixedEmission(ppmToMgPerM3(1, o.molarMassGPerMol), o.airChangesPerH, kernelArea(kernel) * o.mixingHeightM) * HOURS_PER_YEAR) / 1000;

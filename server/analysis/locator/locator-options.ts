@@ -4,6 +4,11 @@
 export interface LocatorOptions {
   /** Walking pace between stops for the stop-and-go lag model, m/s (issue 5: 0.7–1.2); 0 = move evenly between taps. */
   walkSpeedMps: number;
+  /**
+   * Gauss–Laguerre nodes of the sensor response in the fit's forward model (1 = shift each reading by
+   * D + τ only; 2 or 3 = predict each reading as the response-weighted kernel at earlier walk points).
+   */
+  responseNodes: number;
   /** Grid cell, m (issue 5 default). */
   cellSize: number;
   /** Screening length L = √(K/λ), m: K ≈ 0.01–0.05 m²/s in aisles and λ = 1.5–4 air changes/h give 3–11 m. */
@@ -31,6 +36,14 @@ export interface LocatorOptions {
   separationM: number;
   /** Order fitted sources by strength (true) or by the order the greedy fit picked them (false). */
   rankByStrength: boolean;
+  /**
+   * Local refinement: each spot moves to the likelihood-weighted mean of the allowed cells within
+   * refineRadiusM, with Δχ² tempered by refineInflation times the residual variance (0 radius = off).
+   * 1.5 m and 40–200 lowered the median top-1 error on both the committed benchmark stores
+   * (1.24 -> 1.06–1.16 m) and a held-out set (1.41 -> 1.17 m); 2.5 m or a sharp weighting (2) did not.
+   */
+  refineRadiusM: number;
+  refineInflation: number;
   /** An alternative spot must reach this share of the best spot's Δχ². */
   alternateFraction: number;
   /** Credibility: minimum Δχ², and readings within supportRadiusM reading at least elevatedPpm over background. */
@@ -62,7 +75,8 @@ export interface LocatorOptions {
    * Radius = max(minRadiusM, radiusScale · misfit-contour radius). The raw contour radius came out
    * 0.1–0.5 m against top-1 errors of 0.2–3 m on the scenario benchmark (far too confident, as
    * locator-methods §5.6 warns), so the floor carries the calibration: 2.5 m held the true leak in 88%
-   * of the committed benchmark stores it was calibrated on, but only 74% of a held-out set.
+   * of the committed benchmark stores it was calibrated on, but only 74% of a held-out set. With the
+   * local refinement it held 90% of the committed stores and 88% of a held-out set (stores 101–106).
    */
   minRadiusM: number;
   radiusScale: number;
@@ -76,6 +90,7 @@ export interface LocatorOptions {
 
 export const DEFAULT_LOCATOR_OPTIONS: LocatorOptions = {
   walkSpeedMps: 1,
+  responseNodes: 1,
   cellSize: 0.25,
   screeningLengthM: 1.5,
   nearCutoffM: 0.3,
@@ -90,6 +105,8 @@ export const DEFAULT_LOCATOR_OPTIONS: LocatorOptions = {
   sourceSeparationM: 4,
   alternateFraction: 0.3,
   rankByStrength: true,
+  refineRadiusM: 1.5,
+  refineInflation: 200,
   minDeltaChi2: 25,
   supportRadiusM: 3,
   minSupport: 2,

@@ -1,5 +1,6 @@
 import { GeodesicSearch } from "../grid/geodesic-distance";
 import { nearestFreeCell, type PlanGrid } from "../grid/plan-grid";
+import type { ResponseNodes } from "../lag/response-nodes";
 import type { SourceKernel } from "./source-kernel";
 
 /**
@@ -28,41 +29,47 @@ export interface ReadingFields {
 
 export function accumulateReadingFields(
   grid: PlanGrid,
-  xs: Float64Array,
-  ys: Float64Array,
+  nodes: ResponseNodes,
   values: Float64Array,
   weights: Float64Array,
   kernel: SourceKernel,
   mapSigmaM: number,
   stepScale: Float32Array | null = null,
 ): ReadingFields {
-  const n = xs.length;
+  const n = values.length;
+  const m = nodes.weights.length;
+  if (m === 0 || nodes.xs.length !== m || nodes.ys.length !== m) throw new Error("response nodes: need matching xs, ys and weights");
   const cells = grid.width * grid.height;
-  const cellOfReading = new Int32Array(n);
-  for (let i = 0; i < n; i++) cellOfReading[i] = nearestFreeCell(grid, xs[i], ys[i]);
-  const order = Array.from({ length: n }, (_, i) => i).sort((a, b) => cellOfReading[a] - cellOfReading[b]);
-
+  // readings whose response nodes fall in the same cells share one combined column
+  const nodeCells: Int32Array[] = nodes.xs.map((xs, k) => Int32Array.from(xs, (x, i) => nearestFreeCell(grid, x, nodes.ys[k][i])));
+  const keyOf = (i: number) => {
+    let key = "";
+    for (let k = 0; k < m; k++) key += nodeCells[k][i] + ",";
+    return key;
+  };
   const groupOfReading = new Int32Array(n);
+  const groupIndex = new Map<string, number>();
   const groupCellList: number[] = [];
   const groupW: number[] = [];
   const groupY: number[] = [];
   const groupCount: number[] = [];
   const groupFirst: number[] = [];
-  for (const i of order) {
-    const g = groupCellList.length - 1;
-    if (g >= 0 && groupCellList[g] === cellOfReading[i]) {
-      groupW[g] += weights[i];
-      groupY[g] += values[i];
-      groupCount[g]++;
-      groupOfReading[i] = g;
-    } else {
-      groupCellList.push(cellOfReading[i]);
-      groupW.push(weights[i]);
-      groupY.push(values[i]);
-      groupCount.push(1);
+  for (let i = 0; i < n; i++) {
+    const key = keyOf(i);
+    let g = groupIndex.get(key);
+    if (g === undefined) {
+      g = groupCellList.length;
+      groupIndex.set(key, g);
+      groupCellList.push(nodeCells[0][i]);
+      groupW.push(0);
+      groupY.push(0);
+      groupCount.push(0);
       groupFirst.push(i);
-      groupOfReading[i] = g + 1;
     }
+    groupW[g] += weights[i];
+    groupY[g] += values[i];
+    groupCount[g]++;
+    groupOfReading[i] = g;
   }
   const groups = groupCellList.length;
 
@@ -78,14 +85,45 @@ export function accumulateReadingFields(
   let kernArr = new Float32Array(cap);
   let used = 0;
 
+  // per group: the response-weighted kernel and map weight of its nodes, gathered densely
+  const combG = new Float64Array(cells);
+  const combOm = new Float64Array(cells);
+  const stamp = new Int32Array(cells).fill(-1);
+  let touched: Int32Array = new Int32Array(4096);
+
   const search = new GeodesicSearch(grid, stepScale);
   const mapCut = 3 * mapSigmaM;
   const inv2s2 = 1 / (2 * mapSigmaM * mapSigmaM);
   for (let g = 0; g < groups; g++) {
     const i = groupFirst[g];
-    const settled = search.fromPoint(xs[i], ys[i], kernel.truncationM);
-    if (used + settled > cap) {
-      cap = Math.max(cap * 2, used + settled);
+    let nTouched = 0;
+    for (let k = 0; k < m; k++) {
+      // identical node cells of one reading (standing still) are searched once with summed weight
+      let dup = false;
+      for (let k2 = 0; k2 < k; k2++) if (nodeCells[k2][i] === nodeCells[k][i]) dup = true;
+      if (dup) continue;
+      let a = 0;
+      for (let k2 = k; k2 < m; k2++) if (nodeCells[k2][i] === nodeCells[k][i]) a += nodes.weights[k2];
+      const settled = search.fromPoint(nodes.xs[k][i], nodes.ys[k][i], kernel.truncationM);
+      const { dist } = search;
+      const list = search.settled;
+      for (let q = 0; q < settled; q++) {
+        const c = list[q];
+        const d = dist[c];
+        if (d < nearestReading[c]) nearestReading[c] = d;
+        if (stamp[c] !== g) {
+          stamp[c] = g;
+          combG[c] = 0;
+          combOm[c] = 0;
+          if (nTouched === touched.length) touched = growInt32(touched);
+          touched[nTouched++] = c;
+        }
+        combG[c] += a * kernel.at(d);
+        if (d <= mapCut) combOm[c] += a * Math.exp(-d * d * inv2s2);
+      }
+    }
+    if (used + nTouched > cap) {
+      cap = Math.max(cap * 2, used + nTouched);
       const c2 = new Int32Array(cap);
       c2.set(cellArr.subarray(0, used));
       cellArr = c2;
@@ -97,13 +135,9 @@ export function accumulateReadingFields(
     const w = groupW[g];
     const ySum = groupY[g];
     const count = groupCount[g];
-    const { dist } = search;
-    const list = search.settled;
-    for (let q = 0; q < settled; q++) {
-      const c = list[q];
-      const d = dist[c];
-      if (d < nearestReading[c]) nearestReading[c] = d;
-      const gv = kernel.at(d);
+    for (let q = 0; q < nTouched; q++) {
+      const c = touched[q];
+      const gv = combG[c];
       if (gv > 0) {
         sumWG[c] += w * gv;
         sumWGG[c] += w * gv * gv;
@@ -111,8 +145,8 @@ export function accumulateReadingFields(
         kernArr[used] = gv;
         used++;
       }
-      if (d <= mapCut) {
-        const om = Math.exp(-d * d * inv2s2);
+      const om = combOm[c];
+      if (om > 0) {
         omega[c] += count * om;
         omegaY[c] += ySum * om;
       }
@@ -131,6 +165,12 @@ export function accumulateReadingFields(
     omegaY,
     nearestReading,
   };
+}
+
+function growInt32(a: Int32Array): Int32Array {
+  const b = new Int32Array(a.length * 2);
+  b.set(a);
+  return b;
 }
 
 /** Per cell Σ_i w_i·g_i(c)·r_i for a per-reading vector r (one pass over the stored entries). */
