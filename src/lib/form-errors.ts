@@ -53,3 +53,19 @@ export function focusFirstInvalid(form: HTMLFormElement | null, fields: FieldErr
     }
   }
 }
+
+/**
+ * Checks a form's values with the shared schema: on failure shows the field errors and moves focus
+ * to the first one (returns null); on success clears them and returns the parsed values.
+ */
+export function checkForm<S extends z.ZodType>(schema: S, values: unknown, form: HTMLFormElement, setErrors: (fields: FieldErrors) => void): z.infer<S> | null {
+  const parsed = schema.safeParse(values);
+  if (!parsed.success) {
+    const fields = zodFieldErrors(parsed.error);
+    setErrors(fields);
+    focusFirstInvalid(form, fields);
+    return null;
+  }
+  setErrors({});
+  return parsed.data;
+}

@@ -2,7 +2,7 @@ import { useState, type FormEvent } from "react";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
-import { focusFirstInvalid, formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
+import { checkForm, focusFirstInvalid, formErrorMessage, serverFieldErrors, type FieldErrors } from "../../../lib/form-errors";
 import { passwordResetRequestInput, useRequestPasswordReset } from "../api/request-password-reset";
 
 export function PasswordResetRequestForm() {
@@ -15,15 +15,9 @@ export function PasswordResetRequestForm() {
   function submit(event: FormEvent) {
     event.preventDefault();
     const form = event.currentTarget as HTMLFormElement;
-    const parsed = passwordResetRequestInput.safeParse({ email });
-    if (!parsed.success) {
-      const fields = zodFieldErrors(parsed.error);
-      setClientErrors(fields);
-      focusFirstInvalid(form, fields);
-      return;
-    }
-    setClientErrors({});
-    request.mutate(parsed.data, { onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)) });
+    const parsed = checkForm(passwordResetRequestInput, { email }, form, setClientErrors);
+    if (!parsed) return;
+    request.mutate(parsed, { onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)) });
   }
 
   if (request.isSuccess) {

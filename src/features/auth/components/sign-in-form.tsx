@@ -5,7 +5,7 @@ import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
 import { isApiRequestError } from "../../../lib/api-client";
-import { focusFirstInvalid, formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
+import { checkForm, focusFirstInvalid, formErrorMessage, serverFieldErrors, type FieldErrors } from "../../../lib/form-errors";
 import { signInInput, useSignIn } from "../api/sign-in";
 
 export function SignInForm({ onSignedIn }: { onSignedIn: (info: SessionInfo) => void }) {
@@ -23,15 +23,9 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (info: SessionInfo) => 
   function submit(event: FormEvent) {
     event.preventDefault();
     const form = event.currentTarget as HTMLFormElement;
-    const parsed = signInInput.safeParse({ email, password });
-    if (!parsed.success) {
-      const fields = zodFieldErrors(parsed.error);
-      setClientErrors(fields);
-      focusFirstInvalid(form, fields);
-      return;
-    }
-    setClientErrors({});
-    signIn.mutate(parsed.data, { onSuccess: onSignedIn, onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)) });
+    const parsed = checkForm(signInInput, { email, password }, form, setClientErrors);
+    if (!parsed) return;
+    signIn.mutate(parsed, { onSuccess: onSignedIn, onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)) });
   }
 
   return (

@@ -4,7 +4,7 @@ import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { Select } from "../../../components/ui/select";
 import { TextField } from "../../../components/ui/text-field";
-import { focusFirstInvalid, formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
+import { checkForm, focusFirstInvalid, formErrorMessage, serverFieldErrors, type FieldErrors } from "../../../lib/form-errors";
 import { companySettings, useUpdateCompanySettings } from "../api/update-company-settings";
 import { LEAK_RATE_METHOD_LABELS, LENGTH_LABELS, MASS_LABELS, RULE_PROFILE_LABELS, optionsOf } from "./unit-labels";
 
@@ -33,15 +33,9 @@ export function CompanySettingsForm({ settings, editable, onSaved }: CompanySett
     event.preventDefault();
     const form = event.currentTarget as HTMLFormElement;
     const days = draft.detectorCheckIntervalDays.trim();
-    const parsed = companySettings.safeParse({ ...draft, detectorCheckIntervalDays: days === "" ? Number.NaN : Number(days) });
-    if (!parsed.success) {
-      const fields = zodFieldErrors(parsed.error);
-      setClientErrors(fields);
-      focusFirstInvalid(form, fields);
-      return;
-    }
-    setClientErrors({});
-    update.mutate(parsed.data, { onSuccess: () => setSaved(true), onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)) });
+    const parsed = checkForm(companySettings, { ...draft, detectorCheckIntervalDays: days === "" ? Number.NaN : Number(days) }, form, setClientErrors);
+    if (!parsed) return;
+    update.mutate(parsed, { onSuccess: () => setSaved(true), onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)) });
   }
 
   return (

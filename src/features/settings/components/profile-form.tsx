@@ -6,7 +6,7 @@ import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { Select } from "../../../components/ui/select";
 import { TextField } from "../../../components/ui/text-field";
-import { focusFirstInvalid, formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
+import { checkForm, focusFirstInvalid, formErrorMessage, serverFieldErrors, type FieldErrors } from "../../../lib/form-errors";
 import { profileUpdateInput, useUpdateProfile } from "../api/update-profile";
 import { LENGTH_LABELS, MASS_LABELS } from "./unit-labels";
 
@@ -38,19 +38,13 @@ export function ProfileForm({ user, companyDefaults, onSaved }: ProfileFormProps
     event.preventDefault();
     const form = event.currentTarget as HTMLFormElement;
     setSaved(false);
-    const parsed = profileUpdateInput.safeParse({
+    const parsed = checkForm(profileUpdateInput, {
       name,
       lengthUnit: lengthUnit === COMPANY_DEFAULT ? null : (lengthUnit as LengthUnit),
       massUnit: massUnit === COMPANY_DEFAULT ? null : (massUnit as MassUnit),
-    });
-    if (!parsed.success) {
-      const fields = zodFieldErrors(parsed.error);
-      setClientErrors(fields);
-      focusFirstInvalid(form, fields);
-      return;
-    }
-    setClientErrors({});
-    update.mutate(parsed.data, { onSuccess: () => setSaved(true), onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)) });
+    }, form, setClientErrors);
+    if (!parsed) return;
+    update.mutate(parsed, { onSuccess: () => setSaved(true), onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)) });
   }
 
   const lengthOptions = [

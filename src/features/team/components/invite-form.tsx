@@ -4,7 +4,7 @@ import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { Select } from "../../../components/ui/select";
 import { TextField } from "../../../components/ui/text-field";
-import { focusFirstInvalid, formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
+import { checkForm, focusFirstInvalid, formErrorMessage, serverFieldErrors, type FieldErrors } from "../../../lib/form-errors";
 import { inviteInput, useInviteMember } from "../api/invite-member";
 import { ROLE_OPTIONS } from "./role-options";
 import { StorePicker, type StoreOption } from "./store-picker";
@@ -32,15 +32,9 @@ export function InviteForm({ stores, storesLoading = false, outboxHint = false }
     const form = event.currentTarget as HTMLFormElement;
     setSentTo(null);
     // Only a store contact is scoped to stores; other roles see every store of the company.
-    const parsed = inviteInput.safeParse({ email, role, storeIds: isStoreContact ? storeIds : [] });
-    if (!parsed.success) {
-      const fields = zodFieldErrors(parsed.error);
-      setClientErrors(fields);
-      focusFirstInvalid(form, fields);
-      return;
-    }
-    setClientErrors({});
-    invite.mutate(parsed.data, {
+    const parsed = checkForm(inviteInput, { email, role, storeIds: isStoreContact ? storeIds : [] }, form, setClientErrors);
+    if (!parsed) return;
+    invite.mutate(parsed, {
       onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)),
       onSuccess: (sent) => {
         setSentTo(sent.email);
