@@ -37,6 +37,25 @@ type Method = "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
 
 const SESSION_PATH = "/api/auth/session";
 
+// Reading the session may create one (it carries the CSRF token), and its response sets the session
+// cookie. A read still in flight when sign-in rotates the session id would land after it and put the
+// old, signed-out cookie back. So session reads and writes that change the session never overlap:
+// each waits for the other kind to finish first.
+const sessionReads = new Set<Promise<unknown>>();
+const sessionWrites = new Set<Promise<unknown>>();
+const CHANGES_SESSION = /^\/api\/(auth\/|invitations\/[^/]+\/accept$)/;
+
+async function settled(set: Set<Promise<unknown>>): Promise<void> {
+  await Promise.allSettled([...set]);
+}
+
+function track<T>(set: Set<Promise<unknown>>, promise: Promise<T>): Promise<T> {
+  set.add(promise);
+  const done = () => set.delete(promise);
+  promise.then(done, done);
+  return promise;
+}
+
 /**
  * A page opened straight from an e-mail link (invitation, password reset) may post before
  * anything has read the session; read it first so the request carries a token.
@@ -44,7 +63,8 @@ const SESSION_PATH = "/api/auth/session";
 async function ensureCsrfToken(): Promise<void> {
   if (csrfToken) return;
   try {
-    const response = await fetch(SESSION_PATH, { headers: { Accept: "application/json" }, credentials: "same-origin" });
+    await settled(sessionWrites);
+    const response = await track(sessionReads, fetch(SESSION_PATH, { headers: { Accept: "application/json" }, credentials: "same-origin" }));
     if (response.ok) rememberCsrf(await readJson(response));
   } catch {
     // the real request below reports the network problem
@@ -121,15 +141,21 @@ async function send<T>(method: Method, path: string, schema: z.ZodType<T> | null
   if (options.body !== undefined && !isForm) headers["Content-Type"] = "application/json";
   if (method !== "GET" && csrfToken) headers["X-CSRF-Token"] = csrfToken;
 
+  const isSessionRead = method === "GET" && path === SESSION_PATH;
+  const changesSession = method !== "GET" && CHANGES_SESSION.test(path);
+  if (isSessionRead) await settled(sessionWrites);
+  if (changesSession) await settled(sessionReads);
+
   let response: Response;
   try {
-    response = await fetch(path, {
+    const request = fetch(path, {
       method,
       headers,
       credentials: "same-origin",
       body: options.body === undefined ? undefined : isForm ? (options.body as FormData) : JSON.stringify(options.body),
       signal: options.signal,
     });
+    response = await (isSessionRead ? track(sessionReads, request) : changesSession ? track(sessionWrites, request) : request);
   } catch (cause) {
     if (cause instanceof DOMException && cause.name === "AbortError") throw cause;
     throw new ApiRequestError(0, "network", "Plumeline could not reach the server. Check the connection and try again.");
