@@ -7,7 +7,7 @@ import { startE2eServer, type E2eServer } from "../helpers/e2e-server";
 import { signInThroughForm } from "../helpers/e2e-session";
 import { PASSWORD, seedCompany } from "../helpers/fixtures";
 import { makeJpeg } from "../helpers/plan-images";
-import { mapStoreForWalk, planToScreen } from "../helpers/walk-e2e";
+import { mapStoreForWalk, planToScreen, waitForSteadyPlan } from "../helpers/walk-e2e";
 
 let server: E2eServer;
 let browser: Browser;
@@ -37,6 +37,7 @@ it("on a tablet with a mouse, walks the dairy case line one click per reading, i
   await page.getByRole("link", { name: co.store.name }).click();
   await page.getByRole("button", { name: "Start the sweep" }).click();
   await page.getByTestId("walk-plan").waitFor();
+  await waitForSteadyPlan(page);
   const sweepId = page.url().split("/").pop()!;
 
   // Dairy cases run from x 2 m to 24 m with their fronts at y 9.5 m; walk 0.5 m in front of them.

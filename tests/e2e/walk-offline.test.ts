@@ -6,7 +6,7 @@ import { launchBrowser, newContext } from "../helpers/browser";
 import { startE2eServer, type E2eServer } from "../helpers/e2e-server";
 import { signInThroughForm } from "../helpers/e2e-session";
 import { PASSWORD, seedCompany } from "../helpers/fixtures";
-import { mapStoreForWalk, planToScreen, waitForServiceWorker } from "../helpers/walk-e2e";
+import { mapStoreForWalk, planToScreen, waitForServiceWorker, waitForSteadyPlan } from "../helpers/walk-e2e";
 
 let server: E2eServer;
 let browser: Browser;
@@ -48,6 +48,7 @@ it("a technician on a phone taps ten readings with the network cut halfway, relo
   await page.goto(`${server.url}/stores/${co.store.id}/walk`);
   await page.getByRole("button", { name: "Start the sweep" }).tap();
   await page.getByTestId("walk-plan").waitFor();
+  await waitForSteadyPlan(page);
   await waitForServiceWorker(page);
   const sweepId = page.url().split("/").pop()!;
   // The sweep was made on the device first, then uploaded.

@@ -19,6 +19,23 @@ export async function planToScreen(page: Page, x: number, y: number) {
   return { x: box.x + panX + x * scale, y: box.y + panY + y * scale };
 }
 
+/**
+ * Resolves once the plan has stopped moving (the first fit runs after the stage measures itself):
+ * a tap aimed with planToScreen before that can land in another fixture, such as a walk-in.
+ */
+export async function waitForSteadyPlan(page: Page) {
+  const plan = page.getByTestId("walk-plan");
+  const look = async () => JSON.stringify([await plan.boundingBox(), await plan.getAttribute("data-view")]);
+  let last = await look();
+  for (let i = 0; i < 50; i++) {
+    await page.waitForTimeout(150);
+    const now = await look();
+    if (now === last) return;
+    last = now;
+  }
+  throw new Error("the plan never stopped moving");
+}
+
 /** Resolves once a service worker controls the page (the app shell is then cached). */
 export async function waitForServiceWorker(page: Page) {
   await page.waitForFunction(() => navigator.serviceWorker?.controller !== null, undefined, { timeout: 15_000 });
