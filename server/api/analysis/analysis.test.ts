@@ -5,6 +5,7 @@ import { detectors } from "../../db/schema/index";
 import type { Role } from "../../domain/roles";
 import { decodeField } from "../../domain/fieldmap/field-codec";
 import { analysisRunner } from "./analysis.service";
+import { caseLineFixtures, caseWalkReadings } from "../../../tests/helpers/sweep-walk";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;
@@ -24,40 +25,10 @@ async function as(role: Role, company = co): Promise<Agent> {
 const startedAt = new Date(Date.now() - 30 * 60_000);
 const at = (s: number) => new Date(startedAt.getTime() + s * 1000).toISOString();
 
-/**
- * Readings made by a model unlike the locator's kernel: exponential decay with straight-line distance
- * from a leak at (12, 3.0) inside the case, seen by a detector that samples the air one delay plus one
- * time constant (6.5 s) back along the walk. The walk goes east along the case front, back along the
- * aisle and east behind the case; a tap every 1.3 m, 1.6 s apart.
- */
+// The readings come from tests/helpers/sweep-walk.ts: a model unlike the locator's kernel, with
+// the leak at (12, 3.0) inside the case.
 const LEAK = { x: 12, y: 3 };
-function caseWalk(): Record<string, unknown>[] {
-  const legs: [number, number][] = [[1, 3.9], [22, 3.9], [22, 5.2], [1, 5.2], [1, 1.2], [22, 1.2]];
-  const taps: { x: number; y: number; s: number }[] = [];
-  let s = 10;
-  for (let k = 1; k < legs.length; k++) {
-    const [ax, ay] = legs[k - 1];
-    const [bx, by] = legs[k];
-    const len = Math.hypot(bx - ax, by - ay);
-    for (let d = 0; d < len; d += 1.3) {
-      taps.push({ x: ax + ((bx - ax) * d) / len, y: ay + ((by - ay) * d) / len, s });
-      s += 1.6;
-    }
-  }
-  const conc = (x: number, y: number) => 0.4 + 90 * Math.exp(-Math.hypot(x - LEAK.x, y - LEAK.y) / 1.2);
-  return taps.map((tap) => {
-    const back = tap.s - 6.5;
-    let x = taps[0].x, y = taps[0].y;
-    for (let k = 1; k < taps.length; k++) {
-      if (taps[k].s >= back && taps[k - 1].s <= back) {
-        const f = (back - taps[k - 1].s) / (taps[k].s - taps[k - 1].s);
-        x = taps[k - 1].x + f * (taps[k].x - taps[k - 1].x);
-        y = taps[k - 1].y + f * (taps[k].y - taps[k - 1].y);
-      }
-    }
-    return { id: crypto.randomUUID(), x: tap.x, y: tap.y, takenAt: at(tap.s), ppm: Math.round(conc(x, y)), samplePoint: "grille" };
-  });
-}
+const caseWalk = () => caseWalkReadings(startedAt, LEAK);
 
 async function startSweep(a: Agent, detectorId = diodeId, body: Record<string, unknown> = {}) {
   const res = await a.post(`/api/stores/${co.store.id}/sweeps`, { id: crypto.randomUUID(), planId, detectorId, fans: "stopped", defrost: false, startedAt: startedAt.toISOString(), ...body });
@@ -82,10 +53,7 @@ beforeAll(async () => {
   planId = plan.body.id;
   const put = await owner.put(`/api/plans/${planId}/fixtures`, {
     layoutRevision: plan.body.layoutRevision,
-    fixtures: [
-      { id: caseId, kind: "open-case", label: "Dairy 1–4", systemId: null, hasFans: true, polygon: [[1, 2], [22, 2], [22, 3.6], [1, 3.6]] },
-      { id: dropId, kind: "line-set-drop", label: "Drop D2", systemId: null, hasFans: false, point: { x: 12, y: 2.2 } },
-    ],
+    fixtures: caseLineFixtures(caseId, dropId),
   });
   expect(put.status, JSON.stringify(put.body)).toBe(200);
   const today = new Date().toISOString().slice(0, 10);
