@@ -59,7 +59,7 @@ export const leakRateRow = z.object({
   repairDue: z.string().nullable(),
 });
 
-export const dueItemKinds = ["repair", "follow-up-test", "recheck-after-repair", "inspection", "chronic-leaker-report", "detector-check"] as const;
+export const dueItemKinds = ["repair", "initial-test", "follow-up-test", "recheck-after-repair", "inspection", "chronic-leaker-report", "detector-check"] as const;
 export const dueItem = z.object({
   kind: z.enum(dueItemKinds),
   what: z.string(),

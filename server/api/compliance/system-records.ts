@@ -1,6 +1,6 @@
-import { and, asc, eq, inArray } from "drizzle-orm";
+import { and, asc, desc, eq, inArray } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import { chargeAdditions, companies, findingEvents, findings, leakChecks, stores, systems } from "../../db/schema/index";
+import { chargeAdditions, companies, customRuleProfiles, findingEvents, findings, leakChecks, stores, systems } from "../../db/schema/index";
 import { profileFor } from "../../domain/compliance/company-profile";
 import type { ChargeAddition } from "../../domain/compliance/leak-rate";
 import type { LeakRateMethod, RuleProfile } from "../../domain/compliance/rule-profile";
@@ -16,9 +16,18 @@ export interface CompanyRules {
   method: LeakRateMethod;
 }
 
+/** The latest saved custom profile of a company, or null when none was saved. */
+export async function latestCustomProfile(ctx: AppContext, companyId: string) {
+  const [row] = await ctx.db.select().from(customRuleProfiles).where(eq(customRuleProfiles.companyId, companyId)).orderBy(desc(customRuleProfiles.savedAt), desc(customRuleProfiles.id)).limit(1);
+  return row ?? null;
+}
+
+/** The company's rules: the profile its setting names (its own stored one for "custom") and its method. */
 export async function companyRules(ctx: AppContext, companyId: string): Promise<CompanyRules> {
   const [c] = await ctx.db.select({ ruleProfile: companies.ruleProfile, method: companies.leakRateMethod }).from(companies).where(eq(companies.id, companyId));
-  return { profile: profileFor(c?.ruleProfile ?? "us-federal"), method: c?.method ?? "annualizing" };
+  const setting = c?.ruleProfile ?? "us-federal";
+  const custom = setting === "custom" ? ((await latestCustomProfile(ctx, companyId))?.profile ?? null) : null;
+  return { profile: profileFor(setting, custom), method: c?.method ?? "annualizing" };
 }
 
 export interface SystemWithStatus {

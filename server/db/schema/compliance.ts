@@ -1,4 +1,5 @@
-import { boolean, date, doublePrecision, index, integer, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import { boolean, date, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import type { RuleProfile } from "../../domain/compliance/rule-profile";
 import { companies } from "./companies";
 import { findings } from "./findings";
 import { systems } from "./systems";
@@ -66,4 +67,21 @@ export const digestRuns = pgTable(
     sentAt: timestamp({ withTimezone: true }),
   },
   (t) => [uniqueIndex("digest_runs_company_date").on(t.companyId, t.localDate)],
+);
+
+/**
+ * A company's custom rule profile (thresholds, deadlines, intervals, each with its source), kept
+ * as data because regulations and company policies change. One row per save: the latest row is
+ * in force, the earlier ones show which rules applied when.
+ */
+export const customRuleProfiles = pgTable(
+  "custom_rule_profiles",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
+    profile: jsonb().$type<RuleProfile>().notNull(),
+    savedById: uuid().notNull().references(() => users.id),
+    savedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("custom_rule_profiles_company").on(t.companyId, t.savedAt)],
 );

@@ -4,7 +4,7 @@ import { applicableLeakRatePart, leakRateThreshold } from "./applicability";
 import { assessLeakRate, type AssessedPoint } from "./assess-leak-rate";
 import { chronicLeakerYears, type ChronicLeakerYear } from "./chronic-leaker";
 import { systemCo2e, type SystemCo2e } from "./co2e";
-import { followUpVerificationDueDate, recheckAfterRepairDueDate } from "./deadlines";
+import { followUpVerificationDueDate, initialVerificationDueDate, recheckAfterRepairDueDate } from "./deadlines";
 import { inspectionsAfterBreach } from "./inspections-after-breach";
 import { leakCheckInterval, nextInspectionDate, type LeakCheckInterval } from "./leak-check-interval";
 import type { ChargeAddition } from "./leak-rate";
@@ -29,7 +29,7 @@ export interface SystemRecords {
 }
 
 export interface DueDate {
-  kind: "repair" | "follow-up-test" | "recheck-after-repair" | "inspection" | "chronic-leaker-report";
+  kind: "repair" | "initial-test" | "follow-up-test" | "recheck-after-repair" | "inspection" | "chronic-leaker-report";
   dueOn: IsoDate;
   what: string;
   source: string;
@@ -77,8 +77,11 @@ export function systemStatus(profile: RuleProfile, method: LeakRateMethod, rec: 
 
   const part = a.applies ? a.part : breachPart;
   for (const f of rec.pendingFollowUps) {
-    if (part && f.initialTestOn) {
-      due.push({ kind: "follow-up-test", dueOn: followUpVerificationDueDate(part, f.initialTestOn), what: "Follow-up verification test", source: part.followUpVerificationDays.source, findingId: f.findingId });
+    if (part && !f.initialTestOn) {
+      // Until a passed initial test is recorded (a failed one means the repair did not hold).
+      due.push({ kind: "initial-test", dueOn: initialVerificationDueDate(part, f.repairedOn), what: `Initial verification test after the repair of ${f.repairedOn}`, source: part.initialVerificationDays.source, findingId: f.findingId });
+    } else if (part && f.initialTestOn) {
+      due.push({ kind: "follow-up-test", dueOn: followUpVerificationDueDate(part, f.initialTestOn), what: `Follow-up verification test after the initial test of ${f.initialTestOn}`, source: part.followUpVerificationDays.source, findingId: f.findingId });
     } else if (!part && profile.leakChecks) {
       due.push({ kind: "recheck-after-repair", dueOn: recheckAfterRepairDueDate(profile, f.repairedOn), what: "Leak check after the repair", source: profile.leakChecks.recheckAfterRepairMonths.source, findingId: f.findingId });
     }
