@@ -1,6 +1,6 @@
 import { and, asc, desc, eq, inArray } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import { chargeAdditions, companies, customRuleProfiles, findingEvents, findings, leakChecks, stores, systems } from "../../db/schema/index";
+import { chargeAdditions, chronicLeakerReports, companies, customRuleProfiles, findingEvents, findings, leakChecks, stores, systems } from "../../db/schema/index";
 import { profileFor } from "../../domain/compliance/company-profile";
 import type { ChargeAddition } from "../../domain/compliance/leak-rate";
 import type { LeakRateMethod, RuleProfile } from "../../domain/compliance/rule-profile";
@@ -44,7 +44,7 @@ export interface SystemWithStatus {
 export async function statusesOf(ctx: AppContext, rules: CompanyRules, rows: { system: SystemRow; store: StoreRow }[], now = new Date()): Promise<SystemWithStatus[]> {
   if (rows.length === 0) return [];
   const ids = rows.map((r) => r.system.id);
-  const [adds, events, checks] = await Promise.all([
+  const [adds, events, checks, filed] = await Promise.all([
     ctx.db.select().from(chargeAdditions).where(inArray(chargeAdditions.systemId, ids)).orderBy(asc(chargeAdditions.addedOn), asc(chargeAdditions.recordedAt)),
     ctx.db
       .select({ systemId: findings.systemId, findingId: findingEvents.findingId, kind: findingEvents.kind, on: findingEvents.on, result: findingEvents.result, status: findingEvents.status })
@@ -53,6 +53,7 @@ export async function statusesOf(ctx: AppContext, rules: CompanyRules, rows: { s
       .where(inArray(findings.systemId, ids))
       .orderBy(asc(findingEvents.at), asc(findingEvents.id)),
     ctx.db.select().from(leakChecks).where(inArray(leakChecks.systemId, ids)),
+    ctx.db.select({ systemId: chronicLeakerReports.systemId, year: chronicLeakerReports.year }).from(chronicLeakerReports).where(inArray(chronicLeakerReports.systemId, ids)),
   ]);
   return rows.map(({ system, store }) => {
     const today = localDateOf(now, store.timeZone);
@@ -86,6 +87,7 @@ export async function statusesOf(ctx: AppContext, rules: CompanyRules, rows: { s
         pendingFollowUps,
         followUpVerifiedOn: mine.filter((e) => e.kind === "follow-up-test" && e.result === "passed").map((e) => e.on),
         leakChecks: checks.filter((c) => c.systemId === system.id).map((c) => ({ checkedOn: c.checkedOn, leakFound: c.leakFound })),
+        chronicReportsFiled: filed.filter((f) => f.systemId === system.id).map((f) => f.year),
       },
       today,
     );

@@ -22,6 +22,11 @@ describe("readable citations", () => {
     expect(readableSource("[M] the first calculation after 1 Jan 2026 uses 365 days")).toBe("the first calculation after 1 Jan 2026 uses 365 days (not yet confirmed in the rule text)");
     expect(readableSource("[D] 10 lb into 100 lb after 180 days")).toBe("10 lb into 100 lb after 180 days (derived from the cited values)");
     expect(readableSource("company policy: repair within 14 days")).toBe("company policy: repair within 14 days");
+    // Pointers into our own reference file are internal and dropped.
+    expect(readableSource("[M] standards.md §8 (critical point 31.0 °C / 73.8 bar)")).toBe("critical point 31.0 °C / 73.8 bar (not yet confirmed in the rule text)");
+    expect(readableSource("[M] safety class B2L; rises: density 0.59 × air [D] standards.md §4, §8")).toBe(
+      "safety class B2L (not yet confirmed in the rule text); rises: density 0.59 × air (derived from the cited values)",
+    );
     expect(readableSource("[S:ZZ] an odd rule")).toBe("an odd rule (source ZZ)");
   });
   it("leave no tag in any source of the built-in profiles", () => {

@@ -65,12 +65,18 @@ const SECTION_ONLY = /^(8[24])\.(\d{3})/;
  * "[M]" becomes "not yet confirmed in the rule text" and "[D]" "derived from the cited values".
  * Texts without tags (a company's own "company policy, 2026 audit") come back unchanged.
  */
+// Pointers into our own reference file are internal: the tag beside them says how sure we are.
+const INTERNAL = /\s*standards\.md(\s*§\d+(,\s*§\d+)*)?|\s+§\d+\b(?=\s*$)/g;
+
 export function readableSource(source: string): string {
-  if (!source.includes("[")) return source;
+  if (/standards\.md §8 disclaimer/.test(source)) return "the codes named in the caution";
+  source = source.replace(INTERNAL, "");
+  if (!source.includes("[")) return source.trim();
   const said = new Set<string>();
-  const segments = source.split(/;\s+/).map((segment) => {
+  const segments = splitOutsideParens(source).map((segment) => {
     const tags = [...segment.matchAll(TAG)].map((m) => m[1]);
     let rest = segment.replace(TAG, "").replace(/\s+([,.)])/g, "$1").replace(/\(\s*\)/g, "").trim();
+    if (/^\([^()]*\)$/.test(rest)) rest = rest.slice(1, -1); // "(critical point 31.0 °C)" left after a stripped pointer
     if (tags.length === 0) return rest;
     // "[S:R4] 84.106" names a section of the tagged part: "40 CFR 84.106".
     if (SECTION_ONLY.test(rest)) rest = `40 CFR ${rest}`;
@@ -93,6 +99,24 @@ export function readableSource(source: string): string {
     return unique.length ? `${rest} (${unique.join("; ")})` : rest;
   });
   return segments.filter(Boolean).join("; ");
+}
+
+/** "a; b (c; d)" → ["a", "b (c; d)"]: a semicolon inside brackets belongs to its clause. */
+function splitOutsideParens(text: string): string[] {
+  const out: string[] = [];
+  let depth = 0;
+  let start = 0;
+  for (let i = 0; i < text.length; i++) {
+    const ch = text[i];
+    if (ch === "(") depth++;
+    else if (ch === ")") depth = Math.max(0, depth - 1);
+    else if (ch === ";" && depth === 0) {
+      out.push(text.slice(start, i));
+      start = i + 1;
+    }
+  }
+  out.push(text.slice(start));
+  return out.map((x) => x.trim());
 }
 
 /** Every `source` string in a nested value made readable (used when a built-in profile is copied for a company). */

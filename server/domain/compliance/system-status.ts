@@ -26,6 +26,8 @@ export interface SystemRecords {
   /** Days a follow-up verification test passed (shortens the rolling-average window). */
   followUpVerifiedOn: readonly IsoDate[];
   leakChecks: readonly { checkedOn: IsoDate; leakFound: boolean }[];
+  /** Calendar years whose chronic-leaker report is marked filed (the due item closes). */
+  chronicReportsFiled?: readonly number[];
 }
 
 export interface DueDate {
@@ -34,6 +36,8 @@ export interface DueDate {
   what: string;
   source: string;
   findingId?: string;
+  /** For a chronic-leaker report: the calendar year it covers. */
+  year?: number;
 }
 
 export interface SystemStatus {
@@ -91,8 +95,8 @@ export function systemStatus(profile: RuleProfile, method: LeakRateMethod, rec: 
   const thisYear = Number(today.slice(0, 4));
   for (const y of chronic) {
     // The report for last year (or this one, once reached) is what can still be acted on.
-    if (y.chronic && y.reportDue && y.year >= thisYear - 1 && part) {
-      due.push({ kind: "chronic-leaker-report", dueOn: y.reportDue, what: `Chronic-leaker report for ${y.year}: ${y.percent.toFixed(0)} % of the full charge added`, source: `${part.chronicLeaker.percentOfFullCharge.source}; ${part.chronicLeaker.reportBy.source}` });
+    if (y.chronic && y.reportDue && y.year >= thisYear - 1 && part && !rec.chronicReportsFiled?.includes(y.year)) {
+      due.push({ kind: "chronic-leaker-report", dueOn: y.reportDue, year: y.year, what: `Chronic-leaker report for ${y.year}: ${y.percent.toFixed(0)} % of the full charge added`, source: `${part.chronicLeaker.percentOfFullCharge.source}; ${part.chronicLeaker.reportBy.source}` });
     }
   }
 

@@ -31,7 +31,7 @@ export function Component() {
     <>
       <PageHeader title={r.system.name} description={`${r.store.name} · records on the store's calendar (${r.store.timeZone}); today is ${r.today}.`} />
       <div className="space-y-8">
-        <SystemRecords r={r} unit={unit} canRecord={canRecord} findings={list.filter((f) => f.status !== "dismissed").map((f) => ({ id: f.id, label: `${f.events[0]?.on ?? ""} ${f.component ?? "leak"} (${f.status})` }))} />
+        <SystemRecords r={r} unit={unit} canRecord={canRecord} canFile={can(membership.role, "compliance.manage")} findings={list.filter((f) => f.status !== "dismissed").map((f) => ({ id: f.id, label: `${f.events[0]?.on ?? ""} ${f.component ?? "leak"} (${f.status})` }))} />
         <section aria-labelledby="sys-findings" className="space-y-3">
           <h2 id="sys-findings" className="text-xl font-bold">Findings on this system</h2>
           {list.length === 0 ? <p className="text-muted">No findings.</p> : (

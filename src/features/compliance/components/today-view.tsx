@@ -6,6 +6,7 @@ import { DataTable } from "../../../components/ui/data-table";
 import { EmptyState } from "../../../components/ui/empty-state";
 import { Select } from "../../../components/ui/select";
 import { arrangeDue, daysInWords, DUE_KIND_LABELS, formatPercent, STATE_LABELS, type DueSort } from "../model/figures";
+import { readableSource } from "../../../../server/domain/compliance/citations";
 
 const STATE_TONE: Record<string, string> = { overdue: "text-danger font-bold", "due-today": "text-danger font-bold", "due-soon": "text-note font-bold", upcoming: "" };
 
@@ -53,7 +54,7 @@ export function TodayView({ data, storeId, onStoreChange }: { data: TodayData; s
                     <span className="text-sm text-muted">{DUE_KIND_LABELS[r.kind]}</span>
                     <br />
                     <Link className="text-accent underline" to={r.link}>{r.what}</Link>
-                    <p className="mt-1 max-w-prose text-sm text-muted">Rule: {r.source}</p>
+                    <p className="mt-1 max-w-prose text-sm text-muted">Rule: {readableSource(r.source)}</p>
                   </>
                 ),
               },
@@ -77,7 +78,7 @@ export function TodayView({ data, storeId, onStoreChange }: { data: TodayData; s
               { header: "Store", cell: (r) => r.storeName },
               { header: "Leak rate", cell: (r) => <Link className="font-bold text-danger underline" to={r.link}>{formatPercent(r.percent)}</Link> },
               { header: "Threshold", cell: (r) => `${r.thresholdPercent} %` },
-              { header: "Calculated", cell: (r) => <>{r.on}<p className="max-w-xs text-sm text-muted">{r.partTitle}; {r.source}</p></> },
+              { header: "Calculated", cell: (r) => <>{r.on}<p className="max-w-xs text-sm text-muted">{readableSource(`${r.partTitle}; ${r.source}`)}</p></> },
             ]}
           />
         )}
@@ -97,7 +98,7 @@ export function TodayView({ data, storeId, onStoreChange }: { data: TodayData; s
               { header: "Status", cell: (r) => r.status },
               { header: "Store", cell: (r) => r.storeName },
               { header: "Found", cell: (r) => r.foundOn },
-              { header: "Deadline", cell: (r) => (r.deadline ? <><span className="font-bold">{r.deadline}</span><br /><span className="block max-w-xs text-sm text-muted">{r.deadlineSource}</span></> : "—") },
+              { header: "Deadline", cell: (r) => (r.deadline ? <><span className="font-bold">{r.deadline}</span><br /><span className="block max-w-xs text-sm text-muted">{readableSource(r.deadlineSource ?? "")}</span></> : "—") },
             ]}
           />
         )}

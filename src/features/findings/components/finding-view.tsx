@@ -5,6 +5,7 @@ import { Alert } from "../../../components/ui/alert";
 import { Cautions } from "../../../components/ui/cautions";
 import { formErrorMessage } from "../../../lib/form-errors";
 import { useChangeFinding } from "../api/change-finding";
+import { readableSource } from "../../../../server/domain/compliance/citations";
 
 const KIND_LABELS: Record<FindingDetail["events"][number]["kind"], string> = {
   found: "Found", confirmed: "Confirmed", repaired: "Repaired", "initial-test": "Initial verification test", "follow-up-test": "Follow-up verification test", closed: "Closed", dismissed: "Dismissed",
@@ -34,7 +35,7 @@ export function FindingView({ finding, canAddPhoto }: { finding: FindingDetail; 
           <h2 id="deadlines" className="text-lg font-bold">Deadlines</h2>
           {finding.deadlines.map((d) => (
             <Alert key={d.what} tone={d.state === "overdue" || d.state === "due-today" ? "error" : "note"} title={`${d.what}: ${d.dueOn}`}>
-              <p className="text-sm">Rule: {d.source}</p>
+              <p className="text-sm">Rule: {readableSource(d.source)}</p>
             </Alert>
           ))}
         </section>
