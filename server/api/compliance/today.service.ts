@@ -46,7 +46,7 @@ export async function today(ctx: AppContext, viewer: Viewer, filter: { storeId?:
         kind: "detector-check", what: st.checkDueOn ? `Calibration / bump check: ${d.name}` : `Calibration / bump check: ${d.name} (never recorded)`,
         dueOn: st.checkDueOn, ...ds,
         source: `company setting: every ${c.days} days (common practice, no published source)`,
-        storeId: null, storeName: null, systemId: null, systemName: null, findingId: null, detectorId: d.id, link: "/detectors",
+        storeId: null, storeName: null, systemId: null, systemName: null, findingId: null, detectorId: d.id, link: `/detectors#detector-${d.id}`,
       });
     }
   }
@@ -61,7 +61,7 @@ export async function today(ctx: AppContext, viewer: Viewer, filter: { storeId?:
       return {
         systemId: s.system.id, systemName: s.system.name, storeId: s.store.id, storeName: s.store.name, refrigerantId: s.system.refrigerantId,
         percent: p.percent, thresholdPercent: p.thresholdPercent!, on: p.date, partTitle: part?.title ?? "",
-        source: part ? part.thresholds[s.system.applianceType].source : "", link: `/systems/${s.system.id}`,
+        source: part ? part.thresholds[s.system.applianceType].source : "", link: `/systems/${s.system.id}#leak-rates`,
       };
     });
 

@@ -12,7 +12,7 @@ const listQuery = z.object({ includeArchived: z.enum(["true", "false"]).default(
 export function detectorsRouter(ctx: AppContext): Router {
   const router = Router();
 
-  router.get("/detectors", requireMember("sweeps.record"), validate(listQuery, "query"), async (req, res) => {
+  router.get("/detectors", requireMember("detectors.read"), validate(listQuery, "query"), async (req, res) => {
     res.json({ detectors: await listDetectors(ctx, member(req).companyId, res.locals.query.includeArchived === "true") });
   });
   router.get("/detectors/:id", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {

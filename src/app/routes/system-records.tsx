@@ -11,6 +11,7 @@ import { useCompanySettings } from "../../features/settings/api/get-company-sett
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
 import { Link } from "react-router";
+import { useScrollToHash } from "../../lib/use-scroll-to-hash";
 
 // Where the compliance records of a system meet its findings.
 export function Component() {
@@ -23,6 +24,7 @@ export function Component() {
   useDocumentTitle(records.data ? records.data.system.name : "System records");
   const unit = user.massUnit ?? settings.data?.massUnit ?? "kg";
   const canRecord = can(membership.role, "findings.record");
+  useScrollToHash(!!records.data && !findings.isPending);
   if (records.isPending) return <Spinner label="Loading the system's records…" />;
   if (records.isError) return <QueryError error={records.error} what="the system's records" onRetry={() => void records.refetch()} />;
   const r = records.data;

@@ -77,7 +77,7 @@ export function SystemRecords({ r, unit, canRecord, canFile = false, findings }:
         </section>
       ) : null}
 
-      <section aria-labelledby="rates" className="space-y-2">
+      <section id="leak-rates" aria-labelledby="rates" className="space-y-2">
         <h2 id="rates" className="text-xl font-bold">Leak rate at every addition</h2>
         {r.leakRates.length === 0 ? <p className="text-muted">No refrigerant has been added: no leak rate yet.</p> : (
           <DataTable

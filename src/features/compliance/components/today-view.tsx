@@ -95,7 +95,7 @@ export function TodayView({ data, storeId, onStoreChange }: { data: TodayData; s
             rowKey={(r) => r.id}
             columns={[
               { header: "Finding", cell: (r) => <Link className="text-accent underline" to={r.link}>{r.component ? COMPONENT_LABELS[r.component as (typeof FINDING_COMPONENTS)[number]] : "Leak"} on {r.systemName ?? "no system"}</Link> },
-              { header: "Status", cell: (r) => r.status },
+              { header: "Status", cell: (r) => (r.status === "verified" ? "verified, ready to close" : r.status) },
               { header: "Store", cell: (r) => r.storeName },
               { header: "Found", cell: (r) => r.foundOn },
               { header: "Deadline", cell: (r) => (r.deadline ? <><span className="font-bold">{r.deadline}</span><br /><span className="block max-w-xs text-sm text-muted">{readableSource(r.deadlineSource ?? "")}</span></> : "—") },
@@ -114,9 +114,9 @@ export function TodayView({ data, storeId, onStoreChange }: { data: TodayData; s
             { header: "System", cell: (r) => <Link className="text-accent underline" to={r.link}>{r.name}</Link> },
             { header: "Store", cell: (r) => r.storeName },
             { header: "Refrigerant", cell: (r) => r.refrigerantId },
-            { header: "Latest leak rate", cell: (r) => (r.latestPercent === null ? "no additions" : <span className={r.breachOpen ? "font-bold text-danger" : ""}>{formatPercent(r.latestPercent)} on {r.latestOn}</span>) },
+            { header: "Latest leak rate", cell: (r) => (r.latestPercent === null ? "no additions" : <Link className={`underline ${r.breachOpen ? "font-bold text-danger" : "text-accent"}`} to={`${r.link}#leak-rates`}>{formatPercent(r.latestPercent)} on {r.latestOn}</Link>) },
             { header: "Threshold", cell: (r) => (r.thresholdPercent === null ? "none applies" : `${r.thresholdPercent} %`) },
-            { header: "Next inspection", cell: (r) => r.nextInspection ?? "—" },
+            { header: "Next inspection", cell: (r) => (r.nextInspection ? <Link className="text-accent underline" to={`${r.link}#checks`}>{r.nextInspection}</Link> : "—") },
           ]}
         />
       </section>
