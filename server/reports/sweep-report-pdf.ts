@@ -167,7 +167,7 @@ export function buildSweepReportPdf(m: SweepReportModel): Promise<Buffer> {
   heading(doc, "Safety");
   for (const c of m.cautions) {
     doc.font("regular").fontSize(9.5).fillColor(INK).text(`• ${c.text}`, { indent: 4 });
-    doc.fontSize(8).fillColor(MUTED).text(readableSource(c.source), { indent: 12 });
+    if (readableSource(c.source)) doc.fontSize(8).fillColor(MUTED).text(readableSource(c.source), { indent: 12 });
   }
 
   const range = doc.bufferedPageRange();

@@ -69,7 +69,7 @@ describe("charge added and the leak rate through the API (US federal, annualizin
     expect(r.body.latest.repairDue).toBe("2026-09-29");
     expect(r.body.overThreshold).toBe(true);
     const repair = r.body.due.find((d: { kind: string }) => d.kind === "repair");
-    expect(repair).toMatchObject({ dueOn: "2026-09-29", systemId, link: `/systems/${systemId}` });
+    expect(repair).toMatchObject({ dueOn: "2026-09-29", systemId, link: `/systems/${systemId}#leak-rates` });
     expect(repair.source).toMatch(/30 days/);
     // Under 500 lb commercial, no automatic leak detection: yearly inspections from the first breach
     // of the run (3 Mar), the August breach resetting the clean count only [M].

@@ -104,6 +104,9 @@ describe("the daily digest", () => {
       expect(mail[0].subject).toMatch(/due in the next 7 days/);
       expect(mail[0].text).toContain("Repair: leak rate");
       expect(mail[0].text).toContain(`/systems/${systemId}`);
+      // Rules read as citations in the e-mail, never as internal tags.
+      expect(mail[0].text).toContain("repair within 30 days of learning of the breach");
+      expect(mail[0].text).not.toMatch(/\[(S:|M\]|D\])/);
       expect(mail[0].text).toMatch(/Calibration \/ bump check: Heated-diode sniffer/);
       const runs = await t.ctx.db.select().from(digestRuns).where(eq(digestRuns.companyId, co.company.id));
       expect(runs).toHaveLength(1);

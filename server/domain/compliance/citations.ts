@@ -69,7 +69,8 @@ const SECTION_ONLY = /^(8[24])\.(\d{3})/;
 const INTERNAL = /\s*standards\.md(\s*§\d+(,\s*§\d+)*)?|\s+§\d+\b(?=\s*$)/g;
 
 export function readableSource(source: string): string {
-  if (/standards\.md §8 disclaimer/.test(source)) return "the codes named in the caution";
+  // The closing disclaimer names its codes in its own text: nothing more to cite.
+  if (/standards\.md §8 disclaimer/.test(source)) return "";
   source = source.replace(INTERNAL, "");
   if (!source.includes("[")) return source.trim();
   const said = new Set<string>();

@@ -57,7 +57,6 @@ function SourceBox({ label, path, draft, set, errors, disabled }: { label: strin
   return (
     <TextField
       label={label} name={pathKey(path)} value={String(getAt(draft, path) ?? "")} error={errors[pathKey(path)]} disabled={disabled}
-      hint="A citation, or who set the value and why (e.g. “company policy, 2026 audit”)."
       onChange={(e) => set(path, e.target.value)}
     />
   );
@@ -113,6 +112,7 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
     <form noValidate onSubmit={submit} aria-label="Custom rule profile" className="space-y-6">
       {formError ? <Alert tone="error">{formError}</Alert> : invalid && Object.keys(clientErrors).length ? <Alert tone="error">Please correct the marked fields.</Alert> : null}
       {saved ? <Alert tone="success">Custom profile saved. Every deadline and figure now follows it where the company uses it.</Alert> : null}
+      <p className="max-w-prose text-sm text-muted">Every value needs its source: a citation, or who set the value and why (e.g. “company policy, 2026 audit”).</p>
       <TextField label="Profile name" name="name" value={draft.name} onChange={(e) => set(["name"], e.target.value)} error={errors.name} disabled={disabled} />
 
       {draft.leakRateParts.map((part, i) => {

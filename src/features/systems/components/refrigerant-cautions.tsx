@@ -19,7 +19,7 @@ export function RefrigerantCautions({ refrigerantName, cautions }: { refrigerant
               <span className="font-bold">{c.level === "warning" ? "Warning: " : "Note: "}</span>
               {c.text}
             </p>
-            <p className="text-sm text-muted">Source: {readableSource(c.source)}</p>
+            {readableSource(c.source) ? <p className="text-sm text-muted">Source: {readableSource(c.source)}</p> : null}
           </li>
         ))}
       </ul>
