@@ -3,13 +3,14 @@ import { Dialog } from "../../../components/ui/dialog";
 import type { LocalReading } from "../model/local-types";
 
 function stateWord(r: LocalReading): string {
+  if (r.draft) return "On the keypad — kept on this device";
   if (r.state === "rejected") return "Refused — fix it";
   if (r.state === "pending" || r.editPending) return "Waiting to upload";
   return "Uploaded";
 }
 
 /** Every reading of the sweep, newest first, to edit or delete; refused ones show why. */
-export function ReadingsDrawer(props: { open: boolean; readings: readonly LocalReading[]; timeZone: string; onEdit(r: LocalReading): void; onDelete(r: LocalReading): void; onClose(): void }) {
+export function ReadingsDrawer(props: { open: boolean; readings: readonly LocalReading[]; openId: string | null; timeZone: string; onEdit(r: LocalReading): void; onMove(r: LocalReading): void; onDelete(r: LocalReading): void; onClose(): void }) {
   if (!props.open) return null; // thousands of rows: build them only when the list is shown
   const fmt = new Intl.DateTimeFormat("en-GB", { timeStyle: "medium", timeZone: props.timeZone });
   const list = [...props.readings].map((r, i) => ({ r, n: i + 1 })).reverse();
@@ -37,7 +38,8 @@ export function ReadingsDrawer(props: { open: boolean; readings: readonly LocalR
               </ul>
             ) : null}
             <div className="mt-2 flex gap-2">
-              <button type="button" className="min-h-12 rounded-md px-4 font-bold edge" onClick={() => props.onEdit(r)}>Edit</button>
+              <button type="button" className="min-h-12 rounded-md px-4 font-bold edge" onClick={() => props.onEdit(r)}>{r.id === props.openId ? "Back to keypad" : "Edit"}</button>
+              <button type="button" className="min-h-12 rounded-md px-4 font-bold edge" onClick={() => props.onMove(r)}>Move</button>
               <button type="button" className="min-h-12 rounded-md px-4 font-bold text-danger edge" onClick={() => props.onDelete(r)}>Delete</button>
             </div>
           </li>

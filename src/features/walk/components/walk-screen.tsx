@@ -1,5 +1,5 @@
 import { useEffect, useMemo, useRef, useState, type ReactNode } from "react";
-import { Link } from "react-router";
+import { useNavigate } from "react-router";
 import type { CautionPlace } from "../../../../server/domain/safety/cautions";
 import { FIXTURE_KIND_NAMES } from "../../../../server/contracts/fixture-kinds";
 import { Alert } from "../../../components/ui/alert";
@@ -53,6 +53,9 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
   const [dialog, setDialog] = useState<"list" | "summary" | "import" | null>(null);
   const [dismissedAlarm, setDismissedAlarm] = useState(-1);
   const [showWarnings, setShowWarnings] = useState(false);
+  /** A reading waiting for a tap on the plan that moves it there. */
+  const [moving, setMoving] = useState<string | null>(null);
+  const navigate = useNavigate();
 
   // A tap whose keypad was open when the tab closed or crashed comes back on the keypad.
   const restored = useRef(false);
@@ -63,9 +66,34 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
     if (leftover) setDraftId(leftover.id);
   }, [walk.loading, walk.readings]);
 
+  // Leaving the screen (Leave, the browser's back, another route) commits the open reading with
+  // what its keypad shows. A reload or a crash does not run this: the reading then stays open
+  // and comes back on the keypad.
+  useEffect(
+    () => () => {
+      const id = draftRef.current;
+      if (!id) return;
+      const v = typed.current;
+      void walk.save(id, v ? { ppm: v.ppm, atLeast: v.atLeast, samplePoint: v.samplePoint, note: v.note } : {});
+    },
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- on unmount only; save is stable
+    [],
+  );
+
   const fixtures = planPack.data?.fixtures ?? [];
-  const committed = useMemo(() => walk.readings.filter((r) => !r.draft || r.id !== draftId), [walk.readings, draftId]);
-  const unsampled = useMemo(() => unsampledFixtures(fixtures, committed), [fixtures, committed]);
+  // Every reading counts from its tap, the open one included: the count, coverage, the list and the
+  // submit summary see it. The lag hint and quick picks wait for its value to be committed.
+  const all = walk.readings;
+  // Kept identical while only the open reading changes (typing), so the lag hint is not redone per key.
+  const committedRef = useRef<LocalReading[]>([]);
+  const committed = useMemo(() => {
+    const next = walk.readings.filter((r) => !r.draft);
+    const prev = committedRef.current;
+    if (prev.length === next.length && next.every((r, i) => r === prev[i])) return prev;
+    committedRef.current = next;
+    return next;
+  }, [walk.readings]);
+  const unsampled = useMemo(() => unsampledFixtures(fixtures, all), [fixtures, all]);
   // Keyed by content, so the fixtures layer (and the plan image under it) redraws only when
   // coverage really changes, not on every tap.
   const unsampledKey = unsampled.map((f) => f.id).join(",");
@@ -87,6 +115,13 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
 
   const onTap = serial(async (x: number, y: number, at: number) => {
     if (readOnly) return;
+    if (moving) {
+      const id = moving;
+      setMoving(null);
+      const moved = await walk.move(id, x, y);
+      if (moved && editing?.id === id) setEditing(moved);
+      return;
+    }
     if (leakMode) {
       setLeakMode(false);
       setLeakSpot({ x, y, fixtureId: fixtureAt(fixtures, x, y)?.id ?? null });
@@ -131,6 +166,39 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
     if (last) await walk.remove(last.id);
   });
 
+  /** Commits the open reading with what its keypad shows. */
+  const commitOpen = async () => {
+    const id = draftRef.current;
+    if (!id) return;
+    const v = typed.current;
+    typed.current = null;
+    setDraftId(null);
+    await walk.save(id, v ? { ppm: v.ppm, atLeast: v.atLeast, samplePoint: v.samplePoint, note: v.note } : {});
+  };
+
+  const submit = serial(async () => {
+    setDialog(null);
+    await commitOpen();
+    await walk.submit();
+    setNotice("Sweep submitted. It goes to the server as soon as every reading is uploaded.");
+  });
+
+  const leave = serial(async () => {
+    await commitOpen();
+    navigate(leaveTo);
+  });
+
+  // Typed values of the open reading go to the device as they are typed (one small write each),
+  // so a reload brings them back; they are not uploaded until the reading is committed.
+  const keepTyped = (id: string, v: KeypadValue) => {
+    typed.current = v;
+    const r = readingsRef.current.find((x) => x.id === id);
+    if (!r || !r.draft || (r.ppm === v.ppm && r.atLeast === v.atLeast && r.samplePoint === v.samplePoint && r.note === v.note)) return;
+    serial(async () => {
+      await walk.keepDraft(id, v);
+    })();
+  };
+
   const keypadFor = draft ?? editing;
   const showHint = hint && hint.index !== dismissedAlarm ? hint : null;
 
@@ -138,10 +206,10 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
     <div className="fixed inset-0 z-30 flex flex-col bg-paper" data-testid="walk-screen">
       <header className="flex flex-col gap-2 bg-surface p-2 edge border-x-0 border-t-0">
         <div className="flex items-center justify-between gap-2">
-          <Link to={leaveTo} className="inline-flex min-h-12 shrink-0 items-center whitespace-nowrap rounded-md px-3 font-bold edge no-underline">← Leave</Link>
+          <button type="button" onClick={() => leave()} className="inline-flex min-h-12 shrink-0 items-center whitespace-nowrap rounded-md px-3 font-bold edge">← Leave</button>
           <p className="min-w-0 flex-1 text-center leading-tight">
             <span className="block truncate font-bold">{storePack.data?.store.name ?? "Sweep"}</span>
-            <span className="block truncate text-sm text-muted" data-testid="walk-count">{sweep.detectorName} · {committed.length} readings{sweep.status !== "in-progress" ? ` · ${sweep.status}` : sweep.submitPending ? " · submitting" : ""}</span>
+            <span className="block truncate text-sm text-muted" data-testid="walk-count">{all.length} readings{sweep.status !== "in-progress" ? ` · ${sweep.status}` : sweep.submitPending ? " · submitting" : ""} · {sweep.detectorName}</span>
           </p>
           {contrastToggle}
         </div>
@@ -166,6 +234,12 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
           </Alert>
         ) : null}
         {leakMode ? <Alert tone="info">Tap the plan where the leak is.</Alert> : null}
+        {moving ? (
+          <div role="status" className="flex items-center justify-between gap-2 rounded-md border-l-4 border-accent bg-accent-soft px-3 edge">
+            <span className="font-bold">Tap the plan where reading #{all.findIndex((r) => r.id === moving) + 1} was taken.</span>
+            <button type="button" className="min-h-12 shrink-0 font-bold underline" onClick={() => setMoving(null)}>Cancel move</button>
+          </div>
+        ) : null}
         {notice ? <Alert tone="success"><span>{notice} </span><button type="button" className="min-h-12 underline" onClick={() => setNotice(null)}>Dismiss</button></Alert> : null}
         {showHint ? (
           <div role="alert" className="flex items-center justify-between gap-2 rounded-md border-l-4 border-danger bg-danger-soft px-3 py-1 edge" data-testid="lag-hint">
@@ -200,21 +274,22 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
         <div className="landscape:md:w-96 landscape:md:overflow-y-auto">
         <PpmKeypad
           key={keypadFor.id}
-          title={editing ? `Edit reading #${walk.readings.indexOf(keypadFor) + 1}` : `Reading #${walk.readings.indexOf(keypadFor) + 1}`}
+          title={editing ? `Edit #${walk.readings.indexOf(keypadFor) + 1}` : `#${walk.readings.indexOf(keypadFor) + 1}`}
           initial={{ ppm: keypadFor.ppm, atLeast: keypadFor.atLeast, samplePoint: keypadFor.samplePoint, note: keypadFor.note }}
           recent={recent}
           levels={storePack.data?.detectors.find((d) => d.id === sweep.detectorId)?.levelScale ?? null}
-          onTyped={(v) => (typed.current = v)}
+          onTyped={(v) => (editing ? undefined : keepTyped(keypadFor.id, v))}
+          onMove={() => setMoving(keypadFor.id)}
           onSave={(v) => saveKeypad(v)}
-          cancelLabel={editing ? "Cancel edit" : "Discard this tap"}
+          cancelLabel={editing ? "Cancel" : "Discard"}
           onCancel={() => (editing ? setEditing(null) : undo())}
         />
         </div>
       ) : null}
       </div>
-      {keypadFor ? null : (
+      {(
         <nav aria-label="Sweep tools" className="flex gap-2 bg-surface p-2 edge border-x-0 border-b-0">
-          <button type="button" className={`${TOOL} bg-surface`} onClick={() => undo()} disabled={readOnly || committed.length === 0}>Undo</button>
+          <button type="button" className={`${TOOL} bg-surface`} onClick={() => undo()} disabled={readOnly || all.length === 0}>Undo</button>
           <button type="button" className={`${TOOL} bg-surface`} onClick={() => setDialog("list")}>Readings</button>
           <button type="button" className={`${TOOL} bg-surface`} onClick={() => setLeakMode(!leakMode)} aria-pressed={leakMode} disabled={readOnly}>Leak here</button>
           <button type="button" className={`${TOOL} bg-surface`} onClick={() => setDialog("import")} disabled={readOnly}>Import log</button>
@@ -224,27 +299,28 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
       <CautionDialog place={caution?.place ?? null} name={caution?.name ?? ""} onClose={() => setCaution(null)} />
       <ReadingsDrawer
         open={dialog === "list"}
-        readings={committed}
+        readings={all}
+        openId={draftId}
         timeZone={storePack.data?.store.timeZone ?? Intl.DateTimeFormat().resolvedOptions().timeZone}
         onEdit={(r) => {
           setDialog(null);
-          setEditing(r);
+          if (r.id !== draftRef.current) setEditing(r);
         }}
-        onDelete={(r) => void walk.remove(r.id)}
+        onMove={(r) => {
+          setDialog(null);
+          setMoving(r.id);
+        }}
+        onDelete={(r) => (r.id === draftRef.current ? undo() : void walk.remove(r.id))}
         onClose={() => setDialog(null)}
       />
       {dialog === "summary" ? <SubmitSummary
         open
-        readings={committed}
+        readings={all.map((r) => (r.id === draftId && typed.current ? { ...r, ...typed.current } : r))}
         alarmPpm={sweep.alarmPpm}
         unsampled={unsampled}
         waiting={sync.waiting}
         onClose={() => setDialog(null)}
-        onSubmit={() => {
-          setDialog(null);
-          void walk.submit();
-          setNotice("Sweep submitted. It goes to the server as soon as every reading is uploaded.");
-        }}
+        onSubmit={() => submit()}
       /> : null}
       {dialog === "import" ? <LogImport
         open

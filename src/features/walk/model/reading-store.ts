@@ -66,6 +66,30 @@ export async function updateReading(db: WalkDb, id: string, values: Partial<Read
   return next;
 }
 
+/**
+ * What the keypad shows on the open reading, kept on the device as it is typed so a reload brings it
+ * back. Only while the reading is still open: once committed (next tap, Save, Submit, leaving the
+ * screen), a late keystroke must never change it behind the technician's back.
+ */
+export async function keepDraftValues(db: WalkDb, id: string, values: Partial<ReadingValues>): Promise<LocalReading | undefined> {
+  const tx = db.transaction("readings", "readwrite", RELAXED);
+  const r = await tx.store.get(id);
+  if (!r || !r.draft) return undefined;
+  const next: LocalReading = { ...r, ...values };
+  await tx.store.put(next);
+  await tx.done;
+  return next;
+}
+
+/** Commits every open reading of a sweep as it stands on the device (before a submit). */
+export async function commitDrafts(db: WalkDb, sweepId: string): Promise<number> {
+  const tx = db.transaction("readings", "readwrite", RELAXED);
+  const open = (await tx.store.index("byState").getAll("draft")).filter((r) => r.sweepId === sweepId);
+  await Promise.all(open.map((r) => tx.store.put({ ...r, draft: false, state: "pending" })));
+  await tx.done;
+  return open.length;
+}
+
 /** Undo or delete: a reading the server never saw just goes; one it has waits for its delete. */
 export async function removeReading(db: WalkDb, id: string): Promise<void> {
   const tx = db.transaction("readings", "readwrite");

@@ -58,7 +58,8 @@ export async function syncOnce(db: WalkDb, transport: SyncTransport, batchSize =
     }
     for (const s of await db.getAll("sweeps")) {
       if (!s.submitPending || !s.onServer) continue;
-      const left = (await db.getAllFromIndex("readings", "byState", "pending")).some((r) => r.sweepId === s.id);
+      // An open reading still on a keypad holds the submit back too: it belongs to the sweep.
+      const left = [...(await db.getAllFromIndex("readings", "byState", "pending")), ...(await db.getAllFromIndex("readings", "byState", "draft"))].some((r) => r.sweepId === s.id);
       if (left) continue;
       await transport.submitSweep(s.id);
       await db.put("sweeps", { ...s, submitPending: false, status: "submitted" });
