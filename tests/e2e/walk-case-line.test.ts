@@ -79,6 +79,8 @@ it("on a phone with touch, a sweep of the demo store's dairy line takes one tap 
   let positionTaps = 0;
   let otherTaps = 0;
   async function tapSpot(i: number) {
+    // The banner's text can wrap (e.g. going offline) and refit the plan: aim once it is still.
+    await waitForSteadyPlan(page);
     const p = await planToScreen(page, spots[i].x, spots[i].y);
     await page.touchscreen.tap(p.x, p.y);
     positionTaps++;

@@ -343,7 +343,7 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
           onClose={() => setLeakSpot(null)}
           onSaved={() => {
             setLeakSpot(null);
-            setNotice("Finding saved.");
+            setNotice("Finding saved. It is kept on this device and uploads with the readings.");
           }}
         />
       ) : null}

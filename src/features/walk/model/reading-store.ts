@@ -1,3 +1,4 @@
+import { findingCounts } from "./finding-queue";
 import type { WalkDb } from "./walk-db";
 import type { LocalReading, LocalSweep, ReadingValues } from "./local-types";
 
@@ -107,10 +108,11 @@ export async function sweepReadings(db: WalkDb, sweepId: string): Promise<LocalR
   return all.filter((r) => !r.deletePending);
 }
 
-/** What the banner counts: changes not yet on the server (rejected ones are counted apart). */
+/** What the banner counts: changes (readings, sweeps, findings) not yet on the server; rejected ones apart. */
 export async function queueCounts(db: WalkDb): Promise<{ waiting: number; rejected: number }> {
   let waiting = await db.countFromIndex("readings", "byState", "pending");
   const rejected = await db.countFromIndex("readings", "byState", "rejected");
   for (const s of await db.getAll("sweeps")) if ((!s.onServer && !s.rejected) || s.submitPending) waiting++;
-  return { waiting, rejected };
+  const leaks = await findingCounts(db);
+  return { waiting: waiting + leaks.waiting, rejected: rejected + leaks.rejected };
 }
