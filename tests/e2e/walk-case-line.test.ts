@@ -161,3 +161,43 @@ it("a half-typed value stays on the device through a reload and is uploaded once
   expect(await server.ctx.db.select().from(readingAudit).where(eq(readingAudit.sweepId, sweepId))).toEqual([]);
   await context.close();
 });
+
+it("moves an uploaded reading from the readings list and the open one from its keypad; only the uploaded one's move is an audited edit", async () => {
+  const context = await newContext(browser, { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 });
+  const page = await context.newPage();
+  page.setDefaultTimeout(15_000);
+  const sweepId = await openWalk(page);
+  const [a, b, c] = dairyLineSpots();
+  const tapAt = async (s: { x: number; y: number }) => {
+    await waitForSteadyPlan(page);
+    const p = await planToScreen(page, s.x, s.y);
+    await page.touchscreen.tap(p.x, p.y);
+  };
+  await tapAt(a);
+  await tapAt(b);
+  await page.getByRole("heading", { name: "#2", exact: true }).waitFor();
+  await until("the first reading on the server", () => storedReadings(sweepId), (r) => r.length === 1);
+
+  // The first one was really taken 1 m further along the case: move it from the list.
+  await page.getByRole("button", { name: "Readings" }).tap();
+  const rows = page.getByTestId("reading-row");
+  await rows.filter({ hasText: "#1 ·" }).getByRole("button", { name: "Move" }).tap();
+  await page.getByText("Tap the plan where reading #1 was taken.").waitFor();
+  await tapAt({ x: a.x + 1, y: a.y });
+  await until("the moved reading on the server", () => storedReadings(sweepId), (r) => r.length === 1 && Math.abs(r[0].x - (a.x + 1)) < 0.2);
+  // The open reading #2 moves from its keypad and stays open.
+  await page.getByRole("button", { name: "Move", exact: true }).tap();
+  await tapAt(c);
+  await page.getByRole("heading", { name: "#2", exact: true }).waitFor();
+  await expect(page.getByTestId("walk-count").textContent()).resolves.toMatch(/^2 readings/);
+  await page.getByRole("button", { name: "Submit" }).tap();
+  await page.getByRole("button", { name: "Submit sweep" }).tap();
+  const stored = await until("both readings on the server", () => storedReadings(sweepId), (r) => r.length === 2);
+  expect(stored[1].x).toBeCloseTo(c.x, 0);
+  const audit = await server.ctx.db.select().from(readingAudit).where(eq(readingAudit.sweepId, sweepId));
+  expect(audit).toHaveLength(1);
+  expect(audit[0]).toMatchObject({ readingId: stored[0].id, action: "edit" });
+  expect((audit[0].before as { x: number }).x).toBeCloseTo(a.x, 1);
+  expect((audit[0].after as { x: number }).x).toBeCloseTo(a.x + 1, 1);
+  await context.close();
+});
