@@ -14,7 +14,7 @@ import { Component as NotFound } from "./not-found";
 export function Component() {
   useDocumentTitle("Detectors");
   const { membership } = useSignedIn();
-  const canRead = can(membership.role, "sweeps.record") || can(membership.role, "detectors.manage");
+  const canRead = can(membership.role, "detectors.read");
   const canManage = can(membership.role, "detectors.manage");
   const [showArchived, setShowArchived] = useState(false);
   const [editing, setEditing] = useState<Detector | "new" | null>(null);
