@@ -71,7 +71,7 @@ describe("detectors", () => {
     });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields).sort()).toEqual(["levelScale.1.minPpm", "levelScale.2.minPpm"]);
-    expect(bad.body.error.fields["levelScale.1.minPpm"]).toMatch(/overlaps level 1/);
+    expect(bad.body.error.fields["levelScale.1.minPpm"]).toMatch(/must not overlap level 1/);
     const good = await lead.post("/api/detectors", {
       name: "LED sniffer",
       principle: "heated-diode",

@@ -15,7 +15,7 @@ describe("a detector's level scale", () => {
   });
 
   it("names an overlap by the band that starts too low", () => {
-    expect(levelScaleProblems([sound[0], { ...sound[1], minPpm: 10 }, sound[2]])).toEqual({ "1.minPpm": expect.stringMatching(/overlaps level 1 \(up to 15 ppm\)/) });
+    expect(levelScaleProblems([sound[0], { ...sound[1], minPpm: 10 }, sound[2]])).toEqual({ "1.minPpm": expect.stringMatching(/must not overlap level 1 \(up to 15 ppm\)/) });
   });
 
   it("refuses levels listed from high to low", () => {
@@ -27,6 +27,6 @@ describe("a detector's level scale", () => {
   });
 
   it("refuses a repeated level name, whatever its case", () => {
-    expect(levelScaleProblems([sound[0], { ...sound[1], level: "low" }])).toEqual({ "1.level": "repeats level 1's name" });
+    expect(levelScaleProblems([sound[0], { ...sound[1], level: "low" }])).toEqual({ "1.level": "must differ from level 1's name" });
   });
 });

@@ -17,7 +17,7 @@ export function levelScaleProblems(bands: readonly LevelBand[]): Record<string, 
   bands.forEach((b, i) => {
     const name = b.level.trim().toLowerCase();
     const first = seen.get(name);
-    if (name && first !== undefined) out[`${i}.level`] ??= `repeats level ${first + 1}'s name`;
+    if (name && first !== undefined) out[`${i}.level`] ??= `must differ from level ${first + 1}'s name`;
     else seen.set(name, i);
     if (i === 0) return;
     const below = bands[i - 1];
@@ -26,7 +26,7 @@ export function levelScaleProblems(bands: readonly LevelBand[]): Record<string, 
       return;
     }
     if (!(b.minPpm > below.minPpm)) out[`${i}.minPpm`] ??= `must be above level ${i}'s lower bound (${below.minPpm} ppm): list the levels from low to high`;
-    else if (b.minPpm < below.maxPpm) out[`${i}.minPpm`] ??= `overlaps level ${i} (up to ${below.maxPpm} ppm): start at ${below.maxPpm} ppm or above`;
+    else if (b.minPpm < below.maxPpm) out[`${i}.minPpm`] ??= `must not overlap level ${i} (up to ${below.maxPpm} ppm): start at ${below.maxPpm} ppm or above`;
   });
   return out;
 }
