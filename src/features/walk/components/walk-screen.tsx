@@ -12,6 +12,7 @@ import { fixtureAt, unsampledFixtures } from "../model/coverage";
 import { latestLagHint } from "../model/lag-hint";
 import type { LocalReading } from "../model/local-types";
 import { enteredRoom } from "../model/room-entry";
+import { walkModelFor } from "../model/walk-model";
 import { CautionDialog } from "./caution-dialog";
 import { LeakForm, type LeakSpot } from "./leak-form";
 import { LogImport } from "./log-import";
@@ -76,7 +77,7 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
       const v = typed.current;
       void walk.save(id, v ? { ppm: v.ppm, atLeast: v.atLeast, samplePoint: v.samplePoint, note: v.note } : {});
     },
-    // eslint-disable-next-line react-hooks/exhaustive-deps -- on unmount only; save is stable
+    // on unmount only (save is stable)
     [],
   );
 
@@ -99,7 +100,17 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
   const unsampledKey = unsampled.map((f) => f.id).join(",");
   const unsampledIds = useMemo(() => new Set(unsampledKey ? unsampledKey.split(",") : []), [unsampledKey]);
   const sweep = walk.sweep;
-  const hint = useMemo(() => (sweep ? latestLagHint(committed, sweep.transportDelayS, sweep.timeConstantS, sweep.alarmPpm) : null), [committed, sweep]);
+  // The locator's route between taps (around solid bodies) and pace, built once per plan.
+  const planDims = planPack.data?.plan;
+  const walkModel = useMemo(() => {
+    try {
+      return walkModelFor({ widthM: planDims?.widthM ?? null, heightM: planDims?.heightM ?? null }, fixtures);
+    } catch {
+      return {}; // a plan the locator cannot read yet: straight lines between taps
+    }
+    // fixtures come with the plan pack
+  }, [planPack.data]);
+  const hint = useMemo(() => (sweep ? latestLagHint(committed, sweep.transportDelayS, sweep.timeConstantS, sweep.alarmPpm, walkModel) : null), [committed, sweep, walkModel]);
   const recent = useMemo(() => {
     const out: number[] = [];
     for (let i = committed.length - 1; i >= 0 && out.length < 4; i--) if (committed[i].ppm > 0 && !out.includes(committed[i].ppm)) out.push(committed[i].ppm);
