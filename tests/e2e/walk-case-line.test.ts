@@ -140,6 +140,7 @@ it("a half-typed value stays on the device through a reload and is uploaded once
   const sweepId = await openWalk(page);
   const [a, b] = dairyLineSpots();
   for (const s of [a, b]) {
+    await waitForSteadyPlan(page); // the keypad opening after the first tap refits the plan
     const p = await planToScreen(page, s.x, s.y);
     await page.touchscreen.tap(p.x, p.y);
   }

@@ -1,4 +1,4 @@
-import { useEffect, useMemo, useRef, useState, type ReactNode } from "react";
+import { useMemo, useRef, useState, type ReactNode } from "react";
 import { useNavigate } from "react-router";
 import type { CautionPlace } from "../../../../server/domain/safety/cautions";
 import { FIXTURE_KIND_NAMES } from "../../../../server/contracts/fixture-kinds";
@@ -7,6 +7,8 @@ import { Spinner } from "../../../components/ui/spinner";
 import { usePlanPack, useStorePack } from "../api/store-pack";
 import { useHighContrast } from "../hooks/use-high-contrast";
 import { useSyncStatus } from "../hooks/use-sync-status";
+import { useQueuedFindings } from "../hooks/use-queued-findings";
+import { useOpenReading } from "../hooks/use-open-reading";
 import { useWalk } from "../hooks/use-walk";
 import { fixtureAt, unsampledFixtures } from "../model/coverage";
 import { latestLagHint } from "../model/lag-hint";
@@ -14,15 +16,16 @@ import type { LocalReading } from "../model/local-types";
 import { enteredRoom } from "../model/room-entry";
 import { walkModelFor } from "../model/walk-model";
 import { CautionDialog } from "./caution-dialog";
+import { LagHintBanner } from "./lag-hint-banner";
 import { LeakForm, type LeakSpot } from "./leak-form";
 import { LogImport } from "./log-import";
 import { PlanStage } from "./plan-stage";
 import { PpmKeypad, type KeypadValue } from "./ppm-keypad";
 import { ReadingsDrawer } from "./readings-drawer";
 import { SubmitSummary } from "./submit-summary";
+import { SweepWarnings } from "./sweep-warnings";
 import { SyncBanner } from "./sync-banner";
-
-const TOOL = "flex min-h-12 min-w-12 flex-1 items-center justify-center rounded-md px-1 font-bold leading-tight edge disabled:opacity-50";
+import { WalkTools } from "./walk-tools";
 
 /** The sweep capture screen: the plan fills the screen; one tap drops a reading there. */
 export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { storeId: string; sweepId: string; contrastToggle: ReactNode; leaveTo: string }) {
@@ -30,56 +33,20 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
   const storePack = useStorePack(storeId);
   const planPack = usePlanPack(walk.sweep?.planId);
   const sync = useSyncStatus();
+  const queuedFindings = useQueuedFindings(sweepId);
+  const { draftId, draftRef, setDraftId, typed, readingsRef, serial, commitOpen, keepTyped, undo } = useOpenReading(walk);
   const highContrast = useHighContrast();
-  const [draftId, setDraftIdState] = useState<string | null>(null);
-  // Taps can come faster than IndexedDB answers: actions run one after another, reading the
-  // latest draft and readings from refs rather than from a render that may be behind.
-  const draftRef = useRef<string | null>(null);
-  const setDraftId = (id: string | null) => {
-    draftRef.current = id;
-    setDraftIdState(id);
-  };
-  const chain = useRef<Promise<unknown>>(Promise.resolve());
-  const serial = <A extends unknown[]>(fn: (...args: A) => Promise<void>) => (...args: A) => {
-    chain.current = chain.current.then(() => fn(...args)).catch((e) => console.error(e));
-  };
-  const readingsRef = useRef(walk.readings);
-  readingsRef.current = walk.readings;
   const [editing, setEditing] = useState<LocalReading | null>(null);
-  const typed = useRef<KeypadValue | null>(null);
   const [caution, setCaution] = useState<{ place: CautionPlace; name: string } | null>(null);
   const [leakMode, setLeakMode] = useState(false);
   const [leakSpot, setLeakSpot] = useState<LeakSpot | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
   const [dialog, setDialog] = useState<"list" | "summary" | "import" | null>(null);
   const [dismissedAlarm, setDismissedAlarm] = useState(-1);
-  const [showWarnings, setShowWarnings] = useState(false);
   /** A reading waiting for a tap on the plan that moves it there. */
   const [moving, setMoving] = useState<string | null>(null);
   const navigate = useNavigate();
 
-  // A tap whose keypad was open when the tab closed or crashed comes back on the keypad.
-  const restored = useRef(false);
-  useEffect(() => {
-    if (walk.loading || restored.current) return;
-    restored.current = true;
-    const leftover = walk.readings.findLast((r) => r.draft);
-    if (leftover) setDraftId(leftover.id);
-  }, [walk.loading, walk.readings]);
-
-  // Leaving the screen (Leave, the browser's back, another route) commits the open reading with
-  // what its keypad shows. A reload or a crash does not run this: the reading then stays open
-  // and comes back on the keypad.
-  useEffect(
-    () => () => {
-      const id = draftRef.current;
-      if (!id) return;
-      const v = typed.current;
-      void walk.save(id, v ? { ppm: v.ppm, atLeast: v.atLeast, samplePoint: v.samplePoint, note: v.note } : {});
-    },
-    // on unmount only (save is stable)
-    [],
-  );
 
   const fixtures = planPack.data?.fixtures ?? [];
   // Every reading counts from its tap, the open one included: the count, coverage, the list and the
@@ -165,27 +132,7 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
     await walk.save(id, v);
   });
 
-  const undo = serial(async () => {
-    const id = draftRef.current;
-    if (id) {
-      setDraftId(null);
-      await walk.remove(id);
-      return;
-    }
-    const done = readingsRef.current.filter((r) => !r.draft);
-    const last = done[done.length - 1];
-    if (last) await walk.remove(last.id);
-  });
 
-  /** Commits the open reading with what its keypad shows. */
-  const commitOpen = async () => {
-    const id = draftRef.current;
-    if (!id) return;
-    const v = typed.current;
-    typed.current = null;
-    setDraftId(null);
-    await walk.save(id, v ? { ppm: v.ppm, atLeast: v.atLeast, samplePoint: v.samplePoint, note: v.note } : {});
-  };
 
   const submit = serial(async () => {
     setDialog(null);
@@ -199,16 +146,6 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
     navigate(leaveTo);
   });
 
-  // Typed values of the open reading go to the device as they are typed (one small write each),
-  // so a reload brings them back; they are not uploaded until the reading is committed.
-  const keepTyped = (id: string, v: KeypadValue) => {
-    typed.current = v;
-    const r = readingsRef.current.find((x) => x.id === id);
-    if (!r || !r.draft || (r.ppm === v.ppm && r.atLeast === v.atLeast && r.samplePoint === v.samplePoint && r.note === v.note)) return;
-    serial(async () => {
-      await walk.keepDraft(id, v);
-    })();
-  };
 
   const keypadFor = draft ?? editing;
   const showHint = hint && hint.index !== dismissedAlarm ? hint : null;
@@ -224,21 +161,9 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
           </p>
           {contrastToggle}
         </div>
-        <div className="flex gap-2">
-          <div className="min-w-0 flex-1">
-            <SyncBanner status={sync} onShowRejected={() => setDialog("list")} />
-          </div>
-          {sweep.warnings.length ? (
-            <button type="button" aria-expanded={showWarnings} onClick={() => setShowWarnings(!showWarnings)} className="min-h-12 shrink-0 rounded-md border-l-4 border-note bg-note-soft px-3 font-bold text-note edge">
-              {sweep.warnings.length} {sweep.warnings.length === 1 ? "warning" : "warnings"}
-            </button>
-          ) : null}
-        </div>
-        {showWarnings ? (
-          <ul className="max-h-48 overflow-auto">
-            {sweep.warnings.map((w) => <li key={w.code + (w.systemId ?? "")} className="mb-1 rounded-md border-l-4 border-note bg-note-soft px-3 py-1 text-note edge">{w.message}</li>)}
-          </ul>
-        ) : null}
+        <SweepWarnings warnings={sweep.warnings}>
+          <SyncBanner status={sync} onShowRejected={() => setDialog("list")} />
+        </SweepWarnings>
         {sweep.rejected ? (
           <Alert tone="error" title="The server refused this sweep">
             {Object.entries(sweep.rejected).map(([k, m]) => (k ? `${k} ${m}` : m)).join("; ")} Its readings stay on this device.
@@ -252,17 +177,7 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
           </div>
         ) : null}
         {notice ? <Alert tone="success"><span>{notice} </span><button type="button" className="min-h-12 underline" onClick={() => setNotice(null)}>Dismiss</button></Alert> : null}
-        {showHint ? (
-          <div role="alert" className="flex items-center justify-between gap-2 rounded-md border-l-4 border-danger bg-danger-soft px-3 py-1 edge" data-testid="lag-hint">
-            <span>
-              <strong>Alarm: {committed[showHint.index]?.ppm} ppm.</strong>{" "}
-              {showHint.beforeDelay
-                ? "The detector had not yet drawn air from beyond the first reading: re-check around the start."
-                : `The air was sampled about ${showHint.backM.toFixed(1)} m back along your path (yellow diamond). Re-check at about 0.6 m spacing from there (rings).`}
-            </span>
-            <button type="button" className="min-h-12 shrink-0 font-bold underline" onClick={() => setDismissedAlarm(showHint.index)}>OK</button>
-          </div>
-        ) : null}
+        {showHint ? <LagHintBanner hint={showHint} ppm={committed[showHint.index]?.ppm ?? 0} onDismiss={() => setDismissedAlarm(showHint.index)} /> : null}
       </header>
       <div className="flex min-h-0 flex-1 flex-col landscape:md:flex-row">
       <div className="min-h-0 min-w-0 flex-1">
@@ -298,20 +213,24 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
         </div>
       ) : null}
       </div>
-      {(
-        <nav aria-label="Sweep tools" className="flex gap-2 bg-surface p-2 edge border-x-0 border-b-0">
-          <button type="button" className={`${TOOL} bg-surface`} onClick={() => undo()} disabled={readOnly || all.length === 0}>Undo</button>
-          <button type="button" className={`${TOOL} bg-surface`} onClick={() => setDialog("list")}>Readings</button>
-          <button type="button" className={`${TOOL} bg-surface`} onClick={() => setLeakMode(!leakMode)} aria-pressed={leakMode} disabled={readOnly}>Leak here</button>
-          <button type="button" className={`${TOOL} bg-surface`} onClick={() => setDialog("import")} disabled={readOnly}>Import log</button>
-          <button type="button" className={`${TOOL} bg-accent text-on-accent`} onClick={() => setDialog("summary")} disabled={sweep.status !== "in-progress" || sweep.submitPending}>Submit</button>
-        </nav>
-      )}
+      <WalkTools
+        readOnly={readOnly}
+        canUndo={all.length > 0}
+        canSubmit={sweep.status === "in-progress" && !sweep.submitPending}
+        leakMode={leakMode}
+        onUndo={() => undo()}
+        onList={() => setDialog("list")}
+        onLeak={() => setLeakMode(!leakMode)}
+        onImport={() => setDialog("import")}
+        onSubmit={() => setDialog("summary")}
+      />
       <CautionDialog place={caution?.place ?? null} name={caution?.name ?? ""} onClose={() => setCaution(null)} />
       <ReadingsDrawer
         open={dialog === "list"}
         readings={all}
         openId={draftId}
+        findings={queuedFindings.list}
+        onDiscardFinding={(id) => void queuedFindings.discard(id)}
         timeZone={storePack.data?.store.timeZone ?? Intl.DateTimeFormat().resolvedOptions().timeZone}
         onEdit={(r) => {
           setDialog(null);
