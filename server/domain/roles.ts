@@ -39,7 +39,7 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "members.read", "stores.read", "stores.edit", "plans.edit", "detectors.read", "detectors.manage", "sweeps.record", "findings.record",
   ],
   technician: ["members.read", "stores.read", "detectors.read", "sweeps.record", "findings.record"],
-  // Engineers read the detectors: their calibration checks are on the Today screen.
+  // Engineers read everything (PRODUCT.md), detectors included: their lag figures explain an analysis.
   engineer: [
     "members.read", "outbox.read", "stores.read", "detectors.read", "sweeps.review", "findings.record", "findings.close",
     "compliance.manage", "reports.send",

@@ -6,8 +6,9 @@ import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { Dialog } from "../../../components/ui/dialog";
 import { Select } from "../../../components/ui/select";
-import { createWalkFinding } from "../api/create-finding";
-import { syncNow } from "../hooks/sync-loop";
+import { refreshCounts, syncSoon } from "../hooks/sync-loop";
+import { queueFinding } from "../model/finding-queue";
+import { walkDb } from "../model/walk-db";
 
 export interface LeakSpot {
   x: number;
@@ -28,15 +29,22 @@ export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId
 
   async function save() {
     if (!props.spot) return;
+    // Checked here as the server does, so a queued finding is not refused later, out of sight.
+    if (status === "confirmed" && !component) {
+      setError("Component: is required when the leak is confirmed (or choose Suspected).");
+      return;
+    }
     setBusy(true);
     setError(null);
     try {
-      // A sweep started offline must reach the server before a finding can name it.
-      await syncNow();
-      const f = await createWalkFinding(
+      // On the device first, like a reading: it uploads (with its photo) once its sweep is on the
+      // server, and waits in the queue while offline.
+      const clientId = crypto.randomUUID();
+      await queueFinding(
+        await walkDb(),
         props.storeId,
         {
-          clientId: crypto.randomUUID(),
+          clientId,
           source: "walk",
           status,
           planId: props.planId,
@@ -47,10 +55,13 @@ export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId
           y: props.spot.y,
           component: (component || null) as never,
           note,
+          foundAt: new Date().toISOString(),
         },
-        photo,
+        photo ? { name: photo.name || "photo.jpg", type: photo.type || "image/jpeg", data: await photo.arrayBuffer() } : null,
       );
-      props.onSaved(f.id);
+      await refreshCounts();
+      syncSoon(0);
+      props.onSaved(clientId);
     } catch (e) {
       setError(e instanceof Error ? e.message : String(e));
     } finally {

@@ -1,0 +1,16 @@
+import type { LagHint } from "../model/lag-hint";
+
+/** Where an alarm's air was really sampled, and the closer re-check to make from there. */
+export function LagHintBanner({ hint, ppm, onDismiss }: { hint: LagHint; ppm: number; onDismiss(): void }) {
+  return (
+    <div role="alert" className="flex items-center justify-between gap-2 rounded-md border-l-4 border-danger bg-danger-soft px-3 py-1 edge" data-testid="lag-hint">
+      <span>
+        <strong>Alarm: {ppm} ppm.</strong>{" "}
+        {hint.beforeDelay
+          ? "The detector had not yet drawn air from beyond the first reading: re-check around the start."
+          : `The air was sampled about ${hint.backM.toFixed(1)} m back along your path (yellow diamond). Re-check at about 0.6 m spacing from there (rings).`}
+      </span>
+      <button type="button" className="min-h-12 shrink-0 font-bold underline" onClick={onDismiss}>OK</button>
+    </div>
+  );
+}
