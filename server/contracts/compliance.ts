@@ -141,6 +141,8 @@ export const todayResponse = z.object({
     z.object({
       id: z.uuid(), name: z.string(), storeId: z.uuid(), storeName: z.string(), refrigerantId: z.string(),
       latestPercent: z.number().nullable(), latestOn: z.string().nullable(), thresholdPercent: z.number().nullable(), breachOpen: z.boolean(),
+      /** The latest rate is above the threshold but a repair was recorded since (no action due for it). */
+      repairedSince: z.boolean().default(false),
       nextInspection: z.string().nullable(), link: z.string(),
     }),
   ),

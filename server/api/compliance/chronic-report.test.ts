@@ -2,6 +2,13 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { agentFor, createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
 import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 import type { Role } from "../../domain/roles";
+import { pdfText } from "../../../tests/helpers/pdf-text";
+
+const binary = (res: { on(e: string, f: (c?: Buffer) => void): void }, cb: (err: Error | null, body: Buffer) => void) => {
+  const chunks: Buffer[] = [];
+  res.on("data", (c) => chunks.push(c!));
+  res.on("end", () => cb(null, Buffer.concat(chunks)));
+};
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;
@@ -76,6 +83,11 @@ describe("filing the chronic-leaker report", () => {
     // The audit trail names who did it and when.
     expect(filed.body.audit).toHaveLength(1);
     expect(filed.body.audit[0]).toMatchObject({ action: "chronic-report-filed", by: "engineer of Wrenfield Markets", summary: `Chronic-leaker report for ${year} marked filed on ${year + 1}-01-01 (reference EPA-CL-0042)` });
+
+    // The leak-rate statement carries the filing.
+    const pdf = await engineer.agent.get(`/api/systems/${systemId}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+    const text = (await pdfText(pdf.body as Buffer)).join(" ").replace(/\s+/g, " ");
+    expect(text).toContain(`chronic leaker; report filed on ${year + 1}-01-01 by engineer of Wrenfield Markets (reference EPA-CL-0042)`);
 
     const again = await (await signedIn("owner")).post(`/api/systems/${systemId}/chronic-reports`, body);
     expect(again.status).toBe(409);

@@ -96,6 +96,7 @@ export async function today(ctx: AppContext, viewer: Viewer, filter: { storeId?:
         id: s.system.id, name: s.system.name, storeId: s.store.id, storeName: s.store.name, refrigerantId: s.system.refrigerantId,
         latestPercent: s.status.latest?.percent ?? null, latestOn: s.status.latest?.date ?? null,
         thresholdPercent: s.status.latest?.thresholdPercent ?? s.status.applicability.thresholdPercent, breachOpen: s.status.unrepairedBreach !== null,
+        repairedSince: s.status.overThreshold && s.status.unrepairedBreach === null,
         nextInspection: s.status.nextInspection?.dueOn ?? null, link: `/systems/${s.system.id}`,
       }))
       .sort((a, b) => a.storeName.localeCompare(b.storeName) || a.name.localeCompare(b.name)),

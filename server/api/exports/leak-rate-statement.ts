@@ -67,6 +67,15 @@ export function leakRateStatementPdf(r: SystemRecordsView, findingList: FindingD
     48,
   ).fillColor("black").fontSize(9.5);
 
+  if (r.chronic.length) {
+    h("Added per calendar year");
+    for (const y of r.chronic) {
+      const status = y.chronic ? (y.filed ? `chronic leaker; report filed on ${y.filed.on} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}` : `chronic leaker; report due ${y.reportDue}`) : "";
+      line(`${y.year}: ${mass(y.addedKg)}, ${y.percent.toFixed(1)} % of the full charge${status ? ` — ${status}` : ""}.`);
+    }
+    if (r.chronicRule) line(`Chronic leaker from ${r.chronicRule.percent} % of the full charge in a calendar year, reported by ${r.chronicRule.reportBy} (${readableSource(r.chronicRule.source)}).`);
+  }
+
   const voided = r.additions.filter((a) => a.voided);
   if (voided.length) {
     h("Corrected or voided entries (kept for the audit trail)");

@@ -114,7 +114,7 @@ export function TodayView({ data, storeId, onStoreChange }: { data: TodayData; s
             { header: "System", cell: (r) => <Link className="text-accent underline" to={r.link}>{r.name}</Link> },
             { header: "Store", cell: (r) => r.storeName },
             { header: "Refrigerant", cell: (r) => r.refrigerantId },
-            { header: "Latest leak rate", cell: (r) => (r.latestPercent === null ? "no additions" : <Link className={`underline ${r.breachOpen ? "font-bold text-danger" : "text-accent"}`} to={`${r.link}#leak-rates`}>{formatPercent(r.latestPercent)} on {r.latestOn}</Link>) },
+            { header: "Latest leak rate", cell: (r) => (r.latestPercent === null ? "no additions" : <><Link className={`underline ${r.breachOpen ? "font-bold text-danger" : "text-accent"}`} to={`${r.link}#leak-rates`}>{formatPercent(r.latestPercent)} on {r.latestOn}</Link>{r.repairedSince ? <span className="block text-sm text-muted">above the threshold; repaired since</span> : null}</>) },
             { header: "Threshold", cell: (r) => (r.thresholdPercent === null ? "none applies" : `${r.thresholdPercent} %`) },
             { header: "Next inspection", cell: (r) => (r.nextInspection ? <Link className="text-accent underline" to={`${r.link}#checks`}>{r.nextInspection}</Link> : "—") },
           ]}
