@@ -96,7 +96,7 @@ export function readableSource(source: string): string {
     const unique = [...new Set(notes)];
     if (!rest) return unique.join("; ");
     // "definition [S:R8]": a one-word lead-in reads "definition: 40 CFR 82.152, …".
-    if (!/\s/.test(rest) && unique.length) return `${rest}: ${unique.join("; ")}`;
+    if (!/\s/.test(rest) && unique.length && tags.every((t) => t.startsWith("S:"))) return `${rest}: ${unique.join("; ")}`;
     return unique.length ? `${rest} (${unique.join("; ")})` : rest;
   });
   return segments.filter(Boolean).join("; ");

@@ -98,7 +98,7 @@ export function TodayView({ data, storeId, onStoreChange }: { data: TodayData; s
               { header: "Status", cell: (r) => (r.status === "verified" ? "verified, ready to close" : r.status) },
               { header: "Store", cell: (r) => r.storeName },
               { header: "Found", cell: (r) => r.foundOn },
-              { header: "Deadline", cell: (r) => (r.deadline ? <><span className="font-bold">{r.deadline}</span><br /><span className="block max-w-xs text-sm text-muted">{readableSource(r.deadlineSource ?? "")}</span></> : "—") },
+              { header: "Deadline", cell: (r) => (r.deadline ? <><span className="font-bold">{r.deadline}</span><br /><span className="block max-w-[13rem] text-sm text-muted">{readableSource(r.deadlineSource ?? "")}</span></> : "—") },
             ]}
           />
         )}
