@@ -89,6 +89,9 @@ describe("filing the chronic-leaker report", () => {
     const text = (await pdfText(pdf.body as Buffer)).join(" ").replace(/\s+/g, " ");
     expect(text).toContain(`chronic leaker; report filed on ${year + 1}-01-01 by engineer of Wrenfield Markets (reference EPA-CL-0042)`);
 
+    const csv = await engineer.get(`/api/systems/${systemId}/records.csv`);
+    expect(csv.text).toContain(`chronic-leaker report for ${year} filed,${year + 1}-01-01`);
+
     const again = await (await signedIn("owner")).post(`/api/systems/${systemId}/chronic-reports`, body);
     expect(again.status).toBe(409);
   });
