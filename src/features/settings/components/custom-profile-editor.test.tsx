@@ -50,6 +50,18 @@ describe("custom rule profile editor", () => {
     expect(calls).toHaveLength(0);
   });
 
+  it("adds a band on top with edges that still ascend", () => {
+    stubFetch({});
+    renderOnRoute(<CustomProfileEditor profile={eu} editable />, { path: "/settings" });
+    fireEvent.click(screen.getByRole("button", { name: "Add a band on top" }));
+    expect((screen.getByLabelText("Band 3: below (t)") as HTMLInputElement).value).toBe("5000");
+    expect((screen.getByLabelText("Band 4: from (t)") as HTMLInputElement).value).toBe("5000");
+    expect((screen.getByLabelText("Band 4: below (t)") as HTMLInputElement).value).toBe("");
+    fireEvent.click(screen.getByRole("button", { name: "Remove the top band" }));
+    expect(screen.queryByLabelText("Band 4: from (t)")).toBeNull();
+    expect((screen.getByLabelText("Band 3: below (t)") as HTMLInputElement).value).toBe("");
+  });
+
   it("is read-only without settings.manage", () => {
     stubFetch({});
     renderOnRoute(<CustomProfileEditor profile={us} editable={false} />, { path: "/settings" });

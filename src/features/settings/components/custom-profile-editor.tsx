@@ -5,7 +5,7 @@ import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
 import { formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
 import { ruleProfileSchema, useSaveCustomProfile } from "../api/custom-profile";
-import { getAt, numberFromText, pathKey, setAt, type DraftPath } from "../model/profile-draft";
+import { addTopBand, getAt, numberFromText, pathKey, removeTopBand, setAt, type DraftPath } from "../model/profile-draft";
 
 const APPLIANCE_LABELS = {
   "commercial-refrigeration": "Commercial refrigeration",
@@ -156,7 +156,8 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
         <Group title="Leak checks by CO2-equivalent">
           <p className="text-sm text-muted">Bands in tonnes CO2e, lowest first; each band starts where the one below ends. Leave the top band’s upper edge empty.</p>
           {bands.map((b, i) => (
-            <div key={i} className="grid gap-2 sm:grid-cols-4" role="group" aria-label={`Band ${i + 1}`}>
+            // Keyed by the band count too: adding or removing a band rewrites the edges of the rows below.
+            <div key={`${i}-${bands.length}`} className="grid gap-2 sm:grid-cols-4" role="group" aria-label={`Band ${i + 1}`}>
               <NumberBox label={`Band ${i + 1}: from (t)`} name={pathKey(bandPath(i, "from"))} value={b.from} onValue={(x) => set(bandPath(i, "from"), x)} error={errors[pathKey(bandPath(i, "from"))]} disabled={disabled} />
               <NumberBox label={`Band ${i + 1}: below (t)`} name={pathKey(bandPath(i, "to"))} value={b.to} emptyIsNull onValue={(x) => set(bandPath(i, "to"), x)} error={errors[pathKey(bandPath(i, "to"))]} disabled={disabled} />
               <NumberBox label={`Band ${i + 1}: months, no detection system`} name={pathKey(bandPath(i, "monthsWithoutLds"))} value={b.monthsWithoutLds} onValue={(x) => set(bandPath(i, "monthsWithoutLds"), x)} error={errors[pathKey(bandPath(i, "monthsWithoutLds"))]} disabled={disabled} />
@@ -164,6 +165,12 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
             </div>
           ))}
           {errors["leakChecks.co2eBands.value"] ? <p className="font-bold text-danger">Bands {errors["leakChecks.co2eBands.value"]}.</p> : null}
+          {editable ? (
+            <div className="flex flex-wrap gap-2">
+              <Button variant="secondary" onClick={() => set(["leakChecks", "co2eBands", "value"], addTopBand(bands))}>Add a band on top</Button>
+              <Button variant="secondary" disabled={bands.length < 2} onClick={() => set(["leakChecks", "co2eBands", "value"], removeTopBand(bands))}>Remove the top band</Button>
+            </div>
+          ) : null}
           <SourceBox label="Source for the CO2e bands" path={["leakChecks", "co2eBands", "source"]} {...common} />
           <SourcedNumber label="Re-check after a repair (months)" path={["leakChecks", "recheckAfterRepairMonths"]} {...common} />
         </Group>

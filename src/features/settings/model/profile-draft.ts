@@ -24,3 +24,29 @@ export function numberFromText(text: string): number | string {
   const t = text.trim().replace(",", ".");
   return t !== "" && Number.isFinite(Number(t)) ? Number(t) : text;
 }
+
+interface Band {
+  from: number;
+  to: number | null;
+  monthsWithoutLds: number;
+  monthsWithLds: number;
+  ldsRequired: boolean;
+}
+
+/**
+ * A new open top band: the old top band now ends at ten times its lower edge (a starting point to
+ * edit), and the new one starts there with the same intervals, so the bands still ascend.
+ */
+export function addTopBand<B extends Band>(bands: readonly B[]): B[] {
+  const top = bands.at(-1);
+  if (!top) return [{ from: 5, to: null, monthsWithoutLds: 12, monthsWithLds: 24, ldsRequired: false } as B];
+  const edge = Number.isFinite(top.from) && top.from > 0 ? top.from * 10 : 10;
+  return [...bands.slice(0, -1), { ...top, to: edge }, { ...top, from: edge, to: null }];
+}
+
+/** Drops the top band; the one below becomes the open top band. */
+export function removeTopBand<B extends Band>(bands: readonly B[]): B[] {
+  if (bands.length < 2) return [...bands];
+  const rest = bands.slice(0, -1);
+  return [...rest.slice(0, -1), { ...rest.at(-1)!, to: null }];
+}
