@@ -31,7 +31,7 @@ export function CustomProfileSection({ editable }: { editable: boolean }) {
           {q.data.profile ? (
             <p className="text-sm">
               {q.data.inForce ? <strong>In force. </strong> : <strong>Not in force (the rule profile above is not Custom). </strong>}
-              Last saved {q.data.savedAt ? new Date(q.data.savedAt).toLocaleString() : ""} by {q.data.savedBy ?? "unknown"}; based on {q.data.profile.basedOn === "eu-fgas" ? "EU F-gas" : "US federal"}.
+              Last saved {q.data.savedAt ? `${q.data.savedAt.slice(0, 16).replace("T", " ")} UTC` : ""} by {q.data.savedBy ?? "unknown"}; based on {q.data.profile.basedOn === "eu-fgas" ? "EU F-gas" : "US federal"}.
             </p>
           ) : (
             <p>No custom profile yet{editable ? "." : "; an owner can start one."}</p>
