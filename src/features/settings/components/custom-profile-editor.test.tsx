@@ -37,6 +37,8 @@ describe("custom rule profile editor", () => {
     const sent = calls.find((c) => c.method === "PUT")!.body as RuleProfileInput;
     expect(sent.leakRateParts[1].repairDays).toEqual({ value: 14, source: "company policy: repair within 14 days" });
     expect(sent.leakRateParts[0].repairDays.value).toBe(30);
+    expect(sent.recordRetentionYears.value).toBe(3); // 3 years US [S:R6,R7], unchanged
+    expect(sent.leakRateParts[1].chronicLeaker.reportBy.value).toEqual({ month: 3, day: 1 }); // 1 March [S:R7]
     expect(await screen.findByText(/Custom profile saved/)).toBeTruthy();
   });
 

@@ -115,6 +115,8 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
       <p className="max-w-prose text-sm text-muted">Every value needs its source: a citation, or who set the value and why (e.g. “company policy, 2026 audit”).</p>
       <TextField label="Profile name" name="name" value={draft.name} onChange={(e) => set(["name"], e.target.value)} error={errors.name} disabled={disabled} />
 
+      <SourcedNumber label="Keep records (years)" path={["recordRetentionYears"]} {...common} />
+
       {draft.leakRateParts.map((part, i) => {
         const p = (...rest: (string | number)[]): DraftPath => ["leakRateParts", i, ...rest];
         return (
@@ -148,6 +150,20 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
             ) : null}
             <h3 className="font-bold">Chronic leaker</h3>
             <SourcedNumber label="Added in a calendar year (% of full charge)" path={p("chronicLeaker", "percentOfFullCharge")} {...common} />
+            <div className="grid gap-2 sm:grid-cols-[6rem_6rem_1fr]">
+              {(["month", "day"] as const).map((k) => (
+                <NumberBox
+                  key={k}
+                  label={k === "month" ? "Report by: month" : "Report by: day"}
+                  name={pathKey(p("chronicLeaker", "reportBy", "value", k))}
+                  value={part.chronicLeaker.reportBy.value[k]}
+                  onValue={(x) => set(p("chronicLeaker", "reportBy", "value", k), x)}
+                  error={errors[pathKey(p("chronicLeaker", "reportBy", "value", k))] ?? (k === "month" ? errors[pathKey(p("chronicLeaker", "reportBy", "value"))] : undefined)}
+                  disabled={disabled}
+                />
+              ))}
+              <SourceBox label="Source for the report date" path={p("chronicLeaker", "reportBy", "source")} {...common} />
+            </div>
           </Group>
         );
       })}
