@@ -72,7 +72,7 @@ describe("the custom rule profile", () => {
     // The domain check runs after zod: a chronic-leaker report date that is no calendar day.
     const feb30 = await edit((p) => (p.leakRateParts[1].chronicLeaker.reportBy.value = { month: 2, day: 30 }));
     expect(feb30.status).toBe(400);
-    expect(Object.keys(feb30.body.error.fields)).toEqual(["leakRateParts.1.chronicLeaker.reportBy.value"]);
+    expect(feb30.body.error.fields).toEqual({ "leakRateParts.1.chronicLeaker.reportBy.value.day": "must be a day from 1 to 28 in month 2 (one that every year has), got 30" });
   });
 
   it("is used for thresholds and the repair deadline once the company chooses it", async () => {

@@ -158,7 +158,7 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
                   name={pathKey(p("chronicLeaker", "reportBy", "value", k))}
                   value={part.chronicLeaker.reportBy.value[k]}
                   onValue={(x) => set(p("chronicLeaker", "reportBy", "value", k), x)}
-                  error={errors[pathKey(p("chronicLeaker", "reportBy", "value", k))] ?? (k === "month" ? errors[pathKey(p("chronicLeaker", "reportBy", "value"))] : undefined)}
+                  error={errors[pathKey(p("chronicLeaker", "reportBy", "value", k))]}
                   disabled={disabled}
                 />
               ))}
