@@ -150,7 +150,7 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
             ) : null}
             <h3 className="font-bold">Chronic leaker</h3>
             <SourcedNumber label="Added in a calendar year (% of full charge)" path={p("chronicLeaker", "percentOfFullCharge")} {...common} />
-            <div className="grid gap-2 sm:grid-cols-[6rem_6rem_1fr]">
+            <div className="grid gap-2 sm:grid-cols-[9rem_9rem_1fr]">
               {(["month", "day"] as const).map((k) => (
                 <NumberBox
                   key={k}
