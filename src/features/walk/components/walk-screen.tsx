@@ -47,7 +47,6 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
   const [moving, setMoving] = useState<string | null>(null);
   const navigate = useNavigate();
 
-
   const fixtures = planPack.data?.fixtures ?? [];
   // Every reading counts from its tap, the open one included: the count, coverage, the list and the
   // submit summary see it. The lag hint and quick picks wait for its value to be committed.
@@ -61,7 +60,15 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
     committedRef.current = next;
     return next;
   }, [walk.readings]);
-  const unsampled = useMemo(() => unsampledFixtures(fixtures, all), [fixtures, all]);
+  // Where readings were taken, kept identical while only values change (typing on the keypad).
+  const positionsRef = useRef<{ x: number; y: number }[]>([]);
+  const positions = useMemo(() => {
+    const prev = positionsRef.current;
+    if (prev.length === all.length && all.every((r, i) => r.x === prev[i].x && r.y === prev[i].y)) return prev;
+    positionsRef.current = all.map((r) => ({ x: r.x, y: r.y }));
+    return positionsRef.current;
+  }, [all]);
+  const unsampled = useMemo(() => unsampledFixtures(fixtures, positions), [fixtures, positions]);
   // Keyed by content, so the fixtures layer (and the plan image under it) redraws only when
   // coverage really changes, not on every tap.
   const unsampledKey = unsampled.map((f) => f.id).join(",");
