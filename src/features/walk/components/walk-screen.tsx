@@ -4,6 +4,7 @@ import type { CautionPlace } from "../../../../server/domain/safety/cautions";
 import { FIXTURE_KIND_NAMES } from "../../../../server/contracts/fixture-kinds";
 import { Alert } from "../../../components/ui/alert";
 import { Spinner } from "../../../components/ui/spinner";
+import { countOf } from "../../../lib/format";
 import { usePlanPack, useStorePack } from "../api/store-pack";
 import { useHighContrast } from "../hooks/use-high-contrast";
 import { useSyncStatus } from "../hooks/use-sync-status";
@@ -164,7 +165,7 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
           <button type="button" onClick={() => leave()} className="inline-flex min-h-12 shrink-0 items-center whitespace-nowrap rounded-md px-3 font-bold edge">← Leave</button>
           <p className="min-w-0 flex-1 text-center leading-tight">
             <span className="block truncate font-bold">{storePack.data?.store.name ?? "Sweep"}</span>
-            <span className="block truncate text-sm text-muted" data-testid="walk-count">{all.length} readings{sweep.status !== "in-progress" ? ` · ${sweep.status}` : sweep.submitPending ? " · submitting" : ""} · {sweep.detectorName}</span>
+            <span className="block truncate text-sm text-muted" data-testid="walk-count">{countOf(all.length, "reading")}{sweep.status !== "in-progress" ? ` · ${sweep.status}` : sweep.submitPending ? " · submitting" : ""} · {sweep.detectorName}</span>
           </p>
           {contrastToggle}
         </div>
@@ -267,7 +268,7 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
         onImport={(list) => {
           setDialog(null);
           void walk.addMany(list);
-          setNotice(`${list.length} readings added from the detector's log.`);
+          setNotice(`${countOf(list.length, "reading")} added from the detector's log.`);
         }}
       /> : null}
       {leakSpot ? (
