@@ -3,6 +3,7 @@ import { useNavigate } from "react-router";
 import type { CautionPlace } from "../../../../server/domain/safety/cautions";
 import { FIXTURE_KIND_NAMES } from "../../../../server/contracts/fixture-kinds";
 import { Alert } from "../../../components/ui/alert";
+import type { LengthPreference } from "../../../../server/domain/units/format-units";
 import { Spinner } from "../../../components/ui/spinner";
 import { countOf } from "../../../lib/format";
 import { usePlanPack, useStorePack } from "../api/store-pack";
@@ -29,7 +30,7 @@ import { SyncBanner } from "./sync-banner";
 import { WalkTools } from "./walk-tools";
 
 /** The sweep capture screen: the plan fills the screen; one tap drops a reading there. */
-export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { storeId: string; sweepId: string; contrastToggle: ReactNode; leaveTo: string }) {
+export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo, lengthUnit = "m" }: { storeId: string; sweepId: string; contrastToggle: ReactNode; leaveTo: string; lengthUnit?: LengthPreference }) {
   const walk = useWalk(sweepId);
   const storePack = useStorePack(storeId);
   const planPack = usePlanPack(walk.sweep?.planId);
@@ -185,7 +186,7 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
           </div>
         ) : null}
         {notice ? <Alert tone="success"><span>{notice} </span><button type="button" className="min-h-12 underline" onClick={() => setNotice(null)}>Dismiss</button></Alert> : null}
-        {showHint ? <LagHintBanner hint={showHint} ppm={committed[showHint.index]?.ppm ?? 0} onDismiss={() => setDismissedAlarm(showHint.index)} /> : null}
+        {showHint ? <LagHintBanner hint={showHint} ppm={committed[showHint.index]?.ppm ?? 0} lengthUnit={lengthUnit} onDismiss={() => setDismissedAlarm(showHint.index)} /> : null}
       </header>
       <div className="flex min-h-0 flex-1 flex-col landscape:md:flex-row">
       <div className="min-h-0 min-w-0 flex-1">
@@ -278,6 +279,7 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
           planId={plan.id}
           sweepId={sweep.id}
           fixtures={fixtures}
+          lengthUnit={lengthUnit}
           onClose={() => setLeakSpot(null)}
           onSaved={() => {
             setLeakSpot(null);
