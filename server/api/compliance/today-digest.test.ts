@@ -52,13 +52,13 @@ describe("Today", () => {
     const today = localToday("America/New_York");
     const repair = r.body.due.find((d: { kind: string }) => d.kind === "repair");
     // Learned 27 days ago; repair within 30 days [S:R4] → 3 days left.
-    expect(repair).toMatchObject({ systemId, daysLeft: 3, state: "due-soon", link: `/systems/${systemId}`, storeName: co.store.name });
+    expect(repair).toMatchObject({ systemId, daysLeft: 3, state: "due-soon", link: `/systems/${systemId}#leak-rates`, storeName: co.store.name });
     expect(repair.source).toMatch(/40 CFR 84/);
-    expect(r.body.overThreshold).toEqual([expect.objectContaining({ systemId, thresholdPercent: 20, on: daysBefore(today, 27), link: `/systems/${systemId}` })]);
+    expect(r.body.overThreshold).toEqual([expect.objectContaining({ systemId, thresholdPercent: 20, on: daysBefore(today, 27), link: `/systems/${systemId}#leak-rates` })]);
     expect(r.body.overThreshold[0].percent).toBeCloseTo((5 / 100 / (30 / 365)) * 100, 9);
     expect(r.body.openFindings).toEqual([expect.objectContaining({ id: findingId, status: "confirmed", deadline: repair.dueOn, link: `/findings/${findingId}` })]);
     // Calibrated 28 days ago, company interval 30 days → due in 2 days (common practice).
-    expect(r.body.due.find((d: { kind: string }) => d.kind === "detector-check")).toMatchObject({ daysLeft: 2, state: "due-soon", link: "/detectors" });
+    expect(r.body.due.find((d: { kind: string }) => d.kind === "detector-check")).toMatchObject({ daysLeft: 2, state: "due-soon", link: expect.stringMatching(/^\/detectors#detector-[0-9a-f-]{36}$/) });
   });
 
   it("filters by store, shows store contacts their store only (no detectors), and 404s a stranger's store", async () => {
@@ -104,6 +104,9 @@ describe("the daily digest", () => {
       expect(mail[0].subject).toMatch(/due in the next 7 days/);
       expect(mail[0].text).toContain("Repair: leak rate");
       expect(mail[0].text).toContain(`/systems/${systemId}`);
+      // Rules read as citations in the e-mail, never as internal tags.
+      expect(mail[0].text).toContain("repair within 30 days of learning of the breach");
+      expect(mail[0].text).not.toMatch(/\[(S:|M\]|D\])/);
       expect(mail[0].text).toMatch(/Calibration \/ bump check: Heated-diode sniffer/);
       const runs = await t.ctx.db.select().from(digestRuns).where(eq(digestRuns.companyId, co.company.id));
       expect(runs).toHaveLength(1);

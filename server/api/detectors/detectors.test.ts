@@ -49,6 +49,8 @@ describe("detectors", () => {
     expect((await (await as("technician")).post("/api/detectors", { name: "X", principle: "infrared" })).status).toBe(403);
     expect((await (await as("engineer")).post("/api/detectors", { name: "X", principle: "infrared" })).status).toBe(403);
     expect((await (await as("store-contact")).get("/api/detectors")).status).toBe(403);
+    // Engineers read them: detector calibration checks are on their Today screen.
+    expect((await (await as("engineer")).get("/api/detectors")).status).toBe(200);
   });
 
   it("engineers read the detectors (PRODUCT.md: engineers read everything); store contacts read none", async () => {

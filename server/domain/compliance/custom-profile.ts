@@ -57,6 +57,7 @@ export function validateRuleProfile(p: RuleProfile): void {
     const f = `leakRateParts[${i}]`;
     for (const t of APPLIANCE_TYPES) checkNumber(part.thresholds[t], `${f}.thresholds.${t}`, 0, 1000);
     checkNumber(part.repairDays, `${f}.repairDays`, 1, 3650, true);
+    checkNumber(part.initialVerificationDays, `${f}.initialVerificationDays`, 0, 3650, true);
     checkNumber(part.followUpVerificationDays, `${f}.followUpVerificationDays`, 1, 3650, true);
     checkNumber(part.firstCalculationDays, `${f}.firstCalculationDays`, 1, 3650, true);
     checkNumber(part.maxDaysSinceLastAddition, `${f}.maxDaysSinceLastAddition`, 1, 3650, true);
