@@ -2,6 +2,7 @@ import { useState } from "react";
 import { COMPONENT_LABELS, FINDING_COMPONENTS } from "../../../../server/contracts/findings";
 import type { Fixture } from "../../../../server/contracts/fixtures";
 import { FIXTURE_KIND_NAMES } from "../../../../server/contracts/fixture-kinds";
+import { formatLength, type LengthPreference } from "../../../../server/domain/units/format-units";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { Dialog } from "../../../components/ui/dialog";
@@ -17,7 +18,7 @@ export interface LeakSpot {
 }
 
 /** "Leak found here": position (from the tap), fixture, component, status, photo and note. */
-export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId: string; sweepId: string; fixtures: readonly Fixture[]; onClose(): void; onSaved(id: string): void }) {
+export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId: string; sweepId: string; fixtures: readonly Fixture[]; lengthUnit?: LengthPreference; onClose(): void; onSaved(id: string): void }) {
   const [fixtureId, setFixtureId] = useState(props.spot?.fixtureId ?? "");
   const [component, setComponent] = useState<string>("");
   const [status, setStatus] = useState<"suspected" | "confirmed">("confirmed");
@@ -25,6 +26,7 @@ export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId
   const [photo, setPhoto] = useState<File | null>(null);
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
+  const len = (m: number) => formatLength(m, props.lengthUnit ?? "m", { decimals: 1 });
   const options = [{ value: "", label: "No fixture" }, ...props.fixtures.filter((f) => f.kind !== "wall" && f.kind !== "column").map((f) => ({ value: f.id, label: f.label || FIXTURE_KIND_NAMES[f.kind] }))];
 
   async function save() {
@@ -71,7 +73,7 @@ export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId
 
   return (
     <Dialog title="Leak found here" open={props.spot !== null} onClose={props.onClose}>
-      {props.spot ? <p className="text-muted">At {props.spot.x.toFixed(2)} m, {props.spot.y.toFixed(2)} m on the plan.</p> : null}
+      {props.spot ? <p className="text-muted">{len(props.spot.x)} across and {len(props.spot.y)} down from the plan's top-left corner.</p> : null}
       <Select label="Fixture" value={fixtureId} onChange={(e) => setFixtureId(e.target.value)} options={options} />
       <Select label="Component" value={component} onChange={(e) => setComponent(e.target.value)} options={[{ value: "", label: "Not known yet" }, ...FINDING_COMPONENTS.map((c) => ({ value: c, label: COMPONENT_LABELS[c] }))]} />
       <fieldset>
@@ -85,10 +87,14 @@ export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId
           ))}
         </div>
       </fieldset>
-      <label className="block">
+      <div>
         <span className="font-bold">Photo</span>
-        <input type="file" accept="image/*" capture="environment" onChange={(e) => setPhoto(e.target.files?.[0] ?? null)} className="mt-1 block min-h-12 w-full" />
-      </label>
+        {/* The native file control is a small target; a large labelled one opens the camera. */}
+        <label className="mt-1 flex min-h-12 cursor-pointer items-center justify-center rounded-md px-3 font-bold edge focus-within:ring-2 focus-within:ring-accent">
+          <input type="file" accept="image/*" capture="environment" onChange={(e) => setPhoto(e.target.files?.[0] ?? null)} className="sr-only" />
+          {photo ? `Photo: ${photo.name || "from the camera"} — change` : "Take or choose a photo"}
+        </label>
+      </div>
       <label className="block">
         <span className="font-bold">Note</span>
         <textarea value={note} onChange={(e) => setNote(e.target.value)} maxLength={2000} rows={2} className="mt-1 block w-full rounded-md p-2 edge" />

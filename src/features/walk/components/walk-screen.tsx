@@ -3,7 +3,9 @@ import { useNavigate } from "react-router";
 import type { CautionPlace } from "../../../../server/domain/safety/cautions";
 import { FIXTURE_KIND_NAMES } from "../../../../server/contracts/fixture-kinds";
 import { Alert } from "../../../components/ui/alert";
+import type { LengthPreference } from "../../../../server/domain/units/format-units";
 import { Spinner } from "../../../components/ui/spinner";
+import { countOf } from "../../../lib/format";
 import { usePlanPack, useStorePack } from "../api/store-pack";
 import { useHighContrast } from "../hooks/use-high-contrast";
 import { useSyncStatus } from "../hooks/use-sync-status";
@@ -28,7 +30,7 @@ import { SyncBanner } from "./sync-banner";
 import { WalkTools } from "./walk-tools";
 
 /** The sweep capture screen: the plan fills the screen; one tap drops a reading there. */
-export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { storeId: string; sweepId: string; contrastToggle: ReactNode; leaveTo: string }) {
+export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo, lengthUnit = "m" }: { storeId: string; sweepId: string; contrastToggle: ReactNode; leaveTo: string; lengthUnit?: LengthPreference }) {
   const walk = useWalk(sweepId);
   const storePack = useStorePack(storeId);
   const planPack = usePlanPack(walk.sweep?.planId);
@@ -47,7 +49,6 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
   const [moving, setMoving] = useState<string | null>(null);
   const navigate = useNavigate();
 
-
   const fixtures = planPack.data?.fixtures ?? [];
   // Every reading counts from its tap, the open one included: the count, coverage, the list and the
   // submit summary see it. The lag hint and quick picks wait for its value to be committed.
@@ -61,7 +62,15 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
     committedRef.current = next;
     return next;
   }, [walk.readings]);
-  const unsampled = useMemo(() => unsampledFixtures(fixtures, all), [fixtures, all]);
+  // Where readings were taken, kept identical while only values change (typing on the keypad).
+  const positionsRef = useRef<{ x: number; y: number }[]>([]);
+  const positions = useMemo(() => {
+    const prev = positionsRef.current;
+    if (prev.length === all.length && all.every((r, i) => r.x === prev[i].x && r.y === prev[i].y)) return prev;
+    positionsRef.current = all.map((r) => ({ x: r.x, y: r.y }));
+    return positionsRef.current;
+  }, [all]);
+  const unsampled = useMemo(() => unsampledFixtures(fixtures, positions), [fixtures, positions]);
   // Keyed by content, so the fixtures layer (and the plan image under it) redraws only when
   // coverage really changes, not on every tap.
   const unsampledKey = unsampled.map((f) => f.id).join(",");
@@ -157,7 +166,7 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
           <button type="button" onClick={() => leave()} className="inline-flex min-h-12 shrink-0 items-center whitespace-nowrap rounded-md px-3 font-bold edge">← Leave</button>
           <p className="min-w-0 flex-1 text-center leading-tight">
             <span className="block truncate font-bold">{storePack.data?.store.name ?? "Sweep"}</span>
-            <span className="block truncate text-sm text-muted" data-testid="walk-count">{all.length} readings{sweep.status !== "in-progress" ? ` · ${sweep.status}` : sweep.submitPending ? " · submitting" : ""} · {sweep.detectorName}</span>
+            <span className="block truncate text-sm text-muted" data-testid="walk-count">{countOf(all.length, "reading")}{sweep.status !== "in-progress" ? ` · ${sweep.status}` : sweep.submitPending ? " · submitting" : ""} · {sweep.detectorName}</span>
           </p>
           {contrastToggle}
         </div>
@@ -177,7 +186,7 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
           </div>
         ) : null}
         {notice ? <Alert tone="success"><span>{notice} </span><button type="button" className="min-h-12 underline" onClick={() => setNotice(null)}>Dismiss</button></Alert> : null}
-        {showHint ? <LagHintBanner hint={showHint} ppm={committed[showHint.index]?.ppm ?? 0} onDismiss={() => setDismissedAlarm(showHint.index)} /> : null}
+        {showHint ? <LagHintBanner hint={showHint} ppm={committed[showHint.index]?.ppm ?? 0} lengthUnit={lengthUnit} onDismiss={() => setDismissedAlarm(showHint.index)} /> : null}
       </header>
       <div className="flex min-h-0 flex-1 flex-col landscape:md:flex-row">
       <div className="min-h-0 min-w-0 flex-1">
@@ -260,7 +269,7 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
         onImport={(list) => {
           setDialog(null);
           void walk.addMany(list);
-          setNotice(`${list.length} readings added from the detector's log.`);
+          setNotice(`${countOf(list.length, "reading")} added from the detector's log.`);
         }}
       /> : null}
       {leakSpot ? (
@@ -270,6 +279,7 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
           planId={plan.id}
           sweepId={sweep.id}
           fixtures={fixtures}
+          lengthUnit={lengthUnit}
           onClose={() => setLeakSpot(null)}
           onSaved={() => {
             setLeakSpot(null);
