@@ -1,13 +1,13 @@
 import { afterAll, beforeAll, expect, it } from "vitest";
-import { asc, eq } from "drizzle-orm";
+import { eq } from "drizzle-orm";
 import type { Browser, Page } from "playwright-core";
-import { readingAudit, readings, sweeps } from "../../server/db/schema/index";
+import { readingAudit, sweeps } from "../../server/db/schema/index";
 import { demoFixtures } from "../../server/db/seed/demo-layout";
 import { launchBrowser, newContext } from "../helpers/browser";
 import { startE2eServer, type E2eServer } from "../helpers/e2e-server";
 import { signInThroughForm } from "../helpers/e2e-session";
 import { PASSWORD, seedCompany } from "../helpers/fixtures";
-import { mapStoreForWalk, planToScreen, waitForServiceWorker, waitForSteadyPlan } from "../helpers/walk-e2e";
+import { mapStoreForWalk, planToScreen, waitForServiceWorker, storedReadings, until, waitForSteadyPlan } from "../helpers/walk-e2e";
 
 let server: E2eServer;
 let browser: Browser;
@@ -24,19 +24,7 @@ afterAll(async () => {
   await server?.close();
 });
 
-async function storedReadings(sweepId: string) {
-  return server.ctx.db.select().from(readings).where(eq(readings.sweepId, sweepId)).orderBy(asc(readings.takenAt));
-}
-
-async function until<T>(what: string, read: () => Promise<T>, ok: (v: T) => boolean, ms = 20_000): Promise<T> {
-  const end = Date.now() + ms;
-  for (;;) {
-    const v = await read();
-    if (ok(v)) return v;
-    if (Date.now() > end) throw new Error(`timed out waiting for ${what}; last value ${JSON.stringify(v)}`);
-    await new Promise((r) => setTimeout(r, 200));
-  }
-}
+const onServer = (sweepId: string) => storedReadings(server.ctx, sweepId);
 
 /**
  * The demo plan's dairy lineup (the open cases along the back-room partition), walked 0.4 m in front
@@ -92,7 +80,7 @@ it("on a phone with touch, a sweep of the demo store's dairy line takes one tap 
   const half = Math.floor(spots.length / 2);
   for (let i = 0; i < half; i++) await tapSpot(i);
   // All but the reading on the keypad are uploaded; the open one is not.
-  await until(`${half - 1} readings on the server`, () => storedReadings(sweepId), (r) => r.length === half - 1);
+  await until(`${half - 1} readings on the server`, () => onServer(sweepId), (r) => r.length === half - 1);
 
   await context.setOffline(true);
   for (let i = half; i < half + 4; i++) await tapSpot(i);
@@ -104,7 +92,7 @@ it("on a phone with touch, a sweep of the demo store's dairy line takes one tap 
   await page.getByTestId("walk-count").filter({ hasText: new RegExp(`^${half + 4} readings`) }).waitFor();
   await page.getByRole("heading", { name: `#${half + 4}`, exact: true }).waitFor();
   await waitForSteadyPlan(page);
-  expect((await storedReadings(sweepId)).length).toBe(half - 1);
+  expect((await onServer(sweepId)).length).toBe(half - 1);
 
   await context.setOffline(false);
   for (let i = half + 4; i < spots.length; i++) await tapSpot(i);
@@ -116,7 +104,7 @@ it("on a phone with touch, a sweep of the demo store's dairy line takes one tap 
   otherTaps++;
 
   const [done] = await until("the sweep submitted", () => server.ctx.db.select().from(sweeps).where(eq(sweeps.id, sweepId)), (r) => r[0]?.status === "submitted");
-  const stored = await storedReadings(sweepId);
+  const stored = await onServer(sweepId);
   expect(stored).toHaveLength(spots.length);
   stored.forEach((r, i) => {
     expect(r.x).toBeCloseTo(spots[i].x, 0);
@@ -148,16 +136,16 @@ it("a half-typed value stays on the device through a reload and is uploaded once
   await page.getByRole("button", { name: "7", exact: true }).tap();
   await page.getByRole("button", { name: "Decimal point" }).tap();
   await page.getByRole("button", { name: "5", exact: true }).tap();
-  await until("the first reading on the server", () => storedReadings(sweepId), (r) => r.length === 1);
+  await until("the first reading on the server", () => onServer(sweepId), (r) => r.length === 1);
   await page.waitForTimeout(1000); // a sync pass would have had time to send the open one
-  expect((await storedReadings(sweepId)).length).toBe(1);
+  expect((await onServer(sweepId)).length).toBe(1);
 
   await page.reload();
   await page.getByRole("heading", { name: "#2", exact: true }).waitFor();
   await expect(page.getByLabel("Value").textContent()).resolves.toMatch(/^7\.5 ppm$/);
   await page.getByRole("button", { name: "← Leave" }).tap();
   await page.getByTestId("walk-screen").waitFor({ state: "detached" });
-  const stored = await until("both readings on the server", () => storedReadings(sweepId), (r) => r.length === 2);
+  const stored = await until("both readings on the server", () => onServer(sweepId), (r) => r.length === 2);
   expect(stored.map((r) => r.ppm)).toEqual([0, 7.5]);
   expect(await server.ctx.db.select().from(readingAudit).where(eq(readingAudit.sweepId, sweepId))).toEqual([]);
   await context.close();
@@ -177,7 +165,7 @@ it("moves an uploaded reading from the readings list and the open one from its k
   await tapAt(a);
   await tapAt(b);
   await page.getByRole("heading", { name: "#2", exact: true }).waitFor();
-  await until("the first reading on the server", () => storedReadings(sweepId), (r) => r.length === 1);
+  await until("the first reading on the server", () => onServer(sweepId), (r) => r.length === 1);
 
   // The first one was really taken 1 m further along the case: move it from the list.
   await page.getByRole("button", { name: "Readings" }).tap();
@@ -185,7 +173,7 @@ it("moves an uploaded reading from the readings list and the open one from its k
   await rows.filter({ hasText: "#1 ·" }).getByRole("button", { name: "Move" }).tap();
   await page.getByText("Tap the plan where reading #1 was taken.").waitFor();
   await tapAt({ x: a.x + 1, y: a.y });
-  await until("the moved reading on the server", () => storedReadings(sweepId), (r) => r.length === 1 && Math.abs(r[0].x - (a.x + 1)) < 0.2);
+  await until("the moved reading on the server", () => onServer(sweepId), (r) => r.length === 1 && Math.abs(r[0].x - (a.x + 1)) < 0.2);
   // Gloves cannot always pinch: the zoom buttons zoom about the reading on the keypad.
   const plan = page.getByTestId("walk-plan");
   const viewOf = async () => (await plan.getAttribute("data-view"))!.split(" ").map(Number);
@@ -204,7 +192,7 @@ it("moves an uploaded reading from the readings list and the open one from its k
   expect((await viewOf())[0]).toBeCloseTo(fitScale, 5);
   await page.getByRole("button", { name: "Submit" }).tap();
   await page.getByRole("button", { name: "Submit sweep" }).tap();
-  const stored = await until("both readings on the server", () => storedReadings(sweepId), (r) => r.length === 2);
+  const stored = await until("both readings on the server", () => onServer(sweepId), (r) => r.length === 2);
   expect(stored[1].x).toBeCloseTo(c.x, 0);
   const audit = await server.ctx.db.select().from(readingAudit).where(eq(readingAudit.sweepId, sweepId));
   expect(audit).toHaveLength(1);

@@ -1,12 +1,12 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { agentFor, createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
-import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
+import { createTestApp, type Agent, type TestApp, signInOnce } from "../../../tests/helpers/test-app";
+import { seedCompany } from "../../../tests/helpers/fixtures";
 import type { Role } from "../../domain/roles";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;
 let other: Awaited<ReturnType<typeof seedCompany>>;
-const agents = new Map<string, Agent>();
+const signInOnceAs = signInOnce(() => t.app);
 
 beforeAll(async () => {
   t = await createTestApp();
@@ -15,14 +15,7 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-async function signedIn(role: Role, company = co): Promise<Agent> {
-  const key = `${company.company.id}:${role}`;
-  if (agents.has(key)) return agents.get(key)!;
-  const a = await agentFor(t.app);
-  expect((await a.post("/api/auth/sign-in", { email: company.people[role].email, password: PASSWORD })).status).toBe(200);
-  agents.set(key, a);
-  return a;
-}
+const signedIn = (role: Role, company = co): Promise<Agent> => signInOnceAs(company.people[role]);
 
 async function newSystem(extra: object = {}) {
   const lead = await signedIn("lead-tech");

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { agentFor, createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
-import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
+import { createTestApp, type Agent, type TestApp, signInOnce } from "../../../tests/helpers/test-app";
+import { seedCompany } from "../../../tests/helpers/fixtures";
 import type { Role } from "../../domain/roles";
 import { pdfText } from "../../../tests/helpers/pdf-text";
 
@@ -12,7 +12,7 @@ const binary = (res: { on(e: string, f: (c?: Buffer) => void): void }, cb: (err:
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;
-const agents = new Map<string, Agent>();
+const signInOnceAs = signInOnce(() => t.app);
 
 beforeAll(async () => {
   t = await createTestApp();
@@ -20,13 +20,7 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-async function signedIn(role: Role): Promise<Agent> {
-  if (agents.has(role)) return agents.get(role)!;
-  const a = await agentFor(t.app);
-  expect((await a.post("/api/auth/sign-in", { email: co.people[role].email, password: PASSWORD })).status).toBe(200);
-  agents.set(role, a);
-  return a;
-}
+const signedIn = (role: Role): Promise<Agent> => signInOnceAs(co.people[role]);
 
 describe("filing the chronic-leaker report", () => {
   let systemId: string;

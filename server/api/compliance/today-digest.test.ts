@@ -1,8 +1,8 @@
 import pino from "pino";
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { agentFor, createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
-import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
+import { createTestApp, type Agent, type TestApp, signInOnce } from "../../../tests/helpers/test-app";
+import { seedCompany } from "../../../tests/helpers/fixtures";
 import { createDb } from "../../db/client";
 import { detectors, digestRuns, outboxMessages } from "../../db/schema/index";
 import type { AppContext } from "../../context";
@@ -15,16 +15,9 @@ let co: Awaited<ReturnType<typeof seedCompany>>;
 let other: Awaited<ReturnType<typeof seedCompany>>;
 let systemId: string;
 let findingId: string;
-const agents = new Map<string, Agent>();
+const signInOnceAs = signInOnce(() => t.app);
 
-async function signedIn(role: Role, company = co): Promise<Agent> {
-  const key = `${company.company.id}:${role}`;
-  if (agents.has(key)) return agents.get(key)!;
-  const a = await agentFor(t.app);
-  expect((await a.post("/api/auth/sign-in", { email: company.people[role].email, password: PASSWORD })).status).toBe(200);
-  agents.set(key, a);
-  return a;
-}
+const signedIn = (role: Role, company = co): Promise<Agent> => signInOnceAs(company.people[role]);
 
 const localToday = (zone: string, now = new Date()) => new Intl.DateTimeFormat("en-CA", { timeZone: zone, year: "numeric", month: "2-digit", day: "2-digit" }).format(now);
 const daysBefore = (date: string, days: number) => new Date(Date.parse(`${date}T00:00:00Z`) - days * 86_400_000).toISOString().slice(0, 10);
