@@ -48,7 +48,7 @@ export function Component() {
           <table className="w-full border-collapse text-left">
             <thead>
               <tr className="edge border-x-0 border-t-0">
-                {["Name", "Principle", "Delay", "Time constant", "Alarm", "Check due", ""].map((h) => <th key={h} className="p-2">{h}</th>)}
+                {["Name", "Principle", "Delay", "Time constant", "Alarm", "Display", "Check due", ""].map((h) => <th key={h} className="p-2">{h}</th>)}
               </tr>
             </thead>
             <tbody>
@@ -59,6 +59,7 @@ export function Component() {
                   <td className="p-2">{d.transportDelayS} s</td>
                   <td className="p-2">{d.timeConstantS} s</td>
                   <td className="p-2">{d.alarmPpm} ppm</td>
+                  <td className="p-2">{d.levelScale?.length ? `${d.levelScale.length} levels (${d.levelScale.map((b) => b.level).join(", ")})` : "ppm"}</td>
                   <td className={`p-2 ${d.overdue ? "font-bold text-danger" : ""}`}>{d.checkDueOn ?? "never checked"}{d.overdue ? " — overdue" : ""}</td>
                   <td className="p-2">
                     {canManage ? (
