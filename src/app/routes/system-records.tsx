@@ -1,4 +1,5 @@
 import { useNavigate, useParams } from "react-router";
+import { COMPONENT_LABELS } from "../../../server/contracts/findings";
 import { can } from "../../../server/domain/roles";
 import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
@@ -7,22 +8,21 @@ import { useSystemRecords } from "../../features/compliance/api/get-system-recor
 import { SystemRecords } from "../../features/compliance/components/system-records-view";
 import { useFindings } from "../../features/findings/api/get-findings";
 import { NewFindingForm } from "../../features/findings/components/new-finding-form";
-import { useCompanySettings } from "../../features/settings/api/get-company-settings";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
+import { useUnitPreferences } from "../shell/use-unit-preferences";
 import { Link } from "react-router";
 import { useScrollToHash } from "../../lib/use-scroll-to-hash";
 
 // Where the compliance records of a system meet its findings.
 export function Component() {
   const { systemId = "" } = useParams();
-  const { user, membership } = useSignedIn();
+  const { membership } = useSignedIn();
   const records = useSystemRecords(systemId);
-  const settings = useCompanySettings();
   const findings = useFindings(records.data?.store.id, systemId);
   const navigate = useNavigate();
   useDocumentTitle(records.data ? records.data.system.name : "System records");
-  const unit = user.massUnit ?? settings.data?.massUnit ?? "kg";
+  const unit = useUnitPreferences().mass;
   const canRecord = can(membership.role, "findings.record");
   useScrollToHash(!!records.data && !findings.isPending);
   if (records.isPending) return <Spinner label="Loading the system's records…" />;
@@ -33,13 +33,13 @@ export function Component() {
     <>
       <PageHeader title={r.system.name} description={`${r.store.name} · records on the store's calendar (${r.store.timeZone}); today is ${r.today}.`} />
       <div className="space-y-8">
-        <SystemRecords r={r} unit={unit} canRecord={canRecord} canFile={can(membership.role, "compliance.manage")} findings={list.filter((f) => f.status !== "dismissed").map((f) => ({ id: f.id, label: `${f.events[0]?.on ?? ""} ${f.component ?? "leak"} (${f.status})` }))} />
+        <SystemRecords r={r} unit={unit} canRecord={canRecord} canFile={can(membership.role, "compliance.manage")} findings={list.filter((f) => f.status !== "dismissed").map((f) => ({ id: f.id, label: `${f.events[0]?.on ?? ""} ${f.component ? COMPONENT_LABELS[f.component] : "leak"} (${f.status})` }))} />
         <section aria-labelledby="sys-findings" className="space-y-3">
           <h2 id="sys-findings" className="text-xl font-bold">Findings on this system</h2>
           {list.length === 0 ? <p className="text-muted">No findings.</p> : (
             <ul className="space-y-1">
               {list.map((f) => (
-                <li key={f.id}><Link className="text-accent underline" to={`/findings/${f.id}`}>{f.events[0]?.on} · {f.component ?? "component not yet known"} · {f.status}</Link>{f.deadlines[0] ? ` · due ${f.deadlines[0].dueOn}` : ""}</li>
+                <li key={f.id}><Link className="text-accent underline" to={`/findings/${f.id}`}>{f.events[0]?.on} · {f.component ? COMPONENT_LABELS[f.component] : "component not yet known"} · {f.status}</Link>{f.deadlines[0] ? ` · due ${f.deadlines[0].dueOn}` : ""}</li>
               ))}
             </ul>
           )}
