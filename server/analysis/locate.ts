@@ -146,6 +146,7 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     }
     return idx;
   };
+  const prior = o.riskPointLogOdds > 0 ? riskPointPrior(grid, plan, o.riskPointLogOdds) : null;
   const greedy = findSources({
     fields, y, w, censored, nuisance, allowed,
     gridWidth: grid.width,
@@ -156,7 +157,8 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     alternateFraction: o.alternateFraction,
     rankByStrength: o.rankByStrength,
     sourceSeparationM: o.sourceSeparationM,
-    prior: o.riskPointLogOdds > 0 ? riskPointPrior(grid, plan, o.riskPointLogOdds) : null,
+    prior,
+    evidenceGate: o.evidenceGate,
     credible: (c, column, _q, b, residual, delta) => {
       if (delta < o.minDeltaChi2) return false;
       const sup = support(column, b, residual);
@@ -171,7 +173,7 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   const dof = Math.max(1, n - 2 - greedy.sources.length - nuisance.length);
   const s2 = Math.max(1, greedy.chi2Final / dof);
   const sources = addMirrorSpot(greedy.sources).map((s) => {
-    const cell = refineCell(greedy.firstScan.delta, allowed, s.cell, grid.width, grid.cellSize, o.refineRadiusM, o.refineInflation * s2);
+    const cell = refineCell(greedy.firstScan.delta, allowed, s.cell, grid.width, grid.cellSize, o.refineRadiusM, o.refineInflation * s2, o.refinePrior ? prior : null);
     return cell === s.cell ? s : { ...s, cell, column: kernelColumn(fields, cell, n) };
   });
   const topQ = Math.max(sources[0]?.q ?? 0, 1e-12);

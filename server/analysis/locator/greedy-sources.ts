@@ -32,6 +32,8 @@ export interface GreedyInput {
   prior: Float64Array | null;
   /** Fitted sources are at least this far apart, m. */
   sourceSeparationM: number;
+  /** Judge credibility on the best-fitting cell before the prior picks among cells (see findSources). */
+  evidenceGate?: boolean;
   credible: (cell: number, column: Float64Array, q: number, b: number, residual: Float64Array, delta: number) => boolean;
 }
 
@@ -107,10 +109,20 @@ export function findSources(input: GreedyInput): GreedyResult {
     sumWeightedKernelTimes(fields, w, residual, sumWGR);
     const scan = scanSources(fields.sumWG, fields.sumWGG, sumWGR, { sumW: sw, sumWR: swr, sumWRR: swrr }, roundAllowed);
     if (!firstScan) firstScan = scan;
-    const best = bestWithPrior(scan, input.prior, n);
+    let best = bestWithPrior(scan, input.prior, n);
     if (best < 0) break;
-    const column = kernelColumn(fields, best, n);
-    if (!input.credible(best, column, scan.q[best], scan.b[best], residual, scan.delta[best])) break;
+    let column = kernelColumn(fields, best, n);
+    if (input.evidenceGate && input.prior) {
+      // Whether there is a leak at all is the readings' question: the best-fitting cell must be credible
+      // on its own; the prior only chooses where, among cells the readings allow.
+      const ml = bestWithPrior(scan, null, n);
+      const mlColumn = ml === best ? column : kernelColumn(fields, ml, n);
+      if (!input.credible(ml, mlColumn, scan.q[ml], scan.b[ml], residual, scan.delta[ml])) break;
+      if (ml !== best && !input.credible(best, column, scan.q[best], scan.b[best], residual, scan.delta[best])) {
+        best = ml;
+        column = mlColumn;
+      }
+    } else if (!input.credible(best, column, scan.q[best], scan.b[best], residual, scan.delta[best])) break;
     columns.push(column);
     fit = fitNonnegative(y, w, columns, censored);
     sources.push({ cell: best, delta: scan.delta[best], column, alternate: false, q: 0 });

@@ -44,6 +44,18 @@ export interface LocatorOptions {
    */
   refineRadiusM: number;
   refineInflation: number;
+  /**
+   * The refinement weighs the risk-point prior too (the posterior mean rather than the likelihood
+   * mean): inside a fan-stirred walk-in the readings are level, so the likelihood mean sat in the
+   * room's middle while the coil or line-set drop lies at its wall.
+   */
+  refinePrior: boolean;
+  /**
+   * Credibility is judged on the best-fitting cell, not on the cell the prior picks: the prior says
+   * where a leak most likely is, never whether there is one (without this a strong prior found a
+   * weak spot at a coil in a no-leak store).
+   */
+  evidenceGate: boolean;
   /** An alternative spot must reach this share of the best spot's Δχ². */
   alternateFraction: number;
   /** Credibility: minimum Δχ², and readings within supportRadiusM reading at least elevatedPpm over background. */
@@ -57,7 +69,13 @@ export interface LocatorOptions {
    */
   sourcesOnEquipment: boolean;
   equipmentMarginM: number;
-  /** Log prior odds of a leak within 0.5 m of a risk point against elsewhere on equipment (0 = no preference). */
+  /**
+   * Log prior odds of a leak within 0.5 m of a risk point against elsewhere on equipment (0 = no
+   * preference). Joints, brazed returns and coils are where leaks are found (common practice, no
+   * published source); 0.5 m around a point is a small share of a case's area, so the odds per cell are
+   * high. With the prior in the refinement, 3 (about 20:1) against 1 lowered the median top-1 error on
+   * the committed stores from 1.04 to 0.71 m and on a held-out set from 1.01 to 0.92 m; 4 was no better.
+   */
   riskPointLogOdds: number;
   /** Screening length of the kernel of benign-source zones, m (their gas is fitted out to twice this). */
   zoneScreeningLengthM: number;
@@ -107,13 +125,15 @@ export const DEFAULT_LOCATOR_OPTIONS: LocatorOptions = {
   rankByStrength: true,
   refineRadiusM: 1.5,
   refineInflation: 200,
+  refinePrior: true,
+  evidenceGate: true,
   minDeltaChi2: 25,
   supportRadiusM: 3,
   minSupport: 2,
   elevatedPpm: 1.5,
   sourcesOnEquipment: true,
   equipmentMarginM: 0.3,
-  riskPointLogOdds: 1,
+  riskPointLogOdds: 3,
   zoneMarginM: 1.5,
   zoneTypicalAlarms: 3,
   zoneScreeningLengthM: 5,
