@@ -159,6 +159,7 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     sourceSeparationM: o.sourceSeparationM,
     prior,
     evidenceGate: o.evidenceGate,
+    relocatePasses: o.relocatePasses,
     credible: (c, column, _q, b, residual, delta) => {
       if (delta < o.minDeltaChi2) return false;
       const sup = support(column, b, residual);
@@ -173,7 +174,7 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   const dof = Math.max(1, n - 2 - greedy.sources.length - nuisance.length);
   const s2 = Math.max(1, greedy.chi2Final / dof);
   const sources = addMirrorSpot(greedy.sources).map((s) => {
-    const cell = refineCell(greedy.firstScan.delta, allowed, s.cell, grid.width, grid.cellSize, o.refineRadiusM, o.refineInflation * s2, o.refinePrior ? prior : null);
+    const cell = refineCell(o.ownSurface ? s.surface : greedy.firstScan.delta, allowed, s.cell, grid.width, grid.cellSize, o.refineRadiusM, o.refineInflation * s2, o.refinePrior ? prior : null);
     return cell === s.cell ? s : { ...s, cell, column: kernelColumn(fields, cell, n) };
   });
   const topQ = Math.max(sources[0]?.q ?? 0, 1e-12);
@@ -186,7 +187,7 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     const sup = support(s.column, greedy.fit.b, y);
     const side = oneSidedPass(sup.map((i) => xs[i]), sup.map((i) => ys[i]), x, y0);
     if (rank === 0) oneSidedTop = side.oneSided;
-    const radius = Math.max(o.minRadiusM, o.radiusScale * misfitRadius(greedy.firstScan.delta, s.cell, 5.99 * s2, grid.width, grid.cellSize));
+    const radius = Math.max(o.minRadiusM, o.radiusScale * misfitRadius(o.ownSurface ? s.surface : greedy.firstScan.delta, s.cell, 5.99 * s2, grid.width, grid.cellSize));
     const fixture = nearestFixture(plan.fixtures, x, y0);
     const riskPoint = nearestRiskPoint(plan.riskPoints, x, y0);
     const facts: CandidateFacts = {
@@ -228,7 +229,9 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     if (mx < 0 || my < 0 || mx > plan.width || my > plan.height) return found;
     const mc = cellIndexOf(grid, mx, my);
     if (!allowed[mc] || found.some((f) => cellDistance(f.cell, mc, grid.width) * grid.cellSize < o.separationM)) return found;
-    const mirror: FoundSource = { cell: mc, delta: greedy.firstScan.delta[mc], column: kernelColumn(fields, mc, n), alternate: true, q: greedy.firstScan.q[mc] };
+    const mirror: FoundSource = {
+      cell: mc, delta: greedy.firstScan.delta[mc], column: kernelColumn(fields, mc, n), alternate: true, q: greedy.firstScan.q[mc], surface: greedy.firstScan.delta,
+    };
     return [top, mirror, ...found.slice(1)].slice(0, o.maxCandidates);
   }
 

@@ -56,6 +56,18 @@ export interface LocatorOptions {
    * weak spot at a coil in a no-leak store).
    */
   evidenceGate: boolean;
+  /**
+   * Relocation passes of the fitted sources after the greedy fit (0 = off; see findSources). Off as
+   * measured: 2 passes moved the committed median 0.71 -> 0.63 m but lowered top-3 there and helped no
+   * held-out figure.
+   */
+  relocatePasses: number;
+  /**
+   * Refine each spot and size its radius on its own round's Δχ² map rather than the first scan's: a
+   * second leak's neighbourhood on the first map is the first leak's slope. Top-3 within 1.5 m went from
+   * 85% to 88% on the committed stores and stayed level on two held-out sets.
+   */
+  ownSurface: boolean;
   /** An alternative spot must reach this share of the best spot's Δχ². */
   alternateFraction: number;
   /** Credibility: minimum Δχ², and readings within supportRadiusM reading at least elevatedPpm over background. */
@@ -127,6 +139,8 @@ export const DEFAULT_LOCATOR_OPTIONS: LocatorOptions = {
   refineInflation: 200,
   refinePrior: true,
   evidenceGate: true,
+  relocatePasses: 0,
+  ownSurface: true,
   minDeltaChi2: 25,
   supportRadiusM: 3,
   minSupport: 2,
