@@ -86,7 +86,12 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   // A zone is active when the zone-only fit gives it gas. Only an active zone explains the readings
   // around it and keeps suspect spots off its surroundings; nothing is ever placed inside a zone.
   const zoneFit = fitNonnegative(y, weightsFor(y, o), nuisance, censored);
-  const zoneActive = plan.backgroundZones.map((_, z) => zoneFit.q[z] > 0.5);
+  // ... and, when `zoneSeenAtZone` is set, when a reading at the zone itself stands out: gas spreading from a
+  // zone is strongest at it, so a zone that reads nothing where it is cannot be what raised readings elsewhere.
+  const typical = medianOf(y);
+  const zoneActive = plan.backgroundZones.map(
+    (_, z) => zoneFit.q[z] > 0.5 && (!o.zoneSeenAtZone || zoneReadingDist[z].some((d, i) => d <= o.zoneMarginM && y[i] >= typical + o.elevatedPpm)),
+  );
   const zoneDist = new Float32Array(cells).fill(Infinity); // to the nearest active zone
   const zoneNearest = new Int32Array(cells).fill(-1);
   const insideZone = new Uint8Array(cells);
@@ -296,6 +301,12 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     readings: corrected,
     field,
   };
+}
+
+function medianOf(v: Float64Array): number {
+  const s = Float64Array.from(v).sort();
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
 }
 
 /** Noise model: w = 1/(a + β·y)², an additive floor plus a multiplicative share. */
