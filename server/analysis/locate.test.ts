@@ -107,6 +107,19 @@ describe("locate on small fixed stores", () => {
     expect(r.diagnostics.some((d) => d.kind === "benign-source" && d.zoneId === "bz1")).toBe(true);
   });
 
+  it("does not let a listed zone that reads nothing explain away a weak leak along the aisle", () => {
+    // The zone is listed (aerosol storage) 2.5 m from the leak but quiet: the readings beside it are at
+    // background. The leak at the line-set reads at most 4 ppm, below the 3 x alarm a zone could cause by
+    // default, so a zone taken as active would explain it away.
+    const zone = { id: "bz1", polygon: rect(12, 0.5, 14.5, 3), note: "aerosol storage" };
+    const leak: [number, number] = [9.5, 5.3];
+    const input = parseLocatorInput(store((x, y) => 0.3 + 8 * Math.exp(-aroundGondola([x, y], leak) / 1.2), [zone]));
+    const r = locate(input);
+    expect(r.candidates.length).toBeGreaterThan(0);
+    expect(Math.hypot(r.candidates[0].x - leak[0], r.candidates[0].y - leak[1])).toBeLessThan(1.5);
+    expect(r.diagnostics.some((d) => d.kind === "benign-source")).toBe(false);
+  });
+
   it("leaves unsampled areas unknown in the field map instead of inventing values", () => {
     const r = locate(parseLocatorInput(store(() => 0)));
     const { width, cellSize, values, confidence } = r.field;
