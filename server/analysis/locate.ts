@@ -178,10 +178,53 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   });
   const dof = Math.max(1, n - 2 - greedy.sources.length - nuisance.length);
   const s2 = Math.max(1, greedy.chi2Final / dof);
-  const sources = addMirrorSpot(greedy.sources).map((s) => {
-    const cell = refineCell(o.ownSurface ? s.surface : greedy.firstScan.delta, allowed, s.cell, grid.width, grid.cellSize, o.refineRadiusM, o.refineInflation * s2, o.refinePrior ? prior : null);
-    return cell === s.cell ? s : { ...s, cell, column: kernelColumn(fields, cell, n) };
-  });
+  // In a walk-in or machine room whose fans run the readings are level all over the room, so where in
+  // the room the leak is cannot be read from them: take the room's most probable cell (tempered fit plus
+  // the risk-point prior), which is a coil, valve or line-set drop unless the readings say otherwise.
+  const roomOf = new Int32Array(cells).fill(-1);
+  if (o.mixedRoomMode) {
+    plan.fixtures.forEach((f, r) => {
+      if (f.fans && (f.kind === "walk-in" || f.kind === "machine-room")) for (const k of cellsInside(grid, f.polygon)) roomOf[k] = r;
+    });
+  }
+  const taken: number[] = [];
+  const farFromTaken = (k: number, minM: number) => taken.every((t) => cellDistance(t, k, grid.width) * grid.cellSize >= minM);
+  const roomBest = (s: FoundSource, room: number, riskOnly = false): number => {
+    const surface = o.ownSurface ? s.surface : greedy.firstScan.delta;
+    const T = o.refineInflation * s2;
+    let best = -1;
+    let bestScore = -Infinity;
+    for (const k of cellsInside(grid, plan.fixtures[room].polygon)) {
+      if (!allowed[k] || !(surface[k] > 0) || !farFromTaken(k, riskOnly ? ROOM_RISK_SPACING_M : o.separationM) || (riskOnly && !(prior && prior[k] > 0))) continue;
+      const score = surface[k] / (2 * T) + (prior ? prior[k] : 0);
+      if (score > bestScore) { bestScore = score; best = k; }
+    }
+    return best;
+  };
+  const sources: FoundSource[] = [];
+  for (const s of addMirrorSpot(greedy.sources)) {
+    const room = roomOf[s.cell];
+    if (room < 0) {
+      const cell = refineCell(o.ownSurface ? s.surface : greedy.firstScan.delta, allowed, s.cell, grid.width, grid.cellSize, o.refineRadiusM, o.refineInflation * s2, o.refinePrior ? prior : null);
+      sources.push(cell === s.cell ? s : { ...s, cell, column: kernelColumn(fields, cell, n) });
+      taken.push(cell);
+      continue;
+    }
+    const best = roomBest(s, room);
+    if (best < 0) continue; // every cell of the room is already listed
+    sources.push(best === s.cell ? s : { ...s, cell: best, column: kernelColumn(fields, best, n) });
+    taken.push(best);
+    if (s.alternate) continue;
+    // the room's next most probable risk point (else cell) follows a fitted spot placed in a fan-stirred room
+    let next = roomBest(s, room, true);
+    if (next < 0) next = roomBest(s, room);
+    if (next >= 0) {
+      const surface = o.ownSurface ? s.surface : greedy.firstScan.delta;
+      sources.push({ cell: next, delta: surface[next], column: kernelColumn(fields, next, n), alternate: true, q: s.q, surface });
+      taken.push(next);
+    }
+  }
+  sources.splice(o.maxCandidates);
   const topQ = Math.max(sources[0]?.q ?? 0, 1e-12);
   const gPerYearPerQ =
     (wellMixedEmission(ppmToMgPerM3(1, o.molarMassGPerMol), o.airChangesPerH, kernelArea(kernel) * o.mixingHeightM) * HOURS_PER_YEAR) / 1000;
@@ -335,5 +378,9 @@ function misfitRadius(delta: Float64Array, c: number, tolerance: number, width: 
   }
   return Math.sqrt((count * cellSize * cellSize) / Math.PI);
 }
+
+// Risk points of one fan-stirred room are listed as separate spots when at least this far apart: twice
+// the 0.5 m reach of the risk-point prior, so two spots never name the same fitting.
+const ROOM_RISK_SPACING_M = 1;
 
 const round2 = (v: number) => Math.round(v * 100) / 100;

@@ -63,6 +63,14 @@ export interface LocatorOptions {
    */
   relocatePasses: number;
   /**
+   * A spot inside a fan-stirred walk-in or machine room moves to the room's most probable cell, and the
+   * room's next most probable risk point is listed right after it (see locate): the fans mix the room,
+   * so the readings say which room but hardly where in it, and the prior decides. On the committed
+   * stores the median top-1 error went 0.71 -> 0.58 m and top-3 88% -> 92%; on two held-out sets
+   * 1.31 -> 1.16 m and 73% -> 75%.
+   */
+  mixedRoomMode: boolean;
+  /**
    * Refine each spot and size its radius on its own round's Δχ² map rather than the first scan's: a
    * second leak's neighbourhood on the first map is the first leak's slope. Top-3 within 1.5 m went from
    * 85% to 88% on the committed stores and stayed level on two held-out sets.
@@ -152,6 +160,7 @@ export const DEFAULT_LOCATOR_OPTIONS: LocatorOptions = {
   refinePrior: true,
   evidenceGate: true,
   relocatePasses: 0,
+  mixedRoomMode: true,
   ownSurface: true,
   minDeltaChi2: 25,
   supportRadiusM: 3,
