@@ -165,6 +165,7 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     prior,
     evidenceGate: o.evidenceGate,
     relocatePasses: o.relocatePasses,
+    tailReachM: o.tailReachM,
     credible: (c, column, _q, b, residual, delta) => {
       if (delta < o.minDeltaChi2) return false;
       const sup = support(column, b, residual);

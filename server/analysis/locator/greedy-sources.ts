@@ -41,6 +41,8 @@ export interface GreedyInput {
    * fitted, its own best cell can differ.
    */
   relocatePasses?: number;
+  /** Fitted sources within this distance of a stronger one are listed after the others, m (0 = off). */
+  tailReachM?: number;
   /** Judge credibility on the best-fitting cell before the prior picks among cells (see findSources). */
   evidenceGate?: boolean;
   credible: (cell: number, column: Float64Array, q: number, b: number, residual: Float64Array, delta: number) => boolean;
@@ -89,6 +91,11 @@ function blockAround(mask: Uint8Array, c: number, width: number, cellSize: numbe
       if ((i - ci) ** 2 + (j - cj) ** 2 <= r * r) mask[j * width + i] = 0;
     }
   }
+}
+
+function cellDist2(a: number, b: number, width: number): number {
+  const ai = a % width, bi = b % width;
+  return (ai - bi) ** 2 + ((a - ai) / width - (b - bi) / width) ** 2;
 }
 
 /** Sets mask to allowed[] within radiusM of cell c (0 elsewhere is left as is). */
@@ -211,6 +218,15 @@ export function findSources(input: GreedyInput): GreedyResult {
       if (!input.credible(c, column, firstScan.q[c], firstScan.b[c], residual0, firstScan.delta[c])) continue;
       sources.push({ cell: c, delta: firstScan.delta[c], column, alternate: true, q: firstScan.q[c], surface: firstScan.delta });
     }
+  }
+  if (input.tailReachM && input.tailReachM > 0) {
+    // A weaker fitted source within a stronger one's reach may be its far-field tail (which the
+    // truncated kernel cannot model) as much as a second leak: list it after the independent spots.
+    const reach2 = (input.tailReachM / input.cellSize) ** 2;
+    const fitted = sources.filter((x) => !x.alternate);
+    const tail = new Set(fitted.filter((x, k) => fitted.slice(0, k).some((st) => cellDist2(st.cell, x.cell, input.gridWidth) < reach2)));
+    const head = sources.filter((x) => !tail.has(x));
+    sources.splice(0, sources.length, ...head, ...sources.filter((x) => tail.has(x)));
   }
   return {
     sources,
