@@ -13,6 +13,7 @@ import { authRouter } from "./api/auth/auth.router";
 import { teamRouter } from "./api/team/team.router";
 import { invitationsRouter } from "./api/invitations/invitations.router";
 import { companyRouter } from "./api/company/company.router";
+import { customProfileRouter } from "./api/company/custom-profile.router";
 import { outboxRouter } from "./api/outbox/outbox.router";
 import { storesRouter } from "./api/stores/stores.router";
 import { detectorsRouter } from "./api/detectors/detectors.router";
@@ -69,6 +70,7 @@ export function createApp(ctx: AppContext): Express {
   api.use(invitationsRouter(ctx));
   api.use(teamRouter(ctx));
   api.use(companyRouter(ctx));
+  api.use(customProfileRouter(ctx));
   api.use(outboxRouter(ctx));
   api.use(storesRouter(ctx));
   api.use(detectorsRouter(ctx));

@@ -4,8 +4,8 @@ import { polygonCentroid } from "./geometry/polygon-area";
 import { GeodesicSearch } from "./grid/geodesic-distance";
 import { cellCentre, cellIndexOf, cellsInside, createPlanGrid, nearestFreeCell } from "./grid/plan-grid";
 import { gridRoute } from "./lag/grid-route";
-import { lagCorrect } from "./lag/lag-correct";
 import { responseNodes } from "./lag/response-nodes";
+import { walkLag } from "./lag/walk-lag";
 import { estimateBackground } from "./locator/background";
 import { candidateNextCheck, candidateReason, type CandidateFacts } from "./locator/candidate-words";
 import { benignSource, fansMixing, oneSidedPass, sparseCoverage } from "./locator/diagnostics";
@@ -46,10 +46,8 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   const n = readings.length;
 
   // 1. lag correction along the walked route
-  const lagged = lagCorrect(readings, instrument.transportDelayS, instrument.timeConstantS, {
-    route: gridRoute(grid),
-    walkSpeedMps: o.walkSpeedMps > 0 ? o.walkSpeedMps : undefined,
-  });
+  // (the same walkLag the Walk screen's lag hint calls, over the same grid route)
+  const lagged = walkLag(readings, instrument.transportDelayS, instrument.timeConstantS, gridRoute(grid), o.walkSpeedMps);
   const xs = new Float64Array(n);
   const ys = new Float64Array(n);
   const y = new Float64Array(n);

@@ -27,6 +27,14 @@ export const leakCheckInput = z.object({
   note: z.string({ error: "must be text" }).trim().max(2000, "must be at most 2,000 characters").default(""),
 });
 
+/** Mark a chronic-leaker report filed for one calendar year; the member recording it signs for it. */
+export const chronicReportInput = z.object({
+  year: z.int("must be a whole calendar year").min(2000, "must be 2000 or later").max(2100, "must be 2100 or earlier"),
+  filedOn: isoDate.optional(),
+  reference: z.string({ error: "must be text" }).trim().max(200, "must be at most 200 characters").default(""),
+  note: z.string({ error: "must be text" }).trim().max(2000, "must be at most 2,000 characters").default(""),
+});
+
 export const chargeAddition = z.object({
   id: z.uuid(),
   systemId: z.uuid(),
@@ -59,7 +67,7 @@ export const leakRateRow = z.object({
   repairDue: z.string().nullable(),
 });
 
-export const dueItemKinds = ["repair", "follow-up-test", "recheck-after-repair", "inspection", "chronic-leaker-report", "detector-check"] as const;
+export const dueItemKinds = ["repair", "initial-test", "follow-up-test", "recheck-after-repair", "inspection", "chronic-leaker-report", "detector-check"] as const;
 export const dueItem = z.object({
   kind: z.enum(dueItemKinds),
   what: z.string(),
@@ -87,7 +95,15 @@ export const systemRecords = z.object({
   leakRates: z.array(leakRateRow),
   latest: leakRateRow.nullable(),
   overThreshold: z.boolean(),
-  chronic: z.array(z.object({ year: z.number(), addedKg: z.number(), percent: z.number(), chronic: z.boolean(), reportDue: z.string().nullable() })),
+  chronic: z.array(
+    z.object({
+      year: z.number(), addedKg: z.number(), percent: z.number(), chronic: z.boolean(), reportDue: z.string().nullable(),
+      /** The report marked filed: the day (store calendar), who signed for it, the authority's reference. */
+      filed: z.object({ on: z.string(), by: z.string(), reference: z.string(), note: z.string(), recordedAt: z.string() }).nullable(),
+    }),
+  ),
+  /** What was done to these records beyond the entries themselves (filed reports), newest first. */
+  audit: z.array(z.object({ at: z.string(), by: z.string(), action: z.string(), summary: z.string() })),
   /** The chronic-leaker rule of the part in force, from the profile data (null when none applies). */
   chronicRule: z.object({ percent: z.number(), reportBy: z.string(), source: z.string() }).nullable(),
   co2e: z.object({ known: z.boolean(), tonnes: z.number().nullable(), gwp: z.number().nullable(), source: z.string() }),
@@ -125,6 +141,8 @@ export const todayResponse = z.object({
     z.object({
       id: z.uuid(), name: z.string(), storeId: z.uuid(), storeName: z.string(), refrigerantId: z.string(),
       latestPercent: z.number().nullable(), latestOn: z.string().nullable(), thresholdPercent: z.number().nullable(), breachOpen: z.boolean(),
+      /** The latest rate is above the threshold but a repair was recorded since (no action due for it). */
+      repairedSince: z.boolean().default(false),
       nextInspection: z.string().nullable(), link: z.string(),
     }),
   ),

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { levelScaleProblems } from "../domain/detectors/level-scale";
 
 export const SENSING_PRINCIPLES = ["heated-diode", "infrared", "other"] as const;
 export const PRINCIPLE_LABELS: Record<(typeof SENSING_PRINCIPLES)[number], string> = {
@@ -24,7 +25,17 @@ export const detectorInput = z.object({
   timeConstantS: z.number("must be a number").finite().min(0, "must be 0 or more").max(60, "must be at most 60 s").default(1.5),
   alarmPpm: z.number("must be a number").finite().positive("must be above 0").max(10000, "must be at most 10,000 ppm").default(2),
   lastCheckedOn: z.iso.date("must be a date (YYYY-MM-DD)").nullable().default(null),
-  levelScale: z.array(levelBand).max(20, "must have at most 20 levels").nullable().default(null),
+  levelScale: z
+    .array(levelBand)
+    .max(20, "must have at most 20 levels")
+    .superRefine((bands, ctx) => {
+      for (const [path, message] of Object.entries(levelScaleProblems(bands))) {
+        const [i, field] = path.split(".");
+        ctx.addIssue({ code: "custom", path: [Number(i), field], message });
+      }
+    })
+    .nullable()
+    .default(null),
 });
 export type DetectorInput = z.infer<typeof detectorInput>;
 

@@ -19,6 +19,7 @@ export type Permission =
   | "stores.read"
   | "stores.edit"
   | "plans.edit"
+  | "detectors.read"
   | "detectors.manage"
   | "sweeps.record"
   | "sweeps.review"
@@ -31,15 +32,16 @@ export type Permission =
 const GRANTS: Record<Role, readonly Permission[]> = {
   owner: [
     "members.read", "members.manage", "settings.manage", "outbox.read", "stores.read", "stores.edit",
-    "plans.edit", "detectors.manage", "sweeps.record", "sweeps.review", "findings.record", "findings.close",
+    "plans.edit", "detectors.read", "detectors.manage", "sweeps.record", "sweeps.review", "findings.record", "findings.close",
     "compliance.manage", "reports.send", "digest.send",
   ],
   "lead-tech": [
-    "members.read", "stores.read", "stores.edit", "plans.edit", "detectors.manage", "sweeps.record", "findings.record",
+    "members.read", "stores.read", "stores.edit", "plans.edit", "detectors.read", "detectors.manage", "sweeps.record", "findings.record",
   ],
-  technician: ["members.read", "stores.read", "sweeps.record", "findings.record"],
+  technician: ["members.read", "stores.read", "detectors.read", "sweeps.record", "findings.record"],
+  // Engineers read everything (PRODUCT.md), detectors included: their lag figures explain an analysis.
   engineer: [
-    "members.read", "outbox.read", "stores.read", "sweeps.review", "findings.record", "findings.close",
+    "members.read", "outbox.read", "stores.read", "detectors.read", "sweeps.review", "findings.record", "findings.close",
     "compliance.manage", "reports.send",
   ],
   // Read-only, and only for the stores named on the membership (enforced per store).

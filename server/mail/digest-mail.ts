@@ -1,4 +1,5 @@
 import type { DueItem } from "../contracts/compliance";
+import { readableSource } from "../domain/compliance/citations";
 
 const STATE_WORDS: Record<DueItem["state"], string> = { overdue: "OVERDUE", "due-today": "due today", "due-soon": "due soon", upcoming: "upcoming" };
 
@@ -7,7 +8,7 @@ export function digestMail(args: { companyName: string; localDate: string; items
   const lines = args.items.map((i) => {
     const where = [i.storeName, i.systemName].filter(Boolean).join(" · ") || "Company";
     const when = i.dueOn ? `${i.dueOn} (${STATE_WORDS[i.state]}${i.daysLeft !== null && i.daysLeft < 0 ? `, ${-i.daysLeft} days late` : ""})` : "no date on record (overdue)";
-    return [`- ${when}: ${i.what}`, `  ${where}`, `  Rule: ${i.source}`, `  Records: ${args.appUrl}${i.link}`].join("\n");
+    return [`- ${when}: ${i.what}`, `  ${where}`, `  Rule: ${readableSource(i.source)}`, `  Records: ${args.appUrl}${i.link}`].join("\n");
   });
   const subject = args.items.length
     ? `Plumeline: ${args.items.length} item${args.items.length === 1 ? "" : "s"} due in the next ${args.days} days – ${args.companyName}`

@@ -6,6 +6,7 @@
 import PDFDocument from "pdfkit";
 import type { SweepReportModel } from "../domain/reports/sweep-report-model";
 import { REPORT_FONTS } from "./fonts";
+import { readableSource } from "../domain/compliance/citations";
 
 const MARGIN = 48;
 const INK = "#1f2430";
@@ -166,7 +167,7 @@ export function buildSweepReportPdf(m: SweepReportModel): Promise<Buffer> {
   heading(doc, "Safety");
   for (const c of m.cautions) {
     doc.font("regular").fontSize(9.5).fillColor(INK).text(`• ${c.text}`, { indent: 4 });
-    doc.fontSize(8).fillColor(MUTED).text(c.source, { indent: 12 });
+    if (readableSource(c.source)) doc.fontSize(8).fillColor(MUTED).text(readableSource(c.source), { indent: 12 });
   }
 
   const range = doc.bufferedPageRange();

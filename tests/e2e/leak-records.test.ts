@@ -71,6 +71,9 @@ it("a technician confirms a leak and records charge added; the leak rate and Tod
   await tech.getByLabel("Reason").fill("Recharge after finding the flare leak");
   await tech.getByRole("button", { name: "Record charge added" }).click();
   await tech.getByText("60.8 % — above threshold").waitFor();
+  // The system's records cite the rules ("40 CFR 84.106"), never our internal source tags.
+  await tech.getByText(/Threshold source: 40 CFR 82\.157\(c\); 40 CFR 84\.106/).waitFor();
+  expect(await tech.locator("body").innerText()).not.toMatch(/\[(S:|M\]|D\])/);
 
   // The owner's Today: repair due 30 days after the rate was learned, i.e. in 5 days.
   const ownerContext = await newContext(browser);
@@ -102,7 +105,25 @@ it("a technician confirms a leak and records charge added; the leak rate and Tod
   await openToday(owner);
   await owner.getByText("No system has an unrepaired leak rate above its threshold.").waitFor();
   expect(await owner.getByRole("link", { name: /Repair: leak rate/ }).count()).toBe(0);
-  await owner.getByRole("cell", { name: "repaired" }).waitFor();
+  await owner.getByRole("cell", { name: "repaired", exact: true }).waitFor();
+  await owner.getByText("above the threshold; repaired since").waitFor(); // the 60.8 % stays on the system line, marked repaired
+
+  // The repair brings its verification tests onto Today, dated on the store's calendar: the
+  // initial test on the repair day ("as soon as practicable" [S:R8]), then the follow-up within
+  // 10 days of it (standards.md §1 [M]).
+  const today = localDay(0);
+  await owner.getByRole("link", { name: `Initial verification test after the repair of ${today}` }).waitFor();
+  await tech.getByRole("button", { name: "Record the initial verification test", exact: true }).click();
+  await tech.getByLabel("Result").selectOption("passed");
+  await tech.getByRole("button", { name: "Save: record the initial verification test" }).click();
+  await tech.getByText(`Follow-up verification test after the initial test of ${today}: ${localDay(-10)}`).waitFor();
+  await owner.reload(); // the owner was already on Today
+  await owner.getByRole("heading", { name: "Systems", exact: true }).waitFor();
+  await owner.getByRole("link", { name: `Follow-up verification test after the initial test of ${today}` }).click();
+  await owner.waitForURL(/\/findings\//); // the item leads to the finding it comes from
+  await owner.getByRole("heading", { name: "Deadlines" }).waitFor();
+  // Sources read as citations, never as our internal tags.
+  expect(await owner.locator("body").innerText()).not.toMatch(/\[(S:|M\]|D\])/);
 
   expect(failures).toEqual([]);
   await techContext.close();

@@ -1,5 +1,6 @@
 import type { Page } from "playwright-core";
-import { detectors } from "../../server/db/schema/index";
+import { asc, eq } from "drizzle-orm";
+import { detectors, readings } from "../../server/db/schema/index";
 import type { AppContext } from "../../server/context";
 import { seedDemoLayout } from "../../server/db/seed/demo-store-map";
 
@@ -45,4 +46,20 @@ export async function waitForServiceWorker(page: Page) {
       await new Promise((resolve) => navigator.serviceWorker.addEventListener("controllerchange", resolve, { once: true }));
     }
   });
+}
+
+/** A sweep's readings on the server, in the order they were taken. */
+export function storedReadings(ctx: AppContext, sweepId: string) {
+  return ctx.db.select().from(readings).where(eq(readings.sweepId, sweepId)).orderBy(asc(readings.takenAt));
+}
+
+/** Polls `read` until `ok` holds (the client syncs in the background), naming what it waited for. */
+export async function until<T>(what: string, read: () => Promise<T>, ok: (v: T) => boolean, ms = 20_000): Promise<T> {
+  const end = Date.now() + ms;
+  for (;;) {
+    const v = await read();
+    if (ok(v)) return v;
+    if (Date.now() > end) throw new Error(`timed out waiting for ${what}; last value ${JSON.stringify(v)}`);
+    await new Promise((r) => setTimeout(r, 200));
+  }
 }

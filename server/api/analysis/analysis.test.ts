@@ -127,6 +127,28 @@ describe("GET /api/sweeps/:id/analysis", () => {
     expect(fresh.body.readings[2].ppm).toBe(40);
   });
 
+  it("a reading moved on the plan is an audited edit that marks the analysis stale; a move off the plan is refused by field", async () => {
+    const { id, readings } = await sweepWithReadings();
+    const eng = await as("engineer");
+    expect((await eng.get(`/api/sweeps/${id}/analysis`)).body.stale).toBe(false);
+    const tech = await as("technician");
+    const moved = readings[4] as { id: string; x: number; y: number };
+    const edit = await tech.patch(`/api/sweeps/${id}/readings/${moved.id}`, { x: moved.x + 0.5, y: 4.4, editedAt: at(600) });
+    expect(edit.status, JSON.stringify(edit.body)).toBe(200);
+    expect(edit.body.reading).toMatchObject({ x: moved.x + 0.5, y: 4.4 });
+    const stale = await eng.get(`/api/sweeps/${id}/analysis`);
+    expect(stale.body).toMatchObject({ stale: true, readingsRevision: 1, currentReadingsRevision: 2 });
+    const audit = (await eng.get(`/api/sweeps/${id}/audit`)).body.entries;
+    expect(audit).toHaveLength(1);
+    expect(audit[0]).toMatchObject({ action: "edit", readingId: moved.id, before: { x: moved.x, y: moved.y }, after: { x: moved.x + 0.5, y: 4.4 }, editedAt: at(600) });
+    // The plan is 30 m x 12 m: a position outside it is refused with the field and the reason.
+    const off = await tech.patch(`/api/sweeps/${id}/readings/${moved.id}`, { x: 31 });
+    expect(off.status).toBe(400);
+    expect(Object.keys(off.body.error.fields)).toEqual(["x"]);
+    const fresh = await eng.get(`/api/sweeps/${id}/analysis?wait=true`);
+    expect(fresh.body).toMatchObject({ stale: false, readingsRevision: 2 });
+  });
+
   it("keeps answering other requests while an analysis runs in a worker", async () => {
     // a large store so the locator runs long enough to overlap: 100 m × 60 m, 500 readings
     const owner = await as("owner");

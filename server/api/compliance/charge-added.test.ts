@@ -1,12 +1,12 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { agentFor, createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
-import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
+import { createTestApp, type Agent, type TestApp, signInOnce } from "../../../tests/helpers/test-app";
+import { seedCompany } from "../../../tests/helpers/fixtures";
 import type { Role } from "../../domain/roles";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;
 let other: Awaited<ReturnType<typeof seedCompany>>;
-const agents = new Map<string, Agent>();
+const signInOnceAs = signInOnce(() => t.app);
 
 beforeAll(async () => {
   t = await createTestApp();
@@ -15,14 +15,7 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-async function signedIn(role: Role, company = co): Promise<Agent> {
-  const key = `${company.company.id}:${role}`;
-  if (agents.has(key)) return agents.get(key)!;
-  const a = await agentFor(t.app);
-  expect((await a.post("/api/auth/sign-in", { email: company.people[role].email, password: PASSWORD })).status).toBe(200);
-  agents.set(key, a);
-  return a;
-}
+const signedIn = (role: Role, company = co): Promise<Agent> => signInOnceAs(company.people[role]);
 
 async function newSystem(extra: object = {}) {
   const lead = await signedIn("lead-tech");
@@ -69,7 +62,7 @@ describe("charge added and the leak rate through the API (US federal, annualizin
     expect(r.body.latest.repairDue).toBe("2026-09-29");
     expect(r.body.overThreshold).toBe(true);
     const repair = r.body.due.find((d: { kind: string }) => d.kind === "repair");
-    expect(repair).toMatchObject({ dueOn: "2026-09-29", systemId, link: `/systems/${systemId}` });
+    expect(repair).toMatchObject({ dueOn: "2026-09-29", systemId, link: `/systems/${systemId}#leak-rates` });
     expect(repair.source).toMatch(/30 days/);
     // Under 500 lb commercial, no automatic leak detection: yearly inspections from the first breach
     // of the run (3 Mar), the August breach resetting the clean count only [M].
@@ -121,6 +114,12 @@ describe("charge added and the leak rate through the API (US federal, annualizin
     await tech.post(`/api/findings/${f.id}/events`, { action: "repair", on: "2026-07-10" });
     const after = await tech.get(`/api/systems/${id}/records`);
     expect(after.body.due.filter((d: { kind: string }) => d.kind === "repair")).toEqual([]);
+    // The repair of 10 Jul asks for the initial verification test that day ([S:R8], as soon as practicable).
+    expect(after.body.due.filter((d: { kind: string }) => d.kind === "initial-test").map((d: { dueOn: string; link: string }) => [d.dueOn, d.link])).toEqual([["2026-07-10", `/findings/${f.id}`]]);
+    // Today keeps the 24.3 % on the system's line, marked repaired rather than open.
+    const row = (await tech.get("/api/today")).body.systems.find((s: { id: string }) => s.id === id);
+    expect(row).toMatchObject({ breachOpen: false, repairedSince: true });
+    expect(row.latestPercent).toBeCloseTo(24.333333, 5);
   });
 });
 

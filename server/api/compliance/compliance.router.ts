@@ -1,10 +1,10 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
-import { chargeAdditionInput, chargeCorrectionInput, chargeVoidInput, leakCheckInput } from "../../contracts/compliance";
+import { chargeAdditionInput, chargeCorrectionInput, chargeVoidInput, chronicReportInput, leakCheckInput } from "../../contracts/compliance";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
-import { addCharge, addLeakCheck, correctCharge, getSystemRecords, voidCharge } from "./records.service";
+import { addCharge, addLeakCheck, correctCharge, fileChronicReport, getSystemRecords, voidCharge } from "./records.service";
 
 const idParam = z.object({ id: z.uuid("must be a valid id") });
 
@@ -31,6 +31,11 @@ export function complianceRouter(ctx: AppContext): Router {
 
   router.post("/systems/:id/leak-checks", requireMember("findings.record"), validate(idParam, "params"), validate(leakCheckInput), async (req, res) => {
     res.status(201).json(await addLeakCheck(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
+  });
+
+  // Engineers and owners sign compliance filings.
+  router.post("/systems/:id/chronic-reports", requireMember("compliance.manage"), validate(idParam, "params"), validate(chronicReportInput), async (req, res) => {
+    res.status(201).json(await fileChronicReport(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
   });
 
   return router;

@@ -2,6 +2,17 @@ import type { DueItem } from "../../contracts/compliance";
 import { dueStatus } from "../../domain/compliance/deadlines";
 import type { SystemWithStatus } from "./system-records";
 
+/** Where on the system records page each kind of figure comes from. */
+const SECTION: Record<DueItem["kind"], string> = {
+  repair: "leak-rates",
+  "initial-test": "sys-findings",
+  "follow-up-test": "sys-findings",
+  "recheck-after-repair": "checks",
+  inspection: "checks",
+  "chronic-leaker-report": "chronic",
+  "detector-check": "checks",
+};
+
 /** A system's due dates as Today items, each linking to the records beneath it. */
 export function systemDueItems(s: SystemWithStatus, now: Date): DueItem[] {
   return s.status.due.map((d) => ({
@@ -16,6 +27,6 @@ export function systemDueItems(s: SystemWithStatus, now: Date): DueItem[] {
     systemName: s.system.name,
     findingId: d.findingId ?? null,
     detectorId: null,
-    link: d.findingId ? `/findings/${d.findingId}` : `/systems/${s.system.id}`,
+    link: d.findingId ? `/findings/${d.findingId}` : `/systems/${s.system.id}#${SECTION[d.kind]}`,
   }));
 }

@@ -1,8 +1,8 @@
-import { and, asc, eq, inArray, isNull } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, isNull } from "drizzle-orm";
 import type { z } from "zod";
 import type { AppContext } from "../../context";
-import type { ChargeAdditionView, SystemRecordsView, chargeAdditionInput, chargeCorrectionInput, leakCheckInput } from "../../contracts/compliance";
-import { chargeAdditions, findings, leakChecks, memberships, users } from "../../db/schema/index";
+import type { ChargeAdditionView, SystemRecordsView, chargeAdditionInput, chargeCorrectionInput, chronicReportInput, leakCheckInput } from "../../contracts/compliance";
+import { chargeAdditions, chronicLeakerReports, complianceAudit, findings, leakChecks, memberships, users } from "../../db/schema/index";
 import type { AssessedPoint } from "../../domain/compliance/assess-leak-rate";
 import type { LeakRatePart } from "../../domain/compliance/rule-profile";
 import { chargeToKg, companyGwpBases, toSystem } from "../systems/systems.service";
@@ -15,6 +15,7 @@ import { companyRules, statusesOf, systemWithStore } from "./system-records";
 type AdditionInput = z.output<typeof chargeAdditionInput>;
 type CorrectionInput = z.output<typeof chargeCorrectionInput>;
 type LeakCheckInput = z.output<typeof leakCheckInput>;
+type ChronicReportInput = z.output<typeof chronicReportInput>;
 
 /** The system and its store when the viewer may see them; 404 otherwise (never 403). */
 export async function visibleSystem(ctx: AppContext, viewer: Viewer, systemId: string) {
@@ -58,6 +59,17 @@ export async function getSystemRecords(ctx: AppContext, viewer: Viewer, systemId
     .innerJoin(users, eq(users.id, leakChecks.byId))
     .where(eq(leakChecks.systemId, systemId))
     .orderBy(asc(leakChecks.checkedOn), asc(leakChecks.recordedAt));
+  const reports = await ctx.db
+    .select({ r: chronicLeakerReports, by: users.name })
+    .from(chronicLeakerReports)
+    .innerJoin(users, eq(users.id, chronicLeakerReports.filedById))
+    .where(eq(chronicLeakerReports.systemId, systemId));
+  const audit = await ctx.db
+    .select({ a: complianceAudit, by: users.name })
+    .from(complianceAudit)
+    .innerJoin(users, eq(users.id, complianceAudit.byId))
+    .where(eq(complianceAudit.systemId, systemId))
+    .orderBy(desc(complianceAudit.at), desc(complianceAudit.id));
   const system = toSystem(row.system, await companyGwpBases(ctx, viewer.companyId));
   const lc = st.leakCheck;
   return {
@@ -70,7 +82,14 @@ export async function getSystemRecords(ctx: AppContext, viewer: Viewer, systemId
     latest: st.latest ? toRow(st.latest) : null,
     overThreshold: st.overThreshold,
     chronicRule: chronicRuleOf(rules.profile.leakRateParts.find((p) => p.id === (st.applicability.partId ?? st.latest?.partId)) ?? null),
-    chronic: st.chronic.map((y) => ({ year: y.year, addedKg: y.addedKg, percent: y.percent, chronic: y.chronic, reportDue: y.reportDue ?? null })),
+    chronic: st.chronic.map((y) => {
+      const f = reports.find((x) => x.r.year === y.year);
+      return {
+        year: y.year, addedKg: y.addedKg, percent: y.percent, chronic: y.chronic, reportDue: y.reportDue ?? null,
+        filed: f ? { on: f.r.filedOn, by: f.by, reference: f.r.reference, note: f.r.note, recordedAt: f.r.recordedAt.toISOString() } : null,
+      };
+    }),
+    audit: audit.map((x) => ({ at: x.a.at.toISOString(), by: x.by, action: x.a.action, summary: x.a.summary })),
     co2e: st.co2e.known ? { known: true, tonnes: st.co2e.tonnes, gwp: st.co2e.gwp, source: st.co2e.gwpSource } : { known: false, tonnes: null, gwp: null, source: st.co2e.reason },
     leakCheck: lc
       ? {
@@ -174,5 +193,38 @@ export async function addLeakCheck(ctx: AppContext, viewer: Viewer, userId: stri
   const { store } = await visibleSystem(ctx, viewer, systemId);
   const checkedOn = eventDay(input.checkedOn, store, "checkedOn");
   await ctx.db.insert(leakChecks).values({ companyId: viewer.companyId, systemId, checkedOn, leakFound: input.leakFound, note: input.note, byId: userId });
+  return getSystemRecords(ctx, viewer, systemId);
+}
+
+/**
+ * Marks the chronic-leaker report for a calendar year filed, signed by the member recording it,
+ * with an audit entry in the same transaction. Only a year the records show as chronic can be
+ * filed, and only once it is over: the report covers the whole year (40 CFR 82 subpart F /
+ * 84 subpart C, report by 1 March of the next year [S:R7]).
+ */
+export async function fileChronicReport(ctx: AppContext, viewer: Viewer, userId: string, systemId: string, input: ChronicReportInput) {
+  const { store } = await visibleSystem(ctx, viewer, systemId);
+  const filedOn = eventDay(input.filedOn, store, "filedOn");
+  const records = await getSystemRecords(ctx, viewer, systemId);
+  const year = records.chronic.find((y) => y.year === input.year);
+  if (!year?.chronic) {
+    throw badRequest(`Please check: year ${input.year} is not a chronic-leaker year of this system.`, { year: `is not a year in which this system reached the chronic-leaker share of its full charge` });
+  }
+  if (filedOn < `${input.year + 1}-01-01`) {
+    throw badRequest(`Please check: filedOn ${filedOn} is before the end of ${input.year}.`, { filedOn: `must be in ${input.year + 1} or later: the report covers the whole of ${input.year}` });
+  }
+  if (year.filed) throw conflict(`The report for ${input.year} was already marked filed on ${year.filed.on} by ${year.filed.by}.`);
+  await ctx.db.transaction(async (tx) => {
+    const inserted = await tx
+      .insert(chronicLeakerReports)
+      .values({ companyId: viewer.companyId, systemId, year: input.year, filedOn, reference: input.reference, note: input.note, filedById: userId })
+      .onConflictDoNothing()
+      .returning({ id: chronicLeakerReports.id });
+    if (inserted.length === 0) throw conflict(`The report for ${input.year} was already marked filed.`);
+    await tx.insert(complianceAudit).values({
+      companyId: viewer.companyId, systemId, action: "chronic-report-filed", byId: userId,
+      summary: `Chronic-leaker report for ${input.year} marked filed on ${filedOn}${input.reference ? ` (reference ${input.reference})` : ""}`,
+    });
+  });
   return getSystemRecords(ctx, viewer, systemId);
 }

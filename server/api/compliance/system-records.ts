@@ -1,6 +1,6 @@
-import { and, asc, eq, inArray } from "drizzle-orm";
+import { and, asc, desc, eq, inArray } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import { chargeAdditions, companies, findingEvents, findings, leakChecks, stores, systems } from "../../db/schema/index";
+import { chargeAdditions, chronicLeakerReports, companies, customRuleProfiles, findingEvents, findings, leakChecks, stores, systems } from "../../db/schema/index";
 import { profileFor } from "../../domain/compliance/company-profile";
 import type { ChargeAddition } from "../../domain/compliance/leak-rate";
 import type { LeakRateMethod, RuleProfile } from "../../domain/compliance/rule-profile";
@@ -16,9 +16,18 @@ export interface CompanyRules {
   method: LeakRateMethod;
 }
 
+/** The latest saved custom profile of a company, or null when none was saved. */
+export async function latestCustomProfile(ctx: AppContext, companyId: string) {
+  const [row] = await ctx.db.select().from(customRuleProfiles).where(eq(customRuleProfiles.companyId, companyId)).orderBy(desc(customRuleProfiles.savedAt), desc(customRuleProfiles.id)).limit(1);
+  return row ?? null;
+}
+
+/** The company's rules: the profile its setting names (its own stored one for "custom") and its method. */
 export async function companyRules(ctx: AppContext, companyId: string): Promise<CompanyRules> {
   const [c] = await ctx.db.select({ ruleProfile: companies.ruleProfile, method: companies.leakRateMethod }).from(companies).where(eq(companies.id, companyId));
-  return { profile: profileFor(c?.ruleProfile ?? "us-federal"), method: c?.method ?? "annualizing" };
+  const setting = c?.ruleProfile ?? "us-federal";
+  const custom = setting === "custom" ? ((await latestCustomProfile(ctx, companyId))?.profile ?? null) : null;
+  return { profile: profileFor(setting, custom), method: c?.method ?? "annualizing" };
 }
 
 export interface SystemWithStatus {
@@ -35,7 +44,7 @@ export interface SystemWithStatus {
 export async function statusesOf(ctx: AppContext, rules: CompanyRules, rows: { system: SystemRow; store: StoreRow }[], now = new Date()): Promise<SystemWithStatus[]> {
   if (rows.length === 0) return [];
   const ids = rows.map((r) => r.system.id);
-  const [adds, events, checks] = await Promise.all([
+  const [adds, events, checks, filed] = await Promise.all([
     ctx.db.select().from(chargeAdditions).where(inArray(chargeAdditions.systemId, ids)).orderBy(asc(chargeAdditions.addedOn), asc(chargeAdditions.recordedAt)),
     ctx.db
       .select({ systemId: findings.systemId, findingId: findingEvents.findingId, kind: findingEvents.kind, on: findingEvents.on, result: findingEvents.result, status: findingEvents.status })
@@ -44,6 +53,7 @@ export async function statusesOf(ctx: AppContext, rules: CompanyRules, rows: { s
       .where(inArray(findings.systemId, ids))
       .orderBy(asc(findingEvents.at), asc(findingEvents.id)),
     ctx.db.select().from(leakChecks).where(inArray(leakChecks.systemId, ids)),
+    ctx.db.select({ systemId: chronicLeakerReports.systemId, year: chronicLeakerReports.year }).from(chronicLeakerReports).where(inArray(chronicLeakerReports.systemId, ids)),
   ]);
   return rows.map(({ system, store }) => {
     const today = localDateOf(now, store.timeZone);
@@ -77,6 +87,7 @@ export async function statusesOf(ctx: AppContext, rules: CompanyRules, rows: { s
         pendingFollowUps,
         followUpVerifiedOn: mine.filter((e) => e.kind === "follow-up-test" && e.result === "passed").map((e) => e.on),
         leakChecks: checks.filter((c) => c.systemId === system.id).map((c) => ({ checkedOn: c.checkedOn, leakFound: c.leakFound })),
+        chronicReportsFiled: filed.filter((f) => f.systemId === system.id).map((f) => f.year),
       },
       today,
     );

@@ -1,8 +1,8 @@
 import pino from "pino";
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { agentFor, createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
-import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
+import { createTestApp, type Agent, type TestApp, signInOnce } from "../../../tests/helpers/test-app";
+import { seedCompany } from "../../../tests/helpers/fixtures";
 import { createDb } from "../../db/client";
 import { detectors, digestRuns, outboxMessages } from "../../db/schema/index";
 import type { AppContext } from "../../context";
@@ -15,16 +15,9 @@ let co: Awaited<ReturnType<typeof seedCompany>>;
 let other: Awaited<ReturnType<typeof seedCompany>>;
 let systemId: string;
 let findingId: string;
-const agents = new Map<string, Agent>();
+const signInOnceAs = signInOnce(() => t.app);
 
-async function signedIn(role: Role, company = co): Promise<Agent> {
-  const key = `${company.company.id}:${role}`;
-  if (agents.has(key)) return agents.get(key)!;
-  const a = await agentFor(t.app);
-  expect((await a.post("/api/auth/sign-in", { email: company.people[role].email, password: PASSWORD })).status).toBe(200);
-  agents.set(key, a);
-  return a;
-}
+const signedIn = (role: Role, company = co): Promise<Agent> => signInOnceAs(company.people[role]);
 
 const localToday = (zone: string, now = new Date()) => new Intl.DateTimeFormat("en-CA", { timeZone: zone, year: "numeric", month: "2-digit", day: "2-digit" }).format(now);
 const daysBefore = (date: string, days: number) => new Date(Date.parse(`${date}T00:00:00Z`) - days * 86_400_000).toISOString().slice(0, 10);
@@ -52,13 +45,13 @@ describe("Today", () => {
     const today = localToday("America/New_York");
     const repair = r.body.due.find((d: { kind: string }) => d.kind === "repair");
     // Learned 27 days ago; repair within 30 days [S:R4] → 3 days left.
-    expect(repair).toMatchObject({ systemId, daysLeft: 3, state: "due-soon", link: `/systems/${systemId}`, storeName: co.store.name });
+    expect(repair).toMatchObject({ systemId, daysLeft: 3, state: "due-soon", link: `/systems/${systemId}#leak-rates`, storeName: co.store.name });
     expect(repair.source).toMatch(/40 CFR 84/);
-    expect(r.body.overThreshold).toEqual([expect.objectContaining({ systemId, thresholdPercent: 20, on: daysBefore(today, 27), link: `/systems/${systemId}` })]);
+    expect(r.body.overThreshold).toEqual([expect.objectContaining({ systemId, thresholdPercent: 20, on: daysBefore(today, 27), link: `/systems/${systemId}#leak-rates` })]);
     expect(r.body.overThreshold[0].percent).toBeCloseTo((5 / 100 / (30 / 365)) * 100, 9);
     expect(r.body.openFindings).toEqual([expect.objectContaining({ id: findingId, status: "confirmed", deadline: repair.dueOn, link: `/findings/${findingId}` })]);
     // Calibrated 28 days ago, company interval 30 days → due in 2 days (common practice).
-    expect(r.body.due.find((d: { kind: string }) => d.kind === "detector-check")).toMatchObject({ daysLeft: 2, state: "due-soon", link: "/detectors" });
+    expect(r.body.due.find((d: { kind: string }) => d.kind === "detector-check")).toMatchObject({ daysLeft: 2, state: "due-soon", link: expect.stringMatching(/^\/detectors#detector-[0-9a-f-]{36}$/) });
   });
 
   it("filters by store, shows store contacts their store only (no detectors), and 404s a stranger's store", async () => {
@@ -104,6 +97,9 @@ describe("the daily digest", () => {
       expect(mail[0].subject).toMatch(/due in the next 7 days/);
       expect(mail[0].text).toContain("Repair: leak rate");
       expect(mail[0].text).toContain(`/systems/${systemId}`);
+      // Rules read as citations in the e-mail, never as internal tags.
+      expect(mail[0].text).toContain("repair within 30 days of learning of the breach");
+      expect(mail[0].text).not.toMatch(/\[(S:|M\]|D\])/);
       expect(mail[0].text).toMatch(/Calibration \/ bump check: Heated-diode sniffer/);
       const runs = await t.ctx.db.select().from(digestRuns).where(eq(digestRuns.companyId, co.company.id));
       expect(runs).toHaveLength(1);

@@ -46,7 +46,7 @@ export async function today(ctx: AppContext, viewer: Viewer, filter: { storeId?:
         kind: "detector-check", what: st.checkDueOn ? `Calibration / bump check: ${d.name}` : `Calibration / bump check: ${d.name} (never recorded)`,
         dueOn: st.checkDueOn, ...ds,
         source: `company setting: every ${c.days} days (common practice, no published source)`,
-        storeId: null, storeName: null, systemId: null, systemName: null, findingId: null, detectorId: d.id, link: "/detectors",
+        storeId: null, storeName: null, systemId: null, systemName: null, findingId: null, detectorId: d.id, link: `/detectors#detector-${d.id}`,
       });
     }
   }
@@ -61,7 +61,7 @@ export async function today(ctx: AppContext, viewer: Viewer, filter: { storeId?:
       return {
         systemId: s.system.id, systemName: s.system.name, storeId: s.store.id, storeName: s.store.name, refrigerantId: s.system.refrigerantId,
         percent: p.percent, thresholdPercent: p.thresholdPercent!, on: p.date, partTitle: part?.title ?? "",
-        source: part ? part.thresholds[s.system.applianceType].source : "", link: `/systems/${s.system.id}`,
+        source: part ? part.thresholds[s.system.applianceType].source : "", link: `/systems/${s.system.id}#leak-rates`,
       };
     });
 
@@ -96,6 +96,7 @@ export async function today(ctx: AppContext, viewer: Viewer, filter: { storeId?:
         id: s.system.id, name: s.system.name, storeId: s.store.id, storeName: s.store.name, refrigerantId: s.system.refrigerantId,
         latestPercent: s.status.latest?.percent ?? null, latestOn: s.status.latest?.date ?? null,
         thresholdPercent: s.status.latest?.thresholdPercent ?? s.status.applicability.thresholdPercent, breachOpen: s.status.unrepairedBreach !== null,
+        repairedSince: s.status.overThreshold && s.status.unrepairedBreach === null,
         nextInspection: s.status.nextInspection?.dueOn ?? null, link: `/systems/${s.system.id}`,
       }))
       .sort((a, b) => a.storeName.localeCompare(b.storeName) || a.name.localeCompare(b.name)),

@@ -12,10 +12,11 @@ const listQuery = z.object({ includeArchived: z.enum(["true", "false"]).default(
 export function detectorsRouter(ctx: AppContext): Router {
   const router = Router();
 
-  router.get("/detectors", requireMember("sweeps.record"), validate(listQuery, "query"), async (req, res) => {
+  // Reading needs only detectors.read (every role but the store contact, who sees only their store's reports).
+  router.get("/detectors", requireMember("detectors.read"), validate(listQuery, "query"), async (req, res) => {
     res.json({ detectors: await listDetectors(ctx, member(req).companyId, res.locals.query.includeArchived === "true") });
   });
-  router.get("/detectors/:id", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
+  router.get("/detectors/:id", requireMember("detectors.read"), validate(idParam, "params"), async (req, res) => {
     res.json(await getDetector(ctx, member(req).companyId, res.locals.params.id));
   });
   router.post("/detectors", requireMember("detectors.manage"), validate(detectorInput), async (req, res) => {

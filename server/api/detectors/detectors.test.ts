@@ -49,6 +49,38 @@ describe("detectors", () => {
     expect((await (await as("technician")).post("/api/detectors", { name: "X", principle: "infrared" })).status).toBe(403);
     expect((await (await as("engineer")).post("/api/detectors", { name: "X", principle: "infrared" })).status).toBe(403);
     expect((await (await as("store-contact")).get("/api/detectors")).status).toBe(403);
+    // Engineers read them: detector calibration checks are on their Today screen.
+    expect((await (await as("engineer")).get("/api/detectors")).status).toBe(200);
+  });
+
+  it("engineers read the detectors (PRODUCT.md: engineers read everything); store contacts read none", async () => {
+    const made = await (await as("lead-tech")).post("/api/detectors", { name: "Bench IR", principle: "infrared" });
+    const engineer = await as("engineer");
+    const list = await engineer.get("/api/detectors");
+    expect(list.status).toBe(200);
+    expect(list.body.detectors.map((d: { id: string }) => d.id)).toContain(made.body.id);
+    expect((await engineer.get(`/api/detectors/${made.body.id}`)).status).toBe(200);
+    expect((await (await as("technician")).get(`/api/detectors/${made.body.id}`)).status).toBe(200);
+    expect((await (await as("store-contact")).get(`/api/detectors/${made.body.id}`)).status).toBe(403);
+  });
+
+  it("refuses a level scale whose bands overlap or run downwards, naming the band and field", async () => {
+    const lead = await as("lead-tech");
+    const bad = await lead.post("/api/detectors", {
+      name: "LED sniffer",
+      principle: "heated-diode",
+      levelScale: [{ level: "1", minPpm: 3, maxPpm: 15 }, { level: "2", minPpm: 10, maxPpm: 60 }, { level: "3", minPpm: 5, maxPpm: null }],
+    });
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.body.error.fields).sort()).toEqual(["levelScale.1.minPpm", "levelScale.2.minPpm"]);
+    expect(bad.body.error.fields["levelScale.1.minPpm"]).toMatch(/must not overlap level 1/);
+    const good = await lead.post("/api/detectors", {
+      name: "LED sniffer",
+      principle: "heated-diode",
+      levelScale: [{ level: "1", minPpm: 3, maxPpm: 15 }, { level: "2", minPpm: 15, maxPpm: 60 }, { level: "3", minPpm: 60, maxPpm: null }],
+    });
+    expect(good.status, JSON.stringify(good.body)).toBe(201);
+    expect(good.body.levelScale).toHaveLength(3);
   });
 
   it("never shows another company's detector", async () => {

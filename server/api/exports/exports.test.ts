@@ -3,6 +3,7 @@ import { PDFDocument } from "pdf-lib";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { agentFor, createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
 import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
+import { pdfText } from "../../../tests/helpers/pdf-text";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;
@@ -66,6 +67,10 @@ describe("records export", () => {
     expect(pdf.getTitle()).toBe("Leak-rate statement – Rack A (MT)");
     // Embedded TrueType subsets are named "ABCDEF+AtkinsonHyperlegible-…" (ISO 32000-1 §9.6.4).
     expect(bytes.toString("latin1")).toMatch(/\/BaseFont \/[A-Z]{6}\+AtkinsonHyperlegible-Regular/);
+    // Rules are cited for readers ("40 CFR 84.106"); our internal source tags stay out of the statement.
+    const text = (await pdfText(bytes)).join(" ").replace(/\s+/g, " ");
+    expect(text).toContain("40 CFR 82.157(c); 40 CFR 84.106");
+    expect(text).not.toMatch(/\[(S:|M\]|D\])/);
     const stranger = await agentFor(t.app);
     await stranger.post("/api/auth/sign-in", { email: other.people.owner.email, password: PASSWORD });
     expect((await stranger.get(`/api/systems/${systemId}/leak-rate-statement.pdf`)).status).toBe(404);

@@ -3,6 +3,7 @@ import type { SystemRecordsView } from "../../contracts/compliance";
 import type { FindingDetail } from "../../contracts/finding-actions";
 import { APPLIANCE_TYPE_NAMES } from "../../contracts/systems";
 import { statementFonts } from "./fonts";
+import { readableSource } from "../../domain/compliance/citations";
 
 const KG_PER_LB = 0.45359237; // NIST SP 811, appendix B.8
 
@@ -34,13 +35,13 @@ export function leakRateStatementPdf(r: SystemRecordsView, findingList: FindingD
   h("System");
   line(`Refrigerant ${r.system.refrigerantId} (safety class ${r.system.refrigerant.safetyClass}${r.system.refrigerant.gwp ? `, GWP ${r.system.refrigerant.gwp.value} on ${r.system.refrigerant.gwp.basis}` : ""}); full charge ${mass(r.system.fullChargeKg)}.`);
   line(`${APPLIANCE_TYPE_NAMES[r.system.applianceType]}; automatic leak detection: ${r.system.automaticLeakDetection ? "yes" : "no"}.`);
-  if (r.co2e.known && r.co2e.tonnes !== null) line(`CO2-equivalent of the charge: ${r.co2e.tonnes.toFixed(2)} t (kg × GWP / 1000; GWP source ${r.co2e.source}).`);
+  if (r.co2e.known && r.co2e.tonnes !== null) line(`CO2-equivalent of the charge: ${r.co2e.tonnes.toFixed(2)} t (kg × GWP / 1000; GWP source ${readableSource(r.co2e.source)}).`);
 
   h("Rule profile");
   line(`${r.profile.name}; leak-rate method: ${r.profile.method === "annualizing" ? "annualizing" : "rolling average"}.`);
-  line(r.applicability.applies ? `Applies: ${r.applicability.reason}. Threshold ${r.applicability.thresholdPercent} % per year (${r.applicability.thresholdSource}).` : `No leak-rate threshold applies: ${r.applicability.reason}.`);
+  line(r.applicability.applies ? `Applies: ${r.applicability.reason}. Threshold ${r.applicability.thresholdPercent} % per year (${readableSource(r.applicability.thresholdSource ?? "")}).` : `No leak-rate threshold applies: ${r.applicability.reason}.`);
   if (r.leakCheck) line(`Leak checks: ${r.leakCheck.reason}. Without leak detection every ${r.leakCheck.withoutLdsMonths ?? "–"} months, with it every ${r.leakCheck.withLdsMonths ?? "–"} months.`);
-  if (r.nextInspection) line(`Next inspection due ${r.nextInspection.dueOn} (${r.nextInspection.reason}).`);
+  if (r.nextInspection) line(`Next inspection due ${r.nextInspection.dueOn} (${r.nextInspection.reason}; ${readableSource(r.nextInspection.source)}).`);
 
   h("Leak rate at every addition");
   const cols = [48, 118, 190, 262, 330, 400, 470];
@@ -66,6 +67,15 @@ export function leakRateStatementPdf(r: SystemRecordsView, findingList: FindingD
     48,
   ).fillColor("black").fontSize(9.5);
 
+  if (r.chronic.length) {
+    h("Added per calendar year");
+    for (const y of r.chronic) {
+      const status = y.chronic ? (y.filed ? `chronic leaker; report filed on ${y.filed.on} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}` : `chronic leaker; report due ${y.reportDue}`) : "";
+      line(`${y.year}: ${mass(y.addedKg)}, ${y.percent.toFixed(1)} % of the full charge${status ? ` — ${status}` : ""}.`);
+    }
+    if (r.chronicRule) line(`Chronic leaker from ${r.chronicRule.percent} % of the full charge in a calendar year, reported by ${r.chronicRule.reportBy} (${readableSource(r.chronicRule.source)}).`);
+  }
+
   const voided = r.additions.filter((a) => a.voided);
   if (voided.length) {
     h("Corrected or voided entries (kept for the audit trail)");
@@ -81,11 +91,11 @@ export function leakRateStatementPdf(r: SystemRecordsView, findingList: FindingD
 
   if (r.due.length) {
     h("Due");
-    for (const d of r.due) line(`${d.dueOn ?? "no date"} (${d.state}): ${d.what}. Rule: ${d.source}`);
+    for (const d of r.due) line(`${d.dueOn ?? "no date"} (${d.state}): ${d.what}. Rule: ${readableSource(d.source)}`);
   }
 
   h("Record keeping");
-  line(`Keep these records for at least ${r.profile.retentionYears} years (${r.profile.retentionSource}).`);
+  line(`Keep these records for at least ${r.profile.retentionYears} years (${readableSource(r.profile.retentionSource)}).`);
   line("Only certified technicians attach gauges or add or remove refrigerant (in the US, EPA Section 608). Local codes and licensed practice govern.");
   doc.end();
   return done;

@@ -6,7 +6,8 @@ const KG_PER_LB = 0.45359237; // NIST SP 811, appendix B.8
 
 /**
  * One CSV of a system's records: every charge-added entry (voided ones too, with who voided them
- * and why: the audit trail) with the leak rate computed at it, then every finding step.
+ * and why: the audit trail) with the leak rate computed at it, every finding step and every
+ * chronic-leaker report marked filed.
  */
 export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[]): string {
   const rateAt = new Map(r.leakRates.flatMap((p) => p.additionIds.map((id) => [id, p] as const)));
@@ -32,6 +33,15 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[]): 
         finding_id: f.id, corrects: "", voided: "", status: e.status, component: f.component ?? "", recorded_by: e.by, recorded_at: e.at, entry_id: e.id,
       });
     }
+  }
+  for (const y of r.chronic) {
+    if (!y.filed) continue;
+    rows.push({
+      record: `chronic-leaker report for ${y.year} filed`, date: y.filed.on, system: r.system.name, refrigerant: r.system.refrigerantId,
+      amount_kg: y.addedKg.toFixed(4), amount_lb: (y.addedKg / KG_PER_LB).toFixed(3), entered: "", technician: y.filed.by, reason: y.filed.reference ? `reference ${y.filed.reference}` : y.filed.note, excluded: "",
+      leak_rate_percent: "", method: "", threshold_percent: "", exceeds: "", repair_due: "",
+      finding_id: "", corrects: "", voided: "", status: "", component: "", recorded_by: y.filed.by, recorded_at: y.filed.recordedAt, entry_id: "",
+    });
   }
   rows.sort((x, y) => String(x.date).localeCompare(String(y.date)));
   return Papa.unparse(rows, { newline: "\r\n" }); // RFC 4180 line ends

@@ -3,8 +3,8 @@ import fs from "node:fs/promises";
 import os from "node:os";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { agentFor, createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
-import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
+import { createTestApp, type Agent, type TestApp, signInOnce } from "../../../tests/helpers/test-app";
+import { seedCompany } from "../../../tests/helpers/fixtures";
 import { makeJpeg } from "../../../tests/helpers/plan-images";
 import type { Role } from "../../domain/roles";
 
@@ -13,7 +13,7 @@ let uploads: string;
 let co: Awaited<ReturnType<typeof seedCompany>>;
 let other: Awaited<ReturnType<typeof seedCompany>>;
 let systemId: string;
-const agents = new Map<string, Agent>();
+const signInOnceAs = signInOnce(() => t.app);
 
 beforeAll(async () => {
   uploads = await fs.mkdtemp(path.join(os.tmpdir(), "plumeline-findings-"));
@@ -28,15 +28,7 @@ afterAll(async () => {
   await fs.rm(uploads, { recursive: true, force: true });
 });
 
-async function signedIn(role: Role, company = co): Promise<Agent> {
-  const key = `${company.company.id}:${role}`;
-  const known = agents.get(key);
-  if (known) return known;
-  const a = await agentFor(t.app);
-  expect((await a.post("/api/auth/sign-in", { email: company.people[role].email, password: PASSWORD })).status).toBe(200);
-  agents.set(key, a);
-  return a;
-}
+const signedIn = (role: Role, company = co): Promise<Agent> => signInOnceAs(company.people[role]);
 
 const newFinding = (extra: object = {}) => ({ systemId, component: "flare", note: "Bubbles at the flare nut", ...extra });
 

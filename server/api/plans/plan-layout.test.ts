@@ -3,8 +3,8 @@ import fs from "node:fs/promises";
 import os from "node:os";
 import path from "node:path";
 import { randomUUID } from "node:crypto";
-import { agentFor, createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
-import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
+import { createTestApp, type Agent, type TestApp, signIn } from "../../../tests/helpers/test-app";
+import { seedCompany } from "../../../tests/helpers/fixtures";
 import { makePng } from "../../../tests/helpers/plan-images";
 import type { Fixture } from "../../contracts/fixtures";
 import type { Role } from "../../domain/roles";
@@ -28,11 +28,7 @@ afterAll(async () => {
   await fs.rm(uploads, { recursive: true, force: true });
 });
 
-async function signedIn(role: Role, company = co): Promise<Agent> {
-  const a = await agentFor(t.app);
-  expect((await a.post("/api/auth/sign-in", { email: company.people[role].email, password: PASSWORD })).status).toBe(200);
-  return a;
-}
+const signedIn = (role: Role, company = co): Promise<Agent> => signIn(t.app, company.people[role]);
 
 async function newStore(a: Agent, name: string): Promise<string> {
   return (await a.post("/api/stores", { name, timeZone: "America/Chicago" })).body.id;

@@ -5,8 +5,8 @@ import path from "node:path";
 import { count, eq } from "drizzle-orm";
 import { imageSize } from "image-size";
 import { plans } from "../../db/schema/index";
-import { agentFor, createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
-import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
+import { agentFor, createTestApp, type Agent, type TestApp, signIn } from "../../../tests/helpers/test-app";
+import { seedCompany } from "../../../tests/helpers/fixtures";
 import { makeJpeg, makePng, pngHeaderOnly, withExifOrientation } from "../../../tests/helpers/plan-images";
 import { createDiskStorage } from "../../storage/disk-storage";
 import type { Role } from "../../domain/roles";
@@ -30,11 +30,7 @@ beforeEach(() => {
   t.ctx.storage = undefined;
 });
 
-async function signedIn(role: Role, company = co): Promise<Agent> {
-  const a = await agentFor(t.app);
-  expect((await a.post("/api/auth/sign-in", { email: company.people[role].email, password: PASSWORD })).status).toBe(200);
-  return a;
-}
+const signedIn = (role: Role, company = co): Promise<Agent> => signIn(t.app, company.people[role]);
 
 function upload(a: Agent, storeId: string, data: Buffer, filename: string) {
   return a.agent.post(`/api/stores/${storeId}/plans`).set("X-CSRF-Token", a.csrf).attach("image", data, filename);

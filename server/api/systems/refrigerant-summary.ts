@@ -1,16 +1,7 @@
 import type { Caution, RefrigerantSummary } from "../../contracts/systems";
-import { EU_FGAS_PROFILE } from "../../domain/compliance/eu-fgas-profile";
-import { US_FEDERAL_PROFILE } from "../../domain/compliance/us-federal-profile";
 import { gwpOf } from "../../domain/refrigerants/gwp";
 import type { GwpBasis, Refrigerant } from "../../domain/refrigerants/types";
 import { cautionsFor } from "../../domain/safety/cautions";
-
-type RuleProfileId = "us-federal" | "eu-fgas" | "custom";
-
-/** The GWP bases of the company's rule profile; a custom profile starts from the US federal one. */
-export function gwpBasesFor(profile: RuleProfileId): readonly GwpBasis[] {
-  return profile === "eu-fgas" ? EU_FGAS_PROFILE.gwpBases.value : US_FEDERAL_PROFILE.gwpBases.value;
-}
 
 export function summarizeRefrigerant(r: Refrigerant, bases: readonly GwpBasis[]): RefrigerantSummary {
   const gwp = gwpOf(r, bases);

@@ -1,16 +1,17 @@
 import { and, asc, eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import type { ChargeInput, System, SystemInput, SystemUpdateInput } from "../../contracts/systems";
-import { companies, systems } from "../../db/schema/index";
+import { systems } from "../../db/schema/index";
+import { companyRules } from "../compliance/system-records";
 import { findRefrigerant } from "../../domain/refrigerants/catalogue";
-import type { Refrigerant } from "../../domain/refrigerants/types";
+import type { GwpBasis, Refrigerant } from "../../domain/refrigerants/types";
 import { KG_PER_POUND } from "../../domain/units/mass";
 import { badRequest, notFound } from "../../lib/http-error";
 import { loadVisibleStore, type Viewer } from "../stores/store-access";
-import { gwpBasesFor, refrigerantCautions, summarizeRefrigerant } from "./refrigerant-summary";
+import { refrigerantCautions, summarizeRefrigerant } from "./refrigerant-summary";
 
 type SystemRow = typeof systems.$inferSelect;
-type Bases = ReturnType<typeof gwpBasesFor>;
+type Bases = readonly GwpBasis[];
 
 /** kg as stored; lb converted at exactly 0.45359237 kg/lb (NIST SP 811, appendix B.8). */
 export function chargeToKg(charge: ChargeInput): number {
@@ -27,9 +28,9 @@ function knownRefrigerant(id: string): Refrigerant {
   return r;
 }
 
+/** The GWP bases of the profile the company works under (its own, for a custom profile). */
 export async function companyGwpBases(ctx: AppContext, companyId: string): Promise<Bases> {
-  const [c] = await ctx.db.select({ ruleProfile: companies.ruleProfile }).from(companies).where(eq(companies.id, companyId));
-  return gwpBasesFor(c?.ruleProfile ?? "us-federal");
+  return (await companyRules(ctx, companyId)).profile.gwpBases.value;
 }
 
 export function toSystem(row: SystemRow, bases: Bases): System {

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { agentFor, createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
-import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
+import { createTestApp, type Agent, type TestApp, signIn } from "../../../tests/helpers/test-app";
+import { seedCompany } from "../../../tests/helpers/fixtures";
 import type { Role } from "../../domain/roles";
 
 let t: TestApp;
@@ -14,11 +14,7 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-async function signedIn(role: Role, company = co): Promise<Agent> {
-  const a = await agentFor(t.app);
-  expect((await a.post("/api/auth/sign-in", { email: company.people[role].email, password: PASSWORD })).status).toBe(200);
-  return a;
-}
+const signedIn = (role: Role, company = co): Promise<Agent> => signIn(t.app, company.people[role]);
 
 const rack = { name: "Rack A (medium temp)", refrigerantId: "R-448A", fullCharge: { value: 500, unit: "lb" }, applianceType: "commercial-refrigeration", automaticLeakDetection: true };
 

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { desc, eq } from "drizzle-orm";
 import { outboxMessages } from "../../db/schema/index";
-import { agentFor, createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
+import { agentFor, createTestApp, type Agent, type TestApp, signIn } from "../../../tests/helpers/test-app";
 import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 import type { Role } from "../../domain/roles";
 
@@ -16,12 +16,7 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-async function signedIn(role: Role, company = co): Promise<Agent> {
-  const a = await agentFor(t.app);
-  const res = await a.post("/api/auth/sign-in", { email: company.people[role].email, password: PASSWORD });
-  expect(res.status).toBe(200);
-  return a;
-}
+const signedIn = (role: Role, company = co): Promise<Agent> => signIn(t.app, company.people[role]);
 
 async function latestMailTo(email: string) {
   const [m] = await t.ctx.db.select().from(outboxMessages).where(eq(outboxMessages.to, [email])).orderBy(desc(outboxMessages.receivedAt)).limit(1);

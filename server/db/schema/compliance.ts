@@ -1,4 +1,5 @@
-import { boolean, date, doublePrecision, index, integer, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import { boolean, date, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import type { RuleProfile } from "../../domain/compliance/rule-profile";
 import { companies } from "./companies";
 import { findings } from "./findings";
 import { systems } from "./systems";
@@ -66,4 +67,57 @@ export const digestRuns = pgTable(
     sentAt: timestamp({ withTimezone: true }),
   },
   (t) => [uniqueIndex("digest_runs_company_date").on(t.companyId, t.localDate)],
+);
+
+/**
+ * A company's custom rule profile (thresholds, deadlines, intervals, each with its source), kept
+ * as data because regulations and company policies change. One row per save: the latest row is
+ * in force, the earlier ones show which rules applied when.
+ */
+export const customRuleProfiles = pgTable(
+  "custom_rule_profiles",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
+    profile: jsonb().$type<RuleProfile>().notNull(),
+    savedById: uuid().notNull().references(() => users.id),
+    savedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("custom_rule_profiles_company").on(t.companyId, t.savedAt)],
+);
+
+/**
+ * A chronic-leaker report marked filed: the calendar year it covers, the day it was filed (store
+ * calendar) and the member who signs for it. Never edited; one per system and year.
+ */
+export const chronicLeakerReports = pgTable(
+  "chronic_leaker_reports",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
+    systemId: uuid().notNull().references(() => systems.id, { onDelete: "cascade" }),
+    year: integer().notNull(),
+    filedOn: date({ mode: "string" }).notNull(),
+    /** The authority's receipt or submission number, if any. */
+    reference: text().notNull().default(""),
+    note: text().notNull().default(""),
+    filedById: uuid().notNull().references(() => users.id),
+    recordedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex("chronic_leaker_reports_system_year").on(t.systemId, t.year)],
+);
+
+/** What was done to a system's compliance records, by whom and when (append-only). */
+export const complianceAudit = pgTable(
+  "compliance_audit",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
+    systemId: uuid().references(() => systems.id, { onDelete: "cascade" }),
+    action: text({ enum: ["chronic-report-filed"] }).notNull(),
+    summary: text().notNull(),
+    byId: uuid().notNull().references(() => users.id),
+    at: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("compliance_audit_system").on(t.systemId, t.at)],
 );

@@ -1,15 +1,28 @@
+import { withReadableSources } from "./citations";
 import { copyProfile } from "./custom-profile";
 import { EU_FGAS_PROFILE } from "./eu-fgas-profile";
 import type { RuleProfile } from "./rule-profile";
 import { US_FEDERAL_PROFILE } from "./us-federal-profile";
 
 export type CompanyRuleProfile = "us-federal" | "eu-fgas" | "custom";
+export type BuiltInProfileId = "us-federal" | "eu-fgas";
 
-// Until custom profiles are stored per company, "custom" is an unedited copy of the US federal
-// profile (the same starting point the GWP display uses, server/api/systems/refrigerant-summary.ts).
-const CUSTOM = copyProfile(US_FEDERAL_PROFILE, "custom", "Custom (starts as a copy of US federal)");
+export const BUILT_IN_PROFILES: Record<BuiltInProfileId, RuleProfile> = { "us-federal": US_FEDERAL_PROFILE, "eu-fgas": EU_FGAS_PROFILE };
 
-/** The rule profile a company setting names. */
-export function profileFor(setting: CompanyRuleProfile): RuleProfile {
-  return setting === "eu-fgas" ? EU_FGAS_PROFILE : setting === "custom" ? CUSTOM : US_FEDERAL_PROFILE;
+/**
+ * A fresh custom profile: an unedited copy of a built-in one, named after it. The company edits it
+ * as its own document, so its sources read as citations rather than our internal tags.
+ */
+export function startCustomProfile(from: BuiltInProfileId): RuleProfile {
+  const base = BUILT_IN_PROFILES[from];
+  return withReadableSources(copyProfile(base, "custom", `Custom (from ${base.name})`));
+}
+
+/**
+ * The rule profile a company setting names. "custom" uses the company's stored profile; a company
+ * that chose "custom" before saving one works under an unedited copy of US federal.
+ */
+export function profileFor(setting: CompanyRuleProfile, custom: RuleProfile | null = null): RuleProfile {
+  if (setting === "custom") return custom ?? startCustomProfile("us-federal");
+  return BUILT_IN_PROFILES[setting];
 }

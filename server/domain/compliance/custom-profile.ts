@@ -57,6 +57,7 @@ export function validateRuleProfile(p: RuleProfile): void {
     const f = `leakRateParts[${i}]`;
     for (const t of APPLIANCE_TYPES) checkNumber(part.thresholds[t], `${f}.thresholds.${t}`, 0, 1000);
     checkNumber(part.repairDays, `${f}.repairDays`, 1, 3650, true);
+    checkNumber(part.initialVerificationDays, `${f}.initialVerificationDays`, 0, 3650, true);
     checkNumber(part.followUpVerificationDays, `${f}.followUpVerificationDays`, 1, 3650, true);
     checkNumber(part.firstCalculationDays, `${f}.firstCalculationDays`, 1, 3650, true);
     checkNumber(part.maxDaysSinceLastAddition, `${f}.maxDaysSinceLastAddition`, 1, 3650, true);
@@ -81,7 +82,12 @@ export function validateRuleProfile(p: RuleProfile): void {
     }
     const { month, day } = part.chronicLeaker.reportBy.value;
     checkSource(part.chronicLeaker.reportBy, `${f}.chronicLeaker.reportBy`);
-    parseIsoDate(`2001-${String(month).padStart(2, "0")}-${String(day).padStart(2, "0")}`, `${f}.chronicLeaker.reportBy.value`);
+    // A day every year has: 29 February would fall away in three years of four.
+    const longest = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31][month - 1];
+    if (!Number.isInteger(month) || longest === undefined) throw new DomainInputError(`${f}.chronicLeaker.reportBy.value.month`, `must be a month from 1 to 12, got ${month}`);
+    if (!Number.isInteger(day) || day < 1 || day > longest) {
+      throw new DomainInputError(`${f}.chronicLeaker.reportBy.value.day`, `must be a day from 1 to ${longest} in month ${month} (one that every year has), got ${day}`);
+    }
   });
   if (p.leakChecks) {
     checkBands(p.leakChecks.co2eBands, "leakChecks.co2eBands");

@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
-import { chronicReportDueDate, dueStatus, followUpVerificationDueDate, keepRecordsUntil, recheckAfterRepairDueDate, repairDueDate } from "./deadlines";
+import { chronicReportDueDate, dueStatus, followUpVerificationDueDate, initialVerificationDueDate, keepRecordsUntil, recheckAfterRepairDueDate, repairDueDate } from "./deadlines";
 import { EU_FGAS_PROFILE } from "./eu-fgas-profile";
-import { PART_82_SUBPART_F, US_FEDERAL_PROFILE } from "./us-federal-profile";
+import { PART_82_SUBPART_F, PART_84_SUBPART_C, US_FEDERAL_PROFILE } from "./us-federal-profile";
+import { localDateOf } from "../dates/time-zone";
 
 describe("deadlines", () => {
   it("repair due 30 days after learning, across month ends and leap years", () => {
@@ -38,5 +39,23 @@ describe("deadlines", () => {
     expect(dueStatus("2026-04-08", now, "Europe/Berlin")).toEqual({ daysLeft: 7, state: "due-soon" });
     expect(dueStatus("2026-04-09", now, "Europe/Berlin").state).toBe("upcoming");
     expect(() => dueStatus("2026-04-09", now, "Nowhere/Atlantis")).toThrow(/^timeZone: is not a known IANA time zone/);
+  });
+});
+
+describe("verification tests after a repair", () => {
+  it("initial test on the repair day, follow-up 10 days after it, across month ends and leap days", () => {
+    // [S:R8]: the initial verification test follows the repair "as soon as practicable", so it is due on the repair day.
+    expect(initialVerificationDueDate(PART_84_SUBPART_C, "2026-01-31")).toBe("2026-01-31");
+    // standards.md §1 [M]: the follow-up within 10 days of the initial test.
+    expect(followUpVerificationDueDate(PART_84_SUBPART_C, "2026-01-25")).toBe("2026-02-04");
+    expect(followUpVerificationDueDate(PART_84_SUBPART_C, "2028-02-25")).toBe("2028-03-06"); // 2028 is a leap year: 29 Feb counts
+    expect(followUpVerificationDueDate(PART_84_SUBPART_C, "2026-02-25")).toBe("2026-03-07");
+  });
+  it("uses the store's calendar day of the repair", () => {
+    // IANA tz: 03:30 UTC on 1 Mar 2028 is 19:30 on 29 Feb in Los Angeles (PST, UTC−8) and 04:30 on 1 Mar in Berlin (CET).
+    const at = new Date("2028-03-01T03:30:00Z");
+    expect(initialVerificationDueDate(PART_84_SUBPART_C, localDateOf(at, "America/Los_Angeles"))).toBe("2028-02-29");
+    expect(followUpVerificationDueDate(PART_84_SUBPART_C, localDateOf(at, "America/Los_Angeles"))).toBe("2028-03-10");
+    expect(followUpVerificationDueDate(PART_84_SUBPART_C, localDateOf(at, "Europe/Berlin"))).toBe("2028-03-11");
   });
 });

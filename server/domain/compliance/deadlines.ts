@@ -8,6 +8,14 @@ export function repairDueDate(part: LeakRatePart, learnedOn: IsoDate): IsoDate {
   return addDays(learnedOn, part.repairDays.value, "learnedOn");
 }
 
+/**
+ * Initial verification test due: the repair's date (store calendar) plus the part's days; the US
+ * rule is "as soon as practicable after the repair is completed" [S:R8], i.e. the repair day.
+ */
+export function initialVerificationDueDate(part: LeakRatePart, repairedOn: IsoDate): IsoDate {
+  return addDays(repairedOn, part.initialVerificationDays.value, "repairedOn");
+}
+
 /** Follow-up verification due: the initial verification test's date plus the part's days. */
 export function followUpVerificationDueDate(part: LeakRatePart, initialTestOn: IsoDate): IsoDate {
   return addDays(initialTestOn, part.followUpVerificationDays.value, "initialTestOn");

@@ -31,6 +31,8 @@ export interface LeakRatePart {
   thresholds: Record<ApplianceType, Sourced<number>>;
   /** Repair within this many days of learning of the breach. */
   repairDays: Sourced<number>;
+  /** Initial verification test within this many days of the repair (0: the day of the repair). */
+  initialVerificationDays: Sourced<number>;
   /** Follow-up verification test within this many days of the initial test. */
   followUpVerificationDays: Sourced<number>;
   /** Annualizing method: days used when no earlier addition exists. */

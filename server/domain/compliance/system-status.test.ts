@@ -51,4 +51,24 @@ describe("system status", () => {
     // 25 Feb + 10 days = 7 Mar in 2026 (not a leap year); follow-up within 10 days [M].
     expect(s.due).toEqual([expect.objectContaining({ kind: "follow-up-test", dueOn: "2026-03-07", findingId: "f" })]);
   });
+
+  it("asks for the initial verification test on the repair day until a passed one is recorded", () => {
+    const pending = { ...base, pendingFollowUps: [{ findingId: "f", repairedOn: "2028-02-29", initialTestOn: null }] };
+    // [S:R8]: the initial verification test "as soon as practicable after the repair is completed": due the repair day.
+    const s = systemStatus(US_FEDERAL_PROFILE, "annualizing", pending, "2028-03-01");
+    expect(s.due).toEqual([expect.objectContaining({ kind: "initial-test", dueOn: "2028-02-29", findingId: "f", what: "Initial verification test after the repair of 2028-02-29" })]);
+    // Once it passed (1 Mar 2028), the follow-up is due 10 days later [M]: 11 Mar.
+    const passed = systemStatus(US_FEDERAL_PROFILE, "annualizing", { ...base, pendingFollowUps: [{ findingId: "f", repairedOn: "2028-02-29", initialTestOn: "2028-03-01" }] }, "2028-03-02");
+    expect(passed.due.map((d) => [d.kind, d.dueOn])).toEqual([["follow-up-test", "2028-03-11"]]);
+  });
+
+  it("closes the chronic-leaker report item once that year's report is filed", () => {
+    // 125 % rule [S:R7]: 700 + 800 lb into 1,150 lb in 2026 = 130 %; report by 1 March 2027.
+    const rec = { ...base, additions: [{ id: "a", date: "2026-03-01", amountKg: lb(700) }, { id: "b", date: "2026-11-30", amountKg: lb(800) }] };
+    const open = systemStatus(US_FEDERAL_PROFILE, "annualizing", rec, "2027-01-10");
+    expect(open.due.filter((d) => d.kind === "chronic-leaker-report").map((d) => [d.dueOn, d.year])).toEqual([["2027-03-01", 2026]]);
+    const filed = systemStatus(US_FEDERAL_PROFILE, "annualizing", { ...rec, chronicReportsFiled: [2026] }, "2027-01-10");
+    expect(filed.due.some((d) => d.kind === "chronic-leaker-report")).toBe(false);
+    expect(filed.chronic.find((y) => y.year === 2026)?.chronic).toBe(true); // the record itself stays
+  });
 });

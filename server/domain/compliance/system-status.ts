@@ -4,7 +4,7 @@ import { applicableLeakRatePart, leakRateThreshold } from "./applicability";
 import { assessLeakRate, type AssessedPoint } from "./assess-leak-rate";
 import { chronicLeakerYears, type ChronicLeakerYear } from "./chronic-leaker";
 import { systemCo2e, type SystemCo2e } from "./co2e";
-import { followUpVerificationDueDate, recheckAfterRepairDueDate } from "./deadlines";
+import { followUpVerificationDueDate, initialVerificationDueDate, recheckAfterRepairDueDate } from "./deadlines";
 import { inspectionsAfterBreach } from "./inspections-after-breach";
 import { leakCheckInterval, nextInspectionDate, type LeakCheckInterval } from "./leak-check-interval";
 import type { ChargeAddition } from "./leak-rate";
@@ -26,14 +26,18 @@ export interface SystemRecords {
   /** Days a follow-up verification test passed (shortens the rolling-average window). */
   followUpVerifiedOn: readonly IsoDate[];
   leakChecks: readonly { checkedOn: IsoDate; leakFound: boolean }[];
+  /** Calendar years whose chronic-leaker report is marked filed (the due item closes). */
+  chronicReportsFiled?: readonly number[];
 }
 
 export interface DueDate {
-  kind: "repair" | "follow-up-test" | "recheck-after-repair" | "inspection" | "chronic-leaker-report";
+  kind: "repair" | "initial-test" | "follow-up-test" | "recheck-after-repair" | "inspection" | "chronic-leaker-report";
   dueOn: IsoDate;
   what: string;
   source: string;
   findingId?: string;
+  /** For a chronic-leaker report: the calendar year it covers. */
+  year?: number;
 }
 
 export interface SystemStatus {
@@ -77,8 +81,11 @@ export function systemStatus(profile: RuleProfile, method: LeakRateMethod, rec: 
 
   const part = a.applies ? a.part : breachPart;
   for (const f of rec.pendingFollowUps) {
-    if (part && f.initialTestOn) {
-      due.push({ kind: "follow-up-test", dueOn: followUpVerificationDueDate(part, f.initialTestOn), what: "Follow-up verification test", source: part.followUpVerificationDays.source, findingId: f.findingId });
+    if (part && !f.initialTestOn) {
+      // Until a passed initial test is recorded (a failed one means the repair did not hold).
+      due.push({ kind: "initial-test", dueOn: initialVerificationDueDate(part, f.repairedOn), what: `Initial verification test after the repair of ${f.repairedOn}`, source: part.initialVerificationDays.source, findingId: f.findingId });
+    } else if (part && f.initialTestOn) {
+      due.push({ kind: "follow-up-test", dueOn: followUpVerificationDueDate(part, f.initialTestOn), what: `Follow-up verification test after the initial test of ${f.initialTestOn}`, source: part.followUpVerificationDays.source, findingId: f.findingId });
     } else if (!part && profile.leakChecks) {
       due.push({ kind: "recheck-after-repair", dueOn: recheckAfterRepairDueDate(profile, f.repairedOn), what: "Leak check after the repair", source: profile.leakChecks.recheckAfterRepairMonths.source, findingId: f.findingId });
     }
@@ -88,8 +95,8 @@ export function systemStatus(profile: RuleProfile, method: LeakRateMethod, rec: 
   const thisYear = Number(today.slice(0, 4));
   for (const y of chronic) {
     // The report for last year (or this one, once reached) is what can still be acted on.
-    if (y.chronic && y.reportDue && y.year >= thisYear - 1 && part) {
-      due.push({ kind: "chronic-leaker-report", dueOn: y.reportDue, what: `Chronic-leaker report for ${y.year}: ${y.percent.toFixed(0)} % of the full charge added`, source: `${part.chronicLeaker.percentOfFullCharge.source}; ${part.chronicLeaker.reportBy.source}` });
+    if (y.chronic && y.reportDue && y.year >= thisYear - 1 && part && !rec.chronicReportsFiled?.includes(y.year)) {
+      due.push({ kind: "chronic-leaker-report", dueOn: y.reportDue, year: y.year, what: `Chronic-leaker report for ${y.year}: ${y.percent.toFixed(0)} % of the full charge added`, source: `${part.chronicLeaker.percentOfFullCharge.source}; ${part.chronicLeaker.reportBy.source}` });
     }
   }
 

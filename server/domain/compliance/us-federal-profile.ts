@@ -12,6 +12,7 @@ const shared = {
     "comfort-cooling": { value: 10, source: "[S:R1] 40 CFR 82.157(c); [S:R4] 84.106" },
   },
   repairDays: { value: 30, source: "[S:R4] repair within 30 days of learning of the breach" },
+  initialVerificationDays: { value: 0, source: "[S:R8] initial verification test as soon as practicable after the repair is completed (before the full charge is replaced if the system was evacuated)" },
   followUpVerificationDays: { value: 10, source: "[M] follow-up verification within 10 days; definition [S:R8]" },
   maxDaysSinceLastAddition: { value: 365, source: "[S:R7] annualizing method, shorter of days since last addition or 365" },
   rollingWindowDays: { value: 365, source: "[S:R7] rolling average, previous 365 days; shortened by a follow-up verification [M]" },

@@ -6,6 +6,7 @@ import { Spinner } from "../../components/ui/spinner";
 import { authKeys } from "../../features/auth/api/auth-keys";
 import { useCompanySettings } from "../../features/settings/api/get-company-settings";
 import { CompanySettingsForm } from "../../features/settings/components/company-settings-form";
+import { CustomProfileSection } from "../../features/settings/components/custom-profile-section";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
 
@@ -29,6 +30,7 @@ export function Component() {
           onSaved={() => void queryClient.invalidateQueries({ queryKey: authKeys.session() })}
         />
       ) : null}
+      {settings.data ? <CustomProfileSection key={`custom-${membership.companyId}`} editable={can(membership.role, "settings.manage")} /> : null}
     </>
   );
 }

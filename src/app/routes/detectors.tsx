@@ -1,4 +1,6 @@
 import { useState } from "react";
+import { useLocation } from "react-router";
+import { useScrollToHash } from "../../lib/use-scroll-to-hash";
 import { PRINCIPLE_LABELS, type Detector } from "../../../server/contracts/detectors";
 import { can } from "../../../server/domain/roles";
 import { Button } from "../../components/ui/button";
@@ -14,12 +16,14 @@ import { Component as NotFound } from "./not-found";
 export function Component() {
   useDocumentTitle("Detectors");
   const { membership } = useSignedIn();
-  const canRead = can(membership.role, "sweeps.record") || can(membership.role, "detectors.manage");
+  const canRead = can(membership.role, "detectors.read");
   const canManage = can(membership.role, "detectors.manage");
   const [showArchived, setShowArchived] = useState(false);
   const [editing, setEditing] = useState<Detector | "new" | null>(null);
   const list = useDetectors(showArchived);
   const archive = useArchiveDetector();
+  const { hash } = useLocation();
+  useScrollToHash(!!list.data);
   if (!canRead) return <NotFound />;
   return (
     <>
@@ -49,7 +53,7 @@ export function Component() {
             </thead>
             <tbody>
               {list.data.map((d) => (
-                <tr key={d.id} className="edge border-x-0 border-t-0">
+                <tr key={d.id} id={`detector-${d.id}`} className={`edge border-x-0 border-t-0 ${hash === `#detector-${d.id}` ? "bg-accent-soft" : ""}`}>
                   <td className="p-2 font-bold">{d.name}{d.archivedAt ? " (archived)" : ""}</td>
                   <td className="p-2">{PRINCIPLE_LABELS[d.principle]}</td>
                   <td className="p-2">{d.transportDelayS} s</td>

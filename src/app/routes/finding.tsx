@@ -9,11 +9,13 @@ import { FindingActions } from "../../features/findings/components/finding-actio
 import { FindingView } from "../../features/findings/components/finding-view";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
+import { useUnitPreferences } from "../shell/use-unit-preferences";
 
 export function Component() {
   const { findingId = "" } = useParams();
   const { membership } = useSignedIn();
   const finding = useFinding(findingId);
+  const units = useUnitPreferences();
   useDocumentTitle("Finding");
   if (finding.isPending) return <Spinner label="Loading the finding…" />;
   if (finding.isError) return <QueryError error={finding.error} what="the finding" onRetry={() => void finding.refetch()} />;
@@ -25,7 +27,7 @@ export function Component() {
         description={<>{f.storeName} · found {f.events[0]?.on} by {f.foundBy}{f.systemId ? <> · <Link className="text-accent underline" to={`/systems/${f.systemId}`}>system records</Link></> : null}</>}
       />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
-        <FindingView finding={f} canAddPhoto={can(membership.role, "findings.record")} />
+        <FindingView finding={f} canAddPhoto={can(membership.role, "findings.record")} lengthUnit={units.length} />
         <div><FindingActions key={f.events.length} finding={f} role={membership.role} today={localDateOf(new Date(), f.timeZone)} /></div>
       </div>
     </>

@@ -1,4 +1,5 @@
 import { Link, useParams } from "react-router";
+import { countOf } from "../../lib/format";
 import { EmptyState } from "../../components/ui/empty-state";
 import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
@@ -32,7 +33,7 @@ export function Component() {
             <div>
               <p className="font-bold">{when(s.startedAt)}</p>
               <p className="text-sm text-muted">
-                {s.technicianName} · {s.detectorName} · fans {s.fans} · {s.readingCount} readings · {s.status.replace("-", " ")}
+                {s.technicianName} · {s.detectorName} · fans {s.fans} · {countOf(s.readingCount, "reading")} · {s.status.replace("-", " ")}
               </p>
             </div>
             <Link className="inline-flex min-h-11 items-center rounded-md bg-accent px-4 font-bold text-on-accent no-underline" to={`/stores/${storeId}/sweeps/${s.id}/map`}>

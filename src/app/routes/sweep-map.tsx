@@ -1,4 +1,5 @@
 import { useMemo, useState } from "react";
+import { countOf } from "../../lib/format";
 import { Link, useParams, useSearchParams } from "react-router";
 import { can } from "../../../server/domain/roles";
 import { AIR_VOLUME_KINDS } from "../../../server/contracts/fixture-kinds";
@@ -80,7 +81,7 @@ export function Component() {
     <>
       <PageHeader
         title={`Field map — ${store?.name ?? "store"}`}
-        description={`${zoned(s.startedAt)} · ${s.technicianName} · ${s.detectorName} · fans ${s.fans}${s.defrost ? ", defrost" : ""} · ${s.readingCount} readings · ${s.status.replace("-", " ")}`}
+        description={`${zoned(s.startedAt)} · ${s.technicianName} · ${s.detectorName} · fans ${s.fans}${s.defrost ? ", defrost" : ""} · ${countOf(s.readingCount, "reading")} · ${s.status.replace("-", " ")}`}
         actions={
           <>
             <Link className="inline-flex min-h-11 items-center rounded-md edge bg-surface px-4 font-bold no-underline" to={`/stores/${storeId}/compare?b=${sweepId}`}>

@@ -11,6 +11,7 @@ import { useCompanySettings } from "../../features/settings/api/get-company-sett
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
 import { Link } from "react-router";
+import { useScrollToHash } from "../../lib/use-scroll-to-hash";
 
 // Where the compliance records of a system meet its findings.
 export function Component() {
@@ -23,6 +24,7 @@ export function Component() {
   useDocumentTitle(records.data ? records.data.system.name : "System records");
   const unit = user.massUnit ?? settings.data?.massUnit ?? "kg";
   const canRecord = can(membership.role, "findings.record");
+  useScrollToHash(!!records.data && !findings.isPending);
   if (records.isPending) return <Spinner label="Loading the system's records…" />;
   if (records.isError) return <QueryError error={records.error} what="the system's records" onRetry={() => void records.refetch()} />;
   const r = records.data;
@@ -31,7 +33,7 @@ export function Component() {
     <>
       <PageHeader title={r.system.name} description={`${r.store.name} · records on the store's calendar (${r.store.timeZone}); today is ${r.today}.`} />
       <div className="space-y-8">
-        <SystemRecords r={r} unit={unit} canRecord={canRecord} findings={list.filter((f) => f.status !== "dismissed").map((f) => ({ id: f.id, label: `${f.events[0]?.on ?? ""} ${f.component ?? "leak"} (${f.status})` }))} />
+        <SystemRecords r={r} unit={unit} canRecord={canRecord} canFile={can(membership.role, "compliance.manage")} findings={list.filter((f) => f.status !== "dismissed").map((f) => ({ id: f.id, label: `${f.events[0]?.on ?? ""} ${f.component ?? "leak"} (${f.status})` }))} />
         <section aria-labelledby="sys-findings" className="space-y-3">
           <h2 id="sys-findings" className="text-xl font-bold">Findings on this system</h2>
           {list.length === 0 ? <p className="text-muted">No findings.</p> : (

@@ -16,7 +16,8 @@ async function navLabels() {
 const cases: { role: Role; outboxEnabled: boolean; expected: string[] }[] = [
   { role: "owner", outboxEnabled: true, expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings", "Outbox"] },
   { role: "owner", outboxEnabled: false, expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"] },
-  { role: "engineer", outboxEnabled: true, expected: ["Today", "Stores", "Team", "Company settings", "Outbox"] },
+  // Engineers read everything (PRODUCT.md), detectors included.
+  { role: "engineer", outboxEnabled: true, expected: ["Today", "Stores", "Detectors", "Team", "Company settings", "Outbox"] },
   { role: "lead-tech", outboxEnabled: true, expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"] },
   { role: "technician", outboxEnabled: true, expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"] },
   { role: "store-contact", outboxEnabled: true, expected: ["Today", "Stores", "Company settings"] },

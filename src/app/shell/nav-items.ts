@@ -14,7 +14,7 @@ export function navItems(role: Role, session: Pick<SessionInfo, "outboxEnabled">
   // Today first: the landing page for the people who answer for the books (see routes/home.tsx).
   const items: NavItem[] = [{ to: "/today", label: "Today" }, { to: "/stores", label: "Stores" }];
   if (can(role, "sweeps.record")) items.push({ to: "/walk", label: "Walk" });
-  if (can(role, "sweeps.record") || can(role, "detectors.manage")) items.push({ to: "/detectors", label: "Detectors" });
+  if (can(role, "detectors.read")) items.push({ to: "/detectors", label: "Detectors" });
   if (can(role, "members.read")) items.push({ to: "/team", label: "Team" });
   // Every member may read the company's settings; only settings.manage may change them.
   items.push({ to: "/settings", label: "Company settings" });

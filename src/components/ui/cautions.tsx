@@ -1,3 +1,5 @@
+import { readableSource } from "../../../server/domain/compliance/citations";
+
 export interface CautionItem {
   id: string;
   level: "warning" | "notice";
@@ -14,7 +16,7 @@ export function Cautions({ items, title = "Safety" }: { items: readonly CautionI
       <ul className="mt-1 list-disc space-y-1 pl-5">
         {items.map((c) => (
           <li key={c.id} className={c.level === "warning" ? "font-bold" : undefined}>
-            <span className={c.level === "warning" ? "" : "font-normal"}>{c.text}</span> <span className="text-sm font-normal text-muted">({c.source})</span>
+            <span className={c.level === "warning" ? "" : "font-normal"}>{c.text}</span> {readableSource(c.source) ? <span className="text-sm font-normal text-muted">({readableSource(c.source)})</span> : null}
           </li>
         ))}
       </ul>

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
-import { chargeAdditionInput, chargeAdditionResponse, chargeCorrectionInput, chargeVoidInput, leakCheckInput, systemRecords } from "../../../../server/contracts/compliance";
+import { chargeAdditionInput, chargeAdditionResponse, chargeCorrectionInput, chargeVoidInput, chronicReportInput, leakCheckInput, systemRecords } from "../../../../server/contracts/compliance";
 import { api } from "../../../lib/api-client";
 import { complianceKeys } from "./compliance-keys";
 
@@ -10,7 +10,8 @@ type Action =
   | { kind: "add"; systemId: string; input: z.input<typeof chargeAdditionInput> }
   | { kind: "correct"; additionId: string; input: z.input<typeof chargeCorrectionInput> }
   | { kind: "void"; additionId: string; input: z.input<typeof chargeVoidInput> }
-  | { kind: "leak-check"; systemId: string; input: z.input<typeof leakCheckInput> };
+  | { kind: "leak-check"; systemId: string; input: z.input<typeof leakCheckInput> }
+  | { kind: "chronic-report"; systemId: string; input: z.input<typeof chronicReportInput> };
 
 /** Every change to a system's records answers with the fresh records (the leak rate moves at once). */
 export async function recordCharge(action: Action) {
@@ -23,6 +24,8 @@ export async function recordCharge(action: Action) {
       return api.post(`/api/charge-additions/${action.additionId}/void`, systemRecords, action.input);
     case "leak-check":
       return api.post(`/api/systems/${action.systemId}/leak-checks`, systemRecords, action.input);
+    case "chronic-report":
+      return api.post(`/api/systems/${action.systemId}/chronic-reports`, systemRecords, action.input);
   }
 }
 

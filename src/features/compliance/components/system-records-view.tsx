@@ -10,7 +10,9 @@ import { serverFieldErrors } from "../../../lib/form-errors";
 import { useRecordCharge } from "../api/record-charge";
 import { daysInWords, formatMass, formatPercent, STATE_LABELS, type MassUnit } from "../model/figures";
 import { ChargeForm } from "./charge-form";
+import { ChronicSection } from "./chronic-section";
 import { LeakCheckForm } from "./leak-check-form";
+import { readableSource } from "../../../../server/domain/compliance/citations";
 
 function Fact({ label, children }: { label: string; children: React.ReactNode }) {
   return (
@@ -36,7 +38,7 @@ function VoidForm({ id, onDone }: { id: string; onDone: () => void }) {
  * A system's records: what applies and why, the leak rate at every addition against the
  * threshold, due dates with their rules, the charge-added audit trail and the exports.
  */
-export function SystemRecords({ r, unit, canRecord, findings }: { r: SystemRecordsView; unit: MassUnit; canRecord: boolean; findings: { id: string; label: string }[] }) {
+export function SystemRecords({ r, unit, canRecord, canFile = false, findings }: { r: SystemRecordsView; unit: MassUnit; canRecord: boolean; canFile?: boolean; findings: { id: string; label: string }[] }) {
   const [editing, setEditing] = useState<{ id: string; mode: "correct" | "void" } | null>(null);
   const byId = new Map(r.additions.map((a) => [a.id, a]));
   const a = r.applicability;
@@ -55,10 +57,10 @@ export function SystemRecords({ r, unit, canRecord, findings }: { r: SystemRecor
         <Fact label="Leak detection">{r.system.automaticLeakDetection ? "Automatic" : "None"}</Fact>
       </dl>
       <div className="space-y-1 text-sm text-muted">
-        <p><span className="font-bold text-ink">Rule: </span>{a.applies ? `${a.reason}. Threshold source: ${a.thresholdSource}.` : `No leak-rate threshold: ${a.reason}.`}</p>
-        <p><span className="font-bold text-ink">Profile: </span>{r.profile.name}, {r.profile.method === "annualizing" ? "annualizing method" : "rolling-average method"} (40 CFR 82.152 / 84.102). Records are kept {r.profile.retentionYears} years ({r.profile.retentionSource}).</p>
+        <p><span className="font-bold text-ink">Rule: </span>{a.applies ? `${a.reason}. Threshold source: ${readableSource(a.thresholdSource ?? "")}.` : `No leak-rate threshold: ${a.reason}.`}</p>
+        <p><span className="font-bold text-ink">Profile: </span>{r.profile.name}, {r.profile.method === "annualizing" ? "annualizing method" : "rolling-average method"} (40 CFR 82.152 / 84.102). Records are kept {r.profile.retentionYears} years ({readableSource(r.profile.retentionSource)}).</p>
         {r.leakCheck ? <p><span className="font-bold text-ink">Leak checks: </span>{r.leakCheck.reason}. Without leak detection every {r.leakCheck.withoutLdsMonths ?? "–"} months; with it every {r.leakCheck.withLdsMonths ?? "–"} months.</p> : null}
-        {r.nextInspection ? <p><span className="font-bold text-ink">Next inspection: </span>{r.nextInspection.reason} ({r.nextInspection.source}).</p> : null}
+        {r.nextInspection ? <p><span className="font-bold text-ink">Next inspection: </span>{r.nextInspection.reason} ({readableSource(r.nextInspection.source)}).</p> : null}
       </div>
 
       {r.due.length ? (
@@ -68,14 +70,14 @@ export function SystemRecords({ r, unit, canRecord, findings }: { r: SystemRecor
             {r.due.map((d) => (
               <li key={`${d.kind}-${d.dueOn}-${d.findingId}`} className="rounded-md bg-surface p-3 edge">
                 <span className="font-bold">{d.dueOn}</span> · {STATE_LABELS[d.state]}, {daysInWords(d.daysLeft)} · {d.findingId ? <Link className="text-accent underline" to={d.link}>{d.what}</Link> : d.what}
-                <p className="text-sm text-muted">Rule: {d.source}</p>
+                <p className="text-sm text-muted">Rule: {readableSource(d.source)}</p>
               </li>
             ))}
           </ul>
         </section>
       ) : null}
 
-      <section aria-labelledby="rates" className="space-y-2">
+      <section id="leak-rates" aria-labelledby="rates" className="space-y-2">
         <h2 id="rates" className="text-xl font-bold">Leak rate at every addition</h2>
         {r.leakRates.length === 0 ? <p className="text-muted">No refrigerant has been added: no leak rate yet.</p> : (
           <DataTable
@@ -95,24 +97,7 @@ export function SystemRecords({ r, unit, canRecord, findings }: { r: SystemRecor
         )}
       </section>
 
-      {r.chronic.length ? (
-        <section aria-labelledby="chronic" className="space-y-2">
-          <h2 id="chronic" className="text-xl font-bold">Added per calendar year</h2>
-          <ul className="space-y-1">
-            {r.chronic.map((y) => (
-              <li key={y.year} className={y.chronic ? "font-bold text-danger" : undefined}>
-                {y.year}: {formatMass(y.addedKg, unit)}, {formatPercent(y.percent)} of the full charge
-                {y.chronic ? ` — chronic leaker; report due ${y.reportDue}` : ""}
-              </li>
-            ))}
-          </ul>
-          {r.chronicRule ? (
-            <p className="text-sm text-muted">
-              A system that takes {r.chronicRule.percent} % or more of its full charge in one calendar year is a chronic leaker, reported by {r.chronicRule.reportBy} ({r.chronicRule.source}).
-            </p>
-          ) : null}
-        </section>
-      ) : null}
+      <ChronicSection r={r} unit={unit} canFile={canFile} />
 
       <section aria-labelledby="charge" className="space-y-3">
         <h2 id="charge" className="text-xl font-bold">Charge added</h2>

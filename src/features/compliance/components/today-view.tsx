@@ -6,6 +6,7 @@ import { DataTable } from "../../../components/ui/data-table";
 import { EmptyState } from "../../../components/ui/empty-state";
 import { Select } from "../../../components/ui/select";
 import { arrangeDue, daysInWords, DUE_KIND_LABELS, formatPercent, STATE_LABELS, type DueSort } from "../model/figures";
+import { readableSource } from "../../../../server/domain/compliance/citations";
 
 const STATE_TONE: Record<string, string> = { overdue: "text-danger font-bold", "due-today": "text-danger font-bold", "due-soon": "text-note font-bold", upcoming: "" };
 
@@ -53,7 +54,7 @@ export function TodayView({ data, storeId, onStoreChange }: { data: TodayData; s
                     <span className="text-sm text-muted">{DUE_KIND_LABELS[r.kind]}</span>
                     <br />
                     <Link className="text-accent underline" to={r.link}>{r.what}</Link>
-                    <p className="mt-1 max-w-prose text-sm text-muted">Rule: {r.source}</p>
+                    <p className="mt-1 max-w-prose text-sm text-muted">Rule: {readableSource(r.source)}</p>
                   </>
                 ),
               },
@@ -77,7 +78,7 @@ export function TodayView({ data, storeId, onStoreChange }: { data: TodayData; s
               { header: "Store", cell: (r) => r.storeName },
               { header: "Leak rate", cell: (r) => <Link className="font-bold text-danger underline" to={r.link}>{formatPercent(r.percent)}</Link> },
               { header: "Threshold", cell: (r) => `${r.thresholdPercent} %` },
-              { header: "Calculated", cell: (r) => <>{r.on}<p className="max-w-xs text-sm text-muted">{r.partTitle}; {r.source}</p></> },
+              { header: "Calculated", cell: (r) => <>{r.on}<p className="max-w-xs text-sm text-muted">{readableSource(`${r.partTitle}; ${r.source}`)}</p></> },
             ]}
           />
         )}
@@ -94,10 +95,10 @@ export function TodayView({ data, storeId, onStoreChange }: { data: TodayData; s
             rowKey={(r) => r.id}
             columns={[
               { header: "Finding", cell: (r) => <Link className="text-accent underline" to={r.link}>{r.component ? COMPONENT_LABELS[r.component as (typeof FINDING_COMPONENTS)[number]] : "Leak"} on {r.systemName ?? "no system"}</Link> },
-              { header: "Status", cell: (r) => r.status },
+              { header: "Status", cell: (r) => (r.status === "verified" ? "verified, ready to close" : r.status) },
               { header: "Store", cell: (r) => r.storeName },
               { header: "Found", cell: (r) => r.foundOn },
-              { header: "Deadline", cell: (r) => (r.deadline ? <><span className="font-bold">{r.deadline}</span><br /><span className="block max-w-xs text-sm text-muted">{r.deadlineSource}</span></> : "—") },
+              { header: "Deadline", cell: (r) => (r.deadline ? <><span className="font-bold">{r.deadline}</span><br /><span className="block max-w-[13rem] text-sm text-muted">{readableSource(r.deadlineSource ?? "")}</span></> : "—") },
             ]}
           />
         )}
@@ -113,9 +114,9 @@ export function TodayView({ data, storeId, onStoreChange }: { data: TodayData; s
             { header: "System", cell: (r) => <Link className="text-accent underline" to={r.link}>{r.name}</Link> },
             { header: "Store", cell: (r) => r.storeName },
             { header: "Refrigerant", cell: (r) => r.refrigerantId },
-            { header: "Latest leak rate", cell: (r) => (r.latestPercent === null ? "no additions" : <span className={r.breachOpen ? "font-bold text-danger" : ""}>{formatPercent(r.latestPercent)} on {r.latestOn}</span>) },
+            { header: "Latest leak rate", cell: (r) => (r.latestPercent === null ? "no additions" : <><Link className={`underline ${r.breachOpen ? "font-bold text-danger" : "text-accent"}`} to={`${r.link}#leak-rates`}>{formatPercent(r.latestPercent)} on {r.latestOn}</Link>{r.repairedSince ? <span className="block text-sm text-muted">above the threshold; repaired since</span> : null}</>) },
             { header: "Threshold", cell: (r) => (r.thresholdPercent === null ? "none applies" : `${r.thresholdPercent} %`) },
-            { header: "Next inspection", cell: (r) => r.nextInspection ?? "—" },
+            { header: "Next inspection", cell: (r) => (r.nextInspection ? <Link className="text-accent underline" to={`${r.link}#checks`}>{r.nextInspection}</Link> : "—") },
           ]}
         />
       </section>

@@ -16,7 +16,8 @@ export const STATE_LABELS: Record<DueItem["state"], string> = { overdue: "Overdu
 
 export const DUE_KIND_LABELS: Record<DueItem["kind"], string> = {
   repair: "Repair",
-  "follow-up-test": "Verification test",
+  "initial-test": "Initial verification test",
+  "follow-up-test": "Follow-up verification test",
   "recheck-after-repair": "Re-check",
   inspection: "Inspection",
   "chronic-leaker-report": "Report",

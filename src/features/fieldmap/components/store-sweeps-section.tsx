@@ -1,4 +1,5 @@
 import { Link } from "react-router";
+import { countOf } from "../../../lib/format";
 import { QueryError } from "../../../components/ui/query-error";
 import { Spinner } from "../../../components/ui/spinner";
 import { useStoreSweeps } from "../api/get-sweeps";
@@ -21,7 +22,7 @@ export function StoreSweepsSection({ storeId, timeZone }: { storeId: string; tim
           {latest.map((s) => (
             <li key={s.id}>
               <Link className="text-accent underline" to={`/stores/${storeId}/sweeps/${s.id}/map`}>{when(s.startedAt)}</Link>
-              <span className="text-muted"> · {s.technicianName} · {s.readingCount} readings · {s.status.replace("-", " ")}</span>
+              <span className="text-muted"> · {s.technicianName} · {countOf(s.readingCount, "reading")} · {s.status.replace("-", " ")}</span>
             </li>
           ))}
         </ul>

@@ -5,13 +5,16 @@ import { Alert } from "../../../components/ui/alert";
 import { Cautions } from "../../../components/ui/cautions";
 import { formErrorMessage } from "../../../lib/form-errors";
 import { useChangeFinding } from "../api/change-finding";
+import { readableSource } from "../../../../server/domain/compliance/citations";
+import { formatLength, type LengthPreference } from "../../../../server/domain/units/format-units";
 
 const KIND_LABELS: Record<FindingDetail["events"][number]["kind"], string> = {
   found: "Found", confirmed: "Confirmed", repaired: "Repaired", "initial-test": "Initial verification test", "follow-up-test": "Follow-up verification test", closed: "Closed", dismissed: "Dismissed",
 };
 
 /** A finding: where and what, its deadlines with their rules, the signed history and photos. */
-export function FindingView({ finding, canAddPhoto }: { finding: FindingDetail; canAddPhoto: boolean }) {
+export function FindingView({ finding, canAddPhoto, lengthUnit = "m" }: { finding: FindingDetail; canAddPhoto: boolean; lengthUnit?: LengthPreference }) {
+  const len = (m: number) => formatLength(m, lengthUnit, { decimals: 1 });
   const upload = useChangeFinding();
   const message = formErrorMessage(upload.error);
   return (
@@ -25,7 +28,7 @@ export function FindingView({ finding, canAddPhoto }: { finding: FindingDetail; 
       {finding.fixtureLabel || finding.x !== null ? (
         <p className="text-sm text-muted">
           {finding.fixtureLabel ? `At ${finding.fixtureLabel}` : "On the plan"}
-          {finding.x !== null && finding.y !== null ? `, ${finding.x.toFixed(1)} m across and ${finding.y.toFixed(1)} m down from the plan's top-left corner` : ""}.
+          {finding.x !== null && finding.y !== null ? `, ${len(finding.x)} across and ${len(finding.y)} down from the plan's top-left corner` : ""}.
         </p>
       ) : null}
 
@@ -34,7 +37,7 @@ export function FindingView({ finding, canAddPhoto }: { finding: FindingDetail; 
           <h2 id="deadlines" className="text-lg font-bold">Deadlines</h2>
           {finding.deadlines.map((d) => (
             <Alert key={d.what} tone={d.state === "overdue" || d.state === "due-today" ? "error" : "note"} title={`${d.what}: ${d.dueOn}`}>
-              <p className="text-sm">Rule: {d.source}</p>
+              <p className="text-sm">Rule: {readableSource(d.source)}</p>
             </Alert>
           ))}
         </section>

@@ -7,7 +7,7 @@ export const MASS_LABELS: Record<MassUnit, string> = { kg: "Kilograms (kg)", lb:
 export const RULE_PROFILE_LABELS: Record<CompanySettings["ruleProfile"], string> = {
   "us-federal": "US federal (EPA refrigerant management)",
   "eu-fgas": "EU F-gas",
-  custom: "Custom",
+  custom: "Custom (the company's own profile, below)",
 };
 
 export const LEAK_RATE_METHOD_LABELS: Record<CompanySettings["leakRateMethod"], string> = {

@@ -1,4 +1,5 @@
 import type { Caution } from "../../../../server/contracts/systems";
+import { readableSource } from "../../../../server/domain/compliance/citations";
 
 /**
  * The usual cautions for the picked refrigerant, beside the form. They inform; local codes and
@@ -18,7 +19,7 @@ export function RefrigerantCautions({ refrigerantName, cautions }: { refrigerant
               <span className="font-bold">{c.level === "warning" ? "Warning: " : "Note: "}</span>
               {c.text}
             </p>
-            <p className="text-sm text-muted">Source: {c.source}</p>
+            {readableSource(c.source) ? <p className="text-sm text-muted">Source: {readableSource(c.source)}</p> : null}
           </li>
         ))}
       </ul>

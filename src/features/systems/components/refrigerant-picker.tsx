@@ -1,6 +1,7 @@
 import { useId } from "react";
 import type { RefrigerantSummary } from "../../../../server/contracts/systems";
 import { FieldError } from "../../../components/ui/field-error";
+import { readableSource } from "../../../../server/domain/compliance/citations";
 
 /** An R-number picker that shows, for the choice, its safety class and its GWP with basis and source. */
 export function RefrigerantPicker({
@@ -41,16 +42,16 @@ export function RefrigerantPicker({
         {picked ? (
           <>
             <p>
-              {picked.name}: safety class <span className="font-bold text-ink">{picked.safetyClass}</span> ({picked.safetyClassSource}).
+              {picked.name}: safety class <span className="font-bold text-ink">{picked.safetyClass}</span> ({readableSource(picked.safetyClassSource)}).
             </p>
             <p>
               {picked.gwp ? (
                 <>
-                  GWP-100 <span className="font-bold text-ink">{picked.gwp.value}</span> on the {picked.gwp.basis} basis ({picked.gwp.source})
+                  GWP-100 <span className="font-bold text-ink">{picked.gwp.value}</span> on the {picked.gwp.basis} basis ({readableSource(picked.gwp.source)})
                   {picked.gwpNote ? `; ${picked.gwpNote}` : ""}.
                 </>
               ) : (
-                <>GWP not known on the company's basis{picked.gwpNote ? `: ${picked.gwpNote}` : ""}.</>
+                <>GWP not known on the company's basis{picked.gwpNote ? `: ${readableSource(picked.gwpNote)}` : ""}.</>
               )}
             </p>
           </>

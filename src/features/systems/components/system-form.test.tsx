@@ -8,6 +8,7 @@ import { renderOnRoute } from "../../../../tests/helpers/render-client";
 import { apiError, stubFetch } from "../../../../tests/helpers/stub-fetch";
 import { setCsrfToken } from "../../../lib/api-client";
 import { SystemForm } from "./system-form";
+import { readableSource } from "../../../../server/domain/compliance/citations";
 
 const STORE_ID = "1d2c3b4a-5e6f-4a7b-8c9d-0e1f2a3b4c5d";
 // The server's own catalogue answer (GET /api/refrigerants) on the AR4 basis.
@@ -47,7 +48,9 @@ describe("system form", () => {
     fireEvent.change(picker, { target: { value: "R-404A" } });
     const gwp = summarizeRefrigerant(getRefrigerant("R-404A"), ["AR4"]).gwp!;
     expect(gwp.value).toBe(3922);
-    expect(screen.getByText((_, el) => el?.tagName === "P" && (el.textContent ?? "").startsWith(`GWP-100 ${gwp.value} on the AR4 basis (${gwp.source})`))).toBeTruthy();
+    expect(screen.getByText((_, el) => el?.tagName === "P" && (el.textContent ?? "").startsWith(`GWP-100 ${gwp.value} on the AR4 basis (${readableSource(gwp.source)})`))).toBeTruthy();
+    // Source tags are internal: the form shows citations.
+    expect(document.body.textContent).not.toMatch(/\[(S:|M\]|D\])/);
   });
 
   it("refuses a zero charge with the shared schema's message, before any request", async () => {

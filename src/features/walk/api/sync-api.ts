@@ -1,6 +1,7 @@
 import { readingsBatchResult, type CreateSweepInput, type ReadingEditInput, type ReadingInput } from "../../../../server/contracts/sweeps";
 import { api, isApiRequestError } from "../../../lib/api-client";
 import { RefusedError, type SyncTransport } from "../model/sync-transport";
+import { postFindingPhoto, postWalkFinding } from "./create-finding";
 
 /** A 4xx with a reason is a refusal the data must be fixed for; anything else is retried later. */
 async function call<T>(run: () => Promise<T>): Promise<T> {
@@ -28,5 +29,11 @@ export const httpSyncTransport: SyncTransport = {
   },
   async submitSweep(sweepId: string) {
     await call(() => api.post(`/api/sweeps/${sweepId}/submit`, null));
+  },
+  createFinding(storeId, input) {
+    return call(() => postWalkFinding(storeId, input));
+  },
+  async addFindingPhoto(findingId, photo) {
+    await call(() => postFindingPhoto(findingId, photo));
   },
 };

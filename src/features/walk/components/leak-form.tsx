@@ -2,12 +2,14 @@ import { useState } from "react";
 import { COMPONENT_LABELS, FINDING_COMPONENTS } from "../../../../server/contracts/findings";
 import type { Fixture } from "../../../../server/contracts/fixtures";
 import { FIXTURE_KIND_NAMES } from "../../../../server/contracts/fixture-kinds";
+import { formatLength, type LengthPreference } from "../../../../server/domain/units/format-units";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { Dialog } from "../../../components/ui/dialog";
 import { Select } from "../../../components/ui/select";
-import { createWalkFinding } from "../api/create-finding";
-import { syncNow } from "../hooks/sync-loop";
+import { refreshCounts, syncSoon } from "../hooks/sync-loop";
+import { queueFinding } from "../model/finding-queue";
+import { walkDb } from "../model/walk-db";
 
 export interface LeakSpot {
   x: number;
@@ -16,7 +18,7 @@ export interface LeakSpot {
 }
 
 /** "Leak found here": position (from the tap), fixture, component, status, photo and note. */
-export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId: string; sweepId: string; fixtures: readonly Fixture[]; onClose(): void; onSaved(id: string): void }) {
+export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId: string; sweepId: string; fixtures: readonly Fixture[]; lengthUnit?: LengthPreference; onClose(): void; onSaved(id: string): void }) {
   const [fixtureId, setFixtureId] = useState(props.spot?.fixtureId ?? "");
   const [component, setComponent] = useState<string>("");
   const [status, setStatus] = useState<"suspected" | "confirmed">("confirmed");
@@ -24,19 +26,27 @@ export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId
   const [photo, setPhoto] = useState<File | null>(null);
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
+  const len = (m: number) => formatLength(m, props.lengthUnit ?? "m", { decimals: 1 });
   const options = [{ value: "", label: "No fixture" }, ...props.fixtures.filter((f) => f.kind !== "wall" && f.kind !== "column").map((f) => ({ value: f.id, label: f.label || FIXTURE_KIND_NAMES[f.kind] }))];
 
   async function save() {
     if (!props.spot) return;
+    // Checked here as the server does, so a queued finding is not refused later, out of sight.
+    if (status === "confirmed" && !component) {
+      setError("Component: is required when the leak is confirmed (or choose Suspected).");
+      return;
+    }
     setBusy(true);
     setError(null);
     try {
-      // A sweep started offline must reach the server before a finding can name it.
-      await syncNow();
-      const f = await createWalkFinding(
+      // On the device first, like a reading: it uploads (with its photo) once its sweep is on the
+      // server, and waits in the queue while offline.
+      const clientId = crypto.randomUUID();
+      await queueFinding(
+        await walkDb(),
         props.storeId,
         {
-          clientId: crypto.randomUUID(),
+          clientId,
           source: "walk",
           status,
           planId: props.planId,
@@ -47,10 +57,13 @@ export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId
           y: props.spot.y,
           component: (component || null) as never,
           note,
+          foundAt: new Date().toISOString(),
         },
-        photo,
+        photo ? { name: photo.name || "photo.jpg", type: photo.type || "image/jpeg", data: await photo.arrayBuffer() } : null,
       );
-      props.onSaved(f.id);
+      await refreshCounts();
+      syncSoon(0);
+      props.onSaved(clientId);
     } catch (e) {
       setError(e instanceof Error ? e.message : String(e));
     } finally {
@@ -60,7 +73,7 @@ export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId
 
   return (
     <Dialog title="Leak found here" open={props.spot !== null} onClose={props.onClose}>
-      {props.spot ? <p className="text-muted">At {props.spot.x.toFixed(2)} m, {props.spot.y.toFixed(2)} m on the plan.</p> : null}
+      {props.spot ? <p className="text-muted">{len(props.spot.x)} across and {len(props.spot.y)} down from the plan's top-left corner.</p> : null}
       <Select label="Fixture" value={fixtureId} onChange={(e) => setFixtureId(e.target.value)} options={options} />
       <Select label="Component" value={component} onChange={(e) => setComponent(e.target.value)} options={[{ value: "", label: "Not known yet" }, ...FINDING_COMPONENTS.map((c) => ({ value: c, label: COMPONENT_LABELS[c] }))]} />
       <fieldset>
@@ -74,10 +87,14 @@ export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId
           ))}
         </div>
       </fieldset>
-      <label className="block">
+      <div>
         <span className="font-bold">Photo</span>
-        <input type="file" accept="image/*" capture="environment" onChange={(e) => setPhoto(e.target.files?.[0] ?? null)} className="mt-1 block min-h-12 w-full" />
-      </label>
+        {/* The native file control is a small target; a large labelled one opens the camera. */}
+        <label className="mt-1 flex min-h-12 cursor-pointer items-center justify-center rounded-md px-3 font-bold edge focus-within:ring-2 focus-within:ring-accent">
+          <input type="file" accept="image/*" capture="environment" onChange={(e) => setPhoto(e.target.files?.[0] ?? null)} className="sr-only" />
+          {photo ? `Photo: ${photo.name || "from the camera"} — change` : "Take or choose a photo"}
+        </label>
+      </div>
       <label className="block">
         <span className="font-bold">Note</span>
         <textarea value={note} onChange={(e) => setNote(e.target.value)} maxLength={2000} rows={2} className="mt-1 block w-full rounded-md p-2 edge" />

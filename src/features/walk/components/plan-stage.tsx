@@ -4,7 +4,7 @@ import type { Context } from "konva/lib/Context";
 import type { Fixture } from "../../../../server/contracts/fixtures";
 import type { LocalReading } from "../model/local-types";
 import type { LagHint } from "../model/lag-hint";
-import { fitView, toPlan, zoomAt, type WalkView } from "../model/view";
+import { fitView, toPlan, toStage, zoomAt, type WalkView } from "../model/view";
 
 /** A finger that moves less than this is a tap, not a pan (px). */
 const TAP_SLOP_PX = 10;
@@ -146,6 +146,16 @@ export function PlanStage(props: PlanStageProps) {
     setView(zoomAt(v, p.x, p.y, Math.exp(-e.deltaY / 400)));
   }
 
+  // Buttons as well as pinching: a gloved hand cannot always pinch. Zoom about the reading on
+  // the keypad when there is one, else about the middle of the screen.
+  function zoomBy(factor: number) {
+    const v = viewRef.current;
+    if (!v) return;
+    const f = focusRef.current;
+    const c = f ? toStage(v, f.x, f.y) : { x: w / 2, y: h / 2 };
+    setView(zoomAt(v, c.x, c.y, factor));
+  }
+
   const ink = props.highContrast ? "#000000" : "#1c2529";
   const px = (n: number) => (view ? n / view.scale : n);
 
@@ -180,9 +190,16 @@ export function PlanStage(props: PlanStageProps) {
           </Layer>
         </Stage>
       ) : null}
+      <div className="absolute right-2 top-2 flex flex-col gap-2" onPointerDown={(e) => e.stopPropagation()} onPointerUp={(e) => e.stopPropagation()}>
+        <button type="button" className={ZOOM} aria-label="Zoom in" onClick={() => zoomBy(1.6)}>+</button>
+        <button type="button" className={ZOOM} aria-label="Zoom out" onClick={() => zoomBy(1 / 1.6)}>−</button>
+        <button type="button" className={`${ZOOM} text-sm`} aria-label="Show the whole plan" onClick={() => setView(fitView(props.widthM, props.heightM, w, h))}>All</button>
+      </div>
     </div>
   );
 }
+
+const ZOOM = "flex h-12 w-12 items-center justify-center rounded-md bg-surface text-2xl font-bold edge shadow active:opacity-70";
 
 function Fixtures({ fixtures, unsampled, ink, highContrast, pointR }: { fixtures: readonly Fixture[]; unsampled: ReadonlySet<string>; ink: string; highContrast: boolean; pointR: number }) {
   const shapes = useMemo(

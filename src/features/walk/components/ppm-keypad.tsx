@@ -20,6 +20,8 @@ export interface PpmKeypadProps {
   levels?: readonly { level: string; minPpm: number; maxPpm: number | null }[] | null;
   /** The keypad's typed text, lifted so a tap on the plan can save what is shown. */
   onTyped?(value: KeypadValue): void;
+  /** Move this reading: the next tap on the plan places it. */
+  onMove?(): void;
 }
 
 const KEY = "flex h-12 min-w-12 items-center justify-center rounded-md text-2xl font-bold edge active:opacity-70 disabled:opacity-50";
@@ -62,6 +64,11 @@ export function PpmKeypad(props: PpmKeypadProps) {
           {atLeast ? "≥ " : ""}
           {typed === "" ? "0" : typed} <span className="text-lg">ppm</span>
         </output>
+        {props.onMove ? (
+          <button type="button" className="min-h-12 min-w-12 shrink-0 rounded-md px-2 font-bold edge" onClick={props.onMove}>
+            Move
+          </button>
+        ) : null}
         <button type="button" className="min-h-12 shrink-0 rounded-md px-2 font-bold text-accent underline" onClick={props.onCancel}>
           {props.cancelLabel}
         </button>

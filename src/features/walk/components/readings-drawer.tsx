@@ -1,20 +1,60 @@
 import { SAMPLE_POINT_LABELS } from "../../../../server/contracts/sweeps";
 import { Dialog } from "../../../components/ui/dialog";
-import type { LocalReading } from "../model/local-types";
+import { COMPONENT_LABELS } from "../../../../server/contracts/findings";
+import type { LocalFinding, LocalReading } from "../model/local-types";
 
 function stateWord(r: LocalReading): string {
+  if (r.draft) return "On the keypad — kept on this device";
   if (r.state === "rejected") return "Refused — fix it";
   if (r.state === "pending" || r.editPending) return "Waiting to upload";
   return "Uploaded";
 }
 
 /** Every reading of the sweep, newest first, to edit or delete; refused ones show why. */
-export function ReadingsDrawer(props: { open: boolean; readings: readonly LocalReading[]; timeZone: string; onEdit(r: LocalReading): void; onDelete(r: LocalReading): void; onClose(): void }) {
+export function ReadingsDrawer(props: {
+  open: boolean;
+  readings: readonly LocalReading[];
+  openId: string | null;
+  /** Pinpointed leaks of this sweep still on the device. */
+  findings: readonly LocalFinding[];
+  timeZone: string;
+  onEdit(r: LocalReading): void;
+  onMove(r: LocalReading): void;
+  onDelete(r: LocalReading): void;
+  onDiscardFinding(clientId: string): void;
+  onClose(): void;
+}) {
   if (!props.open) return null; // thousands of rows: build them only when the list is shown
   const fmt = new Intl.DateTimeFormat("en-GB", { timeStyle: "medium", timeZone: props.timeZone });
   const list = [...props.readings].map((r, i) => ({ r, n: i + 1 })).reverse();
   return (
     <Dialog title={`Readings (${props.readings.length})`} open={props.open} onClose={props.onClose} wide>
+      {props.findings.length ? (
+        <section aria-label="Leaks marked on this device" className="mb-3">
+          <h3 className="font-bold">Leaks marked here, not yet on the server</h3>
+          <ul className="flex flex-col gap-2">
+            {props.findings.map((f) => (
+              <li key={f.clientId} className={`rounded-md p-3 edge ${f.state === "rejected" ? "border-danger bg-danger-soft" : ""}`} data-testid="queued-finding">
+                <span className="font-bold">
+                  {f.input.status === "confirmed" ? "Confirmed" : "Suspected"} leak{f.input.component ? ` · ${COMPONENT_LABELS[f.input.component]}` : ""}
+                  {f.photo ? " · with photo" : ""}
+                </span>
+                <span className="block text-muted">{f.state === "rejected" ? "Refused by the server" : "Waiting to upload"}</span>
+                {f.reasons ? (
+                  <ul className="text-danger">
+                    {Object.entries(f.reasons).map(([k, m]) => <li key={k}>{k ? `${k} ${m}` : m}</li>)}
+                  </ul>
+                ) : null}
+                {f.state === "rejected" ? (
+                  <button type="button" className="mt-2 min-h-12 rounded-md px-4 font-bold text-danger edge" onClick={() => props.onDiscardFinding(f.clientId)}>
+                    Discard — mark it again
+                  </button>
+                ) : null}
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
       {list.length === 0 ? <p>No readings yet: tap the plan where the probe is.</p> : null}
       <ol className="flex flex-col gap-2">
         {list.map(({ r, n }) => (
@@ -37,7 +77,8 @@ export function ReadingsDrawer(props: { open: boolean; readings: readonly LocalR
               </ul>
             ) : null}
             <div className="mt-2 flex gap-2">
-              <button type="button" className="min-h-12 rounded-md px-4 font-bold edge" onClick={() => props.onEdit(r)}>Edit</button>
+              <button type="button" className="min-h-12 rounded-md px-4 font-bold edge" onClick={() => props.onEdit(r)}>{r.id === props.openId ? "Back to keypad" : "Edit"}</button>
+              <button type="button" className="min-h-12 rounded-md px-4 font-bold edge" onClick={() => props.onMove(r)}>Move</button>
               <button type="button" className="min-h-12 rounded-md px-4 font-bold text-danger edge" onClick={() => props.onDelete(r)}>Delete</button>
             </div>
           </li>

@@ -1,77 +1,92 @@
-import { useEffect, useMemo, useRef, useState, type ReactNode } from "react";
-import { Link } from "react-router";
+import { useMemo, useRef, useState, type ReactNode } from "react";
+import { useNavigate } from "react-router";
 import type { CautionPlace } from "../../../../server/domain/safety/cautions";
 import { FIXTURE_KIND_NAMES } from "../../../../server/contracts/fixture-kinds";
 import { Alert } from "../../../components/ui/alert";
+import type { LengthPreference } from "../../../../server/domain/units/format-units";
 import { Spinner } from "../../../components/ui/spinner";
+import { countOf } from "../../../lib/format";
 import { usePlanPack, useStorePack } from "../api/store-pack";
 import { useHighContrast } from "../hooks/use-high-contrast";
 import { useSyncStatus } from "../hooks/use-sync-status";
+import { useQueuedFindings } from "../hooks/use-queued-findings";
+import { useOpenReading } from "../hooks/use-open-reading";
 import { useWalk } from "../hooks/use-walk";
 import { fixtureAt, unsampledFixtures } from "../model/coverage";
 import { latestLagHint } from "../model/lag-hint";
 import type { LocalReading } from "../model/local-types";
 import { enteredRoom } from "../model/room-entry";
+import { walkModelFor } from "../model/walk-model";
 import { CautionDialog } from "./caution-dialog";
+import { LagHintBanner } from "./lag-hint-banner";
 import { LeakForm, type LeakSpot } from "./leak-form";
 import { LogImport } from "./log-import";
 import { PlanStage } from "./plan-stage";
 import { PpmKeypad, type KeypadValue } from "./ppm-keypad";
 import { ReadingsDrawer } from "./readings-drawer";
 import { SubmitSummary } from "./submit-summary";
+import { SweepWarnings } from "./sweep-warnings";
 import { SyncBanner } from "./sync-banner";
-
-const TOOL = "flex min-h-12 min-w-12 flex-1 items-center justify-center rounded-md px-1 font-bold leading-tight edge disabled:opacity-50";
+import { WalkTools } from "./walk-tools";
 
 /** The sweep capture screen: the plan fills the screen; one tap drops a reading there. */
-export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { storeId: string; sweepId: string; contrastToggle: ReactNode; leaveTo: string }) {
+export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo, lengthUnit = "m" }: { storeId: string; sweepId: string; contrastToggle: ReactNode; leaveTo: string; lengthUnit?: LengthPreference }) {
   const walk = useWalk(sweepId);
   const storePack = useStorePack(storeId);
   const planPack = usePlanPack(walk.sweep?.planId);
   const sync = useSyncStatus();
+  const queuedFindings = useQueuedFindings(sweepId);
+  const { draftId, draftRef, setDraftId, typed, readingsRef, serial, commitOpen, keepTyped, undo } = useOpenReading(walk);
   const highContrast = useHighContrast();
-  const [draftId, setDraftIdState] = useState<string | null>(null);
-  // Taps can come faster than IndexedDB answers: actions run one after another, reading the
-  // latest draft and readings from refs rather than from a render that may be behind.
-  const draftRef = useRef<string | null>(null);
-  const setDraftId = (id: string | null) => {
-    draftRef.current = id;
-    setDraftIdState(id);
-  };
-  const chain = useRef<Promise<unknown>>(Promise.resolve());
-  const serial = <A extends unknown[]>(fn: (...args: A) => Promise<void>) => (...args: A) => {
-    chain.current = chain.current.then(() => fn(...args)).catch((e) => console.error(e));
-  };
-  const readingsRef = useRef(walk.readings);
-  readingsRef.current = walk.readings;
   const [editing, setEditing] = useState<LocalReading | null>(null);
-  const typed = useRef<KeypadValue | null>(null);
   const [caution, setCaution] = useState<{ place: CautionPlace; name: string } | null>(null);
   const [leakMode, setLeakMode] = useState(false);
   const [leakSpot, setLeakSpot] = useState<LeakSpot | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
   const [dialog, setDialog] = useState<"list" | "summary" | "import" | null>(null);
   const [dismissedAlarm, setDismissedAlarm] = useState(-1);
-  const [showWarnings, setShowWarnings] = useState(false);
-
-  // A tap whose keypad was open when the tab closed or crashed comes back on the keypad.
-  const restored = useRef(false);
-  useEffect(() => {
-    if (walk.loading || restored.current) return;
-    restored.current = true;
-    const leftover = walk.readings.findLast((r) => r.draft);
-    if (leftover) setDraftId(leftover.id);
-  }, [walk.loading, walk.readings]);
+  /** A reading waiting for a tap on the plan that moves it there. */
+  const [moving, setMoving] = useState<string | null>(null);
+  const navigate = useNavigate();
 
   const fixtures = planPack.data?.fixtures ?? [];
-  const committed = useMemo(() => walk.readings.filter((r) => !r.draft || r.id !== draftId), [walk.readings, draftId]);
-  const unsampled = useMemo(() => unsampledFixtures(fixtures, committed), [fixtures, committed]);
+  // Every reading counts from its tap, the open one included: the count, coverage, the list and the
+  // submit summary see it. The lag hint and quick picks wait for its value to be committed.
+  const all = walk.readings;
+  // Kept identical while only the open reading changes (typing), so the lag hint is not redone per key.
+  const committedRef = useRef<LocalReading[]>([]);
+  const committed = useMemo(() => {
+    const next = walk.readings.filter((r) => !r.draft);
+    const prev = committedRef.current;
+    if (prev.length === next.length && next.every((r, i) => r === prev[i])) return prev;
+    committedRef.current = next;
+    return next;
+  }, [walk.readings]);
+  // Where readings were taken, kept identical while only values change (typing on the keypad).
+  const positionsRef = useRef<{ x: number; y: number }[]>([]);
+  const positions = useMemo(() => {
+    const prev = positionsRef.current;
+    if (prev.length === all.length && all.every((r, i) => r.x === prev[i].x && r.y === prev[i].y)) return prev;
+    positionsRef.current = all.map((r) => ({ x: r.x, y: r.y }));
+    return positionsRef.current;
+  }, [all]);
+  const unsampled = useMemo(() => unsampledFixtures(fixtures, positions), [fixtures, positions]);
   // Keyed by content, so the fixtures layer (and the plan image under it) redraws only when
   // coverage really changes, not on every tap.
   const unsampledKey = unsampled.map((f) => f.id).join(",");
   const unsampledIds = useMemo(() => new Set(unsampledKey ? unsampledKey.split(",") : []), [unsampledKey]);
   const sweep = walk.sweep;
-  const hint = useMemo(() => (sweep ? latestLagHint(committed, sweep.transportDelayS, sweep.timeConstantS, sweep.alarmPpm) : null), [committed, sweep]);
+  // The locator's route between taps (around solid bodies) and pace, built once per plan.
+  const planDims = planPack.data?.plan;
+  const walkModel = useMemo(() => {
+    try {
+      return walkModelFor({ widthM: planDims?.widthM ?? null, heightM: planDims?.heightM ?? null }, fixtures);
+    } catch {
+      return {}; // a plan the locator cannot read yet: straight lines between taps
+    }
+    // fixtures come with the plan pack
+  }, [planPack.data]);
+  const hint = useMemo(() => (sweep ? latestLagHint(committed, sweep.transportDelayS, sweep.timeConstantS, sweep.alarmPpm, walkModel) : null), [committed, sweep, walkModel]);
   const recent = useMemo(() => {
     const out: number[] = [];
     for (let i = committed.length - 1; i >= 0 && out.length < 4; i--) if (committed[i].ppm > 0 && !out.includes(committed[i].ppm)) out.push(committed[i].ppm);
@@ -87,6 +102,13 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
 
   const onTap = serial(async (x: number, y: number, at: number) => {
     if (readOnly) return;
+    if (moving) {
+      const id = moving;
+      setMoving(null);
+      const moved = await walk.move(id, x, y);
+      if (moved && editing?.id === id) setEditing(moved);
+      return;
+    }
     if (leakMode) {
       setLeakMode(false);
       setLeakSpot({ x, y, fixtureId: fixtureAt(fixtures, x, y)?.id ?? null });
@@ -119,17 +141,20 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
     await walk.save(id, v);
   });
 
-  const undo = serial(async () => {
-    const id = draftRef.current;
-    if (id) {
-      setDraftId(null);
-      await walk.remove(id);
-      return;
-    }
-    const done = readingsRef.current.filter((r) => !r.draft);
-    const last = done[done.length - 1];
-    if (last) await walk.remove(last.id);
+
+
+  const submit = serial(async () => {
+    setDialog(null);
+    await commitOpen();
+    await walk.submit();
+    setNotice("Sweep submitted. It goes to the server as soon as every reading is uploaded.");
   });
+
+  const leave = serial(async () => {
+    await commitOpen();
+    navigate(leaveTo);
+  });
+
 
   const keypadFor = draft ?? editing;
   const showHint = hint && hint.index !== dismissedAlarm ? hint : null;
@@ -138,46 +163,30 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
     <div className="fixed inset-0 z-30 flex flex-col bg-paper" data-testid="walk-screen">
       <header className="flex flex-col gap-2 bg-surface p-2 edge border-x-0 border-t-0">
         <div className="flex items-center justify-between gap-2">
-          <Link to={leaveTo} className="inline-flex min-h-12 shrink-0 items-center whitespace-nowrap rounded-md px-3 font-bold edge no-underline">← Leave</Link>
+          <button type="button" onClick={() => leave()} className="inline-flex min-h-12 shrink-0 items-center whitespace-nowrap rounded-md px-3 font-bold edge">← Leave</button>
           <p className="min-w-0 flex-1 text-center leading-tight">
             <span className="block truncate font-bold">{storePack.data?.store.name ?? "Sweep"}</span>
-            <span className="block truncate text-sm text-muted" data-testid="walk-count">{sweep.detectorName} · {committed.length} readings{sweep.status !== "in-progress" ? ` · ${sweep.status}` : sweep.submitPending ? " · submitting" : ""}</span>
+            <span className="block truncate text-sm text-muted" data-testid="walk-count">{countOf(all.length, "reading")}{sweep.status !== "in-progress" ? ` · ${sweep.status}` : sweep.submitPending ? " · submitting" : ""} · {sweep.detectorName}</span>
           </p>
           {contrastToggle}
         </div>
-        <div className="flex gap-2">
-          <div className="min-w-0 flex-1">
-            <SyncBanner status={sync} onShowRejected={() => setDialog("list")} />
-          </div>
-          {sweep.warnings.length ? (
-            <button type="button" aria-expanded={showWarnings} onClick={() => setShowWarnings(!showWarnings)} className="min-h-12 shrink-0 rounded-md border-l-4 border-note bg-note-soft px-3 font-bold text-note edge">
-              {sweep.warnings.length} {sweep.warnings.length === 1 ? "warning" : "warnings"}
-            </button>
-          ) : null}
-        </div>
-        {showWarnings ? (
-          <ul className="max-h-48 overflow-auto">
-            {sweep.warnings.map((w) => <li key={w.code + (w.systemId ?? "")} className="mb-1 rounded-md border-l-4 border-note bg-note-soft px-3 py-1 text-note edge">{w.message}</li>)}
-          </ul>
-        ) : null}
+        <SweepWarnings warnings={sweep.warnings}>
+          <SyncBanner status={sync} onShowRejected={() => setDialog("list")} />
+        </SweepWarnings>
         {sweep.rejected ? (
           <Alert tone="error" title="The server refused this sweep">
             {Object.entries(sweep.rejected).map(([k, m]) => (k ? `${k} ${m}` : m)).join("; ")} Its readings stay on this device.
           </Alert>
         ) : null}
         {leakMode ? <Alert tone="info">Tap the plan where the leak is.</Alert> : null}
-        {notice ? <Alert tone="success"><span>{notice} </span><button type="button" className="min-h-12 underline" onClick={() => setNotice(null)}>Dismiss</button></Alert> : null}
-        {showHint ? (
-          <div role="alert" className="flex items-center justify-between gap-2 rounded-md border-l-4 border-danger bg-danger-soft px-3 py-1 edge" data-testid="lag-hint">
-            <span>
-              <strong>Alarm: {committed[showHint.index]?.ppm} ppm.</strong>{" "}
-              {showHint.beforeDelay
-                ? "The detector had not yet drawn air from beyond the first reading: re-check around the start."
-                : `The air was sampled about ${showHint.backM.toFixed(1)} m back along your path (yellow diamond). Re-check at about 0.6 m spacing from there (rings).`}
-            </span>
-            <button type="button" className="min-h-12 shrink-0 font-bold underline" onClick={() => setDismissedAlarm(showHint.index)}>OK</button>
+        {moving ? (
+          <div role="status" className="flex items-center justify-between gap-2 rounded-md border-l-4 border-accent bg-accent-soft px-3 edge">
+            <span className="font-bold">Tap the plan where reading #{all.findIndex((r) => r.id === moving) + 1} was taken.</span>
+            <button type="button" className="min-h-12 shrink-0 font-bold underline" onClick={() => setMoving(null)}>Cancel move</button>
           </div>
         ) : null}
+        {notice ? <Alert tone="success"><span>{notice} </span><button type="button" className="min-h-12 underline" onClick={() => setNotice(null)}>Dismiss</button></Alert> : null}
+        {showHint ? <LagHintBanner hint={showHint} ppm={committed[showHint.index]?.ppm ?? 0} lengthUnit={lengthUnit} onDismiss={() => setDismissedAlarm(showHint.index)} /> : null}
       </header>
       <div className="flex min-h-0 flex-1 flex-col landscape:md:flex-row">
       <div className="min-h-0 min-w-0 flex-1">
@@ -200,51 +209,57 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
         <div className="landscape:md:w-96 landscape:md:overflow-y-auto">
         <PpmKeypad
           key={keypadFor.id}
-          title={editing ? `Edit reading #${walk.readings.indexOf(keypadFor) + 1}` : `Reading #${walk.readings.indexOf(keypadFor) + 1}`}
+          title={editing ? `Edit #${walk.readings.indexOf(keypadFor) + 1}` : `#${walk.readings.indexOf(keypadFor) + 1}`}
           initial={{ ppm: keypadFor.ppm, atLeast: keypadFor.atLeast, samplePoint: keypadFor.samplePoint, note: keypadFor.note }}
           recent={recent}
           levels={storePack.data?.detectors.find((d) => d.id === sweep.detectorId)?.levelScale ?? null}
-          onTyped={(v) => (typed.current = v)}
+          onTyped={(v) => (editing ? undefined : keepTyped(keypadFor.id, v))}
+          onMove={() => setMoving(keypadFor.id)}
           onSave={(v) => saveKeypad(v)}
-          cancelLabel={editing ? "Cancel edit" : "Discard this tap"}
+          cancelLabel={editing ? "Cancel" : "Discard"}
           onCancel={() => (editing ? setEditing(null) : undo())}
         />
         </div>
       ) : null}
       </div>
-      {keypadFor ? null : (
-        <nav aria-label="Sweep tools" className="flex gap-2 bg-surface p-2 edge border-x-0 border-b-0">
-          <button type="button" className={`${TOOL} bg-surface`} onClick={() => undo()} disabled={readOnly || committed.length === 0}>Undo</button>
-          <button type="button" className={`${TOOL} bg-surface`} onClick={() => setDialog("list")}>Readings</button>
-          <button type="button" className={`${TOOL} bg-surface`} onClick={() => setLeakMode(!leakMode)} aria-pressed={leakMode} disabled={readOnly}>Leak here</button>
-          <button type="button" className={`${TOOL} bg-surface`} onClick={() => setDialog("import")} disabled={readOnly}>Import log</button>
-          <button type="button" className={`${TOOL} bg-accent text-on-accent`} onClick={() => setDialog("summary")} disabled={sweep.status !== "in-progress" || sweep.submitPending}>Submit</button>
-        </nav>
-      )}
+      <WalkTools
+        readOnly={readOnly}
+        canUndo={all.length > 0}
+        canSubmit={sweep.status === "in-progress" && !sweep.submitPending}
+        leakMode={leakMode}
+        onUndo={() => undo()}
+        onList={() => setDialog("list")}
+        onLeak={() => setLeakMode(!leakMode)}
+        onImport={() => setDialog("import")}
+        onSubmit={() => setDialog("summary")}
+      />
       <CautionDialog place={caution?.place ?? null} name={caution?.name ?? ""} onClose={() => setCaution(null)} />
       <ReadingsDrawer
         open={dialog === "list"}
-        readings={committed}
+        readings={all}
+        openId={draftId}
+        findings={queuedFindings.list}
+        onDiscardFinding={(id) => void queuedFindings.discard(id)}
         timeZone={storePack.data?.store.timeZone ?? Intl.DateTimeFormat().resolvedOptions().timeZone}
         onEdit={(r) => {
           setDialog(null);
-          setEditing(r);
+          if (r.id !== draftRef.current) setEditing(r);
         }}
-        onDelete={(r) => void walk.remove(r.id)}
+        onMove={(r) => {
+          setDialog(null);
+          setMoving(r.id);
+        }}
+        onDelete={(r) => (r.id === draftRef.current ? undo() : void walk.remove(r.id))}
         onClose={() => setDialog(null)}
       />
       {dialog === "summary" ? <SubmitSummary
         open
-        readings={committed}
+        readings={all.map((r) => (r.id === draftId && typed.current ? { ...r, ...typed.current } : r))}
         alarmPpm={sweep.alarmPpm}
         unsampled={unsampled}
         waiting={sync.waiting}
         onClose={() => setDialog(null)}
-        onSubmit={() => {
-          setDialog(null);
-          void walk.submit();
-          setNotice("Sweep submitted. It goes to the server as soon as every reading is uploaded.");
-        }}
+        onSubmit={() => submit()}
       /> : null}
       {dialog === "import" ? <LogImport
         open
@@ -254,7 +269,7 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
         onImport={(list) => {
           setDialog(null);
           void walk.addMany(list);
-          setNotice(`${list.length} readings added from the detector's log.`);
+          setNotice(`${countOf(list.length, "reading")} added from the detector's log.`);
         }}
       /> : null}
       {leakSpot ? (
@@ -264,10 +279,11 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo }: { stor
           planId={plan.id}
           sweepId={sweep.id}
           fixtures={fixtures}
+          lengthUnit={lengthUnit}
           onClose={() => setLeakSpot(null)}
           onSaved={() => {
             setLeakSpot(null);
-            setNotice("Finding saved.");
+            setNotice("Finding saved. It is kept on this device and uploads with the readings.");
           }}
         />
       ) : null}

@@ -2,7 +2,7 @@ import { useCallback, useEffect, useRef, useState } from "react";
 import type { SamplePoint } from "../../../../server/contracts/sweeps";
 import { pullSweep } from "../api/remote-sweep";
 import type { LocalReading, LocalSweep, ReadingValues } from "../model/local-types";
-import { addReading, getLocalSweep, removeReading, saveSweep, sweepReadings, updateReading } from "../model/reading-store";
+import { addReading, commitDrafts, getLocalSweep, keepDraftValues, removeReading, saveSweep, sweepReadings, updateReading } from "../model/reading-store";
 import { walkDb } from "../model/walk-db";
 import { refreshCounts, subscribeSync, syncSoon } from "./sync-loop";
 
@@ -109,6 +109,28 @@ export function useWalk(sweepId: string) {
     [changed],
   );
 
+  /** What the keypad shows on the open reading: on the device only, never uploaded while open. */
+  const keepDraft = useCallback(async (id: string, values: Partial<ReadingValues>) => {
+    const db = await walkDb();
+    const r = await keepDraftValues(db, id, values);
+    if (r) setState((s) => ({ ...s, readings: s.readings.map((x) => (x.id === id ? r : x)) }));
+    return r;
+  }, []);
+
+  /**
+   * Moves a reading on the plan. The open one just moves (it is not uploaded yet); a committed one
+   * changes as an edit, which the server keeps in the audit trail and which marks its analysis stale.
+   */
+  const move = useCallback(
+    async (id: string, x: number, y: number) => {
+      const db = await walkDb();
+      const now = await db.get("readings", id);
+      if (!now) return undefined;
+      return now.draft ? keepDraft(id, { x, y }) : save(id, { x, y });
+    },
+    [keepDraft, save],
+  );
+
   const remove = useCallback(
     async (id: string) => {
       const db = await walkDb();
@@ -133,10 +155,12 @@ export function useWalk(sweepId: string) {
     const db = await walkDb();
     const s = await getLocalSweep(db, sweepId);
     if (!s) return;
+    // The reading still on the keypad is part of the sweep: it is committed with the submit.
+    await commitDrafts(db, sweepId);
     await saveSweep(db, { ...s, submitPending: true });
     await reload();
     changed();
   }, [sweepId, reload, changed]);
 
-  return { ...state, tap, saveAndTap, save, remove, addMany, submit, reload };
+  return { ...state, tap, saveAndTap, save, keepDraft, move, remove, addMany, submit, reload };
 }

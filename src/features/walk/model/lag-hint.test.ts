@@ -1,5 +1,10 @@
 import { describe, expect, it } from "vitest";
+import type { Fixture } from "../../../../server/contracts/fixtures";
+import { locatorInputSchema } from "../../../../server/contracts/locator-input";
+import { locate } from "../../../../server/analysis/locate";
+import { toLocatorPlan } from "../../../../server/domain/layout/to-locator-input";
 import { latestLagHint, RECHECK_SPACING_M } from "./lag-hint";
+import { walkModelFor } from "./walk-model";
 
 const start = Date.parse("2026-11-02T14:00:00Z");
 const walk = (n: number, ppmAt: (i: number) => number) =>
@@ -25,5 +30,46 @@ describe("the Walk screen's lag hint", () => {
 
   it("gives no hint below the alarm level", () => {
     expect(latestLagHint(walk(10, () => 1.9), 5, 0, 2)).toBeNull();
+  });
+});
+
+describe("the lag hint and the locator agree", () => {
+  // A 10 m x 6 m plan with a shelving run from the north wall down to y = 4 m between two taps: the
+  // technician walks around its south end, so the air sampled mid-way was there, not inside the run.
+  const gondola: Fixture = { id: "5b0c7f4e-2a1d-4c3b-9e8f-7a6b5c4d3e2f", kind: "gondola", label: "Aisle 1", systemId: null, hasFans: false, polygon: [[4, 0], [5, 0], [5, 4], [4, 4]] };
+  const plan = { widthM: 10, heightM: 6 };
+  const taps = [
+    { x: 3, y: 2, s: 0, ppm: 0 },
+    { x: 6, y: 2, s: 6, ppm: 0 },
+    { x: 7, y: 2, s: 7, ppm: 9 },
+  ];
+  const readings = taps.map((t) => ({ x: t.x, y: t.y, takenAt: new Date(start + t.s * 1000).toISOString(), ppm: t.ppm, atLeast: false }));
+
+  it("places the alarm's air where the server's locator corrects that reading to, around the shelving", () => {
+    const hint = latestLagHint(readings, 3.5, 0, 2, walkModelFor(plan, [gondola]))!;
+    const result = locate(
+      locatorInputSchema.parse({
+        plan: toLocatorPlan({ width: 10, height: 6 }, [gondola], { fansRunning: true }),
+        instrument: { transportDelayS: 3.5, timeConstantS: 0, alarmPpm: 2 },
+        readings: taps.map((t) => ({ x: t.x, y: t.y, t: t.s, ppm: t.ppm })),
+      }),
+    );
+    const corrected = result.readings[2].corrected;
+    // the locator reports corrected positions to the centimetre
+    expect(Math.abs(hint.x - corrected.x)).toBeLessThanOrEqual(0.005);
+    expect(Math.abs(hint.y - corrected.y)).toBeLessThanOrEqual(0.005);
+    // not inside the shelving run (x 4–5 m, y 0–4 m), where a straight line between the taps puts it
+    expect(hint.x >= 4 && hint.x <= 5 && hint.y <= 4).toBe(false);
+    const straight = latestLagHint(readings, 3.5, 0, 2)!;
+    expect(straight.y).toBeCloseTo(2, 9);
+    expect(straight.x).toBeGreaterThan(4);
+    expect(straight.x).toBeLessThan(5);
+  });
+
+  it("measures the way back along the route, not across the shelving", () => {
+    const hint = latestLagHint(readings, 3.5, 0, 2, walkModelFor(plan, [gondola]))!;
+    // 1 m from the alarm tap back to (6, 2), then part of the leg round the run's end
+    expect(hint.backM).toBeGreaterThan(1 + Math.hypot(hint.x - 6, hint.y - 2) - 1e-6);
+    for (const p of hint.recheck) expect(p.x >= 4 && p.x <= 5 && p.y <= 4).toBe(false);
   });
 });

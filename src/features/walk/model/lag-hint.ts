@@ -1,4 +1,6 @@
-import { alongPolyline, lagCorrect, type Tap } from "../../../../server/analysis/lag/lag-correct";
+import type { Route, Tap } from "../../../../server/analysis/lag/lag-correct";
+import { alongPolyline } from "../../../../server/analysis/lag/lag-correct";
+import { walkLag } from "../../../../server/analysis/lag/walk-lag";
 
 /**
  * Closer spacing for a re-check around where an alarm's air was sampled: about 0.6 m
@@ -29,18 +31,38 @@ interface PathReading {
   atLeast: boolean;
 }
 
-function cumulative(path: readonly (readonly [number, number])[]): number[] {
-  const out = [0];
-  for (let i = 1; i < path.length; i++) out.push(out[i - 1] + Math.hypot(path[i][0] - path[i - 1][0], path[i][1] - path[i - 1][1]));
+/** How the walk between taps is taken: the locator's route and pace (server/analysis/lag/walk-lag.ts). */
+export interface WalkModel {
+  route?: Route;
+  walkSpeedMps?: number;
+}
+
+type Pt = readonly [number, number];
+
+function length(path: readonly Pt[]): number {
+  let total = 0;
+  for (let i = 1; i < path.length; i++) total += Math.hypot(path[i][0] - path[i - 1][0], path[i][1] - path[i - 1][1]);
+  return total;
+}
+
+/** The walked polyline through taps[from..to], each leg routed as the lag function routes it. */
+function walkedPath(taps: readonly Tap[], from: number, to: number, route: Route | undefined): Pt[] {
+  const out: Pt[] = [[taps[from].x, taps[from].y]];
+  for (let k = from; k < to; k++) {
+    const leg = (route && route(taps[k], taps[k + 1])) || [[taps[k].x, taps[k].y], [taps[k + 1].x, taps[k + 1].y]];
+    out.push(...leg.slice(1));
+  }
   return out;
 }
 
 /**
  * For the latest reading at or above the alarm level: the lag-corrected point (one transport
- * delay plus the sensor's time constant back along the path, interpolated by timestamps, by the
- * same lagCorrect the server's locator uses) and re-check spots around it. Null when no alarm.
+ * delay plus the sensor's time constant back along the walked route, by walkLag, the function the
+ * server's locator uses, with the same route and pace) and re-check spots around it. Null when no
+ * alarm. Only the taps from the one before the sampled moment are handed to walkLag: the result
+ * for the alarm is the same (it depends on those alone) and a long sweep costs no more than a short one.
  */
-export function latestLagHint(readings: readonly PathReading[], delayS: number, timeConstantS: number, alarmPpm: number): LagHint | null {
+export function latestLagHint(readings: readonly PathReading[], delayS: number, timeConstantS: number, alarmPpm: number, walk: WalkModel = {}): LagHint | null {
   let index = -1;
   for (let i = readings.length - 1; i >= 0; i--) {
     if (readings[i].ppm >= alarmPpm) {
@@ -51,30 +73,38 @@ export function latestLagHint(readings: readonly PathReading[], delayS: number, 
   if (index < 0) return null;
   const t0 = Date.parse(readings[0].takenAt);
   const taps: Tap[] = readings.slice(0, index + 1).map((r) => ({ x: r.x, y: r.y, t: (Date.parse(r.takenAt) - t0) / 1000 }));
-  // lagCorrect needs taps in time order; an edited timestamp may break it, so sort a copy.
-  const order = taps.map((_, i) => i).sort((a, b) => taps[a].t - taps[b].t);
+  // walkLag needs taps in time order; an edited timestamp may break it, so sort a copy.
+  const order = taps.map((_, i) => i).sort((a, b) => taps[a].t - taps[b].t || a - b);
   const sorted = order.map((i) => taps[i]);
-  const lagged = lagCorrect(sorted, delayS, timeConstantS)[order.indexOf(index)];
-  const path = sorted.map((t) => [t.x, t.y] as const);
-  const along = cumulative(path);
-  const total = along[along.length - 1];
-  const backM = nearestArc(path, along, lagged.x, lagged.y);
+  const p = order.indexOf(index);
+  const s = sorted[p].t - delayS - timeConstantS;
+  if (s < sorted[0].t) return { index, x: sorted[0].x, y: sorted[0].y, beforeDelay: true, backM: 0, recheck: [] };
+  let j = p;
+  while (j > 0 && sorted[j].t > s) j--;
+  const window = sorted.slice(j, p + 1);
+  const lagged = walkLag(window, delayS, timeConstantS, walk.route, walk.walkSpeedMps)[window.length - 1];
+  // Back along the walked path to that point, and spots around it (reaching a little further back).
+  let k = j;
+  for (let back = 0; k > 0 && back < RECHECK_EACH_SIDE * RECHECK_SPACING_M + 0.2; k--) back += Math.hypot(sorted[k].x - sorted[k - 1].x, sorted[k].y - sorted[k - 1].y);
+  const path = walkedPath(sorted, k, p, walk.route);
+  const total = length(path);
+  const backM = nearestArc(path, lagged.x, lagged.y);
   const recheck: { x: number; y: number }[] = [];
-  for (let k = -RECHECK_EACH_SIDE; k <= RECHECK_EACH_SIDE; k++) {
-    const s = total - backM + k * RECHECK_SPACING_M;
-    if (s < 0 || s > total || total === 0) continue;
-    const [x, y] = alongPolyline(path, s / total);
+  for (let r = -RECHECK_EACH_SIDE; r <= RECHECK_EACH_SIDE; r++) {
+    const at = total - backM + r * RECHECK_SPACING_M;
+    if (at < -1e-9 || at > total + 1e-9 || total === 0) continue;
+    const [x, y] = alongPolyline(path, at / total);
     recheck.push({ x, y });
   }
-  return { index, x: lagged.x, y: lagged.y, beforeDelay: lagged.beforeDelay, backM, recheck };
+  return { index, x: lagged.x, y: lagged.y, beforeDelay: false, backM, recheck };
 }
 
 /** Arc length from the path's END back to the path point nearest (x, y). */
-function nearestArc(path: readonly (readonly [number, number])[], along: number[], x: number, y: number): number {
-  const total = along[along.length - 1];
+function nearestArc(path: readonly Pt[], x: number, y: number): number {
   if (path.length < 2) return 0;
   let best = Infinity;
-  let bestS = total;
+  let bestS = 0;
+  let along = 0;
   for (let i = 1; i < path.length; i++) {
     const [ax, ay] = path[i - 1];
     const [bx, by] = path[i];
@@ -83,8 +113,9 @@ function nearestArc(path: readonly (readonly [number, number])[], along: number[
     const d = Math.hypot(ax + g * (bx - ax) - x, ay + g * (by - ay) - y);
     if (d < best - 1e-12) {
       best = d;
-      bestS = along[i - 1] + g * len;
+      bestS = along + g * len;
     }
+    along += len;
   }
-  return total - bestS;
+  return along - bestS;
 }

@@ -1,3 +1,4 @@
+import type { CreateFindingInput } from "../../../../server/contracts/findings";
 import type { SamplePoint, SweepWarning } from "../../../../server/contracts/sweeps";
 
 /** A sweep as the device holds it; `onServer` turns true once the server has it. */
@@ -50,3 +51,20 @@ export interface LocalReading {
 }
 
 export type ReadingValues = Pick<LocalReading, "x" | "y" | "takenAt" | "ppm" | "atLeast" | "samplePoint" | "note">;
+
+/**
+ * A pinpointed leak ("Leak here") as the device holds it until the server has it and its photo.
+ * Keyed by the finding's client id, which makes a resent create store it once.
+ */
+export interface LocalFinding {
+  clientId: string;
+  storeId: string;
+  sweepId: string;
+  input: CreateFindingInput & { clientId: string };
+  /** The photo's bytes (an ArrayBuffer clones into IndexedDB everywhere; a File may not). */
+  photo: { name: string; type: string; data: ArrayBuffer } | null;
+  state: "pending" | "rejected";
+  /** The server's id once the finding is stored (the photo may still be waiting). */
+  findingId: string | null;
+  reasons: Record<string, string> | null;
+}

@@ -1,3 +1,4 @@
+import { findingCounts } from "./finding-queue";
 import type { WalkDb } from "./walk-db";
 import type { LocalReading, LocalSweep, ReadingValues } from "./local-types";
 
@@ -66,6 +67,30 @@ export async function updateReading(db: WalkDb, id: string, values: Partial<Read
   return next;
 }
 
+/**
+ * What the keypad shows on the open reading, kept on the device as it is typed so a reload brings it
+ * back. Only while the reading is still open: once committed (next tap, Save, Submit, leaving the
+ * screen), a late keystroke must never change it behind the technician's back.
+ */
+export async function keepDraftValues(db: WalkDb, id: string, values: Partial<ReadingValues>): Promise<LocalReading | undefined> {
+  const tx = db.transaction("readings", "readwrite", RELAXED);
+  const r = await tx.store.get(id);
+  if (!r || !r.draft) return undefined;
+  const next: LocalReading = { ...r, ...values };
+  await tx.store.put(next);
+  await tx.done;
+  return next;
+}
+
+/** Commits every open reading of a sweep as it stands on the device (before a submit). */
+export async function commitDrafts(db: WalkDb, sweepId: string): Promise<number> {
+  const tx = db.transaction("readings", "readwrite", RELAXED);
+  const open = (await tx.store.index("byState").getAll("draft")).filter((r) => r.sweepId === sweepId);
+  await Promise.all(open.map((r) => tx.store.put({ ...r, draft: false, state: "pending" })));
+  await tx.done;
+  return open.length;
+}
+
 /** Undo or delete: a reading the server never saw just goes; one it has waits for its delete. */
 export async function removeReading(db: WalkDb, id: string): Promise<void> {
   const tx = db.transaction("readings", "readwrite");
@@ -83,10 +108,11 @@ export async function sweepReadings(db: WalkDb, sweepId: string): Promise<LocalR
   return all.filter((r) => !r.deletePending);
 }
 
-/** What the banner counts: changes not yet on the server (rejected ones are counted apart). */
+/** What the banner counts: changes (readings, sweeps, findings) not yet on the server; rejected ones apart. */
 export async function queueCounts(db: WalkDb): Promise<{ waiting: number; rejected: number }> {
   let waiting = await db.countFromIndex("readings", "byState", "pending");
   const rejected = await db.countFromIndex("readings", "byState", "rejected");
   for (const s of await db.getAll("sweeps")) if ((!s.onServer && !s.rejected) || s.submitPending) waiting++;
-  return { waiting, rejected };
+  const leaks = await findingCounts(db);
+  return { waiting: waiting + leaks.waiting, rejected: rejected + leaks.rejected };
 }

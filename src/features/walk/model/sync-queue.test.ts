@@ -1,8 +1,10 @@
 import "fake-indexeddb/auto";
 import { beforeEach, describe, expect, it } from "vitest";
+import type { CreateFindingInput } from "../../../../server/contracts/findings";
 import type { CreateSweepInput, ReadingEditInput, ReadingInput, ReadingsBatchResult } from "../../../../server/contracts/sweeps";
 import type { LocalSweep } from "./local-types";
-import { addReading, queueCounts, removeReading, saveSweep, sweepReadings, updateReading } from "./reading-store";
+import { discardFinding, queueFinding } from "./finding-queue";
+import { addReading, commitDrafts, keepDraftValues, queueCounts, removeReading, saveSweep, sweepReadings, updateReading } from "./reading-store";
 import { syncOnce } from "./sync-queue";
 import { RefusedError, type SyncTransport } from "./sync-transport";
 import { openWalkDb, type WalkDb } from "./walk-db";
@@ -64,6 +66,24 @@ class FakeServer implements SyncTransport {
   async submitSweep(id: string) {
     this.check();
     this.submitted.push(id);
+  }
+  /** By clientId, as the server's unique (company, client_id) makes it. */
+  findings = new Map<string, { id: string; input: CreateFindingInput; photos: string[] }>();
+  losePhotoAnswerOnce = false;
+  async createFinding(_storeId: string, input: CreateFindingInput) {
+    this.check();
+    if (input.status === "confirmed" && !input.component) throw new RefusedError(400, "Please check: component is required.", { component: "is required when the leak is confirmed" });
+    let f = this.findings.get(input.clientId!);
+    if (!f) this.findings.set(input.clientId!, (f = { id: crypto.randomUUID(), input, photos: [] }));
+    return { id: f.id, photoCount: f.photos.length };
+  }
+  async addFindingPhoto(findingId: string, photo: { name: string }) {
+    this.check();
+    [...this.findings.values()].find((f) => f.id === findingId)!.photos.push(photo.name);
+    if (this.losePhotoAnswerOnce) {
+      this.losePhotoAnswerOnce = false;
+      throw new Error("connection reset after the server stored the photo");
+    }
   }
 }
 
@@ -177,5 +197,75 @@ describe("the sync queue", () => {
     expect((await db.get("sweeps", sweep.id))?.rejected).toEqual({ planId: "is not calibrated yet" });
     expect([...server.readings.keys()]).toHaveLength(1);
     expect((await sweepReadings(db, sweep.id))[0].state).toBe("pending"); // still on the device
+  });
+
+  it("keeps a reading open on the keypad off the server, lets typing change only the open one, and holds the submit until it is committed", async () => {
+    const a = await addReading(db, sweep.id, values(0), { draft: true });
+    await keepDraftValues(db, a.id, { ppm: 7 });
+    await saveSweep(db, { ...(await db.get("sweeps", sweep.id))!, submitPending: true });
+    await syncOnce(db, server);
+    expect(server.readings.size).toBe(0);
+    expect(server.submitted).toEqual([]); // the open reading belongs to the sweep
+    expect((await db.get("readings", a.id))?.ppm).toBe(7); // what was typed survives a reload
+    expect(await commitDrafts(db, sweep.id)).toBe(1);
+    await syncOnce(db, server);
+    expect(server.readings.get(a.id)?.ppm).toBe(7);
+    expect(server.submitted).toEqual([sweep.id]);
+    // a keystroke that arrives after the commit must not change the uploaded value
+    expect(await keepDraftValues(db, a.id, { ppm: 70 })).toBeUndefined();
+    expect((await db.get("readings", a.id))?.ppm).toBe(7);
+    await syncOnce(db, server);
+    expect(server.edits).toEqual([]);
+  });
+
+  it("sends a moved reading's new position as an edit", async () => {
+    const a = await addReading(db, sweep.id, values(3));
+    await syncOnce(db, server);
+    await updateReading(db, a.id, { x: 3.4, y: 2.6 }, { commit: true });
+    expect(await queueCounts(db)).toEqual({ waiting: 1, rejected: 0 });
+    await syncOnce(db, server);
+    expect(server.edits).toMatchObject([{ id: a.id, body: { x: 3.4, y: 2.6, ppm: 0 } }]);
+    expect(await queueCounts(db)).toEqual({ waiting: 0, rejected: 0 });
+  });
+
+  const leak = (clientId: string, extra: Partial<Omit<CreateFindingInput, "sweepId">> = {}) => ({ sweepId: sweep.id,
+    clientId, source: "walk" as const, status: "confirmed" as const, component: "brazed-joint" as const, planId: "p", x: 4, y: 2, note: "", ...extra,
+  });
+  const photo = { name: "joint.jpg", type: "image/jpeg", data: new Uint8Array([0xff, 0xd8, 0xff, 0xd9]).buffer };
+
+  it("queues a leak marked offline with its photo, counts it as waiting, and stores it and its photo once despite lost answers", async () => {
+    server.offline = true;
+    const id = crypto.randomUUID();
+    await queueFinding(db, "s", leak(id), photo);
+    expect(await queueCounts(db)).toEqual({ waiting: 2, rejected: 0 }); // the sweep and the finding
+    expect((await syncOnce(db, server)).stoppedBy).toBe("network");
+    expect((await db.get("findings", id))?.photo?.data.byteLength).toBe(4); // the photo is on the device
+    server.offline = false;
+    server.losePhotoAnswerOnce = true;
+    expect((await syncOnce(db, server)).stoppedBy).toMatch(/photo/);
+    expect((await queueCounts(db)).waiting).toBe(1);
+    await syncOnce(db, server);
+    expect(server.findings.size).toBe(1);
+    expect(server.findings.get(id)?.photos).toEqual(["joint.jpg"]);
+    expect(await queueCounts(db)).toEqual({ waiting: 0, rejected: 0 });
+  });
+
+  it("holds a finding until its sweep is on the server, and keeps a refused one with its reasons", async () => {
+    server.refuseSweeps.add(sweep.id);
+    const held = crypto.randomUUID();
+    await queueFinding(db, "s", leak(held), null);
+    await syncOnce(db, server);
+    expect(server.findings.size).toBe(0);
+    expect((await db.get("findings", held))?.state).toBe("pending");
+    server.refuseSweeps.clear();
+    await saveSweep(db, { ...(await db.get("sweeps", sweep.id))!, rejected: null });
+    const bad = crypto.randomUUID();
+    await queueFinding(db, "s", leak(bad, { component: null }), null);
+    const report = await syncOnce(db, server);
+    expect(report).toMatchObject({ confirmed: 1, rejected: 1, stoppedBy: null });
+    expect(await db.get("findings", bad)).toMatchObject({ state: "rejected", reasons: { component: "is required when the leak is confirmed" } });
+    expect(await queueCounts(db)).toEqual({ waiting: 0, rejected: 1 });
+    await discardFinding(db, bad);
+    expect(await queueCounts(db)).toEqual({ waiting: 0, rejected: 0 });
   });
 });

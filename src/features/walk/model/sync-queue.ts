@@ -1,5 +1,6 @@
 import type { ReadingInput } from "../../../../server/contracts/sweeps";
 import { READINGS_BATCH_MAX } from "../../../../server/contracts/sweeps";
+import { syncFindings } from "./finding-queue";
 import type { LocalReading, ReadingValues } from "./local-types";
 import { RefusedError, type SyncTransport } from "./sync-transport";
 import type { WalkDb } from "./walk-db";
@@ -27,7 +28,7 @@ function toInput(r: LocalReading): ReadingInput {
 
 /**
  * One pass of the queue: sweeps first (a reading needs its sweep), then new readings in batches,
- * then edits, deletes and submits. A rejected reading is marked with its reasons and left on the
+ * then pinpointed leaks (findings with their photos), then edits, deletes and submits. A rejected reading is marked with its reasons and left on the
  * device; it never blocks the readings behind it. A lost connection stops the pass; the next
  * pass picks up where this one stopped, and the server's idempotency makes any resend harmless.
  */
@@ -52,13 +53,18 @@ export async function syncOnce(db: WalkDb, transport: SyncTransport, batchSize =
     for (const [sweepId, list] of bySweep) {
       for (let i = 0; i < list.length; i += batchSize) await uploadBatch(db, transport, sweepId, list.slice(i, i + batchSize), report);
     }
+    // Pinpointed leaks after the readings: their sweep must be on the server.
+    const leaks = await syncFindings(db, transport, (id) => sweeps.get(id)?.onServer === true);
+    report.confirmed += leaks.confirmed;
+    report.rejected += leaks.rejected;
     for (const r of all) {
       if (r.onServer && r.deletePending && r.state === "pending") await sendDelete(db, transport, r);
       else if (r.onServer && r.editPending && r.state === "pending") await sendEdit(db, transport, r, report);
     }
     for (const s of await db.getAll("sweeps")) {
       if (!s.submitPending || !s.onServer) continue;
-      const left = (await db.getAllFromIndex("readings", "byState", "pending")).some((r) => r.sweepId === s.id);
+      // An open reading still on a keypad holds the submit back too: it belongs to the sweep.
+      const left = [...(await db.getAllFromIndex("readings", "byState", "pending")), ...(await db.getAllFromIndex("readings", "byState", "draft"))].some((r) => r.sweepId === s.id);
       if (left) continue;
       await transport.submitSweep(s.id);
       await db.put("sweeps", { ...s, submitPending: false, status: "submitted" });

@@ -1,3 +1,4 @@
+import type { CreateFindingInput } from "../../../../server/contracts/findings";
 import type { CreateSweepInput, ReadingInput, ReadingEditInput, ReadingsBatchResult } from "../../../../server/contracts/sweeps";
 
 /** What the sync queue needs from the server (the real one is api/sync-api.ts). */
@@ -7,6 +8,9 @@ export interface SyncTransport {
   editReading(sweepId: string, readingId: string, body: ReadingEditInput): Promise<void>;
   deleteReading(sweepId: string, readingId: string, editedAt: string | null): Promise<void>;
   submitSweep(sweepId: string): Promise<void>;
+  /** Idempotent by clientId: a resend answers with the finding already stored, photos included. */
+  createFinding(storeId: string, input: CreateFindingInput): Promise<{ id: string; photoCount: number }>;
+  addFindingPhoto(findingId: string, photo: { name: string; type: string; data: ArrayBuffer }): Promise<void>;
 }
 
 /** A failure the server gave a reason for (4xx), as opposed to a lost connection or a 5xx. */

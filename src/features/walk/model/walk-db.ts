@@ -1,5 +1,5 @@
 import { openDB, type DBSchema, type IDBPDatabase } from "idb";
-import type { LocalReading, LocalSweep } from "./local-types";
+import type { LocalFinding, LocalReading, LocalSweep } from "./local-types";
 
 // The device's own copy of everything a sweep needs. Readings land here before any upload, so a
 // reload, a lost connection, a server restart or a crashed tab loses nothing.
@@ -10,6 +10,8 @@ export interface WalkDbSchema extends DBSchema {
   /** Plan, fixtures, image, detectors, systems of a store: cached whenever a store is opened. */
   cache: { key: string; value: { key: string; value: unknown; savedAt: string } };
   meta: { key: string; value: number };
+  /** Pinpointed leaks waiting for the server (with their photos). */
+  findings: { key: string; value: LocalFinding };
 }
 
 export type WalkDb = IDBPDatabase<WalkDbSchema>;
@@ -21,7 +23,7 @@ export function openWalkDb(name = WALK_DB_NAME, factory?: IDBFactory): Promise<W
   // idb opens with the global factory; tests pass fake-indexeddb's.
   if (factory) (globalThis as { indexedDB: IDBFactory }).indexedDB = factory;
   try {
-    return openDB<WalkDbSchema>(name, 2, {
+    return openDB<WalkDbSchema>(name, 3, {
       upgrade(db, oldVersion, _newVersion, tx) {
         if (oldVersion < 1) {
           db.createObjectStore("sweeps", { keyPath: "id" });
@@ -33,6 +35,7 @@ export function openWalkDb(name = WALK_DB_NAME, factory?: IDBFactory): Promise<W
         }
         // The queue reads only what waits, not the whole sweep, on every pass.
         if (oldVersion < 2) tx.objectStore("readings").createIndex("byState", "state");
+        if (oldVersion < 3) db.createObjectStore("findings", { keyPath: "clientId" });
       },
     });
   } finally {

@@ -25,18 +25,19 @@ export function ArrayDialog({ size, preference, onArray, onClose }: { size: { wi
   const along = direction === "right" || direction === "left" ? size.width : size.depth;
   const [spacing, setSpacing] = useState<string | null>(null);
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const spacingText = spacing ?? formatLength(along, "m", { decimals: 3 });
+  // In the member's units (feet and inches to 1/16 in); untouched, the exact width is used.
+  const spacingText = spacing ?? formatLength(along, preference, { decimals: 3, denominator: 16 });
 
   function submit(e: FormEvent) {
     e.preventDefault();
     const n = Number(count);
     const next: Record<string, string> = {};
     if (!(Number.isInteger(n) && n >= 2 && n <= 200)) next.count = "must be a whole number from 2 to 200";
-    const s = readLengthEntry(spacingText, preference);
-    if (!s.ok) next.spacing = s.message;
+    const s = spacing === null ? null : readLengthEntry(spacing, preference);
+    if (s && !s.ok) next.spacing = s.message;
     setErrors(next);
-    if (Object.keys(next).length || !s.ok) return;
-    onArray(n, toMetres(s.length.value, s.length.unit), DIRECTIONS[direction].vec);
+    if (Object.keys(next).length || (s && !s.ok)) return;
+    onArray(n, s ? toMetres(s.length.value, s.length.unit) : along, DIRECTIONS[direction].vec);
   }
 
   return (

@@ -30,6 +30,8 @@ export const FixtureTable = memo(function FixtureTable({ scene, systems, prefere
   const names = new Map(systems.map((s) => [s.id, s.name]));
   const selected = new Set(scene.selection);
   const len = (m: number) => formatLength(m, preference, { decimals: 2 });
+  // 1 ft² = 0.09290304 m² exactly (0.3048² m², NIST SP 811).
+  const area = (m2: number) => (preference === "ft-in" ? `${(m2 / 0.09290304).toFixed(1)} ft²` : `${m2.toFixed(1)} m²`);
   return (
     <div className="max-h-96 overflow-auto rounded-md bg-surface edge">
       <table className="w-full border-collapse text-left text-sm">
@@ -70,7 +72,7 @@ export const FixtureTable = memo(function FixtureTable({ scene, systems, prefere
                 <td className="whitespace-nowrap px-3 py-1" data-x={r.x} data-y={r.y}>
                   {len(r.x)}, {len(r.y)}
                 </td>
-                <td className="whitespace-nowrap px-3 py-1">{r.widthM === null ? "point" : `${len(r.widthM)} × ${len(r.depthM!)} (${Math.abs(r.areaM2!).toFixed(1)} m²)`}</td>
+                <td className="whitespace-nowrap px-3 py-1">{r.widthM === null ? "point" : `${len(r.widthM)} × ${len(r.depthM!)} (${area(Math.abs(r.areaM2!))})`}</td>
               </tr>
             );
           })}

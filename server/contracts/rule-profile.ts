@@ -1,0 +1,113 @@
+import { z } from "zod";
+
+/**
+ * The shape of a rule profile on the wire (a company's custom profile, edited in Company settings).
+ * Every value carries its source: a citation, or who set it and why ("company policy, 2026 audit").
+ * The server also runs the domain check (server/domain/compliance/custom-profile.ts) before storing.
+ */
+
+const APPLIANCES = ["commercial-refrigeration", "industrial-process", "comfort-cooling"] as const;
+const BASES = ["AR4", "AR5", "AR6", "EU-517/2014"] as const;
+
+const source = z
+  .string({ error: "is required (a citation, or who set the value and why)" })
+  .trim()
+  .min(1, "is required (a citation, or who set the value and why)")
+  .max(500, "must be at most 500 characters");
+
+const sourced = <T extends z.ZodType>(value: T) => z.object({ value, source, note: z.string().max(500, "must be at most 500 characters").optional() });
+
+const num = (what: string) => z.number({ error: `must be a number (${what})` }).refine(Number.isFinite, `must be a finite number (${what})`);
+const positive = (what: string, max: number) => num(what).gt(0, `must be above 0 (${what})`).max(max, `must be at most ${max} (${what})`);
+const wholeDays = (min: number) =>
+  z.int(`must be a whole number of days`).min(min, min === 0 ? "must be 0 or more days" : `must be at least ${min} day`).max(3650, "must be at most 3,650 days");
+const wholeMonths = z.int("must be a whole number of months").min(1, "must be at least 1 month").max(120, "must be at most 120 months");
+
+const massLimit = z.object({ value: num("mass").min(0, "must be 0 or more"), unit: z.enum(["lb", "kg"], { error: "must be lb or kg" }) });
+
+export const leakCheckBandSchema = z.object({
+  from: num("lower edge").min(0, "must be 0 or more"),
+  to: num("upper edge").nullable(),
+  monthsWithoutLds: wholeMonths,
+  monthsWithLds: wholeMonths,
+  ldsRequired: z.boolean({ error: "must be true or false" }),
+});
+
+/** Bands must run upwards without gaps: each `to` above its `from`, equal to the next `from`, the top one open. */
+const bands = z.array(leakCheckBandSchema).min(1, "needs at least one band").superRefine((list, ctx) => {
+  list.forEach((b, i) => {
+    const last = i === list.length - 1;
+    if (b.to !== null && b.to <= b.from) ctx.addIssue({ code: "custom", path: [i, "to"], message: `must be above the band's lower edge (${b.from})` });
+    if (!last && b.to === null) ctx.addIssue({ code: "custom", path: [i, "to"], message: "only the top band may be open" });
+    if (!last && b.to !== null && b.to !== list[i + 1].from) {
+      ctx.addIssue({ code: "custom", path: [i + 1, "from"], message: `must equal the band below's upper edge (${b.to}), so bands ascend without gaps or overlaps` });
+    }
+    if (last && b.to !== null) ctx.addIssue({ code: "custom", path: [i, "to"], message: "must be empty (open) for the top band" });
+    if (b.monthsWithLds < b.monthsWithoutLds) ctx.addIssue({ code: "custom", path: [i, "monthsWithLds"], message: "must be at least the interval without a leak detection system" });
+  });
+});
+
+export const leakRatePartSchema = z.object({
+  id: z.string().trim().min(1, "is required"),
+  title: z.string().trim().min(1, "is required").max(200, "must be at most 200 characters"),
+  covers: sourced(z.union([z.object({ ozoneDepleting: z.literal(true) }), z.object({ ozoneDepleting: z.literal(false), gwpAbove: num("GWP").min(0, "must be 0 or more") })])),
+  minFullCharge: sourced(massLimit),
+  effectiveFrom: sourced(z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "must be a date as YYYY-MM-DD")).optional(),
+  thresholds: z.object({
+    "commercial-refrigeration": sourced(positive("% per year", 1000)),
+    "industrial-process": sourced(positive("% per year", 1000)),
+    "comfort-cooling": sourced(positive("% per year", 1000)),
+  }),
+  repairDays: sourced(wholeDays(1)),
+  initialVerificationDays: sourced(wholeDays(0)),
+  followUpVerificationDays: sourced(wholeDays(1)),
+  firstCalculationDays: sourced(wholeDays(1)),
+  maxDaysSinceLastAddition: sourced(wholeDays(1)),
+  rollingWindowDays: sourced(wholeDays(1)),
+  inspectionsAfterBreach: sourced(
+    z.object({
+      largeTypes: z.array(z.enum(APPLIANCES)),
+      largeFromCharge: massLimit,
+      largeEveryMonths: wholeMonths,
+      largeUntilPeriodsBelow: z.int("must be a whole number").min(1, "must be at least 1").max(120, "must be at most 120"),
+      otherEveryMonths: wholeMonths,
+      otherUntilPeriodsBelow: z.int("must be a whole number").min(1, "must be at least 1").max(120, "must be at most 120"),
+      waivedWithAutomaticLeakDetection: z.boolean({ error: "must be true or false" }),
+    }),
+  ).optional(),
+  automaticLeakDetectionRequired: sourced(z.object({ types: z.array(z.enum(APPLIANCES)), fromCharge: massLimit })).optional(),
+  chronicLeaker: z.object({
+    percentOfFullCharge: sourced(positive("% of the full charge", 10000)),
+    reportBy: sourced(z.object({ month: z.int("must be a whole month").min(1, "must be 1 to 12").max(12, "must be 1 to 12"), day: z.int("must be a whole day").min(1, "must be 1 to 31").max(31, "must be 1 to 31") })),
+  }),
+});
+
+export const ruleProfileSchema = z.object({
+  id: z.literal("custom", { error: "must be custom" }),
+  name: z.string({ error: "is required" }).trim().min(1, "is required").max(120, "must be at most 120 characters"),
+  kind: z.literal("custom", { error: "must be custom" }),
+  basedOn: z.enum(["us-federal", "eu-fgas"], { error: "must be us-federal or eu-fgas" }),
+  gwpBases: sourced(z.array(z.enum(BASES)).min(1, "list at least one GWP basis")),
+  leakRateParts: z.array(leakRatePartSchema),
+  leakChecks: z
+    .object({
+      co2eBands: sourced(bands),
+      hfoBands: sourced(bands),
+      hermeticExemptBelowTonnes: sourced(num("t CO2e").min(0, "must be 0 or more")),
+      recheckAfterRepairMonths: sourced(wholeMonths),
+    })
+    .optional(),
+  recordRetentionYears: sourced(z.int("must be a whole number of years").min(1, "must be at least 1 year").max(100, "must be at most 100 years")),
+});
+export type RuleProfileInput = z.infer<typeof ruleProfileSchema>;
+
+export const startCustomProfileInput = z.object({ from: z.enum(["us-federal", "eu-fgas"], { error: "must be us-federal or eu-fgas" }) });
+
+export const customProfileView = z.object({
+  profile: ruleProfileSchema.nullable(),
+  savedAt: z.string().nullable(),
+  savedBy: z.string().nullable(),
+  /** Whether the company's rule-profile setting is "custom" (the profile is in force). */
+  inForce: z.boolean(),
+});
+export type CustomProfileView = z.infer<typeof customProfileView>;

@@ -1,0 +1,21 @@
+import { render, screen } from "@testing-library/react";
+import { describe, expect, it } from "vitest";
+import { LagHintBanner } from "./lag-hint-banner";
+
+const hint = { index: 6, x: 3, y: 4, beforeDelay: false, backM: 5, recheck: [] };
+
+describe("the lag hint banner", () => {
+  it("says how far back the air was sampled in metres", () => {
+    render(<LagHintBanner hint={hint} ppm={9} onDismiss={() => {}} />);
+    expect(screen.getByTestId("lag-hint").textContent).toContain("about 5.0 m back along your path");
+    expect(screen.getByTestId("lag-hint").textContent).toContain("about 0.6 m spacing");
+  });
+
+  it("and in feet and inches for those who work in them", () => {
+    render(<LagHintBanner hint={hint} ppm={9} lengthUnit="ft-in" onDismiss={() => {}} />);
+    // 1 ft = 0.3048 m exactly (NIST SP 811): 5 m = 16.40 ft = 16 ft 4.85 in, to the inch 16 ft 5 in;
+    // 0.6 m = 23.6 in, to the inch 2 ft 0 in.
+    expect(screen.getByTestId("lag-hint").textContent).toContain("about 16 ft 5 in back along your path");
+    expect(screen.getByTestId("lag-hint").textContent).toContain("about 2 ft 0 in spacing");
+  });
+});
