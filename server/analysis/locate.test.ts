@@ -107,6 +107,70 @@ describe("locate on small fixed stores", () => {
     expect(r.diagnostics.some((d) => d.kind === "benign-source" && d.zoneId === "bz1")).toBe(true);
   });
 
+  it("does not let a listed zone that reads nothing explain away a weak leak along the aisle", () => {
+    // The zone is listed (aerosol storage) 2.5 m from the leak but quiet: the readings beside it are at
+    // background. The leak at the line-set reads at most 4 ppm, below the 3 x alarm a zone could cause by
+    // default, so a zone taken as active would explain it away.
+    const zone = { id: "bz1", polygon: rect(12, 0.5, 14.5, 3), note: "aerosol storage" };
+    const leak: [number, number] = [9.5, 5.3];
+    const input = parseLocatorInput(store((x, y) => 0.3 + 8 * Math.exp(-aroundGondola([x, y], leak) / 1.2), [zone]));
+    const r = locate(input);
+    expect(r.candidates.length).toBeGreaterThan(0);
+    expect(Math.hypot(r.candidates[0].x - leak[0], r.candidates[0].y - leak[1])).toBeLessThan(1.5);
+    expect(r.diagnostics.some((d) => d.kind === "benign-source")).toBe(false);
+  });
+
+  it("in a fan-stirred walk-in that reads level all over, names its coil and line-set drop first", () => {
+    // Fans mix the room, so the readings say which room but not where in it; the spots go to the room's
+    // fittings (leaks are found at joints and coils: common practice, no published source).
+    const coil = { id: "coil1", kind: "coil" as const, x: 7, y: 1.35 };
+    const lineSet = { id: "ls1", kind: "line-set" as const, x: 4.3, y: 1.3 };
+    const route: [number, number][] = [[1, 7], [7, 7], [7, 5], [4.5, 5], [4.5, 1.5], [9.5, 1.5], [9.5, 5], [7, 5], [7, 7], [13, 7]];
+    const taps: { x: number; y: number; t: number }[] = [];
+    let t = 0;
+    for (let k = 1; k < route.length; k++) {
+      const [ax, ay] = route[k - 1];
+      const [bx, by] = route[k];
+      const len = Math.hypot(bx - ax, by - ay);
+      for (let s = 0; s < len; s += 1) {
+        taps.push({ x: ax + ((bx - ax) * s) / len, y: ay + ((by - ay) * s) / len, t });
+        t += 1.5;
+      }
+    }
+    const inRoom = (x: number, y: number) => x > 4 && x < 10 && y > 1 && y < 5.5;
+    // the air sampled D + τ = 4 s before each tap, taken at the tap 3 steps back (1.5 s apart, rounded)
+    const readings = taps.map((tap, k) => {
+      const src = taps[Math.max(0, k - 3)];
+      return { ...tap, ppm: inRoom(src.x, src.y) ? 6 + ((k * 7) % 3) - 1 : 0 };
+    });
+    const input = parseLocatorInput({
+      plan: {
+        width: 14,
+        height: 9,
+        obstacles: [
+          { id: "w-top", polygon: rect(3.8, 0.8, 10.2, 1) },
+          { id: "w-left", polygon: rect(3.8, 1, 4, 5.7) },
+          { id: "w-right", polygon: rect(10, 1, 10.2, 5.7) },
+          { id: "w-front-a", polygon: rect(3.8, 5.5, 6.5, 5.7) },
+          { id: "w-front-b", polygon: rect(7.5, 5.5, 10.2, 5.7) },
+        ],
+        fixtures: [{ id: "wi1", kind: "walk-in", polygon: rect(4, 1, 10, 5.5), fans: true }],
+        riskPoints: [coil, lineSet],
+        backgroundZones: [],
+      },
+      instrument: { transportDelayS: 3, timeConstantS: 1, alarmPpm: 2 },
+      readings,
+    });
+    const r = locate(input);
+    expect(r.candidates.length).toBeGreaterThanOrEqual(2);
+    const named = r.candidates.slice(0, 2).map((c) => c.riskPointId);
+    expect(named.sort()).toEqual(["coil1", "ls1"]);
+    for (const c of r.candidates.slice(0, 2)) {
+      const p = c.riskPointId === "coil1" ? coil : lineSet;
+      expect(Math.hypot(c.x - p.x, c.y - p.y)).toBeLessThan(0.6);
+    }
+  });
+
   it("leaves unsampled areas unknown in the field map instead of inventing values", () => {
     const r = locate(parseLocatorInput(store(() => 0)));
     const { width, cellSize, values, confidence } = r.field;

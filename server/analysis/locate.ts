@@ -84,7 +84,12 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   // A zone is active when the zone-only fit gives it gas. Only an active zone explains the readings
   // around it and keeps suspect spots off its surroundings; nothing is ever placed inside a zone.
   const zoneFit = fitNonnegative(y, weightsFor(y, o), nuisance, censored);
-  const zoneActive = plan.backgroundZones.map((_, z) => zoneFit.q[z] > 0.5);
+  // ... and, when `zoneSeenAtZone` is set, when a reading at the zone itself stands out: gas spreading from a
+  // zone is strongest at it, so a zone that reads nothing where it is cannot be what raised readings elsewhere.
+  const typical = medianOf(y);
+  const zoneActive = plan.backgroundZones.map(
+    (_, z) => zoneFit.q[z] > 0.5 && (!o.zoneSeenAtZone || zoneReadingDist[z].some((d, i) => d <= o.zoneMarginM && y[i] >= typical + o.elevatedPpm)),
+  );
   const zoneDist = new Float32Array(cells).fill(Infinity); // to the nearest active zone
   const zoneNearest = new Int32Array(cells).fill(-1);
   const insideZone = new Uint8Array(cells);
@@ -144,6 +149,7 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     }
     return idx;
   };
+  const prior = o.riskPointLogOdds > 0 ? riskPointPrior(grid, plan, o.riskPointLogOdds) : null;
   const greedy = findSources({
     fields, y, w, censored, nuisance, allowed,
     gridWidth: grid.width,
@@ -154,7 +160,10 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     alternateFraction: o.alternateFraction,
     rankByStrength: o.rankByStrength,
     sourceSeparationM: o.sourceSeparationM,
-    prior: o.riskPointLogOdds > 0 ? riskPointPrior(grid, plan, o.riskPointLogOdds) : null,
+    prior,
+    evidenceGate: o.evidenceGate,
+    relocatePasses: o.relocatePasses,
+    tailReachM: o.tailReachM,
     credible: (c, column, _q, b, residual, delta) => {
       if (delta < o.minDeltaChi2) return false;
       const sup = support(column, b, residual);
@@ -168,10 +177,53 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   });
   const dof = Math.max(1, n - 2 - greedy.sources.length - nuisance.length);
   const s2 = Math.max(1, greedy.chi2Final / dof);
-  const sources = addMirrorSpot(greedy.sources).map((s) => {
-    const cell = refineCell(greedy.firstScan.delta, allowed, s.cell, grid.width, grid.cellSize, o.refineRadiusM, o.refineInflation * s2);
-    return cell === s.cell ? s : { ...s, cell, column: kernelColumn(fields, cell, n) };
-  });
+  // In a walk-in or machine room whose fans run the readings are level all over the room, so where in
+  // the room the leak is cannot be read from them: take the room's most probable cell (tempered fit plus
+  // the risk-point prior), which is a coil, valve or line-set drop unless the readings say otherwise.
+  const roomOf = new Int32Array(cells).fill(-1);
+  if (o.mixedRoomMode) {
+    plan.fixtures.forEach((f, r) => {
+      if (f.fans && (f.kind === "walk-in" || f.kind === "machine-room")) for (const k of cellsInside(grid, f.polygon)) roomOf[k] = r;
+    });
+  }
+  const taken: number[] = [];
+  const farFromTaken = (k: number, minM: number) => taken.every((t) => cellDistance(t, k, grid.width) * grid.cellSize >= minM);
+  const roomBest = (s: FoundSource, room: number, riskOnly = false): number => {
+    const surface = o.ownSurface ? s.surface : greedy.firstScan.delta;
+    const T = o.refineInflation * s2;
+    let best = -1;
+    let bestScore = -Infinity;
+    for (const k of cellsInside(grid, plan.fixtures[room].polygon)) {
+      if (!allowed[k] || !(surface[k] > 0) || !farFromTaken(k, riskOnly ? ROOM_RISK_SPACING_M : o.separationM) || (riskOnly && !(prior && prior[k] > 0))) continue;
+      const score = surface[k] / (2 * T) + (prior ? prior[k] : 0);
+      if (score > bestScore) { bestScore = score; best = k; }
+    }
+    return best;
+  };
+  const sources: FoundSource[] = [];
+  for (const s of addMirrorSpot(greedy.sources)) {
+    const room = roomOf[s.cell];
+    if (room < 0) {
+      const cell = refineCell(o.ownSurface ? s.surface : greedy.firstScan.delta, allowed, s.cell, grid.width, grid.cellSize, o.refineRadiusM, o.refineInflation * s2, o.refinePrior ? prior : null);
+      sources.push(cell === s.cell ? s : { ...s, cell, column: kernelColumn(fields, cell, n) });
+      taken.push(cell);
+      continue;
+    }
+    const best = roomBest(s, room);
+    if (best < 0) continue; // every cell of the room is already listed
+    sources.push(best === s.cell ? s : { ...s, cell: best, column: kernelColumn(fields, best, n) });
+    taken.push(best);
+    if (s.alternate) continue;
+    // the room's next most probable risk point (else cell) follows a fitted spot placed in a fan-stirred room
+    let next = roomBest(s, room, true);
+    if (next < 0) next = roomBest(s, room);
+    if (next >= 0) {
+      const surface = o.ownSurface ? s.surface : greedy.firstScan.delta;
+      sources.push({ cell: next, delta: surface[next], column: kernelColumn(fields, next, n), alternate: true, q: s.q, surface });
+      taken.push(next);
+    }
+  }
+  sources.splice(o.maxCandidates);
   const topQ = Math.max(sources[0]?.q ?? 0, 1e-12);
   const gPerYearPerQ =
     (wellMixedEmission(ppmToMgPerM3(1, o.molarMassGPerMol), o.airChangesPerH, kernelArea(kernel) * o.mixingHeightM) * HOURS_PER_YEAR) / 1000;
@@ -182,7 +234,7 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     const sup = support(s.column, greedy.fit.b, y);
     const side = oneSidedPass(sup.map((i) => xs[i]), sup.map((i) => ys[i]), x, y0);
     if (rank === 0) oneSidedTop = side.oneSided;
-    const radius = Math.max(o.minRadiusM, o.radiusScale * misfitRadius(greedy.firstScan.delta, s.cell, 5.99 * s2, grid.width, grid.cellSize));
+    const radius = Math.max(o.minRadiusM, o.radiusScale * misfitRadius(o.ownSurface ? s.surface : greedy.firstScan.delta, s.cell, 5.99 * s2, grid.width, grid.cellSize));
     const fixture = nearestFixture(plan.fixtures, x, y0);
     const riskPoint = nearestRiskPoint(plan.riskPoints, x, y0);
     const facts: CandidateFacts = {
@@ -224,7 +276,9 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     if (mx < 0 || my < 0 || mx > plan.width || my > plan.height) return found;
     const mc = cellIndexOf(grid, mx, my);
     if (!allowed[mc] || found.some((f) => cellDistance(f.cell, mc, grid.width) * grid.cellSize < o.separationM)) return found;
-    const mirror: FoundSource = { cell: mc, delta: greedy.firstScan.delta[mc], column: kernelColumn(fields, mc, n), alternate: true, q: greedy.firstScan.q[mc] };
+    const mirror: FoundSource = {
+      cell: mc, delta: greedy.firstScan.delta[mc], column: kernelColumn(fields, mc, n), alternate: true, q: greedy.firstScan.q[mc], surface: greedy.firstScan.delta,
+    };
     return [top, mirror, ...found.slice(1)].slice(0, o.maxCandidates);
   }
 
@@ -291,6 +345,12 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   };
 }
 
+function medianOf(v: Float64Array): number {
+  const s = Float64Array.from(v).sort();
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
+}
+
 /** Noise model: w = 1/(a + β·y)², an additive floor plus a multiplicative share. */
 function weightsFor(y: Float64Array, o: LocatorOptions): Float64Array {
   return Float64Array.from(y, (v) => 1 / (o.noiseFloorPpm + o.noiseFraction * v) ** 2);
@@ -317,5 +377,9 @@ function misfitRadius(delta: Float64Array, c: number, tolerance: number, width: 
   }
   return Math.sqrt((count * cellSize * cellSize) / Math.PI);
 }
+
+// Risk points of one fan-stirred room are listed as separate spots when at least this far apart: twice
+// the 0.5 m reach of the risk-point prior, so two spots never name the same fitting.
+const ROOM_RISK_SPACING_M = 1;
 
 const round2 = (v: number) => Math.round(v * 100) / 100;

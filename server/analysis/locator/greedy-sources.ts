@@ -11,6 +11,8 @@ export interface FoundSource {
   /** True for an alternative spot of the first scan (e.g. the other side of a pass), not a fitted source. */
   alternate: boolean;
   q: number;
+  /** The Δχ² map this spot was chosen on (its own round's or relocation's scan), for refinement and radius. */
+  surface: Float64Array;
 }
 
 export interface GreedyInput {
@@ -32,6 +34,17 @@ export interface GreedyInput {
   prior: Float64Array | null;
   /** Fitted sources are at least this far apart, m. */
   sourceSeparationM: number;
+  /**
+   * Relocation passes after the greedy selection: each fitted source is re-scanned, within
+   * `sourceSeparationM` of where it is, against the readings minus every other source, and moved to
+   * its best cell there (0 = off). A source picked early absorbed its neighbours' gas; once they are
+   * fitted, its own best cell can differ.
+   */
+  relocatePasses?: number;
+  /** Fitted sources within this distance of a stronger one are listed after the others, m (0 = off). */
+  tailReachM?: number;
+  /** Judge credibility on the best-fitting cell before the prior picks among cells (see findSources). */
+  evidenceGate?: boolean;
   credible: (cell: number, column: Float64Array, q: number, b: number, residual: Float64Array, delta: number) => boolean;
 }
 
@@ -80,6 +93,25 @@ function blockAround(mask: Uint8Array, c: number, width: number, cellSize: numbe
   }
 }
 
+function cellDist2(a: number, b: number, width: number): number {
+  const ai = a % width, bi = b % width;
+  return (ai - bi) ** 2 + ((a - ai) / width - (b - bi) / width) ** 2;
+}
+
+/** Sets mask to allowed[] within radiusM of cell c (0 elsewhere is left as is). */
+function keepAround(mask: Uint8Array, allowed: Uint8Array, c: number, width: number, cellSize: number, radiusM: number): void {
+  const r = Math.ceil(radiusM / cellSize);
+  const ci = c % width;
+  const cj = (c - ci) / width;
+  const height = mask.length / width;
+  for (let j = Math.max(0, cj - r); j <= Math.min(height - 1, cj + r); j++) {
+    for (let i = Math.max(0, ci - r); i <= Math.min(width - 1, ci + r); i++) {
+      const k = j * width + i;
+      if ((i - ci) ** 2 + (j - cj) ** 2 <= r * r) mask[k] = allowed[k];
+    }
+  }
+}
+
 export function findSources(input: GreedyInput): GreedyResult {
   const { fields, y, w, censored, allowed } = input;
   const n = y.length;
@@ -107,17 +139,61 @@ export function findSources(input: GreedyInput): GreedyResult {
     sumWeightedKernelTimes(fields, w, residual, sumWGR);
     const scan = scanSources(fields.sumWG, fields.sumWGG, sumWGR, { sumW: sw, sumWR: swr, sumWRR: swrr }, roundAllowed);
     if (!firstScan) firstScan = scan;
-    const best = bestWithPrior(scan, input.prior, n);
+    let best = bestWithPrior(scan, input.prior, n);
     if (best < 0) break;
-    const column = kernelColumn(fields, best, n);
-    if (!input.credible(best, column, scan.q[best], scan.b[best], residual, scan.delta[best])) break;
+    let column = kernelColumn(fields, best, n);
+    if (input.evidenceGate && input.prior) {
+      // Whether there is a leak at all is the readings' question: the best-fitting cell must be credible
+      // on its own; the prior only chooses where, among cells the readings allow.
+      const ml = bestWithPrior(scan, null, n);
+      const mlColumn = ml === best ? column : kernelColumn(fields, ml, n);
+      if (!input.credible(ml, mlColumn, scan.q[ml], scan.b[ml], residual, scan.delta[ml])) break;
+      if (ml !== best && !input.credible(best, column, scan.q[best], scan.b[best], residual, scan.delta[best])) {
+        best = ml;
+        column = mlColumn;
+      }
+    } else if (!input.credible(best, column, scan.q[best], scan.b[best], residual, scan.delta[best])) break;
     columns.push(column);
     fit = fitNonnegative(y, w, columns, censored);
-    sources.push({ cell: best, delta: scan.delta[best], column, alternate: false, q: 0 });
+    sources.push({ cell: best, delta: scan.delta[best], column, alternate: false, q: 0, surface: scan.delta });
     // A second source right beside the first mostly patches the kernel's misfit there, not a leak.
     blockAround(roundAllowed, best, input.gridWidth, input.cellSize, input.sourceSeparationM);
   }
   const nn = input.nuisance.length;
+  if (sources.length > 1) {
+    for (let pass = 0; pass < (input.relocatePasses ?? 0); pass++) {
+      let moved = false;
+      for (let k = 0; k < sources.length; k++) {
+        residual.set(y);
+        columns.forEach((col, s) => {
+          const q = fit.q[s];
+          if (s !== nn + k && q > 0) for (let i = 0; i < n; i++) residual[i] -= q * col[i];
+        });
+        let sw = 0, swr = 0, swrr = 0;
+        for (let i = 0; i < n; i++) {
+          sw += w[i];
+          swr += w[i] * residual[i];
+          swrr += w[i] * residual[i] * residual[i];
+        }
+        const mask = new Uint8Array(cells);
+        keepAround(mask, allowed, sources[k].cell, input.gridWidth, input.cellSize, input.sourceSeparationM);
+        sources.forEach((o, j) => { if (j !== k) blockAround(mask, o.cell, input.gridWidth, input.cellSize, input.sourceSeparationM); });
+        sumWeightedKernelTimes(fields, w, residual, sumWGR);
+        const scan = scanSources(fields.sumWG, fields.sumWGG, sumWGR, { sumW: sw, sumWR: swr, sumWRR: swrr }, mask);
+        const best = bestWithPrior(scan, input.prior, n);
+        if (best < 0) continue;
+        sources[k].surface = scan.delta;
+        sources[k].delta = scan.delta[best];
+        if (best === sources[k].cell) continue;
+        sources[k].cell = best;
+        sources[k].column = kernelColumn(fields, best, n);
+        columns[nn + k] = sources[k].column;
+        fit = fitNonnegative(y, w, columns, censored);
+        moved = true;
+      }
+      if (!moved) break;
+    }
+  }
   sources.forEach((s, k) => (s.q = fit.q[nn + k]));
   const bestDelta = Math.max(0, ...sources.map((s) => s.delta));
   // Rank fitted sources by strength: a weak source that the greedy step picked early usually mops up
@@ -140,8 +216,17 @@ export function findSources(input: GreedyInput): GreedyResult {
       if (sources.some((s) => near(s.cell, c))) continue;
       const column = kernelColumn(fields, c, n);
       if (!input.credible(c, column, firstScan.q[c], firstScan.b[c], residual0, firstScan.delta[c])) continue;
-      sources.push({ cell: c, delta: firstScan.delta[c], column, alternate: true, q: firstScan.q[c] });
+      sources.push({ cell: c, delta: firstScan.delta[c], column, alternate: true, q: firstScan.q[c], surface: firstScan.delta });
     }
+  }
+  if (input.tailReachM && input.tailReachM > 0) {
+    // A weaker fitted source within a stronger one's reach may be its far-field tail (which the
+    // truncated kernel cannot model) as much as a second leak: list it after the independent spots.
+    const reach2 = (input.tailReachM / input.cellSize) ** 2;
+    const fitted = sources.filter((x) => !x.alternate);
+    const tail = new Set(fitted.filter((x, k) => fitted.slice(0, k).some((st) => cellDist2(st.cell, x.cell, input.gridWidth) < reach2)));
+    const head = sources.filter((x) => !tail.has(x));
+    sources.splice(0, sources.length, ...head, ...sources.filter((x) => tail.has(x)));
   }
   return {
     sources,

@@ -36,4 +36,18 @@ describe("local refinement of a suspect spot", () => {
     expect([at(3, 4), at(5, 4)]).toContain(c);
     expect(refineCell(delta, allowed, at(3, 4), W, 1, 0, 100)).toBe(at(3, 4));
   });
+
+  it("with a prior, a level stretch goes to the favoured cells (posterior mean, hand arithmetic)", () => {
+    const delta = new Float64Array(W * W);
+    for (let i = 2; i <= 6; i++) delta[at(i, 4)] = 100; // readings cannot tell these five cells apart
+    const allowed = new Uint8Array(W * W).fill(1);
+    const prior = new Float64Array(W * W);
+    prior[at(6, 4)] = Math.log(20); // a coil at (6, 4): odds 20:1 per cell
+    // weights 1, 1, 1, 1, 20 at i = 2..6: mean i = (2 + 3 + 4 + 5 + 120) / 24 = 5.58, nearest cell i = 6
+    expect(refineCell(delta, allowed, at(4, 4), W, 1, 4, 100, prior)).toBe(at(6, 4));
+    // a sharp likelihood still wins over the prior: Δχ² 40 lower at the coil is e^(−40/2) against 20
+    delta[at(6, 4)] = 60;
+    delta[at(5, 4)] = 60;
+    expect(refineCell(delta, allowed, at(3, 4), W, 1, 4, 1, prior)).toBe(at(3, 4));
+  });
 });

@@ -3,7 +3,9 @@
  * instead of its single best cell. The best cell of a flat or ridged Δχ² surface (a leak seen along a
  * case line) jumps between near-equal cells with the noise; the mean of exp(Δχ²/(2T)) over the
  * neighbourhood is steadier. T is the residual variance times an inflation factor, since raw χ² is far
- * too confident with correlated readings (locator-methods §5.6). The answer is snapped to the allowed
+ * too confident with correlated readings (locator-methods §5.6). With a prior (log odds per cell) the
+ * mean is the posterior's: where the readings cannot tell cells apart (a fan-stirred walk-in reads level
+ * all over) the prior decides, and where they can, the tempered likelihood does. The answer is snapped to the allowed
  * cell nearest the mean, so it never lands on a solid body or in a benign-source zone.
  */
 export function refineCell(
@@ -14,6 +16,7 @@ export function refineCell(
   cellSize: number,
   radiusM: number,
   temperature: number,
+  prior: Float64Array | null = null,
 ): number {
   if (!(radiusM > 0) || !(temperature > 0)) return c;
   const height = delta.length / width;
@@ -33,7 +36,7 @@ export function refineCell(
   for (let j = j0; j <= j1; j++) for (let i = i0; i <= i1; i++) {
     const k = j * width + i;
     if (!inWindow(i, j) || !allowed[k] || !(delta[k] > 0)) continue;
-    const wk = Math.exp((delta[k] - top) / (2 * temperature));
+    const wk = Math.exp((delta[k] - top) / (2 * temperature) + (prior ? prior[k] : 0));
     sw += wk;
     si += wk * i;
     sj += wk * j;
