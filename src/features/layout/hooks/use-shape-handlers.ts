@@ -25,6 +25,8 @@ interface Options {
   /** A group (same metres scale) on a layer of its own: dragged nodes ride on it. */
   dragGroup: RefObject<Konva.Group | null>;
   onError: (message: string) => void;
+  /** True while two fingers are down: no drag may start (Konva would start one with the first finger). */
+  pinching: RefObject<boolean>;
 }
 
 /**
@@ -33,10 +35,12 @@ interface Options {
  * the nodes go back to the origin, to be redrawn from the scene. A transform is baked into the
  * vertices on transform end (react-konva's advice: state holds plain objects, nodes are views).
  */
-export function useShapeHandlers(o: Options): { handlers: ShapeHandlers; nodes: RefObject<Map<string, Konva.Group>> } {
+export function useShapeHandlers(o: Options): { handlers: ShapeHandlers; nodes: RefObject<Map<string, Konva.Group>>; cancel: () => void } {
   const nodes = useRef(new Map<string, Konva.Group>());
   const drag = useRef<{ ids: string[]; homes: { node: Konva.Group; parent: Konva.Container; index: number }[] } | null>(null);
   const transformGesture = useRef(0);
+  // Set while a second finger lands: the drag or transform under way ends without an edit.
+  const cancelling = useRef(false);
   const opts = useRef(o);
   opts.current = o;
 
@@ -61,7 +65,16 @@ export function useShapeHandlers(o: Options): { handlers: ShapeHandlers; nodes: 
         if (e.evt.shiftKey) opts.current.apply([select([id], "toggle")]);
         else if (!s.selection.includes(id)) opts.current.apply([select([id])]);
       },
-      onDragStart: (id) => {
+      onDragStart: (id, e) => {
+        if (opts.current.pinching.current) {
+          cancelling.current = true;
+          try {
+            e.target.stopDrag();
+          } finally {
+            cancelling.current = false;
+          }
+          return;
+        }
         const s = opts.current.scene.current;
         const ids = s.selection.includes(id) ? [...s.selection] : [id];
         // Konva's drag advice: move the dragged nodes to a layer of their own for the drag, so
@@ -102,13 +115,14 @@ export function useShapeHandlers(o: Options): { handlers: ShapeHandlers; nodes: 
         for (const other of d.ids) nodes.current.get(other)?.position({ x: 0, y: 0 });
         e.target.position({ x: 0, y: 0 });
         opts.current.showGuides([]);
+        if (cancelling.current) return;
         if (dx !== 0 || dy !== 0) opts.current.apply([move(d.ids, dx, dy)]);
       },
       onTransformEnd: (id, node) => {
         const f = opts.current.scene.current.fixtures[id];
         const t = { x: node.x(), y: node.y(), scaleX: node.scaleX(), scaleY: node.scaleY(), rotation: node.rotation() };
         node.setAttrs({ x: 0, y: 0, rotation: 0, scaleX: 1, scaleY: 1, skewX: 0, skewY: 0 });
-        if (!f || "point" in f) return;
+        if (!f || "point" in f || cancelling.current) return;
         try {
           // Every node of one transform is one undo step: they share a gesture key.
           opts.current.apply([setVertices(id, bakeNodeTransform(f.polygon, t))], `transform-${transformGesture.current}`);
@@ -122,5 +136,21 @@ export function useShapeHandlers(o: Options): { handlers: ShapeHandlers; nodes: 
       },
     };
   }, []);
-  return { handlers, nodes };
+
+  /** A pinch began: put back whatever the first finger was dragging or transforming, recording nothing. */
+  const cancel = useMemo(
+    () => () => {
+      cancelling.current = true;
+      try {
+        for (const node of nodes.current.values()) if (node.isDragging()) node.stopDrag();
+        const layer = opts.current.dragGroup.current?.getLayer();
+        for (const tr of layer?.find<Konva.Transformer>("Transformer") ?? []) if (tr.isTransforming()) tr.stopTransform();
+        layer?.batchDraw();
+      } finally {
+        cancelling.current = false;
+      }
+    },
+    [],
+  );
+  return { handlers, nodes, cancel };
 }

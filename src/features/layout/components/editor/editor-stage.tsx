@@ -7,6 +7,7 @@ import type { Scene } from "../../model/scene";
 import type { SnapGuide } from "../../model/snapping";
 import { idleState, runTool, type ActiveTool, type AnyToolState } from "../../model/tools/active-tool";
 import { toolContext } from "../../model/tools/context";
+import { anchorHitRect, targetSizes, type PointerKind } from "../../model/touch-targets";
 import type { ToolEvent, ToolPreview } from "../../model/tools/tool";
 import { useShapeHandlers } from "../../hooks/use-shape-handlers";
 import { FixtureShape } from "./fixture-shape";
@@ -34,9 +35,13 @@ export interface EditorStageProps {
   toolKeys: React.MutableRefObject<((key: string) => boolean) | null>;
 }
 
-/** Snap and pick distances are screen distances (the same feel at every zoom). */
+/** Snap distance is a screen distance (the same feel at every zoom); pick and drag distances follow the pointer (touch-targets.ts). */
 const SNAP_PX = 8;
-const DRAG_PX = 4;
+
+/** A tablet starts with finger-sized targets; a mouse press switches back (and a touch forward again). */
+function startingPointer(): PointerKind {
+  return typeof window !== "undefined" && ("ontouchstart" in window || navigator.maxTouchPoints > 0) ? "touch" : "mouse";
+}
 
 /** Metres per screen pixel in √2 steps, so shapes re-render only when the zoom moves a step. */
 function quantise(metresPerScreenPixel: number): number {
@@ -65,8 +70,21 @@ export function EditorStage(p: EditorStageProps) {
   const toolState = useRef<AnyToolState>(idleState(active));
   const panStart = useRef<{ x: number; y: number; view: View } | null>(null);
   const pinch = useRef<{ distance: number; centre: { x: number; y: number } } | null>(null);
+  /** A finger on empty plan with the select tool: a tap selects, a drag pans. */
+  const fingerPress = useRef<{ x: number; y: number; point: PlanPoint; panning: boolean } | null>(null);
+  const [pointerKind, setPointerKind] = useState<PointerKind>(startingPointer);
+  const sizes = targetSizes(pointerKind);
+  const sizesRef = useRef(sizes);
+  sizesRef.current = sizes;
+  const stageRef = useRef<Konva.Stage>(null);
 
-  const { handlers, nodes } = useShapeHandlers({
+  const pinching = {
+    get current() {
+      return pinch.current !== null;
+    },
+  };
+  const { handlers, nodes, cancel } = useShapeHandlers({
+    pinching,
     scene: sceneRef,
     snap: snapRef,
     selecting: selectingRef,
@@ -99,7 +117,9 @@ export function EditorStage(p: EditorStageProps) {
   }, [scene.selection, scene.fixtures, active, p.canEdit, nodes]);
 
   function feed(event: ToolEvent) {
-    const ctx = toolContext(sceneRef.current, { gridM: p.gridM, snapToFixtures: p.snapToFixtures, toleranceM: tolerance, dragThresholdM: stageLengthToPlan(DRAG_PX, mpp, view) }, newId);
+    const sz = sizesRef.current;
+    const settings = { gridM: p.gridM, snapToFixtures: p.snapToFixtures, toleranceM: tolerance, dragThresholdM: stageLengthToPlan(sz.dragPx, mpp, view), pickToleranceM: stageLengthToPlan(sz.pickPx, mpp, view) };
+    const ctx = toolContext(sceneRef.current, settings, newId);
     const r = runTool(active, toolState.current, event, ctx);
     toolState.current = r.state;
     setPreview(r.preview && r.preview.kind !== "move" ? r.preview : null);
@@ -125,12 +145,30 @@ export function EditorStage(p: EditorStageProps) {
     return pos ? stageToPlan(stagePoint(pos.x, pos.y), mpp, view) : null;
   }
 
+  function notePointer(evt: PointerEvent) {
+    const kind: PointerKind = evt.pointerType === "mouse" ? "mouse" : "touch";
+    if (kind !== sizesRef.current.kind) {
+      sizesRef.current = targetSizes(kind);
+      setPointerKind(kind);
+    }
+  }
+
   function onDown(e: Konva.KonvaEventObject<PointerEvent>) {
     const stage = e.target.getStage();
+    notePointer(e.evt);
     if (!stage || pinch.current) return;
+    // A press on a transformer handle belongs to the transformer: no marquee, tap or pan.
+    if (e.target !== stage && e.target.findAncestor("Transformer")) return;
     const pos = stage.getPointerPosition();
     if (p.panning || active.tool === "pan" || e.evt.button === 1) {
       if (pos) panStart.current = { x: pos.x, y: pos.y, view };
+      return;
+    }
+    // A finger on empty plan pans (the page cannot scroll the stage away under it); a tap
+    // without a drag still selects or clears, fed to the select tool on release.
+    if (e.evt.pointerType === "touch" && active.tool === "select") {
+      const pt = pointer(stage);
+      if (pos && pt) fingerPress.current = { x: pos.x, y: pos.y, point: pt, panning: false };
       return;
     }
     if (!p.canEdit && active.tool !== "select") return;
@@ -141,6 +179,14 @@ export function EditorStage(p: EditorStageProps) {
   function onMove(e: Konva.KonvaEventObject<PointerEvent>) {
     const stage = e.target.getStage();
     if (!stage || pinch.current) return;
+    const finger = fingerPress.current;
+    if (finger && !finger.panning) {
+      const pos = stage.getPointerPosition();
+      if (pos && Math.hypot(pos.x - finger.x, pos.y - finger.y) > sizesRef.current.dragPx) {
+        finger.panning = true;
+        panStart.current = { x: finger.x, y: finger.y, view };
+      }
+    }
     if (panStart.current) {
       const pos = stage.getPointerPosition();
       const s = panStart.current;
@@ -154,8 +200,15 @@ export function EditorStage(p: EditorStageProps) {
 
   function onUp(e: Konva.KonvaEventObject<PointerEvent>) {
     const stage = e.target.getStage();
+    const finger = fingerPress.current;
+    fingerPress.current = null;
     if (panStart.current) {
       panStart.current = null;
+      return;
+    }
+    if (finger && !pinch.current) {
+      feed({ type: "pointer-down", point: finger.point });
+      feed({ type: "pointer-up", point: finger.point });
       return;
     }
     if (!stage || (toolState.current as { phase: string }).phase === "idle") return;
@@ -172,27 +225,58 @@ export function EditorStage(p: EditorStageProps) {
     p.onViewChange((v) => zoomAbout(v, stagePoint(pos.x, pos.y), factor));
   }
 
-  function onTouchMove(e: Konva.KonvaEventObject<TouchEvent>) {
-    const t = e.evt.touches;
-    if (t.length !== 2) return;
-    e.evt.preventDefault();
-    const stage = e.target.getStage();
-    const box = stage?.container().getBoundingClientRect();
-    if (!box) return;
-    const a = { x: t[0].clientX - box.left, y: t[0].clientY - box.top };
-    const b = { x: t[1].clientX - box.left, y: t[1].clientY - box.top };
-    const distance = Math.hypot(a.x - b.x, a.y - b.y);
-    const centre = { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 };
-    const last = pinch.current;
-    pinch.current = { distance, centre };
-    toolState.current = idleState(active);
-    setPreview(null);
-    if (!last || last.distance === 0) return;
-    p.onViewChange((v) => {
-      const zoomed = zoomAbout(v, stagePoint(centre.x, centre.y), distance / last.distance);
-      return { ...zoomed, panX: zoomed.panX + centre.x - last.centre.x, panY: zoomed.panY + centre.y - last.centre.y };
-    });
-  }
+  // Pinch and two-finger pan, on the container itself: Konva holds back its own touch events
+  // while a shape is being dragged, and the first finger of a pinch often lands on a fixture.
+  const pinchView = useRef({ onViewChange: p.onViewChange, active, cancel });
+  pinchView.current = { onViewChange: p.onViewChange, active, cancel };
+  useEffect(() => {
+    const el = stageRef.current?.container();
+    if (!el) return;
+    const points = (t: TouchList) => {
+      const box = el.getBoundingClientRect();
+      const a = { x: t[0].clientX - box.left, y: t[0].clientY - box.top };
+      const b = { x: t[1].clientX - box.left, y: t[1].clientY - box.top };
+      return { distance: Math.hypot(a.x - b.x, a.y - b.y), centre: { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 } };
+    };
+    const start = (e: TouchEvent) => {
+      if (e.touches.length < 2) return;
+      e.preventDefault();
+      // The first finger's drag, transform, pan or half-drawn shape gives way to the pinch.
+      pinchView.current.cancel();
+      panStart.current = null;
+      fingerPress.current = null;
+      toolState.current = idleState(pinchView.current.active);
+      setPreview(null);
+      pinch.current = points(e.touches);
+    };
+    const move = (e: TouchEvent) => {
+      if (e.touches.length < 2 || !pinch.current) return;
+      e.preventDefault();
+      const last = pinch.current;
+      const next = points(e.touches);
+      pinch.current = next;
+      if (last.distance === 0) return;
+      pinchView.current.onViewChange((v) => {
+        const zoomed = zoomAbout(v, stagePoint(next.centre.x, next.centre.y), next.distance / last.distance);
+        return { ...zoomed, panX: zoomed.panX + next.centre.x - last.centre.x, panY: zoomed.panY + next.centre.y - last.centre.y };
+      });
+    };
+    const end = (e: TouchEvent) => {
+      // Stay in the pinch until the last finger lifts, so the one left behind draws nothing.
+      if (e.touches.length === 0) pinch.current = null;
+      else if (e.touches.length === 1 && pinch.current) pinch.current = { distance: 0, centre: pinch.current.centre };
+    };
+    el.addEventListener("touchstart", start, { passive: false, capture: true });
+    el.addEventListener("touchmove", move, { passive: false, capture: true });
+    el.addEventListener("touchend", end, { capture: true });
+    el.addEventListener("touchcancel", end, { capture: true });
+    return () => {
+      el.removeEventListener("touchstart", start, { capture: true });
+      el.removeEventListener("touchmove", move, { capture: true });
+      el.removeEventListener("touchend", end, { capture: true });
+      el.removeEventListener("touchcancel", end, { capture: true });
+    };
+  }, []);
 
   const unit = quantise(mpp / view.zoom);
   const k = 1 / mpp;
@@ -202,6 +286,7 @@ export function EditorStage(p: EditorStageProps) {
 
   return (
     <Stage
+      ref={stageRef}
       width={width}
       height={height}
       x={view.panX}
@@ -216,11 +301,12 @@ export function EditorStage(p: EditorStageProps) {
         const pt = stage && pointer(stage);
         if (pt && (active.tool === "polygon" || active.tool === "vertex")) feed({ type: "double-click", point: pt });
       }}
-      onWheel={onWheel}
-      onTouchMove={onTouchMove}
-      onTouchEnd={() => {
-        pinch.current = null;
+      onDblTap={(e) => {
+        const stage = e.target.getStage();
+        const pt = stage && pointer(stage);
+        if (pt && !pinch.current && (active.tool === "polygon" || active.tool === "vertex")) feed({ type: "double-click", point: pt });
       }}
+      onWheel={onWheel}
       style={{ cursor: p.panning || active.tool === "pan" ? "grab" : active.tool === "select" ? "default" : "crosshair", touchAction: "none" }}
     >
       <StageBackdrop backdrop={backdrop} plan={scene.plan} gridM={gridShown} />
@@ -239,7 +325,17 @@ export function EditorStage(p: EditorStageProps) {
           rotateEnabled
           keepRatio={false}
           ignoreStroke
-          anchorSize={12}
+          anchorSize={sizes.anchorVisualPx}
+          rotateAnchorOffset={sizes.rotateOffsetPx}
+          anchorStyleFunc={(anchor) => {
+            // A finger-sized target that reaches out from the outline (touch-targets.ts).
+            const r = anchorHitRect(anchor.name(), sizesRef.current.anchorVisualPx, sizesRef.current.anchorHitPx);
+            anchor.hitFunc((ctx, shape) => {
+              ctx.beginPath();
+              ctx.rect(r.x, r.y, r.width, r.height);
+              ctx.fillStrokeShape(shape);
+            });
+          }}
           anchorStroke={SELECTION_STROKE}
           borderStroke={SELECTION_STROKE}
           rotationSnaps={[0, 45, 90, 135, 180, 225, 270, 315]}
@@ -252,7 +348,7 @@ export function EditorStage(p: EditorStageProps) {
           <Line ref={guideX} visible={false} stroke="#CC79A7" strokeWidth={1.5} dash={[6, 4]} strokeScaleEnabled={false} />
           <Line ref={guideY} visible={false} stroke="#CC79A7" strokeWidth={1.5} dash={[6, 4]} strokeScaleEnabled={false} />
           <PreviewShape preview={preview} />
-          {active.tool === "vertex" ? <CornerHandles scene={scene} unit={unit} /> : null}
+          {active.tool === "vertex" ? <CornerHandles scene={scene} unit={unit} sizePx={sizes.anchorVisualPx} /> : null}
         </Group>
       </Layer>
     </Stage>
@@ -260,10 +356,10 @@ export function EditorStage(p: EditorStageProps) {
 }
 
 /** The selected outline's corners, as squares to grab with the corner tool (it hit-tests them itself). */
-function CornerHandles({ scene, unit }: { scene: Scene; unit: number }) {
+function CornerHandles({ scene, unit, sizePx }: { scene: Scene; unit: number; sizePx: number }) {
   const f = scene.selection.length === 1 ? scene.fixtures[scene.selection[0]] : undefined;
   if (!f || "point" in f) return null;
-  const h = 10 * unit;
+  const h = (sizePx - 2) * unit;
   return (
     <>
       {f.polygon.map(([x, y], i) => (

@@ -13,6 +13,8 @@ export interface ToolSettings {
   /** Screen tolerances already converted to metres (coordinates.stageLengthToPlan). */
   toleranceM: number;
   dragThresholdM: number;
+  /** How near a press must be to pick a point or corner (a finger needs more than a mouse); toleranceM when absent. */
+  pickToleranceM?: number;
 }
 
 export function toolContext(scene: Scene, settings: ToolSettings, newId: () => string): ToolContext {
@@ -30,6 +32,6 @@ export function toolContext(scene: Scene, settings: ToolSettings, newId: () => s
       return { dx: s.dx, dy: s.dy };
     },
     dragThresholdM: settings.dragThresholdM,
-    pickToleranceM: settings.toleranceM,
+    pickToleranceM: settings.pickToleranceM ?? settings.toleranceM,
   };
 }

@@ -3,10 +3,11 @@ import type { PolygonFixture } from "../../../../../server/contracts/fixtures";
 import { applyActions } from "../actions";
 import { planPoint } from "../coordinates";
 import { createScene, sceneFixtures } from "../scene";
-import { uuid } from "../test-builders";
+import { idSource, uuid } from "../test-builders";
 import { pointTool, POINT_IDLE } from "./point-tool";
 import { POLYGON_IDLE, polygonTool } from "./polygon-tool";
 import { RECTANGLE_IDLE, rectangleTool } from "./rectangle-tool";
+import { toolContext } from "./context";
 import { dbl, down, drive, key, moveTo, plainContext, up } from "./test-drive";
 
 const rectangle = (s: Parameters<typeof rectangleTool>[1], e: Parameters<typeof rectangleTool>[2], c: Parameters<typeof rectangleTool>[3]) => rectangleTool("door-case", s, e, c);
@@ -63,6 +64,20 @@ describe("polygon tool", () => {
     expect(byDbl.actions).toHaveLength(1);
     expect((byDbl.actions[0] as unknown as { fixtures: PolygonFixture[] }).fixtures[0].polygon).toEqual([[0, 0], [3, 0], [3, 2]]);
     expect(drive(polygon, POLYGON_IDLE, [down(0, 0), down(3, 0), down(3, 2), key("Enter")], ctx).actions).toHaveLength(1);
+  });
+  it("on a tablet, a double-tap whose second tap lands a few pixels off adds no corner, and a finger's press near the first corner closes", () => {
+    // A finger's double-tap: the second tap 3 cm (a few screen px) from the first, then the dbltap.
+    const ctx = { ...plainContext(), dragThresholdM: 0.05 };
+    const byTap = drive(polygon, POLYGON_IDLE, [down(0, 0), down(3, 0), down(3, 2), up(3, 2), down(3.03, 2.01), up(3.03, 2.01), dbl(3.03, 2.01)], ctx);
+    expect((byTap.actions[0] as unknown as { fixtures: PolygonFixture[] }).fixtures[0].polygon).toEqual([[0, 0], [3, 0], [3, 2]]);
+    // A press 0.35 m from the first corner: outside a mouse's pick tolerance, inside a finger's.
+    const near = [down(0, 0), down(3, 0), down(3, 2), down(0.3, 0.18)];
+    const mouse = toolContext(createScene({ width: 40, height: 20 }), { gridM: null, snapToFixtures: false, toleranceM: 0.1, dragThresholdM: 0.05 }, idSource());
+    expect(drive(polygon, POLYGON_IDLE, near, mouse).actions).toEqual([]);
+    const finger = toolContext(createScene({ width: 40, height: 20 }), { gridM: null, snapToFixtures: false, toleranceM: 0.1, dragThresholdM: 0.05, pickToleranceM: 0.4 }, idSource());
+    const closed = drive(polygon, POLYGON_IDLE, near, finger);
+    expect(closed.actions).toHaveLength(1);
+    expect(closed.state).toEqual(POLYGON_IDLE);
   });
   it("refuses to close too few or crossing vertices, with a reason, and keeps drawing", () => {
     const ctx = plainContext();

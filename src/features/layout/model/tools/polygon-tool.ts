@@ -1,6 +1,6 @@
 /**
  * Polygon tool: each click adds a vertex; the outline closes on a click at the first vertex,
- * a double-click or Enter (with at least 3 vertices and no crossing edges). Backspace removes
+ * a double-click (double-tap) or Enter (with at least 3 vertices and no crossing edges). Backspace removes
  * the last vertex; Escape cancels.
  */
 import { isSelfIntersecting } from "../../../../../server/analysis/geometry/segments";
@@ -50,7 +50,9 @@ export function polygonTool(kind: FixtureKind, state: PolygonToolState, event: T
     case "pointer-down": {
       const p = ctx.snap(event.point);
       if (vertices.length >= 3 && distance(p, vertices[0]) <= ctx.pickToleranceM) return close(kind, vertices, hover, ctx);
-      if (distance(p, vertices[vertices.length - 1]) <= 1e-9) return placing(vertices, p);
+      // A press on (or within a drag's wobble of) the last corner adds nothing: the second tap
+      // of a double-tap on a tablet lands a few pixels off the first.
+      if (distance(p, vertices[vertices.length - 1]) <= Math.max(1e-9, ctx.dragThresholdM)) return placing(vertices, p);
       return placing([...vertices, p], p);
     }
   }
