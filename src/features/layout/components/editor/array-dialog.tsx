@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from "react";
+import { useEffect, useRef, useState, type FormEvent } from "react";
 import type { LengthPreference } from "../../../../../server/domain/units/format-units";
 import { formatLength } from "../../../../../server/domain/units/format-units";
 import { toMetres } from "../../../../../server/analysis/geometry/units";
@@ -21,6 +21,11 @@ const DIRECTIONS: Record<string, { label: string; vec: Vec }> = {
  */
 export function ArrayDialog({ size, preference, onArray, onClose }: { size: { width: number; depth: number }; preference: LengthPreference; onArray: (count: number, spacingM: number, direction: Vec) => void; onClose: () => void }) {
   const [count, setCount] = useState("4");
+  const box = useRef<HTMLDivElement>(null);
+  // Below xl the panel sits under the stage, often off screen on a tablet: bring it into view.
+  useEffect(() => {
+    box.current?.scrollIntoView?.({ block: "nearest" });
+  }, []);
   const [direction, setDirection] = useState("right");
   const along = direction === "right" || direction === "left" ? size.width : size.depth;
   const [spacing, setSpacing] = useState<string | null>(null);
@@ -41,7 +46,7 @@ export function ArrayDialog({ size, preference, onArray, onClose }: { size: { wi
   }
 
   return (
-    <div role="dialog" aria-modal="false" aria-labelledby="array-heading" className="space-y-3 rounded-md bg-surface p-4 shadow-lg edge">
+    <div ref={box} role="dialog" aria-modal="false" aria-labelledby="array-heading" className="space-y-3 rounded-md bg-surface p-4 shadow-lg edge">
       <h3 id="array-heading" className="text-lg font-bold">
         Make a row of copies
       </h3>

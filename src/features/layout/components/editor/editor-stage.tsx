@@ -77,6 +77,8 @@ export function EditorStage(p: EditorStageProps) {
   const sizesRef = useRef(sizes);
   sizesRef.current = sizes;
   const stageRef = useRef<Konva.Stage>(null);
+  /** The last two presses (stage px): Konva calls any two taps within 400 ms a double-tap, wherever they land. */
+  const presses = useRef<{ x: number; y: number }[]>([]);
 
   const pinching = {
     get current() {
@@ -157,6 +159,8 @@ export function EditorStage(p: EditorStageProps) {
     const stage = e.target.getStage();
     notePointer(e.evt);
     if (!stage || pinch.current) return;
+    const at = stage.getPointerPosition();
+    if (at) presses.current = [...presses.current.slice(-1), at];
     // A press on a transformer handle belongs to the transformer: no marquee, tap or pan.
     if (e.target !== stage && e.target.findAncestor("Transformer")) return;
     const pos = stage.getPointerPosition();
@@ -304,7 +308,10 @@ export function EditorStage(p: EditorStageProps) {
       onDblTap={(e) => {
         const stage = e.target.getStage();
         const pt = stage && pointer(stage);
-        if (pt && !pinch.current && (active.tool === "polygon" || active.tool === "vertex")) feed({ type: "double-click", point: pt });
+        // Tapping corners quickly is not a double-tap: only two taps on one spot are.
+        const [a, b] = presses.current;
+        const sameSpot = a && b && Math.hypot(a.x - b.x, a.y - b.y) <= sizesRef.current.pickPx;
+        if (pt && sameSpot && !pinch.current && (active.tool === "polygon" || active.tool === "vertex")) feed({ type: "double-click", point: pt });
       }}
       onWheel={onWheel}
       style={{ cursor: p.panning || active.tool === "pan" ? "grab" : active.tool === "select" ? "default" : "crosshair", touchAction: "none" }}

@@ -58,6 +58,7 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
   const { scene } = editor;
   const autosave = useAutosave(plan.id, scene, initial.layoutRevision, canEdit);
   const box = useRef<HTMLDivElement>(null);
+  const bar = useRef<HTMLDivElement>(null);
   const [size, setSize] = useState({ width: 800, height: 560 });
   const [view, setView] = useState<View>({ panX: 0, panY: 0, zoom: 1 });
   const [kind, setKind] = useState<FixtureKind>("open-case");
@@ -77,7 +78,10 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
     if (!el) return;
     const measure = () => {
       const width = Math.max(320, el.clientWidth);
-      const height = Math.max(360, Math.min(window.innerHeight - 260, 900));
+      // The tools stay pinned above the stage when the page scrolls to it (a finger on the stage
+      // pans the plan, not the page), so the stage must fit under them in the window.
+      const barHeight = bar.current?.offsetHeight ?? 0;
+      const height = Math.max(360, Math.min(window.innerHeight - 260, window.innerHeight - barHeight - 24, 900));
       setSize({ width, height });
       if (!fitted.current) {
         fitted.current = true;
@@ -143,7 +147,7 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
 
   return (
     <div className="space-y-3">
-      <div className="flex flex-wrap items-center justify-between gap-2">
+      <div ref={bar} className="sticky top-0 z-10 -mx-1 flex flex-wrap items-center justify-between gap-2 bg-paper px-1 py-1" data-testid="editor-bar">
         <EditorToolbar
           active={active}
           kind={kind}
@@ -190,9 +194,10 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
           </ul>
         </Alert>
       ) : null}
-      {message ? <Alert tone="note">{message}</Alert> : null}
-      <div className="grid items-start gap-3 xl:grid-cols-[minmax(0,1fr)_22rem]">
-        <div className="relative">
+      {/* One column below xl whose width is the page's, not the canvas's: a grid item's min-width
+          is its content, and the stage would keep itself as wide as it started. */}
+      <div className="grid grid-cols-1 items-start gap-3 xl:grid-cols-[minmax(0,1fr)_22rem]">
+        <div className="relative min-w-0">
           <div
             ref={box}
             className="overflow-hidden rounded-md bg-paper edge"
@@ -223,6 +228,12 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
               toolKeys={toolKeys}
             />
           </div>
+          {/* Over the plan, not above it: a message pushing the stage down would move it under the finger mid-drawing. */}
+          {message ? (
+            <div className="pointer-events-none absolute left-2 right-2 top-2" data-testid="editor-message">
+              <Alert tone="note">{message}</Alert>
+            </div>
+          ) : null}
           <div className="pointer-events-none absolute bottom-2 left-2 rounded bg-surface/90 px-2 py-1 edge">
             <ScaleBar metresPerScreenPixel={backdrop.metresPerPixel / view.zoom} preference={preference} maxPixels={150} />
           </div>
@@ -240,6 +251,8 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
                 try {
                   editor.apply([array(scene.selection, count, spacing, direction, () => crypto.randomUUID())]);
                   setArrayOpen(false);
+                  // Back to the plan to see the copies (below xl the dialog sits under the stage).
+                  box.current?.scrollIntoView?.({ block: "nearest" });
                 } catch (e) {
                   setMessage(e instanceof RangeError ? e.message : "The copies could not be made.");
                 }
