@@ -31,6 +31,8 @@ export interface EditorStageProps {
   apply: (actions: readonly SceneAction[], gesture?: string | null) => void;
   endGesture: () => void;
   onMessage: (message: string | null) => void;
+  /** An outline is half drawn (corners placed, not closed): Undo then takes back its last corner. */
+  onDrawingOutline?: (drawing: boolean) => void;
   /** Keys for the tool in hand (Escape, Enter, Backspace while drawing); set by the stage. */
   toolKeys: React.MutableRefObject<((key: string) => boolean) | null>;
 }
@@ -103,10 +105,22 @@ export function EditorStage(p: EditorStageProps) {
     },
   });
 
+  const outlineOpen = useRef(false);
+  const noteOutline = (state: AnyToolState) => {
+    const open = active.tool === "polygon" && (state as { phase: string }).phase !== "idle";
+    if (open !== outlineOpen.current) {
+      outlineOpen.current = open;
+      p.onDrawingOutline?.(open);
+    }
+  };
+  const noteOutlineRef = useRef(noteOutline);
+  noteOutlineRef.current = noteOutline;
+
   // A new tool starts idle, with nothing half drawn.
   useEffect(() => {
     toolState.current = idleState(active);
     setPreview(null);
+    noteOutlineRef.current(toolState.current);
   }, [active]);
 
   // The transformer holds the selected outlines (points only move).
@@ -124,6 +138,7 @@ export function EditorStage(p: EditorStageProps) {
     const ctx = toolContext(sceneRef.current, settings, newId);
     const r = runTool(active, toolState.current, event, ctx);
     toolState.current = r.state;
+    noteOutline(r.state);
     setPreview(r.preview && r.preview.kind !== "move" ? r.preview : null);
     p.onMessage(r.message);
     if (r.actions.length) p.apply(r.actions);
@@ -220,6 +235,18 @@ export function EditorStage(p: EditorStageProps) {
     if (pt) feed({ type: "pointer-up", point: pt, shift: e.evt.shiftKey });
   }
 
+  /**
+   * Konva calls any two presses within 400 ms a double-click (or double-tap), wherever they land,
+   * and on a tablet it sends one for quick corner taps: only two presses on one spot count.
+   */
+  function onDouble(e: Konva.KonvaEventObject<Event>) {
+    const stage = e.target.getStage();
+    const pt = stage && pointer(stage);
+    const [a, b] = presses.current;
+    const sameSpot = a !== undefined && b !== undefined && Math.hypot(a.x - b.x, a.y - b.y) <= sizesRef.current.pickPx;
+    if (pt && sameSpot && !pinch.current && (active.tool === "polygon" || active.tool === "vertex")) feed({ type: "double-click", point: pt });
+  }
+
   function onWheel(e: Konva.KonvaEventObject<WheelEvent>) {
     e.evt.preventDefault();
     const pos = e.target.getStage()?.getPointerPosition();
@@ -250,6 +277,7 @@ export function EditorStage(p: EditorStageProps) {
       panStart.current = null;
       fingerPress.current = null;
       toolState.current = idleState(pinchView.current.active);
+      noteOutlineRef.current(toolState.current);
       setPreview(null);
       pinch.current = points(e.touches);
     };
@@ -300,19 +328,8 @@ export function EditorStage(p: EditorStageProps) {
       onPointerDown={onDown}
       onPointerMove={onMove}
       onPointerUp={onUp}
-      onDblClick={(e) => {
-        const stage = e.target.getStage();
-        const pt = stage && pointer(stage);
-        if (pt && (active.tool === "polygon" || active.tool === "vertex")) feed({ type: "double-click", point: pt });
-      }}
-      onDblTap={(e) => {
-        const stage = e.target.getStage();
-        const pt = stage && pointer(stage);
-        // Tapping corners quickly is not a double-tap: only two taps on one spot are.
-        const [a, b] = presses.current;
-        const sameSpot = a && b && Math.hypot(a.x - b.x, a.y - b.y) <= sizesRef.current.pickPx;
-        if (pt && sameSpot && !pinch.current && (active.tool === "polygon" || active.tool === "vertex")) feed({ type: "double-click", point: pt });
-      }}
+      onDblClick={onDouble}
+      onDblTap={onDouble}
       onWheel={onWheel}
       style={{ cursor: p.panning || active.tool === "pan" ? "grab" : active.tool === "select" ? "default" : "crosshair", touchAction: "none" }}
     >

@@ -70,6 +70,7 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
   const [arrayOpen, setArrayOpen] = useState(false);
   const [panning, setPanning] = useState(false);
   const [reloading, setReloading] = useState(false);
+  const [drawingOutline, setDrawingOutline] = useState(false);
   const toolKeys = useRef<((key: string) => boolean) | null>(null);
   const fitted = useRef(false);
 
@@ -152,7 +153,7 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
           active={active}
           kind={kind}
           canEdit={canEdit}
-          canUndo={editor.history.past.length > 0}
+          canUndo={editor.history.past.length > 0 || drawingOutline}
           canRedo={editor.history.future.length > 0}
           hasSelection={scene.selection.length > 0}
           gridM={gridM}
@@ -163,7 +164,9 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
             setKind(k);
             if (active.tool === "rectangle" || active.tool === "polygon" || active.tool === "point") setActive(drawTool(k, shape));
           }}
-          onUndo={editor.undo}
+          // Half way through an outline, Undo takes back the last corner (Backspace on a keyboard;
+          // a tablet has only the button).
+          onUndo={drawingOutline ? () => void toolKeys.current?.("Backspace") : editor.undo}
           onRedo={editor.redo}
           onDuplicate={doDuplicate}
           onArray={() => setArrayOpen(true)}
@@ -225,6 +228,7 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
               apply={editor.apply}
               endGesture={editor.endGesture}
               onMessage={setMessage}
+              onDrawingOutline={setDrawingOutline}
               toolKeys={toolKeys}
             />
           </div>
