@@ -1,6 +1,6 @@
 /**
- * A lead tech maps a store's fixtures on a tablet, with a finger only: uploads a drawing, sets
- * its scale with two taps, draws a case (drag), a walk-in (quick corner taps, closed by a tap a
+ * A lead tech maps a store's fixtures on a tablet, with a finger only: uploads a drawing, pinches
+ * it larger and sets its scale with two taps, draws a case (drag), a walk-in (quick corner taps, closed by a tap a
  * finger's width off the first corner, one stray corner taken back with Undo) and a line-set drop (tap); selects the drop with a tap
  * beside it, moves the case, resizes it by a handle grabbed outside its drawn square, pinches
  * with the first finger on the case, pans with one finger, makes a row of copies, undoes, redoes
@@ -130,6 +130,13 @@ it("on a landscape tablet, sets the scale and draws, selects, moves, resizes, pi
   const picker = page.getByRole("group", { name: "Calibration line on the drawing" });
   await picker.locator("canvas").first().waitFor();
   await picker.scrollIntoViewIfNeeded();
+  // No wheel on a tablet: a pinch zooms the drawing (×1.2 about its middle keeps the wall's ends in view).
+  const pickerBox = (await picker.locator("canvas").first().boundingBox())!;
+  const fitZoom = await numberAttr(page, "[data-testid=picker-view]", "data-zoom");
+  await pinch(cdp, { x: pickerBox.x + pickerBox.width / 2, y: pickerBox.y + pickerBox.height / 2 }, 100, 120);
+  const pinchedZoom = await numberAttr(page, "[data-testid=picker-view]", "data-zoom");
+  expect(pinchedZoom / fitZoom).toBeCloseTo(1.2, 1);
+  await page.waitForTimeout(450);
   // The wall is 600 px and 12 m long: 0.02 m a pixel. Two taps on its ends.
   for (const [x, y] of [[100, 250], [700, 250]]) await tap(page, await pickerScreen(page, x, y));
   await page.getByLabel("Real length of the line").fill("12 m");
@@ -163,7 +170,11 @@ it("on a landscape tablet, sets the scale and draws, selects, moves, resizes, pi
   // A corner tapped in the wrong place; with no Backspace to hand, Undo takes it back.
   await tap(page, await at(page, 12, 7));
   await tapButton(page, "Undo");
-
+  // A pinch (out a little, over empty plan) half way through keeps the corners placed so far.
+  const zoomBefore = (await stageView(page)).zoom;
+  await pinch(cdp, await at(page, 5, 7), 120, 100);
+  expect((await stageView(page)).zoom).toBeLessThan(zoomBefore);
+  await page.waitForTimeout(450);
   await tap(page, await at(page, 9, 4));
   // Four quick corner taps close nothing by themselves.
   await page.waitForTimeout(450);

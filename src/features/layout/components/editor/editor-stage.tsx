@@ -72,6 +72,8 @@ export function EditorStage(p: EditorStageProps) {
   const toolState = useRef<AnyToolState>(idleState(active));
   const panStart = useRef<{ x: number; y: number; view: View } | null>(null);
   const pinch = useRef<{ distance: number; centre: { x: number; y: number } } | null>(null);
+  /** The tool's state before the first finger of a gesture landed: a pinch goes back to it. */
+  const beforeTouch = useRef<AnyToolState | null>(null);
   /** A finger on empty plan with the select tool: a tap selects, a drag pans. */
   const fingerPress = useRef<{ x: number; y: number; point: PlanPoint; panning: boolean } | null>(null);
   const [pointerKind, setPointerKind] = useState<PointerKind>(startingPointer);
@@ -119,6 +121,7 @@ export function EditorStage(p: EditorStageProps) {
   // A new tool starts idle, with nothing half drawn.
   useEffect(() => {
     toolState.current = idleState(active);
+    beforeTouch.current = null;
     setPreview(null);
     noteOutlineRef.current(toolState.current);
   }, [active]);
@@ -176,6 +179,7 @@ export function EditorStage(p: EditorStageProps) {
     if (!stage || pinch.current) return;
     const at = stage.getPointerPosition();
     if (at) presses.current = [...presses.current.slice(-1), at];
+    if (e.evt.pointerType === "touch" && e.evt.isPrimary) beforeTouch.current = toolState.current;
     // A press on a transformer handle belongs to the transformer: no marquee, tap or pan.
     if (e.target !== stage && e.target.findAncestor("Transformer")) return;
     const pos = stage.getPointerPosition();
@@ -258,8 +262,10 @@ export function EditorStage(p: EditorStageProps) {
 
   // Pinch and two-finger pan, on the container itself: Konva holds back its own touch events
   // while a shape is being dragged, and the first finger of a pinch often lands on a fixture.
-  const pinchView = useRef({ onViewChange: p.onViewChange, active, cancel });
-  pinchView.current = { onViewChange: p.onViewChange, active, cancel };
+  // Redraws the tool's preview from its state (a key no tool acts on changes nothing else).
+  const redraw = () => feed({ type: "key", key: "Unidentified" });
+  const pinchView = useRef({ onViewChange: p.onViewChange, active, cancel, redraw });
+  pinchView.current = { onViewChange: p.onViewChange, active, cancel, redraw };
   useEffect(() => {
     const el = stageRef.current?.container();
     if (!el) return;
@@ -276,10 +282,14 @@ export function EditorStage(p: EditorStageProps) {
       pinchView.current.cancel();
       panStart.current = null;
       fingerPress.current = null;
-      toolState.current = idleState(pinchView.current.active);
-      noteOutlineRef.current(toolState.current);
-      setPreview(null);
+      // Each finger's press reached the tool before the browser said it was a pinch: go back to
+      // how the tool stood before the first one, so a half-drawn outline keeps its corners.
+      toolState.current = beforeTouch.current ?? idleState(pinchView.current.active);
       pinch.current = points(e.touches);
+      if ((toolState.current as { phase: string }).phase === "idle") {
+        noteOutlineRef.current(toolState.current);
+        setPreview(null);
+      } else pinchView.current.redraw();
     };
     const move = (e: TouchEvent) => {
       if (e.touches.length < 2 || !pinch.current) return;

@@ -22,14 +22,72 @@ export interface PickerProps {
 }
 
 /**
- * Picks up to `names.length` points on a plan image by clicking; wheel zooms about the cursor,
- * dragging pans, a later click replaces the oldest point. Points are display-image pixels.
+ * Picks up to `names.length` points on a plan image by clicking or tapping; wheel or pinch zooms
+ * about the cursor or the fingers, dragging pans, a later click replaces the oldest point.
+ * Points are display-image pixels.
  */
 export function ImagePointPicker({ imageUrl, widthPx, heightPx, points, onChange, names, joined = true, label, height = 420 }: PickerProps) {
   const image = useHtmlImage(imageUrl);
   const box = useRef<HTMLDivElement>(null);
   const [width, setWidth] = useState(640);
   const [view, setView] = useState<View>({ panX: 0, panY: 0, zoom: 1 });
+  const stageRef = useRef<Konva.Stage>(null);
+  /** This touch gesture was a pinch: the finger lifted last is no tap. */
+  const pinched = useRef(false);
+  const loaded = image.status === "loaded";
+
+  // Pinch to zoom (and two-finger pan) on a tablet, where there is no wheel. Native listeners:
+  // Konva is busy dragging the stage with the first finger when the second lands.
+  useEffect(() => {
+    const stage = stageRef.current;
+    const el = stage?.container();
+    if (!stage || !el) return;
+    let last: { distance: number; x: number; y: number } | null = null;
+    const guard = pinched;
+    const read = (t: TouchList) => {
+      const b = el.getBoundingClientRect();
+      const [p, q] = [t[0], t[1]];
+      return { distance: Math.hypot(p.clientX - q.clientX, p.clientY - q.clientY), x: (p.clientX + q.clientX) / 2 - b.left, y: (p.clientY + q.clientY) / 2 - b.top };
+    };
+    const start = (e: TouchEvent) => {
+      if (e.touches.length < 2) {
+        guard.current = false; // a new gesture
+        return;
+      }
+      e.preventDefault();
+      guard.current = true;
+      if (stage.isDragging()) stage.stopDrag();
+      stage.draggable(false);
+      last = read(e.touches);
+    };
+    const move = (e: TouchEvent) => {
+      if (e.touches.length < 2 || !last) return;
+      e.preventDefault();
+      const prev = last;
+      const next = read(e.touches);
+      last = next;
+      if (prev.distance === 0) return;
+      setView((v) => {
+        const z = zoomAbout(v, stagePoint(next.x, next.y), next.distance / prev.distance);
+        return { ...z, panX: z.panX + next.x - prev.x, panY: z.panY + next.y - prev.y };
+      });
+    };
+    const end = (e: TouchEvent) => {
+      if (e.touches.length > 0 || !last) return;
+      last = null;
+      stage.draggable(true);
+    };
+    el.addEventListener("touchstart", start, { passive: false, capture: true });
+    el.addEventListener("touchmove", move, { passive: false, capture: true });
+    el.addEventListener("touchend", end, { capture: true });
+    el.addEventListener("touchcancel", end, { capture: true });
+    return () => {
+      el.removeEventListener("touchstart", start, { capture: true });
+      el.removeEventListener("touchmove", move, { capture: true });
+      el.removeEventListener("touchend", end, { capture: true });
+      el.removeEventListener("touchcancel", end, { capture: true });
+    };
+  }, [loaded]);
 
   useEffect(() => {
     const el = box.current;
@@ -47,7 +105,7 @@ export function ImagePointPicker({ imageUrl, widthPx, heightPx, points, onChange
 
   function handleClick(e: Konva.KonvaEventObject<MouseEvent | TouchEvent>) {
     const pos = e.target.getStage()?.getPointerPosition();
-    if (!pos) return;
+    if (!pos || (e.type === "tap" && pinched.current)) return;
     const p = stageToImage(stagePoint(pos.x, pos.y), view);
     if (p.x < 0 || p.y < 0 || p.x > widthPx || p.y > heightPx) return;
     const rounded = imagePoint(Math.round(p.x * 10) / 10, Math.round(p.y * 10) / 10);
@@ -69,6 +127,8 @@ export function ImagePointPicker({ imageUrl, widthPx, heightPx, points, onChange
         {image.status === "failed" ? <Alert tone="error">The drawing could not be loaded.</Alert> : null}
         {image.status === "loaded" ? (
           <Stage
+            ref={stageRef}
+            style={{ touchAction: "none" }}
             width={width}
             height={height}
             x={view.panX}
@@ -102,7 +162,7 @@ export function ImagePointPicker({ imageUrl, widthPx, heightPx, points, onChange
         ) : null}
       </div>
       <div className="flex flex-wrap items-center gap-2 text-sm text-muted">
-        <span>Click to place {names.join(" and ")}; scroll to zoom, drag to pan.</span>
+        <span>Tap or click to place {names.join(" and ")}; pinch or scroll to zoom, drag to pan.</span>
         <Button variant="secondary" onClick={() => setView(fitView(widthPx, heightPx, width, height))}>
           Fit drawing
         </Button>
