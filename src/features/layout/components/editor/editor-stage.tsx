@@ -10,6 +10,7 @@ import { toolContext } from "../../model/tools/context";
 import { anchorHitRect, targetSizes, type PointerKind } from "../../model/touch-targets";
 import type { ToolEvent, ToolPreview } from "../../model/tools/tool";
 import { useShapeHandlers } from "../../hooks/use-shape-handlers";
+import { useTwoFingerPinch } from "../../hooks/use-two-finger-pinch";
 import { FixtureShape } from "./fixture-shape";
 import { SELECTION_STROKE } from "./fixture-look";
 import { gridSpacing, StageBackdrop, type Backdrop } from "./stage-backdrop";
@@ -71,7 +72,8 @@ export function EditorStage(p: EditorStageProps) {
   const [preview, setPreview] = useState<ToolPreview | null>(null);
   const toolState = useRef<AnyToolState>(idleState(active));
   const panStart = useRef<{ x: number; y: number; view: View } | null>(null);
-  const pinch = useRef<{ distance: number; centre: { x: number; y: number } } | null>(null);
+  /** Two fingers are down (from the second landing to the last lifting). */
+  const pinching = useRef(false);
   /** The tool's state before the first finger of a gesture landed: a pinch goes back to it. */
   const beforeTouch = useRef<AnyToolState | null>(null);
   /** A finger on empty plan with the select tool: a tap selects, a drag pans. */
@@ -84,11 +86,6 @@ export function EditorStage(p: EditorStageProps) {
   /** The last two presses (stage px): Konva calls any two taps within 400 ms a double-tap, wherever they land. */
   const presses = useRef<{ x: number; y: number }[]>([]);
 
-  const pinching = {
-    get current() {
-      return pinch.current !== null;
-    },
-  };
   const { handlers, nodes, cancel } = useShapeHandlers({
     pinching,
     scene: sceneRef,
@@ -176,7 +173,7 @@ export function EditorStage(p: EditorStageProps) {
   function onDown(e: Konva.KonvaEventObject<PointerEvent>) {
     const stage = e.target.getStage();
     notePointer(e.evt);
-    if (!stage || pinch.current) return;
+    if (!stage || pinching.current) return;
     const at = stage.getPointerPosition();
     if (at) presses.current = [...presses.current.slice(-1), at];
     if (e.evt.pointerType === "touch" && e.evt.isPrimary) beforeTouch.current = toolState.current;
@@ -201,7 +198,7 @@ export function EditorStage(p: EditorStageProps) {
 
   function onMove(e: Konva.KonvaEventObject<PointerEvent>) {
     const stage = e.target.getStage();
-    if (!stage || pinch.current) return;
+    if (!stage || pinching.current) return;
     const finger = fingerPress.current;
     if (finger && !finger.panning) {
       const pos = stage.getPointerPosition();
@@ -229,7 +226,7 @@ export function EditorStage(p: EditorStageProps) {
       panStart.current = null;
       return;
     }
-    if (finger && !pinch.current) {
+    if (finger && !pinching.current) {
       feed({ type: "pointer-down", point: finger.point });
       feed({ type: "pointer-up", point: finger.point });
       return;
@@ -248,7 +245,7 @@ export function EditorStage(p: EditorStageProps) {
     const pt = stage && pointer(stage);
     const [a, b] = presses.current;
     const sameSpot = a !== undefined && b !== undefined && Math.hypot(a.x - b.x, a.y - b.y) <= sizesRef.current.pickPx;
-    if (pt && sameSpot && !pinch.current && (active.tool === "polygon" || active.tool === "vertex")) feed({ type: "double-click", point: pt });
+    if (pt && sameSpot && !pinching.current && (active.tool === "polygon" || active.tool === "vertex")) feed({ type: "double-click", point: pt });
   }
 
   function onWheel(e: Konva.KonvaEventObject<WheelEvent>) {
@@ -260,65 +257,26 @@ export function EditorStage(p: EditorStageProps) {
     p.onViewChange((v) => zoomAbout(v, stagePoint(pos.x, pos.y), factor));
   }
 
-  // Pinch and two-finger pan, on the container itself: Konva holds back its own touch events
-  // while a shape is being dragged, and the first finger of a pinch often lands on a fixture.
-  // Redraws the tool's preview from its state (a key no tool acts on changes nothing else).
-  const redraw = () => feed({ type: "key", key: "Unidentified" });
-  const pinchView = useRef({ onViewChange: p.onViewChange, active, cancel, redraw });
-  pinchView.current = { onViewChange: p.onViewChange, active, cancel, redraw };
-  useEffect(() => {
-    const el = stageRef.current?.container();
-    if (!el) return;
-    const points = (t: TouchList) => {
-      const box = el.getBoundingClientRect();
-      const a = { x: t[0].clientX - box.left, y: t[0].clientY - box.top };
-      const b = { x: t[1].clientX - box.left, y: t[1].clientY - box.top };
-      return { distance: Math.hypot(a.x - b.x, a.y - b.y), centre: { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 } };
-    };
-    const start = (e: TouchEvent) => {
-      if (e.touches.length < 2) return;
-      e.preventDefault();
-      // The first finger's drag, transform, pan or half-drawn shape gives way to the pinch.
-      pinchView.current.cancel();
+  // Pinch and two-finger pan (use-two-finger-pinch.ts); the first finger has often started a drag.
+  useTwoFingerPinch(() => stageRef.current?.container(), pinching, {
+    onStart: () => {
+      cancel();
       panStart.current = null;
       fingerPress.current = null;
       // Each finger's press reached the tool before the browser said it was a pinch: go back to
       // how the tool stood before the first one, so a half-drawn outline keeps its corners.
-      toolState.current = beforeTouch.current ?? idleState(pinchView.current.active);
-      pinch.current = points(e.touches);
+      toolState.current = beforeTouch.current ?? idleState(active);
       if ((toolState.current as { phase: string }).phase === "idle") {
-        noteOutlineRef.current(toolState.current);
+        noteOutline(toolState.current);
         setPreview(null);
-      } else pinchView.current.redraw();
-    };
-    const move = (e: TouchEvent) => {
-      if (e.touches.length < 2 || !pinch.current) return;
-      e.preventDefault();
-      const last = pinch.current;
-      const next = points(e.touches);
-      pinch.current = next;
-      if (last.distance === 0) return;
-      pinchView.current.onViewChange((v) => {
-        const zoomed = zoomAbout(v, stagePoint(next.centre.x, next.centre.y), next.distance / last.distance);
-        return { ...zoomed, panX: zoomed.panX + next.centre.x - last.centre.x, panY: zoomed.panY + next.centre.y - last.centre.y };
-      });
-    };
-    const end = (e: TouchEvent) => {
-      // Stay in the pinch until the last finger lifts, so the one left behind draws nothing.
-      if (e.touches.length === 0) pinch.current = null;
-      else if (e.touches.length === 1 && pinch.current) pinch.current = { distance: 0, centre: pinch.current.centre };
-    };
-    el.addEventListener("touchstart", start, { passive: false, capture: true });
-    el.addEventListener("touchmove", move, { passive: false, capture: true });
-    el.addEventListener("touchend", end, { capture: true });
-    el.addEventListener("touchcancel", end, { capture: true });
-    return () => {
-      el.removeEventListener("touchstart", start, { capture: true });
-      el.removeEventListener("touchmove", move, { capture: true });
-      el.removeEventListener("touchend", end, { capture: true });
-      el.removeEventListener("touchcancel", end, { capture: true });
-    };
-  }, []);
+      } else feed({ type: "key", key: "Unidentified" }); // redraws the preview; no tool acts on it
+    },
+    onPinch: ({ factor, centre, dx, dy }) =>
+      p.onViewChange((v) => {
+        const zoomed = zoomAbout(v, stagePoint(centre.x, centre.y), factor);
+        return { ...zoomed, panX: zoomed.panX + dx, panY: zoomed.panY + dy };
+      }),
+  });
 
   const unit = quantise(mpp / view.zoom);
   const k = 1 / mpp;

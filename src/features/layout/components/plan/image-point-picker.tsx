@@ -3,6 +3,7 @@ import type Konva from "konva";
 import { Circle, Image as KonvaImage, Layer, Line, Stage, Text } from "react-konva";
 import { fitView, imagePoint, stagePoint, stageToImage, zoomAbout, type ImagePoint, type View } from "../../model/coordinates";
 import { useHtmlImage } from "../../../../lib/use-html-image";
+import { useTwoFingerPinch } from "../../hooks/use-two-finger-pinch";
 import { Spinner } from "../../../../components/ui/spinner";
 import { Alert } from "../../../../components/ui/alert";
 import { Button } from "../../../../components/ui/button";
@@ -36,57 +37,22 @@ export function ImagePointPicker({ imageUrl, widthPx, heightPx, points, onChange
   const pinched = useRef(false);
   const loaded = image.status === "loaded";
 
-  // Pinch to zoom (and two-finger pan) on a tablet, where there is no wheel. Native listeners:
-  // Konva is busy dragging the stage with the first finger when the second lands.
-  useEffect(() => {
-    const stage = stageRef.current;
-    const el = stage?.container();
-    if (!stage || !el) return;
-    let last: { distance: number; x: number; y: number } | null = null;
-    const guard = pinched;
-    const read = (t: TouchList) => {
-      const b = el.getBoundingClientRect();
-      const [p, q] = [t[0], t[1]];
-      return { distance: Math.hypot(p.clientX - q.clientX, p.clientY - q.clientY), x: (p.clientX + q.clientX) / 2 - b.left, y: (p.clientY + q.clientY) / 2 - b.top };
-    };
-    const start = (e: TouchEvent) => {
-      if (e.touches.length < 2) {
-        guard.current = false; // a new gesture
-        return;
-      }
-      e.preventDefault();
-      guard.current = true;
-      if (stage.isDragging()) stage.stopDrag();
-      stage.draggable(false);
-      last = read(e.touches);
-    };
-    const move = (e: TouchEvent) => {
-      if (e.touches.length < 2 || !last) return;
-      e.preventDefault();
-      const prev = last;
-      const next = read(e.touches);
-      last = next;
-      if (prev.distance === 0) return;
+  // Pinch to zoom (and two-finger pan) on a tablet, where there is no wheel; the first finger has
+  // started dragging the stage by the time the second lands.
+  const pinchNow = useRef(false);
+  useTwoFingerPinch(() => stageRef.current?.container(), pinchNow, {
+    onStart: () => {
+      pinched.current = true;
+      const stage = stageRef.current;
+      if (stage?.isDragging()) stage.stopDrag();
+      stage?.draggable(false);
+    },
+    onEnd: () => stageRef.current?.draggable(true),
+    onPinch: ({ factor, centre, dx, dy }) =>
       setView((v) => {
-        const z = zoomAbout(v, stagePoint(next.x, next.y), next.distance / prev.distance);
-        return { ...z, panX: z.panX + next.x - prev.x, panY: z.panY + next.y - prev.y };
-      });
-    };
-    const end = (e: TouchEvent) => {
-      if (e.touches.length > 0 || !last) return;
-      last = null;
-      stage.draggable(true);
-    };
-    el.addEventListener("touchstart", start, { passive: false, capture: true });
-    el.addEventListener("touchmove", move, { passive: false, capture: true });
-    el.addEventListener("touchend", end, { capture: true });
-    el.addEventListener("touchcancel", end, { capture: true });
-    return () => {
-      el.removeEventListener("touchstart", start, { capture: true });
-      el.removeEventListener("touchmove", move, { capture: true });
-      el.removeEventListener("touchend", end, { capture: true });
-      el.removeEventListener("touchcancel", end, { capture: true });
-    };
+        const z = zoomAbout(v, stagePoint(centre.x, centre.y), factor);
+        return { ...z, panX: z.panX + dx, panY: z.panY + dy };
+      }),
   }, [loaded]);
 
   useEffect(() => {
@@ -105,7 +71,9 @@ export function ImagePointPicker({ imageUrl, widthPx, heightPx, points, onChange
 
   function handleClick(e: Konva.KonvaEventObject<MouseEvent | TouchEvent>) {
     const pos = e.target.getStage()?.getPointerPosition();
-    if (!pos || (e.type === "tap" && pinched.current)) return;
+    if (!pos) return;
+    // The finger lifted last after a pinch is no tap.
+    if (e.type === "tap" && pinched.current) return;
     const p = stageToImage(stagePoint(pos.x, pos.y), view);
     if (p.x < 0 || p.y < 0 || p.x > widthPx || p.y > heightPx) return;
     const rounded = imagePoint(Math.round(p.x * 10) / 10, Math.round(p.y * 10) / 10);
@@ -138,6 +106,9 @@ export function ImagePointPicker({ imageUrl, widthPx, heightPx, points, onChange
             draggable
             onDragEnd={(e) => {
               if (e.target === e.target.getStage()) setView((v) => ({ ...v, panX: e.target.x(), panY: e.target.y() }));
+            }}
+            onPointerDown={() => {
+              pinched.current = pinchNow.current; // a new gesture
             }}
             onClick={handleClick}
             onTap={handleClick}
