@@ -156,6 +156,10 @@ it("on a landscape tablet, sets the scale and draws, selects, moves, resizes, pi
   expect(bar.y).toBeGreaterThanOrEqual(0);
   const stageBox = (await page.locator(STAGE).boundingBox())!;
   expect(stageBox.y + stageBox.height).toBeLessThanOrEqual(768);
+  // The selection's panel is beside the plan, not below it.
+  const panel = (await page.getByRole("complementary").boundingBox())!;
+  expect(panel.x).toBeGreaterThanOrEqual(stageBox.x + stageBox.width);
+  expect(panel.y).toBeLessThan(768);
 
   // 1. A case: one finger dragged from (2, 2) m to (5.5, 3.2) m (10 cm grid).
   await tapButton(page, "Rectangle");

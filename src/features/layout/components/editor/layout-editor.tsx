@@ -197,9 +197,11 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
           </ul>
         </Alert>
       ) : null}
-      {/* One column below xl whose width is the page's, not the canvas's: a grid item's min-width
-          is its content, and the stage would keep itself as wide as it started. */}
-      <div className="grid grid-cols-1 items-start gap-3 xl:grid-cols-[minmax(0,1fr)_22rem]">
+      {/* From a landscape tablet (lg, 1024 px) up, the selection's panel sits beside the plan, in
+          reach of the hand that just tapped a fixture. Below that one column whose width is the
+          page's, not the canvas's: a grid item's min-width is its content, and the stage would
+          keep itself as wide as it started. */}
+      <div className="grid grid-cols-1 items-start gap-3 lg:grid-cols-[minmax(0,1fr)_20rem] xl:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="relative min-w-0">
           <div
             ref={box}
