@@ -16,6 +16,7 @@ import { fitNonnegative } from "./locator/nonnegative-fit";
 import { DEFAULT_LOCATOR_OPTIONS, type LocatorOptions } from "./locator/locator-options";
 import { nearestFixture, nearestRiskPoint } from "./locator/nearest-features";
 import { equipmentMask, fanStepScale, riskPointPrior } from "./locator/plan-masks";
+import { chooseLocalDrift } from "./locator/local-drift";
 import { accumulateReadingFields, kernelColumn } from "./locator/reading-fields";
 import { createSourceKernel, kernelArea } from "./locator/source-kernel";
 import { HOURS_PER_YEAR, MOLAR_VOLUME_25C_L, ppmToMgPerM3, wellMixedEmission } from "./locator/units";
@@ -149,6 +150,16 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     }
     return idx;
   };
+  if (o.driftStrengths.length > 0 && fields.dist) {
+    // each candidate source takes the weak drift that fits its readings best (local-drift.ts)
+    const residual0 = new Float64Array(y);
+    nuisance.forEach((col, z) => {
+      if (zoneFit.q[z] > 0) for (let i = 0; i < n; i++) residual0[i] -= zoneFit.q[z] * col[i];
+    });
+    chooseLocalDrift(fields, grid.width, grid.cellSize, w, residual0, allowed, {
+      screeningLengthM: o.screeningLengthM, nearCutoffM: o.nearCutoffM, truncationM: o.truncationM, strengths: o.driftStrengths, penalty: o.driftPenalty,
+    });
+  }
   const prior = o.riskPointLogOdds > 0 ? riskPointPrior(grid, plan, o.riskPointLogOdds) : null;
   const greedy = findSources({
     fields, y, w, censored, nuisance, allowed,

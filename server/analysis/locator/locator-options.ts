@@ -22,6 +22,18 @@ export interface LocatorOptions {
    * 0.01–0.05 m²/s in aisles and 0.1–0.3 m²/s in fan-stirred fixtures (issue 5) gives 0.2–0.7. 1 = off.
    */
   fanMixingScale: number;
+  /**
+   * Drift strengths a = u/(2K) tried per candidate source, 1/m (empty = no drift; see local-drift.ts),
+   * in eight directions; a drift is kept only when it beats none by `driftPenalty` times the
+   * residual variance. A drift of 0.02–0.08 m/s against K = 0.01–0.05 m²/s (issue 5 ranges) gives
+   * a = 0.2–4 per metre. 0.4 and 0.8 with a penalty of 3, against no drift: top-3 within 1.5 m went
+   * 76% -> 83% and both leaks of a two-leak store in the first four 33% -> 61% on three held-out sets
+   * together (median top-1 0.98 -> 0.92 m; still-air stores 1.54 -> 1.28 m); on the committed stores
+   * top-3 went 90% -> 85% (two stores) and the median 0.58 -> 0.63 m. A penalty of 6 or 12, or three
+   * strengths (0.3, 0.6, 1.2), did no better on the held-out sets.
+   */
+  driftStrengths: number[];
+  driftPenalty: number;
   /** Gaussian width of the field map, m (about half a tap spacing of 1.2–1.5 m plus jitter). */
   mapSigmaM: number;
   /** Noise model w = 1/(a + β·y)²: floor a ≈ √(0.5² + 1/12) ppm (about 0.5 ppm noise plus whole-ppm rounding) and lognormal share β ≈ 0.3 (issue 5 noise figures). */
@@ -157,6 +169,8 @@ export const DEFAULT_LOCATOR_OPTIONS: LocatorOptions = {
   nearCutoffM: 0.3,
   truncationM: 6,
   fanMixingScale: 0.35,
+  driftStrengths: [0.4, 0.8],
+  driftPenalty: 3,
   mapSigmaM: 0.75,
   noiseFloorPpm: 0.6,
   noiseFraction: 0.15,
