@@ -41,7 +41,8 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   if (readings.length === 0) throw new LocatorInputError(["readings: must not be empty"]);
 
   const grid = createPlanGrid(plan.width, plan.height, o.cellSize, plan.obstacles.map((b) => b.polygon));
-  const kernel = createSourceKernel(o.screeningLengthM, o.nearCutoffM, o.truncationM);
+  const far = o.farShare > 0 ? { lengthM: o.farScreeningLengthM, share: o.farShare } : null;
+  const kernel = createSourceKernel(o.screeningLengthM, o.nearCutoffM, o.truncationM, far);
   // a benign-source zone is a spread-out source whose gas drifts far, so it gets a longer kernel
   const zoneKernel = createSourceKernel(o.zoneScreeningLengthM, o.nearCutoffM, 2 * o.zoneScreeningLengthM + o.zoneMarginM);
   const n = readings.length;
@@ -157,7 +158,7 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
       if (zoneFit.q[z] > 0) for (let i = 0; i < n; i++) residual0[i] -= zoneFit.q[z] * col[i];
     });
     chooseLocalDrift(fields, grid.width, grid.cellSize, w, residual0, allowed, {
-      screeningLengthM: o.screeningLengthM, nearCutoffM: o.nearCutoffM, truncationM: o.truncationM, strengths: o.driftStrengths, penalty: o.driftPenalty,
+      screeningLengthM: o.screeningLengthM, far, nearCutoffM: o.nearCutoffM, truncationM: o.truncationM, strengths: o.driftStrengths, penalty: o.driftPenalty,
     });
   }
   const prior = o.riskPointLogOdds > 0 ? riskPointPrior(grid, plan, o.riskPointLogOdds) : null;

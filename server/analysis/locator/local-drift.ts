@@ -32,6 +32,8 @@ export const DRIFT_DIRECTIONS: ReadonlyArray<[number, number]> = Array.from({ le
 
 export interface DriftSettings {
   screeningLengthM: number;
+  /** The kernel's far-field part (source-kernel.ts), null = none. */
+  far?: { lengthM: number; share: number } | null;
   nearCutoffM: number;
   truncationM: number;
   /** Drift strengths |a| tried, 1/m. */
@@ -45,14 +47,27 @@ export interface DriftSettings {
  * on the no-drift kernel's scale (its value at the near cut-off), so strengths of sources with and
  * without drift compare as emission rates at the same K.
  */
-export function driftedKernel(screeningLengthM: number, nearCutoffM: number, truncationM: number, a: readonly [number, number]) {
-  const { table, scale } = radialPart(screeningLengthM, nearCutoffM, truncationM, Math.hypot(a[0], a[1]));
+export function driftedKernel(
+  screeningLengthM: number,
+  nearCutoffM: number,
+  truncationM: number,
+  a: readonly [number, number],
+  far: { lengthM: number; share: number } | null = null,
+) {
+  const { table, scale } = radialPart(screeningLengthM, nearCutoffM, truncationM, Math.hypot(a[0], a[1]), far);
   return (d: number, dx: number, dy: number) => scale * table.at(d) * Math.exp(a[0] * dx + a[1] * dy);
 }
 
-function radialPart(screeningLengthM: number, nearCutoffM: number, truncationM: number, strength: number): { table: SourceKernel; scale: number } {
-  const kappa = Math.sqrt(strength * strength + 1 / (screeningLengthM * screeningLengthM));
-  const table = createSourceKernel(1 / kappa, nearCutoffM, truncationM);
+function radialPart(
+  screeningLengthM: number,
+  nearCutoffM: number,
+  truncationM: number,
+  strength: number,
+  far: { lengthM: number; share: number } | null = null,
+): { table: SourceKernel; scale: number } {
+  const rate = (L: number) => Math.sqrt(strength * strength + 1 / (L * L));
+  const kappa = rate(screeningLengthM);
+  const table = createSourceKernel(1 / kappa, nearCutoffM, truncationM, far ? { lengthM: 1 / rate(far.lengthM), share: far.share } : null);
   const span = (k: number) => besselK0(nearCutoffM * k) - besselK0(truncationM * k);
   return { table, scale: span(kappa) / span(1 / screeningLengthM) };
 }
@@ -101,8 +116,9 @@ export function chooseLocalDrift(
       dys[e] = groupY[g] - ((c - ci) / gridWidth + 0.5) * cellSize;
     }
   }
-  const radial = settings.strengths.map((v) => radialPart(settings.screeningLengthM, settings.nearCutoffM, settings.truncationM, v));
-  const base = radialPart(settings.screeningLengthM, settings.nearCutoffM, settings.truncationM, 0).table;
+  const far = settings.far ?? null;
+  const radial = settings.strengths.map((v) => radialPart(settings.screeningLengthM, settings.nearCutoffM, settings.truncationM, v, far));
+  const base = radialPart(settings.screeningLengthM, settings.nearCutoffM, settings.truncationM, 0, far).table;
 
   // no drift: the scan every drift must beat
   const sumWGR = new Float64Array(cells);
