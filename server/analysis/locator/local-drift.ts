@@ -75,7 +75,8 @@ function radialPart(
 /**
  * Chooses each cell's drift against the residual r (readings minus nuisance sources) and rewrites the
  * fields' kernel values and per-cell sums in place, so every later step (scan, joint fit, columns)
- * uses the chosen kernel. Needs fields with one response node per reading (fields.dist).
+ * uses the chosen kernel. Needs fields with one response node per reading (fields.dist), built with
+ * the same screening lengths (cells left without drift keep the kernel they were built with).
  * Returns per cell the chosen strength index + 1 and direction (0 = no drift).
  */
 export function chooseLocalDrift(
@@ -118,7 +119,6 @@ export function chooseLocalDrift(
   }
   const far = settings.far ?? null;
   const radial = settings.strengths.map((v) => radialPart(settings.screeningLengthM, settings.nearCutoffM, settings.truncationM, v, far));
-  const base = radialPart(settings.screeningLengthM, settings.nearCutoffM, settings.truncationM, 0, far).table;
 
   // no drift: the scan every drift must beat
   const sumWGR = new Float64Array(cells);
@@ -148,12 +148,13 @@ export function chooseLocalDrift(
     for (let g = 0; g < groups; g++) {
       const aw = gw[g], ar = gwr[g];
       for (let e = start[g], end = start[g + 1]; e < end; e++) {
+        const c = cell[e];
+        if (!allowed[c]) continue; // only cells that may hold a suspect spot need a drift
         const t = scale * table.at(dist[e]);
         const ex = Math.exp(a * dxs[e]), ey = Math.exp(a * dys[e]);
         const hx = Math.exp(a * h * dxs[e]), hy = Math.exp(a * h * dys[e]);
         f[0] = t * ex; f[1] = t * hx * hy; f[2] = t * ey; f[3] = (t * hy) / hx;
         f[4] = t / ex; f[5] = t / (hx * hy); f[6] = t / ey; f[7] = (t * hx) / hy;
-        const c = cell[e];
         for (let k = 0; k < D; k++) {
           const v = f[k];
           sG[k][c] += aw * v;
@@ -186,7 +187,7 @@ export function chooseLocalDrift(
         const a = settings.strengths[si - 1];
         const [ux, uy] = DRIFT_DIRECTIONS[direction[c]];
         kernel[e] = radial[si - 1].scale * radial[si - 1].table.at(dist[e]) * Math.exp(a * (ux * dxs[e] + uy * dys[e]));
-      } else kernel[e] = base.at(dist[e]);
+      }
       fields.sumWG[c] += aw * kernel[e];
       fields.sumWGG[c] += aw * kernel[e] * kernel[e];
     }
