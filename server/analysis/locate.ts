@@ -15,7 +15,7 @@ import { findSources, type FoundSource } from "./locator/greedy-sources";
 import { fitNonnegative } from "./locator/nonnegative-fit";
 import { DEFAULT_LOCATOR_OPTIONS, type LocatorOptions } from "./locator/locator-options";
 import { nearestFixture, nearestRiskPoint } from "./locator/nearest-features";
-import { equipmentMask, fanStepScale, riskPointPrior } from "./locator/plan-masks";
+import { casesRunFans, equipmentMask, fanStepScale, riskPointPrior } from "./locator/plan-masks";
 import { chooseLocalDrift } from "./locator/local-drift";
 import { accumulateReadingFields, kernelColumn } from "./locator/reading-fields";
 import { createSourceKernel, kernelArea } from "./locator/source-kernel";
@@ -41,7 +41,8 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   if (readings.length === 0) throw new LocatorInputError(["readings: must not be empty"]);
 
   const grid = createPlanGrid(plan.width, plan.height, o.cellSize, plan.obstacles.map((b) => b.polygon));
-  const far = o.farShare > 0 ? { lengthM: o.farScreeningLengthM, share: o.farShare } : null;
+  // the far-field part of the kernel is the fans' stirring; in still air the drift carries the gas
+  const far = o.farShare > 0 && (!o.farWithFansOnly || casesRunFans(plan.fixtures)) ? { lengthM: o.farScreeningLengthM, share: o.farShare } : null;
   const kernel = createSourceKernel(o.screeningLengthM, o.nearCutoffM, o.truncationM, far);
   // a benign-source zone is a spread-out source whose gas drifts far, so it gets a longer kernel
   const zoneKernel = createSourceKernel(o.zoneScreeningLengthM, o.nearCutoffM, 2 * o.zoneScreeningLengthM + o.zoneMarginM);
