@@ -15,7 +15,8 @@ import { findSources, type FoundSource } from "./locator/greedy-sources";
 import { fitNonnegative } from "./locator/nonnegative-fit";
 import { DEFAULT_LOCATOR_OPTIONS, type LocatorOptions } from "./locator/locator-options";
 import { nearestFixture, nearestRiskPoint } from "./locator/nearest-features";
-import { equipmentMask, fanStepScale, riskPointPrior } from "./locator/plan-masks";
+import { casesRunFans, equipmentMask, fanStepScale, riskPointPrior } from "./locator/plan-masks";
+import { chooseLocalDrift } from "./locator/local-drift";
 import { accumulateReadingFields, kernelColumn } from "./locator/reading-fields";
 import { createSourceKernel, kernelArea } from "./locator/source-kernel";
 import { HOURS_PER_YEAR, MOLAR_VOLUME_25C_L, ppmToMgPerM3, wellMixedEmission } from "./locator/units";
@@ -40,7 +41,9 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   if (readings.length === 0) throw new LocatorInputError(["readings: must not be empty"]);
 
   const grid = createPlanGrid(plan.width, plan.height, o.cellSize, plan.obstacles.map((b) => b.polygon));
-  const kernel = createSourceKernel(o.screeningLengthM, o.nearCutoffM, o.truncationM);
+  // the far-field part of the kernel is the fans' stirring; in still air the drift carries the gas
+  const far = o.farShare > 0 && (!o.farWithFansOnly || casesRunFans(plan.fixtures)) ? { lengthM: o.farScreeningLengthM, share: o.farShare } : null;
+  const kernel = createSourceKernel(o.screeningLengthM, o.nearCutoffM, o.truncationM, far);
   // a benign-source zone is a spread-out source whose gas drifts far, so it gets a longer kernel
   const zoneKernel = createSourceKernel(o.zoneScreeningLengthM, o.nearCutoffM, 2 * o.zoneScreeningLengthM + o.zoneMarginM);
   const n = readings.length;
@@ -149,6 +152,16 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     }
     return idx;
   };
+  if (o.driftStrengths.length > 0 && fields.dist) {
+    // each candidate source takes the weak drift that fits its readings best (local-drift.ts)
+    const residual0 = new Float64Array(y);
+    nuisance.forEach((col, z) => {
+      if (zoneFit.q[z] > 0) for (let i = 0; i < n; i++) residual0[i] -= zoneFit.q[z] * col[i];
+    });
+    chooseLocalDrift(fields, grid.width, grid.cellSize, w, residual0, allowed, {
+      screeningLengthM: o.screeningLengthM, far, nearCutoffM: o.nearCutoffM, truncationM: o.truncationM, strengths: o.driftStrengths, penalty: o.driftPenalty,
+    });
+  }
   const prior = o.riskPointLogOdds > 0 ? riskPointPrior(grid, plan, o.riskPointLogOdds) : null;
   const greedy = findSources({
     fields, y, w, censored, nuisance, allowed,

@@ -27,4 +27,18 @@ describe("K0 kernel", () => {
     expect(integral / (2 * Math.PI * L * L)).toBeCloseTo(1, 3);
     expect(kernelArea(k)).toBeCloseTo((2 * Math.PI * 25) / besselK0(0.1), 9);
   });
+
+  it("mixes a far-field part in by its share, both parts 1 at the cut-off and 0 at the truncation radius", () => {
+    const k = createSourceKernel(1.5, 0.3, 6, { lengthM: 4, share: 0.3 });
+    const part = (L: number, d: number) => (besselK0(Math.max(d, 0.3) / L) - besselK0(6 / L)) / (besselK0(0.3 / L) - besselK0(6 / L));
+    for (const d of [0.2, 1, 2.5, 4, 5.5]) expect(k.at(d)).toBeCloseTo(0.7 * part(1.5, d) + 0.3 * part(4, d), 4);
+    expect(k.at(0.3)).toBeCloseTo(1, 9);
+    expect(k.at(6)).toBe(0);
+    // at 4 m the far part keeps about twice the gas the short kernel alone leaves
+    expect(k.at(4)).toBeGreaterThan(1.5 * createSourceKernel(1.5, 0.3, 6).at(4));
+    // the plane integral mixes the same way (2πL²/K0(d0/L) per part, as above)
+    const area = (L: number) => (2 * Math.PI * L * L) / besselK0(0.3 / L);
+    expect(kernelArea(k)).toBeCloseTo(0.7 * area(1.5) + 0.3 * area(4), 9);
+    expect(() => createSourceKernel(1.5, 0.3, 6, { lengthM: 4, share: 1 })).toThrow(/share in \[0, 1\)/);
+  });
 });

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { parseLocatorInput } from "../../contracts/locator-input";
 import { cellIndexOf, createPlanGrid } from "../grid/plan-grid";
-import { equipmentMask, fanStepScale, riskPointPrior } from "./plan-masks";
+import { casesRunFans, equipmentMask, fanStepScale, riskPointPrior } from "./plan-masks";
 
 const plan = (fixtures: unknown[], riskPoints: unknown[]) =>
   parseLocatorInput({
@@ -42,5 +42,21 @@ describe("plan-derived masks", () => {
     const scale = fanStepScale(grid, p, 0.35)!;
     expect(scale[at(1.5, 1.5)]).toBeCloseTo(0.35, 6);
     expect(scale[at(7, 0.5)]).toBe(1);
+  });
+
+  it("says the cases run fans when at least half of them do, and ignores walk-ins", () => {
+    const box = (x: number) => [[x, 1], [x + 1, 1], [x + 1, 2], [x, 2]];
+    const still = plan([
+      { id: "c1", kind: "open-case", polygon: box(1), fans: false },
+      { id: "c2", kind: "island-case", polygon: box(3), fans: false },
+      { id: "w1", kind: "walk-in", polygon: box(5), fans: true },
+    ], []);
+    expect(casesRunFans(still.fixtures)).toBe(false);
+    const stirred = plan([
+      { id: "c1", kind: "open-case", polygon: box(1), fans: true },
+      { id: "c2", kind: "door-case", polygon: box(3), fans: false },
+    ], []);
+    expect(casesRunFans(stirred.fixtures)).toBe(true);
+    expect(casesRunFans(plan([], []).fixtures)).toBe(true);
   });
 });

@@ -49,3 +49,13 @@ export function riskPointPrior(grid: PlanGrid, plan: LocatorInput["plan"], logOd
   }
   return prior;
 }
+
+/**
+ * Whether most of the plan's cases run their fans (true when it draws no cases). Fans stir gas out to
+ * several metres in eddies of every size, the far-field part of the source kernel; in still air the
+ * drift alone carries it (local-drift.ts).
+ */
+export function casesRunFans(fixtures: LocatorInput["plan"]["fixtures"]): boolean {
+  const cases = fixtures.filter((f) => f.kind === "open-case" || f.kind === "island-case" || f.kind === "door-case");
+  return cases.length === 0 || cases.filter((f) => f.fans).length * 2 >= cases.length;
+}

@@ -17,6 +17,14 @@ export interface ReadingFields {
   start: Int32Array;
   cell: Int32Array;
   kernel: Float32Array;
+  /**
+   * Geodesic distance of each entry, and the position each group's search started from: with one
+   * response node per reading they let a drifted kernel be evaluated again without new searches
+   * (see local-drift.ts). Null with several nodes per reading.
+   */
+  dist: Float32Array | null;
+  groupX: Float64Array;
+  groupY: Float64Array;
   /** Per cell Σ w·g and Σ w·g² over readings (weights w as given). */
   sumWG: Float64Array;
   sumWGG: Float64Array;
@@ -83,11 +91,13 @@ export function accumulateReadingFields(
   let cap = Math.max(1024, groups * perSearch);
   let cellArr = new Int32Array(cap);
   let kernArr = new Float32Array(cap);
+  let distArr = new Float32Array(m === 1 ? cap : 0);
   let used = 0;
 
   // per group: the response-weighted kernel and map weight of its nodes, gathered densely
   const combG = new Float64Array(cells);
   const combOm = new Float64Array(cells);
+  const combD = new Float64Array(m === 1 ? cells : 0);
   const stamp = new Int32Array(cells).fill(-1);
   let touched: Int32Array = new Int32Array(4096);
 
@@ -119,6 +129,7 @@ export function accumulateReadingFields(
           touched[nTouched++] = c;
         }
         combG[c] += a * kernel.at(d);
+        if (m === 1) combD[c] = d;
         if (d <= mapCut) combOm[c] += a * Math.exp(-d * d * inv2s2);
       }
     }
@@ -130,6 +141,11 @@ export function accumulateReadingFields(
       const k2 = new Float32Array(cap);
       k2.set(kernArr.subarray(0, used));
       kernArr = k2;
+      if (m === 1) {
+        const d2 = new Float32Array(cap);
+        d2.set(distArr.subarray(0, used));
+        distArr = d2;
+      }
     }
     start[g] = used;
     const w = groupW[g];
@@ -143,6 +159,7 @@ export function accumulateReadingFields(
         sumWGG[c] += w * gv * gv;
         cellArr[used] = c;
         kernArr[used] = gv;
+        if (m === 1) distArr[used] = combD[c];
         used++;
       }
       const om = combOm[c];
@@ -159,6 +176,9 @@ export function accumulateReadingFields(
     start,
     cell: cellArr.subarray(0, used),
     kernel: kernArr.subarray(0, used),
+    dist: m === 1 ? distArr.subarray(0, used) : null,
+    groupX: Float64Array.from(groupFirst, (i) => nodes.xs[0][i]),
+    groupY: Float64Array.from(groupFirst, (i) => nodes.ys[0][i]),
     sumWG,
     sumWGG,
     omega,
