@@ -50,7 +50,7 @@ it("a technician confirms a leak and records charge added; the leak rate and Tod
 
   // Today → the system's records.
   await openToday(tech);
-  await tech.getByRole("link", { name: "Rack A – dairy line" }).click();
+  await tech.getByRole("link", { name: "Rack A – dairy line", exact: true }).click();
   await tech.getByRole("heading", { name: "Leak rate at every addition" }).waitFor();
 
   // A finding by hand, then confirmed at a component.
@@ -96,7 +96,7 @@ it("a technician confirms a leak and records charge added; the leak rate and Tod
   await owner.getByText(new RegExp(`${repairDue} \\(due soon`)).waitFor();
 
   // The technician records the repair; the deadline and the over-threshold line go.
-  await tech.getByRole("link", { name: /flare \(confirmed\)|flare · confirmed/ }).first().click();
+  await tech.getByRole("link", { name: /Flare fitting · confirmed/ }).first().click();
   await tech.getByRole("button", { name: "Record the repair", exact: true }).click();
   await tech.getByLabel("Note").fill("New flare nut, leak-tested with nitrogen");
   await tech.getByRole("button", { name: "Save: record the repair" }).click();
