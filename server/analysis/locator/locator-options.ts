@@ -46,6 +46,10 @@ export interface LocatorOptions {
    * together (median top-1 0.98 -> 0.92 m; still-air stores 1.54 -> 1.28 m); on the committed stores
    * top-3 went 90% -> 85% (two stores) and the median 0.58 -> 0.63 m. A penalty of 6 or 12, or three
    * strengths (0.3, 0.6, 1.2), did no better on the held-out sets.
+   * OFF by default: on the demo store's plume (server/db/seed/demo-plume.ts, a physics unlike both
+   * the simulator's and the kernel's: air-curtain spread along a lineup, displaced by a weak drift)
+   * the drift moved the top suspect onto the neighbouring case in two of its sweeps. With it off (far
+   * field on): committed 0.59 m, top-3 85%, coverage 85%; three held-out sets 1.16 m, 81%, 81%.
    */
   driftStrengths: number[];
   driftPenalty: number;
@@ -189,7 +193,7 @@ export const DEFAULT_LOCATOR_OPTIONS: LocatorOptions = {
   nearCutoffM: 0.3,
   truncationM: 6,
   fanMixingScale: 0.35,
-  driftStrengths: [0.4, 0.8],
+  driftStrengths: [],
   driftPenalty: 3,
   mapSigmaM: 0.75,
   noiseFloorPpm: 0.6,
