@@ -15,7 +15,7 @@ import { findSources, type FoundSource } from "./locator/greedy-sources";
 import { fitNonnegative } from "./locator/nonnegative-fit";
 import { DEFAULT_LOCATOR_OPTIONS, type LocatorOptions } from "./locator/locator-options";
 import { nearestFixture, nearestRiskPoint } from "./locator/nearest-features";
-import { casesRunFans, equipmentMask, fanStepScale, riskPointPrior } from "./locator/plan-masks";
+import { casesRunFans, equipmentMask, fanStepScale, fitsDrift, riskPointPrior } from "./locator/plan-masks";
 import { chooseLocalDrift } from "./locator/local-drift";
 import { accumulateReadingFields, kernelColumn } from "./locator/reading-fields";
 import { createSourceKernel, kernelArea } from "./locator/source-kernel";
@@ -152,8 +152,8 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     }
     return idx;
   };
-  if (o.driftStrengths.length > 0 && fields.dist) {
-    // each candidate source takes the weak drift that fits its readings best (local-drift.ts)
+  if (fitsDrift(o.driftStrengths, plan.fixtures) && fields.dist) {
+    // in still air each candidate source takes the weak drift that fits its readings best (local-drift.ts)
     const residual0 = new Float64Array(y);
     nuisance.forEach((col, z) => {
       if (zoneFit.q[z] > 0) for (let i = 0; i < n; i++) residual0[i] -= zoneFit.q[z] * col[i];
