@@ -7,16 +7,13 @@
  * and deletes — then checks what autosave stored, in metres, through the API. Then the same
  * editor in portrait keeps to the screen's width with its tools in view.
  */
-import { mkdtemp, writeFile } from "node:fs/promises";
-import { tmpdir } from "node:os";
-import { join } from "node:path";
 import { afterAll, beforeAll, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
-import { Jimp, JimpMime } from "jimp";
 import { launchBrowser, newContext } from "../helpers/browser";
 import { startE2eServer, type E2eServer } from "../helpers/e2e-server";
 import { PASSWORD, seedCompany } from "../helpers/fixtures";
 import { signInThroughForm } from "../helpers/e2e-session";
+import { drawingPng, numberAttr, pickerScreen } from "../helpers/layout-e2e";
 import { pinch, touchDrag, touchSession } from "../helpers/touch";
 
 let server: E2eServer;
@@ -36,26 +33,6 @@ afterAll(async () => {
 
 // A tablet as the browser reports one: touch, mobile viewport rules, no mouse.
 const TABLET = { hasTouch: true, isMobile: true, deviceScaleFactor: 2 };
-
-/** An 800 × 500 px drawing with one 600 px wall from (100, 250) to (700, 250). */
-async function drawingPng(): Promise<string> {
-  const img = new Jimp({ width: 800, height: 500, color: 0xffffffff });
-  for (let x = 100; x <= 700; x++) for (let y = 248; y <= 252; y++) img.setPixelColor(0x222222ff, x, y);
-  const dir = await mkdtemp(join(tmpdir(), "plumeline-touch-"));
-  const file = join(dir, "brackwater-floor.png");
-  await writeFile(file, await img.getBuffer(JimpMime.png));
-  return file;
-}
-
-async function numberAttr(page: Page, selector: string, name: string): Promise<number> {
-  return Number(await page.locator(selector).first().getAttribute(name));
-}
-
-async function pickerScreen(page: Page, x: number, y: number) {
-  const box = (await page.getByRole("group", { name: "Calibration line on the drawing" }).locator("canvas").first().boundingBox())!;
-  const [zoom, panX, panY] = await Promise.all(["data-zoom", "data-pan-x", "data-pan-y"].map((a) => numberAttr(page, "[data-testid=picker-view]", a)));
-  return { x: box.x + panX + x * zoom, y: box.y + panY + y * zoom };
-}
 
 const STAGE = "[data-testid=layout-stage]";
 
@@ -124,7 +101,7 @@ it("on a landscape tablet, sets the scale and draws, selects, moves, resizes, pi
 
   await signInThroughForm(page, server.url, co.people["lead-tech"].email, PASSWORD);
   await page.goto(`${server.url}/stores/${co.store.id}`);
-  await page.getByLabel("Drawing file").setInputFiles(await drawingPng());
+  await page.getByLabel("Drawing file").setInputFiles(await drawingPng("brackwater-floor.png"));
   await page.getByRole("button", { name: "Upload drawing" }).tap();
   await page.getByRole("heading", { name: "Set the scale" }).waitFor();
   const picker = page.getByRole("group", { name: "Calibration line on the drawing" });

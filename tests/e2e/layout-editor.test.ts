@@ -3,16 +3,13 @@
  * with jimp), sets its scale, draws three fixtures of different kinds (one by duplicating and
  * re-kinding a case), drags one, reloads, and finds them where they were — checked in metres through the API.
  */
-import { mkdtemp, writeFile } from "node:fs/promises";
-import { tmpdir } from "node:os";
-import { join } from "node:path";
 import { afterAll, beforeAll, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
-import { Jimp, JimpMime } from "jimp";
 import { launchBrowser, newContext } from "../helpers/browser";
 import { startE2eServer, type E2eServer } from "../helpers/e2e-server";
 import { PASSWORD, seedCompany } from "../helpers/fixtures";
 import { signInThroughForm } from "../helpers/e2e-session";
+import { drawingPng, numberAttr, pickerScreen } from "../helpers/layout-e2e";
 
 let server: E2eServer;
 let browser: Browser;
@@ -27,31 +24,6 @@ afterAll(async () => {
   await browser?.close();
   await server?.close();
 });
-
-/** An 800 × 500 px drawing: a border and one 600 px wall from (100, 250) to (700, 250). */
-async function drawingPng(): Promise<string> {
-  const img = new Jimp({ width: 800, height: 500, color: 0xffffffff });
-  for (let x = 0; x < 800; x++) for (const y of [0, 499]) img.setPixelColor(0x222222ff, x, y);
-  for (let y = 0; y < 500; y++) for (const x of [0, 799]) img.setPixelColor(0x222222ff, x, y);
-  for (let x = 100; x <= 700; x++) for (let y = 248; y <= 252; y++) img.setPixelColor(0x222222ff, x, y);
-  const dir = await mkdtemp(join(tmpdir(), "plumeline-e2e-"));
-  const file = join(dir, "quillby-floor.png");
-  await writeFile(file, await img.getBuffer(JimpMime.png));
-  return file;
-}
-
-async function numberAttr(page: Page, selector: string, name: string): Promise<number> {
-  return Number(await page.locator(selector).first().getAttribute(name));
-}
-
-/** Screen position of a display-image pixel in the calibration picker. */
-async function pickerScreen(page: Page, x: number, y: number) {
-  const box = (await page.getByRole("group", { name: "Calibration line on the drawing" }).locator("canvas").first().boundingBox())!;
-  const zoom = await numberAttr(page, "[data-testid=picker-view]", "data-zoom");
-  const panX = await numberAttr(page, "[data-testid=picker-view]", "data-pan-x");
-  const panY = await numberAttr(page, "[data-testid=picker-view]", "data-pan-y");
-  return { x: box.x + panX + x * zoom, y: box.y + panY + y * zoom };
-}
 
 /** Screen position of a plan point (metres) in the layout editor. */
 async function editorScreen(page: Page, xm: number, ym: number) {
@@ -80,7 +52,7 @@ it("creates a store, uploads and calibrates a plan, draws three fixtures and fin
   const storeId = new URL(page.url()).pathname.split("/")[2];
 
   // Upload: the calibration panel opens by itself afterwards.
-  await page.getByLabel("Drawing file").setInputFiles(await drawingPng());
+  await page.getByLabel("Drawing file").setInputFiles(await drawingPng("quillby-floor.png", { border: true }));
   await page.getByRole("button", { name: "Upload drawing" }).click();
   await page.getByRole("heading", { name: "Set the scale" }).waitFor();
   await page.getByRole("group", { name: "Calibration line on the drawing" }).locator("canvas").first().waitFor();

@@ -1,0 +1,33 @@
+import { mkdtemp, writeFile } from "node:fs/promises";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import type { Page } from "playwright-core";
+import { Jimp, JimpMime } from "jimp";
+
+/**
+ * An 800 × 500 px drawing (a PNG made here with jimp) with one 600 px wall from (100, 250) to
+ * (700, 250), and a border round it when asked. Returns the file's path.
+ */
+export async function drawingPng(fileName: string, { border = false } = {}): Promise<string> {
+  const img = new Jimp({ width: 800, height: 500, color: 0xffffffff });
+  if (border) {
+    for (let x = 0; x < 800; x++) for (const y of [0, 499]) img.setPixelColor(0x222222ff, x, y);
+    for (let y = 0; y < 500; y++) for (const x of [0, 799]) img.setPixelColor(0x222222ff, x, y);
+  }
+  for (let x = 100; x <= 700; x++) for (let y = 248; y <= 252; y++) img.setPixelColor(0x222222ff, x, y);
+  const dir = await mkdtemp(join(tmpdir(), "plumeline-e2e-"));
+  const file = join(dir, fileName);
+  await writeFile(file, await img.getBuffer(JimpMime.png));
+  return file;
+}
+
+export async function numberAttr(page: Page, selector: string, name: string): Promise<number> {
+  return Number(await page.locator(selector).first().getAttribute(name));
+}
+
+/** Screen position of a display-image pixel in the calibration picker, from the view it reports. */
+export async function pickerScreen(page: Page, x: number, y: number) {
+  const box = (await page.getByRole("group", { name: "Calibration line on the drawing" }).locator("canvas").first().boundingBox())!;
+  const [zoom, panX, panY] = await Promise.all(["data-zoom", "data-pan-x", "data-pan-y"].map((a) => numberAttr(page, "[data-testid=picker-view]", a)));
+  return { x: box.x + panX + x * zoom, y: box.y + panY + y * zoom };
+}
