@@ -81,16 +81,20 @@ function bestWithPrior(scan: ScanResult, prior: Float64Array | null, n: number):
   return best;
 }
 
-function blockAround(mask: Uint8Array, c: number, width: number, cellSize: number, radiusM: number): void {
+/** Calls visit(k) for every cell k within radiusM of cell c on a row-major grid `width` wide. */
+function forEachCellWithin(c: number, width: number, height: number, cellSize: number, radiusM: number, visit: (k: number) => void): void {
   const r = Math.ceil(radiusM / cellSize);
   const ci = c % width;
   const cj = (c - ci) / width;
-  const height = mask.length / width;
   for (let j = Math.max(0, cj - r); j <= Math.min(height - 1, cj + r); j++) {
     for (let i = Math.max(0, ci - r); i <= Math.min(width - 1, ci + r); i++) {
-      if ((i - ci) ** 2 + (j - cj) ** 2 <= r * r) mask[j * width + i] = 0;
+      if ((i - ci) ** 2 + (j - cj) ** 2 <= r * r) visit(j * width + i);
     }
   }
+}
+
+function blockAround(mask: Uint8Array, c: number, width: number, cellSize: number, radiusM: number): void {
+  forEachCellWithin(c, width, mask.length / width, cellSize, radiusM, (k) => (mask[k] = 0));
 }
 
 function cellDist2(a: number, b: number, width: number): number {
@@ -100,16 +104,7 @@ function cellDist2(a: number, b: number, width: number): number {
 
 /** Sets mask to allowed[] within radiusM of cell c (0 elsewhere is left as is). */
 function keepAround(mask: Uint8Array, allowed: Uint8Array, c: number, width: number, cellSize: number, radiusM: number): void {
-  const r = Math.ceil(radiusM / cellSize);
-  const ci = c % width;
-  const cj = (c - ci) / width;
-  const height = mask.length / width;
-  for (let j = Math.max(0, cj - r); j <= Math.min(height - 1, cj + r); j++) {
-    for (let i = Math.max(0, ci - r); i <= Math.min(width - 1, ci + r); i++) {
-      const k = j * width + i;
-      if ((i - ci) ** 2 + (j - cj) ** 2 <= r * r) mask[k] = allowed[k];
-    }
-  }
+  forEachCellWithin(c, width, mask.length / width, cellSize, radiusM, (k) => (mask[k] = allowed[k]));
 }
 
 export function findSources(input: GreedyInput): GreedyResult {
