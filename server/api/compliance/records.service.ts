@@ -53,23 +53,26 @@ export async function getSystemRecords(ctx: AppContext, viewer: Viewer, systemId
   const rules = await companyRules(ctx, viewer.companyId);
   const [s] = await statusesOf(ctx, rules, [row], now);
   const st = s.status;
-  const checks = await ctx.db
-    .select({ c: leakChecks, by: users.name })
-    .from(leakChecks)
-    .innerJoin(users, eq(users.id, leakChecks.byId))
-    .where(eq(leakChecks.systemId, systemId))
-    .orderBy(asc(leakChecks.checkedOn), asc(leakChecks.recordedAt));
-  const reports = await ctx.db
-    .select({ r: chronicLeakerReports, by: users.name })
-    .from(chronicLeakerReports)
-    .innerJoin(users, eq(users.id, chronicLeakerReports.filedById))
-    .where(eq(chronicLeakerReports.systemId, systemId));
-  const audit = await ctx.db
-    .select({ a: complianceAudit, by: users.name })
-    .from(complianceAudit)
-    .innerJoin(users, eq(users.id, complianceAudit.byId))
-    .where(eq(complianceAudit.systemId, systemId))
-    .orderBy(desc(complianceAudit.at), desc(complianceAudit.id));
+  // Independent reads of the system's records: asked together, not one after another.
+  const [checks, reports, audit] = await Promise.all([
+    ctx.db
+      .select({ c: leakChecks, by: users.name })
+      .from(leakChecks)
+      .innerJoin(users, eq(users.id, leakChecks.byId))
+      .where(eq(leakChecks.systemId, systemId))
+      .orderBy(asc(leakChecks.checkedOn), asc(leakChecks.recordedAt)),
+    ctx.db
+      .select({ r: chronicLeakerReports, by: users.name })
+      .from(chronicLeakerReports)
+      .innerJoin(users, eq(users.id, chronicLeakerReports.filedById))
+      .where(eq(chronicLeakerReports.systemId, systemId)),
+    ctx.db
+      .select({ a: complianceAudit, by: users.name })
+      .from(complianceAudit)
+      .innerJoin(users, eq(users.id, complianceAudit.byId))
+      .where(eq(complianceAudit.systemId, systemId))
+      .orderBy(desc(complianceAudit.at), desc(complianceAudit.id)),
+  ]);
   const system = toSystem(row.system, await companyGwpBases(ctx, viewer.companyId));
   const lc = st.leakCheck;
   return {
