@@ -1,30 +1,18 @@
-import { afterAll, beforeAll, expect, it } from "vitest";
+import { expect, it } from "vitest";
 import { eq } from "drizzle-orm";
-import type { Browser, Page } from "playwright-core";
+import type { Page } from "playwright-core";
 import { readingAudit, sweeps } from "../../server/db/schema/index";
 import { demoFixtures } from "../../server/db/seed/demo-layout";
-import { launchBrowser, newContext } from "../helpers/browser";
-import { startE2eServer, type E2eServer } from "../helpers/e2e-server";
+import { newContext } from "../helpers/browser";
 import { signInThroughForm } from "../helpers/e2e-session";
-import { PASSWORD, seedCompany } from "../helpers/fixtures";
-import { mapStoreForWalk, planToScreen, waitForServiceWorker, storedReadings, until, waitForSteadyPlan } from "../helpers/walk-e2e";
+import { walkSuite } from "../helpers/walk-suite";
+import { PASSWORD } from "../helpers/fixtures";
+import { planToScreen, waitForServiceWorker, storedReadings, until, waitForSteadyPlan } from "../helpers/walk-e2e";
 
-let server: E2eServer;
-let browser: Browser;
-let co: Awaited<ReturnType<typeof seedCompany>>;
 
-beforeAll(async () => {
-  server = await startE2eServer();
-  co = await seedCompany(server.ctx, "Holloway Provisions");
-  await mapStoreForWalk(server.ctx, { companyId: co.company.id, storeId: co.store.id, createdById: co.people["lead-tech"].userId });
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const suite = walkSuite("Holloway Provisions");
 
-const onServer = (sweepId: string) => storedReadings(server.ctx, sweepId);
+const onServer = (sweepId: string) => storedReadings(suite.server.ctx, sweepId);
 
 /**
  * The demo plan's dairy lineup (the open cases along the back-room partition), walked 0.4 m in front
@@ -43,19 +31,19 @@ function dairyLineSpots(): { x: number; y: number }[] {
 }
 
 async function openWalk(page: Page) {
-  await signInThroughForm(page, server.url, co.people.technician.email, PASSWORD);
-  await page.goto(`${server.url}/stores/${co.store.id}/walk`);
+  await signInThroughForm(page, suite.server.url, suite.co.people.technician.email, PASSWORD);
+  await page.goto(`${suite.server.url}/stores/${suite.co.store.id}/walk`);
   await page.getByRole("button", { name: "Start the sweep" }).tap();
   await page.getByTestId("walk-plan").waitFor();
   await waitForSteadyPlan(page);
   await waitForServiceWorker(page);
   const sweepId = page.url().split("/").pop()!;
-  await until("the sweep on the server", () => server.ctx.db.select().from(sweeps).where(eq(sweeps.id, sweepId)), (r) => r.length === 1);
+  await until("the sweep on the server", () => suite.server.ctx.db.select().from(sweeps).where(eq(sweeps.id, sweepId)), (r) => r.length === 1);
   return sweepId;
 }
 
 it("on a phone with touch, a sweep of the demo store's dairy line takes one tap per reading plus Submit and its confirm, through a cut network and an offline reload", async () => {
-  const context = await newContext(browser, { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 });
+  const context = await newContext(suite.browser, { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 });
   const page = await context.newPage();
   page.setDefaultTimeout(15_000);
   const failures: string[] = [];
@@ -103,7 +91,7 @@ it("on a phone with touch, a sweep of the demo store's dairy line takes one tap 
   await page.getByRole("button", { name: "Submit sweep" }).tap();
   otherTaps++;
 
-  const [done] = await until("the sweep submitted", () => server.ctx.db.select().from(sweeps).where(eq(sweeps.id, sweepId)), (r) => r[0]?.status === "submitted");
+  const [done] = await until("the sweep submitted", () => suite.server.ctx.db.select().from(sweeps).where(eq(sweeps.id, sweepId)), (r) => r[0]?.status === "submitted");
   const stored = await onServer(sweepId);
   expect(stored).toHaveLength(spots.length);
   stored.forEach((r, i) => {
@@ -112,7 +100,7 @@ it("on a phone with touch, a sweep of the demo store's dairy line takes one tap 
     expect(r.ppm).toBe(0);
   });
   // Every reading reached the server in its final value at once: nothing was edited afterwards.
-  expect(await server.ctx.db.select().from(readingAudit).where(eq(readingAudit.sweepId, sweepId))).toEqual([]);
+  expect(await suite.server.ctx.db.select().from(readingAudit).where(eq(readingAudit.sweepId, sweepId))).toEqual([]);
   expect(done.submittedAt).not.toBeNull();
   expect(positionTaps).toBe(stored.length);
   expect(otherTaps).toBe(2);
@@ -122,7 +110,7 @@ it("on a phone with touch, a sweep of the demo store's dairy line takes one tap 
 });
 
 it("a half-typed value stays on the device through a reload and is uploaded once, when the technician leaves the screen", async () => {
-  const context = await newContext(browser, { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 });
+  const context = await newContext(suite.browser, { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 });
   const page = await context.newPage();
   page.setDefaultTimeout(15_000);
   const sweepId = await openWalk(page);
@@ -147,12 +135,12 @@ it("a half-typed value stays on the device through a reload and is uploaded once
   await page.getByTestId("walk-screen").waitFor({ state: "detached" });
   const stored = await until("both readings on the server", () => onServer(sweepId), (r) => r.length === 2);
   expect(stored.map((r) => r.ppm)).toEqual([0, 7.5]);
-  expect(await server.ctx.db.select().from(readingAudit).where(eq(readingAudit.sweepId, sweepId))).toEqual([]);
+  expect(await suite.server.ctx.db.select().from(readingAudit).where(eq(readingAudit.sweepId, sweepId))).toEqual([]);
   await context.close();
 });
 
 it("moves an uploaded reading from the readings list and the open one from its keypad; only the uploaded one's move is an audited edit; the zoom buttons zoom about the open reading", async () => {
-  const context = await newContext(browser, { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 });
+  const context = await newContext(suite.browser, { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 });
   const page = await context.newPage();
   page.setDefaultTimeout(15_000);
   const sweepId = await openWalk(page);
@@ -194,7 +182,7 @@ it("moves an uploaded reading from the readings list and the open one from its k
   await page.getByRole("button", { name: "Submit sweep" }).tap();
   const stored = await until("both readings on the server", () => onServer(sweepId), (r) => r.length === 2);
   expect(stored[1].x).toBeCloseTo(c.x, 0);
-  const audit = await server.ctx.db.select().from(readingAudit).where(eq(readingAudit.sweepId, sweepId));
+  const audit = await suite.server.ctx.db.select().from(readingAudit).where(eq(readingAudit.sweepId, sweepId));
   expect(audit).toHaveLength(1);
   expect(audit[0]).toMatchObject({ readingId: stored[0].id, action: "edit" });
   expect((audit[0].before as { x: number }).x).toBeCloseTo(a.x, 1);

@@ -1,40 +1,27 @@
-import { afterAll, beforeAll, expect, it } from "vitest";
+import { expect, it } from "vitest";
 import { asc, eq } from "drizzle-orm";
-import type { Browser } from "playwright-core";
 import { findingPhotos, findings, readings } from "../../server/db/schema/index";
-import { launchBrowser, newContext } from "../helpers/browser";
-import { startE2eServer, type E2eServer } from "../helpers/e2e-server";
+import { newContext } from "../helpers/browser";
 import { signInThroughForm } from "../helpers/e2e-session";
-import { PASSWORD, seedCompany } from "../helpers/fixtures";
+import { walkSuite } from "../helpers/walk-suite";
+import { PASSWORD } from "../helpers/fixtures";
 import { makeJpeg } from "../helpers/plan-images";
-import { mapStoreForWalk, planToScreen, waitForServiceWorker, waitForSteadyPlan } from "../helpers/walk-e2e";
+import { planToScreen, waitForServiceWorker, waitForSteadyPlan } from "../helpers/walk-e2e";
 
-let server: E2eServer;
-let browser: Browser;
-let co: Awaited<ReturnType<typeof seedCompany>>;
 
-beforeAll(async () => {
-  server = await startE2eServer();
-  co = await seedCompany(server.ctx, "Fallowfield Foods");
-  await mapStoreForWalk(server.ctx, { companyId: co.company.id, storeId: co.store.id, createdById: co.people["lead-tech"].userId });
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const suite = walkSuite("Fallowfield Foods");
 
 it("on a tablet with a mouse, walks the dairy case line one click per reading, imports the detector's log, then marks a pinpointed leak with a photo while offline", async () => {
-  const context = await newContext(browser, { viewport: { width: 1024, height: 768 } });
+  const context = await newContext(suite.browser, { viewport: { width: 1024, height: 768 } });
   const page = await context.newPage();
   page.setDefaultTimeout(15_000);
   const failures: string[] = [];
   page.on("pageerror", (e) => failures.push(String(e)));
   page.on("console", (m) => { if (m.type() === "error") failures.push(m.text()); });
 
-  await signInThroughForm(page, server.url, co.people.technician.email, PASSWORD);
-  await page.goto(`${server.url}/walk`);
-  await page.getByRole("link", { name: co.store.name }).click();
+  await signInThroughForm(page, suite.server.url, suite.co.people.technician.email, PASSWORD);
+  await page.goto(`${suite.server.url}/walk`);
+  await page.getByRole("link", { name: suite.co.store.name }).click();
   await page.getByRole("button", { name: "Start the sweep" }).click();
   await page.getByTestId("walk-plan").waitFor();
   await waitForSteadyPlan(page);
@@ -66,7 +53,7 @@ it("on a tablet with a mouse, walks the dairy case line one click per reading, i
   expect(clicks).toBe(xs.length + 2); // one per reading, one digit, one final save
   const stored = await (async () => {
     for (let k = 0; k < 100; k++) {
-      const r = await server.ctx.db.select().from(readings).where(eq(readings.sweepId, sweepId)).orderBy(asc(readings.takenAt));
+      const r = await suite.server.ctx.db.select().from(readings).where(eq(readings.sweepId, sweepId)).orderBy(asc(readings.takenAt));
       if (r.length === xs.length) return r;
       await new Promise((res) => setTimeout(res, 200));
     }
@@ -90,7 +77,7 @@ it("on a tablet with a mouse, walks the dairy case line one click per reading, i
   await importer.getByRole("button", { name: "Add 2 readings" }).click();
   await page.getByTestId("walk-count").filter({ hasText: `${xs.length + 2} readings` }).waitFor();
   for (let k = 0; k < 100; k++) {
-    const n = (await server.ctx.db.select().from(readings).where(eq(readings.sweepId, sweepId))).length;
+    const n = (await suite.server.ctx.db.select().from(readings).where(eq(readings.sweepId, sweepId))).length;
     if (n === xs.length + 2) break;
     if (k === 99) throw new Error(`imported readings did not reach the server (${n})`);
     await new Promise((res) => setTimeout(res, 200));
@@ -115,19 +102,19 @@ it("on a tablet with a mouse, walks the dairy case line one click per reading, i
   await page.reload();
   await page.getByTestId("walk-plan").waitFor();
   await page.locator('[data-testid="sync-banner"][data-waiting="1"]').waitFor();
-  expect(await server.ctx.db.select().from(findings).where(eq(findings.sweepId, sweepId))).toEqual([]);
+  expect(await suite.server.ctx.db.select().from(findings).where(eq(findings.sweepId, sweepId))).toEqual([]);
 
   await context.setOffline(false);
   await page.locator('[data-testid="sync-banner"][data-waiting="0"]').waitFor({ timeout: 20_000 });
-  const made = await server.ctx.db.select().from(findings).where(eq(findings.sweepId, sweepId));
+  const made = await suite.server.ctx.db.select().from(findings).where(eq(findings.sweepId, sweepId));
   expect(made).toHaveLength(1);
   const [f] = made;
-  expect(f).toMatchObject({ status: "confirmed", component: "brazed-joint", source: "walk", storeId: co.store.id });
+  expect(f).toMatchObject({ status: "confirmed", component: "brazed-joint", source: "walk", storeId: suite.co.store.id });
   expect(f.clientId).not.toBeNull();
   expect(f.x).toBeCloseTo(10, 0);
   expect(f.y).toBeCloseTo(9.8, 0);
   expect(f.fixtureId).not.toBeNull();
-  expect(await server.ctx.db.select().from(findingPhotos).where(eq(findingPhotos.findingId, f.id))).toHaveLength(1);
+  expect(await suite.server.ctx.db.select().from(findingPhotos).where(eq(findingPhotos.findingId, f.id))).toHaveLength(1);
   // Offline, the browser reports the failed API calls as console errors: only those are expected.
   failures.splice(0, failures.length, ...failures.filter((m) => !/Failed to load resource|ERR_INTERNET_DISCONNECTED/.test(m)));
   expect(failures).toEqual([]);

@@ -1,46 +1,33 @@
-import { afterAll, beforeAll, expect, it } from "vitest";
+import { expect, it } from "vitest";
 import { eq } from "drizzle-orm";
-import type { Browser } from "playwright-core";
 import { sweeps } from "../../server/db/schema/index";
-import { launchBrowser, newContext } from "../helpers/browser";
-import { startE2eServer, type E2eServer } from "../helpers/e2e-server";
+import { newContext } from "../helpers/browser";
 import { signInThroughForm } from "../helpers/e2e-session";
-import { PASSWORD, seedCompany } from "../helpers/fixtures";
-import { mapStoreForWalk, planToScreen, waitForServiceWorker, storedReadings, until, waitForSteadyPlan } from "../helpers/walk-e2e";
+import { walkSuite } from "../helpers/walk-suite";
+import { PASSWORD } from "../helpers/fixtures";
+import { planToScreen, waitForServiceWorker, storedReadings, until, waitForSteadyPlan } from "../helpers/walk-e2e";
 
-let server: E2eServer;
-let browser: Browser;
-let co: Awaited<ReturnType<typeof seedCompany>>;
 
-beforeAll(async () => {
-  server = await startE2eServer();
-  co = await seedCompany(server.ctx, "Thornbury Grocers");
-  await mapStoreForWalk(server.ctx, { companyId: co.company.id, storeId: co.store.id, createdById: co.people["lead-tech"].userId });
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const suite = walkSuite("Thornbury Grocers");
 
-const onServer = (sweepId: string) => storedReadings(server.ctx, sweepId);
+const onServer = (sweepId: string) => storedReadings(suite.server.ctx, sweepId);
 
 it("a technician on a phone taps ten readings with the network cut halfway, reloads offline, and all ten reach the server in order", async () => {
-  const context = await newContext(browser, { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 });
+  const context = await newContext(suite.browser, { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 });
   const page = await context.newPage();
   page.setDefaultTimeout(15_000);
   const failures: string[] = [];
   page.on("pageerror", (e) => failures.push(String(e)));
 
-  await signInThroughForm(page, server.url, co.people.technician.email, PASSWORD);
-  await page.goto(`${server.url}/stores/${co.store.id}/walk`);
+  await signInThroughForm(page, suite.server.url, suite.co.people.technician.email, PASSWORD);
+  await page.goto(`${suite.server.url}/stores/${suite.co.store.id}/walk`);
   await page.getByRole("button", { name: "Start the sweep" }).tap();
   await page.getByTestId("walk-plan").waitFor();
   await waitForSteadyPlan(page);
   await waitForServiceWorker(page);
   const sweepId = page.url().split("/").pop()!;
   // The sweep was made on the device first, then uploaded.
-  await until("the sweep on the server", () => server.ctx.db.select().from(sweeps).where(eq(sweeps.id, sweepId)), (r) => r.length === 1);
+  await until("the sweep on the server", () => suite.server.ctx.db.select().from(sweeps).where(eq(sweeps.id, sweepId)), (r) => r.length === 1);
 
   // Along the front of the case line in the sales floor, left to right, 2 m apart.
   const spots = Array.from({ length: 10 }, (_, i) => ({ x: 20 + 2 * i, y: 22 }));
