@@ -9,7 +9,6 @@ import { walkSuite } from "../helpers/walk-suite";
 import { PASSWORD } from "../helpers/fixtures";
 import { planToScreen, waitForServiceWorker, storedReadings, until, waitForSteadyPlan } from "../helpers/walk-e2e";
 
-
 const suite = walkSuite("Holloway Provisions");
 
 const onServer = (sweepId: string) => storedReadings(suite.server.ctx, sweepId);

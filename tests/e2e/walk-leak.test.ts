@@ -8,7 +8,6 @@ import { PASSWORD } from "../helpers/fixtures";
 import { makeJpeg } from "../helpers/plan-images";
 import { planToScreen, waitForServiceWorker, waitForSteadyPlan } from "../helpers/walk-e2e";
 
-
 const suite = walkSuite("Fallowfield Foods");
 
 it("on a tablet with a mouse, walks the dairy case line one click per reading, imports the detector's log, then marks a pinpointed leak with a photo while offline", async () => {

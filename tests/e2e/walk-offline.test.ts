@@ -7,7 +7,6 @@ import { walkSuite } from "../helpers/walk-suite";
 import { PASSWORD } from "../helpers/fixtures";
 import { planToScreen, waitForServiceWorker, storedReadings, until, waitForSteadyPlan } from "../helpers/walk-e2e";
 
-
 const suite = walkSuite("Thornbury Grocers");
 
 const onServer = (sweepId: string) => storedReadings(suite.server.ctx, sweepId);
