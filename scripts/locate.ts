@@ -1,8 +1,8 @@
 // npm run -s locate -- FILE.json [--field]
 // Prints exactly one JSON object on stdout (the issue 5 contract); problems go to stderr, exit non-zero.
 import { readFileSync } from "node:fs";
-import { LocatorInputError, parseLocatorInput } from "../server/contracts/locator-input";
-import { locate } from "../server/analysis/locate";
+import { LocatorInputError, parseLocatorInput } from "#core/contracts/locator-input";
+import { locate } from "#core/analysis/locate";
 
 function fail(message: string, code: number): never {
   process.stderr.write(`locate: ${message}\n`);

@@ -5,8 +5,8 @@ import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { performance } from "node:perf_hooks";
-import { parseLocatorInput } from "../../server/contracts/locator-input";
-import { locate } from "../../server/analysis/locate";
+import { parseLocatorInput } from "#core/contracts/locator-input";
+import { locate } from "#core/analysis/locate";
 import { syntheticStore } from "./synthetic-store";
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];

@@ -2,7 +2,7 @@
  * Runs in Chromium (bundled by scripts/bench/fieldmap.ts): draws a field over a plan exactly as the
  * field map screen does (paintFieldCanvas + drawFieldLayer) and times it.
  */
-import { decodeField, type EncodedGrid } from "../../server/domain/fieldmap/field-codec";
+import { decodeField, type EncodedGrid } from "#core/domain/fieldmap/field-codec";
 import { paintFieldCanvas, drawFieldLayer } from "../../src/features/fieldmap/model/draw-field-layer";
 import { concentrationPaint } from "../../src/features/fieldmap/model/scale-paint";
 import { fitView } from "../../src/features/fieldmap/model/view";

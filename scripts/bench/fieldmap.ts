@@ -11,14 +11,14 @@ import { performance } from "node:perf_hooks";
 import { build } from "vite";
 import { chromium } from "playwright-core";
 import { Jimp, JimpMime } from "jimp";
-import { locate } from "../../server/analysis/locate";
-import { parseLocatorInput } from "../../server/contracts/locator-input";
-import { CONCENTRATION_LUT, createConcentrationScale } from "../../server/domain/fieldmap/concentration-ramp";
-import { encodeField } from "../../server/domain/fieldmap/field-codec";
-import type { SweepReportModel } from "../../server/domain/reports/sweep-report-model";
+import { locate } from "#core/analysis/locate";
+import { parseLocatorInput } from "#core/contracts/locator-input";
+import { CONCENTRATION_LUT, createConcentrationScale } from "#core/domain/fieldmap/concentration-ramp";
+import { encodeField } from "#core/domain/fieldmap/field-codec";
+import type { SweepReportModel } from "#core/domain/reports/sweep-report-model";
 import { renderFieldMapPng } from "../../server/reports/field-map-png";
 import { buildSweepReportPdf } from "../../server/reports/sweep-report-pdf";
-import { cautionsFor } from "../../server/domain/safety/cautions";
+import { cautionsFor } from "#core/domain/safety/cautions";
 import { syntheticStore } from "./synthetic-store";
 
 async function bundlePage(): Promise<string> {

@@ -24,7 +24,7 @@ import { createApp } from "../../server/app";
 import type { AppContext } from "../../server/context";
 import { createDb, migrateDb } from "../../server/db/client";
 import { companies, memberships, stores, users } from "../../server/db/schema/index";
-import type { Fixture } from "../../server/contracts/fixtures";
+import type { Fixture } from "#core/contracts/fixtures";
 import { createSmtpMailer } from "../../server/mail/mailer";
 import { measureEditorDrag } from "./layout-editor";
 

@@ -5,7 +5,7 @@
 import { readdirSync, readFileSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
-import type { Polygon } from "../../server/analysis/geometry/types";
+import type { Polygon } from "#core/analysis/geometry/types";
 import { checkTargets, naiveAnswer, scoreStore, summarise, type StoreScore, type Summary, type Suspect, type Truth } from "./score";
 
 const here = dirname(fileURLToPath(import.meta.url));
@@ -21,17 +21,17 @@ type LocateFn = (input: unknown) => unknown;
 
 /** Imported at run time so the benchmark still scores the naive answer before the locator exists. */
 async function loadLocator(): Promise<{ locate: LocateFn | null; why: string }> {
-  const url = new URL("../../server/analysis/locate.ts", import.meta.url).href;
+  const url = new URL("../../core/analysis/locate.ts", import.meta.url).href;
   try {
     const mod = (await import(url)) as { locate?: unknown };
-    if (typeof mod.locate !== "function") return { locate: null, why: "server/analysis/locate.ts does not export a locate(input) function" };
+    if (typeof mod.locate !== "function") return { locate: null, why: "core/analysis/locate.ts does not export a locate(input) function" };
     return { locate: mod.locate as LocateFn, why: "" };
   } catch (err) {
     const msg = err instanceof Error ? err.message : String(err);
     if (/Cannot find module|ERR_MODULE_NOT_FOUND/.test(msg) && msg.includes("locate")) {
-      return { locate: null, why: "server/analysis/locate.ts is not there yet (merge the locator branch)" };
+      return { locate: null, why: "core/analysis/locate.ts is not there yet (merge the locator branch)" };
     }
-    return { locate: null, why: `server/analysis/locate.ts failed to load: ${msg}` };
+    return { locate: null, why: `core/analysis/locate.ts failed to load: ${msg}` };
   }
 }
 

@@ -2,8 +2,8 @@
 // top-1 error = distance from the first suspect spot to the nearest true leak; a leak store with no
 // suspect is a miss; on a no-leak store any suspect at all is a false alarm; in two-leak stores both
 // leaks should be among the first four. Pure functions, so the naive answer is scored the same way.
-import { pointInPolygon } from "../../server/analysis/geometry/point-in-polygon";
-import type { Polygon, Vec } from "../../server/analysis/geometry/types";
+import { pointInPolygon } from "#core/analysis/geometry/point-in-polygon";
+import type { Polygon, Vec } from "#core/analysis/geometry/types";
 
 export interface Suspect {
   x: number;

@@ -1,6 +1,6 @@
 // A synthetic 100 m x 60 m store for the speed benchmark only (its readings follow a simple made-up
 // plume; accuracy is measured by bench:locate on the scenario generator's stores, not here).
-import type { LocatorInputRaw } from "../../server/contracts/locator-input";
+import type { LocatorInputRaw } from "#core/contracts/locator-input";
 
 type Poly = [number, number][];
 const rect = (x0: number, y0: number, x1: number, y1: number): Poly => [[x0, y0], [x1, y0], [x1, y1], [x0, y1]];

@@ -1,5 +1,5 @@
 /** The locator behind a worker pool: `run` resolves with the result or rejects with JobError. */
-import type { LocatorResult } from "../contracts/locator-output";
+import type { LocatorResult } from "#core/contracts/locator-output";
 import type { AnalysisJob } from "./analysis.worker";
 import { createWorkerPool, defaultPoolSize } from "./worker-pool";
 

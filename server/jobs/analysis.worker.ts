@@ -1,7 +1,7 @@
 /** Runs the locator in a worker thread (see analysis-runner.ts). */
-import { locate, type LocatorOptions } from "../analysis/locate";
-import { LocatorInputError, type LocatorInput } from "../contracts/locator-input";
-import type { LocatorResult } from "../contracts/locator-output";
+import { locate, type LocatorOptions } from "#core/analysis/locate";
+import { LocatorInputError, type LocatorInput } from "#core/contracts/locator-input";
+import type { LocatorResult } from "#core/contracts/locator-output";
 import { serveJobs } from "./serve-jobs";
 
 export interface AnalysisJob {

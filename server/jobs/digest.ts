@@ -1,10 +1,10 @@
 import { Cron } from "croner";
 import { and, asc, eq, inArray } from "drizzle-orm";
 import type { AppContext } from "../context";
-import type { DueItem } from "../contracts/compliance";
+import type { DueItem } from "#core/contracts/compliance";
 import { companies, digestRuns, memberships, stores, users } from "../db/schema/index";
-import { addDays, compareDates } from "../domain/dates/calendar-date";
-import { localDateOf, zoneOffsetMs } from "../domain/dates/time-zone";
+import { addDays, compareDates } from "#core/domain/dates/calendar-date";
+import { localDateOf, zoneOffsetMs } from "#core/domain/dates/time-zone";
 import { digestMail } from "../mail/digest-mail";
 import { today } from "../api/compliance/today.service";
 

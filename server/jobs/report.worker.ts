@@ -1,7 +1,7 @@
 /** Draws the report's field map (jimp) and lays out the PDF (pdfkit) in a worker thread: about a second of CPU. */
-import { CONCENTRATION_LUT, createConcentrationScale } from "../domain/fieldmap/concentration-ramp";
-import type { FieldGridLike } from "../domain/fieldmap/field-grid";
-import type { SweepReportModel } from "../domain/reports/sweep-report-model";
+import { CONCENTRATION_LUT, createConcentrationScale } from "#core/domain/fieldmap/concentration-ramp";
+import type { FieldGridLike } from "#core/domain/fieldmap/field-grid";
+import type { SweepReportModel } from "#core/domain/reports/sweep-report-model";
 import { renderFieldMapPng } from "../reports/field-map-png";
 import { buildSweepReportPdf } from "../reports/sweep-report-pdf";
 import { serveJobs } from "./serve-jobs";

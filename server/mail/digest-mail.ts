@@ -1,5 +1,5 @@
-import type { DueItem } from "../contracts/compliance";
-import { readableSource } from "../domain/compliance/citations";
+import type { DueItem } from "#core/contracts/compliance";
+import { readableSource } from "#core/domain/compliance/citations";
 
 const STATE_WORDS: Record<DueItem["state"], string> = { overdue: "OVERDUE", "due-today": "due today", "due-soon": "due soon", upcoming: "upcoming" };
 

@@ -3,7 +3,7 @@ import type { SessionData } from "express-session";
 import { and, eq } from "drizzle-orm";
 import type { Db } from "../db/client";
 import { memberships, membershipStores, users } from "../db/schema/index";
-import { can, isStoreScoped, type Permission, type Role } from "../domain/roles";
+import { can, isStoreScoped, type Permission, type Role } from "#core/domain/roles";
 import { HttpError, forbidden, notFound } from "../lib/http-error";
 
 export interface AuthContext {

@@ -4,8 +4,8 @@
  * the suspect spots' uncertainty circles. The spots' numbers are set as text by the PDF on top.
  */
 import { Jimp, JimpMime } from "jimp";
-import type { FieldGridLike } from "../domain/fieldmap/field-grid";
-import { renderFieldRgba } from "../domain/fieldmap/render-field";
+import type { FieldGridLike } from "#core/domain/fieldmap/field-grid";
+import { renderFieldRgba } from "#core/domain/fieldmap/render-field";
 
 export interface FieldMapDrawing {
   planImage: Buffer | null;

@@ -4,9 +4,9 @@
  * Hyperlegible is embedded (subset) so accented names print. Resolves with the whole PDF.
  */
 import PDFDocument from "pdfkit";
-import type { SweepReportModel } from "../domain/reports/sweep-report-model";
+import type { SweepReportModel } from "#core/domain/reports/sweep-report-model";
 import { REPORT_FONTS } from "./fonts";
-import { readableSource } from "../domain/compliance/citations";
+import { readableSource } from "#core/domain/compliance/citations";
 
 const MARGIN = 48;
 const INK = "#1f2430";

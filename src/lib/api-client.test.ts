@@ -1,6 +1,6 @@
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import { z } from "zod";
-import { sessionInfo } from "../../server/contracts/auth";
+import { sessionInfo } from "#core/contracts/auth";
 import { apiError, stubFetch } from "../../tests/helpers/stub-fetch";
 import { sessionFor, signedOutSession } from "../../tests/helpers/session-fixtures";
 import { api, ApiRequestError, currentCsrfToken, setCsrfToken } from "./api-client";

@@ -1,7 +1,7 @@
 import type { z } from "zod";
-import { apiErrorSchema } from "../../server/contracts/common";
+import { apiErrorSchema } from "#core/contracts/common";
 
-/** A failed API call, carrying the server's one error shape (server/contracts/common.ts). */
+/** A failed API call, carrying the server's one error shape (core/contracts/common.ts). */
 export class ApiRequestError extends Error {
   readonly status: number;
   readonly code: string;

@@ -1,7 +1,7 @@
 import bcrypt from "bcryptjs";
 import type { AppContext } from "../../server/context";
 import { companies, memberships, membershipStores, stores, users } from "../../server/db/schema/index";
-import type { Role } from "../../server/domain/roles";
+import type { Role } from "#core/domain/roles";
 
 export const PASSWORD = "correct horse battery";
 

@@ -1,5 +1,5 @@
-import type { SessionInfo } from "../../server/contracts/auth";
-import type { Role } from "../../server/domain/roles";
+import type { SessionInfo } from "#core/contracts/auth";
+import type { Role } from "#core/domain/roles";
 
 // Invented companies and people for client tests.
 export const COMPANY_A = "0b9e7c52-3d4f-4a1b-8c6d-2e5f7a9b1c3d";

@@ -48,7 +48,7 @@ export function stubFetch(handlers: Record<string, Handler>): StubRequest[] {
   return calls;
 }
 
-/** The error body the API sends (server/contracts/common.ts). */
+/** The error body the API sends (core/contracts/common.ts). */
 export function apiError(status: number, code: string, message: string, fields?: Record<string, string>): StubReply {
   return { status, body: { error: { code, message, ...(fields ? { fields } : {}) } } };
 }

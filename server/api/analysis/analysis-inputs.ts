@@ -1,9 +1,9 @@
 import { asc, eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import type { AnalysisParams } from "../../contracts/analysis";
+import type { AnalysisParams } from "#core/contracts/analysis";
 import { detectors, fixtures, plans, readings, sweeps } from "../../db/schema/index";
-import { toLocatorPlan } from "../../domain/layout/to-locator-input";
-import type { SweepReadingRow } from "../../domain/fieldmap/sweep-locator-input";
+import { toLocatorPlan } from "#core/domain/layout/to-locator-input";
+import type { SweepReadingRow } from "#core/domain/fieldmap/sweep-locator-input";
 import { badRequest, notFound } from "../../lib/http-error";
 import { planBounds, rowToFixture } from "../plans/plan-rows";
 import type { SweepRow } from "../sweeps/sweep-access";

@@ -1,12 +1,12 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
-import { analysisQuery } from "../../contracts/analysis";
+import { analysisQuery } from "#core/contracts/analysis";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { getAnalysis } from "./analysis.service";
 import { fixtureTrends } from "./fixture-trends.service";
-import { fixtureTrendsQuery } from "../../contracts/fixture-trends";
+import { fixtureTrendsQuery } from "#core/contracts/fixture-trends";
 
 const idParam = z.object({ id: z.uuid("must be a valid id") });
 const storeParam = z.object({ storeId: z.uuid("must be a valid id") });

@@ -5,13 +5,13 @@
  */
 import { and, eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import type { AnalysisParams, AnalysisQuery, AnalysisResponse, AnalysisSummary } from "../../contracts/analysis";
-import { DEFAULT_CELL_SIZE_M, LocatorInputError, parseLocatorInput } from "../../contracts/locator-input";
+import type { AnalysisParams, AnalysisQuery, AnalysisResponse, AnalysisSummary } from "#core/contracts/analysis";
+import { DEFAULT_CELL_SIZE_M, LocatorInputError, parseLocatorInput } from "#core/contracts/locator-input";
 import { analyses } from "../../db/schema/index";
-import { detectorDiagnostics } from "../../domain/fieldmap/detector-diagnostics";
-import { bytesToFloat32, float32ToBytes, quantiseConfidence } from "../../domain/fieldmap/field-codec";
-import { sweepLocatorInput } from "../../domain/fieldmap/sweep-locator-input";
-import { nameFixtures } from "../../domain/fieldmap/name-fixtures";
+import { detectorDiagnostics } from "#core/domain/fieldmap/detector-diagnostics";
+import { bytesToFloat32, float32ToBytes, quantiseConfidence } from "#core/domain/fieldmap/field-codec";
+import { sweepLocatorInput } from "#core/domain/fieldmap/sweep-locator-input";
+import { nameFixtures } from "#core/domain/fieldmap/name-fixtures";
 import { HttpError } from "../../lib/http-error";
 import { createAnalysisRunner, type AnalysisRunner } from "../../jobs/analysis-runner";
 import { JobError } from "../../jobs/worker-pool";

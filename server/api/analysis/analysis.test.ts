@@ -2,8 +2,8 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { agentFor, createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
 import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 import { detectors } from "../../db/schema/index";
-import type { Role } from "../../domain/roles";
-import { decodeField } from "../../domain/fieldmap/field-codec";
+import type { Role } from "#core/domain/roles";
+import { decodeField } from "#core/domain/fieldmap/field-codec";
 import { analysisRunner } from "./analysis.service";
 import { caseLineFixtures, caseWalkReadings } from "../../../tests/helpers/sweep-walk";
 

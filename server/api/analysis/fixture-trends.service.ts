@@ -4,10 +4,10 @@
  */
 import { and, asc, eq, gte, inArray, ne } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import { AIR_VOLUME_KINDS } from "../../contracts/fixture-kinds";
-import type { FixtureTrends } from "../../contracts/fixture-trends";
+import { AIR_VOLUME_KINDS } from "#core/contracts/fixture-kinds";
+import type { FixtureTrends } from "#core/contracts/fixture-trends";
 import { fixtures, sweeps } from "../../db/schema/index";
-import { fixtureLevel } from "../../domain/fieldmap/fixture-levels";
+import { fixtureLevel } from "#core/domain/fieldmap/fixture-levels";
 import { HttpError, badRequest } from "../../lib/http-error";
 import { loadVisibleStore, type Viewer } from "../stores/store-access";
 import { ensureAnalysis, rowField } from "./analysis.service";

@@ -9,7 +9,7 @@ import {
   signInInput,
   switchCompanyInput,
   type ProfileUpdateInput,
-} from "../../contracts/auth";
+} from "#core/contracts/auth";
 import { users } from "../../db/schema/index";
 import { HttpError } from "../../lib/http-error";
 import { readAuth, requireUser } from "../../middleware/auth";

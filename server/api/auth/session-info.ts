@@ -2,7 +2,7 @@ import type { Request } from "express";
 import { asc, eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { companies, memberships } from "../../db/schema/index";
-import type { SessionInfo } from "../../contracts/auth";
+import type { SessionInfo } from "#core/contracts/auth";
 import { issueCsrfToken } from "../../middleware/csrf";
 
 export async function listMemberships(ctx: AppContext, userId: string) {

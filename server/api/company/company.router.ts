@@ -1,7 +1,7 @@
 import { Router } from "express";
 import { eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import { companySettings, type CompanySettings } from "../../contracts/company";
+import { companySettings, type CompanySettings } from "#core/contracts/company";
 import { companies } from "../../db/schema/index";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";

@@ -1,7 +1,7 @@
 import { Router } from "express";
 import type { AppContext } from "../../context";
-import { ruleProfileSchema, startCustomProfileInput, type RuleProfileInput } from "../../contracts/rule-profile";
-import type { RuleProfile } from "../../domain/compliance/rule-profile";
+import { ruleProfileSchema, startCustomProfileInput, type RuleProfileInput } from "#core/contracts/rule-profile";
+import type { RuleProfile } from "#core/domain/compliance/rule-profile";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { readCustomProfile, saveCustomProfile, startFrom } from "./custom-profile.service";

@@ -1,11 +1,11 @@
 import { eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import type { CustomProfileView, RuleProfileInput } from "../../contracts/rule-profile";
+import type { CustomProfileView, RuleProfileInput } from "#core/contracts/rule-profile";
 import { companies, customRuleProfiles, users } from "../../db/schema/index";
-import { startCustomProfile, type BuiltInProfileId } from "../../domain/compliance/company-profile";
-import { validateRuleProfile } from "../../domain/compliance/custom-profile";
-import type { RuleProfile } from "../../domain/compliance/rule-profile";
-import { DomainInputError } from "../../domain/input-error";
+import { startCustomProfile, type BuiltInProfileId } from "#core/domain/compliance/company-profile";
+import { validateRuleProfile } from "#core/domain/compliance/custom-profile";
+import type { RuleProfile } from "#core/domain/compliance/rule-profile";
+import { DomainInputError } from "#core/domain/input-error";
 import { badRequest } from "../../lib/http-error";
 import { latestCustomProfile } from "../compliance/system-records";
 

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTestApp, type Agent, type TestApp, signInOnce } from "../../../tests/helpers/test-app";
 import { seedCompany } from "../../../tests/helpers/fixtures";
-import type { Role } from "../../domain/roles";
+import type { Role } from "#core/domain/roles";
 import { pdfText } from "../../../tests/helpers/pdf-text";
 
 const binary = (res: { on(e: string, f: (c?: Buffer) => void): void }, cb: (err: Error | null, body: Buffer) => void) => {

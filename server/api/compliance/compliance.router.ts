@@ -1,7 +1,7 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
-import { chargeAdditionInput, chargeCorrectionInput, chargeVoidInput, chronicReportInput, leakCheckInput } from "../../contracts/compliance";
+import { chargeAdditionInput, chargeCorrectionInput, chargeVoidInput, chronicReportInput, leakCheckInput } from "#core/contracts/compliance";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { addCharge, addLeakCheck, correctCharge, fileChronicReport, getSystemRecords, voidCharge } from "./records.service";

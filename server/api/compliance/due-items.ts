@@ -1,5 +1,5 @@
-import type { DueItem } from "../../contracts/compliance";
-import { dueStatus } from "../../domain/compliance/deadlines";
+import type { DueItem } from "#core/contracts/compliance";
+import { dueStatus } from "#core/domain/compliance/deadlines";
 import type { SystemWithStatus } from "./system-records";
 
 /** Where on the system records page each kind of figure comes from. */

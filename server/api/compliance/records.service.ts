@@ -1,10 +1,10 @@
 import { and, asc, desc, eq, inArray, isNull } from "drizzle-orm";
 import type { z } from "zod";
 import type { AppContext } from "../../context";
-import type { ChargeAdditionView, SystemRecordsView, chargeAdditionInput, chargeCorrectionInput, chronicReportInput, leakCheckInput } from "../../contracts/compliance";
+import type { ChargeAdditionView, SystemRecordsView, chargeAdditionInput, chargeCorrectionInput, chronicReportInput, leakCheckInput } from "#core/contracts/compliance";
 import { chargeAdditions, chronicLeakerReports, complianceAudit, findings, leakChecks, memberships, users } from "../../db/schema/index";
-import type { AssessedPoint } from "../../domain/compliance/assess-leak-rate";
-import type { LeakRatePart } from "../../domain/compliance/rule-profile";
+import type { AssessedPoint } from "#core/domain/compliance/assess-leak-rate";
+import type { LeakRatePart } from "#core/domain/compliance/rule-profile";
 import { chargeToKg, companyGwpBases, toSystem } from "../systems/systems.service";
 import { badRequest, conflict, notFound } from "../../lib/http-error";
 import { eventDay } from "../findings/findings.service";

@@ -1,12 +1,12 @@
 import { and, asc, desc, eq, inArray } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { chargeAdditions, chronicLeakerReports, companies, customRuleProfiles, findingEvents, findings, leakChecks, stores, systems } from "../../db/schema/index";
-import { profileFor } from "../../domain/compliance/company-profile";
-import type { ChargeAddition } from "../../domain/compliance/leak-rate";
-import type { LeakRateMethod, RuleProfile } from "../../domain/compliance/rule-profile";
-import { systemStatus, type SystemStatus } from "../../domain/compliance/system-status";
-import { localDateOf } from "../../domain/dates/time-zone";
-import { getRefrigerant } from "../../domain/refrigerants/catalogue";
+import { profileFor } from "#core/domain/compliance/company-profile";
+import type { ChargeAddition } from "#core/domain/compliance/leak-rate";
+import type { LeakRateMethod, RuleProfile } from "#core/domain/compliance/rule-profile";
+import { systemStatus, type SystemStatus } from "#core/domain/compliance/system-status";
+import { localDateOf } from "#core/domain/dates/time-zone";
+import { getRefrigerant } from "#core/domain/refrigerants/catalogue";
 
 export type SystemRow = typeof systems.$inferSelect;
 export type StoreRow = typeof stores.$inferSelect;

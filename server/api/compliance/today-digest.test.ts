@@ -8,7 +8,7 @@ import { detectors, digestRuns, outboxMessages } from "../../db/schema/index";
 import type { AppContext } from "../../context";
 import { createSmtpMailer } from "../../mail/mailer";
 import { runDueDigests, sendDigest } from "../../jobs/digest";
-import type { Role } from "../../domain/roles";
+import type { Role } from "#core/domain/roles";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;

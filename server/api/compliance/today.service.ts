@@ -1,11 +1,11 @@
 import { and, eq, inArray, isNull, notInArray } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import type { DueItem, TodayView } from "../../contracts/compliance";
+import type { DueItem, TodayView } from "#core/contracts/compliance";
 import { companies, detectors, findings, stores, systems } from "../../db/schema/index";
-import { compareDates } from "../../domain/dates/calendar-date";
-import { dueStatus } from "../../domain/compliance/deadlines";
-import { localDateOf } from "../../domain/dates/time-zone";
-import { isStoreScoped } from "../../domain/roles";
+import { compareDates } from "#core/domain/dates/calendar-date";
+import { dueStatus } from "#core/domain/compliance/deadlines";
+import { localDateOf } from "#core/domain/dates/time-zone";
+import { isStoreScoped } from "#core/domain/roles";
 import { checkStatus } from "../detectors/detectors.service";
 import { visibleStores, type Viewer } from "../stores/store-access";
 import { systemDueItems } from "./due-items";

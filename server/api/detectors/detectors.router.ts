@@ -1,7 +1,7 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
-import { detectorInput } from "../../contracts/detectors";
+import { detectorInput } from "#core/contracts/detectors";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { createDetector, getDetector, listDetectors, setDetectorArchived, updateDetector } from "./detectors.service";

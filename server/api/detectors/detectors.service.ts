@@ -1,9 +1,9 @@
 import { and, asc, eq, isNull } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { companies, detectors } from "../../db/schema/index";
-import type { Detector, DetectorInput } from "../../contracts/detectors";
-import { addDays, compareDates } from "../../domain/dates/calendar-date";
-import { localDateOf } from "../../domain/dates/time-zone";
+import type { Detector, DetectorInput } from "#core/contracts/detectors";
+import { addDays, compareDates } from "#core/domain/dates/calendar-date";
+import { localDateOf } from "#core/domain/dates/time-zone";
 import { notFound } from "../../lib/http-error";
 
 type Row = typeof detectors.$inferSelect;

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { agentFor, createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
 import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
-import type { Role } from "../../domain/roles";
+import type { Role } from "#core/domain/roles";
 import { checkStatus } from "./detectors.service";
 
 let t: TestApp;

@@ -1,9 +1,9 @@
 import PDFDocument from "pdfkit";
-import type { SystemRecordsView } from "../../contracts/compliance";
-import type { FindingDetail } from "../../contracts/finding-actions";
-import { APPLIANCE_TYPE_NAMES } from "../../contracts/systems";
+import type { SystemRecordsView } from "#core/contracts/compliance";
+import type { FindingDetail } from "#core/contracts/finding-actions";
+import { APPLIANCE_TYPE_NAMES } from "#core/contracts/systems";
 import { statementFonts } from "./fonts";
-import { readableSource } from "../../domain/compliance/citations";
+import { readableSource } from "#core/domain/compliance/citations";
 
 const KG_PER_LB = 0.45359237; // NIST SP 811, appendix B.8
 

@@ -1,6 +1,6 @@
 import Papa from "papaparse";
-import type { SystemRecordsView } from "../../contracts/compliance";
-import type { FindingDetail } from "../../contracts/finding-actions";
+import type { SystemRecordsView } from "#core/contracts/compliance";
+import type { FindingDetail } from "#core/contracts/finding-actions";
 
 const KG_PER_LB = 0.45359237; // NIST SP 811, appendix B.8
 

@@ -1,11 +1,11 @@
 import { asc, eq, inArray } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import type { FindingDetail } from "../../contracts/finding-actions";
+import type { FindingDetail } from "#core/contracts/finding-actions";
 import { findingEvents, findingPhotos, findings, fixtures, systems, users } from "../../db/schema/index";
-import { dueStatus } from "../../domain/compliance/deadlines";
-import { nextActions, type LifecycleEvent } from "../../domain/findings/lifecycle";
-import { findRefrigerant } from "../../domain/refrigerants/catalogue";
-import { cautionsFor, type CautionPlace } from "../../domain/safety/cautions";
+import { dueStatus } from "#core/domain/compliance/deadlines";
+import { nextActions, type LifecycleEvent } from "#core/domain/findings/lifecycle";
+import { findRefrigerant } from "#core/domain/refrigerants/catalogue";
+import { cautionsFor, type CautionPlace } from "#core/domain/safety/cautions";
 import type { StoreRow, SystemWithStatus } from "../compliance/system-records";
 
 export type FindingRow = typeof findings.$inferSelect;

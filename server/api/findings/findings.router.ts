@@ -1,8 +1,8 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
-import { findingActionInput } from "../../contracts/finding-actions";
-import { createFindingInput } from "../../contracts/findings";
+import { findingActionInput } from "#core/contracts/finding-actions";
+import { createFindingInput } from "#core/contracts/findings";
 import { member, requireMember } from "../../middleware/auth";
 import { singleUpload } from "../../middleware/upload";
 import { validate } from "../../middleware/validate";
@@ -35,7 +35,7 @@ export function findingsRouter(ctx: AppContext): Router {
     res.json(await getFinding(ctx, member(req), res.locals.params.id));
   });
 
-  // Role rules per action live in server/domain/findings/lifecycle.ts (ACTION_PERMISSION).
+  // Role rules per action live in core/domain/findings/lifecycle.ts (ACTION_PERMISSION).
   router.post("/findings/:id/events", requireMember("stores.read"), validate(idParam, "params"), validate(findingActionInput), async (req, res) => {
     res.json(await addFindingEvent(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
   });

@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTestApp, type Agent, type TestApp, signInOnce } from "../../../tests/helpers/test-app";
 import { seedCompany } from "../../../tests/helpers/fixtures";
 import { makeJpeg } from "../../../tests/helpers/plan-images";
-import type { Role } from "../../domain/roles";
+import type { Role } from "#core/domain/roles";
 
 let t: TestApp;
 let uploads: string;

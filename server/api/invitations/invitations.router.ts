@@ -1,7 +1,7 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
-import { acceptInvitationInput } from "../../contracts/members";
+import { acceptInvitationInput } from "#core/contracts/members";
 import { validate } from "../../middleware/validate";
 import { startSession } from "../auth/auth.service";
 import { sessionInfo } from "../auth/session-info";

@@ -1,7 +1,7 @@
 import { and, eq, gt, isNull } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { companies, invitations, memberships, membershipStores, users } from "../../db/schema/index";
-import { newAccountPassword } from "../../contracts/members";
+import { newAccountPassword } from "#core/contracts/members";
 import { HttpError, badRequest } from "../../lib/http-error";
 import { hashToken } from "../../lib/tokens";
 import { hashPassword, verifyCredentials } from "../auth/auth.service";

@@ -1,9 +1,9 @@
 import { eq, sql } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import type { AlignmentInput, Plan } from "../../contracts/plans";
-import { composeSimilarity, IDENTITY, invertSimilarity, similarityFromTwoPoints, type Similarity } from "../../analysis/geometry/similarity";
+import type { AlignmentInput, Plan } from "#core/contracts/plans";
+import { composeSimilarity, IDENTITY, invertSimilarity, similarityFromTwoPoints, type Similarity } from "#core/analysis/geometry/similarity";
 import { fixtures, plans } from "../../db/schema/index";
-import { transformFixture } from "../../domain/plans/transform-fixture";
+import { transformFixture } from "#core/domain/plans/transform-fixture";
 import { badRequest, HttpError } from "../../lib/http-error";
 import type { Viewer } from "../stores/store-access";
 import { assertCalibrated, assertCurrentVersion, assertRevision, fixtureCounts, loadVisiblePlan, lockPlan } from "./plan-access";

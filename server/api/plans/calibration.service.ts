@@ -1,9 +1,9 @@
 import { eq, sql } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import type { CalibrationInput, Plan } from "../../contracts/plans";
-import { toMetres } from "../../analysis/geometry/units";
+import type { CalibrationInput, Plan } from "#core/contracts/plans";
+import { toMetres } from "#core/analysis/geometry/units";
 import { fixtures, plans } from "../../db/schema/index";
-import { transformFixture } from "../../domain/plans/transform-fixture";
+import { transformFixture } from "#core/domain/plans/transform-fixture";
 import { badRequest, HttpError } from "../../lib/http-error";
 import type { Viewer } from "../stores/store-access";
 import { assertCurrentVersion, assertRevision, fixtureCounts, loadVisiblePlan, lockPlan, type DbOrTx } from "./plan-access";

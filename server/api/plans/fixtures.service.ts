@@ -1,7 +1,7 @@
 import { and, eq, inArray, sql } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import { validateFixtureList, type FieldError, type Fixture } from "../../contracts/fixtures";
-import type { FixturesPatchInput, FixturesPutInput, FixturesResponse } from "../../contracts/plans";
+import { validateFixtureList, type FieldError, type Fixture } from "#core/contracts/fixtures";
+import type { FixturesPatchInput, FixturesPutInput, FixturesResponse } from "#core/contracts/plans";
 import { fixtures, plans, systems } from "../../db/schema/index";
 import { describeFields } from "../../lib/zod-fields";
 import { HttpError } from "../../lib/http-error";

@@ -1,5 +1,5 @@
-import type { Fixture } from "../../contracts/fixtures";
-import type { Plan } from "../../contracts/plans";
+import type { Fixture } from "#core/contracts/fixtures";
+import type { Plan } from "#core/contracts/plans";
 import { fixtures, plans } from "../../db/schema/index";
 
 export type PlanRow = typeof plans.$inferSelect;

@@ -1,10 +1,10 @@
 import { randomUUID } from "node:crypto";
 import type { AppContext } from "../../context";
-import type { BlankPlanInput, Plan } from "../../contracts/plans";
-import { METRES_PER_FOOT } from "../../analysis/geometry/units";
+import type { BlankPlanInput, Plan } from "#core/contracts/plans";
+import { METRES_PER_FOOT } from "#core/analysis/geometry/units";
 import { badRequest, HttpError } from "../../lib/http-error";
 import { loadVisibleStore, type Viewer } from "../stores/store-access";
-import { BLANK_PLAN_MAX_M } from "../../contracts/plans";
+import { BLANK_PLAN_MAX_M } from "#core/contracts/plans";
 import { checkPlanImageHeader } from "./image-intake";
 import { ImageDecodeError } from "./image-decoder";
 import { fixtureCounts } from "./plan-access";

@@ -9,7 +9,7 @@ import { agentFor, createTestApp, type Agent, type TestApp, signIn } from "../..
 import { seedCompany } from "../../../tests/helpers/fixtures";
 import { makeJpeg, makePng, pngHeaderOnly, withExifOrientation } from "../../../tests/helpers/plan-images";
 import { createDiskStorage } from "../../storage/disk-storage";
-import type { Role } from "../../domain/roles";
+import type { Role } from "#core/domain/roles";
 
 let t: TestApp;
 let uploads: string;

@@ -1,7 +1,7 @@
 import { asc, eq } from "drizzle-orm";
-import type { Similarity } from "../../analysis/geometry/similarity";
+import type { Similarity } from "#core/analysis/geometry/similarity";
 import { fixtures, plans } from "../../db/schema/index";
-import { transformFixture } from "../../domain/plans/transform-fixture";
+import { transformFixture } from "#core/domain/plans/transform-fixture";
 import { latestVersion, lockStoreVersions, type DbOrTx } from "./plan-access";
 import { fixtureToRow, rowToFixture, type FixtureRow, type PlanRow } from "./plan-rows";
 

@@ -1,7 +1,7 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
-import { alignmentInput, blankPlanInput, calibrationInput, fixturesPatchInput, fixturesPutInput, imageVariantSchema } from "../../contracts/plans";
+import { alignmentInput, blankPlanInput, calibrationInput, fixturesPatchInput, fixturesPutInput, imageVariantSchema } from "#core/contracts/plans";
 import { member, requireMember } from "../../middleware/auth";
 import { singleUpload } from "../../middleware/upload";
 import { validate } from "../../middleware/validate";

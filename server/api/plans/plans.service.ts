@@ -1,6 +1,6 @@
 import { desc, eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import type { ImageVariant, Plan } from "../../contracts/plans";
+import type { ImageVariant, Plan } from "#core/contracts/plans";
 import { plans } from "../../db/schema/index";
 import { HttpError, notFound } from "../../lib/http-error";
 import { loadVisibleStore, type Viewer } from "../stores/store-access";

@@ -1,7 +1,7 @@
 import { eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { companies } from "../../db/schema/index";
-import type { LengthPreference } from "../../domain/units/format-units";
+import type { LengthPreference } from "#core/domain/units/format-units";
 
 /** The reader's length unit: their own choice, else the company's default. */
 export async function readerLengthUnit(ctx: AppContext, user: { lengthUnit: LengthPreference | null }, companyId: string): Promise<LengthPreference> {

@@ -1,7 +1,7 @@
 import { Router, type Request } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
-import { sendReportInput } from "../../contracts/reports";
+import { sendReportInput } from "#core/contracts/reports";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { readerLengthUnit } from "./reader-units";

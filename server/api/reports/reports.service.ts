@@ -1,11 +1,11 @@
 /** The sweep report as PDF and CSV, and sending it by e-mail with a record of each send. */
 import { and, desc, eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import type { ReportRecipient, ReportSend, SendReportInput } from "../../contracts/reports";
+import type { ReportRecipient, ReportSend, SendReportInput } from "#core/contracts/reports";
 import { memberships, membershipStores, reportSends, users } from "../../db/schema/index";
-import { createConcentrationScale } from "../../domain/fieldmap/concentration-ramp";
-import { readingsCsv } from "../../domain/reports/readings-csv";
-import type { LengthPreference } from "../../domain/units/format-units";
+import { createConcentrationScale } from "#core/domain/fieldmap/concentration-ramp";
+import { readingsCsv } from "#core/domain/reports/readings-csv";
+import type { LengthPreference } from "#core/domain/units/format-units";
 import { badRequest } from "../../lib/http-error";
 import { createReportRunner } from "../../jobs/report-runner";
 import type { ReportJob } from "../../jobs/report.worker";

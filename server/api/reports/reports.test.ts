@@ -7,7 +7,7 @@ import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 import { pdfText } from "../../../tests/helpers/pdf-text";
 import { caseLineFixtures, caseWalkReadings } from "../../../tests/helpers/sweep-walk";
 import { detectors, outboxMessages, reportSends, users } from "../../db/schema/index";
-import type { Role } from "../../domain/roles";
+import type { Role } from "#core/domain/roles";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;

@@ -1,7 +1,7 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
-import { storeInput, storeListQuery, storeUpdateInput, type StoreListQuery } from "../../contracts/stores";
+import { storeInput, storeListQuery, storeUpdateInput, type StoreListQuery } from "#core/contracts/stores";
 import { member, requireMember } from "../../middleware/auth";
 import { parsedQuery, validate } from "../../middleware/validate";
 import { getStoreDetail } from "./store-detail.service";

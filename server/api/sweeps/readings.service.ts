@@ -1,8 +1,8 @@
 import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { plans, readingAudit, readings, sweeps, users, type ReadingValues } from "../../db/schema/index";
-import { readingInput, type Reading, type ReadingAuditEntry, type ReadingEditInput, type ReadingsBatchResult, type RejectedReading } from "../../contracts/sweeps";
-import { readingProblems, type ReadingContext } from "../../domain/sweeps/reading-checks";
+import { readingInput, type Reading, type ReadingAuditEntry, type ReadingEditInput, type ReadingsBatchResult, type RejectedReading } from "#core/contracts/sweeps";
+import { readingProblems, type ReadingContext } from "#core/domain/sweeps/reading-checks";
 import { HttpError, notFound } from "../../lib/http-error";
 import { zodFields } from "../../lib/zod-fields";
 import type { Viewer } from "../stores/store-access";

@@ -1,7 +1,7 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
-import { createSweepInput, readingEditInput, readingsBatchInput } from "../../contracts/sweeps";
+import { createSweepInput, readingEditInput, readingsBatchInput } from "#core/contracts/sweeps";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { deleteReading, editReading, listReadings, readingAuditTrail, uploadReadings } from "./readings.service";

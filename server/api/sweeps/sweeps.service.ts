@@ -1,9 +1,9 @@
 import { and, count, desc, eq, inArray } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { companies, detectors, plans, readings, sweeps, systems, users } from "../../db/schema/index";
-import type { CreateSweepInput, Sweep } from "../../contracts/sweeps";
-import { DEVICE_CLOCK_TOLERANCE_MS, SWEEP_UPLOAD_MAX_AGE_MS } from "../../contracts/sweeps";
-import { startWarnings } from "../../domain/sweeps/start-warnings";
+import type { CreateSweepInput, Sweep } from "#core/contracts/sweeps";
+import { DEVICE_CLOCK_TOLERANCE_MS, SWEEP_UPLOAD_MAX_AGE_MS } from "#core/contracts/sweeps";
+import { startWarnings } from "#core/domain/sweeps/start-warnings";
 import { badRequest, conflict, HttpError } from "../../lib/http-error";
 import { checkStatus } from "../detectors/detectors.service";
 import { loadVisibleStore, type Viewer } from "../stores/store-access";

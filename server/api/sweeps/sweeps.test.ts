@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { agentFor, createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
 import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 import { detectors, systems } from "../../db/schema/index";
-import type { Role } from "../../domain/roles";
+import type { Role } from "#core/domain/roles";
 import { planHasSweeps } from "../plans/plan-sweeps";
 
 let t: TestApp;

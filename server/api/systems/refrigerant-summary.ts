@@ -1,7 +1,7 @@
-import type { Caution, RefrigerantSummary } from "../../contracts/systems";
-import { gwpOf } from "../../domain/refrigerants/gwp";
-import type { GwpBasis, Refrigerant } from "../../domain/refrigerants/types";
-import { cautionsFor } from "../../domain/safety/cautions";
+import type { Caution, RefrigerantSummary } from "#core/contracts/systems";
+import { gwpOf } from "#core/domain/refrigerants/gwp";
+import type { GwpBasis, Refrigerant } from "#core/domain/refrigerants/types";
+import { cautionsFor } from "#core/domain/safety/cautions";
 
 export function summarizeRefrigerant(r: Refrigerant, bases: readonly GwpBasis[]): RefrigerantSummary {
   const gwp = gwpOf(r, bases);

@@ -1,8 +1,8 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
-import { systemInput, systemUpdateInput } from "../../contracts/systems";
-import { REFRIGERANTS } from "../../domain/refrigerants/catalogue";
+import { systemInput, systemUpdateInput } from "#core/contracts/systems";
+import { REFRIGERANTS } from "#core/domain/refrigerants/catalogue";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { refrigerantCautions, summarizeRefrigerant } from "./refrigerant-summary";

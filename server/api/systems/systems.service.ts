@@ -1,11 +1,11 @@
 import { and, asc, eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import type { ChargeInput, System, SystemInput, SystemUpdateInput } from "../../contracts/systems";
+import type { ChargeInput, System, SystemInput, SystemUpdateInput } from "#core/contracts/systems";
 import { systems } from "../../db/schema/index";
 import { companyRules } from "../compliance/system-records";
-import { findRefrigerant } from "../../domain/refrigerants/catalogue";
-import type { GwpBasis, Refrigerant } from "../../domain/refrigerants/types";
-import { KG_PER_POUND } from "../../domain/units/mass";
+import { findRefrigerant } from "#core/domain/refrigerants/catalogue";
+import type { GwpBasis, Refrigerant } from "#core/domain/refrigerants/types";
+import { KG_PER_POUND } from "#core/domain/units/mass";
 import { badRequest, notFound } from "../../lib/http-error";
 import { loadVisibleStore, type Viewer } from "../stores/store-access";
 import { refrigerantCautions, summarizeRefrigerant } from "./refrigerant-summary";

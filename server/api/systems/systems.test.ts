@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTestApp, type Agent, type TestApp, signIn } from "../../../tests/helpers/test-app";
 import { seedCompany } from "../../../tests/helpers/fixtures";
-import type { Role } from "../../domain/roles";
+import type { Role } from "#core/domain/roles";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;

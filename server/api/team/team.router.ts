@@ -1,7 +1,7 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
-import { inviteInput, memberUpdateInput } from "../../contracts/members";
+import { inviteInput, memberUpdateInput } from "#core/contracts/members";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { invite, listTeam, removeMember, revokeInvitation, updateMember } from "./team.service";

@@ -1,8 +1,8 @@
 import { and, asc, desc, eq, inArray, isNull } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { companies, invitations, memberships, membershipStores, stores, users } from "../../db/schema/index";
-import type { InviteInput } from "../../contracts/members";
-import { ROLE_LABELS, type Role } from "../../domain/roles";
+import type { InviteInput } from "#core/contracts/members";
+import { ROLE_LABELS, type Role } from "#core/domain/roles";
 import { HttpError, badRequest, conflict, notFound } from "../../lib/http-error";
 import { newLinkToken } from "../../lib/tokens";
 import { invitationMail } from "../../mail/templates";

@@ -3,7 +3,7 @@ import { desc, eq } from "drizzle-orm";
 import { outboxMessages } from "../../db/schema/index";
 import { agentFor, createTestApp, type Agent, type TestApp, signIn } from "../../../tests/helpers/test-app";
 import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
-import type { Role } from "../../domain/roles";
+import type { Role } from "#core/domain/roles";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;

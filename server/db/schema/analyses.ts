@@ -1,5 +1,5 @@
 import { customType, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
-import type { AnalysisParams, AnalysisSummary } from "../../contracts/analysis";
+import type { AnalysisParams, AnalysisSummary } from "#core/contracts/analysis";
 import { companies } from "./companies";
 import { sweeps } from "./sweeps";
 

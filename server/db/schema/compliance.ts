@@ -1,5 +1,5 @@
 import { boolean, date, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
-import type { RuleProfile } from "../../domain/compliance/rule-profile";
+import type { RuleProfile } from "#core/domain/compliance/rule-profile";
 import { companies } from "./companies";
 import { findings } from "./findings";
 import { systems } from "./systems";

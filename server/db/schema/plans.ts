@@ -1,6 +1,6 @@
 import { boolean, doublePrecision, index, integer, jsonb, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
-import type { RoomDoor, Vertex } from "../../contracts/fixtures";
-import type { Similarity } from "../../analysis/geometry/similarity";
+import type { RoomDoor, Vertex } from "#core/contracts/fixtures";
+import type { Similarity } from "#core/analysis/geometry/similarity";
 import { companies, stores } from "./companies";
 import { systems } from "./systems";
 import { users } from "./users";

@@ -11,7 +11,7 @@ export const systems = pgTable(
     companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
     storeId: uuid().notNull().references(() => stores.id, { onDelete: "cascade" }),
     name: text().notNull(),
-    /** ASHRAE 34 designation as in server/domain/refrigerants (e.g. "R-448A"). */
+    /** ASHRAE 34 designation as in core/domain/refrigerants (e.g. "R-448A"). */
     refrigerantId: text().notNull(),
     fullChargeKg: doublePrecision().notNull(),
     applianceType: text({ enum: APPLIANCE_TYPE_VALUES }).notNull(),

@@ -1,9 +1,9 @@
 import { eq } from "drizzle-orm";
 import type { DbOrTx } from "../../api/plans/plan-access";
-import { addDays } from "../../domain/dates/calendar-date";
-import { localDateOf } from "../../domain/dates/time-zone";
-import type { Role } from "../../domain/roles";
-import { KG_PER_POUND } from "../../domain/units/mass";
+import { addDays } from "#core/domain/dates/calendar-date";
+import { localDateOf } from "#core/domain/dates/time-zone";
+import type { Role } from "#core/domain/roles";
+import { KG_PER_POUND } from "#core/domain/units/mass";
 import { chargeAdditions, detectors, findingEvents, findings, fixtures, plans, systems } from "../schema/index";
 
 type EventKind = (typeof findingEvents.$inferInsert)["kind"];

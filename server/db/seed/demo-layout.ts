@@ -1,5 +1,5 @@
 import { randomUUID } from "node:crypto";
-import type { Fixture, Vertex } from "../../contracts/fixtures";
+import type { Fixture, Vertex } from "#core/contracts/fixtures";
 
 /**
  * The demo store's floor, invented for Plumeline: a 60 m × 36 m supermarket with a back room

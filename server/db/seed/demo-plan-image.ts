@@ -1,5 +1,5 @@
 import { Jimp, JimpMime } from "jimp";
-import type { Fixture } from "../../contracts/fixtures";
+import type { Fixture } from "#core/contracts/fixtures";
 import { DEMO_PLAN } from "./demo-layout";
 
 /** Plots a straight line with Bresenham's algorithm (integer steps, no anti-aliasing). */

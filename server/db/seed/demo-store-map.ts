@@ -1,7 +1,7 @@
 import { randomUUID } from "node:crypto";
 import type { AppContext } from "../../context";
-import { validateFixtureList } from "../../contracts/fixtures";
-import { KG_PER_POUND } from "../../domain/units/mass";
+import { validateFixtureList } from "#core/contracts/fixtures";
+import { KG_PER_POUND } from "#core/domain/units/mass";
 import { planStorage } from "../../api/plans/plan-resources";
 import { fixtureToRow } from "../../api/plans/plan-rows";
 import type { DbOrTx } from "../../api/plans/plan-access";

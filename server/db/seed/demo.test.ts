@@ -4,7 +4,7 @@ import os from "node:os";
 import path from "node:path";
 import { agentFor, createTestApp, type TestApp } from "../../../tests/helpers/test-app";
 import { DEMO_SIGN_INS, seedDemoIfEmpty } from "./demo";
-import { FIXTURE_FAMILY } from "../../contracts/fixture-kinds";
+import { FIXTURE_FAMILY } from "#core/contracts/fixture-kinds";
 
 let t: TestApp;
 let uploads: string;

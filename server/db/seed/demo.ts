@@ -2,7 +2,7 @@ import bcrypt from "bcryptjs";
 import { sql } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { companies, memberships, membershipStores, stores, users } from "../schema/index";
-import type { Role } from "../../domain/roles";
+import type { Role } from "#core/domain/roles";
 import { seedDemoLayout } from "./demo-store-map";
 import { seedDemoSweeps } from "./demo-sweeps";
 import { seedDemoCompliance } from "./demo-compliance";

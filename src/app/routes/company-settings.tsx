@@ -1,5 +1,5 @@
 import { useQueryClient } from "@tanstack/react-query";
-import { can } from "../../../server/domain/roles";
+import { can } from "#core/domain/roles";
 import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
 import { Spinner } from "../../components/ui/spinner";

@@ -1,9 +1,9 @@
 import { useMemo } from "react";
 import { useParams, useSearchParams } from "react-router";
-import { alignmentBetween } from "../../../server/domain/fieldmap/plan-alignment";
-import { differenceMap } from "../../../server/domain/fieldmap/difference-map";
-import { createDifferenceScale, DIFFERENCE_LUT } from "../../../server/domain/fieldmap/difference-ramp";
-import { niceMaxPpm } from "../../../server/domain/fieldmap/concentration-ramp";
+import { alignmentBetween } from "#core/domain/fieldmap/plan-alignment";
+import { differenceMap } from "#core/domain/fieldmap/difference-map";
+import { createDifferenceScale, DIFFERENCE_LUT } from "#core/domain/fieldmap/difference-ramp";
+import { niceMaxPpm } from "#core/domain/fieldmap/concentration-ramp";
 import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
 import { Select } from "../../components/ui/select";

@@ -1,8 +1,8 @@
 import { useState } from "react";
 import { useLocation } from "react-router";
 import { useScrollToHash } from "../../lib/use-scroll-to-hash";
-import { PRINCIPLE_LABELS, type Detector } from "../../../server/contracts/detectors";
-import { can } from "../../../server/domain/roles";
+import { PRINCIPLE_LABELS, type Detector } from "#core/contracts/detectors";
+import { can } from "#core/domain/roles";
 import { Button } from "../../components/ui/button";
 import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";

@@ -1,6 +1,6 @@
 import { Link, useParams } from "react-router";
-import { localDateOf } from "../../../server/domain/dates/time-zone";
-import { can } from "../../../server/domain/roles";
+import { localDateOf } from "#core/domain/dates/time-zone";
+import { can } from "#core/domain/roles";
 import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
 import { Spinner } from "../../components/ui/spinner";

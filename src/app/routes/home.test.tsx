@@ -4,7 +4,7 @@ import { renderApp } from "../../../tests/helpers/render-client";
 import { sessionFor, signedOutSession } from "../../../tests/helpers/session-fixtures";
 import { apiError, stubFetch } from "../../../tests/helpers/stub-fetch";
 
-// The server's store shape (server/contracts/stores.ts).
+// The server's store shape (core/contracts/stores.ts).
 const store = (id: string, name: string, archivedAt: string | null = null) => ({
   id,
   name,

@@ -1,6 +1,6 @@
 import { useState } from "react";
 import { Navigate, useLocation, useNavigate } from "react-router";
-import { can, isStoreScoped, type Role } from "../../../server/domain/roles";
+import { can, isStoreScoped, type Role } from "#core/domain/roles";
 import { Button } from "../../components/ui/button";
 import { PageHeader } from "../../components/ui/page-header";
 import { StoreForm } from "../../features/stores/components/store-form";

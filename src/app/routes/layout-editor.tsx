@@ -1,5 +1,5 @@
 import { Link, useParams } from "react-router";
-import { can } from "../../../server/domain/roles";
+import { can } from "#core/domain/roles";
 import { Alert } from "../../components/ui/alert";
 import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";

@@ -1,7 +1,7 @@
 import type { ComponentType } from "react";
-import type { Store } from "../../../server/contracts/stores";
-import type { Role } from "../../../server/domain/roles";
-import { can } from "../../../server/domain/roles";
+import type { Store } from "#core/contracts/stores";
+import type { Role } from "#core/domain/roles";
+import { can } from "#core/domain/roles";
 import { PlanSection } from "../../features/layout/components/plan/plan-section";
 import { SystemsSection } from "../../features/systems/components/systems-section";
 import { StoreSweepsSection } from "../../features/fieldmap/components/store-sweeps-section";

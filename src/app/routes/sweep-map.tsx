@@ -1,8 +1,8 @@
 import { useMemo, useState } from "react";
 import { countOf } from "../../lib/format";
 import { Link, useParams, useSearchParams } from "react-router";
-import { can } from "../../../server/domain/roles";
-import { AIR_VOLUME_KINDS } from "../../../server/contracts/fixture-kinds";
+import { can } from "#core/domain/roles";
+import { AIR_VOLUME_KINDS } from "#core/contracts/fixture-kinds";
 import { Alert } from "../../components/ui/alert";
 import { Button } from "../../components/ui/button";
 import { PageHeader } from "../../components/ui/page-header";

@@ -1,6 +1,6 @@
 import { useNavigate, useParams } from "react-router";
-import { COMPONENT_LABELS } from "../../../server/contracts/findings";
-import { can } from "../../../server/domain/roles";
+import { COMPONENT_LABELS } from "#core/contracts/findings";
+import { can } from "#core/domain/roles";
 import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
 import { Spinner } from "../../components/ui/spinner";

@@ -1,6 +1,6 @@
 import { fireEvent, screen, within } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
-import type { TodayView } from "../../../server/contracts/compliance";
+import type { TodayView } from "#core/contracts/compliance";
 import { renderApp } from "../../../tests/helpers/render-client";
 import { sessionFor } from "../../../tests/helpers/session-fixtures";
 import { stubFetch } from "../../../tests/helpers/stub-fetch";

@@ -1,5 +1,5 @@
 import { Link, useSearchParams } from "react-router";
-import { can, isStoreScoped } from "../../../server/domain/roles";
+import { can, isStoreScoped } from "#core/domain/roles";
 import { Alert } from "../../components/ui/alert";
 import { Button } from "../../components/ui/button";
 import { PageHeader } from "../../components/ui/page-header";

@@ -1,5 +1,5 @@
 import { Link, useNavigate, useParams } from "react-router";
-import { can } from "../../../server/domain/roles";
+import { can } from "#core/domain/roles";
 import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
 import { Spinner } from "../../components/ui/spinner";

@@ -1,6 +1,6 @@
 import { fireEvent, screen, waitFor, within } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
-import type { Role } from "../../../server/domain/roles";
+import type { Role } from "#core/domain/roles";
 import { renderApp } from "../../../tests/helpers/render-client";
 import { COMPANY_B, sessionFor, signedOutSession } from "../../../tests/helpers/session-fixtures";
 import { stubFetch } from "../../../tests/helpers/stub-fetch";
@@ -12,7 +12,7 @@ async function navLabels() {
     .map((link) => link.textContent);
 }
 
-// Expected menus follow the role table in PRODUCT.md and the grants in server/domain/roles.ts.
+// Expected menus follow the role table in PRODUCT.md and the grants in core/domain/roles.ts.
 const cases: { role: Role; outboxEnabled: boolean; expected: string[] }[] = [
   { role: "owner", outboxEnabled: true, expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings", "Outbox"] },
   { role: "owner", outboxEnabled: false, expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"] },

@@ -1,5 +1,5 @@
 import { useNavigate } from "react-router";
-import { ROLE_LABELS } from "../../../server/domain/roles";
+import { ROLE_LABELS } from "#core/domain/roles";
 import { Alert } from "../../components/ui/alert";
 import { useSwitchCompany } from "../../features/auth/api/switch-company";
 import type { Membership } from "../../features/auth/model/active-membership";

@@ -1,5 +1,5 @@
-import type { SessionInfo } from "../../../server/contracts/auth";
-import { can, type Role } from "../../../server/domain/roles";
+import type { SessionInfo } from "#core/contracts/auth";
+import { can, type Role } from "#core/domain/roles";
 
 export interface NavItem {
   to: string;
@@ -8,7 +8,7 @@ export interface NavItem {
 
 /**
  * What the navigation offers to a role. It only hides what would be refused: the server
- * enforces every permission on its own (server/domain/roles.ts is shared by both sides).
+ * enforces every permission on its own (core/domain/roles.ts is shared by both sides).
  */
 export function navItems(role: Role, session: Pick<SessionInfo, "outboxEnabled">): NavItem[] {
   // Today first: the landing page for the people who answer for the books (see routes/home.tsx).

@@ -1,5 +1,5 @@
 import { createContext, useContext } from "react";
-import type { SessionInfo } from "../../../server/contracts/auth";
+import type { SessionInfo } from "#core/contracts/auth";
 import type { Membership } from "../../features/auth/model/active-membership";
 
 export interface SignedIn {

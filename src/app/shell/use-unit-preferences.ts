@@ -1,4 +1,4 @@
-import type { LengthPreference, MassPreference } from "../../../server/domain/units/format-units";
+import type { LengthPreference, MassPreference } from "#core/domain/units/format-units";
 import { useCompanySettings } from "../../features/settings/api/get-company-settings";
 import { useSignedIn } from "./session-context";
 

@@ -1,4 +1,4 @@
-import { readableSource } from "../../../server/domain/compliance/citations";
+import { readableSource } from "#core/domain/compliance/citations";
 
 export interface CautionItem {
   id: string;

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { z } from "zod";
-import { sessionInfo, type SessionInfo } from "../../../../server/contracts/auth";
-import { acceptInvitationInput, newAccountPassword } from "../../../../server/contracts/members";
+import { sessionInfo, type SessionInfo } from "#core/contracts/auth";
+import { acceptInvitationInput, newAccountPassword } from "#core/contracts/members";
 import { api } from "../../../lib/api-client";
 import { replaceSession } from "./session-cache";
 

@@ -1,6 +1,6 @@
 import { useMutation } from "@tanstack/react-query";
 import type { z } from "zod";
-import { passwordResetConfirmInput } from "../../../../server/contracts/auth";
+import { passwordResetConfirmInput } from "#core/contracts/auth";
 import { api } from "../../../lib/api-client";
 
 export { passwordResetConfirmInput };

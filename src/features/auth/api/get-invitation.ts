@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { invitationPreview } from "../../../../server/contracts/members";
+import { invitationPreview } from "#core/contracts/members";
 import { api } from "../../../lib/api-client";
 import { authKeys } from "./auth-keys";
 

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { sessionInfo, type SessionInfo } from "../../../../server/contracts/auth";
+import { sessionInfo, type SessionInfo } from "#core/contracts/auth";
 import { api, isApiRequestError } from "../../../lib/api-client";
 import { authKeys } from "./auth-keys";
 import { lastKnownSession, rememberSession } from "./offline-session";

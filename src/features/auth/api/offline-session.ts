@@ -1,4 +1,4 @@
-import { sessionInfo, type SessionInfo } from "../../../../server/contracts/auth";
+import { sessionInfo, type SessionInfo } from "#core/contracts/auth";
 
 // The last session the server confirmed, kept on the device so the app (and a sweep in
 // progress) opens after a reload without a connection. The CSRF token is left out: the first

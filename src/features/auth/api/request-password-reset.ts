@@ -1,6 +1,6 @@
 import { useMutation } from "@tanstack/react-query";
 import { z } from "zod";
-import { passwordResetRequestInput } from "../../../../server/contracts/auth";
+import { passwordResetRequestInput } from "#core/contracts/auth";
 import { api } from "../../../lib/api-client";
 
 export { passwordResetRequestInput };

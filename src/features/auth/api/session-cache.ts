@@ -1,5 +1,5 @@
 import type { QueryClient } from "@tanstack/react-query";
-import type { SessionInfo } from "../../../../server/contracts/auth";
+import type { SessionInfo } from "#core/contracts/auth";
 import { authKeys } from "./auth-keys";
 import { rememberSession } from "./offline-session";
 

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { sessionInfo, signInInput, type SignInInput, type SessionInfo } from "../../../../server/contracts/auth";
+import { sessionInfo, signInInput, type SignInInput, type SessionInfo } from "#core/contracts/auth";
 import { api } from "../../../lib/api-client";
 import { replaceSession } from "./session-cache";
 

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { sessionInfo, switchCompanyInput, type SessionInfo } from "../../../../server/contracts/auth";
+import { sessionInfo, switchCompanyInput, type SessionInfo } from "#core/contracts/auth";
 import { api } from "../../../lib/api-client";
 import { switchSession } from "./session-cache";
 

@@ -28,7 +28,7 @@ describe("accept invitation form", () => {
     fireEvent.change(screen.getByLabelText("New password again"), { target: { value: "shorter" } });
     fireEvent.click(screen.getByRole("button", { name: "Join Northfield Cold Care" }));
 
-    // passwordSchema and personNameSchema in server/contracts/common.ts
+    // passwordSchema and personNameSchema in core/contracts/common.ts
     expect(await screen.findByText("Your name is required.")).toBeTruthy();
     expect(screen.getByText("New password must be at least 10 characters.")).toBeTruthy();
     expect(screen.getByText("New password again does not match the first one.")).toBeTruthy();

@@ -1,9 +1,9 @@
 import { useState, type FormEvent } from "react";
 import { Link } from "react-router";
 import type { z } from "zod";
-import type { SessionInfo } from "../../../../server/contracts/auth";
-import type { invitationPreview } from "../../../../server/contracts/members";
-import { ROLE_LABELS } from "../../../../server/domain/roles";
+import type { SessionInfo } from "#core/contracts/auth";
+import type { invitationPreview } from "#core/contracts/members";
+import { ROLE_LABELS } from "#core/domain/roles";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";

@@ -20,7 +20,7 @@ describe("sign-in form", () => {
     renderOnRoute(<SignInForm onSignedIn={() => {}} />, { path: "/sign-in" });
     fill("not-an-address", "");
 
-    // Messages come from signInInput in server/contracts/auth.ts, the schema the server uses.
+    // Messages come from signInInput in core/contracts/auth.ts, the schema the server uses.
     expect(await screen.findByText("E-mail must be a valid e-mail address.")).toBeTruthy();
     expect(screen.getByText("Password is required.")).toBeTruthy();
     expect(screen.getByLabelText("E-mail").getAttribute("aria-invalid")).toBe("true");

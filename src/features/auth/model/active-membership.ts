@@ -1,4 +1,4 @@
-import type { SessionInfo } from "../../../../server/contracts/auth";
+import type { SessionInfo } from "#core/contracts/auth";
 
 export type Membership = SessionInfo["memberships"][number];
 

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { todayResponse } from "../../../../server/contracts/compliance";
+import { todayResponse } from "#core/contracts/compliance";
 import { api } from "../../../lib/api-client";
 import { complianceKeys } from "./compliance-keys";
 

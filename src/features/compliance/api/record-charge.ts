@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
-import { chargeAdditionInput, chargeAdditionResponse, chargeCorrectionInput, chargeVoidInput, chronicReportInput, leakCheckInput, systemRecords } from "../../../../server/contracts/compliance";
+import { chargeAdditionInput, chargeAdditionResponse, chargeCorrectionInput, chargeVoidInput, chronicReportInput, leakCheckInput, systemRecords } from "#core/contracts/compliance";
 import { api } from "../../../lib/api-client";
 import { complianceKeys } from "./compliance-keys";
 

@@ -1,5 +1,5 @@
 import { useMutation } from "@tanstack/react-query";
-import { digestSendResult } from "../../../../server/contracts/compliance";
+import { digestSendResult } from "#core/contracts/compliance";
 import { api } from "../../../lib/api-client";
 
 export function sendDigestNow() {

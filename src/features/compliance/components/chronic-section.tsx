@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from "react";
-import type { SystemRecordsView } from "../../../../server/contracts/compliance";
-import { readableSource } from "../../../../server/domain/compliance/citations";
+import type { SystemRecordsView } from "#core/contracts/compliance";
+import { readableSource } from "#core/domain/compliance/citations";
 import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
 import { formErrorMessage, serverFieldErrors } from "../../../lib/form-errors";

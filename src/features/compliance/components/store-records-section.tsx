@@ -1,5 +1,5 @@
 import { Link } from "react-router";
-import { COMPONENT_LABELS, type FINDING_COMPONENTS } from "../../../../server/contracts/findings";
+import { COMPONENT_LABELS, type FINDING_COMPONENTS } from "#core/contracts/findings";
 import { QueryError } from "../../../components/ui/query-error";
 import { Spinner } from "../../../components/ui/spinner";
 import { useToday } from "../api/get-today";

@@ -1,7 +1,7 @@
 import { useState } from "react";
 import { Link } from "react-router";
-import type { SystemRecordsView } from "../../../../server/contracts/compliance";
-import { APPLIANCE_TYPE_NAMES } from "../../../../server/contracts/systems";
+import type { SystemRecordsView } from "#core/contracts/compliance";
+import { APPLIANCE_TYPE_NAMES } from "#core/contracts/systems";
 import { Button } from "../../../components/ui/button";
 import { Cautions } from "../../../components/ui/cautions";
 import { DataTable } from "../../../components/ui/data-table";
@@ -12,7 +12,7 @@ import { daysInWords, formatMass, formatPercent, STATE_LABELS, type MassUnit } f
 import { ChargeForm } from "./charge-form";
 import { ChronicSection } from "./chronic-section";
 import { LeakCheckForm } from "./leak-check-form";
-import { readableSource } from "../../../../server/domain/compliance/citations";
+import { readableSource } from "#core/domain/compliance/citations";
 
 function Fact({ label, children }: { label: string; children: React.ReactNode }) {
   return (

@@ -1,12 +1,12 @@
 import { useState } from "react";
 import { Link } from "react-router";
-import { COMPONENT_LABELS, type FINDING_COMPONENTS } from "../../../../server/contracts/findings";
-import type { TodayView as TodayData } from "../../../../server/contracts/compliance";
+import { COMPONENT_LABELS, type FINDING_COMPONENTS } from "#core/contracts/findings";
+import type { TodayView as TodayData } from "#core/contracts/compliance";
 import { DataTable } from "../../../components/ui/data-table";
 import { EmptyState } from "../../../components/ui/empty-state";
 import { Select } from "../../../components/ui/select";
 import { arrangeDue, daysInWords, DUE_KIND_LABELS, formatPercent, STATE_LABELS, type DueSort } from "../model/figures";
-import { readableSource } from "../../../../server/domain/compliance/citations";
+import { readableSource } from "#core/domain/compliance/citations";
 
 const STATE_TONE: Record<string, string> = { overdue: "text-danger font-bold", "due-today": "text-danger font-bold", "due-soon": "text-note font-bold", upcoming: "" };
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import type { DueItem } from "../../../../server/contracts/compliance";
+import type { DueItem } from "#core/contracts/compliance";
 import { arrangeDue, daysInWords, formatMass } from "./figures";
 
 const item = (over: Partial<DueItem>): DueItem => ({

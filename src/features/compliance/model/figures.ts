@@ -1,5 +1,5 @@
-import type { DueItem } from "../../../../server/contracts/compliance";
-import { KG_PER_POUND } from "../../../../server/domain/units/mass";
+import type { DueItem } from "#core/contracts/compliance";
+import { KG_PER_POUND } from "#core/domain/units/mass";
 
 export type MassUnit = "kg" | "lb";
 

@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
-import { detector, type DetectorInput } from "../../../../server/contracts/detectors";
+import { detector, type DetectorInput } from "#core/contracts/detectors";
 import { api } from "../../../lib/api-client";
 
 export const detectorsKeys = {

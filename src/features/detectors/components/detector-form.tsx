@@ -1,5 +1,5 @@
 import { useState } from "react";
-import { PRINCIPLE_LABELS, SENSING_PRINCIPLES, type Detector, type DetectorInput } from "../../../../server/contracts/detectors";
+import { PRINCIPLE_LABELS, SENSING_PRINCIPLES, type Detector, type DetectorInput } from "#core/contracts/detectors";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { Select } from "../../../components/ui/select";

@@ -1,4 +1,4 @@
-import { levelScaleProblems, type LevelBand } from "../../../../server/domain/detectors/level-scale";
+import { levelScaleProblems, type LevelBand } from "#core/domain/detectors/level-scale";
 
 /** One row of the level-scale editor as typed (text, so a half-typed number is kept). */
 export interface LevelRow {
@@ -20,7 +20,7 @@ function ppm(text: string): number | null {
 
 /**
  * The typed rows as bands, or the problems by row and field ("1.minPpm"), with the same cross-band
- * rules the server applies (server/domain/detectors/level-scale.ts).
+ * rules the server applies (core/domain/detectors/level-scale.ts).
  */
 export function parseRows(rows: readonly LevelRow[]): { bands: LevelBand[]; problems: Record<string, string> } {
   const problems: Record<string, string> = {};

@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
-import { findingDetail, findingListResponse } from "../../../../server/contracts/finding-actions";
+import { findingDetail, findingListResponse } from "#core/contracts/finding-actions";
 import { api } from "../../../lib/api-client";
 import { fieldmapKeys } from "./fieldmap-keys";
 import type { SuspectSpot } from "./get-analysis";

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { z } from "zod";
 import { api } from "../../../lib/api-client";
-import { decodeField } from "../../../../server/domain/fieldmap/field-codec";
+import { decodeField } from "#core/domain/fieldmap/field-codec";
 import { fieldmapKeys } from "./fieldmap-keys";
 
 const point = z.object({ x: z.number(), y: z.number() });

@@ -1,5 +1,5 @@
 import { useQuery } from "@tanstack/react-query";
-import { fixtureTrendsResponse } from "../../../../server/contracts/fixture-trends";
+import { fixtureTrendsResponse } from "#core/contracts/fixture-trends";
 import { api } from "../../../lib/api-client";
 import { fieldmapKeys } from "./fieldmap-keys";
 

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { z } from "zod";
-import { fixturesResponse, plan } from "../../../../server/contracts/plans";
+import { fixturesResponse, plan } from "#core/contracts/plans";
 import { api } from "../../../lib/api-client";
 import { fieldmapKeys } from "./fieldmap-keys";
 

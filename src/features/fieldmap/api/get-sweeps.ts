@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { z } from "zod";
-import { sweep } from "../../../../server/contracts/sweeps";
+import { sweep } from "#core/contracts/sweeps";
 import { api } from "../../../lib/api-client";
 import { fieldmapKeys } from "./fieldmap-keys";
 

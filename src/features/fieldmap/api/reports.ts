@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
-import { reportRecipient, reportSend, type SendReportInput } from "../../../../server/contracts/reports";
-import { sweep } from "../../../../server/contracts/sweeps";
+import { reportRecipient, reportSend, type SendReportInput } from "#core/contracts/reports";
+import { sweep } from "#core/contracts/sweeps";
 import { api } from "../../../lib/api-client";
 import { fieldmapKeys } from "./fieldmap-keys";
 

@@ -1,5 +1,5 @@
 import { useEffect, useMemo, useRef, useState } from "react";
-import type { FieldGridLike } from "../../../../server/domain/fieldmap/field-grid";
+import type { FieldGridLike } from "#core/domain/fieldmap/field-grid";
 import { drawFieldLayer, paintFieldCanvas, type FieldPaint } from "../model/draw-field-layer";
 import { drawFixtures, drawPath, drawRiskPoints, drawSpots, drawTaps, type OverlayFixture, type OverlayReading, type OverlaySpot } from "../model/draw-overlays";
 import type { LayerState } from "../model/layers";

@@ -1,4 +1,4 @@
-import { LUT_SIZE } from "../../../../server/domain/fieldmap/concentration-ramp";
+import { LUT_SIZE } from "#core/domain/fieldmap/concentration-ramp";
 
 /** A ramp bar with ppm ticks, and a swatch for unknown (hatched) areas. */
 export function RampLegend({ lut, position, ticks, unit = "ppm", title }: { lut: Uint8ClampedArray; position(v: number): number; ticks: number[]; unit?: string; title: string }) {

@@ -1,4 +1,4 @@
-import { formatLength, type LengthPreference } from "../../../../server/domain/units/format-units";
+import { formatLength, type LengthPreference } from "#core/domain/units/format-units";
 import { Button } from "../../../components/ui/button";
 import type { SuspectSpot } from "../api/get-analysis";
 

@@ -3,8 +3,8 @@
  * per cell (renderFieldRgba: unknown hatched, thin areas faded) and then scaled onto the view without
  * smoothing, so cells stay crisp and a 96,000-cell field costs one putImageData and one drawImage.
  */
-import type { FieldGridLike } from "../../../../server/domain/fieldmap/field-grid";
-import { renderFieldRgba } from "../../../../server/domain/fieldmap/render-field";
+import type { FieldGridLike } from "#core/domain/fieldmap/field-grid";
+import { renderFieldRgba } from "#core/domain/fieldmap/render-field";
 import type { MapView } from "./view";
 
 export interface FieldPaint {

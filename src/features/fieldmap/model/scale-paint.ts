@@ -1,4 +1,4 @@
-import { CONCENTRATION_LUT, createConcentrationScale, niceMaxPpm } from "../../../../server/domain/fieldmap/concentration-ramp";
+import { CONCENTRATION_LUT, createConcentrationScale, niceMaxPpm } from "#core/domain/fieldmap/concentration-ramp";
 import type { FieldPaint } from "./draw-field-layer";
 
 /** One ppm scale for a set of readings (so compared sweeps share colours). */

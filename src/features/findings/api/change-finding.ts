@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { z } from "zod";
-import { findingActionInput, findingDetail } from "../../../../server/contracts/finding-actions";
-import { createFindingInput } from "../../../../server/contracts/findings";
+import { findingActionInput, findingDetail } from "#core/contracts/finding-actions";
+import { createFindingInput } from "#core/contracts/findings";
 import { api, apiUpload } from "../../../lib/api-client";
 import { findingsKeys } from "./findings-keys";
 

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { findingDetail, findingListResponse } from "../../../../server/contracts/finding-actions";
+import { findingDetail, findingListResponse } from "#core/contracts/finding-actions";
 import { api } from "../../../lib/api-client";
 import { findingsKeys } from "./findings-keys";
 

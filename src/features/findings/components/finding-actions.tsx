@@ -1,8 +1,8 @@
 import { useState, type FormEvent } from "react";
-import type { FindingDetail } from "../../../../server/contracts/finding-actions";
-import { COMPONENT_LABELS, DISMISS_REASONS, FINDING_COMPONENTS } from "../../../../server/contracts/findings";
-import { ACTION_LABELS, ACTION_PERMISSION, type FindingAction } from "../../../../server/domain/findings/lifecycle";
-import { can, type Role } from "../../../../server/domain/roles";
+import type { FindingDetail } from "#core/contracts/finding-actions";
+import { COMPONENT_LABELS, DISMISS_REASONS, FINDING_COMPONENTS } from "#core/contracts/findings";
+import { ACTION_LABELS, ACTION_PERMISSION, type FindingAction } from "#core/domain/findings/lifecycle";
+import { can, type Role } from "#core/domain/roles";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { Select } from "../../../components/ui/select";

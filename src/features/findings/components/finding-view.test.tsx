@@ -1,6 +1,6 @@
 import { screen } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
-import type { FindingDetail } from "../../../../server/contracts/finding-actions";
+import type { FindingDetail } from "#core/contracts/finding-actions";
 import { renderOnRoute } from "../../../../tests/helpers/render-client";
 import { stubFetch } from "../../../../tests/helpers/stub-fetch";
 import { FindingView } from "./finding-view";

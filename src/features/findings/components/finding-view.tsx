@@ -1,12 +1,12 @@
 import { Link } from "react-router";
-import type { FindingDetail } from "../../../../server/contracts/finding-actions";
-import { COMPONENT_LABELS } from "../../../../server/contracts/findings";
+import type { FindingDetail } from "#core/contracts/finding-actions";
+import { COMPONENT_LABELS } from "#core/contracts/findings";
 import { Alert } from "../../../components/ui/alert";
 import { Cautions } from "../../../components/ui/cautions";
 import { formErrorMessage } from "../../../lib/form-errors";
 import { useChangeFinding } from "../api/change-finding";
-import { readableSource } from "../../../../server/domain/compliance/citations";
-import { formatLength, type LengthPreference } from "../../../../server/domain/units/format-units";
+import { readableSource } from "#core/domain/compliance/citations";
+import { formatLength, type LengthPreference } from "#core/domain/units/format-units";
 
 const KIND_LABELS: Record<FindingDetail["events"][number]["kind"], string> = {
   found: "Found", confirmed: "Confirmed", repaired: "Repaired", "initial-test": "Initial verification test", "follow-up-test": "Follow-up verification test", closed: "Closed", dismissed: "Dismissed",

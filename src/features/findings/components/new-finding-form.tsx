@@ -1,5 +1,5 @@
 import { useState, type FormEvent } from "react";
-import { COMPONENT_LABELS, FINDING_COMPONENTS } from "../../../../server/contracts/findings";
+import { COMPONENT_LABELS, FINDING_COMPONENTS } from "#core/contracts/findings";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { Select } from "../../../components/ui/select";

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { calibrationInput, calibrationResponse, type CalibrationInput } from "../../../../server/contracts/plans";
+import { calibrationInput, calibrationResponse, type CalibrationInput } from "#core/contracts/plans";
 import { api } from "../../../lib/api-client";
 import { plansKeys } from "./plans-keys";
 

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { blankPlanInput, plan, type BlankPlanInput } from "../../../../server/contracts/plans";
+import { blankPlanInput, plan, type BlankPlanInput } from "#core/contracts/plans";
 import { api } from "../../../lib/api-client";
 import { plansKeys } from "./plans-keys";
 

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { fixturesResponse } from "../../../../server/contracts/plans";
+import { fixturesResponse } from "#core/contracts/plans";
 import { api } from "../../../lib/api-client";
 import { layoutKeys } from "./layout-keys";
 

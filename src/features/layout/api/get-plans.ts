@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { z } from "zod";
-import { plan } from "../../../../server/contracts/plans";
+import { plan } from "#core/contracts/plans";
 import { api } from "../../../lib/api-client";
 import { plansKeys } from "./plans-keys";
 

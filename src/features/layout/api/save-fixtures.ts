@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { Fixture } from "../../../../server/contracts/fixtures";
-import { fixturesResponse } from "../../../../server/contracts/plans";
+import type { Fixture } from "#core/contracts/fixtures";
+import { fixturesResponse } from "#core/contracts/plans";
 import { api } from "../../../lib/api-client";
 import { layoutKeys } from "./layout-keys";
 import { plansKeys } from "./plans-keys";

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { alignmentInput, plan, type AlignmentInput } from "../../../../server/contracts/plans";
+import { alignmentInput, plan, type AlignmentInput } from "#core/contracts/plans";
 import { api } from "../../../lib/api-client";
 import { plansKeys } from "./plans-keys";
 

@@ -1,5 +1,5 @@
 import { useCallback, useEffect, useRef, useState } from "react";
-import type { FieldError } from "../../../../server/contracts/fixtures";
+import type { FieldError } from "#core/contracts/fixtures";
 import { isApiRequestError } from "../../../lib/api-client";
 import { useSaveFixtures } from "../api/save-fixtures";
 import { sceneErrors, sceneFixtures, type Scene } from "../model/scene";

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { polygonArea, polygonCentroid } from "../../../../server/analysis/geometry/polygon-area";
-import type { PolygonFixture } from "../../../../server/contracts/fixtures";
+import { polygonArea, polygonCentroid } from "#core/analysis/geometry/polygon-area";
+import type { PolygonFixture } from "#core/contracts/fixtures";
 import * as act from "./actions";
 import { applyAction, applyActions } from "./actions";
 import { planPoint } from "./coordinates";

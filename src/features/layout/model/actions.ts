@@ -5,9 +5,9 @@
  * field; the reducer then trusts them, ignores ids that no longer exist, and returns the same
  * scene object when nothing changed (history.ts skips such no-ops).
  */
-import type { Bounds, Vec } from "../../../../server/analysis/geometry/types";
-import { LABEL_MAX, type Fixture, type RoomDoor, type Vertex } from "../../../../server/contracts/fixtures";
-import type { FixtureKind } from "../../../../server/contracts/fixture-kinds";
+import type { Bounds, Vec } from "#core/analysis/geometry/types";
+import { LABEL_MAX, type Fixture, type RoomDoor, type Vertex } from "#core/contracts/fixtures";
+import type { FixtureKind } from "#core/contracts/fixture-kinds";
 import { canChangeKind, changeKind } from "./change-kind";
 import { arrayCopies, copyFixture } from "./copies";
 import { fitDoor, fixtureCentroid, relocateDoor, resizeFixture, rotateFixture, translateFixture, unionBounds } from "./fixture-geometry";

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { applySimilarity } from "../../../../server/analysis/geometry/similarity";
+import { applySimilarity } from "#core/analysis/geometry/similarity";
 import { metresPerPixelFromLine, pickScaleBar, planRecalibration, rescaleFixtures } from "./calibration";
 import { imagePoint } from "./coordinates";
 import { openCase, rect, room, valve } from "./test-builders";

@@ -2,9 +2,9 @@
  * Scale calibration: metres per pixel from a line of known real length drawn on the image;
  * what a re-calibration does to the fixtures; and the scale bar's length.
  */
-import { IDENTITY, type Similarity } from "../../../../server/analysis/geometry/similarity";
-import { fromMetres, toMetres, type LengthUnit } from "../../../../server/analysis/geometry/units";
-import type { Fixture } from "../../../../server/contracts/fixtures";
+import { IDENTITY, type Similarity } from "#core/analysis/geometry/similarity";
+import { fromMetres, toMetres, type LengthUnit } from "#core/analysis/geometry/units";
+import type { Fixture } from "#core/contracts/fixtures";
 import type { ImagePoint } from "./coordinates";
 import { scaleFixture } from "./fixture-geometry";
 

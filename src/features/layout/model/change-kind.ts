@@ -4,8 +4,8 @@
  * and properties the new kind lacks are dropped. Outlines and points do not turn into each
  * other: a point kind changes only to another point kind.
  */
-import { isPointKind, type FixtureKind } from "../../../../server/contracts/fixture-kinds";
-import type { Fixture } from "../../../../server/contracts/fixtures";
+import { isPointKind, type FixtureKind } from "#core/contracts/fixture-kinds";
+import type { Fixture } from "#core/contracts/fixtures";
 import { newFixture } from "./new-fixture";
 import { planPoint } from "./coordinates";
 

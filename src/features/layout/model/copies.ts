@@ -2,7 +2,7 @@
  * Making copies of fixtures: duplicates with an offset and arrays (rows of identical cases).
  * New ids come from the caller, so the reducer stays pure and replays give the same ids.
  */
-import type { Fixture } from "../../../../server/contracts/fixtures";
+import type { Fixture } from "#core/contracts/fixtures";
 import { translateFixture } from "./fixture-geometry";
 
 /**

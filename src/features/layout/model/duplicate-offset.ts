@@ -2,7 +2,7 @@
  * Where a duplicate lands: butted against the original on its right (the next case in a
  * row), else below it, else a small step down-right — always on the plan when it can be.
  */
-import type { Vec } from "../../../../server/analysis/geometry/types";
+import type { Vec } from "#core/analysis/geometry/types";
 import { unionBounds } from "./fixture-geometry";
 import type { Scene } from "./scene";
 

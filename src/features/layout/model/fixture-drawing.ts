@@ -3,8 +3,8 @@
  * room's wall as an open line that leaves its door gap, and the door divisions of a
  * glass-door case along its longest edge.
  */
-import type { RoomDoor, Vertex } from "../../../../server/contracts/fixtures";
-import { polygonCentroid } from "../../../../server/analysis/geometry/polygon-area";
+import type { RoomDoor, Vertex } from "#core/contracts/fixtures";
+import { polygonCentroid } from "#core/analysis/geometry/polygon-area";
 
 function lerp(a: Vertex, b: Vertex, t: number): Vertex {
   return [a[0] + (b[0] - a[0]) * t, a[1] + (b[1] - a[1]) * t];

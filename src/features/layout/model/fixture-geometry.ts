@@ -2,11 +2,11 @@
  * Geometry of one fixture as a whole: its bounds and centroid, and maps that move every
  * vertex (or the point) while keeping a room's door on its edge. Pure; returns new objects.
  */
-import { polygonBounds } from "../../../../server/analysis/geometry/bounds";
-import { polygonCentroid } from "../../../../server/analysis/geometry/polygon-area";
-import { mapBoxPoint, rotatePoint } from "../../../../server/analysis/geometry/transform";
-import type { Bounds, Vec } from "../../../../server/analysis/geometry/types";
-import type { Fixture, RoomDoor, Vertex } from "../../../../server/contracts/fixtures";
+import { polygonBounds } from "#core/analysis/geometry/bounds";
+import { polygonCentroid } from "#core/analysis/geometry/polygon-area";
+import { mapBoxPoint, rotatePoint } from "#core/analysis/geometry/transform";
+import type { Bounds, Vec } from "#core/analysis/geometry/types";
+import type { Fixture, RoomDoor, Vertex } from "#core/contracts/fixtures";
 
 export function fixtureVertices(f: Fixture): Vertex[] {
   return "point" in f ? [[f.point.x, f.point.y]] : f.polygon.map(([x, y]) => [x, y]);

@@ -1,7 +1,7 @@
 /** Rows of the fixtures list view: plain values in metres, sortable, one per fixture. */
-import { polygonArea } from "../../../../server/analysis/geometry/polygon-area";
-import { FIXTURE_FAMILY, FIXTURE_KIND_NAMES, type FixtureFamily, type FixtureKind } from "../../../../server/contracts/fixture-kinds";
-import type { Fixture } from "../../../../server/contracts/fixtures";
+import { polygonArea } from "#core/analysis/geometry/polygon-area";
+import { FIXTURE_FAMILY, FIXTURE_KIND_NAMES, type FixtureFamily, type FixtureKind } from "#core/contracts/fixture-kinds";
+import type { Fixture } from "#core/contracts/fixtures";
 import { fixtureBounds, fixtureCentroid } from "./fixture-geometry";
 import { sceneFixtures, type Scene } from "./scene";
 

@@ -4,9 +4,9 @@
  * conversion); anything with units ("3.2 m", "12 ft 6 in", "12' 6\"") is read by the domain's
  * parseLength and sent in metres.
  */
-import { DomainInputError } from "../../../../server/domain/input-error";
-import { parseLength } from "../../../../server/domain/units/parse-length";
-import type { LengthPreference } from "../../../../server/domain/units/format-units";
+import { DomainInputError } from "#core/domain/input-error";
+import { parseLength } from "#core/domain/units/parse-length";
+import type { LengthPreference } from "#core/domain/units/format-units";
 
 export interface LengthEntry {
   value: number;

@@ -1,7 +1,7 @@
 /** A freshly drawn fixture of a kind, with that kind's default properties. */
-import { polygonBounds } from "../../../../server/analysis/geometry/bounds";
-import { FIXTURE_FAMILY, isPointKind, isRoomKind, type FixtureKind } from "../../../../server/contracts/fixture-kinds";
-import type { Fixture, Vertex } from "../../../../server/contracts/fixtures";
+import { polygonBounds } from "#core/analysis/geometry/bounds";
+import { FIXTURE_FAMILY, isPointKind, isRoomKind, type FixtureKind } from "#core/contracts/fixture-kinds";
+import type { Fixture, Vertex } from "#core/contracts/fixtures";
 import type { PlanPoint } from "./coordinates";
 
 /**

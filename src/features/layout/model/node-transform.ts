@@ -5,7 +5,7 @@
  * passes them here, records setVertices with the result, and resets the node to identity,
  * so the model only ever holds vertices (react-konva's advice: bake the scale, don't keep it).
  */
-import type { Vertex } from "../../../../server/contracts/fixtures";
+import type { Vertex } from "#core/contracts/fixtures";
 
 /** Konva's node attributes in plan metres; rotation in degrees, clockwise on the y-down plan. */
 export interface NodeTransform {

@@ -2,10 +2,10 @@
  * The layout editor's scene: plain readonly data (fixtures by id, their drawing order and the
  * selection) on a plan of known size. Views render it; only actions.ts's reducer changes it.
  */
-import { pointInPolygon } from "../../../../server/analysis/geometry/point-in-polygon";
-import { distanceToPolygonEdge } from "../../../../server/analysis/geometry/segments";
-import type { Bounds } from "../../../../server/analysis/geometry/types";
-import { validateFixtureList, type FieldError, type Fixture, type PlanBounds } from "../../../../server/contracts/fixtures";
+import { pointInPolygon } from "#core/analysis/geometry/point-in-polygon";
+import { distanceToPolygonEdge } from "#core/analysis/geometry/segments";
+import type { Bounds } from "#core/analysis/geometry/types";
+import { validateFixtureList, type FieldError, type Fixture, type PlanBounds } from "#core/contracts/fixtures";
 import type { PlanPoint } from "./coordinates";
 import { fixtureBounds } from "./fixture-geometry";
 

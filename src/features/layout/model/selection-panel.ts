@@ -3,8 +3,8 @@
  * or "mixed" when the selected fixtures differ, and only the properties every selected
  * fixture's kind has (a door count appears for glass-door cases only, and so on).
  */
-import { FIXTURE_KIND_NAMES } from "../../../../server/contracts/fixture-kinds";
-import type { Fixture, RoomDoor } from "../../../../server/contracts/fixtures";
+import { FIXTURE_KIND_NAMES } from "#core/contracts/fixture-kinds";
+import type { Fixture, RoomDoor } from "#core/contracts/fixtures";
 import { selectedFixtures, type Scene } from "./scene";
 
 export const MIXED = Symbol("mixed");

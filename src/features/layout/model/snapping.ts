@@ -4,9 +4,9 @@
  * at every zoom. Fixture features win over the grid: lining a case up with its neighbour
  * matters more than a round number.
  */
-import { polygonBounds } from "../../../../server/analysis/geometry/bounds";
-import type { Bounds, Vec } from "../../../../server/analysis/geometry/types";
-import type { Fixture } from "../../../../server/contracts/fixtures";
+import { polygonBounds } from "#core/analysis/geometry/bounds";
+import type { Bounds, Vec } from "#core/analysis/geometry/types";
+import type { Fixture } from "#core/contracts/fixtures";
 import { planPoint, type PlanPoint } from "./coordinates";
 import { fixtureVertices } from "./fixture-geometry";
 

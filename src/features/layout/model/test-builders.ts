@@ -1,5 +1,5 @@
 /** Small fixture builders shared by the model's tests (an invented store's cases and rooms). */
-import type { Fixture, PlainFixture, PointFixture, RoomFixture, Vertex } from "../../../../server/contracts/fixtures";
+import type { Fixture, PlainFixture, PointFixture, RoomFixture, Vertex } from "#core/contracts/fixtures";
 
 export const uuid = (n: number) => `00000000-0000-4000-8000-${String(n).padStart(12, "0")}`;
 

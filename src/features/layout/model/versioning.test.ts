@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import type { PolygonFixture } from "../../../../server/contracts/fixtures";
+import type { PolygonFixture } from "#core/contracts/fixtures";
 import { planPoint } from "./coordinates";
 import { alignmentFromMatches, carryFixtures, mapBetweenVersions, mapToNextVersion, mapToPreviousVersion } from "./versioning";
 import { closeTo, openCase, rect, room, uuid } from "./test-builders";

@@ -11,8 +11,8 @@ import {
   invertSimilarity,
   similarityFromTwoPoints,
   type Similarity,
-} from "../../../../server/analysis/geometry/similarity";
-import { BOUNDS_TOLERANCE_M, type Fixture, type PlanBounds } from "../../../../server/contracts/fixtures";
+} from "#core/analysis/geometry/similarity";
+import { BOUNDS_TOLERANCE_M, type Fixture, type PlanBounds } from "#core/contracts/fixtures";
 import { planPoint, type PlanPoint } from "./coordinates";
 import { fixtureVertices, mapFixture } from "./fixture-geometry";
 

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { z } from "zod";
-import { outboxMessage } from "../../../../server/contracts/outbox";
+import { outboxMessage } from "#core/contracts/outbox";
 import { api } from "../../../lib/api-client";
 import { outboxKeys } from "./outbox-keys";
 

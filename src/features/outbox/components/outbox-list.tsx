@@ -1,5 +1,5 @@
 import { Link } from "react-router";
-import type { OutboxMessage } from "../../../../server/contracts/outbox";
+import type { OutboxMessage } from "#core/contracts/outbox";
 import { EmptyState } from "../../../components/ui/empty-state";
 import { formatDateTime } from "../../../lib/format";
 

@@ -1,6 +1,6 @@
 import { render, screen } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
-import type { OutboxMessage } from "../../../../server/contracts/outbox";
+import type { OutboxMessage } from "#core/contracts/outbox";
 import { OutboxMessageView } from "./outbox-message-view";
 
 const message: OutboxMessage = {

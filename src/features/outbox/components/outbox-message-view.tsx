@@ -1,4 +1,4 @@
-import type { OutboxMessage } from "../../../../server/contracts/outbox";
+import type { OutboxMessage } from "#core/contracts/outbox";
 import { formatBytes, formatDateTime } from "../../../lib/format";
 import { linkify } from "../model/linkify";
 

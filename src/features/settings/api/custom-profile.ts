@@ -1,5 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { customProfileView, ruleProfileSchema, type CustomProfileView } from "../../../../server/contracts/rule-profile";
+import { customProfileView, ruleProfileSchema, type CustomProfileView } from "#core/contracts/rule-profile";
 import { api } from "../../../lib/api-client";
 import { settingsKeys } from "./settings-keys";
 

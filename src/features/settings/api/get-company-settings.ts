@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { companySettings } from "../../../../server/contracts/company";
+import { companySettings } from "#core/contracts/company";
 import { api } from "../../../lib/api-client";
 import { settingsKeys } from "./settings-keys";
 

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { companySettings, type CompanySettings } from "../../../../server/contracts/company";
+import { companySettings, type CompanySettings } from "#core/contracts/company";
 import { api } from "../../../lib/api-client";
 import { settingsKeys } from "./settings-keys";
 

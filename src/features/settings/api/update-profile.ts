@@ -1,5 +1,5 @@
 import { useMutation } from "@tanstack/react-query";
-import { profileUpdateInput, sessionInfo, type ProfileUpdateInput, type SessionInfo } from "../../../../server/contracts/auth";
+import { profileUpdateInput, sessionInfo, type ProfileUpdateInput, type SessionInfo } from "#core/contracts/auth";
 import { api } from "../../../lib/api-client";
 
 export { profileUpdateInput };

@@ -1,6 +1,6 @@
 import { fireEvent, screen, waitFor } from "@testing-library/react";
 import { beforeEach, describe, expect, it, vi } from "vitest";
-import type { CompanySettings } from "../../../../server/contracts/company";
+import type { CompanySettings } from "#core/contracts/company";
 import { renderOnRoute } from "../../../../tests/helpers/render-client";
 import { stubFetch } from "../../../../tests/helpers/stub-fetch";
 import { setCsrfToken } from "../../../lib/api-client";
@@ -32,7 +32,7 @@ describe("company settings form", () => {
     renderOnRoute(<CompanySettingsForm settings={settings} editable />, { path: "/settings" });
     fireEvent.change(screen.getByLabelText("Detector check interval (days)"), { target: { value: "2.5" } });
     fireEvent.click(screen.getByRole("button", { name: "Save settings" }));
-    // companySettings.detectorCheckIntervalDays in server/contracts/company.ts
+    // companySettings.detectorCheckIntervalDays in core/contracts/company.ts
     expect(await screen.findByText("Detector check interval (days) must be a whole number of days.")).toBeTruthy();
     fireEvent.change(screen.getByLabelText("Detector check interval (days)"), { target: { value: "0" } });
     fireEvent.click(screen.getByRole("button", { name: "Save settings" }));

@@ -1,5 +1,5 @@
 import { useState, type FormEvent } from "react";
-import type { CompanySettings } from "../../../../server/contracts/company";
+import type { CompanySettings } from "#core/contracts/company";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { Select } from "../../../components/ui/select";

@@ -1,7 +1,7 @@
 import { fireEvent, screen, waitFor } from "@testing-library/react";
 import { beforeEach, describe, expect, it } from "vitest";
-import type { RuleProfileInput } from "../../../../server/contracts/rule-profile";
-import { startCustomProfile } from "../../../../server/domain/compliance/company-profile";
+import type { RuleProfileInput } from "#core/contracts/rule-profile";
+import { startCustomProfile } from "#core/domain/compliance/company-profile";
 import { renderOnRoute } from "../../../../tests/helpers/render-client";
 import { stubFetch } from "../../../../tests/helpers/stub-fetch";
 import { setCsrfToken } from "../../../lib/api-client";

@@ -1,5 +1,5 @@
 import { useState, type FormEvent, type ReactNode } from "react";
-import type { RuleProfileInput } from "../../../../server/contracts/rule-profile";
+import type { RuleProfileInput } from "#core/contracts/rule-profile";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";

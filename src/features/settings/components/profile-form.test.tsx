@@ -37,7 +37,7 @@ describe("profile form", () => {
     renderOnRoute(<ProfileForm user={user} onSaved={() => {}} />, { path: "/profile" });
     fireEvent.change(screen.getByLabelText("Name"), { target: { value: "   " } });
     fireEvent.click(screen.getByRole("button", { name: "Save profile" }));
-    // personNameSchema in server/contracts/common.ts trims before checking
+    // personNameSchema in core/contracts/common.ts trims before checking
     expect(await screen.findByText("Name is required.")).toBeTruthy();
     expect(calls).toHaveLength(0);
   });

@@ -1,7 +1,7 @@
 import { useState, type FormEvent } from "react";
-import type { SessionInfo } from "../../../../server/contracts/auth";
-import type { CompanySettings } from "../../../../server/contracts/company";
-import type { LengthUnit, MassUnit } from "../../../../server/contracts/units";
+import type { SessionInfo } from "#core/contracts/auth";
+import type { CompanySettings } from "#core/contracts/company";
+import type { LengthUnit, MassUnit } from "#core/contracts/units";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { Select } from "../../../components/ui/select";

@@ -1,5 +1,5 @@
-import type { LengthUnit, MassUnit } from "../../../../server/contracts/units";
-import type { CompanySettings } from "../../../../server/contracts/company";
+import type { LengthUnit, MassUnit } from "#core/contracts/units";
+import type { CompanySettings } from "#core/contracts/company";
 
 export const LENGTH_LABELS: Record<LengthUnit, string> = { m: "Metres", "ft-in": "Feet and inches" };
 export const MASS_LABELS: Record<MassUnit, string> = { kg: "Kilograms (kg)", lb: "Pounds (lb)" };

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { addTopBand, getAt, numberFromText, pathKey, removeTopBand, setAt } from "./profile-draft";
-import { ruleProfileSchema } from "../../../../server/contracts/rule-profile";
-import { startCustomProfile } from "../../../../server/domain/compliance/company-profile";
+import { ruleProfileSchema } from "#core/contracts/rule-profile";
+import { startCustomProfile } from "#core/domain/compliance/company-profile";
 
 describe("rule-profile drafts", () => {
   it("replace one value by path without touching the original", () => {

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { store } from "../../../../server/contracts/stores";
+import { store } from "#core/contracts/stores";
 import { api } from "../../../lib/api-client";
 import { storesKeys } from "./stores-keys";
 

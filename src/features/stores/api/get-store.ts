@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { z } from "zod";
-import { store } from "../../../../server/contracts/stores";
+import { store } from "#core/contracts/stores";
 import { api } from "../../../lib/api-client";
 import { storesKeys } from "./stores-keys";
 

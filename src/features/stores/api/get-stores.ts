@@ -1,5 +1,5 @@
 import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
-import { storeListResponse, type Store } from "../../../../server/contracts/stores";
+import { storeListResponse, type Store } from "#core/contracts/stores";
 import { api } from "../../../lib/api-client";
 import { storesKeys, type StoreListFilter } from "./stores-keys";
 

@@ -1,4 +1,4 @@
-import type { StoreListQuery } from "../../../../server/contracts/stores";
+import type { StoreListQuery } from "#core/contracts/stores";
 
 export type StoreListFilter = Partial<Pick<StoreListQuery, "search" | "sort" | "order" | "includeArchived">>;
 

@@ -1,5 +1,5 @@
 import { useId, useState, type FormEvent } from "react";
-import type { Store } from "../../../../server/contracts/stores";
+import type { Store } from "#core/contracts/stores";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { FieldError } from "../../../components/ui/field-error";

@@ -1,5 +1,5 @@
 import { useState } from "react";
-import type { Store } from "../../../../server/contracts/stores";
+import type { Store } from "#core/contracts/stores";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { formErrorMessage } from "../../../lib/form-errors";

@@ -1,6 +1,6 @@
 import { useState } from "react";
 import { Link } from "react-router";
-import type { Store } from "../../../../server/contracts/stores";
+import type { Store } from "#core/contracts/stores";
 import { Checkbox } from "../../../components/ui/checkbox";
 import { DataTable } from "../../../components/ui/data-table";
 import { EmptyState } from "../../../components/ui/empty-state";

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { system, systemInput, type SystemInput } from "../../../../server/contracts/systems";
+import { system, systemInput, type SystemInput } from "#core/contracts/systems";
 import { api } from "../../../lib/api-client";
 import { systemsKeys } from "./systems-keys";
 

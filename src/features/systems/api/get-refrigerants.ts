@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { refrigerantListResponse } from "../../../../server/contracts/systems";
+import { refrigerantListResponse } from "#core/contracts/systems";
 import { api } from "../../../lib/api-client";
 import { systemsKeys } from "./systems-keys";
 

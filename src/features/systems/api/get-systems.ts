@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { systemListResponse } from "../../../../server/contracts/systems";
+import { systemListResponse } from "#core/contracts/systems";
 import { api } from "../../../lib/api-client";
 import { systemsKeys } from "./systems-keys";
 

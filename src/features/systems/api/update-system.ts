@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { system, systemUpdateInput, type SystemUpdateInput } from "../../../../server/contracts/systems";
+import { system, systemUpdateInput, type SystemUpdateInput } from "#core/contracts/systems";
 import { api } from "../../../lib/api-client";
 import { systemsKeys } from "./systems-keys";
 

@@ -1,5 +1,5 @@
-import type { Caution } from "../../../../server/contracts/systems";
-import { readableSource } from "../../../../server/domain/compliance/citations";
+import type { Caution } from "#core/contracts/systems";
+import { readableSource } from "#core/domain/compliance/citations";
 
 /**
  * The usual cautions for the picked refrigerant, beside the form. They inform; local codes and

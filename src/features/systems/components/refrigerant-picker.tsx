@@ -1,7 +1,7 @@
 import { useId } from "react";
-import type { RefrigerantSummary } from "../../../../server/contracts/systems";
+import type { RefrigerantSummary } from "#core/contracts/systems";
 import { FieldError } from "../../../components/ui/field-error";
-import { readableSource } from "../../../../server/domain/compliance/citations";
+import { readableSource } from "#core/domain/compliance/citations";
 
 /** An R-number picker that shows, for the choice, its safety class and its GWP with basis and source. */
 export function RefrigerantPicker({

@@ -1,14 +1,14 @@
 import { fireEvent, screen, waitFor } from "@testing-library/react";
 import { beforeEach, describe, expect, it } from "vitest";
 import { refrigerantCautions, summarizeRefrigerant } from "../../../../server/api/systems/refrigerant-summary";
-import { REFRIGERANTS } from "../../../../server/domain/refrigerants/catalogue";
-import { cautionsFor } from "../../../../server/domain/safety/cautions";
-import { getRefrigerant } from "../../../../server/domain/refrigerants/catalogue";
+import { REFRIGERANTS } from "#core/domain/refrigerants/catalogue";
+import { cautionsFor } from "#core/domain/safety/cautions";
+import { getRefrigerant } from "#core/domain/refrigerants/catalogue";
 import { renderOnRoute } from "../../../../tests/helpers/render-client";
 import { apiError, stubFetch } from "../../../../tests/helpers/stub-fetch";
 import { setCsrfToken } from "../../../lib/api-client";
 import { SystemForm } from "./system-form";
-import { readableSource } from "../../../../server/domain/compliance/citations";
+import { readableSource } from "#core/domain/compliance/citations";
 
 const STORE_ID = "1d2c3b4a-5e6f-4a7b-8c9d-0e1f2a3b4c5d";
 // The server's own catalogue answer (GET /api/refrigerants) on the AR4 basis.

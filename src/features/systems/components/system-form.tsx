@@ -1,7 +1,7 @@
 import { useState, type FormEvent } from "react";
-import { APPLIANCE_TYPE_NAMES, APPLIANCE_TYPES, type ApplianceType, type System, type SystemInput } from "../../../../server/contracts/systems";
-import { kgToPounds } from "../../../../server/domain/units/mass";
-import type { MassPreference } from "../../../../server/domain/units/format-units";
+import { APPLIANCE_TYPE_NAMES, APPLIANCE_TYPES, type ApplianceType, type System, type SystemInput } from "#core/contracts/systems";
+import { kgToPounds } from "#core/domain/units/mass";
+import type { MassPreference } from "#core/domain/units/format-units";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { Checkbox } from "../../../components/ui/checkbox";

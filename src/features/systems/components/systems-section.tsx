@@ -1,6 +1,6 @@
 import { useState } from "react";
-import { APPLIANCE_TYPE_NAMES, type System } from "../../../../server/contracts/systems";
-import { formatMass, type MassPreference } from "../../../../server/domain/units/format-units";
+import { APPLIANCE_TYPE_NAMES, type System } from "#core/contracts/systems";
+import { formatMass, type MassPreference } from "#core/domain/units/format-units";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { DataTable } from "../../../components/ui/data-table";

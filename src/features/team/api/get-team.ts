@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
-import { teamResponse } from "../../../../server/contracts/members";
+import { teamResponse } from "#core/contracts/members";
 import { api } from "../../../lib/api-client";
 import { teamKeys } from "./team-keys";
 

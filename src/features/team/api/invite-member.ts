@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { invitation, inviteInput, type InviteInput } from "../../../../server/contracts/members";
+import { invitation, inviteInput, type InviteInput } from "#core/contracts/members";
 import { api } from "../../../lib/api-client";
 import { teamKeys } from "./team-keys";
 

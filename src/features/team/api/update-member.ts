@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { z } from "zod";
-import { member, memberUpdateInput } from "../../../../server/contracts/members";
+import { member, memberUpdateInput } from "#core/contracts/members";
 import { api } from "../../../lib/api-client";
 import { teamKeys } from "./team-keys";
 

@@ -1,5 +1,5 @@
-import type { Invitation } from "../../../../server/contracts/members";
-import { ROLE_LABELS } from "../../../../server/domain/roles";
+import type { Invitation } from "#core/contracts/members";
+import { ROLE_LABELS } from "#core/domain/roles";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { DataTable } from "../../../components/ui/data-table";

@@ -1,5 +1,5 @@
 import { useState, type FormEvent } from "react";
-import type { Role } from "../../../../server/domain/roles";
+import type { Role } from "#core/domain/roles";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { Select } from "../../../components/ui/select";

@@ -1,6 +1,6 @@
 import { useState } from "react";
-import type { Member } from "../../../../server/contracts/members";
-import type { Role } from "../../../../server/domain/roles";
+import type { Member } from "#core/contracts/members";
+import type { Role } from "#core/domain/roles";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { Select } from "../../../components/ui/select";

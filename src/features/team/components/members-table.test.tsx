@@ -1,6 +1,6 @@
 import { fireEvent, screen, waitFor } from "@testing-library/react";
 import { beforeEach, describe, expect, it } from "vitest";
-import type { Member } from "../../../../server/contracts/members";
+import type { Member } from "#core/contracts/members";
 import { renderOnRoute } from "../../../../tests/helpers/render-client";
 import { USER_ID } from "../../../../tests/helpers/session-fixtures";
 import { apiError, stubFetch } from "../../../../tests/helpers/stub-fetch";

@@ -1,6 +1,6 @@
 import { useState } from "react";
-import type { Member } from "../../../../server/contracts/members";
-import { ROLE_LABELS } from "../../../../server/domain/roles";
+import type { Member } from "#core/contracts/members";
+import { ROLE_LABELS } from "#core/domain/roles";
 import { Button } from "../../../components/ui/button";
 import { DataTable, type Column } from "../../../components/ui/data-table";
 import { formatDate } from "../../../lib/format";

@@ -1,4 +1,4 @@
-import type { Member } from "../../../../server/contracts/members";
+import type { Member } from "#core/contracts/members";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { formErrorMessage } from "../../../lib/form-errors";

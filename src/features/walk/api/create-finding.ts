@@ -1,5 +1,5 @@
-import { finding, type CreateFindingInput } from "../../../../server/contracts/findings";
-import { apiErrorSchema } from "../../../../server/contracts/common";
+import { finding, type CreateFindingInput } from "#core/contracts/findings";
+import { apiErrorSchema } from "#core/contracts/common";
 import { api, ApiRequestError, currentCsrfToken } from "../../../lib/api-client";
 
 // The two calls behind a queued "Leak here" (model/finding-queue.ts sends them).

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { reading, sweep } from "../../../../server/contracts/sweeps";
+import { reading, sweep } from "#core/contracts/sweeps";
 import { api } from "../../../lib/api-client";
 import type { LocalReading, LocalSweep } from "../model/local-types";
 import type { WalkDb } from "../model/walk-db";

@@ -1,9 +1,9 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { z } from "zod";
-import { detector, type Detector } from "../../../../server/contracts/detectors";
-import { fixturesResponse, plan, type FixturesResponse, type Plan } from "../../../../server/contracts/plans";
-import { store, type Store } from "../../../../server/contracts/stores";
-import { system, type System } from "../../../../server/contracts/systems";
+import { detector, type Detector } from "#core/contracts/detectors";
+import { fixturesResponse, plan, type FixturesResponse, type Plan } from "#core/contracts/plans";
+import { store, type Store } from "#core/contracts/stores";
+import { system, type System } from "#core/contracts/systems";
 import { api } from "../../../lib/api-client";
 import { walkDb } from "../model/walk-db";
 import { walkKeys } from "./walk-keys";

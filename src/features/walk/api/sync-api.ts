@@ -1,4 +1,4 @@
-import { readingsBatchResult, type CreateSweepInput, type ReadingEditInput, type ReadingInput } from "../../../../server/contracts/sweeps";
+import { readingsBatchResult, type CreateSweepInput, type ReadingEditInput, type ReadingInput } from "#core/contracts/sweeps";
 import { api, isApiRequestError } from "../../../lib/api-client";
 import { RefusedError, type SyncTransport } from "../model/sync-transport";
 import { postFindingPhoto, postWalkFinding } from "./create-finding";

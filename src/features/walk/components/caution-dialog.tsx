@@ -1,4 +1,4 @@
-import { cautionsFor, type CautionPlace } from "../../../../server/domain/safety/cautions";
+import { cautionsFor, type CautionPlace } from "#core/domain/safety/cautions";
 import { Button } from "../../../components/ui/button";
 import { Dialog } from "../../../components/ui/dialog";
 

@@ -1,4 +1,4 @@
-import { formatLength, type LengthPreference } from "../../../../server/domain/units/format-units";
+import { formatLength, type LengthPreference } from "#core/domain/units/format-units";
 import type { LagHint } from "../model/lag-hint";
 
 /** Where an alarm's air was really sampled, and the closer re-check to make from there. */

@@ -1,8 +1,8 @@
 import { useState } from "react";
-import { COMPONENT_LABELS, FINDING_COMPONENTS } from "../../../../server/contracts/findings";
-import type { Fixture } from "../../../../server/contracts/fixtures";
-import { FIXTURE_KIND_NAMES } from "../../../../server/contracts/fixture-kinds";
-import { formatLength, type LengthPreference } from "../../../../server/domain/units/format-units";
+import { COMPONENT_LABELS, FINDING_COMPONENTS } from "#core/contracts/findings";
+import type { Fixture } from "#core/contracts/fixtures";
+import { FIXTURE_KIND_NAMES } from "#core/contracts/fixture-kinds";
+import { formatLength, type LengthPreference } from "#core/domain/units/format-units";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { Dialog } from "../../../components/ui/dialog";

@@ -1,7 +1,7 @@
 import { useEffect, useMemo, useRef, useState } from "react";
 import { Group, Image as KonvaImage, Layer, Line, Shape, Stage } from "react-konva";
 import type { Context } from "konva/lib/Context";
-import type { Fixture } from "../../../../server/contracts/fixtures";
+import type { Fixture } from "#core/contracts/fixtures";
 import type { LocalReading } from "../model/local-types";
 import type { LagHint } from "../model/lag-hint";
 import { fitView, toPlan, toStage, zoomAt, type WalkView } from "../model/view";

@@ -1,5 +1,5 @@
 import { useEffect, useRef, useState } from "react";
-import { PPM_CEILING, SAMPLE_POINTS, SAMPLE_POINT_LABELS, type SamplePoint } from "../../../../server/contracts/sweeps";
+import { PPM_CEILING, SAMPLE_POINTS, SAMPLE_POINT_LABELS, type SamplePoint } from "#core/contracts/sweeps";
 
 export interface KeypadValue {
   ppm: number;

@@ -1,6 +1,6 @@
-import { SAMPLE_POINT_LABELS } from "../../../../server/contracts/sweeps";
+import { SAMPLE_POINT_LABELS } from "#core/contracts/sweeps";
 import { Dialog } from "../../../components/ui/dialog";
-import { COMPONENT_LABELS } from "../../../../server/contracts/findings";
+import { COMPONENT_LABELS } from "#core/contracts/findings";
 import type { LocalFinding, LocalReading } from "../model/local-types";
 
 function stateWord(r: LocalReading): string {

@@ -1,5 +1,5 @@
 import { useEffect, useMemo, useState } from "react";
-import { startWarnings } from "../../../../server/domain/sweeps/start-warnings";
+import { startWarnings } from "#core/domain/sweeps/start-warnings";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { QueryError } from "../../../components/ui/query-error";

@@ -1,5 +1,5 @@
-import type { Fixture } from "../../../../server/contracts/fixtures";
-import { FIXTURE_KIND_NAMES } from "../../../../server/contracts/fixture-kinds";
+import type { Fixture } from "#core/contracts/fixtures";
+import { FIXTURE_KIND_NAMES } from "#core/contracts/fixture-kinds";
 import type { LocalReading } from "../model/local-types";
 import { Button } from "../../../components/ui/button";
 import { Dialog } from "../../../components/ui/dialog";

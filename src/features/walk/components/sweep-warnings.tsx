@@ -1,5 +1,5 @@
 import { useState, type ReactNode } from "react";
-import type { SweepWarning } from "../../../../server/contracts/sweeps";
+import type { SweepWarning } from "#core/contracts/sweeps";
 
 /** The sync banner (children) with the sweep's warnings beside it, opened on a tap. */
 export function SweepWarnings({ warnings, children }: { warnings: readonly SweepWarning[]; children: ReactNode }) {

@@ -1,9 +1,9 @@
 import { useMemo, useRef, useState, type ReactNode } from "react";
 import { useNavigate } from "react-router";
-import type { CautionPlace } from "../../../../server/domain/safety/cautions";
-import { FIXTURE_KIND_NAMES } from "../../../../server/contracts/fixture-kinds";
+import type { CautionPlace } from "#core/domain/safety/cautions";
+import { FIXTURE_KIND_NAMES } from "#core/contracts/fixture-kinds";
 import { Alert } from "../../../components/ui/alert";
-import type { LengthPreference } from "../../../../server/domain/units/format-units";
+import type { LengthPreference } from "#core/domain/units/format-units";
 import { Spinner } from "../../../components/ui/spinner";
 import { countOf } from "../../../lib/format";
 import { usePlanPack, useStorePack } from "../api/store-pack";

@@ -1,5 +1,5 @@
 import { useCallback, useEffect, useRef, useState } from "react";
-import type { SamplePoint } from "../../../../server/contracts/sweeps";
+import type { SamplePoint } from "#core/contracts/sweeps";
 import { pullSweep } from "../api/remote-sweep";
 import type { LocalReading, LocalSweep, ReadingValues } from "../model/local-types";
 import { addReading, commitDrafts, getLocalSweep, keepDraftValues, removeReading, saveSweep, sweepReadings, updateReading } from "../model/reading-store";

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import type { Fixture } from "../../../../server/contracts/fixtures";
+import type { Fixture } from "#core/contracts/fixtures";
 import { fixtureAt, unsampledFixtures } from "./coverage";
 import { enteredRoom } from "./room-entry";
 

@@ -1,7 +1,7 @@
-import type { Fixture } from "../../../../server/contracts/fixtures";
-import { AIR_VOLUME_KINDS, POINT_KINDS } from "../../../../server/contracts/fixture-kinds";
-import { pointInPolygon } from "../../../../server/analysis/geometry/point-in-polygon";
-import { distanceToPolygonEdge } from "../../../../server/analysis/geometry/segments";
+import type { Fixture } from "#core/contracts/fixtures";
+import { AIR_VOLUME_KINDS, POINT_KINDS } from "#core/contracts/fixture-kinds";
+import { pointInPolygon } from "#core/analysis/geometry/point-in-polygon";
+import { distanceToPolygonEdge } from "#core/analysis/geometry/segments";
 
 /**
  * A fixture counts as sampled when a reading lies inside it or within this distance of its

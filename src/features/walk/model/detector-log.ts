@@ -1,5 +1,5 @@
 import Papa from "papaparse";
-import { PPM_CEILING, type SamplePoint } from "../../../../server/contracts/sweeps";
+import { PPM_CEILING, type SamplePoint } from "#core/contracts/sweeps";
 
 // A detector's own data log (CSV of time and ppm), read here so the user can map its columns and
 // line it up with the sweep's taps by a clock offset. Pure: the text comes from a File elsewhere.

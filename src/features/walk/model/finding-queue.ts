@@ -1,4 +1,4 @@
-import type { CreateFindingInput } from "../../../../server/contracts/findings";
+import type { CreateFindingInput } from "#core/contracts/findings";
 import type { LocalFinding } from "./local-types";
 import { RefusedError, type SyncTransport } from "./sync-transport";
 import type { WalkDb } from "./walk-db";

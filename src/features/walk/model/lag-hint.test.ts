@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
-import type { Fixture } from "../../../../server/contracts/fixtures";
-import { locatorInputSchema } from "../../../../server/contracts/locator-input";
-import { locate } from "../../../../server/analysis/locate";
-import { toLocatorPlan } from "../../../../server/domain/layout/to-locator-input";
+import type { Fixture } from "#core/contracts/fixtures";
+import { locatorInputSchema } from "#core/contracts/locator-input";
+import { locate } from "#core/analysis/locate";
+import { toLocatorPlan } from "#core/domain/layout/to-locator-input";
 import { latestLagHint, RECHECK_SPACING_M } from "./lag-hint";
 import { walkModelFor } from "./walk-model";
 

@@ -1,6 +1,6 @@
-import type { Route, Tap } from "../../../../server/analysis/lag/lag-correct";
-import { alongPolyline } from "../../../../server/analysis/lag/lag-correct";
-import { walkLag } from "../../../../server/analysis/lag/walk-lag";
+import type { Route, Tap } from "#core/analysis/lag/lag-correct";
+import { alongPolyline } from "#core/analysis/lag/lag-correct";
+import { walkLag } from "#core/analysis/lag/walk-lag";
 
 /**
  * Closer spacing for a re-check around where an alarm's air was sampled: about 0.6 m
@@ -31,7 +31,7 @@ interface PathReading {
   atLeast: boolean;
 }
 
-/** How the walk between taps is taken: the locator's route and pace (server/analysis/lag/walk-lag.ts). */
+/** How the walk between taps is taken: the locator's route and pace (core/analysis/lag/walk-lag.ts). */
 export interface WalkModel {
   route?: Route;
   walkSpeedMps?: number;

@@ -1,5 +1,5 @@
-import type { CreateFindingInput } from "../../../../server/contracts/findings";
-import type { SamplePoint, SweepWarning } from "../../../../server/contracts/sweeps";
+import type { CreateFindingInput } from "#core/contracts/findings";
+import type { SamplePoint, SweepWarning } from "#core/contracts/sweeps";
 
 /** A sweep as the device holds it; `onServer` turns true once the server has it. */
 export interface LocalSweep {

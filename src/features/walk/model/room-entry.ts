@@ -1,6 +1,6 @@
-import type { Fixture } from "../../../../server/contracts/fixtures";
-import { pointInPolygon } from "../../../../server/analysis/geometry/point-in-polygon";
-import type { CautionPlace } from "../../../../server/domain/safety/cautions";
+import type { Fixture } from "#core/contracts/fixtures";
+import { pointInPolygon } from "#core/analysis/geometry/point-in-polygon";
+import type { CautionPlace } from "#core/domain/safety/cautions";
 
 /** The walk-in or machine room a point lies in, with the caution place it stands for. */
 export function roomAt(fixtures: readonly Fixture[], x: number, y: number): { fixture: Fixture; place: CautionPlace } | null {

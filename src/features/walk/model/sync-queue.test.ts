@@ -1,7 +1,7 @@
 import "fake-indexeddb/auto";
 import { beforeEach, describe, expect, it } from "vitest";
-import type { CreateFindingInput } from "../../../../server/contracts/findings";
-import type { CreateSweepInput, ReadingEditInput, ReadingInput, ReadingsBatchResult } from "../../../../server/contracts/sweeps";
+import type { CreateFindingInput } from "#core/contracts/findings";
+import type { CreateSweepInput, ReadingEditInput, ReadingInput, ReadingsBatchResult } from "#core/contracts/sweeps";
 import type { LocalSweep } from "./local-types";
 import { discardFinding, queueFinding } from "./finding-queue";
 import { addReading, commitDrafts, keepDraftValues, queueCounts, removeReading, saveSweep, sweepReadings, updateReading } from "./reading-store";

@@ -1,5 +1,5 @@
-import type { ReadingInput } from "../../../../server/contracts/sweeps";
-import { READINGS_BATCH_MAX } from "../../../../server/contracts/sweeps";
+import type { ReadingInput } from "#core/contracts/sweeps";
+import { READINGS_BATCH_MAX } from "#core/contracts/sweeps";
 import { syncFindings } from "./finding-queue";
 import type { LocalReading, ReadingValues } from "./local-types";
 import { RefusedError, type SyncTransport } from "./sync-transport";

@@ -1,5 +1,5 @@
-import type { CreateFindingInput } from "../../../../server/contracts/findings";
-import type { CreateSweepInput, ReadingInput, ReadingEditInput, ReadingsBatchResult } from "../../../../server/contracts/sweeps";
+import type { CreateFindingInput } from "#core/contracts/findings";
+import type { CreateSweepInput, ReadingInput, ReadingEditInput, ReadingsBatchResult } from "#core/contracts/sweeps";
 
 /** What the sync queue needs from the server (the real one is api/sync-api.ts). */
 export interface SyncTransport {

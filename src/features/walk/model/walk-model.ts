@@ -1,7 +1,7 @@
-import type { Fixture } from "../../../../server/contracts/fixtures";
-import { DEFAULT_LOCATOR_OPTIONS } from "../../../../server/analysis/locator/locator-options";
-import { planWalkRoute } from "../../../../server/analysis/lag/walk-lag";
-import { toLocatorPlan } from "../../../../server/domain/layout/to-locator-input";
+import type { Fixture } from "#core/contracts/fixtures";
+import { DEFAULT_LOCATOR_OPTIONS } from "#core/analysis/locator/locator-options";
+import { planWalkRoute } from "#core/analysis/lag/walk-lag";
+import { toLocatorPlan } from "#core/domain/layout/to-locator-input";
 import type { WalkModel } from "./lag-hint";
 
 /**

@@ -1,11 +1,11 @@
 import { useEffect, useRef, useState, type FormEvent } from "react";
-import type { LengthPreference } from "../../../../../server/domain/units/format-units";
-import { formatLength } from "../../../../../server/domain/units/format-units";
-import { toMetres } from "../../../../../server/analysis/geometry/units";
+import type { LengthPreference } from "#core/domain/units/format-units";
+import { formatLength } from "#core/domain/units/format-units";
+import { toMetres } from "#core/analysis/geometry/units";
 import { Button } from "../../../../components/ui/button";
 import { Select } from "../../../../components/ui/select";
 import { TextField } from "../../../../components/ui/text-field";
-import type { Vec } from "../../../../../server/analysis/geometry/types";
+import type { Vec } from "#core/analysis/geometry/types";
 import { readLengthEntry } from "../../model/length-entry";
 
 const DIRECTIONS: Record<string, { label: string; vec: Vec }> = {

@@ -1,6 +1,6 @@
 import { useId } from "react";
-import { FIXTURE_FAMILY, FIXTURE_FAMILY_NAMES, FIXTURE_KIND_NAMES, FIXTURE_KINDS, isPointKind, type FixtureFamily, type FixtureKind } from "../../../../../server/contracts/fixture-kinds";
-import type { LengthPreference } from "../../../../../server/domain/units/format-units";
+import { FIXTURE_FAMILY, FIXTURE_FAMILY_NAMES, FIXTURE_KIND_NAMES, FIXTURE_KINDS, isPointKind, type FixtureFamily, type FixtureKind } from "#core/contracts/fixture-kinds";
+import type { LengthPreference } from "#core/domain/units/format-units";
 import { Button } from "../../../../components/ui/button";
 import type { ActiveTool } from "../../model/tools/active-tool";
 

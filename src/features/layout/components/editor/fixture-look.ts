@@ -9,7 +9,7 @@
  * Hues come from the Okabe–Ito palette, chosen to stay distinct under the common forms of
  * colour-vision deficiency (Okabe & Ito, "Color Universal Design", 2008).
  */
-import type { FixtureKind } from "../../../../../server/contracts/fixture-kinds";
+import type { FixtureKind } from "#core/contracts/fixture-kinds";
 
 export const OKABE_ITO = {
   blue: "#0072B2",

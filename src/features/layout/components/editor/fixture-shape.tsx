@@ -1,8 +1,8 @@
 import { memo } from "react";
 import type Konva from "konva";
 import { Circle, Group, Line, Rect, Text } from "react-konva";
-import type { Fixture } from "../../../../../server/contracts/fixtures";
-import { polygonBounds } from "../../../../../server/analysis/geometry/bounds";
+import type { Fixture } from "#core/contracts/fixtures";
+import { polygonBounds } from "#core/analysis/geometry/bounds";
 import { fixtureCentroid } from "../../model/fixture-geometry";
 import { doorGap, doorTicks, wallWithDoorGap } from "../../model/fixture-drawing";
 import { lookOf, PATTERN_SCALE, patternTile, POINT_COLOURS, SELECTION_STROKE } from "./fixture-look";

@@ -1,6 +1,6 @@
 import { memo, useMemo, useState } from "react";
-import { FIXTURE_FAMILY_NAMES } from "../../../../../server/contracts/fixture-kinds";
-import { formatLength, type LengthPreference } from "../../../../../server/domain/units/format-units";
+import { FIXTURE_FAMILY_NAMES } from "#core/contracts/fixture-kinds";
+import { formatLength, type LengthPreference } from "#core/domain/units/format-units";
 import { fixtureRows, type RowKey } from "../../model/fixture-table";
 import type { Scene } from "../../model/scene";
 import type { SystemOption } from "./properties-panel";

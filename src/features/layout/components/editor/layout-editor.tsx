@@ -1,7 +1,7 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
-import type { FixtureKind } from "../../../../../server/contracts/fixture-kinds";
-import type { FixturesResponse, Plan } from "../../../../../server/contracts/plans";
-import type { LengthPreference } from "../../../../../server/domain/units/format-units";
+import type { FixtureKind } from "#core/contracts/fixture-kinds";
+import type { FixturesResponse, Plan } from "#core/contracts/plans";
+import type { LengthPreference } from "#core/domain/units/format-units";
 import { Alert } from "../../../../components/ui/alert";
 import { Button } from "../../../../components/ui/button";
 import { Spinner } from "../../../../components/ui/spinner";

@@ -1,9 +1,9 @@
 import { useEffect, useState } from "react";
-import { FIXTURE_FAMILY, FIXTURE_FAMILY_NAMES, FIXTURE_KIND_NAMES, FIXTURE_KINDS, isPointKind, type FixtureKind } from "../../../../../server/contracts/fixture-kinds";
-import type { Fixture, RoomDoor } from "../../../../../server/contracts/fixtures";
-import { LABEL_MAX, NOTE_MAX } from "../../../../../server/contracts/fixtures";
-import { formatLength, type LengthPreference } from "../../../../../server/domain/units/format-units";
-import { toMetres } from "../../../../../server/analysis/geometry/units";
+import { FIXTURE_FAMILY, FIXTURE_FAMILY_NAMES, FIXTURE_KIND_NAMES, FIXTURE_KINDS, isPointKind, type FixtureKind } from "#core/contracts/fixture-kinds";
+import type { Fixture, RoomDoor } from "#core/contracts/fixtures";
+import { LABEL_MAX, NOTE_MAX } from "#core/contracts/fixtures";
+import { formatLength, type LengthPreference } from "#core/domain/units/format-units";
+import { toMetres } from "#core/analysis/geometry/units";
 import { Checkbox } from "../../../../components/ui/checkbox";
 import { Select } from "../../../../components/ui/select";
 import { TextField } from "../../../../components/ui/text-field";

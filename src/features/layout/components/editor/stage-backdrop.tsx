@@ -1,6 +1,6 @@
 import { memo } from "react";
 import { Group, Image as KonvaImage, Layer, Line, Rect } from "react-konva";
-import type { PlanBounds } from "../../../../../server/contracts/fixtures";
+import type { PlanBounds } from "#core/contracts/fixtures";
 
 export interface Backdrop {
   /** The plan's display image, or null for a blank plan. */

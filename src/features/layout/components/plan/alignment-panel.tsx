@@ -1,5 +1,5 @@
 import { useState } from "react";
-import type { Plan } from "../../../../../server/contracts/plans";
+import type { Plan } from "#core/contracts/plans";
 import { Alert } from "../../../../components/ui/alert";
 import { Button } from "../../../../components/ui/button";
 import { Checkbox } from "../../../../components/ui/checkbox";

@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState, type FormEvent } from "react";
-import type { Plan } from "../../../../../server/contracts/plans";
-import { formatLength, type LengthPreference } from "../../../../../server/domain/units/format-units";
+import type { Plan } from "#core/contracts/plans";
+import { formatLength, type LengthPreference } from "#core/domain/units/format-units";
 import { Alert } from "../../../../components/ui/alert";
 import { Button } from "../../../../components/ui/button";
 import { TextField } from "../../../../components/ui/text-field";

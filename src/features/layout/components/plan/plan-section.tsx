@@ -1,7 +1,7 @@
 import { useState } from "react";
 import { Link } from "react-router";
-import type { Plan } from "../../../../../server/contracts/plans";
-import { formatLength, type LengthPreference } from "../../../../../server/domain/units/format-units";
+import type { Plan } from "#core/contracts/plans";
+import { formatLength, type LengthPreference } from "#core/domain/units/format-units";
 import { Alert } from "../../../../components/ui/alert";
 import { Button } from "../../../../components/ui/button";
 import { EmptyState } from "../../../../components/ui/empty-state";

@@ -1,6 +1,6 @@
 import { useId, useState, type FormEvent } from "react";
-import type { Plan } from "../../../../../server/contracts/plans";
-import type { LengthPreference } from "../../../../../server/domain/units/format-units";
+import type { Plan } from "#core/contracts/plans";
+import type { LengthPreference } from "#core/domain/units/format-units";
 import { Alert } from "../../../../components/ui/alert";
 import { Button } from "../../../../components/ui/button";
 import { TextField } from "../../../../components/ui/text-field";
@@ -9,7 +9,7 @@ import { formErrorMessage, serverFieldErrors } from "../../../../lib/form-errors
 import { useCreateBlankPlan } from "../../api/create-blank-plan";
 import { PLAN_IMAGE_TYPES, useUploadPlan } from "../../api/upload-plan";
 import { readLengthEntry } from "../../model/length-entry";
-import { toMetres } from "../../../../../server/analysis/geometry/units";
+import { toMetres } from "#core/analysis/geometry/units";
 
 /** Upload a drawing (PNG or JPEG), or start from a blank plan of a given size. */
 export function PlanUploadForm({ storeId, hasPlan, preference, onDone }: { storeId: string; hasPlan: boolean; preference: LengthPreference; onDone: (plan: Plan) => void }) {

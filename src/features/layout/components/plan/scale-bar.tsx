@@ -1,4 +1,4 @@
-import type { LengthPreference } from "../../../../../server/domain/units/format-units";
+import type { LengthPreference } from "#core/domain/units/format-units";
 import { pickScaleBar } from "../../model/calibration";
 
 /**

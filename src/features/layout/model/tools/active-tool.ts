@@ -2,7 +2,7 @@
  * The tool in the lead tech's hand, and one entry point that feeds it an event. Drawing tools
  * carry the kind they draw; "pan" only moves the view and never touches the scene.
  */
-import { isPointKind, type FixtureKind, type PointKind, type PolygonKind } from "../../../../../server/contracts/fixture-kinds";
+import { isPointKind, type FixtureKind, type PointKind, type PolygonKind } from "#core/contracts/fixture-kinds";
 import { pointTool, POINT_IDLE, type PointToolState } from "./point-tool";
 import { polygonTool, POLYGON_IDLE, type PolygonToolState } from "./polygon-tool";
 import { rectangleTool, RECTANGLE_IDLE, type RectangleToolState } from "./rectangle-tool";

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import type { PolygonFixture } from "../../../../../server/contracts/fixtures";
+import type { PolygonFixture } from "#core/contracts/fixtures";
 import { applyActions } from "../actions";
 import { planPoint } from "../coordinates";
 import { createScene, sceneFixtures } from "../scene";

@@ -1,5 +1,5 @@
 /** Point tool: each press places one point fixture (line-set drop, valve, coil) at the snapped position. */
-import type { PointKind } from "../../../../../server/contracts/fixture-kinds";
+import type { PointKind } from "#core/contracts/fixture-kinds";
 import { add } from "../actions";
 import { newFixture } from "../new-fixture";
 import { result, type ToolContext, type ToolEvent, type ToolResult } from "./tool";

@@ -3,8 +3,8 @@
  * a double-click (double-tap) or Enter (with at least 3 vertices and no crossing edges). Backspace removes
  * the last vertex; Escape cancels.
  */
-import { isSelfIntersecting } from "../../../../../server/analysis/geometry/segments";
-import type { FixtureKind } from "../../../../../server/contracts/fixture-kinds";
+import { isSelfIntersecting } from "#core/analysis/geometry/segments";
+import type { FixtureKind } from "#core/contracts/fixture-kinds";
 import { add } from "../actions";
 import type { PlanPoint } from "../coordinates";
 import { newFixture } from "../new-fixture";

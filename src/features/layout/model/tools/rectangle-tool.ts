@@ -3,7 +3,7 @@
  * release, adding one axis-aligned fixture of `kind`. Escape cancels; a click without a drag
  * adds nothing.
  */
-import type { FixtureKind } from "../../../../../server/contracts/fixture-kinds";
+import type { FixtureKind } from "#core/contracts/fixture-kinds";
 import { add } from "../actions";
 import { planPoint, type PlanPoint } from "../coordinates";
 import { newFixture } from "../new-fixture";

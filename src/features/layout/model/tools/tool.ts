@@ -3,7 +3,7 @@
  * and key events given in plan metres (the view converts from stage pixels first) that
  * returns its next state, the scene actions to record, and a preview for the view to draw.
  */
-import type { Bounds } from "../../../../../server/analysis/geometry/types";
+import type { Bounds } from "#core/analysis/geometry/types";
 import type { SceneAction } from "../actions";
 import type { PlanPoint } from "../coordinates";
 import type { Scene } from "../scene";

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import type { PolygonFixture, RoomFixture } from "../../../../../server/contracts/fixtures";
+import type { PolygonFixture, RoomFixture } from "#core/contracts/fixtures";
 import { applyActions } from "../actions";
 import { createScene, type Scene } from "../scene";
 import { room, uuid } from "../test-builders";

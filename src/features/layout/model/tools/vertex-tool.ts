@@ -4,8 +4,8 @@
  * outline keeps at least 3). An edit whose edges would cross is refused with a reason.
  * Escape cancels a drag. Each finished edit is one set-vertices action.
  */
-import { isSelfIntersecting } from "../../../../../server/analysis/geometry/segments";
-import type { PolygonFixture, Vertex } from "../../../../../server/contracts/fixtures";
+import { isSelfIntersecting } from "#core/analysis/geometry/segments";
+import type { PolygonFixture, Vertex } from "#core/contracts/fixtures";
 import { setVertices } from "../actions";
 import { planPoint, type PlanPoint } from "../coordinates";
 import { distance, result, type ToolContext, type ToolEvent, type ToolResult } from "./tool";

@@ -3,7 +3,7 @@ import { z } from "zod";
 /**
  * The shape of a rule profile on the wire (a company's custom profile, edited in Company settings).
  * Every value carries its source: a citation, or who set it and why ("company policy, 2026 audit").
- * The server also runs the domain check (server/domain/compliance/custom-profile.ts) before storing.
+ * The server also runs the domain check (core/domain/compliance/custom-profile.ts) before storing.
  */
 
 const APPLIANCES = ["commercial-refrigeration", "industrial-process", "comfort-cooling"] as const;

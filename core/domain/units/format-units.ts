@@ -2,7 +2,7 @@ import { formatFixed } from "../numbers/round-half-up";
 import { formatFeetInches, type InchDenominator } from "./length";
 import { kgToPounds } from "./mass";
 
-/** Length preference: metres, or feet and inches (the same ids as server/contracts/units.ts). Stored in metres. */
+/** Length preference: metres, or feet and inches (the same ids as core/contracts/units.ts). Stored in metres. */
 export type LengthPreference = "m" | "ft-in";
 /** Mass preference. Everything is stored in kg. */
 export type MassPreference = "kg" | "lb";
