@@ -13,7 +13,21 @@ function run(content: unknown, ...flags: string[]) {
 }
 
 const input = {
-  plan: { width: 12, height: 6, obstacles: [{ id: "w1", polygon: [[0, 0], [12, 0], [12, 0.2], [0, 0.2]] }] },
+  plan: {
+    width: 12,
+    height: 6,
+    obstacles: [
+      {
+        id: "w1",
+        polygon: [
+          [0, 0],
+          [12, 0],
+          [12, 0.2],
+          [0, 0.2],
+        ],
+      },
+    ],
+  },
   instrument: { transportDelayS: 2, timeConstantS: 1, alarmPpm: 2 },
   readings: Array.from({ length: 10 }, (_, k) => ({ x: 1 + k, y: 3, t: k, ppm: k === 6 ? 1 : 0 })),
 };

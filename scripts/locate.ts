@@ -41,7 +41,13 @@ try {
     const f = result.field;
     // NaN (unknown) is not JSON: unknown cells are written as null
     const num = (v: number) => (Number.isNaN(v) ? null : Math.round(v * 100) / 100);
-    out.field = { width: f.width, height: f.height, cellSize: f.cellSize, values: Array.from(f.values, num), confidence: Array.from(f.confidence, num) };
+    out.field = {
+      width: f.width,
+      height: f.height,
+      cellSize: f.cellSize,
+      values: Array.from(f.values, num),
+      confidence: Array.from(f.confidence, num),
+    };
   }
   process.stdout.write(JSON.stringify(out) + "\n");
 } catch (e) {

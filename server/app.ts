@@ -51,7 +51,12 @@ export function createApp(ctx: AppContext): Express {
   app.use(
     session({
       name: "plumeline.sid",
-      store: new PgStore({ pool: ctx.pool, tableName: "session", createTableIfMissing: false, pruneSessionInterval: 15 * 60 }),
+      store: new PgStore({
+        pool: ctx.pool,
+        tableName: "session",
+        createTableIfMissing: false,
+        pruneSessionInterval: 15 * 60,
+      }),
       secret: ctx.config.sessionSecret,
       resave: false,
       saveUninitialized: false,

@@ -7,10 +7,17 @@ const envSchema = z.object({
   PORT: z.coerce.number().int().min(0).max(65535).default(3000),
   HOST: z.string().default("127.0.0.1"),
   APP_URL: z.string().optional(),
-  SESSION_SECRET: z.string().min(16, "SESSION_SECRET must be at least 16 characters").default("plumeline-local-development-secret"),
+  SESSION_SECRET: z
+    .string()
+    .min(16, "SESSION_SECRET must be at least 16 characters")
+    .default("plumeline-local-development-secret"),
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(12),
   LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
-  LOGIN_RATE_WINDOW_MS: z.coerce.number().int().min(1000).default(15 * 60 * 1000),
+  LOGIN_RATE_WINDOW_MS: z.coerce
+    .number()
+    .int()
+    .min(1000)
+    .default(15 * 60 * 1000),
   // Without SMTP_HOST the server starts its own fake SMTP server and keeps what it catches (the Outbox).
   SMTP_HOST: z.string().optional(),
   SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
@@ -21,7 +28,11 @@ const envSchema = z.object({
   FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
   UPLOADS_DIR: z.string().default("uploads"),
   // Plan images: the most pixels a header may declare before it is refused undecoded (decompression bombs).
-  PLAN_MAX_MEGAPIXELS: z.coerce.number().positive("PLAN_MAX_MEGAPIXELS must be more than 0").max(200, "PLAN_MAX_MEGAPIXELS must be at most 200").default(40),
+  PLAN_MAX_MEGAPIXELS: z.coerce
+    .number()
+    .positive("PLAN_MAX_MEGAPIXELS must be more than 0")
+    .max(200, "PLAN_MAX_MEGAPIXELS must be at most 200")
+    .default(40),
   LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
   SEED_DEMO: z.enum(["true", "false"]).default("true"),
 });

@@ -24,7 +24,9 @@ const server = createApp(ctx).listen(env.PORT, env.HOST, () => {
   const lines = [
     "",
     `  Plumeline is running at ${url}`,
-    runtime.fakeSmtp ? `  Mail goes to the built-in test mail server (port ${runtime.fakeSmtp.port}); read it on the Outbox screen.` : "",
+    runtime.fakeSmtp
+      ? `  Mail goes to the built-in test mail server (port ${runtime.fakeSmtp.port}); read it on the Outbox screen.`
+      : "",
     "",
     "  Demo sign-ins (password for all: " + DEMO_SIGN_INS.password + "):",
     ...DEMO_SIGN_INS.people.map((p) => `    ${p.role.padEnd(14)} ${p.email}`),

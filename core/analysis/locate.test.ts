@@ -6,15 +6,22 @@ import { locate } from "./locate";
 // over the walking distance round the gondola end, with a sensor lag applied to the walk), so a pass
 // here is not the fit recovering its own model (locator-methods §5, pitfall 1).
 
-const rect = (x0: number, y0: number, x1: number, y1: number): [number, number][] => [[x0, y0], [x1, y0], [x1, y1], [x0, y1]];
+const rect = (x0: number, y0: number, x1: number, y1: number): [number, number][] => [
+  [x0, y0],
+  [x1, y0],
+  [x1, y1],
+  [x0, y1],
+];
 const GONDOLA = rect(4, 5.8, 16, 6.2);
 
 /** Walking distance from p to q round the gondola (via its nearer end when the straight line crosses it). */
 function aroundGondola(p: [number, number], q: [number, number]): number {
-  const crosses = (p[1] - 6) * (q[1] - 6) < 0 && (() => {
-    const x = p[0] + ((6 - p[1]) / (q[1] - p[1])) * (q[0] - p[0]);
-    return x > 3.9 && x < 16.1;
-  })();
+  const crosses =
+    (p[1] - 6) * (q[1] - 6) < 0 &&
+    (() => {
+      const x = p[0] + ((6 - p[1]) / (q[1] - p[1])) * (q[0] - p[0]);
+      return x > 3.9 && x < 16.1;
+    })();
   if (!crosses) return Math.hypot(p[0] - q[0], p[1] - q[1]);
   const via = (e: [number, number]) => Math.hypot(p[0] - e[0], p[1] - e[1]) + Math.hypot(q[0] - e[0], q[1] - e[1]);
   return Math.min(via([3.9, 6]), via([16.1, 6]));
@@ -22,7 +29,14 @@ function aroundGondola(p: [number, number], q: [number, number]): number {
 
 /** East along the north aisle, back along the case face, round the west end and east along the south aisle; 1 m/s, a tap every 1.3 m. */
 function walk(): { x: number; y: number; t: number }[] {
-  const legs: [number, number][] = [[1, 3.5], [18, 3.5], [18, 4.6], [1, 4.6], [1, 8.5], [18, 8.5]];
+  const legs: [number, number][] = [
+    [1, 3.5],
+    [18, 3.5],
+    [18, 4.6],
+    [1, 4.6],
+    [1, 8.5],
+    [18, 8.5],
+  ];
   const out: { x: number; y: number; t: number }[] = [];
   let t = 0;
   for (let k = 1; k < legs.length; k++) {
@@ -40,12 +54,16 @@ function walk(): { x: number; y: number; t: number }[] {
 const D = 3;
 const TAU = 1;
 
-function store(concentration: (x: number, y: number) => number, zones: LocatorInputRaw["plan"]["backgroundZones"] = []): LocatorInputRaw {
+function store(
+  concentration: (x: number, y: number) => number,
+  zones: LocatorInputRaw["plan"]["backgroundZones"] = [],
+): LocatorInputRaw {
   const taps = walk();
   // the reading at a tap is the air sampled D + τ earlier on the walk (taps are 1.3 s apart, so interpolate)
   const readings = taps.map((tap) => {
     const s = tap.t - D - TAU;
-    let x = taps[0].x, y = taps[0].y;
+    let x = taps[0].x,
+      y = taps[0].y;
     for (let k = 1; k < taps.length; k++) {
       if (taps[k].t >= s && taps[k - 1].t <= s) {
         const f = (s - taps[k - 1].t) / (taps[k].t - taps[k - 1].t);
@@ -64,7 +82,10 @@ function store(concentration: (x: number, y: number) => number, zones: LocatorIn
         { id: "c1", kind: "open-case", polygon: rect(4, 4.8, 16, 5.8), fans: false },
         { id: "c2", kind: "island-case", polygon: rect(4, 6.2, 16, 7.2), fans: false },
       ],
-      riskPoints: [{ id: "ls1", kind: "line-set", x: 9.5, y: 5.2 }, { id: "v1", kind: "valve", x: 14, y: 6.8 }],
+      riskPoints: [
+        { id: "ls1", kind: "line-set", x: 9.5, y: 5.2 },
+        { id: "v1", kind: "valve", x: 14, y: 6.8 },
+      ],
       backgroundZones: zones,
     },
     instrument: { transportDelayS: D, timeConstantS: TAU, alarmPpm: 2 },
@@ -125,7 +146,18 @@ describe("locate on small fixed stores", () => {
     // fittings (leaks are found at joints and coils: common practice, no published source).
     const coil = { id: "coil1", kind: "coil" as const, x: 7, y: 1.35 };
     const lineSet = { id: "ls1", kind: "line-set" as const, x: 4.3, y: 1.3 };
-    const route: [number, number][] = [[1, 7], [7, 7], [7, 5], [4.5, 5], [4.5, 1.5], [9.5, 1.5], [9.5, 5], [7, 5], [7, 7], [13, 7]];
+    const route: [number, number][] = [
+      [1, 7],
+      [7, 7],
+      [7, 5],
+      [4.5, 5],
+      [4.5, 1.5],
+      [9.5, 1.5],
+      [9.5, 5],
+      [7, 5],
+      [7, 7],
+      [13, 7],
+    ];
     const taps: { x: number; y: number; t: number }[] = [];
     let t = 0;
     for (let k = 1; k < route.length; k++) {
@@ -182,6 +214,8 @@ describe("locate on small fixed stores", () => {
   });
 
   it("refuses a cell size whose grid would exceed the memory budget", () => {
-    expect(() => locate(parseLocatorInput(store(() => 0)), { cellSize: 0.01 })).toThrow(/plan: a 20 m x 12 m plan needs 2400000 cells/);
+    expect(() => locate(parseLocatorInput(store(() => 0)), { cellSize: 0.01 })).toThrow(
+      /plan: a 20 m x 12 m plan needs 2400000 cells/,
+    );
   });
 });

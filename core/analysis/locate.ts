@@ -31,7 +31,8 @@ export type { LocatorOptions } from "./locator/locator-options";
 export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {}): LocatorResult {
   const o: LocatorOptions = { ...DEFAULT_LOCATOR_OPTIONS, ...options };
   const { plan, instrument, readings } = input;
-  if (!(o.cellSize > 0)) throw new LocatorInputError([`options.cellSize: must be a positive number of metres, got ${o.cellSize}`]);
+  if (!(o.cellSize > 0))
+    throw new LocatorInputError([`options.cellSize: must be a positive number of metres, got ${o.cellSize}`]);
   const cellsNeeded = gridCellCount(plan.width, plan.height, o.cellSize);
   if (cellsNeeded > MAX_GRID_CELLS) {
     throw new LocatorInputError([
@@ -40,17 +41,35 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   }
   if (readings.length === 0) throw new LocatorInputError(["readings: must not be empty"]);
 
-  const grid = createPlanGrid(plan.width, plan.height, o.cellSize, plan.obstacles.map((b) => b.polygon));
+  const grid = createPlanGrid(
+    plan.width,
+    plan.height,
+    o.cellSize,
+    plan.obstacles.map((b) => b.polygon),
+  );
   // the far-field part of the kernel is the fans' stirring; in still air the drift carries the gas
-  const far = o.farShare > 0 && (!o.farWithFansOnly || casesRunFans(plan.fixtures)) ? { lengthM: o.farScreeningLengthM, share: o.farShare } : null;
+  const far =
+    o.farShare > 0 && (!o.farWithFansOnly || casesRunFans(plan.fixtures))
+      ? { lengthM: o.farScreeningLengthM, share: o.farShare }
+      : null;
   const kernel = createSourceKernel(o.screeningLengthM, o.nearCutoffM, o.truncationM, far);
   // a benign-source zone is a spread-out source whose gas drifts far, so it gets a longer kernel
-  const zoneKernel = createSourceKernel(o.zoneScreeningLengthM, o.nearCutoffM, 2 * o.zoneScreeningLengthM + o.zoneMarginM);
+  const zoneKernel = createSourceKernel(
+    o.zoneScreeningLengthM,
+    o.nearCutoffM,
+    2 * o.zoneScreeningLengthM + o.zoneMarginM,
+  );
   const n = readings.length;
 
   // 1. lag correction along the walked route
   // (the same walkLag the Walk screen's lag hint calls, over the same grid route)
-  const lagged = walkLag(readings, instrument.transportDelayS, instrument.timeConstantS, gridRoute(grid), o.walkSpeedMps);
+  const lagged = walkLag(
+    readings,
+    instrument.transportDelayS,
+    instrument.timeConstantS,
+    gridRoute(grid),
+    o.walkSpeedMps,
+  );
   const xs = new Float64Array(n);
   const ys = new Float64Array(n);
   const y = new Float64Array(n);
@@ -91,7 +110,9 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   // zone is strongest at it, so a zone that reads nothing where it is cannot be what raised readings elsewhere.
   const typical = medianOf(y);
   const zoneActive = plan.backgroundZones.map(
-    (_, z) => zoneFit.q[z] > 0.5 && (!o.zoneSeenAtZone || zoneReadingDist[z].some((d, i) => d <= o.zoneMarginM && y[i] >= typical + o.elevatedPpm)),
+    (_, z) =>
+      zoneFit.q[z] > 0.5 &&
+      (!o.zoneSeenAtZone || zoneReadingDist[z].some((d, i) => d <= o.zoneMarginM && y[i] >= typical + o.elevatedPpm)),
   );
   const zoneDist = new Float32Array(cells).fill(Infinity); // to the nearest active zone
   const zoneNearest = new Int32Array(cells).fill(-1);
@@ -142,7 +163,13 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   const allowed = new Uint8Array(cells);
   for (let c = 0; c < cells; c++) {
     allowed[c] =
-      !grid.blocked[c] && !insideZone[c] && zoneDist[c] > o.zoneMarginM && fields.nearestReading[c] <= o.maxReachM && (!onEquipment || onEquipment[c]) ? 1 : 0;
+      !grid.blocked[c] &&
+      !insideZone[c] &&
+      zoneDist[c] > o.zoneMarginM &&
+      fields.nearestReading[c] <= o.maxReachM &&
+      (!onEquipment || onEquipment[c])
+        ? 1
+        : 0;
   }
   const supportThreshold = kernel.at(o.supportRadiusM);
   const support = (column: Float64Array, b: number, residual: Float64Array) => {
@@ -159,12 +186,22 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
       if (zoneFit.q[z] > 0) for (let i = 0; i < n; i++) residual0[i] -= zoneFit.q[z] * col[i];
     });
     chooseLocalDrift(fields, grid.width, grid.cellSize, w, residual0, allowed, {
-      screeningLengthM: o.screeningLengthM, far, nearCutoffM: o.nearCutoffM, truncationM: o.truncationM, strengths: o.driftStrengths, penalty: o.driftPenalty,
+      screeningLengthM: o.screeningLengthM,
+      far,
+      nearCutoffM: o.nearCutoffM,
+      truncationM: o.truncationM,
+      strengths: o.driftStrengths,
+      penalty: o.driftPenalty,
     });
   }
   const prior = o.riskPointLogOdds > 0 ? riskPointPrior(grid, plan, o.riskPointLogOdds) : null;
   const greedy = findSources({
-    fields, y, w, censored, nuisance, allowed,
+    fields,
+    y,
+    w,
+    censored,
+    nuisance,
+    allowed,
     gridWidth: grid.width,
     cellSize: grid.cellSize,
     maxLeaks: o.maxLeaks,
@@ -196,20 +233,31 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   const roomOf = new Int32Array(cells).fill(-1);
   if (o.mixedRoomMode) {
     plan.fixtures.forEach((f, r) => {
-      if (f.fans && (f.kind === "walk-in" || f.kind === "machine-room")) for (const k of cellsInside(grid, f.polygon)) roomOf[k] = r;
+      if (f.fans && (f.kind === "walk-in" || f.kind === "machine-room"))
+        for (const k of cellsInside(grid, f.polygon)) roomOf[k] = r;
     });
   }
   const taken: number[] = [];
-  const farFromTaken = (k: number, minM: number) => taken.every((t) => cellDistance(t, k, grid.width) * grid.cellSize >= minM);
+  const farFromTaken = (k: number, minM: number) =>
+    taken.every((t) => cellDistance(t, k, grid.width) * grid.cellSize >= minM);
   const roomBest = (s: FoundSource, room: number, riskOnly = false): number => {
     const surface = o.ownSurface ? s.surface : greedy.firstScan.delta;
     const T = o.refineInflation * s2;
     let best = -1;
     let bestScore = -Infinity;
     for (const k of cellsInside(grid, plan.fixtures[room].polygon)) {
-      if (!allowed[k] || !(surface[k] > 0) || !farFromTaken(k, riskOnly ? ROOM_RISK_SPACING_M : o.separationM) || (riskOnly && !(prior && prior[k] > 0))) continue;
+      if (
+        !allowed[k] ||
+        !(surface[k] > 0) ||
+        !farFromTaken(k, riskOnly ? ROOM_RISK_SPACING_M : o.separationM) ||
+        (riskOnly && !(prior && prior[k] > 0))
+      )
+        continue;
       const score = surface[k] / (2 * T) + (prior ? prior[k] : 0);
-      if (score > bestScore) { bestScore = score; best = k; }
+      if (score > bestScore) {
+        bestScore = score;
+        best = k;
+      }
     }
     return best;
   };
@@ -217,7 +265,16 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   for (const s of addMirrorSpot(greedy.sources)) {
     const room = roomOf[s.cell];
     if (room < 0) {
-      const cell = refineCell(o.ownSurface ? s.surface : greedy.firstScan.delta, allowed, s.cell, grid.width, grid.cellSize, o.refineRadiusM, o.refineInflation * s2, o.refinePrior ? prior : null);
+      const cell = refineCell(
+        o.ownSurface ? s.surface : greedy.firstScan.delta,
+        allowed,
+        s.cell,
+        grid.width,
+        grid.cellSize,
+        o.refineRadiusM,
+        o.refineInflation * s2,
+        o.refinePrior ? prior : null,
+      );
       sources.push(cell === s.cell ? s : { ...s, cell, column: kernelColumn(fields, cell, n) });
       taken.push(cell);
       continue;
@@ -232,22 +289,40 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     if (next < 0) next = roomBest(s, room);
     if (next >= 0) {
       const surface = o.ownSurface ? s.surface : greedy.firstScan.delta;
-      sources.push({ cell: next, delta: surface[next], column: kernelColumn(fields, next, n), alternate: true, q: s.q, surface });
+      sources.push({
+        cell: next,
+        delta: surface[next],
+        column: kernelColumn(fields, next, n),
+        alternate: true,
+        q: s.q,
+        surface,
+      });
       taken.push(next);
     }
   }
   sources.splice(o.maxCandidates);
   const topQ = Math.max(sources[0]?.q ?? 0, 1e-12);
   const gPerYearPerQ =
-    (wellMixedEmission(ppmToMgPerM3(1, o.molarMassGPerMol), o.airChangesPerH, kernelArea(kernel) * o.mixingHeightM) * HOURS_PER_YEAR) / 1000;
+    (wellMixedEmission(ppmToMgPerM3(1, o.molarMassGPerMol), o.airChangesPerH, kernelArea(kernel) * o.mixingHeightM) *
+      HOURS_PER_YEAR) /
+    1000;
   const candidates: Candidate[] = [];
   let oneSidedTop = false;
   sources.forEach((s, rank) => {
     const [x, y0] = cellCentre(grid, s.cell);
     const sup = support(s.column, greedy.fit.b, y);
-    const side = oneSidedPass(sup.map((i) => xs[i]), sup.map((i) => ys[i]), x, y0);
+    const side = oneSidedPass(
+      sup.map((i) => xs[i]),
+      sup.map((i) => ys[i]),
+      x,
+      y0,
+    );
     if (rank === 0) oneSidedTop = side.oneSided;
-    const radius = Math.max(o.minRadiusM, o.radiusScale * misfitRadius(o.ownSurface ? s.surface : greedy.firstScan.delta, s.cell, 5.99 * s2, grid.width, grid.cellSize));
+    const radius = Math.max(
+      o.minRadiusM,
+      o.radiusScale *
+        misfitRadius(o.ownSurface ? s.surface : greedy.firstScan.delta, s.cell, 5.99 * s2, grid.width, grid.cellSize),
+    );
     const fixture = nearestFixture(plan.fixtures, x, y0);
     const riskPoint = nearestRiskPoint(plan.riskPoints, x, y0);
     const facts: CandidateFacts = {
@@ -283,14 +358,25 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     const top = found[0];
     const [x, y0] = cellCentre(grid, top.cell);
     const sup = support(top.column, greedy.fit.b, y);
-    const side = oneSidedPass(sup.map((i) => xs[i]), sup.map((i) => ys[i]), x, y0);
+    const side = oneSidedPass(
+      sup.map((i) => xs[i]),
+      sup.map((i) => ys[i]),
+      x,
+      y0,
+    );
     if (!side.oneSided) return found;
     const [mx, my] = side.mirror;
     if (mx < 0 || my < 0 || mx > plan.width || my > plan.height) return found;
     const mc = cellIndexOf(grid, mx, my);
-    if (!allowed[mc] || found.some((f) => cellDistance(f.cell, mc, grid.width) * grid.cellSize < o.separationM)) return found;
+    if (!allowed[mc] || found.some((f) => cellDistance(f.cell, mc, grid.width) * grid.cellSize < o.separationM))
+      return found;
     const mirror: FoundSource = {
-      cell: mc, delta: greedy.firstScan.delta[mc], column: kernelColumn(fields, mc, n), alternate: true, q: greedy.firstScan.q[mc], surface: greedy.firstScan.delta,
+      cell: mc,
+      delta: greedy.firstScan.delta[mc],
+      column: kernelColumn(fields, mc, n),
+      alternate: true,
+      q: greedy.firstScan.q[mc],
+      surface: greedy.firstScan.delta,
     };
     return [top, mirror, ...found.slice(1)].slice(0, o.maxCandidates);
   }
@@ -313,12 +399,17 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     const d = greedy.fit.q[z] > 0 ? benignSource(zone, explained, peak) : null;
     if (d) diagnostics.push(d);
   });
-  const coverage = sparseCoverage(Float64Array.from(readings, (r) => r.x), Float64Array.from(readings, (r) => r.y), o.coverageGapM);
+  const coverage = sparseCoverage(
+    Float64Array.from(readings, (r) => r.x),
+    Float64Array.from(readings, (r) => r.y),
+    o.coverageGapM,
+  );
   if (coverage) diagnostics.push(coverage);
   if (oneSidedTop) {
     diagnostics.push({
       kind: "one-sided-pass",
-      message: "The top suspect spot is seen from one pass only, so which side of the path it is on cannot be told: make a pass along the other face.",
+      message:
+        "The top suspect spot is seen from one pass only, so which side of the path it is on cannot be told: make a pass along the other face.",
     });
   }
   const early = lagged.filter((l) => l.beforeDelay).length;
@@ -330,7 +421,10 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
   }
   const over = censored.reduce((a, b) => a + b, 0);
   if (over > 0) {
-    diagnostics.push({ kind: "over-range", message: `${over} reading${over > 1 ? "s were" : " was"} over range and counted as "at least" that value.` });
+    diagnostics.push({
+      kind: "over-range",
+      message: `${over} reading${over > 1 ? "s were" : " was"} over range and counted as "at least" that value.`,
+    });
   }
 
   const corrected: CorrectedReading[] = readings.map((r, i) => {
@@ -340,7 +434,14 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     if (grid.blocked[cellIndexOf(grid, xs[i], ys[i])]) flags.push("snapped");
     if (censored[i]) flags.push("over-range");
     if (zoneOfReading[i] >= 0) flags.push("in-benign-zone");
-    return { index: i, raw: { x: r.x, y: r.y }, corrected: { x: round2(xs[i]), y: round2(ys[i]) }, t: r.t, ppm: r.ppm, flags };
+    return {
+      index: i,
+      raw: { x: r.x, y: r.y },
+      corrected: { x: round2(xs[i]), y: round2(ys[i]) },
+      t: r.t,
+      ppm: r.ppm,
+      flags,
+    };
   });
 
   return {

@@ -10,7 +10,12 @@ export const analysisQuery = z.object({
     .min(0, "must be 0 s or more")
     .max(60, "must be at most 60 s (a longer sample line than any hand detector has)")
     .optional(),
-  timeConstantS: z.coerce.number("must be a number of seconds").finite("must be a finite number of seconds").min(0, "must be 0 s or more").max(30, "must be at most 30 s").optional(),
+  timeConstantS: z.coerce
+    .number("must be a number of seconds")
+    .finite("must be a finite number of seconds")
+    .min(0, "must be 0 s or more")
+    .max(30, "must be at most 30 s")
+    .optional(),
   /** "true": wait for a stale result's recompute instead of answering with the stale one. */
   wait: z.enum(["true", "false"], "must be true or false").optional(),
 });

@@ -11,7 +11,12 @@ export const apiErrorSchema = z.object({
 });
 export type ApiError = z.infer<typeof apiErrorSchema>;
 
-export const emailSchema = z.string().trim().toLowerCase().max(254, "must be at most 254 characters").pipe(z.email("must be a valid e-mail address"));
+export const emailSchema = z
+  .string()
+  .trim()
+  .toLowerCase()
+  .max(254, "must be at most 254 characters")
+  .pipe(z.email("must be a valid e-mail address"));
 export const personNameSchema = z.string().trim().min(1, "is required").max(120, "must be at most 120 characters");
 export const passwordSchema = z
   .string()

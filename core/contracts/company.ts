@@ -10,6 +10,9 @@ export const companySettings = z.object({
   massUnit: massUnitSchema,
   ruleProfile: z.enum(RULE_PROFILES),
   leakRateMethod: z.enum(LEAK_RATE_METHODS),
-  detectorCheckIntervalDays: z.int("must be a whole number of days").min(1, "must be at least 1 day").max(730, "must be at most 730 days"),
+  detectorCheckIntervalDays: z
+    .int("must be a whole number of days")
+    .min(1, "must be at least 1 day")
+    .max(730, "must be at most 730 days"),
 });
 export type CompanySettings = z.infer<typeof companySettings>;

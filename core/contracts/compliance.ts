@@ -1,7 +1,9 @@
 import { z } from "zod";
 import { caution, chargeInput, system } from "./systems";
 
-const isoDate = z.string({ error: "must be a date as YYYY-MM-DD" }).regex(/^\d{4}-\d{2}-\d{2}$/, "must be a date as YYYY-MM-DD");
+const isoDate = z
+  .string({ error: "must be a date as YYYY-MM-DD" })
+  .regex(/^\d{4}-\d{2}-\d{2}$/, "must be a date as YYYY-MM-DD");
 export const EXCLUSIONS = ["retrofit", "new-installation", "seasonal-variance"] as const;
 
 /** Refrigerant put into a system. The day is on the store's calendar (default: its today). */
@@ -10,14 +12,25 @@ export const chargeAdditionInput = z.object({
   amount: chargeInput,
   /** The member who added it; defaults to the one recording. */
   technicianId: z.uuid("must be a valid id").optional(),
-  reason: z.string({ error: (i) => (i.input === undefined ? "is required (why refrigerant was added)" : "must be text") }).trim().min(1, "is required (why refrigerant was added)").max(500, "must be at most 500 characters"),
+  reason: z
+    .string({ error: (i) => (i.input === undefined ? "is required (why refrigerant was added)" : "must be text") })
+    .trim()
+    .min(1, "is required (why refrigerant was added)")
+    .max(500, "must be at most 500 characters"),
   findingId: z.uuid("must be a valid id").nullable().default(null),
   /** 40 CFR 82.157: no leak-rate calculation after a retrofit, a new installation or a seasonal variance [S:R1]. */
-  excluded: z.enum(EXCLUSIONS, { error: `must be one of: ${EXCLUSIONS.join(", ")}` }).nullable().default(null),
+  excluded: z
+    .enum(EXCLUSIONS, { error: `must be one of: ${EXCLUSIONS.join(", ")}` })
+    .nullable()
+    .default(null),
 });
 export type ChargeAdditionInput = z.input<typeof chargeAdditionInput>;
 
-const voidReason = z.string({ error: (i) => (i.input === undefined ? "is required (why the entry is wrong)" : "must be text") }).trim().min(1, "is required (why the entry is wrong)").max(500, "must be at most 500 characters");
+const voidReason = z
+  .string({ error: (i) => (i.input === undefined ? "is required (why the entry is wrong)" : "must be text") })
+  .trim()
+  .min(1, "is required (why the entry is wrong)")
+  .max(500, "must be at most 500 characters");
 export const chargeCorrectionInput = chargeAdditionInput.extend({ voidReason });
 export const chargeVoidInput = z.object({ voidReason });
 
@@ -67,7 +80,15 @@ export const leakRateRow = z.object({
   repairDue: z.string().nullable(),
 });
 
-export const dueItemKinds = ["repair", "initial-test", "follow-up-test", "recheck-after-repair", "inspection", "chronic-leaker-report", "detector-check"] as const;
+export const dueItemKinds = [
+  "repair",
+  "initial-test",
+  "follow-up-test",
+  "recheck-after-repair",
+  "inspection",
+  "chronic-leaker-report",
+  "detector-check",
+] as const;
 export const dueItem = z.object({
   kind: z.enum(dueItemKinds),
   what: z.string(),
@@ -90,16 +111,35 @@ export const systemRecords = z.object({
   system,
   store: z.object({ id: z.uuid(), name: z.string(), timeZone: z.string() }),
   today: z.string(),
-  profile: z.object({ id: z.string(), name: z.string(), method: z.enum(["annualizing", "rolling-average"]), retentionYears: z.number(), retentionSource: z.string() }),
-  applicability: z.object({ applies: z.boolean(), partId: z.string().nullable(), partTitle: z.string().nullable(), reason: z.string(), thresholdPercent: z.number().nullable(), thresholdSource: z.string().nullable() }),
+  profile: z.object({
+    id: z.string(),
+    name: z.string(),
+    method: z.enum(["annualizing", "rolling-average"]),
+    retentionYears: z.number(),
+    retentionSource: z.string(),
+  }),
+  applicability: z.object({
+    applies: z.boolean(),
+    partId: z.string().nullable(),
+    partTitle: z.string().nullable(),
+    reason: z.string(),
+    thresholdPercent: z.number().nullable(),
+    thresholdSource: z.string().nullable(),
+  }),
   leakRates: z.array(leakRateRow),
   latest: leakRateRow.nullable(),
   overThreshold: z.boolean(),
   chronic: z.array(
     z.object({
-      year: z.number(), addedKg: z.number(), percent: z.number(), chronic: z.boolean(), reportDue: z.string().nullable(),
+      year: z.number(),
+      addedKg: z.number(),
+      percent: z.number(),
+      chronic: z.boolean(),
+      reportDue: z.string().nullable(),
       /** The report marked filed: the day (store calendar), who signed for it, the authority's reference. */
-      filed: z.object({ on: z.string(), by: z.string(), reference: z.string(), note: z.string(), recordedAt: z.string() }).nullable(),
+      filed: z
+        .object({ on: z.string(), by: z.string(), reference: z.string(), note: z.string(), recordedAt: z.string() })
+        .nullable(),
     }),
   ),
   /** What was done to these records beyond the entries themselves (filed reports), newest first. */
@@ -119,7 +159,9 @@ export const systemRecords = z.object({
   nextInspection: z.object({ dueOn: z.string(), reason: z.string(), source: z.string() }).nullable(),
   due: z.array(dueItem),
   additions: z.array(chargeAddition),
-  leakChecks: z.array(z.object({ id: z.uuid(), checkedOn: z.string(), leakFound: z.boolean(), note: z.string(), by: z.string() })),
+  leakChecks: z.array(
+    z.object({ id: z.uuid(), checkedOn: z.string(), leakFound: z.boolean(), note: z.string(), by: z.string() }),
+  ),
   cautions: z.array(caution),
 });
 export type SystemRecordsView = z.infer<typeof systemRecords>;
@@ -132,27 +174,59 @@ export const todayResponse = z.object({
   due: z.array(dueItem),
   overThreshold: z.array(
     z.object({
-      systemId: z.uuid(), systemName: z.string(), storeId: z.uuid(), storeName: z.string(), refrigerantId: z.string(),
-      percent: z.number(), thresholdPercent: z.number(), on: z.string(), partTitle: z.string(), source: z.string(), link: z.string(),
+      systemId: z.uuid(),
+      systemName: z.string(),
+      storeId: z.uuid(),
+      storeName: z.string(),
+      refrigerantId: z.string(),
+      percent: z.number(),
+      thresholdPercent: z.number(),
+      on: z.string(),
+      partTitle: z.string(),
+      source: z.string(),
+      link: z.string(),
     }),
   ),
   /** Every system of the stores shown, with its latest figure: the way into each system's records. */
   systems: z.array(
     z.object({
-      id: z.uuid(), name: z.string(), storeId: z.uuid(), storeName: z.string(), refrigerantId: z.string(),
-      latestPercent: z.number().nullable(), latestOn: z.string().nullable(), thresholdPercent: z.number().nullable(), breachOpen: z.boolean(),
+      id: z.uuid(),
+      name: z.string(),
+      storeId: z.uuid(),
+      storeName: z.string(),
+      refrigerantId: z.string(),
+      latestPercent: z.number().nullable(),
+      latestOn: z.string().nullable(),
+      thresholdPercent: z.number().nullable(),
+      breachOpen: z.boolean(),
       /** The latest rate is above the threshold but a repair was recorded since (no action due for it). */
       repairedSince: z.boolean().default(false),
-      nextInspection: z.string().nullable(), link: z.string(),
+      nextInspection: z.string().nullable(),
+      link: z.string(),
     }),
   ),
   openFindings: z.array(
     z.object({
-      id: z.uuid(), storeId: z.uuid(), storeName: z.string(), systemId: z.uuid().nullable(), systemName: z.string().nullable(),
-      status: z.string(), component: z.string().nullable(), foundOn: z.string(), deadline: z.string().nullable(), deadlineSource: z.string().nullable(), link: z.string(),
+      id: z.uuid(),
+      storeId: z.uuid(),
+      storeName: z.string(),
+      systemId: z.uuid().nullable(),
+      systemName: z.string().nullable(),
+      status: z.string(),
+      component: z.string().nullable(),
+      foundOn: z.string(),
+      deadline: z.string().nullable(),
+      deadlineSource: z.string().nullable(),
+      link: z.string(),
     }),
   ),
 });
 export type TodayView = z.infer<typeof todayResponse>;
 
-export const digestSendResult = z.object({ sent: z.boolean(), localDate: z.string(), recipients: z.array(z.string()), itemCount: z.number(), message: z.string() });
+export const digestSendResult = z.object({
+  sent: z.boolean(),
+  localDate: z.string(),
+  recipients: z.array(z.string()),
+  itemCount: z.number(),
+  message: z.string(),
+});

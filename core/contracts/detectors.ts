@@ -14,16 +14,34 @@ const levelBand = z
     minPpm: z.number("must be a number").finite().min(0, "must be 0 or more"),
     maxPpm: z.number("must be a number").finite().positive("must be above 0").nullable(),
   })
-  .refine((b) => b.maxPpm === null || b.maxPpm > b.minPpm, { path: ["maxPpm"], message: "must be above the lower bound" });
+  .refine((b) => b.maxPpm === null || b.maxPpm > b.minPpm, {
+    path: ["maxPpm"],
+    message: "must be above the lower bound",
+  });
 
 export const detectorInput = z.object({
   name: z.string().trim().min(1, "is required").max(80, "must be at most 80 characters"),
   principle: z.enum(SENSING_PRINCIPLES, "must be heated-diode, infrared or other"),
   // Defaults: 5 s transport delay and 2 ppm alarm are common practice for hose-sampling
   // detectors (no published source); set them from the instrument's manual.
-  transportDelayS: z.number("must be a number").finite().min(0, "must be 0 or more").max(60, "must be at most 60 s").default(5),
-  timeConstantS: z.number("must be a number").finite().min(0, "must be 0 or more").max(60, "must be at most 60 s").default(1.5),
-  alarmPpm: z.number("must be a number").finite().positive("must be above 0").max(10000, "must be at most 10,000 ppm").default(2),
+  transportDelayS: z
+    .number("must be a number")
+    .finite()
+    .min(0, "must be 0 or more")
+    .max(60, "must be at most 60 s")
+    .default(5),
+  timeConstantS: z
+    .number("must be a number")
+    .finite()
+    .min(0, "must be 0 or more")
+    .max(60, "must be at most 60 s")
+    .default(1.5),
+  alarmPpm: z
+    .number("must be a number")
+    .finite()
+    .positive("must be above 0")
+    .max(10000, "must be at most 10,000 ppm")
+    .default(2),
   lastCheckedOn: z.iso.date("must be a date (YYYY-MM-DD)").nullable().default(null),
   levelScale: z
     .array(levelBand)

@@ -1,7 +1,9 @@
 import { z } from "zod";
 import { DISMISS_REASONS, FINDING_COMPONENTS, finding, findingEvent } from "./findings";
 
-const isoDate = z.string({ error: "must be a date as YYYY-MM-DD" }).regex(/^\d{4}-\d{2}-\d{2}$/, "must be a date as YYYY-MM-DD");
+const isoDate = z
+  .string({ error: "must be a date as YYYY-MM-DD" })
+  .regex(/^\d{4}-\d{2}-\d{2}$/, "must be a date as YYYY-MM-DD");
 const note = z.string({ error: "must be text" }).trim().max(2000, "must be at most 2,000 characters").default("");
 /** The day on the store's calendar; defaults to the store's today. Never in the future. */
 const on = isoDate.optional();
@@ -11,7 +13,12 @@ const result = z.enum(["passed", "failed"], { error: "must be passed or failed" 
 export const findingActionInput = z.discriminatedUnion(
   "action",
   [
-    z.object({ action: z.literal("confirm"), on, note, component: z.enum(FINDING_COMPONENTS, { error: `must be one of: ${FINDING_COMPONENTS.join(", ")}` }).optional() }),
+    z.object({
+      action: z.literal("confirm"),
+      on,
+      note,
+      component: z.enum(FINDING_COMPONENTS, { error: `must be one of: ${FINDING_COMPONENTS.join(", ")}` }).optional(),
+    }),
     z.object({ action: z.literal("repair"), on, note }),
     z.object({ action: z.literal("initial-test"), on, note, result }),
     z.object({ action: z.literal("follow-up-test"), on, note, result }),
@@ -53,7 +60,9 @@ export const findingDetail = finding.extend({
   dismissReason: z.enum(DISMISS_REASONS).nullable(),
   nextActions: z.array(z.enum(["confirm", "repair", "initial-test", "follow-up-test", "close", "dismiss"])),
   deadlines: z.array(findingDeadline),
-  cautions: z.array(z.object({ id: z.string(), level: z.enum(["warning", "notice"]), text: z.string(), source: z.string() })),
+  cautions: z.array(
+    z.object({ id: z.string(), level: z.enum(["warning", "notice"]), text: z.string(), source: z.string() }),
+  ),
 });
 export type FindingDetail = z.infer<typeof findingDetail>;
 export const findingListResponse = z.object({ findings: z.array(findingDetail) });

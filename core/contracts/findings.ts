@@ -20,25 +20,33 @@ export const COMPONENT_LABELS: Record<(typeof FINDING_COMPONENTS)[number], strin
 const finite = (what: string) => z.number(`${what} must be a number`).finite(`${what} must be a finite number`);
 
 /** Create a finding. `clientId` (made on the device) makes an offline retry store it once. */
-export const createFindingInput = z.object({
-  clientId: z.uuid("must be a valid id").optional(),
-  source: z.enum(FINDING_SOURCES).default("manual"),
-  status: z.enum(["suspected", "confirmed"]).default("suspected"),
-  systemId: z.uuid("must be a valid id").nullable().default(null),
-  planId: z.uuid("must be a valid id").nullable().default(null),
-  sweepId: z.uuid("must be a valid id").nullable().default(null),
-  fixtureId: z.uuid("must be a valid id").nullable().default(null),
-  /** Position on the plan in metres (plan coordinates); both or neither. */
-  x: finite("x").nullable().default(null),
-  y: finite("y").nullable().default(null),
-  component: z.enum(FINDING_COMPONENTS).nullable().default(null),
-  note: z.string().trim().max(2000, "must be at most 2,000 characters").default(""),
-  /** When the leak was found (ISO instant); defaults to now on the server. */
-  foundAt: z.iso.datetime({ offset: true, message: "must be a date and time" }).optional(),
-}).refine((v) => (v.x === null) === (v.y === null), { path: ["y"], message: "x and y must be given together" });
+export const createFindingInput = z
+  .object({
+    clientId: z.uuid("must be a valid id").optional(),
+    source: z.enum(FINDING_SOURCES).default("manual"),
+    status: z.enum(["suspected", "confirmed"]).default("suspected"),
+    systemId: z.uuid("must be a valid id").nullable().default(null),
+    planId: z.uuid("must be a valid id").nullable().default(null),
+    sweepId: z.uuid("must be a valid id").nullable().default(null),
+    fixtureId: z.uuid("must be a valid id").nullable().default(null),
+    /** Position on the plan in metres (plan coordinates); both or neither. */
+    x: finite("x").nullable().default(null),
+    y: finite("y").nullable().default(null),
+    component: z.enum(FINDING_COMPONENTS).nullable().default(null),
+    note: z.string().trim().max(2000, "must be at most 2,000 characters").default(""),
+    /** When the leak was found (ISO instant); defaults to now on the server. */
+    foundAt: z.iso.datetime({ offset: true, message: "must be a date and time" }).optional(),
+  })
+  .refine((v) => (v.x === null) === (v.y === null), { path: ["y"], message: "x and y must be given together" });
 export type CreateFindingInput = z.input<typeof createFindingInput>;
 
-export const findingPhoto = z.object({ id: z.uuid(), url: z.string(), thumbUrl: z.string(), takenAt: z.string(), by: z.string() });
+export const findingPhoto = z.object({
+  id: z.uuid(),
+  url: z.string(),
+  thumbUrl: z.string(),
+  takenAt: z.string(),
+  by: z.string(),
+});
 
 export const findingEvent = z.object({
   id: z.uuid(),

@@ -4,14 +4,51 @@ import { validateFixtureList, type Fixture } from "./fixtures";
 
 const plan = { width: 20, height: 10 };
 const id = (n: number) => `00000000-0000-4000-8000-${String(n).padStart(12, "0")}`;
-const rect = (x: number, y: number, w: number, h: number): [number, number][] => [[x, y], [x + w, y], [x + w, y + h], [x, y + h]];
+const rect = (x: number, y: number, w: number, h: number): [number, number][] => [
+  [x, y],
+  [x + w, y],
+  [x + w, y + h],
+  [x, y + h],
+];
 
 function valid(): Fixture[] {
   return [
-    { id: id(1), kind: "open-case", label: "Dairy 1", systemId: id(100), hasFans: true, polygon: rect(1, 1, 3.75, 1.1) },
-    { id: id(2), kind: "door-case", label: "Frozen 1", systemId: null, hasFans: true, polygon: rect(1, 4, 3.75, 1), doorCount: 5 },
-    { id: id(3), kind: "walk-in-cooler", label: "Dairy cooler", systemId: null, hasFans: true, polygon: rect(12, 1, 4, 3), door: { edge: 2, offset: 1, width: 1.2 } },
-    { id: id(4), kind: "benign-zone", label: "Aerosols", systemId: null, hasFans: false, polygon: rect(8, 7, 2, 1), note: "aerosol storage", typicalPpm: 3 },
+    {
+      id: id(1),
+      kind: "open-case",
+      label: "Dairy 1",
+      systemId: id(100),
+      hasFans: true,
+      polygon: rect(1, 1, 3.75, 1.1),
+    },
+    {
+      id: id(2),
+      kind: "door-case",
+      label: "Frozen 1",
+      systemId: null,
+      hasFans: true,
+      polygon: rect(1, 4, 3.75, 1),
+      doorCount: 5,
+    },
+    {
+      id: id(3),
+      kind: "walk-in-cooler",
+      label: "Dairy cooler",
+      systemId: null,
+      hasFans: true,
+      polygon: rect(12, 1, 4, 3),
+      door: { edge: 2, offset: 1, width: 1.2 },
+    },
+    {
+      id: id(4),
+      kind: "benign-zone",
+      label: "Aerosols",
+      systemId: null,
+      hasFans: false,
+      polygon: rect(8, 7, 2, 1),
+      note: "aerosol storage",
+      typicalPpm: 3,
+    },
     { id: id(5), kind: "valve", label: "Ball valve", systemId: null, hasFans: false, point: { x: 2, y: 3 } },
     { id: id(6), kind: "column", label: "", systemId: null, hasFans: false, polygon: rect(10, 5, 0.4, 0.4) },
   ];
@@ -45,13 +82,21 @@ describe("validateFixtureList", () => {
 
   it("names the field of a polygon with too few vertices", () => {
     const list = valid();
-    (list[3] as { polygon: unknown }).polygon = [[0, 0], [1, 1]];
+    (list[3] as { polygon: unknown }).polygon = [
+      [0, 0],
+      [1, 1],
+    ];
     expect(errorsOf(list)).toEqual([{ path: "fixtures.3.polygon", message: "needs at least 3 vertices" }]);
   });
 
   it("refuses a self-intersecting (bow-tie) polygon", () => {
     const list = valid();
-    (list[0] as { polygon: unknown }).polygon = [[1, 1], [3, 1], [1, 3], [3, 3]];
+    (list[0] as { polygon: unknown }).polygon = [
+      [1, 1],
+      [3, 1],
+      [1, 3],
+      [3, 3],
+    ];
     expect(errorsOf(list)).toEqual([{ path: "fixtures.0.polygon", message: "has edges that cross each other" }]);
   });
 
@@ -66,7 +111,11 @@ describe("validateFixtureList", () => {
 
   it("refuses non-finite numbers, unknown kinds, long labels and bad ids with their paths", () => {
     const list: unknown[] = valid();
-    (list[0] as { polygon: unknown }).polygon = [[1, 1], [Number.NaN, 1], [2, 2]];
+    (list[0] as { polygon: unknown }).polygon = [
+      [1, 1],
+      [Number.NaN, 1],
+      [2, 2],
+    ];
     list[1] = { ...(list[1] as object), kind: "freezer-case" };
     (list[2] as { label: string }).label = "x".repeat(81);
     (list[5] as { id: string }).id = "c1";
@@ -108,14 +157,25 @@ describe("validateFixtureList", () => {
     ]);
     (list[1] as { doorCount: number }).doorCount = 2;
     (list[2] as { door: unknown }).door = { edge: 4, offset: 0, width: 1 };
-    expect(errorsOf(list)).toEqual([{ path: "fixtures.2.door.edge", message: "must name one of the outline's 4 edges (0–3)" }]);
+    expect(errorsOf(list)).toEqual([
+      { path: "fixtures.2.door.edge", message: "must name one of the outline's 4 edges (0–3)" },
+    ]);
   });
 
   it("refuses repeated ids, repeated vertices and flat polygons", () => {
     const list = valid();
     list[5].id = id(1);
-    (list[0] as { polygon: unknown }).polygon = [[1, 1], [2, 1], [2, 1], [2, 2]];
-    (list[3] as { polygon: unknown }).polygon = [[1, 1], [2, 1], [3, 1]];
+    (list[0] as { polygon: unknown }).polygon = [
+      [1, 1],
+      [2, 1],
+      [2, 1],
+      [2, 2],
+    ];
+    (list[3] as { polygon: unknown }).polygon = [
+      [1, 1],
+      [2, 1],
+      [3, 1],
+    ];
     expect(errorsOf(list)).toEqual([
       { path: "fixtures.0.polygon.2", message: "repeats the vertex before it" },
       { path: "fixtures.3.polygon", message: "has no area (all vertices on one line)" },

@@ -8,12 +8,7 @@
 import { z } from "zod";
 import { polygonArea } from "../analysis/geometry/polygon-area";
 import { isSelfIntersecting } from "../analysis/geometry/segments";
-import {
-  FIXTURE_KINDS,
-  POINT_KINDS,
-  ROOM_KINDS,
-  SOLID_BODY_KINDS,
-} from "./fixture-kinds";
+import { FIXTURE_KINDS, POINT_KINDS, ROOM_KINDS, SOLID_BODY_KINDS } from "./fixture-kinds";
 
 export const LABEL_MAX = 80;
 export const NOTE_MAX = 500;
@@ -60,7 +55,11 @@ export const DoorCaseFixtureSchema = z.object({
   ...base,
   kind: z.literal("door-case"),
   polygon: PolygonSchema,
-  doorCount: z.number().int({ error: "must be a whole number of doors" }).min(1, { error: "must be at least 1" }).max(100, { error: "must be at most 100" }),
+  doorCount: z
+    .number()
+    .int({ error: "must be a whole number of doors" })
+    .min(1, { error: "must be at least 1" })
+    .max(100, { error: "must be at most 100" }),
 });
 export const RoomFixtureSchema = z.object({
   ...base,
@@ -123,50 +122,77 @@ function addListIssues(fixtures: readonly Fixture[], bounds: PlanBounds, ctx: z.
   const seen = new Map<string, number>();
   const where = `the plan (0–${bounds.width} m × 0–${bounds.height} m)`;
   const inside = (x: number, y: number) =>
-    x >= -BOUNDS_TOLERANCE_M && y >= -BOUNDS_TOLERANCE_M &&
-    x <= bounds.width + BOUNDS_TOLERANCE_M && y <= bounds.height + BOUNDS_TOLERANCE_M;
+    x >= -BOUNDS_TOLERANCE_M &&
+    y >= -BOUNDS_TOLERANCE_M &&
+    x <= bounds.width + BOUNDS_TOLERANCE_M &&
+    y <= bounds.height + BOUNDS_TOLERANCE_M;
   fixtures.forEach((f, i) => {
     if (malformed.has(i)) return;
     const first = seen.get(f.id);
-    if (first !== undefined) ctx.addIssue({ code: "custom", path: [i, "id"], message: `repeats the id of fixtures.${first}` });
+    if (first !== undefined)
+      ctx.addIssue({ code: "custom", path: [i, "id"], message: `repeats the id of fixtures.${first}` });
     else seen.set(f.id, i);
     if (isPointFixture(f)) {
-      if (!inside(f.point.x, f.point.y)) ctx.addIssue({ code: "custom", path: [i, "point"], message: `lies outside ${where}` });
+      if (!inside(f.point.x, f.point.y))
+        ctx.addIssue({ code: "custom", path: [i, "point"], message: `lies outside ${where}` });
       return;
     }
     const poly = f.polygon;
     poly.forEach(([x, y], v) => {
-      if (!inside(x, y)) ctx.addIssue({ code: "custom", path: [i, "polygon", v], message: `vertex (${x}, ${y}) lies outside ${where}` });
+      if (!inside(x, y))
+        ctx.addIssue({ code: "custom", path: [i, "polygon", v], message: `vertex (${x}, ${y}) lies outside ${where}` });
     });
-    const repeated = poly.findIndex((p, v) => { const q = poly[(v + 1) % poly.length]; return p[0] === q[0] && p[1] === q[1]; });
-    if (repeated >= 0) ctx.addIssue({ code: "custom", path: [i, "polygon", (repeated + 1) % poly.length], message: "repeats the vertex before it" });
-    else if (isSelfIntersecting(poly)) ctx.addIssue({ code: "custom", path: [i, "polygon"], message: "has edges that cross each other" });
-    else if (polygonArea(poly) < 1e-9) ctx.addIssue({ code: "custom", path: [i, "polygon"], message: "has no area (all vertices on one line)" });
+    const repeated = poly.findIndex((p, v) => {
+      const q = poly[(v + 1) % poly.length];
+      return p[0] === q[0] && p[1] === q[1];
+    });
+    if (repeated >= 0)
+      ctx.addIssue({
+        code: "custom",
+        path: [i, "polygon", (repeated + 1) % poly.length],
+        message: "repeats the vertex before it",
+      });
+    else if (isSelfIntersecting(poly))
+      ctx.addIssue({ code: "custom", path: [i, "polygon"], message: "has edges that cross each other" });
+    else if (polygonArea(poly) < 1e-9)
+      ctx.addIssue({ code: "custom", path: [i, "polygon"], message: "has no area (all vertices on one line)" });
     if ("door" in f && f.door) addDoorIssues(f.door, poly, i, ctx);
   });
 }
 
 function addDoorIssues(door: RoomDoor, poly: readonly Vertex[], i: number, ctx: z.RefinementCtx): void {
   if (door.edge >= poly.length) {
-    ctx.addIssue({ code: "custom", path: [i, "door", "edge"], message: `must name one of the outline's ${poly.length} edges (0–${poly.length - 1})` });
+    ctx.addIssue({
+      code: "custom",
+      path: [i, "door", "edge"],
+      message: `must name one of the outline's ${poly.length} edges (0–${poly.length - 1})`,
+    });
     return;
   }
   const [ax, ay] = poly[door.edge];
   const [bx, by] = poly[(door.edge + 1) % poly.length];
   const length = Math.hypot(bx - ax, by - ay);
   if (door.offset + door.width > length + BOUNDS_TOLERANCE_M) {
-    ctx.addIssue({ code: "custom", path: [i, "door", "width"], message: `runs past the end of its ${length.toFixed(2)} m edge (offset + width = ${(door.offset + door.width).toFixed(2)} m)` });
+    ctx.addIssue({
+      code: "custom",
+      path: [i, "door", "width"],
+      message: `runs past the end of its ${length.toFixed(2)} m edge (offset + width = ${(door.offset + door.width).toFixed(2)} m)`,
+    });
   }
 }
 
 /** A zod schema of a whole fixture list on a plan of the given size (for validate middleware). */
 export function fixtureListSchema(bounds: PlanBounds) {
-  return z
-    .array(FixtureSchema, { error: "must be a list of fixtures" })
-    .max(FIXTURES_MAX, { error: `must hold at most ${FIXTURES_MAX} fixtures` })
-    // Geometry is judged for every fixture whose shape parsed, so one typo does not hide the
-    // other errors, while a NaN vertex is not also reported as "outside".
-    .superRefine((fixtures, ctx) => addListIssues(fixtures, bounds, ctx), { when: (payload) => Array.isArray(payload.value) });
+  return (
+    z
+      .array(FixtureSchema, { error: "must be a list of fixtures" })
+      .max(FIXTURES_MAX, { error: `must hold at most ${FIXTURES_MAX} fixtures` })
+      // Geometry is judged for every fixture whose shape parsed, so one typo does not hide the
+      // other errors, while a NaN vertex is not also reported as "outside".
+      .superRefine((fixtures, ctx) => addListIssues(fixtures, bounds, ctx), {
+        when: (payload) => Array.isArray(payload.value),
+      })
+  );
 }
 
 export interface FieldError {

@@ -6,10 +6,44 @@ function good(): LocatorInputRaw {
     plan: {
       width: 20,
       height: 10,
-      obstacles: [{ id: "w1", polygon: [[0, 0], [20, 0], [20, 0.2], [0, 0.2]] }],
-      fixtures: [{ id: "c1", kind: "open-case", polygon: [[2, 2], [8, 2], [8, 3], [2, 3]], fans: true }],
+      obstacles: [
+        {
+          id: "w1",
+          polygon: [
+            [0, 0],
+            [20, 0],
+            [20, 0.2],
+            [0, 0.2],
+          ],
+        },
+      ],
+      fixtures: [
+        {
+          id: "c1",
+          kind: "open-case",
+          polygon: [
+            [2, 2],
+            [8, 2],
+            [8, 3],
+            [2, 3],
+          ],
+          fans: true,
+        },
+      ],
       riskPoints: [{ id: "ls1", kind: "line-set", x: 5, y: 2.5 }],
-      backgroundZones: [{ id: "bz1", polygon: [[15, 5], [18, 5], [18, 8], [15, 8]], note: "aerosol storage", ppm: 3 }],
+      backgroundZones: [
+        {
+          id: "bz1",
+          polygon: [
+            [15, 5],
+            [18, 5],
+            [18, 8],
+            [15, 8],
+          ],
+          note: "aerosol storage",
+          ppm: 3,
+        },
+      ],
     },
     instrument: { transportDelayS: 5, timeConstantS: 1.5, alarmPpm: 2 },
     readings: [
@@ -34,7 +68,13 @@ describe("locator input contract (issue 5)", () => {
   it("accepts the issue's example shape, with and without an explicit closing vertex", () => {
     expect(problems(good())).toEqual([]);
     const closed = good();
-    closed.plan.obstacles![0].polygon = [[0, 0], [20, 0], [20, 0.2], [0, 0.2], [0, 0]];
+    closed.plan.obstacles![0].polygon = [
+      [0, 0],
+      [20, 0],
+      [20, 0.2],
+      [0, 0.2],
+      [0, 0],
+    ];
     const parsed = parseLocatorInput(closed);
     expect(parsed.plan.obstacles[0].polygon).toHaveLength(4);
     expect(parsed.plan.fixtures[0].fans).toBe(true);
@@ -60,7 +100,9 @@ describe("locator input contract (issue 5)", () => {
     expect(problems(x)).toEqual([]);
     const y = good();
     y.readings.push({ x: 3, y: 3, t: 2, ppm: 1 });
-    expect(problems(y)).toEqual(["readings[2].t: time goes backwards: 2 s after 4.1 s (readings must be in time order)"]);
+    expect(problems(y)).toEqual([
+      "readings[2].t: time goes backwards: 2 s after 4.1 s (readings must be in time order)",
+    ]);
   });
 
   it("rejects readings outside the plan", () => {
@@ -71,21 +113,37 @@ describe("locator input contract (issue 5)", () => {
 
   it("rejects polygons that do not close or have fewer than 3 points", () => {
     const a = good();
-    a.plan.fixtures![0].polygon = [[2, 2], [8, 2]];
+    a.plan.fixtures![0].polygon = [
+      [2, 2],
+      [8, 2],
+    ];
     expect(problems(a)).toEqual(["plan.fixtures[0].polygon: polygon needs at least 3 distinct vertices, got 2"]);
     const b = good();
-    b.plan.obstacles![0].polygon = [[0, 0], [5, 0], [10, 0]];
+    b.plan.obstacles![0].polygon = [
+      [0, 0],
+      [5, 0],
+      [10, 0],
+    ];
     expect(problems(b)[0]).toMatch(/^plan\.obstacles\[0\]\.polygon: polygon does not close around any area/);
     const c = good();
-    c.plan.backgroundZones![0].polygon = [[15, 5], [18, 8], [18, 5], [15, 9]];
-    expect(problems(c)[0]).toMatch(/^plan\.backgroundZones\[0\]\.polygon: polygon does not close into a simple outline/);
+    c.plan.backgroundZones![0].polygon = [
+      [15, 5],
+      [18, 8],
+      [18, 5],
+      [15, 9],
+    ];
+    expect(problems(c)[0]).toMatch(
+      /^plan\.backgroundZones\[0\]\.polygon: polygon does not close into a simple outline/,
+    );
   });
 
   it("rejects a grid that would exceed the memory budget", () => {
     const x = good();
     x.plan.width = 600;
     x.plan.height = 400;
-    expect(problems(x)[0]).toMatch(/^plan\.width: a 600 m x 400 m plan needs 3840000 cells at 0\.25 m, over the memory budget/);
+    expect(problems(x)[0]).toMatch(
+      /^plan\.width: a 600 m x 400 m plan needs 3840000 cells at 0\.25 m, over the memory budget/,
+    );
   });
 
   it("names unknown kinds and bad instrument settings", () => {

@@ -15,7 +15,9 @@ export function gridCellCount(width: number, height: number, cellSize: number): 
 }
 
 const finite = (what: string) =>
-  z.number({ error: `${what} must be a number` }).refine(Number.isFinite, { message: `${what} must be a finite number` });
+  z
+    .number({ error: `${what} must be a number` })
+    .refine(Number.isFinite, { message: `${what} must be a finite number` });
 
 const vertex = z.tuple([finite("a vertex coordinate"), finite("a vertex coordinate")], {
   error: "each vertex must be an [x, y] pair of numbers in metres",
@@ -32,24 +34,22 @@ function openRing(points: readonly (readonly [number, number])[]): [number, numb
   return ring;
 }
 
-const polygon = z
-  .array(vertex, { error: "polygon must be an array of [x, y] vertices" })
-  .transform((points, ctx) => {
-    const ring = openRing(points);
-    if (ring.length < 3) {
-      ctx.addIssue({ code: "custom", message: `polygon needs at least 3 distinct vertices, got ${ring.length}` });
-      return z.NEVER;
-    }
-    if (Math.abs(signedArea(ring)) < 1e-9) {
-      ctx.addIssue({ code: "custom", message: "polygon does not close around any area (its vertices are collinear)" });
-      return z.NEVER;
-    }
-    if (isSelfIntersecting(ring)) {
-      ctx.addIssue({ code: "custom", message: "polygon does not close into a simple outline (its edges cross)" });
-      return z.NEVER;
-    }
-    return ring;
-  });
+const polygon = z.array(vertex, { error: "polygon must be an array of [x, y] vertices" }).transform((points, ctx) => {
+  const ring = openRing(points);
+  if (ring.length < 3) {
+    ctx.addIssue({ code: "custom", message: `polygon needs at least 3 distinct vertices, got ${ring.length}` });
+    return z.NEVER;
+  }
+  if (Math.abs(signedArea(ring)) < 1e-9) {
+    ctx.addIssue({ code: "custom", message: "polygon does not close around any area (its vertices are collinear)" });
+    return z.NEVER;
+  }
+  if (isSelfIntersecting(ring)) {
+    ctx.addIssue({ code: "custom", message: "polygon does not close into a simple outline (its edges cross)" });
+    return z.NEVER;
+  }
+  return ring;
+});
 
 const id = z.string({ error: "id must be a string" }).min(1, "id must not be empty");
 
@@ -73,7 +73,9 @@ const riskPoint = z.object({
 const backgroundZone = z.object({
   id,
   polygon,
-  ppm: finite("ppm").refine((v) => v >= 0, "ppm must not be negative").optional(),
+  ppm: finite("ppm")
+    .refine((v) => v >= 0, "ppm must not be negative")
+    .optional(),
   note: z.string().optional(),
 });
 
@@ -97,7 +99,9 @@ const reading = z.object({
   y: finite("y"),
   t: finite("t").refine((v) => v >= 0, "t must not be negative (seconds from the sweep's start)"),
   ppm: z
-    .number({ error: (issue) => (Number.isNaN(issue.input) ? "ppm must be a number, not NaN" : "ppm must be a number") })
+    .number({
+      error: (issue) => (Number.isNaN(issue.input) ? "ppm must be a number, not NaN" : "ppm must be a number"),
+    })
     .refine((v) => Number.isFinite(v), "ppm must be finite")
     .refine((v) => v >= 0, "ppm must not be negative"),
   atLeast: z.boolean({ error: "atLeast must be true or false" }).optional(),

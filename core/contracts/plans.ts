@@ -2,7 +2,10 @@ import { z } from "zod";
 import { idSchema } from "./common";
 import { FixtureSchema, PlanPointSchema } from "./fixtures";
 
-const finite = (what: string) => z.number({ error: `must be a finite number of ${what}` }).refine(Number.isFinite, { message: `must be a finite number of ${what}` });
+const finite = (what: string) =>
+  z
+    .number({ error: `must be a finite number of ${what}` })
+    .refine(Number.isFinite, { message: `must be a finite number of ${what}` });
 
 export const imagePointSchema = z.object({ x: finite("pixels"), y: finite("pixels") });
 export const lengthUnitSchema = z.enum(["m", "ft"], { error: "must be m or ft" });
@@ -25,7 +28,10 @@ export type BlankPlanInput = z.infer<typeof blankPlanInput>;
 export const calibrationInput = z.object({
   a: imagePointSchema,
   b: imagePointSchema,
-  length: z.object({ value: finite("metres or feet").refine((v) => v > 0, { message: "must be more than 0" }), unit: lengthUnitSchema }),
+  length: z.object({
+    value: finite("metres or feet").refine((v) => v > 0, { message: "must be more than 0" }),
+    unit: lengthUnitSchema,
+  }),
   /** Optional guard: when given, a stale revision is a conflict (calibration may rescale fixtures). */
   layoutRevision: revisionSchema.optional(),
 });
@@ -56,7 +62,9 @@ export const fixturesPatchInput = z.object({
 });
 export type FixturesPatchInput = z.infer<typeof fixturesPatchInput>;
 
-export const imageVariantSchema = z.enum(["display", "thumb", "original"], { error: "must be display, thumb or original" });
+export const imageVariantSchema = z.enum(["display", "thumb", "original"], {
+  error: "must be display, thumb or original",
+});
 export type ImageVariant = z.infer<typeof imageVariantSchema>;
 
 export const similaritySchema = z.object({ scale: z.number(), rotation: z.number(), tx: z.number(), ty: z.number() });
@@ -80,7 +88,11 @@ export const plan = z.object({
     .nullable(),
   metresPerPixel: z.number().nullable(),
   calibration: z
-    .object({ a: imagePointSchema, b: imagePointSchema, length: z.object({ value: z.number(), unit: lengthUnitSchema }) })
+    .object({
+      a: imagePointSchema,
+      b: imagePointSchema,
+      length: z.object({ value: z.number(), unit: lengthUnitSchema }),
+    })
     .nullable(),
   /** True once fixtures may be saved: an image plan after calibration, a blank plan always. */
   calibrated: z.boolean(),
@@ -95,7 +107,14 @@ export const plan = z.object({
 });
 export type Plan = z.infer<typeof plan>;
 
-export const planVersionSummary = plan.pick({ id: true, version: true, source: true, calibrated: true, fixtureCount: true, createdAt: true });
+export const planVersionSummary = plan.pick({
+  id: true,
+  version: true,
+  source: true,
+  calibrated: true,
+  fixtureCount: true,
+  createdAt: true,
+});
 
 export const fixturesResponse = z.object({
   planId: idSchema,

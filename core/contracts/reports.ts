@@ -5,10 +5,16 @@ export const sendReportInput = z
     /** Send to every store contact named on the sweep's store. */
     storeContacts: z.boolean("must be true or false").default(false),
     /** Any other addresses; recipients need no account. */
-    addresses: z.array(z.email("must be an e-mail address"), "must be a list of e-mail addresses").max(20, "must name at most 20 addresses").default([]),
+    addresses: z
+      .array(z.email("must be an e-mail address"), "must be a list of e-mail addresses")
+      .max(20, "must name at most 20 addresses")
+      .default([]),
     message: z.string("must be text").trim().max(2000, "must be at most 2,000 characters").default(""),
   })
-  .refine((v) => v.storeContacts || v.addresses.length > 0, { path: ["addresses"], message: "name at least one recipient, or send to the store contacts" });
+  .refine((v) => v.storeContacts || v.addresses.length > 0, {
+    path: ["addresses"],
+    message: "name at least one recipient, or send to the store contacts",
+  });
 export type SendReportInput = z.input<typeof sendReportInput>;
 
 export const reportSend = z.object({

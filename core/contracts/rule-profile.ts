@@ -15,15 +15,27 @@ const source = z
   .min(1, "is required (a citation, or who set the value and why)")
   .max(500, "must be at most 500 characters");
 
-const sourced = <T extends z.ZodType>(value: T) => z.object({ value, source, note: z.string().max(500, "must be at most 500 characters").optional() });
+const sourced = <T extends z.ZodType>(value: T) =>
+  z.object({ value, source, note: z.string().max(500, "must be at most 500 characters").optional() });
 
-const num = (what: string) => z.number({ error: `must be a number (${what})` }).refine(Number.isFinite, `must be a finite number (${what})`);
-const positive = (what: string, max: number) => num(what).gt(0, `must be above 0 (${what})`).max(max, `must be at most ${max} (${what})`);
+const num = (what: string) =>
+  z.number({ error: `must be a number (${what})` }).refine(Number.isFinite, `must be a finite number (${what})`);
+const positive = (what: string, max: number) =>
+  num(what).gt(0, `must be above 0 (${what})`).max(max, `must be at most ${max} (${what})`);
 const wholeDays = (min: number) =>
-  z.int(`must be a whole number of days`).min(min, min === 0 ? "must be 0 or more days" : `must be at least ${min} day`).max(3650, "must be at most 3,650 days");
-const wholeMonths = z.int("must be a whole number of months").min(1, "must be at least 1 month").max(120, "must be at most 120 months");
+  z
+    .int(`must be a whole number of days`)
+    .min(min, min === 0 ? "must be 0 or more days" : `must be at least ${min} day`)
+    .max(3650, "must be at most 3,650 days");
+const wholeMonths = z
+  .int("must be a whole number of months")
+  .min(1, "must be at least 1 month")
+  .max(120, "must be at most 120 months");
 
-const massLimit = z.object({ value: num("mass").min(0, "must be 0 or more"), unit: z.enum(["lb", "kg"], { error: "must be lb or kg" }) });
+const massLimit = z.object({
+  value: num("mass").min(0, "must be 0 or more"),
+  unit: z.enum(["lb", "kg"], { error: "must be lb or kg" }),
+});
 
 export const leakCheckBandSchema = z.object({
   from: num("lower edge").min(0, "must be 0 or more"),
@@ -34,23 +46,43 @@ export const leakCheckBandSchema = z.object({
 });
 
 /** Bands must run upwards without gaps: each `to` above its `from`, equal to the next `from`, the top one open. */
-const bands = z.array(leakCheckBandSchema).min(1, "needs at least one band").superRefine((list, ctx) => {
-  list.forEach((b, i) => {
-    const last = i === list.length - 1;
-    if (b.to !== null && b.to <= b.from) ctx.addIssue({ code: "custom", path: [i, "to"], message: `must be above the band's lower edge (${b.from})` });
-    if (!last && b.to === null) ctx.addIssue({ code: "custom", path: [i, "to"], message: "only the top band may be open" });
-    if (!last && b.to !== null && b.to !== list[i + 1].from) {
-      ctx.addIssue({ code: "custom", path: [i + 1, "from"], message: `must equal the band below's upper edge (${b.to}), so bands ascend without gaps or overlaps` });
-    }
-    if (last && b.to !== null) ctx.addIssue({ code: "custom", path: [i, "to"], message: "must be empty (open) for the top band" });
-    if (b.monthsWithLds < b.monthsWithoutLds) ctx.addIssue({ code: "custom", path: [i, "monthsWithLds"], message: "must be at least the interval without a leak detection system" });
+const bands = z
+  .array(leakCheckBandSchema)
+  .min(1, "needs at least one band")
+  .superRefine((list, ctx) => {
+    list.forEach((b, i) => {
+      const last = i === list.length - 1;
+      if (b.to !== null && b.to <= b.from)
+        ctx.addIssue({ code: "custom", path: [i, "to"], message: `must be above the band's lower edge (${b.from})` });
+      if (!last && b.to === null)
+        ctx.addIssue({ code: "custom", path: [i, "to"], message: "only the top band may be open" });
+      if (!last && b.to !== null && b.to !== list[i + 1].from) {
+        ctx.addIssue({
+          code: "custom",
+          path: [i + 1, "from"],
+          message: `must equal the band below's upper edge (${b.to}), so bands ascend without gaps or overlaps`,
+        });
+      }
+      if (last && b.to !== null)
+        ctx.addIssue({ code: "custom", path: [i, "to"], message: "must be empty (open) for the top band" });
+      if (b.monthsWithLds < b.monthsWithoutLds)
+        ctx.addIssue({
+          code: "custom",
+          path: [i, "monthsWithLds"],
+          message: "must be at least the interval without a leak detection system",
+        });
+    });
   });
-});
 
 export const leakRatePartSchema = z.object({
   id: z.string().trim().min(1, "is required"),
   title: z.string().trim().min(1, "is required").max(200, "must be at most 200 characters"),
-  covers: sourced(z.union([z.object({ ozoneDepleting: z.literal(true) }), z.object({ ozoneDepleting: z.literal(false), gwpAbove: num("GWP").min(0, "must be 0 or more") })])),
+  covers: sourced(
+    z.union([
+      z.object({ ozoneDepleting: z.literal(true) }),
+      z.object({ ozoneDepleting: z.literal(false), gwpAbove: num("GWP").min(0, "must be 0 or more") }),
+    ]),
+  ),
   minFullCharge: sourced(massLimit),
   effectiveFrom: sourced(z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "must be a date as YYYY-MM-DD")).optional(),
   thresholds: z.object({
@@ -69,16 +101,29 @@ export const leakRatePartSchema = z.object({
       largeTypes: z.array(z.enum(APPLIANCES)),
       largeFromCharge: massLimit,
       largeEveryMonths: wholeMonths,
-      largeUntilPeriodsBelow: z.int("must be a whole number").min(1, "must be at least 1").max(120, "must be at most 120"),
+      largeUntilPeriodsBelow: z
+        .int("must be a whole number")
+        .min(1, "must be at least 1")
+        .max(120, "must be at most 120"),
       otherEveryMonths: wholeMonths,
-      otherUntilPeriodsBelow: z.int("must be a whole number").min(1, "must be at least 1").max(120, "must be at most 120"),
+      otherUntilPeriodsBelow: z
+        .int("must be a whole number")
+        .min(1, "must be at least 1")
+        .max(120, "must be at most 120"),
       waivedWithAutomaticLeakDetection: z.boolean({ error: "must be true or false" }),
     }),
   ).optional(),
-  automaticLeakDetectionRequired: sourced(z.object({ types: z.array(z.enum(APPLIANCES)), fromCharge: massLimit })).optional(),
+  automaticLeakDetectionRequired: sourced(
+    z.object({ types: z.array(z.enum(APPLIANCES)), fromCharge: massLimit }),
+  ).optional(),
   chronicLeaker: z.object({
     percentOfFullCharge: sourced(positive("% of the full charge", 10000)),
-    reportBy: sourced(z.object({ month: z.int("must be a whole month").min(1, "must be 1 to 12").max(12, "must be 1 to 12"), day: z.int("must be a whole day").min(1, "must be 1 to 31").max(31, "must be 1 to 31") })),
+    reportBy: sourced(
+      z.object({
+        month: z.int("must be a whole month").min(1, "must be 1 to 12").max(12, "must be 1 to 12"),
+        day: z.int("must be a whole day").min(1, "must be 1 to 31").max(31, "must be 1 to 31"),
+      }),
+    ),
   }),
 });
 
@@ -97,11 +142,15 @@ export const ruleProfileSchema = z.object({
       recheckAfterRepairMonths: sourced(wholeMonths),
     })
     .optional(),
-  recordRetentionYears: sourced(z.int("must be a whole number of years").min(1, "must be at least 1 year").max(100, "must be at most 100 years")),
+  recordRetentionYears: sourced(
+    z.int("must be a whole number of years").min(1, "must be at least 1 year").max(100, "must be at most 100 years"),
+  ),
 });
 export type RuleProfileInput = z.infer<typeof ruleProfileSchema>;
 
-export const startCustomProfileInput = z.object({ from: z.enum(["us-federal", "eu-fgas"], { error: "must be us-federal or eu-fgas" }) });
+export const startCustomProfileInput = z.object({
+  from: z.enum(["us-federal", "eu-fgas"], { error: "must be us-federal or eu-fgas" }),
+});
 
 export const customProfileView = z.object({
   profile: ruleProfileSchema.nullable(),

@@ -11,7 +11,11 @@ export function isKnownTimeZone(name: string): boolean {
   }
 }
 
-export const storeNameSchema = z.string({ error: "must be text" }).trim().min(1, "is required").max(120, "must be at most 120 characters");
+export const storeNameSchema = z
+  .string({ error: "must be text" })
+  .trim()
+  .min(1, "is required")
+  .max(120, "must be at most 120 characters");
 export const addressSchema = z.string({ error: "must be text" }).trim().max(300, "must be at most 300 characters");
 export const timeZoneSchema = z
   .string({ error: "must be an IANA time zone name such as America/Chicago" })
@@ -19,7 +23,11 @@ export const timeZoneSchema = z
   .min(1, "is required")
   .refine(isKnownTimeZone, { message: "is not a known IANA time zone (e.g. America/Chicago, Europe/Berlin)" });
 
-export const storeInput = z.object({ name: storeNameSchema, address: addressSchema.default(""), timeZone: timeZoneSchema });
+export const storeInput = z.object({
+  name: storeNameSchema,
+  address: addressSchema.default(""),
+  timeZone: timeZoneSchema,
+});
 export type StoreInput = z.infer<typeof storeInput>;
 
 export const storeUpdateInput = z

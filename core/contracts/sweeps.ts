@@ -38,7 +38,10 @@ export const createSweepInput = z.object({
   id: z.uuid("must be a valid id").optional(),
   planId: z.uuid("must be a valid id"),
   detectorId: z.uuid("must be a valid id"),
-  systemIds: z.array(z.uuid("must be a valid id"), "must be a list of system ids").max(50, "must name at most 50 systems").default([]),
+  systemIds: z
+    .array(z.uuid("must be a valid id"), "must be a list of system ids")
+    .max(50, "must name at most 50 systems")
+    .default([]),
   fans: z.enum(["running", "stopped"], "must be running or stopped"),
   defrost: z.boolean("must be true or false"),
   startedAt: instant.optional(),
@@ -76,7 +79,8 @@ export const sweep = z.object({
 });
 export type Sweep = z.infer<typeof sweep>;
 
-const coord = (axis: string) => z.number(`${axis} must be a number of metres`).finite(`${axis} must be a finite number of metres`);
+const coord = (axis: string) =>
+  z.number(`${axis} must be a number of metres`).finite(`${axis} must be a finite number of metres`);
 
 /** One reading as the device sends it. Plan bounds and times are checked against the sweep. */
 export const readingInput = z.object({
@@ -84,7 +88,14 @@ export const readingInput = z.object({
   x: coord("x"),
   y: coord("y"),
   takenAt: instant,
-  ppm: z.number("must be a number of ppm").finite("must be a finite number of ppm").min(0, "must be 0 ppm or more").max(PPM_CEILING, `must be at most ${PPM_CEILING.toLocaleString("en-US")} ppm (the instrument ceiling); enter a pegged display as over-range`),
+  ppm: z
+    .number("must be a number of ppm")
+    .finite("must be a finite number of ppm")
+    .min(0, "must be 0 ppm or more")
+    .max(
+      PPM_CEILING,
+      `must be at most ${PPM_CEILING.toLocaleString("en-US")} ppm (the instrument ceiling); enter a pegged display as over-range`,
+    ),
   atLeast: z.boolean("must be true or false").default(false),
   samplePoint: z.enum(SAMPLE_POINTS, `must be one of: ${SAMPLE_POINTS.join(", ")}`),
   note: z.string("must be text").trim().max(500, "must be at most 500 characters").default(""),
@@ -93,7 +104,10 @@ export type ReadingInput = z.input<typeof readingInput>;
 
 /** The batch is read loosely so one bad reading is reported alone instead of failing the batch. */
 export const readingsBatchInput = z.object({
-  readings: z.array(z.unknown(), "must be a list of readings").min(1, "must hold at least one reading").max(READINGS_BATCH_MAX, `must hold at most ${READINGS_BATCH_MAX} readings per request`),
+  readings: z
+    .array(z.unknown(), "must be a list of readings")
+    .min(1, "must hold at least one reading")
+    .max(READINGS_BATCH_MAX, `must hold at most ${READINGS_BATCH_MAX} readings per request`),
 });
 
 export const rejectedReading = z.object({

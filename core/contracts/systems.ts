@@ -27,7 +27,11 @@ export type ChargeInput = z.infer<typeof chargeInput>;
 const systemFields = {
   name: z.string({ error: "must be text" }).trim().min(1, "is required").max(120, "must be at most 120 characters"),
   /** An R-number from the catalogue (GET /api/refrigerants); checked on the server. */
-  refrigerantId: z.string({ error: "must be an R-number such as R-448A" }).trim().min(1, "is required").max(40, "must be at most 40 characters"),
+  refrigerantId: z
+    .string({ error: "must be an R-number such as R-448A" })
+    .trim()
+    .min(1, "is required")
+    .max(40, "must be at most 40 characters"),
   fullCharge: chargeInput,
   applianceType: applianceTypeSchema,
   automaticLeakDetection: z.boolean({ error: "must be true or false" }),
@@ -60,7 +64,12 @@ export const refrigerantSummary = z.object({
 });
 export type RefrigerantSummary = z.infer<typeof refrigerantSummary>;
 
-export const caution = z.object({ id: z.string(), level: z.enum(["warning", "notice"]), text: z.string(), source: z.string() });
+export const caution = z.object({
+  id: z.string(),
+  level: z.enum(["warning", "notice"]),
+  text: z.string(),
+  source: z.string(),
+});
 export type Caution = z.infer<typeof caution>;
 
 export const system = z.object({

@@ -28,21 +28,31 @@ async function child(kind: string, count: number, runs: number): Promise<void> {
     const deg = (m: number) => (m * 180) / (Math.PI * 6371008.8);
     const fc = featureCollection(input.readings.map((p) => point([deg(p.x), -deg(p.y)], { ppm: p.ppm })));
     const h = 0.25;
-    const bbox: [number, number, number, number] = [deg(h / 2), -deg(input.plan.height - h / 2), deg(input.plan.width - h / 2), -deg(h / 2)];
+    const bbox: [number, number, number, number] = [
+      deg(h / 2),
+      -deg(input.plan.height - h / 2),
+      deg(input.plan.width - h / 2),
+      -deg(h / 2),
+    ];
     const t0 = performance.now();
     const grid = interpolate(fc, h, { gridType: "point", property: "ppm", units: "meters", weight: 2, bbox });
     times.push(performance.now() - t0);
-    if (grid.features.length < 90_000) throw new Error(`turf grid has ${grid.features.length} points, expected about 96,000`);
+    if (grid.features.length < 90_000)
+      throw new Error(`turf grid has ${grid.features.length} points, expected about 96,000`);
   }
   const maxRssMb = process.resourceUsage().maxRSS / 1024;
   process.stdout.write(JSON.stringify({ median: median(times), times, maxRssMb }) + "\n");
 }
 
 function runChild(kind: string, count: number, runs: number): { median: number; times: number[]; maxRssMb: number } {
-  const out = execFileSync(process.execPath, [...process.execArgv, process.argv[1], "--child", kind, String(count), String(runs)], {
-    encoding: "utf8",
-    maxBuffer: 1 << 24,
-  });
+  const out = execFileSync(
+    process.execPath,
+    [...process.execArgv, process.argv[1], "--child", kind, String(count), String(runs)],
+    {
+      encoding: "utf8",
+      maxBuffer: 1 << 24,
+    },
+  );
   return JSON.parse(out.trim().split("\n").pop()!);
 }
 
@@ -51,11 +61,17 @@ async function main(): Promise<void> {
   if (argv[0] === "--child") return child(argv[1], Number(argv[2]), Number(argv[3]));
   const skipTurf = argv.includes("--no-turf");
   console.log("Full analysis (lag, grid, geodesic searches, field map, source fit, diagnostics)");
-  console.log("on a synthetic 100 m x 60 m store at 0.25 m cells (400 x 240 = 96,000 cells) with walls and 16 lineups.");
+  console.log(
+    "on a synthetic 100 m x 60 m store at 0.25 m cells (400 x 240 = 96,000 cells) with walls and 16 lineups.",
+  );
   const r500 = runChild("locate", 500, 7);
-  console.log(`  500 readings:   median ${r500.median.toFixed(0)} ms over ${r500.times.length} runs, peak memory ${r500.maxRssMb.toFixed(0)} MB (targets 1000 ms, 300 MB)`);
+  console.log(
+    `  500 readings:   median ${r500.median.toFixed(0)} ms over ${r500.times.length} runs, peak memory ${r500.maxRssMb.toFixed(0)} MB (targets 1000 ms, 300 MB)`,
+  );
   const r2000 = runChild("locate", 2000, 5);
-  console.log(`  2,000 readings: median ${r2000.median.toFixed(0)} ms over ${r2000.times.length} runs, peak memory ${r2000.maxRssMb.toFixed(0)} MB (targets 3000 ms, 300 MB)`);
+  console.log(
+    `  2,000 readings: median ${r2000.median.toFixed(0)} ms over ${r2000.times.length} runs, peak memory ${r2000.maxRssMb.toFixed(0)} MB (targets 3000 ms, 300 MB)`,
+  );
 
   const dir = mkdtempSync(join(tmpdir(), "bench-locate-"));
   const file = join(dir, "store-500.json");
@@ -68,12 +84,18 @@ async function main(): Promise<void> {
     if (res.status !== 0) throw new Error(`locate CLI failed: ${res.stderr}`);
     JSON.parse(res.stdout);
   }
-  console.log(`  command line, 500 readings, including process start-up: median ${median(cli).toFixed(0)} ms over 5 runs (target 2500 ms)`);
+  console.log(
+    `  command line, 500 readings, including process start-up: median ${median(cli).toFixed(0)} ms over 5 runs (target 2500 ms)`,
+  );
 
   if (skipTurf) return;
   const turf = runChild("turf", 500, 1);
-  console.log(`  @turf/interpolate IDW, same grid and 500 readings: ${turf.median.toFixed(0)} ms, peak memory ${turf.maxRssMb.toFixed(0)} MB`);
-  console.log(`  ratio: the full analysis is ${(turf.median / r500.median).toFixed(1)}x faster than turf's IDW (target at least 5x)`);
+  console.log(
+    `  @turf/interpolate IDW, same grid and 500 readings: ${turf.median.toFixed(0)} ms, peak memory ${turf.maxRssMb.toFixed(0)} MB`,
+  );
+  console.log(
+    `  ratio: the full analysis is ${(turf.median / r500.median).toFixed(1)}x faster than turf's IDW (target at least 5x)`,
+  );
 }
 
 main().catch((e) => {

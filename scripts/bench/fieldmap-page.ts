@@ -24,7 +24,12 @@ function median(xs: number[]): number {
   return s[Math.floor(s.length / 2)];
 }
 
-(window as unknown as { benchDraw: unknown }).benchDraw = (encoded: EncodedGrid, widthM: number, heightM: number, runs: number) => {
+(window as unknown as { benchDraw: unknown }).benchDraw = (
+  encoded: EncodedGrid,
+  widthM: number,
+  heightM: number,
+  runs: number,
+) => {
   const decodeStart = performance.now();
   const grid = decodeField(encoded);
   const decodeMs = performance.now() - decodeStart;
@@ -46,5 +51,11 @@ function median(xs: number[]): number {
     ctx.getImageData(0, 0, 1, 1); // reading a pixel back waits for the drawing to finish
     times.push(performance.now() - t0);
   }
-  return { cells: grid.width * grid.height, decodeMs, firstMs: times[0], medianMs: median(times), maxMs: Math.max(...times) };
+  return {
+    cells: grid.width * grid.height,
+    decodeMs,
+    firstMs: times[0],
+    medianMs: median(times),
+    maxMs: Math.max(...times),
+  };
 };

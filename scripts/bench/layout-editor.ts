@@ -38,7 +38,16 @@ export interface FrameStats {
 }
 
 const CHROMIUM = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
-const ARGS = ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--disable-dev-shm-usage"];
+const ARGS = [
+  "--no-sandbox",
+  "--disable-gpu",
+  "--disable-quic",
+  "--no-first-run",
+  "--disable-background-networking",
+  "--disable-component-update",
+  "--disable-sync",
+  "--disable-dev-shm-usage",
+];
 /** Two 60 Hz frames: a gap above this is a dropped frame. */
 const LONG_FRAME_MS = 33.4;
 
@@ -96,7 +105,10 @@ export async function measureEditorDrag(o: EditorBenchOptions): Promise<FrameSta
         await page.mouse.move(sx + 240 * along, sy + 60 * Math.sin(along * Math.PI));
       }
     };
-    const collect = async () => (await page.evaluate("(() => { window.__recording = false; const f = window.__frames; window.__frames = []; return f; })()")) as number[];
+    const collect = async () =>
+      (await page.evaluate(
+        "(() => { window.__recording = false; const f = window.__frames; window.__frames = []; return f; })()",
+      )) as number[];
     const toGaps = (frames: number[]) => frames.slice(1).map((t, i) => t - frames[i]);
 
     // Baseline: the same moves over the plan with no button held (nothing is dragged).
@@ -135,7 +147,12 @@ export async function measureEditorDrag(o: EditorBenchOptions): Promise<FrameSta
       dragMs: dragMs / drags,
       fixturesOnPage,
       movedM: cx - firstX,
-      hover: { frames: hoverGaps.length, medianMs: quantile(hoverGaps, 0.5), p95Ms: quantile(hoverGaps, 0.95), longFrames: hoverGaps.filter((g) => g > LONG_FRAME_MS).length },
+      hover: {
+        frames: hoverGaps.length,
+        medianMs: quantile(hoverGaps, 0.5),
+        p95Ms: quantile(hoverGaps, 0.95),
+        longFrames: hoverGaps.filter((g) => g > LONG_FRAME_MS).length,
+      },
     };
   } finally {
     await browser.close();

@@ -33,7 +33,9 @@ const TARGET_MS = 100;
 function adminUrl(): string {
   const url = process.env.BENCH_DATABASE_URL ?? process.env.TEST_ADMIN_DATABASE_URL;
   if (!url) {
-    console.error("Set BENCH_DATABASE_URL (or TEST_ADMIN_DATABASE_URL) to an admin URL, e.g.\n  bash scripts/pg.sh start test 55200\n  BENCH_DATABASE_URL=postgres://postgres@127.0.0.1:55200/postgres npm run bench:layout");
+    console.error(
+      "Set BENCH_DATABASE_URL (or TEST_ADMIN_DATABASE_URL) to an admin URL, e.g.\n  bash scripts/pg.sh start test 55200\n  BENCH_DATABASE_URL=postgres://postgres@127.0.0.1:55200/postgres npm run bench:layout",
+    );
     process.exit(2);
   }
   return url;
@@ -43,21 +45,48 @@ function adminUrl(): string {
 function fixtures(n: number): Fixture[] {
   const list: Fixture[] = [];
   for (let i = 0; i < n; i++) {
-    const col = i % 20, row = Math.floor(i / 20);
-    const x = 1 + col * 4.9, y = 1 + row * 2.9;
-    const box: [number, number][] = [[x, y], [x + 3.66, y], [x + 3.66, y + 1.1], [x, y + 1.1]];
+    const col = i % 20,
+      row = Math.floor(i / 20);
+    const x = 1 + col * 4.9,
+      y = 1 + row * 2.9;
+    const box: [number, number][] = [
+      [x, y],
+      [x + 3.66, y],
+      [x + 3.66, y + 1.1],
+      [x, y + 1.1],
+    ];
     const base = { id: randomUUID(), label: `Fixture ${i + 1}`, systemId: null, hasFans: i % 2 === 0 };
     switch (i % 8) {
-      case 0: list.push({ ...base, kind: "door-case", polygon: box, doorCount: 5 }); break;
-      case 1: list.push({ ...base, kind: "walk-in-cooler", polygon: box, door: { edge: 2, offset: 0.5, width: 1 } }); break;
-      case 2: list.push({ ...base, kind: "benign-zone", polygon: box, note: "aerosols", typicalPpm: 3 }); break;
-      case 3: list.push({ ...base, kind: "valve", point: { x: x + 1, y: y + 0.5 } }); break;
+      case 0:
+        list.push({ ...base, kind: "door-case", polygon: box, doorCount: 5 });
+        break;
+      case 1:
+        list.push({ ...base, kind: "walk-in-cooler", polygon: box, door: { edge: 2, offset: 0.5, width: 1 } });
+        break;
+      case 2:
+        list.push({ ...base, kind: "benign-zone", polygon: box, note: "aerosols", typicalPpm: 3 });
+        break;
+      case 3:
+        list.push({ ...base, kind: "valve", point: { x: x + 1, y: y + 0.5 } });
+        break;
       case 4: {
         // An L-shaped gondola end (6 vertices).
-        list.push({ ...base, kind: "gondola", polygon: [[x, y], [x + 3.6, y], [x + 3.6, y + 0.6], [x + 1.2, y + 0.6], [x + 1.2, y + 1.2], [x, y + 1.2]] });
+        list.push({
+          ...base,
+          kind: "gondola",
+          polygon: [
+            [x, y],
+            [x + 3.6, y],
+            [x + 3.6, y + 0.6],
+            [x + 1.2, y + 0.6],
+            [x + 1.2, y + 1.2],
+            [x, y + 1.2],
+          ],
+        });
         break;
       }
-      default: list.push({ ...base, kind: i % 2 ? "open-case" : "island-case", polygon: box });
+      default:
+        list.push({ ...base, kind: i % 2 ? "open-case" : "island-case", polygon: box });
     }
   }
   return list;
@@ -83,13 +112,32 @@ async function main() {
   try {
     await migrateDb(db);
     const ctx: AppContext = {
-      db, pool, mailer, logger: pino({ level: "silent" }),
-      config: { sessionSecret: "bench-secret-bench-secret", bcryptCost: 4, loginRateLimit: 1000, loginRateWindowMs: 60_000, appUrl: "http://bench.test", outboxEnabled: false, uploadsDir: os.tmpdir(), secureCookies: false, serveClient: true },
+      db,
+      pool,
+      mailer,
+      logger: pino({ level: "silent" }),
+      config: {
+        sessionSecret: "bench-secret-bench-secret",
+        bcryptCost: 4,
+        loginRateLimit: 1000,
+        loginRateWindowMs: 60_000,
+        appUrl: "http://bench.test",
+        outboxEnabled: false,
+        uploadsDir: os.tmpdir(),
+        secureCookies: false,
+        serveClient: true,
+      },
     };
     const [company] = await db.insert(companies).values({ name: "Benchmark Grocers" }).returning();
-    const [store] = await db.insert(stores).values({ companyId: company.id, name: "Benchmark – Long Aisles", timeZone: "UTC" }).returning();
+    const [store] = await db
+      .insert(stores)
+      .values({ companyId: company.id, name: "Benchmark – Long Aisles", timeZone: "UTC" })
+      .returning();
     const password = "benchmark password";
-    const [user] = await db.insert(users).values({ email: "lead@bench.test", name: "Bench Lead", passwordHash: await bcrypt.hash(password, 4) }).returning();
+    const [user] = await db
+      .insert(users)
+      .values({ email: "lead@bench.test", name: "Bench Lead", passwordHash: await bcrypt.hash(password, 4) })
+      .returning();
     await db.insert(memberships).values({ companyId: company.id, userId: user.id, role: "lead-tech" });
 
     server = http.createServer(createApp(ctx));
@@ -98,7 +146,11 @@ async function main() {
     let cookie = "";
     let csrf = "";
     const call = async (method: string, path: string, body?: unknown) => {
-      const res = await fetch(base + path, { method, headers: { cookie, "content-type": "application/json", "x-csrf-token": csrf }, body: body === undefined ? undefined : JSON.stringify(body) });
+      const res = await fetch(base + path, {
+        method,
+        headers: { cookie, "content-type": "application/json", "x-csrf-token": csrf },
+        body: body === undefined ? undefined : JSON.stringify(body),
+      });
       const set = res.headers.getSetCookie().map((c) => c.split(";")[0]);
       if (set.length) cookie = set.join("; ");
       const json = await res.json();
@@ -137,20 +189,37 @@ async function main() {
     console.log(`layout API benchmark (${os.cpus().length} cores, Node ${process.version})`);
     console.log(`  plan with ${count} fixtures, response ${(bytes / 1024).toFixed(1)} KiB`);
     console.log(`  PUT all fixtures once: ${saveMs.toFixed(1)} ms`);
-    console.log(`  GET /api/plans/:id/fixtures × ${requests}: median ${med.toFixed(2)} ms, p95 ${p95.toFixed(2)} ms, min ${times[0].toFixed(2)} ms, max ${times.at(-1)!.toFixed(2)} ms`);
+    console.log(
+      `  GET /api/plans/:id/fixtures × ${requests}: median ${med.toFixed(2)} ms, p95 ${p95.toFixed(2)} ms, min ${times[0].toFixed(2)} ms, max ${times.at(-1)!.toFixed(2)} ms`,
+    );
     console.log(`  target: median under ${TARGET_MS} ms → ${med < TARGET_MS ? "MET" : "NOT MET"}`);
     if (process.env.BENCH_SKIP_EDITOR === "1") console.log("  editor frame times: skipped (BENCH_SKIP_EDITOR=1)");
     else {
       // The editor half needs the built client (dist/client): `npx vite build` first.
       const origin = base.replace(/\/api$/, "");
-      const f = await measureEditorDrag({ origin, email: "lead@bench.test", password, storeId: store.id, planId: plan.id }).catch((err) => {
+      const f = await measureEditorDrag({
+        origin,
+        email: "lead@bench.test",
+        password,
+        storeId: store.id,
+        planId: plan.id,
+      }).catch((err) => {
         console.error("  editor benchmark failed:", err instanceof Error ? err.message : err);
         process.exitCode = 1;
         return null;
       });
-      if (f) console.log(`  editor, dragging one of ${f.fixturesOnPage} fixtures in Chromium (${f.frames} frames over 3 drags of ${f.dragMs.toFixed(0)} ms; it moved ${f.movedM.toFixed(2)} m in all):`);
-      if (f) console.log(`    frame time median ${f.medianMs.toFixed(1)} ms, p95 ${f.p95Ms.toFixed(1)} ms, max ${f.maxMs.toFixed(1)} ms; frames over 33.4 ms: ${f.longFrames}`);
-      if (f) console.log(`    the same pointer path without a drag (page and machine alone): median ${f.hover.medianMs.toFixed(1)} ms, p95 ${f.hover.p95Ms.toFixed(1)} ms; ${f.hover.longFrames} of ${f.hover.frames} frames over 33.4 ms`);
+      if (f)
+        console.log(
+          `  editor, dragging one of ${f.fixturesOnPage} fixtures in Chromium (${f.frames} frames over 3 drags of ${f.dragMs.toFixed(0)} ms; it moved ${f.movedM.toFixed(2)} m in all):`,
+        );
+      if (f)
+        console.log(
+          `    frame time median ${f.medianMs.toFixed(1)} ms, p95 ${f.p95Ms.toFixed(1)} ms, max ${f.maxMs.toFixed(1)} ms; frames over 33.4 ms: ${f.longFrames}`,
+        );
+      if (f)
+        console.log(
+          `    the same pointer path without a drag (page and machine alone): median ${f.hover.medianMs.toFixed(1)} ms, p95 ${f.hover.p95Ms.toFixed(1)} ms; ${f.hover.longFrames} of ${f.hover.frames} frames over 33.4 ms`,
+        );
     }
     if (med >= TARGET_MS) process.exitCode = 1;
   } finally {

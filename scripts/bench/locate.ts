@@ -6,13 +6,22 @@ import { readdirSync, readFileSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 import type { Polygon } from "#core/analysis/geometry/types";
-import { checkTargets, naiveAnswer, scoreStore, summarise, type StoreScore, type Summary, type Suspect, type Truth } from "./score";
+import {
+  checkTargets,
+  naiveAnswer,
+  scoreStore,
+  summarise,
+  type StoreScore,
+  type Summary,
+  type Suspect,
+  type Truth,
+} from "./score";
 
 const here = dirname(fileURLToPath(import.meta.url));
 const args = process.argv.slice(2);
 const dirFlag = args.indexOf("--dir");
 // --dir scores another set (e.g. a held-out one from generate.ts --first 13 --out DIR).
-const scenarioDir = dirFlag >= 0 ? args.splice(dirFlag, 2)[1] ?? "" : join(here, "scenarios");
+const scenarioDir = dirFlag >= 0 ? (args.splice(dirFlag, 2)[1] ?? "") : join(here, "scenarios");
 const asJson = args.includes("--json");
 const detail = args.includes("--detail");
 const onlyFamilies = args.filter((a) => !a.startsWith("--"));
@@ -24,7 +33,8 @@ async function loadLocator(): Promise<{ locate: LocateFn | null; why: string }> 
   const url = new URL("../../core/analysis/locate.ts", import.meta.url).href;
   try {
     const mod = (await import(url)) as { locate?: unknown };
-    if (typeof mod.locate !== "function") return { locate: null, why: "core/analysis/locate.ts does not export a locate(input) function" };
+    if (typeof mod.locate !== "function")
+      return { locate: null, why: "core/analysis/locate.ts does not export a locate(input) function" };
     return { locate: mod.locate as LocateFn, why: "" };
   } catch (err) {
     const msg = err instanceof Error ? err.message : String(err);
@@ -48,12 +58,18 @@ function suspectsOf(result: unknown): Suspect[] {
 
 interface StoreFile {
   name: string;
-  input: { plan: { backgroundZones?: { polygon: number[][] }[] }; instrument: { alarmPpm?: number }; readings: { x: number; y: number; ppm: number }[] };
+  input: {
+    plan: { backgroundZones?: { polygon: number[][] }[] };
+    instrument: { alarmPpm?: number };
+    readings: { x: number; y: number; ppm: number }[];
+  };
   truth: Truth;
 }
 
 function loadStores(): StoreFile[] {
-  const names = readdirSync(scenarioDir).filter((f) => f.endsWith(".json") && !f.endsWith(".truth.json")).sort();
+  const names = readdirSync(scenarioDir)
+    .filter((f) => f.endsWith(".json") && !f.endsWith(".truth.json"))
+    .sort();
   if (names.length === 0) throw new Error(`no scenarios in ${scenarioDir}: run tsx scripts/bench/simulate/generate.ts`);
   return names
     .map((f) => ({
@@ -68,10 +84,26 @@ const fmt = (v: number | null, digits = 2) => (v === null ? "-" : Number.isFinit
 const pct = (v: number | null) => (v === null ? "-" : `${(100 * v).toFixed(0)}%`);
 
 function table(title: string, rows: [string, Summary][]): string {
-  const head = ["family", "stores", "median top-1 m", "top-3 <=1.5 m", "misses", "false alarms", "in benign zone", "radius cover", "both in top-4"];
+  const head = [
+    "family",
+    "stores",
+    "median top-1 m",
+    "top-3 <=1.5 m",
+    "misses",
+    "false alarms",
+    "in benign zone",
+    "radius cover",
+    "both in top-4",
+  ];
   const body = rows.map(([name, s]) => [
-    name, String(s.stores), fmt(s.medianTop1), pct(s.top3WithinShare), s.leakStores ? `${s.misses}/${s.leakStores}` : "-",
-    s.noLeakStores ? `${s.falseAlarms}/${s.noLeakStores}` : "-", String(s.inBenignZone), pct(s.radiusCoverage),
+    name,
+    String(s.stores),
+    fmt(s.medianTop1),
+    pct(s.top3WithinShare),
+    s.leakStores ? `${s.misses}/${s.leakStores}` : "-",
+    s.noLeakStores ? `${s.falseAlarms}/${s.noLeakStores}` : "-",
+    String(s.inBenignZone),
+    pct(s.radiusCoverage),
     s.twoLeakStores ? pct(s.bothInTop4Share) : "-",
   ]);
   const widths = head.map((h, c) => Math.max(h.length, ...body.map((r) => r[c].length)));
@@ -81,7 +113,10 @@ function table(title: string, rows: [string, Summary][]): string {
 
 function byFamily(stores: StoreFile[], scores: StoreScore[]): [string, Summary][] {
   const families = [...new Set(stores.map((s) => s.truth.family))];
-  return [...families.map((f) => [f, summarise(scores.filter((s) => s.family === f))] as [string, Summary]), ["overall", summarise(scores)]];
+  return [
+    ...families.map((f) => [f, summarise(scores.filter((s) => s.family === f))] as [string, Summary]),
+    ["overall", summarise(scores)],
+  ];
 }
 
 async function main() {
@@ -107,7 +142,8 @@ async function main() {
     }
     locatorScores.push(scoreStore(s.truth, suspects, zones));
     if (detail) {
-      const l = locatorScores[locatorScores.length - 1], n = naiveScores[naiveScores.length - 1];
+      const l = locatorScores[locatorScores.length - 1],
+        n = naiveScores[naiveScores.length - 1];
       const r = suspects[0]?.radius;
       console.log(
         `${s.name.padEnd(16)} suspects ${String(suspects.length).padStart(2)}  top-1 ${fmt(l.top1Error).padStart(6)} m` +
@@ -120,7 +156,13 @@ async function main() {
   const overall = (rows: [string, Summary][]) => rows[rows.length - 1][1];
   const targets = located ? checkTargets(overall(located), overall(naive)) : null;
   if (asJson) {
-    console.log(JSON.stringify({ stores: stores.length, locatorMissing: locate ? null : why, failures, naive, locator: located, targets }, null, 1));
+    console.log(
+      JSON.stringify(
+        { stores: stores.length, locatorMissing: locate ? null : why, failures, naive, locator: located, targets },
+        null,
+        1,
+      ),
+    );
     return;
   }
   const out: string[] = [`${stores.length} stores from ${scenarioDir}`];
@@ -129,8 +171,17 @@ async function main() {
     out.push("", `Locator not scored: ${why}.`);
   } else {
     out.push("", table(`Locator (${(elapsed / stores.length).toFixed(0)} ms per store):`, located));
-    if (failures.length) out.push("", `${failures.length} store(s) rejected by the locator (scored as no suspect):`, ...failures.map((f) => `  ${f}`));
-    out.push("", "Targets (overall):", ...targets!.map((t) => `  [${t.pass === null ? "n/a " : t.pass ? "pass" : "FAIL"}] ${t.name}: ${t.detail}`));
+    if (failures.length)
+      out.push(
+        "",
+        `${failures.length} store(s) rejected by the locator (scored as no suspect):`,
+        ...failures.map((f) => `  ${f}`),
+      );
+    out.push(
+      "",
+      "Targets (overall):",
+      ...targets!.map((t) => `  [${t.pass === null ? "n/a " : t.pass ? "pass" : "FAIL"}] ${t.name}: ${t.detail}`),
+    );
   }
   out.push(
     "",
@@ -141,6 +192,6 @@ async function main() {
 }
 
 main().catch((err) => {
-  console.error(`bench:locate failed: ${err instanceof Error ? err.stack ?? err.message : String(err)}`);
+  console.error(`bench:locate failed: ${err instanceof Error ? (err.stack ?? err.message) : String(err)}`);
   process.exit(1);
 });

@@ -45,10 +45,10 @@ export function scoreStore(truth: Truth, suspects: readonly Suspect[], zones: re
   const first = suspects[0];
   const top1Error = leakStore && first ? nearest(first) : null;
   const inBenignZone = suspects.filter((s) => zones.some((z) => pointInPolygon([s.x, s.y] as Vec, z))).length;
-  const radiusCovered = leakStore && first && first.radius !== undefined ? top1Error! <= first.radius : leakStore && !first ? false : null;
-  const bothInTop4 = leaks.length >= 2
-    ? leaks.every((l) => suspects.slice(0, 4).some((s) => dist(s, l) <= FOUND_WITHIN_M))
-    : null;
+  const radiusCovered =
+    leakStore && first && first.radius !== undefined ? top1Error! <= first.radius : leakStore && !first ? false : null;
+  const bothInTop4 =
+    leaks.length >= 2 ? leaks.every((l) => suspects.slice(0, 4).some((s) => dist(s, l) <= FOUND_WITHIN_M)) : null;
   return {
     family: truth.family,
     leakStore,
@@ -102,7 +102,8 @@ export function summarise(scores: readonly StoreScore[]): Summary {
     falseAlarms: clean.filter((s) => s.falseAlarm).length,
     falseAlarmShare: share(clean.filter((s) => s.falseAlarm).length, clean.length),
     inBenignZone: scores.reduce((a, s) => a + s.inBenignZone, 0),
-    radiusCoverage: withRadius.length === leak.length ? share(leak.filter((s) => s.radiusCovered).length, leak.length) : null,
+    radiusCoverage:
+      withRadius.length === leak.length ? share(leak.filter((s) => s.radiusCovered).length, leak.length) : null,
     twoLeakStores: two.length,
     bothInTop4Share: share(two.filter((s) => s.bothInTop4).length, two.length),
   };
@@ -134,7 +135,8 @@ export interface TargetCheck {
 export function checkTargets(locator: Summary, naive: Summary): TargetCheck[] {
   const f = (v: number | null, digits = 2) => (v === null ? "n/a" : Number.isFinite(v) ? v.toFixed(digits) : "inf");
   const pct = (v: number | null) => (v === null ? "n/a" : `${(100 * v).toFixed(0)}%`);
-  const m = locator.medianTop1, n = naive.medianTop1;
+  const m = locator.medianTop1,
+    n = naive.medianTop1;
   return [
     { name: "median top-1 error <= 1.0 m", pass: m === null ? null : m <= 1.0, detail: `${f(m)} m` },
     {
@@ -142,9 +144,21 @@ export function checkTargets(locator: Summary, naive: Summary): TargetCheck[] {
       pass: m === null || n === null ? null : m <= 0.5 * n,
       detail: `${f(m)} m vs naive ${f(n)} m`,
     },
-    { name: "top-3 suspect within 1.5 m in >= 85% of leak stores", pass: locator.top3WithinShare === null ? null : locator.top3WithinShare >= 0.85, detail: pct(locator.top3WithinShare) },
-    { name: "no suspect inside a benign-source zone", pass: locator.inBenignZone === 0, detail: `${locator.inBenignZone}` },
-    { name: "false alarms <= 10% of no-leak stores", pass: locator.falseAlarmShare === null ? null : locator.falseAlarmShare <= 0.1, detail: pct(locator.falseAlarmShare) },
+    {
+      name: "top-3 suspect within 1.5 m in >= 85% of leak stores",
+      pass: locator.top3WithinShare === null ? null : locator.top3WithinShare >= 0.85,
+      detail: pct(locator.top3WithinShare),
+    },
+    {
+      name: "no suspect inside a benign-source zone",
+      pass: locator.inBenignZone === 0,
+      detail: `${locator.inBenignZone}`,
+    },
+    {
+      name: "false alarms <= 10% of no-leak stores",
+      pass: locator.falseAlarmShare === null ? null : locator.falseAlarmShare <= 0.1,
+      detail: pct(locator.falseAlarmShare),
+    },
     {
       name: "radius coverage 80-95% of leak stores",
       pass: locator.radiusCoverage === null ? null : locator.radiusCoverage >= 0.8 && locator.radiusCoverage <= 0.95,

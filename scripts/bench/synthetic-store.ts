@@ -3,7 +3,12 @@
 import type { LocatorInputRaw } from "#core/contracts/locator-input";
 
 type Poly = [number, number][];
-const rect = (x0: number, y0: number, x1: number, y1: number): Poly => [[x0, y0], [x1, y0], [x1, y1], [x0, y1]];
+const rect = (x0: number, y0: number, x1: number, y1: number): Poly => [
+  [x0, y0],
+  [x1, y0],
+  [x1, y1],
+  [x0, y1],
+];
 
 /** Deterministic pseudo-random numbers (mulberry32), so every run times the same store. */
 function random(seed: number): () => number {
@@ -70,7 +75,14 @@ export function syntheticStore(readingCount: number, seed = 7): LocatorInputRaw 
     readings.push({ x, y, t: Math.round(t * 10) / 10, ppm });
   }
   return {
-    plan: { width: W, height: H, obstacles, fixtures, riskPoints: [{ id: "ls-1", kind: "line-set", x: 41.5, y: 30 }], backgroundZones: [] },
+    plan: {
+      width: W,
+      height: H,
+      obstacles,
+      fixtures,
+      riskPoints: [{ id: "ls-1", kind: "line-set", x: 41.5, y: 30 }],
+      backgroundZones: [],
+    },
     instrument: { transportDelayS: 5, timeConstantS: 1.5, alarmPpm: 2 },
     readings,
   };

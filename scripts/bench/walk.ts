@@ -20,7 +20,9 @@ import { eq } from "drizzle-orm";
 
 const adminUrl = process.env.BENCH_DATABASE_URL ?? process.env.TEST_ADMIN_DATABASE_URL;
 if (!adminUrl) {
-  console.error("Set BENCH_DATABASE_URL (or TEST_ADMIN_DATABASE_URL), e.g.\n  bash scripts/pg.sh start test 55320\n  BENCH_DATABASE_URL=postgres://postgres@127.0.0.1:55320/postgres npm run bench:walk");
+  console.error(
+    "Set BENCH_DATABASE_URL (or TEST_ADMIN_DATABASE_URL), e.g.\n  bash scripts/pg.sh start test 55320\n  BENCH_DATABASE_URL=postgres://postgres@127.0.0.1:55320/postgres npm run bench:walk",
+  );
   process.exit(2);
 }
 process.env.TEST_ADMIN_DATABASE_URL = adminUrl;
@@ -43,7 +45,11 @@ const server = await startE2eServer();
 const browser = await launchBrowser();
 try {
   const co = await seedCompany(server.ctx, "Benchmark Provisions");
-  await mapStoreForWalk(server.ctx, { companyId: co.company.id, storeId: co.store.id, createdById: co.people["lead-tech"].userId });
+  await mapStoreForWalk(server.ctx, {
+    companyId: co.company.id,
+    storeId: co.store.id,
+    createdById: co.people["lead-tech"].userId,
+  });
   const context = await newContext(browser, { viewport: { width: 1024, height: 768 } });
   const page = await context.newPage();
   await signInThroughForm(page, server.url, co.people.technician.email, PASSWORD);
@@ -73,10 +79,23 @@ try {
           const row = Math.floor(i / 40);
           const col = i % 40;
           tx.objectStore("readings").put({
-            id: crypto.randomUUID(), sweepId, seq: 1_000_000 + i,
-            x: 12 + (row % 2 ? 39 - col : col) * 0.95, y: 12 + (row % 19) * 0.95,
-            takenAt: new Date(t0 + 1000 + i * 2000).toISOString(), ppm: i % 97 === 0 ? 3 : 0, atLeast: false, samplePoint: "grille", note: "",
-            draft: false, state: "pending", onServer: false, editPending: false, deletePending: false, editedAt: null, reasons: null,
+            id: crypto.randomUUID(),
+            sweepId,
+            seq: 1_000_000 + i,
+            x: 12 + (row % 2 ? 39 - col : col) * 0.95,
+            y: 12 + (row % 19) * 0.95,
+            takenAt: new Date(t0 + 1000 + i * 2000).toISOString(),
+            ppm: i % 97 === 0 ? 3 : 0,
+            atLeast: false,
+            samplePoint: "grille",
+            note: "",
+            draft: false,
+            state: "pending",
+            onServer: false,
+            editPending: false,
+            deletePending: false,
+            editedAt: null,
+            reasons: null,
           });
         }
         tx.objectStore("meta").put(2_000_000, "seq");
@@ -98,7 +117,8 @@ try {
 
   await queue(1000, 0);
   const sync = await timeSync();
-  const onServer = (await server.ctx.db.select({ id: readings.id }).from(readings).where(eq(readings.sweepId, sweepId))).length;
+  const onServer = (await server.ctx.db.select({ id: readings.id }).from(readings).where(eq(readings.sweepId, sweepId)))
+    .length;
 
   await queue(990, 1000);
   const sync2 = await timeSync();
@@ -106,7 +126,9 @@ try {
   await page.getByTestId("walk-count").filter({ hasText: "1990 readings" }).waitFor({ timeout: 30_000 });
   await page.waitForTimeout(500);
 
-  await page.evaluate(`window.__tapDown = []; window.addEventListener("pointerdown", () => window.__tapDown.push(performance.now()), { capture: true });`);
+  await page.evaluate(
+    `window.__tapDown = []; window.addEventListener("pointerdown", () => window.__tapDown.push(performance.now()), { capture: true });`,
+  );
   const latencies: number[] = [];
   const drawMs: number[] = [];
   for (let i = 0; i < TAPS; i++) {
@@ -132,10 +154,19 @@ try {
   const p95 = latencies[Math.min(latencies.length - 1, Math.floor(latencies.length * 0.95))];
 
   console.log(`Walk benchmark — ${os.cpus().length} cores, ${os.cpus()[0]?.model ?? "cpu"}, Chromium headless`);
-  console.log(`  sync of 1,000 queued readings: ${sync.ms.toFixed(0)} ms (target < ${SYNC_TARGET_MS} ms) ${sync.ms < SYNC_TARGET_MS ? "PASS" : "FAIL"}; confirmed ${sync.report.confirmed}, on the server ${onServer}`);
+  console.log(
+    `  sync of 1,000 queued readings: ${sync.ms.toFixed(0)} ms (target < ${SYNC_TARGET_MS} ms) ${sync.ms < SYNC_TARGET_MS ? "PASS" : "FAIL"}; confirmed ${sync.report.confirmed}, on the server ${onServer}`,
+  );
   console.log(`  sync of 990 more (sweep now 1,990): ${sync2.ms.toFixed(0)} ms`);
-  console.log(`  tap-to-drawn with ${total - 1}→${total} readings drawn, ${TAPS} taps: median ${median.toFixed(1)} ms, p95 ${p95.toFixed(1)} ms, max ${latencies.at(-1)!.toFixed(1)} ms; canvas draw of all readings: median ${drawMs.sort((a, b) => a - b)[Math.floor(drawMs.length / 2)].toFixed(1)} ms`);
-  console.log(`  (machine load average ${os.loadavg().map((l) => l.toFixed(1)).join(" / ")})`);
+  console.log(
+    `  tap-to-drawn with ${total - 1}→${total} readings drawn, ${TAPS} taps: median ${median.toFixed(1)} ms, p95 ${p95.toFixed(1)} ms, max ${latencies.at(-1)!.toFixed(1)} ms; canvas draw of all readings: median ${drawMs.sort((a, b) => a - b)[Math.floor(drawMs.length / 2)].toFixed(1)} ms`,
+  );
+  console.log(
+    `  (machine load average ${os
+      .loadavg()
+      .map((l) => l.toFixed(1))
+      .join(" / ")})`,
+  );
   await context.close();
   if (sync.ms >= SYNC_TARGET_MS || onServer !== 1000) process.exitCode = 1;
 } finally {

@@ -4,7 +4,10 @@ import type { AnalysisJob } from "./analysis.worker";
 import { createWorkerPool, defaultPoolSize } from "./worker-pool";
 
 export function createAnalysisRunner(size = defaultPoolSize()) {
-  return createWorkerPool<AnalysisJob, LocatorResult>({ module: new URL("./analysis.worker.ts", import.meta.url), size });
+  return createWorkerPool<AnalysisJob, LocatorResult>({
+    module: new URL("./analysis.worker.ts", import.meta.url),
+    size,
+  });
 }
 
 export type AnalysisRunner = ReturnType<typeof createAnalysisRunner>;

@@ -12,5 +12,7 @@ export interface AnalysisJob {
 serveJobs<AnalysisJob, LocatorResult>((job) => locate(job.input, job.options), {
   transferables: (r) => [r.field.values.buffer as ArrayBuffer, r.field.confidence.buffer as ArrayBuffer],
   describeError: (err) =>
-    err instanceof LocatorInputError ? { message: err.message, problems: err.problems } : { message: err instanceof Error ? err.message : String(err) },
+    err instanceof LocatorInputError
+      ? { message: err.message, problems: err.problems }
+      : { message: err instanceof Error ? err.message : String(err) },
 });

@@ -15,7 +15,12 @@ export const DIGEST_HOUR = 6;
 
 /** The company's calendar: the time zone of its first store (UTC when it has none yet). */
 async function companyZone(ctx: AppContext, companyId: string): Promise<string> {
-  const [s] = await ctx.db.select({ tz: stores.timeZone }).from(stores).where(eq(stores.companyId, companyId)).orderBy(asc(stores.createdAt)).limit(1);
+  const [s] = await ctx.db
+    .select({ tz: stores.timeZone })
+    .from(stores)
+    .where(eq(stores.companyId, companyId))
+    .orderBy(asc(stores.createdAt))
+    .limit(1);
   return s?.tz ?? "UTC";
 }
 
@@ -23,7 +28,8 @@ export async function digestItems(ctx: AppContext, companyId: string, now: Date)
   const view = await today(ctx, { companyId, role: "owner", storeIds: [] }, {}, now);
   return view.due.filter((i) => {
     if (i.dueOn === null) return true;
-    const localToday = view.stores.find((s) => s.id === i.storeId)?.today ?? view.stores[0]?.today ?? localDateOf(now, "UTC");
+    const localToday =
+      view.stores.find((s) => s.id === i.storeId)?.today ?? view.stores[0]?.today ?? localDateOf(now, "UTC");
     return compareDates(i.dueOn, addDays(localToday, DIGEST_DAYS)) <= 0;
   });
 }
@@ -41,7 +47,12 @@ export interface DigestResult {
  * (company, local date), is claimed before any mail goes out, so a second process or a restart
  * finds it taken. A failed send releases the claim so the next run retries.
  */
-export async function sendDigest(ctx: AppContext, companyId: string, trigger: "schedule" | "manual", now = new Date()): Promise<DigestResult> {
+export async function sendDigest(
+  ctx: AppContext,
+  companyId: string,
+  trigger: "schedule" | "manual",
+  now = new Date(),
+): Promise<DigestResult> {
   const zone = await companyZone(ctx, companyId);
   const localDate = localDateOf(now, zone);
   const [claim] = await ctx.db
@@ -50,9 +61,18 @@ export async function sendDigest(ctx: AppContext, companyId: string, trigger: "s
     .onConflictDoNothing({ target: [digestRuns.companyId, digestRuns.localDate] })
     .returning({ id: digestRuns.id });
   if (!claim) {
-    const [run] = await ctx.db.select().from(digestRuns).where(and(eq(digestRuns.companyId, companyId), eq(digestRuns.localDate, localDate)));
+    const [run] = await ctx.db
+      .select()
+      .from(digestRuns)
+      .where(and(eq(digestRuns.companyId, companyId), eq(digestRuns.localDate, localDate)));
     const when = run?.sentAt ? ` at ${run.sentAt.toISOString().slice(11, 16)} UTC` : "";
-    return { sent: false, localDate, recipients: run?.recipients ?? [], itemCount: run?.itemCount ?? 0, message: `Today's digest (${localDate}) was already sent${when}; it goes out once a day.` };
+    return {
+      sent: false,
+      localDate,
+      recipients: run?.recipients ?? [],
+      itemCount: run?.itemCount ?? 0,
+      message: `Today's digest (${localDate}) was already sent${when}; it goes out once a day.`,
+    };
   }
   try {
     const [company] = await ctx.db.select({ name: companies.name }).from(companies).where(eq(companies.id, companyId));
@@ -65,11 +85,26 @@ export async function sendDigest(ctx: AppContext, companyId: string, trigger: "s
     const items = await digestItems(ctx, companyId, now);
     const recipients = people.map((p) => p.email);
     if (recipients.length) {
-      const mail = digestMail({ companyName: company.name, localDate, items, appUrl: ctx.config.appUrl, days: DIGEST_DAYS });
+      const mail = digestMail({
+        companyName: company.name,
+        localDate,
+        items,
+        appUrl: ctx.config.appUrl,
+        days: DIGEST_DAYS,
+      });
       await ctx.mailer.send({ to: recipients, companyId, ...mail });
     }
-    await ctx.db.update(digestRuns).set({ status: "sent", sentAt: new Date(), recipients, itemCount: items.length }).where(eq(digestRuns.id, claim.id));
-    return { sent: true, localDate, recipients, itemCount: items.length, message: `Sent today's digest (${items.length} items) to ${recipients.length} people.` };
+    await ctx.db
+      .update(digestRuns)
+      .set({ status: "sent", sentAt: new Date(), recipients, itemCount: items.length })
+      .where(eq(digestRuns.id, claim.id));
+    return {
+      sent: true,
+      localDate,
+      recipients,
+      itemCount: items.length,
+      message: `Sent today's digest (${items.length} items) to ${recipients.length} people.`,
+    };
   } catch (err) {
     await ctx.db.delete(digestRuns).where(eq(digestRuns.id, claim.id));
     throw err;

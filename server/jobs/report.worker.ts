@@ -24,7 +24,9 @@ serveJobs<ReportJob, Uint8Array>(
     if (map) {
       const scale = createConcentrationScale({ maxPpm: map.maxPpm, log: true });
       const png = await renderFieldMapPng({
-        planImage: map.planImage ? Buffer.from(map.planImage.buffer, map.planImage.byteOffset, map.planImage.byteLength) : null,
+        planImage: map.planImage
+          ? Buffer.from(map.planImage.buffer, map.planImage.byteOffset, map.planImage.byteLength)
+          : null,
         widthM: map.widthM,
         heightM: map.heightM,
         field: map.field,

@@ -13,7 +13,8 @@ export function serveJobs<T, R>(
 ): void {
   const port = parentPort;
   if (!port) throw new Error("serveJobs must run inside a worker thread");
-  const describe = options.describeError ?? ((err: unknown) => ({ message: err instanceof Error ? err.message : String(err) }));
+  const describe =
+    options.describeError ?? ((err: unknown) => ({ message: err instanceof Error ? err.message : String(err) }));
   port.on("message", async ({ id, payload }: { id: number; payload: T }) => {
     try {
       const result = await handle(payload);

@@ -11,10 +11,15 @@ import { Worker } from "node:worker_threads";
 const ENTRY = new URL("./worker-entry.mjs", import.meta.url);
 
 /** What a job module posts back (see serveJobs). */
-export type JobReply<R> = { id: number; ok: true; result: R } | { id: number; ok: false; message: string; problems?: string[] };
+export type JobReply<R> =
+  | { id: number; ok: true; result: R }
+  | { id: number; ok: false; message: string; problems?: string[] };
 
 export class JobError extends Error {
-  constructor(message: string, readonly problems?: string[]) {
+  constructor(
+    message: string,
+    readonly problems?: string[],
+  ) {
     super(message);
     this.name = "JobError";
   }
@@ -44,7 +49,8 @@ export function defaultPoolSize(): number {
 }
 
 export function createWorkerPool<T, R>({ module, size = defaultPoolSize() }: WorkerPoolOptions) {
-  if (!(Number.isInteger(size) && size >= 1)) throw new RangeError(`size: must be a whole number of workers, at least 1, got ${size}`);
+  if (!(Number.isInteger(size) && size >= 1))
+    throw new RangeError(`size: must be a whole number of workers, at least 1, got ${size}`);
   const slots: Slot[] = [];
   const queue: Job<T, R>[] = [];
   const running = new Map<Worker, Job<T, R>>();

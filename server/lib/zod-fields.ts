@@ -12,5 +12,7 @@ export function zodFields(error: z.ZodError): Record<string, string> {
 
 export function describeFields(fields: Record<string, string>): string {
   const parts = Object.entries(fields).map(([k, m]) => (k ? `${k} ${m}` : m));
-  return parts.length ? `Please check: ${parts.slice(0, 3).join("; ")}${parts.length > 3 ? "; …" : ""}.` : "The request is not valid.";
+  return parts.length
+    ? `Please check: ${parts.slice(0, 3).join("; ")}${parts.length > 3 ? "; …" : ""}.`
+    : "The request is not valid.";
 }

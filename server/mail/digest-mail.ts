@@ -1,14 +1,32 @@
 import type { DueItem } from "#core/contracts/compliance";
 import { readableSource } from "#core/domain/compliance/citations";
 
-const STATE_WORDS: Record<DueItem["state"], string> = { overdue: "OVERDUE", "due-today": "due today", "due-soon": "due soon", upcoming: "upcoming" };
+const STATE_WORDS: Record<DueItem["state"], string> = {
+  overdue: "OVERDUE",
+  "due-today": "due today",
+  "due-soon": "due soon",
+  upcoming: "upcoming",
+};
 
 /** The daily digest as plain text: overdue first, each line with its due date, place, rule source and link. */
-export function digestMail(args: { companyName: string; localDate: string; items: DueItem[]; appUrl: string; days: number }) {
+export function digestMail(args: {
+  companyName: string;
+  localDate: string;
+  items: DueItem[];
+  appUrl: string;
+  days: number;
+}) {
   const lines = args.items.map((i) => {
     const where = [i.storeName, i.systemName].filter(Boolean).join(" · ") || "Company";
-    const when = i.dueOn ? `${i.dueOn} (${STATE_WORDS[i.state]}${i.daysLeft !== null && i.daysLeft < 0 ? `, ${-i.daysLeft} days late` : ""})` : "no date on record (overdue)";
-    return [`- ${when}: ${i.what}`, `  ${where}`, `  Rule: ${readableSource(i.source)}`, `  Records: ${args.appUrl}${i.link}`].join("\n");
+    const when = i.dueOn
+      ? `${i.dueOn} (${STATE_WORDS[i.state]}${i.daysLeft !== null && i.daysLeft < 0 ? `, ${-i.daysLeft} days late` : ""})`
+      : "no date on record (overdue)";
+    return [
+      `- ${when}: ${i.what}`,
+      `  ${where}`,
+      `  Rule: ${readableSource(i.source)}`,
+      `  Records: ${args.appUrl}${i.link}`,
+    ].join("\n");
   });
   const subject = args.items.length
     ? `Plumeline: ${args.items.length} item${args.items.length === 1 ? "" : "s"} due in the next ${args.days} days – ${args.companyName}`

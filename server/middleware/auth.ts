@@ -22,7 +22,13 @@ export async function readAuth(db: Db, session: Partial<SessionData>): Promise<A
   const userId = session.userId;
   if (!userId) return undefined;
   const [user] = await db
-    .select({ id: users.id, email: users.email, name: users.name, lengthUnit: users.lengthUnit, massUnit: users.massUnit })
+    .select({
+      id: users.id,
+      email: users.email,
+      name: users.name,
+      lengthUnit: users.lengthUnit,
+      massUnit: users.massUnit,
+    })
     .from(users)
     .where(eq(users.id, userId));
   if (!user) return undefined;
@@ -34,7 +40,12 @@ export async function readAuth(db: Db, session: Partial<SessionData>): Promise<A
     .where(and(eq(memberships.userId, user.id), eq(memberships.companyId, companyId)));
   if (!m) return { user, membership: null };
   const storeIds = isStoreScoped(m.role)
-    ? (await db.select({ storeId: membershipStores.storeId }).from(membershipStores).where(eq(membershipStores.membershipId, m.id))).map((r) => r.storeId)
+    ? (
+        await db
+          .select({ storeId: membershipStores.storeId })
+          .from(membershipStores)
+          .where(eq(membershipStores.membershipId, m.id))
+      ).map((r) => r.storeId)
     : [];
   return { user, membership: { ...m, storeIds } };
 }

@@ -20,7 +20,13 @@ export const csrfProtection: RequestHandler = (req, _res, next) => {
   if (SAFE.has(req.method)) return next();
   const sent = req.get("x-csrf-token") ?? "";
   const expected = req.session?.csrfToken ?? "";
-  const ok = expected.length > 0 && sent.length === expected.length && timingSafeEqual(Buffer.from(sent), Buffer.from(expected));
-  if (!ok) throw new HttpError(403, "csrf_failed", "Your session has expired or the page is out of date. Reload the page and try again.");
+  const ok =
+    expected.length > 0 && sent.length === expected.length && timingSafeEqual(Buffer.from(sent), Buffer.from(expected));
+  if (!ok)
+    throw new HttpError(
+      403,
+      "csrf_failed",
+      "Your session has expired or the page is out of date. Reload the page and try again.",
+    );
   next();
 };

@@ -8,11 +8,14 @@ export const notFoundApi: RequestHandler = (req) => {
 /** The one JSON error handler: known errors keep their message; anything else is logged, never shown. */
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (err instanceof HttpError) {
-    res.status(err.status).json({ error: { code: err.code, message: err.message, fields: err.fields, details: err.details } });
+    res
+      .status(err.status)
+      .json({ error: { code: err.code, message: err.message, fields: err.fields, details: err.details } });
     return;
   }
   // body-parser and multer errors carry a status and a type; keep them specific but plain.
-  const status = typeof err?.status === "number" ? err.status : typeof err?.statusCode === "number" ? err.statusCode : 500;
+  const status =
+    typeof err?.status === "number" ? err.status : typeof err?.statusCode === "number" ? err.statusCode : 500;
   if (status === 400 && err?.type === "entity.parse.failed") {
     res.status(400).json({ error: { code: "validation_failed", message: "The request body is not valid JSON." } });
     return;

@@ -33,15 +33,30 @@ function blend(img: Image, x: number, y: number, rgb: readonly [number, number, 
 }
 
 function dot(img: Image, x: number, y: number, r: number, rgb: readonly [number, number, number], alpha = 1) {
-  for (let dy = -r; dy <= r; dy++) for (let dx = -r; dx <= r; dx++) if (dx * dx + dy * dy <= r * r) blend(img, x + dx, y + dy, rgb, alpha);
+  for (let dy = -r; dy <= r; dy++)
+    for (let dx = -r; dx <= r; dx++) if (dx * dx + dy * dy <= r * r) blend(img, x + dx, y + dy, rgb, alpha);
 }
 
-function line(img: Image, a: readonly [number, number], b: readonly [number, number], r: number, rgb: readonly [number, number, number], alpha = 1) {
+function line(
+  img: Image,
+  a: readonly [number, number],
+  b: readonly [number, number],
+  r: number,
+  rgb: readonly [number, number, number],
+  alpha = 1,
+) {
   const n = Math.max(1, Math.ceil(Math.hypot(b[0] - a[0], b[1] - a[1])));
   for (let k = 0; k <= n; k++) dot(img, a[0] + ((b[0] - a[0]) * k) / n, a[1] + ((b[1] - a[1]) * k) / n, r, rgb, alpha);
 }
 
-function ring(img: Image, cx: number, cy: number, radius: number, thickness: number, rgb: readonly [number, number, number]) {
+function ring(
+  img: Image,
+  cx: number,
+  cy: number,
+  radius: number,
+  thickness: number,
+  rgb: readonly [number, number, number],
+) {
   const n = Math.max(24, Math.ceil(2 * Math.PI * radius));
   for (let k = 0; k < n; k++) {
     const a = (2 * Math.PI * k) / n;
@@ -82,7 +97,11 @@ export async function renderFieldMapPng(d: FieldMapDrawing): Promise<Buffer> {
     if (base.bitmap.width > d.widthPx * 1.25) base.resize({ w: Math.round(d.widthPx) });
   } else {
     const W = Math.round(d.widthPx);
-    base = new Jimp({ width: W, height: Math.max(1, Math.round((W * d.heightM) / d.widthM)), color: 0xf3f2eeff }) as Image;
+    base = new Jimp({
+      width: W,
+      height: Math.max(1, Math.round((W * d.heightM) / d.widthM)),
+      color: 0xf3f2eeff,
+    }) as Image;
   }
   const pxPerM = base.bitmap.width / d.widthM;
   const { field } = d;

@@ -19,7 +19,12 @@ function heading(doc: Doc, text: string) {
   if (doc.y > doc.page.height - MARGIN - 80) doc.addPage();
   doc.moveDown(0.8).font("bold").fontSize(13).fillColor(INK).text(text);
   const y = doc.y + 2;
-  doc.moveTo(MARGIN, y).lineTo(doc.page.width - MARGIN, y).lineWidth(0.5).strokeColor(RULE).stroke();
+  doc
+    .moveTo(MARGIN, y)
+    .lineTo(doc.page.width - MARGIN, y)
+    .lineWidth(0.5)
+    .strokeColor(RULE)
+    .stroke();
   doc.moveDown(0.4).font("regular").fontSize(10);
 }
 
@@ -29,7 +34,10 @@ function facts(doc: Doc, rows: [string, string][]) {
   for (const [k, v] of rows) {
     const y = doc.y;
     doc.font("bold").fontSize(10).fillColor(MUTED).text(k, MARGIN, y, { width: labelW });
-    doc.font("regular").fillColor(INK).text(v || "—", MARGIN + labelW, y, { width: width - labelW });
+    doc
+      .font("regular")
+      .fillColor(INK)
+      .text(v || "—", MARGIN + labelW, y, { width: width - labelW });
     doc.moveDown(0.25);
   }
 }
@@ -59,8 +67,15 @@ function fieldMap(doc: Doc, m: NonNullable<SweepReportModel["map"]>, suspects: S
     const r = Math.max(4, s.radiusM * k);
     const lx = Math.min(x0 + w - 14, cx + r * 0.72);
     const ly = Math.max(y0 + 2, cy - r * 0.72 - 12);
-    doc.roundedRect(lx - 1, ly - 1, 14, 14, 3).fillColor("#14143c").fill();
-    doc.font("bold").fontSize(9).fillColor("#ffffff").text(String(s.rank), lx - 1, ly + 1.5, { width: 14, align: "center", lineBreak: false });
+    doc
+      .roundedRect(lx - 1, ly - 1, 14, 14, 3)
+      .fillColor("#14143c")
+      .fill();
+    doc
+      .font("bold")
+      .fontSize(9)
+      .fillColor("#ffffff")
+      .text(String(s.rank), lx - 1, ly + 1.5, { width: 14, align: "center", lineBreak: false });
   }
   doc.x = MARGIN;
   doc.y = y0 + h + 6;
@@ -86,7 +101,12 @@ function readingsTable(doc: Doc, readings: SweepReportModel["readings"]) {
       x += c.w;
     }
     doc.y = y + 13;
-    doc.moveTo(MARGIN, doc.y - 2).lineTo(doc.page.width - MARGIN, doc.y - 2).lineWidth(0.4).strokeColor(RULE).stroke();
+    doc
+      .moveTo(MARGIN, doc.y - 2)
+      .lineTo(doc.page.width - MARGIN, doc.y - 2)
+      .lineWidth(0.4)
+      .strokeColor(RULE)
+      .stroke();
   };
   header();
   doc.font("regular").fontSize(8.5).fillColor(INK);
@@ -144,11 +164,20 @@ export function buildSweepReportPdf(m: SweepReportModel): Promise<Buffer> {
   else doc.fillColor(MUTED).text("No field map: the sweep could not be analysed.");
 
   heading(doc, "Suspect spots");
-  if (m.suspects.length === 0) doc.fillColor(INK).text("No credible leak: no suspect spot stands out from the background.");
+  if (m.suspects.length === 0)
+    doc.fillColor(INK).text("No credible leak: no suspect spot stands out from the background.");
   for (const s of m.suspects) {
     if (doc.y > doc.page.height - MARGIN - 60) doc.addPage();
-    doc.font("bold").fontSize(10.5).fillColor(INK).text(`${s.rank}. ${s.fixture} — at ${s.position} (within ${s.radius}), score ${s.score.toFixed(2)}`);
-    doc.font("regular").fontSize(10).fillColor(INK).text(`${s.reason} Nearest risk point: ${s.riskPoint}. Estimated strength: ${s.strength}.`, { indent: 12 });
+    doc
+      .font("bold")
+      .fontSize(10.5)
+      .fillColor(INK)
+      .text(`${s.rank}. ${s.fixture} — at ${s.position} (within ${s.radius}), score ${s.score.toFixed(2)}`);
+    doc
+      .font("regular")
+      .fontSize(10)
+      .fillColor(INK)
+      .text(`${s.reason} Nearest risk point: ${s.riskPoint}. Estimated strength: ${s.strength}.`, { indent: 12 });
     doc.fillColor(MUTED).text(`Next check: ${s.nextCheck}`, { indent: 12 });
     doc.moveDown(0.4);
   }
@@ -159,7 +188,10 @@ export function buildSweepReportPdf(m: SweepReportModel): Promise<Buffer> {
 
   heading(doc, "Findings");
   if (m.findings.length === 0) doc.fillColor(INK).text("No findings recorded from this sweep.");
-  for (const f of m.findings) doc.fillColor(INK).text(`• ${f.status} — ${f.where}, found ${f.found}${f.note ? `: ${f.note}` : ""}`, { indent: 4 });
+  for (const f of m.findings)
+    doc
+      .fillColor(INK)
+      .text(`• ${f.status} — ${f.where}, found ${f.found}${f.note ? `: ${f.note}` : ""}`, { indent: 4 });
 
   heading(doc, `Readings (${m.readings.length})`);
   readingsTable(doc, m.readings);
@@ -175,7 +207,11 @@ export function buildSweepReportPdf(m: SweepReportModel): Promise<Buffer> {
     doc.switchToPage(i);
     const y = doc.page.height - MARGIN + 16;
     doc.font("regular").fontSize(8).fillColor(MUTED);
-    doc.text(`${m.store.name} · ${m.generated} · page ${i + 1} of ${range.count}`, MARGIN, y, { width: doc.page.width - 2 * MARGIN, align: "center", lineBreak: false });
+    doc.text(`${m.store.name} · ${m.generated} · page ${i + 1} of ${range.count}`, MARGIN, y, {
+      width: doc.page.width - 2 * MARGIN,
+      align: "center",
+      lineBreak: false,
+    });
   }
   doc.end();
   return done;

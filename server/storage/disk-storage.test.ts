@@ -12,7 +12,10 @@ afterAll(() => fs.rm(root, { recursive: true, force: true }));
 
 async function listAll(dir: string): Promise<string[]> {
   const entries = await fs.readdir(dir, { recursive: true, withFileTypes: true });
-  return entries.filter((e) => e.isFile()).map((e) => path.relative(dir, path.join(e.parentPath, e.name))).sort();
+  return entries
+    .filter((e) => e.isFile())
+    .map((e) => path.relative(dir, path.join(e.parentPath, e.name)))
+    .sort();
 }
 
 describe("disk storage", () => {

@@ -48,7 +48,10 @@ describe("api client", () => {
       "POST /api/auth/password-reset": { status: 202, body: { ok: true } },
     });
     await api.post("/api/auth/password-reset", ok, { email: "a@b.example" });
-    expect(calls.map((c) => `${c.method} ${c.path}`)).toEqual(["GET /api/auth/session", "POST /api/auth/password-reset"]);
+    expect(calls.map((c) => `${c.method} ${c.path}`)).toEqual([
+      "GET /api/auth/session",
+      "POST /api/auth/password-reset",
+    ]);
     expect(calls[1]!.headers["x-csrf-token"]).toBe("fresh-token");
   });
 
@@ -56,7 +59,10 @@ describe("api client", () => {
     const fetchSpy = vi.fn(async () => new Response(JSON.stringify({ ok: true }), { status: 200 }));
     vi.stubGlobal("fetch", fetchSpy);
     await api.get("/api/health", ok);
-    expect(fetchSpy).toHaveBeenCalledWith("/api/health", expect.objectContaining({ credentials: "same-origin", method: "GET" }));
+    expect(fetchSpy).toHaveBeenCalledWith(
+      "/api/health",
+      expect.objectContaining({ credentials: "same-origin", method: "GET" }),
+    );
   });
 
   it("parses the error shape into an ApiRequestError with status, code, message and fields", async () => {
@@ -77,7 +83,9 @@ describe("api client", () => {
   });
 
   it("gives an error without fields an empty fields map", async () => {
-    stubFetch({ "POST /api/auth/sign-in": apiError(429, "rate_limited", "Too many sign-in attempts. Try again in 15 minutes.") });
+    stubFetch({
+      "POST /api/auth/sign-in": apiError(429, "rate_limited", "Too many sign-in attempts. Try again in 15 minutes."),
+    });
     const error = (await api.post("/api/auth/sign-in", sessionInfo, {}).catch((e: unknown) => e)) as ApiRequestError;
     expect(error.status).toBe(429);
     expect(error.code).toBe("rate_limited");

@@ -64,7 +64,10 @@ async function ensureCsrfToken(): Promise<void> {
   if (csrfToken) return;
   try {
     await settled(sessionWrites);
-    const response = await track(sessionReads, fetch(SESSION_PATH, { headers: { Accept: "application/json" }, credentials: "same-origin" }));
+    const response = await track(
+      sessionReads,
+      fetch(SESSION_PATH, { headers: { Accept: "application/json" }, credentials: "same-origin" }),
+    );
     if (response.ok) rememberCsrf(await readJson(response));
   } catch {
     // the real request below reports the network problem
@@ -155,10 +158,18 @@ async function send<T>(method: Method, path: string, schema: z.ZodType<T> | null
       body: options.body === undefined ? undefined : isForm ? (options.body as FormData) : JSON.stringify(options.body),
       signal: options.signal,
     });
-    response = await (isSessionRead ? track(sessionReads, request) : changesSession ? track(sessionWrites, request) : request);
+    response = await (isSessionRead
+      ? track(sessionReads, request)
+      : changesSession
+        ? track(sessionWrites, request)
+        : request);
   } catch (cause) {
     if (cause instanceof DOMException && cause.name === "AbortError") throw cause;
-    throw new ApiRequestError(0, "network", "Plumeline could not reach the server. Check the connection and try again.");
+    throw new ApiRequestError(
+      0,
+      "network",
+      "Plumeline could not reach the server. Check the connection and try again.",
+    );
   }
 
   const body = await readJson(response);
@@ -167,14 +178,19 @@ async function send<T>(method: Method, path: string, schema: z.ZodType<T> | null
   if (schema === null) return undefined as T;
   const parsed = schema.safeParse(body);
   if (!parsed.success) {
-    throw new ApiRequestError(response.status, "unexpected_response", `The server's answer to ${method} ${path} did not match the contract.`);
+    throw new ApiRequestError(
+      response.status,
+      "unexpected_response",
+      `The server's answer to ${method} ${path} did not match the contract.`,
+    );
   }
   return parsed.data;
 }
 
 export const api = {
   get: <T>(path: string, schema: z.ZodType<T>, signal?: AbortSignal) => apiRequest("GET", path, schema, { signal }),
-  post: <T>(path: string, schema: z.ZodType<T> | null, body?: unknown) => apiRequest("POST", path, schema, { body: body ?? {} }),
+  post: <T>(path: string, schema: z.ZodType<T> | null, body?: unknown) =>
+    apiRequest("POST", path, schema, { body: body ?? {} }),
   put: <T>(path: string, schema: z.ZodType<T> | null, body: unknown) => apiRequest("PUT", path, schema, { body }),
   patch: <T>(path: string, schema: z.ZodType<T> | null, body: unknown) => apiRequest("PATCH", path, schema, { body }),
   delete: (path: string) => apiRequest<void>("DELETE", path, null),
@@ -187,13 +203,27 @@ export async function apiUpload<T>(path: string, form: FormData, schema: z.ZodTy
   await ensureCsrfToken();
   let response: Response;
   try {
-    response = await fetch(path, { method: "POST", headers: { Accept: "application/json", ...(csrfToken ? { "X-CSRF-Token": csrfToken } : {}) }, credentials: "same-origin", body: form });
+    response = await fetch(path, {
+      method: "POST",
+      headers: { Accept: "application/json", ...(csrfToken ? { "X-CSRF-Token": csrfToken } : {}) },
+      credentials: "same-origin",
+      body: form,
+    });
   } catch {
-    throw new ApiRequestError(0, "network", "Plumeline could not reach the server. Check the connection and try again.");
+    throw new ApiRequestError(
+      0,
+      "network",
+      "Plumeline could not reach the server. Check the connection and try again.",
+    );
   }
   const body = await readJson(response);
   if (!response.ok) throw toError(response.status, body);
   const parsed = schema.safeParse(body);
-  if (!parsed.success) throw new ApiRequestError(response.status, "unexpected_response", `The server's answer to POST ${path} did not match the contract.`);
+  if (!parsed.success)
+    throw new ApiRequestError(
+      response.status,
+      "unexpected_response",
+      `The server's answer to POST ${path} did not match the contract.`,
+    );
   return parsed.data;
 }

@@ -22,7 +22,8 @@ export function serverFieldErrors(error: unknown): FieldErrors {
 export function formErrorMessage(error: unknown): string | null {
   if (!error) return null;
   if (isApiRequestError(error)) {
-    if (error.code === "validation_failed" && Object.keys(error.fields).length > 0) return "Please correct the marked fields.";
+    if (error.code === "validation_failed" && Object.keys(error.fields).length > 0)
+      return "Please correct the marked fields.";
     return error.message;
   }
   return "Something went wrong. Please try again.";
@@ -58,7 +59,12 @@ export function focusFirstInvalid(form: HTMLFormElement | null, fields: FieldErr
  * Checks a form's values with the shared schema: on failure shows the field errors and moves focus
  * to the first one (returns null); on success clears them and returns the parsed values.
  */
-export function checkForm<S extends z.ZodType>(schema: S, values: unknown, form: HTMLFormElement, setErrors: (fields: FieldErrors) => void): z.infer<S> | null {
+export function checkForm<S extends z.ZodType>(
+  schema: S,
+  values: unknown,
+  form: HTMLFormElement,
+  setErrors: (fields: FieldErrors) => void,
+): z.infer<S> | null {
   const parsed = schema.safeParse(values);
   if (!parsed.success) {
     const fields = zodFieldErrors(parsed.error);

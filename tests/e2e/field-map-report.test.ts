@@ -61,13 +61,18 @@ it("an engineer opens the latest sweep's field map, compares it with the month b
   // compare with the month before
   await page.getByRole("link", { name: "Compare with the month before" }).click();
   await page.getByTestId("difference-map").waitFor({ timeout: 60_000 });
-  await expect(page.getByTestId("fixture-trends").locator("tbody tr").first().textContent()).resolves.toMatch(/^Dairy [234]/);
+  await expect(page.getByTestId("fixture-trends").locator("tbody tr").first().textContent()).resolves.toMatch(
+    /^Dairy [234]/,
+  );
   await page.screenshot({ path: path.join(shots, "compare.png"), fullPage: true });
   await page.goBack();
   await canvas.waitFor();
 
   // download the PDF report
-  const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("link", { name: "Download the PDF report" }).click()]);
+  const [download] = await Promise.all([
+    page.waitForEvent("download"),
+    page.getByRole("link", { name: "Download the PDF report" }).click(),
+  ]);
   const file = await download.path();
   const bytes = await fs.readFile(file!);
   expect(bytes.subarray(0, 5).toString("latin1")).toBe("%PDF-");
@@ -78,12 +83,21 @@ it("an engineer opens the latest sweep's field map, compares it with the month b
   await page.getByLabel("Other addresses").fill("regional.manager@example.org");
   await page.getByRole("button", { name: "Send the report" }).click();
   await page.getByText(/Sent to .*regional\.manager@example\.org/).waitFor();
-  await page.getByTestId("report-sends").getByText(/regional\.manager@example\.org/).waitFor();
+  await page
+    .getByTestId("report-sends")
+    .getByText(/regional\.manager@example\.org/)
+    .waitFor();
 
   // and find it in the Outbox, with the PDF attached
   await page.getByRole("link", { name: "Outbox" }).click();
-  await page.getByRole("link", { name: /Sweep report: Larkspur Market – Cedar Hollow/ }).first().click();
-  await page.getByText(/sweep-larkspur-market-cedar-hollow-\d{4}-\d{2}-\d{2}\.pdf/).first().waitFor();
+  await page
+    .getByRole("link", { name: /Sweep report: Larkspur Market – Cedar Hollow/ })
+    .first()
+    .click();
+  await page
+    .getByText(/sweep-larkspur-market-cedar-hollow-\d{4}-\d{2}-\d{2}\.pdf/)
+    .first()
+    .waitFor();
   expect(failures).toEqual([]);
   await context.close();
 });

@@ -37,7 +37,9 @@ const TABLET = { hasTouch: true, isMobile: true, deviceScaleFactor: 2 };
 const STAGE = "[data-testid=layout-stage]";
 
 async function stageView(page: Page) {
-  const [zoom, panX, panY, mpp] = await Promise.all(["data-zoom", "data-pan-x", "data-pan-y", "data-mpp"].map((a) => numberAttr(page, STAGE, a)));
+  const [zoom, panX, panY, mpp] = await Promise.all(
+    ["data-zoom", "data-pan-x", "data-pan-y", "data-mpp"].map((a) => numberAttr(page, STAGE, a)),
+  );
   return { zoom, panX, panY, mpp };
 }
 
@@ -82,7 +84,12 @@ const count = (page: Page, n: number) => page.getByRole("heading", { name: `All 
 async function stored(page: Page) {
   await page.waitForTimeout(300);
   await page.locator("[data-save-status=saved]").waitFor({ timeout: 15_000 });
-  return (await (await page.request.get(`${server.url}/api/plans/${planId}/fixtures`)).json()).fixtures as { id: string; kind: string; polygon?: number[][]; point?: { x: number; y: number } }[];
+  return (await (await page.request.get(`${server.url}/api/plans/${planId}/fixtures`)).json()).fixtures as {
+    id: string;
+    kind: string;
+    polygon?: number[][];
+    point?: { x: number; y: number };
+  }[];
 }
 
 function boxOf(polygon: number[][]) {
@@ -115,7 +122,11 @@ it("on a landscape tablet, sets the scale and draws, selects, moves, resizes, pi
   expect(pinchedZoom / fitZoom).toBeCloseTo(1.2, 1);
   await page.waitForTimeout(450);
   // The wall is 600 px and 12 m long: 0.02 m a pixel. Two taps on its ends.
-  for (const [x, y] of [[100, 250], [700, 250]]) await tap(page, await pickerScreen(page, x, y));
+  for (const [x, y] of [
+    [100, 250],
+    [700, 250],
+  ])
+    await tap(page, await pickerScreen(page, x, y));
   await page.getByLabel("Real length of the line").fill("12 m");
   await page.getByRole("button", { name: "Save scale" }).tap();
   await page.getByText("The plan's scale is set.").waitFor();
@@ -147,7 +158,12 @@ it("on a landscape tablet, sets the scale and draws, selects, moves, resizes, pi
   // a double-tap), closed by a tap 14 px off the first corner — a fingertip's miss.
   await page.getByLabel("Kind to draw").selectOption("walk-in-cooler");
   await tapButton(page, "Outline");
-  for (const [x, y] of [[9, 1], [14, 1], [14, 4]]) await tap(page, await at(page, x, y));
+  for (const [x, y] of [
+    [9, 1],
+    [14, 1],
+    [14, 4],
+  ])
+    await tap(page, await at(page, x, y));
   // A corner tapped in the wrong place; with no Backspace to hand, Undo takes it back.
   await tap(page, await at(page, 12, 7));
   await tapButton(page, "Undo");
@@ -171,7 +187,12 @@ it("on a landscape tablet, sets the scale and draws, selects, moves, resizes, pi
   await count(page, 3);
   let fixtures = await stored(page);
   const walkIn = fixtures.find((f) => f.kind === "walk-in-cooler")!;
-  [[9, 1], [14, 1], [14, 4], [9, 4]].forEach((c, i) => c.forEach((v, j) => expect(walkIn.polygon![i][j]).toBeCloseTo(v, 6)));
+  [
+    [9, 1],
+    [14, 1],
+    [14, 4],
+    [9, 4],
+  ].forEach((c, i) => c.forEach((v, j) => expect(walkIn.polygon![i][j]).toBeCloseTo(v, 6)));
   const caseId = fixtures.find((f) => f.kind === "open-case")!.id;
 
   // 4. Back to Select; a tap on empty plan clears the selection, and a tap 16 px beside the drop

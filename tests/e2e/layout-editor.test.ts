@@ -29,7 +29,9 @@ afterAll(async () => {
 async function editorScreen(page: Page, xm: number, ym: number) {
   const stage = "[data-testid=layout-stage]";
   const box = (await page.locator(`${stage} canvas`).first().boundingBox())!;
-  const [zoom, panX, panY, mpp] = await Promise.all(["data-zoom", "data-pan-x", "data-pan-y", "data-mpp"].map((a) => numberAttr(page, stage, a)));
+  const [zoom, panX, panY, mpp] = await Promise.all(
+    ["data-zoom", "data-pan-x", "data-pan-y", "data-mpp"].map((a) => numberAttr(page, stage, a)),
+  );
   return { x: box.x + panX + (xm / mpp) * zoom, y: box.y + panY + (ym / mpp) * zoom };
 }
 
@@ -59,7 +61,10 @@ it("creates a store, uploads and calibrates a plan, draws three fixtures and fin
 
   // The wall from (100, 250) to (700, 250) px is 12 m long: 0.02 m per pixel.
   await page.getByRole("group", { name: "Calibration line on the drawing" }).scrollIntoViewIfNeeded();
-  for (const [x, y] of [[100, 250], [700, 250]]) {
+  for (const [x, y] of [
+    [100, 250],
+    [700, 250],
+  ]) {
     const s = await pickerScreen(page, x, y);
     await page.mouse.click(s.x, s.y);
   }
@@ -123,10 +128,21 @@ it("creates a store, uploads and calibrates a plan, draws three fixtures and fin
     const r = await (await page.request.get(`${server.url}/api/plans/${plan.id}/fixtures`)).json();
     const byKind = Object.fromEntries(r.fixtures.map((f: { kind: string }) => [f.kind, f]));
     expect(Object.keys(byKind).sort()).toEqual(["door-case", "open-case", "valve"]);
-    const near = (got: number[][], want: number[][]) => got.forEach((p, i) => p.forEach((c, j) => expect(c).toBeCloseTo(want[i][j], 6)));
+    const near = (got: number[][], want: number[][]) =>
+      got.forEach((p, i) => p.forEach((c, j) => expect(c).toBeCloseTo(want[i][j], 6)));
     // Grid-snapped corners: exact to the micrometre.
-    near(byKind["open-case"].polygon, [[2, 2], [5.5, 2], [5.5, 3.2], [2, 3.2]]);
-    near(byKind["door-case"].polygon, [[5.5, 2], [9, 2], [9, 3.2], [5.5, 3.2]]);
+    near(byKind["open-case"].polygon, [
+      [2, 2],
+      [5.5, 2],
+      [5.5, 3.2],
+      [2, 3.2],
+    ]);
+    near(byKind["door-case"].polygon, [
+      [5.5, 2],
+      [9, 2],
+      [9, 3.2],
+      [5.5, 3.2],
+    ]);
     // 3.5 m of case at about 0.76 m a door (common practice, no published source) → 5 doors.
     expect(byKind["door-case"].doorCount).toBe(5);
     expect(byKind.valve.point.x).toBeCloseTo(10, 6);

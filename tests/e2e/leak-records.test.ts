@@ -13,7 +13,12 @@ let systemId: string;
 
 const KG_PER_LB = 0.45359237; // NIST SP 811
 const localDay = (daysAgo: number) => {
-  const today = new Intl.DateTimeFormat("en-CA", { timeZone: "America/New_York", year: "numeric", month: "2-digit", day: "2-digit" }).format(new Date());
+  const today = new Intl.DateTimeFormat("en-CA", {
+    timeZone: "America/New_York",
+    year: "numeric",
+    month: "2-digit",
+    day: "2-digit",
+  }).format(new Date());
   return new Date(Date.parse(`${today}T00:00:00Z`) - daysAgo * 86_400_000).toISOString().slice(0, 10);
 };
 
@@ -22,12 +27,26 @@ beforeAll(async () => {
   co = await seedCompany(server.ctx, "Fernhollow Grocers");
   const [row] = await server.ctx.db
     .insert(systems)
-    .values({ companyId: co.company.id, storeId: co.store.id, name: "Rack A – dairy line", refrigerantId: "R-448A", fullChargeKg: 100 * KG_PER_LB, applianceType: "commercial-refrigeration" })
+    .values({
+      companyId: co.company.id,
+      storeId: co.store.id,
+      name: "Rack A – dairy line",
+      refrigerantId: "R-448A",
+      fullChargeKg: 100 * KG_PER_LB,
+      applianceType: "commercial-refrigeration",
+    })
     .returning();
   systemId = row.id;
   await server.ctx.db.insert(chargeAdditions).values({
-    companyId: co.company.id, systemId, addedOn: localDay(55), amountKg: 3 * KG_PER_LB, enteredValue: 3, enteredUnit: "lb",
-    technicianId: co.people.technician.userId, reason: "Routine top-up", recordedById: co.people.technician.userId,
+    companyId: co.company.id,
+    systemId,
+    addedOn: localDay(55),
+    amountKg: 3 * KG_PER_LB,
+    enteredValue: 3,
+    enteredUnit: "lb",
+    technicianId: co.people.technician.userId,
+    reason: "Routine top-up",
+    recordedById: co.people.technician.userId,
   });
   browser = await launchBrowser();
 });
@@ -92,11 +111,17 @@ it("a technician confirms a leak and records charge added; the leak rate and Tod
   await owner.getByText(/Sent today's digest/).waitFor();
   await owner.getByRole("link", { name: "Outbox" }).first().click();
   await owner.getByRole("link", { name: /due in the next 7 days – Fernhollow Grocers/ }).click();
-  await owner.getByText(/Repair: leak rate 60\.8 %/).first().waitFor();
+  await owner
+    .getByText(/Repair: leak rate 60\.8 %/)
+    .first()
+    .waitFor();
   await owner.getByText(new RegExp(`${repairDue} \\(due soon`)).waitFor();
 
   // The technician records the repair; the deadline and the over-threshold line go.
-  await tech.getByRole("link", { name: /Flare fitting · confirmed/ }).first().click();
+  await tech
+    .getByRole("link", { name: /Flare fitting · confirmed/ })
+    .first()
+    .click();
   await tech.getByRole("button", { name: "Record the repair", exact: true }).click();
   await tech.getByLabel("Note").fill("New flare nut, leak-tested with nitrogen");
   await tech.getByRole("button", { name: "Save: record the repair" }).click();

@@ -19,7 +19,9 @@ const onServer = (sweepId: string) => storedReadings(suite.server.ctx, sweepId);
  * spacing along a case line (common practice, no published source).
  */
 function dairyLineSpots(): { x: number; y: number }[] {
-  const cases = demoFixtures({ "rack-mt": "a", "rack-lt": "b", "walk-ins": "c" }).filter((f) => f.kind === "open-case" && f.label.startsWith("Dairy"));
+  const cases = demoFixtures({ "rack-mt": "a", "rack-lt": "b", "walk-ins": "c" }).filter(
+    (f) => f.kind === "open-case" && f.label.startsWith("Dairy"),
+  );
   const poly = cases.flatMap((f) => ("polygon" in f ? f.polygon : []));
   const west = Math.min(...poly.map((p) => p[0]));
   const east = Math.max(...poly.map((p) => p[0]));
@@ -37,12 +39,21 @@ async function openWalk(page: Page) {
   await waitForSteadyPlan(page);
   await waitForServiceWorker(page);
   const sweepId = page.url().split("/").pop()!;
-  await until("the sweep on the server", () => suite.server.ctx.db.select().from(sweeps).where(eq(sweeps.id, sweepId)), (r) => r.length === 1);
+  await until(
+    "the sweep on the server",
+    () => suite.server.ctx.db.select().from(sweeps).where(eq(sweeps.id, sweepId)),
+    (r) => r.length === 1,
+  );
   return sweepId;
 }
 
 it("on a phone with touch, a sweep of the demo store's dairy line takes one tap per reading plus Submit and its confirm, through a cut network and an offline reload", async () => {
-  const context = await newContext(suite.browser, { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 });
+  const context = await newContext(suite.browser, {
+    viewport: { width: 390, height: 844 },
+    hasTouch: true,
+    isMobile: true,
+    deviceScaleFactor: 2,
+  });
   const page = await context.newPage();
   page.setDefaultTimeout(15_000);
   const failures: string[] = [];
@@ -60,14 +71,21 @@ it("on a phone with touch, a sweep of the demo store's dairy line takes one tap 
     await page.touchscreen.tap(p.x, p.y);
     positionTaps++;
     // The reading exists from its tap: counted at once, and on the keypad.
-    await page.getByTestId("walk-count").filter({ hasText: new RegExp(`^${i + 1} readings?`) }).waitFor();
+    await page
+      .getByTestId("walk-count")
+      .filter({ hasText: new RegExp(`^${i + 1} readings?`) })
+      .waitFor();
     await page.getByRole("heading", { name: `#${i + 1}`, exact: true }).waitFor();
   }
 
   const half = Math.floor(spots.length / 2);
   for (let i = 0; i < half; i++) await tapSpot(i);
   // All but the reading on the keypad are uploaded; the open one is not.
-  await until(`${half - 1} readings on the server`, () => onServer(sweepId), (r) => r.length === half - 1);
+  await until(
+    `${half - 1} readings on the server`,
+    () => onServer(sweepId),
+    (r) => r.length === half - 1,
+  );
 
   await context.setOffline(true);
   for (let i = half; i < half + 4; i++) await tapSpot(i);
@@ -76,7 +94,10 @@ it("on a phone with touch, a sweep of the demo store's dairy line takes one tap 
   // Reload with no connection: the app shell from the service worker, the readings from IndexedDB,
   // and the open reading back on the keypad.
   await page.reload();
-  await page.getByTestId("walk-count").filter({ hasText: new RegExp(`^${half + 4} readings`) }).waitFor();
+  await page
+    .getByTestId("walk-count")
+    .filter({ hasText: new RegExp(`^${half + 4} readings`) })
+    .waitFor();
   await page.getByRole("heading", { name: `#${half + 4}`, exact: true }).waitFor();
   await waitForSteadyPlan(page);
   expect((await onServer(sweepId)).length).toBe(half - 1);
@@ -90,7 +111,11 @@ it("on a phone with touch, a sweep of the demo store's dairy line takes one tap 
   await page.getByRole("button", { name: "Submit sweep" }).tap();
   otherTaps++;
 
-  const [done] = await until("the sweep submitted", () => suite.server.ctx.db.select().from(sweeps).where(eq(sweeps.id, sweepId)), (r) => r[0]?.status === "submitted");
+  const [done] = await until(
+    "the sweep submitted",
+    () => suite.server.ctx.db.select().from(sweeps).where(eq(sweeps.id, sweepId)),
+    (r) => r[0]?.status === "submitted",
+  );
   const stored = await onServer(sweepId);
   expect(stored).toHaveLength(spots.length);
   stored.forEach((r, i) => {
@@ -109,7 +134,12 @@ it("on a phone with touch, a sweep of the demo store's dairy line takes one tap 
 });
 
 it("a half-typed value stays on the device through a reload and is uploaded once, when the technician leaves the screen", async () => {
-  const context = await newContext(suite.browser, { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 });
+  const context = await newContext(suite.browser, {
+    viewport: { width: 390, height: 844 },
+    hasTouch: true,
+    isMobile: true,
+    deviceScaleFactor: 2,
+  });
   const page = await context.newPage();
   page.setDefaultTimeout(15_000);
   const sweepId = await openWalk(page);
@@ -123,7 +153,11 @@ it("a half-typed value stays on the device through a reload and is uploaded once
   await page.getByRole("button", { name: "7", exact: true }).tap();
   await page.getByRole("button", { name: "Decimal point" }).tap();
   await page.getByRole("button", { name: "5", exact: true }).tap();
-  await until("the first reading on the server", () => onServer(sweepId), (r) => r.length === 1);
+  await until(
+    "the first reading on the server",
+    () => onServer(sweepId),
+    (r) => r.length === 1,
+  );
   await page.waitForTimeout(1000); // a sync pass would have had time to send the open one
   expect((await onServer(sweepId)).length).toBe(1);
 
@@ -132,14 +166,23 @@ it("a half-typed value stays on the device through a reload and is uploaded once
   await expect(page.getByLabel("Value").textContent()).resolves.toMatch(/^7\.5 ppm$/);
   await page.getByRole("button", { name: "← Leave" }).tap();
   await page.getByTestId("walk-screen").waitFor({ state: "detached" });
-  const stored = await until("both readings on the server", () => onServer(sweepId), (r) => r.length === 2);
+  const stored = await until(
+    "both readings on the server",
+    () => onServer(sweepId),
+    (r) => r.length === 2,
+  );
   expect(stored.map((r) => r.ppm)).toEqual([0, 7.5]);
   expect(await suite.server.ctx.db.select().from(readingAudit).where(eq(readingAudit.sweepId, sweepId))).toEqual([]);
   await context.close();
 });
 
 it("moves an uploaded reading from the readings list and the open one from its keypad; only the uploaded one's move is an audited edit; the zoom buttons zoom about the open reading", async () => {
-  const context = await newContext(suite.browser, { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 });
+  const context = await newContext(suite.browser, {
+    viewport: { width: 390, height: 844 },
+    hasTouch: true,
+    isMobile: true,
+    deviceScaleFactor: 2,
+  });
   const page = await context.newPage();
   page.setDefaultTimeout(15_000);
   const sweepId = await openWalk(page);
@@ -152,7 +195,11 @@ it("moves an uploaded reading from the readings list and the open one from its k
   await tapAt(a);
   await tapAt(b);
   await page.getByRole("heading", { name: "#2", exact: true }).waitFor();
-  await until("the first reading on the server", () => onServer(sweepId), (r) => r.length === 1);
+  await until(
+    "the first reading on the server",
+    () => onServer(sweepId),
+    (r) => r.length === 1,
+  );
 
   // The first one was really taken 1 m further along the case: move it from the list.
   await page.getByRole("button", { name: "Readings" }).tap();
@@ -160,7 +207,11 @@ it("moves an uploaded reading from the readings list and the open one from its k
   await rows.filter({ hasText: "#1 ·" }).getByRole("button", { name: "Move" }).tap();
   await page.getByText("Tap the plan where reading #1 was taken.").waitFor();
   await tapAt({ x: a.x + 1, y: a.y });
-  await until("the moved reading on the server", () => onServer(sweepId), (r) => r.length === 1 && Math.abs(r[0].x - (a.x + 1)) < 0.2);
+  await until(
+    "the moved reading on the server",
+    () => onServer(sweepId),
+    (r) => r.length === 1 && Math.abs(r[0].x - (a.x + 1)) < 0.2,
+  );
   // Gloves cannot always pinch: the zoom buttons zoom about the reading on the keypad.
   const plan = page.getByTestId("walk-plan");
   const viewOf = async () => (await plan.getAttribute("data-view"))!.split(" ").map(Number);
@@ -179,7 +230,11 @@ it("moves an uploaded reading from the readings list and the open one from its k
   expect((await viewOf())[0]).toBeCloseTo(fitScale, 5);
   await page.getByRole("button", { name: "Submit" }).tap();
   await page.getByRole("button", { name: "Submit sweep" }).tap();
-  const stored = await until("both readings on the server", () => onServer(sweepId), (r) => r.length === 2);
+  const stored = await until(
+    "both readings on the server",
+    () => onServer(sweepId),
+    (r) => r.length === 2,
+  );
   expect(stored[1].x).toBeCloseTo(c.x, 0);
   const audit = await suite.server.ctx.db.select().from(readingAudit).where(eq(readingAudit.sweepId, sweepId));
   expect(audit).toHaveLength(1);

@@ -16,7 +16,9 @@ it("on a tablet with a mouse, walks the dairy case line one click per reading, i
   page.setDefaultTimeout(15_000);
   const failures: string[] = [];
   page.on("pageerror", (e) => failures.push(String(e)));
-  page.on("console", (m) => { if (m.type() === "error") failures.push(m.text()); });
+  page.on("console", (m) => {
+    if (m.type() === "error") failures.push(m.text());
+  });
 
   await signInThroughForm(page, suite.server.url, suite.co.people.technician.email, PASSWORD);
   await page.goto(`${suite.server.url}/walk`);
@@ -44,15 +46,23 @@ it("on a tablet with a mouse, walks the dairy case line one click per reading, i
   }
   await page.getByRole("button", { name: "Save", exact: true }).click();
   clicks++;
-  await page.getByTestId("walk-count").filter({ hasText: `${xs.length} readings` }).waitFor().catch(async (e) => {
-    await page.screenshot({ path: "/tmp/walkshots/leak-fail.png" });
-    console.log("FAILURES", failures);
-    throw e;
-  });
+  await page
+    .getByTestId("walk-count")
+    .filter({ hasText: `${xs.length} readings` })
+    .waitFor()
+    .catch(async (e) => {
+      await page.screenshot({ path: "/tmp/walkshots/leak-fail.png" });
+      console.log("FAILURES", failures);
+      throw e;
+    });
   expect(clicks).toBe(xs.length + 2); // one per reading, one digit, one final save
   const stored = await (async () => {
     for (let k = 0; k < 100; k++) {
-      const r = await suite.server.ctx.db.select().from(readings).where(eq(readings.sweepId, sweepId)).orderBy(asc(readings.takenAt));
+      const r = await suite.server.ctx.db
+        .select()
+        .from(readings)
+        .where(eq(readings.sweepId, sweepId))
+        .orderBy(asc(readings.takenAt));
       if (r.length === xs.length) return r;
       await new Promise((res) => setTimeout(res, 200));
     }
@@ -66,15 +76,28 @@ it("on a tablet with a mouse, walks the dairy case line one click per reading, i
   // The detector's own log, lined up by time with the taps; a garbled row is reported by line.
   const t0 = stored[0].takenAt.getTime();
   const t1 = stored[stored.length - 1].takenAt.getTime();
-  const csv = ["Time,Gas (ppm)", `${new Date(t0 + 100).toISOString()},0.2`, `${new Date(t1 - 100).toISOString()},3.5`, "garbled,7", `${new Date(t1 + 60_000).toISOString()},1`].join("\n");
+  const csv = [
+    "Time,Gas (ppm)",
+    `${new Date(t0 + 100).toISOString()},0.2`,
+    `${new Date(t1 - 100).toISOString()},3.5`,
+    "garbled,7",
+    `${new Date(t1 + 60_000).toISOString()},1`,
+  ].join("\n");
   await page.getByRole("button", { name: "Import log" }).click();
   const importer = page.getByRole("dialog", { name: "Import the detector's log" });
-  await importer.getByLabel("CSV file").setInputFiles({ name: "log.csv", mimeType: "text/csv", buffer: Buffer.from(csv) });
+  await importer
+    .getByLabel("CSV file")
+    .setInputFiles({ name: "log.csv", mimeType: "text/csv", buffer: Buffer.from(csv) });
   await expect(importer.getByTestId("import-counts").textContent()).resolves.toBe("2 rows can be placed; 2 cannot.");
   await expect(importer.getByText('Line 4: Time "garbled" is not a time').isVisible()).resolves.toBe(true);
-  await expect(importer.getByText("Line 5: at this clock offset its time falls after the last tapped position").isVisible()).resolves.toBe(true);
+  await expect(
+    importer.getByText("Line 5: at this clock offset its time falls after the last tapped position").isVisible(),
+  ).resolves.toBe(true);
   await importer.getByRole("button", { name: "Add 2 readings" }).click();
-  await page.getByTestId("walk-count").filter({ hasText: `${xs.length + 2} readings` }).waitFor();
+  await page
+    .getByTestId("walk-count")
+    .filter({ hasText: `${xs.length + 2} readings` })
+    .waitFor();
   for (let k = 0; k < 100; k++) {
     const n = (await suite.server.ctx.db.select().from(readings).where(eq(readings.sweepId, sweepId))).length;
     if (n === xs.length + 2) break;
@@ -93,7 +116,9 @@ it("on a tablet with a mouse, walks the dairy case line one click per reading, i
   await dialog.waitFor();
   await expect(dialog.getByLabel("Fixture").inputValue()).resolves.not.toBe("");
   await dialog.getByLabel("Component").selectOption("brazed-joint");
-  await dialog.getByLabel("Photo").setInputFiles({ name: "joint.jpg", mimeType: "image/jpeg", buffer: await makeJpeg(640, 480) });
+  await dialog
+    .getByLabel("Photo")
+    .setInputFiles({ name: "joint.jpg", mimeType: "image/jpeg", buffer: await makeJpeg(640, 480) });
   await dialog.getByLabel("Note").fill("Bubbles at the suction line elbow behind the kick plate");
   await dialog.getByRole("button", { name: "Save finding" }).click();
   await page.getByText("Finding saved.").waitFor();
@@ -108,14 +133,25 @@ it("on a tablet with a mouse, walks the dairy case line one click per reading, i
   const made = await suite.server.ctx.db.select().from(findings).where(eq(findings.sweepId, sweepId));
   expect(made).toHaveLength(1);
   const [f] = made;
-  expect(f).toMatchObject({ status: "confirmed", component: "brazed-joint", source: "walk", storeId: suite.co.store.id });
+  expect(f).toMatchObject({
+    status: "confirmed",
+    component: "brazed-joint",
+    source: "walk",
+    storeId: suite.co.store.id,
+  });
   expect(f.clientId).not.toBeNull();
   expect(f.x).toBeCloseTo(10, 0);
   expect(f.y).toBeCloseTo(9.8, 0);
   expect(f.fixtureId).not.toBeNull();
-  expect(await suite.server.ctx.db.select().from(findingPhotos).where(eq(findingPhotos.findingId, f.id))).toHaveLength(1);
+  expect(await suite.server.ctx.db.select().from(findingPhotos).where(eq(findingPhotos.findingId, f.id))).toHaveLength(
+    1,
+  );
   // Offline, the browser reports the failed API calls as console errors: only those are expected.
-  failures.splice(0, failures.length, ...failures.filter((m) => !/Failed to load resource|ERR_INTERNET_DISCONNECTED/.test(m)));
+  failures.splice(
+    0,
+    failures.length,
+    ...failures.filter((m) => !/Failed to load resource|ERR_INTERNET_DISCONNECTED/.test(m)),
+  );
   expect(failures).toEqual([]);
   await context.close();
 });

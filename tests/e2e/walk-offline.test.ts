@@ -12,7 +12,12 @@ const suite = walkSuite("Thornbury Grocers");
 const onServer = (sweepId: string) => storedReadings(suite.server.ctx, sweepId);
 
 it("a technician on a phone taps ten readings with the network cut halfway, reloads offline, and all ten reach the server in order", async () => {
-  const context = await newContext(suite.browser, { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 });
+  const context = await newContext(suite.browser, {
+    viewport: { width: 390, height: 844 },
+    hasTouch: true,
+    isMobile: true,
+    deviceScaleFactor: 2,
+  });
   const page = await context.newPage();
   page.setDefaultTimeout(15_000);
   const failures: string[] = [];
@@ -26,7 +31,11 @@ it("a technician on a phone taps ten readings with the network cut halfway, relo
   await waitForServiceWorker(page);
   const sweepId = page.url().split("/").pop()!;
   // The sweep was made on the device first, then uploaded.
-  await until("the sweep on the server", () => suite.server.ctx.db.select().from(sweeps).where(eq(sweeps.id, sweepId)), (r) => r.length === 1);
+  await until(
+    "the sweep on the server",
+    () => suite.server.ctx.db.select().from(sweeps).where(eq(sweeps.id, sweepId)),
+    (r) => r.length === 1,
+  );
 
   // Along the front of the case line in the sales floor, left to right, 2 m apart.
   const spots = Array.from({ length: 10 }, (_, i) => ({ x: 20 + 2 * i, y: 22 }));
@@ -40,14 +49,22 @@ it("a technician on a phone taps ten readings with the network cut halfway, relo
     if (values[i] === 0) {
       await page.getByRole("button", { name: "0 ppm — save" }).tap();
     } else {
-      for (const k of String(values[i])) await page.getByRole("button", { name: k === "." ? "Decimal point" : k, exact: true }).tap();
+      for (const k of String(values[i]))
+        await page.getByRole("button", { name: k === "." ? "Decimal point" : k, exact: true }).tap();
       await page.getByRole("button", { name: "Save", exact: true }).tap();
     }
-    await page.getByTestId("walk-count").filter({ hasText: new RegExp(`^${i + 1} readings?`) }).waitFor();
+    await page
+      .getByTestId("walk-count")
+      .filter({ hasText: new RegExp(`^${i + 1} readings?`) })
+      .waitFor();
   }
 
   for (let i = 0; i < 5; i++) await record(i);
-  await until("five readings on the server", () => onServer(sweepId), (r) => r.length === 5);
+  await until(
+    "five readings on the server",
+    () => onServer(sweepId),
+    (r) => r.length === 5,
+  );
   await page.locator('[data-testid="sync-banner"][data-waiting="0"]').waitFor();
 
   await context.setOffline(true);
@@ -67,7 +84,11 @@ it("a technician on a phone taps ten readings with the network cut halfway, relo
   expect((await onServer(sweepId)).length).toBe(5);
 
   await context.setOffline(false);
-  const stored = await until("ten readings on the server", () => onServer(sweepId), (r) => r.length === 10);
+  const stored = await until(
+    "ten readings on the server",
+    () => onServer(sweepId),
+    (r) => r.length === 10,
+  );
   expect(stored.map((r) => r.x)).toEqual(stored.map((r) => r.x).sort((a, b) => a - b)); // tap order = time order
   stored.forEach((r, i) => {
     expect(r.x).toBeCloseTo(spots[i].x, 0);

@@ -18,6 +18,9 @@ export async function launchBrowser(): Promise<Browser> {
   return chromium.launch({ executablePath: CHROMIUM_PATH, headless: true, args: ARGS });
 }
 
-export async function newContext(browser: Browser, options: Parameters<Browser["newContext"]>[0] = {}): Promise<BrowserContext> {
+export async function newContext(
+  browser: Browser,
+  options: Parameters<Browser["newContext"]>[0] = {},
+): Promise<BrowserContext> {
   return browser.newContext({ viewport: { width: 1280, height: 800 }, ...options });
 }

@@ -27,7 +27,13 @@ export async function numberAttr(page: Page, selector: string, name: string): Pr
 
 /** Screen position of a display-image pixel in the calibration picker, from the view it reports. */
 export async function pickerScreen(page: Page, x: number, y: number) {
-  const box = (await page.getByRole("group", { name: "Calibration line on the drawing" }).locator("canvas").first().boundingBox())!;
-  const [zoom, panX, panY] = await Promise.all(["data-zoom", "data-pan-x", "data-pan-y"].map((a) => numberAttr(page, "[data-testid=picker-view]", a)));
+  const box = (await page
+    .getByRole("group", { name: "Calibration line on the drawing" })
+    .locator("canvas")
+    .first()
+    .boundingBox())!;
+  const [zoom, panX, panY] = await Promise.all(
+    ["data-zoom", "data-pan-x", "data-pan-y"].map((a) => numberAttr(page, "[data-testid=picker-view]", a)),
+  );
   return { x: box.x + panX + x * zoom, y: box.y + panY + y * zoom };
 }

@@ -4,7 +4,16 @@
  * codes are mapped to Unicode through that font's ToUnicode CMap (§9.10.3, bfchar and bfrange).
  * pdf-lib parses the file and inflates the streams; pdf-lib itself has no text extraction.
  */
-import { PDFArray, PDFDict, PDFDocument, PDFName, PDFRawStream, PDFRef, decodePDFRawStream, type PDFObject } from "pdf-lib";
+import {
+  PDFArray,
+  PDFDict,
+  PDFDocument,
+  PDFName,
+  PDFRawStream,
+  PDFRef,
+  decodePDFRawStream,
+  type PDFObject,
+} from "pdf-lib";
 
 type CMap = { bytes: number; map: Map<number, string> };
 
@@ -21,7 +30,8 @@ function parseCMap(text: string): CMap {
   const cs = /begincodespacerange\s*<([0-9a-fA-F]+)>/.exec(text);
   if (cs) bytes = cs[1].length / 2;
   for (const block of text.matchAll(/beginbfchar([\s\S]*?)endbfchar/g)) {
-    for (const m of block[1].matchAll(/<([0-9a-fA-F]+)>\s*<([0-9a-fA-F]+)>/g)) map.set(parseInt(m[1], 16), hexToString(m[2]));
+    for (const m of block[1].matchAll(/<([0-9a-fA-F]+)>\s*<([0-9a-fA-F]+)>/g))
+      map.set(parseInt(m[1], 16), hexToString(m[2]));
   }
   for (const block of text.matchAll(/beginbfrange([\s\S]*?)endbfrange/g)) {
     for (const m of block[1].matchAll(/<([0-9a-fA-F]+)>\s*<([0-9a-fA-F]+)>\s*(\[[^\]]*\]|<[0-9a-fA-F]+>)/g)) {
@@ -42,7 +52,11 @@ function parseCMap(text: string): CMap {
 function streamText(doc: PDFDocument, obj: PDFObject | undefined): string {
   const o = obj instanceof PDFRef ? doc.context.lookup(obj) : obj;
   if (o instanceof PDFRawStream) return Buffer.from(decodePDFRawStream(o).decode()).toString("latin1");
-  if (o instanceof PDFArray) return o.asArray().map((x) => streamText(doc, x)).join("\n");
+  if (o instanceof PDFArray)
+    return o
+      .asArray()
+      .map((x) => streamText(doc, x))
+      .join("\n");
   return "";
 }
 
@@ -77,7 +91,8 @@ export async function pdfText(bytes: Uint8Array): Promise<string[]> {
     // /F1 10 Tf … [<00a1> 12 <00b2>] TJ or <00a1> Tj
     for (const m of content.matchAll(/\/([\w.+-]+)\s+[\d.]+\s+Tf|\[((?:[^\]\\]|\\.)*)\]\s*TJ|<([0-9a-fA-F]*)>\s*Tj/g)) {
       if (m[1]) current = fonts.get(m[1]);
-      else if (m[2] !== undefined) lines.push([...m[2].matchAll(/<([0-9a-fA-F]*)>/g)].map((h) => decodeHexWith(h[1], current)).join(""));
+      else if (m[2] !== undefined)
+        lines.push([...m[2].matchAll(/<([0-9a-fA-F]*)>/g)].map((h) => decodeHexWith(h[1], current)).join(""));
       else if (m[3] !== undefined) lines.push(decodeHexWith(m[3], current));
     }
     pages.push(lines.join("\n"));

@@ -7,12 +7,23 @@ export const COMPANY_B = "5a6b7c8d-9e0f-4a1b-9c2d-3e4f5a6b7c8d";
 export const USER_ID = "7c1d2e3f-4a5b-4c6d-8e7f-9a0b1c2d3e4f";
 
 export function signedOutSession(csrfToken = "csrf-signed-out"): SessionInfo {
-  return { user: null, activeCompanyId: null, memberships: [], csrfToken, outboxEnabled: true, units: { length: "m", mass: "kg" } };
+  return {
+    user: null,
+    activeCompanyId: null,
+    memberships: [],
+    csrfToken,
+    outboxEnabled: true,
+    units: { length: "m", mass: "kg" },
+  };
 }
 
-export function sessionFor(role: Role, options: { outboxEnabled?: boolean; csrfToken?: string; twoCompanies?: boolean } = {}): SessionInfo {
+export function sessionFor(
+  role: Role,
+  options: { outboxEnabled?: boolean; csrfToken?: string; twoCompanies?: boolean } = {},
+): SessionInfo {
   const memberships: SessionInfo["memberships"] = [{ companyId: COMPANY_A, companyName: "Northfield Cold Care", role }];
-  if (options.twoCompanies) memberships.push({ companyId: COMPANY_B, companyName: "Harbour Lane Grocers", role: "engineer" });
+  if (options.twoCompanies)
+    memberships.push({ companyId: COMPANY_B, companyName: "Harbour Lane Grocers", role: "engineer" });
   return {
     user: { id: USER_ID, email: "ines.varga@northfield.example", name: "Ines Varga", lengthUnit: null, massUnit: null },
     activeCompanyId: COMPANY_A,

@@ -4,8 +4,20 @@
  * constant back along the walk. The walk goes east along a case front, back along the aisle and east
  * behind the case; a tap every 1.3 m, 1.6 s apart.
  */
-export function caseWalkReadings(startedAt: Date, leak = { x: 12, y: 3 }, peakPpm = 90, lagS = 6.5): Record<string, unknown>[] {
-  const legs: [number, number][] = [[1, 3.9], [22, 3.9], [22, 5.2], [1, 5.2], [1, 1.2], [22, 1.2]];
+export function caseWalkReadings(
+  startedAt: Date,
+  leak = { x: 12, y: 3 },
+  peakPpm = 90,
+  lagS = 6.5,
+): Record<string, unknown>[] {
+  const legs: [number, number][] = [
+    [1, 3.9],
+    [22, 3.9],
+    [22, 5.2],
+    [1, 5.2],
+    [1, 1.2],
+    [22, 1.2],
+  ];
   const taps: { x: number; y: number; s: number }[] = [];
   let s = 10;
   for (let k = 1; k < legs.length; k++) {
@@ -20,7 +32,8 @@ export function caseWalkReadings(startedAt: Date, leak = { x: 12, y: 3 }, peakPp
   const conc = (x: number, y: number) => 0.4 + peakPpm * Math.exp(-Math.hypot(x - leak.x, y - leak.y) / 1.2);
   return taps.map((tap) => {
     const back = tap.s - lagS;
-    let x = taps[0].x, y = taps[0].y;
+    let x = taps[0].x,
+      y = taps[0].y;
     for (let k = 1; k < taps.length; k++) {
       if (taps[k].s >= back && taps[k - 1].s <= back) {
         const f = (back - taps[k - 1].s) / (taps[k].s - taps[k - 1].s);
@@ -28,14 +41,33 @@ export function caseWalkReadings(startedAt: Date, leak = { x: 12, y: 3 }, peakPp
         y = taps[k - 1].y + f * (taps[k].y - taps[k - 1].y);
       }
     }
-    return { id: crypto.randomUUID(), x: Number(tap.x.toFixed(3)), y: Number(tap.y.toFixed(3)), takenAt: new Date(startedAt.getTime() + tap.s * 1000).toISOString(), ppm: Math.round(conc(x, y)), samplePoint: "grille" };
+    return {
+      id: crypto.randomUUID(),
+      x: Number(tap.x.toFixed(3)),
+      y: Number(tap.y.toFixed(3)),
+      takenAt: new Date(startedAt.getTime() + tap.s * 1000).toISOString(),
+      ppm: Math.round(conc(x, y)),
+      samplePoint: "grille",
+    };
   });
 }
 
 /** The case line those readings walk: a 21 m open case, y 2..3.6, with a line-set drop behind it. */
 export function caseLineFixtures(caseId: string, dropId: string) {
   return [
-    { id: caseId, kind: "open-case", label: "Dairy 1–4", systemId: null, hasFans: true, polygon: [[1, 2], [22, 2], [22, 3.6], [1, 3.6]] },
+    {
+      id: caseId,
+      kind: "open-case",
+      label: "Dairy 1–4",
+      systemId: null,
+      hasFans: true,
+      polygon: [
+        [1, 2],
+        [22, 2],
+        [22, 3.6],
+        [1, 3.6],
+      ],
+    },
     { id: dropId, kind: "line-set-drop", label: "Drop D2", systemId: null, hasFans: false, point: { x: 12, y: 2.2 } },
   ];
 }

@@ -20,7 +20,10 @@ export interface TestApp {
 export async function createTestApp(config: Partial<AppConfig> = {}): Promise<TestApp> {
   const database = await createTestDatabase();
   const smtp = await startFakeSmtp(database.db, 0);
-  const mailer = createSmtpMailer({ host: "127.0.0.1", port: smtp.port, secure: false, from: "Plumeline <no-reply@plumeline.test>" }, true);
+  const mailer = createSmtpMailer(
+    { host: "127.0.0.1", port: smtp.port, secure: false, from: "Plumeline <no-reply@plumeline.test>" },
+    true,
+  );
   const ctx: AppContext = {
     db: database.db,
     pool: database.pool,
@@ -67,9 +70,24 @@ export async function agentFor(app: Express) {
   return {
     agent,
     get: (url: string) => agent.get(url).then(remember),
-    post: (url: string, body?: object) => agent.post(url).set("X-CSRF-Token", csrf).send(body ?? {}).then(remember),
-    put: (url: string, body?: object) => agent.put(url).set("X-CSRF-Token", csrf).send(body ?? {}).then(remember),
-    patch: (url: string, body?: object) => agent.patch(url).set("X-CSRF-Token", csrf).send(body ?? {}).then(remember),
+    post: (url: string, body?: object) =>
+      agent
+        .post(url)
+        .set("X-CSRF-Token", csrf)
+        .send(body ?? {})
+        .then(remember),
+    put: (url: string, body?: object) =>
+      agent
+        .put(url)
+        .set("X-CSRF-Token", csrf)
+        .send(body ?? {})
+        .then(remember),
+    patch: (url: string, body?: object) =>
+      agent
+        .patch(url)
+        .set("X-CSRF-Token", csrf)
+        .send(body ?? {})
+        .then(remember),
     delete: (url: string) => agent.delete(url).set("X-CSRF-Token", csrf).then(remember),
     get csrf() {
       return csrf;

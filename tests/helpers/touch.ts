@@ -21,7 +21,10 @@ export async function touchDrag(cdp: CDPSession, from: Finger, to: Finger, steps
   await cdp.send("Input.dispatchTouchEvent", { type: "touchStart", touchPoints: [{ x: from.x, y: from.y, id: 1 }] });
   for (let i = 1; i <= steps; i++) {
     const t = i / steps;
-    await cdp.send("Input.dispatchTouchEvent", { type: "touchMove", touchPoints: [{ x: from.x + (to.x - from.x) * t, y: from.y + (to.y - from.y) * t, id: 1 }] });
+    await cdp.send("Input.dispatchTouchEvent", {
+      type: "touchMove",
+      touchPoints: [{ x: from.x + (to.x - from.x) * t, y: from.y + (to.y - from.y) * t, id: 1 }],
+    });
     await pause(16);
   }
   await cdp.send("Input.dispatchTouchEvent", { type: "touchEnd", touchPoints: [] });
@@ -41,7 +44,10 @@ export async function pinch(cdp: CDPSession, centre: Finger, from: number, to: n
   await pause(16);
   await cdp.send("Input.dispatchTouchEvent", { type: "touchStart", touchPoints: fingers(from) });
   for (let i = 1; i <= steps; i++) {
-    await cdp.send("Input.dispatchTouchEvent", { type: "touchMove", touchPoints: fingers(from + ((to - from) * i) / steps) });
+    await cdp.send("Input.dispatchTouchEvent", {
+      type: "touchMove",
+      touchPoints: fingers(from + ((to - from) * i) / steps),
+    });
     await pause(16);
   }
   await cdp.send("Input.dispatchTouchEvent", { type: "touchEnd", touchPoints: [fingers(to)[0]] });

@@ -5,11 +5,24 @@ import type { AppContext } from "../../server/context";
 import { seedDemoLayout } from "../../server/db/seed/demo-store-map";
 
 /** Maps the invented test store with the demo layout (60 m × 36 m, 42 fixtures) and adds a detector. */
-export async function mapStoreForWalk(ctx: AppContext, ids: { companyId: string; storeId: string; createdById: string }) {
+export async function mapStoreForWalk(
+  ctx: AppContext,
+  ids: { companyId: string; storeId: string; createdById: string },
+) {
   await ctx.db.transaction((tx) => seedDemoLayout(ctx, tx, ids));
   const today = new Date().toISOString().slice(0, 10);
   // 5 s transport delay and 2 ppm alarm: common practice, no published source.
-  await ctx.db.insert(detectors).values({ companyId: ids.companyId, name: "Test diode sniffer", principle: "heated-diode", transportDelayS: 5, timeConstantS: 1.5, alarmPpm: 2, lastCheckedOn: today });
+  await ctx.db
+    .insert(detectors)
+    .values({
+      companyId: ids.companyId,
+      name: "Test diode sniffer",
+      principle: "heated-diode",
+      transportDelayS: 5,
+      timeConstantS: 1.5,
+      alarmPpm: 2,
+      lastCheckedOn: today,
+    });
 }
 
 /** Screen point of plan metres (x, y) on the Walk screen, from the view the plan reports. */
@@ -43,7 +56,9 @@ export async function waitForServiceWorker(page: Page) {
   await page.evaluate(async () => {
     await navigator.serviceWorker.ready;
     if (!navigator.serviceWorker.controller) {
-      await new Promise((resolve) => navigator.serviceWorker.addEventListener("controllerchange", resolve, { once: true }));
+      await new Promise((resolve) =>
+        navigator.serviceWorker.addEventListener("controllerchange", resolve, { once: true }),
+      );
     }
   });
 }

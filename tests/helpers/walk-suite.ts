@@ -21,7 +21,11 @@ export function walkSuite(companyName: string): WalkSuite {
     suite.server = await startE2eServer();
     suite.co = await seedCompany(suite.server.ctx, companyName);
     const { co } = suite;
-    await mapStoreForWalk(suite.server.ctx, { companyId: co.company.id, storeId: co.store.id, createdById: co.people["lead-tech"].userId });
+    await mapStoreForWalk(suite.server.ctx, {
+      companyId: co.company.id,
+      storeId: co.store.id,
+      createdById: co.people["lead-tech"].userId,
+    });
     suite.browser = await launchBrowser();
   });
   afterAll(async () => {

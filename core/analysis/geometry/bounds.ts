@@ -1,7 +1,10 @@
 import type { Bounds, Polygon, Vec } from "./types";
 
 export function polygonBounds(points: Polygon): Bounds {
-  let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
+  let minX = Infinity,
+    minY = Infinity,
+    maxX = -Infinity,
+    maxY = -Infinity;
   for (const [x, y] of points) {
     if (x < minX) minX = x;
     if (y < minY) minY = y;
@@ -12,5 +15,7 @@ export function polygonBounds(points: Polygon): Bounds {
 }
 
 export function insideRect(point: Vec, width: number, height: number, tolerance = 0): boolean {
-  return point[0] >= -tolerance && point[1] >= -tolerance && point[0] <= width + tolerance && point[1] <= height + tolerance;
+  return (
+    point[0] >= -tolerance && point[1] >= -tolerance && point[0] <= width + tolerance && point[1] <= height + tolerance
+  );
 }

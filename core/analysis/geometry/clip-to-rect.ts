@@ -6,9 +6,22 @@ import type { Polygon } from "./types";
  * clip regions such as the plan's rectangle. Returns [] when nothing is left.
  */
 export function clipPolygonToRect(polygon: Polygon, width: number, height: number): [number, number][] {
-  type Edge = { inside: (p: readonly [number, number]) => boolean; cut: (a: readonly [number, number], b: readonly [number, number]) => [number, number] };
-  const atX = (x0: number) => (a: readonly [number, number], b: readonly [number, number]): [number, number] => [x0, a[1] + ((b[1] - a[1]) * (x0 - a[0])) / (b[0] - a[0])];
-  const atY = (y0: number) => (a: readonly [number, number], b: readonly [number, number]): [number, number] => [a[0] + ((b[0] - a[0]) * (y0 - a[1])) / (b[1] - a[1]), y0];
+  type Edge = {
+    inside: (p: readonly [number, number]) => boolean;
+    cut: (a: readonly [number, number], b: readonly [number, number]) => [number, number];
+  };
+  const atX =
+    (x0: number) =>
+    (a: readonly [number, number], b: readonly [number, number]): [number, number] => [
+      x0,
+      a[1] + ((b[1] - a[1]) * (x0 - a[0])) / (b[0] - a[0]),
+    ];
+  const atY =
+    (y0: number) =>
+    (a: readonly [number, number], b: readonly [number, number]): [number, number] => [
+      a[0] + ((b[0] - a[0]) * (y0 - a[1])) / (b[1] - a[1]),
+      y0,
+    ];
   const edges: Edge[] = [
     { inside: (p) => p[0] >= 0, cut: atX(0) },
     { inside: (p) => p[0] <= width, cut: atX(width) },

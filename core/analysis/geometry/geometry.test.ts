@@ -7,17 +7,53 @@ import { applySimilarity, invertSimilarity, similarityFromTwoPoints } from "./si
 describe("polygon area", () => {
   it("matches the shoelace worked example", () => {
     // Worked example of the shoelace formula (Wikipedia, "Shoelace formula"): (1,6),(3,1),(7,2),(4,4),(8,5) has area 16.5.
-    expect(polygonArea([[1, 6], [3, 1], [7, 2], [4, 4], [8, 5]])).toBeCloseTo(16.5, 12);
+    expect(
+      polygonArea([
+        [1, 6],
+        [3, 1],
+        [7, 2],
+        [4, 4],
+        [8, 5],
+      ]),
+    ).toBeCloseTo(16.5, 12);
   });
   it("is signed by orientation and finds the centroid of a rectangle", () => {
-    expect(signedArea([[0, 0], [2, 0], [2, 1], [0, 1]])).toBe(2);
-    expect(signedArea([[0, 0], [0, 1], [2, 1], [2, 0]])).toBe(-2);
-    expect(polygonCentroid([[0, 0], [4, 0], [4, 2], [0, 2]])).toEqual([2, 1]);
+    expect(
+      signedArea([
+        [0, 0],
+        [2, 0],
+        [2, 1],
+        [0, 1],
+      ]),
+    ).toBe(2);
+    expect(
+      signedArea([
+        [0, 0],
+        [0, 1],
+        [2, 1],
+        [2, 0],
+      ]),
+    ).toBe(-2);
+    expect(
+      polygonCentroid([
+        [0, 0],
+        [4, 0],
+        [4, 2],
+        [0, 2],
+      ]),
+    ).toEqual([2, 1]);
   });
 });
 
 describe("point in polygon", () => {
-  const l: [number, number][] = [[0, 0], [4, 0], [4, 1], [1, 1], [1, 4], [0, 4]];
+  const l: [number, number][] = [
+    [0, 0],
+    [4, 0],
+    [4, 1],
+    [1, 1],
+    [1, 4],
+    [0, 4],
+  ];
   it("handles a concave L shape", () => {
     expect(pointInPolygon([0.5, 3], l)).toBe(true);
     expect(pointInPolygon([3, 0.5], l)).toBe(true);
@@ -40,8 +76,22 @@ describe("segments", () => {
     expect(distanceToSegment([1, 3], [0, 0], [2, 0])).toBe(3);
   });
   it("tells a bow-tie from a simple polygon", () => {
-    expect(isSelfIntersecting([[0, 0], [2, 0], [0, 2], [2, 2]])).toBe(true);
-    expect(isSelfIntersecting([[0, 0], [2, 0], [2, 2], [0, 2]])).toBe(false);
+    expect(
+      isSelfIntersecting([
+        [0, 0],
+        [2, 0],
+        [0, 2],
+        [2, 2],
+      ]),
+    ).toBe(true);
+    expect(
+      isSelfIntersecting([
+        [0, 0],
+        [2, 0],
+        [2, 2],
+        [0, 2],
+      ]),
+    ).toBe(false);
   });
 });
 

@@ -6,8 +6,10 @@ function cross(o: Vec, a: Vec, b: Vec): number {
 
 function onSegment(p: Vec, q: Vec, r: Vec): boolean {
   return (
-    Math.min(p[0], r[0]) <= q[0] && q[0] <= Math.max(p[0], r[0]) &&
-    Math.min(p[1], r[1]) <= q[1] && q[1] <= Math.max(p[1], r[1])
+    Math.min(p[0], r[0]) <= q[0] &&
+    q[0] <= Math.max(p[0], r[0]) &&
+    Math.min(p[1], r[1]) <= q[1] &&
+    q[1] <= Math.max(p[1], r[1])
   );
 }
 

@@ -12,7 +12,12 @@ describe("geodesic distance on the plan grid", () => {
     const grid = createPlanGrid(10, 10, h, []);
     const s = new GeodesicSearch(grid);
     s.fromPoint(1.125, 1.125, 20);
-    for (const [x, y] of [[8.875, 1.125], [8.875, 8.875], [5.125, 9.125], [3.375, 7.625]]) {
+    for (const [x, y] of [
+      [8.875, 1.125],
+      [8.875, 8.875],
+      [5.125, 9.125],
+      [3.375, 7.625],
+    ]) {
       const e = Math.hypot(x - 1.125, y - 1.125);
       const d = s.dist[cellIndexOf(grid, x, y)];
       expect(d).toBeGreaterThanOrEqual(e - 1e-9);
@@ -22,7 +27,14 @@ describe("geodesic distance on the plan grid", () => {
 
   it("around one wall equals the hand-computed path round its end", () => {
     // A wall from the top edge down to y = 6 m between x = 4.9 and 5.1 blocks cell columns 19-20, rows 0-23.
-    const grid = createPlanGrid(10, 10, h, [[[4.9, 0], [5.1, 0], [5.1, 6], [4.9, 6]]]);
+    const grid = createPlanGrid(10, 10, h, [
+      [
+        [4.9, 0],
+        [5.1, 0],
+        [5.1, 6],
+        [4.9, 6],
+      ],
+    ]);
     expect(grid.blocked[cellIndexOf(grid, 5.0, 5.9)]).toBe(1);
     expect(grid.blocked[cellIndexOf(grid, 5.0, 6.1)]).toBe(0);
     const s = new GeodesicSearch(grid);
@@ -39,7 +51,20 @@ describe("geodesic distance on the plan grid", () => {
 
   it("does not cut the corner between two diagonal solid cells", () => {
     // cells (1,0) and (0,1) are solid: (0,0) and (1,1) touch only at a corner, so they are not connected
-    const grid = createPlanGrid(0.5, 0.5, h, [[[0.25, 0], [0.5, 0], [0.5, 0.25], [0.25, 0.25]], [[0, 0.25], [0.25, 0.25], [0.25, 0.5], [0, 0.5]]]);
+    const grid = createPlanGrid(0.5, 0.5, h, [
+      [
+        [0.25, 0],
+        [0.5, 0],
+        [0.5, 0.25],
+        [0.25, 0.25],
+      ],
+      [
+        [0, 0.25],
+        [0.25, 0.25],
+        [0.25, 0.5],
+        [0, 0.5],
+      ],
+    ]);
     const s = new GeodesicSearch(grid);
     s.fromPoint(0.125, 0.125, 10);
     expect(s.dist[cellIndexOf(grid, 0.375, 0.375)]).toBe(Infinity);
@@ -54,11 +79,21 @@ describe("geodesic distance on the plan grid", () => {
   });
 
   it("routes a walk round a wall instead of through it", () => {
-    const grid = createPlanGrid(10, 10, h, [[[4.9, 0], [5.1, 0], [5.1, 6], [4.9, 6]]]);
+    const grid = createPlanGrid(10, 10, h, [
+      [
+        [4.9, 0],
+        [5.1, 0],
+        [5.1, 6],
+        [4.9, 6],
+      ],
+    ]);
     const route = routeBetween(new GeodesicSearch(grid), 2.125, 2.125, 7.875, 2.125, 30)!;
     expect(route[0]).toEqual([2.125, 2.125]);
     expect(route[route.length - 1]).toEqual([7.875, 2.125]);
     expect(Math.max(...route.map((p) => p[1]))).toBeGreaterThan(6);
-    expect(routeBetween(new GeodesicSearch(grid), 1, 8, 9, 8, 30)).toEqual([[1, 8], [9, 8]]);
+    expect(routeBetween(new GeodesicSearch(grid), 1, 8, 9, 8, 30)).toEqual([
+      [1, 8],
+      [9, 8],
+    ]);
   });
 });

@@ -29,7 +29,10 @@ export class GeodesicSearch {
    * times the mean scale of its two cells. Used for fixtures whose fans mix the air, where the screening
    * length √(K/λ) is longer, which is the same as distances being shorter.
    */
-  constructor(readonly grid: PlanGrid, readonly stepScale: Float32Array | null = null) {
+  constructor(
+    readonly grid: PlanGrid,
+    readonly stepScale: Float32Array | null = null,
+  ) {
     const n = grid.width * grid.height;
     this.dist = new Float64Array(n).fill(Infinity);
     this.parent = new Int32Array(n).fill(-1);

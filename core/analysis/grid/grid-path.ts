@@ -8,9 +8,20 @@ export type PathPoint = [number, number];
  * otherwise the grid shortest path around the bodies (cell centres between the exact end points).
  * Returns null when b cannot be reached within `maxDetour` metres of walking.
  */
-export function routeBetween(search: GeodesicSearch, ax: number, ay: number, bx: number, by: number, maxDetour: number): PathPoint[] | null {
+export function routeBetween(
+  search: GeodesicSearch,
+  ax: number,
+  ay: number,
+  bx: number,
+  by: number,
+  maxDetour: number,
+): PathPoint[] | null {
   const grid = search.grid;
-  if (!segmentBlocked(grid, ax, ay, bx, by)) return [[ax, ay], [bx, by]];
+  if (!segmentBlocked(grid, ax, ay, bx, by))
+    return [
+      [ax, ay],
+      [bx, by],
+    ];
   const target = nearestFreeCell(grid, bx, by);
   if (target < 0) return null;
   search.fromPoint(ax, ay, maxDetour, target);

@@ -17,9 +17,16 @@ export interface PlanGrid {
 // so diagonal moves cannot slip through it (see the corner rule in geodesic-distance.ts).
 const SUB = [1 / 6, 1 / 2, 5 / 6];
 
-export function createPlanGrid(planWidth: number, planHeight: number, cellSize: number, solids: readonly Polygon[]): PlanGrid {
-  if (!(cellSize > 0) || !Number.isFinite(cellSize)) throw new Error(`cellSize must be a positive number, got ${cellSize}`);
-  if (!(planWidth > 0) || !(planHeight > 0)) throw new Error(`plan size must be positive, got ${planWidth} x ${planHeight}`);
+export function createPlanGrid(
+  planWidth: number,
+  planHeight: number,
+  cellSize: number,
+  solids: readonly Polygon[],
+): PlanGrid {
+  if (!(cellSize > 0) || !Number.isFinite(cellSize))
+    throw new Error(`cellSize must be a positive number, got ${cellSize}`);
+  if (!(planWidth > 0) || !(planHeight > 0))
+    throw new Error(`plan size must be positive, got ${planWidth} x ${planHeight}`);
   const width = Math.ceil(planWidth / cellSize - 1e-9);
   const height = Math.ceil(planHeight / cellSize - 1e-9);
   const blocked = new Uint8Array(width * height);

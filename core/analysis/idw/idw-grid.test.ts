@@ -18,7 +18,11 @@ const bbox: [number, number, number, number] = [0, -deg(2), deg(4), 0];
 function turfPoints(weight?: number) {
   const base = { gridType: "point" as const, property: "ppm", units: "meters" as const, bbox };
   const grid = interpolate(readings, 0.5, weight === undefined ? base : { ...base, weight });
-  return grid.features.map((f) => ({ x: f.geometry.coordinates[0] * M_PER_DEG, y: -f.geometry.coordinates[1] * M_PER_DEG, v: f.properties!.ppm as number }));
+  return grid.features.map((f) => ({
+    x: f.geometry.coordinates[0] * M_PER_DEG,
+    y: -f.geometry.coordinates[1] * M_PER_DEG,
+    v: f.properties!.ppm as number,
+  }));
 }
 
 describe("IDW on an obstacle-free plan against @turf/interpolate", () => {
@@ -43,7 +47,15 @@ describe("IDW on an obstacle-free plan against @turf/interpolate", () => {
     const fc = featureCollection([...readings.features, point([at[0], at[1]], { ppm: 9 })]);
     const again = interpolate(fc, 0.5, { gridType: "point", property: "ppm", units: "meters", weight: 2, bbox });
     expect(Number.isNaN(again.features[5].properties!.ppm)).toBe(true);
-    expect(idwAt(at[0] * M_PER_DEG, -at[1] * M_PER_DEG, [...xs, at[0] * M_PER_DEG], [...ys, -at[1] * M_PER_DEG], [...ppm, 9])).toBe(9);
+    expect(
+      idwAt(
+        at[0] * M_PER_DEG,
+        -at[1] * M_PER_DEG,
+        [...xs, at[0] * M_PER_DEG],
+        [...ys, -at[1] * M_PER_DEG],
+        [...ppm, 9],
+      ),
+    ).toBe(9);
   });
 
   it("fills a row-major grid at cell centres and rejects mismatched inputs", () => {

@@ -17,7 +17,8 @@ export function idwGrid(
   checkPoints(xs, ys, values);
   const out = new Float64Array(width * height);
   for (let j = 0; j < height; j++) {
-    for (let i = 0; i < width; i++) out[j * width + i] = idwAt((i + 0.5) * cellSize, (j + 0.5) * cellSize, xs, ys, values, power);
+    for (let i = 0; i < width; i++)
+      out[j * width + i] = idwAt((i + 0.5) * cellSize, (j + 0.5) * cellSize, xs, ys, values, power);
   }
   return out;
 }
@@ -29,7 +30,14 @@ function checkPoints(xs: ArrayLike<number>, ys: ArrayLike<number>, values: Array
 }
 
 /** IDW at one point (qx, qy); the value of a coinciding reading when there is one. */
-export function idwAt(qx: number, qy: number, xs: ArrayLike<number>, ys: ArrayLike<number>, values: ArrayLike<number>, power = 2): number {
+export function idwAt(
+  qx: number,
+  qy: number,
+  xs: ArrayLike<number>,
+  ys: ArrayLike<number>,
+  values: ArrayLike<number>,
+  power = 2,
+): number {
   const half = power / 2;
   let sw = 0;
   let swy = 0;

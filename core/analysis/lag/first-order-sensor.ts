@@ -25,7 +25,11 @@ export function filterFirstOrder(times: readonly number[], input: readonly numbe
 }
 
 /** The exact inverse of filterFirstOrder: u_(k−1) = (y_k − α_k·y_(k−1))/(1 − α_k) (locator-methods §1a.2). */
-export function unfilterFirstOrder(times: readonly number[], output: readonly number[], timeConstantS: number): number[] {
+export function unfilterFirstOrder(
+  times: readonly number[],
+  output: readonly number[],
+  timeConstantS: number,
+): number[] {
   const u = new Array<number>(output.length);
   for (let k = 1; k < output.length; k++) {
     const a = timeConstantS > 0 ? Math.exp(-(times[k] - times[k - 1]) / timeConstantS) : 0;

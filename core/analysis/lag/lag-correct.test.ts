@@ -15,13 +15,23 @@ describe("lag correction", () => {
   });
 
   it("interpolates by timestamps between irregular taps", () => {
-    const taps: Tap[] = [{ x: 0, y: 0, t: 0 }, { x: 2, y: 0, t: 4 }, { x: 3, y: 0, t: 10 }, { x: 3, y: 0, t: 13 }];
+    const taps: Tap[] = [
+      { x: 0, y: 0, t: 0 },
+      { x: 2, y: 0, t: 4 },
+      { x: 3, y: 0, t: 10 },
+      { x: 3, y: 0, t: 13 },
+    ];
     // s = 13 − 5 = 8: two thirds of the way from the tap at 4 s (x 2) to the tap at 10 s (x 3)
     expect(lagCorrect(taps, 5, 0)[3].x).toBeCloseTo(2 + 4 / 6, 12);
   });
 
   it("follows a path with a turn", () => {
-    const taps: Tap[] = [{ x: 0, y: 0, t: 0 }, { x: 4, y: 0, t: 4 }, { x: 4, y: 4, t: 8 }, { x: 4, y: 6, t: 10 }];
+    const taps: Tap[] = [
+      { x: 0, y: 0, t: 0 },
+      { x: 4, y: 0, t: 4 },
+      { x: 4, y: 4, t: 8 },
+      { x: 4, y: 6, t: 10 },
+    ];
     const out = lagCorrect(taps, 5, 0);
     expect([out[2].x, out[2].y]).toEqual([3, 0]); // s = 3: still on the first leg
     expect([out[3].x, out[3].y]).toEqual([4, 1]); // s = 5: one metre after the corner
@@ -44,8 +54,19 @@ describe("lag correction", () => {
   });
 
   it("goes round a wall rather than through it when given the grid route", () => {
-    const grid = createPlanGrid(10, 10, 0.25, [[[4.9, 0], [5.1, 0], [5.1, 6], [4.9, 6]]]);
-    const taps: Tap[] = [{ x: 2.125, y: 2.125, t: 0 }, { x: 7.875, y: 2.125, t: 10 }, { x: 7.875, y: 2.125, t: 15 }];
+    const grid = createPlanGrid(10, 10, 0.25, [
+      [
+        [4.9, 0],
+        [5.1, 0],
+        [5.1, 6],
+        [4.9, 6],
+      ],
+    ]);
+    const taps: Tap[] = [
+      { x: 2.125, y: 2.125, t: 0 },
+      { x: 7.875, y: 2.125, t: 10 },
+      { x: 7.875, y: 2.125, t: 15 },
+    ];
     const out = lagCorrect(taps, 10, 0, { route: gridRoute(grid) });
     // s = 5 s, half way in time: half way along the detour, which passes under the wall's end (y > 6)
     expect(out[2].y).toBeGreaterThan(5.5);
@@ -55,8 +76,21 @@ describe("lag correction", () => {
   });
 
   it("flags a long jump between taps as a path gap and refuses times going backwards", () => {
-    const taps: Tap[] = [{ x: 0, y: 0, t: 0 }, { x: 10, y: 0, t: 2 }, { x: 10, y: 0, t: 6 }];
+    const taps: Tap[] = [
+      { x: 0, y: 0, t: 0 },
+      { x: 10, y: 0, t: 2 },
+      { x: 10, y: 0, t: 6 },
+    ];
     expect(lagCorrect(taps, 5, 0)[2].pathGap).toBe(true);
-    expect(() => lagCorrect([{ x: 0, y: 0, t: 3 }, { x: 1, y: 0, t: 2 }], 5, 0)).toThrow(/time order/);
+    expect(() =>
+      lagCorrect(
+        [
+          { x: 0, y: 0, t: 3 },
+          { x: 1, y: 0, t: 2 },
+        ],
+        5,
+        0,
+      ),
+    ).toThrow(/time order/);
   });
 });

@@ -41,12 +41,20 @@ export interface LagOptions {
   walkSpeedMps?: number;
 }
 
-export function lagCorrect(taps: readonly Tap[], delayS: number, timeConstantS: number, options: LagOptions = {}): LaggedPosition[] {
+export function lagCorrect(
+  taps: readonly Tap[],
+  delayS: number,
+  timeConstantS: number,
+  options: LagOptions = {},
+): LaggedPosition[] {
   const { route, maxStepM = 5, walkSpeedMps } = options;
-  if (walkSpeedMps !== undefined && !(walkSpeedMps > 0)) throw new Error(`walking speed must be positive, got ${walkSpeedMps} m/s`);
-  if (!(delayS >= 0) || !(timeConstantS >= 0)) throw new Error(`delay and time constant must be non-negative, got ${delayS} s and ${timeConstantS} s`);
+  if (walkSpeedMps !== undefined && !(walkSpeedMps > 0))
+    throw new Error(`walking speed must be positive, got ${walkSpeedMps} m/s`);
+  if (!(delayS >= 0) || !(timeConstantS >= 0))
+    throw new Error(`delay and time constant must be non-negative, got ${delayS} s and ${timeConstantS} s`);
   for (let k = 1; k < taps.length; k++) {
-    if (taps[k].t < taps[k - 1].t) throw new Error(`taps must be in time order: tap ${k} at ${taps[k].t} s follows ${taps[k - 1].t} s`);
+    if (taps[k].t < taps[k - 1].t)
+      throw new Error(`taps must be in time order: tap ${k} at ${taps[k].t} s follows ${taps[k - 1].t} s`);
   }
   const shift = delayS + timeConstantS;
   const routes = new Map<number, readonly (readonly [number, number])[]>();
@@ -55,7 +63,10 @@ export function lagCorrect(taps: readonly Tap[], delayS: number, timeConstantS: 
     if (!r) {
       const a = taps[j];
       const b = taps[j + 1];
-      r = (route && route(a, b)) || [[a.x, a.y], [b.x, b.y]];
+      r = (route && route(a, b)) || [
+        [a.x, a.y],
+        [b.x, b.y],
+      ];
       routes.set(j, r);
     }
     return r;
@@ -94,7 +105,8 @@ function lastTapAtOrBefore(taps: readonly Tap[], s: number): number {
 
 function polylineLength(points: readonly (readonly [number, number])[]): number {
   let total = 0;
-  for (let i = 1; i < points.length; i++) total += Math.hypot(points[i][0] - points[i - 1][0], points[i][1] - points[i - 1][1]);
+  for (let i = 1; i < points.length; i++)
+    total += Math.hypot(points[i][0] - points[i - 1][0], points[i][1] - points[i - 1][1]);
   return total;
 }
 

@@ -28,7 +28,13 @@ export function gaussLaguerre(count: number): { x: number[]; w: number[] } {
   return rule;
 }
 
-export function responseNodes(taps: readonly Tap[], delayS: number, timeConstantS: number, count: number, options: LagOptions = {}): ResponseNodes {
+export function responseNodes(
+  taps: readonly Tap[],
+  delayS: number,
+  timeConstantS: number,
+  count: number,
+  options: LagOptions = {},
+): ResponseNodes {
   const rule = gaussLaguerre(timeConstantS > 0 ? count : 1);
   const xs: Float64Array[] = [];
   const ys: Float64Array[] = [];

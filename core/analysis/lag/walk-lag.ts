@@ -11,8 +11,17 @@ import { lagCorrect, type LaggedPosition, type Route, type Tap } from "./lag-cor
  * (around solid bodies), stop-and-go at `walkSpeedMps` between taps (plain time interpolation when
  * it is 0 or absent).
  */
-export function walkLag(taps: readonly Tap[], delayS: number, timeConstantS: number, route: Route | undefined, walkSpeedMps: number | undefined): LaggedPosition[] {
-  return lagCorrect(taps, delayS, timeConstantS, { route, walkSpeedMps: walkSpeedMps !== undefined && walkSpeedMps > 0 ? walkSpeedMps : undefined });
+export function walkLag(
+  taps: readonly Tap[],
+  delayS: number,
+  timeConstantS: number,
+  route: Route | undefined,
+  walkSpeedMps: number | undefined,
+): LaggedPosition[] {
+  return lagCorrect(taps, delayS, timeConstantS, {
+    route,
+    walkSpeedMps: walkSpeedMps !== undefined && walkSpeedMps > 0 ? walkSpeedMps : undefined,
+  });
 }
 
 /**
@@ -20,8 +29,18 @@ export function walkLag(taps: readonly Tap[], delayS: number, timeConstantS: num
  * shortest path around solid bodies otherwise. Built once per plan (the raster of the solids is the
  * costly part); routes already found are remembered, so a walk of thousands of taps re-asks cheaply.
  */
-export function planWalkRoute(plan: { width: number; height: number; obstacles: readonly { polygon: Polygon }[] }, cellSize: number): Route {
-  const route = gridRoute(createPlanGrid(plan.width, plan.height, cellSize, plan.obstacles.map((o) => o.polygon)));
+export function planWalkRoute(
+  plan: { width: number; height: number; obstacles: readonly { polygon: Polygon }[] },
+  cellSize: number,
+): Route {
+  const route = gridRoute(
+    createPlanGrid(
+      plan.width,
+      plan.height,
+      cellSize,
+      plan.obstacles.map((o) => o.polygon),
+    ),
+  );
   const seen = new Map<string, ReturnType<Route>>();
   return (a, b) => {
     const key = `${a.x},${a.y},${b.x},${b.y}`;

@@ -30,7 +30,8 @@ describe("K0 kernel", () => {
 
   it("mixes a far-field part in by its share, both parts 1 at the cut-off and 0 at the truncation radius", () => {
     const k = createSourceKernel(1.5, 0.3, 6, { lengthM: 4, share: 0.3 });
-    const part = (L: number, d: number) => (besselK0(Math.max(d, 0.3) / L) - besselK0(6 / L)) / (besselK0(0.3 / L) - besselK0(6 / L));
+    const part = (L: number, d: number) =>
+      (besselK0(Math.max(d, 0.3) / L) - besselK0(6 / L)) / (besselK0(0.3 / L) - besselK0(6 / L));
     for (const d of [0.2, 1, 2.5, 4, 5.5]) expect(k.at(d)).toBeCloseTo(0.7 * part(1.5, d) + 0.3 * part(4, d), 4);
     expect(k.at(0.3)).toBeCloseTo(1, 9);
     expect(k.at(6)).toBe(0);

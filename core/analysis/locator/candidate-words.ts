@@ -40,11 +40,15 @@ export function candidateReason(f: CandidateFacts): string {
 export function candidateNextCheck(f: CandidateFacts): string {
   const parts: string[] = [];
   if (f.riskPoint && f.riskPoint.distance <= Math.max(1.5, f.radius)) {
-    parts.push(`look at the ${RISK_WORDS[f.riskPoint.item.kind]} ${f.riskPoint.item.id} (${r1(f.riskPoint.distance)} m away) first`);
+    parts.push(
+      `look at the ${RISK_WORDS[f.riskPoint.item.kind]} ${f.riskPoint.item.id} (${r1(f.riskPoint.distance)} m away) first`,
+    );
   }
   const fx = f.fixture?.item;
   if (fx && fx.fans && f.fixture!.distance <= 0.5) {
-    parts.push(`stop the fans of ${fx.id} (or wait for defrost), then re-check every 0.6 m within ${r1(f.radius)} m of this spot`);
+    parts.push(
+      `stop the fans of ${fx.id} (or wait for defrost), then re-check every 0.6 m within ${r1(f.radius)} m of this spot`,
+    );
   } else {
     parts.push(`re-check every 0.6 m within ${r1(f.radius)} m of this spot, probe slow and close to joints`);
   }

@@ -17,12 +17,20 @@ function quantile(sorted: number[], p: number): number {
  * it, so no spot inside can be told from another. "Level" = the 10–90% spread is under half the median
  * excess (common practice, no published source).
  */
-export function fansMixing(fixture: Fixture, xs: Float64Array, ys: Float64Array, y: Float64Array, background: number, alarmPpm: number): Diagnostic | null {
+export function fansMixing(
+  fixture: Fixture,
+  xs: Float64Array,
+  ys: Float64Array,
+  y: Float64Array,
+  background: number,
+  alarmPpm: number,
+): Diagnostic | null {
   if (!fixture.fans) return null;
   const inside: number[] = [];
   for (let i = 0; i < xs.length; i++) {
     const p = [xs[i], ys[i]] as const;
-    if (pointInPolygon(p, fixture.polygon) || distanceToPolygonEdge(p, fixture.polygon) <= 0.3) inside.push(y[i] - background);
+    if (pointInPolygon(p, fixture.polygon) || distanceToPolygonEdge(p, fixture.polygon) <= 0.3)
+      inside.push(y[i] - background);
   }
   if (inside.length < 4) return null;
   inside.sort((a, b) => a - b);
@@ -73,13 +81,20 @@ export function sparseCoverage(xs: Float64Array, ys: Float64Array, gapM: number)
  * side: then the other side of the pass fits as well (mirror ambiguity, locator-methods §5.3).
  * Uses the principal axis of the supporting positions.
  */
-export function oneSidedPass(sx: number[], sy: number[], cx: number, cy: number): { oneSided: boolean; mirror: [number, number] } {
+export function oneSidedPass(
+  sx: number[],
+  sy: number[],
+  cx: number,
+  cy: number,
+): { oneSided: boolean; mirror: [number, number] } {
   const n = sx.length;
   const none = { oneSided: false, mirror: [cx, cy] as [number, number] };
   if (n < 3) return none;
   const mx = sx.reduce((a, b) => a + b, 0) / n;
   const my = sy.reduce((a, b) => a + b, 0) / n;
-  let sxx = 0, syy = 0, sxy = 0;
+  let sxx = 0,
+    syy = 0,
+    sxy = 0;
   for (let i = 0; i < n; i++) {
     sxx += (sx[i] - mx) ** 2;
     syy += (sy[i] - my) ** 2;

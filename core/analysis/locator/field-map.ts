@@ -7,7 +7,13 @@ import type { ReadingFields } from "./reading-fields";
  * geodesic distance, confidence α = 1 − exp(−Ω²/σ_Ω²) (the paper's Ω², not Ω). Where no reading lies
  * within 3σ the value is NaN: unknown, not filled with a prior mean.
  */
-export function fieldMap(fields: ReadingFields, width: number, height: number, cellSize: number, sigmaOmega = 1): FieldGrid {
+export function fieldMap(
+  fields: ReadingFields,
+  width: number,
+  height: number,
+  cellSize: number,
+  sigmaOmega = 1,
+): FieldGrid {
   const n = width * height;
   const values = new Float32Array(n);
   const confidence = new Float32Array(n);

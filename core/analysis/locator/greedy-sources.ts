@@ -45,7 +45,14 @@ export interface GreedyInput {
   tailReachM?: number;
   /** Judge credibility on the best-fitting cell before the prior picks among cells (see findSources). */
   evidenceGate?: boolean;
-  credible: (cell: number, column: Float64Array, q: number, b: number, residual: Float64Array, delta: number) => boolean;
+  credible: (
+    cell: number,
+    column: Float64Array,
+    q: number,
+    b: number,
+    residual: Float64Array,
+    delta: number,
+  ) => boolean;
 }
 
 export interface GreedyResult {
@@ -69,20 +76,34 @@ export interface GreedyResult {
 function bestWithPrior(scan: ScanResult, prior: Float64Array | null, n: number): number {
   let best = -1;
   let max = 0;
-  for (let c = 0; c < scan.delta.length; c++) if (scan.delta[c] > max) { max = scan.delta[c]; best = c; }
+  for (let c = 0; c < scan.delta.length; c++)
+    if (scan.delta[c] > max) {
+      max = scan.delta[c];
+      best = c;
+    }
   if (best < 0 || !prior) return best;
   const s2 = Math.max(1, (scan.chi2Background - max) / Math.max(1, n - 2));
   let bestScore = -Infinity;
   for (let c = 0; c < scan.delta.length; c++) {
     if (!(scan.delta[c] > 0)) continue;
     const score = scan.delta[c] + 2 * s2 * prior[c];
-    if (score > bestScore) { bestScore = score; best = c; }
+    if (score > bestScore) {
+      bestScore = score;
+      best = c;
+    }
   }
   return best;
 }
 
 /** Calls visit(k) for every cell k within radiusM of cell c on a row-major grid `width` wide. */
-function forEachCellWithin(c: number, width: number, height: number, cellSize: number, radiusM: number, visit: (k: number) => void): void {
+function forEachCellWithin(
+  c: number,
+  width: number,
+  height: number,
+  cellSize: number,
+  radiusM: number,
+  visit: (k: number) => void,
+): void {
   const r = Math.ceil(radiusM / cellSize);
   const ci = c % width;
   const cj = (c - ci) / width;
@@ -98,12 +119,20 @@ function blockAround(mask: Uint8Array, c: number, width: number, cellSize: numbe
 }
 
 function cellDist2(a: number, b: number, width: number): number {
-  const ai = a % width, bi = b % width;
+  const ai = a % width,
+    bi = b % width;
   return (ai - bi) ** 2 + ((a - ai) / width - (b - bi) / width) ** 2;
 }
 
 /** Sets mask to allowed[] within radiusM of cell c (0 elsewhere is left as is). */
-function keepAround(mask: Uint8Array, allowed: Uint8Array, c: number, width: number, cellSize: number, radiusM: number): void {
+function keepAround(
+  mask: Uint8Array,
+  allowed: Uint8Array,
+  c: number,
+  width: number,
+  cellSize: number,
+  radiusM: number,
+): void {
   forEachCellWithin(c, width, mask.length / width, cellSize, radiusM, (k) => (mask[k] = allowed[k]));
 }
 
@@ -125,7 +154,9 @@ export function findSources(input: GreedyInput): GreedyResult {
       const q = fit.q[s];
       if (q > 0) for (let i = 0; i < n; i++) residual[i] -= q * col[i];
     });
-    let sw = 0, swr = 0, swrr = 0;
+    let sw = 0,
+      swr = 0,
+      swrr = 0;
     for (let i = 0; i < n; i++) {
       sw += w[i];
       swr += w[i] * residual[i];
@@ -164,7 +195,9 @@ export function findSources(input: GreedyInput): GreedyResult {
           const q = fit.q[s];
           if (s !== nn + k && q > 0) for (let i = 0; i < n; i++) residual[i] -= q * col[i];
         });
-        let sw = 0, swr = 0, swrr = 0;
+        let sw = 0,
+          swr = 0,
+          swrr = 0;
         for (let i = 0; i < n; i++) {
           sw += w[i];
           swr += w[i] * residual[i];
@@ -172,7 +205,9 @@ export function findSources(input: GreedyInput): GreedyResult {
         }
         const mask = new Uint8Array(cells);
         keepAround(mask, allowed, sources[k].cell, input.gridWidth, input.cellSize, input.sourceSeparationM);
-        sources.forEach((o, j) => { if (j !== k) blockAround(mask, o.cell, input.gridWidth, input.cellSize, input.sourceSeparationM); });
+        sources.forEach((o, j) => {
+          if (j !== k) blockAround(mask, o.cell, input.gridWidth, input.cellSize, input.sourceSeparationM);
+        });
         sumWeightedKernelTimes(fields, w, residual, sumWGR);
         const scan = scanSources(fields.sumWG, fields.sumWGG, sumWGR, { sumW: sw, sumWR: swr, sumWRR: swrr }, mask);
         const best = bestWithPrior(scan, input.prior, n);
@@ -197,10 +232,18 @@ export function findSources(input: GreedyInput): GreedyResult {
   if (firstScan && sources.length > 0 && sources.length < input.maxCandidates) {
     const sep2 = (input.separationM / input.cellSize) ** 2;
     const near = (a: number, b: number) => {
-      const ai = a % input.gridWidth, bi = b % input.gridWidth;
+      const ai = a % input.gridWidth,
+        bi = b % input.gridWidth;
       return (ai - bi) ** 2 + ((a - ai) / input.gridWidth - (b - bi) / input.gridWidth) ** 2 < sep2;
     };
-    const optima = localOptima(firstScan.delta, input.gridWidth, input.cellSize, input.separationM, 16, input.alternateFraction * bestDelta);
+    const optima = localOptima(
+      firstScan.delta,
+      input.gridWidth,
+      input.cellSize,
+      input.separationM,
+      16,
+      input.alternateFraction * bestDelta,
+    );
     const residual0 = new Float64Array(y);
     input.nuisance.forEach((col, s) => {
       const q = fit.q[s];
@@ -211,7 +254,14 @@ export function findSources(input: GreedyInput): GreedyResult {
       if (sources.some((s) => near(s.cell, c))) continue;
       const column = kernelColumn(fields, c, n);
       if (!input.credible(c, column, firstScan.q[c], firstScan.b[c], residual0, firstScan.delta[c])) continue;
-      sources.push({ cell: c, delta: firstScan.delta[c], column, alternate: true, q: firstScan.q[c], surface: firstScan.delta });
+      sources.push({
+        cell: c,
+        delta: firstScan.delta[c],
+        column,
+        alternate: true,
+        q: firstScan.q[c],
+        surface: firstScan.delta,
+      });
     }
   }
   if (input.tailReachM && input.tailReachM > 0) {
@@ -219,14 +269,21 @@ export function findSources(input: GreedyInput): GreedyResult {
     // truncated kernel cannot model) as much as a second leak: list it after the independent spots.
     const reach2 = (input.tailReachM / input.cellSize) ** 2;
     const fitted = sources.filter((x) => !x.alternate);
-    const tail = new Set(fitted.filter((x, k) => fitted.slice(0, k).some((st) => cellDist2(st.cell, x.cell, input.gridWidth) < reach2)));
+    const tail = new Set(
+      fitted.filter((x, k) => fitted.slice(0, k).some((st) => cellDist2(st.cell, x.cell, input.gridWidth) < reach2)),
+    );
     const head = sources.filter((x) => !tail.has(x));
     sources.splice(0, sources.length, ...head, ...sources.filter((x) => tail.has(x)));
   }
   return {
     sources,
     fit,
-    firstScan: firstScan ?? { delta: new Float64Array(cells), q: new Float64Array(cells), b: new Float64Array(cells), chi2Background: 0 },
+    firstScan: firstScan ?? {
+      delta: new Float64Array(cells),
+      q: new Float64Array(cells),
+      b: new Float64Array(cells),
+      chi2Background: 0,
+    },
     chi2Final: fit.chi2,
     chi2NoLeak,
   };

@@ -15,7 +15,12 @@ describe("drifted point-source kernel", () => {
     const g = driftedKernel(L, 0.05, 60, a);
     const C = (x: number, y: number) => g(Math.hypot(x, y), x, y);
     const h = 0.1; // wide enough that the table's 1 cm linear steps do not dominate the second differences
-    for (const [x, y] of [[1.2, 0.4], [-0.9, 1.1], [0.3, -1.6], [2, 2]]) {
+    for (const [x, y] of [
+      [1.2, 0.4],
+      [-0.9, 1.1],
+      [0.3, -1.6],
+      [2, 2],
+    ]) {
       const cxx = (C(x + h, y) - 2 * C(x, y) + C(x - h, y)) / h ** 2;
       const cyy = (C(x, y + h) - 2 * C(x, y) + C(x, y - h)) / h ** 2;
       const cx = (C(x + h, y) - C(x - h, y)) / (2 * h);
@@ -56,19 +61,38 @@ describe("choosing a drift per candidate source", () => {
   const grid = createPlanGrid(14, 8, 0.25, []);
   const xs: number[] = [];
   const ys: number[] = [];
-  for (const py of [3, 5]) for (let x = 0.5; x <= 13.5; x += 0.3) { xs.push(x); ys.push(py); }
-  const L = 1.5, a = 0.8, kappa = Math.sqrt(a * a + 1 / L ** 2);
+  for (const py of [3, 5])
+    for (let x = 0.5; x <= 13.5; x += 0.3) {
+      xs.push(x);
+      ys.push(py);
+    }
+  const L = 1.5,
+    a = 0.8,
+    kappa = Math.sqrt(a * a + 1 / L ** 2);
   const y = Float64Array.from(xs, (x, i) => {
-    const dx = x - 5, dy = ys[i] - 4;
+    const dx = x - 5,
+      dy = ys[i] - 4;
     return 1 + (20 * Math.exp(a * dx) * besselK0(kappa * Math.max(0.3, Math.hypot(dx, dy)))) / besselK0(kappa * 0.3);
   });
   const w = new Float64Array(y.length).fill(1);
   const kernel = createSourceKernel(L, 0.3, 6);
-  const build = () => accumulateReadingFields(grid, { xs: [Float64Array.from(xs)], ys: [Float64Array.from(ys)], weights: [1] }, y, w, kernel, 0.75);
+  const build = () =>
+    accumulateReadingFields(
+      grid,
+      { xs: [Float64Array.from(xs)], ys: [Float64Array.from(ys)], weights: [1] },
+      y,
+      w,
+      kernel,
+      0.75,
+    );
   const allowed = new Uint8Array(grid.width * grid.height).fill(1);
   const bestCell = (fields: ReturnType<typeof build>) => {
     const sums = { sumW: 0, sumWR: 0, sumWRR: 0 };
-    for (let i = 0; i < y.length; i++) { sums.sumW += w[i]; sums.sumWR += w[i] * y[i]; sums.sumWRR += w[i] * y[i] ** 2; }
+    for (let i = 0; i < y.length; i++) {
+      sums.sumW += w[i];
+      sums.sumWR += w[i] * y[i];
+      sums.sumWRR += w[i] * y[i] ** 2;
+    }
     const sumWGR = sumWeightedKernelTimes(fields, w, y, new Float64Array(allowed.length));
     const scan = scanSources(fields.sumWG, fields.sumWGG, sumWGR, sums, allowed);
     let best = 0;
@@ -82,7 +106,11 @@ describe("choosing a drift per candidate source", () => {
     expect(px - 5).toBeGreaterThan(1); // without a drift the peak of the plume is taken for the leak
     const drifted = build();
     const choice = chooseLocalDrift(drifted, grid.width, grid.cellSize, w, y, allowed, {
-      screeningLengthM: L, nearCutoffM: 0.3, truncationM: 6, strengths: [0.4, 0.8], penalty: 3,
+      screeningLengthM: L,
+      nearCutoffM: 0.3,
+      truncationM: 6,
+      strengths: [0.4, 0.8],
+      penalty: 3,
     });
     const [dx, dy] = bestCell(drifted);
     expect(Math.hypot(dx - 5, dy - 4)).toBeLessThan(0.5);
@@ -95,15 +123,25 @@ describe("choosing a drift per candidate source", () => {
     const fields = build();
     const before = Float32Array.from(fields.kernel);
     const choice = chooseLocalDrift(fields, grid.width, grid.cellSize, w, y, allowed, {
-      screeningLengthM: L, nearCutoffM: 0.3, truncationM: 6, strengths: [0.4, 0.8], penalty: 1e9,
+      screeningLengthM: L,
+      nearCutoffM: 0.3,
+      truncationM: 6,
+      strengths: [0.4, 0.8],
+      penalty: 1e9,
     });
     expect(choice.strength.every((s) => s === 0)).toBe(true);
     for (let e = 0; e < before.length; e += 97) expect(fields.kernel[e]).toBeCloseTo(before[e], 5);
   });
 
   it("names the field and the reason for bad settings", () => {
-    expect(() => chooseLocalDrift(build(), grid.width, grid.cellSize, w, y, allowed, {
-      screeningLengthM: L, nearCutoffM: 0.3, truncationM: 6, strengths: [0.4, -1], penalty: 3,
-    })).toThrow(/drift strength must be positive/);
+    expect(() =>
+      chooseLocalDrift(build(), grid.width, grid.cellSize, w, y, allowed, {
+        screeningLengthM: L,
+        nearCutoffM: 0.3,
+        truncationM: 6,
+        strengths: [0.4, -1],
+        penalty: 3,
+      }),
+    ).toThrow(/drift strength must be positive/);
   });
 });

@@ -67,7 +67,12 @@ function radialPart(
 ): { table: SourceKernel; scale: number } {
   const rate = (L: number) => Math.sqrt(strength * strength + 1 / (L * L));
   const kappa = rate(screeningLengthM);
-  const table = createSourceKernel(1 / kappa, nearCutoffM, truncationM, far ? { lengthM: 1 / rate(far.lengthM), share: far.share } : null);
+  const table = createSourceKernel(
+    1 / kappa,
+    nearCutoffM,
+    truncationM,
+    far ? { lengthM: 1 / rate(far.lengthM), share: far.share } : null,
+  );
   const span = (k: number) => besselK0(nearCutoffM * k) - besselK0(truncationM * k);
   return { table, scale: span(kappa) / span(1 / screeningLengthM) };
 }
@@ -97,7 +102,9 @@ export function chooseLocalDrift(
   const n = r.length;
   const gw = new Float64Array(groups);
   const gwr = new Float64Array(groups);
-  let sw = 0, swr = 0, swrr = 0;
+  let sw = 0,
+    swr = 0,
+    swrr = 0;
   for (let i = 0; i < n; i++) {
     gw[groupOfReading[i]] += w[i];
     gwr[groupOfReading[i]] += w[i] * r[i];
@@ -118,7 +125,9 @@ export function chooseLocalDrift(
     }
   }
   const far = settings.far ?? null;
-  const radial = settings.strengths.map((v) => radialPart(settings.screeningLengthM, settings.nearCutoffM, settings.truncationM, v, far));
+  const radial = settings.strengths.map((v) =>
+    radialPart(settings.screeningLengthM, settings.nearCutoffM, settings.truncationM, v, far),
+  );
 
   // no drift: the scan every drift must beat
   const sumWGR = new Float64Array(cells);
@@ -144,17 +153,30 @@ export function chooseLocalDrift(
   const h = Math.SQRT1_2;
   radial.forEach(({ table, scale }, si) => {
     const a = settings.strengths[si];
-    for (let k = 0; k < D; k++) { sG[k].fill(0); sGG[k].fill(0); sGR[k].fill(0); }
+    for (let k = 0; k < D; k++) {
+      sG[k].fill(0);
+      sGG[k].fill(0);
+      sGR[k].fill(0);
+    }
     for (let g = 0; g < groups; g++) {
-      const aw = gw[g], ar = gwr[g];
+      const aw = gw[g],
+        ar = gwr[g];
       for (let e = start[g], end = start[g + 1]; e < end; e++) {
         const c = cell[e];
         if (!allowed[c]) continue; // only cells that may hold a suspect spot need a drift
         const t = scale * table.at(dist[e]);
-        const ex = Math.exp(a * dxs[e]), ey = Math.exp(a * dys[e]);
-        const hx = Math.exp(a * h * dxs[e]), hy = Math.exp(a * h * dys[e]);
-        f[0] = t * ex; f[1] = t * hx * hy; f[2] = t * ey; f[3] = (t * hy) / hx;
-        f[4] = t / ex; f[5] = t / (hx * hy); f[6] = t / ey; f[7] = (t * hx) / hy;
+        const ex = Math.exp(a * dxs[e]),
+          ey = Math.exp(a * dys[e]);
+        const hx = Math.exp(a * h * dxs[e]),
+          hy = Math.exp(a * h * dys[e]);
+        f[0] = t * ex;
+        f[1] = t * hx * hy;
+        f[2] = t * ey;
+        f[3] = (t * hy) / hx;
+        f[4] = t / ex;
+        f[5] = t / (hx * hy);
+        f[6] = t / ey;
+        f[7] = (t * hx) / hy;
         for (let k = 0; k < D; k++) {
           const v = f[k];
           sG[k][c] += aw * v;

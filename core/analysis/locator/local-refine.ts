@@ -26,30 +26,41 @@ export function refineCell(
   const cj = (c - ci) / width;
   let top = delta[c];
   const inWindow = (i: number, j: number) => (i - ci) ** 2 + (j - cj) ** 2 <= r2;
-  const j0 = Math.max(0, cj - r), j1 = Math.min(height - 1, cj + r);
-  const i0 = Math.max(0, ci - r), i1 = Math.min(width - 1, ci + r);
-  for (let j = j0; j <= j1; j++) for (let i = i0; i <= i1; i++) {
-    const k = j * width + i;
-    if (inWindow(i, j) && allowed[k] && delta[k] > top) top = delta[k];
-  }
-  let sw = 0, si = 0, sj = 0;
-  for (let j = j0; j <= j1; j++) for (let i = i0; i <= i1; i++) {
-    const k = j * width + i;
-    if (!inWindow(i, j) || !allowed[k] || !(delta[k] > 0)) continue;
-    const wk = Math.exp((delta[k] - top) / (2 * temperature) + (prior ? prior[k] : 0));
-    sw += wk;
-    si += wk * i;
-    sj += wk * j;
-  }
+  const j0 = Math.max(0, cj - r),
+    j1 = Math.min(height - 1, cj + r);
+  const i0 = Math.max(0, ci - r),
+    i1 = Math.min(width - 1, ci + r);
+  for (let j = j0; j <= j1; j++)
+    for (let i = i0; i <= i1; i++) {
+      const k = j * width + i;
+      if (inWindow(i, j) && allowed[k] && delta[k] > top) top = delta[k];
+    }
+  let sw = 0,
+    si = 0,
+    sj = 0;
+  for (let j = j0; j <= j1; j++)
+    for (let i = i0; i <= i1; i++) {
+      const k = j * width + i;
+      if (!inWindow(i, j) || !allowed[k] || !(delta[k] > 0)) continue;
+      const wk = Math.exp((delta[k] - top) / (2 * temperature) + (prior ? prior[k] : 0));
+      sw += wk;
+      si += wk * i;
+      sj += wk * j;
+    }
   if (!(sw > 0)) return c;
-  const mi = si / sw, mj = sj / sw;
+  const mi = si / sw,
+    mj = sj / sw;
   let best = c;
   let bestD = (ci - mi) ** 2 + (cj - mj) ** 2;
-  for (let j = j0; j <= j1; j++) for (let i = i0; i <= i1; i++) {
-    const k = j * width + i;
-    if (!inWindow(i, j) || !allowed[k] || !(delta[k] > 0)) continue;
-    const d = (i - mi) ** 2 + (j - mj) ** 2;
-    if (d < bestD) { bestD = d; best = k; }
-  }
+  for (let j = j0; j <= j1; j++)
+    for (let i = i0; i <= i1; i++) {
+      const k = j * width + i;
+      if (!inWindow(i, j) || !allowed[k] || !(delta[k] > 0)) continue;
+      const d = (i - mi) ** 2 + (j - mj) ** 2;
+      if (d < bestD) {
+        bestD = d;
+        best = k;
+      }
+    }
   return best;
 }

@@ -18,7 +18,12 @@ export function nearestFixture(fixtures: readonly Fixture[], x: number, y: numbe
 }
 
 /** The nearest line-set drop, valve or coil within maxM (straight-line distance). */
-export function nearestRiskPoint(points: readonly RiskPoint[], x: number, y: number, maxM = 5): Nearest<RiskPoint> | null {
+export function nearestRiskPoint(
+  points: readonly RiskPoint[],
+  x: number,
+  y: number,
+  maxM = 5,
+): Nearest<RiskPoint> | null {
   let best: Nearest<RiskPoint> | null = null;
   for (const p of points) {
     const d = Math.hypot(p.x - x, p.y - y);

@@ -15,7 +15,21 @@ describe("plan-derived masks", () => {
   const at = (x: number, y: number) => cellIndexOf(grid, x, y);
 
   it("allows suspect spots inside fixtures, within the margin of their outline and near risk points only", () => {
-    const p = plan([{ id: "c1", kind: "open-case", polygon: [[2, 2], [6, 2], [6, 3], [2, 3]] }], [{ id: "ls1", kind: "line-set", x: 8, y: 5 }]);
+    const p = plan(
+      [
+        {
+          id: "c1",
+          kind: "open-case",
+          polygon: [
+            [2, 2],
+            [6, 2],
+            [6, 3],
+            [2, 3],
+          ],
+        },
+      ],
+      [{ id: "ls1", kind: "line-set", x: 8, y: 5 }],
+    );
     const mask = equipmentMask(grid, p, 0.3)!;
     expect(mask[at(4, 2.5)]).toBe(1);
     expect(mask[at(4, 3.2)]).toBe(1); // 0.2 m outside the outline, inside the drawing margin
@@ -31,8 +45,28 @@ describe("plan-derived masks", () => {
   it("marks risk points in the prior and shortens distances only in fan-stirred walk-ins and machine rooms", () => {
     const p = plan(
       [
-        { id: "w1", kind: "walk-in", polygon: [[0, 0], [3, 0], [3, 3], [0, 3]], fans: true },
-        { id: "c1", kind: "open-case", polygon: [[5, 0], [9, 0], [9, 1], [5, 1]], fans: true },
+        {
+          id: "w1",
+          kind: "walk-in",
+          polygon: [
+            [0, 0],
+            [3, 0],
+            [3, 3],
+            [0, 3],
+          ],
+          fans: true,
+        },
+        {
+          id: "c1",
+          kind: "open-case",
+          polygon: [
+            [5, 0],
+            [9, 0],
+            [9, 1],
+            [5, 1],
+          ],
+          fans: true,
+        },
       ],
       [{ id: "v1", kind: "valve", x: 1, y: 1 }],
     );
@@ -45,27 +79,47 @@ describe("plan-derived masks", () => {
   });
 
   it("says the cases run fans when at least half of them do, and ignores walk-ins", () => {
-    const box = (x: number) => [[x, 1], [x + 1, 1], [x + 1, 2], [x, 2]];
-    const still = plan([
-      { id: "c1", kind: "open-case", polygon: box(1), fans: false },
-      { id: "c2", kind: "island-case", polygon: box(3), fans: false },
-      { id: "w1", kind: "walk-in", polygon: box(5), fans: true },
-    ], []);
+    const box = (x: number) => [
+      [x, 1],
+      [x + 1, 1],
+      [x + 1, 2],
+      [x, 2],
+    ];
+    const still = plan(
+      [
+        { id: "c1", kind: "open-case", polygon: box(1), fans: false },
+        { id: "c2", kind: "island-case", polygon: box(3), fans: false },
+        { id: "w1", kind: "walk-in", polygon: box(5), fans: true },
+      ],
+      [],
+    );
     expect(casesRunFans(still.fixtures)).toBe(false);
-    const stirred = plan([
-      { id: "c1", kind: "open-case", polygon: box(1), fans: true },
-      { id: "c2", kind: "door-case", polygon: box(3), fans: false },
-    ], []);
+    const stirred = plan(
+      [
+        { id: "c1", kind: "open-case", polygon: box(1), fans: true },
+        { id: "c2", kind: "door-case", polygon: box(3), fans: false },
+      ],
+      [],
+    );
     expect(casesRunFans(stirred.fixtures)).toBe(true);
     expect(casesRunFans(plan([], []).fixtures)).toBe(true);
   });
 
   it("fits the store's drift only in still air, and only when drift strengths are given", () => {
-    const box = (x: number) => [[x, 1], [x + 1, 1], [x + 1, 2], [x, 2]];
-    const cases = (fans: boolean) => plan([
-      { id: "c1", kind: "open-case", polygon: box(1), fans },
-      { id: "c2", kind: "open-case", polygon: box(3), fans },
-    ], []).fixtures;
+    const box = (x: number) => [
+      [x, 1],
+      [x + 1, 1],
+      [x + 1, 2],
+      [x, 2],
+    ];
+    const cases = (fans: boolean) =>
+      plan(
+        [
+          { id: "c1", kind: "open-case", polygon: box(1), fans },
+          { id: "c2", kind: "open-case", polygon: box(3), fans },
+        ],
+        [],
+      ).fixtures;
     expect(fitsDrift([0.4, 0.8], cases(false))).toBe(true);
     expect(fitsDrift([0.4, 0.8], cases(true))).toBe(false);
     expect(fitsDrift([], cases(false))).toBe(false);

@@ -46,10 +46,13 @@ export function accumulateReadingFields(
 ): ReadingFields {
   const n = values.length;
   const m = nodes.weights.length;
-  if (m === 0 || nodes.xs.length !== m || nodes.ys.length !== m) throw new Error("response nodes: need matching xs, ys and weights");
+  if (m === 0 || nodes.xs.length !== m || nodes.ys.length !== m)
+    throw new Error("response nodes: need matching xs, ys and weights");
   const cells = grid.width * grid.height;
   // readings whose response nodes fall in the same cells share one combined column
-  const nodeCells: Int32Array[] = nodes.xs.map((xs, k) => Int32Array.from(xs, (x, i) => nearestFreeCell(grid, x, nodes.ys[k][i])));
+  const nodeCells: Int32Array[] = nodes.xs.map((xs, k) =>
+    Int32Array.from(xs, (x, i) => nearestFreeCell(grid, x, nodes.ys[k][i])),
+  );
   const keyOf = (i: number) => {
     let key = "";
     for (let k = 0; k < m; k++) key += nodeCells[k][i] + ",";
@@ -194,7 +197,12 @@ function growInt32(a: Int32Array): Int32Array {
 }
 
 /** Per cell Σ_i w_i·g_i(c)·r_i for a per-reading vector r (one pass over the stored entries). */
-export function sumWeightedKernelTimes(fields: ReadingFields, weights: Float64Array, r: Float64Array, out: Float64Array): Float64Array {
+export function sumWeightedKernelTimes(
+  fields: ReadingFields,
+  weights: Float64Array,
+  r: Float64Array,
+  out: Float64Array,
+): Float64Array {
   out.fill(0);
   const groups = fields.groupCell.length;
   const perGroup = new Float64Array(groups);

@@ -34,7 +34,9 @@ export function createSourceKernel(
 ): SourceKernel {
   if (!(screeningLengthM > 0)) throw new Error(`screening length must be positive, got ${screeningLengthM}`);
   if (far && (!(far.lengthM > 0) || !(far.share >= 0 && far.share < 1))) {
-    throw new Error(`far field: need a positive screening length and a share in [0, 1), got ${far.lengthM} and ${far.share}`);
+    throw new Error(
+      `far field: need a positive screening length and a share in [0, 1), got ${far.lengthM} and ${far.share}`,
+    );
   }
   if (!(nearCutoffM > 0) || !(truncationM > nearCutoffM)) {
     throw new Error(`need 0 < near cut-off < truncation radius, got ${nearCutoffM} and ${truncationM}`);

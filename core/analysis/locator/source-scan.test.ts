@@ -9,22 +9,46 @@ describe("per-cell source fit", () => {
   const w = Float64Array.from([1, 2, 1, 0.5, 1, 1]);
   const g = Float64Array.from([0, 0.1, 0.6, 1, 0.4, 0]);
   const sums = (col: Float64Array) => {
-    let sw = 0, swr = 0, swrr = 0, swg = 0, swgg = 0, swgr = 0;
+    let sw = 0,
+      swr = 0,
+      swrr = 0,
+      swg = 0,
+      swgg = 0,
+      swgr = 0;
     for (let i = 0; i < y.length; i++) {
-      sw += w[i]; swr += w[i] * y[i]; swrr += w[i] * y[i] * y[i];
-      swg += w[i] * col[i]; swgg += w[i] * col[i] * col[i]; swgr += w[i] * col[i] * y[i];
+      sw += w[i];
+      swr += w[i] * y[i];
+      swrr += w[i] * y[i] * y[i];
+      swg += w[i] * col[i];
+      swgg += w[i] * col[i] * col[i];
+      swgr += w[i] * col[i] * y[i];
     }
     return { totals: { sumW: sw, sumWR: swr, sumWRR: swrr }, swg, swgg, swgr };
   };
 
   it("recovers an exact b + Q·g (normal equations)", () => {
     const exact = Float64Array.from(g, (v) => 0.7 + 5 * v);
-    let sw = 0, swr = 0, swrr = 0, swg = 0, swgg = 0, swgr = 0;
+    let sw = 0,
+      swr = 0,
+      swrr = 0,
+      swg = 0,
+      swgg = 0,
+      swgr = 0;
     for (let i = 0; i < g.length; i++) {
-      sw += w[i]; swr += w[i] * exact[i]; swrr += w[i] * exact[i] ** 2;
-      swg += w[i] * g[i]; swgg += w[i] * g[i] ** 2; swgr += w[i] * g[i] * exact[i];
+      sw += w[i];
+      swr += w[i] * exact[i];
+      swrr += w[i] * exact[i] ** 2;
+      swg += w[i] * g[i];
+      swgg += w[i] * g[i] ** 2;
+      swgr += w[i] * g[i] * exact[i];
     }
-    const r = scanSources(Float64Array.of(swg), Float64Array.of(swgg), Float64Array.of(swgr), { sumW: sw, sumWR: swr, sumWRR: swrr }, Uint8Array.of(1));
+    const r = scanSources(
+      Float64Array.of(swg),
+      Float64Array.of(swgg),
+      Float64Array.of(swgr),
+      { sumW: sw, sumWR: swr, sumWRR: swrr },
+      Uint8Array.of(1),
+    );
     expect(r.q[0]).toBeCloseTo(5, 9);
     expect(r.b[0]).toBeCloseTo(0.7, 9);
     expect(r.delta[0]).toBeCloseTo(r.chi2Background, 9); // the source explains all the variation
@@ -32,7 +56,13 @@ describe("per-cell source fit", () => {
 
   it("agrees with coordinate descent on noisy data, including the χ² improvement", () => {
     const s = sums(g);
-    const r = scanSources(Float64Array.of(s.swg), Float64Array.of(s.swgg), Float64Array.of(s.swgr), s.totals, Uint8Array.of(1));
+    const r = scanSources(
+      Float64Array.of(s.swg),
+      Float64Array.of(s.swgg),
+      Float64Array.of(s.swgr),
+      s.totals,
+      Uint8Array.of(1),
+    );
     const cd = fitNonnegative(y, w, [g], new Uint8Array(y.length), 2000);
     expect(r.q[0]).toBeCloseTo(cd.q[0], 6);
     expect(r.b[0]).toBeCloseTo(cd.b, 6);
@@ -43,10 +73,22 @@ describe("per-cell source fit", () => {
   it("scores no source where the fit wants a negative strength, and skips cells not allowed", () => {
     const neg = Float64Array.from(g, (v) => 1 - v);
     const s = sums(neg);
-    const r = scanSources(Float64Array.of(s.swg, s.swg), Float64Array.of(s.swgg, s.swgg), Float64Array.of(s.swgr, s.swgr), s.totals, Uint8Array.of(1, 0));
+    const r = scanSources(
+      Float64Array.of(s.swg, s.swg),
+      Float64Array.of(s.swgg, s.swgg),
+      Float64Array.of(s.swgr, s.swgr),
+      s.totals,
+      Uint8Array.of(1, 0),
+    );
     expect(r.delta[0]).toBe(0);
     const t = sums(g);
-    const r2 = scanSources(Float64Array.of(t.swg), Float64Array.of(t.swgg), Float64Array.of(t.swgr), t.totals, Uint8Array.of(0));
+    const r2 = scanSources(
+      Float64Array.of(t.swg),
+      Float64Array.of(t.swgg),
+      Float64Array.of(t.swgr),
+      t.totals,
+      Uint8Array.of(0),
+    );
     expect(r2.delta[0]).toBe(0);
   });
 

@@ -59,7 +59,14 @@ export function scanSources(
  * Local optima of a score map with non-maximum suppression: cells taken best first, each at least
  * `separationM` from every cell already taken. At most `limit` cells.
  */
-export function localOptima(score: Float64Array, gridWidth: number, cellSize: number, separationM: number, limit: number, minScore = 0): number[] {
+export function localOptima(
+  score: Float64Array,
+  gridWidth: number,
+  cellSize: number,
+  separationM: number,
+  limit: number,
+  minScore = 0,
+): number[] {
   const idx: number[] = [];
   for (let c = 0; c < score.length; c++) if (score[c] > minScore) idx.push(c);
   idx.sort((a, b) => score[b] - score[a]);

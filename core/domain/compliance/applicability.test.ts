@@ -28,7 +28,8 @@ describe("which part applies", () => {
   });
   it("leaves low-GWP refrigerants out", () => {
     // GWP ≤ 53: R-744 1 [S:G1], R-717 0, R-1234yf <1 (AR5), R-290 ~0.02 (AR6), R-600a 3 (517/2014) [M].
-    for (const id of ["R-744", "R-717", "R-1234yf", "R-1234ze(E)", "R-290", "R-600a"]) expect(partFor(id, poundsToKg(1000)), id).toBeNull();
+    for (const id of ["R-744", "R-717", "R-1234yf", "R-1234ze(E)", "R-290", "R-600a"])
+      expect(partFor(id, poundsToKg(1000)), id).toBeNull();
     const a = applicableLeakRatePart(US_FEDERAL_PROFILE, getRefrigerant("R-744"), 500, "2026-06-01");
     expect(a.reason).toMatch(/GWP 1 is not above 53/);
   });

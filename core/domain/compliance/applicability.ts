@@ -4,7 +4,13 @@ import { isOzoneDepleting } from "../refrigerants/catalogue";
 import { gwpOf } from "../refrigerants/gwp";
 import type { Refrigerant } from "../refrigerants/types";
 import { KG_PER_POUND } from "../units/mass";
-import { APPLIANCE_TYPES, type ApplianceType, type LeakRatePart, type MassLimit, type RuleProfile } from "./rule-profile";
+import {
+  APPLIANCE_TYPES,
+  type ApplianceType,
+  type LeakRatePart,
+  type MassLimit,
+  type RuleProfile,
+} from "./rule-profile";
 
 export type Applicability =
   | { applies: true; part: LeakRatePart; reason: string }
@@ -28,7 +34,12 @@ function atLeast(kg: number, limitKg: number): boolean {
  * date: the first part whose substance, charge and date conditions all hold. ODS → Part 82 subpart
  * F from 50 lb; non-ODS with GWP > 53 → Part 84 subpart C from 15 lb, from 1 Jan 2026 (US profile).
  */
-export function applicableLeakRatePart(profile: RuleProfile, refrigerant: Refrigerant, fullChargeKg: number, onDate: IsoDate): Applicability {
+export function applicableLeakRatePart(
+  profile: RuleProfile,
+  refrigerant: Refrigerant,
+  fullChargeKg: number,
+  onDate: IsoDate,
+): Applicability {
   requirePositive(fullChargeKg, "fullChargeKg");
   compareDates(onDate, onDate);
   const ods = isOzoneDepleting(refrigerant);
@@ -52,7 +63,9 @@ export function applicableLeakRatePart(profile: RuleProfile, refrigerant: Refrig
     }
     const limitKg = massLimitKg(part.minFullCharge.value);
     if (!atLeast(fullChargeKg, limitKg)) {
-      reasons.push(`${part.title}: full charge below ${part.minFullCharge.value.value} ${part.minFullCharge.value.unit}`);
+      reasons.push(
+        `${part.title}: full charge below ${part.minFullCharge.value.value} ${part.minFullCharge.value.unit}`,
+      );
       continue;
     }
     if (part.effectiveFrom && compareDates(onDate, part.effectiveFrom.value) < 0) {
@@ -60,15 +73,29 @@ export function applicableLeakRatePart(profile: RuleProfile, refrigerant: Refrig
       continue;
     }
     const limit = part.minFullCharge.value;
-    return { applies: true, part, reason: `${part.title}: ${refrigerant.id}, full charge at least ${limit.value} ${limit.unit}` };
+    return {
+      applies: true,
+      part,
+      reason: `${part.title}: ${refrigerant.id}, full charge at least ${limit.value} ${limit.unit}`,
+    };
   }
-  return { applies: false, part: null, reason: reasons.length ? reasons.join("; ") : `${profile.name} sets no leak-rate threshold` };
+  return {
+    applies: false,
+    part: null,
+    reason: reasons.length ? reasons.join("; ") : `${profile.name} sets no leak-rate threshold`,
+  };
 }
 
 /** The leak-rate threshold (% per year) for an appliance type under a part, with its source. */
-export function leakRateThreshold(part: LeakRatePart, applianceType: ApplianceType): { percent: number; source: string } {
+export function leakRateThreshold(
+  part: LeakRatePart,
+  applianceType: ApplianceType,
+): { percent: number; source: string } {
   if (!APPLIANCE_TYPES.includes(applianceType)) {
-    throw new DomainInputError("applianceType", `must be one of ${APPLIANCE_TYPES.join(", ")}, got ${JSON.stringify(applianceType)}`);
+    throw new DomainInputError(
+      "applianceType",
+      `must be one of ${APPLIANCE_TYPES.join(", ")}, got ${JSON.stringify(applianceType)}`,
+    );
   }
   const t = part.thresholds[applianceType];
   return { percent: t.value, source: t.source };

@@ -36,7 +36,10 @@ export function assessLeakRate(
   // force at the latest addition, else the profile's first part; a profile without leak-rate rules
   // (EU F-gas) has no leak-rate figures at all.
   validateAdditions(additions);
-  const live = additions.filter((a) => !a.voided).map((a) => a.date).sort();
+  const live = additions
+    .filter((a) => !a.voided)
+    .map((a) => a.date)
+    .sort();
   const latest = live.at(-1);
   const inForce = latest ? applicableLeakRatePart(profile, system.refrigerant, system.fullChargeKg, latest) : undefined;
   const part = inForce?.part ?? profile.leakRateParts[0];
@@ -54,7 +57,13 @@ export function assessLeakRate(
     const threshold = leakRateThreshold(a.part, system.applianceType).percent;
     const exceeds = exceedsThreshold(point.percent, threshold);
     return exceeds
-      ? { ...point, partId: a.part.id, thresholdPercent: threshold, exceeds, repairDue: repairDueDate(a.part, point.date) }
+      ? {
+          ...point,
+          partId: a.part.id,
+          thresholdPercent: threshold,
+          exceeds,
+          repairDue: repairDueDate(a.part, point.date),
+        }
       : { ...point, partId: a.part.id, thresholdPercent: threshold, exceeds };
   });
 }

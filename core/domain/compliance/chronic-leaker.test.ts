@@ -6,34 +6,54 @@ import type { ChargeAddition } from "./leak-rate";
 import { PART_84_SUBPART_C } from "./us-federal-profile";
 
 const lb = (id: string, date: string, pounds: number, extra: Partial<ChargeAddition> = {}): ChargeAddition => ({
-  id, date, amountKg: poundsToKg(pounds), ...extra,
+  id,
+  date,
+  amountKg: poundsToKg(pounds),
+  ...extra,
 });
 
 describe("chronic leaker (≥ 125 % of full charge added in a calendar year)", () => {
   // [S:R7]: 125 % of full charge in a calendar year → report by 1 March of the next year.
   it("does not add December and January together", () => {
-    const years = chronicLeakerYears(PART_84_SUBPART_C, poundsToKg(100), [lb("a", "2026-12-15", 70), lb("b", "2027-01-05", 70)]);
-    expect(years.map((y) => [y.year, Math.round(y.percent), y.chronic])).toEqual([[2026, 70, false], [2027, 70, false]]);
+    const years = chronicLeakerYears(PART_84_SUBPART_C, poundsToKg(100), [
+      lb("a", "2026-12-15", 70),
+      lb("b", "2027-01-05", 70),
+    ]);
+    expect(years.map((y) => [y.year, Math.round(y.percent), y.chronic])).toEqual([
+      [2026, 70, false],
+      [2027, 70, false],
+    ]);
   });
   it("flags a year that reaches exactly 125 % and dates the report", () => {
     const years = chronicLeakerYears(PART_84_SUBPART_C, poundsToKg(100), [
-      lb("a", "2027-01-05", 70), lb("b", "2027-06-01", 55), lb("v", "2027-07-01", 30, { voided: true }),
+      lb("a", "2027-01-05", 70),
+      lb("b", "2027-06-01", 55),
+      lb("v", "2027-07-01", 30, { voided: true }),
     ]);
     expect(years).toHaveLength(1);
     expect(years[0].percent).toBeCloseTo(125, 10);
     expect(years[0].chronic).toBe(true);
     expect(years[0].reportDue).toBe("2028-03-01");
     // In kg with exact binary values: 100 + 25 kg into 100 kg is exactly 125 %.
-    const exact = chronicLeakerYears(PART_84_SUBPART_C, 100, [{ id: "a", date: "2027-02-01", amountKg: 100 }, { id: "b", date: "2027-03-01", amountKg: 25 }]);
+    const exact = chronicLeakerYears(PART_84_SUBPART_C, 100, [
+      { id: "a", date: "2027-02-01", amountKg: 100 },
+      { id: "b", date: "2027-03-01", amountKg: 25 },
+    ]);
     expect(exact[0].percent).toBe(125);
     expect(exact[0].chronic).toBe(true);
-    const below = chronicLeakerYears(PART_84_SUBPART_C, poundsToKg(100), [lb("a", "2027-01-05", 70), lb("b", "2027-06-01", 54.9)]);
+    const below = chronicLeakerYears(PART_84_SUBPART_C, poundsToKg(100), [
+      lb("a", "2027-01-05", 70),
+      lb("b", "2027-06-01", 54.9),
+    ]);
     expect(below[0].chronic).toBe(false);
   });
   it("files an addition by the store's calendar, not UTC", () => {
     // IANA tz: New York is UTC−5 on 1 Jan, so 03:00 UTC on 1 Jan 2027 is 22:00 on 31 Dec 2026 there.
     const date = localDateOf(new Date("2027-01-01T03:00:00Z"), "America/New_York");
-    const years = chronicLeakerYears(PART_84_SUBPART_C, poundsToKg(100), [lb("a", "2026-03-01", 100), lb("b", date, 30)]);
+    const years = chronicLeakerYears(PART_84_SUBPART_C, poundsToKg(100), [
+      lb("a", "2026-03-01", 100),
+      lb("b", date, 30),
+    ]);
     expect(years).toHaveLength(1);
     expect(years[0].year).toBe(2026);
     expect(years[0].chronic).toBe(true);

@@ -19,7 +19,11 @@ export interface ChronicLeakerYear {
  * it reaches the chronic-leaker share of the full charge (≥ 125 % [S:R7]). Voided and excluded
  * additions (retrofit, new installation, seasonal variance) do not count as loss.
  */
-export function chronicLeakerYears(part: LeakRatePart, fullChargeKg: number, additions: readonly ChargeAddition[]): ChronicLeakerYear[] {
+export function chronicLeakerYears(
+  part: LeakRatePart,
+  fullChargeKg: number,
+  additions: readonly ChargeAddition[],
+): ChronicLeakerYear[] {
   requirePositive(fullChargeKg, "fullChargeKg");
   validateAdditions(additions);
   const byYear = new Map<number, number>();
@@ -35,6 +39,8 @@ export function chronicLeakerYears(part: LeakRatePart, fullChargeKg: number, add
       const percent = (addedKg / fullChargeKg) * 100;
       // Tolerance of 1e-9 so 125 % typed in lb and stored in kg still "reaches" 125 %.
       const chronic = percent >= limit * (1 - 1e-9);
-      return chronic ? { year, addedKg, percent, chronic, reportDue: chronicReportDueDate(part, year) } : { year, addedKg, percent, chronic };
+      return chronic
+        ? { year, addedKg, percent, chronic, reportDue: chronicReportDueDate(part, year) }
+        : { year, addedKg, percent, chronic };
     });
 }

@@ -4,7 +4,9 @@ import { EU_FGAS_PROFILE } from "./eu-fgas-profile";
 import { US_FEDERAL_PROFILE } from "./us-federal-profile";
 
 const sources = (node: unknown): string[] =>
-  node && typeof node === "object" ? Object.entries(node).flatMap(([k, v]) => (k === "source" && typeof v === "string" ? [v] : sources(v))) : [];
+  node && typeof node === "object"
+    ? Object.entries(node).flatMap(([k, v]) => (k === "source" && typeof v === "string" ? [v] : sources(v)))
+    : [];
 
 describe("readable citations", () => {
   it("turn tags into the rule they cite", () => {
@@ -12,18 +14,30 @@ describe("readable citations", () => {
     expect(readableSource("[S:R1] 40 CFR 82.157(c); [S:R4] 84.106")).toBe("40 CFR 82.157(c); 40 CFR 84.106");
     expect(readableSource("[S:R4] full charge ≥ 15 lb")).toBe("full charge ≥ 15 lb (40 CFR 84 subpart C)");
     // A title that already names the part is not repeated.
-    expect(readableSource("40 CFR 84 subpart C (HFCs and substitutes, GWP > 53); [S:R4] repair within 30 days of learning of the breach")).toBe(
-      "40 CFR 84 subpart C (HFCs and substitutes, GWP > 53); repair within 30 days of learning of the breach",
+    expect(
+      readableSource(
+        "40 CFR 84 subpart C (HFCs and substitutes, GWP > 53); [S:R4] repair within 30 days of learning of the breach",
+      ),
+    ).toBe("40 CFR 84 subpart C (HFCs and substitutes, GWP > 53); repair within 30 days of learning of the breach");
+    expect(readableSource("[S:E8b] 2024/573 Art. 7, records at least 5 years")).toBe(
+      "2024/573 Art. 7, records at least 5 years",
     );
-    expect(readableSource("[S:E8b] 2024/573 Art. 7, records at least 5 years")).toBe("2024/573 Art. 7, records at least 5 years");
-    expect(readableSource("[S:E1] hermetically sealed, labelled, < 10 t CO2e")).toBe("hermetically sealed, labelled, < 10 t CO2e (Regulation (EU) No 517/2014, Art. 4)");
+    expect(readableSource("[S:E1] hermetically sealed, labelled, < 10 t CO2e")).toBe(
+      "hermetically sealed, labelled, < 10 t CO2e (Regulation (EU) No 517/2014, Art. 4)",
+    );
   });
   it("say plainly what is from memory or derived, and leave a company's own words alone", () => {
-    expect(readableSource("[M] the first calculation after 1 Jan 2026 uses 365 days")).toBe("the first calculation after 1 Jan 2026 uses 365 days (not yet confirmed in the rule text)");
-    expect(readableSource("[D] 10 lb into 100 lb after 180 days")).toBe("10 lb into 100 lb after 180 days (derived from the cited values)");
+    expect(readableSource("[M] the first calculation after 1 Jan 2026 uses 365 days")).toBe(
+      "the first calculation after 1 Jan 2026 uses 365 days (not yet confirmed in the rule text)",
+    );
+    expect(readableSource("[D] 10 lb into 100 lb after 180 days")).toBe(
+      "10 lb into 100 lb after 180 days (derived from the cited values)",
+    );
     expect(readableSource("company policy: repair within 14 days")).toBe("company policy: repair within 14 days");
     // Pointers into our own reference file are internal and dropped.
-    expect(readableSource("[M] standards.md §8 (critical point 31.0 °C / 73.8 bar)")).toBe("critical point 31.0 °C / 73.8 bar (not yet confirmed in the rule text)");
+    expect(readableSource("[M] standards.md §8 (critical point 31.0 °C / 73.8 bar)")).toBe(
+      "critical point 31.0 °C / 73.8 bar (not yet confirmed in the rule text)",
+    );
     expect(readableSource("[M] safety class B2L; rises: density 0.59 × air [D] standards.md §4, §8")).toBe(
       "safety class B2L (not yet confirmed in the rule text); rises: density 0.59 × air (derived from the cited values)",
     );

@@ -25,7 +25,10 @@ export const CITATIONS: Record<string, Citation> = {
   R4b: { text: "90 FR 47999 (2025, proposed)", mentioned: /90 FR 47999/ },
   R5: { text: "40 CFR 84.102", mentioned: /84\.102/ },
   R6: { text: "ACHR News, “EPA requirements for leak repair”", mentioned: /ACHR/ },
-  R7: { text: "40 CFR 82 subpart F and 84 subpart C, as summarised in an EPA Section 608 study guide", mentioned: /82 subpart F and 84/ },
+  R7: {
+    text: "40 CFR 82 subpart F and 84 subpart C, as summarised in an EPA Section 608 study guide",
+    mentioned: /82 subpart F and 84/,
+  },
   R8: { text: "40 CFR 82.152", mentioned: /82\.152/ },
   R9: { text: "EPA Section 608 technician certification", mentioned: /Section 608/ },
   E1: { text: "Regulation (EU) No 517/2014, Art. 4", mentioned: /517\/2014 Art/ },
@@ -76,7 +79,11 @@ export function readableSource(source: string): string {
   const said = new Set<string>();
   const segments = splitOutsideParens(source).map((segment) => {
     const tags = [...segment.matchAll(TAG)].map((m) => m[1]);
-    let rest = segment.replace(TAG, "").replace(/\s+([,.)])/g, "$1").replace(/\(\s*\)/g, "").trim();
+    let rest = segment
+      .replace(TAG, "")
+      .replace(/\s+([,.)])/g, "$1")
+      .replace(/\(\s*\)/g, "")
+      .trim();
     if (/^\([^()]*\)$/.test(rest)) rest = rest.slice(1, -1); // "(critical point 31.0 °C)" left after a stripped pointer
     if (tags.length === 0) return rest;
     // "[S:R4] 84.106" names a section of the tagged part: "40 CFR 84.106".
@@ -96,7 +103,8 @@ export function readableSource(source: string): string {
     const unique = [...new Set(notes)];
     if (!rest) return unique.join("; ");
     // "definition [S:R8]": a one-word lead-in reads "definition: 40 CFR 82.152, …".
-    if (!/\s/.test(rest) && unique.length && tags.every((t) => t.startsWith("S:"))) return `${rest}: ${unique.join("; ")}`;
+    if (!/\s/.test(rest) && unique.length && tags.every((t) => t.startsWith("S:")))
+      return `${rest}: ${unique.join("; ")}`;
     return unique.length ? `${rest} (${unique.join("; ")})` : rest;
   });
   return segments.filter(Boolean).join("; ");
@@ -125,6 +133,9 @@ export function withReadableSources<T>(node: T): T {
   if (Array.isArray(node)) return node.map(withReadableSources) as T;
   if (node === null || typeof node !== "object") return node;
   return Object.fromEntries(
-    Object.entries(node as Record<string, unknown>).map(([k, v]) => [k, k === "source" && typeof v === "string" ? readableSource(v) : withReadableSources(v)]),
+    Object.entries(node as Record<string, unknown>).map(([k, v]) => [
+      k,
+      k === "source" && typeof v === "string" ? readableSource(v) : withReadableSources(v),
+    ]),
   ) as T;
 }

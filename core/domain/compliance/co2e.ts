@@ -17,7 +17,13 @@ export type SystemCo2e =
 export function systemCo2e(profile: RuleProfile, refrigerant: Refrigerant, chargeKg: number): SystemCo2e {
   const g = gwpOf(refrigerant, profile.gwpBases.value);
   if (!g.known) return { known: false, reason: g.reason };
-  const source = refrigerant.kind === "blend" ? `[D] from components by mass (${g.terms.map((t) => t.basis).filter((b, i, a) => a.indexOf(b) === i).join(", ")})` : g.terms[0].source;
+  const source =
+    refrigerant.kind === "blend"
+      ? `[D] from components by mass (${g.terms
+          .map((t) => t.basis)
+          .filter((b, i, a) => a.indexOf(b) === i)
+          .join(", ")})`
+      : g.terms[0].source;
   return { known: true, tonnes: co2eTonnes(chargeKg, g.value), gwp: g.value, gwpSource: source };
 }
 

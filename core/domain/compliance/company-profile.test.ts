@@ -44,9 +44,15 @@ describe("the company's profile", () => {
       "leakChecks.co2eBands.value.1.to: must be above the band's lower edge (50)",
       "leakChecks.co2eBands.value.2.from: must equal the band below's upper edge (40), so bands ascend without gaps or overlaps",
     ]);
-    expect(issues((p) => (p.leakChecks!.co2eBands.value[2].to = 1000))).toEqual(["leakChecks.co2eBands.value.2.to: must be empty (open) for the top band"]);
-    expect(issues((p) => (p.leakChecks!.co2eBands.value[0].monthsWithLds = 6))).toEqual(["leakChecks.co2eBands.value.0.monthsWithLds: must be at least the interval without a leak detection system"]);
-    expect(issues((p) => (p.leakChecks!.recheckAfterRepairMonths.value = 0))).toEqual(["leakChecks.recheckAfterRepairMonths.value: must be at least 1 month"]);
+    expect(issues((p) => (p.leakChecks!.co2eBands.value[2].to = 1000))).toEqual([
+      "leakChecks.co2eBands.value.2.to: must be empty (open) for the top band",
+    ]);
+    expect(issues((p) => (p.leakChecks!.co2eBands.value[0].monthsWithLds = 6))).toEqual([
+      "leakChecks.co2eBands.value.0.monthsWithLds: must be at least the interval without a leak detection system",
+    ]);
+    expect(issues((p) => (p.leakChecks!.recheckAfterRepairMonths.value = 0))).toEqual([
+      "leakChecks.recheckAfterRepairMonths.value: must be at least 1 month",
+    ]);
     expect(issues((p) => (p.name = ""))).toEqual(["name: is required"]);
   });
 });

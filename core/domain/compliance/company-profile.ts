@@ -7,7 +7,10 @@ import { US_FEDERAL_PROFILE } from "./us-federal-profile";
 export type CompanyRuleProfile = "us-federal" | "eu-fgas" | "custom";
 export type BuiltInProfileId = "us-federal" | "eu-fgas";
 
-export const BUILT_IN_PROFILES: Record<BuiltInProfileId, RuleProfile> = { "us-federal": US_FEDERAL_PROFILE, "eu-fgas": EU_FGAS_PROFILE };
+export const BUILT_IN_PROFILES: Record<BuiltInProfileId, RuleProfile> = {
+  "us-federal": US_FEDERAL_PROFILE,
+  "eu-fgas": EU_FGAS_PROFILE,
+};
 
 /**
  * A fresh custom profile: an unedited copy of a built-in one, named after it. The company edits it

@@ -16,7 +16,10 @@ export function copyProfile(base: RuleProfile, id: string, name: string): RulePr
 
 function checkSource(s: Sourced<unknown>, field: string): void {
   if (typeof s?.source !== "string" || s.source.trim() === "") {
-    throw new DomainInputError(`${field}.source`, "every rule value needs its source (a citation, or who set it and why)");
+    throw new DomainInputError(
+      `${field}.source`,
+      "every rule value needs its source (a citation, or who set it and why)",
+    );
   }
 }
 
@@ -24,7 +27,10 @@ function checkNumber(s: Sourced<number>, field: string, min: number, max: number
   checkSource(s, field);
   const v = s.value;
   if (typeof v !== "number" || !Number.isFinite(v) || v < min || v > max || (integer && !Number.isInteger(v))) {
-    throw new DomainInputError(`${field}.value`, `must be ${integer ? "a whole number" : "a number"} from ${min} to ${max}, got ${String(v)}`);
+    throw new DomainInputError(
+      `${field}.value`,
+      `must be ${integer ? "a whole number" : "a number"} from ${min} to ${max}, got ${String(v)}`,
+    );
   }
 }
 
@@ -35,13 +41,19 @@ function checkBands(s: Sourced<LeakCheckBand[]>, field: string): void {
   bands.forEach((b, i) => {
     const f = `${field}.value[${i}]`;
     if (!(b.from >= 0)) throw new DomainInputError(`${f}.from`, `must be ≥ 0, got ${b.from}`);
-    if (b.to !== null && !(b.to > b.from)) throw new DomainInputError(`${f}.to`, `must be above from (${b.from}), got ${b.to}`);
+    if (b.to !== null && !(b.to > b.from))
+      throw new DomainInputError(`${f}.to`, `must be above from (${b.from}), got ${b.to}`);
     if (i < bands.length - 1 && b.to !== bands[i + 1].from) {
-      throw new DomainInputError(`${f}.to`, `must equal the next band's from (${bands[i + 1].from}) so no charge falls between bands`);
+      throw new DomainInputError(
+        `${f}.to`,
+        `must equal the next band's from (${bands[i + 1].from}) so no charge falls between bands`,
+      );
     }
-    if (i === bands.length - 1 && b.to !== null) throw new DomainInputError(`${f}.to`, "the top band must be open (null)");
+    if (i === bands.length - 1 && b.to !== null)
+      throw new DomainInputError(`${f}.to`, "the top band must be open (null)");
     for (const k of ["monthsWithoutLds", "monthsWithLds"] as const) {
-      if (!Number.isInteger(b[k]) || b[k] < 1 || b[k] > 120) throw new DomainInputError(`${f}.${k}`, `must be a whole number of months from 1 to 120, got ${b[k]}`);
+      if (!Number.isInteger(b[k]) || b[k] < 1 || b[k] > 120)
+        throw new DomainInputError(`${f}.${k}`, `must be a whole number of months from 1 to 120, got ${b[k]}`);
     }
   });
 }
@@ -51,7 +63,8 @@ export function validateRuleProfile(p: RuleProfile): void {
   if (!p.id?.trim()) throw new DomainInputError("id", "is empty");
   if (!p.name?.trim()) throw new DomainInputError("name", "is empty");
   checkSource(p.gwpBases, "gwpBases");
-  if (!Array.isArray(p.gwpBases.value) || p.gwpBases.value.length === 0) throw new DomainInputError("gwpBases.value", "list at least one GWP basis");
+  if (!Array.isArray(p.gwpBases.value) || p.gwpBases.value.length === 0)
+    throw new DomainInputError("gwpBases.value", "list at least one GWP basis");
   checkNumber(p.recordRetentionYears, "recordRetentionYears", 1, 100, true);
   p.leakRateParts.forEach((part, i) => {
     const f = `leakRateParts[${i}]`;
@@ -72,8 +85,14 @@ export function validateRuleProfile(p: RuleProfile): void {
       const g = `${f}.inspectionsAfterBreach`;
       checkSource(part.inspectionsAfterBreach, g);
       const v = part.inspectionsAfterBreach.value;
-      for (const k of ["largeEveryMonths", "largeUntilPeriodsBelow", "otherEveryMonths", "otherUntilPeriodsBelow"] as const) {
-        if (!Number.isInteger(v[k]) || v[k] < 1 || v[k] > 120) throw new DomainInputError(`${g}.value.${k}`, `must be a whole number from 1 to 120, got ${v[k]}`);
+      for (const k of [
+        "largeEveryMonths",
+        "largeUntilPeriodsBelow",
+        "otherEveryMonths",
+        "otherUntilPeriodsBelow",
+      ] as const) {
+        if (!Number.isInteger(v[k]) || v[k] < 1 || v[k] > 120)
+          throw new DomainInputError(`${g}.value.${k}`, `must be a whole number from 1 to 120, got ${v[k]}`);
       }
     }
     if (part.effectiveFrom) {
@@ -84,9 +103,16 @@ export function validateRuleProfile(p: RuleProfile): void {
     checkSource(part.chronicLeaker.reportBy, `${f}.chronicLeaker.reportBy`);
     // A day every year has: 29 February would fall away in three years of four.
     const longest = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31][month - 1];
-    if (!Number.isInteger(month) || longest === undefined) throw new DomainInputError(`${f}.chronicLeaker.reportBy.value.month`, `must be a month from 1 to 12, got ${month}`);
+    if (!Number.isInteger(month) || longest === undefined)
+      throw new DomainInputError(
+        `${f}.chronicLeaker.reportBy.value.month`,
+        `must be a month from 1 to 12, got ${month}`,
+      );
     if (!Number.isInteger(day) || day < 1 || day > longest) {
-      throw new DomainInputError(`${f}.chronicLeaker.reportBy.value.day`, `must be a day from 1 to ${longest} in month ${month} (one that every year has), got ${day}`);
+      throw new DomainInputError(
+        `${f}.chronicLeaker.reportBy.value.day`,
+        `must be a day from 1 to ${longest} in month ${month} (one that every year has), got ${day}`,
+      );
     }
   });
   if (p.leakChecks) {

@@ -1,5 +1,13 @@
 import { describe, expect, it } from "vitest";
-import { chronicReportDueDate, dueStatus, followUpVerificationDueDate, initialVerificationDueDate, keepRecordsUntil, recheckAfterRepairDueDate, repairDueDate } from "./deadlines";
+import {
+  chronicReportDueDate,
+  dueStatus,
+  followUpVerificationDueDate,
+  initialVerificationDueDate,
+  keepRecordsUntil,
+  recheckAfterRepairDueDate,
+  repairDueDate,
+} from "./deadlines";
 import { EU_FGAS_PROFILE } from "./eu-fgas-profile";
 import { PART_82_SUBPART_F, PART_84_SUBPART_C, US_FEDERAL_PROFILE } from "./us-federal-profile";
 import { localDateOf } from "../dates/time-zone";

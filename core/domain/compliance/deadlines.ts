@@ -51,6 +51,7 @@ export interface DueStatus {
 export function dueStatus(dueOn: IsoDate, now: Date, timeZone: string, soonDays = 7): DueStatus {
   const today = localDateOf(now, timeZone);
   const daysLeft = daysBetween(today, dueOn);
-  const state = daysLeft < 0 ? "overdue" : daysLeft === 0 ? "due-today" : daysLeft <= soonDays ? "due-soon" : "upcoming";
+  const state =
+    daysLeft < 0 ? "overdue" : daysLeft === 0 ? "due-today" : daysLeft <= soonDays ? "due-soon" : "upcoming";
   return { daysLeft, state };
 }

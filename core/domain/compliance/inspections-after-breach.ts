@@ -25,17 +25,31 @@ export function inspectionsAfterBreach(
   if (system.hasAutomaticLeakDetection && rule.waivedWithAutomaticLeakDetection) {
     return { required: false, reason: "waived while automatic leak detection, calibrated yearly, watches the system" };
   }
-  const large = rule.largeTypes.includes(system.applianceType) && atLeast(system.fullChargeKg, massLimitKg(rule.largeFromCharge));
+  const large =
+    rule.largeTypes.includes(system.applianceType) && atLeast(system.fullChargeKg, massLimitKg(rule.largeFromCharge));
   return large
-    ? { required: true, everyMonths: rule.largeEveryMonths, untilPeriodsBelow: rule.largeUntilPeriodsBelow,
-        reason: `${rule.largeFromCharge.value} ${rule.largeFromCharge.unit} or more: every ${rule.largeEveryMonths} months until ${rule.largeUntilPeriodsBelow} periods below the threshold` }
-    : { required: true, everyMonths: rule.otherEveryMonths, untilPeriodsBelow: rule.otherUntilPeriodsBelow,
-        reason: `every ${rule.otherEveryMonths} months until ${rule.otherUntilPeriodsBelow} period below the threshold` };
+    ? {
+        required: true,
+        everyMonths: rule.largeEveryMonths,
+        untilPeriodsBelow: rule.largeUntilPeriodsBelow,
+        reason: `${rule.largeFromCharge.value} ${rule.largeFromCharge.unit} or more: every ${rule.largeEveryMonths} months until ${rule.largeUntilPeriodsBelow} periods below the threshold`,
+      }
+    : {
+        required: true,
+        everyMonths: rule.otherEveryMonths,
+        untilPeriodsBelow: rule.otherUntilPeriodsBelow,
+        reason: `every ${rule.otherEveryMonths} months until ${rule.otherUntilPeriodsBelow} period below the threshold`,
+      };
 }
 
 /** Whether the part requires automatic leak detection for this system (Part 84: CR and IPR ≥ 1,500 lb [S:R4]). */
-export function automaticLeakDetectionRequired(part: LeakRatePart, system: { applianceType: ApplianceType; fullChargeKg: number }): boolean {
+export function automaticLeakDetectionRequired(
+  part: LeakRatePart,
+  system: { applianceType: ApplianceType; fullChargeKg: number },
+): boolean {
   requirePositive(system.fullChargeKg, "fullChargeKg");
   const rule = part.automaticLeakDetectionRequired?.value;
-  return !!rule && rule.types.includes(system.applianceType) && atLeast(system.fullChargeKg, massLimitKg(rule.fromCharge));
+  return (
+    !!rule && rule.types.includes(system.applianceType) && atLeast(system.fullChargeKg, massLimitKg(rule.fromCharge))
+  );
 }

@@ -21,7 +21,15 @@ export function fgasGroup(r: Refrigerant): FgasGroup {
 }
 
 export type LeakCheckInterval =
-  | { required: true; months: number; ldsRequired: boolean; band: LeakCheckBand; measure: "t CO2e" | "kg"; amount: number; reason: string }
+  | {
+      required: true;
+      months: number;
+      ldsRequired: boolean;
+      band: LeakCheckBand;
+      measure: "t CO2e" | "kg";
+      amount: number;
+      reason: string;
+    }
   | { required: false; reason: string };
 
 function findBand(bands: LeakCheckBand[], amount: number): LeakCheckBand | undefined {
@@ -42,7 +50,8 @@ export function leakCheckInterval(
   const rules = profile.leakChecks;
   if (!rules) return { required: false, reason: `${profile.name} sets no periodic leak checks` };
   const group = fgasGroup(refrigerant);
-  if (group === "not-covered") return { required: false, reason: `${refrigerant.id} is not a fluorinated gas covered by leak-check rules` };
+  if (group === "not-covered")
+    return { required: false, reason: `${refrigerant.id} is not a fluorinated gas covered by leak-check rules` };
 
   let amount: number;
   let bands: LeakCheckBand[];
@@ -54,7 +63,10 @@ export function leakCheckInterval(
     bands = rules.co2eBands.value;
     measure = "t CO2e";
     if (options.hermeticallySealed && amount < rules.hermeticExemptBelowTonnes.value) {
-      return { required: false, reason: `hermetically sealed and below ${rules.hermeticExemptBelowTonnes.value} t CO2e` };
+      return {
+        required: false,
+        reason: `hermetically sealed and below ${rules.hermeticExemptBelowTonnes.value} t CO2e`,
+      };
     }
   } else {
     amount = chargeKg;
@@ -62,11 +74,17 @@ export function leakCheckInterval(
     measure = "kg";
   }
   const band = findBand(bands, amount);
-  if (!band) return { required: false, reason: `${amount} ${measure} is below the first band (${bands[0].from} ${measure})` };
+  if (!band)
+    return { required: false, reason: `${amount} ${measure} is below the first band (${bands[0].from} ${measure})` };
   const months = options.hasLeakDetection ? band.monthsWithLds : band.monthsWithoutLds;
   const top = band.to === null ? `≥ ${band.from}` : `${band.from} to < ${band.to}`;
   return {
-    required: true, months, ldsRequired: band.ldsRequired, band, measure, amount,
+    required: true,
+    months,
+    ldsRequired: band.ldsRequired,
+    band,
+    measure,
+    amount,
     reason: `${amount} ${measure} is in the ${top} ${measure} band: every ${months} months ${options.hasLeakDetection ? "with" : "without"} leak detection${band.ldsRequired ? "; a leak detection system is required" : ""}`,
   };
 }

@@ -50,8 +50,16 @@ describe("EU leak-check intervals from CO2e bands (517/2014 Art. 4, 2024/573 Art
   });
   it("exempts labelled hermetically sealed equipment below 10 t", () => {
     // [S:E1] hermetically sealed equipment < 10 t CO2e is exempt.
-    expect(leakCheckInterval(EU_FGAS_PROFILE, r("R-404A"), kg404(9.99), { hasLeakDetection: false, hermeticallySealed: true }).required).toBe(false);
-    expect(leakCheckInterval(EU_FGAS_PROFILE, r("R-404A"), kg404(10), { hasLeakDetection: false, hermeticallySealed: true }).required).toBe(true);
+    expect(
+      leakCheckInterval(EU_FGAS_PROFILE, r("R-404A"), kg404(9.99), {
+        hasLeakDetection: false,
+        hermeticallySealed: true,
+      }).required,
+    ).toBe(false);
+    expect(
+      leakCheckInterval(EU_FGAS_PROFILE, r("R-404A"), kg404(10), { hasLeakDetection: false, hermeticallySealed: true })
+        .required,
+    ).toBe(true);
   });
   it("checks HFOs by kg from 1 kg", () => {
     // 2024/573 Art. 5 [S:E5]: HFOs from 1 kg, LDS from 100 kg; intervals 12/24, 6/12, 3/6 [M].
@@ -62,7 +70,8 @@ describe("EU leak-check intervals from CO2e bands (517/2014 Art. 4, 2024/573 Art
     expect(months(100, true, "R-1234yf")).toBe(6);
   });
   it("leaves natural refrigerants and HCFCs out and counts HFC/HFO blends by CO2e", () => {
-    for (const id of ["R-744", "R-290", "R-717", "R-22"]) expect(leakCheckInterval(EU_FGAS_PROFILE, r(id), 1000, { hasLeakDetection: false }).required, id).toBe(false);
+    for (const id of ["R-744", "R-290", "R-717", "R-22"])
+      expect(leakCheckInterval(EU_FGAS_PROFILE, r(id), 1000, { hasLeakDetection: false }).required, id).toBe(false);
     expect(fgasGroup(r("R-455A"))).toBe("annex-I"); // contains R-32 (ASHRAE 34 [S:G3])
     // R-449A 1397 [M]: 10 kg → 13.97 t → 12 months.
     expect(months(10, false, "R-449A")).toBe(12);

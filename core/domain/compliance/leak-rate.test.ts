@@ -1,7 +1,13 @@
 import { describe, expect, it } from "vitest";
 import { roundHalfUp } from "../numbers/round-half-up";
 import { poundsToKg } from "../units/mass";
-import { annualizedLeakRate, leakRateHistory, rollingAverageLeakRate, type ChargeAddition, type LeakRateRules } from "./leak-rate";
+import {
+  annualizedLeakRate,
+  leakRateHistory,
+  rollingAverageLeakRate,
+  type ChargeAddition,
+  type LeakRateRules,
+} from "./leak-rate";
 import { PART_82_SUBPART_F } from "./us-federal-profile";
 
 // Rules as the US profile holds them (365-day cap, 365 first-calculation days, 365-day window).
@@ -11,12 +17,21 @@ const rules: LeakRateRules = {
   rollingWindowDays: PART_82_SUBPART_F.rollingWindowDays.value,
 };
 const lb = (id: string, date: string, pounds: number, extra: Partial<ChargeAddition> = {}): ChargeAddition => ({
-  id, date, amountKg: poundsToKg(pounds), ...extra,
+  id,
+  date,
+  amountKg: poundsToKg(pounds),
+  ...extra,
 });
 const annual = (fullLb: number, additions: ChargeAddition[]) =>
   leakRateHistory({ fullChargeKg: poundsToKg(fullLb), additions, method: "annualizing", rules });
 const rolling = (fullLb: number, additions: ChargeAddition[], followUpVerifiedOn: string[] = []) =>
-  leakRateHistory({ fullChargeKg: poundsToKg(fullLb), additions, method: "rolling-average", rules, followUpVerifiedOn });
+  leakRateHistory({
+    fullChargeKg: poundsToKg(fullLb),
+    additions,
+    method: "rolling-average",
+    rules,
+    followUpVerifiedOn,
+  });
 
 describe("annualizing method (40 CFR 82.152 / 84.102)", () => {
   it("gives 60.8 % for 5 lb lost from 100 lb in 30 days", () => {
@@ -63,7 +78,10 @@ describe("annualizing method (40 CFR 82.152 / 84.102)", () => {
     // Additions for the same leak count together (standards.md §1 [M]): 1 + 2 lb after 30 days on
     // 100 lb → 3/100 × 365/30 = 36.5 %. The voided 50 lb entry neither counts nor restarts the clock.
     const points = annual(100, [
-      lb("a", "2026-04-01", 1), lb("v", "2026-04-20", 50, { voided: true }), lb("b", "2026-05-01", 1), lb("c", "2026-05-01", 2),
+      lb("a", "2026-04-01", 1),
+      lb("v", "2026-04-20", 50, { voided: true }),
+      lb("b", "2026-05-01", 1),
+      lb("c", "2026-05-01", 2),
     ]);
     expect(points).toHaveLength(2);
     expect(points[1].additionIds).toEqual(["b", "c"]);
@@ -71,7 +89,11 @@ describe("annualizing method (40 CFR 82.152 / 84.102)", () => {
   });
   it("skips the figure after a retrofit, new installation or seasonal variance", () => {
     // 40 CFR 82.157 [S:R1]: no calculation after a retrofit, new install or seasonal variance.
-    const points = annual(100, [lb("a", "2026-01-01", 1), lb("s", "2026-02-01", 8, { excluded: "seasonal-variance" }), lb("b", "2026-03-03", 2)]);
+    const points = annual(100, [
+      lb("a", "2026-01-01", 1),
+      lb("s", "2026-02-01", 8, { excluded: "seasonal-variance" }),
+      lb("b", "2026-03-03", 2),
+    ]);
     expect(points.map((p) => p.additionIds)).toEqual([["a"], ["b"]]);
     expect(points[1].days).toBe(30); // our reading: the excluded addition restarts the clock
   });
@@ -79,8 +101,14 @@ describe("annualizing method (40 CFR 82.152 / 84.102)", () => {
     // standards.md §1 [M]: the first Part 84 calculation after 1 Jan 2026 uses 365 days.
     const withStart = { ...rules, firstCalculationFrom: "2026-01-01" };
     const points = leakRateHistory({
-      fullChargeKg: 100, method: "annualizing", rules: withStart,
-      additions: [{ id: "a", date: "2025-12-01", amountKg: 1 }, { id: "b", date: "2026-01-10", amountKg: 4 }, { id: "c", date: "2026-02-09", amountKg: 2 }],
+      fullChargeKg: 100,
+      method: "annualizing",
+      rules: withStart,
+      additions: [
+        { id: "a", date: "2025-12-01", amountKg: 1 },
+        { id: "b", date: "2026-01-10", amountKg: 4 },
+        { id: "c", date: "2026-02-09", amountKg: 2 },
+      ],
     });
     expect(points.map((p) => p.days)).toEqual([365, 365, 30]);
     expect(points[1].percent).toBeCloseTo(4, 12);
@@ -88,7 +116,9 @@ describe("annualizing method (40 CFR 82.152 / 84.102)", () => {
   it("refuses bad additions by entry", () => {
     expect(() => annual(100, [lb("a", "2026-02-30", 1)])).toThrow(/^additions\[0\].date: 2026-02-30 does not exist/);
     expect(() => annual(100, [{ id: "a", date: "2026-01-01", amountKg: -1 }])).toThrow(/^additions\[0\].amountKg/);
-    expect(() => leakRateHistory({ fullChargeKg: 0, additions: [], method: "annualizing", rules })).toThrow(/^fullChargeKg/);
+    expect(() => leakRateHistory({ fullChargeKg: 0, additions: [], method: "annualizing", rules })).toThrow(
+      /^fullChargeKg/,
+    );
   });
 });
 
@@ -96,7 +126,12 @@ describe("rolling-average method (40 CFR 82.152 / 84.102)", () => {
   // Hand calculations from the definition: lb added in the previous 365 days (the calculation day
   // and the 364 before it) / full charge × 100 [S:R7]; or since the last successful follow-up
   // verification if that is shorter [M].
-  const adds = [lb("a", "2026-02-01", 5), lb("b", "2026-06-01", 10), lb("c", "2027-01-31", 3), lb("d", "2027-02-01", 2)];
+  const adds = [
+    lb("a", "2026-02-01", 5),
+    lb("b", "2026-06-01", 10),
+    lb("c", "2027-01-31", 3),
+    lb("d", "2027-02-01", 2),
+  ];
   it("sums the additions of the previous 365 days", () => {
     const points = rolling(100, adds);
     expect(points.map((p) => p.windowStart)).toEqual(["2025-02-02", "2025-06-02", "2026-02-01", "2026-02-02"]);

@@ -55,7 +55,8 @@ export interface LeakRatePoint {
 export function annualizedLeakRate(addedKg: number, fullChargeKg: number, days: number): number {
   requirePositive(fullChargeKg, "fullChargeKg");
   if (!(addedKg >= 0)) throw new DomainInputError("addedKg", `must be ≥ 0, got ${addedKg}`);
-  if (!Number.isInteger(days) || days < 1) throw new DomainInputError("days", `must be a whole number of days ≥ 1, got ${days}`);
+  if (!Number.isInteger(days) || days < 1)
+    throw new DomainInputError("days", `must be a whole number of days ≥ 1, got ${days}`);
   return (addedKg / fullChargeKg / (days / 365)) * 100;
 }
 
@@ -71,14 +72,20 @@ export function validateAdditions(additions: readonly ChargeAddition[]): void {
   additions.forEach((a, i) => {
     parseIsoDate(a.date, `additions[${i}].date`);
     if (!(typeof a.amountKg === "number" && Number.isFinite(a.amountKg) && a.amountKg > 0)) {
-      throw new DomainInputError(`additions[${i}].amountKg`, `must be a positive number of kg, got ${String(a.amountKg)}`);
+      throw new DomainInputError(
+        `additions[${i}].amountKg`,
+        `must be a positive number of kg, got ${String(a.amountKg)}`,
+      );
     }
   });
 }
 
 function liveSorted(additions: readonly ChargeAddition[]): ChargeAddition[] {
   validateAdditions(additions);
-  return additions.filter((a) => !a.voided).slice().sort((a, b) => compareDates(a.date, b.date));
+  return additions
+    .filter((a) => !a.voided)
+    .slice()
+    .sort((a, b) => compareDates(a.date, b.date));
 }
 
 /** Groups same-day additions: topping up in several steps on one visit is one event (from memory: "count together"). */
@@ -111,7 +118,9 @@ export function leakRateHistory(input: LeakRateInput): LeakRatePoint[] {
   const { fullChargeKg, method, rules } = input;
   requirePositive(fullChargeKg, "fullChargeKg");
   const groups = byDate(liveSorted(input.additions));
-  const verified = (input.followUpVerifiedOn ?? []).map((d, i) => (parseIsoDate(d, `followUpVerifiedOn[${i}]`), d)).sort(compareDates);
+  const verified = (input.followUpVerifiedOn ?? [])
+    .map((d, i) => (parseIsoDate(d, `followUpVerifiedOn[${i}]`), d))
+    .sort(compareDates);
   const points: LeakRatePoint[] = [];
   if (rules.firstCalculationFrom) parseIsoDate(rules.firstCalculationFrom, "rules.firstCalculationFrom");
   const startsRegime = (date: IsoDate) =>
@@ -125,10 +134,18 @@ export function leakRateHistory(input: LeakRateInput): LeakRatePoint[] {
     const additionIds = counted.map((a) => a.id);
     if (method === "annualizing") {
       const previous = groups[i - 1];
-      const days = previous && !startsRegime(group.date)
-        ? Math.min(daysBetween(previous.date, group.date), rules.maxDaysSinceLastAddition)
-        : rules.firstCalculationDays;
-      points.push({ date: group.date, method, percent: annualizedLeakRate(addedKg, fullChargeKg, days), countedKg: addedKg, additionIds, days });
+      const days =
+        previous && !startsRegime(group.date)
+          ? Math.min(daysBetween(previous.date, group.date), rules.maxDaysSinceLastAddition)
+          : rules.firstCalculationDays;
+      points.push({
+        date: group.date,
+        method,
+        percent: annualizedLeakRate(addedKg, fullChargeKg, days),
+        countedKg: addedKg,
+        additionIds,
+        days,
+      });
       return;
     }
     // The window is the `rollingWindowDays` calendar days ending on the calculation date, or starts
@@ -141,8 +158,13 @@ export function leakRateHistory(input: LeakRateInput): LeakRatePoint[] {
       .flatMap((g) => g.items.filter((a) => !a.excluded));
     const windowKg = inWindow.reduce((s, a) => s + a.amountKg, 0);
     points.push({
-      date: group.date, method, percent: rollingAverageLeakRate(windowKg, fullChargeKg), countedKg: windowKg, additionIds,
-      days: daysBetween(windowStart, group.date) + 1, windowStart,
+      date: group.date,
+      method,
+      percent: rollingAverageLeakRate(windowKg, fullChargeKg),
+      countedKg: windowKg,
+      additionIds,
+      days: daysBetween(windowStart, group.date) + 1,
+      windowStart,
     });
   });
   return points;

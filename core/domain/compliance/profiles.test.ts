@@ -37,7 +37,10 @@ describe("built-in rule profiles", () => {
 describe("custom profiles", () => {
   it("are deep copies whose edits change the results, not the original", () => {
     const custom = copyProfile(US_FEDERAL_PROFILE, "acme-strict", "Company rule: 15 % commercial");
-    custom.leakRateParts[1].thresholds["commercial-refrigeration"] = { value: 15, source: "company policy, set by the owner" };
+    custom.leakRateParts[1].thresholds["commercial-refrigeration"] = {
+      value: 15,
+      source: "company policy, set by the owner",
+    };
     expect(leakRateThreshold(custom.leakRateParts[1], "commercial-refrigeration").percent).toBe(15);
     expect(leakRateThreshold(US_FEDERAL_PROFILE.leakRateParts[1], "commercial-refrigeration").percent).toBe(20);
     expect(custom.kind).toBe("custom");
@@ -59,15 +62,26 @@ describe("custom profiles", () => {
       edit(p);
       return () => validateRuleProfile(p);
     };
-    expect(bad((p) => (p.leakRateParts[0].thresholds["comfort-cooling"].value = -5)))
-      .toThrow(/^leakRateParts\[0\]\.thresholds\.comfort-cooling\.value: must be a number from 0 to 1000/);
-    expect(bad((p) => (p.leakRateParts[1].repairDays = { value: 30.5, source: "x" }))).toThrow(/repairDays\.value: must be a whole number/);
-    expect(bad((p) => (p.leakRateParts[1].repairDays = { value: 45, source: " " }))).toThrow(/repairDays\.source: every rule value needs its source/);
-    expect(bad((p) => (p.leakRateParts[1].effectiveFrom = { value: "2026-02-30", source: "x" }))).toThrow(/effectiveFrom\.value: 2026-02-30 does not exist/);
+    expect(bad((p) => (p.leakRateParts[0].thresholds["comfort-cooling"].value = -5))).toThrow(
+      /^leakRateParts\[0\]\.thresholds\.comfort-cooling\.value: must be a number from 0 to 1000/,
+    );
+    expect(bad((p) => (p.leakRateParts[1].repairDays = { value: 30.5, source: "x" }))).toThrow(
+      /repairDays\.value: must be a whole number/,
+    );
+    expect(bad((p) => (p.leakRateParts[1].repairDays = { value: 45, source: " " }))).toThrow(
+      /repairDays\.source: every rule value needs its source/,
+    );
+    expect(bad((p) => (p.leakRateParts[1].effectiveFrom = { value: "2026-02-30", source: "x" }))).toThrow(
+      /effectiveFrom\.value: 2026-02-30 does not exist/,
+    );
     const eu = copyProfile(EU_FGAS_PROFILE, "y", "Y");
     eu.leakChecks!.co2eBands.value[0] = { ...eu.leakChecks!.co2eBands.value[0], to: 40 };
-    expect(() => validateRuleProfile(eu)).toThrow(/^leakChecks\.co2eBands\.value\[0\]\.to: must equal the next band's from \(50\)/);
-    expect(bad((p) => (p.leakRateParts[0].inspectionsAfterBreach!.value.largeEveryMonths = 0))).toThrow(/inspectionsAfterBreach\.value\.largeEveryMonths: must be a whole number/);
+    expect(() => validateRuleProfile(eu)).toThrow(
+      /^leakChecks\.co2eBands\.value\[0\]\.to: must equal the next band's from \(50\)/,
+    );
+    expect(bad((p) => (p.leakRateParts[0].inspectionsAfterBreach!.value.largeEveryMonths = 0))).toThrow(
+      /inspectionsAfterBreach\.value\.largeEveryMonths: must be a whole number/,
+    );
     expect(() => copyProfile(US_FEDERAL_PROFILE, "", "X")).toThrow(/^id: is empty/);
   });
 });
@@ -77,7 +91,9 @@ describe("binary noise at band edges", () => {
     expect(tonnesForComparison(4.999999999999999)).toBe(5);
     expect(tonnesForComparison(50.00000000000001)).toBe(50);
     // 3.4965 kg R-134a × 1430 (AR4 [S:G1]) = 4.999995 t: five grams short, so no check is required.
-    expect(leakCheckInterval(EU_FGAS_PROFILE, getRefrigerant("R-134a"), 3.4965, { hasLeakDetection: false }).required).toBe(false);
+    expect(
+      leakCheckInterval(EU_FGAS_PROFILE, getRefrigerant("R-134a"), 3.4965, { hasLeakDetection: false }).required,
+    ).toBe(false);
     expect(poundsToKg(15) * (1 - 1e-9)).toBeLessThan(poundsToKg(15));
   });
 });

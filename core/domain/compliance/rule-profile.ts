@@ -8,7 +8,11 @@ import type { GwpBasis, Sourced } from "../refrigerants/types";
  */
 
 export type ApplianceType = "commercial-refrigeration" | "industrial-process" | "comfort-cooling";
-export const APPLIANCE_TYPES: readonly ApplianceType[] = ["commercial-refrigeration", "industrial-process", "comfort-cooling"];
+export const APPLIANCE_TYPES: readonly ApplianceType[] = [
+  "commercial-refrigeration",
+  "industrial-process",
+  "comfort-cooling",
+];
 
 export type LeakRateMethod = "annualizing" | "rolling-average";
 

@@ -43,7 +43,14 @@ export interface DueDate {
 export interface SystemStatus {
   points: AssessedPoint[];
   latest: AssessedPoint | null;
-  applicability: { applies: boolean; partId: string | null; partTitle: string | null; reason: string; thresholdPercent: number | null; thresholdSource: string | null };
+  applicability: {
+    applies: boolean;
+    partId: string | null;
+    partTitle: string | null;
+    reason: string;
+    thresholdPercent: number | null;
+    thresholdSource: string | null;
+  };
   /** The latest calculation is above the threshold. */
   overThreshold: boolean;
   /** The latest breach not yet followed by a repair. */
@@ -57,7 +64,12 @@ export interface SystemStatus {
 
 const latestOf = (dates: readonly IsoDate[]) => [...dates].sort(compareDates).at(-1) ?? null;
 
-export function systemStatus(profile: RuleProfile, method: LeakRateMethod, rec: SystemRecords, today: IsoDate): SystemStatus {
+export function systemStatus(
+  profile: RuleProfile,
+  method: LeakRateMethod,
+  rec: SystemRecords,
+  today: IsoDate,
+): SystemStatus {
   const system = { refrigerant: rec.refrigerant, fullChargeKg: rec.fullChargeKg, applianceType: rec.applianceType };
   const points = assessLeakRate(profile, system, rec.additions, method, rec.followUpVerifiedOn);
   const latest = points.at(-1) ?? null;
@@ -68,8 +80,11 @@ export function systemStatus(profile: RuleProfile, method: LeakRateMethod, rec: 
   // A breach stays open until a repair is recorded on or after the day the rate was learned.
   const lastBreach = [...points].reverse().find((p) => p.exceeds) ?? null;
   const lastRepair = latestOf(rec.repairedOn);
-  const unrepairedBreach = lastBreach && !(lastRepair && compareDates(lastRepair, lastBreach.date) >= 0) ? lastBreach : null;
-  const breachPart = lastBreach?.partId ? profile.leakRateParts.find((p) => p.id === lastBreach.partId) ?? null : null;
+  const unrepairedBreach =
+    lastBreach && !(lastRepair && compareDates(lastRepair, lastBreach.date) >= 0) ? lastBreach : null;
+  const breachPart = lastBreach?.partId
+    ? (profile.leakRateParts.find((p) => p.id === lastBreach.partId) ?? null)
+    : null;
   if (unrepairedBreach?.repairDue && breachPart) {
     due.push({
       kind: "repair",
@@ -83,11 +98,29 @@ export function systemStatus(profile: RuleProfile, method: LeakRateMethod, rec: 
   for (const f of rec.pendingFollowUps) {
     if (part && !f.initialTestOn) {
       // Until a passed initial test is recorded (a failed one means the repair did not hold).
-      due.push({ kind: "initial-test", dueOn: initialVerificationDueDate(part, f.repairedOn), what: `Initial verification test after the repair of ${f.repairedOn}`, source: part.initialVerificationDays.source, findingId: f.findingId });
+      due.push({
+        kind: "initial-test",
+        dueOn: initialVerificationDueDate(part, f.repairedOn),
+        what: `Initial verification test after the repair of ${f.repairedOn}`,
+        source: part.initialVerificationDays.source,
+        findingId: f.findingId,
+      });
     } else if (part && f.initialTestOn) {
-      due.push({ kind: "follow-up-test", dueOn: followUpVerificationDueDate(part, f.initialTestOn), what: `Follow-up verification test after the initial test of ${f.initialTestOn}`, source: part.followUpVerificationDays.source, findingId: f.findingId });
+      due.push({
+        kind: "follow-up-test",
+        dueOn: followUpVerificationDueDate(part, f.initialTestOn),
+        what: `Follow-up verification test after the initial test of ${f.initialTestOn}`,
+        source: part.followUpVerificationDays.source,
+        findingId: f.findingId,
+      });
     } else if (!part && profile.leakChecks) {
-      due.push({ kind: "recheck-after-repair", dueOn: recheckAfterRepairDueDate(profile, f.repairedOn), what: "Leak check after the repair", source: profile.leakChecks.recheckAfterRepairMonths.source, findingId: f.findingId });
+      due.push({
+        kind: "recheck-after-repair",
+        dueOn: recheckAfterRepairDueDate(profile, f.repairedOn),
+        what: "Leak check after the repair",
+        source: profile.leakChecks.recheckAfterRepairMonths.source,
+        findingId: f.findingId,
+      });
     }
   }
 
@@ -96,7 +129,13 @@ export function systemStatus(profile: RuleProfile, method: LeakRateMethod, rec: 
   for (const y of chronic) {
     // The report for last year (or this one, once reached) is what can still be acted on.
     if (y.chronic && y.reportDue && y.year >= thisYear - 1 && part && !rec.chronicReportsFiled?.includes(y.year)) {
-      due.push({ kind: "chronic-leaker-report", dueOn: y.reportDue, year: y.year, what: `Chronic-leaker report for ${y.year}: ${y.percent.toFixed(0)} % of the full charge added`, source: `${part.chronicLeaker.percentOfFullCharge.source}; ${part.chronicLeaker.reportBy.source}` });
+      due.push({
+        kind: "chronic-leaker-report",
+        dueOn: y.reportDue,
+        year: y.year,
+        what: `Chronic-leaker report for ${y.year}: ${y.percent.toFixed(0)} % of the full charge added`,
+        source: `${part.chronicLeaker.percentOfFullCharge.source}; ${part.chronicLeaker.reportBy.source}`,
+      });
     }
   }
 
@@ -120,9 +159,17 @@ export function systemStatus(profile: RuleProfile, method: LeakRateMethod, rec: 
   } else if (lastBreach && breachPart) {
     // US: periodic inspections after a breach until enough clean periods in a row. Our reading of
     // "until N periods below the threshold": N consecutive inspections with no leak found since the breach.
-    const plan = inspectionsAfterBreach(breachPart, { applianceType: rec.applianceType, fullChargeKg: rec.fullChargeKg, hasAutomaticLeakDetection: rec.automaticLeakDetection });
+    const plan = inspectionsAfterBreach(breachPart, {
+      applianceType: rec.applianceType,
+      fullChargeKg: rec.fullChargeKg,
+      hasAutomaticLeakDetection: rec.automaticLeakDetection,
+    });
     if (plan.required) {
-      const run = inspectionRun(points.filter((p) => p.exceeds).map((p) => p.date), rec.leakChecks, plan.untilPeriodsBelow);
+      const run = inspectionRun(
+        points.filter((p) => p.exceeds).map((p) => p.date),
+        rec.leakChecks,
+        plan.untilPeriodsBelow,
+      );
       if (run) {
         const from = run.lastCheck ?? run.start;
         nextInspection = {
@@ -133,7 +180,13 @@ export function systemStatus(profile: RuleProfile, method: LeakRateMethod, rec: 
       }
     }
   }
-  if (nextInspection) due.push({ kind: "inspection", dueOn: nextInspection.dueOn, what: "Leak inspection", source: nextInspection.source });
+  if (nextInspection)
+    due.push({
+      kind: "inspection",
+      dueOn: nextInspection.dueOn,
+      what: "Leak inspection",
+      source: nextInspection.source,
+    });
 
   return {
     points,

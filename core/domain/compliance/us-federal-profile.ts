@@ -12,10 +12,20 @@ const shared = {
     "comfort-cooling": { value: 10, source: "[S:R1] 40 CFR 82.157(c); [S:R4] 84.106" },
   },
   repairDays: { value: 30, source: "[S:R4] repair within 30 days of learning of the breach" },
-  initialVerificationDays: { value: 0, source: "[S:R8] initial verification test as soon as practicable after the repair is completed (before the full charge is replaced if the system was evacuated)" },
+  initialVerificationDays: {
+    value: 0,
+    source:
+      "[S:R8] initial verification test as soon as practicable after the repair is completed (before the full charge is replaced if the system was evacuated)",
+  },
   followUpVerificationDays: { value: 10, source: "[M] follow-up verification within 10 days; definition [S:R8]" },
-  maxDaysSinceLastAddition: { value: 365, source: "[S:R7] annualizing method, shorter of days since last addition or 365" },
-  rollingWindowDays: { value: 365, source: "[S:R7] rolling average, previous 365 days; shortened by a follow-up verification [M]" },
+  maxDaysSinceLastAddition: {
+    value: 365,
+    source: "[S:R7] annualizing method, shorter of days since last addition or 365",
+  },
+  rollingWindowDays: {
+    value: 365,
+    source: "[S:R7] rolling average, previous 365 days; shortened by a follow-up verification [M]",
+  },
   inspectionsAfterBreach: {
     value: {
       largeTypes: ["commercial-refrigeration", "industrial-process"],
@@ -26,7 +36,8 @@ const shared = {
       otherUntilPeriodsBelow: 1,
       waivedWithAutomaticLeakDetection: true,
     },
-    source: "[M] CR/IPR ≥ 500 lb quarterly until 4 quarters below; others yearly until 1 year below; waived under yearly-calibrated ALD",
+    source:
+      "[M] CR/IPR ≥ 500 lb quarterly until 4 quarters below; others yearly until 1 year below; waived under yearly-calibrated ALD",
   },
   chronicLeaker: {
     percentOfFullCharge: { value: 125, source: "[S:R7] ≥125 % of full charge added in a calendar year" },
@@ -63,7 +74,8 @@ export const US_FEDERAL_PROFILE: RuleProfile = {
   kind: "us-federal",
   gwpBases: {
     value: ["AR4", "AR5", "AR6", "EU-517/2014"],
-    source: "[M] AIM Act exchange values follow AR4; where AR4 lists none, the next basis with a value only decides whether GWP exceeds 53",
+    source:
+      "[M] AIM Act exchange values follow AR4; where AR4 lists none, the next basis with a value only decides whether GWP exceeds 53",
   },
   leakRateParts: [PART_82_SUBPART_F, PART_84_SUBPART_C],
   recordRetentionYears: { value: 3, source: "[S:R6,R7] records kept 3 years" },

@@ -33,7 +33,10 @@ export function parseIsoDate(text: string, field = "date"): DateParts {
   const day = Number(m[3]);
   if (month < 1 || month > 12) throw new DomainInputError(field, `has no month ${month}: ${text}`);
   if (day < 1 || day > daysInMonth(year, month)) {
-    throw new DomainInputError(field, `${text} does not exist (month ${month} of ${year} has ${daysInMonth(year, month)} days)`);
+    throw new DomainInputError(
+      field,
+      `${text} does not exist (month ${month} of ${year} has ${daysInMonth(year, month)} days)`,
+    );
   }
   return { year, month, day };
 }

@@ -48,11 +48,19 @@ describe("time zones (IANA tz database via Intl)", () => {
     expect(zoneOffsetMs(new Date("2026-07-15T12:00:00Z"), "America/New_York")).toBe(-4 * 3600_000);
     expect(startOfLocalDay("2026-03-08", "America/New_York").toISOString()).toBe("2026-03-08T05:00:00.000Z");
     // The DST-start day has 23 hours, the DST-end day 25.
-    expect(endOfLocalDay("2026-03-08", "America/New_York").getTime() - startOfLocalDay("2026-03-08", "America/New_York").getTime()).toBe(23 * 3600_000);
-    expect(endOfLocalDay("2026-11-01", "America/New_York").getTime() - startOfLocalDay("2026-11-01", "America/New_York").getTime()).toBe(25 * 3600_000);
+    expect(
+      endOfLocalDay("2026-03-08", "America/New_York").getTime() -
+        startOfLocalDay("2026-03-08", "America/New_York").getTime(),
+    ).toBe(23 * 3600_000);
+    expect(
+      endOfLocalDay("2026-11-01", "America/New_York").getTime() -
+        startOfLocalDay("2026-11-01", "America/New_York").getTime(),
+    ).toBe(25 * 3600_000);
   });
   it("refuses unknown zones by name", () => {
-    expect(() => assertTimeZone("Mars/Olympus", "store.timeZone")).toThrow(/^store.timeZone: is not a known IANA time zone/);
+    expect(() => assertTimeZone("Mars/Olympus", "store.timeZone")).toThrow(
+      /^store.timeZone: is not a known IANA time zone/,
+    );
     expect(() => localDateOf(new Date(Number.NaN), "UTC")).toThrow(/valid Date/);
   });
 });

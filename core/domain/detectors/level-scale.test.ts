@@ -15,7 +15,9 @@ describe("a detector's level scale", () => {
   });
 
   it("names an overlap by the band that starts too low", () => {
-    expect(levelScaleProblems([sound[0], { ...sound[1], minPpm: 10 }, sound[2]])).toEqual({ "1.minPpm": expect.stringMatching(/must not overlap level 1 \(up to 15 ppm\)/) });
+    expect(levelScaleProblems([sound[0], { ...sound[1], minPpm: 10 }, sound[2]])).toEqual({
+      "1.minPpm": expect.stringMatching(/must not overlap level 1 \(up to 15 ppm\)/),
+    });
   });
 
   it("refuses levels listed from high to low", () => {
@@ -23,10 +25,14 @@ describe("a detector's level scale", () => {
   });
 
   it("allows only the top level to be open-ended", () => {
-    expect(levelScaleProblems([{ ...sound[0], maxPpm: null }, sound[1]])).toEqual({ "0.maxPpm": expect.stringMatching(/only the top level/) });
+    expect(levelScaleProblems([{ ...sound[0], maxPpm: null }, sound[1]])).toEqual({
+      "0.maxPpm": expect.stringMatching(/only the top level/),
+    });
   });
 
   it("refuses a repeated level name, whatever its case", () => {
-    expect(levelScaleProblems([sound[0], { ...sound[1], level: "low" }])).toEqual({ "1.level": "must differ from level 1's name" });
+    expect(levelScaleProblems([sound[0], { ...sound[1], level: "low" }])).toEqual({
+      "1.level": "must differ from level 1's name",
+    });
   });
 });

@@ -25,8 +25,12 @@ export function levelScaleProblems(bands: readonly LevelBand[]): Record<string, 
       out[`${i - 1}.maxPpm`] ??= "is needed: only the top level may be open-ended";
       return;
     }
-    if (!(b.minPpm > below.minPpm)) out[`${i}.minPpm`] ??= `must be above level ${i}'s lower bound (${below.minPpm} ppm): list the levels from low to high`;
-    else if (b.minPpm < below.maxPpm) out[`${i}.minPpm`] ??= `must not overlap level ${i} (up to ${below.maxPpm} ppm): start at ${below.maxPpm} ppm or above`;
+    if (!(b.minPpm > below.minPpm))
+      out[`${i}.minPpm`] ??=
+        `must be above level ${i}'s lower bound (${below.minPpm} ppm): list the levels from low to high`;
+    else if (b.minPpm < below.maxPpm)
+      out[`${i}.minPpm`] ??=
+        `must not overlap level ${i} (up to ${below.maxPpm} ppm): start at ${below.maxPpm} ppm or above`;
   });
   return out;
 }

@@ -1,6 +1,12 @@
 import { describe, expect, it } from "vitest";
 import { deltaE76, labInGamut, lightness, rgbToLab, simulateDeuteranopia, type Rgb } from "./colour-science";
-import { CONCENTRATION_LUT, CONCENTRATION_STOPS, createConcentrationScale, LUT_SIZE, niceMaxPpm } from "./concentration-ramp";
+import {
+  CONCENTRATION_LUT,
+  CONCENTRATION_STOPS,
+  createConcentrationScale,
+  LUT_SIZE,
+  niceMaxPpm,
+} from "./concentration-ramp";
 import { createDifferenceScale, DIFFERENCE_LUT, DIFFERENCE_STOPS } from "./difference-ramp";
 
 const entry = (lut: Uint8ClampedArray, i: number): Rgb => [lut[i * 3], lut[i * 3 + 1], lut[i * 3 + 2]];
@@ -45,7 +51,9 @@ describe("concentration ramp", () => {
       expect(l).toBeLessThan(previous);
       previous = l;
     }
-    expect(lightness(entry(CONCENTRATION_LUT, 0)) - lightness(entry(CONCENTRATION_LUT, LUT_SIZE - 1))).toBeGreaterThan(70);
+    expect(lightness(entry(CONCENTRATION_LUT, 0)) - lightness(entry(CONCENTRATION_LUT, LUT_SIZE - 1))).toBeGreaterThan(
+      70,
+    );
   });
 
   it("keeps its ends far apart under simulated deuteranopia", () => {
@@ -56,7 +64,12 @@ describe("concentration ramp", () => {
     expect(deltaE76(lo, hi)).toBeGreaterThan(60);
     // neighbouring steps of a tenth of the ramp stay distinguishable too
     for (let i = 0; i + 25 < LUT_SIZE; i += 25) {
-      expect(deltaE76(simulateDeuteranopia(entry(CONCENTRATION_LUT, i)), simulateDeuteranopia(entry(CONCENTRATION_LUT, i + 25)))).toBeGreaterThan(4);
+      expect(
+        deltaE76(
+          simulateDeuteranopia(entry(CONCENTRATION_LUT, i)),
+          simulateDeuteranopia(entry(CONCENTRATION_LUT, i + 25)),
+        ),
+      ).toBeGreaterThan(4);
     }
   });
 

@@ -93,7 +93,11 @@ export function labInGamut(l: number, a: number, b: number): boolean {
   const x = WHITE[0] * fInv(fy + a / 500);
   const y = WHITE[1] * fInv(fy);
   const z = WHITE[2] * fInv(fy - b / 200);
-  const lin = [3.2406 * x - 1.5372 * y - 0.4986 * z, -0.9689 * x + 1.8758 * y + 0.0415 * z, 0.0557 * x - 0.204 * y + 1.057 * z];
+  const lin = [
+    3.2406 * x - 1.5372 * y - 0.4986 * z,
+    -0.9689 * x + 1.8758 * y + 0.0415 * z,
+    0.0557 * x - 0.204 * y + 1.057 * z,
+  ];
   return lin.every((v) => v >= -0.002 && v <= 1.002);
 }
 

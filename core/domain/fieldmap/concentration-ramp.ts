@@ -60,8 +60,11 @@ export interface ConcentrationScale {
 }
 
 export function createConcentrationScale({ maxPpm, log }: ConcentrationScaleOptions): ConcentrationScale {
-  if (!(Number.isFinite(maxPpm) && maxPpm > 0)) throw new RangeError(`maxPpm: must be a positive number of ppm, got ${maxPpm}`);
-  const s = log ? scaleSymlog().constant(1).domain([0, maxPpm]).range([0, 1]).clamp(true) : scaleLinear().domain([0, maxPpm]).range([0, 1]).clamp(true);
+  if (!(Number.isFinite(maxPpm) && maxPpm > 0))
+    throw new RangeError(`maxPpm: must be a positive number of ppm, got ${maxPpm}`);
+  const s = log
+    ? scaleSymlog().constant(1).domain([0, maxPpm]).range([0, 1]).clamp(true)
+    : scaleLinear().domain([0, maxPpm]).range([0, 1]).clamp(true);
   const index = (ppm: number) => Math.round(s(Math.max(0, ppm)) * (LUT_SIZE - 1));
   return {
     maxPpm,

@@ -20,15 +20,22 @@ const DELAY_PLAUSIBLE: readonly [number, number] = [1, 20];
 // above 10 ppm small leaks never alarm.
 const ALARM_HIGHEST = 10;
 
-export function detectorDiagnostics(d: DetectorSnapshot, used: { transportDelayS: number; timeConstantS: number }): AnalysisDiagnostic[] {
+export function detectorDiagnostics(
+  d: DetectorSnapshot,
+  used: { transportDelayS: number; timeConstantS: number },
+): AnalysisDiagnostic[] {
   const out: AnalysisDiagnostic[] = [];
   if (d.overdueMessage) out.push({ kind: "detector-overdue", message: d.overdueMessage });
   const problems: string[] = [];
   if (d.transportDelayS < DELAY_PLAUSIBLE[0] || d.transportDelayS > DELAY_PLAUSIBLE[1]) {
-    problems.push(`a transport delay of ${d.transportDelayS} s (hand detectors usually take ${DELAY_PLAUSIBLE[0]}–${DELAY_PLAUSIBLE[1]} s)`);
+    problems.push(
+      `a transport delay of ${d.transportDelayS} s (hand detectors usually take ${DELAY_PLAUSIBLE[0]}–${DELAY_PLAUSIBLE[1]} s)`,
+    );
   }
   if (d.timeConstantS > d.transportDelayS && d.transportDelayS > 0) {
-    problems.push(`a response time constant (${d.timeConstantS} s) longer than its transport delay (${d.transportDelayS} s)`);
+    problems.push(
+      `a response time constant (${d.timeConstantS} s) longer than its transport delay (${d.transportDelayS} s)`,
+    );
   }
   if (d.alarmPpm > ALARM_HIGHEST) problems.push(`an alarm level of ${d.alarmPpm} ppm, too high to hear small leaks`);
   if (problems.length > 0) {

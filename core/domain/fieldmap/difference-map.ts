@@ -23,7 +23,11 @@ export function cellAt(grid: FieldGridLike, x: number, y: number): number {
  * @param earlierToLater maps the earlier sweep's plan metres onto the later sweep's (the composed
  *   alignments of the versions in between; identity for the same plan version).
  */
-export function differenceMap(earlier: FieldGridLike, later: FieldGridLike, earlierToLater: Similarity): DifferenceGrid {
+export function differenceMap(
+  earlier: FieldGridLike,
+  later: FieldGridLike,
+  earlierToLater: Similarity,
+): DifferenceGrid {
   checkFieldGrid(earlier, "earlier");
   checkFieldGrid(later, "later");
   const back = invertSimilarity(earlierToLater);

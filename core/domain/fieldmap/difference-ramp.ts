@@ -27,7 +27,8 @@ export interface DifferenceScale {
 
 /** Symmetric log around zero so a 3 ppm change stays visible next to a 200 ppm one. */
 export function createDifferenceScale(maxAbsPpm: number): DifferenceScale {
-  if (!(Number.isFinite(maxAbsPpm) && maxAbsPpm > 0)) throw new RangeError(`maxAbsPpm: must be a positive number of ppm, got ${maxAbsPpm}`);
+  if (!(Number.isFinite(maxAbsPpm) && maxAbsPpm > 0))
+    throw new RangeError(`maxAbsPpm: must be a positive number of ppm, got ${maxAbsPpm}`);
   const s = scaleSymlog().constant(1).domain([-maxAbsPpm, maxAbsPpm]).range([0, 1]).clamp(true);
   const index = (d: number) => Math.round(s(d) * (LUT_SIZE - 1));
   return {

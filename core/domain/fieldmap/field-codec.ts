@@ -35,7 +35,8 @@ export function float32ToBytes(values: Float32Array): Uint8Array {
 }
 
 export function bytesToFloat32(bytes: Uint8Array): Float32Array {
-  if (bytes.length % 4 !== 0) throw new RangeError(`values: ${bytes.length} bytes is not a whole number of Float32 cells`);
+  if (bytes.length % 4 !== 0)
+    throw new RangeError(`values: ${bytes.length} bytes is not a whole number of Float32 cells`);
   const out = new Float32Array(bytes.length / 4);
   const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
   for (let i = 0; i < out.length; i++) out[i] = view.getFloat32(i * 4, true);
@@ -80,6 +81,7 @@ export function decodeField(e: EncodedGrid): FieldGridLike {
   const confidence = dequantiseConfidence(base64ToBytes(e.confidence));
   const cells = e.width * e.height;
   if (values.length !== cells) throw new RangeError(`field.values: expected ${cells} cells, got ${values.length}`);
-  if (confidence.length !== cells) throw new RangeError(`field.confidence: expected ${cells} cells, got ${confidence.length}`);
+  if (confidence.length !== cells)
+    throw new RangeError(`field.confidence: expected ${cells} cells, got ${confidence.length}`);
   return { width: e.width, height: e.height, cellSize: e.cellSize, values, confidence };
 }

@@ -16,8 +16,10 @@ export function checkFieldGrid(grid: FieldGridLike, name = "field"): void {
     throw new RangeError(`${name}: width and height must be positive whole numbers of cells, got ${width} × ${height}`);
   }
   if (!(cellSize > 0)) throw new RangeError(`${name}.cellSize: must be a positive number of metres, got ${cellSize}`);
-  if (values.length !== width * height) throw new RangeError(`${name}.values: expected ${width * height} cells, got ${values.length}`);
-  if (confidence.length !== width * height) throw new RangeError(`${name}.confidence: expected ${width * height} cells, got ${confidence.length}`);
+  if (values.length !== width * height)
+    throw new RangeError(`${name}.values: expected ${width * height} cells, got ${values.length}`);
+  if (confidence.length !== width * height)
+    throw new RangeError(`${name}.confidence: expected ${width * height} cells, got ${confidence.length}`);
 }
 
 /** Below this confidence a cell is unknown: drawn hatched, never as clean air. */

@@ -6,7 +6,13 @@ import type { FieldGridLike } from "./field-grid";
 import { fixtureLevel } from "./fixture-levels";
 import { HATCH_RGBA, renderFieldRgba } from "./render-field";
 
-function grid(width: number, height: number, cellSize: number, f: (i: number, j: number) => number, conf = 1): FieldGridLike {
+function grid(
+  width: number,
+  height: number,
+  cellSize: number,
+  f: (i: number, j: number) => number,
+  conf = 1,
+): FieldGridLike {
   const values = new Float32Array(width * height);
   const confidence = new Float32Array(width * height).fill(conf);
   for (let j = 0; j < height; j++) for (let i = 0; i < width; i++) values[j * width + i] = f(i, j);
@@ -32,8 +38,10 @@ describe("difference map", () => {
 
   it("follows the alignment: a spike at the earlier version's matched point lands on the later version's", () => {
     // two matched points: earlier (2, 2) and (8, 2) are later (3, 4) and (9, 4) — a pure 1 m / 2 m shift
-    const a1: [number, number] = [2, 2], a2: [number, number] = [8, 2];
-    const b1: [number, number] = [3, 4], b2: [number, number] = [9, 4];
+    const a1: [number, number] = [2, 2],
+      a2: [number, number] = [8, 2];
+    const b1: [number, number] = [3, 4],
+      b2: [number, number] = [9, 4];
     const t = similarityFromTwoPoints(a1, a2, b1, b2);
     // the alignment maps both matched points exactly (hand-checked: scale 1, rotation 0, offset (1, 2))
     expect(applySimilarity(t, a1)[0]).toBeCloseTo(b1[0], 12);
@@ -47,13 +55,23 @@ describe("difference map", () => {
     const hit = 16 * 48 + 12;
     expect(d.values[hit]).toBe(-100);
     let others = 0;
-    for (let k = 0; k < d.values.length; k++) if (k !== hit && d.values[k] !== 0 && !Number.isNaN(d.values[k])) others++;
+    for (let k = 0; k < d.values.length; k++)
+      if (k !== hit && d.values[k] !== 0 && !Number.isNaN(d.values[k])) others++;
     expect(others).toBe(0);
   });
 
   it("rotated and scaled versions still map the two matched points exactly", () => {
     const t = similarityFromTwoPoints([1, 1], [5, 3], [10, 2], [12, 10]);
-    for (const [a, b] of [[[1, 1], [10, 2]], [[5, 3], [12, 10]]] as const) {
+    for (const [a, b] of [
+      [
+        [1, 1],
+        [10, 2],
+      ],
+      [
+        [5, 3],
+        [12, 10],
+      ],
+    ] as const) {
       const m = applySimilarity(t, a);
       expect(m[0]).toBeCloseTo(b[0], 12);
       expect(m[1]).toBeCloseTo(b[1], 12);
@@ -99,13 +117,41 @@ describe("fixture levels", () => {
   it("takes peak and mean of known cells inside the outline or within the margin", () => {
     // cells of 1 m; case outline x 2..4, y 2..3; margin 0.6 m reaches the cells centred 0.5 m outside
     const g = grid(8, 6, 1, (i, j) => i * 10 + j);
-    const level = fixtureLevel(g, [[2, 2], [4, 2], [4, 3], [2, 3]], 0.6)!;
+    const level = fixtureLevel(
+      g,
+      [
+        [2, 2],
+        [4, 2],
+        [4, 3],
+        [2, 3],
+      ],
+      0.6,
+    )!;
     // centres inside or within 0.6 m: i ∈ {1,2,3,4}, j ∈ {1,2,3} but not the corners (distance 0.707)
-    const cells = [[2, 1], [3, 1], [1, 2], [2, 2], [3, 2], [4, 2], [2, 3], [3, 3]];
+    const cells = [
+      [2, 1],
+      [3, 1],
+      [1, 2],
+      [2, 2],
+      [3, 2],
+      [4, 2],
+      [2, 3],
+      [3, 3],
+    ];
     const vals = cells.map(([i, j]) => i * 10 + j);
     expect(level.cells).toBe(cells.length);
     expect(level.peakPpm).toBe(Math.max(...vals));
     expect(level.meanPpm).toBeCloseTo(vals.reduce((a, b) => a + b, 0) / vals.length, 5);
-    expect(fixtureLevel(grid(8, 6, 1, () => NaN), [[2, 2], [4, 2], [4, 3]], 0.5)).toBeNull();
+    expect(
+      fixtureLevel(
+        grid(8, 6, 1, () => NaN),
+        [
+          [2, 2],
+          [4, 2],
+          [4, 3],
+        ],
+        0.5,
+      ),
+    ).toBeNull();
   });
 });

@@ -17,9 +17,15 @@ export const FIXTURE_MARGIN_M = 0.75;
 
 export function fixtureLevel(grid: FieldGridLike, polygon: Polygon, marginM = FIXTURE_MARGIN_M): FixtureLevel | null {
   if (polygon.length < 3) throw new RangeError(`polygon: needs at least 3 vertices, got ${polygon.length}`);
-  let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
+  let minX = Infinity,
+    minY = Infinity,
+    maxX = -Infinity,
+    maxY = -Infinity;
   for (const [x, y] of polygon) {
-    minX = Math.min(minX, x); minY = Math.min(minY, y); maxX = Math.max(maxX, x); maxY = Math.max(maxY, y);
+    minX = Math.min(minX, x);
+    minY = Math.min(minY, y);
+    maxX = Math.max(maxX, x);
+    maxY = Math.max(maxY, y);
   }
   const s = grid.cellSize;
   const i0 = Math.max(0, Math.floor((minX - marginM) / s));

@@ -16,7 +16,16 @@ describe("alignment between plan versions", () => {
   it("maps the two matched points exactly, in both directions", () => {
     const t = alignmentBetween(plans, "v1", "v2");
     // the two matched points of the stored alignment (hand-chosen above)
-    for (const [a, b] of [[[2, 3], [10, 1]], [[20, 3], [10, 1 + 18 * 1.05]]] as const) {
+    for (const [a, b] of [
+      [
+        [2, 3],
+        [10, 1],
+      ],
+      [
+        [20, 3],
+        [10, 1 + 18 * 1.05],
+      ],
+    ] as const) {
       const m = applySimilarity(t, a);
       expect(m[0]).toBeCloseTo(b[0], 10);
       expect(m[1]).toBeCloseTo(b[1], 10);
@@ -39,6 +48,8 @@ describe("alignment between plan versions", () => {
 
   it("is the identity on one version and refuses plans of different stores", () => {
     expect(alignmentBetween(plans, "v2", "v2")).toEqual({ scale: 1, rotation: 0, tx: 0, ty: 0 });
-    expect(() => alignmentBetween([...plans, { id: "x", previousPlanId: null, alignment: null }], "v1", "x")).toThrow(/not versions/);
+    expect(() => alignmentBetween([...plans, { id: "x", previousPlanId: null, alignment: null }], "v1", "x")).toThrow(
+      /not versions/,
+    );
   });
 });

@@ -19,7 +19,11 @@ export interface RenderOptions {
 
 export const HATCH_RGBA = [84, 88, 96, 120] as const;
 
-export function renderFieldRgba(grid: FieldGridLike, options: RenderOptions, out?: Uint8ClampedArray): Uint8ClampedArray {
+export function renderFieldRgba(
+  grid: FieldGridLike,
+  options: RenderOptions,
+  out?: Uint8ClampedArray,
+): Uint8ClampedArray {
   checkFieldGrid(grid);
   const { width, height, values, confidence } = grid;
   const { lut, index } = options;
@@ -27,7 +31,8 @@ export function renderFieldRgba(grid: FieldGridLike, options: RenderOptions, out
   const opacity = options.opacity ?? 200;
   const hatch = options.hatch ?? 6;
   const pixels = out ?? new Uint8ClampedArray(width * height * 4);
-  if (pixels.length !== width * height * 4) throw new RangeError(`out: expected ${width * height * 4} bytes, got ${pixels.length}`);
+  if (pixels.length !== width * height * 4)
+    throw new RangeError(`out: expected ${width * height * 4} bytes, got ${pixels.length}`);
   const span = FULL_CONFIDENCE - UNKNOWN_BELOW;
   for (let y = 0; y < height; y++) {
     const row = y * width;

@@ -29,7 +29,9 @@ export function sweepLocatorInput(
   rows: readonly SweepReadingRow[],
   instrument: InstrumentFigures,
 ): { input: LocatorInputRaw; readingIds: string[] } {
-  const sorted = [...rows].sort((a, b) => a.takenAt.getTime() - b.takenAt.getTime() || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+  const sorted = [...rows].sort(
+    (a, b) => a.takenAt.getTime() - b.takenAt.getTime() || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0),
+  );
   const t0 = Math.min(startedAt.getTime(), sorted[0]?.takenAt.getTime() ?? startedAt.getTime());
   return {
     readingIds: sorted.map((r) => r.id),

@@ -7,9 +7,23 @@ import type { Permission } from "../roles";
  * (40 CFR 82.152 "verification test" definitions [S:R8]; the loop back is our reading).
  */
 export type FindingStatus = "suspected" | "confirmed" | "repaired" | "verified" | "closed" | "dismissed";
-export type FindingEventKind = "found" | "confirmed" | "repaired" | "initial-test" | "follow-up-test" | "closed" | "dismissed";
+export type FindingEventKind =
+  | "found"
+  | "confirmed"
+  | "repaired"
+  | "initial-test"
+  | "follow-up-test"
+  | "closed"
+  | "dismissed";
 export type FindingAction = "confirm" | "repair" | "initial-test" | "follow-up-test" | "close" | "dismiss";
-export const FINDING_ACTIONS: readonly FindingAction[] = ["confirm", "repair", "initial-test", "follow-up-test", "close", "dismiss"];
+export const FINDING_ACTIONS: readonly FindingAction[] = [
+  "confirm",
+  "repair",
+  "initial-test",
+  "follow-up-test",
+  "close",
+  "dismiss",
+];
 
 export interface LifecycleEvent {
   kind: FindingEventKind;
@@ -51,36 +65,46 @@ export function currentStatus(events: readonly LifecycleEvent[]): FindingStatus 
   return events.at(-1)?.status ?? "suspected";
 }
 
-export type Transition =
-  | { ok: true; kind: FindingEventKind; status: FindingStatus }
-  | { ok: false; message: string };
+export type Transition = { ok: true; kind: FindingEventKind; status: FindingStatus } | { ok: false; message: string };
 
 /**
  * The event an action adds and the status it leads to, or why it is not allowed now. The
  * message is shown as is (409), so it says what state the finding is in and what comes next.
  */
-export function transition(events: readonly LifecycleEvent[], action: FindingAction, result?: "passed" | "failed"): Transition {
+export function transition(
+  events: readonly LifecycleEvent[],
+  action: FindingAction,
+  result?: "passed" | "failed",
+): Transition {
   const status = currentStatus(events);
   const refuse = (why: string): Transition => ({ ok: false, message: `This finding is ${status}: ${why}` });
   switch (action) {
     case "confirm":
-      return status === "suspected" ? { ok: true, kind: "confirmed", status: "confirmed" } : refuse("only a suspected finding can be confirmed.");
+      return status === "suspected"
+        ? { ok: true, kind: "confirmed", status: "confirmed" }
+        : refuse("only a suspected finding can be confirmed.");
     case "repair":
-      return status === "confirmed" ? { ok: true, kind: "repaired", status: "repaired" } : refuse("only a confirmed leak can be repaired (confirm it first).");
+      return status === "confirmed"
+        ? { ok: true, kind: "repaired", status: "repaired" }
+        : refuse("only a confirmed leak can be repaired (confirm it first).");
     case "initial-test": {
       if (status !== "repaired") return refuse("the initial verification test follows a repair.");
-      if (initialTestPassedSinceRepair(events)) return refuse("the initial verification test has passed; record the follow-up test next.");
+      if (initialTestPassedSinceRepair(events))
+        return refuse("the initial verification test has passed; record the follow-up test next.");
       if (!result) return { ok: false, message: "Give the test result: passed or failed." };
       return { ok: true, kind: "initial-test", status: result === "passed" ? "repaired" : "confirmed" };
     }
     case "follow-up-test": {
-      if (status !== "repaired") return refuse("the follow-up verification test follows a repair and a passed initial test.");
+      if (status !== "repaired")
+        return refuse("the follow-up verification test follows a repair and a passed initial test.");
       if (!initialTestPassedSinceRepair(events)) return refuse("record a passed initial verification test first.");
       if (!result) return { ok: false, message: "Give the test result: passed or failed." };
       return { ok: true, kind: "follow-up-test", status: result === "passed" ? "verified" : "confirmed" };
     }
     case "close":
-      return status === "verified" ? { ok: true, kind: "closed", status: "closed" } : refuse("only a verified repair can be closed (both verification tests passed).");
+      return status === "verified"
+        ? { ok: true, kind: "closed", status: "closed" }
+        : refuse("only a verified repair can be closed (both verification tests passed).");
     case "dismiss":
       return status === "suspected" || status === "confirmed"
         ? { ok: true, kind: "dismissed", status: "dismissed" }

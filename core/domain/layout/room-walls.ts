@@ -19,11 +19,17 @@ function wallPieces(length: number, gap: RoomDoorGap | null): [number, number][]
   if (!gap) return [[0, length]];
   const from = Math.max(0, Math.min(length, gap.offset));
   const to = Math.max(0, Math.min(length, gap.offset + gap.width));
-  return ([[0, from], [to, length]] as [number, number][]).filter(([s, e]) => e - s > 1e-9);
+  return (
+    [
+      [0, from],
+      [to, length],
+    ] as [number, number][]
+  ).filter(([s, e]) => e - s > 1e-9);
 }
 
 export function roomWalls(polygon: readonly Vec[], door: RoomDoorGap | null, thickness: number): [number, number][][] {
-  if (!(Number.isFinite(thickness) && thickness > 0)) throw new RangeError(`wall thickness must be more than 0 m, got ${thickness}`);
+  if (!(Number.isFinite(thickness) && thickness > 0))
+    throw new RangeError(`wall thickness must be more than 0 m, got ${thickness}`);
   const half = thickness / 2;
   const walls: [number, number][][] = [];
   for (let i = 0, n = polygon.length; i < n; i++) {

@@ -50,11 +50,23 @@ const copy = (polygon: readonly Vertex[]): [number, number][] => polygon.map(([x
  * this plan. Walls of walk-ins and machine rooms become obstacles `<fixture id>:wall:<k>`,
  * clipped to the plan; a room whose door is not yet marked is sealed.
  */
-export function toLocatorPlan(plan: PlanBounds, fixtures: readonly Fixture[], conditions: SweepConditions, wallThickness = ROOM_WALL_THICKNESS_M): LocatorPlan {
+export function toLocatorPlan(
+  plan: PlanBounds,
+  fixtures: readonly Fixture[],
+  conditions: SweepConditions,
+  wallThickness = ROOM_WALL_THICKNESS_M,
+): LocatorPlan {
   if (!(Number.isFinite(plan.width) && plan.width > 0 && Number.isFinite(plan.height) && plan.height > 0)) {
     throw new RangeError("plan width and height must be more than 0 m");
   }
-  const out: LocatorPlan = { width: plan.width, height: plan.height, obstacles: [], fixtures: [], riskPoints: [], backgroundZones: [] };
+  const out: LocatorPlan = {
+    width: plan.width,
+    height: plan.height,
+    obstacles: [],
+    fixtures: [],
+    riskPoints: [],
+    backgroundZones: [],
+  };
   for (const f of fixtures) {
     if ("point" in f) {
       const kind = RISK_KIND[f.kind];
@@ -64,10 +76,21 @@ export function toLocatorPlan(plan: PlanBounds, fixtures: readonly Fixture[], co
     const family = FIXTURE_FAMILY[f.kind];
     if (family === "solid-body") out.obstacles.push({ id: f.id, polygon: copy(f.polygon) });
     if (f.kind === "benign-zone") {
-      out.backgroundZones.push({ id: f.id, polygon: copy(f.polygon), note: f.note, ...(f.typicalPpm === null ? {} : { ppm: f.typicalPpm }) });
+      out.backgroundZones.push({
+        id: f.id,
+        polygon: copy(f.polygon),
+        note: f.note,
+        ...(f.typicalPpm === null ? {} : { ppm: f.typicalPpm }),
+      });
     }
     const airKind = AIR_KIND[f.kind];
-    if (airKind) out.fixtures.push({ id: f.id, kind: airKind, polygon: copy(f.polygon), fans: f.hasFans && conditions.fansRunning });
+    if (airKind)
+      out.fixtures.push({
+        id: f.id,
+        kind: airKind,
+        polygon: copy(f.polygon),
+        fans: f.hasFans && conditions.fansRunning,
+      });
     if (isRoomKind(f.kind) && "door" in f) {
       roomWalls(f.polygon, f.door, wallThickness).forEach((wall, k) => {
         const clipped = clipPolygonToRect(wall, plan.width, plan.height);

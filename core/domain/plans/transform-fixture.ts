@@ -8,7 +8,9 @@ import type { Fixture } from "../../contracts/fixtures";
  */
 export function transformFixture<F extends Fixture>(f: F, t: Similarity): F {
   if (![t.scale, t.rotation, t.tx, t.ty].every(Number.isFinite) || !(t.scale > 0)) {
-    throw new RangeError(`a fixture transform needs a finite scale above 0 and a finite rotation and offset, got ${JSON.stringify(t)}`);
+    throw new RangeError(
+      `a fixture transform needs a finite scale above 0 and a finite rotation and offset, got ${JSON.stringify(t)}`,
+    );
   }
   if ("point" in f) {
     const [x, y] = applySimilarity(t, [f.point.x, f.point.y]);

@@ -10,7 +10,11 @@ const byKey = new Map(REFRIGERANTS.map((r) => [keyOf(r.id), r]));
 
 /** "r410a", "R 410A", "410A" and "R-410A" are the same refrigerant; "(E)" is kept significant. */
 function keyOf(text: string): string {
-  return text.trim().toUpperCase().replace(/^R[\s-]*/, "").replace(/[\s-]/g, "");
+  return text
+    .trim()
+    .toUpperCase()
+    .replace(/^R[\s-]*/, "")
+    .replace(/[\s-]/g, "");
 }
 
 /** Looks a refrigerant up by its R-number, forgiving case, spaces and the hyphen. */

@@ -8,8 +8,10 @@ describe("canDetect", () => {
   it("knows heated-diode sensors are blind to R-290, R-600a, R-744 and R-717", () => {
     // standards.md §6 [M]: heated-diode/heated-ceramic sensors respond to halogen compounds and are
     // blind to R-290, R-600a, R-744 and R-717.
-    for (const id of ["R-290", "R-600a", "R-744", "R-717"]) expect(canDetect("heated-diode", r(id)).answer, id).toBe("no");
-    for (const id of ["R-22", "R-134a", "R-404A", "R-410A", "R-448A"]) expect(canDetect("heated-diode", r(id)).answer, id).toBe("yes");
+    for (const id of ["R-290", "R-600a", "R-744", "R-717"])
+      expect(canDetect("heated-diode", r(id)).answer, id).toBe("no");
+    for (const id of ["R-22", "R-134a", "R-404A", "R-410A", "R-448A"])
+      expect(canDetect("heated-diode", r(id)).answer, id).toBe("yes");
     expect(canDetect("heated-diode", r("R-32")).reason).toMatch(/weakly/);
   });
   it("judges blends by the share of mass the sensor sees", () => {

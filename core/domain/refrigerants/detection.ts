@@ -19,15 +19,22 @@ function pureVerdict(principle: SensingPrinciple, r: PureRefrigerant, band?: Inf
   if (principle === "heated-diode") {
     if (isHalogenated(r.formula)) {
       const weak = r.id === "R-32" ? " It reads R-32 more weakly than HCFCs; keep the probe slow and close." : "";
-      return { answer: "yes", reason: `${r.id} is halogenated, and heated-diode sensors respond to halogen compounds (from memory).${weak}` };
+      return {
+        answer: "yes",
+        reason: `${r.id} is halogenated, and heated-diode sensors respond to halogen compounds (from memory).${weak}`,
+      };
     }
-    return { answer: "no", reason: `Heated-diode sensors are blind to ${r.id}, which has no fluorine or chlorine (from memory).` };
+    return {
+      answer: "no",
+      reason: `Heated-diode sensors are blind to ${r.id}, which has no fluorine or chlorine (from memory).`,
+    };
   }
   if (principle === "infrared") {
     if (!band) {
       return {
         answer: "unknown",
-        reason: "Infrared sensors are band-specific (C–F ≈ 8–10 µm for HFCs/HFOs, C–H ≈ 3.3 µm for hydrocarbons, 4.26 µm for CO2); record the detector's band to check.",
+        reason:
+          "Infrared sensors are band-specific (C–F ≈ 8–10 µm for HFCs/HFOs, C–H ≈ 3.3 µm for hydrocarbons, 4.26 µm for CO2); record the detector's band to check.",
       };
     }
     if (band === "C-F") {
@@ -37,11 +44,18 @@ function pureVerdict(principle: SensingPrinciple, r: PureRefrigerant, band?: Inf
     }
     if (band === "CO2") {
       return r.id === "R-744"
-        ? { answer: "yes", reason: "CO2 absorbs at 4.26 µm; the ~420 ppm background masks small R-744 leaks (from memory)." }
+        ? {
+            answer: "yes",
+            reason: "CO2 absorbs at 4.26 µm; the ~420 ppm background masks small R-744 leaks (from memory).",
+          }
         : { answer: "no", reason: `A CO2-band instrument does not see ${r.id}.` };
     }
-    if (r.kind === "HC") return { answer: "yes", reason: `${r.id} is a hydrocarbon; C–H band instruments are made for these.` };
-    return { answer: "unknown", reason: `Whether a C–H band instrument reads ${r.id} depends on the instrument; check the maker's list.` };
+    if (r.kind === "HC")
+      return { answer: "yes", reason: `${r.id} is a hydrocarbon; C–H band instruments are made for these.` };
+    return {
+      answer: "unknown",
+      reason: `Whether a C–H band instrument reads ${r.id} depends on the instrument; check the maker's list.`,
+    };
   }
   return { answer: "unknown", reason: "For this sensing principle, check the maker's list of refrigerants." };
 }
@@ -50,7 +64,11 @@ function pureVerdict(principle: SensingPrinciple, r: PureRefrigerant, band?: Inf
  * Can a detector of this principle see this refrigerant? Feeds the Walk screen's mismatch warning
  * (a heated-diode instrument on an R-290 case would read nothing and prove nothing).
  */
-export function canDetect(principle: SensingPrinciple, r: Refrigerant, options: { band?: InfraredBand } = {}): DetectionVerdict {
+export function canDetect(
+  principle: SensingPrinciple,
+  r: Refrigerant,
+  options: { band?: InfraredBand } = {},
+): DetectionVerdict {
   if (r.kind !== "blend") return pureVerdict(principle, r, options.band);
   const verdicts = r.components.map((c) => ({ c, v: pureVerdict(principle, getPure(c.id), options.band) }));
   if (verdicts.some(({ v }) => v.answer === "unknown")) {
@@ -63,5 +81,8 @@ export function canDetect(principle: SensingPrinciple, r: Refrigerant, options: 
   if (share >= BLEND_VISIBLE_SHARE) {
     return { answer: "yes", reason: `It sees ${seen}, ${share.toFixed(1).replace(/\.0$/, "")}% of ${r.id} by mass.` };
   }
-  return { answer: "unknown", reason: `It sees only ${seen}, ${share}% of ${r.id} by mass; a leak may read far lower than the blend's concentration.` };
+  return {
+    answer: "unknown",
+    reason: `It sees only ${seen}, ${share}% of ${r.id} by mass; a leak may read far lower than the blend's concentration.`,
+  };
 }

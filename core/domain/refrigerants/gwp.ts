@@ -39,7 +39,10 @@ function pureGwp(r: PureRefrigerant, bases: readonly GwpBasis[]) {
  */
 export function gwpOf(r: Refrigerant, bases: readonly GwpBasis[]): GwpResult {
   if (bases.length === 0) throw new DomainInputError("bases", "list at least one GWP basis");
-  const parts = r.kind === "blend" ? r.components.map((c) => ({ pure: getPure(c.id), massPercent: c.massPercent })) : [{ pure: r, massPercent: 100 }];
+  const parts =
+    r.kind === "blend"
+      ? r.components.map((c) => ({ pure: getPure(c.id), massPercent: c.massPercent }))
+      : [{ pure: r, massPercent: 100 }];
   const terms: GwpTerm[] = [];
   const missing: string[] = [];
   for (const { pure, massPercent } of parts) {

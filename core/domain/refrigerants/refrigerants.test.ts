@@ -14,8 +14,29 @@ const gwp = (id: string, bases: GwpBasis[]) => {
 
 describe("catalogue", () => {
   it("holds every refrigerant the product needs", () => {
-    const ids = ["R-22", "R-32", "R-125", "R-134a", "R-143a", "R-1234yf", "R-1234ze(E)", "R-744", "R-290", "R-600a",
-      "R-717", "R-404A", "R-507A", "R-407A", "R-407C", "R-407F", "R-410A", "R-448A", "R-449A", "R-454B", "R-455A"];
+    const ids = [
+      "R-22",
+      "R-32",
+      "R-125",
+      "R-134a",
+      "R-143a",
+      "R-1234yf",
+      "R-1234ze(E)",
+      "R-744",
+      "R-290",
+      "R-600a",
+      "R-717",
+      "R-404A",
+      "R-507A",
+      "R-407A",
+      "R-407C",
+      "R-407F",
+      "R-410A",
+      "R-448A",
+      "R-449A",
+      "R-454B",
+      "R-455A",
+    ];
     for (const id of ids) expect(findRefrigerant(id)?.id).toBe(id);
     expect(new Set(REFRIGERANTS.map((r) => r.id)).size).toBe(REFRIGERANTS.length);
   });
@@ -23,7 +44,9 @@ describe("catalogue", () => {
     expect(findRefrigerant("r410a")?.id).toBe("R-410A");
     expect(findRefrigerant("R 404A")?.id).toBe("R-404A");
     expect(findRefrigerant("1234ze(e)")?.id).toBe("R-1234ze(E)");
-    expect(() => getRefrigerant("R-999", "system.refrigerant")).toThrow(/^system.refrigerant: unknown refrigerant "R-999"/);
+    expect(() => getRefrigerant("R-999", "system.refrigerant")).toThrow(
+      /^system.refrigerant: unknown refrigerant "R-999"/,
+    );
   });
   it("has blend compositions that add up to 100 % of known components", () => {
     // ASHRAE 34-2019 compositions are nominal mass-% summing to 100 (standards.md §3 [S:G3]).
@@ -38,7 +61,8 @@ describe("catalogue", () => {
     // 40 CFR 82 subpart F covers ODS (CFC/HCFC) only since 10 Apr 2020 (standards.md §1 [S:R1,R2]).
     expect(isOzoneDepleting(getRefrigerant("R-22"))).toBe(true);
     expect(getRefrigerant("R-22").kind).toBe("HCFC");
-    for (const id of ["R-404A", "R-410A", "R-448A", "R-744", "R-717", "R-290"]) expect(isOzoneDepleting(getRefrigerant(id))).toBe(false);
+    for (const id of ["R-404A", "R-410A", "R-448A", "R-744", "R-717", "R-290"])
+      expect(isOzoneDepleting(getRefrigerant(id))).toBe(false);
   });
   it("carries the IMC Table 1103.1 safety classes", () => {
     // IMC Table 1103.1 [S:S1], R-134a are A1.
@@ -75,10 +99,30 @@ describe("blend GWP from components (mass-weighted, round half up)", () => {
   });
   it("reproduces the AR5 and AR6 blend columns", () => {
     // standards.md §3 blend table, computed there from IPCC values [D] (HFC values [S:G1], HFO [M]).
-    const ar5: Record<string, number> = { "R-404A": 3943, "R-507A": 3985, "R-407A": 1923, "R-407C": 1624, "R-407F": 1674,
-      "R-410A": 1924, "R-448A": 1273, "R-449A": 1282, "R-454B": 467, "R-455A": 146 };
-    const ar6: Record<string, number> = { "R-404A": 4728, "R-507A": 4775, "R-407A": 2262, "R-407C": 1908, "R-407F": 1965,
-      "R-410A": 2256, "R-448A": 1494, "R-449A": 1504, "R-454B": 531, "R-455A": 166 };
+    const ar5: Record<string, number> = {
+      "R-404A": 3943,
+      "R-507A": 3985,
+      "R-407A": 1923,
+      "R-407C": 1624,
+      "R-407F": 1674,
+      "R-410A": 1924,
+      "R-448A": 1273,
+      "R-449A": 1282,
+      "R-454B": 467,
+      "R-455A": 146,
+    };
+    const ar6: Record<string, number> = {
+      "R-404A": 4728,
+      "R-507A": 4775,
+      "R-407A": 2262,
+      "R-407C": 1908,
+      "R-407F": 1965,
+      "R-410A": 2256,
+      "R-448A": 1494,
+      "R-449A": 1504,
+      "R-454B": 531,
+      "R-455A": 166,
+    };
     // R-449A AR6: standards.md §3 prints 1505, but its own inputs give 0.243×771 + 0.247×3740 +
     // 0.253×0.501 + 0.257×1530 = 1504.47 → 1504 (hand calculation); the table entry is inconsistent.
     for (const [id, v] of Object.entries(ar5)) expect(gwp(id, ["AR5"]), id).toBe(v);
@@ -97,10 +141,21 @@ describe("blend GWP from components (mass-weighted, round half up)", () => {
 describe("molar mass", () => {
   it("computes blends as 1/Σ(wᵢ/Mᵢ)", () => {
     // standards.md §3 molar-mass column [D].
-    const published: Record<string, number> = { "R-404A": 97.6, "R-507A": 98.86, "R-407A": 90.11, "R-407C": 86.2,
-      "R-407F": 82.06, "R-410A": 72.58, "R-448A": 86.28, "R-449A": 87.21, "R-454B": 62.61, "R-455A": 87.45 };
+    const published: Record<string, number> = {
+      "R-404A": 97.6,
+      "R-507A": 98.86,
+      "R-407A": 90.11,
+      "R-407C": 86.2,
+      "R-407F": 82.06,
+      "R-410A": 72.58,
+      "R-448A": 86.28,
+      "R-449A": 87.21,
+      "R-454B": 62.61,
+      "R-455A": 87.45,
+    };
     // Within 0.01: R-407F computes to 82.0546, which the table double-rounds (82.055 → 82.06).
-    for (const [id, m] of Object.entries(published)) expect(Math.abs(molarMassOf(getRefrigerant(id)) - m), id).toBeLessThan(0.01);
+    for (const [id, m] of Object.entries(published))
+      expect(Math.abs(molarMassOf(getRefrigerant(id)) - m), id).toBeLessThan(0.01);
     expect(molarMassOf(getRefrigerant("R-407F"))).toBeCloseTo(82.0546, 4); // hand calculation, 1/Σ(wᵢ/Mᵢ)
   });
   it("agrees with the formula and IUPAC atomic weights", () => {

@@ -23,12 +23,34 @@ export interface CsvReading {
 
 function localTime(d: Date, timeZone: string): string {
   // sv-SE gives an ISO-like "2026-03-04 14:05:09"
-  return new Intl.DateTimeFormat("sv-SE", { timeZone, year: "numeric", month: "2-digit", day: "2-digit", hour: "2-digit", minute: "2-digit", second: "2-digit", hour12: false }).format(d);
+  return new Intl.DateTimeFormat("sv-SE", {
+    timeZone,
+    year: "numeric",
+    month: "2-digit",
+    day: "2-digit",
+    hour: "2-digit",
+    minute: "2-digit",
+    second: "2-digit",
+    hour12: false,
+  }).format(d);
 }
 
 export function readingsCsvColumns(unit: LengthPreference): string[] {
   const u = unit === "m" ? "m" : "ft";
-  return ["reading_id", "local_time", "seconds_from_start", `raw_x_${u}`, `raw_y_${u}`, `corrected_x_${u}`, `corrected_y_${u}`, "ppm", "at_least", "sample_point", "flags", "note"];
+  return [
+    "reading_id",
+    "local_time",
+    "seconds_from_start",
+    `raw_x_${u}`,
+    `raw_y_${u}`,
+    `corrected_x_${u}`,
+    `corrected_y_${u}`,
+    "ppm",
+    "at_least",
+    "sample_point",
+    "flags",
+    "note",
+  ];
 }
 
 export function readingsCsv(rows: readonly CsvReading[], unit: LengthPreference, timeZone: string): string {

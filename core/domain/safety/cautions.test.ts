@@ -23,8 +23,11 @@ describe("cautionsFor", () => {
     expect(ids(nh3)).toContain("toxic-ammonia");
     // Ammonia is lighter than air (0.59, standards.md §4 [D]): the oxygen caution says so.
     expect(nh3.find((c) => c.id === "oxygen-displacement")!.text).toMatch(/ceiling/);
-    expect(cautionsFor({ refrigerant: getRefrigerant("R-404A"), place: "walk-in" }).find((c) => c.id === "oxygen-displacement")!.text)
-      .toMatch(/this walk-in a large leak fills from the floor up/);
+    expect(
+      cautionsFor({ refrigerant: getRefrigerant("R-404A"), place: "walk-in" }).find(
+        (c) => c.id === "oxygen-displacement",
+      )!.text,
+    ).toMatch(/this walk-in a large leak fills from the floor up/);
   });
   it("always ends with nitrogen testing, certification and the codes", () => {
     // standards.md §8: nitrogen [S:R7], EPA 608 [S:D3b,R9], codes disclaimer.

@@ -28,29 +28,31 @@ export interface Caution {
 const FLAMMABLE: Caution = {
   id: "flammable",
   level: "warning",
-  text:
-    "This refrigerant is flammable. Remove ignition sources before you search or open the system, and use an instrument rated for flammable refrigerants. Hot surfaces and flames can also break HFCs down into hydrogen fluoride.",
+  text: "This refrigerant is flammable. Remove ignition sources before you search or open the system, and use an instrument rated for flammable refrigerants. Hot surfaces and flames can also break HFCs down into hydrogen fluoride.",
   source: "[S:D2] EN 14624 / EN 50676 scopes; HF formation [M]",
 };
 
 const HIGH_PRESSURE_CO2: Caution = {
   id: "high-pressure-co2",
   level: "warning",
-  text:
-    "R-744 runs at very high pressure: standstill and high-side pressures often exceed 120 bar design, far above other systems. Use tools and hoses rated for CO2, and expect venting liquid to form dry ice, which can block a line and then release suddenly.",
+  text: "R-744 runs at very high pressure: standstill and high-side pressures often exceed 120 bar design, far above other systems. Use tools and hoses rated for CO2, and expect venting liquid to form dry ice, which can block a line and then release suddenly.",
   source: "[M] standards.md §8 (critical point 31.0 °C / 73.8 bar)",
 };
 
 const TOXIC_AMMONIA: Caution = {
   id: "toxic-ammonia",
   level: "warning",
-  text:
-    "Ammonia (R-717) is toxic and mildly flammable, and it rises: a leak collects near the ceiling, not the floor. Wear the protection your procedure requires and leave if you smell it strongly.",
+  text: "Ammonia (R-717) is toxic and mildly flammable, and it rises: a leak collects near the ceiling, not the floor. Wear the protection your procedure requires and leave if you smell it strongly.",
   source: "[M] safety class B2L; rises: density 0.59 × air [D] standards.md §4, §8",
 };
 
 function oxygenCaution(r: Refrigerant | undefined, place: CautionPlace | undefined): Caution {
-  const where = place === "walk-in" ? "this walk-in" : place === "machine-room" ? "this machine room" : "closed rooms such as walk-ins and machine rooms";
+  const where =
+    place === "walk-in"
+      ? "this walk-in"
+      : place === "machine-room"
+        ? "this machine room"
+        : "closed rooms such as walk-ins and machine rooms";
   const rises = r !== undefined && densityRelativeToAir(r) < 1;
   const layer = rises ? "collects near the ceiling" : "fills from the floor up";
   return {
@@ -71,16 +73,14 @@ const PRESSURE_TEST: Caution = {
 const CERTIFIED: Caution = {
   id: "certified-technicians",
   level: "notice",
-  text:
-    "Only certified technicians attach gauges or add or remove refrigerant (in the US, EPA Section 608 Type I, II, III or Universal, by type of equipment).",
+  text: "Only certified technicians attach gauges or add or remove refrigerant (in the US, EPA Section 608 Type I, II, III or Universal, by type of equipment).",
   source: "[S:D3b,R9]",
 };
 
 const CODES: Caution = {
   id: "codes-govern",
   level: "notice",
-  text:
-    "These notes do not replace the rules that apply where you work: ASHRAE 15, IMC chapter 11, EN 378, ISO 5149, CSA B52, local codes and licensed judgement govern.",
+  text: "These notes do not replace the rules that apply where you work: ASHRAE 15, IMC chapter 11, EN 378, ISO 5149, CSA B52, local codes and licensed judgement govern.",
   source: "standards.md §8 disclaimer",
 };
 
@@ -98,7 +98,10 @@ export function cautionsFor(options: { refrigerant?: Refrigerant; place?: Cautio
   const list: Caution[] = [];
   if (r && r.id === "R-717") list.push(TOXIC_AMMONIA);
   else if (r && isFlammableClass(r.safetyClass.value)) list.push(FLAMMABLE);
-  if (r && (r.id === "R-744" || (r.kind === "blend" && r.components.some((c) => c.id === "R-744" && c.massPercent >= 50)))) {
+  if (
+    r &&
+    (r.id === "R-744" || (r.kind === "blend" && r.components.some((c) => c.id === "R-744" && c.massPercent >= 50)))
+  ) {
     list.push(HIGH_PRESSURE_CO2);
   }
   if (place !== "sales-floor") list.push(oxygenCaution(r, place));

@@ -21,11 +21,16 @@ const EDGE_TOLERANCE_M = 1e-6;
  * compared with the sweep's start, taken on the same device clock, so a clock that is off by
  * hours does not matter; only a time far from our clock too (a day) is refused.
  */
-export function readingProblems(r: { x: number; y: number; takenAtMs: number }, c: ReadingContext): Record<string, string> {
+export function readingProblems(
+  r: { x: number; y: number; takenAtMs: number },
+  c: ReadingContext,
+): Record<string, string> {
   const problems: Record<string, string> = {};
   const where = `the plan (0–${round(c.widthM)} m × 0–${round(c.heightM)} m)`;
-  if (r.x < -EDGE_TOLERANCE_M || r.x > c.widthM + EDGE_TOLERANCE_M) problems.x = `${round(r.x)} m lies outside ${where}`;
-  if (r.y < -EDGE_TOLERANCE_M || r.y > c.heightM + EDGE_TOLERANCE_M) problems.y = `${round(r.y)} m lies outside ${where}`;
+  if (r.x < -EDGE_TOLERANCE_M || r.x > c.widthM + EDGE_TOLERANCE_M)
+    problems.x = `${round(r.x)} m lies outside ${where}`;
+  if (r.y < -EDGE_TOLERANCE_M || r.y > c.heightM + EDGE_TOLERANCE_M)
+    problems.y = `${round(r.y)} m lies outside ${where}`;
   if (r.takenAtMs < c.startedAtMs - READING_BEFORE_START_TOLERANCE_MS) {
     problems.takenAt = `is ${minutes(c.startedAtMs - r.takenAtMs)} before the sweep started`;
   } else if (r.takenAtMs > c.startedAtMs + READING_AFTER_START_MAX_MS) {

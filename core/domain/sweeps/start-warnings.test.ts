@@ -12,15 +12,23 @@ describe("warnings when a sweep starts", () => {
   it("names each hunted refrigerant a heated-diode detector cannot see", () => {
     // Heated-diode sensors respond to halogen compounds; have none (standards.md §6).
     const w = startWarnings(diode, systems);
-    expect(w.map((x) => [x.code, x.systemId])).toEqual([["detector-blind", "b"], ["detector-blind", "c"]]);
+    expect(w.map((x) => [x.code, x.systemId])).toEqual([
+      ["detector-blind", "b"],
+      ["detector-blind", "c"],
+    ]);
     expect(w[1].message).toMatch(/^Diode sniffer cannot see R-290 on Island/);
   });
 
   it("says an infrared detector of unknown band may not see a refrigerant, and flags an overdue check", () => {
-    const w = startWarnings({ ...diode, principle: "infrared", overdue: true, checkDueOn: "2026-10-01" }, systems.slice(0, 1));
+    const w = startWarnings(
+      { ...diode, principle: "infrared", overdue: true, checkDueOn: "2026-10-01" },
+      systems.slice(0, 1),
+    );
     expect(w.map((x) => x.code)).toEqual(["detector-overdue", "detector-unsure"]);
     expect(w[0].message).toMatch(/due for calibration \/ bump check on 2026-10-01/);
-    expect(startWarnings({ ...diode, overdue: true, checkDueOn: null }, [])[0].message).toMatch(/no calibration \/ bump check on record/);
+    expect(startWarnings({ ...diode, overdue: true, checkDueOn: null }, [])[0].message).toMatch(
+      /no calibration \/ bump check on record/,
+    );
   });
 
   it("stays quiet when the detector sees every hunted refrigerant and is in date", () => {

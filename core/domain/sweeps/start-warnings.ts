@@ -36,9 +36,17 @@ export function startWarnings(detector: WarningDetector, systems: readonly Warni
     if (!r) continue;
     const v = canDetect(detector.principle, r);
     if (v.answer === "no") {
-      out.push({ code: "detector-blind", systemId: s.id, message: `${detector.name} cannot see ${r.id} on ${s.name}: ${v.reason} Use a detector made for this refrigerant.` });
+      out.push({
+        code: "detector-blind",
+        systemId: s.id,
+        message: `${detector.name} cannot see ${r.id} on ${s.name}: ${v.reason} Use a detector made for this refrigerant.`,
+      });
     } else if (v.answer === "unknown") {
-      out.push({ code: "detector-unsure", systemId: s.id, message: `${detector.name} may not see ${r.id} on ${s.name}: ${v.reason}` });
+      out.push({
+        code: "detector-unsure",
+        systemId: s.id,
+        message: `${detector.name} may not see ${r.id} on ${s.name}: ${v.reason}`,
+      });
     }
   }
   return out;

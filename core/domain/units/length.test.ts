@@ -52,7 +52,7 @@ describe("parseLength", () => {
       expect(parseLength(text, "m")).toBeCloseTo(m(147.5), 12);
     }
     expect(parseLength("147 in", "m")).toBeCloseTo(m(147), 12);
-    expect(parseLength("3 1/2\"", "m")).toBeCloseTo(m(3.5), 12);
+    expect(parseLength('3 1/2"', "m")).toBeCloseTo(m(3.5), 12);
     expect(parseLength("10 ft", "m")).toBeCloseTo(3.048, 12);
   });
   it("reads a bare number in the default unit", () => {

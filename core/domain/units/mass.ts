@@ -26,9 +26,14 @@ const BARE = new RegExp(String.raw`^(${NUMBER})$`);
  */
 export function parseMass(text: string, defaultUnit: MassInputUnit, field = "mass"): number {
   if (typeof text !== "string" || text.trim() === "") throw new DomainInputError(field, "is empty");
-  const t = text.trim().toLowerCase().replace(/\s+/g, " ")
-    .replace(/\b(?:pounds|pound)\b/g, "lb").replace(/\b(?:ounces|ounce)\b/g, "oz")
-    .replace(/\b(?:kilograms|kilogram|kilos)\b/g, "kg").replace(/\b(?:grams|gram)\b/g, "g");
+  const t = text
+    .trim()
+    .toLowerCase()
+    .replace(/\s+/g, " ")
+    .replace(/\b(?:pounds|pound)\b/g, "lb")
+    .replace(/\b(?:ounces|ounce)\b/g, "oz")
+    .replace(/\b(?:kilograms|kilogram|kilos)\b/g, "kg")
+    .replace(/\b(?:grams|gram)\b/g, "g");
   if (t.startsWith("-")) throw new DomainInputError(field, "must not be negative");
   if (t.includes(",")) throw new DomainInputError(field, `use a decimal point, not a comma: "${text}"`);
   const bare = BARE.exec(t);

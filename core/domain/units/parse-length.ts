@@ -4,7 +4,13 @@ import { METRES_PER_FOOT, METRES_PER_INCH } from "./length";
 export type LengthInputUnit = "m" | "ft";
 
 const VULGAR: Record<string, string> = {
-  "½": " 1/2", "¼": " 1/4", "¾": " 3/4", "⅛": " 1/8", "⅜": " 3/8", "⅝": " 5/8", "⅞": " 7/8",
+  "½": " 1/2",
+  "¼": " 1/4",
+  "¾": " 3/4",
+  "⅛": " 1/8",
+  "⅜": " 3/8",
+  "⅝": " 5/8",
+  "⅞": " 7/8",
 };
 
 const NUMBER = String.raw`\d+(?:\.\d+)?|\.\d+`;

@@ -20,8 +20,13 @@ function neumannLaplacian(grid: Grid): FivePoint {
   const { nx, ny, solid } = grid;
   const n = nx * ny;
   const a: FivePoint = {
-    nx, ny, diag: new Float64Array(n), west: new Float64Array(n), east: new Float64Array(n),
-    north: new Float64Array(n), south: new Float64Array(n),
+    nx,
+    ny,
+    diag: new Float64Array(n),
+    west: new Float64Array(n),
+    east: new Float64Array(n),
+    north: new Float64Array(n),
+    south: new Float64Array(n),
   };
   for (let j = 0; j < ny; j++) {
     for (let i = 0; i < nx; i++) {
@@ -65,7 +70,8 @@ export function terminalFlows(grid: Grid, terminals: readonly AirTerminal[]): Fl
   const cells: number[][] = terminals.map((t) => {
     const out: number[] = [];
     const r = Math.ceil(t.radius / h);
-    const ci = Math.floor(t.x / h), cj = Math.floor(t.y / h);
+    const ci = Math.floor(t.x / h),
+      cj = Math.floor(t.y / h);
     for (let j = cj - r; j <= cj + r; j++) {
       for (let i = ci - r; i <= ci + r; i++) {
         if (i < 0 || j < 0 || i >= nx || j >= ny || solid[j * nx + i]) continue;
@@ -76,7 +82,8 @@ export function terminalFlows(grid: Grid, terminals: readonly AirTerminal[]): Fl
   });
   const supplyCells = cells.filter((c, k) => terminals[k].sign > 0 && c.length > 0);
   const returnCells = cells.filter((c, k) => terminals[k].sign < 0 && c.length > 0);
-  if (supplyCells.length === 0 || returnCells.length === 0) throw new Error("drift: need at least one supply and one return on open floor");
+  if (supplyCells.length === 0 || returnCells.length === 0)
+    throw new Error("drift: need at least one supply and one return on open floor");
   const spread = (groups: number[][], total: number) => {
     for (const g of groups) for (const k of g) q[k] += total / groups.length / g.length;
   };
@@ -94,11 +101,19 @@ export function potentialDrift(grid: Grid, q: Float64Array, medianSpeed: number,
   // Preconditioned CG on the singular but consistent Neumann system (the flows sum to zero); the
   // incomplete factor is symmetric for a symmetric matrix, as CG needs.
   const m = incompleteLu(a, 0.9);
-  const phi = new Float64Array(n), r = Float64Array.from(q), z = new Float64Array(n), p = new Float64Array(n), ap = new Float64Array(n);
+  const phi = new Float64Array(n),
+    r = Float64Array.from(q),
+    z = new Float64Array(n),
+    p = new Float64Array(n),
+    ap = new Float64Array(n);
   m.apply(r, z);
   p.set(z);
-  let rz = 0, rr0 = 0;
-  for (let k = 0; k < n; k++) { rz += r[k] * z[k]; rr0 += r[k] * r[k]; }
+  let rz = 0,
+    rr0 = 0;
+  for (let k = 0; k < n; k++) {
+    rz += r[k] * z[k];
+    rr0 += r[k] * r[k];
+  }
   for (let it = 0; it < 20000; it++) {
     apply(a, p, ap);
     let pap = 0;
@@ -119,17 +134,20 @@ export function potentialDrift(grid: Grid, q: Float64Array, medianSpeed: number,
     rz = rzNew;
     for (let k = 0; k < n; k++) p[k] = z[k] + beta * p[k];
   }
-  const u = new Float64Array((nx + 1) * ny), v = new Float64Array(nx * (ny + 1));
+  const u = new Float64Array((nx + 1) * ny),
+    v = new Float64Array(nx * (ny + 1));
   // Outflow from cell a to b through one face is (phi_a - phi_b) in m^2/s per metre; divide by h for m/s.
   for (let j = 0; j < ny; j++) {
     for (let i = 1; i < nx; i++) {
-      const a = j * nx + i - 1, b = a + 1;
+      const a = j * nx + i - 1,
+        b = a + 1;
       if (!solid[a] && !solid[b]) u[j * (nx + 1) + i] = (phi[a] - phi[b]) / h;
     }
   }
   for (let j = 1; j < ny; j++) {
     for (let i = 0; i < nx; i++) {
-      const a = (j - 1) * nx + i, b = j * nx + i;
+      const a = (j - 1) * nx + i,
+        b = j * nx + i;
       if (!solid[a] && !solid[b]) v[j * nx + i] = (phi[a] - phi[b]) / h;
     }
   }

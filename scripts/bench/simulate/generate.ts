@@ -25,7 +25,8 @@ function fail(message: string): never {
 const outDir = option("--out") ?? join(here, "..", "scenarios");
 const first = Number(option("--first") ?? 1);
 const perFamily = Number(args[0] ?? 10);
-if (!Number.isInteger(perFamily) || perFamily < 1 || perFamily > 100) fail(`stores per family must be an integer 1..100, got ${args[0]}`);
+if (!Number.isInteger(perFamily) || perFamily < 1 || perFamily > 100)
+  fail(`stores per family must be an integer 1..100, got ${args[0]}`);
 if (!Number.isInteger(first) || first < 1 || first > 9000) fail(`--first must be an integer 1..9000, got ${first}`);
 mkdirSync(outDir, { recursive: true });
 let bytes = 0;
@@ -49,7 +50,9 @@ FAMILIES.forEach((family, fi) => {
     );
   }
 });
-console.log(`${FAMILIES.length * perFamily} stores, ${(bytes / 1e6).toFixed(2)} MB, ${((Date.now() - started) / 1000).toFixed(0)} s`);
+console.log(
+  `${FAMILIES.length * perFamily} stores, ${(bytes / 1e6).toFixed(2)} MB, ${((Date.now() - started) / 1000).toFixed(0)} s`,
+);
 if (faulty.length) {
   // The probe was routed onto a solid body: a layout or routing fault, not a valid benchmark store.
   console.error(`generate: probe on solid cells in ${faulty.join(", ")}`);

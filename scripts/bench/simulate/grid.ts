@@ -18,8 +18,10 @@ export interface Grid {
 }
 
 export function createGrid(width: number, height: number, h: number): Grid {
-  if (!(width > 0) || !(height > 0)) throw new Error(`grid: width and height must be positive, got ${width} x ${height}`);
-  if (!(h > 0) || h > Math.min(width, height)) throw new Error(`grid: cell size must be positive and smaller than the plan, got ${h}`);
+  if (!(width > 0) || !(height > 0))
+    throw new Error(`grid: width and height must be positive, got ${width} x ${height}`);
+  if (!(h > 0) || h > Math.min(width, height))
+    throw new Error(`grid: cell size must be positive and smaller than the plan, got ${h}`);
   const nx = Math.ceil(width / h - 1e-9);
   const ny = Math.ceil(height / h - 1e-9);
   return { nx, ny, h, solid: new Uint8Array(nx * ny) };
@@ -31,8 +33,10 @@ export function createGrid(width: number, height: number, h: number): Grid {
  */
 export function rectCells(grid: Grid, r: Rect): { i0: number; i1: number; j0: number; j1: number } {
   const { nx, ny, h } = grid;
-  let i0 = Math.round(r.x0 / h), i1 = Math.round(r.x1 / h);
-  let j0 = Math.round(r.y0 / h), j1 = Math.round(r.y1 / h);
+  let i0 = Math.round(r.x0 / h),
+    i1 = Math.round(r.x1 / h);
+  let j0 = Math.round(r.y0 / h),
+    j1 = Math.round(r.y1 / h);
   if (i1 <= i0) i1 = i0 + 1;
   if (j1 <= j0) j1 = j0 + 1;
   i0 = Math.max(0, Math.min(nx, i0));
@@ -59,13 +63,18 @@ export function cellOf(grid: Grid, x: number, y: number): number {
  */
 export function sampleField(grid: Grid, field: Float64Array, x: number, y: number): number {
   const { nx, ny, h, solid } = grid;
-  const fx = x / h - 0.5, fy = y / h - 0.5;
-  const i = Math.floor(fx), j = Math.floor(fy);
-  const tx = fx - i, ty = fy - j;
-  let sum = 0, weight = 0;
+  const fx = x / h - 0.5,
+    fy = y / h - 0.5;
+  const i = Math.floor(fx),
+    j = Math.floor(fy);
+  const tx = fx - i,
+    ty = fy - j;
+  let sum = 0,
+    weight = 0;
   for (let dj = 0; dj <= 1; dj++) {
     for (let di = 0; di <= 1; di++) {
-      const ci = i + di, cj = j + dj;
+      const ci = i + di,
+        cj = j + dj;
       if (ci < 0 || cj < 0 || ci >= nx || cj >= ny) continue;
       const k = cj * nx + ci;
       if (solid[k]) continue;

@@ -18,14 +18,21 @@ const r2 = (v: number) => Math.round(v * 100) / 100;
 function caseBack(f: FixtureSpec, random: Random): [number, number] {
   const { x0, y0, x1, y1 } = f.rect;
   const inset = random.uniform(0.1, 0.2);
-  const alongX = random.uniform(x0 + 0.3, x1 - 0.3), alongY = random.uniform(y0 + 0.3, y1 - 0.3);
+  const alongX = random.uniform(x0 + 0.3, x1 - 0.3),
+    alongY = random.uniform(y0 + 0.3, y1 - 0.3);
   switch (f.back) {
-    case "x0": return [x0 + inset, alongY];
-    case "x1": return [x1 - inset, alongY];
-    case "y0": return [alongX, y0 + inset];
-    case "y1": return [alongX, y1 - inset];
-    case "centre-y": return [alongX, (y0 + y1) / 2 + random.uniform(-0.1, 0.1)];
-    case "centre-x": return [(x0 + x1) / 2 + random.uniform(-0.1, 0.1), alongY];
+    case "x0":
+      return [x0 + inset, alongY];
+    case "x1":
+      return [x1 - inset, alongY];
+    case "y0":
+      return [alongX, y0 + inset];
+    case "y1":
+      return [alongX, y1 - inset];
+    case "centre-y":
+      return [alongX, (y0 + y1) / 2 + random.uniform(-0.1, 0.1)];
+    case "centre-x":
+      return [(x0 + x1) / 2 + random.uniform(-0.1, 0.1), alongY];
   }
 }
 
@@ -44,7 +51,9 @@ function leakIn(f: FixtureSpec, layout: StoreLayout, random: Random, kinds: True
 
 /** The leaks of one store; every leak sits on open air (never on a solid cell of the grid). */
 export function chooseLeaks(family: Family, layout: StoreLayout, grid: Grid, random: Random): TrueLeak[] {
-  const cases = layout.fixtures.filter((f) => f.kind === "open-case" || f.kind === "door-case" || f.kind === "island-case");
+  const cases = layout.fixtures.filter(
+    (f) => f.kind === "open-case" || f.kind === "door-case" || f.kind === "island-case",
+  );
   const walkins = layout.fixtures.filter((f) => f.kind === "walk-in");
   const onAir = (l: TrueLeak) => !grid.solid[cellOf(grid, l.x, l.y)];
   const draw = (pool: FixtureSpec[], kinds: TrueLeak["kind"][], ok: (l: TrueLeak) => boolean): TrueLeak => {

@@ -33,10 +33,18 @@ export interface Scenario {
   notes: { cells: number; cellSize: number; solveIterations: number[]; peakPpm: number[]; samplesInSolid: number };
 }
 
-const polygon = (r: Rect) => [[r.x0, r.y0], [r.x1, r.y0], [r.x1, r.y1], [r.x0, r.y1]];
+const polygon = (r: Rect) => [
+  [r.x0, r.y0],
+  [r.x1, r.y0],
+  [r.x1, r.y1],
+  [r.x0, r.y1],
+];
 const isCase = (f: FixtureSpec) => f.kind === "open-case" || f.kind === "door-case" || f.kind === "island-case";
 
-function rasterise(layout: StoreLayout, random: Random): { grid: Grid; diffusivity: Float64Array; caseMask: Uint8Array } {
+function rasterise(
+  layout: StoreLayout,
+  random: Random,
+): { grid: Grid; diffusivity: Float64Array; caseMask: Uint8Array } {
   const h = layout.width * layout.height > 2500 ? 0.2 : 0.15;
   const grid = createGrid(layout.width, layout.height, h);
   const aisle = random.uniform(0.01, 0.05); // eddy diffusivity of aisle air, m^2/s
@@ -62,7 +70,10 @@ function rasterise(layout: StoreLayout, random: Random): { grid: Grid; diffusivi
 
 function airTerminals(layout: StoreLayout, random: Random): AirTerminal[] {
   const floorTop = Math.min(...layout.fixtures.filter((f) => f.kind === "open-case").map((f) => f.rect.y0));
-  const spot = (): [number, number] => [random.uniform(3, layout.width - 3), random.uniform(floorTop + 2, layout.height - 3)];
+  const spot = (): [number, number] => [
+    random.uniform(3, layout.width - 3),
+    random.uniform(floorTop + 2, layout.height - 3),
+  ];
   const out: AirTerminal[] = [];
   for (let k = random.int(3, 6); k > 0; k--) out.push({ ...xy(spot()), radius: 1.2, sign: 1 });
   for (let k = random.int(1, 3); k > 0; k--) out.push({ ...xy(spot()), radius: 1.2, sign: -1 });
@@ -77,7 +88,8 @@ function peakAlongLegs(layout: StoreLayout, grid: Grid, field: Float64Array): nu
     for (let k = 1; k < leg.points.length; k++) {
       const [a, b] = [leg.points[k - 1], leg.points[k]];
       const n = Math.max(1, Math.ceil(Math.hypot(b[0] - a[0], b[1] - a[1]) / 0.2));
-      for (let s = 0; s <= n; s++) peak = Math.max(peak, sampleField(grid, field, a[0] + ((b[0] - a[0]) * s) / n, a[1] + ((b[1] - a[1]) * s) / n));
+      for (let s = 0; s <= n; s++)
+        peak = Math.max(peak, sampleField(grid, field, a[0] + ((b[0] - a[0]) * s) / n, a[1] + ((b[1] - a[1]) * s) / n));
     }
   }
   return peak;
@@ -128,12 +140,21 @@ export function buildScenario(family: Family, key: number): Scenario {
     const scale = random.uniform(2.5, 6) / peak;
     for (let k = 0; k < total.length; k++) total[k] += scale * g[k];
   }
-  const instrument = { transportDelayS: round(random.uniform(3, 7)), timeConstantS: round(random.uniform(0.5, 3)), alarmPpm: 2 };
+  const instrument = {
+    transportDelayS: round(random.uniform(3, 7)),
+    timeConstantS: round(random.uniform(0.5, 3)),
+    alarmPpm: 2,
+  };
   const dt = 0.05;
   const sensor = new Sensor(
     {
-      dt, ...instrument, sigma: random.uniform(0.25, 0.35), slowShare: random.uniform(0.4, 0.8),
-      slowCorrelationS: random.uniform(1, 4), displayNoisePpm: 0.5, rangePpm: 200,
+      dt,
+      ...instrument,
+      sigma: random.uniform(0.25, 0.35),
+      slowShare: random.uniform(0.4, 0.8),
+      slowCorrelationS: random.uniform(1, 4),
+      displayNoisePpm: 0.5,
+      rangePpm: 200,
     },
     random,
   );
@@ -141,14 +162,26 @@ export function buildScenario(family: Family, key: number): Scenario {
   let samplesInSolid = 0; // probe positions on a solid cell: should stay zero (a routing fault otherwise)
   const tech = new Technician(
     {
-      speed, stopSpacing: [1.2, 1.5], dwellS: [1, 4], recheckSpacing: [0.55, 0.65], recheckDwellS: [2, 4],
-      recheckSpeedFactor: 0.6, tapJitter: 0.3 / Math.SQRT2, alarmPpm: instrument.alarmPpm,
+      speed,
+      stopSpacing: [1.2, 1.5],
+      dwellS: [1, 4],
+      recheckSpacing: [0.55, 0.65],
+      recheckDwellS: [2, 4],
+      recheckSpeedFactor: 0.6,
+      tapJitter: 0.3 / Math.SQRT2,
+      alarmPpm: instrument.alarmPpm,
     },
-    sensor, dt, (x, y) => {
+    sensor,
+    dt,
+    (x, y) => {
       if (grid.solid[cellOf(grid, x, y)]) samplesInSolid++;
       return sampleField(grid, total, x, y);
-    }, random.uniform(0, 0.6), random,
-    layout, layout.legs[0].points[0], 15,
+    },
+    random.uniform(0, 0.6),
+    random,
+    layout,
+    layout.legs[0].points[0],
+    15,
   );
   const map = buildWalkMap(grid, caseMask);
   for (const leg of layout.legs) tech.sweep(map, leg);
@@ -160,7 +193,9 @@ export function buildScenario(family: Family, key: number): Scenario {
         obstacles: layout.solids.map((s) => ({ id: s.id, polygon: polygon(s.rect) })),
         fixtures: layout.fixtures.map((f) => ({ id: f.id, kind: f.kind, polygon: polygon(f.rect), fans: f.fans })),
         riskPoints: layout.riskPoints.map((p) => ({ id: p.id, kind: p.kind, x: p.x, y: p.y })),
-        backgroundZones: zoneListed ? [{ id: layout.zone.id, polygon: polygon(layout.zone.rect), note: layout.zone.note }] : [],
+        backgroundZones: zoneListed
+          ? [{ id: layout.zone.id, polygon: polygon(layout.zone.rect), note: layout.zone.note }]
+          : [],
       },
       instrument,
       readings: tech.readings,

@@ -3,8 +3,14 @@ import { createRandom } from "./random";
 import { Sensor, type SensorSettings } from "./sensor";
 
 const quiet: SensorSettings = {
-  dt: 0.01, transportDelayS: 4, timeConstantS: 2, sigma: 0, slowShare: 0.5, slowCorrelationS: 2,
-  displayNoisePpm: 0, rangePpm: 1000,
+  dt: 0.01,
+  transportDelayS: 4,
+  timeConstantS: 2,
+  sigma: 0,
+  slowShare: 0.5,
+  slowCorrelationS: 2,
+  displayNoisePpm: 0,
+  rangePpm: 1000,
 };
 
 describe("instrument model", () => {

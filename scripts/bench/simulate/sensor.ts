@@ -33,7 +33,10 @@ export class Sensor {
   private readonly delaySamples: number;
   private readonly gain: number;
 
-  constructor(private readonly settings: SensorSettings, private readonly random: Random) {
+  constructor(
+    private readonly settings: SensorSettings,
+    private readonly random: Random,
+  ) {
     const { dt, transportDelayS, timeConstantS } = settings;
     if (!(dt > 0)) throw new Error(`sensor: dt must be positive, got ${dt}`);
     if (!(transportDelayS >= 0)) throw new Error(`sensor: transport delay must be >= 0 s, got ${transportDelayS}`);

@@ -4,7 +4,17 @@
 // 25–50 m); everything is an axis-aligned rectangle so rasterising it is exact.
 import type { Rect } from "./grid";
 import type { Random } from "./random";
-import type { FixtureKind, FixtureSpec, Leg, Point, RiskPointSpec, Side, SolidBody, StoreLayout, ZoneSpec } from "./store-types";
+import type {
+  FixtureKind,
+  FixtureSpec,
+  Leg,
+  Point,
+  RiskPointSpec,
+  Side,
+  SolidBody,
+  StoreLayout,
+  ZoneSpec,
+} from "./store-types";
 
 const WALL = 0.3;
 const PANEL = 0.2;
@@ -26,7 +36,8 @@ class Builder {
     this.solids.push({ id: this.id(prefix), rect });
   }
   fixture(kind: FixtureKind, rect: Rect, back: Side): FixtureSpec {
-    const prefix = kind === "walk-in" ? "walkin" : kind === "machine-room" ? "machine" : kind === "island-case" ? "island" : "case";
+    const prefix =
+      kind === "walk-in" ? "walkin" : kind === "machine-room" ? "machine" : kind === "island-case" ? "island" : "case";
     const f: FixtureSpec = { id: this.id(prefix), kind, rect, fans: true, back };
     this.fixtures.push(f);
     return f;
@@ -66,11 +77,26 @@ function units(random: Random, a: number, b: number): [number, number][] {
 
 /** A rectangular loop inset from a room's walls, starting at the corner nearest the door. */
 function roomLoop(air: Rect, inset: number, doorX: number): Point[] {
-  const x0 = air.x0 + inset, x1 = air.x1 - inset, y0 = air.y0 + inset, y1 = air.y1 - inset;
+  const x0 = air.x0 + inset,
+    x1 = air.x1 - inset,
+    y0 = air.y0 + inset,
+    y1 = air.y1 - inset;
   const leftFirst = Math.abs(doorX - x0) < Math.abs(doorX - x1);
   return leftFirst
-    ? [[x0, y1], [x0, y0], [x1, y0], [x1, y1], [x0, y1]]
-    : [[x1, y1], [x1, y0], [x0, y0], [x0, y1], [x1, y1]];
+    ? [
+        [x0, y1],
+        [x0, y0],
+        [x1, y0],
+        [x1, y1],
+        [x0, y1],
+      ]
+    : [
+        [x1, y1],
+        [x1, y0],
+        [x0, y0],
+        [x0, y1],
+        [x1, y1],
+      ];
 }
 
 function backRoom(b: Builder, width: number, depth: number): { zone: ZoneSpec; doors: number[] } {
@@ -97,13 +123,22 @@ function backRoom(b: Builder, width: number, depth: number): { zone: ZoneSpec; d
   // The corridor runs between the walk-ins and the partition; the machine room must end above it.
   const corridorY = (top + maxDepth + depth) / 2 + 0.2;
   const mdMax = corridorY - 0.8 - top;
-  const mw = r.uniform(4, 6), md = r.uniform(Math.min(4, mdMax), mdMax);
+  const mw = r.uniform(4, 6),
+    md = r.uniform(Math.min(4, mdMax), mdMax);
   const mx = width - WALL - mw;
   const mDoor = mx + r.uniform(0.5, 1.2);
-  const machineAir = b.room({ x0: mx, y0: top, x1: width - WALL, y1: top + md }, mDoor, 1.0, { top: false, right: false });
+  const machineAir = b.room({ x0: mx, y0: top, x1: width - WALL, y1: top + md }, mDoor, 1.0, {
+    top: false,
+    right: false,
+  });
   const machine = b.fixture("machine-room", machineAir, "y0");
   for (let k = r.int(2, 4); k > 0; k--) {
-    b.risk("valve", r.uniform(machineAir.x0 + 0.5, machineAir.x1 - 0.5), r.uniform(machineAir.y0 + 0.5, machineAir.y1 - 0.5), machine.id);
+    b.risk(
+      "valve",
+      r.uniform(machineAir.x0 + 0.5, machineAir.x1 - 0.5),
+      r.uniform(machineAir.y0 + 0.5, machineAir.y1 - 0.5),
+      machine.id,
+    );
   }
   b.risk("line-set", machineAir.x0 + 0.4, machineAir.y0 + 0.4, machine.id);
   // Dry storage with aerosol cans between the walk-ins and the machine room, across the corridor.
@@ -112,7 +147,11 @@ function backRoom(b: Builder, width: number, depth: number): { zone: ZoneSpec; d
   const zone: ZoneSpec = {
     id: "zone-1",
     rect: { x0: round(zx), y0: round(top + 0.4), x1: round(zx + zw), y1: round(depth - 0.3) },
-    note: r.pick(["aerosol storage: cans of the same gas", "cleaning and aerosol stock", "bakery storage: aerosol cans"]),
+    note: r.pick([
+      "aerosol storage: cans of the same gas",
+      "cleaning and aerosol stock",
+      "bakery storage: aerosol cans",
+    ]),
   };
   // Partition between back room and sales floor, with two door gaps.
   const doors = [r.uniform(0.2, 0.4) * width, r.uniform(0.6, 0.8) * width];
@@ -124,13 +163,27 @@ function backRoom(b: Builder, width: number, depth: number): { zone: ZoneSpec; d
   b.solid("wall", { x0: px, y0: depth, x1: width - WALL, y1: depth + 0.25 });
   // Back-room sweep: machine room, then the corridor past the storage, then each walk-in.
   b.legs.push({ points: roomLoop(machineAir, 0.6, mDoor), label: "machine room" });
-  b.legs.push({ points: [[mDoor + 0.5, corridorY], [WALL + 1.0, corridorY]], label: "back-room corridor" });
+  b.legs.push({
+    points: [
+      [mDoor + 0.5, corridorY],
+      [WALL + 1.0, corridorY],
+    ],
+    label: "back-room corridor",
+  });
   for (const w of walkins) b.legs.push({ points: roomLoop(w.air, 0.5, w.doorX), label: "walk-in" });
   return { zone, doors };
 }
 
 /** Cases along a wall or partition; the probe runs just inside their fronts. */
-function perimeterCases(b: Builder, kind: FixtureKind, along: "x" | "y", fixed: [number, number], from: number, to: number, gaps: number[]) {
+function perimeterCases(
+  b: Builder,
+  kind: FixtureKind,
+  along: "x" | "y",
+  fixed: [number, number],
+  from: number,
+  to: number,
+  gaps: number[],
+) {
   const r = b.random;
   const runs: [number, number][] = [];
   let s = from;
@@ -141,7 +194,8 @@ function perimeterCases(b: Builder, kind: FixtureKind, along: "x" | "y", fixed: 
   if (to > s + 1.5) runs.push([s, to]);
   for (const [a, c] of runs) {
     for (const [u0, u1] of units(r, a, c)) {
-      const rect = along === "y" ? { x0: fixed[0], y0: u0, x1: fixed[1], y1: u1 } : { x0: u0, y0: fixed[0], x1: u1, y1: fixed[1] };
+      const rect =
+        along === "y" ? { x0: fixed[0], y0: u0, x1: fixed[1], y1: u1 } : { x0: u0, y0: fixed[0], x1: u1, y1: fixed[1] };
       const f = b.fixture(kind, rect, along === "y" ? "x0" : "y0");
       if (along === "y") {
         b.risk("coil", (fixed[0] + fixed[1]) / 2, (u0 + u1) / 2, f.id);
@@ -165,7 +219,8 @@ export function generateLayout(random: Random): StoreLayout {
 
 function tryLayout(r: Random): StoreLayout | null {
   const b = new Builder(r);
-  const width = round(r.uniform(40, 80)), height = round(r.uniform(25, 50));
+  const width = round(r.uniform(40, 80)),
+    height = round(r.uniform(25, 50));
   b.solid("wall", { x0: 0, y0: 0, x1: width, y1: WALL });
   b.solid("wall", { x0: 0, y0: height - WALL, x1: width, y1: height });
   b.solid("wall", { x0: 0, y0: 0, x1: WALL, y1: height });
@@ -180,9 +235,23 @@ function tryLayout(r: Random): StoreLayout | null {
   const cd = r.uniform(0.9, 1.1);
   // Perimeter: glass-door cases along the left wall, open cases along the partition.
   const leftRuns = perimeterCases(b, "door-case", "y", [WALL, WALL + cd], floorTop + cd + 2.5, yBot + 1.5, []);
-  const partRuns = perimeterCases(b, "open-case", "x", [floorTop, floorTop + cd], WALL + cd + 2.5, width - WALL - 2.5, doors);
-  const leftLeg: Point[] = [[WALL + cd - PROBE_IN, leftRuns[leftRuns.length - 1][1]], [WALL + cd - PROBE_IN, leftRuns[0][0]]];
-  const partLeg: Point[] = [[partRuns[0][0], floorTop + cd - PROBE_IN], [partRuns[partRuns.length - 1][1], floorTop + cd - PROBE_IN]];
+  const partRuns = perimeterCases(
+    b,
+    "open-case",
+    "x",
+    [floorTop, floorTop + cd],
+    WALL + cd + 2.5,
+    width - WALL - 2.5,
+    doors,
+  );
+  const leftLeg: Point[] = [
+    [WALL + cd - PROBE_IN, leftRuns[leftRuns.length - 1][1]],
+    [WALL + cd - PROBE_IN, leftRuns[0][0]],
+  ];
+  const partLeg: Point[] = [
+    [partRuns[0][0], floorTop + cd - PROBE_IN],
+    [partRuns[partRuns.length - 1][1], floorTop + cd - PROBE_IN],
+  ];
   // Lineups (back-to-back cases on a solid spine) and gondolas (solid shelving) across the floor.
   const rowLegs: Leg[] = [];
   let x = WALL + cd + r.uniform(2.4, 3.0);
@@ -203,8 +272,20 @@ function tryLayout(r: Random): StoreLayout | null {
         if (r.chance(0.5)) b.risk("line-set", x + cd - 0.2, u0 + 0.35, left.id);
         if (r.chance(0.5)) b.risk("line-set", x + cd + 0.35, u1 - 0.35, right.id);
       }
-      rowLegs.push({ points: [[x + PROBE_IN, yTop], [x + PROBE_IN, yBot]], label: "lineup west face" });
-      rowLegs.push({ points: [[x + w - PROBE_IN, yBot], [x + w - PROBE_IN, yTop]], label: "lineup east face" });
+      rowLegs.push({
+        points: [
+          [x + PROBE_IN, yTop],
+          [x + PROBE_IN, yBot],
+        ],
+        label: "lineup west face",
+      });
+      rowLegs.push({
+        points: [
+          [x + w - PROBE_IN, yBot],
+          [x + w - PROBE_IN, yTop],
+        ],
+        label: "lineup east face",
+      });
     } else {
       b.solid("gondola", { x0: x, y0: yTop, x1: x + w, y1: yBot });
     }
@@ -230,12 +311,27 @@ function tryLayout(r: Random): StoreLayout | null {
     b.risk("coil", ix + len / 2, iy + iw / 2, f.id);
     b.risk("line-set", ix + 0.4, iy + iw / 2, f.id);
     const p = PROBE_IN;
-    islandLegs.push({ points: [[ix + p, iy + p], [ix + len - p, iy + p], [ix + len - p, iy + iw - p], [ix + p, iy + iw - p], [ix + p, iy + p]], label: "island" });
+    islandLegs.push({
+      points: [
+        [ix + p, iy + p],
+        [ix + len - p, iy + p],
+        [ix + len - p, iy + iw - p],
+        [ix + p, iy + iw - p],
+        [ix + p, iy + p],
+      ],
+      label: "island",
+    });
     ix += len + r.uniform(2.5, 4);
   }
   // Sweep order: left wall north, partition east, back room, then lineups west to east, islands.
   const backLegs = b.legs;
-  b.legs = [{ points: leftLeg, label: "left wall cases" }, { points: partLeg, label: "partition cases" }, ...backLegs, ...rowLegs, ...islandLegs];
+  b.legs = [
+    { points: leftLeg, label: "left wall cases" },
+    { points: partLeg, label: "partition cases" },
+    ...backLegs,
+    ...rowLegs,
+    ...islandLegs,
+  ];
   const roundRect = (q: Rect): Rect => ({ x0: round(q.x0), y0: round(q.y0), x1: round(q.x1), y1: round(q.y1) });
   for (const s of b.solids) s.rect = roundRect(s.rect);
   for (const f of b.fixtures) f.rect = roundRect(f.rect);

@@ -7,10 +7,25 @@ import { buildWalkMap, findWalkPath } from "./walk-path";
 
 // Walking pattern from the locator issue's "Accuracy" ranges (0.7–1.2 m/s, a stop every 1.2–1.5 m for
 // 1–4 s, tap on arrival, a ~0.6 m re-check after an alarm); the checks are plain arithmetic on them.
-const sensorSettings = { dt: 0.05, transportDelayS: 4, timeConstantS: 1, sigma: 0, slowShare: 0.5, slowCorrelationS: 2, displayNoisePpm: 0, rangePpm: 200 };
+const sensorSettings = {
+  dt: 0.05,
+  transportDelayS: 4,
+  timeConstantS: 1,
+  sigma: 0,
+  slowShare: 0.5,
+  slowCorrelationS: 2,
+  displayNoisePpm: 0,
+  rangePpm: 200,
+};
 const walkSettings = {
-  speed: 1, stopSpacing: [1.2, 1.5] as [number, number], dwellS: [1, 4] as [number, number], recheckSpacing: [0.55, 0.65] as [number, number],
-  recheckDwellS: [2, 4] as [number, number], recheckSpeedFactor: 0.6, tapJitter: 0, alarmPpm: 2,
+  speed: 1,
+  stopSpacing: [1.2, 1.5] as [number, number],
+  dwellS: [1, 4] as [number, number],
+  recheckSpacing: [0.55, 0.65] as [number, number],
+  recheckDwellS: [2, 4] as [number, number],
+  recheckSpeedFactor: 0.6,
+  tapJitter: 0,
+  alarmPpm: 2,
 };
 
 describe("technician", () => {
@@ -21,7 +36,8 @@ describe("technician", () => {
     let prev: [number, number] = [1, 1];
     for (const p of path) {
       for (let s = 0; s <= 20; s++) {
-        const x = prev[0] + ((p[0] - prev[0]) * s) / 20, y = prev[1] + ((p[1] - prev[1]) * s) / 20;
+        const x = prev[0] + ((p[0] - prev[0]) * s) / 20,
+          y = prev[1] + ((p[1] - prev[1]) * s) / 20;
         expect(grid.solid[Math.floor(y / 0.2) * grid.nx + Math.floor(x / 0.2)]).toBe(0);
       }
       prev = p;
@@ -34,8 +50,24 @@ describe("technician", () => {
     const random = createRandom(9);
     // Gas only around x = 15 (a top hat), so the alarm stretch is known.
     const air = (x: number) => (Math.abs(x - 15) < 1 ? 20 : 0);
-    const tech = new Technician(walkSettings, new Sensor(sensorSettings, random), 0.05, air, 0, random, { width: 30, height: 6 }, [2, 3], 10);
-    tech.sweep(buildWalkMap(grid, new Uint8Array(grid.nx * grid.ny)), { points: [[2, 3], [28, 3]], label: "test" });
+    const tech = new Technician(
+      walkSettings,
+      new Sensor(sensorSettings, random),
+      0.05,
+      air,
+      0,
+      random,
+      { width: 30, height: 6 },
+      [2, 3],
+      10,
+    );
+    tech.sweep(buildWalkMap(grid, new Uint8Array(grid.nx * grid.ny)), {
+      points: [
+        [2, 3],
+        [28, 3],
+      ],
+      label: "test",
+    });
     const r = tech.readings;
     const firstPass = r.filter((_, k) => k === 0 || r[k].x > r[k - 1].x);
     for (let k = 1; k < firstPass.length; k++) {

@@ -32,7 +32,8 @@ interface Tap {
   ppm: number;
 }
 
-const length = (pts: Point[]) => pts.slice(1).reduce((acc, p, k) => acc + Math.hypot(p[0] - pts[k][0], p[1] - pts[k][1]), 0);
+const length = (pts: Point[]) =>
+  pts.slice(1).reduce((acc, p, k) => acc + Math.hypot(p[0] - pts[k][0], p[1] - pts[k][1]), 0);
 
 function pointAt(pts: Point[], s: number): Point {
   let acc = 0;
@@ -50,10 +51,17 @@ function pointAt(pts: Point[], s: number): Point {
 /** Vertex-respecting waypoints from arc length a to b (either direction), excluding the point at a. */
 function between(pts: Point[], a: number, b: number): Point[] {
   const marks: number[] = [0];
-  for (let k = 1; k < pts.length; k++) marks.push(marks[k - 1] + Math.hypot(pts[k][0] - pts[k - 1][0], pts[k][1] - pts[k - 1][1]));
+  for (let k = 1; k < pts.length; k++)
+    marks.push(marks[k - 1] + Math.hypot(pts[k][0] - pts[k - 1][0], pts[k][1] - pts[k - 1][1]));
   const out: Point[] = [];
-  if (b > a) for (let k = 0; k < pts.length; k++) { if (marks[k] > a && marks[k] < b) out.push(pts[k]); }
-  else for (let k = pts.length - 1; k >= 0; k--) { if (marks[k] < a && marks[k] > b) out.push(pts[k]); }
+  if (b > a)
+    for (let k = 0; k < pts.length; k++) {
+      if (marks[k] > a && marks[k] < b) out.push(pts[k]);
+    }
+  else
+    for (let k = pts.length - 1; k >= 0; k--) {
+      if (marks[k] < a && marks[k] > b) out.push(pts[k]);
+    }
   out.push(pointAt(pts, b));
   return out;
 }
@@ -90,7 +98,8 @@ export class Technician {
   private moveTo(p: Point, speed: number): void {
     const d = Math.hypot(p[0] - this.x, p[1] - this.y);
     const steps = Math.max(1, Math.ceil(d / (speed * this.dt)));
-    const x0 = this.x, y0 = this.y;
+    const x0 = this.x,
+      y0 = this.y;
     for (let k = 1; k <= steps; k++) {
       this.x = x0 + ((p[0] - x0) * k) / steps;
       this.y = y0 + ((p[1] - y0) * k) / steps;
@@ -122,7 +131,14 @@ export class Technician {
     for (const w of findWalkPath(map, [this.x, this.y], p)) this.moveTo(w, this.settings.speed);
   }
 
-  private sweepSpan(pts: Point[], a: number, b: number, spacing: [number, number], dwellS: [number, number], speed: number): Tap[] {
+  private sweepSpan(
+    pts: Point[],
+    a: number,
+    b: number,
+    spacing: [number, number],
+    dwellS: [number, number],
+    speed: number,
+  ): Tap[] {
     const taps: Tap[] = [];
     const dir = b >= a ? 1 : -1;
     let s = a;

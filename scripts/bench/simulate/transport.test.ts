@@ -12,12 +12,18 @@ function besselI0(x: number): number {
 function besselK0(x: number): number {
   if (x <= 2) {
     const t = (x / 2) ** 2;
-    return -Math.log(x / 2) * besselI0(x) - 0.57721566 +
-      t * (0.4227842 + t * (0.23069756 + t * (0.0348859 + t * (0.00262698 + t * (0.0001075 + t * 0.0000074)))));
+    return (
+      -Math.log(x / 2) * besselI0(x) -
+      0.57721566 +
+      t * (0.4227842 + t * (0.23069756 + t * (0.0348859 + t * (0.00262698 + t * (0.0001075 + t * 0.0000074)))))
+    );
   }
   const t = 2 / x;
-  return (Math.exp(-x) / Math.sqrt(x)) *
-    (1.25331414 + t * (-0.07832358 + t * (0.02189568 + t * (-0.01062446 + t * (0.00587872 + t * (-0.0025154 + t * 0.00053208))))));
+  return (
+    (Math.exp(-x) / Math.sqrt(x)) *
+    (1.25331414 +
+      t * (-0.07832358 + t * (0.02189568 + t * (-0.01062446 + t * (0.00587872 + t * (-0.0025154 + t * 0.00053208))))))
+  );
 }
 
 const uniform = (grid: Grid, k: number) => new Float64Array(grid.nx * grid.ny).fill(k);
@@ -32,7 +38,9 @@ describe("steady transport against closed forms", () => {
   it("a point source in open air approaches the screened 2-D solution Q/(2 pi K) K0(r/L)", () => {
     // Free-space Green's function of K lap C - lambda C = -Q delta (K0 per A&S 9.6/9.8; the 2-D screened-diffusion kernel, Carslaw & Jaeger, Conduction of Heat in Solids, 1959).
     const grid = createGrid(24, 24, 0.12);
-    const K = 0.05, lambda = 0.005, Q = 1;
+    const K = 0.05,
+      lambda = 0.005,
+      Q = 1;
     const L = Math.sqrt(K / lambda);
     const op = buildOperator(grid, uniform(grid, K), lambda);
     const src = new Float64Array(grid.nx * grid.ny);
@@ -49,14 +57,19 @@ describe("steady transport against closed forms", () => {
   it("a well-mixed room reaches C = G / (ACH V)", () => {
     // Ott, Steinemann & Wallace, Exposure Analysis (2007) ch. 18, mass-balance model; standards.md §7.
     const grid = createGrid(4, 3, 0.1);
-    const ach = 2 / 3600, G = 0.3; // G in concentration x area per second (2-D, per metre of depth)
+    const ach = 2 / 3600,
+      G = 0.3; // G in concentration x area per second (2-D, per metre of depth)
     const op = buildOperator(grid, uniform(grid, 2.0), ach);
     const src = new Float64Array(grid.nx * grid.ny);
     src[5 * grid.nx + 5] = G / (grid.h * grid.h);
     const { field } = solveSteady(op, src, 1e-11);
     const expected = G / (ach * 4 * 3);
-    let lo = Infinity, hi = -Infinity;
-    for (const value of field) { lo = Math.min(lo, value); hi = Math.max(hi, value); }
+    let lo = Infinity,
+      hi = -Infinity;
+    for (const value of field) {
+      lo = Math.min(lo, value);
+      hi = Math.max(hi, value);
+    }
     expect(lo / expected).toBeGreaterThan(0.97);
     expect(hi / expected).toBeLessThan(1.03);
   });
@@ -131,7 +144,8 @@ describe("steady transport against closed forms", () => {
       { x: 29.7, y: 0.25, radius: 0.3, sign: -1 },
     ]);
     const drift = potentialDrift(grid, q, 0.05, 1e-10);
-    const K = 0.02, k = 0.02;
+    const K = 0.02,
+      k = 0.02;
     const op = buildOperator(grid, uniform(grid, K), k, drift);
     const src = new Float64Array(grid.nx * grid.ny);
     const at = (x: number) => Math.round(x / grid.h);
@@ -139,7 +153,8 @@ describe("steady transport against closed forms", () => {
     const { field } = solveSteady(op, src, 1e-11);
     const U = drift.u[5 * (grid.nx + 1) + at(12)];
     const a = Math.sqrt(1 + (4 * k * K) / (U * U));
-    const down = (U * (a - 1)) / (2 * K), up = (U * (a + 1)) / (2 * K);
+    const down = (U * (a - 1)) / (2 * K),
+      up = (U * (a + 1)) / (2 * K);
     const c = (x: number) => field[5 * grid.nx + at(x)];
     expect(Math.log(c(13) / c(17)) / 4).toBeCloseTo(down, 2);
     expect(Math.abs(Math.log(c(11.8) / c(11.2)) / 0.6 / up - 1)).toBeLessThan(0.05);

@@ -39,17 +39,24 @@ export function buildOperator(
 ): TransportOperator {
   const { nx, ny, h, solid } = grid;
   const n = nx * ny;
-  if (diffusivity.length !== n) throw new Error(`transport: diffusivity has ${diffusivity.length} cells, grid has ${n}`);
+  if (diffusivity.length !== n)
+    throw new Error(`transport: diffusivity has ${diffusivity.length} cells, grid has ${n}`);
   if (!(exchangeRate > 0)) throw new Error(`transport: exchange rate must be positive (1/s), got ${exchangeRate}`);
-  if (drift.u.length !== (nx + 1) * ny || drift.v.length !== nx * (ny + 1)) throw new Error("transport: drift face arrays do not match the grid");
-  const diag = new Float64Array(n), west = new Float64Array(n), east = new Float64Array(n);
-  const north = new Float64Array(n), south = new Float64Array(n), removal = new Float64Array(n);
+  if (drift.u.length !== (nx + 1) * ny || drift.v.length !== nx * (ny + 1))
+    throw new Error("transport: drift face arrays do not match the grid");
+  const diag = new Float64Array(n),
+    west = new Float64Array(n),
+    east = new Float64Array(n);
+  const north = new Float64Array(n),
+    south = new Float64Array(n),
+    removal = new Float64Array(n);
   const outflow = new Float64Array(n); // net outward face velocity sum / h, i.e. the discrete divergence
   const h2 = h * h;
   const face = (a: number, b: number, w: number, toB: Float64Array, toA: Float64Array) => {
     // Face between cell a (upstream when w > 0) and cell b; w is the velocity from a towards b.
     if (solid[a] || solid[b]) return;
-    const ka = diffusivity[a], kb = diffusivity[b];
+    const ka = diffusivity[a],
+      kb = diffusivity[b];
     const kf = ka + kb > 0 ? (2 * ka * kb) / (ka + kb) : 0;
     const d = kf / h2;
     const f = w / h;
@@ -114,13 +121,24 @@ export interface SolveResult {
 }
 
 /** Solves op * C = source (source in concentration units per second, per cell). */
-export function solveSteady(op: TransportOperator, source: Float64Array, tolerance = 1e-9, maxIterations = 20000): SolveResult {
+export function solveSteady(
+  op: TransportOperator,
+  source: Float64Array,
+  tolerance = 1e-9,
+  maxIterations = 20000,
+): SolveResult {
   const n = op.diag.length;
   if (source.length !== n) throw new Error(`transport: source has ${source.length} cells, grid has ${n}`);
   const m = incompleteLu({ nx: op.grid.nx, ny: op.grid.ny, ...op });
-  const x = new Float64Array(n), r = new Float64Array(n), rHat = new Float64Array(n);
-  const p = new Float64Array(n), v = new Float64Array(n), s = new Float64Array(n), t = new Float64Array(n);
-  const pHat = new Float64Array(n), sHat = new Float64Array(n);
+  const x = new Float64Array(n),
+    r = new Float64Array(n),
+    rHat = new Float64Array(n);
+  const p = new Float64Array(n),
+    v = new Float64Array(n),
+    s = new Float64Array(n),
+    t = new Float64Array(n);
+  const pHat = new Float64Array(n),
+    sHat = new Float64Array(n);
   const dot = (a: Float64Array, b: Float64Array) => {
     let acc = 0;
     for (let k = 0; k < n; k++) acc += a[k] * b[k];
@@ -128,7 +146,10 @@ export function solveSteady(op: TransportOperator, source: Float64Array, toleran
   };
   const bNorm = Math.sqrt(dot(source, source));
   if (bNorm === 0) return { field: x, iterations: 0, relativeResidual: 0 };
-  let rho = 1, alpha = 1, omega = 1, restarts = 0;
+  let rho = 1,
+    alpha = 1,
+    omega = 1,
+    restarts = 0;
   // BiCGSTAB can break down (rHat nearly orthogonal to the residual); restart from the current x.
   const restart = () => {
     if (++restarts > 50) throw new Error("transport: BiCGSTAB kept breaking down");

@@ -14,11 +14,13 @@ export interface WalkMap {
 }
 
 export function buildWalkMap(grid: Grid, fixtureMask: Uint8Array, factor = 2): WalkMap {
-  const nx = Math.floor(grid.nx / factor), ny = Math.floor(grid.ny / factor);
+  const nx = Math.floor(grid.nx / factor),
+    ny = Math.floor(grid.ny / factor);
   const cost = new Float64Array(nx * ny);
   for (let j = 0; j < ny; j++) {
     for (let i = 0; i < nx; i++) {
-      let blocked = false, inCase = false;
+      let blocked = false,
+        inCase = false;
       for (let dj = 0; dj < factor; dj++) {
         for (let di = 0; di < factor; di++) {
           const k = (j * factor + dj) * grid.nx + i * factor + di;
@@ -36,12 +38,16 @@ function nearestOpen(map: WalkMap, p: Point): number {
   const ci = Math.min(map.nx - 1, Math.max(0, Math.floor(p[0] / map.size)));
   const cj = Math.min(map.ny - 1, Math.max(0, Math.floor(p[1] / map.size)));
   for (let r = 0; r < 12; r++) {
-    let best = -1, bestD = Infinity;
+    let best = -1,
+      bestD = Infinity;
     for (let j = cj - r; j <= cj + r; j++) {
       for (let i = ci - r; i <= ci + r; i++) {
         if (i < 0 || j < 0 || i >= map.nx || j >= map.ny || !map.cost[j * map.nx + i]) continue;
         const d = Math.hypot((i + 0.5) * map.size - p[0], (j + 0.5) * map.size - p[1]);
-        if (d < bestD) { bestD = d; best = j * map.nx + i; }
+        if (d < bestD) {
+          bestD = d;
+          best = j * map.nx + i;
+        }
       }
     }
     if (best >= 0) return best;
@@ -52,7 +58,8 @@ function nearestOpen(map: WalkMap, p: Point): number {
 /** Waypoints from a to b (excluding a, including b). */
 export function findWalkPath(map: WalkMap, a: Point, b: Point): Point[] {
   const { nx, ny, cost, size } = map;
-  const start = nearestOpen(map, a), goal = nearestOpen(map, b);
+  const start = nearestOpen(map, a),
+    goal = nearestOpen(map, b);
   const dist = new Float64Array(nx * ny).fill(Infinity);
   const prev = new Int32Array(nx * ny).fill(-1);
   const heap: [number, number][] = [];
@@ -73,7 +80,8 @@ export function findWalkPath(map: WalkMap, a: Point, b: Point): Point[] {
       heap[0] = last;
       let c = 0;
       for (;;) {
-        const l = 2 * c + 1, r = l + 1;
+        const l = 2 * c + 1,
+          r = l + 1;
         let m = c;
         if (l < heap.length && heap[l][0] < heap[m][0]) m = l;
         if (r < heap.length && heap[r][0] < heap[m][0]) m = r;
@@ -90,17 +98,23 @@ export function findWalkPath(map: WalkMap, a: Point, b: Point): Point[] {
     const [d, k] = pop();
     if (d > dist[k]) continue; // stale entry
     if (k === goal) break;
-    const i = k % nx, j = (k - i) / nx;
+    const i = k % nx,
+      j = (k - i) / nx;
     for (let dj = -1; dj <= 1; dj++) {
       for (let di = -1; di <= 1; di++) {
         if (!di && !dj) continue;
-        const ii = i + di, jj = j + dj;
+        const ii = i + di,
+          jj = j + dj;
         if (ii < 0 || jj < 0 || ii >= nx || jj >= ny) continue;
         const n = jj * nx + ii;
         if (!cost[n]) continue;
         if (di && dj && (!cost[j * nx + ii] || !cost[jj * nx + i])) continue;
         const nd = d + cost[n] * (di && dj ? Math.SQRT2 : 1);
-        if (nd < dist[n]) { dist[n] = nd; prev[n] = k; push(nd, n); }
+        if (nd < dist[n]) {
+          dist[n] = nd;
+          prev[n] = k;
+          push(nd, n);
+        }
       }
     }
   }

@@ -32,14 +32,30 @@ export async function loadAnalysisInputs(ctx: AppContext, sweepId: string): Prom
       const [sweep] = await tx.select().from(sweeps).where(eq(sweeps.id, sweepId));
       if (!sweep) throw notFound("That sweep");
       const rows = await tx
-        .select({ id: readings.id, x: readings.x, y: readings.y, takenAt: readings.takenAt, ppm: readings.ppm, atLeast: readings.atLeast, samplePoint: readings.samplePoint, note: readings.note })
+        .select({
+          id: readings.id,
+          x: readings.x,
+          y: readings.y,
+          takenAt: readings.takenAt,
+          ppm: readings.ppm,
+          atLeast: readings.atLeast,
+          samplePoint: readings.samplePoint,
+          note: readings.note,
+        })
         .from(readings)
         .where(eq(readings.sweepId, sweepId))
         .orderBy(asc(readings.takenAt), asc(readings.id));
       const [planRow] = await tx.select().from(plans).where(eq(plans.id, sweep.planId));
       const bounds = planRow ? planBounds(planRow) : null;
-      if (!bounds) throw badRequest("The sweep's plan has no size in metres yet: calibrate it first.", { planId: "plan is not calibrated" });
-      const fixtureRows = await tx.select().from(fixtures).where(eq(fixtures.planId, sweep.planId)).orderBy(asc(fixtures.position));
+      if (!bounds)
+        throw badRequest("The sweep's plan has no size in metres yet: calibrate it first.", {
+          planId: "plan is not calibrated",
+        });
+      const fixtureRows = await tx
+        .select()
+        .from(fixtures)
+        .where(eq(fixtures.planId, sweep.planId))
+        .orderBy(asc(fixtures.position));
       const [det] = await tx.select({ name: detectors.name }).from(detectors).where(eq(detectors.id, sweep.detectorId));
       const plan = toLocatorPlan(bounds, fixtureRows.map(rowToFixture), { fansRunning: sweep.fans === "running" });
       const labels = new Map(fixtureRows.map((f) => [f.id.toLowerCase(), f.label || f.kind.replace(/-/g, " ")]));

@@ -13,11 +13,23 @@ const storeParam = z.object({ storeId: z.uuid("must be a valid id") });
 
 export function analysisRouter(ctx: AppContext): Router {
   const router = Router();
-  router.get("/sweeps/:id/analysis", requireMember("stores.read"), validate(idParam, "params"), validate(analysisQuery, "query"), async (req, res) => {
-    res.json(await getAnalysis(ctx, member(req), res.locals.params.id, res.locals.query));
-  });
-  router.get("/stores/:storeId/fixture-trends", requireMember("stores.read"), validate(storeParam, "params"), validate(fixtureTrendsQuery, "query"), async (req, res) => {
-    res.json(await fixtureTrends(ctx, member(req), res.locals.params.storeId, res.locals.query));
-  });
+  router.get(
+    "/sweeps/:id/analysis",
+    requireMember("stores.read"),
+    validate(idParam, "params"),
+    validate(analysisQuery, "query"),
+    async (req, res) => {
+      res.json(await getAnalysis(ctx, member(req), res.locals.params.id, res.locals.query));
+    },
+  );
+  router.get(
+    "/stores/:storeId/fixture-trends",
+    requireMember("stores.read"),
+    validate(storeParam, "params"),
+    validate(fixtureTrendsQuery, "query"),
+    async (req, res) => {
+      res.json(await fixtureTrends(ctx, member(req), res.locals.params.storeId, res.locals.query));
+    },
+  );
   return router;
 }

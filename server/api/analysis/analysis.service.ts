@@ -40,10 +40,18 @@ function problemFields(problems: readonly string[]): Record<string, string> {
 }
 
 function invalid(problems: readonly string[]): HttpError {
-  return new HttpError(400, "validation_failed", `The sweep cannot be analysed: ${problems.join("; ")}`, problemFields(problems));
+  return new HttpError(
+    400,
+    "validation_failed",
+    `The sweep cannot be analysed: ${problems.join("; ")}`,
+    problemFields(problems),
+  );
 }
 
-export function sweepParams(sweep: SweepRow, q: Pick<AnalysisQuery, "transportDelayS" | "timeConstantS">): AnalysisParams {
+export function sweepParams(
+  sweep: SweepRow,
+  q: Pick<AnalysisQuery, "transportDelayS" | "timeConstantS">,
+): AnalysisParams {
   return {
     transportDelayS: q.transportDelayS ?? sweep.transportDelayS,
     timeConstantS: q.timeConstantS ?? sweep.timeConstantS,
@@ -77,7 +85,16 @@ async function compute(ctx: AppContext, sweepId: string, params: AnalysisParams)
     candidates: result.candidates.map((c) => ({ ...c, reason: named(c.reason), nextCheck: named(c.nextCheck) })),
     background: result.background,
     diagnostics: [
-      ...detectorDiagnostics({ name: detectorName, transportDelayS: sweep.transportDelayS, timeConstantS: sweep.timeConstantS, alarmPpm: sweep.alarmPpm, overdueMessage: overdue }, params),
+      ...detectorDiagnostics(
+        {
+          name: detectorName,
+          transportDelayS: sweep.transportDelayS,
+          timeConstantS: sweep.timeConstantS,
+          alarmPpm: sweep.alarmPpm,
+          overdueMessage: overdue,
+        },
+        params,
+      ),
       ...result.diagnostics.map((d) => ({ ...d, message: named(d.message) })),
     ],
     assumptions: result.assumptions,
@@ -138,12 +155,24 @@ function toResponse(row: AnalysisRow, sweep: SweepRow, recomputing: boolean): An
   };
 }
 
-export async function cachedAnalysis(ctx: AppContext, sweepId: string, params: AnalysisParams): Promise<AnalysisRow | undefined> {
-  const [row] = await ctx.db.select().from(analyses).where(and(eq(analyses.sweepId, sweepId), eq(analyses.paramsKey, paramsKey(params))));
+export async function cachedAnalysis(
+  ctx: AppContext,
+  sweepId: string,
+  params: AnalysisParams,
+): Promise<AnalysisRow | undefined> {
+  const [row] = await ctx.db
+    .select()
+    .from(analyses)
+    .where(and(eq(analyses.sweepId, sweepId), eq(analyses.paramsKey, paramsKey(params))));
   return row;
 }
 
-export async function getAnalysis(ctx: AppContext, viewer: Viewer, sweepId: string, q: AnalysisQuery): Promise<AnalysisResponse> {
+export async function getAnalysis(
+  ctx: AppContext,
+  viewer: Viewer,
+  sweepId: string,
+  q: AnalysisQuery,
+): Promise<AnalysisResponse> {
   const sweep = await loadVisibleSweep(ctx, viewer, sweepId);
   const params = sweepParams(sweep, q);
   const row = await cachedAnalysis(ctx, sweepId, params);
@@ -154,14 +183,24 @@ export async function getAnalysis(ctx: AppContext, viewer: Viewer, sweepId: stri
     return toResponse(row, sweep, true);
   }
   const fresh = await computeOnce(ctx, sweep, params);
-  return toResponse(fresh, { ...sweep, readingsRevision: Math.max(sweep.readingsRevision, fresh.readingsRevision) }, false);
+  return toResponse(
+    fresh,
+    { ...sweep, readingsRevision: Math.max(sweep.readingsRevision, fresh.readingsRevision) },
+    false,
+  );
 }
 
 /** The decoded grid of a stored analysis (for reports and comparisons on the server). */
 export function rowField(row: AnalysisRow) {
   const conf = new Float32Array(row.fieldConfidence.length);
   for (let i = 0; i < conf.length; i++) conf[i] = row.fieldConfidence[i] / 255;
-  return { width: row.fieldWidth, height: row.fieldHeight, cellSize: row.cellSize, values: bytesToFloat32(new Uint8Array(row.fieldValues)), confidence: conf };
+  return {
+    width: row.fieldWidth,
+    height: row.fieldHeight,
+    cellSize: row.cellSize,
+    values: bytesToFloat32(new Uint8Array(row.fieldValues)),
+    confidence: conf,
+  };
 }
 
 /** The fresh analysis at the sweep's own settings, computing it when needed (reports, compare). */
@@ -171,5 +210,3 @@ export async function ensureAnalysis(ctx: AppContext, sweep: SweepRow): Promise<
   if (row && row.readingsRevision === sweep.readingsRevision) return row;
   return computeOnce(ctx, sweep, params);
 }
-
-

@@ -31,7 +31,15 @@ const LEAK = { x: 12, y: 3 };
 const caseWalk = () => caseWalkReadings(startedAt, LEAK);
 
 async function startSweep(a: Agent, detectorId = diodeId, body: Record<string, unknown> = {}) {
-  const res = await a.post(`/api/stores/${co.store.id}/sweeps`, { id: crypto.randomUUID(), planId, detectorId, fans: "stopped", defrost: false, startedAt: startedAt.toISOString(), ...body });
+  const res = await a.post(`/api/stores/${co.store.id}/sweeps`, {
+    id: crypto.randomUUID(),
+    planId,
+    detectorId,
+    fans: "stopped",
+    defrost: false,
+    startedAt: startedAt.toISOString(),
+    ...body,
+  });
   expect(res.status, JSON.stringify(res.body)).toBe(201);
   return res.body.id as string;
 }
@@ -57,8 +65,20 @@ beforeAll(async () => {
   });
   expect(put.status, JSON.stringify(put.body)).toBe(200);
   const today = new Date().toISOString().slice(0, 10);
-  const [d] = await t.ctx.db.insert(detectors).values({ companyId: co.company.id, name: "Diode sniffer", principle: "heated-diode", lastCheckedOn: today }).returning();
-  const [o] = await t.ctx.db.insert(detectors).values({ companyId: co.company.id, name: "Old sniffer", principle: "heated-diode", lastCheckedOn: "2020-01-01", alarmPpm: 25 }).returning();
+  const [d] = await t.ctx.db
+    .insert(detectors)
+    .values({ companyId: co.company.id, name: "Diode sniffer", principle: "heated-diode", lastCheckedOn: today })
+    .returning();
+  const [o] = await t.ctx.db
+    .insert(detectors)
+    .values({
+      companyId: co.company.id,
+      name: "Old sniffer",
+      principle: "heated-diode",
+      lastCheckedOn: "2020-01-01",
+      alarmPpm: 25,
+    })
+    .returning();
   diodeId = d.id;
   overdueId = o.id;
 });
@@ -73,7 +93,13 @@ describe("GET /api/sweeps/:id/analysis", () => {
     const res = await (await as("engineer")).get(`/api/sweeps/${id}/analysis`);
     expect(res.status, JSON.stringify(res.body).slice(0, 500)).toBe(200);
     const body = res.body;
-    expect(body).toMatchObject({ sweepId: id, stale: false, recomputing: false, readingsRevision: 1, params: { transportDelayS: 5, timeConstantS: 1.5, alarmPpm: 2, cellSize: 0.25 } });
+    expect(body).toMatchObject({
+      sweepId: id,
+      stale: false,
+      recomputing: false,
+      readingsRevision: 1,
+      params: { transportDelayS: 5, timeConstantS: 1.5, alarmPpm: 2, cellSize: 0.25 },
+    });
     // a 30 m × 12 m plan at 0.25 m cells is 120 × 48 cells
     const field = decodeField(body.field);
     expect([field.width, field.height]).toEqual([120, 48]);
@@ -82,11 +108,19 @@ describe("GET /api/sweeps/:id/analysis", () => {
     expect(body.readings.map((r: { readingId: string }) => r.readingId)).toEqual(readings.map((r) => r.id));
     const peak = body.readings.reduce((m: { ppm: number }, r: { ppm: number }) => (r.ppm > m.ppm ? r : m));
     expect(peak.corrected.x).toBeLessThan(peak.raw.x); // moved back along the walk (issue 5, lag correction)
-    expect(body.candidates.length, JSON.stringify({ d: body.diagnostics, r: body.readings.map((r: { ppm: number; corrected: { x: number } }) => [r.ppm, r.corrected.x]) })).toBeGreaterThan(0);
+    expect(
+      body.candidates.length,
+      JSON.stringify({
+        d: body.diagnostics,
+        r: body.readings.map((r: { ppm: number; corrected: { x: number } }) => [r.ppm, r.corrected.x]),
+      }),
+    ).toBeGreaterThan(0);
     expect(body.candidates[0].rank).toBe(1);
     // the top suspect lies nearer the leak than the highest raw reading does (issue 5's naive answer)
     const top = body.candidates[0];
-    expect(Math.hypot(top.x - LEAK.x, top.y - LEAK.y)).toBeLessThan(Math.hypot(peak.raw.x - LEAK.x, peak.raw.y - LEAK.y));
+    expect(Math.hypot(top.x - LEAK.x, top.y - LEAK.y)).toBeLessThan(
+      Math.hypot(peak.raw.x - LEAK.x, peak.raw.y - LEAK.y),
+    );
     expect(Math.hypot(top.x - LEAK.x, top.y - LEAK.y)).toBeLessThan(1.5);
     expect(top.fixtureId).toBe(caseId);
     // the locator's sentences name fixtures as drawn, never by id
@@ -105,10 +139,14 @@ describe("GET /api/sweeps/:id/analysis", () => {
     expect(slower.status).toBe(200);
     expect(slower.body.params.transportDelayS).toBe(8);
     expect(slower.body.diagnostics.map((d: { kind: string }) => d.kind)).toContain("delay-changed");
-    const peakIndex = first.body.readings.findIndex((r: { ppm: number }) => r.ppm === Math.max(...first.body.readings.map((x: { ppm: number }) => x.ppm)));
+    const peakIndex = first.body.readings.findIndex(
+      (r: { ppm: number }) => r.ppm === Math.max(...first.body.readings.map((x: { ppm: number }) => x.ppm)),
+    );
     // a longer delay moves the sample point further back (issue 5: 1 m/s × 5 s → 5 m back)
     expect(slower.body.readings[peakIndex].corrected.x).toBeLessThan(first.body.readings[peakIndex].corrected.x);
-    const rows = await t.ctx.pool.query("select params_key from analyses where sweep_id = $1 order by params_key", [id]);
+    const rows = await t.ctx.pool.query("select params_key from analyses where sweep_id = $1 order by params_key", [
+      id,
+    ]);
     expect(rows.rows).toHaveLength(2);
   });
 
@@ -121,7 +159,12 @@ describe("GET /api/sweeps/:id/analysis", () => {
     const edit = await tech.patch(`/api/sweeps/${id}/readings/${readings[2].id}`, { ppm: 40 });
     expect(edit.status, JSON.stringify(edit.body)).toBe(200);
     const stale = await eng.get(`/api/sweeps/${id}/analysis`);
-    expect(stale.body).toMatchObject({ stale: true, recomputing: true, readingsRevision: 1, currentReadingsRevision: 2 });
+    expect(stale.body).toMatchObject({
+      stale: true,
+      recomputing: true,
+      readingsRevision: 1,
+      currentReadingsRevision: 2,
+    });
     const fresh = await eng.get(`/api/sweeps/${id}/analysis?wait=true`);
     expect(fresh.body).toMatchObject({ stale: false, readingsRevision: 2, currentReadingsRevision: 2 });
     expect(fresh.body.readings[2].ppm).toBe(40);
@@ -133,14 +176,24 @@ describe("GET /api/sweeps/:id/analysis", () => {
     expect((await eng.get(`/api/sweeps/${id}/analysis`)).body.stale).toBe(false);
     const tech = await as("technician");
     const moved = readings[4] as { id: string; x: number; y: number };
-    const edit = await tech.patch(`/api/sweeps/${id}/readings/${moved.id}`, { x: moved.x + 0.5, y: 4.4, editedAt: at(600) });
+    const edit = await tech.patch(`/api/sweeps/${id}/readings/${moved.id}`, {
+      x: moved.x + 0.5,
+      y: 4.4,
+      editedAt: at(600),
+    });
     expect(edit.status, JSON.stringify(edit.body)).toBe(200);
     expect(edit.body.reading).toMatchObject({ x: moved.x + 0.5, y: 4.4 });
     const stale = await eng.get(`/api/sweeps/${id}/analysis`);
     expect(stale.body).toMatchObject({ stale: true, readingsRevision: 1, currentReadingsRevision: 2 });
     const audit = (await eng.get(`/api/sweeps/${id}/audit`)).body.entries;
     expect(audit).toHaveLength(1);
-    expect(audit[0]).toMatchObject({ action: "edit", readingId: moved.id, before: { x: moved.x, y: moved.y }, after: { x: moved.x + 0.5, y: 4.4 }, editedAt: at(600) });
+    expect(audit[0]).toMatchObject({
+      action: "edit",
+      readingId: moved.id,
+      before: { x: moved.x, y: moved.y },
+      after: { x: moved.x + 0.5, y: 4.4 },
+      editedAt: at(600),
+    });
     // The plan is 30 m x 12 m: a position outside it is refused with the field and the reason.
     const off = await tech.patch(`/api/sweeps/${id}/readings/${moved.id}`, { x: 31 });
     expect(off.status).toBe(400);
@@ -187,7 +240,9 @@ describe("GET /api/sweeps/:id/analysis", () => {
     const kinds = res.body.diagnostics.map((d: { kind: string }) => d.kind);
     expect(kinds).toContain("detector-overdue");
     expect(kinds).toContain("detector-settings");
-    expect(res.body.diagnostics.find((d: { kind: string }) => d.kind === "detector-settings").message).toMatch(/alarm level of 25 ppm/);
+    expect(res.body.diagnostics.find((d: { kind: string }) => d.kind === "detector-settings").message).toMatch(
+      /alarm level of 25 ppm/,
+    );
   });
 
   it("answers 400 with the locator's field errors for a sweep it cannot analyse, and for a bad delay", async () => {
@@ -209,7 +264,14 @@ describe("GET /api/sweeps/:id/analysis", () => {
     const owner = await as("owner");
     const p2 = await owner.post(`/api/stores/${co.otherStore.id}/plans/blank`, { width: 20, depth: 10, unit: "m" });
     const tech = await as("technician");
-    const s2 = await tech.post(`/api/stores/${co.otherStore.id}/sweeps`, { id: crypto.randomUUID(), planId: p2.body.id, detectorId: diodeId, fans: "running", defrost: false, startedAt: startedAt.toISOString() });
+    const s2 = await tech.post(`/api/stores/${co.otherStore.id}/sweeps`, {
+      id: crypto.randomUUID(),
+      planId: p2.body.id,
+      detectorId: diodeId,
+      fans: "running",
+      defrost: false,
+      startedAt: startedAt.toISOString(),
+    });
     expect(s2.status, JSON.stringify(s2.body)).toBe(201);
     expect((await (await as("store-contact")).get(`/api/sweeps/${s2.body.id}/analysis`)).status).toBe(404);
   });

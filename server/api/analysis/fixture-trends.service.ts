@@ -15,20 +15,39 @@ import { ensureAnalysis, rowField } from "./analysis.service";
 const YEAR_MS = 365 * 86_400_000;
 const AIR = new Set<string>(AIR_VOLUME_KINDS);
 
-export async function fixtureTrends(ctx: AppContext, viewer: Viewer, storeId: string, q: { a?: string; b?: string }, now = new Date()): Promise<FixtureTrends> {
+export async function fixtureTrends(
+  ctx: AppContext,
+  viewer: Viewer,
+  storeId: string,
+  q: { a?: string; b?: string },
+  now = new Date(),
+): Promise<FixtureTrends> {
   await loadVisibleStore(ctx, viewer, storeId);
   const rows = await ctx.db
     .select()
     .from(sweeps)
-    .where(and(eq(sweeps.storeId, storeId), eq(sweeps.companyId, viewer.companyId), ne(sweeps.status, "in-progress"), gte(sweeps.startedAt, new Date(now.getTime() - YEAR_MS))))
+    .where(
+      and(
+        eq(sweeps.storeId, storeId),
+        eq(sweeps.companyId, viewer.companyId),
+        ne(sweeps.status, "in-progress"),
+        gte(sweeps.startedAt, new Date(now.getTime() - YEAR_MS)),
+      ),
+    )
     .orderBy(asc(sweeps.startedAt));
   const ids = rows.map((r) => r.id);
-  for (const [k, v] of Object.entries(q)) if (v && !ids.includes(v)) throw badRequest(`${k}: that sweep is not one of this store's sweeps of the last 12 months`, { [k]: "not a sweep of this store in the last 12 months" });
+  for (const [k, v] of Object.entries(q))
+    if (v && !ids.includes(v))
+      throw badRequest(`${k}: that sweep is not one of this store's sweeps of the last 12 months`, {
+        [k]: "not a sweep of this store in the last 12 months",
+      });
   const b = q.b ?? ids[ids.length - 1] ?? null;
   const a = q.a ?? ids[ids.indexOf(b ?? "") - 1] ?? null;
 
   const planIds = [...new Set(rows.map((r) => r.planId))];
-  const fixtureRows = planIds.length ? await ctx.db.select().from(fixtures).where(inArray(fixtures.planId, planIds)) : [];
+  const fixtureRows = planIds.length
+    ? await ctx.db.select().from(fixtures).where(inArray(fixtures.planId, planIds))
+    : [];
   const byPlan = new Map<string, typeof fixtureRows>();
   for (const f of fixtureRows) {
     if (!AIR.has(f.kind) || !f.polygon) continue;
@@ -38,7 +57,7 @@ export async function fixtureTrends(ctx: AppContext, viewer: Viewer, storeId: st
   }
   // labels and order from the latest plan a fixture appears on
   const meta = new Map<string, { label: string; kind: string }>();
-  const levels = new Map<string, (FixtureTrends["fixtures"][number]["levels"][number])[]>();
+  const levels = new Map<string, FixtureTrends["fixtures"][number]["levels"][number][]>();
   for (const [i, s] of rows.entries()) {
     let field = null;
     try {
@@ -62,5 +81,10 @@ export async function fixtureTrends(ctx: AppContext, viewer: Viewer, storeId: st
     return { id, ...meta.get(id)!, levels: list, change: la && lb ? lb.peakPpm - la.peakPpm : null };
   });
   out.sort((x, y) => (y.change ?? -Infinity) - (x.change ?? -Infinity) || x.label.localeCompare(y.label));
-  return { sweeps: rows.map((r) => ({ id: r.id, startedAt: r.startedAt.toISOString(), planId: r.planId, status: r.status })), a, b, fixtures: out };
+  return {
+    sweeps: rows.map((r) => ({ id: r.id, startedAt: r.startedAt.toISOString(), planId: r.planId, status: r.status })),
+    a,
+    b,
+    fixtures: out,
+  };
 }

@@ -15,7 +15,13 @@ import { HttpError } from "../../lib/http-error";
 import { readAuth, requireUser } from "../../middleware/auth";
 import { rotateCsrfToken } from "../../middleware/csrf";
 import { validate } from "../../middleware/validate";
-import { confirmPasswordReset, endSession, requestPasswordReset, startSession, verifyCredentials } from "./auth.service";
+import {
+  confirmPasswordReset,
+  endSession,
+  requestPasswordReset,
+  startSession,
+  verifyCredentials,
+} from "./auth.service";
 import { listMemberships, sessionInfo } from "./session-info";
 
 export function authRouter(ctx: AppContext): Router {
@@ -30,7 +36,10 @@ export function authRouter(ctx: AppContext): Router {
     keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? "")}|${String(req.body?.email ?? "").toLowerCase()}`,
     handler: (_req, res) => {
       res.status(429).json({
-        error: { code: "rate_limited", message: `Too many sign-in attempts. Wait ${minutes} minute${minutes === 1 ? "" : "s"} and try again.` },
+        error: {
+          code: "rate_limited",
+          message: `Too many sign-in attempts. Wait ${minutes} minute${minutes === 1 ? "" : "s"} and try again.`,
+        },
       });
     },
   });
@@ -64,7 +73,8 @@ export function authRouter(ctx: AppContext): Router {
 
   router.post("/auth/switch-company", requireUser, validate(switchCompanyInput), async (req, res) => {
     const list = await listMemberships(ctx, req.auth!.user.id);
-    if (!list.some((m) => m.companyId === req.body.companyId)) throw new HttpError(404, "not_found", "That company was not found.");
+    if (!list.some((m) => m.companyId === req.body.companyId))
+      throw new HttpError(404, "not_found", "That company was not found.");
     req.session.activeCompanyId = req.body.companyId;
     rotateCsrfToken(req);
     req.auth = await readAuth(ctx.db, req.session);

@@ -20,7 +20,8 @@ export async function hashPassword(ctx: AppContext, password: string): Promise<s
 export async function verifyCredentials(ctx: AppContext, email: string, password: string) {
   const [user] = await ctx.db.select().from(users).where(eq(users.email, email));
   const ok = await bcrypt.compare(password, user?.passwordHash ?? DUMMY_HASH);
-  if (!user || !ok) throw new HttpError(401, "invalid_credentials", "That e-mail and password do not match an account.");
+  if (!user || !ok)
+    throw new HttpError(401, "invalid_credentials", "That e-mail and password do not match an account.");
   return user;
 }
 
@@ -43,7 +44,9 @@ export async function requestPasswordReset(ctx: AppContext, email: string) {
   const [user] = await ctx.db.select().from(users).where(eq(users.email, email));
   if (!user) return; // same answer either way: the endpoint must not reveal who has an account
   const { token, hash } = newLinkToken();
-  await ctx.db.insert(passwordResets).values({ userId: user.id, tokenHash: hash, expiresAt: new Date(Date.now() + RESET_VALID_MS) });
+  await ctx.db
+    .insert(passwordResets)
+    .values({ userId: user.id, tokenHash: hash, expiresAt: new Date(Date.now() + RESET_VALID_MS) });
   const mail = passwordResetMail({ name: user.name, link: `${ctx.config.appUrl}/reset-password/${token}` });
   await ctx.mailer.send({ to: user.email, ...mail });
 }
@@ -54,8 +57,17 @@ export async function confirmPasswordReset(ctx: AppContext, token: string, passw
     const [reset] = await tx
       .select()
       .from(passwordResets)
-      .where(and(eq(passwordResets.tokenHash, hashToken(token)), isNull(passwordResets.usedAt), gt(passwordResets.expiresAt, new Date())));
-    if (!reset) throw new HttpError(400, "invalid_token", "This reset link is not valid any more. Ask for a new one.", { token: "is expired or already used" });
+      .where(
+        and(
+          eq(passwordResets.tokenHash, hashToken(token)),
+          isNull(passwordResets.usedAt),
+          gt(passwordResets.expiresAt, new Date()),
+        ),
+      );
+    if (!reset)
+      throw new HttpError(400, "invalid_token", "This reset link is not valid any more. Ask for a new one.", {
+        token: "is expired or already used",
+      });
     await tx.update(passwordResets).set({ usedAt: new Date() }).where(eq(passwordResets.id, reset.id));
     await tx.update(users).set({ passwordHash }).where(eq(users.id, reset.userId));
   });

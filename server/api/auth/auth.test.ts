@@ -55,7 +55,10 @@ describe("sign-in", () => {
     const agent = request.agent(t.app);
     const first = await agent.get("/api/auth/session");
     const before = first.headers["set-cookie"]?.[0]?.split(";")[0];
-    const res = await agent.post("/api/auth/sign-in").set("X-CSRF-Token", first.body.csrfToken).send({ email: acme.people.owner.email, password: PASSWORD });
+    const res = await agent
+      .post("/api/auth/sign-in")
+      .set("X-CSRF-Token", first.body.csrfToken)
+      .send({ email: acme.people.owner.email, password: PASSWORD });
     const after = res.headers["set-cookie"]?.[0]?.split(";")[0];
     expect(before).toBeTruthy();
     expect(after).toBeTruthy();
@@ -81,7 +84,10 @@ describe("CSRF", () => {
     const none = await agent.post("/api/auth/sign-in").send({ email: acme.people.owner.email, password: PASSWORD });
     expect(none.status).toBe(403);
     expect(none.body.error.code).toBe("csrf_failed");
-    const wrong = await agent.post("/api/auth/sign-in").set("X-CSRF-Token", "x".repeat(43)).send({ email: acme.people.owner.email, password: PASSWORD });
+    const wrong = await agent
+      .post("/api/auth/sign-in")
+      .set("X-CSRF-Token", "x".repeat(43))
+      .send({ email: acme.people.owner.email, password: PASSWORD });
     expect(wrong.status).toBe(403);
   });
 
@@ -113,7 +119,9 @@ describe("rate limit", () => {
       const c = await seedCompany(limited.ctx, "Quill Grocers");
       const a = await agentFor(limited.app);
       for (let i = 0; i < 3; i++) {
-        expect((await a.post("/api/auth/sign-in", { email: c.people.owner.email, password: "wrong password" })).status).toBe(401);
+        expect(
+          (await a.post("/api/auth/sign-in", { email: c.people.owner.email, password: "wrong password" })).status,
+        ).toBe(401);
       }
       const blocked = await a.post("/api/auth/sign-in", { email: c.people.owner.email, password: PASSWORD });
       expect(blocked.status).toBe(429);
@@ -134,11 +142,22 @@ describe("password reset", () => {
     expect(mail.to).toEqual([acme.people.technician.email]);
     const token = mail.text.match(/reset-password\/([A-Za-z0-9_-]+)/)?.[1];
     expect(token).toBeTruthy();
-    expect((await a.post("/api/auth/password-reset/confirm", { token, password: "short" })).body.error.fields.password).toMatch(/at least 10/);
-    expect((await a.post("/api/auth/password-reset/confirm", { token, password: "a brand new passphrase" })).status).toBe(204);
-    expect((await a.post("/api/auth/password-reset/confirm", { token, password: "a second passphrase" })).status).toBe(400);
-    expect((await a.post("/api/auth/sign-in", { email: acme.people.technician.email, password: PASSWORD })).status).toBe(401);
-    expect((await a.post("/api/auth/sign-in", { email: acme.people.technician.email, password: "a brand new passphrase" })).status).toBe(200);
+    expect(
+      (await a.post("/api/auth/password-reset/confirm", { token, password: "short" })).body.error.fields.password,
+    ).toMatch(/at least 10/);
+    expect(
+      (await a.post("/api/auth/password-reset/confirm", { token, password: "a brand new passphrase" })).status,
+    ).toBe(204);
+    expect((await a.post("/api/auth/password-reset/confirm", { token, password: "a second passphrase" })).status).toBe(
+      400,
+    );
+    expect(
+      (await a.post("/api/auth/sign-in", { email: acme.people.technician.email, password: PASSWORD })).status,
+    ).toBe(401);
+    expect(
+      (await a.post("/api/auth/sign-in", { email: acme.people.technician.email, password: "a brand new passphrase" }))
+        .status,
+    ).toBe(200);
   });
 
   it("answers the same for an unknown e-mail and sends nothing", async () => {

@@ -20,9 +20,20 @@ const METRIC = { length: "m", mass: "kg" } as const;
 export async function sessionInfo(ctx: AppContext, req: Request): Promise<SessionInfo> {
   const csrfToken = issueCsrfToken(req);
   const auth = req.auth;
-  if (!auth) return { user: null, activeCompanyId: null, memberships: [], csrfToken, outboxEnabled: ctx.config.outboxEnabled, units: METRIC };
+  if (!auth)
+    return {
+      user: null,
+      activeCompanyId: null,
+      memberships: [],
+      csrfToken,
+      outboxEnabled: ctx.config.outboxEnabled,
+      units: METRIC,
+    };
   const [company] = auth.membership
-    ? await ctx.db.select({ length: companies.lengthUnit, mass: companies.massUnit }).from(companies).where(eq(companies.id, auth.membership.companyId))
+    ? await ctx.db
+        .select({ length: companies.lengthUnit, mass: companies.massUnit })
+        .from(companies)
+        .where(eq(companies.id, auth.membership.companyId))
     : [METRIC];
   return {
     user: auth.user,

@@ -27,7 +27,10 @@ export function companyRouter(ctx: AppContext): Router {
 
   router.put("/company/settings", requireMember("settings.manage"), validate(companySettings), async (req, res) => {
     const companyId = member(req).companyId;
-    await ctx.db.update(companies).set(req.body as CompanySettings).where(eq(companies.id, companyId));
+    await ctx.db
+      .update(companies)
+      .set(req.body as CompanySettings)
+      .where(eq(companies.id, companyId));
     res.json(await readSettings(ctx, companyId));
   });
 

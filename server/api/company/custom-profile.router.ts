@@ -14,15 +14,31 @@ export function customProfileRouter(ctx: AppContext): Router {
     res.json(await readCustomProfile(ctx, member(req).companyId));
   });
 
-  router.post("/company/custom-profile/start", requireMember("settings.manage"), validate(startCustomProfileInput), async (req, res) => {
-    const m = member(req);
-    res.status(201).json(await startFrom(ctx, m.companyId, req.auth!.user.id, (req.body as { from: "us-federal" | "eu-fgas" }).from));
-  });
+  router.post(
+    "/company/custom-profile/start",
+    requireMember("settings.manage"),
+    validate(startCustomProfileInput),
+    async (req, res) => {
+      const m = member(req);
+      res
+        .status(201)
+        .json(
+          await startFrom(ctx, m.companyId, req.auth!.user.id, (req.body as { from: "us-federal" | "eu-fgas" }).from),
+        );
+    },
+  );
 
-  router.put("/company/custom-profile", requireMember("settings.manage"), validate(ruleProfileSchema), async (req, res) => {
-    const m = member(req);
-    res.json(await saveCustomProfile(ctx, m.companyId, req.auth!.user.id, req.body as RuleProfileInput as RuleProfile));
-  });
+  router.put(
+    "/company/custom-profile",
+    requireMember("settings.manage"),
+    validate(ruleProfileSchema),
+    async (req, res) => {
+      const m = member(req);
+      res.json(
+        await saveCustomProfile(ctx, m.companyId, req.auth!.user.id, req.body as RuleProfileInput as RuleProfile),
+      );
+    },
+  );
 
   return router;
 }

@@ -11,8 +11,13 @@ import { latestCustomProfile } from "../compliance/system-records";
 
 export async function readCustomProfile(ctx: AppContext, companyId: string): Promise<CustomProfileView> {
   const row = await latestCustomProfile(ctx, companyId);
-  const [c] = await ctx.db.select({ ruleProfile: companies.ruleProfile }).from(companies).where(eq(companies.id, companyId));
-  const by = row ? (await ctx.db.select({ name: users.name }).from(users).where(eq(users.id, row.savedById)))[0]?.name ?? null : null;
+  const [c] = await ctx.db
+    .select({ ruleProfile: companies.ruleProfile })
+    .from(companies)
+    .where(eq(companies.id, companyId));
+  const by = row
+    ? ((await ctx.db.select({ name: users.name }).from(users).where(eq(users.id, row.savedById)))[0]?.name ?? null)
+    : null;
   return {
     profile: row ? (row.profile as RuleProfileInput) : null,
     savedAt: row?.savedAt.toISOString() ?? null,
@@ -25,7 +30,12 @@ export async function readCustomProfile(ctx: AppContext, companyId: string): Pro
  * Stores a new version of the company's custom profile. zod has checked the shape (the router);
  * the domain check runs too, so a profile the rule functions cannot use is never stored.
  */
-export async function saveCustomProfile(ctx: AppContext, companyId: string, userId: string, profile: RuleProfile): Promise<CustomProfileView> {
+export async function saveCustomProfile(
+  ctx: AppContext,
+  companyId: string,
+  userId: string,
+  profile: RuleProfile,
+): Promise<CustomProfileView> {
   try {
     validateRuleProfile(profile);
   } catch (err) {
@@ -39,6 +49,11 @@ export async function saveCustomProfile(ctx: AppContext, companyId: string, user
 }
 
 /** Starts (or starts over) from an unedited copy of a built-in profile. */
-export function startFrom(ctx: AppContext, companyId: string, userId: string, from: BuiltInProfileId): Promise<CustomProfileView> {
+export function startFrom(
+  ctx: AppContext,
+  companyId: string,
+  userId: string,
+  from: BuiltInProfileId,
+): Promise<CustomProfileView> {
   return saveCustomProfile(ctx, companyId, userId, startCustomProfile(from));
 }

@@ -17,10 +17,21 @@ afterAll(() => t.close());
 
 const signedIn = (role: Role, company = co): Promise<Agent> => signInOnceAs(company.people[role]);
 
-const settings = (ruleProfile: string) => ({ name: "Bramblegate Foods", lengthUnit: "m", massUnit: "kg", ruleProfile, leakRateMethod: "annualizing", detectorCheckIntervalDays: 30 });
+const settings = (ruleProfile: string) => ({
+  name: "Bramblegate Foods",
+  lengthUnit: "m",
+  massUnit: "kg",
+  ruleProfile,
+  leakRateMethod: "annualizing",
+  detectorCheckIntervalDays: 30,
+});
 
 async function newSystem(body: object) {
-  const res = await (await signedIn("lead-tech")).post(`/api/stores/${co.store.id}/systems`, { applianceType: "commercial-refrigeration", automaticLeakDetection: false, ...body });
+  const res = await (await signedIn("lead-tech")).post(`/api/stores/${co.store.id}/systems`, {
+    applianceType: "commercial-refrigeration",
+    automaticLeakDetection: false,
+    ...body,
+  });
   expect(res.status).toBe(201);
   return res.body.id as string;
 }
@@ -32,10 +43,14 @@ describe("the custom rule profile", () => {
     expect(none.status).toBe(200);
     expect(none.body).toMatchObject({ profile: null, inForce: false });
     expect((await engineer.post("/api/company/custom-profile/start", { from: "us-federal" })).status).toBe(403);
-    expect((await (await signedIn("technician")).post("/api/company/custom-profile/start", { from: "us-federal" })).status).toBe(403);
+    expect(
+      (await (await signedIn("technician")).post("/api/company/custom-profile/start", { from: "us-federal" })).status,
+    ).toBe(403);
 
     const owner = await signedIn("owner");
-    expect((await owner.post("/api/company/custom-profile/start", { from: "nowhere" })).body.error.fields).toEqual({ from: "must be us-federal or eu-fgas" });
+    expect((await owner.post("/api/company/custom-profile/start", { from: "nowhere" })).body.error.fields).toEqual({
+      from: "must be us-federal or eu-fgas",
+    });
     const started = await owner.post("/api/company/custom-profile/start", { from: "us-federal" });
     expect(started.status).toBe(201);
     // An unedited copy: 40 CFR 82.157(c) / 84.106 thresholds, 20 % for commercial refrigeration [S:R1, S:R4].
@@ -57,31 +72,58 @@ describe("the custom rule profile", () => {
     };
     const negative = await edit((p) => (p.leakRateParts[0].thresholds["comfort-cooling"].value = -5));
     expect(negative.status).toBe(400);
-    expect(negative.body.error.fields).toEqual({ "leakRateParts.0.thresholds.comfort-cooling.value": "must be above 0 (% per year)" });
+    expect(negative.body.error.fields).toEqual({
+      "leakRateParts.0.thresholds.comfort-cooling.value": "must be above 0 (% per year)",
+    });
     const unsourced = await edit((p) => (p.leakRateParts[1].repairDays.source = "  "));
-    expect(unsourced.body.error.fields).toEqual({ "leakRateParts.1.repairDays.source": "is required (a citation, or who set the value and why)" });
+    expect(unsourced.body.error.fields).toEqual({
+      "leakRateParts.1.repairDays.source": "is required (a citation, or who set the value and why)",
+    });
     const fractional = await edit((p) => (p.leakRateParts[1].repairDays.value = 14.5));
-    expect(fractional.body.error.fields).toEqual({ "leakRateParts.1.repairDays.value": "must be a whole number of days" });
+    expect(fractional.body.error.fields).toEqual({
+      "leakRateParts.1.repairDays.value": "must be a whole number of days",
+    });
     // The domain check runs after zod: a chronic-leaker report date that is no calendar day.
     const feb30 = await edit((p) => (p.leakRateParts[1].chronicLeaker.reportBy.value = { month: 2, day: 30 }));
     expect(feb30.status).toBe(400);
-    expect(feb30.body.error.fields).toEqual({ "leakRateParts.1.chronicLeaker.reportBy.value.day": "must be a day from 1 to 28 in month 2 (one that every year has), got 30" });
+    expect(feb30.body.error.fields).toEqual({
+      "leakRateParts.1.chronicLeaker.reportBy.value.day":
+        "must be a day from 1 to 28 in month 2 (one that every year has), got 30",
+    });
   });
 
   it("is used for thresholds and the repair deadline once the company chooses it", async () => {
     const owner = await signedIn("owner");
     const p = (await owner.get("/api/company/custom-profile")).body.profile;
     const part = p.leakRateParts[1];
-    part.thresholds["commercial-refrigeration"] = { value: 15, source: "company policy: 15 % for retail food since the 2026 audit" };
+    part.thresholds["commercial-refrigeration"] = {
+      value: 15,
+      source: "company policy: 15 % for retail food since the 2026 audit",
+    };
     part.repairDays = { value: 14, source: "company policy: repair within 14 days" };
     const saved = await owner.put("/api/company/custom-profile", p);
     expect(saved.status).toBe(200);
     expect(saved.body.profile.leakRateParts[1].repairDays.value).toBe(14);
 
-    const systemId = await newSystem({ name: "Rack C", refrigerantId: "R-448A", fullCharge: { value: 100, unit: "lb" } });
+    const systemId = await newSystem({
+      name: "Rack C",
+      refrigerantId: "R-448A",
+      fullCharge: { value: 100, unit: "lb" },
+    });
     const tech = await signedIn("technician");
-    for (const [addedOn, value] of [["2026-02-01", 10], ["2026-03-03", 1.5]] as const) {
-      expect((await tech.post(`/api/systems/${systemId}/charge-additions`, { addedOn, amount: { value, unit: "lb" }, reason: "Low receiver level" })).status).toBe(201);
+    for (const [addedOn, value] of [
+      ["2026-02-01", 10],
+      ["2026-03-03", 1.5],
+    ] as const) {
+      expect(
+        (
+          await tech.post(`/api/systems/${systemId}/charge-additions`, {
+            addedOn,
+            amount: { value, unit: "lb" },
+            reason: "Low receiver level",
+          })
+        ).status,
+      ).toBe(201);
     }
     const engineer = await signedIn("engineer");
     // 40 CFR 84.102 annualizing: 1.5/100 ÷ (30/365) × 100 = 18.25 %, below the federal 20 % [S:R4].
@@ -92,14 +134,22 @@ describe("the custom rule profile", () => {
     expect((await owner.put("/api/company/settings", settings("custom"))).status).toBe(200);
     const custom = (await engineer.get(`/api/systems/${systemId}/records`)).body;
     expect(custom.profile.id).toBe("custom");
-    expect(custom.applicability).toMatchObject({ thresholdPercent: 15, thresholdSource: "company policy: 15 % for retail food since the 2026 audit" });
+    expect(custom.applicability).toMatchObject({
+      thresholdPercent: 15,
+      thresholdSource: "company policy: 15 % for retail food since the 2026 audit",
+    });
     expect(custom.latest.exceeds).toBe(true);
     // 3 Mar 2026 + 14 days = 17 Mar 2026 (the company's own deadline).
     expect(custom.latest.repairDue).toBe("2026-03-17");
     const repair = custom.due.find((d: { kind: string }) => d.kind === "repair");
-    expect(repair).toMatchObject({ dueOn: "2026-03-17", source: expect.stringContaining("company policy: repair within 14 days") });
+    expect(repair).toMatchObject({
+      dueOn: "2026-03-17",
+      source: expect.stringContaining("company policy: repair within 14 days"),
+    });
     const today = (await engineer.get("/api/today")).body;
-    expect(today.overThreshold.map((s: { systemId: string; thresholdPercent: number }) => [s.systemId, s.thresholdPercent])).toEqual([[systemId, 15]]);
+    expect(
+      today.overThreshold.map((s: { systemId: string; thresholdPercent: number }) => [s.systemId, s.thresholdPercent]),
+    ).toEqual([[systemId, 15]]);
     expect((await engineer.get("/api/company/custom-profile")).body.inForce).toBe(true);
   });
 
@@ -107,7 +157,11 @@ describe("the custom rule profile", () => {
     const owner = await signedIn("owner");
     const p = (await owner.post("/api/company/custom-profile/start", { from: "eu-fgas" })).body.profile;
     expect(p.basedOn).toBe("eu-fgas");
-    const systemId = await newSystem({ name: "Freezer line", refrigerantId: "R-404A", fullCharge: { value: 10, unit: "kg" } });
+    const systemId = await newSystem({
+      name: "Freezer line",
+      refrigerantId: "R-404A",
+      fullCharge: { value: 10, unit: "kg" },
+    });
     const engineer = await signedIn("engineer");
     // 10 kg × 3922 / 1000 = 39.22 t CO2e [S:E7]; 5–50 t: every 12 months without an LDS [S:E1].
     const before = (await engineer.get(`/api/systems/${systemId}/records`)).body;
@@ -118,7 +172,10 @@ describe("the custom rule profile", () => {
     const bad = structuredClone(p);
     bad.leakChecks.co2eBands.value[1].from = 40;
     const refused = await owner.put("/api/company/custom-profile", bad);
-    expect(refused.body.error.fields).toEqual({ "leakChecks.co2eBands.value.1.from": "must equal the band below's upper edge (50), so bands ascend without gaps or overlaps" });
+    expect(refused.body.error.fields).toEqual({
+      "leakChecks.co2eBands.value.1.from":
+        "must equal the band below's upper edge (50), so bands ascend without gaps or overlaps",
+    });
 
     // Company policy: a stricter 6-month band from 30 t.
     p.leakChecks.co2eBands = {

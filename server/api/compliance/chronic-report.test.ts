@@ -4,7 +4,10 @@ import { seedCompany } from "../../../tests/helpers/fixtures";
 import type { Role } from "#core/domain/roles";
 import { pdfText } from "../../../tests/helpers/pdf-text";
 
-const binary = (res: { on(e: string, f: (c?: Buffer) => void): void }, cb: (err: Error | null, body: Buffer) => void) => {
+const binary = (
+  res: { on(e: string, f: (c?: Buffer) => void): void },
+  cb: (err: Error | null, body: Buffer) => void,
+) => {
   const chunks: Buffer[] = [];
   res.on("data", (c) => chunks.push(c!));
   res.on("end", () => cb(null, Buffer.concat(chunks)));
@@ -29,7 +32,11 @@ describe("filing the chronic-leaker report", () => {
   beforeAll(async () => {
     const lead = await signedIn("lead-tech");
     const sys = await lead.post(`/api/stores/${co.store.id}/systems`, {
-      name: "Deli case line", refrigerantId: "R-448A", fullCharge: { value: 20, unit: "lb" }, applianceType: "commercial-refrigeration", automaticLeakDetection: false,
+      name: "Deli case line",
+      refrigerantId: "R-448A",
+      fullCharge: { value: 20, unit: "lb" },
+      applianceType: "commercial-refrigeration",
+      automaticLeakDetection: false,
     });
     expect(sys.status).toBe(201);
     systemId = sys.body.id;
@@ -37,8 +44,19 @@ describe("filing the chronic-leaker report", () => {
     const today = (await lead.get(`/api/systems/${systemId}/records`)).body.today as string;
     year = Number(today.slice(0, 4)) - 1;
     const tech = await signedIn("technician");
-    for (const [addedOn, value] of [[`${year}-03-02`, 15], [`${year}-09-01`, 12]] as const) {
-      expect((await tech.post(`/api/systems/${systemId}/charge-additions`, { addedOn, amount: { value, unit: "lb" }, reason: "Low receiver level" })).status).toBe(201);
+    for (const [addedOn, value] of [
+      [`${year}-03-02`, 15],
+      [`${year}-09-01`, 12],
+    ] as const) {
+      expect(
+        (
+          await tech.post(`/api/systems/${systemId}/charge-additions`, {
+            addedOn,
+            amount: { value, unit: "lb" },
+            reason: "Low receiver level",
+          })
+        ).status,
+      ).toBe(201);
     }
   });
 
@@ -48,7 +66,9 @@ describe("filing the chronic-leaker report", () => {
     const y = r.chronic.find((c: { year: number }) => c.year === year);
     expect(y).toMatchObject({ chronic: true, reportDue: `${year + 1}-03-01`, filed: null });
     expect(y.percent).toBeCloseTo(135, 6);
-    expect(r.due.filter((d: { kind: string }) => d.kind === "chronic-leaker-report").map((d: { dueOn: string }) => d.dueOn)).toEqual([`${year + 1}-03-01`]);
+    expect(
+      r.due.filter((d: { kind: string }) => d.kind === "chronic-leaker-report").map((d: { dueOn: string }) => d.dueOn),
+    ).toEqual([`${year + 1}-03-01`]);
   });
 
   it("is filed by engineers and owners only, for a chronic year that is over, once", async () => {
@@ -60,28 +80,52 @@ describe("filing the chronic-leaker report", () => {
     const notChronic = await engineer.post(`/api/systems/${systemId}/chronic-reports`, { ...body, year: year - 1 });
     expect(notChronic.status).toBe(400);
     expect(Object.keys(notChronic.body.error.fields)).toEqual(["year"]);
-    const early = await engineer.post(`/api/systems/${systemId}/chronic-reports`, { ...body, filedOn: `${year}-12-31` });
-    expect(early.body.error.fields).toEqual({ filedOn: `must be in ${year + 1} or later: the report covers the whole of ${year}` });
-    const future = await engineer.post(`/api/systems/${systemId}/chronic-reports`, { ...body, filedOn: `${year + 3}-01-01` });
+    const early = await engineer.post(`/api/systems/${systemId}/chronic-reports`, {
+      ...body,
+      filedOn: `${year}-12-31`,
+    });
+    expect(early.body.error.fields).toEqual({
+      filedOn: `must be in ${year + 1} or later: the report covers the whole of ${year}`,
+    });
+    const future = await engineer.post(`/api/systems/${systemId}/chronic-reports`, {
+      ...body,
+      filedOn: `${year + 3}-01-01`,
+    });
     expect(Object.keys(future.body.error.fields)).toEqual(["filedOn"]);
-    expect((await engineer.post(`/api/systems/${systemId}/chronic-reports`, { ...body, year: 1999 })).body.error.fields).toEqual({ year: "must be 2000 or later" });
+    expect(
+      (await engineer.post(`/api/systems/${systemId}/chronic-reports`, { ...body, year: 1999 })).body.error.fields,
+    ).toEqual({ year: "must be 2000 or later" });
 
     const filed = await engineer.post(`/api/systems/${systemId}/chronic-reports`, body);
     expect(filed.status).toBe(201);
     const y = filed.body.chronic.find((c: { year: number }) => c.year === year);
-    expect(y.filed).toMatchObject({ on: `${year + 1}-01-01`, by: "engineer of Wrenfield Markets", reference: "EPA-CL-0042" });
+    expect(y.filed).toMatchObject({
+      on: `${year + 1}-01-01`,
+      by: "engineer of Wrenfield Markets",
+      reference: "EPA-CL-0042",
+    });
     // The due item closes, on the records and on Today.
     expect(filed.body.due.some((d: { kind: string }) => d.kind === "chronic-leaker-report")).toBe(false);
     const today = (await engineer.get("/api/today")).body;
-    expect(today.due.some((d: { kind: string; systemId: string }) => d.kind === "chronic-leaker-report" && d.systemId === systemId)).toBe(false);
+    expect(
+      today.due.some(
+        (d: { kind: string; systemId: string }) => d.kind === "chronic-leaker-report" && d.systemId === systemId,
+      ),
+    ).toBe(false);
     // The audit trail names who did it and when.
     expect(filed.body.audit).toHaveLength(1);
-    expect(filed.body.audit[0]).toMatchObject({ action: "chronic-report-filed", by: "engineer of Wrenfield Markets", summary: `Chronic-leaker report for ${year} marked filed on ${year + 1}-01-01 (reference EPA-CL-0042)` });
+    expect(filed.body.audit[0]).toMatchObject({
+      action: "chronic-report-filed",
+      by: "engineer of Wrenfield Markets",
+      summary: `Chronic-leaker report for ${year} marked filed on ${year + 1}-01-01 (reference EPA-CL-0042)`,
+    });
 
     // The leak-rate statement carries the filing.
     const pdf = await engineer.agent.get(`/api/systems/${systemId}/leak-rate-statement.pdf`).buffer(true).parse(binary);
     const text = (await pdfText(pdf.body as Buffer)).join(" ").replace(/\s+/g, " ");
-    expect(text).toContain(`chronic leaker; report filed on ${year + 1}-01-01 by engineer of Wrenfield Markets (reference EPA-CL-0042)`);
+    expect(text).toContain(
+      `chronic leaker; report filed on ${year + 1}-01-01 by engineer of Wrenfield Markets (reference EPA-CL-0042)`,
+    );
 
     const csv = await engineer.get(`/api/systems/${systemId}/records.csv`);
     expect(csv.text).toContain(`chronic-leaker report for ${year} filed,${year + 1}-01-01`);

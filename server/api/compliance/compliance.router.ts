@@ -1,10 +1,23 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
-import { chargeAdditionInput, chargeCorrectionInput, chargeVoidInput, chronicReportInput, leakCheckInput } from "#core/contracts/compliance";
+import {
+  chargeAdditionInput,
+  chargeCorrectionInput,
+  chargeVoidInput,
+  chronicReportInput,
+  leakCheckInput,
+} from "#core/contracts/compliance";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
-import { addCharge, addLeakCheck, correctCharge, fileChronicReport, getSystemRecords, voidCharge } from "./records.service";
+import {
+  addCharge,
+  addLeakCheck,
+  correctCharge,
+  fileChronicReport,
+  getSystemRecords,
+  voidCharge,
+} from "./records.service";
 
 const idParam = z.object({ id: z.uuid("must be a valid id") });
 
@@ -16,27 +29,59 @@ export function complianceRouter(ctx: AppContext): Router {
     res.json(await getSystemRecords(ctx, member(req), res.locals.params.id));
   });
 
-  router.post("/systems/:id/charge-additions", requireMember("findings.record"), validate(idParam, "params"), validate(chargeAdditionInput), async (req, res) => {
-    res.status(201).json(await addCharge(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
-  });
+  router.post(
+    "/systems/:id/charge-additions",
+    requireMember("findings.record"),
+    validate(idParam, "params"),
+    validate(chargeAdditionInput),
+    async (req, res) => {
+      res.status(201).json(await addCharge(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
+    },
+  );
 
   // Never an edit: a correction is a new entry that voids the old one.
-  router.post("/charge-additions/:id/corrections", requireMember("findings.record"), validate(idParam, "params"), validate(chargeCorrectionInput), async (req, res) => {
-    res.status(201).json(await correctCharge(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
-  });
+  router.post(
+    "/charge-additions/:id/corrections",
+    requireMember("findings.record"),
+    validate(idParam, "params"),
+    validate(chargeCorrectionInput),
+    async (req, res) => {
+      res.status(201).json(await correctCharge(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
+    },
+  );
 
-  router.post("/charge-additions/:id/void", requireMember("findings.record"), validate(idParam, "params"), validate(chargeVoidInput), async (req, res) => {
-    res.json(await voidCharge(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body.voidReason));
-  });
+  router.post(
+    "/charge-additions/:id/void",
+    requireMember("findings.record"),
+    validate(idParam, "params"),
+    validate(chargeVoidInput),
+    async (req, res) => {
+      res.json(await voidCharge(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body.voidReason));
+    },
+  );
 
-  router.post("/systems/:id/leak-checks", requireMember("findings.record"), validate(idParam, "params"), validate(leakCheckInput), async (req, res) => {
-    res.status(201).json(await addLeakCheck(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
-  });
+  router.post(
+    "/systems/:id/leak-checks",
+    requireMember("findings.record"),
+    validate(idParam, "params"),
+    validate(leakCheckInput),
+    async (req, res) => {
+      res.status(201).json(await addLeakCheck(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
+    },
+  );
 
   // Engineers and owners sign compliance filings.
-  router.post("/systems/:id/chronic-reports", requireMember("compliance.manage"), validate(idParam, "params"), validate(chronicReportInput), async (req, res) => {
-    res.status(201).json(await fileChronicReport(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
-  });
+  router.post(
+    "/systems/:id/chronic-reports",
+    requireMember("compliance.manage"),
+    validate(idParam, "params"),
+    validate(chronicReportInput),
+    async (req, res) => {
+      res
+        .status(201)
+        .json(await fileChronicReport(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
+    },
+  );
 
   return router;
 }

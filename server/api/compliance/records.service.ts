@@ -1,8 +1,23 @@
 import { and, asc, desc, eq, inArray, isNull } from "drizzle-orm";
 import type { z } from "zod";
 import type { AppContext } from "../../context";
-import type { ChargeAdditionView, SystemRecordsView, chargeAdditionInput, chargeCorrectionInput, chronicReportInput, leakCheckInput } from "#core/contracts/compliance";
-import { chargeAdditions, chronicLeakerReports, complianceAudit, findings, leakChecks, memberships, users } from "../../db/schema/index";
+import type {
+  ChargeAdditionView,
+  SystemRecordsView,
+  chargeAdditionInput,
+  chargeCorrectionInput,
+  chronicReportInput,
+  leakCheckInput,
+} from "#core/contracts/compliance";
+import {
+  chargeAdditions,
+  chronicLeakerReports,
+  complianceAudit,
+  findings,
+  leakChecks,
+  memberships,
+  users,
+} from "../../db/schema/index";
 import type { AssessedPoint } from "#core/domain/compliance/assess-leak-rate";
 import type { LeakRatePart } from "#core/domain/compliance/rule-profile";
 import { chargeToKg, companyGwpBases, toSystem } from "../systems/systems.service";
@@ -30,25 +45,65 @@ export async function visibleSystem(ctx: AppContext, viewer: Viewer, systemId: s
 }
 
 const toRow = (p: AssessedPoint) => ({
-  date: p.date, method: p.method, percent: p.percent, countedKg: p.countedKg, days: p.days, windowStart: p.windowStart ?? null,
-  additionIds: p.additionIds, partId: p.partId, thresholdPercent: p.thresholdPercent, exceeds: p.exceeds, repairDue: p.repairDue ?? null,
+  date: p.date,
+  method: p.method,
+  percent: p.percent,
+  countedKg: p.countedKg,
+  days: p.days,
+  windowStart: p.windowStart ?? null,
+  additionIds: p.additionIds,
+  partId: p.partId,
+  thresholdPercent: p.thresholdPercent,
+  exceeds: p.exceeds,
+  repairDue: p.repairDue ?? null,
 });
 
 async function additionViews(ctx: AppContext, systemId: string): Promise<ChargeAdditionView[]> {
-  const rows = await ctx.db.select().from(chargeAdditions).where(eq(chargeAdditions.systemId, systemId)).orderBy(asc(chargeAdditions.addedOn), asc(chargeAdditions.recordedAt));
-  const ids = [...new Set(rows.flatMap((r) => [r.technicianId, r.recordedById, r.voidedById].filter((x): x is string => !!x)))];
-  const names = new Map((ids.length ? await ctx.db.select({ id: users.id, name: users.name }).from(users).where(inArray(users.id, ids)) : []).map((u) => [u.id, u.name]));
+  const rows = await ctx.db
+    .select()
+    .from(chargeAdditions)
+    .where(eq(chargeAdditions.systemId, systemId))
+    .orderBy(asc(chargeAdditions.addedOn), asc(chargeAdditions.recordedAt));
+  const ids = [
+    ...new Set(rows.flatMap((r) => [r.technicianId, r.recordedById, r.voidedById].filter((x): x is string => !!x))),
+  ];
+  const names = new Map(
+    (ids.length
+      ? await ctx.db.select({ id: users.id, name: users.name }).from(users).where(inArray(users.id, ids))
+      : []
+    ).map((u) => [u.id, u.name]),
+  );
   return rows.map((r) => ({
-    id: r.id, systemId: r.systemId, addedOn: r.addedOn, amountKg: r.amountKg, enteredValue: r.enteredValue, enteredUnit: r.enteredUnit,
-    technician: names.get(r.technicianId) ?? "", reason: r.reason, excluded: r.excluded, findingId: r.findingId, correctsId: r.correctsId,
-    recordedBy: names.get(r.recordedById) ?? "", recordedAt: r.recordedAt.toISOString(),
+    id: r.id,
+    systemId: r.systemId,
+    addedOn: r.addedOn,
+    amountKg: r.amountKg,
+    enteredValue: r.enteredValue,
+    enteredUnit: r.enteredUnit,
+    technician: names.get(r.technicianId) ?? "",
+    reason: r.reason,
+    excluded: r.excluded,
+    findingId: r.findingId,
+    correctsId: r.correctsId,
+    recordedBy: names.get(r.recordedById) ?? "",
+    recordedAt: r.recordedAt.toISOString(),
     voided: r.voidedAt
-      ? { at: r.voidedAt.toISOString(), by: names.get(r.voidedById ?? "") ?? "", reason: r.voidReason ?? "", byEntryId: rows.find((c) => c.correctsId === r.id)?.id ?? null }
+      ? {
+          at: r.voidedAt.toISOString(),
+          by: names.get(r.voidedById ?? "") ?? "",
+          reason: r.voidReason ?? "",
+          byEntryId: rows.find((c) => c.correctsId === r.id)?.id ?? null,
+        }
       : null,
   }));
 }
 
-export async function getSystemRecords(ctx: AppContext, viewer: Viewer, systemId: string, now = new Date()): Promise<SystemRecordsView> {
+export async function getSystemRecords(
+  ctx: AppContext,
+  viewer: Viewer,
+  systemId: string,
+  now = new Date(),
+): Promise<SystemRecordsView> {
   const row = await visibleSystem(ctx, viewer, systemId);
   const rules = await companyRules(ctx, viewer.companyId);
   const [s] = await statusesOf(ctx, rules, [row], now);
@@ -79,21 +134,43 @@ export async function getSystemRecords(ctx: AppContext, viewer: Viewer, systemId
     system,
     store: { id: row.store.id, name: row.store.name, timeZone: row.store.timeZone },
     today: s.today,
-    profile: { id: rules.profile.id, name: rules.profile.name, method: rules.method, retentionYears: rules.profile.recordRetentionYears.value, retentionSource: rules.profile.recordRetentionYears.source },
+    profile: {
+      id: rules.profile.id,
+      name: rules.profile.name,
+      method: rules.method,
+      retentionYears: rules.profile.recordRetentionYears.value,
+      retentionSource: rules.profile.recordRetentionYears.source,
+    },
     applicability: st.applicability,
     leakRates: st.points.map(toRow),
     latest: st.latest ? toRow(st.latest) : null,
     overThreshold: st.overThreshold,
-    chronicRule: chronicRuleOf(rules.profile.leakRateParts.find((p) => p.id === (st.applicability.partId ?? st.latest?.partId)) ?? null),
+    chronicRule: chronicRuleOf(
+      rules.profile.leakRateParts.find((p) => p.id === (st.applicability.partId ?? st.latest?.partId)) ?? null,
+    ),
     chronic: st.chronic.map((y) => {
       const f = reports.find((x) => x.r.year === y.year);
       return {
-        year: y.year, addedKg: y.addedKg, percent: y.percent, chronic: y.chronic, reportDue: y.reportDue ?? null,
-        filed: f ? { on: f.r.filedOn, by: f.by, reference: f.r.reference, note: f.r.note, recordedAt: f.r.recordedAt.toISOString() } : null,
+        year: y.year,
+        addedKg: y.addedKg,
+        percent: y.percent,
+        chronic: y.chronic,
+        reportDue: y.reportDue ?? null,
+        filed: f
+          ? {
+              on: f.r.filedOn,
+              by: f.by,
+              reference: f.r.reference,
+              note: f.r.note,
+              recordedAt: f.r.recordedAt.toISOString(),
+            }
+          : null,
       };
     }),
     audit: audit.map((x) => ({ at: x.a.at.toISOString(), by: x.by, action: x.a.action, summary: x.a.summary })),
-    co2e: st.co2e.known ? { known: true, tonnes: st.co2e.tonnes, gwp: st.co2e.gwp, source: st.co2e.gwpSource } : { known: false, tonnes: null, gwp: null, source: st.co2e.reason },
+    co2e: st.co2e.known
+      ? { known: true, tonnes: st.co2e.tonnes, gwp: st.co2e.gwp, source: st.co2e.gwpSource }
+      : { known: false, tonnes: null, gwp: null, source: st.co2e.reason },
     leakCheck: lc
       ? {
           withLdsMonths: lc.withLds.required ? lc.withLds.months : null,
@@ -106,47 +183,114 @@ export async function getSystemRecords(ctx: AppContext, viewer: Viewer, systemId
     nextInspection: st.nextInspection,
     due: systemDueItems(s, now),
     additions: await additionViews(ctx, systemId),
-    leakChecks: checks.map((x) => ({ id: x.c.id, checkedOn: x.c.checkedOn, leakFound: x.c.leakFound, note: x.c.note, by: x.by })),
+    leakChecks: checks.map((x) => ({
+      id: x.c.id,
+      checkedOn: x.c.checkedOn,
+      leakFound: x.c.leakFound,
+      note: x.c.note,
+      by: x.by,
+    })),
     cautions: system.cautions,
   };
 }
 
-const MONTHS = ["January", "February", "March", "April", "May", "June", "July", "August", "September", "October", "November", "December"];
+const MONTHS = [
+  "January",
+  "February",
+  "March",
+  "April",
+  "May",
+  "June",
+  "July",
+  "August",
+  "September",
+  "October",
+  "November",
+  "December",
+];
 function chronicRuleOf(part: LeakRatePart | null) {
   if (!part) return null;
   const c = part.chronicLeaker;
-  return { percent: c.percentOfFullCharge.value, reportBy: `${c.reportBy.value.day} ${MONTHS[c.reportBy.value.month - 1]} of the next year`, source: `${c.percentOfFullCharge.source}; ${c.reportBy.source}` };
+  return {
+    percent: c.percentOfFullCharge.value,
+    reportBy: `${c.reportBy.value.day} ${MONTHS[c.reportBy.value.month - 1]} of the next year`,
+    source: `${c.percentOfFullCharge.source}; ${c.reportBy.source}`,
+  };
 }
 
-async function checkAdditionRefs(ctx: AppContext, viewer: Viewer, systemId: string, input: AdditionInput): Promise<void> {
+async function checkAdditionRefs(
+  ctx: AppContext,
+  viewer: Viewer,
+  systemId: string,
+  input: AdditionInput,
+): Promise<void> {
   if (input.technicianId) {
-    const [m] = await ctx.db.select({ role: memberships.role }).from(memberships).where(and(eq(memberships.userId, input.technicianId), eq(memberships.companyId, viewer.companyId)));
-    if (!m || m.role === "store-contact") throw badRequest("Please check: technicianId is not a technician of this company.", { technicianId: "is not a member of this company who services systems" });
+    const [m] = await ctx.db
+      .select({ role: memberships.role })
+      .from(memberships)
+      .where(and(eq(memberships.userId, input.technicianId), eq(memberships.companyId, viewer.companyId)));
+    if (!m || m.role === "store-contact")
+      throw badRequest("Please check: technicianId is not a technician of this company.", {
+        technicianId: "is not a member of this company who services systems",
+      });
   }
   if (input.findingId) {
-    const [f] = await ctx.db.select({ id: findings.id }).from(findings).where(and(eq(findings.id, input.findingId), eq(findings.systemId, systemId), eq(findings.companyId, viewer.companyId)));
-    if (!f) throw badRequest("Please check: findingId is not a finding on this system.", { findingId: "is not a finding on this system" });
+    const [f] = await ctx.db
+      .select({ id: findings.id })
+      .from(findings)
+      .where(
+        and(
+          eq(findings.id, input.findingId),
+          eq(findings.systemId, systemId),
+          eq(findings.companyId, viewer.companyId),
+        ),
+      );
+    if (!f)
+      throw badRequest("Please check: findingId is not a finding on this system.", {
+        findingId: "is not a finding on this system",
+      });
   }
 }
 
 function values(viewer: Viewer, userId: string, systemId: string, addedOn: string, input: AdditionInput) {
   return {
-    companyId: viewer.companyId, systemId, addedOn, amountKg: chargeToKg(input.amount), enteredValue: input.amount.value, enteredUnit: input.amount.unit,
-    technicianId: input.technicianId ?? userId, reason: input.reason, excluded: input.excluded, findingId: input.findingId, recordedById: userId,
+    companyId: viewer.companyId,
+    systemId,
+    addedOn,
+    amountKg: chargeToKg(input.amount),
+    enteredValue: input.amount.value,
+    enteredUnit: input.amount.unit,
+    technicianId: input.technicianId ?? userId,
+    reason: input.reason,
+    excluded: input.excluded,
+    findingId: input.findingId,
+    recordedById: userId,
   };
 }
 
-export async function addCharge(ctx: AppContext, viewer: Viewer, userId: string, systemId: string, input: AdditionInput) {
+export async function addCharge(
+  ctx: AppContext,
+  viewer: Viewer,
+  userId: string,
+  systemId: string,
+  input: AdditionInput,
+) {
   const { store } = await visibleSystem(ctx, viewer, systemId);
   const addedOn = eventDay(input.addedOn, store, "addedOn");
   await checkAdditionRefs(ctx, viewer, systemId, input);
-  const [row] = await ctx.db.insert(chargeAdditions).values(values(viewer, userId, systemId, addedOn, input)).returning({ id: chargeAdditions.id });
+  const [row] = await ctx.db
+    .insert(chargeAdditions)
+    .values(values(viewer, userId, systemId, addedOn, input))
+    .returning({ id: chargeAdditions.id });
   const records = await getSystemRecords(ctx, viewer, systemId);
   return { addition: records.additions.find((a) => a.id === row.id)!, records };
 }
 
 async function loadLiveAddition(ctx: AppContext, viewer: Viewer, id: string) {
-  const [row] = await ctx.db.select().from(chargeAdditions).where(and(eq(chargeAdditions.id, id), eq(chargeAdditions.companyId, viewer.companyId)));
+  const [row] = await ctx.db
+    .select()
+    .from(chargeAdditions)
+    .where(and(eq(chargeAdditions.id, id), eq(chargeAdditions.companyId, viewer.companyId)));
   if (!row) throw notFound("That charge-added entry");
   await visibleSystem(ctx, viewer, row.systemId).catch(() => {
     throw notFound("That charge-added entry");
@@ -158,7 +302,13 @@ async function loadLiveAddition(ctx: AppContext, viewer: Viewer, id: string) {
  * A correction: a new entry naming the old one, and the old one voided, in one transaction. The
  * old row keeps its values; only its void columns are set (the audit trail shows both).
  */
-export async function correctCharge(ctx: AppContext, viewer: Viewer, userId: string, id: string, input: CorrectionInput) {
+export async function correctCharge(
+  ctx: AppContext,
+  viewer: Viewer,
+  userId: string,
+  id: string,
+  input: CorrectionInput,
+) {
   const old = await loadLiveAddition(ctx, viewer, id);
   const { store } = await visibleSystem(ctx, viewer, old.systemId);
   const addedOn = eventDay(input.addedOn ?? old.addedOn, store, "addedOn");
@@ -169,8 +319,12 @@ export async function correctCharge(ctx: AppContext, viewer: Viewer, userId: str
       .set({ voidedAt: new Date(), voidedById: userId, voidReason: input.voidReason })
       .where(and(eq(chargeAdditions.id, old.id), eq(chargeAdditions.companyId, viewer.companyId), isLive()))
       .returning({ id: chargeAdditions.id });
-    if (voided.length === 0) throw conflict("That entry was already voided or corrected; correct the entry that replaced it instead.");
-    const [row] = await tx.insert(chargeAdditions).values({ ...values(viewer, userId, old.systemId, addedOn, input), correctsId: old.id }).returning({ id: chargeAdditions.id });
+    if (voided.length === 0)
+      throw conflict("That entry was already voided or corrected; correct the entry that replaced it instead.");
+    const [row] = await tx
+      .insert(chargeAdditions)
+      .values({ ...values(viewer, userId, old.systemId, addedOn, input), correctsId: old.id })
+      .returning({ id: chargeAdditions.id });
     return row.id;
   });
   const records = await getSystemRecords(ctx, viewer, old.systemId);
@@ -192,10 +346,25 @@ function isLive() {
   return isNull(chargeAdditions.voidedAt);
 }
 
-export async function addLeakCheck(ctx: AppContext, viewer: Viewer, userId: string, systemId: string, input: LeakCheckInput) {
+export async function addLeakCheck(
+  ctx: AppContext,
+  viewer: Viewer,
+  userId: string,
+  systemId: string,
+  input: LeakCheckInput,
+) {
   const { store } = await visibleSystem(ctx, viewer, systemId);
   const checkedOn = eventDay(input.checkedOn, store, "checkedOn");
-  await ctx.db.insert(leakChecks).values({ companyId: viewer.companyId, systemId, checkedOn, leakFound: input.leakFound, note: input.note, byId: userId });
+  await ctx.db
+    .insert(leakChecks)
+    .values({
+      companyId: viewer.companyId,
+      systemId,
+      checkedOn,
+      leakFound: input.leakFound,
+      note: input.note,
+      byId: userId,
+    });
   return getSystemRecords(ctx, viewer, systemId);
 }
 
@@ -205,27 +374,49 @@ export async function addLeakCheck(ctx: AppContext, viewer: Viewer, userId: stri
  * filed, and only once it is over: the report covers the whole year (40 CFR 82 subpart F /
  * 84 subpart C, report by 1 March of the next year [S:R7]).
  */
-export async function fileChronicReport(ctx: AppContext, viewer: Viewer, userId: string, systemId: string, input: ChronicReportInput) {
+export async function fileChronicReport(
+  ctx: AppContext,
+  viewer: Viewer,
+  userId: string,
+  systemId: string,
+  input: ChronicReportInput,
+) {
   const { store } = await visibleSystem(ctx, viewer, systemId);
   const filedOn = eventDay(input.filedOn, store, "filedOn");
   const records = await getSystemRecords(ctx, viewer, systemId);
   const year = records.chronic.find((y) => y.year === input.year);
   if (!year?.chronic) {
-    throw badRequest(`Please check: year ${input.year} is not a chronic-leaker year of this system.`, { year: `is not a year in which this system reached the chronic-leaker share of its full charge` });
+    throw badRequest(`Please check: year ${input.year} is not a chronic-leaker year of this system.`, {
+      year: `is not a year in which this system reached the chronic-leaker share of its full charge`,
+    });
   }
   if (filedOn < `${input.year + 1}-01-01`) {
-    throw badRequest(`Please check: filedOn ${filedOn} is before the end of ${input.year}.`, { filedOn: `must be in ${input.year + 1} or later: the report covers the whole of ${input.year}` });
+    throw badRequest(`Please check: filedOn ${filedOn} is before the end of ${input.year}.`, {
+      filedOn: `must be in ${input.year + 1} or later: the report covers the whole of ${input.year}`,
+    });
   }
-  if (year.filed) throw conflict(`The report for ${input.year} was already marked filed on ${year.filed.on} by ${year.filed.by}.`);
+  if (year.filed)
+    throw conflict(`The report for ${input.year} was already marked filed on ${year.filed.on} by ${year.filed.by}.`);
   await ctx.db.transaction(async (tx) => {
     const inserted = await tx
       .insert(chronicLeakerReports)
-      .values({ companyId: viewer.companyId, systemId, year: input.year, filedOn, reference: input.reference, note: input.note, filedById: userId })
+      .values({
+        companyId: viewer.companyId,
+        systemId,
+        year: input.year,
+        filedOn,
+        reference: input.reference,
+        note: input.note,
+        filedById: userId,
+      })
       .onConflictDoNothing()
       .returning({ id: chronicLeakerReports.id });
     if (inserted.length === 0) throw conflict(`The report for ${input.year} was already marked filed.`);
     await tx.insert(complianceAudit).values({
-      companyId: viewer.companyId, systemId, action: "chronic-report-filed", byId: userId,
+      companyId: viewer.companyId,
+      systemId,
+      action: "chronic-report-filed",
+      byId: userId,
       summary: `Chronic-leaker report for ${input.year} marked filed on ${filedOn}${input.reference ? ` (reference ${input.reference})` : ""}`,
     });
   });

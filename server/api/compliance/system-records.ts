@@ -1,6 +1,16 @@
 import { and, asc, desc, eq, inArray } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import { chargeAdditions, chronicLeakerReports, companies, customRuleProfiles, findingEvents, findings, leakChecks, stores, systems } from "../../db/schema/index";
+import {
+  chargeAdditions,
+  chronicLeakerReports,
+  companies,
+  customRuleProfiles,
+  findingEvents,
+  findings,
+  leakChecks,
+  stores,
+  systems,
+} from "../../db/schema/index";
 import { profileFor } from "#core/domain/compliance/company-profile";
 import type { ChargeAddition } from "#core/domain/compliance/leak-rate";
 import type { LeakRateMethod, RuleProfile } from "#core/domain/compliance/rule-profile";
@@ -18,13 +28,21 @@ export interface CompanyRules {
 
 /** The latest saved custom profile of a company, or null when none was saved. */
 export async function latestCustomProfile(ctx: AppContext, companyId: string) {
-  const [row] = await ctx.db.select().from(customRuleProfiles).where(eq(customRuleProfiles.companyId, companyId)).orderBy(desc(customRuleProfiles.savedAt), desc(customRuleProfiles.id)).limit(1);
+  const [row] = await ctx.db
+    .select()
+    .from(customRuleProfiles)
+    .where(eq(customRuleProfiles.companyId, companyId))
+    .orderBy(desc(customRuleProfiles.savedAt), desc(customRuleProfiles.id))
+    .limit(1);
   return row ?? null;
 }
 
 /** The company's rules: the profile its setting names (its own stored one for "custom") and its method. */
 export async function companyRules(ctx: AppContext, companyId: string): Promise<CompanyRules> {
-  const [c] = await ctx.db.select({ ruleProfile: companies.ruleProfile, method: companies.leakRateMethod }).from(companies).where(eq(companies.id, companyId));
+  const [c] = await ctx.db
+    .select({ ruleProfile: companies.ruleProfile, method: companies.leakRateMethod })
+    .from(companies)
+    .where(eq(companies.id, companyId));
   const setting = c?.ruleProfile ?? "us-federal";
   const custom = setting === "custom" ? ((await latestCustomProfile(ctx, companyId))?.profile ?? null) : null;
   return { profile: profileFor(setting, custom), method: c?.method ?? "annualizing" };
@@ -41,25 +59,50 @@ export interface SystemWithStatus {
  * Loads the records of the given systems (charge added, finding events, leak checks) in four
  * queries and computes each system's status on its store's today.
  */
-export async function statusesOf(ctx: AppContext, rules: CompanyRules, rows: { system: SystemRow; store: StoreRow }[], now = new Date()): Promise<SystemWithStatus[]> {
+export async function statusesOf(
+  ctx: AppContext,
+  rules: CompanyRules,
+  rows: { system: SystemRow; store: StoreRow }[],
+  now = new Date(),
+): Promise<SystemWithStatus[]> {
   if (rows.length === 0) return [];
   const ids = rows.map((r) => r.system.id);
   const [adds, events, checks, filed] = await Promise.all([
-    ctx.db.select().from(chargeAdditions).where(inArray(chargeAdditions.systemId, ids)).orderBy(asc(chargeAdditions.addedOn), asc(chargeAdditions.recordedAt)),
     ctx.db
-      .select({ systemId: findings.systemId, findingId: findingEvents.findingId, kind: findingEvents.kind, on: findingEvents.on, result: findingEvents.result, status: findingEvents.status })
+      .select()
+      .from(chargeAdditions)
+      .where(inArray(chargeAdditions.systemId, ids))
+      .orderBy(asc(chargeAdditions.addedOn), asc(chargeAdditions.recordedAt)),
+    ctx.db
+      .select({
+        systemId: findings.systemId,
+        findingId: findingEvents.findingId,
+        kind: findingEvents.kind,
+        on: findingEvents.on,
+        result: findingEvents.result,
+        status: findingEvents.status,
+      })
       .from(findingEvents)
       .innerJoin(findings, eq(findings.id, findingEvents.findingId))
       .where(inArray(findings.systemId, ids))
       .orderBy(asc(findingEvents.at), asc(findingEvents.id)),
     ctx.db.select().from(leakChecks).where(inArray(leakChecks.systemId, ids)),
-    ctx.db.select({ systemId: chronicLeakerReports.systemId, year: chronicLeakerReports.year }).from(chronicLeakerReports).where(inArray(chronicLeakerReports.systemId, ids)),
+    ctx.db
+      .select({ systemId: chronicLeakerReports.systemId, year: chronicLeakerReports.year })
+      .from(chronicLeakerReports)
+      .where(inArray(chronicLeakerReports.systemId, ids)),
   ]);
   return rows.map(({ system, store }) => {
     const today = localDateOf(now, store.timeZone);
     const additions: ChargeAddition[] = adds
       .filter((a) => a.systemId === system.id)
-      .map((a) => ({ id: a.id, date: a.addedOn, amountKg: a.amountKg, voided: a.voidedAt !== null, ...(a.excluded ? { excluded: a.excluded } : {}) }));
+      .map((a) => ({
+        id: a.id,
+        date: a.addedOn,
+        amountKg: a.amountKg,
+        voided: a.voidedAt !== null,
+        ...(a.excluded ? { excluded: a.excluded } : {}),
+      }));
     const mine = events.filter((e) => e.systemId === system.id);
     const byFinding = new Map<string, typeof mine>();
     for (const e of mine) byFinding.set(e.findingId, [...(byFinding.get(e.findingId) ?? []), e]);
@@ -86,7 +129,9 @@ export async function statusesOf(ctx: AppContext, rules: CompanyRules, rows: { s
         repairedOn: mine.filter((e) => e.kind === "repaired").map((e) => e.on),
         pendingFollowUps,
         followUpVerifiedOn: mine.filter((e) => e.kind === "follow-up-test" && e.result === "passed").map((e) => e.on),
-        leakChecks: checks.filter((c) => c.systemId === system.id).map((c) => ({ checkedOn: c.checkedOn, leakFound: c.leakFound })),
+        leakChecks: checks
+          .filter((c) => c.systemId === system.id)
+          .map((c) => ({ checkedOn: c.checkedOn, leakFound: c.leakFound })),
         chronicReportsFiled: filed.filter((f) => f.systemId === system.id).map((f) => f.year),
       },
       today,

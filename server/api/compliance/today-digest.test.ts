@@ -19,22 +19,49 @@ const signInOnceAs = signInOnce(() => t.app);
 
 const signedIn = (role: Role, company = co): Promise<Agent> => signInOnceAs(company.people[role]);
 
-const localToday = (zone: string, now = new Date()) => new Intl.DateTimeFormat("en-CA", { timeZone: zone, year: "numeric", month: "2-digit", day: "2-digit" }).format(now);
-const daysBefore = (date: string, days: number) => new Date(Date.parse(`${date}T00:00:00Z`) - days * 86_400_000).toISOString().slice(0, 10);
+const localToday = (zone: string, now = new Date()) =>
+  new Intl.DateTimeFormat("en-CA", { timeZone: zone, year: "numeric", month: "2-digit", day: "2-digit" }).format(now);
+const daysBefore = (date: string, days: number) =>
+  new Date(Date.parse(`${date}T00:00:00Z`) - days * 86_400_000).toISOString().slice(0, 10);
 
 beforeAll(async () => {
   t = await createTestApp();
   co = await seedCompany(t.ctx, "Marigold Lane Grocers");
   other = await seedCompany(t.ctx, "Quillfield Foods");
   const lead = await signedIn("lead-tech");
-  systemId = (await lead.post(`/api/stores/${co.store.id}/systems`, { name: "Rack A", refrigerantId: "R-448A", fullCharge: { value: 100, unit: "lb" }, applianceType: "commercial-refrigeration", automaticLeakDetection: false })).body.id;
+  systemId = (
+    await lead.post(`/api/stores/${co.store.id}/systems`, {
+      name: "Rack A",
+      refrigerantId: "R-448A",
+      fullCharge: { value: 100, unit: "lb" },
+      applianceType: "commercial-refrigeration",
+      automaticLeakDetection: false,
+    })
+  ).body.id;
   const today = localToday("America/New_York");
   const tech = await signedIn("technician");
   // 5 lb into 100 lb 30 days after the last addition: 60.8 % > 20 % (40 CFR 84.102; standards.md §1).
-  await tech.post(`/api/systems/${systemId}/charge-additions`, { addedOn: daysBefore(today, 57), amount: { value: 3, unit: "lb" }, reason: "Top-up" });
-  await tech.post(`/api/systems/${systemId}/charge-additions`, { addedOn: daysBefore(today, 27), amount: { value: 5, unit: "lb" }, reason: "Low-level alarm" });
-  findingId = (await tech.post(`/api/stores/${co.store.id}/findings`, { systemId, status: "confirmed", component: "coil" })).body.id;
-  await t.ctx.db.insert(detectors).values({ companyId: co.company.id, name: "Heated-diode sniffer", principle: "heated-diode", lastCheckedOn: daysBefore(today, 28) });
+  await tech.post(`/api/systems/${systemId}/charge-additions`, {
+    addedOn: daysBefore(today, 57),
+    amount: { value: 3, unit: "lb" },
+    reason: "Top-up",
+  });
+  await tech.post(`/api/systems/${systemId}/charge-additions`, {
+    addedOn: daysBefore(today, 27),
+    amount: { value: 5, unit: "lb" },
+    reason: "Low-level alarm",
+  });
+  findingId = (
+    await tech.post(`/api/stores/${co.store.id}/findings`, { systemId, status: "confirmed", component: "coil" })
+  ).body.id;
+  await t.ctx.db
+    .insert(detectors)
+    .values({
+      companyId: co.company.id,
+      name: "Heated-diode sniffer",
+      principle: "heated-diode",
+      lastCheckedOn: daysBefore(today, 28),
+    });
 });
 afterAll(() => t.close());
 
@@ -45,13 +72,37 @@ describe("Today", () => {
     const today = localToday("America/New_York");
     const repair = r.body.due.find((d: { kind: string }) => d.kind === "repair");
     // Learned 27 days ago; repair within 30 days [S:R4] → 3 days left.
-    expect(repair).toMatchObject({ systemId, daysLeft: 3, state: "due-soon", link: `/systems/${systemId}#leak-rates`, storeName: co.store.name });
+    expect(repair).toMatchObject({
+      systemId,
+      daysLeft: 3,
+      state: "due-soon",
+      link: `/systems/${systemId}#leak-rates`,
+      storeName: co.store.name,
+    });
     expect(repair.source).toMatch(/40 CFR 84/);
-    expect(r.body.overThreshold).toEqual([expect.objectContaining({ systemId, thresholdPercent: 20, on: daysBefore(today, 27), link: `/systems/${systemId}#leak-rates` })]);
+    expect(r.body.overThreshold).toEqual([
+      expect.objectContaining({
+        systemId,
+        thresholdPercent: 20,
+        on: daysBefore(today, 27),
+        link: `/systems/${systemId}#leak-rates`,
+      }),
+    ]);
     expect(r.body.overThreshold[0].percent).toBeCloseTo((5 / 100 / (30 / 365)) * 100, 9);
-    expect(r.body.openFindings).toEqual([expect.objectContaining({ id: findingId, status: "confirmed", deadline: repair.dueOn, link: `/findings/${findingId}` })]);
+    expect(r.body.openFindings).toEqual([
+      expect.objectContaining({
+        id: findingId,
+        status: "confirmed",
+        deadline: repair.dueOn,
+        link: `/findings/${findingId}`,
+      }),
+    ]);
     // Calibrated 28 days ago, company interval 30 days → due in 2 days (common practice).
-    expect(r.body.due.find((d: { kind: string }) => d.kind === "detector-check")).toMatchObject({ daysLeft: 2, state: "due-soon", link: expect.stringMatching(/^\/detectors#detector-[0-9a-f-]{36}$/) });
+    expect(r.body.due.find((d: { kind: string }) => d.kind === "detector-check")).toMatchObject({
+      daysLeft: 2,
+      state: "due-soon",
+      link: expect.stringMatching(/^\/detectors#detector-[0-9a-f-]{36}$/),
+    });
   });
 
   it("filters by store, shows store contacts their store only (no detectors), and 404s a stranger's store", async () => {
@@ -80,7 +131,10 @@ describe("the daily digest", () => {
   it("is sent once per company and local day across a restart and a second process on the same database", async () => {
     // A second process: its own pool and mailer on the same database and the same SMTP server.
     const second = createDb(t.database.url);
-    const mailer = createSmtpMailer({ host: "127.0.0.1", port: t.smtp.port, secure: false, from: "Plumeline <no-reply@plumeline.test>" }, true);
+    const mailer = createSmtpMailer(
+      { host: "127.0.0.1", port: t.smtp.port, secure: false, from: "Plumeline <no-reply@plumeline.test>" },
+      true,
+    );
     const ctx2: AppContext = { ...t.ctx, db: second.db, pool: second.pool, mailer, logger: pino({ level: "silent" }) };
     try {
       // 15:00 UTC is after 06:00 in New York all year.
@@ -134,7 +188,10 @@ describe("the daily digest", () => {
 
   it("releases the claim when sending fails, so the next run retries", async () => {
     await t.ctx.db.delete(digestRuns);
-    const failing: AppContext = { ...t.ctx, mailer: { send: () => Promise.reject(new Error("SMTP down")), close() {} } };
+    const failing: AppContext = {
+      ...t.ctx,
+      mailer: { send: () => Promise.reject(new Error("SMTP down")), close() {} },
+    };
     await expect(sendDigest(failing, co.company.id, "manual")).rejects.toThrow(/SMTP down/);
     expect(await t.ctx.db.select().from(digestRuns).where(eq(digestRuns.companyId, co.company.id))).toHaveLength(0);
     expect((await sendDigest(t.ctx, co.company.id, "manual")).sent).toBe(true);

@@ -31,7 +31,10 @@ function toDetector(row: Row, intervalDays: number): Detector {
 }
 
 async function intervalOf(ctx: AppContext, companyId: string): Promise<number> {
-  const [c] = await ctx.db.select({ days: companies.detectorCheckIntervalDays }).from(companies).where(eq(companies.id, companyId));
+  const [c] = await ctx.db
+    .select({ days: companies.detectorCheckIntervalDays })
+    .from(companies)
+    .where(eq(companies.id, companyId));
   return c.days;
 }
 
@@ -46,23 +49,43 @@ export async function listDetectors(ctx: AppContext, companyId: string, includeA
 }
 
 export async function getDetector(ctx: AppContext, companyId: string, id: string): Promise<Detector> {
-  const [row] = await ctx.db.select().from(detectors).where(and(eq(detectors.id, id), eq(detectors.companyId, companyId)));
+  const [row] = await ctx.db
+    .select()
+    .from(detectors)
+    .where(and(eq(detectors.id, id), eq(detectors.companyId, companyId)));
   if (!row) throw notFound("That detector");
   return toDetector(row, await intervalOf(ctx, companyId));
 }
 
 export async function createDetector(ctx: AppContext, companyId: string, input: DetectorInput): Promise<Detector> {
-  const [row] = await ctx.db.insert(detectors).values({ ...input, companyId }).returning();
+  const [row] = await ctx.db
+    .insert(detectors)
+    .values({ ...input, companyId })
+    .returning();
   return toDetector(row, await intervalOf(ctx, companyId));
 }
 
-export async function updateDetector(ctx: AppContext, companyId: string, id: string, input: DetectorInput): Promise<Detector> {
-  const [row] = await ctx.db.update(detectors).set(input).where(and(eq(detectors.id, id), eq(detectors.companyId, companyId))).returning();
+export async function updateDetector(
+  ctx: AppContext,
+  companyId: string,
+  id: string,
+  input: DetectorInput,
+): Promise<Detector> {
+  const [row] = await ctx.db
+    .update(detectors)
+    .set(input)
+    .where(and(eq(detectors.id, id), eq(detectors.companyId, companyId)))
+    .returning();
   if (!row) throw notFound("That detector");
   return toDetector(row, await intervalOf(ctx, companyId));
 }
 
-export async function setDetectorArchived(ctx: AppContext, companyId: string, id: string, archived: boolean): Promise<Detector> {
+export async function setDetectorArchived(
+  ctx: AppContext,
+  companyId: string,
+  id: string,
+  archived: boolean,
+): Promise<Detector> {
   const [row] = await ctx.db
     .update(detectors)
     .set({ archivedAt: archived ? new Date() : null })

@@ -24,7 +24,11 @@ async function as(role: Role, company = co): Promise<Agent> {
 describe("detectors", () => {
   it("a lead tech registers one with the common-practice defaults", async () => {
     const a = await as("lead-tech");
-    const res = await a.post("/api/detectors", { name: "Van 3 diode sniffer", principle: "heated-diode", lastCheckedOn: "2026-11-20" });
+    const res = await a.post("/api/detectors", {
+      name: "Van 3 diode sniffer",
+      principle: "heated-diode",
+      lastCheckedOn: "2026-11-20",
+    });
     expect(res.status).toBe(201);
     // 5 s transport delay and 2 ppm alarm: common practice, no published source.
     expect(res.body).toMatchObject({ transportDelayS: 5, alarmPpm: 2, checkDueOn: "2026-12-20" });
@@ -42,12 +46,23 @@ describe("detectors", () => {
       levelScale: [{ level: "1", minPpm: 5, maxPpm: 3 }],
     });
     expect(res.status).toBe(400);
-    expect(Object.keys(res.body.error.fields).sort()).toEqual(["alarmPpm", "lastCheckedOn", "levelScale.0.maxPpm", "name", "principle", "transportDelayS"]);
+    expect(Object.keys(res.body.error.fields).sort()).toEqual([
+      "alarmPpm",
+      "lastCheckedOn",
+      "levelScale.0.maxPpm",
+      "name",
+      "principle",
+      "transportDelayS",
+    ]);
   });
 
   it("only lead techs and owners manage them; store contacts cannot list them", async () => {
-    expect((await (await as("technician")).post("/api/detectors", { name: "X", principle: "infrared" })).status).toBe(403);
-    expect((await (await as("engineer")).post("/api/detectors", { name: "X", principle: "infrared" })).status).toBe(403);
+    expect((await (await as("technician")).post("/api/detectors", { name: "X", principle: "infrared" })).status).toBe(
+      403,
+    );
+    expect((await (await as("engineer")).post("/api/detectors", { name: "X", principle: "infrared" })).status).toBe(
+      403,
+    );
     expect((await (await as("store-contact")).get("/api/detectors")).status).toBe(403);
     // Engineers read them: detector calibration checks are on their Today screen.
     expect((await (await as("engineer")).get("/api/detectors")).status).toBe(200);
@@ -69,7 +84,11 @@ describe("detectors", () => {
     const bad = await lead.post("/api/detectors", {
       name: "LED sniffer",
       principle: "heated-diode",
-      levelScale: [{ level: "1", minPpm: 3, maxPpm: 15 }, { level: "2", minPpm: 10, maxPpm: 60 }, { level: "3", minPpm: 5, maxPpm: null }],
+      levelScale: [
+        { level: "1", minPpm: 3, maxPpm: 15 },
+        { level: "2", minPpm: 10, maxPpm: 60 },
+        { level: "3", minPpm: 5, maxPpm: null },
+      ],
     });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields).sort()).toEqual(["levelScale.1.minPpm", "levelScale.2.minPpm"]);
@@ -77,7 +96,11 @@ describe("detectors", () => {
     const good = await lead.post("/api/detectors", {
       name: "LED sniffer",
       principle: "heated-diode",
-      levelScale: [{ level: "1", minPpm: 3, maxPpm: 15 }, { level: "2", minPpm: 15, maxPpm: 60 }, { level: "3", minPpm: 60, maxPpm: null }],
+      levelScale: [
+        { level: "1", minPpm: 3, maxPpm: 15 },
+        { level: "2", minPpm: 15, maxPpm: 60 },
+        { level: "3", minPpm: 60, maxPpm: null },
+      ],
     });
     expect(good.status, JSON.stringify(good.body)).toBe(201);
     expect(good.body.levelScale).toHaveLength(3);
@@ -87,7 +110,9 @@ describe("detectors", () => {
     const mine = await (await as("owner")).post("/api/detectors", { name: "IR unit", principle: "infrared" });
     const stranger = await as("owner", other);
     expect((await stranger.get(`/api/detectors/${mine.body.id}`)).status).toBe(404);
-    expect((await stranger.put(`/api/detectors/${mine.body.id}`, { name: "Mine now", principle: "infrared" })).status).toBe(404);
+    expect(
+      (await stranger.put(`/api/detectors/${mine.body.id}`, { name: "Mine now", principle: "infrared" })).status,
+    ).toBe(404);
     expect((await stranger.get("/api/detectors")).body.detectors).toEqual([]);
   });
 
@@ -96,15 +121,25 @@ describe("detectors", () => {
     const d = await a.post("/api/detectors", { name: "Old diode", principle: "heated-diode" });
     await a.post(`/api/detectors/${d.body.id}/archive`);
     expect((await a.get("/api/detectors")).body.detectors.some((x: { id: string }) => x.id === d.body.id)).toBe(false);
-    expect((await a.get("/api/detectors?includeArchived=true")).body.detectors.some((x: { id: string }) => x.id === d.body.id)).toBe(true);
+    expect(
+      (await a.get("/api/detectors?includeArchived=true")).body.detectors.some(
+        (x: { id: string }) => x.id === d.body.id,
+      ),
+    ).toBe(true);
     expect((await a.post(`/api/detectors/${d.body.id}/restore`)).body.archivedAt).toBeNull();
   });
 });
 
 describe("check status", () => {
   it("is due a whole interval after the last check and overdue the day after", () => {
-    expect(checkStatus("2026-01-31", 30, new Date("2026-03-02T12:00:00Z"))).toEqual({ checkDueOn: "2026-03-02", overdue: false });
-    expect(checkStatus("2026-01-31", 30, new Date("2026-03-03T12:00:00Z"))).toEqual({ checkDueOn: "2026-03-02", overdue: true });
+    expect(checkStatus("2026-01-31", 30, new Date("2026-03-02T12:00:00Z"))).toEqual({
+      checkDueOn: "2026-03-02",
+      overdue: false,
+    });
+    expect(checkStatus("2026-01-31", 30, new Date("2026-03-03T12:00:00Z"))).toEqual({
+      checkDueOn: "2026-03-02",
+      overdue: true,
+    });
     // In the store's zone it is still 2 March at 03:00 UTC on the 3rd in Chicago (UTC−6).
     expect(checkStatus("2026-01-31", 30, new Date("2026-03-03T03:00:00Z"), "America/Chicago").overdue).toBe(false);
     expect(checkStatus(null, 30, new Date()).overdue).toBe(true);

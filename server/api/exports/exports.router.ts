@@ -9,25 +9,47 @@ import { leakRateStatementPdf } from "./leak-rate-statement";
 import { recordsCsv } from "./records-csv";
 
 const idParam = z.object({ id: z.uuid("must be a valid id") });
-const fileName = (name: string, ext: string) => `${name.replace(/[^A-Za-z0-9]+/g, "-").replace(/^-|-$/g, "").toLowerCase() || "system"}-records.${ext}`;
+const fileName = (name: string, ext: string) =>
+  `${
+    name
+      .replace(/[^A-Za-z0-9]+/g, "-")
+      .replace(/^-|-$/g, "")
+      .toLowerCase() || "system"
+  }-records.${ext}`;
 
 export function exportsRouter(ctx: AppContext): Router {
   const router = Router();
 
-  router.get("/systems/:id/records.csv", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
-    const records = await getSystemRecords(ctx, member(req), res.locals.params.id);
-    const list = await listFindings(ctx, member(req), records.store.id, { systemId: records.system.id });
-    res.set({ "Content-Type": "text/csv; charset=utf-8", "Content-Disposition": `attachment; filename="${fileName(records.system.name, "csv")}"` });
-    res.send(recordsCsv(records, list));
-  });
+  router.get(
+    "/systems/:id/records.csv",
+    requireMember("stores.read"),
+    validate(idParam, "params"),
+    async (req, res) => {
+      const records = await getSystemRecords(ctx, member(req), res.locals.params.id);
+      const list = await listFindings(ctx, member(req), records.store.id, { systemId: records.system.id });
+      res.set({
+        "Content-Type": "text/csv; charset=utf-8",
+        "Content-Disposition": `attachment; filename="${fileName(records.system.name, "csv")}"`,
+      });
+      res.send(recordsCsv(records, list));
+    },
+  );
 
-  router.get("/systems/:id/leak-rate-statement.pdf", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
-    const records = await getSystemRecords(ctx, member(req), res.locals.params.id);
-    const list = await listFindings(ctx, member(req), records.store.id, { systemId: records.system.id });
-    const pdf = await leakRateStatementPdf(records, list);
-    res.set({ "Content-Type": "application/pdf", "Content-Disposition": `inline; filename="${fileName(records.system.name, "pdf")}"` });
-    res.send(pdf);
-  });
+  router.get(
+    "/systems/:id/leak-rate-statement.pdf",
+    requireMember("stores.read"),
+    validate(idParam, "params"),
+    async (req, res) => {
+      const records = await getSystemRecords(ctx, member(req), res.locals.params.id);
+      const list = await listFindings(ctx, member(req), records.store.id, { systemId: records.system.id });
+      const pdf = await leakRateStatementPdf(records, list);
+      res.set({
+        "Content-Type": "application/pdf",
+        "Content-Disposition": `inline; filename="${fileName(records.system.name, "pdf")}"`,
+      });
+      res.send(pdf);
+    },
+  );
 
   return router;
 }

@@ -11,7 +11,10 @@ let other: Awaited<ReturnType<typeof seedCompany>>;
 let tech: Agent;
 let systemId: string;
 
-const binary = (res: { on(e: string, f: (c?: Buffer) => void): void }, cb: (err: Error | null, body: Buffer) => void) => {
+const binary = (
+  res: { on(e: string, f: (c?: Buffer) => void): void },
+  cb: (err: Error | null, body: Buffer) => void,
+) => {
   const chunks: Buffer[] = [];
   res.on("data", (c) => chunks.push(c!));
   res.on("end", () => cb(null, Buffer.concat(chunks)));
@@ -25,11 +28,34 @@ beforeAll(async () => {
   await tech.post("/api/auth/sign-in", { email: co.people.technician.email, password: PASSWORD });
   const lead = await agentFor(t.app);
   await lead.post("/api/auth/sign-in", { email: co.people["lead-tech"].email, password: PASSWORD });
-  systemId = (await lead.post(`/api/stores/${co.store.id}/systems`, { name: "Rack A (MT)", refrigerantId: "R-448A", fullCharge: { value: 100, unit: "lb" }, applianceType: "commercial-refrigeration", automaticLeakDetection: false })).body.id;
-  await tech.post(`/api/systems/${systemId}/charge-additions`, { addedOn: "2026-02-01", amount: { value: 10, unit: "lb" }, reason: "Top-up, \"quoted\", with comma" });
-  const second = await tech.post(`/api/systems/${systemId}/charge-additions`, { addedOn: "2026-03-03", amount: { value: 5, unit: "lb" }, reason: "Low charge" });
+  systemId = (
+    await lead.post(`/api/stores/${co.store.id}/systems`, {
+      name: "Rack A (MT)",
+      refrigerantId: "R-448A",
+      fullCharge: { value: 100, unit: "lb" },
+      applianceType: "commercial-refrigeration",
+      automaticLeakDetection: false,
+    })
+  ).body.id;
+  await tech.post(`/api/systems/${systemId}/charge-additions`, {
+    addedOn: "2026-02-01",
+    amount: { value: 10, unit: "lb" },
+    reason: 'Top-up, "quoted", with comma',
+  });
+  const second = await tech.post(`/api/systems/${systemId}/charge-additions`, {
+    addedOn: "2026-03-03",
+    amount: { value: 5, unit: "lb" },
+    reason: "Low charge",
+  });
   await tech.post(`/api/charge-additions/${second.body.addition.id}/void`, { voidReason: "Duplicate entry" });
-  const f = (await tech.post(`/api/stores/${co.store.id}/findings`, { systemId, status: "confirmed", component: "flare", foundAt: "2026-02-02T15:00:00Z" })).body;
+  const f = (
+    await tech.post(`/api/stores/${co.store.id}/findings`, {
+      systemId,
+      status: "confirmed",
+      component: "flare",
+      foundAt: "2026-02-02T15:00:00Z",
+    })
+  ).body;
   await tech.post(`/api/findings/${f.id}/events`, { action: "repair", on: "2026-02-03", note: "New flare nut" });
 });
 afterAll(() => t.close());
@@ -51,7 +77,12 @@ describe("records export", () => {
       ["2026-03-03", "charge added"],
     ]);
     // First calculation after 1 Jan 2026 uses 365 days: 10/100 = 10.00 % (40 CFR 84.102 [M]).
-    expect(rows[0]).toMatchObject({ amount_lb: "10.000", amount_kg: "4.5359", leak_rate_percent: "10.00", reason: 'Top-up, "quoted", with comma' });
+    expect(rows[0]).toMatchObject({
+      amount_lb: "10.000",
+      amount_kg: "4.5359",
+      leak_rate_percent: "10.00",
+      reason: 'Top-up, "quoted", with comma',
+    });
     expect(rows[4].voided).toMatch(/Duplicate entry/);
     expect(rows[4].leak_rate_percent).toBe("");
   });

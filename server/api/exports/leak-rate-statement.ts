@@ -12,9 +12,17 @@ const KG_PER_LB = 0.45359237; // NIST SP 811, appendix B.8
  * why, the leak rate at every addition against the threshold, the findings and their steps, due
  * dates, and how long the records must be kept. Built from the same records the screen shows.
  */
-export function leakRateStatementPdf(r: SystemRecordsView, findingList: FindingDetail[], generatedAt = new Date()): Promise<Buffer> {
+export function leakRateStatementPdf(
+  r: SystemRecordsView,
+  findingList: FindingDetail[],
+  generatedAt = new Date(),
+): Promise<Buffer> {
   const fonts = statementFonts();
-  const doc = new PDFDocument({ size: "A4", margin: 48, info: { Title: `Leak-rate statement – ${r.system.name}`, Creator: "Plumeline" } });
+  const doc = new PDFDocument({
+    size: "A4",
+    margin: 48,
+    info: { Title: `Leak-rate statement – ${r.system.name}`, Creator: "Plumeline" },
+  });
   doc.registerFont("body", fonts.regular);
   doc.registerFont("bold", fonts.bold);
   const chunks: Buffer[] = [];
@@ -24,24 +32,50 @@ export function leakRateStatementPdf(r: SystemRecordsView, findingList: FindingD
     doc.on("error", reject);
   });
 
-  const h = (text: string) => doc.moveDown(0.6).font("bold").fontSize(12).text(text).moveDown(0.2).font("body").fontSize(9.5);
+  const h = (text: string) =>
+    doc.moveDown(0.6).font("bold").fontSize(12).text(text).moveDown(0.2).font("body").fontSize(9.5);
   const line = (text: string) => doc.text(text);
   const mass = (kg: number) => `${kg.toFixed(2)} kg (${(kg / KG_PER_LB).toFixed(1)} lb)`;
 
   doc.font("bold").fontSize(17).text("Leak-rate statement");
   doc.font("body").fontSize(10).text(`${r.system.name} · ${r.store.name}`);
-  doc.fontSize(8.5).fillColor("#444").text(`Generated ${generatedAt.toISOString().slice(0, 16).replace("T", " ")} UTC; dates are on the store's calendar (${r.store.timeZone}); today there is ${r.today}.`).fillColor("black");
+  doc
+    .fontSize(8.5)
+    .fillColor("#444")
+    .text(
+      `Generated ${generatedAt.toISOString().slice(0, 16).replace("T", " ")} UTC; dates are on the store's calendar (${r.store.timeZone}); today there is ${r.today}.`,
+    )
+    .fillColor("black");
 
   h("System");
-  line(`Refrigerant ${r.system.refrigerantId} (safety class ${r.system.refrigerant.safetyClass}${r.system.refrigerant.gwp ? `, GWP ${r.system.refrigerant.gwp.value} on ${r.system.refrigerant.gwp.basis}` : ""}); full charge ${mass(r.system.fullChargeKg)}.`);
-  line(`${APPLIANCE_TYPE_NAMES[r.system.applianceType]}; automatic leak detection: ${r.system.automaticLeakDetection ? "yes" : "no"}.`);
-  if (r.co2e.known && r.co2e.tonnes !== null) line(`CO2-equivalent of the charge: ${r.co2e.tonnes.toFixed(2)} t (kg × GWP / 1000; GWP source ${readableSource(r.co2e.source)}).`);
+  line(
+    `Refrigerant ${r.system.refrigerantId} (safety class ${r.system.refrigerant.safetyClass}${r.system.refrigerant.gwp ? `, GWP ${r.system.refrigerant.gwp.value} on ${r.system.refrigerant.gwp.basis}` : ""}); full charge ${mass(r.system.fullChargeKg)}.`,
+  );
+  line(
+    `${APPLIANCE_TYPE_NAMES[r.system.applianceType]}; automatic leak detection: ${r.system.automaticLeakDetection ? "yes" : "no"}.`,
+  );
+  if (r.co2e.known && r.co2e.tonnes !== null)
+    line(
+      `CO2-equivalent of the charge: ${r.co2e.tonnes.toFixed(2)} t (kg × GWP / 1000; GWP source ${readableSource(r.co2e.source)}).`,
+    );
 
   h("Rule profile");
-  line(`${r.profile.name}; leak-rate method: ${r.profile.method === "annualizing" ? "annualizing" : "rolling average"}.`);
-  line(r.applicability.applies ? `Applies: ${r.applicability.reason}. Threshold ${r.applicability.thresholdPercent} % per year (${readableSource(r.applicability.thresholdSource ?? "")}).` : `No leak-rate threshold applies: ${r.applicability.reason}.`);
-  if (r.leakCheck) line(`Leak checks: ${r.leakCheck.reason}. Without leak detection every ${r.leakCheck.withoutLdsMonths ?? "–"} months, with it every ${r.leakCheck.withLdsMonths ?? "–"} months.`);
-  if (r.nextInspection) line(`Next inspection due ${r.nextInspection.dueOn} (${r.nextInspection.reason}; ${readableSource(r.nextInspection.source)}).`);
+  line(
+    `${r.profile.name}; leak-rate method: ${r.profile.method === "annualizing" ? "annualizing" : "rolling average"}.`,
+  );
+  line(
+    r.applicability.applies
+      ? `Applies: ${r.applicability.reason}. Threshold ${r.applicability.thresholdPercent} % per year (${readableSource(r.applicability.thresholdSource ?? "")}).`
+      : `No leak-rate threshold applies: ${r.applicability.reason}.`,
+  );
+  if (r.leakCheck)
+    line(
+      `Leak checks: ${r.leakCheck.reason}. Without leak detection every ${r.leakCheck.withoutLdsMonths ?? "–"} months, with it every ${r.leakCheck.withLdsMonths ?? "–"} months.`,
+    );
+  if (r.nextInspection)
+    line(
+      `Next inspection due ${r.nextInspection.dueOn} (${r.nextInspection.reason}; ${readableSource(r.nextInspection.source)}).`,
+    );
 
   h("Leak rate at every addition");
   const cols = [48, 118, 190, 262, 330, 400, 470];
@@ -57,36 +91,66 @@ export function leakRateStatementPdf(r: SystemRecordsView, findingList: FindingD
   const byId = new Map(r.additions.map((a) => [a.id, a]));
   for (const p of r.leakRates) {
     const added = p.additionIds.reduce((s, id) => s + (byId.get(id)?.amountKg ?? 0), 0);
-    row([p.date, mass(added), p.method === "annualizing" ? `${p.days} d` : `${p.windowStart} →`, mass(p.countedKg), `${p.percent.toFixed(1)} %${p.exceeds ? " (above)" : ""}`, p.thresholdPercent === null ? "none" : `${p.thresholdPercent} %`, p.repairDue ?? ""]);
+    row([
+      p.date,
+      mass(added),
+      p.method === "annualizing" ? `${p.days} d` : `${p.windowStart} →`,
+      mass(p.countedKg),
+      `${p.percent.toFixed(1)} %${p.exceeds ? " (above)" : ""}`,
+      p.thresholdPercent === null ? "none" : `${p.thresholdPercent} %`,
+      p.repairDue ?? "",
+    ]);
   }
   if (r.leakRates.length === 0) line("No refrigerant has been added.");
-  doc.font("body").fontSize(8).fillColor("#444").text(
-    r.profile.method === "annualizing"
-      ? "Annualizing method (40 CFR 82.152 / 84.102): added ÷ full charge ÷ (shorter of the days since the previous addition or 365) / 365 × 100."
-      : "Rolling-average method (40 CFR 82.152 / 84.102): added in the previous 365 days (or since the last follow-up verification test) ÷ full charge × 100.",
-    48,
-  ).fillColor("black").fontSize(9.5);
+  doc
+    .font("body")
+    .fontSize(8)
+    .fillColor("#444")
+    .text(
+      r.profile.method === "annualizing"
+        ? "Annualizing method (40 CFR 82.152 / 84.102): added ÷ full charge ÷ (shorter of the days since the previous addition or 365) / 365 × 100."
+        : "Rolling-average method (40 CFR 82.152 / 84.102): added in the previous 365 days (or since the last follow-up verification test) ÷ full charge × 100.",
+      48,
+    )
+    .fillColor("black")
+    .fontSize(9.5);
 
   if (r.chronic.length) {
     h("Added per calendar year");
     for (const y of r.chronic) {
-      const status = y.chronic ? (y.filed ? `chronic leaker; report filed on ${y.filed.on} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}` : `chronic leaker; report due ${y.reportDue}`) : "";
-      line(`${y.year}: ${mass(y.addedKg)}, ${y.percent.toFixed(1)} % of the full charge${status ? ` — ${status}` : ""}.`);
+      const status = y.chronic
+        ? y.filed
+          ? `chronic leaker; report filed on ${y.filed.on} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}`
+          : `chronic leaker; report due ${y.reportDue}`
+        : "";
+      line(
+        `${y.year}: ${mass(y.addedKg)}, ${y.percent.toFixed(1)} % of the full charge${status ? ` — ${status}` : ""}.`,
+      );
     }
-    if (r.chronicRule) line(`Chronic leaker from ${r.chronicRule.percent} % of the full charge in a calendar year, reported by ${r.chronicRule.reportBy} (${readableSource(r.chronicRule.source)}).`);
+    if (r.chronicRule)
+      line(
+        `Chronic leaker from ${r.chronicRule.percent} % of the full charge in a calendar year, reported by ${r.chronicRule.reportBy} (${readableSource(r.chronicRule.source)}).`,
+      );
   }
 
   const voided = r.additions.filter((a) => a.voided);
   if (voided.length) {
     h("Corrected or voided entries (kept for the audit trail)");
-    for (const a of voided) line(`${a.addedOn}: ${mass(a.amountKg)} by ${a.technician}, voided ${a.voided!.at.slice(0, 10)} by ${a.voided!.by}: ${a.voided!.reason}`);
+    for (const a of voided)
+      line(
+        `${a.addedOn}: ${mass(a.amountKg)} by ${a.technician}, voided ${a.voided!.at.slice(0, 10)} by ${a.voided!.by}: ${a.voided!.reason}`,
+      );
   }
 
   h("Findings");
   if (findingList.length === 0) line("No findings on this system.");
   for (const f of findingList) {
-    doc.font("bold").text(`${f.component ?? "Component not recorded"} – ${f.status}${f.dismissReason ? ` (${f.dismissReason})` : ""}`).font("body");
-    for (const e of f.events) line(`   ${e.on}  ${e.kind}${e.result ? ` (${e.result})` : ""}  signed ${e.by}${e.note ? ` – ${e.note}` : ""}`);
+    doc
+      .font("bold")
+      .text(`${f.component ?? "Component not recorded"} – ${f.status}${f.dismissReason ? ` (${f.dismissReason})` : ""}`)
+      .font("body");
+    for (const e of f.events)
+      line(`   ${e.on}  ${e.kind}${e.result ? ` (${e.result})` : ""}  signed ${e.by}${e.note ? ` – ${e.note}` : ""}`);
   }
 
   if (r.due.length) {
@@ -95,8 +159,12 @@ export function leakRateStatementPdf(r: SystemRecordsView, findingList: FindingD
   }
 
   h("Record keeping");
-  line(`Keep these records for at least ${r.profile.retentionYears} years (${readableSource(r.profile.retentionSource)}).`);
-  line("Only certified technicians attach gauges or add or remove refrigerant (in the US, EPA Section 608). Local codes and licensed practice govern.");
+  line(
+    `Keep these records for at least ${r.profile.retentionYears} years (${readableSource(r.profile.retentionSource)}).`,
+  );
+  line(
+    "Only certified technicians attach gauges or add or remove refrigerant (in the US, EPA Section 608). Local codes and licensed practice govern.",
+  );
   doc.end();
   return done;
 }

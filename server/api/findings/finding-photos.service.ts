@@ -10,30 +10,60 @@ import type { Viewer } from "../stores/store-access";
 import { loadFindingRow } from "./findings.service";
 
 /** Phone photos are a few MB; the pixel budget guards against decompression bombs as for plans. */
-export const PHOTO_LIMITS = { maxBytes: 15 * 1024 * 1024, maxPixels: 40_000_000, displayMaxSide: 2048, thumbMaxSide: 320 };
+export const PHOTO_LIMITS = {
+  maxBytes: 15 * 1024 * 1024,
+  maxPixels: 40_000_000,
+  displayMaxSide: 2048,
+  thumbMaxSide: 320,
+};
 const EXT = { "image/png": "png", "image/jpeg": "jpg" } as const;
 
 /**
  * Checks the photo by its content (PNG/JPEG magic bytes, then the header's size), makes a
  * display copy and a thumbnail in the decoder worker, and stores both through the blob storage.
  */
-export async function addFindingPhoto(ctx: AppContext, viewer: Viewer, userId: string, findingId: string, file: Express.Multer.File | undefined) {
+export async function addFindingPhoto(
+  ctx: AppContext,
+  viewer: Viewer,
+  userId: string,
+  findingId: string,
+  file: Express.Multer.File | undefined,
+) {
   const { row } = await loadFindingRow(ctx, viewer, findingId);
-  if (!file) throw new HttpError(400, "validation_failed", 'Attach the photo in the form field "photo".', { photo: "is required (a PNG or JPEG file)" });
+  if (!file)
+    throw new HttpError(400, "validation_failed", 'Attach the photo in the form field "photo".', {
+      photo: "is required (a PNG or JPEG file)",
+    });
   let header;
   try {
     header = checkPlanImageHeader(file.buffer, PHOTO_LIMITS.maxPixels);
   } catch (err) {
     if (err instanceof HttpError && err.code === "unsupported_image") {
-      throw new HttpError(415, "unsupported_image", "The photo is not a PNG or JPEG image (its content was checked, not its name).", { photo: "must be a PNG or JPEG image" });
+      throw new HttpError(
+        415,
+        "unsupported_image",
+        "The photo is not a PNG or JPEG image (its content was checked, not its name).",
+        { photo: "must be a PNG or JPEG image" },
+      );
     }
     throw err;
   }
   let decoded;
   try {
-    decoded = await planImageDecoder().decode({ data: file.buffer, mime: header.mime, displayMaxSide: PHOTO_LIMITS.displayMaxSide, thumbMaxSide: PHOTO_LIMITS.thumbMaxSide });
+    decoded = await planImageDecoder().decode({
+      data: file.buffer,
+      mime: header.mime,
+      displayMaxSide: PHOTO_LIMITS.displayMaxSide,
+      thumbMaxSide: PHOTO_LIMITS.thumbMaxSide,
+    });
   } catch (err) {
-    if (err instanceof ImageDecodeError) throw new HttpError(422, "unreadable_image", `The photo could not be decoded: the file is damaged or incomplete (${err.message}).`, { photo: "could not be decoded" });
+    if (err instanceof ImageDecodeError)
+      throw new HttpError(
+        422,
+        "unreadable_image",
+        `The photo could not be decoded: the file is damaged or incomplete (${err.message}).`,
+        { photo: "could not be decoded" },
+      );
     throw err;
   }
   const id = randomUUID();
@@ -44,7 +74,9 @@ export async function addFindingPhoto(ctx: AppContext, viewer: Viewer, userId: s
   await storage.put(key, Buffer.from(decoded.display));
   await storage.put(thumbKey, Buffer.from(decoded.thumb));
   try {
-    await ctx.db.insert(findingPhotos).values({ id, findingId: row.id, companyId: viewer.companyId, key, thumbKey, mime: header.mime, byId: userId });
+    await ctx.db
+      .insert(findingPhotos)
+      .values({ id, findingId: row.id, companyId: viewer.companyId, key, thumbKey, mime: header.mime, byId: userId });
   } catch (err) {
     await Promise.allSettled([storage.delete(key), storage.delete(thumbKey)]);
     throw err;
@@ -52,9 +84,18 @@ export async function addFindingPhoto(ctx: AppContext, viewer: Viewer, userId: s
   return id;
 }
 
-export async function readFindingPhoto(ctx: AppContext, viewer: Viewer, findingId: string, photoId: string, variant: "photo" | "thumb") {
+export async function readFindingPhoto(
+  ctx: AppContext,
+  viewer: Viewer,
+  findingId: string,
+  photoId: string,
+  variant: "photo" | "thumb",
+) {
   const { row } = await loadFindingRow(ctx, viewer, findingId);
-  const [p] = await ctx.db.select().from(findingPhotos).where(and(eq(findingPhotos.id, photoId), eq(findingPhotos.findingId, row.id)));
+  const [p] = await ctx.db
+    .select()
+    .from(findingPhotos)
+    .where(and(eq(findingPhotos.id, photoId), eq(findingPhotos.findingId, row.id)));
   if (!p) throw new HttpError(404, "not_found", "That photo was not found.");
   const data = await planStorage(ctx).get(variant === "thumb" ? p.thumbKey : p.key);
   if (!data) throw new HttpError(404, "not_found", "That photo's file is missing.");

@@ -16,29 +16,60 @@ const listQuery = z.object({
   systemId: z.uuid("must be a valid id").optional(),
   open: z.enum(["true", "false"], { error: "must be true or false" }).optional(),
 });
-const photoQuery = z.object({ variant: z.enum(["photo", "thumb"], { error: "must be photo or thumb" }).default("photo") });
+const photoQuery = z.object({
+  variant: z.enum(["photo", "thumb"], { error: "must be photo or thumb" }).default("photo"),
+});
 
 export function findingsRouter(ctx: AppContext): Router {
   const router = Router();
 
-  router.post("/stores/:storeId/findings", requireMember("findings.record"), validate(storeParam, "params"), validate(createFindingInput), async (req, res) => {
-    const { finding, created } = await createFinding(ctx, member(req), req.auth!.user.id, res.locals.params.storeId, req.body);
-    res.status(created ? 201 : 200).json(finding);
-  });
+  router.post(
+    "/stores/:storeId/findings",
+    requireMember("findings.record"),
+    validate(storeParam, "params"),
+    validate(createFindingInput),
+    async (req, res) => {
+      const { finding, created } = await createFinding(
+        ctx,
+        member(req),
+        req.auth!.user.id,
+        res.locals.params.storeId,
+        req.body,
+      );
+      res.status(created ? 201 : 200).json(finding);
+    },
+  );
 
-  router.get("/stores/:storeId/findings", requireMember("stores.read"), validate(storeParam, "params"), validate(listQuery, "query"), async (req, res) => {
-    const q = res.locals.query as z.infer<typeof listQuery>;
-    res.json({ findings: await listFindings(ctx, member(req), res.locals.params.storeId, { systemId: q.systemId, open: q.open === "true" }) });
-  });
+  router.get(
+    "/stores/:storeId/findings",
+    requireMember("stores.read"),
+    validate(storeParam, "params"),
+    validate(listQuery, "query"),
+    async (req, res) => {
+      const q = res.locals.query as z.infer<typeof listQuery>;
+      res.json({
+        findings: await listFindings(ctx, member(req), res.locals.params.storeId, {
+          systemId: q.systemId,
+          open: q.open === "true",
+        }),
+      });
+    },
+  );
 
   router.get("/findings/:id", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
     res.json(await getFinding(ctx, member(req), res.locals.params.id));
   });
 
   // Role rules per action live in core/domain/findings/lifecycle.ts (ACTION_PERMISSION).
-  router.post("/findings/:id/events", requireMember("stores.read"), validate(idParam, "params"), validate(findingActionInput), async (req, res) => {
-    res.json(await addFindingEvent(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
-  });
+  router.post(
+    "/findings/:id/events",
+    requireMember("stores.read"),
+    validate(idParam, "params"),
+    validate(findingActionInput),
+    async (req, res) => {
+      res.json(await addFindingEvent(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
+    },
+  );
 
   router.post(
     "/findings/:id/photos",
@@ -57,11 +88,27 @@ export function findingsRouter(ctx: AppContext): Router {
   );
 
   // Photos are served only through this authorized route.
-  router.get("/findings/:id/photos/:photoId", requireMember("stores.read"), validate(photoParams, "params"), validate(photoQuery, "query"), async (req, res) => {
-    const p = await readFindingPhoto(ctx, member(req), res.locals.params.id, res.locals.params.photoId, res.locals.query.variant);
-    res.set({ "Content-Type": p.mime, "Cache-Control": "private, max-age=3600", "X-Content-Type-Options": "nosniff" });
-    res.send(p.data);
-  });
+  router.get(
+    "/findings/:id/photos/:photoId",
+    requireMember("stores.read"),
+    validate(photoParams, "params"),
+    validate(photoQuery, "query"),
+    async (req, res) => {
+      const p = await readFindingPhoto(
+        ctx,
+        member(req),
+        res.locals.params.id,
+        res.locals.params.photoId,
+        res.locals.query.variant,
+      );
+      res.set({
+        "Content-Type": p.mime,
+        "Cache-Control": "private, max-age=3600",
+        "X-Content-Type-Options": "nosniff",
+      });
+      res.send(p.data);
+    },
+  );
 
   return router;
 }

@@ -21,7 +21,15 @@ beforeAll(async () => {
   co = await seedCompany(t.ctx, "Bramblewood Grocers");
   other = await seedCompany(t.ctx, "Saltmarsh Foods");
   const lead = await signedIn("lead-tech");
-  systemId = (await lead.post(`/api/stores/${co.store.id}/systems`, { name: "Rack A", refrigerantId: "R-448A", fullCharge: { value: 400, unit: "lb" }, applianceType: "commercial-refrigeration", automaticLeakDetection: false })).body.id;
+  systemId = (
+    await lead.post(`/api/stores/${co.store.id}/systems`, {
+      name: "Rack A",
+      refrigerantId: "R-448A",
+      fullCharge: { value: 400, unit: "lb" },
+      applianceType: "commercial-refrigeration",
+      automaticLeakDetection: false,
+    })
+  ).body.id;
 });
 afterAll(async () => {
   await t.close();
@@ -30,16 +38,34 @@ afterAll(async () => {
 
 const signedIn = (role: Role, company = co): Promise<Agent> => signInOnceAs(company.people[role]);
 
-const newFinding = (extra: object = {}) => ({ systemId, component: "flare", note: "Bubbles at the flare nut", ...extra });
+const newFinding = (extra: object = {}) => ({
+  systemId,
+  component: "flare",
+  note: "Bubbles at the flare nut",
+  ...extra,
+});
 
 describe("findings: create, list, read", () => {
   it("creates a suspected finding signed by the technician, dated on the store's calendar", async () => {
     const tech = await signedIn("technician");
     const res = await tech.post(`/api/stores/${co.store.id}/findings`, newFinding({ foundAt: "2026-03-01T03:30:00Z" }));
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ status: "suspected", source: "manual", systemId, foundBy: "technician of Bramblewood Grocers", component: "flare" });
+    expect(res.body).toMatchObject({
+      status: "suspected",
+      source: "manual",
+      systemId,
+      foundBy: "technician of Bramblewood Grocers",
+      component: "flare",
+    });
     // 03:30 UTC on 1 March is still 28 February in New York (UTC−5 in winter; IANA tz database).
-    expect(res.body.events).toEqual([expect.objectContaining({ kind: "found", status: "suspected", on: "2026-02-28", by: "technician of Bramblewood Grocers" })]);
+    expect(res.body.events).toEqual([
+      expect.objectContaining({
+        kind: "found",
+        status: "suspected",
+        on: "2026-02-28",
+        by: "technician of Bramblewood Grocers",
+      }),
+    ]);
     expect(res.body.cautions.at(-1).id).toBe("codes-govern");
     const list = await (await signedIn("store-contact")).get(`/api/stores/${co.store.id}/findings`);
     expect(list.status).toBe(200);
@@ -54,15 +80,25 @@ describe("findings: create, list, read", () => {
     expect(first.status).toBe(201);
     expect(again.status).toBe(200);
     expect(again.body.id).toBe(first.body.id);
-    const both = await Promise.all([1, 2].map(() => tech.post(`/api/stores/${co.store.id}/findings`, newFinding({ clientId: randomUUID() }))));
+    const both = await Promise.all(
+      [1, 2].map(() => tech.post(`/api/stores/${co.store.id}/findings`, newFinding({ clientId: randomUUID() }))),
+    );
     expect(new Set(both.map((r) => r.body.id)).size).toBe(2);
   });
 
   it("refuses bad input with field errors", async () => {
     const tech = await signedIn("technician");
-    const bad = await tech.post(`/api/stores/${co.store.id}/findings`, { x: 3, component: "weld", clientId: "nope", systemId: randomUUID() });
+    const bad = await tech.post(`/api/stores/${co.store.id}/findings`, {
+      x: 3,
+      component: "weld",
+      clientId: "nope",
+      systemId: randomUUID(),
+    });
     expect(bad.status).toBe(400);
-    expect(bad.body.error.fields).toMatchObject({ clientId: "must be a valid id", component: expect.stringMatching(/brazed-joint/) });
+    expect(bad.body.error.fields).toMatchObject({
+      clientId: "must be a valid id",
+      component: expect.stringMatching(/brazed-joint/),
+    });
     const half = await tech.post(`/api/stores/${co.store.id}/findings`, { x: 3 });
     expect(half.body.error.fields).toEqual({ y: "x and y must be given together" });
     const foreign = await tech.post(`/api/stores/${co.store.id}/findings`, { systemId: randomUUID() });
@@ -78,7 +114,9 @@ describe("findings: create, list, read", () => {
     const stranger = await signedIn("owner", other);
     expect((await stranger.get(`/api/findings/${f.id}`)).status).toBe(404);
     expect((await stranger.get(`/api/stores/${co.store.id}/findings`)).status).toBe(404);
-    expect((await stranger.post(`/api/findings/${f.id}/events`, { action: "dismiss", reason: "other" })).status).toBe(404);
+    expect((await stranger.post(`/api/findings/${f.id}/events`, { action: "dismiss", reason: "other" })).status).toBe(
+      404,
+    );
     expect((await stranger.post(`/api/stores/${co.store.id}/findings`, {})).status).toBe(404);
     const onOther = (await tech.post(`/api/stores/${co.otherStore.id}/findings`, {})).body;
     const contact = await signedIn("store-contact");
@@ -99,7 +137,11 @@ describe("findings: lifecycle and its role rules", () => {
     expect(noComponent.body.error.fields.component).toMatch(/required/);
     let r = await tech.post(`/api/findings/${f.id}/events`, { action: "confirm", component: "brazed-joint" });
     expect(r.status).toBe(200);
-    expect(r.body).toMatchObject({ status: "confirmed", component: "brazed-joint", nextActions: ["repair", "dismiss"] });
+    expect(r.body).toMatchObject({
+      status: "confirmed",
+      component: "brazed-joint",
+      nextActions: ["repair", "dismiss"],
+    });
     r = await lead.post(`/api/findings/${f.id}/events`, { action: "repair", note: "Re-brazed the joint" });
     expect(r.body.status).toBe("repaired");
     // The follow-up test needs a passed initial test first.
@@ -135,7 +177,11 @@ describe("findings: lifecycle and its role rules", () => {
     const f = (await tech.post(`/api/stores/${co.store.id}/findings`, newFinding({ status: "confirmed" }))).body;
     expect(f.status).toBe("confirmed");
     await tech.post(`/api/findings/${f.id}/events`, { action: "repair" });
-    const r = await tech.post(`/api/findings/${f.id}/events`, { action: "initial-test", result: "failed", note: "Still bubbling" });
+    const r = await tech.post(`/api/findings/${f.id}/events`, {
+      action: "initial-test",
+      result: "failed",
+      note: "Still bubbling",
+    });
     expect(r.body.status).toBe("confirmed");
     const noResult = await tech.post(`/api/findings/${f.id}/events`, { action: "initial-test" });
     expect(noResult.status).toBe(400);
@@ -146,11 +192,23 @@ describe("findings: lifecycle and its role rules", () => {
     const tech = await signedIn("technician");
     const owner = await signedIn("owner");
     const f = (await tech.post(`/api/stores/${co.store.id}/findings`, newFinding())).body;
-    expect((await tech.post(`/api/findings/${f.id}/events`, { action: "dismiss", reason: "benign-source" })).status).toBe(403);
-    expect((await (await signedIn("store-contact")).post(`/api/findings/${f.id}/events`, { action: "confirm", component: "valve" })).status).toBe(403);
+    expect(
+      (await tech.post(`/api/findings/${f.id}/events`, { action: "dismiss", reason: "benign-source" })).status,
+    ).toBe(403);
+    expect(
+      (
+        await (
+          await signedIn("store-contact")
+        ).post(`/api/findings/${f.id}/events`, { action: "confirm", component: "valve" })
+      ).status,
+    ).toBe(403);
     const noReason = await owner.post(`/api/findings/${f.id}/events`, { action: "dismiss" });
     expect(noReason.body.error.fields.reason).toMatch(/benign-source/);
-    const r = await owner.post(`/api/findings/${f.id}/events`, { action: "dismiss", reason: "benign-source", note: "Aerosol release agent in the bakery" });
+    const r = await owner.post(`/api/findings/${f.id}/events`, {
+      action: "dismiss",
+      reason: "benign-source",
+      note: "Aerosol release agent in the bakery",
+    });
     expect(r.body).toMatchObject({ status: "dismissed", dismissReason: "benign-source", nextActions: [] });
     const again = await tech.post(`/api/findings/${f.id}/events`, { action: "confirm", component: "valve" });
     expect(again.status).toBe(409);
@@ -162,7 +220,8 @@ describe("findings: lifecycle and its role rules", () => {
 
   it("refuses a step dated in the store's future or before the previous step", async () => {
     const tech = await signedIn("technician");
-    const f = (await tech.post(`/api/stores/${co.store.id}/findings`, newFinding({ foundAt: "2026-01-10T15:00:00Z" }))).body;
+    const f = (await tech.post(`/api/stores/${co.store.id}/findings`, newFinding({ foundAt: "2026-01-10T15:00:00Z" })))
+      .body;
     const future = await tech.post(`/api/findings/${f.id}/events`, { action: "confirm", on: "2999-01-01" });
     expect(future.status).toBe(400);
     expect(future.body.error.fields.on).toMatch(/must not be after today/);
@@ -170,7 +229,9 @@ describe("findings: lifecycle and its role rules", () => {
     expect(before.body.error.fields.on).toBe("must not be before 2026-01-10, the previous step");
     const notADay = await tech.post(`/api/findings/${f.id}/events`, { action: "confirm", on: "2026-02-30" });
     expect(notADay.body.error.fields.on).toMatch(/does not exist/);
-    expect((await tech.post(`/api/findings/${f.id}/events`, { action: "confirm", on: "2026-01-12" })).body.events.at(-1).on).toBe("2026-01-12");
+    expect(
+      (await tech.post(`/api/findings/${f.id}/events`, { action: "confirm", on: "2026-01-12" })).body.events.at(-1).on,
+    ).toBe("2026-01-12");
   });
 });
 
@@ -179,7 +240,10 @@ describe("finding photos", () => {
     const tech = await signedIn("technician");
     const f = (await tech.post(`/api/stores/${co.store.id}/findings`, newFinding())).body;
     const jpeg = await makeJpeg(64, 48);
-    const up = await tech.agent.post(`/api/findings/${f.id}/photos`).set("X-CSRF-Token", tech.csrf).attach("photo", jpeg, { filename: "leak.txt", contentType: "text/plain" });
+    const up = await tech.agent
+      .post(`/api/findings/${f.id}/photos`)
+      .set("X-CSRF-Token", tech.csrf)
+      .attach("photo", jpeg, { filename: "leak.txt", contentType: "text/plain" });
     expect(up.status).toBe(201);
     expect(up.body.photos).toHaveLength(1);
     const photo = await tech.get(up.body.photos[0].url);
@@ -187,10 +251,16 @@ describe("finding photos", () => {
     expect(photo.headers["content-type"]).toBe("image/jpeg");
     expect((await tech.get(up.body.photos[0].thumbUrl)).status).toBe(200);
     expect((await (await signedIn("owner", other)).get(up.body.photos[0].url)).status).toBe(404);
-    const fake = await tech.agent.post(`/api/findings/${f.id}/photos`).set("X-CSRF-Token", tech.csrf).attach("photo", Buffer.from("GIF89a not a photo"), { filename: "leak.jpg", contentType: "image/jpeg" });
+    const fake = await tech.agent
+      .post(`/api/findings/${f.id}/photos`)
+      .set("X-CSRF-Token", tech.csrf)
+      .attach("photo", Buffer.from("GIF89a not a photo"), { filename: "leak.jpg", contentType: "image/jpeg" });
     expect(fake.status).toBe(415);
     expect(fake.body.error.fields.photo).toBe("must be a PNG or JPEG image");
-    const none = await tech.agent.post(`/api/findings/${f.id}/photos`).set("X-CSRF-Token", tech.csrf).field("note", "x");
+    const none = await tech.agent
+      .post(`/api/findings/${f.id}/photos`)
+      .set("X-CSRF-Token", tech.csrf)
+      .field("note", "x");
     expect(none.status).toBe(400);
     expect(none.body.error.fields.photo).toMatch(/required/);
   });

@@ -17,12 +17,17 @@ export function invitationsRouter(ctx: AppContext): Router {
     res.json(await previewInvitation(ctx, res.locals.params.token));
   });
 
-  router.post("/invitations/:token/accept", validate(tokenParam, "params"), validate(acceptInvitationInput), async (req, res) => {
-    const { userId, companyId } = await acceptInvitation(ctx, res.locals.params.token, req.body);
-    await startSession(ctx, req, userId, companyId);
-    req.auth = await readAuth(ctx.db, req.session);
-    res.json(await sessionInfo(ctx, req));
-  });
+  router.post(
+    "/invitations/:token/accept",
+    validate(tokenParam, "params"),
+    validate(acceptInvitationInput),
+    async (req, res) => {
+      const { userId, companyId } = await acceptInvitation(ctx, res.locals.params.token, req.body);
+      await startSession(ctx, req, userId, companyId);
+      req.auth = await readAuth(ctx.db, req.session);
+      res.json(await sessionInfo(ctx, req));
+    },
+  );
 
   return router;
 }

@@ -43,7 +43,10 @@ export async function acceptInvitation(ctx: AppContext, token: string, input: { 
     if (!pw.success) fields.password = pw.error.issues[0].message;
     if (Object.keys(fields).length) throw badRequest("Please check your name and password.", fields);
     const passwordHash = await hashPassword(ctx, input.password);
-    const [created] = await ctx.db.insert(users).values({ email: invitation.email, name: input.name!, passwordHash }).returning();
+    const [created] = await ctx.db
+      .insert(users)
+      .values({ email: invitation.email, name: input.name!, passwordHash })
+      .returning();
     userId = created.id;
   }
   await ctx.db.transaction(async (tx) => {
@@ -59,7 +62,10 @@ export async function acceptInvitation(ctx: AppContext, token: string, input: { 
       .onConflictDoNothing()
       .returning();
     if (m && invitation.role === "store-contact" && invitation.storeIds.length) {
-      await tx.insert(membershipStores).values(invitation.storeIds.map((storeId) => ({ membershipId: m.id, storeId }))).onConflictDoNothing();
+      await tx
+        .insert(membershipStores)
+        .values(invitation.storeIds.map((storeId) => ({ membershipId: m.id, storeId })))
+        .onConflictDoNothing();
     }
   });
   return { userId, companyId: invitation.companyId };

@@ -9,7 +9,8 @@ export function outboxRouter(ctx: AppContext): Router {
   const router = Router();
 
   router.get("/outbox", requireMember("outbox.read"), async (req, res) => {
-    if (!ctx.config.outboxEnabled) throw new HttpError(404, "not_found", "The Outbox exists only while mail goes to the built-in test mail server.");
+    if (!ctx.config.outboxEnabled)
+      throw new HttpError(404, "not_found", "The Outbox exists only while mail goes to the built-in test mail server.");
     const companyId = member(req).companyId;
     // A company sees its own mail, plus sign-in mail (resets) that belongs to no company.
     const rows = await ctx.db

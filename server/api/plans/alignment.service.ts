@@ -1,20 +1,39 @@
 import { eq, sql } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import type { AlignmentInput, Plan } from "#core/contracts/plans";
-import { composeSimilarity, IDENTITY, invertSimilarity, similarityFromTwoPoints, type Similarity } from "#core/analysis/geometry/similarity";
+import {
+  composeSimilarity,
+  IDENTITY,
+  invertSimilarity,
+  similarityFromTwoPoints,
+  type Similarity,
+} from "#core/analysis/geometry/similarity";
 import { fixtures, plans } from "../../db/schema/index";
 import { transformFixture } from "#core/domain/plans/transform-fixture";
 import { badRequest, HttpError } from "../../lib/http-error";
 import type { Viewer } from "../stores/store-access";
-import { assertCalibrated, assertCurrentVersion, assertRevision, fixtureCounts, loadVisiblePlan, lockPlan } from "./plan-access";
+import {
+  assertCalibrated,
+  assertCurrentVersion,
+  assertRevision,
+  fixtureCounts,
+  loadVisiblePlan,
+  lockPlan,
+} from "./plan-access";
 import { fixtureToRow, rowToFixture, toPlan } from "./plan-rows";
 import { insertFixtureRows, loadFixtureRows } from "./plan-versions";
 
 function fromTwoPoints(input: AlignmentInput): Similarity {
   const [p1, p2] = input.previous;
   const [c1, c2] = input.current;
-  if (p1.x === p2.x && p1.y === p2.y) throw badRequest("Please check the matched points.", { "previous.1": "is the same point as previous.0; pick two points far apart" });
-  if (c1.x === c2.x && c1.y === c2.y) throw badRequest("Please check the matched points.", { "current.1": "is the same point as current.0; pick two points far apart" });
+  if (p1.x === p2.x && p1.y === p2.y)
+    throw badRequest("Please check the matched points.", {
+      "previous.1": "is the same point as previous.0; pick two points far apart",
+    });
+  if (c1.x === c2.x && c1.y === c2.y)
+    throw badRequest("Please check the matched points.", {
+      "current.1": "is the same point as current.0; pick two points far apart",
+    });
   return similarityFromTwoPoints([p1.x, p1.y], [p2.x, p2.y], [c1.x, c1.y], [c2.x, c2.y]);
 }
 
@@ -23,12 +42,22 @@ function fromTwoPoints(input: AlignmentInput): Similarity {
  * corners picked on both drawings). With moveFixtures, the copied fixtures move by the change
  * of alignment so they land on the new drawing; the previous version never changes.
  */
-export async function setAlignment(ctx: AppContext, viewer: Viewer, planId: string, input: AlignmentInput): Promise<Plan> {
+export async function setAlignment(
+  ctx: AppContext,
+  viewer: Viewer,
+  planId: string,
+  input: AlignmentInput,
+): Promise<Plan> {
   await loadVisiblePlan(ctx, viewer, planId);
   const next = fromTwoPoints(input);
   const row = await ctx.db.transaction(async (tx) => {
     const plan = await lockPlan(tx, planId);
-    if (!plan.previousPlanId) throw new HttpError(409, "no_previous_version", `Plan version ${plan.version} is the store's first; there is no earlier version to align it to.`);
+    if (!plan.previousPlanId)
+      throw new HttpError(
+        409,
+        "no_previous_version",
+        `Plan version ${plan.version} is the store's first; there is no earlier version to align it to.`,
+      );
     await assertCurrentVersion(tx, plan);
     assertCalibrated(plan);
     assertRevision(plan, input.layoutRevision);
@@ -38,7 +67,10 @@ export async function setAlignment(ctx: AppContext, viewer: Viewer, planId: stri
       const rows = await loadFixtureRows(tx, plan.id);
       if (rows.length) {
         await tx.delete(fixtures).where(eq(fixtures.planId, plan.id));
-        await insertFixtureRows(tx, rows.map((r) => fixtureToRow(plan.id, transformFixture(rowToFixture(r), delta), r.position)));
+        await insertFixtureRows(
+          tx,
+          rows.map((r) => fixtureToRow(plan.id, transformFixture(rowToFixture(r), delta), r.position)),
+        );
       }
     }
     const [updated] = await tx

@@ -6,7 +6,14 @@ import { fixtures, plans } from "../../db/schema/index";
 import { transformFixture } from "#core/domain/plans/transform-fixture";
 import { badRequest, HttpError } from "../../lib/http-error";
 import type { Viewer } from "../stores/store-access";
-import { assertCurrentVersion, assertRevision, fixtureCounts, loadVisiblePlan, lockPlan, type DbOrTx } from "./plan-access";
+import {
+  assertCurrentVersion,
+  assertRevision,
+  fixtureCounts,
+  loadVisiblePlan,
+  lockPlan,
+  type DbOrTx,
+} from "./plan-access";
 import { fixtureToRow, rowToFixture, toPlan, type PlanRow } from "./plan-rows";
 import { planHasSweeps } from "./plan-sweeps";
 import { addPlanVersion, insertFixtureRows, loadFixtureRows } from "./plan-versions";
@@ -20,7 +27,10 @@ export type CalibrationOutcome = "first" | "rescaled" | "new-version";
  * Metres per pixel of the display image from a line a→b of known real length. Feet convert at
  * exactly 0.3048 m (NIST SP 811), so a 10 ft line 200 px long gives 3.048 / 200 = 0.01524 m/px.
  */
-export function metresPerPixel(input: Pick<CalibrationInput, "a" | "b" | "length">, image: { widthPx: number; heightPx: number }): number {
+export function metresPerPixel(
+  input: Pick<CalibrationInput, "a" | "b" | "length">,
+  image: { widthPx: number; heightPx: number },
+): number {
   const fields: Record<string, string> = {};
   for (const end of ["a", "b"] as const) {
     const p = input[end];
@@ -39,7 +49,9 @@ export function metresPerPixel(input: Pick<CalibrationInput, "a" | "b" | "length
 async function rescaleInPlace(tx: DbOrTx, plan: PlanRow, factor: number): Promise<void> {
   const rows = await loadFixtureRows(tx, plan.id);
   if (rows.length === 0) return;
-  const scaled = rows.map((r) => fixtureToRow(plan.id, transformFixture(rowToFixture(r), { scale: factor, rotation: 0, tx: 0, ty: 0 }), r.position));
+  const scaled = rows.map((r) =>
+    fixtureToRow(plan.id, transformFixture(rowToFixture(r), { scale: factor, rotation: 0, tx: 0, ty: 0 }), r.position),
+  );
   await tx.delete(fixtures).where(eq(fixtures.planId, plan.id));
   await insertFixtureRows(tx, scaled);
 }
@@ -54,7 +66,8 @@ export async function addRecalibratedVersion(
   plan: PlanRow,
   next: { metresPerPixel: number; calibration: NonNullable<PlanRow["calibration"]>; userId: string | null },
 ): Promise<PlanRow> {
-  if (!plan.metresPerPixel || !plan.imageWidthPx || !plan.imageHeightPx) throw new Error("only a calibrated image plan can be re-calibrated into a new version");
+  if (!plan.metresPerPixel || !plan.imageWidthPx || !plan.imageHeightPx)
+    throw new Error("only a calibrated image plan can be re-calibrated into a new version");
   const factor = next.metresPerPixel / plan.metresPerPixel;
   return addPlanVersion(
     tx,
@@ -86,10 +99,20 @@ export async function addRecalibratedVersion(
  * fixtures are rescaled in place; with sweeps a new version is made and the old one (and its
  * sweeps) never moves.
  */
-export async function calibratePlan(ctx: AppContext, viewer: Viewer, userId: string, planId: string, input: CalibrationInput): Promise<{ plan: Plan; outcome: CalibrationOutcome }> {
+export async function calibratePlan(
+  ctx: AppContext,
+  viewer: Viewer,
+  userId: string,
+  planId: string,
+  input: CalibrationInput,
+): Promise<{ plan: Plan; outcome: CalibrationOutcome }> {
   const visible = await loadVisiblePlan(ctx, viewer, planId);
   if (visible.source !== "image" || !visible.imageWidthPx || !visible.imageHeightPx) {
-    throw new HttpError(409, "blank_plan", "A blank plan has no drawing to calibrate: it is sized in metres when it is made.");
+    throw new HttpError(
+      409,
+      "blank_plan",
+      "A blank plan has no drawing to calibrate: it is sized in metres when it is made.",
+    );
   }
   const mpp = metresPerPixel(input, { widthPx: visible.imageWidthPx, heightPx: visible.imageHeightPx });
   const calibration = { a: input.a, b: input.b, length: input.length };

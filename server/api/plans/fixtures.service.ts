@@ -6,7 +6,14 @@ import { fixtures, plans, systems } from "../../db/schema/index";
 import { describeFields } from "../../lib/zod-fields";
 import { HttpError } from "../../lib/http-error";
 import type { Viewer } from "../stores/store-access";
-import { assertCalibrated, assertCurrentVersion, assertRevision, loadVisiblePlan, lockPlan, type DbOrTx } from "./plan-access";
+import {
+  assertCalibrated,
+  assertCurrentVersion,
+  assertRevision,
+  loadVisiblePlan,
+  lockPlan,
+  type DbOrTx,
+} from "./plan-access";
 import { fixtureToRow, planBounds, rowToFixture, type PlanRow } from "./plan-rows";
 import { insertFixtureRows, loadFixtureRows } from "./plan-versions";
 
@@ -30,11 +37,15 @@ export async function getFixtures(ctx: AppContext, viewer: Viewer, planId: strin
 async function checkSystems(tx: DbOrTx, plan: PlanRow, list: readonly Fixture[], root: string): Promise<void> {
   const ids = [...new Set(list.map((f) => f.systemId).filter((id): id is string => id !== null))];
   if (ids.length === 0) return;
-  const found = await tx.select({ id: systems.id }).from(systems).where(and(inArray(systems.id, ids), eq(systems.storeId, plan.storeId)));
+  const found = await tx
+    .select({ id: systems.id })
+    .from(systems)
+    .where(and(inArray(systems.id, ids), eq(systems.storeId, plan.storeId)));
   const known = new Set(found.map((r) => r.id));
   const errors: FieldError[] = [];
   list.forEach((f, i) => {
-    if (f.systemId !== null && !known.has(f.systemId)) errors.push({ path: `${root}.${i}.systemId`, message: "is not a system of this store" });
+    if (f.systemId !== null && !known.has(f.systemId))
+      errors.push({ path: `${root}.${i}.systemId`, message: "is not a system of this store" });
   });
   if (errors.length) fieldErrors(errors);
 }
@@ -50,13 +61,25 @@ async function lockForSave(tx: DbOrTx, planId: string, layoutRevision: number): 
 
 async function writeAll(tx: DbOrTx, plan: PlanRow, list: Fixture[]): Promise<PlanRow> {
   await tx.delete(fixtures).where(eq(fixtures.planId, plan.id));
-  await insertFixtureRows(tx, list.map((f, i) => fixtureToRow(plan.id, f, i)));
-  const [row] = await tx.update(plans).set({ layoutRevision: sql`${plans.layoutRevision} + 1` }).where(eq(plans.id, plan.id)).returning();
+  await insertFixtureRows(
+    tx,
+    list.map((f, i) => fixtureToRow(plan.id, f, i)),
+  );
+  const [row] = await tx
+    .update(plans)
+    .set({ layoutRevision: sql`${plans.layoutRevision} + 1` })
+    .where(eq(plans.id, plan.id))
+    .returning();
   return row;
 }
 
 /** Replaces the whole set, if nobody saved since `layoutRevision`; otherwise 409 and nothing changes. */
-export async function putFixtures(ctx: AppContext, viewer: Viewer, planId: string, input: FixturesPutInput): Promise<FixturesResponse> {
+export async function putFixtures(
+  ctx: AppContext,
+  viewer: Viewer,
+  planId: string,
+  input: FixturesPutInput,
+): Promise<FixturesResponse> {
   await loadVisiblePlan(ctx, viewer, planId);
   return ctx.db.transaction(async (tx) => {
     const plan = await lockForSave(tx, planId, input.layoutRevision);
@@ -69,7 +92,12 @@ export async function putFixtures(ctx: AppContext, viewer: Viewer, planId: strin
 }
 
 /** Applies a change set (upserts by id, deletes by id) under the same revision check. */
-export async function patchFixtures(ctx: AppContext, viewer: Viewer, planId: string, input: FixturesPatchInput): Promise<FixturesResponse> {
+export async function patchFixtures(
+  ctx: AppContext,
+  viewer: Viewer,
+  planId: string,
+  input: FixturesPatchInput,
+): Promise<FixturesResponse> {
   await loadVisiblePlan(ctx, viewer, planId);
   return ctx.db.transaction(async (tx) => {
     const plan = await lockForSave(tx, planId, input.layoutRevision);
@@ -84,7 +112,8 @@ export async function patchFixtures(ctx: AppContext, viewer: Viewer, planId: str
     });
     const upserted = new Set(checked.fixtures.map((f) => f.id));
     input.deletes.forEach((id, i) => {
-      if (upserted.has(id)) missing.push({ path: `deletes.${i}`, message: "is also in upserts; send a fixture in one list only" });
+      if (upserted.has(id))
+        missing.push({ path: `deletes.${i}`, message: "is also in upserts; send a fixture in one list only" });
     });
     if (missing.length) fieldErrors(missing);
     const next = [...current];
@@ -94,7 +123,14 @@ export async function patchFixtures(ctx: AppContext, viewer: Viewer, planId: str
       else next[at] = f;
     }
     const gone = new Set(input.deletes);
-    const row = await writeAll(tx, plan, next.filter((f) => !gone.has(f.id)));
-    return respond(row, next.filter((f) => !gone.has(f.id)));
+    const row = await writeAll(
+      tx,
+      plan,
+      next.filter((f) => !gone.has(f.id)),
+    );
+    return respond(
+      row,
+      next.filter((f) => !gone.has(f.id)),
+    );
   });
 }

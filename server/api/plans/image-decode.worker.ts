@@ -16,7 +16,16 @@ export interface DecodeRequest {
 }
 
 export type DecodeResponse =
-  | { id: number; ok: true; width: number; height: number; display: Uint8Array; displayWidth: number; displayHeight: number; thumb: Uint8Array }
+  | {
+      id: number;
+      ok: true;
+      width: number;
+      height: number;
+      display: Uint8Array;
+      displayWidth: number;
+      displayHeight: number;
+      thumb: Uint8Array;
+    }
   | { id: number; ok: false; message: string };
 
 type Image = Awaited<ReturnType<typeof Jimp.fromBuffer>>;
@@ -50,6 +59,11 @@ async function handle(req: DecodeRequest): Promise<DecodeResponse> {
 parentPort?.on("message", (req: DecodeRequest) => {
   handle(req).then(
     (res) => parentPort!.postMessage(res),
-    (err: unknown) => parentPort!.postMessage({ id: req.id, ok: false, message: err instanceof Error ? err.message : String(err) } satisfies DecodeResponse),
+    (err: unknown) =>
+      parentPort!.postMessage({
+        id: req.id,
+        ok: false,
+        message: err instanceof Error ? err.message : String(err),
+      } satisfies DecodeResponse),
   );
 });

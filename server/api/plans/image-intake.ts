@@ -31,15 +31,21 @@ const unreadable = (message: string) => new HttpError(422, "unreadable_image", m
 export function checkPlanImageHeader(data: Uint8Array, maxPixels: number): HeaderCheck {
   if (data.length === 0) throw unreadable("The uploaded file is empty.");
   const mime = sniffPlanImage(data);
-  if (!mime) throw unsupported("The file is not a PNG or JPEG image (its content was checked, not its name). Export the floor plan as PNG or JPEG and try again.");
+  if (!mime)
+    throw unsupported(
+      "The file is not a PNG or JPEG image (its content was checked, not its name). Export the floor plan as PNG or JPEG and try again.",
+    );
   let size: { width?: number; height?: number };
   try {
     size = imageSize(data);
   } catch {
-    throw unreadable(`The ${mime === "image/png" ? "PNG" : "JPEG"} header could not be read: the file is damaged or incomplete.`);
+    throw unreadable(
+      `The ${mime === "image/png" ? "PNG" : "JPEG"} header could not be read: the file is damaged or incomplete.`,
+    );
   }
   const { width, height } = size;
-  if (!width || !height) throw unreadable("The image header gives no width and height: the file is damaged or incomplete.");
+  if (!width || !height)
+    throw unreadable("The image header gives no width and height: the file is damaged or incomplete.");
   const pixels = width * height;
   if (pixels > maxPixels) {
     throw new HttpError(

@@ -11,7 +11,10 @@ export type DbOrTx = Db | Tx;
 
 /** The plan when the viewer may see its store; 404 otherwise (other companies' ids reveal nothing). */
 export async function loadVisiblePlan(ctx: AppContext, viewer: Viewer, planId: string): Promise<PlanRow> {
-  const [row] = await ctx.db.select().from(plans).where(and(eq(plans.id, planId), eq(plans.companyId, viewer.companyId)));
+  const [row] = await ctx.db
+    .select()
+    .from(plans)
+    .where(and(eq(plans.id, planId), eq(plans.companyId, viewer.companyId)));
   if (!row) throw notFound("That plan");
   try {
     await loadVisibleStore(ctx, viewer, row.storeId);
@@ -61,7 +64,9 @@ export function assertRevision(plan: PlanRow, layoutRevision: number | undefined
 
 export function assertCalibrated(plan: PlanRow): void {
   if (plan.widthM === null || plan.heightM === null) {
-    throw conflict("Calibrate the plan's scale first: draw a line of known length on the image. Fixtures are saved in metres, so an uncalibrated plan cannot hold them.");
+    throw conflict(
+      "Calibrate the plan's scale first: draw a line of known length on the image. Fixtures are saved in metres, so an uncalibrated plan cannot hold them.",
+    );
   }
 }
 

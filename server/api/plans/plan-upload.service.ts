@@ -24,18 +24,36 @@ const EXT = { "image/png": "png", "image/jpeg": "jpg" } as const;
  * decoding (type by content, pixel budget), decoding runs in the worker, and the three files are
  * written before the row; if anything fails, every file written so far is removed again.
  */
-export async function createImagePlan(ctx: AppContext, viewer: Viewer, userId: string, storeId: string, file: UploadedFile | undefined): Promise<Plan> {
+export async function createImagePlan(
+  ctx: AppContext,
+  viewer: Viewer,
+  userId: string,
+  storeId: string,
+  file: UploadedFile | undefined,
+): Promise<Plan> {
   await loadVisibleStore(ctx, viewer, storeId);
-  if (!file) throw badRequest("Please attach the floor plan image in the form field \"image\".", { image: "is required: a PNG or JPEG file" });
+  if (!file)
+    throw badRequest('Please attach the floor plan image in the form field "image".', {
+      image: "is required: a PNG or JPEG file",
+    });
   const limits = planImageLimits(ctx);
   const header = checkPlanImageHeader(file.buffer, limits.maxPixels);
 
   let decoded;
   try {
-    decoded = await planImageDecoder().decode({ data: file.buffer, mime: header.mime, displayMaxSide: limits.displayMaxSide, thumbMaxSide: limits.thumbMaxSide });
+    decoded = await planImageDecoder().decode({
+      data: file.buffer,
+      mime: header.mime,
+      displayMaxSide: limits.displayMaxSide,
+      thumbMaxSide: limits.thumbMaxSide,
+    });
   } catch (err) {
     if (err instanceof ImageDecodeError) {
-      throw new HttpError(422, "unreadable_image", `The image could not be decoded: the file is damaged or incomplete (${err.message}). Export it again and retry.`);
+      throw new HttpError(
+        422,
+        "unreadable_image",
+        `The image could not be decoded: the file is damaged or incomplete (${err.message}). Export it again and retry.`,
+      );
     }
     throw err;
   }
@@ -43,11 +61,19 @@ export async function createImagePlan(ctx: AppContext, viewer: Viewer, userId: s
   const planId = randomUUID();
   const ext = EXT[header.mime];
   const prefix = `plans/${viewer.companyId}/${planId}`;
-  const keys = { original: `${prefix}/original.${ext}`, display: `${prefix}/display.${ext}`, thumb: `${prefix}/thumb.${ext}` };
+  const keys = {
+    original: `${prefix}/original.${ext}`,
+    display: `${prefix}/display.${ext}`,
+    thumb: `${prefix}/thumb.${ext}`,
+  };
   const storage = planStorage(ctx);
   const written: string[] = [];
   try {
-    for (const [key, bytes] of [[keys.original, file.buffer], [keys.display, decoded.display], [keys.thumb, decoded.thumb]] as const) {
+    for (const [key, bytes] of [
+      [keys.original, file.buffer],
+      [keys.display, decoded.display],
+      [keys.thumb, decoded.thumb],
+    ] as const) {
       await storage.put(key, Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength));
       written.push(key);
     }
@@ -80,7 +106,13 @@ export async function createImagePlan(ctx: AppContext, viewer: Viewer, userId: s
 }
 
 /** A plan with no drawing, sized in metres from the start (so it needs no calibration). */
-export async function createBlankPlan(ctx: AppContext, viewer: Viewer, userId: string, storeId: string, input: BlankPlanInput): Promise<Plan> {
+export async function createBlankPlan(
+  ctx: AppContext,
+  viewer: Viewer,
+  userId: string,
+  storeId: string,
+  input: BlankPlanInput,
+): Promise<Plan> {
   await loadVisibleStore(ctx, viewer, storeId);
   const factor = input.unit === "ft" ? METRES_PER_FOOT : 1; // 0.3048 m/ft exactly, NIST SP 811
   const widthM = input.width * factor;
@@ -88,7 +120,8 @@ export async function createBlankPlan(ctx: AppContext, viewer: Viewer, userId: s
   const fields: Record<string, string> = {};
   if (widthM > BLANK_PLAN_MAX_M) fields.width = `must be at most ${BLANK_PLAN_MAX_M} m`;
   if (heightM > BLANK_PLAN_MAX_M) fields.depth = `must be at most ${BLANK_PLAN_MAX_M} m`;
-  if (Object.keys(fields).length) throw badRequest(`Please check: a plan side may be at most ${BLANK_PLAN_MAX_M} m.`, fields);
+  if (Object.keys(fields).length)
+    throw badRequest(`Please check: a plan side may be at most ${BLANK_PLAN_MAX_M} m.`, fields);
   const row = await ctx.db.transaction((tx) =>
     addPlanVersion(tx, { companyId: viewer.companyId, storeId, source: "blank", widthM, heightM, createdById: userId }),
   );

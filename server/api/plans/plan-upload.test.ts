@@ -38,7 +38,10 @@ function upload(a: Agent, storeId: string, data: Buffer, filename: string) {
 
 async function filesUnder(dir: string): Promise<string[]> {
   const entries = await fs.readdir(dir, { recursive: true, withFileTypes: true });
-  return entries.filter((e) => e.isFile()).map((e) => path.relative(dir, path.join(e.parentPath, e.name))).sort();
+  return entries
+    .filter((e) => e.isFile())
+    .map((e) => path.relative(dir, path.join(e.parentPath, e.name)))
+    .sort();
 }
 
 async function planCount(storeId: string): Promise<number> {
@@ -52,9 +55,21 @@ describe("plan upload: accepted images", () => {
     const png = await makePng(800, 500);
     const res = await upload(lead, co.store.id, png, "ground-floor.png");
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ version: 1, source: "image", calibrated: false, metresPerPixel: null, layoutRevision: 0 });
+    expect(res.body).toMatchObject({
+      version: 1,
+      source: "image",
+      calibrated: false,
+      metresPerPixel: null,
+      layoutRevision: 0,
+    });
     // The display copy's longest side is capped (400 in this app), aspect kept: 800×500 → 400×250.
-    expect(res.body.image).toMatchObject({ widthPx: 400, heightPx: 250, originalWidthPx: 800, originalHeightPx: 500, originalMime: "image/png" });
+    expect(res.body.image).toMatchObject({
+      widthPx: 400,
+      heightPx: 250,
+      originalWidthPx: 800,
+      originalHeightPx: 500,
+      originalMime: "image/png",
+    });
 
     const original = await lead.agent.get(res.body.image.originalUrl).buffer(true);
     expect(original.status).toBe(200);
@@ -91,10 +106,37 @@ describe("plan upload: accepted images", () => {
 
 describe("plan upload: refused files leave nothing behind", () => {
   const cases: [string, () => Promise<Buffer>, string, number, RegExp][] = [
-    ["a text file renamed .png", async () => Buffer.from("Aisle 4: dairy, eggs, cheese\n".repeat(20)), "plan.png", 415, /not a PNG or JPEG image/],
-    ["a truncated PNG", async () => (await makePng(600, 400)).subarray(0, 400), "cut.png", 422, /damaged or incomplete/],
-    ["a truncated JPEG", async () => { const j = await makeJpeg(600, 400); return j.subarray(0, Math.floor(j.length / 3)); }, "cut.jpg", 422, /damaged or incomplete/],
-    ["a header declaring 10000 × 10000 px", async () => pngHeaderOnly(10_000, 10_000), "bomb.png", 413, /10000 × 10000 px \(100\.0 megapixels\); plans may have at most 40 megapixels/],
+    [
+      "a text file renamed .png",
+      async () => Buffer.from("Aisle 4: dairy, eggs, cheese\n".repeat(20)),
+      "plan.png",
+      415,
+      /not a PNG or JPEG image/,
+    ],
+    [
+      "a truncated PNG",
+      async () => (await makePng(600, 400)).subarray(0, 400),
+      "cut.png",
+      422,
+      /damaged or incomplete/,
+    ],
+    [
+      "a truncated JPEG",
+      async () => {
+        const j = await makeJpeg(600, 400);
+        return j.subarray(0, Math.floor(j.length / 3));
+      },
+      "cut.jpg",
+      422,
+      /damaged or incomplete/,
+    ],
+    [
+      "a header declaring 10000 × 10000 px",
+      async () => pngHeaderOnly(10_000, 10_000),
+      "bomb.png",
+      413,
+      /10000 × 10000 px \(100\.0 megapixels\); plans may have at most 40 megapixels/,
+    ],
     ["an empty file", async () => Buffer.alloc(0), "empty.png", 422, /empty/],
   ];
   it.each(cases)("refuses %s with a clear message", async (_name, make, filename, status, message) => {

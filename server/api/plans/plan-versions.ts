@@ -5,7 +5,10 @@ import { transformFixture } from "#core/domain/plans/transform-fixture";
 import { latestVersion, lockStoreVersions, type DbOrTx } from "./plan-access";
 import { fixtureToRow, rowToFixture, type FixtureRow, type PlanRow } from "./plan-rows";
 
-type NewPlan = Omit<typeof plans.$inferInsert, "version" | "previousPlanId" | "alignment" | "alignmentMatched" | "layoutRevision">;
+type NewPlan = Omit<
+  typeof plans.$inferInsert,
+  "version" | "previousPlanId" | "alignment" | "alignmentMatched" | "layoutRevision"
+>;
 
 /** Inserts rows in chunks that stay well under PostgreSQL's 65535 bind parameters. */
 export async function insertFixtureRows(tx: DbOrTx, rows: FixtureRow[]): Promise<void> {

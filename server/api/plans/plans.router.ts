@@ -1,7 +1,14 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
-import { alignmentInput, blankPlanInput, calibrationInput, fixturesPatchInput, fixturesPutInput, imageVariantSchema } from "#core/contracts/plans";
+import {
+  alignmentInput,
+  blankPlanInput,
+  calibrationInput,
+  fixturesPatchInput,
+  fixturesPutInput,
+  imageVariantSchema,
+} from "#core/contracts/plans";
 import { member, requireMember } from "../../middleware/auth";
 import { singleUpload } from "../../middleware/upload";
 import { validate } from "../../middleware/validate";
@@ -20,9 +27,14 @@ const imageQuery = z.object({ variant: imageVariantSchema.default("display") });
 export function plansRouter(ctx: AppContext): Router {
   const router = Router();
 
-  router.get("/stores/:storeId/plans", requireMember("stores.read"), validate(storeParam, "params"), async (req, res) => {
-    res.json({ plans: await listPlans(ctx, member(req), res.locals.params.storeId) });
-  });
+  router.get(
+    "/stores/:storeId/plans",
+    requireMember("stores.read"),
+    validate(storeParam, "params"),
+    async (req, res) => {
+      res.json({ plans: await listPlans(ctx, member(req), res.locals.params.storeId) });
+    },
+  );
 
   router.post(
     "/stores/:storeId/plans",
@@ -35,44 +47,88 @@ export function plansRouter(ctx: AppContext): Router {
     },
     singleUpload("image", () => planImageLimits(ctx).maxBytes),
     async (req, res) => {
-      res.status(201).json(await createImagePlan(ctx, member(req), req.auth!.user.id, res.locals.params.storeId, req.file));
+      res
+        .status(201)
+        .json(await createImagePlan(ctx, member(req), req.auth!.user.id, res.locals.params.storeId, req.file));
     },
   );
 
-  router.post("/stores/:storeId/plans/blank", requireMember("plans.edit"), validate(storeParam, "params"), validate(blankPlanInput), async (req, res) => {
-    res.status(201).json(await createBlankPlan(ctx, member(req), req.auth!.user.id, res.locals.params.storeId, req.body));
-  });
+  router.post(
+    "/stores/:storeId/plans/blank",
+    requireMember("plans.edit"),
+    validate(storeParam, "params"),
+    validate(blankPlanInput),
+    async (req, res) => {
+      res
+        .status(201)
+        .json(await createBlankPlan(ctx, member(req), req.auth!.user.id, res.locals.params.storeId, req.body));
+    },
+  );
 
   router.get("/plans/:id", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
     res.json(await getPlan(ctx, member(req), res.locals.params.id));
   });
 
   // Images are served only through this authorized route, never from a public folder.
-  router.get("/plans/:id/image", requireMember("stores.read"), validate(idParam, "params"), validate(imageQuery, "query"), async (req, res) => {
-    const image = await readPlanImage(ctx, member(req), res.locals.params.id, res.locals.query.variant);
-    res.set({ "Content-Type": image.mime, "Cache-Control": "private, max-age=3600", "X-Content-Type-Options": "nosniff" });
-    res.send(image.data);
-  });
+  router.get(
+    "/plans/:id/image",
+    requireMember("stores.read"),
+    validate(idParam, "params"),
+    validate(imageQuery, "query"),
+    async (req, res) => {
+      const image = await readPlanImage(ctx, member(req), res.locals.params.id, res.locals.query.variant);
+      res.set({
+        "Content-Type": image.mime,
+        "Cache-Control": "private, max-age=3600",
+        "X-Content-Type-Options": "nosniff",
+      });
+      res.send(image.data);
+    },
+  );
 
-  router.post("/plans/:id/calibration", requireMember("plans.edit"), validate(idParam, "params"), validate(calibrationInput), async (req, res) => {
-    res.json(await calibratePlan(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
-  });
+  router.post(
+    "/plans/:id/calibration",
+    requireMember("plans.edit"),
+    validate(idParam, "params"),
+    validate(calibrationInput),
+    async (req, res) => {
+      res.json(await calibratePlan(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
+    },
+  );
 
-  router.put("/plans/:id/alignment", requireMember("plans.edit"), validate(idParam, "params"), validate(alignmentInput), async (req, res) => {
-    res.json(await setAlignment(ctx, member(req), res.locals.params.id, req.body));
-  });
+  router.put(
+    "/plans/:id/alignment",
+    requireMember("plans.edit"),
+    validate(idParam, "params"),
+    validate(alignmentInput),
+    async (req, res) => {
+      res.json(await setAlignment(ctx, member(req), res.locals.params.id, req.body));
+    },
+  );
 
   router.get("/plans/:id/fixtures", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
     res.json(await getFixtures(ctx, member(req), res.locals.params.id));
   });
 
-  router.put("/plans/:id/fixtures", requireMember("plans.edit"), validate(idParam, "params"), validate(fixturesPutInput), async (req, res) => {
-    res.json(await putFixtures(ctx, member(req), res.locals.params.id, req.body));
-  });
+  router.put(
+    "/plans/:id/fixtures",
+    requireMember("plans.edit"),
+    validate(idParam, "params"),
+    validate(fixturesPutInput),
+    async (req, res) => {
+      res.json(await putFixtures(ctx, member(req), res.locals.params.id, req.body));
+    },
+  );
 
-  router.patch("/plans/:id/fixtures", requireMember("plans.edit"), validate(idParam, "params"), validate(fixturesPatchInput), async (req, res) => {
-    res.json(await patchFixtures(ctx, member(req), res.locals.params.id, req.body));
-  });
+  router.patch(
+    "/plans/:id/fixtures",
+    requireMember("plans.edit"),
+    validate(idParam, "params"),
+    validate(fixturesPatchInput),
+    async (req, res) => {
+      res.json(await patchFixtures(ctx, member(req), res.locals.params.id, req.body));
+    },
+  );
 
   return router;
 }

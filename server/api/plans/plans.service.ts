@@ -12,7 +12,10 @@ import { toPlan } from "./plan-rows";
 export async function listPlans(ctx: AppContext, viewer: Viewer, storeId: string): Promise<Plan[]> {
   await loadVisibleStore(ctx, viewer, storeId);
   const rows = await ctx.db.select().from(plans).where(eq(plans.storeId, storeId)).orderBy(desc(plans.version));
-  const counts = await fixtureCounts(ctx.db, rows.map((r) => r.id));
+  const counts = await fixtureCounts(
+    ctx.db,
+    rows.map((r) => r.id),
+  );
   return rows.map((r) => toPlan(r, counts.get(r.id) ?? 0));
 }
 
@@ -22,7 +25,12 @@ export async function getPlan(ctx: AppContext, viewer: Viewer, planId: string): 
   return toPlan(row, counts.get(row.id) ?? 0);
 }
 
-export async function readPlanImage(ctx: AppContext, viewer: Viewer, planId: string, variant: ImageVariant): Promise<{ mime: string; data: Buffer }> {
+export async function readPlanImage(
+  ctx: AppContext,
+  viewer: Viewer,
+  planId: string,
+  variant: ImageVariant,
+): Promise<{ mime: string; data: Buffer }> {
   const row = await loadVisiblePlan(ctx, viewer, planId);
   const key = variant === "original" ? row.originalKey : variant === "thumb" ? row.thumbKey : row.displayKey;
   if (row.source !== "image" || !key) throw new HttpError(404, "not_found", "A blank plan has no image.");

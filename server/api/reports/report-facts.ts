@@ -5,7 +5,17 @@
  */
 import { and, asc, eq, inArray } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import { companies, detectors, findings, fixtures, plans, readings, stores, systems, users } from "../../db/schema/index";
+import {
+  companies,
+  detectors,
+  findings,
+  fixtures,
+  plans,
+  readings,
+  stores,
+  systems,
+  users,
+} from "../../db/schema/index";
 import { SAMPLE_POINT_LABELS } from "#core/contracts/sweeps";
 import { COMPONENT_LABELS } from "#core/contracts/findings";
 import { createConcentrationScale, niceMaxPpm } from "#core/domain/fieldmap/concentration-ramp";
@@ -33,16 +43,41 @@ export interface ReportFacts {
 }
 
 export function zonedDateTime(d: Date, timeZone: string): string {
-  return new Intl.DateTimeFormat("en-GB", { timeZone, weekday: "short", day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit", hour12: false, timeZoneName: "short" }).format(d);
+  return new Intl.DateTimeFormat("en-GB", {
+    timeZone,
+    weekday: "short",
+    day: "numeric",
+    month: "short",
+    year: "numeric",
+    hour: "2-digit",
+    minute: "2-digit",
+    hour12: false,
+    timeZoneName: "short",
+  }).format(d);
 }
 
 function zonedTime(d: Date, timeZone: string): string {
-  return new Intl.DateTimeFormat("en-GB", { timeZone, hour: "2-digit", minute: "2-digit", second: "2-digit", hour12: false }).format(d);
+  return new Intl.DateTimeFormat("en-GB", {
+    timeZone,
+    hour: "2-digit",
+    minute: "2-digit",
+    second: "2-digit",
+    hour12: false,
+  }).format(d);
 }
 
-const PRINCIPLES: Record<string, string> = { "heated-diode": "heated diode", infrared: "infrared", other: "other principle" };
+const PRINCIPLES: Record<string, string> = {
+  "heated-diode": "heated diode",
+  infrared: "infrared",
+  other: "other principle",
+};
 
-export async function loadReportFacts(ctx: AppContext, viewer: Viewer, sweepId: string, unit: LengthPreference): Promise<ReportFacts> {
+export async function loadReportFacts(
+  ctx: AppContext,
+  viewer: Viewer,
+  sweepId: string,
+  unit: LengthPreference,
+): Promise<ReportFacts> {
   const sweep = await loadVisibleSweep(ctx, viewer, sweepId);
   let analysis: AnalysisRow | null = null;
   let analysisProblem: string | null = null;
@@ -62,9 +97,19 @@ export async function loadReportFacts(ctx: AppContext, viewer: Viewer, sweepId: 
   const tz = store.timeZone;
   const [fixtureRows, readingRows, findingRows, systemRows] = await Promise.all([
     ctx.db.select().from(fixtures).where(eq(fixtures.planId, sweep.planId)).orderBy(asc(fixtures.position)),
-    ctx.db.select().from(readings).where(eq(readings.sweepId, sweep.id)).orderBy(asc(readings.takenAt), asc(readings.id)),
-    ctx.db.select().from(findings).where(and(eq(findings.sweepId, sweep.id), eq(findings.companyId, sweep.companyId))).orderBy(asc(findings.foundAt)),
-    sweep.systemIds.length ? ctx.db.select().from(systems).where(inArray(systems.id, sweep.systemIds)) : Promise.resolve([]),
+    ctx.db
+      .select()
+      .from(readings)
+      .where(eq(readings.sweepId, sweep.id))
+      .orderBy(asc(readings.takenAt), asc(readings.id)),
+    ctx.db
+      .select()
+      .from(findings)
+      .where(and(eq(findings.sweepId, sweep.id), eq(findings.companyId, sweep.companyId)))
+      .orderBy(asc(findings.foundAt)),
+    sweep.systemIds.length
+      ? ctx.db.select().from(systems).where(inArray(systems.id, sweep.systemIds))
+      : Promise.resolve([]),
   ]);
   const label = new Map(fixtureRows.map((f) => [f.id, f.label || f.kind]));
   const len = (m: number) => formatLength(m, unit, { decimals: 1 });
@@ -89,7 +134,10 @@ export async function loadReportFacts(ctx: AppContext, viewer: Viewer, sweepId: 
     sweep: {
       started: zonedDateTime(sweep.startedAt, tz),
       submitted: sweep.submittedAt ? zonedDateTime(sweep.submittedAt, tz) : "not yet submitted",
-      status: sweep.status === "reviewed" && sweep.reviewedAt ? `reviewed ${zonedDateTime(sweep.reviewedAt, tz)}` : sweep.status.replace("-", " "),
+      status:
+        sweep.status === "reviewed" && sweep.reviewedAt
+          ? `reviewed ${zonedDateTime(sweep.reviewedAt, tz)}`
+          : sweep.status.replace("-", " "),
       technician: tech?.name ?? "",
       conditions: `fans ${sweep.fans}${sweep.defrost ? ", in defrost" : ""}`,
     },
@@ -118,7 +166,14 @@ export async function loadReportFacts(ctx: AppContext, viewer: Viewer, sweepId: 
     findings: findingRows.map((f) => ({
       status: f.status,
       found: zonedDateTime(f.foundAt, tz),
-      where: [f.fixtureId ? label.get(f.fixtureId) : null, f.component ? COMPONENT_LABELS[f.component as keyof typeof COMPONENT_LABELS] : null, f.x !== null && f.y !== null ? pos(f.x, f.y) : null].filter(Boolean).join(", ") || "on the plan",
+      where:
+        [
+          f.fixtureId ? label.get(f.fixtureId) : null,
+          f.component ? COMPONENT_LABELS[f.component as keyof typeof COMPONENT_LABELS] : null,
+          f.x !== null && f.y !== null ? pos(f.x, f.y) : null,
+        ]
+          .filter(Boolean)
+          .join(", ") || "on the plan",
       note: f.note,
     })),
     readings: readingRows.map((r, i) => {
@@ -139,7 +194,18 @@ export async function loadReportFacts(ctx: AppContext, viewer: Viewer, sweepId: 
   };
   const csv: CsvReading[] = readingRows.map((r) => {
     const c = corrected.get(r.id);
-    return { id: r.id, takenAt: r.takenAt, t: (r.takenAt.getTime() - t0) / 1000, raw: { x: r.x, y: r.y }, corrected: c ? c.corrected : null, ppm: r.ppm, atLeast: r.atLeast, samplePoint: r.samplePoint, note: r.note, flags: c?.flags ?? [] };
+    return {
+      id: r.id,
+      takenAt: r.takenAt,
+      t: (r.takenAt.getTime() - t0) / 1000,
+      raw: { x: r.x, y: r.y },
+      corrected: c ? c.corrected : null,
+      ppm: r.ppm,
+      atLeast: r.atLeast,
+      samplePoint: r.samplePoint,
+      note: r.note,
+      flags: c?.flags ?? [],
+    };
   });
   const outlines = fixtureRows.filter((f) => f.polygon).map((f) => f.polygon as [number, number][]);
   return {
@@ -150,7 +216,11 @@ export async function loadReportFacts(ctx: AppContext, viewer: Viewer, sweepId: 
     csv,
     field: analysis ? rowField(analysis) : null,
     maxPpm: scale.maxPpm,
-    planImage: { displayKey: plan.source === "image" ? plan.displayKey : null, widthM: plan.widthM ?? 1, heightM: plan.heightM ?? 1 },
+    planImage: {
+      displayKey: plan.source === "image" ? plan.displayKey : null,
+      widthM: plan.widthM ?? 1,
+      heightM: plan.heightM ?? 1,
+    },
     outlines,
   };
 }

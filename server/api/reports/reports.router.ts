@@ -5,7 +5,13 @@ import { sendReportInput } from "#core/contracts/reports";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { readerLengthUnit } from "./reader-units";
-import { listReportSends, reportRecipients, sendSweepReport, sweepReadingsCsv, sweepReportPdf } from "./reports.service";
+import {
+  listReportSends,
+  reportRecipients,
+  sendSweepReport,
+  sweepReadingsCsv,
+  sweepReportPdf,
+} from "./reports.service";
 
 const idParam = z.object({ id: z.uuid("must be a valid id") });
 
@@ -18,19 +24,44 @@ export function reportsRouter(ctx: AppContext): Router {
     res.type("application/pdf").setHeader("Content-Disposition", `attachment; filename="${filename}"`);
     res.send(pdf);
   });
-  router.get("/sweeps/:id/readings.csv", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
-    const { filename, csv } = await sweepReadingsCsv(ctx, member(req), res.locals.params.id, await unit(req));
-    res.type("text/csv; charset=utf-8").setHeader("Content-Disposition", `attachment; filename="${filename}"`);
-    res.send(csv);
-  });
-  router.get("/sweeps/:id/report/recipients", requireMember("reports.send"), validate(idParam, "params"), async (req, res) => {
-    res.json({ storeContacts: await reportRecipients(ctx, member(req), res.locals.params.id) });
-  });
-  router.get("/sweeps/:id/report/sends", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
-    res.json({ sends: await listReportSends(ctx, member(req), res.locals.params.id) });
-  });
-  router.post("/sweeps/:id/report/send", requireMember("reports.send"), validate(idParam, "params"), validate(sendReportInput), async (req, res) => {
-    res.status(201).json(await sendSweepReport(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body, await unit(req)));
-  });
+  router.get(
+    "/sweeps/:id/readings.csv",
+    requireMember("stores.read"),
+    validate(idParam, "params"),
+    async (req, res) => {
+      const { filename, csv } = await sweepReadingsCsv(ctx, member(req), res.locals.params.id, await unit(req));
+      res.type("text/csv; charset=utf-8").setHeader("Content-Disposition", `attachment; filename="${filename}"`);
+      res.send(csv);
+    },
+  );
+  router.get(
+    "/sweeps/:id/report/recipients",
+    requireMember("reports.send"),
+    validate(idParam, "params"),
+    async (req, res) => {
+      res.json({ storeContacts: await reportRecipients(ctx, member(req), res.locals.params.id) });
+    },
+  );
+  router.get(
+    "/sweeps/:id/report/sends",
+    requireMember("stores.read"),
+    validate(idParam, "params"),
+    async (req, res) => {
+      res.json({ sends: await listReportSends(ctx, member(req), res.locals.params.id) });
+    },
+  );
+  router.post(
+    "/sweeps/:id/report/send",
+    requireMember("reports.send"),
+    validate(idParam, "params"),
+    validate(sendReportInput),
+    async (req, res) => {
+      res
+        .status(201)
+        .json(
+          await sendSweepReport(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body, await unit(req)),
+        );
+    },
+  );
   return router;
 }

@@ -14,7 +14,12 @@ import type { Viewer } from "../stores/store-access";
 import { loadVisibleSweep } from "../sweeps/sweep-access";
 import { loadReportFacts, type ReportFacts } from "./report-facts";
 
-const slug = (s: string) => s.normalize("NFKD").replace(/[^\w]+/g, "-").replace(/^-|-$/g, "").toLowerCase();
+const slug = (s: string) =>
+  s
+    .normalize("NFKD")
+    .replace(/[^\w]+/g, "-")
+    .replace(/^-|-$/g, "")
+    .toLowerCase();
 
 function fileBase(f: ReportFacts): string {
   const day = new Intl.DateTimeFormat("sv-SE", { timeZone: f.timeZone }).format(f.sweep.startedAt);
@@ -42,12 +47,22 @@ export async function buildReportPdf(ctx: AppContext, f: ReportFacts): Promise<B
   return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
 }
 
-export async function sweepReportPdf(ctx: AppContext, viewer: Viewer, sweepId: string, unit: LengthPreference): Promise<{ filename: string; pdf: Buffer }> {
+export async function sweepReportPdf(
+  ctx: AppContext,
+  viewer: Viewer,
+  sweepId: string,
+  unit: LengthPreference,
+): Promise<{ filename: string; pdf: Buffer }> {
   const facts = await loadReportFacts(ctx, viewer, sweepId, unit);
   return { filename: `${fileBase(facts)}.pdf`, pdf: await buildReportPdf(ctx, facts) };
 }
 
-export async function sweepReadingsCsv(ctx: AppContext, viewer: Viewer, sweepId: string, unit: LengthPreference): Promise<{ filename: string; csv: string }> {
+export async function sweepReadingsCsv(
+  ctx: AppContext,
+  viewer: Viewer,
+  sweepId: string,
+  unit: LengthPreference,
+): Promise<{ filename: string; csv: string }> {
   const facts = await loadReportFacts(ctx, viewer, sweepId, unit);
   return { filename: `${fileBase(facts)}-readings.csv`, csv: readingsCsv(facts.csv, unit, facts.timeZone) };
 }
@@ -59,7 +74,13 @@ export async function storeContacts(ctx: AppContext, companyId: string, storeId:
     .from(membershipStores)
     .innerJoin(memberships, eq(memberships.id, membershipStores.membershipId))
     .innerJoin(users, eq(users.id, memberships.userId))
-    .where(and(eq(membershipStores.storeId, storeId), eq(memberships.companyId, companyId), eq(memberships.role, "store-contact")));
+    .where(
+      and(
+        eq(membershipStores.storeId, storeId),
+        eq(memberships.companyId, companyId),
+        eq(memberships.role, "store-contact"),
+      ),
+    );
   return rows;
 }
 
@@ -70,12 +91,22 @@ export async function reportRecipients(ctx: AppContext, viewer: Viewer, sweepId:
 
 type ParsedSend = Required<Pick<SendReportInput, "storeContacts" | "addresses" | "message">>;
 
-export async function sendSweepReport(ctx: AppContext, viewer: Viewer, userId: string, sweepId: string, input: ParsedSend, unit: LengthPreference): Promise<ReportSend> {
+export async function sendSweepReport(
+  ctx: AppContext,
+  viewer: Viewer,
+  userId: string,
+  sweepId: string,
+  input: ParsedSend,
+  unit: LengthPreference,
+): Promise<ReportSend> {
   const facts = await loadReportFacts(ctx, viewer, sweepId, unit);
   const to = new Set(input.addresses.map((a) => a.toLowerCase()));
   if (input.storeContacts) {
     const contacts = await storeContacts(ctx, facts.sweep.companyId, facts.sweep.storeId);
-    if (contacts.length === 0 && to.size === 0) throw badRequest("This store has no store contact yet: type an address instead.", { storeContacts: "the store has no store contact" });
+    if (contacts.length === 0 && to.size === 0)
+      throw badRequest("This store has no store contact yet: type an address instead.", {
+        storeContacts: "the store has no store contact",
+      });
     for (const c of contacts) to.add(c.email.toLowerCase());
   }
   const pdf = await buildReportPdf(ctx, facts);
@@ -86,21 +117,62 @@ export async function sendSweepReport(ctx: AppContext, viewer: Viewer, userId: s
   const text = [
     input.message,
     `${sender?.name ?? "A colleague"} sent you the sweep report for ${facts.storeName} (${facts.model.company}).`,
-    top ? `Top suspect spot: ${top.fixture} at ${top.position} — ${top.reason}` : "No credible leak was found on this sweep.",
+    top
+      ? `Top suspect spot: ${top.fixture} at ${top.position} — ${top.reason}`
+      : "No credible leak was found on this sweep.",
     "The report is attached as a PDF. Safety: leak checks and repairs are for certified technicians; local codes apply.",
-  ].filter(Boolean).join("\n\n");
+  ]
+    .filter(Boolean)
+    .join("\n\n");
   const recipients = [...to];
-  await ctx.mailer.send({ to: recipients, subject, text, attachments: [{ filename, content: pdf, contentType: "application/pdf" }], companyId: facts.sweep.companyId });
+  await ctx.mailer.send({
+    to: recipients,
+    subject,
+    text,
+    attachments: [{ filename, content: pdf, contentType: "application/pdf" }],
+    companyId: facts.sweep.companyId,
+  });
   const [row] = await ctx.db
     .insert(reportSends)
-    .values({ companyId: facts.sweep.companyId, sweepId, sentById: userId, recipients, subject, filename, bytes: pdf.length, readingsRevision: facts.sweep.readingsRevision })
+    .values({
+      companyId: facts.sweep.companyId,
+      sweepId,
+      sentById: userId,
+      recipients,
+      subject,
+      filename,
+      bytes: pdf.length,
+      readingsRevision: facts.sweep.readingsRevision,
+    })
     .returning();
-  return { id: row.id, sweepId, sentBy: sender?.name ?? null, recipients, subject, filename, bytes: row.bytes, sentAt: row.sentAt.toISOString() };
+  return {
+    id: row.id,
+    sweepId,
+    sentBy: sender?.name ?? null,
+    recipients,
+    subject,
+    filename,
+    bytes: row.bytes,
+    sentAt: row.sentAt.toISOString(),
+  };
 }
 
 export async function listReportSends(ctx: AppContext, viewer: Viewer, sweepId: string): Promise<ReportSend[]> {
   await loadVisibleSweep(ctx, viewer, sweepId);
-  const rows = await ctx.db.select({ s: reportSends, by: users.name }).from(reportSends).leftJoin(users, eq(users.id, reportSends.sentById)).where(eq(reportSends.sweepId, sweepId)).orderBy(desc(reportSends.sentAt));
-  return rows.map(({ s, by }) => ({ id: s.id, sweepId: s.sweepId, sentBy: by, recipients: s.recipients, subject: s.subject, filename: s.filename, bytes: s.bytes, sentAt: s.sentAt.toISOString() }));
+  const rows = await ctx.db
+    .select({ s: reportSends, by: users.name })
+    .from(reportSends)
+    .leftJoin(users, eq(users.id, reportSends.sentById))
+    .where(eq(reportSends.sweepId, sweepId))
+    .orderBy(desc(reportSends.sentAt));
+  return rows.map(({ s, by }) => ({
+    id: s.id,
+    sweepId: s.sweepId,
+    sentBy: by,
+    recipients: s.recipients,
+    subject: s.subject,
+    filename: s.filename,
+    bytes: s.bytes,
+    sentAt: s.sentAt.toISOString(),
+  }));
 }
-

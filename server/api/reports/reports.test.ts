@@ -24,7 +24,10 @@ async function as(role: Role): Promise<Agent> {
 }
 
 /** supertest collects binary bodies as Buffers with this parser. */
-const binary = (res: NodeJS.ReadableStream & { setEncoding(e: string): void; on: Function }, cb: (e: Error | null, b: Buffer) => void) => {
+const binary = (
+  res: NodeJS.ReadableStream & { setEncoding(e: string): void; on: Function },
+  cb: (e: Error | null, b: Buffer) => void,
+) => {
   const chunks: Buffer[] = [];
   res.on("data", (c: Buffer) => chunks.push(c));
   res.on("end", () => cb(null, Buffer.concat(chunks)));
@@ -35,11 +38,29 @@ beforeAll(async () => {
   co = await seedCompany(t.ctx, "Ćwikła & Sons Grocers");
   const owner = await as("owner");
   const plan = await owner.post(`/api/stores/${co.store.id}/plans/blank`, { width: 30, depth: 12, unit: "m" });
-  const put = await owner.put(`/api/plans/${plan.body.id}/fixtures`, { layoutRevision: plan.body.layoutRevision, fixtures: caseLineFixtures(caseId, dropId) });
+  const put = await owner.put(`/api/plans/${plan.body.id}/fixtures`, {
+    layoutRevision: plan.body.layoutRevision,
+    fixtures: caseLineFixtures(caseId, dropId),
+  });
   expect(put.status).toBe(200);
-  const [d] = await t.ctx.db.insert(detectors).values({ companyId: co.company.id, name: "Diode sniffer", principle: "heated-diode", lastCheckedOn: new Date().toISOString().slice(0, 10) }).returning();
+  const [d] = await t.ctx.db
+    .insert(detectors)
+    .values({
+      companyId: co.company.id,
+      name: "Diode sniffer",
+      principle: "heated-diode",
+      lastCheckedOn: new Date().toISOString().slice(0, 10),
+    })
+    .returning();
   const tech = await as("technician");
-  const s = await tech.post(`/api/stores/${co.store.id}/sweeps`, { id: crypto.randomUUID(), planId: plan.body.id, detectorId: d.id, fans: "stopped", defrost: false, startedAt: startedAt.toISOString() });
+  const s = await tech.post(`/api/stores/${co.store.id}/sweeps`, {
+    id: crypto.randomUUID(),
+    planId: plan.body.id,
+    detectorId: d.id,
+    fans: "stopped",
+    defrost: false,
+    startedAt: startedAt.toISOString(),
+  });
   sweepId = s.body.id;
   readings = caseWalkReadings(startedAt);
   expect((await tech.post(`/api/sweeps/${sweepId}/readings`, { readings })).body.rejected).toEqual([]);
@@ -55,7 +76,10 @@ describe("sweep report PDF", () => {
     const analysis = await eng.get(`/api/sweeps/${sweepId}/analysis`);
     const top = analysis.body.candidates[0];
     expect(top.fixtureId).toBe(caseId);
-    const res = await eng.agent.get(`/api/sweeps/${sweepId}/report.pdf`).buffer(true).parse(binary as never);
+    const res = await eng.agent
+      .get(`/api/sweeps/${sweepId}/report.pdf`)
+      .buffer(true)
+      .parse(binary as never);
     expect(res.status).toBe(200);
     expect(res.headers["content-type"]).toMatch(/application\/pdf/);
     expect(res.headers["content-disposition"]).toMatch(/attachment; filename="sweep-.*\.pdf"/);
@@ -79,9 +103,20 @@ describe("sweep report PDF", () => {
 
   it("is readable by the store contact of this store only", async () => {
     expect((await (await as("store-contact")).agent.get(`/api/sweeps/${sweepId}/report.pdf`)).status).toBe(200);
-    const otherStore = await (await as("owner")).post(`/api/stores/${co.otherStore.id}/plans/blank`, { width: 10, depth: 10, unit: "m" });
+    const otherStore = await (await as("owner")).post(`/api/stores/${co.otherStore.id}/plans/blank`, {
+      width: 10,
+      depth: 10,
+      unit: "m",
+    });
     const [d] = await t.ctx.db.select().from(detectors).where(eq(detectors.companyId, co.company.id));
-    const s2 = await (await as("technician")).post(`/api/stores/${co.otherStore.id}/sweeps`, { id: crypto.randomUUID(), planId: otherStore.body.id, detectorId: d.id, fans: "running", defrost: false, startedAt: startedAt.toISOString() });
+    const s2 = await (await as("technician")).post(`/api/stores/${co.otherStore.id}/sweeps`, {
+      id: crypto.randomUUID(),
+      planId: otherStore.body.id,
+      detectorId: d.id,
+      fans: "running",
+      defrost: false,
+      startedAt: startedAt.toISOString(),
+    });
     const contact = await as("store-contact");
     expect((await contact.agent.get(`/api/sweeps/${s2.body.id}/report.pdf`)).status).toBe(404);
     expect((await contact.agent.get(`/api/sweeps/${s2.body.id}/readings.csv`)).status).toBe(404);
@@ -95,7 +130,20 @@ describe("readings CSV", () => {
     expect(res.headers["content-type"]).toMatch(/text\/csv/);
     const parsed = Papa.parse<Record<string, string>>(res.text, { header: true, skipEmptyLines: true });
     expect(parsed.errors).toEqual([]);
-    expect(parsed.meta.fields).toEqual(["reading_id", "local_time", "seconds_from_start", "raw_x_m", "raw_y_m", "corrected_x_m", "corrected_y_m", "ppm", "at_least", "sample_point", "flags", "note"]);
+    expect(parsed.meta.fields).toEqual([
+      "reading_id",
+      "local_time",
+      "seconds_from_start",
+      "raw_x_m",
+      "raw_y_m",
+      "corrected_x_m",
+      "corrected_y_m",
+      "ppm",
+      "at_least",
+      "sample_point",
+      "flags",
+      "note",
+    ]);
     expect(parsed.data).toHaveLength(readings.length);
     for (let i = 0; i < readings.length; i++) {
       const r = readings[i];
@@ -119,9 +167,15 @@ describe("readings CSV", () => {
 describe("e-mailing the report", () => {
   it("sends the PDF to the store contact and a typed address through SMTP, and records who sent what to whom", async () => {
     const eng = await as("engineer");
-    const res = await eng.post(`/api/sweeps/${sweepId}/report/send`, { storeContacts: true, addresses: ["area.manager@example.org"], message: "Monthly sweep attached." });
+    const res = await eng.post(`/api/sweeps/${sweepId}/report/send`, {
+      storeContacts: true,
+      addresses: ["area.manager@example.org"],
+      message: "Monthly sweep attached.",
+    });
     expect(res.status, JSON.stringify(res.body)).toBe(201);
-    expect(res.body.recipients.sort()).toEqual([co.people["store-contact"].email.toLowerCase(), "area.manager@example.org"].sort());
+    expect(res.body.recipients.sort()).toEqual(
+      [co.people["store-contact"].email.toLowerCase(), "area.manager@example.org"].sort(),
+    );
     // the fake SMTP server files what it received (Outbox table)
     let caught: (typeof outboxMessages.$inferSelect)[] = [];
     for (let i = 0; i < 50 && caught.length === 0; i++) {
@@ -141,8 +195,14 @@ describe("e-mailing the report", () => {
   });
 
   it("needs reports.send, a recipient, and well-formed addresses", async () => {
-    expect((await (await as("technician")).post(`/api/sweeps/${sweepId}/report/send`, { addresses: ["x@example.org"] })).status).toBe(403);
-    expect((await (await as("store-contact")).post(`/api/sweeps/${sweepId}/report/send`, { addresses: ["x@example.org"] })).status).toBe(403);
+    expect(
+      (await (await as("technician")).post(`/api/sweeps/${sweepId}/report/send`, { addresses: ["x@example.org"] }))
+        .status,
+    ).toBe(403);
+    expect(
+      (await (await as("store-contact")).post(`/api/sweeps/${sweepId}/report/send`, { addresses: ["x@example.org"] }))
+        .status,
+    ).toBe(403);
     const eng = await as("engineer");
     const none = await eng.post(`/api/sweeps/${sweepId}/report/send`, {});
     expect(none.status).toBe(400);

@@ -16,7 +16,12 @@ export function visibleStores(viewer: Viewer): SQL {
   const inCompany = eq(stores.companyId, viewer.companyId);
   if (!isStoreScoped(viewer.role)) return inCompany;
   // An empty scope matches nothing (inArray with [] is not valid SQL).
-  return and(inCompany, viewer.storeIds.length ? inArray(stores.id, viewer.storeIds) : eq(stores.id, "00000000-0000-0000-0000-000000000000"))!;
+  return and(
+    inCompany,
+    viewer.storeIds.length
+      ? inArray(stores.id, viewer.storeIds)
+      : eq(stores.id, "00000000-0000-0000-0000-000000000000"),
+  )!;
 }
 
 /**
@@ -24,7 +29,10 @@ export function visibleStores(viewer: Viewer): SQL {
  * companies' stores (or of stores outside a contact's scope) reveal nothing.
  */
 export async function loadVisibleStore(ctx: AppContext, viewer: Viewer, storeId: string) {
-  const [row] = await ctx.db.select().from(stores).where(and(eq(stores.id, storeId), visibleStores(viewer)));
+  const [row] = await ctx.db
+    .select()
+    .from(stores)
+    .where(and(eq(stores.id, storeId), visibleStores(viewer)));
   if (!row) throw notFound("That store");
   return row;
 }

@@ -15,12 +15,22 @@ export async function getStoreDetail(ctx: AppContext, viewer: Viewer, storeId: s
     listSystems(ctx, viewer, storeId),
     ctx.db.select().from(plans).where(eq(plans.storeId, storeId)).orderBy(desc(plans.version)),
   ]);
-  const counts = await fixtureCounts(ctx.db, planRows.map((p) => p.id));
+  const counts = await fixtureCounts(
+    ctx.db,
+    planRows.map((p) => p.id),
+  );
   const all = planRows.map((p) => toPlan(p, counts.get(p.id) ?? 0));
   return {
     store: toStore(store),
     systems: systemList,
     currentPlan: all[0] ?? null,
-    planVersions: all.map((p) => ({ id: p.id, version: p.version, source: p.source, calibrated: p.calibrated, fixtureCount: p.fixtureCount, createdAt: p.createdAt })),
+    planVersions: all.map((p) => ({
+      id: p.id,
+      version: p.version,
+      source: p.source,
+      calibrated: p.calibrated,
+      fixtureCount: p.fixtureCount,
+      createdAt: p.createdAt,
+    })),
   };
 }

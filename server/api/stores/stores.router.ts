@@ -25,9 +25,15 @@ export function storesRouter(ctx: AppContext): Router {
     res.json(await getStoreDetail(ctx, member(req), res.locals.params.id));
   });
 
-  router.patch("/stores/:id", requireMember("stores.edit"), validate(idParam, "params"), validate(storeUpdateInput), async (req, res) => {
-    res.json(await updateStore(ctx, member(req), res.locals.params.id, req.body));
-  });
+  router.patch(
+    "/stores/:id",
+    requireMember("stores.edit"),
+    validate(idParam, "params"),
+    validate(storeUpdateInput),
+    async (req, res) => {
+      res.json(await updateStore(ctx, member(req), res.locals.params.id, req.body));
+    },
+  );
 
   router.post("/stores/:id/archive", requireMember("stores.edit"), validate(idParam, "params"), async (req, res) => {
     res.json(await setArchived(ctx, member(req), res.locals.params.id, true));

@@ -24,10 +24,13 @@ function likePattern(text: string): string {
 }
 
 export async function listStores(ctx: AppContext, viewer: Viewer, q: StoreListQuery): Promise<Store[]> {
-  const search = q.search ? or(ilike(stores.name, likePattern(q.search)), ilike(stores.address, likePattern(q.search))) : undefined;
+  const search = q.search
+    ? or(ilike(stores.name, likePattern(q.search)), ilike(stores.address, likePattern(q.search)))
+    : undefined;
   const dir = q.order === "desc" ? desc : asc;
   // Names sort case-insensitively, then by id so equal names keep a stable order.
-  const order = q.sort === "created" ? [dir(stores.createdAt), asc(stores.id)] : [dir(sql`lower(${stores.name})`), asc(stores.id)];
+  const order =
+    q.sort === "created" ? [dir(stores.createdAt), asc(stores.id)] : [dir(sql`lower(${stores.name})`), asc(stores.id)];
   const rows = await ctx.db
     .select()
     .from(stores)
@@ -37,13 +40,25 @@ export async function listStores(ctx: AppContext, viewer: Viewer, q: StoreListQu
 }
 
 export async function createStore(ctx: AppContext, companyId: string, input: StoreInput): Promise<Store> {
-  const [row] = await ctx.db.insert(stores).values({ companyId, ...input }).returning();
+  const [row] = await ctx.db
+    .insert(stores)
+    .values({ companyId, ...input })
+    .returning();
   return toStore(row);
 }
 
-export async function updateStore(ctx: AppContext, viewer: Viewer, storeId: string, input: StoreUpdateInput): Promise<Store> {
+export async function updateStore(
+  ctx: AppContext,
+  viewer: Viewer,
+  storeId: string,
+  input: StoreUpdateInput,
+): Promise<Store> {
   await loadVisibleStore(ctx, viewer, storeId);
-  const [row] = await ctx.db.update(stores).set({ ...input, updatedAt: new Date() }).where(eq(stores.id, storeId)).returning();
+  const [row] = await ctx.db
+    .update(stores)
+    .set({ ...input, updatedAt: new Date() })
+    .where(eq(stores.id, storeId))
+    .returning();
   return toStore(row);
 }
 

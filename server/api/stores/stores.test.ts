@@ -21,13 +21,25 @@ const names = (res: { body: { stores: { name: string }[] } }) => res.body.stores
 describe("stores: create, edit, archive", () => {
   it("a lead tech creates and edits a store; bad input gets field errors", async () => {
     const lead = await signedIn("lead-tech");
-    const created = await lead.post("/api/stores", { name: "  Marrow Creek – Dockside ", address: "14 Wharf Row, Dockside", timeZone: "America/Denver" });
+    const created = await lead.post("/api/stores", {
+      name: "  Marrow Creek – Dockside ",
+      address: "14 Wharf Row, Dockside",
+      timeZone: "America/Denver",
+    });
     expect(created.status).toBe(201);
-    expect(created.body).toMatchObject({ name: "Marrow Creek – Dockside", address: "14 Wharf Row, Dockside", timeZone: "America/Denver", archivedAt: null });
+    expect(created.body).toMatchObject({
+      name: "Marrow Creek – Dockside",
+      address: "14 Wharf Row, Dockside",
+      timeZone: "America/Denver",
+      archivedAt: null,
+    });
 
     const bad = await lead.post("/api/stores", { name: "", timeZone: "Mars/Olympus_Mons" });
     expect(bad.status).toBe(400);
-    expect(bad.body.error.fields).toEqual({ name: "is required", timeZone: expect.stringMatching(/not a known IANA time zone/) });
+    expect(bad.body.error.fields).toEqual({
+      name: "is required",
+      timeZone: expect.stringMatching(/not a known IANA time zone/),
+    });
 
     const edited = await lead.patch(`/api/stores/${created.body.id}`, { timeZone: "Europe/Berlin" });
     expect(edited.status).toBe(200);
@@ -55,7 +67,10 @@ describe("stores: create, edit, archive", () => {
     await owner.post("/api/stores", { name: "Alpha Depot", address: "3 QUINCE LANE", timeZone: "UTC" });
     expect(names(await owner.get("/api/stores?search=quince"))).toEqual(["Alpha Depot", "zeta Depot"]);
     expect(names(await owner.get("/api/stores?search=DEPOT&order=desc"))).toEqual(["zeta Depot", "Alpha Depot"]);
-    expect(names(await owner.get("/api/stores?search=depot&sort=created&order=desc"))).toEqual(["Alpha Depot", "zeta Depot"]);
+    expect(names(await owner.get("/api/stores?search=depot&sort=created&order=desc"))).toEqual([
+      "Alpha Depot",
+      "zeta Depot",
+    ]);
     // A % typed in the box is a character, not a wildcard.
     expect(names(await owner.get("/api/stores?search=%25"))).toEqual([]);
     const bad = await owner.get("/api/stores?sort=size&includeArchived=maybe");
@@ -65,12 +80,15 @@ describe("stores: create, edit, archive", () => {
 });
 
 describe("stores: role rules", () => {
-  it.each(["technician", "engineer", "store-contact"] as Role[])("%s cannot create, edit or archive stores", async (role) => {
-    const a = await signedIn(role);
-    expect((await a.post("/api/stores", { name: "Nope", timeZone: "UTC" })).status).toBe(403);
-    expect((await a.patch(`/api/stores/${co.store.id}`, { name: "Nope" })).status).toBe(403);
-    expect((await a.post(`/api/stores/${co.store.id}/archive`)).status).toBe(403);
-  });
+  it.each(["technician", "engineer", "store-contact"] as Role[])(
+    "%s cannot create, edit or archive stores",
+    async (role) => {
+      const a = await signedIn(role);
+      expect((await a.post("/api/stores", { name: "Nope", timeZone: "UTC" })).status).toBe(403);
+      expect((await a.patch(`/api/stores/${co.store.id}`, { name: "Nope" })).status).toBe(403);
+      expect((await a.post(`/api/stores/${co.store.id}/archive`)).status).toBe(403);
+    },
+  );
 
   it("technicians read every store of the company; a store contact only theirs", async () => {
     const tech = await signedIn("technician");
@@ -87,17 +105,26 @@ describe("stores: role rules", () => {
     expect((await a.get(`/api/stores/${co.store.id}`)).status).toBe(404);
     expect((await a.patch(`/api/stores/${co.store.id}`, { name: "Taken" })).status).toBe(404);
     expect((await a.post(`/api/stores/${co.store.id}/archive`)).status).toBe(404);
-    expect((await a.get("/api/stores?includeArchived=true")).body.stores.map((s: { id: string }) => s.id)).not.toContain(co.store.id);
+    expect(
+      (await a.get("/api/stores?includeArchived=true")).body.stores.map((s: { id: string }) => s.id),
+    ).not.toContain(co.store.id);
   });
 });
 
 describe("store detail", () => {
   it("returns the store with its systems, current plan and plan versions", async () => {
     const lead = await signedIn("lead-tech");
-    const s = (await lead.post("/api/stores", { name: "Marrow Creek – Fairgrounds", timeZone: "America/Chicago" })).body;
+    const s = (await lead.post("/api/stores", { name: "Marrow Creek – Fairgrounds", timeZone: "America/Chicago" }))
+      .body;
     const empty = await lead.get(`/api/stores/${s.id}`);
     expect(empty.body).toMatchObject({ store: { id: s.id }, systems: [], currentPlan: null, planVersions: [] });
-    await lead.post(`/api/stores/${s.id}/systems`, { name: "Rack A", refrigerantId: "R-448A", fullCharge: { value: 300, unit: "lb" }, applianceType: "commercial-refrigeration", automaticLeakDetection: true });
+    await lead.post(`/api/stores/${s.id}/systems`, {
+      name: "Rack A",
+      refrigerantId: "R-448A",
+      fullCharge: { value: 300, unit: "lb" },
+      applianceType: "commercial-refrigeration",
+      automaticLeakDetection: true,
+    });
     await lead.post(`/api/stores/${s.id}/plans/blank`, { width: 40, depth: 25 });
     await lead.post(`/api/stores/${s.id}/plans/blank`, { width: 120, depth: 80, unit: "ft" });
     const full = await lead.get(`/api/stores/${s.id}`);

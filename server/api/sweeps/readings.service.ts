@@ -1,7 +1,14 @@
 import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { plans, readingAudit, readings, sweeps, users, type ReadingValues } from "../../db/schema/index";
-import { readingInput, type Reading, type ReadingAuditEntry, type ReadingEditInput, type ReadingsBatchResult, type RejectedReading } from "#core/contracts/sweeps";
+import {
+  readingInput,
+  type Reading,
+  type ReadingAuditEntry,
+  type ReadingEditInput,
+  type ReadingsBatchResult,
+  type RejectedReading,
+} from "#core/contracts/sweeps";
 import { readingProblems, type ReadingContext } from "#core/domain/sweeps/reading-checks";
 import { HttpError, notFound } from "../../lib/http-error";
 import { zodFields } from "../../lib/zod-fields";
@@ -28,17 +35,37 @@ function toReading(r: ReadingRow): Reading {
 }
 
 function valuesOf(r: ReadingRow): ReadingValues {
-  return { x: r.x, y: r.y, takenAt: r.takenAt.toISOString(), ppm: r.ppm, atLeast: r.atLeast, samplePoint: r.samplePoint, note: r.note };
+  return {
+    x: r.x,
+    y: r.y,
+    takenAt: r.takenAt.toISOString(),
+    ppm: r.ppm,
+    atLeast: r.atLeast,
+    samplePoint: r.samplePoint,
+    note: r.note,
+  };
 }
 
 async function contextOf(ctx: AppContext, sweep: SweepRow): Promise<ReadingContext> {
-  const [plan] = await ctx.db.select({ widthM: plans.widthM, heightM: plans.heightM }).from(plans).where(eq(plans.id, sweep.planId));
-  return { widthM: plan.widthM ?? 0, heightM: plan.heightM ?? 0, startedAtMs: sweep.startedAt.getTime(), nowMs: Date.now() };
+  const [plan] = await ctx.db
+    .select({ widthM: plans.widthM, heightM: plans.heightM })
+    .from(plans)
+    .where(eq(plans.id, sweep.planId));
+  return {
+    widthM: plan.widthM ?? 0,
+    heightM: plan.heightM ?? 0,
+    startedAtMs: sweep.startedAt.getTime(),
+    nowMs: Date.now(),
+  };
 }
 
 function assertOpen(sweep: SweepRow): void {
   if (sweep.status === "reviewed") {
-    throw new HttpError(409, "sweep_reviewed", "This sweep was reviewed; its readings can no longer change. Start a new sweep for new readings.");
+    throw new HttpError(
+      409,
+      "sweep_reviewed",
+      "This sweep was reviewed; its readings can no longer change. Start a new sweep for new readings.",
+    );
   }
 }
 
@@ -64,7 +91,11 @@ async function insertReadings(tx: Tx, rows: (typeof readings.$inferInsert)[]): P
 }
 
 async function bumpRevision(tx: Tx, sweepId: string): Promise<number> {
-  const [row] = await tx.update(sweeps).set({ readingsRevision: sql`${sweeps.readingsRevision} + 1` }).where(eq(sweeps.id, sweepId)).returning({ rev: sweeps.readingsRevision });
+  const [row] = await tx
+    .update(sweeps)
+    .set({ readingsRevision: sql`${sweeps.readingsRevision} + 1` })
+    .where(eq(sweeps.id, sweepId))
+    .returning({ rev: sweeps.readingsRevision });
   return row.rev;
 }
 
@@ -73,7 +104,13 @@ async function bumpRevision(tx: Tx, sweepId: string): Promise<number> {
  * with its reasons (so an offline queue is never blocked by one bad reading), and an id already
  * stored counts as a duplicate, never as a second reading.
  */
-export async function uploadReadings(ctx: AppContext, viewer: Viewer, userId: string, sweepId: string, items: unknown[]): Promise<ReadingsBatchResult> {
+export async function uploadReadings(
+  ctx: AppContext,
+  viewer: Viewer,
+  userId: string,
+  sweepId: string,
+  items: unknown[],
+): Promise<ReadingsBatchResult> {
   const sweep = await loadVisibleSweep(ctx, viewer, sweepId);
   assertOpen(sweep);
   const c = await contextOf(ctx, sweep);
@@ -82,7 +119,10 @@ export async function uploadReadings(ctx: AppContext, viewer: Viewer, userId: st
   const seen = new Set<string>();
   const batchDuplicates: string[] = [];
   items.forEach((item, index) => {
-    const id = item && typeof item === "object" && typeof (item as { id?: unknown }).id === "string" ? (item as { id: string }).id : null;
+    const id =
+      item && typeof item === "object" && typeof (item as { id?: unknown }).id === "string"
+        ? (item as { id: string }).id
+        : null;
     const parsed = readingInput.safeParse(item);
     if (!parsed.success) {
       rejected.push({ index, id, reasons: zodFields(parsed.error) });
@@ -100,7 +140,18 @@ export async function uploadReadings(ctx: AppContext, viewer: Viewer, userId: st
       return;
     }
     seen.add(r.id);
-    good.push({ id: r.id, sweepId, x: r.x, y: r.y, takenAt, ppm: r.ppm, atLeast: r.atLeast, samplePoint: r.samplePoint, note: r.note, recordedById: userId });
+    good.push({
+      id: r.id,
+      sweepId,
+      x: r.x,
+      y: r.y,
+      takenAt,
+      ppm: r.ppm,
+      atLeast: r.atLeast,
+      samplePoint: r.samplePoint,
+      note: r.note,
+      recordedById: userId,
+    });
   });
 
   return ctx.db.transaction(async (tx) => {
@@ -109,11 +160,19 @@ export async function uploadReadings(ctx: AppContext, viewer: Viewer, userId: st
     const notInserted = good.filter((g) => !storedSet.has(g.id!)).map((g) => g.id!);
     const duplicates = [...batchDuplicates];
     if (notInserted.length) {
-      const existing = await tx.select({ id: readings.id, sweepId: readings.sweepId }).from(readings).where(inArray(readings.id, notInserted));
+      const existing = await tx
+        .select({ id: readings.id, sweepId: readings.sweepId })
+        .from(readings)
+        .where(inArray(readings.id, notInserted));
       const owner = new Map(existing.map((e) => [e.id, e.sweepId]));
       for (const id of notInserted) {
         if (owner.get(id) === sweepId) duplicates.push(id);
-        else rejected.push({ index: items.findIndex((it) => (it as { id?: unknown })?.id === id), id, reasons: { id: "is already used by a reading of another sweep" } });
+        else
+          rejected.push({
+            index: items.findIndex((it) => (it as { id?: unknown })?.id === id),
+            id,
+            reasons: { id: "is already used by a reading of another sweep" },
+          });
       }
     }
     const readingsRevision = stored.length ? await bumpRevision(tx, sweepId) : sweep.readingsRevision;
@@ -124,12 +183,20 @@ export async function uploadReadings(ctx: AppContext, viewer: Viewer, userId: st
 
 export async function listReadings(ctx: AppContext, viewer: Viewer, sweepId: string): Promise<Reading[]> {
   await loadVisibleSweep(ctx, viewer, sweepId);
-  const rows = await ctx.db.select().from(readings).where(eq(readings.sweepId, sweepId)).orderBy(asc(readings.takenAt), asc(readings.id));
+  const rows = await ctx.db
+    .select()
+    .from(readings)
+    .where(eq(readings.sweepId, sweepId))
+    .orderBy(asc(readings.takenAt), asc(readings.id));
   return rows.map(toReading);
 }
 
 async function lockReading(tx: Tx, sweepId: string, readingId: string): Promise<ReadingRow | undefined> {
-  const [row] = await tx.select().from(readings).where(and(eq(readings.id, readingId), eq(readings.sweepId, sweepId))).for("update");
+  const [row] = await tx
+    .select()
+    .from(readings)
+    .where(and(eq(readings.id, readingId), eq(readings.sweepId, sweepId)))
+    .for("update");
   return row;
 }
 
@@ -138,7 +205,14 @@ async function lockReading(tx: Tx, sweepId: string, readingId: string): Promise<
  * last one received wins (device clocks cannot be trusted to order edits); the audit trail keeps
  * every version with its device time, so the overwritten edit is never lost.
  */
-export async function editReading(ctx: AppContext, viewer: Viewer, userId: string, sweepId: string, readingId: string, input: ReadingEditInput): Promise<{ reading: Reading; readingsRevision: number }> {
+export async function editReading(
+  ctx: AppContext,
+  viewer: Viewer,
+  userId: string,
+  sweepId: string,
+  readingId: string,
+  input: ReadingEditInput,
+): Promise<{ reading: Reading; readingsRevision: number }> {
   const sweep = await loadVisibleSweep(ctx, viewer, sweepId);
   assertOpen(sweep);
   const c = await contextOf(ctx, sweep);
@@ -151,36 +225,95 @@ export async function editReading(ctx: AppContext, viewer: Viewer, userId: strin
     }
     next.takenAt = new Date(next.takenAt).toISOString();
     const problems = readingProblems({ x: next.x, y: next.y, takenAtMs: Date.parse(next.takenAt) }, c);
-    if (Object.keys(problems).length) throw new HttpError(400, "validation_failed", `Please check: ${Object.entries(problems).map(([k, m]) => `${k} ${m}`).join("; ")}.`, problems);
+    if (Object.keys(problems).length)
+      throw new HttpError(
+        400,
+        "validation_failed",
+        `Please check: ${Object.entries(problems)
+          .map(([k, m]) => `${k} ${m}`)
+          .join("; ")}.`,
+        problems,
+      );
     const now = new Date();
     const [updated] = await tx
       .update(readings)
-      .set({ x: next.x, y: next.y, takenAt: new Date(next.takenAt), ppm: next.ppm, atLeast: next.atLeast, samplePoint: next.samplePoint, note: next.note, updatedAt: now })
+      .set({
+        x: next.x,
+        y: next.y,
+        takenAt: new Date(next.takenAt),
+        ppm: next.ppm,
+        atLeast: next.atLeast,
+        samplePoint: next.samplePoint,
+        note: next.note,
+        updatedAt: now,
+      })
       .where(eq(readings.id, readingId))
       .returning();
-    await tx.insert(readingAudit).values({ sweepId, readingId, action: "edit", before: valuesOf(row), after: next, byId: userId, editedAt: input.editedAt ? new Date(input.editedAt) : null, receivedAt: now });
+    await tx
+      .insert(readingAudit)
+      .values({
+        sweepId,
+        readingId,
+        action: "edit",
+        before: valuesOf(row),
+        after: next,
+        byId: userId,
+        editedAt: input.editedAt ? new Date(input.editedAt) : null,
+        receivedAt: now,
+      });
     return { reading: toReading(updated), readingsRevision: await bumpRevision(tx, sweepId) };
   });
 }
 
 /** Deletes a reading (kept in the audit trail). Deleting one already deleted is not an error. */
-export async function deleteReading(ctx: AppContext, viewer: Viewer, userId: string, sweepId: string, readingId: string, editedAt?: string): Promise<{ readingsRevision: number }> {
+export async function deleteReading(
+  ctx: AppContext,
+  viewer: Viewer,
+  userId: string,
+  sweepId: string,
+  readingId: string,
+  editedAt?: string,
+): Promise<{ readingsRevision: number }> {
   const sweep = await loadVisibleSweep(ctx, viewer, sweepId);
   assertOpen(sweep);
   return ctx.db.transaction(async (tx) => {
     const row = await lockReading(tx, sweepId, readingId);
     if (!row) {
-      const [gone] = await tx.select({ id: readingAudit.id }).from(readingAudit).where(and(eq(readingAudit.readingId, readingId), eq(readingAudit.sweepId, sweepId), eq(readingAudit.action, "delete"))).limit(1);
+      const [gone] = await tx
+        .select({ id: readingAudit.id })
+        .from(readingAudit)
+        .where(
+          and(
+            eq(readingAudit.readingId, readingId),
+            eq(readingAudit.sweepId, sweepId),
+            eq(readingAudit.action, "delete"),
+          ),
+        )
+        .limit(1);
       if (gone) return { readingsRevision: sweep.readingsRevision };
       throw notFound("That reading");
     }
     await tx.delete(readings).where(eq(readings.id, readingId));
-    await tx.insert(readingAudit).values({ sweepId, readingId, action: "delete", before: valuesOf(row), after: null, byId: userId, editedAt: editedAt ? new Date(editedAt) : null });
+    await tx
+      .insert(readingAudit)
+      .values({
+        sweepId,
+        readingId,
+        action: "delete",
+        before: valuesOf(row),
+        after: null,
+        byId: userId,
+        editedAt: editedAt ? new Date(editedAt) : null,
+      });
     return { readingsRevision: await bumpRevision(tx, sweepId) };
   });
 }
 
-export async function readingAuditTrail(ctx: AppContext, viewer: Viewer, sweepId: string): Promise<ReadingAuditEntry[]> {
+export async function readingAuditTrail(
+  ctx: AppContext,
+  viewer: Viewer,
+  sweepId: string,
+): Promise<ReadingAuditEntry[]> {
   await loadVisibleSweep(ctx, viewer, sweepId);
   const rows = await ctx.db
     .select({ a: readingAudit, by: users.name })

@@ -10,19 +10,32 @@ import { createSweep, getSweep, listSweeps, setSweepStatus } from "./sweeps.serv
 const storeParam = z.object({ storeId: z.uuid("must be a valid id") });
 const idParam = z.object({ id: z.uuid("must be a valid id") });
 const readingParam = z.object({ id: z.uuid("must be a valid id"), readingId: z.uuid("must be a valid id") });
-const deleteQuery = z.object({ editedAt: z.iso.datetime({ offset: true, message: "must be a date and time" }).optional() });
+const deleteQuery = z.object({
+  editedAt: z.iso.datetime({ offset: true, message: "must be a date and time" }).optional(),
+});
 
 export function sweepsRouter(ctx: AppContext): Router {
   const router = Router();
   const userId = (req: { auth?: { user: { id: string } } }) => req.auth!.user.id;
 
-  router.get("/stores/:storeId/sweeps", requireMember("stores.read"), validate(storeParam, "params"), async (req, res) => {
-    res.json({ sweeps: await listSweeps(ctx, member(req), res.locals.params.storeId) });
-  });
-  router.post("/stores/:storeId/sweeps", requireMember("sweeps.record"), validate(storeParam, "params"), validate(createSweepInput), async (req, res) => {
-    const { sweep, created } = await createSweep(ctx, member(req), userId(req), res.locals.params.storeId, req.body);
-    res.status(created ? 201 : 200).json(sweep);
-  });
+  router.get(
+    "/stores/:storeId/sweeps",
+    requireMember("stores.read"),
+    validate(storeParam, "params"),
+    async (req, res) => {
+      res.json({ sweeps: await listSweeps(ctx, member(req), res.locals.params.storeId) });
+    },
+  );
+  router.post(
+    "/stores/:storeId/sweeps",
+    requireMember("sweeps.record"),
+    validate(storeParam, "params"),
+    validate(createSweepInput),
+    async (req, res) => {
+      const { sweep, created } = await createSweep(ctx, member(req), userId(req), res.locals.params.storeId, req.body);
+      res.status(created ? 201 : 200).json(sweep);
+    },
+  );
   router.get("/sweeps/:id", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
     res.json(await getSweep(ctx, member(req), res.locals.params.id));
   });
@@ -36,15 +49,44 @@ export function sweepsRouter(ctx: AppContext): Router {
   router.get("/sweeps/:id/readings", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
     res.json({ readings: await listReadings(ctx, member(req), res.locals.params.id) });
   });
-  router.post("/sweeps/:id/readings", requireMember("sweeps.record"), validate(idParam, "params"), validate(readingsBatchInput), async (req, res) => {
-    res.json(await uploadReadings(ctx, member(req), userId(req), res.locals.params.id, req.body.readings));
-  });
-  router.patch("/sweeps/:id/readings/:readingId", requireMember("sweeps.record"), validate(readingParam, "params"), validate(readingEditInput), async (req, res) => {
-    res.json(await editReading(ctx, member(req), userId(req), res.locals.params.id, res.locals.params.readingId, req.body));
-  });
-  router.delete("/sweeps/:id/readings/:readingId", requireMember("sweeps.record"), validate(readingParam, "params"), validate(deleteQuery, "query"), async (req, res) => {
-    res.json(await deleteReading(ctx, member(req), userId(req), res.locals.params.id, res.locals.params.readingId, res.locals.query.editedAt));
-  });
+  router.post(
+    "/sweeps/:id/readings",
+    requireMember("sweeps.record"),
+    validate(idParam, "params"),
+    validate(readingsBatchInput),
+    async (req, res) => {
+      res.json(await uploadReadings(ctx, member(req), userId(req), res.locals.params.id, req.body.readings));
+    },
+  );
+  router.patch(
+    "/sweeps/:id/readings/:readingId",
+    requireMember("sweeps.record"),
+    validate(readingParam, "params"),
+    validate(readingEditInput),
+    async (req, res) => {
+      res.json(
+        await editReading(ctx, member(req), userId(req), res.locals.params.id, res.locals.params.readingId, req.body),
+      );
+    },
+  );
+  router.delete(
+    "/sweeps/:id/readings/:readingId",
+    requireMember("sweeps.record"),
+    validate(readingParam, "params"),
+    validate(deleteQuery, "query"),
+    async (req, res) => {
+      res.json(
+        await deleteReading(
+          ctx,
+          member(req),
+          userId(req),
+          res.locals.params.id,
+          res.locals.params.readingId,
+          res.locals.query.editedAt,
+        ),
+      );
+    },
+  );
   router.get("/sweeps/:id/audit", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
     res.json({ entries: await readingAuditTrail(ctx, member(req), res.locals.params.id) });
   });

@@ -21,14 +21,42 @@ beforeAll(async () => {
   const owner = await as("owner");
   const plan = await owner.post(`/api/stores/${co.store.id}/plans/blank`, { width: 40, depth: 25, unit: "m" });
   planId = plan.body.id;
-  const [d] = await t.ctx.db.insert(detectors).values({ companyId: co.company.id, name: "Diode sniffer", principle: "heated-diode", lastCheckedOn: new Date().toISOString().slice(0, 10) }).returning();
-  const [ir] = await t.ctx.db.insert(detectors).values({ companyId: co.company.id, name: "IR unit", principle: "infrared", lastCheckedOn: "2020-01-01" }).returning();
+  const [d] = await t.ctx.db
+    .insert(detectors)
+    .values({
+      companyId: co.company.id,
+      name: "Diode sniffer",
+      principle: "heated-diode",
+      lastCheckedOn: new Date().toISOString().slice(0, 10),
+    })
+    .returning();
+  const [ir] = await t.ctx.db
+    .insert(detectors)
+    .values({ companyId: co.company.id, name: "IR unit", principle: "infrared", lastCheckedOn: "2020-01-01" })
+    .returning();
   diodeId = d.id;
   irId = ir.id;
-  const sys = await t.ctx.db.insert(systems).values([
-    { companyId: co.company.id, storeId: co.store.id, name: "Rack A", refrigerantId: "R-448A", fullChargeKg: 300, applianceType: "commercial-refrigeration" },
-    { companyId: co.company.id, storeId: co.store.id, name: "CO2 booster", refrigerantId: "R-744", fullChargeKg: 200, applianceType: "commercial-refrigeration" },
-  ]).returning();
+  const sys = await t.ctx.db
+    .insert(systems)
+    .values([
+      {
+        companyId: co.company.id,
+        storeId: co.store.id,
+        name: "Rack A",
+        refrigerantId: "R-448A",
+        fullChargeKg: 300,
+        applianceType: "commercial-refrigeration",
+      },
+      {
+        companyId: co.company.id,
+        storeId: co.store.id,
+        name: "CO2 booster",
+        refrigerantId: "R-744",
+        fullChargeKg: 200,
+        applianceType: "commercial-refrigeration",
+      },
+    ])
+    .returning();
   r448Id = sys[0].id;
   r744Id = sys[1].id;
 });
@@ -42,10 +70,27 @@ async function as(role: Role, company = co): Promise<Agent> {
 
 const startedAt = new Date(Date.now() - 10 * 60_000);
 const at = (s: number) => new Date(startedAt.getTime() + s * 1000).toISOString();
-const reading = (s: number, extra: Record<string, unknown> = {}) => ({ id: crypto.randomUUID(), x: 1 + s * 0.5, y: 3, takenAt: at(s), ppm: 0, samplePoint: "grille", ...extra });
+const reading = (s: number, extra: Record<string, unknown> = {}) => ({
+  id: crypto.randomUUID(),
+  x: 1 + s * 0.5,
+  y: 3,
+  takenAt: at(s),
+  ppm: 0,
+  samplePoint: "grille",
+  ...extra,
+});
 
 async function startSweep(a: Agent, body: Record<string, unknown> = {}, storeId = co.store.id) {
-  const res = await a.post(`/api/stores/${storeId}/sweeps`, { id: crypto.randomUUID(), planId, detectorId: diodeId, systemIds: [r448Id], fans: "running", defrost: false, startedAt: startedAt.toISOString(), ...body });
+  const res = await a.post(`/api/stores/${storeId}/sweeps`, {
+    id: crypto.randomUUID(),
+    planId,
+    detectorId: diodeId,
+    systemIds: [r448Id],
+    fans: "running",
+    defrost: false,
+    startedAt: startedAt.toISOString(),
+    ...body,
+  });
   expect(res.status, JSON.stringify(res.body)).toBe(201);
   return res.body;
 }
@@ -56,10 +101,27 @@ describe("starting a sweep", () => {
     const id = crypto.randomUUID();
     const s = await startSweep(a, { id });
     // 5 s transport delay and 2 ppm alarm: the detector defaults, common practice, no published source.
-    expect(s).toMatchObject({ id, status: "in-progress", transportDelayS: 5, timeConstantS: 1.5, alarmPpm: 2, technicianId: co.people.technician.userId, readingsRevision: 0, warnings: [] });
-    const again = await a.post(`/api/stores/${co.store.id}/sweeps`, { id, planId, detectorId: diodeId, fans: "running", defrost: false });
+    expect(s).toMatchObject({
+      id,
+      status: "in-progress",
+      transportDelayS: 5,
+      timeConstantS: 1.5,
+      alarmPpm: 2,
+      technicianId: co.people.technician.userId,
+      readingsRevision: 0,
+      warnings: [],
+    });
+    const again = await a.post(`/api/stores/${co.store.id}/sweeps`, {
+      id,
+      planId,
+      detectorId: diodeId,
+      fans: "running",
+      defrost: false,
+    });
     expect(again.status).toBe(200);
-    expect((await a.get(`/api/stores/${co.store.id}/sweeps`)).body.sweeps.filter((x: { id: string }) => x.id === id)).toHaveLength(1);
+    expect(
+      (await a.get(`/api/stores/${co.store.id}/sweeps`)).body.sweeps.filter((x: { id: string }) => x.id === id),
+    ).toHaveLength(1);
     expect(await planHasSweeps(t.ctx.db, planId)).toBe(true);
   });
 
@@ -76,12 +138,29 @@ describe("starting a sweep", () => {
 
   it("refuses another store's system, a stranger's plan or detector, with the field named", async () => {
     const a = await as("technician");
-    const bad = await a.post(`/api/stores/${co.store.id}/sweeps`, { planId, detectorId: diodeId, systemIds: [crypto.randomUUID()], fans: "on", defrost: false });
+    const bad = await a.post(`/api/stores/${co.store.id}/sweeps`, {
+      planId,
+      detectorId: diodeId,
+      systemIds: [crypto.randomUUID()],
+      fans: "on",
+      defrost: false,
+    });
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields).toHaveProperty("fans");
-    const sys = await a.post(`/api/stores/${co.store.id}/sweeps`, { planId, detectorId: diodeId, systemIds: [crypto.randomUUID()], fans: "stopped", defrost: true });
+    const sys = await a.post(`/api/stores/${co.store.id}/sweeps`, {
+      planId,
+      detectorId: diodeId,
+      systemIds: [crypto.randomUUID()],
+      fans: "stopped",
+      defrost: true,
+    });
     expect(sys.body.error.fields).toEqual({ "systemIds.0": "is not a system of this store" });
-    const wrongPlan = await a.post(`/api/stores/${co.otherStore.id}/sweeps`, { planId, detectorId: diodeId, fans: "stopped", defrost: true });
+    const wrongPlan = await a.post(`/api/stores/${co.otherStore.id}/sweeps`, {
+      planId,
+      detectorId: diodeId,
+      fans: "stopped",
+      defrost: true,
+    });
     expect(wrongPlan.body.error.fields).toEqual({ planId: "is not a plan of this store" });
   });
 });
@@ -92,7 +171,12 @@ describe("readings", () => {
     const s = await startSweep(a);
     const batch = [reading(1), reading(4), reading(8, { ppm: 3.5 })];
     const first = await a.post(`/api/sweeps/${s.id}/readings`, { readings: batch });
-    expect(first.body).toMatchObject({ stored: batch.map((r) => r.id), duplicates: [], rejected: [], readingsRevision: 1 });
+    expect(first.body).toMatchObject({
+      stored: batch.map((r) => r.id),
+      duplicates: [],
+      rejected: [],
+      readingsRevision: 1,
+    });
     const second = await a.post(`/api/sweeps/${s.id}/readings`, { readings: [...batch, batch[0]] });
     expect(second.body).toMatchObject({ stored: [], rejected: [], readingsRevision: 1 });
     expect(second.body.duplicates.sort()).toEqual([...batch.map((r) => r.id), batch[0].id].sort());
@@ -103,7 +187,10 @@ describe("readings", () => {
   it("stores the good readings of a batch and returns each bad one with its reasons", async () => {
     const a = await as("technician");
     const s = await startSweep(a);
-    const good = [reading(2), reading(5, { ppm: 10_000, atLeast: true, samplePoint: "return", note: "display pegged" })];
+    const good = [
+      reading(2),
+      reading(5, { ppm: 10_000, atLeast: true, samplePoint: "return", note: "display pegged" }),
+    ];
     const batch = [
       good[0],
       { ...reading(3), ppm: -1 },
@@ -118,7 +205,9 @@ describe("readings", () => {
     const res = await a.post(`/api/sweeps/${s.id}/readings`, { readings: batch });
     expect(res.status).toBe(200);
     expect(res.body.stored).toEqual(good.map((r) => r.id));
-    const reasons = Object.fromEntries(res.body.rejected.map((r: { index: number; reasons: Record<string, string> }) => [r.index, r.reasons]));
+    const reasons = Object.fromEntries(
+      res.body.rejected.map((r: { index: number; reasons: Record<string, string> }) => [r.index, r.reasons]),
+    );
     expect(Object.keys(reasons).map(Number)).toEqual([1, 2, 3, 4, 5, 6, 7]);
     expect(reasons[1]).toEqual({ ppm: "must be 0 ppm or more" });
     expect(reasons[2].x).toMatch(/outside the plan \(0–40 m × 0–25 m\)/);
@@ -135,14 +224,18 @@ describe("readings", () => {
     const a = await as("technician");
     const skewed = new Date(Date.now() + 5 * 3_600_000); // device 5 h fast
     const s = await startSweep(a, { startedAt: skewed.toISOString() });
-    const res = await a.post(`/api/sweeps/${s.id}/readings`, { readings: [{ ...reading(0), takenAt: new Date(skewed.getTime() + 30_000).toISOString() }] });
+    const res = await a.post(`/api/sweeps/${s.id}/readings`, {
+      readings: [{ ...reading(0), takenAt: new Date(skewed.getTime() + 30_000).toISOString() }],
+    });
     expect(res.body.stored).toHaveLength(1);
   });
 
   it("refuses more than 1,000 readings in one request", async () => {
     const a = await as("technician");
     const s = await startSweep(a);
-    const res = await a.post(`/api/sweeps/${s.id}/readings`, { readings: Array.from({ length: 1001 }, (_, i) => reading(i)) });
+    const res = await a.post(`/api/sweeps/${s.id}/readings`, {
+      readings: Array.from({ length: 1001 }, (_, i) => reading(i)),
+    });
     expect(res.status).toBe(400);
     expect(res.body.error.fields.readings).toMatch(/at most 1000/);
   });
@@ -189,16 +282,38 @@ describe("roles and status", () => {
     const contact = await as("store-contact");
     expect((await contact.get(`/api/sweeps/${s.id}`)).status).toBe(200);
     expect((await contact.post(`/api/sweeps/${s.id}/readings`, { readings: [reading(1)] })).status).toBe(403);
-    expect((await contact.post(`/api/stores/${co.store.id}/sweeps`, { planId, detectorId: diodeId, fans: "running", defrost: false })).status).toBe(403);
-    expect((await (await as("engineer")).post(`/api/sweeps/${s.id}/readings`, { readings: [reading(1)] })).status).toBe(403);
+    expect(
+      (
+        await contact.post(`/api/stores/${co.store.id}/sweeps`, {
+          planId,
+          detectorId: diodeId,
+          fans: "running",
+          defrost: false,
+        })
+      ).status,
+    ).toBe(403);
+    expect((await (await as("engineer")).post(`/api/sweeps/${s.id}/readings`, { readings: [reading(1)] })).status).toBe(
+      403,
+    );
   });
 
   it("a store contact of another store and another company get 404", async () => {
     const s = await startSweep(await as("technician"));
-    const elsewhere = await startSweep(await as("technician"), { planId: (await (await as("owner")).post(`/api/stores/${co.otherStore.id}/plans/blank`, { width: 10, depth: 10 })).body.id, systemIds: [] }, co.otherStore.id);
+    const elsewhere = await startSweep(
+      await as("technician"),
+      {
+        planId: (
+          await (await as("owner")).post(`/api/stores/${co.otherStore.id}/plans/blank`, { width: 10, depth: 10 })
+        ).body.id,
+        systemIds: [],
+      },
+      co.otherStore.id,
+    );
     expect((await (await as("store-contact")).get(`/api/sweeps/${elsewhere.id}`)).status).toBe(404);
     expect((await (await as("owner", other)).get(`/api/sweeps/${s.id}`)).status).toBe(404);
-    expect((await (await as("owner", other)).post(`/api/sweeps/${s.id}/readings`, { readings: [reading(1)] })).status).toBe(404);
+    expect(
+      (await (await as("owner", other)).post(`/api/sweeps/${s.id}/readings`, { readings: [reading(1)] })).status,
+    ).toBe(404);
     expect((await (await as("owner", other)).get(`/api/stores/${co.store.id}/sweeps`)).status).toBe(404);
   });
 

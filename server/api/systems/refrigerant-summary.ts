@@ -11,8 +11,14 @@ export function summarizeRefrigerant(r: Refrigerant, bases: readonly GwpBasis[])
     name: r.name,
     safetyClass: r.safetyClass.value,
     safetyClassSource: r.safetyClass.source,
-    gwp: gwp.known ? { value: gwp.value, basis, source: [...new Set(gwp.terms.map((t) => t.source))].join("; ") } : null,
-    gwpNote: gwp.known ? (r.kind === "blend" ? "mass-weighted sum of the components' GWP-100, rounded half up" : null) : gwp.reason,
+    gwp: gwp.known
+      ? { value: gwp.value, basis, source: [...new Set(gwp.terms.map((t) => t.source))].join("; ") }
+      : null,
+    gwpNote: gwp.known
+      ? r.kind === "blend"
+        ? "mass-weighted sum of the components' GWP-100, rounded half up"
+        : null
+      : gwp.reason,
   };
 }
 

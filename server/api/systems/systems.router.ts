@@ -17,24 +17,43 @@ export function systemsRouter(ctx: AppContext): Router {
   /** The catalogue for the system form's picker: safety class, GWP on the company's bases, cautions. */
   router.get("/refrigerants", requireMember("stores.read"), async (req, res) => {
     const bases = await companyGwpBases(ctx, member(req).companyId);
-    res.json({ refrigerants: REFRIGERANTS.map((r) => ({ ...summarizeRefrigerant(r, bases), cautions: refrigerantCautions(r) })) });
+    res.json({
+      refrigerants: REFRIGERANTS.map((r) => ({ ...summarizeRefrigerant(r, bases), cautions: refrigerantCautions(r) })),
+    });
   });
 
-  router.get("/stores/:storeId/systems", requireMember("stores.read"), validate(storeParam, "params"), async (req, res) => {
-    res.json({ systems: await listSystems(ctx, member(req), res.locals.params.storeId) });
-  });
+  router.get(
+    "/stores/:storeId/systems",
+    requireMember("stores.read"),
+    validate(storeParam, "params"),
+    async (req, res) => {
+      res.json({ systems: await listSystems(ctx, member(req), res.locals.params.storeId) });
+    },
+  );
 
-  router.post("/stores/:storeId/systems", requireMember("stores.edit"), validate(storeParam, "params"), validate(systemInput), async (req, res) => {
-    res.status(201).json(await createSystem(ctx, member(req), res.locals.params.storeId, req.body));
-  });
+  router.post(
+    "/stores/:storeId/systems",
+    requireMember("stores.edit"),
+    validate(storeParam, "params"),
+    validate(systemInput),
+    async (req, res) => {
+      res.status(201).json(await createSystem(ctx, member(req), res.locals.params.storeId, req.body));
+    },
+  );
 
   router.get("/systems/:id", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
     res.json(await getSystem(ctx, member(req), res.locals.params.id));
   });
 
-  router.patch("/systems/:id", requireMember("stores.edit"), validate(idParam, "params"), validate(systemUpdateInput), async (req, res) => {
-    res.json(await updateSystem(ctx, member(req), res.locals.params.id, req.body));
-  });
+  router.patch(
+    "/systems/:id",
+    requireMember("stores.edit"),
+    validate(idParam, "params"),
+    validate(systemUpdateInput),
+    async (req, res) => {
+      res.json(await updateSystem(ctx, member(req), res.locals.params.id, req.body));
+    },
+  );
 
   router.delete("/systems/:id", requireMember("stores.edit"), validate(idParam, "params"), async (req, res) => {
     await deleteSystem(ctx, member(req), res.locals.params.id);

@@ -55,12 +55,19 @@ export function toSystem(row: SystemRow, bases: Bases): System {
 export async function listSystems(ctx: AppContext, viewer: Viewer, storeId: string): Promise<System[]> {
   await loadVisibleStore(ctx, viewer, storeId);
   const bases = await companyGwpBases(ctx, viewer.companyId);
-  const rows = await ctx.db.select().from(systems).where(eq(systems.storeId, storeId)).orderBy(asc(systems.name), asc(systems.id));
+  const rows = await ctx.db
+    .select()
+    .from(systems)
+    .where(eq(systems.storeId, storeId))
+    .orderBy(asc(systems.name), asc(systems.id));
   return rows.map((r) => toSystem(r, bases));
 }
 
 async function loadSystem(ctx: AppContext, viewer: Viewer, systemId: string): Promise<SystemRow> {
-  const [row] = await ctx.db.select().from(systems).where(and(eq(systems.id, systemId), eq(systems.companyId, viewer.companyId)));
+  const [row] = await ctx.db
+    .select()
+    .from(systems)
+    .where(and(eq(systems.id, systemId), eq(systems.companyId, viewer.companyId)));
   if (!row) throw notFound("That system");
   try {
     await loadVisibleStore(ctx, viewer, row.storeId);
@@ -74,7 +81,12 @@ export async function getSystem(ctx: AppContext, viewer: Viewer, systemId: strin
   return toSystem(await loadSystem(ctx, viewer, systemId), await companyGwpBases(ctx, viewer.companyId));
 }
 
-export async function createSystem(ctx: AppContext, viewer: Viewer, storeId: string, input: SystemInput): Promise<System> {
+export async function createSystem(
+  ctx: AppContext,
+  viewer: Viewer,
+  storeId: string,
+  input: SystemInput,
+): Promise<System> {
   await loadVisibleStore(ctx, viewer, storeId);
   const r = knownRefrigerant(input.refrigerantId);
   const [row] = await ctx.db
@@ -92,7 +104,12 @@ export async function createSystem(ctx: AppContext, viewer: Viewer, storeId: str
   return toSystem(row, await companyGwpBases(ctx, viewer.companyId));
 }
 
-export async function updateSystem(ctx: AppContext, viewer: Viewer, systemId: string, input: SystemUpdateInput): Promise<System> {
+export async function updateSystem(
+  ctx: AppContext,
+  viewer: Viewer,
+  systemId: string,
+  input: SystemUpdateInput,
+): Promise<System> {
   await loadSystem(ctx, viewer, systemId);
   const { fullCharge, refrigerantId, ...rest } = input;
   const [row] = await ctx.db

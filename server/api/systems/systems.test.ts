@@ -16,7 +16,13 @@ afterAll(() => t.close());
 
 const signedIn = (role: Role, company = co): Promise<Agent> => signIn(t.app, company.people[role]);
 
-const rack = { name: "Rack A (medium temp)", refrigerantId: "R-448A", fullCharge: { value: 500, unit: "lb" }, applianceType: "commercial-refrigeration", automaticLeakDetection: true };
+const rack = {
+  name: "Rack A (medium temp)",
+  refrigerantId: "R-448A",
+  fullCharge: { value: 500, unit: "lb" },
+  applianceType: "commercial-refrigeration",
+  automaticLeakDetection: true,
+};
 
 describe("systems", () => {
   it("stores the charge in kg (lb × 0.45359237 exactly) and returns safety class, GWP and cautions", async () => {
@@ -41,20 +47,48 @@ describe("systems", () => {
   it("shows GWP on the company's rule profile: EU F-gas gives R-448A's published 1387", async () => {
     const owner = await signedIn("owner");
     const s = (await owner.post(`/api/stores/${co.store.id}/systems`, { ...rack, name: "Rack B" })).body;
-    await owner.put("/api/company/settings", { name: "Juniper Row Foods", lengthUnit: "m", massUnit: "kg", ruleProfile: "eu-fgas", leakRateMethod: "annualizing", detectorCheckIntervalDays: 30 });
+    await owner.put("/api/company/settings", {
+      name: "Juniper Row Foods",
+      lengthUnit: "m",
+      massUnit: "kg",
+      ruleProfile: "eu-fgas",
+      leakRateMethod: "annualizing",
+      detectorCheckIntervalDays: 30,
+    });
     // standards.md §3 blend table: R-448A 1387 on AR4 with the 517/2014 HFO values.
-    expect((await owner.get(`/api/systems/${s.id}`)).body.refrigerant.gwp).toMatchObject({ value: 1387, basis: "AR4 + EU-517/2014" });
-    await owner.put("/api/company/settings", { name: "Juniper Row Foods", lengthUnit: "m", massUnit: "kg", ruleProfile: "us-federal", leakRateMethod: "annualizing", detectorCheckIntervalDays: 30 });
+    expect((await owner.get(`/api/systems/${s.id}`)).body.refrigerant.gwp).toMatchObject({
+      value: 1387,
+      basis: "AR4 + EU-517/2014",
+    });
+    await owner.put("/api/company/settings", {
+      name: "Juniper Row Foods",
+      lengthUnit: "m",
+      massUnit: "kg",
+      ruleProfile: "us-federal",
+      leakRateMethod: "annualizing",
+      detectorCheckIntervalDays: 30,
+    });
   });
 
   it("accepts R-744 with its high-pressure caution and a flammable A2L with the flammability caution", async () => {
     const owner = await signedIn("owner");
-    const co2 = await owner.post(`/api/stores/${co.store.id}/systems`, { ...rack, name: "LT rack", refrigerantId: "r744", fullCharge: { value: 180, unit: "kg" } });
+    const co2 = await owner.post(`/api/stores/${co.store.id}/systems`, {
+      ...rack,
+      name: "LT rack",
+      refrigerantId: "r744",
+      fullCharge: { value: 180, unit: "kg" },
+    });
     expect(co2.status).toBe(201);
     expect(co2.body).toMatchObject({ refrigerantId: "R-744", fullChargeKg: 180 });
     expect(co2.body.refrigerant.gwp.value).toBe(1); // CO2 is the GWP reference gas (IPCC)
     expect(co2.body.cautions.map((c: { id: string }) => c.id)).toContain("high-pressure-co2");
-    const a2l = await owner.post(`/api/stores/${co.store.id}/systems`, { ...rack, name: "Office split", refrigerantId: "R-454B", fullCharge: { value: 4.2, unit: "kg" }, applianceType: "comfort-cooling" });
+    const a2l = await owner.post(`/api/stores/${co.store.id}/systems`, {
+      ...rack,
+      name: "Office split",
+      refrigerantId: "R-454B",
+      fullCharge: { value: 4.2, unit: "kg" },
+      applianceType: "comfort-cooling",
+    });
     expect(a2l.body.refrigerant.safetyClass).toBe("A2L");
     expect(a2l.body.cautions[0].id).toBe("flammable");
   });
@@ -64,7 +98,12 @@ describe("systems", () => {
     const unknown = await lead.post(`/api/stores/${co.store.id}/systems`, { ...rack, refrigerantId: "R-9999" });
     expect(unknown.status).toBe(400);
     expect(unknown.body.error.fields.refrigerantId).toMatch(/not a refrigerant in the catalogue/);
-    const bad = await lead.post(`/api/stores/${co.store.id}/systems`, { ...rack, name: "", fullCharge: { value: 0, unit: "stone" }, applianceType: "freezer" });
+    const bad = await lead.post(`/api/stores/${co.store.id}/systems`, {
+      ...rack,
+      name: "",
+      fullCharge: { value: 0, unit: "stone" },
+      applianceType: "freezer",
+    });
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields).toMatchObject({
       name: "is required",
@@ -72,14 +111,22 @@ describe("systems", () => {
       "fullCharge.unit": "must be kg or lb",
       applianceType: expect.stringMatching(/commercial-refrigeration/),
     });
-    const negative = await lead.post(`/api/stores/${co.store.id}/systems`, { ...rack, fullCharge: { value: -3, unit: "kg" } });
+    const negative = await lead.post(`/api/stores/${co.store.id}/systems`, {
+      ...rack,
+      fullCharge: { value: -3, unit: "kg" },
+    });
     expect(negative.body.error.fields["fullCharge.value"]).toBe("must be more than 0");
   });
 
   it("edits and deletes with stores.edit; technicians and engineers only read", async () => {
     const lead = await signedIn("lead-tech");
-    const s = (await lead.post(`/api/stores/${co.store.id}/systems`, { ...rack, name: "Walk-in unit", refrigerantId: "R-404A" })).body;
-    const edited = await lead.patch(`/api/systems/${s.id}`, { fullCharge: { value: 30, unit: "kg" }, automaticLeakDetection: false });
+    const s = (
+      await lead.post(`/api/stores/${co.store.id}/systems`, { ...rack, name: "Walk-in unit", refrigerantId: "R-404A" })
+    ).body;
+    const edited = await lead.patch(`/api/systems/${s.id}`, {
+      fullCharge: { value: 30, unit: "kg" },
+      automaticLeakDetection: false,
+    });
     expect(edited.body).toMatchObject({ fullChargeKg: 30, automaticLeakDetection: false, refrigerantId: "R-404A" });
     for (const role of ["technician", "engineer", "store-contact"] as Role[]) {
       const a = await signedIn(role);

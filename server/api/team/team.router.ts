@@ -19,14 +19,25 @@ export function teamRouter(ctx: AppContext): Router {
     res.status(201).json(await invite(ctx, member(req).companyId, req.auth!.user.id, req.body));
   });
 
-  router.delete("/team/invitations/:id", requireMember("members.manage"), validate(idParam, "params"), async (req, res) => {
-    await revokeInvitation(ctx, member(req).companyId, res.locals.params.id);
-    res.status(204).end();
-  });
+  router.delete(
+    "/team/invitations/:id",
+    requireMember("members.manage"),
+    validate(idParam, "params"),
+    async (req, res) => {
+      await revokeInvitation(ctx, member(req).companyId, res.locals.params.id);
+      res.status(204).end();
+    },
+  );
 
-  router.patch("/team/members/:id", requireMember("members.manage"), validate(idParam, "params"), validate(memberUpdateInput), async (req, res) => {
-    res.json(await updateMember(ctx, member(req).companyId, res.locals.params.id, req.body.role, req.body.storeIds));
-  });
+  router.patch(
+    "/team/members/:id",
+    requireMember("members.manage"),
+    validate(idParam, "params"),
+    validate(memberUpdateInput),
+    async (req, res) => {
+      res.json(await updateMember(ctx, member(req).companyId, res.locals.params.id, req.body.role, req.body.storeIds));
+    },
+  );
 
   router.delete("/team/members/:id", requireMember("members.manage"), validate(idParam, "params"), async (req, res) => {
     await removeMember(ctx, member(req).companyId, res.locals.params.id);

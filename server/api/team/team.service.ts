@@ -24,7 +24,15 @@ export async function listTeam(ctx: AppContext, companyId: string) {
     .where(eq(memberships.companyId, companyId))
     .orderBy(asc(users.name));
   const scopes = rows.length
-    ? await ctx.db.select().from(membershipStores).where(inArray(membershipStores.membershipId, rows.map((r) => r.membershipId)))
+    ? await ctx.db
+        .select()
+        .from(membershipStores)
+        .where(
+          inArray(
+            membershipStores.membershipId,
+            rows.map((r) => r.membershipId),
+          ),
+        )
     : [];
   const pending = await ctx.db
     .select({
@@ -63,7 +71,8 @@ async function assertCompanyStores(ctx: AppContext, companyId: string, storeIds:
     .select({ id: stores.id })
     .from(stores)
     .where(and(eq(stores.companyId, companyId), inArray(stores.id, storeIds)));
-  if (found.length !== new Set(storeIds).size) throw badRequest("Some of those stores were not found.", { storeIds: "names a store that is not in this company" });
+  if (found.length !== new Set(storeIds).size)
+    throw badRequest("Some of those stores were not found.", { storeIds: "names a store that is not in this company" });
 }
 
 export async function invite(ctx: AppContext, companyId: string, inviterId: string, input: InviteInput) {
@@ -73,7 +82,10 @@ export async function invite(ctx: AppContext, companyId: string, inviterId: stri
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
     .where(and(eq(memberships.companyId, companyId), eq(users.email, input.email)));
-  if (existing) throw new HttpError(409, "conflict", "That person is already a member.", { email: "is already a member of this company" });
+  if (existing)
+    throw new HttpError(409, "conflict", "That person is already a member.", {
+      email: "is already a member of this company",
+    });
 
   const { token, hash } = newLinkToken();
   const [company] = await ctx.db.select().from(companies).where(eq(companies.id, companyId));
@@ -113,7 +125,14 @@ export async function revokeInvitation(ctx: AppContext, companyId: string, id: s
   const done = await ctx.db
     .update(invitations)
     .set({ revokedAt: new Date() })
-    .where(and(eq(invitations.id, id), eq(invitations.companyId, companyId), isNull(invitations.acceptedAt), isNull(invitations.revokedAt)))
+    .where(
+      and(
+        eq(invitations.id, id),
+        eq(invitations.companyId, companyId),
+        isNull(invitations.acceptedAt),
+        isNull(invitations.revokedAt),
+      ),
+    )
     .returning({ id: invitations.id });
   if (!done.length) throw notFound("That invitation");
 }
@@ -135,7 +154,13 @@ async function findMembership(ctx: AppContext, companyId: string, membershipId: 
   return m;
 }
 
-export async function updateMember(ctx: AppContext, companyId: string, membershipId: string, role: Role, storeIds: string[]) {
+export async function updateMember(
+  ctx: AppContext,
+  companyId: string,
+  membershipId: string,
+  role: Role,
+  storeIds: string[],
+) {
   const m = await findMembership(ctx, companyId, membershipId);
   if (m.role === "owner" && role !== "owner" && (await ownerCount(ctx, companyId)) <= 1) {
     throw conflict("A company needs at least one owner. Make someone else an owner first.");
@@ -144,7 +169,8 @@ export async function updateMember(ctx: AppContext, companyId: string, membershi
   await ctx.db.transaction(async (tx) => {
     await tx.update(memberships).set({ role }).where(eq(memberships.id, m.id));
     await tx.delete(membershipStores).where(eq(membershipStores.membershipId, m.id));
-    if (role === "store-contact") await tx.insert(membershipStores).values(storeIds.map((storeId) => ({ membershipId: m.id, storeId })));
+    if (role === "store-contact")
+      await tx.insert(membershipStores).values(storeIds.map((storeId) => ({ membershipId: m.id, storeId })));
   });
   const team = await listTeam(ctx, companyId);
   return team.members.find((x) => x.membershipId === m.id)!;

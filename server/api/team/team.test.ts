@@ -19,7 +19,12 @@ afterAll(() => t.close());
 const signedIn = (role: Role, company = co): Promise<Agent> => signIn(t.app, company.people[role]);
 
 async function latestMailTo(email: string) {
-  const [m] = await t.ctx.db.select().from(outboxMessages).where(eq(outboxMessages.to, [email])).orderBy(desc(outboxMessages.receivedAt)).limit(1);
+  const [m] = await t.ctx.db
+    .select()
+    .from(outboxMessages)
+    .where(eq(outboxMessages.to, [email]))
+    .orderBy(desc(outboxMessages.receivedAt))
+    .limit(1);
   return m;
 }
 
@@ -39,9 +44,22 @@ describe("team: who may do what", () => {
   it.each(nonOwners)("%s cannot invite, change roles, remove members or edit settings", async (role) => {
     const a = await signedIn(role);
     expect((await a.post("/api/team/invitations", { email: "new@fernway.test", role: "technician" })).status).toBe(403);
-    expect((await a.patch(`/api/team/members/${co.people.technician.membershipId}`, { role: "engineer" })).status).toBe(403);
+    expect((await a.patch(`/api/team/members/${co.people.technician.membershipId}`, { role: "engineer" })).status).toBe(
+      403,
+    );
     expect((await a.delete(`/api/team/members/${co.people.technician.membershipId}`)).status).toBe(403);
-    expect((await a.put("/api/company/settings", { name: "X", lengthUnit: "m", massUnit: "kg", ruleProfile: "us-federal", leakRateMethod: "annualizing", detectorCheckIntervalDays: 30 })).status).toBe(403);
+    expect(
+      (
+        await a.put("/api/company/settings", {
+          name: "X",
+          lengthUnit: "m",
+          massUnit: "kg",
+          ruleProfile: "us-federal",
+          leakRateMethod: "annualizing",
+          detectorCheckIntervalDays: 30,
+        })
+      ).status,
+    ).toBe(403);
     expect((await a.get("/api/company/settings")).status).toBe(200);
   });
 
@@ -58,20 +76,40 @@ describe("team: who may do what", () => {
 
   it("a store contact's scope must name the company's own stores", async () => {
     const a = await signedIn("owner");
-    const none = await a.patch(`/api/team/members/${co.people["store-contact"].membershipId}`, { role: "store-contact", storeIds: [] });
+    const none = await a.patch(`/api/team/members/${co.people["store-contact"].membershipId}`, {
+      role: "store-contact",
+      storeIds: [],
+    });
     expect(none.status).toBe(400);
     expect(none.body.error.fields.storeIds).toMatch(/at least one store/);
-    const foreign = await a.patch(`/api/team/members/${co.people["store-contact"].membershipId}`, { role: "store-contact", storeIds: [other.store.id] });
+    const foreign = await a.patch(`/api/team/members/${co.people["store-contact"].membershipId}`, {
+      role: "store-contact",
+      storeIds: [other.store.id],
+    });
     expect(foreign.status).toBe(400);
     expect(foreign.body.error.fields.storeIds).toMatch(/not in this company/);
   });
 
   it("the owner updates company settings, with field errors for bad values", async () => {
     const a = await signedIn("owner");
-    const bad = await a.put("/api/company/settings", { name: "", lengthUnit: "yards", massUnit: "kg", ruleProfile: "us-federal", leakRateMethod: "annualizing", detectorCheckIntervalDays: 0.5 });
+    const bad = await a.put("/api/company/settings", {
+      name: "",
+      lengthUnit: "yards",
+      massUnit: "kg",
+      ruleProfile: "us-federal",
+      leakRateMethod: "annualizing",
+      detectorCheckIntervalDays: 0.5,
+    });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields).sort()).toEqual(["detectorCheckIntervalDays", "lengthUnit", "name"]);
-    const good = await a.put("/api/company/settings", { name: "Fernway Grocers", lengthUnit: "ft-in", massUnit: "lb", ruleProfile: "eu-fgas", leakRateMethod: "rolling-average", detectorCheckIntervalDays: 14 });
+    const good = await a.put("/api/company/settings", {
+      name: "Fernway Grocers",
+      lengthUnit: "ft-in",
+      massUnit: "lb",
+      ruleProfile: "eu-fgas",
+      leakRateMethod: "rolling-average",
+      detectorCheckIntervalDays: 14,
+    });
     expect(good.status).toBe(200);
     expect(good.body.ruleProfile).toBe("eu-fgas");
     expect((await a.get("/api/company/settings")).body.detectorCheckIntervalDays).toBe(14);
@@ -92,7 +130,9 @@ describe("cross-company isolation", () => {
     const a = await signedIn("owner", other);
     const team = await a.get("/api/team");
     expect(team.body.members.every((m: { email: string }) => m.email.endsWith("tidewaterprovisions.test"))).toBe(true);
-    expect((await a.patch(`/api/team/members/${co.people.technician.membershipId}`, { role: "engineer" })).status).toBe(404);
+    expect((await a.patch(`/api/team/members/${co.people.technician.membershipId}`, { role: "engineer" })).status).toBe(
+      404,
+    );
     expect((await a.delete(`/api/team/members/${co.people.technician.membershipId}`)).status).toBe(404);
     expect((await a.post("/api/auth/switch-company", { companyId: co.company.id })).status).toBe(404);
     const stores = await a.get("/api/stores");
@@ -114,14 +154,27 @@ describe("invitations", () => {
 
     const guest = await agentFor(t.app);
     const preview = await guest.get(`/api/invitations/${token}`);
-    expect(preview.body).toEqual({ companyName: "Fernway Grocers", email: "newcomer@fernway.test", role: "technician", hasAccount: false });
+    expect(preview.body).toEqual({
+      companyName: "Fernway Grocers",
+      email: "newcomer@fernway.test",
+      role: "technician",
+      hasAccount: false,
+    });
     const weak = await guest.post(`/api/invitations/${token}/accept`, { password: "short" });
     expect(weak.status).toBe(400);
-    expect(weak.body.error.fields).toMatchObject({ name: "is required", password: expect.stringMatching(/at least 10/) });
-    const accepted = await guest.post(`/api/invitations/${token}/accept`, { name: "Nia Newcomer", password: "a long enough secret" });
+    expect(weak.body.error.fields).toMatchObject({
+      name: "is required",
+      password: expect.stringMatching(/at least 10/),
+    });
+    const accepted = await guest.post(`/api/invitations/${token}/accept`, {
+      name: "Nia Newcomer",
+      password: "a long enough secret",
+    });
     expect(accepted.status).toBe(200);
     expect(accepted.body.activeCompanyId).toBe(co.company.id);
-    expect((await guest.get("/api/team")).body.members.some((m: { email: string }) => m.email === "newcomer@fernway.test")).toBe(true);
+    expect(
+      (await guest.get("/api/team")).body.members.some((m: { email: string }) => m.email === "newcomer@fernway.test"),
+    ).toBe(true);
     expect((await agentFor(t.app).then((g) => g.get(`/api/invitations/${token}`))).status).toBe(404);
   });
 
@@ -146,7 +199,11 @@ describe("invitations", () => {
     expect(Object.keys(res.body.error.fields).sort()).toEqual(["email", "role"]);
     const dup = await owner.post("/api/team/invitations", { email: co.people.engineer.email, role: "engineer" });
     expect(dup.status).toBe(409);
-    const contact = await owner.post("/api/team/invitations", { email: "contact2@fernway.test", role: "store-contact", storeIds: [] });
+    const contact = await owner.post("/api/team/invitations", {
+      email: "contact2@fernway.test",
+      role: "store-contact",
+      storeIds: [],
+    });
     expect(contact.body.error.fields.storeIds).toMatch(/at least one store/);
   });
 

@@ -1,4 +1,15 @@
-import { customType, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import {
+  customType,
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from "drizzle-orm/pg-core";
 import type { AnalysisParams, AnalysisSummary } from "#core/contracts/analysis";
 import { companies } from "./companies";
 import { sweeps } from "./sweeps";
@@ -13,8 +24,12 @@ export const analyses = pgTable(
   "analyses",
   {
     id: uuid().primaryKey().defaultRandom(),
-    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
-    sweepId: uuid().notNull().references(() => sweeps.id, { onDelete: "cascade" }),
+    companyId: uuid()
+      .notNull()
+      .references(() => companies.id, { onDelete: "cascade" }),
+    sweepId: uuid()
+      .notNull()
+      .references(() => sweeps.id, { onDelete: "cascade" }),
     /** Canonical text of `params`, the cache key together with the sweep. */
     paramsKey: text().notNull(),
     params: jsonb().$type<AnalysisParams>().notNull(),

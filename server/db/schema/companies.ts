@@ -4,10 +4,18 @@ import { users } from "./users";
 export const companies = pgTable("companies", {
   id: uuid().primaryKey().defaultRandom(),
   name: text().notNull(),
-  lengthUnit: text({ enum: ["m", "ft-in"] }).notNull().default("m"),
-  massUnit: text({ enum: ["kg", "lb"] }).notNull().default("kg"),
-  ruleProfile: text({ enum: ["us-federal", "eu-fgas", "custom"] }).notNull().default("us-federal"),
-  leakRateMethod: text({ enum: ["annualizing", "rolling-average"] }).notNull().default("annualizing"),
+  lengthUnit: text({ enum: ["m", "ft-in"] })
+    .notNull()
+    .default("m"),
+  massUnit: text({ enum: ["kg", "lb"] })
+    .notNull()
+    .default("kg"),
+  ruleProfile: text({ enum: ["us-federal", "eu-fgas", "custom"] })
+    .notNull()
+    .default("us-federal"),
+  leakRateMethod: text({ enum: ["annualizing", "rolling-average"] })
+    .notNull()
+    .default("annualizing"),
   detectorCheckIntervalDays: integer().notNull().default(30),
   createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
 });
@@ -18,8 +26,12 @@ export const memberships = pgTable(
   "memberships",
   {
     id: uuid().primaryKey().defaultRandom(),
-    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
-    userId: uuid().notNull().references(() => users.id, { onDelete: "cascade" }),
+    companyId: uuid()
+      .notNull()
+      .references(() => companies.id, { onDelete: "cascade" }),
+    userId: uuid()
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
     role: text({ enum: ROLE_VALUES }).notNull(),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
@@ -30,12 +42,16 @@ export const invitations = pgTable(
   "invitations",
   {
     id: uuid().primaryKey().defaultRandom(),
-    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
+    companyId: uuid()
+      .notNull()
+      .references(() => companies.id, { onDelete: "cascade" }),
     email: text().notNull(),
     role: text({ enum: ROLE_VALUES }).notNull(),
     storeIds: uuid().array().notNull().default([]),
     tokenHash: text().notNull().unique(),
-    invitedById: uuid().notNull().references(() => users.id),
+    invitedById: uuid()
+      .notNull()
+      .references(() => users.id),
     expiresAt: timestamp({ withTimezone: true }).notNull(),
     acceptedAt: timestamp({ withTimezone: true }),
     revokedAt: timestamp({ withTimezone: true }),
@@ -48,7 +64,9 @@ export const stores = pgTable(
   "stores",
   {
     id: uuid().primaryKey().defaultRandom(),
-    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
+    companyId: uuid()
+      .notNull()
+      .references(() => companies.id, { onDelete: "cascade" }),
     name: text().notNull(),
     address: text().notNull().default(""),
     timeZone: text().notNull().default("UTC"),
@@ -63,8 +81,12 @@ export const stores = pgTable(
 export const membershipStores = pgTable(
   "membership_stores",
   {
-    membershipId: uuid().notNull().references(() => memberships.id, { onDelete: "cascade" }),
-    storeId: uuid().notNull().references(() => stores.id, { onDelete: "cascade" }),
+    membershipId: uuid()
+      .notNull()
+      .references(() => memberships.id, { onDelete: "cascade" }),
+    storeId: uuid()
+      .notNull()
+      .references(() => stores.id, { onDelete: "cascade" }),
   },
   (t) => [primaryKey({ columns: [t.membershipId, t.storeId] })],
 );

@@ -1,4 +1,16 @@
-import { boolean, date, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import {
+  boolean,
+  date,
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from "drizzle-orm/pg-core";
 import type { RuleProfile } from "#core/domain/compliance/rule-profile";
 import { companies } from "./companies";
 import { findings } from "./findings";
@@ -14,20 +26,28 @@ export const chargeAdditions = pgTable(
   "charge_additions",
   {
     id: uuid().primaryKey().defaultRandom(),
-    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
-    systemId: uuid().notNull().references(() => systems.id, { onDelete: "cascade" }),
+    companyId: uuid()
+      .notNull()
+      .references(() => companies.id, { onDelete: "cascade" }),
+    systemId: uuid()
+      .notNull()
+      .references(() => systems.id, { onDelete: "cascade" }),
     addedOn: date({ mode: "string" }).notNull(),
     amountKg: doublePrecision().notNull(),
     /** As typed, for the record (the figures use amountKg). */
     enteredValue: doublePrecision().notNull(),
     enteredUnit: text({ enum: ["kg", "lb"] }).notNull(),
-    technicianId: uuid().notNull().references(() => users.id),
+    technicianId: uuid()
+      .notNull()
+      .references(() => users.id),
     reason: text().notNull(),
     /** No leak-rate calculation at this addition (40 CFR 82.157 exceptions). */
     excluded: text({ enum: ["retrofit", "new-installation", "seasonal-variance"] }),
     findingId: uuid().references(() => findings.id, { onDelete: "set null" }),
     correctsId: uuid(),
-    recordedById: uuid().notNull().references(() => users.id),
+    recordedById: uuid()
+      .notNull()
+      .references(() => users.id),
     recordedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
     voidedAt: timestamp({ withTimezone: true }),
     voidedById: uuid().references(() => users.id),
@@ -41,12 +61,18 @@ export const leakChecks = pgTable(
   "leak_checks",
   {
     id: uuid().primaryKey().defaultRandom(),
-    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
-    systemId: uuid().notNull().references(() => systems.id, { onDelete: "cascade" }),
+    companyId: uuid()
+      .notNull()
+      .references(() => companies.id, { onDelete: "cascade" }),
+    systemId: uuid()
+      .notNull()
+      .references(() => systems.id, { onDelete: "cascade" }),
     checkedOn: date({ mode: "string" }).notNull(),
     leakFound: boolean().notNull(),
     note: text().notNull().default(""),
-    byId: uuid().notNull().references(() => users.id),
+    byId: uuid()
+      .notNull()
+      .references(() => users.id),
     recordedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index("leak_checks_system").on(t.systemId)],
@@ -57,7 +83,9 @@ export const digestRuns = pgTable(
   "digest_runs",
   {
     id: uuid().primaryKey().defaultRandom(),
-    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
+    companyId: uuid()
+      .notNull()
+      .references(() => companies.id, { onDelete: "cascade" }),
     localDate: date({ mode: "string" }).notNull(),
     status: text({ enum: ["sending", "sent"] }).notNull(),
     trigger: text({ enum: ["schedule", "manual"] }).notNull(),
@@ -78,9 +106,13 @@ export const customRuleProfiles = pgTable(
   "custom_rule_profiles",
   {
     id: uuid().primaryKey().defaultRandom(),
-    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
+    companyId: uuid()
+      .notNull()
+      .references(() => companies.id, { onDelete: "cascade" }),
     profile: jsonb().$type<RuleProfile>().notNull(),
-    savedById: uuid().notNull().references(() => users.id),
+    savedById: uuid()
+      .notNull()
+      .references(() => users.id),
     savedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index("custom_rule_profiles_company").on(t.companyId, t.savedAt)],
@@ -94,14 +126,20 @@ export const chronicLeakerReports = pgTable(
   "chronic_leaker_reports",
   {
     id: uuid().primaryKey().defaultRandom(),
-    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
-    systemId: uuid().notNull().references(() => systems.id, { onDelete: "cascade" }),
+    companyId: uuid()
+      .notNull()
+      .references(() => companies.id, { onDelete: "cascade" }),
+    systemId: uuid()
+      .notNull()
+      .references(() => systems.id, { onDelete: "cascade" }),
     year: integer().notNull(),
     filedOn: date({ mode: "string" }).notNull(),
     /** The authority's receipt or submission number, if any. */
     reference: text().notNull().default(""),
     note: text().notNull().default(""),
-    filedById: uuid().notNull().references(() => users.id),
+    filedById: uuid()
+      .notNull()
+      .references(() => users.id),
     recordedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [uniqueIndex("chronic_leaker_reports_system_year").on(t.systemId, t.year)],
@@ -112,11 +150,15 @@ export const complianceAudit = pgTable(
   "compliance_audit",
   {
     id: uuid().primaryKey().defaultRandom(),
-    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
+    companyId: uuid()
+      .notNull()
+      .references(() => companies.id, { onDelete: "cascade" }),
     systemId: uuid().references(() => systems.id, { onDelete: "cascade" }),
     action: text({ enum: ["chronic-report-filed"] }).notNull(),
     summary: text().notNull(),
-    byId: uuid().notNull().references(() => users.id),
+    byId: uuid()
+      .notNull()
+      .references(() => users.id),
     at: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index("compliance_audit_system").on(t.systemId, t.at)],

@@ -15,7 +15,9 @@ export const detectors = pgTable(
   "detectors",
   {
     id: uuid().primaryKey().defaultRandom(),
-    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
+    companyId: uuid()
+      .notNull()
+      .references(() => companies.id, { onDelete: "cascade" }),
     name: text().notNull(),
     principle: text({ enum: SENSING_PRINCIPLES }).notNull(),
     transportDelayS: real().notNull().default(5),

@@ -1,4 +1,16 @@
-import { boolean, doublePrecision, index, integer, jsonb, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import {
+  boolean,
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  primaryKey,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from "drizzle-orm/pg-core";
 import type { RoomDoor, Vertex } from "#core/contracts/fixtures";
 import type { Similarity } from "#core/analysis/geometry/similarity";
 import { companies, stores } from "./companies";
@@ -22,8 +34,12 @@ export const plans = pgTable(
   "plans",
   {
     id: uuid().primaryKey().defaultRandom(),
-    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
-    storeId: uuid().notNull().references(() => stores.id, { onDelete: "cascade" }),
+    companyId: uuid()
+      .notNull()
+      .references(() => companies.id, { onDelete: "cascade" }),
+    storeId: uuid()
+      .notNull()
+      .references(() => stores.id, { onDelete: "cascade" }),
     /** 1, 2, 3… per store; the highest is the current plan. */
     version: integer().notNull(),
     source: text({ enum: PLAN_SOURCE_VALUES }).notNull(),
@@ -63,7 +79,9 @@ export const plans = pgTable(
 export const fixtures = pgTable(
   "fixtures",
   {
-    planId: uuid().notNull().references(() => plans.id, { onDelete: "cascade" }),
+    planId: uuid()
+      .notNull()
+      .references(() => plans.id, { onDelete: "cascade" }),
     id: uuid().notNull(),
     kind: text().notNull(),
     label: text().notNull().default(""),

@@ -8,8 +8,12 @@ export const reportSends = pgTable(
   "report_sends",
   {
     id: uuid().primaryKey().defaultRandom(),
-    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
-    sweepId: uuid().notNull().references(() => sweeps.id, { onDelete: "cascade" }),
+    companyId: uuid()
+      .notNull()
+      .references(() => companies.id, { onDelete: "cascade" }),
+    sweepId: uuid()
+      .notNull()
+      .references(() => sweeps.id, { onDelete: "cascade" }),
     sentById: uuid().references(() => users.id, { onDelete: "set null" }),
     recipients: text().array().notNull(),
     subject: text().notNull(),

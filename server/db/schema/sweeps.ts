@@ -1,4 +1,15 @@
-import { boolean, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uuid, bigserial } from "drizzle-orm/pg-core";
+import {
+  boolean,
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  text,
+  timestamp,
+  uuid,
+  bigserial,
+} from "drizzle-orm/pg-core";
 import { companies, stores } from "./companies";
 import { detectors } from "./detectors";
 import { plans } from "./plans";
@@ -24,11 +35,21 @@ export const sweeps = pgTable(
   "sweeps",
   {
     id: uuid().primaryKey(),
-    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
-    storeId: uuid().notNull().references(() => stores.id, { onDelete: "cascade" }),
-    planId: uuid().notNull().references(() => plans.id, { onDelete: "restrict" }),
-    detectorId: uuid().notNull().references(() => detectors.id, { onDelete: "restrict" }),
-    technicianId: uuid().notNull().references(() => users.id, { onDelete: "restrict" }),
+    companyId: uuid()
+      .notNull()
+      .references(() => companies.id, { onDelete: "cascade" }),
+    storeId: uuid()
+      .notNull()
+      .references(() => stores.id, { onDelete: "cascade" }),
+    planId: uuid()
+      .notNull()
+      .references(() => plans.id, { onDelete: "restrict" }),
+    detectorId: uuid()
+      .notNull()
+      .references(() => detectors.id, { onDelete: "restrict" }),
+    technicianId: uuid()
+      .notNull()
+      .references(() => users.id, { onDelete: "restrict" }),
     systemIds: uuid().array().notNull().default([]),
     fans: text({ enum: FANS_VALUES }).notNull(),
     defrost: boolean().notNull(),
@@ -46,7 +67,11 @@ export const sweeps = pgTable(
     readingsRevision: integer().notNull().default(0),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index("sweeps_store").on(t.storeId), index("sweeps_plan").on(t.planId), index("sweeps_company").on(t.companyId)],
+  (t) => [
+    index("sweeps_store").on(t.storeId),
+    index("sweeps_plan").on(t.planId),
+    index("sweeps_company").on(t.companyId),
+  ],
 );
 
 /** One tap on the plan. The id is made on the device, so a retried upload stores it once. */
@@ -54,7 +79,9 @@ export const readings = pgTable(
   "readings",
   {
     id: uuid().primaryKey(),
-    sweepId: uuid().notNull().references(() => sweeps.id, { onDelete: "cascade" }),
+    sweepId: uuid()
+      .notNull()
+      .references(() => sweeps.id, { onDelete: "cascade" }),
     /** Plan metres, origin top-left, y down. */
     x: doublePrecision().notNull(),
     y: doublePrecision().notNull(),
@@ -88,7 +115,9 @@ export const readingAudit = pgTable(
   "reading_audit",
   {
     id: bigserial({ mode: "number" }).primaryKey(),
-    sweepId: uuid().notNull().references(() => sweeps.id, { onDelete: "cascade" }),
+    sweepId: uuid()
+      .notNull()
+      .references(() => sweeps.id, { onDelete: "cascade" }),
     readingId: uuid().notNull(),
     action: text({ enum: ["edit", "delete"] }).notNull(),
     before: jsonb().$type<ReadingValues>().notNull(),

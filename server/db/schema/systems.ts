@@ -8,8 +8,12 @@ export const systems = pgTable(
   "systems",
   {
     id: uuid().primaryKey().defaultRandom(),
-    companyId: uuid().notNull().references(() => companies.id, { onDelete: "cascade" }),
-    storeId: uuid().notNull().references(() => stores.id, { onDelete: "cascade" }),
+    companyId: uuid()
+      .notNull()
+      .references(() => companies.id, { onDelete: "cascade" }),
+    storeId: uuid()
+      .notNull()
+      .references(() => stores.id, { onDelete: "cascade" }),
     name: text().notNull(),
     /** ASHRAE 34 designation as in core/domain/refrigerants (e.g. "R-448A"). */
     refrigerantId: text().notNull(),

@@ -13,7 +13,9 @@ export const users = pgTable("users", {
 
 export const passwordResets = pgTable("password_resets", {
   id: uuid().primaryKey().defaultRandom(),
-  userId: uuid().notNull().references(() => users.id, { onDelete: "cascade" }),
+  userId: uuid()
+    .notNull()
+    .references(() => users.id, { onDelete: "cascade" }),
   // SHA-256 of the token sent by e-mail: a leaked table cannot be used to reset passwords.
   tokenHash: text().notNull().unique(),
   expiresAt: timestamp({ withTimezone: true }).notNull(),

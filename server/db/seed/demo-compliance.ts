@@ -26,7 +26,10 @@ export async function seedDemoCompliance(
   const today = localDateOf(now, ids.timeZone);
   const day = (n: number) => addDays(today, -n);
   // The systems were put on record well before their first addition.
-  await tx.update(systems).set({ createdAt: new Date(`${day(420)}T17:00:00Z`) }).where(eq(systems.storeId, ids.storeId));
+  await tx
+    .update(systems)
+    .set({ createdAt: new Date(`${day(420)}T17:00:00Z`) })
+    .where(eq(systems.storeId, ids.storeId));
   const rows = await tx.select().from(systems).where(eq(systems.storeId, ids.storeId));
   const sys = (refrigerantId: string) => rows.find((r) => r.refrigerantId === refrigerantId)!;
   const rackA = sys("R-448A");
@@ -44,29 +47,64 @@ export async function seedDemoCompliance(
   };
 
   const { people } = ids;
-  const add = (systemId: string, daysAgo: number, lb: number, by: string, reason: string, findingId: string | null = null) =>
+  const add = (
+    systemId: string,
+    daysAgo: number,
+    lb: number,
+    by: string,
+    reason: string,
+    findingId: string | null = null,
+  ) =>
     tx.insert(chargeAdditions).values({
-      companyId: ids.companyId, systemId, addedOn: day(daysAgo), amountKg: lb * KG_PER_POUND, enteredValue: lb, enteredUnit: "lb",
-      technicianId: by, reason, findingId, recordedById: by, recordedAt: new Date(`${day(daysAgo)}T20:00:00Z`),
+      companyId: ids.companyId,
+      systemId,
+      addedOn: day(daysAgo),
+      amountKg: lb * KG_PER_POUND,
+      enteredValue: lb,
+      enteredUnit: "lb",
+      technicianId: by,
+      reason,
+      findingId,
+      recordedById: by,
+      recordedAt: new Date(`${day(daysAgo)}T20:00:00Z`),
     });
 
   let tick = 0;
   async function finding(input: {
-    systemId: string; where: ReturnType<typeof spot>; component: string; source: "walk" | "manual"; note: string;
+    systemId: string;
+    where: ReturnType<typeof spot>;
+    component: string;
+    source: "walk" | "manual";
+    note: string;
     steps: [EventKind, Status, number, string, ("passed" | "failed")?, string?][];
   }) {
     const [first] = input.steps;
     const [row] = await tx
       .insert(findings)
       .values({
-        companyId: ids.companyId, storeId: ids.storeId, systemId: input.systemId, ...input.where, component: input.component, source: input.source,
-        status: input.steps.at(-1)![1], note: input.note, foundAt: new Date(`${day(first[2])}T16:00:00Z`), foundById: first[3],
+        companyId: ids.companyId,
+        storeId: ids.storeId,
+        systemId: input.systemId,
+        ...input.where,
+        component: input.component,
+        source: input.source,
+        status: input.steps.at(-1)![1],
+        note: input.note,
+        foundAt: new Date(`${day(first[2])}T16:00:00Z`),
+        foundById: first[3],
       })
       .returning({ id: findings.id });
     for (const [kind, status, daysAgo, by, result, note] of input.steps) {
       tick += 1;
       await tx.insert(findingEvents).values({
-        findingId: row.id, kind, status, on: day(daysAgo), at: new Date(Date.parse(`${day(daysAgo)}T16:00:00Z`) + tick * 60_000), byId: by, result: result ?? null, note: note ?? "",
+        findingId: row.id,
+        kind,
+        status,
+        on: day(daysAgo),
+        at: new Date(Date.parse(`${day(daysAgo)}T16:00:00Z`) + tick * 60_000),
+        byId: by,
+        result: result ?? null,
+        note: note ?? "",
       });
     }
     return row.id;
@@ -79,9 +117,14 @@ export async function seedDemoCompliance(
   // Rack A. 150 lb into 1,150 lb after 212 days: 22.5 % > 20 % (40 CFR 84.102 annualizing).
   await add(rackA.id, 300, 40, lead, "Seasonal top-up after the summer service");
   const earlier = await finding({
-    systemId: rackA.id, where: spot("Meat 2"), component: "flare", source: "walk", note: "Oily flare nut at the liquid-line drop; reading rose to 14 ppm at the case front.",
+    systemId: rackA.id,
+    where: spot("Meat 2"),
+    component: "flare",
+    source: "walk",
+    note: "Oily flare nut at the liquid-line drop; reading rose to 14 ppm at the case front.",
     steps: [
-      ["found", "suspected", 89, tech], ["confirmed", "confirmed", 88, tech, undefined, "Bubble test positive at the flare."],
+      ["found", "suspected", 89, tech],
+      ["confirmed", "confirmed", 88, tech, undefined, "Bubble test positive at the flare."],
       ["repaired", "repaired", 86, lead, undefined, "Flare re-made with a new nut."],
       ["initial-test", "repaired", 86, lead, "passed", "Standing nitrogen test before recharge, no drop."],
       ["follow-up-test", "verified", 78, tech, "passed", "Electronic check at normal operation, nothing found."],
@@ -91,18 +134,29 @@ export async function seedDemoCompliance(
   await add(rackA.id, 88, 150, tech, "Low receiver level after the Meat 2 leak", earlier);
   // 90 lb after 76 more days: 37.6 % > 20 %, learned 12 days ago; repair due in 18 days.
   const open = await finding({
-    systemId: rackA.id, where: spot("Dairy 3"), component: "brazed-joint", source: "walk",
+    systemId: rackA.id,
+    where: spot("Dairy 3"),
+    component: "brazed-joint",
+    source: "walk",
     note: "Steady 9 ppm at the return-air grille of Dairy 3; traced to a brazed joint on the suction line under the case.",
-    steps: [["found", "suspected", 13, tech], ["confirmed", "confirmed", 12, tech, undefined, "Confirmed with soap solution at the brazed elbow."]],
+    steps: [
+      ["found", "suspected", 13, tech],
+      ["confirmed", "confirmed", 12, tech, undefined, "Confirmed with soap solution at the brazed elbow."],
+    ],
   });
   await add(rackA.id, 12, 90, tech, "Low-level alarm on the receiver", open);
 
   // Walk-ins. 5 lb into 38 lb after 30 days: 160 % > 20 %; repaired the next day and verified.
   await add(walkIns.id, 150, 3, tech, "Top-up after defrost heater replacement");
   const coil = await finding({
-    systemId: walkIns.id, where: spot("Dairy walk-in cooler"), component: "coil", source: "manual", note: "Pinhole in the evaporator coil return bend.",
+    systemId: walkIns.id,
+    where: spot("Dairy walk-in cooler"),
+    component: "coil",
+    source: "manual",
+    note: "Pinhole in the evaporator coil return bend.",
     steps: [
-      ["found", "suspected", 121, tech], ["confirmed", "confirmed", 120, tech],
+      ["found", "suspected", 121, tech],
+      ["confirmed", "confirmed", 120, tech],
       ["repaired", "repaired", 119, lead, undefined, "Return bend brazed."],
       ["initial-test", "repaired", 119, lead, "passed"],
       ["follow-up-test", "verified", 111, lead, "passed"],
@@ -115,7 +169,12 @@ export async function seedDemoCompliance(
 
   // The two detectors: one checked recently, one due in a few days (company interval 30 days).
   await tx.insert(detectors).values([
-    { companyId: ids.companyId, name: "Heated-diode sniffer (van 1)", principle: "heated-diode", lastCheckedOn: day(9) },
+    {
+      companyId: ids.companyId,
+      name: "Heated-diode sniffer (van 1)",
+      principle: "heated-diode",
+      lastCheckedOn: day(9),
+    },
     { companyId: ids.companyId, name: "Infrared detector (van 2)", principle: "infrared", lastCheckedOn: day(26) },
   ]);
 }

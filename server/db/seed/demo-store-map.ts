@@ -15,7 +15,11 @@ import { drawDemoPlan } from "./demo-plan-image";
  * fixtures linked to the systems. Runs inside the demo seed's transaction; the image files are
  * written first and removed again if the transaction fails.
  */
-export async function seedDemoLayout(ctx: AppContext, tx: DbOrTx, ids: { companyId: string; storeId: string; createdById: string | null }): Promise<void> {
+export async function seedDemoLayout(
+  ctx: AppContext,
+  tx: DbOrTx,
+  ids: { companyId: string; storeId: string; createdById: string | null },
+): Promise<void> {
   const systemIds = {} as Record<DemoSystemKey, string>;
   for (const s of DEMO_SYSTEMS) {
     const [row] = await tx
@@ -36,7 +40,8 @@ export async function seedDemoLayout(ctx: AppContext, tx: DbOrTx, ids: { company
   const fixtures = demoFixtures(systemIds);
   // The demo must pass the same checks a lead tech's save does.
   const checked = validateFixtureList(fixtures, { width: DEMO_PLAN.widthM, height: DEMO_PLAN.heightM });
-  if (!checked.ok) throw new Error(`demo layout is invalid: ${checked.errors.map((e) => `${e.path} ${e.message}`).join("; ")}`);
+  if (!checked.ok)
+    throw new Error(`demo layout is invalid: ${checked.errors.map((e) => `${e.path} ${e.message}`).join("; ")}`);
 
   const drawing = await drawDemoPlan(fixtures);
   const planId = randomUUID();
@@ -45,12 +50,20 @@ export async function seedDemoLayout(ctx: AppContext, tx: DbOrTx, ids: { company
   const storage = planStorage(ctx);
   const written: string[] = [];
   try {
-    for (const [key, data] of [[keys.original, drawing.png], [keys.display, drawing.png], [keys.thumb, drawing.thumb]] as const) {
+    for (const [key, data] of [
+      [keys.original, drawing.png],
+      [keys.display, drawing.png],
+      [keys.thumb, drawing.thumb],
+    ] as const) {
       await storage.put(key, data);
       written.push(key);
     }
     // Calibrated as a lead tech would: a line along the front wall, 1180 px, typed as 59 m.
-    const line = { a: { x: 10, y: drawing.heightPx - 10 }, b: { x: drawing.widthPx - 10, y: drawing.heightPx - 10 }, length: { value: 59, unit: "m" as const } };
+    const line = {
+      a: { x: 10, y: drawing.heightPx - 10 },
+      b: { x: drawing.widthPx - 10, y: drawing.heightPx - 10 },
+      length: { value: 59, unit: "m" as const },
+    };
     const mpp = line.length.value / (line.b.x - line.a.x);
     const plan = await addPlanVersion(
       tx,
@@ -74,7 +87,10 @@ export async function seedDemoLayout(ctx: AppContext, tx: DbOrTx, ids: { company
       },
       { id: planId },
     );
-    await insertFixtureRows(tx, checked.fixtures.map((f, i) => fixtureToRow(plan.id, f, i)));
+    await insertFixtureRows(
+      tx,
+      checked.fixtures.map((f, i) => fixtureToRow(plan.id, f, i)),
+    );
   } catch (err) {
     await Promise.allSettled(written.map((k) => storage.delete(k)));
     throw err;

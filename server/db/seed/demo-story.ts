@@ -15,7 +15,14 @@ export interface DemoMonth {
   leaks: DemoLeak[];
   rechecks?: RecheckLeg[];
   /** The finding made on this sweep: linked when the records already hold it, made otherwise. */
-  finding?: { fixtureLabel: string; x: number; y: number; component: "flare" | "brazed-joint"; note: string; status: "suspected" | "repaired" };
+  finding?: {
+    fixtureLabel: string;
+    x: number;
+    y: number;
+    component: "flare" | "brazed-joint";
+    note: string;
+    status: "suspected" | "repaired";
+  };
 }
 
 /** A flare at the back of Meat 2 (cases of 3.66 m from x = 32 m, so Meat 2 spans 35.66–39.32 m). */
@@ -37,7 +44,13 @@ export const DEMO_LEAK_STORY: DemoMonth[] = [
       { from: [34.5, 9.7], to: [41.5, 9.7], spacingM: 0.6 },
       { from: [41.5, 10.4], to: [34.5, 10.4], spacingM: 0.6 },
     ],
-    finding: { fixtureLabel: "Meat 2", ...MEAT_FLARE, component: "flare", note: "Suspect spot 1 at the back of Meat 2, by drop M1.", status: "repaired" },
+    finding: {
+      fixtureLabel: "Meat 2",
+      ...MEAT_FLARE,
+      component: "flare",
+      note: "Suspect spot 1 at the back of Meat 2, by drop M1.",
+      status: "repaired",
+    },
   },
   { dayOffset: -60, fans: "running", detector: "heated-diode", reviewed: true, leaks: [] },
   { dayOffset: -41, fans: "running", detector: "infrared", reviewed: true, leaks: [] },
@@ -47,6 +60,12 @@ export const DEMO_LEAK_STORY: DemoMonth[] = [
     detector: "heated-diode",
     reviewed: false,
     leaks: [{ ...DAIRY_JOINT, peakPpm: 16 }],
-    finding: { fixtureLabel: "Dairy 3", ...DAIRY_JOINT, component: "brazed-joint", note: "Suspect spot 1 behind Dairy 3.", status: "suspected" },
+    finding: {
+      fixtureLabel: "Dairy 3",
+      ...DAIRY_JOINT,
+      component: "brazed-joint",
+      note: "Suspect spot 1 behind Dairy 3.",
+      status: "suspected",
+    },
   },
 ];

@@ -36,7 +36,14 @@ describe("the demo's leak story", () => {
     const ageDays = byDate.map((s) => (Date.now() - Date.parse(s.startedAt)) / 86_400_000);
     expect(ageDays[0]).toBeGreaterThan(140);
     expect(ageDays[5]).toBeLessThan(20);
-    expect(byDate.map((s) => s.status)).toEqual(["reviewed", "reviewed", "reviewed", "reviewed", "reviewed", "submitted"]);
+    expect(byDate.map((s) => s.status)).toEqual([
+      "reviewed",
+      "reviewed",
+      "reviewed",
+      "reviewed",
+      "reviewed",
+      "submitted",
+    ]);
 
     const plan = (await eng.get(`/api/stores/${storeId}`)).body.currentPlan;
     const fixtures: { id: string; label: string }[] = (await eng.get(`/api/plans/${plan.id}/fixtures`)).body.fixtures;

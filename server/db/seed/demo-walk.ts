@@ -29,14 +29,38 @@ function normal(rand: Prng): number {
 }
 
 const ROUTE: [number, number][][] = [
-  [[2.5, 9.8], [23.5, 9.8]], // dairy case fronts, east
-  [[23.5, 11.0], [2.8, 11.0]], // back along the aisle
-  [[2.1, 11.6], [2.1, 29.0]], // frozen doors, south
-  [[5.0, 16.5], [13.2, 16.5]], // between the produce islands
-  [[13.2, 11.2], [31.5, 11.2]], // across the front of the back wall
-  [[32.3, 9.8], [46.4, 9.8]], // meat case fronts, east
-  [[46.4, 11.0], [32.0, 11.0]], // back along the aisle
-  [[48.6, 12.0], [48.6, 31.0]], // past the bakery corner
+  [
+    [2.5, 9.8],
+    [23.5, 9.8],
+  ], // dairy case fronts, east
+  [
+    [23.5, 11.0],
+    [2.8, 11.0],
+  ], // back along the aisle
+  [
+    [2.1, 11.6],
+    [2.1, 29.0],
+  ], // frozen doors, south
+  [
+    [5.0, 16.5],
+    [13.2, 16.5],
+  ], // between the produce islands
+  [
+    [13.2, 11.2],
+    [31.5, 11.2],
+  ], // across the front of the back wall
+  [
+    [32.3, 9.8],
+    [46.4, 9.8],
+  ], // meat case fronts, east
+  [
+    [46.4, 11.0],
+    [32.0, 11.0],
+  ], // back along the aisle
+  [
+    [48.6, 12.0],
+    [48.6, 31.0],
+  ], // past the bakery corner
 ];
 
 export interface DemoTap {
@@ -66,7 +90,11 @@ export interface RecheckLeg {
 function tapPoints(rand: Prng, rechecks: readonly RecheckLeg[]): [number, number][] {
   const out: [number, number][] = [];
   const legs = [...ROUTE.map(([a, b]) => ({ from: a, to: b, spacingM: 1.3 })), ...rechecks];
-  for (const { from: [ax, ay], to: [bx, by], spacingM } of legs) {
+  for (const {
+    from: [ax, ay],
+    to: [bx, by],
+    spacingM,
+  } of legs) {
     const len = Math.hypot(bx - ax, by - ay);
     const n = Math.max(1, Math.round(len / spacingM));
     for (let k = 0; k <= n; k++) {
@@ -77,7 +105,13 @@ function tapPoints(rand: Prng, rechecks: readonly RecheckLeg[]): [number, number
   return out;
 }
 
-export function simulateDemoWalk(air: DemoAir, instrument: DemoInstrument, rand: Prng, rechecks: readonly RecheckLeg[] = [], startDelayS = 12): DemoTap[] {
+export function simulateDemoWalk(
+  air: DemoAir,
+  instrument: DemoInstrument,
+  rand: Prng,
+  rechecks: readonly RecheckLeg[] = [],
+  startDelayS = 12,
+): DemoTap[] {
   const points = tapPoints(rand, rechecks);
   const dt = 0.1;
   const speed = 0.9;

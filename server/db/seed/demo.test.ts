@@ -24,26 +24,59 @@ describe("demo seed", () => {
 
     const lead = await agentFor(t.app);
     const person = DEMO_SIGN_INS.people.find((p) => p.role === "lead-tech")!;
-    expect((await lead.post("/api/auth/sign-in", { email: person.email, password: DEMO_SIGN_INS.password })).status).toBe(200);
+    expect(
+      (await lead.post("/api/auth/sign-in", { email: person.email, password: DEMO_SIGN_INS.password })).status,
+    ).toBe(200);
     const [store] = (await lead.get("/api/stores")).body.stores;
     expect(store.name).toBe("Larkspur Market – Cedar Hollow");
     const detail = (await lead.get(`/api/stores/${store.id}`)).body;
-    expect(detail.systems.map((s: { refrigerantId: string }) => s.refrigerantId).sort()).toEqual(["R-404A", "R-448A", "R-744"]);
-    expect(detail.currentPlan).toMatchObject({ calibrated: true, source: "image", metresPerPixel: 0.05, widthM: 60, heightM: 36 });
+    expect(detail.systems.map((s: { refrigerantId: string }) => s.refrigerantId).sort()).toEqual([
+      "R-404A",
+      "R-448A",
+      "R-744",
+    ]);
+    expect(detail.currentPlan).toMatchObject({
+      calibrated: true,
+      source: "image",
+      metresPerPixel: 0.05,
+      widthM: 60,
+      heightM: 36,
+    });
 
     const { fixtures } = (await lead.get(`/api/plans/${detail.currentPlan.id}/fixtures`)).body;
     expect(fixtures.length).toBeGreaterThanOrEqual(38);
     expect(fixtures.length).toBeLessThanOrEqual(48);
     const kinds = new Set(fixtures.map((f: { kind: string }) => f.kind));
-    for (const k of ["open-case", "island-case", "door-case", "walk-in-cooler", "walk-in-freezer", "machine-room", "wall", "gondola", "checkout", "benign-zone", "line-set-drop", "valve", "coil"]) {
+    for (const k of [
+      "open-case",
+      "island-case",
+      "door-case",
+      "walk-in-cooler",
+      "walk-in-freezer",
+      "machine-room",
+      "wall",
+      "gondola",
+      "checkout",
+      "benign-zone",
+      "line-set-drop",
+      "valve",
+      "coil",
+    ]) {
       expect(kinds, k).toContain(k);
     }
     const zone = fixtures.find((f: { kind: string }) => f.kind === "benign-zone");
     expect(zone.typicalPpm).toBe(3);
-    const rooms = fixtures.filter((f: { kind: string }) => ["walk-in-cooler", "walk-in-freezer", "machine-room"].includes(f.kind));
+    const rooms = fixtures.filter((f: { kind: string }) =>
+      ["walk-in-cooler", "walk-in-freezer", "machine-room"].includes(f.kind),
+    );
     expect(rooms.every((r: { door: unknown }) => r.door !== null)).toBe(true);
-    const airVolumes = fixtures.filter((f: { kind: keyof typeof FIXTURE_FAMILY }) => FIXTURE_FAMILY[f.kind] === "air-volume" && f.kind !== "machine-room");
-    expect(airVolumes.every((f: { systemId: string | null; hasFans: boolean }) => f.systemId !== null && f.hasFans)).toBe(true);
+    const airVolumes = fixtures.filter(
+      (f: { kind: keyof typeof FIXTURE_FAMILY }) =>
+        FIXTURE_FAMILY[f.kind] === "air-volume" && f.kind !== "machine-room",
+    );
+    expect(
+      airVolumes.every((f: { systemId: string | null; hasFans: boolean }) => f.systemId !== null && f.hasFans),
+    ).toBe(true);
 
     // The drawing is served through the authorized route.
     const img = await lead.agent.get(detail.currentPlan.image.thumbUrl);
@@ -56,7 +89,9 @@ describe("demo records", () => {
   it("show a true picture on Today: one system over threshold with an open finding, one repaired and verified, an inspection due soon", async () => {
     const engineer = await agentFor(t.app);
     const person = DEMO_SIGN_INS.people.find((p) => p.role === "engineer")!;
-    expect((await engineer.post("/api/auth/sign-in", { email: person.email, password: DEMO_SIGN_INS.password })).status).toBe(200);
+    expect(
+      (await engineer.post("/api/auth/sign-in", { email: person.email, password: DEMO_SIGN_INS.password })).status,
+    ).toBe(200);
     const today = (await engineer.get("/api/today")).body;
     expect(today.overThreshold).toHaveLength(1);
     const over = today.overThreshold[0];
@@ -66,9 +101,14 @@ describe("demo records", () => {
     const repair = today.due.find((d: { kind: string }) => d.kind === "repair");
     expect(repair).toMatchObject({ systemId: over.systemId, daysLeft: 18 }); // learned 12 days ago, 30 days to repair [S:R4]
     // The open leak first (it has a deadline), then the verified repair waiting for an engineer to close it.
-    expect(today.openFindings.map((f: { status: string; deadline: string | null }) => [f.status, f.deadline])).toEqual([["confirmed", repair.dueOn], ["verified", null]]);
+    expect(today.openFindings.map((f: { status: string; deadline: string | null }) => [f.status, f.deadline])).toEqual([
+      ["confirmed", repair.dueOn],
+      ["verified", null],
+    ]);
     expect(today.openFindings[0].systemId).toBe(over.systemId);
-    const inspection = today.due.find((d: { kind: string; systemId: string }) => d.kind === "inspection" && d.systemId === over.systemId);
+    const inspection = today.due.find(
+      (d: { kind: string; systemId: string }) => d.kind === "inspection" && d.systemId === over.systemId,
+    );
     // Quarterly since the first breach 88 days ago: three calendar months are 89–92 days [M].
     expect(inspection.daysLeft).toBeGreaterThanOrEqual(1);
     expect(inspection.daysLeft).toBeLessThanOrEqual(4);

@@ -29,25 +29,53 @@ export async function seedDemoIfEmpty(ctx: AppContext): Promise<boolean> {
 
     const [company] = await tx
       .insert(companies)
-      .values({ name: "Larkspur Market", lengthUnit: "ft-in", massUnit: "lb", ruleProfile: "us-federal", leakRateMethod: "annualizing" })
+      .values({
+        name: "Larkspur Market",
+        lengthUnit: "ft-in",
+        massUnit: "lb",
+        ruleProfile: "us-federal",
+        leakRateMethod: "annualizing",
+      })
       .returning();
     const [store] = await tx
       .insert(stores)
-      .values({ companyId: company.id, name: "Larkspur Market – Cedar Hollow", address: "1180 Orchard Bend Road, Cedar Hollow", timeZone: "America/Chicago" })
+      .values({
+        companyId: company.id,
+        name: "Larkspur Market – Cedar Hollow",
+        address: "1180 Orchard Bend Road, Cedar Hollow",
+        timeZone: "America/Chicago",
+      })
       .returning();
     const passwordHash = await bcrypt.hash(DEMO_SIGN_INS.password, ctx.config.bcryptCost);
     let leadTechId: string | null = null;
     const people = {} as Record<Role, string>;
     for (const person of DEMO_SIGN_INS.people) {
-      const [user] = await tx.insert(users).values({ email: person.email, name: person.name, passwordHash }).returning();
-      const [m] = await tx.insert(memberships).values({ companyId: company.id, userId: user.id, role: person.role }).returning();
-      if (person.role === "store-contact") await tx.insert(membershipStores).values({ membershipId: m.id, storeId: store.id });
+      const [user] = await tx
+        .insert(users)
+        .values({ email: person.email, name: person.name, passwordHash })
+        .returning();
+      const [m] = await tx
+        .insert(memberships)
+        .values({ companyId: company.id, userId: user.id, role: person.role })
+        .returning();
+      if (person.role === "store-contact")
+        await tx.insert(membershipStores).values({ membershipId: m.id, storeId: store.id });
       if (person.role === "lead-tech") leadTechId = user.id;
       people[person.role] = user.id;
     }
     await seedDemoLayout(ctx, tx, { companyId: company.id, storeId: store.id, createdById: leadTechId });
     await seedDemoCompliance(tx, { companyId: company.id, storeId: store.id, timeZone: store.timeZone, people });
-    await seedDemoSweeps(tx, { companyId: company.id, storeId: store.id, technicianId: people.technician, engineerId: people.engineer, now: new Date() }, store.timeZone);
+    await seedDemoSweeps(
+      tx,
+      {
+        companyId: company.id,
+        storeId: store.id,
+        technicianId: people.technician,
+        engineerId: people.engineer,
+        now: new Date(),
+      },
+      store.timeZone,
+    );
     return true;
   });
 }

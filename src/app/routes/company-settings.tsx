@@ -17,9 +17,14 @@ export function Component() {
   const settings = useCompanySettings();
   return (
     <>
-      <PageHeader title="Company settings" description="Units, the rule profile and the checks the company works under." />
+      <PageHeader
+        title="Company settings"
+        description="Units, the rule profile and the checks the company works under."
+      />
       {settings.isPending ? <Spinner label="Loading settings…" /> : null}
-      {settings.isError ? <QueryError error={settings.error} what="the settings" onRetry={() => void settings.refetch()} /> : null}
+      {settings.isError ? (
+        <QueryError error={settings.error} what="the settings" onRetry={() => void settings.refetch()} />
+      ) : null}
       {settings.data ? (
         <CompanySettingsForm
           // A fresh form per company, so a switch never shows the last company's values.
@@ -30,7 +35,12 @@ export function Component() {
           onSaved={() => void queryClient.invalidateQueries({ queryKey: authKeys.session() })}
         />
       ) : null}
-      {settings.data ? <CustomProfileSection key={`custom-${membership.companyId}`} editable={can(membership.role, "settings.manage")} /> : null}
+      {settings.data ? (
+        <CustomProfileSection
+          key={`custom-${membership.companyId}`}
+          editable={can(membership.role, "settings.manage")}
+        />
+      ) : null}
     </>
   );
 }

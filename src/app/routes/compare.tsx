@@ -31,7 +31,8 @@ export function Component() {
   const plans = useStorePlans(storeId);
   const store = stores.data?.find((s) => s.id === storeId);
   const timeZone = store?.timeZone ?? "UTC";
-  const day = (iso: string) => new Intl.DateTimeFormat("en-GB", { timeZone, dateStyle: "medium" }).format(new Date(iso));
+  const day = (iso: string) =>
+    new Intl.DateTimeFormat("en-GB", { timeZone, dateStyle: "medium" }).format(new Date(iso));
   useDocumentTitle(store ? `Compare · ${store.name}` : "Compare sweeps");
   const t = trends.data;
   const aId = t?.a ?? null;
@@ -46,7 +47,15 @@ export function Component() {
   const fixB = usePlanFixtures(planB?.id);
   const [wrapRef, width] = useWidth<HTMLDivElement>();
 
-  const { scale, paint } = useMemo(() => concentrationPaint([...(A.data?.readings ?? []), ...(B.data?.readings ?? [])].map((r) => r.ppm), 2, true), [A.data, B.data]);
+  const { scale, paint } = useMemo(
+    () =>
+      concentrationPaint(
+        [...(A.data?.readings ?? []), ...(B.data?.readings ?? [])].map((r) => r.ppm),
+        2,
+        true,
+      ),
+    [A.data, B.data],
+  );
   const diff = useMemo(() => {
     if (!A.data || !B.data || !planA || !planB || !plans.data) return null;
     const align = alignmentBetween(plans.data, planA.id, planB.id);
@@ -55,7 +64,14 @@ export function Component() {
     return { grid, ds, paint: { lut: DIFFERENCE_LUT, index: ds.index } };
   }, [A.data, B.data, planA, planB, plans.data]);
 
-  const overlay = (f: typeof fixA.data) => (f?.fixtures ?? []).map((x) => ({ id: x.id, kind: x.kind, label: x.label, polygon: "polygon" in x ? x.polygon : undefined, point: "point" in x ? x.point : undefined }));
+  const overlay = (f: typeof fixA.data) =>
+    (f?.fixtures ?? []).map((x) => ({
+      id: x.id,
+      kind: x.kind,
+      label: x.label,
+      polygon: "polygon" in x ? x.polygon : undefined,
+      point: "point" in x ? x.point : undefined,
+    }));
   const maxW = Math.max(planA?.widthM ?? 1, planB?.widthM ?? 1);
   const half = Math.floor((width - 16) / 2);
   const pick = (key: "a" | "b", value: string) => {
@@ -65,7 +81,8 @@ export function Component() {
     setSearch(next, { replace: true });
   };
 
-  if (trends.isError) return <QueryError error={trends.error} what="the comparison" onRetry={() => void trends.refetch()} />;
+  if (trends.isError)
+    return <QueryError error={trends.error} what="the comparison" onRetry={() => void trends.refetch()} />;
   if (!t) return <Spinner label="Gathering the store's sweeps…" />;
   const options = t.sweeps.map((s) => ({ value: s.id, label: day(s.startedAt) }));
   const ia = t.sweeps.findIndex((s) => s.id === aId);
@@ -73,10 +90,23 @@ export function Component() {
 
   return (
     <>
-      <PageHeader title={`Compare sweeps — ${store?.name ?? "store"}`} description="Two sweeps side by side at the same scale and colours, the difference between them, and each fixture over the last 12 months." />
+      <PageHeader
+        title={`Compare sweeps — ${store?.name ?? "store"}`}
+        description="Two sweeps side by side at the same scale and colours, the difference between them, and each fixture over the last 12 months."
+      />
       <div className="mb-4 flex flex-wrap gap-4">
-        <Select label="Earlier sweep" options={options} value={aId ?? ""} onChange={(e) => pick("a", e.currentTarget.value)} />
-        <Select label="Later sweep" options={options} value={bId ?? ""} onChange={(e) => pick("b", e.currentTarget.value)} />
+        <Select
+          label="Earlier sweep"
+          options={options}
+          value={aId ?? ""}
+          onChange={(e) => pick("a", e.currentTarget.value)}
+        />
+        <Select
+          label="Later sweep"
+          options={options}
+          value={bId ?? ""}
+          onChange={(e) => pick("b", e.currentTarget.value)}
+        />
       </div>
       <div ref={wrapRef} className="grid grid-cols-2 gap-4" data-testid="compare-side-by-side">
         {[
@@ -85,7 +115,10 @@ export function Component() {
         ].map(({ s, an, plan, fx, title }) => (
           <figure key={title}>
             <figcaption className="mb-1 font-bold">
-              {title}: {s ? day(s.startedAt) : "—"} {an.data ? `· ${an.data.candidates.length} suspect spot${an.data.candidates.length === 1 ? "" : "s"}` : ""}
+              {title}: {s ? day(s.startedAt) : "—"}{" "}
+              {an.data
+                ? `· ${an.data.candidates.length} suspect spot${an.data.candidates.length === 1 ? "" : "s"}`
+                : ""}
             </figcaption>
             {an.data && plan ? (
               <FieldCanvas
@@ -111,12 +144,20 @@ export function Component() {
         ))}
       </div>
       <div className="mt-3">
-        <RampLegend title="Both maps: lag-corrected concentration (log scale)" lut={paint.lut} position={scale.position} ticks={scale.ticks()} />
+        <RampLegend
+          title="Both maps: lag-corrected concentration (log scale)"
+          lut={paint.lut}
+          position={scale.position}
+          ticks={scale.ticks()}
+        />
       </div>
       <section className="mt-6">
         <h2 className="mb-2 text-xl font-bold">Difference (later minus earlier)</h2>
         {diff && planB && B.data ? (
-          <div className="grid items-start gap-4 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]" data-testid="difference-map">
+          <div
+            className="grid items-start gap-4 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]"
+            data-testid="difference-map"
+          >
             <FieldCanvas
               label="Difference map"
               widthM={planB.widthM ?? 1}
@@ -132,8 +173,16 @@ export function Component() {
               width={Math.round(width * 0.64)}
             />
             <div>
-              <RampLegend title="Change in ppm (blue: lower now, copper: higher now)" lut={DIFFERENCE_LUT} position={(v) => diff.ds.index(v) / 255} ticks={diff.ds.ticks()} />
-              <p className="mt-2 text-sm text-muted">Largest change {diff.grid.maxAbs.toFixed(1)} ppm. Areas either sweep left unsampled are hatched: no change can be told there.</p>
+              <RampLegend
+                title="Change in ppm (blue: lower now, copper: higher now)"
+                lut={DIFFERENCE_LUT}
+                position={(v) => diff.ds.index(v) / 255}
+                ticks={diff.ds.ticks()}
+              />
+              <p className="mt-2 text-sm text-muted">
+                Largest change {diff.grid.maxAbs.toFixed(1)} ppm. Areas either sweep left unsampled are hatched: no
+                change can be told there.
+              </p>
             </div>
           </div>
         ) : (
@@ -142,7 +191,10 @@ export function Component() {
       </section>
       <section className="mt-6">
         <h2 className="mb-2 text-xl font-bold">Fixtures over the last 12 months</h2>
-        <p className="mb-2 text-sm text-muted">Peak and mean ppm of the field around each fixture, per sweep; the fixtures that got worse from the earlier to the later sweep first.</p>
+        <p className="mb-2 text-sm text-muted">
+          Peak and mean ppm of the field around each fixture, per sweep; the fixtures that got worse from the earlier to
+          the later sweep first.
+        </p>
         <div className="overflow-x-auto">
           <table className="w-full text-sm" data-testid="fixture-trends">
             <thead>
@@ -162,11 +214,21 @@ export function Component() {
                   <tr key={f.id} className="border-t border-line">
                     <td className="p-2 font-bold">{f.label}</td>
                     <td className="p-2">
-                      <TrendSparkline values={f.levels.map((l) => (l ? l.peakPpm : null))} highlight={[ia, ib]} label={`${f.label}: peak ppm per sweep`} />
+                      <TrendSparkline
+                        values={f.levels.map((l) => (l ? l.peakPpm : null))}
+                        highlight={[ia, ib]}
+                        label={`${f.label}: peak ppm per sweep`}
+                      />
                     </td>
-                    <td className="p-2">{la ? `${la.peakPpm.toFixed(1)} / ${la.meanPpm.toFixed(1)}` : "not sampled"}</td>
-                    <td className="p-2">{lb ? `${lb.peakPpm.toFixed(1)} / ${lb.meanPpm.toFixed(1)}` : "not sampled"}</td>
-                    <td className={`p-2 font-bold ${f.change !== null && f.change > 1 ? "text-danger" : f.change !== null && f.change < -1 ? "text-ok" : ""}`}>
+                    <td className="p-2">
+                      {la ? `${la.peakPpm.toFixed(1)} / ${la.meanPpm.toFixed(1)}` : "not sampled"}
+                    </td>
+                    <td className="p-2">
+                      {lb ? `${lb.peakPpm.toFixed(1)} / ${lb.meanPpm.toFixed(1)}` : "not sampled"}
+                    </td>
+                    <td
+                      className={`p-2 font-bold ${f.change !== null && f.change > 1 ? "text-danger" : f.change !== null && f.change < -1 ? "text-ok" : ""}`}
+                    >
                       {f.change === null ? "—" : `${f.change > 0 ? "+" : ""}${f.change.toFixed(1)} ppm`}
                     </td>
                   </tr>

@@ -30,7 +30,9 @@ export function Component() {
       <PageHeader
         title="Detectors"
         description="The company's leak detectors: their lag figures correct where each reading's air was sampled, and an overdue check is flagged when a sweep starts."
-        actions={canManage && editing === null ? <Button onClick={() => setEditing("new")}>Add a detector</Button> : null}
+        actions={
+          canManage && editing === null ? <Button onClick={() => setEditing("new")}>Add a detector</Button> : null
+        }
       />
       {editing ? (
         <section className="mb-6 rounded-md bg-surface p-4 edge">
@@ -39,7 +41,13 @@ export function Component() {
         </section>
       ) : null}
       <label className="mb-3 flex min-h-11 items-center gap-2">
-        <input type="checkbox" className="size-5" checked={showArchived} onChange={(e) => setShowArchived(e.target.checked)} /> Show archived
+        <input
+          type="checkbox"
+          className="size-5"
+          checked={showArchived}
+          onChange={(e) => setShowArchived(e.target.checked)}
+        />{" "}
+        Show archived
       </label>
       {list.isPending ? <Spinner label="Loading detectors…" /> : null}
       {list.isError ? <QueryError error={list.error} what="the detectors" onRetry={() => void list.refetch()} /> : null}
@@ -48,24 +56,46 @@ export function Component() {
           <table className="w-full border-collapse text-left">
             <thead>
               <tr className="edge border-x-0 border-t-0">
-                {["Name", "Principle", "Delay", "Time constant", "Alarm", "Display", "Check due", ""].map((h) => <th key={h} className="p-2">{h}</th>)}
+                {["Name", "Principle", "Delay", "Time constant", "Alarm", "Display", "Check due", ""].map((h) => (
+                  <th key={h} className="p-2">
+                    {h}
+                  </th>
+                ))}
               </tr>
             </thead>
             <tbody>
               {list.data.map((d) => (
-                <tr key={d.id} id={`detector-${d.id}`} className={`edge border-x-0 border-t-0 ${hash === `#detector-${d.id}` ? "bg-accent-soft" : ""}`}>
-                  <td className="p-2 font-bold">{d.name}{d.archivedAt ? " (archived)" : ""}</td>
+                <tr
+                  key={d.id}
+                  id={`detector-${d.id}`}
+                  className={`edge border-x-0 border-t-0 ${hash === `#detector-${d.id}` ? "bg-accent-soft" : ""}`}
+                >
+                  <td className="p-2 font-bold">
+                    {d.name}
+                    {d.archivedAt ? " (archived)" : ""}
+                  </td>
                   <td className="p-2">{PRINCIPLE_LABELS[d.principle]}</td>
                   <td className="p-2">{d.transportDelayS} s</td>
                   <td className="p-2">{d.timeConstantS} s</td>
                   <td className="p-2">{d.alarmPpm} ppm</td>
-                  <td className="p-2">{d.levelScale?.length ? `${d.levelScale.length} levels (${d.levelScale.map((b) => b.level).join(", ")})` : "ppm"}</td>
-                  <td className={`p-2 ${d.overdue ? "font-bold text-danger" : ""}`}>{d.checkDueOn ?? "never checked"}{d.overdue ? " — overdue" : ""}</td>
+                  <td className="p-2">
+                    {d.levelScale?.length
+                      ? `${d.levelScale.length} levels (${d.levelScale.map((b) => b.level).join(", ")})`
+                      : "ppm"}
+                  </td>
+                  <td className={`p-2 ${d.overdue ? "font-bold text-danger" : ""}`}>
+                    {d.checkDueOn ?? "never checked"}
+                    {d.overdue ? " — overdue" : ""}
+                  </td>
                   <td className="p-2">
                     {canManage ? (
                       <div className="flex gap-2">
-                        <Button variant="secondary" onClick={() => setEditing(d)}>Edit</Button>
-                        <Button variant="quiet" onClick={() => archive.mutate({ id: d.id, archived: !d.archivedAt })}>{d.archivedAt ? "Restore" : "Archive"}</Button>
+                        <Button variant="secondary" onClick={() => setEditing(d)}>
+                          Edit
+                        </Button>
+                        <Button variant="quiet" onClick={() => archive.mutate({ id: d.id, archived: !d.archivedAt })}>
+                          {d.archivedAt ? "Restore" : "Archive"}
+                        </Button>
                       </div>
                     ) : null}
                   </td>

@@ -4,7 +4,7 @@ import { createMemoryRouter, RouterProvider } from "react-router";
 import { RootErrorPage } from "./error-page";
 
 function Broken(): never {
-  throw new Error("relation \"memberships\" does not exist at Parser.parse (/srv/app/node_modules/pg/lib/parser.js:12)");
+  throw new Error('relation "memberships" does not exist at Parser.parse (/srv/app/node_modules/pg/lib/parser.js:12)');
 }
 
 describe("error page", () => {

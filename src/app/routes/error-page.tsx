@@ -34,7 +34,10 @@ function ErrorMessage() {
   return (
     <section className="space-y-4 py-6">
       <h1 className="text-3xl font-bold">Something went wrong</h1>
-      <p>This page could not be shown. Reloading usually helps; if it keeps happening, tell your Plumeline administrator what you were doing.</p>
+      <p>
+        This page could not be shown. Reloading usually helps; if it keeps happening, tell your Plumeline administrator
+        what you were doing.
+      </p>
       <div className="flex flex-wrap gap-3">
         <button
           type="button"

@@ -18,17 +18,38 @@ export function Component() {
   const units = useUnitPreferences();
   useDocumentTitle("Finding");
   if (finding.isPending) return <Spinner label="Loading the finding…" />;
-  if (finding.isError) return <QueryError error={finding.error} what="the finding" onRetry={() => void finding.refetch()} />;
+  if (finding.isError)
+    return <QueryError error={finding.error} what="the finding" onRetry={() => void finding.refetch()} />;
   const f = finding.data;
   return (
     <>
       <PageHeader
         title={`Finding: ${f.systemName ?? "no system"}`}
-        description={<>{f.storeName} · found {f.events[0]?.on} by {f.foundBy}{f.systemId ? <> · <Link className="text-accent underline" to={`/systems/${f.systemId}`}>system records</Link></> : null}</>}
+        description={
+          <>
+            {f.storeName} · found {f.events[0]?.on} by {f.foundBy}
+            {f.systemId ? (
+              <>
+                {" "}
+                ·{" "}
+                <Link className="text-accent underline" to={`/systems/${f.systemId}`}>
+                  system records
+                </Link>
+              </>
+            ) : null}
+          </>
+        }
       />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
         <FindingView finding={f} canAddPhoto={can(membership.role, "findings.record")} lengthUnit={units.length} />
-        <div><FindingActions key={f.events.length} finding={f} role={membership.role} today={localDateOf(new Date(), f.timeZone)} /></div>
+        <div>
+          <FindingActions
+            key={f.events.length}
+            finding={f}
+            role={membership.role}
+            today={localDateOf(new Date(), f.timeZone)}
+          />
+        </div>
       </div>
     </>
   );

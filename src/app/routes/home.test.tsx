@@ -35,7 +35,10 @@ describe("stores page", () => {
   });
 
   it("shows an empty state, worded for a store contact, when there are none", async () => {
-    stubFetch({ "GET /api/auth/session": { body: sessionFor("store-contact") }, "GET /api/stores": { body: { stores: [] } } });
+    stubFetch({
+      "GET /api/auth/session": { body: sessionFor("store-contact") },
+      "GET /api/stores": { body: { stores: [] } },
+    });
     renderApp("/");
     expect(await screen.findByText("No stores yet")).toBeTruthy();
     expect(screen.getByText(/No store has been shared with you/)).toBeTruthy();

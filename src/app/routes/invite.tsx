@@ -36,7 +36,11 @@ export function Component() {
   return (
     <>
       <h1 className="mb-6 text-3xl font-bold">Join {invitation.data.companyName}</h1>
-      <AcceptInvitationForm token={token} preview={invitation.data} onAccepted={() => void navigate("/", { replace: true })} />
+      <AcceptInvitationForm
+        token={token}
+        preview={invitation.data}
+        onAccepted={() => void navigate("/", { replace: true })}
+      />
     </>
   );
 }

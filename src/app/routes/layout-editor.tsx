@@ -31,7 +31,8 @@ export function Component() {
     </Link>
   );
   if (plan.isError) return <QueryError error={plan.error} what="the plan" onRetry={() => void plan.refetch()} />;
-  if (fixtures.isError) return <QueryError error={fixtures.error} what="the fixtures" onRetry={() => void fixtures.refetch()} />;
+  if (fixtures.isError)
+    return <QueryError error={fixtures.error} what="the fixtures" onRetry={() => void fixtures.refetch()} />;
   if (plan.isPending || fixtures.isPending || systems.isPending) return <Spinner label="Opening the layout editor…" />;
   const p = plan.data;
   if (!fixtures.data.bounds) {
@@ -39,7 +40,8 @@ export function Component() {
       <>
         {back}
         <Alert tone="note" title="Set the scale first">
-          Fixtures are stored in metres, so the drawing needs its scale before anything can be drawn on it. Set it on the store page.
+          Fixtures are stored in metres, so the drawing needs its scale before anything can be drawn on it. Set it on
+          the store page.
         </Alert>
       </>
     );
@@ -48,8 +50,18 @@ export function Component() {
   return (
     <>
       <p className="mb-1">{back}</p>
-      <PageHeader title={`Layout · ${store.data?.name ?? ""}`} description={`Plan version ${p.version}. Everything is saved in metres as you go.`} />
-      <LayoutEditor key={`${p.id}`} plan={p} initial={fixtures.data} systems={(systems.data ?? []).map((s) => ({ id: s.id, name: s.name }))} preference={units.length} canEdit={canEdit} />
+      <PageHeader
+        title={`Layout · ${store.data?.name ?? ""}`}
+        description={`Plan version ${p.version}. Everything is saved in metres as you go.`}
+      />
+      <LayoutEditor
+        key={`${p.id}`}
+        plan={p}
+        initial={fixtures.data}
+        systems={(systems.data ?? []).map((s) => ({ id: s.id, name: s.name }))}
+        preference={units.length}
+        canEdit={canEdit}
+      />
     </>
   );
 }

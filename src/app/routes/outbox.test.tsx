@@ -23,7 +23,11 @@ describe("outbox page", () => {
         body: {
           messages: [
             message("6a7b8c9d-0e1f-4a2b-8c3d-4e5f6a7b8c9d", "Choose a new password", "2026-11-30T10:00:00.000Z"),
-            message("7b8c9d0e-1f2a-4b3c-9d4e-5f6a7b8c9d0e", "You are invited to Northfield Cold Care", "2026-11-30T09:00:00.000Z"),
+            message(
+              "7b8c9d0e-1f2a-4b3c-9d4e-5f6a7b8c9d0e",
+              "You are invited to Northfield Cold Care",
+              "2026-11-30T09:00:00.000Z",
+            ),
           ],
         },
       },
@@ -34,7 +38,9 @@ describe("outbox page", () => {
     expect(subjects).toEqual(["Choose a new password", "You are invited to Northfield Cold Care"]);
 
     fireEvent.click(screen.getByRole("link", { name: /Choose a new password/ }));
-    const link = await screen.findByRole("link", { name: "http://127.0.0.1:5180/reset-password/abcdefghijklmnopqrstu" });
+    const link = await screen.findByRole("link", {
+      name: "http://127.0.0.1:5180/reset-password/abcdefghijklmnopqrstu",
+    });
     expect(link.getAttribute("href")).toBe("http://127.0.0.1:5180/reset-password/abcdefghijklmnopqrstu");
   });
 

@@ -34,7 +34,9 @@ export function Component() {
         }
       />
       {outbox.isPending ? <Spinner label="Loading messages…" /> : null}
-      {outbox.isError ? <QueryError error={outbox.error} what="the Outbox" onRetry={() => void outbox.refetch()} /> : null}
+      {outbox.isError ? (
+        <QueryError error={outbox.error} what="the Outbox" onRetry={() => void outbox.refetch()} />
+      ) : null}
       {outbox.data ? (
         <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
           <OutboxList messages={outbox.data} selectedId={messageId} linkTo={(id) => `/outbox/${id}`} />

@@ -13,7 +13,10 @@ export function Component() {
   const settings = useCompanySettings();
   return (
     <>
-      <PageHeader title="Profile" description="Your name, and the units you want figures shown in. Your choice overrides the company default for you only." />
+      <PageHeader
+        title="Profile"
+        description="Your name, and the units you want figures shown in. Your choice overrides the company default for you only."
+      />
       <ProfileForm user={user} companyDefaults={settings.data} onSaved={(info) => updateSession(queryClient, info)} />
     </>
   );

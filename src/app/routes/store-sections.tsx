@@ -20,8 +20,26 @@ export interface StoreSectionProps {
  * findings, records) without the store page knowing its insides. Keep one line per feature.
  */
 export const STORE_SECTIONS: readonly { id: string; Component: ComponentType<StoreSectionProps> }[] = [
-  { id: "plan", Component: ({ store, role, units }) => <PlanSection storeId={store.id} canEdit={can(role, "plans.edit") && !store.archivedAt} preference={units.length} /> },
-  { id: "systems", Component: ({ store, role, units }) => <SystemsSection storeId={store.id} canEdit={can(role, "stores.edit") && !store.archivedAt} massUnit={units.mass} /> },
+  {
+    id: "plan",
+    Component: ({ store, role, units }) => (
+      <PlanSection
+        storeId={store.id}
+        canEdit={can(role, "plans.edit") && !store.archivedAt}
+        preference={units.length}
+      />
+    ),
+  },
+  {
+    id: "systems",
+    Component: ({ store, role, units }) => (
+      <SystemsSection
+        storeId={store.id}
+        canEdit={can(role, "stores.edit") && !store.archivedAt}
+        massUnit={units.mass}
+      />
+    ),
+  },
   { id: "sweeps", Component: ({ store }) => <StoreSweepsSection storeId={store.id} timeZone={store.timeZone} /> },
   { id: "records", Component: ({ store }) => <StoreRecordsSection storeId={store.id} /> },
 ];

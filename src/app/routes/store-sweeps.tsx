@@ -16,27 +16,46 @@ export function Component() {
   const store = stores.data?.find((s) => s.id === storeId);
   useDocumentTitle(store ? `Sweeps · ${store.name}` : "Sweeps");
   const tz = store?.timeZone ?? "UTC";
-  const when = (iso: string) => new Intl.DateTimeFormat("en-GB", { timeZone: tz, dateStyle: "full", timeStyle: "short" }).format(new Date(iso));
-  if (sweeps.isError) return <QueryError error={sweeps.error} what="the sweeps" onRetry={() => void sweeps.refetch()} />;
+  const when = (iso: string) =>
+    new Intl.DateTimeFormat("en-GB", { timeZone: tz, dateStyle: "full", timeStyle: "short" }).format(new Date(iso));
+  if (sweeps.isError)
+    return <QueryError error={sweeps.error} what="the sweeps" onRetry={() => void sweeps.refetch()} />;
   if (!sweeps.data) return <Spinner label="Loading sweeps…" />;
   const list = [...sweeps.data].sort((a, b) => b.startedAt.localeCompare(a.startedAt));
   return (
     <>
       <PageHeader
         title={`Sweeps — ${store?.name ?? "store"}`}
-        actions={list.length > 1 ? <Link className="inline-flex min-h-11 items-center rounded-md edge bg-surface px-4 font-bold no-underline" to={`/stores/${storeId}/compare`}>Compare months</Link> : null}
+        actions={
+          list.length > 1 ? (
+            <Link
+              className="inline-flex min-h-11 items-center rounded-md edge bg-surface px-4 font-bold no-underline"
+              to={`/stores/${storeId}/compare`}
+            >
+              Compare months
+            </Link>
+          ) : null
+        }
       />
       {list.length === 0 ? <EmptyState title="No sweeps yet" /> : null}
       <ul className="space-y-2">
         {list.map((s) => (
-          <li key={s.id} className="flex flex-wrap items-center justify-between gap-2 rounded-md edge bg-surface p-3" data-testid="sweep-row">
+          <li
+            key={s.id}
+            className="flex flex-wrap items-center justify-between gap-2 rounded-md edge bg-surface p-3"
+            data-testid="sweep-row"
+          >
             <div>
               <p className="font-bold">{when(s.startedAt)}</p>
               <p className="text-sm text-muted">
-                {s.technicianName} · {s.detectorName} · fans {s.fans} · {countOf(s.readingCount, "reading")} · {s.status.replace("-", " ")}
+                {s.technicianName} · {s.detectorName} · fans {s.fans} · {countOf(s.readingCount, "reading")} ·{" "}
+                {s.status.replace("-", " ")}
               </p>
             </div>
-            <Link className="inline-flex min-h-11 items-center rounded-md bg-accent px-4 font-bold text-on-accent no-underline" to={`/stores/${storeId}/sweeps/${s.id}/map`}>
+            <Link
+              className="inline-flex min-h-11 items-center rounded-md bg-accent px-4 font-bold text-on-accent no-underline"
+              to={`/stores/${storeId}/sweeps/${s.id}/map`}
+            >
               Open field map
             </Link>
           </li>

@@ -31,7 +31,11 @@ export function Component() {
           ← All stores
         </Link>
       </p>
-      <PageHeader title={s.name} description={s.archivedAt ? "Archived store" : undefined} actions={records && !s.archivedAt ? <StartSweepLink storeId={s.id} /> : undefined} />
+      <PageHeader
+        title={s.name}
+        description={s.archivedAt ? "Archived store" : undefined}
+        actions={records && !s.archivedAt ? <StartSweepLink storeId={s.id} /> : undefined}
+      />
       <div className="space-y-10">
         <StoreSummary store={s} canEdit={can(membership.role, "stores.edit")} />
         {STORE_SECTIONS.map(({ id, Component: Section }) => (

@@ -51,23 +51,38 @@ export function Component() {
   const [wrapRef, width] = useWidth<HTMLDivElement>();
   const store = stores.data?.find((s) => s.id === storeId);
   const timeZone = store?.timeZone ?? "UTC";
-  const zoned = (iso: string) => new Intl.DateTimeFormat("en-GB", { timeZone, dateStyle: "medium", timeStyle: "short" }).format(new Date(iso));
+  const zoned = (iso: string) =>
+    new Intl.DateTimeFormat("en-GB", { timeZone, dateStyle: "medium", timeStyle: "short" }).format(new Date(iso));
   useDocumentTitle(store ? `Field map · ${store.name}` : "Field map");
 
   const a = analysis.data;
-  const { scale, paint } = useMemo(() => concentrationPaint(a?.readings.map((r) => r.ppm) ?? [], sweep.data?.alarmPpm ?? 2, log), [a, sweep.data?.alarmPpm, log]);
+  const { scale, paint } = useMemo(
+    () => concentrationPaint(a?.readings.map((r) => r.ppm) ?? [], sweep.data?.alarmPpm ?? 2, log),
+    [a, sweep.data?.alarmPpm, log],
+  );
   const label = useMemo(() => {
     const m = new Map((fixtures.data?.fixtures ?? []).map((f) => [f.id, f.label || f.kind]));
     return (id: string | null) => (id ? (m.get(id) ?? null) : null);
   }, [fixtures.data]);
   const overlayFixtures = useMemo(
-    () => (fixtures.data?.fixtures ?? []).map((f) => ({ id: f.id, kind: f.kind, label: f.label, polygon: "polygon" in f ? f.polygon : undefined, point: "point" in f ? f.point : undefined })),
+    () =>
+      (fixtures.data?.fixtures ?? []).map((f) => ({
+        id: f.id,
+        kind: f.kind,
+        label: f.label,
+        polygon: "polygon" in f ? f.polygon : undefined,
+        point: "point" in f ? f.point : undefined,
+      })),
     [fixtures.data],
   );
   const sweepFindings = (findings.data ?? []).filter((f) => f.sweepId === sweepId);
   const findingRanks = new Set(
     // a finding from this sweep inside the spot's search radius already answers it
-    (a?.candidates ?? []).filter((c) => sweepFindings.some((f) => f.x !== null && f.y !== null && Math.hypot(f.x - c.x, f.y - c.y) <= c.radius)).map((c) => c.rank),
+    (a?.candidates ?? [])
+      .filter((c) =>
+        sweepFindings.some((f) => f.x !== null && f.y !== null && Math.hypot(f.x - c.x, f.y - c.y) <= c.radius),
+      )
+      .map((c) => c.rank),
   );
   const today = new Intl.DateTimeFormat("sv-SE", { timeZone }).format(new Date());
 
@@ -84,10 +99,16 @@ export function Component() {
         description={`${zoned(s.startedAt)} · ${s.technicianName} · ${s.detectorName} · fans ${s.fans}${s.defrost ? ", defrost" : ""} · ${countOf(s.readingCount, "reading")} · ${s.status.replace("-", " ")}`}
         actions={
           <>
-            <Link className="inline-flex min-h-11 items-center rounded-md edge bg-surface px-4 font-bold no-underline" to={`/stores/${storeId}/compare?b=${sweepId}`}>
+            <Link
+              className="inline-flex min-h-11 items-center rounded-md edge bg-surface px-4 font-bold no-underline"
+              to={`/stores/${storeId}/compare?b=${sweepId}`}
+            >
               Compare with the month before
             </Link>
-            <Link className="inline-flex min-h-11 items-center rounded-md edge bg-surface px-4 font-bold no-underline" to={`/stores/${storeId}/sweeps`}>
+            <Link
+              className="inline-flex min-h-11 items-center rounded-md edge bg-surface px-4 font-bold no-underline"
+              to={`/stores/${storeId}/sweeps`}
+            >
               All sweeps
             </Link>
             {can(membership.role, "sweeps.review") && s.status === "submitted" ? (
@@ -99,8 +120,12 @@ export function Component() {
         }
       />
       {review.isError ? <Alert tone="error">{review.error.message}</Alert> : null}
-      {s.status === "reviewed" && s.reviewedAt ? <p className="mb-3 text-sm text-ok">Reviewed {zoned(s.reviewedAt)}.</p> : null}
-      {analysis.isError ? <QueryError error={analysis.error} what="the analysis" onRetry={() => void analysis.refetch()} /> : null}
+      {s.status === "reviewed" && s.reviewedAt ? (
+        <p className="mb-3 text-sm text-ok">Reviewed {zoned(s.reviewedAt)}.</p>
+      ) : null}
+      {analysis.isError ? (
+        <QueryError error={analysis.error} what="the analysis" onRetry={() => void analysis.refetch()} />
+      ) : null}
       {a?.stale ? (
         <div className="mb-3">
           <Alert tone="note" title="Readings changed since this map was made">
@@ -130,9 +155,16 @@ export function Component() {
             ) : analysis.isPending ? (
               <Spinner label="Computing the field map on the server…" />
             ) : null}
-            {analysis.isFetching && a ? <p className="absolute right-2 top-2 rounded bg-surface px-2 text-sm">Updating…</p> : null}
+            {analysis.isFetching && a ? (
+              <p className="absolute right-2 top-2 rounded bg-surface px-2 text-sm">Updating…</p>
+            ) : null}
           </div>
-          <RampLegend title={`Lag-corrected concentration, ${log ? "log" : "linear"} scale`} lut={paint.lut} position={scale.position} ticks={scale.ticks()} />
+          <RampLegend
+            title={`Lag-corrected concentration, ${log ? "log" : "linear"} scale`}
+            lut={paint.lut}
+            position={scale.position}
+            ticks={scale.ticks()}
+          />
           <LayerToggles layers={layers} onChange={setLayers} log={log} onLog={setLog} />
           <DelayControl
             detectorDelayS={s.transportDelayS}
@@ -147,7 +179,8 @@ export function Component() {
           />
           {a ? (
             <p className="text-sm text-muted">
-              Background {a.background.ppm.toFixed(1)} ppm · transport delay {a.params.transportDelayS} s, time constant {a.params.timeConstantS} s · computed {zoned(a.computedAt)} in {a.durationMs} ms
+              Background {a.background.ppm.toFixed(1)} ppm · transport delay {a.params.transportDelayS} s, time constant{" "}
+              {a.params.timeConstantS} s · computed {zoned(a.computedAt)} in {a.durationMs} ms
             </p>
           ) : null}
         </div>
@@ -165,7 +198,13 @@ export function Component() {
                 busyRank={makeFinding.isPending ? (makeFinding.variables?.rank ?? null) : null}
                 onMakeFinding={
                   can(membership.role, "findings.record")
-                    ? (spot) => makeFinding.mutate({ ...spot, fixtureIsAirVolume: AIR.has(fixtures.data?.fixtures.find((f) => f.id === spot.fixtureId)?.kind ?? "") })
+                    ? (spot) =>
+                        makeFinding.mutate({
+                          ...spot,
+                          fixtureIsAirVolume: AIR.has(
+                            fixtures.data?.fixtures.find((f) => f.id === spot.fixtureId)?.kind ?? "",
+                          ),
+                        })
                     : undefined
                 }
               />
@@ -185,7 +224,13 @@ export function Component() {
           </section>
           <section>
             <h2 className="mb-2 text-xl font-bold">Findings</h2>
-            <FindingsPanel storeId={storeId} findings={sweepFindings} canRecord={can(membership.role, "findings.record")} today={today} label={label} />
+            <FindingsPanel
+              storeId={storeId}
+              findings={sweepFindings}
+              canRecord={can(membership.role, "findings.record")}
+              today={today}
+              label={label}
+            />
           </section>
           <section>
             <h2 className="mb-2 text-xl font-bold">Report</h2>

@@ -26,24 +26,55 @@ export function Component() {
   const canRecord = can(membership.role, "findings.record");
   useScrollToHash(!!records.data && !findings.isPending);
   if (records.isPending) return <Spinner label="Loading the system's records…" />;
-  if (records.isError) return <QueryError error={records.error} what="the system's records" onRetry={() => void records.refetch()} />;
+  if (records.isError)
+    return <QueryError error={records.error} what="the system's records" onRetry={() => void records.refetch()} />;
   const r = records.data;
   const list = findings.data ?? [];
   return (
     <>
-      <PageHeader title={r.system.name} description={`${r.store.name} · records on the store's calendar (${r.store.timeZone}); today is ${r.today}.`} />
+      <PageHeader
+        title={r.system.name}
+        description={`${r.store.name} · records on the store's calendar (${r.store.timeZone}); today is ${r.today}.`}
+      />
       <div className="space-y-8">
-        <SystemRecords r={r} unit={unit} canRecord={canRecord} canFile={can(membership.role, "compliance.manage")} findings={list.filter((f) => f.status !== "dismissed").map((f) => ({ id: f.id, label: `${f.events[0]?.on ?? ""} ${f.component ? COMPONENT_LABELS[f.component] : "leak"} (${f.status})` }))} />
+        <SystemRecords
+          r={r}
+          unit={unit}
+          canRecord={canRecord}
+          canFile={can(membership.role, "compliance.manage")}
+          findings={list
+            .filter((f) => f.status !== "dismissed")
+            .map((f) => ({
+              id: f.id,
+              label: `${f.events[0]?.on ?? ""} ${f.component ? COMPONENT_LABELS[f.component] : "leak"} (${f.status})`,
+            }))}
+        />
         <section aria-labelledby="sys-findings" className="space-y-3">
-          <h2 id="sys-findings" className="text-xl font-bold">Findings on this system</h2>
-          {list.length === 0 ? <p className="text-muted">No findings.</p> : (
+          <h2 id="sys-findings" className="text-xl font-bold">
+            Findings on this system
+          </h2>
+          {list.length === 0 ? (
+            <p className="text-muted">No findings.</p>
+          ) : (
             <ul className="space-y-1">
               {list.map((f) => (
-                <li key={f.id}><Link className="text-accent underline" to={`/findings/${f.id}`}>{f.events[0]?.on} · {f.component ? COMPONENT_LABELS[f.component] : "component not yet known"} · {f.status}</Link>{f.deadlines[0] ? ` · due ${f.deadlines[0].dueOn}` : ""}</li>
+                <li key={f.id}>
+                  <Link className="text-accent underline" to={`/findings/${f.id}`}>
+                    {f.events[0]?.on} · {f.component ? COMPONENT_LABELS[f.component] : "component not yet known"} ·{" "}
+                    {f.status}
+                  </Link>
+                  {f.deadlines[0] ? ` · due ${f.deadlines[0].dueOn}` : ""}
+                </li>
               ))}
             </ul>
           )}
-          {canRecord ? <NewFindingForm storeId={r.store.id} systemId={r.system.id} onCreated={(id) => navigate(`/findings/${id}`)} /> : null}
+          {canRecord ? (
+            <NewFindingForm
+              storeId={r.store.id}
+              systemId={r.system.id}
+              onCreated={(id) => navigate(`/findings/${id}`)}
+            />
+          ) : null}
         </section>
       </div>
     </>

@@ -4,7 +4,15 @@ import { renderApp } from "../../../tests/helpers/render-client";
 import { sessionFor } from "../../../tests/helpers/session-fixtures";
 import { stubFetch } from "../../../tests/helpers/stub-fetch";
 
-const STORE = { id: "1d2c3b4a-5e6f-4a7b-8c9d-0e1f2a3b4c5d", name: "Maple Street Market", address: "14 Maple Street", timeZone: "America/Chicago", archivedAt: null, createdAt: "2026-01-05T15:00:00.000Z", updatedAt: "2026-01-05T15:00:00.000Z" };
+const STORE = {
+  id: "1d2c3b4a-5e6f-4a7b-8c9d-0e1f2a3b4c5d",
+  name: "Maple Street Market",
+  address: "14 Maple Street",
+  timeZone: "America/Chicago",
+  archivedAt: null,
+  createdAt: "2026-01-05T15:00:00.000Z",
+  updatedAt: "2026-01-05T15:00:00.000Z",
+};
 const TEAM = {
   members: [
     {
@@ -33,7 +41,11 @@ const TEAM = {
 
 describe("team page", () => {
   it("gives an owner the invite form with the company's stores in the picker", async () => {
-    stubFetch({ "GET /api/auth/session": { body: sessionFor("owner") }, "GET /api/team": { body: TEAM }, "GET /api/stores": { body: { stores: [STORE] } } });
+    stubFetch({
+      "GET /api/auth/session": { body: sessionFor("owner") },
+      "GET /api/team": { body: TEAM },
+      "GET /api/stores": { body: { stores: [STORE] } },
+    });
     renderApp("/team");
     const form = await screen.findByRole("form", { name: "Invite a member" });
     fireEvent.change(within(form).getByLabelText("Role"), { target: { value: "store-contact" } });
@@ -43,7 +55,11 @@ describe("team page", () => {
   });
 
   it("shows a technician the members but no invite form and no owner actions", async () => {
-    stubFetch({ "GET /api/auth/session": { body: sessionFor("technician") }, "GET /api/team": { body: TEAM }, "GET /api/stores": { body: { stores: [STORE] } } });
+    stubFetch({
+      "GET /api/auth/session": { body: sessionFor("technician") },
+      "GET /api/team": { body: TEAM },
+      "GET /api/stores": { body: { stores: [STORE] } },
+    });
     renderApp("/team");
     expect(await screen.findByText("ines.varga@northfield.example")).toBeTruthy();
     expect(screen.queryByRole("form", { name: "Invite a member" })).toBeNull();

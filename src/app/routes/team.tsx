@@ -23,7 +23,10 @@ export function Component() {
   if (!allowed) return <NotFound />;
   return (
     <>
-      <PageHeader title="Team" description={`Everyone who works in ${membership.companyName} on Plumeline, and their roles.`} />
+      <PageHeader
+        title="Team"
+        description={`Everyone who works in ${membership.companyName} on Plumeline, and their roles.`}
+      />
       {team.isPending ? <Spinner label="Loading the team…" /> : null}
       {team.isError ? <QueryError error={team.error} what="the team" onRetry={() => void team.refetch()} /> : null}
       {team.data ? (
@@ -32,7 +35,13 @@ export function Component() {
             <h2 id="members-heading" className="text-xl font-bold">
               Members
             </h2>
-            <MembersTable members={team.data.members} stores={stores.data} canManage={canManage} currentUserId={user.id} companyName={membership.companyName} />
+            <MembersTable
+              members={team.data.members}
+              stores={stores.data}
+              canManage={canManage}
+              currentUserId={user.id}
+              companyName={membership.companyName}
+            />
           </section>
           <section aria-labelledby="invitations-heading" className="space-y-3">
             <h2 id="invitations-heading" className="text-xl font-bold">
@@ -40,7 +49,9 @@ export function Component() {
             </h2>
             <InvitationsList invitations={team.data.invitations} stores={stores.data} canManage={canManage} />
           </section>
-          {canManage ? <InviteForm stores={stores.data} storesLoading={stores.isPending} outboxHint={session.outboxEnabled} /> : null}
+          {canManage ? (
+            <InviteForm stores={stores.data} storesLoading={stores.isPending} outboxHint={session.outboxEnabled} />
+          ) : null}
         </div>
       ) : null}
     </>

@@ -13,14 +13,73 @@ const FIND = "3c2d1e0f-9a8b-4c7d-8e6f-5a4b3c2d1e0f";
 // Invented stores; the figures are what the server computed (its own tests check the formulas).
 const today: TodayView = {
   generatedAt: "2026-05-01T12:00:00.000Z",
-  stores: [{ id: A, name: "Maple Street Market", timeZone: "America/Chicago", today: "2026-05-01" }, { id: B, name: "Old Quay Depot", timeZone: "America/Chicago", today: "2026-05-01" }],
-  due: [
-    { kind: "repair", what: "Repair: leak rate 37.6 % on 2026-04-19 is above 20 %", dueOn: "2026-05-19", state: "upcoming", daysLeft: 18, source: "40 CFR 84 subpart C; repair within 30 days", storeId: A, storeName: "Maple Street Market", systemId: SYS, systemName: "Rack A", findingId: null, detectorId: null, link: `/systems/${SYS}` },
-    { kind: "inspection", what: "Leak inspection", dueOn: "2026-05-03", state: "due-soon", daysLeft: 2, source: "[M] quarterly", storeId: B, storeName: "Old Quay Depot", systemId: SYS, systemName: "Rack Q", findingId: null, detectorId: null, link: `/systems/${SYS}` },
+  stores: [
+    { id: A, name: "Maple Street Market", timeZone: "America/Chicago", today: "2026-05-01" },
+    { id: B, name: "Old Quay Depot", timeZone: "America/Chicago", today: "2026-05-01" },
   ],
-  overThreshold: [{ systemId: SYS, systemName: "Rack A", storeId: A, storeName: "Maple Street Market", refrigerantId: "R-448A", percent: 37.6, thresholdPercent: 20, on: "2026-04-19", partTitle: "40 CFR 84 subpart C", source: "[S:R4]", link: `/systems/${SYS}` }],
+  due: [
+    {
+      kind: "repair",
+      what: "Repair: leak rate 37.6 % on 2026-04-19 is above 20 %",
+      dueOn: "2026-05-19",
+      state: "upcoming",
+      daysLeft: 18,
+      source: "40 CFR 84 subpart C; repair within 30 days",
+      storeId: A,
+      storeName: "Maple Street Market",
+      systemId: SYS,
+      systemName: "Rack A",
+      findingId: null,
+      detectorId: null,
+      link: `/systems/${SYS}`,
+    },
+    {
+      kind: "inspection",
+      what: "Leak inspection",
+      dueOn: "2026-05-03",
+      state: "due-soon",
+      daysLeft: 2,
+      source: "[M] quarterly",
+      storeId: B,
+      storeName: "Old Quay Depot",
+      systemId: SYS,
+      systemName: "Rack Q",
+      findingId: null,
+      detectorId: null,
+      link: `/systems/${SYS}`,
+    },
+  ],
+  overThreshold: [
+    {
+      systemId: SYS,
+      systemName: "Rack A",
+      storeId: A,
+      storeName: "Maple Street Market",
+      refrigerantId: "R-448A",
+      percent: 37.6,
+      thresholdPercent: 20,
+      on: "2026-04-19",
+      partTitle: "40 CFR 84 subpart C",
+      source: "[S:R4]",
+      link: `/systems/${SYS}`,
+    },
+  ],
   systems: [],
-  openFindings: [{ id: FIND, storeId: A, storeName: "Maple Street Market", systemId: SYS, systemName: "Rack A", status: "confirmed", component: "brazed-joint", foundOn: "2026-04-18", deadline: "2026-05-19", deadlineSource: "[S:R4]", link: `/findings/${FIND}` }],
+  openFindings: [
+    {
+      id: FIND,
+      storeId: A,
+      storeName: "Maple Street Market",
+      systemId: SYS,
+      systemName: "Rack A",
+      status: "confirmed",
+      component: "brazed-joint",
+      foundOn: "2026-04-18",
+      deadline: "2026-05-19",
+      deadlineSource: "[S:R4]",
+      link: `/findings/${FIND}`,
+    },
+  ],
 };
 
 describe("Today page", () => {
@@ -29,8 +88,15 @@ describe("Today page", () => {
     renderApp("/today");
     const due = await screen.findByRole("table", { name: "Due and overdue" }, { timeout: 5000 });
     const rows = within(due).getAllByRole("row").slice(1);
-    expect(rows.map((r) => within(r).getAllByRole("link")[0].textContent)).toEqual(["Leak inspection", "Repair: leak rate 37.6 % on 2026-04-19 is above 20 %"]);
-    expect(within(due).getByRole("link", { name: /Repair/ }).getAttribute("href")).toBe(`/systems/${SYS}`);
+    expect(rows.map((r) => within(r).getAllByRole("link")[0].textContent)).toEqual([
+      "Leak inspection",
+      "Repair: leak rate 37.6 % on 2026-04-19 is above 20 %",
+    ]);
+    expect(
+      within(due)
+        .getByRole("link", { name: /Repair/ })
+        .getAttribute("href"),
+    ).toBe(`/systems/${SYS}`);
     expect(within(due).getByText(/Rule: 40 CFR 84 subpart C/)).toBeTruthy();
     expect(screen.getByRole("link", { name: "37.6 %" }).getAttribute("href")).toBe(`/systems/${SYS}`);
     expect(screen.getByRole("link", { name: /Brazed joint on Rack A/ }).getAttribute("href")).toBe(`/findings/${FIND}`);

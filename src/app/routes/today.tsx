@@ -25,25 +25,46 @@ export function Component() {
     <>
       <PageHeader
         title="Today"
-        description={scoped ? "Due dates and findings of the stores shared with you (read only)." : "What is due or overdue, systems over threshold and open findings, with the rule behind each deadline."}
+        description={
+          scoped
+            ? "Due dates and findings of the stores shared with you (read only)."
+            : "What is due or overdue, systems over threshold and open findings, with the rule behind each deadline."
+        }
         actions={
           can(membership.role, "digest.send") ? (
-            <Button variant="secondary" busy={digest.isPending} onClick={() => digest.mutate()}>Send today's digest now</Button>
+            <Button variant="secondary" busy={digest.isPending} onClick={() => digest.mutate()}>
+              Send today's digest now
+            </Button>
           ) : null
         }
       />
       {digest.data ? (
         <div className="mb-4">
           <Alert tone={digest.data.sent ? "success" : "info"}>
-            {digest.data.message} {session.outboxEnabled ? <Link className="text-accent underline" to="/outbox">Open the Outbox</Link> : null}
+            {digest.data.message}{" "}
+            {session.outboxEnabled ? (
+              <Link className="text-accent underline" to="/outbox">
+                Open the Outbox
+              </Link>
+            ) : null}
           </Alert>
         </div>
       ) : null}
-      {digest.error ? <div className="mb-4"><Alert tone="error">{formErrorMessage(digest.error)}</Alert></div> : null}
+      {digest.error ? (
+        <div className="mb-4">
+          <Alert tone="error">{formErrorMessage(digest.error)}</Alert>
+        </div>
+      ) : null}
       {today.isPending ? <Spinner label="Loading what is due…" /> : null}
-      {today.isError ? <QueryError error={today.error} what="the Today list" onRetry={() => void today.refetch()} /> : null}
+      {today.isError ? (
+        <QueryError error={today.error} what="the Today list" onRetry={() => void today.refetch()} />
+      ) : null}
       {today.data ? (
-        <TodayView data={today.data} storeId={storeId} onStoreChange={(id) => setParams(id ? { store: id } : {}, { replace: true })} />
+        <TodayView
+          data={today.data}
+          storeId={storeId}
+          onStoreChange={(id) => setParams(id ? { store: id } : {}, { replace: true })}
+        />
       ) : null}
     </>
   );

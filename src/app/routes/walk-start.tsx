@@ -20,17 +20,27 @@ export function Component() {
   if (!storeId) {
     return (
       <>
-        <PageHeader title="Walk" description="Choose the store to sweep. Its plan is kept on this device, so the sweep works without a connection." />
+        <PageHeader
+          title="Walk"
+          description="Choose the store to sweep. Its plan is kept on this device, so the sweep works without a connection."
+        />
         {stores.isPending ? <Spinner label="Loading stores…" /> : null}
-        {stores.isError ? <QueryError error={stores.error} what="the stores" onRetry={() => void stores.refetch()} /> : null}
+        {stores.isError ? (
+          <QueryError error={stores.error} what="the stores" onRetry={() => void stores.refetch()} />
+        ) : null}
         <ul className="grid gap-3 sm:grid-cols-2">
-          {(stores.data ?? []).filter((s) => !s.archivedAt).map((s) => (
-            <li key={s.id}>
-              <Link to={`/stores/${s.id}/walk`} className="flex min-h-14 items-center rounded-md bg-surface p-4 text-lg font-bold edge">
-                {s.name}
-              </Link>
-            </li>
-          ))}
+          {(stores.data ?? [])
+            .filter((s) => !s.archivedAt)
+            .map((s) => (
+              <li key={s.id}>
+                <Link
+                  to={`/stores/${s.id}/walk`}
+                  className="flex min-h-14 items-center rounded-md bg-surface p-4 text-lg font-bold edge"
+                >
+                  {s.name}
+                </Link>
+              </li>
+            ))}
         </ul>
       </>
     );

@@ -10,5 +10,13 @@ export function Component() {
   useDocumentTitle("Walk");
   const { storeId, sweepId } = useParams();
   const units = useUnitPreferences();
-  return <WalkScreen storeId={storeId!} sweepId={sweepId!} contrastToggle={<ContrastToggle />} leaveTo={`/stores/${storeId}/walk`} lengthUnit={units.length} />;
+  return (
+    <WalkScreen
+      storeId={storeId!}
+      sweepId={sweepId!}
+      contrastToggle={<ContrastToggle />}
+      leaveTo={`/stores/${storeId}/walk`}
+      lengthUnit={units.length}
+    />
+  );
 }

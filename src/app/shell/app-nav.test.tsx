@@ -14,35 +14,62 @@ async function navLabels() {
 
 // Expected menus follow the role table in PRODUCT.md and the grants in core/domain/roles.ts.
 const cases: { role: Role; outboxEnabled: boolean; expected: string[] }[] = [
-  { role: "owner", outboxEnabled: true, expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings", "Outbox"] },
-  { role: "owner", outboxEnabled: false, expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"] },
+  {
+    role: "owner",
+    outboxEnabled: true,
+    expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings", "Outbox"],
+  },
+  {
+    role: "owner",
+    outboxEnabled: false,
+    expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"],
+  },
   // Engineers read everything (PRODUCT.md), detectors included.
-  { role: "engineer", outboxEnabled: true, expected: ["Today", "Stores", "Detectors", "Team", "Company settings", "Outbox"] },
-  { role: "lead-tech", outboxEnabled: true, expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"] },
-  { role: "technician", outboxEnabled: true, expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"] },
+  {
+    role: "engineer",
+    outboxEnabled: true,
+    expected: ["Today", "Stores", "Detectors", "Team", "Company settings", "Outbox"],
+  },
+  {
+    role: "lead-tech",
+    outboxEnabled: true,
+    expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"],
+  },
+  {
+    role: "technician",
+    outboxEnabled: true,
+    expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"],
+  },
   { role: "store-contact", outboxEnabled: true, expected: ["Today", "Stores", "Company settings"] },
 ];
 
 describe("navigation by role", () => {
-  it.each(cases)("shows $role (outbox enabled: $outboxEnabled) exactly $expected", async ({ role, outboxEnabled, expected }) => {
-    stubFetch({
-      "GET /api/auth/session": { body: sessionFor(role, { outboxEnabled }) },
-      "GET /api/stores": { body: { stores: [] } },
-    });
-    renderApp("/");
-    expect(await navLabels()).toEqual(expected);
-  });
+  it.each(cases)(
+    "shows $role (outbox enabled: $outboxEnabled) exactly $expected",
+    async ({ role, outboxEnabled, expected }) => {
+      stubFetch({
+        "GET /api/auth/session": { body: sessionFor(role, { outboxEnabled }) },
+        "GET /api/stores": { body: { stores: [] } },
+      });
+      renderApp("/");
+      expect(await navLabels()).toEqual(expected);
+    },
+  );
 
   it("offers a company switcher only to people with several memberships", async () => {
     const calls = stubFetch({
       "GET /api/auth/session": { body: sessionFor("owner", { twoCompanies: true }) },
       "GET /api/stores": { body: { stores: [] } },
-      "POST /api/auth/switch-company": { body: { ...sessionFor("owner", { twoCompanies: true, csrfToken: "csrf-b" }), activeCompanyId: COMPANY_B } },
+      "POST /api/auth/switch-company": {
+        body: { ...sessionFor("owner", { twoCompanies: true, csrfToken: "csrf-b" }), activeCompanyId: COMPANY_B },
+      },
     });
     renderApp("/stores");
     const switcher = await screen.findByLabelText("Company");
     fireEvent.change(switcher, { target: { value: COMPANY_B } });
-    await waitFor(() => expect(calls.some((c) => c.method === "POST" && c.path === "/api/auth/switch-company")).toBe(true));
+    await waitFor(() =>
+      expect(calls.some((c) => c.method === "POST" && c.path === "/api/auth/switch-company")).toBe(true),
+    );
     const post = calls.find((c) => c.path === "/api/auth/switch-company")!;
     expect(post.body).toEqual({ companyId: COMPANY_B });
     await waitFor(() => expect(screen.getByRole("combobox", { name: "Company" })).toHaveProperty("value", COMPANY_B));
@@ -53,7 +80,10 @@ describe("navigation by role", () => {
   });
 
   it("shows the company name without a switcher for a single membership", async () => {
-    stubFetch({ "GET /api/auth/session": { body: sessionFor("technician") }, "GET /api/stores": { body: { stores: [] } } });
+    stubFetch({
+      "GET /api/auth/session": { body: sessionFor("technician") },
+      "GET /api/stores": { body: { stores: [] } },
+    });
     renderApp("/");
     expect(await screen.findByText("Northfield Cold Care")).toBeTruthy();
     expect(screen.queryByLabelText("Company")).toBeNull();
@@ -77,7 +107,14 @@ describe("route guard", () => {
         return { body: session };
       },
       "GET /api/company/settings": {
-        body: { name: "Northfield Cold Care", lengthUnit: "m", massUnit: "kg", ruleProfile: "eu-fgas", leakRateMethod: "annualizing", detectorCheckIntervalDays: 30 },
+        body: {
+          name: "Northfield Cold Care",
+          lengthUnit: "m",
+          massUnit: "kg",
+          ruleProfile: "eu-fgas",
+          leakRateMethod: "annualizing",
+          detectorCheckIntervalDays: 30,
+        },
       },
     });
     const { router } = renderApp("/settings");
@@ -112,7 +149,9 @@ describe("route guard", () => {
   });
 
   it("tells a signed-in person without any membership what to do", async () => {
-    stubFetch({ "GET /api/auth/session": { body: { ...sessionFor("owner"), memberships: [], activeCompanyId: null } } });
+    stubFetch({
+      "GET /api/auth/session": { body: { ...sessionFor("owner"), memberships: [], activeCompanyId: null } },
+    });
     renderApp("/");
     expect(await screen.findByRole("heading", { name: "You are not a member of any company" })).toBeTruthy();
     expect(screen.getByRole("button", { name: "Sign out" })).toBeTruthy();

@@ -45,7 +45,11 @@ export function AppShell() {
             <CompanySwitcher memberships={session.memberships} active={membership} />
           </div>
           <div className="flex flex-wrap items-center gap-2">
-            <Link to="/profile" className="inline-flex min-h-11 items-center rounded-md px-3 font-bold hover:bg-accent-soft" aria-label={`Profile of ${user.name}`}>
+            <Link
+              to="/profile"
+              className="inline-flex min-h-11 items-center rounded-md px-3 font-bold hover:bg-accent-soft"
+              aria-label={`Profile of ${user.name}`}
+            >
               {user.name}
             </Link>
             <ContrastToggle />
@@ -57,7 +61,12 @@ export function AppShell() {
         </div>
       </header>
       {/* The layout editor uses the whole width of the screen; every other page keeps a readable measure. */}
-      <main id="main" ref={main} tabIndex={-1} className={`mx-auto px-4 py-6 outline-none ${pathname.endsWith("/layout") ? "max-w-none" : "max-w-6xl"}`}>
+      <main
+        id="main"
+        ref={main}
+        tabIndex={-1}
+        className={`mx-auto px-4 py-6 outline-none ${pathname.endsWith("/layout") ? "max-w-none" : "max-w-6xl"}`}
+      >
         <Outlet />
       </main>
     </div>

@@ -12,7 +12,10 @@ export interface NavItem {
  */
 export function navItems(role: Role, session: Pick<SessionInfo, "outboxEnabled">): NavItem[] {
   // Today first: the landing page for the people who answer for the books (see routes/home.tsx).
-  const items: NavItem[] = [{ to: "/today", label: "Today" }, { to: "/stores", label: "Stores" }];
+  const items: NavItem[] = [
+    { to: "/today", label: "Today" },
+    { to: "/stores", label: "Stores" },
+  ];
   if (can(role, "sweeps.record")) items.push({ to: "/walk", label: "Walk" });
   if (can(role, "detectors.read")) items.push({ to: "/detectors", label: "Detectors" });
   if (can(role, "members.read")) items.push({ to: "/team", label: "Team" });

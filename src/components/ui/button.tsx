@@ -15,7 +15,15 @@ export interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> {
 }
 
 /** A button at least 44 px tall: a gloved thumb's target (WCAG 2.5.5 target size). */
-export function Button({ variant = "primary", busy = false, className = "", disabled, children, type = "button", ...rest }: ButtonProps) {
+export function Button({
+  variant = "primary",
+  busy = false,
+  className = "",
+  disabled,
+  children,
+  type = "button",
+  ...rest
+}: ButtonProps) {
   return (
     <button
       type={type}

@@ -16,7 +16,10 @@ export function Cautions({ items, title = "Safety" }: { items: readonly CautionI
       <ul className="mt-1 list-disc space-y-1 pl-5">
         {items.map((c) => (
           <li key={c.id} className={c.level === "warning" ? "font-bold" : undefined}>
-            <span className={c.level === "warning" ? "" : "font-normal"}>{c.text}</span> {readableSource(c.source) ? <span className="text-sm font-normal text-muted">({readableSource(c.source)})</span> : null}
+            <span className={c.level === "warning" ? "" : "font-normal"}>{c.text}</span>{" "}
+            {readableSource(c.source) ? (
+              <span className="text-sm font-normal text-muted">({readableSource(c.source)})</span>
+            ) : null}
           </li>
         ))}
       </ul>

@@ -1,7 +1,19 @@
 import { useEffect, useId, useRef, type ReactNode } from "react";
 
 /** A modal dialog on the native <dialog> element (focus trap and Escape come with it). */
-export function Dialog({ title, open, onClose, children, wide = false }: { title: string; open: boolean; onClose(): void; children: ReactNode; wide?: boolean }) {
+export function Dialog({
+  title,
+  open,
+  onClose,
+  children,
+  wide = false,
+}: {
+  title: string;
+  open: boolean;
+  onClose(): void;
+  children: ReactNode;
+  wide?: boolean;
+}) {
   const ref = useRef<HTMLDialogElement>(null);
   const id = useId();
   useEffect(() => {

@@ -7,14 +7,21 @@ import { setCsrfToken } from "../../../lib/api-client";
 import { AcceptInvitationForm } from "./accept-invitation-form";
 
 const TOKEN = "Zq81x0pLk2abcdefghijKLMNOP";
-const preview = { companyName: "Northfield Cold Care", email: "sam.reyes@northfield.example", role: "technician" as const };
+const preview = {
+  companyName: "Northfield Cold Care",
+  email: "sam.reyes@northfield.example",
+  role: "technician" as const,
+};
 
 beforeEach(() => setCsrfToken("csrf-signed-out"));
 
 describe("accept invitation form", () => {
   it("shows the company, role and e-mail of the invitation", () => {
     stubFetch({});
-    renderOnRoute(<AcceptInvitationForm token={TOKEN} preview={{ ...preview, hasAccount: false }} onAccepted={() => {}} />, { path: "/invite/:token", url: `/invite/${TOKEN}` });
+    renderOnRoute(
+      <AcceptInvitationForm token={TOKEN} preview={{ ...preview, hasAccount: false }} onAccepted={() => {}} />,
+      { path: "/invite/:token", url: `/invite/${TOKEN}` },
+    );
     expect(screen.getByText("Northfield Cold Care")).toBeTruthy();
     expect(screen.getByText("Technician")).toBeTruthy();
     expect(screen.getByText("sam.reyes@northfield.example")).toBeTruthy();
@@ -23,7 +30,10 @@ describe("accept invitation form", () => {
   it("asks a newcomer for a name and a new password of at least 10 characters, typed twice", async () => {
     const calls = stubFetch({ [`POST /api/invitations/${TOKEN}/accept`]: { body: sessionFor("technician") } });
     const onAccepted = vi.fn();
-    renderOnRoute(<AcceptInvitationForm token={TOKEN} preview={{ ...preview, hasAccount: false }} onAccepted={onAccepted} />, { path: "/invite/:token", url: `/invite/${TOKEN}` });
+    renderOnRoute(
+      <AcceptInvitationForm token={TOKEN} preview={{ ...preview, hasAccount: false }} onAccepted={onAccepted} />,
+      { path: "/invite/:token", url: `/invite/${TOKEN}` },
+    );
     fireEvent.change(screen.getByLabelText("New password"), { target: { value: "short" } });
     fireEvent.change(screen.getByLabelText("New password again"), { target: { value: "shorter" } });
     fireEvent.click(screen.getByRole("button", { name: "Join Northfield Cold Care" }));
@@ -45,7 +55,10 @@ describe("accept invitation form", () => {
   it("asks someone with an account only for their existing password", async () => {
     const calls = stubFetch({ [`POST /api/invitations/${TOKEN}/accept`]: { body: sessionFor("technician") } });
     const onAccepted = vi.fn();
-    renderOnRoute(<AcceptInvitationForm token={TOKEN} preview={{ ...preview, hasAccount: true }} onAccepted={onAccepted} />, { path: "/invite/:token", url: `/invite/${TOKEN}` });
+    renderOnRoute(
+      <AcceptInvitationForm token={TOKEN} preview={{ ...preview, hasAccount: true }} onAccepted={onAccepted} />,
+      { path: "/invite/:token", url: `/invite/${TOKEN}` },
+    );
     expect(screen.queryByLabelText("Your name")).toBeNull();
     expect(screen.queryByLabelText("New password")).toBeNull();
     fireEvent.change(screen.getByLabelText("Password"), { target: { value: "old" } });

@@ -7,7 +7,13 @@ import { ROLE_LABELS } from "#core/domain/roles";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
-import { focusFirstInvalid, formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
+import {
+  focusFirstInvalid,
+  formErrorMessage,
+  serverFieldErrors,
+  zodFieldErrors,
+  type FieldErrors,
+} from "../../../lib/form-errors";
 import { acceptInvitationInput, newAccountPassword, useAcceptInvitation } from "../api/accept-invitation";
 import { NewPasswordFields } from "./new-password-fields";
 
@@ -31,7 +37,9 @@ export function AcceptInvitationForm({ token, preview, onAccepted }: AcceptInvit
   function validate(): { input: z.infer<typeof acceptInvitationInput> | null; fields: FieldErrors } {
     if (preview.hasAccount) {
       const parsed = acceptInvitationInput.safeParse({ password });
-      return parsed.success ? { input: parsed.data, fields: {} } : { input: null, fields: zodFieldErrors(parsed.error) };
+      return parsed.success
+        ? { input: parsed.data, fields: {} }
+        : { input: null, fields: zodFieldErrors(parsed.error) };
     }
     // A new account needs a name and a password the server will accept (at least 10 characters).
     const parsed = acceptInvitationInput.safeParse({ name, password });
@@ -52,7 +60,10 @@ export function AcceptInvitationForm({ token, preview, onAccepted }: AcceptInvit
       focusFirstInvalid(form, fields);
       return;
     }
-    accept.mutate({ token, input }, { onSuccess: onAccepted, onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)) });
+    accept.mutate(
+      { token, input },
+      { onSuccess: onAccepted, onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)) },
+    );
   }
 
   return (
@@ -84,8 +95,21 @@ export function AcceptInvitationForm({ token, preview, onAccepted }: AcceptInvit
         </>
       ) : (
         <>
-          <TextField label="Your name" name="name" autoComplete="name" value={name} onChange={(e) => setName(e.target.value)} error={errors.name} />
-          <NewPasswordFields password={password} confirm={confirm} onPassword={setPassword} onConfirm={setConfirm} errors={errors} />
+          <TextField
+            label="Your name"
+            name="name"
+            autoComplete="name"
+            value={name}
+            onChange={(e) => setName(e.target.value)}
+            error={errors.name}
+          />
+          <NewPasswordFields
+            password={password}
+            confirm={confirm}
+            onPassword={setPassword}
+            onConfirm={setConfirm}
+            errors={errors}
+          />
         </>
       )}
       <Button type="submit" busy={accept.isPending}>

@@ -18,22 +18,35 @@ function choose(password: string, again: string) {
 describe("password reset form", () => {
   it("sends the token from the link with the new password", async () => {
     const calls = stubFetch({ "POST /api/auth/password-reset/confirm": { status: 204 } });
-    renderOnRoute(<PasswordResetForm token={TOKEN} />, { path: "/reset-password/:token", url: `/reset-password/${TOKEN}` });
+    renderOnRoute(<PasswordResetForm token={TOKEN} />, {
+      path: "/reset-password/:token",
+      url: `/reset-password/${TOKEN}`,
+    });
     choose("walk-in freezer 7", "walk-in freezer 7");
     expect(await screen.findByText("Password changed")).toBeTruthy();
     expect(calls[0]!.body).toEqual({ token: TOKEN, password: "walk-in freezer 7" });
   });
 
   it("says when the link is no longer valid", async () => {
-    stubFetch({ "POST /api/auth/password-reset/confirm": apiError(400, "validation_failed", "Some fields need attention.", { token: "is not a valid reset link" }) });
-    renderOnRoute(<PasswordResetForm token={TOKEN} />, { path: "/reset-password/:token", url: `/reset-password/${TOKEN}` });
+    stubFetch({
+      "POST /api/auth/password-reset/confirm": apiError(400, "validation_failed", "Some fields need attention.", {
+        token: "is not a valid reset link",
+      }),
+    });
+    renderOnRoute(<PasswordResetForm token={TOKEN} />, {
+      path: "/reset-password/:token",
+      url: `/reset-password/${TOKEN}`,
+    });
     choose("walk-in freezer 7", "walk-in freezer 7");
     expect((await screen.findByRole("alert")).textContent).toMatch(/This reset link is not valid/);
   });
 
   it("checks length and the repeat before sending", async () => {
     const calls = stubFetch({});
-    renderOnRoute(<PasswordResetForm token={TOKEN} />, { path: "/reset-password/:token", url: `/reset-password/${TOKEN}` });
+    renderOnRoute(<PasswordResetForm token={TOKEN} />, {
+      path: "/reset-password/:token",
+      url: `/reset-password/${TOKEN}`,
+    });
     choose("short", "short");
     expect(await screen.findByText("New password must be at least 10 characters.")).toBeTruthy();
     choose("long enough now", "long enough naw");

@@ -2,7 +2,13 @@ import { useState, type FormEvent } from "react";
 import { Link } from "react-router";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
-import { focusFirstInvalid, formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
+import {
+  focusFirstInvalid,
+  formErrorMessage,
+  serverFieldErrors,
+  zodFieldErrors,
+  type FieldErrors,
+} from "../../../lib/form-errors";
 import { passwordResetConfirmInput, useConfirmPasswordReset } from "../api/confirm-password-reset";
 import { NewPasswordFields } from "./new-password-fields";
 
@@ -21,7 +27,8 @@ export function PasswordResetForm({ token }: { token: string }) {
     const fields = parsed.success ? {} : zodFieldErrors(parsed.error);
     if (password !== confirm) fields.confirm = "does not match the first one";
     setClientErrors(fields);
-    if (parsed.success && !fields.confirm) reset.mutate(parsed.data, { onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)) });
+    if (parsed.success && !fields.confirm)
+      reset.mutate(parsed.data, { onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)) });
     else focusFirstInvalid(form, fields);
   }
 
@@ -40,7 +47,13 @@ export function PasswordResetForm({ token }: { token: string }) {
           {formError} <Link to="/forgot-password">Request a new link</Link>
         </Alert>
       ) : null}
-      <NewPasswordFields password={password} confirm={confirm} onPassword={setPassword} onConfirm={setConfirm} errors={errors} />
+      <NewPasswordFields
+        password={password}
+        confirm={confirm}
+        onPassword={setPassword}
+        onConfirm={setConfirm}
+        errors={errors}
+      />
       <Button type="submit" busy={reset.isPending}>
         Save new password
       </Button>

@@ -2,7 +2,13 @@ import { useState, type FormEvent } from "react";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
-import { checkForm, focusFirstInvalid, formErrorMessage, serverFieldErrors, type FieldErrors } from "../../../lib/form-errors";
+import {
+  checkForm,
+  focusFirstInvalid,
+  formErrorMessage,
+  serverFieldErrors,
+  type FieldErrors,
+} from "../../../lib/form-errors";
 import { passwordResetRequestInput, useRequestPasswordReset } from "../api/request-password-reset";
 
 export function PasswordResetRequestForm() {

@@ -29,7 +29,13 @@ describe("sign-in form", () => {
   });
 
   it("shows the server's plain message when sign-in is rate limited", async () => {
-    stubFetch({ "POST /api/auth/sign-in": apiError(429, "rate_limited", "Too many sign-in attempts from here. Try again in 12 minutes.") });
+    stubFetch({
+      "POST /api/auth/sign-in": apiError(
+        429,
+        "rate_limited",
+        "Too many sign-in attempts from here. Try again in 12 minutes.",
+      ),
+    });
     const onSignedIn = vi.fn();
     renderOnRoute(<SignInForm onSignedIn={onSignedIn} />, { path: "/sign-in" });
     fill("ines.varga@northfield.example", "wrong-password-again");
@@ -40,7 +46,11 @@ describe("sign-in form", () => {
   });
 
   it("shows field errors the server sends back", async () => {
-    stubFetch({ "POST /api/auth/sign-in": apiError(400, "validation_failed", "Some fields need attention.", { email: "must be at most 254 characters" }) });
+    stubFetch({
+      "POST /api/auth/sign-in": apiError(400, "validation_failed", "Some fields need attention.", {
+        email: "must be at most 254 characters",
+      }),
+    });
     renderOnRoute(<SignInForm onSignedIn={() => {}} />, { path: "/sign-in" });
     fill("ines.varga@northfield.example", "secret-password");
 

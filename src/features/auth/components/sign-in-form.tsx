@@ -5,7 +5,13 @@ import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
 import { isApiRequestError } from "../../../lib/api-client";
-import { checkForm, focusFirstInvalid, formErrorMessage, serverFieldErrors, type FieldErrors } from "../../../lib/form-errors";
+import {
+  checkForm,
+  focusFirstInvalid,
+  formErrorMessage,
+  serverFieldErrors,
+  type FieldErrors,
+} from "../../../lib/form-errors";
 import { signInInput, useSignIn } from "../api/sign-in";
 
 export function SignInForm({ onSignedIn }: { onSignedIn: (info: SessionInfo) => void }) {
@@ -16,9 +22,10 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (info: SessionInfo) => 
 
   const errors = { ...serverFieldErrors(signIn.error), ...clientErrors };
   // The server's wording is shown as it is: a rate limit says when to try again.
-  const formError = isApiRequestError(signIn.error) && signIn.error.code === "invalid_credentials"
-    ? "That e-mail and password do not match an account. Check both and try again."
-    : formErrorMessage(signIn.error);
+  const formError =
+    isApiRequestError(signIn.error) && signIn.error.code === "invalid_credentials"
+      ? "That e-mail and password do not match an account. Check both and try again."
+      : formErrorMessage(signIn.error);
 
   function submit(event: FormEvent) {
     event.preventDefault();

@@ -8,7 +8,10 @@ export function getSystemRecords(systemId: string, signal?: AbortSignal) {
 }
 
 export function systemRecordsQueryOptions(systemId: string) {
-  return queryOptions({ queryKey: complianceKeys.record(systemId), queryFn: ({ signal }) => getSystemRecords(systemId, signal) });
+  return queryOptions({
+    queryKey: complianceKeys.record(systemId),
+    queryFn: ({ signal }) => getSystemRecords(systemId, signal),
+  });
 }
 
 export function useSystemRecords(systemId: string) {

@@ -9,7 +9,11 @@ export function getToday(storeId: string | undefined, signal?: AbortSignal) {
 
 export function todayQueryOptions(storeId?: string) {
   // Deadlines move when anyone records a repair or an addition: read afresh on every visit.
-  return queryOptions({ queryKey: complianceKeys.today(storeId), queryFn: ({ signal }) => getToday(storeId, signal), staleTime: 0 });
+  return queryOptions({
+    queryKey: complianceKeys.today(storeId),
+    queryFn: ({ signal }) => getToday(storeId, signal),
+    staleTime: 0,
+  });
 }
 
 export function useToday(storeId?: string) {

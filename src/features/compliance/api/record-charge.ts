@@ -1,6 +1,14 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
-import { chargeAdditionInput, chargeAdditionResponse, chargeCorrectionInput, chargeVoidInput, chronicReportInput, leakCheckInput, systemRecords } from "#core/contracts/compliance";
+import {
+  chargeAdditionInput,
+  chargeAdditionResponse,
+  chargeCorrectionInput,
+  chargeVoidInput,
+  chronicReportInput,
+  leakCheckInput,
+  systemRecords,
+} from "#core/contracts/compliance";
 import { api } from "../../../lib/api-client";
 import { complianceKeys } from "./compliance-keys";
 
@@ -17,9 +25,12 @@ type Action =
 export async function recordCharge(action: Action) {
   switch (action.kind) {
     case "add":
-      return (await api.post(`/api/systems/${action.systemId}/charge-additions`, chargeAdditionResponse, action.input)).records;
+      return (await api.post(`/api/systems/${action.systemId}/charge-additions`, chargeAdditionResponse, action.input))
+        .records;
     case "correct":
-      return (await api.post(`/api/charge-additions/${action.additionId}/corrections`, chargeAdditionResponse, action.input)).records;
+      return (
+        await api.post(`/api/charge-additions/${action.additionId}/corrections`, chargeAdditionResponse, action.input)
+      ).records;
     case "void":
       return api.post(`/api/charge-additions/${action.additionId}/void`, systemRecords, action.input);
     case "leak-check":

@@ -8,7 +8,14 @@ import { useRecordCharge } from "../api/record-charge";
 import type { MassUnit } from "../model/figures";
 
 /** Record refrigerant put into a system; or, with `corrects`, a correction that voids that entry. */
-export function ChargeForm({ systemId, today, unit, findings, corrects, onDone }: {
+export function ChargeForm({
+  systemId,
+  today,
+  unit,
+  findings,
+  corrects,
+  onDone,
+}: {
   systemId: string;
   today: string;
   unit: MassUnit;
@@ -33,24 +40,86 @@ export function ChargeForm({ systemId, today, unit, findings, corrects, onDone }
   const fields = serverFieldErrors(mutation.error);
   const submit = (e: FormEvent) => {
     e.preventDefault();
-    const input = { addedOn, amount: { value: Number(amount), unit: amountUnit }, reason, findingId: findingId || null };
+    const input = {
+      addedOn,
+      amount: { value: Number(amount), unit: amountUnit },
+      reason,
+      findingId: findingId || null,
+    };
     if (corrects) mutation.mutate({ kind: "correct", additionId: corrects.id, input: { ...input, voidReason } });
     else mutation.mutate({ kind: "add", systemId, input });
   };
   const message = formErrorMessage(mutation.error);
   return (
-    <form onSubmit={submit} className="grid gap-3 sm:grid-cols-2" aria-label={corrects ? "Correct the entry" : "Record charge added"}>
-      {message ? <div className="sm:col-span-2"><Alert tone="error">{message}</Alert></div> : null}
-      <TextField label="Date added" type="date" max={today} value={addedOn} onChange={(e) => setAddedOn(e.target.value)} error={fields.addedOn} hint="On the store's calendar" />
+    <form
+      onSubmit={submit}
+      className="grid gap-3 sm:grid-cols-2"
+      aria-label={corrects ? "Correct the entry" : "Record charge added"}
+    >
+      {message ? (
+        <div className="sm:col-span-2">
+          <Alert tone="error">{message}</Alert>
+        </div>
+      ) : null}
+      <TextField
+        label="Date added"
+        type="date"
+        max={today}
+        value={addedOn}
+        onChange={(e) => setAddedOn(e.target.value)}
+        error={fields.addedOn}
+        hint="On the store's calendar"
+      />
       <div className="flex gap-2">
-        <TextField className="flex-1" label="Amount added" inputMode="decimal" value={amount} onChange={(e) => setAmount(e.target.value)} error={fields["amount.value"]} required />
-        <Select label="Unit" value={amountUnit} onChange={(e) => setAmountUnit(e.target.value as MassUnit)} options={[{ value: "kg", label: "kg" }, { value: "lb", label: "lb" }]} error={fields["amount.unit"]} />
+        <TextField
+          className="flex-1"
+          label="Amount added"
+          inputMode="decimal"
+          value={amount}
+          onChange={(e) => setAmount(e.target.value)}
+          error={fields["amount.value"]}
+          required
+        />
+        <Select
+          label="Unit"
+          value={amountUnit}
+          onChange={(e) => setAmountUnit(e.target.value as MassUnit)}
+          options={[
+            { value: "kg", label: "kg" },
+            { value: "lb", label: "lb" },
+          ]}
+          error={fields["amount.unit"]}
+        />
       </div>
-      <TextField label="Reason" value={reason} onChange={(e) => setReason(e.target.value)} error={fields.reason} hint="Why refrigerant was added" required />
-      <Select label="Linked finding" value={findingId} onChange={(e) => setFindingId(e.target.value)} options={[{ value: "", label: "None" }, ...findings.map((f) => ({ value: f.id, label: f.label }))]} error={fields.findingId} />
-      {corrects ? <TextField className="sm:col-span-2" label="Why the old entry is wrong" value={voidReason} onChange={(e) => setVoidReason(e.target.value)} error={fields.voidReason} required /> : null}
+      <TextField
+        label="Reason"
+        value={reason}
+        onChange={(e) => setReason(e.target.value)}
+        error={fields.reason}
+        hint="Why refrigerant was added"
+        required
+      />
+      <Select
+        label="Linked finding"
+        value={findingId}
+        onChange={(e) => setFindingId(e.target.value)}
+        options={[{ value: "", label: "None" }, ...findings.map((f) => ({ value: f.id, label: f.label }))]}
+        error={fields.findingId}
+      />
+      {corrects ? (
+        <TextField
+          className="sm:col-span-2"
+          label="Why the old entry is wrong"
+          value={voidReason}
+          onChange={(e) => setVoidReason(e.target.value)}
+          error={fields.voidReason}
+          required
+        />
+      ) : null}
       <div className="sm:col-span-2">
-        <Button type="submit" busy={mutation.isPending}>{corrects ? "Save the correction" : "Record charge added"}</Button>
+        <Button type="submit" busy={mutation.isPending}>
+          {corrects ? "Save the correction" : "Record charge added"}
+        </Button>
       </div>
     </form>
   );

@@ -21,12 +21,32 @@ function FileReportForm({ systemId, year, today }: { systemId: string; year: num
     m.mutate({ kind: "chronic-report", systemId, input: { year, filedOn, reference } });
   };
   return (
-    <form onSubmit={submit} className="mt-2 grid gap-3 rounded-md bg-surface p-3 font-normal text-ink edge sm:grid-cols-3" aria-label={`Mark the ${year} report filed`}>
+    <form
+      onSubmit={submit}
+      className="mt-2 grid gap-3 rounded-md bg-surface p-3 font-normal text-ink edge sm:grid-cols-3"
+      aria-label={`Mark the ${year} report filed`}
+    >
       {message && !Object.keys(fields).length ? <p className="text-danger sm:col-span-3">{message}</p> : null}
-      <TextField label="Filed on" type="date" min={`${year + 1}-01-01`} max={today} value={filedOn} onChange={(e) => setFiledOn(e.target.value)} error={fields.filedOn ?? fields.year} />
-      <TextField label="Reference (optional)" hint="The authority's receipt or submission number." value={reference} onChange={(e) => setReference(e.target.value)} error={fields.reference} />
+      <TextField
+        label="Filed on"
+        type="date"
+        min={`${year + 1}-01-01`}
+        max={today}
+        value={filedOn}
+        onChange={(e) => setFiledOn(e.target.value)}
+        error={fields.filedOn ?? fields.year}
+      />
+      <TextField
+        label="Reference (optional)"
+        hint="The authority's receipt or submission number."
+        value={reference}
+        onChange={(e) => setReference(e.target.value)}
+        error={fields.reference}
+      />
       <div className="self-end">
-        <Button type="submit" variant="secondary" busy={m.isPending}>Mark the {year} report filed</Button>
+        <Button type="submit" variant="secondary" busy={m.isPending}>
+          Mark the {year} report filed
+        </Button>
       </div>
       <p className="text-sm text-muted sm:col-span-3">You sign for this filing; it is kept in the audit trail below.</p>
     </form>
@@ -39,26 +59,37 @@ export function ChronicSection({ r, unit, canFile }: { r: SystemRecordsView; uni
   const fileable = (y: Year) => y.chronic && !y.filed && Number(r.today.slice(0, 4)) > y.year;
   return (
     <section aria-labelledby="chronic" className="space-y-2">
-      <h2 id="chronic" className="text-xl font-bold">Added per calendar year</h2>
+      <h2 id="chronic" className="text-xl font-bold">
+        Added per calendar year
+      </h2>
       <ul className="space-y-2">
         {r.chronic.map((y) => (
           <li key={y.year} className={y.chronic && !y.filed ? "font-bold text-danger" : undefined}>
             {y.year}: {formatMass(y.addedKg, unit)}, {formatPercent(y.percent)} of the full charge
-            {y.chronic ? (y.filed ? ` — chronic leaker; report filed on ${y.filed.on} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}` : ` — chronic leaker; report due ${y.reportDue}`) : ""}
+            {y.chronic
+              ? y.filed
+                ? ` — chronic leaker; report filed on ${y.filed.on} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}`
+                : ` — chronic leaker; report due ${y.reportDue}`
+              : ""}
             {canFile && fileable(y) ? <FileReportForm systemId={r.system.id} year={y.year} today={r.today} /> : null}
           </li>
         ))}
       </ul>
       {r.chronicRule ? (
         <p className="text-sm text-muted">
-          A system that takes {r.chronicRule.percent} % or more of its full charge in one calendar year is a chronic leaker, reported by {r.chronicRule.reportBy} ({readableSource(r.chronicRule.source)}).
+          A system that takes {r.chronicRule.percent} % or more of its full charge in one calendar year is a chronic
+          leaker, reported by {r.chronicRule.reportBy} ({readableSource(r.chronicRule.source)}).
         </p>
       ) : null}
       {r.audit.length ? (
         <>
           <h3 className="font-bold">Audit trail</h3>
           <ul className="space-y-1 text-sm">
-            {r.audit.map((a) => <li key={`${a.at}-${a.summary}`}>{a.at.slice(0, 16).replace("T", " ")} UTC, {a.by}: {a.summary}</li>)}
+            {r.audit.map((a) => (
+              <li key={`${a.at}-${a.summary}`}>
+                {a.at.slice(0, 16).replace("T", " ")} UTC, {a.by}: {a.summary}
+              </li>
+            ))}
           </ul>
         </>
       ) : null}

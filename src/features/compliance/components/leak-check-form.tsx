@@ -20,11 +20,24 @@ export function LeakCheckForm({ systemId, today }: { systemId: string; today: st
   return (
     <form onSubmit={submit} className="grid gap-3 sm:grid-cols-2" aria-label="Record a leak check">
       {message ? <p className="text-danger sm:col-span-2">{message}</p> : null}
-      <TextField label="Checked on" type="date" max={today} value={checkedOn} onChange={(e) => setCheckedOn(e.target.value)} error={fields.checkedOn} />
+      <TextField
+        label="Checked on"
+        type="date"
+        max={today}
+        value={checkedOn}
+        onChange={(e) => setCheckedOn(e.target.value)}
+        error={fields.checkedOn}
+      />
       <TextField label="Note" value={note} onChange={(e) => setNote(e.target.value)} error={fields.note} />
-      <Checkbox label="A leak was found (record it as a finding too)" checked={leakFound} onChange={(e) => setLeakFound(e.target.checked)} />
+      <Checkbox
+        label="A leak was found (record it as a finding too)"
+        checked={leakFound}
+        onChange={(e) => setLeakFound(e.target.checked)}
+      />
       <div>
-        <Button type="submit" variant="secondary" busy={mutation.isPending}>Record the leak check</Button>
+        <Button type="submit" variant="secondary" busy={mutation.isPending}>
+          Record the leak check
+        </Button>
       </div>
     </form>
   );

@@ -10,9 +10,13 @@ export function StoreRecordsSection({ storeId }: { storeId: string }) {
   const today = useToday(storeId);
   return (
     <section aria-labelledby="store-records" className="space-y-3">
-      <h2 id="store-records" className="text-xl font-bold">Leak records</h2>
+      <h2 id="store-records" className="text-xl font-bold">
+        Leak records
+      </h2>
       {today.isPending ? <Spinner label="Loading the records…" /> : null}
-      {today.isError ? <QueryError error={today.error} what="the records" onRetry={() => void today.refetch()} /> : null}
+      {today.isError ? (
+        <QueryError error={today.error} what="the records" onRetry={() => void today.refetch()} />
+      ) : null}
       {today.data ? (
         <div className="grid gap-4 lg:grid-cols-3">
           <div>
@@ -20,8 +24,13 @@ export function StoreRecordsSection({ storeId }: { storeId: string }) {
             <ul className="space-y-1">
               {today.data.systems.map((s) => (
                 <li key={s.id}>
-                  <Link className="text-accent underline" to={s.link}>{s.name}</Link>:{" "}
-                  <span className={s.breachOpen ? "font-bold text-danger" : ""}>{s.latestPercent === null ? "no additions" : formatPercent(s.latestPercent)}</span>
+                  <Link className="text-accent underline" to={s.link}>
+                    {s.name}
+                  </Link>
+                  :{" "}
+                  <span className={s.breachOpen ? "font-bold text-danger" : ""}>
+                    {s.latestPercent === null ? "no additions" : formatPercent(s.latestPercent)}
+                  </span>
                   {s.thresholdPercent !== null ? ` (threshold ${s.thresholdPercent} %)` : " (no threshold applies)"}
                 </li>
               ))}
@@ -29,11 +38,17 @@ export function StoreRecordsSection({ storeId }: { storeId: string }) {
           </div>
           <div>
             <h3 className="font-bold">Due</h3>
-            {today.data.due.length === 0 ? <p className="text-muted">Nothing due.</p> : (
+            {today.data.due.length === 0 ? (
+              <p className="text-muted">Nothing due.</p>
+            ) : (
               <ul className="space-y-1">
                 {today.data.due.map((d) => (
                   <li key={`${d.kind}-${d.systemId}-${d.findingId}-${d.dueOn}`}>
-                    <span className="font-bold">{d.dueOn}</span> ({STATE_LABELS[d.state].toLowerCase()}, {daysInWords(d.daysLeft)}): <Link className="text-accent underline" to={d.link}>{d.what}</Link>
+                    <span className="font-bold">{d.dueOn}</span> ({STATE_LABELS[d.state].toLowerCase()},{" "}
+                    {daysInWords(d.daysLeft)}):{" "}
+                    <Link className="text-accent underline" to={d.link}>
+                      {d.what}
+                    </Link>
                   </li>
                 ))}
               </ul>
@@ -41,10 +56,19 @@ export function StoreRecordsSection({ storeId }: { storeId: string }) {
           </div>
           <div>
             <h3 className="font-bold">Open findings</h3>
-            {today.data.openFindings.length === 0 ? <p className="text-muted">None.</p> : (
+            {today.data.openFindings.length === 0 ? (
+              <p className="text-muted">None.</p>
+            ) : (
               <ul className="space-y-1">
                 {today.data.openFindings.map((f) => (
-                  <li key={f.id}><Link className="text-accent underline" to={f.link}>{f.component ? COMPONENT_LABELS[f.component as (typeof FINDING_COMPONENTS)[number]] : "Leak"} on {f.systemName ?? "no system"}</Link> · {f.status}{f.deadline ? ` · due ${f.deadline}` : ""}</li>
+                  <li key={f.id}>
+                    <Link className="text-accent underline" to={f.link}>
+                      {f.component ? COMPONENT_LABELS[f.component as (typeof FINDING_COMPONENTS)[number]] : "Leak"} on{" "}
+                      {f.systemName ?? "no system"}
+                    </Link>{" "}
+                    · {f.status}
+                    {f.deadline ? ` · due ${f.deadline}` : ""}
+                  </li>
                 ))}
               </ul>
             )}

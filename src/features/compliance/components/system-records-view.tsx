@@ -27,9 +27,22 @@ function VoidForm({ id, onDone }: { id: string; onDone: () => void }) {
   const [reason, setReason] = useState("");
   const m = useRecordCharge({ onDone });
   return (
-    <form className="flex flex-wrap items-end gap-2" onSubmit={(e) => { e.preventDefault(); m.mutate({ kind: "void", additionId: id, input: { voidReason: reason } }); }}>
-      <TextField label="Why void this entry" value={reason} onChange={(e) => setReason(e.target.value)} error={serverFieldErrors(m.error).voidReason} />
-      <Button type="submit" variant="danger" busy={m.isPending}>Void the entry</Button>
+    <form
+      className="flex flex-wrap items-end gap-2"
+      onSubmit={(e) => {
+        e.preventDefault();
+        m.mutate({ kind: "void", additionId: id, input: { voidReason: reason } });
+      }}
+    >
+      <TextField
+        label="Why void this entry"
+        value={reason}
+        onChange={(e) => setReason(e.target.value)}
+        error={serverFieldErrors(m.error).voidReason}
+      />
+      <Button type="submit" variant="danger" busy={m.isPending}>
+        Void the entry
+      </Button>
     </form>
   );
 }
@@ -38,38 +51,93 @@ function VoidForm({ id, onDone }: { id: string; onDone: () => void }) {
  * A system's records: what applies and why, the leak rate at every addition against the
  * threshold, due dates with their rules, the charge-added audit trail and the exports.
  */
-export function SystemRecords({ r, unit, canRecord, canFile = false, findings }: { r: SystemRecordsView; unit: MassUnit; canRecord: boolean; canFile?: boolean; findings: { id: string; label: string }[] }) {
+export function SystemRecords({
+  r,
+  unit,
+  canRecord,
+  canFile = false,
+  findings,
+}: {
+  r: SystemRecordsView;
+  unit: MassUnit;
+  canRecord: boolean;
+  canFile?: boolean;
+  findings: { id: string; label: string }[];
+}) {
   const [editing, setEditing] = useState<{ id: string; mode: "correct" | "void" } | null>(null);
   const byId = new Map(r.additions.map((a) => [a.id, a]));
   const a = r.applicability;
   return (
     <div className="space-y-8">
       <dl className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
-        <Fact label="Refrigerant">{r.system.refrigerantId} · class {r.system.refrigerant.safetyClass}{r.system.refrigerant.gwp ? ` · GWP ${r.system.refrigerant.gwp.value}` : ""}</Fact>
+        <Fact label="Refrigerant">
+          {r.system.refrigerantId} · class {r.system.refrigerant.safetyClass}
+          {r.system.refrigerant.gwp ? ` · GWP ${r.system.refrigerant.gwp.value}` : ""}
+        </Fact>
         <Fact label="Full charge">{formatMass(r.system.fullChargeKg, unit)}</Fact>
         <Fact label="Latest leak rate">
-          {r.latest ? <span className={r.latest.exceeds ? "text-danger" : ""}>{formatPercent(r.latest.percent)} on {r.latest.date}</span> : "No additions yet"}
+          {r.latest ? (
+            <span className={r.latest.exceeds ? "text-danger" : ""}>
+              {formatPercent(r.latest.percent)} on {r.latest.date}
+            </span>
+          ) : (
+            "No additions yet"
+          )}
         </Fact>
-        <Fact label="Threshold">{a.thresholdPercent === null ? "None applies" : `${a.thresholdPercent} % per year`}</Fact>
-        <Fact label="CO2-equivalent">{r.co2e.known && r.co2e.tonnes !== null ? `${r.co2e.tonnes.toFixed(2)} t` : "Unknown"}</Fact>
+        <Fact label="Threshold">
+          {a.thresholdPercent === null ? "None applies" : `${a.thresholdPercent} % per year`}
+        </Fact>
+        <Fact label="CO2-equivalent">
+          {r.co2e.known && r.co2e.tonnes !== null ? `${r.co2e.tonnes.toFixed(2)} t` : "Unknown"}
+        </Fact>
         <Fact label="Next inspection">{r.nextInspection ? r.nextInspection.dueOn : "None scheduled"}</Fact>
         <Fact label="Appliance">{APPLIANCE_TYPE_NAMES[r.system.applianceType]}</Fact>
         <Fact label="Leak detection">{r.system.automaticLeakDetection ? "Automatic" : "None"}</Fact>
       </dl>
       <div className="space-y-1 text-sm text-muted">
-        <p><span className="font-bold text-ink">Rule: </span>{a.applies ? `${a.reason}. Threshold source: ${readableSource(a.thresholdSource ?? "")}.` : `No leak-rate threshold: ${a.reason}.`}</p>
-        <p><span className="font-bold text-ink">Profile: </span>{r.profile.name}, {r.profile.method === "annualizing" ? "annualizing method" : "rolling-average method"} (40 CFR 82.152 / 84.102). Records are kept {r.profile.retentionYears} years ({readableSource(r.profile.retentionSource)}).</p>
-        {r.leakCheck ? <p><span className="font-bold text-ink">Leak checks: </span>{r.leakCheck.reason}. Without leak detection every {r.leakCheck.withoutLdsMonths ?? "–"} months; with it every {r.leakCheck.withLdsMonths ?? "–"} months.</p> : null}
-        {r.nextInspection ? <p><span className="font-bold text-ink">Next inspection: </span>{r.nextInspection.reason} ({readableSource(r.nextInspection.source)}).</p> : null}
+        <p>
+          <span className="font-bold text-ink">Rule: </span>
+          {a.applies
+            ? `${a.reason}. Threshold source: ${readableSource(a.thresholdSource ?? "")}.`
+            : `No leak-rate threshold: ${a.reason}.`}
+        </p>
+        <p>
+          <span className="font-bold text-ink">Profile: </span>
+          {r.profile.name}, {r.profile.method === "annualizing" ? "annualizing method" : "rolling-average method"} (40
+          CFR 82.152 / 84.102). Records are kept {r.profile.retentionYears} years (
+          {readableSource(r.profile.retentionSource)}).
+        </p>
+        {r.leakCheck ? (
+          <p>
+            <span className="font-bold text-ink">Leak checks: </span>
+            {r.leakCheck.reason}. Without leak detection every {r.leakCheck.withoutLdsMonths ?? "–"} months; with it
+            every {r.leakCheck.withLdsMonths ?? "–"} months.
+          </p>
+        ) : null}
+        {r.nextInspection ? (
+          <p>
+            <span className="font-bold text-ink">Next inspection: </span>
+            {r.nextInspection.reason} ({readableSource(r.nextInspection.source)}).
+          </p>
+        ) : null}
       </div>
 
       {r.due.length ? (
         <section aria-labelledby="sys-due" className="space-y-2">
-          <h2 id="sys-due" className="text-xl font-bold">Due</h2>
+          <h2 id="sys-due" className="text-xl font-bold">
+            Due
+          </h2>
           <ul className="space-y-2">
             {r.due.map((d) => (
               <li key={`${d.kind}-${d.dueOn}-${d.findingId}`} className="rounded-md bg-surface p-3 edge">
-                <span className="font-bold">{d.dueOn}</span> · {STATE_LABELS[d.state]}, {daysInWords(d.daysLeft)} · {d.findingId ? <Link className="text-accent underline" to={d.link}>{d.what}</Link> : d.what}
+                <span className="font-bold">{d.dueOn}</span> · {STATE_LABELS[d.state]}, {daysInWords(d.daysLeft)} ·{" "}
+                {d.findingId ? (
+                  <Link className="text-accent underline" to={d.link}>
+                    {d.what}
+                  </Link>
+                ) : (
+                  d.what
+                )}
                 <p className="text-sm text-muted">Rule: {readableSource(d.source)}</p>
               </li>
             ))}
@@ -78,18 +146,40 @@ export function SystemRecords({ r, unit, canRecord, canFile = false, findings }:
       ) : null}
 
       <section id="leak-rates" aria-labelledby="rates" className="space-y-2">
-        <h2 id="rates" className="text-xl font-bold">Leak rate at every addition</h2>
-        {r.leakRates.length === 0 ? <p className="text-muted">No refrigerant has been added: no leak rate yet.</p> : (
+        <h2 id="rates" className="text-xl font-bold">
+          Leak rate at every addition
+        </h2>
+        {r.leakRates.length === 0 ? (
+          <p className="text-muted">No refrigerant has been added: no leak rate yet.</p>
+        ) : (
           <DataTable
             caption="Leak rate at every addition"
             rows={r.leakRates}
             rowKey={(p) => p.date}
             columns={[
               { header: "Date", cell: (p) => p.date },
-              { header: "Added", cell: (p) => formatMass(p.additionIds.reduce((s, id) => s + (byId.get(id)?.amountKg ?? 0), 0), unit) },
-              { header: p0(r), cell: (p) => (p.method === "annualizing" ? `${p.days} days` : `${p.windowStart} to ${p.date}`) },
+              {
+                header: "Added",
+                cell: (p) =>
+                  formatMass(
+                    p.additionIds.reduce((s, id) => s + (byId.get(id)?.amountKg ?? 0), 0),
+                    unit,
+                  ),
+              },
+              {
+                header: p0(r),
+                cell: (p) => (p.method === "annualizing" ? `${p.days} days` : `${p.windowStart} to ${p.date}`),
+              },
               { header: "Counted", cell: (p) => formatMass(p.countedKg, unit) },
-              { header: "Leak rate", cell: (p) => <span className={p.exceeds ? "font-bold text-danger" : ""}>{formatPercent(p.percent)}{p.exceeds ? " — above threshold" : ""}</span> },
+              {
+                header: "Leak rate",
+                cell: (p) => (
+                  <span className={p.exceeds ? "font-bold text-danger" : ""}>
+                    {formatPercent(p.percent)}
+                    {p.exceeds ? " — above threshold" : ""}
+                  </span>
+                ),
+              },
               { header: "Threshold", cell: (p) => (p.thresholdPercent === null ? "none" : `${p.thresholdPercent} %`) },
               { header: "Repair due", cell: (p) => p.repairDue ?? "" },
             ]}
@@ -100,7 +190,9 @@ export function SystemRecords({ r, unit, canRecord, canFile = false, findings }:
       <ChronicSection r={r} unit={unit} canFile={canFile} />
 
       <section aria-labelledby="charge" className="space-y-3">
-        <h2 id="charge" className="text-xl font-bold">Charge added</h2>
+        <h2 id="charge" className="text-xl font-bold">
+          Charge added
+        </h2>
         {canRecord ? <ChargeForm systemId={r.system.id} today={r.today} unit={unit} findings={findings} /> : null}
         <DataTable
           caption="Charge-added entries, voided ones kept"
@@ -108,38 +200,119 @@ export function SystemRecords({ r, unit, canRecord, canFile = false, findings }:
           rowKey={(x) => x.id}
           columns={[
             { header: "Date", cell: (x) => (x.voided ? <s>{x.addedOn}</s> : x.addedOn) },
-            { header: "Amount", cell: (x) => <>{x.voided ? <s>{formatMass(x.amountKg, unit)}</s> : formatMass(x.amountKg, unit)}<br /><span className="text-sm text-muted">entered {x.enteredValue} {x.enteredUnit}</span></> },
+            {
+              header: "Amount",
+              cell: (x) => (
+                <>
+                  {x.voided ? <s>{formatMass(x.amountKg, unit)}</s> : formatMass(x.amountKg, unit)}
+                  <br />
+                  <span className="text-sm text-muted">
+                    entered {x.enteredValue} {x.enteredUnit}
+                  </span>
+                </>
+              ),
+            },
             { header: "Technician", cell: (x) => x.technician },
-            { header: "Reason", cell: (x) => <>{x.reason}{x.findingId ? <><br /><Link className="text-sm text-accent underline" to={`/findings/${x.findingId}`}>linked finding</Link></> : null}</> },
-            { header: "Audit", cell: (x) => x.voided ? <span className="text-sm">Voided {x.voided.at.slice(0, 10)} by {x.voided.by}: {x.voided.reason}{x.voided.byEntryId ? " (corrected)" : ""}</span> : <span className="text-sm text-muted">Recorded by {x.recordedBy}{x.correctsId ? " as a correction" : ""}</span> },
-            { header: "", cell: (x) => (canRecord && !x.voided ? (
-              <div className="flex gap-1">
-                <Button variant="quiet" onClick={() => setEditing({ id: x.id, mode: "correct" })}>Correct</Button>
-                <Button variant="quiet" onClick={() => setEditing({ id: x.id, mode: "void" })}>Void</Button>
-              </div>
-            ) : null) },
+            {
+              header: "Reason",
+              cell: (x) => (
+                <>
+                  {x.reason}
+                  {x.findingId ? (
+                    <>
+                      <br />
+                      <Link className="text-sm text-accent underline" to={`/findings/${x.findingId}`}>
+                        linked finding
+                      </Link>
+                    </>
+                  ) : null}
+                </>
+              ),
+            },
+            {
+              header: "Audit",
+              cell: (x) =>
+                x.voided ? (
+                  <span className="text-sm">
+                    Voided {x.voided.at.slice(0, 10)} by {x.voided.by}: {x.voided.reason}
+                    {x.voided.byEntryId ? " (corrected)" : ""}
+                  </span>
+                ) : (
+                  <span className="text-sm text-muted">
+                    Recorded by {x.recordedBy}
+                    {x.correctsId ? " as a correction" : ""}
+                  </span>
+                ),
+            },
+            {
+              header: "",
+              cell: (x) =>
+                canRecord && !x.voided ? (
+                  <div className="flex gap-1">
+                    <Button variant="quiet" onClick={() => setEditing({ id: x.id, mode: "correct" })}>
+                      Correct
+                    </Button>
+                    <Button variant="quiet" onClick={() => setEditing({ id: x.id, mode: "void" })}>
+                      Void
+                    </Button>
+                  </div>
+                ) : null,
+            },
           ]}
-          rowDetail={(x) => editing?.id === x.id ? (
-            editing.mode === "correct"
-              ? <ChargeForm systemId={r.system.id} today={r.today} unit={unit} findings={findings} corrects={{ id: x.id, addedOn: x.addedOn }} onDone={() => setEditing(null)} />
-              : <VoidForm id={x.id} onDone={() => setEditing(null)} />
-          ) : null}
+          rowDetail={(x) =>
+            editing?.id === x.id ? (
+              editing.mode === "correct" ? (
+                <ChargeForm
+                  systemId={r.system.id}
+                  today={r.today}
+                  unit={unit}
+                  findings={findings}
+                  corrects={{ id: x.id, addedOn: x.addedOn }}
+                  onDone={() => setEditing(null)}
+                />
+              ) : (
+                <VoidForm id={x.id} onDone={() => setEditing(null)} />
+              )
+            ) : null
+          }
         />
       </section>
 
       <section aria-labelledby="checks" className="space-y-3">
-        <h2 id="checks" className="text-xl font-bold">Leak checks and inspections</h2>
+        <h2 id="checks" className="text-xl font-bold">
+          Leak checks and inspections
+        </h2>
         {canRecord ? <LeakCheckForm systemId={r.system.id} today={r.today} /> : null}
-        {r.leakChecks.length === 0 ? <p className="text-muted">No leak check recorded.</p> : (
-          <ul className="space-y-1">{r.leakChecks.map((c) => <li key={c.id}>{c.checkedOn}: {c.leakFound ? "leak found" : "no leak found"} — {c.by}{c.note ? ` (${c.note})` : ""}</li>)}</ul>
+        {r.leakChecks.length === 0 ? (
+          <p className="text-muted">No leak check recorded.</p>
+        ) : (
+          <ul className="space-y-1">
+            {r.leakChecks.map((c) => (
+              <li key={c.id}>
+                {c.checkedOn}: {c.leakFound ? "leak found" : "no leak found"} — {c.by}
+                {c.note ? ` (${c.note})` : ""}
+              </li>
+            ))}
+          </ul>
         )}
       </section>
 
       <section aria-labelledby="exports" className="space-y-2">
-        <h2 id="exports" className="text-xl font-bold">Records export</h2>
+        <h2 id="exports" className="text-xl font-bold">
+          Records export
+        </h2>
         <p className="flex flex-wrap gap-4">
-          <a className="text-accent underline" href={`/api/systems/${r.system.id}/leak-rate-statement.pdf`} target="_blank" rel="noreferrer">Leak-rate statement (PDF)</a>
-          <a className="text-accent underline" href={`/api/systems/${r.system.id}/records.csv`}>Charge added and findings (CSV)</a>
+          <a
+            className="text-accent underline"
+            href={`/api/systems/${r.system.id}/leak-rate-statement.pdf`}
+            target="_blank"
+            rel="noreferrer"
+          >
+            Leak-rate statement (PDF)
+          </a>
+          <a className="text-accent underline" href={`/api/systems/${r.system.id}/records.csv`}>
+            Charge added and findings (CSV)
+          </a>
         </p>
       </section>
 

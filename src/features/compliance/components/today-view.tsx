@@ -8,17 +8,31 @@ import { Select } from "../../../components/ui/select";
 import { arrangeDue, daysInWords, DUE_KIND_LABELS, formatPercent, STATE_LABELS, type DueSort } from "../model/figures";
 import { readableSource } from "#core/domain/compliance/citations";
 
-const STATE_TONE: Record<string, string> = { overdue: "text-danger font-bold", "due-today": "text-danger font-bold", "due-soon": "text-note font-bold", upcoming: "" };
+const STATE_TONE: Record<string, string> = {
+  overdue: "text-danger font-bold",
+  "due-today": "text-danger font-bold",
+  "due-soon": "text-note font-bold",
+  upcoming: "",
+};
 
 /**
  * The Today lists: what is due or overdue, systems over threshold, open findings, and every
  * system with its latest leak rate. Each figure links to the records beneath it; each deadline
  * names the rule it comes from.
  */
-export function TodayView({ data, storeId, onStoreChange }: { data: TodayData; storeId: string | null; onStoreChange: (id: string | null) => void }) {
+export function TodayView({
+  data,
+  storeId,
+  onStoreChange,
+}: {
+  data: TodayData;
+  storeId: string | null;
+  onStoreChange: (id: string | null) => void;
+}) {
   const [sort, setSort] = useState<DueSort>("due");
   const due = arrangeDue(data.due, storeId, sort);
-  const inStore = <T extends { storeId: string | null }>(rows: T[]) => rows.filter((r) => storeId === null || r.storeId === storeId);
+  const inStore = <T extends { storeId: string | null }>(rows: T[]) =>
+    rows.filter((r) => storeId === null || r.storeId === storeId);
   return (
     <div className="space-y-8">
       <div className="flex flex-wrap gap-4">
@@ -32,40 +46,76 @@ export function TodayView({ data, storeId, onStoreChange }: { data: TodayData; s
           label="Sort due items by"
           value={sort}
           onChange={(e) => setSort(e.target.value as DueSort)}
-          options={[{ value: "due", label: "Due date" }, { value: "store", label: "Store" }, { value: "kind", label: "Kind" }]}
+          options={[
+            { value: "due", label: "Due date" },
+            { value: "store", label: "Store" },
+            { value: "kind", label: "Kind" },
+          ]}
         />
       </div>
 
       <section aria-labelledby="due-heading" className="space-y-2">
-        <h2 id="due-heading" className="text-xl font-bold">Due and overdue</h2>
+        <h2 id="due-heading" className="text-xl font-bold">
+          Due and overdue
+        </h2>
         {due.length === 0 ? (
-          <EmptyState title="Nothing is due">No repairs, verification tests, inspections or detector checks fall due.</EmptyState>
+          <EmptyState title="Nothing is due">
+            No repairs, verification tests, inspections or detector checks fall due.
+          </EmptyState>
         ) : (
           <DataTable
             caption="Due and overdue"
             rows={due}
             rowKey={(r) => `${r.kind}-${r.systemId ?? r.detectorId}-${r.findingId ?? ""}-${r.dueOn}`}
             columns={[
-              { header: "Due", cell: (r) => <span className={STATE_TONE[r.state]}>{r.dueOn ?? "—"}<br /><span className="text-sm">{STATE_LABELS[r.state]}, {daysInWords(r.daysLeft)}</span></span> },
+              {
+                header: "Due",
+                cell: (r) => (
+                  <span className={STATE_TONE[r.state]}>
+                    {r.dueOn ?? "—"}
+                    <br />
+                    <span className="text-sm">
+                      {STATE_LABELS[r.state]}, {daysInWords(r.daysLeft)}
+                    </span>
+                  </span>
+                ),
+              },
               {
                 header: "What",
                 cell: (r) => (
                   <>
                     <span className="text-sm text-muted">{DUE_KIND_LABELS[r.kind]}</span>
                     <br />
-                    <Link className="text-accent underline" to={r.link}>{r.what}</Link>
+                    <Link className="text-accent underline" to={r.link}>
+                      {r.what}
+                    </Link>
                     <p className="mt-1 max-w-prose text-sm text-muted">Rule: {readableSource(r.source)}</p>
                   </>
                 ),
               },
-              { header: "Where", cell: (r) => <>{r.storeName ?? "Company"}{r.systemName ? <><br />{r.systemName}</> : null}</> },
+              {
+                header: "Where",
+                cell: (r) => (
+                  <>
+                    {r.storeName ?? "Company"}
+                    {r.systemName ? (
+                      <>
+                        <br />
+                        {r.systemName}
+                      </>
+                    ) : null}
+                  </>
+                ),
+              },
             ]}
           />
         )}
       </section>
 
       <section aria-labelledby="over-heading" className="space-y-2">
-        <h2 id="over-heading" className="text-xl font-bold">Systems over threshold</h2>
+        <h2 id="over-heading" className="text-xl font-bold">
+          Systems over threshold
+        </h2>
         {inStore(data.overThreshold).length === 0 ? (
           <p className="text-muted">No system has an unrepaired leak rate above its threshold.</p>
         ) : (
@@ -74,18 +124,42 @@ export function TodayView({ data, storeId, onStoreChange }: { data: TodayData; s
             rows={inStore(data.overThreshold)}
             rowKey={(r) => r.systemId}
             columns={[
-              { header: "System", cell: (r) => <Link className="text-accent underline" to={r.link}>{r.systemName}</Link> },
+              {
+                header: "System",
+                cell: (r) => (
+                  <Link className="text-accent underline" to={r.link}>
+                    {r.systemName}
+                  </Link>
+                ),
+              },
               { header: "Store", cell: (r) => r.storeName },
-              { header: "Leak rate", cell: (r) => <Link className="font-bold text-danger underline" to={r.link}>{formatPercent(r.percent)}</Link> },
+              {
+                header: "Leak rate",
+                cell: (r) => (
+                  <Link className="font-bold text-danger underline" to={r.link}>
+                    {formatPercent(r.percent)}
+                  </Link>
+                ),
+              },
               { header: "Threshold", cell: (r) => `${r.thresholdPercent} %` },
-              { header: "Calculated", cell: (r) => <>{r.on}<p className="max-w-xs text-sm text-muted">{readableSource(`${r.partTitle}; ${r.source}`)}</p></> },
+              {
+                header: "Calculated",
+                cell: (r) => (
+                  <>
+                    {r.on}
+                    <p className="max-w-xs text-sm text-muted">{readableSource(`${r.partTitle}; ${r.source}`)}</p>
+                  </>
+                ),
+              },
             ]}
           />
         )}
       </section>
 
       <section aria-labelledby="findings-heading" className="space-y-2">
-        <h2 id="findings-heading" className="text-xl font-bold">Open findings</h2>
+        <h2 id="findings-heading" className="text-xl font-bold">
+          Open findings
+        </h2>
         {inStore(data.openFindings).length === 0 ? (
           <p className="text-muted">No open findings.</p>
         ) : (
@@ -94,29 +168,91 @@ export function TodayView({ data, storeId, onStoreChange }: { data: TodayData; s
             rows={inStore(data.openFindings)}
             rowKey={(r) => r.id}
             columns={[
-              { header: "Finding", cell: (r) => <Link className="text-accent underline" to={r.link}>{r.component ? COMPONENT_LABELS[r.component as (typeof FINDING_COMPONENTS)[number]] : "Leak"} on {r.systemName ?? "no system"}</Link> },
+              {
+                header: "Finding",
+                cell: (r) => (
+                  <Link className="text-accent underline" to={r.link}>
+                    {r.component ? COMPONENT_LABELS[r.component as (typeof FINDING_COMPONENTS)[number]] : "Leak"} on{" "}
+                    {r.systemName ?? "no system"}
+                  </Link>
+                ),
+              },
               { header: "Status", cell: (r) => (r.status === "verified" ? "verified, ready to close" : r.status) },
               { header: "Store", cell: (r) => r.storeName },
               { header: "Found", cell: (r) => r.foundOn },
-              { header: "Deadline", cell: (r) => (r.deadline ? <><span className="font-bold">{r.deadline}</span><br /><span className="block max-w-[13rem] text-sm text-muted">{readableSource(r.deadlineSource ?? "")}</span></> : "—") },
+              {
+                header: "Deadline",
+                cell: (r) =>
+                  r.deadline ? (
+                    <>
+                      <span className="font-bold">{r.deadline}</span>
+                      <br />
+                      <span className="block max-w-[13rem] text-sm text-muted">
+                        {readableSource(r.deadlineSource ?? "")}
+                      </span>
+                    </>
+                  ) : (
+                    "—"
+                  ),
+              },
             ]}
           />
         )}
       </section>
 
       <section aria-labelledby="systems-heading" className="space-y-2">
-        <h2 id="systems-heading" className="text-xl font-bold">Systems</h2>
+        <h2 id="systems-heading" className="text-xl font-bold">
+          Systems
+        </h2>
         <DataTable
           caption="Systems and their latest leak rate"
           rows={inStore(data.systems)}
           rowKey={(r) => r.id}
           columns={[
-            { header: "System", cell: (r) => <Link className="text-accent underline" to={r.link}>{r.name}</Link> },
+            {
+              header: "System",
+              cell: (r) => (
+                <Link className="text-accent underline" to={r.link}>
+                  {r.name}
+                </Link>
+              ),
+            },
             { header: "Store", cell: (r) => r.storeName },
             { header: "Refrigerant", cell: (r) => r.refrigerantId },
-            { header: "Latest leak rate", cell: (r) => (r.latestPercent === null ? "no additions" : <><Link className={`underline ${r.breachOpen ? "font-bold text-danger" : "text-accent"}`} to={`${r.link}#leak-rates`}>{formatPercent(r.latestPercent)} on {r.latestOn}</Link>{r.repairedSince ? <span className="block text-sm text-muted">above the threshold; repaired since</span> : null}</>) },
-            { header: "Threshold", cell: (r) => (r.thresholdPercent === null ? "none applies" : `${r.thresholdPercent} %`) },
-            { header: "Next inspection", cell: (r) => (r.nextInspection ? <Link className="text-accent underline" to={`${r.link}#checks`}>{r.nextInspection}</Link> : "—") },
+            {
+              header: "Latest leak rate",
+              cell: (r) =>
+                r.latestPercent === null ? (
+                  "no additions"
+                ) : (
+                  <>
+                    <Link
+                      className={`underline ${r.breachOpen ? "font-bold text-danger" : "text-accent"}`}
+                      to={`${r.link}#leak-rates`}
+                    >
+                      {formatPercent(r.latestPercent)} on {r.latestOn}
+                    </Link>
+                    {r.repairedSince ? (
+                      <span className="block text-sm text-muted">above the threshold; repaired since</span>
+                    ) : null}
+                  </>
+                ),
+            },
+            {
+              header: "Threshold",
+              cell: (r) => (r.thresholdPercent === null ? "none applies" : `${r.thresholdPercent} %`),
+            },
+            {
+              header: "Next inspection",
+              cell: (r) =>
+                r.nextInspection ? (
+                  <Link className="text-accent underline" to={`${r.link}#checks`}>
+                    {r.nextInspection}
+                  </Link>
+                ) : (
+                  "—"
+                ),
+            },
           ]}
         />
       </section>

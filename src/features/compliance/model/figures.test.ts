@@ -3,8 +3,20 @@ import type { DueItem } from "#core/contracts/compliance";
 import { arrangeDue, daysInWords, formatMass } from "./figures";
 
 const item = (over: Partial<DueItem>): DueItem => ({
-  kind: "repair", what: "x", dueOn: "2026-05-01", state: "upcoming", daysLeft: 3, source: "s", storeId: "a", storeName: "A",
-  systemId: null, systemName: null, findingId: null, detectorId: null, link: "/", ...over,
+  kind: "repair",
+  what: "x",
+  dueOn: "2026-05-01",
+  state: "upcoming",
+  daysLeft: 3,
+  source: "s",
+  storeId: "a",
+  storeName: "A",
+  systemId: null,
+  systemName: null,
+  findingId: null,
+  detectorId: null,
+  link: "/",
+  ...over,
 });
 
 describe("Today figures", () => {
@@ -14,7 +26,11 @@ describe("Today figures", () => {
   });
 
   it("filters by store and sorts by due date, store or kind, undated first", () => {
-    const list = [item({ what: "b", dueOn: "2026-05-03", storeId: "b", storeName: "B" }), item({ what: "n", dueOn: null, kind: "detector-check", storeId: null, storeName: null }), item({ what: "a", kind: "inspection" })];
+    const list = [
+      item({ what: "b", dueOn: "2026-05-03", storeId: "b", storeName: "B" }),
+      item({ what: "n", dueOn: null, kind: "detector-check", storeId: null, storeName: null }),
+      item({ what: "a", kind: "inspection" }),
+    ];
     expect(arrangeDue(list, null, "due").map((i) => i.what)).toEqual(["n", "a", "b"]);
     expect(arrangeDue(list, "b", "due").map((i) => i.what)).toEqual(["b"]);
     expect(arrangeDue(list, null, "kind").map((i) => i.what)).toEqual(["n", "a", "b"]);

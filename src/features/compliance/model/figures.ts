@@ -12,7 +12,12 @@ export function formatPercent(p: number): string {
   return `${p.toFixed(1)} %`;
 }
 
-export const STATE_LABELS: Record<DueItem["state"], string> = { overdue: "Overdue", "due-today": "Due today", "due-soon": "Due soon", upcoming: "Upcoming" };
+export const STATE_LABELS: Record<DueItem["state"], string> = {
+  overdue: "Overdue",
+  "due-today": "Due today",
+  "due-soon": "Due soon",
+  upcoming: "Upcoming",
+};
 
 export const DUE_KIND_LABELS: Record<DueItem["kind"], string> = {
   repair: "Repair",

@@ -14,7 +14,8 @@ const listResponse = z.object({ detectors: z.array(detector) });
 export function detectorsQueryOptions(includeArchived: boolean) {
   return queryOptions({
     queryKey: detectorsKeys.list(includeArchived),
-    queryFn: ({ signal }) => api.get(`/api/detectors?includeArchived=${includeArchived}`, listResponse, signal).then((r) => r.detectors),
+    queryFn: ({ signal }) =>
+      api.get(`/api/detectors?includeArchived=${includeArchived}`, listResponse, signal).then((r) => r.detectors),
   });
 }
 
@@ -34,7 +35,8 @@ export function useSaveDetector() {
 export function useArchiveDetector() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ id, archived }: { id: string; archived: boolean }) => api.post(`/api/detectors/${id}/${archived ? "archive" : "restore"}`, detector),
+    mutationFn: ({ id, archived }: { id: string; archived: boolean }) =>
+      api.post(`/api/detectors/${id}/${archived ? "archive" : "restore"}`, detector),
     onSuccess: () => qc.invalidateQueries({ queryKey: detectorsKeys.lists() }),
   });
 }

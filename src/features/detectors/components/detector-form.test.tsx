@@ -7,7 +7,10 @@ import { DetectorForm } from "./detector-form";
 
 beforeEach(() => setCsrfToken("csrf-lead"));
 
-const saved = (body: Record<string, unknown>) => ({ status: 201, body: { id: "8a1b2c3d-4e5f-4a6b-9c7d-0e1f2a3b4c5d", archivedAt: null, checkDueOn: null, overdue: false, ...body } });
+const saved = (body: Record<string, unknown>) => ({
+  status: 201,
+  body: { id: "8a1b2c3d-4e5f-4a6b-9c7d-0e1f2a3b4c5d", archivedAt: null, checkDueOn: null, overdue: false, ...body },
+});
 
 function fillLevel(i: number, name: string, from: string, to: string) {
   fireEvent.change(screen.getByLabelText(`Level ${i} name`), { target: { value: name } });

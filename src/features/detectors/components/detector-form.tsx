@@ -22,7 +22,11 @@ export function DetectorForm({ existing, onDone }: { existing: Detector | null; 
   const save = useSaveDetector();
   const fields = isApiRequestError(save.error) ? save.error.fields : {};
   // The server's paths are "levelScale.1.minPpm"; the editor's are "1.minPpm".
-  const serverLevelErrors = Object.fromEntries(Object.entries(fields).filter(([k]) => k.startsWith("levelScale.")).map(([k, m]) => [k.slice("levelScale.".length), m]));
+  const serverLevelErrors = Object.fromEntries(
+    Object.entries(fields)
+      .filter(([k]) => k.startsWith("levelScale."))
+      .map(([k, m]) => [k.slice("levelScale.".length), m]),
+  );
 
   return (
     <form
@@ -35,18 +39,57 @@ export function DetectorForm({ existing, onDone }: { existing: Detector | null; 
         save.mutate(
           {
             id: existing?.id ?? null,
-            input: { name, principle, transportDelayS: Number(delay), timeConstantS: Number(tau), alarmPpm: Number(alarm), lastCheckedOn: checked || null, levelScale: parsed.bands.length ? parsed.bands : null },
+            input: {
+              name,
+              principle,
+              transportDelayS: Number(delay),
+              timeConstantS: Number(tau),
+              alarmPpm: Number(alarm),
+              lastCheckedOn: checked || null,
+              levelScale: parsed.bands.length ? parsed.bands : null,
+            },
           },
           { onSuccess: onDone },
         );
       }}
     >
       <TextField label="Name" value={name} onChange={(e) => setName(e.target.value)} error={fields.name} />
-      <Select label="Sensing principle" value={principle} onChange={(e) => setPrinciple(e.target.value as DetectorInput["principle"])} options={SENSING_PRINCIPLES.map((p) => ({ value: p, label: PRINCIPLE_LABELS[p] }))} error={fields.principle} />
-      <TextField label="Transport delay (s)" inputMode="decimal" value={delay} onChange={(e) => setDelay(e.target.value)} error={fields.transportDelayS} hint="Hose and pump: time from the probe tip to the sensor" />
-      <TextField label="Response time constant (s)" inputMode="decimal" value={tau} onChange={(e) => setTau(e.target.value)} error={fields.timeConstantS} />
-      <TextField label="Alarm level (ppm)" inputMode="decimal" value={alarm} onChange={(e) => setAlarm(e.target.value)} error={fields.alarmPpm} />
-      <TextField label="Last calibration / bump check" type="date" value={checked} onChange={(e) => setChecked(e.target.value)} error={fields.lastCheckedOn} />
+      <Select
+        label="Sensing principle"
+        value={principle}
+        onChange={(e) => setPrinciple(e.target.value as DetectorInput["principle"])}
+        options={SENSING_PRINCIPLES.map((p) => ({ value: p, label: PRINCIPLE_LABELS[p] }))}
+        error={fields.principle}
+      />
+      <TextField
+        label="Transport delay (s)"
+        inputMode="decimal"
+        value={delay}
+        onChange={(e) => setDelay(e.target.value)}
+        error={fields.transportDelayS}
+        hint="Hose and pump: time from the probe tip to the sensor"
+      />
+      <TextField
+        label="Response time constant (s)"
+        inputMode="decimal"
+        value={tau}
+        onChange={(e) => setTau(e.target.value)}
+        error={fields.timeConstantS}
+      />
+      <TextField
+        label="Alarm level (ppm)"
+        inputMode="decimal"
+        value={alarm}
+        onChange={(e) => setAlarm(e.target.value)}
+        error={fields.alarmPpm}
+      />
+      <TextField
+        label="Last calibration / bump check"
+        type="date"
+        value={checked}
+        onChange={(e) => setChecked(e.target.value)}
+        error={fields.lastCheckedOn}
+      />
       <LevelScaleEditor
         rows={levels}
         errors={{ ...serverLevelErrors, ...levelErrors }}
@@ -59,8 +102,12 @@ export function DetectorForm({ existing, onDone }: { existing: Detector | null; 
       {Object.keys(levelErrors).length ? <Alert tone="error">Please correct the marked levels.</Alert> : null}
       {save.isError && !Object.keys(fields).length ? <Alert tone="error">{save.error.message}</Alert> : null}
       <div className="flex gap-2 sm:col-span-2">
-        <Button type="submit" busy={save.isPending}>{existing ? "Save changes" : "Add detector"}</Button>
-        <Button variant="secondary" onClick={onDone}>Cancel</Button>
+        <Button type="submit" busy={save.isPending}>
+          {existing ? "Save changes" : "Add detector"}
+        </Button>
+        <Button variant="secondary" onClick={onDone}>
+          Cancel
+        </Button>
       </div>
     </form>
   );

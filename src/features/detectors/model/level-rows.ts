@@ -9,7 +9,11 @@ export interface LevelRow {
 }
 
 export function toRows(bands: readonly LevelBand[] | null): LevelRow[] {
-  return (bands ?? []).map((b) => ({ level: b.level, minPpm: String(b.minPpm), maxPpm: b.maxPpm === null ? "" : String(b.maxPpm) }));
+  return (bands ?? []).map((b) => ({
+    level: b.level,
+    minPpm: String(b.minPpm),
+    maxPpm: b.maxPpm === null ? "" : String(b.maxPpm),
+  }));
 }
 
 function ppm(text: string): number | null {
@@ -29,7 +33,8 @@ export function parseRows(rows: readonly LevelRow[]): { bands: LevelBand[]; prob
     const max = r.maxPpm.trim() === "" ? null : ppm(r.maxPpm);
     if (!r.level.trim()) problems[`${i}.level`] = "is required";
     if (min === null) problems[`${i}.minPpm`] = "must be a number of ppm, 0 or more";
-    if (r.maxPpm.trim() !== "" && max === null) problems[`${i}.maxPpm`] = "must be a number of ppm, or blank for the top level";
+    if (r.maxPpm.trim() !== "" && max === null)
+      problems[`${i}.maxPpm`] = "must be a number of ppm, or blank for the top level";
     else if (min !== null && max !== null && !(max > min)) problems[`${i}.maxPpm`] = "must be above the lower bound";
     return { level: r.level.trim(), minPpm: min ?? 0, maxPpm: max };
   });

@@ -10,7 +10,8 @@ export type SweepFinding = z.infer<typeof findingDetail>;
 export function storeFindingsQueryOptions(storeId: string) {
   return queryOptions({
     queryKey: fieldmapKeys.findings(storeId),
-    queryFn: async ({ signal }) => (await api.get(`/api/stores/${storeId}/findings`, findingListResponse, signal)).findings,
+    queryFn: async ({ signal }) =>
+      (await api.get(`/api/stores/${storeId}/findings`, findingListResponse, signal)).findings,
   });
 }
 
@@ -48,7 +49,12 @@ export function useMarkRepaired(storeId: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: async ({ finding, on, note }: { finding: SweepFinding; on: string; note: string }) => {
-      if (finding.status === "suspected") await api.post(`/api/findings/${finding.id}/events`, null, { action: "confirm", on, note: "Confirmed at the repair." });
+      if (finding.status === "suspected")
+        await api.post(`/api/findings/${finding.id}/events`, null, {
+          action: "confirm",
+          on,
+          note: "Confirmed at the repair.",
+        });
       return api.post(`/api/findings/${finding.id}/events`, null, { action: "repair", on, note });
     },
     onSuccess: () => qc.invalidateQueries({ queryKey: fieldmapKeys.findings(storeId) }),

@@ -23,24 +23,56 @@ export type SuspectSpot = z.infer<typeof candidateSchema>;
 
 const analysisSchema = z.object({
   sweepId: z.uuid(),
-  params: z.object({ transportDelayS: z.number(), timeConstantS: z.number(), alarmPpm: z.number(), cellSize: z.number() }),
+  params: z.object({
+    transportDelayS: z.number(),
+    timeConstantS: z.number(),
+    alarmPpm: z.number(),
+    cellSize: z.number(),
+  }),
   candidates: z.array(candidateSchema),
   background: z.object({ ppm: z.number() }),
-  diagnostics: z.array(z.object({ kind: z.string(), message: z.string(), fixtureId: z.string().optional(), zoneId: z.string().optional() })),
+  diagnostics: z.array(
+    z.object({
+      kind: z.string(),
+      message: z.string(),
+      fixtureId: z.string().optional(),
+      zoneId: z.string().optional(),
+    }),
+  ),
   assumptions: z.array(z.string()),
-  readings: z.array(z.object({ index: z.number(), readingId: z.string(), raw: point, corrected: point, t: z.number(), ppm: z.number(), flags: z.array(z.string()) })),
+  readings: z.array(
+    z.object({
+      index: z.number(),
+      readingId: z.string(),
+      raw: point,
+      corrected: point,
+      t: z.number(),
+      ppm: z.number(),
+      flags: z.array(z.string()),
+    }),
+  ),
   readingsRevision: z.number(),
   currentReadingsRevision: z.number(),
   stale: z.boolean(),
   recomputing: z.boolean(),
   computedAt: z.string(),
   durationMs: z.number(),
-  field: z.object({ width: z.number(), height: z.number(), cellSize: z.number(), values: z.string(), confidence: z.string() }),
+  field: z.object({
+    width: z.number(),
+    height: z.number(),
+    cellSize: z.number(),
+    values: z.string(),
+    confidence: z.string(),
+  }),
 });
 
 export type Analysis = Omit<z.infer<typeof analysisSchema>, "field"> & { field: ReturnType<typeof decodeField> };
 
-export async function getAnalysis(sweepId: string, transportDelayS: number | null, signal?: AbortSignal): Promise<Analysis> {
+export async function getAnalysis(
+  sweepId: string,
+  transportDelayS: number | null,
+  signal?: AbortSignal,
+): Promise<Analysis> {
   const q = transportDelayS === null ? "" : `?transportDelayS=${encodeURIComponent(transportDelayS)}`;
   const body = await api.get(`/api/sweeps/${sweepId}/analysis${q}`, analysisSchema, signal);
   return { ...body, field: decodeField(body.field) };

@@ -9,6 +9,7 @@ export function useFixtureTrends(storeId: string, a: string | null, b: string | 
   if (b) q.set("b", b);
   return useQuery({
     queryKey: fieldmapKeys.trends(storeId, a, b),
-    queryFn: ({ signal }) => api.get(`/api/stores/${storeId}/fixture-trends${q.size ? `?${q}` : ""}`, fixtureTrendsResponse, signal),
+    queryFn: ({ signal }) =>
+      api.get(`/api/stores/${storeId}/fixture-trends${q.size ? `?${q}` : ""}`, fixtureTrendsResponse, signal),
   });
 }

@@ -9,7 +9,8 @@ export type PlanInfo = z.infer<typeof plan>;
 export function storePlansQueryOptions(storeId: string) {
   return queryOptions({
     queryKey: fieldmapKeys.plans(storeId),
-    queryFn: async ({ signal }) => (await api.get(`/api/stores/${storeId}/plans`, z.object({ plans: z.array(plan) }), signal)).plans,
+    queryFn: async ({ signal }) =>
+      (await api.get(`/api/stores/${storeId}/plans`, z.object({ plans: z.array(plan) }), signal)).plans,
     staleTime: 60_000,
   });
 }
@@ -19,7 +20,11 @@ export function useStorePlans(storeId: string) {
 }
 
 export function planFixturesQueryOptions(planId: string) {
-  return queryOptions({ queryKey: fieldmapKeys.fixtures(planId), queryFn: ({ signal }) => api.get(`/api/plans/${planId}/fixtures`, fixturesResponse, signal), staleTime: 60_000 });
+  return queryOptions({
+    queryKey: fieldmapKeys.fixtures(planId),
+    queryFn: ({ signal }) => api.get(`/api/plans/${planId}/fixtures`, fixturesResponse, signal),
+    staleTime: 60_000,
+  });
 }
 
 export function usePlanFixtures(planId: string | undefined) {

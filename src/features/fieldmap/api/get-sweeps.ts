@@ -9,7 +9,8 @@ export type SweepInfo = z.infer<typeof sweep>;
 export function storeSweepsQueryOptions(storeId: string) {
   return queryOptions({
     queryKey: fieldmapKeys.sweeps(storeId),
-    queryFn: async ({ signal }) => (await api.get(`/api/stores/${storeId}/sweeps`, z.object({ sweeps: z.array(sweep) }), signal)).sweeps,
+    queryFn: async ({ signal }) =>
+      (await api.get(`/api/stores/${storeId}/sweeps`, z.object({ sweeps: z.array(sweep) }), signal)).sweeps,
   });
 }
 
@@ -18,7 +19,10 @@ export function useStoreSweeps(storeId: string) {
 }
 
 export function sweepQueryOptions(sweepId: string) {
-  return queryOptions({ queryKey: fieldmapKeys.sweep(sweepId), queryFn: ({ signal }) => api.get(`/api/sweeps/${sweepId}`, sweep, signal) });
+  return queryOptions({
+    queryKey: fieldmapKeys.sweep(sweepId),
+    queryFn: ({ signal }) => api.get(`/api/sweeps/${sweepId}`, sweep, signal),
+  });
 }
 
 export function useSweep(sweepId: string) {

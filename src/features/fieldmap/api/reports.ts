@@ -9,7 +9,8 @@ export function useReportSends(sweepId: string) {
   return useQuery(
     queryOptions({
       queryKey: fieldmapKeys.sends(sweepId),
-      queryFn: async ({ signal }) => (await api.get(`/api/sweeps/${sweepId}/report/sends`, z.object({ sends: z.array(reportSend) }), signal)).sends,
+      queryFn: async ({ signal }) =>
+        (await api.get(`/api/sweeps/${sweepId}/report/sends`, z.object({ sends: z.array(reportSend) }), signal)).sends,
     }),
   );
 }
@@ -17,7 +18,14 @@ export function useReportSends(sweepId: string) {
 export function useReportRecipients(sweepId: string, enabled: boolean) {
   return useQuery({
     queryKey: fieldmapKeys.recipients(sweepId),
-    queryFn: async ({ signal }) => (await api.get(`/api/sweeps/${sweepId}/report/recipients`, z.object({ storeContacts: z.array(reportRecipient) }), signal)).storeContacts,
+    queryFn: async ({ signal }) =>
+      (
+        await api.get(
+          `/api/sweeps/${sweepId}/report/recipients`,
+          z.object({ storeContacts: z.array(reportRecipient) }),
+          signal,
+        )
+      ).storeContacts,
     enabled,
   });
 }

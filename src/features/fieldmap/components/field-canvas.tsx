@@ -1,7 +1,16 @@
 import { useEffect, useMemo, useRef, useState } from "react";
 import type { FieldGridLike } from "#core/domain/fieldmap/field-grid";
 import { drawFieldLayer, paintFieldCanvas, type FieldPaint } from "../model/draw-field-layer";
-import { drawFixtures, drawPath, drawRiskPoints, drawSpots, drawTaps, type OverlayFixture, type OverlayReading, type OverlaySpot } from "../model/draw-overlays";
+import {
+  drawFixtures,
+  drawPath,
+  drawRiskPoints,
+  drawSpots,
+  drawTaps,
+  type OverlayFixture,
+  type OverlayReading,
+  type OverlaySpot,
+} from "../model/draw-overlays";
 import type { LayerState } from "../model/layers";
 import { fitView, focusView, spotAt, type MapView } from "../model/view";
 
@@ -66,7 +75,21 @@ export function FieldCanvas(p: FieldCanvasProps) {
     if (p.layers.corrected) drawTaps(ctx, view, p.readings, "corrected", p.layers.taps);
     if (p.layers.riskPoints) drawRiskPoints(ctx, view, p.fixtures);
     if (p.layers.suspects) drawSpots(ctx, view, p.spots, p.selected);
-  }, [plan, painted, view, p.layers, p.fixtures, p.readings, p.spots, p.selected, p.width, height, p.widthM, p.heightM, p.field]);
+  }, [
+    plan,
+    painted,
+    view,
+    p.layers,
+    p.fixtures,
+    p.readings,
+    p.spots,
+    p.selected,
+    p.width,
+    height,
+    p.widthM,
+    p.heightM,
+    p.field,
+  ]);
 
   return (
     <canvas

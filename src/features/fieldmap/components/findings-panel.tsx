@@ -18,8 +18,20 @@ function RepairForm({ storeId, finding, today }: { storeId: string; finding: Swe
         repair.mutate({ finding, on, note });
       }}
     >
-      <TextField label="Repaired on" type="date" value={on} max={today} onChange={(e) => setOn(e.currentTarget.value)} />
-      <TextField label="What was done" value={note} onChange={(e) => setNote(e.currentTarget.value)} error={noteError} placeholder="e.g. joint re-brazed, pressure tested" />
+      <TextField
+        label="Repaired on"
+        type="date"
+        value={on}
+        max={today}
+        onChange={(e) => setOn(e.currentTarget.value)}
+      />
+      <TextField
+        label="What was done"
+        value={note}
+        onChange={(e) => setNote(e.currentTarget.value)}
+        error={noteError}
+        placeholder="e.g. joint re-brazed, pressure tested"
+      />
       <Button type="submit" className="justify-self-start" busy={repair.isPending} disabled={note.trim() === ""}>
         Mark repaired
       </Button>
@@ -29,7 +41,19 @@ function RepairForm({ storeId, finding, today }: { storeId: string; finding: Swe
 }
 
 /** Findings made from this sweep, with the repair step for those still open. */
-export function FindingsPanel({ storeId, findings, canRecord, today, label }: { storeId: string; findings: SweepFinding[]; canRecord: boolean; today: string; label(id: string | null): string | null }) {
+export function FindingsPanel({
+  storeId,
+  findings,
+  canRecord,
+  today,
+  label,
+}: {
+  storeId: string;
+  findings: SweepFinding[];
+  canRecord: boolean;
+  today: string;
+  label(id: string | null): string | null;
+}) {
   if (findings.length === 0) return <p className="text-sm text-muted">No findings from this sweep yet.</p>;
   return (
     <ul className="space-y-3">
@@ -47,7 +71,9 @@ export function FindingsPanel({ storeId, findings, canRecord, today, label }: { 
               </li>
             ))}
           </ul>
-          {canRecord && (f.status === "suspected" || f.status === "confirmed") ? <RepairForm storeId={storeId} finding={f} today={today} /> : null}
+          {canRecord && (f.status === "suspected" || f.status === "confirmed") ? (
+            <RepairForm storeId={storeId} finding={f} today={today} />
+          ) : null}
         </li>
       ))}
     </ul>

@@ -7,7 +7,15 @@ import { isApiRequestError } from "../../../lib/api-client";
 import { useReportRecipients, useReportSends, useSendReport } from "../api/reports";
 
 /** Download the PDF or the readings CSV; e-mail the PDF to the store contact or anyone typed in. */
-export function ReportPanel({ sweepId, canSend, zoned }: { sweepId: string; canSend: boolean; zoned(iso: string): string }) {
+export function ReportPanel({
+  sweepId,
+  canSend,
+  zoned,
+}: {
+  sweepId: string;
+  canSend: boolean;
+  zoned(iso: string): string;
+}) {
   const sends = useReportSends(sweepId);
   const contacts = useReportRecipients(sweepId, canSend);
   const send = useSendReport(sweepId);
@@ -19,10 +27,18 @@ export function ReportPanel({ sweepId, canSend, zoned }: { sweepId: string; canS
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap gap-2">
-        <a className="inline-flex min-h-11 items-center rounded-md edge bg-surface px-4 font-bold no-underline" href={`/api/sweeps/${sweepId}/report.pdf`} download>
+        <a
+          className="inline-flex min-h-11 items-center rounded-md edge bg-surface px-4 font-bold no-underline"
+          href={`/api/sweeps/${sweepId}/report.pdf`}
+          download
+        >
           Download the PDF report
         </a>
-        <a className="inline-flex min-h-11 items-center rounded-md edge bg-surface px-4 font-bold no-underline" href={`/api/sweeps/${sweepId}/readings.csv`} download>
+        <a
+          className="inline-flex min-h-11 items-center rounded-md edge bg-surface px-4 font-bold no-underline"
+          href={`/api/sweeps/${sweepId}/readings.csv`}
+          download
+        >
           Readings as CSV
         </a>
       </div>
@@ -38,12 +54,22 @@ export function ReportPanel({ sweepId, canSend, zoned }: { sweepId: string; canS
         >
           <p className="font-bold">E-mail the report</p>
           <Checkbox
-            label={contacts.data?.length ? `The store contact: ${contacts.data.map((c) => `${c.name} <${c.email}>`).join(", ")}` : "The store contact (this store has none yet)"}
+            label={
+              contacts.data?.length
+                ? `The store contact: ${contacts.data.map((c) => `${c.name} <${c.email}>`).join(", ")}`
+                : "The store contact (this store has none yet)"
+            }
             checked={toContacts && (contacts.data?.length ?? 0) > 0}
             disabled={!contacts.data?.length}
             onChange={(e) => setToContacts(e.currentTarget.checked)}
           />
-          <TextField label="Other addresses" hint="Separate several with commas. Recipients need no account." value={addresses} onChange={(e) => setAddresses(e.currentTarget.value)} error={addressError} />
+          <TextField
+            label="Other addresses"
+            hint="Separate several with commas. Recipients need no account."
+            value={addresses}
+            onChange={(e) => setAddresses(e.currentTarget.value)}
+            error={addressError}
+          />
           <TextField label="Message (optional)" value={message} onChange={(e) => setMessage(e.currentTarget.value)} />
           <Button type="submit" busy={send.isPending}>
             Send the report

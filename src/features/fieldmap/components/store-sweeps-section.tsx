@@ -9,27 +9,45 @@ const LINK = "inline-flex min-h-11 items-center rounded-md px-4 font-bold no-und
 /** The store page's sweeps section: the latest few with their field maps (starting one is in the page header). */
 export function StoreSweepsSection({ storeId, timeZone }: { storeId: string; timeZone: string }) {
   const sweeps = useStoreSweeps(storeId);
-  const when = (iso: string) => new Intl.DateTimeFormat("en-GB", { timeZone, dateStyle: "medium", timeStyle: "short" }).format(new Date(iso));
+  const when = (iso: string) =>
+    new Intl.DateTimeFormat("en-GB", { timeZone, dateStyle: "medium", timeStyle: "short" }).format(new Date(iso));
   const latest = [...(sweeps.data ?? [])].sort((a, b) => b.startedAt.localeCompare(a.startedAt)).slice(0, 3);
   return (
     <section aria-labelledby="store-sweeps" className="space-y-3">
-      <h2 id="store-sweeps" className="text-xl font-bold">Sweeps</h2>
+      <h2 id="store-sweeps" className="text-xl font-bold">
+        Sweeps
+      </h2>
       {sweeps.isPending ? <Spinner label="Loading sweeps…" /> : null}
-      {sweeps.isError ? <QueryError error={sweeps.error} what="the sweeps" onRetry={() => void sweeps.refetch()} /> : null}
+      {sweeps.isError ? (
+        <QueryError error={sweeps.error} what="the sweeps" onRetry={() => void sweeps.refetch()} />
+      ) : null}
       {sweeps.data && latest.length === 0 ? <p className="text-muted">No sweeps of this store yet.</p> : null}
       {latest.length ? (
         <ul className="space-y-1">
           {latest.map((s) => (
             <li key={s.id}>
-              <Link className="text-accent underline" to={`/stores/${storeId}/sweeps/${s.id}/map`}>{when(s.startedAt)}</Link>
-              <span className="text-muted"> · {s.technicianName} · {countOf(s.readingCount, "reading")} · {s.status.replace("-", " ")}</span>
+              <Link className="text-accent underline" to={`/stores/${storeId}/sweeps/${s.id}/map`}>
+                {when(s.startedAt)}
+              </Link>
+              <span className="text-muted">
+                {" "}
+                · {s.technicianName} · {countOf(s.readingCount, "reading")} · {s.status.replace("-", " ")}
+              </span>
             </li>
           ))}
         </ul>
       ) : null}
       <div className="flex flex-wrap gap-2">
-        {sweeps.data?.length ? <Link className={`${LINK} edge bg-surface`} to={`/stores/${storeId}/sweeps`}>All sweeps</Link> : null}
-        {(sweeps.data?.length ?? 0) > 1 ? <Link className={`${LINK} edge bg-surface`} to={`/stores/${storeId}/compare`}>Compare months</Link> : null}
+        {sweeps.data?.length ? (
+          <Link className={`${LINK} edge bg-surface`} to={`/stores/${storeId}/sweeps`}>
+            All sweeps
+          </Link>
+        ) : null}
+        {(sweeps.data?.length ?? 0) > 1 ? (
+          <Link className={`${LINK} edge bg-surface`} to={`/stores/${storeId}/compare`}>
+            Compare months
+          </Link>
+        ) : null}
       </div>
     </section>
   );

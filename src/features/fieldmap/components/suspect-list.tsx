@@ -17,16 +17,26 @@ export interface SuspectListProps {
 
 export function SuspectList(p: SuspectListProps) {
   if (p.spots.length === 0) {
-    return <p className="rounded-md edge bg-surface p-4">No credible leak: nothing stands out from the background on this sweep.</p>;
+    return (
+      <p className="rounded-md edge bg-surface p-4">
+        No credible leak: nothing stands out from the background on this sweep.
+      </p>
+    );
   }
   const len = (m: number) => formatLength(m, p.unit, { decimals: 1 });
   return (
     <ol className="space-y-3" aria-label="Suspect spots">
       {p.spots.map((s) => (
-        <li key={s.rank} className={`rounded-md edge bg-surface p-3 ${p.selected === s.rank ? "ring-2 ring-accent" : ""}`} data-testid="suspect-spot">
+        <li
+          key={s.rank}
+          className={`rounded-md edge bg-surface p-3 ${p.selected === s.rank ? "ring-2 ring-accent" : ""}`}
+          data-testid="suspect-spot"
+        >
           <div className="flex items-start justify-between gap-2">
             <p className="font-bold">
-              <span className="mr-2 inline-flex h-7 w-7 items-center justify-center rounded-full bg-[#14143c] text-white">{s.rank}</span>
+              <span className="mr-2 inline-flex h-7 w-7 items-center justify-center rounded-full bg-[#14143c] text-white">
+                {s.rank}
+              </span>
               {p.fixtureLabel(s.fixtureId) ?? "Open floor"}
             </p>
             <span className="text-sm text-muted" title="For ordering only, 0 to 1">
@@ -46,7 +56,10 @@ export function SuspectList(p: SuspectListProps) {
             <dd>{p.fixtureLabel(s.riskPointId) ?? "none near"}</dd>
             <dt>Strength</dt>
             <dd>
-              {s.strength.toFixed(2)} of the strongest{Number.isFinite(s.strengthGPerYear) ? `, about ${Math.round(s.strengthGPerYear)} g/yr if well mixed` : ""}
+              {s.strength.toFixed(2)} of the strongest
+              {Number.isFinite(s.strengthGPerYear)
+                ? `, about ${Math.round(s.strengthGPerYear)} g/yr if well mixed`
+                : ""}
             </dd>
           </dl>
           <div className="mt-2 flex flex-wrap gap-2">

@@ -1,5 +1,13 @@
 /** A small line of a fixture's peak ppm across sweeps; gaps where a sweep did not sample it. */
-export function TrendSparkline({ values, highlight, label }: { values: (number | null)[]; highlight: number[]; label: string }) {
+export function TrendSparkline({
+  values,
+  highlight,
+  label,
+}: {
+  values: (number | null)[];
+  highlight: number[];
+  label: string;
+}) {
   const w = 120;
   const h = 28;
   const max = Math.max(1, ...values.map((v) => v ?? 0));
@@ -19,7 +27,17 @@ export function TrendSparkline({ values, highlight, label }: { values: (number |
       {segments.map((pts, i) => (
         <polyline key={i} points={pts} fill="none" stroke="#1f4e5f" strokeWidth={1.5} />
       ))}
-      {values.map((v, i) => (v === null ? null : <circle key={i} cx={x(i)} cy={y(v)} r={highlight.includes(i) ? 3.2 : 1.8} fill={highlight.includes(i) ? "#9b2c2c" : "#1f4e5f"} />))}
+      {values.map((v, i) =>
+        v === null ? null : (
+          <circle
+            key={i}
+            cx={x(i)}
+            cy={y(v)}
+            r={highlight.includes(i) ? 3.2 : 1.8}
+            fill={highlight.includes(i) ? "#9b2c2c" : "#1f4e5f"}
+          />
+        ),
+      )}
     </svg>
   );
 }

@@ -13,7 +13,11 @@ export interface FieldPaint {
   opacity?: number;
 }
 
-export function paintFieldCanvas(grid: FieldGridLike, paint: FieldPaint, canvas?: HTMLCanvasElement): HTMLCanvasElement {
+export function paintFieldCanvas(
+  grid: FieldGridLike,
+  paint: FieldPaint,
+  canvas?: HTMLCanvasElement,
+): HTMLCanvasElement {
   const c = canvas ?? document.createElement("canvas");
   c.width = grid.width;
   c.height = grid.height;
@@ -25,7 +29,12 @@ export function paintFieldCanvas(grid: FieldGridLike, paint: FieldPaint, canvas?
   return c;
 }
 
-export function drawFieldLayer(ctx: CanvasRenderingContext2D, painted: HTMLCanvasElement, grid: FieldGridLike, view: MapView): void {
+export function drawFieldLayer(
+  ctx: CanvasRenderingContext2D,
+  painted: HTMLCanvasElement,
+  grid: FieldGridLike,
+  view: MapView,
+): void {
   ctx.save();
   ctx.imageSmoothingEnabled = false;
   const size = grid.cellSize * view.scale;

@@ -53,7 +53,11 @@ export function drawFixtures(ctx: CanvasRenderingContext2D, view: MapView, fixtu
   ctx.restore();
 }
 
-export function drawRiskPoints(ctx: CanvasRenderingContext2D, view: MapView, fixtures: readonly OverlayFixture[]): void {
+export function drawRiskPoints(
+  ctx: CanvasRenderingContext2D,
+  view: MapView,
+  fixtures: readonly OverlayFixture[],
+): void {
   ctx.save();
   for (const f of fixtures) {
     if (!f.point) continue;
@@ -89,7 +93,13 @@ export function drawPath(ctx: CanvasRenderingContext2D, view: MapView, readings:
   ctx.restore();
 }
 
-export function drawTaps(ctx: CanvasRenderingContext2D, view: MapView, readings: readonly OverlayReading[], which: "raw" | "corrected", linkToRaw: boolean): void {
+export function drawTaps(
+  ctx: CanvasRenderingContext2D,
+  view: MapView,
+  readings: readonly OverlayReading[],
+  which: "raw" | "corrected",
+  linkToRaw: boolean,
+): void {
   ctx.save();
   for (const r of readings) {
     const p = which === "raw" ? r.raw : r.corrected;
@@ -119,7 +129,12 @@ export function drawTaps(ctx: CanvasRenderingContext2D, view: MapView, readings:
   ctx.restore();
 }
 
-export function drawSpots(ctx: CanvasRenderingContext2D, view: MapView, spots: readonly OverlaySpot[], selected: number | null): void {
+export function drawSpots(
+  ctx: CanvasRenderingContext2D,
+  view: MapView,
+  spots: readonly OverlaySpot[],
+  selected: number | null,
+): void {
   ctx.save();
   for (const s of spots) {
     const [px, py] = toPx(view, s.x, s.y);

@@ -14,4 +14,12 @@ export const LAYER_LABELS: Record<MapLayer, string> = {
 
 export type LayerState = Record<MapLayer, boolean>;
 
-export const DEFAULT_LAYERS: LayerState = { field: true, taps: false, corrected: true, path: true, fixtures: true, riskPoints: true, suspects: true };
+export const DEFAULT_LAYERS: LayerState = {
+  field: true,
+  taps: false,
+  corrected: true,
+  path: true,
+  fixtures: true,
+  riskPoints: true,
+  suspects: true,
+};

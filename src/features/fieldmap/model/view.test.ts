@@ -23,7 +23,10 @@ describe("map view", () => {
 
   it("finds the suspect spot under a click, by its ring or its number", () => {
     const v = fitView(60, 36, 900, 540, 0); // 15 px/m
-    const spots = [{ rank: 1, x: 10, y: 10, radius: 1 }, { rank: 2, x: 30, y: 10, radius: 2 }];
+    const spots = [
+      { rank: 1, x: 10, y: 10, radius: 1 },
+      { rank: 2, x: 30, y: 10, radius: 2 },
+    ];
     expect(spotAt(v, 150, 150, spots)).toBe(1); // the centre of spot 1
     // spot 2's badge sits at the ring's upper right: (450 + 30·0.71, 150 − 30·0.71)
     expect(spotAt(v, 450 + 21.3, 150 - 21.3, spots)).toBe(2);

@@ -15,7 +15,14 @@ export function fitView(widthM: number, heightM: number, canvasW: number, canvas
 }
 
 /** Centres plan point (x, y) with `radiusM` filling about a quarter of the shorter side. */
-export function focusView(x: number, y: number, radiusM: number, canvasW: number, canvasH: number, base: MapView): MapView {
+export function focusView(
+  x: number,
+  y: number,
+  radiusM: number,
+  canvasW: number,
+  canvasH: number,
+  base: MapView,
+): MapView {
   const want = Math.min(canvasW, canvasH) / 4 / Math.max(radiusM, 0.5);
   const scale = Math.max(base.scale, Math.min(want, base.scale * 8));
   return { scale, ox: canvasW / 2 - x * scale, oy: canvasH / 2 - y * scale };
@@ -24,7 +31,12 @@ export function focusView(x: number, y: number, radiusM: number, canvasW: number
 export const toPx = (v: MapView, x: number, y: number): [number, number] => [x * v.scale + v.ox, y * v.scale + v.oy];
 
 /** The spot under a click (its ring or its number badge), nearest first; null when none. */
-export function spotAt(v: MapView, px: number, py: number, spots: readonly { rank: number; x: number; y: number; radius: number }[]): number | null {
+export function spotAt(
+  v: MapView,
+  px: number,
+  py: number,
+  spots: readonly { rank: number; x: number; y: number; radius: number }[],
+): number | null {
   let best: { rank: number; d: number } | null = null;
   for (const s of spots) {
     const [cx, cy] = toPx(v, s.x, s.y);

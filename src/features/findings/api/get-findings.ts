@@ -4,11 +4,16 @@ import { api } from "../../../lib/api-client";
 import { findingsKeys } from "./findings-keys";
 
 export function getFindings(storeId: string, systemId: string | undefined, signal?: AbortSignal) {
-  return api.get(`/api/stores/${storeId}/findings${systemId ? `?systemId=${systemId}` : ""}`, findingListResponse, signal).then((r) => r.findings);
+  return api
+    .get(`/api/stores/${storeId}/findings${systemId ? `?systemId=${systemId}` : ""}`, findingListResponse, signal)
+    .then((r) => r.findings);
 }
 
 export function findingsQueryOptions(storeId: string, systemId?: string) {
-  return queryOptions({ queryKey: findingsKeys.list(storeId, systemId), queryFn: ({ signal }) => getFindings(storeId, systemId, signal) });
+  return queryOptions({
+    queryKey: findingsKeys.list(storeId, systemId),
+    queryFn: ({ signal }) => getFindings(storeId, systemId, signal),
+  });
 }
 
 export function useFindings(storeId: string | undefined, systemId?: string) {
@@ -16,7 +21,10 @@ export function useFindings(storeId: string | undefined, systemId?: string) {
 }
 
 export function findingQueryOptions(id: string) {
-  return queryOptions({ queryKey: findingsKeys.detail(id), queryFn: ({ signal }) => api.get(`/api/findings/${id}`, findingDetail, signal) });
+  return queryOptions({
+    queryKey: findingsKeys.detail(id),
+    queryFn: ({ signal }) => api.get(`/api/findings/${id}`, findingDetail, signal),
+  });
 }
 
 export function useFinding(id: string) {

@@ -10,7 +10,11 @@ import { TextField } from "../../../components/ui/text-field";
 import { formErrorMessage, serverFieldErrors } from "../../../lib/form-errors";
 import { useChangeFinding } from "../api/change-finding";
 
-const REASON_LABELS: Record<(typeof DISMISS_REASONS)[number], string> = { "benign-source": "Benign source (not a leak)", "no-leak-found": "No leak found", other: "Other (say why in the note)" };
+const REASON_LABELS: Record<(typeof DISMISS_REASONS)[number], string> = {
+  "benign-source": "Benign source (not a leak)",
+  "no-leak-found": "No leak found",
+  other: "Other (say why in the note)",
+};
 
 /** The next lifecycle step: one form, its fields following the chosen action. */
 export function FindingActions({ finding, role, today }: { finding: FindingDetail; role: Role; today: string }) {
@@ -22,17 +26,24 @@ export function FindingActions({ finding, role, today }: { finding: FindingDetai
   const [result, setResult] = useState<"passed" | "failed">("passed");
   const [reason, setReason] = useState<(typeof DISMISS_REASONS)[number]>("benign-source");
   const m = useChangeFinding({ onDone: () => setNote("") });
-  const current = action && allowed.includes(action) ? action : allowed[0] ?? null;
+  const current = action && allowed.includes(action) ? action : (allowed[0] ?? null);
   if (!current) return null;
   const fields = serverFieldErrors(m.error);
   const submit = (e: FormEvent) => {
     e.preventDefault();
     const base = { on, note };
     const input =
-      current === "confirm" ? { action: current, ...base, ...(component ? { component: component as (typeof FINDING_COMPONENTS)[number] } : {}) }
-      : current === "initial-test" || current === "follow-up-test" ? { action: current, ...base, result }
-      : current === "dismiss" ? { action: current, ...base, reason }
-      : { action: current, ...base };
+      current === "confirm"
+        ? {
+            action: current,
+            ...base,
+            ...(component ? { component: component as (typeof FINDING_COMPONENTS)[number] } : {}),
+          }
+        : current === "initial-test" || current === "follow-up-test"
+          ? { action: current, ...base, result }
+          : current === "dismiss"
+            ? { action: current, ...base, reason }
+            : { action: current, ...base };
     m.mutate({ kind: "event", findingId: finding.id, input });
   };
   const message = formErrorMessage(m.error);
@@ -42,26 +53,70 @@ export function FindingActions({ finding, role, today }: { finding: FindingDetai
       {message ? <Alert tone="error">{message}</Alert> : null}
       <div className="flex flex-wrap gap-2" role="group" aria-label="Step">
         {allowed.map((a) => (
-          <Button key={a} variant={a === current ? "primary" : "secondary"} aria-pressed={a === current} onClick={() => setAction(a)}>{ACTION_LABELS[a]}</Button>
+          <Button
+            key={a}
+            variant={a === current ? "primary" : "secondary"}
+            aria-pressed={a === current}
+            onClick={() => setAction(a)}
+          >
+            {ACTION_LABELS[a]}
+          </Button>
         ))}
       </div>
       <div className="grid gap-3 sm:grid-cols-2">
-        <TextField label="Date" type="date" max={today} value={on} onChange={(e) => setOn(e.target.value)} error={fields.on} hint="On the store's calendar" />
+        <TextField
+          label="Date"
+          type="date"
+          max={today}
+          value={on}
+          onChange={(e) => setOn(e.target.value)}
+          error={fields.on}
+          hint="On the store's calendar"
+        />
         {current === "confirm" ? (
-          <Select label="Component" value={component} onChange={(e) => setComponent(e.target.value)} error={fields.component}
-            options={[{ value: "", label: "Choose…" }, ...FINDING_COMPONENTS.map((c) => ({ value: c, label: COMPONENT_LABELS[c] }))]} />
+          <Select
+            label="Component"
+            value={component}
+            onChange={(e) => setComponent(e.target.value)}
+            error={fields.component}
+            options={[
+              { value: "", label: "Choose…" },
+              ...FINDING_COMPONENTS.map((c) => ({ value: c, label: COMPONENT_LABELS[c] })),
+            ]}
+          />
         ) : null}
         {current === "initial-test" || current === "follow-up-test" ? (
-          <Select label="Result" value={result} onChange={(e) => setResult(e.target.value as "passed" | "failed")} error={fields.result}
-            options={[{ value: "passed", label: "Passed: no leak" }, { value: "failed", label: "Failed: still leaking" }]} />
+          <Select
+            label="Result"
+            value={result}
+            onChange={(e) => setResult(e.target.value as "passed" | "failed")}
+            error={fields.result}
+            options={[
+              { value: "passed", label: "Passed: no leak" },
+              { value: "failed", label: "Failed: still leaking" },
+            ]}
+          />
         ) : null}
         {current === "dismiss" ? (
-          <Select label="Reason" value={reason} onChange={(e) => setReason(e.target.value as typeof reason)} error={fields.reason}
-            options={DISMISS_REASONS.map((r) => ({ value: r, label: REASON_LABELS[r] }))} />
+          <Select
+            label="Reason"
+            value={reason}
+            onChange={(e) => setReason(e.target.value as typeof reason)}
+            error={fields.reason}
+            options={DISMISS_REASONS.map((r) => ({ value: r, label: REASON_LABELS[r] }))}
+          />
         ) : null}
-        <TextField className="sm:col-span-2" label="Note" value={note} onChange={(e) => setNote(e.target.value)} error={fields.note} />
+        <TextField
+          className="sm:col-span-2"
+          label="Note"
+          value={note}
+          onChange={(e) => setNote(e.target.value)}
+          error={fields.note}
+        />
       </div>
-      <Button type="submit" variant={current === "dismiss" ? "danger" : "primary"} busy={m.isPending}>Save: {ACTION_LABELS[current].toLowerCase()}</Button>
+      <Button type="submit" variant={current === "dismiss" ? "danger" : "primary"} busy={m.isPending}>
+        Save: {ACTION_LABELS[current].toLowerCase()}
+      </Button>
     </form>
   );
 }

@@ -9,7 +9,15 @@ import { plansKeys } from "./plans-keys";
  * Replaces the plan's fixtures if nobody saved since `layoutRevision`; otherwise the server
  * answers 409 (code "conflict") and nothing changes.
  */
-export function saveFixtures({ planId, layoutRevision, fixtures }: { planId: string; layoutRevision: number; fixtures: readonly Fixture[] }) {
+export function saveFixtures({
+  planId,
+  layoutRevision,
+  fixtures,
+}: {
+  planId: string;
+  layoutRevision: number;
+  fixtures: readonly Fixture[];
+}) {
   return api.put(`/api/plans/${planId}/fixtures`, fixturesResponse, { layoutRevision, fixtures });
 }
 

@@ -27,10 +27,15 @@ describe("autosave", () => {
         const body = req.body as { layoutRevision: number; fixtures: unknown[] };
         if (body.layoutRevision !== revision) return apiError(409, "conflict", "stale");
         revision += 1;
-        return { body: { planId: PLAN, layoutRevision: revision, bounds: { width: 40, height: 20 }, fixtures: body.fixtures } };
+        return {
+          body: { planId: PLAN, layoutRevision: revision, bounds: { width: 40, height: 20 }, fixtures: body.fixtures },
+        };
       },
     });
-    const { result, rerender } = renderHook(({ scene }: { scene: Scene }) => useAutosave(PLAN, scene, 4, true), { wrapper, initialProps: { scene: base } });
+    const { result, rerender } = renderHook(({ scene }: { scene: Scene }) => useAutosave(PLAN, scene, 4, true), {
+      wrapper,
+      initialProps: { scene: base },
+    });
     expect(result.current.state.status).toBe("saved");
     const moved = applyAction(base, move([uuid(1)], 1, 0));
     rerender({ scene: moved });
@@ -39,12 +44,23 @@ describe("autosave", () => {
     rerender({ scene: applyAction(moved, move([uuid(1)], 1, 0)) });
     await waitFor(() => expect(calls.filter((c) => c.method === "PUT")).toHaveLength(2), { timeout: 3000 });
     await waitFor(() => expect(result.current.state.status).toBe("saved"));
-    expect(calls.filter((c) => c.method === "PUT").map((c) => (c.body as { layoutRevision: number }).layoutRevision)).toEqual([4, 5]);
+    expect(
+      calls.filter((c) => c.method === "PUT").map((c) => (c.body as { layoutRevision: number }).layoutRevision),
+    ).toEqual([4, 5]);
   });
 
   it("stops on a conflict and never overwrites; a rebase on the reloaded layout starts again", async () => {
-    const calls = stubFetch({ [`PUT /api/plans/${PLAN}/fixtures`]: apiError(409, "conflict", "The layout was changed by someone else since you opened it.") });
-    const { result, rerender } = renderHook(({ scene }: { scene: Scene }) => useAutosave(PLAN, scene, 4, true), { wrapper, initialProps: { scene: base } });
+    const calls = stubFetch({
+      [`PUT /api/plans/${PLAN}/fixtures`]: apiError(
+        409,
+        "conflict",
+        "The layout was changed by someone else since you opened it.",
+      ),
+    });
+    const { result, rerender } = renderHook(({ scene }: { scene: Scene }) => useAutosave(PLAN, scene, 4, true), {
+      wrapper,
+      initialProps: { scene: base },
+    });
     const mine = applyAction(base, move([uuid(1)], 1, 0));
     rerender({ scene: mine });
     await waitFor(() => expect(result.current.state.status).toBe("conflict"), { timeout: 3000 });
@@ -61,7 +77,10 @@ describe("autosave", () => {
 
   it("does not send a layout that the shared validation refuses, and says why", async () => {
     const calls = stubFetch({});
-    const { result, rerender } = renderHook(({ scene }: { scene: Scene }) => useAutosave(PLAN, scene, 4, true), { wrapper, initialProps: { scene: base } });
+    const { result, rerender } = renderHook(({ scene }: { scene: Scene }) => useAutosave(PLAN, scene, 4, true), {
+      wrapper,
+      initialProps: { scene: base },
+    });
     // A case pushed past the plan's right edge (40 m): the server would refuse it too.
     const outside = { ...base, fixtures: { [uuid(1)]: openCase(1, rect(38, 2, 3.75, 1.1)) } };
     rerender({ scene: outside });

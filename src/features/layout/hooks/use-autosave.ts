@@ -64,8 +64,15 @@ export function useAutosave(planId: string, scene: Scene, initialRevision: numbe
           inFlight.current = false;
           if (isApiRequestError(e) && e.status === 409) setState({ status: "conflict", message: e.message });
           else if (isApiRequestError(e) && e.code === "validation_failed") {
-            setState({ status: "invalid", errors: Object.entries(e.fields).map(([path, message]) => ({ path, message })) });
-          } else setState({ status: "failed", message: isApiRequestError(e) ? e.message : "The layout could not be saved." });
+            setState({
+              status: "invalid",
+              errors: Object.entries(e.fields).map(([path, message]) => ({ path, message })),
+            });
+          } else
+            setState({
+              status: "failed",
+              message: isApiRequestError(e) ? e.message : "The layout could not be saved.",
+            });
         },
       },
     );

@@ -21,7 +21,9 @@ interface Options {
 }
 
 /** Keys of the view and the tools, beside the model's editing shortcuts (shortcuts.ts). */
-export const VIEW_KEYS: Readonly<Record<string, { tool?: "select" | "pan" | "rectangle" | "polygon" | "vertex"; zoom?: "in" | "out" | "fit" }>> = {
+export const VIEW_KEYS: Readonly<
+  Record<string, { tool?: "select" | "pan" | "rectangle" | "polygon" | "vertex"; zoom?: "in" | "out" | "fit" }>
+> = {
   v: { tool: "select" },
   h: { tool: "pan" },
   b: { tool: "rectangle" },
@@ -35,7 +37,10 @@ export const VIEW_KEYS: Readonly<Record<string, { tool?: "select" | "pan" | "rec
 
 export const VIEW_KEY_HELP: readonly { keys: string; does: string }[] = [
   { keys: "V, H, B, P, C", does: "Select, pan, rectangle, outline and corner tools" },
-  { keys: "Corner tool: drag, double-click, Delete", does: "Move a corner, add one on an edge, remove the last touched" },
+  {
+    keys: "Corner tool: drag, double-click, Delete",
+    does: "Move a corner, add one on an edge, remove the last touched",
+  },
   { keys: "Space + drag, middle button", does: "Pan the plan" },
   { keys: "Wheel, pinch, + − 0", does: "Zoom in, out, fit the plan" },
 ];

@@ -35,9 +35,15 @@ interface Options {
  * the nodes go back to the origin, to be redrawn from the scene. A transform is baked into the
  * vertices on transform end (react-konva's advice: state holds plain objects, nodes are views).
  */
-export function useShapeHandlers(o: Options): { handlers: ShapeHandlers; nodes: RefObject<Map<string, Konva.Group>>; cancel: () => void } {
+export function useShapeHandlers(o: Options): {
+  handlers: ShapeHandlers;
+  nodes: RefObject<Map<string, Konva.Group>>;
+  cancel: () => void;
+} {
   const nodes = useRef(new Map<string, Konva.Group>());
-  const drag = useRef<{ ids: string[]; homes: { node: Konva.Group; parent: Konva.Container; index: number }[] } | null>(null);
+  const drag = useRef<{ ids: string[]; homes: { node: Konva.Group; parent: Konva.Container; index: number }[] } | null>(
+    null,
+  );
   const transformGesture = useRef(0);
   // Set while a second finger lands: the drag or transform under way ends without an edit.
   const cancelling = useRef(false);
@@ -125,7 +131,10 @@ export function useShapeHandlers(o: Options): { handlers: ShapeHandlers; nodes: 
         if (!f || "point" in f || cancelling.current) return;
         try {
           // Every node of one transform is one undo step: they share a gesture key.
-          opts.current.apply([setVertices(id, bakeNodeTransform(f.polygon, t))], `transform-${transformGesture.current}`);
+          opts.current.apply(
+            [setVertices(id, bakeNodeTransform(f.polygon, t))],
+            `transform-${transformGesture.current}`,
+          );
         } catch (err) {
           opts.current.onError(err instanceof RangeError ? err.message : "The shape could not be changed.");
         }
@@ -144,7 +153,8 @@ export function useShapeHandlers(o: Options): { handlers: ShapeHandlers; nodes: 
       try {
         for (const node of nodes.current.values()) if (node.isDragging()) node.stopDrag();
         const layer = opts.current.dragGroup.current?.getLayer();
-        for (const tr of layer?.find<Konva.Transformer>("Transformer") ?? []) if (tr.isTransforming()) tr.stopTransform();
+        for (const tr of layer?.find<Konva.Transformer>("Transformer") ?? [])
+          if (tr.isTransforming()) tr.stopTransform();
         layer?.batchDraw();
       } finally {
         cancelling.current = false;

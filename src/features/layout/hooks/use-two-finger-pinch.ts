@@ -24,7 +24,12 @@ interface Handlers {
  * first finger of a pinch has often started a drag. `pinching` is set from the second finger
  * until the last one lifts, so the finger left behind draws nothing.
  */
-export function useTwoFingerPinch(element: () => HTMLElement | null | undefined, pinching: RefObject<boolean>, handlers: Handlers, deps: readonly unknown[] = []): void {
+export function useTwoFingerPinch(
+  element: () => HTMLElement | null | undefined,
+  pinching: RefObject<boolean>,
+  handlers: Handlers,
+  deps: readonly unknown[] = [],
+): void {
   const h = useRef(handlers);
   h.current = handlers;
   useEffect(() => {
@@ -34,7 +39,11 @@ export function useTwoFingerPinch(element: () => HTMLElement | null | undefined,
     const read = (t: TouchList) => {
       const box = el.getBoundingClientRect();
       const [a, b] = [t[0], t[1]];
-      return { distance: Math.hypot(a.clientX - b.clientX, a.clientY - b.clientY), x: (a.clientX + b.clientX) / 2 - box.left, y: (a.clientY + b.clientY) / 2 - box.top };
+      return {
+        distance: Math.hypot(a.clientX - b.clientX, a.clientY - b.clientY),
+        x: (a.clientX + b.clientX) / 2 - box.left,
+        y: (a.clientY + b.clientY) / 2 - box.top,
+      };
     };
     const start = (e: TouchEvent) => {
       if (e.touches.length < 2) return;
@@ -50,7 +59,12 @@ export function useTwoFingerPinch(element: () => HTMLElement | null | undefined,
       const next = read(e.touches);
       last = next;
       if (prev.distance === 0) return;
-      h.current.onPinch({ factor: next.distance / prev.distance, centre: { x: next.x, y: next.y }, dx: next.x - prev.x, dy: next.y - prev.y });
+      h.current.onPinch({
+        factor: next.distance / prev.distance,
+        centre: { x: next.x, y: next.y },
+        dx: next.x - prev.x,
+        dy: next.y - prev.y,
+      });
     };
     const end = (e: TouchEvent) => {
       if (e.touches.length === 0) {

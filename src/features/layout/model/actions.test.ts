@@ -11,7 +11,11 @@ const plan = { width: 40, height: 20 };
 const poly = (s: Scene, id: string) => (s.fixtures[id] as PolygonFixture).polygon;
 
 function store(): Scene {
-  return createScene(plan, [openCase(1, rect(2, 2, 3.75, 1.1), "Dairy 1"), room(2, rect(30, 2, 6, 4), { edge: 2, offset: 2, width: 1.2 }), valve(3, 5, 5)]);
+  return createScene(plan, [
+    openCase(1, rect(2, 2, 3.75, 1.1), "Dairy 1"),
+    room(2, rect(30, 2, 6, 4), { edge: 2, offset: 2, width: 1.2 }),
+    valve(3, 5, 5),
+  ]);
 }
 
 describe("scene", () => {
@@ -41,7 +45,14 @@ describe("actions", () => {
     // A 4 m × 2 m case centred on (6, 5): a quarter turn makes it 2 m × 4 m about the same centre.
     const s0 = createScene(plan, [openCase(1, rect(4, 4, 4, 2))]);
     const s = applyAction(s0, act.rotate([uuid(1)], Math.PI / 2));
-    expect(closeTo(poly(s, uuid(1)), [[7, 3], [7, 7], [5, 7], [5, 3]])).toBe(true);
+    expect(
+      closeTo(poly(s, uuid(1)), [
+        [7, 3],
+        [7, 7],
+        [5, 7],
+        [5, 3],
+      ]),
+    ).toBe(true);
     expect(polygonCentroid(poly(s, uuid(1)))[0]).toBeCloseTo(6, 12);
     expect(polygonArea(poly(s, uuid(1)))).toBeCloseTo(8, 12);
   });
@@ -84,9 +95,19 @@ describe("actions", () => {
   });
 
   it("sets vertices, properties and labels only where they apply", () => {
-    let s = applyAction(store(), act.setVertices(uuid(1), [[2, 2], [6, 2], [4, 4]]));
+    let s = applyAction(
+      store(),
+      act.setVertices(uuid(1), [
+        [2, 2],
+        [6, 2],
+        [4, 4],
+      ]),
+    );
     expect(poly(s, uuid(1))).toHaveLength(3);
-    s = applyAction(s, act.setProperties([uuid(1), uuid(2)], { systemId: uuid(50), door: { edge: 0, offset: 5.5, width: 1 } }));
+    s = applyAction(
+      s,
+      act.setProperties([uuid(1), uuid(2)], { systemId: uuid(50), door: { edge: 0, offset: 5.5, width: 1 } }),
+    );
     expect(s.fixtures[uuid(1)].systemId).toBe(uuid(50));
     expect("door" in s.fixtures[uuid(1)]).toBe(false);
     expect(s.fixtures[uuid(2)]).toMatchObject({ systemId: uuid(50), door: { edge: 0, offset: 5, width: 1 } });
@@ -96,7 +117,11 @@ describe("actions", () => {
   });
 
   it("deletes and multi-selects", () => {
-    let s = applyActions(store(), [act.select([uuid(1)]), act.select([uuid(3)], "add"), act.select([uuid(1)], "toggle")]);
+    let s = applyActions(store(), [
+      act.select([uuid(1)]),
+      act.select([uuid(3)], "add"),
+      act.select([uuid(1)], "toggle"),
+    ]);
     expect(s.selection).toEqual([uuid(3)]);
     s = applyActions(s, [act.select([uuid(1), uuid(2)], "add"), act.remove([uuid(2), uuid(3)])]);
     expect(s.order).toEqual([uuid(1)]);

@@ -10,7 +10,15 @@ import { LABEL_MAX, type Fixture, type RoomDoor, type Vertex } from "#core/contr
 import type { FixtureKind } from "#core/contracts/fixture-kinds";
 import { canChangeKind, changeKind } from "./change-kind";
 import { arrayCopies, copyFixture } from "./copies";
-import { fitDoor, fixtureCentroid, relocateDoor, resizeFixture, rotateFixture, translateFixture, unionBounds } from "./fixture-geometry";
+import {
+  fitDoor,
+  fixtureCentroid,
+  relocateDoor,
+  resizeFixture,
+  rotateFixture,
+  translateFixture,
+  unionBounds,
+} from "./fixture-geometry";
 import type { Scene } from "./scene";
 
 /** Properties the side panel edits; each applies only to fixtures whose kind has it. */
@@ -53,7 +61,8 @@ export function move(ids: readonly string[], dx: number, dy: number): SceneActio
 /** Stretches one fixture onto a new bounding box (min < max on both axes; a point moves to its centre). */
 export function resize(id: string, box: Bounds): SceneAction {
   finite("resize box", box.minX, box.minY, box.maxX, box.maxY);
-  if (!(box.maxX > box.minX && box.maxY > box.minY)) throw new RangeError("resize box must have a width and height above 0 m");
+  if (!(box.maxX > box.minX && box.maxY > box.minY))
+    throw new RangeError("resize box must have a width and height above 0 m");
   return { type: "resize", id, box };
 }
 
@@ -80,8 +89,15 @@ export function duplicate(ids: readonly string[], dx: number, dy: number, newId:
  * A row of `count` items including the originals, `spacing` metres apart (centre to centre)
  * along `direction` (any non-zero vector): array(ids, 5, 2.4, [1, 0], uuid) makes four copies.
  */
-export function array(ids: readonly string[], count: number, spacing: number, direction: Vec, newId: () => string): SceneAction {
-  if (!(Number.isInteger(count) && count >= 2 && count <= 200)) throw new RangeError("array count must be a whole number from 2 to 200");
+export function array(
+  ids: readonly string[],
+  count: number,
+  spacing: number,
+  direction: Vec,
+  newId: () => string,
+): SceneAction {
+  if (!(Number.isInteger(count) && count >= 2 && count <= 200))
+    throw new RangeError("array count must be a whole number from 2 to 200");
   if (!(Number.isFinite(spacing) && spacing > 0)) throw new RangeError("array spacing must be more than 0 m");
   finite("array direction", direction[0], direction[1]);
   if (direction[0] === 0 && direction[1] === 0) throw new RangeError("array direction must not be the zero vector");
@@ -93,8 +109,10 @@ export function array(ids: readonly string[], count: number, spacing: number, di
 export const remove = (ids: readonly string[]): SceneAction => ({ type: "delete", ids });
 
 export function setProperties(ids: readonly string[], props: FixtureProps): SceneAction {
-  if (props.doorCount !== undefined && !(Number.isInteger(props.doorCount) && props.doorCount >= 1)) throw new RangeError("doorCount must be a whole number of at least 1");
-  if (props.typicalPpm != null && !(Number.isFinite(props.typicalPpm) && props.typicalPpm >= 0)) throw new RangeError("typicalPpm must be 0 ppm or more");
+  if (props.doorCount !== undefined && !(Number.isInteger(props.doorCount) && props.doorCount >= 1))
+    throw new RangeError("doorCount must be a whole number of at least 1");
+  if (props.typicalPpm != null && !(Number.isFinite(props.typicalPpm) && props.typicalPpm >= 0))
+    throw new RangeError("typicalPpm must be 0 ppm or more");
   if (props.door) finite("door offset, width", props.door.offset, props.door.width);
   return { type: "set-properties", ids, props };
 }
@@ -107,7 +125,11 @@ export function label(id: string, text: string): SceneAction {
 /** Changes the kind of the named fixtures that can take it (outlines to outline kinds, points to point kinds). */
 export const setKind = (ids: readonly string[], kind: FixtureKind): SceneAction => ({ type: "set-kind", ids, kind });
 
-export const select = (ids: readonly string[], mode: SelectMode = "replace"): SceneAction => ({ type: "select", ids, mode });
+export const select = (ids: readonly string[], mode: SelectMode = "replace"): SceneAction => ({
+  type: "select",
+  ids,
+  mode,
+});
 
 /** Selection changes are not edits: history.ts does not record them as steps of their own. */
 export function isSelectionOnly(action: SceneAction): boolean {
@@ -138,7 +160,8 @@ function appendFixtures(scene: Scene, added: readonly Fixture[]): Scene {
 function clampMove(scene: Scene, moved: readonly Fixture[], dx: number, dy: number): [number, number] {
   const b = unionBounds(moved);
   if (!b) return [dx, dy];
-  const clamp = (d: number, min: number, max: number, size: number) => (max - min > size ? d : Math.min(Math.max(d, -min), size - max));
+  const clamp = (d: number, min: number, max: number, size: number) =>
+    max - min > size ? d : Math.min(Math.max(d, -min), size - max);
   return [clamp(dx, b.minX, b.maxX, scene.plan.width), clamp(dy, b.minY, b.maxY, scene.plan.height)];
 }
 
@@ -173,14 +196,25 @@ export function applyAction(scene: Scene, action: SceneAction): Scene {
       const moved = existing(scene, action.ids);
       const [dx, dy] = clampMove(scene, moved, action.dx, action.dy);
       if (dx === 0 && dy === 0) return scene;
-      return replaceFixtures(scene, moved.map((f) => translateFixture(f, dx, dy)));
+      return replaceFixtures(
+        scene,
+        moved.map((f) => translateFixture(f, dx, dy)),
+      );
     }
     case "resize":
-      return replaceFixtures(scene, existing(scene, [action.id]).map((f) => resizeFixture(f, action.box)));
+      return replaceFixtures(
+        scene,
+        existing(scene, [action.id]).map((f) => resizeFixture(f, action.box)),
+      );
     case "rotate": {
       if (action.angle === 0) return scene;
       const { pivot } = action;
-      return replaceFixtures(scene, existing(scene, action.ids).map((f) => rotateFixture(f, pivot === "each" ? fixtureCentroid(f) : pivot, action.angle)));
+      return replaceFixtures(
+        scene,
+        existing(scene, action.ids).map((f) =>
+          rotateFixture(f, pivot === "each" ? fixtureCentroid(f) : pivot, action.angle),
+        ),
+      );
     }
     case "set-vertices":
       return replaceFixtures(
@@ -188,7 +222,9 @@ export function applyAction(scene: Scene, action: SceneAction): Scene {
         existing(scene, [action.id]).flatMap((f): Fixture[] => {
           if ("point" in f) return [];
           const polygon = action.polygon.map(([x, y]): Vertex => [x, y]);
-          return "door" in f ? [{ ...f, polygon, door: f.door && relocateDoor(f.door, f.polygon, polygon) }] : [{ ...f, polygon }];
+          return "door" in f
+            ? [{ ...f, polygon, door: f.door && relocateDoor(f.door, f.polygon, polygon) }]
+            : [{ ...f, polygon }];
         }),
       );
     case "duplicate": {
@@ -206,17 +242,30 @@ export function applyAction(scene: Scene, action: SceneAction): Scene {
       if (gone.size === 0) return scene;
       const fixtures = { ...scene.fixtures };
       for (const id of gone) delete fixtures[id];
-      return { ...scene, fixtures, order: scene.order.filter((id) => !gone.has(id)), selection: scene.selection.filter((id) => !gone.has(id)) };
+      return {
+        ...scene,
+        fixtures,
+        order: scene.order.filter((id) => !gone.has(id)),
+        selection: scene.selection.filter((id) => !gone.has(id)),
+      };
     }
     case "set-properties":
-      return replaceFixtures(scene, existing(scene, action.ids).map((f) => applyProps(f, action.props)));
+      return replaceFixtures(
+        scene,
+        existing(scene, action.ids).map((f) => applyProps(f, action.props)),
+      );
     case "label": {
       const f = scene.fixtures[action.id];
       return !f || f.label === action.label ? scene : replaceFixtures(scene, [{ ...f, label: action.label }]);
     }
     case "set-kind": {
-      const changed = existing(scene, action.ids).filter((f) => f.kind !== action.kind && canChangeKind(f, action.kind));
-      return replaceFixtures(scene, changed.map((f) => changeKind(f, action.kind)));
+      const changed = existing(scene, action.ids).filter(
+        (f) => f.kind !== action.kind && canChangeKind(f, action.kind),
+      );
+      return replaceFixtures(
+        scene,
+        changed.map((f) => changeKind(f, action.kind)),
+      );
     }
     case "select":
       return select_(scene, action.ids, action.mode);

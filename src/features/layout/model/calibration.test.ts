@@ -7,15 +7,25 @@ import { openCase, rect, room, valve } from "./test-builders";
 describe("metresPerPixelFromLine", () => {
   it("gives 0.01524 m/px for a 10 ft line of 200 px", () => {
     // 10 ft × 0.3048 m/ft (exact, NIST SP 811 B.8) = 3.048 m; 3.048 m / 200 px = 0.01524 m/px.
-    expect(metresPerPixelFromLine(imagePoint(50, 80), imagePoint(250, 80), { value: 10, unit: "ft" })).toBeCloseTo(0.01524, 15);
+    expect(metresPerPixelFromLine(imagePoint(50, 80), imagePoint(250, 80), { value: 10, unit: "ft" })).toBeCloseTo(
+      0.01524,
+      15,
+    );
   });
   it("measures a diagonal line by its length (3-4-5 triangle)", () => {
     // 300 px by 400 px is 500 px long; 5 m over it is 0.01 m/px.
-    expect(metresPerPixelFromLine(imagePoint(0, 0), imagePoint(300, 400), { value: 5, unit: "m" })).toBeCloseTo(0.01, 15);
+    expect(metresPerPixelFromLine(imagePoint(0, 0), imagePoint(300, 400), { value: 5, unit: "m" })).toBeCloseTo(
+      0.01,
+      15,
+    );
   });
   it("refuses a zero length and a line too short to trust", () => {
-    expect(() => metresPerPixelFromLine(imagePoint(0, 0), imagePoint(200, 0), { value: 0, unit: "m" })).toThrow("the real length must be more than 0 m");
-    expect(() => metresPerPixelFromLine(imagePoint(0, 0), imagePoint(3, 4), { value: 1, unit: "ft" })).toThrow(/5\.0 px long/);
+    expect(() => metresPerPixelFromLine(imagePoint(0, 0), imagePoint(200, 0), { value: 0, unit: "m" })).toThrow(
+      "the real length must be more than 0 m",
+    );
+    expect(() => metresPerPixelFromLine(imagePoint(0, 0), imagePoint(3, 4), { value: 1, unit: "ft" })).toThrow(
+      /5\.0 px long/,
+    );
   });
 });
 
@@ -23,8 +33,16 @@ describe("re-calibration", () => {
   it("rescales fixtures in place when the plan has no sweeps", () => {
     const r = planRecalibration(0.02, 0.03, false);
     expect(r).toEqual({ kind: "rescale-in-place", factor: 1.5 });
-    const [c, w, v] = rescaleFixtures([openCase(1, rect(2, 2, 4, 1)), room(2, rect(10, 10, 4, 3), { edge: 0, offset: 1, width: 1 }), valve(3, 2, 4)], r.factor);
-    expect("polygon" in c && c.polygon).toEqual([[3, 3], [9, 3], [9, 4.5], [3, 4.5]]);
+    const [c, w, v] = rescaleFixtures(
+      [openCase(1, rect(2, 2, 4, 1)), room(2, rect(10, 10, 4, 3), { edge: 0, offset: 1, width: 1 }), valve(3, 2, 4)],
+      r.factor,
+    );
+    expect("polygon" in c && c.polygon).toEqual([
+      [3, 3],
+      [9, 3],
+      [9, 4.5],
+      [3, 4.5],
+    ]);
     expect("door" in w && w.door).toEqual({ edge: 0, offset: 1.5, width: 1.5 });
     expect("point" in v && v.point).toEqual({ x: 3, y: 6 });
   });

@@ -21,11 +21,15 @@ export interface RealLength {
  * exactly 0.3048 m, NIST SP 811). Throws a RangeError naming the problem.
  */
 export function metresPerPixelFromLine(a: ImagePoint, b: ImagePoint, length: RealLength): number {
-  if (![a.x, a.y, b.x, b.y].every(Number.isFinite)) throw new RangeError("the calibration line's ends must be finite pixel positions");
-  if (!(Number.isFinite(length.value) && length.value > 0)) throw new RangeError(`the real length must be more than 0 ${length.unit}`);
+  if (![a.x, a.y, b.x, b.y].every(Number.isFinite))
+    throw new RangeError("the calibration line's ends must be finite pixel positions");
+  if (!(Number.isFinite(length.value) && length.value > 0))
+    throw new RangeError(`the real length must be more than 0 ${length.unit}`);
   const pixels = Math.hypot(b.x - a.x, b.y - a.y);
   if (pixels < MIN_CALIBRATION_PIXELS) {
-    throw new RangeError(`the calibration line is ${pixels.toFixed(1)} px long; draw it at least ${MIN_CALIBRATION_PIXELS} px long, ideally across a long known wall`);
+    throw new RangeError(
+      `the calibration line is ${pixels.toFixed(1)} px long; draw it at least ${MIN_CALIBRATION_PIXELS} px long, ideally across a long known wall`,
+    );
   }
   return toMetres(length.value, length.unit) / pixels;
 }
@@ -41,17 +45,27 @@ export type Recalibration =
   | { kind: "rescale-in-place"; factor: number }
   | { kind: "new-version"; factor: number; alignment: Similarity };
 
-export function planRecalibration(oldMetresPerPixel: number, newMetresPerPixel: number, hasSweeps: boolean): Recalibration {
-  for (const [name, v] of [["oldMetresPerPixel", oldMetresPerPixel], ["newMetresPerPixel", newMetresPerPixel]] as const) {
+export function planRecalibration(
+  oldMetresPerPixel: number,
+  newMetresPerPixel: number,
+  hasSweeps: boolean,
+): Recalibration {
+  for (const [name, v] of [
+    ["oldMetresPerPixel", oldMetresPerPixel],
+    ["newMetresPerPixel", newMetresPerPixel],
+  ] as const) {
     if (!(Number.isFinite(v) && v > 0)) throw new RangeError(`${name} must be a finite number above 0, got ${v}`);
   }
   const factor = newMetresPerPixel / oldMetresPerPixel;
-  return hasSweeps ? { kind: "new-version", factor, alignment: { ...IDENTITY, scale: factor } } : { kind: "rescale-in-place", factor };
+  return hasSweeps
+    ? { kind: "new-version", factor, alignment: { ...IDENTITY, scale: factor } }
+    : { kind: "rescale-in-place", factor };
 }
 
 /** Scales every fixture about the plan origin (vertices, points and door offsets and widths). */
 export function rescaleFixtures<F extends Fixture>(fixtures: readonly F[], factor: number): F[] {
-  if (!(Number.isFinite(factor) && factor > 0)) throw new RangeError(`the rescale factor must be above 0, got ${factor}`);
+  if (!(Number.isFinite(factor) && factor > 0))
+    throw new RangeError(`the rescale factor must be above 0, got ${factor}`);
   return fixtures.map((f) => scaleFixture(f, factor));
 }
 
@@ -72,7 +86,8 @@ export interface ScaleBar {
  * at `metresPerScreenPixel` (from coordinates.stageLengthToPlan(1, ...)).
  */
 export function pickScaleBar(metresPerScreenPixel: number, maxPixels: number, unit: LengthUnit): ScaleBar {
-  if (!(Number.isFinite(metresPerScreenPixel) && metresPerScreenPixel > 0)) throw new RangeError("metresPerScreenPixel must be above 0");
+  if (!(Number.isFinite(metresPerScreenPixel) && metresPerScreenPixel > 0))
+    throw new RangeError("metresPerScreenPixel must be above 0");
   if (!(Number.isFinite(maxPixels) && maxPixels > 0)) throw new RangeError("maxPixels must be above 0");
   const maxValue = fromMetres(maxPixels * metresPerScreenPixel, unit);
   const exponent = Math.floor(Math.log10(maxValue));

@@ -8,7 +8,14 @@ describe("changing a fixture's kind", () => {
   it("keeps id, label, system, fans and outline, and adds the new kind's defaults", () => {
     const f = { ...openCase(1, rect(0, 0, 3.8, 1), "Dairy 1"), systemId: uuid(9), hasFans: false };
     const g = changeKind(f, "door-case");
-    expect(g).toMatchObject({ id: uuid(1), kind: "door-case", label: "Dairy 1", systemId: uuid(9), hasFans: false, polygon: f.polygon });
+    expect(g).toMatchObject({
+      id: uuid(1),
+      kind: "door-case",
+      label: "Dairy 1",
+      systemId: uuid(9),
+      hasFans: false,
+      polygon: f.polygon,
+    });
     // 3.8 m of case at about 0.76 m a door (new-fixture.ts, common practice, no published source) is 5 doors.
     expect(g).toHaveProperty("doorCount", 5);
   });

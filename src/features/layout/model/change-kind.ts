@@ -16,7 +16,9 @@ export function canChangeKind(f: Fixture, kind: FixtureKind): boolean {
 export function changeKind(f: Fixture, kind: FixtureKind): Fixture {
   if (f.kind === kind) return f;
   if (!canChangeKind(f, kind)) {
-    throw new RangeError(`a ${f.kind} cannot become a ${kind}: ${"point" in f ? "points stay points" : "outlines stay outlines"}`);
+    throw new RangeError(
+      `a ${f.kind} cannot become a ${kind}: ${"point" in f ? "points stay points" : "outlines stay outlines"}`,
+    );
   }
   const geometry = "point" in f ? { point: planPoint(f.point.x, f.point.y) } : { polygon: f.polygon };
   const fresh = newFixture(kind, f.id, geometry, f.label);

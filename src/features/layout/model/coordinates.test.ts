@@ -1,7 +1,19 @@
 import { describe, expect, it } from "vitest";
 import {
-  fitView, imagePoint, imageToPlan, imageToStage, planLengthToStage, planPoint, planToImage, planToStage,
-  stageLengthToPlan, stagePoint, stageToImage, stageToPlan, zoomAbout, type View,
+  fitView,
+  imagePoint,
+  imageToPlan,
+  imageToStage,
+  planLengthToStage,
+  planPoint,
+  planToImage,
+  planToStage,
+  stageLengthToPlan,
+  stagePoint,
+  stageToImage,
+  stageToPlan,
+  zoomAbout,
+  type View,
 } from "./coordinates";
 
 const view: View = { panX: 100, panY: 50, zoom: 2 };

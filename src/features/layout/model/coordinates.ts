@@ -98,10 +98,19 @@ export function panBy(view: View, dx: number, dy: number): View {
 }
 
 /** The view that fits an image of the given pixel size into a viewport, centred, with a margin. */
-export function fitView(imageWidth: number, imageHeight: number, viewportWidth: number, viewportHeight: number, marginPx = 16): View {
+export function fitView(
+  imageWidth: number,
+  imageHeight: number,
+  viewportWidth: number,
+  viewportHeight: number,
+  marginPx = 16,
+): View {
   const zoom = Math.min(
     MAX_ZOOM,
-    Math.max(MIN_ZOOM, Math.min((viewportWidth - 2 * marginPx) / imageWidth, (viewportHeight - 2 * marginPx) / imageHeight)),
+    Math.max(
+      MIN_ZOOM,
+      Math.min((viewportWidth - 2 * marginPx) / imageWidth, (viewportHeight - 2 * marginPx) / imageHeight),
+    ),
   );
   return { zoom, panX: (viewportWidth - imageWidth * zoom) / 2, panY: (viewportHeight - imageHeight * zoom) / 2 };
 }

@@ -25,7 +25,13 @@ export function copyFixture<F extends Fixture>(f: F, newId: string, dx: number, 
  * k × spacing along the unit vector of `direction`. `newIds[(k-1) * n + j]` is the id of
  * copy k of source j.
  */
-export function arrayCopies(sources: readonly Fixture[], count: number, spacing: number, direction: readonly [number, number], newIds: readonly string[]): Fixture[] {
+export function arrayCopies(
+  sources: readonly Fixture[],
+  count: number,
+  spacing: number,
+  direction: readonly [number, number],
+  newIds: readonly string[],
+): Fixture[] {
   const len = Math.hypot(direction[0], direction[1]);
   const ux = direction[0] / len;
   const uy = direction[1] / len;

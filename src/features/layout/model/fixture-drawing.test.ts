@@ -11,8 +11,22 @@ describe("drawing geometry", () => {
     expect(wall.closed).toBe(false);
     const pts = [];
     for (let i = 0; i < wall.points.length; i += 2) pts.push([wall.points[i], wall.points[i + 1]]);
-    expect(closeTo(pts, [[2.8, 4], [0, 4], [0, 0], [6, 0], [6, 4], [4, 4]])).toBe(true);
-    expect(closeTo(doorGap(box, { edge: 2, offset: 2, width: 1.2 })!, [[4, 4], [2.8, 4]])).toBe(true);
+    expect(
+      closeTo(pts, [
+        [2.8, 4],
+        [0, 4],
+        [0, 0],
+        [6, 0],
+        [6, 4],
+        [4, 4],
+      ]),
+    ).toBe(true);
+    expect(
+      closeTo(doorGap(box, { edge: 2, offset: 2, width: 1.2 })!, [
+        [4, 4],
+        [2.8, 4],
+      ]),
+    ).toBe(true);
   });
   it("draws a sealed room (no door yet) as a closed wall", () => {
     expect(wallWithDoorGap(box, null)).toEqual({ points: [0, 0, 6, 0, 6, 4, 0, 4], closed: true });
@@ -20,9 +34,25 @@ describe("drawing geometry", () => {
   it("divides a glass-door case's longest edge into equal doors", () => {
     const ticks = doorTicks(rect(0, 0, 3, 1), 3);
     expect(ticks).toHaveLength(2);
-    expect(closeTo([ticks[0][0], ticks[1][0]], [[1, 0], [2, 0]])).toBe(true);
+    expect(
+      closeTo(
+        [ticks[0][0], ticks[1][0]],
+        [
+          [1, 0],
+          [2, 0],
+        ],
+      ),
+    ).toBe(true);
     // Each tick runs square into the case, half the 0.5 m from the edge to the centroid.
-    expect(closeTo([ticks[0][1], ticks[1][1]], [[1, 0.25], [2, 0.25]])).toBe(true);
+    expect(
+      closeTo(
+        [ticks[0][1], ticks[1][1]],
+        [
+          [1, 0.25],
+          [2, 0.25],
+        ],
+      ),
+    ).toBe(true);
     expect(doorTicks(rect(0, 0, 3, 1), 1)).toEqual([]);
   });
 });

@@ -15,7 +15,10 @@ function lerp(a: Vertex, b: Vertex, t: number): Vertex {
  * side, runs round every corner and ends at the door's near side; with no door (a sealed
  * room until one is marked) it is the closed outline.
  */
-export function wallWithDoorGap(polygon: readonly Vertex[], door: RoomDoor | null): { points: number[]; closed: boolean } {
+export function wallWithDoorGap(
+  polygon: readonly Vertex[],
+  door: RoomDoor | null,
+): { points: number[]; closed: boolean } {
   const flat = (vs: readonly Vertex[]) => vs.flatMap(([x, y]) => [x, y]);
   if (!door || door.edge >= polygon.length) return { points: flat(polygon), closed: true };
   const n = polygon.length;

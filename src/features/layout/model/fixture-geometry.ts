@@ -97,11 +97,16 @@ export function relocateDoor(door: RoomDoor, before: readonly Vertex[], after: r
     const q = after[(i + 1) % after.length];
     const len = Math.hypot(q[0] - p[0], q[1] - p[1]);
     if (len === 0) continue;
-    const t = Math.max(0, Math.min(len, ((centre[0] - p[0]) * (q[0] - p[0]) + (centre[1] - p[1]) * (q[1] - p[1])) / len));
+    const t = Math.max(
+      0,
+      Math.min(len, ((centre[0] - p[0]) * (q[0] - p[0]) + (centre[1] - p[1]) * (q[1] - p[1])) / len),
+    );
     const d = Math.hypot(p[0] + ((q[0] - p[0]) * t) / len - centre[0], p[1] + ((q[1] - p[1]) * t) / len - centre[1]);
     if (d < best.d) best = { edge: i, along: t, d };
   }
-  return best.d === Infinity ? null : fitDoor({ edge: best.edge, offset: best.along - door.width / 2, width: door.width }, after);
+  return best.d === Infinity
+    ? null
+    : fitDoor({ edge: best.edge, offset: best.along - door.width / 2, width: door.width }, after);
 }
 
 export function edgeLength(polygon: readonly Vertex[], edge: number): number {

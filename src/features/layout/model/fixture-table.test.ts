@@ -15,7 +15,15 @@ const scene = () =>
 describe("fixture list rows", () => {
   it("gives names, centres and areas in metres, and sorts labels numerically", () => {
     const rows = fixtureRows(scene());
-    expect(rows[0]).toMatchObject({ kindName: "Open case", family: "air-volume", x: 4, y: 2.5, widthM: 4, depthM: 1, areaM2: 4 });
+    expect(rows[0]).toMatchObject({
+      kindName: "Open case",
+      family: "air-volume",
+      x: 4,
+      y: 2.5,
+      widthM: 4,
+      depthM: 1,
+      areaM2: 4,
+    });
     expect(rows[3]).toMatchObject({ kindName: "Valve", areaM2: null, x: 5, y: 5 });
     expect(fixtureRows(scene(), "label").map((r) => r.label)).toEqual(["Case 2", "Case 10", "Room 3", "Valve 4"]);
     expect(fixtureRows(scene(), "areaM2", true).map((r) => r.id)).toEqual([uuid(3), uuid(1), uuid(2), uuid(4)]);

@@ -1,6 +1,11 @@
 /** Rows of the fixtures list view: plain values in metres, sortable, one per fixture. */
 import { polygonArea } from "#core/analysis/geometry/polygon-area";
-import { FIXTURE_FAMILY, FIXTURE_KIND_NAMES, type FixtureFamily, type FixtureKind } from "#core/contracts/fixture-kinds";
+import {
+  FIXTURE_FAMILY,
+  FIXTURE_KIND_NAMES,
+  type FixtureFamily,
+  type FixtureKind,
+} from "#core/contracts/fixture-kinds";
 import type { Fixture } from "#core/contracts/fixtures";
 import { fixtureBounds, fixtureCentroid } from "./fixture-geometry";
 import { sceneFixtures, type Scene } from "./scene";
@@ -57,6 +62,8 @@ export function fixtureRows(scene: Scene, sortBy: RowKey | null = null, descendi
     const va = a[sortBy];
     const vb = b[sortBy];
     if (va === null || vb === null) return va === vb ? 0 : va === null ? 1 : -1;
-    return sign * (typeof va === "number" && typeof vb === "number" ? va - vb : collator.compare(String(va), String(vb)));
+    return (
+      sign * (typeof va === "number" && typeof vb === "number" ? va - vb : collator.compare(String(va), String(vb)))
+    );
   });
 }

@@ -5,7 +5,10 @@ import { createScene } from "./scene";
 import { openCase, rect, uuid } from "./test-builders";
 
 const start = () => createHistory(createScene({ width: 40, height: 20 }, [openCase(1, rect(2, 2, 2, 1))]));
-const x0 = (h: ReturnType<typeof start>) => ("polygon" in h.present.fixtures[uuid(1)] ? (h.present.fixtures[uuid(1)] as { polygon: number[][] }).polygon[0][0] : NaN);
+const x0 = (h: ReturnType<typeof start>) =>
+  "polygon" in h.present.fixtures[uuid(1)]
+    ? (h.present.fixtures[uuid(1)] as { polygon: number[][] }).polygon[0][0]
+    : NaN;
 
 describe("history", () => {
   it("undoes and redoes round trip to the very same scenes", () => {

@@ -22,7 +22,8 @@ export interface History {
 }
 
 export function createHistory(scene: Scene, maxDepth = DEFAULT_MAX_DEPTH): History {
-  if (!(Number.isInteger(maxDepth) && maxDepth >= 1)) throw new RangeError("maxDepth must be a whole number of at least 1");
+  if (!(Number.isInteger(maxDepth) && maxDepth >= 1))
+    throw new RangeError("maxDepth must be a whole number of at least 1");
   return { past: [], present: scene, future: [], gesture: null, maxDepth };
 }
 
@@ -65,7 +66,13 @@ export function canRedo(history: History): boolean {
 export function undo(history: History): History {
   if (history.past.length === 0) return history;
   const present = history.past[history.past.length - 1];
-  return { ...history, past: history.past.slice(0, -1), present, future: [history.present, ...history.future], gesture: null };
+  return {
+    ...history,
+    past: history.past.slice(0, -1),
+    present,
+    future: [history.present, ...history.future],
+    gesture: null,
+  };
 }
 
 export function redo(history: History): History {

@@ -17,7 +17,11 @@ export type LengthEntryResult = { ok: true; length: LengthEntry } | { ok: false;
 
 const BARE = /^\s*(\d+(?:\.\d+)?|\.\d+)\s*$/;
 
-export function readLengthEntry(text: string, preference: LengthPreference, options: { allowZero?: boolean } = {}): LengthEntryResult {
+export function readLengthEntry(
+  text: string,
+  preference: LengthPreference,
+  options: { allowZero?: boolean } = {},
+): LengthEntryResult {
   const ok = (v: number) => v > 0 || (options.allowZero === true && v === 0);
   const unit = preference === "ft-in" ? "ft" : "m";
   const bare = BARE.exec(text);
@@ -27,7 +31,9 @@ export function readLengthEntry(text: string, preference: LengthPreference, opti
   }
   try {
     const metres = parseLength(text, unit);
-    return ok(metres) ? { ok: true, length: { value: metres, unit: "m" } } : { ok: false, message: "must be more than 0" };
+    return ok(metres)
+      ? { ok: true, length: { value: metres, unit: "m" } }
+      : { ok: false, message: "must be more than 0" };
   } catch (e) {
     if (e instanceof DomainInputError) return { ok: false, message: e.reason };
     throw e;

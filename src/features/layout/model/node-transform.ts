@@ -18,7 +18,8 @@ export interface NodeTransform {
 
 /** p' = (x, y) + R(rotation) · (scaleX · px, scaleY · py), Konva's order for an unskewed node. */
 export function bakeNodeTransform(polygon: readonly Vertex[], t: NodeTransform): Vertex[] {
-  if (![t.x, t.y, t.scaleX, t.scaleY, t.rotation].every(Number.isFinite)) throw new RangeError("node transform values must be finite numbers");
+  if (![t.x, t.y, t.scaleX, t.scaleY, t.rotation].every(Number.isFinite))
+    throw new RangeError("node transform values must be finite numbers");
   if (t.scaleX === 0 || t.scaleY === 0) throw new RangeError("node scale must not be 0 (the outline would collapse)");
   const a = (t.rotation * Math.PI) / 180;
   const c = Math.cos(a);

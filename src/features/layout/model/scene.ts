@@ -54,7 +54,10 @@ export function hitTest(scene: Scene, p: PlanPoint, toleranceM: number): string 
     const f = scene.fixtures[scene.order[i]];
     if ("point" in f) {
       if (Math.hypot(f.point.x - p.x, f.point.y - p.y) <= toleranceM) return f.id;
-    } else if (polygonHit === null && (pointInPolygon([p.x, p.y], f.polygon) || distanceToPolygonEdge([p.x, p.y], f.polygon) <= toleranceM)) {
+    } else if (
+      polygonHit === null &&
+      (pointInPolygon([p.x, p.y], f.polygon) || distanceToPolygonEdge([p.x, p.y], f.polygon) <= toleranceM)
+    ) {
       polygonHit = f.id;
     }
   }

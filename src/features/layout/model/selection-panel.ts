@@ -42,7 +42,12 @@ export function selectionPanel(scene: Scene): SelectionPanel | null {
   const fixtures = selectedFixtures(scene);
   if (fixtures.length === 0) return null;
   const kinds = new Set(fixtures.map((f) => f.kind));
-  const title = kinds.size === 1 && fixtures.length === 1 ? FIXTURE_KIND_NAMES[fixtures[0].kind] : kinds.size === 1 ? `${fixtures.length} × ${FIXTURE_KIND_NAMES[fixtures[0].kind]}` : `${fixtures.length} fixtures`;
+  const title =
+    kinds.size === 1 && fixtures.length === 1
+      ? FIXTURE_KIND_NAMES[fixtures[0].kind]
+      : kinds.size === 1
+        ? `${fixtures.length} × ${FIXTURE_KIND_NAMES[fixtures[0].kind]}`
+        : `${fixtures.length} fixtures`;
   const fields: Record<string, unknown> = {};
   for (const field of FIELDS) {
     if (field === "label" && fixtures.length > 1) continue; // labels are edited one at a time

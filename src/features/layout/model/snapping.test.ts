@@ -8,7 +8,11 @@ const opts = { gridM: 0.5, toleranceM: 0.2, targets: [neighbour] };
 
 describe("snapPoint", () => {
   it("prefers a vertex within tolerance", () => {
-    expect(snapPoint(planPoint(12.3, 5.1), opts)).toEqual({ point: planPoint(12.4, 5), kind: "vertex", targetId: uuid(1) });
+    expect(snapPoint(planPoint(12.3, 5.1), opts)).toEqual({
+      point: planPoint(12.4, 5),
+      kind: "vertex",
+      targetId: uuid(1),
+    });
   });
   it("falls back to the nearest point of an edge", () => {
     const s = snapPoint(planPoint(11, 5.15), opts);

@@ -29,8 +29,10 @@ export interface PointSnap {
 }
 
 function checkOptions(o: SnapOptions): void {
-  if (!(Number.isFinite(o.toleranceM) && o.toleranceM >= 0)) throw new RangeError("snap toleranceM must be 0 m or more");
-  if (o.gridM !== null && !(Number.isFinite(o.gridM) && o.gridM > 0)) throw new RangeError("snap gridM must be more than 0 m, or null");
+  if (!(Number.isFinite(o.toleranceM) && o.toleranceM >= 0))
+    throw new RangeError("snap toleranceM must be 0 m or more");
+  if (o.gridM !== null && !(Number.isFinite(o.gridM) && o.gridM > 0))
+    throw new RangeError("snap gridM must be more than 0 m, or null");
 }
 
 export function snapToGrid(value: number, gridM: number): number {
@@ -69,7 +71,12 @@ export function snapPoint(p: PlanPoint, options: SnapOptions): PointSnap {
     }
   }
   if (best) return best;
-  if (options.gridM !== null) return { point: planPoint(snapToGrid(p.x, options.gridM), snapToGrid(p.y, options.gridM)), kind: "grid", targetId: null };
+  if (options.gridM !== null)
+    return {
+      point: planPoint(snapToGrid(p.x, options.gridM), snapToGrid(p.y, options.gridM)),
+      kind: "grid",
+      targetId: null,
+    };
   return { point: p, kind: "none", targetId: null };
 }
 
@@ -101,7 +108,8 @@ export function snapMove(box: Bounds, dx: number, dy: number, options: SnapOptio
       const b = polygonBounds(fixtureVertices(f));
       for (const target of name === "x" ? [b.minX, b.maxX] : [b.minY, b.maxY]) {
         for (const side of [min + d, max + d]) {
-          if (Math.abs(target - side) <= options.toleranceM) matches.push({ shift: target - side, guide: { axis: name, value: target, targetId: f.id } });
+          if (Math.abs(target - side) <= options.toleranceM)
+            matches.push({ shift: target - side, guide: { axis: name, value: target, targetId: f.id } });
         }
       }
     }

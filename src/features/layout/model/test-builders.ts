@@ -9,13 +9,23 @@ export function idSource(start = 1000): () => string {
   return () => uuid(n++);
 }
 
-export const rect = (x: number, y: number, w: number, h: number): Vertex[] => [[x, y], [x + w, y], [x + w, y + h], [x, y + h]];
+export const rect = (x: number, y: number, w: number, h: number): Vertex[] => [
+  [x, y],
+  [x + w, y],
+  [x + w, y + h],
+  [x, y + h],
+];
 
 export function openCase(n: number, polygon: Vertex[], label = `Case ${n}`): PlainFixture {
   return { id: uuid(n), kind: "open-case", label, systemId: null, hasFans: true, polygon };
 }
 
-export function room(n: number, polygon: Vertex[], door: RoomFixture["door"], kind: RoomFixture["kind"] = "walk-in-cooler"): RoomFixture {
+export function room(
+  n: number,
+  polygon: Vertex[],
+  door: RoomFixture["door"],
+  kind: RoomFixture["kind"] = "walk-in-cooler",
+): RoomFixture {
   return { id: uuid(n), kind, label: `Room ${n}`, systemId: null, hasFans: true, polygon, door };
 }
 
@@ -23,8 +33,15 @@ export function valve(n: number, x: number, y: number): PointFixture {
   return { id: uuid(n), kind: "valve", label: `Valve ${n}`, systemId: null, hasFans: false, point: { x, y } };
 }
 
-export function closeTo(actual: readonly (readonly number[])[], expected: readonly (readonly number[])[], digits = 9): boolean {
-  return actual.length === expected.length && actual.every((p, i) => p.every((v, j) => Math.abs(v - expected[i][j]) < 10 ** -digits));
+export function closeTo(
+  actual: readonly (readonly number[])[],
+  expected: readonly (readonly number[])[],
+  digits = 9,
+): boolean {
+  return (
+    actual.length === expected.length &&
+    actual.every((p, i) => p.every((v, j) => Math.abs(v - expected[i][j]) < 10 ** -digits))
+  );
 }
 
 export type { Fixture };

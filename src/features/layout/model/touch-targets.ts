@@ -26,7 +26,15 @@ export interface TargetSizes {
 export const TOUCH_TARGET_PX = 48;
 
 export function targetSizes(kind: PointerKind): TargetSizes {
-  if (kind === "touch") return { kind, anchorVisualPx: 16, anchorHitPx: TOUCH_TARGET_PX, pickPx: TOUCH_TARGET_PX / 2, dragPx: 8, rotateOffsetPx: 72 };
+  if (kind === "touch")
+    return {
+      kind,
+      anchorVisualPx: 16,
+      anchorHitPx: TOUCH_TARGET_PX,
+      pickPx: TOUCH_TARGET_PX / 2,
+      dragPx: 8,
+      rotateOffsetPx: 72,
+    };
   return { kind, anchorVisualPx: 12, anchorHitPx: 12, pickPx: 8, dragPx: 4, rotateOffsetPx: 50 };
 }
 
@@ -46,7 +54,8 @@ export interface Rect {
  * "middle-right", "rotater", ...).
  */
 export function anchorHitRect(name: string, visualPx: number, hitPx: number, inwardPx = 10): Rect {
-  if (!(visualPx > 0) || !(hitPx > 0)) throw new RangeError(`anchorHitRect: visualPx and hitPx must be positive (got ${visualPx}, ${hitPx})`);
+  if (!(visualPx > 0) || !(hitPx > 0))
+    throw new RangeError(`anchorHitRect: visualPx and hitPx must be positive (got ${visualPx}, ${hitPx})`);
   const size = Math.max(hitPx, visualPx);
   const c = visualPx / 2;
   // Centre of the handle = the outline's corner or edge midpoint.

@@ -28,7 +28,8 @@ export interface MatchedPoints {
  */
 export function alignmentFromMatches(m: MatchedPoints): Similarity {
   const all = [...m.previous, ...m.next];
-  if (!all.every((p) => Number.isFinite(p.x) && Number.isFinite(p.y))) throw new RangeError("matched points must be finite plan positions");
+  if (!all.every((p) => Number.isFinite(p.x) && Number.isFinite(p.y)))
+    throw new RangeError("matched points must be finite plan positions");
   const [a1, a2] = m.previous;
   const [b1, b2] = m.next;
   return similarityFromTwoPoints([a1.x, a1.y], [a2.x, a2.y], [b1.x, b1.y], [b2.x, b2.y]);
@@ -48,10 +49,19 @@ export function mapToPreviousVersion(p: PlanPoint, alignment: Similarity): PlanP
  * of version i + 1 to version i (so a plan with k versions has k − 1 of them); versions are
  * numbered from 0. Works forwards and backwards.
  */
-export function mapBetweenVersions(p: PlanPoint, alignments: readonly Similarity[], from: number, to: number): PlanPoint {
+export function mapBetweenVersions(
+  p: PlanPoint,
+  alignments: readonly Similarity[],
+  from: number,
+  to: number,
+): PlanPoint {
   const last = alignments.length;
-  for (const [name, v] of [["from", from], ["to", to]] as const) {
-    if (!(Number.isInteger(v) && v >= 0 && v <= last)) throw new RangeError(`${name} must be a version from 0 to ${last}, got ${v}`);
+  for (const [name, v] of [
+    ["from", from],
+    ["to", to],
+  ] as const) {
+    if (!(Number.isInteger(v) && v >= 0 && v <= last))
+      throw new RangeError(`${name} must be a version from 0 to ${last}, got ${v}`);
   }
   const lo = Math.min(from, to);
   const hi = Math.max(from, to);

@@ -3,9 +3,21 @@ import type { OutboxMessage } from "#core/contracts/outbox";
 import { EmptyState } from "../../../components/ui/empty-state";
 import { formatDateTime } from "../../../lib/format";
 
-export function OutboxList({ messages, selectedId, linkTo }: { messages: readonly OutboxMessage[]; selectedId?: string; linkTo: (id: string) => string }) {
+export function OutboxList({
+  messages,
+  selectedId,
+  linkTo,
+}: {
+  messages: readonly OutboxMessage[];
+  selectedId?: string;
+  linkTo: (id: string) => string;
+}) {
   if (messages.length === 0) {
-    return <EmptyState title="The Outbox is empty">Mail Plumeline sends (invitations, password resets, reports) shows up here.</EmptyState>;
+    return (
+      <EmptyState title="The Outbox is empty">
+        Mail Plumeline sends (invitations, password resets, reports) shows up here.
+      </EmptyState>
+    );
   }
   return (
     <ul className="divide-y divide-line overflow-hidden rounded-md bg-surface edge" aria-label="Messages, newest first">

@@ -38,7 +38,10 @@ export function OutboxMessageView({ message }: { message: OutboxMessage }) {
           <ul className="list-disc pl-6">
             {message.attachments.map((a, i) => (
               <li key={`${a.filename}-${i}`}>
-                {a.filename} <span className="text-muted">({a.contentType}, {formatBytes(a.size)})</span>
+                {a.filename}{" "}
+                <span className="text-muted">
+                  ({a.contentType}, {formatBytes(a.size)})
+                </span>
               </li>
             ))}
           </ul>

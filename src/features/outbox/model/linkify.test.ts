@@ -19,7 +19,9 @@ describe("linkify", () => {
   });
 
   it("never makes a link of other schemes", () => {
-    expect(linkify("javascript:alert(1) data:text/html,x")).toEqual([{ kind: "text", text: "javascript:alert(1) data:text/html,x" }]);
+    expect(linkify("javascript:alert(1) data:text/html,x")).toEqual([
+      { kind: "text", text: "javascript:alert(1) data:text/html,x" },
+    ]);
   });
 
   it("keeps the whole text when it has no links", () => {

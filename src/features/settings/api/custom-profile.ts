@@ -7,7 +7,10 @@ export { ruleProfileSchema };
 const key = () => [...settingsKeys.details(), "custom-profile"] as const;
 
 export function useCustomProfile() {
-  return useQuery({ queryKey: key(), queryFn: ({ signal }) => api.get("/api/company/custom-profile", customProfileView, signal) });
+  return useQuery({
+    queryKey: key(),
+    queryFn: ({ signal }) => api.get("/api/company/custom-profile", customProfileView, signal),
+  });
 }
 
 /** Saving changes every figure computed from the profile, so everything is fetched again. */
@@ -21,10 +24,17 @@ function useSaved() {
 
 export function useStartCustomProfile() {
   const onSuccess = useSaved();
-  return useMutation({ mutationFn: (from: "us-federal" | "eu-fgas") => api.post("/api/company/custom-profile/start", customProfileView, { from }), onSuccess });
+  return useMutation({
+    mutationFn: (from: "us-federal" | "eu-fgas") =>
+      api.post("/api/company/custom-profile/start", customProfileView, { from }),
+    onSuccess,
+  });
 }
 
 export function useSaveCustomProfile() {
   const onSuccess = useSaved();
-  return useMutation({ mutationFn: (profile: unknown) => api.put("/api/company/custom-profile", customProfileView, profile), onSuccess });
+  return useMutation({
+    mutationFn: (profile: unknown) => api.put("/api/company/custom-profile", customProfileView, profile),
+    onSuccess,
+  });
 }

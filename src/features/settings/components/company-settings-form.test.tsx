@@ -52,7 +52,14 @@ describe("company settings form", () => {
     fireEvent.click(screen.getByRole("button", { name: "Save settings" }));
 
     expect(await screen.findByText("Settings saved.")).toBeTruthy();
-    expect(calls[0]!.body).toEqual({ ...settings, lengthUnit: "m", massUnit: "kg", ruleProfile: "eu-fgas", leakRateMethod: "rolling-average", detectorCheckIntervalDays: 90 });
+    expect(calls[0]!.body).toEqual({
+      ...settings,
+      lengthUnit: "m",
+      massUnit: "kg",
+      ruleProfile: "eu-fgas",
+      leakRateMethod: "rolling-average",
+      detectorCheckIntervalDays: 90,
+    });
     await waitFor(() => expect(onSaved).toHaveBeenCalledTimes(1));
   });
 });

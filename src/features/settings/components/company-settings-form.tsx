@@ -4,7 +4,13 @@ import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { Select } from "../../../components/ui/select";
 import { TextField } from "../../../components/ui/text-field";
-import { checkForm, focusFirstInvalid, formErrorMessage, serverFieldErrors, type FieldErrors } from "../../../lib/form-errors";
+import {
+  checkForm,
+  focusFirstInvalid,
+  formErrorMessage,
+  serverFieldErrors,
+  type FieldErrors,
+} from "../../../lib/form-errors";
 import { companySettings, useUpdateCompanySettings } from "../api/update-company-settings";
 import { LEAK_RATE_METHOD_LABELS, LENGTH_LABELS, MASS_LABELS, RULE_PROFILE_LABELS, optionsOf } from "./unit-labels";
 
@@ -17,7 +23,10 @@ export interface CompanySettingsFormProps {
 type Draft = Omit<CompanySettings, "detectorCheckIntervalDays"> & { detectorCheckIntervalDays: string };
 
 export function CompanySettingsForm({ settings, editable, onSaved }: CompanySettingsFormProps) {
-  const [draft, setDraft] = useState<Draft>({ ...settings, detectorCheckIntervalDays: String(settings.detectorCheckIntervalDays) });
+  const [draft, setDraft] = useState<Draft>({
+    ...settings,
+    detectorCheckIntervalDays: String(settings.detectorCheckIntervalDays),
+  });
   const [clientErrors, setClientErrors] = useState<FieldErrors>({});
   const [saved, setSaved] = useState(false);
   const update = useUpdateCompanySettings({ onSaved });
@@ -33,37 +42,85 @@ export function CompanySettingsForm({ settings, editable, onSaved }: CompanySett
     event.preventDefault();
     const form = event.currentTarget as HTMLFormElement;
     const days = draft.detectorCheckIntervalDays.trim();
-    const parsed = checkForm(companySettings, { ...draft, detectorCheckIntervalDays: days === "" ? Number.NaN : Number(days) }, form, setClientErrors);
+    const parsed = checkForm(
+      companySettings,
+      { ...draft, detectorCheckIntervalDays: days === "" ? Number.NaN : Number(days) },
+      form,
+      setClientErrors,
+    );
     if (!parsed) return;
-    update.mutate(parsed, { onSuccess: () => setSaved(true), onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)) });
+    update.mutate(parsed, {
+      onSuccess: () => setSaved(true),
+      onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)),
+    });
   }
 
   return (
     <form noValidate onSubmit={submit} aria-label="Company settings" className="space-y-6">
       {!editable ? (
-        <Alert tone="note">Only an owner can change these settings. They are shown here so you know what the company works under.</Alert>
+        <Alert tone="note">
+          Only an owner can change these settings. They are shown here so you know what the company works under.
+        </Alert>
       ) : null}
       {formError ? <Alert tone="error">{formError}</Alert> : null}
       {saved ? <Alert tone="success">Settings saved.</Alert> : null}
       <fieldset disabled={!editable} className="space-y-6">
-        <TextField label="Company name" name="name" value={draft.name} onChange={(e) => set("name", e.target.value)} error={errors.name} />
+        <TextField
+          label="Company name"
+          name="name"
+          value={draft.name}
+          onChange={(e) => set("name", e.target.value)}
+          error={errors.name}
+        />
         <section className="grid gap-4 sm:grid-cols-2" aria-labelledby="units-heading">
           <h2 id="units-heading" className="text-xl font-bold sm:col-span-2">
             Default units
           </h2>
-          <p className="text-muted sm:col-span-2">Everything is stored in metres and kilograms; these set how figures are shown. Each person may choose their own on their profile.</p>
-          <Select label="Length" name="lengthUnit" options={optionsOf(LENGTH_LABELS)} value={draft.lengthUnit} onChange={(e) => set("lengthUnit", e.target.value as Draft["lengthUnit"])} error={errors.lengthUnit} />
-          <Select label="Mass" name="massUnit" options={optionsOf(MASS_LABELS)} value={draft.massUnit} onChange={(e) => set("massUnit", e.target.value as Draft["massUnit"])} error={errors.massUnit} />
+          <p className="text-muted sm:col-span-2">
+            Everything is stored in metres and kilograms; these set how figures are shown. Each person may choose their
+            own on their profile.
+          </p>
+          <Select
+            label="Length"
+            name="lengthUnit"
+            options={optionsOf(LENGTH_LABELS)}
+            value={draft.lengthUnit}
+            onChange={(e) => set("lengthUnit", e.target.value as Draft["lengthUnit"])}
+            error={errors.lengthUnit}
+          />
+          <Select
+            label="Mass"
+            name="massUnit"
+            options={optionsOf(MASS_LABELS)}
+            value={draft.massUnit}
+            onChange={(e) => set("massUnit", e.target.value as Draft["massUnit"])}
+            error={errors.massUnit}
+          />
         </section>
         <section className="grid gap-4 sm:grid-cols-2" aria-labelledby="rules-heading">
           <h2 id="rules-heading" className="text-xl font-bold sm:col-span-2">
             Records and rules
           </h2>
           <p className="text-muted sm:col-span-2">
-            The rule profile decides leak-rate thresholds, repair deadlines and inspection intervals. Local codes and certified practice still apply.
+            The rule profile decides leak-rate thresholds, repair deadlines and inspection intervals. Local codes and
+            certified practice still apply.
           </p>
-          <Select label="Rule profile" name="ruleProfile" options={optionsOf(RULE_PROFILE_LABELS)} value={draft.ruleProfile} onChange={(e) => set("ruleProfile", e.target.value as Draft["ruleProfile"])} error={errors.ruleProfile} />
-          <Select label="Leak-rate method" name="leakRateMethod" options={optionsOf(LEAK_RATE_METHOD_LABELS)} value={draft.leakRateMethod} onChange={(e) => set("leakRateMethod", e.target.value as Draft["leakRateMethod"])} error={errors.leakRateMethod} />
+          <Select
+            label="Rule profile"
+            name="ruleProfile"
+            options={optionsOf(RULE_PROFILE_LABELS)}
+            value={draft.ruleProfile}
+            onChange={(e) => set("ruleProfile", e.target.value as Draft["ruleProfile"])}
+            error={errors.ruleProfile}
+          />
+          <Select
+            label="Leak-rate method"
+            name="leakRateMethod"
+            options={optionsOf(LEAK_RATE_METHOD_LABELS)}
+            value={draft.leakRateMethod}
+            onChange={(e) => set("leakRateMethod", e.target.value as Draft["leakRateMethod"])}
+            error={errors.leakRateMethod}
+          />
           <TextField
             label="Detector check interval (days)"
             name="detectorCheckIntervalDays"

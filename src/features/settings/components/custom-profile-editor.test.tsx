@@ -23,15 +23,23 @@ describe("custom rule profile editor", () => {
     fireEvent.change(screen.getAllByLabelText("Source for “Commercial refrigeration”")[1], { target: { value: "" } });
     fireEvent.click(screen.getByRole("button", { name: "Save custom profile" }));
     expect(await screen.findByText("Commercial refrigeration must be above 0 (% per year).")).toBeTruthy();
-    expect(screen.getByText("Source for “Commercial refrigeration” is required (a citation, or who set the value and why).")).toBeTruthy();
+    expect(
+      screen.getByText("Source for “Commercial refrigeration” is required (a citation, or who set the value and why)."),
+    ).toBeTruthy();
     expect(calls).toHaveLength(0);
   });
 
   it("sends the edited value with its source", async () => {
-    const calls = stubFetch({ "PUT /api/company/custom-profile": (req) => ({ body: { profile: req.body, savedAt: "2026-12-01T10:00:00.000Z", savedBy: "Dana Okafor", inForce: true } }) });
+    const calls = stubFetch({
+      "PUT /api/company/custom-profile": (req) => ({
+        body: { profile: req.body, savedAt: "2026-12-01T10:00:00.000Z", savedBy: "Dana Okafor", inForce: true },
+      }),
+    });
     renderOnRoute(<CustomProfileEditor profile={us} editable />, { path: "/settings" });
     fireEvent.change(screen.getAllByLabelText("Repair within (days)")[1], { target: { value: "14" } });
-    fireEvent.change(screen.getAllByLabelText("Source for “Repair within (days)”")[1], { target: { value: "company policy: repair within 14 days" } });
+    fireEvent.change(screen.getAllByLabelText("Source for “Repair within (days)”")[1], {
+      target: { value: "company policy: repair within 14 days" },
+    });
     fireEvent.click(screen.getByRole("button", { name: "Save custom profile" }));
     await waitFor(() => expect(calls.filter((c) => c.method === "PUT")).toHaveLength(1));
     const sent = calls.find((c) => c.method === "PUT")!.body as RuleProfileInput;
@@ -48,7 +56,11 @@ describe("custom rule profile editor", () => {
     // EU bands 5–50–500 t [S:E1]: moving the second band's lower edge leaves a gap.
     fireEvent.change(screen.getByLabelText("Band 2: from (t)"), { target: { value: "60" } });
     fireEvent.click(screen.getByRole("button", { name: "Save custom profile" }));
-    expect(await screen.findByText("Band 2: from (t) must equal the band below's upper edge (50), so bands ascend without gaps or overlaps.")).toBeTruthy();
+    expect(
+      await screen.findByText(
+        "Band 2: from (t) must equal the band below's upper edge (50), so bands ascend without gaps or overlaps.",
+      ),
+    ).toBeTruthy();
     expect(calls).toHaveLength(0);
   });
 

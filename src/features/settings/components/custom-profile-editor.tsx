@@ -5,7 +5,15 @@ import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
 import { formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
 import { ruleProfileSchema, useSaveCustomProfile } from "../api/custom-profile";
-import { addTopBand, getAt, numberFromText, pathKey, removeTopBand, setAt, type DraftPath } from "../model/profile-draft";
+import {
+  addTopBand,
+  getAt,
+  numberFromText,
+  pathKey,
+  removeTopBand,
+  setAt,
+  type DraftPath,
+} from "../model/profile-draft";
 
 const APPLIANCE_LABELS = {
   "commercial-refrigeration": "Commercial refrigeration",
@@ -21,18 +29,41 @@ function focusFirstError(form: HTMLFormElement, fields: FieldErrors) {
   const keys = Object.keys(fields);
   for (const el of Array.from(form.elements)) {
     const name = el.getAttribute("name");
-    if (name && keys.some((k) => k === name || k.startsWith(`${name}.`)) && el instanceof HTMLElement) return el.focus();
+    if (name && keys.some((k) => k === name || k.startsWith(`${name}.`)) && el instanceof HTMLElement)
+      return el.focus();
   }
 }
 
 /** A number box that keeps what is typed ("1." stays "1.") and hands the draft a number when it is one. */
-function NumberBox({ label, name, value, onValue, error, hint, disabled, emptyIsNull = false }: {
-  label: string; name: string; value: unknown; onValue: (v: unknown) => void; error?: string; hint?: string; disabled?: boolean; emptyIsNull?: boolean;
+function NumberBox({
+  label,
+  name,
+  value,
+  onValue,
+  error,
+  hint,
+  disabled,
+  emptyIsNull = false,
+}: {
+  label: string;
+  name: string;
+  value: unknown;
+  onValue: (v: unknown) => void;
+  error?: string;
+  hint?: string;
+  disabled?: boolean;
+  emptyIsNull?: boolean;
 }) {
   const [text, setText] = useState(value === null || value === undefined ? "" : String(value));
   return (
     <TextField
-      label={label} name={name} inputMode="decimal" value={text} error={error} hint={hint} disabled={disabled}
+      label={label}
+      name={name}
+      inputMode="decimal"
+      value={text}
+      error={error}
+      hint={hint}
+      disabled={disabled}
       onChange={(e) => {
         setText(e.target.value);
         onValue(emptyIsNull && e.target.value.trim() === "" ? null : numberFromText(e.target.value));
@@ -42,21 +73,63 @@ function NumberBox({ label, name, value, onValue, error, hint, disabled, emptyIs
 }
 
 /** One rule value and its source, side by side. */
-function SourcedNumber({ label, path, draft, set, errors, hint, disabled }: { label: string; path: DraftPath; draft: Draft; set: Set; errors: FieldErrors; hint?: string; disabled: boolean }) {
+function SourcedNumber({
+  label,
+  path,
+  draft,
+  set,
+  errors,
+  hint,
+  disabled,
+}: {
+  label: string;
+  path: DraftPath;
+  draft: Draft;
+  set: Set;
+  errors: FieldErrors;
+  hint?: string;
+  disabled: boolean;
+}) {
   const v = [...path, "value"];
   const s = [...path, "source"];
   return (
     <div className="grid gap-2 sm:grid-cols-[12rem_1fr]">
-      <NumberBox label={label} name={pathKey(v)} value={getAt(draft, v)} onValue={(x) => set(v, x)} error={errors[pathKey(v)]} hint={hint} disabled={disabled} />
+      <NumberBox
+        label={label}
+        name={pathKey(v)}
+        value={getAt(draft, v)}
+        onValue={(x) => set(v, x)}
+        error={errors[pathKey(v)]}
+        hint={hint}
+        disabled={disabled}
+      />
       <SourceBox label={`Source for “${label}”`} path={s} draft={draft} set={set} errors={errors} disabled={disabled} />
     </div>
   );
 }
 
-function SourceBox({ label, path, draft, set, errors, disabled }: { label: string; path: DraftPath; draft: Draft; set: Set; errors: FieldErrors; disabled: boolean }) {
+function SourceBox({
+  label,
+  path,
+  draft,
+  set,
+  errors,
+  disabled,
+}: {
+  label: string;
+  path: DraftPath;
+  draft: Draft;
+  set: Set;
+  errors: FieldErrors;
+  disabled: boolean;
+}) {
   return (
     <TextField
-      label={label} name={pathKey(path)} value={String(getAt(draft, path) ?? "")} error={errors[pathKey(path)]} disabled={disabled}
+      label={label}
+      name={pathKey(path)}
+      value={String(getAt(draft, path) ?? "")}
+      error={errors[pathKey(path)]}
+      disabled={disabled}
       onChange={(e) => set(path, e.target.value)}
     />
   );
@@ -101,7 +174,10 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
       return;
     }
     setClientErrors({});
-    save.mutate(parsed.data, { onSuccess: () => setSaved(true), onError: (e) => focusFirstError(form, serverFieldErrors(e)) });
+    save.mutate(parsed.data, {
+      onSuccess: () => setSaved(true),
+      onError: (e) => focusFirstError(form, serverFieldErrors(e)),
+    });
   }
 
   const bands = draft.leakChecks?.co2eBands.value ?? [];
@@ -110,10 +186,27 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
 
   return (
     <form noValidate onSubmit={submit} aria-label="Custom rule profile" className="space-y-6">
-      {formError ? <Alert tone="error">{formError}</Alert> : invalid && Object.keys(clientErrors).length ? <Alert tone="error">Please correct the marked fields.</Alert> : null}
-      {saved ? <Alert tone="success">Custom profile saved. Every deadline and figure now follows it where the company uses it.</Alert> : null}
-      <p className="max-w-prose text-sm text-muted">Every value needs its source: a citation, or who set the value and why (e.g. “company policy, 2026 audit”).</p>
-      <TextField label="Profile name" name="name" value={draft.name} onChange={(e) => set(["name"], e.target.value)} error={errors.name} disabled={disabled} />
+      {formError ? (
+        <Alert tone="error">{formError}</Alert>
+      ) : invalid && Object.keys(clientErrors).length ? (
+        <Alert tone="error">Please correct the marked fields.</Alert>
+      ) : null}
+      {saved ? (
+        <Alert tone="success">
+          Custom profile saved. Every deadline and figure now follows it where the company uses it.
+        </Alert>
+      ) : null}
+      <p className="max-w-prose text-sm text-muted">
+        Every value needs its source: a citation, or who set the value and why (e.g. “company policy, 2026 audit”).
+      </p>
+      <TextField
+        label="Profile name"
+        name="name"
+        value={draft.name}
+        onChange={(e) => set(["name"], e.target.value)}
+        error={errors.name}
+        disabled={disabled}
+      />
 
       <SourcedNumber label="Keep records (years)" path={["recordRetentionYears"]} {...common} />
 
@@ -126,9 +219,23 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
               <SourcedNumber key={a} label={APPLIANCE_LABELS[a]} path={p("thresholds", a)} {...common} />
             ))}
             <h3 className="font-bold">Deadlines</h3>
-            <SourcedNumber label="Repair within (days)" hint="From the day the leak rate above the threshold is learned." path={p("repairDays")} {...common} />
-            <SourcedNumber label="Initial verification test (days after the repair)" hint="0: on the day of the repair." path={p("initialVerificationDays")} {...common} />
-            <SourcedNumber label="Follow-up verification test (days after the initial test)" path={p("followUpVerificationDays")} {...common} />
+            <SourcedNumber
+              label="Repair within (days)"
+              hint="From the day the leak rate above the threshold is learned."
+              path={p("repairDays")}
+              {...common}
+            />
+            <SourcedNumber
+              label="Initial verification test (days after the repair)"
+              hint="0: on the day of the repair."
+              path={p("initialVerificationDays")}
+              {...common}
+            />
+            <SourcedNumber
+              label="Follow-up verification test (days after the initial test)"
+              path={p("followUpVerificationDays")}
+              {...common}
+            />
             {part.inspectionsAfterBreach ? (
               <>
                 <h3 className="font-bold">Leak inspections after a breach</h3>
@@ -136,7 +243,9 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
                   {(["largeEveryMonths", "otherEveryMonths"] as const).map((k) => (
                     <NumberBox
                       key={k}
-                      label={k === "largeEveryMonths" ? "Large systems: every (months)" : "Other systems: every (months)"}
+                      label={
+                        k === "largeEveryMonths" ? "Large systems: every (months)" : "Other systems: every (months)"
+                      }
                       name={pathKey(p("inspectionsAfterBreach", "value", k))}
                       value={part.inspectionsAfterBreach!.value[k]}
                       onValue={(x) => set(p("inspectionsAfterBreach", "value", k), x)}
@@ -145,11 +254,19 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
                     />
                   ))}
                 </div>
-                <SourceBox label="Source for the inspection intervals" path={p("inspectionsAfterBreach", "source")} {...common} />
+                <SourceBox
+                  label="Source for the inspection intervals"
+                  path={p("inspectionsAfterBreach", "source")}
+                  {...common}
+                />
               </>
             ) : null}
             <h3 className="font-bold">Chronic leaker</h3>
-            <SourcedNumber label="Added in a calendar year (% of full charge)" path={p("chronicLeaker", "percentOfFullCharge")} {...common} />
+            <SourcedNumber
+              label="Added in a calendar year (% of full charge)"
+              path={p("chronicLeaker", "percentOfFullCharge")}
+              {...common}
+            />
             <div className="grid gap-2 sm:grid-cols-[9rem_9rem_1fr]">
               {(["month", "day"] as const).map((k) => (
                 <NumberBox
@@ -162,7 +279,11 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
                   disabled={disabled}
                 />
               ))}
-              <SourceBox label="Source for the report date" path={p("chronicLeaker", "reportBy", "source")} {...common} />
+              <SourceBox
+                label="Source for the report date"
+                path={p("chronicLeaker", "reportBy", "source")}
+                {...common}
+              />
             </div>
           </Group>
         );
@@ -170,25 +291,76 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
 
       {draft.leakChecks ? (
         <Group title="Leak checks by CO2-equivalent">
-          <p className="text-sm text-muted">Bands in tonnes CO2e, lowest first; each band starts where the one below ends. Leave the top band’s upper edge empty.</p>
+          <p className="text-sm text-muted">
+            Bands in tonnes CO2e, lowest first; each band starts where the one below ends. Leave the top band’s upper
+            edge empty.
+          </p>
           {bands.map((b, i) => (
             // Keyed by the band count too: adding or removing a band rewrites the edges of the rows below.
-            <div key={`${i}-${bands.length}`} className="grid gap-2 sm:grid-cols-4" role="group" aria-label={`Band ${i + 1}`}>
-              <NumberBox label={`Band ${i + 1}: from (t)`} name={pathKey(bandPath(i, "from"))} value={b.from} onValue={(x) => set(bandPath(i, "from"), x)} error={errors[pathKey(bandPath(i, "from"))]} disabled={disabled} />
-              <NumberBox label={`Band ${i + 1}: below (t)`} name={pathKey(bandPath(i, "to"))} value={b.to} emptyIsNull onValue={(x) => set(bandPath(i, "to"), x)} error={errors[pathKey(bandPath(i, "to"))]} disabled={disabled} />
-              <NumberBox label={`Band ${i + 1}: months, no detection system`} name={pathKey(bandPath(i, "monthsWithoutLds"))} value={b.monthsWithoutLds} onValue={(x) => set(bandPath(i, "monthsWithoutLds"), x)} error={errors[pathKey(bandPath(i, "monthsWithoutLds"))]} disabled={disabled} />
-              <NumberBox label={`Band ${i + 1}: months, with detection system`} name={pathKey(bandPath(i, "monthsWithLds"))} value={b.monthsWithLds} onValue={(x) => set(bandPath(i, "monthsWithLds"), x)} error={errors[pathKey(bandPath(i, "monthsWithLds"))]} disabled={disabled} />
+            <div
+              key={`${i}-${bands.length}`}
+              className="grid gap-2 sm:grid-cols-4"
+              role="group"
+              aria-label={`Band ${i + 1}`}
+            >
+              <NumberBox
+                label={`Band ${i + 1}: from (t)`}
+                name={pathKey(bandPath(i, "from"))}
+                value={b.from}
+                onValue={(x) => set(bandPath(i, "from"), x)}
+                error={errors[pathKey(bandPath(i, "from"))]}
+                disabled={disabled}
+              />
+              <NumberBox
+                label={`Band ${i + 1}: below (t)`}
+                name={pathKey(bandPath(i, "to"))}
+                value={b.to}
+                emptyIsNull
+                onValue={(x) => set(bandPath(i, "to"), x)}
+                error={errors[pathKey(bandPath(i, "to"))]}
+                disabled={disabled}
+              />
+              <NumberBox
+                label={`Band ${i + 1}: months, no detection system`}
+                name={pathKey(bandPath(i, "monthsWithoutLds"))}
+                value={b.monthsWithoutLds}
+                onValue={(x) => set(bandPath(i, "monthsWithoutLds"), x)}
+                error={errors[pathKey(bandPath(i, "monthsWithoutLds"))]}
+                disabled={disabled}
+              />
+              <NumberBox
+                label={`Band ${i + 1}: months, with detection system`}
+                name={pathKey(bandPath(i, "monthsWithLds"))}
+                value={b.monthsWithLds}
+                onValue={(x) => set(bandPath(i, "monthsWithLds"), x)}
+                error={errors[pathKey(bandPath(i, "monthsWithLds"))]}
+                disabled={disabled}
+              />
             </div>
           ))}
-          {errors["leakChecks.co2eBands.value"] ? <p className="font-bold text-danger">Bands {errors["leakChecks.co2eBands.value"]}.</p> : null}
+          {errors["leakChecks.co2eBands.value"] ? (
+            <p className="font-bold text-danger">Bands {errors["leakChecks.co2eBands.value"]}.</p>
+          ) : null}
           {editable ? (
             <div className="flex flex-wrap gap-2">
-              <Button variant="secondary" onClick={() => set(["leakChecks", "co2eBands", "value"], addTopBand(bands))}>Add a band on top</Button>
-              <Button variant="secondary" disabled={bands.length < 2} onClick={() => set(["leakChecks", "co2eBands", "value"], removeTopBand(bands))}>Remove the top band</Button>
+              <Button variant="secondary" onClick={() => set(["leakChecks", "co2eBands", "value"], addTopBand(bands))}>
+                Add a band on top
+              </Button>
+              <Button
+                variant="secondary"
+                disabled={bands.length < 2}
+                onClick={() => set(["leakChecks", "co2eBands", "value"], removeTopBand(bands))}
+              >
+                Remove the top band
+              </Button>
             </div>
           ) : null}
           <SourceBox label="Source for the CO2e bands" path={["leakChecks", "co2eBands", "source"]} {...common} />
-          <SourcedNumber label="Re-check after a repair (months)" path={["leakChecks", "recheckAfterRepairMonths"]} {...common} />
+          <SourcedNumber
+            label="Re-check after a repair (months)"
+            path={["leakChecks", "recheckAfterRepairMonths"]}
+            {...common}
+          />
         </Group>
       ) : null}
 

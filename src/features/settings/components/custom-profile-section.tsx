@@ -18,10 +18,13 @@ export function CustomProfileSection({ editable }: { editable: boolean }) {
   const startError = formErrorMessage(start.error);
   return (
     <section aria-labelledby="custom-profile-heading" className="mt-10 space-y-4">
-      <h2 id="custom-profile-heading" className="text-xl font-bold">Custom rule profile</h2>
+      <h2 id="custom-profile-heading" className="text-xl font-bold">
+        Custom rule profile
+      </h2>
       <p className="max-w-prose text-muted">
-        A company or state rule stricter than the law: start from a copy of a built-in profile and change thresholds, deadlines and intervals, each with its source.
-        It is used wherever the rule profile above is set to Custom. Local codes and certified practice still apply.
+        A company or state rule stricter than the law: start from a copy of a built-in profile and change thresholds,
+        deadlines and intervals, each with its source. It is used wherever the rule profile above is set to Custom.
+        Local codes and certified practice still apply.
       </p>
       {q.isPending ? <Spinner label="Loading the custom profile…" /> : null}
       {q.isError ? <QueryError error={q.error} what="the custom profile" onRetry={() => void q.refetch()} /> : null}
@@ -30,8 +33,14 @@ export function CustomProfileSection({ editable }: { editable: boolean }) {
         <>
           {q.data.profile ? (
             <p className="text-sm">
-              {q.data.inForce ? <strong>In force. </strong> : <strong>Not in force (the rule profile above is not Custom). </strong>}
-              Last saved {q.data.savedAt ? `${q.data.savedAt.slice(0, 16).replace("T", " ")} UTC` : ""} by {q.data.savedBy ?? "unknown"}; based on {q.data.profile.basedOn === "eu-fgas" ? "EU F-gas" : "US federal"}.
+              {q.data.inForce ? (
+                <strong>In force. </strong>
+              ) : (
+                <strong>Not in force (the rule profile above is not Custom). </strong>
+              )}
+              Last saved {q.data.savedAt ? `${q.data.savedAt.slice(0, 16).replace("T", " ")} UTC` : ""} by{" "}
+              {q.data.savedBy ?? "unknown"}; based on {q.data.profile.basedOn === "eu-fgas" ? "EU F-gas" : "US federal"}
+              .
             </p>
           ) : (
             <p>No custom profile yet{editable ? "." : "; an owner can start one."}</p>
@@ -44,7 +53,13 @@ export function CustomProfileSection({ editable }: { editable: boolean }) {
                   variant="secondary"
                   busy={start.isPending && start.variables === s.from}
                   onClick={() => {
-                    if (q.data.profile && !window.confirm(`Start over from ${s.label}? Your edits are kept in the history but replaced here.`)) return;
+                    if (
+                      q.data.profile &&
+                      !window.confirm(
+                        `Start over from ${s.label}? Your edits are kept in the history but replaced here.`,
+                      )
+                    )
+                      return;
                     start.mutate(s.from);
                   }}
                 >
@@ -54,7 +69,9 @@ export function CustomProfileSection({ editable }: { editable: boolean }) {
             </div>
           ) : null}
           {/* A fresh editor per saved version, so a start-over shows the new copy's values. */}
-          {q.data.profile ? <CustomProfileEditor key={start.data?.savedAt ?? "first"} profile={q.data.profile} editable={editable} /> : null}
+          {q.data.profile ? (
+            <CustomProfileEditor key={start.data?.savedAt ?? "first"} profile={q.data.profile} editable={editable} />
+          ) : null}
         </>
       ) : null}
     </section>

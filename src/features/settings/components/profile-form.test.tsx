@@ -13,7 +13,10 @@ beforeEach(() => setCsrfToken("csrf-tech"));
 describe("profile form", () => {
   it("names the company default and starts from the person's own choice", () => {
     stubFetch({});
-    renderOnRoute(<ProfileForm user={user} companyDefaults={{ lengthUnit: "m", massUnit: "kg" }} onSaved={() => {}} />, { path: "/profile" });
+    renderOnRoute(
+      <ProfileForm user={user} companyDefaults={{ lengthUnit: "m", massUnit: "kg" }} onSaved={() => {}} />,
+      { path: "/profile" },
+    );
     expect((screen.getByLabelText("Length unit") as HTMLSelectElement).value).toBe("ft-in");
     expect((screen.getByLabelText("Mass unit") as HTMLSelectElement).value).toBe("company-default");
     expect(screen.getByRole("option", { name: "Company default (kg)" })).toBeTruthy();

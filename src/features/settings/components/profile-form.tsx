@@ -6,7 +6,13 @@ import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { Select } from "../../../components/ui/select";
 import { TextField } from "../../../components/ui/text-field";
-import { checkForm, focusFirstInvalid, formErrorMessage, serverFieldErrors, type FieldErrors } from "../../../lib/form-errors";
+import {
+  checkForm,
+  focusFirstInvalid,
+  formErrorMessage,
+  serverFieldErrors,
+  type FieldErrors,
+} from "../../../lib/form-errors";
 import { profileUpdateInput, useUpdateProfile } from "../api/update-profile";
 import { LENGTH_LABELS, MASS_LABELS } from "./unit-labels";
 
@@ -38,17 +44,28 @@ export function ProfileForm({ user, companyDefaults, onSaved }: ProfileFormProps
     event.preventDefault();
     const form = event.currentTarget as HTMLFormElement;
     setSaved(false);
-    const parsed = checkForm(profileUpdateInput, {
-      name,
-      lengthUnit: lengthUnit === COMPANY_DEFAULT ? null : (lengthUnit as LengthUnit),
-      massUnit: massUnit === COMPANY_DEFAULT ? null : (massUnit as MassUnit),
-    }, form, setClientErrors);
+    const parsed = checkForm(
+      profileUpdateInput,
+      {
+        name,
+        lengthUnit: lengthUnit === COMPANY_DEFAULT ? null : (lengthUnit as LengthUnit),
+        massUnit: massUnit === COMPANY_DEFAULT ? null : (massUnit as MassUnit),
+      },
+      form,
+      setClientErrors,
+    );
     if (!parsed) return;
-    update.mutate(parsed, { onSuccess: () => setSaved(true), onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)) });
+    update.mutate(parsed, {
+      onSuccess: () => setSaved(true),
+      onError: (e) => focusFirstInvalid(form, serverFieldErrors(e)),
+    });
   }
 
   const lengthOptions = [
-    { value: COMPANY_DEFAULT, label: defaultLabel(companyDefaults && LENGTH_LABELS[companyDefaults.lengthUnit].toLowerCase()) },
+    {
+      value: COMPANY_DEFAULT,
+      label: defaultLabel(companyDefaults && LENGTH_LABELS[companyDefaults.lengthUnit].toLowerCase()),
+    },
     { value: "m", label: LENGTH_LABELS.m },
     { value: "ft-in", label: LENGTH_LABELS["ft-in"] },
   ];
@@ -62,12 +79,33 @@ export function ProfileForm({ user, companyDefaults, onSaved }: ProfileFormProps
     <form noValidate onSubmit={submit} aria-label="Profile" className="max-w-xl space-y-4">
       {formError ? <Alert tone="error">{formError}</Alert> : null}
       {saved ? <Alert tone="success">Profile saved.</Alert> : null}
-      <TextField label="Name" name="name" autoComplete="name" value={name} onChange={(e) => setName(e.target.value)} error={errors.name} />
+      <TextField
+        label="Name"
+        name="name"
+        autoComplete="name"
+        value={name}
+        onChange={(e) => setName(e.target.value)}
+        error={errors.name}
+      />
       <p>
         <span className="font-bold">E-mail:</span> <span className="break-all">{user.email}</span>
       </p>
-      <Select label="Length unit" name="lengthUnit" options={lengthOptions} value={lengthUnit} onChange={(e) => setLengthUnit(e.target.value)} error={errors.lengthUnit} />
-      <Select label="Mass unit" name="massUnit" options={massOptions} value={massUnit} onChange={(e) => setMassUnit(e.target.value)} error={errors.massUnit} />
+      <Select
+        label="Length unit"
+        name="lengthUnit"
+        options={lengthOptions}
+        value={lengthUnit}
+        onChange={(e) => setLengthUnit(e.target.value)}
+        error={errors.lengthUnit}
+      />
+      <Select
+        label="Mass unit"
+        name="massUnit"
+        options={massOptions}
+        value={massUnit}
+        onChange={(e) => setMassUnit(e.target.value)}
+        error={errors.massUnit}
+      />
       <Button type="submit" busy={update.isPending}>
         Save profile
       </Button>

@@ -23,10 +23,18 @@ describe("rule-profile drafts", () => {
     const p = startCustomProfile("eu-fgas");
     const bands = p.leakChecks!.co2eBands.value; // 5–50–500 t [S:E1]
     const more = addTopBand(bands);
-    expect(more.map((b) => [b.from, b.to])).toEqual([[5, 50], [50, 500], [500, 5000], [5000, null]]);
+    expect(more.map((b) => [b.from, b.to])).toEqual([
+      [5, 50],
+      [50, 500],
+      [500, 5000],
+      [5000, null],
+    ]);
     expect(ruleProfileSchema.safeParse(setAt(p, ["leakChecks", "co2eBands", "value"], more)).success).toBe(true);
     const fewer = removeTopBand(bands);
-    expect(fewer.map((b) => [b.from, b.to])).toEqual([[5, 50], [50, null]]);
+    expect(fewer.map((b) => [b.from, b.to])).toEqual([
+      [5, 50],
+      [50, null],
+    ]);
     expect(ruleProfileSchema.safeParse(setAt(p, ["leakChecks", "co2eBands", "value"], fewer)).success).toBe(true);
   });
 });

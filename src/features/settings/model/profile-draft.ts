@@ -4,7 +4,10 @@ export type DraftPath = readonly (string | number)[];
 export const pathKey = (path: DraftPath) => path.map(String).join(".");
 
 export function getAt(node: unknown, path: DraftPath): unknown {
-  return path.reduce<unknown>((n, k) => (n !== null && typeof n === "object" ? (n as Record<string, unknown>)[k as string] : undefined), node);
+  return path.reduce<unknown>(
+    (n, k) => (n !== null && typeof n === "object" ? (n as Record<string, unknown>)[k as string] : undefined),
+    node,
+  );
 }
 
 /** A copy of the draft with one value replaced; the original is left as it was. */

@@ -10,7 +10,15 @@ import { updateStoreInput, useUpdateStore } from "../api/update-store";
 import { browserTimeZone, TimeZoneField } from "./time-zone-field";
 
 /** Creates a store, or edits one when `store` is given. */
-export function StoreForm({ store, onDone, onCancel }: { store?: Store; onDone: (saved: Store) => void; onCancel?: () => void }) {
+export function StoreForm({
+  store,
+  onDone,
+  onCancel,
+}: {
+  store?: Store;
+  onDone: (saved: Store) => void;
+  onCancel?: () => void;
+}) {
   const [name, setName] = useState(store?.name ?? "");
   const [address, setAddress] = useState(store?.address ?? "");
   const [timeZone, setTimeZone] = useState(store?.timeZone ?? browserTimeZone());
@@ -39,7 +47,13 @@ export function StoreForm({ store, onDone, onCancel }: { store?: Store; onDone: 
     <form onSubmit={submit} noValidate className="space-y-4 rounded-md bg-surface p-4 edge">
       <h2 className="text-xl font-bold">{store ? `Edit ${store.name}` : "New store"}</h2>
       {formError ? <Alert tone="error">{formError}</Alert> : null}
-      <TextField label="Store name" value={name} onChange={(e) => setName(e.target.value)} error={errors.name} autoComplete="off" />
+      <TextField
+        label="Store name"
+        value={name}
+        onChange={(e) => setName(e.target.value)}
+        error={errors.name}
+        autoComplete="off"
+      />
       <div>
         <label htmlFor={addressId} className="block font-bold">
           Address

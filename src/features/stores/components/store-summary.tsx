@@ -16,7 +16,11 @@ export function StoreSummary({ store, canEdit }: { store: Store; canEdit: boolea
   const error = formErrorMessage(archive.error);
   return (
     <section aria-label="Store details" className="space-y-3 rounded-md bg-surface p-4 edge">
-      {store.archivedAt ? <Alert tone="note" title="Archived">This store is archived: it is hidden from the stores list, and its records are kept.</Alert> : null}
+      {store.archivedAt ? (
+        <Alert tone="note" title="Archived">
+          This store is archived: it is hidden from the stores list, and its records are kept.
+        </Alert>
+      ) : null}
       {error ? <Alert tone="error">{error}</Alert> : null}
       <dl className="grid gap-x-6 gap-y-2 sm:grid-cols-[max-content_1fr]">
         <dt className="font-bold">Address</dt>
@@ -32,12 +36,22 @@ export function StoreSummary({ store, canEdit }: { store: Store; canEdit: boolea
             Edit store
           </Button>
           {store.archivedAt ? (
-            <Button variant="secondary" busy={archive.isPending} onClick={() => archive.mutate({ id: store.id, archived: false })}>
+            <Button
+              variant="secondary"
+              busy={archive.isPending}
+              onClick={() => archive.mutate({ id: store.id, archived: false })}
+            >
               Restore store
             </Button>
           ) : confirmArchive ? (
             <>
-              <Button variant="danger" busy={archive.isPending} onClick={() => archive.mutate({ id: store.id, archived: true }, { onSuccess: () => setConfirmArchive(false) })}>
+              <Button
+                variant="danger"
+                busy={archive.isPending}
+                onClick={() =>
+                  archive.mutate({ id: store.id, archived: true }, { onSuccess: () => setConfirmArchive(false) })
+                }
+              >
                 Yes, archive {store.name}
               </Button>
               <Button variant="secondary" onClick={() => setConfirmArchive(false)}>

@@ -33,15 +33,32 @@ export function StoreTable({ scoped }: { scoped: boolean }) {
   return (
     <div className="space-y-4">
       <div className="flex flex-wrap items-end gap-4">
-        <TextField label="Search stores" type="search" value={search} onChange={(e) => setSearch(e.target.value)} className="min-w-64 flex-1" hint="By name or address" />
+        <TextField
+          label="Search stores"
+          type="search"
+          value={search}
+          onChange={(e) => setSearch(e.target.value)}
+          className="min-w-64 flex-1"
+          hint="By name or address"
+        />
         <Select label="Sort" options={SORTS} value={sort} onChange={(e) => setSort(e.target.value)} className="w-48" />
-        <Checkbox label="Show archived stores" checked={includeArchived} onChange={(e) => setIncludeArchived(e.target.checked)} />
+        <Checkbox
+          label="Show archived stores"
+          checked={includeArchived}
+          onChange={(e) => setIncludeArchived(e.target.checked)}
+        />
       </div>
       {stores.isPending ? <Spinner label="Loading stores…" /> : null}
-      {stores.isError ? <QueryError error={stores.error} what="the stores" onRetry={() => void stores.refetch()} /> : null}
+      {stores.isError ? (
+        <QueryError error={stores.error} what="the stores" onRetry={() => void stores.refetch()} />
+      ) : null}
       {stores.data && stores.data.length === 0 ? (
         <EmptyState title={search ? "No store matches" : "No stores yet"}>
-          {search ? `Nothing matches “${search}”.` : scoped ? "No store has been shared with you in this company yet." : "This company has no stores on record yet."}
+          {search
+            ? `Nothing matches “${search}”.`
+            : scoped
+              ? "No store has been shared with you in this company yet."
+              : "This company has no stores on record yet."}
         </EmptyState>
       ) : null}
       {stores.data && stores.data.length > 0 ? (
@@ -61,7 +78,10 @@ export function StoreTable({ scoped }: { scoped: boolean }) {
             { header: "Address", cell: (s) => <span className="whitespace-pre-line">{s.address || "—"}</span> },
             { header: "Time zone", cell: (s) => s.timeZone },
             { header: "Added", cell: (s) => formatDateInZone(s.createdAt, s.timeZone) },
-            { header: "Status", cell: (s) => (s.archivedAt ? <span className="font-bold text-note">Archived</span> : "Active") },
+            {
+              header: "Status",
+              cell: (s) => (s.archivedAt ? <span className="font-bold text-note">Archived</span> : "Active"),
+            },
           ]}
         />
       ) : null}

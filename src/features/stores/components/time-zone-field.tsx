@@ -15,12 +15,25 @@ export function browserTimeZone(): string {
  * A typed field with the zone list as suggestions (a datalist): four hundred options are too
  * many for a plain select, and typing "Chicago" is quicker than scrolling.
  */
-export function TimeZoneField({ value, onChange, error }: { value: string; onChange: (zone: string) => void; error?: string }) {
+export function TimeZoneField({
+  value,
+  onChange,
+  error,
+}: {
+  value: string;
+  onChange: (zone: string) => void;
+  error?: string;
+}) {
   const id = useId();
   const zones = useMemo(zoneList, []);
   const now = useMemo(() => {
     try {
-      return new Intl.DateTimeFormat(undefined, { timeZone: value, hour: "2-digit", minute: "2-digit", timeZoneName: "short" }).format(new Date());
+      return new Intl.DateTimeFormat(undefined, {
+        timeZone: value,
+        hour: "2-digit",
+        minute: "2-digit",
+        timeZoneName: "short",
+      }).format(new Date());
     } catch {
       return null;
     }
@@ -31,7 +44,8 @@ export function TimeZoneField({ value, onChange, error }: { value: string; onCha
         Time zone
       </label>
       <p id={`${id}-hint`} className="text-sm text-muted">
-        Sweep and finding times are shown in the store's zone. {now ? `Local time there now: ${now}.` : "Type a zone such as America/Chicago."}
+        Sweep and finding times are shown in the store's zone.{" "}
+        {now ? `Local time there now: ${now}.` : "Type a zone such as America/Chicago."}
       </p>
       <input
         id={id}

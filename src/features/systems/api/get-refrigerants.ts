@@ -10,7 +10,11 @@ export async function getRefrigerants(signal?: AbortSignal) {
 }
 
 export function refrigerantsQueryOptions() {
-  return queryOptions({ queryKey: systemsKeys.refrigerants(), queryFn: ({ signal }) => getRefrigerants(signal), staleTime: 60 * 60 * 1000 });
+  return queryOptions({
+    queryKey: systemsKeys.refrigerants(),
+    queryFn: ({ signal }) => getRefrigerants(signal),
+    staleTime: 60 * 60 * 1000,
+  });
 }
 
 export function useRefrigerants() {

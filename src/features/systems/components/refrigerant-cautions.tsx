@@ -5,9 +5,18 @@ import { readableSource } from "#core/domain/compliance/citations";
  * The usual cautions for the picked refrigerant, beside the form. They inform; local codes and
  * certified practice govern, and the list says so.
  */
-export function RefrigerantCautions({ refrigerantName, cautions }: { refrigerantName: string | null; cautions: readonly Caution[] }) {
+export function RefrigerantCautions({
+  refrigerantName,
+  cautions,
+}: {
+  refrigerantName: string | null;
+  cautions: readonly Caution[];
+}) {
   return (
-    <aside aria-labelledby="cautions-heading" className="space-y-3 rounded-md border-l-4 border-note bg-note-soft p-4 edge">
+    <aside
+      aria-labelledby="cautions-heading"
+      className="space-y-3 rounded-md border-l-4 border-note bg-note-soft p-4 edge"
+    >
       <h3 id="cautions-heading" className="font-bold">
         {refrigerantName ? `Working safely with ${refrigerantName}` : "Safety cautions"}
       </h3>
@@ -23,7 +32,9 @@ export function RefrigerantCautions({ refrigerantName, cautions }: { refrigerant
           </li>
         ))}
       </ul>
-      <p className="font-bold">These are the usual cautions only. Local codes and certified practice govern the work.</p>
+      <p className="font-bold">
+        These are the usual cautions only. Local codes and certified practice govern the work.
+      </p>
     </aside>
   );
 }

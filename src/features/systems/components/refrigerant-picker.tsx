@@ -42,13 +42,14 @@ export function RefrigerantPicker({
         {picked ? (
           <>
             <p>
-              {picked.name}: safety class <span className="font-bold text-ink">{picked.safetyClass}</span> ({readableSource(picked.safetyClassSource)}).
+              {picked.name}: safety class <span className="font-bold text-ink">{picked.safetyClass}</span> (
+              {readableSource(picked.safetyClassSource)}).
             </p>
             <p>
               {picked.gwp ? (
                 <>
-                  GWP-100 <span className="font-bold text-ink">{picked.gwp.value}</span> on the {picked.gwp.basis} basis ({readableSource(picked.gwp.source)})
-                  {picked.gwpNote ? `; ${picked.gwpNote}` : ""}.
+                  GWP-100 <span className="font-bold text-ink">{picked.gwp.value}</span> on the {picked.gwp.basis} basis
+                  ({readableSource(picked.gwp.source)}){picked.gwpNote ? `; ${picked.gwpNote}` : ""}.
                 </>
               ) : (
                 <>GWP not known on the company's basis{picked.gwpNote ? `: ${readableSource(picked.gwpNote)}` : ""}.</>

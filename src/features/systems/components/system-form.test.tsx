@@ -12,14 +12,21 @@ import { readableSource } from "#core/domain/compliance/citations";
 
 const STORE_ID = "1d2c3b4a-5e6f-4a7b-8c9d-0e1f2a3b4c5d";
 // The server's own catalogue answer (GET /api/refrigerants) on the AR4 basis.
-const CATALOGUE = { refrigerants: REFRIGERANTS.map((r) => ({ ...summarizeRefrigerant(r, ["AR4"]), cautions: refrigerantCautions(r) })) };
+const CATALOGUE = {
+  refrigerants: REFRIGERANTS.map((r) => ({ ...summarizeRefrigerant(r, ["AR4"]), cautions: refrigerantCautions(r) })),
+};
 
 beforeEach(() => setCsrfToken("csrf-lead"));
 
 function open(massUnit: "kg" | "lb" = "kg") {
   const calls = stubFetch({
     "GET /api/refrigerants": { body: CATALOGUE },
-    "POST /api/stores/1d2c3b4a-5e6f-4a7b-8c9d-0e1f2a3b4c5d/systems": apiError(400, "validation_failed", "Please check the fields.", { refrigerantId: "is not in the catalogue" }),
+    "POST /api/stores/1d2c3b4a-5e6f-4a7b-8c9d-0e1f2a3b4c5d/systems": apiError(
+      400,
+      "validation_failed",
+      "Please check the fields.",
+      { refrigerantId: "is not in the catalogue" },
+    ),
   });
   renderOnRoute(<SystemForm storeId={STORE_ID} massUnit={massUnit} onDone={() => {}} onCancel={() => {}} />);
   return calls;
@@ -35,7 +42,8 @@ describe("system form", () => {
     expect(screen.getByText("A3", { selector: "span" })).toBeTruthy();
     // The catalogue has no AR4 figure for propane: the form says so rather than show a number.
     expect(screen.getByText(/GWP not known on the company's basis: no GWP for R-290 on AR4/)).toBeTruthy();
-    for (const c of cautionsFor({ refrigerant: getRefrigerant("R-290") })) expect(screen.getByText(c.text, { exact: false })).toBeTruthy();
+    for (const c of cautionsFor({ refrigerant: getRefrigerant("R-290") }))
+      expect(screen.getByText(c.text, { exact: false })).toBeTruthy();
     expect(screen.getByText(/Local codes and certified practice govern/)).toBeTruthy();
 
     // R-744 (CO2) brings the very-high-pressure caution instead.
@@ -48,7 +56,13 @@ describe("system form", () => {
     fireEvent.change(picker, { target: { value: "R-404A" } });
     const gwp = summarizeRefrigerant(getRefrigerant("R-404A"), ["AR4"]).gwp!;
     expect(gwp.value).toBe(3922);
-    expect(screen.getByText((_, el) => el?.tagName === "P" && (el.textContent ?? "").startsWith(`GWP-100 ${gwp.value} on the AR4 basis (${readableSource(gwp.source)})`))).toBeTruthy();
+    expect(
+      screen.getByText(
+        (_, el) =>
+          el?.tagName === "P" &&
+          (el.textContent ?? "").startsWith(`GWP-100 ${gwp.value} on the AR4 basis (${readableSource(gwp.source)})`),
+      ),
+    ).toBeTruthy();
     // Source tags are internal: the form shows citations.
     expect(document.body.textContent).not.toMatch(/\[(S:|M\]|D\])/);
   });
@@ -72,6 +86,12 @@ describe("system form", () => {
     fireEvent.click(screen.getByRole("button", { name: "Add system" }));
     expect(await screen.findByText("Refrigerant is not in the catalogue.")).toBeTruthy();
     const post = calls.find((c) => c.method === "POST")!;
-    expect(post.body).toMatchObject({ name: "Rack C", refrigerantId: "R-448A", fullCharge: { value: 250, unit: "lb" }, applianceType: "commercial-refrigeration", automaticLeakDetection: false });
+    expect(post.body).toMatchObject({
+      name: "Rack C",
+      refrigerantId: "R-448A",
+      fullCharge: { value: 250, unit: "lb" },
+      applianceType: "commercial-refrigeration",
+      automaticLeakDetection: false,
+    });
   });
 });

@@ -1,5 +1,11 @@
 import { useState, type FormEvent } from "react";
-import { APPLIANCE_TYPE_NAMES, APPLIANCE_TYPES, type ApplianceType, type System, type SystemInput } from "#core/contracts/systems";
+import {
+  APPLIANCE_TYPE_NAMES,
+  APPLIANCE_TYPES,
+  type ApplianceType,
+  type System,
+  type SystemInput,
+} from "#core/contracts/systems";
 import { kgToPounds } from "#core/domain/units/mass";
 import type { MassPreference } from "#core/domain/units/format-units";
 import { Alert } from "../../../components/ui/alert";
@@ -20,13 +26,27 @@ function chargeText(kg: number, unit: MassPreference): string {
 }
 
 /** Adds a system to a store, or edits one; the charge is typed in kg or lb and kept in kg. */
-export function SystemForm({ storeId, system, massUnit, onDone, onCancel }: { storeId: string; system?: System; massUnit: MassPreference; onDone: () => void; onCancel: () => void }) {
+export function SystemForm({
+  storeId,
+  system,
+  massUnit,
+  onDone,
+  onCancel,
+}: {
+  storeId: string;
+  system?: System;
+  massUnit: MassPreference;
+  onDone: () => void;
+  onCancel: () => void;
+}) {
   const refrigerants = useRefrigerants();
   const [name, setName] = useState(system?.name ?? "");
   const [refrigerantId, setRefrigerantId] = useState(system?.refrigerantId ?? "");
   const [unit, setUnit] = useState<MassPreference>(massUnit);
   const [charge, setCharge] = useState(system ? chargeText(system.fullChargeKg, massUnit) : "");
-  const [applianceType, setApplianceType] = useState<ApplianceType>(system?.applianceType ?? "commercial-refrigeration");
+  const [applianceType, setApplianceType] = useState<ApplianceType>(
+    system?.applianceType ?? "commercial-refrigeration",
+  );
   const [ald, setAld] = useState(system?.automaticLeakDetection ?? false);
   const [clientErrors, setClientErrors] = useState<FieldErrors>({});
   const create = useCreateSystem();
@@ -38,7 +58,13 @@ export function SystemForm({ storeId, system, massUnit, onDone, onCancel }: { st
   function submit(e: FormEvent) {
     e.preventDefault();
     const value = charge.trim() === "" ? Number.NaN : Number(charge);
-    const values: SystemInput = { name, refrigerantId, fullCharge: { value, unit }, applianceType, automaticLeakDetection: ald };
+    const values: SystemInput = {
+      name,
+      refrigerantId,
+      fullCharge: { value, unit },
+      applianceType,
+      automaticLeakDetection: ald,
+    };
     const parsed = createSystemInput.safeParse(values);
     if (!parsed.success) {
       setClientErrors(zodFieldErrors(parsed.error));
@@ -55,8 +81,19 @@ export function SystemForm({ storeId, system, massUnit, onDone, onCancel }: { st
       <form onSubmit={submit} noValidate className="space-y-4 rounded-md bg-surface p-4 edge">
         <h3 className="text-lg font-bold">{system ? `Edit ${system.name}` : "New system"}</h3>
         {formError ? <Alert tone="error">{formError}</Alert> : null}
-        <TextField label="System name" hint="As on the rack or unit, e.g. Rack A (medium temperature)" value={name} onChange={(e) => setName(e.target.value)} error={errors.name} />
-        <RefrigerantPicker refrigerants={refrigerants.data ?? []} value={refrigerantId} onChange={setRefrigerantId} error={errors.refrigerantId} />
+        <TextField
+          label="System name"
+          hint="As on the rack or unit, e.g. Rack A (medium temperature)"
+          value={name}
+          onChange={(e) => setName(e.target.value)}
+          error={errors.name}
+        />
+        <RefrigerantPicker
+          refrigerants={refrigerants.data ?? []}
+          value={refrigerantId}
+          onChange={setRefrigerantId}
+          error={errors.refrigerantId}
+        />
         <div className="flex flex-wrap items-start gap-3">
           <TextField
             label="Full charge"

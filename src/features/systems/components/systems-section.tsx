@@ -13,7 +13,15 @@ import { useSystems } from "../api/get-systems";
 import { SystemForm } from "./system-form";
 
 /** The store page's systems: racks and condensing units with refrigerant, charge and detection. */
-export function SystemsSection({ storeId, canEdit, massUnit }: { storeId: string; canEdit: boolean; massUnit: MassPreference }) {
+export function SystemsSection({
+  storeId,
+  canEdit,
+  massUnit,
+}: {
+  storeId: string;
+  canEdit: boolean;
+  massUnit: MassPreference;
+}) {
   const systems = useSystems(storeId);
   const [editing, setEditing] = useState<string | "new" | null>(null);
   const [confirmDelete, setConfirmDelete] = useState<string | null>(null);
@@ -30,13 +38,24 @@ export function SystemsSection({ storeId, canEdit, massUnit }: { storeId: string
         {canEdit && editing === null ? <Button onClick={() => setEditing("new")}>Add system</Button> : null}
       </div>
       {systems.isPending ? <Spinner label="Loading systems…" /> : null}
-      {systems.isError ? <QueryError error={systems.error} what="the systems" onRetry={() => void systems.refetch()} /> : null}
+      {systems.isError ? (
+        <QueryError error={systems.error} what="the systems" onRetry={() => void systems.refetch()} />
+      ) : null}
       {deleteError ? <Alert tone="error">{deleteError}</Alert> : null}
       {editing === "new" || editedSystem ? (
-        <SystemForm key={editing} storeId={storeId} system={editedSystem} massUnit={massUnit} onDone={() => setEditing(null)} onCancel={() => setEditing(null)} />
+        <SystemForm
+          key={editing}
+          storeId={storeId}
+          system={editedSystem}
+          massUnit={massUnit}
+          onDone={() => setEditing(null)}
+          onCancel={() => setEditing(null)}
+        />
       ) : null}
       {systems.data && systems.data.length === 0 && editing === null ? (
-        <EmptyState title="No systems yet">Add the store's racks and condensing units, so fixtures can be linked to them and leak rates worked out.</EmptyState>
+        <EmptyState title="No systems yet">
+          Add the store's racks and condensing units, so fixtures can be linked to them and leak rates worked out.
+        </EmptyState>
       ) : null}
       {systems.data && systems.data.length > 0 ? (
         <DataTable<System>
@@ -53,7 +72,11 @@ export function SystemsSection({ storeId, canEdit, massUnit }: { storeId: string
                 </>
               ),
             },
-            { header: "GWP", cell: (s) => (s.refrigerant.gwp ? `${s.refrigerant.gwp.value} (${s.refrigerant.gwp.basis})` : "not known") },
+            {
+              header: "GWP",
+              cell: (s) =>
+                s.refrigerant.gwp ? `${s.refrigerant.gwp.value} (${s.refrigerant.gwp.basis})` : "not known",
+            },
             { header: "Full charge", cell: (s) => formatMass(s.fullChargeKg, massUnit, 1) },
             { header: "Appliance type", cell: (s) => APPLIANCE_TYPE_NAMES[s.applianceType] },
             { header: "Automatic leak detection", cell: (s) => (s.automaticLeakDetection ? "Yes" : "No") },
@@ -64,7 +87,13 @@ export function SystemsSection({ storeId, canEdit, massUnit }: { storeId: string
                     cell: (s: System) =>
                       confirmDelete === s.id ? (
                         <div className="flex flex-wrap gap-2">
-                          <Button variant="danger" busy={del.isPending} onClick={() => del.mutate({ id: s.id, storeId }, { onSettled: () => setConfirmDelete(null) })}>
+                          <Button
+                            variant="danger"
+                            busy={del.isPending}
+                            onClick={() =>
+                              del.mutate({ id: s.id, storeId }, { onSettled: () => setConfirmDelete(null) })
+                            }
+                          >
                             Delete {s.name}
                           </Button>
                           <Button variant="secondary" onClick={() => setConfirmDelete(null)}>
@@ -76,7 +105,11 @@ export function SystemsSection({ storeId, canEdit, massUnit }: { storeId: string
                           <Button variant="secondary" onClick={() => setEditing(s.id)} aria-label={`Edit ${s.name}`}>
                             Edit
                           </Button>
-                          <Button variant="quiet" onClick={() => setConfirmDelete(s.id)} aria-label={`Delete ${s.name}`}>
+                          <Button
+                            variant="quiet"
+                            onClick={() => setConfirmDelete(s.id)}
+                            aria-label={`Delete ${s.name}`}
+                          >
                             Delete
                           </Button>
                         </div>

@@ -35,12 +35,19 @@ export function InvitationsList({ invitations, stores, canManage, now = new Date
           {
             header: "Stores",
             cell: (i) =>
-              i.role === "store-contact" ? i.storeIds.map((id) => stores?.find((s) => s.id === id)?.name ?? "A store not listed").join(", ") : "All stores",
+              i.role === "store-contact"
+                ? i.storeIds.map((id) => stores?.find((s) => s.id === id)?.name ?? "A store not listed").join(", ")
+                : "All stores",
           },
           { header: "Invited by", cell: (i) => i.invitedBy },
           {
             header: "Expires",
-            cell: (i) => (new Date(i.expiresAt) < now ? <strong>Expired {formatDate(i.expiresAt)}</strong> : formatDate(i.expiresAt)),
+            cell: (i) =>
+              new Date(i.expiresAt) < now ? (
+                <strong>Expired {formatDate(i.expiresAt)}</strong>
+              ) : (
+                formatDate(i.expiresAt)
+              ),
           },
           ...(canManage
             ? [

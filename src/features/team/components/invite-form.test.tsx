@@ -66,7 +66,11 @@ describe("invite form", () => {
     fireEvent.click(screen.getByRole("button", { name: "Send invitation" }));
 
     expect(await screen.findByText("Invitation sent to dana.okafor@maplestreet.example")).toBeTruthy();
-    expect(calls[0]!.body).toEqual({ email: "dana.okafor@maplestreet.example", role: "store-contact", storeIds: [STORES[1]!.id] });
+    expect(calls[0]!.body).toEqual({
+      email: "dana.okafor@maplestreet.example",
+      role: "store-contact",
+      storeIds: [STORES[1]!.id],
+    });
     expect(calls[0]!.headers["x-csrf-token"]).toBe("csrf-owner");
   });
 
@@ -84,10 +88,18 @@ describe("invite form", () => {
   });
 
   it("shows the server's field errors and conflicts", async () => {
-    stubFetch({ "POST /api/team/invitations": apiError(409, "conflict", "sam.reyes@northfield.example is already a member of this company.") });
+    stubFetch({
+      "POST /api/team/invitations": apiError(
+        409,
+        "conflict",
+        "sam.reyes@northfield.example is already a member of this company.",
+      ),
+    });
     renderOnRoute(<InviteForm stores={STORES} />, { path: "/team" });
     fireEvent.change(screen.getByLabelText("E-mail"), { target: { value: "sam.reyes@northfield.example" } });
     fireEvent.click(screen.getByRole("button", { name: "Send invitation" }));
-    expect((await screen.findByRole("alert")).textContent).toBe("sam.reyes@northfield.example is already a member of this company.");
+    expect((await screen.findByRole("alert")).textContent).toBe(
+      "sam.reyes@northfield.example is already a member of this company.",
+    );
   });
 });

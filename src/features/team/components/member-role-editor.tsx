@@ -37,8 +37,16 @@ export function MemberRoleEditor({ member, stores, onDone }: MemberRoleEditorPro
   return (
     <div className="space-y-3 rounded-md bg-accent-soft p-3 edge">
       {formError ? <Alert tone="error">{formError}</Alert> : null}
-      <Select label={`Role of ${member.name}`} options={ROLE_OPTIONS} value={role} onChange={(e) => setRole(e.target.value as Role)} error={errors.role} />
-      {role === "store-contact" ? <StorePicker stores={stores} selected={storeIds} onChange={setStoreIds} error={errors.storeIds} /> : null}
+      <Select
+        label={`Role of ${member.name}`}
+        options={ROLE_OPTIONS}
+        value={role}
+        onChange={(e) => setRole(e.target.value as Role)}
+        error={errors.role}
+      />
+      {role === "store-contact" ? (
+        <StorePicker stores={stores} selected={storeIds} onChange={setStoreIds} error={errors.storeIds} />
+      ) : null}
       <div className="flex flex-wrap gap-2">
         <Button onClick={save} busy={update.isPending}>
           Save role

@@ -29,7 +29,13 @@ const contact: Member = {
 };
 
 const table = (canManage: boolean) => (
-  <MembersTable members={[owner, contact]} stores={STORES} canManage={canManage} currentUserId={USER_ID} companyName="Northfield Cold Care" />
+  <MembersTable
+    members={[owner, contact]}
+    stores={STORES}
+    canManage={canManage}
+    currentUserId={USER_ID}
+    companyName="Northfield Cold Care"
+  />
 );
 
 beforeEach(() => setCsrfToken("csrf-owner"));
@@ -46,7 +52,9 @@ describe("members table", () => {
   });
 
   it("lets an owner change a role in place", async () => {
-    const calls = stubFetch({ [`PATCH /api/team/members/${contact.membershipId}`]: { body: { ...contact, role: "technician", storeIds: [] } } });
+    const calls = stubFetch({
+      [`PATCH /api/team/members/${contact.membershipId}`]: { body: { ...contact, role: "technician", storeIds: [] } },
+    });
     renderOnRoute(table(true), { path: "/team" });
     fireEvent.click(screen.getByRole("button", { name: "Change role of Dana Okafor" }));
     fireEvent.change(screen.getByLabelText("Role of Dana Okafor"), { target: { value: "technician" } });
@@ -59,7 +67,11 @@ describe("members table", () => {
 
   it("asks before removing and shows the server's refusal for the last owner", async () => {
     const calls = stubFetch({
-      [`DELETE /api/team/members/${owner.membershipId}`]: apiError(409, "conflict", "The company must keep at least one owner."),
+      [`DELETE /api/team/members/${owner.membershipId}`]: apiError(
+        409,
+        "conflict",
+        "The company must keep at least one owner.",
+      ),
     });
     renderOnRoute(table(true), { path: "/team" });
     fireEvent.click(screen.getByRole("button", { name: "Remove Ines Varga" }));

@@ -37,10 +37,18 @@ export function MembersTable({ members, stores, canManage, currentUserId, compan
       header: "Actions",
       cell: (m) => (
         <div className="flex flex-wrap gap-2">
-          <Button variant="secondary" aria-label={`Change role of ${m.name}`} onClick={() => setOpen({ membershipId: m.membershipId, mode: "edit" })}>
+          <Button
+            variant="secondary"
+            aria-label={`Change role of ${m.name}`}
+            onClick={() => setOpen({ membershipId: m.membershipId, mode: "edit" })}
+          >
             Change role
           </Button>
-          <Button variant="secondary" aria-label={`Remove ${m.name}`} onClick={() => setOpen({ membershipId: m.membershipId, mode: "remove" })}>
+          <Button
+            variant="secondary"
+            aria-label={`Remove ${m.name}`}
+            onClick={() => setOpen({ membershipId: m.membershipId, mode: "remove" })}
+          >
             Remove
           </Button>
         </div>

@@ -4,7 +4,15 @@ import { Button } from "../../../components/ui/button";
 import { formErrorMessage } from "../../../lib/form-errors";
 import { useRemoveMember } from "../api/remove-member";
 
-export function RemoveMemberConfirm({ member, companyName, onDone }: { member: Member; companyName: string; onDone: () => void }) {
+export function RemoveMemberConfirm({
+  member,
+  companyName,
+  onDone,
+}: {
+  member: Member;
+  companyName: string;
+  onDone: () => void;
+}) {
   const remove = useRemoveMember();
   const error = formErrorMessage(remove.error);
   return (
@@ -14,7 +22,11 @@ export function RemoveMemberConfirm({ member, companyName, onDone }: { member: M
       </p>
       {error ? <Alert tone="error">{error}</Alert> : null}
       <div className="flex flex-wrap gap-2">
-        <Button variant="danger" busy={remove.isPending} onClick={() => remove.mutate(member.membershipId, { onSuccess: onDone })}>
+        <Button
+          variant="danger"
+          busy={remove.isPending}
+          onClick={() => remove.mutate(member.membershipId, { onSuccess: onDone })}
+        >
           Yes, remove {member.name}
         </Button>
         <Button variant="secondary" onClick={onDone}>

@@ -28,7 +28,14 @@ export function StorePicker({ stores, selected, onChange, error, loading = false
         <p className="text-muted">This company has no stores yet, so a store contact cannot be given one.</p>
       ) : null}
       {stores?.map((store) => (
-        <Checkbox key={store.id} name="storeIds" value={store.id} label={store.name} checked={selected.includes(store.id)} onChange={(e) => toggle(store.id, e.target.checked)} />
+        <Checkbox
+          key={store.id}
+          name="storeIds"
+          value={store.id}
+          label={store.name}
+          checked={selected.includes(store.id)}
+          onChange={(e) => toggle(store.id, e.target.checked)}
+        />
       ))}
       {error ? (
         <p id="store-picker-error" className="mt-1 font-bold text-danger">

@@ -12,9 +12,23 @@ export async function pullSweep(db: WalkDb, sweepId: string): Promise<LocalSweep
   const s = await api.get(`/api/sweeps/${sweepId}`, sweep);
   const { readings } = await api.get(`/api/sweeps/${sweepId}/readings`, z.object({ readings: z.array(reading) }));
   const local: LocalSweep = {
-    id: s.id, storeId: s.storeId, planId: s.planId, detectorId: s.detectorId, detectorName: s.detectorName, systemIds: s.systemIds,
-    fans: s.fans, defrost: s.defrost, startedAt: s.startedAt, status: s.status, transportDelayS: s.transportDelayS,
-    timeConstantS: s.timeConstantS, alarmPpm: s.alarmPpm, warnings: s.warnings, onServer: true, submitPending: false, rejected: null,
+    id: s.id,
+    storeId: s.storeId,
+    planId: s.planId,
+    detectorId: s.detectorId,
+    detectorName: s.detectorName,
+    systemIds: s.systemIds,
+    fans: s.fans,
+    defrost: s.defrost,
+    startedAt: s.startedAt,
+    status: s.status,
+    transportDelayS: s.transportDelayS,
+    timeConstantS: s.timeConstantS,
+    alarmPpm: s.alarmPpm,
+    warnings: s.warnings,
+    onServer: true,
+    submitPending: false,
+    rejected: null,
   };
   const tx = db.transaction(["sweeps", "readings", "meta"], "readwrite");
   await tx.objectStore("sweeps").put(local);
@@ -23,8 +37,23 @@ export async function pullSweep(db: WalkDb, sweepId: string): Promise<LocalSweep
     const existing = await tx.objectStore("readings").get(r.id);
     if (existing) continue;
     const row: LocalReading = {
-      id: r.id, sweepId, seq: ++seq, x: r.x, y: r.y, takenAt: r.takenAt, ppm: r.ppm, atLeast: r.atLeast, samplePoint: r.samplePoint, note: r.note,
-      draft: false, state: "synced", onServer: true, editPending: false, deletePending: false, editedAt: null, reasons: null,
+      id: r.id,
+      sweepId,
+      seq: ++seq,
+      x: r.x,
+      y: r.y,
+      takenAt: r.takenAt,
+      ppm: r.ppm,
+      atLeast: r.atLeast,
+      samplePoint: r.samplePoint,
+      note: r.note,
+      draft: false,
+      state: "synced",
+      onServer: true,
+      editPending: false,
+      deletePending: false,
+      editedAt: null,
+      reasons: null,
     };
     await tx.objectStore("readings").put(row);
   }

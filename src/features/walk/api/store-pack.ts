@@ -12,7 +12,15 @@ const storeDetail = z.object({
   store,
   systems: z.array(system),
   currentPlan: plan.nullable(),
-  planVersions: z.array(z.object({ id: z.string(), version: z.number(), calibrated: z.boolean(), fixtureCount: z.number(), createdAt: z.string() })),
+  planVersions: z.array(
+    z.object({
+      id: z.string(),
+      version: z.number(),
+      calibrated: z.boolean(),
+      fixtureCount: z.number(),
+      createdAt: z.string(),
+    }),
+  ),
 });
 
 /** Everything a sweep of a store needs, kept on the device so a sweep can start offline. */
@@ -77,7 +85,12 @@ export async function loadPlanPack(planId: string): Promise<PlanPack> {
 }
 
 export function storePackQueryOptions(storeId: string) {
-  return queryOptions({ queryKey: walkKeys.storePack(storeId), queryFn: () => loadStorePack(storeId), retry: false, staleTime: 60_000 });
+  return queryOptions({
+    queryKey: walkKeys.storePack(storeId),
+    queryFn: () => loadStorePack(storeId),
+    retry: false,
+    staleTime: 60_000,
+  });
 }
 
 export function useStorePack(storeId: string | undefined) {
@@ -85,5 +98,11 @@ export function useStorePack(storeId: string | undefined) {
 }
 
 export function usePlanPack(planId: string | undefined) {
-  return useQuery({ queryKey: walkKeys.planPack(planId ?? ""), queryFn: () => loadPlanPack(planId!), enabled: !!planId, retry: false, staleTime: Infinity });
+  return useQuery({
+    queryKey: walkKeys.planPack(planId ?? ""),
+    queryFn: () => loadPlanPack(planId!),
+    enabled: !!planId,
+    retry: false,
+    staleTime: Infinity,
+  });
 }

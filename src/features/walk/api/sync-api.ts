@@ -1,4 +1,9 @@
-import { readingsBatchResult, type CreateSweepInput, type ReadingEditInput, type ReadingInput } from "#core/contracts/sweeps";
+import {
+  readingsBatchResult,
+  type CreateSweepInput,
+  type ReadingEditInput,
+  type ReadingInput,
+} from "#core/contracts/sweeps";
 import { api, isApiRequestError } from "../../../lib/api-client";
 import { RefusedError, type SyncTransport } from "../model/sync-transport";
 import { postFindingPhoto, postWalkFinding } from "./create-finding";
@@ -8,7 +13,8 @@ async function call<T>(run: () => Promise<T>): Promise<T> {
   try {
     return await run();
   } catch (e) {
-    if (isApiRequestError(e) && e.status >= 400 && e.status < 500) throw new RefusedError(e.status, e.message, e.fields);
+    if (isApiRequestError(e) && e.status >= 400 && e.status < 500)
+      throw new RefusedError(e.status, e.message, e.fields);
     throw e;
   }
 }

@@ -4,18 +4,31 @@ import { Dialog } from "../../../components/ui/dialog";
 
 /** Shown on entering a walk-in or machine room: the usual cautions, deferring to local codes. */
 export function CautionDialog({ place, name, onClose }: { place: CautionPlace | null; name: string; onClose(): void }) {
-  const cautions = place ? cautionsFor({ place }).filter((c) => c.id === "oxygen-displacement" || c.id === "codes-govern") : [];
+  const cautions = place
+    ? cautionsFor({ place }).filter((c) => c.id === "oxygen-displacement" || c.id === "codes-govern")
+    : [];
   return (
-    <Dialog title={`Before you enter ${name || (place === "machine-room" ? "the machine room" : "the walk-in")}`} open={place !== null} onClose={onClose}>
+    <Dialog
+      title={`Before you enter ${name || (place === "machine-room" ? "the machine room" : "the walk-in")}`}
+      open={place !== null}
+      onClose={onClose}
+    >
       <ul className="flex flex-col gap-2">
         {cautions.map((c) => (
-          <li key={c.id} className={`rounded-md border-l-4 p-3 edge ${c.level === "warning" ? "border-danger bg-danger-soft" : "border-note bg-note-soft"}`}>
+          <li
+            key={c.id}
+            className={`rounded-md border-l-4 p-3 edge ${c.level === "warning" ? "border-danger bg-danger-soft" : "border-note bg-note-soft"}`}
+          >
             {c.text}
           </li>
         ))}
-        <li className="rounded-md border-l-4 border-note bg-note-soft p-3 edge">Site rules apply as well: follow the store's procedure for entering refrigerated rooms.</li>
+        <li className="rounded-md border-l-4 border-note bg-note-soft p-3 edge">
+          Site rules apply as well: follow the store's procedure for entering refrigerated rooms.
+        </li>
       </ul>
-      <Button onClick={onClose} className="min-h-12">I have checked the room's alarm — continue</Button>
+      <Button onClick={onClose} className="min-h-12">
+        I have checked the room's alarm — continue
+      </Button>
     </Dialog>
   );
 }

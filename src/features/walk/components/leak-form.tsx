@@ -18,7 +18,16 @@ export interface LeakSpot {
 }
 
 /** "Leak found here": position (from the tap), fixture, component, status, photo and note. */
-export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId: string; sweepId: string; fixtures: readonly Fixture[]; lengthUnit?: LengthPreference; onClose(): void; onSaved(id: string): void }) {
+export function LeakForm(props: {
+  spot: LeakSpot | null;
+  storeId: string;
+  planId: string;
+  sweepId: string;
+  fixtures: readonly Fixture[];
+  lengthUnit?: LengthPreference;
+  onClose(): void;
+  onSaved(id: string): void;
+}) {
   const [fixtureId, setFixtureId] = useState(props.spot?.fixtureId ?? "");
   const [component, setComponent] = useState<string>("");
   const [status, setStatus] = useState<"suspected" | "confirmed">("confirmed");
@@ -27,7 +36,12 @@ export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
   const len = (m: number) => formatLength(m, props.lengthUnit ?? "m", { decimals: 1 });
-  const options = [{ value: "", label: "No fixture" }, ...props.fixtures.filter((f) => f.kind !== "wall" && f.kind !== "column").map((f) => ({ value: f.id, label: f.label || FIXTURE_KIND_NAMES[f.kind] }))];
+  const options = [
+    { value: "", label: "No fixture" },
+    ...props.fixtures
+      .filter((f) => f.kind !== "wall" && f.kind !== "column")
+      .map((f) => ({ value: f.id, label: f.label || FIXTURE_KIND_NAMES[f.kind] })),
+  ];
 
   async function save() {
     if (!props.spot) return;
@@ -59,7 +73,9 @@ export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId
           note,
           foundAt: new Date().toISOString(),
         },
-        photo ? { name: photo.name || "photo.jpg", type: photo.type || "image/jpeg", data: await photo.arrayBuffer() } : null,
+        photo
+          ? { name: photo.name || "photo.jpg", type: photo.type || "image/jpeg", data: await photo.arrayBuffer() }
+          : null,
       );
       await refreshCounts();
       syncSoon(0);
@@ -73,15 +89,37 @@ export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId
 
   return (
     <Dialog title="Leak found here" open={props.spot !== null} onClose={props.onClose}>
-      {props.spot ? <p className="text-muted">{len(props.spot.x)} across and {len(props.spot.y)} down from the plan's top-left corner.</p> : null}
+      {props.spot ? (
+        <p className="text-muted">
+          {len(props.spot.x)} across and {len(props.spot.y)} down from the plan's top-left corner.
+        </p>
+      ) : null}
       <Select label="Fixture" value={fixtureId} onChange={(e) => setFixtureId(e.target.value)} options={options} />
-      <Select label="Component" value={component} onChange={(e) => setComponent(e.target.value)} options={[{ value: "", label: "Not known yet" }, ...FINDING_COMPONENTS.map((c) => ({ value: c, label: COMPONENT_LABELS[c] }))]} />
+      <Select
+        label="Component"
+        value={component}
+        onChange={(e) => setComponent(e.target.value)}
+        options={[
+          { value: "", label: "Not known yet" },
+          ...FINDING_COMPONENTS.map((c) => ({ value: c, label: COMPONENT_LABELS[c] })),
+        ]}
+      />
       <fieldset>
         <legend className="font-bold">Status</legend>
         <div className="flex gap-2">
           {(["confirmed", "suspected"] as const).map((s) => (
-            <label key={s} className={`flex min-h-12 flex-1 items-center justify-center gap-2 rounded-md font-bold edge ${status === s ? "bg-accent text-on-accent" : ""}`}>
-              <input type="radio" name="leak-status" value={s} checked={status === s} onChange={() => setStatus(s)} className="size-5" />
+            <label
+              key={s}
+              className={`flex min-h-12 flex-1 items-center justify-center gap-2 rounded-md font-bold edge ${status === s ? "bg-accent text-on-accent" : ""}`}
+            >
+              <input
+                type="radio"
+                name="leak-status"
+                value={s}
+                checked={status === s}
+                onChange={() => setStatus(s)}
+                className="size-5"
+              />
               {s === "confirmed" ? "Confirmed (pinpointed)" : "Suspected"}
             </label>
           ))}
@@ -91,18 +129,38 @@ export function LeakForm(props: { spot: LeakSpot | null; storeId: string; planId
         <span className="font-bold">Photo</span>
         {/* The native file control is a small target; a large labelled one opens the camera. */}
         <label className="mt-1 flex min-h-12 cursor-pointer items-center justify-center rounded-md px-3 font-bold edge focus-within:ring-2 focus-within:ring-accent">
-          <input type="file" accept="image/*" capture="environment" onChange={(e) => setPhoto(e.target.files?.[0] ?? null)} className="sr-only" />
+          <input
+            type="file"
+            accept="image/*"
+            capture="environment"
+            onChange={(e) => setPhoto(e.target.files?.[0] ?? null)}
+            className="sr-only"
+          />
           {photo ? `Photo: ${photo.name || "from the camera"} — change` : "Take or choose a photo"}
         </label>
       </div>
       <label className="block">
         <span className="font-bold">Note</span>
-        <textarea value={note} onChange={(e) => setNote(e.target.value)} maxLength={2000} rows={2} className="mt-1 block w-full rounded-md p-2 edge" />
+        <textarea
+          value={note}
+          onChange={(e) => setNote(e.target.value)}
+          maxLength={2000}
+          rows={2}
+          className="mt-1 block w-full rounded-md p-2 edge"
+        />
       </label>
-      {error ? <Alert tone="error" title="Not saved">{error}</Alert> : null}
+      {error ? (
+        <Alert tone="error" title="Not saved">
+          {error}
+        </Alert>
+      ) : null}
       <div className="flex gap-2">
-        <Button onClick={() => void save()} busy={busy} className="min-h-12">Save finding</Button>
-        <Button variant="secondary" onClick={props.onClose} className="min-h-12">Cancel</Button>
+        <Button onClick={() => void save()} busy={busy} className="min-h-12">
+          Save finding
+        </Button>
+        <Button variant="secondary" onClick={props.onClose} className="min-h-12">
+          Cancel
+        </Button>
       </div>
     </Dialog>
   );

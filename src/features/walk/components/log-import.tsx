@@ -14,7 +14,13 @@ function guess(headers: string[], words: RegExp, fallback: number): number {
  * A detector's own data log (CSV of time and ppm): map the columns, slide the clock offset until
  * the log lines up with the taps, see which rows cannot be used and why, then add the rest.
  */
-export function LogImport(props: { open: boolean; taps: readonly TapPosition[]; sweepStartMs: number; onImport(readings: ReadingValues[]): void; onClose(): void }) {
+export function LogImport(props: {
+  open: boolean;
+  taps: readonly TapPosition[];
+  sweepStartMs: number;
+  onImport(readings: ReadingValues[]): void;
+  onClose(): void;
+}) {
   const [table, setTable] = useState<LogTable | null>(null);
   const [fileError, setFileError] = useState<string | null>(null);
   const [timeCol, setTimeCol] = useState(0);
@@ -50,38 +56,88 @@ export function LogImport(props: { open: boolean; taps: readonly TapPosition[]; 
 
   return (
     <Dialog title="Import the detector's log" open={props.open} onClose={props.onClose} wide>
-      <p>Readings from the log are placed on the path you tapped, by time. Tap the positions first, then import the log.</p>
+      <p>
+        Readings from the log are placed on the path you tapped, by time. Tap the positions first, then import the log.
+      </p>
       <label className="block">
         <span className="font-bold">CSV file</span>
-        <input type="file" accept=".csv,text/csv,text/plain" onChange={(e) => void choose(e.target.files?.[0])} className="mt-1 block min-h-12 w-full" />
+        <input
+          type="file"
+          accept=".csv,text/csv,text/plain"
+          onChange={(e) => void choose(e.target.files?.[0])}
+          className="mt-1 block min-h-12 w-full"
+        />
       </label>
       {fileError ? <p className="text-danger">{fileError}</p> : null}
       {table ? (
         <>
           <div className="grid gap-2 sm:grid-cols-2">
-            <Select label="Time column" value={String(timeCol)} onChange={(e) => setTimeCol(Number(e.target.value))} options={columns} />
-            <Select label="ppm column" value={String(ppmCol)} onChange={(e) => setPpmCol(Number(e.target.value))} options={columns} />
+            <Select
+              label="Time column"
+              value={String(timeCol)}
+              onChange={(e) => setTimeCol(Number(e.target.value))}
+              options={columns}
+            />
+            <Select
+              label="ppm column"
+              value={String(ppmCol)}
+              onChange={(e) => setPpmCol(Number(e.target.value))}
+              options={columns}
+            />
           </div>
           <fieldset>
             <legend className="font-bold">Clock offset (added to the log's times)</legend>
             <div className="flex items-center gap-2">
-              {[-10, -1].map((d) => <Button key={d} variant="secondary" className="min-h-12" onClick={() => step(d)}>{d} s</Button>)}
-              <input aria-label="Clock offset in seconds" type="number" step="0.1" value={offset} onChange={(e) => setOffset(Number(e.target.value) || 0)} className="min-h-12 w-24 rounded-md px-2 text-center edge" />
-              {[1, 10].map((d) => <Button key={d} variant="secondary" className="min-h-12" onClick={() => step(d)}>+{d} s</Button>)}
+              {[-10, -1].map((d) => (
+                <Button key={d} variant="secondary" className="min-h-12" onClick={() => step(d)}>
+                  {d} s
+                </Button>
+              ))}
+              <input
+                aria-label="Clock offset in seconds"
+                type="number"
+                step="0.1"
+                value={offset}
+                onChange={(e) => setOffset(Number(e.target.value) || 0)}
+                className="min-h-12 w-24 rounded-md px-2 text-center edge"
+              />
+              {[1, 10].map((d) => (
+                <Button key={d} variant="secondary" className="min-h-12" onClick={() => step(d)}>
+                  +{d} s
+                </Button>
+              ))}
             </div>
           </fieldset>
           {result ? (
             <>
-              <p className="font-bold" data-testid="import-counts">{result.placed.length} rows can be placed; {result.bad.length} cannot.</p>
+              <p className="font-bold" data-testid="import-counts">
+                {result.placed.length} rows can be placed; {result.bad.length} cannot.
+              </p>
               {result.bad.length ? (
                 <ul className="max-h-40 overflow-auto text-danger" aria-label="Rows that cannot be used">
-                  {result.bad.slice(0, 200).map((b) => <li key={b.line}>Line {b.line}: {b.reason}</li>)}
+                  {result.bad.slice(0, 200).map((b) => (
+                    <li key={b.line}>
+                      Line {b.line}: {b.reason}
+                    </li>
+                  ))}
                 </ul>
               ) : null}
               <Button
                 disabled={result.placed.length === 0}
                 className="min-h-12"
-                onClick={() => props.onImport(result.placed.map((p) => ({ x: p.x, y: p.y, takenAt: p.takenAt, ppm: p.ppm, atLeast: p.atLeast, samplePoint: p.samplePoint, note: `From the detector's log, line ${p.line}` })))}
+                onClick={() =>
+                  props.onImport(
+                    result.placed.map((p) => ({
+                      x: p.x,
+                      y: p.y,
+                      takenAt: p.takenAt,
+                      ppm: p.ppm,
+                      atLeast: p.atLeast,
+                      samplePoint: p.samplePoint,
+                      note: `From the detector's log, line ${p.line}`,
+                    })),
+                  )
+                }
               >
                 Add {result.placed.length} readings
               </Button>

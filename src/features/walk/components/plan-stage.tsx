@@ -142,7 +142,10 @@ export function PlanStage(props: PlanStageProps) {
   function onWheel(e: React.WheelEvent) {
     const v = viewRef.current;
     if (!v) return;
-    const p = { x: e.clientX - box.current!.getBoundingClientRect().left, y: e.clientY - box.current!.getBoundingClientRect().top };
+    const p = {
+      x: e.clientX - box.current!.getBoundingClientRect().left,
+      y: e.clientY - box.current!.getBoundingClientRect().top,
+    };
     setView(zoomAt(v, p.x, p.y, Math.exp(-e.deltaY / 400)));
   }
 
@@ -177,31 +180,84 @@ export function PlanStage(props: PlanStageProps) {
         <Stage width={w} height={h} listening={false}>
           <Layer listening={false}>
             <Group x={view.panX} y={view.panY} scaleX={view.scale} scaleY={view.scale}>
-              {img ? <KonvaImage image={img} width={props.widthM} height={props.heightM} opacity={props.highContrast ? 0.45 : 0.8} /> : null}
-              <Line points={[0, 0, props.widthM, 0, props.widthM, props.heightM, 0, props.heightM]} closed stroke={ink} strokeWidth={1} strokeScaleEnabled={false} />
-              <Fixtures fixtures={props.fixtures} unsampled={props.unsampled} ink={ink} highContrast={props.highContrast} pointR={px(5)} />
+              {img ? (
+                <KonvaImage
+                  image={img}
+                  width={props.widthM}
+                  height={props.heightM}
+                  opacity={props.highContrast ? 0.45 : 0.8}
+                />
+              ) : null}
+              <Line
+                points={[0, 0, props.widthM, 0, props.widthM, props.heightM, 0, props.heightM]}
+                closed
+                stroke={ink}
+                strokeWidth={1}
+                strokeScaleEnabled={false}
+              />
+              <Fixtures
+                fixtures={props.fixtures}
+                unsampled={props.unsampled}
+                ink={ink}
+                highContrast={props.highContrast}
+                pointR={px(5)}
+              />
             </Group>
           </Layer>
           <Layer listening={false}>
             <Group x={view.panX} y={view.panY} scaleX={view.scale} scaleY={view.scale}>
-              <ReadingsShape readings={props.readings} alarmPpm={props.alarmPpm} scale={view.scale} selectedId={props.selectedId} highContrast={props.highContrast} />
+              <ReadingsShape
+                readings={props.readings}
+                alarmPpm={props.alarmPpm}
+                scale={view.scale}
+                selectedId={props.selectedId}
+                highContrast={props.highContrast}
+              />
               {props.lagHint ? <LagMarks hint={props.lagHint} readings={props.readings} scale={view.scale} /> : null}
             </Group>
           </Layer>
         </Stage>
       ) : null}
-      <div className="absolute right-2 top-2 flex flex-col gap-2" onPointerDown={(e) => e.stopPropagation()} onPointerUp={(e) => e.stopPropagation()}>
-        <button type="button" className={ZOOM} aria-label="Zoom in" onClick={() => zoomBy(1.6)}>+</button>
-        <button type="button" className={ZOOM} aria-label="Zoom out" onClick={() => zoomBy(1 / 1.6)}>−</button>
-        <button type="button" className={`${ZOOM} text-sm`} aria-label="Show the whole plan" onClick={() => setView(fitView(props.widthM, props.heightM, w, h))}>All</button>
+      <div
+        className="absolute right-2 top-2 flex flex-col gap-2"
+        onPointerDown={(e) => e.stopPropagation()}
+        onPointerUp={(e) => e.stopPropagation()}
+      >
+        <button type="button" className={ZOOM} aria-label="Zoom in" onClick={() => zoomBy(1.6)}>
+          +
+        </button>
+        <button type="button" className={ZOOM} aria-label="Zoom out" onClick={() => zoomBy(1 / 1.6)}>
+          −
+        </button>
+        <button
+          type="button"
+          className={`${ZOOM} text-sm`}
+          aria-label="Show the whole plan"
+          onClick={() => setView(fitView(props.widthM, props.heightM, w, h))}
+        >
+          All
+        </button>
       </div>
     </div>
   );
 }
 
-const ZOOM = "flex h-12 w-12 items-center justify-center rounded-md bg-surface text-2xl font-bold edge shadow active:opacity-70";
+const ZOOM =
+  "flex h-12 w-12 items-center justify-center rounded-md bg-surface text-2xl font-bold edge shadow active:opacity-70";
 
-function Fixtures({ fixtures, unsampled, ink, highContrast, pointR }: { fixtures: readonly Fixture[]; unsampled: ReadonlySet<string>; ink: string; highContrast: boolean; pointR: number }) {
+function Fixtures({
+  fixtures,
+  unsampled,
+  ink,
+  highContrast,
+  pointR,
+}: {
+  fixtures: readonly Fixture[];
+  unsampled: ReadonlySet<string>;
+  ink: string;
+  highContrast: boolean;
+  pointR: number;
+}) {
   const shapes = useMemo(
     () =>
       fixtures.map((f) => {
@@ -210,7 +266,26 @@ function Fixtures({ fixtures, unsampled, ink, highContrast, pointR }: { fixtures
         const stroke = open ? (highContrast ? "#000000" : "#b35c00") : highContrast ? "#000000" : "#6b7a80";
         if ("point" in f) {
           const d = pointR;
-          return <Line key={f.id} points={[f.point.x - d, f.point.y, f.point.x, f.point.y - d, f.point.x + d, f.point.y, f.point.x, f.point.y + d]} closed stroke={stroke} strokeWidth={1.5} strokeScaleEnabled={false} fill={open ? (highContrast ? "#ffd600" : "#f0b45a") : "#ffffff"} />;
+          return (
+            <Line
+              key={f.id}
+              points={[
+                f.point.x - d,
+                f.point.y,
+                f.point.x,
+                f.point.y - d,
+                f.point.x + d,
+                f.point.y,
+                f.point.x,
+                f.point.y + d,
+              ]}
+              closed
+              stroke={stroke}
+              strokeWidth={1.5}
+              strokeScaleEnabled={false}
+              fill={open ? (highContrast ? "#ffd600" : "#f0b45a") : "#ffffff"}
+            />
+          );
         }
         return (
           <Line
@@ -241,7 +316,19 @@ declare global {
  * The path and all readings as ONE canvas shape: a sweep of thousands of readings stays one
  * node, so a tap redraws without reconciling thousands of React elements.
  */
-function ReadingsShape({ readings, alarmPpm, scale, selectedId, highContrast }: { readings: readonly LocalReading[]; alarmPpm: number; scale: number; selectedId: string | null; highContrast: boolean }) {
+function ReadingsShape({
+  readings,
+  alarmPpm,
+  scale,
+  selectedId,
+  highContrast,
+}: {
+  readings: readonly LocalReading[];
+  alarmPpm: number;
+  scale: number;
+  selectedId: string | null;
+  highContrast: boolean;
+}) {
   return (
     <Shape
       listening={false}
@@ -260,7 +347,15 @@ function ReadingsShape({ readings, alarmPpm, scale, selectedId, highContrast }: 
           const alarm = p.ppm >= alarmPpm;
           c.beginPath();
           c.arc(p.x, p.y, alarm ? r * 1.5 : p.ppm > 0 ? r * 1.15 : r, 0, Math.PI * 2);
-          c.fillStyle = alarm ? (highContrast ? "#000000" : "#9b2c2c") : p.ppm > 0 ? (highContrast ? "#ffd600" : "#e0a100") : "#ffffff";
+          c.fillStyle = alarm
+            ? highContrast
+              ? "#000000"
+              : "#9b2c2c"
+            : p.ppm > 0
+              ? highContrast
+                ? "#ffd600"
+                : "#e0a100"
+              : "#ffffff";
           c.fill();
           c.lineWidth = (p.id === selectedId ? 4 : 2) / scale;
           c.setLineDash(p.state === "rejected" ? [3 / scale, 2 / scale] : []);
@@ -281,17 +376,40 @@ function LagMarks({ hint, readings, scale }: { hint: LagHint; readings: readonly
   const d = 10 / scale;
   return (
     <>
-      {tap ? <Line points={[tap.x, tap.y, hint.x, hint.y]} stroke="#9b2c2c" strokeWidth={2} dash={[6, 4]} strokeScaleEnabled={false} /> : null}
+      {tap ? (
+        <Line
+          points={[tap.x, tap.y, hint.x, hint.y]}
+          stroke="#9b2c2c"
+          strokeWidth={2}
+          dash={[6, 4]}
+          strokeScaleEnabled={false}
+        />
+      ) : null}
       {hint.recheck.map((p, i) => (
-        <Line key={i} points={circlePoints(p.x, p.y, 5 / scale)} closed stroke="#9b2c2c" strokeWidth={2} strokeScaleEnabled={false} />
+        <Line
+          key={i}
+          points={circlePoints(p.x, p.y, 5 / scale)}
+          closed
+          stroke="#9b2c2c"
+          strokeWidth={2}
+          strokeScaleEnabled={false}
+        />
       ))}
-      <Line points={[hint.x - d, hint.y, hint.x, hint.y - d, hint.x + d, hint.y, hint.x, hint.y + d]} closed fill="#ffd600" stroke="#000000" strokeWidth={3} strokeScaleEnabled={false} />
+      <Line
+        points={[hint.x - d, hint.y, hint.x, hint.y - d, hint.x + d, hint.y, hint.x, hint.y + d]}
+        closed
+        fill="#ffd600"
+        stroke="#000000"
+        strokeWidth={3}
+        strokeScaleEnabled={false}
+      />
     </>
   );
 }
 
 function circlePoints(x: number, y: number, r: number): number[] {
   const out: number[] = [];
-  for (let k = 0; k < 16; k++) out.push(x + r * Math.cos((k / 16) * Math.PI * 2), y + r * Math.sin((k / 16) * Math.PI * 2));
+  for (let k = 0; k < 16; k++)
+    out.push(x + r * Math.cos((k / 16) * Math.PI * 2), y + r * Math.sin((k / 16) * Math.PI * 2));
   return out;
 }

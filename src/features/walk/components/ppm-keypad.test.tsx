@@ -6,7 +6,17 @@ const initial: KeypadValue = { ppm: 0, atLeast: false, samplePoint: "return", no
 
 function setup(extra: Partial<Parameters<typeof PpmKeypad>[0]> = {}) {
   const onSave = vi.fn();
-  render(<PpmKeypad title="Reading #3" initial={initial} recent={[2.5]} onSave={onSave} onCancel={() => {}} cancelLabel="Discard this tap" {...extra} />);
+  render(
+    <PpmKeypad
+      title="Reading #3"
+      initial={initial}
+      recent={[2.5]}
+      onSave={onSave}
+      onCancel={() => {}}
+      cancelLabel="Discard this tap"
+      {...extra}
+    />,
+  );
   return onSave;
 }
 
@@ -29,16 +39,33 @@ describe("the ppm keypad", () => {
 
   it("refuses a value above the 10,000 ppm ceiling", () => {
     setup();
-    for (const k of ["1", "2", "0", "0", "0"]) fireEvent.click(screen.getByRole("button", { name: k, exact: true } as never));
+    for (const k of ["1", "2", "0", "0", "0"])
+      fireEvent.click(screen.getByRole("button", { name: k, exact: true } as never));
     expect(screen.getByRole("button", { name: "Save" })).toHaveProperty("disabled", true);
     expect(screen.getByText(/Above the 10,000 ppm ceiling/)).toBeTruthy();
   });
 
   it("maps a detector level to its ppm band, stored as at least the band's floor", () => {
-    const onSave = setup({ levels: [{ level: "1", minPpm: 0, maxPpm: 5 }, { level: "2", minPpm: 5, maxPpm: 20 }, { level: "3", minPpm: 20, maxPpm: null }] });
+    const onSave = setup({
+      levels: [
+        { level: "1", minPpm: 0, maxPpm: 5 },
+        { level: "2", minPpm: 5, maxPpm: 20 },
+        { level: "3", minPpm: 20, maxPpm: null },
+      ],
+    });
     fireEvent.click(screen.getByRole("button", { name: "Level 2" }));
-    expect(onSave).toHaveBeenLastCalledWith({ ppm: 5, atLeast: true, samplePoint: "return", note: "Level 2 (5–20 ppm)" });
+    expect(onSave).toHaveBeenLastCalledWith({
+      ppm: 5,
+      atLeast: true,
+      samplePoint: "return",
+      note: "Level 2 (5–20 ppm)",
+    });
     fireEvent.click(screen.getByRole("button", { name: "Level 3" }));
-    expect(onSave).toHaveBeenLastCalledWith({ ppm: 20, atLeast: true, samplePoint: "return", note: "Level 3 (20+ ppm)" });
+    expect(onSave).toHaveBeenLastCalledWith({
+      ppm: 20,
+      atLeast: true,
+      samplePoint: "return",
+      note: "Level 3 (20+ ppm)",
+    });
   });
 });

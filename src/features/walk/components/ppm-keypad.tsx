@@ -24,7 +24,8 @@ export interface PpmKeypadProps {
   onMove?(): void;
 }
 
-const KEY = "flex h-12 min-w-12 items-center justify-center rounded-md text-2xl font-bold edge active:opacity-70 disabled:opacity-50";
+const KEY =
+  "flex h-12 min-w-12 items-center justify-center rounded-md text-2xl font-bold edge active:opacity-70 disabled:opacity-50";
 
 /**
  * A large ppm keypad for a gloved thumb: every key at least 48 × 48 px. "0 ppm" saves a zero in
@@ -57,19 +58,34 @@ export function PpmKeypad(props: PpmKeypadProps) {
   }
 
   return (
-    <section aria-label="Enter the detector's reading" className="flex flex-col gap-2 bg-surface p-2 edge border-x-0 border-b-0">
+    <section
+      aria-label="Enter the detector's reading"
+      className="flex flex-col gap-2 bg-surface p-2 edge border-x-0 border-b-0"
+    >
       <div className="flex items-center gap-2">
         <h2 className="shrink-0 font-bold">{props.title}</h2>
-        <output aria-live="polite" aria-label="Value" className={`block min-w-0 flex-1 truncate rounded-md px-3 text-right text-3xl font-bold edge ${tooHigh ? "border-danger text-danger" : ""}`}>
+        <output
+          aria-live="polite"
+          aria-label="Value"
+          className={`block min-w-0 flex-1 truncate rounded-md px-3 text-right text-3xl font-bold edge ${tooHigh ? "border-danger text-danger" : ""}`}
+        >
           {atLeast ? "≥ " : ""}
           {typed === "" ? "0" : typed} <span className="text-lg">ppm</span>
         </output>
         {props.onMove ? (
-          <button type="button" className="min-h-12 min-w-12 shrink-0 rounded-md px-2 font-bold edge" onClick={props.onMove}>
+          <button
+            type="button"
+            className="min-h-12 min-w-12 shrink-0 rounded-md px-2 font-bold edge"
+            onClick={props.onMove}
+          >
             Move
           </button>
         ) : null}
-        <button type="button" className="min-h-12 shrink-0 rounded-md px-2 font-bold text-accent underline" onClick={props.onCancel}>
+        <button
+          type="button"
+          className="min-h-12 shrink-0 rounded-md px-2 font-bold text-accent underline"
+          onClick={props.onCancel}
+        >
           {props.cancelLabel}
         </button>
       </div>
@@ -87,11 +103,21 @@ export function PpmKeypad(props: PpmKeypadProps) {
           </button>
         ))}
       </div>
-      {tooHigh ? <p className="text-danger">Above the {PPM_CEILING.toLocaleString("en-US")} ppm ceiling: enter the display's top value and press Over range.</p> : null}
+      {tooHigh ? (
+        <p className="text-danger">
+          Above the {PPM_CEILING.toLocaleString("en-US")} ppm ceiling: enter the display's top value and press Over
+          range.
+        </p>
+      ) : null}
       {props.recent.length ? (
         <div className="flex gap-2" aria-label="Recent values">
           {props.recent.map((v) => (
-            <button key={v} type="button" className="min-h-12 flex-1 rounded-md font-bold edge bg-accent-soft" onClick={() => props.onSave(current(false, v))}>
+            <button
+              key={v}
+              type="button"
+              className="min-h-12 flex-1 rounded-md font-bold edge bg-accent-soft"
+              onClick={() => props.onSave(current(false, v))}
+            >
               {v} ppm
             </button>
           ))}
@@ -105,7 +131,16 @@ export function PpmKeypad(props: PpmKeypadProps) {
               type="button"
               className="min-h-12 flex-1 rounded-md px-2 font-bold edge bg-note-soft"
               // A level says only that the concentration is in its band: stored as "at least" its floor.
-              onClick={() => props.onSave({ ppm: b.minPpm, atLeast: b.minPpm > 0, samplePoint, note: [`Level ${b.level} (${b.minPpm}${b.maxPpm === null ? "+" : `–${b.maxPpm}`} ppm)`, note.trim()].filter(Boolean).join("; ") })}
+              onClick={() =>
+                props.onSave({
+                  ppm: b.minPpm,
+                  atLeast: b.minPpm > 0,
+                  samplePoint,
+                  note: [`Level ${b.level} (${b.minPpm}${b.maxPpm === null ? "+" : `–${b.maxPpm}`} ppm)`, note.trim()]
+                    .filter(Boolean)
+                    .join("; "),
+                })
+              }
             >
               Level {b.level}
             </button>
@@ -113,27 +148,76 @@ export function PpmKeypad(props: PpmKeypadProps) {
         </div>
       ) : null}
       <div className="grid grid-cols-4 gap-2">
-        {["7", "8", "9"].map((k) => <button key={k} type="button" className={`${KEY} bg-surface`} onClick={() => press(k)}>{k}</button>)}
-        <button type="button" className={`${KEY} bg-surface`} aria-label="Delete last digit" onClick={() => type(typed.slice(0, -1))}>⌫</button>
-        {["4", "5", "6"].map((k) => <button key={k} type="button" className={`${KEY} bg-surface`} onClick={() => press(k)}>{k}</button>)}
-        <button type="button" aria-pressed={atLeast} className={`${KEY} text-base ${atLeast ? "bg-accent text-on-accent" : "bg-surface"}`} onClick={() => setAtLeast(!atLeast)}>
+        {["7", "8", "9"].map((k) => (
+          <button key={k} type="button" className={`${KEY} bg-surface`} onClick={() => press(k)}>
+            {k}
+          </button>
+        ))}
+        <button
+          type="button"
+          className={`${KEY} bg-surface`}
+          aria-label="Delete last digit"
+          onClick={() => type(typed.slice(0, -1))}
+        >
+          ⌫
+        </button>
+        {["4", "5", "6"].map((k) => (
+          <button key={k} type="button" className={`${KEY} bg-surface`} onClick={() => press(k)}>
+            {k}
+          </button>
+        ))}
+        <button
+          type="button"
+          aria-pressed={atLeast}
+          className={`${KEY} text-base ${atLeast ? "bg-accent text-on-accent" : "bg-surface"}`}
+          onClick={() => setAtLeast(!atLeast)}
+        >
           Over range
         </button>
-        {["1", "2", "3"].map((k) => <button key={k} type="button" className={`${KEY} bg-surface`} onClick={() => press(k)}>{k}</button>)}
-        <button type="button" className={`${KEY} bg-surface text-base`} aria-expanded={noteOpen} onClick={() => setNoteOpen(!noteOpen)}>Note</button>
-        <button type="button" className={`${KEY} bg-surface`} onClick={() => press(".")} aria-label="Decimal point">.</button>
-        <button type="button" className={`${KEY} bg-surface`} onClick={() => press("0")}>0</button>
-        <button type="button" className={`${KEY} col-span-2 bg-accent text-on-accent`} disabled={tooHigh} onClick={() => props.onSave(current())}>
+        {["1", "2", "3"].map((k) => (
+          <button key={k} type="button" className={`${KEY} bg-surface`} onClick={() => press(k)}>
+            {k}
+          </button>
+        ))}
+        <button
+          type="button"
+          className={`${KEY} bg-surface text-base`}
+          aria-expanded={noteOpen}
+          onClick={() => setNoteOpen(!noteOpen)}
+        >
+          Note
+        </button>
+        <button type="button" className={`${KEY} bg-surface`} onClick={() => press(".")} aria-label="Decimal point">
+          .
+        </button>
+        <button type="button" className={`${KEY} bg-surface`} onClick={() => press("0")}>
+          0
+        </button>
+        <button
+          type="button"
+          className={`${KEY} col-span-2 bg-accent text-on-accent`}
+          disabled={tooHigh}
+          onClick={() => props.onSave(current())}
+        >
           Save
         </button>
-        <button type="button" className={`${KEY} col-span-4 bg-ok text-xl text-on-accent`} onClick={() => props.onSave({ ...current(false, 0) })}>
+        <button
+          type="button"
+          className={`${KEY} col-span-4 bg-ok text-xl text-on-accent`}
+          onClick={() => props.onSave({ ...current(false, 0) })}
+        >
           0 ppm — save
         </button>
       </div>
       {noteOpen ? (
         <label className="block">
           <span className="font-bold">Note (optional)</span>
-          <input value={note} maxLength={500} onChange={(e) => setNote(e.target.value)} className="mt-1 block min-h-12 w-full rounded-md px-3 edge" />
+          <input
+            value={note}
+            maxLength={500}
+            onChange={(e) => setNote(e.target.value)}
+            className="mt-1 block min-h-12 w-full rounded-md px-3 edge"
+          />
         </label>
       ) : null}
     </section>

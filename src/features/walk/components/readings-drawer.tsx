@@ -34,19 +34,32 @@ export function ReadingsDrawer(props: {
           <h3 className="font-bold">Leaks marked here, not yet on the server</h3>
           <ul className="flex flex-col gap-2">
             {props.findings.map((f) => (
-              <li key={f.clientId} className={`rounded-md p-3 edge ${f.state === "rejected" ? "border-danger bg-danger-soft" : ""}`} data-testid="queued-finding">
+              <li
+                key={f.clientId}
+                className={`rounded-md p-3 edge ${f.state === "rejected" ? "border-danger bg-danger-soft" : ""}`}
+                data-testid="queued-finding"
+              >
                 <span className="font-bold">
-                  {f.input.status === "confirmed" ? "Confirmed" : "Suspected"} leak{f.input.component ? ` · ${COMPONENT_LABELS[f.input.component]}` : ""}
+                  {f.input.status === "confirmed" ? "Confirmed" : "Suspected"} leak
+                  {f.input.component ? ` · ${COMPONENT_LABELS[f.input.component]}` : ""}
                   {f.photo ? " · with photo" : ""}
                 </span>
-                <span className="block text-muted">{f.state === "rejected" ? "Refused by the server" : "Waiting to upload"}</span>
+                <span className="block text-muted">
+                  {f.state === "rejected" ? "Refused by the server" : "Waiting to upload"}
+                </span>
                 {f.reasons ? (
                   <ul className="text-danger">
-                    {Object.entries(f.reasons).map(([k, m]) => <li key={k}>{k ? `${k} ${m}` : m}</li>)}
+                    {Object.entries(f.reasons).map(([k, m]) => (
+                      <li key={k}>{k ? `${k} ${m}` : m}</li>
+                    ))}
                   </ul>
                 ) : null}
                 {f.state === "rejected" ? (
-                  <button type="button" className="mt-2 min-h-12 rounded-md px-4 font-bold text-danger edge" onClick={() => props.onDiscardFinding(f.clientId)}>
+                  <button
+                    type="button"
+                    className="mt-2 min-h-12 rounded-md px-4 font-bold text-danger edge"
+                    onClick={() => props.onDiscardFinding(f.clientId)}
+                  >
                     Discard — mark it again
                   </button>
                 ) : null}
@@ -58,7 +71,11 @@ export function ReadingsDrawer(props: {
       {list.length === 0 ? <p>No readings yet: tap the plan where the probe is.</p> : null}
       <ol className="flex flex-col gap-2">
         {list.map(({ r, n }) => (
-          <li key={r.id} className={`rounded-md p-3 edge ${r.state === "rejected" ? "border-danger bg-danger-soft" : ""}`} data-testid="reading-row">
+          <li
+            key={r.id}
+            className={`rounded-md p-3 edge ${r.state === "rejected" ? "border-danger bg-danger-soft" : ""}`}
+            data-testid="reading-row"
+          >
             <div className="flex flex-wrap items-baseline justify-between gap-2">
               <span className="font-bold">
                 #{n} · {r.atLeast ? "≥ " : ""}
@@ -77,9 +94,19 @@ export function ReadingsDrawer(props: {
               </ul>
             ) : null}
             <div className="mt-2 flex gap-2">
-              <button type="button" className="min-h-12 rounded-md px-4 font-bold edge" onClick={() => props.onEdit(r)}>{r.id === props.openId ? "Back to keypad" : "Edit"}</button>
-              <button type="button" className="min-h-12 rounded-md px-4 font-bold edge" onClick={() => props.onMove(r)}>Move</button>
-              <button type="button" className="min-h-12 rounded-md px-4 font-bold text-danger edge" onClick={() => props.onDelete(r)}>Delete</button>
+              <button type="button" className="min-h-12 rounded-md px-4 font-bold edge" onClick={() => props.onEdit(r)}>
+                {r.id === props.openId ? "Back to keypad" : "Edit"}
+              </button>
+              <button type="button" className="min-h-12 rounded-md px-4 font-bold edge" onClick={() => props.onMove(r)}>
+                Move
+              </button>
+              <button
+                type="button"
+                className="min-h-12 rounded-md px-4 font-bold text-danger edge"
+                onClick={() => props.onDelete(r)}
+              >
+                Delete
+              </button>
             </div>
           </li>
         ))}

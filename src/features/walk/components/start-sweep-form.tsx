@@ -35,12 +35,19 @@ export function StartSweepForm({ storeId, onStarted }: { storeId: string; onStar
 
   const detector = data?.detectors.find((d) => d.id === detectorId);
   const warnings = useMemo(
-    () => (detector && data ? startWarnings(detector, data.systems.filter((s) => systemIds.includes(s.id))) : []),
+    () =>
+      detector && data
+        ? startWarnings(
+            detector,
+            data.systems.filter((s) => systemIds.includes(s.id)),
+          )
+        : [],
     [detector, data, systemIds],
   );
 
   if (pack.isPending) return <Spinner label="Loading the store…" />;
-  if (pack.isError || !data) return <QueryError error={pack.error} what="this store" onRetry={() => void pack.refetch()} />;
+  if (pack.isError || !data)
+    return <QueryError error={pack.error} what="this store" onRetry={() => void pack.refetch()} />;
   const calibrated = data.planVersions.filter((p) => p.calibrated);
 
   async function start() {
@@ -79,18 +86,54 @@ export function StartSweepForm({ storeId, onStarted }: { storeId: string; onStar
 
   const RADIO = "flex min-h-12 flex-1 items-center justify-center gap-2 rounded-md font-bold edge";
   return (
-    <form className="flex max-w-xl flex-col gap-4" onSubmit={(e) => { e.preventDefault(); void start(); }}>
-      {data.fromCache ? <Alert tone="note" title="Offline">Using the copy of this store kept on this device ({new Date(data.savedAt).toLocaleString()}). The sweep uploads when the connection returns.</Alert> : null}
-      {calibrated.length === 0 ? <Alert tone="error" title="No calibrated plan">This store has no calibrated plan yet; a lead tech must upload and calibrate one first.</Alert> : null}
-      <Select label="Plan version" value={planId} onChange={(e) => setPlanId(e.target.value)} options={calibrated.map((p) => ({ value: p.id, label: `Version ${p.version} (${p.fixtureCount} fixtures)` }))} />
-      {data.detectors.length === 0 ? <Alert tone="error" title="No detector">Add a detector on the Detectors page first.</Alert> : null}
-      <Select label="Detector" value={detectorId} onChange={(e) => setDetectorId(e.target.value)} options={data.detectors.map((d) => ({ value: d.id, label: `${d.name}${d.overdue ? " (check overdue)" : ""}` }))} />
+    <form
+      className="flex max-w-xl flex-col gap-4"
+      onSubmit={(e) => {
+        e.preventDefault();
+        void start();
+      }}
+    >
+      {data.fromCache ? (
+        <Alert tone="note" title="Offline">
+          Using the copy of this store kept on this device ({new Date(data.savedAt).toLocaleString()}). The sweep
+          uploads when the connection returns.
+        </Alert>
+      ) : null}
+      {calibrated.length === 0 ? (
+        <Alert tone="error" title="No calibrated plan">
+          This store has no calibrated plan yet; a lead tech must upload and calibrate one first.
+        </Alert>
+      ) : null}
+      <Select
+        label="Plan version"
+        value={planId}
+        onChange={(e) => setPlanId(e.target.value)}
+        options={calibrated.map((p) => ({ value: p.id, label: `Version ${p.version} (${p.fixtureCount} fixtures)` }))}
+      />
+      {data.detectors.length === 0 ? (
+        <Alert tone="error" title="No detector">
+          Add a detector on the Detectors page first.
+        </Alert>
+      ) : null}
+      <Select
+        label="Detector"
+        value={detectorId}
+        onChange={(e) => setDetectorId(e.target.value)}
+        options={data.detectors.map((d) => ({ value: d.id, label: `${d.name}${d.overdue ? " (check overdue)" : ""}` }))}
+      />
       <fieldset>
         <legend className="font-bold">Systems hunted</legend>
         <div className="flex flex-col gap-1">
           {data.systems.map((s) => (
             <label key={s.id} className="flex min-h-12 items-center gap-3 rounded-md px-3 edge">
-              <input type="checkbox" className="size-6" checked={systemIds.includes(s.id)} onChange={(e) => setSystemIds(e.target.checked ? [...systemIds, s.id] : systemIds.filter((x) => x !== s.id))} />
+              <input
+                type="checkbox"
+                className="size-6"
+                checked={systemIds.includes(s.id)}
+                onChange={(e) =>
+                  setSystemIds(e.target.checked ? [...systemIds, s.id] : systemIds.filter((x) => x !== s.id))
+                }
+              />
               {s.name} · {s.refrigerantId}
             </label>
           ))}
@@ -101,7 +144,8 @@ export function StartSweepForm({ storeId, onStarted }: { storeId: string; onStar
         <div className="flex gap-2">
           {(["running", "stopped"] as const).map((v) => (
             <label key={v} className={`${RADIO} ${fans === v ? "bg-accent text-on-accent" : ""}`}>
-              <input type="radio" name="fans" className="size-5" checked={fans === v} onChange={() => setFans(v)} /> Fans {v}
+              <input type="radio" name="fans" className="size-5" checked={fans === v} onChange={() => setFans(v)} />{" "}
+              Fans {v}
             </label>
           ))}
         </div>
@@ -111,18 +155,41 @@ export function StartSweepForm({ storeId, onStarted }: { storeId: string; onStar
         <div className="flex gap-2">
           {[false, true].map((v) => (
             <label key={String(v)} className={`${RADIO} ${defrost === v ? "bg-accent text-on-accent" : ""}`}>
-              <input type="radio" name="defrost" className="size-5" checked={defrost === v} onChange={() => setDefrost(v)} /> Defrost {v ? "on" : "off"}
+              <input
+                type="radio"
+                name="defrost"
+                className="size-5"
+                checked={defrost === v}
+                onChange={() => setDefrost(v)}
+              />{" "}
+              Defrost {v ? "on" : "off"}
             </label>
           ))}
         </div>
       </fieldset>
       {warnings.map((w) => (
-        <Alert key={w.code + (w.systemId ?? "")} tone="note" title={w.code === "detector-overdue" ? "Detector check overdue" : w.code === "detector-blind" ? "Detector cannot see this refrigerant" : "Detector may not see this refrigerant"}>
+        <Alert
+          key={w.code + (w.systemId ?? "")}
+          tone="note"
+          title={
+            w.code === "detector-overdue"
+              ? "Detector check overdue"
+              : w.code === "detector-blind"
+                ? "Detector cannot see this refrigerant"
+                : "Detector may not see this refrigerant"
+          }
+        >
           {w.message}
         </Alert>
       ))}
-      {error ? <Alert tone="error" title="Not started">{error}</Alert> : null}
-      <Button type="submit" busy={busy} disabled={!planId || !detectorId} className="min-h-14 text-xl">Start the sweep</Button>
+      {error ? (
+        <Alert tone="error" title="Not started">
+          {error}
+        </Alert>
+      ) : null}
+      <Button type="submit" busy={busy} disabled={!planId || !detectorId} className="min-h-14 text-xl">
+        Start the sweep
+      </Button>
     </form>
   );
 }

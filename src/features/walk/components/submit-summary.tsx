@@ -4,7 +4,15 @@ import type { LocalReading } from "../model/local-types";
 import { Button } from "../../../components/ui/button";
 import { Dialog } from "../../../components/ui/dialog";
 
-export function SubmitSummary(props: { open: boolean; readings: readonly LocalReading[]; alarmPpm: number; unsampled: readonly Fixture[]; waiting: number; onSubmit(): void; onClose(): void }) {
+export function SubmitSummary(props: {
+  open: boolean;
+  readings: readonly LocalReading[];
+  alarmPpm: number;
+  unsampled: readonly Fixture[];
+  waiting: number;
+  onSubmit(): void;
+  onClose(): void;
+}) {
   const alarms = props.readings.filter((r) => r.ppm >= props.alarmPpm);
   const rejected = props.readings.filter((r) => r.state === "rejected");
   return (
@@ -27,11 +35,21 @@ export function SubmitSummary(props: { open: boolean; readings: readonly LocalRe
           </ul>
         </details>
       ) : null}
-      {rejected.length ? <p className="text-danger">{rejected.length} readings were refused by the server and need fixing first; they stay on this device.</p> : null}
-      {props.waiting ? <p>{props.waiting} changes are still waiting to upload. The sweep is submitted once they are in.</p> : null}
+      {rejected.length ? (
+        <p className="text-danger">
+          {rejected.length} readings were refused by the server and need fixing first; they stay on this device.
+        </p>
+      ) : null}
+      {props.waiting ? (
+        <p>{props.waiting} changes are still waiting to upload. The sweep is submitted once they are in.</p>
+      ) : null}
       <div className="flex flex-wrap gap-2">
-        <Button onClick={props.onSubmit} className="min-h-12">Submit sweep</Button>
-        <Button variant="secondary" onClick={props.onClose} className="min-h-12">Keep walking</Button>
+        <Button onClick={props.onSubmit} className="min-h-12">
+          Submit sweep
+        </Button>
+        <Button variant="secondary" onClick={props.onClose} className="min-h-12">
+          Keep walking
+        </Button>
       </div>
     </Dialog>
   );

@@ -9,14 +9,26 @@ export function SweepWarnings({ warnings, children }: { warnings: readonly Sweep
       <div className="flex gap-2">
         <div className="min-w-0 flex-1">{children}</div>
         {warnings.length ? (
-          <button type="button" aria-expanded={open} onClick={() => setOpen(!open)} className="min-h-12 shrink-0 rounded-md border-l-4 border-note bg-note-soft px-3 font-bold text-note edge">
+          <button
+            type="button"
+            aria-expanded={open}
+            onClick={() => setOpen(!open)}
+            className="min-h-12 shrink-0 rounded-md border-l-4 border-note bg-note-soft px-3 font-bold text-note edge"
+          >
             {warnings.length} {warnings.length === 1 ? "warning" : "warnings"}
           </button>
         ) : null}
       </div>
       {open ? (
         <ul className="max-h-48 overflow-auto">
-          {warnings.map((w) => <li key={w.code + (w.systemId ?? "")} className="mb-1 rounded-md border-l-4 border-note bg-note-soft px-3 py-1 text-note edge">{w.message}</li>)}
+          {warnings.map((w) => (
+            <li
+              key={w.code + (w.systemId ?? "")}
+              className="mb-1 rounded-md border-l-4 border-note bg-note-soft px-3 py-1 text-note edge"
+            >
+              {w.message}
+            </li>
+          ))}
         </ul>
       ) : null}
     </>

@@ -30,13 +30,26 @@ import { SyncBanner } from "./sync-banner";
 import { WalkTools } from "./walk-tools";
 
 /** The sweep capture screen: the plan fills the screen; one tap drops a reading there. */
-export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo, lengthUnit = "m" }: { storeId: string; sweepId: string; contrastToggle: ReactNode; leaveTo: string; lengthUnit?: LengthPreference }) {
+export function WalkScreen({
+  storeId,
+  sweepId,
+  contrastToggle,
+  leaveTo,
+  lengthUnit = "m",
+}: {
+  storeId: string;
+  sweepId: string;
+  contrastToggle: ReactNode;
+  leaveTo: string;
+  lengthUnit?: LengthPreference;
+}) {
   const walk = useWalk(sweepId);
   const storePack = useStorePack(storeId);
   const planPack = usePlanPack(walk.sweep?.planId);
   const sync = useSyncStatus();
   const queuedFindings = useQueuedFindings(sweepId);
-  const { draftId, draftRef, setDraftId, typed, readingsRef, serial, commitOpen, keepTyped, undo } = useOpenReading(walk);
+  const { draftId, draftRef, setDraftId, typed, readingsRef, serial, commitOpen, keepTyped, undo } =
+    useOpenReading(walk);
   const highContrast = useHighContrast();
   const [editing, setEditing] = useState<LocalReading | null>(null);
   const [caution, setCaution] = useState<{ place: CautionPlace; name: string } | null>(null);
@@ -86,16 +99,31 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo, lengthUn
     }
     // fixtures come with the plan pack
   }, [planPack.data]);
-  const hint = useMemo(() => (sweep ? latestLagHint(committed, sweep.transportDelayS, sweep.timeConstantS, sweep.alarmPpm, walkModel) : null), [committed, sweep, walkModel]);
+  const hint = useMemo(
+    () =>
+      sweep ? latestLagHint(committed, sweep.transportDelayS, sweep.timeConstantS, sweep.alarmPpm, walkModel) : null,
+    [committed, sweep, walkModel],
+  );
   const recent = useMemo(() => {
     const out: number[] = [];
-    for (let i = committed.length - 1; i >= 0 && out.length < 4; i--) if (committed[i].ppm > 0 && !out.includes(committed[i].ppm)) out.push(committed[i].ppm);
+    for (let i = committed.length - 1; i >= 0 && out.length < 4; i--)
+      if (committed[i].ppm > 0 && !out.includes(committed[i].ppm)) out.push(committed[i].ppm);
     return out;
   }, [committed]);
 
   if (walk.loading || planPack.isPending) return <Spinner label="Opening the sweep…" />;
-  if (walk.error || !sweep) return <Alert tone="error" title="This sweep could not be opened">{walk.error ?? "It is not on this device, and the server could not be reached."}</Alert>;
-  if (planPack.isError || !planPack.data) return <Alert tone="error" title="The plan is not on this device">Open the store once while online so its plan is kept on this device.</Alert>;
+  if (walk.error || !sweep)
+    return (
+      <Alert tone="error" title="This sweep could not be opened">
+        {walk.error ?? "It is not on this device, and the server could not be reached."}
+      </Alert>
+    );
+  if (planPack.isError || !planPack.data)
+    return (
+      <Alert tone="error" title="The plan is not on this device">
+        Open the store once while online so its plan is kept on this device.
+      </Alert>
+    );
   const plan = planPack.data.plan;
   const draft = walk.readings.find((r) => r.id === draftId) ?? null;
   const readOnly = sweep.status === "reviewed";
@@ -124,7 +152,13 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo, lengthUn
     typed.current = null;
     // The next tap saves what the keypad shows and takes its place, without closing it.
     const r = open
-      ? await walk.saveAndTap(open, v ? { ppm: v.ppm, atLeast: v.atLeast, samplePoint: v.samplePoint, note: v.note } : {}, x, y, at)
+      ? await walk.saveAndTap(
+          open,
+          v ? { ppm: v.ppm, atLeast: v.atLeast, samplePoint: v.samplePoint, note: v.note } : {},
+          x,
+          y,
+          at,
+        )
       : await walk.tap(x, y, at);
     setDraftId(r.id);
   });
@@ -141,8 +175,6 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo, lengthUn
     await walk.save(id, v);
   });
 
-
-
   const submit = serial(async () => {
     setDialog(null);
     await commitOpen();
@@ -155,7 +187,6 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo, lengthUn
     navigate(leaveTo);
   });
 
-
   const keypadFor = draft ?? editing;
   const showHint = hint && hint.index !== dismissedAlarm ? hint : null;
 
@@ -163,10 +194,20 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo, lengthUn
     <div className="fixed inset-0 z-30 flex flex-col bg-paper" data-testid="walk-screen">
       <header className="flex flex-col gap-2 bg-surface p-2 edge border-x-0 border-t-0">
         <div className="flex items-center justify-between gap-2">
-          <button type="button" onClick={() => leave()} className="inline-flex min-h-12 shrink-0 items-center whitespace-nowrap rounded-md px-3 font-bold edge">← Leave</button>
+          <button
+            type="button"
+            onClick={() => leave()}
+            className="inline-flex min-h-12 shrink-0 items-center whitespace-nowrap rounded-md px-3 font-bold edge"
+          >
+            ← Leave
+          </button>
           <p className="min-w-0 flex-1 text-center leading-tight">
             <span className="block truncate font-bold">{storePack.data?.store.name ?? "Sweep"}</span>
-            <span className="block truncate text-sm text-muted" data-testid="walk-count">{countOf(all.length, "reading")}{sweep.status !== "in-progress" ? ` · ${sweep.status}` : sweep.submitPending ? " · submitting" : ""} · {sweep.detectorName}</span>
+            <span className="block truncate text-sm text-muted" data-testid="walk-count">
+              {countOf(all.length, "reading")}
+              {sweep.status !== "in-progress" ? ` · ${sweep.status}` : sweep.submitPending ? " · submitting" : ""} ·{" "}
+              {sweep.detectorName}
+            </span>
           </p>
           {contrastToggle}
         </div>
@@ -175,52 +216,83 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo, lengthUn
         </SweepWarnings>
         {sweep.rejected ? (
           <Alert tone="error" title="The server refused this sweep">
-            {Object.entries(sweep.rejected).map(([k, m]) => (k ? `${k} ${m}` : m)).join("; ")} Its readings stay on this device.
+            {Object.entries(sweep.rejected)
+              .map(([k, m]) => (k ? `${k} ${m}` : m))
+              .join("; ")}{" "}
+            Its readings stay on this device.
           </Alert>
         ) : null}
         {leakMode ? <Alert tone="info">Tap the plan where the leak is.</Alert> : null}
         {moving ? (
-          <div role="status" className="flex items-center justify-between gap-2 rounded-md border-l-4 border-accent bg-accent-soft px-3 edge">
-            <span className="font-bold">Tap the plan where reading #{all.findIndex((r) => r.id === moving) + 1} was taken.</span>
-            <button type="button" className="min-h-12 shrink-0 font-bold underline" onClick={() => setMoving(null)}>Cancel move</button>
+          <div
+            role="status"
+            className="flex items-center justify-between gap-2 rounded-md border-l-4 border-accent bg-accent-soft px-3 edge"
+          >
+            <span className="font-bold">
+              Tap the plan where reading #{all.findIndex((r) => r.id === moving) + 1} was taken.
+            </span>
+            <button type="button" className="min-h-12 shrink-0 font-bold underline" onClick={() => setMoving(null)}>
+              Cancel move
+            </button>
           </div>
         ) : null}
-        {notice ? <Alert tone="success"><span>{notice} </span><button type="button" className="min-h-12 underline" onClick={() => setNotice(null)}>Dismiss</button></Alert> : null}
-        {showHint ? <LagHintBanner hint={showHint} ppm={committed[showHint.index]?.ppm ?? 0} lengthUnit={lengthUnit} onDismiss={() => setDismissedAlarm(showHint.index)} /> : null}
+        {notice ? (
+          <Alert tone="success">
+            <span>{notice} </span>
+            <button type="button" className="min-h-12 underline" onClick={() => setNotice(null)}>
+              Dismiss
+            </button>
+          </Alert>
+        ) : null}
+        {showHint ? (
+          <LagHintBanner
+            hint={showHint}
+            ppm={committed[showHint.index]?.ppm ?? 0}
+            lengthUnit={lengthUnit}
+            onDismiss={() => setDismissedAlarm(showHint.index)}
+          />
+        ) : null}
       </header>
       <div className="flex min-h-0 flex-1 flex-col landscape:md:flex-row">
-      <div className="min-h-0 min-w-0 flex-1">
-        <PlanStage
-          widthM={plan.widthM ?? 1}
-          heightM={plan.heightM ?? 1}
-          image={planPack.data.image}
-          fixtures={fixtures}
-          unsampled={unsampledIds}
-          readings={walk.readings}
-          alarmPpm={sweep.alarmPpm}
-          lagHint={showHint}
-          selectedId={keypadFor?.id ?? null}
-          focus={keypadFor ? { x: keypadFor.x, y: keypadFor.y } : null}
-          highContrast={highContrast}
-          onTap={(x, y, at) => onTap(x, y, at)}
-        />
-      </div>
-      {keypadFor ? (
-        <div className="landscape:md:w-96 landscape:md:overflow-y-auto">
-        <PpmKeypad
-          key={keypadFor.id}
-          title={editing ? `Edit #${walk.readings.indexOf(keypadFor) + 1}` : `#${walk.readings.indexOf(keypadFor) + 1}`}
-          initial={{ ppm: keypadFor.ppm, atLeast: keypadFor.atLeast, samplePoint: keypadFor.samplePoint, note: keypadFor.note }}
-          recent={recent}
-          levels={storePack.data?.detectors.find((d) => d.id === sweep.detectorId)?.levelScale ?? null}
-          onTyped={(v) => (editing ? undefined : keepTyped(keypadFor.id, v))}
-          onMove={() => setMoving(keypadFor.id)}
-          onSave={(v) => saveKeypad(v)}
-          cancelLabel={editing ? "Cancel" : "Discard"}
-          onCancel={() => (editing ? setEditing(null) : undo())}
-        />
+        <div className="min-h-0 min-w-0 flex-1">
+          <PlanStage
+            widthM={plan.widthM ?? 1}
+            heightM={plan.heightM ?? 1}
+            image={planPack.data.image}
+            fixtures={fixtures}
+            unsampled={unsampledIds}
+            readings={walk.readings}
+            alarmPpm={sweep.alarmPpm}
+            lagHint={showHint}
+            selectedId={keypadFor?.id ?? null}
+            focus={keypadFor ? { x: keypadFor.x, y: keypadFor.y } : null}
+            highContrast={highContrast}
+            onTap={(x, y, at) => onTap(x, y, at)}
+          />
         </div>
-      ) : null}
+        {keypadFor ? (
+          <div className="landscape:md:w-96 landscape:md:overflow-y-auto">
+            <PpmKeypad
+              key={keypadFor.id}
+              title={
+                editing ? `Edit #${walk.readings.indexOf(keypadFor) + 1}` : `#${walk.readings.indexOf(keypadFor) + 1}`
+              }
+              initial={{
+                ppm: keypadFor.ppm,
+                atLeast: keypadFor.atLeast,
+                samplePoint: keypadFor.samplePoint,
+                note: keypadFor.note,
+              }}
+              recent={recent}
+              levels={storePack.data?.detectors.find((d) => d.id === sweep.detectorId)?.levelScale ?? null}
+              onTyped={(v) => (editing ? undefined : keepTyped(keypadFor.id, v))}
+              onMove={() => setMoving(keypadFor.id)}
+              onSave={(v) => saveKeypad(v)}
+              cancelLabel={editing ? "Cancel" : "Discard"}
+              onCancel={() => (editing ? setEditing(null) : undo())}
+            />
+          </div>
+        ) : null}
       </div>
       <WalkTools
         readOnly={readOnly}
@@ -252,26 +324,35 @@ export function WalkScreen({ storeId, sweepId, contrastToggle, leaveTo, lengthUn
         onDelete={(r) => (r.id === draftRef.current ? undo() : void walk.remove(r.id))}
         onClose={() => setDialog(null)}
       />
-      {dialog === "summary" ? <SubmitSummary
-        open
-        readings={all.map((r) => (r.id === draftId && typed.current ? { ...r, ...typed.current } : r))}
-        alarmPpm={sweep.alarmPpm}
-        unsampled={unsampled}
-        waiting={sync.waiting}
-        onClose={() => setDialog(null)}
-        onSubmit={() => submit()}
-      /> : null}
-      {dialog === "import" ? <LogImport
-        open
-        taps={committed.map((r) => ({ x: r.x, y: r.y, takenAtMs: Date.parse(r.takenAt), samplePoint: r.samplePoint }))}
-        sweepStartMs={Date.parse(sweep.startedAt)}
-        onClose={() => setDialog(null)}
-        onImport={(list) => {
-          setDialog(null);
-          void walk.addMany(list);
-          setNotice(`${countOf(list.length, "reading")} added from the detector's log.`);
-        }}
-      /> : null}
+      {dialog === "summary" ? (
+        <SubmitSummary
+          open
+          readings={all.map((r) => (r.id === draftId && typed.current ? { ...r, ...typed.current } : r))}
+          alarmPpm={sweep.alarmPpm}
+          unsampled={unsampled}
+          waiting={sync.waiting}
+          onClose={() => setDialog(null)}
+          onSubmit={() => submit()}
+        />
+      ) : null}
+      {dialog === "import" ? (
+        <LogImport
+          open
+          taps={committed.map((r) => ({
+            x: r.x,
+            y: r.y,
+            takenAtMs: Date.parse(r.takenAt),
+            samplePoint: r.samplePoint,
+          }))}
+          sweepStartMs={Date.parse(sweep.startedAt)}
+          onClose={() => setDialog(null)}
+          onImport={(list) => {
+            setDialog(null);
+            void walk.addMany(list);
+            setNotice(`${countOf(list.length, "reading")} added from the detector's log.`);
+          }}
+        />
+      ) : null}
       {leakSpot ? (
         <LeakForm
           spot={leakSpot}

@@ -14,7 +14,13 @@ export interface SyncStatus {
   lastReport: SyncReport | null;
 }
 
-let status: SyncStatus = { waiting: 0, rejected: 0, syncing: false, online: typeof navigator === "undefined" ? true : navigator.onLine, lastReport: null };
+let status: SyncStatus = {
+  waiting: 0,
+  rejected: 0,
+  syncing: false,
+  online: typeof navigator === "undefined" ? true : navigator.onLine,
+  lastReport: null,
+};
 const listeners = new Set<(s: SyncStatus) => void>();
 let running: Promise<SyncReport> | null = null;
 let again = false;

@@ -2,7 +2,8 @@ import { useEffect, useRef, useState } from "react";
 import type { KeypadValue } from "../components/ppm-keypad";
 import type { useWalk } from "./use-walk";
 
-const valuesOf = (v: KeypadValue | null) => (v ? { ppm: v.ppm, atLeast: v.atLeast, samplePoint: v.samplePoint, note: v.note } : {});
+const valuesOf = (v: KeypadValue | null) =>
+  v ? { ppm: v.ppm, atLeast: v.atLeast, samplePoint: v.samplePoint, note: v.note } : {};
 
 /**
  * The reading on the keypad (the "open" one): which it is, what its keypad shows, and how it is
@@ -18,9 +19,11 @@ export function useOpenReading(walk: ReturnType<typeof useWalk>) {
     setDraftIdState(id);
   };
   const chain = useRef<Promise<unknown>>(Promise.resolve());
-  const serial = <A extends unknown[]>(fn: (...args: A) => Promise<void>) => (...args: A) => {
-    chain.current = chain.current.then(() => fn(...args)).catch((e) => console.error(e));
-  };
+  const serial =
+    <A extends unknown[]>(fn: (...args: A) => Promise<void>) =>
+    (...args: A) => {
+      chain.current = chain.current.then(() => fn(...args)).catch((e) => console.error(e));
+    };
   const readingsRef = useRef(walk.readings);
   readingsRef.current = walk.readings;
   const typed = useRef<KeypadValue | null>(null);
@@ -73,7 +76,12 @@ export function useOpenReading(walk: ReturnType<typeof useWalk>) {
   const keepTyped = (id: string, v: KeypadValue) => {
     typed.current = v;
     const r = readingsRef.current.find((x) => x.id === id);
-    if (!r || !r.draft || (r.ppm === v.ppm && r.atLeast === v.atLeast && r.samplePoint === v.samplePoint && r.note === v.note)) return;
+    if (
+      !r ||
+      !r.draft ||
+      (r.ppm === v.ppm && r.atLeast === v.atLeast && r.samplePoint === v.samplePoint && r.note === v.note)
+    )
+      return;
     serial(async () => {
       await walk.keepDraft(id, v);
     })();

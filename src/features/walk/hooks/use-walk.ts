@@ -2,7 +2,16 @@ import { useCallback, useEffect, useRef, useState } from "react";
 import type { SamplePoint } from "#core/contracts/sweeps";
 import { pullSweep } from "../api/remote-sweep";
 import type { LocalReading, LocalSweep, ReadingValues } from "../model/local-types";
-import { addReading, commitDrafts, getLocalSweep, keepDraftValues, removeReading, saveSweep, sweepReadings, updateReading } from "../model/reading-store";
+import {
+  addReading,
+  commitDrafts,
+  getLocalSweep,
+  keepDraftValues,
+  removeReading,
+  saveSweep,
+  sweepReadings,
+  updateReading,
+} from "../model/reading-store";
 import { walkDb } from "../model/walk-db";
 import { refreshCounts, subscribeSync, syncSoon } from "./sync-loop";
 
@@ -44,7 +53,8 @@ export function useWalk(sweepId: string) {
         const readings = await sweepReadings(db, sweepId);
         if (!cancelled) setState({ sweep, readings, loading: false, error: null });
       } catch (e) {
-        if (!cancelled) setState({ sweep: null, readings: [], loading: false, error: e instanceof Error ? e.message : String(e) });
+        if (!cancelled)
+          setState({ sweep: null, readings: [], loading: false, error: e instanceof Error ? e.message : String(e) });
       }
     })();
     return () => {
@@ -73,7 +83,15 @@ export function useWalk(sweepId: string) {
   const tap = useCallback(
     async (x: number, y: number, at: number) => {
       const db = await walkDb();
-      const values: ReadingValues = { x, y, takenAt: new Date(at).toISOString(), ppm: 0, atLeast: false, samplePoint: lastSamplePoint(readingsRef.current), note: "" };
+      const values: ReadingValues = {
+        x,
+        y,
+        takenAt: new Date(at).toISOString(),
+        ppm: 0,
+        atLeast: false,
+        samplePoint: lastSamplePoint(readingsRef.current),
+        note: "",
+      };
       const r = await addReading(db, sweepId, values, { draft: true });
       setState((s) => ({ ...s, readings: [...s.readings, r] }));
       return r;
@@ -90,7 +108,12 @@ export function useWalk(sweepId: string) {
       const db = await walkDb();
       const saved = await updateReading(db, id, values, { commit: true });
       const samplePoint = saved?.samplePoint ?? lastSamplePoint(readingsRef.current);
-      const r = await addReading(db, sweepId, { x, y, takenAt: new Date(at).toISOString(), ppm: 0, atLeast: false, samplePoint, note: "" }, { draft: true });
+      const r = await addReading(
+        db,
+        sweepId,
+        { x, y, takenAt: new Date(at).toISOString(), ppm: 0, atLeast: false, samplePoint, note: "" },
+        { draft: true },
+      );
       setState((s) => ({ ...s, readings: [...s.readings.map((x) => (x.id === id && saved ? saved : x)), r] }));
       changed();
       return r;

@@ -23,15 +23,24 @@ export function isNear(f: Fixture, x: number, y: number, within = SAMPLED_WITHIN
 
 function reach(f: Fixture, within: number): [number, number, number, number] {
   const pts = "point" in f ? [[f.point.x, f.point.y]] : f.polygon;
-  let x0 = Infinity, y0 = Infinity, x1 = -Infinity, y1 = -Infinity;
+  let x0 = Infinity,
+    y0 = Infinity,
+    x1 = -Infinity,
+    y1 = -Infinity;
   for (const [x, y] of pts) {
-    x0 = Math.min(x0, x); y0 = Math.min(y0, y); x1 = Math.max(x1, x); y1 = Math.max(y1, y);
+    x0 = Math.min(x0, x);
+    y0 = Math.min(y0, y);
+    x1 = Math.max(x1, x);
+    y1 = Math.max(y1, y);
   }
   return [x0 - within, y0 - within, x1 + within, y1 + within];
 }
 
 /** The sampleable fixtures no reading has reached yet (a box test first: thousands of readings). */
-export function unsampledFixtures(fixtures: readonly Fixture[], readings: readonly { x: number; y: number }[]): Fixture[] {
+export function unsampledFixtures(
+  fixtures: readonly Fixture[],
+  readings: readonly { x: number; y: number }[],
+): Fixture[] {
   return fixtures.filter((f) => {
     if (!isSampleable(f)) return false;
     const [x0, y0, x1, y1] = reach(f, SAMPLED_WITHIN_M);

@@ -40,7 +40,11 @@ describe("a detector's CSV log", () => {
     const { samples } = readLogSamples(readLogTable(csv), 0, 1, start);
     const { placed, bad } = alignLog(samples, taps, 0);
     // 4 s: half way from (0,1) at 0 s to (4,1) at 8 s; 14 s: three quarters up the second leg
-    expect(placed.map((p) => [p.line, p.x, p.y])).toEqual([[2, 0, 1], [3, 2, 1], [8, 4, 4]]);
+    expect(placed.map((p) => [p.line, p.x, p.y])).toEqual([
+      [2, 0, 1],
+      [3, 2, 1],
+      [8, 4, 4],
+    ]);
     expect(placed[2].samplePoint).toBe("return");
     expect(bad).toEqual([{ line: 10, reason: "at this clock offset its time falls after the last tapped position" }]);
     // a detector clock 2 s behind: +2 s moves every sample forward along the path
@@ -48,7 +52,12 @@ describe("a detector's CSV log", () => {
   });
 
   it("reads ISO and time-of-day columns", () => {
-    const iso = readLogSamples(readLogTable("time,ppm\n2026-11-02T14:00:06Z,0.4\n2026-11-02 14:00:06Z,0.5"), 0, 1, start);
+    const iso = readLogSamples(
+      readLogTable("time,ppm\n2026-11-02T14:00:06Z,0.4\n2026-11-02 14:00:06Z,0.5"),
+      0,
+      1,
+      start,
+    );
     expect(iso.samples.map((s) => s.timeMs)).toEqual([start + 6000, start + 6000]);
     const local = new Date(start);
     const tod = `${local.getHours()}:${String(local.getMinutes()).padStart(2, "0")}:07`;

@@ -25,7 +25,9 @@ export interface LogSample {
 /** Splits the CSV; the first non-empty line is taken as the header row. */
 export function readLogTable(text: string): LogTable {
   const parsed = Papa.parse<string[]>(text.replace(/^\uFEFF/, ""), { header: false, skipEmptyLines: false });
-  const lines = parsed.data.map((cells, i) => ({ line: i + 1, cells: cells.map((c) => c.trim()) })).filter((r) => r.cells.some((c) => c !== ""));
+  const lines = parsed.data
+    .map((cells, i) => ({ line: i + 1, cells: cells.map((c) => c.trim()) }))
+    .filter((r) => r.cells.some((c) => c !== ""));
   if (lines.length === 0) return { headers: [], rows: [] };
   return { headers: lines[0].cells, rows: lines.slice(1) };
 }
@@ -53,7 +55,12 @@ export function parseLogTime(cell: string, sweepStartMs: number): number | null 
 }
 
 /** Reads the mapped columns; each bad row is reported with its line number and reason. */
-export function readLogSamples(table: LogTable, timeColumn: number, ppmColumn: number, sweepStartMs: number): { samples: LogSample[]; bad: BadRow[] } {
+export function readLogSamples(
+  table: LogTable,
+  timeColumn: number,
+  ppmColumn: number,
+  sweepStartMs: number,
+): { samples: LogSample[]; bad: BadRow[] } {
   const samples: LogSample[] = [];
   const bad: BadRow[] = [];
   const name = (i: number) => table.headers[i] || `column ${i + 1}`;
@@ -62,18 +69,29 @@ export function readLogSamples(table: LogTable, timeColumn: number, ppmColumn: n
     const ppmCell = (cells[ppmColumn] ?? "").replace(/\s*ppm$/i, "");
     const timeMs = parseLogTime(timeCell, sweepStartMs);
     if (timeMs === null) {
-      bad.push({ line, reason: timeCell === "" ? `${name(timeColumn)} is empty` : `${name(timeColumn)} "${timeCell}" is not a time` });
+      bad.push({
+        line,
+        reason: timeCell === "" ? `${name(timeColumn)} is empty` : `${name(timeColumn)} "${timeCell}" is not a time`,
+      });
       continue;
     }
     const over = /^(>=?|≥)\s*/.exec(ppmCell);
     const number = over ? ppmCell.slice(over[0].length) : ppmCell;
     const ppm = number === "" ? NaN : Number(number);
     if (!Number.isFinite(ppm)) {
-      bad.push({ line, reason: ppmCell === "" ? `${name(ppmColumn)} is empty` : `${name(ppmColumn)} "${ppmCell}" is not a number of ppm` });
+      bad.push({
+        line,
+        reason:
+          ppmCell === "" ? `${name(ppmColumn)} is empty` : `${name(ppmColumn)} "${ppmCell}" is not a number of ppm`,
+      });
       continue;
     }
     if (ppm < 0) bad.push({ line, reason: `${name(ppmColumn)} ${ppm} is below 0 ppm` });
-    else if (ppm > PPM_CEILING) bad.push({ line, reason: `${name(ppmColumn)} ${ppm} is above the ${PPM_CEILING.toLocaleString("en-US")} ppm instrument ceiling` });
+    else if (ppm > PPM_CEILING)
+      bad.push({
+        line,
+        reason: `${name(ppmColumn)} ${ppm} is above the ${PPM_CEILING.toLocaleString("en-US")} ppm instrument ceiling`,
+      });
     else samples.push({ line, timeMs, ppm, atLeast: over !== null });
   }
   return { samples, bad };
@@ -101,17 +119,28 @@ export interface AlignedSample {
  * minus the device's is −offset) is matched to the taps and interpolated between the two around it.
  * Samples outside the tapped span cannot be placed and are reported.
  */
-export function alignLog(samples: readonly LogSample[], taps: readonly TapPosition[], offsetS: number): { placed: AlignedSample[]; bad: BadRow[] } {
+export function alignLog(
+  samples: readonly LogSample[],
+  taps: readonly TapPosition[],
+  offsetS: number,
+): { placed: AlignedSample[]; bad: BadRow[] } {
   const placed: AlignedSample[] = [];
   const bad: BadRow[] = [];
   const sorted = [...taps].sort((a, b) => a.takenAtMs - b.takenAtMs);
-  if (sorted.length === 0) return { placed, bad: samples.map((s) => ({ line: s.line, reason: "the sweep has no tapped positions to line the log up with" })) };
+  if (sorted.length === 0)
+    return {
+      placed,
+      bad: samples.map((s) => ({ line: s.line, reason: "the sweep has no tapped positions to line the log up with" })),
+    };
   const first = sorted[0].takenAtMs;
   const last = sorted[sorted.length - 1].takenAtMs;
   for (const s of samples) {
     const t = s.timeMs + offsetS * 1000;
     if (t < first || t > last) {
-      bad.push({ line: s.line, reason: `at this clock offset its time falls ${t < first ? "before the first" : "after the last"} tapped position` });
+      bad.push({
+        line: s.line,
+        reason: `at this clock offset its time falls ${t < first ? "before the first" : "after the last"} tapped position`,
+      });
       continue;
     }
     let j = 0;
@@ -120,7 +149,15 @@ export function alignLog(samples: readonly LogSample[], taps: readonly TapPositi
     const b = sorted[Math.min(j + 1, sorted.length - 1)];
     const span = b.takenAtMs - a.takenAtMs;
     const f = span > 0 ? (t - a.takenAtMs) / span : 0;
-    placed.push({ line: s.line, x: a.x + f * (b.x - a.x), y: a.y + f * (b.y - a.y), takenAt: new Date(t).toISOString(), ppm: s.ppm, atLeast: s.atLeast, samplePoint: (f < 0.5 ? a : b).samplePoint });
+    placed.push({
+      line: s.line,
+      x: a.x + f * (b.x - a.x),
+      y: a.y + f * (b.y - a.y),
+      takenAt: new Date(t).toISOString(),
+      ppm: s.ppm,
+      atLeast: s.atLeast,
+      samplePoint: (f < 0.5 ? a : b).samplePoint,
+    });
   }
   return { placed, bad };
 }

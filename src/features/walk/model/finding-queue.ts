@@ -15,14 +15,26 @@ export async function queueFinding(
   input: CreateFindingInput & { clientId: string; sweepId: string },
   photo: { name: string; type: string; data: ArrayBuffer } | null,
 ): Promise<LocalFinding> {
-  const f: LocalFinding = { clientId: input.clientId, storeId, sweepId: input.sweepId, input, photo, state: "pending", findingId: null, reasons: null };
+  const f: LocalFinding = {
+    clientId: input.clientId,
+    storeId,
+    sweepId: input.sweepId,
+    input,
+    photo,
+    state: "pending",
+    findingId: null,
+    reasons: null,
+  };
   await db.put("findings", f);
   return f;
 }
 
 export async function findingCounts(db: WalkDb): Promise<{ waiting: number; rejected: number }> {
   const all = await db.getAll("findings");
-  return { waiting: all.filter((f) => f.state === "pending").length, rejected: all.filter((f) => f.state === "rejected").length };
+  return {
+    waiting: all.filter((f) => f.state === "pending").length,
+    rejected: all.filter((f) => f.state === "rejected").length,
+  };
 }
 
 function reasonsOf(e: RefusedError): Record<string, string> {
@@ -30,7 +42,11 @@ function reasonsOf(e: RefusedError): Record<string, string> {
 }
 
 /** Sends the waiting findings of sweeps the server has. Throws on a lost connection (the pass stops). */
-export async function syncFindings(db: WalkDb, transport: SyncTransport, onServer: (sweepId: string) => boolean): Promise<{ confirmed: number; rejected: number }> {
+export async function syncFindings(
+  db: WalkDb,
+  transport: SyncTransport,
+  onServer: (sweepId: string) => boolean,
+): Promise<{ confirmed: number; rejected: number }> {
   const out = { confirmed: 0, rejected: 0 };
   for (const f of await db.getAll("findings")) {
     if (f.state !== "pending" || !onServer(f.sweepId)) continue;

@@ -8,11 +8,22 @@ import { walkModelFor } from "./walk-model";
 
 const start = Date.parse("2026-11-02T14:00:00Z");
 const walk = (n: number, ppmAt: (i: number) => number) =>
-  Array.from({ length: n }, (_, i) => ({ x: i, y: 0, takenAt: new Date(start + i * 1000).toISOString(), ppm: ppmAt(i), atLeast: false }));
+  Array.from({ length: n }, (_, i) => ({
+    x: i,
+    y: 0,
+    takenAt: new Date(start + i * 1000).toISOString(),
+    ppm: ppmAt(i),
+    atLeast: false,
+  }));
 
 describe("the Walk screen's lag hint", () => {
   it("marks the alarm's air 5 m back on a 1 m/s straight walk with a 5 s delay (common practice delay, worked example)", () => {
-    const hint = latestLagHint(walk(13, (i) => (i === 12 ? 6 : 0)), 5, 0, 2)!;
+    const hint = latestLagHint(
+      walk(13, (i) => (i === 12 ? 6 : 0)),
+      5,
+      0,
+      2,
+    )!;
     expect(hint).toMatchObject({ index: 12, x: 7, y: 0, beforeDelay: false });
     expect(hint.backM).toBeCloseTo(5, 12);
     // re-check spots every 0.6 m around x = 7 (common practice, no published source)
@@ -21,29 +32,68 @@ describe("the Walk screen's lag hint", () => {
   });
 
   it("adds the sensor's time constant to the transport delay", () => {
-    expect(latestLagHint(walk(13, (i) => (i === 12 ? 6 : 0)), 3.5, 1.5, 2)!.x).toBeCloseTo(7, 12);
+    expect(
+      latestLagHint(
+        walk(13, (i) => (i === 12 ? 6 : 0)),
+        3.5,
+        1.5,
+        2,
+      )!.x,
+    ).toBeCloseTo(7, 12);
   });
 
   it("flags an alarm before one delay has passed and places it at the first reading", () => {
-    expect(latestLagHint(walk(4, (i) => (i === 3 ? 9 : 0)), 5, 0, 2)).toMatchObject({ x: 0, beforeDelay: true });
+    expect(
+      latestLagHint(
+        walk(4, (i) => (i === 3 ? 9 : 0)),
+        5,
+        0,
+        2,
+      ),
+    ).toMatchObject({ x: 0, beforeDelay: true });
   });
 
   it("gives no hint below the alarm level", () => {
-    expect(latestLagHint(walk(10, () => 1.9), 5, 0, 2)).toBeNull();
+    expect(
+      latestLagHint(
+        walk(10, () => 1.9),
+        5,
+        0,
+        2,
+      ),
+    ).toBeNull();
   });
 });
 
 describe("the lag hint and the locator agree", () => {
   // A 10 m x 6 m plan with a shelving run from the north wall down to y = 4 m between two taps: the
   // technician walks around its south end, so the air sampled mid-way was there, not inside the run.
-  const gondola: Fixture = { id: "5b0c7f4e-2a1d-4c3b-9e8f-7a6b5c4d3e2f", kind: "gondola", label: "Aisle 1", systemId: null, hasFans: false, polygon: [[4, 0], [5, 0], [5, 4], [4, 4]] };
+  const gondola: Fixture = {
+    id: "5b0c7f4e-2a1d-4c3b-9e8f-7a6b5c4d3e2f",
+    kind: "gondola",
+    label: "Aisle 1",
+    systemId: null,
+    hasFans: false,
+    polygon: [
+      [4, 0],
+      [5, 0],
+      [5, 4],
+      [4, 4],
+    ],
+  };
   const plan = { widthM: 10, heightM: 6 };
   const taps = [
     { x: 3, y: 2, s: 0, ppm: 0 },
     { x: 6, y: 2, s: 6, ppm: 0 },
     { x: 7, y: 2, s: 7, ppm: 9 },
   ];
-  const readings = taps.map((t) => ({ x: t.x, y: t.y, takenAt: new Date(start + t.s * 1000).toISOString(), ppm: t.ppm, atLeast: false }));
+  const readings = taps.map((t) => ({
+    x: t.x,
+    y: t.y,
+    takenAt: new Date(start + t.s * 1000).toISOString(),
+    ppm: t.ppm,
+    atLeast: false,
+  }));
 
   it("places the alarm's air where the server's locator corrects that reading to, around the shelving", () => {
     const hint = latestLagHint(readings, 3.5, 0, 2, walkModelFor(plan, [gondola]))!;

@@ -49,7 +49,10 @@ function length(path: readonly Pt[]): number {
 function walkedPath(taps: readonly Tap[], from: number, to: number, route: Route | undefined): Pt[] {
   const out: Pt[] = [[taps[from].x, taps[from].y]];
   for (let k = from; k < to; k++) {
-    const leg = (route && route(taps[k], taps[k + 1])) || [[taps[k].x, taps[k].y], [taps[k + 1].x, taps[k + 1].y]];
+    const leg = (route && route(taps[k], taps[k + 1])) || [
+      [taps[k].x, taps[k].y],
+      [taps[k + 1].x, taps[k + 1].y],
+    ];
     out.push(...leg.slice(1));
   }
   return out;
@@ -62,7 +65,13 @@ function walkedPath(taps: readonly Tap[], from: number, to: number, route: Route
  * alarm. Only the taps from the one before the sampled moment are handed to walkLag: the result
  * for the alarm is the same (it depends on those alone) and a long sweep costs no more than a short one.
  */
-export function latestLagHint(readings: readonly PathReading[], delayS: number, timeConstantS: number, alarmPpm: number, walk: WalkModel = {}): LagHint | null {
+export function latestLagHint(
+  readings: readonly PathReading[],
+  delayS: number,
+  timeConstantS: number,
+  alarmPpm: number,
+  walk: WalkModel = {},
+): LagHint | null {
   let index = -1;
   for (let i = readings.length - 1; i >= 0; i--) {
     if (readings[i].ppm >= alarmPpm) {
@@ -72,7 +81,9 @@ export function latestLagHint(readings: readonly PathReading[], delayS: number, 
   }
   if (index < 0) return null;
   const t0 = Date.parse(readings[0].takenAt);
-  const taps: Tap[] = readings.slice(0, index + 1).map((r) => ({ x: r.x, y: r.y, t: (Date.parse(r.takenAt) - t0) / 1000 }));
+  const taps: Tap[] = readings
+    .slice(0, index + 1)
+    .map((r) => ({ x: r.x, y: r.y, t: (Date.parse(r.takenAt) - t0) / 1000 }));
   // walkLag needs taps in time order; an edited timestamp may break it, so sort a copy.
   const order = taps.map((_, i) => i).sort((a, b) => taps[a].t - taps[b].t || a - b);
   const sorted = order.map((i) => taps[i]);
@@ -85,7 +96,8 @@ export function latestLagHint(readings: readonly PathReading[], delayS: number, 
   const lagged = walkLag(window, delayS, timeConstantS, walk.route, walk.walkSpeedMps)[window.length - 1];
   // Back along the walked path to that point, and spots around it (reaching a little further back).
   let k = j;
-  for (let back = 0; k > 0 && back < RECHECK_EACH_SIDE * RECHECK_SPACING_M + 0.2; k--) back += Math.hypot(sorted[k].x - sorted[k - 1].x, sorted[k].y - sorted[k - 1].y);
+  for (let back = 0; k > 0 && back < RECHECK_EACH_SIDE * RECHECK_SPACING_M + 0.2; k--)
+    back += Math.hypot(sorted[k].x - sorted[k - 1].x, sorted[k].y - sorted[k - 1].y);
   const path = walkedPath(sorted, k, p, walk.route);
   const total = length(path);
   const backM = nearestArc(path, lagged.x, lagged.y);

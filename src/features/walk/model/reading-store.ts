@@ -22,7 +22,12 @@ export async function getLocalSweep(db: WalkDb, id: string): Promise<LocalSweep 
 }
 
 /** Drops a reading at a tap. With `draft`, it waits for the keypad before it may be uploaded. */
-export async function addReading(db: WalkDb, sweepId: string, values: ReadingValues, options: { id?: string; draft?: boolean } = {}): Promise<LocalReading> {
+export async function addReading(
+  db: WalkDb,
+  sweepId: string,
+  values: ReadingValues,
+  options: { id?: string; draft?: boolean } = {},
+): Promise<LocalReading> {
   // One transaction for the counter and the reading: a tap costs a single IndexedDB commit.
   const tx = db.transaction(["readings", "meta"], "readwrite", RELAXED);
   const seq = ((await tx.objectStore("meta").get("seq")) ?? 0) + 1;
@@ -46,7 +51,12 @@ export async function addReading(db: WalkDb, sweepId: string, values: ReadingVal
 }
 
 /** Changes a reading's values (the keypad's confirmation, an edit, or a fix of a rejected one). */
-export async function updateReading(db: WalkDb, id: string, values: Partial<ReadingValues>, options: { commit?: boolean } = {}): Promise<LocalReading | undefined> {
+export async function updateReading(
+  db: WalkDb,
+  id: string,
+  values: Partial<ReadingValues>,
+  options: { commit?: boolean } = {},
+): Promise<LocalReading | undefined> {
   const tx = db.transaction("readings", "readwrite", RELAXED);
   const r = await tx.store.get(id);
   if (!r) return undefined;
@@ -72,7 +82,11 @@ export async function updateReading(db: WalkDb, id: string, values: Partial<Read
  * back. Only while the reading is still open: once committed (next tap, Save, Submit, leaving the
  * screen), a late keystroke must never change it behind the technician's back.
  */
-export async function keepDraftValues(db: WalkDb, id: string, values: Partial<ReadingValues>): Promise<LocalReading | undefined> {
+export async function keepDraftValues(
+  db: WalkDb,
+  id: string,
+  values: Partial<ReadingValues>,
+): Promise<LocalReading | undefined> {
   const tx = db.transaction("readings", "readwrite", RELAXED);
   const r = await tx.store.get(id);
   if (!r || !r.draft) return undefined;
@@ -96,7 +110,8 @@ export async function removeReading(db: WalkDb, id: string): Promise<void> {
   const tx = db.transaction("readings", "readwrite");
   const r = await tx.store.get(id);
   if (!r) return;
-  if (r.onServer) await tx.store.put({ ...r, deletePending: true, editedAt: new Date().toISOString(), state: "pending" });
+  if (r.onServer)
+    await tx.store.put({ ...r, deletePending: true, editedAt: new Date().toISOString(), state: "pending" });
   else await tx.store.delete(id);
   await tx.done;
 }

@@ -3,11 +3,16 @@ import { pointInPolygon } from "#core/analysis/geometry/point-in-polygon";
 import type { CautionPlace } from "#core/domain/safety/cautions";
 
 /** The walk-in or machine room a point lies in, with the caution place it stands for. */
-export function roomAt(fixtures: readonly Fixture[], x: number, y: number): { fixture: Fixture; place: CautionPlace } | null {
+export function roomAt(
+  fixtures: readonly Fixture[],
+  x: number,
+  y: number,
+): { fixture: Fixture; place: CautionPlace } | null {
   for (const f of fixtures) {
     if ("point" in f) continue;
     if (f.kind !== "walk-in-cooler" && f.kind !== "walk-in-freezer" && f.kind !== "machine-room") continue;
-    if (pointInPolygon([x, y], f.polygon)) return { fixture: f, place: f.kind === "machine-room" ? "machine-room" : "walk-in" };
+    if (pointInPolygon([x, y], f.polygon))
+      return { fixture: f, place: f.kind === "machine-room" ? "machine-room" : "walk-in" };
   }
   return null;
 }
@@ -16,7 +21,11 @@ export function roomAt(fixtures: readonly Fixture[], x: number, y: number): { fi
  * Whether a tap enters a room: it is inside one and the previous reading was not in that room.
  * The caution is shown on entering, not on every tap inside.
  */
-export function enteredRoom(fixtures: readonly Fixture[], previous: { x: number; y: number } | null, next: { x: number; y: number }) {
+export function enteredRoom(
+  fixtures: readonly Fixture[],
+  previous: { x: number; y: number } | null,
+  next: { x: number; y: number },
+) {
   const now = roomAt(fixtures, next.x, next.y);
   if (!now) return null;
   const before = previous ? roomAt(fixtures, previous.x, previous.y) : null;

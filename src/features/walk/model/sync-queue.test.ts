@@ -4,7 +4,16 @@ import type { CreateFindingInput } from "#core/contracts/findings";
 import type { CreateSweepInput, ReadingEditInput, ReadingInput, ReadingsBatchResult } from "#core/contracts/sweeps";
 import type { LocalSweep } from "./local-types";
 import { discardFinding, queueFinding } from "./finding-queue";
-import { addReading, commitDrafts, keepDraftValues, queueCounts, removeReading, saveSweep, sweepReadings, updateReading } from "./reading-store";
+import {
+  addReading,
+  commitDrafts,
+  keepDraftValues,
+  queueCounts,
+  removeReading,
+  saveSweep,
+  sweepReadings,
+  updateReading,
+} from "./reading-store";
 import { syncOnce } from "./sync-queue";
 import { RefusedError, type SyncTransport } from "./sync-transport";
 import { openWalkDb, type WalkDb } from "./walk-db";
@@ -32,7 +41,8 @@ class FakeServer implements SyncTransport {
   refuseSweeps = new Set<string>();
   async createSweep(_storeId: string, body: CreateSweepInput) {
     this.check();
-    if (this.refuseSweeps.has(body.id!)) throw new RefusedError(400, "Please check: planId is not calibrated yet.", { planId: "is not calibrated yet" });
+    if (this.refuseSweeps.has(body.id!))
+      throw new RefusedError(400, "Please check: planId is not calibrated yet.", { planId: "is not calibrated yet" });
     this.sweeps.add(body.id!);
   }
   async uploadReadings(sweepId: string, list: ReadingInput[]): Promise<ReadingsBatchResult> {
@@ -72,7 +82,10 @@ class FakeServer implements SyncTransport {
   losePhotoAnswerOnce = false;
   async createFinding(_storeId: string, input: CreateFindingInput) {
     this.check();
-    if (input.status === "confirmed" && !input.component) throw new RefusedError(400, "Please check: component is required.", { component: "is required when the leak is confirmed" });
+    if (input.status === "confirmed" && !input.component)
+      throw new RefusedError(400, "Please check: component is required.", {
+        component: "is required when the leak is confirmed",
+      });
     let f = this.findings.get(input.clientId!);
     if (!f) this.findings.set(input.clientId!, (f = { id: crypto.randomUUID(), input, photos: [] }));
     return { id: f.id, photoCount: f.photos.length };
@@ -91,11 +104,33 @@ let db: WalkDb;
 let server: FakeServer;
 let n = 0;
 const sweep: LocalSweep = {
-  id: "6f1c1e52-1d7b-4b83-9a8e-3c2d1f0e9b7a", storeId: "s", planId: "p", detectorId: "d", detectorName: "Diode", systemIds: [],
-  fans: "running", defrost: false, startedAt: "2026-11-02T14:00:00.000Z", status: "in-progress", transportDelayS: 5, timeConstantS: 1.5,
-  alarmPpm: 2, warnings: [], onServer: false, submitPending: false, rejected: null,
+  id: "6f1c1e52-1d7b-4b83-9a8e-3c2d1f0e9b7a",
+  storeId: "s",
+  planId: "p",
+  detectorId: "d",
+  detectorName: "Diode",
+  systemIds: [],
+  fans: "running",
+  defrost: false,
+  startedAt: "2026-11-02T14:00:00.000Z",
+  status: "in-progress",
+  transportDelayS: 5,
+  timeConstantS: 1.5,
+  alarmPpm: 2,
+  warnings: [],
+  onServer: false,
+  submitPending: false,
+  rejected: null,
 };
-const values = (i: number, ppm = 0) => ({ x: i, y: 2, takenAt: new Date(Date.parse(sweep.startedAt) + i * 3000).toISOString(), ppm, atLeast: false, samplePoint: "grille" as const, note: "" });
+const values = (i: number, ppm = 0) => ({
+  x: i,
+  y: 2,
+  takenAt: new Date(Date.parse(sweep.startedAt) + i * 3000).toISOString(),
+  ppm,
+  atLeast: false,
+  samplePoint: "grille" as const,
+  note: "",
+});
 
 beforeEach(async () => {
   db = await openWalkDb(`walk-test-${++n}`);
@@ -228,8 +263,17 @@ describe("the sync queue", () => {
     expect(await queueCounts(db)).toEqual({ waiting: 0, rejected: 0 });
   });
 
-  const leak = (clientId: string, extra: Partial<Omit<CreateFindingInput, "sweepId">> = {}) => ({ sweepId: sweep.id,
-    clientId, source: "walk" as const, status: "confirmed" as const, component: "brazed-joint" as const, planId: "p", x: 4, y: 2, note: "", ...extra,
+  const leak = (clientId: string, extra: Partial<Omit<CreateFindingInput, "sweepId">> = {}) => ({
+    sweepId: sweep.id,
+    clientId,
+    source: "walk" as const,
+    status: "confirmed" as const,
+    component: "brazed-joint" as const,
+    planId: "p",
+    x: 4,
+    y: 2,
+    note: "",
+    ...extra,
   });
   const photo = { name: "joint.jpg", type: "image/jpeg", data: new Uint8Array([0xff, 0xd8, 0xff, 0xd9]).buffer };
 
@@ -263,7 +307,10 @@ describe("the sync queue", () => {
     await queueFinding(db, "s", leak(bad, { component: null }), null);
     const report = await syncOnce(db, server);
     expect(report).toMatchObject({ confirmed: 1, rejected: 1, stoppedBy: null });
-    expect(await db.get("findings", bad)).toMatchObject({ state: "rejected", reasons: { component: "is required when the leak is confirmed" } });
+    expect(await db.get("findings", bad)).toMatchObject({
+      state: "rejected",
+      reasons: { component: "is required when the leak is confirmed" },
+    });
     expect(await queueCounts(db)).toEqual({ waiting: 0, rejected: 1 });
     await discardFinding(db, bad);
     expect(await queueCounts(db)).toEqual({ waiting: 0, rejected: 0 });

@@ -23,7 +23,16 @@ function valuesKey(r: ReadingValues): string {
 }
 
 function toInput(r: LocalReading): ReadingInput {
-  return { id: r.id, x: r.x, y: r.y, takenAt: r.takenAt, ppm: r.ppm, atLeast: r.atLeast, samplePoint: r.samplePoint, note: r.note };
+  return {
+    id: r.id,
+    x: r.x,
+    y: r.y,
+    takenAt: r.takenAt,
+    ppm: r.ppm,
+    atLeast: r.atLeast,
+    samplePoint: r.samplePoint,
+    note: r.note,
+  };
 }
 
 /**
@@ -32,13 +41,25 @@ function toInput(r: LocalReading): ReadingInput {
  * device; it never blocks the readings behind it. A lost connection stops the pass; the next
  * pass picks up where this one stopped, and the server's idempotency makes any resend harmless.
  */
-export async function syncOnce(db: WalkDb, transport: SyncTransport, batchSize = READINGS_BATCH_MAX): Promise<SyncReport> {
+export async function syncOnce(
+  db: WalkDb,
+  transport: SyncTransport,
+  batchSize = READINGS_BATCH_MAX,
+): Promise<SyncReport> {
   const report: SyncReport = { confirmed: 0, rejected: 0, stoppedBy: null };
   try {
     for (const s of await db.getAll("sweeps")) {
       if (s.onServer || s.rejected) continue;
       try {
-        await transport.createSweep(s.storeId, { id: s.id, planId: s.planId, detectorId: s.detectorId, systemIds: s.systemIds, fans: s.fans, defrost: s.defrost, startedAt: s.startedAt });
+        await transport.createSweep(s.storeId, {
+          id: s.id,
+          planId: s.planId,
+          detectorId: s.detectorId,
+          systemIds: s.systemIds,
+          fans: s.fans,
+          defrost: s.defrost,
+          startedAt: s.startedAt,
+        });
         await db.put("sweeps", { ...s, onServer: true });
       } catch (e) {
         if (!isRefusal(e)) throw e;
@@ -47,11 +68,14 @@ export async function syncOnce(db: WalkDb, transport: SyncTransport, batchSize =
     }
     const sweeps = new Map((await db.getAll("sweeps")).map((s) => [s.id, s]));
     const all = (await db.getAllFromIndex("readings", "byState", "pending")).sort((a, b) => a.seq - b.seq);
-    const fresh = all.filter((r) => !r.onServer && !r.draft && !r.deletePending && r.state === "pending" && sweeps.get(r.sweepId)?.onServer);
+    const fresh = all.filter(
+      (r) => !r.onServer && !r.draft && !r.deletePending && r.state === "pending" && sweeps.get(r.sweepId)?.onServer,
+    );
     const bySweep = new Map<string, LocalReading[]>();
     for (const r of fresh) bySweep.set(r.sweepId, [...(bySweep.get(r.sweepId) ?? []), r]);
     for (const [sweepId, list] of bySweep) {
-      for (let i = 0; i < list.length; i += batchSize) await uploadBatch(db, transport, sweepId, list.slice(i, i + batchSize), report);
+      for (let i = 0; i < list.length; i += batchSize)
+        await uploadBatch(db, transport, sweepId, list.slice(i, i + batchSize), report);
     }
     // Pinpointed leaks after the readings: their sweep must be on the server.
     const leaks = await syncFindings(db, transport, (id) => sweeps.get(id)?.onServer === true);
@@ -64,7 +88,10 @@ export async function syncOnce(db: WalkDb, transport: SyncTransport, batchSize =
     for (const s of await db.getAll("sweeps")) {
       if (!s.submitPending || !s.onServer) continue;
       // An open reading still on a keypad holds the submit back too: it belongs to the sweep.
-      const left = [...(await db.getAllFromIndex("readings", "byState", "pending")), ...(await db.getAllFromIndex("readings", "byState", "draft"))].some((r) => r.sweepId === s.id);
+      const left = [
+        ...(await db.getAllFromIndex("readings", "byState", "pending")),
+        ...(await db.getAllFromIndex("readings", "byState", "draft")),
+      ].some((r) => r.sweepId === s.id);
       if (left) continue;
       await transport.submitSweep(s.id);
       await db.put("sweeps", { ...s, submitPending: false, status: "submitted" });
@@ -75,7 +102,13 @@ export async function syncOnce(db: WalkDb, transport: SyncTransport, batchSize =
   return report;
 }
 
-async function uploadBatch(db: WalkDb, transport: SyncTransport, sweepId: string, list: LocalReading[], report: SyncReport): Promise<void> {
+async function uploadBatch(
+  db: WalkDb,
+  transport: SyncTransport,
+  sweepId: string,
+  list: LocalReading[],
+  report: SyncReport,
+): Promise<void> {
   let confirmed: Set<string>;
   const reasons = new Map<string, Record<string, string>>();
   try {
@@ -103,7 +136,15 @@ async function uploadBatch(db: WalkDb, transport: SyncTransport, sweepId: string
       report.confirmed++;
       // Changed on the keypad while the upload was in flight: the server has the old values.
       const changed = valuesKey(now) !== sent.get(id);
-      writes.push(tx.store.put({ ...now, onServer: true, state: changed || now.deletePending ? "pending" : "synced", editPending: changed, reasons: null }));
+      writes.push(
+        tx.store.put({
+          ...now,
+          onServer: true,
+          state: changed || now.deletePending ? "pending" : "synced",
+          editPending: changed,
+          reasons: null,
+        }),
+      );
     } else if (reasons.has(id) && valuesKey(now) === sent.get(id)) {
       report.rejected++;
       writes.push(tx.store.put({ ...now, state: "rejected", reasons: reasons.get(id)! }));
@@ -116,7 +157,16 @@ async function uploadBatch(db: WalkDb, transport: SyncTransport, sweepId: string
 async function sendEdit(db: WalkDb, transport: SyncTransport, r: LocalReading, report: SyncReport): Promise<void> {
   const key = valuesKey(r);
   try {
-    await transport.editReading(r.sweepId, r.id, { x: r.x, y: r.y, takenAt: r.takenAt, ppm: r.ppm, atLeast: r.atLeast, samplePoint: r.samplePoint, note: r.note, ...(r.editedAt ? { editedAt: r.editedAt } : {}) });
+    await transport.editReading(r.sweepId, r.id, {
+      x: r.x,
+      y: r.y,
+      takenAt: r.takenAt,
+      ppm: r.ppm,
+      atLeast: r.atLeast,
+      samplePoint: r.samplePoint,
+      note: r.note,
+      ...(r.editedAt ? { editedAt: r.editedAt } : {}),
+    });
   } catch (e) {
     if (!isRefusal(e)) throw e;
     if (e.status === 404) {
@@ -124,11 +174,16 @@ async function sendEdit(db: WalkDb, transport: SyncTransport, r: LocalReading, r
       return;
     }
     report.rejected++;
-    await db.put("readings", { ...r, state: "rejected", reasons: Object.keys(e.fields).length ? e.fields : { "": e.message } });
+    await db.put("readings", {
+      ...r,
+      state: "rejected",
+      reasons: Object.keys(e.fields).length ? e.fields : { "": e.message },
+    });
     return;
   }
   const now = await db.get("readings", r.id);
-  if (now && valuesKey(now) === key && !now.deletePending) await db.put("readings", { ...now, editPending: false, state: "synced", reasons: null });
+  if (now && valuesKey(now) === key && !now.deletePending)
+    await db.put("readings", { ...now, editPending: false, state: "synced", reasons: null });
 }
 
 async function sendDelete(db: WalkDb, transport: SyncTransport, r: LocalReading): Promise<void> {
@@ -138,7 +193,11 @@ async function sendDelete(db: WalkDb, transport: SyncTransport, r: LocalReading)
     if (!isRefusal(e)) throw e;
     if (e.status !== 404) {
       // e.g. the sweep was reviewed meanwhile: keep it, say why, and go on with the rest.
-      await db.put("readings", { ...r, state: "rejected", reasons: Object.keys(e.fields).length ? e.fields : { "": e.message } });
+      await db.put("readings", {
+        ...r,
+        state: "rejected",
+        reasons: Object.keys(e.fields).length ? e.fields : { "": e.message },
+      });
       return;
     }
   }

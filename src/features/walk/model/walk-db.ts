@@ -6,7 +6,11 @@ import type { LocalFinding, LocalReading, LocalSweep } from "./local-types";
 
 export interface WalkDbSchema extends DBSchema {
   sweeps: { key: string; value: LocalSweep };
-  readings: { key: string; value: LocalReading; indexes: { bySweep: string; bySweepSeq: [string, number]; byState: string } };
+  readings: {
+    key: string;
+    value: LocalReading;
+    indexes: { bySweep: string; bySweepSeq: [string, number]; byState: string };
+  };
   /** Plan, fixtures, image, detectors, systems of a store: cached whenever a store is opened. */
   cache: { key: string; value: { key: string; value: unknown; savedAt: string } };
   meta: { key: string; value: number };

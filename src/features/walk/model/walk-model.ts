@@ -9,7 +9,10 @@ import type { WalkModel } from "./lag-hint";
  * same solid bodies (and room walls), the same grid cell size and the same walking pace. Build it
  * once per plan; it answers each leg of the walk from then on.
  */
-export function walkModelFor(plan: { widthM: number | null; heightM: number | null }, fixtures: readonly Fixture[]): WalkModel {
+export function walkModelFor(
+  plan: { widthM: number | null; heightM: number | null },
+  fixtures: readonly Fixture[],
+): WalkModel {
   const walkSpeedMps = DEFAULT_LOCATOR_OPTIONS.walkSpeedMps;
   if (!(plan.widthM && plan.heightM)) return { walkSpeedMps };
   // Fans do not matter for the route; only the solids and walls do.

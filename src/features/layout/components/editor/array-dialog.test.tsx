@@ -9,7 +9,10 @@ describe("array dialog", () => {
     stubFetch({});
     const onArray = vi.fn();
     // 2.4384 m = 8 ft exactly (1 ft = 0.3048 m, NIST SP 811).
-    renderOnRoute(<ArrayDialog size={{ width: 2.4384, depth: 1.1 }} preference="ft-in" onArray={onArray} onClose={() => {}} />, { path: "/layout" });
+    renderOnRoute(
+      <ArrayDialog size={{ width: 2.4384, depth: 1.1 }} preference="ft-in" onArray={onArray} onClose={() => {}} />,
+      { path: "/layout" },
+    );
     const spacing = screen.getByLabelText(/Spacing, centre to centre/) as HTMLInputElement;
     expect(spacing.value).toBe("8 ft 0 in");
     fireEvent.click(screen.getByRole("button", { name: "Make copies" }));
@@ -21,7 +24,10 @@ describe("array dialog", () => {
   });
   it("in metres for a metric member", () => {
     stubFetch({});
-    renderOnRoute(<ArrayDialog size={{ width: 2.4384, depth: 1.1 }} preference="m" onArray={() => {}} onClose={() => {}} />, { path: "/layout" });
+    renderOnRoute(
+      <ArrayDialog size={{ width: 2.4384, depth: 1.1 }} preference="m" onArray={() => {}} onClose={() => {}} />,
+      { path: "/layout" },
+    );
     expect((screen.getByLabelText(/Spacing, centre to centre/) as HTMLInputElement).value).toBe("2.438 m");
   });
 });

@@ -19,7 +19,17 @@ const DIRECTIONS: Record<string, { label: string; vec: Vec }> = {
  * "Array": a row of identical cases. The spacing is centre to centre and starts at the
  * selection's own width (or depth), so the copies butt end to end unless told otherwise.
  */
-export function ArrayDialog({ size, preference, onArray, onClose }: { size: { width: number; depth: number }; preference: LengthPreference; onArray: (count: number, spacingM: number, direction: Vec) => void; onClose: () => void }) {
+export function ArrayDialog({
+  size,
+  preference,
+  onArray,
+  onClose,
+}: {
+  size: { width: number; depth: number };
+  preference: LengthPreference;
+  onArray: (count: number, spacingM: number, direction: Vec) => void;
+  onClose: () => void;
+}) {
   const [count, setCount] = useState("4");
   const box = useRef<HTMLDivElement>(null);
   // Below xl the panel sits under the stage, often off screen on a tablet: bring it into view.
@@ -46,14 +56,40 @@ export function ArrayDialog({ size, preference, onArray, onClose }: { size: { wi
   }
 
   return (
-    <div ref={box} role="dialog" aria-modal="false" aria-labelledby="array-heading" className="space-y-3 rounded-md bg-surface p-4 shadow-lg edge">
+    <div
+      ref={box}
+      role="dialog"
+      aria-modal="false"
+      aria-labelledby="array-heading"
+      className="space-y-3 rounded-md bg-surface p-4 shadow-lg edge"
+    >
       <h3 id="array-heading" className="text-lg font-bold">
         Make a row of copies
       </h3>
       <form onSubmit={submit} noValidate className="space-y-3">
-        <TextField label="Items in the row, with the selected" inputMode="numeric" value={count} onChange={(e) => setCount(e.target.value)} error={errors.count} />
-        <Select label="Direction" value={direction} onChange={(e) => { setDirection(e.target.value); setSpacing(null); }} options={Object.entries(DIRECTIONS).map(([value, d]) => ({ value, label: d.label }))} />
-        <TextField label="Spacing, centre to centre" hint={`The selection is ${formatLength(along, preference)} along this direction: that spacing puts them end to end.`} value={spacingText} onChange={(e) => setSpacing(e.target.value)} error={errors.spacing} />
+        <TextField
+          label="Items in the row, with the selected"
+          inputMode="numeric"
+          value={count}
+          onChange={(e) => setCount(e.target.value)}
+          error={errors.count}
+        />
+        <Select
+          label="Direction"
+          value={direction}
+          onChange={(e) => {
+            setDirection(e.target.value);
+            setSpacing(null);
+          }}
+          options={Object.entries(DIRECTIONS).map(([value, d]) => ({ value, label: d.label }))}
+        />
+        <TextField
+          label="Spacing, centre to centre"
+          hint={`The selection is ${formatLength(along, preference)} along this direction: that spacing puts them end to end.`}
+          value={spacingText}
+          onChange={(e) => setSpacing(e.target.value)}
+          error={errors.spacing}
+        />
         <div className="flex flex-wrap gap-2">
           <Button type="submit">Make copies</Button>
           <Button variant="secondary" onClick={onClose}>

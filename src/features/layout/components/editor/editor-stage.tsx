@@ -2,7 +2,14 @@ import { useEffect, useMemo, useRef, useState } from "react";
 import type Konva from "konva";
 import { Group, Layer, Line, Rect, Stage, Transformer } from "react-konva";
 import type { SceneAction } from "../../model/actions";
-import { stagePoint, stageLengthToPlan, stageToPlan, zoomAbout, type PlanPoint, type View } from "../../model/coordinates";
+import {
+  stagePoint,
+  stageLengthToPlan,
+  stageToPlan,
+  zoomAbout,
+  type PlanPoint,
+  type View,
+} from "../../model/coordinates";
 import type { Scene } from "../../model/scene";
 import type { SnapGuide } from "../../model/snapping";
 import { idleState, runTool, type ActiveTool, type AnyToolState } from "../../model/tools/active-tool";
@@ -43,7 +50,9 @@ const SNAP_PX = 8;
 
 /** A tablet starts with finger-sized targets; a mouse press switches back (and a touch forward again). */
 function startingPointer(): PointerKind {
-  return typeof window !== "undefined" && ("ontouchstart" in window || navigator.maxTouchPoints > 0) ? "touch" : "mouse";
+  return typeof window !== "undefined" && ("ontouchstart" in window || navigator.maxTouchPoints > 0)
+    ? "touch"
+    : "mouse";
 }
 
 /** Metres per screen pixel in √2 steps, so shapes re-render only when the zoom moves a step. */
@@ -127,14 +136,23 @@ export function EditorStage(p: EditorStageProps) {
   useEffect(() => {
     const tr = transformer.current;
     if (!tr) return;
-    const selected = p.canEdit && active.tool === "select" ? scene.selection.filter((id) => scene.fixtures[id] && !("point" in scene.fixtures[id])) : [];
+    const selected =
+      p.canEdit && active.tool === "select"
+        ? scene.selection.filter((id) => scene.fixtures[id] && !("point" in scene.fixtures[id]))
+        : [];
     tr.nodes(selected.map((id) => nodes.current.get(id)).filter((n): n is Konva.Group => n !== undefined));
     tr.getLayer()?.batchDraw();
   }, [scene.selection, scene.fixtures, active, p.canEdit, nodes]);
 
   function feed(event: ToolEvent) {
     const sz = sizesRef.current;
-    const settings = { gridM: p.gridM, snapToFixtures: p.snapToFixtures, toleranceM: tolerance, dragThresholdM: stageLengthToPlan(sz.dragPx, mpp, view), pickToleranceM: stageLengthToPlan(sz.pickPx, mpp, view) };
+    const settings = {
+      gridM: p.gridM,
+      snapToFixtures: p.snapToFixtures,
+      toleranceM: tolerance,
+      dragThresholdM: stageLengthToPlan(sz.dragPx, mpp, view),
+      pickToleranceM: stageLengthToPlan(sz.pickPx, mpp, view),
+    };
     const ctx = toolContext(sceneRef.current, settings, newId);
     const r = runTool(active, toolState.current, event, ctx);
     toolState.current = r.state;
@@ -245,7 +263,8 @@ export function EditorStage(p: EditorStageProps) {
     const pt = stage && pointer(stage);
     const [a, b] = presses.current;
     const sameSpot = a !== undefined && b !== undefined && Math.hypot(a.x - b.x, a.y - b.y) <= sizesRef.current.pickPx;
-    if (pt && sameSpot && !pinching.current && (active.tool === "polygon" || active.tool === "vertex")) feed({ type: "double-click", point: pt });
+    if (pt && sameSpot && !pinching.current && (active.tool === "polygon" || active.tool === "vertex"))
+      feed({ type: "double-click", point: pt });
   }
 
   function onWheel(e: Konva.KonvaEventObject<WheelEvent>) {
@@ -299,13 +318,23 @@ export function EditorStage(p: EditorStageProps) {
       onDblClick={onDouble}
       onDblTap={onDouble}
       onWheel={onWheel}
-      style={{ cursor: p.panning || active.tool === "pan" ? "grab" : active.tool === "select" ? "default" : "crosshair", touchAction: "none" }}
+      style={{
+        cursor: p.panning || active.tool === "pan" ? "grab" : active.tool === "select" ? "default" : "crosshair",
+        touchAction: "none",
+      }}
     >
       <StageBackdrop backdrop={backdrop} plan={scene.plan} gridM={gridShown} />
       <Layer listening={active.tool === "select" && !p.panning}>
         <Group scaleX={k} scaleY={k}>
           {scene.order.map((id) => (
-            <FixtureShape key={id} fixture={scene.fixtures[id]} selected={selected.has(id)} draggable={draggable} unit={unit} handlers={handlers} />
+            <FixtureShape
+              key={id}
+              fixture={scene.fixtures[id]}
+              selected={selected.has(id)}
+              draggable={draggable}
+              unit={unit}
+              handlers={handlers}
+            />
           ))}
         </Group>
       </Layer>
@@ -337,8 +366,22 @@ export function EditorStage(p: EditorStageProps) {
       </Layer>
       <Layer listening={false}>
         <Group scaleX={k} scaleY={k}>
-          <Line ref={guideX} visible={false} stroke="#CC79A7" strokeWidth={1.5} dash={[6, 4]} strokeScaleEnabled={false} />
-          <Line ref={guideY} visible={false} stroke="#CC79A7" strokeWidth={1.5} dash={[6, 4]} strokeScaleEnabled={false} />
+          <Line
+            ref={guideX}
+            visible={false}
+            stroke="#CC79A7"
+            strokeWidth={1.5}
+            dash={[6, 4]}
+            strokeScaleEnabled={false}
+          />
+          <Line
+            ref={guideY}
+            visible={false}
+            stroke="#CC79A7"
+            strokeWidth={1.5}
+            dash={[6, 4]}
+            strokeScaleEnabled={false}
+          />
           <PreviewShape preview={preview} />
           {active.tool === "vertex" ? <CornerHandles scene={scene} unit={unit} sizePx={sizes.anchorVisualPx} /> : null}
         </Group>
@@ -355,7 +398,17 @@ function CornerHandles({ scene, unit, sizePx }: { scene: Scene; unit: number; si
   return (
     <>
       {f.polygon.map(([x, y], i) => (
-        <Rect key={i} x={x - h / 2} y={y - h / 2} width={h} height={h} fill="#ffffff" stroke={SELECTION_STROKE} strokeWidth={2} strokeScaleEnabled={false} />
+        <Rect
+          key={i}
+          x={x - h / 2}
+          y={y - h / 2}
+          width={h}
+          height={h}
+          fill="#ffffff"
+          stroke={SELECTION_STROKE}
+          strokeWidth={2}
+          strokeScaleEnabled={false}
+        />
       ))}
     </>
   );
@@ -365,17 +418,45 @@ function PreviewShape({ preview }: { preview: ToolPreview | null }) {
   if (!preview) return null;
   if (preview.kind === "marquee") {
     const b = preview.box;
-    return <Rect x={b.minX} y={b.minY} width={b.maxX - b.minX} height={b.maxY - b.minY} stroke="#1f4e5f" strokeWidth={1.5} dash={[5, 4]} fill="rgba(31,78,95,0.08)" strokeScaleEnabled={false} />;
+    return (
+      <Rect
+        x={b.minX}
+        y={b.minY}
+        width={b.maxX - b.minX}
+        height={b.maxY - b.minY}
+        stroke="#1f4e5f"
+        strokeWidth={1.5}
+        dash={[5, 4]}
+        fill="rgba(31,78,95,0.08)"
+        strokeScaleEnabled={false}
+      />
+    );
   }
   if (preview.kind !== "outline") return null;
   const vs = preview.hover ? [...preview.vertices, preview.hover] : preview.vertices;
   return (
     <>
-      <Line points={vs.flatMap((v) => [v.x, v.y])} closed={preview.closed} stroke="#1f4e5f" strokeWidth={2} dash={[6, 4]} fill={preview.closed ? "rgba(31,78,95,0.12)" : undefined} strokeScaleEnabled={false} />
+      <Line
+        points={vs.flatMap((v) => [v.x, v.y])}
+        closed={preview.closed}
+        stroke="#1f4e5f"
+        strokeWidth={2}
+        dash={[6, 4]}
+        fill={preview.closed ? "rgba(31,78,95,0.12)" : undefined}
+        strokeScaleEnabled={false}
+      />
       {preview.vertices.map((v, i) => (
-        <Rect key={i} x={v.x} y={v.y} width={0.001} height={0.001} stroke="#1f4e5f" strokeWidth={8} strokeScaleEnabled={false} />
+        <Rect
+          key={i}
+          x={v.x}
+          y={v.y}
+          width={0.001}
+          height={0.001}
+          stroke="#1f4e5f"
+          strokeWidth={8}
+          strokeScaleEnabled={false}
+        />
       ))}
     </>
   );
 }
-

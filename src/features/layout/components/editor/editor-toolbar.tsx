@@ -1,5 +1,13 @@
 import { useId } from "react";
-import { FIXTURE_FAMILY, FIXTURE_FAMILY_NAMES, FIXTURE_KIND_NAMES, FIXTURE_KINDS, isPointKind, type FixtureFamily, type FixtureKind } from "#core/contracts/fixture-kinds";
+import {
+  FIXTURE_FAMILY,
+  FIXTURE_FAMILY_NAMES,
+  FIXTURE_KIND_NAMES,
+  FIXTURE_KINDS,
+  isPointKind,
+  type FixtureFamily,
+  type FixtureKind,
+} from "#core/contracts/fixture-kinds";
 import type { LengthPreference } from "#core/domain/units/format-units";
 import { Button } from "../../../../components/ui/button";
 import type { ActiveTool } from "../../model/tools/active-tool";
@@ -44,9 +52,25 @@ const GRIDS: Record<LengthPreference, { value: string; label: string }[]> = {
   ],
 };
 
-function ToolButton({ pressed, onClick, children, shortcut }: { pressed: boolean; onClick: () => void; children: string; shortcut: string }) {
+function ToolButton({
+  pressed,
+  onClick,
+  children,
+  shortcut,
+}: {
+  pressed: boolean;
+  onClick: () => void;
+  children: string;
+  shortcut: string;
+}) {
   return (
-    <Button variant={pressed ? "primary" : "secondary"} aria-pressed={pressed} onClick={onClick} title={`${children} (${shortcut})`} aria-keyshortcuts={shortcut}>
+    <Button
+      variant={pressed ? "primary" : "secondary"}
+      aria-pressed={pressed}
+      onClick={onClick}
+      title={`${children} (${shortcut})`}
+      aria-keyshortcuts={shortcut}
+    >
       {children}
     </Button>
   );
@@ -59,7 +83,11 @@ export function EditorToolbar(p: Props) {
   const drawing = p.active.tool === "rectangle" || p.active.tool === "polygon" || p.active.tool === "point";
   const pointKind = isPointKind(p.kind);
   return (
-    <div role="toolbar" aria-label="Layout tools" className="flex flex-wrap items-end gap-2 rounded-md bg-surface p-2 edge">
+    <div
+      role="toolbar"
+      aria-label="Layout tools"
+      className="flex flex-wrap items-end gap-2 rounded-md bg-surface p-2 edge"
+    >
       <div className="flex flex-wrap gap-1" role="group" aria-label="Tool">
         <ToolButton pressed={p.active.tool === "select"} onClick={() => p.onTool("select")} shortcut="V">
           Select
@@ -69,7 +97,11 @@ export function EditorToolbar(p: Props) {
         </ToolButton>
         {p.canEdit ? (
           <>
-            <ToolButton pressed={drawing && (p.active.tool === "rectangle" || p.active.tool === "point")} onClick={() => p.onTool("rectangle")} shortcut="B">
+            <ToolButton
+              pressed={drawing && (p.active.tool === "rectangle" || p.active.tool === "point")}
+              onClick={() => p.onTool("rectangle")}
+              shortcut="B"
+            >
               {pointKind ? "Place point" : "Rectangle"}
             </ToolButton>
             <ToolButton pressed={p.active.tool === "vertex"} onClick={() => p.onTool("vertex")} shortcut="C">
@@ -88,7 +120,12 @@ export function EditorToolbar(p: Props) {
           <label htmlFor={kindId} className="block text-sm font-bold">
             Kind to draw
           </label>
-          <select id={kindId} value={p.kind} onChange={(e) => p.onKind(e.target.value as FixtureKind)} className="block min-h-11 rounded-md bg-surface px-2 edge">
+          <select
+            id={kindId}
+            value={p.kind}
+            onChange={(e) => p.onKind(e.target.value as FixtureKind)}
+            className="block min-h-11 rounded-md bg-surface px-2 edge"
+          >
             {FAMILIES.map((fam) => (
               <optgroup key={fam} label={FIXTURE_FAMILY_NAMES[fam]}>
                 {FIXTURE_KINDS.filter((k) => FIXTURE_FAMILY[k] === fam).map((k) => (
@@ -137,7 +174,12 @@ export function EditorToolbar(p: Props) {
             <label htmlFor={gridId} className="block text-sm font-bold">
               Snap to grid
             </label>
-            <select id={gridId} value={p.gridM === null ? "" : String(p.gridM)} onChange={(e) => p.onGrid(e.target.value === "" ? null : Number(e.target.value))} className="block min-h-11 rounded-md bg-surface px-2 edge">
+            <select
+              id={gridId}
+              value={p.gridM === null ? "" : String(p.gridM)}
+              onChange={(e) => p.onGrid(e.target.value === "" ? null : Number(e.target.value))}
+              className="block min-h-11 rounded-md bg-surface px-2 edge"
+            >
               <option value="">Off</option>
               {GRIDS[p.preference].map((g) => (
                 <option key={g.value} value={g.value}>
@@ -147,7 +189,12 @@ export function EditorToolbar(p: Props) {
             </select>
           </div>
           <label className="flex min-h-11 items-center gap-2 px-1">
-            <input type="checkbox" className="size-6 accent-accent" checked={p.snapToFixtures} onChange={(e) => p.onSnapToFixtures(e.target.checked)} />
+            <input
+              type="checkbox"
+              className="size-6 accent-accent"
+              checked={p.snapToFixtures}
+              onChange={(e) => p.onSnapToFixtures(e.target.checked)}
+            />
             Snap to fixtures
           </label>
         </div>

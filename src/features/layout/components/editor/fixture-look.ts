@@ -35,21 +35,100 @@ export interface FixtureLook {
 }
 
 const LOOKS: Record<Exclude<FixtureKind, "line-set-drop" | "valve" | "coil">, FixtureLook> = {
-  "open-case": { stroke: OKABE_ITO.blue, strokeWidth: 2, fill: "rgba(86,180,233,0.30)", pattern: "none", dash: null, wall: false },
-  "island-case": { stroke: OKABE_ITO.blue, strokeWidth: 2, fill: "rgba(86,180,233,0.18)", pattern: "dots", dash: null, wall: false },
-  "door-case": { stroke: OKABE_ITO.blue, strokeWidth: 2.5, fill: "rgba(86,180,233,0.30)", pattern: "none", dash: null, wall: false },
-  "walk-in-cooler": { stroke: OKABE_ITO.blue, strokeWidth: 5, fill: "rgba(86,180,233,0.12)", pattern: "none", dash: null, wall: true },
-  "walk-in-freezer": { stroke: "#003f66", strokeWidth: 5, fill: "rgba(0,114,178,0.16)", pattern: "none", dash: null, wall: true },
-  "machine-room": { stroke: OKABE_ITO.vermilion, strokeWidth: 5, fill: "rgba(213,94,0,0.10)", pattern: "none", dash: null, wall: true },
-  wall: { stroke: "#333333", strokeWidth: 1.5, fill: "rgba(60,60,60,0.55)", pattern: "cross-hatch", dash: null, wall: false },
-  gondola: { stroke: "#5b4a00", strokeWidth: 1.5, fill: "rgba(230,159,0,0.22)", pattern: "hatch", dash: null, wall: false },
-  checkout: { stroke: "#5b4a00", strokeWidth: 1.5, fill: "rgba(230,159,0,0.35)", pattern: "hatch", dash: null, wall: false },
-  column: { stroke: "#222222", strokeWidth: 1.5, fill: "rgba(40,40,40,0.7)", pattern: "cross-hatch", dash: null, wall: false },
-  "benign-zone": { stroke: OKABE_ITO.green, strokeWidth: 2, fill: "rgba(0,158,115,0.10)", pattern: "dots", dash: [8, 5], wall: false },
+  "open-case": {
+    stroke: OKABE_ITO.blue,
+    strokeWidth: 2,
+    fill: "rgba(86,180,233,0.30)",
+    pattern: "none",
+    dash: null,
+    wall: false,
+  },
+  "island-case": {
+    stroke: OKABE_ITO.blue,
+    strokeWidth: 2,
+    fill: "rgba(86,180,233,0.18)",
+    pattern: "dots",
+    dash: null,
+    wall: false,
+  },
+  "door-case": {
+    stroke: OKABE_ITO.blue,
+    strokeWidth: 2.5,
+    fill: "rgba(86,180,233,0.30)",
+    pattern: "none",
+    dash: null,
+    wall: false,
+  },
+  "walk-in-cooler": {
+    stroke: OKABE_ITO.blue,
+    strokeWidth: 5,
+    fill: "rgba(86,180,233,0.12)",
+    pattern: "none",
+    dash: null,
+    wall: true,
+  },
+  "walk-in-freezer": {
+    stroke: "#003f66",
+    strokeWidth: 5,
+    fill: "rgba(0,114,178,0.16)",
+    pattern: "none",
+    dash: null,
+    wall: true,
+  },
+  "machine-room": {
+    stroke: OKABE_ITO.vermilion,
+    strokeWidth: 5,
+    fill: "rgba(213,94,0,0.10)",
+    pattern: "none",
+    dash: null,
+    wall: true,
+  },
+  wall: {
+    stroke: "#333333",
+    strokeWidth: 1.5,
+    fill: "rgba(60,60,60,0.55)",
+    pattern: "cross-hatch",
+    dash: null,
+    wall: false,
+  },
+  gondola: {
+    stroke: "#5b4a00",
+    strokeWidth: 1.5,
+    fill: "rgba(230,159,0,0.22)",
+    pattern: "hatch",
+    dash: null,
+    wall: false,
+  },
+  checkout: {
+    stroke: "#5b4a00",
+    strokeWidth: 1.5,
+    fill: "rgba(230,159,0,0.35)",
+    pattern: "hatch",
+    dash: null,
+    wall: false,
+  },
+  column: {
+    stroke: "#222222",
+    strokeWidth: 1.5,
+    fill: "rgba(40,40,40,0.7)",
+    pattern: "cross-hatch",
+    dash: null,
+    wall: false,
+  },
+  "benign-zone": {
+    stroke: OKABE_ITO.green,
+    strokeWidth: 2,
+    fill: "rgba(0,158,115,0.10)",
+    pattern: "dots",
+    dash: [8, 5],
+    wall: false,
+  },
 };
 
 export function lookOf(kind: FixtureKind): FixtureLook {
-  return kind in LOOKS ? LOOKS[kind as keyof typeof LOOKS] : { stroke: OKABE_ITO.purple, strokeWidth: 2, fill: "#ffffff", pattern: "none", dash: null, wall: false };
+  return kind in LOOKS
+    ? LOOKS[kind as keyof typeof LOOKS]
+    : { stroke: OKABE_ITO.purple, strokeWidth: 2, fill: "#ffffff", pattern: "none", dash: null, wall: false };
 }
 
 export const POINT_COLOURS: Record<"line-set-drop" | "valve" | "coil", string> = {

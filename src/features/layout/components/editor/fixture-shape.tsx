@@ -35,7 +35,13 @@ export interface FixtureShapeProps {
  * One fixture as a Konva group in plan metres. React re-renders it only when its own props
  * change (memo): a drag moves the Konva node alone and writes back once, on drag end.
  */
-export const FixtureShape = memo(function FixtureShape({ fixture: f, selected, draggable, unit, handlers }: FixtureShapeProps) {
+export const FixtureShape = memo(function FixtureShape({
+  fixture: f,
+  selected,
+  draggable,
+  unit,
+  handlers,
+}: FixtureShapeProps) {
   const common = {
     ref: (node: Konva.Group | null) => handlers.register(f.id, node),
     draggable,
@@ -43,7 +49,8 @@ export const FixtureShape = memo(function FixtureShape({ fixture: f, selected, d
     onDragStart: (e: Konva.KonvaEventObject<DragEvent>) => handlers.onDragStart(f.id, e),
     onDragMove: (e: Konva.KonvaEventObject<DragEvent>) => handlers.onDragMove(f.id, e),
     onDragEnd: (e: Konva.KonvaEventObject<DragEvent>) => handlers.onDragEnd(f.id, e),
-    onTransformEnd: (e: Konva.KonvaEventObject<Event>) => handlers.onTransformEnd(f.id, e.currentTarget as unknown as Konva.Group),
+    onTransformEnd: (e: Konva.KonvaEventObject<Event>) =>
+      handlers.onTransformEnd(f.id, e.currentTarget as unknown as Konva.Group),
   };
   let fontSize = 13 * unit;
   if ("point" in f) {
@@ -52,9 +59,21 @@ export const FixtureShape = memo(function FixtureShape({ fixture: f, selected, d
     return (
       <Group {...common} name="fixture">
         <Group x={f.point.x} y={f.point.y}>
-          {selected ? <Circle radius={r * 1.7} stroke={SELECTION_STROKE} strokeWidth={3} strokeScaleEnabled={false} /> : null}
+          {selected ? (
+            <Circle radius={r * 1.7} stroke={SELECTION_STROKE} strokeWidth={3} strokeScaleEnabled={false} />
+          ) : null}
           <PointGlyph kind={f.kind} r={r} colour={colour} />
-          {f.label && (selected || unit <= POINT_LABEL_UNIT) ? <Text x={r * 1.3} y={-fontSize / 2} text={f.label} fontSize={fontSize} fontFamily="Atkinson Hyperlegible" fill="#111" listening={false} /> : null}
+          {f.label && (selected || unit <= POINT_LABEL_UNIT) ? (
+            <Text
+              x={r * 1.3}
+              y={-fontSize / 2}
+              text={f.label}
+              fontSize={fontSize}
+              fontFamily="Atkinson Hyperlegible"
+              fill="#111"
+              listening={false}
+            />
+          ) : null}
         </Group>
       </Group>
     );
@@ -70,7 +89,8 @@ export const FixtureShape = memo(function FixtureShape({ fixture: f, selected, d
   // A label is drawn only where it fits inside the outline, shrunk to 10 px if it must be;
   // the list view always has it.
   const boxWidth = b.maxX - b.minX;
-  if (f.label.length * fontSize * LABEL_CHAR_EM > boxWidth) fontSize = Math.max(10 * unit, boxWidth / (f.label.length * LABEL_CHAR_EM));
+  if (f.label.length * fontSize * LABEL_CHAR_EM > boxWidth)
+    fontSize = Math.max(10 * unit, boxWidth / (f.label.length * LABEL_CHAR_EM));
   const labelWidth = f.label.length * fontSize * LABEL_CHAR_EM;
   const showLabel = f.label !== "" && (labelWidth <= b.maxX - b.minX || selected) && fontSize <= b.maxY - b.minY;
   return (
@@ -89,15 +109,55 @@ export const FixtureShape = memo(function FixtureShape({ fixture: f, selected, d
         perfectDrawEnabled={false}
       />
       {tile ? <Line points={flat} closed fill={look.fill} listening={false} /> : null}
-      {wall ? <Line points={wall.points} closed={wall.closed} stroke={look.stroke} strokeWidth={look.strokeWidth} strokeScaleEnabled={false} lineJoin="miter" listening={false} /> : null}
-      {gap ? <Line points={[gap[0][0], gap[0][1], gap[1][0], gap[1][1]]} stroke={look.stroke} strokeWidth={1.5} dash={[3, 3]} strokeScaleEnabled={false} listening={false} /> : null}
+      {wall ? (
+        <Line
+          points={wall.points}
+          closed={wall.closed}
+          stroke={look.stroke}
+          strokeWidth={look.strokeWidth}
+          strokeScaleEnabled={false}
+          lineJoin="miter"
+          listening={false}
+        />
+      ) : null}
+      {gap ? (
+        <Line
+          points={[gap[0][0], gap[0][1], gap[1][0], gap[1][1]]}
+          stroke={look.stroke}
+          strokeWidth={1.5}
+          dash={[3, 3]}
+          strokeScaleEnabled={false}
+          listening={false}
+        />
+      ) : null}
       {ticks.map(([p, q], i) => (
-        <Line key={i} points={[p[0], p[1], q[0], q[1]]} stroke={look.stroke} strokeWidth={1.5} strokeScaleEnabled={false} listening={false} />
+        <Line
+          key={i}
+          points={[p[0], p[1], q[0], q[1]]}
+          stroke={look.stroke}
+          strokeWidth={1.5}
+          strokeScaleEnabled={false}
+          listening={false}
+        />
       ))}
-      {"hasFans" in f && f.hasFans && look.wall === false && f.kind !== "benign-zone" && b.maxX - b.minX > fontSize * 3 ? (
+      {"hasFans" in f &&
+      f.hasFans &&
+      look.wall === false &&
+      f.kind !== "benign-zone" &&
+      b.maxX - b.minX > fontSize * 3 ? (
         <FanMark x={b.maxX - fontSize * 0.9} y={b.minY + fontSize * 0.9} r={fontSize * 0.45} colour={look.stroke} />
       ) : null}
-      {selected ? <Line points={flat} closed stroke={SELECTION_STROKE} strokeWidth={3} dash={[6, 3]} strokeScaleEnabled={false} listening={false} /> : null}
+      {selected ? (
+        <Line
+          points={flat}
+          closed
+          stroke={SELECTION_STROKE}
+          strokeWidth={3}
+          dash={[6, 3]}
+          strokeScaleEnabled={false}
+          listening={false}
+        />
+      ) : null}
       {showLabel ? (
         <Text
           x={cx}
@@ -124,7 +184,15 @@ function FanMark({ x, y, r, colour }: { x: number; y: number; r: number; colour:
   });
   return (
     <Group listening={false}>
-      <Circle x={x} y={y} radius={r} stroke={colour} strokeWidth={1.2} strokeScaleEnabled={false} fill="rgba(255,255,255,0.8)" />
+      <Circle
+        x={x}
+        y={y}
+        radius={r}
+        stroke={colour}
+        strokeWidth={1.2}
+        strokeScaleEnabled={false}
+        fill="rgba(255,255,255,0.8)"
+      />
       {blades.map((p, i) => (
         <Line key={i} points={p} stroke={colour} strokeWidth={1.5} strokeScaleEnabled={false} />
       ))}
@@ -138,8 +206,18 @@ function PointGlyph({ kind, r, colour }: { kind: "line-set-drop" | "valve" | "co
     return (
       <Group>
         <Circle radius={r} fill="#ffffff" stroke={colour} strokeWidth={2.5} strokeScaleEnabled={false} />
-        <Line points={[-r * 0.7, -r * 0.7, r * 0.7, r * 0.7]} stroke={colour} strokeWidth={2} strokeScaleEnabled={false} />
-        <Line points={[-r * 0.7, r * 0.7, r * 0.7, -r * 0.7]} stroke={colour} strokeWidth={2} strokeScaleEnabled={false} />
+        <Line
+          points={[-r * 0.7, -r * 0.7, r * 0.7, r * 0.7]}
+          stroke={colour}
+          strokeWidth={2}
+          strokeScaleEnabled={false}
+        />
+        <Line
+          points={[-r * 0.7, r * 0.7, r * 0.7, -r * 0.7]}
+          stroke={colour}
+          strokeWidth={2}
+          strokeScaleEnabled={false}
+        />
       </Group>
     );
   }
@@ -148,15 +226,36 @@ function PointGlyph({ kind, r, colour }: { kind: "line-set-drop" | "valve" | "co
     return (
       <Group>
         <Circle radius={r * 1.1} fill="rgba(255,255,255,0.85)" />
-        <Line points={[-r, -r * 0.7, r, r * 0.7, r, -r * 0.7, -r, r * 0.7]} closed fill={colour} stroke="#000" strokeWidth={1} strokeScaleEnabled={false} />
+        <Line
+          points={[-r, -r * 0.7, r, r * 0.7, r, -r * 0.7, -r, r * 0.7]}
+          closed
+          fill={colour}
+          stroke="#000"
+          strokeWidth={1}
+          strokeScaleEnabled={false}
+        />
       </Group>
     );
   }
   // A coil: a zig-zag inside a square.
   return (
     <Group>
-      <Rect x={-r} y={-r} width={2 * r} height={2 * r} fill="#ffffff" stroke={colour} strokeWidth={2.5} strokeScaleEnabled={false} />
-      <Line points={[-r * 0.7, r * 0.5, -r * 0.35, -r * 0.5, 0, r * 0.5, r * 0.35, -r * 0.5, r * 0.7, r * 0.5]} stroke={colour} strokeWidth={2} strokeScaleEnabled={false} />
+      <Rect
+        x={-r}
+        y={-r}
+        width={2 * r}
+        height={2 * r}
+        fill="#ffffff"
+        stroke={colour}
+        strokeWidth={2.5}
+        strokeScaleEnabled={false}
+      />
+      <Line
+        points={[-r * 0.7, r * 0.5, -r * 0.35, -r * 0.5, 0, r * 0.5, r * 0.35, -r * 0.5, r * 0.7, r * 0.5]}
+        stroke={colour}
+        strokeWidth={2}
+        strokeScaleEnabled={false}
+      />
     </Group>
   );
 }

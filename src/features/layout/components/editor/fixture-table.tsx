@@ -26,7 +26,10 @@ const COLUMNS: { header: string; key: RowKey | null }[] = [
 export const FixtureTable = memo(function FixtureTable({ scene, systems, preference, onSelect }: Props) {
   const [sort, setSort] = useState<{ key: RowKey; descending: boolean } | null>(null);
   // Rows depend on the fixtures and order only: a selection change does not recompute them.
-  const rows = useMemo(() => fixtureRows({ ...scene, selection: [] }, sort?.key ?? null, sort?.descending ?? false), [scene.fixtures, scene.order, sort]); // eslint-disable-line react-hooks/exhaustive-deps
+  const rows = useMemo(
+    () => fixtureRows({ ...scene, selection: [] }, sort?.key ?? null, sort?.descending ?? false),
+    [scene.fixtures, scene.order, sort],
+  ); // eslint-disable-line react-hooks/exhaustive-deps
   const names = new Map(systems.map((s) => [s.id, s.name]));
   const selected = new Set(scene.selection);
   const len = (m: number) => formatLength(m, preference, { decimals: 2 });
@@ -41,9 +44,22 @@ export const FixtureTable = memo(function FixtureTable({ scene, systems, prefere
             {COLUMNS.map(({ header, key }) => {
               const active = key !== null && sort?.key === key;
               return (
-                <th key={header} scope="col" className="px-3 py-1 font-bold" aria-sort={active ? (sort!.descending ? "descending" : "ascending") : undefined}>
+                <th
+                  key={header}
+                  scope="col"
+                  className="px-3 py-1 font-bold"
+                  aria-sort={active ? (sort!.descending ? "descending" : "ascending") : undefined}
+                >
                   {key ? (
-                    <button type="button" className="min-h-11 font-bold" onClick={() => setSort(active ? (sort!.descending ? null : { key, descending: true }) : { key, descending: false })}>
+                    <button
+                      type="button"
+                      className="min-h-11 font-bold"
+                      onClick={() =>
+                        setSort(
+                          active ? (sort!.descending ? null : { key, descending: true }) : { key, descending: false },
+                        )
+                      }
+                    >
                       {header} {active ? (sort!.descending ? "▼" : "▲") : ""}
                     </button>
                   ) : (
@@ -58,9 +74,17 @@ export const FixtureTable = memo(function FixtureTable({ scene, systems, prefere
           {rows.map((r) => {
             const isSel = selected.has(r.id);
             return (
-              <tr key={r.id} aria-selected={isSel} className={`border-t border-line ${isSel ? "bg-note-soft font-bold" : ""}`}>
+              <tr
+                key={r.id}
+                aria-selected={isSel}
+                className={`border-t border-line ${isSel ? "bg-note-soft font-bold" : ""}`}
+              >
                 <td className="px-3 py-1">
-                  <button type="button" className="min-h-11 w-full text-left underline underline-offset-2" onClick={(e) => onSelect(r.id, e.shiftKey || e.metaKey || e.ctrlKey)}>
+                  <button
+                    type="button"
+                    className="min-h-11 w-full text-left underline underline-offset-2"
+                    onClick={(e) => onSelect(r.id, e.shiftKey || e.metaKey || e.ctrlKey)}
+                  >
                     {isSel ? "▶ " : ""}
                     {r.label || <span className="text-muted">(no label)</span>}
                   </button>
@@ -72,7 +96,9 @@ export const FixtureTable = memo(function FixtureTable({ scene, systems, prefere
                 <td className="whitespace-nowrap px-3 py-1" data-x={r.x} data-y={r.y}>
                   {len(r.x)}, {len(r.y)}
                 </td>
-                <td className="whitespace-nowrap px-3 py-1">{r.widthM === null ? "point" : `${len(r.widthM)} × ${len(r.depthM!)} (${area(Math.abs(r.areaM2!))})`}</td>
+                <td className="whitespace-nowrap px-3 py-1">
+                  {r.widthM === null ? "point" : `${len(r.widthM)} × ${len(r.depthM!)} (${area(Math.abs(r.areaM2!))})`}
+                </td>
               </tr>
             );
           })}

@@ -30,7 +30,8 @@ import type { Backdrop } from "./stage-backdrop";
 const BLANK_LONG_SIDE_PX = 2000;
 
 function backdropOf(plan: Plan, bounds: { width: number; height: number }, image: HTMLImageElement | null): Backdrop {
-  if (plan.image && plan.metresPerPixel) return { image, widthPx: plan.image.widthPx, heightPx: plan.image.heightPx, metresPerPixel: plan.metresPerPixel };
+  if (plan.image && plan.metresPerPixel)
+    return { image, widthPx: plan.image.widthPx, heightPx: plan.image.heightPx, metresPerPixel: plan.metresPerPixel };
   const mpp = Math.max(bounds.width, bounds.height) / BLANK_LONG_SIDE_PX;
   return { image: null, widthPx: bounds.width / mpp, heightPx: bounds.height / mpp, metresPerPixel: mpp };
 }
@@ -47,11 +48,19 @@ export interface LayoutEditorProps {
 export function LayoutEditor(props: LayoutEditorProps) {
   const image = useHtmlImage(props.plan.image?.displayUrl ?? null);
   if (props.plan.image && image.status === "loading") return <Spinner label="Loading the drawing…" />;
-  if (props.plan.image && image.status === "failed") return <Alert tone="error">The plan's drawing could not be loaded. Reload the page to try again.</Alert>;
+  if (props.plan.image && image.status === "failed")
+    return <Alert tone="error">The plan's drawing could not be loaded. Reload the page to try again.</Alert>;
   return <EditorBody {...props} image={image.image} />;
 }
 
-function EditorBody({ plan, initial, systems, preference, canEdit, image }: LayoutEditorProps & { image: HTMLImageElement | null }) {
+function EditorBody({
+  plan,
+  initial,
+  systems,
+  preference,
+  canEdit,
+  image,
+}: LayoutEditorProps & { image: HTMLImageElement | null }) {
   const bounds = initial.bounds!;
   const backdrop = useMemo(() => backdropOf(plan, bounds, image), [plan, bounds, image]);
   const editor = useEditorHistory(() => createScene(bounds, initial.fixtures));
@@ -111,7 +120,11 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
         setActive(drawTool(k, tool));
       }
       const sel = scene.selection.length === 1 ? scene.fixtures[scene.selection[0]] : undefined;
-      setMessage(tool === "vertex" && (!sel || "point" in sel) ? "The corner tool reshapes one outline: select it first (Select tool, or its row in the list), then drag its corners." : null);
+      setMessage(
+        tool === "vertex" && (!sel || "point" in sel)
+          ? "The corner tool reshapes one outline: select it first (Select tool, or its row in the list), then drag its corners."
+          : null,
+      );
     },
     [kind, scene],
   );
@@ -126,7 +139,20 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
     if (scene.selection.length) editor.apply([remove(scene.selection)]);
   }, [scene.selection, editor]);
 
-  useEditorShortcuts({ enabled: true, canEdit, scene, gridM, editor, toolKeys, onDuplicate: doDuplicate, onDelete: doDelete, onTool: chooseTool, onZoom: zoom, onPanning: setPanning, onEscape: () => (active.tool !== "select" ? chooseTool("select") : editor.apply([select([])])) });
+  useEditorShortcuts({
+    enabled: true,
+    canEdit,
+    scene,
+    gridM,
+    editor,
+    toolKeys,
+    onDuplicate: doDuplicate,
+    onDelete: doDelete,
+    onTool: chooseTool,
+    onZoom: zoom,
+    onPanning: setPanning,
+    onEscape: () => (active.tool !== "select" ? chooseTool("select") : editor.apply([select([])])),
+  });
 
   async function reloadTheirs() {
     setReloading(true);
@@ -143,12 +169,19 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
   const selection = selectedFixtures(scene);
   const selBox = unionBounds(selection);
   const fixtures = useMemo(() => sceneFixtures(scene), [scene]);
-  const onSelectRow = useCallback((id: string, additive: boolean) => editor.apply([select([id], additive ? "toggle" : "replace")]), [editor]);
+  const onSelectRow = useCallback(
+    (id: string, additive: boolean) => editor.apply([select([id], additive ? "toggle" : "replace")]),
+    [editor],
+  );
   const state = autosave.state;
 
   return (
     <div className="space-y-3">
-      <div ref={bar} className="sticky top-0 z-10 -mx-1 flex flex-wrap items-center justify-between gap-2 bg-paper px-1 py-1" data-testid="editor-bar">
+      <div
+        ref={bar}
+        className="sticky top-0 z-10 -mx-1 flex flex-wrap items-center justify-between gap-2 bg-paper px-1 py-1"
+        data-testid="editor-bar"
+      >
         <EditorToolbar
           active={active}
           kind={kind}
@@ -162,7 +195,8 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
           onTool={chooseTool}
           onKind={(k) => {
             setKind(k);
-            if (active.tool === "rectangle" || active.tool === "polygon" || active.tool === "point") setActive(drawTool(k, shape));
+            if (active.tool === "rectangle" || active.tool === "polygon" || active.tool === "point")
+              setActive(drawTool(k, shape));
           }}
           // Half way through an outline, Undo takes back the last corner (Backspace on a keyboard;
           // a tablet has only the button).
@@ -180,7 +214,10 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
       {state.status === "conflict" ? (
         <Alert tone="error" title="Someone else changed this layout">
           <p>{state.message}</p>
-          <p>Your recent changes are still on screen but were not saved. Reload their version to go on editing; then redo your change.</p>
+          <p>
+            Your recent changes are still on screen but were not saved. Reload their version to go on editing; then redo
+            your change.
+          </p>
           <Button className="mt-2" busy={reloading} onClick={() => void reloadTheirs()}>
             Reload theirs
           </Button>
@@ -241,7 +278,11 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
             </div>
           ) : null}
           <div className="pointer-events-none absolute bottom-2 left-2 rounded bg-surface/90 px-2 py-1 edge">
-            <ScaleBar metresPerScreenPixel={backdrop.metresPerPixel / view.zoom} preference={preference} maxPixels={150} />
+            <ScaleBar
+              metresPerScreenPixel={backdrop.metresPerPixel / view.zoom}
+              preference={preference}
+              maxPixels={150}
+            />
           </div>
         </div>
         <aside aria-labelledby="props-heading" className="space-y-3 rounded-md bg-surface p-3 edge">
@@ -265,7 +306,13 @@ function EditorBody({ plan, initial, systems, preference, canEdit, image }: Layo
               }}
             />
           ) : null}
-          <PropertiesPanel selection={selection} systems={systems} preference={preference} canEdit={canEdit} apply={editor.apply} />
+          <PropertiesPanel
+            selection={selection}
+            systems={systems}
+            preference={preference}
+            canEdit={canEdit}
+            apply={editor.apply}
+          />
           <details>
             <summary className="min-h-11 cursor-pointer py-2 font-bold">Keyboard shortcuts</summary>
             <dl className="grid grid-cols-[max-content_1fr] gap-x-3 text-sm">

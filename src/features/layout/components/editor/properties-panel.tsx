@@ -1,5 +1,12 @@
 import { useEffect, useState } from "react";
-import { FIXTURE_FAMILY, FIXTURE_FAMILY_NAMES, FIXTURE_KIND_NAMES, FIXTURE_KINDS, isPointKind, type FixtureKind } from "#core/contracts/fixture-kinds";
+import {
+  FIXTURE_FAMILY,
+  FIXTURE_FAMILY_NAMES,
+  FIXTURE_KIND_NAMES,
+  FIXTURE_KINDS,
+  isPointKind,
+  type FixtureKind,
+} from "#core/contracts/fixture-kinds";
 import type { Fixture, RoomDoor } from "#core/contracts/fixtures";
 import { LABEL_MAX, NOTE_MAX } from "#core/contracts/fixtures";
 import { formatLength, type LengthPreference } from "#core/domain/units/format-units";
@@ -25,11 +32,30 @@ interface Props {
 }
 
 function kindOptions(pointFamily: boolean) {
-  return FIXTURE_KINDS.filter((k) => isPointKind(k) === pointFamily).map((k) => ({ value: k, label: `${FIXTURE_KIND_NAMES[k]} (${FIXTURE_FAMILY_NAMES[FIXTURE_FAMILY[k]]})` }));
+  return FIXTURE_KINDS.filter((k) => isPointKind(k) === pointFamily).map((k) => ({
+    value: k,
+    label: `${FIXTURE_KIND_NAMES[k]} (${FIXTURE_FAMILY_NAMES[FIXTURE_FAMILY[k]]})`,
+  }));
 }
 
 /** A text field that applies on blur or Enter, so typing is one undo step, not one per key. */
-function CommitField({ label, value, onCommit, hint, error, disabled, inputMode }: { label: string; value: string; onCommit: (v: string) => string | null; hint?: string; error?: string; disabled?: boolean; inputMode?: "decimal" | "numeric" }) {
+function CommitField({
+  label,
+  value,
+  onCommit,
+  hint,
+  error,
+  disabled,
+  inputMode,
+}: {
+  label: string;
+  value: string;
+  onCommit: (v: string) => string | null;
+  hint?: string;
+  error?: string;
+  disabled?: boolean;
+  inputMode?: "decimal" | "numeric";
+}) {
   const [text, setText] = useState(value);
   const [problem, setProblem] = useState<string | null>(null);
   useEffect(() => {
@@ -60,7 +86,11 @@ function CommitField({ label, value, onCommit, hint, error, disabled, inputMode 
 /** Edits the selected fixtures' properties; with several selected, only what they share. */
 export function PropertiesPanel({ selection, systems, preference, canEdit, apply }: Props) {
   if (selection.length === 0) {
-    return <p className="text-muted">Select a fixture on the plan or in the list to edit it. Shift-click or drag a box to select several.</p>;
+    return (
+      <p className="text-muted">
+        Select a fixture on the plan or in the list to edit it. Shift-click or drag a box to select several.
+      </p>
+    );
   }
   const ids = selection.map((f) => f.id);
   const first = selection[0];
@@ -100,10 +130,21 @@ export function PropertiesPanel({ selection, systems, preference, canEdit, apply
         label="System"
         disabled={!canEdit}
         value={systemValue}
-        options={[...(systemValue === "mixed" ? [{ value: "mixed", label: "Different systems" }] : []), { value: "", label: "No system" }, ...systems.map((s) => ({ value: s.id, label: s.name }))]}
-        onChange={(e) => e.target.value !== "mixed" && apply([setProperties(ids, { systemId: e.target.value || null })])}
+        options={[
+          ...(systemValue === "mixed" ? [{ value: "mixed", label: "Different systems" }] : []),
+          { value: "", label: "No system" },
+          ...systems.map((s) => ({ value: s.id, label: s.name })),
+        ]}
+        onChange={(e) =>
+          e.target.value !== "mixed" && apply([setProperties(ids, { systemId: e.target.value || null })])
+        }
       />
-      <Checkbox label={fansValue === null ? "Has fans (some do)" : "Has fans"} disabled={!canEdit} checked={fansValue ?? false} onChange={(e) => apply([setProperties(ids, { hasFans: e.target.checked })])} />
+      <Checkbox
+        label={fansValue === null ? "Has fans (some do)" : "Has fans"}
+        disabled={!canEdit}
+        checked={fansValue ?? false}
+        onChange={(e) => apply([setProperties(ids, { hasFans: e.target.checked })])}
+      />
       {single?.kind === "door-case" ? (
         <CommitField
           label="Door count"
@@ -118,7 +159,9 @@ export function PropertiesPanel({ selection, systems, preference, canEdit, apply
           }}
         />
       ) : null}
-      {single && "door" in single ? <DoorFields fixture={single} preference={preference} canEdit={canEdit} apply={apply} /> : null}
+      {single && "door" in single ? (
+        <DoorFields fixture={single} preference={preference} canEdit={canEdit} apply={apply} />
+      ) : null}
       {single?.kind === "benign-zone" ? (
         <>
           <CommitField
@@ -154,9 +197,22 @@ export function PropertiesPanel({ selection, systems, preference, canEdit, apply
   );
 }
 
-function DoorFields({ fixture, preference, canEdit, apply }: { fixture: Extract<Fixture, { door: RoomDoor | null }>; preference: LengthPreference; canEdit: boolean; apply: Props["apply"] }) {
+function DoorFields({
+  fixture,
+  preference,
+  canEdit,
+  apply,
+}: {
+  fixture: Extract<Fixture, { door: RoomDoor | null }>;
+  preference: LengthPreference;
+  canEdit: boolean;
+  apply: Props["apply"];
+}) {
   const door = fixture.door;
-  const edges = fixture.polygon.map((_, i) => ({ value: String(i), label: `Edge ${i + 1} (${formatLength(edgeLength(fixture.polygon, i), preference, { decimals: 2 })})` }));
+  const edges = fixture.polygon.map((_, i) => ({
+    value: String(i),
+    label: `Edge ${i + 1} (${formatLength(edgeLength(fixture.polygon, i), preference, { decimals: 2 })})`,
+  }));
   const setDoor = (next: RoomDoor | null) => apply([setProperties([fixture.id], { door: next })]);
   const parse = (v: string) => {
     const r = readLengthEntry(v, preference, { allowZero: true });
@@ -165,7 +221,9 @@ function DoorFields({ fixture, preference, canEdit, apply }: { fixture: Extract<
   return (
     <fieldset className="space-y-2 rounded-md p-3 edge">
       <legend className="px-1 font-bold">Door</legend>
-      <p className="text-sm text-muted">The room's walls block air except at its door. Until a door is marked, the room counts as sealed.</p>
+      <p className="text-sm text-muted">
+        The room's walls block air except at its door. Until a door is marked, the room counts as sealed.
+      </p>
       <Select
         label="Door on"
         disabled={!canEdit}

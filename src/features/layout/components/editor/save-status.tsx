@@ -23,7 +23,12 @@ const MARK: Record<SaveState["status"], string> = {
 export function SaveStatus({ state, onRetry }: { state: SaveState; onRetry: () => void }) {
   const bad = state.status === "invalid" || state.status === "conflict" || state.status === "failed";
   return (
-    <div role="status" aria-live="polite" data-save-status={state.status} className={`flex min-h-11 items-center gap-2 rounded-md px-3 font-bold edge ${bad ? "border-danger bg-danger-soft text-danger" : "bg-surface"}`}>
+    <div
+      role="status"
+      aria-live="polite"
+      data-save-status={state.status}
+      className={`flex min-h-11 items-center gap-2 rounded-md px-3 font-bold edge ${bad ? "border-danger bg-danger-soft text-danger" : "bg-surface"}`}
+    >
       <span aria-hidden="true">{MARK[state.status]}</span>
       <span>{TEXT[state.status]}</span>
       {state.status === "failed" ? (

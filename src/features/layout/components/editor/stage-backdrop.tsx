@@ -19,7 +19,15 @@ export function gridSpacing(metresPerScreenPixel: number, minPx = 14): number {
 }
 
 /** The drawing and the grid, on a layer that never listens to events (react-konva's advice for backgrounds). */
-export const StageBackdrop = memo(function StageBackdrop({ backdrop, plan, gridM }: { backdrop: Backdrop; plan: PlanBounds; gridM: number | null }) {
+export const StageBackdrop = memo(function StageBackdrop({
+  backdrop,
+  plan,
+  gridM,
+}: {
+  backdrop: Backdrop;
+  plan: PlanBounds;
+  gridM: number | null;
+}) {
   const k = 1 / backdrop.metresPerPixel;
   const lines: number[][] = [];
   if (gridM) {
@@ -28,7 +36,9 @@ export const StageBackdrop = memo(function StageBackdrop({ backdrop, plan, gridM
   }
   return (
     <Layer listening={false}>
-      {backdrop.image ? <KonvaImage image={backdrop.image} width={backdrop.widthPx} height={backdrop.heightPx} /> : null}
+      {backdrop.image ? (
+        <KonvaImage image={backdrop.image} width={backdrop.widthPx} height={backdrop.heightPx} />
+      ) : null}
       <Group scaleX={k} scaleY={k}>
         {backdrop.image ? null : <Rect width={plan.width} height={plan.height} fill="#ffffff" />}
         {lines.map((p, i) => (

@@ -14,14 +14,27 @@ import { ImagePointPicker } from "./image-point-picker";
 const OUTCOME_TEXT = {
   first: "The plan's scale is set.",
   rescaled: "The scale is updated and the fixtures were rescaled with it.",
-  "new-version": "Sweeps exist on this plan, so a new plan version holds the new scale; the old sweeps stay where they were.",
+  "new-version":
+    "Sweeps exist on this plan, so a new plan version holds the new scale; the old sweeps stay where they were.",
 } as const;
 
 /** Draw a line between two points of known distance on the drawing and type that distance. */
-export function CalibrationPanel({ plan, preference, onDone }: { plan: Plan; preference: LengthPreference; onDone: (plan: Plan, notice: string) => void }) {
+export function CalibrationPanel({
+  plan,
+  preference,
+  onDone,
+}: {
+  plan: Plan;
+  preference: LengthPreference;
+  onDone: (plan: Plan, notice: string) => void;
+}) {
   const image = plan.image!;
-  const [points, setPoints] = useState<ImagePoint[]>(() => (plan.calibration ? [plan.calibration.a as ImagePoint, plan.calibration.b as ImagePoint] : []));
-  const [text, setText] = useState(() => (plan.calibration ? `${plan.calibration.length.value}${plan.calibration.length.unit === "ft" ? " ft" : " m"}` : ""));
+  const [points, setPoints] = useState<ImagePoint[]>(() =>
+    plan.calibration ? [plan.calibration.a as ImagePoint, plan.calibration.b as ImagePoint] : [],
+  );
+  const [text, setText] = useState(() =>
+    plan.calibration ? `${plan.calibration.length.value}${plan.calibration.length.unit === "ft" ? " ft" : " m"}` : "",
+  );
   const [lengthError, setLengthError] = useState<string | undefined>();
   const calibrate = useCalibratePlan();
   const form = useRef<HTMLFormElement>(null);
@@ -50,7 +63,10 @@ export function CalibrationPanel({ plan, preference, onDone }: { plan: Plan; pre
     setLengthError(undefined);
     if (points.length !== 2) return;
     calibrate.mutate(
-      { planId: plan.id, input: { a: points[0], b: points[1], length: entry.length, layoutRevision: plan.layoutRevision } },
+      {
+        planId: plan.id,
+        input: { a: points[0], b: points[1], length: entry.length, layoutRevision: plan.layoutRevision },
+      },
       {
         onSuccess: (r) => onDone(r.plan, OUTCOME_TEXT[r.outcome]),
       },
@@ -64,10 +80,19 @@ export function CalibrationPanel({ plan, preference, onDone }: { plan: Plan; pre
     <form ref={form} onSubmit={submit} noValidate className="space-y-3 rounded-md bg-surface p-4 edge">
       <h3 className="text-lg font-bold">Set the scale</h3>
       <p className="max-w-prose">
-        Click both ends of something whose length you know, as long as possible — a wall, a row of cases — then type its real length. Feet and inches are fine: <code>42 ft 6 in</code>.
+        Click both ends of something whose length you know, as long as possible — a wall, a row of cases — then type its
+        real length. Feet and inches are fine: <code>42 ft 6 in</code>.
       </p>
       {formError ? <Alert tone="error">{formError}</Alert> : null}
-      <ImagePointPicker imageUrl={image.displayUrl} widthPx={image.widthPx} heightPx={image.heightPx} points={points} onChange={setPoints} names={["A", "B"]} label="Calibration line on the drawing" />
+      <ImagePointPicker
+        imageUrl={image.displayUrl}
+        widthPx={image.widthPx}
+        heightPx={image.heightPx}
+        points={points}
+        onChange={setPoints}
+        names={["A", "B"]}
+        label="Calibration line on the drawing"
+      />
       {pointError ? <p className="font-bold text-danger">{fieldMessage("The line's end", pointError)}</p> : null}
       {points.length === 2 ? (
         <p className="text-sm">
@@ -76,7 +101,11 @@ export function CalibrationPanel({ plan, preference, onDone }: { plan: Plan; pre
       ) : null}
       <TextField
         label="Real length of the line"
-        hint={preference === "ft-in" ? "In feet unless you type a unit (e.g. 40, 40 ft 6 in, 12.3 m)" : "In metres unless you type a unit (e.g. 12.5, 41 ft)"}
+        hint={
+          preference === "ft-in"
+            ? "In feet unless you type a unit (e.g. 40, 40 ft 6 in, 12.3 m)"
+            : "In metres unless you type a unit (e.g. 12.5, 41 ft)"
+        }
         value={text}
         onChange={(e) => setText(e.target.value)}
         error={lengthError ?? fields["length.value"]}

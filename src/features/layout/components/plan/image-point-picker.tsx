@@ -1,7 +1,15 @@
 import { useEffect, useRef, useState } from "react";
 import type Konva from "konva";
 import { Circle, Image as KonvaImage, Layer, Line, Stage, Text } from "react-konva";
-import { fitView, imagePoint, stagePoint, stageToImage, zoomAbout, type ImagePoint, type View } from "../../model/coordinates";
+import {
+  fitView,
+  imagePoint,
+  stagePoint,
+  stageToImage,
+  zoomAbout,
+  type ImagePoint,
+  type View,
+} from "../../model/coordinates";
 import { useHtmlImage } from "../../../../lib/use-html-image";
 import { useTwoFingerPinch } from "../../hooks/use-two-finger-pinch";
 import { Spinner } from "../../../../components/ui/spinner";
@@ -27,7 +35,17 @@ export interface PickerProps {
  * about the cursor or the fingers, dragging pans, a later click replaces the oldest point.
  * Points are display-image pixels.
  */
-export function ImagePointPicker({ imageUrl, widthPx, heightPx, points, onChange, names, joined = true, label, height = 420 }: PickerProps) {
+export function ImagePointPicker({
+  imageUrl,
+  widthPx,
+  heightPx,
+  points,
+  onChange,
+  names,
+  joined = true,
+  label,
+  height = 420,
+}: PickerProps) {
   const image = useHtmlImage(imageUrl);
   const box = useRef<HTMLDivElement>(null);
   const [width, setWidth] = useState(640);
@@ -40,20 +58,25 @@ export function ImagePointPicker({ imageUrl, widthPx, heightPx, points, onChange
   // Pinch to zoom (and two-finger pan) on a tablet, where there is no wheel; the first finger has
   // started dragging the stage by the time the second lands.
   const pinchNow = useRef(false);
-  useTwoFingerPinch(() => stageRef.current?.container(), pinchNow, {
-    onStart: () => {
-      pinched.current = true;
-      const stage = stageRef.current;
-      if (stage?.isDragging()) stage.stopDrag();
-      stage?.draggable(false);
+  useTwoFingerPinch(
+    () => stageRef.current?.container(),
+    pinchNow,
+    {
+      onStart: () => {
+        pinched.current = true;
+        const stage = stageRef.current;
+        if (stage?.isDragging()) stage.stopDrag();
+        stage?.draggable(false);
+      },
+      onEnd: () => stageRef.current?.draggable(true),
+      onPinch: ({ factor, centre, dx, dy }) =>
+        setView((v) => {
+          const z = zoomAbout(v, stagePoint(centre.x, centre.y), factor);
+          return { ...z, panX: z.panX + dx, panY: z.panY + dy };
+        }),
     },
-    onEnd: () => stageRef.current?.draggable(true),
-    onPinch: ({ factor, centre, dx, dy }) =>
-      setView((v) => {
-        const z = zoomAbout(v, stagePoint(centre.x, centre.y), factor);
-        return { ...z, panX: z.panX + dx, panY: z.panY + dy };
-      }),
-  }, [loaded]);
+    [loaded],
+  );
 
   useEffect(() => {
     const el = box.current;
@@ -120,13 +143,35 @@ export function ImagePointPicker({ imageUrl, widthPx, heightPx, points, onChange
             </Layer>
             <Layer listening={false}>
               {joined && points.length === 2 ? (
-                <Line points={[points[0].x, points[0].y, points[1].x, points[1].y]} stroke="#b3261e" strokeWidth={3 / view.zoom} dash={[10 / view.zoom, 6 / view.zoom]} />
+                <Line
+                  points={[points[0].x, points[0].y, points[1].x, points[1].y]}
+                  stroke="#b3261e"
+                  strokeWidth={3 / view.zoom}
+                  dash={[10 / view.zoom, 6 / view.zoom]}
+                />
               ) : null}
               {points.map((p, i) => (
-                <Circle key={i} x={p.x} y={p.y} radius={r} stroke="#b3261e" strokeWidth={3 / view.zoom} fill="rgba(255,255,255,0.6)" />
+                <Circle
+                  key={i}
+                  x={p.x}
+                  y={p.y}
+                  radius={r}
+                  stroke="#b3261e"
+                  strokeWidth={3 / view.zoom}
+                  fill="rgba(255,255,255,0.6)"
+                />
               ))}
               {points.map((p, i) => (
-                <Text key={`t${i}`} x={p.x + r * 1.4} y={p.y - r * 2.6} text={names[i]} fontSize={18 / view.zoom} fontStyle="bold" fill="#b3261e" fontFamily="Atkinson Hyperlegible" />
+                <Text
+                  key={`t${i}`}
+                  x={p.x + r * 1.4}
+                  y={p.y - r * 2.6}
+                  text={names[i]}
+                  fontSize={18 / view.zoom}
+                  fontStyle="bold"
+                  fill="#b3261e"
+                  fontFamily="Atkinson Hyperlegible"
+                />
               ))}
             </Layer>
           </Stage>
@@ -137,10 +182,18 @@ export function ImagePointPicker({ imageUrl, widthPx, heightPx, points, onChange
         <Button variant="secondary" onClick={() => setView(fitView(widthPx, heightPx, width, height))}>
           Fit drawing
         </Button>
-        <Button variant="secondary" onClick={() => setView((v) => zoomAbout(v, stagePoint(width / 2, height / 2), 1.5))} aria-label="Zoom in">
+        <Button
+          variant="secondary"
+          onClick={() => setView((v) => zoomAbout(v, stagePoint(width / 2, height / 2), 1.5))}
+          aria-label="Zoom in"
+        >
           +
         </Button>
-        <Button variant="secondary" onClick={() => setView((v) => zoomAbout(v, stagePoint(width / 2, height / 2), 1 / 1.5))} aria-label="Zoom out">
+        <Button
+          variant="secondary"
+          onClick={() => setView((v) => zoomAbout(v, stagePoint(width / 2, height / 2), 1 / 1.5))}
+          aria-label="Zoom out"
+        >
           −
         </Button>
         {points.length > 0 ? (

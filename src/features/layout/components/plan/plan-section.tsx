@@ -19,7 +19,15 @@ const THUMB_WIDTH = 320;
 type Panel = "upload" | "calibrate" | "align" | null;
 
 /** The store page's plan: the current version, its scale, and the ways to change it. */
-export function PlanSection({ storeId, canEdit, preference }: { storeId: string; canEdit: boolean; preference: LengthPreference }) {
+export function PlanSection({
+  storeId,
+  canEdit,
+  preference,
+}: {
+  storeId: string;
+  canEdit: boolean;
+  preference: LengthPreference;
+}) {
   const plans = usePlans(storeId);
   const [panel, setPanel] = useState<Panel>(null);
   const [notice, setNotice] = useState<string | null>(null);
@@ -53,29 +61,59 @@ export function PlanSection({ storeId, canEdit, preference }: { storeId: string;
           <PlanCard plan={current} preference={preference} />
           <div className="flex flex-wrap gap-2">
             {current.calibrated ? (
-              <Link to={`/stores/${storeId}/plans/${current.id}/layout`} className="inline-flex min-h-11 items-center rounded-md bg-accent px-4 py-2 font-bold text-on-accent no-underline edge border-accent hover:bg-accent-strong">
+              <Link
+                to={`/stores/${storeId}/plans/${current.id}/layout`}
+                className="inline-flex min-h-11 items-center rounded-md bg-accent px-4 py-2 font-bold text-on-accent no-underline edge border-accent hover:bg-accent-strong"
+              >
                 {canEdit ? "Open the layout editor" : "View the layout"}
               </Link>
             ) : null}
             {canEdit && current.image ? (
-              <Button variant="secondary" aria-expanded={panel === "calibrate"} onClick={() => setPanel(panel === "calibrate" ? null : "calibrate")}>
+              <Button
+                variant="secondary"
+                aria-expanded={panel === "calibrate"}
+                onClick={() => setPanel(panel === "calibrate" ? null : "calibrate")}
+              >
                 {current.calibrated ? "Re-calibrate the scale" : "Set the scale"}
               </Button>
             ) : null}
             {canEdit && current.previousPlanId && current.image ? (
-              <Button variant="secondary" aria-expanded={panel === "align"} onClick={() => setPanel(panel === "align" ? null : "align")}>
+              <Button
+                variant="secondary"
+                aria-expanded={panel === "align"}
+                onClick={() => setPanel(panel === "align" ? null : "align")}
+              >
                 Match to the previous version
               </Button>
             ) : null}
             {canEdit ? (
-              <Button variant="secondary" aria-expanded={panel === "upload"} onClick={() => setPanel(panel === "upload" ? null : "upload")}>
+              <Button
+                variant="secondary"
+                aria-expanded={panel === "upload"}
+                onClick={() => setPanel(panel === "upload" ? null : "upload")}
+              >
                 Upload a new drawing
               </Button>
             ) : null}
           </div>
-          {panel === "calibrate" && current.image ? <CalibrationPanel key={current.id} plan={current} preference={preference} onDone={after} /> : null}
-          {panel === "align" ? <AlignmentPanel key={current.id} plan={current} onDone={(p) => after(p, "The new version is matched to the previous one.")} /> : null}
-          {panel === "upload" ? <PlanUploadForm storeId={storeId} hasPlan preference={preference} onDone={(p) => after(p, `Version ${p.version} is uploaded; the fixtures were copied onto it.`)} /> : null}
+          {panel === "calibrate" && current.image ? (
+            <CalibrationPanel key={current.id} plan={current} preference={preference} onDone={after} />
+          ) : null}
+          {panel === "align" ? (
+            <AlignmentPanel
+              key={current.id}
+              plan={current}
+              onDone={(p) => after(p, "The new version is matched to the previous one.")}
+            />
+          ) : null}
+          {panel === "upload" ? (
+            <PlanUploadForm
+              storeId={storeId}
+              hasPlan
+              preference={preference}
+              onDone={(p) => after(p, `Version ${p.version} is uploaded; the fixtures were copied onto it.`)}
+            />
+          ) : null}
           {plans.data && plans.data.length > 1 ? <VersionList plans={plans.data} /> : null}
         </>
       ) : null}
@@ -91,9 +129,20 @@ function PlanCard({ plan, preference }: { plan: Plan; preference: LengthPreferen
     <div className="flex flex-wrap gap-4 rounded-md bg-surface p-4 edge">
       <div style={{ width: THUMB_WIDTH }} className="shrink-0">
         {plan.image ? (
-          <img src={plan.image.thumbUrl} alt={`Floor plan, version ${plan.version}`} width={THUMB_WIDTH} height={Math.round(THUMB_WIDTH * aspect)} className="block w-full rounded edge" />
+          <img
+            src={plan.image.thumbUrl}
+            alt={`Floor plan, version ${plan.version}`}
+            width={THUMB_WIDTH}
+            height={Math.round(THUMB_WIDTH * aspect)}
+            className="block w-full rounded edge"
+          />
         ) : (
-          <div role="img" aria-label={`Blank plan, version ${plan.version}`} className="w-full rounded bg-paper edge" style={{ height: Math.round(THUMB_WIDTH * aspect) }} />
+          <div
+            role="img"
+            aria-label={`Blank plan, version ${plan.version}`}
+            className="w-full rounded bg-paper edge"
+            style={{ height: Math.round(THUMB_WIDTH * aspect) }}
+          />
         )}
         {w ? (
           <div className="mt-2">
@@ -108,11 +157,13 @@ function PlanCard({ plan, preference }: { plan: Plan; preference: LengthPreferen
         </dd>
         <dt className="font-bold">Scale</dt>
         <dd>
-          {plan.source === "blank"
-            ? "Drawn to size"
-            : plan.calibrated && plan.metresPerPixel
-              ? `Calibrated: ${(plan.metresPerPixel * 100).toFixed(3)} cm per pixel`
-              : <span className="font-bold text-note">Not calibrated yet — set the scale before drawing fixtures</span>}
+          {plan.source === "blank" ? (
+            "Drawn to size"
+          ) : plan.calibrated && plan.metresPerPixel ? (
+            `Calibrated: ${(plan.metresPerPixel * 100).toFixed(3)} cm per pixel`
+          ) : (
+            <span className="font-bold text-note">Not calibrated yet — set the scale before drawing fixtures</span>
+          )}
         </dd>
         {w && h ? (
           <>
@@ -127,7 +178,13 @@ function PlanCard({ plan, preference }: { plan: Plan; preference: LengthPreferen
         {plan.previousPlanId ? (
           <>
             <dt className="font-bold">Match to previous</dt>
-            <dd>{plan.alignmentMatched ? "Matched by two points" : <span className="font-bold text-note">Not matched yet</span>}</dd>
+            <dd>
+              {plan.alignmentMatched ? (
+                "Matched by two points"
+              ) : (
+                <span className="font-bold text-note">Not matched yet</span>
+              )}
+            </dd>
           </>
         ) : null}
       </dl>
@@ -147,7 +204,8 @@ function VersionList({ plans }: { plans: readonly Plan[] }) {
       <ul className="mt-2 space-y-1">
         {plans.map((p) => (
           <li key={p.id}>
-            Version {p.version}: {p.source === "blank" ? "blank plan" : "drawing"}, {formatDate(p.createdAt)}, {p.fixtureCount} fixtures
+            Version {p.version}: {p.source === "blank" ? "blank plan" : "drawing"}, {formatDate(p.createdAt)},{" "}
+            {p.fixtureCount} fixtures
             {p.calibrated ? "" : ", not calibrated"}
             {p === plans[0] ? " — current" : ""}
           </li>

@@ -12,7 +12,17 @@ import { readLengthEntry } from "../../model/length-entry";
 import { toMetres } from "#core/analysis/geometry/units";
 
 /** Upload a drawing (PNG or JPEG), or start from a blank plan of a given size. */
-export function PlanUploadForm({ storeId, hasPlan, preference, onDone }: { storeId: string; hasPlan: boolean; preference: LengthPreference; onDone: (plan: Plan) => void }) {
+export function PlanUploadForm({
+  storeId,
+  hasPlan,
+  preference,
+  onDone,
+}: {
+  storeId: string;
+  hasPlan: boolean;
+  preference: LengthPreference;
+  onDone: (plan: Plan) => void;
+}) {
   const fileId = useId();
   const [file, setFile] = useState<File | null>(null);
   const [typeError, setTypeError] = useState<string | null>(null);
@@ -30,7 +40,11 @@ export function PlanUploadForm({ storeId, hasPlan, preference, onDone }: { store
   function pick(f: File | null) {
     setFile(f);
     upload.reset();
-    setTypeError(f && !(PLAN_IMAGE_TYPES as readonly string[]).includes(f.type) ? `“${f.name}” does not look like a PNG or JPEG; the server will check its content.` : null);
+    setTypeError(
+      f && !(PLAN_IMAGE_TYPES as readonly string[]).includes(f.type)
+        ? `“${f.name}” does not look like a PNG or JPEG; the server will check its content.`
+        : null,
+    );
   }
 
   const uploadError = formErrorMessage(upload.error);
@@ -39,7 +53,10 @@ export function PlanUploadForm({ storeId, hasPlan, preference, onDone }: { store
       <form onSubmit={submit} noValidate className="space-y-3 rounded-md bg-surface p-4 edge">
         <h3 className="text-lg font-bold">{hasPlan ? "Upload a new drawing" : "Upload the floor plan"}</h3>
         <p className="text-muted">
-          A PNG or JPEG of up to 25 MB.{hasPlan ? " It becomes a new plan version: the fixtures are copied onto it and the old version and its sweeps stay as they are." : ""}
+          A PNG or JPEG of up to 25 MB.
+          {hasPlan
+            ? " It becomes a new plan version: the fixtures are copied onto it and the old version and its sweeps stay as they are."
+            : ""}
         </p>
         <div>
           <label htmlFor={fileId} className="block font-bold">
@@ -73,7 +90,15 @@ export function PlanUploadForm({ storeId, hasPlan, preference, onDone }: { store
   );
 }
 
-function BlankPlanForm({ storeId, preference, onDone }: { storeId: string; preference: LengthPreference; onDone: (plan: Plan) => void }) {
+function BlankPlanForm({
+  storeId,
+  preference,
+  onDone,
+}: {
+  storeId: string;
+  preference: LengthPreference;
+  onDone: (plan: Plan) => void;
+}) {
   const [width, setWidth] = useState("");
   const [depth, setDepth] = useState("");
   const [errors, setErrors] = useState<Record<string, string>>({});
@@ -93,7 +118,11 @@ function BlankPlanForm({ storeId, preference, onDone }: { storeId: string; prefe
     const same = w.length.unit === d.length.unit;
     const input = same
       ? { width: w.length.value, depth: d.length.value, unit: w.length.unit }
-      : { width: toMetres(w.length.value, w.length.unit), depth: toMetres(d.length.value, d.length.unit), unit: "m" as const };
+      : {
+          width: toMetres(w.length.value, w.length.unit),
+          depth: toMetres(d.length.value, d.length.unit),
+          unit: "m" as const,
+        };
     create.mutate({ storeId, input }, { onSuccess: (saved) => onDone(saved) });
   }
 
@@ -102,11 +131,26 @@ function BlankPlanForm({ storeId, preference, onDone }: { storeId: string; prefe
   return (
     <form onSubmit={submit} noValidate className="space-y-3 rounded-md bg-surface p-4 edge">
       <h3 className="text-lg font-bold">Or start from a blank plan</h3>
-      <p className="text-muted">When there is no drawing: give the sales floor's width and depth ({unitWord} unless you type a unit) and draw the fixtures on a grid.</p>
+      <p className="text-muted">
+        When there is no drawing: give the sales floor's width and depth ({unitWord} unless you type a unit) and draw
+        the fixtures on a grid.
+      </p>
       {formError ? <Alert tone="error">{formError}</Alert> : null}
       <div className="flex flex-wrap gap-3">
-        <TextField label="Width" value={width} onChange={(e) => setWidth(e.target.value)} error={errors.width ?? server.width} className="w-40" />
-        <TextField label="Depth" value={depth} onChange={(e) => setDepth(e.target.value)} error={errors.depth ?? server.depth} className="w-40" />
+        <TextField
+          label="Width"
+          value={width}
+          onChange={(e) => setWidth(e.target.value)}
+          error={errors.width ?? server.width}
+          className="w-40"
+        />
+        <TextField
+          label="Depth"
+          value={depth}
+          onChange={(e) => setDepth(e.target.value)}
+          error={errors.depth ?? server.depth}
+          className="w-40"
+        />
       </div>
       <Button type="submit" variant="secondary" busy={create.isPending}>
         Create blank plan

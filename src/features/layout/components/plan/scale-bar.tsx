@@ -5,7 +5,15 @@ import { pickScaleBar } from "../../model/calibration";
  * A graduated bar of a round length (1-2-5 series) for a plan drawn at `metresPerScreenPixel`;
  * drawn in black and white, with the length in words, so it reads in high contrast too.
  */
-export function ScaleBar({ metresPerScreenPixel, maxPixels = 160, preference }: { metresPerScreenPixel: number; maxPixels?: number; preference: LengthPreference }) {
+export function ScaleBar({
+  metresPerScreenPixel,
+  maxPixels = 160,
+  preference,
+}: {
+  metresPerScreenPixel: number;
+  maxPixels?: number;
+  preference: LengthPreference;
+}) {
   const bar = pickScaleBar(metresPerScreenPixel, maxPixels, preference === "ft-in" ? "ft" : "m");
   const w = Math.max(1, Math.round(bar.pixels));
   const label = `${bar.value} ${bar.unit}`;

@@ -17,16 +17,42 @@ describe("the active tool", () => {
     for (const e of [down(1, 1), moveTo(3, 2)]) s = runTool(rect, s, e, ctx).state;
     const r = runTool(rect, s, up(3, 2), ctx);
     expect(r.actions).toHaveLength(1);
-    expect(r.actions[0]).toMatchObject({ type: "add", fixtures: [{ kind: "checkout", polygon: [[1, 1], [3, 1], [3, 2], [1, 2]] }] });
+    expect(r.actions[0]).toMatchObject({
+      type: "add",
+      fixtures: [
+        {
+          kind: "checkout",
+          polygon: [
+            [1, 1],
+            [3, 1],
+            [3, 2],
+            [1, 2],
+          ],
+        },
+      ],
+    });
     expect(runTool({ tool: "pan" }, idleState({ tool: "pan" }), down(1, 1), ctx).actions).toEqual([]);
   });
   it("hands corner drags to the vertex tool", () => {
-    const scene = applyActions(createScene({ width: 40, height: 20 }, [openCase(1, rect(2, 2, 4, 1))]), [select([uuid(1)])]);
+    const scene = applyActions(createScene({ width: 40, height: 20 }, [openCase(1, rect(2, 2, 4, 1))]), [
+      select([uuid(1)]),
+    ]);
     const ctx = plainContext(scene);
     const tool = { tool: "vertex" } as const;
     let s = idleState(tool);
     for (const e of [down(6, 3), moveTo(7, 3.5)]) s = runTool(tool, s, e, ctx).state;
     const r = runTool(tool, s, up(7, 3.5), ctx);
-    expect(r.actions).toEqual([{ type: "set-vertices", id: uuid(1), polygon: [[2, 2], [6, 2], [7, 3.5], [2, 3]] }]);
+    expect(r.actions).toEqual([
+      {
+        type: "set-vertices",
+        id: uuid(1),
+        polygon: [
+          [2, 2],
+          [6, 2],
+          [7, 3.5],
+          [2, 3],
+        ],
+      },
+    ]);
   });
 });

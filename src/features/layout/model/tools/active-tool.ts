@@ -42,7 +42,12 @@ export function drawTool(kind: FixtureKind, shape: "rectangle" | "polygon"): Act
   return { tool: shape, kind };
 }
 
-export function runTool(active: ActiveTool, state: AnyToolState, event: ToolEvent, ctx: ToolContext): ToolResult<AnyToolState> {
+export function runTool(
+  active: ActiveTool,
+  state: AnyToolState,
+  event: ToolEvent,
+  ctx: ToolContext,
+): ToolResult<AnyToolState> {
   switch (active.tool) {
     case "pan":
       return result(state);

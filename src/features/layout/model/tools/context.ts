@@ -20,7 +20,11 @@ export interface ToolSettings {
 export function toolContext(scene: Scene, settings: ToolSettings, newId: () => string): ToolContext {
   const all = sceneFixtures(scene);
   const others = (ids: readonly string[]) => (settings.snapToFixtures ? all.filter((f) => !ids.includes(f.id)) : []);
-  const snapOptions = (ids: readonly string[]) => ({ gridM: settings.gridM, toleranceM: settings.toleranceM, targets: others(ids) });
+  const snapOptions = (ids: readonly string[]) => ({
+    gridM: settings.gridM,
+    toleranceM: settings.toleranceM,
+    targets: others(ids),
+  });
   return {
     scene,
     newId,

@@ -7,7 +7,12 @@ import { result, type ToolContext, type ToolEvent, type ToolResult } from "./too
 export type PointToolState = { phase: "idle" };
 export const POINT_IDLE: PointToolState = { phase: "idle" };
 
-export function pointTool(kind: PointKind, state: PointToolState, event: ToolEvent, ctx: ToolContext): ToolResult<PointToolState> {
+export function pointTool(
+  kind: PointKind,
+  state: PointToolState,
+  event: ToolEvent,
+  ctx: ToolContext,
+): ToolResult<PointToolState> {
   if (event.type !== "pointer-down") return result(state);
   const p = ctx.snap(event.point);
   if (p.x < 0 || p.y < 0 || p.x > ctx.scene.plan.width || p.y > ctx.scene.plan.height) {

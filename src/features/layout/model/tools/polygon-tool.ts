@@ -19,13 +19,19 @@ export const POLYGON_IDLE: PolygonToolState = { phase: "idle" };
 type R = ToolResult<PolygonToolState>;
 
 function placing(vertices: readonly PlanPoint[], hover: PlanPoint | null, message: string | null = null): R {
-  return result({ phase: "placing", vertices, hover }, [], { kind: "outline", vertices, closed: false, hover }, message);
+  return result(
+    { phase: "placing", vertices, hover },
+    [],
+    { kind: "outline", vertices, closed: false, hover },
+    message,
+  );
 }
 
 function close(kind: FixtureKind, vertices: readonly PlanPoint[], hover: PlanPoint | null, ctx: ToolContext): R {
   if (vertices.length < 3) return placing(vertices, hover, "An outline needs at least 3 corners.");
   const polygon = vertices.map((v): [number, number] => [v.x, v.y]);
-  if (isSelfIntersecting(polygon)) return placing(vertices, hover, "The outline's edges cross; move or remove the last corner (Backspace).");
+  if (isSelfIntersecting(polygon))
+    return placing(vertices, hover, "The outline's edges cross; move or remove the last corner (Backspace).");
   return result(POLYGON_IDLE, [add([newFixture(kind, ctx.newId(), { polygon })])]);
 }
 
@@ -38,7 +44,8 @@ export function polygonTool(kind: FixtureKind, state: PolygonToolState, event: T
     case "key":
       if (event.key === "Escape") return result(POLYGON_IDLE);
       if (event.key === "Enter") return close(kind, vertices, hover, ctx);
-      if (event.key === "Backspace") return vertices.length > 1 ? placing(vertices.slice(0, -1), hover) : result(POLYGON_IDLE);
+      if (event.key === "Backspace")
+        return vertices.length > 1 ? placing(vertices.slice(0, -1), hover) : result(POLYGON_IDLE);
       return placing(vertices, hover);
     case "double-click":
       // The browser sends two presses first; the second landed on the last vertex and was ignored.
@@ -49,7 +56,8 @@ export function polygonTool(kind: FixtureKind, state: PolygonToolState, event: T
       return placing(vertices, hover);
     case "pointer-down": {
       const p = ctx.snap(event.point);
-      if (vertices.length >= 3 && distance(p, vertices[0]) <= ctx.pickToleranceM) return close(kind, vertices, hover, ctx);
+      if (vertices.length >= 3 && distance(p, vertices[0]) <= ctx.pickToleranceM)
+        return close(kind, vertices, hover, ctx);
       // A press on (or within a drag's wobble of) the last corner adds nothing: the second tap
       // of a double-tap on a tablet lands a few pixels off the first.
       if (distance(p, vertices[vertices.length - 1]) <= Math.max(1e-9, ctx.dragThresholdM)) return placing(vertices, p);

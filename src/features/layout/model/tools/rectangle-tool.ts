@@ -18,10 +18,20 @@ export const RECTANGLE_IDLE: RectangleToolState = { phase: "idle" };
 
 function corners(a: PlanPoint, b: PlanPoint): PlanPoint[] {
   const box = boxOf(a, b);
-  return [planPoint(box.minX, box.minY), planPoint(box.maxX, box.minY), planPoint(box.maxX, box.maxY), planPoint(box.minX, box.maxY)];
+  return [
+    planPoint(box.minX, box.minY),
+    planPoint(box.maxX, box.minY),
+    planPoint(box.maxX, box.maxY),
+    planPoint(box.minX, box.maxY),
+  ];
 }
 
-export function rectangleTool(kind: FixtureKind, state: RectangleToolState, event: ToolEvent, ctx: ToolContext): ToolResult<RectangleToolState> {
+export function rectangleTool(
+  kind: FixtureKind,
+  state: RectangleToolState,
+  event: ToolEvent,
+  ctx: ToolContext,
+): ToolResult<RectangleToolState> {
   if (event.type === "key") return event.key === "Escape" ? result(RECTANGLE_IDLE) : result(state, [], preview(state));
   if (event.type === "double-click") return result(state, [], preview(state));
   const p = ctx.snap(event.point);
@@ -49,5 +59,7 @@ export function rectangleTool(kind: FixtureKind, state: RectangleToolState, even
 }
 
 function preview(state: RectangleToolState) {
-  return state.phase === "dragging" ? { kind: "outline" as const, vertices: corners(state.start, state.current), closed: true, hover: null } : null;
+  return state.phase === "dragging"
+    ? { kind: "outline" as const, vertices: corners(state.start, state.current), closed: true, hover: null }
+    : null;
 }

@@ -6,7 +6,12 @@ import { toolContext } from "./context";
 import { SELECT_IDLE, selectTool } from "./select-tool";
 import { down, drive, key, moveTo, plainContext, up } from "./test-drive";
 
-const scene = () => createScene({ width: 40, height: 20 }, [openCase(1, rect(2, 2, 2.4, 1)), openCase(2, rect(8, 2, 2.4, 1)), valve(3, 15, 10)]);
+const scene = () =>
+  createScene({ width: 40, height: 20 }, [
+    openCase(1, rect(2, 2, 2.4, 1)),
+    openCase(2, rect(8, 2, 2.4, 1)),
+    valve(3, 15, 10),
+  ]);
 
 describe("select tool", () => {
   it("selects on press and moves the selection by one action on release", () => {
@@ -25,7 +30,11 @@ describe("select tool", () => {
     let s = scene();
     s = { ...s, selection: [uuid(1), uuid(2)] };
     // Grid of 0.5 m: a drag of 1.2 m puts the selection's left edge (x = 2) at 3.0.
-    const ctx = toolContext(s, { gridM: 0.5, snapToFixtures: true, toleranceM: 0.1, dragThresholdM: 0.05 }, () => "unused");
+    const ctx = toolContext(
+      s,
+      { gridM: 0.5, snapToFixtures: true, toleranceM: 0.1, dragThresholdM: 0.05 },
+      () => "unused",
+    );
     const r = drive(selectTool, SELECT_IDLE, [down(9, 2.5), moveTo(10.2, 2.5), up(10.2, 2.5)], ctx);
     expect(r.actions).toEqual([{ type: "move", ids: [uuid(1), uuid(2)], dx: 1, dy: 0 }]);
   });

@@ -34,7 +34,11 @@ function pressed(point: PlanPoint, shift: boolean, ctx: ToolContext): R {
   return result({ phase: "pressing", start: point, ids: [hit] }, [select([hit])]);
 }
 
-function moving(state: { start: PlanPoint; ids: readonly string[] }, point: PlanPoint, ctx: ToolContext): SelectToolState & { phase: "moving" } {
+function moving(
+  state: { start: PlanPoint; ids: readonly string[] },
+  point: PlanPoint,
+  ctx: ToolContext,
+): SelectToolState & { phase: "moving" } {
   const { dx, dy } = ctx.snapMove(state.ids, point.x - state.start.x, point.y - state.start.y);
   return { phase: "moving", start: state.start, ids: state.ids, dx, dy };
 }
@@ -42,7 +46,11 @@ function moving(state: { start: PlanPoint; ids: readonly string[] }, point: Plan
 export function selectTool(state: SelectToolState, event: ToolEvent, ctx: ToolContext): R {
   if (event.type === "key") {
     if (event.key === "Escape") return state.phase === "idle" ? result(state, [select([])]) : result(SELECT_IDLE);
-    if ((event.key === "Delete" || event.key === "Backspace") && state.phase === "idle" && ctx.scene.selection.length > 0) {
+    if (
+      (event.key === "Delete" || event.key === "Backspace") &&
+      state.phase === "idle" &&
+      ctx.scene.selection.length > 0
+    ) {
       return result(state, [remove(ctx.scene.selection)]);
     }
     return result(state);
@@ -53,14 +61,19 @@ export function selectTool(state: SelectToolState, event: ToolEvent, ctx: ToolCo
       return event.type === "pointer-down" ? pressed(event.point, event.shift ?? false, ctx) : result(state);
     case "pressing":
       if (event.type === "pointer-up") return result(SELECT_IDLE);
-      if (event.type === "pointer-move" && distance(event.point, state.start) > ctx.dragThresholdM && state.ids.length > 0) {
+      if (
+        event.type === "pointer-move" &&
+        distance(event.point, state.start) > ctx.dragThresholdM &&
+        state.ids.length > 0
+      ) {
         const next = moving(state, event.point, ctx);
         return result(next, [], { kind: "move", ids: next.ids, dx: next.dx, dy: next.dy });
       }
       return result(state);
     case "moving": {
       const next = moving(state, event.point, ctx);
-      if (event.type === "pointer-up") return result(SELECT_IDLE, next.dx === 0 && next.dy === 0 ? [] : [move(next.ids, next.dx, next.dy)]);
+      if (event.type === "pointer-up")
+        return result(SELECT_IDLE, next.dx === 0 && next.dy === 0 ? [] : [move(next.ids, next.dx, next.dy)]);
       return result(next, [], { kind: "move", ids: next.ids, dx: next.dx, dy: next.dy });
     }
     case "marquee": {

@@ -43,7 +43,12 @@ export interface ToolContext {
   pickToleranceM: number;
 }
 
-export function result<S>(state: S, actions: SceneAction[] = [], preview: ToolPreview | null = null, message: string | null = null): ToolResult<S> {
+export function result<S>(
+  state: S,
+  actions: SceneAction[] = [],
+  preview: ToolPreview | null = null,
+  message: string | null = null,
+): ToolResult<S> {
   return { state, actions, preview, message };
 }
 

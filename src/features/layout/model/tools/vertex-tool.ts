@@ -29,7 +29,13 @@ function outline(polygon: readonly Vertex[]) {
 }
 
 function commit(f: PolygonFixture, polygon: Vertex[], active: { id: string; index: number } | null): R {
-  if (isSelfIntersecting(polygon)) return result({ phase: "idle", active }, [], null, "That would make the outline's edges cross; the corner was put back.");
+  if (isSelfIntersecting(polygon))
+    return result(
+      { phase: "idle", active },
+      [],
+      null,
+      "That would make the outline's edges cross; the corner was put back.",
+    );
   return result({ phase: "idle", active }, [setVertices(f.id, polygon)]);
 }
 
@@ -53,12 +59,16 @@ export function vertexTool(state: VertexToolState, event: ToolEvent, ctx: ToolCo
   const f = target(ctx);
   if (!f) return result(VERTEX_IDLE);
   if (state.phase === "dragging") {
-    if (event.type === "key") return event.key === "Escape" ? result({ phase: "idle", active: { id: state.id, index: state.index } }) : result(state);
+    if (event.type === "key")
+      return event.key === "Escape"
+        ? result({ phase: "idle", active: { id: state.id, index: state.index } })
+        : result(state);
     if (event.type === "double-click") return result(state);
     // A press that never travels past the drag threshold only picks the corner (for Delete).
     const moved = state.moved || distance(event.point, state.start) > ctx.dragThresholdM;
     const active = { id: f.id, index: state.index };
-    if (!moved) return event.type === "pointer-up" ? result({ phase: "idle", active }) : result(state, [], outline(f.polygon));
+    if (!moved)
+      return event.type === "pointer-up" ? result({ phase: "idle", active }) : result(state, [], outline(f.polygon));
     const current = ctx.snap(event.point, [f.id]);
     const polygon = f.polygon.map((v, i): Vertex => (i === state.index ? [current.x, current.y] : [v[0], v[1]]));
     if (event.type === "pointer-up") return commit(f, polygon, active);
@@ -86,7 +96,11 @@ export function vertexTool(state: VertexToolState, event: ToolEvent, ctx: ToolCo
       const { active } = state;
       if ((event.key !== "Delete" && event.key !== "Backspace") || !active || active.id !== f.id) return result(state);
       if (f.polygon.length <= 3) return result(state, [], null, "An outline needs at least 3 corners.");
-      return commit(f, f.polygon.filter((_, i) => i !== active.index).map((v): Vertex => [v[0], v[1]]), null);
+      return commit(
+        f,
+        f.polygon.filter((_, i) => i !== active.index).map((v): Vertex => [v[0], v[1]]),
+        null,
+      );
     }
     default:
       return result(state);
