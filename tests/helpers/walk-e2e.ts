@@ -12,17 +12,15 @@ export async function mapStoreForWalk(
   await ctx.db.transaction((tx) => seedDemoLayout(ctx, tx, ids));
   const today = new Date().toISOString().slice(0, 10);
   // 5 s transport delay and 2 ppm alarm: common practice, no published source.
-  await ctx.db
-    .insert(detectors)
-    .values({
-      companyId: ids.companyId,
-      name: "Test diode sniffer",
-      principle: "heated-diode",
-      transportDelayS: 5,
-      timeConstantS: 1.5,
-      alarmPpm: 2,
-      lastCheckedOn: today,
-    });
+  await ctx.db.insert(detectors).values({
+    companyId: ids.companyId,
+    name: "Test diode sniffer",
+    principle: "heated-diode",
+    transportDelayS: 5,
+    timeConstantS: 1.5,
+    alarmPpm: 2,
+    lastCheckedOn: today,
+  });
 }
 
 /** Screen point of plan metres (x, y) on the Walk screen, from the view the plan reports. */

@@ -355,16 +355,14 @@ export async function addLeakCheck(
 ) {
   const { store } = await visibleSystem(ctx, viewer, systemId);
   const checkedOn = eventDay(input.checkedOn, store, "checkedOn");
-  await ctx.db
-    .insert(leakChecks)
-    .values({
-      companyId: viewer.companyId,
-      systemId,
-      checkedOn,
-      leakFound: input.leakFound,
-      note: input.note,
-      byId: userId,
-    });
+  await ctx.db.insert(leakChecks).values({
+    companyId: viewer.companyId,
+    systemId,
+    checkedOn,
+    leakFound: input.leakFound,
+    note: input.note,
+    byId: userId,
+  });
   return getSystemRecords(ctx, viewer, systemId);
 }
 

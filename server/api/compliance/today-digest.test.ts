@@ -54,14 +54,12 @@ beforeAll(async () => {
   findingId = (
     await tech.post(`/api/stores/${co.store.id}/findings`, { systemId, status: "confirmed", component: "coil" })
   ).body.id;
-  await t.ctx.db
-    .insert(detectors)
-    .values({
-      companyId: co.company.id,
-      name: "Heated-diode sniffer",
-      principle: "heated-diode",
-      lastCheckedOn: daysBefore(today, 28),
-    });
+  await t.ctx.db.insert(detectors).values({
+    companyId: co.company.id,
+    name: "Heated-diode sniffer",
+    principle: "heated-diode",
+    lastCheckedOn: daysBefore(today, 28),
+  });
 });
 afterAll(() => t.close());
 

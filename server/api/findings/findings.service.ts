@@ -156,29 +156,25 @@ export async function createFinding(
       .onConflictDoNothing({ target: [findings.companyId, findings.clientId] })
       .returning({ id: findings.id });
     if (!row) return null; // a concurrent retry with the same clientId won
-    await tx
-      .insert(findingEvents)
-      .values({
-        findingId: row.id,
-        kind: "found",
-        status: "suspected",
-        on,
-        at: foundAt,
-        byId: userId,
-        note: input.note,
-      });
+    await tx.insert(findingEvents).values({
+      findingId: row.id,
+      kind: "found",
+      status: "suspected",
+      on,
+      at: foundAt,
+      byId: userId,
+      note: input.note,
+    });
     if (input.status === "confirmed")
-      await tx
-        .insert(findingEvents)
-        .values({
-          findingId: row.id,
-          kind: "confirmed",
-          status: "confirmed",
-          on,
-          at: new Date(foundAt.getTime() + 1),
-          byId: userId,
-          note: "",
-        });
+      await tx.insert(findingEvents).values({
+        findingId: row.id,
+        kind: "confirmed",
+        status: "confirmed",
+        on,
+        at: new Date(foundAt.getTime() + 1),
+        byId: userId,
+        note: "",
+      });
     return row.id;
   });
   if (!id) return { finding: (await byClientId(ctx, viewer, input.clientId!))!, created: false };
@@ -285,18 +281,16 @@ export async function addFindingEvent(
       });
     }
     const at = new Date(Math.max(Date.now(), (last?.at.getTime() ?? 0) + 1));
-    await tx
-      .insert(findingEvents)
-      .values({
-        findingId: row.id,
-        kind: t.kind,
-        status: t.status,
-        on,
-        at,
-        byId: userId,
-        result: result ?? null,
-        note: input.note ?? "",
-      });
+    await tx.insert(findingEvents).values({
+      findingId: row.id,
+      kind: t.kind,
+      status: t.status,
+      on,
+      at,
+      byId: userId,
+      result: result ?? null,
+      note: input.note ?? "",
+    });
     await tx
       .update(findings)
       .set({

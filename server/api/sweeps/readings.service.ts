@@ -249,18 +249,16 @@ export async function editReading(
       })
       .where(eq(readings.id, readingId))
       .returning();
-    await tx
-      .insert(readingAudit)
-      .values({
-        sweepId,
-        readingId,
-        action: "edit",
-        before: valuesOf(row),
-        after: next,
-        byId: userId,
-        editedAt: input.editedAt ? new Date(input.editedAt) : null,
-        receivedAt: now,
-      });
+    await tx.insert(readingAudit).values({
+      sweepId,
+      readingId,
+      action: "edit",
+      before: valuesOf(row),
+      after: next,
+      byId: userId,
+      editedAt: input.editedAt ? new Date(input.editedAt) : null,
+      receivedAt: now,
+    });
     return { reading: toReading(updated), readingsRevision: await bumpRevision(tx, sweepId) };
   });
 }
@@ -294,17 +292,15 @@ export async function deleteReading(
       throw notFound("That reading");
     }
     await tx.delete(readings).where(eq(readings.id, readingId));
-    await tx
-      .insert(readingAudit)
-      .values({
-        sweepId,
-        readingId,
-        action: "delete",
-        before: valuesOf(row),
-        after: null,
-        byId: userId,
-        editedAt: editedAt ? new Date(editedAt) : null,
-      });
+    await tx.insert(readingAudit).values({
+      sweepId,
+      readingId,
+      action: "delete",
+      before: valuesOf(row),
+      after: null,
+      byId: userId,
+      editedAt: editedAt ? new Date(editedAt) : null,
+    });
     return { readingsRevision: await bumpRevision(tx, sweepId) };
   });
 }
