@@ -4,7 +4,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 
-// The command-line contract of issue 5: one JSON object on stdout, errors on stderr, non-zero exit.
+// The command-line contract (docs/locator/command-line.md): one JSON object on stdout, errors on stderr, non-zero exit.
 const dir = mkdtempSync(join(tmpdir(), "locate-cli-"));
 function run(content: unknown, ...flags: string[]) {
   const file = join(dir, `in-${Math.random().toString(36).slice(2)}.json`);

@@ -1,5 +1,5 @@
 // npm run -s locate -- FILE.json [--field]
-// Prints exactly one JSON object on stdout (the issue 5 contract); problems go to stderr, exit non-zero.
+// Prints exactly one JSON object on stdout (docs/locator/command-line.md); problems go to stderr, exit non-zero.
 import { readFileSync } from "node:fs";
 import { LocatorInputError, parseLocatorInput } from "#core/contracts/locator-input";
 import { locate } from "#core/analysis/locate";

@@ -4,7 +4,7 @@ import { locate } from "./locate";
 
 // Small fixed stores whose readings come from a model unlike the locator's kernel (exponential decay
 // over the walking distance round the gondola end, with a sensor lag applied to the walk), so a pass
-// here is not the fit recovering its own model (locator-methods §5, pitfall 1).
+// here is not the fit recovering its own model (docs/reference/locator-methods.md §5, pitfall 1).
 
 const rect = (x0: number, y0: number, x1: number, y1: number): [number, number][] => [
   [x0, y0],

@@ -24,7 +24,7 @@ import { HOURS_PER_YEAR, MOLAR_VOLUME_25C_L, ppmToMgPerM3, wellMixedEmission } f
 export type { LocatorOptions } from "./locator/locator-options";
 
 /**
- * The locator (issue 5): lag-corrected readings, a confidence-weighted concentration field and ranked
+ * The locator (docs/locator/method.md): lag-corrected readings, a confidence-weighted concentration field and ranked
  * suspect spots with diagnostics. Pure: no I/O, deterministic for the same input and options.
  * The input must already satisfy locatorInputSchema (parseLocatorInput).
  */
@@ -352,7 +352,7 @@ export function locate(input: LocatorInput, options: Partial<LocatorOptions> = {
     });
   });
 
-  // mirror of the top spot across a single pass, as an alternative (locator-methods §5.3)
+  // mirror of the top spot across a single pass, as an alternative (docs/reference/locator-methods.md §5.3)
   function addMirrorSpot(found: FoundSource[]): FoundSource[] {
     if (found.length === 0 || found.length >= o.maxCandidates) return found;
     const top = found[0];

@@ -64,7 +64,7 @@ function problems(input: unknown): string[] {
   return [];
 }
 
-describe("locator input contract (issue 5)", () => {
+describe("locator input contract (docs/locator/command-line.md)", () => {
   it("accepts the issue's example shape, with and without an explicit closing vertex", () => {
     expect(problems(good())).toEqual([]);
     const closed = good();

@@ -2,7 +2,7 @@ import { z } from "zod";
 import { signedArea } from "../analysis/geometry/polygon-area";
 import { isSelfIntersecting } from "../analysis/geometry/segments";
 
-// The locator's command-line interchange format (issue 5). Its short names are fixed by the issue
+// The locator's command-line interchange format (docs/locator/command-line.md). Its short names are fixed by the contract
 // because other tools read and write it; inside the product the PRODUCT.md words are used.
 // Units: metres and seconds, plan origin top-left, x right, y down.
 

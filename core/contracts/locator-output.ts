@@ -1,4 +1,4 @@
-// The locator's output. `LocatorOutput` is the command-line contract of issue 5 (short names fixed
+// The locator's output. `LocatorOutput` is the command-line contract of docs/locator/command-line.md (short names fixed
 // there); `LocatorResult` adds what the field map and the Walk screen draw.
 
 export interface Candidate {

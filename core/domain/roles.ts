@@ -1,4 +1,4 @@
-// The five roles of ../shared/PRODUCT.md and what each may do. Pure data shared by the
+// The five roles of docs/product.md and what each may do. Pure data shared by the
 // server (authorization) and the client (navigation); the server is the one that enforces.
 export const ROLES = ["owner", "lead-tech", "technician", "engineer", "store-contact"] as const;
 export type Role = (typeof ROLES)[number];

@@ -1,4 +1,4 @@
-// npm run bench:analysis — speed of a full analysis (issue 5 targets), printed plainly.
+// npm run bench:analysis — speed of a full analysis (targets in docs/benchmarks.md), printed plainly.
 // Each case runs in its own process so its peak memory (maxRSS) is its own.
 import { execFileSync, spawnSync } from "node:child_process";
 import { mkdtempSync, writeFileSync } from "node:fs";
@@ -22,7 +22,7 @@ async function child(kind: string, count: number, runs: number): Promise<void> {
     }
   } else {
     // @turf/interpolate's IDW on the same grid points (cell centres at 0.25 m) and readings; metres are
-    // mapped to degrees at the equator as in locator-methods §4, weight 2 as in Shepard's IDW.
+    // mapped to degrees at the equator as in docs/reference/locator-methods.md §4, weight 2 as in Shepard's IDW.
     const { default: interpolate } = await import("@turf/interpolate");
     const { featureCollection, point } = await import("@turf/helpers");
     const deg = (m: number) => (m * 180) / (Math.PI * 6371008.8);

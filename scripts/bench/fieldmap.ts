@@ -1,5 +1,5 @@
 /**
- * npm run bench:fieldmap — issue 6's speed targets, measured (not a test):
+ * npm run bench:fieldmap — the field map's speed targets (docs/benchmarks.md), measured (not a test):
  *  1. drawing a 96,000-cell field over the plan in Chromium (playwright-core), target < 200 ms;
  *  2. a sweep report PDF for a 500-reading sweep (field map drawn with jimp + pdfkit), target < 3 s.
  * The field is the locator's own output for the 100 m × 60 m benchmark store at 0.25 m cells.

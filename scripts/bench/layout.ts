@@ -1,6 +1,6 @@
 /**
  * Layout benchmark, API half: how fast a plan with 400 fixtures loads through the API.
- * Target (issue 3): GET /api/plans/:id/fixtures under 100 ms, median of repeated requests.
+ * Target (docs/benchmarks.md): GET /api/plans/:id/fixtures under 100 ms, median of repeated requests.
  *
  * Run it against any PostgreSQL where it may create and drop a database of its own:
  *

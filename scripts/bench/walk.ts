@@ -1,5 +1,5 @@
 /**
- * Walk benchmark (issue 4), in Debian's Chromium through playwright-core:
+ * Walk benchmark (targets in docs/benchmarks.md), in Debian's Chromium through playwright-core:
  *   1. 1,000 readings queued on the device sync to the server — target under 2 s;
  *   2. with 2,000 readings in one sweep, tap-to-drawn latency on the Walk screen (median printed):
  *      from the pointerdown of a tap on the plan to the canvas draw that shows the new reading.

@@ -82,7 +82,7 @@ it("a technician confirms a leak and records charge added; the leak rate and Tod
   await tech.getByTestId("finding-status").filter({ hasText: "confirmed" }).waitFor();
 
   // Charge added 25 days ago, 30 days after the previous 3 lb: 5/100 ÷ (30/365) × 100 = 60.8 %
-  // (40 CFR 84.102 annualizing; standards.md §1), above the 20 % threshold (84.106 [S:R4]).
+  // (40 CFR 84.102 annualizing; docs/reference/standards.md §1), above the 20 % threshold (84.106 [S:R4]).
   await tech.getByRole("link", { name: "system records" }).click();
   await tech.getByLabel("Date added").fill(localDay(25));
   await tech.getByLabel("Amount added").fill("5");
@@ -135,7 +135,7 @@ it("a technician confirms a leak and records charge added; the leak rate and Tod
 
   // The repair brings its verification tests onto Today, dated on the store's calendar: the
   // initial test on the repair day ("as soon as practicable" [S:R8]), then the follow-up within
-  // 10 days of it (standards.md §1 [M]).
+  // 10 days of it (docs/reference/standards.md §1 [M]).
   const today = localDay(0);
   await owner.getByRole("link", { name: `Initial verification test after the repair of ${today}` }).waitFor();
   await tech.getByRole("button", { name: "Record the initial verification test", exact: true }).click();

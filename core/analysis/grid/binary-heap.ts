@@ -1,6 +1,6 @@
 /**
  * A min-heap of (key, cell) pairs in growable typed arrays. Decrease-key is done by pushing again;
- * callers skip stale entries whose key exceeds the settled distance (locator-methods §5, pitfall 7).
+ * callers skip stale entries whose key exceeds the settled distance (docs/reference/locator-methods.md §5, pitfall 7).
  */
 export class MinHeap {
   private keys: Float64Array;

@@ -3,9 +3,9 @@ import { cellCentre, nearestFreeCell, type PlanGrid } from "./plan-grid";
 
 /**
  * Obstacle-aware (geodesic) distance on the plan grid: Dijkstra over 8-connected free cells,
- * truncated at a maximum distance so one search per reading stays local (locator-methods §2).
+ * truncated at a maximum distance so one search per reading stays local (docs/reference/locator-methods.md §2).
  * A diagonal step is allowed only when both orthogonal neighbours are free, so paths never cut
- * the corner of a solid body (locator-methods §5, pitfall 8). On open floor the 8-connected
+ * the corner of a solid body (docs/reference/locator-methods.md §5, pitfall 8). On open floor the 8-connected
  * metric overestimates the Euclidean distance by at most 8.24% (1/cos 22.5°).
  *
  * The search object is reused between runs: `dist` keeps Infinity outside the cells last touched.

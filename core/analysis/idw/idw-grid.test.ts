@@ -5,7 +5,7 @@ import { idwAt, idwGrid } from "./idw-grid";
 
 // Reference: @turf/interpolate 7.4.0 (general-purpose geospatial library), gridType "point", compared at
 // the grid points turf itself places. Metres map to degrees at the equator with turf's earth radius
-// (6371008.8 m), as in locator-methods §4.
+// (6371008.8 m), as in docs/reference/locator-methods.md §4.
 const M_PER_DEG = (Math.PI * 6371008.8) / 180;
 const deg = (m: number) => m / M_PER_DEG;
 

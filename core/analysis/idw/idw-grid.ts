@@ -44,7 +44,7 @@ export function idwAt(
   for (let k = 0; k < xs.length; k++) {
     const d2 = (xs[k] - qx) ** 2 + (ys[k] - qy) ** 2;
     if (d2 === 0) return values[k];
-    // p = 2 without a power call (locator-methods §2: Math.pow made IDW ten times slower)
+    // p = 2 without a power call (docs/reference/locator-methods.md §2: Math.pow made IDW ten times slower)
     const wgt = half === 1 ? 1 / d2 : 1 / Math.pow(d2, half);
     sw += wgt;
     swy += wgt * values[k];

@@ -19,7 +19,7 @@ describe("first-order sensor response", () => {
     expect(m).toBeCloseTo(tau, 4);
   });
 
-  it("and its exact inverse round-trip on noiseless data (locator-methods §4)", () => {
+  it("and its exact inverse round-trip on noiseless data (docs/reference/locator-methods.md §4)", () => {
     const times = [0, 0.7, 2.1, 2.5, 4.0, 5.2];
     const u = [0, 3, 8, 2, 0, 1];
     const y = filterFirstOrder(times, u, 1.3);

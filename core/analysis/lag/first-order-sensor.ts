@@ -1,4 +1,4 @@
-// The sensor's first-order response τ·ẏ + y = u (locator-methods §1a), for irregularly spaced samples.
+// The sensor's first-order response τ·ẏ + y = u (docs/reference/locator-methods.md §1a), for irregularly spaced samples.
 // Pure; the locator corrects positions by the response's mean delay τ (see lag-correct.ts) rather than
 // deconvolving, because the exact inverse amplifies noise by 1/(1 − e^(−Δt/τ)).
 
@@ -24,7 +24,7 @@ export function filterFirstOrder(times: readonly number[], input: readonly numbe
   return out;
 }
 
-/** The exact inverse of filterFirstOrder: u_(k−1) = (y_k − α_k·y_(k−1))/(1 − α_k) (locator-methods §1a.2). */
+/** The exact inverse of filterFirstOrder: u_(k−1) = (y_k − α_k·y_(k−1))/(1 − α_k) (docs/reference/locator-methods.md §1a.2). */
 export function unfilterFirstOrder(
   times: readonly number[],
   output: readonly number[],

@@ -3,7 +3,7 @@ import { createPlanGrid } from "../grid/plan-grid";
 import { gridRoute } from "./grid-route";
 import { lagCorrect, type Tap } from "./lag-correct";
 
-// Worked example of issue 5: walking 1 m/s with 5 s of delay, a reading describes the air 5 m back.
+// Worked example (docs/locator/method.md, lag correction): walking 1 m/s with 5 s of delay, a reading describes the air 5 m back.
 describe("lag correction", () => {
   const line: Tap[] = Array.from({ length: 21 }, (_, t) => ({ x: t, y: 0, t }));
 

@@ -1,7 +1,7 @@
 import { lagCorrect, type LagOptions, type LaggedPosition, type Tap } from "./lag-correct";
 
 /**
- * The sensor's first-order response as a forward model (locator-methods §1a step 2, "filter the
+ * The sensor's first-order response as a forward model (docs/reference/locator-methods.md §1a step 2, "filter the
  * predicted u along the path inside the fit"). A probe with hose delay D and time constant τ reads
  * y(t) = ∫₀^∞ (1/τ)·e^(−s/τ)·u(t − D − s) ds, so the reading predicted from a source is a weighted sum
  * of the kernel at a few earlier points of the walk. The integral against e^(−x) is taken by

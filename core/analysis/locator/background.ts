@@ -3,7 +3,7 @@ import { quantileSorted, medianAbsoluteDeviation } from "simple-statistics";
 /**
  * The ambient level: the lower quartile of the exact (not over-range) readings that benign-source
  * zones do not explain. A low quantile rather than the mean, because readings near a leak are a
- * minority that would pull a mean up (locator-methods §1b). Scale: the median absolute deviation.
+ * minority that would pull a mean up (docs/reference/locator-methods.md §1b). Scale: the median absolute deviation.
  */
 export function estimateBackground(values: Float64Array, usable: Uint8Array): { ppm: number; spread: number } {
   const xs: number[] = [];

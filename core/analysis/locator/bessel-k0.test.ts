@@ -4,7 +4,7 @@ import { createSourceKernel, kernelArea } from "./source-kernel";
 
 describe("K0 kernel", () => {
   it("matches Abramowitz & Stegun Table 9.8 values", () => {
-    expect(besselK0(1)).toBeCloseTo(0.42102, 5); // A&S 9.8.5-6 / Table 9.8 (locator-methods §4)
+    expect(besselK0(1)).toBeCloseTo(0.42102, 5); // A&S 9.8.5-6 / Table 9.8 (docs/reference/locator-methods.md §4)
     expect(besselK0(0.1)).toBeCloseTo(2.42707, 5); // A&S Table 9.8
     expect(besselK0(2)).toBeCloseTo(0.11389, 5); // from memory (A&S Table 9.8)
     expect(besselK0(5)).toBeCloseTo(0.0036911, 6); // from memory (A&S Table 9.8)

@@ -78,7 +78,7 @@ export function sparseCoverage(xs: Float64Array, ys: Float64Array, gapM: number)
 
 /**
  * Whether the readings that support a spot come from a single straight pass with the spot off to one
- * side: then the other side of the pass fits as well (mirror ambiguity, locator-methods §5.3).
+ * side: then the other side of the pass fits as well (mirror ambiguity, docs/reference/locator-methods.md §5.3).
  * Uses the principal axis of the supporting positions.
  */
 export function oneSidedPass(

@@ -3,7 +3,7 @@
  * instead of its single best cell. The best cell of a flat or ridged Δχ² surface (a leak seen along a
  * case line) jumps between near-equal cells with the noise; the mean of exp(Δχ²/(2T)) over the
  * neighbourhood is steadier. T is the residual variance times an inflation factor, since raw χ² is far
- * too confident with correlated readings (locator-methods §5.6). With a prior (log odds per cell) the
+ * too confident with correlated readings (docs/reference/locator-methods.md §5.6). With a prior (log odds per cell) the
  * mean is the posterior's: where the readings cannot tell cells apart (a fan-stirred walk-in reads level
  * all over) the prior decides, and where they can, the tempered likelihood does. The answer is snapped to the allowed
  * cell nearest the mean, so it never lands on a solid body or in a benign-source zone.

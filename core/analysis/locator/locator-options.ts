@@ -2,14 +2,14 @@
 // settings are calibrated on the scenario benchmark (npm run bench:locate), never on single stores.
 
 export interface LocatorOptions {
-  /** Walking pace between stops for the stop-and-go lag model, m/s (issue 5: 0.7–1.2); 0 = move evenly between taps. */
+  /** Walking pace between stops for the stop-and-go lag model, m/s (docs/locator/design-ranges.md: 0.7–1.2); 0 = move evenly between taps. */
   walkSpeedMps: number;
   /**
    * Gauss–Laguerre nodes of the sensor response in the fit's forward model (1 = shift each reading by
    * D + τ only; 2 or 3 = predict each reading as the response-weighted kernel at earlier walk points).
    */
   responseNodes: number;
-  /** Grid cell, m (issue 5 default). */
+  /** Grid cell, m (docs/locator/design-ranges.md). */
   cellSize: number;
   /** Screening length L = √(K/λ), m: K ≈ 0.01–0.05 m²/s in aisles and λ = 1.5–4 air changes/h give 3–11 m. */
   screeningLengthM: number;
@@ -30,17 +30,17 @@ export interface LocatorOptions {
   farWithFansOnly: boolean;
   /** Near-field cut-off d0 of the kernel, m (about two cells; tap jitter is about 0.3 m). */
   nearCutoffM: number;
-  /** Truncation radius of each per-reading search, m (locator-methods §1d: 12–25 m; cost grows with R²). */
+  /** Truncation radius of each per-reading search, m (docs/reference/locator-methods.md §1d: 12–25 m; cost grows with R²). */
   truncationM: number;
   /**
    * Distance scale inside walk-ins and machine rooms whose fans run: √(K_aisle/K_fans) with eddy diffusivity about
-   * 0.01–0.05 m²/s in aisles and 0.1–0.3 m²/s in fan-stirred fixtures (issue 5) gives 0.2–0.7. 1 = off.
+   * 0.01–0.05 m²/s in aisles and 0.1–0.3 m²/s in fan-stirred fixtures (docs/locator/design-ranges.md) gives 0.2–0.7. 1 = off.
    */
   fanMixingScale: number;
   /**
    * Drift strengths a = u/(2K) tried per candidate source, 1/m (empty = no drift; see local-drift.ts),
    * in eight directions; a drift is kept only when it beats none by `driftPenalty` times the
-   * residual variance. A drift of 0.02–0.08 m/s against K = 0.01–0.05 m²/s (issue 5 ranges) gives
+   * residual variance. A drift of 0.02–0.08 m/s against K = 0.01–0.05 m²/s (docs/locator/design-ranges.md) gives
    * a = 0.2–4 per metre. 0.4 and 0.8 with a penalty of 3, against no drift: top-3 within 1.5 m went
    * 76% -> 83% and both leaks of a two-leak store in the first four 33% -> 61% on three held-out sets
    * together (median top-1 0.98 -> 0.92 m; still-air stores 1.54 -> 1.28 m); on the committed stores
@@ -56,7 +56,7 @@ export interface LocatorOptions {
   driftPenalty: number;
   /** Gaussian width of the field map, m (about half a tap spacing of 1.2–1.5 m plus jitter). */
   mapSigmaM: number;
-  /** Noise model w = 1/(a + β·y)²: floor a ≈ √(0.5² + 1/12) ppm (about 0.5 ppm noise plus whole-ppm rounding) and lognormal share β ≈ 0.3 (issue 5 noise figures). */
+  /** Noise model w = 1/(a + β·y)²: floor a ≈ √(0.5² + 1/12) ppm (about 0.5 ppm noise plus whole-ppm rounding) and lognormal share β ≈ 0.3 (docs/locator/design-ranges.md). */
   noiseFloorPpm: number;
   noiseFraction: number;
   /** Leaks fitted at once, and candidates listed at most (fitted leaks plus alternatives). */
@@ -140,7 +140,7 @@ export interface LocatorOptions {
   /**
    * Screening length of the kernel of benign-source zones, m (their gas is fitted out to twice this).
    * A zone is a large, steady source, and a drift of 0.02–0.1 m/s against 1.5–4 air changes per hour
-   * (issue 5 ranges) carries gas v/λ = 18–240 m downwind, so its reach is long. 12 m (with
+   * (docs/locator/design-ranges.md) carries gas v/λ = 18–240 m downwind, so its reach is long. 12 m (with
    * zoneSeenAtZone) against 5 m cut false alarms on two held-out sets from 4 of 24 no-leak stores to 2
    * and left the committed ones at 0 of 24; without zoneSeenAtZone it silenced a walk-in leak across
    * the corridor from a quiet zone.
@@ -164,7 +164,7 @@ export interface LocatorOptions {
   /**
    * Radius = max(minRadiusM, radiusScale · misfit-contour radius). The raw contour radius came out
    * 0.1–0.5 m against top-1 errors of 0.2–3 m on the scenario benchmark (far too confident, as
-   * locator-methods §5.6 warns), so the floor carries the calibration: 2.5 m held the true leak in 88%
+   * docs/reference/locator-methods.md §5.6 warns), so the floor carries the calibration: 2.5 m held the true leak in 88%
    * of the committed benchmark stores it was calibrated on, but only 74% of a held-out set. With the
    * local refinement it held 90% of the committed stores and 88% of a held-out set (stores 101–106).
    * With the risk-point prior in the refinement and the fan-stirred-room rule it holds 88% of the
@@ -231,6 +231,6 @@ export const DEFAULT_LOCATOR_OPTIONS: LocatorOptions = {
   coverageGapM: 3,
   airChangesPerH: 2,
   mixingHeightM: 3,
-  // R-404A, a common supermarket blend (standards.md §3, molar mass derived there)
+  // R-404A, a common supermarket blend (docs/reference/standards.md §3, molar mass derived there)
   molarMassGPerMol: 97.6,
 };

@@ -62,7 +62,7 @@ export function casesRunFans(fixtures: LocatorInput["plan"]["fixtures"]): boolea
 
 /**
  * Whether the weak store drift is fitted (local-drift.ts): only in still air. Where most cases run
- * their fans, their stirring (eddy diffusivity 0.1–0.3 m²/s against 0.01–0.05 in aisles, issue 5
+ * their fans, their stirring (eddy diffusivity 0.1–0.3 m²/s against 0.01–0.05 in aisles, docs/locator/design-ranges.md
  * ranges) spreads the gas far more than a 0.02–0.1 m/s drift carries it, and a drifted kernel then
  * only bends to the plume's shape: on the demo store's fan-stirred lineups it moved the top suspect
  * onto the neighbouring case.

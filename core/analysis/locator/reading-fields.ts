@@ -5,7 +5,7 @@ import type { SourceKernel } from "./source-kernel";
 
 /**
  * One truncated geodesic search per sampled cell (readings in the same cell share it), accumulating
- * everything later steps need, so no reading-by-cell distance matrix is ever held (locator-methods §2,
+ * everything later steps need, so no reading-by-cell distance matrix is ever held (docs/reference/locator-methods.md §2,
  * route 1). By the symmetry of distance, the kernel value of a reading seen from a cell equals the
  * cell seen from the reading, so the per-cell source fit needs no per-candidate search.
  */

@@ -4,7 +4,7 @@ import { besselK0 } from "./bessel-k0";
  * The decay of a steady point source's excess concentration with obstacle-aware distance d.
  * Air in a store is mixed vertically by case fans and removed by air exchange, so the far field is the
  * 2-D screened-diffusion Green's function K0(d/L)/(2πK·H) with screening length L = √(K/λ)
- * (locator-methods §1d). Only Q/K is identifiable, so the kernel is normalised to 1 at the near-field
+ * (docs/reference/locator-methods.md §1d). Only Q/K is identifiable, so the kernel is normalised to 1 at the near-field
  * cut-off d0 and the fitted Q is "excess ppm at d0". It is shifted to reach 0 at the truncation radius
  * so truncated per-reading searches add no step.
  */

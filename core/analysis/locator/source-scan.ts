@@ -1,6 +1,6 @@
 /**
  * Every cell as a candidate source: the weighted least-squares fit of r_i ≈ b + Q·g_i(c) with Q ≥ 0,
- * b ≥ 0 in closed form from per-cell sums (locator-methods §1d), and the χ² improvement over the
+ * b ≥ 0 in closed form from per-cell sums (docs/reference/locator-methods.md §1d), and the χ² improvement over the
  * background-only model, Δχ²(c) = χ²₀ − χ²(c).
  */
 export interface ScanTotals {

@@ -13,7 +13,7 @@ describe("ppm and mg/m³ by the ideal-gas molar volume", () => {
 });
 
 describe("well-mixed room steady state C = G/(ACH·V) (Ott 2007, Exposure Analysis, ch. 18)", () => {
-  it("reproduces the standards.md §7 example: 1 kg/yr of R-134a in a 30 m³ walk-in", () => {
+  it("reproduces the docs/reference/standards.md §7 example: 1 kg/yr of R-134a in a 30 m³ walk-in", () => {
     const mgPerH = 1e6 / HOURS_PER_YEAR;
     const c = wellMixedConcentration(mgPerH, 0.5, 30);
     expect(c).toBeCloseTo(7.6, 1);

@@ -20,7 +20,7 @@ const rack = (
 
 describe("assessLeakRate", () => {
   it("marks the 20.28 % addition on a commercial R-404A rack as a breach with its repair date", () => {
-    // standards.md §1 [D]: 10 lb into 100 lb after 180 days = 20.28 % > 20 % commercial [S:R4];
+    // docs/reference/standards.md §1 [D]: 10 lb into 100 lb after 180 days = 20.28 % > 20 % commercial [S:R4];
     // repair within 30 days [S:R4]: learned 2026-07-31 + 30 days = 2026-08-30.
     const points = assessLeakRate(
       US_FEDERAL_PROFILE,

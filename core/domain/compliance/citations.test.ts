@@ -10,7 +10,7 @@ const sources = (node: unknown): string[] =>
 
 describe("readable citations", () => {
   it("turn tags into the rule they cite", () => {
-    // standards.md Sources: R1 is 40 CFR 82.157(a)–(c); R4 summarises the 40 CFR 84 subpart C final rule.
+    // docs/reference/standards.md Sources: R1 is 40 CFR 82.157(a)–(c); R4 summarises the 40 CFR 84 subpart C final rule.
     expect(readableSource("[S:R1] 40 CFR 82.157(c); [S:R4] 84.106")).toBe("40 CFR 82.157(c); 40 CFR 84.106");
     expect(readableSource("[S:R4] full charge ≥ 15 lb")).toBe("full charge ≥ 15 lb (40 CFR 84 subpart C)");
     // A title that already names the part is not repeated.
@@ -35,10 +35,12 @@ describe("readable citations", () => {
     );
     expect(readableSource("company policy: repair within 14 days")).toBe("company policy: repair within 14 days");
     // Pointers into our own reference file are internal and dropped.
-    expect(readableSource("[M] standards.md §8 (critical point 31.0 °C / 73.8 bar)")).toBe(
+    expect(readableSource("[M] docs/reference/standards.md §8 (critical point 31.0 °C / 73.8 bar)")).toBe(
       "critical point 31.0 °C / 73.8 bar (not yet confirmed in the rule text)",
     );
-    expect(readableSource("[M] safety class B2L; rises: density 0.59 × air [D] standards.md §4, §8")).toBe(
+    expect(
+      readableSource("[M] safety class B2L; rises: density 0.59 × air [D] docs/reference/standards.md §4, §8"),
+    ).toBe(
       "safety class B2L (not yet confirmed in the rule text); rises: density 0.59 × air (derived from the cited values)",
     );
     expect(readableSource("[S:ZZ] an odd rule")).toBe("an odd rule (source ZZ)");

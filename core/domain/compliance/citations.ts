@@ -16,7 +16,7 @@ interface Citation {
 const CFR82 = /40 CFR 82|\b82\.1\d\d/;
 const CFR84 = /40 CFR 84|\b84\.1\d\d/;
 
-/** Our reference list (standards.md "Sources") as readable citations; secondary summaries name the rule they summarise. */
+/** Our reference list (docs/reference/standards.md "Sources") as readable citations; secondary summaries name the rule they summarise. */
 export const CITATIONS: Record<string, Citation> = {
   R1: { text: "40 CFR 82.157", mentioned: CFR82 },
   R2: { text: "85 FR 14150 (2020)", mentioned: /85 FR 14150/ },
@@ -69,7 +69,7 @@ const SECTION_ONLY = /^(8[24])\.(\d{3})/;
  * Texts without tags (a company's own "company policy, 2026 audit") come back unchanged.
  */
 // Pointers into our own reference file are internal: the tag beside them says how sure we are.
-const INTERNAL = /\s*standards\.md(\s*§\d+(,\s*§\d+)*)?|\s+§\d+\b(?=\s*$)/g;
+const INTERNAL = /\s*(?:docs\/reference\/)?standards\.md(\s*§\d+(,\s*§\d+)*)?|\s+§\d+\b(?=\s*$)/g;
 
 export function readableSource(source: string): string {
   // The closing disclaimer names its codes in its own text: nothing more to cite.

@@ -21,7 +21,7 @@ describe("deadlines", () => {
     expect(repairDueDate(PART_82_SUBPART_F, "2026-12-15")).toBe("2027-01-14");
   });
   it("follow-up verification 10 days after the initial test", () => {
-    // standards.md §1 [M]: follow-up within 10 days.
+    // docs/reference/standards.md §1 [M]: follow-up within 10 days.
     expect(followUpVerificationDueDate(PART_82_SUBPART_F, "2026-12-25")).toBe("2027-01-04");
   });
   it("chronic-leaker report by 1 March of the next year", () => {
@@ -54,7 +54,7 @@ describe("verification tests after a repair", () => {
   it("initial test on the repair day, follow-up 10 days after it, across month ends and leap days", () => {
     // [S:R8]: the initial verification test follows the repair "as soon as practicable", so it is due on the repair day.
     expect(initialVerificationDueDate(PART_84_SUBPART_C, "2026-01-31")).toBe("2026-01-31");
-    // standards.md §1 [M]: the follow-up within 10 days of the initial test.
+    // docs/reference/standards.md §1 [M]: the follow-up within 10 days of the initial test.
     expect(followUpVerificationDueDate(PART_84_SUBPART_C, "2026-01-25")).toBe("2026-02-04");
     expect(followUpVerificationDueDate(PART_84_SUBPART_C, "2028-02-25")).toBe("2028-03-06"); // 2028 is a leap year: 29 Feb counts
     expect(followUpVerificationDueDate(PART_84_SUBPART_C, "2026-02-25")).toBe("2026-03-07");

@@ -1,7 +1,7 @@
 import type { RuleProfile } from "./rule-profile";
 
 /**
- * EU F-gas Regulation (EU) 2024/573, which replaced 517/2014. Tags refer to standards.md §2.
+ * EU F-gas Regulation (EU) 2024/573, which replaced 517/2014. Tags refer to docs/reference/standards.md §2.
  * GWPs: Annex I of 2024/573 keeps the AR4 values for HFCs (HFC-32 675, HFC-134a 1430, HFC-125 3500,
  * HFC-143a 4470; seen in the adopted annex text on eumonitor.eu, Annexes to COM(2022)150);
  * HFO and hydrocarbon values are the 517/2014 ones [M] and may differ in 2024/573 Annex II.

@@ -4,7 +4,7 @@ import { nextInspectionDate } from "./leak-check-interval";
 import { automaticLeakDetectionRequired, inspectionsAfterBreach } from "./inspections-after-breach";
 import { PART_82_SUBPART_F, PART_84_SUBPART_C } from "./us-federal-profile";
 
-describe("US inspections after a breach (standards.md §1, from memory)", () => {
+describe("US inspections after a breach (docs/reference/standards.md §1, from memory)", () => {
   it("is quarterly for commercial and IPR systems from 500 lb, yearly otherwise", () => {
     const big = inspectionsAfterBreach(PART_84_SUBPART_C, {
       applianceType: "commercial-refrigeration",

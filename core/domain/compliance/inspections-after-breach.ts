@@ -10,7 +10,7 @@ export type InspectionPlan =
 const atLeast = (kg: number, limitKg: number) => kg >= limitKg * (1 - 1e-9);
 
 /**
- * US periodic leak inspections after a leak-rate breach (standards.md §1, from memory): large
+ * US periodic leak inspections after a leak-rate breach (docs/reference/standards.md §1, from memory): large
  * commercial and IPR systems quarterly until four quarters below the threshold, the rest yearly
  * until a year below, none while a yearly-calibrated automatic leak detection system watches.
  * The next date is `nextInspectionDate(lastInspection, everyMonths)`.

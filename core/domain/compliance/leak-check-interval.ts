@@ -11,7 +11,7 @@ export type FgasGroup = "annex-I" | "annex-II-hfo" | "not-covered";
 /**
  * HFCs and mixtures containing any HFC are Annex I gases (checked by CO2e); pure HFOs (and mixtures
  * of HFOs only) are Annex II section 1 (checked by kg, 2024/573). HCFCs fall under the ozone
- * regulation and natural refrigerants under neither (standards.md §2).
+ * regulation and natural refrigerants under neither (docs/reference/standards.md §2).
  */
 export function fgasGroup(r: Refrigerant): FgasGroup {
   const kinds = r.kind === "blend" ? r.components.map((c) => getPure(c.id).kind) : [r.kind];

@@ -24,7 +24,7 @@ describe("CO2 equivalent", () => {
 });
 
 describe("EU leak-check intervals from CO2e bands (517/2014 Art. 4, 2024/573 Art. 5)", () => {
-  // standards.md §2 [S:E1]: ≥5 <50 t: 12 / 24 months; ≥50 <500 t: 6 / 12; ≥500 t: 3 / 6, LDS mandatory [S:E2,E5].
+  // docs/reference/standards.md §2 [S:E1]: ≥5 <50 t: 12 / 24 months; ≥50 <500 t: 6 / 12; ≥500 t: 3 / 6, LDS mandatory [S:E2,E5].
   it("puts exactly 5, 50 and 500 t in the upper band", () => {
     expect(months(kg404(5), false)).toBe(12);
     expect(months(kg404(5), true)).toBe(24);

@@ -35,7 +35,7 @@ const rolling = (fullLb: number, additions: ChargeAddition[], followUpVerifiedOn
 
 describe("annualizing method (40 CFR 82.152 / 84.102)", () => {
   it("gives 60.8 % for 5 lb lost from 100 lb in 30 days", () => {
-    // standards.md §1: trade example ~60 %/yr [S:R6]; formula with 30 days gives 60.8 % [D]:
+    // docs/reference/standards.md §1: trade example ~60 %/yr [S:R6]; formula with 30 days gives 60.8 % [D]:
     // (5/100) ÷ (30/365) × 100 = 60.83.
     expect(roundHalfUp(annualizedLeakRate(5, 100, 30), 1)).toBe(60.8);
     const points = annual(100, [lb("a", "2026-03-01", 1), lb("b", "2026-03-31", 5)]);
@@ -43,13 +43,13 @@ describe("annualizing method (40 CFR 82.152 / 84.102)", () => {
     expect(roundHalfUp(points[1].percent, 1)).toBe(60.8);
   });
   it("gives 20.28 % for 10 lb into 100 lb after 180 days", () => {
-    // standards.md §1 [D]: (10/100) ÷ (180/365) × 100 = 20.277…
+    // docs/reference/standards.md §1 [D]: (10/100) ÷ (180/365) × 100 = 20.277…
     const points = annual(100, [lb("a", "2026-01-01", 2), lb("b", "2026-06-30", 10)]);
     expect(points[1].days).toBe(180);
     expect(roundHalfUp(points[1].percent, 2)).toBe(20.28);
   });
   it("gives 48.7 % for 2 lb into 50 lb after 30 days", () => {
-    // standards.md §1 [D]: (2/50) ÷ (30/365) × 100 = 48.67.
+    // docs/reference/standards.md §1 [D]: (2/50) ÷ (30/365) × 100 = 48.67.
     expect(roundHalfUp(annualizedLeakRate(2, 50, 30), 1)).toBe(48.7);
     expect(roundHalfUp(annual(50, [lb("a", "2026-09-01", 1), lb("b", "2026-10-01", 2)])[1].percent, 1)).toBe(48.7);
   });
@@ -75,7 +75,7 @@ describe("annualizing method (40 CFR 82.152 / 84.102)", () => {
     expect(history("2027-02-05").percent).toBeCloseTo(5, 12);
   });
   it("counts same-day additions together and ignores voided ones", () => {
-    // Additions for the same leak count together (standards.md §1 [M]): 1 + 2 lb after 30 days on
+    // Additions for the same leak count together (docs/reference/standards.md §1 [M]): 1 + 2 lb after 30 days on
     // 100 lb → 3/100 × 365/30 = 36.5 %. The voided 50 lb entry neither counts nor restarts the clock.
     const points = annual(100, [
       lb("a", "2026-04-01", 1),
@@ -98,7 +98,7 @@ describe("annualizing method (40 CFR 82.152 / 84.102)", () => {
     expect(points[1].days).toBe(30); // our reading: the excluded addition restarts the clock
   });
   it("treats the first calculation on or after a regime's start date as a first calculation", () => {
-    // standards.md §1 [M]: the first Part 84 calculation after 1 Jan 2026 uses 365 days.
+    // docs/reference/standards.md §1 [M]: the first Part 84 calculation after 1 Jan 2026 uses 365 days.
     const withStart = { ...rules, firstCalculationFrom: "2026-01-01" };
     const points = leakRateHistory({
       fullChargeKg: 100,

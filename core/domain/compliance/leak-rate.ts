@@ -3,7 +3,7 @@ import { DomainInputError, requirePositive } from "../input-error";
 import type { LeakRateMethod } from "./rule-profile";
 
 /**
- * Leak-rate figures of 40 CFR 82.152 / 84.102 (standards.md §1). The part-specific numbers
+ * Leak-rate figures of 40 CFR 82.152 / 84.102 (docs/reference/standards.md §1). The part-specific numbers
  * (365-day cap, window, first-calculation days) come in through `LeakRateRules`, read from the
  * rule profile, so nothing regulatory is fixed here.
  */
@@ -26,7 +26,7 @@ export interface LeakRateRules {
   rollingWindowDays: number;
   /**
    * When a regime starts on a date (Part 84: 1 Jan 2026), the first calculation on or after it
-   * also counts as a first calculation, whatever was added before (standards.md §1 [M]).
+   * also counts as a first calculation, whatever was added before (docs/reference/standards.md §1 [M]).
    */
   firstCalculationFrom?: IsoDate;
 }

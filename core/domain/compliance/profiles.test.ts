@@ -23,7 +23,7 @@ describe("built-in rule profiles", () => {
       expect(() => validateRuleProfile(p)).not.toThrow();
       const values = sourcedValues(p);
       expect(values.length).toBeGreaterThanOrEqual(6);
-      // Tags as in standards.md: [S:id], [M] or [D].
+      // Tags as in docs/reference/standards.md: [S:id], [M] or [D].
       for (const v of values) expect(String(v.source), `${p.id}${v.path}`).toMatch(/\[(S:[A-Za-z0-9,]+|M|D)\]/);
     }
   });

@@ -3,7 +3,7 @@ import type { GwpBasis, Sourced } from "../refrigerants/types";
 
 /**
  * A rule profile is the data a company works under. Every threshold, deadline, interval and date
- * lives here with its source tag (standards.md: [S:id] sourced, [M] from memory, [D] derived), so
+ * lives here with its source tag (docs/reference/standards.md: [S:id] sourced, [M] from memory, [D] derived), so
  * that when a regulation changes only the data changes; the functions in this folder read it.
  */
 

@@ -19,7 +19,7 @@ const base: SystemRecords = {
   leakChecks: [],
 };
 
-describe("inspection runs after a breach (our reading of 'until N periods below', standards.md §1 [M])", () => {
+describe("inspection runs after a breach (our reading of 'until N periods below', docs/reference/standards.md §1 [M])", () => {
   it("ends after N clean inspections in a row, and a new breach resets the count", () => {
     expect(inspectionRun(["2026-03-01"], [], 4)).toEqual({ start: "2026-03-01", lastCheck: null, clean: 0 });
     const clean = (on: string) => ({ checkedOn: on, leakFound: false });

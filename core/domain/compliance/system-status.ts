@@ -211,7 +211,7 @@ export function systemStatus(
 
 /**
  * The open run of US inspections after a breach, or null when none is open. Our reading of
- * "until N periods below the threshold" (standards.md §1 [M]): a run starts at a breach, counts
+ * "until N periods below the threshold" (docs/reference/standards.md §1 [M]): a run starts at a breach, counts
  * consecutive inspections with no leak found, and ends at N; a new breach during a run resets the
  * count but keeps the schedule, which runs from the latest inspection (or the run's start).
  */

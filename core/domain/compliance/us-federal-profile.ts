@@ -2,7 +2,7 @@ import type { LeakRatePart, RuleProfile } from "./rule-profile";
 
 /**
  * US federal rules: 40 CFR 82 subpart F (ODS) and 40 CFR 84 subpart C (HFCs and substitutes under
- * the AIM Act). Tags refer to standards.md §1. EPA has proposed delays to some dates
+ * the AIM Act). Tags refer to docs/reference/standards.md §1. EPA has proposed delays to some dates
  * (90 FR 47999 [S:R4b]); that is why dates are data here.
  */
 const shared = {

@@ -1,6 +1,6 @@
 /**
  * Turns a plan's fixtures and a sweep's conditions into the locator's command-line contract
- * `plan` object (issue 5, "Command-line contract"): an external interchange format with fixed
+ * `plan` object (docs/locator/command-line.md): an external interchange format with fixed
  * short names, so the product's words are translated here and nowhere else.
  */
 import { clipPolygonToRect } from "../../analysis/geometry/clip-to-rect";

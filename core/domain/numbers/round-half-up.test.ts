@@ -3,7 +3,7 @@ import { formatFixed, roundHalfUp } from "./round-half-up";
 
 describe("roundHalfUp", () => {
   it("rounds the published blend halves up", () => {
-    // standards.md §3 test notes: 2087.5 → 2088 (R-410A AR4) and 1824.5 → 1825 (R-407F AR4).
+    // docs/reference/standards.md §3 test notes: 2087.5 → 2088 (R-410A AR4) and 1824.5 → 1825 (R-407F AR4).
     expect(roundHalfUp(0.5 * 675 + 0.5 * 3500)).toBe(2088);
     expect(roundHalfUp(0.3 * 675 + 0.3 * 3500 + 0.4 * 1430)).toBe(1825);
   });

@@ -6,7 +6,7 @@ const r = getRefrigerant;
 
 describe("canDetect", () => {
   it("knows heated-diode sensors are blind to R-290, R-600a, R-744 and R-717", () => {
-    // standards.md §6 [M]: heated-diode/heated-ceramic sensors respond to halogen compounds and are
+    // docs/reference/standards.md §6 [M]: heated-diode/heated-ceramic sensors respond to halogen compounds and are
     // blind to R-290, R-600a, R-744 and R-717.
     for (const id of ["R-290", "R-600a", "R-744", "R-717"])
       expect(canDetect("heated-diode", r(id)).answer, id).toBe("no");
@@ -22,7 +22,7 @@ describe("canDetect", () => {
     expect(co2.reason).toMatch(/only R-744, 3%/);
   });
   it("needs the band of an infrared instrument", () => {
-    // standards.md §6: NDIR sensors are band-specific [S:D4; bands M].
+    // docs/reference/standards.md §6: NDIR sensors are band-specific [S:D4; bands M].
     expect(canDetect("infrared", r("R-404A")).answer).toBe("unknown");
     expect(canDetect("infrared", r("R-404A"), { band: "C-F" }).answer).toBe("yes");
     expect(canDetect("infrared", r("R-290"), { band: "C-F" }).answer).toBe("no");

@@ -4,7 +4,7 @@ import type { PureRefrigerant, Refrigerant } from "./types";
 
 /** Sensing principles as recorded on a detector. */
 export type SensingPrinciple = "heated-diode" | "infrared" | "other";
-/** Absorption band of an infrared instrument, when the detector record says it (standards.md §6 [M]). */
+/** Absorption band of an infrared instrument, when the detector record says it (docs/reference/standards.md §6 [M]). */
 export type InfraredBand = "C-F" | "C-H" | "CO2";
 
 export interface DetectionVerdict {

@@ -34,7 +34,7 @@ function pureGwp(r: PureRefrigerant, bases: readonly GwpBasis[]) {
 /**
  * GWP-100 of a refrigerant on an ordered list of bases (the first basis with a value wins per
  * component). Blends: Σ (mass % × component GWP) / 100, rounded half up to a whole number as the
- * published tables do (standards.md §3 test notes). A component with no value on any basis makes
+ * published tables do (docs/reference/standards.md §3 test notes). A component with no value on any basis makes
  * the result unknown rather than silently zero: R-448A with HFOs at 0 would read 1386, not 1387.
  */
 export function gwpOf(r: Refrigerant, bases: readonly GwpBasis[]): GwpResult {

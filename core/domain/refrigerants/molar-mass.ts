@@ -1,12 +1,12 @@
 import { getPure } from "./catalogue";
 import type { Refrigerant } from "./types";
 
-/** Molar mass of dry air, g/mol, used for "heavier or lighter than air" (standards.md §4, M/28.96). */
+/** Molar mass of dry air, g/mol, used for "heavier or lighter than air" (docs/reference/standards.md §4, M/28.96). */
 export const AIR_MOLAR_MASS = 28.96;
 
 /**
  * Molar mass in g/mol. A blend's is the mass-fraction harmonic mean `1 / Σ(wᵢ/Mᵢ)` (moles per gram
- * add up; standards.md §3), not the weighted arithmetic mean.
+ * add up; docs/reference/standards.md §3), not the weighted arithmetic mean.
  */
 export function molarMassOf(r: Refrigerant): number {
   if (r.kind !== "blend") return r.molarMass.value;

@@ -3,15 +3,15 @@ import type { PureRefrigerant } from "./types";
 /**
  * Single-compound refrigerants. GWP-100: HFC/HCFC values [S:G1] (AR4 also [S:G2]); CO2 = 1 by
  * definition [S:G1]; HFOs, hydrocarbons and ammonia [M]. Molar masses from IUPAC atomic weights
- * [D] (standards.md §4). Safety classes: IMC Table 1103.1 [S:S1] where listed, else [M].
+ * [D] (docs/reference/standards.md §4). Safety classes: IMC Table 1103.1 [S:S1] where listed, else [M].
  */
 const G1 = "[S:G1] IPCC GWP-100 (openclimatedata globalwarmingpotentials)";
-const D4 = "[D] standards.md §4, from IUPAC atomic weights";
+const D4 = "[D] docs/reference/standards.md §4, from IUPAC atomic weights";
 const S1 = "[S:S1] IMC Table 1103.1 (from ASHRAE 34)";
 const M = "[M] from memory, verify in ASHRAE 34 Tables 4-1/4-2";
 const EU517 = "[M] Regulation (EU) 517/2014 value (no AR4 value exists)";
 const AR5_LT1 =
-  "[M] AR5 lists <1; 1 is used as the upper bound, which reproduces the AR5 blend values in standards.md §3 (R-454B 467)";
+  "[M] AR5 lists <1; 1 is used as the upper bound, which reproduces the AR5 blend values in docs/reference/standards.md §3 (R-454B 467)";
 
 export const PURE_REFRIGERANTS: readonly PureRefrigerant[] = [
   {
@@ -141,9 +141,9 @@ export const PURE_REFRIGERANTS: readonly PureRefrigerant[] = [
     molarMass: { value: 17.03, source: D4 },
     safetyClass: { value: "B2L", source: M },
     gwp: {
-      AR4: { value: 0, source: "[M] standards.md §3" },
-      AR5: { value: 0, source: "[M] standards.md §3" },
-      AR6: { value: 0, source: "[M] standards.md §3" },
+      AR4: { value: 0, source: "[M] docs/reference/standards.md §3" },
+      AR5: { value: 0, source: "[M] docs/reference/standards.md §3" },
+      AR6: { value: 0, source: "[M] docs/reference/standards.md §3" },
     },
   },
 ];

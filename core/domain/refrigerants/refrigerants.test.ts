@@ -49,7 +49,7 @@ describe("catalogue", () => {
     );
   });
   it("has blend compositions that add up to 100 % of known components", () => {
-    // ASHRAE 34-2019 compositions are nominal mass-% summing to 100 (standards.md §3 [S:G3]).
+    // ASHRAE 34-2019 compositions are nominal mass-% summing to 100 (docs/reference/standards.md §3 [S:G3]).
     for (const r of REFRIGERANTS) {
       if (r.kind !== "blend") continue;
       const sum = r.components.reduce((s, c) => s + c.massPercent, 0);
@@ -58,7 +58,7 @@ describe("catalogue", () => {
     }
   });
   it("marks R-22 (an HCFC) as ozone-depleting and the HFC blends not", () => {
-    // 40 CFR 82 subpart F covers ODS (CFC/HCFC) only since 10 Apr 2020 (standards.md §1 [S:R1,R2]).
+    // 40 CFR 82 subpart F covers ODS (CFC/HCFC) only since 10 Apr 2020 (docs/reference/standards.md §1 [S:R1,R2]).
     expect(isOzoneDepleting(getRefrigerant("R-22"))).toBe(true);
     expect(getRefrigerant("R-22").kind).toBe("HCFC");
     for (const id of ["R-404A", "R-410A", "R-448A", "R-744", "R-717", "R-290"])
@@ -67,7 +67,7 @@ describe("catalogue", () => {
   it("carries the IMC Table 1103.1 safety classes", () => {
     // IMC Table 1103.1 [S:S1], R-134a are A1.
     for (const id of ["R-22", "R-125", "R-134a"]) expect(getRefrigerant(id).safetyClass.value).toBe("A1");
-    // From memory (standards.md §5 [M]): R-290 A3, R-717 B2L, R-1234yf A2L, R-454B A2L.
+    // From memory (docs/reference/standards.md §5 [M]): R-290 A3, R-717 B2L, R-1234yf A2L, R-454B A2L.
     expect(getRefrigerant("R-290").safetyClass.value).toBe("A3");
     expect(getRefrigerant("R-717").safetyClass.value).toBe("B2L");
     expect(getRefrigerant("R-1234yf").safetyClass.value).toBe("A2L");
@@ -82,23 +82,23 @@ describe("blend GWP from components (mass-weighted, round half up)", () => {
     expect(gwp("R-407C", EU)).toBe(1774);
     // 2024/573 Art. 3 CO2e example [S:E7]: R-410A 2088 (2087.5 rounded half up).
     expect(gwp("R-410A", EU)).toBe(2088);
-    // Published AR4 blend values, from memory (standards.md §3 [M]).
+    // Published AR4 blend values, from memory (docs/reference/standards.md §3 [M]).
     expect(gwp("R-407A", EU)).toBe(2107);
     expect(gwp("R-448A", EU)).toBe(1387);
     expect(gwp("R-449A", EU)).toBe(1397);
     expect(gwp("R-507A", EU)).toBe(3985);
-    expect(gwp("R-407F", EU)).toBe(1825); // 1824.5 → 1825, standards.md §3 test notes
+    expect(gwp("R-407F", EU)).toBe(1825); // 1824.5 → 1825, docs/reference/standards.md §3 test notes
     expect(gwp("R-454B", EU)).toBe(466);
     expect(gwp("R-455A", EU)).toBe(148);
   });
   it("does not treat a missing HFO value as zero", () => {
-    // standards.md §3 test notes: with HFO GWP = 0, R-448A/R-449A would give 1386/1396, not 1387/1397.
+    // docs/reference/standards.md §3 test notes: with HFO GWP = 0, R-448A/R-449A would give 1386/1396, not 1387/1397.
     const plainAr4 = gwpOf(getRefrigerant("R-448A"), ["AR4"]);
     expect(plainAr4.known).toBe(false);
     if (!plainAr4.known) expect(plainAr4.missing).toEqual(["R-1234yf", "R-1234ze(E)"]);
   });
   it("reproduces the AR5 and AR6 blend columns", () => {
-    // standards.md §3 blend table, computed there from IPCC values [D] (HFC values [S:G1], HFO [M]).
+    // docs/reference/standards.md §3 blend table, computed there from IPCC values [D] (HFC values [S:G1], HFO [M]).
     const ar5: Record<string, number> = {
       "R-404A": 3943,
       "R-507A": 3985,
@@ -123,7 +123,7 @@ describe("blend GWP from components (mass-weighted, round half up)", () => {
       "R-454B": 531,
       "R-455A": 166,
     };
-    // R-449A AR6: standards.md §3 prints 1505, but its own inputs give 0.243×771 + 0.247×3740 +
+    // R-449A AR6: docs/reference/standards.md §3 prints 1505, but its own inputs give 0.243×771 + 0.247×3740 +
     // 0.253×0.501 + 0.257×1530 = 1504.47 → 1504 (hand calculation); the table entry is inconsistent.
     for (const [id, v] of Object.entries(ar5)) expect(gwp(id, ["AR5"]), id).toBe(v);
     for (const [id, v] of Object.entries(ar6)) expect(gwp(id, ["AR6"]), id).toBe(v);
@@ -140,7 +140,7 @@ describe("blend GWP from components (mass-weighted, round half up)", () => {
 
 describe("molar mass", () => {
   it("computes blends as 1/Σ(wᵢ/Mᵢ)", () => {
-    // standards.md §3 molar-mass column [D].
+    // docs/reference/standards.md §3 molar-mass column [D].
     const published: Record<string, number> = {
       "R-404A": 97.6,
       "R-507A": 98.86,
@@ -159,14 +159,14 @@ describe("molar mass", () => {
     expect(molarMassOf(getRefrigerant("R-407F"))).toBeCloseTo(82.0546, 4); // hand calculation, 1/Σ(wᵢ/Mᵢ)
   });
   it("agrees with the formula and IUPAC atomic weights", () => {
-    // Abridged IUPAC atomic weights, from memory; the catalogue values are standards.md §4 [D].
+    // Abridged IUPAC atomic weights, from memory; the catalogue values are docs/reference/standards.md §4 [D].
     for (const r of REFRIGERANTS) {
       if (r.kind === "blend") continue;
       expect(Math.abs(molarMassFromFormula(r.formula) - r.molarMass.value), r.id).toBeLessThan(0.01);
     }
   });
   it("tells heavier-than-air refrigerants from ammonia, which rises", () => {
-    // standards.md §4 [D]: R-134a 3.52, R-410A 2.51, R-744 1.52, R-717 0.59.
+    // docs/reference/standards.md §4 [D]: R-134a 3.52, R-410A 2.51, R-744 1.52, R-717 0.59.
     expect(densityRelativeToAir(getRefrigerant("R-134a"))).toBeCloseTo(3.52, 2);
     expect(densityRelativeToAir(getRefrigerant("R-410A"))).toBeCloseTo(2.51, 2);
     expect(densityRelativeToAir(getRefrigerant("R-744"))).toBeCloseTo(1.52, 2);

@@ -1,6 +1,6 @@
 /**
  * Refrigerant catalogue types. Every fact carries its source tag as in
- * shared/reference/standards.md: `[S:id]` sourced, `[M]` from memory, `[D]` derived there.
+ * docs/reference/standards.md: `[S:id]` sourced, `[M]` from memory, `[D]` derived there.
  */
 
 export type RefrigerantKind = "HFC" | "HCFC" | "HFO" | "HC" | "natural" | "blend";

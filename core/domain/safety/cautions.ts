@@ -3,7 +3,7 @@ import type { Refrigerant } from "../refrigerants/types";
 
 /**
  * The usual cautions shown beside refrigerants, systems and findings. Wording is our own, calm and
- * short; each carries the source of the fact behind it (standards.md §8 tags). The last caution
+ * short; each carries the source of the fact behind it (docs/reference/standards.md §8 tags). The last caution
  * always defers to local codes and licensed practice.
  */
 export type CautionId =
@@ -36,14 +36,14 @@ const HIGH_PRESSURE_CO2: Caution = {
   id: "high-pressure-co2",
   level: "warning",
   text: "R-744 runs at very high pressure: standstill and high-side pressures often exceed 120 bar design, far above other systems. Use tools and hoses rated for CO2, and expect venting liquid to form dry ice, which can block a line and then release suddenly.",
-  source: "[M] standards.md §8 (critical point 31.0 °C / 73.8 bar)",
+  source: "[M] docs/reference/standards.md §8 (critical point 31.0 °C / 73.8 bar)",
 };
 
 const TOXIC_AMMONIA: Caution = {
   id: "toxic-ammonia",
   level: "warning",
   text: "Ammonia (R-717) is toxic and mildly flammable, and it rises: a leak collects near the ceiling, not the floor. Wear the protection your procedure requires and leave if you smell it strongly.",
-  source: "[M] safety class B2L; rises: density 0.59 × air [D] standards.md §4, §8",
+  source: "[M] safety class B2L; rises: density 0.59 × air [D] docs/reference/standards.md §4, §8",
 };
 
 function oxygenCaution(r: Refrigerant | undefined, place: CautionPlace | undefined): Caution {
@@ -59,7 +59,8 @@ function oxygenCaution(r: Refrigerant | undefined, place: CautionPlace | undefin
     id: "oxygen-displacement",
     level: "warning",
     text: `Any refrigerant displaces oxygen. In ${where} a large leak ${layer} without warning. Check the room's refrigerant detector and alarm before you go in, keep the door open and do not work alone; below 19.5 % oxygen the air is unsafe to breathe.`,
-    source: "[M] standards.md §8 (OSHA 19.5 % O2; confined spaces 29 CFR 1910.146); density vs air [D] §4",
+    source:
+      "[M] docs/reference/standards.md §8 (OSHA 19.5 % O2; confined spaces 29 CFR 1910.146); density vs air [D] §4",
   };
 }
 
@@ -81,7 +82,7 @@ const CODES: Caution = {
   id: "codes-govern",
   level: "notice",
   text: "These notes do not replace the rules that apply where you work: ASHRAE 15, IMC chapter 11, EN 378, ISO 5149, CSA B52, local codes and licensed judgement govern.",
-  source: "standards.md §8 disclaimer",
+  source: "docs/reference/standards.md §8 disclaimer",
 };
 
 /** Flammability class 2L, 2 or 3 (ASHRAE 34: the digit after the toxicity letter). */

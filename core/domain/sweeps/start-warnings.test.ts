@@ -10,7 +10,7 @@ const systems = [
 
 describe("warnings when a sweep starts", () => {
   it("names each hunted refrigerant a heated-diode detector cannot see", () => {
-    // Heated-diode sensors respond to halogen compounds; have none (standards.md §6).
+    // Heated-diode sensors respond to halogen compounds; have none (docs/reference/standards.md §6).
     const w = startWarnings(diode, systems);
     expect(w.map((x) => [x.code, x.systemId])).toEqual([
       ["detector-blind", "b"],

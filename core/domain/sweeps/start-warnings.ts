@@ -18,7 +18,7 @@ export interface WarningSystem {
 /**
  * What the technician should know before walking: an overdue calibration / bump check, and
  * hunted refrigerants the detector cannot see (a heated-diode sensor on R-744, R-290 or R-717
- * reads nothing and proves nothing; standards.md via canDetect). Pure, so the Walk screen can
+ * reads nothing and proves nothing; docs/reference/standards.md via canDetect). Pure, so the Walk screen can
  * show the same warnings when a sweep starts offline.
  */
 export function startWarnings(detector: WarningDetector, systems: readonly WarningSystem[]): SweepWarning[] {

@@ -55,7 +55,7 @@ describe("steady transport against closed forms", () => {
   });
 
   it("a well-mixed room reaches C = G / (ACH V)", () => {
-    // Ott, Steinemann & Wallace, Exposure Analysis (2007) ch. 18, mass-balance model; standards.md §7.
+    // Ott, Steinemann & Wallace, Exposure Analysis (2007) ch. 18, mass-balance model; docs/reference/standards.md §7.
     const grid = createGrid(4, 3, 0.1);
     const ach = 2 / 3600,
       G = 0.3; // G in concentration x area per second (2-D, per metre of depth)

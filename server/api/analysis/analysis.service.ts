@@ -1,5 +1,5 @@
 /**
- * The field map's analysis (issue 5, API part): the locator run off the event loop on a sweep's
+ * The field map's analysis: the locator run off the event loop on a sweep's
  * readings and plan, cached per sweep and parameter set; a cached result whose readings changed since
  * is answered as stale while a recompute runs (or awaited with wait=true).
  */

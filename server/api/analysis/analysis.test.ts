@@ -107,7 +107,7 @@ describe("GET /api/sweeps/:id/analysis", () => {
     // every reading comes back with its id, the raw tap and the corrected position side by side
     expect(body.readings.map((r: { readingId: string }) => r.readingId)).toEqual(readings.map((r) => r.id));
     const peak = body.readings.reduce((m: { ppm: number }, r: { ppm: number }) => (r.ppm > m.ppm ? r : m));
-    expect(peak.corrected.x).toBeLessThan(peak.raw.x); // moved back along the walk (issue 5, lag correction)
+    expect(peak.corrected.x).toBeLessThan(peak.raw.x); // moved back along the walk (docs/locator/method.md, lag correction)
     expect(
       body.candidates.length,
       JSON.stringify({
@@ -116,7 +116,7 @@ describe("GET /api/sweeps/:id/analysis", () => {
       }),
     ).toBeGreaterThan(0);
     expect(body.candidates[0].rank).toBe(1);
-    // the top suspect lies nearer the leak than the highest raw reading does (issue 5's naive answer)
+    // the top suspect lies nearer the leak than the highest raw reading does (the naive answer of docs/locator/method.md)
     const top = body.candidates[0];
     expect(Math.hypot(top.x - LEAK.x, top.y - LEAK.y)).toBeLessThan(
       Math.hypot(peak.raw.x - LEAK.x, peak.raw.y - LEAK.y),
@@ -142,7 +142,7 @@ describe("GET /api/sweeps/:id/analysis", () => {
     const peakIndex = first.body.readings.findIndex(
       (r: { ppm: number }) => r.ppm === Math.max(...first.body.readings.map((x: { ppm: number }) => x.ppm)),
     );
-    // a longer delay moves the sample point further back (issue 5: 1 m/s × 5 s → 5 m back)
+    // a longer delay moves the sample point further back (docs/locator/method.md: 1 m/s × 5 s → 5 m back)
     expect(slower.body.readings[peakIndex].corrected.x).toBeLessThan(first.body.readings[peakIndex].corrected.x);
     const rows = await t.ctx.pool.query("select params_key from analyses where sweep_id = $1 order by params_key", [
       id,

@@ -72,9 +72,9 @@ describe("charge added and the leak rate through the API (US federal, annualizin
     // 40 CFR 84.102 annualizing: (lb added / lb full charge) ÷ (min(days since last, 365) / 365) × 100.
     // 1st: the first calculation after 1 Jan 2026 uses 365 days: 10/100 ÷ 1 = 10 % [M].
     expect(rates[0]).toBeCloseTo(10, 9);
-    // 2nd: 30 days after 1 Feb: 5/100 ÷ (30/365) × 100 = 60.8333 % (standards.md §1 trade example 60.8 %).
+    // 2nd: 30 days after 1 Feb: 5/100 ÷ (30/365) × 100 = 60.8333 % (docs/reference/standards.md §1 trade example 60.8 %).
     expect(rates[1]).toBeCloseTo(60.833333, 5);
-    // 3rd: 180 days after 3 Mar: 10/100 ÷ (180/365) × 100 = 20.2778 % (standards.md §1 worked example 20.28 %).
+    // 3rd: 180 days after 3 Mar: 10/100 ÷ (180/365) × 100 = 20.2778 % (docs/reference/standards.md §1 worked example 20.28 %).
     expect(rates[2]).toBeCloseTo(20.277778, 5);
     expect(r.body.leakRates.map((p: { days: number }) => p.days)).toEqual([365, 30, 180]);
     expect(r.body.leakRates.map((p: { exceeds: boolean }) => p.exceeds)).toEqual([false, true, true]);

@@ -40,7 +40,7 @@ beforeAll(async () => {
   ).body.id;
   const today = localToday("America/New_York");
   const tech = await signedIn("technician");
-  // 5 lb into 100 lb 30 days after the last addition: 60.8 % > 20 % (40 CFR 84.102; standards.md §1).
+  // 5 lb into 100 lb 30 days after the last addition: 60.8 % > 20 % (40 CFR 84.102; docs/reference/standards.md §1).
   await tech.post(`/api/systems/${systemId}/charge-additions`, {
     addedOn: daysBefore(today, 57),
     amount: { value: 3, unit: "lb" },

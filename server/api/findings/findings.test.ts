@@ -150,7 +150,7 @@ describe("findings: lifecycle and its role rules", () => {
     expect(r.body.error.message).toMatch(/initial verification test first/);
     r = await lead.post(`/api/findings/${f.id}/events`, { action: "initial-test", result: "passed" });
     expect(r.body).toMatchObject({ status: "repaired", nextActions: ["follow-up-test"] });
-    // Initial test passed: a follow-up verification test is due 10 days later (40 CFR 82 follow-up, standards.md §1 [M]).
+    // Initial test passed: a follow-up verification test is due 10 days later (40 CFR 82 follow-up, docs/reference/standards.md §1 [M]).
     const followUp = r.body.deadlines.find((d: { what: string }) => /Follow-up/.test(d.what));
     const initialOn = r.body.events.at(-1).on;
     const expected = new Date(Date.parse(`${initialOn}T00:00:00Z`) + 10 * 86_400_000).toISOString().slice(0, 10);

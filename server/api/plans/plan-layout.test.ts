@@ -492,8 +492,8 @@ describe("plan versions", () => {
   });
 
   it("re-calibrating once sweeps exist makes a new version; the old one does not move", async () => {
-    // Sweeps arrive with issue 4, so planHasSweeps is false for every plan today; the path it
-    // switches to is exercised directly here, on the real database.
+    // The versioning path is exercised directly here, on the real database, as well as through
+    // a plan that has sweeps.
     const lead = await signedIn("lead-tech");
     const { storeId, plan: v1 } = await calibratedPlan(lead, "Versions C"); // 0.05 m/px
     const list = sampleFixtures();

@@ -127,7 +127,7 @@ describe("starting a sweep", () => {
 
   it("warns when a heated-diode detector hunts R-744, and when a detector is overdue", async () => {
     const a = await as("technician");
-    // Heated-diode sensors respond to halogens only; R-744 has none (standards.md §6 via canDetect).
+    // Heated-diode sensors respond to halogens only; R-744 has none (docs/reference/standards.md §6 via canDetect).
     const s = await startSweep(a, { systemIds: [r448Id, r744Id] });
     expect(s.warnings).toHaveLength(1);
     expect(s.warnings[0]).toMatchObject({ code: "detector-blind", systemId: r744Id });

@@ -34,7 +34,7 @@ describe("systems", () => {
     expect(res.body.refrigerant).toMatchObject({ id: "R-448A", safetyClass: "A1" });
     // US federal profile: AR4 for the HFCs, AR5 (<1, taken as 1) for the two HFOs AR4 lacks:
     // 0.26×675 + 0.26×3500 + 0.21×1430 + 0.20×1 + 0.07×1 = 1386.07 → 1386 (hand calculation from
-    // the catalogue's IPCC values [S:G1]; standards.md §3 notes 1386 when HFOs are near zero).
+    // the catalogue's IPCC values [S:G1]; docs/reference/standards.md §3 notes 1386 when HFOs are near zero).
     expect(res.body.refrigerant.gwp).toMatchObject({ value: 1386, basis: "AR4 + AR5" });
     expect(res.body.cautions.map((c: { id: string }) => c.id)).toContain("oxygen-displacement");
     expect(res.body.cautions.at(-1).id).toBe("codes-govern");
@@ -55,7 +55,7 @@ describe("systems", () => {
       leakRateMethod: "annualizing",
       detectorCheckIntervalDays: 30,
     });
-    // standards.md §3 blend table: R-448A 1387 on AR4 with the 517/2014 HFO values.
+    // docs/reference/standards.md §3 blend table: R-448A 1387 on AR4 with the 517/2014 HFO values.
     expect((await owner.get(`/api/systems/${s.id}`)).body.refrigerant.gwp).toMatchObject({
       value: 1387,
       basis: "AR4 + EU-517/2014",

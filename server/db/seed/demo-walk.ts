@@ -1,7 +1,7 @@
 /**
  * A technician walking the demo store: along the dairy line and back, down the frozen doors, between
  * the produce islands, along the meat line and back, and past the bakery corner. A tap every ~1.3 m
- * on arrival at each stop (and a closer re-check pass where the story asks for one), walking at 0.9 m/s and pausing 1–4 s (issue 5's technician ranges). The
+ * on arrival at each stop (and a closer re-check pass where the story asks for one), walking at 0.9 m/s and pausing 1–4 s (docs/locator/design-ranges.md). The
  * detector sees the air drawn in one transport delay earlier, through a first-order response with its
  * time constant; the display shows lognormal noise (sigma 0.25, correlated from tap to tap) plus about
  * 0.5 ppm, rounded to whole ppm.

@@ -115,7 +115,7 @@ describe("demo records", () => {
     const [store] = today.stores;
     const findings = (await engineer.get(`/api/stores/${store.id}/findings`)).body.findings;
     expect(findings.map((f: { status: string }) => f.status).sort()).toEqual(["closed", "confirmed", "verified"]);
-    // The walk-in finding carries the room's wording of the oxygen caution (standards.md §8).
+    // The walk-in finding carries the room's wording of the oxygen caution (docs/reference/standards.md §8).
     const coil = findings.find((f: { status: string }) => f.status === "verified");
     expect(coil.fixtureLabel).toBe("Dairy walk-in cooler");
     expect(coil.cautions.find((c: { id: string }) => c.id === "oxygen-displacement").text).toMatch(/In this walk-in/);
