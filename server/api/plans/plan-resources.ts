@@ -1,6 +1,4 @@
 import type { AppContext, PlanImageLimits } from "../../context";
-import type { BlobStorage } from "../../storage/blob-storage";
-import { createDiskStorage } from "../../storage/disk-storage";
 import { createImageDecoder, type ImageDecoder } from "./image-decoder";
 
 export const DEFAULT_PLAN_IMAGE_LIMITS: PlanImageLimits = {
@@ -14,14 +12,6 @@ export const DEFAULT_PLAN_IMAGE_LIMITS: PlanImageLimits = {
 
 export function planImageLimits(ctx: AppContext): PlanImageLimits {
   return { ...DEFAULT_PLAN_IMAGE_LIMITS, ...ctx.config.planImageLimits };
-}
-
-const storages = new WeakMap<AppContext, BlobStorage>();
-export function planStorage(ctx: AppContext): BlobStorage {
-  if (ctx.storage) return ctx.storage;
-  let s = storages.get(ctx);
-  if (!s) storages.set(ctx, (s = createDiskStorage(ctx.config.uploadsDir)));
-  return s;
 }
 
 // One decoder worker per process: decoding is CPU-bound and the machine has two cores.
