@@ -2,7 +2,7 @@ import type { AppContext, PlanImageLimits } from "../../context";
 import { createImageDecoder, type ImageDecoder } from "./image-decoder";
 
 export const DEFAULT_PLAN_IMAGE_LIMITS: PlanImageLimits = {
-  maxBytes: 25 * 1024 * 1024, // the "up to 25 MB"
+  maxBytes: 25 * 1024 * 1024, // "up to 25 MB" (docs/product.md)
   // 40 MP decodes to 160 MB of RGBA in jimp: large enough for a 300-dpi A0 scan (≈ 14000 × 9900
   // would not fit, a 200-dpi one does), small enough that a bomb cannot exhaust memory.
   maxPixels: 40_000_000,
