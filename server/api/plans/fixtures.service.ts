@@ -5,17 +5,17 @@ import type { FixturesPatchInput, FixturesPutInput, FixturesResponse } from "#co
 import { fixtures, plans, systems } from "../../db/schema/index";
 import { describeFields } from "../../lib/zod-fields";
 import { HttpError } from "../../lib/http-error";
-import type { Viewer } from "../stores/store-access";
+import type { Viewer } from "../../access/store-access";
 import {
   assertCalibrated,
   assertCurrentVersion,
   assertRevision,
   loadVisiblePlan,
   lockPlan,
-  type DbOrTx,
-} from "./plan-access";
-import { fixtureToRow, planBounds, rowToFixture, type PlanRow } from "./plan-rows";
-import { insertFixtureRows, loadFixtureRows } from "./plan-versions";
+} from "../../access/plan-access";
+import type { DbOrTx } from "../../db/tx";
+import { fixtureToRow, planBounds, rowToFixture, type PlanRow } from "../../db/plans/plan-rows";
+import { insertFixtureRows, loadFixtureRows } from "../../db/plans/plan-versions";
 
 function fieldErrors(errors: FieldError[]): never {
   const fields: Record<string, string> = {};

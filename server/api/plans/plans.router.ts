@@ -12,7 +12,7 @@ import {
 import { member, requireMember } from "../../middleware/auth";
 import { singleUpload } from "../../middleware/upload";
 import { validate } from "../../middleware/validate";
-import { loadVisibleStore } from "../stores/store-access";
+import { loadVisibleStore } from "../../access/store-access";
 import { setAlignment } from "./alignment.service";
 import { calibratePlan } from "./calibration.service";
 import { getFixtures, patchFixtures, putFixtures } from "./fixtures.service";

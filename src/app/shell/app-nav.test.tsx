@@ -12,7 +12,7 @@ async function navLabels() {
     .map((link) => link.textContent);
 }
 
-// Expected menus follow the role table in PRODUCT.md and the grants in core/domain/roles.ts.
+// Expected menus follow the role table in docs/product.md and the grants in core/domain/roles.ts.
 const cases: { role: Role; outboxEnabled: boolean; expected: string[] }[] = [
   {
     role: "owner",
@@ -24,7 +24,7 @@ const cases: { role: Role; outboxEnabled: boolean; expected: string[] }[] = [
     outboxEnabled: false,
     expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"],
   },
-  // Engineers read everything (PRODUCT.md), detectors included.
+  // Engineers read everything (docs/product.md), detectors included.
   {
     role: "engineer",
     outboxEnabled: true,

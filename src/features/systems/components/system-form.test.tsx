@@ -1,6 +1,6 @@
 import { fireEvent, screen, waitFor } from "@testing-library/react";
 import { beforeEach, describe, expect, it } from "vitest";
-import { refrigerantCautions, summarizeRefrigerant } from "../../../../server/api/systems/refrigerant-summary";
+import { refrigerantCautions, summarizeRefrigerant } from "#core/domain/refrigerants/refrigerant-summary";
 import { REFRIGERANTS } from "#core/domain/refrigerants/catalogue";
 import { cautionsFor } from "#core/domain/safety/cautions";
 import { getRefrigerant } from "#core/domain/refrigerants/catalogue";
