@@ -21,59 +21,110 @@ export const analysisQuery = z.object({
 });
 export type AnalysisQuery = z.infer<typeof analysisQuery>;
 
-export interface AnalysisParams {
-  transportDelayS: number;
-  timeConstantS: number;
-  alarmPpm: number;
-  cellSize: number;
-}
+const point = z.object({ x: z.number(), y: z.number() });
 
+export const analysisParams = z.object({
+  transportDelayS: z.number(),
+  timeConstantS: z.number(),
+  alarmPpm: z.number(),
+  cellSize: z.number(),
+});
+export type AnalysisParams = z.infer<typeof analysisParams>;
+
+/** A suspect spot: the locator's `Candidate` (locator-output.ts; the checks at the end keep the two equal). */
+export const suspectSpot = z.object({
+  rank: z.number(),
+  x: z.number(),
+  y: z.number(),
+  radius: z.number(),
+  score: z.number(),
+  strength: z.number(),
+  strengthGPerYear: z.number(),
+  fixtureId: z.string().nullable(),
+  riskPointId: z.string().nullable(),
+  reason: z.string(),
+  nextCheck: z.string(),
+});
+export type SuspectSpot = z.infer<typeof suspectSpot>;
+
+const LOCATOR_DIAGNOSTIC_KINDS = [
+  "fans-mixing",
+  "benign-source",
+  "sparse-coverage",
+  "one-sided-pass",
+  "early-readings",
+  "over-range",
+] as const;
 /** API-added diagnostics beside the locator's own kinds. */
-export type AnalysisDiagnosticKind = Diagnostic["kind"] | "detector-overdue" | "detector-settings" | "delay-changed";
+const API_DIAGNOSTIC_KINDS = ["detector-overdue", "detector-settings", "delay-changed"] as const;
 
-export interface AnalysisDiagnostic {
-  kind: AnalysisDiagnosticKind;
-  message: string;
-  fixtureId?: string;
-  zoneId?: string;
-}
+export const analysisDiagnostic = z.object({
+  kind: z.enum([...LOCATOR_DIAGNOSTIC_KINDS, ...API_DIAGNOSTIC_KINDS]),
+  message: z.string(),
+  fixtureId: z.string().optional(),
+  zoneId: z.string().optional(),
+});
+export type AnalysisDiagnostic = z.infer<typeof analysisDiagnostic>;
+export type AnalysisDiagnosticKind = AnalysisDiagnostic["kind"];
 
-export interface AnalysisReading extends CorrectedReading {
+const READING_FLAGS = ["before-delay", "path-gap", "snapped", "over-range", "in-benign-zone"] as const;
+
+export const analysisReading = z.object({
+  index: z.number(),
   /** The stored reading's id (readings are analysed in time order). */
-  readingId: string;
-}
+  readingId: z.string(),
+  raw: point,
+  corrected: point,
+  t: z.number(),
+  ppm: z.number(),
+  flags: z.array(z.enum(READING_FLAGS)),
+});
+export type AnalysisReading = z.infer<typeof analysisReading>;
 
 /** Everything except the grid: stored as JSON in analyses.result. */
-export interface AnalysisSummary {
-  candidates: Candidate[];
-  background: { ppm: number };
-  diagnostics: AnalysisDiagnostic[];
-  assumptions: string[];
-  readings: AnalysisReading[];
-}
+export const analysisSummary = z.object({
+  candidates: z.array(suspectSpot),
+  background: z.object({ ppm: z.number() }),
+  diagnostics: z.array(analysisDiagnostic),
+  assumptions: z.array(z.string()),
+  readings: z.array(analysisReading),
+});
+export type AnalysisSummary = z.infer<typeof analysisSummary>;
 
-export interface EncodedField {
-  width: number;
-  height: number;
-  cellSize: number;
+export const encodedField = z.object({
+  width: z.number(),
+  height: z.number(),
+  cellSize: z.number(),
   /** base64 of Float32 little-endian ppm per cell, row-major; NaN where unknown. */
-  values: string;
+  values: z.string(),
   /** base64 of one byte per cell: confidence × 255. */
-  confidence: string;
-}
+  confidence: z.string(),
+});
+export type EncodedField = z.infer<typeof encodedField>;
 
-export interface AnalysisResponse extends AnalysisSummary {
-  sweepId: string;
-  params: AnalysisParams;
+/** The answer of GET /api/sweeps/:id/analysis; the client parses it with this same schema. */
+export const analysisResponse = analysisSummary.extend({
+  sweepId: z.string(),
+  params: analysisParams,
   /** Revision of the readings this result was computed from … */
-  readingsRevision: number;
+  readingsRevision: z.number(),
   /** … and the sweep's revision now. */
-  currentReadingsRevision: number;
+  currentReadingsRevision: z.number(),
   /** Readings changed since: the result is shown but must be recomputed. */
-  stale: boolean;
+  stale: z.boolean(),
   /** A recompute is running (ask again to get it). */
-  recomputing: boolean;
-  computedAt: string;
-  durationMs: number;
-  field: EncodedField;
-}
+  recomputing: z.boolean(),
+  computedAt: z.string(),
+  durationMs: z.number(),
+  field: encodedField,
+});
+export type AnalysisResponse = z.infer<typeof analysisResponse>;
+
+// The locator's own types and these schemas must describe the same values: a change to one side
+// that the other does not follow fails the typecheck here.
+type Same<A, B> = [A] extends [B] ? ([B] extends [A] ? true : false) : false;
+const sameSpot: Same<Candidate, SuspectSpot> = true;
+const sameKinds: Same<Diagnostic["kind"], (typeof LOCATOR_DIAGNOSTIC_KINDS)[number]> = true;
+const sameReading: Same<Omit<CorrectedReading, "flags">, Omit<AnalysisReading, "readingId" | "flags">> = true;
+const sameFlags: Same<CorrectedReading["flags"][number], AnalysisReading["flags"][number]> = true;
+void [sameSpot, sameKinds, sameReading, sameFlags];

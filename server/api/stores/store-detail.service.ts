@@ -1,4 +1,5 @@
 import { desc, eq } from "drizzle-orm";
+import type { StoreDetailResponse } from "#core/contracts/list-responses";
 import type { AppContext } from "../../context";
 import { plans } from "../../db/schema/index";
 import type { Viewer } from "../../access/store-access";
@@ -9,7 +10,7 @@ import { toPlan } from "../../db/plans/plan-rows";
 import { listSystems } from "../systems/systems.service";
 
 /** The store page: the store, its systems, the current plan and a summary of every plan version. */
-export async function getStoreDetail(ctx: AppContext, viewer: Viewer, storeId: string) {
+export async function getStoreDetail(ctx: AppContext, viewer: Viewer, storeId: string): Promise<StoreDetailResponse> {
   const store = await loadVisibleStore(ctx, viewer, storeId);
   const [systemList, planRows] = await Promise.all([
     listSystems(ctx, viewer, storeId),

@@ -8,10 +8,10 @@ import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
 import { Select } from "../../components/ui/select";
 import { Spinner } from "../../components/ui/spinner";
-import { useStores } from "../../features/stores/api/get-stores";
-import { useAnalysis } from "../../features/fieldmap/api/get-analysis";
+import { usePlanFixtures, usePlans } from "../../entities/plans/plans-api";
+import { useStores } from "../../entities/stores/stores-api";
+import { useAnalysis } from "../../entities/sweeps/analysis-api";
 import { useFixtureTrends } from "../../features/fieldmap/api/get-fixture-trends";
-import { usePlanFixtures, useStorePlans } from "../../features/fieldmap/api/get-plans";
 import { FieldCanvas } from "../../features/fieldmap/components/field-canvas";
 import { RampLegend } from "../../features/fieldmap/components/ramp-legend";
 import { TrendSparkline } from "../../features/fieldmap/components/trend-sparkline";
@@ -28,7 +28,7 @@ export function Component() {
   const [search, setSearch] = useSearchParams();
   const trends = useFixtureTrends(storeId, search.get("a"), search.get("b"));
   const stores = useStores();
-  const plans = useStorePlans(storeId);
+  const plans = usePlans(storeId);
   const store = stores.data?.find((s) => s.id === storeId);
   const timeZone = store?.timeZone ?? "UTC";
   const day = (iso: string) =>

@@ -4,7 +4,7 @@ import { can } from "#core/domain/roles";
 import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
 import { Spinner } from "../../components/ui/spinner";
-import { useFinding } from "../../features/findings/api/get-findings";
+import { useFinding } from "../../entities/findings/findings-api";
 import { FindingActions } from "../../features/findings/components/finding-actions";
 import { FindingView } from "../../features/findings/components/finding-view";
 import { useDocumentTitle } from "../../lib/use-document-title";

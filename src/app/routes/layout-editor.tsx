@@ -1,14 +1,14 @@
+import { useQuery } from "@tanstack/react-query";
 import { Link, useParams } from "react-router";
 import { can } from "#core/domain/roles";
 import { Alert } from "../../components/ui/alert";
 import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
 import { Spinner } from "../../components/ui/spinner";
-import { useFixtures } from "../../features/layout/api/get-fixtures";
-import { usePlan } from "../../features/layout/api/get-plan";
+import { planFixturesQueryOptions, usePlan } from "../../entities/plans/plans-api";
+import { useStore } from "../../entities/stores/stores-api";
+import { useSystems } from "../../entities/systems/systems-api";
 import { LayoutEditor } from "../../features/layout/components/editor/layout-editor";
-import { useStore } from "../../features/stores/api/get-store";
-import { useSystems } from "../../features/systems/api/get-systems";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
 import { useUnitPreferences } from "../shell/use-unit-preferences";
@@ -21,7 +21,8 @@ export function Component() {
   const units = useUnitPreferences();
   const store = useStore(storeId);
   const plan = usePlan(planId);
-  const fixtures = useFixtures(planId);
+  // The editor owns the fixtures while it is open: no background refetch replaces a draft.
+  const fixtures = useQuery({ ...planFixturesQueryOptions(planId), staleTime: Infinity });
   const systems = useSystems(storeId);
   useDocumentTitle(store.data ? `Layout · ${store.data.name}` : "Layout editor");
 

@@ -4,8 +4,8 @@ import { EmptyState } from "../../components/ui/empty-state";
 import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
 import { Spinner } from "../../components/ui/spinner";
-import { useStores } from "../../features/stores/api/get-stores";
-import { useStoreSweeps } from "../../features/fieldmap/api/get-sweeps";
+import { useStores } from "../../entities/stores/stores-api";
+import { useSweeps as useStoreSweeps } from "../../entities/sweeps/sweeps-api";
 import { useDocumentTitle } from "../../lib/use-document-title";
 
 /** A store's sweeps, newest first, each opening its field map. */

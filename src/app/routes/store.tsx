@@ -3,7 +3,7 @@ import { can } from "#core/domain/roles";
 import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
 import { Spinner } from "../../components/ui/spinner";
-import { useStore } from "../../features/stores/api/get-store";
+import { useStore } from "../../entities/stores/stores-api";
 import { StoreSummary } from "../../features/stores/components/store-summary";
 import { StartSweepLink } from "../../features/walk/components/start-sweep-link";
 import { useKeepStoreOnDevice } from "../../features/walk/hooks/use-keep-store-on-device";

@@ -8,11 +8,12 @@ import { Button } from "../../components/ui/button";
 import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
 import { Spinner } from "../../components/ui/spinner";
-import { useStores } from "../../features/stores/api/get-stores";
-import { useAnalysis } from "../../features/fieldmap/api/get-analysis";
-import { usePlanFixtures, useStorePlans } from "../../features/fieldmap/api/get-plans";
-import { useSweep } from "../../features/fieldmap/api/get-sweeps";
-import { useFindingFromSpot, useStoreFindings } from "../../features/fieldmap/api/findings";
+import { useFindings } from "../../entities/findings/findings-api";
+import { usePlanFixtures, usePlans } from "../../entities/plans/plans-api";
+import { useStores } from "../../entities/stores/stores-api";
+import { useAnalysis } from "../../entities/sweeps/analysis-api";
+import { useSweep } from "../../entities/sweeps/sweeps-api";
+import { useFindingFromSpot } from "../../features/fieldmap/api/findings";
 import { useReviewSweep } from "../../features/fieldmap/api/reports";
 import { DelayControl } from "../../features/fieldmap/components/delay-control";
 import { FieldCanvas } from "../../features/fieldmap/components/field-canvas";
@@ -37,12 +38,12 @@ export function Component() {
   const { session, membership } = useSignedIn();
   const unit = session.units.length;
   const sweep = useSweep(sweepId);
-  const plans = useStorePlans(storeId);
+  const plans = usePlans(storeId);
   const stores = useStores();
   const plan = plans.data?.find((p) => p.id === sweep.data?.planId);
   const fixtures = usePlanFixtures(sweep.data?.planId);
   const analysis = useAnalysis(sweepId, delay, !!sweep.data);
-  const findings = useStoreFindings(storeId);
+  const findings = useFindings(storeId);
   const review = useReviewSweep(sweepId);
   const makeFinding = useFindingFromSpot(storeId, sweepId, sweep.data?.planId ?? "");
   const [layers, setLayers] = useState(DEFAULT_LAYERS);
@@ -225,7 +226,6 @@ export function Component() {
           <section>
             <h2 className="mb-2 text-xl font-bold">Findings</h2>
             <FindingsPanel
-              storeId={storeId}
               findings={sweepFindings}
               canRecord={can(membership.role, "findings.record")}
               today={today}

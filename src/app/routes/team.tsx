@@ -2,7 +2,7 @@ import { can } from "#core/domain/roles";
 import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
 import { Spinner } from "../../components/ui/spinner";
-import { useStores } from "../../features/stores/api/get-stores";
+import { useStores } from "../../entities/stores/stores-api";
 import { useTeam } from "../../features/team/api/get-team";
 import { InvitationsList } from "../../features/team/components/invitations-list";
 import { InviteForm } from "../../features/team/components/invite-form";

@@ -5,7 +5,7 @@ import { Button } from "../../components/ui/button";
 import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
 import { Spinner } from "../../components/ui/spinner";
-import { useToday } from "../../features/compliance/api/get-today";
+import { useToday } from "../../entities/records/records-api";
 import { useSendDigestNow } from "../../features/compliance/api/send-digest";
 import { TodayView } from "../../features/compliance/components/today-view";
 import { formErrorMessage } from "../../lib/form-errors";

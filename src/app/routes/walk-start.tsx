@@ -3,7 +3,7 @@ import { can } from "#core/domain/roles";
 import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
 import { Spinner } from "../../components/ui/spinner";
-import { useStores } from "../../features/stores/api/get-stores";
+import { useStores } from "../../entities/stores/stores-api";
 import { StartSweepForm } from "../../features/walk/components/start-sweep-form";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";

@@ -10,7 +10,8 @@ import {
   systemRecords,
 } from "#core/contracts/compliance";
 import { api } from "../../../lib/api-client";
-import { complianceKeys } from "./compliance-keys";
+import { invalidateEntity } from "../../../entities/invalidate";
+import { recordsKeys } from "../../../entities/records/records-keys";
 
 type Action =
   | { kind: "add"; systemId: string; input: z.input<typeof chargeAdditionInput> }
@@ -43,8 +44,8 @@ export function useRecordCharge(options: { onDone?: () => void } = {}) {
   return useMutation({
     mutationFn: recordCharge,
     onSuccess: (records) => {
-      queryClient.setQueryData(complianceKeys.record(records.system.id), records);
-      void queryClient.invalidateQueries({ queryKey: complianceKeys.all });
+      queryClient.setQueryData(recordsKeys.system(records.system.id), records);
+      void invalidateEntity(queryClient, "charge");
       options.onDone?.();
     },
   });

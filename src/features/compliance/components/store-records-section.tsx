@@ -2,7 +2,7 @@ import { Link } from "react-router";
 import { COMPONENT_LABELS, type FINDING_COMPONENTS } from "#core/contracts/findings";
 import { QueryError } from "../../../components/ui/query-error";
 import { Spinner } from "../../../components/ui/spinner";
-import { useToday } from "../api/get-today";
+import { useToday } from "../../../entities/records/records-api";
 import { daysInWords, formatPercent, STATE_LABELS } from "../model/figures";
 
 /** The store page's records section: each system's latest leak rate, what is due, open findings. */

@@ -3,6 +3,8 @@ import { z } from "zod";
 import { reportRecipient, reportSend, type SendReportInput } from "#core/contracts/reports";
 import { sweep } from "#core/contracts/sweeps";
 import { api } from "../../../lib/api-client";
+import { invalidateEntity } from "../../../entities/invalidate";
+import { sweepsKeys } from "../../../entities/sweeps/sweeps-keys";
 import { fieldmapKeys } from "./fieldmap-keys";
 
 export function useReportSends(sweepId: string) {
@@ -43,8 +45,8 @@ export function useReviewSweep(sweepId: string) {
   return useMutation({
     mutationFn: () => api.post(`/api/sweeps/${sweepId}/review`, sweep),
     onSuccess: (s) => {
-      qc.setQueryData(fieldmapKeys.sweep(sweepId), s);
-      void qc.invalidateQueries({ queryKey: fieldmapKeys.sweeps(s.storeId) });
+      qc.setQueryData(sweepsKeys.detail(sweepId), s);
+      void invalidateEntity(qc, "sweep");
     },
   });
 }

@@ -2,12 +2,13 @@ import { useState } from "react";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
-import { useMarkRepaired, type SweepFinding } from "../api/findings";
+import type { FindingDetail as SweepFinding } from "#core/contracts/finding-actions";
+import { useMarkRepaired } from "../api/findings";
 
-function RepairForm({ storeId, finding, today }: { storeId: string; finding: SweepFinding; today: string }) {
+function RepairForm({ finding, today }: { finding: SweepFinding; today: string }) {
   const [on, setOn] = useState(today);
   const [note, setNote] = useState("");
-  const repair = useMarkRepaired(storeId);
+  const repair = useMarkRepaired();
   const noteError = repair.isError && note.trim() === "" ? "Say what was repaired" : undefined;
   return (
     <form
@@ -42,13 +43,11 @@ function RepairForm({ storeId, finding, today }: { storeId: string; finding: Swe
 
 /** Findings made from this sweep, with the repair step for those still open. */
 export function FindingsPanel({
-  storeId,
   findings,
   canRecord,
   today,
   label,
 }: {
-  storeId: string;
   findings: SweepFinding[];
   canRecord: boolean;
   today: string;
@@ -72,7 +71,7 @@ export function FindingsPanel({
             ))}
           </ul>
           {canRecord && (f.status === "suspected" || f.status === "confirmed") ? (
-            <RepairForm storeId={storeId} finding={f} today={today} />
+            <RepairForm finding={f} today={today} />
           ) : null}
         </li>
       ))}

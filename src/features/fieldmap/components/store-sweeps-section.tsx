@@ -2,7 +2,7 @@ import { Link } from "react-router";
 import { countOf } from "../../../lib/format";
 import { QueryError } from "../../../components/ui/query-error";
 import { Spinner } from "../../../components/ui/spinner";
-import { useStoreSweeps } from "../api/get-sweeps";
+import { useSweeps as useStoreSweeps } from "../../../entities/sweeps/sweeps-api";
 
 const LINK = "inline-flex min-h-11 items-center rounded-md px-4 font-bold no-underline";
 

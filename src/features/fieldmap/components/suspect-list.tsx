@@ -1,6 +1,6 @@
 import { formatLength, type LengthPreference } from "#core/domain/units/format-units";
 import { Button } from "../../../components/ui/button";
-import type { SuspectSpot } from "../api/get-analysis";
+import type { SuspectSpot } from "#core/contracts/analysis";
 
 export interface SuspectListProps {
   spots: SuspectSpot[];

@@ -3,7 +3,8 @@ import type { z } from "zod";
 import { findingActionInput, findingDetail } from "#core/contracts/finding-actions";
 import { createFindingInput } from "#core/contracts/findings";
 import { api, apiUpload } from "../../../lib/api-client";
-import { findingsKeys } from "./findings-keys";
+import { findingsKeys } from "../../../entities/findings/findings-keys";
+import { invalidateEntity } from "../../../entities/invalidate";
 
 type Change =
   | { kind: "create"; storeId: string; input: z.input<typeof createFindingInput> }
@@ -31,8 +32,7 @@ export function useChangeFinding(options: { onDone?: (id: string) => void } = {}
     mutationFn: changeFinding,
     onSuccess: (finding) => {
       queryClient.setQueryData(findingsKeys.detail(finding.id), finding);
-      void queryClient.invalidateQueries({ queryKey: findingsKeys.lists() });
-      void queryClient.invalidateQueries({ queryKey: ["compliance"] });
+      void invalidateEntity(queryClient, "finding");
       options.onDone?.(finding.id);
     },
   });

@@ -1,7 +1,8 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { calibrationResponse, type CalibrationInput } from "#core/contracts/plans";
 import { api } from "../../../lib/api-client";
-import { plansKeys } from "./plans-keys";
+import { invalidateEntity } from "../../../entities/invalidate";
+import { fixturesKeys, plansKeys } from "../../../entities/plans/plans-keys";
 
 /** Saves the scale; the answer says whether fixtures were rescaled or a new version was made (sweeps exist). */
 export function calibratePlan({ planId, input }: { planId: string; input: CalibrationInput }) {
@@ -14,7 +15,9 @@ export function useCalibratePlan() {
     mutationFn: calibratePlan,
     onSuccess: ({ plan }) => {
       queryClient.setQueryData(plansKeys.detail(plan.id), plan);
-      return queryClient.invalidateQueries({ queryKey: plansKeys.list(plan.storeId) });
+      // A rescale moved the fixtures in place.
+      void queryClient.invalidateQueries({ queryKey: fixturesKeys.list(plan.id) });
+      return invalidateEntity(queryClient, "plan");
     },
   });
 }

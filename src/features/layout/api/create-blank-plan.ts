@@ -1,7 +1,8 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { plan, type BlankPlanInput } from "#core/contracts/plans";
 import { api } from "../../../lib/api-client";
-import { plansKeys } from "./plans-keys";
+import { invalidateEntity } from "../../../entities/invalidate";
+import { plansKeys } from "../../../entities/plans/plans-keys";
 
 export function createBlankPlan({ storeId, input }: { storeId: string; input: BlankPlanInput }) {
   return api.post(`/api/stores/${storeId}/plans/blank`, plan, input);
@@ -13,7 +14,7 @@ export function useCreateBlankPlan() {
     mutationFn: createBlankPlan,
     onSuccess: (saved) => {
       queryClient.setQueryData(plansKeys.detail(saved.id), saved);
-      return queryClient.invalidateQueries({ queryKey: plansKeys.list(saved.storeId) });
+      return invalidateEntity(queryClient, "plan");
     },
   });
 }

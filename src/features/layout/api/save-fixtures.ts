@@ -2,8 +2,8 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { Fixture } from "#core/contracts/fixtures";
 import { fixturesResponse } from "#core/contracts/plans";
 import { api } from "../../../lib/api-client";
-import { layoutKeys } from "./layout-keys";
-import { plansKeys } from "./plans-keys";
+import { invalidateEntity } from "../../../entities/invalidate";
+import { fixturesKeys } from "../../../entities/plans/plans-keys";
 
 /**
  * Replaces the plan's fixtures if nobody saved since `layoutRevision`; otherwise the server
@@ -26,9 +26,8 @@ export function useSaveFixtures() {
   return useMutation({
     mutationFn: saveFixtures,
     onSuccess: (saved) => {
-      queryClient.setQueryData(layoutKeys.planFixtures(saved.planId), saved);
-      // The plan's fixture count and revision changed.
-      return queryClient.invalidateQueries({ queryKey: plansKeys.all });
+      queryClient.setQueryData(fixturesKeys.list(saved.planId), saved);
+      return invalidateEntity(queryClient, "fixtures");
     },
   });
 }

@@ -1,7 +1,8 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { plan, type AlignmentInput } from "#core/contracts/plans";
 import { api } from "../../../lib/api-client";
-import { plansKeys } from "./plans-keys";
+import { invalidateEntity } from "../../../entities/invalidate";
+import { plansKeys } from "../../../entities/plans/plans-keys";
 
 /** Stores how this version lies on the previous one, from two matched points. */
 export function setAlignment({ planId, input }: { planId: string; input: AlignmentInput }) {
@@ -14,7 +15,7 @@ export function useSetAlignment() {
     mutationFn: setAlignment,
     onSuccess: (saved) => {
       queryClient.setQueryData(plansKeys.detail(saved.id), saved);
-      return queryClient.invalidateQueries({ queryKey: plansKeys.list(saved.storeId) });
+      return invalidateEntity(queryClient, "plan");
     },
   });
 }

@@ -1,7 +1,8 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { plan } from "#core/contracts/plans";
 import { api } from "../../../lib/api-client";
-import { plansKeys } from "./plans-keys";
+import { invalidateEntity } from "../../../entities/invalidate";
+import { plansKeys } from "../../../entities/plans/plans-keys";
 
 /** The server checks the content (magic bytes, pixel budget, a full decode); these only catch the obvious early. */
 export const PLAN_IMAGE_TYPES = ["image/png", "image/jpeg"] as const;
@@ -19,7 +20,7 @@ export function useUploadPlan() {
     mutationFn: uploadPlan,
     onSuccess: (saved) => {
       queryClient.setQueryData(plansKeys.detail(saved.id), saved);
-      return queryClient.invalidateQueries({ queryKey: plansKeys.list(saved.storeId) });
+      return invalidateEntity(queryClient, "plan");
     },
   });
 }

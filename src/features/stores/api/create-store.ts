@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { store, storeInput, type StoreInput } from "#core/contracts/stores";
 import { api } from "../../../lib/api-client";
-import { storesKeys } from "./stores-keys";
+import { invalidateEntity } from "../../../entities/invalidate";
 
 export const createStoreInput = storeInput;
 
@@ -13,6 +13,6 @@ export function useCreateStore() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: createStore,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: storesKeys.lists() }),
+    onSuccess: () => invalidateEntity(queryClient, "store"),
   });
 }

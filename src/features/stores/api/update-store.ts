@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { store, storeUpdateInput, type StoreUpdateInput } from "#core/contracts/stores";
 import { api } from "../../../lib/api-client";
-import { storesKeys } from "./stores-keys";
+import { invalidateEntity } from "../../../entities/invalidate";
 
 export const updateStoreInput = storeUpdateInput;
 
@@ -13,9 +13,6 @@ export function useUpdateStore() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: updateStore,
-    onSuccess: (saved) => {
-      queryClient.setQueryData(storesKeys.detail(saved.id), saved);
-      return queryClient.invalidateQueries({ queryKey: storesKeys.lists() });
-    },
+    onSuccess: () => invalidateEntity(queryClient, "store"),
   });
 }

@@ -9,8 +9,8 @@ import { Select } from "../../../components/ui/select";
 import { Spinner } from "../../../components/ui/spinner";
 import { TextField } from "../../../components/ui/text-field";
 import { formatDateInZone } from "../model/store-time";
-import { useStores } from "../api/get-stores";
-import type { StoreListFilter } from "../api/stores-keys";
+import { useStores } from "../../../entities/stores/stores-api";
+import type { StoreListFilter } from "../../../entities/stores/stores-keys";
 
 const SORTS = [
   { value: "name-asc", label: "Name, A to Z" },

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { system, systemInput, type SystemInput } from "#core/contracts/systems";
 import { api } from "../../../lib/api-client";
-import { systemsKeys } from "./systems-keys";
+import { invalidateEntity } from "../../../entities/invalidate";
 
 export const createSystemInput = systemInput;
 
@@ -13,6 +13,6 @@ export function useCreateSystem() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: createSystem,
-    onSuccess: (_saved, { storeId }) => queryClient.invalidateQueries({ queryKey: systemsKeys.list(storeId) }),
+    onSuccess: () => invalidateEntity(queryClient, "system"),
   });
 }

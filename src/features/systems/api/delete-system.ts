@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { api } from "../../../lib/api-client";
-import { systemsKeys } from "./systems-keys";
+import { invalidateEntity } from "../../../entities/invalidate";
 
 export function deleteSystem({ id }: { id: string; storeId: string }) {
   return api.delete(`/api/systems/${id}`);
@@ -10,6 +10,6 @@ export function useDeleteSystem() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: deleteSystem,
-    onSuccess: (_r, { storeId }) => queryClient.invalidateQueries({ queryKey: systemsKeys.list(storeId) }),
+    onSuccess: () => invalidateEntity(queryClient, "system"),
   });
 }

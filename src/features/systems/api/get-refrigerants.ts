@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { refrigerantListResponse } from "#core/contracts/systems";
 import { api } from "../../../lib/api-client";
-import { systemsKeys } from "./systems-keys";
+import { refrigerantKeys } from "./systems-keys";
 
 /** The catalogue with GWP on the company's chosen basis and each refrigerant's cautions. */
 export async function getRefrigerants(signal?: AbortSignal) {
@@ -11,7 +11,7 @@ export async function getRefrigerants(signal?: AbortSignal) {
 
 export function refrigerantsQueryOptions() {
   return queryOptions({
-    queryKey: systemsKeys.refrigerants(),
+    queryKey: refrigerantKeys.all,
     queryFn: ({ signal }) => getRefrigerants(signal),
     staleTime: 60 * 60 * 1000,
   });

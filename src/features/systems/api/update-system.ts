@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { system, type SystemUpdateInput } from "#core/contracts/systems";
 import { api } from "../../../lib/api-client";
-import { systemsKeys } from "./systems-keys";
+import { invalidateEntity } from "../../../entities/invalidate";
 
 export function updateSystem({ id, input }: { id: string; input: SystemUpdateInput }) {
   return api.patch(`/api/systems/${id}`, system, input);
@@ -11,6 +11,6 @@ export function useUpdateSystem() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: updateSystem,
-    onSuccess: (saved) => queryClient.invalidateQueries({ queryKey: systemsKeys.list(saved.storeId) }),
+    onSuccess: () => invalidateEntity(queryClient, "system"),
   });
 }

@@ -9,7 +9,7 @@ import { QueryError } from "../../../components/ui/query-error";
 import { Spinner } from "../../../components/ui/spinner";
 import { formErrorMessage } from "../../../lib/form-errors";
 import { useDeleteSystem } from "../api/delete-system";
-import { useSystems } from "../api/get-systems";
+import { useSystems } from "../../../entities/systems/systems-api";
 import { SystemForm } from "./system-form";
 
 /** The store page's systems: racks and condensing units with refrigerant, charge and detection. */

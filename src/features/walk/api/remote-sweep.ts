@@ -1,6 +1,4 @@
-import { z } from "zod";
-import { reading, sweep } from "#core/contracts/sweeps";
-import { api } from "../../../lib/api-client";
+import { getSweep, getSweepReadings } from "../../../entities/sweeps/sweeps-api";
 import type { LocalReading, LocalSweep } from "../model/local-types";
 import type { WalkDb } from "../model/walk-db";
 
@@ -9,8 +7,8 @@ import type { WalkDb } from "../model/walk-db";
  * readings from the server into IndexedDB, so the Walk screen works the same from here on.
  */
 export async function pullSweep(db: WalkDb, sweepId: string): Promise<LocalSweep> {
-  const s = await api.get(`/api/sweeps/${sweepId}`, sweep);
-  const { readings } = await api.get(`/api/sweeps/${sweepId}/readings`, z.object({ readings: z.array(reading) }));
+  const s = await getSweep(sweepId);
+  const readings = await getSweepReadings(sweepId);
   const local: LocalSweep = {
     id: s.id,
     storeId: s.storeId,

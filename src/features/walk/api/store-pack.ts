@@ -1,27 +1,17 @@
-import { queryOptions, useQuery } from "@tanstack/react-query";
-import { z } from "zod";
-import { detector, type Detector } from "#core/contracts/detectors";
-import { fixturesResponse, plan, type FixturesResponse, type Plan } from "#core/contracts/plans";
-import { store, type Store } from "#core/contracts/stores";
-import { system, type System } from "#core/contracts/systems";
-import { api } from "../../../lib/api-client";
+import { queryOptions, useQuery, type QueryClient } from "@tanstack/react-query";
+import type { Detector } from "#core/contracts/detectors";
+import type { StoreDetailResponse } from "#core/contracts/list-responses";
+import type { FixturesResponse, Plan } from "#core/contracts/plans";
+import type { Store } from "#core/contracts/stores";
+import type { System } from "#core/contracts/systems";
+import { detectorsQueryOptions } from "../../../entities/detectors/detectors-api";
+import { planFixturesQueryOptions, planQueryOptions } from "../../../entities/plans/plans-api";
+import { storeDetailQueryOptions } from "../../../entities/stores/stores-api";
 import { walkDb } from "../model/walk-db";
 import { walkKeys } from "./walk-keys";
 
-const storeDetail = z.object({
-  store,
-  systems: z.array(system),
-  currentPlan: plan.nullable(),
-  planVersions: z.array(
-    z.object({
-      id: z.string(),
-      version: z.number(),
-      calibrated: z.boolean(),
-      fixtureCount: z.number(),
-      createdAt: z.string(),
-    }),
-  ),
-});
+// The Walk screen's device copy: the same entity queries the other screens read (so one fetch
+// serves both), saved in IndexedDB so a sweep can start and run without a connection.
 
 /** Everything a sweep of a store needs, kept on the device so a sweep can start offline. */
 export interface StorePack {
@@ -29,7 +19,7 @@ export interface StorePack {
   systems: System[];
   detectors: Detector[];
   currentPlan: Plan | null;
-  planVersions: z.infer<typeof storeDetail>["planVersions"];
+  planVersions: StoreDetailResponse["planVersions"];
   savedAt: string;
   fromCache: boolean;
 }
@@ -48,9 +38,11 @@ async function read<T>(key: string): Promise<T | undefined> {
 }
 
 /** Fetches a plan version with its fixtures and display image, and keeps a copy on the device. */
-export async function fetchPlanPack(planId: string): Promise<PlanPack> {
-  const p = await api.get(`/api/plans/${planId}`, plan);
-  const f = await api.get(`/api/plans/${planId}/fixtures`, fixturesResponse);
+export async function fetchPlanPack(queryClient: QueryClient, planId: string): Promise<PlanPack> {
+  const [p, f] = await Promise.all([
+    queryClient.fetchQuery(planQueryOptions(planId)),
+    queryClient.fetchQuery(planFixturesQueryOptions(planId)),
+  ]);
   let image: Blob | null = null;
   if (p.image) {
     const res = await fetch(p.image.displayUrl, { credentials: "same-origin" });
@@ -62,13 +54,15 @@ export async function fetchPlanPack(planId: string): Promise<PlanPack> {
 }
 
 /** The store's pack from the server (cached as a side effect), or the device's copy when offline. */
-export async function loadStorePack(storeId: string): Promise<StorePack> {
+export async function loadStorePack(queryClient: QueryClient, storeId: string): Promise<StorePack> {
   try {
-    const detail = await api.get(`/api/stores/${storeId}`, storeDetail);
-    const detectors = (await api.get("/api/detectors", z.object({ detectors: z.array(detector) }))).detectors;
+    const [detail, detectors] = await Promise.all([
+      queryClient.fetchQuery(storeDetailQueryOptions(storeId)),
+      queryClient.fetchQuery(detectorsQueryOptions(false)),
+    ]);
     const pack: StorePack = { ...detail, detectors, savedAt: new Date().toISOString(), fromCache: false };
     await put(`store:${storeId}`, pack);
-    if (detail.currentPlan?.calibrated) await fetchPlanPack(detail.currentPlan.id);
+    if (detail.currentPlan?.calibrated) await fetchPlanPack(queryClient, detail.currentPlan.id);
     return pack;
   } catch (e) {
     const cached = await read<StorePack>(`store:${storeId}`);
@@ -78,16 +72,16 @@ export async function loadStorePack(storeId: string): Promise<StorePack> {
 }
 
 /** The plan from the device first (it is what the sweep was started on), then the server. */
-export async function loadPlanPack(planId: string): Promise<PlanPack> {
+export async function loadPlanPack(queryClient: QueryClient, planId: string): Promise<PlanPack> {
   const cached = await read<PlanPack>(`plan:${planId}`);
   if (cached) return cached;
-  return fetchPlanPack(planId);
+  return fetchPlanPack(queryClient, planId);
 }
 
 export function storePackQueryOptions(storeId: string) {
   return queryOptions({
     queryKey: walkKeys.storePack(storeId),
-    queryFn: () => loadStorePack(storeId),
+    queryFn: ({ client }) => loadStorePack(client, storeId),
     retry: false,
     staleTime: 60_000,
   });
@@ -100,7 +94,7 @@ export function useStorePack(storeId: string | undefined) {
 export function usePlanPack(planId: string | undefined) {
   return useQuery({
     queryKey: walkKeys.planPack(planId ?? ""),
-    queryFn: () => loadPlanPack(planId!),
+    queryFn: ({ client }) => loadPlanPack(client, planId!),
     enabled: !!planId,
     retry: false,
     staleTime: Infinity,

@@ -2,5 +2,4 @@ export const walkKeys = {
   all: ["walk"] as const,
   storePack: (storeId: string) => [...walkKeys.all, "store-pack", storeId] as const,
   planPack: (planId: string) => [...walkKeys.all, "plan-pack", planId] as const,
-  sweep: (sweepId: string) => [...walkKeys.all, "sweep", sweepId] as const,
 };

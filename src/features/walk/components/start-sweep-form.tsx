@@ -1,3 +1,4 @@
+import { useQueryClient } from "@tanstack/react-query";
 import { useEffect, useMemo, useState } from "react";
 import { startWarnings } from "#core/domain/sweeps/start-warnings";
 import { Alert } from "../../../components/ui/alert";
@@ -17,6 +18,7 @@ import { walkDb } from "../model/walk-db";
  */
 export function StartSweepForm({ storeId, onStarted }: { storeId: string; onStarted(sweepId: string): void }) {
   const pack = useStorePack(storeId);
+  const queryClient = useQueryClient();
   const [planId, setPlanId] = useState("");
   const [detectorId, setDetectorId] = useState("");
   const [systemIds, setSystemIds] = useState<string[]>([]);
@@ -55,7 +57,7 @@ export function StartSweepForm({ storeId, onStarted }: { storeId: string; onStar
     setBusy(true);
     setError(null);
     try {
-      if (!data!.fromCache && planId !== data!.currentPlan?.id) await fetchPlanPack(planId);
+      if (!data!.fromCache && planId !== data!.currentPlan?.id) await fetchPlanPack(queryClient, planId);
       const sweep: LocalSweep = {
         id: crypto.randomUUID(),
         storeId,

@@ -6,7 +6,7 @@ import { Alert } from "../../../../components/ui/alert";
 import { Button } from "../../../../components/ui/button";
 import { Spinner } from "../../../../components/ui/spinner";
 import { useHtmlImage } from "../../../../lib/use-html-image";
-import { getFixtures } from "../../api/get-fixtures";
+import { getPlanFixtures as getFixtures } from "../../../../entities/plans/plans-api";
 import { useAutosave } from "../../hooks/use-autosave";
 import { useEditorHistory } from "../../hooks/use-editor-history";
 import { useEditorShortcuts, VIEW_KEY_HELP } from "../../hooks/use-editor-shortcuts";

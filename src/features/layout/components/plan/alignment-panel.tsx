@@ -5,7 +5,7 @@ import { Button } from "../../../../components/ui/button";
 import { Checkbox } from "../../../../components/ui/checkbox";
 import { Spinner } from "../../../../components/ui/spinner";
 import { formErrorMessage, serverFieldErrors } from "../../../../lib/form-errors";
-import { usePlan } from "../../api/get-plan";
+import { usePlan } from "../../../../entities/plans/plans-api";
 import { useSetAlignment } from "../../api/set-alignment";
 import { imageToPlan, type ImagePoint } from "../../model/coordinates";
 import { ImagePointPicker } from "./image-point-picker";

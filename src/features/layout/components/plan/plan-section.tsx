@@ -8,7 +8,7 @@ import { EmptyState } from "../../../../components/ui/empty-state";
 import { QueryError } from "../../../../components/ui/query-error";
 import { Spinner } from "../../../../components/ui/spinner";
 import { formatDate } from "../../../../lib/format";
-import { usePlans } from "../../api/get-plans";
+import { usePlans } from "../../../../entities/plans/plans-api";
 import { AlignmentPanel } from "./alignment-panel";
 import { CalibrationPanel } from "./calibration-panel";
 import { PlanUploadForm } from "./plan-upload-form";

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { systemListResponse } from "#core/contracts/systems";
-import { api } from "../../../lib/api-client";
+import { api } from "../../lib/api-client";
 import { systemsKeys } from "./systems-keys";
 
 export async function getSystems(storeId: string, signal?: AbortSignal) {

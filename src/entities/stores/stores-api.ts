@@ -1,6 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from "@tanstack/react-query";
+import { storeDetailResponse } from "#core/contracts/list-responses";
 import { storeListResponse, type Store } from "#core/contracts/stores";
-import { api } from "../../../lib/api-client";
+import { api } from "../../lib/api-client";
 import { storesKeys, type StoreListFilter } from "./stores-keys";
 
 function queryString(filter: StoreListFilter): string {
@@ -29,4 +30,18 @@ export function storesQueryOptions(filter: StoreListFilter = {}) {
 
 export function useStores(filter: StoreListFilter = {}, options: { enabled?: boolean } = {}) {
   return useQuery({ ...storesQueryOptions(filter), enabled: options.enabled ?? true });
+}
+
+/** The store page: the store, its systems, the current plan and every plan version. */
+export function getStoreDetail(id: string, signal?: AbortSignal) {
+  return api.get(`/api/stores/${id}`, storeDetailResponse, signal);
+}
+
+export function storeDetailQueryOptions(id: string) {
+  return queryOptions({ queryKey: storesKeys.detail(id), queryFn: ({ signal }) => getStoreDetail(id, signal) });
+}
+
+/** The store alone, read from the same cached store page. */
+export function useStore(id: string) {
+  return useQuery({ ...storeDetailQueryOptions(id), select: (detail) => detail.store });
 }

@@ -1,0 +1,11 @@
+/** Sweeps, general to specific; a sweep's readings and analyses hang under its detail. */
+export const sweepsKeys = {
+  all: ["sweeps"] as const,
+  lists: () => [...sweepsKeys.all, "list"] as const,
+  list: (storeId: string) => [...sweepsKeys.lists(), { storeId }] as const,
+  details: () => [...sweepsKeys.all, "detail"] as const,
+  detail: (id: string) => [...sweepsKeys.details(), id] as const,
+  analyses: (id: string) => [...sweepsKeys.detail(id), "analysis"] as const,
+  analysis: (id: string, transportDelayS: number | null) =>
+    [...sweepsKeys.analyses(id), transportDelayS ?? "detector"] as const,
+};

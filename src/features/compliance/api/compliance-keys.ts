@@ -1,6 +1,0 @@
-export const complianceKeys = {
-  all: ["compliance"] as const,
-  today: (storeId?: string) => [...complianceKeys.all, "today", storeId ?? "all"] as const,
-  records: () => [...complianceKeys.all, "records"] as const,
-  record: (systemId: string) => [...complianceKeys.records(), systemId] as const,
-};
