@@ -45,7 +45,7 @@ function median(xs: number[]): number {
   for (let r = 0; r < runs; r++) {
     const t0 = performance.now();
     ctx.clearRect(0, 0, canvas.width, canvas.height);
-    ctx.drawImage(plan, view.ox, view.oy, widthM * view.scale, heightM * view.scale);
+    ctx.drawImage(plan, view.panX, view.panY, widthM * view.zoom, heightM * view.zoom);
     const painted = paintFieldCanvas(grid, paint);
     drawFieldLayer(ctx, painted, grid, view);
     ctx.getImageData(0, 0, 1, 1); // reading a pixel back waits for the drawing to finish

@@ -12,7 +12,8 @@ import {
   type OverlaySpot,
 } from "../model/draw-overlays";
 import type { LayerState } from "../model/layers";
-import { fitView, focusView, spotAt, type MapView } from "../model/view";
+import type { View } from "../../../lib/plan-view/coordinates";
+import { fitView, focusView, spotAt } from "../model/view";
 
 export interface FieldCanvasProps {
   label: string;
@@ -50,7 +51,7 @@ export function FieldCanvas(p: FieldCanvasProps) {
 
   const painted = useMemo(() => (p.field ? paintFieldCanvas(p.field, p.paint) : null), [p.field, p.paint]);
 
-  const view: MapView = useMemo(() => {
+  const view: View = useMemo(() => {
     const base = fitView(p.widthM, p.heightM, p.width, height, 0);
     const s = p.selected === null ? null : p.spots.find((x) => x.rank === p.selected);
     return s ? focusView(s.x, s.y, s.radius, p.width, height, base) : base;
@@ -67,7 +68,7 @@ export function FieldCanvas(p: FieldCanvasProps) {
     ctx.setTransform(dpr, 0, 0, dpr, 0, 0);
     ctx.fillStyle = "#f3f2ee";
     ctx.fillRect(0, 0, p.width, height);
-    if (plan) ctx.drawImage(plan, view.ox, view.oy, p.widthM * view.scale, p.heightM * view.scale);
+    if (plan) ctx.drawImage(plan, view.panX, view.panY, p.widthM * view.zoom, p.heightM * view.zoom);
     if (p.layers.field && painted && p.field) drawFieldLayer(ctx, painted, p.field, view);
     if (p.layers.fixtures) drawFixtures(ctx, view, p.fixtures);
     if (p.layers.path) drawPath(ctx, view, p.readings);

@@ -5,7 +5,7 @@
  */
 import type { FieldGridLike } from "#core/domain/fieldmap/field-grid";
 import { renderFieldRgba } from "#core/domain/fieldmap/render-field";
-import type { MapView } from "./view";
+import type { View } from "../../../lib/plan-view/coordinates";
 
 export interface FieldPaint {
   lut: Uint8ClampedArray;
@@ -33,11 +33,11 @@ export function drawFieldLayer(
   ctx: CanvasRenderingContext2D,
   painted: HTMLCanvasElement,
   grid: FieldGridLike,
-  view: MapView,
+  view: View,
 ): void {
   ctx.save();
   ctx.imageSmoothingEnabled = false;
-  const size = grid.cellSize * view.scale;
-  ctx.drawImage(painted, view.ox, view.oy, grid.width * size, grid.height * size);
+  const size = grid.cellSize * view.zoom;
+  ctx.drawImage(painted, view.panX, view.panY, grid.width * size, grid.height * size);
   ctx.restore();
 }

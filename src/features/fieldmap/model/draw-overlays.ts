@@ -1,5 +1,5 @@
 /** The vector layers over the field: fixtures, risk points, the walked path, taps and suspect spots. */
-import type { MapView } from "./view";
+import type { View } from "../../../lib/plan-view/coordinates";
 import { toPx } from "./view";
 
 export interface OverlayFixture {
@@ -25,7 +25,7 @@ export interface OverlaySpot {
 
 const SOLID = new Set(["wall", "gondola", "checkout", "column"]);
 
-export function drawFixtures(ctx: CanvasRenderingContext2D, view: MapView, fixtures: readonly OverlayFixture[]): void {
+export function drawFixtures(ctx: CanvasRenderingContext2D, view: View, fixtures: readonly OverlayFixture[]): void {
   ctx.save();
   ctx.lineWidth = 1.2;
   for (const f of fixtures) {
@@ -53,11 +53,7 @@ export function drawFixtures(ctx: CanvasRenderingContext2D, view: MapView, fixtu
   ctx.restore();
 }
 
-export function drawRiskPoints(
-  ctx: CanvasRenderingContext2D,
-  view: MapView,
-  fixtures: readonly OverlayFixture[],
-): void {
+export function drawRiskPoints(ctx: CanvasRenderingContext2D, view: View, fixtures: readonly OverlayFixture[]): void {
   ctx.save();
   for (const f of fixtures) {
     if (!f.point) continue;
@@ -77,7 +73,7 @@ export function drawRiskPoints(
   ctx.restore();
 }
 
-export function drawPath(ctx: CanvasRenderingContext2D, view: MapView, readings: readonly OverlayReading[]): void {
+export function drawPath(ctx: CanvasRenderingContext2D, view: View, readings: readonly OverlayReading[]): void {
   if (readings.length < 2) return;
   ctx.save();
   ctx.beginPath();
@@ -95,7 +91,7 @@ export function drawPath(ctx: CanvasRenderingContext2D, view: MapView, readings:
 
 export function drawTaps(
   ctx: CanvasRenderingContext2D,
-  view: MapView,
+  view: View,
   readings: readonly OverlayReading[],
   which: "raw" | "corrected",
   linkToRaw: boolean,
@@ -131,14 +127,14 @@ export function drawTaps(
 
 export function drawSpots(
   ctx: CanvasRenderingContext2D,
-  view: MapView,
+  view: View,
   spots: readonly OverlaySpot[],
   selected: number | null,
 ): void {
   ctx.save();
   for (const s of spots) {
     const [px, py] = toPx(view, s.x, s.y);
-    const r = Math.max(8, s.radius * view.scale);
+    const r = Math.max(8, s.radius * view.zoom);
     ctx.beginPath();
     ctx.arc(px, py, r, 0, 2 * Math.PI);
     ctx.lineWidth = s.rank === selected ? 4 : 2.5;

@@ -5,7 +5,7 @@ describe("map view", () => {
   it("fits the plan inside the canvas, centred, keeping its aspect", () => {
     const v = fitView(60, 36, 916, 556, 8);
     // (916 − 16) / 60 = 15 px/m and (556 − 16) / 36 = 15 px/m
-    expect(v.scale).toBe(15);
+    expect(v.zoom).toBe(15);
     expect(toPx(v, 0, 0)).toEqual([8, 8]);
     expect(toPx(v, 60, 36)).toEqual([908, 548]);
   });
@@ -15,10 +15,10 @@ describe("map view", () => {
     const v = focusView(12, 9, 2, 900, 540, base);
     expect(toPx(v, 12, 9)).toEqual([450, 270]);
     // a quarter of 540 px over a 2 m radius: 67.5 px/m
-    expect(v.scale).toBeCloseTo(540 / 4 / 2, 9);
+    expect(v.zoom).toBeCloseTo(540 / 4 / 2, 9);
     // never zooms out past the whole plan, nor in past 8×
-    expect(focusView(12, 9, 100, 900, 540, base).scale).toBe(base.scale);
-    expect(focusView(12, 9, 0.01, 900, 540, base).scale).toBe(base.scale * 8);
+    expect(focusView(12, 9, 100, 900, 540, base).zoom).toBe(base.zoom);
+    expect(focusView(12, 9, 0.01, 900, 540, base).zoom).toBe(base.zoom * 8);
   });
 
   it("finds the suspect spot under a click, by its ring or its number", () => {

@@ -3,7 +3,7 @@ import { polygonArea, polygonCentroid } from "#core/analysis/geometry/polygon-ar
 import type { PolygonFixture } from "#core/contracts/fixtures";
 import * as act from "./actions";
 import { applyAction, applyActions } from "./actions";
-import { planPoint } from "./coordinates";
+import { planPoint } from "../../../lib/plan-view/coordinates";
 import { createScene, fixturesInBox, hitTest, sceneErrors, sceneFixtures, type Scene } from "./scene";
 import { closeTo, idSource, openCase, rect, room, uuid, valve } from "./test-builders";
 

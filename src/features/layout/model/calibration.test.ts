@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { applySimilarity } from "#core/analysis/geometry/similarity";
 import { metresPerPixelFromLine, pickScaleBar, planRecalibration, rescaleFixtures } from "./calibration";
-import { imagePoint } from "./coordinates";
+import { imagePoint } from "../../../lib/plan-view/coordinates";
 import { openCase, rect, room, valve } from "./test-builders";
 
 describe("metresPerPixelFromLine", () => {

@@ -5,7 +5,7 @@
 import { IDENTITY, type Similarity } from "#core/analysis/geometry/similarity";
 import { fromMetres, toMetres, type LengthUnit } from "#core/analysis/geometry/units";
 import type { Fixture } from "#core/contracts/fixtures";
-import type { ImagePoint } from "./coordinates";
+import type { ImagePoint } from "../../../lib/plan-view/coordinates";
 import { scaleFixture } from "./fixture-geometry";
 
 /** A drawn line shorter than this is too imprecise to calibrate from (a few pixels of error). */

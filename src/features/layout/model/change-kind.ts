@@ -7,7 +7,7 @@
 import { isPointKind, type FixtureKind } from "#core/contracts/fixture-kinds";
 import type { Fixture } from "#core/contracts/fixtures";
 import { newFixture } from "./new-fixture";
-import { planPoint } from "./coordinates";
+import { planPoint } from "../../../lib/plan-view/coordinates";
 
 export function canChangeKind(f: Fixture, kind: FixtureKind): boolean {
   return isPointKind(kind) === "point" in f;

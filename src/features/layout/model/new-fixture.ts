@@ -2,7 +2,7 @@
 import { polygonBounds } from "#core/analysis/geometry/bounds";
 import { FIXTURE_FAMILY, isPointKind, isRoomKind, type FixtureKind } from "#core/contracts/fixture-kinds";
 import type { Fixture, Vertex } from "#core/contracts/fixtures";
-import type { PlanPoint } from "./coordinates";
+import type { PlanPoint } from "../../../lib/plan-view/coordinates";
 
 /**
  * Width of one glass door of a reach-in case, to guess the door count from the case length

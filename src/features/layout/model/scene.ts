@@ -6,7 +6,7 @@ import { pointInPolygon } from "#core/analysis/geometry/point-in-polygon";
 import { distanceToPolygonEdge } from "#core/analysis/geometry/segments";
 import type { Bounds } from "#core/analysis/geometry/types";
 import { validateFixtureList, type FieldError, type Fixture, type PlanBounds } from "#core/contracts/fixtures";
-import type { PlanPoint } from "./coordinates";
+import type { PlanPoint } from "../../../lib/plan-view/coordinates";
 import { fixtureBounds } from "./fixture-geometry";
 
 export interface Scene {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { planPoint } from "./coordinates";
+import { planPoint } from "../../../lib/plan-view/coordinates";
 import { snapAngle, snapMove, snapPoint, snapToGrid } from "./snapping";
 import { openCase, rect, uuid } from "./test-builders";
 

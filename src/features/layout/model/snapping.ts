@@ -7,7 +7,7 @@
 import { polygonBounds } from "#core/analysis/geometry/bounds";
 import type { Bounds, Vec } from "#core/analysis/geometry/types";
 import type { Fixture } from "#core/contracts/fixtures";
-import { planPoint, type PlanPoint } from "./coordinates";
+import { planPoint, type PlanPoint } from "../../../lib/plan-view/coordinates";
 import { fixtureVertices } from "./fixture-geometry";
 
 export interface SnapOptions {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import type { PolygonFixture } from "#core/contracts/fixtures";
-import { planPoint } from "./coordinates";
+import { planPoint } from "../../../lib/plan-view/coordinates";
 import {
   alignmentFromMatches,
   carryFixtures,

@@ -13,7 +13,7 @@ import {
   type Similarity,
 } from "#core/analysis/geometry/similarity";
 import { BOUNDS_TOLERANCE_M, type Fixture, type PlanBounds } from "#core/contracts/fixtures";
-import { planPoint, type PlanPoint } from "./coordinates";
+import { planPoint, type PlanPoint } from "../../../lib/plan-view/coordinates";
 import { fixtureVertices, mapFixture } from "./fixture-geometry";
 
 /** Two landmarks (e.g. two building corners) as found on the previous and on the new version. */

@@ -4,7 +4,19 @@ import type { Context } from "konva/lib/Context";
 import type { Fixture } from "#core/contracts/fixtures";
 import type { LocalReading } from "../model/local-types";
 import type { LagHint } from "../model/lag-hint";
-import { fitView, toPlan, toStage, zoomAt, type WalkView } from "../model/view";
+import {
+  fitView,
+  METRE_BASE,
+  panBy,
+  planPoint,
+  planToStage,
+  stagePoint,
+  stageToPlan,
+  zoomAbout,
+  type View,
+} from "../../../lib/plan-view/coordinates";
+import { applyPinch, pinchStep } from "../../../lib/plan-view/pinch";
+import { WALK_ZOOM } from "../model/walk-view";
 
 /** A finger that moves less than this is a tap, not a pan (px). */
 const TAP_SLOP_PX = 10;
@@ -67,8 +79,8 @@ interface Pointer {
 export function PlanStage(props: PlanStageProps) {
   const box = useRef<HTMLDivElement>(null);
   const { w, h } = useBoxSize(box);
-  const [view, setView] = useState<WalkView | null>(null);
-  const viewRef = useRef<WalkView | null>(null);
+  const [view, setView] = useState<View | null>(null);
+  const viewRef = useRef<View | null>(null);
   viewRef.current = view;
   const pointers = useRef(new Map<number, Pointer>());
   const moved = useRef(false);
@@ -80,7 +92,7 @@ export function PlanStage(props: PlanStageProps) {
     if (w <= 0 || h <= 0) return;
     const v = viewRef.current;
     if (!v) {
-      setView(fitView(props.widthM, props.heightM, w, h));
+      setView(fitView(props.widthM, props.heightM, w, h, 12, WALK_ZOOM));
       return;
     }
     // The keypad opening or closing resizes the box. The plan stays put under the finger; only
@@ -88,11 +100,10 @@ export function PlanStage(props: PlanStageProps) {
     const f = focusRef.current;
     if (!f) return;
     const margin = 40;
-    const sx = f.x * v.scale + v.panX;
-    const sy = f.y * v.scale + v.panY;
+    const { x: sx, y: sy } = planToStage(planPoint(f.x, f.y), METRE_BASE, v);
     const dx = sx > w - margin ? w - margin - sx : sx < margin ? margin - sx : 0;
     const dy = sy > h - margin ? h - margin - sy : sy < margin ? margin - sy : 0;
-    if (dx || dy) setView({ ...v, panX: v.panX + dx, panY: v.panY + dy });
+    if (dx || dy) setView(panBy(v, dx, dy));
   }, [w, h, props.widthM, props.heightM]);
 
   function local(e: React.PointerEvent) {
@@ -115,14 +126,10 @@ export function PlanStage(props: PlanStageProps) {
     if (pointers.current.size === 1) {
       if (!moved.current && Math.hypot(p.x - prev.startX, p.y - prev.startY) < TAP_SLOP_PX) return;
       moved.current = true;
-      setView({ ...v, panX: v.panX + p.x - prev.x, panY: v.panY + p.y - prev.y });
+      setView(panBy(v, p.x - prev.x, p.y - prev.y));
     } else if (pointers.current.size === 2) {
       const other = [...pointers.current.entries()].find(([id]) => id !== e.pointerId)![1];
-      const before = Math.hypot(prev.x - other.x, prev.y - other.y);
-      const after = Math.hypot(p.x - other.x, p.y - other.y);
-      const mid = { x: (p.x + other.x) / 2, y: (p.y + other.y) / 2 };
-      const zoomed = before > 0 ? zoomAt(v, mid.x, mid.y, after / before) : v;
-      setView({ ...zoomed, panX: zoomed.panX + (p.x - prev.x) / 2, panY: zoomed.panY + (p.y - prev.y) / 2 });
+      setView(applyPinch(v, pinchStep([prev, other], [p, other]), WALK_ZOOM));
     }
     pointers.current.set(e.pointerId, { ...prev, x: p.x, y: p.y });
   }
@@ -135,7 +142,7 @@ export function PlanStage(props: PlanStageProps) {
       if (pointers.current.size === 0) moved.current = false;
       return;
     }
-    const at = toPlan(v, p.startX, p.startY);
+    const at = stageToPlan(stagePoint(p.startX, p.startY), METRE_BASE, v);
     if (at.x >= 0 && at.y >= 0 && at.x <= props.widthM && at.y <= props.heightM) props.onTap(at.x, at.y, p.at);
   }
 
@@ -146,7 +153,7 @@ export function PlanStage(props: PlanStageProps) {
       x: e.clientX - box.current!.getBoundingClientRect().left,
       y: e.clientY - box.current!.getBoundingClientRect().top,
     };
-    setView(zoomAt(v, p.x, p.y, Math.exp(-e.deltaY / 400)));
+    setView(zoomAbout(v, stagePoint(p.x, p.y), Math.exp(-e.deltaY / 400), WALK_ZOOM));
   }
 
   // Buttons as well as pinching: a gloved hand cannot always pinch. Zoom about the reading on
@@ -155,18 +162,18 @@ export function PlanStage(props: PlanStageProps) {
     const v = viewRef.current;
     if (!v) return;
     const f = focusRef.current;
-    const c = f ? toStage(v, f.x, f.y) : { x: w / 2, y: h / 2 };
-    setView(zoomAt(v, c.x, c.y, factor));
+    const c = f ? planToStage(planPoint(f.x, f.y), METRE_BASE, v) : stagePoint(w / 2, h / 2);
+    setView(zoomAbout(v, c, factor, WALK_ZOOM));
   }
 
   const ink = props.highContrast ? "#000000" : "#1c2529";
-  const px = (n: number) => (view ? n / view.scale : n);
+  const px = (n: number) => (view ? n / view.zoom : n);
 
   return (
     <div
       ref={box}
       data-testid="walk-plan"
-      data-view={view ? `${view.scale} ${view.panX} ${view.panY}` : ""}
+      data-view={view ? `${view.zoom} ${view.panX} ${view.panY}` : ""}
       className="relative h-full w-full touch-none select-none overflow-hidden bg-paper"
       onPointerDown={onPointerDown}
       onPointerMove={onPointerMove}
@@ -179,7 +186,7 @@ export function PlanStage(props: PlanStageProps) {
       {view && w > 0 ? (
         <Stage width={w} height={h} listening={false}>
           <Layer listening={false}>
-            <Group x={view.panX} y={view.panY} scaleX={view.scale} scaleY={view.scale}>
+            <Group x={view.panX} y={view.panY} scaleX={view.zoom} scaleY={view.zoom}>
               {img ? (
                 <KonvaImage
                   image={img}
@@ -205,15 +212,15 @@ export function PlanStage(props: PlanStageProps) {
             </Group>
           </Layer>
           <Layer listening={false}>
-            <Group x={view.panX} y={view.panY} scaleX={view.scale} scaleY={view.scale}>
+            <Group x={view.panX} y={view.panY} scaleX={view.zoom} scaleY={view.zoom}>
               <ReadingsShape
                 readings={props.readings}
                 alarmPpm={props.alarmPpm}
-                scale={view.scale}
+                scale={view.zoom}
                 selectedId={props.selectedId}
                 highContrast={props.highContrast}
               />
-              {props.lagHint ? <LagMarks hint={props.lagHint} readings={props.readings} scale={view.scale} /> : null}
+              {props.lagHint ? <LagMarks hint={props.lagHint} readings={props.readings} scale={view.zoom} /> : null}
             </Group>
           </Layer>
         </Stage>
@@ -233,7 +240,7 @@ export function PlanStage(props: PlanStageProps) {
           type="button"
           className={`${ZOOM} text-sm`}
           aria-label="Show the whole plan"
-          onClick={() => setView(fitView(props.widthM, props.heightM, w, h))}
+          onClick={() => setView(fitView(props.widthM, props.heightM, w, h, 12, WALK_ZOOM))}
         >
           All
         </button>

@@ -7,9 +7,10 @@ import {
   stageLengthToPlan,
   stageToPlan,
   zoomAbout,
+  IMAGE_ZOOM,
   type PlanPoint,
   type View,
-} from "../../model/coordinates";
+} from "../../../../lib/plan-view/coordinates";
 import type { Scene } from "../../model/scene";
 import type { SnapGuide } from "../../model/snapping";
 import { idleState, runTool, type ActiveTool, type AnyToolState } from "../../model/tools/active-tool";
@@ -17,7 +18,8 @@ import { toolContext } from "../../model/tools/context";
 import { anchorHitRect, targetSizes, type PointerKind } from "../../model/touch-targets";
 import type { ToolEvent, ToolPreview } from "../../model/tools/tool";
 import { useShapeHandlers } from "../../hooks/use-shape-handlers";
-import { useTwoFingerPinch } from "../../hooks/use-two-finger-pinch";
+import { applyPinch } from "../../../../lib/plan-view/pinch";
+import { useTwoFingerPinch } from "../../../../lib/plan-view/use-two-finger-pinch";
 import { FixtureShape } from "./fixture-shape";
 import { SELECTION_STROKE } from "./fixture-look";
 import { gridSpacing, StageBackdrop, type Backdrop } from "./stage-backdrop";
@@ -276,7 +278,7 @@ export function EditorStage(p: EditorStageProps) {
     p.onViewChange((v) => zoomAbout(v, stagePoint(pos.x, pos.y), factor));
   }
 
-  // Pinch and two-finger pan (use-two-finger-pinch.ts); the first finger has often started a drag.
+  // Pinch and two-finger pan (src/lib/plan-view/); the first finger has often started a drag.
   useTwoFingerPinch(() => stageRef.current?.container(), pinching, {
     onStart: () => {
       cancel();
@@ -290,11 +292,7 @@ export function EditorStage(p: EditorStageProps) {
         setPreview(null);
       } else feed({ type: "key", key: "Unidentified" }); // redraws the preview; no tool acts on it
     },
-    onPinch: ({ factor, centre, dx, dy }) =>
-      p.onViewChange((v) => {
-        const zoomed = zoomAbout(v, stagePoint(centre.x, centre.y), factor);
-        return { ...zoomed, panX: zoomed.panX + dx, panY: zoomed.panY + dy };
-      }),
+    onPinch: (step) => p.onViewChange((v) => applyPinch(v, step, IMAGE_ZOOM)),
   });
 
   const unit = quantise(mpp / view.zoom);

@@ -11,7 +11,7 @@ import { useAutosave } from "../../hooks/use-autosave";
 import { useEditorHistory } from "../../hooks/use-editor-history";
 import { useEditorShortcuts, VIEW_KEY_HELP } from "../../hooks/use-editor-shortcuts";
 import { array, duplicate, remove, select } from "../../model/actions";
-import { fitView, stagePoint, zoomAbout, type View } from "../../model/coordinates";
+import { fitView, IMAGE_ZOOM, stagePoint, zoomAbout, type View } from "../../../../lib/plan-view/coordinates";
 import { duplicateOffset } from "../../model/duplicate-offset";
 import { unionBounds } from "../../model/fixture-geometry";
 import { createScene, sceneFixtures, selectedFixtures } from "../../model/scene";
@@ -95,7 +95,7 @@ function EditorBody({
       setSize({ width, height });
       if (!fitted.current) {
         fitted.current = true;
-        setView(fitView(backdrop.widthPx, backdrop.heightPx, width, height));
+        setView(fitView(backdrop.widthPx, backdrop.heightPx, width, height, 16, IMAGE_ZOOM));
       }
     };
     measure();
@@ -106,7 +106,8 @@ function EditorBody({
 
   const zoom = useCallback(
     (direction: "in" | "out" | "fit") => {
-      if (direction === "fit") setView(fitView(backdrop.widthPx, backdrop.heightPx, size.width, size.height));
+      if (direction === "fit")
+        setView(fitView(backdrop.widthPx, backdrop.heightPx, size.width, size.height, 16, IMAGE_ZOOM));
       else setView((v) => zoomAbout(v, stagePoint(size.width / 2, size.height / 2), direction === "in" ? 1.25 : 0.8));
     },
     [backdrop, size],

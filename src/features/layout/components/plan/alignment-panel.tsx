@@ -7,7 +7,7 @@ import { Spinner } from "../../../../components/ui/spinner";
 import { formErrorMessage, serverFieldErrors } from "../../../../lib/form-errors";
 import { usePlan } from "../../../../entities/plans/plans-api";
 import { useSetAlignment } from "../../api/set-alignment";
-import { imageToPlan, type ImagePoint } from "../../model/coordinates";
+import { imageToPlan, type ImagePoint } from "../../../../lib/plan-view/coordinates";
 import { ImagePointPicker } from "./image-point-picker";
 
 /**

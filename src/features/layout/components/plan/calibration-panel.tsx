@@ -7,7 +7,7 @@ import { TextField } from "../../../../components/ui/text-field";
 import { fieldMessage, formErrorMessage, serverFieldErrors } from "../../../../lib/form-errors";
 import { useCalibratePlan } from "../../api/calibrate-plan";
 import { metresPerPixelFromLine } from "../../model/calibration";
-import type { ImagePoint } from "../../model/coordinates";
+import type { ImagePoint } from "../../../../lib/plan-view/coordinates";
 import { readLengthEntry } from "../../model/length-entry";
 import { ImagePointPicker } from "./image-point-picker";
 

@@ -7,11 +7,13 @@ import {
   stagePoint,
   stageToImage,
   zoomAbout,
+  IMAGE_ZOOM,
   type ImagePoint,
   type View,
-} from "../../model/coordinates";
+} from "../../../../lib/plan-view/coordinates";
 import { useHtmlImage } from "../../../../lib/use-html-image";
-import { useTwoFingerPinch } from "../../hooks/use-two-finger-pinch";
+import { applyPinch } from "../../../../lib/plan-view/pinch";
+import { useTwoFingerPinch } from "../../../../lib/plan-view/use-two-finger-pinch";
 import { Spinner } from "../../../../components/ui/spinner";
 import { Alert } from "../../../../components/ui/alert";
 import { Button } from "../../../../components/ui/button";
@@ -69,11 +71,7 @@ export function ImagePointPicker({
         stage?.draggable(false);
       },
       onEnd: () => stageRef.current?.draggable(true),
-      onPinch: ({ factor, centre, dx, dy }) =>
-        setView((v) => {
-          const z = zoomAbout(v, stagePoint(centre.x, centre.y), factor);
-          return { ...z, panX: z.panX + dx, panY: z.panY + dy };
-        }),
+      onPinch: (step) => setView((v) => applyPinch(v, step, IMAGE_ZOOM)),
     },
     [loaded],
   );
@@ -84,7 +82,7 @@ export function ImagePointPicker({
     const fit = () => {
       const w = Math.max(240, el.clientWidth);
       setWidth(w);
-      setView(fitView(widthPx, heightPx, w, height));
+      setView(fitView(widthPx, heightPx, w, height, 16, IMAGE_ZOOM));
     };
     fit();
     const ro = new ResizeObserver(fit);
@@ -179,7 +177,7 @@ export function ImagePointPicker({
       </div>
       <div className="flex flex-wrap items-center gap-2 text-sm text-muted">
         <span>Tap or click to place {names.join(" and ")}; pinch or scroll to zoom, drag to pan.</span>
-        <Button variant="secondary" onClick={() => setView(fitView(widthPx, heightPx, width, height))}>
+        <Button variant="secondary" onClick={() => setView(fitView(widthPx, heightPx, width, height, 16, IMAGE_ZOOM))}>
           Fit drawing
         </Button>
         <Button

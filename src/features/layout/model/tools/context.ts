@@ -1,5 +1,5 @@
 /** Builds a ToolContext with snapping wired to snapping.ts and the scene's other fixtures. */
-import type { PlanPoint } from "../coordinates";
+import type { PlanPoint } from "../../../../lib/plan-view/coordinates";
 import { unionBounds } from "../fixture-geometry";
 import { sceneFixtures, type Scene } from "../scene";
 import { snapMove, snapPoint } from "../snapping";

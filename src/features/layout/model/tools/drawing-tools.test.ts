@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import type { PolygonFixture } from "#core/contracts/fixtures";
 import { applyActions } from "../actions";
-import { planPoint } from "../coordinates";
+import { planPoint } from "../../../../lib/plan-view/coordinates";
 import { createScene, sceneFixtures } from "../scene";
 import { idSource, uuid } from "../test-builders";
 import { pointTool, POINT_IDLE } from "./point-tool";

@@ -6,7 +6,7 @@
 import { isSelfIntersecting } from "#core/analysis/geometry/segments";
 import type { FixtureKind } from "#core/contracts/fixture-kinds";
 import { add } from "../actions";
-import type { PlanPoint } from "../coordinates";
+import type { PlanPoint } from "../../../../lib/plan-view/coordinates";
 import { newFixture } from "../new-fixture";
 import { distance, result, type ToolContext, type ToolEvent, type ToolResult } from "./tool";
 

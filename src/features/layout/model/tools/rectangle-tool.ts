@@ -5,7 +5,7 @@
  */
 import type { FixtureKind } from "#core/contracts/fixture-kinds";
 import { add } from "../actions";
-import { planPoint, type PlanPoint } from "../coordinates";
+import { planPoint, type PlanPoint } from "../../../../lib/plan-view/coordinates";
 import { newFixture } from "../new-fixture";
 import { boxOf, distance, result, type ToolContext, type ToolEvent, type ToolResult } from "./tool";
 

@@ -7,7 +7,7 @@
  * Delete or Backspace removes the selection.
  */
 import { move, remove, select } from "../actions";
-import type { PlanPoint } from "../coordinates";
+import type { PlanPoint } from "../../../../lib/plan-view/coordinates";
 import { fixturesInBox, hitTest } from "../scene";
 import { boxOf, distance, result, type ToolContext, type ToolEvent, type ToolResult } from "./tool";
 

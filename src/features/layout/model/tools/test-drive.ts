@@ -1,6 +1,6 @@
 /** Test helper: feeds a tool a list of events and collects what it emitted. */
 import type { SceneAction } from "../actions";
-import { planPoint } from "../coordinates";
+import { planPoint } from "../../../../lib/plan-view/coordinates";
 import { createScene, type Scene } from "../scene";
 import { idSource } from "../test-builders";
 import type { ToolContext, ToolEvent, ToolResult } from "./tool";

@@ -5,7 +5,7 @@
  */
 import type { Bounds } from "#core/analysis/geometry/types";
 import type { SceneAction } from "../actions";
-import type { PlanPoint } from "../coordinates";
+import type { PlanPoint } from "../../../../lib/plan-view/coordinates";
 import type { Scene } from "../scene";
 
 export type ToolEvent =

@@ -7,7 +7,7 @@
 import { isSelfIntersecting } from "#core/analysis/geometry/segments";
 import type { PolygonFixture, Vertex } from "#core/contracts/fixtures";
 import { setVertices } from "../actions";
-import { planPoint, type PlanPoint } from "../coordinates";
+import { planPoint, type PlanPoint } from "../../../../lib/plan-view/coordinates";
 import { distance, result, type ToolContext, type ToolEvent, type ToolResult } from "./tool";
 
 export type VertexToolState =

@@ -1,13 +1,15 @@
 /**
- * The three coordinate spaces of the layout editor, as distinct branded types, and the ONE
- * module that converts between them (the model stores only plan metres; pixels exist only
- * between the image and the stage).
+ * The plan view shared by every screen that shows a plan (layout editor, Walk, field map,
+ * comparison): three coordinate spaces as distinct branded types and the ONE module that converts
+ * between them (models store only plan metres; pixels exist only between the image and the stage).
  *
  * - PlanPoint: metres, origin at the plan's top-left corner, x right, y down.
  * - ImagePoint: pixels of the plan's display image (origin top-left).
- * - StagePoint: screen pixels of the Konva stage, after the view's pan and zoom.
+ * - StagePoint: screen pixels of the stage or canvas, after the view's pan and zoom.
  *
- * plan = image × metresPerPixel;   stage = image × zoom + pan.
+ * A view maps its base unit to the stage: stage = base × zoom + pan. The layout editor's base is
+ * the image pixel (plan = image × metresPerPixel); the Walk screen and the field map draw in
+ * metres, so their base is the metre (`METRE_BASE`: zoom is then screen pixels per metre).
  */
 
 declare const space: unique symbol;
@@ -17,15 +19,23 @@ export type PlanPoint = Branded<"plan">;
 export type ImagePoint = Branded<"image">;
 export type StagePoint = Branded<"stage">;
 
-/** The stage's pan (screen px of the image origin) and zoom (screen px per image px). */
+/** The stage's pan (screen px of the base origin) and zoom (screen px per base unit). */
 export interface View {
   readonly panX: number;
   readonly panY: number;
   readonly zoom: number;
 }
 
-export const MIN_ZOOM = 0.05;
-export const MAX_ZOOM = 40;
+/** How far a screen lets its view zoom, in screen px per base unit. */
+export interface ZoomLimits {
+  readonly min: number;
+  readonly max: number;
+}
+
+/** The layout editor's limits (base: image pixels). */
+export const IMAGE_ZOOM: ZoomLimits = { min: 0.05, max: 40 };
+/** Views whose base unit is the metre: `planToStage(p, METRE_BASE, view)`. */
+export const METRE_BASE = 1;
 
 export function planPoint(x: number, y: number): PlanPoint {
   return { x, y } as PlanPoint;
@@ -81,31 +91,39 @@ export function planLengthToStage(metres: number, metresPerPixel: number, view: 
   return (metres / metresPerPixel) * view.zoom;
 }
 
+const clamp = (zoom: number, limits: ZoomLimits) => Math.min(limits.max, Math.max(limits.min, zoom));
+
 /**
- * Zooms by `factor` keeping the image point under `anchor` fixed on screen (wheel and pinch
- * zoom about the cursor or the fingers' midpoint). Zoom is clamped to [MIN_ZOOM, MAX_ZOOM].
+ * Zooms by `factor` keeping the point under `anchor` fixed on screen (wheel, buttons and pinch
+ * zoom about the cursor, a focus or the fingers' midpoint). Zoom is clamped to `limits`.
  */
-export function zoomAbout(view: View, anchor: StagePoint, factor: number): View {
+export function zoomAbout(view: View, anchor: StagePoint, factor: number, limits: ZoomLimits = IMAGE_ZOOM): View {
   if (!(Number.isFinite(factor) && factor > 0)) throw new RangeError(`zoom factor must be above 0, got ${factor}`);
-  const zoom = Math.min(MAX_ZOOM, Math.max(MIN_ZOOM, view.zoom * factor));
+  const zoom = clamp(view.zoom * factor, limits);
   const under = stageToImage(anchor, view);
   return { zoom, panX: anchor.x - under.x * zoom, panY: anchor.y - under.y * zoom };
 }
 
-/** The view that fits an image of the given pixel size into a viewport, centred, with a margin. */
+/** The view moved by (dx, dy) screen pixels. */
+export function panBy(view: View, dx: number, dy: number): View {
+  return { ...view, panX: view.panX + dx, panY: view.panY + dy };
+}
+
+/**
+ * The view that fits content of the given size (in base units) into a viewport, centred, with a
+ * margin; the zoom is clamped to `limits` (none by default).
+ */
 export function fitView(
-  imageWidth: number,
-  imageHeight: number,
+  contentWidth: number,
+  contentHeight: number,
   viewportWidth: number,
   viewportHeight: number,
   marginPx = 16,
+  limits: ZoomLimits = { min: 0, max: Infinity },
 ): View {
-  const zoom = Math.min(
-    MAX_ZOOM,
-    Math.max(
-      MIN_ZOOM,
-      Math.min((viewportWidth - 2 * marginPx) / imageWidth, (viewportHeight - 2 * marginPx) / imageHeight),
-    ),
+  const zoom = clamp(
+    Math.min((viewportWidth - 2 * marginPx) / contentWidth, (viewportHeight - 2 * marginPx) / contentHeight),
+    limits,
   );
-  return { zoom, panX: (viewportWidth - imageWidth * zoom) / 2, panY: (viewportHeight - imageHeight * zoom) / 2 };
+  return { zoom, panX: (viewportWidth - contentWidth * zoom) / 2, panY: (viewportHeight - contentHeight * zoom) / 2 };
 }
