@@ -1,5 +1,6 @@
 /** The vector layers over the field: fixtures, risk points, the walked path, taps and suspect spots. */
 import type { View } from "../../../lib/plan-view/coordinates";
+import { backdropOf } from "../../../lib/plan-view/fixture-look";
 import { toPx } from "./view";
 
 export interface OverlayFixture {
@@ -23,8 +24,6 @@ export interface OverlaySpot {
   radius: number;
 }
 
-const SOLID = new Set(["wall", "gondola", "checkout", "column"]);
-
 export function drawFixtures(ctx: CanvasRenderingContext2D, view: View, fixtures: readonly OverlayFixture[]): void {
   ctx.save();
   ctx.lineWidth = 1.2;
@@ -37,10 +36,11 @@ export function drawFixtures(ctx: CanvasRenderingContext2D, view: View, fixtures
       else ctx.lineTo(px, py);
     });
     ctx.closePath();
-    if (SOLID.has(f.kind)) {
+    const weight = backdropOf(f.kind);
+    if (weight === "ink" || weight === "shade") {
       ctx.fillStyle = "rgba(60, 66, 76, 0.55)";
       ctx.fill();
-    } else if (f.kind === "benign-zone") {
+    } else if (weight === "dashed") {
       ctx.setLineDash([5, 4]);
       ctx.strokeStyle = "rgba(40, 90, 110, 0.9)";
       ctx.stroke();

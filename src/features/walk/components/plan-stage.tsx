@@ -15,6 +15,7 @@ import {
   zoomAbout,
   type View,
 } from "../../../lib/plan-view/coordinates";
+import { backdropOf } from "../../../lib/plan-view/fixture-look";
 import { applyPinch, pinchStep } from "../../../lib/plan-view/pinch";
 import { WALK_ZOOM } from "../model/walk-view";
 
@@ -303,7 +304,7 @@ function Fixtures({
             strokeWidth={open ? 3 : 1}
             dash={open ? [8, 5] : undefined}
             strokeScaleEnabled={false}
-            fill={f.kind === "wall" || f.kind === "column" ? ink : open ? "rgba(179,92,0,0.08)" : "rgba(31,78,95,0.06)"}
+            fill={backdropOf(f.kind) === "ink" ? ink : open ? "rgba(179,92,0,0.08)" : "rgba(31,78,95,0.06)"}
           />
         );
       }),

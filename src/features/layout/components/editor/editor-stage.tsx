@@ -21,7 +21,7 @@ import { useShapeHandlers } from "../../hooks/use-shape-handlers";
 import { applyPinch } from "../../../../lib/plan-view/pinch";
 import { useTwoFingerPinch } from "../../../../lib/plan-view/use-two-finger-pinch";
 import { FixtureShape } from "./fixture-shape";
-import { SELECTION_STROKE } from "./fixture-look";
+import { SELECTION_STROKE } from "../../../../lib/plan-view/fixture-look";
 import { gridSpacing, StageBackdrop, type Backdrop } from "./stage-backdrop";
 
 export interface EditorStageProps {

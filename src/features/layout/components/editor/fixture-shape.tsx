@@ -5,7 +5,13 @@ import type { Fixture } from "#core/contracts/fixtures";
 import { polygonBounds } from "#core/analysis/geometry/bounds";
 import { fixtureCentroid } from "../../model/fixture-geometry";
 import { doorGap, doorTicks, wallWithDoorGap } from "../../model/fixture-drawing";
-import { lookOf, PATTERN_SCALE, patternTile, POINT_COLOURS, SELECTION_STROKE } from "./fixture-look";
+import {
+  lookOf,
+  PATTERN_SCALE,
+  patternTile,
+  POINT_COLOURS,
+  SELECTION_STROKE,
+} from "../../../../lib/plan-view/fixture-look";
 
 /** Average glyph width of Atkinson Hyperlegible in em, for guessing whether a label fits. */
 const LABEL_CHAR_EM = 0.56;

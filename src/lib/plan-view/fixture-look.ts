@@ -1,5 +1,7 @@
 /**
- * How each fixture kind looks on the plan: our own scheme, readable without colour. Families
+ * How each fixture kind looks on every plan screen: one table. The layout editor draws the full
+ * look (`lookOf`); the Walk screen and the field map draw fixtures as a quiet backdrop under their
+ * own data (`backdropOf`). The full look is our own scheme, readable without colour. Families
  * differ by line and fill, not hue alone:
  * - air volumes: a light fill and a solid outline; rooms (walk-ins, machine room) a thick wall
  *   outline with the door gap left open; glass-door cases show their doors as ticks;
@@ -9,7 +11,7 @@
  * Hues come from the Okabe–Ito palette, chosen to stay distinct under the common forms of
  * colour-vision deficiency (Okabe & Ito, "Color Universal Design", 2008).
  */
-import type { FixtureKind } from "#core/contracts/fixture-kinds";
+import { FIXTURE_FAMILY, type FixtureKind } from "#core/contracts/fixture-kinds";
 
 export const OKABE_ITO = {
   blue: "#0072B2",
@@ -182,3 +184,25 @@ export function patternTile(pattern: Pattern, colour = "rgba(0,0,0,0.55)"): HTML
 /** A tile is PATTERN_METRES wide on the plan: hatching scales with the drawing, like a printed plan's. */
 export const PATTERN_METRES = 0.45;
 export const PATTERN_SCALE = PATTERN_METRES / TILE;
+
+/**
+ * A fixture under the Walk screen's coverage or the field map's concentrations: only its weight,
+ * so the data on top keeps the colour. "ink": walls and columns, drawn solid (nobody walks
+ * through them); "shade": other solid bodies (shelving, checkouts); "outline": air volumes;
+ * "dashed": zones; "point": risk points.
+ */
+export type BackdropWeight = "ink" | "shade" | "outline" | "dashed" | "point";
+
+export function backdropOf(kind: string): BackdropWeight {
+  if (kind === "wall" || kind === "column") return "ink";
+  switch (FIXTURE_FAMILY[kind as FixtureKind]) {
+    case "solid-body":
+      return "shade";
+    case "zone":
+      return "dashed";
+    case "point":
+      return "point";
+    default:
+      return "outline";
+  }
+}
