@@ -33,8 +33,13 @@ export const STALE_AFTER: Record<Entity, readonly QueryKey[]> = {
   charge: [recordsKeys.all, findingsKeys.all],
 };
 
+/**
+ * Marks everything the change made stale. The promise settles when the entity's own open queries
+ * (the first key) are fresh, as a mutation's onSuccess did before: a form that closes once the new
+ * row shows must not wait for the answers derived elsewhere, which refetch in the background.
+ */
 export function invalidateEntity(queryClient: QueryClient, entity: Entity): Promise<void> {
-  return Promise.all(STALE_AFTER[entity].map((queryKey) => queryClient.invalidateQueries({ queryKey }))).then(
-    () => undefined,
-  );
+  const [own, ...derived] = STALE_AFTER[entity];
+  for (const queryKey of derived) void queryClient.invalidateQueries({ queryKey });
+  return queryClient.invalidateQueries({ queryKey: own });
 }
