@@ -10,12 +10,7 @@ import { Select } from "../../../components/ui/select";
 import { refreshCounts, syncSoon } from "../hooks/sync-loop";
 import { queueFinding } from "../model/finding-queue";
 import { walkDb } from "../model/walk-db";
-
-export interface LeakSpot {
-  x: number;
-  y: number;
-  fixtureId: string | null;
-}
+import type { LeakSpot } from "../model/walk-mode";
 
 /** "Leak found here": position (from the tap), fixture, component, status, photo and note. */
 export function LeakForm(props: {

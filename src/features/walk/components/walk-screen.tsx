@@ -17,9 +17,10 @@ import { latestLagHint } from "../model/lag-hint";
 import type { LocalReading } from "../model/local-types";
 import { enteredRoom } from "../model/room-entry";
 import { walkModelFor } from "../model/walk-model";
+import { editedReading, walkStep, type WalkEvent, type WalkMode } from "../model/walk-mode";
 import { CautionDialog } from "./caution-dialog";
 import { LagHintBanner } from "./lag-hint-banner";
-import { LeakForm, type LeakSpot } from "./leak-form";
+import { LeakForm } from "./leak-form";
 import { LogImport } from "./log-import";
 import { PlanStage } from "./plan-stage";
 import { PpmKeypad, type KeypadValue } from "./ppm-keypad";
@@ -51,15 +52,20 @@ export function WalkScreen({
   const { draftId, draftRef, setDraftId, typed, readingsRef, serial, commitOpen, keepTyped, undo } =
     useOpenReading(walk);
   const highContrast = useHighContrast();
-  const [editing, setEditing] = useState<LocalReading | null>(null);
+  // One mode (model/walk-mode.ts): what a tap means, the edit keypad, the leak form.
+  const [mode, setMode] = useState<WalkMode<LocalReading>>({ kind: "walking" });
+  const modeRef = useRef(mode);
+  const send = (event: WalkEvent<LocalReading>) => {
+    const step = walkStep(modeRef.current, event, walk.sweep?.status === "reviewed");
+    modeRef.current = step.mode;
+    setMode(step.mode);
+    return step.effect;
+  };
+  const editing = editedReading(mode);
   const [caution, setCaution] = useState<{ place: CautionPlace; name: string } | null>(null);
-  const [leakMode, setLeakMode] = useState(false);
-  const [leakSpot, setLeakSpot] = useState<LeakSpot | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
   const [dialog, setDialog] = useState<"list" | "summary" | "import" | null>(null);
   const [dismissedAlarm, setDismissedAlarm] = useState(-1);
-  /** A reading waiting for a tap on the plan that moves it there. */
-  const [moving, setMoving] = useState<string | null>(null);
   const navigate = useNavigate();
 
   const fixtures = planPack.data?.fixtures ?? [];
@@ -129,20 +135,13 @@ export function WalkScreen({
   const readOnly = sweep.status === "reviewed";
 
   const onTap = serial(async (x: number, y: number, at: number) => {
-    if (readOnly) return;
-    if (moving) {
-      const id = moving;
-      setMoving(null);
-      const moved = await walk.move(id, x, y);
-      if (moved && editing?.id === id) setEditing(moved);
+    const effect = send({ type: "tap", x, y, fixtureId: fixtureAt(fixtures, x, y)?.id ?? null });
+    if (effect.kind === "move-reading") {
+      const moved = await walk.move(effect.readingId, x, y);
+      if (moved) send({ type: "moved", reading: moved });
       return;
     }
-    if (leakMode) {
-      setLeakMode(false);
-      setLeakSpot({ x, y, fixtureId: fixtureAt(fixtures, x, y)?.id ?? null });
-      return;
-    }
-    if (editing) setEditing(null);
+    if (effect.kind !== "take-reading") return;
     const open = draftRef.current;
     const before = readingsRef.current.filter((r) => !r.draft || r.id === open);
     const previous = before.length ? before[before.length - 1] : null;
@@ -166,7 +165,7 @@ export function WalkScreen({
   const saveKeypad = serial(async (v: KeypadValue) => {
     if (editing) {
       await walk.save(editing.id, v);
-      setEditing(null);
+      send({ type: "done" });
       return;
     }
     const id = draftRef.current;
@@ -222,16 +221,20 @@ export function WalkScreen({
             Its readings stay on this device.
           </Alert>
         ) : null}
-        {leakMode ? <Alert tone="info">Tap the plan where the leak is.</Alert> : null}
-        {moving ? (
+        {mode.kind === "placing-leak" ? <Alert tone="info">Tap the plan where the leak is.</Alert> : null}
+        {mode.kind === "moving" ? (
           <div
             role="status"
             className="flex items-center justify-between gap-2 rounded-md border-l-4 border-accent bg-accent-soft px-3 edge"
           >
             <span className="font-bold">
-              Tap the plan where reading #{all.findIndex((r) => r.id === moving) + 1} was taken.
+              Tap the plan where reading #{all.findIndex((r) => r.id === mode.readingId) + 1} was taken.
             </span>
-            <button type="button" className="min-h-12 shrink-0 font-bold underline" onClick={() => setMoving(null)}>
+            <button
+              type="button"
+              className="min-h-12 shrink-0 font-bold underline"
+              onClick={() => send({ type: "cancel" })}
+            >
               Cancel move
             </button>
           </div>
@@ -286,10 +289,10 @@ export function WalkScreen({
               recent={recent}
               levels={storePack.data?.detectors.find((d) => d.id === sweep.detectorId)?.levelScale ?? null}
               onTyped={(v) => (editing ? undefined : keepTyped(keypadFor.id, v))}
-              onMove={() => setMoving(keypadFor.id)}
+              onMove={() => send({ type: "move", readingId: keypadFor.id })}
               onSave={(v) => saveKeypad(v)}
               cancelLabel={editing ? "Cancel" : "Discard"}
-              onCancel={() => (editing ? setEditing(null) : undo())}
+              onCancel={() => (editing ? send({ type: "cancel" }) : undo())}
             />
           </div>
         ) : null}
@@ -298,10 +301,10 @@ export function WalkScreen({
         readOnly={readOnly}
         canUndo={all.length > 0}
         canSubmit={sweep.status === "in-progress" && !sweep.submitPending}
-        leakMode={leakMode}
+        leakMode={mode.kind === "placing-leak"}
         onUndo={() => undo()}
         onList={() => setDialog("list")}
-        onLeak={() => setLeakMode(!leakMode)}
+        onLeak={() => send({ type: "toggle-leak" })}
         onImport={() => setDialog("import")}
         onSubmit={() => setDialog("summary")}
       />
@@ -315,11 +318,11 @@ export function WalkScreen({
         timeZone={storePack.data?.store.timeZone ?? Intl.DateTimeFormat().resolvedOptions().timeZone}
         onEdit={(r) => {
           setDialog(null);
-          if (r.id !== draftRef.current) setEditing(r);
+          if (r.id !== draftRef.current) send({ type: "edit", reading: r });
         }}
         onMove={(r) => {
           setDialog(null);
-          setMoving(r.id);
+          send({ type: "move", readingId: r.id });
         }}
         onDelete={(r) => (r.id === draftRef.current ? undo() : void walk.remove(r.id))}
         onClose={() => setDialog(null)}
@@ -353,17 +356,17 @@ export function WalkScreen({
           }}
         />
       ) : null}
-      {leakSpot ? (
+      {mode.kind === "describing-leak" ? (
         <LeakForm
-          spot={leakSpot}
+          spot={mode.spot}
           storeId={storeId}
           planId={plan.id}
           sweepId={sweep.id}
           fixtures={fixtures}
           lengthUnit={lengthUnit}
-          onClose={() => setLeakSpot(null)}
+          onClose={() => send({ type: "cancel" })}
           onSaved={() => {
-            setLeakSpot(null);
+            send({ type: "done" });
             setNotice("Finding saved. It is kept on this device and uploads with the readings.");
           }}
         />
