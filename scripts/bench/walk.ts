@@ -113,22 +113,17 @@ try {
    * phone regains signal), and the pass is over when no reading in IndexedDB is still pending.
    */
   const timeSync = () =>
-    page.evaluate(async (sweepId) => {
-      const db: IDBDatabase = await new Promise((resolve, reject) => {
+    // A string, not a function: tsx's name-keeping helpers do not exist in the page.
+    page.evaluate<{ ms: number; confirmed: number }>(`(async () => {
+      const db = await new Promise((resolve, reject) => {
         const r = indexedDB.open("plumeline-walk");
         r.onsuccess = () => resolve(r.result);
         r.onerror = () => reject(r.error);
       });
-      const states = (): Promise<string[]> =>
-        new Promise((resolve) => {
-          const all = db.transaction("readings").objectStore("readings").getAll();
-          all.onsuccess = () =>
-            resolve(
-              (all.result as { sweepId: string; state: string }[])
-                .filter((r) => r.sweepId === sweepId)
-                .map((r) => r.state),
-            );
-        });
+      const states = () => new Promise((resolve) => {
+        const all = db.transaction("readings").objectStore("readings").getAll();
+        all.onsuccess = () => resolve(all.result.filter((r) => r.sweepId === ${JSON.stringify(sweepId)}).map((r) => r.state));
+      });
       const t = performance.now();
       window.dispatchEvent(new Event("online"));
       for (;;) {
@@ -140,7 +135,7 @@ try {
       const confirmed = (await states()).filter((s) => s === "synced").length;
       db.close();
       return { ms, confirmed };
-    }, sweepId);
+    })()`);
 
   await queue(1000, 0);
   const sync = await timeSync();
