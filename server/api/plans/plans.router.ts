@@ -5,7 +5,6 @@ import {
   alignmentInput,
   blankPlanInput,
   calibrationInput,
-  fixturesPatchInput,
   fixturesPutInput,
   imageVariantSchema,
 } from "#core/contracts/plans";
@@ -15,7 +14,7 @@ import { validate } from "../../middleware/validate";
 import { loadVisibleStore } from "../../access/store-access";
 import { setAlignment } from "./alignment.service";
 import { calibratePlan } from "./calibration.service";
-import { getFixtures, patchFixtures, putFixtures } from "./fixtures.service";
+import { getFixtures, putFixtures } from "./fixtures.service";
 import { planImageLimits } from "./plan-resources";
 import { getPlan, listPlans, readPlanImage } from "./plans.service";
 import { createBlankPlan, createImagePlan } from "./plan-upload.service";
@@ -117,16 +116,6 @@ export function plansRouter(ctx: AppContext): Router {
     validate(fixturesPutInput),
     async (req, res) => {
       res.json(await putFixtures(ctx, member(req), res.locals.params.id, req.body));
-    },
-  );
-
-  router.patch(
-    "/plans/:id/fixtures",
-    requireMember("plans.edit"),
-    validate(idParam, "params"),
-    validate(fixturesPatchInput),
-    async (req, res) => {
-      res.json(await patchFixtures(ctx, member(req), res.locals.params.id, req.body));
     },
   );
 
