@@ -3,6 +3,7 @@ import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
 import type { FindingDetail as SweepFinding } from "#core/contracts/finding-actions";
+import { FINDING_EVENT_LABELS } from "#core/contracts/findings";
 import { useMarkRepaired } from "../api/findings";
 
 function RepairForm({ finding, today }: { finding: SweepFinding; today: string }) {
@@ -65,7 +66,8 @@ export function FindingsPanel({
           <ul className="mt-1 text-sm text-muted">
             {f.events.map((e) => (
               <li key={e.id}>
-                {e.on}: {e.status} by {e.by}
+                {e.on}: {FINDING_EVENT_LABELS[e.kind]}
+                {e.result ? ` (${e.result})` : ""} by {e.by}
                 {e.note ? ` — ${e.note}` : ""}
               </li>
             ))}
