@@ -12,7 +12,13 @@ export default defineConfig({
         test: {
           name: "server",
           environment: "node",
-          include: ["core/**/*.test.ts", "server/**/*.test.ts", "tests/api/**/*.test.ts", "scripts/**/*.test.ts"],
+          include: [
+            "core/**/*.test.ts",
+            "server/**/*.test.ts",
+            "tests/api/**/*.test.ts",
+            "tests/faults/**/*.test.ts",
+            "scripts/**/*.test.ts",
+          ],
           globalSetup: ["tests/helpers/global-setup.ts"],
           testTimeout: 30_000,
           hookTimeout: 60_000,

@@ -4,6 +4,7 @@ import type { AppContext } from "./context";
 import { createDb, migrateDb } from "./db/client";
 import { createSmtpMailer } from "./mail/mailer";
 import { startFakeSmtp, type FakeSmtp } from "./mail/fake-smtp";
+import { createLifecycle } from "./lifecycle";
 
 /** The fake SMTP server on its usual port, or any free one when another checkout already has it. */
 async function startFakeSmtpOnFreePort(db: Parameters<typeof startFakeSmtp>[0], port: number): Promise<FakeSmtp> {
@@ -24,7 +25,10 @@ export interface Runtime {
 /** Connects, migrates, starts the fake SMTP server when no real one is configured, and builds the context. */
 export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): Promise<Runtime> {
   const logger = pino({ level: env.LOG_LEVEL });
-  const { pool, db } = createDb(env.DATABASE_URL);
+  // A database restart breaks idle pooled connections: log it and let the pool make new ones.
+  const { pool, db } = createDb(env.DATABASE_URL, {
+    onConnectionError: (err) => logger.warn({ err: { message: err.message } }, "database connection lost"),
+  });
   await migrateDb(db);
 
   const fakeSmtp = env.SMTP_HOST ? null : await startFakeSmtpOnFreePort(db, env.FAKE_SMTP_PORT);
@@ -45,6 +49,7 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
     pool,
     mailer,
     logger,
+    lifecycle: createLifecycle(),
     config: {
       sessionSecret: env.SESSION_SECRET,
       bcryptCost: env.BCRYPT_COST,

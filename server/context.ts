@@ -5,6 +5,7 @@ import type { Mailer } from "./mail/mailer";
 import type { BlobStorage } from "./storage/blob-storage";
 import type { AnalysisRunner } from "./jobs/analysis-runner";
 import type { ReportRunner } from "./jobs/report-runner";
+import type { Lifecycle } from "./lifecycle";
 
 /** Plan upload limits; each has a default (server/api/plans/plan-resources.ts). */
 export interface PlanImageLimits {
@@ -46,4 +47,6 @@ export interface AppContext {
   analysisRunner?: AnalysisRunner;
   /** The worker that draws and lays out report PDFs; made on first use (server/api/reports). */
   reportRunner?: ReportRunner;
+  /** Set while shutting down (server/index.ts); /readyz and keep-alive read it. */
+  lifecycle?: Lifecycle;
 }

@@ -35,6 +35,8 @@ const envSchema = z.object({
     .default(40),
   LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
   SEED_DEMO: z.enum(["true", "false"]).default("true"),
+  // On SIGTERM: how long in-flight requests and jobs may run before they are cut off.
+  SHUTDOWN_GRACE_MS: z.coerce.number().int().min(0).max(600_000).default(20_000),
 });
 
 export type Env = z.infer<typeof envSchema>;
