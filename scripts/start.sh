@@ -6,6 +6,7 @@ set -euo pipefail
 source "$(dirname "$0")/lib.sh"
 
 PG_PORT=${PLUMELINE_PG_PORT:-54329}
+PG_CLUSTER=${PLUMELINE_PG_CLUSTER:-dev}
 export PORT=${PORT:-3000}
 # The app's own grace period (SHUTDOWN_GRACE_MS) plus a margin before it is killed.
 STOP_WAIT_S=$(((${SHUTDOWN_GRACE_MS:-20000} + 999) / 1000 + 10))
@@ -24,19 +25,22 @@ stop_all() {
     wait "$server_pid" 2>/dev/null || true
   fi
   log "stopping PostgreSQL..."
-  bash scripts/pg.sh stop dev "$PG_PORT"
+  bash scripts/pg.sh stop "$PG_CLUSTER" "$PG_PORT"
 }
 
 ensure_node_modules
-log "starting PostgreSQL on 127.0.0.1:$PG_PORT (data in .data/dev)..."
-bash scripts/pg.sh start dev "$PG_PORT"
+log "starting PostgreSQL on 127.0.0.1:$PG_PORT (data in .data/$PG_CLUSTER)..."
+bash scripts/pg.sh start "$PG_CLUSTER" "$PG_PORT"
 trap 'stop_all' EXIT
 trap 'stop_all; exit 143' TERM
 trap 'stop_all; exit 130' INT
 ensure_database "$PG_PORT" plumeline
 
-log "building the client..."
-npx vite build --logLevel error
+# The start-script test sets PLUMELINE_BUILD_CLIENT=no: the test command has built it already.
+if [ "${PLUMELINE_BUILD_CLIENT:-yes}" = yes ]; then
+  log "building the client..."
+  npx vite build --logLevel error
+fi
 
 export DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/plumeline"
 export NODE_ENV=production

@@ -37,6 +37,9 @@ const envSchema = z.object({
   SEED_DEMO: z.enum(["true", "false"]).default("true"),
   // On SIGTERM: how long in-flight requests and jobs may run before they are cut off.
   SHUTDOWN_GRACE_MS: z.coerce.number().int().min(0).max(600_000).default(20_000),
+  // On SIGTERM: how long to keep serving while /readyz already says "draining", so a load balancer
+  // stops sending new requests before the listener closes.
+  SHUTDOWN_DELAY_MS: z.coerce.number().int().min(0).max(60_000).default(0),
 });
 
 export type Env = z.infer<typeof envSchema>;

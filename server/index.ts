@@ -40,7 +40,7 @@ const server = createApp(ctx).listen(env.PORT, env.HOST, () => {
 
 let closing: string | null = null;
 /**
- * Graceful stop: report not-ready, stop accepting, let in-flight requests and worker jobs finish
+ * Graceful stop: report not-ready (for SHUTDOWN_DELAY_MS while still serving), stop accepting, let in-flight requests and worker jobs finish
  * (bounded by SHUTDOWN_GRACE_MS), then close the pool.
  */
 async function shutdown(signal: string) {
@@ -56,6 +56,7 @@ async function shutdown(signal: string) {
   ctx.logger.info({ signal, graceMs: env.SHUTDOWN_GRACE_MS }, "shutting down: draining");
   ctx.lifecycle!.draining = true;
   digest.stop();
+  if (env.SHUTDOWN_DELAY_MS > 0) await new Promise((r) => setTimeout(r, env.SHUTDOWN_DELAY_MS));
   const closed = new Promise<void>((resolve) => server.close(() => resolve()));
   // Keep-alive connections go once their current answer is out (it carries Connection: close).
   const sweepIdle = setInterval(() => server.closeIdleConnections(), 250);

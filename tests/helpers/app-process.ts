@@ -10,6 +10,7 @@ const ROOT = path.resolve(import.meta.dirname, "../..");
 
 export interface AppProcess {
   url: string;
+  port: number;
   child: ChildProcess;
   output(): string;
   /** Resolves with the exit code (or signal name) once the process has gone. */
@@ -18,8 +19,9 @@ export interface AppProcess {
   kill(signal: NodeJS.Signals): void;
 }
 
-export async function startAppProcess(env: Record<string, string>): Promise<AppProcess> {
-  const port = await freePort();
+/** Starts the app; `port` reuses one (a restart in place), otherwise a free one is taken. */
+export async function startAppProcess(env: Record<string, string>, port?: number): Promise<AppProcess> {
+  port ??= await freePort();
   const child = spawn(process.execPath, ["--import", "tsx", "server/index.ts"], {
     cwd: ROOT,
     env: {
@@ -62,6 +64,7 @@ export async function startAppProcess(env: Record<string, string>): Promise<AppP
   }
   return {
     url,
+    port,
     child,
     output: () => out,
     exited,

@@ -11,7 +11,10 @@ import { signInOverHttp, type HttpSession } from "./http-session";
 import type { OwnCluster } from "./own-cluster";
 
 export interface FaultFixture {
+  /** The running app; replaced by restart(). */
   app: AppProcess;
+  /** Starts the app again on the same port and database (sessions live in the database). */
+  restart(): Promise<AppProcess>;
   databaseUrl: string;
   tech: HttpSession;
   sweepId: string;
@@ -57,8 +60,12 @@ export async function faultFixture(cluster: OwnCluster, env: Record<string, stri
   });
   if (sweep.status !== 201) throw new Error(`sweep: ${sweep.status} ${await sweep.text()}`);
   const sweepId = (await sweep.json()).id;
-  return {
+  const fixture: FaultFixture = {
     app,
+    async restart() {
+      fixture.app = await startAppProcess({ DATABASE_URL: databaseUrl, ...env }, fixture.app.port);
+      return fixture.app;
+    },
     databaseUrl,
     tech,
     sweepId,
@@ -74,4 +81,5 @@ export async function faultFixture(cluster: OwnCluster, env: Record<string, stri
       }
     },
   };
+  return fixture;
 }

@@ -1,6 +1,8 @@
 /** A signed-in API client over real HTTP (fetch), with the session cookie and CSRF token. */
 export interface HttpSession {
   request(method: string, url: string, body?: unknown): Promise<Response>;
+  /** Cookie and CSRF headers for a write sent some other way (a slow upload). */
+  writeHeaders(): Record<string, string>;
 }
 
 export async function signInOverHttp(base: string, email: string, password: string): Promise<HttpSession> {
@@ -29,5 +31,5 @@ export async function signInOverHttp(base: string, email: string, password: stri
   await request("GET", "/api/auth/session");
   const res = await request("POST", "/api/auth/sign-in", { email, password });
   if (res.status !== 200) throw new Error(`sign-in as ${email} gave ${res.status}: ${await res.text()}`);
-  return { request };
+  return { request, writeHeaders: () => ({ cookie, "x-csrf-token": csrf, "content-type": "application/json" }) };
 }
