@@ -32,6 +32,8 @@ export interface AppConfig {
   /** Serve the built client from dist/client (off in API-only tests). */
   serveClient: boolean;
   planImageLimits?: Partial<PlanImageLimits>;
+  /** Per-member limit on the Walk sync writes (server/middleware/sync-throttle.ts). */
+  syncThrottle?: { limit?: number; windowMs?: number };
 }
 
 /** Everything a request handler may reach; built once and passed to createApp. */

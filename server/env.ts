@@ -35,6 +35,9 @@ const envSchema = z.object({
     .default(40),
   LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
   SEED_DEMO: z.enum(["true", "false"]).default("true"),
+  // Walk sync writes per member per window; over it the answer is 503 with Retry-After.
+  SYNC_RATE_LIMIT: z.coerce.number().int().min(1).default(600),
+  SYNC_RATE_WINDOW_MS: z.coerce.number().int().min(1000).default(60_000),
   // On SIGTERM: how long in-flight requests and jobs may run before they are cut off.
   SHUTDOWN_GRACE_MS: z.coerce.number().int().min(0).max(600_000).default(20_000),
   // On SIGTERM: how long to keep serving while /readyz already says "draining", so a load balancer
