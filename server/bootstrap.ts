@@ -3,6 +3,7 @@ import type { Env } from "./env";
 import type { AppContext } from "./context";
 import { createDb, migrateDb } from "./db/client";
 import { createSmtpMailer } from "./mail/mailer";
+import { createMailQueue } from "./mail/mail-queue";
 import { startFakeSmtp, type FakeSmtp } from "./mail/fake-smtp";
 import { createLifecycle } from "./lifecycle";
 
@@ -32,7 +33,7 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
   await migrateDb(db);
 
   const fakeSmtp = env.SMTP_HOST ? null : await startFakeSmtpOnFreePort(db, env.FAKE_SMTP_PORT);
-  const mailer = createSmtpMailer(
+  const transport = createSmtpMailer(
     {
       host: env.SMTP_HOST ?? "127.0.0.1",
       port: fakeSmtp ? fakeSmtp.port : env.SMTP_PORT,
@@ -40,9 +41,17 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
       user: env.SMTP_USER,
       pass: env.SMTP_PASS,
       from: env.MAIL_FROM,
+      timeoutMs: env.SMTP_TIMEOUT_MS,
     },
     Boolean(fakeSmtp),
   );
+  const mailer = createMailQueue(db, transport, logger, {
+    retryLimit: env.MAIL_RETRY_LIMIT,
+    retryDelayS: env.MAIL_RETRY_DELAY_S,
+    pollingIntervalS: env.JOB_POLL_INTERVAL_S,
+  });
+  // Every process runs the mail worker: any of them may deliver any message.
+  await mailer.start();
 
   const ctx: AppContext = {
     db,
@@ -69,6 +78,7 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
     ctx,
     fakeSmtp,
     async close() {
+      await mailer.stop();
       await ctx.analysisRunner?.close();
       await ctx.reportRunner?.close();
       mailer.close();

@@ -1,7 +1,7 @@
 import type pg from "pg";
 import type { Logger } from "pino";
 import type { Db } from "./db/client";
-import type { Mailer } from "./mail/mailer";
+import type { MailQueue } from "./mail/mail-queue";
 import type { BlobStorage } from "./storage/blob-storage";
 import type { AnalysisRunner } from "./jobs/analysis-runner";
 import type { ReportRunner } from "./jobs/report-runner";
@@ -40,7 +40,8 @@ export interface AppConfig {
 export interface AppContext {
   db: Db;
   pool: pg.Pool;
-  mailer: Mailer;
+  /** The outgoing mail queue: `send` resolves once the message is stored, not once delivered. */
+  mailer: MailQueue;
   config: AppConfig;
   logger: Logger;
   /** Where plan images live; defaults to a disk store under config.uploadsDir. */

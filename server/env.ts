@@ -25,6 +25,13 @@ const envSchema = z.object({
   SMTP_PASS: z.string().optional(),
   SMTP_SECURE: z.enum(["true", "false"]).default("false"),
   MAIL_FROM: z.string().default("Plumeline <no-reply@plumeline.local>"),
+  // A mail server that does not answer fails the attempt after this long; the queue retries it.
+  SMTP_TIMEOUT_MS: z.coerce.number().int().min(500).max(120_000).default(10_000),
+  // Outgoing mail: retries after the first try, and the base delay (doubled per retry, with jitter).
+  MAIL_RETRY_LIMIT: z.coerce.number().int().min(0).max(30).default(8),
+  MAIL_RETRY_DELAY_S: z.coerce.number().int().min(1).max(3600).default(30),
+  // How often an idle worker asks the job queue for work (pg-boss's minimum is 0.5 s).
+  JOB_POLL_INTERVAL_S: z.coerce.number().min(0.5).max(60).default(2),
   FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
   UPLOADS_DIR: z.string().default("uploads"),
   // Plan images: the most pixels a header may declare before it is refused undecoded (decompression bombs).

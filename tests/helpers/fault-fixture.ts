@@ -17,6 +17,7 @@ export interface FaultFixture {
   restart(): Promise<AppProcess>;
   databaseUrl: string;
   tech: HttpSession;
+  owner: HttpSession;
   sweepId: string;
   startedAt: Date;
   /** Reading ids stored for the sweep, read straight from the database. */
@@ -68,6 +69,7 @@ export async function faultFixture(cluster: OwnCluster, env: Record<string, stri
     },
     databaseUrl,
     tech,
+    owner,
     sweepId,
     startedAt,
     async storedIds() {
