@@ -41,7 +41,8 @@ async function tableCounts(ctx: Pick<AppContext, "pool">): Promise<Record<string
   );
   const out: Record<string, number> = {};
   // Sessions come and go with every sign-in below; everything else must match.
-  for (const { name } of rows.filter((r) => r.name !== "session")) out[name] = (await ctx.pool.query(`select count(*)::int as n from "${name}"`)).rows[0].n;
+  for (const { name } of rows.filter((r) => r.name !== "session"))
+    out[name] = (await ctx.pool.query(`select count(*)::int as n from "${name}"`)).rows[0].n;
   return out;
 }
 
