@@ -9,7 +9,7 @@ import type { Lifecycle } from "./lifecycle";
 
 /** Plan upload limits; each has a default (server/api/plans/plan-resources.ts). */
 export interface PlanImageLimits {
-  /** Largest upload in bytes (the 25 MB). */
+  /** Largest upload in bytes (25 MB, docs/product.md). */
   maxBytes: number;
   /** Largest decoded image, width × height, checked from the header before decoding. */
   maxPixels: number;
