@@ -50,6 +50,42 @@ export function createMailQueue(
   const opts = { ...MAIL_QUEUE_DEFAULTS, ...options };
   let boss: PgBoss | null = null;
   let sweepTimer: NodeJS.Timeout | null = null;
+  let loop: Promise<void> | null = null;
+  let wake: (() => void) | null = null;
+  const pause = (ms: number) =>
+    new Promise<void>((resolve) => {
+      const timer = setTimeout(done, ms);
+      function done() {
+        clearTimeout(timer);
+        wake = null;
+        resolve();
+      }
+      wake = done;
+    });
+
+  /** Takes one job at a time while the worker runs; every call is awaited and every failure caught. */
+  async function runLoop(b: PgBoss): Promise<void> {
+    while (boss === b) {
+      try {
+        const [job] = await b.fetch<{ mailId: string }>(MAIL_JOB, { includeMetadata: true, batchSize: 1 });
+        if (!job) {
+          await pause(opts.pollingIntervalS * 1000);
+          continue;
+        }
+        try {
+          await deliver(job.data.mailId, job.retryCount >= job.retryLimit);
+          await b.complete(MAIL_JOB, job.id);
+        } catch (err) {
+          // Retried later with backoff; after the last try pg-boss moves it to the dead letter queue.
+          await b.fail(MAIL_JOB, job.id, { reason: describeMailError(err) });
+        }
+      } catch (err) {
+        // The database is away (or the job vanished): the job expires and is retried; wait a poll.
+        logger.warn({ err: { message: (err as Error).message } }, "mail worker: job queue unavailable");
+        await pause(opts.pollingIntervalS * 1000);
+      }
+    }
+  }
 
   /** Writes the message; pass the transaction that creates what it is about. Call notify after commit. */
   async function queue(mail: Queueable, tx: Db | Tx = db): Promise<string> {
@@ -78,6 +114,7 @@ export function createMailQueue(
     if (!boss) return;
     try {
       const jobId = await boss.send(MAIL_JOB, { mailId: id });
+      wake?.(); // this process's worker looks at once instead of at its next poll
       if (jobId)
         await db
           .update(outgoingMail)
@@ -210,13 +247,9 @@ export function createMailQueue(
       };
       if (await boss.getQueue(MAIL_JOB)) await boss.updateQueue(MAIL_JOB, queueOptions);
       else await boss.createQueue(MAIL_JOB, queueOptions);
-      await boss.work<{ mailId: string }>(
-        MAIL_JOB,
-        { includeMetadata: true, batchSize: 1, pollingIntervalSeconds: opts.pollingIntervalS },
-        async ([job]) => {
-          await deliver(job.data.mailId, job.retryCount >= job.retryLimit);
-        },
-      );
+      // Our own fetch loop rather than boss.work(): pg-boss 10's worker does not await its
+      // complete/fail calls, so a database outage mid-job became an unhandled rejection (a crash).
+      loop = runLoop(boss);
       const runSweep = () =>
         sweep().catch((err) => logger.warn({ err: { message: err.message } }, "mail sweep failed"));
       sweepTimer = setInterval(runSweep, 30_000);
@@ -229,6 +262,10 @@ export function createMailQueue(
       sweepTimer = null;
       const b = boss;
       boss = null;
+      wake?.();
+      // The delivery under way finishes (its SMTP attempt is bounded by the transport's timeouts).
+      if (loop) await Promise.race([loop, new Promise((r) => setTimeout(r, timeoutMs).unref())]);
+      loop = null;
       if (b) await b.stop({ graceful: true, wait: true, timeout: timeoutMs });
     },
     close() {

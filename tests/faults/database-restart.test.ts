@@ -48,7 +48,15 @@ it("rides through a database restart: 503 with Retry-After while it is away, eve
     stats,
   });
 
-  await sleep(1_500);
+  await sleep(1_000);
+  // An invitation sent around the outage is still delivered.
+  const invited = await f.owner.request("POST", "/api/team/invitations", {
+    email: "wren.aldous@tamarack.test",
+    role: "engineer",
+  });
+  expect(invited.status).toBe(201);
+  const invitationId = (await invited.json()).id;
+  await sleep(500);
   const beforeStop = stats.acknowledged.size;
   await cluster.stop();
   // Away: alive, not ready, and the sync is answered 503 (counted by the burst).
@@ -71,7 +79,17 @@ it("rides through a database restart: 503 with Retry-After while it is away, eve
 
   const stored = await f.storedIds();
   const storedSet = new Set(stored);
-  console.log(`database restart: ${describeStats(stats)}; ${stored.length} stored`);
+  const mailBy = Date.now() + 30_000;
+  let delivery: { state: string } = { state: "queued" };
+  while (delivery.state !== "sent" && Date.now() < mailBy) {
+    const team = await (await f.owner.request("GET", "/api/team")).json();
+    delivery = team.invitations.find((i: { id: string }) => i.id === invitationId).delivery;
+    if (delivery.state !== "sent") await sleep(250);
+  }
+  console.log(
+    `database restart: ${describeStats(stats)}; ${stored.length} stored; invitation e-mail ${delivery.state}`,
+  );
+  expect(delivery.state).toBe("sent");
 
   expect(f.app.alive(), f.app.output()).toBe(true);
   expect(beforeStop).toBeGreaterThan(0);
