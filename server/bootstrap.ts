@@ -6,6 +6,7 @@ import { createSmtpMailer } from "./mail/mailer";
 import { createMailQueue } from "./mail/mail-queue";
 import { startFakeSmtp, type FakeSmtp } from "./mail/fake-smtp";
 import { createLifecycle } from "./lifecycle";
+import { storageFromEnv } from "./storage/storage-from-env";
 
 /** The fake SMTP server on its usual port, or any free one when another checkout already has it. */
 async function startFakeSmtpOnFreePort(db: Parameters<typeof startFakeSmtp>[0], port: number): Promise<FakeSmtp> {
@@ -53,12 +54,15 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
   // Every process runs the mail worker: any of them may deliver any message.
   await mailer.start();
 
+  const uploads = storageFromEnv(env);
+  logger.info({ storage: uploads.kind }, "uploads storage");
   const ctx: AppContext = {
     db,
     pool,
     mailer,
     logger,
     lifecycle: createLifecycle(),
+    storage: uploads.storage,
     config: {
       sessionSecret: env.SESSION_SECRET,
       bcryptCost: env.BCRYPT_COST,
@@ -82,6 +86,7 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
       await ctx.analysisRunner?.close();
       await ctx.reportRunner?.close();
       mailer.close();
+      uploads.close();
       await fakeSmtp?.close();
       await pool.end();
     },

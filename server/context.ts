@@ -44,7 +44,7 @@ export interface AppContext {
   mailer: MailQueue;
   config: AppConfig;
   logger: Logger;
-  /** Where plan images live; defaults to a disk store under config.uploadsDir. */
+  /** Where uploads live (server/storage/storage-from-env.ts); tests without one get a disk store under config.uploadsDir. */
   storage?: BlobStorage;
   /** Worker threads that run the locator; made on first use (server/api/analysis). */
   analysisRunner?: AnalysisRunner;
