@@ -27,6 +27,7 @@ import { complianceRouter } from "./api/compliance/compliance.router";
 import { todayRouter } from "./api/compliance/today.router";
 import { exportsRouter } from "./api/exports/exports.router";
 import { healthRouter } from "./api/health/health.router";
+import { jobsRouter } from "./api/jobs/jobs.router";
 
 const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
 
@@ -92,6 +93,7 @@ export function createApp(ctx: AppContext): Express {
   api.use(complianceRouter(ctx));
   api.use(todayRouter(ctx));
   api.use(exportsRouter(ctx));
+  api.use(jobsRouter(ctx));
   api.use(notFoundApi);
   app.use("/api", api);
 
