@@ -27,6 +27,8 @@ import { findingsRouter } from "./api/findings/findings.router";
 import { complianceRouter } from "./api/compliance/compliance.router";
 import { todayRouter } from "./api/compliance/today.router";
 import { exportsRouter } from "./api/exports/exports.router";
+import { healthRouter } from "./api/health/health.router";
+import { jobsRouter } from "./api/jobs/jobs.router";
 
 const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
 
@@ -35,6 +37,12 @@ export function createApp(ctx: AppContext): Express {
   const app = express();
   app.disable("x-powered-by");
   app.set("trust proxy", "loopback");
+  app.use(healthRouter(ctx));
+  // While draining, each answer closes its connection so clients reconnect to another process.
+  app.use((_req, res, next) => {
+    if (ctx.lifecycle?.draining) res.set("Connection", "close");
+    next();
+  });
   app.use(
     pinoHttp({
       logger: ctx.logger,
@@ -67,9 +75,6 @@ export function createApp(ctx: AppContext): Express {
   );
 
   const api = express.Router();
-  api.get("/health", (_req, res) => {
-    res.json({ ok: true });
-  });
   api.use(loadAuth(ctx.db));
   api.use(csrfProtection);
   api.use(authRouter(ctx));
@@ -90,6 +95,7 @@ export function createApp(ctx: AppContext): Express {
   api.use(complianceRouter(ctx));
   api.use(todayRouter(ctx));
   api.use(exportsRouter(ctx));
+  api.use(jobsRouter(ctx));
   api.use(notFoundApi);
   app.use("/api", api);
 

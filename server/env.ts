@@ -26,6 +26,13 @@ const envSchema = z
     SMTP_PASS: z.string().optional(),
     SMTP_SECURE: z.enum(["true", "false"]).default("false"),
     MAIL_FROM: z.string().default("Plumeline <no-reply@plumeline.local>"),
+    // A mail server that does not answer fails the attempt after this long; the queue retries it.
+    SMTP_TIMEOUT_MS: z.coerce.number().int().min(500).max(120_000).default(10_000),
+    // Outgoing mail: retries after the first try, and the base delay (doubled per retry, with jitter).
+    MAIL_RETRY_LIMIT: z.coerce.number().int().min(0).max(30).default(8),
+    MAIL_RETRY_DELAY_S: z.coerce.number().int().min(1).max(3600).default(30),
+    // How often an idle worker asks the job queue for work (pg-boss's minimum is 0.5 s).
+    JOB_POLL_INTERVAL_S: z.coerce.number().min(0.5).max(60).default(2),
     FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
     UPLOADS_DIR: z.string().default("uploads"),
     // Where uploads live: "disk" (UPLOADS_DIR, one machine) or "s3" (any S3-compatible object store,
@@ -46,6 +53,14 @@ const envSchema = z
       .default(40),
     LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
     SEED_DEMO: z.enum(["true", "false"]).default("true"),
+    // Walk sync writes per member per window; over it the answer is 503 with Retry-After.
+    SYNC_RATE_LIMIT: z.coerce.number().int().min(1).default(600),
+    SYNC_RATE_WINDOW_MS: z.coerce.number().int().min(1000).default(60_000),
+    // On SIGTERM: how long in-flight requests and jobs may run before they are cut off.
+    SHUTDOWN_GRACE_MS: z.coerce.number().int().min(0).max(600_000).default(20_000),
+    // On SIGTERM: how long to keep serving while /readyz already says "draining", so a load balancer
+    // stops sending new requests before the listener closes.
+    SHUTDOWN_DELAY_MS: z.coerce.number().int().min(0).max(60_000).default(0),
   })
   .superRefine((env, ctx) => {
     if (env.STORAGE === "s3" && !env.S3_BUCKET) {

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { emailSchema, idSchema, passwordSchema, personNameSchema } from "./common";
 import { ROLES } from "../domain/roles";
+import { mailDelivery } from "./mail-delivery";
 
 export const roleSchema = z.enum(ROLES);
 
@@ -24,6 +25,8 @@ export const invitation = z.object({
   createdAt: z.string(),
   expiresAt: z.string(),
   acceptedAt: z.string().nullable(),
+  /** The invitation e-mail's state; null for invitations made before mail went through the queue. */
+  delivery: mailDelivery.nullable(),
 });
 export type Invitation = z.infer<typeof invitation>;
 

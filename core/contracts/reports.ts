@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { mailDelivery } from "./mail-delivery";
 
 export const sendReportInput = z
   .object({
@@ -25,7 +26,10 @@ export const reportSend = z.object({
   subject: z.string(),
   filename: z.string(),
   bytes: z.number(),
+  /** When the sender pressed Send (the message is queued then; `delivery` says when it went). */
   sentAt: z.string(),
+  /** Null for sends recorded before mail went through the queue. */
+  delivery: mailDelivery.nullable(),
 });
 export type ReportSend = z.infer<typeof reportSend>;
 

@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from "express";
 import { HttpError } from "../lib/http-error";
+import { DATABASE_RETRY_AFTER_S, isDatabaseUnavailable } from "../db/unavailable";
 
 export const notFoundApi: RequestHandler = (req) => {
   throw new HttpError(404, "not_found", `No API route ${req.method} ${req.path}.`);
@@ -22,6 +23,17 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   }
   if (status === 413) {
     res.status(413).json({ error: { code: "too_large", message: "The request is too large." } });
+    return;
+  }
+  if (isDatabaseUnavailable(err)) {
+    // A restart or failover: clients (the Walk sync among them) retry a 5xx after the pause.
+    req.log?.warn({ err: { message: err?.message, code: err?.code } }, "database unavailable");
+    res
+      .status(503)
+      .set("Retry-After", String(DATABASE_RETRY_AFTER_S))
+      .json({
+        error: { code: "unavailable", message: "The service is briefly unavailable. Please try again shortly." },
+      });
     return;
   }
   req.log?.error({ err }, "unhandled error");

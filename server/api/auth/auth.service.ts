@@ -48,7 +48,7 @@ export async function requestPasswordReset(ctx: AppContext, email: string) {
     .insert(passwordResets)
     .values({ userId: user.id, tokenHash: hash, expiresAt: new Date(Date.now() + RESET_VALID_MS) });
   const mail = passwordResetMail({ name: user.name, link: `${ctx.config.appUrl}/reset-password/${token}` });
-  await ctx.mailer.send({ to: user.email, ...mail });
+  await ctx.mailer.send({ to: user.email, kind: "password-reset", ...mail });
 }
 
 export async function confirmPasswordReset(ctx: AppContext, token: string, password: string) {

@@ -3,7 +3,7 @@ import request from "supertest";
 import { desc } from "drizzle-orm";
 import { createApp } from "../../app";
 import { outboxMessages } from "../../db/schema/index";
-import { agentFor, createTestApp, type TestApp } from "../../../tests/helpers/test-app";
+import { agentFor, createTestApp, drainMail, type TestApp } from "../../../tests/helpers/test-app";
 import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 
 let t: TestApp;
@@ -138,6 +138,7 @@ describe("password reset", () => {
     const a = await agentFor(t.app);
     const asked = await a.post("/api/auth/password-reset", { email: acme.people.technician.email });
     expect(asked.status).toBe(202);
+    await drainMail(t);
     const [mail] = await t.ctx.db.select().from(outboxMessages).orderBy(desc(outboxMessages.receivedAt)).limit(1);
     expect(mail.to).toEqual([acme.people.technician.email]);
     const token = mail.text.match(/reset-password\/([A-Za-z0-9_-]+)/)?.[1];
@@ -164,6 +165,7 @@ describe("password reset", () => {
     const a = await agentFor(t.app);
     const before = (await t.ctx.db.select().from(outboxMessages)).length;
     expect((await a.post("/api/auth/password-reset", { email: "ghost@nowhere.test" })).status).toBe(202);
+    await drainMail(t);
     expect((await t.ctx.db.select().from(outboxMessages)).length).toBe(before);
   });
 });

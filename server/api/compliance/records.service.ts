@@ -21,7 +21,7 @@ import {
 import type { AssessedPoint } from "#core/domain/compliance/assess-leak-rate";
 import type { LeakRatePart } from "#core/domain/compliance/rule-profile";
 import { chargeToKg, companyGwpBases, toSystem } from "../systems/systems.service";
-import { badRequest, conflict, notFound } from "../../lib/http-error";
+import { badRequest, conflict, notFound, HttpError } from "../../lib/http-error";
 import { eventDay } from "../findings/findings.service";
 import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { systemDueItems } from "./due-items";
@@ -38,8 +38,10 @@ export async function visibleSystem(ctx: AppContext, viewer: Viewer, systemId: s
   if (!row) throw notFound("That system");
   try {
     await loadVisibleStore(ctx, viewer, row.store.id);
-  } catch {
-    throw notFound("That system");
+  } catch (err) {
+    // Only "not your store" becomes "not found"; a database outage stays a 503.
+    if (err instanceof HttpError) throw notFound("That system");
+    throw err;
   }
   return row;
 }

@@ -8,12 +8,15 @@ import { readerLengthUnit } from "./reader-units";
 import {
   listReportSends,
   reportRecipients,
+  retryReportSend,
   sendSweepReport,
   sweepReadingsCsv,
   sweepReportPdf,
 } from "./reports.service";
 
 const idParam = z.object({ id: z.uuid("must be a valid id") });
+
+const sendParams = z.object({ id: z.uuid("must be a valid id"), sendId: z.uuid("must be a valid id") });
 
 export function reportsRouter(ctx: AppContext): Router {
   const router = Router();
@@ -61,6 +64,14 @@ export function reportsRouter(ctx: AppContext): Router {
         .json(
           await sendSweepReport(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body, await unit(req)),
         );
+    },
+  );
+  router.post(
+    "/sweeps/:id/report/sends/:sendId/retry",
+    requireMember("reports.send"),
+    validate(sendParams, "params"),
+    async (req, res) => {
+      res.json(await retryReportSend(ctx, member(req), res.locals.params.id, res.locals.params.sendId));
     },
   );
   return router;

@@ -6,7 +6,7 @@ import { companyRules } from "../compliance/system-records";
 import { findRefrigerant } from "#core/domain/refrigerants/catalogue";
 import type { GwpBasis, Refrigerant } from "#core/domain/refrigerants/types";
 import { KG_PER_POUND } from "#core/domain/units/mass";
-import { badRequest, notFound } from "../../lib/http-error";
+import { badRequest, notFound, HttpError } from "../../lib/http-error";
 import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { refrigerantCautions, summarizeRefrigerant } from "#core/domain/refrigerants/refrigerant-summary";
 
@@ -71,8 +71,10 @@ async function loadSystem(ctx: AppContext, viewer: Viewer, systemId: string): Pr
   if (!row) throw notFound("That system");
   try {
     await loadVisibleStore(ctx, viewer, row.storeId);
-  } catch {
-    throw notFound("That system");
+  } catch (err) {
+    // Only "not your store" becomes "not found"; a database outage stays a 503.
+    if (err instanceof HttpError) throw notFound("That system");
+    throw err;
   }
   return row;
 }
