@@ -1,9 +1,10 @@
 import { gridCellCount, LocatorInputError, MAX_GRID_CELLS, type LocatorInput } from "../contracts/locator-input";
-import type { LocatorResult } from "../contracts/locator-output";
+import type { DelayFacts, LocatorResult } from "../contracts/locator-output";
 import { createPlanGrid } from "./grid/plan-grid";
 import { DEFAULT_LOCATOR_OPTIONS, type LocatorOptions } from "./locator/locator-options";
 import { casesRunFans, fanStepScale } from "./locator/plan-masks";
 import { LOCATOR_SETTINGS, type LocatorSettings } from "./locator/settings";
+import { delayDiagnostics, delayStage } from "./pipeline/delay-stage";
 import { diagnosticsStage } from "./pipeline/diagnostics-stage";
 import { fieldStage } from "./pipeline/field-stage";
 import { lagStage } from "./pipeline/lag-stage";
@@ -47,36 +48,93 @@ export function locate(
   const k = settings.kernel;
   const stepScale = k.fanMixingScale < 1 ? fanStepScale(grid, plan, k.fanMixingScale) : null;
 
-  const lag = lagStage(readings, instrument, grid, o.walkSpeedMps);
-  const zones = zonesStage(plan.backgroundZones, instrument.alarmPpm, grid, stepScale, lag, {
-    zones: settings.zones,
-    noise: settings.noise,
-    nearCutoffM: k.nearCutoffM,
-    elevatedPpm: settings.sources.elevatedPpm,
-  });
-  const field = fieldStage(grid, stepScale, casesRunFans(plan.fixtures), lag, zones, settings);
-  const sources = sourcesStage(plan, grid, lag, zones, field, {
-    kernel: k,
-    sources: settings.sources,
-    zoneMarginM: settings.zones.marginM,
-  });
-  const placement = placementStage(
-    plan,
-    grid,
-    lag,
-    field,
-    sources,
-    supportRule(field, zones, settings.sources),
-    settings,
+  const stages = (shift: Pick<LocatorInput["instrument"], "transportDelayS" | "timeConstantS">) => {
+    const lag = lagStage(readings, shift, grid, o.walkSpeedMps);
+    const zones = zonesStage(plan.backgroundZones, instrument.alarmPpm, grid, stepScale, lag, {
+      zones: settings.zones,
+      noise: settings.noise,
+      nearCutoffM: k.nearCutoffM,
+      elevatedPpm: settings.sources.elevatedPpm,
+    });
+    const field = fieldStage(grid, stepScale, casesRunFans(plan.fixtures), lag, zones, settings);
+    const sources = sourcesStage(plan, grid, lag, zones, field, {
+      kernel: k,
+      sources: settings.sources,
+      zoneMarginM: settings.zones.marginM,
+    });
+    const rule = supportRule(field, zones, settings.sources);
+    const placement = placementStage(plan, grid, lag, field, sources, rule, settings);
+    return { lag, zones, field, sources, placement };
+  };
+  // The delay checked against the readings first: when they clearly fit another delay and nobody set
+  // one by hand for this analysis, the spots are placed with the delay the readings support.
+  const check = delayStage(readings, instrument, grid, o.walkSpeedMps);
+  const useEstimate = o.delayFromReadings && check.supported && check.estimatedS !== null;
+  let usedS = useEstimate ? check.estimatedS! : check.statedS;
+  let run = stages(useEstimate ? { transportDelayS: usedS, timeConstantS: 0 } : instrument);
+  const plume = strongestUnexplained(run.lag.ppm, run.zones.zoneOfReading);
+  // A plume far above the alarm that no spot fits is more likely a wrong delay than no leak: try the
+  // delay the readings fit best and a few around the stated one, and keep the run whose first source
+  // explains the readings best, before saying nothing was found.
+  const farAbove = plume >= FAR_ABOVE_ALARMS * instrument.alarmPpm;
+  const firstS = usedS;
+  if (run.placement.candidates.length === 0 && farAbove) {
+    const tried = new Set([usedS]);
+    let bestDelta = 0;
+    for (const shift of [check.estimatedS, ...RETRY_SHARES.map((f) => f * check.statedS)]) {
+      if (shift === null || tried.has(shift)) continue;
+      tried.add(shift);
+      const retry = stages({ transportDelayS: shift, timeConstantS: 0 });
+      const delta = retry.placement.candidates.length > 0 ? (retry.sources.found[0]?.delta ?? 0) : 0;
+      if (delta > bestDelta) {
+        bestDelta = delta;
+        run = retry;
+        usedS = shift;
+      }
+    }
+  }
+  const { lag, zones, field, sources, placement } = run;
+  const report = diagnosticsStage(input, grid, lag, zones, field, sources, placement, usedS, settings);
+  const delay: DelayFacts = {
+    statedS: round2(check.statedS),
+    estimatedS: check.estimatedS,
+    supported: check.supported,
+    usedS: round2(usedS),
+    statedMisfit: check.statedMisfit === null ? null : round3(check.statedMisfit),
+    estimatedMisfit: check.estimatedMisfit === null ? null : round3(check.estimatedMisfit),
+  };
+  const delayNotes = delayDiagnostics(
+    delay,
+    usedS !== firstS,
+    placement.candidates.length,
+    plume,
+    instrument.alarmPpm,
+    farAbove,
   );
-  const report = diagnosticsStage(input, grid, lag, zones, field, sources, placement, settings);
 
   return {
     candidates: [...placement.candidates],
     background: { ppm: round2(field.background.ppm) },
-    diagnostics: [...report.diagnostics],
+    diagnostics: [...report.diagnostics, ...delayNotes],
     assumptions: [...report.assumptions],
     readings: [...report.readings],
     field: field.map,
+    delay,
   };
+}
+
+// "Far above the alarm": a plume this many times the alarm level is never reported as no leak
+// without saying the delay may be why (common practice, no published source).
+const FAR_ABOVE_ALARMS = 5;
+// Shares of the stated shift tried when such a plume fits no spot (a hose swapped or a pump wearing
+// moves the delay by a factor, not a few tenths of a second).
+const RETRY_SHARES = [0.5, 0.75, 1.5, 2];
+
+const round3 = (v: number) => Math.round(v * 1000) / 1000;
+
+/** The highest reading that no active benign-source zone explains. */
+function strongestUnexplained(ppm: Float64Array, zoneOfReading: Int32Array): number {
+  let top = 0;
+  for (let i = 0; i < ppm.length; i++) if (zoneOfReading[i] < 0 && ppm[i] > top) top = ppm[i];
+  return top;
 }

@@ -7,9 +7,15 @@ export interface LocatorOptions {
   cellSize: number;
   /** Walking pace between stops for the stop-and-go lag model, m/s (docs/locator/design-ranges.md: 0.7–1.2); 0 = move evenly between taps. */
   walkSpeedMps: number;
+  /**
+   * Place the spots with the delay the readings support when it clearly differs from the stated one
+   * (core/analysis/lag/delay-check.ts). Off when someone set the delay by hand for this analysis.
+   */
+  delayFromReadings: boolean;
 }
 
 export const DEFAULT_LOCATOR_OPTIONS: Readonly<LocatorOptions> = {
   walkSpeedMps: 1,
   cellSize: 0.25,
+  delayFromReadings: true,
 };

@@ -26,13 +26,15 @@ export function diagnosticsStage(
   field: FieldResult,
   sources: Pick<SourcesResult, "fit">,
   placement: Pick<PlacementResult, "topOneSided">,
+  /** The lag the readings were moved back by (delay plus time constant), s. */
+  shiftS: number,
   settings: { sources: Pick<SourceSettings, "elevatedPpm">; report: ReportSettings },
 ): DiagnosticsResult {
   const { plan, instrument, readings } = input;
   const { xs, ys, ppm: y, censored, positions } = lag;
   const n = y.length;
   const background = field.background.ppm;
-  const delayS = round2(instrument.transportDelayS + instrument.timeConstantS);
+  const delayS = round2(shiftS);
   const diagnostics: Diagnostic[] = [];
   for (const f of plan.fixtures) {
     const d = fansMixing(f, xs, ys, y, background, instrument.alarmPpm);
