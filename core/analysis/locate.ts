@@ -74,22 +74,20 @@ export function locate(
   let run = stages(useEstimate ? { transportDelayS: usedS, timeConstantS: 0 } : instrument);
   const plume = strongestUnexplained(run.lag.ppm, run.zones.zoneOfReading);
   // A plume far above the alarm that no spot fits is more likely a wrong delay than no leak: try the
-  // delay the readings fit best and a few around the stated one, and keep the run whose first source
-  // explains the readings best, before saying nothing was found.
+  // delay the readings fit best, then a few shares of the stated one, and keep the first with which
+  // a spot fits, before saying nothing was found.
   const farAbove = plume >= FAR_ABOVE_ALARMS * instrument.alarmPpm;
   const firstS = usedS;
   if (run.placement.candidates.length === 0 && farAbove) {
     const tried = new Set([usedS]);
-    let bestDelta = 0;
     for (const shift of [check.estimatedS, ...RETRY_SHARES.map((f) => f * check.statedS)]) {
       if (shift === null || tried.has(shift)) continue;
       tried.add(shift);
       const retry = stages({ transportDelayS: shift, timeConstantS: 0 });
-      const delta = retry.placement.candidates.length > 0 ? (retry.sources.found[0]?.delta ?? 0) : 0;
-      if (delta > bestDelta) {
-        bestDelta = delta;
+      if (retry.placement.candidates.length > 0) {
         run = retry;
         usedS = shift;
+        break;
       }
     }
   }
@@ -124,11 +122,11 @@ export function locate(
 }
 
 // "Far above the alarm": a plume this many times the alarm level is never reported as no leak
-// without saying the delay may be why (common practice, no published source).
-const FAR_ABOVE_ALARMS = 5;
-// Shares of the stated shift tried when such a plume fits no spot (a hose swapped or a pump wearing
-// moves the delay by a factor, not a few tenths of a second).
-const RETRY_SHARES = [0.5, 0.75, 1.5, 2];
+// without trying other delays and saying the delay may be why (common practice, no published source).
+const FAR_ABOVE_ALARMS = 4;
+// Shares of the stated shift tried, in this order, when such a plume fits no spot: a delay entered
+// twice too long or too short is the usual mistake, a longer hose or a worn pump changes it less.
+const RETRY_SHARES = [0.5, 2, 0.75, 1.5];
 
 const round3 = (v: number) => Math.round(v * 1000) / 1000;
 
