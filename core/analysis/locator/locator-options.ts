@@ -1,6 +1,8 @@
+import { DEFAULT_CELL_SIZE_M } from "../../contracts/locator-input";
+
 // What a caller may set: the grid cell (the server's analysis sets it) and the walking pace, both also
-// used by the Walk screen's lag hint so it marks the point the locator will use. Everything else is a
-// calibrated model setting (settings.ts).
+// used by the Walk screen's lag hint so it marks the point the locator will use, and whether the delay
+// may be taken from the readings. Everything else is a calibrated model setting (settings.ts).
 
 export interface LocatorOptions {
   /** Grid cell, m (docs/locator/design-ranges.md). */
@@ -16,6 +18,6 @@ export interface LocatorOptions {
 
 export const DEFAULT_LOCATOR_OPTIONS: Readonly<LocatorOptions> = {
   walkSpeedMps: 1,
-  cellSize: 0.25,
+  cellSize: DEFAULT_CELL_SIZE_M,
   delayFromReadings: true,
 };
