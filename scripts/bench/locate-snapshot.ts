@@ -41,6 +41,7 @@ for (const f of readdirSync(dir).filter((x) => x.endsWith(".json") && !x.endsWit
     diagnostics: r.diagnostics,
     assumptions: r.assumptions,
     readings: r.readings,
+    delay: r.delay,
     field: {
       width: r.field.width,
       height: r.field.height,

@@ -92,13 +92,32 @@ export function checkDelay(
   const cut2 = 9 * settings.radiusM * settings.radiusM;
   const misfitAt = (shift: number): { misfit: number; weight: number } => {
     const p: LaggedPosition[] = walkLag(readings, shift, 0, cachedRoute, walkSpeedMps);
+    // readings in square buckets as wide as the closeness cut-off, so each raised reading meets only
+    // its neighbours (the pairs and their order are those of a full scan over j)
+    const size = Math.sqrt(cut2);
+    const buckets = new Map<number, number[]>();
+    const keyOf = (bx: number, by: number) => bx * 1_000_003 + by;
+    for (let j = 0; j < n; j++) {
+      if (p[j].beforeDelay) continue;
+      const k = keyOf(Math.floor(p[j].x / size), Math.floor(p[j].y / size));
+      const list = buckets.get(k);
+      if (list) list.push(j);
+      else buckets.set(k, [j]);
+    }
     let sw = 0;
     let swd = 0;
+    const near: number[] = [];
     // every pair with at least one raised reading, once (a pair of two raised readings from the lower index)
     for (const i of raisedIdx) {
       if (p[i].beforeDelay) continue;
-      for (let j = 0; j < n; j++) {
-        if (j === i || (raised[j] && j < i) || p[j].beforeDelay) continue;
+      const bx = Math.floor(p[i].x / size);
+      const by = Math.floor(p[i].y / size);
+      near.length = 0;
+      for (let dx = -1; dx <= 1; dx++)
+        for (let dy = -1; dy <= 1; dy++) for (const j of buckets.get(keyOf(bx + dx, by + dy)) ?? []) near.push(j);
+      near.sort((a, b) => a - b);
+      for (const j of near) {
+        if (j === i || (raised[j] && j < i)) continue;
         if (Math.abs(readings[j].t - readings[i].t) < settings.minGapS) continue;
         const d2 = (p[i].x - p[j].x) ** 2 + (p[i].y - p[j].y) ** 2;
         if (d2 > cut2) continue;

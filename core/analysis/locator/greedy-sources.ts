@@ -54,11 +54,6 @@ export interface GreedyResult {
 }
 
 /**
- * Several leaks by greedy forward selection (in the spirit of Yee 2012): scan all cells against the
- * residual of the current joint fit, take the best credible cell, refit all strengths jointly, repeat
- * until no credible cell is left. The first scan's other local optima become alternatives.
- */
-/**
  * The cell maximising Δχ² + 2·s²·log-prior, with s² the residual variance of the best single-source fit
  * (so the prior counts as much as it would against data of that scatter); -1 when no cell fits.
  */
@@ -122,6 +117,11 @@ export function residualOf(y: Float64Array, columns: readonly Float64Array[], q:
   return r;
 }
 
+/**
+ * Several leaks by greedy forward selection (in the spirit of Yee 2012): scan all cells against the
+ * residual of the current joint fit, take the best credible cell, refit all strengths jointly, repeat
+ * until no credible cell is left. The first scan's other local optima become alternatives.
+ */
 export function findSources(input: GreedyInput): GreedyResult {
   const { fields, y, w, censored, allowed } = input;
   const n = y.length;
