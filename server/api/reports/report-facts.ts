@@ -29,6 +29,9 @@ import { HttpError } from "../../lib/http-error";
 import type { Viewer } from "../../access/store-access";
 import { loadVisibleSweep, type SweepRow } from "../../access/sweep-access";
 import { ensureAnalysis, rowField, type AnalysisRow } from "../analysis/analysis.service";
+import { companyRules } from "../compliance/system-records";
+import { paperFor } from "#core/domain/reports/paper";
+import { formatInZone } from "#core/domain/dates/format-in-zone";
 
 export interface ReportFacts {
   sweep: SweepRow;
@@ -43,27 +46,11 @@ export interface ReportFacts {
 }
 
 export function zonedDateTime(d: Date, timeZone: string): string {
-  return new Intl.DateTimeFormat("en-GB", {
-    timeZone,
-    weekday: "short",
-    day: "numeric",
-    month: "short",
-    year: "numeric",
-    hour: "2-digit",
-    minute: "2-digit",
-    hour12: false,
-    timeZoneName: "short",
-  }).format(d);
+  return formatInZone(d, timeZone, "dateTime");
 }
 
 function zonedTime(d: Date, timeZone: string): string {
-  return new Intl.DateTimeFormat("en-GB", {
-    timeZone,
-    hour: "2-digit",
-    minute: "2-digit",
-    second: "2-digit",
-    hour12: false,
-  }).format(d);
+  return formatInZone(d, timeZone, "time");
 }
 
 const PRINCIPLES: Record<string, string> = {
@@ -87,12 +74,13 @@ export async function loadReportFacts(
     if (!(err instanceof HttpError)) throw err;
     analysisProblem = err.message;
   }
-  const [[store], [company], [det], [tech], [plan]] = await Promise.all([
+  const [[store], [company], [det], [tech], [plan], rules] = await Promise.all([
     ctx.db.select().from(stores).where(eq(stores.id, sweep.storeId)),
     ctx.db.select({ name: companies.name }).from(companies).where(eq(companies.id, sweep.companyId)),
     ctx.db.select().from(detectors).where(eq(detectors.id, sweep.detectorId)),
     ctx.db.select({ name: users.name }).from(users).where(eq(users.id, sweep.technicianId)),
     ctx.db.select().from(plans).where(eq(plans.id, sweep.planId)),
+    companyRules(ctx, sweep.companyId),
   ]);
   const tz = store.timeZone;
   const [fixtureRows, readingRows, findingRows, systemRows] = await Promise.all([
@@ -130,6 +118,7 @@ export async function loadReportFacts(
   const model: SweepReportModel = {
     title: `Sweep report — ${store.name}`,
     company: company?.name ?? "",
+    paper: paperFor(rules.profile),
     store: { name: store.name, address: store.address, timeZone: tz },
     sweep: {
       started: zonedDateTime(sweep.startedAt, tz),
