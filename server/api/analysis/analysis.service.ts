@@ -74,7 +74,14 @@ async function compute(ctx: AppContext, sweepId: string, params: AnalysisParams)
   const started = performance.now();
   let result;
   try {
-    result = await analysisRunner(ctx).run({ input, options: { cellSize: params.cellSize } });
+    // a delay set by hand on the field map is used as given; otherwise the locator may take the delay the
+    // readings clearly support (docs/locator/pipeline.md, "The delay checked")
+    const delaySetByHand =
+      params.transportDelayS !== sweep.transportDelayS || params.timeConstantS !== sweep.timeConstantS;
+    result = await analysisRunner(ctx).run({
+      input,
+      options: { cellSize: params.cellSize, delayFromReadings: !delaySetByHand },
+    });
   } catch (err) {
     if (err instanceof JobError && err.problems) throw invalid(err.problems);
     throw err;
