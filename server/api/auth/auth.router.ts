@@ -62,12 +62,13 @@ export function authRouter(ctx: AppContext): Router {
   });
 
   router.post("/auth/password-reset", validate(passwordResetRequestInput), async (req, res) => {
-    await requestPasswordReset(ctx, req.body.email);
     res.status(202).json({ ok: true });
+    // Not awaited: the answer must not tell, by its timing, whether the address has an account.
+    requestPasswordReset(ctx, req.body.email).catch((err) => ctx.logger.error({ err }, "password reset mail failed"));
   });
 
   router.post("/auth/password-reset/confirm", validate(passwordResetConfirmInput), async (req, res) => {
-    await confirmPasswordReset(ctx, req.body.token, req.body.password);
+    await confirmPasswordReset(ctx, req.body.token, req.body.password, req.sessionID);
     res.status(204).end();
   });
 
