@@ -33,7 +33,7 @@ const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
 export function createApp(ctx: AppContext): Express {
   const app = express();
   app.disable("x-powered-by");
-  app.set("trust proxy", "loopback");
+  app.set("trust proxy", ctx.config.trustProxy ?? false);
   app.use(
     pinoHttp({
       logger: ctx.logger,

@@ -55,6 +55,7 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
       uploadsDir: env.UPLOADS_DIR,
       planImageLimits: { maxPixels: Math.round(env.PLAN_MAX_MEGAPIXELS * 1_000_000) },
       secureCookies: (env.APP_URL ?? "").startsWith("https://"),
+      trustProxy: env.TRUST_PROXY,
       serveClient: true,
     },
   };

@@ -8,6 +8,8 @@ export const notFoundApi: RequestHandler = (req) => {
 /** The one JSON error handler: known errors keep their message; anything else is logged, never shown. */
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (err instanceof HttpError) {
+    if (typeof err.details?.retryAfterSeconds === "number")
+      res.set("Retry-After", String(err.details.retryAfterSeconds));
     res
       .status(err.status)
       .json({ error: { code: err.code, message: err.message, fields: err.fields, details: err.details } });

@@ -11,8 +11,14 @@ import { listMemberships } from "./session-info";
 import { endUserSessions } from "./user-sessions";
 
 const RESET_VALID_MS = 60 * 60 * 1000;
-// Compared against when the e-mail is unknown, so a wrong e-mail costs the same time as a wrong password.
-const DUMMY_HASH = bcrypt.hashSync("not-a-real-password", 4);
+// Compared against when the e-mail is unknown, so a wrong e-mail costs the same time as a wrong password:
+// made once per cost, at the cost real passwords are hashed with.
+const dummyHashes = new Map<number, Promise<string>>();
+export function dummyHashFor(cost: number): Promise<string> {
+  let hash = dummyHashes.get(cost);
+  if (!hash) dummyHashes.set(cost, (hash = bcrypt.hash("not-a-real-password", cost)));
+  return hash;
+}
 
 export async function hashPassword(ctx: AppContext, password: string): Promise<string> {
   return bcrypt.hash(password, ctx.config.bcryptCost);
@@ -20,7 +26,7 @@ export async function hashPassword(ctx: AppContext, password: string): Promise<s
 
 export async function verifyCredentials(ctx: AppContext, email: string, password: string) {
   const [user] = await ctx.db.select().from(users).where(eq(users.email, email));
-  const ok = await bcrypt.compare(password, user?.passwordHash ?? DUMMY_HASH);
+  const ok = await bcrypt.compare(password, user?.passwordHash ?? (await dummyHashFor(ctx.config.bcryptCost)));
   if (!user || !ok)
     throw new HttpError(401, "invalid_credentials", "That e-mail and password do not match an account.");
   return user;

@@ -76,3 +76,55 @@ describe("a completed reset", () => {
     expect((await a.post("/api/auth/sign-in", { email: person.email, password: PASSWORD })).status).toBe(401);
   });
 });
+
+describe("asking for a reset", () => {
+  it("is answered before any mail goes, the same for known and unknown addresses", async () => {
+    // Hold every send until released: an answer that waited for the mail would not arrive at all.
+    let release!: () => void;
+    const gate = new Promise<void>((r) => (release = r));
+    const send = t.ctx.mailer.send;
+    t.ctx.mailer.send = async (mail) => {
+      await gate;
+      return send(mail);
+    };
+    try {
+      const since = new Date();
+      const within = <T>(p: Promise<T>) =>
+        Promise.race([p, new Promise<never>((_, no) => setTimeout(() => no(new Error("the answer waited")), 3000))]);
+      const a = await agentFor(t.app);
+      const known = await within(a.post("/api/auth/password-reset", { email: acme.people.owner.email }));
+      const unknown = await within(a.post("/api/auth/password-reset", { email: "ghost@nowhere.test" }));
+      for (const res of [known, unknown]) {
+        expect(res.status).toBe(202);
+        expect(res.body).toEqual({ ok: true });
+      }
+      expect(Object.keys(known.headers).sort()).toEqual(Object.keys(unknown.headers).sort());
+      release();
+      expect((await waitForMail(t.ctx.db, acme.people.owner.email, since)).subject).toMatch(/reset/i);
+    } finally {
+      release();
+      t.ctx.mailer.send = send;
+    }
+  });
+
+  it("is throttled per address and per client, known or not", async () => {
+    const limited = await createTestApp({ resetRateLimit: { perAddress: 2, perClient: 5 } });
+    try {
+      const c = await seedCompany(limited.ctx, "Quill Grocers");
+      const a = await agentFor(limited.app);
+      const ask = (email: string) => a.post("/api/auth/password-reset", { email });
+      for (const email of [c.people.owner.email, "ghost@quillgrocers.test"]) {
+        expect((await ask(email)).status).toBe(202);
+        expect((await ask(` ${email.toUpperCase()}`)).status).toBe(202);
+        const third = await ask(email);
+        expect(third.status).toBe(429);
+        expect(third.body.error.code).toBe("rate_limited");
+        expect(third.headers["retry-after"]).toMatch(/^\d+$/);
+      }
+      // Six asked so far from this client (two refused); the client's own limit of five is spent.
+      expect((await ask("someone-else@quillgrocers.test")).status).toBe(429);
+    } finally {
+      await limited.close();
+    }
+  });
+});
