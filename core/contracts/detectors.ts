@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { text } from "./text";
 import { levelScaleProblems } from "../domain/detectors/level-scale";
 
 export const SENSING_PRINCIPLES = ["heated-diode", "infrared", "other"] as const;
@@ -10,7 +11,7 @@ export const PRINCIPLE_LABELS: Record<(typeof SENSING_PRINCIPLES)[number], strin
 
 const levelBand = z
   .object({
-    level: z.string().trim().min(1, "is required").max(20, "must be at most 20 characters"),
+    level: text().trim().min(1, "is required").max(20, "must be at most 20 characters"),
     minPpm: z.number("must be a number").finite().min(0, "must be 0 or more"),
     maxPpm: z.number("must be a number").finite().positive("must be above 0").nullable(),
   })
@@ -20,7 +21,7 @@ const levelBand = z
   });
 
 export const detectorInput = z.object({
-  name: z.string().trim().min(1, "is required").max(80, "must be at most 80 characters"),
+  name: text().trim().min(1, "is required").max(80, "must be at most 80 characters"),
   principle: z.enum(SENSING_PRINCIPLES, "must be heated-diode, infrared or other"),
   // Defaults: 5 s transport delay and 2 ppm alarm are common practice for hose-sampling
   // detectors (no published source); set them from the instrument's manual.
@@ -59,9 +60,9 @@ export type DetectorInput = z.infer<typeof detectorInput>;
 
 export const detector = detectorInput.extend({
   id: z.uuid(),
-  archivedAt: z.string().nullable(),
+  archivedAt: text().nullable(),
   /** Date the next calibration / bump check falls due, from the company's interval. */
-  checkDueOn: z.string().nullable(),
+  checkDueOn: text().nullable(),
   overdue: z.boolean(),
 });
 export type Detector = z.infer<typeof detector>;

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { text } from "./text";
 
 // A finding is a leak record: suspected → confirmed → repaired → verified → closed, or dismissed.
 // The Walk screen creates one at a pinpointed leak, the field map from a suspect spot, anyone by hand.
@@ -33,7 +34,7 @@ export const createFindingInput = z
     x: finite("x").nullable().default(null),
     y: finite("y").nullable().default(null),
     component: z.enum(FINDING_COMPONENTS).nullable().default(null),
-    note: z.string().trim().max(2000, "must be at most 2,000 characters").default(""),
+    note: text().trim().max(2000, "must be at most 2,000 characters").default(""),
     /** When the leak was found (ISO instant); defaults to now on the server. */
     foundAt: z.iso.datetime({ offset: true, message: "must be a date and time" }).optional(),
   })
@@ -42,20 +43,20 @@ export type CreateFindingInput = z.input<typeof createFindingInput>;
 
 export const findingPhoto = z.object({
   id: z.uuid(),
-  url: z.string(),
-  thumbUrl: z.string(),
-  takenAt: z.string(),
-  by: z.string(),
+  url: text(),
+  thumbUrl: text(),
+  takenAt: text(),
+  by: text(),
 });
 
 export const findingEvent = z.object({
   id: z.uuid(),
   status: z.enum(FINDING_STATUSES),
   /** The day it happened, in the store's time zone (YYYY-MM-DD). */
-  on: z.string(),
-  at: z.string(),
-  by: z.string(),
-  note: z.string(),
+  on: text(),
+  at: text(),
+  by: text(),
+  note: text(),
 });
 
 export const finding = z.object({
@@ -70,9 +71,9 @@ export const finding = z.object({
   component: z.enum(FINDING_COMPONENTS).nullable(),
   source: z.enum(FINDING_SOURCES),
   status: z.enum(FINDING_STATUSES),
-  note: z.string(),
-  foundAt: z.string(),
-  foundBy: z.string(),
+  note: text(),
+  foundAt: text(),
+  foundBy: text(),
   events: z.array(findingEvent),
   photos: z.array(findingPhoto),
 });

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { text } from "./text";
 
 export const fixtureTrendsQuery = z.object({
   /** The earlier and later sweep being compared; default the two latest. */
@@ -9,14 +10,14 @@ export const fixtureTrendsQuery = z.object({
 export const fixtureLevelSchema = z.object({ sweepId: z.uuid(), peakPpm: z.number(), meanPpm: z.number() });
 
 export const fixtureTrendsResponse = z.object({
-  sweeps: z.array(z.object({ id: z.uuid(), startedAt: z.string(), planId: z.uuid(), status: z.string() })),
+  sweeps: z.array(z.object({ id: z.uuid(), startedAt: text(), planId: z.uuid(), status: text() })),
   a: z.uuid().nullable(),
   b: z.uuid().nullable(),
   fixtures: z.array(
     z.object({
       id: z.uuid(),
-      label: z.string(),
-      kind: z.string(),
+      label: text(),
+      kind: text(),
       /** One entry per sweep above, in the same order; null where the sweep did not sample it. */
       levels: z.array(fixtureLevelSchema.nullable()),
       /** Peak in b minus peak in a, ppm; null when either is unknown. */

@@ -6,6 +6,7 @@
  * carry any rotation baked into their vertices; points are {x, y}.
  */
 import { z } from "zod";
+import { text } from "./text";
 import { polygonArea } from "../analysis/geometry/polygon-area";
 import { isSelfIntersecting } from "../analysis/geometry/segments";
 import { FIXTURE_KINDS, POINT_KINDS, ROOM_KINDS, SOLID_BODY_KINDS } from "./fixture-kinds";
@@ -39,7 +40,7 @@ export const RoomDoorSchema = z.object(
 
 const base = {
   id: z.uuid({ error: "must be a UUID" }),
-  label: z.string({ error: "must be text" }).max(LABEL_MAX, { error: `must be at most ${LABEL_MAX} characters` }),
+  label: text({ error: "must be text" }).max(LABEL_MAX, { error: `must be at most ${LABEL_MAX} characters` }),
   systemId: z.uuid({ error: "must be a system's UUID or null" }).nullable(),
   hasFans: z.boolean({ error: "must be true or false" }),
 };
@@ -72,7 +73,7 @@ export const BenignZoneFixtureSchema = z.object({
   ...base,
   kind: z.literal("benign-zone"),
   polygon: PolygonSchema,
-  note: z.string({ error: "must be text" }).max(NOTE_MAX, { error: `must be at most ${NOTE_MAX} characters` }),
+  note: text({ error: "must be text" }).max(NOTE_MAX, { error: `must be at most ${NOTE_MAX} characters` }),
   typicalPpm: z.number({ error: "must be a finite ppm or null" }).min(0, { error: "must be 0 ppm or more" }).nullable(),
 });
 export const PointFixtureSchema = z.object({

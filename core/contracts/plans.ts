@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { text } from "./text";
 import { idSchema } from "./common";
 import { FixtureSchema, PlanPointSchema } from "./fixtures";
 
@@ -80,10 +81,10 @@ export const plan = z.object({
       heightPx: z.number(),
       originalWidthPx: z.number(),
       originalHeightPx: z.number(),
-      originalMime: z.string(),
-      displayUrl: z.string(),
-      thumbUrl: z.string(),
-      originalUrl: z.string(),
+      originalMime: text(),
+      displayUrl: text(),
+      thumbUrl: text(),
+      originalUrl: text(),
     })
     .nullable(),
   metresPerPixel: z.number().nullable(),
@@ -103,7 +104,7 @@ export const plan = z.object({
   alignmentMatched: z.boolean(),
   layoutRevision: z.number(),
   fixtureCount: z.number(),
-  createdAt: z.string(),
+  createdAt: text(),
 });
 export type Plan = z.infer<typeof plan>;
 
