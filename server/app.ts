@@ -9,6 +9,7 @@ import type { AppContext } from "./context";
 import { loadAuth } from "./middleware/auth";
 import { csrfProtection } from "./middleware/csrf";
 import { errorHandler, notFoundApi } from "./middleware/error-handler";
+import { refuseDeepJson } from "./middleware/json-depth";
 import { authRouter } from "./api/auth/auth.router";
 import { teamRouter } from "./api/team/team.router";
 import { invitationsRouter } from "./api/invitations/invitations.router";
@@ -45,7 +46,7 @@ export function createApp(ctx: AppContext): Express {
       },
     }),
   );
-  app.use(express.json({ limit: "5mb" }));
+  app.use(express.json({ limit: "5mb", verify: refuseDeepJson }));
 
   const PgStore = connectPgSimple(session);
   app.use(
