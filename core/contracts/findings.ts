@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { text } from "./text";
+import { PLAN_COORD_MAX_M } from "./quantities";
 
 // A finding is a leak record: suspected → confirmed → repaired → verified → closed, or dismissed.
 // The Walk screen creates one at a pinpointed leak, the field map from a suspect spot, anyone by hand.
@@ -18,7 +19,12 @@ export const COMPONENT_LABELS: Record<(typeof FINDING_COMPONENTS)[number], strin
   other: "Other",
 };
 
-const finite = (what: string) => z.number(`${what} must be a number`).finite(`${what} must be a finite number`);
+const finite = (what: string) =>
+  z
+    .number(`${what} must be a number`)
+    .finite(`${what} must be a finite number`)
+    .min(-PLAN_COORD_MAX_M, `${what} must be at least -${PLAN_COORD_MAX_M} m`)
+    .max(PLAN_COORD_MAX_M, `${what} must be at most ${PLAN_COORD_MAX_M} m`);
 
 /** Create a finding. `clientId` (made on the device) makes an offline retry store it once. */
 export const createFindingInput = z

@@ -7,6 +7,7 @@
  */
 import { z } from "zod";
 import { text } from "./text";
+import { bounded, PLAN_COORD_MAX_M, PPM_PHYSICAL_MAX } from "./quantities";
 import { polygonArea } from "../analysis/geometry/polygon-area";
 import { isSelfIntersecting } from "../analysis/geometry/segments";
 import { FIXTURE_KINDS, POINT_KINDS, ROOM_KINDS, SOLID_BODY_KINDS } from "./fixture-kinds";
@@ -19,7 +20,7 @@ export const FIXTURES_MAX = 5000;
 /** Rounding after rotations may leave a vertex a hair outside; a micrometre is no error. */
 export const BOUNDS_TOLERANCE_M = 1e-6;
 
-const metres = z.number({ error: "must be a finite number of metres" });
+const metres = bounded("metres", -PLAN_COORD_MAX_M, PLAN_COORD_MAX_M);
 
 export const PlanPointSchema = z.object({ x: metres, y: metres }, { error: "must be an {x, y} position in metres" });
 export const VertexSchema = z.tuple([metres, metres], { error: "must be an [x, y] pair of metres" });
@@ -74,7 +75,7 @@ export const BenignZoneFixtureSchema = z.object({
   kind: z.literal("benign-zone"),
   polygon: PolygonSchema,
   note: text({ error: "must be text" }).max(NOTE_MAX, { error: `must be at most ${NOTE_MAX} characters` }),
-  typicalPpm: z.number({ error: "must be a finite ppm or null" }).min(0, { error: "must be 0 ppm or more" }).nullable(),
+  typicalPpm: bounded("ppm", 0, PPM_PHYSICAL_MAX).nullable(),
 });
 export const PointFixtureSchema = z.object({
   ...base,

@@ -18,8 +18,16 @@ const source = text({ error: "is required (a citation, or who set the value and 
 const sourced = <T extends z.ZodType>(value: T) =>
   z.object({ value, source, note: text().max(500, "must be at most 500 characters").optional() });
 
+// No figure in a rule profile comes near ten million (the largest are charge limits in lb and t CO2e).
+const PROFILE_FIGURE_MAX = 10_000_000;
 const num = (what: string) =>
-  z.number({ error: `must be a number (${what})` }).refine(Number.isFinite, `must be a finite number (${what})`);
+  z
+    .number({ error: `must be a number (${what})` })
+    .refine(Number.isFinite, `must be a finite number (${what})`)
+    .refine(
+      (v) => Math.abs(v) <= PROFILE_FIGURE_MAX,
+      `must be at most ${PROFILE_FIGURE_MAX.toLocaleString("en-US")} (${what})`,
+    );
 const positive = (what: string, max: number) =>
   num(what).gt(0, `must be above 0 (${what})`).max(max, `must be at most ${max} (${what})`);
 const wholeDays = (min: number) =>

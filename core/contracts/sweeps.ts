@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { text } from "./text";
+import { PLAN_COORD_MAX_M } from "./quantities";
 
 // Sweeps and readings: the request and response shapes shared by the server and the Walk screen.
 
@@ -81,7 +82,11 @@ export const sweep = z.object({
 export type Sweep = z.infer<typeof sweep>;
 
 const coord = (axis: string) =>
-  z.number(`${axis} must be a number of metres`).finite(`${axis} must be a finite number of metres`);
+  z
+    .number(`${axis} must be a number of metres`)
+    .finite(`${axis} must be a finite number of metres`)
+    .min(-PLAN_COORD_MAX_M, `${axis} must be at least -${PLAN_COORD_MAX_M} m`)
+    .max(PLAN_COORD_MAX_M, `${axis} must be at most ${PLAN_COORD_MAX_M} m`);
 
 /** One reading as the device sends it. Plan bounds and times are checked against the sweep. */
 export const readingInput = z.object({

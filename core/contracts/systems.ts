@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { text } from "./text";
+import { CHARGE_MAX } from "./quantities";
 import { idSchema } from "./common";
 
 export const APPLIANCE_TYPES = ["commercial-refrigeration", "industrial-process", "comfort-cooling"] as const;
@@ -20,7 +21,7 @@ export const chargeInput = z.object({
     .number({ error: "must be a number" })
     .refine(Number.isFinite, { message: "must be a finite number" })
     .refine((v) => v > 0, { message: "must be more than 0" })
-    .refine((v) => v <= 100_000, { message: "must be at most 100000 (is the unit right?)" }),
+    .refine((v) => v <= CHARGE_MAX, { message: `must be at most ${CHARGE_MAX} (is the unit right?)` }),
   unit: z.enum(["kg", "lb"], { error: "must be kg or lb" }),
 });
 export type ChargeInput = z.infer<typeof chargeInput>;

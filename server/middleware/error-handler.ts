@@ -21,7 +21,9 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     typeof err?.status === "number" ? err.status : typeof err?.statusCode === "number" ? err.statusCode : 500;
   if (status >= 400 && status < 500) {
     const known = clientError(err, status);
-    res.status(known.status).json({ error: { code: known.code, message: known.message } });
+    // A body that cannot be read is wrong as a whole: its field is the root ("").
+    const fields = known.code === "validation_failed" ? { "": known.message } : undefined;
+    res.status(known.status).json({ error: { code: known.code, message: known.message, fields } });
     return;
   }
   req.log?.error({ err }, "unhandled error");
@@ -31,7 +33,8 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
 // The message of each kind of malformed request; anything else with a 4xx status gets a plain one.
 function clientError(err: { type?: string; code?: string; name?: string }, status: number) {
   const of = (s: number, code: string, message: string) => ({ status: s, code, message });
-  if (err.type === "entity.parse.failed") return of(400, "validation_failed", "The request body is not valid JSON.");
+  if (err.type === "entity.parse.failed")
+    return of(400, "validation_failed", "The request body is not valid JSON (an object or a list).");
   if (err.type === "entity.too.large" || status === 413) return of(413, "too_large", "The request is too large.");
   if (err.type === "encoding.unsupported")
     return of(
