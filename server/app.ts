@@ -10,6 +10,7 @@ import { loadAuth } from "./middleware/auth";
 import { csrfProtection } from "./middleware/csrf";
 import { errorHandler, notFoundApi } from "./middleware/error-handler";
 import { refuseDeepJson } from "./middleware/json-depth";
+import { securityHeaders } from "./middleware/security-headers";
 import { authRouter } from "./api/auth/auth.router";
 import { teamRouter } from "./api/team/team.router";
 import { invitationsRouter } from "./api/invitations/invitations.router";
@@ -35,6 +36,7 @@ export function createApp(ctx: AppContext): Express {
   const app = express();
   app.disable("x-powered-by");
   app.set("trust proxy", ctx.config.trustProxy ?? false);
+  app.use(securityHeaders({ https: ctx.config.secureCookies }));
   app.use(
     pinoHttp({
       logger: ctx.logger,
