@@ -64,7 +64,14 @@ export function createApp(ctx: AppContext): Express {
       resave: false,
       saveUninitialized: false,
       rolling: true,
-      cookie: { httpOnly: true, sameSite: "lax", secure: ctx.config.secureCookies, maxAge: 30 * 24 * 60 * 60 * 1000 },
+      // Secure when the app URL is https, else whenever the request came over https ("auto": req.secure,
+      // which believes X-Forwarded-Proto only from a proxy TRUST_PROXY names).
+      cookie: {
+        httpOnly: true,
+        sameSite: "lax",
+        secure: ctx.config.secureCookies ? true : "auto",
+        maxAge: 30 * 24 * 60 * 60 * 1000,
+      },
     }),
   );
 
