@@ -23,7 +23,7 @@ import type { LeakRatePart } from "#core/domain/compliance/rule-profile";
 import { chargeToKg, companyGwpBases, toSystem } from "../systems/systems.service";
 import { badRequest, conflict, notFound } from "../../lib/http-error";
 import { eventDay } from "../findings/findings.service";
-import { loadVisibleStore, type Viewer } from "../stores/store-access";
+import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { systemDueItems } from "./due-items";
 import { companyRules, statusesOf, systemWithStore } from "./system-records";
 

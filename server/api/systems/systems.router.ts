@@ -5,7 +5,7 @@ import { systemInput, systemUpdateInput } from "#core/contracts/systems";
 import { REFRIGERANTS } from "#core/domain/refrigerants/catalogue";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
-import { refrigerantCautions, summarizeRefrigerant } from "./refrigerant-summary";
+import { refrigerantCautions, summarizeRefrigerant } from "#core/domain/refrigerants/refrigerant-summary";
 import { companyGwpBases, createSystem, deleteSystem, getSystem, listSystems, updateSystem } from "./systems.service";
 
 const storeParam = z.object({ storeId: z.uuid("must be a valid id") });

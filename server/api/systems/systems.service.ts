@@ -7,8 +7,8 @@ import { findRefrigerant } from "#core/domain/refrigerants/catalogue";
 import type { GwpBasis, Refrigerant } from "#core/domain/refrigerants/types";
 import { KG_PER_POUND } from "#core/domain/units/mass";
 import { badRequest, notFound } from "../../lib/http-error";
-import { loadVisibleStore, type Viewer } from "../stores/store-access";
-import { refrigerantCautions, summarizeRefrigerant } from "./refrigerant-summary";
+import { loadVisibleStore, type Viewer } from "../../access/store-access";
+import { refrigerantCautions, summarizeRefrigerant } from "#core/domain/refrigerants/refrigerant-summary";
 
 type SystemRow = typeof systems.$inferSelect;
 type Bases = readonly GwpBasis[];
