@@ -5,7 +5,7 @@ import { agentFor, createTestApp, type Agent, type TestApp } from "../helpers/te
 import { companyFixture, fillPath, type CompanyFixture, type StoreIds } from "../helpers/security-fixtures";
 import { contractArbitrary } from "../helpers/schema-arbitrary";
 import { routeTable, type RouteEntry } from "../../server/lib/route-table";
-import { can, ROLES, type Role } from "#core/domain/roles";
+import { can, ROLES } from "#core/domain/roles";
 
 // Every route the routers declare × every role × (own company, another company's ids, a store contact
 // with another store's ids, nobody signed in). Refused: 401 / 403 / 404 as due. Allowed: never 401/403.
