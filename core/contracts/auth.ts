@@ -51,3 +51,21 @@ export const profileUpdateInput = z.object({
   massUnit: massUnitSchema.nullable(),
 });
 export type ProfileUpdateInput = z.infer<typeof profileUpdateInput>;
+
+/** A signed-in member changes their own password (the current one proves it is them). */
+export const passwordChangeInput = z.object({
+  currentPassword: text().min(1, "is required").max(200, "must be at most 200 characters"),
+  newPassword: passwordSchema,
+});
+export type PasswordChangeInput = z.infer<typeof passwordChangeInput>;
+
+/** One of the signed-in person's sessions; `id` is a digest of the session id, never the id itself. */
+export const accountSession = z.object({
+  id: text(),
+  current: z.boolean(),
+  signedInAt: text().nullable(),
+  userAgent: text().nullable(),
+  expiresAt: text(),
+});
+export const accountSessions = z.object({ sessions: z.array(accountSession) });
+export type AccountSession = z.infer<typeof accountSession>;

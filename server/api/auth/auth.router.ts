@@ -23,6 +23,7 @@ import {
   verifyCredentials,
 } from "./auth.service";
 import { listMemberships, sessionInfo } from "./session-info";
+import { accountRouter } from "./account.router";
 
 /** Password-reset requests per hour: a few per address, more per client (a shared store Wi-Fi). */
 const RESET_LIMITS = { perAddress: 3, perClient: 20, windowMs: 60 * 60 * 1000 };
@@ -94,5 +95,6 @@ export function authRouter(ctx: AppContext): Router {
     res.json(await sessionInfo(ctx, req));
   });
 
+  router.use(accountRouter(ctx));
   return router;
 }

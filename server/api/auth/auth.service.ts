@@ -38,6 +38,8 @@ export async function startSession(ctx: AppContext, req: Request, userId: string
   const list = await listMemberships(ctx, userId);
   req.session.userId = userId;
   req.session.activeCompanyId = list.find((m) => m.companyId === preferredCompanyId)?.companyId ?? list[0]?.companyId;
+  req.session.signedInAt = new Date().toISOString();
+  req.session.userAgent = (req.get("user-agent") ?? "").slice(0, 200) || undefined;
   rotateCsrfToken(req);
   await new Promise<void>((resolve, reject) => req.session.save((err) => (err ? reject(err) : resolve())));
 }
