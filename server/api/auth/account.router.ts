@@ -11,6 +11,7 @@ import { badRequest, notFound } from "../../lib/http-error";
 import { requireUser } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { hashPassword } from "./auth.service";
+import { logSecurityEvent } from "../../lib/security-log";
 import { endUserSession, endUserSessions, listUserSessions } from "./user-sessions";
 
 const sessionParam = z.object({ id: text().min(16, "is not a session of yours").max(64) });
@@ -41,6 +42,7 @@ export function accountRouter(ctx: AppContext): Router {
       .where(eq(users.id, userId));
     // Whoever else had the old password is signed out; this session stays.
     await endUserSessions(ctx, userId, req.sessionID);
+    await logSecurityEvent(ctx, req, { kind: "password-changed", companyId: null, userId });
     res.status(204).end();
   });
 

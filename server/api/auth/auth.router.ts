@@ -24,6 +24,7 @@ import {
 } from "./auth.service";
 import { listMemberships, sessionInfo } from "./session-info";
 import { accountRouter } from "./account.router";
+import { logSecurityEvent } from "../../lib/security-log";
 
 /** Password-reset requests per hour: a few per address, more per client (a shared store Wi-Fi). */
 const RESET_LIMITS = { perAddress: 3, perClient: 20, windowMs: 60 * 60 * 1000 };
@@ -49,11 +50,12 @@ export function authRouter(ctx: AppContext): Router {
     const keys = [`${clientKey(req)}|${email}`, email];
     await takeAttempt(ctx, perClient, keys[0], "sign-in attempts");
     await takeAttempt(ctx, perAddress, keys[1], "sign-in attempts");
-    const user = await verifyCredentials(ctx, email, req.body.password);
+    const user = await verifyCredentials(ctx, email, req.body.password, req);
     // Only failures count: a technician signing in on each shift never locks themself out.
     await giveBackAttempt(ctx, perClient, keys[0]);
     await giveBackAttempt(ctx, perAddress, keys[1]);
     await startSession(ctx, req, user.id);
+    await logSecurityEvent(ctx, req, { kind: "sign-in", companyId: null, userId: user.id });
     req.auth = await readAuth(ctx.db, req.session);
     res.json(await sessionInfo(ctx, req));
   });

@@ -8,6 +8,7 @@ import { hashToken, newLinkToken } from "../../lib/tokens";
 import { passwordResetMail } from "../../mail/templates";
 import { rotateCsrfToken } from "../../middleware/csrf";
 import { listMemberships } from "./session-info";
+import { logSecurityEvent } from "../../lib/security-log";
 import { endUserSessions } from "./user-sessions";
 
 const RESET_VALID_MS = 60 * 60 * 1000;
@@ -24,9 +25,10 @@ export async function hashPassword(ctx: AppContext, password: string): Promise<s
   return bcrypt.hash(password, ctx.config.bcryptCost);
 }
 
-export async function verifyCredentials(ctx: AppContext, email: string, password: string) {
+export async function verifyCredentials(ctx: AppContext, email: string, password: string, req: Request | null = null) {
   const [user] = await ctx.db.select().from(users).where(eq(users.email, email));
   const ok = await bcrypt.compare(password, user?.passwordHash ?? (await dummyHashFor(ctx.config.bcryptCost)));
+  if (user && !ok) await logSecurityEvent(ctx, req, { kind: "sign-in-failed", companyId: null, userId: user.id });
   if (!user || !ok)
     throw new HttpError(401, "invalid_credentials", "That e-mail and password do not match an account.");
   return user;
@@ -102,5 +104,6 @@ export async function confirmPasswordReset(ctx: AppContext, token: string, passw
     await tx.update(users).set({ passwordHash }).where(eq(users.id, reset.userId));
     return reset.userId;
   });
+  await logSecurityEvent(ctx, null, { kind: "password-reset", companyId: null, userId });
   await endUserSessions(ctx, userId, keepSid);
 }
