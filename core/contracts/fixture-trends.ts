@@ -10,7 +10,9 @@ export const fixtureTrendsQuery = z.object({
 export const fixtureLevelSchema = z.object({ sweepId: z.uuid(), peakPpm: z.number(), meanPpm: z.number() });
 
 export const fixtureTrendsResponse = z.object({
-  sweeps: z.array(z.object({ id: z.uuid(), startedAt: text(), planId: z.uuid(), status: text() })),
+  sweeps: z.array(
+    z.object({ id: z.uuid(), startedAt: text(), planId: z.uuid(), status: text(), technicianName: text() }),
+  ),
   a: z.uuid().nullable(),
   b: z.uuid().nullable(),
   fixtures: z.array(

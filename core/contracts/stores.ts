@@ -17,10 +17,12 @@ export const storeNameSchema = text({ error: "must be text" })
   .min(1, "is required")
   .max(120, "must be at most 120 characters");
 export const addressSchema = text({ error: "must be text" }).trim().max(300, "must be at most 300 characters");
-export const timeZoneSchema = text({ error: "must be an IANA time zone name such as America/Chicago" })
+export const timeZoneSchema = text({ error: "must be a time zone from the list, such as America/Chicago" })
   .trim()
   .min(1, "is required")
-  .refine(isKnownTimeZone, { message: "is not a known IANA time zone (e.g. America/Chicago, Europe/Berlin)" });
+  .refine(isKnownTimeZone, {
+    message: "is not a time zone we know: pick one from the list (such as America/Chicago or Europe/Berlin)",
+  });
 
 export const storeInput = z.object({
   name: storeNameSchema,
