@@ -9,6 +9,8 @@ import type { AppContext } from "./context";
 import { loadAuth } from "./middleware/auth";
 import { csrfProtection } from "./middleware/csrf";
 import { errorHandler, notFoundApi } from "./middleware/error-handler";
+import { refuseDeepJson } from "./middleware/json-depth";
+import { securityHeaders } from "./middleware/security-headers";
 import { authRouter } from "./api/auth/auth.router";
 import { teamRouter } from "./api/team/team.router";
 import { invitationsRouter } from "./api/invitations/invitations.router";
@@ -36,7 +38,8 @@ const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
 export function createApp(ctx: AppContext): Express {
   const app = express();
   app.disable("x-powered-by");
-  app.set("trust proxy", "loopback");
+  app.set("trust proxy", ctx.config.trustProxy ?? false);
+  app.use(securityHeaders({ https: ctx.config.secureCookies }));
   app.use(healthRouter(ctx));
   // While draining, each answer closes its connection so clients reconnect to another process.
   app.use((_req, res, next) => {
@@ -54,7 +57,7 @@ export function createApp(ctx: AppContext): Express {
       },
     }),
   );
-  app.use(express.json({ limit: "5mb" }));
+  app.use(express.json({ limit: "5mb", verify: refuseDeepJson }));
 
   const PgStore = connectPgSimple(session);
   app.use(
@@ -70,7 +73,14 @@ export function createApp(ctx: AppContext): Express {
       resave: false,
       saveUninitialized: false,
       rolling: true,
-      cookie: { httpOnly: true, sameSite: "lax", secure: ctx.config.secureCookies, maxAge: 30 * 24 * 60 * 60 * 1000 },
+      // Secure when the app URL is https, else whenever the request came over https ("auto": req.secure,
+      // which believes X-Forwarded-Proto only from a proxy TRUST_PROXY names).
+      cookie: {
+        httpOnly: true,
+        sameSite: "lax",
+        secure: ctx.config.secureCookies ? true : "auto",
+        maxAge: 30 * 24 * 60 * 60 * 1000,
+      },
     }),
   );
 

@@ -74,6 +74,7 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
       planImageLimits: { maxPixels: Math.round(env.PLAN_MAX_MEGAPIXELS * 1_000_000) },
       secureCookies: (env.APP_URL ?? "").startsWith("https://"),
       syncThrottle: { limit: env.SYNC_RATE_LIMIT, windowMs: env.SYNC_RATE_WINDOW_MS },
+      trustProxy: env.TRUST_PROXY,
       serveClient: true,
     },
   };

@@ -29,6 +29,10 @@ export interface AppConfig {
   outboxEnabled: boolean;
   uploadsDir: string;
   secureCookies: boolean;
+  /** Express "trust proxy": false (default: believe no X-Forwarded-* header), a hop count, or addresses. */
+  trustProxy?: false | number | string[];
+  /** Password-reset request limits; defaults in server/api/auth/auth.router.ts. */
+  resetRateLimit?: { perAddress?: number; perClient?: number; windowMs?: number };
   /** Serve the built client from dist/client (off in API-only tests). */
   serveClient: boolean;
   planImageLimits?: Partial<PlanImageLimits>;

@@ -1,6 +1,31 @@
 import { z } from "zod";
 
 // All configuration comes from the environment, checked once at start-up with a clear message.
+// Which proxies' X-Forwarded-For/-Proto are believed: "false" (none, the default), a hop count, or a
+// comma-separated list of addresses, subnets and Express's names (loopback, linklocal, uniquelocal).
+const proxyEntry = z.union([
+  z.enum(["loopback", "linklocal", "uniquelocal"]),
+  z.ipv4(),
+  z.ipv6(),
+  z.cidrv4(),
+  z.cidrv6(),
+]);
+const trustProxySchema = z
+  .string()
+  .trim()
+  .default("false")
+  .transform((v, c): false | number | string[] => {
+    if (v === "false" || v === "") return false;
+    if (/^\d+$/.test(v) && Number(v) >= 1 && Number(v) <= 10) return Number(v);
+    const list = v.split(",").map((s) => s.trim());
+    if (list.every((s) => proxyEntry.safeParse(s).success)) return list;
+    c.addIssue({
+      code: "custom",
+      message: "must be false, a hop count from 1 to 10, or a comma-separated list of proxy addresses or subnets",
+    });
+    return z.NEVER;
+  });
+
 const envSchema = z
   .object({
     NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
@@ -13,6 +38,7 @@ const envSchema = z
       .min(16, "SESSION_SECRET must be at least 16 characters")
       .default("plumeline-local-development-secret"),
     BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(12),
+    TRUST_PROXY: trustProxySchema,
     LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
     LOGIN_RATE_WINDOW_MS: z.coerce
       .number()

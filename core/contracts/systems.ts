@@ -1,4 +1,6 @@
 import { z } from "zod";
+import { text } from "./text";
+import { CHARGE_MAX } from "./quantities";
 import { idSchema } from "./common";
 
 export const APPLIANCE_TYPES = ["commercial-refrigeration", "industrial-process", "comfort-cooling"] as const;
@@ -19,16 +21,15 @@ export const chargeInput = z.object({
     .number({ error: "must be a number" })
     .refine(Number.isFinite, { message: "must be a finite number" })
     .refine((v) => v > 0, { message: "must be more than 0" })
-    .refine((v) => v <= 100_000, { message: "must be at most 100000 (is the unit right?)" }),
+    .refine((v) => v <= CHARGE_MAX, { message: `must be at most ${CHARGE_MAX} (is the unit right?)` }),
   unit: z.enum(["kg", "lb"], { error: "must be kg or lb" }),
 });
 export type ChargeInput = z.infer<typeof chargeInput>;
 
 const systemFields = {
-  name: z.string({ error: "must be text" }).trim().min(1, "is required").max(120, "must be at most 120 characters"),
+  name: text({ error: "must be text" }).trim().min(1, "is required").max(120, "must be at most 120 characters"),
   /** An R-number from the catalogue (GET /api/refrigerants); checked on the server. */
-  refrigerantId: z
-    .string({ error: "must be an R-number such as R-448A" })
+  refrigerantId: text({ error: "must be an R-number such as R-448A" })
     .trim()
     .min(1, "is required")
     .max(40, "must be at most 40 characters"),
@@ -49,42 +50,42 @@ export type SystemUpdateInput = z.infer<typeof systemUpdateInput>;
 export const gwpSummary = z.object({
   value: z.number(),
   /** The GWP-100 basis of the value, e.g. "AR4". */
-  basis: z.string(),
-  source: z.string(),
+  basis: text(),
+  source: text(),
 });
 
 export const refrigerantSummary = z.object({
-  id: z.string(),
-  name: z.string(),
-  safetyClass: z.string(),
-  safetyClassSource: z.string(),
+  id: text(),
+  name: text(),
+  safetyClass: text(),
+  safetyClassSource: text(),
   /** null when no basis in the list has a value for every component. */
   gwp: gwpSummary.nullable(),
-  gwpNote: z.string().nullable(),
+  gwpNote: text().nullable(),
 });
 export type RefrigerantSummary = z.infer<typeof refrigerantSummary>;
 
 export const caution = z.object({
-  id: z.string(),
+  id: text(),
   level: z.enum(["warning", "notice"]),
-  text: z.string(),
-  source: z.string(),
+  text: text(),
+  source: text(),
 });
 export type Caution = z.infer<typeof caution>;
 
 export const system = z.object({
   id: idSchema,
   storeId: idSchema,
-  name: z.string(),
-  refrigerantId: z.string(),
+  name: text(),
+  refrigerantId: text(),
   fullChargeKg: z.number(),
   applianceType: applianceTypeSchema,
   automaticLeakDetection: z.boolean(),
   refrigerant: refrigerantSummary,
   /** The usual cautions for this refrigerant, shown on the system form. */
   cautions: z.array(caution),
-  createdAt: z.string(),
-  updatedAt: z.string(),
+  createdAt: text(),
+  updatedAt: text(),
 });
 export type System = z.infer<typeof system>;
 

@@ -78,9 +78,10 @@ describe("records export", () => {
     ]);
     // First calculation after 1 Jan 2026 uses 365 days: 10/100 = 10.00 % (40 CFR 84.102 [M]).
     expect(rows[0]).toMatchObject({
-      amount_lb: "10.000",
+      // Written as numbers (so formula escaping never touches them): no trailing zeros.
+      amount_lb: "10",
       amount_kg: "4.5359",
-      leak_rate_percent: "10.00",
+      leak_rate_percent: "10",
       reason: 'Top-up, "quoted", with comma',
     });
     expect(rows[4].voided).toMatch(/Duplicate entry/);

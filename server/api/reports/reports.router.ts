@@ -1,6 +1,7 @@
 import { Router, type Request } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
+import { logExport } from "../../lib/security-log";
 import { sendReportInput } from "#core/contracts/reports";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
@@ -24,6 +25,7 @@ export function reportsRouter(ctx: AppContext): Router {
 
   router.get("/sweeps/:id/report.pdf", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
     const { filename, pdf } = await sweepReportPdf(ctx, member(req), res.locals.params.id, await unit(req));
+    await logExport(ctx, req, "report.pdf", { sweepId: res.locals.params.id });
     res.type("application/pdf").setHeader("Content-Disposition", `attachment; filename="${filename}"`);
     res.send(pdf);
   });
@@ -33,6 +35,7 @@ export function reportsRouter(ctx: AppContext): Router {
     validate(idParam, "params"),
     async (req, res) => {
       const { filename, csv } = await sweepReadingsCsv(ctx, member(req), res.locals.params.id, await unit(req));
+      await logExport(ctx, req, "readings.csv", { sweepId: res.locals.params.id });
       res.type("text/csv; charset=utf-8").setHeader("Content-Disposition", `attachment; filename="${filename}"`);
       res.send(csv);
     },

@@ -45,12 +45,21 @@ export function teamRouter(ctx: AppContext): Router {
     validate(idParam, "params"),
     validate(memberUpdateInput),
     async (req, res) => {
-      res.json(await updateMember(ctx, member(req).companyId, res.locals.params.id, req.body.role, req.body.storeIds));
+      res.json(
+        await updateMember(
+          ctx,
+          member(req).companyId,
+          res.locals.params.id,
+          req.body.role,
+          req.body.storeIds,
+          req.auth!.user.id,
+        ),
+      );
     },
   );
 
   router.delete("/team/members/:id", requireMember("members.manage"), validate(idParam, "params"), async (req, res) => {
-    await removeMember(ctx, member(req).companyId, res.locals.params.id);
+    await removeMember(ctx, member(req).companyId, res.locals.params.id, req.auth!.user.id);
     res.status(204).end();
   });
 

@@ -8,6 +8,7 @@ import { newLinkToken } from "../../lib/tokens";
 import { invitationMail } from "../../mail/templates";
 import { deliveriesFor } from "../../mail/mail-status";
 import type { Queueable } from "../../mail/mail-queue";
+import { logSecurityEvent } from "../../lib/security-log";
 
 const INVITE_VALID_MS = 7 * 24 * 60 * 60 * 1000;
 
@@ -242,6 +243,7 @@ export async function updateMember(
   membershipId: string,
   role: Role,
   storeIds: string[],
+  actorId: string,
 ) {
   const m = await findMembership(ctx, companyId, membershipId);
   if (m.role === "owner" && role !== "owner" && (await ownerCount(ctx, companyId)) <= 1) {
@@ -254,14 +256,29 @@ export async function updateMember(
     if (role === "store-contact")
       await tx.insert(membershipStores).values(storeIds.map((storeId) => ({ membershipId: m.id, storeId })));
   });
+  if (m.role !== role)
+    await logSecurityEvent(ctx, null, {
+      kind: "role-changed",
+      companyId,
+      userId: m.userId,
+      actorId,
+      detail: { from: m.role, to: role },
+    });
   const team = await listTeam(ctx, companyId);
   return team.members.find((x) => x.membershipId === m.id)!;
 }
 
-export async function removeMember(ctx: AppContext, companyId: string, membershipId: string) {
+export async function removeMember(ctx: AppContext, companyId: string, membershipId: string, actorId: string) {
   const m = await findMembership(ctx, companyId, membershipId);
   if (m.role === "owner" && (await ownerCount(ctx, companyId)) <= 1) {
     throw conflict("A company needs at least one owner. Make someone else an owner first.");
   }
   await ctx.db.delete(memberships).where(eq(memberships.id, m.id));
+  await logSecurityEvent(ctx, null, {
+    kind: "member-removed",
+    companyId,
+    userId: m.userId,
+    actorId,
+    detail: { role: m.role },
+  });
 }
