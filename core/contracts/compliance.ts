@@ -118,6 +118,8 @@ export const systemRecords = z.object({
     retentionYears: z.number(),
     retentionSource: z.string(),
   }),
+  /** How long the records are kept; `keptUntil` is set once the system is retired. */
+  retention: z.object({ years: z.number(), source: z.string(), keptUntil: z.string().nullable() }),
   applicability: z.object({
     applies: z.boolean(),
     partId: z.string().nullable(),

@@ -80,6 +80,8 @@ export const system = z.object({
   fullChargeKg: z.number(),
   applianceType: applianceTypeSchema,
   automaticLeakDetection: z.boolean(),
+  /** Set once the system left service; its records stay readable (never deleted). */
+  retired: z.object({ at: z.string(), reason: z.string() }).nullable(),
   refrigerant: refrigerantSummary,
   /** The usual cautions for this refrigerant, shown on the system form. */
   cautions: z.array(caution),
@@ -89,6 +91,21 @@ export const system = z.object({
 export type System = z.infer<typeof system>;
 
 export const systemListResponse = z.object({ systems: z.array(system) });
+
+export const systemListQuery = z.object({
+  include: z.enum(["retired"], { error: "must be retired (or left out)" }).optional(),
+});
+
+export const retireInput = z.object({
+  reason: z.string({ error: "must be text" }).trim().max(500, "must be at most 500 characters").default(""),
+});
+
+/** DELETE /api/systems/:id: deleted when it had no record, else retired with every record kept. */
+export const systemRemoval = z.discriminatedUnion("outcome", [
+  z.object({ outcome: z.literal("deleted"), system: z.null() }),
+  z.object({ outcome: z.literal("retired"), system }),
+]);
+export type SystemRemoval = z.infer<typeof systemRemoval>;
 export const refrigerantListResponse = z.object({
   refrigerants: z.array(refrigerantSummary.extend({ cautions: z.array(caution) })),
 });

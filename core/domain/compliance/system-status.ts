@@ -1,4 +1,4 @@
-import { addMonths, compareDates, type IsoDate } from "../dates/calendar-date";
+import { addMonths, compareDates, yearOf, type IsoDate } from "../dates/calendar-date";
 import type { Refrigerant } from "../refrigerants/types";
 import { applicableLeakRatePart, leakRateThreshold } from "./applicability";
 import { assessLeakRate, type AssessedPoint } from "./assess-leak-rate";
@@ -28,6 +28,8 @@ export interface SystemRecords {
   leakChecks: readonly { checkedOn: IsoDate; leakFound: boolean }[];
   /** Calendar years whose chronic-leaker report is marked filed (the due item closes). */
   chronicReportsFiled?: readonly number[];
+  /** The day the system was retired (store calendar); from then only reports for earlier years fall due. */
+  retiredOn?: IsoDate | null;
 }
 
 export interface DueDate {
@@ -205,8 +207,18 @@ export function systemStatus(
     co2e,
     leakCheck,
     nextInspection,
-    due: due.sort((x, y) => compareDates(x.dueOn, y.dueOn)),
+    due: (rec.retiredOn ? due.filter((d) => stillDueWhenRetired(d, rec.retiredOn!)) : due).sort((x, y) =>
+      compareDates(x.dueOn, y.dueOn),
+    ),
   };
+}
+
+/**
+ * A retired system needs no repair, test or inspection any more, but a chronic-leaker report for a
+ * year it was in service is still owed (docs/decisions/0040-no-record-is-lost.md).
+ */
+function stillDueWhenRetired(d: DueDate, retiredOn: IsoDate): boolean {
+  return d.kind === "chronic-leaker-report" && d.year !== undefined && d.year <= yearOf(retiredOn);
 }
 
 /**

@@ -133,6 +133,7 @@ export async function statusesOf(
           .filter((c) => c.systemId === system.id)
           .map((c) => ({ checkedOn: c.checkedOn, leakFound: c.leakFound })),
         chronicReportsFiled: filed.filter((f) => f.systemId === system.id).map((f) => f.year),
+        retiredOn: system.retiredAt ? localDateOf(system.retiredAt, store.timeZone) : null,
       },
       today,
     );

@@ -1,12 +1,13 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
-import { systemInput, systemUpdateInput } from "#core/contracts/systems";
+import { retireInput, systemInput, systemListQuery, systemUpdateInput } from "#core/contracts/systems";
 import { REFRIGERANTS } from "#core/domain/refrigerants/catalogue";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { refrigerantCautions, summarizeRefrigerant } from "./refrigerant-summary";
-import { companyGwpBases, createSystem, deleteSystem, getSystem, listSystems, updateSystem } from "./systems.service";
+import { removeSystem } from "./retire-system";
+import { companyGwpBases, createSystem, getSystem, listSystems, updateSystem } from "./systems.service";
 
 const storeParam = z.object({ storeId: z.uuid("must be a valid id") });
 const idParam = z.object({ id: z.uuid("must be a valid id") });
@@ -26,8 +27,10 @@ export function systemsRouter(ctx: AppContext): Router {
     "/stores/:storeId/systems",
     requireMember("stores.read"),
     validate(storeParam, "params"),
+    validate(systemListQuery, "query"),
     async (req, res) => {
-      res.json({ systems: await listSystems(ctx, member(req), res.locals.params.storeId) });
+      const includeRetired = res.locals.query.include === "retired";
+      res.json({ systems: await listSystems(ctx, member(req), res.locals.params.storeId, includeRetired) });
     },
   );
 
@@ -55,10 +58,30 @@ export function systemsRouter(ctx: AppContext): Router {
     },
   );
 
+  // A system with records is retired, never deleted: the answer says which happened.
   router.delete("/systems/:id", requireMember("stores.edit"), validate(idParam, "params"), async (req, res) => {
-    await deleteSystem(ctx, member(req), res.locals.params.id);
-    res.status(204).end();
+    res.json(
+      await removeSystem(ctx, member(req), req.auth!.user.id, res.locals.params.id, {
+        reason: "",
+        alwaysRetire: false,
+      }),
+    );
   });
+
+  router.post(
+    "/systems/:id/retire",
+    requireMember("stores.edit"),
+    validate(idParam, "params"),
+    validate(retireInput),
+    async (req, res) => {
+      res.json(
+        await removeSystem(ctx, member(req), req.auth!.user.id, res.locals.params.id, {
+          reason: req.body.reason,
+          alwaysRetire: true,
+        }),
+      );
+    },
+  );
 
   return router;
 }

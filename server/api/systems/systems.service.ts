@@ -1,4 +1,4 @@
-import { and, asc, eq } from "drizzle-orm";
+import { and, asc, eq, isNull } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import type { ChargeInput, System, SystemInput, SystemUpdateInput } from "#core/contracts/systems";
 import { systems } from "../../db/schema/index";
@@ -6,7 +6,7 @@ import { companyRules } from "../compliance/system-records";
 import { findRefrigerant } from "#core/domain/refrigerants/catalogue";
 import type { GwpBasis, Refrigerant } from "#core/domain/refrigerants/types";
 import { KG_PER_POUND } from "#core/domain/units/mass";
-import { badRequest, notFound } from "../../lib/http-error";
+import { badRequest, conflict, notFound } from "../../lib/http-error";
 import { loadVisibleStore, type Viewer } from "../stores/store-access";
 import { refrigerantCautions, summarizeRefrigerant } from "./refrigerant-summary";
 
@@ -45,6 +45,7 @@ export function toSystem(row: SystemRow, bases: Bases): System {
     fullChargeKg: row.fullChargeKg,
     applianceType: row.applianceType,
     automaticLeakDetection: row.automaticLeakDetection,
+    retired: row.retiredAt ? { at: row.retiredAt.toISOString(), reason: row.retireReason ?? "" } : null,
     refrigerant: summarizeRefrigerant(r, bases),
     cautions: refrigerantCautions(r),
     createdAt: row.createdAt.toISOString(),
@@ -52,18 +53,24 @@ export function toSystem(row: SystemRow, bases: Bases): System {
   };
 }
 
-export async function listSystems(ctx: AppContext, viewer: Viewer, storeId: string): Promise<System[]> {
+/** The store's systems in service; retired ones too when asked (their records stay readable). */
+export async function listSystems(
+  ctx: AppContext,
+  viewer: Viewer,
+  storeId: string,
+  includeRetired = false,
+): Promise<System[]> {
   await loadVisibleStore(ctx, viewer, storeId);
   const bases = await companyGwpBases(ctx, viewer.companyId);
   const rows = await ctx.db
     .select()
     .from(systems)
-    .where(eq(systems.storeId, storeId))
+    .where(and(eq(systems.storeId, storeId), includeRetired ? undefined : isNull(systems.retiredAt)))
     .orderBy(asc(systems.name), asc(systems.id));
   return rows.map((r) => toSystem(r, bases));
 }
 
-async function loadSystem(ctx: AppContext, viewer: Viewer, systemId: string): Promise<SystemRow> {
+export async function loadSystem(ctx: AppContext, viewer: Viewer, systemId: string): Promise<SystemRow> {
   const [row] = await ctx.db
     .select()
     .from(systems)
@@ -110,7 +117,7 @@ export async function updateSystem(
   systemId: string,
   input: SystemUpdateInput,
 ): Promise<System> {
-  await loadSystem(ctx, viewer, systemId);
+  refuseRetired(await loadSystem(ctx, viewer, systemId));
   const { fullCharge, refrigerantId, ...rest } = input;
   const [row] = await ctx.db
     .update(systems)
@@ -125,8 +132,10 @@ export async function updateSystem(
   return toSystem(row, await companyGwpBases(ctx, viewer.companyId));
 }
 
-/** Fixtures linked to the system keep their place and lose the link (FK on delete set null). */
-export async function deleteSystem(ctx: AppContext, viewer: Viewer, systemId: string): Promise<void> {
-  await loadSystem(ctx, viewer, systemId);
-  await ctx.db.delete(systems).where(eq(systems.id, systemId));
+/** A retired system's facts are history: no edit and no new record changes them. */
+export function refuseRetired(row: { name: string; retiredAt: Date | null }): void {
+  if (row.retiredAt)
+    throw conflict(
+      `${row.name} was retired on ${row.retiredAt.toISOString().slice(0, 10)}; its records are kept as they are.`,
+    );
 }

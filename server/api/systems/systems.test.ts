@@ -135,7 +135,7 @@ describe("systems", () => {
       expect((await a.delete(`/api/systems/${s.id}`)).status).toBe(403);
     }
     expect((await (await signedIn("engineer")).get(`/api/systems/${s.id}`)).status).toBe(200);
-    expect((await lead.delete(`/api/systems/${s.id}`)).status).toBe(204);
+    expect((await lead.delete(`/api/systems/${s.id}`)).body).toEqual({ outcome: "deleted", system: null });
     expect((await lead.get(`/api/systems/${s.id}`)).status).toBe(404);
   });
 

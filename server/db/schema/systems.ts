@@ -1,5 +1,6 @@
 import { boolean, doublePrecision, index, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
 import { companies, stores } from "./companies";
+import { users } from "./users";
 
 export const APPLIANCE_TYPE_VALUES = ["commercial-refrigeration", "industrial-process", "comfort-cooling"] as const;
 
@@ -20,6 +21,13 @@ export const systems = pgTable(
     fullChargeKg: doublePrecision().notNull(),
     applianceType: text({ enum: APPLIANCE_TYPE_VALUES }).notNull(),
     automaticLeakDetection: boolean().notNull().default(false),
+    /**
+     * Set when the system left service. A system with records is retired instead of deleted, so its
+     * records stay for the profile's retention period (docs/decisions/0040-no-record-is-lost.md).
+     */
+    retiredAt: timestamp({ withTimezone: true }),
+    retiredById: uuid().references(() => users.id),
+    retireReason: text(),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },

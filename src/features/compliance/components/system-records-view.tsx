@@ -107,6 +107,14 @@ export function SystemRecords({
           CFR 82.152 / 84.102). Records are kept {r.profile.retentionYears} years (
           {readableSource(r.profile.retentionSource)}).
         </p>
+        {r.system.retired ? (
+          <p>
+            <span className="font-bold text-ink">Retired: </span>
+            {r.system.retired.at.slice(0, 10)}
+            {r.system.retired.reason ? ` (${r.system.retired.reason})` : ""}. Its records stay as they are
+            {r.retention.keptUntil ? ` and are kept at least until ${r.retention.keptUntil}` : ""}.
+          </p>
+        ) : null}
         {r.leakCheck ? (
           <p>
             <span className="font-bold text-ink">Leak checks: </span>

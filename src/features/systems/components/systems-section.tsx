@@ -42,6 +42,15 @@ export function SystemsSection({
         <QueryError error={systems.error} what="the systems" onRetry={() => void systems.refetch()} />
       ) : null}
       {deleteError ? <Alert tone="error">{deleteError}</Alert> : null}
+      {del.data?.outcome === "retired" ? (
+        <Alert tone="success">
+          {del.data.system.name} has records, so it was retired instead of deleted: its records stay readable on{" "}
+          <a className="underline" href={`/systems/${del.data.system.id}`}>
+            its records page
+          </a>
+          .
+        </Alert>
+      ) : null}
       {editing === "new" || editedSystem ? (
         <SystemForm
           key={editing}
@@ -86,7 +95,8 @@ export function SystemsSection({
                     header: "Actions",
                     cell: (s: System) =>
                       confirmDelete === s.id ? (
-                        <div className="flex flex-wrap gap-2">
+                        <div className="flex flex-wrap items-center gap-2">
+                          <span className="text-sm text-muted">A system with records is retired, never deleted.</span>
                           <Button
                             variant="danger"
                             busy={del.isPending}
