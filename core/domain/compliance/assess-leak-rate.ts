@@ -2,6 +2,7 @@ import type { IsoDate } from "../dates/calendar-date";
 import type { Refrigerant } from "../refrigerants/types";
 import { applicableLeakRatePart, exceedsThreshold, leakRateThreshold } from "./applicability";
 import { repairDueDate } from "./deadlines";
+import type { FindingRepair } from "./leak-groups";
 import { leakRateHistory, validateAdditions, type ChargeAddition, type LeakRatePoint } from "./leak-rate";
 import type { ApplianceType, LeakRateMethod, RuleProfile } from "./rule-profile";
 
@@ -16,7 +17,10 @@ export interface AssessedPoint extends LeakRatePoint {
   partId: string | null;
   thresholdPercent: number | null;
   exceeds: boolean;
-  /** When the rate exceeds the threshold: repair due (learned on the calculation date). */
+  /**
+   * When the rate exceeds the threshold: repair due, counted from the group's first addition. The
+   * system status replaces it with its breach episode's deadline (docs/decisions/0041-repair-clock.md).
+   */
   repairDue?: IsoDate;
 }
 
@@ -31,6 +35,7 @@ export function assessLeakRate(
   additions: readonly ChargeAddition[],
   method: LeakRateMethod,
   followUpVerifiedOn: readonly IsoDate[] = [],
+  findingRepairs: readonly FindingRepair[] = [],
 ): AssessedPoint[] {
   // The formula's parameters (365-day cap, window, first-calculation days and date) come from the part in
   // force at the latest addition, else the profile's first part; a profile without leak-rate rules
@@ -50,7 +55,14 @@ export function assessLeakRate(
     rollingWindowDays: part.rollingWindowDays.value,
     firstCalculationFrom: part.effectiveFrom?.value,
   };
-  const history = leakRateHistory({ fullChargeKg: system.fullChargeKg, additions, method, rules, followUpVerifiedOn });
+  const history = leakRateHistory({
+    fullChargeKg: system.fullChargeKg,
+    additions,
+    method,
+    rules,
+    followUpVerifiedOn,
+    findingRepairs,
+  });
   return history.map((point) => {
     const a = applicableLeakRatePart(profile, system.refrigerant, system.fullChargeKg, point.date);
     if (!a.applies) return { ...point, partId: null, thresholdPercent: null, exceeds: false };
@@ -62,7 +74,7 @@ export function assessLeakRate(
           partId: a.part.id,
           thresholdPercent: threshold,
           exceeds,
-          repairDue: repairDueDate(a.part, point.date),
+          repairDue: repairDueDate(a.part, point.clockFrom),
         }
       : { ...point, partId: a.part.id, thresholdPercent: threshold, exceeds };
   });

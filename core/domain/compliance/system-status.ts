@@ -2,6 +2,8 @@ import { addMonths, compareDates, yearOf, type IsoDate } from "../dates/calendar
 import type { Refrigerant } from "../refrigerants/types";
 import { applicableLeakRatePart, leakRateThreshold } from "./applicability";
 import { assessLeakRate, type AssessedPoint } from "./assess-leak-rate";
+import { breachEpisodes, type BreachEpisode } from "./breach-episodes";
+import type { FindingRepair } from "./leak-groups";
 import { chronicLeakerYears, type ChronicLeakerYear } from "./chronic-leaker";
 import { systemCo2e, type SystemCo2e } from "./co2e";
 import { followUpVerificationDueDate, initialVerificationDueDate, recheckAfterRepairDueDate } from "./deadlines";
@@ -21,6 +23,8 @@ export interface SystemRecords {
   additions: readonly ChargeAddition[];
   /** Days a repair of a leak on this system was recorded. */
   repairedOn: readonly IsoDate[];
+  /** The same repairs by finding: a leak's additions before its repair are one figure. */
+  findingRepairs?: readonly FindingRepair[];
   /** Repaired findings whose verification is not finished: the repair day and a passed initial test's day, if any. */
   pendingFollowUps: readonly { findingId: string; repairedOn: IsoDate; initialTestOn: IsoDate | null }[];
   /** Days a follow-up verification test passed (shortens the rolling-average window). */
@@ -55,8 +59,10 @@ export interface SystemStatus {
   };
   /** The latest calculation is above the threshold. */
   overThreshold: boolean;
-  /** The latest breach not yet followed by a repair. */
+  /** The open breach episode's first exceedance, carrying the episode's repair deadline. */
   unrepairedBreach: AssessedPoint | null;
+  /** Every breach episode, oldest first (docs/decisions/0041-repair-clock.md). */
+  episodes: BreachEpisode[];
   chronic: ChronicLeakerYear[];
   co2e: SystemCo2e;
   leakCheck: { withLds: LeakCheckInterval; withoutLds: LeakCheckInterval; applied: LeakCheckInterval } | null;
@@ -73,17 +79,27 @@ export function systemStatus(
   today: IsoDate,
 ): SystemStatus {
   const system = { refrigerant: rec.refrigerant, fullChargeKg: rec.fullChargeKg, applianceType: rec.applianceType };
-  const points = assessLeakRate(profile, system, rec.additions, method, rec.followUpVerifiedOn);
+  const assessed = assessLeakRate(
+    profile,
+    system,
+    rec.additions,
+    method,
+    rec.followUpVerifiedOn,
+    rec.findingRepairs ?? [],
+  );
+  const episodes = breachEpisodes(profile, assessed, rec.repairedOn);
+  // Every exceedance of an episode shows the episode's deadline: a later one never extends it.
+  const dueOf = new Map(episodes.flatMap((e) => e.exceedances.map((p) => [p, e.repairDue] as const)));
+  const points = assessed.map((p) => (dueOf.has(p) ? { ...p, repairDue: dueOf.get(p) } : p));
   const latest = points.at(-1) ?? null;
   const a = applicableLeakRatePart(profile, rec.refrigerant, rec.fullChargeKg, today);
   const threshold = a.applies ? leakRateThreshold(a.part, rec.applianceType) : null;
   const due: DueDate[] = [];
 
-  // A breach stays open until a repair is recorded on or after the day the rate was learned.
+  // The repair clock runs from the first exceedance of the open episode (docs/decisions/0041-repair-clock.md).
   const lastBreach = [...points].reverse().find((p) => p.exceeds) ?? null;
-  const lastRepair = latestOf(rec.repairedOn);
-  const unrepairedBreach =
-    lastBreach && !(lastRepair && compareDates(lastRepair, lastBreach.date) >= 0) ? lastBreach : null;
+  const open = episodes.at(-1)?.repairedOn === null ? episodes.at(-1)! : null;
+  const unrepairedBreach = open ? { ...open.first, repairDue: open.repairDue } : null;
   const breachPart = lastBreach?.partId
     ? (profile.leakRateParts.find((p) => p.id === lastBreach.partId) ?? null)
     : null;
@@ -91,7 +107,7 @@ export function systemStatus(
     due.push({
       kind: "repair",
       dueOn: unrepairedBreach.repairDue,
-      what: `Repair: leak rate ${unrepairedBreach.percent.toFixed(1)} % on ${unrepairedBreach.date} is above ${unrepairedBreach.thresholdPercent} %`,
+      what: `Repair: leak rate ${unrepairedBreach.percent.toFixed(1)} % on ${unrepairedBreach.date} is above ${unrepairedBreach.thresholdPercent} %${open && open.exceedances.length > 1 ? ` (first of ${open.exceedances.length} exceedances before a repair; the deadline runs from the first)` : ""}`,
       source: `${breachPart.title}; ${breachPart.repairDays.source}`,
     });
   }
@@ -203,6 +219,7 @@ export function systemStatus(
     },
     overThreshold: !!latest?.exceeds,
     unrepairedBreach,
+    episodes,
     chronic,
     co2e,
     leakCheck,

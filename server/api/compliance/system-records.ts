@@ -101,6 +101,7 @@ export async function statusesOf(
         date: a.addedOn,
         amountKg: a.amountKg,
         voided: a.voidedAt !== null,
+        findingId: a.findingId,
         ...(a.excluded ? { excluded: a.excluded } : {}),
       }));
     const mine = events.filter((e) => e.systemId === system.id);
@@ -127,6 +128,7 @@ export async function statusesOf(
         enteredOn: localDateOf(system.createdAt, store.timeZone),
         additions,
         repairedOn: mine.filter((e) => e.kind === "repaired").map((e) => e.on),
+        findingRepairs: mine.filter((e) => e.kind === "repaired").map((e) => ({ findingId: e.findingId, on: e.on })),
         pendingFollowUps,
         followUpVerifiedOn: mine.filter((e) => e.kind === "follow-up-test" && e.result === "passed").map((e) => e.on),
         leakChecks: checks
