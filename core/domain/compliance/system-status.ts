@@ -142,17 +142,23 @@ export function systemStatus(
     }
   }
 
-  const chronic = part ? chronicLeakerYears(part, rec.fullChargeKg, rec.additions) : [];
+  // Each year is judged by the part that applied to the system in it (none: the year does not count).
+  const partOn = (date: IsoDate) => {
+    const at = applicableLeakRatePart(profile, rec.refrigerant, rec.fullChargeKg, date);
+    return at.applies ? at.part : null;
+  };
+  const chronic = chronicLeakerYears(partOn, rec.fullChargeKg, rec.additions);
   const thisYear = Number(today.slice(0, 4));
   for (const y of chronic) {
+    const yearPart = profile.leakRateParts.find((p) => p.id === y.partId);
     // The report for last year (or this one, once reached) is what can still be acted on.
-    if (y.chronic && y.reportDue && y.year >= thisYear - 1 && part && !rec.chronicReportsFiled?.includes(y.year)) {
+    if (y.chronic && y.reportDue && y.year >= thisYear - 1 && yearPart && !rec.chronicReportsFiled?.includes(y.year)) {
       due.push({
         kind: "chronic-leaker-report",
         dueOn: y.reportDue,
         year: y.year,
         what: `Chronic-leaker report for ${y.year}: ${y.percent.toFixed(0)} % of the full charge added`,
-        source: `${part.chronicLeaker.percentOfFullCharge.source}; ${part.chronicLeaker.reportBy.source}`,
+        source: `${yearPart.chronicLeaker.percentOfFullCharge.source}; ${yearPart.chronicLeaker.reportBy.source}`,
       });
     }
   }
