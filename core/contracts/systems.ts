@@ -37,11 +37,19 @@ const systemFields = {
   automaticLeakDetection: z.boolean({ error: "must be true or false" }),
 };
 
-export const systemInput = z.object(systemFields);
+const isoDay = z
+  .string({ error: "must be a date as YYYY-MM-DD" })
+  .regex(/^\d{4}-\d{2}-\d{2}$/, "must be a date as YYYY-MM-DD");
+
+export const systemInput = z.object({
+  ...systemFields,
+  /** The day it entered service (store calendar); defaults to today. */
+  inServiceOn: isoDay.optional(),
+});
 export type SystemInput = z.infer<typeof systemInput>;
 
 export const systemUpdateInput = z
-  .object(systemFields)
+  .object({ ...systemFields, inServiceOn: isoDay })
   .partial()
   .refine((v) => Object.keys(v).length > 0, { message: "name at least one field to change" });
 export type SystemUpdateInput = z.infer<typeof systemUpdateInput>;
@@ -80,6 +88,7 @@ export const system = z.object({
   fullChargeKg: z.number(),
   applianceType: applianceTypeSchema,
   automaticLeakDetection: z.boolean(),
+  inServiceOn: z.string(),
   /** Set once the system left service; its records stay readable (never deleted). */
   retired: z.object({ at: z.string(), reason: z.string() }).nullable(),
   refrigerant: refrigerantSummary,
@@ -109,3 +118,53 @@ export type SystemRemoval = z.infer<typeof systemRemoval>;
 export const refrigerantListResponse = z.object({
   refrigerants: z.array(refrigerantSummary.extend({ cautions: z.array(caution) })),
 });
+
+export const REVISION_KINDS = ["change", "correction", "retrofit"] as const;
+
+/**
+ * POST /api/systems/:id/revisions: a dated change of the facts the rules read. `change`: the
+ * system changed on that day; `correction`: the earlier value was wrong from that day;
+ * `retrofit`: a new refrigerant, which starts a new regime (docs/decisions/0043-system-revisions.md).
+ */
+export const revisionInput = z
+  .object({
+    effectiveFrom: isoDay,
+    kind: z.enum(REVISION_KINDS, { error: `must be one of: ${REVISION_KINDS.join(", ")}` }),
+    reason: z.string({ error: "must be text" }).trim().min(1, "is required").max(500, "must be at most 500 characters"),
+    refrigerantId: systemFields.refrigerantId.optional(),
+    fullCharge: chargeInput.optional(),
+    applianceType: applianceTypeSchema.optional(),
+    automaticLeakDetection: systemFields.automaticLeakDetection.optional(),
+    inServiceOn: isoDay.optional(),
+  })
+  .refine(
+    (v) =>
+      [v.refrigerantId, v.fullCharge, v.applianceType, v.automaticLeakDetection, v.inServiceOn].some(
+        (x) => x !== undefined,
+      ),
+    {
+      message:
+        "name at least one fact to change: refrigerantId, fullCharge, applianceType, automaticLeakDetection or inServiceOn",
+    },
+  )
+  .refine((v) => v.kind !== "retrofit" || v.refrigerantId !== undefined, {
+    message: "a retrofit names the new refrigerant",
+    path: ["refrigerantId"],
+  });
+export type RevisionInput = z.infer<typeof revisionInput>;
+
+export const systemRevision = z.object({
+  id: idSchema,
+  effectiveFrom: z.string(),
+  kind: z.enum(["first", ...REVISION_KINDS]),
+  refrigerantId: z.string(),
+  fullChargeKg: z.number(),
+  applianceType: applianceTypeSchema,
+  automaticLeakDetection: z.boolean(),
+  inServiceOn: z.string(),
+  reason: z.string(),
+  /** Who recorded it; empty for the first revisions written from existing systems. */
+  by: z.string(),
+  recordedAt: z.string(),
+});
+export const systemRevisionList = z.object({ revisions: z.array(systemRevision) });

@@ -31,12 +31,16 @@ export interface AssessedPoint extends LeakRatePoint {
  */
 export function assessLeakRate(
   profile: RuleProfile,
-  system: SystemForLeakRate,
+  system: SystemForLeakRate | ((date: IsoDate) => SystemForLeakRate),
   additions: readonly ChargeAddition[],
   method: LeakRateMethod,
   followUpVerifiedOn: readonly IsoDate[] = [],
   findingRepairs: readonly FindingRepair[] = [],
+  /** The day a retrofit started this regime; from then the part's own start date no longer matters. */
+  regimeFrom: IsoDate | null = null,
 ): AssessedPoint[] {
+  // Every figure reads the system's values in force on its own date (docs/decisions/0043-system-revisions.md).
+  const on = typeof system === "function" ? system : () => system;
   // The formula's parameters (365-day cap, window, first-calculation days and date) come from the part in
   // force at the latest addition, else the profile's first part; a profile without leak-rate rules
   // (EU F-gas) has no leak-rate figures at all.
@@ -46,17 +50,25 @@ export function assessLeakRate(
     .map((a) => a.date)
     .sort();
   const latest = live.at(-1);
-  const inForce = latest ? applicableLeakRatePart(profile, system.refrigerant, system.fullChargeKg, latest) : undefined;
+  const inForce = latest
+    ? applicableLeakRatePart(profile, on(latest).refrigerant, on(latest).fullChargeKg, latest)
+    : undefined;
   const part = inForce?.part ?? profile.leakRateParts[0];
-  if (!part) return [];
+  if (!part || !latest) return [];
   const rules = {
     maxDaysSinceLastAddition: part.maxDaysSinceLastAddition.value,
     firstCalculationDays: part.firstCalculationDays.value,
     rollingWindowDays: part.rollingWindowDays.value,
-    firstCalculationFrom: part.effectiveFrom?.value,
+    // A regime that a retrofit started after the part took effect has its own start: the retrofit
+    // fill restarts the clock like any addition (docs/decisions/0043-system-revisions.md).
+    firstCalculationFrom:
+      part.effectiveFrom && !(regimeFrom && regimeFrom >= part.effectiveFrom.value)
+        ? part.effectiveFrom.value
+        : undefined,
   };
   const history = leakRateHistory({
-    fullChargeKg: system.fullChargeKg,
+    fullChargeKg: on(latest).fullChargeKg,
+    fullChargeKgOn: (d) => on(d).fullChargeKg,
     additions,
     method,
     rules,
@@ -64,9 +76,10 @@ export function assessLeakRate(
     findingRepairs,
   });
   return history.map((point) => {
-    const a = applicableLeakRatePart(profile, system.refrigerant, system.fullChargeKg, point.date);
+    const facts = on(point.date);
+    const a = applicableLeakRatePart(profile, facts.refrigerant, facts.fullChargeKg, point.date);
     if (!a.applies) return { ...point, partId: null, thresholdPercent: null, exceeds: false };
-    const threshold = leakRateThreshold(a.part, system.applianceType).percent;
+    const threshold = leakRateThreshold(a.part, facts.applianceType).percent;
     const exceeds = exceedsThreshold(point.percent, threshold);
     return exceeds
       ? {

@@ -31,10 +31,12 @@ export type PartOn = (date: IsoDate) => LeakRatePart | null;
  */
 export function chronicLeakerYears(
   partOn: LeakRatePart | PartOn,
-  fullChargeKg: number,
+  fullChargeKg: number | ((date: IsoDate) => number),
   additions: readonly ChargeAddition[],
 ): ChronicLeakerYear[] {
-  requirePositive(fullChargeKg, "fullChargeKg");
+  // The share is of the full charge in force on the year's last counted addition.
+  if (typeof fullChargeKg === "number") requirePositive(fullChargeKg, "fullChargeKg");
+  const chargeOn = typeof fullChargeKg === "function" ? fullChargeKg : () => fullChargeKg;
   validateAdditions(additions);
   const partAt: PartOn = typeof partOn === "function" ? partOn : () => partOn;
   const byYear = new Map<number, { addedKg: number; part: LeakRatePart; lastDate: IsoDate }>();
@@ -50,8 +52,8 @@ export function chronicLeakerYears(
   }
   return [...byYear.entries()]
     .sort(([a], [b]) => a - b)
-    .map(([year, { addedKg, part }]) => {
-      const percent = (addedKg / fullChargeKg) * 100;
+    .map(([year, { addedKg, part, lastDate }]) => {
+      const percent = (addedKg / requirePositive(chargeOn(lastDate), "fullChargeKg")) * 100;
       // Tolerance of 1e-9 so 125 % typed in lb and stored in kg still "reaches" 125 %.
       const chronic = percent >= part.chronicLeaker.percentOfFullCharge.value * (1 - 1e-9);
       const base = { year, addedKg, percent, chronic, partId: part.id };

@@ -95,6 +95,8 @@ function liveSorted(additions: readonly ChargeAddition[]): ChargeAddition[] {
 
 export interface LeakRateInput {
   fullChargeKg: number;
+  /** The full charge in force on a calculation date, when it changed over time (else `fullChargeKg`). */
+  fullChargeKgOn?: (date: IsoDate) => number;
   additions: readonly ChargeAddition[];
   method: LeakRateMethod;
   rules: LeakRateRules;
@@ -113,8 +115,9 @@ export interface LeakRateInput {
  * group's last addition (docs/decisions/0042-same-leak-additions.md).
  */
 export function leakRateHistory(input: LeakRateInput): LeakRatePoint[] {
-  const { fullChargeKg, method, rules } = input;
-  requirePositive(fullChargeKg, "fullChargeKg");
+  const { method, rules } = input;
+  requirePositive(input.fullChargeKg, "fullChargeKg");
+  const chargeOn = input.fullChargeKgOn ?? (() => input.fullChargeKg);
   const live = liveSorted(input.additions);
   const groups = groupAdditions(live, input.findingRepairs ?? []);
   const verified = (input.followUpVerifiedOn ?? [])
@@ -134,6 +137,7 @@ export function leakRateHistory(input: LeakRateInput): LeakRatePoint[] {
     const counted = group.items.filter((a) => !a.excluded);
     if (counted.length === 0) continue;
     const addedKg = counted.reduce((s, a) => s + a.amountKg, 0);
+    const fullChargeKg = chargeOn(group.lastDate);
     const base = { date: group.lastDate, clockFrom: group.firstDate, method, additionIds: counted.map((a) => a.id) };
     if (method === "annualizing") {
       const previous = lastAdditionBefore(live, group, group.firstDate);

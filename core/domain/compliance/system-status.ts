@@ -4,6 +4,7 @@ import { applicableLeakRatePart, leakRateThreshold } from "./applicability";
 import { assessLeakRate, type AssessedPoint } from "./assess-leak-rate";
 import { breachEpisodes, type BreachEpisode } from "./breach-episodes";
 import type { FindingRepair } from "./leak-groups";
+import { factsOn, inRegime, regimesOf, type SystemRevision } from "./system-revisions";
 import { chronicLeakerYears, type ChronicLeakerYear } from "./chronic-leaker";
 import { systemCo2e, type SystemCo2e } from "./co2e";
 import { followUpVerificationDueDate, initialVerificationDueDate, recheckAfterRepairDueDate } from "./deadlines";
@@ -32,6 +33,11 @@ export interface SystemRecords {
   leakChecks: readonly { checkedOn: IsoDate; leakFound: boolean }[];
   /** Calendar years whose chronic-leaker report is marked filed (the due item closes). */
   chronicReportsFiled?: readonly number[];
+  /**
+   * The dated revisions of the facts above (docs/decisions/0043-system-revisions.md); when given,
+   * every figure uses the values in force on its date and today's values replace the flat fields.
+   */
+  revisions?: readonly SystemRevision[];
   /** The day the system was retired (store calendar); from then only reports for earlier years fall due. */
   retiredOn?: IsoDate | null;
 }
@@ -78,22 +84,33 @@ export function systemStatus(
   rec: SystemRecords,
   today: IsoDate,
 ): SystemStatus {
-  const system = { refrigerant: rec.refrigerant, fullChargeKg: rec.fullChargeKg, applianceType: rec.applianceType };
-  const assessed = assessLeakRate(
-    profile,
-    system,
-    rec.additions,
-    method,
-    rec.followUpVerifiedOn,
-    rec.findingRepairs ?? [],
+  const revisions: readonly SystemRevision[] = rec.revisions?.length
+    ? rec.revisions
+    : [{ ...rec, inServiceOn: rec.enteredOn, effectiveFrom: rec.enteredOn, kind: "first" }];
+  const on = (date: IsoDate) => factsOn(revisions, date);
+  const now = on(today);
+  const facts = { ...now, enteredOn: now.inServiceOn };
+  // A retrofit starts a new regime: no figure counts days or additions from before it.
+  const assessed = regimesOf(revisions).flatMap((regime) =>
+    assessLeakRate(
+      profile,
+      on,
+      rec.additions.filter((a) => inRegime(regime, a.date)),
+      method,
+      rec.followUpVerifiedOn.filter((d) => inRegime(regime, d)),
+      rec.findingRepairs ?? [],
+      regime.from,
+    ),
   );
-  const episodes = breachEpisodes(profile, assessed, rec.repairedOn);
+  // A retrofit ends an open breach as a repair does (the leak's refrigerant is gone).
+  const retrofits = revisions.filter((r) => r.kind === "retrofit").map((r) => r.effectiveFrom);
+  const episodes = breachEpisodes(profile, assessed, [...rec.repairedOn, ...retrofits]);
   // Every exceedance of an episode shows the episode's deadline: a later one never extends it.
   const dueOf = new Map(episodes.flatMap((e) => e.exceedances.map((p) => [p, e.repairDue] as const)));
   const points = assessed.map((p) => (dueOf.has(p) ? { ...p, repairDue: dueOf.get(p) } : p));
   const latest = points.at(-1) ?? null;
-  const a = applicableLeakRatePart(profile, rec.refrigerant, rec.fullChargeKg, today);
-  const threshold = a.applies ? leakRateThreshold(a.part, rec.applianceType) : null;
+  const a = applicableLeakRatePart(profile, facts.refrigerant, facts.fullChargeKg, today);
+  const threshold = a.applies ? leakRateThreshold(a.part, facts.applianceType) : null;
   const due: DueDate[] = [];
 
   // The repair clock runs from the first exceedance of the open episode (docs/decisions/0041-repair-clock.md).
@@ -144,10 +161,10 @@ export function systemStatus(
 
   // Each year is judged by the part that applied to the system in it (none: the year does not count).
   const partOn = (date: IsoDate) => {
-    const at = applicableLeakRatePart(profile, rec.refrigerant, rec.fullChargeKg, date);
+    const at = applicableLeakRatePart(profile, on(date).refrigerant, on(date).fullChargeKg, date);
     return at.applies ? at.part : null;
   };
-  const chronic = chronicLeakerYears(partOn, rec.fullChargeKg, rec.additions);
+  const chronic = chronicLeakerYears(partOn, (date) => on(date).fullChargeKg, rec.additions);
   const thisYear = Number(today.slice(0, 4));
   for (const y of chronic) {
     const yearPart = profile.leakRateParts.find((p) => p.id === y.partId);
@@ -163,20 +180,20 @@ export function systemStatus(
     }
   }
 
-  const co2e = systemCo2e(profile, rec.refrigerant, rec.fullChargeKg);
+  const co2e = systemCo2e(profile, facts.refrigerant, facts.fullChargeKg);
   const lastCheck = latestOf(rec.leakChecks.map((c) => c.checkedOn));
   let leakCheck: SystemStatus["leakCheck"] = null;
   let nextInspection: SystemStatus["nextInspection"] = null;
   if (profile.leakChecks) {
-    const withLds = leakCheckInterval(profile, rec.refrigerant, rec.fullChargeKg, { hasLeakDetection: true });
-    const withoutLds = leakCheckInterval(profile, rec.refrigerant, rec.fullChargeKg, { hasLeakDetection: false });
-    const applied = rec.automaticLeakDetection ? withLds : withoutLds;
+    const withLds = leakCheckInterval(profile, facts.refrigerant, facts.fullChargeKg, { hasLeakDetection: true });
+    const withoutLds = leakCheckInterval(profile, facts.refrigerant, facts.fullChargeKg, { hasLeakDetection: false });
+    const applied = facts.automaticLeakDetection ? withLds : withoutLds;
     leakCheck = { withLds, withoutLds, applied };
     if (applied.required) {
-      const from = lastCheck ?? rec.enteredOn;
+      const from = lastCheck ?? facts.enteredOn;
       nextInspection = {
         dueOn: nextInspectionDate(from, applied.months),
-        reason: `${lastCheck ? `last leak check ${lastCheck}` : `no leak check recorded since the system was entered on ${rec.enteredOn}`}; ${applied.reason}`,
+        reason: `${lastCheck ? `last leak check ${lastCheck}` : `no leak check recorded since the system was entered on ${facts.enteredOn}`}; ${applied.reason}`,
         source: profile.leakChecks.co2eBands.source,
       };
     }
@@ -184,9 +201,9 @@ export function systemStatus(
     // US: periodic inspections after a breach until enough clean periods in a row. Our reading of
     // "until N periods below the threshold": N consecutive inspections with no leak found since the breach.
     const plan = inspectionsAfterBreach(breachPart, {
-      applianceType: rec.applianceType,
-      fullChargeKg: rec.fullChargeKg,
-      hasAutomaticLeakDetection: rec.automaticLeakDetection,
+      applianceType: facts.applianceType,
+      fullChargeKg: facts.fullChargeKg,
+      hasAutomaticLeakDetection: facts.automaticLeakDetection,
     });
     if (plan.required) {
       const run = inspectionRun(

@@ -1,28 +1,12 @@
 import { eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import type { SystemRemoval } from "#core/contracts/systems";
-import {
-  chargeAdditions,
-  chronicLeakerReports,
-  complianceAudit,
-  findings,
-  leakChecks,
-  systems,
-} from "../../db/schema/index";
+import { complianceAudit, systemRevisions, systems } from "../../db/schema/index";
 import type { Viewer } from "../stores/store-access";
+import { hasRecords } from "./system-has-records";
 import { companyGwpBases, loadSystem, refuseRetired, toSystem } from "./systems.service";
 
 const FOREIGN_KEY_VIOLATION = "23503";
-
-/** True when any record names the system: charge added, leak checks, filings, audit rows or findings. */
-async function hasRecords(ctx: AppContext, systemId: string): Promise<boolean> {
-  const found = await Promise.all(
-    [chargeAdditions, leakChecks, chronicLeakerReports, complianceAudit, findings].map((t) =>
-      ctx.db.select({ id: t.id }).from(t).where(eq(t.systemId, systemId)).limit(1),
-    ),
-  );
-  return found.some((rows) => rows.length > 0);
-}
 
 function isForeignKeyViolation(e: unknown): boolean {
   const cause = (e as { cause?: { code?: string }; code?: string }) ?? {};
@@ -48,7 +32,10 @@ export async function removeSystem(
   refuseRetired(row);
   if (!how.alwaysRetire && !(await hasRecords(ctx, systemId))) {
     try {
-      await ctx.db.delete(systems).where(eq(systems.id, systemId));
+      await ctx.db.transaction(async (tx) => {
+        await tx.delete(systemRevisions).where(eq(systemRevisions.systemId, systemId));
+        await tx.delete(systems).where(eq(systems.id, systemId));
+      });
       return { outcome: "deleted", system: null };
     } catch (e) {
       if (!isForeignKeyViolation(e)) throw e;

@@ -1,12 +1,13 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
-import { retireInput, systemInput, systemListQuery, systemUpdateInput } from "#core/contracts/systems";
+import { retireInput, revisionInput, systemInput, systemListQuery, systemUpdateInput } from "#core/contracts/systems";
 import { REFRIGERANTS } from "#core/domain/refrigerants/catalogue";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { refrigerantCautions, summarizeRefrigerant } from "./refrigerant-summary";
 import { removeSystem } from "./retire-system";
+import { addRevision, listRevisions } from "./system-revisions.service";
 import { companyGwpBases, createSystem, getSystem, listSystems, updateSystem } from "./systems.service";
 
 const storeParam = z.object({ storeId: z.uuid("must be a valid id") });
@@ -40,7 +41,9 @@ export function systemsRouter(ctx: AppContext): Router {
     validate(storeParam, "params"),
     validate(systemInput),
     async (req, res) => {
-      res.status(201).json(await createSystem(ctx, member(req), res.locals.params.storeId, req.body));
+      res
+        .status(201)
+        .json(await createSystem(ctx, member(req), req.auth!.user.id, res.locals.params.storeId, req.body));
     },
   );
 
@@ -54,7 +57,7 @@ export function systemsRouter(ctx: AppContext): Router {
     validate(idParam, "params"),
     validate(systemUpdateInput),
     async (req, res) => {
-      res.json(await updateSystem(ctx, member(req), res.locals.params.id, req.body));
+      res.json(await updateSystem(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
     },
   );
 
@@ -80,6 +83,21 @@ export function systemsRouter(ctx: AppContext): Router {
           alwaysRetire: true,
         }),
       );
+    },
+  );
+
+  router.get("/systems/:id/revisions", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
+    res.json({ revisions: await listRevisions(ctx, member(req), res.locals.params.id) });
+  });
+
+  // Engineers and owners change a system's dated facts; every figure keeps the values of its own date.
+  router.post(
+    "/systems/:id/revisions",
+    requireMember("compliance.manage"),
+    validate(idParam, "params"),
+    validate(revisionInput),
+    async (req, res) => {
+      res.status(201).json(await addRevision(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
     },
   );
 

@@ -1,12 +1,14 @@
 import { and, asc, eq, isNull } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import type { ChargeInput, System, SystemInput, SystemUpdateInput } from "#core/contracts/systems";
-import { systems } from "../../db/schema/index";
+import { systemRevisions, systems } from "../../db/schema/index";
 import { companyRules } from "../compliance/system-records";
 import { findRefrigerant } from "#core/domain/refrigerants/catalogue";
 import type { GwpBasis, Refrigerant } from "#core/domain/refrigerants/types";
 import { KG_PER_POUND } from "#core/domain/units/mass";
-import { badRequest, conflict, notFound } from "../../lib/http-error";
+import { badRequest, conflict, HttpError, notFound } from "../../lib/http-error";
+import { eventDay } from "../findings/findings.service";
+import { hasRecords } from "./system-has-records";
 import { loadVisibleStore, type Viewer } from "../stores/store-access";
 import { refrigerantCautions, summarizeRefrigerant } from "./refrigerant-summary";
 
@@ -18,7 +20,7 @@ export function chargeToKg(charge: ChargeInput): number {
   return charge.unit === "lb" ? charge.value * KG_PER_POUND : charge.value;
 }
 
-function knownRefrigerant(id: string): Refrigerant {
+export function knownRefrigerant(id: string): Refrigerant {
   const r = findRefrigerant(id);
   if (!r) {
     throw badRequest(`Please check: refrigerantId ${JSON.stringify(id)} is not in the refrigerant catalogue.`, {
@@ -45,6 +47,7 @@ export function toSystem(row: SystemRow, bases: Bases): System {
     fullChargeKg: row.fullChargeKg,
     applianceType: row.applianceType,
     automaticLeakDetection: row.automaticLeakDetection,
+    inServiceOn: row.inServiceOn ?? row.createdAt.toISOString().slice(0, 10),
     retired: row.retiredAt ? { at: row.retiredAt.toISOString(), reason: row.retireReason ?? "" } : null,
     refrigerant: summarizeRefrigerant(r, bases),
     cautions: refrigerantCautions(r),
@@ -91,44 +94,93 @@ export async function getSystem(ctx: AppContext, viewer: Viewer, systemId: strin
 export async function createSystem(
   ctx: AppContext,
   viewer: Viewer,
+  userId: string,
   storeId: string,
   input: SystemInput,
 ): Promise<System> {
-  await loadVisibleStore(ctx, viewer, storeId);
+  const store = await loadVisibleStore(ctx, viewer, storeId);
   const r = knownRefrigerant(input.refrigerantId);
-  const [row] = await ctx.db
-    .insert(systems)
-    .values({
+  const facts = {
+    refrigerantId: r.id,
+    fullChargeKg: chargeToKg(input.fullCharge),
+    applianceType: input.applianceType,
+    automaticLeakDetection: input.automaticLeakDetection,
+    inServiceOn: eventDay(input.inServiceOn, store, "inServiceOn"),
+  };
+  // The system and its first revision together: history has a starting point from day one.
+  const row = await ctx.db.transaction(async (tx) => {
+    const [created] = await tx
+      .insert(systems)
+      .values({ companyId: viewer.companyId, storeId, name: input.name, ...facts })
+      .returning();
+    await tx.insert(systemRevisions).values({
       companyId: viewer.companyId,
-      storeId,
-      name: input.name,
-      refrigerantId: r.id,
-      fullChargeKg: chargeToKg(input.fullCharge),
-      applianceType: input.applianceType,
-      automaticLeakDetection: input.automaticLeakDetection,
-    })
-    .returning();
+      systemId: created.id,
+      effectiveFrom: facts.inServiceOn,
+      kind: "first",
+      ...facts,
+      reason: "Entered",
+      byId: userId,
+    });
+    return created;
+  });
   return toSystem(row, await companyGwpBases(ctx, viewer.companyId));
 }
 
+/**
+ * Edits a system. The name is free to change; the dated facts (charge, refrigerant, type, detection,
+ * in-service day) change here only while no record names the system, as a correction from its
+ * in-service day. Once records exist, history must not move: such a change is a dated revision
+ * (POST /api/systems/:id/revisions, engineers and owners; docs/decisions/0043-system-revisions.md).
+ */
 export async function updateSystem(
   ctx: AppContext,
   viewer: Viewer,
+  userId: string,
   systemId: string,
   input: SystemUpdateInput,
 ): Promise<System> {
-  refuseRetired(await loadSystem(ctx, viewer, systemId));
-  const { fullCharge, refrigerantId, ...rest } = input;
-  const [row] = await ctx.db
-    .update(systems)
-    .set({
-      ...rest,
-      ...(refrigerantId !== undefined ? { refrigerantId: knownRefrigerant(refrigerantId).id } : {}),
-      ...(fullCharge !== undefined ? { fullChargeKg: chargeToKg(fullCharge) } : {}),
-      updatedAt: new Date(),
-    })
-    .where(eq(systems.id, systemId))
-    .returning();
+  const current = await loadSystem(ctx, viewer, systemId);
+  refuseRetired(current);
+  const { name, fullCharge, refrigerantId, ...rest } = input;
+  const facts = {
+    refrigerantId: refrigerantId !== undefined ? knownRefrigerant(refrigerantId).id : current.refrigerantId,
+    fullChargeKg: fullCharge !== undefined ? chargeToKg(fullCharge) : current.fullChargeKg,
+    applianceType: rest.applianceType ?? current.applianceType,
+    automaticLeakDetection: rest.automaticLeakDetection ?? current.automaticLeakDetection,
+    inServiceOn: rest.inServiceOn ?? current.inServiceOn ?? current.createdAt.toISOString().slice(0, 10),
+  };
+  const changed = (Object.keys(facts) as (keyof typeof facts)[]).filter((k) => facts[k] !== current[k]);
+  if (changed.length > 0 && (await hasRecords(ctx, systemId))) {
+    throw new HttpError(
+      409,
+      "records_exist",
+      `${current.name} has records, so ${changed.join(", ")} change by a dated revision (engineers and owners), which keeps past figures as they were.`,
+      Object.fromEntries(changed.map((k) => [k, "changes by a dated revision once the system has records"])),
+    );
+  }
+  if (changed.includes("inServiceOn")) {
+    const store = await loadVisibleStore(ctx, viewer, current.storeId);
+    eventDay(facts.inServiceOn, store, "inServiceOn");
+  }
+  const row = await ctx.db.transaction(async (tx) => {
+    const [updated] = await tx
+      .update(systems)
+      .set({ ...(name !== undefined ? { name } : {}), ...facts, updatedAt: new Date() })
+      .where(eq(systems.id, systemId))
+      .returning();
+    if (changed.length > 0)
+      await tx.insert(systemRevisions).values({
+        companyId: viewer.companyId,
+        systemId,
+        effectiveFrom: facts.inServiceOn,
+        kind: "correction",
+        ...facts,
+        reason: "Edited before any record",
+        byId: userId,
+      });
+    return updated;
+  });
   return toSystem(row, await companyGwpBases(ctx, viewer.companyId));
 }
 

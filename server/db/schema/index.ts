@@ -10,3 +10,4 @@ export * from "./analyses";
 export * from "./findings";
 export * from "./compliance";
 export * from "./reports";
+export * from "./system-revisions";
