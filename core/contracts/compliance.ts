@@ -117,6 +117,10 @@ export const systemRecords = z.object({
     method: z.enum(["annualizing", "rolling-average"]),
     retentionYears: z.number(),
     retentionSource: z.string(),
+    /** Whose words and articles the records use: US EPA leak repair, or EU F-gas leak checks. */
+    wording: z.enum(["us", "eu"]),
+    /** The profile sets leak-rate thresholds (the US parts); the EU regulation sets leak-check intervals instead. */
+    leakRateRules: z.boolean(),
   }),
   /** How long the records are kept; `keptUntil` is set once the system is retired. */
   retention: z.object({ years: z.number(), source: z.string(), keptUntil: z.string().nullable() }),

@@ -60,6 +60,8 @@ export const CITATIONS: Record<string, Citation> = {
 export const UNCONFIRMED = "not yet confirmed in the rule text";
 export const DERIVED = "derived from the cited values";
 
+/** A clause that already cites a rule section ("40 CFR 82.157: …") needs no summary's citation after it. */
+const NAMES_A_RULE = /^40 CFR \d+\.\d+/;
 const TAG = /\s*\[(S:[A-Za-z0-9,]+|M|D)\]:?/g;
 const SECTION_ONLY = /^(8[24])\.(\d{3})/;
 
@@ -96,7 +98,8 @@ export function readableSource(source: string): string {
         for (const id of tag.slice(2).split(",")) {
           const c = CITATIONS[id];
           if (!c) notes.push(`source ${id}`);
-          else if (!c.mentioned.test(source.replace(TAG, "")) && !said.has(c.text)) notes.push(c.text);
+          else if (!c.mentioned.test(source.replace(TAG, "")) && !NAMES_A_RULE.test(rest) && !said.has(c.text))
+            notes.push(c.text);
           if (c) said.add(c.text);
         }
     }

@@ -142,6 +142,8 @@ export async function getSystemRecords(
       method: rules.method,
       retentionYears: rules.profile.recordRetentionYears.value,
       retentionSource: rules.profile.recordRetentionYears.source,
+      wording: rules.profile.leakRateParts.length === 0 && rules.profile.leakChecks ? "eu" : "us",
+      leakRateRules: rules.profile.leakRateParts.length > 0,
     },
     retention: recordRetention(
       rules.profile,

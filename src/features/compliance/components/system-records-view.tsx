@@ -103,9 +103,11 @@ export function SystemRecords({
         </p>
         <p>
           <span className="font-bold text-ink">Profile: </span>
-          {r.profile.name}, {r.profile.method === "annualizing" ? "annualizing method" : "rolling-average method"} (40
-          CFR 82.152 / 84.102). Records are kept {r.profile.retentionYears} years (
-          {readableSource(r.profile.retentionSource)}).
+          {r.profile.name}
+          {r.profile.leakRateRules
+            ? `, ${r.profile.method === "annualizing" ? "annualizing method" : "rolling-average method"} (40 CFR 82.152 / 84.102)`
+            : ""}
+          . Records are kept {r.profile.retentionYears} years ({readableSource(r.profile.retentionSource)}).
         </p>
         {r.system.retired ? (
           <p>
@@ -118,8 +120,10 @@ export function SystemRecords({
         {r.leakCheck ? (
           <p>
             <span className="font-bold text-ink">Leak checks: </span>
-            {r.leakCheck.reason}. Without leak detection every {r.leakCheck.withoutLdsMonths ?? "–"} months; with it
-            every {r.leakCheck.withLdsMonths ?? "–"} months.
+            {r.leakCheck.reason}.
+            {r.leakCheck.withoutLdsMonths !== null && r.leakCheck.withLdsMonths !== null
+              ? ` Without a leak detection system every ${r.leakCheck.withoutLdsMonths} months; with one every ${r.leakCheck.withLdsMonths} months.`
+              : ""}
           </p>
         ) : null}
         {r.nextInspection ? (
@@ -157,8 +161,17 @@ export function SystemRecords({
         <h2 id="rates" className="text-xl font-bold">
           Leak rate at every addition
         </h2>
-        {r.leakRates.length === 0 ? (
-          <p className="text-muted">No refrigerant has been added: no leak rate yet.</p>
+        {!r.profile.leakRateRules ? (
+          <p className="text-muted">
+            {r.profile.name} sets leak-check intervals by CO2-equivalent, not a leak-rate threshold: refrigerant added
+            is listed below.
+          </p>
+        ) : r.leakRates.length === 0 ? (
+          <p className="text-muted">
+            {r.additions.some((x) => !x.voided)
+              ? "No leak-rate figure: the refrigerant added was excluded from the calculation."
+              : "No refrigerant has been added: no leak rate yet."}
+          </p>
         ) : (
           <DataTable
             caption="Leak rate at every addition"
