@@ -236,3 +236,16 @@ export const digestSendResult = z.object({
   itemCount: z.number(),
   message: z.string(),
 });
+
+/** GET /api/compliance/readings: how the company's profile reads rules not confirmed in their text. */
+export const readingsResponse = z.object({
+  profileName: z.string(),
+  readings: z.array(
+    z.object({
+      text: z.string(),
+      kind: z.enum(["profile-value", "product-reading"]),
+      decision: z.string().optional(),
+    }),
+  ),
+});
+export type ReadingsResponse = z.infer<typeof readingsResponse>;

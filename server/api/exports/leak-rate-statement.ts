@@ -182,6 +182,9 @@ export function leakRateStatementPdf(
 
   h("Record keeping");
   line(
+    "“reading”: how the product applies a rule whose text it has not confirmed; every reading is listed once on the company's rule-profile page (Settings, Readings).",
+  );
+  line(
     `Keep these records for at least ${r.profile.retentionYears} years (${readableSource(r.profile.retentionSource)}).`,
   );
   line(

@@ -13,6 +13,7 @@ import { ChargeForm } from "./charge-form";
 import { ChronicSection } from "./chronic-section";
 import { LeakCheckForm } from "./leak-check-form";
 import { readableSource } from "#core/domain/compliance/citations";
+import { Readable, SourceText } from "../../../components/ui/source-text";
 
 function Fact({ label, children }: { label: string; children: React.ReactNode }) {
   return (
@@ -97,9 +98,11 @@ export function SystemRecords({
       <div className="space-y-1 text-sm text-muted">
         <p>
           <span className="font-bold text-ink">Rule: </span>
-          {a.applies
-            ? `${a.reason}. Threshold source: ${readableSource(a.thresholdSource ?? "")}.`
-            : `No leak-rate threshold: ${a.reason}.`}
+          {a.applies ? (
+            <Readable text={`${a.reason}. Threshold source: ${readableSource(a.thresholdSource ?? "")}.`} />
+          ) : (
+            `No leak-rate threshold: ${a.reason}.`
+          )}
         </p>
         <p>
           <span className="font-bold text-ink">Profile: </span>
@@ -107,7 +110,8 @@ export function SystemRecords({
           {r.profile.leakRateRules
             ? `, ${r.profile.method === "annualizing" ? "annualizing method" : "rolling-average method"} (40 CFR 82.152 / 84.102)`
             : ""}
-          . Records are kept {r.profile.retentionYears} years ({readableSource(r.profile.retentionSource)}).
+          . Records are kept {r.profile.retentionYears} years (<SourceText source={r.profile.retentionSource} />
+          ).
         </p>
         {r.system.retired ? (
           <p>
@@ -129,7 +133,8 @@ export function SystemRecords({
         {r.nextInspection ? (
           <p>
             <span className="font-bold text-ink">Next inspection: </span>
-            {r.nextInspection.reason} ({readableSource(r.nextInspection.source)}).
+            {r.nextInspection.reason} (<SourceText source={r.nextInspection.source} />
+            ).
           </p>
         ) : null}
       </div>
@@ -150,7 +155,9 @@ export function SystemRecords({
                 ) : (
                   d.what
                 )}
-                <p className="text-sm text-muted">Rule: {readableSource(d.source)}</p>
+                <p className="text-sm text-muted">
+                  Rule: <SourceText source={d.source} />
+                </p>
               </li>
             ))}
           </ul>
