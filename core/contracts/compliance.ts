@@ -88,6 +88,9 @@ export const dueItemKinds = [
   "inspection",
   "chronic-leaker-report",
   "detector-check",
+  "automatic-leak-detection",
+  "retrofit-or-retire-plan",
+  "retrofit-or-retire",
 ] as const;
 export const dueItem = z.object({
   kind: z.enum(dueItemKinds),
@@ -122,6 +125,10 @@ export const systemRecords = z.object({
     /** The profile sets leak-rate thresholds (the US parts); the EU regulation sets leak-check intervals instead. */
     leakRateRules: z.boolean(),
   }),
+  /** The part's automatic-leak-detection requirement for this system (US Part 84), or null. */
+  automaticLeakDetection: z
+    .object({ required: z.boolean(), dueOn: z.string().nullable(), reason: z.string(), source: z.string() })
+    .nullable(),
   /** How long the records are kept; `keptUntil` is set once the system is retired. */
   retention: z.object({ years: z.number(), source: z.string(), keptUntil: z.string().nullable() }),
   applicability: z.object({

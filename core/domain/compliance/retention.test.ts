@@ -38,6 +38,9 @@ describe("record retention follows the rule profile", () => {
       "initial-test",
       "inspection",
       "repair",
+      // The 30 days to repair passed on 3 Dec 2026 with no repair: the failed-repair path [M].
+      "retrofit-or-retire",
+      "retrofit-or-retire-plan",
     ]);
     const retired = systemStatus(US_FEDERAL_PROFILE, "annualizing", { ...rec, retiredOn: "2027-01-05" }, "2027-01-10");
     // Report by 1 March of the next year [S:R7].

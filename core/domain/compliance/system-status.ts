@@ -1,4 +1,5 @@
-import { addMonths, compareDates, yearOf, type IsoDate } from "../dates/calendar-date";
+import { addDays, addMonths, compareDates, yearOf, type IsoDate } from "../dates/calendar-date";
+import { automaticLeakDetection, type AutomaticLeakDetection } from "./automatic-leak-detection";
 import type { Refrigerant } from "../refrigerants/types";
 import { applicableLeakRatePart, leakRateThreshold } from "./applicability";
 import { assessLeakRate, type AssessedPoint } from "./assess-leak-rate";
@@ -28,6 +29,8 @@ export interface SystemRecords {
   findingRepairs?: readonly FindingRepair[];
   /** Repaired findings whose verification is not finished: the repair day and a passed initial test's day, if any. */
   pendingFollowUps: readonly { findingId: string; repairedOn: IsoDate; initialTestOn: IsoDate | null }[];
+  /** Days a follow-up verification test failed: the repair did not hold. */
+  failedFollowUps?: readonly { findingId: string; on: IsoDate }[];
   /** Days a follow-up verification test passed (shortens the rolling-average window). */
   followUpVerifiedOn: readonly IsoDate[];
   leakChecks: readonly { checkedOn: IsoDate; leakFound: boolean }[];
@@ -43,7 +46,16 @@ export interface SystemRecords {
 }
 
 export interface DueDate {
-  kind: "repair" | "initial-test" | "follow-up-test" | "recheck-after-repair" | "inspection" | "chronic-leaker-report";
+  kind:
+    | "repair"
+    | "initial-test"
+    | "follow-up-test"
+    | "recheck-after-repair"
+    | "inspection"
+    | "chronic-leaker-report"
+    | "automatic-leak-detection"
+    | "retrofit-or-retire-plan"
+    | "retrofit-or-retire";
   dueOn: IsoDate;
   what: string;
   source: string;
@@ -72,6 +84,8 @@ export interface SystemStatus {
   chronic: ChronicLeakerYear[];
   co2e: SystemCo2e;
   leakCheck: { withLds: LeakCheckInterval; withoutLds: LeakCheckInterval; applied: LeakCheckInterval } | null;
+  /** The part's automatic-leak-detection requirement for this system, or null when the part has none. */
+  automaticLeakDetection: AutomaticLeakDetection | null;
   nextInspection: { dueOn: IsoDate; reason: string; source: string } | null;
   due: DueDate[];
 }
@@ -158,6 +172,18 @@ export function systemStatus(
       });
     }
   }
+
+  // Automatic leak detection: shown on the system, and due from its in-service day while missing.
+  const ald = automaticLeakDetection(a.applies ? a.part : null, facts);
+  if (ald?.required && ald.dueOn && !facts.automaticLeakDetection)
+    due.push({
+      kind: "automatic-leak-detection",
+      dueOn: ald.dueOn,
+      what: `Install automatic leak detection (${ald.reason})`,
+      source: ald.source,
+    });
+
+  due.push(...failedRepairItems(profile, episodes, rec.failedFollowUps ?? [], retrofits, today));
 
   // Each year is judged by the part that applied to the system in it (none: the year does not count).
   const partOn = (date: IsoDate) => {
@@ -246,11 +272,65 @@ export function systemStatus(
     chronic,
     co2e,
     leakCheck,
+    automaticLeakDetection: ald,
     nextInspection,
     due: (rec.retiredOn ? due.filter((d) => stillDueWhenRetired(d, rec.retiredOn!)) : due).sort((x, y) =>
       compareDates(x.dueOn, y.dueOn),
     ),
   };
+}
+
+/**
+ * When a repair does not hold (a failed follow-up verification test, or no repair within the 30
+ * days), a retrofit-or-retire plan falls due, to be carried out within a year (docs/reference/standards.md
+ * §1 [M]; docs/decisions/0044-readings-and-research-notes.md). The earliest such day not followed by a
+ * retrofit starts both items; retirement ends them (a retired system has no due items but reports).
+ */
+function failedRepairItems(
+  profile: RuleProfile,
+  episodes: readonly BreachEpisode[],
+  failedFollowUps: readonly { findingId: string; on: IsoDate }[],
+  retrofits: readonly IsoDate[],
+  today: IsoDate,
+): DueDate[] {
+  type Trigger = { on: IsoDate; why: string; partId: string | null; findingId?: string };
+  const triggers: Trigger[] = [
+    ...failedFollowUps.map((f) => ({
+      on: f.on,
+      why: `the follow-up verification test of ${f.on} failed`,
+      partId: null,
+      findingId: f.findingId,
+    })),
+    ...episodes
+      .filter((e) =>
+        e.repairedOn ? compareDates(e.repairedOn, e.repairDue) > 0 : compareDates(today, e.repairDue) > 0,
+      )
+      .map((e) => ({ on: e.repairDue, why: `no repair by ${e.repairDue}`, partId: e.partId })),
+  ].filter((t) => !retrofits.some((r) => compareDates(r, t.on) >= 0));
+  const first = triggers.sort((x, y) => compareDates(x.on, y.on))[0];
+  if (!first) return [];
+  const part =
+    profile.leakRateParts.find((p) => p.id === first.partId && p.failedRepair) ??
+    profile.leakRateParts.find((p) => p.failedRepair);
+  const rule = part?.failedRepair;
+  if (!rule) return [];
+  const findingId = first.findingId ? { findingId: first.findingId } : {};
+  return [
+    {
+      kind: "retrofit-or-retire-plan",
+      dueOn: addDays(first.on, rule.value.planDays),
+      what: `Retrofit-or-retire plan: ${first.why}`,
+      source: rule.source,
+      ...findingId,
+    },
+    {
+      kind: "retrofit-or-retire",
+      dueOn: addMonths(first.on, rule.value.carryOutMonths),
+      what: `Retrofit or retire the system under its plan (${first.why})`,
+      source: rule.source,
+      ...findingId,
+    },
+  ];
 }
 
 /**

@@ -49,6 +49,10 @@ function shared(part: "82" | "84") {
       },
       source: `[M] ${rule}: CR/IPR ≥ 500 lb quarterly until 4 quarters below; others yearly until 1 year below; waived under yearly-calibrated automatic leak detection`,
     },
+    failedRepair: {
+      value: { planDays: 30, carryOutMonths: 12 },
+      source: `[M] ${rule}: when a repair does not hold, a retrofit-or-retire plan within 30 days, carried out within 1 year`,
+    },
     chronicLeaker: {
       percentOfFullCharge: {
         value: 125,
@@ -75,8 +79,16 @@ export const PART_84_SUBPART_C: LeakRatePart = {
   minFullCharge: { value: { value: 15, unit: "lb" }, source: "[S:R4] full charge ≥ 15 lb" },
   effectiveFrom: { value: "2026-01-01", source: "[S:R4] from 1 Jan 2026" },
   automaticLeakDetectionRequired: {
-    value: { types: ["commercial-refrigeration", "industrial-process"], fromCharge: { value: 1500, unit: "lb" } },
-    source: "[S:R4] ALD required for CR and IPR ≥ 1,500 lb; install deadlines [M]",
+    value: {
+      types: ["commercial-refrigeration", "industrial-process"],
+      fromCharge: { value: 1500, unit: "lb" },
+      installDeadlines: [
+        { inServiceFrom: "2026-01-01", withinDays: 30 },
+        { inServiceFrom: "2017-01-01", inServiceBefore: "2026-01-01", by: "2027-01-01" },
+      ],
+    },
+    source:
+      "[S:R4] 40 CFR 84.106: automatic leak detection required for commercial and industrial process refrigeration of 1,500 lb or more; installed within 30 days for systems in service from 2026, by 1 Jan 2027 for 2017–2025 [M]",
   },
   firstCalculationDays: {
     value: 365,

@@ -150,6 +150,7 @@ export async function getSystemRecords(
       row.system.retiredAt ? localDateOf(row.system.retiredAt, row.store.timeZone) : null,
     ),
     applicability: st.applicability,
+    automaticLeakDetection: st.automaticLeakDetection,
     leakRates: st.points.map(toRow),
     latest: st.latest ? toRow(st.latest) : null,
     overThreshold: st.overThreshold,

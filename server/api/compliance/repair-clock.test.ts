@@ -92,4 +92,46 @@ describe("repair clock and same-leak additions through the API", () => {
     expect(after.latest.percent).toBeCloseTo(91.25, 9);
     expect(after.due.find((d: { kind: string }) => d.kind === "repair")).toMatchObject({ dueOn: "2026-05-10" });
   });
+
+  it("asks for automatic leak detection on a 1,600 lb rack from its in-service day (40 CFR 84 subpart C)", async () => {
+    // Required for commercial refrigeration of 1,500 lb or more [S:R4]; within 30 days of a 2026 in-service day [M].
+    const res = await (await signedIn("lead-tech")).post(`/api/stores/${co.store.id}/systems`, {
+      name: "Rack L",
+      refrigerantId: "R-448A",
+      fullCharge: lb(1600),
+      applianceType: "commercial-refrigeration",
+      automaticLeakDetection: false,
+      inServiceOn: "2026-03-01",
+    });
+    const rec = (await (await signedIn("engineer")).get(`/api/systems/${res.body.id}/records`)).body;
+    expect(rec.automaticLeakDetection).toMatchObject({ required: true, dueOn: "2026-03-31" });
+    expect(rec.due.find((d: { kind: string }) => d.kind === "automatic-leak-detection")).toMatchObject({
+      dueOn: "2026-03-31",
+      link: `/systems/${res.body.id}#sys-due`,
+    });
+  });
+
+  it("puts a retrofit-or-retire plan due when the follow-up verification test fails ([M], docs/decisions/0044)", async () => {
+    const id = await newSystem("Rack M");
+    const finding = await newFinding(id);
+    const lead = await signedIn("lead-tech");
+    for (const step of [
+      { action: "repair", on: "2026-04-05" },
+      { action: "initial-test", on: "2026-04-05", result: "passed" },
+      { action: "follow-up-test", on: "2026-04-15", result: "failed" },
+    ]) {
+      const r = await lead.post(`/api/findings/${finding}/events`, step);
+      expect(r.status, JSON.stringify(r.body)).toBe(200);
+    }
+    const rec = (await lead.get(`/api/systems/${id}/records`)).body;
+    // Plan within 30 days of the failed test, carried out within 1 year [M].
+    expect(
+      rec.due
+        .filter((d: { kind: string }) => d.kind.startsWith("retrofit"))
+        .map((d: { kind: string; dueOn: string }) => [d.kind, d.dueOn]),
+    ).toEqual([
+      ["retrofit-or-retire-plan", "2026-05-15"],
+      ["retrofit-or-retire", "2027-04-15"],
+    ]);
+  });
 });

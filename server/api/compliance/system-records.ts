@@ -145,6 +145,9 @@ export async function statusesOf(
         findingRepairs: mine.filter((e) => e.kind === "repaired").map((e) => ({ findingId: e.findingId, on: e.on })),
         pendingFollowUps,
         followUpVerifiedOn: mine.filter((e) => e.kind === "follow-up-test" && e.result === "passed").map((e) => e.on),
+        failedFollowUps: mine
+          .filter((e) => e.kind === "follow-up-test" && e.result === "failed")
+          .map((e) => ({ findingId: e.findingId, on: e.on })),
         leakChecks: checks
           .filter((c) => c.systemId === system.id)
           .map((c) => ({ checkedOn: c.checkedOn, leakFound: c.leakFound })),

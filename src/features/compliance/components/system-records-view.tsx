@@ -93,7 +93,16 @@ export function SystemRecords({
         </Fact>
         <Fact label="Next inspection">{r.nextInspection ? r.nextInspection.dueOn : "None scheduled"}</Fact>
         <Fact label="Appliance">{APPLIANCE_TYPE_NAMES[r.system.applianceType]}</Fact>
-        <Fact label="Leak detection">{r.system.automaticLeakDetection ? "Automatic" : "None"}</Fact>
+        <Fact label="Leak detection">
+          {r.system.automaticLeakDetection ? "Automatic" : "None"}
+          {r.automaticLeakDetection?.required ? (
+            <span className={r.system.automaticLeakDetection ? "block text-sm" : "block text-sm text-danger"}>
+              Required
+              {r.automaticLeakDetection.dueOn ? ` by ${r.automaticLeakDetection.dueOn}` : ""} (
+              <SourceText source={r.automaticLeakDetection.source} />)
+            </span>
+          ) : null}
+        </Fact>
       </dl>
       <div className="space-y-1 text-sm text-muted">
         <p>
