@@ -58,6 +58,8 @@ export const gwpSummary = z.object({
   value: z.number(),
   /** The GWP-100 basis of the value, e.g. "AR4". */
   basis: z.string(),
+  /** The company profile's stated GWP basis, in words, shown beside the figure. */
+  statement: z.string(),
   source: z.string(),
 });
 

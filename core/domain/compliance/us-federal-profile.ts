@@ -105,6 +105,8 @@ export const US_FEDERAL_PROFILE: RuleProfile = {
     value: ["AR4", "AR5", "AR6", "EU-517/2014"],
     source:
       "[M] AIM Act exchange values follow AR4; where AR4 lists none, the next basis with a value only decides whether GWP exceeds 53",
+    // The product's stated choice, shown beside every GWP and CO2-equivalent figure (docs/decisions/0045-gwp-basis.md).
+    note: "IPCC AR4 100-year values (the AIM Act's exchange values); a component with no AR4 value (the HFOs R-1234yf, R-1234ze(E)) takes its AR5 value, where AR5's \"<1\" counts as 1",
   },
   leakRateParts: [PART_82_SUBPART_F, PART_84_SUBPART_C],
   recordRetentionYears: { value: 3, source: "[S:R6,R7] records kept 3 years" },

@@ -130,9 +130,17 @@ describe("records export", () => {
       expect(text).not.toMatch(/CFR|EPA|Section 608|leak-rate method|No refrigerant has been added/);
       // The 10 lb addition is listed as refrigerant added.
       expect(text).toContain("2026-02-01: 4.54 kg (10.0 lb) by technician of Hollyhock Foods");
-      // 45.36 kg × 1387 / 1000 = 62.92 t CO2e: the 50–500 t band, every 6 months without a leak detection
+      // 45.359237 kg × 1387 / 1000 = 62.913 t CO2e: the 50–500 t band, every 6 months without a leak detection
       // system, 12 with one (Regulation (EU) 2024/573 Art. 5 intervals, docs/reference/standards.md §2 [S:E1]).
       expect(text).toContain("every 6 months, with one every 12 months");
+      // GWP basis stated beside the CO2e: R-448A is 1387 on AR4 with the 517/2014 HFO values (docs/reference/standards.md §3 [D]).
+      expect(text).toContain("kg × GWP 1387 / 1000");
+      expect(text).toContain("GWP basis: IPCC AR4 100-year values as in Regulation (EU) 2024/573 Annex I");
+      const csv = Papa.parse<Record<string, string>>((await tech.get(`/api/systems/${systemId}/records.csv`)).text, {
+        header: true,
+      }).data;
+      expect(csv[0]).toMatchObject({ gwp: "1387", co2e_tonnes: "62.913" });
+      expect(csv[0].gwp_basis).toMatch(/Regulation \(EU\) 2024\/573 Annex I/);
       // Records at least 5 years (2024/573 Art. 7 [S:E8b]).
       expect(text).toContain("at least 5 years");
     } finally {

@@ -56,8 +56,9 @@ export function leakRateStatementPdf(
   );
   if (r.co2e.known && r.co2e.tonnes !== null)
     line(
-      `CO2-equivalent of the charge: ${r.co2e.tonnes.toFixed(2)} t (kg × GWP / 1000; GWP source ${readableSource(r.co2e.source)}).`,
+      `CO2-equivalent of the charge: ${r.co2e.tonnes.toFixed(2)} t (kg × GWP ${r.co2e.gwp} / 1000; GWP source ${readableSource(r.co2e.source)}).`,
     );
+  if (r.system.refrigerant.gwp) line(`GWP basis: ${r.system.refrigerant.gwp.statement}.`);
 
   h("Rule profile");
   line(

@@ -98,5 +98,13 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[]): 
     });
   }
   rows.sort((x, y) => String(x.date).localeCompare(String(y.date)));
-  return Papa.unparse(rows, { newline: "\r\n" }); // RFC 4180 line ends
+  // The GWP, its stated basis and the charge's CO2-equivalent on every row, beside the figures.
+  const gwp = r.system.refrigerant.gwp;
+  const withBasis = rows.map((row) => ({
+    ...row,
+    gwp: gwp?.value ?? "",
+    gwp_basis: gwp?.statement ?? "",
+    co2e_tonnes: r.co2e.known && r.co2e.tonnes !== null ? r.co2e.tonnes.toFixed(3) : "",
+  }));
+  return Papa.unparse(withBasis, { newline: "\r\n" }); // RFC 4180 line ends
 }

@@ -4,16 +4,17 @@ import type { ChargeInput, System, SystemInput, SystemUpdateInput } from "#core/
 import { systemRevisions, systems } from "../../db/schema/index";
 import { companyRules } from "../compliance/system-records";
 import { findRefrigerant } from "#core/domain/refrigerants/catalogue";
-import type { GwpBasis, Refrigerant } from "#core/domain/refrigerants/types";
+import type { Refrigerant } from "#core/domain/refrigerants/types";
 import { KG_PER_POUND } from "#core/domain/units/mass";
 import { badRequest, conflict, HttpError, notFound } from "../../lib/http-error";
 import { eventDay } from "../findings/findings.service";
 import { hasRecords } from "./system-has-records";
 import { loadVisibleStore, type Viewer } from "../stores/store-access";
-import { refrigerantCautions, summarizeRefrigerant } from "./refrigerant-summary";
+import { gwpBasisStatement } from "#core/domain/compliance/co2e";
+import { refrigerantCautions, summarizeRefrigerant, type GwpChoice } from "./refrigerant-summary";
 
 type SystemRow = typeof systems.$inferSelect;
-type Bases = readonly GwpBasis[];
+type Bases = GwpChoice;
 
 /** kg as stored; lb converted at exactly 0.45359237 kg/lb (NIST SP 811, appendix B.8). */
 export function chargeToKg(charge: ChargeInput): number {
@@ -30,9 +31,10 @@ export function knownRefrigerant(id: string): Refrigerant {
   return r;
 }
 
-/** The GWP bases of the profile the company works under (its own, for a custom profile). */
+/** The GWP bases of the profile the company works under (its own, for a custom profile), with its stated basis. */
 export async function companyGwpBases(ctx: AppContext, companyId: string): Promise<Bases> {
-  return (await companyRules(ctx, companyId)).profile.gwpBases.value;
+  const { profile } = await companyRules(ctx, companyId);
+  return { bases: profile.gwpBases.value, statement: gwpBasisStatement(profile) };
 }
 
 export function toSystem(row: SystemRow, bases: Bases): System {

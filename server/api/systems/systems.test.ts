@@ -36,6 +36,8 @@ describe("systems", () => {
     // 0.26×675 + 0.26×3500 + 0.21×1430 + 0.20×1 + 0.07×1 = 1386.07 → 1386 (hand calculation from
     // the catalogue's IPCC values [S:G1]; docs/reference/standards.md §3 notes 1386 when HFOs are near zero).
     expect(res.body.refrigerant.gwp).toMatchObject({ value: 1386, basis: "AR4 + AR5" });
+    // The basis is the US profile's stated choice, shown beside the figure (docs/decisions/0045-gwp-basis.md).
+    expect(res.body.refrigerant.gwp.statement).toMatch(/^IPCC AR4 100-year values .*AR5's "<1" counts as 1$/);
     expect(res.body.cautions.map((c: { id: string }) => c.id)).toContain("oxygen-displacement");
     expect(res.body.cautions.at(-1).id).toBe("codes-govern");
 

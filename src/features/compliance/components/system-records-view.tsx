@@ -89,7 +89,10 @@ export function SystemRecords({
           {a.thresholdPercent === null ? "None applies" : `${a.thresholdPercent} % per year`}
         </Fact>
         <Fact label="CO2-equivalent">
-          {r.co2e.known && r.co2e.tonnes !== null ? `${r.co2e.tonnes.toFixed(2)} t` : "Unknown"}
+          {r.co2e.known && r.co2e.tonnes !== null ? `${r.co2e.tonnes.toFixed(2)} t (GWP ${r.co2e.gwp})` : "Unknown"}
+          {r.system.refrigerant.gwp ? (
+            <span className="block text-sm text-muted">GWP basis: {r.system.refrigerant.gwp.statement}</span>
+          ) : null}
         </Fact>
         <Fact label="Next inspection">{r.nextInspection ? r.nextInspection.dueOn : "None scheduled"}</Fact>
         <Fact label="Appliance">{APPLIANCE_TYPE_NAMES[r.system.applianceType]}</Fact>

@@ -51,6 +51,7 @@ export function RefrigerantPicker({
                 <>
                   GWP-100 <span className="font-bold text-ink">{picked.gwp.value}</span> on the {picked.gwp.basis} basis
                   (<SourceText source={picked.gwp.source} />){picked.gwpNote ? `; ${picked.gwpNote}` : ""}.
+                  <span className="block">GWP basis of the company's rule profile: {picked.gwp.statement}.</span>
                 </>
               ) : (
                 <>

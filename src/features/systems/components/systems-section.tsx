@@ -66,6 +66,9 @@ export function SystemsSection({
           Add the store's racks and condensing units, so fixtures can be linked to them and leak rates worked out.
         </EmptyState>
       ) : null}
+      {systems.data?.[0]?.refrigerant.gwp ? (
+        <p className="text-sm text-muted">GWP basis: {systems.data[0].refrigerant.gwp.statement}.</p>
+      ) : null}
       {systems.data && systems.data.length > 0 ? (
         <DataTable<System>
           caption="Systems"
@@ -84,7 +87,13 @@ export function SystemsSection({
             {
               header: "GWP",
               cell: (s) =>
-                s.refrigerant.gwp ? `${s.refrigerant.gwp.value} (${s.refrigerant.gwp.basis})` : "not known",
+                s.refrigerant.gwp ? (
+                  <span title={`GWP basis: ${s.refrigerant.gwp.statement}`}>
+                    {s.refrigerant.gwp.value} ({s.refrigerant.gwp.basis})
+                  </span>
+                ) : (
+                  "not known"
+                ),
             },
             { header: "Full charge", cell: (s) => formatMass(s.fullChargeKg, massUnit, 1) },
             { header: "Appliance type", cell: (s) => APPLIANCE_TYPE_NAMES[s.applianceType] },
