@@ -162,7 +162,12 @@ export function systemStatus(
         source: part.followUpVerificationDays.source,
         findingId: f.findingId,
       });
-    } else if (!part && profile.leakChecks) {
+    } else if (
+      !part &&
+      profile.leakChecks &&
+      // EU: a leak check with no leak found on or after the repair day is the re-check [S:E6].
+      !rec.leakChecks.some((c) => !c.leakFound && compareDates(c.checkedOn, f.repairedOn) >= 0)
+    ) {
       due.push({
         kind: "recheck-after-repair",
         dueOn: recheckAfterRepairDueDate(profile, f.repairedOn),

@@ -178,7 +178,7 @@ export function SystemRecords({
 
       <section id="leak-rates" aria-labelledby="rates" className="space-y-2">
         <h2 id="rates" className="text-xl font-bold">
-          Leak rate at every addition
+          {r.profile.leakRateRules ? "Leak rate at every addition" : "Leak rate"}
         </h2>
         {!r.profile.leakRateRules ? (
           <p className="text-muted">
