@@ -82,7 +82,8 @@ const INTERNAL = /\s*(?:docs\/reference\/)?standards\.md(\s*§\d+(,\s*§\d+)*)?|
 export function readableSource(source: string): string {
   // The closing disclaimer names its codes in its own text: nothing more to cite.
   if (/standards\.md §8 disclaimer/.test(source)) return "";
-  source = source.replace(INTERNAL, "");
+  // Research notes ("from memory", "verify in …") are for us; the tag already says how sure we are.
+  source = source.replace(INTERNAL, "").replace(/,?\s*\b(from memory|verify in [^;,)]*)/gi, "");
   if (!source.includes("[")) return source.trim();
   const said = new Set<string>();
   const segments = splitOutsideParens(source).map((segment) => {
