@@ -159,4 +159,18 @@ describe("systems", () => {
     const ids = res.body.refrigerants.map((r: { id: string }) => r.id);
     expect(ids).toEqual(expect.arrayContaining(["R-404A", "R-448A", "R-744", "R-290"]));
   });
+
+  it("gives a CO2 system the exposure limits as published, deferring to the site's detector", async () => {
+    const lead = await signedIn("lead-tech");
+    const res = await lead.post(`/api/stores/${co.store.id}/systems`, {
+      ...rack,
+      name: "CO2 booster",
+      refrigerantId: "R-744",
+    });
+    // ACGIH 5,000 ppm TWA, 30,000 ppm STEL [S:S2]; OSHA PEL 5,000 ppm TWA, from memory (docs/reference/standards.md §5).
+    const co2 = res.body.cautions.find((c: { id: string }) => c.id === "co2-exposure");
+    expect(co2.text).toMatch(/5,000 ppm averaged over a work shift and 30,000 ppm over 15 minutes \(ACGIH\)/);
+    expect(co2.text).toMatch(/Trust the site's CO2 detector/);
+    expect(res.body.cautions.at(-1).id).toBe("codes-govern");
+  });
 });
