@@ -1,7 +1,7 @@
 import { defineConfig } from "vitest/config";
 import react from "@vitejs/plugin-react";
 
-// Three suites, one run: pure and API tests in Node, component tests in jsdom (one DOM
+// Four suites, one run: pure tests and API tests in Node, component tests in jsdom (one DOM
 // implementation only), and browser tests that drive Debian's Chromium through playwright-core.
 export default defineConfig({
   plugins: [react()],
@@ -10,9 +10,19 @@ export default defineConfig({
       {
         extends: true,
         test: {
+          // Pure suites: no PostgreSQL, Chromium or client build (`npm run test:unit`).
+          name: "unit",
+          environment: "node",
+          include: ["core/**/*.test.ts", "scripts/**/*.test.ts", "tests/walls/**/*.test.ts"],
+          testTimeout: 30_000,
+        },
+      },
+      {
+        extends: true,
+        test: {
           name: "server",
           environment: "node",
-          include: ["core/**/*.test.ts", "server/**/*.test.ts", "tests/api/**/*.test.ts", "scripts/**/*.test.ts"],
+          include: ["server/**/*.test.ts"],
           globalSetup: ["tests/helpers/global-setup.ts"],
           testTimeout: 30_000,
           hookTimeout: 60_000,

@@ -8,6 +8,15 @@ source "$(dirname "$0")/lib.sh"
 PG_PORT=${PLUMELINE_TEST_PG_PORT:-$((55000 + $(printf %s "$root" | cksum | cut -d' ' -f1) % 900))}
 
 ensure_node_modules
+
+# The house rules first: types, formatting, import walls, unused code (DEVELOPERS.md, "Checks").
+log "checking types, formatting, import walls and unused code..."
+if ! npm run -s check; then
+  log "a check failed (above); fix it before the suites run"
+  echo "0 passed, 1 failed"
+  exit 1
+fi
+
 ensure_chromium
 log "starting the test PostgreSQL on 127.0.0.1:$PG_PORT..."
 PG_EXTRA_OPTS="-c fsync=off -c synchronous_commit=off -c full_page_writes=off -c max_connections=200" \

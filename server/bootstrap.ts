@@ -4,6 +4,7 @@ import type { AppContext } from "./context";
 import { createDb, migrateDb } from "./db/client";
 import { createSmtpMailer } from "./mail/mailer";
 import { startFakeSmtp, type FakeSmtp } from "./mail/fake-smtp";
+import { storageFromEnv } from "./storage/storage-from-env";
 
 /** The fake SMTP server on its usual port, or any free one when another checkout already has it. */
 async function startFakeSmtpOnFreePort(db: Parameters<typeof startFakeSmtp>[0], port: number): Promise<FakeSmtp> {
@@ -40,11 +41,14 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
     Boolean(fakeSmtp),
   );
 
+  const uploads = storageFromEnv(env);
+  logger.info({ storage: uploads.kind }, "uploads storage");
   const ctx: AppContext = {
     db,
     pool,
     mailer,
     logger,
+    storage: uploads.storage,
     config: {
       sessionSecret: env.SESSION_SECRET,
       bcryptCost: env.BCRYPT_COST,
@@ -66,6 +70,7 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
       await ctx.analysisRunner?.close();
       await ctx.reportRunner?.close();
       mailer.close();
+      uploads.close();
       await fakeSmtp?.close();
       await pool.end();
     },

@@ -8,7 +8,7 @@ import type { ReportRunner } from "./jobs/report-runner";
 
 /** Plan upload limits; each has a default (server/api/plans/plan-resources.ts). */
 export interface PlanImageLimits {
-  /** Largest upload in bytes (the 25 MB). */
+  /** Largest upload in bytes (25 MB, docs/product.md). */
   maxBytes: number;
   /** Largest decoded image, width × height, checked from the header before decoding. */
   maxPixels: number;
@@ -40,7 +40,7 @@ export interface AppContext {
   mailer: Mailer;
   config: AppConfig;
   logger: Logger;
-  /** Where plan images live; defaults to a disk store under config.uploadsDir. */
+  /** Where uploads live (server/storage/storage-from-env.ts); tests without one get a disk store under config.uploadsDir. */
   storage?: BlobStorage;
   /** Worker threads that run the locator; made on first use (server/api/analysis). */
   analysisRunner?: AnalysisRunner;

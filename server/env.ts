@@ -1,41 +1,57 @@
 import { z } from "zod";
 
 // All configuration comes from the environment, checked once at start-up with a clear message.
-const envSchema = z.object({
-  NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
-  DATABASE_URL: z.string().min(1, "DATABASE_URL is required (postgres://user@host:port/db)"),
-  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
-  HOST: z.string().default("127.0.0.1"),
-  APP_URL: z.string().optional(),
-  SESSION_SECRET: z
-    .string()
-    .min(16, "SESSION_SECRET must be at least 16 characters")
-    .default("plumeline-local-development-secret"),
-  BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(12),
-  LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
-  LOGIN_RATE_WINDOW_MS: z.coerce
-    .number()
-    .int()
-    .min(1000)
-    .default(15 * 60 * 1000),
-  // Without SMTP_HOST the server starts its own fake SMTP server and keeps what it catches (the Outbox).
-  SMTP_HOST: z.string().optional(),
-  SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
-  SMTP_USER: z.string().optional(),
-  SMTP_PASS: z.string().optional(),
-  SMTP_SECURE: z.enum(["true", "false"]).default("false"),
-  MAIL_FROM: z.string().default("Plumeline <no-reply@plumeline.local>"),
-  FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
-  UPLOADS_DIR: z.string().default("uploads"),
-  // Plan images: the most pixels a header may declare before it is refused undecoded (decompression bombs).
-  PLAN_MAX_MEGAPIXELS: z.coerce
-    .number()
-    .positive("PLAN_MAX_MEGAPIXELS must be more than 0")
-    .max(200, "PLAN_MAX_MEGAPIXELS must be at most 200")
-    .default(40),
-  LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
-  SEED_DEMO: z.enum(["true", "false"]).default("true"),
-});
+const envSchema = z
+  .object({
+    NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
+    DATABASE_URL: z.string().min(1, "DATABASE_URL is required (postgres://user@host:port/db)"),
+    PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+    HOST: z.string().default("127.0.0.1"),
+    APP_URL: z.string().optional(),
+    SESSION_SECRET: z
+      .string()
+      .min(16, "SESSION_SECRET must be at least 16 characters")
+      .default("plumeline-local-development-secret"),
+    BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(12),
+    LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
+    LOGIN_RATE_WINDOW_MS: z.coerce
+      .number()
+      .int()
+      .min(1000)
+      .default(15 * 60 * 1000),
+    // Without SMTP_HOST the server starts its own fake SMTP server and keeps what it catches (the Outbox).
+    SMTP_HOST: z.string().optional(),
+    SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
+    SMTP_USER: z.string().optional(),
+    SMTP_PASS: z.string().optional(),
+    SMTP_SECURE: z.enum(["true", "false"]).default("false"),
+    MAIL_FROM: z.string().default("Plumeline <no-reply@plumeline.local>"),
+    FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
+    UPLOADS_DIR: z.string().default("uploads"),
+    // Where uploads live: "disk" (UPLOADS_DIR, one machine) or "s3" (any S3-compatible object store,
+    // shared by every app process).
+    STORAGE: z.enum(["disk", "s3"]).default("disk"),
+    S3_BUCKET: z.string().min(1).optional(),
+    S3_ENDPOINT: z.url("S3_ENDPOINT must be a URL such as http://127.0.0.1:9000").optional(),
+    S3_REGION: z.string().min(1).default("us-east-1"),
+    S3_ACCESS_KEY_ID: z.string().optional(),
+    S3_SECRET_ACCESS_KEY: z.string().optional(),
+    S3_FORCE_PATH_STYLE: z.enum(["true", "false"]).default("true"),
+    S3_PREFIX: z.string().optional(),
+    // Plan images: the most pixels a header may declare before it is refused undecoded (decompression bombs).
+    PLAN_MAX_MEGAPIXELS: z.coerce
+      .number()
+      .positive("PLAN_MAX_MEGAPIXELS must be more than 0")
+      .max(200, "PLAN_MAX_MEGAPIXELS must be at most 200")
+      .default(40),
+    LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
+    SEED_DEMO: z.enum(["true", "false"]).default("true"),
+  })
+  .superRefine((env, ctx) => {
+    if (env.STORAGE === "s3" && !env.S3_BUCKET) {
+      ctx.addIssue({ code: "custom", path: ["S3_BUCKET"], message: "S3_BUCKET is required when STORAGE is s3" });
+    }
+  });
 
 export type Env = z.infer<typeof envSchema>;
 

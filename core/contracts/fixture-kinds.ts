@@ -44,7 +44,7 @@ export const FIXTURE_FAMILY: Readonly<Record<FixtureKind, FixtureFamily>> = {
   coil: "point",
 };
 
-/** Plain English names for menus, tables and reports (PRODUCT.md's words). */
+/** Plain English names for menus, tables and reports (the words of docs/product.md). */
 export const FIXTURE_KIND_NAMES: Readonly<Record<FixtureKind, string>> = {
   "open-case": "Open case",
   "island-case": "Island case",

@@ -65,7 +65,7 @@ function problems(input: unknown): string[] {
 }
 
 describe("locator input contract (docs/locator/command-line.md)", () => {
-  it("accepts the issue's example shape, with and without an explicit closing vertex", () => {
+  it("accepts the example shape of docs/locator/command-line.md, with and without an explicit closing vertex", () => {
     expect(problems(good())).toEqual([]);
     const closed = good();
     closed.plan.obstacles![0].polygon = [

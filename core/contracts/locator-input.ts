@@ -3,7 +3,7 @@ import { signedArea } from "../analysis/geometry/polygon-area";
 import { isSelfIntersecting } from "../analysis/geometry/segments";
 
 // The locator's command-line interchange format (docs/locator/command-line.md). Its short names are fixed by the contract
-// because other tools read and write it; inside the product the PRODUCT.md words are used.
+// because other tools read and write it; inside the product the words of docs/product.md are used.
 // Units: metres and seconds, plan origin top-left, x right, y down.
 
 /** Cells the analysis may allocate; about 80 bytes of working arrays per cell keeps this near 120 MB. */

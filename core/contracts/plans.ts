@@ -55,13 +55,6 @@ export const fixturesPutInput = z.object({
 });
 export type FixturesPutInput = z.infer<typeof fixturesPutInput>;
 
-export const fixturesPatchInput = z.object({
-  layoutRevision: revisionSchema,
-  upserts: z.array(z.unknown(), { error: "must be a list of fixtures" }).default([]),
-  deletes: z.array(idSchema, { error: "must be a list of fixture ids" }).default([]),
-});
-export type FixturesPatchInput = z.infer<typeof fixturesPatchInput>;
-
 export const imageVariantSchema = z.enum(["display", "thumb", "original"], {
   error: "must be display, thumb or original",
 });

@@ -6,7 +6,7 @@ export const SWEEP_STATUSES = ["in-progress", "submitted", "reviewed"] as const;
 export const SAMPLE_POINTS = ["grille", "supply", "return", "floor", "high", "ambient"] as const;
 export type SamplePoint = (typeof SAMPLE_POINTS)[number];
 
-/** The product's words for each sample point (PRODUCT.md). */
+/** The product's words for each sample point (docs/product.md). */
 export const SAMPLE_POINT_LABELS: Record<SamplePoint, string> = {
   grille: "Case front / grille",
   supply: "Supply air",

@@ -59,7 +59,7 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "findings.record",
   ],
   technician: ["members.read", "stores.read", "detectors.read", "sweeps.record", "findings.record"],
-  // Engineers read everything (PRODUCT.md), detectors included: their lag figures explain an analysis.
+  // Engineers read everything (docs/product.md), detectors included: their lag figures explain an analysis.
   engineer: [
     "members.read",
     "outbox.read",

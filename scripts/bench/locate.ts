@@ -1,7 +1,7 @@
 // The locator's accuracy benchmark (`npm run bench:locate [-- --json|--detail] [--dir DIR] [family ...]`): runs `locate`
 // on every committed store in scripts/bench/scenarios/, scores it against the truth beside each file,
 // and prints per family and overall figures for the locator and for the naive answer, then the
-// issue's targets with pass/fail. It is a report: the exit code is 0 unless the script itself fails.
+// targets of docs/benchmarks.md with pass/fail. It is a report: the exit code is 0 unless the script itself fails.
 import { readdirSync, readFileSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";

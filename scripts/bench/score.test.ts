@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { checkTargets, median, naiveAnswer, scoreStore, summarise, type Truth } from "./score";
 
-// The scoring rules are the project's own, from the locator issue's "Accuracy" section; the checks
+// The scoring rules are the project's own, written down in docs/benchmarks.md; the checks
 // below are hand-worked on tiny literal stores.
 const oneLeak: Truth = {
   family: "single-fans",

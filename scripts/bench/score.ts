@@ -1,4 +1,4 @@
-// Scoring of the locator benchmark, exactly as the locator issue's "Accuracy" section defines it:
+// Scoring of the locator benchmark, exactly as docs/benchmarks.md defines it:
 // top-1 error = distance from the first suspect spot to the nearest true leak; a leak store with no
 // suspect is a miss; on a no-leak store any suspect at all is a false alarm; in two-leak stores both
 // leaks should be among the first four. Pure functions, so the naive answer is scored the same way.
@@ -33,7 +33,7 @@ export interface StoreScore {
   bothInTop4: boolean | null;
 }
 
-/** How close a suspect must be to count as finding a leak (the issue's 1.5 m). */
+/** How close a suspect must be to count as finding a leak (1.5 m, docs/benchmarks.md). */
 export const FOUND_WITHIN_M = 1.5;
 
 const dist = (a: { x: number; y: number }, b: { x: number; y: number }) => Math.hypot(a.x - b.x, a.y - b.y);
@@ -131,7 +131,7 @@ export interface TargetCheck {
   detail: string;
 }
 
-/** The issue's accuracy targets, judged on the overall summary (null pass: cannot be judged). */
+/** The accuracy targets of docs/benchmarks.md, judged on the overall summary (null pass: cannot be judged). */
 export function checkTargets(locator: Summary, naive: Summary): TargetCheck[] {
   const f = (v: number | null, digits = 2) => (v === null ? "n/a" : Number.isFinite(v) ? v.toFixed(digits) : "inf");
   const pct = (v: number | null) => (v === null ? "n/a" : `${(100 * v).toFixed(0)}%`);

@@ -8,7 +8,7 @@ import { localDateOf, zoneOffsetMs } from "#core/domain/dates/time-zone";
 import { digestMail } from "../mail/digest-mail";
 import { today } from "../api/compliance/today.service";
 
-/** The digest covers what falls due within this many days of the local today (the 7). */
+/** The digest covers what falls due within this many days of the local today (7, docs/product.md). */
 export const DIGEST_DAYS = 7;
 /** Local hour from which the scheduled digest goes out (early, before the day's service calls). */
 export const DIGEST_HOUR = 6;

@@ -125,5 +125,3 @@ export function createWorkerPool<T, R>({ module, size = defaultPoolSize() }: Wor
     },
   };
 }
-
-export type WorkerPool<T, R> = ReturnType<typeof createWorkerPool<T, R>>;

@@ -4,7 +4,7 @@ import { and, eq } from "drizzle-orm";
 import type { Db } from "../db/client";
 import { memberships, membershipStores, users } from "../db/schema/index";
 import { can, isStoreScoped, type Permission, type Role } from "#core/domain/roles";
-import { HttpError, forbidden, notFound } from "../lib/http-error";
+import { HttpError, forbidden } from "../lib/http-error";
 
 export interface AuthContext {
   user: { id: string; email: string; name: string; lengthUnit: "m" | "ft-in" | null; massUnit: "kg" | "lb" | null };
@@ -78,10 +78,4 @@ export function member(req: { auth?: AuthContext }): NonNullable<AuthContext["me
   const m = req.auth?.membership;
   if (!m) throw new HttpError(403, "no_company", "Choose a company first.");
   return m;
-}
-
-/** Store contacts reach only the stores named on their membership; others reach every store of the company. */
-export function assertStoreVisible(req: { auth?: AuthContext }, storeId: string): void {
-  const m = member(req);
-  if (isStoreScoped(m.role) && !m.storeIds.includes(storeId)) throw notFound("That store");
 }

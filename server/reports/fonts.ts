@@ -3,8 +3,9 @@ import { createRequire } from "node:module";
 const require = createRequire(import.meta.url);
 
 /**
- * Atkinson Hyperlegible as full TTFs (the @fontsource files are subsets that lack accented capitals;
- * toolchain.md), embedded by pdfkit as subsets of what the report uses.
+ * Atkinson Hyperlegible as full TTFs: the @fontsource files are subsets (latin has 241 glyphs and no
+ * ą/č/ę; latin-ext lacks A–Z), and pdfkit takes one file per font. Embedded by pdfkit as subsets of
+ * what the report uses.
  */
 export const REPORT_FONTS = {
   regular: require.resolve("@expo-google-fonts/atkinson-hyperlegible/400Regular/AtkinsonHyperlegible_400Regular.ttf"),

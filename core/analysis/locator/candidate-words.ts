@@ -1,7 +1,7 @@
 import type { Fixture, RiskPoint } from "../../contracts/locator-input";
 import type { Nearest } from "./nearest-features";
 
-// Plain-words reason and next check for a suspect spot, in PRODUCT.md's words.
+// Plain-words reason and next check for a suspect spot, in the words of docs/product.md.
 
 const FIXTURE_WORDS: Record<Fixture["kind"], string> = {
   "open-case": "open case",

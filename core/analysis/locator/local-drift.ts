@@ -18,12 +18,6 @@ import { createSourceKernel, type SourceKernel } from "./source-kernel";
  * variance (two more parameters per source). |r| stays the obstacle-aware distance; the direction
  * term a·r uses the straight displacement, which is never longer than that distance.
  */
-export interface DriftChoice {
-  /** Per cell: index into `drifts` of the kernel now in the fields (0 = no drift). */
-  choice: Uint8Array;
-  drifts: Array<[number, number]>;
-}
-
 /** Unit vectors of the eight drift directions tried: east, then every 45° (+y is down the plan). */
 export const DRIFT_DIRECTIONS: ReadonlyArray<[number, number]> = Array.from({ length: 8 }, (_, k) => [
   Math.round(Math.cos((k * Math.PI) / 4) * 1e12) / 1e12,

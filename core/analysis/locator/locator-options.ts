@@ -1,3 +1,4 @@
+import { DEFAULT_CELL_SIZE_M } from "../../contracts/locator-input";
 // Tunable settings of the locator, with the reason for each default. The radius and credibility
 // settings are calibrated on the scenario benchmark (npm run bench:locate), never on single stores.
 
@@ -187,7 +188,7 @@ export interface LocatorOptions {
 export const DEFAULT_LOCATOR_OPTIONS: LocatorOptions = {
   walkSpeedMps: 1,
   responseNodes: 1,
-  cellSize: 0.25,
+  cellSize: DEFAULT_CELL_SIZE_M,
   screeningLengthM: 1.5,
   farScreeningLengthM: 4,
   farShare: 0.3,

@@ -1,5 +1,5 @@
 import { compareDates, type IsoDate } from "../dates/calendar-date";
-import type { ChargeAddition } from "./leak-rate";
+import type { ChargeAddition } from "./charge-addition";
 
 /** Additions that make one leak-rate figure: one leak's top-ups before its repair, or one day's. */
 export interface AdditionGroup {

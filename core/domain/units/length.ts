@@ -19,10 +19,6 @@ export function inchesToMetres(inches: number): number {
   return requireFinite(inches, "inches") * METRES_PER_INCH;
 }
 
-export function metresToInches(metres: number): number {
-  return requireFinite(metres, "metres") / METRES_PER_INCH;
-}
-
 /** A length split into whole feet, whole inches and a reduced fraction of an inch. */
 export interface FeetInches {
   negative: boolean;

@@ -3,7 +3,8 @@
 import { mkdirSync, writeFileSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { buildScenario, FAMILIES } from "./scenario";
+import { buildScenario } from "./scenario";
+import { FAMILIES } from "./store-types";
 
 const here = dirname(fileURLToPath(import.meta.url));
 const usage = "usage: tsx scripts/bench/simulate/generate.ts [storesPerFamily] [--first N] [--out DIR]";

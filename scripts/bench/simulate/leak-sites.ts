@@ -3,8 +3,7 @@
 // returns, evaporator coils; common practice, no published source). A family fixes how many and where.
 import { cellOf, type Grid } from "./grid";
 import type { Random } from "./random";
-import type { Family } from "./scenario";
-import type { FixtureSpec, StoreLayout } from "./store-types";
+import type { Family, FixtureSpec, StoreLayout } from "./store-types";
 
 export interface TrueLeak {
   x: number;

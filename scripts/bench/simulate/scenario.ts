@@ -6,14 +6,11 @@ import { potentialDrift, terminalFlows, type AirTerminal } from "./drift";
 import { createRandom, logUniform, type Random } from "./random";
 import { Sensor } from "./sensor";
 import { generateLayout, round } from "./store-plan";
-import type { FixtureSpec, StoreLayout } from "./store-types";
+import type { Family, FixtureSpec, StoreLayout } from "./store-types";
 import { Technician } from "./technician";
 import { buildOperator, solveSteady, type TransportOperator } from "./transport";
 import { buildWalkMap } from "./walk-path";
 import { chooseLeaks, type TrueLeak } from "./leak-sites";
-
-export const FAMILIES = ["single-fans", "single-still", "no-leak", "bg-zone", "two-leaks", "walkin-fans"] as const;
-export type Family = (typeof FAMILIES)[number];
 
 export interface Scenario {
   input: {

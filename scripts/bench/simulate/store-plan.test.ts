@@ -4,7 +4,7 @@ import { chooseLeaks } from "./leak-sites";
 import { createRandom } from "./random";
 import { generateLayout } from "./store-plan";
 
-// Ranges from the locator issue's "Accuracy" section (stores 40-80 m by 25-50 m, walk-ins with walls
+// Ranges of docs/locator/design-ranges.md (stores 40-80 m by 25-50 m, walk-ins with walls
 // and a door gap); the geometric checks are plain containment and flood-fill connectivity.
 const overlap = (a: Rect, b: Rect) =>
   Math.max(0, Math.min(a.x1, b.x1) - Math.max(a.x0, b.x0)) * Math.max(0, Math.min(a.y1, b.y1) - Math.max(a.y0, b.y0));

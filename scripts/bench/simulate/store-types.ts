@@ -1,3 +1,7 @@
+/** The kinds of simulated store the benchmark scores, each with its own leak story. */
+export const FAMILIES = ["single-fans", "single-still", "no-leak", "bg-zone", "two-leaks", "walkin-fans"] as const;
+export type Family = (typeof FAMILIES)[number];
+
 // The invented store as the simulation sees it: axis-aligned rectangles for bodies and air volumes,
 // plus the sweep legs a technician would follow. The contract's polygons are made from these.
 import type { Rect } from "./grid";

@@ -5,7 +5,7 @@ import { Sensor } from "./sensor";
 import { Technician } from "./technician";
 import { buildWalkMap, findWalkPath } from "./walk-path";
 
-// Walking pattern from the locator issue's "Accuracy" ranges (0.7–1.2 m/s, a stop every 1.2–1.5 m for
+// Walking pattern of docs/locator/design-ranges.md (0.7–1.2 m/s, a stop every 1.2–1.5 m for
 // 1–4 s, tap on arrival, a ~0.6 m re-check after an alarm); the checks are plain arithmetic on them.
 const sensorSettings = {
   dt: 0.05,

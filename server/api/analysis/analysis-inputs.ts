@@ -5,8 +5,8 @@ import { detectors, fixtures, plans, readings, sweeps } from "../../db/schema/in
 import { toLocatorPlan } from "#core/domain/layout/to-locator-input";
 import type { SweepReadingRow } from "#core/domain/fieldmap/sweep-locator-input";
 import { badRequest, notFound } from "../../lib/http-error";
-import { planBounds, rowToFixture } from "../plans/plan-rows";
-import type { SweepRow } from "../sweeps/sweep-access";
+import { planBounds, rowToFixture } from "../../db/plans/plan-rows";
+import type { SweepRow } from "../../access/sweep-access";
 
 export interface AnalysisInputs {
   sweep: SweepRow;

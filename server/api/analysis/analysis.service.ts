@@ -15,8 +15,8 @@ import { nameFixtures } from "#core/domain/fieldmap/name-fixtures";
 import { HttpError } from "../../lib/http-error";
 import { createAnalysisRunner, type AnalysisRunner } from "../../jobs/analysis-runner";
 import { JobError } from "../../jobs/worker-pool";
-import type { Viewer } from "../stores/store-access";
-import { loadVisibleSweep, type SweepRow } from "../sweeps/sweep-access";
+import type { Viewer } from "../../access/store-access";
+import { loadVisibleSweep, type SweepRow } from "../../access/sweep-access";
 import { loadAnalysisInputs, paramsKey } from "./analysis-inputs";
 
 export type AnalysisRow = typeof analyses.$inferSelect;

@@ -9,7 +9,7 @@ import type { FixtureTrends } from "#core/contracts/fixture-trends";
 import { fixtures, sweeps } from "../../db/schema/index";
 import { fixtureLevel } from "#core/domain/fieldmap/fixture-levels";
 import { HttpError, badRequest } from "../../lib/http-error";
-import { loadVisibleStore, type Viewer } from "../stores/store-access";
+import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { ensureAnalysis, rowField } from "./analysis.service";
 
 const YEAR_MS = 365 * 86_400_000;

@@ -25,7 +25,7 @@ import { localDateOf } from "#core/domain/dates/time-zone";
 import { chargeToKg, companyGwpBases, refuseRetired, toSystem } from "../systems/systems.service";
 import { badRequest, conflict, notFound } from "../../lib/http-error";
 import { eventDay } from "../findings/findings.service";
-import { loadVisibleStore, type Viewer } from "../stores/store-access";
+import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { systemDueItems } from "./due-items";
 import { companyRules, statusesOf, systemWithStore } from "./system-records";
 

@@ -17,7 +17,7 @@ import type { LeakRateMethod, RuleProfile } from "#core/domain/compliance/rule-p
 import { systemStatus, type SystemStatus } from "#core/domain/compliance/system-status";
 import { localDateOf } from "#core/domain/dates/time-zone";
 import { getRefrigerant } from "#core/domain/refrigerants/catalogue";
-import { revisionsOf } from "../systems/system-revisions.service";
+import { revisionsOf } from "../systems/revision-rows";
 
 export type SystemRow = typeof systems.$inferSelect;
 export type StoreRow = typeof stores.$inferSelect;

@@ -4,7 +4,7 @@ import type { AppContext } from "../../context";
 import { sendDigest } from "../../jobs/digest";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
-import { loadVisibleStore } from "../stores/store-access";
+import { loadVisibleStore } from "../../access/store-access";
 import { today } from "./today.service";
 
 const todayQuery = z.object({ storeId: z.uuid("must be a valid id").optional() });

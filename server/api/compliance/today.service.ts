@@ -7,7 +7,7 @@ import { dueStatus } from "#core/domain/compliance/deadlines";
 import { localDateOf } from "#core/domain/dates/time-zone";
 import { isStoreScoped } from "#core/domain/roles";
 import { checkStatus } from "../detectors/detectors.service";
-import { visibleStores, type Viewer } from "../stores/store-access";
+import { visibleStores, type Viewer } from "../../access/store-access";
 import { systemDueItems } from "./due-items";
 import { companyRules, statusesOf } from "./system-records";
 

@@ -68,7 +68,7 @@ describe("detectors", () => {
     expect((await (await as("engineer")).get("/api/detectors")).status).toBe(200);
   });
 
-  it("engineers read the detectors (PRODUCT.md: engineers read everything); store contacts read none", async () => {
+  it("engineers read the detectors (docs/product.md: engineers read everything); store contacts read none", async () => {
     const made = await (await as("lead-tech")).post("/api/detectors", { name: "Bench IR", principle: "infrared" });
     const engineer = await as("engineer");
     const list = await engineer.get("/api/detectors");

@@ -5,8 +5,9 @@ import { findingPhotos } from "../../db/schema/index";
 import { HttpError } from "../../lib/http-error";
 import { checkPlanImageHeader } from "../plans/image-intake";
 import { ImageDecodeError } from "../plans/image-decoder";
-import { planImageDecoder, planStorage } from "../plans/plan-resources";
-import type { Viewer } from "../stores/store-access";
+import { planImageDecoder } from "../plans/plan-resources";
+import { uploadsStorage } from "../../storage/uploads-storage";
+import type { Viewer } from "../../access/store-access";
 import { loadFindingRow } from "./findings.service";
 
 /** Phone photos are a few MB; the pixel budget guards against decompression bombs as for plans. */
@@ -70,7 +71,7 @@ export async function addFindingPhoto(
   const prefix = `findings/${viewer.companyId}/${row.id}/${id}`;
   const key = `${prefix}/photo.${EXT[header.mime]}`;
   const thumbKey = `${prefix}/thumb.${EXT[header.mime]}`;
-  const storage = planStorage(ctx);
+  const storage = uploadsStorage(ctx);
   await storage.put(key, Buffer.from(decoded.display));
   await storage.put(thumbKey, Buffer.from(decoded.thumb));
   try {
@@ -97,7 +98,7 @@ export async function readFindingPhoto(
     .from(findingPhotos)
     .where(and(eq(findingPhotos.id, photoId), eq(findingPhotos.findingId, row.id)));
   if (!p) throw new HttpError(404, "not_found", "That photo was not found.");
-  const data = await planStorage(ctx).get(variant === "thumb" ? p.thumbKey : p.key);
+  const data = await uploadsStorage(ctx).get(variant === "thumb" ? p.thumbKey : p.key);
   if (!data) throw new HttpError(404, "not_found", "That photo's file is missing.");
   return { mime: p.mime, data };
 }

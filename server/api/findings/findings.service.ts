@@ -11,7 +11,7 @@ import { ACTION_PERMISSION, transition, type LifecycleEvent } from "#core/domain
 import { can } from "#core/domain/roles";
 import { badRequest, conflict, forbidden, notFound } from "../../lib/http-error";
 import { companyRules, statusesOf, type StoreRow, type SystemWithStatus } from "../compliance/system-records";
-import { loadVisibleStore, type Viewer } from "../stores/store-access";
+import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { toFindingDetails, type FindingRow } from "./finding-view";
 
 type CreateInput = z.output<typeof createFindingInput>;

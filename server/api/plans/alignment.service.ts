@@ -11,7 +11,7 @@ import {
 import { fixtures, plans } from "../../db/schema/index";
 import { transformFixture } from "#core/domain/plans/transform-fixture";
 import { badRequest, HttpError } from "../../lib/http-error";
-import type { Viewer } from "../stores/store-access";
+import type { Viewer } from "../../access/store-access";
 import {
   assertCalibrated,
   assertCurrentVersion,
@@ -19,9 +19,9 @@ import {
   fixtureCounts,
   loadVisiblePlan,
   lockPlan,
-} from "./plan-access";
-import { fixtureToRow, rowToFixture, toPlan } from "./plan-rows";
-import { insertFixtureRows, loadFixtureRows } from "./plan-versions";
+} from "../../access/plan-access";
+import { fixtureToRow, rowToFixture, toPlan } from "../../db/plans/plan-rows";
+import { insertFixtureRows, loadFixtureRows } from "../../db/plans/plan-versions";
 
 function fromTwoPoints(input: AlignmentInput): Similarity {
   const [p1, p2] = input.previous;

@@ -5,18 +5,18 @@ import { toMetres } from "#core/analysis/geometry/units";
 import { fixtures, plans } from "../../db/schema/index";
 import { transformFixture } from "#core/domain/plans/transform-fixture";
 import { badRequest, HttpError } from "../../lib/http-error";
-import type { Viewer } from "../stores/store-access";
+import type { Viewer } from "../../access/store-access";
 import {
   assertCurrentVersion,
   assertRevision,
   fixtureCounts,
   loadVisiblePlan,
   lockPlan,
-  type DbOrTx,
-} from "./plan-access";
-import { fixtureToRow, rowToFixture, toPlan, type PlanRow } from "./plan-rows";
+} from "../../access/plan-access";
+import type { DbOrTx } from "../../db/tx";
+import { fixtureToRow, rowToFixture, toPlan, type PlanRow } from "../../db/plans/plan-rows";
 import { planHasSweeps } from "./plan-sweeps";
-import { addPlanVersion, insertFixtureRows, loadFixtureRows } from "./plan-versions";
+import { addPlanVersion, insertFixtureRows, loadFixtureRows } from "../../db/plans/plan-versions";
 
 /** A drawn line shorter than this is too imprecise to calibrate from (a few pixels of error). */
 export const MIN_CALIBRATION_PIXELS = 10;

@@ -1,21 +1,21 @@
 import { and, eq, inArray, sql } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { validateFixtureList, type FieldError, type Fixture } from "#core/contracts/fixtures";
-import type { FixturesPatchInput, FixturesPutInput, FixturesResponse } from "#core/contracts/plans";
+import type { FixturesPutInput, FixturesResponse } from "#core/contracts/plans";
 import { fixtures, plans, systems } from "../../db/schema/index";
 import { describeFields } from "../../lib/zod-fields";
 import { HttpError } from "../../lib/http-error";
-import type { Viewer } from "../stores/store-access";
+import type { Viewer } from "../../access/store-access";
 import {
   assertCalibrated,
   assertCurrentVersion,
   assertRevision,
   loadVisiblePlan,
   lockPlan,
-  type DbOrTx,
-} from "./plan-access";
-import { fixtureToRow, planBounds, rowToFixture, type PlanRow } from "./plan-rows";
-import { insertFixtureRows, loadFixtureRows } from "./plan-versions";
+} from "../../access/plan-access";
+import type { DbOrTx } from "../../db/tx";
+import { fixtureToRow, planBounds, rowToFixture, type PlanRow } from "../../db/plans/plan-rows";
+import { insertFixtureRows, loadFixtureRows } from "../../db/plans/plan-versions";
 
 function fieldErrors(errors: FieldError[]): never {
   const fields: Record<string, string> = {};
@@ -88,49 +88,5 @@ export async function putFixtures(
     await checkSystems(tx, plan, checked.fixtures, "fixtures");
     const row = await writeAll(tx, plan, checked.fixtures);
     return respond(row, checked.fixtures);
-  });
-}
-
-/** Applies a change set (upserts by id, deletes by id) under the same revision check. */
-export async function patchFixtures(
-  ctx: AppContext,
-  viewer: Viewer,
-  planId: string,
-  input: FixturesPatchInput,
-): Promise<FixturesResponse> {
-  await loadVisiblePlan(ctx, viewer, planId);
-  return ctx.db.transaction(async (tx) => {
-    const plan = await lockForSave(tx, planId, input.layoutRevision);
-    const checked = validateFixtureList(input.upserts, planBounds(plan)!, "upserts");
-    if (!checked.ok) fieldErrors(checked.errors);
-    await checkSystems(tx, plan, checked.fixtures, "upserts");
-    const current = (await loadFixtureRows(tx, plan.id)).map(rowToFixture);
-    const byId = new Map(current.map((f, i) => [f.id, i]));
-    const missing: FieldError[] = [];
-    input.deletes.forEach((id, i) => {
-      if (!byId.has(id)) missing.push({ path: `deletes.${i}`, message: "is not a fixture of this plan" });
-    });
-    const upserted = new Set(checked.fixtures.map((f) => f.id));
-    input.deletes.forEach((id, i) => {
-      if (upserted.has(id))
-        missing.push({ path: `deletes.${i}`, message: "is also in upserts; send a fixture in one list only" });
-    });
-    if (missing.length) fieldErrors(missing);
-    const next = [...current];
-    for (const f of checked.fixtures) {
-      const at = byId.get(f.id);
-      if (at === undefined) next.push(f);
-      else next[at] = f;
-    }
-    const gone = new Set(input.deletes);
-    const row = await writeAll(
-      tx,
-      plan,
-      next.filter((f) => !gone.has(f.id)),
-    );
-    return respond(
-      row,
-      next.filter((f) => !gone.has(f.id)),
-    );
   });
 }

@@ -1,10 +1,8 @@
 import type { AppContext, PlanImageLimits } from "../../context";
-import type { BlobStorage } from "../../storage/blob-storage";
-import { createDiskStorage } from "../../storage/disk-storage";
 import { createImageDecoder, type ImageDecoder } from "./image-decoder";
 
 export const DEFAULT_PLAN_IMAGE_LIMITS: PlanImageLimits = {
-  maxBytes: 25 * 1024 * 1024, // the "up to 25 MB"
+  maxBytes: 25 * 1024 * 1024, // "up to 25 MB" (docs/product.md)
   // 40 MP decodes to 160 MB of RGBA in jimp: large enough for a 300-dpi A0 scan (≈ 14000 × 9900
   // would not fit, a 200-dpi one does), small enough that a bomb cannot exhaust memory.
   maxPixels: 40_000_000,
@@ -14,14 +12,6 @@ export const DEFAULT_PLAN_IMAGE_LIMITS: PlanImageLimits = {
 
 export function planImageLimits(ctx: AppContext): PlanImageLimits {
   return { ...DEFAULT_PLAN_IMAGE_LIMITS, ...ctx.config.planImageLimits };
-}
-
-const storages = new WeakMap<AppContext, BlobStorage>();
-export function planStorage(ctx: AppContext): BlobStorage {
-  if (ctx.storage) return ctx.storage;
-  let s = storages.get(ctx);
-  if (!s) storages.set(ctx, (s = createDiskStorage(ctx.config.uploadsDir)));
-  return s;
 }
 
 // One decoder worker per process: decoding is CPU-bound and the machine has two cores.

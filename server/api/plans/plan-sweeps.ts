@@ -1,6 +1,6 @@
 import { eq } from "drizzle-orm";
 import { sweeps } from "../../db/schema/index";
-import type { DbOrTx } from "./plan-access";
+import type { DbOrTx } from "../../db/tx";
 
 /**
  * Whether any sweep was drawn on this plan version. The one place that decides whether a

@@ -3,14 +3,15 @@ import type { AppContext } from "../../context";
 import type { BlankPlanInput, Plan } from "#core/contracts/plans";
 import { METRES_PER_FOOT } from "#core/analysis/geometry/units";
 import { badRequest, HttpError } from "../../lib/http-error";
-import { loadVisibleStore, type Viewer } from "../stores/store-access";
+import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { BLANK_PLAN_MAX_M } from "#core/contracts/plans";
 import { checkPlanImageHeader } from "./image-intake";
 import { ImageDecodeError } from "./image-decoder";
-import { fixtureCounts } from "./plan-access";
-import { planImageDecoder, planImageLimits, planStorage } from "./plan-resources";
-import { toPlan } from "./plan-rows";
-import { addPlanVersion } from "./plan-versions";
+import { fixtureCounts } from "../../access/plan-access";
+import { planImageDecoder, planImageLimits } from "./plan-resources";
+import { uploadsStorage } from "../../storage/uploads-storage";
+import { toPlan } from "../../db/plans/plan-rows";
+import { addPlanVersion } from "../../db/plans/plan-versions";
 
 export interface UploadedFile {
   buffer: Buffer;
@@ -66,7 +67,7 @@ export async function createImagePlan(
     display: `${prefix}/display.${ext}`,
     thumb: `${prefix}/thumb.${ext}`,
   };
-  const storage = planStorage(ctx);
+  const storage = uploadsStorage(ctx);
   const written: string[] = [];
   try {
     for (const [key, bytes] of [

@@ -5,17 +5,16 @@ import {
   alignmentInput,
   blankPlanInput,
   calibrationInput,
-  fixturesPatchInput,
   fixturesPutInput,
   imageVariantSchema,
 } from "#core/contracts/plans";
 import { member, requireMember } from "../../middleware/auth";
 import { singleUpload } from "../../middleware/upload";
 import { validate } from "../../middleware/validate";
-import { loadVisibleStore } from "../stores/store-access";
+import { loadVisibleStore } from "../../access/store-access";
 import { setAlignment } from "./alignment.service";
 import { calibratePlan } from "./calibration.service";
-import { getFixtures, patchFixtures, putFixtures } from "./fixtures.service";
+import { getFixtures, putFixtures } from "./fixtures.service";
 import { planImageLimits } from "./plan-resources";
 import { getPlan, listPlans, readPlanImage } from "./plans.service";
 import { createBlankPlan, createImagePlan } from "./plan-upload.service";
@@ -117,16 +116,6 @@ export function plansRouter(ctx: AppContext): Router {
     validate(fixturesPutInput),
     async (req, res) => {
       res.json(await putFixtures(ctx, member(req), res.locals.params.id, req.body));
-    },
-  );
-
-  router.patch(
-    "/plans/:id/fixtures",
-    requireMember("plans.edit"),
-    validate(idParam, "params"),
-    validate(fixturesPatchInput),
-    async (req, res) => {
-      res.json(await patchFixtures(ctx, member(req), res.locals.params.id, req.body));
     },
   );
 

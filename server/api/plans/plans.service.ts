@@ -3,10 +3,10 @@ import type { AppContext } from "../../context";
 import type { ImageVariant, Plan } from "#core/contracts/plans";
 import { plans } from "../../db/schema/index";
 import { HttpError, notFound } from "../../lib/http-error";
-import { loadVisibleStore, type Viewer } from "../stores/store-access";
-import { fixtureCounts, loadVisiblePlan } from "./plan-access";
-import { planStorage } from "./plan-resources";
-import { toPlan } from "./plan-rows";
+import { loadVisibleStore, type Viewer } from "../../access/store-access";
+import { fixtureCounts, loadVisiblePlan } from "../../access/plan-access";
+import { uploadsStorage } from "../../storage/uploads-storage";
+import { toPlan } from "../../db/plans/plan-rows";
 
 /** Every version of the store's plan, newest first. */
 export async function listPlans(ctx: AppContext, viewer: Viewer, storeId: string): Promise<Plan[]> {
@@ -34,7 +34,7 @@ export async function readPlanImage(
   const row = await loadVisiblePlan(ctx, viewer, planId);
   const key = variant === "original" ? row.originalKey : variant === "thumb" ? row.thumbKey : row.displayKey;
   if (row.source !== "image" || !key) throw new HttpError(404, "not_found", "A blank plan has no image.");
-  const data = await planStorage(ctx).get(key);
+  const data = await uploadsStorage(ctx).get(key);
   if (!data) throw notFound("That plan image");
   return { mime: row.originalMime ?? "application/octet-stream", data };
 }

@@ -26,8 +26,8 @@ import { findRefrigerant } from "#core/domain/refrigerants/catalogue";
 import { cautionsFor, type Caution } from "#core/domain/safety/cautions";
 import { formatLength, type LengthPreference } from "#core/domain/units/format-units";
 import { HttpError } from "../../lib/http-error";
-import type { Viewer } from "../stores/store-access";
-import { loadVisibleSweep, type SweepRow } from "../sweeps/sweep-access";
+import type { Viewer } from "../../access/store-access";
+import { loadVisibleSweep, type SweepRow } from "../../access/sweep-access";
 import { ensureAnalysis, rowField, type AnalysisRow } from "../analysis/analysis.service";
 
 export interface ReportFacts {

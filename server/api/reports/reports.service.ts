@@ -9,9 +9,9 @@ import type { LengthPreference } from "#core/domain/units/format-units";
 import { badRequest } from "../../lib/http-error";
 import { createReportRunner } from "../../jobs/report-runner";
 import type { ReportJob } from "../../jobs/report.worker";
-import { planStorage } from "../plans/plan-resources";
-import type { Viewer } from "../stores/store-access";
-import { loadVisibleSweep } from "../sweeps/sweep-access";
+import { uploadsStorage } from "../../storage/uploads-storage";
+import type { Viewer } from "../../access/store-access";
+import { loadVisibleSweep } from "../../access/sweep-access";
 import { loadReportFacts, type ReportFacts } from "./report-facts";
 
 const slug = (s: string) =>
@@ -31,7 +31,7 @@ export async function buildReportPdf(ctx: AppContext, f: ReportFacts): Promise<B
   let map: ReportJob["map"] = null;
   if (f.field) {
     const scale = createConcentrationScale({ maxPpm: f.maxPpm, log: true });
-    const planImage = f.planImage.displayKey ? await planStorage(ctx).get(f.planImage.displayKey) : null;
+    const planImage = f.planImage.displayKey ? await uploadsStorage(ctx).get(f.planImage.displayKey) : null;
     map = {
       planImage: planImage ? new Uint8Array(planImage) : null,
       widthM: f.planImage.widthM,

@@ -1,11 +1,11 @@
 import { desc, eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { plans } from "../../db/schema/index";
-import type { Viewer } from "./store-access";
-import { loadVisibleStore } from "./store-access";
+import type { Viewer } from "../../access/store-access";
+import { loadVisibleStore } from "../../access/store-access";
 import { toStore } from "./stores.service";
-import { fixtureCounts } from "../plans/plan-access";
-import { toPlan } from "../plans/plan-rows";
+import { fixtureCounts } from "../../access/plan-access";
+import { toPlan } from "../../db/plans/plan-rows";
 import { listSystems } from "../systems/systems.service";
 
 /** The store page: the store, its systems, the current plan and a summary of every plan version. */

@@ -2,7 +2,7 @@ import { and, asc, desc, eq, ilike, isNull, or, sql } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import type { Store, StoreInput, StoreListQuery, StoreUpdateInput } from "#core/contracts/stores";
 import { stores } from "../../db/schema/index";
-import { loadVisibleStore, visibleStores, type Viewer } from "./store-access";
+import { loadVisibleStore, visibleStores, type Viewer } from "../../access/store-access";
 
 type StoreRow = typeof stores.$inferSelect;
 

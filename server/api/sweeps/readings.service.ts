@@ -1,5 +1,6 @@
 import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import type { AppContext } from "../../context";
+import type { Tx } from "../../db/tx";
 import { plans, readingAudit, readings, sweeps, users, type ReadingValues } from "../../db/schema/index";
 import {
   readingInput,
@@ -12,11 +13,10 @@ import {
 import { readingProblems, type ReadingContext } from "#core/domain/sweeps/reading-checks";
 import { HttpError, notFound } from "../../lib/http-error";
 import { zodFields } from "../../lib/zod-fields";
-import type { Viewer } from "../stores/store-access";
-import { loadVisibleSweep, type SweepRow } from "./sweep-access";
+import type { Viewer } from "../../access/store-access";
+import { loadVisibleSweep, type SweepRow } from "../../access/sweep-access";
 
 type ReadingRow = typeof readings.$inferSelect;
-type Tx = Parameters<Parameters<AppContext["db"]["transaction"]>[0]>[0];
 
 function toReading(r: ReadingRow): Reading {
   return {

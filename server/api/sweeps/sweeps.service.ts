@@ -6,8 +6,8 @@ import { DEVICE_CLOCK_TOLERANCE_MS, SWEEP_UPLOAD_MAX_AGE_MS } from "#core/contra
 import { startWarnings } from "#core/domain/sweeps/start-warnings";
 import { badRequest, conflict, HttpError } from "../../lib/http-error";
 import { checkStatus } from "../detectors/detectors.service";
-import { loadVisibleStore, type Viewer } from "../stores/store-access";
-import { loadVisibleSweep, type SweepRow } from "./sweep-access";
+import { loadVisibleStore, type Viewer } from "../../access/store-access";
+import { loadVisibleSweep, type SweepRow } from "../../access/sweep-access";
 
 type Parsed = Omit<CreateSweepInput, "systemIds"> & { systemIds: string[] };
 

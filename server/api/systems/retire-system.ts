@@ -2,7 +2,7 @@ import { eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import type { SystemRemoval } from "#core/contracts/systems";
 import { complianceAudit, systemRevisions, systems } from "../../db/schema/index";
-import type { Viewer } from "../stores/store-access";
+import type { Viewer } from "../../access/store-access";
 import { hasRecords } from "./system-has-records";
 import { companyGwpBases, loadSystem, refuseRetired, toSystem } from "./systems.service";
 

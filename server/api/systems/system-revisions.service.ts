@@ -1,11 +1,12 @@
-import { asc, eq, inArray } from "drizzle-orm";
+import { asc, eq } from "drizzle-orm";
+import { orderedRevisions, revisionsOf } from "./revision-rows";
 import type { AppContext } from "../../context";
 import type { RevisionInput, System } from "#core/contracts/systems";
 import { complianceAudit, systemRevisions, systems, users } from "../../db/schema/index";
 import { compareDates, type IsoDate } from "#core/domain/dates/calendar-date";
 import { badRequest } from "../../lib/http-error";
 import { eventDay } from "../findings/findings.service";
-import { loadVisibleStore, type Viewer } from "../stores/store-access";
+import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { chargeToKg, companyGwpBases, knownRefrigerant, loadSystem, refuseRetired, toSystem } from "./systems.service";
 
 type RevisionRow = typeof systemRevisions.$inferSelect;
@@ -14,30 +15,12 @@ type Facts = Pick<
   "refrigerantId" | "fullChargeKg" | "applianceType" | "automaticLeakDetection" | "inServiceOn"
 >;
 
-/** Revisions in the order they take effect (same day: the later recorded wins). */
-export function orderedRevisions<T extends { effectiveFrom: string; recordedAt: Date }>(rows: readonly T[]): T[] {
-  return [...rows].sort(
-    (a, b) => compareDates(a.effectiveFrom, b.effectiveFrom) || a.recordedAt.getTime() - b.recordedAt.getTime(),
-  );
-}
-
 /** The revision in force on a date: the latest effective on or before it, else the first. */
 function inForce(rows: readonly RevisionRow[], date: IsoDate): RevisionRow | null {
   const list = orderedRevisions(rows);
   let found = list[0] ?? null;
   for (const r of list) if (compareDates(r.effectiveFrom, date) <= 0) found = r;
   return found;
-}
-
-/** Revisions of several systems, in effect order, one query. */
-export async function revisionsOf(ctx: AppContext, systemIds: readonly string[]) {
-  if (systemIds.length === 0) return [];
-  return orderedRevisions(
-    await ctx.db
-      .select()
-      .from(systemRevisions)
-      .where(inArray(systemRevisions.systemId, [...systemIds])),
-  );
 }
 
 export async function listRevisions(ctx: AppContext, viewer: Viewer, systemId: string) {

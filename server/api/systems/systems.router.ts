@@ -5,7 +5,7 @@ import { retireInput, revisionInput, systemInput, systemListQuery, systemUpdateI
 import { REFRIGERANTS } from "#core/domain/refrigerants/catalogue";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
-import { refrigerantCautions, summarizeRefrigerant } from "./refrigerant-summary";
+import { refrigerantCautions, summarizeRefrigerant } from "#core/domain/refrigerants/refrigerant-summary";
 import { removeSystem } from "./retire-system";
 import { addRevision, listRevisions } from "./system-revisions.service";
 import { companyGwpBases, createSystem, getSystem, listSystems, updateSystem } from "./systems.service";

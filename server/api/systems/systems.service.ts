@@ -7,11 +7,15 @@ import { findRefrigerant } from "#core/domain/refrigerants/catalogue";
 import type { Refrigerant } from "#core/domain/refrigerants/types";
 import { KG_PER_POUND } from "#core/domain/units/mass";
 import { badRequest, conflict, HttpError, notFound } from "../../lib/http-error";
+import { loadVisibleStore, type Viewer } from "../../access/store-access";
+import { gwpBasisStatement } from "#core/domain/compliance/co2e";
+import {
+  refrigerantCautions,
+  summarizeRefrigerant,
+  type GwpChoice,
+} from "#core/domain/refrigerants/refrigerant-summary";
 import { eventDay } from "../findings/findings.service";
 import { hasRecords } from "./system-has-records";
-import { loadVisibleStore, type Viewer } from "../stores/store-access";
-import { gwpBasisStatement } from "#core/domain/compliance/co2e";
-import { refrigerantCautions, summarizeRefrigerant, type GwpChoice } from "./refrigerant-summary";
 
 type SystemRow = typeof systems.$inferSelect;
 type Bases = GwpChoice;

@@ -1,5 +1,5 @@
 import { eq } from "drizzle-orm";
-import type { DbOrTx } from "../../api/plans/plan-access";
+import type { DbOrTx } from "../tx";
 import { addDays } from "#core/domain/dates/calendar-date";
 import { localDateOf } from "#core/domain/dates/time-zone";
 import type { Role } from "#core/domain/roles";

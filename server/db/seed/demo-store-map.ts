@@ -2,10 +2,10 @@ import { randomUUID } from "node:crypto";
 import type { AppContext } from "../../context";
 import { validateFixtureList } from "#core/contracts/fixtures";
 import { KG_PER_POUND } from "#core/domain/units/mass";
-import { planStorage } from "../../api/plans/plan-resources";
-import { fixtureToRow } from "../../api/plans/plan-rows";
-import type { DbOrTx } from "../../api/plans/plan-access";
-import { addPlanVersion, insertFixtureRows } from "../../api/plans/plan-versions";
+import { uploadsStorage } from "../../storage/uploads-storage";
+import { fixtureToRow } from "../plans/plan-rows";
+import type { DbOrTx } from "../tx";
+import { addPlanVersion, insertFixtureRows } from "../plans/plan-versions";
 import { systems } from "../schema/index";
 import { DEMO_PLAN, DEMO_SYSTEMS, demoFixtures, type DemoSystemKey } from "./demo-layout";
 import { drawDemoPlan } from "./demo-plan-image";
@@ -47,7 +47,7 @@ export async function seedDemoLayout(
   const planId = randomUUID();
   const prefix = `plans/${ids.companyId}/${planId}`;
   const keys = { original: `${prefix}/original.png`, display: `${prefix}/display.png`, thumb: `${prefix}/thumb.png` };
-  const storage = planStorage(ctx);
+  const storage = uploadsStorage(ctx);
   const written: string[] = [];
   try {
     for (const [key, data] of [

@@ -5,7 +5,7 @@
  */
 import { randomUUID } from "node:crypto";
 import { and, eq } from "drizzle-orm";
-import type { DbOrTx } from "../../api/plans/plan-access";
+import type { DbOrTx } from "../tx";
 import { detectors, findingEvents, findings, fixtures, plans, readings, sweeps, systems } from "../schema/index";
 import { DEMO_LEAK_STORY, type DemoMonth } from "./demo-story";
 import { mulberry32, simulateDemoWalk } from "./demo-walk";

@@ -12,9 +12,9 @@ describe("error page", () => {
     const consoleError = vi.spyOn(console, "error").mockImplementation(() => {});
     const router = createMemoryRouter([{ path: "/", Component: Broken, ErrorBoundary: RootErrorPage }]);
     const { container } = render(<RouterProvider router={router} />);
-    expect(await screen.findByRole("heading", { name: "Something went wrong" })).toBeTruthy();
+    expect(await screen.findByRole("heading", { name: "Something went wrong" })).toBeVisible();
     expect(container.textContent).not.toMatch(/memberships|parser\.js|node_modules/);
-    expect(screen.getByRole("button", { name: "Reload the page" })).toBeTruthy();
+    expect(screen.getByRole("button", { name: "Reload the page" })).toBeVisible();
     consoleError.mockRestore();
   });
 });

@@ -29,8 +29,8 @@ describe("stores page", () => {
       },
     });
     renderApp("/");
-    expect(await screen.findByText("Maple Street Market")).toBeTruthy();
-    expect(screen.getByText("14 Maple Street, Brookfield")).toBeTruthy();
+    expect(await screen.findByText("Maple Street Market")).toBeVisible();
+    expect(screen.getByText("14 Maple Street, Brookfield")).toBeVisible();
     expect(screen.queryByText("Old Quay Depot")).toBeNull();
   });
 
@@ -40,8 +40,8 @@ describe("stores page", () => {
       "GET /api/stores": { body: { stores: [] } },
     });
     renderApp("/");
-    expect(await screen.findByText("No stores yet")).toBeTruthy();
-    expect(screen.getByText(/No store has been shared with you/)).toBeTruthy();
+    expect(await screen.findByText("No stores yet")).toBeVisible();
+    expect(screen.getByText(/No store has been shared with you/)).toBeVisible();
   });
 
   it("sends someone whose session ran out to sign-in, to come back here", async () => {
@@ -55,7 +55,7 @@ describe("stores page", () => {
     });
     // Owners land on Today at "/": their store list lives at /stores.
     const { router } = renderApp("/stores?view=all");
-    expect(await screen.findByRole("heading", { name: "Sign in" })).toBeTruthy();
+    expect(await screen.findByRole("heading", { name: "Sign in" })).toBeVisible();
     expect(router.state.location.search).toBe(`?next=${encodeURIComponent("/stores?view=all")}`);
   });
 });

@@ -47,7 +47,7 @@ describe("outbox page", () => {
   it("is not there when the installation sends real mail", async () => {
     const calls = stubFetch({ "GET /api/auth/session": { body: sessionFor("owner", { outboxEnabled: false }) } });
     renderApp("/outbox");
-    expect(await screen.findByRole("heading", { name: "Page not found" })).toBeTruthy();
+    expect(await screen.findByRole("heading", { name: "Page not found" })).toBeVisible();
     expect(calls.some((c) => c.path === "/api/outbox")).toBe(false);
   });
 });

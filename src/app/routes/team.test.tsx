@@ -49,8 +49,8 @@ describe("team page", () => {
     renderApp("/team");
     const form = await screen.findByRole("form", { name: "Invite a member" });
     fireEvent.change(within(form).getByLabelText("Role"), { target: { value: "store-contact" } });
-    expect(await within(form).findByLabelText("Maple Street Market")).toBeTruthy();
-    expect(screen.getByRole("button", { name: "Revoke the invitation to sam.reyes@northfield.example" })).toBeTruthy();
+    expect(await within(form).findByLabelText("Maple Street Market")).toBeVisible();
+    expect(screen.getByRole("button", { name: "Revoke the invitation to sam.reyes@northfield.example" })).toBeVisible();
     expect(screen.getByRole("table", { name: "Pending invitations" }).textContent).toContain("All stores");
   });
 
@@ -61,7 +61,7 @@ describe("team page", () => {
       "GET /api/stores": { body: { stores: [STORE] } },
     });
     renderApp("/team");
-    expect(await screen.findByText("ines.varga@northfield.example")).toBeTruthy();
+    expect(await screen.findByText("ines.varga@northfield.example")).toBeVisible();
     expect(screen.queryByRole("form", { name: "Invite a member" })).toBeNull();
     expect(screen.queryByRole("button", { name: /Revoke|Remove|Change role/ })).toBeNull();
   });

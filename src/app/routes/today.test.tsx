@@ -97,7 +97,7 @@ describe("Today page", () => {
         .getByRole("link", { name: /Repair/ })
         .getAttribute("href"),
     ).toBe(`/systems/${SYS}`);
-    expect(within(due).getByText(/Rule: 40 CFR 84 subpart C/)).toBeTruthy();
+    expect(within(due).getByText(/Rule: 40 CFR 84 subpart C/)).toBeVisible();
     expect(screen.getByRole("link", { name: "37.6 %" }).getAttribute("href")).toBe(`/systems/${SYS}`);
     expect(screen.getByRole("link", { name: /Brazed joint on Rack A/ }).getAttribute("href")).toBe(`/findings/${FIND}`);
     // The rule data's source tags read as citations: "[M]" as unconfirmed, "[S:R4]" as 40 CFR 84 subpart C.
@@ -106,7 +106,7 @@ describe("Today page", () => {
     expect(document.body.textContent).not.toMatch(/\[(S:|M\])/);
     fireEvent.change(screen.getByLabelText("Store"), { target: { value: B } });
     expect(within(screen.getByRole("table", { name: "Due and overdue" })).getAllByRole("row")).toHaveLength(2);
-    expect(screen.getByText("No open findings.")).toBeTruthy();
+    expect(screen.getByText("No open findings.")).toBeVisible();
     // Engineers may not send the digest by hand; the button is the owner's.
     expect(screen.queryByRole("button", { name: "Send today's digest now" })).toBeNull();
   });
@@ -116,6 +116,6 @@ describe("Today page", () => {
     const { router } = renderApp("/");
     await screen.findByRole("heading", { name: "Today" }, { timeout: 5000 });
     expect(router.state.location.pathname).toBe("/today");
-    expect(screen.getByRole("button", { name: "Send today's digest now" })).toBeTruthy();
+    expect(screen.getByRole("button", { name: "Send today's digest now" })).toBeVisible();
   });
 });

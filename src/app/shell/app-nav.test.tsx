@@ -12,7 +12,7 @@ async function navLabels() {
     .map((link) => link.textContent);
 }
 
-// Expected menus follow the role table in PRODUCT.md and the grants in core/domain/roles.ts.
+// Expected menus follow the role table in docs/product.md and the grants in core/domain/roles.ts.
 const cases: { role: Role; outboxEnabled: boolean; expected: string[] }[] = [
   {
     role: "owner",
@@ -24,7 +24,7 @@ const cases: { role: Role; outboxEnabled: boolean; expected: string[] }[] = [
     outboxEnabled: false,
     expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"],
   },
-  // Engineers read everything (PRODUCT.md), detectors included.
+  // Engineers read everything (docs/product.md), detectors included.
   {
     role: "engineer",
     outboxEnabled: true,
@@ -85,14 +85,14 @@ describe("navigation by role", () => {
       "GET /api/stores": { body: { stores: [] } },
     });
     renderApp("/");
-    expect(await screen.findByText("Northfield Cold Care")).toBeTruthy();
+    expect(await screen.findByText("Northfield Cold Care")).toBeVisible();
     expect(screen.queryByLabelText("Company")).toBeNull();
   });
 
   it("hides the Team page itself from a store contact who types its address", async () => {
     const calls = stubFetch({ "GET /api/auth/session": { body: sessionFor("store-contact") } });
     renderApp("/team");
-    expect(await screen.findByRole("heading", { name: "Page not found" })).toBeTruthy();
+    expect(await screen.findByRole("heading", { name: "Page not found" })).toBeVisible();
     expect(calls.some((c) => c.path === "/api/team")).toBe(false);
   });
 });
@@ -118,7 +118,7 @@ describe("route guard", () => {
       },
     });
     const { router } = renderApp("/settings");
-    expect(await screen.findByRole("heading", { name: "Sign in" })).toBeTruthy();
+    expect(await screen.findByRole("heading", { name: "Sign in" })).toBeVisible();
     expect(router.state.location.pathname).toBe("/sign-in");
     expect(router.state.location.search).toBe("?next=%2Fsettings");
 
@@ -126,7 +126,7 @@ describe("route guard", () => {
     fireEvent.change(screen.getByLabelText("Password"), { target: { value: "correct horse battery" } });
     fireEvent.click(screen.getByRole("button", { name: "Sign in" }));
 
-    expect(await screen.findByRole("heading", { name: "Company settings" })).toBeTruthy();
+    expect(await screen.findByRole("heading", { name: "Company settings" })).toBeVisible();
     expect(router.state.location.pathname).toBe("/settings");
   });
 
@@ -143,7 +143,7 @@ describe("route guard", () => {
     });
     const { router } = renderApp("/team");
     fireEvent.click(await screen.findByRole("button", { name: "Sign out" }));
-    expect(await screen.findByRole("heading", { name: "Sign in" })).toBeTruthy();
+    expect(await screen.findByRole("heading", { name: "Sign in" })).toBeVisible();
     await waitFor(() => expect(router.state.location.search).toBe(""));
     expect(calls.find((c) => c.path === "/api/auth/sign-out")!.headers["x-csrf-token"]).toBe("csrf-signed-in");
   });
@@ -153,15 +153,15 @@ describe("route guard", () => {
       "GET /api/auth/session": { body: { ...sessionFor("owner"), memberships: [], activeCompanyId: null } },
     });
     renderApp("/");
-    expect(await screen.findByRole("heading", { name: "You are not a member of any company" })).toBeTruthy();
-    expect(screen.getByRole("button", { name: "Sign out" })).toBeTruthy();
+    expect(await screen.findByRole("heading", { name: "You are not a member of any company" })).toBeVisible();
+    expect(screen.getByRole("button", { name: "Sign out" })).toBeVisible();
     expect(screen.queryByRole("navigation", { name: "Main" })).toBeNull();
   });
 
   it("shows the 404 page for an unknown address inside the app", async () => {
     stubFetch({ "GET /api/auth/session": { body: sessionFor("owner") } });
     renderApp("/no-such-page");
-    expect(await screen.findByRole("heading", { name: "Page not found" })).toBeTruthy();
-    expect(screen.getByRole("navigation", { name: "Main" })).toBeTruthy();
+    expect(await screen.findByRole("heading", { name: "Page not found" })).toBeVisible();
+    expect(screen.getByRole("navigation", { name: "Main" })).toBeVisible();
   });
 });

@@ -7,7 +7,7 @@ export interface UnitPreferences {
   mass: MassPreference;
 }
 
-/** The person's own units, else the company's default (PRODUCT.md); metres and kg until loaded. */
+/** The person's own units, else the company's default (docs/product.md); metres and kg until loaded. */
 export function useUnitPreferences(): UnitPreferences {
   const { user } = useSignedIn();
   const company = useCompanySettings();

@@ -22,9 +22,9 @@ describe("accept invitation form", () => {
       <AcceptInvitationForm token={TOKEN} preview={{ ...preview, hasAccount: false }} onAccepted={() => {}} />,
       { path: "/invite/:token", url: `/invite/${TOKEN}` },
     );
-    expect(screen.getByText("Northfield Cold Care")).toBeTruthy();
-    expect(screen.getByText("Technician")).toBeTruthy();
-    expect(screen.getByText("sam.reyes@northfield.example")).toBeTruthy();
+    expect(screen.getByText("Northfield Cold Care")).toBeVisible();
+    expect(screen.getByText("Technician")).toBeVisible();
+    expect(screen.getByText("sam.reyes@northfield.example")).toBeVisible();
   });
 
   it("asks a newcomer for a name and a new password of at least 10 characters, typed twice", async () => {
@@ -39,9 +39,9 @@ describe("accept invitation form", () => {
     fireEvent.click(screen.getByRole("button", { name: "Join Northfield Cold Care" }));
 
     // passwordSchema and personNameSchema in core/contracts/common.ts
-    expect(await screen.findByText("Your name is required.")).toBeTruthy();
-    expect(screen.getByText("New password must be at least 10 characters.")).toBeTruthy();
-    expect(screen.getByText("New password again does not match the first one.")).toBeTruthy();
+    expect(await screen.findByText("Your name is required.")).toBeVisible();
+    expect(screen.getByText("New password must be at least 10 characters.")).toBeVisible();
+    expect(screen.getByText("New password again does not match the first one.")).toBeVisible();
     expect(calls).toHaveLength(0);
 
     fireEvent.change(screen.getByLabelText("Your name"), { target: { value: "  Sam Reyes " } });

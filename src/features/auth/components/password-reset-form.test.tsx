@@ -23,7 +23,7 @@ describe("password reset form", () => {
       url: `/reset-password/${TOKEN}`,
     });
     choose("walk-in freezer 7", "walk-in freezer 7");
-    expect(await screen.findByText("Password changed")).toBeTruthy();
+    expect(await screen.findByText("Password changed")).toBeVisible();
     expect(calls[0]!.body).toEqual({ token: TOKEN, password: "walk-in freezer 7" });
   });
 
@@ -48,9 +48,9 @@ describe("password reset form", () => {
       url: `/reset-password/${TOKEN}`,
     });
     choose("short", "short");
-    expect(await screen.findByText("New password must be at least 10 characters.")).toBeTruthy();
+    expect(await screen.findByText("New password must be at least 10 characters.")).toBeVisible();
     choose("long enough now", "long enough naw");
-    expect(await screen.findByText("New password again does not match the first one.")).toBeTruthy();
+    expect(await screen.findByText("New password again does not match the first one.")).toBeVisible();
     expect(calls).toHaveLength(0);
   });
 });

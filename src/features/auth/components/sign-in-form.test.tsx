@@ -21,8 +21,8 @@ describe("sign-in form", () => {
     fill("not-an-address", "");
 
     // Messages come from signInInput in core/contracts/auth.ts, the schema the server uses.
-    expect(await screen.findByText("E-mail must be a valid e-mail address.")).toBeTruthy();
-    expect(screen.getByText("Password is required.")).toBeTruthy();
+    expect(await screen.findByText("E-mail must be a valid e-mail address.")).toBeVisible();
+    expect(screen.getByText("Password is required.")).toBeVisible();
     expect(screen.getByLabelText("E-mail").getAttribute("aria-invalid")).toBe("true");
     expect(document.activeElement).toBe(screen.getByLabelText("E-mail"));
     expect(calls).toHaveLength(0);
@@ -54,7 +54,7 @@ describe("sign-in form", () => {
     renderOnRoute(<SignInForm onSignedIn={() => {}} />, { path: "/sign-in" });
     fill("ines.varga@northfield.example", "secret-password");
 
-    expect(await screen.findByText("E-mail must be at most 254 characters.")).toBeTruthy();
+    expect(await screen.findByText("E-mail must be at most 254 characters.")).toBeVisible();
     expect(document.activeElement).toBe(screen.getByLabelText("E-mail"));
     expect(screen.getByRole("alert").textContent).toBe("Please correct the marked fields.");
   });

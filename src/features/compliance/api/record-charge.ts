@@ -12,8 +12,6 @@ import {
 import { api } from "../../../lib/api-client";
 import { complianceKeys } from "./compliance-keys";
 
-export { chargeAdditionInput, chargeCorrectionInput, chargeVoidInput, leakCheckInput };
-
 type Action =
   | { kind: "add"; systemId: string; input: z.input<typeof chargeAdditionInput> }
   | { kind: "correct"; additionId: string; input: z.input<typeof chargeCorrectionInput> }

@@ -29,7 +29,7 @@ describe("detector form: level scale", () => {
     fillLevel(1, "Low", "3", "15");
     fillLevel(2, "High", "10", "");
     fireEvent.click(screen.getByRole("button", { name: "Add detector" }));
-    expect(await screen.findByText(/must not overlap level 1 \(up to 15 ppm\)/)).toBeTruthy();
+    expect(await screen.findByText(/must not overlap level 1 \(up to 15 ppm\)/)).toBeVisible();
     expect(screen.getByLabelText("Level 2 from (ppm)").getAttribute("aria-invalid")).toBe("true");
     expect(calls.filter((c) => c.method === "POST")).toHaveLength(0);
 

@@ -39,11 +39,6 @@ export function useFindingFromSpot(storeId: string, sweepId: string, planId: str
   });
 }
 
-export const repairInput = z.object({
-  on: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "must be a date"),
-  note: z.string().trim().min(1, "say what was repaired").max(2000, "must be at most 2,000 characters"),
-});
-
 /** Marks a finding repaired; a suspected one is confirmed first (a repair implies the leak was found). */
 export function useMarkRepaired(storeId: string) {
   const qc = useQueryClient();

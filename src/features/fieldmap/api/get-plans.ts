@@ -4,8 +4,6 @@ import { fixturesResponse, plan } from "#core/contracts/plans";
 import { api } from "../../../lib/api-client";
 import { fieldmapKeys } from "./fieldmap-keys";
 
-export type PlanInfo = z.infer<typeof plan>;
-
 export function storePlansQueryOptions(storeId: string) {
   return queryOptions({
     queryKey: fieldmapKeys.plans(storeId),

@@ -4,8 +4,6 @@ import { sweep } from "#core/contracts/sweeps";
 import { api } from "../../../lib/api-client";
 import { fieldmapKeys } from "./fieldmap-keys";
 
-export type SweepInfo = z.infer<typeof sweep>;
-
 export function storeSweepsQueryOptions(storeId: string) {
   return queryOptions({
     queryKey: fieldmapKeys.sweeps(storeId),

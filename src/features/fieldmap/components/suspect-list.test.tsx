@@ -31,10 +31,10 @@ describe("suspect list", () => {
       />,
     );
     // 12.192 m = 40 ft, 3.048 m = 10 ft, 0.9144 m = 3 ft exactly (1 ft = 0.3048 m)
-    expect(screen.getByText(/40 ft 0 in across, 10 ft 0 in down, within 3 ft 0 in/)).toBeTruthy();
-    expect(screen.getByText("Dairy 3")).toBeTruthy();
-    expect(screen.getByText("Drop D1")).toBeTruthy();
-    expect(screen.getByText(/Look at the drop first/)).toBeTruthy();
+    expect(screen.getByText(/40 ft 0 in across, 10 ft 0 in down, within 3 ft 0 in/)).toBeVisible();
+    expect(screen.getByText("Dairy 3")).toBeVisible();
+    expect(screen.getByText("Drop D1")).toBeVisible();
+    expect(screen.getByText(/Look at the drop first/)).toBeVisible();
     // no findings action without the permission
     expect(screen.queryByRole("button", { name: "Make a finding" })).toBeNull();
   });
@@ -70,8 +70,8 @@ describe("suspect list", () => {
         busyRank={null}
       />,
     );
-    expect(screen.getByText("Finding recorded")).toBeTruthy();
-    expect(screen.getByRole("button", { name: "Show whole plan" })).toBeTruthy();
+    expect(screen.getByText("Finding recorded")).toBeVisible();
+    expect(screen.getByRole("button", { name: "Show whole plan" })).toBeVisible();
   });
 
   it("says no credible leak when the list is empty", () => {
@@ -86,6 +86,6 @@ describe("suspect list", () => {
         busyRank={null}
       />,
     );
-    expect(screen.getByText(/No credible leak/)).toBeTruthy();
+    expect(screen.getByText(/No credible leak/)).toBeVisible();
   });
 });

@@ -5,8 +5,6 @@ import { createFindingInput } from "#core/contracts/findings";
 import { api, apiUpload } from "../../../lib/api-client";
 import { findingsKeys } from "./findings-keys";
 
-export { createFindingInput, findingActionInput };
-
 type Change =
   | { kind: "create"; storeId: string; input: z.input<typeof createFindingInput> }
   | { kind: "event"; findingId: string; input: z.input<typeof findingActionInput> }

@@ -48,13 +48,13 @@ describe("finding view", () => {
     renderOnRoute(<FindingView finding={finding} canAddPhoto={false} lengthUnit="ft-in" />, { path: "/findings/x" });
     expect(
       screen.getByText(/At Dairy 3, 10 ft 0 in across and 4 ft 0 in down from the plan's top-left corner\./),
-    ).toBeTruthy();
+    ).toBeVisible();
     expect(document.body.textContent).not.toMatch(/\d m across/);
   });
   it("in metres by default, with rule sources as citations", () => {
     stubFetch({});
     renderOnRoute(<FindingView finding={finding} canAddPhoto={false} />, { path: "/findings/x" });
-    expect(screen.getByText(/At Dairy 3, 3\.0 m across and 1\.2 m down/)).toBeTruthy();
-    expect(screen.getByText("Rule: 40 CFR 82.157(c); 40 CFR 84.106")).toBeTruthy();
+    expect(screen.getByText(/At Dairy 3, 3\.0 m across and 1\.2 m down/)).toBeVisible();
+    expect(screen.getByText("Rule: 40 CFR 82.157(c); 40 CFR 84.106")).toBeVisible();
   });
 });

@@ -1,9 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { calibrationInput, calibrationResponse, type CalibrationInput } from "#core/contracts/plans";
+import { calibrationResponse, type CalibrationInput } from "#core/contracts/plans";
 import { api } from "../../../lib/api-client";
 import { plansKeys } from "./plans-keys";
-
-export const calibratePlanInput = calibrationInput;
 
 /** Saves the scale; the answer says whether fixtures were rescaled or a new version was made (sweeps exist). */
 export function calibratePlan({ planId, input }: { planId: string; input: CalibrationInput }) {

@@ -1,9 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { blankPlanInput, plan, type BlankPlanInput } from "#core/contracts/plans";
+import { plan, type BlankPlanInput } from "#core/contracts/plans";
 import { api } from "../../../lib/api-client";
 import { plansKeys } from "./plans-keys";
-
-export const createBlankPlanInput = blankPlanInput;
 
 export function createBlankPlan({ storeId, input }: { storeId: string; input: BlankPlanInput }) {
   return api.post(`/api/stores/${storeId}/plans/blank`, plan, input);

@@ -1,9 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { alignmentInput, plan, type AlignmentInput } from "#core/contracts/plans";
+import { plan, type AlignmentInput } from "#core/contracts/plans";
 import { api } from "../../../lib/api-client";
 import { plansKeys } from "./plans-keys";
-
-export const setAlignmentInput = alignmentInput;
 
 /** Stores how this version lies on the previous one, from two matched points. */
 export function setAlignment({ planId, input }: { planId: string; input: AlignmentInput }) {

@@ -24,7 +24,6 @@ export interface View {
   readonly zoom: number;
 }
 
-export const IDENTITY_VIEW: View = { panX: 0, panY: 0, zoom: 1 };
 export const MIN_ZOOM = 0.05;
 export const MAX_ZOOM = 40;
 
@@ -93,10 +92,6 @@ export function zoomAbout(view: View, anchor: StagePoint, factor: number): View 
   return { zoom, panX: anchor.x - under.x * zoom, panY: anchor.y - under.y * zoom };
 }
 
-export function panBy(view: View, dx: number, dy: number): View {
-  return { ...view, panX: view.panX + dx, panY: view.panY + dy };
-}
-
 /** The view that fits an image of the given pixel size into a viewport, centred, with a margin. */
 export function fitView(
   imageWidth: number,
@@ -113,12 +108,4 @@ export function fitView(
     ),
   );
   return { zoom, panX: (viewportWidth - imageWidth * zoom) / 2, panY: (viewportHeight - imageHeight * zoom) / 2 };
-}
-
-/** Plan points as the [x, y] tuples of the shared geometry module and the fixture schema. */
-export function toVec(p: PlanPoint): [number, number] {
-  return [p.x, p.y];
-}
-export function fromVec([x, y]: readonly [number, number]): PlanPoint {
-  return planPoint(x, y);
 }

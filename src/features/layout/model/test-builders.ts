@@ -1,5 +1,5 @@
 /** Small fixture builders shared by the model's tests (an invented store's cases and rooms). */
-import type { Fixture, PlainFixture, PointFixture, RoomFixture, Vertex } from "#core/contracts/fixtures";
+import type { PlainFixture, PointFixture, RoomFixture, Vertex } from "#core/contracts/fixtures";
 
 export const uuid = (n: number) => `00000000-0000-4000-8000-${String(n).padStart(12, "0")}`;
 
@@ -43,5 +43,3 @@ export function closeTo(
     actual.every((p, i) => p.every((v, j) => Math.abs(v - expected[i][j]) < 10 ** -digits))
   );
 }
-
-export type { Fixture };

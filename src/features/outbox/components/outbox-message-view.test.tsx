@@ -19,8 +19,8 @@ describe("outbox message view", () => {
     render(<OutboxMessageView message={message} />);
     const link = screen.getByRole("link", { name: "http://127.0.0.1:5180/invite/Zq81x0pLk2" });
     expect(link.getAttribute("href")).toBe("http://127.0.0.1:5180/invite/Zq81x0pLk2");
-    expect(screen.getByText("sweep-report.pdf")).toBeTruthy();
-    expect(screen.getByText("(application/pdf, 20.0 kB)")).toBeTruthy();
+    expect(screen.getByText("sweep-report.pdf")).toBeVisible();
+    expect(screen.getByText("(application/pdf, 20.0 kB)")).toBeVisible();
   });
 
   it("shows the text part and never renders the captured HTML", () => {

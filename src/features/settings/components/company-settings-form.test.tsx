@@ -21,7 +21,7 @@ describe("company settings form", () => {
   it("is read-only, with a note, for someone without settings.manage", () => {
     stubFetch({});
     renderOnRoute(<CompanySettingsForm settings={settings} editable={false} />, { path: "/settings" });
-    expect(screen.getByText(/Only an owner can change these settings/)).toBeTruthy();
+    expect(screen.getByText(/Only an owner can change these settings/)).toBeVisible();
     expect(screen.getByLabelText("Company name").matches(":disabled")).toBe(true);
     expect(screen.getByLabelText("Rule profile").matches(":disabled")).toBe(true);
     expect(screen.queryByRole("button", { name: "Save settings" })).toBeNull();
@@ -33,10 +33,10 @@ describe("company settings form", () => {
     fireEvent.change(screen.getByLabelText("Detector check interval (days)"), { target: { value: "2.5" } });
     fireEvent.click(screen.getByRole("button", { name: "Save settings" }));
     // companySettings.detectorCheckIntervalDays in core/contracts/company.ts
-    expect(await screen.findByText("Detector check interval (days) must be a whole number of days.")).toBeTruthy();
+    expect(await screen.findByText("Detector check interval (days) must be a whole number of days.")).toBeVisible();
     fireEvent.change(screen.getByLabelText("Detector check interval (days)"), { target: { value: "0" } });
     fireEvent.click(screen.getByRole("button", { name: "Save settings" }));
-    expect(await screen.findByText("Detector check interval (days) must be at least 1 day.")).toBeTruthy();
+    expect(await screen.findByText("Detector check interval (days) must be at least 1 day.")).toBeVisible();
     expect(calls).toHaveLength(0);
   });
 
@@ -51,7 +51,7 @@ describe("company settings form", () => {
     fireEvent.change(screen.getByLabelText("Detector check interval (days)"), { target: { value: "90" } });
     fireEvent.click(screen.getByRole("button", { name: "Save settings" }));
 
-    expect(await screen.findByText("Settings saved.")).toBeTruthy();
+    expect(await screen.findByText("Settings saved.")).toBeVisible();
     expect(calls[0]!.body).toEqual({
       ...settings,
       lengthUnit: "m",

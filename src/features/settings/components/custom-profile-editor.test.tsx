@@ -22,10 +22,10 @@ describe("custom rule profile editor", () => {
     fireEvent.change(threshold, { target: { value: "-5" } });
     fireEvent.change(screen.getAllByLabelText("Source for “Commercial refrigeration”")[1], { target: { value: "" } });
     fireEvent.click(screen.getByRole("button", { name: "Save custom profile" }));
-    expect(await screen.findByText("Commercial refrigeration must be above 0 (% per year).")).toBeTruthy();
+    expect(await screen.findByText("Commercial refrigeration must be above 0 (% per year).")).toBeVisible();
     expect(
       screen.getByText("Source for “Commercial refrigeration” is required (a citation, or who set the value and why)."),
-    ).toBeTruthy();
+    ).toBeVisible();
     expect(calls).toHaveLength(0);
   });
 
@@ -47,7 +47,7 @@ describe("custom rule profile editor", () => {
     expect(sent.leakRateParts[0].repairDays.value).toBe(30);
     expect(sent.recordRetentionYears.value).toBe(3); // 3 years US [S:R6,R7], unchanged
     expect(sent.leakRateParts[1].chronicLeaker.reportBy.value).toEqual({ month: 3, day: 1 }); // 1 March [S:R7]
-    expect(await screen.findByText(/Custom profile saved/)).toBeTruthy();
+    expect(await screen.findByText(/Custom profile saved/)).toBeVisible();
   });
 
   it("checks that CO2e bands ascend without gaps", async () => {
@@ -60,7 +60,7 @@ describe("custom rule profile editor", () => {
       await screen.findByText(
         "Band 2: from (t) must equal the band below's upper edge (50), so bands ascend without gaps or overlaps.",
       ),
-    ).toBeTruthy();
+    ).toBeVisible();
     expect(calls).toHaveLength(0);
   });
 

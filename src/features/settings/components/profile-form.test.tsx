@@ -19,8 +19,8 @@ describe("profile form", () => {
     );
     expect((screen.getByLabelText("Length unit") as HTMLSelectElement).value).toBe("ft-in");
     expect((screen.getByLabelText("Mass unit") as HTMLSelectElement).value).toBe("company-default");
-    expect(screen.getByRole("option", { name: "Company default (kg)" })).toBeTruthy();
-    expect(screen.getByRole("option", { name: "Company default (metres)" })).toBeTruthy();
+    expect(screen.getByRole("option", { name: "Company default (kg)" })).toBeVisible();
+    expect(screen.getByRole("option", { name: "Company default (metres)" })).toBeVisible();
   });
 
   it("sends null for 'company default' and a unit for an override", async () => {
@@ -41,7 +41,7 @@ describe("profile form", () => {
     fireEvent.change(screen.getByLabelText("Name"), { target: { value: "   " } });
     fireEvent.click(screen.getByRole("button", { name: "Save profile" }));
     // personNameSchema in core/contracts/common.ts trims before checking
-    expect(await screen.findByText("Name is required.")).toBeTruthy();
+    expect(await screen.findByText("Name is required.")).toBeVisible();
     expect(calls).toHaveLength(0);
   });
 });

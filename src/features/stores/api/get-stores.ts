@@ -3,8 +3,6 @@ import { storeListResponse, type Store } from "#core/contracts/stores";
 import { api } from "../../../lib/api-client";
 import { storesKeys, type StoreListFilter } from "./stores-keys";
 
-export type StoreSummary = Store;
-
 function queryString(filter: StoreListFilter): string {
   const params = new URLSearchParams();
   if (filter.search) params.set("search", filter.search);

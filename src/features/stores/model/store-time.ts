@@ -1,4 +1,4 @@
-/** Times at a store are shown in the store's own time zone (PRODUCT.md), with the zone named. */
+/** Times at a store are shown in the store's own time zone (docs/product.md), with the zone named. */
 export function formatDateInZone(iso: string, timeZone: string): string {
   const date = new Date(iso);
   if (Number.isNaN(date.getTime())) return iso;

@@ -1,9 +1,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { system, systemUpdateInput, type SystemUpdateInput } from "#core/contracts/systems";
+import { system, type SystemUpdateInput } from "#core/contracts/systems";
 import { api } from "../../../lib/api-client";
 import { systemsKeys } from "./systems-keys";
-
-export const updateSystemInput = systemUpdateInput;
 
 export function updateSystem({ id, input }: { id: string; input: SystemUpdateInput }) {
   return api.patch(`/api/systems/${id}`, system, input);

@@ -1,6 +1,6 @@
 import { fireEvent, screen, waitFor } from "@testing-library/react";
 import { beforeEach, describe, expect, it } from "vitest";
-import { refrigerantCautions, summarizeRefrigerant } from "../../../../server/api/systems/refrigerant-summary";
+import { refrigerantCautions, summarizeRefrigerant } from "#core/domain/refrigerants/refrigerant-summary";
 import { REFRIGERANTS } from "#core/domain/refrigerants/catalogue";
 import { cautionsFor } from "#core/domain/safety/cautions";
 import { getRefrigerant } from "#core/domain/refrigerants/catalogue";
@@ -42,18 +42,18 @@ describe("system form", () => {
     await waitFor(() => expect(screen.getAllByRole("option").length).toBeGreaterThan(10));
     fireEvent.change(picker, { target: { value: "R-290" } });
     // Propane is A3 (ANSI/ASHRAE 34), highly flammable: the flammable caution must show.
-    expect(screen.getByText("A3", { selector: "span" })).toBeTruthy();
+    expect(screen.getByText("A3", { selector: "span" })).toBeVisible();
     // The catalogue has no AR4 figure for propane: the form says so rather than show a number.
-    expect(screen.getByText(/GWP not known on the company's basis: no GWP for R-290 on AR4/)).toBeTruthy();
+    expect(screen.getByText(/GWP not known on the company's basis: no GWP for R-290 on AR4/)).toBeVisible();
     for (const c of cautionsFor({ refrigerant: getRefrigerant("R-290") }))
-      expect(screen.getByText(c.text, { exact: false })).toBeTruthy();
-    expect(screen.getByText(/Local codes and certified practice govern/)).toBeTruthy();
+      expect(screen.getByText(c.text, { exact: false })).toBeVisible();
+    expect(screen.getByText(/Local codes and certified practice govern/)).toBeVisible();
 
     // R-744 (CO2) brings the very-high-pressure caution instead.
     fireEvent.change(picker, { target: { value: "R-744" } });
     const co2 = cautionsFor({ refrigerant: getRefrigerant("R-744") });
     expect(co2.some((c) => c.id === "high-pressure-co2")).toBe(true);
-    for (const c of co2) expect(screen.getByText(c.text, { exact: false })).toBeTruthy();
+    for (const c of co2) expect(screen.getByText(c.text, { exact: false })).toBeVisible();
 
     // R-404A on AR4 is 3922 (IPCC AR4 GWP-100, as in the EPA's and the EU's published tables).
     fireEvent.change(picker, { target: { value: "R-404A" } });
@@ -68,7 +68,7 @@ describe("system form", () => {
           el?.tagName === "P" &&
           (el.textContent ?? "").startsWith(`GWP-100 ${gwp.value} on the AR4 basis (${readableSource(gwp.source)})`),
       ),
-    ).toBeTruthy();
+    ).toBeVisible();
     // Source tags are internal: the form shows citations.
     expect(document.body.textContent).not.toMatch(/\[(S:|M\]|D\])/);
   });
@@ -79,7 +79,7 @@ describe("system form", () => {
     fireEvent.change(await screen.findByLabelText("Refrigerant"), { target: { value: "R-448A" } });
     fireEvent.change(screen.getByLabelText("Full charge"), { target: { value: "0" } });
     fireEvent.click(screen.getByRole("button", { name: "Add system" }));
-    expect(await screen.findByText("Full charge must be more than 0.")).toBeTruthy();
+    expect(await screen.findByText("Full charge must be more than 0.")).toBeVisible();
     expect(calls.filter((c) => c.method === "POST")).toHaveLength(0);
   });
 
@@ -90,7 +90,7 @@ describe("system form", () => {
     fireEvent.change(screen.getByLabelText("Refrigerant"), { target: { value: "R-448A" } });
     fireEvent.change(screen.getByLabelText("Full charge"), { target: { value: "250" } });
     fireEvent.click(screen.getByRole("button", { name: "Add system" }));
-    expect(await screen.findByText("Refrigerant is not in the catalogue.")).toBeTruthy();
+    expect(await screen.findByText("Refrigerant is not in the catalogue.")).toBeVisible();
     const post = calls.find((c) => c.method === "POST")!;
     expect(post.body).toMatchObject({
       name: "Rack C",

@@ -41,8 +41,8 @@ describe("invite form", () => {
     }
     fireEvent.change(role, { target: { value: "store-contact" } });
     expect(storePicker()).not.toBeNull();
-    expect(screen.getByLabelText("Maple Street Market")).toBeTruthy();
-    expect(screen.getByLabelText("Riverside Fresh")).toBeTruthy();
+    expect(screen.getByLabelText("Maple Street Market")).toBeVisible();
+    expect(screen.getByLabelText("Riverside Fresh")).toBeVisible();
   });
 
   it("refuses a store contact without a store, with inviteInput's message, and sends nothing", async () => {
@@ -52,7 +52,7 @@ describe("invite form", () => {
     fireEvent.change(screen.getByLabelText("Role"), { target: { value: "store-contact" } });
     fireEvent.click(screen.getByRole("button", { name: "Send invitation" }));
 
-    expect(await screen.findByText("A store contact must be given at least one store.")).toBeTruthy();
+    expect(await screen.findByText("A store contact must be given at least one store.")).toBeVisible();
     expect(document.activeElement).toBe(screen.getByLabelText("Maple Street Market"));
     expect(calls).toHaveLength(0);
   });
@@ -65,7 +65,7 @@ describe("invite form", () => {
     fireEvent.click(screen.getByLabelText("Riverside Fresh"));
     fireEvent.click(screen.getByRole("button", { name: "Send invitation" }));
 
-    expect(await screen.findByText("Invitation sent to dana.okafor@maplestreet.example")).toBeTruthy();
+    expect(await screen.findByText("Invitation sent to dana.okafor@maplestreet.example")).toBeVisible();
     expect(calls[0]!.body).toEqual({
       email: "dana.okafor@maplestreet.example",
       role: "store-contact",

@@ -44,9 +44,9 @@ describe("members table", () => {
   it("lists members with their role and, for store contacts, their stores", () => {
     stubFetch({});
     renderOnRoute(table(false), { path: "/team" });
-    expect(screen.getByText("Ines Varga (you)")).toBeTruthy();
-    expect(screen.getByText("Maple Street Market")).toBeTruthy();
-    expect(screen.getByText("Store contact")).toBeTruthy();
+    expect(screen.getByText("Ines Varga (you)")).toBeVisible();
+    expect(screen.getByText("Maple Street Market")).toBeVisible();
+    expect(screen.getByText("Store contact")).toBeVisible();
     expect(screen.queryByRole("button", { name: /Change role/ })).toBeNull();
     expect(screen.queryByRole("button", { name: /Remove/ })).toBeNull();
   });
@@ -76,7 +76,7 @@ describe("members table", () => {
     renderOnRoute(table(true), { path: "/team" });
     fireEvent.click(screen.getByRole("button", { name: "Remove Ines Varga" }));
     expect(calls).toHaveLength(0);
-    expect(screen.getByText(/lose access to its stores and records/)).toBeTruthy();
+    expect(screen.getByText(/lose access to its stores and records/)).toBeVisible();
     fireEvent.click(screen.getByRole("button", { name: "Yes, remove Ines Varga" }));
 
     expect((await screen.findByRole("alert")).textContent).toBe("The company must keep at least one owner.");

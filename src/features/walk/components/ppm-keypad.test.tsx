@@ -42,7 +42,7 @@ describe("the ppm keypad", () => {
     for (const k of ["1", "2", "0", "0", "0"])
       fireEvent.click(screen.getByRole("button", { name: k, exact: true } as never));
     expect(screen.getByRole("button", { name: "Save" })).toHaveProperty("disabled", true);
-    expect(screen.getByText(/Above the 10,000 ppm ceiling/)).toBeTruthy();
+    expect(screen.getByText(/Above the 10,000 ppm ceiling/)).toBeVisible();
   });
 
   it("maps a detector level to its ppm band, stored as at least the band's floor", () => {

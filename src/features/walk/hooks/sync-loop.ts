@@ -89,14 +89,6 @@ export function subscribeSync(listener: (s: SyncStatus) => void): () => void {
   return () => listeners.delete(listener);
 }
 
-declare global {
-  interface Window {
-    /** Lets the Walk benchmark time one full pass of the queue (scripts/bench/walk.ts). */
-    __plumelineSyncNow?: typeof syncNow;
-  }
-}
-if (typeof window !== "undefined") window.__plumelineSyncNow = syncNow;
-
 export function currentSyncStatus(): SyncStatus {
   return status;
 }

@@ -2,6 +2,7 @@ import type { Fixture } from "#core/contracts/fixtures";
 import { DEFAULT_LOCATOR_OPTIONS } from "#core/analysis/locator/locator-options";
 import { planWalkRoute } from "#core/analysis/lag/walk-lag";
 import { toLocatorPlan } from "#core/domain/layout/to-locator-input";
+import { DEFAULT_CELL_SIZE_M } from "#core/contracts/locator-input";
 import type { WalkModel } from "./lag-hint";
 
 /**
@@ -17,5 +18,5 @@ export function walkModelFor(
   if (!(plan.widthM && plan.heightM)) return { walkSpeedMps };
   // Fans do not matter for the route; only the solids and walls do.
   const locatorPlan = toLocatorPlan({ width: plan.widthM, height: plan.heightM }, fixtures, { fansRunning: true });
-  return { route: planWalkRoute(locatorPlan, DEFAULT_LOCATOR_OPTIONS.cellSize), walkSpeedMps };
+  return { route: planWalkRoute(locatorPlan, DEFAULT_CELL_SIZE_M), walkSpeedMps };
 }

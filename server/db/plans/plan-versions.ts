@@ -1,14 +1,24 @@
-import { asc, eq } from "drizzle-orm";
+import { asc, desc, eq, sql } from "drizzle-orm";
 import type { Similarity } from "#core/analysis/geometry/similarity";
-import { fixtures, plans } from "../../db/schema/index";
+import { fixtures, plans } from "../schema/index";
 import { transformFixture } from "#core/domain/plans/transform-fixture";
-import { latestVersion, lockStoreVersions, type DbOrTx } from "./plan-access";
+import type { DbOrTx } from "../tx";
 import { fixtureToRow, rowToFixture, type FixtureRow, type PlanRow } from "./plan-rows";
 
 type NewPlan = Omit<
   typeof plans.$inferInsert,
   "version" | "previousPlanId" | "alignment" | "alignmentMatched" | "layoutRevision"
 >;
+
+export async function latestVersion(tx: DbOrTx, storeId: string): Promise<PlanRow | undefined> {
+  const [row] = await tx.select().from(plans).where(eq(plans.storeId, storeId)).orderBy(desc(plans.version)).limit(1);
+  return row;
+}
+
+/** Serializes version numbering per store (advisory lock on the store id, held to commit). */
+export async function lockStoreVersions(tx: DbOrTx, storeId: string): Promise<void> {
+  await tx.execute(sql`select pg_advisory_xact_lock(hashtextextended(${storeId}, 7))`);
+}
 
 /** Inserts rows in chunks that stay well under PostgreSQL's 65535 bind parameters. */
 export async function insertFixtureRows(tx: DbOrTx, rows: FixtureRow[]): Promise<void> {

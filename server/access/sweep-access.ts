@@ -1,8 +1,8 @@
 import { and, eq } from "drizzle-orm";
-import type { AppContext } from "../../context";
-import { sweeps } from "../../db/schema/index";
-import { notFound } from "../../lib/http-error";
-import { loadVisibleStore, type Viewer } from "../stores/store-access";
+import type { AppContext } from "../context";
+import { sweeps } from "../db/schema/index";
+import { notFound } from "../lib/http-error";
+import { loadVisibleStore, type Viewer } from "./store-access";
 
 export type SweepRow = typeof sweeps.$inferSelect;
 

@@ -1,6 +1,6 @@
 import type { Fixture } from "#core/contracts/fixtures";
 import type { Plan } from "#core/contracts/plans";
-import { fixtures, plans } from "../../db/schema/index";
+import { fixtures, plans } from "../schema/index";
 
 export type PlanRow = typeof plans.$inferSelect;
 export type FixtureRow = typeof fixtures.$inferSelect;

@@ -1,13 +1,11 @@
-import { and, count, desc, eq, inArray, sql } from "drizzle-orm";
-import type { AppContext } from "../../context";
-import type { Db } from "../../db/client";
-import { fixtures, plans } from "../../db/schema/index";
-import { conflict, HttpError, notFound } from "../../lib/http-error";
-import { loadVisibleStore, type Viewer } from "../stores/store-access";
-import type { PlanRow } from "./plan-rows";
-
-type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
-export type DbOrTx = Db | Tx;
+import { and, count, eq, inArray } from "drizzle-orm";
+import type { AppContext } from "../context";
+import type { DbOrTx } from "../db/tx";
+import { fixtures, plans } from "../db/schema/index";
+import { conflict, HttpError, notFound } from "../lib/http-error";
+import { loadVisibleStore, type Viewer } from "./store-access";
+import type { PlanRow } from "../db/plans/plan-rows";
+import { latestVersion } from "../db/plans/plan-versions";
 
 /** The plan when the viewer may see its store; 404 otherwise (other companies' ids reveal nothing). */
 export async function loadVisiblePlan(ctx: AppContext, viewer: Viewer, planId: string): Promise<PlanRow> {
@@ -28,11 +26,6 @@ export async function loadVisiblePlan(ctx: AppContext, viewer: Viewer, planId: s
 export async function lockPlan(tx: DbOrTx, planId: string): Promise<PlanRow> {
   const [row] = await tx.select().from(plans).where(eq(plans.id, planId)).for("update");
   if (!row) throw notFound("That plan");
-  return row;
-}
-
-export async function latestVersion(tx: DbOrTx, storeId: string): Promise<PlanRow | undefined> {
-  const [row] = await tx.select().from(plans).where(eq(plans.storeId, storeId)).orderBy(desc(plans.version)).limit(1);
   return row;
 }
 
@@ -78,9 +71,4 @@ export async function fixtureCounts(db: DbOrTx, planIds: string[]): Promise<Map<
     .where(inArray(fixtures.planId, planIds))
     .groupBy(fixtures.planId);
   return new Map(rows.map((r) => [r.planId, Number(r.n)]));
-}
-
-/** Serializes version numbering per store (advisory lock on the store id, held to commit). */
-export async function lockStoreVersions(tx: DbOrTx, storeId: string): Promise<void> {
-  await tx.execute(sql`select pg_advisory_xact_lock(hashtextextended(${storeId}, 7))`);
 }

@@ -1,8 +1,8 @@
 import { and, eq, inArray, type SQL } from "drizzle-orm";
-import type { AppContext } from "../../context";
-import { stores } from "../../db/schema/index";
+import type { AppContext } from "../context";
+import { stores } from "../db/schema/index";
 import { isStoreScoped, type Role } from "#core/domain/roles";
-import { notFound } from "../../lib/http-error";
+import { notFound } from "../lib/http-error";
 
 /** Who is asking: the active membership (company, role and, for store contacts, their stores). */
 export interface Viewer {
