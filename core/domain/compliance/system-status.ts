@@ -116,9 +116,10 @@ export function systemStatus(
       regime.from,
     ),
   );
-  // A retrofit ends an open breach as a repair does (the leak's refrigerant is gone).
+  // A retrofit or the retirement ends an open breach as a repair does (the leak's refrigerant is gone).
   const retrofits = revisions.filter((r) => r.kind === "retrofit").map((r) => r.effectiveFrom);
-  const episodes = breachEpisodes(profile, assessed, [...rec.repairedOn, ...retrofits]);
+  const enders = [...retrofits, ...(rec.retiredOn ? [rec.retiredOn] : [])];
+  const episodes = breachEpisodes(profile, assessed, [...rec.repairedOn, ...enders]);
   // Every exceedance of an episode shows the episode's deadline: a later one never extends it.
   const dueOf = new Map(episodes.flatMap((e) => e.exceedances.map((p) => [p, e.repairDue] as const)));
   const points = assessed.map((p) => (dueOf.has(p) ? { ...p, repairDue: dueOf.get(p) } : p));
