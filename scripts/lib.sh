@@ -30,6 +30,15 @@ ensure_chromium() {
   fi
 }
 
+ensure_poppler() {
+  # pdftoppm renders report pages to PNG for a person to look at after the tests.
+  if ! command -v pdftoppm >/dev/null 2>&1; then
+    log "installing Debian's poppler-utils for the PDF tests..."
+    run_as_root apt-get update -qq
+    DEBIAN_FRONTEND=noninteractive run_as_root apt-get install -y -qq poppler-utils >/dev/null
+  fi
+}
+
 # psql binary of the newest installed PostgreSQL.
 pg_tool() { "$(ls -d /usr/lib/postgresql/*/bin | sort -V | tail -1)/$1" "${@:2}"; }
 

@@ -18,6 +18,7 @@ if ! npm run -s check; then
 fi
 
 ensure_chromium
+ensure_poppler
 log "starting the test PostgreSQL on 127.0.0.1:$PG_PORT..."
 PG_EXTRA_OPTS="-c fsync=off -c synchronous_commit=off -c full_page_writes=off -c max_connections=200" \
   bash scripts/pg.sh start test "$PG_PORT"

@@ -18,10 +18,12 @@ export const storeNameSchema = z
   .max(120, "must be at most 120 characters");
 export const addressSchema = z.string({ error: "must be text" }).trim().max(300, "must be at most 300 characters");
 export const timeZoneSchema = z
-  .string({ error: "must be an IANA time zone name such as America/Chicago" })
+  .string({ error: "must be a time zone from the list, such as America/Chicago" })
   .trim()
   .min(1, "is required")
-  .refine(isKnownTimeZone, { message: "is not a known IANA time zone (e.g. America/Chicago, Europe/Berlin)" });
+  .refine(isKnownTimeZone, {
+    message: "is not a time zone we know: pick one from the list (such as America/Chicago or Europe/Berlin)",
+  });
 
 export const storeInput = z.object({
   name: storeNameSchema,

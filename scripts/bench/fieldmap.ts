@@ -82,6 +82,7 @@ async function reportPdf(result: ReturnType<typeof locate>, input: ReturnType<ty
     });
     const model: SweepReportModel = {
       title: "Sweep report — Benchmark Foods – Riverside",
+      paper: "a4",
       company: "Benchmark Foods",
       store: { name: "Benchmark Foods – Riverside", address: "1 Test Way", timeZone: "Europe/Warsaw" },
       sweep: {

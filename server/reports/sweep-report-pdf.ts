@@ -1,5 +1,5 @@
 /**
- * Lays out a sweep report (A4) with pdfkit: facts, the field map with numbered suspect spots, the
+ * Lays out a sweep report (US Letter or A4, by the company's rules) with pdfkit: facts, the field map with numbered suspect spots, the
  * suspect list, diagnostics, findings, the readings table and the safety cautions. Atkinson
  * Hyperlegible is embedded (subset) so accented names print. Resolves with the whole PDF.
  */
@@ -40,6 +40,7 @@ function facts(doc: Doc, rows: [string, string][]) {
       .text(v || "—", MARGIN + labelW, y, { width: width - labelW });
     doc.moveDown(0.25);
   }
+  doc.x = MARGIN;
 }
 
 function fieldMap(doc: Doc, m: NonNullable<SweepReportModel["map"]>, suspects: SweepReportModel["suspects"]) {
@@ -83,15 +84,18 @@ function fieldMap(doc: Doc, m: NonNullable<SweepReportModel["map"]>, suspects: S
 }
 
 function readingsTable(doc: Doc, readings: SweepReportModel["readings"]) {
-  const cols = [
+  // Widths in shares of the text width, so Letter and A4 both fill the line.
+  const shares = [
     { key: "n", title: "#", w: 26 },
-    { key: "time", title: "Time", w: 52 },
-    { key: "raw", title: "Tap position", w: 96 },
-    { key: "corrected", title: "Sampled at (corrected)", w: 110 },
-    { key: "ppm", title: "ppm", w: 44 },
-    { key: "point", title: "Point", w: 72 },
-    { key: "note", title: "Note", w: 99 },
+    { key: "time", title: "Time", w: 50 },
+    { key: "raw", title: "Tap position", w: 98 },
+    { key: "corrected", title: "Sampled at (corrected)", w: 104 },
+    { key: "ppm", title: "ppm", w: 36 },
+    { key: "point", title: "Point", w: 80 },
+    { key: "note", title: "Note", w: 105 },
   ] as const;
+  const k = (doc.page.width - 2 * MARGIN) / shares.reduce((sum, c) => sum + c.w, 0);
+  const cols = shares.map((c) => ({ ...c, w: c.w * k }));
   const header = () => {
     let x = MARGIN;
     const y = doc.y;
@@ -110,26 +114,31 @@ function readingsTable(doc: Doc, readings: SweepReportModel["readings"]) {
   };
   header();
   doc.font("regular").fontSize(8.5).fillColor(INK);
+  const bottom = () => doc.page.height - doc.page.margins.bottom;
   for (const r of readings) {
-    if (doc.y > doc.page.height - MARGIN - 14) {
+    // Each cell wraps within its column; the row is as tall as its tallest cell, so a long note
+    // pushes the next row down instead of printing over it.
+    const cells = cols.map((c) => String(r[c.key]));
+    const rowH = Math.max(...cells.map((t, i) => doc.heightOfString(t || " ", { width: cols[i].w - 4 })));
+    if (doc.y + rowH > bottom()) {
       doc.addPage();
       header();
       doc.font("regular").fontSize(8.5).fillColor(INK);
     }
     let x = MARGIN;
     const y = doc.y;
-    for (const c of cols) {
-      doc.text(String(r[c.key]), x, y, { width: c.w - 4, lineBreak: false, ellipsis: true });
-      x += c.w;
-    }
-    doc.y = y + 12;
+    cells.forEach((t, i) => {
+      doc.text(t, x, y, { width: cols[i].w - 4 });
+      x += cols[i].w;
+    });
+    doc.y = y + rowH + 2;
   }
   doc.x = MARGIN;
 }
 
 export function buildSweepReportPdf(m: SweepReportModel): Promise<Buffer> {
   const doc = new PDFDocument({
-    size: "A4",
+    size: m.paper === "a4" ? "A4" : "LETTER",
     margin: MARGIN,
     bufferPages: true,
     info: { Title: m.title, Author: m.company, Subject: `Sweep report for ${m.store.name}`, Creator: "Plumeline" },
@@ -205,6 +214,9 @@ export function buildSweepReportPdf(m: SweepReportModel): Promise<Buffer> {
   const range = doc.bufferedPageRange();
   for (let i = range.start; i < range.start + range.count; i++) {
     doc.switchToPage(i);
+    // The footer sits in the bottom margin: without lifting the margin, pdfkit would start a new
+    // (blank) page for it.
+    doc.page.margins.bottom = 0;
     const y = doc.page.height - MARGIN + 16;
     doc.font("regular").fontSize(8).fillColor(MUTED);
     doc.text(`${m.store.name} · ${m.generated} · page ${i + 1} of ${range.count}`, MARGIN, y, {

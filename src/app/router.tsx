@@ -47,6 +47,8 @@ export const routes: RouteObject[] = [
               { path: "/stores/:storeId/walk", lazy: () => import("./routes/walk-start") },
               { path: "/stores/:storeId/walk/:sweepId", lazy: () => import("./routes/walk") },
               { path: "/detectors", lazy: () => import("./routes/detectors") },
+              { path: "/help", lazy: () => import("./routes/help") },
+              { path: "/help/:topic", lazy: () => import("./routes/help") },
               { path: "*", Component: NotFound },
             ],
           },

@@ -10,6 +10,8 @@ import { startE2eServer, type E2eServer } from "../helpers/e2e-server";
 import { PASSWORD, seedCompany } from "../helpers/fixtures";
 import { signInThroughForm } from "../helpers/e2e-session";
 import { drawingPng, numberAttr, pickerScreen } from "../helpers/layout-e2e";
+import { eq } from "drizzle-orm";
+import { stores } from "../../server/db/schema/index";
 
 let server: E2eServer;
 let browser: Browser;
@@ -48,10 +50,13 @@ it("creates a store, uploads and calibrates a plan, draws three fixtures and fin
   await page.getByRole("button", { name: "New store" }).click();
   await page.getByLabel("Store name").fill("Quillby Grocers – Fernbank");
   await page.getByLabel("Address").fill("12 Fernbank Parade");
-  await page.getByLabel("Time zone").fill("America/Chicago");
+  // The time zone is picked from the searchable list: a city typed, its zone clicked.
+  await page.getByRole("combobox", { name: "Time zone" }).fill("chicago");
+  await page.getByRole("option", { name: /Chicago, America/ }).click();
   await page.getByRole("button", { name: "Create store" }).click();
   await page.getByRole("heading", { name: "Quillby Grocers – Fernbank" }).waitFor();
   const storeId = new URL(page.url()).pathname.split("/")[2];
+  expect((await server.ctx.db.select().from(stores).where(eq(stores.id, storeId)))[0].timeZone).toBe("America/Chicago");
 
   // Upload: the calibration panel opens by itself afterwards.
   await page.getByLabel("Drawing file").setInputFiles(await drawingPng("quillby-floor.png", { border: true }));

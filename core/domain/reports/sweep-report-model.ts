@@ -1,3 +1,5 @@
+import type { Paper } from "./paper";
+
 /**
  * Everything a sweep report shows, already in words and the reader's units: the PDF builder only lays
  * it out, so the same model feeds the PDF, the e-mail's text and the tests.
@@ -31,6 +33,8 @@ export interface ReportReading {
 
 export interface SweepReportModel {
   title: string;
+  /** US Letter under US rules, A4 under EU F-gas (./paper.ts). */
+  paper: Paper;
   company: string;
   store: { name: string; address: string; timeZone: string };
   sweep: { started: string; submitted: string; status: string; technician: string; conditions: string };

@@ -368,56 +368,6 @@ describe("fixtures: save and load in metres", () => {
       layoutRevision: plan.layoutRevision,
     });
   });
-
-  it("applies a change set: upserts by id, deletes by id, with the same revision check", async () => {
-    const lead = await signedIn("lead-tech");
-    const { plan } = await calibratedPlan(lead, "Fixtures D");
-    const [a, b, c] = sampleFixtures();
-    const put = (
-      await lead.put(`/api/plans/${plan.id}/fixtures`, { layoutRevision: plan.layoutRevision, fixtures: [a, b, c] })
-    ).body;
-    const moved = { ...c, point: { x: 6, y: 4.5 } };
-    const added = {
-      id: randomUUID(),
-      kind: "line-set-drop",
-      label: "Drop 1",
-      systemId: null,
-      hasFans: false,
-      point: { x: 1, y: 1 },
-    };
-    const res = await lead.patch(`/api/plans/${plan.id}/fixtures`, {
-      layoutRevision: put.layoutRevision,
-      upserts: [moved, added],
-      deletes: [b.id],
-    });
-    expect(res.status).toBe(200);
-    expect(res.body.fixtures).toEqual([a, moved, added]);
-    expect((await lead.get(`/api/plans/${plan.id}/fixtures`)).body.fixtures).toEqual([a, moved, added]);
-    const again = await lead.patch(`/api/plans/${plan.id}/fixtures`, {
-      layoutRevision: put.layoutRevision,
-      deletes: [a.id],
-    });
-    expect(again.status).toBe(409);
-    const badDelete = await lead.patch(`/api/plans/${plan.id}/fixtures`, {
-      layoutRevision: res.body.layoutRevision,
-      deletes: [b.id],
-      upserts: [
-        {
-          ...a,
-          polygon: [
-            [0, 0],
-            [1, 1],
-          ],
-        },
-      ],
-    });
-    expect(badDelete.body.error.fields).toEqual({ "upserts.0.polygon": "needs at least 3 vertices" });
-    const missing = await lead.patch(`/api/plans/${plan.id}/fixtures`, {
-      layoutRevision: res.body.layoutRevision,
-      deletes: [b.id],
-    });
-    expect(missing.body.error.fields).toEqual({ "deletes.0": "is not a fixture of this plan" });
-  });
 });
 
 describe("plan versions", () => {

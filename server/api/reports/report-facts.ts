@@ -29,6 +29,8 @@ import { HttpError } from "../../lib/http-error";
 import type { Viewer } from "../../access/store-access";
 import { loadVisibleSweep, type SweepRow } from "../../access/sweep-access";
 import { ensureAnalysis, rowField, type AnalysisRow } from "../analysis/analysis.service";
+import { companyRules } from "../compliance/system-records";
+import { paperFor } from "#core/domain/reports/paper";
 
 export interface ReportFacts {
   sweep: SweepRow;
@@ -87,12 +89,13 @@ export async function loadReportFacts(
     if (!(err instanceof HttpError)) throw err;
     analysisProblem = err.message;
   }
-  const [[store], [company], [det], [tech], [plan]] = await Promise.all([
+  const [[store], [company], [det], [tech], [plan], rules] = await Promise.all([
     ctx.db.select().from(stores).where(eq(stores.id, sweep.storeId)),
     ctx.db.select({ name: companies.name }).from(companies).where(eq(companies.id, sweep.companyId)),
     ctx.db.select().from(detectors).where(eq(detectors.id, sweep.detectorId)),
     ctx.db.select({ name: users.name }).from(users).where(eq(users.id, sweep.technicianId)),
     ctx.db.select().from(plans).where(eq(plans.id, sweep.planId)),
+    companyRules(ctx, sweep.companyId),
   ]);
   const tz = store.timeZone;
   const [fixtureRows, readingRows, findingRows, systemRows] = await Promise.all([
@@ -130,6 +133,7 @@ export async function loadReportFacts(
   const model: SweepReportModel = {
     title: `Sweep report — ${store.name}`,
     company: company?.name ?? "",
+    paper: paperFor(rules.profile),
     store: { name: store.name, address: store.address, timeZone: tz },
     sweep: {
       started: zonedDateTime(sweep.startedAt, tz),

@@ -38,7 +38,7 @@ describe("stores: create, edit, archive", () => {
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields).toEqual({
       name: "is required",
-      timeZone: expect.stringMatching(/not a known IANA time zone/),
+      timeZone: expect.stringMatching(/is not a time zone we know/),
     });
 
     const edited = await lead.patch(`/api/stores/${created.body.id}`, { timeZone: "Europe/Berlin" });

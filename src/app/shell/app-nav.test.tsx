@@ -17,30 +17,30 @@ const cases: { role: Role; outboxEnabled: boolean; expected: string[] }[] = [
   {
     role: "owner",
     outboxEnabled: true,
-    expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings", "Outbox"],
+    expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings", "Outbox", "Help"],
   },
   {
     role: "owner",
     outboxEnabled: false,
-    expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"],
+    expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings", "Help"],
   },
   // Engineers read everything (docs/product.md), detectors included.
   {
     role: "engineer",
     outboxEnabled: true,
-    expected: ["Today", "Stores", "Detectors", "Team", "Company settings", "Outbox"],
+    expected: ["Today", "Stores", "Detectors", "Team", "Company settings", "Outbox", "Help"],
   },
   {
     role: "lead-tech",
     outboxEnabled: true,
-    expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"],
+    expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings", "Help"],
   },
   {
     role: "technician",
     outboxEnabled: true,
-    expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings"],
+    expected: ["Today", "Stores", "Walk", "Detectors", "Team", "Company settings", "Help"],
   },
-  { role: "store-contact", outboxEnabled: true, expected: ["Today", "Stores", "Company settings"] },
+  { role: "store-contact", outboxEnabled: true, expected: ["Today", "Stores", "Company settings", "Help"] },
 ];
 
 describe("navigation by role", () => {

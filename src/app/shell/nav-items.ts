@@ -22,5 +22,6 @@ export function navItems(role: Role, session: Pick<SessionInfo, "outboxEnabled">
   // Every member may read the company's settings; only settings.manage may change them.
   items.push({ to: "/settings", label: "Company settings" });
   if (session.outboxEnabled && can(role, "outbox.read")) items.push({ to: "/outbox", label: "Outbox" });
+  items.push({ to: "/help", label: "Help" });
   return items;
 }
