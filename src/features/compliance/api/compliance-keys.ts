@@ -4,4 +4,5 @@ export const complianceKeys = {
   records: () => [...complianceKeys.all, "records"] as const,
   record: (systemId: string) => [...complianceKeys.records(), systemId] as const,
   readings: () => [...complianceKeys.all, "readings"] as const,
+  revisions: (systemId: string) => [...complianceKeys.all, "revisions", systemId] as const,
 };

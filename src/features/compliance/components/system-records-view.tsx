@@ -11,6 +11,7 @@ import { useRecordCharge } from "../api/record-charge";
 import { daysInWords, formatMass, formatPercent, STATE_LABELS, type MassUnit } from "../model/figures";
 import { ChargeForm } from "./charge-form";
 import { ChronicSection } from "./chronic-section";
+import { RevisionsSection } from "./revisions-section";
 import { LeakCheckForm } from "./leak-check-form";
 import { readableSource } from "#core/domain/compliance/citations";
 import { Readable, SourceText } from "../../../components/ui/source-text";
@@ -228,6 +229,7 @@ export function SystemRecords({
       </section>
 
       <ChronicSection r={r} unit={unit} canFile={canFile} />
+      <RevisionsSection r={r} unit={unit} canRevise={canFile} />
 
       <section aria-labelledby="charge" className="space-y-3">
         <h2 id="charge" className="text-xl font-bold">
