@@ -12,6 +12,7 @@ import { errorHandler, notFoundApi } from "./middleware/error-handler";
 import { authRouter } from "./api/auth/auth.router";
 import { teamRouter } from "./api/team/team.router";
 import { invitationsRouter } from "./api/invitations/invitations.router";
+import { signupRouter } from "./api/signup/signup.router";
 import { companyRouter } from "./api/company/company.router";
 import { customProfileRouter } from "./api/company/custom-profile.router";
 import { outboxRouter } from "./api/outbox/outbox.router";
@@ -73,6 +74,7 @@ export function createApp(ctx: AppContext): Express {
   api.use(csrfProtection);
   api.use(authRouter(ctx));
   api.use(invitationsRouter(ctx));
+  api.use(signupRouter(ctx));
   api.use(teamRouter(ctx));
   api.use(companyRouter(ctx));
   api.use(customProfileRouter(ctx));

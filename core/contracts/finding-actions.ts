@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { DISMISS_REASONS, FINDING_COMPONENTS, finding, findingEvent } from "./findings";
+import { DISMISS_REASONS, FINDING_COMPONENTS, FINDING_EVENT_KINDS, finding, findingEvent } from "./findings";
 
 const isoDate = z
   .string({ error: "must be a date as YYYY-MM-DD" })
@@ -35,7 +35,7 @@ export const findingActionInput = z.discriminatedUnion(
 export type FindingActionInput = z.input<typeof findingActionInput>;
 
 export const findingEventDetail = findingEvent.extend({
-  kind: z.enum(["found", "confirmed", "repaired", "initial-test", "follow-up-test", "closed", "dismissed"]),
+  kind: z.enum(FINDING_EVENT_KINDS),
   result: z.enum(["passed", "failed"]).nullable(),
   byId: z.uuid(),
 });

@@ -6,6 +6,25 @@ export const FINDING_STATUSES = ["suspected", "confirmed", "repaired", "verified
 export const FINDING_COMPONENTS = ["brazed-joint", "flare", "valve", "coil", "gasket", "fitting", "other"] as const;
 export const FINDING_SOURCES = ["walk", "suspect-spot", "manual"] as const;
 export const DISMISS_REASONS = ["benign-source", "no-leak-found", "other"] as const;
+/** What a step in a finding's history did (its status after the step is a separate field). */
+export const FINDING_EVENT_KINDS = [
+  "found",
+  "confirmed",
+  "repaired",
+  "initial-test",
+  "follow-up-test",
+  "closed",
+  "dismissed",
+] as const;
+export const FINDING_EVENT_LABELS: Record<(typeof FINDING_EVENT_KINDS)[number], string> = {
+  found: "Found",
+  confirmed: "Confirmed",
+  repaired: "Repaired",
+  "initial-test": "Initial verification test",
+  "follow-up-test": "Follow-up verification test",
+  closed: "Closed",
+  dismissed: "Dismissed",
+};
 
 export const COMPONENT_LABELS: Record<(typeof FINDING_COMPONENTS)[number], string> = {
   "brazed-joint": "Brazed joint",

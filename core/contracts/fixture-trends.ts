@@ -9,7 +9,9 @@ export const fixtureTrendsQuery = z.object({
 export const fixtureLevelSchema = z.object({ sweepId: z.uuid(), peakPpm: z.number(), meanPpm: z.number() });
 
 export const fixtureTrendsResponse = z.object({
-  sweeps: z.array(z.object({ id: z.uuid(), startedAt: z.string(), planId: z.uuid(), status: z.string() })),
+  sweeps: z.array(
+    z.object({ id: z.uuid(), startedAt: z.string(), planId: z.uuid(), status: z.string(), technicianName: z.string() }),
+  ),
   a: z.uuid().nullable(),
   b: z.uuid().nullable(),
   fixtures: z.array(

@@ -24,3 +24,29 @@ export function passwordResetMail(args: { name: string; link: string }) {
     ].join("\n"),
   };
 }
+
+export function signUpConfirmMail(args: { name: string; companyName: string; link: string }) {
+  return {
+    subject: `Confirm your e-mail to open ${args.companyName} on Plumeline`,
+    text: [
+      `Hello ${args.name},`,
+      "",
+      `To open ${args.companyName} on Plumeline with this address as its owner, confirm here: ${args.link}`,
+      "",
+      "The link works for 24 hours and only once. If it was not you, ignore this message: nothing is created.",
+    ].join("\n"),
+  };
+}
+
+export function signUpExistingAccountMail(args: { name: string; signInLink: string }) {
+  return {
+    subject: "You already have a Plumeline account",
+    text: [
+      `Hello ${args.name},`,
+      "",
+      `Someone asked to open a new company on Plumeline with this address, which already has an account. Sign in here: ${args.signInLink}`,
+      "",
+      "If it was not you, ignore this message: nothing was changed.",
+    ].join("\n"),
+  };
+}

@@ -19,6 +19,8 @@ export const routes: RouteObject[] = [
           { path: "/forgot-password", lazy: () => import("./routes/forgot-password") },
           { path: "/reset-password/:token", lazy: () => import("./routes/reset-password") },
           { path: "/invite/:token", lazy: () => import("./routes/invite") },
+          { path: "/sign-up", lazy: () => import("./routes/sign-up") },
+          { path: "/sign-up/confirm/:token", lazy: () => import("./routes/sign-up-confirm") },
         ],
       },
       {
@@ -48,6 +50,7 @@ export const routes: RouteObject[] = [
               { path: "/stores/:storeId/walk/:sweepId", lazy: () => import("./routes/walk") },
               { path: "/detectors", lazy: () => import("./routes/detectors") },
               { path: "/help", lazy: () => import("./routes/help") },
+              { path: "/welcome", lazy: () => import("./routes/welcome") },
               { path: "/help/:topic", lazy: () => import("./routes/help") },
               { path: "*", Component: NotFound },
             ],

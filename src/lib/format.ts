@@ -1,21 +1,15 @@
-// Dates as the reader's locale writes them. Store-local times come with the stores feature.
-const dateFormat = new Intl.DateTimeFormat(undefined, { year: "numeric", month: "short", day: "numeric" });
-const dateTimeFormat = new Intl.DateTimeFormat(undefined, {
-  year: "numeric",
-  month: "short",
-  day: "numeric",
-  hour: "2-digit",
-  minute: "2-digit",
-});
+import { formatInZone } from "#core/domain/dates/format-in-zone";
+
+// Moments that belong to no store (invitations, mail) in the reader's own zone, written the one
+// way every time is written (core/domain/dates/format-in-zone.ts).
+const readerZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone || "UTC";
 
 export function formatDate(iso: string): string {
-  const date = new Date(iso);
-  return Number.isNaN(date.getTime()) ? iso : dateFormat.format(date);
+  return formatInZone(iso, readerZone(), "date");
 }
 
 export function formatDateTime(iso: string): string {
-  const date = new Date(iso);
-  return Number.isNaN(date.getTime()) ? iso : dateTimeFormat.format(date);
+  return formatInZone(iso, readerZone(), "dateTime");
 }
 
 export function formatBytes(bytes: number): string {

@@ -6,7 +6,7 @@ import { and, asc, eq, gte, inArray, ne } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { AIR_VOLUME_KINDS } from "#core/contracts/fixture-kinds";
 import type { FixtureTrends } from "#core/contracts/fixture-trends";
-import { fixtures, sweeps } from "../../db/schema/index";
+import { fixtures, sweeps, users } from "../../db/schema/index";
 import { fixtureLevel } from "#core/domain/fieldmap/fixture-levels";
 import { HttpError, badRequest } from "../../lib/http-error";
 import { loadVisibleStore, type Viewer } from "../../access/store-access";
@@ -23,9 +23,10 @@ export async function fixtureTrends(
   now = new Date(),
 ): Promise<FixtureTrends> {
   await loadVisibleStore(ctx, viewer, storeId);
-  const rows = await ctx.db
-    .select()
+  const joined = await ctx.db
+    .select({ sweep: sweeps, technicianName: users.name })
     .from(sweeps)
+    .leftJoin(users, eq(users.id, sweeps.technicianId))
     .where(
       and(
         eq(sweeps.storeId, storeId),
@@ -35,6 +36,8 @@ export async function fixtureTrends(
       ),
     )
     .orderBy(asc(sweeps.startedAt));
+  const rows = joined.map((j) => j.sweep);
+  const technician = new Map(joined.map((j) => [j.sweep.id, j.technicianName ?? ""]));
   const ids = rows.map((r) => r.id);
   for (const [k, v] of Object.entries(q))
     if (v && !ids.includes(v))
@@ -82,7 +85,13 @@ export async function fixtureTrends(
   });
   out.sort((x, y) => (y.change ?? -Infinity) - (x.change ?? -Infinity) || x.label.localeCompare(y.label));
   return {
-    sweeps: rows.map((r) => ({ id: r.id, startedAt: r.startedAt.toISOString(), planId: r.planId, status: r.status })),
+    sweeps: rows.map((r) => ({
+      id: r.id,
+      startedAt: r.startedAt.toISOString(),
+      planId: r.planId,
+      status: r.status,
+      technicianName: technician.get(r.id) ?? "",
+    })),
     a,
     b,
     fixtures: out,

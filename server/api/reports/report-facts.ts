@@ -31,6 +31,7 @@ import { loadVisibleSweep, type SweepRow } from "../../access/sweep-access";
 import { ensureAnalysis, rowField, type AnalysisRow } from "../analysis/analysis.service";
 import { companyRules } from "../compliance/system-records";
 import { paperFor } from "#core/domain/reports/paper";
+import { formatInZone } from "#core/domain/dates/format-in-zone";
 
 export interface ReportFacts {
   sweep: SweepRow;
@@ -45,27 +46,11 @@ export interface ReportFacts {
 }
 
 export function zonedDateTime(d: Date, timeZone: string): string {
-  return new Intl.DateTimeFormat("en-GB", {
-    timeZone,
-    weekday: "short",
-    day: "numeric",
-    month: "short",
-    year: "numeric",
-    hour: "2-digit",
-    minute: "2-digit",
-    hour12: false,
-    timeZoneName: "short",
-  }).format(d);
+  return formatInZone(d, timeZone, "dateTime");
 }
 
 function zonedTime(d: Date, timeZone: string): string {
-  return new Intl.DateTimeFormat("en-GB", {
-    timeZone,
-    hour: "2-digit",
-    minute: "2-digit",
-    second: "2-digit",
-    hour12: false,
-  }).format(d);
+  return formatInZone(d, timeZone, "time");
 }
 
 const PRINCIPLES: Record<string, string> = {

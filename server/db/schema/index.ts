@@ -11,3 +11,4 @@ export * from "./findings";
 export * from "./compliance";
 export * from "./reports";
 export * from "./system-revisions";
+export * from "./signups";

@@ -19,6 +19,7 @@ import { useWidth } from "../../features/fieldmap/components/use-width";
 import { DEFAULT_LAYERS } from "../../features/fieldmap/model/layers";
 import { concentrationPaint } from "../../features/fieldmap/model/scale-paint";
 import { useDocumentTitle } from "../../lib/use-document-title";
+import { formatInZone } from "#core/domain/dates/format-in-zone";
 
 const SIDE_LAYERS = { ...DEFAULT_LAYERS, corrected: false, path: false };
 const DIFF_LAYERS = { ...SIDE_LAYERS, suspects: false, riskPoints: false };
@@ -31,8 +32,9 @@ export function Component() {
   const plans = useStorePlans(storeId);
   const store = stores.data?.find((s) => s.id === storeId);
   const timeZone = store?.timeZone ?? "UTC";
-  const day = (iso: string) =>
-    new Intl.DateTimeFormat("en-GB", { timeZone, dateStyle: "medium" }).format(new Date(iso));
+  // Two sweeps on one day are told apart by their time and who walked them.
+  const when = (s: { startedAt: string; technicianName: string }) =>
+    `${formatInZone(s.startedAt, timeZone)}${s.technicianName ? ` · ${s.technicianName}` : ""}`;
   useDocumentTitle(store ? `Compare · ${store.name}` : "Compare sweeps");
   const t = trends.data;
   const aId = t?.a ?? null;
@@ -84,7 +86,7 @@ export function Component() {
   if (trends.isError)
     return <QueryError error={trends.error} what="the comparison" onRetry={() => void trends.refetch()} />;
   if (!t) return <Spinner label="Gathering the store's sweeps…" />;
-  const options = t.sweeps.map((s) => ({ value: s.id, label: day(s.startedAt) }));
+  const options = t.sweeps.map((s) => ({ value: s.id, label: when(s) }));
   const ia = t.sweeps.findIndex((s) => s.id === aId);
   const ib = t.sweeps.findIndex((s) => s.id === bId);
 
@@ -115,7 +117,7 @@ export function Component() {
         ].map(({ s, an, plan, fx, title }) => (
           <figure key={title}>
             <figcaption className="mb-1 font-bold">
-              {title}: {s ? day(s.startedAt) : "—"}{" "}
+              {title}: {s ? when(s) : "—"}{" "}
               {an.data
                 ? `· ${an.data.candidates.length} suspect spot${an.data.candidates.length === 1 ? "" : "s"}`
                 : ""}

@@ -1,5 +1,5 @@
 import { useState } from "react";
-import { Navigate, useLocation, useNavigate } from "react-router";
+import { Navigate, useLocation, useNavigate, useSearchParams } from "react-router";
 import { can, isStoreScoped, type Role } from "#core/domain/roles";
 import { Button } from "../../components/ui/button";
 import { PageHeader } from "../../components/ui/page-header";
@@ -22,9 +22,11 @@ function Stores() {
   useDocumentTitle("Stores");
   const { membership } = useSignedIn();
   const navigate = useNavigate();
-  const [creating, setCreating] = useState(false);
   const scoped = isStoreScoped(membership.role);
   const canEdit = can(membership.role, "stores.edit");
+  // "/stores?new=1" (the welcome screen's first step) opens the new-store form at once.
+  const [params] = useSearchParams();
+  const [creating, setCreating] = useState(canEdit && params.get("new") === "1");
   return (
     <>
       <PageHeader

@@ -1,4 +1,4 @@
-import { Navigate, useNavigate, useSearchParams } from "react-router";
+import { Link, Navigate, useNavigate, useSearchParams } from "react-router";
 import { Spinner } from "../../components/ui/spinner";
 import { useSession } from "../../features/auth/api/get-session";
 import { SignInForm } from "../../features/auth/components/sign-in-form";
@@ -19,6 +19,9 @@ export function Component() {
       <h1 className="mb-2 text-3xl font-bold">Sign in</h1>
       <p className="mb-6 text-muted">Leak sweeps, findings and records for your stores.</p>
       <SignInForm onSignedIn={() => void navigate(next, { replace: true })} />
+      <p className="mt-8 text-muted">
+        New to Plumeline? <Link to="/sign-up">Create your company's account</Link>
+      </p>
     </>
   );
 }

@@ -7,6 +7,7 @@ import { Spinner } from "../../components/ui/spinner";
 import { useStores } from "../../features/stores/api/get-stores";
 import { useStoreSweeps } from "../../features/fieldmap/api/get-sweeps";
 import { useDocumentTitle } from "../../lib/use-document-title";
+import { formatInZone } from "#core/domain/dates/format-in-zone";
 
 /** A store's sweeps, newest first, each opening its field map. */
 export function Component() {
@@ -16,8 +17,7 @@ export function Component() {
   const store = stores.data?.find((s) => s.id === storeId);
   useDocumentTitle(store ? `Sweeps · ${store.name}` : "Sweeps");
   const tz = store?.timeZone ?? "UTC";
-  const when = (iso: string) =>
-    new Intl.DateTimeFormat("en-GB", { timeZone: tz, dateStyle: "full", timeStyle: "short" }).format(new Date(iso));
+  const when = (iso: string) => formatInZone(iso, tz);
   if (sweeps.isError)
     return <QueryError error={sweeps.error} what="the sweeps" onRetry={() => void sweeps.refetch()} />;
   if (!sweeps.data) return <Spinner label="Loading sweeps…" />;

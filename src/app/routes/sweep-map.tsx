@@ -26,6 +26,7 @@ import { DEFAULT_LAYERS } from "../../features/fieldmap/model/layers";
 import { concentrationPaint } from "../../features/fieldmap/model/scale-paint";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
+import { formatInZone } from "#core/domain/dates/format-in-zone";
 
 const AIR = new Set<string>(AIR_VOLUME_KINDS);
 
@@ -51,8 +52,7 @@ export function Component() {
   const [wrapRef, width] = useWidth<HTMLDivElement>();
   const store = stores.data?.find((s) => s.id === storeId);
   const timeZone = store?.timeZone ?? "UTC";
-  const zoned = (iso: string) =>
-    new Intl.DateTimeFormat("en-GB", { timeZone, dateStyle: "medium", timeStyle: "short" }).format(new Date(iso));
+  const zoned = (iso: string) => formatInZone(iso, timeZone);
   useDocumentTitle(store ? `Field map · ${store.name}` : "Field map");
 
   const a = analysis.data;

@@ -3,6 +3,7 @@ import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
 import { useMarkRepaired, type SweepFinding } from "../api/findings";
+import { FINDING_EVENT_LABELS } from "#core/contracts/findings";
 
 function RepairForm({ storeId, finding, today }: { storeId: string; finding: SweepFinding; today: string }) {
   const [on, setOn] = useState(today);
@@ -66,7 +67,8 @@ export function FindingsPanel({
           <ul className="mt-1 text-sm text-muted">
             {f.events.map((e) => (
               <li key={e.id}>
-                {e.on}: {e.status} by {e.by}
+                {e.on}: {FINDING_EVENT_LABELS[e.kind]}
+                {e.result ? ` (${e.result})` : ""} by {e.by}
                 {e.note ? ` — ${e.note}` : ""}
               </li>
             ))}

@@ -3,14 +3,14 @@ import { countOf } from "../../../lib/format";
 import { QueryError } from "../../../components/ui/query-error";
 import { Spinner } from "../../../components/ui/spinner";
 import { useStoreSweeps } from "../api/get-sweeps";
+import { formatInZone } from "#core/domain/dates/format-in-zone";
 
 const LINK = "inline-flex min-h-11 items-center rounded-md px-4 font-bold no-underline";
 
 /** The store page's sweeps section: the latest few with their field maps (starting one is in the page header). */
 export function StoreSweepsSection({ storeId, timeZone }: { storeId: string; timeZone: string }) {
   const sweeps = useStoreSweeps(storeId);
-  const when = (iso: string) =>
-    new Intl.DateTimeFormat("en-GB", { timeZone, dateStyle: "medium", timeStyle: "short" }).format(new Date(iso));
+  const when = (iso: string) => formatInZone(iso, timeZone);
   const latest = [...(sweeps.data ?? [])].sort((a, b) => b.startedAt.localeCompare(a.startedAt)).slice(0, 3);
   return (
     <section aria-labelledby="store-sweeps" className="space-y-3">

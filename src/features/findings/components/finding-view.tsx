@@ -1,22 +1,12 @@
 import { Link } from "react-router";
 import type { FindingDetail } from "#core/contracts/finding-actions";
-import { COMPONENT_LABELS } from "#core/contracts/findings";
+import { COMPONENT_LABELS, FINDING_EVENT_LABELS } from "#core/contracts/findings";
 import { Alert } from "../../../components/ui/alert";
 import { Cautions } from "../../../components/ui/cautions";
 import { formErrorMessage } from "../../../lib/form-errors";
 import { useChangeFinding } from "../api/change-finding";
 import { SourceText } from "../../../components/ui/source-text";
 import { formatLength, type LengthPreference } from "#core/domain/units/format-units";
-
-const KIND_LABELS: Record<FindingDetail["events"][number]["kind"], string> = {
-  found: "Found",
-  confirmed: "Confirmed",
-  repaired: "Repaired",
-  "initial-test": "Initial verification test",
-  "follow-up-test": "Follow-up verification test",
-  closed: "Closed",
-  dismissed: "Dismissed",
-};
 
 /** A finding: where and what, its deadlines with their rules, the signed history and photos. */
 export function FindingView({
@@ -95,7 +85,7 @@ export function FindingView({
         <ol className="space-y-2 border-l-4 border-line pl-4">
           {finding.events.map((e) => (
             <li key={e.id}>
-              <span className="font-bold">{e.on}</span> · {KIND_LABELS[e.kind]}
+              <span className="font-bold">{e.on}</span> · {FINDING_EVENT_LABELS[e.kind]}
               {e.result ? ` — ${e.result}` : ""} · signed {e.by}
               {e.note ? <p className="text-muted">{e.note}</p> : null}
             </li>

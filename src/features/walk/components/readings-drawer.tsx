@@ -2,6 +2,7 @@ import { SAMPLE_POINT_LABELS } from "#core/contracts/sweeps";
 import { Dialog } from "../../../components/ui/dialog";
 import { COMPONENT_LABELS } from "#core/contracts/findings";
 import type { LocalFinding, LocalReading } from "../model/local-types";
+import { formatInZone } from "#core/domain/dates/format-in-zone";
 
 function stateWord(r: LocalReading): string {
   if (r.draft) return "On the keypad — kept on this device";
@@ -25,7 +26,6 @@ export function ReadingsDrawer(props: {
   onClose(): void;
 }) {
   if (!props.open) return null; // thousands of rows: build them only when the list is shown
-  const fmt = new Intl.DateTimeFormat("en-GB", { timeStyle: "medium", timeZone: props.timeZone });
   const list = [...props.readings].map((r, i) => ({ r, n: i + 1 })).reverse();
   return (
     <Dialog title={`Readings (${props.readings.length})`} open={props.open} onClose={props.onClose} wide>
@@ -82,7 +82,7 @@ export function ReadingsDrawer(props: {
                 {r.ppm} ppm · {SAMPLE_POINT_LABELS[r.samplePoint]}
               </span>
               <span className="text-muted">
-                {fmt.format(new Date(r.takenAt))} · {stateWord(r)}
+                {formatInZone(r.takenAt, props.timeZone, "time")} · {stateWord(r)}
               </span>
             </div>
             {r.note ? <p>{r.note}</p> : null}

@@ -10,6 +10,7 @@ import { syncNow } from "../hooks/sync-loop";
 import type { LocalSweep } from "../model/local-types";
 import { saveSweep } from "../model/reading-store";
 import { walkDb } from "../model/walk-db";
+import { formatDateTime } from "../../../lib/format";
 
 /**
  * Start a sweep: plan version, detector, hunted systems and conditions. The sweep is made on the
@@ -95,8 +96,8 @@ export function StartSweepForm({ storeId, onStarted }: { storeId: string; onStar
     >
       {data.fromCache ? (
         <Alert tone="note" title="Offline">
-          Using the copy of this store kept on this device ({new Date(data.savedAt).toLocaleString()}). The sweep
-          uploads when the connection returns.
+          Using the copy of this store kept on this device ({formatDateTime(data.savedAt)}). The sweep uploads when the
+          connection returns.
         </Alert>
       ) : null}
       {calibrated.length === 0 ? (

@@ -1,0 +1,19 @@
+import { z } from "zod";
+import { emailSchema, personNameSchema } from "./common";
+import { newAccountPassword } from "./members";
+
+/** A new customer: the company, its first owner and the company's first settings. */
+export const signUpInput = z.object({
+  companyName: z.string().trim().min(1, "is required").max(120, "must be at most 120 characters"),
+  name: personNameSchema,
+  email: emailSchema,
+  password: newAccountPassword,
+  ruleProfile: z.enum(["us-federal", "eu-fgas"], { error: "must be US federal or EU F-gas" }),
+  lengthUnit: z.enum(["m", "ft-in"], { error: "must be metres or feet and inches" }),
+  massUnit: z.enum(["kg", "lb"], { error: "must be kg or lb" }),
+});
+export type SignUpInput = z.input<typeof signUpInput>;
+
+export const confirmSignUpInput = z.object({
+  token: z.string().min(20, "is not a valid confirmation link").max(200, "is not a valid confirmation link"),
+});
