@@ -90,6 +90,9 @@ export const dueItemKinds = [
   "inspection",
   "chronic-leaker-report",
   "detector-check",
+  "automatic-leak-detection",
+  "retrofit-or-retire-plan",
+  "retrofit-or-retire",
 ] as const;
 export const dueItem = z.object({
   kind: z.enum(dueItemKinds),
@@ -119,7 +122,17 @@ export const systemRecords = z.object({
     method: z.enum(["annualizing", "rolling-average"]),
     retentionYears: z.number(),
     retentionSource: text(),
+    /** Whose words and articles the records use: US EPA leak repair, or EU F-gas leak checks. */
+    wording: z.enum(["us", "eu"]),
+    /** The profile sets leak-rate thresholds (the US parts); the EU regulation sets leak-check intervals instead. */
+    leakRateRules: z.boolean(),
   }),
+  /** The part's automatic-leak-detection requirement for this system (US Part 84), or null. */
+  automaticLeakDetection: z
+    .object({ required: z.boolean(), dueOn: z.string().nullable(), reason: z.string(), source: z.string() })
+    .nullable(),
+  /** How long the records are kept; `keptUntil` is set once the system is retired. */
+  retention: z.object({ years: z.number(), source: z.string(), keptUntil: z.string().nullable() }),
   applicability: z.object({
     applies: z.boolean(),
     partId: text().nullable(),
@@ -228,3 +241,16 @@ export const digestSendResult = z.object({
   itemCount: z.number(),
   message: text(),
 });
+
+/** GET /api/compliance/readings: how the company's profile reads rules not confirmed in their text. */
+export const readingsResponse = z.object({
+  profileName: z.string(),
+  readings: z.array(
+    z.object({
+      text: z.string(),
+      kind: z.enum(["profile-value", "product-reading"]),
+      decision: z.string().optional(),
+    }),
+  ),
+});
+export type ReadingsResponse = z.infer<typeof readingsResponse>;

@@ -40,6 +40,9 @@ const wholeMonths = z
   .min(1, "must be at least 1 month")
   .max(120, "must be at most 120 months");
 
+const isoDay = z
+  .string({ error: "must be a date as YYYY-MM-DD" })
+  .regex(/^\d{4}-\d{2}-\d{2}$/, "must be a date as YYYY-MM-DD");
 const massLimit = z.object({
   value: num("mass").min(0, "must be 0 or more"),
   unit: z.enum(["lb", "kg"], { error: "must be lb or kg" }),
@@ -122,8 +125,23 @@ export const leakRatePartSchema = z.object({
     }),
   ).optional(),
   automaticLeakDetectionRequired: sourced(
-    z.object({ types: z.array(z.enum(APPLIANCES)), fromCharge: massLimit }),
+    z.object({
+      types: z.array(z.enum(APPLIANCES)),
+      fromCharge: massLimit,
+      installDeadlines: z
+        .array(
+          z.object({
+            inServiceFrom: isoDay,
+            inServiceBefore: isoDay.optional(),
+            withinDays: wholeDays(0).optional(),
+            by: isoDay.optional(),
+          }),
+        )
+        .max(10, "must list at most 10 deadlines")
+        .optional(),
+    }),
   ).optional(),
+  failedRepair: sourced(z.object({ planDays: wholeDays(1), carryOutMonths: wholeMonths })).optional(),
   chronicLeaker: z.object({
     percentOfFullCharge: sourced(positive("% of the full charge", 10000)),
     reportBy: sourced(

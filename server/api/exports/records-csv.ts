@@ -99,6 +99,14 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[]): 
     });
   }
   rows.sort((x, y) => String(x.date).localeCompare(String(y.date)));
+  // The GWP, its stated basis and the charge's CO2-equivalent on every row, beside the figures.
+  const gwp = r.system.refrigerant.gwp;
+  const withBasis = rows.map((row) => ({
+    ...row,
+    gwp: gwp?.value ?? "",
+    gwp_basis: gwp?.statement ?? "",
+    co2e_tonnes: r.co2e.known && r.co2e.tonnes !== null ? Math.round(r.co2e.tonnes * 1000) / 1000 : "",
+  }));
   // Text cells escaped against formula injection (core/domain/reports/csv-cells.ts); numbers stay numbers.
-  return unparseCsv(rows);
+  return unparseCsv(withBasis);
 }

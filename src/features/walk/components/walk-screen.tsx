@@ -15,7 +15,7 @@ import { useWalk } from "../hooks/use-walk";
 import { fixtureAt, unsampledFixtures } from "../model/coverage";
 import { latestLagHint } from "../model/lag-hint";
 import type { LocalReading } from "../model/local-types";
-import { enteredRoom } from "../model/room-entry";
+import { enteredRoom, roomSystemIds } from "../model/room-entry";
 import { walkModelFor } from "../model/walk-model";
 import { CautionDialog } from "./caution-dialog";
 import { LagHintBanner } from "./lag-hint-banner";
@@ -52,7 +52,7 @@ export function WalkScreen({
     useOpenReading(walk);
   const highContrast = useHighContrast();
   const [editing, setEditing] = useState<LocalReading | null>(null);
-  const [caution, setCaution] = useState<{ place: CautionPlace; name: string } | null>(null);
+  const [caution, setCaution] = useState<{ place: CautionPlace; name: string; refrigerantIds: string[] } | null>(null);
   const [leakMode, setLeakMode] = useState(false);
   const [leakSpot, setLeakSpot] = useState<LeakSpot | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
@@ -147,7 +147,18 @@ export function WalkScreen({
     const before = readingsRef.current.filter((r) => !r.draft || r.id === open);
     const previous = before.length ? before[before.length - 1] : null;
     const room = enteredRoom(fixtures, previous, { x, y });
-    if (room) setCaution({ place: room.place, name: room.fixture.label || FIXTURE_KIND_NAMES[room.fixture.kind] });
+    if (room) {
+      // The room's systems (from the store pack kept on the device) decide which cautions apply.
+      const ids = roomSystemIds(fixtures, room.fixture);
+      const refrigerantIds = (storePack.data?.systems ?? [])
+        .filter((x) => ids.includes(x.id))
+        .map((x) => x.refrigerantId);
+      setCaution({
+        place: room.place,
+        name: room.fixture.label || FIXTURE_KIND_NAMES[room.fixture.kind],
+        refrigerantIds,
+      });
+    }
     const v = typed.current;
     typed.current = null;
     // The next tap saves what the keypad shows and takes its place, without closing it.
@@ -305,7 +316,12 @@ export function WalkScreen({
         onImport={() => setDialog("import")}
         onSubmit={() => setDialog("summary")}
       />
-      <CautionDialog place={caution?.place ?? null} name={caution?.name ?? ""} onClose={() => setCaution(null)} />
+      <CautionDialog
+        place={caution?.place ?? null}
+        name={caution?.name ?? ""}
+        refrigerantIds={caution?.refrigerantIds ?? []}
+        onClose={() => setCaution(null)}
+      />
       <ReadingsDrawer
         open={dialog === "list"}
         readings={all}
