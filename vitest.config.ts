@@ -22,7 +22,7 @@ export default defineConfig({
         test: {
           name: "server",
           environment: "node",
-          include: ["server/**/*.test.ts"],
+          include: ["server/**/*.test.ts", "tests/api/**/*.test.ts", "tests/faults/**/*.test.ts"],
           globalSetup: ["tests/helpers/global-setup.ts"],
           testTimeout: 30_000,
           hookTimeout: 60_000,

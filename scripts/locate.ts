@@ -1,4 +1,4 @@
-// npm run -s locate -- FILE.json [--field]
+// npm run -s locate -- FILE.json [--field] [--readings] [--delay]
 // Prints exactly one JSON object on stdout (docs/locator/command-line.md); problems go to stderr, exit non-zero.
 import { readFileSync } from "node:fs";
 import { LocatorInputError, parseLocatorInput } from "#core/contracts/locator-input";
@@ -12,8 +12,9 @@ function fail(message: string, code: number): never {
 const args = process.argv.slice(2);
 const withField = args.includes("--field");
 const withReadings = args.includes("--readings");
+const withDelay = args.includes("--delay");
 const files = args.filter((a) => !a.startsWith("--"));
-if (files.length !== 1) fail("usage: npm run -s locate -- FILE.json [--field] [--readings]", 64);
+if (files.length !== 1) fail("usage: npm run -s locate -- FILE.json [--field] [--readings] [--delay]", 64);
 
 let raw: string;
 try {
@@ -37,6 +38,8 @@ try {
     assumptions: result.assumptions,
   };
   if (withReadings) out.readings = result.readings;
+  // the delay checked against the readings: stated, estimated and used shift, s (docs/locator/pipeline.md)
+  if (withDelay) out.delay = result.delay;
   if (withField) {
     const f = result.field;
     // NaN (unknown) is not JSON: unknown cells are written as null

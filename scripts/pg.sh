@@ -1,5 +1,5 @@
 #!/usr/bin/env bash
-# Project-local PostgreSQL: pg.sh start|stop|status NAME PORT
+# Project-local PostgreSQL: pg.sh start|stop|status|destroy NAME PORT
 # NAME picks the cluster folder (.data/NAME), so `npm start` and `npm test` never share one.
 # Installs Debian's postgresql when its binaries are missing; runs the server as the
 # `postgres` user when we are root (initdb refuses root), as ourselves otherwise.
@@ -84,6 +84,10 @@ case "$cmd" in
     ;;
   stop)
     if [ -f "$dir/postmaster.pid" ]; then as_pg "$pgbin/pg_ctl" -D "$dir" -m fast -w stop >/dev/null || true; fi
+    ;;
+  destroy) # stop and delete the cluster (fault tests' private clusters)
+    if [ -f "$dir/postmaster.pid" ]; then as_pg "$pgbin/pg_ctl" -D "$dir" -m immediate -w stop >/dev/null || true; fi
+    rm -rf "$dir"
     ;;
   status)
     as_pg "$pgbin/pg_isready" -h 127.0.0.1 -p "$port"

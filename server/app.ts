@@ -9,6 +9,8 @@ import type { AppContext } from "./context";
 import { loadAuth } from "./middleware/auth";
 import { csrfProtection } from "./middleware/csrf";
 import { errorHandler, notFoundApi } from "./middleware/error-handler";
+import { refuseDeepJson } from "./middleware/json-depth";
+import { securityHeaders } from "./middleware/security-headers";
 import { authRouter } from "./api/auth/auth.router";
 import { teamRouter } from "./api/team/team.router";
 import { invitationsRouter } from "./api/invitations/invitations.router";
@@ -27,6 +29,8 @@ import { findingsRouter } from "./api/findings/findings.router";
 import { complianceRouter } from "./api/compliance/compliance.router";
 import { todayRouter } from "./api/compliance/today.router";
 import { exportsRouter } from "./api/exports/exports.router";
+import { healthRouter } from "./api/health/health.router";
+import { jobsRouter } from "./api/jobs/jobs.router";
 
 const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
 
@@ -34,7 +38,14 @@ const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
 export function createApp(ctx: AppContext): Express {
   const app = express();
   app.disable("x-powered-by");
-  app.set("trust proxy", "loopback");
+  app.set("trust proxy", ctx.config.trustProxy ?? false);
+  app.use(securityHeaders({ https: ctx.config.secureCookies }));
+  app.use(healthRouter(ctx));
+  // While draining, each answer closes its connection so clients reconnect to another process.
+  app.use((_req, res, next) => {
+    if (ctx.lifecycle?.draining) res.set("Connection", "close");
+    next();
+  });
   app.use(
     pinoHttp({
       logger: ctx.logger,
@@ -46,7 +57,7 @@ export function createApp(ctx: AppContext): Express {
       },
     }),
   );
-  app.use(express.json({ limit: "5mb" }));
+  app.use(express.json({ limit: "5mb", verify: refuseDeepJson }));
 
   const PgStore = connectPgSimple(session);
   app.use(
@@ -62,14 +73,18 @@ export function createApp(ctx: AppContext): Express {
       resave: false,
       saveUninitialized: false,
       rolling: true,
-      cookie: { httpOnly: true, sameSite: "lax", secure: ctx.config.secureCookies, maxAge: 30 * 24 * 60 * 60 * 1000 },
+      // Secure when the app URL is https, else whenever the request came over https ("auto": req.secure,
+      // which believes X-Forwarded-Proto only from a proxy TRUST_PROXY names).
+      cookie: {
+        httpOnly: true,
+        sameSite: "lax",
+        secure: ctx.config.secureCookies ? true : "auto",
+        maxAge: 30 * 24 * 60 * 60 * 1000,
+      },
     }),
   );
 
   const api = express.Router();
-  api.get("/health", (_req, res) => {
-    res.json({ ok: true });
-  });
   api.use(loadAuth(ctx.db));
   api.use(csrfProtection);
   api.use(authRouter(ctx));
@@ -90,6 +105,7 @@ export function createApp(ctx: AppContext): Express {
   api.use(complianceRouter(ctx));
   api.use(todayRouter(ctx));
   api.use(exportsRouter(ctx));
+  api.use(jobsRouter(ctx));
   api.use(notFoundApi);
   app.use("/api", api);
 

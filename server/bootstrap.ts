@@ -3,7 +3,9 @@ import type { Env } from "./env";
 import type { AppContext } from "./context";
 import { createDb, migrateDb } from "./db/client";
 import { createSmtpMailer } from "./mail/mailer";
+import { createMailQueue } from "./mail/mail-queue";
 import { startFakeSmtp, type FakeSmtp } from "./mail/fake-smtp";
+import { createLifecycle } from "./lifecycle";
 import { storageFromEnv } from "./storage/storage-from-env";
 
 /** The fake SMTP server on its usual port, or any free one when another checkout already has it. */
@@ -25,11 +27,14 @@ export interface Runtime {
 /** Connects, migrates, starts the fake SMTP server when no real one is configured, and builds the context. */
 export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): Promise<Runtime> {
   const logger = pino({ level: env.LOG_LEVEL });
-  const { pool, db } = createDb(env.DATABASE_URL);
+  // A database restart breaks idle pooled connections: log it and let the pool make new ones.
+  const { pool, db } = createDb(env.DATABASE_URL, {
+    onConnectionError: (err) => logger.warn({ err: { message: err.message } }, "database connection lost"),
+  });
   await migrateDb(db);
 
   const fakeSmtp = env.SMTP_HOST ? null : await startFakeSmtpOnFreePort(db, env.FAKE_SMTP_PORT);
-  const mailer = createSmtpMailer(
+  const transport = createSmtpMailer(
     {
       host: env.SMTP_HOST ?? "127.0.0.1",
       port: fakeSmtp ? fakeSmtp.port : env.SMTP_PORT,
@@ -37,9 +42,17 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
       user: env.SMTP_USER,
       pass: env.SMTP_PASS,
       from: env.MAIL_FROM,
+      timeoutMs: env.SMTP_TIMEOUT_MS,
     },
     Boolean(fakeSmtp),
   );
+  const mailer = createMailQueue(db, transport, logger, {
+    retryLimit: env.MAIL_RETRY_LIMIT,
+    retryDelayS: env.MAIL_RETRY_DELAY_S,
+    pollingIntervalS: env.JOB_POLL_INTERVAL_S,
+  });
+  // Every process runs the mail worker: any of them may deliver any message.
+  await mailer.start();
 
   const uploads = storageFromEnv(env);
   logger.info({ storage: uploads.kind }, "uploads storage");
@@ -48,6 +61,7 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
     pool,
     mailer,
     logger,
+    lifecycle: createLifecycle(),
     storage: uploads.storage,
     config: {
       sessionSecret: env.SESSION_SECRET,
@@ -59,6 +73,8 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
       uploadsDir: env.UPLOADS_DIR,
       planImageLimits: { maxPixels: Math.round(env.PLAN_MAX_MEGAPIXELS * 1_000_000) },
       secureCookies: (env.APP_URL ?? "").startsWith("https://"),
+      syncThrottle: { limit: env.SYNC_RATE_LIMIT, windowMs: env.SYNC_RATE_WINDOW_MS },
+      trustProxy: env.TRUST_PROXY,
       serveClient: true,
     },
   };
@@ -67,6 +83,7 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
     ctx,
     fakeSmtp,
     async close() {
+      await mailer.stop();
       await ctx.analysisRunner?.close();
       await ctx.reportRunner?.close();
       mailer.close();

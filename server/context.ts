@@ -1,10 +1,11 @@
 import type pg from "pg";
 import type { Logger } from "pino";
 import type { Db } from "./db/client";
-import type { Mailer } from "./mail/mailer";
+import type { MailQueue } from "./mail/mail-queue";
 import type { BlobStorage } from "./storage/blob-storage";
 import type { AnalysisRunner } from "./jobs/analysis-runner";
 import type { ReportRunner } from "./jobs/report-runner";
+import type { Lifecycle } from "./lifecycle";
 
 /** Plan upload limits; each has a default (server/api/plans/plan-resources.ts). */
 export interface PlanImageLimits {
@@ -28,16 +29,23 @@ export interface AppConfig {
   outboxEnabled: boolean;
   uploadsDir: string;
   secureCookies: boolean;
+  /** Express "trust proxy": false (default: believe no X-Forwarded-* header), a hop count, or addresses. */
+  trustProxy?: false | number | string[];
+  /** Password-reset request limits; defaults in server/api/auth/auth.router.ts. */
+  resetRateLimit?: { perAddress?: number; perClient?: number; windowMs?: number };
   /** Serve the built client from dist/client (off in API-only tests). */
   serveClient: boolean;
   planImageLimits?: Partial<PlanImageLimits>;
+  /** Per-member limit on the Walk sync writes (server/middleware/sync-throttle.ts). */
+  syncThrottle?: { limit?: number; windowMs?: number };
 }
 
 /** Everything a request handler may reach; built once and passed to createApp. */
 export interface AppContext {
   db: Db;
   pool: pg.Pool;
-  mailer: Mailer;
+  /** The outgoing mail queue: `send` resolves once the message is stored, not once delivered. */
+  mailer: MailQueue;
   config: AppConfig;
   logger: Logger;
   /** Where uploads live (server/storage/storage-from-env.ts); tests without one get a disk store under config.uploadsDir. */
@@ -46,4 +54,6 @@ export interface AppContext {
   analysisRunner?: AnalysisRunner;
   /** The worker that draws and lays out report PDFs; made on first use (server/api/reports). */
   reportRunner?: ReportRunner;
+  /** Set while shutting down (server/index.ts); /readyz and keep-alive read it. */
+  lifecycle?: Lifecycle;
 }

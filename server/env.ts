@@ -1,6 +1,31 @@
 import { z } from "zod";
 
 // All configuration comes from the environment, checked once at start-up with a clear message.
+// Which proxies' X-Forwarded-For/-Proto are believed: "false" (none, the default), a hop count, or a
+// comma-separated list of addresses, subnets and Express's names (loopback, linklocal, uniquelocal).
+const proxyEntry = z.union([
+  z.enum(["loopback", "linklocal", "uniquelocal"]),
+  z.ipv4(),
+  z.ipv6(),
+  z.cidrv4(),
+  z.cidrv6(),
+]);
+const trustProxySchema = z
+  .string()
+  .trim()
+  .default("false")
+  .transform((v, c): false | number | string[] => {
+    if (v === "false" || v === "") return false;
+    if (/^\d+$/.test(v) && Number(v) >= 1 && Number(v) <= 10) return Number(v);
+    const list = v.split(",").map((s) => s.trim());
+    if (list.every((s) => proxyEntry.safeParse(s).success)) return list;
+    c.addIssue({
+      code: "custom",
+      message: "must be false, a hop count from 1 to 10, or a comma-separated list of proxy addresses or subnets",
+    });
+    return z.NEVER;
+  });
+
 const envSchema = z
   .object({
     NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
@@ -13,6 +38,7 @@ const envSchema = z
       .min(16, "SESSION_SECRET must be at least 16 characters")
       .default("plumeline-local-development-secret"),
     BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(12),
+    TRUST_PROXY: trustProxySchema,
     LOGIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
     LOGIN_RATE_WINDOW_MS: z.coerce
       .number()
@@ -26,6 +52,13 @@ const envSchema = z
     SMTP_PASS: z.string().optional(),
     SMTP_SECURE: z.enum(["true", "false"]).default("false"),
     MAIL_FROM: z.string().default("Plumeline <no-reply@plumeline.local>"),
+    // A mail server that does not answer fails the attempt after this long; the queue retries it.
+    SMTP_TIMEOUT_MS: z.coerce.number().int().min(500).max(120_000).default(10_000),
+    // Outgoing mail: retries after the first try, and the base delay (doubled per retry, with jitter).
+    MAIL_RETRY_LIMIT: z.coerce.number().int().min(0).max(30).default(8),
+    MAIL_RETRY_DELAY_S: z.coerce.number().int().min(1).max(3600).default(30),
+    // How often an idle worker asks the job queue for work (pg-boss's minimum is 0.5 s).
+    JOB_POLL_INTERVAL_S: z.coerce.number().min(0.5).max(60).default(2),
     FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
     UPLOADS_DIR: z.string().default("uploads"),
     // Where uploads live: "disk" (UPLOADS_DIR, one machine) or "s3" (any S3-compatible object store,
@@ -46,6 +79,14 @@ const envSchema = z
       .default(40),
     LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
     SEED_DEMO: z.enum(["true", "false"]).default("true"),
+    // Walk sync writes per member per window; over it the answer is 503 with Retry-After.
+    SYNC_RATE_LIMIT: z.coerce.number().int().min(1).default(600),
+    SYNC_RATE_WINDOW_MS: z.coerce.number().int().min(1000).default(60_000),
+    // On SIGTERM: how long in-flight requests and jobs may run before they are cut off.
+    SHUTDOWN_GRACE_MS: z.coerce.number().int().min(0).max(600_000).default(20_000),
+    // On SIGTERM: how long to keep serving while /readyz already says "draining", so a load balancer
+    // stops sending new requests before the listener closes.
+    SHUTDOWN_DELAY_MS: z.coerce.number().int().min(0).max(60_000).default(0),
   })
   .superRefine((env, ctx) => {
     if (env.STORAGE === "s3" && !env.S3_BUCKET) {

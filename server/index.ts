@@ -4,6 +4,7 @@ import { bootstrap } from "./bootstrap";
 import { createApp } from "./app";
 import { seedDemoIfEmpty, DEMO_SIGN_INS } from "./db/seed/demo";
 import { startDigestSchedule } from "./jobs/digest";
+import { waitUntil } from "./lifecycle";
 
 // Listening and shutting down only; the app itself is built in app.ts.
 const env = readEnv();
@@ -37,15 +38,46 @@ const server = createApp(ctx).listen(env.PORT, env.HOST, () => {
   console.log(lines.filter((l, i) => l !== "" || i === 0 || lines[i - 1] !== "").join("\n"));
 });
 
-let closing = false;
+let closing: string | null = null;
+/**
+ * Graceful stop: report not-ready (for SHUTDOWN_DELAY_MS while still serving), stop accepting, let in-flight requests and worker jobs finish
+ * (bounded by SHUTDOWN_GRACE_MS), then close the pool.
+ */
 async function shutdown(signal: string) {
-  if (closing) return;
-  closing = true;
-  ctx.logger.info({ signal }, "shutting down");
+  if (closing) {
+    // The same signal again (Ctrl-C twice) stops at once; another kind (the start script's TERM
+    // after the terminal's INT) lets the drain go on.
+    if (signal !== closing) return;
+    ctx.logger.warn({ signal }, "second signal: stopping now");
+    process.exit(1);
+  }
+  closing = signal;
+  const deadline = Date.now() + env.SHUTDOWN_GRACE_MS;
+  ctx.logger.info({ signal, graceMs: env.SHUTDOWN_GRACE_MS }, "shutting down: draining");
+  ctx.lifecycle!.draining = true;
   digest.stop();
-  server.close();
-  server.closeAllConnections();
+  if (env.SHUTDOWN_DELAY_MS > 0) await new Promise((r) => setTimeout(r, env.SHUTDOWN_DELAY_MS));
+  const closed = new Promise<void>((resolve) => server.close(() => resolve()));
+  // Keep-alive connections go once their current answer is out (it carries Connection: close).
+  const sweepIdle = setInterval(() => server.closeIdleConnections(), 250);
+  server.closeIdleConnections();
+  const cutOff = setTimeout(
+    () => {
+      ctx.logger.warn("grace period over: closing the connections still open");
+      server.closeAllConnections();
+    },
+    Math.max(0, deadline - Date.now()),
+  );
+  await closed;
+  clearTimeout(cutOff);
+  clearInterval(sweepIdle);
+  const jobsDone = await waitUntil(
+    () => (ctx.analysisRunner?.load ?? 0) + (ctx.reportRunner?.load ?? 0) === 0,
+    Math.max(deadline, Date.now() + 1_000),
+  );
+  if (!jobsDone) ctx.logger.warn("grace period over: stopping the jobs still running");
   await runtime.close();
+  ctx.logger.info("stopped");
   process.exit(0);
 }
 process.on("SIGINT", () => void shutdown("SIGINT"));

@@ -115,6 +115,83 @@ describe("locate on small fixed stores", () => {
     expect(r.readings[0].flags).toContain("before-delay");
   });
 
+  describe("with a wrong stated delay", () => {
+    // the readings were taken with D + τ = 4 s; the detector is said to have 10 s (as a new user might set it)
+    const leak: [number, number] = [9.5, 5.3];
+    const truth = parseLocatorInput(store((x, y) => 0.3 + 40 * Math.exp(-aroundGondola([x, y], leak) / 1.2)));
+    const wrong = { ...truth, instrument: { ...truth.instrument, transportDelayS: 9 } };
+
+    it("does not turn a plume twenty times the alarm into a clean sweep", () => {
+      // the passes here run 1.1 m apart, too far to check the delay against each other, and with 10 s no
+      // spot fits: the locator tries other delays and says which one it used
+      const r = locate(wrong);
+      expect(r.delay.statedS).toBe(10);
+      expect(r.candidates.length).toBeGreaterThan(0);
+      expect(r.delay.usedS).not.toBe(10);
+      expect(Math.hypot(r.candidates[0].x - leak[0], r.candidates[0].y - leak[1])).toBeLessThan(1.5);
+      expect(r.diagnostics.find((d) => d.kind === "delay-uncertain")!.message).toMatch(/detector's 10 s delay/);
+      expect(r.assumptions[0]).toContain(`(${r.delay.usedS} s)`);
+    });
+
+    it("never reports a plume far above the alarm as a clean sweep when the delay was set by hand", () => {
+      const r = locate(wrong, { delayFromReadings: false });
+      const saysWhy = r.diagnostics.some((d) => d.kind === "delay-uncertain");
+      expect(r.candidates.length > 0 || saysWhy).toBe(true);
+    });
+
+    it("leaves a right delay alone", () => {
+      const r = locate(truth);
+      expect(r.delay.usedS).toBe(4);
+      expect(r.delay.supported).toBe(false);
+      expect(r.diagnostics.some((d) => d.kind === "delay-check" || d.kind === "delay-uncertain")).toBe(false);
+    });
+  });
+
+  it("places the spots with the delay the readings support when passes overlap", () => {
+    // a case along y 1–2 m, walked along its face (y 2.4 m) east, west and east again at 1 m/s, a tap
+    // every half second; the detector really lags 4 s but is said to lag 8 s
+    const at = (t: number): number => {
+      const leg = Math.floor(t / 18);
+      const s = t - 18 * leg;
+      return leg % 2 === 0 ? 1 + s : 19 - s;
+    };
+    const leak = { x: 10, y: 1.9 };
+    const readings: { x: number; y: number; t: number; ppm: number }[] = [];
+    for (let t = 0; t <= 54; t += 0.5) {
+      const drawn = at(Math.max(0, t - 4));
+      const d = Math.hypot(drawn - leak.x, 2.4 - leak.y);
+      readings.push({ x: at(t), y: 2.4, t, ppm: Math.round(0.3 + 25 * Math.exp(-d / 1.2)) });
+    }
+    const plan = {
+      width: 20,
+      height: 5,
+      fixtures: [{ id: "c1", kind: "open-case" as const, polygon: rect(0.5, 1, 19.5, 2), fans: false }],
+    };
+    const input = parseLocatorInput({
+      plan,
+      instrument: { transportDelayS: 8, timeConstantS: 0, alarmPpm: 2 },
+      readings,
+    });
+    const r = locate(input);
+    expect(r.delay.supported).toBe(true);
+    expect(Math.abs(r.delay.estimatedS! - 4)).toBeLessThanOrEqual(1);
+    expect(r.delay.usedS).toBe(r.delay.estimatedS);
+    expect(Math.hypot(r.candidates[0].x - leak.x, r.candidates[0].y - leak.y)).toBeLessThan(1.5);
+    expect(r.diagnostics.find((d) => d.kind === "delay-check")!.message).toMatch(/better than the detector's 8 s/);
+    // at 8 s no spot fits this 25 ppm plume, so even a delay set by hand gives way, and the result says so
+    const byHand = locate(input, { delayFromReadings: false });
+    expect(byHand.delay.usedS).not.toBe(8);
+    expect(byHand.diagnostics.some((d) => d.kind === "delay-uncertain")).toBe(true);
+    // at 7 s set by hand, spots fit and the stated delay is used as given, with the check reported
+    const seven = locate(
+      { ...input, instrument: { ...input.instrument, transportDelayS: 7 } },
+      { delayFromReadings: false },
+    );
+    expect(seven.delay).toMatchObject({ statedS: 7, usedS: 7, supported: true });
+    expect(seven.candidates.length).toBeGreaterThan(0);
+    expect(seven.diagnostics.some((d) => d.kind === "delay-check")).toBe(true);
+  });
+
   it("lists no suspect spot when nothing leaks", () => {
     const r = locate(parseLocatorInput(store((x, y) => ((x * 7 + y * 3) % 2 < 0.6 ? 1 : 0))));
     expect(r.candidates).toEqual([]);

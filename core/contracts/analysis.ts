@@ -1,7 +1,10 @@
 import { z } from "zod";
+import { SECONDS_STEP } from "./quantities";
 import type { Candidate, Diagnostic, CorrectedReading } from "./locator-output";
 
 // The field map's analysis: GET /api/sweeps/:id/analysis. Candidates are suspect spots.
+
+const tenths = (v: number) => Number((Math.round(v / SECONDS_STEP) * SECONDS_STEP).toFixed(1));
 
 export const analysisQuery = z.object({
   transportDelayS: z.coerce
@@ -9,12 +12,15 @@ export const analysisQuery = z.object({
     .finite("must be a finite number of seconds")
     .min(0, "must be 0 s or more")
     .max(60, "must be at most 60 s (a longer sample line than any hand detector has)")
+    // Tenths of a second: each distinct value is a new analysis job and a stored row.
+    .transform(tenths)
     .optional(),
   timeConstantS: z.coerce
     .number("must be a number of seconds")
     .finite("must be a finite number of seconds")
     .min(0, "must be 0 s or more")
     .max(30, "must be at most 30 s")
+    .transform(tenths)
     .optional(),
   /** "true": wait for a stale result's recompute instead of answering with the stale one. */
   wait: z.enum(["true", "false"], "must be true or false").optional(),
@@ -54,6 +60,8 @@ const LOCATOR_DIAGNOSTIC_KINDS = [
   "one-sided-pass",
   "early-readings",
   "over-range",
+  "delay-check",
+  "delay-uncertain",
 ] as const;
 /** API-added diagnostics beside the locator's own kinds. */
 const API_DIAGNOSTIC_KINDS = ["detector-overdue", "detector-settings", "delay-changed"] as const;

@@ -1,11 +1,12 @@
 import { z } from "zod";
+import { text } from "./text";
 import { lengthUnitSchema, massUnitSchema } from "./units";
 
 export const RULE_PROFILES = ["us-federal", "eu-fgas", "custom"] as const;
 export const LEAK_RATE_METHODS = ["annualizing", "rolling-average"] as const;
 
 export const companySettings = z.object({
-  name: z.string().trim().min(1, "is required").max(120, "must be at most 120 characters"),
+  name: text().trim().min(1, "is required").max(120, "must be at most 120 characters"),
   lengthUnit: lengthUnitSchema,
   massUnit: massUnitSchema,
   ruleProfile: z.enum(RULE_PROFILES),

@@ -1,4 +1,6 @@
 import { z } from "zod";
+import { text } from "./text";
+import { bounded, DETECTOR_SECONDS_MAX, PPM_PHYSICAL_MAX, PPM_STEP, SECONDS_STEP, stepped } from "./quantities";
 import { levelScaleProblems } from "../domain/detectors/level-scale";
 
 export const SENSING_PRINCIPLES = ["heated-diode", "infrared", "other"] as const;
@@ -10,9 +12,9 @@ export const PRINCIPLE_LABELS: Record<(typeof SENSING_PRINCIPLES)[number], strin
 
 const levelBand = z
   .object({
-    level: z.string().trim().min(1, "is required").max(20, "must be at most 20 characters"),
-    minPpm: z.number("must be a number").finite().min(0, "must be 0 or more"),
-    maxPpm: z.number("must be a number").finite().positive("must be above 0").nullable(),
+    level: text().trim().min(1, "is required").max(20, "must be at most 20 characters"),
+    minPpm: bounded("ppm", 0, PPM_PHYSICAL_MAX),
+    maxPpm: bounded("ppm", 0, PPM_PHYSICAL_MAX, { aboveMin: true }).nullable(),
   })
   .refine((b) => b.maxPpm === null || b.maxPpm > b.minPpm, {
     path: ["maxPpm"],
@@ -20,27 +22,17 @@ const levelBand = z
   });
 
 export const detectorInput = z.object({
-  name: z.string().trim().min(1, "is required").max(80, "must be at most 80 characters"),
+  name: text().trim().min(1, "is required").max(80, "must be at most 80 characters"),
   principle: z.enum(SENSING_PRINCIPLES, "must be heated-diode, infrared or other"),
   // Defaults: 5 s transport delay and 2 ppm alarm are common practice for hose-sampling
   // detectors (no published source); set them from the instrument's manual.
-  transportDelayS: z
-    .number("must be a number")
-    .finite()
-    .min(0, "must be 0 or more")
-    .max(60, "must be at most 60 s")
-    .default(5),
-  timeConstantS: z
-    .number("must be a number")
-    .finite()
-    .min(0, "must be 0 or more")
-    .max(60, "must be at most 60 s")
-    .default(1.5),
+  transportDelayS: stepped("s", 0, DETECTOR_SECONDS_MAX, SECONDS_STEP).default(5),
+  timeConstantS: stepped("s", 0, DETECTOR_SECONDS_MAX, SECONDS_STEP).default(1.5),
   alarmPpm: z
-    .number("must be a number")
-    .finite()
-    .positive("must be above 0")
-    .max(10000, "must be at most 10,000 ppm")
+    .number("must be a number of ppm")
+    .finite("must be a finite number of ppm")
+    .transform((v) => Math.round(v / PPM_STEP) * PPM_STEP)
+    .pipe(bounded("ppm", PPM_STEP, 10_000))
     .default(2),
   lastCheckedOn: z.iso.date("must be a date (YYYY-MM-DD)").nullable().default(null),
   levelScale: z
@@ -59,9 +51,9 @@ export type DetectorInput = z.infer<typeof detectorInput>;
 
 export const detector = detectorInput.extend({
   id: z.uuid(),
-  archivedAt: z.string().nullable(),
+  archivedAt: text().nullable(),
   /** Date the next calibration / bump check falls due, from the company's interval. */
-  checkDueOn: z.string().nullable(),
+  checkDueOn: text().nullable(),
   overdue: z.boolean(),
 });
 export type Detector = z.infer<typeof detector>;

@@ -1,10 +1,12 @@
 import { z } from "zod";
+import { text } from "./text";
 import { DISMISS_REASONS, FINDING_COMPONENTS, FINDING_EVENT_KINDS, finding, findingEvent } from "./findings";
 
-const isoDate = z
-  .string({ error: "must be a date as YYYY-MM-DD" })
-  .regex(/^\d{4}-\d{2}-\d{2}$/, "must be a date as YYYY-MM-DD");
-const note = z.string({ error: "must be text" }).trim().max(2000, "must be at most 2,000 characters").default("");
+const isoDate = text({ error: "must be a date as YYYY-MM-DD" }).regex(
+  /^\d{4}-\d{2}-\d{2}$/,
+  "must be a date as YYYY-MM-DD",
+);
+const note = text({ error: "must be text" }).trim().max(2000, "must be at most 2,000 characters").default("");
 /** The day on the store's calendar; defaults to the store's today. Never in the future. */
 const on = isoDate.optional();
 const result = z.enum(["passed", "failed"], { error: "must be passed or failed" });
@@ -41,28 +43,26 @@ export const findingEventDetail = findingEvent.extend({
 });
 
 export const findingDeadline = z.object({
-  what: z.string(),
-  dueOn: z.string(),
+  what: text(),
+  dueOn: text(),
   state: z.enum(["overdue", "due-today", "due-soon", "upcoming"]),
   daysLeft: z.number(),
-  source: z.string(),
+  source: text(),
 });
 
 /** The Finding contract plus what the finding screen shows; every added field is extra, none changed. */
 export const findingDetail = finding.extend({
   events: z.array(findingEventDetail),
-  storeName: z.string(),
-  timeZone: z.string(),
-  systemName: z.string().nullable(),
+  storeName: text(),
+  timeZone: text(),
+  systemName: text().nullable(),
   /** The fixture's label on the plan ("Dairy 3"), when the finding names one. */
-  fixtureLabel: z.string().nullable(),
-  refrigerantId: z.string().nullable(),
+  fixtureLabel: text().nullable(),
+  refrigerantId: text().nullable(),
   dismissReason: z.enum(DISMISS_REASONS).nullable(),
   nextActions: z.array(z.enum(["confirm", "repair", "initial-test", "follow-up-test", "close", "dismiss"])),
   deadlines: z.array(findingDeadline),
-  cautions: z.array(
-    z.object({ id: z.string(), level: z.enum(["warning", "notice"]), text: z.string(), source: z.string() }),
-  ),
+  cautions: z.array(z.object({ id: text(), level: z.enum(["warning", "notice"]), text: text(), source: text() })),
 });
 export type FindingDetail = z.infer<typeof findingDetail>;
 export const findingListResponse = z.object({ findings: z.array(findingDetail) });

@@ -1,4 +1,6 @@
 import { z } from "zod";
+import { text } from "./text";
+import { PLAN_COORD_MAX_M } from "./quantities";
 
 // A finding is a leak record: suspected → confirmed → repaired → verified → closed, or dismissed.
 // The Walk screen creates one at a pinpointed leak, the field map from a suspect spot, anyone by hand.
@@ -36,7 +38,12 @@ export const COMPONENT_LABELS: Record<(typeof FINDING_COMPONENTS)[number], strin
   other: "Other",
 };
 
-const finite = (what: string) => z.number(`${what} must be a number`).finite(`${what} must be a finite number`);
+const finite = (what: string) =>
+  z
+    .number(`${what} must be a number`)
+    .finite(`${what} must be a finite number`)
+    .min(-PLAN_COORD_MAX_M, `${what} must be at least -${PLAN_COORD_MAX_M} m`)
+    .max(PLAN_COORD_MAX_M, `${what} must be at most ${PLAN_COORD_MAX_M} m`);
 
 /** Create a finding. `clientId` (made on the device) makes an offline retry store it once. */
 export const createFindingInput = z
@@ -52,7 +59,7 @@ export const createFindingInput = z
     x: finite("x").nullable().default(null),
     y: finite("y").nullable().default(null),
     component: z.enum(FINDING_COMPONENTS).nullable().default(null),
-    note: z.string().trim().max(2000, "must be at most 2,000 characters").default(""),
+    note: text().trim().max(2000, "must be at most 2,000 characters").default(""),
     /** When the leak was found (ISO instant); defaults to now on the server. */
     foundAt: z.iso.datetime({ offset: true, message: "must be a date and time" }).optional(),
   })
@@ -61,20 +68,20 @@ export type CreateFindingInput = z.input<typeof createFindingInput>;
 
 export const findingPhoto = z.object({
   id: z.uuid(),
-  url: z.string(),
-  thumbUrl: z.string(),
-  takenAt: z.string(),
-  by: z.string(),
+  url: text(),
+  thumbUrl: text(),
+  takenAt: text(),
+  by: text(),
 });
 
 export const findingEvent = z.object({
   id: z.uuid(),
   status: z.enum(FINDING_STATUSES),
   /** The day it happened, in the store's time zone (YYYY-MM-DD). */
-  on: z.string(),
-  at: z.string(),
-  by: z.string(),
-  note: z.string(),
+  on: text(),
+  at: text(),
+  by: text(),
+  note: text(),
 });
 
 export const finding = z.object({
@@ -89,9 +96,9 @@ export const finding = z.object({
   component: z.enum(FINDING_COMPONENTS).nullable(),
   source: z.enum(FINDING_SOURCES),
   status: z.enum(FINDING_STATUSES),
-  note: z.string(),
-  foundAt: z.string(),
-  foundBy: z.string(),
+  note: text(),
+  foundAt: text(),
+  foundBy: text(),
   events: z.array(findingEvent),
   photos: z.array(findingPhoto),
 });

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { text } from "./text";
 
 export const fixtureTrendsQuery = z.object({
   /** The earlier and later sweep being compared; default the two latest. */
@@ -10,15 +11,15 @@ export const fixtureLevelSchema = z.object({ sweepId: z.uuid(), peakPpm: z.numbe
 
 export const fixtureTrendsResponse = z.object({
   sweeps: z.array(
-    z.object({ id: z.uuid(), startedAt: z.string(), planId: z.uuid(), status: z.string(), technicianName: z.string() }),
+    z.object({ id: z.uuid(), startedAt: text(), planId: z.uuid(), status: text(), technicianName: text() }),
   ),
   a: z.uuid().nullable(),
   b: z.uuid().nullable(),
   fixtures: z.array(
     z.object({
       id: z.uuid(),
-      label: z.string(),
-      kind: z.string(),
+      label: text(),
+      kind: text(),
       /** One entry per sweep above, in the same order; null where the sweep did not sample it. */
       levels: z.array(fixtureLevelSchema.nullable()),
       /** Peak in b minus peak in a, ppm; null when either is unknown. */

@@ -6,6 +6,8 @@
  * carry any rotation baked into their vertices; points are {x, y}.
  */
 import { z } from "zod";
+import { text } from "./text";
+import { bounded, PLAN_COORD_MAX_M, PPM_PHYSICAL_MAX } from "./quantities";
 import { polygonArea } from "../analysis/geometry/polygon-area";
 import { isSelfIntersecting } from "../analysis/geometry/segments";
 import { FIXTURE_KINDS, POINT_KINDS, ROOM_KINDS, SOLID_BODY_KINDS } from "./fixture-kinds";
@@ -18,7 +20,7 @@ export const FIXTURES_MAX = 5000;
 /** Rounding after rotations may leave a vertex a hair outside; a micrometre is no error. */
 export const BOUNDS_TOLERANCE_M = 1e-6;
 
-const metres = z.number({ error: "must be a finite number of metres" });
+const metres = bounded("metres", -PLAN_COORD_MAX_M, PLAN_COORD_MAX_M);
 
 export const PlanPointSchema = z.object({ x: metres, y: metres }, { error: "must be an {x, y} position in metres" });
 export const VertexSchema = z.tuple([metres, metres], { error: "must be an [x, y] pair of metres" });
@@ -39,7 +41,7 @@ export const RoomDoorSchema = z.object(
 
 const base = {
   id: z.uuid({ error: "must be a UUID" }),
-  label: z.string({ error: "must be text" }).max(LABEL_MAX, { error: `must be at most ${LABEL_MAX} characters` }),
+  label: text({ error: "must be text" }).max(LABEL_MAX, { error: `must be at most ${LABEL_MAX} characters` }),
   systemId: z.uuid({ error: "must be a system's UUID or null" }).nullable(),
   hasFans: z.boolean({ error: "must be true or false" }),
 };
@@ -72,8 +74,8 @@ export const BenignZoneFixtureSchema = z.object({
   ...base,
   kind: z.literal("benign-zone"),
   polygon: PolygonSchema,
-  note: z.string({ error: "must be text" }).max(NOTE_MAX, { error: `must be at most ${NOTE_MAX} characters` }),
-  typicalPpm: z.number({ error: "must be a finite ppm or null" }).min(0, { error: "must be 0 ppm or more" }).nullable(),
+  note: text({ error: "must be text" }).max(NOTE_MAX, { error: `must be at most ${NOTE_MAX} characters` }),
+  typicalPpm: bounded("ppm", 0, PPM_PHYSICAL_MAX).nullable(),
 });
 export const PointFixtureSchema = z.object({
   ...base,

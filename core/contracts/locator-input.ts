@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { text } from "./text";
 import { signedArea } from "../analysis/geometry/polygon-area";
 import { isSelfIntersecting } from "../analysis/geometry/segments";
 
@@ -51,7 +52,7 @@ const polygon = z.array(vertex, { error: "polygon must be an array of [x, y] ver
   return ring;
 });
 
-const id = z.string({ error: "id must be a string" }).min(1, "id must not be empty");
+const id = text({ error: "id must be a string" }).min(1, "id must not be empty");
 
 export const fixtureKinds = ["open-case", "island-case", "door-case", "walk-in", "machine-room"] as const;
 export const riskPointKinds = ["line-set", "valve", "coil"] as const;
@@ -76,7 +77,7 @@ const backgroundZone = z.object({
   ppm: finite("ppm")
     .refine((v) => v >= 0, "ppm must not be negative")
     .optional(),
-  note: z.string().optional(),
+  note: text().optional(),
 });
 
 const plan = z.object({
@@ -106,7 +107,7 @@ const reading = z.object({
     .refine((v) => v >= 0, "ppm must not be negative"),
   atLeast: z.boolean({ error: "atLeast must be true or false" }).optional(),
   point: z.enum(readingPoints, { error: `point must be one of ${readingPoints.join(", ")}` }).optional(),
-  note: z.string().optional(),
+  note: text().optional(),
 });
 
 export const locatorInputSchema = z

@@ -25,7 +25,9 @@ export type DiagnosticKind =
   | "sparse-coverage"
   | "one-sided-pass"
   | "early-readings"
-  | "over-range";
+  | "over-range"
+  | "delay-check"
+  | "delay-uncertain";
 
 export interface Diagnostic {
   kind: DiagnosticKind;
@@ -62,7 +64,26 @@ export interface FieldGrid {
   confidence: Float32Array;
 }
 
+/**
+ * The detector's delay checked against the readings (core/analysis/lag/delay-check.ts). Shifts are the
+ * transport delay plus the time constant, in seconds.
+ */
+export interface DelayFacts {
+  /** The shift the detector states. */
+  statedS: number;
+  /** The shift the readings fit best; null when no two visits overlap, so nothing can be checked. */
+  estimatedS: number | null;
+  /** The readings clearly fit the estimate better than the stated shift. */
+  supported: boolean;
+  /** The shift the suspect spots were placed with. */
+  usedS: number;
+  /** Misfit of the readings (mean squared log difference between visits) at the stated and estimated shift. */
+  statedMisfit: number | null;
+  estimatedMisfit: number | null;
+}
+
 export interface LocatorResult extends LocatorOutput {
   readings: CorrectedReading[];
   field: FieldGrid;
+  delay: DelayFacts;
 }

@@ -1,29 +1,33 @@
 import { z } from "zod";
+import { text } from "./text";
 import { emailSchema, idSchema, passwordSchema, personNameSchema } from "./common";
 import { ROLES } from "../domain/roles";
+import { mailDelivery } from "./mail-delivery";
 
 export const roleSchema = z.enum(ROLES);
 
 export const member = z.object({
   membershipId: idSchema,
   userId: idSchema,
-  name: z.string(),
-  email: z.string(),
+  name: text(),
+  email: text(),
   role: roleSchema,
   storeIds: z.array(idSchema),
-  joinedAt: z.string(),
+  joinedAt: text(),
 });
 export type Member = z.infer<typeof member>;
 
 export const invitation = z.object({
   id: idSchema,
-  email: z.string(),
+  email: text(),
   role: roleSchema,
   storeIds: z.array(idSchema),
-  invitedBy: z.string(),
-  createdAt: z.string(),
-  expiresAt: z.string(),
-  acceptedAt: z.string().nullable(),
+  invitedBy: text(),
+  createdAt: text(),
+  expiresAt: text(),
+  acceptedAt: text().nullable(),
+  /** The invitation e-mail's state; null for invitations made before mail went through the queue. */
+  delivery: mailDelivery.nullable(),
 });
 export type Invitation = z.infer<typeof invitation>;
 
@@ -48,14 +52,14 @@ export const memberUpdateInput = z
 
 /** Public view of an invitation link, before sign-in. */
 export const invitationPreview = z.object({
-  companyName: z.string(),
-  email: z.string(),
+  companyName: text(),
+  email: text(),
   role: roleSchema,
   hasAccount: z.boolean(),
 });
 
 export const acceptInvitationInput = z.object({
   name: personNameSchema.optional(),
-  password: z.string().min(1, "is required").max(200, "must be at most 200 characters"),
+  password: text().min(1, "is required").max(200, "must be at most 200 characters"),
 });
 export const newAccountPassword = passwordSchema;

@@ -1,13 +1,14 @@
 import { z } from "zod";
+import { text } from "./text";
 
 export const outboxMessage = z.object({
   id: z.uuid(),
-  from: z.string(),
-  to: z.array(z.string()),
-  subject: z.string(),
-  text: z.string(),
-  html: z.string().nullable(),
-  attachments: z.array(z.object({ filename: z.string(), contentType: z.string(), size: z.number() })),
-  receivedAt: z.string(),
+  from: text(),
+  to: z.array(text()),
+  subject: text(),
+  text: text(),
+  html: text().nullable(),
+  attachments: z.array(z.object({ filename: text(), contentType: text(), size: z.number() })),
+  receivedAt: text(),
 });
 export type OutboxMessage = z.infer<typeof outboxMessage>;

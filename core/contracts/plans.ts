@@ -1,13 +1,11 @@
 import { z } from "zod";
+import { text } from "./text";
+import { bounded, IMAGE_COORD_MAX_PX, PLAN_MAX_SIDE_M } from "./quantities";
 import { idSchema } from "./common";
 import { FixtureSchema, PlanPointSchema } from "./fixtures";
 
-const finite = (what: string) =>
-  z
-    .number({ error: `must be a finite number of ${what}` })
-    .refine(Number.isFinite, { message: `must be a finite number of ${what}` });
-
-export const imagePointSchema = z.object({ x: finite("pixels"), y: finite("pixels") });
+const pixels = bounded("pixels", -IMAGE_COORD_MAX_PX, IMAGE_COORD_MAX_PX);
+export const imagePointSchema = z.object({ x: pixels, y: pixels });
 export const lengthUnitSchema = z.enum(["m", "ft"], { error: "must be m or ft" });
 
 export const revisionSchema = z
@@ -15,22 +13,32 @@ export const revisionSchema = z
   .int("must be a whole number")
   .min(0, "must be 0 or more");
 
-/** Largest blank plan side: a big hypermarket is a few hundred metres; this catches unit slips. */
-export const BLANK_PLAN_MAX_M = 2000;
+/** Largest blank plan side (core/contracts/quantities.ts). */
+export const BLANK_PLAN_MAX_M = PLAN_MAX_SIDE_M;
 
-export const blankPlanInput = z.object({
-  width: finite("metres or feet").refine((v) => v > 0, { message: "must be more than 0" }),
-  depth: finite("metres or feet").refine((v) => v > 0, { message: "must be more than 0" }),
-  unit: lengthUnitSchema.default("m"),
-});
+/** A plan length in either unit; its upper bound is checked in metres by `sideTooLong`. */
+const FOOT_M = 0.3048; // exact (NIST SP 811)
+const sideMessage = `must be at most ${PLAN_MAX_SIDE_M} m (${Math.floor(PLAN_MAX_SIDE_M / FOOT_M)} ft); is the unit right?`;
+const planLength = z
+  .number("must be a number of metres or feet")
+  .finite("must be a finite number of metres or feet")
+  .gt(0, "must be more than 0")
+  .max(PLAN_MAX_SIDE_M / FOOT_M, sideMessage);
+const sideTooLong = (value: number, unit: "m" | "ft") => value * (unit === "ft" ? FOOT_M : 1) > PLAN_MAX_SIDE_M;
+
+export const blankPlanInput = z
+  .object({ width: planLength, depth: planLength, unit: lengthUnitSchema.default("m") })
+  .superRefine((v, ctx) => {
+    for (const side of ["width", "depth"] as const)
+      if (sideTooLong(v[side], v.unit)) ctx.addIssue({ code: "custom", path: [side], message: sideMessage });
+  });
 export type BlankPlanInput = z.infer<typeof blankPlanInput>;
 
 export const calibrationInput = z.object({
   a: imagePointSchema,
   b: imagePointSchema,
-  length: z.object({
-    value: finite("metres or feet").refine((v) => v > 0, { message: "must be more than 0" }),
-    unit: lengthUnitSchema,
+  length: z.object({ value: planLength, unit: lengthUnitSchema }).superRefine((v, ctx) => {
+    if (sideTooLong(v.value, v.unit)) ctx.addIssue({ code: "custom", path: ["value"], message: sideMessage });
   }),
   /** Optional guard: when given, a stale revision is a conflict (calibration may rescale fixtures). */
   layoutRevision: revisionSchema.optional(),
@@ -73,10 +81,10 @@ export const plan = z.object({
       heightPx: z.number(),
       originalWidthPx: z.number(),
       originalHeightPx: z.number(),
-      originalMime: z.string(),
-      displayUrl: z.string(),
-      thumbUrl: z.string(),
-      originalUrl: z.string(),
+      originalMime: text(),
+      displayUrl: text(),
+      thumbUrl: text(),
+      originalUrl: text(),
     })
     .nullable(),
   metresPerPixel: z.number().nullable(),
@@ -96,7 +104,7 @@ export const plan = z.object({
   alignmentMatched: z.boolean(),
   layoutRevision: z.number(),
   fixtureCount: z.number(),
-  createdAt: z.string(),
+  createdAt: text(),
 });
 export type Plan = z.infer<typeof plan>;
 

@@ -1,4 +1,6 @@
 import { z } from "zod";
+import { mailDelivery } from "./mail-delivery";
+import { text } from "./text";
 
 export const sendReportInput = z
   .object({
@@ -9,7 +11,7 @@ export const sendReportInput = z
       .array(z.email("must be an e-mail address"), "must be a list of e-mail addresses")
       .max(20, "must name at most 20 addresses")
       .default([]),
-    message: z.string("must be text").trim().max(2000, "must be at most 2,000 characters").default(""),
+    message: text("must be text").trim().max(2000, "must be at most 2,000 characters").default(""),
   })
   .refine((v) => v.storeContacts || v.addresses.length > 0, {
     path: ["addresses"],
@@ -20,14 +22,17 @@ export type SendReportInput = z.input<typeof sendReportInput>;
 export const reportSend = z.object({
   id: z.uuid(),
   sweepId: z.uuid(),
-  sentBy: z.string().nullable(),
-  recipients: z.array(z.string()),
-  subject: z.string(),
-  filename: z.string(),
+  sentBy: text().nullable(),
+  recipients: z.array(text()),
+  subject: text(),
+  filename: text(),
   bytes: z.number(),
-  sentAt: z.string(),
+  /** When the sender pressed Send (the message is queued then; `delivery` says when it went). */
+  sentAt: text(),
+  /** Null for sends recorded before mail went through the queue. */
+  delivery: mailDelivery.nullable(),
 });
 export type ReportSend = z.infer<typeof reportSend>;
 
-export const reportRecipient = z.object({ name: z.string(), email: z.string() });
+export const reportRecipient = z.object({ name: text(), email: text() });
 export type ReportRecipient = z.infer<typeof reportRecipient>;

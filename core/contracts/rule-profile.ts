@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { text } from "./text";
 
 /**
  * The shape of a rule profile on the wire (a company's custom profile, edited in Company settings).
@@ -9,17 +10,24 @@ import { z } from "zod";
 const APPLIANCES = ["commercial-refrigeration", "industrial-process", "comfort-cooling"] as const;
 const BASES = ["AR4", "AR5", "AR6", "EU-517/2014"] as const;
 
-const source = z
-  .string({ error: "is required (a citation, or who set the value and why)" })
+const source = text({ error: "is required (a citation, or who set the value and why)" })
   .trim()
   .min(1, "is required (a citation, or who set the value and why)")
   .max(500, "must be at most 500 characters");
 
 const sourced = <T extends z.ZodType>(value: T) =>
-  z.object({ value, source, note: z.string().max(500, "must be at most 500 characters").optional() });
+  z.object({ value, source, note: text().max(500, "must be at most 500 characters").optional() });
 
+// No figure in a rule profile comes near ten million (the largest are charge limits in lb and t CO2e).
+const PROFILE_FIGURE_MAX = 10_000_000;
 const num = (what: string) =>
-  z.number({ error: `must be a number (${what})` }).refine(Number.isFinite, `must be a finite number (${what})`);
+  z
+    .number({ error: `must be a number (${what})` })
+    .refine(Number.isFinite, `must be a finite number (${what})`)
+    .refine(
+      (v) => Math.abs(v) <= PROFILE_FIGURE_MAX,
+      `must be at most ${PROFILE_FIGURE_MAX.toLocaleString("en-US")} (${what})`,
+    );
 const positive = (what: string, max: number) =>
   num(what).gt(0, `must be above 0 (${what})`).max(max, `must be at most ${max} (${what})`);
 const wholeDays = (min: number) =>
@@ -32,6 +40,9 @@ const wholeMonths = z
   .min(1, "must be at least 1 month")
   .max(120, "must be at most 120 months");
 
+const isoDay = z
+  .string({ error: "must be a date as YYYY-MM-DD" })
+  .regex(/^\d{4}-\d{2}-\d{2}$/, "must be a date as YYYY-MM-DD");
 const massLimit = z.object({
   value: num("mass").min(0, "must be 0 or more"),
   unit: z.enum(["lb", "kg"], { error: "must be lb or kg" }),
@@ -75,8 +86,8 @@ const bands = z
   });
 
 export const leakRatePartSchema = z.object({
-  id: z.string().trim().min(1, "is required"),
-  title: z.string().trim().min(1, "is required").max(200, "must be at most 200 characters"),
+  id: text().trim().min(1, "is required"),
+  title: text().trim().min(1, "is required").max(200, "must be at most 200 characters"),
   covers: sourced(
     z.union([
       z.object({ ozoneDepleting: z.literal(true) }),
@@ -84,7 +95,7 @@ export const leakRatePartSchema = z.object({
     ]),
   ),
   minFullCharge: sourced(massLimit),
-  effectiveFrom: sourced(z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "must be a date as YYYY-MM-DD")).optional(),
+  effectiveFrom: sourced(text().regex(/^\d{4}-\d{2}-\d{2}$/, "must be a date as YYYY-MM-DD")).optional(),
   thresholds: z.object({
     "commercial-refrigeration": sourced(positive("% per year", 1000)),
     "industrial-process": sourced(positive("% per year", 1000)),
@@ -114,8 +125,23 @@ export const leakRatePartSchema = z.object({
     }),
   ).optional(),
   automaticLeakDetectionRequired: sourced(
-    z.object({ types: z.array(z.enum(APPLIANCES)), fromCharge: massLimit }),
+    z.object({
+      types: z.array(z.enum(APPLIANCES)),
+      fromCharge: massLimit,
+      installDeadlines: z
+        .array(
+          z.object({
+            inServiceFrom: isoDay,
+            inServiceBefore: isoDay.optional(),
+            withinDays: wholeDays(0).optional(),
+            by: isoDay.optional(),
+          }),
+        )
+        .max(10, "must list at most 10 deadlines")
+        .optional(),
+    }),
   ).optional(),
+  failedRepair: sourced(z.object({ planDays: wholeDays(1), carryOutMonths: wholeMonths })).optional(),
   chronicLeaker: z.object({
     percentOfFullCharge: sourced(positive("% of the full charge", 10000)),
     reportBy: sourced(
@@ -129,7 +155,7 @@ export const leakRatePartSchema = z.object({
 
 export const ruleProfileSchema = z.object({
   id: z.literal("custom", { error: "must be custom" }),
-  name: z.string({ error: "is required" }).trim().min(1, "is required").max(120, "must be at most 120 characters"),
+  name: text({ error: "is required" }).trim().min(1, "is required").max(120, "must be at most 120 characters"),
   kind: z.literal("custom", { error: "must be custom" }),
   basedOn: z.enum(["us-federal", "eu-fgas"], { error: "must be us-federal or eu-fgas" }),
   gwpBases: sourced(z.array(z.enum(BASES)).min(1, "list at least one GWP basis")),
@@ -154,8 +180,8 @@ export const startCustomProfileInput = z.object({
 
 export const customProfileView = z.object({
   profile: ruleProfileSchema.nullable(),
-  savedAt: z.string().nullable(),
-  savedBy: z.string().nullable(),
+  savedAt: text().nullable(),
+  savedBy: text().nullable(),
   /** Whether the company's rule-profile setting is "custom" (the profile is in force). */
   inForce: z.boolean(),
 });

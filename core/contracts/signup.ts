@@ -1,10 +1,11 @@
 import { z } from "zod";
 import { emailSchema, personNameSchema } from "./common";
 import { newAccountPassword } from "./members";
+import { text } from "./text";
 
 /** A new customer: the company, its first owner and the company's first settings. */
 export const signUpInput = z.object({
-  companyName: z.string().trim().min(1, "is required").max(120, "must be at most 120 characters"),
+  companyName: text().trim().min(1, "is required").max(120, "must be at most 120 characters"),
   name: personNameSchema,
   email: emailSchema,
   password: newAccountPassword,
@@ -15,5 +16,5 @@ export const signUpInput = z.object({
 export type SignUpInput = z.input<typeof signUpInput>;
 
 export const confirmSignUpInput = z.object({
-  token: z.string().min(20, "is not a valid confirmation link").max(200, "is not a valid confirmation link"),
+  token: text().min(20, "is not a valid confirmation link").max(200, "is not a valid confirmation link"),
 });

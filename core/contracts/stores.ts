@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { text } from "./text";
 import { idSchema } from "./common";
 
 /** True when the runtime's Intl knows the IANA zone (what the client formats times with). */
@@ -11,14 +12,12 @@ export function isKnownTimeZone(name: string): boolean {
   }
 }
 
-export const storeNameSchema = z
-  .string({ error: "must be text" })
+export const storeNameSchema = text({ error: "must be text" })
   .trim()
   .min(1, "is required")
   .max(120, "must be at most 120 characters");
-export const addressSchema = z.string({ error: "must be text" }).trim().max(300, "must be at most 300 characters");
-export const timeZoneSchema = z
-  .string({ error: "must be a time zone from the list, such as America/Chicago" })
+export const addressSchema = text({ error: "must be text" }).trim().max(300, "must be at most 300 characters");
+export const timeZoneSchema = text({ error: "must be a time zone from the list, such as America/Chicago" })
   .trim()
   .min(1, "is required")
   .refine(isKnownTimeZone, {
@@ -43,7 +42,7 @@ const booleanFlag = z
   .transform((v) => v === "true" || v === "1");
 
 export const storeListQuery = z.object({
-  search: z.string().trim().max(120, "must be at most 120 characters").optional(),
+  search: text().trim().max(120, "must be at most 120 characters").optional(),
   sort: z.enum(["name", "created"], { error: "must be name or created" }).default("name"),
   order: z.enum(["asc", "desc"], { error: "must be asc or desc" }).default("asc"),
   includeArchived: booleanFlag.default(false),
@@ -52,12 +51,12 @@ export type StoreListQuery = z.infer<typeof storeListQuery>;
 
 export const store = z.object({
   id: idSchema,
-  name: z.string(),
-  address: z.string(),
-  timeZone: z.string(),
-  archivedAt: z.string().nullable(),
-  createdAt: z.string(),
-  updatedAt: z.string(),
+  name: text(),
+  address: text(),
+  timeZone: text(),
+  archivedAt: text().nullable(),
+  createdAt: text(),
+  updatedAt: text(),
 });
 export type Store = z.infer<typeof store>;
 

@@ -1,4 +1,6 @@
 import { z } from "zod";
+import { text } from "./text";
+import { PLAN_COORD_MAX_M } from "./quantities";
 
 // Sweeps and readings: the request and response shapes shared by the server and the Walk screen.
 
@@ -50,8 +52,8 @@ export type CreateSweepInput = z.input<typeof createSweepInput>;
 
 export const sweepWarning = z.object({
   code: z.enum(["detector-overdue", "detector-blind", "detector-unsure"]),
-  message: z.string(),
-  systemId: z.string().optional(),
+  message: text(),
+  systemId: text().optional(),
 });
 export type SweepWarning = z.infer<typeof sweepWarning>;
 
@@ -60,9 +62,9 @@ export const sweep = z.object({
   storeId: z.uuid(),
   planId: z.uuid(),
   detectorId: z.uuid(),
-  detectorName: z.string(),
+  detectorName: text(),
   technicianId: z.uuid(),
-  technicianName: z.string(),
+  technicianName: text(),
   systemIds: z.array(z.uuid()),
   fans: z.enum(["running", "stopped"]),
   defrost: z.boolean(),
@@ -71,16 +73,20 @@ export const sweep = z.object({
   timeConstantS: z.number(),
   alarmPpm: z.number(),
   warnings: z.array(sweepWarning),
-  startedAt: z.string(),
-  submittedAt: z.string().nullable(),
-  reviewedAt: z.string().nullable(),
+  startedAt: text(),
+  submittedAt: text().nullable(),
+  reviewedAt: text().nullable(),
   readingsRevision: z.number(),
   readingCount: z.number(),
 });
 export type Sweep = z.infer<typeof sweep>;
 
 const coord = (axis: string) =>
-  z.number(`${axis} must be a number of metres`).finite(`${axis} must be a finite number of metres`);
+  z
+    .number(`${axis} must be a number of metres`)
+    .finite(`${axis} must be a finite number of metres`)
+    .min(-PLAN_COORD_MAX_M, `${axis} must be at least -${PLAN_COORD_MAX_M} m`)
+    .max(PLAN_COORD_MAX_M, `${axis} must be at most ${PLAN_COORD_MAX_M} m`);
 
 /** One reading as the device sends it. Plan bounds and times are checked against the sweep. */
 export const readingInput = z.object({
@@ -98,7 +104,7 @@ export const readingInput = z.object({
     ),
   atLeast: z.boolean("must be true or false").default(false),
   samplePoint: z.enum(SAMPLE_POINTS, `must be one of: ${SAMPLE_POINTS.join(", ")}`),
-  note: z.string("must be text").trim().max(500, "must be at most 500 characters").default(""),
+  note: text("must be text").trim().max(500, "must be at most 500 characters").default(""),
 });
 export type ReadingInput = z.input<typeof readingInput>;
 
@@ -112,16 +118,16 @@ export const readingsBatchInput = z.object({
 
 export const rejectedReading = z.object({
   index: z.number(),
-  id: z.string().nullable(),
+  id: text().nullable(),
   /** Field → reason, e.g. { ppm: "must be 0 ppm or more" }. */
-  reasons: z.record(z.string(), z.string()),
+  reasons: z.record(text(), text()),
 });
 export type RejectedReading = z.infer<typeof rejectedReading>;
 
 export const readingsBatchResult = z.object({
-  stored: z.array(z.string()),
+  stored: z.array(text()),
   /** Already stored by an earlier upload: safe to drop from the device's queue. */
-  duplicates: z.array(z.string()),
+  duplicates: z.array(text()),
   rejected: z.array(rejectedReading),
   readingsRevision: z.number(),
 });
@@ -132,13 +138,13 @@ export const reading = z.object({
   sweepId: z.uuid(),
   x: z.number(),
   y: z.number(),
-  takenAt: z.string(),
+  takenAt: text(),
   ppm: z.number(),
   atLeast: z.boolean(),
   samplePoint: z.enum(SAMPLE_POINTS),
-  note: z.string(),
-  receivedAt: z.string(),
-  updatedAt: z.string(),
+  note: text(),
+  receivedAt: text(),
+  updatedAt: text(),
 });
 export type Reading = z.infer<typeof reading>;
 
@@ -154,10 +160,10 @@ export const readingAuditEntry = z.object({
   id: z.number(),
   readingId: z.uuid(),
   action: z.enum(["edit", "delete"]),
-  before: z.record(z.string(), z.unknown()),
-  after: z.record(z.string(), z.unknown()).nullable(),
-  by: z.string().nullable(),
-  editedAt: z.string().nullable(),
-  receivedAt: z.string(),
+  before: z.record(text(), z.unknown()),
+  after: z.record(text(), z.unknown()).nullable(),
+  by: text().nullable(),
+  editedAt: text().nullable(),
+  receivedAt: text(),
 });
 export type ReadingAuditEntry = z.infer<typeof readingAuditEntry>;

@@ -1,4 +1,6 @@
 import { z } from "zod";
+import { text } from "./text";
+import { CHARGE_MAX } from "./quantities";
 import { idSchema } from "./common";
 
 export const APPLIANCE_TYPES = ["commercial-refrigeration", "industrial-process", "comfort-cooling"] as const;
@@ -19,16 +21,15 @@ export const chargeInput = z.object({
     .number({ error: "must be a number" })
     .refine(Number.isFinite, { message: "must be a finite number" })
     .refine((v) => v > 0, { message: "must be more than 0" })
-    .refine((v) => v <= 100_000, { message: "must be at most 100000 (is the unit right?)" }),
+    .refine((v) => v <= CHARGE_MAX, { message: `must be at most ${CHARGE_MAX} (is the unit right?)` }),
   unit: z.enum(["kg", "lb"], { error: "must be kg or lb" }),
 });
 export type ChargeInput = z.infer<typeof chargeInput>;
 
 const systemFields = {
-  name: z.string({ error: "must be text" }).trim().min(1, "is required").max(120, "must be at most 120 characters"),
+  name: text({ error: "must be text" }).trim().min(1, "is required").max(120, "must be at most 120 characters"),
   /** An R-number from the catalogue (GET /api/refrigerants); checked on the server. */
-  refrigerantId: z
-    .string({ error: "must be an R-number such as R-448A" })
+  refrigerantId: text({ error: "must be an R-number such as R-448A" })
     .trim()
     .min(1, "is required")
     .max(40, "must be at most 40 characters"),
@@ -37,11 +38,19 @@ const systemFields = {
   automaticLeakDetection: z.boolean({ error: "must be true or false" }),
 };
 
-export const systemInput = z.object(systemFields);
+const isoDay = z
+  .string({ error: "must be a date as YYYY-MM-DD" })
+  .regex(/^\d{4}-\d{2}-\d{2}$/, "must be a date as YYYY-MM-DD");
+
+export const systemInput = z.object({
+  ...systemFields,
+  /** The day it entered service (store calendar); defaults to today. */
+  inServiceOn: isoDay.optional(),
+});
 export type SystemInput = z.infer<typeof systemInput>;
 
 export const systemUpdateInput = z
-  .object(systemFields)
+  .object({ ...systemFields, inServiceOn: isoDay })
   .partial()
   .refine((v) => Object.keys(v).length > 0, { message: "name at least one field to change" });
 export type SystemUpdateInput = z.infer<typeof systemUpdateInput>;
@@ -49,46 +58,116 @@ export type SystemUpdateInput = z.infer<typeof systemUpdateInput>;
 export const gwpSummary = z.object({
   value: z.number(),
   /** The GWP-100 basis of the value, e.g. "AR4". */
-  basis: z.string(),
-  source: z.string(),
+  basis: text(),
+  /** The company profile's stated GWP basis, in words, shown beside the figure. */
+  statement: text(),
+  source: text(),
 });
 
 export const refrigerantSummary = z.object({
-  id: z.string(),
-  name: z.string(),
-  safetyClass: z.string(),
-  safetyClassSource: z.string(),
+  id: text(),
+  name: text(),
+  safetyClass: text(),
+  safetyClassSource: text(),
   /** null when no basis in the list has a value for every component. */
   gwp: gwpSummary.nullable(),
-  gwpNote: z.string().nullable(),
+  gwpNote: text().nullable(),
 });
 export type RefrigerantSummary = z.infer<typeof refrigerantSummary>;
 
 export const caution = z.object({
-  id: z.string(),
+  id: text(),
   level: z.enum(["warning", "notice"]),
-  text: z.string(),
-  source: z.string(),
+  text: text(),
+  source: text(),
 });
 export type Caution = z.infer<typeof caution>;
 
 export const system = z.object({
   id: idSchema,
   storeId: idSchema,
-  name: z.string(),
-  refrigerantId: z.string(),
+  name: text(),
+  refrigerantId: text(),
   fullChargeKg: z.number(),
   applianceType: applianceTypeSchema,
   automaticLeakDetection: z.boolean(),
+  inServiceOn: z.string(),
+  /** Set once the system left service; its records stay readable (never deleted). */
+  retired: z.object({ at: z.string(), reason: z.string() }).nullable(),
   refrigerant: refrigerantSummary,
   /** The usual cautions for this refrigerant, shown on the system form. */
   cautions: z.array(caution),
-  createdAt: z.string(),
-  updatedAt: z.string(),
+  createdAt: text(),
+  updatedAt: text(),
 });
 export type System = z.infer<typeof system>;
 
 export const systemListResponse = z.object({ systems: z.array(system) });
+
+export const systemListQuery = z.object({
+  include: z.enum(["retired"], { error: "must be retired (or left out)" }).optional(),
+});
+
+export const retireInput = z.object({
+  reason: z.string({ error: "must be text" }).trim().max(500, "must be at most 500 characters").default(""),
+});
+
+/** DELETE /api/systems/:id: deleted when it had no record, else retired with every record kept. */
+export const systemRemoval = z.discriminatedUnion("outcome", [
+  z.object({ outcome: z.literal("deleted"), system: z.null() }),
+  z.object({ outcome: z.literal("retired"), system }),
+]);
+export type SystemRemoval = z.infer<typeof systemRemoval>;
 export const refrigerantListResponse = z.object({
   refrigerants: z.array(refrigerantSummary.extend({ cautions: z.array(caution) })),
 });
+
+export const REVISION_KINDS = ["change", "correction", "retrofit"] as const;
+
+/**
+ * POST /api/systems/:id/revisions: a dated change of the facts the rules read. `change`: the
+ * system changed on that day; `correction`: the earlier value was wrong from that day;
+ * `retrofit`: a new refrigerant, which starts a new regime (docs/decisions/0043-system-revisions.md).
+ */
+export const revisionInput = z
+  .object({
+    effectiveFrom: isoDay,
+    kind: z.enum(REVISION_KINDS, { error: `must be one of: ${REVISION_KINDS.join(", ")}` }),
+    reason: z.string({ error: "must be text" }).trim().min(1, "is required").max(500, "must be at most 500 characters"),
+    refrigerantId: systemFields.refrigerantId.optional(),
+    fullCharge: chargeInput.optional(),
+    applianceType: applianceTypeSchema.optional(),
+    automaticLeakDetection: systemFields.automaticLeakDetection.optional(),
+    inServiceOn: isoDay.optional(),
+  })
+  .refine(
+    (v) =>
+      [v.refrigerantId, v.fullCharge, v.applianceType, v.automaticLeakDetection, v.inServiceOn].some(
+        (x) => x !== undefined,
+      ),
+    {
+      message:
+        "name at least one fact to change: refrigerantId, fullCharge, applianceType, automaticLeakDetection or inServiceOn",
+    },
+  )
+  .refine((v) => v.kind !== "retrofit" || v.refrigerantId !== undefined, {
+    message: "a retrofit names the new refrigerant",
+    path: ["refrigerantId"],
+  });
+export type RevisionInput = z.infer<typeof revisionInput>;
+
+export const systemRevision = z.object({
+  id: idSchema,
+  effectiveFrom: z.string(),
+  kind: z.enum(["first", ...REVISION_KINDS]),
+  refrigerantId: z.string(),
+  fullChargeKg: z.number(),
+  applianceType: applianceTypeSchema,
+  automaticLeakDetection: z.boolean(),
+  inServiceOn: z.string(),
+  reason: z.string(),
+  /** Who recorded it; empty for the first revisions written from existing systems. */
+  by: z.string(),
+  recordedAt: z.string(),
+});
+export const systemRevisionList = z.object({ revisions: z.array(systemRevision) });

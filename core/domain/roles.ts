@@ -23,6 +23,8 @@ export type Permission =
   | "detectors.manage"
   | "sweeps.record"
   | "sweeps.review"
+  /** Ask for a field map at another delay or time constant than the detector's (a new computation). */
+  | "analyses.tune"
   | "findings.record"
   | "findings.close"
   | "compliance.manage"
@@ -42,6 +44,7 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "detectors.manage",
     "sweeps.record",
     "sweeps.review",
+    "analyses.tune",
     "findings.record",
     "findings.close",
     "compliance.manage",
@@ -56,6 +59,7 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "detectors.read",
     "detectors.manage",
     "sweeps.record",
+    "analyses.tune",
     "findings.record",
   ],
   technician: ["members.read", "stores.read", "detectors.read", "sweeps.record", "findings.record"],
@@ -66,6 +70,7 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "stores.read",
     "detectors.read",
     "sweeps.review",
+    "analyses.tune",
     "findings.record",
     "findings.close",
     "compliance.manage",

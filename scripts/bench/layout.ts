@@ -26,6 +26,7 @@ import { createDb, migrateDb } from "../../server/db/client";
 import { companies, memberships, stores, users } from "../../server/db/schema/index";
 import type { Fixture } from "#core/contracts/fixtures";
 import { createSmtpMailer } from "../../server/mail/mailer";
+import { createMailQueue } from "../../server/mail/mail-queue";
 import { measureEditorDrag } from "./layout-editor";
 
 const TARGET_MS = 100;
@@ -107,7 +108,12 @@ async function main() {
   const url = new URL(adminUrl());
   url.pathname = `/${name}`;
   const { pool, db } = createDb(url.toString());
-  const mailer = createSmtpMailer({ host: "127.0.0.1", port: 9, secure: false, from: "bench@plumeline.test" }, true);
+  const logger = pino({ level: "silent" });
+  const mailer = createMailQueue(
+    db,
+    createSmtpMailer({ host: "127.0.0.1", port: 9, secure: false, from: "bench@plumeline.test" }, true),
+    logger,
+  );
   let server: http.Server | undefined;
   try {
     await migrateDb(db);
@@ -115,7 +121,7 @@ async function main() {
       db,
       pool,
       mailer,
-      logger: pino({ level: "silent" }),
+      logger,
       config: {
         sessionSecret: "bench-secret-bench-secret",
         bcryptCost: 4,

@@ -1,4 +1,4 @@
-// The locator's accuracy benchmark (`npm run bench:locate [-- --json|--detail] [--dir DIR] [family ...]`): runs `locate`
+// The locator's accuracy benchmark (`npm run bench:locate [-- --json|--detail] [--dir DIR] [--delay-scale F] [family ...]`): runs `locate`
 // on every committed store in scripts/bench/scenarios/, scores it against the truth beside each file,
 // and prints per family and overall figures for the locator and for the naive answer, then the
 // targets of docs/benchmarks.md with pass/fail. It is a report: the exit code is 0 unless the script itself fails.
@@ -22,6 +22,15 @@ const args = process.argv.slice(2);
 const dirFlag = args.indexOf("--dir");
 // --dir scores another set (e.g. a held-out one from generate.ts --first 13 --out DIR).
 const scenarioDir = dirFlag >= 0 ? (args.splice(dirFlag, 2)[1] ?? "") : join(here, "scenarios");
+const scaleFlag = args.indexOf("--delay-scale");
+// --delay-scale F multiplies every store's stated transport delay by F before the locator sees it (the
+// readings stay as the simulated detector took them), to measure how the locator copes with a wrong delay.
+const delayScaleText = scaleFlag >= 0 ? args.splice(scaleFlag, 2)[1] : "1";
+const delayScale = Number(delayScaleText);
+if (!(delayScale > 0) || !Number.isFinite(delayScale)) {
+  console.error(`bench:locate: --delay-scale needs a positive number, got ${delayScaleText ?? "nothing"}`);
+  process.exit(2);
+}
 const asJson = args.includes("--json");
 const detail = args.includes("--detail");
 const onlyFamilies = args.filter((a) => !a.startsWith("--"));
@@ -60,7 +69,7 @@ interface StoreFile {
   name: string;
   input: {
     plan: { backgroundZones?: { polygon: number[][] }[] };
-    instrument: { alarmPpm?: number };
+    instrument: { alarmPpm?: number; transportDelayS: number };
     readings: { x: number; y: number; ppm: number }[];
   };
   truth: Truth;
@@ -133,7 +142,14 @@ async function main() {
     let suspects: Suspect[] = [];
     try {
       const t0 = performance.now();
-      const result = await Promise.resolve(locate(s.input));
+      const input =
+        delayScale === 1
+          ? s.input
+          : {
+              ...s.input,
+              instrument: { ...s.input.instrument, transportDelayS: s.input.instrument.transportDelayS * delayScale },
+            };
+      const result = await Promise.resolve(locate(input));
       elapsed += performance.now() - t0;
       suspects = suspectsOf(result);
     } catch (err) {
@@ -158,14 +174,24 @@ async function main() {
   if (asJson) {
     console.log(
       JSON.stringify(
-        { stores: stores.length, locatorMissing: locate ? null : why, failures, naive, locator: located, targets },
+        {
+          stores: stores.length,
+          delayScale,
+          locatorMissing: locate ? null : why,
+          failures,
+          naive,
+          locator: located,
+          targets,
+        },
         null,
         1,
       ),
     );
     return;
   }
-  const out: string[] = [`${stores.length} stores from ${scenarioDir}`];
+  const out: string[] = [
+    `${stores.length} stores from ${scenarioDir}${delayScale === 1 ? "" : `, stated delay scaled by ${delayScale}`}`,
+  ];
   out.push("", table("Naive answer (the spot of the highest raw reading, when it reaches the alarm):", naive));
   if (!located) {
     out.push("", `Locator not scored: ${why}.`);

@@ -16,8 +16,10 @@ export async function loadVisiblePlan(ctx: AppContext, viewer: Viewer, planId: s
   if (!row) throw notFound("That plan");
   try {
     await loadVisibleStore(ctx, viewer, row.storeId);
-  } catch {
-    throw notFound("That plan");
+  } catch (err) {
+    // Only "not your store" becomes "not found"; a database outage stays a 503.
+    if (err instanceof HttpError) throw notFound("That plan");
+    throw err;
   }
   return row;
 }

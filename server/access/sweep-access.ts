@@ -1,7 +1,7 @@
 import { and, eq } from "drizzle-orm";
 import type { AppContext } from "../context";
 import { sweeps } from "../db/schema/index";
-import { notFound } from "../lib/http-error";
+import { HttpError, notFound } from "../lib/http-error";
 import { loadVisibleStore, type Viewer } from "./store-access";
 
 export type SweepRow = typeof sweeps.$inferSelect;
@@ -15,8 +15,10 @@ export async function loadVisibleSweep(ctx: AppContext, viewer: Viewer, sweepId:
   if (!row) throw notFound("That sweep");
   try {
     await loadVisibleStore(ctx, viewer, row.storeId);
-  } catch {
-    throw notFound("That sweep");
+  } catch (err) {
+    // Only "not your store" becomes "no such sweep"; a database outage stays what it is (503).
+    if (err instanceof HttpError) throw notFound("That sweep");
+    throw err;
   }
   return row;
 }

@@ -92,7 +92,7 @@ export async function sendDigest(
         appUrl: ctx.config.appUrl,
         days: DIGEST_DAYS,
       });
-      await ctx.mailer.send({ to: recipients, companyId, ...mail });
+      await ctx.mailer.send({ to: recipients, companyId, kind: "digest", ...mail });
     }
     await ctx.db
       .update(digestRuns)

@@ -58,20 +58,25 @@ export function loadAuth(db: Db): RequestHandler {
   };
 }
 
-export const requireUser: RequestHandler = (req, _res, next) => {
-  if (!req.auth) throw new HttpError(401, "not_signed_in", "Please sign in.");
-  next();
-};
+export const requireUser: RequestHandler = Object.assign<RequestHandler, { requires: { user: true } }>(
+  (req, _res, next) => {
+    if (!req.auth) throw new HttpError(401, "not_signed_in", "Please sign in.");
+    next();
+  },
+  { requires: { user: true } },
+);
 
 /** Signed in, with an active company; optionally holding a permission. */
 export function requireMember(permission?: Permission): RequestHandler {
-  return (req, _res, next) => {
+  const handler: RequestHandler = (req, _res, next) => {
     if (!req.auth) throw new HttpError(401, "not_signed_in", "Please sign in.");
     const m = req.auth.membership;
     if (!m) throw new HttpError(403, "no_company", "Choose a company first.");
     if (permission && !can(m.role, permission)) throw forbidden();
     next();
   };
+  // Tagged so the route table (server/lib/route-table.ts) knows who may call each route.
+  return Object.assign(handler, { requires: { user: true, member: true, permission } });
 }
 
 export function member(req: { auth?: AuthContext }): NonNullable<AuthContext["membership"]> {

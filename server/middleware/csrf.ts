@@ -6,13 +6,25 @@ import { HttpError } from "../lib/http-error";
 // request must echo it in X-CSRF-Token. SameSite=Lax cookies are the second layer.
 const SAFE = new Set(["GET", "HEAD", "OPTIONS"]);
 
+/**
+ * A session that holds nothing but the sign-in form's token lives an hour, not the signed-in 30 days
+ * (docs/decisions/0027-sessions-before-sign-in.md); the rolling cookie renews it while the form is in use.
+ */
+export const ANONYMOUS_SESSION_MS = 60 * 60 * 1000;
+
+function limitAnonymous(req: Request): void {
+  if (!req.session.userId) req.session.cookie.maxAge = ANONYMOUS_SESSION_MS;
+}
+
 export function issueCsrfToken(req: Request): string {
   if (!req.session.csrfToken) req.session.csrfToken = randomBytes(32).toString("base64url");
+  limitAnonymous(req);
   return req.session.csrfToken;
 }
 
 export function rotateCsrfToken(req: Request): string {
   req.session.csrfToken = randomBytes(32).toString("base64url");
+  limitAnonymous(req);
   return req.session.csrfToken;
 }
 

@@ -5,5 +5,8 @@ declare module "express-session" {
     userId?: string;
     activeCompanyId?: string;
     csrfToken?: string;
+    /** When and from what browser this sign-in happened (the person's own session list). */
+    signedInAt?: string;
+    userAgent?: string;
   }
 }

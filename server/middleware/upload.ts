@@ -34,7 +34,13 @@ export function singleUpload(field: string, maxBytes: () => number): RequestHand
         }
         return next(new HttpError(400, "validation_failed", `The upload could not be read: ${err.message}.`));
       }
-      next(err);
+      // Anything else comes from reading the multipart body (no boundary, cut off, empty): the
+      // request is malformed, and nothing was stored (the file is held in memory only).
+      next(
+        new HttpError(400, "validation_failed", `The upload could not be read as a form with a file in "${field}".`, {
+          [field]: "send one file as multipart/form-data",
+        }),
+      );
     });
   };
 }

@@ -10,7 +10,7 @@ type Part = "body" | "query" | "params";
  * params go to res.locals (Express 5's req.query is a getter and cannot be replaced).
  */
 export function validate<S extends z.ZodType>(schema: S, part: Part = "body"): RequestHandler {
-  return (req, res, next) => {
+  const handler: RequestHandler = (req, res, next) => {
     const result = schema.safeParse(req[part] ?? {});
     if (!result.success) {
       const fields = zodFields(result.error);
@@ -20,6 +20,8 @@ export function validate<S extends z.ZodType>(schema: S, part: Part = "body"): R
     else res.locals[part] = result.data;
     next();
   };
+  // Tagged so the route table (server/lib/route-table.ts) can say what each route reads.
+  return Object.assign(handler, { validates: { part, schema } });
 }
 
 export function parsedQuery<T>(res: { locals: Record<string, unknown> }): T {

@@ -194,6 +194,8 @@ export const api = {
   put: <T>(path: string, schema: z.ZodType<T> | null, body: unknown) => apiRequest("PUT", path, schema, { body }),
   patch: <T>(path: string, schema: z.ZodType<T> | null, body: unknown) => apiRequest("PATCH", path, schema, { body }),
   delete: (path: string) => apiRequest<void>("DELETE", path, null),
+  /** A DELETE whose answer says what happened (e.g. a system with records is retired, not deleted). */
+  deleteWithAnswer: <T>(path: string, schema: z.ZodType<T>) => apiRequest("DELETE", path, schema),
   /** A multipart upload (multer on the server reads the named file field). */
   upload: <T>(path: string, schema: z.ZodType<T>, form: FormData) => apiRequest("POST", path, schema, { body: form }),
 };

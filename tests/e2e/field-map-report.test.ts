@@ -82,7 +82,7 @@ it("an engineer opens the latest sweep's field map, compares it with the month b
   // send it to the store contact and a typed address
   await page.getByLabel("Other addresses").fill("regional.manager@example.org");
   await page.getByRole("button", { name: "Send the report" }).click();
-  await page.getByText(/Sent to .*regional\.manager@example\.org/).waitFor();
+  await page.getByText(/Queued for .*regional\.manager@example\.org/).waitFor();
   await page
     .getByTestId("report-sends")
     .getByText(/regional\.manager@example\.org/)

@@ -11,6 +11,8 @@ export interface E2eServer extends TestApp {
 /** The real app with the built client, listening on a free loopback port, on a private database. */
 export async function startE2eServer(config: Partial<AppConfig> = {}): Promise<E2eServer> {
   const t = await createTestApp({ serveClient: true, ...config });
+  // The browser reads the Outbox as a person would: mail goes out through the real job-queue worker.
+  await t.ctx.mailer.start();
   const server = await new Promise<Server>((resolve) => {
     const s = t.app.listen(0, "127.0.0.1", () => resolve(s));
   });

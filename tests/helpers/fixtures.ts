@@ -6,7 +6,7 @@ import type { Role } from "#core/domain/roles";
 export const PASSWORD = "correct horse battery";
 
 /** A company with one member of each role and one store (the store contact's). Invented data. */
-export async function seedCompany(ctx: AppContext, name: string) {
+export async function seedCompany(ctx: Pick<AppContext, "db">, name: string) {
   const [company] = await ctx.db.insert(companies).values({ name }).returning();
   const [store] = await ctx.db
     .insert(stores)

@@ -4,6 +4,7 @@ import request from "supertest";
 import { createApp } from "../../server/app";
 import type { AppConfig, AppContext } from "../../server/context";
 import { createSmtpMailer } from "../../server/mail/mailer";
+import { createMailQueue } from "../../server/mail/mail-queue";
 import { startFakeSmtp, type FakeSmtp } from "../../server/mail/fake-smtp";
 import { PASSWORD } from "./fixtures";
 import { createTestDatabase, type TestDatabase } from "./test-db";
@@ -20,15 +21,29 @@ export interface TestApp {
 export async function createTestApp(config: Partial<AppConfig> = {}): Promise<TestApp> {
   const database = await createTestDatabase();
   const smtp = await startFakeSmtp(database.db, 0);
-  const mailer = createSmtpMailer(
-    { host: "127.0.0.1", port: smtp.port, secure: false, from: "Plumeline <no-reply@plumeline.test>" },
-    true,
+  const logger = pino({ level: "silent" });
+  // No job-queue worker unless a test starts one: mail waits in the queue until drained (drainMail).
+  const mailer = createMailQueue(
+    database.db,
+    createSmtpMailer(
+      {
+        host: "127.0.0.1",
+        port: smtp.port,
+        secure: false,
+        from: "Plumeline <no-reply@plumeline.test>",
+        timeoutMs: 2_000,
+      },
+      true,
+    ),
+    logger,
+    // Used when a test starts the worker (the browser suite's server): quick polls and retries.
+    { pollingIntervalS: 0.5, retryDelayS: 1, retryLimit: 3 },
   );
   const ctx: AppContext = {
     db: database.db,
     pool: database.pool,
     mailer,
-    logger: pino({ level: "silent" }),
+    logger,
     config: {
       sessionSecret: "test-secret-test-secret",
       bcryptCost: 4, // fast in tests; production uses 12
@@ -49,6 +64,7 @@ export async function createTestApp(config: Partial<AppConfig> = {}): Promise<Te
     database,
     smtp,
     async close() {
+      await mailer.stop();
       await ctx.analysisRunner?.close();
       await ctx.reportRunner?.close();
       mailer.close();
@@ -56,6 +72,11 @@ export async function createTestApp(config: Partial<AppConfig> = {}): Promise<Te
       await database.drop();
     },
   };
+}
+
+/** Delivers every queued message now, so a test can read the Outbox right after sending. */
+export async function drainMail(t: { ctx: AppContext }): Promise<number> {
+  return t.ctx.mailer.drain();
 }
 
 /** A supertest agent that keeps cookies and sends the session's CSRF token on writes. */

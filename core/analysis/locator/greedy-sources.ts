@@ -11,7 +11,7 @@ export interface FoundSource {
   /** True for an alternative spot of the first scan (e.g. the other side of a pass), not a fitted source. */
   alternate: boolean;
   q: number;
-  /** The Δχ² map this spot was chosen on (its own round's or relocation's scan), for refinement and radius. */
+  /** The Δχ² map this spot was chosen on (its own round's scan), for refinement and radius. */
   surface: Float64Array;
 }
 
@@ -29,22 +29,12 @@ export interface GreedyInput {
   maxCandidates: number;
   separationM: number;
   alternateFraction: number;
-  rankByStrength: boolean;
   /** Per-cell log prior odds of a leak (0 = neutral), weighed against Δχ² in units of the residual variance. */
   prior: Float64Array | null;
   /** Fitted sources are at least this far apart, m. */
   sourceSeparationM: number;
-  /**
-   * Relocation passes after the greedy selection: each fitted source is re-scanned, within
-   * `sourceSeparationM` of where it is, against the readings minus every other source, and moved to
-   * its best cell there (0 = off). A source picked early absorbed its neighbours' gas; once they are
-   * fitted, its own best cell can differ.
-   */
-  relocatePasses?: number;
   /** Fitted sources within this distance of a stronger one are listed after the others, m (0 = off). */
-  tailReachM?: number;
-  /** Judge credibility on the best-fitting cell before the prior picks among cells (see findSources). */
-  evidenceGate?: boolean;
+  tailReachM: number;
   credible: (
     cell: number,
     column: Float64Array,
@@ -59,16 +49,10 @@ export interface GreedyResult {
   sources: FoundSource[];
   fit: NonnegativeFit;
   firstScan: ScanResult;
-  /** χ² of the final joint fit and of the fit with nuisance sources only. */
+  /** χ² of the final joint fit. */
   chi2Final: number;
-  chi2NoLeak: number;
 }
 
-/**
- * Several leaks by greedy forward selection (in the spirit of Yee 2012): scan all cells against the
- * residual of the current joint fit, take the best credible cell, refit all strengths jointly, repeat
- * until no credible cell is left. The first scan's other local optima become alternatives.
- */
 /**
  * The cell maximising Δχ² + 2·s²·log-prior, with s² the residual variance of the best single-source fit
  * (so the prior counts as much as it would against data of that scatter); -1 when no cell fits.
@@ -124,36 +108,32 @@ function cellDist2(a: number, b: number, width: number): number {
   return (ai - bi) ** 2 + ((a - ai) / width - (b - bi) / width) ** 2;
 }
 
-/** Sets mask to allowed[] within radiusM of cell c (0 elsewhere is left as is). */
-function keepAround(
-  mask: Uint8Array,
-  allowed: Uint8Array,
-  c: number,
-  width: number,
-  cellSize: number,
-  radiusM: number,
-): void {
-  forEachCellWithin(c, width, mask.length / width, cellSize, radiusM, (k) => (mask[k] = allowed[k]));
+/** The readings minus every column's fitted share (columns with no strength are skipped). */
+export function residualOf(y: Float64Array, columns: readonly Float64Array[], q: readonly number[]): Float64Array {
+  const r = new Float64Array(y);
+  columns.forEach((col, s) => {
+    if (q[s] > 0) for (let i = 0; i < r.length; i++) r[i] -= q[s] * col[i];
+  });
+  return r;
 }
 
+/**
+ * Several leaks by greedy forward selection (in the spirit of Yee 2012): scan all cells against the
+ * residual of the current joint fit, take the best credible cell, refit all strengths jointly, repeat
+ * until no credible cell is left. The first scan's other local optima become alternatives.
+ */
 export function findSources(input: GreedyInput): GreedyResult {
   const { fields, y, w, censored, allowed } = input;
   const n = y.length;
   const cells = fields.sumWG.length;
   const columns = input.nuisance.slice();
   let fit = fitNonnegative(y, w, columns, censored);
-  const chi2NoLeak = fit.chi2;
   const sources: FoundSource[] = [];
   const sumWGR = new Float64Array(cells);
-  const residual = new Float64Array(n);
   let firstScan: ScanResult | null = null;
   const roundAllowed = new Uint8Array(allowed);
   for (let round = 0; round < input.maxLeaks; round++) {
-    residual.set(y);
-    columns.forEach((col, s) => {
-      const q = fit.q[s];
-      if (q > 0) for (let i = 0; i < n; i++) residual[i] -= q * col[i];
-    });
+    const residual = residualOf(y, columns, fit.q);
     let sw = 0,
       swr = 0,
       swrr = 0;
@@ -168,17 +148,15 @@ export function findSources(input: GreedyInput): GreedyResult {
     let best = bestWithPrior(scan, input.prior, n);
     if (best < 0) break;
     let column = kernelColumn(fields, best, n);
-    if (input.evidenceGate && input.prior) {
-      // Whether there is a leak at all is the readings' question: the best-fitting cell must be credible
-      // on its own; the prior only chooses where, among cells the readings allow.
-      const ml = bestWithPrior(scan, null, n);
-      const mlColumn = ml === best ? column : kernelColumn(fields, ml, n);
-      if (!input.credible(ml, mlColumn, scan.q[ml], scan.b[ml], residual, scan.delta[ml])) break;
-      if (ml !== best && !input.credible(best, column, scan.q[best], scan.b[best], residual, scan.delta[best])) {
-        best = ml;
-        column = mlColumn;
-      }
-    } else if (!input.credible(best, column, scan.q[best], scan.b[best], residual, scan.delta[best])) break;
+    // Whether there is a leak at all is the readings' question: the best-fitting cell must be credible
+    // on its own; the prior only chooses where, among cells the readings allow.
+    const ml = input.prior ? bestWithPrior(scan, null, n) : best;
+    const mlColumn = ml === best ? column : kernelColumn(fields, ml, n);
+    if (!input.credible(ml, mlColumn, scan.q[ml], scan.b[ml], residual, scan.delta[ml])) break;
+    if (ml !== best && !input.credible(best, column, scan.q[best], scan.b[best], residual, scan.delta[best])) {
+      best = ml;
+      column = mlColumn;
+    }
     columns.push(column);
     fit = fitNonnegative(y, w, columns, censored);
     sources.push({ cell: best, delta: scan.delta[best], column, alternate: false, q: 0, surface: scan.delta });
@@ -186,49 +164,11 @@ export function findSources(input: GreedyInput): GreedyResult {
     blockAround(roundAllowed, best, input.gridWidth, input.cellSize, input.sourceSeparationM);
   }
   const nn = input.nuisance.length;
-  if (sources.length > 1) {
-    for (let pass = 0; pass < (input.relocatePasses ?? 0); pass++) {
-      let moved = false;
-      for (let k = 0; k < sources.length; k++) {
-        residual.set(y);
-        columns.forEach((col, s) => {
-          const q = fit.q[s];
-          if (s !== nn + k && q > 0) for (let i = 0; i < n; i++) residual[i] -= q * col[i];
-        });
-        let sw = 0,
-          swr = 0,
-          swrr = 0;
-        for (let i = 0; i < n; i++) {
-          sw += w[i];
-          swr += w[i] * residual[i];
-          swrr += w[i] * residual[i] * residual[i];
-        }
-        const mask = new Uint8Array(cells);
-        keepAround(mask, allowed, sources[k].cell, input.gridWidth, input.cellSize, input.sourceSeparationM);
-        sources.forEach((o, j) => {
-          if (j !== k) blockAround(mask, o.cell, input.gridWidth, input.cellSize, input.sourceSeparationM);
-        });
-        sumWeightedKernelTimes(fields, w, residual, sumWGR);
-        const scan = scanSources(fields.sumWG, fields.sumWGG, sumWGR, { sumW: sw, sumWR: swr, sumWRR: swrr }, mask);
-        const best = bestWithPrior(scan, input.prior, n);
-        if (best < 0) continue;
-        sources[k].surface = scan.delta;
-        sources[k].delta = scan.delta[best];
-        if (best === sources[k].cell) continue;
-        sources[k].cell = best;
-        sources[k].column = kernelColumn(fields, best, n);
-        columns[nn + k] = sources[k].column;
-        fit = fitNonnegative(y, w, columns, censored);
-        moved = true;
-      }
-      if (!moved) break;
-    }
-  }
   sources.forEach((s, k) => (s.q = fit.q[nn + k]));
   const bestDelta = Math.max(0, ...sources.map((s) => s.delta));
   // Rank fitted sources by strength: a weak source that the greedy step picked early usually mops up
   // far-field gas of a strong one that the truncated kernel cannot reach.
-  if (input.rankByStrength) sources.sort((a, b) => b.q - a.q);
+  sources.sort((a, b) => b.q - a.q);
   if (firstScan && sources.length > 0 && sources.length < input.maxCandidates) {
     const sep2 = (input.separationM / input.cellSize) ** 2;
     const near = (a: number, b: number) => {
@@ -244,11 +184,7 @@ export function findSources(input: GreedyInput): GreedyResult {
       16,
       input.alternateFraction * bestDelta,
     );
-    const residual0 = new Float64Array(y);
-    input.nuisance.forEach((col, s) => {
-      const q = fit.q[s];
-      if (q > 0) for (let i = 0; i < n; i++) residual0[i] -= q * col[i];
-    });
+    const residual0 = residualOf(y, input.nuisance, fit.q);
     for (const c of optima) {
       if (sources.length >= input.maxCandidates) break;
       if (sources.some((s) => near(s.cell, c))) continue;
@@ -264,7 +200,7 @@ export function findSources(input: GreedyInput): GreedyResult {
       });
     }
   }
-  if (input.tailReachM && input.tailReachM > 0) {
+  if (input.tailReachM > 0) {
     // A weaker fitted source within a stronger one's reach may be its far-field tail (which the
     // truncated kernel cannot model) as much as a second leak: list it after the independent spots.
     const reach2 = (input.tailReachM / input.cellSize) ** 2;
@@ -285,6 +221,5 @@ export function findSources(input: GreedyInput): GreedyResult {
       chi2Background: 0,
     },
     chi2Final: fit.chi2,
-    chi2NoLeak,
   };
 }

@@ -72,11 +72,11 @@ function radialPart(
 }
 
 /**
- * Chooses each cell's drift against the residual r (readings minus nuisance sources) and rewrites the
- * fields' kernel values and per-cell sums in place, so every later step (scan, joint fit, columns)
- * uses the chosen kernel. Needs fields with one response node per reading (fields.dist), built with
- * the same screening lengths (cells left without drift keep the kernel they were built with).
- * Returns per cell the chosen strength index + 1 and direction (0 = no drift).
+ * Chooses each cell's drift against the residual r (readings minus nuisance sources) and returns new
+ * fields whose kernel values and per-cell sums use the chosen kernel, so every later step (scan, joint
+ * fit, columns) uses it; the fields given are left as they were. They must be built with the same
+ * screening lengths (cells left without drift keep the kernel they were built with).
+ * Also returns per cell the chosen strength index + 1 and direction (0 = no drift).
  */
 export function chooseLocalDrift(
   fields: ReadingFields,
@@ -86,9 +86,8 @@ export function chooseLocalDrift(
   r: Float64Array,
   allowed: Uint8Array,
   settings: DriftSettings,
-): { strength: Uint8Array; direction: Uint8Array } {
-  const { dist, start, cell, kernel, groupX, groupY, groupOfReading } = fields;
-  if (!dist) throw new Error("drift: the fields need one response node per reading");
+): { fields: ReadingFields; strength: Uint8Array; direction: Uint8Array } {
+  const { dist, start, cell, groupX, groupY, groupOfReading } = fields;
   if (!(settings.penalty >= 0)) throw new Error(`drift penalty must be >= 0, got ${settings.penalty}`);
   for (const v of settings.strengths) if (!(v > 0)) throw new Error(`drift strength must be positive, got ${v}`);
   const cells = fields.sumWG.length;
@@ -127,7 +126,7 @@ export function chooseLocalDrift(
   const sumWGR = new Float64Array(cells);
   for (let g = 0; g < groups; g++) {
     const ar = gwr[g];
-    for (let e = start[g], end = start[g + 1]; e < end; e++) sumWGR[cell[e]] += ar * kernel[e];
+    for (let e = start[g], end = start[g + 1]; e < end; e++) sumWGR[cell[e]] += ar * fields.kernel[e];
   }
   const scan0 = scanSources(fields.sumWG, fields.sumWGG, sumWGR, totals, allowed);
   const best = Float64Array.from(scan0.delta);
@@ -191,9 +190,10 @@ export function chooseLocalDrift(
     }
   });
 
-  // write the chosen kernel into the fields
-  fields.sumWG.fill(0);
-  fields.sumWGG.fill(0);
+  // the chosen kernel, in new fields
+  const kernel = Float32Array.from(fields.kernel);
+  const sumWG = new Float64Array(cells);
+  const sumWGG = new Float64Array(cells);
   for (let g = 0; g < groups; g++) {
     const aw = gw[g];
     for (let e = start[g], end = start[g + 1]; e < end; e++) {
@@ -204,9 +204,9 @@ export function chooseLocalDrift(
         const [ux, uy] = DRIFT_DIRECTIONS[direction[c]];
         kernel[e] = radial[si - 1].scale * radial[si - 1].table.at(dist[e]) * Math.exp(a * (ux * dxs[e] + uy * dys[e]));
       }
-      fields.sumWG[c] += aw * kernel[e];
-      fields.sumWGG[c] += aw * kernel[e] * kernel[e];
+      sumWG[c] += aw * kernel[e];
+      sumWGG[c] += aw * kernel[e] * kernel[e];
     }
   }
-  return { strength, direction };
+  return { fields: { ...fields, kernel, sumWG, sumWGG }, strength, direction };
 }

@@ -1,6 +1,5 @@
 import { GeodesicSearch } from "../grid/geodesic-distance";
 import { nearestFreeCell, type PlanGrid } from "../grid/plan-grid";
-import type { ResponseNodes } from "../lag/response-nodes";
 import type { SourceKernel } from "./source-kernel";
 
 /**
@@ -18,11 +17,10 @@ export interface ReadingFields {
   cell: Int32Array;
   kernel: Float32Array;
   /**
-   * Geodesic distance of each entry, and the position each group's search started from: with one
-   * response node per reading they let a drifted kernel be evaluated again without new searches
-   * (see local-drift.ts). Null with several nodes per reading.
+   * Geodesic distance of each entry, and the position each group's search started from: they let a
+   * drifted kernel be evaluated again without new searches (see local-drift.ts).
    */
-  dist: Float32Array | null;
+  dist: Float32Array;
   groupX: Float64Array;
   groupY: Float64Array;
   /** Per cell Σ w·g and Σ w·g² over readings (weights w as given). */
@@ -37,7 +35,8 @@ export interface ReadingFields {
 
 export function accumulateReadingFields(
   grid: PlanGrid,
-  nodes: ResponseNodes,
+  xs: Float64Array,
+  ys: Float64Array,
   values: Float64Array,
   weights: Float64Array,
   kernel: SourceKernel,
@@ -45,33 +44,23 @@ export function accumulateReadingFields(
   stepScale: Float32Array | null = null,
 ): ReadingFields {
   const n = values.length;
-  const m = nodes.weights.length;
-  if (m === 0 || nodes.xs.length !== m || nodes.ys.length !== m)
-    throw new Error("response nodes: need matching xs, ys and weights");
+  if (xs.length !== n || ys.length !== n) throw new Error("reading fields: need one position per reading");
   const cells = grid.width * grid.height;
-  // readings whose response nodes fall in the same cells share one combined column
-  const nodeCells: Int32Array[] = nodes.xs.map((xs, k) =>
-    Int32Array.from(xs, (x, i) => nearestFreeCell(grid, x, nodes.ys[k][i])),
-  );
-  const keyOf = (i: number) => {
-    let key = "";
-    for (let k = 0; k < m; k++) key += nodeCells[k][i] + ",";
-    return key;
-  };
+  // readings in the same cell share one search
   const groupOfReading = new Int32Array(n);
-  const groupIndex = new Map<string, number>();
+  const groupIndex = new Map<number, number>();
   const groupCellList: number[] = [];
   const groupW: number[] = [];
   const groupY: number[] = [];
   const groupCount: number[] = [];
   const groupFirst: number[] = [];
   for (let i = 0; i < n; i++) {
-    const key = keyOf(i);
-    let g = groupIndex.get(key);
+    const cell = nearestFreeCell(grid, xs[i], ys[i]);
+    let g = groupIndex.get(cell);
     if (g === undefined) {
       g = groupCellList.length;
-      groupIndex.set(key, g);
-      groupCellList.push(nodeCells[0][i]);
+      groupIndex.set(cell, g);
+      groupCellList.push(cell);
       groupW.push(0);
       groupY.push(0);
       groupCount.push(0);
@@ -94,81 +83,52 @@ export function accumulateReadingFields(
   let cap = Math.max(1024, groups * perSearch);
   let cellArr = new Int32Array(cap);
   let kernArr = new Float32Array(cap);
-  let distArr = new Float32Array(m === 1 ? cap : 0);
+  let distArr = new Float32Array(cap);
   let used = 0;
-
-  // per group: the response-weighted kernel and map weight of its nodes, gathered densely
-  const combG = new Float64Array(cells);
-  const combOm = new Float64Array(cells);
-  const combD = new Float64Array(m === 1 ? cells : 0);
-  const stamp = new Int32Array(cells).fill(-1);
-  let touched: Int32Array = new Int32Array(4096);
 
   const search = new GeodesicSearch(grid, stepScale);
   const mapCut = 3 * mapSigmaM;
   const inv2s2 = 1 / (2 * mapSigmaM * mapSigmaM);
   for (let g = 0; g < groups; g++) {
     const i = groupFirst[g];
-    let nTouched = 0;
-    for (let k = 0; k < m; k++) {
-      // identical node cells of one reading (standing still) are searched once with summed weight
-      let dup = false;
-      for (let k2 = 0; k2 < k; k2++) if (nodeCells[k2][i] === nodeCells[k][i]) dup = true;
-      if (dup) continue;
-      let a = 0;
-      for (let k2 = k; k2 < m; k2++) if (nodeCells[k2][i] === nodeCells[k][i]) a += nodes.weights[k2];
-      const settled = search.fromPoint(nodes.xs[k][i], nodes.ys[k][i], kernel.truncationM);
-      const { dist } = search;
-      const list = search.settled;
-      for (let q = 0; q < settled; q++) {
-        const c = list[q];
-        const d = dist[c];
-        if (d < nearestReading[c]) nearestReading[c] = d;
-        if (stamp[c] !== g) {
-          stamp[c] = g;
-          combG[c] = 0;
-          combOm[c] = 0;
-          if (nTouched === touched.length) touched = growInt32(touched);
-          touched[nTouched++] = c;
-        }
-        combG[c] += a * kernel.at(d);
-        if (m === 1) combD[c] = d;
-        if (d <= mapCut) combOm[c] += a * Math.exp(-d * d * inv2s2);
-      }
-    }
-    if (used + nTouched > cap) {
-      cap = Math.max(cap * 2, used + nTouched);
+    const settled = search.fromPoint(xs[i], ys[i], kernel.truncationM);
+    const { dist } = search;
+    const list = search.settled;
+    if (used + settled > cap) {
+      cap = Math.max(cap * 2, used + settled);
       const c2 = new Int32Array(cap);
       c2.set(cellArr.subarray(0, used));
       cellArr = c2;
       const k2 = new Float32Array(cap);
       k2.set(kernArr.subarray(0, used));
       kernArr = k2;
-      if (m === 1) {
-        const d2 = new Float32Array(cap);
-        d2.set(distArr.subarray(0, used));
-        distArr = d2;
-      }
+      const d2 = new Float32Array(cap);
+      d2.set(distArr.subarray(0, used));
+      distArr = d2;
     }
     start[g] = used;
     const w = groupW[g];
     const ySum = groupY[g];
     const count = groupCount[g];
-    for (let q = 0; q < nTouched; q++) {
-      const c = touched[q];
-      const gv = combG[c];
+    for (let q = 0; q < settled; q++) {
+      const c = list[q];
+      const d = dist[c];
+      if (d < nearestReading[c]) nearestReading[c] = d;
+      const gv = kernel.at(d);
       if (gv > 0) {
         sumWG[c] += w * gv;
         sumWGG[c] += w * gv * gv;
         cellArr[used] = c;
         kernArr[used] = gv;
-        if (m === 1) distArr[used] = combD[c];
+        distArr[used] = d;
         used++;
       }
-      const om = combOm[c];
-      if (om > 0) {
-        omega[c] += count * om;
-        omegaY[c] += ySum * om;
+      if (d <= mapCut) {
+        const om = Math.exp(-d * d * inv2s2);
+        if (om > 0) {
+          omega[c] += count * om;
+          omegaY[c] += ySum * om;
+        }
       }
     }
   }
@@ -179,21 +139,15 @@ export function accumulateReadingFields(
     start,
     cell: cellArr.subarray(0, used),
     kernel: kernArr.subarray(0, used),
-    dist: m === 1 ? distArr.subarray(0, used) : null,
-    groupX: Float64Array.from(groupFirst, (i) => nodes.xs[0][i]),
-    groupY: Float64Array.from(groupFirst, (i) => nodes.ys[0][i]),
+    dist: distArr.subarray(0, used),
+    groupX: Float64Array.from(groupFirst, (i) => xs[i]),
+    groupY: Float64Array.from(groupFirst, (i) => ys[i]),
     sumWG,
     sumWGG,
     omega,
     omegaY,
     nearestReading,
   };
-}
-
-function growInt32(a: Int32Array): Int32Array {
-  const b = new Int32Array(a.length * 2);
-  b.set(a);
-  return b;
 }
 
 /** Per cell Σ_i w_i·g_i(c)·r_i for a per-reading vector r (one pass over the stored entries). */

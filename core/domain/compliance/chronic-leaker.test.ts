@@ -60,3 +60,28 @@ describe("chronic leaker (≥ 125 % of full charge added in a calendar year)", (
     expect(years[0].reportDue).toBe("2027-03-01");
   });
 });
+
+describe("chronic-leaker years follow the part that applied in that year", () => {
+  // docs/reference/standards.md §1: Part 84 from 1 Jan 2026 [S:R4]; Part 82 leak repair covers ODS only since
+  // 10 Apr 2020 [S:R1,R2]; 125 % of the full charge in a calendar year, report by 1 March [S:R7].
+  const partOn = (date: string) => (date >= "2026-01-01" ? PART_84_SUBPART_C : null);
+  it("counts no HFC year before 2026", () => {
+    const years = chronicLeakerYears(partOn, poundsToKg(100), [
+      lb("a", "2025-02-01", 70),
+      lb("b", "2025-11-01", 60),
+      lb("c", "2026-03-01", 80),
+      lb("d", "2026-10-01", 50),
+    ]);
+    expect(years.map((y) => [y.year, Math.round(y.percent), y.chronic, y.reportDue])).toEqual([
+      [2026, 130, true, "2027-03-01"],
+    ]);
+  });
+  it("counts only the additions made while a part applied", () => {
+    // A system that reached 15 lb only from 1 Jul (here: a part from that day): 100 lb before, 30 lb after.
+    const years = chronicLeakerYears((d) => (d >= "2026-07-01" ? PART_84_SUBPART_C : null), poundsToKg(20), [
+      lb("a", "2026-03-01", 100),
+      lb("b", "2026-08-01", 30),
+    ]);
+    expect(years.map((y) => [y.year, Math.round(y.percent), y.chronic])).toEqual([[2026, 150, true]]);
+  });
+});

@@ -26,9 +26,9 @@ describe("readable citations", () => {
       "hermetically sealed, labelled, < 10 t CO2e (Regulation (EU) No 517/2014, Art. 4)",
     );
   });
-  it("say plainly what is from memory or derived, and leave a company's own words alone", () => {
+  it("mark what is a reading or derived, and leave a company's own words alone", () => {
     expect(readableSource("[M] the first calculation after 1 Jan 2026 uses 365 days")).toBe(
-      "the first calculation after 1 Jan 2026 uses 365 days (not yet confirmed in the rule text)",
+      "the first calculation after 1 Jan 2026 uses 365 days (reading)",
     );
     expect(readableSource("[D] 10 lb into 100 lb after 180 days")).toBe(
       "10 lb into 100 lb after 180 days (derived from the cited values)",
@@ -36,13 +36,11 @@ describe("readable citations", () => {
     expect(readableSource("company policy: repair within 14 days")).toBe("company policy: repair within 14 days");
     // Pointers into our own reference file are internal and dropped.
     expect(readableSource("[M] docs/reference/standards.md §8 (critical point 31.0 °C / 73.8 bar)")).toBe(
-      "critical point 31.0 °C / 73.8 bar (not yet confirmed in the rule text)",
+      "critical point 31.0 °C / 73.8 bar (reading)",
     );
     expect(
       readableSource("[M] safety class B2L; rises: density 0.59 × air [D] docs/reference/standards.md §4, §8"),
-    ).toBe(
-      "safety class B2L (not yet confirmed in the rule text); rises: density 0.59 × air (derived from the cited values)",
-    );
+    ).toBe("safety class B2L (reading); rises: density 0.59 × air (derived from the cited values)");
     expect(readableSource("[S:ZZ] an odd rule")).toBe("an odd rule (source ZZ)");
   });
   it("leave no tag in any source of the built-in profiles", () => {

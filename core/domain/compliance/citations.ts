@@ -24,11 +24,10 @@ export const CITATIONS: Record<string, Citation> = {
   R4: { text: "40 CFR 84 subpart C", mentioned: CFR84 },
   R4b: { text: "90 FR 47999 (2025, proposed)", mentioned: /90 FR 47999/ },
   R5: { text: "40 CFR 84.102", mentioned: /84\.102/ },
-  R6: { text: "ACHR News, “EPA requirements for leak repair”", mentioned: /ACHR/ },
-  R7: {
-    text: "40 CFR 82 subpart F and 84 subpart C, as summarised in an EPA Section 608 study guide",
-    mentioned: /82 subpart F and 84/,
-  },
+  // Secondary summaries (a trade magazine, a study guide, a legal digest) are research notes: a reader
+  // sees only the rule they summarise.
+  R6: { text: "40 CFR 82 subpart F", mentioned: CFR82 },
+  R7: { text: "40 CFR 82 subpart F and 84 subpart C", mentioned: /82 subpart F and 84|40 CFR 8[24]\.1\d\d/ },
   R8: { text: "40 CFR 82.152", mentioned: /82\.152/ },
   R9: { text: "EPA Section 608 technician certification", mentioned: /Section 608/ },
   E1: { text: "Regulation (EU) No 517/2014, Art. 4", mentioned: /517\/2014 Art/ },
@@ -36,7 +35,7 @@ export const CITATIONS: Record<string, Citation> = {
   E3: { text: "Regulation (EU) No 517/2014, Annex I (IPCC AR4 values)", mentioned: /Annex I\b/ },
   E4: { text: "Regulation (EU) 2024/573, Art. 3 and Annexes I–VI", mentioned: /2024\/573, Annex/ },
   E5: { text: "Regulation (EU) 2024/573, Art. 5", mentioned: /2024\/573 Art\. 5/ },
-  E6: { text: "Regulation (EU) 2024/573, as summarised by Legal Register", mentioned: /2024\/573/ },
+  E6: { text: "Regulation (EU) 2024/573", mentioned: /2024\/573/ },
   E7: { text: "Regulation (EU) 2024/573, Art. 3 (CO2 equivalent)", mentioned: /CO2 equivalent/ },
   E8: { text: "Regulation (EC) No 1516/2007", mentioned: /1516\/2007/ },
   E8b: { text: "Regulation (EU) 2024/573, Art. 7", mentioned: /2024\/573 Art\. 7/ },
@@ -48,7 +47,7 @@ export const CITATIONS: Record<string, Citation> = {
   S2b: { text: "NIOSH criteria document for CO2 (1976)", mentioned: /NIOSH/ },
   D1: { text: "SAE J2791", mentioned: /J2791/ },
   D2: { text: "EN 14624:2020 and EN 50676", mentioned: /EN 14624|EN 50676/ },
-  D3: { text: "electronic leak detector service procedure (hvacspecialists.info)", mentioned: /hvacspecialists/ },
+  D3: { text: "common practice, no published source", mentioned: /common practice/ },
   D3b: { text: "EPA Section 608 technician certification", mentioned: /Section 608/ },
   D4: { text: "Reshniak et al., Energies 16:6499 (2023)", mentioned: /Reshniak/ },
   P1: { text: "Cheng et al., ES&T 45:4016 (2011)", mentioned: /Cheng/ },
@@ -57,15 +56,24 @@ export const CITATIONS: Record<string, Citation> = {
   P4: { text: "“Airborne infection in a fully air-conditioned hospital III”", mentioned: /hospital/ },
 };
 
-export const UNCONFIRMED = "not yet confirmed in the rule text";
+/**
+ * The neutral marker for a value or rule the product applies without having confirmed it in the rule
+ * text ("[M]"): screens link it to the list of readings on the rule-profile page, where the owner
+ * accepts or changes each one (docs/decisions/0044-readings-and-research-notes.md).
+ */
+export const UNCONFIRMED = "reading";
+/** Where a reader finds every reading of the company's profile, in plain words. */
+export const READINGS_PATH = "/settings#readings";
 export const DERIVED = "derived from the cited values";
 
+/** A clause that already cites a rule section ("40 CFR 82.157: …") needs no summary's citation after it. */
+const NAMES_A_RULE = /^40 CFR \d+\.\d+/;
 const TAG = /\s*\[(S:[A-Za-z0-9,]+|M|D)\]:?/g;
 const SECTION_ONLY = /^(8[24])\.(\d{3})/;
 
 /**
  * One source text for people: each tag becomes its citation (unless the text already names it),
- * "[M]" becomes "not yet confirmed in the rule text" and "[D]" "derived from the cited values".
+ * "[M]" becomes the marker "reading" and "[D]" "derived from the cited values".
  * Texts without tags (a company's own "company policy, 2026 audit") come back unchanged.
  */
 // Pointers into our own reference file are internal: the tag beside them says how sure we are.
@@ -74,7 +82,8 @@ const INTERNAL = /\s*(?:docs\/reference\/)?standards\.md(\s*§\d+(,\s*§\d+)*)?|
 export function readableSource(source: string): string {
   // The closing disclaimer names its codes in its own text: nothing more to cite.
   if (/standards\.md §8 disclaimer/.test(source)) return "";
-  source = source.replace(INTERNAL, "");
+  // Research notes ("from memory", "verify in …") are for us; the tag already says how sure we are.
+  source = source.replace(INTERNAL, "").replace(/,?\s*\b(from memory|verify in [^;,)]*)/gi, "");
   if (!source.includes("[")) return source.trim();
   const said = new Set<string>();
   const segments = splitOutsideParens(source).map((segment) => {
@@ -96,7 +105,8 @@ export function readableSource(source: string): string {
         for (const id of tag.slice(2).split(",")) {
           const c = CITATIONS[id];
           if (!c) notes.push(`source ${id}`);
-          else if (!c.mentioned.test(source.replace(TAG, "")) && !said.has(c.text)) notes.push(c.text);
+          else if (!c.mentioned.test(source.replace(TAG, "")) && !NAMES_A_RULE.test(rest) && !said.has(c.text))
+            notes.push(c.text);
           if (c) said.add(c.text);
         }
     }

@@ -34,3 +34,8 @@ export function systemCo2e(profile: RuleProfile, refrigerant: Refrigerant, charg
 export function tonnesForComparison(tonnes: number): number {
   return roundHalfUp(tonnes, 6);
 }
+
+/** The profile's stated GWP basis, shown beside every GWP and CO2-equivalent figure. */
+export function gwpBasisStatement(profile: RuleProfile): string {
+  return profile.gwpBases.note?.trim() || `GWP-100 from ${profile.gwpBases.value.join(", then ")}`;
+}

@@ -13,6 +13,7 @@ export const EU_FGAS_PROFILE: RuleProfile = {
   gwpBases: {
     value: ["EU-517/2014", "AR4"],
     source: "[S:E3,E4] AR4 100-year values for HFCs; 517/2014 values for HFOs and hydrocarbons [M]",
+    note: "IPCC AR4 100-year values as in Regulation (EU) 2024/573 Annex I; HFOs and hydrocarbons take the values of Regulation (EU) No 517/2014 (R-1234yf 4, R-1234ze(E) 7, R-290 and R-600a 3)",
   },
   leakRateParts: [],
   leakChecks: {

@@ -1,5 +1,7 @@
 import { addDays, compareDates, daysBetween, parseIsoDate, type IsoDate } from "../dates/calendar-date";
 import { DomainInputError, requirePositive } from "../input-error";
+import type { ChargeAddition } from "./charge-addition";
+import { groupAdditions, lastAdditionBefore, type FindingRepair } from "./leak-groups";
 import type { LeakRateMethod } from "./rule-profile";
 
 /**
@@ -8,16 +10,7 @@ import type { LeakRateMethod } from "./rule-profile";
  * rule profile, so nothing regulatory is fixed here.
  */
 
-/** A charge-added record. Dates are calendar dates in the store's time zone. */
-export interface ChargeAddition {
-  id: string;
-  date: IsoDate;
-  amountKg: number;
-  /** Voided by a correcting entry: ignored everywhere (it stays in the audit trail, not in the figures). */
-  voided?: boolean;
-  /** No leak-rate calculation at this addition (40 CFR 82.157: after a retrofit, new install or seasonal variance [S:R1]). */
-  excluded?: "retrofit" | "new-installation" | "seasonal-variance";
-}
+export type { ChargeAddition } from "./charge-addition";
 
 export interface LeakRateRules {
   maxDaysSinceLastAddition: number;
@@ -32,14 +25,16 @@ export interface LeakRateRules {
 }
 
 export interface LeakRatePoint {
-  /** The calculation date (the addition's date). */
+  /** The calculation date: the last addition of its group. */
   date: IsoDate;
+  /** The group's first addition: the repair clock runs from this day. */
+  clockFrom: IsoDate;
   method: LeakRateMethod;
   /** % of full charge per year, unrounded. */
   percent: number;
   /** Refrigerant counted in this figure. */
   countedKg: number;
-  /** The additions of this date that triggered the calculation. */
+  /** The additions counted in this figure (one leak's top-ups before its repair, or one day's). */
   additionIds: string[];
   /** Annualizing: the days used (capped). Rolling average: the window length in days. */
   days: number;
@@ -88,84 +83,76 @@ function liveSorted(additions: readonly ChargeAddition[]): ChargeAddition[] {
     .sort((a, b) => compareDates(a.date, b.date));
 }
 
-/** Groups same-day additions: topping up in several steps on one visit is one event (from memory: "count together"). */
-function byDate(additions: ChargeAddition[]): { date: IsoDate; items: ChargeAddition[] }[] {
-  const groups: { date: IsoDate; items: ChargeAddition[] }[] = [];
-  for (const a of additions) {
-    const last = groups.at(-1);
-    if (last && last.date === a.date) last.items.push(a);
-    else groups.push({ date: a.date, items: [a] });
-  }
-  return groups;
-}
-
 export interface LeakRateInput {
   fullChargeKg: number;
+  /** The full charge in force on a calculation date, when it changed over time (else `fullChargeKg`). */
+  fullChargeKgOn?: (date: IsoDate) => number;
   additions: readonly ChargeAddition[];
   method: LeakRateMethod;
   rules: LeakRateRules;
   /** Dates of successful follow-up verification tests (rolling average shortens its window to after the last one). */
   followUpVerifiedOn?: readonly IsoDate[];
+  /** Repairs per finding: a leak's additions before its repair form one group. */
+  findingRepairs?: readonly FindingRepair[];
 }
 
 /**
- * The leak rate at every addition, oldest first. Voided entries are ignored; excluded ones
- * (retrofit, new installation, seasonal variance) get no figure and are not counted as loss, but
- * still restart the annualizing clock, because refrigerant was added that day. That last point is
- * our reading; no published text on it was found.
+ * The leak rate at every group of additions (docs/reference/standards.md §1), ordered by
+ * calculation date. Voided entries are ignored; excluded ones (retrofit, new installation,
+ * seasonal variance) get no figure and are not counted as loss, but still restart the annualizing
+ * clock, because refrigerant was added that day (our reading; no published text on it was found).
+ * A group's annualizing figure counts the days from the last addition before the group to the
+ * group's last addition (docs/decisions/0042-same-leak-additions.md).
  */
 export function leakRateHistory(input: LeakRateInput): LeakRatePoint[] {
-  const { fullChargeKg, method, rules } = input;
-  requirePositive(fullChargeKg, "fullChargeKg");
-  const groups = byDate(liveSorted(input.additions));
+  const { method, rules } = input;
+  requirePositive(input.fullChargeKg, "fullChargeKg");
+  const chargeOn = input.fullChargeKgOn ?? (() => input.fullChargeKg);
+  const live = liveSorted(input.additions);
+  const groups = groupAdditions(live, input.findingRepairs ?? []);
   const verified = (input.followUpVerifiedOn ?? [])
     .map((d, i) => (parseIsoDate(d, `followUpVerifiedOn[${i}]`), d))
     .sort(compareDates);
-  const points: LeakRatePoint[] = [];
   if (rules.firstCalculationFrom) parseIsoDate(rules.firstCalculationFrom, "rules.firstCalculationFrom");
-  const startsRegime = (date: IsoDate) =>
-    rules.firstCalculationFrom !== undefined &&
-    compareDates(date, rules.firstCalculationFrom) >= 0 &&
-    !points.some((p) => compareDates(p.date, rules.firstCalculationFrom!) >= 0);
-  groups.forEach((group, i) => {
+  const from = rules.firstCalculationFrom;
+  // The first figure on or after a regime's start date is a first calculation, whatever came before.
+  const firstInRegime =
+    from === undefined
+      ? undefined
+      : groups
+          .filter((g) => g.items.some((a) => !a.excluded) && compareDates(g.lastDate, from) >= 0)
+          .sort((x, y) => compareDates(x.lastDate, y.lastDate))[0];
+  const points: LeakRatePoint[] = [];
+  for (const group of groups) {
     const counted = group.items.filter((a) => !a.excluded);
-    if (counted.length === 0) return;
+    if (counted.length === 0) continue;
     const addedKg = counted.reduce((s, a) => s + a.amountKg, 0);
-    const additionIds = counted.map((a) => a.id);
+    const fullChargeKg = chargeOn(group.lastDate);
+    const base = { date: group.lastDate, clockFrom: group.firstDate, method, additionIds: counted.map((a) => a.id) };
     if (method === "annualizing") {
-      const previous = groups[i - 1];
+      const previous = lastAdditionBefore(live, group, group.firstDate);
       const days =
-        previous && !startsRegime(group.date)
-          ? Math.min(daysBetween(previous.date, group.date), rules.maxDaysSinceLastAddition)
+        previous && group !== firstInRegime
+          ? Math.max(1, Math.min(daysBetween(previous, group.lastDate), rules.maxDaysSinceLastAddition))
           : rules.firstCalculationDays;
-      points.push({
-        date: group.date,
-        method,
-        percent: annualizedLeakRate(addedKg, fullChargeKg, days),
-        countedKg: addedKg,
-        additionIds,
-        days,
-      });
-      return;
+      points.push({ ...base, percent: annualizedLeakRate(addedKg, fullChargeKg, days), countedKg: addedKg, days });
+      continue;
     }
     // The window is the `rollingWindowDays` calendar days ending on the calculation date, or starts
     // the day after the last follow-up verification before that date if that is later.
-    let windowStart = addDays(group.date, 1 - rules.rollingWindowDays);
-    const lastVerified = verified.filter((d) => compareDates(d, group.date) < 0).at(-1);
+    let windowStart = addDays(group.lastDate, 1 - rules.rollingWindowDays);
+    const lastVerified = verified.filter((d) => compareDates(d, group.lastDate) < 0).at(-1);
     if (lastVerified && compareDates(addDays(lastVerified, 1), windowStart) > 0) windowStart = addDays(lastVerified, 1);
-    const inWindow = groups
-      .filter((g) => compareDates(g.date, windowStart) >= 0 && compareDates(g.date, group.date) <= 0)
-      .flatMap((g) => g.items.filter((a) => !a.excluded));
-    const windowKg = inWindow.reduce((s, a) => s + a.amountKg, 0);
+    const windowKg = live
+      .filter((a) => !a.excluded && compareDates(a.date, windowStart) >= 0 && compareDates(a.date, group.lastDate) <= 0)
+      .reduce((s, a) => s + a.amountKg, 0);
     points.push({
-      date: group.date,
-      method,
+      ...base,
       percent: rollingAverageLeakRate(windowKg, fullChargeKg),
       countedKg: windowKg,
-      additionIds,
-      days: daysBetween(windowStart, group.date) + 1,
+      days: daysBetween(windowStart, group.lastDate) + 1,
       windowStart,
     });
-  });
-  return points;
+  }
+  return points.sort((x, y) => compareDates(x.date, y.date) || compareDates(x.clockFrom, y.clockFrom));
 }

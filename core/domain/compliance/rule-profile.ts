@@ -59,7 +59,17 @@ export interface LeakRatePart {
     waivedWithAutomaticLeakDetection: boolean;
   }>;
   /** Automatic leak detection required for these types from this full charge. */
-  automaticLeakDetectionRequired?: Sourced<{ types: ApplianceType[]; fromCharge: MassLimit }>;
+  automaticLeakDetectionRequired?: Sourced<{
+    types: ApplianceType[];
+    fromCharge: MassLimit;
+    /**
+     * When it must be installed, by the system's in-service day: within `withinDays` of it, or by a
+     * fixed date `by`. A system in service before every listed range has no install deadline.
+     */
+    installDeadlines?: { inServiceFrom: IsoDate; inServiceBefore?: IsoDate; withinDays?: number; by?: IsoDate }[];
+  }>;
+  /** When a repair does not hold: a retrofit-or-retire plan within `planDays`, carried out within `carryOutMonths`. */
+  failedRepair?: Sourced<{ planDays: number; carryOutMonths: number }>;
   chronicLeaker: {
     /** Added in one calendar year, as % of full charge; reaching it ("≥") flags the system. */
     percentOfFullCharge: Sourced<number>;

@@ -1,7 +1,11 @@
-import { addMonths, compareDates, type IsoDate } from "../dates/calendar-date";
+import { addDays, addMonths, compareDates, yearOf, type IsoDate } from "../dates/calendar-date";
+import { automaticLeakDetection, type AutomaticLeakDetection } from "./automatic-leak-detection";
 import type { Refrigerant } from "../refrigerants/types";
 import { applicableLeakRatePart, leakRateThreshold } from "./applicability";
 import { assessLeakRate, type AssessedPoint } from "./assess-leak-rate";
+import { breachEpisodes, type BreachEpisode } from "./breach-episodes";
+import type { FindingRepair } from "./leak-groups";
+import { factsOn, inRegime, regimesOf, type SystemRevision } from "./system-revisions";
 import { chronicLeakerYears, type ChronicLeakerYear } from "./chronic-leaker";
 import { systemCo2e, type SystemCo2e } from "./co2e";
 import { followUpVerificationDueDate, initialVerificationDueDate, recheckAfterRepairDueDate } from "./deadlines";
@@ -21,17 +25,37 @@ export interface SystemRecords {
   additions: readonly ChargeAddition[];
   /** Days a repair of a leak on this system was recorded. */
   repairedOn: readonly IsoDate[];
+  /** The same repairs by finding: a leak's additions before its repair are one figure. */
+  findingRepairs?: readonly FindingRepair[];
   /** Repaired findings whose verification is not finished: the repair day and a passed initial test's day, if any. */
   pendingFollowUps: readonly { findingId: string; repairedOn: IsoDate; initialTestOn: IsoDate | null }[];
+  /** Days a follow-up verification test failed: the repair did not hold. */
+  failedFollowUps?: readonly { findingId: string; on: IsoDate }[];
   /** Days a follow-up verification test passed (shortens the rolling-average window). */
   followUpVerifiedOn: readonly IsoDate[];
   leakChecks: readonly { checkedOn: IsoDate; leakFound: boolean }[];
   /** Calendar years whose chronic-leaker report is marked filed (the due item closes). */
   chronicReportsFiled?: readonly number[];
+  /**
+   * The dated revisions of the facts above (docs/decisions/0043-system-revisions.md); when given,
+   * every figure uses the values in force on its date and today's values replace the flat fields.
+   */
+  revisions?: readonly SystemRevision[];
+  /** The day the system was retired (store calendar); from then only reports for earlier years fall due. */
+  retiredOn?: IsoDate | null;
 }
 
 export interface DueDate {
-  kind: "repair" | "initial-test" | "follow-up-test" | "recheck-after-repair" | "inspection" | "chronic-leaker-report";
+  kind:
+    | "repair"
+    | "initial-test"
+    | "follow-up-test"
+    | "recheck-after-repair"
+    | "inspection"
+    | "chronic-leaker-report"
+    | "automatic-leak-detection"
+    | "retrofit-or-retire-plan"
+    | "retrofit-or-retire";
   dueOn: IsoDate;
   what: string;
   source: string;
@@ -53,11 +77,15 @@ export interface SystemStatus {
   };
   /** The latest calculation is above the threshold. */
   overThreshold: boolean;
-  /** The latest breach not yet followed by a repair. */
+  /** The open breach episode's first exceedance, carrying the episode's repair deadline. */
   unrepairedBreach: AssessedPoint | null;
+  /** Every breach episode, oldest first (docs/decisions/0041-repair-clock.md). */
+  episodes: BreachEpisode[];
   chronic: ChronicLeakerYear[];
   co2e: SystemCo2e;
   leakCheck: { withLds: LeakCheckInterval; withoutLds: LeakCheckInterval; applied: LeakCheckInterval } | null;
+  /** The part's automatic-leak-detection requirement for this system, or null when the part has none. */
+  automaticLeakDetection: AutomaticLeakDetection | null;
   nextInspection: { dueOn: IsoDate; reason: string; source: string } | null;
   due: DueDate[];
 }
@@ -70,18 +98,40 @@ export function systemStatus(
   rec: SystemRecords,
   today: IsoDate,
 ): SystemStatus {
-  const system = { refrigerant: rec.refrigerant, fullChargeKg: rec.fullChargeKg, applianceType: rec.applianceType };
-  const points = assessLeakRate(profile, system, rec.additions, method, rec.followUpVerifiedOn);
+  const revisions: readonly SystemRevision[] = rec.revisions?.length
+    ? rec.revisions
+    : [{ ...rec, inServiceOn: rec.enteredOn, effectiveFrom: rec.enteredOn, kind: "first" }];
+  const on = (date: IsoDate) => factsOn(revisions, date);
+  const now = on(today);
+  const facts = { ...now, enteredOn: now.inServiceOn };
+  // A retrofit starts a new regime: no figure counts days or additions from before it.
+  const assessed = regimesOf(revisions).flatMap((regime) =>
+    assessLeakRate(
+      profile,
+      on,
+      rec.additions.filter((a) => inRegime(regime, a.date)),
+      method,
+      rec.followUpVerifiedOn.filter((d) => inRegime(regime, d)),
+      rec.findingRepairs ?? [],
+      regime.from,
+    ),
+  );
+  // A retrofit or the retirement ends an open breach as a repair does (the leak's refrigerant is gone).
+  const retrofits = revisions.filter((r) => r.kind === "retrofit").map((r) => r.effectiveFrom);
+  const enders = [...retrofits, ...(rec.retiredOn ? [rec.retiredOn] : [])];
+  const episodes = breachEpisodes(profile, assessed, [...rec.repairedOn, ...enders]);
+  // Every exceedance of an episode shows the episode's deadline: a later one never extends it.
+  const dueOf = new Map(episodes.flatMap((e) => e.exceedances.map((p) => [p, e.repairDue] as const)));
+  const points = assessed.map((p) => (dueOf.has(p) ? { ...p, repairDue: dueOf.get(p) } : p));
   const latest = points.at(-1) ?? null;
-  const a = applicableLeakRatePart(profile, rec.refrigerant, rec.fullChargeKg, today);
-  const threshold = a.applies ? leakRateThreshold(a.part, rec.applianceType) : null;
+  const a = applicableLeakRatePart(profile, facts.refrigerant, facts.fullChargeKg, today);
+  const threshold = a.applies ? leakRateThreshold(a.part, facts.applianceType) : null;
   const due: DueDate[] = [];
 
-  // A breach stays open until a repair is recorded on or after the day the rate was learned.
+  // The repair clock runs from the first exceedance of the open episode (docs/decisions/0041-repair-clock.md).
   const lastBreach = [...points].reverse().find((p) => p.exceeds) ?? null;
-  const lastRepair = latestOf(rec.repairedOn);
-  const unrepairedBreach =
-    lastBreach && !(lastRepair && compareDates(lastRepair, lastBreach.date) >= 0) ? lastBreach : null;
+  const open = episodes.at(-1)?.repairedOn === null ? episodes.at(-1)! : null;
+  const unrepairedBreach = open ? { ...open.first, repairDue: open.repairDue } : null;
   const breachPart = lastBreach?.partId
     ? (profile.leakRateParts.find((p) => p.id === lastBreach.partId) ?? null)
     : null;
@@ -89,7 +139,7 @@ export function systemStatus(
     due.push({
       kind: "repair",
       dueOn: unrepairedBreach.repairDue,
-      what: `Repair: leak rate ${unrepairedBreach.percent.toFixed(1)} % on ${unrepairedBreach.date} is above ${unrepairedBreach.thresholdPercent} %`,
+      what: `Repair: leak rate ${unrepairedBreach.percent.toFixed(1)} % on ${unrepairedBreach.date} is above ${unrepairedBreach.thresholdPercent} %${open && open.exceedances.length > 1 ? ` (first of ${open.exceedances.length} exceedances before a repair; the deadline runs from the first)` : ""}`,
       source: `${breachPart.title}; ${breachPart.repairDays.source}`,
     });
   }
@@ -113,7 +163,12 @@ export function systemStatus(
         source: part.followUpVerificationDays.source,
         findingId: f.findingId,
       });
-    } else if (!part && profile.leakChecks) {
+    } else if (
+      !part &&
+      profile.leakChecks &&
+      // EU: a leak check with no leak found on or after the repair day is the re-check [S:E6].
+      !rec.leakChecks.some((c) => !c.leakFound && compareDates(c.checkedOn, f.repairedOn) >= 0)
+    ) {
       due.push({
         kind: "recheck-after-repair",
         dueOn: recheckAfterRepairDueDate(profile, f.repairedOn),
@@ -124,35 +179,53 @@ export function systemStatus(
     }
   }
 
-  const chronic = part ? chronicLeakerYears(part, rec.fullChargeKg, rec.additions) : [];
+  // Automatic leak detection: shown on the system, and due from its in-service day while missing.
+  const ald = automaticLeakDetection(a.applies ? a.part : null, facts);
+  if (ald?.required && ald.dueOn && !facts.automaticLeakDetection)
+    due.push({
+      kind: "automatic-leak-detection",
+      dueOn: ald.dueOn,
+      what: `Install automatic leak detection (${ald.reason})`,
+      source: ald.source,
+    });
+
+  due.push(...failedRepairItems(profile, episodes, rec.failedFollowUps ?? [], retrofits, today));
+
+  // Each year is judged by the part that applied to the system in it (none: the year does not count).
+  const partOn = (date: IsoDate) => {
+    const at = applicableLeakRatePart(profile, on(date).refrigerant, on(date).fullChargeKg, date);
+    return at.applies ? at.part : null;
+  };
+  const chronic = chronicLeakerYears(partOn, (date) => on(date).fullChargeKg, rec.additions);
   const thisYear = Number(today.slice(0, 4));
   for (const y of chronic) {
+    const yearPart = profile.leakRateParts.find((p) => p.id === y.partId);
     // The report for last year (or this one, once reached) is what can still be acted on.
-    if (y.chronic && y.reportDue && y.year >= thisYear - 1 && part && !rec.chronicReportsFiled?.includes(y.year)) {
+    if (y.chronic && y.reportDue && y.year >= thisYear - 1 && yearPart && !rec.chronicReportsFiled?.includes(y.year)) {
       due.push({
         kind: "chronic-leaker-report",
         dueOn: y.reportDue,
         year: y.year,
         what: `Chronic-leaker report for ${y.year}: ${y.percent.toFixed(0)} % of the full charge added`,
-        source: `${part.chronicLeaker.percentOfFullCharge.source}; ${part.chronicLeaker.reportBy.source}`,
+        source: `${yearPart.chronicLeaker.percentOfFullCharge.source}; ${yearPart.chronicLeaker.reportBy.source}`,
       });
     }
   }
 
-  const co2e = systemCo2e(profile, rec.refrigerant, rec.fullChargeKg);
+  const co2e = systemCo2e(profile, facts.refrigerant, facts.fullChargeKg);
   const lastCheck = latestOf(rec.leakChecks.map((c) => c.checkedOn));
   let leakCheck: SystemStatus["leakCheck"] = null;
   let nextInspection: SystemStatus["nextInspection"] = null;
   if (profile.leakChecks) {
-    const withLds = leakCheckInterval(profile, rec.refrigerant, rec.fullChargeKg, { hasLeakDetection: true });
-    const withoutLds = leakCheckInterval(profile, rec.refrigerant, rec.fullChargeKg, { hasLeakDetection: false });
-    const applied = rec.automaticLeakDetection ? withLds : withoutLds;
+    const withLds = leakCheckInterval(profile, facts.refrigerant, facts.fullChargeKg, { hasLeakDetection: true });
+    const withoutLds = leakCheckInterval(profile, facts.refrigerant, facts.fullChargeKg, { hasLeakDetection: false });
+    const applied = facts.automaticLeakDetection ? withLds : withoutLds;
     leakCheck = { withLds, withoutLds, applied };
     if (applied.required) {
-      const from = lastCheck ?? rec.enteredOn;
+      const from = lastCheck ?? facts.enteredOn;
       nextInspection = {
         dueOn: nextInspectionDate(from, applied.months),
-        reason: `${lastCheck ? `last leak check ${lastCheck}` : `no leak check recorded since the system was entered on ${rec.enteredOn}`}; ${applied.reason}`,
+        reason: `${lastCheck ? `last leak check ${lastCheck}` : `no leak check recorded since the system was entered on ${facts.enteredOn}`}; ${applied.reason}`,
         source: profile.leakChecks.co2eBands.source,
       };
     }
@@ -160,9 +233,9 @@ export function systemStatus(
     // US: periodic inspections after a breach until enough clean periods in a row. Our reading of
     // "until N periods below the threshold": N consecutive inspections with no leak found since the breach.
     const plan = inspectionsAfterBreach(breachPart, {
-      applianceType: rec.applianceType,
-      fullChargeKg: rec.fullChargeKg,
-      hasAutomaticLeakDetection: rec.automaticLeakDetection,
+      applianceType: facts.applianceType,
+      fullChargeKg: facts.fullChargeKg,
+      hasAutomaticLeakDetection: facts.automaticLeakDetection,
     });
     if (plan.required) {
       const run = inspectionRun(
@@ -201,12 +274,77 @@ export function systemStatus(
     },
     overThreshold: !!latest?.exceeds,
     unrepairedBreach,
+    episodes,
     chronic,
     co2e,
     leakCheck,
+    automaticLeakDetection: ald,
     nextInspection,
-    due: due.sort((x, y) => compareDates(x.dueOn, y.dueOn)),
+    due: (rec.retiredOn ? due.filter((d) => stillDueWhenRetired(d, rec.retiredOn!)) : due).sort((x, y) =>
+      compareDates(x.dueOn, y.dueOn),
+    ),
   };
+}
+
+/**
+ * When a repair does not hold (a failed follow-up verification test, or no repair within the 30
+ * days), a retrofit-or-retire plan falls due, to be carried out within a year (docs/reference/standards.md
+ * §1 [M]; docs/decisions/0044-readings-and-research-notes.md). The earliest such day not followed by a
+ * retrofit starts both items; retirement ends them (a retired system has no due items but reports).
+ */
+function failedRepairItems(
+  profile: RuleProfile,
+  episodes: readonly BreachEpisode[],
+  failedFollowUps: readonly { findingId: string; on: IsoDate }[],
+  retrofits: readonly IsoDate[],
+  today: IsoDate,
+): DueDate[] {
+  type Trigger = { on: IsoDate; why: string; partId: string | null; findingId?: string };
+  const triggers: Trigger[] = [
+    ...failedFollowUps.map((f) => ({
+      on: f.on,
+      why: `the follow-up verification test of ${f.on} failed`,
+      partId: null,
+      findingId: f.findingId,
+    })),
+    ...episodes
+      .filter((e) =>
+        e.repairedOn ? compareDates(e.repairedOn, e.repairDue) > 0 : compareDates(today, e.repairDue) > 0,
+      )
+      .map((e) => ({ on: e.repairDue, why: `no repair by ${e.repairDue}`, partId: e.partId })),
+  ].filter((t) => !retrofits.some((r) => compareDates(r, t.on) >= 0));
+  const first = triggers.sort((x, y) => compareDates(x.on, y.on))[0];
+  if (!first) return [];
+  const part =
+    profile.leakRateParts.find((p) => p.id === first.partId && p.failedRepair) ??
+    profile.leakRateParts.find((p) => p.failedRepair);
+  const rule = part?.failedRepair;
+  if (!rule) return [];
+  const findingId = first.findingId ? { findingId: first.findingId } : {};
+  return [
+    {
+      kind: "retrofit-or-retire-plan",
+      dueOn: addDays(first.on, rule.value.planDays),
+      what: `Retrofit-or-retire plan: ${first.why}`,
+      source: rule.source,
+      ...findingId,
+    },
+    {
+      kind: "retrofit-or-retire",
+      dueOn: addMonths(first.on, rule.value.carryOutMonths),
+      what: `Retrofit or retire the system under its plan (${first.why})`,
+      source: rule.source,
+      ...findingId,
+    },
+  ];
+}
+
+/**
+ * A retired system needs no repair, test or inspection any more, but a chronic-leaker report for a
+ * year it was in service is still owed (docs/decisions/0040-no-record-is-lost.md).
+ */
+function stillDueWhenRetired(d: DueDate, retiredOn: IsoDate): boolean {
+  return d.kind === "chronic-leaker-report" && d.year !== undefined && d.year <= yearOf(retiredOn);
 }
 
 /**

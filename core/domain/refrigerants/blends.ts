@@ -6,16 +6,29 @@ import type { BlendRefrigerant } from "./types";
  * molar-mass.ts), so a corrected component value corrects every blend. Blend classes [M].
  */
 const G3 = "[S:G3] ASHRAE 34-2019 via openscm-units mixtures.yaml";
-const M = "[M] from memory, verify in ASHRAE 34";
+// [M]: recalled, not yet checked in the standard (verify in ASHRAE 34).
+const M = "[M] ASHRAE 34";
 
-const blend = (id: string, name: string, safety: "A1" | "A2L", components: [string, number][]): BlendRefrigerant => ({
+const blend = (
+  id: string,
+  name: string,
+  safety: "A1" | "A2L",
+  components: [string, number][],
+  compositionSource = G3,
+): BlendRefrigerant => ({
   id,
   name,
   kind: "blend",
   safetyClass: { value: safety, source: M },
   components: components.map(([cid, massPercent]) => ({ id: cid, massPercent })),
-  compositionSource: G3,
+  compositionSource,
 });
+
+/**
+ * Blends common in supermarkets that docs/reference/standards.md does not hold: compositions from memory
+ * ([M]), checked against each blend's published GWP in refrigerants.test.ts.
+ */
+const FROM_MEMORY = "[M] ASHRAE 34 designation";
 
 export const BLENDS: readonly BlendRefrigerant[] = [
   blend("R-404A", "R-125/143a/134a (44/52/4)", "A1", [
@@ -68,4 +81,72 @@ export const BLENDS: readonly BlendRefrigerant[] = [
     ["R-32", 21.5],
     ["R-1234yf", 75.5],
   ]),
+  // Retrofit and lower-GWP blends seen in supermarkets (from memory; see FROM_MEMORY).
+  blend(
+    "R-422D",
+    "R-125/134a/600a (65.1/31.5/3.4)",
+    "A1",
+    [
+      ["R-125", 65.1],
+      ["R-134a", 31.5],
+      ["R-600a", 3.4],
+    ],
+    FROM_MEMORY,
+  ),
+  blend(
+    "R-427A",
+    "R-32/125/143a/134a (15/25/10/50)",
+    "A1",
+    [
+      ["R-32", 15],
+      ["R-125", 25],
+      ["R-143a", 10],
+      ["R-134a", 50],
+    ],
+    FROM_MEMORY,
+  ),
+  blend(
+    "R-438A",
+    "R-32/125/134a/600/601a (8.5/45/44.2/1.7/0.6)",
+    "A1",
+    [
+      ["R-32", 8.5],
+      ["R-125", 45],
+      ["R-134a", 44.2],
+      ["R-600", 1.7],
+      ["R-601a", 0.6],
+    ],
+    FROM_MEMORY,
+  ),
+  blend(
+    "R-513A",
+    "R-1234yf/134a (56/44)",
+    "A1",
+    [
+      ["R-1234yf", 56],
+      ["R-134a", 44],
+    ],
+    FROM_MEMORY,
+  ),
+  blend(
+    "R-450A",
+    "R-134a/1234ze(E) (42/58)",
+    "A1",
+    [
+      ["R-134a", 42],
+      ["R-1234ze(E)", 58],
+    ],
+    FROM_MEMORY,
+  ),
+  blend(
+    "R-452A",
+    "R-32/125/1234yf (11/59/30)",
+    "A1",
+    [
+      ["R-32", 11],
+      ["R-125", 59],
+      ["R-1234yf", 30],
+    ],
+    FROM_MEMORY,
+  ),
 ];

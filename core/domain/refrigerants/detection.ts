@@ -12,6 +12,7 @@ export interface DetectionVerdict {
   reason: string;
 }
 
+// Sensor facts here are from memory (docs/reference/standards.md §6 [M]); readers see the fact, not the note.
 /** Our own rule for blends: seen when at least half the mass is visible, blind when none is. */
 const BLEND_VISIBLE_SHARE = 50;
 
@@ -21,12 +22,12 @@ function pureVerdict(principle: SensingPrinciple, r: PureRefrigerant, band?: Inf
       const weak = r.id === "R-32" ? " It reads R-32 more weakly than HCFCs; keep the probe slow and close." : "";
       return {
         answer: "yes",
-        reason: `${r.id} is halogenated, and heated-diode sensors respond to halogen compounds (from memory).${weak}`,
+        reason: `${r.id} is halogenated, and heated-diode sensors respond to halogen compounds.${weak}`,
       };
     }
     return {
       answer: "no",
-      reason: `Heated-diode sensors are blind to ${r.id}, which has no fluorine or chlorine (from memory).`,
+      reason: `Heated-diode sensors are blind to ${r.id}, which has no fluorine or chlorine.`,
     };
   }
   if (principle === "infrared") {
@@ -46,7 +47,7 @@ function pureVerdict(principle: SensingPrinciple, r: PureRefrigerant, band?: Inf
       return r.id === "R-744"
         ? {
             answer: "yes",
-            reason: "CO2 absorbs at 4.26 µm; the ~420 ppm background masks small R-744 leaks (from memory).",
+            reason: "CO2 absorbs at 4.26 µm; the ~420 ppm background masks small R-744 leaks.",
           }
         : { answer: "no", reason: `A CO2-band instrument does not see ${r.id}.` };
     }

@@ -8,7 +8,8 @@ import type { PureRefrigerant } from "./types";
 const G1 = "[S:G1] IPCC GWP-100 (openclimatedata globalwarmingpotentials)";
 const D4 = "[D] docs/reference/standards.md §4, from IUPAC atomic weights";
 const S1 = "[S:S1] IMC Table 1103.1 (from ASHRAE 34)";
-const M = "[M] from memory, verify in ASHRAE 34 Tables 4-1/4-2";
+// [M]: recalled, not yet checked in the standard (verify in ASHRAE 34 Tables 4-1/4-2).
+const M = "[M] ASHRAE 34 Tables 4-1/4-2";
 const EU517 = "[M] Regulation (EU) 517/2014 value (no AR4 value exists)";
 const AR5_LT1 =
   "[M] AR5 lists <1; 1 is used as the upper bound, which reproduces the AR5 blend values in docs/reference/standards.md §3 (R-454B 467)";
@@ -131,6 +132,30 @@ export const PURE_REFRIGERANTS: readonly PureRefrigerant[] = [
     molarMass: { value: 58.12, source: D4 },
     safetyClass: { value: "A3", source: M },
     gwp: { "EU-517/2014": { value: 3, source: EU517 } },
+  },
+  // Hydrocarbon components of supermarket retrofit blends (R-422D, R-438A). From memory: no entry in
+  // docs/reference/standards.md; the blend tests check them against the blends' published GWPs.
+  {
+    id: "R-600",
+    name: "Butane",
+    kind: "HC",
+    formula: "C4H10",
+    ods: false,
+    molarMass: { value: 58.12, source: "[D] from IUPAC atomic weights" },
+    safetyClass: { value: "A3", source: M },
+    gwp: { "EU-517/2014": { value: 4, source: "[M] Regulation (EU) 517/2014 value for butane (no AR4 value exists)" } },
+  },
+  {
+    id: "R-601a",
+    name: "Isopentane",
+    kind: "HC",
+    formula: "C5H12",
+    ods: false,
+    molarMass: { value: 72.15, source: "[D] from IUPAC atomic weights" },
+    safetyClass: { value: "A3", source: M },
+    gwp: {
+      "EU-517/2014": { value: 5, source: "[M] Regulation (EU) 517/2014 value for isopentane (no AR4 value exists)" },
+    },
   },
   {
     id: "R-717",

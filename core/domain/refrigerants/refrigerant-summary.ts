@@ -3,8 +3,14 @@ import { gwpOf } from "#core/domain/refrigerants/gwp";
 import type { GwpBasis, Refrigerant } from "#core/domain/refrigerants/types";
 import { cautionsFor } from "#core/domain/safety/cautions";
 
-export function summarizeRefrigerant(r: Refrigerant, bases: readonly GwpBasis[]): RefrigerantSummary {
-  const gwp = gwpOf(r, bases);
+/** The GWP bases a company's profile prescribes and its stated choice in words. */
+export interface GwpChoice {
+  bases: readonly GwpBasis[];
+  statement: string;
+}
+
+export function summarizeRefrigerant(r: Refrigerant, choice: GwpChoice): RefrigerantSummary {
+  const gwp = gwpOf(r, choice.bases);
   const basis = gwp.known ? [...new Set(gwp.terms.map((t) => t.basis))].join(" + ") : "";
   return {
     id: r.id,
@@ -12,7 +18,12 @@ export function summarizeRefrigerant(r: Refrigerant, bases: readonly GwpBasis[])
     safetyClass: r.safetyClass.value,
     safetyClassSource: r.safetyClass.source,
     gwp: gwp.known
-      ? { value: gwp.value, basis, source: [...new Set(gwp.terms.map((t) => t.source))].join("; ") }
+      ? {
+          value: gwp.value,
+          basis,
+          statement: choice.statement,
+          source: [...new Set(gwp.terms.map((t) => t.source))].join("; "),
+        }
       : null,
     gwpNote: gwp.known
       ? r.kind === "blend"

@@ -173,3 +173,33 @@ describe("molar mass", () => {
     expect(densityRelativeToAir(getRefrigerant("R-717"))).toBeCloseTo(0.59, 2);
   });
 });
+
+describe("supermarket blends added from memory, checked against their published GWPs", () => {
+  // Compositions (ASHRAE 34 designations) and published AR4 blend GWPs are from memory; component GWPs are
+  // IPCC AR4 [S:G1] and the 517/2014 values for HFOs and hydrocarbons ([M], docs/reference/standards.md §3).
+  // A wrong recollection of a composition shows up as a mismatch here.
+  const EU = ["EU-517/2014", "AR4"] as const;
+  const published: Record<string, number> = {
+    "R-422D": 2729, // 0.651×3500 + 0.315×1430 + 0.034×3 = 2729.05
+    "R-427A": 2138, // 0.15×675 + 0.25×3500 + 0.10×4470 + 0.50×1430 = 2138.25
+    "R-438A": 2265, // 0.085×675 + 0.45×3500 + 0.442×1430 + 0.017×4 + 0.006×5 = 2264.53
+    "R-513A": 631, // 0.56×4 + 0.44×1430 = 631.44
+    "R-450A": 605, // 0.42×1430 + 0.58×7 = 604.66
+    "R-452A": 2140, // 0.11×675 + 0.59×3500 + 0.30×4 = 2140.45
+  };
+  it("gives each blend's published AR4 GWP from its composition", () => {
+    for (const [id, v] of Object.entries(published)) expect(gwp(id, [...EU]), id).toBe(v);
+  });
+  it("gives the published AR5 values of the HFO blends (from memory: R-513A 573, R-450A 547)", () => {
+    // AR5 with "<1" counted as 1: 0.44×1300 + 0.56×1 = 572.56; 0.42×1300 + 0.58×1 = 546.58.
+    expect(gwp("R-513A", ["AR5"])).toBe(573);
+    expect(gwp("R-450A", ["AR5"])).toBe(547);
+  });
+  it("lists the components and marks the compositions from memory", () => {
+    for (const id of ["R-600", "R-601a"]) expect(getRefrigerant(id).kind).toBe("HC");
+    for (const id of Object.keys(published)) {
+      const r = getRefrigerant(id);
+      expect(r.kind === "blend" && r.compositionSource, id).toMatch(/^\[M\] /); // [M]: from memory
+    }
+  });
+});

@@ -1,9 +1,9 @@
 /**
  * The readings of a sweep as CSV: raw tap and lag-corrected positions side by side, in the reader's
  * length unit (metres, or decimal feet — a spreadsheet cannot sum "12 ft 3 in"), times in the store's
- * zone. papaparse writes the quoting (RFC 4180).
+ * zone. Text cells are escaped against formula injection (csv-cells.ts).
  */
-import Papa from "papaparse";
+import { unparseCsv } from "./csv-cells";
 import { metresToFeet } from "../units/length";
 import type { LengthPreference } from "../units/format-units";
 
@@ -69,5 +69,5 @@ export function readingsCsv(rows: readonly CsvReading[], unit: LengthPreference,
     r.flags.join(" "),
     r.note,
   ]);
-  return Papa.unparse({ fields: readingsCsvColumns(unit), data }, { newline: "\r\n" });
+  return unparseCsv({ fields: readingsCsvColumns(unit), data });
 }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { getRefrigerant } from "../refrigerants/catalogue";
-import { cautionsFor, isFlammableClass } from "./cautions";
+import { cautionsFor, isFlammableClass, roomCautions } from "./cautions";
 
 const ids = (list: { id: string }[]) => list.map((c) => c.id);
 
@@ -39,5 +39,41 @@ describe("cautionsFor", () => {
     // ASHRAE 34 class notation: letter = toxicity, digit = flammability.
     expect(["A1", "B1"].map(isFlammableClass)).toEqual([false, false]);
     expect(["A2L", "A2", "A3", "B2L"].map(isFlammableClass)).toEqual([true, true, true, true]);
+  });
+});
+
+describe("room cautions know the room's systems", () => {
+  const room = (place: "walk-in" | "machine-room", ids: string[]) =>
+    roomCautions(
+      place,
+      ids.map((id) => getRefrigerant(id)),
+    );
+  it("an ammonia machine room: toxic, and a leak collects near the ceiling, not from the floor up", () => {
+    // R-717 toxic (B2L) and lighter than air, density 0.59 × air (docs/reference/standards.md §4 [D], §8).
+    const c = room("machine-room", ["R-717"]);
+    expect(ids(c)).toEqual(["toxic-ammonia", "oxygen-displacement", "codes-govern"]);
+    const o2 = c.find((x) => x.id === "oxygen-displacement")!.text;
+    expect(o2).toMatch(/R-717 collects near the ceiling/);
+    expect(o2).not.toMatch(/floor up/);
+  });
+  it("a CO2 machine room gives the exposure limits as published and defers to the site's detector", () => {
+    // ACGIH 5,000 ppm TWA and 30,000 ppm STEL [S:S2]; OSHA PEL 5,000 ppm TWA (from memory, docs/reference/standards.md §5).
+    const c = room("machine-room", ["R-744", "R-448A"]);
+    expect(ids(c)).toEqual(["co2-exposure", "high-pressure-co2", "oxygen-displacement", "codes-govern"]);
+    const co2 = c[0].text;
+    expect(co2).toMatch(/5,000 ppm averaged over a work shift and 30,000 ppm over 15 minutes \(ACGIH\)/);
+    expect(co2).toMatch(/5,000 ppm over a shift \(OSHA\)/);
+    expect(co2).toMatch(/Trust the site's CO2 detector/);
+    // Both heavier than air (R-744 1.52, R-448A ~2.98 × air, §4 [D]).
+    expect(c[2].text).toMatch(/R-744, R-448A fill it from the floor up/);
+  });
+  it("names flammable refrigerants, and keeps the general warning when the room's systems are unknown", () => {
+    const c = room("walk-in", ["R-290"]);
+    expect(c[0]).toMatchObject({ id: "flammable" });
+    expect(c[0].text).toMatch(/^R-290: This refrigerant is flammable/);
+    expect(room("walk-in", []).find((x) => x.id === "oxygen-displacement")!.text).toMatch(
+      /this walk-in a large leak fills from the floor up/,
+    );
+    expect(room("walk-in", []).at(-1)!.id).toBe("codes-govern");
   });
 });

@@ -10,6 +10,7 @@ export type CautionId =
   | "flammable"
   | "high-pressure-co2"
   | "toxic-ammonia"
+  | "co2-exposure"
   | "oxygen-displacement"
   | "pressure-test-nitrogen"
   | "certified-technicians"
@@ -44,6 +45,14 @@ const TOXIC_AMMONIA: Caution = {
   level: "warning",
   text: "Ammonia (R-717) is toxic and mildly flammable, and it rises: a leak collects near the ceiling, not the floor. Wear the protection your procedure requires and leave if you smell it strongly.",
   source: "[M] safety class B2L; rises: density 0.59 × air [D] docs/reference/standards.md §4, §8",
+};
+
+/** CO2 exposure limits as docs/reference/standards.md §5 states them; the site's detector and codes decide. */
+const CO2_EXPOSURE: Caution = {
+  id: "co2-exposure",
+  level: "warning",
+  text: "CO2 (R-744) is harmful to breathe well before it displaces oxygen. Exposure limits: 5,000 ppm averaged over a work shift and 30,000 ppm over 15 minutes (ACGIH); 5,000 ppm over a shift (OSHA). Trust the site's CO2 detector: leave when it alarms. Local codes and the site's procedure govern.",
+  source: "[S:S2] ACGIH TLV 5,000 ppm TWA, 30,000 ppm STEL; OSHA PEL 5,000 ppm TWA [M]",
 };
 
 function oxygenCaution(r: Refrigerant | undefined, place: CautionPlace | undefined): Caution {
@@ -99,13 +108,48 @@ export function cautionsFor(options: { refrigerant?: Refrigerant; place?: Cautio
   const list: Caution[] = [];
   if (r && r.id === "R-717") list.push(TOXIC_AMMONIA);
   else if (r && isFlammableClass(r.safetyClass.value)) list.push(FLAMMABLE);
-  if (
-    r &&
-    (r.id === "R-744" || (r.kind === "blend" && r.components.some((c) => c.id === "R-744" && c.massPercent >= 50)))
-  ) {
-    list.push(HIGH_PRESSURE_CO2);
-  }
+  if (r && isMostlyCo2(r)) list.push(HIGH_PRESSURE_CO2, CO2_EXPOSURE);
   if (place !== "sales-floor") list.push(oxygenCaution(r, place));
   list.push(PRESSURE_TEST, CERTIFIED, CODES);
   return list;
+}
+
+function isMostlyCo2(r: Refrigerant): boolean {
+  return r.id === "R-744" || (r.kind === "blend" && r.components.some((c) => c.id === "R-744" && c.massPercent >= 50));
+}
+
+/**
+ * Cautions for entering a walk-in or machine room that knows the refrigerants of the systems in it:
+ * ammonia rises and is toxic, CO2 has exposure limits and high pressure, flammable refrigerants need
+ * ignition sources removed, and the oxygen warning says where the gas collects for these refrigerants
+ * (heavier than air: from the floor up; ammonia: near the ceiling). Without known systems it gives
+ * the general room warning. The last caution defers to local codes.
+ */
+export function roomCautions(place: CautionPlace, refrigerants: readonly Refrigerant[]): Caution[] {
+  const distinct = [...new Map(refrigerants.map((r) => [r.id, r])).values()];
+  const list: Caution[] = [];
+  if (distinct.some((r) => r.id === "R-717")) list.push(TOXIC_AMMONIA);
+  if (distinct.some(isMostlyCo2)) list.push(CO2_EXPOSURE, HIGH_PRESSURE_CO2);
+  const flammable = distinct.filter((r) => r.id !== "R-717" && isFlammableClass(r.safetyClass.value));
+  if (flammable.length)
+    list.push({ ...FLAMMABLE, text: `${flammable.map((r) => r.id).join(", ")}: ${FLAMMABLE.text}` });
+  list.push(roomOxygenCaution(place, distinct));
+  list.push(CODES);
+  return list;
+}
+
+function roomOxygenCaution(place: CautionPlace, refrigerants: readonly Refrigerant[]): Caution {
+  if (refrigerants.length === 0) return oxygenCaution(undefined, place);
+  const where = place === "machine-room" ? "this machine room" : "this walk-in";
+  const rising = refrigerants.filter((r) => densityRelativeToAir(r) < 1).map((r) => r.id);
+  const sinking = refrigerants.filter((r) => densityRelativeToAir(r) >= 1).map((r) => r.id);
+  const layers = [
+    sinking.length ? `${sinking.join(", ")} ${sinking.length > 1 ? "fill" : "fills"} it from the floor up` : "",
+    rising.length ? `${rising.join(", ")} ${rising.length > 1 ? "collect" : "collects"} near the ceiling` : "",
+  ].filter(Boolean);
+  const base = oxygenCaution(undefined, place);
+  return {
+    ...base,
+    text: `Any refrigerant displaces oxygen. In ${where} a large leak of ${layers.join("; ")}, without warning. Check the room's refrigerant detector and alarm before you go in, keep the door open and do not work alone; below 19.5 % oxygen the air is unsafe to breathe.`,
+  };
 }

@@ -3,7 +3,8 @@
  * readings and plan, cached per sweep and parameter set; a cached result whose readings changed since
  * is answered as stale while a recompute runs (or awaited with wait=true).
  */
-import { and, eq } from "drizzle-orm";
+import { and, desc, eq, ne, notInArray } from "drizzle-orm";
+import { can } from "#core/domain/roles";
 import type { AppContext } from "../../context";
 import type { AnalysisParams, AnalysisQuery, AnalysisResponse, AnalysisSummary } from "#core/contracts/analysis";
 import { DEFAULT_CELL_SIZE_M, LocatorInputError, parseLocatorInput } from "#core/contracts/locator-input";
@@ -22,6 +23,11 @@ import { loadAnalysisInputs, paramsKey } from "./analysis-inputs";
 export type AnalysisRow = typeof analyses.$inferSelect;
 
 const inflight = new Map<string, Promise<AnalysisRow>>();
+
+/** Computations waiting or running at once in this process; beyond it a new one is refused (429). */
+export const ANALYSIS_INFLIGHT_MAX = 8;
+/** Parameter sets stored per sweep; the oldest tried ones go first, the detector's own stays. */
+export const ANALYSES_PER_SWEEP_MAX = 6;
 
 export function analysisRunner(ctx: AppContext): AnalysisRunner {
   ctx.analysisRunner ??= createAnalysisRunner();
@@ -74,7 +80,14 @@ async function compute(ctx: AppContext, sweepId: string, params: AnalysisParams)
   const started = performance.now();
   let result;
   try {
-    result = await analysisRunner(ctx).run({ input, options: { cellSize: params.cellSize } });
+    // a delay set by hand on the field map is used as given; otherwise the locator may take the delay the
+    // readings clearly support (docs/locator/pipeline.md, "The delay checked")
+    const delaySetByHand =
+      params.transportDelayS !== sweep.transportDelayS || params.timeConstantS !== sweep.timeConstantS;
+    result = await analysisRunner(ctx).run({
+      input,
+      options: { cellSize: params.cellSize, delayFromReadings: !delaySetByHand },
+    });
   } catch (err) {
     if (err instanceof JobError && err.problems) throw invalid(err.problems);
     throw err;
@@ -120,13 +133,41 @@ async function compute(ctx: AppContext, sweepId: string, params: AnalysisParams)
     .values(values)
     .onConflictDoUpdate({ target: [analyses.sweepId, analyses.paramsKey], set: { ...values } })
     .returning();
+  await evictOldTries(ctx, sweep);
   return row;
+}
+
+/** Keeps ANALYSES_PER_SWEEP_MAX parameter sets of a sweep: the detector's own and the latest tried. */
+async function evictOldTries(ctx: AppContext, sweep: SweepRow): Promise<void> {
+  const own = paramsKey(sweepParams(sweep, {}));
+  const keep = ctx.db
+    .select({ id: analyses.id })
+    .from(analyses)
+    .where(and(eq(analyses.sweepId, sweep.id), ne(analyses.paramsKey, own)))
+    .orderBy(desc(analyses.computedAt))
+    .limit(ANALYSES_PER_SWEEP_MAX - 1);
+  const kept = (await keep).map((r) => r.id);
+  await ctx.db
+    .delete(analyses)
+    .where(
+      and(
+        eq(analyses.sweepId, sweep.id),
+        ne(analyses.paramsKey, own),
+        kept.length ? notInArray(analyses.id, kept) : undefined,
+      ),
+    );
 }
 
 /** One computation per sweep, parameter set and readings revision at a time. */
 function computeOnce(ctx: AppContext, sweep: SweepRow, params: AnalysisParams): Promise<AnalysisRow> {
   const key = `${sweep.id}|${paramsKey(params)}|${sweep.readingsRevision}`;
   let p = inflight.get(key);
+  if (!p && inflight.size >= ANALYSIS_INFLIGHT_MAX)
+    return Promise.reject(
+      new HttpError(429, "busy", "The server is computing other field maps; try again in a moment.", undefined, {
+        retryAfterSeconds: 5,
+      }),
+    );
   if (!p) {
     p = compute(ctx, sweep.id, params).finally(() => inflight.delete(key));
     inflight.set(key, p);
@@ -175,6 +216,19 @@ export async function getAnalysis(
 ): Promise<AnalysisResponse> {
   const sweep = await loadVisibleSweep(ctx, viewer, sweepId);
   const params = sweepParams(sweep, q);
+  // Every other delay or time constant is a new computation and a stored row: only roles that tune
+  // field maps may ask for one (core/domain/roles.ts, analyses.tune).
+  const tuned = {
+    ...(params.transportDelayS !== sweep.transportDelayS ? { transportDelayS: "other values" } : {}),
+    ...(params.timeConstantS !== sweep.timeConstantS ? { timeConstantS: "other values" } : {}),
+  };
+  if (Object.keys(tuned).length && !can(viewer.role, "analyses.tune"))
+    throw new HttpError(
+      403,
+      "forbidden",
+      "Your role sees the field map at the detector's own settings; an engineer or lead tech can try others.",
+      Object.fromEntries(Object.keys(tuned).map((k) => [k, "may be changed by owners, lead techs and engineers only"])),
+    );
   const row = await cachedAnalysis(ctx, sweepId, params);
   if (row && row.readingsRevision === sweep.readingsRevision) return toResponse(row, sweep, false);
   if (row && q.wait !== "true") {

@@ -4,7 +4,7 @@ import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 import { detectors } from "../../db/schema/index";
 import type { Role } from "#core/domain/roles";
 import { decodeField } from "#core/domain/fieldmap/field-codec";
-import { analysisRunner } from "./analysis.service";
+import { ANALYSES_PER_SWEEP_MAX, ANALYSIS_INFLIGHT_MAX, analysisRunner } from "./analysis.service";
 import { caseLineFixtures, caseWalkReadings } from "../../../tests/helpers/sweep-walk";
 
 let t: TestApp;
@@ -274,5 +274,58 @@ describe("GET /api/sweeps/:id/analysis", () => {
     });
     expect(s2.status, JSON.stringify(s2.body)).toBe(201);
     expect((await (await as("store-contact")).get(`/api/sweeps/${s2.body.id}/analysis`)).status).toBe(404);
+  });
+});
+
+describe("analyses cannot flood the machine", () => {
+  const count = async (id: string) =>
+    (await t.ctx.pool.query("select count(*)::int as n from analyses where sweep_id = $1", [id])).rows[0].n as number;
+
+  it("lets only owners, lead techs and engineers try other delays; everyone sees the detector's own", async () => {
+    const { id } = await sweepWithReadings();
+    for (const role of ["technician", "store-contact"] as const) {
+      const a = await as(role);
+      const tuned = await a.get(`/api/sweeps/${id}/analysis?transportDelayS=8`);
+      expect(tuned.status, role).toBe(403);
+      expect(tuned.body.error.fields.transportDelayS).toBeTruthy();
+      expect((await a.get(`/api/sweeps/${id}/analysis`)).status, role).toBe(200);
+    }
+    for (const role of ["owner", "lead-tech", "engineer"] as const)
+      expect((await (await as(role)).get(`/api/sweeps/${id}/analysis?transportDelayS=8`)).status, role).toBe(200);
+  });
+
+  it("rounds delays to tenths of a second: near-equal values are one stored analysis", async () => {
+    const { id } = await sweepWithReadings();
+    const eng = await as("engineer");
+    for (const v of ["6", "6.04", "5.96", "6.000001"])
+      expect((await eng.get(`/api/sweeps/${id}/analysis?transportDelayS=${v}`)).body.params.transportDelayS).toBe(6);
+    expect(await count(id)).toBe(1);
+  });
+
+  it("keeps a bounded number of parameter sets per sweep, always the detector's own", async () => {
+    const { id } = await sweepWithReadings();
+    const eng = await as("engineer");
+    await eng.get(`/api/sweeps/${id}/analysis`);
+    for (let d = 1; d <= ANALYSES_PER_SWEEP_MAX + 3; d++)
+      expect((await eng.get(`/api/sweeps/${id}/analysis?transportDelayS=${d + 10}`)).status).toBe(200);
+    expect(await count(id)).toBe(ANALYSES_PER_SWEEP_MAX);
+    const own = await eng.get(`/api/sweeps/${id}/analysis`);
+    expect(own.body.params.transportDelayS).toBe(5);
+    expect(await count(id)).toBe(ANALYSES_PER_SWEEP_MAX);
+  });
+
+  it("refuses new work with 429 while the analysis queue is full, and answers every request", async () => {
+    const { id } = await sweepWithReadings();
+    const eng = await as("engineer");
+    const asks = Array.from({ length: ANALYSIS_INFLIGHT_MAX + 6 }, (_, i) =>
+      eng.get(`/api/sweeps/${id}/analysis?transportDelayS=${20 + i}`),
+    );
+    const statuses = (await Promise.all(asks)).map((r) => {
+      if (r.status === 429) expect(r.body.error.code).toBe("busy");
+      return r.status;
+    });
+    expect(statuses.every((s) => s === 200 || s === 429)).toBe(true);
+    expect(statuses.filter((s) => s === 429).length).toBeGreaterThan(0);
+    expect((await eng.get(`/api/sweeps/${id}/analysis?transportDelayS=40`)).status).toBe(200);
   });
 });

@@ -1,5 +1,4 @@
 import { Router } from "express";
-import { ipKeyGenerator, rateLimit } from "express-rate-limit";
 import { eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import {
@@ -12,6 +11,7 @@ import {
 } from "#core/contracts/auth";
 import { users } from "../../db/schema/index";
 import { HttpError } from "../../lib/http-error";
+import { type AttemptLimit, clientKey, giveBackAttempt, takeAttempt } from "../../lib/attempt-limiter";
 import { readAuth, requireUser } from "../../middleware/auth";
 import { rotateCsrfToken } from "../../middleware/csrf";
 import { validate } from "../../middleware/validate";
@@ -23,34 +23,39 @@ import {
   verifyCredentials,
 } from "./auth.service";
 import { listMemberships, sessionInfo } from "./session-info";
+import { accountRouter } from "./account.router";
+import { logSecurityEvent } from "../../lib/security-log";
+
+/** Password-reset requests per hour: a few per address, more per client (a shared store Wi-Fi). */
+const RESET_LIMITS = { perAddress: 3, perClient: 20, windowMs: 60 * 60 * 1000 };
 
 export function authRouter(ctx: AppContext): Router {
   const router = Router();
-  const minutes = Math.ceil(ctx.config.loginRateWindowMs / 60000);
-  const limiter = rateLimit({
-    windowMs: ctx.config.loginRateWindowMs,
-    limit: ctx.config.loginRateLimit,
-    standardHeaders: "draft-8",
-    legacyHeaders: false,
-    // Count per address and e-mail, so one person mistyping does not lock out a whole store's Wi-Fi.
-    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? "")}|${String(req.body?.email ?? "").toLowerCase()}`,
-    handler: (_req, res) => {
-      res.status(429).json({
-        error: {
-          code: "rate_limited",
-          message: `Too many sign-in attempts. Wait ${minutes} minute${minutes === 1 ? "" : "s"} and try again.`,
-        },
-      });
-    },
-  });
+  const windowMs = ctx.config.loginRateWindowMs;
+  // Counted per client and address (one person mistyping does not lock out a whole store's Wi-Fi), and
+  // per address from everywhere at five times that (guessing one password from many clients).
+  const perClient: AttemptLimit = { name: "sign-in:client+email", limit: ctx.config.loginRateLimit, windowMs };
+  const perAddress: AttemptLimit = { name: "sign-in:email", limit: ctx.config.loginRateLimit * 5, windowMs };
+  const reset = { ...RESET_LIMITS, ...ctx.config.resetRateLimit };
+  const resetPerAddress: AttemptLimit = { name: "reset:email", limit: reset.perAddress, windowMs: reset.windowMs };
+  const resetPerClient: AttemptLimit = { name: "reset:client", limit: reset.perClient, windowMs: reset.windowMs };
 
   router.get("/auth/session", async (req, res) => {
     res.json(await sessionInfo(ctx, req));
   });
 
-  router.post("/auth/sign-in", limiter, validate(signInInput), async (req, res) => {
-    const user = await verifyCredentials(ctx, req.body.email, req.body.password);
+  // After validation: the address is counted as the contract reads it (trimmed, lower-case).
+  router.post("/auth/sign-in", validate(signInInput), async (req, res) => {
+    const email: string = req.body.email;
+    const keys = [`${clientKey(req)}|${email}`, email];
+    await takeAttempt(ctx, perClient, keys[0], "sign-in attempts");
+    await takeAttempt(ctx, perAddress, keys[1], "sign-in attempts");
+    const user = await verifyCredentials(ctx, email, req.body.password, req);
+    // Only failures count: a technician signing in on each shift never locks themself out.
+    await giveBackAttempt(ctx, perClient, keys[0]);
+    await giveBackAttempt(ctx, perAddress, keys[1]);
     await startSession(ctx, req, user.id);
+    await logSecurityEvent(ctx, req, { kind: "sign-in", companyId: null, userId: user.id });
     req.auth = await readAuth(ctx.db, req.session);
     res.json(await sessionInfo(ctx, req));
   });
@@ -61,13 +66,17 @@ export function authRouter(ctx: AppContext): Router {
     res.json(await sessionInfo(ctx, req));
   });
 
+  // Throttled alike whether or not the address has an account, so a 429 tells nothing either.
   router.post("/auth/password-reset", validate(passwordResetRequestInput), async (req, res) => {
-    await requestPasswordReset(ctx, req.body.email);
+    await takeAttempt(ctx, resetPerClient, clientKey(req), "password reset requests");
+    await takeAttempt(ctx, resetPerAddress, req.body.email, "password reset requests for this address");
     res.status(202).json({ ok: true });
+    // Not awaited: the answer must not tell, by its timing, whether the address has an account.
+    requestPasswordReset(ctx, req.body.email).catch((err) => ctx.logger.error({ err }, "password reset mail failed"));
   });
 
   router.post("/auth/password-reset/confirm", validate(passwordResetConfirmInput), async (req, res) => {
-    await confirmPasswordReset(ctx, req.body.token, req.body.password);
+    await confirmPasswordReset(ctx, req.body.token, req.body.password, req.sessionID);
     res.status(204).end();
   });
 
@@ -88,5 +97,6 @@ export function authRouter(ctx: AppContext): Router {
     res.json(await sessionInfo(ctx, req));
   });
 
+  router.use(accountRouter(ctx));
   return router;
 }

@@ -1,6 +1,6 @@
 import bcrypt from "bcryptjs";
 import type { Request } from "express";
-import { and, eq, gt, isNull } from "drizzle-orm";
+import { and, desc, eq, gt, isNull } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { passwordResets, users } from "../../db/schema/index";
 import { HttpError } from "../../lib/http-error";
@@ -8,18 +8,27 @@ import { hashToken, newLinkToken } from "../../lib/tokens";
 import { passwordResetMail } from "../../mail/templates";
 import { rotateCsrfToken } from "../../middleware/csrf";
 import { listMemberships } from "./session-info";
+import { logSecurityEvent } from "../../lib/security-log";
+import { endUserSessions } from "./user-sessions";
 
 const RESET_VALID_MS = 60 * 60 * 1000;
-// Compared against when the e-mail is unknown, so a wrong e-mail costs the same time as a wrong password.
-const DUMMY_HASH = bcrypt.hashSync("not-a-real-password", 4);
+// Compared against when the e-mail is unknown, so a wrong e-mail costs the same time as a wrong password:
+// made once per cost, at the cost real passwords are hashed with.
+const dummyHashes = new Map<number, Promise<string>>();
+export function dummyHashFor(cost: number): Promise<string> {
+  let hash = dummyHashes.get(cost);
+  if (!hash) dummyHashes.set(cost, (hash = bcrypt.hash("not-a-real-password", cost)));
+  return hash;
+}
 
 export async function hashPassword(ctx: AppContext, password: string): Promise<string> {
   return bcrypt.hash(password, ctx.config.bcryptCost);
 }
 
-export async function verifyCredentials(ctx: AppContext, email: string, password: string) {
+export async function verifyCredentials(ctx: AppContext, email: string, password: string, req: Request | null = null) {
   const [user] = await ctx.db.select().from(users).where(eq(users.email, email));
-  const ok = await bcrypt.compare(password, user?.passwordHash ?? DUMMY_HASH);
+  const ok = await bcrypt.compare(password, user?.passwordHash ?? (await dummyHashFor(ctx.config.bcryptCost)));
+  if (user && !ok) await logSecurityEvent(ctx, req, { kind: "sign-in-failed", companyId: null, userId: user.id });
   if (!user || !ok)
     throw new HttpError(401, "invalid_credentials", "That e-mail and password do not match an account.");
   return user;
@@ -31,6 +40,8 @@ export async function startSession(ctx: AppContext, req: Request, userId: string
   const list = await listMemberships(ctx, userId);
   req.session.userId = userId;
   req.session.activeCompanyId = list.find((m) => m.companyId === preferredCompanyId)?.companyId ?? list[0]?.companyId;
+  req.session.signedInAt = new Date().toISOString();
+  req.session.userAgent = (req.get("user-agent") ?? "").slice(0, 200) || undefined;
   rotateCsrfToken(req);
   await new Promise<void>((resolve, reject) => req.session.save((err) => (err ? reject(err) : resolve())));
 }
@@ -40,20 +51,28 @@ export async function endSession(req: Request) {
   rotateCsrfToken(req);
 }
 
+/**
+ * Makes a reset link and mails it. Called after the request is answered, so the answer is the same, in
+ * the same time, whether or not the address has an account.
+ */
 export async function requestPasswordReset(ctx: AppContext, email: string) {
   const [user] = await ctx.db.select().from(users).where(eq(users.email, email));
-  if (!user) return; // same answer either way: the endpoint must not reveal who has an account
+  if (!user) return;
   const { token, hash } = newLinkToken();
   await ctx.db
     .insert(passwordResets)
     .values({ userId: user.id, tokenHash: hash, expiresAt: new Date(Date.now() + RESET_VALID_MS) });
-  const mail = passwordResetMail({ name: user.name, link: `${ctx.config.appUrl}/reset-password/${token}` });
-  await ctx.mailer.send({ to: user.email, ...mail });
+  const link = `${ctx.config.appUrl}/reset-password/${token}`;
+  // Reset mail belongs to no company, so the built-in mail mode's Outbox never lists it: the person
+  // running the server finds the link here instead.
+  if (ctx.config.outboxEnabled) ctx.logger.info({ to: user.email, link }, "password reset link (built-in mail mode)");
+  await ctx.mailer.send({ to: user.email, kind: "password-reset", ...passwordResetMail({ name: user.name, link }) });
 }
 
-export async function confirmPasswordReset(ctx: AppContext, token: string, password: string) {
+/** Sets the new password, spends the link and ends every other session of the user. */
+export async function confirmPasswordReset(ctx: AppContext, token: string, password: string, keepSid?: string) {
   const passwordHash = await hashPassword(ctx, password);
-  await ctx.db.transaction(async (tx) => {
+  const userId = await ctx.db.transaction(async (tx) => {
     const [reset] = await tx
       .select()
       .from(passwordResets)
@@ -63,12 +82,28 @@ export async function confirmPasswordReset(ctx: AppContext, token: string, passw
           isNull(passwordResets.usedAt),
           gt(passwordResets.expiresAt, new Date()),
         ),
-      );
-    if (!reset)
+      )
+      .for("update");
+    // Only the newest link of a user is live: asking again makes the earlier mail useless.
+    const [newest] = reset
+      ? await tx
+          .select({ id: passwordResets.id })
+          .from(passwordResets)
+          .where(eq(passwordResets.userId, reset.userId))
+          .orderBy(desc(passwordResets.createdAt))
+          .limit(1)
+      : [];
+    if (!reset || newest?.id !== reset.id)
       throw new HttpError(400, "invalid_token", "This reset link is not valid any more. Ask for a new one.", {
-        token: "is expired or already used",
+        token: "is expired, already used or replaced by a newer link",
       });
-    await tx.update(passwordResets).set({ usedAt: new Date() }).where(eq(passwordResets.id, reset.id));
+    await tx
+      .update(passwordResets)
+      .set({ usedAt: new Date() })
+      .where(and(eq(passwordResets.userId, reset.userId), isNull(passwordResets.usedAt)));
     await tx.update(users).set({ passwordHash }).where(eq(users.id, reset.userId));
+    return reset.userId;
   });
+  await logSecurityEvent(ctx, null, { kind: "password-reset", companyId: null, userId });
+  await endUserSessions(ctx, userId, keepSid);
 }

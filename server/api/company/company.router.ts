@@ -1,6 +1,7 @@
 import { Router } from "express";
 import { eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
+import { securityLogRouter } from "./security-log.router";
 import { companySettings, type CompanySettings } from "#core/contracts/company";
 import { companies } from "../../db/schema/index";
 import { member, requireMember } from "../../middleware/auth";
@@ -34,5 +35,6 @@ export function companyRouter(ctx: AppContext): Router {
     res.json(await readSettings(ctx, companyId));
   });
 
+  router.use(securityLogRouter(ctx));
   return router;
 }

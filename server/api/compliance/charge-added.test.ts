@@ -78,11 +78,12 @@ describe("charge added and the leak rate through the API (US federal, annualizin
     expect(rates[2]).toBeCloseTo(20.277778, 5);
     expect(r.body.leakRates.map((p: { days: number }) => p.days)).toEqual([365, 30, 180]);
     expect(r.body.leakRates.map((p: { exceeds: boolean }) => p.exceeds)).toEqual([false, true, true]);
-    // Repair within 30 days of learning the rate exceeds the threshold [S:R4]: 30 Aug + 30 d = 29 Sep.
-    expect(r.body.latest.repairDue).toBe("2026-09-29");
+    // Repair within 30 days [S:R4] of the episode's first exceedance (docs/decisions/0041-repair-clock.md):
+    // no repair since the 3 Mar breach, so the 30 Aug exceedance belongs to it and keeps 3 Mar + 30 d = 2 Apr.
+    expect(r.body.latest.repairDue).toBe("2026-04-02");
     expect(r.body.overThreshold).toBe(true);
     const repair = r.body.due.find((d: { kind: string }) => d.kind === "repair");
-    expect(repair).toMatchObject({ dueOn: "2026-09-29", systemId, link: `/systems/${systemId}#leak-rates` });
+    expect(repair).toMatchObject({ dueOn: "2026-04-02", systemId, link: `/systems/${systemId}#leak-rates` });
     expect(repair.source).toMatch(/30 days/);
     // Under 500 lb commercial, no automatic leak detection: yearly inspections from the first breach
     // of the run (3 Mar), the August breach resetting the clean count only [M].
@@ -205,9 +206,9 @@ describe("the rolling-average method, the 125 % rule and EU leak checks", () => 
       amount: lb(15),
       reason: "Top-up",
     });
-    // 30 lb into a 20 lb system within three weeks, but 75 % in each calendar year: not chronic [S:R7].
+    // 30 lb into a 20 lb system within three weeks, but 75 % in 2026 alone: not chronic [S:R7]. The 2025
+    // addition counts in no year: Part 84 applies from 1 Jan 2026 and Part 82 covers only ODS since 2020 [S:R1,R2,R4].
     expect(jan.body.records.chronic.map((y: { year: number; chronic: boolean }) => [y.year, y.chronic])).toEqual([
-      [2025, false],
       [2026, false],
     ]);
     const feb = await tech.post(`/api/systems/${id}/charge-additions`, {

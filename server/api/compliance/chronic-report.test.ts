@@ -32,9 +32,10 @@ describe("filing the chronic-leaker report", () => {
   beforeAll(async () => {
     const lead = await signedIn("lead-tech");
     const sys = await lead.post(`/api/stores/${co.store.id}/systems`, {
+      // R-22 (an HCFC): 40 CFR 82 subpart F applies in every year from 50 lb [S:R1], so last year counts.
       name: "Deli case line",
-      refrigerantId: "R-448A",
-      fullCharge: { value: 20, unit: "lb" },
+      refrigerantId: "R-22",
+      fullCharge: { value: 60, unit: "lb" },
       applianceType: "commercial-refrigeration",
       automaticLeakDetection: false,
     });
@@ -45,8 +46,8 @@ describe("filing the chronic-leaker report", () => {
     year = Number(today.slice(0, 4)) - 1;
     const tech = await signedIn("technician");
     for (const [addedOn, value] of [
-      [`${year}-03-02`, 15],
-      [`${year}-09-01`, 12],
+      [`${year}-03-02`, 45],
+      [`${year}-09-01`, 36],
     ] as const) {
       expect(
         (
@@ -62,7 +63,7 @@ describe("filing the chronic-leaker report", () => {
 
   it("is due by 1 March of the next year once 125 % of the full charge was added in the year", async () => {
     const r = (await (await signedIn("engineer")).get(`/api/systems/${systemId}/records`)).body;
-    // [S:R7]: 15 + 12 = 27 lb into a 20 lb charge = 135 % ≥ 125 % → report by 1 March of the next year.
+    // [S:R7]: 45 + 36 = 81 lb into a 60 lb charge = 135 % ≥ 125 % → report by 1 March of the next year.
     const y = r.chronic.find((c: { year: number }) => c.year === year);
     expect(y).toMatchObject({ chronic: true, reportDue: `${year + 1}-03-01`, filed: null });
     expect(y.percent).toBeCloseTo(135, 6);
@@ -132,5 +133,44 @@ describe("filing the chronic-leaker report", () => {
 
     const again = await (await signedIn("owner")).post(`/api/systems/${systemId}/chronic-reports`, body);
     expect(again.status).toBe(409);
+  });
+
+  it("counts no year in which no part applied: an HFC system has no 2025 report (Part 84 from 1 Jan 2026)", async () => {
+    // docs/reference/standards.md §1: Part 84 applies from 1 Jan 2026 [S:R4]; Part 82 leak repair covers
+    // ozone-depleting refrigerants only since 10 Apr 2020 [S:R1,R2]. 125 % rule [S:R7].
+    const lead = await signedIn("lead-tech");
+    const sys = await lead.post(`/api/stores/${co.store.id}/systems`, {
+      name: "Produce case line",
+      refrigerantId: "R-448A",
+      fullCharge: { value: 20, unit: "lb" },
+      applianceType: "commercial-refrigeration",
+      automaticLeakDetection: false,
+    });
+    const tech = await signedIn("technician");
+    for (const [addedOn, value] of [
+      ["2025-03-02", 15],
+      ["2025-09-01", 10],
+      ["2026-02-02", 15],
+      ["2026-08-03", 10],
+    ] as const) {
+      const r = await tech.post(`/api/systems/${sys.body.id}/charge-additions`, {
+        addedOn,
+        amount: { value, unit: "lb" },
+        reason: "Low receiver level",
+      });
+      expect(r.status).toBe(201);
+    }
+    const rec = (await (await signedIn("engineer")).get(`/api/systems/${sys.body.id}/records`)).body;
+    // 25 lb / 20 lb = 125 % in both years, but only 2026 is a Part 84 year: report by 1 March 2027.
+    expect(rec.chronic.map((y: { year: number; chronic: boolean }) => [y.year, y.chronic])).toEqual([[2026, true]]);
+    expect(
+      rec.due.filter((d: { kind: string }) => d.kind === "chronic-leaker-report").map((d: { year: number }) => d.year),
+    ).not.toContain(2025);
+    const refused = await (await signedIn("engineer")).post(`/api/systems/${sys.body.id}/chronic-reports`, {
+      year: 2025,
+      filedOn: "2026-02-10",
+    });
+    expect(refused.status).toBe(400);
+    expect(Object.keys(refused.body.error.fields)).toEqual(["year"]);
   });
 });

@@ -8,6 +8,7 @@ import {
   chronicReportInput,
   leakCheckInput,
 } from "#core/contracts/compliance";
+import { profileReadings } from "#core/domain/compliance/readings";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import {
@@ -18,6 +19,7 @@ import {
   getSystemRecords,
   voidCharge,
 } from "./records.service";
+import { companyRules } from "./system-records";
 
 const idParam = z.object({ id: z.uuid("must be a valid id") });
 
@@ -82,6 +84,12 @@ export function complianceRouter(ctx: AppContext): Router {
         .json(await fileChronicReport(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
     },
   );
+
+  // The rule-profile page's list of readings, linked from every "reading" marker.
+  router.get("/compliance/readings", requireMember("stores.read"), async (req, res) => {
+    const { profile } = await companyRules(ctx, member(req).companyId);
+    res.json({ profileName: profile.name, readings: profileReadings(profile) });
+  });
 
   return router;
 }

@@ -11,6 +11,9 @@ const SECTION: Record<DueItem["kind"], string> = {
   inspection: "checks",
   "chronic-leaker-report": "chronic",
   "detector-check": "checks",
+  "automatic-leak-detection": "sys-due",
+  "retrofit-or-retire-plan": "leak-rates",
+  "retrofit-or-retire": "leak-rates",
 };
 
 /** A system's due dates as Today items, each linking to the records beneath it. */

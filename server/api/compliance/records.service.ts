@@ -20,8 +20,10 @@ import {
 } from "../../db/schema/index";
 import type { AssessedPoint } from "#core/domain/compliance/assess-leak-rate";
 import type { LeakRatePart } from "#core/domain/compliance/rule-profile";
-import { chargeToKg, companyGwpBases, toSystem } from "../systems/systems.service";
-import { badRequest, conflict, notFound } from "../../lib/http-error";
+import { recordRetention } from "#core/domain/compliance/retention";
+import { localDateOf } from "#core/domain/dates/time-zone";
+import { chargeToKg, companyGwpBases, refuseRetired, toSystem } from "../systems/systems.service";
+import { badRequest, conflict, notFound, HttpError } from "../../lib/http-error";
 import { eventDay } from "../findings/findings.service";
 import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { systemDueItems } from "./due-items";
@@ -38,8 +40,10 @@ export async function visibleSystem(ctx: AppContext, viewer: Viewer, systemId: s
   if (!row) throw notFound("That system");
   try {
     await loadVisibleStore(ctx, viewer, row.store.id);
-  } catch {
-    throw notFound("That system");
+  } catch (err) {
+    // Only "not your store" becomes "not found"; a database outage stays a 503.
+    if (err instanceof HttpError) throw notFound("That system");
+    throw err;
   }
   return row;
 }
@@ -140,8 +144,15 @@ export async function getSystemRecords(
       method: rules.method,
       retentionYears: rules.profile.recordRetentionYears.value,
       retentionSource: rules.profile.recordRetentionYears.source,
+      wording: rules.profile.leakRateParts.length === 0 && rules.profile.leakChecks ? "eu" : "us",
+      leakRateRules: rules.profile.leakRateParts.length > 0,
     },
+    retention: recordRetention(
+      rules.profile,
+      row.system.retiredAt ? localDateOf(row.system.retiredAt, row.store.timeZone) : null,
+    ),
     applicability: st.applicability,
+    automaticLeakDetection: st.automaticLeakDetection,
     leakRates: st.points.map(toRow),
     latest: st.latest ? toRow(st.latest) : null,
     overThreshold: st.overThreshold,
@@ -275,7 +286,8 @@ export async function addCharge(
   systemId: string,
   input: AdditionInput,
 ) {
-  const { store } = await visibleSystem(ctx, viewer, systemId);
+  const { store, system } = await visibleSystem(ctx, viewer, systemId);
+  refuseRetired(system);
   const addedOn = eventDay(input.addedOn, store, "addedOn");
   await checkAdditionRefs(ctx, viewer, systemId, input);
   const [row] = await ctx.db
@@ -353,7 +365,8 @@ export async function addLeakCheck(
   systemId: string,
   input: LeakCheckInput,
 ) {
-  const { store } = await visibleSystem(ctx, viewer, systemId);
+  const { store, system } = await visibleSystem(ctx, viewer, systemId);
+  refuseRetired(system);
   const checkedOn = eventDay(input.checkedOn, store, "checkedOn");
   await ctx.db.insert(leakChecks).values({
     companyId: viewer.companyId,

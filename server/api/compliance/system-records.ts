@@ -17,6 +17,7 @@ import type { LeakRateMethod, RuleProfile } from "#core/domain/compliance/rule-p
 import { systemStatus, type SystemStatus } from "#core/domain/compliance/system-status";
 import { localDateOf } from "#core/domain/dates/time-zone";
 import { getRefrigerant } from "#core/domain/refrigerants/catalogue";
+import { revisionsOf } from "../systems/revision-rows";
 
 export type SystemRow = typeof systems.$inferSelect;
 export type StoreRow = typeof stores.$inferSelect;
@@ -67,7 +68,7 @@ export async function statusesOf(
 ): Promise<SystemWithStatus[]> {
   if (rows.length === 0) return [];
   const ids = rows.map((r) => r.system.id);
-  const [adds, events, checks, filed] = await Promise.all([
+  const [adds, events, checks, filed, revisions] = await Promise.all([
     ctx.db
       .select()
       .from(chargeAdditions)
@@ -91,6 +92,7 @@ export async function statusesOf(
       .select({ systemId: chronicLeakerReports.systemId, year: chronicLeakerReports.year })
       .from(chronicLeakerReports)
       .where(inArray(chronicLeakerReports.systemId, ids)),
+    revisionsOf(ctx, ids),
   ]);
   return rows.map(({ system, store }) => {
     const today = localDateOf(now, store.timeZone);
@@ -101,6 +103,7 @@ export async function statusesOf(
         date: a.addedOn,
         amountKg: a.amountKg,
         voided: a.voidedAt !== null,
+        findingId: a.findingId,
         ...(a.excluded ? { excluded: a.excluded } : {}),
       }));
     const mine = events.filter((e) => e.systemId === system.id);
@@ -124,15 +127,32 @@ export async function statusesOf(
         fullChargeKg: system.fullChargeKg,
         applianceType: system.applianceType,
         automaticLeakDetection: system.automaticLeakDetection,
-        enteredOn: localDateOf(system.createdAt, store.timeZone),
+        enteredOn: system.inServiceOn ?? localDateOf(system.createdAt, store.timeZone),
+        // Every figure uses the values in force on its date (docs/decisions/0043-system-revisions.md).
+        revisions: revisions
+          .filter((r) => r.systemId === system.id)
+          .map((r) => ({
+            effectiveFrom: r.effectiveFrom,
+            kind: r.kind,
+            refrigerant: getRefrigerant(r.refrigerantId),
+            fullChargeKg: r.fullChargeKg,
+            applianceType: r.applianceType,
+            automaticLeakDetection: r.automaticLeakDetection,
+            inServiceOn: r.inServiceOn,
+          })),
         additions,
         repairedOn: mine.filter((e) => e.kind === "repaired").map((e) => e.on),
+        findingRepairs: mine.filter((e) => e.kind === "repaired").map((e) => ({ findingId: e.findingId, on: e.on })),
         pendingFollowUps,
         followUpVerifiedOn: mine.filter((e) => e.kind === "follow-up-test" && e.result === "passed").map((e) => e.on),
+        failedFollowUps: mine
+          .filter((e) => e.kind === "follow-up-test" && e.result === "failed")
+          .map((e) => ({ findingId: e.findingId, on: e.on })),
         leakChecks: checks
           .filter((c) => c.systemId === system.id)
           .map((c) => ({ checkedOn: c.checkedOn, leakFound: c.leakFound })),
         chronicReportsFiled: filed.filter((f) => f.systemId === system.id).map((f) => f.year),
+        retiredOn: system.retiredAt ? localDateOf(system.retiredAt, store.timeZone) : null,
       },
       today,
     );

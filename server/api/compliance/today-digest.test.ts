@@ -1,12 +1,13 @@
 import pino from "pino";
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { createTestApp, type Agent, type TestApp, signInOnce } from "../../../tests/helpers/test-app";
+import { createTestApp, drainMail, type Agent, type TestApp, signInOnce } from "../../../tests/helpers/test-app";
 import { seedCompany } from "../../../tests/helpers/fixtures";
 import { createDb } from "../../db/client";
 import { detectors, digestRuns, outboxMessages } from "../../db/schema/index";
 import type { AppContext } from "../../context";
 import { createSmtpMailer } from "../../mail/mailer";
+import { createMailQueue } from "../../mail/mail-queue";
 import { runDueDigests, sendDigest } from "../../jobs/digest";
 import type { Role } from "#core/domain/roles";
 
@@ -129,11 +130,16 @@ describe("the daily digest", () => {
   it("is sent once per company and local day across a restart and a second process on the same database", async () => {
     // A second process: its own pool and mailer on the same database and the same SMTP server.
     const second = createDb(t.database.url);
-    const mailer = createSmtpMailer(
-      { host: "127.0.0.1", port: t.smtp.port, secure: false, from: "Plumeline <no-reply@plumeline.test>" },
-      true,
+    const logger = pino({ level: "silent" });
+    const mailer = createMailQueue(
+      second.db,
+      createSmtpMailer(
+        { host: "127.0.0.1", port: t.smtp.port, secure: false, from: "Plumeline <no-reply@plumeline.test>" },
+        true,
+      ),
+      logger,
     );
-    const ctx2: AppContext = { ...t.ctx, db: second.db, pool: second.pool, mailer, logger: pino({ level: "silent" }) };
+    const ctx2: AppContext = { ...t.ctx, db: second.db, pool: second.pool, mailer, logger };
     try {
       // 15:00 UTC is after 06:00 in New York all year.
       const now = new Date(`${localToday("UTC")}T15:00:00Z`);
@@ -143,6 +149,8 @@ describe("the daily digest", () => {
       // "Restart": a fresh pass an hour later sends nothing new.
       const later = await runDueDigests(ctx2, new Date(now.getTime() + 3_600_000));
       expect(later.every((r) => !r.sent)).toBe(true);
+      // Either process's worker may deliver; both draining at once still sends each message once.
+      await Promise.all([mailer.drain(), drainMail(t)]);
       const mail = await digestsFor(co.company.id);
       expect(mail).toHaveLength(1);
       expect(mail[0].to.sort()).toEqual([co.people.engineer.email, co.people.owner.email].sort());
@@ -179,18 +187,19 @@ describe("the daily digest", () => {
     const again = await owner.post("/api/digest/send-now");
     expect(again.body.sent).toBe(false);
     expect(again.body.message).toMatch(/already sent/);
+    await drainMail(t);
     expect(await digestsFor(co.company.id)).toHaveLength(1);
     // Only this company's mail: the other company got none from this owner's action.
     expect(await digestsFor(other.company.id)).toHaveLength(0);
   });
 
-  it("releases the claim when sending fails, so the next run retries", async () => {
+  it("releases the claim when the message cannot even be queued, so the next run retries", async () => {
     await t.ctx.db.delete(digestRuns);
     const failing: AppContext = {
       ...t.ctx,
-      mailer: { send: () => Promise.reject(new Error("SMTP down")), close() {} },
+      mailer: { ...t.ctx.mailer, send: () => Promise.reject(new Error("queue unavailable")) },
     };
-    await expect(sendDigest(failing, co.company.id, "manual")).rejects.toThrow(/SMTP down/);
+    await expect(sendDigest(failing, co.company.id, "manual")).rejects.toThrow(/queue unavailable/);
     expect(await t.ctx.db.select().from(digestRuns).where(eq(digestRuns.companyId, co.company.id))).toHaveLength(0);
     expect((await sendDigest(t.ctx, co.company.id, "manual")).sent).toBe(true);
   });

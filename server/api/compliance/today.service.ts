@@ -162,6 +162,8 @@ export async function today(
     due: due.sort(byUrgency),
     overThreshold,
     systems: statuses
+      // Retired systems keep their records page; Today lists the systems in service.
+      .filter((s) => s.system.retiredAt === null)
       .map((s) => ({
         id: s.system.id,
         name: s.system.name,

@@ -1,6 +1,7 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
+import { logExport } from "../../lib/security-log";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { getSystemRecords } from "../compliance/records.service";
@@ -31,6 +32,7 @@ export function exportsRouter(ctx: AppContext): Router {
         "Content-Type": "text/csv; charset=utf-8",
         "Content-Disposition": `attachment; filename="${fileName(records.system.name, "csv")}"`,
       });
+      await logExport(ctx, req, "records.csv", { systemId: records.system.id });
       res.send(recordsCsv(records, list));
     },
   );
@@ -43,6 +45,7 @@ export function exportsRouter(ctx: AppContext): Router {
       const records = await getSystemRecords(ctx, member(req), res.locals.params.id);
       const list = await listFindings(ctx, member(req), records.store.id, { systemId: records.system.id });
       const pdf = await leakRateStatementPdf(records, list);
+      await logExport(ctx, req, "leak-rate-statement.pdf", { systemId: records.system.id });
       res.set({
         "Content-Type": "application/pdf",
         "Content-Disposition": `inline; filename="${fileName(records.system.name, "pdf")}"`,

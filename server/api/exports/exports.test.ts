@@ -78,9 +78,10 @@ describe("records export", () => {
     ]);
     // First calculation after 1 Jan 2026 uses 365 days: 10/100 = 10.00 % (40 CFR 84.102 [M]).
     expect(rows[0]).toMatchObject({
-      amount_lb: "10.000",
+      // Written as numbers (so formula escaping never touches them): no trailing zeros.
+      amount_lb: "10",
       amount_kg: "4.5359",
-      leak_rate_percent: "10.00",
+      leak_rate_percent: "10",
       reason: 'Top-up, "quoted", with comma',
     });
     expect(rows[4].voided).toMatch(/Duplicate entry/);
@@ -100,11 +101,51 @@ describe("records export", () => {
     expect(bytes.toString("latin1")).toMatch(/\/BaseFont \/[A-Z]{6}\+AtkinsonHyperlegible-Regular/);
     // Rules are cited for readers ("40 CFR 84.106"); our internal source tags stay out of the statement.
     const text = (await pdfText(bytes)).join(" ").replace(/\s+/g, " ");
-    expect(text).toContain("40 CFR 82.157(c); 40 CFR 84.106");
+    // A Part 84 system cites Part 84's rule, never Part 82's (docs/reference/standards.md §1 table [S:R4]).
+    expect(text).toContain("Threshold 20 % per year (40 CFR 84.106, commercial refrigeration)");
+    expect(text).not.toMatch(/82\.157/);
+    // The annualizing formula as docs/reference/standards.md §1 gives it: (added / full charge) ÷ (days / 365) × 100.
+    expect(text).toContain("leak rate % = (added ÷ full charge) ÷ (days ÷ 365) × 100");
     expect(text).not.toMatch(/\[(S:|M\]|D\])/);
     const stranger = await agentFor(t.app);
     await stranger.post("/api/auth/sign-in", { email: other.people.owner.email, password: PASSWORD });
     expect((await stranger.get(`/api/systems/${systemId}/leak-rate-statement.pdf`)).status).toBe(404);
     expect((await stranger.get(`/api/systems/${systemId}/records.csv`)).status).toBe(404);
+  });
+
+  it("writes an EU F-gas statement in the regulation's words, with nothing US in it", async () => {
+    const owner = await agentFor(t.app);
+    await owner.post("/api/auth/sign-in", { email: co.people.owner.email, password: PASSWORD });
+    const settings = (ruleProfile: string) => ({
+      name: "Hollyhock Foods",
+      lengthUnit: "m",
+      massUnit: "kg",
+      ruleProfile,
+      leakRateMethod: "annualizing",
+      detectorCheckIntervalDays: 30,
+    });
+    expect((await owner.put("/api/company/settings", settings("eu-fgas"))).status).toBe(200);
+    try {
+      const res = await tech.agent.get(`/api/systems/${systemId}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+      const text = (await pdfText(res.body as Buffer)).join(" ").replace(/\s+/g, " ");
+      expect(text).not.toMatch(/CFR|EPA|Section 608|leak-rate method|No refrigerant has been added/);
+      // The 10 lb addition is listed as refrigerant added.
+      expect(text).toContain("2026-02-01: 4.54 kg (10.0 lb) by technician of Hollyhock Foods");
+      // 45.359237 kg × 1387 / 1000 = 62.913 t CO2e: the 50–500 t band, every 6 months without a leak detection
+      // system, 12 with one (Regulation (EU) 2024/573 Art. 5 intervals, docs/reference/standards.md §2 [S:E1]).
+      expect(text).toContain("every 6 months, with one every 12 months");
+      // GWP basis stated beside the CO2e: R-448A is 1387 on AR4 with the 517/2014 HFO values (docs/reference/standards.md §3 [D]).
+      expect(text).toContain("kg × GWP 1387 / 1000");
+      expect(text).toContain("GWP basis: IPCC AR4 100-year values as in Regulation (EU) 2024/573 Annex I");
+      const csv = Papa.parse<Record<string, string>>((await tech.get(`/api/systems/${systemId}/records.csv`)).text, {
+        header: true,
+      }).data;
+      expect(csv[0]).toMatchObject({ gwp: "1387", co2e_tonnes: "62.913" });
+      expect(csv[0].gwp_basis).toMatch(/Regulation \(EU\) 2024\/573 Annex I/);
+      // Records at least 5 years (2024/573 Art. 7 [S:E8b]).
+      expect(text).toContain("at least 5 years");
+    } finally {
+      expect((await owner.put("/api/company/settings", settings("us-federal"))).status).toBe(200);
+    }
   });
 });

@@ -56,64 +56,87 @@ export function leakRateStatementPdf(
   );
   if (r.co2e.known && r.co2e.tonnes !== null)
     line(
-      `CO2-equivalent of the charge: ${r.co2e.tonnes.toFixed(2)} t (kg × GWP / 1000; GWP source ${readableSource(r.co2e.source)}).`,
+      `CO2-equivalent of the charge: ${r.co2e.tonnes.toFixed(2)} t (kg × GWP ${r.co2e.gwp} / 1000; GWP source ${readableSource(r.co2e.source)}).`,
     );
+  if (r.system.refrigerant.gwp) line(`GWP basis: ${r.system.refrigerant.gwp.statement}.`);
 
   h("Rule profile");
   line(
-    `${r.profile.name}; leak-rate method: ${r.profile.method === "annualizing" ? "annualizing" : "rolling average"}.`,
+    r.profile.leakRateRules
+      ? `${r.profile.name}; leak-rate method: ${r.profile.method === "annualizing" ? "annualizing" : "rolling average"}.`
+      : `${r.profile.name}: leak checks at intervals set by the charge's CO2-equivalent; a re-check after every repair.`,
   );
-  line(
-    r.applicability.applies
-      ? `Applies: ${r.applicability.reason}. Threshold ${r.applicability.thresholdPercent} % per year (${readableSource(r.applicability.thresholdSource ?? "")}).`
-      : `No leak-rate threshold applies: ${r.applicability.reason}.`,
-  );
+  if (r.profile.leakRateRules)
+    line(
+      r.applicability.applies
+        ? `Applies: ${r.applicability.reason}. Threshold ${r.applicability.thresholdPercent} % per year (${readableSource(r.applicability.thresholdSource ?? "")}).`
+        : `No leak-rate threshold applies: ${r.applicability.reason}.`,
+    );
   if (r.leakCheck)
     line(
-      `Leak checks: ${r.leakCheck.reason}. Without leak detection every ${r.leakCheck.withoutLdsMonths ?? "–"} months, with it every ${r.leakCheck.withLdsMonths ?? "–"} months.`,
+      `Leak checks: ${r.leakCheck.reason}.${r.leakCheck.withoutLdsMonths !== null && r.leakCheck.withLdsMonths !== null ? ` Without a leak detection system every ${r.leakCheck.withoutLdsMonths} months, with one every ${r.leakCheck.withLdsMonths} months.` : ""}`,
     );
   if (r.nextInspection)
     line(
       `Next inspection due ${r.nextInspection.dueOn} (${r.nextInspection.reason}; ${readableSource(r.nextInspection.source)}).`,
     );
 
-  h("Leak rate at every addition");
-  const cols = [48, 118, 190, 262, 330, 400, 470];
-  const row = (cells: string[], bold = false) => {
-    const y = doc.y;
-    doc.font(bold ? "bold" : "body").fontSize(8.5);
-    cells.forEach((c, i) => doc.text(c, cols[i], y, { width: (cols[i + 1] ?? 547) - cols[i] - 4, lineBreak: false }));
-    doc.x = 48;
-    doc.y = y + 13;
-    if (doc.y > 760) doc.addPage();
-  };
-  row(["Date", "Added", "Days / window", "Counted", "Leak rate", "Threshold", "Repair due"], true);
-  const byId = new Map(r.additions.map((a) => [a.id, a]));
-  for (const p of r.leakRates) {
-    const added = p.additionIds.reduce((s, id) => s + (byId.get(id)?.amountKg ?? 0), 0);
-    row([
-      p.date,
-      mass(added),
-      p.method === "annualizing" ? `${p.days} d` : `${p.windowStart} →`,
-      mass(p.countedKg),
-      `${p.percent.toFixed(1)} %${p.exceeds ? " (above)" : ""}`,
-      p.thresholdPercent === null ? "none" : `${p.thresholdPercent} %`,
-      p.repairDue ?? "",
-    ]);
+  if (r.profile.leakRateRules) {
+    h("Leak rate at every addition");
+    const cols = [48, 118, 190, 262, 330, 400, 470];
+    const row = (cells: string[], bold = false) => {
+      const y = doc.y;
+      doc.font(bold ? "bold" : "body").fontSize(8.5);
+      cells.forEach((c, i) => doc.text(c, cols[i], y, { width: (cols[i + 1] ?? 547) - cols[i] - 4, lineBreak: false }));
+      doc.x = 48;
+      doc.y = y + 13;
+      if (doc.y > 760) doc.addPage();
+    };
+    row(["Date", "Added", "Days / window", "Counted", "Leak rate", "Threshold", "Repair due"], true);
+    const byId = new Map(r.additions.map((a) => [a.id, a]));
+    for (const p of r.leakRates) {
+      const added = p.additionIds.reduce((s, id) => s + (byId.get(id)?.amountKg ?? 0), 0);
+      row([
+        p.date,
+        mass(added),
+        p.method === "annualizing" ? `${p.days} d` : `${p.windowStart} →`,
+        mass(p.countedKg),
+        `${p.percent.toFixed(1)} %${p.exceeds ? " (above)" : ""}`,
+        p.thresholdPercent === null ? "none" : `${p.thresholdPercent} %`,
+        p.repairDue ?? "",
+      ]);
+    }
+    if (r.leakRates.length === 0)
+      line(
+        r.additions.some((a) => !a.voided)
+          ? "No leak-rate figure: the refrigerant added was excluded from the calculation."
+          : "No refrigerant has been added.",
+      );
+    doc
+      .font("body")
+      .fontSize(8)
+      .fillColor("#444")
+      .text(
+        r.profile.method === "annualizing"
+          ? "Annualizing method (40 CFR 82.152 / 84.102): leak rate % = (added ÷ full charge) ÷ (days ÷ 365) × 100, where days is the shorter of the days since the previous addition and 365."
+          : "Rolling-average method (40 CFR 82.152 / 84.102): added in the previous 365 days (or since the last follow-up verification test) ÷ full charge × 100.",
+        48,
+      )
+      .fillColor("black")
+      .fontSize(9.5);
+  } else {
+    // EU F-gas: no leak-rate threshold; the record is the refrigerant added and the leak checks.
+    h("Refrigerant added");
+    const live = r.additions.filter((a) => !a.voided);
+    if (live.length === 0) line("No refrigerant has been added.");
+    for (const a of live) line(`${a.addedOn}: ${mass(a.amountKg)} by ${a.technician}: ${a.reason}`);
+    h("Leak checks");
+    if (r.leakChecks.length === 0) line("No leak check recorded.");
+    for (const c of r.leakChecks)
+      line(
+        `${c.checkedOn}: ${c.leakFound ? "leak found" : "no leak found"}, by ${c.by}${c.note ? ` – ${c.note}` : ""}`,
+      );
   }
-  if (r.leakRates.length === 0) line("No refrigerant has been added.");
-  doc
-    .font("body")
-    .fontSize(8)
-    .fillColor("#444")
-    .text(
-      r.profile.method === "annualizing"
-        ? "Annualizing method (40 CFR 82.152 / 84.102): added ÷ full charge ÷ (shorter of the days since the previous addition or 365) / 365 × 100."
-        : "Rolling-average method (40 CFR 82.152 / 84.102): added in the previous 365 days (or since the last follow-up verification test) ÷ full charge × 100.",
-      48,
-    )
-    .fillColor("black")
-    .fontSize(9.5);
 
   if (r.chronic.length) {
     h("Added per calendar year");
@@ -160,10 +183,15 @@ export function leakRateStatementPdf(
 
   h("Record keeping");
   line(
+    "“reading”: how the product applies a rule whose text it has not confirmed; every reading is listed once on the company's rule-profile page (Settings, Readings).",
+  );
+  line(
     `Keep these records for at least ${r.profile.retentionYears} years (${readableSource(r.profile.retentionSource)}).`,
   );
   line(
-    "Only certified technicians attach gauges or add or remove refrigerant (in the US, EPA Section 608). Local codes and licensed practice govern.",
+    r.profile.wording === "eu"
+      ? "Only certified personnel check for leaks, recover, install or service equipment containing fluorinated gases (Regulation (EU) 2024/573). Local codes and licensed practice govern."
+      : "Only certified technicians attach gauges or add or remove refrigerant (in the US, EPA Section 608). Local codes and licensed practice govern.",
   );
   doc.end();
   return done;

@@ -1,4 +1,4 @@
-import Papa from "papaparse";
+import { unparseCsv } from "#core/domain/reports/csv-cells";
 import type { SystemRecordsView } from "#core/contracts/compliance";
 import type { FindingDetail } from "#core/contracts/finding-actions";
 
@@ -7,7 +7,8 @@ const KG_PER_LB = 0.45359237; // NIST SP 811, appendix B.8
 /**
  * One CSV of a system's records: every charge-added entry (voided ones too, with who voided them
  * and why: the audit trail) with the leak rate computed at it, every finding step and every
- * chronic-leaker report marked filed.
+ * chronic-leaker report marked filed. Free text that begins like a formula (=, +, -, @, tab, CR) is
+ * written with a leading ' so a spreadsheet shows it as text (OWASP CSV injection guidance).
  */
 export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[]): string {
   const rateAt = new Map(r.leakRates.flatMap((p) => p.additionIds.map((id) => [id, p] as const)));
@@ -19,13 +20,13 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[]): 
       date: a.addedOn,
       system: r.system.name,
       refrigerant: r.system.refrigerantId,
-      amount_kg: a.amountKg.toFixed(4),
-      amount_lb: (a.amountKg / KG_PER_LB).toFixed(3),
+      amount_kg: Number(a.amountKg.toFixed(4)),
+      amount_lb: Number((a.amountKg / KG_PER_LB).toFixed(3)),
       entered: `${a.enteredValue} ${a.enteredUnit}`,
       technician: a.technician,
       reason: a.reason,
       excluded: a.excluded ?? "",
-      leak_rate_percent: p ? p.percent.toFixed(2) : "",
+      leak_rate_percent: p ? Number(p.percent.toFixed(2)) : "",
       method: p ? p.method : "",
       threshold_percent: p?.thresholdPercent ?? "",
       exceeds: p ? (p.exceeds ? "yes" : "no") : "",
@@ -76,8 +77,8 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[]): 
       date: y.filed.on,
       system: r.system.name,
       refrigerant: r.system.refrigerantId,
-      amount_kg: y.addedKg.toFixed(4),
-      amount_lb: (y.addedKg / KG_PER_LB).toFixed(3),
+      amount_kg: Number(y.addedKg.toFixed(4)),
+      amount_lb: Number((y.addedKg / KG_PER_LB).toFixed(3)),
       entered: "",
       technician: y.filed.by,
       reason: y.filed.reference ? `reference ${y.filed.reference}` : y.filed.note,
@@ -98,5 +99,14 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[]): 
     });
   }
   rows.sort((x, y) => String(x.date).localeCompare(String(y.date)));
-  return Papa.unparse(rows, { newline: "\r\n" }); // RFC 4180 line ends
+  // The GWP, its stated basis and the charge's CO2-equivalent on every row, beside the figures.
+  const gwp = r.system.refrigerant.gwp;
+  const withBasis = rows.map((row) => ({
+    ...row,
+    gwp: gwp?.value ?? "",
+    gwp_basis: gwp?.statement ?? "",
+    co2e_tonnes: r.co2e.known && r.co2e.tonnes !== null ? Math.round(r.co2e.tonnes * 1000) / 1000 : "",
+  }));
+  // Text cells escaped against formula injection (core/domain/reports/csv-cells.ts); numbers stay numbers.
+  return unparseCsv(withBasis);
 }

@@ -9,7 +9,7 @@ import { localDateOf } from "#core/domain/dates/time-zone";
 import { DomainInputError } from "#core/domain/input-error";
 import { ACTION_PERMISSION, transition, type LifecycleEvent } from "#core/domain/findings/lifecycle";
 import { can } from "#core/domain/roles";
-import { badRequest, conflict, forbidden, notFound } from "../../lib/http-error";
+import { badRequest, conflict, forbidden, notFound, HttpError } from "../../lib/http-error";
 import { companyRules, statusesOf, type StoreRow, type SystemWithStatus } from "../compliance/system-records";
 import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { toFindingDetails, type FindingRow } from "./finding-view";
@@ -223,8 +223,10 @@ async function loadFindingRow(
   if (!row) throw notFound("That finding");
   try {
     return { row, store: await loadVisibleStore(ctx, viewer, row.storeId) };
-  } catch {
-    throw notFound("That finding");
+  } catch (err) {
+    // Only "not your store" becomes "not found"; a database outage stays a 503.
+    if (err instanceof HttpError) throw notFound("That finding");
+    throw err;
   }
 }
 

@@ -1,5 +1,6 @@
 import { Router } from "express";
 import { z } from "zod";
+import { text } from "#core/contracts/text";
 import type { AppContext } from "../../context";
 import { acceptInvitationInput } from "#core/contracts/members";
 import { validate } from "../../middleware/validate";
@@ -8,7 +9,7 @@ import { sessionInfo } from "../auth/session-info";
 import { acceptInvitation, previewInvitation } from "./invitations.service";
 import { readAuth } from "../../middleware/auth";
 
-const tokenParam = z.object({ token: z.string().min(20, "is not a valid invitation link").max(200) });
+const tokenParam = z.object({ token: text().min(20, "is not a valid invitation link").max(200) });
 
 export function invitationsRouter(ctx: AppContext): Router {
   const router = Router();

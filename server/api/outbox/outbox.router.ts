@@ -1,5 +1,5 @@
 import { Router } from "express";
-import { desc, eq, isNull, or } from "drizzle-orm";
+import { desc, eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { outboxMessages } from "../../db/schema/index";
 import { HttpError } from "../../lib/http-error";
@@ -12,11 +12,12 @@ export function outboxRouter(ctx: AppContext): Router {
     if (!ctx.config.outboxEnabled)
       throw new HttpError(404, "not_found", "The Outbox exists only while mail goes to the built-in test mail server.");
     const companyId = member(req).companyId;
-    // A company sees its own mail, plus sign-in mail (resets) that belongs to no company.
+    // A company sees only its own mail. Mail for no company (password resets) is never listed: it would
+    // hand one company's members another's reset links. Its links go to the server log instead.
     const rows = await ctx.db
       .select()
       .from(outboxMessages)
-      .where(or(eq(outboxMessages.companyId, companyId), isNull(outboxMessages.companyId)))
+      .where(eq(outboxMessages.companyId, companyId))
       .orderBy(desc(outboxMessages.receivedAt))
       .limit(200);
     res.json({

@@ -11,6 +11,7 @@ import {
 import { fixtures, plans } from "../../db/schema/index";
 import { transformFixture } from "#core/domain/plans/transform-fixture";
 import { badRequest, HttpError } from "../../lib/http-error";
+import { PLAN_MIN_LENGTH_M } from "#core/contracts/quantities";
 import type { Viewer } from "../../access/store-access";
 import {
   assertCalibrated,
@@ -26,15 +27,23 @@ import { insertFixtureRows, loadFixtureRows } from "../../db/plans/plan-versions
 function fromTwoPoints(input: AlignmentInput): Similarity {
   const [p1, p2] = input.previous;
   const [c1, c2] = input.current;
-  if (p1.x === p2.x && p1.y === p2.y)
+  // Points closer than this cannot fix a scale and rotation (and nearly equal ones divide by ~0).
+  const apart = (a: { x: number; y: number }, b: { x: number; y: number }) => Math.hypot(b.x - a.x, b.y - a.y);
+  for (const [which, a, b] of [
+    ["previous", p1, p2],
+    ["current", c1, c2],
+  ] as const)
+    if (apart(a, b) < PLAN_MIN_LENGTH_M)
+      throw badRequest("Please check the matched points.", {
+        [`${which}.1`]: `is the same point as ${which}.0 (or within ${PLAN_MIN_LENGTH_M} m of it); pick two points far apart`,
+      });
+  const s = similarityFromTwoPoints([p1.x, p1.y], [p2.x, p2.y], [c1.x, c1.y], [c2.x, c2.y]);
+  // Two drawings of one store differ in scale by a little, never by a hundred times.
+  if (!(s.scale >= 0.01 && s.scale <= 100))
     throw badRequest("Please check the matched points.", {
-      "previous.1": "is the same point as previous.0; pick two points far apart",
+      "current.1": `makes this version ${s.scale.toPrecision(3)} times the size of the previous one; match the same two corners on both`,
     });
-  if (c1.x === c2.x && c1.y === c2.y)
-    throw badRequest("Please check the matched points.", {
-      "current.1": "is the same point as current.0; pick two points far apart",
-    });
-  return similarityFromTwoPoints([p1.x, p1.y], [p2.x, p2.y], [c1.x, c1.y], [c2.x, c2.y]);
+  return s;
 }
 
 /**

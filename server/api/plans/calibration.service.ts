@@ -5,6 +5,7 @@ import { toMetres } from "#core/analysis/geometry/units";
 import { fixtures, plans } from "../../db/schema/index";
 import { transformFixture } from "#core/domain/plans/transform-fixture";
 import { badRequest, HttpError } from "../../lib/http-error";
+import { PLAN_MAX_SIDE_M } from "#core/contracts/quantities";
 import type { Viewer } from "../../access/store-access";
 import {
   assertCurrentVersion,
@@ -43,7 +44,13 @@ export function metresPerPixel(
     fields.b = `is only ${pixels.toFixed(1)} px from a; draw the line at least ${MIN_CALIBRATION_PIXELS} px long, ideally along a long known wall`;
   }
   if (Object.keys(fields).length) throw badRequest("Please check the calibration line.", fields);
-  return toMetres(input.length.value, input.length.unit) / pixels;
+  const mpp = toMetres(input.length.value, input.length.unit) / pixels;
+  const side = Math.max(image.widthPx, image.heightPx) * mpp;
+  if (side > PLAN_MAX_SIDE_M)
+    throw badRequest("Please check the calibration line.", {
+      "length.value": `makes the plan ${Math.round(side).toLocaleString("en-US")} m across; a plan side may be at most ${PLAN_MAX_SIDE_M.toLocaleString("en-US")} m (is the unit right?)`,
+    });
+  return mpp;
 }
 
 async function rescaleInPlace(tx: DbOrTx, plan: PlanRow, factor: number): Promise<void> {

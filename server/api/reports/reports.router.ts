@@ -1,6 +1,7 @@
 import { Router, type Request } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
+import { logExport } from "../../lib/security-log";
 import { sendReportInput } from "#core/contracts/reports";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
@@ -8,6 +9,7 @@ import { readerLengthUnit } from "./reader-units";
 import {
   listReportSends,
   reportRecipients,
+  retryReportSend,
   sendSweepReport,
   sweepReadingsCsv,
   sweepReportPdf,
@@ -15,12 +17,15 @@ import {
 
 const idParam = z.object({ id: z.uuid("must be a valid id") });
 
+const sendParams = z.object({ id: z.uuid("must be a valid id"), sendId: z.uuid("must be a valid id") });
+
 export function reportsRouter(ctx: AppContext): Router {
   const router = Router();
   const unit = (req: Request) => readerLengthUnit(ctx, req.auth!.user, member(req).companyId);
 
   router.get("/sweeps/:id/report.pdf", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
     const { filename, pdf } = await sweepReportPdf(ctx, member(req), res.locals.params.id, await unit(req));
+    await logExport(ctx, req, "report.pdf", { sweepId: res.locals.params.id });
     res.type("application/pdf").setHeader("Content-Disposition", `attachment; filename="${filename}"`);
     res.send(pdf);
   });
@@ -30,6 +35,7 @@ export function reportsRouter(ctx: AppContext): Router {
     validate(idParam, "params"),
     async (req, res) => {
       const { filename, csv } = await sweepReadingsCsv(ctx, member(req), res.locals.params.id, await unit(req));
+      await logExport(ctx, req, "readings.csv", { sweepId: res.locals.params.id });
       res.type("text/csv; charset=utf-8").setHeader("Content-Disposition", `attachment; filename="${filename}"`);
       res.send(csv);
     },
@@ -61,6 +67,14 @@ export function reportsRouter(ctx: AppContext): Router {
         .json(
           await sendSweepReport(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body, await unit(req)),
         );
+    },
+  );
+  router.post(
+    "/sweeps/:id/report/sends/:sendId/retry",
+    requireMember("reports.send"),
+    validate(sendParams, "params"),
+    async (req, res) => {
+      res.json(await retryReportSend(ctx, member(req), res.locals.params.id, res.locals.params.sendId));
     },
   );
   return router;

@@ -6,7 +6,8 @@ import { memberships, membershipStores, reportSends, users } from "../../db/sche
 import { createConcentrationScale } from "#core/domain/fieldmap/concentration-ramp";
 import { readingsCsv } from "#core/domain/reports/readings-csv";
 import type { LengthPreference } from "#core/domain/units/format-units";
-import { badRequest } from "../../lib/http-error";
+import { badRequest, conflict, notFound } from "../../lib/http-error";
+import { deliveriesFor } from "../../mail/mail-status";
 import { createReportRunner } from "../../jobs/report-runner";
 import type { ReportJob } from "../../jobs/report.worker";
 import { uploadsStorage } from "../../storage/uploads-storage";
@@ -125,26 +126,38 @@ export async function sendSweepReport(
     .filter(Boolean)
     .join("\n\n");
   const recipients = [...to];
-  await ctx.mailer.send({
-    to: recipients,
-    subject,
-    text,
-    attachments: [{ filename, content: pdf, contentType: "application/pdf" }],
-    companyId: facts.sweep.companyId,
+  // The PDF is made now and kept with the queued message: the recipients get the report as it
+  // was when it was sent, even if the sweep changes before the mail server takes it.
+  const { row, mailId } = await ctx.db.transaction(async (tx) => {
+    const [row] = await tx
+      .insert(reportSends)
+      .values({
+        companyId: facts.sweep.companyId,
+        sweepId,
+        sentById: userId,
+        recipients,
+        subject,
+        filename,
+        bytes: pdf.length,
+        readingsRevision: facts.sweep.readingsRevision,
+      })
+      .returning();
+    const mailId = await ctx.mailer.queue(
+      {
+        kind: "report",
+        subjectId: row.id,
+        to: recipients,
+        subject,
+        text,
+        attachments: [{ filename, content: pdf, contentType: "application/pdf" }],
+        companyId: facts.sweep.companyId,
+      },
+      tx,
+    );
+    return { row, mailId };
   });
-  const [row] = await ctx.db
-    .insert(reportSends)
-    .values({
-      companyId: facts.sweep.companyId,
-      sweepId,
-      sentById: userId,
-      recipients,
-      subject,
-      filename,
-      bytes: pdf.length,
-      readingsRevision: facts.sweep.readingsRevision,
-    })
-    .returning();
+  await ctx.mailer.notify(mailId);
+  const delivery = (await deliveriesFor(ctx.db, [row.id])).get(row.id) ?? null;
   return {
     id: row.id,
     sweepId,
@@ -154,7 +167,22 @@ export async function sendSweepReport(
     filename,
     bytes: row.bytes,
     sentAt: row.sentAt.toISOString(),
+    delivery,
   };
+}
+
+/** Puts a report send whose e-mail failed back in the queue, unchanged (same PDF, same recipients). */
+export async function retryReportSend(ctx: AppContext, viewer: Viewer, sweepId: string, sendId: string) {
+  await loadVisibleSweep(ctx, viewer, sweepId);
+  const [send] = await ctx.db
+    .select({ id: reportSends.id })
+    .from(reportSends)
+    .where(and(eq(reportSends.id, sendId), eq(reportSends.sweepId, sweepId)));
+  if (!send) throw notFound("That report send");
+  const delivery = (await deliveriesFor(ctx.db, [send.id])).get(send.id);
+  if (!delivery || delivery.state !== "failed") throw conflict("Only a send whose e-mail failed can be sent again.");
+  await ctx.mailer.retry(delivery.mailId);
+  return (await listReportSends(ctx, viewer, sweepId)).find((s) => s.id === send.id)!;
 }
 
 export async function listReportSends(ctx: AppContext, viewer: Viewer, sweepId: string): Promise<ReportSend[]> {
@@ -165,6 +193,10 @@ export async function listReportSends(ctx: AppContext, viewer: Viewer, sweepId: 
     .leftJoin(users, eq(users.id, reportSends.sentById))
     .where(eq(reportSends.sweepId, sweepId))
     .orderBy(desc(reportSends.sentAt));
+  const deliveries = await deliveriesFor(
+    ctx.db,
+    rows.map(({ s }) => s.id),
+  );
   return rows.map(({ s, by }) => ({
     id: s.id,
     sweepId: s.sweepId,
@@ -174,5 +206,6 @@ export async function listReportSends(ctx: AppContext, viewer: Viewer, sweepId: 
     filename: s.filename,
     bytes: s.bytes,
     sentAt: s.sentAt.toISOString(),
+    delivery: deliveries.get(s.id) ?? null,
   }));
 }

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { arrayContains, eq } from "drizzle-orm";
-import { agentFor, createTestApp, type TestApp } from "../../../tests/helpers/test-app";
+import { agentFor, createTestApp, drainMail, type TestApp } from "../../../tests/helpers/test-app";
 import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 import { companies, companySignups, outboxMessages } from "../../db/schema/index";
 
@@ -23,8 +23,9 @@ const form = (email: string) => ({
   massUnit: "kg",
 });
 
-/** The mail is sent after the answer (so both paths answer alike): wait for the fake server to file it. */
+/** The mail goes through the outgoing queue: send what waits, then wait for the fake server to file it. */
 async function mailTo(address: string) {
+  await drainMail(t);
   for (let i = 0; i < 100; i++) {
     const [m] = await t.ctx.db
       .select()

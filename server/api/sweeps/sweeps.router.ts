@@ -4,6 +4,7 @@ import type { AppContext } from "../../context";
 import { createSweepInput, readingEditInput, readingsBatchInput } from "#core/contracts/sweeps";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
+import { syncThrottle } from "../../middleware/sync-throttle";
 import { deleteReading, editReading, listReadings, readingAuditTrail, uploadReadings } from "./readings.service";
 import { createSweep, getSweep, listSweeps, setSweepStatus } from "./sweeps.service";
 
@@ -17,6 +18,8 @@ const deleteQuery = z.object({
 export function sweepsRouter(ctx: AppContext): Router {
   const router = Router();
   const userId = (req: { auth?: { user: { id: string } } }) => req.auth!.user.id;
+  // One budget for every write the Walk client's sync pass makes.
+  const throttle = syncThrottle(ctx.config.syncThrottle);
 
   router.get(
     "/stores/:storeId/sweeps",
@@ -29,6 +32,7 @@ export function sweepsRouter(ctx: AppContext): Router {
   router.post(
     "/stores/:storeId/sweeps",
     requireMember("sweeps.record"),
+    throttle,
     validate(storeParam, "params"),
     validate(createSweepInput),
     async (req, res) => {
@@ -39,9 +43,15 @@ export function sweepsRouter(ctx: AppContext): Router {
   router.get("/sweeps/:id", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
     res.json(await getSweep(ctx, member(req), res.locals.params.id));
   });
-  router.post("/sweeps/:id/submit", requireMember("sweeps.record"), validate(idParam, "params"), async (req, res) => {
-    res.json(await setSweepStatus(ctx, member(req), userId(req), res.locals.params.id, "submitted"));
-  });
+  router.post(
+    "/sweeps/:id/submit",
+    requireMember("sweeps.record"),
+    throttle,
+    validate(idParam, "params"),
+    async (req, res) => {
+      res.json(await setSweepStatus(ctx, member(req), userId(req), res.locals.params.id, "submitted"));
+    },
+  );
   router.post("/sweeps/:id/review", requireMember("sweeps.review"), validate(idParam, "params"), async (req, res) => {
     res.json(await setSweepStatus(ctx, member(req), userId(req), res.locals.params.id, "reviewed"));
   });
@@ -52,6 +62,7 @@ export function sweepsRouter(ctx: AppContext): Router {
   router.post(
     "/sweeps/:id/readings",
     requireMember("sweeps.record"),
+    throttle,
     validate(idParam, "params"),
     validate(readingsBatchInput),
     async (req, res) => {
@@ -61,6 +72,7 @@ export function sweepsRouter(ctx: AppContext): Router {
   router.patch(
     "/sweeps/:id/readings/:readingId",
     requireMember("sweeps.record"),
+    throttle,
     validate(readingParam, "params"),
     validate(readingEditInput),
     async (req, res) => {
@@ -72,6 +84,7 @@ export function sweepsRouter(ctx: AppContext): Router {
   router.delete(
     "/sweeps/:id/readings/:readingId",
     requireMember("sweeps.record"),
+    throttle,
     validate(readingParam, "params"),
     validate(deleteQuery, "query"),
     async (req, res) => {

@@ -1,12 +1,14 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
-import { systemInput, systemUpdateInput } from "#core/contracts/systems";
+import { retireInput, revisionInput, systemInput, systemListQuery, systemUpdateInput } from "#core/contracts/systems";
 import { REFRIGERANTS } from "#core/domain/refrigerants/catalogue";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { refrigerantCautions, summarizeRefrigerant } from "#core/domain/refrigerants/refrigerant-summary";
-import { companyGwpBases, createSystem, deleteSystem, getSystem, listSystems, updateSystem } from "./systems.service";
+import { removeSystem } from "./retire-system";
+import { addRevision, listRevisions } from "./system-revisions.service";
+import { companyGwpBases, createSystem, getSystem, listSystems, updateSystem } from "./systems.service";
 
 const storeParam = z.object({ storeId: z.uuid("must be a valid id") });
 const idParam = z.object({ id: z.uuid("must be a valid id") });
@@ -26,8 +28,10 @@ export function systemsRouter(ctx: AppContext): Router {
     "/stores/:storeId/systems",
     requireMember("stores.read"),
     validate(storeParam, "params"),
+    validate(systemListQuery, "query"),
     async (req, res) => {
-      res.json({ systems: await listSystems(ctx, member(req), res.locals.params.storeId) });
+      const includeRetired = res.locals.query.include === "retired";
+      res.json({ systems: await listSystems(ctx, member(req), res.locals.params.storeId, includeRetired) });
     },
   );
 
@@ -37,7 +41,9 @@ export function systemsRouter(ctx: AppContext): Router {
     validate(storeParam, "params"),
     validate(systemInput),
     async (req, res) => {
-      res.status(201).json(await createSystem(ctx, member(req), res.locals.params.storeId, req.body));
+      res
+        .status(201)
+        .json(await createSystem(ctx, member(req), req.auth!.user.id, res.locals.params.storeId, req.body));
     },
   );
 
@@ -51,14 +57,49 @@ export function systemsRouter(ctx: AppContext): Router {
     validate(idParam, "params"),
     validate(systemUpdateInput),
     async (req, res) => {
-      res.json(await updateSystem(ctx, member(req), res.locals.params.id, req.body));
+      res.json(await updateSystem(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
     },
   );
 
+  // A system with records is retired, never deleted: the answer says which happened.
   router.delete("/systems/:id", requireMember("stores.edit"), validate(idParam, "params"), async (req, res) => {
-    await deleteSystem(ctx, member(req), res.locals.params.id);
-    res.status(204).end();
+    res.json(
+      await removeSystem(ctx, member(req), req.auth!.user.id, res.locals.params.id, {
+        reason: "",
+        alwaysRetire: false,
+      }),
+    );
   });
+
+  router.post(
+    "/systems/:id/retire",
+    requireMember("stores.edit"),
+    validate(idParam, "params"),
+    validate(retireInput),
+    async (req, res) => {
+      res.json(
+        await removeSystem(ctx, member(req), req.auth!.user.id, res.locals.params.id, {
+          reason: req.body.reason,
+          alwaysRetire: true,
+        }),
+      );
+    },
+  );
+
+  router.get("/systems/:id/revisions", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
+    res.json({ revisions: await listRevisions(ctx, member(req), res.locals.params.id) });
+  });
+
+  // Engineers and owners change a system's dated facts; every figure keeps the values of its own date.
+  router.post(
+    "/systems/:id/revisions",
+    requireMember("compliance.manage"),
+    validate(idParam, "params"),
+    validate(revisionInput),
+    async (req, res) => {
+      res.status(201).json(await addRevision(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
+    },
+  );
 
   return router;
 }

@@ -1,24 +1,31 @@
-import { and, asc, eq } from "drizzle-orm";
+import { and, asc, eq, isNull } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import type { ChargeInput, System, SystemInput, SystemUpdateInput } from "#core/contracts/systems";
-import { systems } from "../../db/schema/index";
+import { systemRevisions, systems } from "../../db/schema/index";
 import { companyRules } from "../compliance/system-records";
 import { findRefrigerant } from "#core/domain/refrigerants/catalogue";
-import type { GwpBasis, Refrigerant } from "#core/domain/refrigerants/types";
+import type { Refrigerant } from "#core/domain/refrigerants/types";
 import { KG_PER_POUND } from "#core/domain/units/mass";
-import { badRequest, notFound } from "../../lib/http-error";
+import { badRequest, conflict, HttpError, notFound } from "../../lib/http-error";
 import { loadVisibleStore, type Viewer } from "../../access/store-access";
-import { refrigerantCautions, summarizeRefrigerant } from "#core/domain/refrigerants/refrigerant-summary";
+import { gwpBasisStatement } from "#core/domain/compliance/co2e";
+import {
+  refrigerantCautions,
+  summarizeRefrigerant,
+  type GwpChoice,
+} from "#core/domain/refrigerants/refrigerant-summary";
+import { eventDay } from "../findings/findings.service";
+import { hasRecords } from "./system-has-records";
 
 type SystemRow = typeof systems.$inferSelect;
-type Bases = readonly GwpBasis[];
+type Bases = GwpChoice;
 
 /** kg as stored; lb converted at exactly 0.45359237 kg/lb (NIST SP 811, appendix B.8). */
 export function chargeToKg(charge: ChargeInput): number {
   return charge.unit === "lb" ? charge.value * KG_PER_POUND : charge.value;
 }
 
-function knownRefrigerant(id: string): Refrigerant {
+export function knownRefrigerant(id: string): Refrigerant {
   const r = findRefrigerant(id);
   if (!r) {
     throw badRequest(`Please check: refrigerantId ${JSON.stringify(id)} is not in the refrigerant catalogue.`, {
@@ -28,9 +35,10 @@ function knownRefrigerant(id: string): Refrigerant {
   return r;
 }
 
-/** The GWP bases of the profile the company works under (its own, for a custom profile). */
+/** The GWP bases of the profile the company works under (its own, for a custom profile), with its stated basis. */
 export async function companyGwpBases(ctx: AppContext, companyId: string): Promise<Bases> {
-  return (await companyRules(ctx, companyId)).profile.gwpBases.value;
+  const { profile } = await companyRules(ctx, companyId);
+  return { bases: profile.gwpBases.value, statement: gwpBasisStatement(profile) };
 }
 
 export function toSystem(row: SystemRow, bases: Bases): System {
@@ -45,6 +53,8 @@ export function toSystem(row: SystemRow, bases: Bases): System {
     fullChargeKg: row.fullChargeKg,
     applianceType: row.applianceType,
     automaticLeakDetection: row.automaticLeakDetection,
+    inServiceOn: row.inServiceOn ?? row.createdAt.toISOString().slice(0, 10),
+    retired: row.retiredAt ? { at: row.retiredAt.toISOString(), reason: row.retireReason ?? "" } : null,
     refrigerant: summarizeRefrigerant(r, bases),
     cautions: refrigerantCautions(r),
     createdAt: row.createdAt.toISOString(),
@@ -52,18 +62,24 @@ export function toSystem(row: SystemRow, bases: Bases): System {
   };
 }
 
-export async function listSystems(ctx: AppContext, viewer: Viewer, storeId: string): Promise<System[]> {
+/** The store's systems in service; retired ones too when asked (their records stay readable). */
+export async function listSystems(
+  ctx: AppContext,
+  viewer: Viewer,
+  storeId: string,
+  includeRetired = false,
+): Promise<System[]> {
   await loadVisibleStore(ctx, viewer, storeId);
   const bases = await companyGwpBases(ctx, viewer.companyId);
   const rows = await ctx.db
     .select()
     .from(systems)
-    .where(eq(systems.storeId, storeId))
+    .where(and(eq(systems.storeId, storeId), includeRetired ? undefined : isNull(systems.retiredAt)))
     .orderBy(asc(systems.name), asc(systems.id));
   return rows.map((r) => toSystem(r, bases));
 }
 
-async function loadSystem(ctx: AppContext, viewer: Viewer, systemId: string): Promise<SystemRow> {
+export async function loadSystem(ctx: AppContext, viewer: Viewer, systemId: string): Promise<SystemRow> {
   const [row] = await ctx.db
     .select()
     .from(systems)
@@ -71,8 +87,10 @@ async function loadSystem(ctx: AppContext, viewer: Viewer, systemId: string): Pr
   if (!row) throw notFound("That system");
   try {
     await loadVisibleStore(ctx, viewer, row.storeId);
-  } catch {
-    throw notFound("That system");
+  } catch (err) {
+    // Only "not your store" becomes "not found"; a database outage stays a 503.
+    if (err instanceof HttpError) throw notFound("That system");
+    throw err;
   }
   return row;
 }
@@ -84,49 +102,100 @@ export async function getSystem(ctx: AppContext, viewer: Viewer, systemId: strin
 export async function createSystem(
   ctx: AppContext,
   viewer: Viewer,
+  userId: string,
   storeId: string,
   input: SystemInput,
 ): Promise<System> {
-  await loadVisibleStore(ctx, viewer, storeId);
+  const store = await loadVisibleStore(ctx, viewer, storeId);
   const r = knownRefrigerant(input.refrigerantId);
-  const [row] = await ctx.db
-    .insert(systems)
-    .values({
+  const facts = {
+    refrigerantId: r.id,
+    fullChargeKg: chargeToKg(input.fullCharge),
+    applianceType: input.applianceType,
+    automaticLeakDetection: input.automaticLeakDetection,
+    inServiceOn: eventDay(input.inServiceOn, store, "inServiceOn"),
+  };
+  // The system and its first revision together: history has a starting point from day one.
+  const row = await ctx.db.transaction(async (tx) => {
+    const [created] = await tx
+      .insert(systems)
+      .values({ companyId: viewer.companyId, storeId, name: input.name, ...facts })
+      .returning();
+    await tx.insert(systemRevisions).values({
       companyId: viewer.companyId,
-      storeId,
-      name: input.name,
-      refrigerantId: r.id,
-      fullChargeKg: chargeToKg(input.fullCharge),
-      applianceType: input.applianceType,
-      automaticLeakDetection: input.automaticLeakDetection,
-    })
-    .returning();
+      systemId: created.id,
+      effectiveFrom: facts.inServiceOn,
+      kind: "first",
+      ...facts,
+      reason: "Entered",
+      byId: userId,
+    });
+    return created;
+  });
   return toSystem(row, await companyGwpBases(ctx, viewer.companyId));
 }
 
+/**
+ * Edits a system. The name is free to change; the dated facts (charge, refrigerant, type, detection,
+ * in-service day) change here only while no record names the system, as a correction from its
+ * in-service day. Once records exist, history must not move: such a change is a dated revision
+ * (POST /api/systems/:id/revisions, engineers and owners; docs/decisions/0043-system-revisions.md).
+ */
 export async function updateSystem(
   ctx: AppContext,
   viewer: Viewer,
+  userId: string,
   systemId: string,
   input: SystemUpdateInput,
 ): Promise<System> {
-  await loadSystem(ctx, viewer, systemId);
-  const { fullCharge, refrigerantId, ...rest } = input;
-  const [row] = await ctx.db
-    .update(systems)
-    .set({
-      ...rest,
-      ...(refrigerantId !== undefined ? { refrigerantId: knownRefrigerant(refrigerantId).id } : {}),
-      ...(fullCharge !== undefined ? { fullChargeKg: chargeToKg(fullCharge) } : {}),
-      updatedAt: new Date(),
-    })
-    .where(eq(systems.id, systemId))
-    .returning();
+  const current = await loadSystem(ctx, viewer, systemId);
+  refuseRetired(current);
+  const { name, fullCharge, refrigerantId, ...rest } = input;
+  const facts = {
+    refrigerantId: refrigerantId !== undefined ? knownRefrigerant(refrigerantId).id : current.refrigerantId,
+    fullChargeKg: fullCharge !== undefined ? chargeToKg(fullCharge) : current.fullChargeKg,
+    applianceType: rest.applianceType ?? current.applianceType,
+    automaticLeakDetection: rest.automaticLeakDetection ?? current.automaticLeakDetection,
+    inServiceOn: rest.inServiceOn ?? current.inServiceOn ?? current.createdAt.toISOString().slice(0, 10),
+  };
+  const changed = (Object.keys(facts) as (keyof typeof facts)[]).filter((k) => facts[k] !== current[k]);
+  if (changed.length > 0 && (await hasRecords(ctx, systemId))) {
+    throw new HttpError(
+      409,
+      "records_exist",
+      `${current.name} has records, so ${changed.join(", ")} change by a dated revision (engineers and owners), which keeps past figures as they were.`,
+      Object.fromEntries(changed.map((k) => [k, "changes by a dated revision once the system has records"])),
+    );
+  }
+  if (changed.includes("inServiceOn")) {
+    const store = await loadVisibleStore(ctx, viewer, current.storeId);
+    eventDay(facts.inServiceOn, store, "inServiceOn");
+  }
+  const row = await ctx.db.transaction(async (tx) => {
+    const [updated] = await tx
+      .update(systems)
+      .set({ ...(name !== undefined ? { name } : {}), ...facts, updatedAt: new Date() })
+      .where(eq(systems.id, systemId))
+      .returning();
+    if (changed.length > 0)
+      await tx.insert(systemRevisions).values({
+        companyId: viewer.companyId,
+        systemId,
+        effectiveFrom: facts.inServiceOn,
+        kind: "correction",
+        ...facts,
+        reason: "Edited before any record",
+        byId: userId,
+      });
+    return updated;
+  });
   return toSystem(row, await companyGwpBases(ctx, viewer.companyId));
 }
 
-/** Fixtures linked to the system keep their place and lose the link (FK on delete set null). */
-export async function deleteSystem(ctx: AppContext, viewer: Viewer, systemId: string): Promise<void> {
-  await loadSystem(ctx, viewer, systemId);
-  await ctx.db.delete(systems).where(eq(systems.id, systemId));
+/** A retired system's facts are history: no edit and no new record changes them. */
+export function refuseRetired(row: { name: string; retiredAt: Date | null }): void {
+  if (row.retiredAt)
+    throw conflict(
+      `${row.name} was retired on ${row.retiredAt.toISOString().slice(0, 10)}; its records are kept as they are.`,
+    );
 }

@@ -36,6 +36,8 @@ describe("systems", () => {
     // 0.26×675 + 0.26×3500 + 0.21×1430 + 0.20×1 + 0.07×1 = 1386.07 → 1386 (hand calculation from
     // the catalogue's IPCC values [S:G1]; docs/reference/standards.md §3 notes 1386 when HFOs are near zero).
     expect(res.body.refrigerant.gwp).toMatchObject({ value: 1386, basis: "AR4 + AR5" });
+    // The basis is the US profile's stated choice, shown beside the figure (docs/decisions/0045-gwp-basis.md).
+    expect(res.body.refrigerant.gwp.statement).toMatch(/^IPCC AR4 100-year values .*AR5's "<1" counts as 1$/);
     expect(res.body.cautions.map((c: { id: string }) => c.id)).toContain("oxygen-displacement");
     expect(res.body.cautions.at(-1).id).toBe("codes-govern");
 
@@ -135,7 +137,7 @@ describe("systems", () => {
       expect((await a.delete(`/api/systems/${s.id}`)).status).toBe(403);
     }
     expect((await (await signedIn("engineer")).get(`/api/systems/${s.id}`)).status).toBe(200);
-    expect((await lead.delete(`/api/systems/${s.id}`)).status).toBe(204);
+    expect((await lead.delete(`/api/systems/${s.id}`)).body).toEqual({ outcome: "deleted", system: null });
     expect((await lead.get(`/api/systems/${s.id}`)).status).toBe(404);
   });
 
@@ -156,5 +158,19 @@ describe("systems", () => {
     const res = await (await signedIn("technician")).get("/api/refrigerants");
     const ids = res.body.refrigerants.map((r: { id: string }) => r.id);
     expect(ids).toEqual(expect.arrayContaining(["R-404A", "R-448A", "R-744", "R-290"]));
+  });
+
+  it("gives a CO2 system the exposure limits as published, deferring to the site's detector", async () => {
+    const lead = await signedIn("lead-tech");
+    const res = await lead.post(`/api/stores/${co.store.id}/systems`, {
+      ...rack,
+      name: "CO2 booster",
+      refrigerantId: "R-744",
+    });
+    // ACGIH 5,000 ppm TWA, 30,000 ppm STEL [S:S2]; OSHA PEL 5,000 ppm TWA, from memory (docs/reference/standards.md §5).
+    const co2 = res.body.cautions.find((c: { id: string }) => c.id === "co2-exposure");
+    expect(co2.text).toMatch(/5,000 ppm averaged over a work shift and 30,000 ppm over 15 minutes \(ACGIH\)/);
+    expect(co2.text).toMatch(/Trust the site's CO2 detector/);
+    expect(res.body.cautions.at(-1).id).toBe("codes-govern");
   });
 });

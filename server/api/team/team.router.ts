@@ -4,7 +4,7 @@ import type { AppContext } from "../../context";
 import { inviteInput, memberUpdateInput } from "#core/contracts/members";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
-import { invite, listTeam, removeMember, revokeInvitation, updateMember } from "./team.service";
+import { invite, listTeam, removeMember, resendInvitation, revokeInvitation, updateMember } from "./team.service";
 
 const idParam = z.object({ id: z.uuid("must be a valid id") });
 
@@ -16,8 +16,18 @@ export function teamRouter(ctx: AppContext): Router {
   });
 
   router.post("/team/invitations", requireMember("members.manage"), validate(inviteInput), async (req, res) => {
-    res.status(201).json(await invite(ctx, member(req).companyId, req.auth!.user.id, req.body));
+    const { created, invitation } = await invite(ctx, member(req).companyId, req.auth!.user.id, req.body);
+    res.status(created ? 201 : 200).json(invitation);
   });
+
+  router.post(
+    "/team/invitations/:id/resend",
+    requireMember("members.manage"),
+    validate(idParam, "params"),
+    async (req, res) => {
+      res.json(await resendInvitation(ctx, member(req).companyId, req.auth!.user.id, res.locals.params.id));
+    },
+  );
 
   router.delete(
     "/team/invitations/:id",
@@ -35,12 +45,21 @@ export function teamRouter(ctx: AppContext): Router {
     validate(idParam, "params"),
     validate(memberUpdateInput),
     async (req, res) => {
-      res.json(await updateMember(ctx, member(req).companyId, res.locals.params.id, req.body.role, req.body.storeIds));
+      res.json(
+        await updateMember(
+          ctx,
+          member(req).companyId,
+          res.locals.params.id,
+          req.body.role,
+          req.body.storeIds,
+          req.auth!.user.id,
+        ),
+      );
     },
   );
 
   router.delete("/team/members/:id", requireMember("members.manage"), validate(idParam, "params"), async (req, res) => {
-    await removeMember(ctx, member(req).companyId, res.locals.params.id);
+    await removeMember(ctx, member(req).companyId, res.locals.params.id, req.auth!.user.id);
     res.status(204).end();
   });
 

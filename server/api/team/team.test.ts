@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { desc, eq } from "drizzle-orm";
 import { outboxMessages } from "../../db/schema/index";
-import { agentFor, createTestApp, type Agent, type TestApp, signIn } from "../../../tests/helpers/test-app";
+import { agentFor, createTestApp, drainMail, type Agent, type TestApp, signIn } from "../../../tests/helpers/test-app";
 import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 import type { Role } from "#core/domain/roles";
 
@@ -19,6 +19,7 @@ afterAll(() => t.close());
 const signedIn = (role: Role, company = co): Promise<Agent> => signIn(t.app, company.people[role]);
 
 async function latestMailTo(email: string) {
+  await drainMail(t);
   const [m] = await t.ctx.db
     .select()
     .from(outboxMessages)

@@ -29,9 +29,10 @@ export const chargeAdditions = pgTable(
     companyId: uuid()
       .notNull()
       .references(() => companies.id, { onDelete: "cascade" }),
+    // Records outlive nothing they belong to: a system with records is retired, never deleted.
     systemId: uuid()
       .notNull()
-      .references(() => systems.id, { onDelete: "cascade" }),
+      .references(() => systems.id, { onDelete: "restrict" }),
     addedOn: date({ mode: "string" }).notNull(),
     amountKg: doublePrecision().notNull(),
     /** As typed, for the record (the figures use amountKg). */
@@ -64,9 +65,10 @@ export const leakChecks = pgTable(
     companyId: uuid()
       .notNull()
       .references(() => companies.id, { onDelete: "cascade" }),
+    // Records outlive nothing they belong to: a system with records is retired, never deleted.
     systemId: uuid()
       .notNull()
-      .references(() => systems.id, { onDelete: "cascade" }),
+      .references(() => systems.id, { onDelete: "restrict" }),
     checkedOn: date({ mode: "string" }).notNull(),
     leakFound: boolean().notNull(),
     note: text().notNull().default(""),
@@ -129,9 +131,10 @@ export const chronicLeakerReports = pgTable(
     companyId: uuid()
       .notNull()
       .references(() => companies.id, { onDelete: "cascade" }),
+    // Records outlive nothing they belong to: a system with records is retired, never deleted.
     systemId: uuid()
       .notNull()
-      .references(() => systems.id, { onDelete: "cascade" }),
+      .references(() => systems.id, { onDelete: "restrict" }),
     year: integer().notNull(),
     filedOn: date({ mode: "string" }).notNull(),
     /** The authority's receipt or submission number, if any. */
@@ -145,6 +148,8 @@ export const chronicLeakerReports = pgTable(
   (t) => [uniqueIndex("chronic_leaker_reports_system_year").on(t.systemId, t.year)],
 );
 
+export const COMPLIANCE_AUDIT_ACTIONS = ["chronic-report-filed", "system-retired", "system-revised"] as const;
+
 /** What was done to a system's compliance records, by whom and when (append-only). */
 export const complianceAudit = pgTable(
   "compliance_audit",
@@ -153,8 +158,8 @@ export const complianceAudit = pgTable(
     companyId: uuid()
       .notNull()
       .references(() => companies.id, { onDelete: "cascade" }),
-    systemId: uuid().references(() => systems.id, { onDelete: "cascade" }),
-    action: text({ enum: ["chronic-report-filed"] }).notNull(),
+    systemId: uuid().references(() => systems.id, { onDelete: "restrict" }),
+    action: text({ enum: COMPLIANCE_AUDIT_ACTIONS }).notNull(),
     summary: text().notNull(),
     byId: uuid()
       .notNull()

@@ -10,4 +10,6 @@ export * from "./analyses";
 export * from "./findings";
 export * from "./compliance";
 export * from "./reports";
+export * from "./system-revisions";
 export * from "./signups";
+export * from "./security";

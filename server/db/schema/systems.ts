@@ -1,9 +1,14 @@
-import { boolean, doublePrecision, index, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { boolean, date, doublePrecision, index, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
 import { companies, stores } from "./companies";
+import { users } from "./users";
 
 export const APPLIANCE_TYPE_VALUES = ["commercial-refrigeration", "industrial-process", "comfort-cooling"] as const;
 
-/** A rack or condensing unit of a store. The charge is kept in kg whatever unit it was typed in. */
+/**
+ * A rack or condensing unit of a store. The charge is kept in kg whatever unit it was typed in. The
+ * dated facts (charge, refrigerant, type, detection, in-service day) also live in `system_revisions`;
+ * these columns hold the latest values.
+ */
 export const systems = pgTable(
   "systems",
   {
@@ -20,6 +25,15 @@ export const systems = pgTable(
     fullChargeKg: doublePrecision().notNull(),
     applianceType: text({ enum: APPLIANCE_TYPE_VALUES }).notNull(),
     automaticLeakDetection: boolean().notNull().default(false),
+    /** The day it entered service (store calendar); null on rows from before it was asked: the day it was entered. */
+    inServiceOn: date({ mode: "string" }),
+    /**
+     * Set when the system left service. A system with records is retired instead of deleted, so its
+     * records stay for the profile's retention period (docs/decisions/0040-no-record-is-lost.md).
+     */
+    retiredAt: timestamp({ withTimezone: true }),
+    retiredById: uuid().references(() => users.id),
+    retireReason: text(),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },

@@ -4,6 +4,7 @@ import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
 import { Spinner } from "../../components/ui/spinner";
 import { authKeys } from "../../features/auth/api/auth-keys";
+import { ReadingsSection } from "../../features/compliance/components/readings-section";
 import { useCompanySettings } from "../../features/settings/api/get-company-settings";
 import { CompanySettingsForm } from "../../features/settings/components/company-settings-form";
 import { CustomProfileSection } from "../../features/settings/components/custom-profile-section";
@@ -41,6 +42,7 @@ export function Component() {
           editable={can(membership.role, "settings.manage")}
         />
       ) : null}
+      {settings.data ? <ReadingsSection key={`readings-${membership.companyId}`} /> : null}
     </>
   );
 }

@@ -26,7 +26,7 @@ export function Component() {
     <>
       <PageHeader
         title="Outbox"
-        description="Mail this installation has sent, caught by its built-in mail server instead of going out. Invitation and reset links can be followed from here."
+        description="Mail this installation has sent, caught by its built-in mail server instead of going out. Invitation links can be followed from here; password-reset links are never listed here (they belong to no company) and are printed in the server's log instead."
         actions={
           <Button variant="secondary" busy={outbox.isFetching} onClick={() => void outbox.refetch()}>
             Check for new mail

@@ -167,17 +167,19 @@ export function Component() {
             ticks={scale.ticks()}
           />
           <LayerToggles layers={layers} onChange={setLayers} log={log} onLog={setLog} />
-          <DelayControl
-            detectorDelayS={s.transportDelayS}
-            current={delay ?? s.transportDelayS}
-            busy={analysis.isFetching}
-            onApply={(v) => {
-              const next = new URLSearchParams(search);
-              if (v === null) next.delete("transportDelayS");
-              else next.set("transportDelayS", String(v));
-              setSearch(next, { replace: true });
-            }}
-          />
+          {can(membership.role, "analyses.tune") ? (
+            <DelayControl
+              detectorDelayS={s.transportDelayS}
+              current={delay ?? s.transportDelayS}
+              busy={analysis.isFetching}
+              onApply={(v) => {
+                const next = new URLSearchParams(search);
+                if (v === null) next.delete("transportDelayS");
+                else next.set("transportDelayS", String(v));
+                setSearch(next, { replace: true });
+              }}
+            />
+          ) : null}
           {a ? (
             <p className="text-sm text-muted">
               Background {a.background.ppm.toFixed(1)} ppm · transport delay {a.params.transportDelayS} s, time constant{" "}

@@ -35,6 +35,13 @@ const TEAM = {
       createdAt: "2026-11-30T09:00:00.000Z",
       expiresAt: "2099-12-07T09:00:00.000Z",
       acceptedAt: null,
+      delivery: {
+        mailId: "9a8b7c6d-5e4f-4a3b-8c2d-1e0f9a8b7c6d",
+        state: "failed",
+        attempts: 9,
+        error: "The mail server could not be reached.",
+        sentAt: null,
+      },
     },
   ],
 };
@@ -52,6 +59,13 @@ describe("team page", () => {
     expect(await within(form).findByLabelText("Maple Street Market")).toBeVisible();
     expect(screen.getByRole("button", { name: "Revoke the invitation to sam.reyes@northfield.example" })).toBeVisible();
     expect(screen.getByRole("table", { name: "Pending invitations" }).textContent).toContain("All stores");
+    // The invitation e-mail failed: the owner sees why and can send the same invitation again.
+    expect(screen.getByRole("table", { name: "Pending invitations" }).textContent).toContain(
+      "Not delivered after 9 tries: The mail server could not be reached.",
+    );
+    expect(
+      screen.getByRole("button", { name: "Send the invitation to sam.reyes@northfield.example again" }),
+    ).toBeTruthy();
   });
 
   it("shows a technician the members but no invite form and no owner actions", async () => {

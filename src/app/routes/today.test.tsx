@@ -101,7 +101,7 @@ describe("Today page", () => {
     expect(screen.getByRole("link", { name: "37.6 %" }).getAttribute("href")).toBe(`/systems/${SYS}`);
     expect(screen.getByRole("link", { name: /Brazed joint on Rack A/ }).getAttribute("href")).toBe(`/findings/${FIND}`);
     // The rule data's source tags read as citations: "[M]" as unconfirmed, "[S:R4]" as 40 CFR 84 subpart C.
-    expect(due.textContent).toContain("Rule: quarterly (not yet confirmed in the rule text)");
+    expect(due.textContent).toContain("Rule: quarterly (reading)");
     expect(screen.getAllByText("40 CFR 84 subpart C")).toHaveLength(2); // over threshold (part title, tag not repeated) and the deadline
     expect(document.body.textContent).not.toMatch(/\[(S:|M\])/);
     fireEvent.change(screen.getByLabelText("Store"), { target: { value: B } });

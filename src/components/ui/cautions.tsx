@@ -1,4 +1,5 @@
 import { readableSource } from "#core/domain/compliance/citations";
+import { SourceText } from "./source-text";
 
 export interface CautionItem {
   id: string;
@@ -18,7 +19,9 @@ export function Cautions({ items, title = "Safety" }: { items: readonly CautionI
           <li key={c.id} className={c.level === "warning" ? "font-bold" : undefined}>
             <span className={c.level === "warning" ? "" : "font-normal"}>{c.text}</span>{" "}
             {readableSource(c.source) ? (
-              <span className="text-sm font-normal text-muted">({readableSource(c.source)})</span>
+              <span className="text-sm font-normal text-muted">
+                (<SourceText source={c.source} />)
+              </span>
             ) : null}
           </li>
         ))}

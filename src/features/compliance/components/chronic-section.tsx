@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from "react";
 import type { SystemRecordsView } from "#core/contracts/compliance";
-import { readableSource } from "#core/domain/compliance/citations";
+import { SourceText } from "../../../components/ui/source-text";
 import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
 import { formErrorMessage, serverFieldErrors } from "../../../lib/form-errors";
@@ -78,7 +78,8 @@ export function ChronicSection({ r, unit, canFile }: { r: SystemRecordsView; uni
       {r.chronicRule ? (
         <p className="text-sm text-muted">
           A system that takes {r.chronicRule.percent} % or more of its full charge in one calendar year is a chronic
-          leaker, reported by {r.chronicRule.reportBy} ({readableSource(r.chronicRule.source)}).
+          leaker, reported by {r.chronicRule.reportBy} (<SourceText source={r.chronicRule.source} />
+          ).
         </p>
       ) : null}
       {r.audit.length ? (

@@ -11,8 +11,10 @@ import { useRecordCharge } from "../api/record-charge";
 import { daysInWords, formatMass, formatPercent, STATE_LABELS, type MassUnit } from "../model/figures";
 import { ChargeForm } from "./charge-form";
 import { ChronicSection } from "./chronic-section";
+import { RevisionsSection } from "./revisions-section";
 import { LeakCheckForm } from "./leak-check-form";
 import { readableSource } from "#core/domain/compliance/citations";
+import { Readable, SourceText } from "../../../components/ui/source-text";
 
 function Fact({ label, children }: { label: string; children: React.ReactNode }) {
   return (
@@ -88,36 +90,64 @@ export function SystemRecords({
           {a.thresholdPercent === null ? "None applies" : `${a.thresholdPercent} % per year`}
         </Fact>
         <Fact label="CO2-equivalent">
-          {r.co2e.known && r.co2e.tonnes !== null ? `${r.co2e.tonnes.toFixed(2)} t` : "Unknown"}
+          {r.co2e.known && r.co2e.tonnes !== null ? `${r.co2e.tonnes.toFixed(2)} t (GWP ${r.co2e.gwp})` : "Unknown"}
+          {r.system.refrigerant.gwp ? (
+            <span className="block text-sm text-muted">GWP basis: {r.system.refrigerant.gwp.statement}</span>
+          ) : null}
         </Fact>
         <Fact label="Next inspection">{r.nextInspection ? r.nextInspection.dueOn : "None scheduled"}</Fact>
         <Fact label="Appliance">{APPLIANCE_TYPE_NAMES[r.system.applianceType]}</Fact>
-        <Fact label="Leak detection">{r.system.automaticLeakDetection ? "Automatic" : "None"}</Fact>
+        <Fact label="Leak detection">
+          {r.system.automaticLeakDetection ? "Automatic" : "None"}
+          {r.automaticLeakDetection?.required ? (
+            <span className={r.system.automaticLeakDetection ? "block text-sm" : "block text-sm text-danger"}>
+              Required
+              {r.automaticLeakDetection.dueOn ? ` by ${r.automaticLeakDetection.dueOn}` : ""} (
+              <SourceText source={r.automaticLeakDetection.source} />)
+            </span>
+          ) : null}
+        </Fact>
       </dl>
       <div className="space-y-1 text-sm text-muted">
         <p>
           <span className="font-bold text-ink">Rule: </span>
-          {a.applies
-            ? `${a.reason}. Threshold source: ${readableSource(a.thresholdSource ?? "")}.`
-            : `No leak-rate threshold: ${a.reason}.`}
+          {a.applies ? (
+            <Readable text={`${a.reason}. Threshold source: ${readableSource(a.thresholdSource ?? "")}.`} />
+          ) : (
+            `No leak-rate threshold: ${a.reason}.`
+          )}
         </p>
         <p>
           <span className="font-bold text-ink">Profile: </span>
-          {r.profile.name}, {r.profile.method === "annualizing" ? "annualizing method" : "rolling-average method"} (40
-          CFR 82.152 / 84.102). Records are kept {r.profile.retentionYears} years (
-          {readableSource(r.profile.retentionSource)}).
+          {r.profile.name}
+          {r.profile.leakRateRules
+            ? `, ${r.profile.method === "annualizing" ? "annualizing method" : "rolling-average method"} (40 CFR 82.152 / 84.102)`
+            : ""}
+          . Records are kept {r.profile.retentionYears} years (<SourceText source={r.profile.retentionSource} />
+          ).
         </p>
+        {r.system.retired ? (
+          <p>
+            <span className="font-bold text-ink">Retired: </span>
+            {r.system.retired.at.slice(0, 10)}
+            {r.system.retired.reason ? ` (${r.system.retired.reason})` : ""}. Its records stay as they are
+            {r.retention.keptUntil ? ` and are kept at least until ${r.retention.keptUntil}` : ""}.
+          </p>
+        ) : null}
         {r.leakCheck ? (
           <p>
             <span className="font-bold text-ink">Leak checks: </span>
-            {r.leakCheck.reason}. Without leak detection every {r.leakCheck.withoutLdsMonths ?? "–"} months; with it
-            every {r.leakCheck.withLdsMonths ?? "–"} months.
+            {r.leakCheck.reason}.
+            {r.leakCheck.withoutLdsMonths !== null && r.leakCheck.withLdsMonths !== null
+              ? ` Without a leak detection system every ${r.leakCheck.withoutLdsMonths} months; with one every ${r.leakCheck.withLdsMonths} months.`
+              : ""}
           </p>
         ) : null}
         {r.nextInspection ? (
           <p>
             <span className="font-bold text-ink">Next inspection: </span>
-            {r.nextInspection.reason} ({readableSource(r.nextInspection.source)}).
+            {r.nextInspection.reason} (<SourceText source={r.nextInspection.source} />
+            ).
           </p>
         ) : null}
       </div>
@@ -138,7 +168,9 @@ export function SystemRecords({
                 ) : (
                   d.what
                 )}
-                <p className="text-sm text-muted">Rule: {readableSource(d.source)}</p>
+                <p className="text-sm text-muted">
+                  Rule: <SourceText source={d.source} />
+                </p>
               </li>
             ))}
           </ul>
@@ -147,10 +179,19 @@ export function SystemRecords({
 
       <section id="leak-rates" aria-labelledby="rates" className="space-y-2">
         <h2 id="rates" className="text-xl font-bold">
-          Leak rate at every addition
+          {r.profile.leakRateRules ? "Leak rate at every addition" : "Leak rate"}
         </h2>
-        {r.leakRates.length === 0 ? (
-          <p className="text-muted">No refrigerant has been added: no leak rate yet.</p>
+        {!r.profile.leakRateRules ? (
+          <p className="text-muted">
+            {r.profile.name} sets leak-check intervals by CO2-equivalent, not a leak-rate threshold: refrigerant added
+            is listed below.
+          </p>
+        ) : r.leakRates.length === 0 ? (
+          <p className="text-muted">
+            {r.additions.some((x) => !x.voided)
+              ? "No leak-rate figure: the refrigerant added was excluded from the calculation."
+              : "No refrigerant has been added: no leak rate yet."}
+          </p>
         ) : (
           <DataTable
             caption="Leak rate at every addition"
@@ -188,6 +229,7 @@ export function SystemRecords({
       </section>
 
       <ChronicSection r={r} unit={unit} canFile={canFile} />
+      <RevisionsSection r={r} unit={unit} canRevise={canFile} />
 
       <section aria-labelledby="charge" className="space-y-3">
         <h2 id="charge" className="text-xl font-bold">

@@ -6,7 +6,7 @@ import { DataTable } from "../../../components/ui/data-table";
 import { EmptyState } from "../../../components/ui/empty-state";
 import { Select } from "../../../components/ui/select";
 import { arrangeDue, daysInWords, DUE_KIND_LABELS, formatPercent, STATE_LABELS, type DueSort } from "../model/figures";
-import { readableSource } from "#core/domain/compliance/citations";
+import { SourceText } from "../../../components/ui/source-text";
 
 const STATE_TONE: Record<string, string> = {
   overdue: "text-danger font-bold",
@@ -89,7 +89,9 @@ export function TodayView({
                     <Link className="text-accent underline" to={r.link}>
                       {r.what}
                     </Link>
-                    <p className="mt-1 max-w-prose text-sm text-muted">Rule: {readableSource(r.source)}</p>
+                    <p className="mt-1 max-w-prose text-sm text-muted">
+                      Rule: <SourceText source={r.source} />
+                    </p>
                   </>
                 ),
               },
@@ -147,7 +149,9 @@ export function TodayView({
                 cell: (r) => (
                   <>
                     {r.on}
-                    <p className="max-w-xs text-sm text-muted">{readableSource(`${r.partTitle}; ${r.source}`)}</p>
+                    <p className="max-w-xs text-sm text-muted">
+                      <SourceText source={`${r.partTitle}; ${r.source}`} />
+                    </p>
                   </>
                 ),
               },
@@ -188,7 +192,7 @@ export function TodayView({
                       <span className="font-bold">{r.deadline}</span>
                       <br />
                       <span className="block max-w-[13rem] text-sm text-muted">
-                        {readableSource(r.deadlineSource ?? "")}
+                        <SourceText source={r.deadlineSource ?? ""} />
                       </span>
                     </>
                   ) : (

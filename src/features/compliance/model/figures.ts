@@ -27,6 +27,9 @@ export const DUE_KIND_LABELS: Record<DueItem["kind"], string> = {
   inspection: "Inspection",
   "chronic-leaker-report": "Report",
   "detector-check": "Detector check",
+  "automatic-leak-detection": "Leak detection",
+  "retrofit-or-retire-plan": "Retrofit-or-retire plan",
+  "retrofit-or-retire": "Retrofit or retire",
 };
 
 export type DueSort = "due" | "store" | "kind";

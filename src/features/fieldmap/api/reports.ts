@@ -5,6 +5,7 @@ import { sweep } from "#core/contracts/sweeps";
 import { api } from "../../../lib/api-client";
 import { invalidateEntity } from "../../../entities/invalidate";
 import { sweepsKeys } from "../../../entities/sweeps/sweeps-keys";
+import { anyQueued, MAIL_REFRESH_MS } from "../../../components/mail-delivery-status";
 import { fieldmapKeys } from "./fieldmap-keys";
 
 export function useReportSends(sweepId: string) {
@@ -13,8 +14,18 @@ export function useReportSends(sweepId: string) {
       queryKey: fieldmapKeys.sends(sweepId),
       queryFn: async ({ signal }) =>
         (await api.get(`/api/sweeps/${sweepId}/report/sends`, z.object({ sends: z.array(reportSend) }), signal)).sends,
+      refetchInterval: (q) => (anyQueued(q.state.data) ? MAIL_REFRESH_MS : false),
     }),
   );
+}
+
+/** Puts a send whose e-mail failed back in the queue (same PDF, same recipients). */
+export function useRetryReportSend(sweepId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (sendId: string) => api.post(`/api/sweeps/${sweepId}/report/sends/${sendId}/retry`, reportSend),
+    onSuccess: () => qc.invalidateQueries({ queryKey: fieldmapKeys.sends(sweepId) }),
+  });
 }
 
 export function useReportRecipients(sweepId: string, enabled: boolean) {

@@ -4,7 +4,8 @@ import { Button } from "../../../components/ui/button";
 import { Checkbox } from "../../../components/ui/checkbox";
 import { TextField } from "../../../components/ui/text-field";
 import { isApiRequestError } from "../../../lib/api-client";
-import { useReportRecipients, useReportSends, useSendReport } from "../api/reports";
+import { MailDeliveryStatus } from "../../../components/mail-delivery-status";
+import { useReportRecipients, useReportSends, useRetryReportSend, useSendReport } from "../api/reports";
 
 /** Download the PDF or the readings CSV; e-mail the PDF to the store contact or anyone typed in. */
 export function ReportPanel({
@@ -19,6 +20,7 @@ export function ReportPanel({
   const sends = useReportSends(sweepId);
   const contacts = useReportRecipients(sweepId, canSend);
   const send = useSendReport(sweepId);
+  const retry = useRetryReportSend(sweepId);
   const [toContacts, setToContacts] = useState(true);
   const [addresses, setAddresses] = useState("");
   const [message, setMessage] = useState("");
@@ -74,7 +76,9 @@ export function ReportPanel({
           <Button type="submit" busy={send.isPending}>
             Send the report
           </Button>
-          {send.isSuccess ? <Alert tone="success">Sent to {send.data.recipients.join(", ")}.</Alert> : null}
+          {send.isSuccess ? (
+            <Alert tone="success">Queued for {send.data.recipients.join(", ")}: it goes out in a moment.</Alert>
+          ) : null}
           {send.isError && !addressError ? <Alert tone="error">{send.error.message}</Alert> : null}
         </form>
       ) : null}
@@ -84,7 +88,18 @@ export function ReportPanel({
           <ul className="text-sm" data-testid="report-sends">
             {sends.data.map((s) => (
               <li key={s.id}>
-                {zoned(s.sentAt)}: {s.sentBy ?? "someone"} sent {s.filename} to {s.recipients.join(", ")}
+                {zoned(s.sentAt)}: {s.sentBy ?? "someone"} sent {s.filename} to {s.recipients.join(", ")}.{" "}
+                <MailDeliveryStatus delivery={s.delivery} />
+                {canSend && s.delivery?.state === "failed" ? (
+                  <Button
+                    variant="secondary"
+                    className="ml-2"
+                    busy={retry.isPending && retry.variables === s.id}
+                    onClick={() => retry.mutate(s.id)}
+                  >
+                    Send again
+                  </Button>
+                ) : null}
               </li>
             ))}
           </ul>

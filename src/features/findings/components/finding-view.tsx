@@ -5,7 +5,7 @@ import { Alert } from "../../../components/ui/alert";
 import { Cautions } from "../../../components/ui/cautions";
 import { formErrorMessage } from "../../../lib/form-errors";
 import { useChangeFinding } from "../api/change-finding";
-import { readableSource } from "#core/domain/compliance/citations";
+import { SourceText } from "../../../components/ui/source-text";
 import { formatLength, type LengthPreference } from "#core/domain/units/format-units";
 
 /** A finding: where and what, its deadlines with their rules, the signed history and photos. */
@@ -70,7 +70,9 @@ export function FindingView({
               tone={d.state === "overdue" || d.state === "due-today" ? "error" : "note"}
               title={`${d.what}: ${d.dueOn}`}
             >
-              <p className="text-sm">Rule: {readableSource(d.source)}</p>
+              <p className="text-sm">
+                Rule: <SourceText source={d.source} />
+              </p>
             </Alert>
           ))}
         </section>

@@ -18,6 +18,8 @@ export function outboxQueryOptions() {
     // Mail arrives from other actions (an invitation sent a moment ago): always look again.
     staleTime: 0,
     refetchOnWindowFocus: true,
+    // Mail goes out through a queue a moment after the action: keep looking while the screen is open.
+    refetchInterval: 3_000,
   });
 }
 

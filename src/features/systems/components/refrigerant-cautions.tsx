@@ -1,5 +1,6 @@
 import type { Caution } from "#core/contracts/systems";
 import { readableSource } from "#core/domain/compliance/citations";
+import { SourceText } from "../../../components/ui/source-text";
 
 /**
  * The usual cautions for the picked refrigerant, beside the form. They inform; local codes and
@@ -28,7 +29,11 @@ export function RefrigerantCautions({
               <span className="font-bold">{c.level === "warning" ? "Warning: " : "Note: "}</span>
               {c.text}
             </p>
-            {readableSource(c.source) ? <p className="text-sm text-muted">Source: {readableSource(c.source)}</p> : null}
+            {readableSource(c.source) ? (
+              <p className="text-sm text-muted">
+                Source: <SourceText source={c.source} />
+              </p>
+            ) : null}
           </li>
         ))}
       </ul>

@@ -1,7 +1,7 @@
 import { useId } from "react";
 import type { RefrigerantSummary } from "#core/contracts/systems";
 import { FieldError } from "../../../components/ui/field-error";
-import { readableSource } from "#core/domain/compliance/citations";
+import { SourceText } from "../../../components/ui/source-text";
 
 /** An R-number picker that shows, for the choice, its safety class and its GWP with basis and source. */
 export function RefrigerantPicker({
@@ -43,16 +43,28 @@ export function RefrigerantPicker({
           <>
             <p>
               {picked.name}: safety class <span className="font-bold text-ink">{picked.safetyClass}</span> (
-              {readableSource(picked.safetyClassSource)}).
+              <SourceText source={picked.safetyClassSource} />
+              ).
             </p>
             <p>
               {picked.gwp ? (
                 <>
                   GWP-100 <span className="font-bold text-ink">{picked.gwp.value}</span> on the {picked.gwp.basis} basis
-                  ({readableSource(picked.gwp.source)}){picked.gwpNote ? `; ${picked.gwpNote}` : ""}.
+                  (<SourceText source={picked.gwp.source} />){picked.gwpNote ? `; ${picked.gwpNote}` : ""}.
+                  <span className="block">GWP basis of the company's rule profile: {picked.gwp.statement}.</span>
                 </>
               ) : (
-                <>GWP not known on the company's basis{picked.gwpNote ? `: ${readableSource(picked.gwpNote)}` : ""}.</>
+                <>
+                  GWP not known on the company's basis
+                  {picked.gwpNote ? (
+                    <>
+                      : <SourceText source={picked.gwpNote} />
+                    </>
+                  ) : (
+                    ""
+                  )}
+                  .
+                </>
               )}
             </p>
           </>

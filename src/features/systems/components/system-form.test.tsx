@@ -13,7 +13,10 @@ import { readableSource } from "#core/domain/compliance/citations";
 const STORE_ID = "1d2c3b4a-5e6f-4a7b-8c9d-0e1f2a3b4c5d";
 // The server's own catalogue answer (GET /api/refrigerants) on the AR4 basis.
 const CATALOGUE = {
-  refrigerants: REFRIGERANTS.map((r) => ({ ...summarizeRefrigerant(r, ["AR4"]), cautions: refrigerantCautions(r) })),
+  refrigerants: REFRIGERANTS.map((r) => ({
+    ...summarizeRefrigerant(r, { bases: ["AR4"], statement: "IPCC AR4 100-year values" }),
+    cautions: refrigerantCautions(r),
+  })),
 };
 
 beforeEach(() => setCsrfToken("csrf-lead"));
@@ -54,7 +57,10 @@ describe("system form", () => {
 
     // R-404A on AR4 is 3922 (IPCC AR4 GWP-100, as in the EPA's and the EU's published tables).
     fireEvent.change(picker, { target: { value: "R-404A" } });
-    const gwp = summarizeRefrigerant(getRefrigerant("R-404A"), ["AR4"]).gwp!;
+    const gwp = summarizeRefrigerant(getRefrigerant("R-404A"), {
+      bases: ["AR4"],
+      statement: "IPCC AR4 100-year values",
+    }).gwp!;
     expect(gwp.value).toBe(3922);
     expect(
       screen.getByText(

@@ -42,6 +42,15 @@ export function SystemsSection({
         <QueryError error={systems.error} what="the systems" onRetry={() => void systems.refetch()} />
       ) : null}
       {deleteError ? <Alert tone="error">{deleteError}</Alert> : null}
+      {del.data?.outcome === "retired" ? (
+        <Alert tone="success">
+          {del.data.system.name} has records, so it was retired instead of deleted: its records stay readable on{" "}
+          <a className="underline" href={`/systems/${del.data.system.id}`}>
+            its records page
+          </a>
+          .
+        </Alert>
+      ) : null}
       {editing === "new" || editedSystem ? (
         <SystemForm
           key={editing}
@@ -56,6 +65,9 @@ export function SystemsSection({
         <EmptyState title="No systems yet">
           Add the store's racks and condensing units, so fixtures can be linked to them and leak rates worked out.
         </EmptyState>
+      ) : null}
+      {systems.data?.[0]?.refrigerant.gwp ? (
+        <p className="text-sm text-muted">GWP basis: {systems.data[0].refrigerant.gwp.statement}.</p>
       ) : null}
       {systems.data && systems.data.length > 0 ? (
         <DataTable<System>
@@ -75,7 +87,13 @@ export function SystemsSection({
             {
               header: "GWP",
               cell: (s) =>
-                s.refrigerant.gwp ? `${s.refrigerant.gwp.value} (${s.refrigerant.gwp.basis})` : "not known",
+                s.refrigerant.gwp ? (
+                  <span title={`GWP basis: ${s.refrigerant.gwp.statement}`}>
+                    {s.refrigerant.gwp.value} ({s.refrigerant.gwp.basis})
+                  </span>
+                ) : (
+                  "not known"
+                ),
             },
             { header: "Full charge", cell: (s) => formatMass(s.fullChargeKg, massUnit, 1) },
             { header: "Appliance type", cell: (s) => APPLIANCE_TYPE_NAMES[s.applianceType] },
@@ -86,7 +104,8 @@ export function SystemsSection({
                     header: "Actions",
                     cell: (s: System) =>
                       confirmDelete === s.id ? (
-                        <div className="flex flex-wrap gap-2">
+                        <div className="flex flex-wrap items-center gap-2">
+                          <span className="text-sm text-muted">A system with records is retired, never deleted.</span>
                           <Button
                             variant="danger"
                             busy={del.isPending}

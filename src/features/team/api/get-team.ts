@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { teamResponse } from "#core/contracts/members";
 import { api } from "../../../lib/api-client";
+import { anyQueued, MAIL_REFRESH_MS } from "../../../components/mail-delivery-status";
 import { teamKeys } from "./team-keys";
 
 export function getTeam(signal?: AbortSignal) {
@@ -8,7 +9,12 @@ export function getTeam(signal?: AbortSignal) {
 }
 
 export function teamQueryOptions() {
-  return queryOptions({ queryKey: teamKeys.list(), queryFn: ({ signal }) => getTeam(signal) });
+  return queryOptions({
+    queryKey: teamKeys.list(),
+    queryFn: ({ signal }) => getTeam(signal),
+    // An invitation e-mail still queued: look again until it is sent or has failed.
+    refetchInterval: (q) => (anyQueued(q.state.data?.invitations) ? MAIL_REFRESH_MS : false),
+  });
 }
 
 export function useTeam(options: { enabled?: boolean } = {}) {

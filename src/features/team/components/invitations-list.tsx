@@ -7,6 +7,8 @@ import { EmptyState } from "../../../components/ui/empty-state";
 import { formErrorMessage } from "../../../lib/form-errors";
 import { formatDate } from "../../../lib/format";
 import { useRevokeInvitation } from "../api/revoke-invitation";
+import { useResendInvitation } from "../api/resend-invitation";
+import { MailDeliveryStatus } from "../../../components/mail-delivery-status";
 import type { StoreOption } from "./store-picker";
 
 export interface InvitationsListProps {
@@ -18,8 +20,9 @@ export interface InvitationsListProps {
 
 export function InvitationsList({ invitations, stores, canManage, now = new Date() }: InvitationsListProps) {
   const revoke = useRevokeInvitation();
+  const resend = useResendInvitation();
   const pending = invitations.filter((i) => i.acceptedAt === null);
-  const error = formErrorMessage(revoke.error);
+  const error = formErrorMessage(revoke.error) ?? formErrorMessage(resend.error);
 
   if (pending.length === 0) return <EmptyState title="No pending invitations" />;
   return (
@@ -40,6 +43,7 @@ export function InvitationsList({ invitations, stores, canManage, now = new Date
                 : "All stores",
           },
           { header: "Invited by", cell: (i) => i.invitedBy },
+          { header: "E-mail status", cell: (i) => <MailDeliveryStatus delivery={i.delivery} /> },
           {
             header: "Expires",
             cell: (i) =>
@@ -54,14 +58,26 @@ export function InvitationsList({ invitations, stores, canManage, now = new Date
                 {
                   header: "Actions",
                   cell: (i: Invitation) => (
-                    <Button
-                      variant="secondary"
-                      aria-label={`Revoke the invitation to ${i.email}`}
-                      busy={revoke.isPending && revoke.variables === i.id}
-                      onClick={() => revoke.mutate(i.id)}
-                    >
-                      Revoke
-                    </Button>
+                    <div className="flex flex-wrap gap-2">
+                      {i.delivery?.state !== "queued" ? (
+                        <Button
+                          variant="secondary"
+                          aria-label={`Send the invitation to ${i.email} again`}
+                          busy={resend.isPending && resend.variables === i.id}
+                          onClick={() => resend.mutate(i.id)}
+                        >
+                          Send again
+                        </Button>
+                      ) : null}
+                      <Button
+                        variant="secondary"
+                        aria-label={`Revoke the invitation to ${i.email}`}
+                        busy={revoke.isPending && revoke.variables === i.id}
+                        onClick={() => revoke.mutate(i.id)}
+                      >
+                        Revoke
+                      </Button>
+                    </div>
                   ),
                 },
               ]

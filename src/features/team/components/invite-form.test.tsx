@@ -20,6 +20,13 @@ function invitationReply(body: { email: string; role: string; storeIds: string[]
       createdAt: "2026-11-30T09:00:00.000Z",
       expiresAt: "2026-12-07T09:00:00.000Z",
       acceptedAt: null,
+      delivery: {
+        mailId: "9a8b7c6d-5e4f-4a3b-8c2d-1e0f9a8b7c6d",
+        state: "queued",
+        attempts: 0,
+        error: null,
+        sentAt: null,
+      },
     },
   };
 }

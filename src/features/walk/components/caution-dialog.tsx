@@ -1,12 +1,26 @@
-import { cautionsFor, type CautionPlace } from "#core/domain/safety/cautions";
+import { findRefrigerant } from "#core/domain/refrigerants/catalogue";
+import type { Refrigerant } from "#core/domain/refrigerants/types";
+import { roomCautions, type CautionPlace } from "#core/domain/safety/cautions";
 import { Button } from "../../../components/ui/button";
 import { Dialog } from "../../../components/ui/dialog";
 
-/** Shown on entering a walk-in or machine room: the usual cautions, deferring to local codes. */
-export function CautionDialog({ place, name, onClose }: { place: CautionPlace | null; name: string; onClose(): void }) {
-  const cautions = place
-    ? cautionsFor({ place }).filter((c) => c.id === "oxygen-displacement" || c.id === "codes-govern")
-    : [];
+/**
+ * Shown on entering a walk-in or machine room: the cautions for the refrigerants of the systems in
+ * it (ammonia, CO2, flammable, where a leak collects), deferring to local codes.
+ */
+export function CautionDialog({
+  place,
+  name,
+  refrigerantIds = [],
+  onClose,
+}: {
+  place: CautionPlace | null;
+  name: string;
+  refrigerantIds?: readonly string[];
+  onClose(): void;
+}) {
+  const refrigerants = refrigerantIds.map(findRefrigerant).filter((r): r is Refrigerant => r !== undefined);
+  const cautions = place ? roomCautions(place, refrigerants) : [];
   return (
     <Dialog
       title={`Before you enter ${name || (place === "machine-room" ? "the machine room" : "the walk-in")}`}

@@ -15,7 +15,7 @@ import { useWalk } from "../hooks/use-walk";
 import { fixtureAt, unsampledFixtures } from "../model/coverage";
 import { latestLagHint } from "../model/lag-hint";
 import type { LocalReading } from "../model/local-types";
-import { enteredRoom } from "../model/room-entry";
+import { enteredRoom, roomSystemIds } from "../model/room-entry";
 import { walkModelFor } from "../model/walk-model";
 import { editedReading, walkStep, type WalkEvent, type WalkMode } from "../model/walk-mode";
 import { CautionDialog } from "./caution-dialog";
@@ -62,7 +62,7 @@ export function WalkScreen({
     return step.effect;
   };
   const editing = editedReading(mode);
-  const [caution, setCaution] = useState<{ place: CautionPlace; name: string } | null>(null);
+  const [caution, setCaution] = useState<{ place: CautionPlace; name: string; refrigerantIds: string[] } | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
   const [dialog, setDialog] = useState<"list" | "summary" | "import" | null>(null);
   const [dismissedAlarm, setDismissedAlarm] = useState(-1);
@@ -146,7 +146,18 @@ export function WalkScreen({
     const before = readingsRef.current.filter((r) => !r.draft || r.id === open);
     const previous = before.length ? before[before.length - 1] : null;
     const room = enteredRoom(fixtures, previous, { x, y });
-    if (room) setCaution({ place: room.place, name: room.fixture.label || FIXTURE_KIND_NAMES[room.fixture.kind] });
+    if (room) {
+      // The room's systems (from the store pack kept on the device) decide which cautions apply.
+      const ids = roomSystemIds(fixtures, room.fixture);
+      const refrigerantIds = (storePack.data?.systems ?? [])
+        .filter((x) => ids.includes(x.id))
+        .map((x) => x.refrigerantId);
+      setCaution({
+        place: room.place,
+        name: room.fixture.label || FIXTURE_KIND_NAMES[room.fixture.kind],
+        refrigerantIds,
+      });
+    }
     const v = typed.current;
     typed.current = null;
     // The next tap saves what the keypad shows and takes its place, without closing it.
@@ -308,7 +319,12 @@ export function WalkScreen({
         onImport={() => setDialog("import")}
         onSubmit={() => setDialog("summary")}
       />
-      <CautionDialog place={caution?.place ?? null} name={caution?.name ?? ""} onClose={() => setCaution(null)} />
+      <CautionDialog
+        place={caution?.place ?? null}
+        name={caution?.name ?? ""}
+        refrigerantIds={caution?.refrigerantIds ?? []}
+        onClose={() => setCaution(null)}
+      />
       <ReadingsDrawer
         open={dialog === "list"}
         readings={all}

@@ -31,3 +31,22 @@ export function enteredRoom(
   const before = previous ? roomAt(fixtures, previous.x, previous.y) : null;
   return before?.fixture.id === now.fixture.id ? null : now;
 }
+
+/** The systems in a room: the one linked to the room itself and those of the fixtures inside it. */
+export function roomSystemIds(fixtures: readonly Fixture[], room: Fixture): string[] {
+  if ("point" in room) return room.systemId ? [room.systemId] : [];
+  const ids = new Set<string>();
+  if (room.systemId) ids.add(room.systemId);
+  for (const f of fixtures) {
+    if (f.id === room.id || !f.systemId) continue;
+    const at: [number, number] = "point" in f ? [f.point.x, f.point.y] : centre(f.polygon);
+    if (pointInPolygon(at, room.polygon)) ids.add(f.systemId);
+  }
+  return [...ids];
+}
+
+function centre(polygon: readonly (readonly [number, number])[]): [number, number] {
+  const sx = polygon.reduce((s, p) => s + p[0], 0);
+  const sy = polygon.reduce((s, p) => s + p[1], 0);
+  return [sx / polygon.length, sy / polygon.length];
+}

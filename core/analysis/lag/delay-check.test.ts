@@ -1,0 +1,43 @@
+import { describe, expect, it } from "vitest";
+import { checkDelay } from "./delay-check";
+
+// A technician walks a 20 m aisle east at 1 m/s, turns and walks back, a tap every half second; a leak at
+// x = 10 m gives 1 + 20·exp(−|x − 10|) ppm. Each reading is the air drawn in `trueShift` seconds before
+// the tap (a pure delay), rounded to whole ppm as a detector shows it. Straight walk, no route needed.
+function sweep(trueShift: number) {
+  const at = (t: number) => (t <= 20 ? t : 40 - t); // position along the aisle at time t
+  const taps: { x: number; y: number; t: number; ppm: number }[] = [];
+  for (let t = 0; t <= 40; t += 0.5) {
+    const drawn = at(Math.max(0, t - trueShift));
+    taps.push({ x: at(t), y: 1, t, ppm: Math.round(1 + 20 * Math.exp(-Math.abs(drawn - 10))) });
+  }
+  return taps;
+}
+
+describe("delay check", () => {
+  it("finds the delay that lines up the passes there and back", () => {
+    const c = checkDelay(sweep(3), 6, 1, undefined, undefined);
+    expect(c.estimatedS).toBe(3);
+    expect(c.supported).toBe(true);
+    expect(c.estimatedMisfit!).toBeLessThan(c.statedMisfit!);
+  });
+
+  it("leaves a right delay alone", () => {
+    const c = checkDelay(sweep(4), 4, 1, undefined, undefined);
+    expect(c.estimatedS).toBe(4);
+    expect(c.supported).toBe(false);
+  });
+
+  it("finds a longer delay than the stated one too", () => {
+    const c = checkDelay(sweep(6), 2, 1, undefined, undefined);
+    expect(c.estimatedS).toBe(6);
+    expect(c.supported).toBe(true);
+  });
+
+  it("says nothing when no reading is raised or no spot is visited twice", () => {
+    const flat = sweep(3).map((r) => ({ ...r, ppm: 1 }));
+    expect(checkDelay(flat, 3, 1, undefined, undefined)).toMatchObject({ estimatedS: null, supported: false });
+    const oneWay = sweep(3).slice(0, 41);
+    expect(checkDelay(oneWay, 3, 1, undefined, undefined)).toMatchObject({ estimatedS: null, supported: false });
+  });
+});

@@ -1,0 +1,153 @@
+import type { LaggedPosition, Route, Tap } from "./lag-correct";
+import { walkLag } from "./walk-lag";
+
+/**
+ * The delay checked against the readings. A wrong delay moves the readings of passes in opposite
+ * directions (or at different paces, or a re-check) apart, so the same spot reads differently on each
+ * visit; the right one lines them up. For each trial shift s (delay plus time constant) the readings are
+ * lag-corrected by s, and the misfit is the weighted mean of (log(1 + y_i) − log(1 + y_j))² over pairs of
+ * readings taken on different visits (at least `minGapS` apart) whose corrected positions lie close
+ * together (Gaussian weight of width `radiusM`), at least one of them raised. The shift with the lowest
+ * misfit is the estimate; it is supported when it beats the stated shift clearly and enough pairs carry it.
+ */
+export interface DelayCheck {
+  /** The shift the detector states (transport delay + time constant), s. */
+  statedS: number;
+  /** The shift the readings fit best, s; null when no pairs of visits overlap (nothing to check). */
+  estimatedS: number | null;
+  /** Misfit at the stated and at the estimated shift (lower is better). */
+  statedMisfit: number | null;
+  estimatedMisfit: number | null;
+  /** Sum of the pair weights at the estimate: how much overlap between visits carries it. */
+  pairWeight: number;
+  /** The readings clearly fit the estimate better than the stated shift. */
+  supported: boolean;
+}
+
+export interface DelayCheckSettings {
+  /** Trial shifts from 0 to max(`maxS`, `maxFactor` × stated), every `stepS`, s. */
+  readonly stepS: number;
+  readonly maxS: number;
+  readonly maxFactor: number;
+  /** Readings at least this far apart in time count as different visits, s. */
+  readonly minGapS: number;
+  /** Width of the closeness weight, m. */
+  readonly radiusM: number;
+  /** A reading at least this far over the background is raised, ppm. */
+  readonly raisedPpm: number;
+  /** Supported when the estimate's misfit is at most this share of the stated one, ... */
+  readonly maxMisfitRatio: number;
+  /** ... at least this much pair weight carries it (below it no trial shift counts at all), ... */
+  readonly minPairWeight: number;
+  /** ... the supported estimate carries at least this much, ... */
+  readonly supportPairWeight: number;
+  /** ... and it differs from the stated shift by at least this share of it (and at least 1 s). */
+  readonly minChange: number;
+}
+
+export const DELAY_CHECK_SETTINGS: DelayCheckSettings = {
+  stepS: 0.5,
+  maxS: 15,
+  maxFactor: 2.5,
+  minGapS: 8,
+  radiusM: 0.5,
+  raisedPpm: 1.5,
+  maxMisfitRatio: 0.5,
+  minPairWeight: 4,
+  supportPairWeight: 20,
+  minChange: 0.35,
+};
+
+export function checkDelay(
+  readings: readonly (Tap & { ppm: number })[],
+  statedS: number,
+  backgroundPpm: number,
+  route: Route | undefined,
+  walkSpeedMps: number | undefined,
+  settings: DelayCheckSettings = DELAY_CHECK_SETTINGS,
+): DelayCheck {
+  const n = readings.length;
+  const logY = Float64Array.from(readings, (r) => Math.log1p(r.ppm));
+  const raised = Uint8Array.from(readings, (r) => (r.ppm - backgroundPpm >= settings.raisedPpm ? 1 : 0));
+  const none: DelayCheck = {
+    statedS,
+    estimatedS: null,
+    statedMisfit: null,
+    estimatedMisfit: null,
+    pairWeight: 0,
+    supported: false,
+  };
+  const raisedIdx: number[] = [];
+  for (let i = 0; i < n; i++) if (raised[i]) raisedIdx.push(i);
+  if (raisedIdx.length === 0) return none;
+  const memo = new Map<string, ReturnType<Route>>();
+  const cachedRoute: Route | undefined = route
+    ? (a, b) => {
+        const key = `${a.x},${a.y},${b.x},${b.y}`;
+        if (!memo.has(key)) memo.set(key, route(a, b));
+        return memo.get(key)!;
+      }
+    : undefined;
+  const r2 = 2 * settings.radiusM * settings.radiusM;
+  const cut2 = 9 * settings.radiusM * settings.radiusM;
+  const misfitAt = (shift: number): { misfit: number; weight: number } => {
+    const p: LaggedPosition[] = walkLag(readings, shift, 0, cachedRoute, walkSpeedMps);
+    // readings in square buckets as wide as the closeness cut-off, so each raised reading meets only
+    // its neighbours (the pairs and their order are those of a full scan over j)
+    const size = Math.sqrt(cut2);
+    const buckets = new Map<number, number[]>();
+    const keyOf = (bx: number, by: number) => bx * 1_000_003 + by;
+    for (let j = 0; j < n; j++) {
+      if (p[j].beforeDelay) continue;
+      const k = keyOf(Math.floor(p[j].x / size), Math.floor(p[j].y / size));
+      const list = buckets.get(k);
+      if (list) list.push(j);
+      else buckets.set(k, [j]);
+    }
+    let sw = 0;
+    let swd = 0;
+    const near: number[] = [];
+    // every pair with at least one raised reading, once (a pair of two raised readings from the lower index)
+    for (const i of raisedIdx) {
+      if (p[i].beforeDelay) continue;
+      const bx = Math.floor(p[i].x / size);
+      const by = Math.floor(p[i].y / size);
+      near.length = 0;
+      for (let dx = -1; dx <= 1; dx++)
+        for (let dy = -1; dy <= 1; dy++) for (const j of buckets.get(keyOf(bx + dx, by + dy)) ?? []) near.push(j);
+      near.sort((a, b) => a - b);
+      for (const j of near) {
+        if (j === i || (raised[j] && j < i)) continue;
+        if (Math.abs(readings[j].t - readings[i].t) < settings.minGapS) continue;
+        const d2 = (p[i].x - p[j].x) ** 2 + (p[i].y - p[j].y) ** 2;
+        if (d2 > cut2) continue;
+        const w = Math.exp(-d2 / r2);
+        sw += w;
+        swd += w * (logY[i] - logY[j]) ** 2;
+      }
+    }
+    return { misfit: sw > 0 ? swd / sw : Infinity, weight: sw };
+  };
+  const stated = misfitAt(statedS);
+  const top = Math.max(settings.maxS, settings.maxFactor * statedS);
+  let best = { shift: statedS, ...stated };
+  for (let s = 0; s <= top + 1e-9; s += settings.stepS) {
+    const m = misfitAt(s);
+    // a misfit carried by too little overlap says nothing
+    if (m.weight >= settings.minPairWeight && m.misfit < best.misfit) best = { shift: s, ...m };
+  }
+  if (!Number.isFinite(best.misfit)) return none;
+  const supported =
+    best.weight >= settings.supportPairWeight &&
+    Number.isFinite(stated.misfit) &&
+    best.misfit <= settings.maxMisfitRatio * stated.misfit &&
+    Math.abs(best.shift - statedS) >= Math.max(1, settings.minChange * statedS);
+  return {
+    statedS,
+    estimatedS: best.shift,
+    statedMisfit: Number.isFinite(stated.misfit) ? stated.misfit : null,
+    estimatedMisfit: best.misfit,
+    pairWeight: best.weight,
+    supported,
+  };
+}

@@ -1,0 +1,127 @@
+// The locator's calibrated model settings, grouped by the stage that uses them. They are constants of the
+// method, not caller options: each was measured on the scenario benchmark (npm run bench:locate) and the
+// measured reasons are in docs/locator/pipeline.md. Callers may set only `LocatorOptions` (locator-options.ts).
+
+export interface KernelSettings {
+  /** Screening length L = √(K/λ), m: K ≈ 0.01–0.05 m²/s in aisles and λ = 1.5–4 air changes/h give 3–11 m. */
+  readonly screeningLengthM: number;
+  /** Far-field part (fans' stirring): a second screening length and its share, used only where most cases run their fans. */
+  readonly farScreeningLengthM: number;
+  readonly farShare: number;
+  /** Near-field cut-off d0, m (about two cells; tap jitter is about 0.3 m). */
+  readonly nearCutoffM: number;
+  /** Truncation radius of each per-reading search, m (docs/reference/locator-methods.md §1d: 12–25 m; cost grows with R²). */
+  readonly truncationM: number;
+  /** Distance scale inside fan-stirred walk-ins and machine rooms: √(K_aisle/K_fans) ≈ 0.2–0.7 (docs/locator/design-ranges.md). */
+  readonly fanMixingScale: number;
+  /** Gaussian width of the field map, m (about half a tap spacing of 1.2–1.5 m plus jitter). */
+  readonly mapSigmaM: number;
+}
+
+export interface NoiseSettings {
+  /** w = 1/(a + β·y)²: floor a ≈ √(0.5² + 1/12) ppm and lognormal share β (docs/locator/design-ranges.md). */
+  readonly floorPpm: number;
+  readonly fraction: number;
+}
+
+export interface ZoneSettings {
+  /** Screening length of a benign-source zone's kernel, m (its gas is fitted out to twice this plus the margin). */
+  readonly screeningLengthM: number;
+  /** What an active zone can cause by default, in alarm levels (no published source). */
+  readonly typicalAlarms: number;
+  /** No suspect spot within this distance of an active zone, m. */
+  readonly marginM: number;
+}
+
+export interface SourceSettings {
+  /** Drift strengths a = u/(2K) tried per candidate cell in still air, 1/m, and the bar a drift must clear. */
+  readonly driftStrengths: readonly number[];
+  readonly driftPenalty: number;
+  /** Leaks fitted at once, and spots listed at most. */
+  readonly maxLeaks: number;
+  readonly maxCandidates: number;
+  /** Fitted leaks at least this far apart, m; listed spots at least `separationM` apart. */
+  readonly sourceSeparationM: number;
+  readonly separationM: number;
+  /** A weaker fitted source within this distance of a stronger one is listed after the others, m. */
+  readonly tailReachM: number;
+  /** An alternative spot must reach this share of the best spot's Δχ². */
+  readonly alternateFraction: number;
+  /** Credibility: minimum Δχ², and `minSupport` readings within `supportRadiusM` at least `elevatedPpm` over background. */
+  readonly minDeltaChi2: number;
+  readonly supportRadiusM: number;
+  readonly minSupport: number;
+  readonly elevatedPpm: number;
+  /** Equipment mask margin for drawing error, m. */
+  readonly equipmentMarginM: number;
+  /** Log prior odds of a leak within 0.5 m of a risk point (common practice, no published source). */
+  readonly riskPointLogOdds: number;
+  /** No suspect spot farther than this from every reading, m. */
+  readonly maxReachM: number;
+}
+
+export interface PlacementSettings {
+  /** Local refinement radius, m, and the tempering of Δχ² (times the residual variance). */
+  readonly refineRadiusM: number;
+  readonly refineInflation: number;
+  /** Radius = max(minRadiusM, radiusScale · misfit-contour radius), calibrated for 80–95 % coverage. */
+  readonly minRadiusM: number;
+  readonly radiusScale: number;
+}
+
+export interface ReportSettings {
+  /** Tap gaps longer than this are reported as sparse coverage, m (common practice, no published source). */
+  readonly coverageGapM: number;
+  /** The well-mixed assumption behind the g/yr estimate. */
+  readonly airChangesPerH: number;
+  readonly mixingHeightM: number;
+  readonly molarMassGPerMol: number;
+}
+
+export interface LocatorSettings {
+  readonly kernel: KernelSettings;
+  readonly noise: NoiseSettings;
+  readonly zones: ZoneSettings;
+  readonly sources: SourceSettings;
+  readonly placement: PlacementSettings;
+  readonly report: ReportSettings;
+}
+
+export const LOCATOR_SETTINGS: LocatorSettings = {
+  kernel: {
+    screeningLengthM: 1.5,
+    farScreeningLengthM: 4,
+    farShare: 0.3,
+    nearCutoffM: 0.3,
+    truncationM: 6,
+    fanMixingScale: 0.35,
+    mapSigmaM: 0.75,
+  },
+  noise: { floorPpm: 0.6, fraction: 0.15 },
+  zones: { screeningLengthM: 12, typicalAlarms: 3, marginM: 1.5 },
+  sources: {
+    driftStrengths: [0.4, 0.8],
+    driftPenalty: 3,
+    maxLeaks: 3,
+    maxCandidates: 5,
+    sourceSeparationM: 4,
+    separationM: 2,
+    tailReachM: 6,
+    alternateFraction: 0.3,
+    minDeltaChi2: 25,
+    supportRadiusM: 3,
+    minSupport: 2,
+    elevatedPpm: 1.5,
+    equipmentMarginM: 0.3,
+    riskPointLogOdds: 3,
+    maxReachM: 4,
+  },
+  placement: { refineRadiusM: 1.5, refineInflation: 200, minRadiusM: 2.5, radiusScale: 3 },
+  report: {
+    coverageGapM: 3,
+    airChangesPerH: 2,
+    mixingHeightM: 3,
+    // R-404A, a common supermarket blend (docs/reference/standards.md §3, molar mass derived there)
+    molarMassGPerMol: 97.6,
+  },
+};

@@ -1,0 +1,111 @@
+import type { LocatorInput } from "../../contracts/locator-input";
+import type { CorrectedReading, Diagnostic, ReadingFlag } from "../../contracts/locator-output";
+import { cellIndexOf, type PlanGrid } from "../grid/plan-grid";
+import { benignSource, fansMixing, sparseCoverage } from "../locator/diagnostics";
+import type { ReportSettings, SourceSettings } from "../locator/settings";
+import { MOLAR_VOLUME_25C_L } from "../locator/units";
+import type { FieldResult } from "./field-stage";
+import type { LagResult } from "./lag-stage";
+import { round2 } from "./numbers";
+import type { PlacementResult } from "./placement-stage";
+import type { SourcesResult } from "./sources-stage";
+import type { ZonesResult } from "./zones-stage";
+
+/** Stage 6: what the technician should know about the sweep, each reading's correction, and the assumptions. */
+export interface DiagnosticsResult {
+  readonly diagnostics: readonly Diagnostic[];
+  readonly readings: readonly CorrectedReading[];
+  readonly assumptions: readonly string[];
+}
+
+export function diagnosticsStage(
+  input: LocatorInput,
+  grid: PlanGrid,
+  lag: LagResult,
+  zones: ZonesResult,
+  field: FieldResult,
+  sources: Pick<SourcesResult, "fit">,
+  placement: Pick<PlacementResult, "topOneSided">,
+  /** The lag the readings were moved back by (delay plus time constant), s. */
+  shiftS: number,
+  settings: { sources: Pick<SourceSettings, "elevatedPpm">; report: ReportSettings },
+): DiagnosticsResult {
+  const { plan, instrument, readings } = input;
+  const { xs, ys, ppm: y, censored, positions } = lag;
+  const n = y.length;
+  const background = field.background.ppm;
+  const delayS = round2(shiftS);
+  const diagnostics: Diagnostic[] = [];
+  for (const f of plan.fixtures) {
+    const d = fansMixing(f, xs, ys, y, background, instrument.alarmPpm);
+    if (d) diagnostics.push(d);
+  }
+  plan.backgroundZones.forEach((zone, z) => {
+    let explained = 0;
+    let peak = 0;
+    for (let i = 0; i < n; i++) {
+      if (zones.zoneOfReading[i] === z && y[i] - background >= settings.sources.elevatedPpm) {
+        explained++;
+        peak = Math.max(peak, y[i]);
+      }
+    }
+    const d = sources.fit.q[z] > 0 ? benignSource(zone, explained, peak) : null;
+    if (d) diagnostics.push(d);
+  });
+  const coverage = sparseCoverage(
+    Float64Array.from(readings, (r) => r.x),
+    Float64Array.from(readings, (r) => r.y),
+    settings.report.coverageGapM,
+  );
+  if (coverage) diagnostics.push(coverage);
+  if (placement.topOneSided) {
+    diagnostics.push({
+      kind: "one-sided-pass",
+      message:
+        "The top suspect spot is seen from one pass only, so which side of the path it is on cannot be told: make a pass along the other face.",
+    });
+  }
+  const early = positions.filter((l) => l.beforeDelay).length;
+  if (early > 0) {
+    diagnostics.push({
+      kind: "early-readings",
+      message: `${early} reading${early > 1 ? "s were" : " was"} taken before one delay (${delayS} s) had passed and ${early > 1 ? "are" : "is"} placed at the first tap.`,
+    });
+  }
+  const over = censored.reduce((a, b) => a + b, 0);
+  if (over > 0) {
+    diagnostics.push({
+      kind: "over-range",
+      message: `${over} reading${over > 1 ? "s were" : " was"} over range and counted as "at least" that value.`,
+    });
+  }
+
+  const corrected: CorrectedReading[] = readings.map((r, i) => {
+    const flags: ReadingFlag[] = [];
+    if (positions[i].beforeDelay) flags.push("before-delay");
+    if (positions[i].pathGap) flags.push("path-gap");
+    if (grid.blocked[cellIndexOf(grid, xs[i], ys[i])]) flags.push("snapped");
+    if (censored[i]) flags.push("over-range");
+    if (zones.zoneOfReading[i] >= 0) flags.push("in-benign-zone");
+    return {
+      index: i,
+      raw: { x: r.x, y: r.y },
+      corrected: { x: round2(xs[i]), y: round2(ys[i]) },
+      t: r.t,
+      ppm: r.ppm,
+      flags,
+    };
+  });
+
+  const rep = settings.report;
+  return {
+    diagnostics,
+    readings: corrected,
+    assumptions: [
+      `Readings moved back along the walk by the transport delay plus the sensor time constant (${delayS} s).`,
+      `Strength in g/yr assumes the store air is well mixed over ${rep.mixingHeightM} m height with ${rep.airChangesPerH} air changes per hour, ` +
+        `a refrigerant of ${rep.molarMassGPerMol} g/mol and ${MOLAR_VOLUME_25C_L} L/mol (25 °C, 101.325 kPa); treat it as an order of magnitude.`,
+      "Suspect spots are search zones for a hand check, not pinpoints; follow local codes and certified practice when working on the system.",
+    ],
+  };
+}

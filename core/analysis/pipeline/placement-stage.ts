@@ -1,0 +1,225 @@
+import type { LocatorInput } from "../../contracts/locator-input";
+import type { Candidate } from "../../contracts/locator-output";
+import { cellCentre, cellIndexOf, cellsInside, type PlanGrid } from "../grid/plan-grid";
+import { candidateNextCheck, candidateReason, type CandidateFacts } from "../locator/candidate-words";
+import { oneSidedPass } from "../locator/diagnostics";
+import type { FoundSource } from "../locator/greedy-sources";
+import { refineCell } from "../locator/local-refine";
+import { nearestFixture, nearestRiskPoint } from "../locator/nearest-features";
+import { kernelColumn } from "../locator/reading-fields";
+import type { PlacementSettings, ReportSettings, SourceSettings } from "../locator/settings";
+import { kernelArea } from "../locator/source-kernel";
+import { HOURS_PER_YEAR, ppmToMgPerM3, wellMixedEmission } from "../locator/units";
+import type { FieldResult } from "./field-stage";
+import type { LagResult } from "./lag-stage";
+import { cellDistance, round2 } from "./numbers";
+import { supportingReadings, type SourcesResult, type SupportRule } from "./sources-stage";
+
+/** Stage 5: where each found source is listed, how sure the list is, and the facts behind each spot. */
+export interface PlacementResult {
+  readonly candidates: readonly Candidate[];
+  /** The top spot is seen from one pass only (its side of the path is uncertain). */
+  readonly topOneSided: boolean;
+}
+
+// Risk points of one fan-stirred room are listed as separate spots when at least this far apart: twice
+// the 0.5 m reach of the risk-point prior, so two spots never name the same fitting.
+const ROOM_RISK_SPACING_M = 1;
+
+export function placementStage(
+  plan: LocatorInput["plan"],
+  grid: PlanGrid,
+  lag: LagResult,
+  field: FieldResult,
+  sources: SourcesResult,
+  rule: SupportRule,
+  settings: { placement: PlacementSettings; sources: SourceSettings; report: ReportSettings },
+): PlacementResult {
+  const p = settings.placement;
+  const s0 = settings.sources;
+  const { xs, ys, ppm: y } = lag;
+  const n = y.length;
+  const cells = grid.width * grid.height;
+  const { allowed, prior, fields, fit, firstScan } = sources;
+  const s2 = sources.residualVariance;
+  const support = (column: Float64Array, residual: Float64Array) => supportingReadings(rule, column, fit.b, residual);
+
+  // In a walk-in or machine room whose fans run the readings are level all over the room, so where in
+  // the room the leak is cannot be read from them: take the room's most probable cell (tempered fit plus
+  // the risk-point prior), which is a coil, valve or line-set drop unless the readings say otherwise.
+  const roomOf = new Int32Array(cells).fill(-1);
+  plan.fixtures.forEach((f, r) => {
+    if (f.fans && (f.kind === "walk-in" || f.kind === "machine-room"))
+      for (const k of cellsInside(grid, f.polygon)) roomOf[k] = r;
+  });
+  const taken: number[] = [];
+  const farFromTaken = (k: number, minM: number) =>
+    taken.every((t) => cellDistance(t, k, grid.width) * grid.cellSize >= minM);
+  const roomBest = (s: FoundSource, room: number, riskOnly = false): number => {
+    const T = p.refineInflation * s2;
+    let best = -1;
+    let bestScore = -Infinity;
+    for (const k of cellsInside(grid, plan.fixtures[room].polygon)) {
+      if (
+        !allowed[k] ||
+        !(s.surface[k] > 0) ||
+        !farFromTaken(k, riskOnly ? ROOM_RISK_SPACING_M : s0.separationM) ||
+        (riskOnly && !(prior && prior[k] > 0))
+      )
+        continue;
+      const score = s.surface[k] / (2 * T) + (prior ? prior[k] : 0);
+      if (score > bestScore) {
+        bestScore = score;
+        best = k;
+      }
+    }
+    return best;
+  };
+
+  // mirror of the top spot across a single pass, as an alternative (docs/reference/locator-methods.md §5.3)
+  const withMirror = (found: readonly FoundSource[]): readonly FoundSource[] => {
+    if (found.length === 0 || found.length >= s0.maxCandidates) return found;
+    const top = found[0];
+    const [x, y0] = cellCentre(grid, top.cell);
+    const sup = support(top.column, y);
+    const side = oneSidedPass(
+      sup.map((i) => xs[i]),
+      sup.map((i) => ys[i]),
+      x,
+      y0,
+    );
+    if (!side.oneSided) return found;
+    const [mx, my] = side.mirror;
+    if (mx < 0 || my < 0 || mx > plan.width || my > plan.height) return found;
+    const mc = cellIndexOf(grid, mx, my);
+    if (!allowed[mc] || found.some((f) => cellDistance(f.cell, mc, grid.width) * grid.cellSize < s0.separationM))
+      return found;
+    const mirror: FoundSource = {
+      cell: mc,
+      delta: firstScan.delta[mc],
+      column: kernelColumn(fields, mc, n),
+      alternate: true,
+      q: firstScan.q[mc],
+      surface: firstScan.delta,
+    };
+    return [top, mirror, ...found.slice(1)].slice(0, s0.maxCandidates);
+  };
+
+  const placed: FoundSource[] = [];
+  for (const s of withMirror(sources.found)) {
+    const room = roomOf[s.cell];
+    if (room < 0) {
+      const cell = refineCell(
+        s.surface,
+        allowed,
+        s.cell,
+        grid.width,
+        grid.cellSize,
+        p.refineRadiusM,
+        p.refineInflation * s2,
+        prior,
+      );
+      placed.push(cell === s.cell ? s : { ...s, cell, column: kernelColumn(fields, cell, n) });
+      taken.push(cell);
+      continue;
+    }
+    const best = roomBest(s, room);
+    if (best < 0) continue; // every cell of the room is already listed
+    placed.push(best === s.cell ? s : { ...s, cell: best, column: kernelColumn(fields, best, n) });
+    taken.push(best);
+    if (s.alternate) continue;
+    // the room's next most probable risk point (else cell) follows a fitted spot placed in a fan-stirred room
+    let next = roomBest(s, room, true);
+    if (next < 0) next = roomBest(s, room);
+    if (next >= 0) {
+      placed.push({
+        cell: next,
+        delta: s.surface[next],
+        column: kernelColumn(fields, next, n),
+        alternate: true,
+        q: s.q,
+        surface: s.surface,
+      });
+      taken.push(next);
+    }
+  }
+  placed.splice(s0.maxCandidates);
+
+  const r = settings.report;
+  const topQ = Math.max(placed[0]?.q ?? 0, 1e-12);
+  const gPerYearPerQ =
+    (wellMixedEmission(
+      ppmToMgPerM3(1, r.molarMassGPerMol),
+      r.airChangesPerH,
+      kernelArea(field.kernel) * r.mixingHeightM,
+    ) *
+      HOURS_PER_YEAR) /
+    1000;
+  const candidates: Candidate[] = [];
+  let topOneSided = false;
+  placed.forEach((s, rank) => {
+    const [x, y0] = cellCentre(grid, s.cell);
+    const sup = support(s.column, y);
+    const side = oneSidedPass(
+      sup.map((i) => xs[i]),
+      sup.map((i) => ys[i]),
+      x,
+      y0,
+    );
+    if (rank === 0) topOneSided = side.oneSided;
+    const radius = Math.max(
+      p.minRadiusM,
+      p.radiusScale * misfitRadius(s.surface, s.cell, 5.99 * s2, grid.width, grid.cellSize),
+    );
+    const fixture = nearestFixture(plan.fixtures, x, y0);
+    const riskPoint = nearestRiskPoint(plan.riskPoints, x, y0);
+    const facts: CandidateFacts = {
+      alternate: s.alternate,
+      supportCount: sup.length,
+      peakPpm: sup.reduce((m, i) => Math.max(m, y[i]), 0),
+      backgroundPpm: field.background.ppm,
+      fixture,
+      riskPoint,
+      oneSided: side.oneSided,
+      radius,
+    };
+    const rawScore = 1 - Math.exp(-0.5 * Math.sqrt(s.delta / (s2 * s0.minDeltaChi2)));
+    const score = Math.min(rawScore, rank > 0 ? candidates[rank - 1].score : 1);
+    candidates.push({
+      rank: rank + 1,
+      x: round2(x),
+      y: round2(y0),
+      radius: round2(radius),
+      score: round2(score),
+      strength: round2(s.q / topQ),
+      strengthGPerYear: Math.round(s.q * gPerYearPerQ),
+      fixtureId: fixture?.item.id ?? null,
+      riskPointId: riskPoint?.item.id ?? null,
+      reason: candidateReason(facts),
+      nextCheck: candidateNextCheck(facts),
+    });
+  });
+  return { candidates, topOneSided };
+}
+
+/** √(area/π) of the cells near `c` whose Δχ² is within `tolerance` of the value at c. */
+export function misfitRadius(
+  delta: Float64Array,
+  c: number,
+  tolerance: number,
+  width: number,
+  cellSize: number,
+): number {
+  const reach = Math.ceil(6 / cellSize);
+  const ci = c % width;
+  const cj = (c - ci) / width;
+  const height = delta.length / width;
+  const floor = delta[c] - tolerance;
+  let count = 0;
+  for (let j = Math.max(0, cj - reach); j <= Math.min(height - 1, cj + reach); j++) {
+    for (let i = Math.max(0, ci - reach); i <= Math.min(width - 1, ci + reach); i++) {
+      if (delta[j * width + i] >= floor && delta[j * width + i] > 0) count++;
+    }
+  }
+  return Math.sqrt((count * cellSize * cellSize) / Math.PI);
+}

@@ -1,0 +1,144 @@
+import type { LocatorInput } from "../../contracts/locator-input";
+import type { PlanGrid } from "../grid/plan-grid";
+import { findSources, residualOf, type FoundSource } from "../locator/greedy-sources";
+import { chooseLocalDrift } from "../locator/local-drift";
+import type { NonnegativeFit } from "../locator/nonnegative-fit";
+import { equipmentMask, fitsDrift, riskPointPrior } from "../locator/plan-masks";
+import type { ReadingFields } from "../locator/reading-fields";
+import type { KernelSettings, SourceSettings } from "../locator/settings";
+import type { ScanResult } from "../locator/source-scan";
+import type { FieldResult } from "./field-stage";
+import type { LagResult } from "./lag-stage";
+import type { ZonesResult } from "./zones-stage";
+
+/** Stage 4: the leaks the readings support, fitted jointly with the benign-source zones. */
+export interface SourcesResult {
+  /** The reading fields the fit used (with each cell's drift in still air). */
+  readonly fields: ReadingFields;
+  /** Cells where a suspect spot may lie. */
+  readonly allowed: Uint8Array;
+  /** Log prior odds of a leak per cell, null when there are no risk points to weigh. */
+  readonly prior: Float64Array | null;
+  /** Fitted sources (strongest first), then alternatives of the first scan. */
+  readonly found: readonly FoundSource[];
+  /** The final joint fit: background b, then one strength per zone, then per fitted source. */
+  readonly fit: NonnegativeFit;
+  readonly firstScan: ScanResult;
+  /** Residual variance of the final fit (at least 1), which tempers every Δχ² later on. */
+  readonly residualVariance: number;
+}
+
+/** What decides which readings support a spot. */
+export interface SupportRule {
+  readonly threshold: number;
+  readonly elevatedPpm: number;
+  readonly zoneOfReading: Int32Array;
+}
+
+/** Readings near a spot (kernel at least `threshold`), outside active zones, at least `elevatedPpm` over b. */
+export function supportingReadings(
+  rule: SupportRule,
+  column: Float64Array,
+  b: number,
+  residual: Float64Array,
+): number[] {
+  const idx: number[] = [];
+  for (let i = 0; i < column.length; i++) {
+    if (column[i] >= rule.threshold && rule.zoneOfReading[i] < 0 && residual[i] - b >= rule.elevatedPpm) idx.push(i);
+  }
+  return idx;
+}
+
+export function supportRule(field: FieldResult, zones: ZonesResult, sources: SourceSettings): SupportRule {
+  return {
+    threshold: field.kernel.at(sources.supportRadiusM),
+    elevatedPpm: sources.elevatedPpm,
+    zoneOfReading: zones.zoneOfReading,
+  };
+}
+
+export function sourcesStage(
+  plan: LocatorInput["plan"],
+  grid: PlanGrid,
+  lag: LagResult,
+  zones: ZonesResult,
+  field: FieldResult,
+  settings: { kernel: KernelSettings; sources: SourceSettings; zoneMarginM: number },
+): SourcesResult {
+  const s = settings.sources;
+  const y = lag.ppm;
+  const n = y.length;
+  const cells = grid.width * grid.height;
+  const onEquipment = equipmentMask(grid, plan, s.equipmentMarginM);
+  const allowed = new Uint8Array(cells);
+  for (let c = 0; c < cells; c++) {
+    allowed[c] =
+      !grid.blocked[c] &&
+      !zones.inside[c] &&
+      zones.distance[c] > settings.zoneMarginM &&
+      field.fields.nearestReading[c] <= s.maxReachM &&
+      (!onEquipment || onEquipment[c])
+        ? 1
+        : 0;
+  }
+  let fields = field.fields;
+  if (fitsDrift(s.driftStrengths, plan.fixtures)) {
+    // in still air each candidate source takes the weak drift that fits its readings best (local-drift.ts)
+    const k = settings.kernel;
+    fields = chooseLocalDrift(
+      fields,
+      grid.width,
+      grid.cellSize,
+      field.weights,
+      residualOf(y, zones.columns, zones.zoneOnlyQ),
+      allowed,
+      {
+        screeningLengthM: k.screeningLengthM,
+        far: null,
+        nearCutoffM: k.nearCutoffM,
+        truncationM: k.truncationM,
+        strengths: s.driftStrengths,
+        penalty: s.driftPenalty,
+      },
+    ).fields;
+  }
+  const prior = s.riskPointLogOdds > 0 ? riskPointPrior(grid, plan, s.riskPointLogOdds) : null;
+  const rule = supportRule(field, zones, s);
+  const greedy = findSources({
+    fields,
+    y,
+    w: field.weights,
+    censored: lag.censored,
+    nuisance: zones.columns as Float64Array[],
+    allowed,
+    gridWidth: grid.width,
+    cellSize: grid.cellSize,
+    maxLeaks: s.maxLeaks,
+    maxCandidates: s.maxCandidates,
+    separationM: s.separationM,
+    alternateFraction: s.alternateFraction,
+    sourceSeparationM: s.sourceSeparationM,
+    prior,
+    tailReachM: s.tailReachM,
+    credible: (c, column, _q, b, residual, delta) => {
+      if (delta < s.minDeltaChi2) return false;
+      const sup = supportingReadings(rule, column, b, residual);
+      if (sup.length < s.minSupport) return false;
+      // Within reach of a benign-source zone, a spot must read more than the zone does: gas spreading
+      // from the zone thins out with distance, so weaker readings there are most simply the zone's.
+      const z = zones.nearest[c];
+      if (z >= 0 && zones.distance[c] <= zones.reachM) return sup.some((i) => y[i] > zones.level[z]);
+      return true;
+    },
+  });
+  const dof = Math.max(1, n - 2 - greedy.sources.length - zones.columns.length);
+  return {
+    fields,
+    allowed,
+    prior,
+    found: greedy.sources,
+    fit: greedy.fit,
+    firstScan: greedy.firstScan,
+    residualVariance: Math.max(1, greedy.chi2Final / dof),
+  };
+}

@@ -1,0 +1,62 @@
+import { readableSource, UNCONFIRMED } from "./citations";
+import type { RuleProfile } from "./rule-profile";
+
+export interface Reading {
+  /** What the product does, in plain words. */
+  text: string;
+  /** Where it is set: a value of the profile, or how the product reads a rule. */
+  kind: "profile-value" | "product-reading";
+  /** The decision record that explains a product reading. */
+  decision?: string;
+}
+
+/**
+ * How the product applies rules whose text it has not confirmed: the product's own readings,
+ * recorded as decisions (docs/decisions/), then every value of the profile marked from memory
+ * ("[M]"). Each is listed once, for the owner to accept or change (a custom profile changes values).
+ */
+export const PRODUCT_READINGS: readonly Reading[] = [
+  {
+    kind: "product-reading",
+    text: "The 30 days to repair run from the first leak rate above the threshold; a later one before the repair does not extend them.",
+    decision: "docs/decisions/0041-repair-clock.md",
+  },
+  {
+    kind: "product-reading",
+    text: "Refrigerant added for the same leak before its repair is one leak-rate calculation, counted from the addition before it.",
+    decision: "docs/decisions/0042-same-leak-additions.md",
+  },
+  {
+    kind: "product-reading",
+    text: "After a retrofit, the next leak rate counts its days from the retrofit fill; without a recorded fill it uses 365 days.",
+    decision: "docs/decisions/0043-system-revisions.md",
+  },
+  {
+    kind: "product-reading",
+    text: "When a repair does not hold (the follow-up verification test fails, or no repair within the deadline), a retrofit-or-retire plan falls due.",
+    decision: "docs/decisions/0044-readings-and-research-notes.md",
+  },
+];
+
+const sourcesOf = (node: unknown): string[] =>
+  node && typeof node === "object"
+    ? Object.entries(node).flatMap(([k, v]) => (k === "source" && typeof v === "string" ? [v] : sourcesOf(v)))
+    : [];
+
+const MARKER = new RegExp(`\\s*\\((?:${UNCONFIRMED})\\)|;?\\s*${UNCONFIRMED}(?=\\))`, "g");
+
+export function profileReadings(profile: RuleProfile): Reading[] {
+  const seen = new Set<string>();
+  const values: Reading[] = [];
+  for (const source of sourcesOf(profile)) {
+    if (!source.includes("[M]")) continue;
+    const text = readableSource(source)
+      .replace(MARKER, "")
+      .replace(/\(\s*\)/g, "")
+      .trim();
+    if (!text || seen.has(text)) continue;
+    seen.add(text);
+    values.push({ kind: "profile-value", text });
+  }
+  return [...PRODUCT_READINGS, ...values];
+}

@@ -1,0 +1,140 @@
+import { eq } from "drizzle-orm";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { createTestApp, type Agent, type TestApp, signInOnce } from "../../../tests/helpers/test-app";
+import { seedCompany } from "../../../tests/helpers/fixtures";
+import { systems } from "../../db/schema/index";
+import { addMonths } from "#core/domain/dates/calendar-date";
+import { localDateOf } from "#core/domain/dates/time-zone";
+import type { Role } from "#core/domain/roles";
+
+let t: TestApp;
+let co: Awaited<ReturnType<typeof seedCompany>>;
+const signInOnceAs = signInOnce(() => t.app);
+
+beforeAll(async () => {
+  t = await createTestApp();
+  co = await seedCompany(t.ctx, "Larkspur Pantry");
+});
+afterAll(() => t.close());
+
+const signedIn = (role: Role): Promise<Agent> => signInOnceAs(co.people[role]);
+const lb = (value: number) => ({ value, unit: "lb" });
+
+async function newSystem(name: string) {
+  const res = await (await signedIn("lead-tech")).post(`/api/stores/${co.store.id}/systems`, {
+    name,
+    refrigerantId: "R-404A",
+    fullCharge: lb(200),
+    applianceType: "commercial-refrigeration",
+    automaticLeakDetection: false,
+  });
+  expect(res.status).toBe(201);
+  return res.body.id as string;
+}
+
+const settings = (ruleProfile: string) => ({
+  name: "Larkspur Pantry",
+  lengthUnit: "m",
+  massUnit: "lb",
+  ruleProfile,
+  leakRateMethod: "annualizing",
+  detectorCheckIntervalDays: 30,
+});
+
+describe("no record is ever lost (docs/decisions/0040-no-record-is-lost.md)", () => {
+  it("retires a system with records when a lead tech deletes it, and keeps every record readable", async () => {
+    const id = await newSystem("Rack C (low temp)");
+    const tech = await signedIn("technician");
+    const add = await tech.post(`/api/systems/${id}/charge-additions`, {
+      addedOn: "2026-03-02",
+      amount: lb(12),
+      reason: "Topped up after low-level alarm",
+    });
+    expect(add.status).toBe(201);
+    expect(
+      (await tech.post(`/api/systems/${id}/leak-checks`, { checkedOn: "2026-03-20", leakFound: false })).status,
+    ).toBe(201);
+
+    const lead = await signedIn("lead-tech");
+    const del = await lead.delete(`/api/systems/${id}`);
+    expect(del.status).toBe(200);
+    expect(del.body.outcome).toBe("retired");
+    expect(del.body.system.retired).toMatchObject({ reason: "" });
+
+    // Records are kept 3 years under US federal rules (docs/reference/standards.md §1, [S:R6,R7]).
+    const rec = await (await signedIn("engineer")).get(`/api/systems/${id}/records`);
+    expect(rec.status).toBe(200);
+    expect(rec.body.additions.map((a: { amountKg: number }) => a.amountKg)).toEqual([12 * 0.45359237]);
+    expect(rec.body.leakChecks).toHaveLength(1);
+    expect(rec.body.leakRates).toHaveLength(1);
+    expect(rec.body.audit.map((a: { action: string }) => a.action)).toEqual(["system-retired"]);
+    const retiredOn = localDateOf(new Date(rec.body.system.retired.at), co.store.timeZone);
+    expect(rec.body.retention).toMatchObject({ years: 3, keptUntil: addMonths(retiredOn, 36) });
+    // A retired system owes no repair, test or inspection.
+    expect(rec.body.due).toEqual([]);
+
+    // Out of the store's list, listed again on request.
+    const list = await lead.get(`/api/stores/${co.store.id}/systems`);
+    expect(list.body.systems.map((s: { id: string }) => s.id)).not.toContain(id);
+    const all = await lead.get(`/api/stores/${co.store.id}/systems?include=retired`);
+    expect(all.body.systems.map((s: { id: string }) => s.id)).toContain(id);
+    expect((await lead.get(`/api/stores/${co.store.id}/systems?include=everything`)).status).toBe(400);
+
+    // Its history no longer changes: no edit, no new addition, no second retirement.
+    expect((await lead.patch(`/api/systems/${id}`, { name: "Rack C2" })).status).toBe(409);
+    const late = await tech.post(`/api/systems/${id}/charge-additions`, {
+      addedOn: "2026-04-01",
+      amount: lb(1),
+      reason: "late",
+    });
+    expect(late.status).toBe(409);
+    expect(late.body.error.message).toMatch(/was retired on/);
+    expect((await lead.delete(`/api/systems/${id}`)).status).toBe(409);
+  });
+
+  it("deletes a system that has no record at all", async () => {
+    const id = await newSystem("Spare condensing unit");
+    const lead = await signedIn("lead-tech");
+    const del = await lead.delete(`/api/systems/${id}`);
+    expect(del.status).toBe(200);
+    expect(del.body).toEqual({ outcome: "deleted", system: null });
+    expect((await lead.get(`/api/systems/${id}`)).status).toBe(404);
+  });
+
+  it("retires on purpose with a reason, even without records; technicians may not", async () => {
+    const id = await newSystem("Rack D");
+    expect((await (await signedIn("technician")).post(`/api/systems/${id}/retire`, { reason: "x" })).status).toBe(403);
+    const res = await (await signedIn("lead-tech")).post(`/api/systems/${id}/retire`, {
+      reason: "Replaced by a CO2 booster rack",
+    });
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({
+      outcome: "retired",
+      system: { retired: { reason: "Replaced by a CO2 booster rack" } },
+    });
+  });
+
+  it("the database itself refuses to delete a system with records (foreign keys restrict, never cascade)", async () => {
+    const id = await newSystem("Rack E");
+    const tech = await signedIn("technician");
+    await tech.post(`/api/systems/${id}/leak-checks`, { checkedOn: "2026-05-04", leakFound: false });
+    await expect(t.ctx.db.delete(systems).where(eq(systems.id, id))).rejects.toThrow();
+    expect((await t.ctx.db.select().from(systems).where(eq(systems.id, id))).length).toBe(1);
+  });
+
+  it("keeps records 5 years under the EU profile (Regulation (EU) 2024/573 Art. 7, docs/reference/standards.md §2 [S:E8b])", async () => {
+    const owner = await signedIn("owner");
+    expect((await owner.put("/api/company/settings", settings("eu-fgas"))).status).toBe(200);
+    const id = await newSystem("Rack F");
+    await (await signedIn("technician")).post(`/api/systems/${id}/leak-checks`, {
+      checkedOn: "2026-06-01",
+      leakFound: false,
+    });
+    expect((await owner.delete(`/api/systems/${id}`)).body.outcome).toBe("retired");
+    const rec = await owner.get(`/api/systems/${id}/records`);
+    expect(rec.body.retention.years).toBe(5);
+    const retiredOn = localDateOf(new Date(rec.body.system.retired.at), co.store.timeZone);
+    expect(rec.body.retention.keptUntil).toBe(addMonths(retiredOn, 60));
+    expect((await owner.put("/api/company/settings", settings("us-federal"))).status).toBe(200);
+  });
+});

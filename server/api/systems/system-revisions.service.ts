@@ -1,0 +1,145 @@
+import { asc, eq } from "drizzle-orm";
+import { orderedRevisions, revisionsOf } from "./revision-rows";
+import type { AppContext } from "../../context";
+import type { RevisionInput, System } from "#core/contracts/systems";
+import { complianceAudit, systemRevisions, systems, users } from "../../db/schema/index";
+import { compareDates, type IsoDate } from "#core/domain/dates/calendar-date";
+import { badRequest } from "../../lib/http-error";
+import { eventDay } from "../findings/findings.service";
+import { loadVisibleStore, type Viewer } from "../../access/store-access";
+import { chargeToKg, companyGwpBases, knownRefrigerant, loadSystem, refuseRetired, toSystem } from "./systems.service";
+
+type RevisionRow = typeof systemRevisions.$inferSelect;
+type Facts = Pick<
+  RevisionRow,
+  "refrigerantId" | "fullChargeKg" | "applianceType" | "automaticLeakDetection" | "inServiceOn"
+>;
+
+/** The revision in force on a date: the latest effective on or before it, else the first. */
+function inForce(rows: readonly RevisionRow[], date: IsoDate): RevisionRow | null {
+  const list = orderedRevisions(rows);
+  let found = list[0] ?? null;
+  for (const r of list) if (compareDates(r.effectiveFrom, date) <= 0) found = r;
+  return found;
+}
+
+export async function listRevisions(ctx: AppContext, viewer: Viewer, systemId: string) {
+  await loadSystem(ctx, viewer, systemId);
+  const rows = await ctx.db
+    .select({ r: systemRevisions, by: users.name })
+    .from(systemRevisions)
+    .leftJoin(users, eq(users.id, systemRevisions.byId))
+    .where(eq(systemRevisions.systemId, systemId))
+    .orderBy(asc(systemRevisions.effectiveFrom), asc(systemRevisions.recordedAt));
+  return rows.map(({ r, by }) => ({
+    id: r.id,
+    effectiveFrom: r.effectiveFrom,
+    kind: r.kind,
+    refrigerantId: r.refrigerantId,
+    fullChargeKg: r.fullChargeKg,
+    applianceType: r.applianceType,
+    automaticLeakDetection: r.automaticLeakDetection,
+    inServiceOn: r.inServiceOn,
+    reason: r.reason,
+    by: by ?? "",
+    recordedAt: r.recordedAt.toISOString(),
+  }));
+}
+
+/**
+ * Records a dated revision (engineers and owners; audited). It holds the facts in force on its
+ * date with the given ones changed, and is in force until the next revision; the `systems` row
+ * takes the values in force today. A retrofit must name a refrigerant other than the one in force,
+ * and a refrigerant change that is not a correction is a retrofit (docs/decisions/0043-system-revisions.md).
+ */
+export async function addRevision(
+  ctx: AppContext,
+  viewer: Viewer,
+  userId: string,
+  systemId: string,
+  input: RevisionInput,
+): Promise<System> {
+  const system = await loadSystem(ctx, viewer, systemId);
+  refuseRetired(system);
+  const store = await loadVisibleStore(ctx, viewer, system.storeId);
+  const effectiveFrom = eventDay(input.effectiveFrom, store, "effectiveFrom");
+  const today = eventDay(undefined, store);
+  const existing = await revisionsOf(ctx, [systemId]);
+  const base: Facts = inForce(existing, effectiveFrom) ?? {
+    refrigerantId: system.refrigerantId,
+    fullChargeKg: system.fullChargeKg,
+    applianceType: system.applianceType,
+    automaticLeakDetection: system.automaticLeakDetection,
+    inServiceOn: system.inServiceOn ?? effectiveFrom,
+  };
+  const facts: Facts = {
+    refrigerantId: input.refrigerantId !== undefined ? knownRefrigerant(input.refrigerantId).id : base.refrigerantId,
+    fullChargeKg: input.fullCharge !== undefined ? chargeToKg(input.fullCharge) : base.fullChargeKg,
+    applianceType: input.applianceType ?? base.applianceType,
+    automaticLeakDetection: input.automaticLeakDetection ?? base.automaticLeakDetection,
+    inServiceOn: input.inServiceOn !== undefined ? eventDay(input.inServiceOn, store, "inServiceOn") : base.inServiceOn,
+  };
+  const newRefrigerant = facts.refrigerantId !== base.refrigerantId;
+  if (input.kind === "retrofit" && !newRefrigerant)
+    throw badRequest(`Please check: a retrofit needs a refrigerant other than ${base.refrigerantId}.`, {
+      refrigerantId: `must differ from ${base.refrigerantId}, the refrigerant in force on ${effectiveFrom}`,
+    });
+  if (input.kind === "change" && newRefrigerant)
+    throw badRequest("Please check: a change of refrigerant is a retrofit (or a correction of a wrong entry).", {
+      kind: "must be retrofit (new refrigerant) or correction (the refrigerant was entered wrongly)",
+    });
+  if (compareDates(facts.inServiceOn, effectiveFrom) > 0 && input.kind !== "correction")
+    throw badRequest("Please check: the system must be in service on the day the revision takes effect.", {
+      effectiveFrom: `must be on or after the in-service day ${facts.inServiceOn}`,
+    });
+  const updated = await ctx.db.transaction(async (tx) => {
+    const [row] = await tx
+      .insert(systemRevisions)
+      .values({
+        companyId: viewer.companyId,
+        systemId,
+        effectiveFrom,
+        kind: input.kind,
+        ...facts,
+        reason: input.reason,
+        byId: userId,
+      })
+      .returning();
+    const now = inForce([...existing, row], today)!;
+    const [s] = await tx
+      .update(systems)
+      .set({
+        refrigerantId: now.refrigerantId,
+        fullChargeKg: now.fullChargeKg,
+        applianceType: now.applianceType,
+        automaticLeakDetection: now.automaticLeakDetection,
+        inServiceOn: now.inServiceOn,
+        updatedAt: new Date(),
+      })
+      .where(eq(systems.id, systemId))
+      .returning();
+    await tx.insert(complianceAudit).values({
+      companyId: viewer.companyId,
+      systemId,
+      action: "system-revised",
+      byId: userId,
+      summary: `${input.kind === "retrofit" ? "Retrofit" : input.kind === "correction" ? "Correction" : "Change"} from ${effectiveFrom}: ${describeChange(base, facts)}; reason: ${input.reason}`,
+    });
+    return s;
+  });
+  return toSystem(updated, await companyGwpBases(ctx, viewer.companyId));
+}
+
+function describeChange(before: Facts, after: Facts): string {
+  const parts: string[] = [];
+  if (before.refrigerantId !== after.refrigerantId)
+    parts.push(`refrigerant ${before.refrigerantId} → ${after.refrigerantId}`);
+  if (before.fullChargeKg !== after.fullChargeKg)
+    parts.push(`full charge ${before.fullChargeKg.toFixed(2)} kg → ${after.fullChargeKg.toFixed(2)} kg`);
+  if (before.applianceType !== after.applianceType)
+    parts.push(`appliance type ${before.applianceType} → ${after.applianceType}`);
+  if (before.automaticLeakDetection !== after.automaticLeakDetection)
+    parts.push(`automatic leak detection ${after.automaticLeakDetection ? "added" : "removed"}`);
+  if (before.inServiceOn !== after.inServiceOn) parts.push(`in service ${before.inServiceOn} → ${after.inServiceOn}`);
+  return parts.join(", ") || "no value changed";
+}

@@ -1,0 +1,74 @@
+/**
+ * The server as a child process (`node --import tsx server/index.ts`), for fault tests that stop
+ * its database or signal it. Loopback only; its output is kept for failure messages.
+ */
+import { spawn, type ChildProcess } from "node:child_process";
+import path from "node:path";
+import { freePort } from "./own-cluster";
+
+const ROOT = path.resolve(import.meta.dirname, "../..");
+
+export interface AppProcess {
+  url: string;
+  port: number;
+  child: ChildProcess;
+  output(): string;
+  /** Resolves with the exit code (or signal name) once the process has gone. */
+  exited: Promise<number | string>;
+  alive(): boolean;
+  kill(signal: NodeJS.Signals): void;
+}
+
+/** Starts the app; `port` reuses one (a restart in place), otherwise a free one is taken. */
+export async function startAppProcess(env: Record<string, string>, port?: number): Promise<AppProcess> {
+  port ??= await freePort();
+  const child = spawn(process.execPath, ["--import", "tsx", "server/index.ts"], {
+    cwd: ROOT,
+    env: {
+      ...process.env,
+      NODE_ENV: "test",
+      HOST: "127.0.0.1",
+      PORT: String(port),
+      FAKE_SMTP_PORT: "0",
+      SEED_DEMO: "false",
+      BCRYPT_COST: "4",
+      LOG_LEVEL: "warn",
+      ...env,
+    },
+    stdio: ["ignore", "pipe", "pipe"],
+  });
+  let out = "";
+  child.stdout!.on("data", (d) => (out += d));
+  child.stderr!.on("data", (d) => (out += d));
+  let done = false;
+  const exited = new Promise<number | string>((resolve) =>
+    child.on("exit", (code, signal) => {
+      done = true;
+      resolve(code ?? signal ?? "unknown");
+    }),
+  );
+  const url = `http://127.0.0.1:${port}`;
+  const until = Date.now() + 60_000;
+  for (;;) {
+    if (done) throw new Error(`the app exited during start-up:\n${out}`);
+    if (Date.now() > until) {
+      child.kill("SIGKILL");
+      throw new Error(`the app did not answer /healthz within 60 s:\n${out}`);
+    }
+    const ok = await fetch(`${url}/healthz`).then(
+      (r) => r.ok,
+      () => false,
+    );
+    if (ok) break;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  return {
+    url,
+    port,
+    child,
+    output: () => out,
+    exited,
+    alive: () => !done,
+    kill: (signal) => child.kill(signal),
+  };
+}
