@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { text } from "./text";
 import { SECONDS_STEP } from "./quantities";
 import type { Candidate, Diagnostic, CorrectedReading } from "./locator-output";
 
@@ -46,10 +47,10 @@ export const suspectSpot = z.object({
   score: z.number(),
   strength: z.number(),
   strengthGPerYear: z.number(),
-  fixtureId: z.string().nullable(),
-  riskPointId: z.string().nullable(),
-  reason: z.string(),
-  nextCheck: z.string(),
+  fixtureId: text().nullable(),
+  riskPointId: text().nullable(),
+  reason: text(),
+  nextCheck: text(),
 });
 export type SuspectSpot = z.infer<typeof suspectSpot>;
 
@@ -68,9 +69,9 @@ const API_DIAGNOSTIC_KINDS = ["detector-overdue", "detector-settings", "delay-ch
 
 export const analysisDiagnostic = z.object({
   kind: z.enum([...LOCATOR_DIAGNOSTIC_KINDS, ...API_DIAGNOSTIC_KINDS]),
-  message: z.string(),
-  fixtureId: z.string().optional(),
-  zoneId: z.string().optional(),
+  message: text(),
+  fixtureId: text().optional(),
+  zoneId: text().optional(),
 });
 export type AnalysisDiagnostic = z.infer<typeof analysisDiagnostic>;
 export type AnalysisDiagnosticKind = AnalysisDiagnostic["kind"];
@@ -80,7 +81,7 @@ const READING_FLAGS = ["before-delay", "path-gap", "snapped", "over-range", "in-
 export const analysisReading = z.object({
   index: z.number(),
   /** The stored reading's id (readings are analysed in time order). */
-  readingId: z.string(),
+  readingId: text(),
   raw: point,
   corrected: point,
   t: z.number(),
@@ -94,7 +95,7 @@ export const analysisSummary = z.object({
   candidates: z.array(suspectSpot),
   background: z.object({ ppm: z.number() }),
   diagnostics: z.array(analysisDiagnostic),
-  assumptions: z.array(z.string()),
+  assumptions: z.array(text()),
   readings: z.array(analysisReading),
 });
 export type AnalysisSummary = z.infer<typeof analysisSummary>;
@@ -104,15 +105,15 @@ export const encodedField = z.object({
   height: z.number(),
   cellSize: z.number(),
   /** base64 of Float32 little-endian ppm per cell, row-major; NaN where unknown. */
-  values: z.string(),
+  values: text(),
   /** base64 of one byte per cell: confidence × 255. */
-  confidence: z.string(),
+  confidence: text(),
 });
 export type EncodedField = z.infer<typeof encodedField>;
 
 /** The answer of GET /api/sweeps/:id/analysis; the client parses it with this same schema. */
 export const analysisResponse = analysisSummary.extend({
-  sweepId: z.string(),
+  sweepId: text(),
   params: analysisParams,
   /** Revision of the readings this result was computed from … */
   readingsRevision: z.number(),
@@ -122,7 +123,7 @@ export const analysisResponse = analysisSummary.extend({
   stale: z.boolean(),
   /** A recompute is running (ask again to get it). */
   recomputing: z.boolean(),
-  computedAt: z.string(),
+  computedAt: text(),
   durationMs: z.number(),
   field: encodedField,
 });

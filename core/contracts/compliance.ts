@@ -129,10 +129,10 @@ export const systemRecords = z.object({
   }),
   /** The part's automatic-leak-detection requirement for this system (US Part 84), or null. */
   automaticLeakDetection: z
-    .object({ required: z.boolean(), dueOn: z.string().nullable(), reason: z.string(), source: z.string() })
+    .object({ required: z.boolean(), dueOn: text().nullable(), reason: text(), source: text() })
     .nullable(),
   /** How long the records are kept; `keptUntil` is set once the system is retired. */
-  retention: z.object({ years: z.number(), source: z.string(), keptUntil: z.string().nullable() }),
+  retention: z.object({ years: z.number(), source: text(), keptUntil: text().nullable() }),
   applicability: z.object({
     applies: z.boolean(),
     partId: text().nullable(),
@@ -244,12 +244,12 @@ export const digestSendResult = z.object({
 
 /** GET /api/compliance/readings: how the company's profile reads rules not confirmed in their text. */
 export const readingsResponse = z.object({
-  profileName: z.string(),
+  profileName: text(),
   readings: z.array(
     z.object({
-      text: z.string(),
+      text: text(),
       kind: z.enum(["profile-value", "product-reading"]),
-      decision: z.string().optional(),
+      decision: text().optional(),
     }),
   ),
 });

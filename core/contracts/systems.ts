@@ -91,9 +91,9 @@ export const system = z.object({
   fullChargeKg: z.number(),
   applianceType: applianceTypeSchema,
   automaticLeakDetection: z.boolean(),
-  inServiceOn: z.string(),
+  inServiceOn: text(),
   /** Set once the system left service; its records stay readable (never deleted). */
-  retired: z.object({ at: z.string(), reason: z.string() }).nullable(),
+  retired: z.object({ at: text(), reason: text() }).nullable(),
   refrigerant: refrigerantSummary,
   /** The usual cautions for this refrigerant, shown on the system form. */
   cautions: z.array(caution),
@@ -109,7 +109,7 @@ export const systemListQuery = z.object({
 });
 
 export const retireInput = z.object({
-  reason: z.string({ error: "must be text" }).trim().max(500, "must be at most 500 characters").default(""),
+  reason: text({ error: "must be text" }).trim().max(500, "must be at most 500 characters").default(""),
 });
 
 /** DELETE /api/systems/:id: deleted when it had no record, else retired with every record kept. */
@@ -133,7 +133,7 @@ export const revisionInput = z
   .object({
     effectiveFrom: isoDay,
     kind: z.enum(REVISION_KINDS, { error: `must be one of: ${REVISION_KINDS.join(", ")}` }),
-    reason: z.string({ error: "must be text" }).trim().min(1, "is required").max(500, "must be at most 500 characters"),
+    reason: text({ error: "must be text" }).trim().min(1, "is required").max(500, "must be at most 500 characters"),
     refrigerantId: systemFields.refrigerantId.optional(),
     fullCharge: chargeInput.optional(),
     applianceType: applianceTypeSchema.optional(),
@@ -158,16 +158,16 @@ export type RevisionInput = z.infer<typeof revisionInput>;
 
 export const systemRevision = z.object({
   id: idSchema,
-  effectiveFrom: z.string(),
+  effectiveFrom: text(),
   kind: z.enum(["first", ...REVISION_KINDS]),
-  refrigerantId: z.string(),
+  refrigerantId: text(),
   fullChargeKg: z.number(),
   applianceType: applianceTypeSchema,
   automaticLeakDetection: z.boolean(),
-  inServiceOn: z.string(),
-  reason: z.string(),
+  inServiceOn: text(),
+  reason: text(),
   /** Who recorded it; empty for the first revisions written from existing systems. */
-  by: z.string(),
-  recordedAt: z.string(),
+  by: text(),
+  recordedAt: text(),
 });
 export const systemRevisionList = z.object({ revisions: z.array(systemRevision) });

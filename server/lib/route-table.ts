@@ -28,7 +28,10 @@ type Tagged = {
 export function routeTable(app: Express, apiPrefix = "/api"): RouteEntry[] {
   const out: RouteEntry[] = [];
   const root = (app as unknown as { router: { stack: Layer[] } }).router.stack;
-  const api = root.find((l) => l.handle.stack && l.handle.stack.some((s) => s.route?.path === "/health"));
+  // The /api router is the one whose routers hold the session route (probes live outside it).
+  const holds = (stack: Layer[]): boolean =>
+    stack.some((s) => s.route?.path === "/auth/session" || (s.handle.stack !== undefined && holds(s.handle.stack)));
+  const api = root.find((l) => l.handle.stack && holds(l.handle.stack));
   if (!api) throw new Error("the /api router was not found");
   const visit = (stack: Layer[]) => {
     for (const layer of stack) {
