@@ -1,29 +1,25 @@
 import { Router } from "express";
-import { rateLimit } from "express-rate-limit";
 import type { AppContext } from "../../context";
 import { confirmSignUpInput, signUpInput } from "#core/contracts/signup";
+import { clientKey, takeAttempt, type AttemptLimit } from "../../lib/attempt-limiter";
 import { readAuth } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { startSession } from "../auth/auth.service";
 import { sessionInfo } from "../auth/session-info";
 import { confirmSignUp, requestSignUp } from "./signup.service";
 
+const HOUR_MS = 60 * 60 * 1000;
+// Each sign-up mails an address someone typed: a few an hour per client and per address, counted
+// in PostgreSQL so the limits hold across processes (docs/decisions/0021).
+const PER_CLIENT: AttemptLimit = { name: "sign-up:client", limit: 10, windowMs: HOUR_MS };
+const PER_ADDRESS: AttemptLimit = { name: "sign-up:email", limit: 3, windowMs: HOUR_MS };
+
 export function signupRouter(ctx: AppContext): Router {
   const router = Router();
-  // A few sign-ups an hour per client: each one sends a mail to an address someone typed.
-  const limiter = rateLimit({
-    windowMs: 60 * 60 * 1000,
-    limit: 10,
-    standardHeaders: "draft-8",
-    legacyHeaders: false,
-    handler: (_req, res) => {
-      res.status(429).json({
-        error: { code: "rate_limited", message: "Too many sign-ups from here. Wait an hour and try again." },
-      });
-    },
-  });
 
-  router.post("/signup", limiter, validate(signUpInput), async (req, res) => {
+  router.post("/signup", validate(signUpInput), async (req, res) => {
+    await takeAttempt(ctx, PER_CLIENT, clientKey(req), "sign-ups from here");
+    await takeAttempt(ctx, PER_ADDRESS, req.body.email, "sign-ups for this address");
     await requestSignUp(ctx, req.body);
     res.status(202).json({ ok: true });
   });

@@ -82,6 +82,15 @@ describe("company sign-up", () => {
     expect(signIn.status).toBe(200);
   });
 
+  it("limits sign-ups for one address to three an hour, with a clear wait", async () => {
+    const address = "busy@fairbrook.example";
+    for (let i = 0; i < 3; i++)
+      expect((await (await agentFor(t.app)).post("/api/signup", form(address))).status).toBe(202);
+    const fourth = await (await agentFor(t.app)).post("/api/signup", form(address));
+    expect(fourth.status).toBe(429);
+    expect(fourth.body.error.message).toMatch(/Too many sign-ups for this address\. Wait \d+ minutes? and try again\./);
+  });
+
   it("names each field that needs fixing", async () => {
     const res = await (await agentFor(t.app)).post("/api/signup", {
       ...form("not-an-address"),
