@@ -5,7 +5,7 @@ import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, expect, it } from "vitest";
 import { startOwnCluster, type OwnCluster } from "../helpers/own-cluster";
 import { faultFixture, type FaultFixture } from "../helpers/fault-fixture";
-import { describeStats, newStats, runSyncBurst, type BurstStats } from "../helpers/sync-burst";
+import { describeStats, startBurst, type BurstStats } from "../helpers/sync-burst";
 
 let cluster: OwnCluster;
 let f: FaultFixture;
@@ -55,26 +55,12 @@ function slowUpload(ids: string[], gapMs: number, onFirstHalf: () => void): Prom
 }
 
 async function burstThrough(stopApp: (stats: BurstStats) => Promise<void>) {
-  let stopping = false;
-  const stats = newStats();
-  const hardStop = Date.now() + 90_000;
-  const burst = runSyncBurst({
-    session: f.tech,
-    sweepId: f.sweepId,
-    startedAt: f.startedAt,
-    clients: 6,
-    batchSize: 25,
-    stop: () => stopping,
-    giveUpAt: () => hardStop,
-    stats,
-  });
+  const { stats, finish } = startBurst(f);
   await sleep(1_500);
   await stopApp(stats);
   await f.restart();
   await sleep(1_500);
-  stopping = true;
-  await burst;
-  return stats;
+  return finish();
 }
 
 async function expectExactlyOnce(stats: BurstStats, extra: string[] = []) {

@@ -3,7 +3,7 @@
 import { afterAll, beforeAll, expect, it } from "vitest";
 import { startOwnCluster, type OwnCluster } from "../helpers/own-cluster";
 import { faultFixture, type FaultFixture } from "../helpers/fault-fixture";
-import { describeStats, newStats, runSyncBurst } from "../helpers/sync-burst";
+import { describeStats, startBurst } from "../helpers/sync-burst";
 
 let cluster: OwnCluster;
 let f: FaultFixture;
@@ -34,19 +34,7 @@ it("rides through a database restart: 503 with Retry-After while it is away, eve
     status: 200,
     body: { ok: true, status: "ready", database: "up" },
   });
-  let stopping = false;
-  const stats = newStats();
-  const hardStop = Date.now() + 90_000;
-  const burst = runSyncBurst({
-    session: f.tech,
-    sweepId: f.sweepId,
-    startedAt: f.startedAt,
-    clients: 6,
-    batchSize: 25,
-    stop: () => stopping,
-    giveUpAt: () => hardStop,
-    stats,
-  });
+  const { stats, finish } = startBurst(f);
 
   await sleep(1_000);
   // An invitation sent around the outage is still delivered.
@@ -74,8 +62,7 @@ it("rides through a database restart: 503 with Retry-After while it is away, eve
   }
   const afterReturn = stats.acknowledged.size;
   await sleep(1_500);
-  stopping = true;
-  await burst;
+  await finish();
 
   const stored = await f.storedIds();
   const storedSet = new Set(stored);

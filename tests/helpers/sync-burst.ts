@@ -105,3 +105,30 @@ export function describeStats(s: BurstStats): string {
   const answers = [...s.answers].map(([k, v]) => `${k}×${v}`).join(" ");
   return `${s.sentIds.size} sent, ${s.acknowledged.size} acknowledged in ${s.batchesSent} batches (${s.attempts} requests: ${answers}), ${s.abandoned} abandoned`;
 }
+
+/**
+ * The fault tests' burst: six technicians' devices sending 25-reading batches until `finish()`,
+ * each batch given up after 90 s. `stats` fills as answers arrive; `finish()` waits for the last batch.
+ */
+export function startBurst(f: { tech: HttpSession; sweepId: string; startedAt: Date }) {
+  let stopping = false;
+  const stats = newStats();
+  const hardStop = Date.now() + 90_000;
+  const burst = runSyncBurst({
+    session: f.tech,
+    sweepId: f.sweepId,
+    startedAt: f.startedAt,
+    clients: 6,
+    batchSize: 25,
+    stop: () => stopping,
+    giveUpAt: () => hardStop,
+    stats,
+  });
+  return {
+    stats,
+    finish(): Promise<BurstStats> {
+      stopping = true;
+      return burst;
+    },
+  };
+}
