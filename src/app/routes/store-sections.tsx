@@ -40,6 +40,11 @@ export const STORE_SECTIONS: readonly { id: string; Component: ComponentType<Sto
       />
     ),
   },
-  { id: "sweeps", Component: ({ store }) => <StoreSweepsSection storeId={store.id} timeZone={store.timeZone} /> },
+  {
+    id: "sweeps",
+    Component: ({ store, role }) => (
+      <StoreSweepsSection storeId={store.id} timeZone={store.timeZone} canCompare={can(role, "sweeps.read")} />
+    ),
+  },
   { id: "records", Component: ({ store }) => <StoreRecordsSection storeId={store.id} /> },
 ];
