@@ -35,7 +35,10 @@ describe("your account on the profile page", () => {
     type("New password", "a-new-long-password");
     type("New password again", "a-new-long-password");
     fireEvent.click(within(form).getByRole("button", { name: "Change password" }));
-    expect(await within(form).findByText(/does not match your current password/)).toBeVisible();
+    expect(await within(form).findByRole("alert")).toHaveTextContent(
+      "Please correct: Current password does not match your current password.",
+    );
+    expect(within(form).getByLabelText("Current password")).toHaveAttribute("aria-invalid", "true");
 
     type("Current password", "right-old-password");
     fireEvent.click(within(form).getByRole("button", { name: "Change password" }));

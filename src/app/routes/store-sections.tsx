@@ -25,6 +25,7 @@ export const STORE_SECTIONS: readonly { id: string; Component: ComponentType<Sto
     Component: ({ store, role, units }) => (
       <PlanSection
         storeId={store.id}
+        timeZone={store.timeZone}
         canEdit={can(role, "plans.edit") && !store.archivedAt}
         preference={units.length}
       />
