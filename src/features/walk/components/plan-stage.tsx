@@ -359,7 +359,7 @@ function ReadingsShape({
               : "#ffffff";
           c.fill();
           c.lineWidth = (p.id === selectedId ? 4 : 2) / scale;
-          c.setLineDash(p.state === "rejected" ? [3 / scale, 2 / scale] : []);
+          c.setLineDash(p.sync.kind === "refused" ? [3 / scale, 2 / scale] : []);
           c.strokeStyle = p.id === selectedId ? "#d98e04" : "#1c2529";
           c.stroke();
         }

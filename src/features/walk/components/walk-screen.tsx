@@ -17,6 +17,7 @@ import { latestLagHint } from "../model/lag-hint";
 import type { LocalReading } from "../model/local-types";
 import { enteredRoom, roomSystemIds } from "../model/room-entry";
 import { walkModelFor } from "../model/walk-model";
+import { submitQueued, sweepStateText } from "../model/sweep-sync";
 import { editedReading, walkStep, type WalkEvent, type WalkMode } from "../model/walk-mode";
 import { CautionDialog } from "./caution-dialog";
 import { LagHintBanner } from "./lag-hint-banner";
@@ -75,7 +76,7 @@ export function WalkScreen({
   // Kept identical while only the open reading changes (typing), so the lag hint is not redone per key.
   const committedRef = useRef<LocalReading[]>([]);
   const committed = useMemo(() => {
-    const next = walk.readings.filter((r) => !r.draft);
+    const next = walk.readings.filter((r) => r.sync.kind !== "draft");
     const prev = committedRef.current;
     if (prev.length === next.length && next.every((r, i) => r === prev[i])) return prev;
     committedRef.current = next;
@@ -143,7 +144,7 @@ export function WalkScreen({
     }
     if (effect.kind !== "take-reading") return;
     const open = draftRef.current;
-    const before = readingsRef.current.filter((r) => !r.draft || r.id === open);
+    const before = readingsRef.current.filter((r) => r.sync.kind !== "draft" || r.id === open);
     const previous = before.length ? before[before.length - 1] : null;
     const room = enteredRoom(fixtures, previous, { x, y });
     if (room) {
@@ -214,9 +215,9 @@ export function WalkScreen({
           <p className="min-w-0 flex-1 text-center leading-tight">
             <span className="block truncate font-bold">{storePack.data?.store.name ?? "Sweep"}</span>
             <span className="block truncate text-sm text-muted" data-testid="walk-count">
-              {countOf(all.length, "reading")}
-              {sweep.status !== "in-progress" ? ` · ${sweep.status}` : sweep.submitPending ? " · submitting" : ""} ·{" "}
-              {sweep.detectorName}
+              {[countOf(all.length, "reading"), sweepStateText(sweep.status, sweep.sync), sweep.detectorName]
+                .filter(Boolean)
+                .join(" · ")}
             </span>
           </p>
           {contrastToggle}
@@ -224,9 +225,9 @@ export function WalkScreen({
         <SweepWarnings warnings={sweep.warnings}>
           <SyncBanner status={sync} onShowRejected={() => setDialog("list")} />
         </SweepWarnings>
-        {sweep.rejected ? (
+        {sweep.sync.kind === "refused" ? (
           <Alert tone="error" title="The server refused this sweep">
-            {Object.entries(sweep.rejected)
+            {Object.entries(sweep.sync.reasons)
               .map(([k, m]) => (k ? `${k} ${m}` : m))
               .join("; ")}{" "}
             Its readings stay on this device.
@@ -311,7 +312,7 @@ export function WalkScreen({
       <WalkTools
         readOnly={readOnly}
         canUndo={all.length > 0}
-        canSubmit={sweep.status === "in-progress" && !sweep.submitPending}
+        canSubmit={sweep.status === "in-progress" && !submitQueued(sweep.sync)}
         leakMode={mode.kind === "placing-leak"}
         onUndo={() => undo()}
         onList={() => setDialog("list")}
