@@ -13,7 +13,7 @@ import { useQueuedFindings } from "../hooks/use-queued-findings";
 import { useOpenReading } from "../hooks/use-open-reading";
 import { useWalk } from "../hooks/use-walk";
 import { fixtureAt, unsampledFixtures } from "../model/coverage";
-import { latestLagHint } from "../model/lag-hint";
+import { peakLagHint } from "../model/lag-hint";
 import type { LocalReading } from "../model/local-types";
 import { enteredRoom, roomSystemIds } from "../model/room-entry";
 import { walkModelFor } from "../model/walk-model";
@@ -108,7 +108,7 @@ export function WalkScreen({
   }, [planPack.data]);
   const hint = useMemo(
     () =>
-      sweep ? latestLagHint(committed, sweep.transportDelayS, sweep.timeConstantS, sweep.alarmPpm, walkModel) : null,
+      sweep ? peakLagHint(committed, sweep.transportDelayS, sweep.timeConstantS, sweep.alarmPpm, walkModel) : null,
     [committed, sweep, walkModel],
   );
   const recent = useMemo(() => {
@@ -200,6 +200,12 @@ export function WalkScreen({
 
   const keypadFor = draft ?? editing;
   const showHint = hint && hint.index !== dismissedAlarm ? hint : null;
+  const peak = showHint ? committed[showHint.index] : undefined;
+  // Where the peak's air was sampled (the lag-corrected point), else where it was tapped.
+  const peakFixture = showHint
+    ? (fixtureAt(fixtures, showHint.x, showHint.y) ?? (peak ? fixtureAt(fixtures, peak.x, peak.y) : null))
+    : null;
+  const peakPlace = peakFixture ? peakFixture.label || FIXTURE_KIND_NAMES[peakFixture.kind] : null;
 
   return (
     <div className="fixed inset-0 z-30 flex flex-col bg-paper" data-testid="walk-screen">
@@ -262,7 +268,10 @@ export function WalkScreen({
         {showHint ? (
           <LagHintBanner
             hint={showHint}
-            ppm={committed[showHint.index]?.ppm ?? 0}
+            ppm={peak?.ppm ?? 0}
+            atLeast={peak?.atLeast ?? false}
+            readingNumber={peak ? all.indexOf(peak) + 1 : 0}
+            place={peakPlace}
             lengthUnit={lengthUnit}
             onDismiss={() => setDismissedAlarm(showHint.index)}
           />
