@@ -1,7 +1,8 @@
 import { findingCounts } from "./finding-queue";
 import type { WalkDb } from "./walk-db";
 import type { LocalReading, LocalSweep, ReadingValues } from "./local-types";
-import { afterRemove, afterValuesChange, DRAFT, isDeleted, QUEUED_NEW, QUEUED_RANGE } from "./reading-sync";
+import { afterRemove, afterValuesChange, DRAFT, isDeleted, isQueued, QUEUED_NEW, QUEUED_RANGE } from "./reading-sync";
+import type { LocalSweepSummary } from "./resume-list";
 import { sweepWaits } from "./sweep-sync";
 
 /**
@@ -112,6 +113,23 @@ export async function sweepReadings(db: WalkDb, sweepId: string): Promise<LocalR
   const range = IDBKeyRange.bound([sweepId, -Infinity], [sweepId, Infinity]);
   const all = await db.getAllFromIndex("readings", "bySweepSeq", range);
   return all.filter((r) => !isDeleted(r.sync));
+}
+
+/** Every sweep on the device; for those in progress, how many readings they hold and how many wait. */
+export async function sweepSummaries(db: WalkDb): Promise<LocalSweepSummary[]> {
+  const out: LocalSweepSummary[] = [];
+  for (const sweep of await db.getAll("sweeps")) {
+    let readings = 0;
+    let waiting = 0;
+    if (sweep.status === "in-progress")
+      for (const r of await db.getAllFromIndex("readings", "bySweep", sweep.id)) {
+        if (isDeleted(r.sync)) continue;
+        readings++;
+        if (r.sync.kind === "draft" || isQueued(r.sync)) waiting++;
+      }
+    out.push({ sweep, readings, waiting });
+  }
+  return out;
 }
 
 /** What the banner counts: changes (readings, sweeps, findings) not yet on the server; rejected ones apart. */

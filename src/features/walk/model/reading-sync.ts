@@ -19,8 +19,7 @@ export type ReadingSync =
 
 export type ReadingSyncKind = ReadingSync["kind"];
 
-/** The kinds the queue sends; they share a prefix so one key range of the index finds them all. */
-export const QUEUED_KINDS = ["queued-new", "queued-edit", "queued-delete"] as const satisfies ReadingSyncKind[];
+/** The kinds the queue sends share the prefix "queued-", so one key range of the index finds them all. */
 export const QUEUED_RANGE: [string, string] = ["queued-", "queued-\uffff"];
 
 export const DRAFT: ReadingSync = { kind: "draft" };
