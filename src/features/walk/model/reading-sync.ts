@@ -17,8 +17,6 @@ export type ReadingSync =
   /** The server refused the change, with a reason per field; kept on the device for fixing. */
   | { kind: "refused"; change: "new" | "edit" | "delete"; reasons: Record<string, string>; editedAt: string | null };
 
-export type ReadingSyncKind = ReadingSync["kind"];
-
 /** The kinds the queue sends share the prefix "queued-", so one key range of the index finds them all. */
 export const QUEUED_RANGE: [string, string] = ["queued-", "queued-\uffff"];
 
