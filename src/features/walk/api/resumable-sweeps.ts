@@ -46,5 +46,7 @@ export function useResumableSweeps(userId: string, storeId: string | null, enabl
     retry: false,
     staleTime: 0,
     refetchOnMount: "always",
+    // The device's list must show offline too: the query does not wait for a connection.
+    networkMode: "always",
   });
 }

@@ -12,6 +12,7 @@ export function LagHintBanner({
   readingNumber,
   place,
   lengthUnit = "m",
+  compact = false,
   onDismiss,
 }: {
   hint: LagHint;
@@ -22,6 +23,8 @@ export function LagHintBanner({
   /** The fixture where the peak's air was sampled, when it is at one. */
   place: string | null;
   lengthUnit?: LengthPreference;
+  /** One line (the keypad is open and the plan needs the room): the peak and its place only. */
+  compact?: boolean;
   onDismiss(): void;
 }) {
   // Feet to the nearest inch: a walking distance, not a measurement.
@@ -33,7 +36,7 @@ export function LagHintBanner({
       data-testid="lag-hint"
       data-peak-index={hint.index}
     >
-      <span>
+      <span className={compact ? "line-clamp-2" : undefined}>
         <strong className="text-base">
           Alarm: {atLeast ? "≥ " : ""}
           {ppm} ppm
@@ -41,9 +44,11 @@ export function LagHintBanner({
         <span data-testid="lag-hint-peak">
           peak so far (#{readingNumber}){place ? `, sampled at ${place}` : ""}.
         </span>{" "}
-        {hint.beforeDelay
-          ? "The detector had not yet drawn air from beyond the first reading: re-check around the start."
-          : `Its air was about ${len(hint.backM)} back along your path (yellow diamond): re-check at about ${len(0.6)} spacing (rings).`}
+        {compact
+          ? null
+          : hint.beforeDelay
+            ? "The detector had not yet drawn air from beyond the first reading: re-check around the start."
+            : `Its air was about ${len(hint.backM)} back along your path (yellow diamond): re-check at about ${len(0.6)} spacing (rings).`}
       </span>
       <button type="button" className="min-h-12 shrink-0 font-bold underline" onClick={onDismiss}>
         OK

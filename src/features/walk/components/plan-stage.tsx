@@ -115,10 +115,10 @@ export function PlanStage(props: PlanStageProps) {
   useEffect(() => {
     if (w <= 0 || h <= 0) return;
     const v = viewRef.current;
-    // A banner coming or going resizes the box: a plan still at its whole-plan fit fits again, so
-    // none of it hides. With a reading open (the keypad took the room) the plan stays put under the
-    // finger and only slides to keep that reading in sight.
-    if (!v || (fitted.current && !focusRef.current)) fit();
+    // A banner or the keypad coming or going resizes the box. A plan still at its whole-plan fit
+    // fits again, so none of it hides; one zoomed in by hand stays put under the finger and only
+    // slides to keep the open reading in sight.
+    if (!v || fitted.current) fit();
     else follow(v);
     // the size is what changed
   }, [w, h, props.widthM, props.heightM]);

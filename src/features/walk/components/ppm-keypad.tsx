@@ -172,7 +172,7 @@ export function PpmKeypad(props: PpmKeypadProps) {
         </div>
       ) : null}
       {/* Three rows of keys, six across (each still at least 48 px wide on a 360 px phone): the plan
-          keeps about half the screen while a value is typed (docs/decisions/0091). */}
+          keeps about a third of a phone screen while a value is typed (docs/decisions/0091). */}
       <div className="grid grid-cols-6 gap-2">
         {keys(["1", "2", "3", "4", "5"])}
         <button

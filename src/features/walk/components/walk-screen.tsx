@@ -273,6 +273,7 @@ export function WalkScreen({
             readingNumber={peak ? all.indexOf(peak) + 1 : 0}
             place={peakPlace}
             lengthUnit={lengthUnit}
+            compact={keypadFor !== null}
             onDismiss={() => setDismissedAlarm(showHint.index)}
           />
         ) : null}
