@@ -194,7 +194,11 @@ it("on a phone: readings in 2-4 taps, the peak in the alarm banner, a plan that 
   await taps.tap(page.getByRole("button", { name: "Submit sweep" }));
   tally["submit"] = taps.take();
   // Once the server has the submit, the header says so (not "submitting").
-  await page.getByTestId("walk-count").filter({ hasText: "submitted, on the server" }).waitFor();
+  await page
+    .getByTestId("walk-count")
+    .filter({ hasText: /^7 readings · submitted · / })
+    .waitFor();
+  await page.getByText("Sweep submitted: the server has it.").waitFor();
   const [row] = await suite.server.ctx.db.select().from(sweeps).where(eq(sweeps.id, sweepId));
   expect(row.status).toBe("submitted");
   await page.screenshot({ path: path.join(SCREENS, "walk-phone-submitted.png") });

@@ -95,7 +95,7 @@ export function PlanStage(props: PlanStageProps) {
   const fitted = useRef(true);
   const fit = () => {
     fitted.current = true;
-    setView(fitView(props.widthM, props.heightM, w, h, 12, WALK_ZOOM));
+    setView(fitClearOfControls(props.widthM, props.heightM, w, h));
   };
   const byHand = (v: View) => {
     fitted.current = false;
@@ -266,6 +266,20 @@ export function PlanStage(props: PlanStageProps) {
       </div>
     </div>
   );
+}
+
+/** The Key and + buttons sit in the plan's top corners: 48 px and a gap. */
+const CONTROLS_TOP_PX = 60;
+
+/**
+ * The whole plan, as large as fits; when the box has the height to spare, its top edge is moved
+ * below the buttons in the corners so they cover none of it.
+ */
+function fitClearOfControls(widthM: number, heightM: number, w: number, h: number): View {
+  const v = fitView(widthM, heightM, w, h, 12, WALK_ZOOM);
+  const planH = heightM * v.zoom;
+  if (v.panY < CONTROLS_TOP_PX && CONTROLS_TOP_PX + planH <= h - 12) return { ...v, panY: CONTROLS_TOP_PX };
+  return v;
 }
 
 const ZOOM =

@@ -31,6 +31,8 @@ import { SweepWarnings } from "./sweep-warnings";
 import { SyncBanner } from "./sync-banner";
 import { WalkTools } from "./walk-tools";
 
+const SUBMITTED_NOTICE = "Sweep submitted on this device. It goes to the server as soon as every reading is uploaded.";
+
 /** The sweep capture screen: the plan fills the screen; one tap drops a reading there. */
 export function WalkScreen({
   storeId,
@@ -190,7 +192,7 @@ export function WalkScreen({
     setDialog(null);
     await commitOpen();
     await walk.submit();
-    setNotice("Sweep submitted. It goes to the server as soon as every reading is uploaded.");
+    setNotice(SUBMITTED_NOTICE);
   });
 
   const leave = serial(async () => {
@@ -259,7 +261,11 @@ export function WalkScreen({
         ) : null}
         {notice ? (
           <Alert tone="success">
-            <span>{notice} </span>
+            <span>
+              {notice === SUBMITTED_NOTICE && sweep.status !== "in-progress"
+                ? "Sweep submitted: the server has it."
+                : notice}{" "}
+            </span>
             <button type="button" className="min-h-12 underline" onClick={() => setNotice(null)}>
               Dismiss
             </button>

@@ -123,8 +123,8 @@ describe("a sweep's sync state", () => {
     });
   });
 
-  it("says submitted and on the server once the server has the submit, never still submitting", () => {
-    expect(sweepStateText("submitted", { kind: "on-server" })).toBe("submitted, on the server");
+  it("says submitted once the server has the submit, never still submitting", () => {
+    expect(sweepStateText("submitted", { kind: "on-server" })).toBe("submitted");
     expect(sweepStateText("in-progress", { kind: "on-server" })).toBe("");
   });
 

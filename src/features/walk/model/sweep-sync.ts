@@ -56,10 +56,13 @@ export function sweepSyncFromLegacy(s: LegacySweepFlags): SweepSync {
   return thenSubmit ? { kind: "queued-submit" } : SWEEP_ON_SERVER;
 }
 
-/** What the Walk screen's header says about the sweep. */
+/**
+ * What the Walk screen's header says about the sweep: "submitted" only once the server has the
+ * submit (the device sets that status when the server confirms it); until then, that it waits.
+ */
 export function sweepStateText(status: "in-progress" | "submitted" | "reviewed", s: SweepSync): string {
   if (status === "reviewed") return "reviewed";
-  if (status === "submitted") return "submitted, on the server";
+  if (status === "submitted") return "submitted";
   if (submitQueued(s)) return "submit waits to upload";
   return "";
 }
