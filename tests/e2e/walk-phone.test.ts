@@ -244,6 +244,8 @@ it("after a reload with no connection, lengths stay in the member's feet and inc
     .getByTestId("walk-count")
     .filter({ hasText: /^2 readings/ })
     .waitFor();
+  // The store's name comes from the device's copy of the store, without waiting on the network.
+  await page.locator('[data-testid="walk-screen"] header').getByText(suite.co.store.name).waitFor();
   await expect(banner.textContent()).resolves.toMatch(/2 ft 0 in spacing/);
   expect(await banner.textContent()).not.toMatch(/\d m\b/);
   await page.screenshot({ path: path.join(SCREENS, "walk-phone-offline-reload-ft-in.png") });
