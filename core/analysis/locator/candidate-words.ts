@@ -1,24 +1,28 @@
-import type { Fixture, RiskPoint } from "../../contracts/locator-input";
+import type { LocatorFixture, LocatorRiskPoint } from "../../contracts/locator-input";
 import type { Nearest } from "./nearest-features";
 
 // Plain-words reason and next check for a suspect spot, in the words of docs/product.md.
 
-const FIXTURE_WORDS: Record<Fixture["kind"], string> = {
+const FIXTURE_WORDS: Record<LocatorFixture["kind"], string> = {
   "open-case": "open case",
   "island-case": "island case",
   "door-case": "glass-door case",
   "walk-in": "walk-in",
   "machine-room": "machine room",
 };
-const RISK_WORDS: Record<RiskPoint["kind"], string> = { "line-set": "line-set drop", valve: "valve", coil: "coil" };
+const RISK_WORDS: Record<LocatorRiskPoint["kind"], string> = {
+  "line-set": "line-set drop",
+  valve: "valve",
+  coil: "coil",
+};
 
 export interface CandidateFacts {
   alternate: boolean;
   supportCount: number;
   peakPpm: number;
   backgroundPpm: number;
-  fixture: Nearest<Fixture> | null;
-  riskPoint: Nearest<RiskPoint> | null;
+  fixture: Nearest<LocatorFixture> | null;
+  riskPoint: Nearest<LocatorRiskPoint> | null;
   oneSided: boolean;
   radius: number;
 }

@@ -1,4 +1,4 @@
-import type { BackgroundZone, Fixture } from "../../contracts/locator-input";
+import type { LocatorBackgroundZone, LocatorFixture } from "../../contracts/locator-input";
 import type { Diagnostic } from "../../contracts/locator-output";
 import { pointInPolygon } from "../geometry/point-in-polygon";
 import { distanceToPolygonEdge } from "../geometry/segments";
@@ -18,7 +18,7 @@ function quantile(sorted: number[], p: number): number {
  * excess (common practice, no published source).
  */
 export function fansMixing(
-  fixture: Fixture,
+  fixture: LocatorFixture,
   xs: Float64Array,
   ys: Float64Array,
   y: Float64Array,
@@ -44,7 +44,7 @@ export function fansMixing(
   };
 }
 
-export function benignSource(zone: BackgroundZone, explained: number, peak: number): Diagnostic | null {
+export function benignSource(zone: LocatorBackgroundZone, explained: number, peak: number): Diagnostic | null {
   if (explained === 0) return null;
   const what = zone.note ? ` (${zone.note})` : "";
   return {

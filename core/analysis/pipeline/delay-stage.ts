@@ -1,4 +1,4 @@
-import type { Instrument, Reading } from "../../contracts/locator-input";
+import type { LocatorInstrument, LocatorReading } from "../../contracts/locator-input";
 import type { DelayFacts, Diagnostic } from "../../contracts/locator-output";
 import type { PlanGrid } from "../grid/plan-grid";
 import { checkDelay, type DelayCheck } from "../lag/delay-check";
@@ -11,8 +11,8 @@ import { estimateBackground } from "../locator/background";
  * benign-source zones are known).
  */
 export function delayStage(
-  readings: readonly Reading[],
-  instrument: Pick<Instrument, "transportDelayS" | "timeConstantS">,
+  readings: readonly LocatorReading[],
+  instrument: Pick<LocatorInstrument, "transportDelayS" | "timeConstantS">,
   grid: PlanGrid,
   walkSpeedMps: number,
 ): DelayCheck {
