@@ -43,7 +43,10 @@ export function delayCheckWords(d: DelayFacts, ctx: WordsContext): DelayCheckWor
   if (!d.supported) {
     return {
       headline: `Readings agree with ${stated} delay.`,
-      detail: `Passes over the same spots agree best at ${est}, not clearly better than ${stated}, so the spots use ${stated}.`,
+      detail:
+        estimated === delayOfShift(d.statedS, ctx.timeConstantS)
+          ? "Passes over the same spots agree best at that delay."
+          : `Passes over the same spots agree best at ${est}, not clearly better than ${stated}, so the spots use ${stated}.`,
       suggestedDelayS: null,
     };
   }
