@@ -43,10 +43,11 @@ export function assumptionWords(
     ctx.length === "ft-in"
       ? `${formatShort(a.temperatureC, ctx.numbers)} °C (${formatShort((a.temperatureC * 9) / 5 + 32, ctx.numbers)} °F)`
       : `${formatShort(a.temperatureC, ctx.numbers)} °C`;
+  const anySystem = spots.some((s) => s.refrigerant.source === "system");
   const weighed =
-    spots.length > 0
-      ? ` The mass is that of the refrigerant of the nearest fixture's system: ${refrigerantWords(spots, ctx)}.`
-      : "";
+    spots.length === 0
+      ? ""
+      : ` The mass is that of ${anySystem ? "the refrigerant of the nearest fixture's system: " : ""}${refrigerantWords(spots, ctx)}.`;
   return [
     `Readings moved back along the walk by the transport delay plus the sensor time constant (${formatShort(a.shiftS, ctx.numbers)} s).`,
     `Strength per year assumes the store air is well mixed over ${lengthWords(a.mixingHeightM, ctx.length, ctx.numbers)} height with ${formatShort(a.airChangesPerH, ctx.numbers)} air changes per hour, ` +
