@@ -147,6 +147,26 @@ describe("the locator's words", () => {
   });
 });
 
+describe("cautions at a spot", () => {
+  it("warns of a flammable or high-pressure refrigerant and of a closed room, and of nothing for a guessed blend", () => {
+    const propane = {
+      ...spot,
+      refrigerant: spotRefrigerant(CASE, () => ({ systemName: "Island", refrigerantId: "R-290" })),
+    };
+    expect(presentAnalysis(facts([propane]), reader("m", "kg")).spots[0].cautions[0]).toMatch(/flammable/);
+    const co2InWalkIn = {
+      ...spot,
+      reason: { ...spot.reason, fixture: { id: CASE, kind: "walk-in" as const, distanceM: 0 } },
+      refrigerant: spotRefrigerant(CASE, () => ({ systemName: "CO2 rack", refrigerantId: "R-744" })),
+    };
+    const co2 = presentAnalysis(facts([co2InWalkIn]), reader("m", "kg")).spots[0].cautions.join(" ");
+    expect(co2).toMatch(/very high pressure/);
+    expect(co2).toMatch(/displaces oxygen\. In this walk-in/);
+    const guessed = { ...spot, refrigerant: spotRefrigerant(CASE, () => null) };
+    expect(presentAnalysis(facts([guessed]), reader("m", "kg")).spots[0].cautions).toEqual([]);
+  });
+});
+
 describe("molar masses the strength is weighed with", () => {
   it("agree with published molar masses of the blends", () => {
     // R-404A 97.6038 g/mol: NIST REFPROP pseudo-pure fluid file R404A (Lemmon, Int. J. Thermophys. 24(4), 2003).

@@ -7,6 +7,8 @@ import { diagnosticWords, noSpotWords } from "./diagnostic-words";
 import type { NumberStyle } from "./number-words";
 import { nextCheckWords, spotReasonWords, strengthWords, whereWords } from "./spot-words";
 import type { WordsContext } from "./words-context";
+import { findRefrigerant } from "../refrigerants/catalogue";
+import { cautionsFor, type CautionId, type CautionPlace } from "../safety/cautions";
 
 /**
  * The one presenter of an analysis: the field map, the sweep report PDF and the report e-mail all word
@@ -23,6 +25,8 @@ export interface PresentedSpot {
   strength: string;
   /** The nearest risk point's name, or "none near". */
   riskPoint: string;
+  /** What can hurt someone checking this spot: its refrigerant (flammable, CO2, ammonia) and a closed room. */
+  cautions: string[];
 }
 
 export interface PresentedDiagnostic {
@@ -78,6 +82,7 @@ export function presentAnalysis(a: AnalysisFacts, reader: ReaderSettings): Prese
       nextCheck: nextCheckWords(c.nextChecks, ctx),
       strength: strengthWords(c, c.refrigerant, ctx),
       riskPoint: (c.riskPointId && ctx.name(c.riskPointId)) || "none near",
+      cautions: spotCautions(c),
     })),
     noSpot: a.candidates.length === 0 ? noSpotWords(a.diagnostics, ctx) : null,
     diagnostics: a.diagnostics.map((d) => ({
@@ -87,4 +92,26 @@ export function presentAnalysis(a: AnalysisFacts, reader: ReaderSettings): Prese
     assumptions: assumptionWords(a.assumptions, a.candidates, ctx),
     delay: delayCheckWords(a.delay, ctx),
   };
+}
+
+const SPOT_WARNINGS = new Set<CautionId>([
+  "flammable",
+  "high-pressure-co2",
+  "toxic-ammonia",
+  "co2-exposure",
+  "oxygen-displacement",
+]);
+const PLACE: Partial<Record<string, CautionPlace>> = { "walk-in": "walk-in", "machine-room": "machine-room" };
+
+/**
+ * The warnings for a spot (core/domain/safety/cautions.ts): a flammable, toxic or high-pressure refrigerant
+ * of its system, and oxygen displacement when the spot is in a walk-in or machine room. The practice and
+ * law notices (nitrogen for pressure tests, certification, codes) are on the report's safety section; the default blend is not the system's, so it adds none.
+ */
+function spotCautions(c: SuspectSpotWithRefrigerant): string[] {
+  const refrigerant = c.refrigerant.source === "system" ? findRefrigerant(c.refrigerant.refrigerantId) : undefined;
+  const place = c.reason.fixture?.distanceM === 0 ? PLACE[c.reason.fixture.kind] : undefined;
+  return cautionsFor({ refrigerant, place: place ?? "sales-floor" })
+    .filter((k) => SPOT_WARNINGS.has(k.id))
+    .map((k) => k.text);
 }

@@ -45,6 +45,13 @@ export function SuspectList(p: SuspectListProps) {
             <p className="mt-1 text-sm">
               <span className="font-bold">Next check:</span> {w.nextCheck}
             </p>
+            {w.cautions.length > 0 ? (
+              <ul className="mt-1 space-y-1 text-sm text-danger" aria-label={`Cautions at spot ${s.rank}`}>
+                {w.cautions.map((c) => (
+                  <li key={c}>⚠ {c}</li>
+                ))}
+              </ul>
+            ) : null}
             <dl className="mt-1 grid grid-cols-[auto_1fr] gap-x-3 text-sm text-muted">
               <dt>Where</dt>
               <dd>{w.where}</dd>
