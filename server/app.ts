@@ -31,8 +31,9 @@ import { todayRouter } from "./api/compliance/today.router";
 import { exportsRouter } from "./api/exports/exports.router";
 import { healthRouter } from "./api/health/health.router";
 import { jobsRouter } from "./api/jobs/jobs.router";
+import { APP_ROOT } from "./paths";
 
-const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
+const CLIENT_DIR = path.join(APP_ROOT, "dist/client");
 
 /** Builds the Express app without listening, so tests drive it with supertest. */
 export function createApp(ctx: AppContext): Express {
