@@ -32,6 +32,8 @@ export interface JobQueueOptions {
   pollingIntervalS: number;
   /** How often pg-boss looks for expired jobs (a crashed worker's) and archives old ones. */
   maintenanceIntervalS: number;
+  /** Expiry is the time limit plus this: our own timer fails a live try first; expiry is for a worker that died. */
+  expiryMarginS: number;
 }
 
 /** A reason short and safe enough for the owner's screen. */
@@ -42,7 +44,7 @@ function reasonOf(err: unknown): string {
 class TimeLimitError extends Error {}
 
 export function createJobQueue(db: Db, logger: Logger, options: Partial<JobQueueOptions> = {}) {
-  const opts: JobQueueOptions = { pollingIntervalS: 2, maintenanceIntervalS: 60, ...options };
+  const opts: JobQueueOptions = { pollingIntervalS: 2, maintenanceIntervalS: 60, expiryMarginS: 30, ...options };
   let boss: PgBoss | null = null;
   const defs = new Map<string, JobDefinition>();
   const loops: Promise<void>[] = [];
@@ -154,8 +156,7 @@ export function createJobQueue(db: Db, logger: Logger, options: Partial<JobQueue
           retryLimit: def.retryLimit,
           retryDelay: def.retryDelayS,
           retryBackoff: true,
-          // A little over the time limit: our own timer fails the try first; expiry is for a worker that died.
-          expireInSeconds: def.timeLimitS + 30,
+          expireInSeconds: def.timeLimitS + opts.expiryMarginS,
           deadLetter: JOBS_DEAD_LETTER,
         };
         if (await b.getQueue(name)) await b.updateQueue(name, queue);
