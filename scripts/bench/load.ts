@@ -246,12 +246,13 @@ function report(name: string, s: PhaseStats, stored: Awaited<ReturnType<typeof c
     `${name}: ${s.requests} requests (${s.resends} re-sends) in ${seconds.toFixed(1)} s, ${readingsPerS.toFixed(0)} readings/s sent; ` +
       `p50 ${pct(s.latencies, 50).toFixed(1)} ms, p99 ${pct(s.latencies, 99).toFixed(1)} ms, max ${Math.max(...s.latencies).toFixed(0)} ms; errors: ${errors}`,
   );
+  // Exactly once: every acknowledged reading stored once, nothing stored twice, nothing unknown. A
+  // reading stored whose answer was lost (an error above) is fine: the device's re-send is a duplicate.
+  const once = stored.duplicates === 0 && stored.missing === 0 && stored.strangers === 0;
   console.log(
-    `  stored ${stored.rows} rows for ${s.acknowledged.size} acknowledged readings (${s.sent.size} sent): ` +
-      `${stored.duplicates} duplicates, ${stored.missing} missing, ${stored.strangers} unknown -> ` +
-      (stored.duplicates === 0 && stored.missing === 0 && stored.strangers === 0 && stored.rows === s.acknowledged.size
-        ? "exactly once"
-        : "NOT exactly once"),
+    `  stored ${stored.rows} rows for ${s.acknowledged.size} acknowledged readings (${s.sent.size} sent, ` +
+      `${stored.rows - s.acknowledged.size} stored without an answer): ${stored.duplicates} duplicates, ` +
+      `${stored.missing} acknowledged but missing, ${stored.strangers} unknown -> ${once ? "exactly once" : "NOT exactly once"}`,
   );
 }
 
