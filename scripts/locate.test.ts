@@ -9,7 +9,7 @@ const dir = mkdtempSync(join(tmpdir(), "locate-cli-"));
 function run(content: unknown, ...flags: string[]) {
   const file = join(dir, `in-${Math.random().toString(36).slice(2)}.json`);
   writeFileSync(file, typeof content === "string" ? content : JSON.stringify(content));
-  return spawnSync(process.execPath, ["--import", "tsx", "scripts/locate.ts", file, ...flags], { encoding: "utf8" });
+  return spawnSync(process.execPath, ["scripts/locate-run.mjs", file, ...flags], { encoding: "utf8" });
 }
 
 const input = {

@@ -36,16 +36,19 @@ trap 'stop_all; exit 143' TERM
 trap 'stop_all; exit 130' INT
 ensure_database "$PG_PORT" plumeline
 
-# The start-script test sets PLUMELINE_BUILD_CLIENT=no: the test command has built it already.
+# The start-script test sets PLUMELINE_BUILD_CLIENT=no: the test command has built the client and
+# the server already (and other tests may be running that build).
 if [ "${PLUMELINE_BUILD_CLIENT:-yes}" = yes ]; then
-  log "building the client..."
+  log "building the client and the server..."
   npx vite build --logLevel error
+  node scripts/build.mjs
 fi
 
 export DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/plumeline"
 export NODE_ENV=production
-# node itself (not npx) so the pid we signal is the app's: npx would not pass the TERM on.
-node --import tsx server/index.ts &
+# The production build (dist/server, docs/decisions/0086), no TypeScript loader. node itself (not
+# npx) so the pid we signal is the app's: npx would not pass the TERM on.
+node --enable-source-maps dist/server/index.js &
 server_pid=$!
 # `wait` returns early when a trapped signal arrives; the trap then stops everything in order.
 wait "$server_pid" || true

@@ -24,8 +24,10 @@ PG_EXTRA_OPTS="-c fsync=off -c synchronous_commit=off -c full_page_writes=off -c
   bash scripts/pg.sh start test "$PG_PORT"
 trap 'bash scripts/pg.sh stop test "$PG_PORT"' EXIT
 
-log "building the client..."
+log "building the client and the server..."
 npx vite build --logLevel error
+# The fault tests and the two-process test run the production build (tests/helpers/app-process.ts).
+node scripts/build.mjs
 
 export TEST_ADMIN_DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/postgres"
 mkdir -p .data

@@ -2,6 +2,7 @@ import express, { type Express } from "express";
 import session from "express-session";
 import connectPgSimple from "connect-pg-simple";
 import { pinoHttp } from "pino-http";
+import { randomUUID } from "node:crypto";
 import path from "node:path";
 import fs from "node:fs";
 import "./middleware/session-types";
@@ -31,8 +32,9 @@ import { todayRouter } from "./api/compliance/today.router";
 import { exportsRouter } from "./api/exports/exports.router";
 import { healthRouter } from "./api/health/health.router";
 import { jobsRouter } from "./api/jobs/jobs.router";
+import { APP_ROOT } from "./paths";
 
-const CLIENT_DIR = path.resolve(import.meta.dirname, "../dist/client");
+const CLIENT_DIR = path.join(APP_ROOT, "dist/client");
 
 /** Builds the Express app without listening, so tests drive it with supertest. */
 export function createApp(ctx: AppContext): Express {
@@ -49,8 +51,17 @@ export function createApp(ctx: AppContext): Express {
   app.use(
     pinoHttp({
       logger: ctx.logger,
+      // One id per request, unique across processes (logged as reqId, answered as X-Request-Id): a
+      // proxy's own X-Request-Id is kept when it is a plain token, so its logs and ours line up.
+      genReqId: (req, res) => {
+        const given = req.headers["x-request-id"];
+        const id = typeof given === "string" && /^[\w.-]{1,64}$/.test(given) ? given : randomUUID();
+        res.setHeader("X-Request-Id", id);
+        return id;
+      },
       autoLogging: { ignore: (req) => !req.url?.startsWith("/api/") },
-      customProps: (req) => ({ userId: (req as express.Request).session?.userId }),
+      // reqId on every line of the request's logger (req.log), so a handler's warning is tied to it.
+      customProps: (req) => ({ reqId: req.id, userId: (req as express.Request).session?.userId }),
       serializers: {
         req: (req) => ({ method: req.method, url: req.url }),
         res: (res) => ({ statusCode: res.statusCode }),

@@ -7,6 +7,8 @@ import { createMailQueue } from "./mail/mail-queue";
 import { startFakeSmtp, type FakeSmtp } from "./mail/fake-smtp";
 import { createLifecycle } from "./lifecycle";
 import { storageFromEnv } from "./storage/storage-from-env";
+import { createJobQueue } from "./jobs/job-queue";
+import { startJobs } from "./jobs/job-kinds";
 
 /** The fake SMTP server on its usual port, or any free one when another checkout already has it. */
 async function startFakeSmtpOnFreePort(db: Parameters<typeof startFakeSmtp>[0], port: number): Promise<FakeSmtp> {
@@ -79,10 +81,18 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
     },
   };
 
+  // Every process runs the job worker too: analyses and digests queued by any process.
+  const jobs = createJobQueue(db, logger, {
+    pollingIntervalS: env.JOB_POLL_INTERVAL_S,
+    maintenanceIntervalS: env.JOB_MAINTENANCE_INTERVAL_S,
+  });
+  await startJobs(ctx, jobs, { work: env.RUN_JOBS === "true" });
+
   return {
     ctx,
     fakeSmtp,
     async close() {
+      await jobs.stop();
       await mailer.stop();
       await ctx.analysisRunner?.close();
       await ctx.reportRunner?.close();

@@ -2,6 +2,7 @@ import type pg from "pg";
 import type { Logger } from "pino";
 import type { Db } from "./db/client";
 import type { MailQueue } from "./mail/mail-queue";
+import type { JobQueue } from "./jobs/job-queue";
 import type { BlobStorage } from "./storage/blob-storage";
 import type { AnalysisRunner } from "./jobs/analysis-runner";
 import type { ReportRunner } from "./jobs/report-runner";
@@ -54,6 +55,8 @@ export interface AppContext {
   analysisRunner?: AnalysisRunner;
   /** The worker that draws and lays out report PDFs; made on first use (server/api/reports). */
   reportRunner?: ReportRunner;
+  /** The background job worker (analyses, digests; server/jobs/job-kinds.ts), in app processes; absent in API tests, which run that work inline. */
+  jobs?: JobQueue;
   /** Set while shutting down (server/index.ts); /readyz and keep-alive read it. */
   lifecycle?: Lifecycle;
 }

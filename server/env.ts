@@ -59,6 +59,10 @@ const envSchema = z
     MAIL_RETRY_DELAY_S: z.coerce.number().int().min(1).max(3600).default(30),
     // How often an idle worker asks the job queue for work (pg-boss's minimum is 0.5 s).
     JOB_POLL_INTERVAL_S: z.coerce.number().min(0.5).max(60).default(2),
+    // How often pg-boss hands out again the jobs of a worker that died (past their time limit).
+    // "false": this process queues analyses and digests but leaves running them to the others.
+    RUN_JOBS: z.enum(["true", "false"]).default("true"),
+    JOB_MAINTENANCE_INTERVAL_S: z.coerce.number().int().min(1).max(3600).default(60),
     FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
     UPLOADS_DIR: z.string().default("uploads"),
     // Where uploads live: "disk" (UPLOADS_DIR, one machine) or "s3" (any S3-compatible object store,

@@ -3,7 +3,6 @@ import { readEnv } from "./env";
 import { bootstrap } from "./bootstrap";
 import { createApp } from "./app";
 import { seedDemoIfEmpty, DEMO_SIGN_INS } from "./db/seed/demo";
-import { startDigestSchedule } from "./jobs/digest";
 import { waitUntil } from "./lifecycle";
 
 // Listening and shutting down only; the app itself is built in app.ts.
@@ -15,9 +14,6 @@ if (env.SEED_DEMO === "true") {
   const seeded = await seedDemoIfEmpty(ctx);
   if (seeded) ctx.logger.info("demo company seeded");
 }
-
-// The daily digest runs in the serving process; tests start it only when they ask for it.
-const digest = startDigestSchedule(ctx);
 
 const server = createApp(ctx).listen(env.PORT, env.HOST, () => {
   const { port } = server.address() as AddressInfo;
@@ -55,7 +51,6 @@ async function shutdown(signal: string) {
   const deadline = Date.now() + env.SHUTDOWN_GRACE_MS;
   ctx.logger.info({ signal, graceMs: env.SHUTDOWN_GRACE_MS }, "shutting down: draining");
   ctx.lifecycle!.draining = true;
-  digest.stop();
   if (env.SHUTDOWN_DELAY_MS > 0) await new Promise((r) => setTimeout(r, env.SHUTDOWN_DELAY_MS));
   const closed = new Promise<void>((resolve) => server.close(() => resolve()));
   // Keep-alive connections go once their current answer is out (it carries Connection: close).
@@ -72,7 +67,7 @@ async function shutdown(signal: string) {
   clearTimeout(cutOff);
   clearInterval(sweepIdle);
   const jobsDone = await waitUntil(
-    () => (ctx.analysisRunner?.load ?? 0) + (ctx.reportRunner?.load ?? 0) === 0,
+    () => (ctx.analysisRunner?.load ?? 0) + (ctx.reportRunner?.load ?? 0) + (ctx.jobs?.active ?? 0) === 0,
     Math.max(deadline, Date.now() + 1_000),
   );
   if (!jobsDone) ctx.logger.warn("grace period over: stopping the jobs still running");

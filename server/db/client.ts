@@ -4,6 +4,7 @@ import { migrate } from "drizzle-orm/node-postgres/migrator";
 import path from "node:path";
 import * as schema from "./schema/index";
 import { withAdvisoryLock } from "./advisory-lock";
+import { APP_ROOT } from "../paths";
 
 export type Db = NodePgDatabase<typeof schema> & { $client: pg.Pool };
 
@@ -33,6 +34,6 @@ export const MIGRATION_LOCK_KEY = 4242002;
 /** Drizzle's migrator takes no lock of its own: processes starting together take turns. */
 export async function migrateDb(db: Db): Promise<void> {
   await withAdvisoryLock(db.$client, MIGRATION_LOCK_KEY, () =>
-    migrate(db, { migrationsFolder: path.resolve(import.meta.dirname, "../../drizzle") }),
+    migrate(db, { migrationsFolder: path.join(APP_ROOT, "drizzle") }),
   );
 }

@@ -2,10 +2,11 @@
 import type { LocatorResult } from "#core/contracts/locator-output";
 import type { AnalysisJob } from "./analysis.worker";
 import { createWorkerPool, defaultPoolSize } from "./worker-pool";
+import { serverModule } from "../paths";
 
 export function createAnalysisRunner(size = defaultPoolSize()) {
   return createWorkerPool<AnalysisJob, LocatorResult>({
-    module: new URL("./analysis.worker.ts", import.meta.url),
+    module: serverModule("jobs/analysis.worker"),
     size,
   });
 }

@@ -1,4 +1,3 @@
-import { Cron } from "croner";
 import { and, asc, eq, inArray } from "drizzle-orm";
 import type { AppContext } from "../context";
 import type { DueItem } from "#core/contracts/compliance";
@@ -111,36 +110,27 @@ export async function sendDigest(
   }
 }
 
-/** One pass of the schedule: every company whose local clock has reached the digest hour. */
-export async function runDueDigests(ctx: AppContext, now = new Date()): Promise<DigestResult[]> {
+/** Companies whose local clock has reached the digest hour (their digest may be due today). */
+export async function companiesPastDigestHour(ctx: AppContext, now = new Date()): Promise<string[]> {
   const all = await ctx.db.select({ id: companies.id }).from(companies);
-  const results: DigestResult[] = [];
+  const due: string[] = [];
   for (const c of all) {
     const zone = await companyZone(ctx, c.id);
     const localHour = new Date(now.getTime() + zoneOffsetMs(now, zone)).getUTCHours();
-    if (localHour < DIGEST_HOUR) continue;
+    if (localHour >= DIGEST_HOUR) due.push(c.id);
+  }
+  return due;
+}
+
+/** One pass of the schedule, in this process: every company whose local clock has reached the digest hour. */
+export async function runDueDigests(ctx: AppContext, now = new Date()): Promise<DigestResult[]> {
+  const results: DigestResult[] = [];
+  for (const companyId of await companiesPastDigestHour(ctx, now)) {
     try {
-      results.push(await sendDigest(ctx, c.id, "schedule", now));
+      results.push(await sendDigest(ctx, companyId, "schedule", now));
     } catch (err) {
-      ctx.logger.error({ err, companyId: c.id }, "digest failed; the next hourly run retries");
+      ctx.logger.error({ err, companyId }, "digest failed; the next hourly run retries");
     }
   }
   return results;
-}
-
-/**
- * Starts the hourly schedule (croner) and one catch-up pass now, for a process started after the
- * digest hour. Safe with several processes: sendDigest's claim makes each day's send happen once.
- */
-export function startDigestSchedule(ctx: AppContext): { stop(): void } {
-  const pass = async (): Promise<void> => {
-    try {
-      await runDueDigests(ctx);
-    } catch (err) {
-      ctx.logger.error({ err }, "digest pass failed");
-    }
-  };
-  const job = new Cron("5 * * * *", { protect: true, name: "daily-digest" }, pass);
-  void pass();
-  return { stop: () => job.stop() };
 }

@@ -7,7 +7,9 @@
  */
 import os from "node:os";
 import { Worker } from "node:worker_threads";
+import { COMPILED } from "../paths";
 
+// From source a worker needs tsx registered first (worker-entry.mjs); a compiled module starts as it is.
 const ENTRY = new URL("./worker-entry.mjs", import.meta.url);
 
 /** What a job module posts back (see serveJobs). */
@@ -39,7 +41,7 @@ interface Job<T, R> {
 }
 
 export interface WorkerPoolOptions {
-  /** file URL of the job module (a .ts file that calls serveJobs). */
+  /** file URL of the job module (a file that calls serveJobs; see serverModule in server/paths.ts). */
   module: URL;
   size?: number;
 }
@@ -65,7 +67,7 @@ export function createWorkerPool<T, R>({ module, size = defaultPoolSize() }: Wor
   };
 
   const spawn = (): Slot => {
-    const worker = new Worker(ENTRY, { workerData: { module: module.href } });
+    const worker = COMPILED ? new Worker(module) : new Worker(ENTRY, { workerData: { module: module.href } });
     const slot: Slot = { worker, busy: false };
     worker.unref();
     worker.on("message", (reply: JobReply<R>) => {

@@ -21,12 +21,15 @@ export function clientKey(req: Request): string {
 let takesSincePrune = 0;
 
 /**
- * Counts one attempt against the limit, atomically in PostgreSQL (one upsert, so concurrent attempts
- * cannot all slip under it), and refuses it with 429 once the window's limit is spent.
+ * Counts one hit on a fixed-window counter shared by every process on the database (one atomic
+ * upsert, so concurrent hits cannot all slip under a limit) and answers the window's count so far.
  */
-export async function takeAttempt(ctx: AppContext, limit: AttemptLimit, key: string, what: string): Promise<void> {
-  const rowKey = `${limit.name}|${key}`;
-  const resetAt = new Date(Date.now() + limit.windowMs);
+export async function countHit(
+  ctx: AppContext,
+  rowKey: string,
+  windowMs: number,
+): Promise<{ hits: number; resetAt: Date }> {
+  const resetAt = new Date(Date.now() + windowMs);
   const [row] = await ctx.db
     .insert(rateLimitHits)
     .values({ key: rowKey, hits: 1, resetAt })
@@ -37,11 +40,20 @@ export async function takeAttempt(ctx: AppContext, limit: AttemptLimit, key: str
         resetAt: sql`case when ${rateLimitHits.resetAt} <= now() then excluded.reset_at else ${rateLimitHits.resetAt} end`,
       },
     })
-    .returning();
+    .returning({ hits: rateLimitHits.hits, resetAt: rateLimitHits.resetAt });
   if (++takesSincePrune >= 200) {
     takesSincePrune = 0;
     await ctx.db.delete(rateLimitHits).where(lte(rateLimitHits.resetAt, new Date()));
   }
+  return row;
+}
+
+/**
+ * Counts one attempt against the limit (countHit) and refuses it with 429 once the window's limit
+ * is spent.
+ */
+export async function takeAttempt(ctx: AppContext, limit: AttemptLimit, key: string, what: string): Promise<void> {
+  const row = await countHit(ctx, `${limit.name}|${key}`, limit.windowMs);
   if (row.hits <= limit.limit) return;
   const waitMs = Math.max(0, row.resetAt.getTime() - Date.now());
   const minutes = Math.max(1, Math.ceil(waitMs / 60_000));

@@ -1,5 +1,6 @@
 import type { RequestHandler } from "express";
-import { ipKeyGenerator, rateLimit, type RateLimitInfo } from "express-rate-limit";
+import type { AppContext } from "../context";
+import { clientKey, countHit } from "../lib/attempt-limiter";
 
 export interface SyncThrottleOptions {
   /** Requests per member per window. */
@@ -13,30 +14,29 @@ export const SYNC_THROTTLE_DEFAULTS: SyncThrottleOptions = { limit: 600, windowM
 /**
  * Throttles the Walk client's sync writes per signed-in member. Over the limit the answer is 503
  * with Retry-After, never a 4xx: the Walk client takes any 4xx but 401 as a permanent refusal of
- * the batch and would drop readings; a 5xx it simply retries. Counts are per process.
+ * the batch and would drop readings; a 5xx it simply retries. The count is kept in PostgreSQL
+ * (server/lib/attempt-limiter.ts), so the limit holds across every app process (decision 0033).
  */
-export function syncThrottle(options: Partial<SyncThrottleOptions> = {}): RequestHandler {
+export function syncThrottle(ctx: AppContext, options: Partial<SyncThrottleOptions> = {}): RequestHandler {
   const { limit, windowMs } = { ...SYNC_THROTTLE_DEFAULTS, ...options };
-  return rateLimit({
-    windowMs,
-    limit,
-    standardHeaders: "draft-8",
-    legacyHeaders: false,
+  return async (req, res, next) => {
     // Runs after requireMember, so the member is known; the address is only a fallback.
-    keyGenerator: (req) => req.auth?.user.id ?? `ip:${ipKeyGenerator(req.ip ?? "")}`,
-    handler: (req, res) => {
-      const info = (req as typeof req & { rateLimit?: RateLimitInfo }).rateLimit;
-      const reset = info?.resetTime?.getTime() ?? Date.now() + windowMs;
-      const seconds = Math.max(1, Math.ceil((reset - Date.now()) / 1000));
-      res
-        .status(503)
-        .set("Retry-After", String(seconds))
-        .json({
-          error: {
-            code: "busy",
-            message: `Too many sync requests right now; nothing was lost. Trying again in ${seconds} s.`,
-          },
-        });
-    },
-  });
+    const who = req.auth?.user.id ?? `ip:${clientKey(req)}`;
+    const { hits, resetAt } = await countHit(ctx, `sync|${who}`, windowMs);
+    const left = Math.max(0, limit - hits);
+    const seconds = Math.max(1, Math.ceil((resetAt.getTime() - Date.now()) / 1000));
+    // The IETF draft-8 header pair, as the throttle sent before it counted in the database.
+    res.set("RateLimit-Policy", `"sync";q=${limit};w=${Math.ceil(windowMs / 1000)}`);
+    res.set("RateLimit", `"sync";r=${left};t=${seconds}`);
+    if (hits <= limit) return next();
+    res
+      .status(503)
+      .set("Retry-After", String(seconds))
+      .json({
+        error: {
+          code: "busy",
+          message: `Too many sync requests right now; nothing was lost. Trying again in ${seconds} s.`,
+        },
+      });
+  };
 }

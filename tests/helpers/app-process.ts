@@ -1,12 +1,15 @@
 /**
- * The server as a child process (`node --import tsx server/index.ts`), for fault tests that stop
- * its database or signal it. Loopback only; its output is kept for failure messages.
+ * The server as a child process running the production build (`node dist/server/index.js`, made by
+ * scripts/build.mjs, which `npm test` runs first), for fault tests that stop its database or
+ * signal it and for the two-process tests. Loopback only; its output is kept for failure messages.
  */
 import { spawn, type ChildProcess } from "node:child_process";
+import { existsSync } from "node:fs";
 import path from "node:path";
 import { freePort } from "./own-cluster";
 
 const ROOT = path.resolve(import.meta.dirname, "../..");
+const SERVER_BUILD = "dist/server/index.js";
 
 export interface AppProcess {
   url: string;
@@ -22,7 +25,9 @@ export interface AppProcess {
 /** Starts the app; `port` reuses one (a restart in place), otherwise a free one is taken. */
 export async function startAppProcess(env: Record<string, string>, port?: number): Promise<AppProcess> {
   port ??= await freePort();
-  const child = spawn(process.execPath, ["--import", "tsx", "server/index.ts"], {
+  if (!existsSync(path.join(ROOT, SERVER_BUILD)))
+    throw new Error(`${SERVER_BUILD} is missing: run \`node scripts/build.mjs\` (npm test does)`);
+  const child = spawn(process.execPath, ["--enable-source-maps", SERVER_BUILD], {
     cwd: ROOT,
     env: {
       ...process.env,

@@ -1,14 +1,16 @@
 /**
  * The field map's analysis: the locator run off the event loop on a sweep's
  * readings and plan, cached per sweep and parameter set; a cached result whose readings changed since
- * is answered as stale while a recompute runs (or awaited with wait=true).
+ * is answered as stale while a recompute runs (or awaited with wait=true). With the job worker
+ * running (every app process) a computation is a pg-boss job any process may run (decision 0085);
+ * without it (API tests, tools) it runs here, as before.
  */
 import { and, desc, eq, ne, notInArray } from "drizzle-orm";
 import { can } from "#core/domain/roles";
 import type { AppContext } from "../../context";
 import type { AnalysisParams, AnalysisQuery, AnalysisResponse, AnalysisSummary } from "#core/contracts/analysis";
 import { DEFAULT_CELL_SIZE_M, LocatorInputError, parseLocatorInput } from "#core/contracts/locator-input";
-import { analyses } from "../../db/schema/index";
+import { analyses, sweeps } from "../../db/schema/index";
 import { detectorDiagnostics } from "#core/domain/fieldmap/detector-diagnostics";
 import { bytesToFloat32, float32ToBytes, quantiseConfidence } from "#core/domain/fieldmap/field-codec";
 import { sweepLocatorInput } from "#core/domain/fieldmap/sweep-locator-input";
@@ -28,6 +30,13 @@ const inflight = new Map<string, Promise<AnalysisRow>>();
 export const ANALYSIS_INFLIGHT_MAX = 8;
 /** Parameter sets stored per sweep; the oldest tried ones go first, the detector's own stays. */
 export const ANALYSES_PER_SWEEP_MAX = 6;
+/** Analysis jobs waiting or running at once across all processes; beyond it a new one is refused (429). */
+export const ANALYSIS_BACKLOG_MAX = 8;
+/** One try of an analysis job (2,000 readings take about 3 s; docs/benchmarks.md). */
+export const ANALYSIS_TIME_LIMIT_S = 120;
+/** How long a request that needs a fresh result (wait=true, a report) waits for its job. */
+export const ANALYSIS_WAIT_MS = 60_000;
+export const ANALYSIS_JOB = "analysis";
 
 export function analysisRunner(ctx: AppContext): AnalysisRunner {
   ctx.analysisRunner ??= createAnalysisRunner();
@@ -214,6 +223,72 @@ export async function cachedAnalysis(
   return row;
 }
 
+const busy = (message: string) =>
+  new HttpError(503, "busy", message, undefined, {
+    retryAfterSeconds: 5,
+  });
+
+/** Queues the job for this sweep, parameter set and readings revision (joining one already waiting). */
+async function queueAnalysis(ctx: AppContext, sweep: SweepRow, params: AnalysisParams): Promise<string | null> {
+  const jobs = ctx.jobs!;
+  if ((await jobs.backlog(ANALYSIS_JOB)) >= ANALYSIS_BACKLOG_MAX)
+    throw new HttpError(429, "busy", "The server is computing other field maps; try again in a moment.", undefined, {
+      retryAfterSeconds: 5,
+    });
+  return jobs.send(
+    ANALYSIS_JOB,
+    { companyId: sweep.companyId, sweepId: sweep.id, params, readingsRevision: sweep.readingsRevision },
+    `${sweep.id}|${paramsKey(params)}|${sweep.readingsRevision}`,
+  );
+}
+
+/**
+ * A result for at least the sweep's current readings revision. Through the job queue: waits until
+ * some process has stored it (polling the analyses row), or the job was refused or failed, bounded
+ * by ANALYSIS_WAIT_MS; past that 503 with Retry-After, and the job goes on.
+ */
+async function freshAnalysis(ctx: AppContext, sweep: SweepRow, params: AnalysisParams): Promise<AnalysisRow> {
+  if (!ctx.jobs?.running) return computeOnce(ctx, sweep, params);
+  const jobId = await queueAnalysis(ctx, sweep, params);
+  const deadline = Date.now() + ANALYSIS_WAIT_MS;
+  for (let step = 50; ; step = Math.min(step * 2, 500)) {
+    const row = await cachedAnalysis(ctx, sweep.id, params);
+    if (row && row.readingsRevision >= sweep.readingsRevision) return row;
+    const job = jobId ? await ctx.jobs.state(ANALYSIS_JOB, jobId) : null;
+    if (job?.state === "completed" && job.reason) {
+      const refused = job.reason.startsWith(REFUSED) ? (JSON.parse(job.reason.slice(REFUSED.length)) as string[]) : [];
+      throw invalid(refused.length ? refused : [job.reason]);
+    }
+    if (job?.state === "failed")
+      throw busy(`The field map could not be computed (${job.reason ?? "no reason given"}); try again later.`);
+    if (Date.now() > deadline) throw busy("The field map is still being computed; it will be ready shortly.");
+    await new Promise((r) => setTimeout(r, step));
+  }
+}
+
+const REFUSED = "refused:";
+
+/**
+ * Runs one analysis job (any process). A sweep the locator refuses is not retried: the job completes
+ * with the problems for the waiting request to answer field by field.
+ */
+export async function runAnalysisJob(
+  ctx: AppContext,
+  data: { sweepId: string; params: AnalysisParams },
+): Promise<{ reason: string } | undefined> {
+  const [sweep] = await ctx.db.select().from(sweeps).where(eq(sweeps.id, data.sweepId));
+  if (!sweep) return; // deleted since it was queued
+  const row = await cachedAnalysis(ctx, sweep.id, data.params);
+  if (row && row.readingsRevision >= sweep.readingsRevision) return;
+  try {
+    await compute(ctx, sweep.id, data.params);
+  } catch (err) {
+    if (err instanceof HttpError && err.status === 400)
+      return { reason: REFUSED + JSON.stringify(Object.entries(err.fields ?? {}).map(([k, v]) => `${k}: ${v}`)) };
+    throw err;
+  }
+}
+
 export async function getAnalysis(
   ctx: AppContext,
   viewer: Viewer,
@@ -239,10 +314,11 @@ export async function getAnalysis(
   if (row && row.readingsRevision === sweep.readingsRevision) return toResponse(ctx, row, sweep, false);
   if (row && q.wait !== "true") {
     // Show what we have, say it is stale, and recompute in the background; the client asks again.
-    computeOnce(ctx, sweep, params).catch((err) => ctx.logger.warn({ err, sweepId }, "analysis recompute failed"));
+    const recompute = ctx.jobs?.running ? queueAnalysis(ctx, sweep, params) : computeOnce(ctx, sweep, params);
+    recompute.catch((err) => ctx.logger.warn({ err, sweepId }, "analysis recompute failed"));
     return toResponse(ctx, row, sweep, true);
   }
-  const fresh = await computeOnce(ctx, sweep, params);
+  const fresh = await freshAnalysis(ctx, sweep, params);
   return toResponse(
     ctx,
     fresh,
@@ -269,5 +345,5 @@ export async function ensureAnalysis(ctx: AppContext, sweep: SweepRow): Promise<
   const params = sweepParams(sweep, {});
   const row = await cachedAnalysis(ctx, sweep.id, params);
   if (row && row.readingsRevision === sweep.readingsRevision) return row;
-  return computeOnce(ctx, sweep, params);
+  return freshAnalysis(ctx, sweep, params);
 }

@@ -1,11 +1,15 @@
 import { Worker } from "node:worker_threads";
+import { COMPILED, serverModule } from "../../paths";
 import type { DecodeRequest, DecodeResponse } from "./image-decode.worker";
 
 export type DecodedPlanImage = Extract<DecodeResponse, { ok: true }>;
 
 export class ImageDecodeError extends Error {}
 
-const ENTRY = new URL("./image-decode.worker-entry.mjs", import.meta.url);
+// From source the worker registers tsx first (the .mjs entry); the compiled module starts as it is.
+const ENTRY = COMPILED
+  ? serverModule("api/plans/image-decode.worker")
+  : new URL("./image-decode.worker-entry.mjs", import.meta.url);
 
 /**
  * One long-lived worker thread that decodes and resizes plan images, started on first use.

@@ -19,7 +19,7 @@ export function sweepsRouter(ctx: AppContext): Router {
   const router = Router();
   const userId = (req: { auth?: { user: { id: string } } }) => req.auth!.user.id;
   // One budget for every write the Walk client's sync pass makes.
-  const throttle = syncThrottle(ctx.config.syncThrottle);
+  const throttle = syncThrottle(ctx, ctx.config.syncThrottle);
 
   router.get(
     "/stores/:storeId/sweeps",

@@ -2,6 +2,7 @@ import { afterAll, beforeAll, expect, it } from "vitest";
 import { createTestApp, signIn, type TestApp } from "../../../tests/helpers/test-app";
 import { seedCompany } from "../../../tests/helpers/fixtures";
 import { detectors } from "../../db/schema/index";
+import { createApp } from "../../app";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;
@@ -59,4 +60,33 @@ it("over the sync limit a batch is answered 503 with Retry-After (never a 4xx), 
 
   const lead = await signIn(t.app, co.people["lead-tech"]);
   expect((await lead.post(`/api/sweeps/${sweep.body.id}/readings`, batch())).status).toBe(200);
+});
+
+it("the limit holds across two app instances on one database: the count lives in PostgreSQL", async () => {
+  // A second app built on the same database, as a second process would be (its own throttle instance).
+  const second = createApp({ ...t.ctx });
+  const onFirst = await signIn(t.app, co.people.owner);
+  const onSecond = await signIn(second, co.people.owner);
+  const sweep = await onFirst.post(`/api/stores/${co.store.id}/sweeps`, {
+    id: crypto.randomUUID(),
+    planId,
+    detectorId,
+    fans: "running",
+    defrost: false,
+    startedAt: new Date(Date.now() - 60_000).toISOString(),
+  });
+  expect(sweep.status).toBe(201); // 1 of 4, on the first
+  const codes: number[] = [];
+  for (const agent of [onSecond, onFirst, onSecond, onFirst])
+    codes.push(
+      (
+        await agent.post(`/api/sweeps/${sweep.body.id}/readings`, {
+          readings: [
+            { id: crypto.randomUUID(), x: 3, y: 3, takenAt: new Date().toISOString(), ppm: 2, samplePoint: "grille" },
+          ],
+        })
+      ).status,
+    );
+  // 2, 3 and 4 of the limit pass, alternating processes; the fifth is over the shared limit.
+  expect(codes).toEqual([200, 200, 200, 503]);
 });

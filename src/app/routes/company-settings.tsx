@@ -8,6 +8,7 @@ import { ReadingsSection } from "../../features/compliance/components/readings-s
 import { useCompanySettings } from "../../features/settings/api/get-company-settings";
 import { CompanySettingsForm } from "../../features/settings/components/company-settings-form";
 import { CustomProfileSection } from "../../features/settings/components/custom-profile-section";
+import { FailedJobsSection } from "../../features/settings/components/failed-jobs-section";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
 
@@ -43,6 +44,10 @@ export function Component() {
         />
       ) : null}
       {settings.data ? <ReadingsSection key={`readings-${membership.companyId}`} /> : null}
+      {/* Only owners manage the company (settings.manage): the list is theirs. */}
+      {settings.data && can(membership.role, "settings.manage") ? (
+        <FailedJobsSection key={`failed-jobs-${membership.companyId}`} />
+      ) : null}
     </>
   );
 }

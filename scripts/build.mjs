@@ -1,0 +1,58 @@
+// The production build of the server side: esbuild bundles the server, every worker module
+// (server/**/*.worker.ts) and the command-line tools into dist/, each output one plain ES module
+// with core/ (the #core/* imports) inside it and npm packages left to node_modules. Node runs
+// them without a TypeScript loader (docs/decisions/0086). Plain JavaScript so it needs no loader.
+//   node scripts/build.mjs            server, workers and tools
+//   node scripts/build.mjs locate     only dist/scripts/locate.js (the locate command builds on demand)
+import { build } from "esbuild";
+import { readdirSync } from "node:fs";
+import path from "node:path";
+
+const root = path.resolve(import.meta.dirname, "..");
+
+function workerEntries(dir) {
+  return readdirSync(path.join(root, dir), { recursive: true })
+    .filter((f) => String(f).endsWith(".worker.ts"))
+    .map((f) => path.join(dir, String(f)));
+}
+
+const common = {
+  absWorkingDir: root,
+  bundle: true,
+  platform: "node",
+  format: "esm",
+  target: "node20",
+  // npm packages stay external (node_modules is there at run time); our own code is bundled.
+  packages: "external",
+  logLevel: "warning",
+  legalComments: "none",
+  // A bundle that pulls in a CommonJS package's `require` gets one that works in an ES module.
+  banner: {
+    js: "import { createRequire as __plumelineRequire } from 'node:module'; const require = __plumelineRequire(import.meta.url);",
+  },
+};
+
+export async function buildLocate() {
+  await build({ ...common, entryPoints: ["scripts/locate.ts"], outfile: "dist/scripts/locate.js" });
+}
+
+export async function buildServer() {
+  // outbase keeps server/jobs/x.worker.ts at dist/server/jobs/x.worker.js, where server/paths.ts looks.
+  await build({
+    ...common,
+    entryPoints: ["server/index.ts", ...workerEntries("server")],
+    outbase: "server",
+    outdir: "dist/server",
+    sourcemap: "linked",
+  });
+}
+
+if (process.argv[1] && path.resolve(process.argv[1]) === path.resolve(import.meta.filename)) {
+  const only = process.argv[2];
+  const started = performance.now();
+  if (only === "locate") await buildLocate();
+  else await Promise.all([buildServer(), buildLocate()]);
+  console.error(
+    `[plumeline] built ${only ?? "server, workers and tools"} into dist/ in ${Math.round(performance.now() - started)} ms`,
+  );
+}
