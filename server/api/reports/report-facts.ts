@@ -165,6 +165,8 @@ export async function loadReportFacts(
           .filter(Boolean)
           .join(", ") || "on the plan",
       note: f.note,
+      x: f.x,
+      y: f.y,
     })),
     readings: readingRows.map((r, i) => {
       const c = corrected.get(r.id);
