@@ -198,7 +198,7 @@ export function SystemRecords({
             rows={r.leakRates}
             rowKey={(p) => p.date}
             columns={[
-              { header: "Date", cell: (p) => p.date },
+              { header: "Date", cell: (p) => p.date, sortValue: (p) => p.date },
               {
                 header: "Added",
                 cell: (p) =>
@@ -214,6 +214,8 @@ export function SystemRecords({
               { header: "Counted", cell: (p) => formatMass(p.countedKg, unit) },
               {
                 header: "Leak rate",
+                sortValue: (p) => p.percent,
+                filterValue: (p) => (p.exceeds ? "above the threshold" : "within the threshold"),
                 cell: (p) => (
                   <span className={p.exceeds ? "font-bold text-danger" : ""}>
                     {formatPercent(p.percent)}
@@ -240,10 +242,16 @@ export function SystemRecords({
           caption="Charge-added entries, voided ones kept"
           rows={[...r.additions].reverse()}
           rowKey={(x) => x.id}
+          search="Search charge added"
           columns={[
-            { header: "Date", cell: (x) => (x.voided ? <s>{x.addedOn}</s> : x.addedOn) },
+            {
+              header: "Date",
+              cell: (x) => (x.voided ? <s>{x.addedOn}</s> : x.addedOn),
+              sortValue: (x) => x.addedOn,
+            },
             {
               header: "Amount",
+              sortValue: (x) => x.amountKg,
               cell: (x) => (
                 <>
                   {x.voided ? <s>{formatMass(x.amountKg, unit)}</s> : formatMass(x.amountKg, unit)}
@@ -254,9 +262,15 @@ export function SystemRecords({
                 </>
               ),
             },
-            { header: "Technician", cell: (x) => x.technician },
+            {
+              header: "Technician",
+              cell: (x) => x.technician,
+              searchText: (x) => x.technician,
+              filterValue: (x) => x.technician,
+            },
             {
               header: "Reason",
+              searchText: (x) => x.reason,
               cell: (x) => (
                 <>
                   {x.reason}
@@ -273,6 +287,9 @@ export function SystemRecords({
             },
             {
               header: "Audit",
+              filterValue: (x) => (x.voided ? "voided" : "in force"),
+              searchText: (x) =>
+                x.voided ? `voided ${x.voided.by} ${x.voided.reason}` : `recorded by ${x.recordedBy}`,
               cell: (x) =>
                 x.voided ? (
                   <span className="text-sm">
