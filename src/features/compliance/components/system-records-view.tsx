@@ -11,6 +11,7 @@ import { useRecordCharge } from "../api/record-charge";
 import { daysInWords, formatMass, formatPercent, STATE_LABELS, type MassUnit } from "../model/figures";
 import { ChargeForm } from "./charge-form";
 import { ChronicSection } from "./chronic-section";
+import { SystemPlots } from "./system-plots";
 import { RevisionsSection } from "./revisions-section";
 import { LeakCheckForm } from "./leak-check-form";
 import { readableSource } from "#core/domain/compliance/citations";
@@ -176,6 +177,8 @@ export function SystemRecords({
           </ul>
         </section>
       ) : null}
+
+      <SystemPlots r={r} unit={unit} />
 
       <section id="leak-rates" aria-labelledby="rates" className="space-y-2">
         <h2 id="rates" className="text-xl font-bold">
