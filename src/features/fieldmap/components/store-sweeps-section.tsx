@@ -4,12 +4,15 @@ import { QueryError } from "../../../components/ui/query-error";
 import { Spinner } from "../../../components/ui/spinner";
 import { useSweeps as useStoreSweeps } from "../../../entities/sweeps/sweeps-api";
 import { formatInZone } from "#core/domain/dates/format-in-zone";
+import { useSweepSummary } from "../api/get-sweep-summary";
+import { SweepSummaryPlot } from "./sweep-summary-plot";
 
 const LINK = "inline-flex min-h-11 items-center rounded-md px-4 font-bold no-underline";
 
 /** The store page's sweeps section: the latest few with their field maps (starting one is in the page header). */
 export function StoreSweepsSection({ storeId, timeZone }: { storeId: string; timeZone: string }) {
   const sweeps = useStoreSweeps(storeId);
+  const summary = useSweepSummary(storeId);
   const when = (iso: string) => formatInZone(iso, timeZone);
   const latest = [...(sweeps.data ?? [])].sort((a, b) => b.startedAt.localeCompare(a.startedAt)).slice(0, 3);
   return (
@@ -37,6 +40,7 @@ export function StoreSweepsSection({ storeId, timeZone }: { storeId: string; tim
           ))}
         </ul>
       ) : null}
+      {summary.data?.length ? <SweepSummaryPlot sweeps={summary.data} timeZone={timeZone} /> : null}
       <div className="flex flex-wrap gap-2">
         {sweeps.data?.length ? (
           <Link className={`${LINK} edge bg-surface`} to={`/stores/${storeId}/sweeps`}>
