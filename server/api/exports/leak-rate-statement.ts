@@ -4,7 +4,7 @@ import type { FindingDetail } from "#core/contracts/finding-actions";
 import { FINDING_EVENT_LABELS } from "#core/contracts/findings";
 import { APPLIANCE_TYPE_NAMES } from "#core/contracts/systems";
 import { readableSource } from "#core/domain/compliance/citations";
-import { formatInZone } from "#core/domain/dates/format-in-zone";
+import { formatCalendarDay as day, formatInZone } from "#core/domain/dates/format-in-zone";
 import { formatFixed } from "#core/domain/numbers/round-half-up";
 import type { Paper } from "#core/domain/reports/paper";
 import { kgToPounds } from "#core/domain/units/mass";
@@ -97,7 +97,7 @@ function profileSection(doc: Doc, r: SystemRecordsView) {
   if (r.nextInspection)
     para(
       doc,
-      `Next inspection due ${r.nextInspection.dueOn} (${r.nextInspection.reason}; ${readableSource(r.nextInspection.source)}).`,
+      `Next inspection due ${day(r.nextInspection.dueOn)} (${r.nextInspection.reason}; ${readableSource(r.nextInspection.source)}).`,
     );
 }
 
@@ -105,13 +105,13 @@ function leakRateSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => s
   heading(doc, "Leak rate at every addition");
   const byId = new Map(r.additions.map((a) => [a.id, a]));
   const rows = r.leakRates.map((p) => [
-    p.date,
+    day(p.date),
     mass(p.additionIds.reduce((s, id) => s + (byId.get(id)?.amountKg ?? 0), 0)),
-    p.method === "annualizing" ? `${p.days} d` : `from ${p.windowStart ?? "—"}`,
+    p.method === "annualizing" ? `${p.days} d` : `from ${day(p.windowStart)}`,
     mass(p.countedKg),
     `${p.percent.toFixed(1)} %${p.exceeds ? " (above)" : ""}`,
     p.thresholdPercent === null ? "none" : `${p.thresholdPercent} %`,
-    p.repairDue ?? "—",
+    day(p.repairDue),
   ]);
   if (rows.length)
     table(
@@ -159,7 +159,7 @@ function euRecordsSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => 
         { title: "Technician", share: 110 },
         { title: "Reason", share: 222 },
       ],
-      live.map((a) => [a.addedOn, mass(a.amountKg), a.technician, a.reason]),
+      live.map((a) => [day(a.addedOn), mass(a.amountKg), a.technician, a.reason]),
     );
   heading(doc, "Leak checks");
   if (r.leakChecks.length === 0) para(doc, "No leak check recorded.");
@@ -172,7 +172,7 @@ function euRecordsSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => 
         { title: "Checked by", share: 110 },
         { title: "Note", share: 234 },
       ],
-      r.leakChecks.map((c) => [c.checkedOn, c.leakFound ? "leak found" : "no leak found", c.by, c.note]),
+      r.leakChecks.map((c) => [day(c.checkedOn), c.leakFound ? "leak found" : "no leak found", c.by, c.note]),
     );
 }
 
@@ -193,8 +193,8 @@ function chronicSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => st
       `${y.percent.toFixed(1)} %`,
       y.chronic
         ? y.filed
-          ? `yes; report filed on ${y.filed.on} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}`
-          : `yes; report due ${y.reportDue}`
+          ? `yes; report filed on ${day(y.filed.on)} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}`
+          : `yes; report due ${day(y.reportDue)}`
         : "no",
     ]),
   );
@@ -219,10 +219,10 @@ function voidedSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => str
       { title: "Why", share: 122 },
     ],
     voided.map((a) => [
-      a.addedOn,
+      day(a.addedOn),
       mass(a.amountKg),
       a.technician,
-      `${a.voided!.at.slice(0, 10)} by ${a.voided!.by}`,
+      `${formatInZone(a.voided!.at, r.store.timeZone, "date")} by ${a.voided!.by}`,
       a.voided!.reason,
     ]),
   );
@@ -250,7 +250,12 @@ function findingsSection(doc: Doc, findingList: FindingDetail[]) {
         { title: "Signed", share: 110 },
         { title: "Note", share: 194 },
       ],
-      f.events.map((e) => [e.on, `${FINDING_EVENT_LABELS[e.kind]}${e.result ? ` (${e.result})` : ""}`, e.by, e.note]),
+      f.events.map((e) => [
+        day(e.on),
+        `${FINDING_EVENT_LABELS[e.kind]}${e.result ? ` (${e.result})` : ""}`,
+        e.by,
+        e.note,
+      ]),
     );
   }
 }
@@ -266,7 +271,7 @@ function dueSection(doc: Doc, r: SystemRecordsView) {
       { title: "What", share: 212 },
       { title: "Rule", share: 150 },
     ],
-    r.due.map((d) => [d.dueOn ?? "no date", d.state.replace("-", " "), d.what, readableSource(d.source)]),
+    r.due.map((d) => [d.dueOn ? day(d.dueOn) : "no date", d.state.replace("-", " "), d.what, readableSource(d.source)]),
   );
 }
 
@@ -345,7 +350,7 @@ export function leakRateStatementPdf(
   para(doc, `${r.system.name} · ${r.store.name}`, INK, 10);
   para(
     doc,
-    `${generated}; dates are on the store's calendar (${r.store.timeZone}); today there is ${r.today}.`,
+    `${generated}; dates are on the store's calendar (${r.store.timeZone}); today there is ${day(r.today)}.`,
     MUTED,
     8.5,
   );

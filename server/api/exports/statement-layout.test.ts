@@ -7,6 +7,7 @@ import { agentFor, createTestApp, type Agent, type TestApp } from "../../../test
 import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 import { overlappingText, pdfLayout, type PdfPage } from "../../../tests/helpers/pdf-text";
 import { renderPdfPages } from "../../../tests/helpers/pdf-pages";
+import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;
@@ -119,9 +120,11 @@ describe("leak-rate statement PDF layout", () => {
     expectClean(pages, "letter", "US statement");
     const text = pages.map((p) => p.text).join("\n");
     const flat = text.replace(/\s+/g, " ");
-    // Every addition is a row: its date appears in the leak-rate table (and nowhere is a row cut).
+    // Every addition is a row: its day ("6 Jan 2025", as every screen writes days) is in the leak-rate table.
     for (let i = 0; i < ADDITIONS; i++)
-      expect(flat).toContain(new Date(Date.UTC(2025, 0, 6) + i * 10 * 86_400_000).toISOString().slice(0, 10));
+      expect(flat).toContain(
+        formatCalendarDay(new Date(Date.UTC(2025, 0, 6) + i * 10 * 86_400_000).toISOString().slice(0, 10)),
+      );
     // The company weighs in pounds: pounds first, kilograms in brackets (1 lb = 0.45359237 kg, NIST SP 811 B.8).
     expect(flat).toContain("400.0 lb (181.44 kg)");
     expect(flat).not.toMatch(/181\.44 kg \(400\.0 lb\)/);

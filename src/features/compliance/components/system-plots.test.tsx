@@ -63,7 +63,7 @@ describe("system plots", () => {
     const rows = within(rate)
       .getAllByRole("row")
       .map((r) => r.textContent);
-    expect(rows).toEqual(["DateLeak rate (% per year)Threshold (% per year)", "2026-01-154.020", "2026-03-0181.120"]);
+    expect(rows).toEqual(["DateLeak rate (% per year)Threshold (% per year)", "15 Jan 20264.020", "1 Mar 202681.120"]);
     const charge = screen.getByRole("figure", { name: "Charge added over time" });
     // in the reader's unit: 4 lb then 10 lb, 14 lb in all (1 lb = 0.45359237 kg, NIST SP 811)
     expect(within(charge).getByText(/14\.0 lb added over 2 days/)).toBeInTheDocument();

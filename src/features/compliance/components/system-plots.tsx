@@ -4,6 +4,7 @@ import type { MassUnit } from "../model/figures";
 import { chargeSeries, dayLabel, leakCheckSeries, leakRateSeries, timeDomain } from "../model/plot-series";
 
 import { PLOT_COLOURS, Plot } from "../../../components/ui/plot-frame";
+import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 
 const { accent: ACCENT, danger: DANGER, muted: MUTED, ok: OK } = PLOT_COLOURS;
 const HEIGHT = 240;
@@ -31,7 +32,11 @@ function LeakRatePlot({ r }: { r: SystemRecordsView }) {
       summary={`${data.length} figure${data.length === 1 ? "" : "s"}, ${above} above the threshold${hasThreshold ? "" : " (no threshold applies)"}; the dashed line is the threshold in force.`}
       table={{
         head: ["Date", "Leak rate (% per year)", "Threshold (% per year)"],
-        rows: data.map((p) => [p.day, p.percent.toFixed(1), p.threshold === null ? "none" : p.threshold]),
+        rows: data.map((p) => [
+          formatCalendarDay(p.day),
+          p.percent.toFixed(1),
+          p.threshold === null ? "none" : p.threshold,
+        ]),
       }}
     >
       {(width) => (
@@ -82,10 +87,13 @@ function ChargePlot({ r, unit, withChecks }: { r: SystemRecordsView; unit: MassU
       summary={`${total.toFixed(digits)} ${unit} added over ${charge.length} day${charge.length === 1 ? "" : "s"} (bars: each day's addition; line: running total)${withChecks ? `; ${checks.length} leak check${checks.length === 1 ? "" : "s"}, ${found.length} finding a leak (marks on the date axis)` : ""}.`}
       table={{
         head: ["Date", `Added (${unit})`, `Running total (${unit})`, ...(withChecks ? ["Leak check"] : [])],
+        // Oldest first, additions and checks interleaved by their ISO day; shown as every screen writes days.
         rows: [
           ...charge.map((p) => [p.day, p.added.toFixed(digits), p.total.toFixed(digits), ...(withChecks ? [""] : [])]),
           ...checks.map((c) => [c.day, "", "", c.leakFound ? "leak found" : "no leak found"]),
-        ].sort((a, b) => String(a[0]).localeCompare(String(b[0]))),
+        ]
+          .sort((a, b) => a[0].localeCompare(b[0]))
+          .map(([day, ...rest]) => [formatCalendarDay(day), ...rest]),
       }}
     >
       {(width) => (

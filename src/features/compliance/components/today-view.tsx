@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 import { Link } from "react-router";
 import { COMPONENT_LABELS, type FINDING_COMPONENTS } from "#core/contracts/findings";
 import type { TodayView as TodayData } from "#core/contracts/compliance";
@@ -75,7 +76,7 @@ export function TodayView({
                 filterValue: (r) => STATE_LABELS[r.state],
                 cell: (r) => (
                   <span className={STATE_TONE[r.state]}>
-                    {r.dueOn ?? "—"}
+                    {formatCalendarDay(r.dueOn ?? null)}
                     <br />
                     <span className="text-sm">
                       {STATE_LABELS[r.state]}, {daysInWords(r.daysLeft)}
@@ -200,7 +201,7 @@ export function TodayView({
                 filterValue: (r) => r.status,
               },
               { header: "Store", cell: (r) => r.storeName },
-              { header: "Found", cell: (r) => r.foundOn, sortValue: (r) => r.foundOn },
+              { header: "Found", cell: (r) => formatCalendarDay(r.foundOn), sortValue: (r) => r.foundOn },
               {
                 header: "Deadline",
                 sortValue: (r) => r.deadline ?? "",

@@ -83,7 +83,7 @@ describe("plot series", () => {
       ["2026-02-01", true],
       ["2026-06-01", false],
     ]);
-    expect(dayLabel(dayValue("2026-02-28"))).toBe("2026-02-28");
+    expect(dayLabel(dayValue("2026-02-28"))).toBe("28 Feb 2026");
     const [lo, hi] = timeDomain([dayValue("2026-01-01")]);
     expect(hi - lo).toBe(14 * 86_400_000);
   });

@@ -1,4 +1,5 @@
 import type { SystemRecordsView } from "#core/contracts/compliance";
+import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 import { KG_PER_POUND } from "#core/domain/units/mass";
 import type { MassUnit } from "./figures";
 
@@ -7,8 +8,9 @@ export function dayValue(day: string): number {
   return Date.parse(`${day}T00:00:00Z`);
 }
 
+/** The day as every screen writes it ("7 Dec 2026", core/domain/dates/format-in-zone.ts). */
 export function dayLabel(t: number): string {
-  return new Date(t).toISOString().slice(0, 10);
+  return formatCalendarDay(new Date(t).toISOString().slice(0, 10));
 }
 
 const inUnit = (kg: number, unit: MassUnit) => (unit === "lb" ? kg / KG_PER_POUND : kg);
