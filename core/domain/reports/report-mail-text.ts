@@ -20,7 +20,12 @@ function answers(s: ReportSuspect, f: ReportFinding): boolean {
   return f.x != null && f.y != null && Math.hypot(f.x - s.x, f.y - s.y) <= s.radiusM;
 }
 
-export function reportMailFindings(findings: ReportFinding[], suspects: ReportSuspect[]): string[] {
+export function reportMailFindings(
+  findings: ReportFinding[],
+  suspects: ReportSuspect[],
+  /** Said when there is nothing to name (the report model's wording for "no spot listed"). */
+  nothing = "No credible leak was found on this sweep.",
+): string[] {
   const rank = (status: string) => {
     const i = ORDER.indexOf(status);
     return i === -1 ? ORDER.length : i;
@@ -41,6 +46,6 @@ export function reportMailFindings(findings: ReportFinding[], suspects: ReportSu
         ...open.map((s) => `${s.rank}. ${s.fixture} at ${s.position} — ${s.reason}`),
       ].join("\n"),
     );
-  if (lines.length === 0) lines.push("No credible leak was found on this sweep.");
+  if (lines.length === 0) lines.push(nothing);
   return lines;
 }

@@ -6,7 +6,6 @@ import { memberships, membershipStores, reportSends, users } from "../../db/sche
 import { createConcentrationScale } from "#core/domain/fieldmap/concentration-ramp";
 import { readingsCsv } from "#core/domain/reports/readings-csv";
 import { reportMailFindings } from "#core/domain/reports/report-mail-text";
-import type { LengthPreference } from "#core/domain/units/format-units";
 import { badRequest, conflict, notFound } from "../../lib/http-error";
 import { deliveriesFor } from "../../mail/mail-status";
 import { createReportRunner } from "../../jobs/report-runner";
@@ -15,6 +14,7 @@ import { uploadsStorage } from "../../storage/uploads-storage";
 import type { Viewer } from "../../access/store-access";
 import { loadVisibleSweep } from "../../access/sweep-access";
 import { loadReportFacts, type ReportFacts } from "./report-facts";
+import type { ReaderUnits } from "./reader-units";
 
 const slug = (s: string) =>
   s
@@ -53,9 +53,9 @@ export async function sweepReportPdf(
   ctx: AppContext,
   viewer: Viewer,
   sweepId: string,
-  unit: LengthPreference,
+  units: ReaderUnits,
 ): Promise<{ filename: string; pdf: Buffer }> {
-  const facts = await loadReportFacts(ctx, viewer, sweepId, unit);
+  const facts = await loadReportFacts(ctx, viewer, sweepId, units);
   return { filename: `${fileBase(facts)}.pdf`, pdf: await buildReportPdf(ctx, facts) };
 }
 
@@ -63,10 +63,10 @@ export async function sweepReadingsCsv(
   ctx: AppContext,
   viewer: Viewer,
   sweepId: string,
-  unit: LengthPreference,
+  units: ReaderUnits,
 ): Promise<{ filename: string; csv: string }> {
-  const facts = await loadReportFacts(ctx, viewer, sweepId, unit);
-  return { filename: `${fileBase(facts)}-readings.csv`, csv: readingsCsv(facts.csv, unit, facts.timeZone) };
+  const facts = await loadReportFacts(ctx, viewer, sweepId, units);
+  return { filename: `${fileBase(facts)}-readings.csv`, csv: readingsCsv(facts.csv, units.length, facts.timeZone) };
 }
 
 /** The store contacts named on the sweep's store: the "send to the store contact" choice. */
@@ -99,9 +99,9 @@ export async function sendSweepReport(
   userId: string,
   sweepId: string,
   input: ParsedSend,
-  unit: LengthPreference,
+  units: ReaderUnits,
 ): Promise<ReportSend> {
-  const facts = await loadReportFacts(ctx, viewer, sweepId, unit);
+  const facts = await loadReportFacts(ctx, viewer, sweepId, units);
   const to = new Set(input.addresses.map((a) => a.toLowerCase()));
   if (input.storeContacts) {
     const contacts = await storeContacts(ctx, facts.sweep.companyId, facts.sweep.storeId);
@@ -118,7 +118,7 @@ export async function sendSweepReport(
   const text = [
     input.message,
     `${sender?.name ?? "A colleague"} sent you the sweep report for ${facts.storeName} (${facts.model.company}).`,
-    ...reportMailFindings(facts.model.findings, facts.model.suspects),
+    ...reportMailFindings(facts.model.findings, facts.model.suspects, facts.model.noSpot),
     "The report is attached as a PDF. Safety: leak checks and repairs are for certified technicians; local codes apply.",
   ]
     .filter(Boolean)
