@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { text } from "./text";
 import { lengthUnitSchema, massUnitSchema } from "./units";
+import { PAPER_SETTINGS } from "../domain/reports/paper";
 
 export const RULE_PROFILES = ["us-federal", "eu-fgas", "custom"] as const;
 export const LEAK_RATE_METHODS = ["annualizing", "rolling-average"] as const;
@@ -15,5 +16,7 @@ export const companySettings = z.object({
     .int("must be a whole number of days")
     .min(1, "must be at least 1 day")
     .max(730, "must be at most 730 days"),
+  /** Paper of every PDF; "profile" follows the rule profile. Left as saved when a request omits it. */
+  paperSize: z.enum(PAPER_SETTINGS, "must be profile, letter or a4").optional(),
 });
 export type CompanySettings = z.infer<typeof companySettings>;

@@ -8,7 +8,16 @@ export const sendReportInput = z
     storeContacts: z.boolean("must be true or false").default(false),
     /** Any other addresses; recipients need no account. */
     addresses: z
-      .array(z.email("must be an e-mail address"), "must be a list of e-mail addresses")
+      .array(
+        z.email({
+          // Name the address, so a sender with a list of ten sees which one to fix.
+          error: (issue) =>
+            typeof issue.input === "string" && issue.input.length > 0
+              ? `“${issue.input.length > 80 ? `${issue.input.slice(0, 80)}…` : issue.input}” is not an e-mail address`
+              : "must be an e-mail address",
+        }),
+        "must be a list of e-mail addresses",
+      )
       .max(20, "must name at most 20 addresses")
       .default([]),
     message: text("must be text").trim().max(2000, "must be at most 2,000 characters").default(""),

@@ -31,9 +31,19 @@ export interface ReportReading {
   note: string;
 }
 
+export interface ReportFinding {
+  status: string;
+  found: string;
+  where: string;
+  note: string;
+  /** Plan metres when the finding was placed on the plan: ties it to the suspect spot it answers. */
+  x?: number | null;
+  y?: number | null;
+}
+
 export interface SweepReportModel {
   title: string;
-  /** US Letter under US rules, A4 under EU F-gas (./paper.ts). */
+  /** The company's paper setting; by default US Letter under US rules, A4 under EU F-gas (./paper.ts). */
   paper: Paper;
   company: string;
   store: { name: string; address: string; timeZone: string };
@@ -48,7 +58,7 @@ export interface SweepReportModel {
   /** What the positions and strengths assume. */
   assumptions: string[];
   diagnostics: string[];
-  findings: { status: string; found: string; where: string; note: string }[];
+  findings: ReportFinding[];
   readings: ReportReading[];
   cautions: { text: string; source: string }[];
   /** The rendered field map (PNG) and the plan size in metres it covers. */

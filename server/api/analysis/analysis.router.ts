@@ -7,6 +7,7 @@ import { validate } from "../../middleware/validate";
 import { getAnalysis } from "./analysis.service";
 import { fixtureTrends } from "./fixture-trends.service";
 import { fixtureTrendsQuery } from "#core/contracts/fixture-trends";
+import { sweepSummary } from "./sweep-summary.service";
 
 const idParam = z.object({ id: z.uuid("must be a valid id") });
 const storeParam = z.object({ storeId: z.uuid("must be a valid id") });
@@ -29,6 +30,14 @@ export function analysisRouter(ctx: AppContext): Router {
     validate(fixtureTrendsQuery, "query"),
     async (req, res) => {
       res.json(await fixtureTrends(ctx, member(req), res.locals.params.storeId, res.locals.query));
+    },
+  );
+  router.get(
+    "/stores/:storeId/sweep-summary",
+    requireMember("stores.read"),
+    validate(storeParam, "params"),
+    async (req, res) => {
+      res.json({ sweeps: await sweepSummary(ctx, member(req), res.locals.params.storeId) });
     },
   );
   return router;

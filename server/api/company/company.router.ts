@@ -16,6 +16,7 @@ async function readSettings(ctx: AppContext, companyId: string): Promise<Company
     ruleProfile: c.ruleProfile,
     leakRateMethod: c.leakRateMethod,
     detectorCheckIntervalDays: c.detectorCheckIntervalDays,
+    paperSize: c.paperSize,
   };
 }
 

@@ -1,11 +1,15 @@
 import { Router } from "express";
 import { z } from "zod";
+import { eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { logExport } from "../../lib/security-log";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { getSystemRecords } from "../compliance/records.service";
 import { listFindings } from "../findings/findings.service";
+import { companyRules } from "../compliance/system-records";
+import { companyPaper } from "../../reports/company-paper";
+import { companies } from "../../db/schema/index";
 import { leakRateStatementPdf } from "./leak-rate-statement";
 import { recordsCsv } from "./records-csv";
 
@@ -44,7 +48,15 @@ export function exportsRouter(ctx: AppContext): Router {
     async (req, res) => {
       const records = await getSystemRecords(ctx, member(req), res.locals.params.id);
       const list = await listFindings(ctx, member(req), records.store.id, { systemId: records.system.id });
-      const pdf = await leakRateStatementPdf(records, list);
+      const companyId = member(req).companyId;
+      const [{ profile }, [company]] = await Promise.all([
+        companyRules(ctx, companyId),
+        ctx.db.select({ massUnit: companies.massUnit }).from(companies).where(eq(companies.id, companyId)),
+      ]);
+      const pdf = await leakRateStatementPdf(records, list, {
+        paper: await companyPaper(ctx, companyId, profile),
+        massUnit: company?.massUnit ?? "kg",
+      });
       await logExport(ctx, req, "leak-rate-statement.pdf", { systemId: records.system.id });
       res.set({
         "Content-Type": "application/pdf",

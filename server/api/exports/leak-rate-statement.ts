@@ -1,11 +1,322 @@
 import PDFDocument from "pdfkit";
 import type { SystemRecordsView } from "#core/contracts/compliance";
 import type { FindingDetail } from "#core/contracts/finding-actions";
+import { FINDING_EVENT_LABELS } from "#core/contracts/findings";
 import { APPLIANCE_TYPE_NAMES } from "#core/contracts/systems";
-import { statementFonts } from "./fonts";
 import { readableSource } from "#core/domain/compliance/citations";
+import { formatCalendarDay as day, formatInZone } from "#core/domain/dates/format-in-zone";
+import { formatFixed } from "#core/domain/numbers/round-half-up";
+import type { Paper } from "#core/domain/reports/paper";
+import { kgToPounds } from "#core/domain/units/mass";
+import type { MassPreference } from "#core/domain/units/format-units";
+import { drawTable, type PdfColumn } from "../../reports/pdf-table";
+import { statementFonts } from "./fonts";
 
-const KG_PER_LB = 0.45359237; // NIST SP 811, appendix B.8
+const MARGIN = 48;
+const INK = "#1f2430";
+const MUTED = "#5b6270";
+const RULE = "#c9ccd3";
+const TABLE = { font: "body", boldFont: "bold", size: 8.5, ink: INK, muted: MUTED, rule: RULE };
+
+type Doc = PDFKit.PDFDocument;
+
+export interface StatementOptions {
+  /** US Letter or A4: the company's paper setting (core/domain/reports/paper.ts). */
+  paper: Paper;
+  /** The company's mass unit, printed first; the other follows in brackets (statements go to non-members). */
+  massUnit: MassPreference;
+  generatedAt?: Date;
+}
+
+/** `4.54 kg (10.0 lb)` or `10.0 lb (4.54 kg)`: the company's unit first. */
+export function statementMass(kg: number, first: MassPreference): string {
+  const metric = `${formatFixed(kg, 2)} kg`;
+  const pounds = `${formatFixed(kgToPounds(kg), 1)} lb`;
+  return first === "lb" ? `${pounds} (${metric})` : `${metric} (${pounds})`;
+}
+
+function heading(doc: Doc, text: string) {
+  // Keep a heading with at least a few lines of what follows it.
+  if (doc.y > doc.page.height - doc.page.margins.bottom - 70) doc.addPage();
+  doc.moveDown(0.7).font("bold").fontSize(12).fillColor(INK).text(text, MARGIN);
+  doc.moveDown(0.25).font("body").fontSize(9.5);
+}
+
+function para(doc: Doc, text: string, colour = INK, size = 9.5) {
+  doc
+    .font("body")
+    .fontSize(size)
+    .fillColor(colour)
+    .text(text, MARGIN, doc.y, { width: doc.page.width - 2 * MARGIN });
+}
+
+function table(doc: Doc, columns: PdfColumn[], rows: string[][]) {
+  doc.moveDown(0.2);
+  drawTable(doc, columns, rows, TABLE);
+}
+
+function systemSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string) {
+  heading(doc, "System");
+  const gwp = r.system.refrigerant.gwp;
+  para(
+    doc,
+    `Refrigerant ${r.system.refrigerantId} (safety class ${r.system.refrigerant.safetyClass}${gwp ? `, GWP ${gwp.value} on ${gwp.basis}` : ""}); full charge ${mass(r.system.fullChargeKg)}.`,
+  );
+  para(
+    doc,
+    `${APPLIANCE_TYPE_NAMES[r.system.applianceType]}; automatic leak detection: ${r.system.automaticLeakDetection ? "yes" : "no"}.`,
+  );
+  if (r.co2e.known && r.co2e.tonnes !== null)
+    para(
+      doc,
+      `CO2-equivalent of the charge: ${r.co2e.tonnes.toFixed(2)} t (kg × GWP ${r.co2e.gwp} / 1000; GWP source ${readableSource(r.co2e.source)}).`,
+    );
+  if (gwp) para(doc, `GWP basis: ${gwp.statement}.`);
+}
+
+function profileSection(doc: Doc, r: SystemRecordsView) {
+  heading(doc, "Rule profile");
+  para(
+    doc,
+    r.profile.leakRateRules
+      ? `${r.profile.name}; leak-rate method: ${r.profile.method === "annualizing" ? "annualizing" : "rolling average"}.`
+      : `${r.profile.name}: leak checks at intervals set by the charge's CO2-equivalent; a re-check after every repair.`,
+  );
+  if (r.profile.leakRateRules)
+    para(
+      doc,
+      r.applicability.applies
+        ? `Applies: ${r.applicability.reason}. Threshold ${r.applicability.thresholdPercent} % per year (${readableSource(r.applicability.thresholdSource ?? "")}).`
+        : `No leak-rate threshold applies: ${r.applicability.reason}.`,
+    );
+  if (r.leakCheck)
+    para(
+      doc,
+      `Leak checks: ${r.leakCheck.reason}.${r.leakCheck.withoutLdsMonths !== null && r.leakCheck.withLdsMonths !== null ? ` Without a leak detection system every ${r.leakCheck.withoutLdsMonths} months, with one every ${r.leakCheck.withLdsMonths} months.` : ""}`,
+    );
+  if (r.nextInspection)
+    para(
+      doc,
+      `Next inspection due ${day(r.nextInspection.dueOn)} (${r.nextInspection.reason}; ${readableSource(r.nextInspection.source)}).`,
+    );
+}
+
+function leakRateSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string) {
+  heading(doc, "Leak rate at every addition");
+  const byId = new Map(r.additions.map((a) => [a.id, a]));
+  const rows = r.leakRates.map((p) => [
+    day(p.date),
+    mass(p.additionIds.reduce((s, id) => s + (byId.get(id)?.amountKg ?? 0), 0)),
+    p.method === "annualizing" ? `${p.days} d` : `from ${day(p.windowStart)}`,
+    mass(p.countedKg),
+    `${p.percent.toFixed(1)} %${p.exceeds ? " (above)" : ""}`,
+    p.thresholdPercent === null ? "none" : `${p.thresholdPercent} %`,
+    day(p.repairDue),
+  ]);
+  if (rows.length)
+    table(
+      doc,
+      [
+        { title: "Date", share: 62 },
+        { title: "Added", share: 92 },
+        { title: r.profile.method === "annualizing" ? "Days" : "Window", share: 62 },
+        { title: "Counted", share: 92 },
+        { title: "Leak rate", share: 62, align: "right" },
+        { title: "Threshold", share: 52, align: "right" },
+        { title: "Repair due", share: 64 },
+      ],
+      rows,
+    );
+  else
+    para(
+      doc,
+      r.additions.some((a) => !a.voided)
+        ? "No leak-rate figure: the refrigerant added was excluded from the calculation."
+        : "No refrigerant has been added.",
+    );
+  doc.moveDown(0.3);
+  para(
+    doc,
+    r.profile.method === "annualizing"
+      ? "Annualizing method (40 CFR 82.152 / 84.102): leak rate % = (added ÷ full charge) ÷ (days ÷ 365) × 100, where days is the shorter of the days since the previous addition and 365."
+      : "Rolling-average method (40 CFR 82.152 / 84.102): added in the previous 365 days (or since the last follow-up verification test) ÷ full charge × 100.",
+    MUTED,
+    8,
+  );
+}
+
+function euRecordsSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string) {
+  // EU F-gas: no leak-rate threshold; the record is the refrigerant added and the leak checks.
+  heading(doc, "Refrigerant added");
+  const live = r.additions.filter((a) => !a.voided);
+  if (live.length === 0) para(doc, "No refrigerant has been added.");
+  else
+    table(
+      doc,
+      [
+        { title: "Date", share: 62 },
+        { title: "Amount", share: 92 },
+        { title: "Technician", share: 110 },
+        { title: "Reason", share: 222 },
+      ],
+      live.map((a) => [day(a.addedOn), mass(a.amountKg), a.technician, a.reason]),
+    );
+  heading(doc, "Leak checks");
+  if (r.leakChecks.length === 0) para(doc, "No leak check recorded.");
+  else
+    table(
+      doc,
+      [
+        { title: "Date", share: 62 },
+        { title: "Result", share: 80 },
+        { title: "Checked by", share: 110 },
+        { title: "Note", share: 234 },
+      ],
+      r.leakChecks.map((c) => [day(c.checkedOn), c.leakFound ? "leak found" : "no leak found", c.by, c.note]),
+    );
+}
+
+function chronicSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string) {
+  if (!r.chronic.length) return;
+  heading(doc, "Added per calendar year");
+  table(
+    doc,
+    [
+      { title: "Year", share: 40 },
+      { title: "Added", share: 92 },
+      { title: "Of full charge", share: 64, align: "right" },
+      { title: "Chronic leaker", share: 290 },
+    ],
+    r.chronic.map((y) => [
+      String(y.year),
+      mass(y.addedKg),
+      `${y.percent.toFixed(1)} %`,
+      y.chronic
+        ? y.filed
+          ? `yes; report filed on ${day(y.filed.on)} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}`
+          : `yes; report due ${day(y.reportDue)}`
+        : "no",
+    ]),
+  );
+  if (r.chronicRule)
+    para(
+      doc,
+      `Chronic leaker from ${r.chronicRule.percent} % of the full charge in a calendar year, reported by ${r.chronicRule.reportBy} (${readableSource(r.chronicRule.source)}).`,
+    );
+}
+
+function voidedSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string) {
+  const voided = r.additions.filter((a) => a.voided);
+  if (!voided.length) return;
+  heading(doc, "Corrected or voided entries (kept for the audit trail)");
+  table(
+    doc,
+    [
+      { title: "Date", share: 62 },
+      { title: "Amount", share: 92 },
+      { title: "Technician", share: 100 },
+      { title: "Voided", share: 110 },
+      { title: "Why", share: 122 },
+    ],
+    voided.map((a) => [
+      day(a.addedOn),
+      mass(a.amountKg),
+      a.technician,
+      `${formatInZone(a.voided!.at, r.store.timeZone, "date")} by ${a.voided!.by}`,
+      a.voided!.reason,
+    ]),
+  );
+}
+
+function findingsSection(doc: Doc, findingList: FindingDetail[]) {
+  heading(doc, "Findings");
+  if (findingList.length === 0) para(doc, "No findings on this system.");
+  for (const f of findingList) {
+    if (doc.y > doc.page.height - doc.page.margins.bottom - 50) doc.addPage();
+    doc
+      .moveDown(0.3)
+      .font("bold")
+      .fontSize(9.5)
+      .fillColor(INK)
+      .text(
+        `${f.component ?? "Component not recorded"} – ${f.status}${f.dismissReason ? ` (${f.dismissReason})` : ""}`,
+        MARGIN,
+      );
+    table(
+      doc,
+      [
+        { title: "Date", share: 62 },
+        { title: "Step", share: 120 },
+        { title: "Signed", share: 110 },
+        { title: "Note", share: 194 },
+      ],
+      f.events.map((e) => [
+        day(e.on),
+        `${FINDING_EVENT_LABELS[e.kind]}${e.result ? ` (${e.result})` : ""}`,
+        e.by,
+        e.note,
+      ]),
+    );
+  }
+}
+
+function dueSection(doc: Doc, r: SystemRecordsView) {
+  if (!r.due.length) return;
+  heading(doc, "Due");
+  table(
+    doc,
+    [
+      { title: "Due", share: 62 },
+      { title: "State", share: 62 },
+      { title: "What", share: 212 },
+      { title: "Rule", share: 150 },
+    ],
+    r.due.map((d) => [d.dueOn ? day(d.dueOn) : "no date", d.state.replace("-", " "), d.what, readableSource(d.source)]),
+  );
+}
+
+function recordKeepingSection(doc: Doc, r: SystemRecordsView) {
+  heading(doc, "Record keeping and safety");
+  para(
+    doc,
+    "“reading”: how the product applies a rule whose text it has not confirmed; every reading is listed once on the company's rule-profile page (Settings, Readings).",
+  );
+  para(
+    doc,
+    `Keep these records for at least ${r.profile.retentionYears} years (${readableSource(r.profile.retentionSource)}).`,
+  );
+  para(
+    doc,
+    r.profile.wording === "eu"
+      ? "Only certified personnel check for leaks, recover, install or service equipment containing fluorinated gases (Regulation (EU) 2024/573). Local codes and licensed practice govern."
+      : "Only certified technicians attach gauges or add or remove refrigerant (in the US, EPA Section 608). Local codes and licensed practice govern.",
+  );
+}
+
+/** `text`, cut with an ellipsis to fit `width` at the current font: a footer stays on its one line. */
+function fitted(doc: Doc, text: string, width: number): string {
+  if (doc.widthOfString(text) <= width) return text;
+  let cut = text;
+  while (cut.length > 1 && doc.widthOfString(`${cut}…`) > width) cut = cut.slice(0, -1);
+  return `${cut.trimEnd()}…`;
+}
+
+function footers(doc: Doc, r: SystemRecordsView, generated: string) {
+  const range = doc.bufferedPageRange();
+  const width = doc.page.width - 2 * MARGIN;
+  for (let i = range.start; i < range.start + range.count; i++) {
+    doc.switchToPage(i);
+    // The footer sits in the bottom margin: without lifting the margin pdfkit would start a blank page for it.
+    doc.page.margins.bottom = 0;
+    const y = doc.page.height - MARGIN + 16;
+    const page = `page ${i + 1} of ${range.count}`;
+    doc.font("body").fontSize(8).fillColor(MUTED);
+    const pageWidth = doc.widthOfString(page);
+    doc.text(page, MARGIN + width - pageWidth, y, { lineBreak: false });
+    const title = fitted(doc, `${r.system.name} · ${r.store.name} · ${generated}`, width - pageWidth - 16);
+    doc.text(title, MARGIN, y, { lineBreak: false });
+  }
+}
 
 /**
  * The leak-rate statement of one system as a PDF: what the system is, which rule applies and
@@ -15,12 +326,13 @@ const KG_PER_LB = 0.45359237; // NIST SP 811, appendix B.8
 export function leakRateStatementPdf(
   r: SystemRecordsView,
   findingList: FindingDetail[],
-  generatedAt = new Date(),
+  options: StatementOptions,
 ): Promise<Buffer> {
   const fonts = statementFonts();
   const doc = new PDFDocument({
-    size: "A4",
-    margin: 48,
+    size: options.paper === "a4" ? "A4" : "LETTER",
+    margin: MARGIN,
+    bufferPages: true,
     info: { Title: `Leak-rate statement – ${r.system.name}`, Creator: "Plumeline" },
   });
   doc.registerFont("body", fonts.regular);
@@ -31,168 +343,28 @@ export function leakRateStatementPdf(
     doc.on("end", () => resolve(Buffer.concat(chunks)));
     doc.on("error", reject);
   });
+  const mass = (kg: number) => statementMass(kg, options.massUnit);
+  const generated = `made ${formatInZone(options.generatedAt ?? new Date(), r.store.timeZone, "dateTime")}`;
 
-  const h = (text: string) =>
-    doc.moveDown(0.6).font("bold").fontSize(12).text(text).moveDown(0.2).font("body").fontSize(9.5);
-  const line = (text: string) => doc.text(text);
-  const mass = (kg: number) => `${kg.toFixed(2)} kg (${(kg / KG_PER_LB).toFixed(1)} lb)`;
-
-  doc.font("bold").fontSize(17).text("Leak-rate statement");
-  doc.font("body").fontSize(10).text(`${r.system.name} · ${r.store.name}`);
-  doc
-    .fontSize(8.5)
-    .fillColor("#444")
-    .text(
-      `Generated ${generatedAt.toISOString().slice(0, 16).replace("T", " ")} UTC; dates are on the store's calendar (${r.store.timeZone}); today there is ${r.today}.`,
-    )
-    .fillColor("black");
-
-  h("System");
-  line(
-    `Refrigerant ${r.system.refrigerantId} (safety class ${r.system.refrigerant.safetyClass}${r.system.refrigerant.gwp ? `, GWP ${r.system.refrigerant.gwp.value} on ${r.system.refrigerant.gwp.basis}` : ""}); full charge ${mass(r.system.fullChargeKg)}.`,
+  doc.font("bold").fontSize(17).fillColor(INK).text("Leak-rate statement", MARGIN);
+  para(doc, `${r.system.name} · ${r.store.name}`, INK, 10);
+  para(
+    doc,
+    `${generated}; dates are on the store's calendar (${r.store.timeZone}); today there is ${day(r.today)}.`,
+    MUTED,
+    8.5,
   );
-  line(
-    `${APPLIANCE_TYPE_NAMES[r.system.applianceType]}; automatic leak detection: ${r.system.automaticLeakDetection ? "yes" : "no"}.`,
-  );
-  if (r.co2e.known && r.co2e.tonnes !== null)
-    line(
-      `CO2-equivalent of the charge: ${r.co2e.tonnes.toFixed(2)} t (kg × GWP ${r.co2e.gwp} / 1000; GWP source ${readableSource(r.co2e.source)}).`,
-    );
-  if (r.system.refrigerant.gwp) line(`GWP basis: ${r.system.refrigerant.gwp.statement}.`);
 
-  h("Rule profile");
-  line(
-    r.profile.leakRateRules
-      ? `${r.profile.name}; leak-rate method: ${r.profile.method === "annualizing" ? "annualizing" : "rolling average"}.`
-      : `${r.profile.name}: leak checks at intervals set by the charge's CO2-equivalent; a re-check after every repair.`,
-  );
-  if (r.profile.leakRateRules)
-    line(
-      r.applicability.applies
-        ? `Applies: ${r.applicability.reason}. Threshold ${r.applicability.thresholdPercent} % per year (${readableSource(r.applicability.thresholdSource ?? "")}).`
-        : `No leak-rate threshold applies: ${r.applicability.reason}.`,
-    );
-  if (r.leakCheck)
-    line(
-      `Leak checks: ${r.leakCheck.reason}.${r.leakCheck.withoutLdsMonths !== null && r.leakCheck.withLdsMonths !== null ? ` Without a leak detection system every ${r.leakCheck.withoutLdsMonths} months, with one every ${r.leakCheck.withLdsMonths} months.` : ""}`,
-    );
-  if (r.nextInspection)
-    line(
-      `Next inspection due ${r.nextInspection.dueOn} (${r.nextInspection.reason}; ${readableSource(r.nextInspection.source)}).`,
-    );
-
-  if (r.profile.leakRateRules) {
-    h("Leak rate at every addition");
-    const cols = [48, 118, 190, 262, 330, 400, 470];
-    const row = (cells: string[], bold = false) => {
-      const y = doc.y;
-      doc.font(bold ? "bold" : "body").fontSize(8.5);
-      cells.forEach((c, i) => doc.text(c, cols[i], y, { width: (cols[i + 1] ?? 547) - cols[i] - 4, lineBreak: false }));
-      doc.x = 48;
-      doc.y = y + 13;
-      if (doc.y > 760) doc.addPage();
-    };
-    row(["Date", "Added", "Days / window", "Counted", "Leak rate", "Threshold", "Repair due"], true);
-    const byId = new Map(r.additions.map((a) => [a.id, a]));
-    for (const p of r.leakRates) {
-      const added = p.additionIds.reduce((s, id) => s + (byId.get(id)?.amountKg ?? 0), 0);
-      row([
-        p.date,
-        mass(added),
-        p.method === "annualizing" ? `${p.days} d` : `${p.windowStart} →`,
-        mass(p.countedKg),
-        `${p.percent.toFixed(1)} %${p.exceeds ? " (above)" : ""}`,
-        p.thresholdPercent === null ? "none" : `${p.thresholdPercent} %`,
-        p.repairDue ?? "",
-      ]);
-    }
-    if (r.leakRates.length === 0)
-      line(
-        r.additions.some((a) => !a.voided)
-          ? "No leak-rate figure: the refrigerant added was excluded from the calculation."
-          : "No refrigerant has been added.",
-      );
-    doc
-      .font("body")
-      .fontSize(8)
-      .fillColor("#444")
-      .text(
-        r.profile.method === "annualizing"
-          ? "Annualizing method (40 CFR 82.152 / 84.102): leak rate % = (added ÷ full charge) ÷ (days ÷ 365) × 100, where days is the shorter of the days since the previous addition and 365."
-          : "Rolling-average method (40 CFR 82.152 / 84.102): added in the previous 365 days (or since the last follow-up verification test) ÷ full charge × 100.",
-        48,
-      )
-      .fillColor("black")
-      .fontSize(9.5);
-  } else {
-    // EU F-gas: no leak-rate threshold; the record is the refrigerant added and the leak checks.
-    h("Refrigerant added");
-    const live = r.additions.filter((a) => !a.voided);
-    if (live.length === 0) line("No refrigerant has been added.");
-    for (const a of live) line(`${a.addedOn}: ${mass(a.amountKg)} by ${a.technician}: ${a.reason}`);
-    h("Leak checks");
-    if (r.leakChecks.length === 0) line("No leak check recorded.");
-    for (const c of r.leakChecks)
-      line(
-        `${c.checkedOn}: ${c.leakFound ? "leak found" : "no leak found"}, by ${c.by}${c.note ? ` – ${c.note}` : ""}`,
-      );
-  }
-
-  if (r.chronic.length) {
-    h("Added per calendar year");
-    for (const y of r.chronic) {
-      const status = y.chronic
-        ? y.filed
-          ? `chronic leaker; report filed on ${y.filed.on} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}`
-          : `chronic leaker; report due ${y.reportDue}`
-        : "";
-      line(
-        `${y.year}: ${mass(y.addedKg)}, ${y.percent.toFixed(1)} % of the full charge${status ? ` — ${status}` : ""}.`,
-      );
-    }
-    if (r.chronicRule)
-      line(
-        `Chronic leaker from ${r.chronicRule.percent} % of the full charge in a calendar year, reported by ${r.chronicRule.reportBy} (${readableSource(r.chronicRule.source)}).`,
-      );
-  }
-
-  const voided = r.additions.filter((a) => a.voided);
-  if (voided.length) {
-    h("Corrected or voided entries (kept for the audit trail)");
-    for (const a of voided)
-      line(
-        `${a.addedOn}: ${mass(a.amountKg)} by ${a.technician}, voided ${a.voided!.at.slice(0, 10)} by ${a.voided!.by}: ${a.voided!.reason}`,
-      );
-  }
-
-  h("Findings");
-  if (findingList.length === 0) line("No findings on this system.");
-  for (const f of findingList) {
-    doc
-      .font("bold")
-      .text(`${f.component ?? "Component not recorded"} – ${f.status}${f.dismissReason ? ` (${f.dismissReason})` : ""}`)
-      .font("body");
-    for (const e of f.events)
-      line(`   ${e.on}  ${e.kind}${e.result ? ` (${e.result})` : ""}  signed ${e.by}${e.note ? ` – ${e.note}` : ""}`);
-  }
-
-  if (r.due.length) {
-    h("Due");
-    for (const d of r.due) line(`${d.dueOn ?? "no date"} (${d.state}): ${d.what}. Rule: ${readableSource(d.source)}`);
-  }
-
-  h("Record keeping");
-  line(
-    "“reading”: how the product applies a rule whose text it has not confirmed; every reading is listed once on the company's rule-profile page (Settings, Readings).",
-  );
-  line(
-    `Keep these records for at least ${r.profile.retentionYears} years (${readableSource(r.profile.retentionSource)}).`,
-  );
-  line(
-    r.profile.wording === "eu"
-      ? "Only certified personnel check for leaks, recover, install or service equipment containing fluorinated gases (Regulation (EU) 2024/573). Local codes and licensed practice govern."
-      : "Only certified technicians attach gauges or add or remove refrigerant (in the US, EPA Section 608). Local codes and licensed practice govern.",
-  );
+  systemSection(doc, r, mass);
+  profileSection(doc, r);
+  if (r.profile.leakRateRules) leakRateSection(doc, r, mass);
+  else euRecordsSection(doc, r, mass);
+  chronicSection(doc, r, mass);
+  voidedSection(doc, r, mass);
+  findingsSection(doc, findingList);
+  dueSection(doc, r);
+  recordKeepingSection(doc, r);
+  footers(doc, r, generated);
   doc.end();
   return done;
 }

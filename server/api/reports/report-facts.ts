@@ -33,7 +33,7 @@ import type { Viewer } from "../../access/store-access";
 import { loadVisibleSweep, type SweepRow } from "../../access/sweep-access";
 import { ensureAnalysis, rowField, type AnalysisRow } from "../analysis/analysis.service";
 import { companyRules } from "../compliance/system-records";
-import { paperFor } from "#core/domain/reports/paper";
+import { companyPaper } from "../../reports/company-paper";
 import { formatInZone } from "#core/domain/dates/format-in-zone";
 
 export interface ReportFacts {
@@ -87,6 +87,7 @@ export async function loadReportFacts(
     companyRules(ctx, sweep.companyId),
   ]);
   const tz = store.timeZone;
+  const paper = await companyPaper(ctx, sweep.companyId, rules.profile);
   const [fixtureRows, readingRows, findingRows, systemRows] = await Promise.all([
     ctx.db.select().from(fixtures).where(eq(fixtures.planId, sweep.planId)).orderBy(asc(fixtures.position)),
     ctx.db
@@ -132,7 +133,7 @@ export async function loadReportFacts(
   const model: SweepReportModel = {
     title: `Sweep report — ${store.name}`,
     company: company?.name ?? "",
-    paper: paperFor(rules.profile),
+    paper,
     store: { name: store.name, address: store.address, timeZone: tz },
     sweep: {
       started: zonedDateTime(sweep.startedAt, tz),
@@ -181,6 +182,8 @@ export async function loadReportFacts(
           .filter(Boolean)
           .join(", ") || "on the plan",
       note: f.note,
+      x: f.x,
+      y: f.y,
     })),
     readings: readingRows.map((r, i) => {
       const c = corrected.get(r.id);

@@ -5,6 +5,7 @@ import type { ReportRecipient, ReportSend, SendReportInput } from "#core/contrac
 import { memberships, membershipStores, reportSends, users } from "../../db/schema/index";
 import { createConcentrationScale } from "#core/domain/fieldmap/concentration-ramp";
 import { readingsCsv } from "#core/domain/reports/readings-csv";
+import { reportMailFindings } from "#core/domain/reports/report-mail-text";
 import { badRequest, conflict, notFound } from "../../lib/http-error";
 import { deliveriesFor } from "../../mail/mail-status";
 import { createReportRunner } from "../../jobs/report-runner";
@@ -114,11 +115,10 @@ export async function sendSweepReport(
   const filename = `${fileBase(facts)}.pdf`;
   const [sender] = await ctx.db.select({ name: users.name }).from(users).where(eq(users.id, userId));
   const subject = `Sweep report: ${facts.storeName}, ${facts.model.sweep.started}`;
-  const top = facts.model.suspects[0];
   const text = [
     input.message,
     `${sender?.name ?? "A colleague"} sent you the sweep report for ${facts.storeName} (${facts.model.company}).`,
-    top ? `Top suspect spot: ${top.fixture} at ${top.position} — ${top.reason}` : facts.model.noSpot,
+    ...reportMailFindings(facts.model.findings, facts.model.suspects, facts.model.noSpot),
     "The report is attached as a PDF. Safety: leak checks and repairs are for certified technicians; local codes apply.",
   ]
     .filter(Boolean)

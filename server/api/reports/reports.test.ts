@@ -6,7 +6,7 @@ import { agentFor, createTestApp, drainMail, type Agent, type TestApp } from "..
 import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 import { pdfText } from "../../../tests/helpers/pdf-text";
 import { caseLineFixtures, caseWalkReadings } from "../../../tests/helpers/sweep-walk";
-import { detectors, outboxMessages, reportSends, systems, users } from "../../db/schema/index";
+import { companies, detectors, outboxMessages, reportSends, systems, users } from "../../db/schema/index";
 import type { Role } from "#core/domain/roles";
 
 let t: TestApp;
@@ -204,7 +204,8 @@ describe("e-mailing the report", () => {
     expect(caught).toHaveLength(1);
     expect(caught[0].to.sort()).toEqual(res.body.recipients.sort());
     // the suspect worded by the same presenter as the PDF: by name, never by id
-    expect(caught[0].text).toContain("Top suspect spot: Dairy 1–4 at ");
+    // nothing found yet: the suspect spots to check, in rank order (core/domain/reports/report-mail-text.ts)
+    expect(caught[0].text).toContain("Suspect spots to check:\n1. Dairy 1–4 at ");
     expect(caught[0].text).toContain("one source inside the open case Dairy 1–4 explains them best");
     expect(caught[0].text).not.toContain(caseId);
     expect(caught[0].attachments).toHaveLength(1);
@@ -219,6 +220,69 @@ describe("e-mailing the report", () => {
       sentBy: "engineer of Ćwikła & Sons Grocers",
       delivery: { state: "sent", attempts: 1, error: null },
     });
+  });
+
+  it("names the confirmed finding first, before an earlier suspected one at the top suspect spot", async () => {
+    const eng = await as("engineer");
+    const tech = await as("technician");
+    const top = (await eng.get(`/api/sweeps/${sweepId}/analysis`)).body.candidates[0];
+    const suspected = await tech.post(`/api/stores/${co.store.id}/findings`, {
+      source: "suspect-spot",
+      status: "suspected",
+      sweepId,
+      fixtureId: caseId,
+      x: top.x,
+      y: top.y,
+      foundAt: new Date(Date.now() - 20 * 60_000).toISOString(),
+    });
+    expect(suspected.status, JSON.stringify(suspected.body)).toBe(201);
+    // Confirmed later, at the drop at the far end of the line: not the top suspect spot.
+    const confirmed = await tech.post(`/api/stores/${co.store.id}/findings`, {
+      status: "confirmed",
+      sweepId,
+      fixtureId: dropId,
+      component: "flare",
+      x: 21,
+      y: 5,
+      note: "bubbles at the flare nut",
+      foundAt: new Date(Date.now() - 10 * 60_000).toISOString(),
+    });
+    expect(confirmed.status, JSON.stringify(confirmed.body)).toBe(201);
+    const res = await eng.post(`/api/sweeps/${sweepId}/report/send`, { addresses: ["store.manager@example.org"] });
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    await drainMail(t);
+    const mail = (await t.ctx.db.select().from(outboxMessages)).find((m) =>
+      m.to.includes("store.manager@example.org"),
+    )!;
+    const paragraphs = mail.text.split("\n\n");
+    const first = paragraphs.findIndex((p) => /^Confirmed leak: Drop D2, Flare/.test(p));
+    const second = paragraphs.findIndex((p) =>
+      /^Suspected, not yet confirmed: Dairy 1–4, [^(]*\(suspect spot 1\b/.test(p),
+    );
+    expect(first, mail.text).toBeGreaterThan(0);
+    expect(second, mail.text).toBeGreaterThan(first);
+    expect(mail.text).toContain("bubbles at the flare nut");
+    // The top spot is answered by the suspected finding: it is not listed again as "still to check".
+    expect(mail.text).not.toMatch(/still to check:\n1\. /);
+  });
+
+  it("prints the sweep report on the company's paper setting", async () => {
+    const pageSize = async () => {
+      const res = await (await as("engineer")).agent
+        .get(`/api/sweeps/${sweepId}/report.pdf`)
+        .buffer(true)
+        .parse(binary as never);
+      const page = (await PDFDocument.load(res.body as Buffer)).getPage(0);
+      return [Math.round(page.getWidth()), Math.round(page.getHeight())];
+    };
+    // ISO 216 A4 = 595.28 × 841.89 pt; US Letter = 612 × 792 pt. The company works under the US profile.
+    expect(await pageSize()).toEqual([612, 792]);
+    await t.ctx.db.update(companies).set({ paperSize: "a4" }).where(eq(companies.id, co.company.id));
+    try {
+      expect(await pageSize()).toEqual([595, 842]);
+    } finally {
+      await t.ctx.db.update(companies).set({ paperSize: "profile" }).where(eq(companies.id, co.company.id));
+    }
   });
 
   it("needs reports.send, a recipient, and well-formed addresses", async () => {
@@ -237,5 +301,15 @@ describe("e-mailing the report", () => {
     const bad = await eng.post(`/api/sweeps/${sweepId}/report/send`, { addresses: ["not-an-address"] });
     expect(bad.status).toBe(400);
     expect(JSON.stringify(bad.body.error.fields)).toMatch(/e-mail address/);
+    // Each bad address in a list is named in its own field error; the good ones raise none.
+    const list = await eng.post(`/api/sweeps/${sweepId}/report/send`, {
+      addresses: ["ok@example.org", "dana@", "also.ok@example.org", "lee at example.org"],
+    });
+    expect(list.status).toBe(400);
+    expect(list.body.error.fields).toEqual({
+      "addresses.1": "“dana@” is not an e-mail address",
+      "addresses.3": "“lee at example.org” is not an e-mail address",
+    });
+    expect(list.body.error.message).toContain("“dana@” is not an e-mail address");
   });
 });

@@ -17,6 +17,10 @@ export const companies = pgTable("companies", {
     .notNull()
     .default("annualizing"),
   detectorCheckIntervalDays: integer().notNull().default(30),
+  /** Paper of every PDF: "profile" follows the rule profile (Letter in the US, A4 under EU F-gas). */
+  paperSize: text({ enum: ["profile", "letter", "a4"] })
+    .notNull()
+    .default("profile"),
   createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
 });
 

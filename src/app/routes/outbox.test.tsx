@@ -33,9 +33,16 @@ describe("outbox page", () => {
       },
     });
     renderApp("/outbox");
-    const list = await screen.findByRole("list", { name: "Messages, newest first" });
-    const subjects = [...list.querySelectorAll("li span.font-bold")].map((el) => el.textContent);
+    const list = await screen.findByRole("table", { name: "Messages, newest first" });
+    const subjects = [...list.querySelectorAll("tbody span.font-bold")].map((el) => el.textContent);
     expect(subjects).toEqual(["Choose a new password", "You are invited to Northfield Cold Care"]);
+    // searched by recipient or words in the body; the count says how many are shown
+    fireEvent.change(screen.getByLabelText("Search messages"), { target: { value: "invited" } });
+    expect([...list.querySelectorAll("tbody span.font-bold")].map((el) => el.textContent)).toEqual([
+      "You are invited to Northfield Cold Care",
+    ]);
+    expect(screen.getByText("Showing 1 of 2.")).toBeInTheDocument();
+    fireEvent.change(screen.getByLabelText("Search messages"), { target: { value: "" } });
 
     fireEvent.click(screen.getByRole("link", { name: /Choose a new password/ }));
     const link = await screen.findByRole("link", {

@@ -12,6 +12,7 @@ import { useRecordCharge } from "../api/record-charge";
 import { daysInWords, formatMass, formatPercent, STATE_LABELS, type MassUnit } from "../model/figures";
 import { ChargeForm } from "./charge-form";
 import { ChronicSection } from "./chronic-section";
+import { SystemPlots } from "./system-plots";
 import { RevisionsSection } from "./revisions-section";
 import { LeakCheckForm } from "./leak-check-form";
 import { readableSource } from "#core/domain/compliance/citations";
@@ -181,6 +182,8 @@ export function SystemRecords({
         </section>
       ) : null}
 
+      <SystemPlots r={r} unit={unit} />
+
       <section id="leak-rates" aria-labelledby="rates" className="space-y-2">
         <h2 id="rates" className="text-xl font-bold">
           {r.profile.leakRateRules ? "Leak rate at every addition" : "Leak rate"}
@@ -202,7 +205,7 @@ export function SystemRecords({
             rows={r.leakRates}
             rowKey={(p) => p.date}
             columns={[
-              { header: "Date", cell: (p) => p.date },
+              { header: "Date", cell: (p) => p.date, sortValue: (p) => p.date },
               {
                 header: "Added",
                 cell: (p) =>
@@ -218,6 +221,8 @@ export function SystemRecords({
               { header: "Counted", cell: (p) => formatMass(p.countedKg, unit) },
               {
                 header: "Leak rate",
+                sortValue: (p) => p.percent,
+                filterValue: (p) => (p.exceeds ? "above the threshold" : "within the threshold"),
                 cell: (p) => (
                   <span className={p.exceeds ? "font-bold text-danger" : ""}>
                     {formatPercent(p.percent)}
@@ -244,13 +249,16 @@ export function SystemRecords({
           caption="Charge-added entries, voided ones kept"
           rows={[...r.additions].reverse()}
           rowKey={(x) => x.id}
+          search="Search charge added"
           columns={[
             {
               header: "Date",
               cell: (x) => (x.voided ? <s>{formatCalendarDay(x.addedOn)}</s> : formatCalendarDay(x.addedOn)),
+              sortValue: (x) => x.addedOn,
             },
             {
               header: "Amount",
+              sortValue: (x) => x.amountKg,
               cell: (x) => (
                 <>
                   {x.voided ? <s>{formatMass(x.amountKg, unit)}</s> : formatMass(x.amountKg, unit)}
@@ -261,9 +269,15 @@ export function SystemRecords({
                 </>
               ),
             },
-            { header: "Technician", cell: (x) => x.technician },
+            {
+              header: "Technician",
+              cell: (x) => x.technician,
+              searchText: (x) => x.technician,
+              filterValue: (x) => x.technician,
+            },
             {
               header: "Reason",
+              searchText: (x) => x.reason,
               cell: (x) => (
                 <>
                   {x.reason}
@@ -280,6 +294,9 @@ export function SystemRecords({
             },
             {
               header: "Audit",
+              filterValue: (x) => (x.voided ? "voided" : "in force"),
+              searchText: (x) =>
+                x.voided ? `voided ${x.voided.by} ${x.voided.reason}` : `recorded by ${x.recordedBy}`,
               cell: (x) =>
                 x.voided ? (
                   <span className="text-sm">

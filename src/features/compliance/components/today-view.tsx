@@ -68,9 +68,12 @@ export function TodayView({
             caption="Due and overdue"
             rows={due}
             rowKey={(r) => `${r.kind}-${r.systemId ?? r.detectorId}-${r.findingId ?? ""}-${r.dueOn}`}
+            search="Search what is due"
             columns={[
               {
                 header: "Due",
+                sortValue: (r) => r.dueOn ?? "",
+                filterValue: (r) => STATE_LABELS[r.state],
                 cell: (r) => (
                   <span className={STATE_TONE[r.state]}>
                     {formatCalendarDay(r.dueOn ?? null)}
@@ -83,6 +86,8 @@ export function TodayView({
               },
               {
                 header: "What",
+                searchText: (r) => `${DUE_KIND_LABELS[r.kind]} ${r.what}`,
+                filterValue: (r) => DUE_KIND_LABELS[r.kind],
                 cell: (r) => (
                   <>
                     <span className="text-sm text-muted">{DUE_KIND_LABELS[r.kind]}</span>
@@ -98,6 +103,8 @@ export function TodayView({
               },
               {
                 header: "Where",
+                searchText: (r) => `${r.storeName ?? "Company"} ${r.systemName ?? ""}`,
+                sortValue: (r) => `${r.storeName ?? ""} ${r.systemName ?? ""}`,
                 cell: (r) => (
                   <>
                     {r.storeName ?? "Company"}
@@ -126,9 +133,11 @@ export function TodayView({
             caption="Systems over threshold"
             rows={inStore(data.overThreshold)}
             rowKey={(r) => r.systemId}
+            initialSort={{ header: "Leak rate", desc: true }}
             columns={[
               {
                 header: "System",
+                sortValue: (r) => r.systemName,
                 cell: (r) => (
                   <Link className="text-accent underline" to={r.link}>
                     {r.systemName}
@@ -138,6 +147,7 @@ export function TodayView({
               { header: "Store", cell: (r) => r.storeName },
               {
                 header: "Leak rate",
+                sortValue: (r) => r.percent,
                 cell: (r) => (
                   <Link className="font-bold text-danger underline" to={r.link}>
                     {formatPercent(r.percent)}
@@ -172,9 +182,12 @@ export function TodayView({
             caption="Open findings"
             rows={inStore(data.openFindings)}
             rowKey={(r) => r.id}
+            search="Search open findings"
             columns={[
               {
                 header: "Finding",
+                searchText: (r) =>
+                  `${r.component ? COMPONENT_LABELS[r.component as (typeof FINDING_COMPONENTS)[number]] : "Leak"} ${r.systemName ?? ""} ${r.storeName}`,
                 cell: (r) => (
                   <Link className="text-accent underline" to={r.link}>
                     {r.component ? COMPONENT_LABELS[r.component as (typeof FINDING_COMPONENTS)[number]] : "Leak"} on{" "}
@@ -182,11 +195,16 @@ export function TodayView({
                   </Link>
                 ),
               },
-              { header: "Status", cell: (r) => (r.status === "verified" ? "verified, ready to close" : r.status) },
+              {
+                header: "Status",
+                cell: (r) => (r.status === "verified" ? "verified, ready to close" : r.status),
+                filterValue: (r) => r.status,
+              },
               { header: "Store", cell: (r) => r.storeName },
-              { header: "Found", cell: (r) => formatCalendarDay(r.foundOn) },
+              { header: "Found", cell: (r) => formatCalendarDay(r.foundOn), sortValue: (r) => r.foundOn },
               {
                 header: "Deadline",
+                sortValue: (r) => r.deadline ?? "",
                 cell: (r) =>
                   r.deadline ? (
                     <>
@@ -213,9 +231,12 @@ export function TodayView({
           caption="Systems and their latest leak rate"
           rows={inStore(data.systems)}
           rowKey={(r) => r.id}
+          search="Search systems"
           columns={[
             {
               header: "System",
+              sortValue: (r) => r.name,
+              searchText: (r) => `${r.name} ${r.storeName} ${r.refrigerantId}`,
               cell: (r) => (
                 <Link className="text-accent underline" to={r.link}>
                   {r.name}
@@ -223,9 +244,10 @@ export function TodayView({
               ),
             },
             { header: "Store", cell: (r) => r.storeName },
-            { header: "Refrigerant", cell: (r) => r.refrigerantId },
+            { header: "Refrigerant", cell: (r) => r.refrigerantId, filterValue: (r) => r.refrigerantId },
             {
               header: "Latest leak rate",
+              sortValue: (r) => r.latestPercent,
               cell: (r) =>
                 r.latestPercent === null ? (
                   "no additions"
@@ -249,6 +271,7 @@ export function TodayView({
             },
             {
               header: "Next inspection",
+              sortValue: (r) => r.nextInspection ?? "",
               cell: (r) =>
                 r.nextInspection ? (
                   <Link className="text-accent underline" to={`${r.link}#checks`}>

@@ -25,7 +25,12 @@ export function ReportPanel({
   const [addresses, setAddresses] = useState("");
   const [message, setMessage] = useState("");
   const fields = send.error && isApiRequestError(send.error) ? send.error.fields : {};
-  const addressError = Object.entries(fields).find(([k]) => k.startsWith("addresses"))?.[1];
+  // One message per bad address ("“x@” is not an e-mail address"), all of them, not only the first.
+  const addressError =
+    Object.entries(fields)
+      .filter(([k]) => k.startsWith("addresses"))
+      .map(([, m]) => m)
+      .join("; ") || undefined;
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap gap-2">

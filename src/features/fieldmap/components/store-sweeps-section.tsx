@@ -4,6 +4,8 @@ import { QueryError } from "../../../components/ui/query-error";
 import { Spinner } from "../../../components/ui/spinner";
 import { useSweeps as useStoreSweeps } from "../../../entities/sweeps/sweeps-api";
 import { formatInZone } from "#core/domain/dates/format-in-zone";
+import { useSweepSummary } from "../api/get-sweep-summary";
+import { SweepSummaryPlot } from "./sweep-summary-plot";
 
 const LINK = "inline-flex min-h-11 items-center rounded-md px-4 font-bold no-underline";
 
@@ -11,6 +13,7 @@ const LINK = "inline-flex min-h-11 items-center rounded-md px-4 font-bold no-und
 export function StoreSweepsSection(p: { storeId: string; timeZone: string; canCompare: boolean }) {
   const { storeId, timeZone } = p;
   const sweeps = useStoreSweeps(storeId);
+  const summary = useSweepSummary(storeId);
   const when = (iso: string) => formatInZone(iso, timeZone);
   const latest = [...(sweeps.data ?? [])].sort((a, b) => b.startedAt.localeCompare(a.startedAt)).slice(0, 3);
   return (
@@ -38,6 +41,7 @@ export function StoreSweepsSection(p: { storeId: string; timeZone: string; canCo
           ))}
         </ul>
       ) : null}
+      {summary.data?.length ? <SweepSummaryPlot sweeps={summary.data} timeZone={timeZone} /> : null}
       <div className="flex flex-wrap gap-2">
         {sweeps.data?.length ? (
           <Link className={`${LINK} edge bg-surface`} to={`/stores/${storeId}/sweeps`}>

@@ -13,6 +13,7 @@ const settings: CompanySettings = {
   ruleProfile: "us-federal",
   leakRateMethod: "annualizing",
   detectorCheckIntervalDays: 30,
+  paperSize: "profile",
 };
 
 beforeEach(() => setCsrfToken("csrf-owner"));
@@ -49,6 +50,7 @@ describe("company settings form", () => {
     fireEvent.change(screen.getByLabelText("Rule profile"), { target: { value: "eu-fgas" } });
     fireEvent.change(screen.getByLabelText("Leak-rate method"), { target: { value: "rolling-average" } });
     fireEvent.change(screen.getByLabelText("Detector check interval (days)"), { target: { value: "90" } });
+    fireEvent.change(screen.getByLabelText("Paper size of PDFs"), { target: { value: "letter" } });
     fireEvent.click(screen.getByRole("button", { name: "Save settings" }));
 
     expect(await screen.findByText("Settings saved.")).toBeVisible();
@@ -59,6 +61,7 @@ describe("company settings form", () => {
       ruleProfile: "eu-fgas",
       leakRateMethod: "rolling-average",
       detectorCheckIntervalDays: 90,
+      paperSize: "letter",
     });
     await waitFor(() => expect(onSaved).toHaveBeenCalledTimes(1));
   });

@@ -12,7 +12,14 @@ import {
   type FieldErrors,
 } from "../../../lib/form-errors";
 import { companySettings, useUpdateCompanySettings } from "../api/update-company-settings";
-import { LEAK_RATE_METHOD_LABELS, LENGTH_LABELS, MASS_LABELS, RULE_PROFILE_LABELS, optionsOf } from "./unit-labels";
+import {
+  LEAK_RATE_METHOD_LABELS,
+  LENGTH_LABELS,
+  MASS_LABELS,
+  PAPER_LABELS,
+  RULE_PROFILE_LABELS,
+  optionsOf,
+} from "./unit-labels";
 
 export interface CompanySettingsFormProps {
   settings: CompanySettings;
@@ -20,12 +27,16 @@ export interface CompanySettingsFormProps {
   onSaved?: (saved: CompanySettings) => void;
 }
 
-type Draft = Omit<CompanySettings, "detectorCheckIntervalDays"> & { detectorCheckIntervalDays: string };
+type Draft = Omit<CompanySettings, "detectorCheckIntervalDays" | "paperSize"> & {
+  detectorCheckIntervalDays: string;
+  paperSize: NonNullable<CompanySettings["paperSize"]>;
+};
 
 export function CompanySettingsForm({ settings, editable, onSaved }: CompanySettingsFormProps) {
   const [draft, setDraft] = useState<Draft>({
     ...settings,
     detectorCheckIntervalDays: String(settings.detectorCheckIntervalDays),
+    paperSize: settings.paperSize ?? "profile",
   });
   const [clientErrors, setClientErrors] = useState<FieldErrors>({});
   const [saved, setSaved] = useState(false);
@@ -129,6 +140,15 @@ export function CompanySettingsForm({ settings, editable, onSaved }: CompanySett
             value={draft.detectorCheckIntervalDays}
             onChange={(e) => set("detectorCheckIntervalDays", e.target.value)}
             error={errors.detectorCheckIntervalDays}
+          />
+          <Select
+            label="Paper size of PDFs"
+            name="paperSize"
+            hint="Sweep reports and leak-rate statements print on this paper."
+            options={optionsOf(PAPER_LABELS)}
+            value={draft.paperSize}
+            onChange={(e) => set("paperSize", e.target.value as Draft["paperSize"])}
+            error={errors.paperSize}
           />
         </section>
       </fieldset>

@@ -15,6 +15,12 @@ export const LEAK_RATE_METHOD_LABELS: Record<CompanySettings["leakRateMethod"], 
   "rolling-average": "Rolling average",
 };
 
+export const PAPER_LABELS: Record<NonNullable<CompanySettings["paperSize"]>, string> = {
+  profile: "Follow the rule profile (US Letter under US rules, A4 under EU F-gas)",
+  letter: "US Letter (8.5 × 11 in)",
+  a4: "A4 (210 × 297 mm)",
+};
+
 export function optionsOf<K extends string>(labels: Record<K, string>) {
   return (Object.keys(labels) as K[]).map((value) => ({ value, label: labels[value] }));
 }

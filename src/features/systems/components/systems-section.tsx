@@ -74,10 +74,19 @@ export function SystemsSection({
           caption="Systems"
           rows={systems.data}
           rowKey={(s) => s.id}
+          search="Search systems"
+          initialSort={{ header: "System" }}
           columns={[
-            { header: "System", cell: (s) => <span className="font-bold">{s.name}</span> },
+            {
+              header: "System",
+              cell: (s) => <span className="font-bold">{s.name}</span>,
+              sortValue: (s) => s.name,
+              searchText: (s) => `${s.name} ${s.refrigerantId} ${APPLIANCE_TYPE_NAMES[s.applianceType]}`,
+            },
             {
               header: "Refrigerant",
+              sortValue: (s) => s.refrigerantId,
+              filterValue: (s) => s.refrigerantId,
               cell: (s) => (
                 <>
                   {s.refrigerantId} <span className="text-muted">({s.refrigerant.safetyClass})</span>
@@ -95,13 +104,22 @@ export function SystemsSection({
                   "not known"
                 ),
             },
-            { header: "Full charge", cell: (s) => formatMass(s.fullChargeKg, massUnit, 1) },
-            { header: "Appliance type", cell: (s) => APPLIANCE_TYPE_NAMES[s.applianceType] },
+            {
+              header: "Full charge",
+              cell: (s) => formatMass(s.fullChargeKg, massUnit, 1),
+              sortValue: (s) => s.fullChargeKg,
+            },
+            {
+              header: "Appliance type",
+              cell: (s) => APPLIANCE_TYPE_NAMES[s.applianceType],
+              filterValue: (s) => APPLIANCE_TYPE_NAMES[s.applianceType],
+            },
             { header: "Automatic leak detection", cell: (s) => (s.automaticLeakDetection ? "Yes" : "No") },
             ...(canEdit
               ? [
                   {
                     header: "Actions",
+                    className: "min-w-44",
                     cell: (s: System) =>
                       confirmDelete === s.id ? (
                         <div className="flex flex-wrap items-center gap-2">

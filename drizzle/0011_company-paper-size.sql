@@ -1,0 +1,1 @@
+ALTER TABLE "companies" ADD COLUMN "paper_size" text DEFAULT 'profile' NOT NULL;
