@@ -5,6 +5,7 @@ import { launchBrowser, newContext } from "../helpers/browser";
 import { startE2eServer, type E2eServer } from "../helpers/e2e-server";
 import { PASSWORD, seedCompany } from "../helpers/fixtures";
 import { signInThroughForm } from "../helpers/e2e-session";
+import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 
 let server: E2eServer;
 let browser: Browser;
@@ -106,7 +107,7 @@ it("a technician confirms a leak and records charge added; the leak rate and Tod
   await owner.getByRole("heading", { name: "Systems over threshold" }).waitFor();
   const repairDue = localDay(-5);
   await owner.getByRole("link", { name: /Repair: leak rate 60\.8 %/ }).waitFor();
-  await owner.getByText(repairDue).first().waitFor();
+  await owner.getByText(formatCalendarDay(repairDue)).first().waitFor();
   await owner.getByRole("link", { name: "60.8 %", exact: true }).waitFor();
 
   // The digest now, then read it in the Outbox.
@@ -144,7 +145,9 @@ it("a technician confirms a leak and records charge added; the leak rate and Tod
   await tech.getByRole("button", { name: "Record the initial verification test", exact: true }).click();
   await tech.getByLabel("Result").selectOption("passed");
   await tech.getByRole("button", { name: "Save: record the initial verification test" }).click();
-  await tech.getByText(`Follow-up verification test after the initial test of ${today}: ${localDay(-10)}`).waitFor();
+  await tech
+    .getByText(`Follow-up verification test after the initial test of ${today}: ${formatCalendarDay(localDay(-10))}`)
+    .waitFor();
   await owner.reload(); // the owner was already on Today
   await owner.getByRole("heading", { name: "Systems", exact: true }).waitFor();
   await owner.getByRole("link", { name: `Follow-up verification test after the initial test of ${today}` }).click();
