@@ -40,7 +40,7 @@ export class GeodesicSearch {
     this.dirty = new Int32Array(1024);
     const w = grid.width;
     const h = grid.cellSize;
-    this.moves = allowedMoves(grid);
+    this.moves = movesOf(grid);
     this.offsets = Int32Array.from([1, -1, w, -w, w + 1, -w + 1, w - 1, -w - 1]);
     this.steps = Float64Array.from([h, h, h, h, h * Math.SQRT2, h * Math.SQRT2, h * Math.SQRT2, h * Math.SQRT2]);
   }
@@ -136,6 +136,19 @@ export class GeodesicSearch {
     this.settledCount = 0;
     this.heap.clear();
   }
+}
+
+// The allowed moves depend only on the grid, which is immutable: worked out once per grid and shared by
+// every search on it (an analysis makes several searches per pipeline run, and may run it again).
+const movesByGrid = new WeakMap<PlanGrid, Uint8Array>();
+
+function movesOf(grid: PlanGrid): Uint8Array {
+  let moves = movesByGrid.get(grid);
+  if (!moves) {
+    moves = allowedMoves(grid);
+    movesByGrid.set(grid, moves);
+  }
+  return moves;
 }
 
 const DI = [1, -1, 0, 0, 1, 1, -1, -1];

@@ -31,8 +31,10 @@ export interface GreedyInput {
   alternateFraction: number;
   /** Per-cell log prior odds of a leak (0 = neutral), weighed against Δχ² in units of the residual variance. */
   prior: Float64Array | null;
-  /** Fitted sources are at least this far apart, m. */
+  /** Fitted sources are at least this far apart, m; each is moved at most this far by the joint relocation. */
   sourceSeparationM: number;
+  /** Sources of the rounds after these are listed after the independent spots of these rounds. */
+  rankedRounds: number;
   /** Fitted sources within this distance of a stronger one are listed after the others, m (0 = off). */
   tailReachM: number;
   credible: (
@@ -118,6 +120,67 @@ export function residualOf(y: Float64Array, columns: readonly Float64Array[], q:
 }
 
 /**
+ * Each fitted source moved, one at a time, to the best cell within `sourceSeparationM` of it against the
+ * readings minus the other sources' joint fit (kept `sourceSeparationM` away from them). The greedy step
+ * places a source while a second leak's gas is still unexplained, which pulls it towards that leak;
+ * with the other source fitted the pull is gone. One pass: a second one changed no measured figure.
+ */
+export function relocateSources(
+  input: Pick<
+    GreedyInput,
+    | "fields"
+    | "y"
+    | "w"
+    | "censored"
+    | "nuisance"
+    | "allowed"
+    | "gridWidth"
+    | "cellSize"
+    | "sourceSeparationM"
+    | "prior"
+  >,
+  found: readonly FoundSource[],
+  fit: NonnegativeFit,
+): { sources: FoundSource[]; fit: NonnegativeFit } {
+  const { fields, y, w, censored, allowed } = input;
+  const n = y.length;
+  const cells = fields.sumWG.length;
+  const nn = input.nuisance.length;
+  const sources = found.slice();
+  const columns = [...input.nuisance, ...sources.map((s) => s.column)];
+  const sumWGR = new Float64Array(cells);
+  for (let k = 0; k < sources.length; k++) {
+    const others = columns.filter((_, j) => j !== nn + k);
+    const residual = residualOf(y, others, fitNonnegative(y, w, others, censored).q);
+    let sw = 0,
+      swr = 0,
+      swrr = 0;
+    for (let i = 0; i < n; i++) {
+      sw += w[i];
+      swr += w[i] * residual[i];
+      swrr += w[i] * residual[i] * residual[i];
+    }
+    sumWeightedKernelTimes(fields, w, residual, sumWGR);
+    const near = new Uint8Array(cells);
+    const height = cells / input.gridWidth;
+    forEachCellWithin(sources[k].cell, input.gridWidth, height, input.cellSize, input.sourceSeparationM, (c) => {
+      near[c] = allowed[c];
+    });
+    sources.forEach((o, j) => {
+      if (j !== k) blockAround(near, o.cell, input.gridWidth, input.cellSize, input.sourceSeparationM);
+    });
+    const scan = scanSources(fields.sumWG, fields.sumWGG, sumWGR, { sumW: sw, sumWR: swr, sumWRR: swrr }, near);
+    const best = bestWithPrior(scan, input.prior, n);
+    if (best < 0 || best === sources[k].cell) continue;
+    const column = kernelColumn(fields, best, n);
+    sources[k] = { cell: best, delta: scan.delta[best], column, alternate: false, q: 0, surface: scan.delta };
+    columns[nn + k] = column;
+    fit = fitNonnegative(y, w, columns, censored);
+  }
+  return { sources, fit };
+}
+
+/**
  * Several leaks by greedy forward selection (in the spirit of Yee 2012): scan all cells against the
  * residual of the current joint fit, take the best credible cell, refit all strengths jointly, repeat
  * until no credible cell is left. The first scan's other local optima become alternatives.
@@ -163,12 +226,18 @@ export function findSources(input: GreedyInput): GreedyResult {
     // A second source right beside the first mostly patches the kernel's misfit there, not a leak.
     blockAround(roundAllowed, best, input.gridWidth, input.cellSize, input.sourceSeparationM);
   }
+  if (sources.length > 0) {
+    const moved = relocateSources(input, sources, fit);
+    sources.splice(0, sources.length, ...moved.sources);
+    fit = moved.fit;
+  }
   const nn = input.nuisance.length;
   sources.forEach((s, k) => (s.q = fit.q[nn + k]));
   const bestDelta = Math.max(0, ...sources.map((s) => s.delta));
   // Rank fitted sources by strength: a weak source that the greedy step picked early usually mops up
   // far-field gas of a strong one that the truncated kernel cannot reach.
-  sources.sort((a, b) => b.q - a.q);
+  const late = new Set(sources.slice(input.rankedRounds));
+  sources.sort((a, b) => Number(late.has(a)) - Number(late.has(b)) || b.q - a.q);
   if (firstScan && sources.length > 0 && sources.length < input.maxCandidates) {
     const sep2 = (input.separationM / input.cellSize) ** 2;
     const near = (a: number, b: number) => {

@@ -4,12 +4,30 @@ import { cellsInside, nearestFreeCell, type PlanGrid } from "../grid/plan-grid";
 
 // Per-cell layers the locator derives from the drawn plan.
 
+// The layers depend only on the grid and the plan, which stay the same while one analysis runs the
+// pipeline again with another delay: each is drawn once per grid and plan and then shared (read only).
+type Memo<T> = WeakMap<PlanGrid, { plan: LocatorInput["plan"]; value: number; layer: T }>;
+const equipmentMemo: Memo<Uint8Array | null> = new WeakMap();
+const priorMemo: Memo<Float64Array> = new WeakMap();
+
+function remembered<T>(memo: Memo<T>, grid: PlanGrid, plan: LocatorInput["plan"], value: number, draw: () => T): T {
+  const hit = memo.get(grid);
+  if (hit && hit.plan === plan && hit.value === value) return hit.layer;
+  const layer = draw();
+  memo.set(grid, { plan, value, layer });
+  return layer;
+}
+
 /**
  * Cells where refrigerant can escape: inside a fixture (cases, walk-ins, machine rooms hold the coils,
  * valves and piping) or near a drawn risk point, each grown by `margin` for drawing error. Null when
  * the plan draws no equipment at all, so nothing is excluded.
  */
 export function equipmentMask(grid: PlanGrid, plan: LocatorInput["plan"], margin: number): Uint8Array | null {
+  return remembered(equipmentMemo, grid, plan, margin, () => drawEquipmentMask(grid, plan, margin));
+}
+
+function drawEquipmentMask(grid: PlanGrid, plan: LocatorInput["plan"], margin: number): Uint8Array | null {
   if (plan.fixtures.length === 0 && plan.riskPoints.length === 0) return null;
   const mask = new Uint8Array(grid.width * grid.height);
   const search = new GeodesicSearch(grid);
@@ -41,6 +59,10 @@ export function fanStepScale(grid: PlanGrid, plan: LocatorInput["plan"], scale: 
 
 /** Log prior odds per cell: `logOdds` within 0.5 m of a line-set drop, valve or coil, where joints leak most. */
 export function riskPointPrior(grid: PlanGrid, plan: LocatorInput["plan"], logOdds: number): Float64Array {
+  return remembered(priorMemo, grid, plan, logOdds, () => drawRiskPointPrior(grid, plan, logOdds));
+}
+
+function drawRiskPointPrior(grid: PlanGrid, plan: LocatorInput["plan"], logOdds: number): Float64Array {
   const prior = new Float64Array(grid.width * grid.height);
   const search = new GeodesicSearch(grid);
   for (const p of plan.riskPoints) {

@@ -39,6 +39,12 @@ export interface SourceSettings {
   readonly driftPenalty: number;
   /** Leaks fitted at once, and spots listed at most. */
   readonly maxLeaks: number;
+  /**
+   * Sources of the greedy rounds after these are listed after the independent spots of these rounds:
+   * the later rounds are there to reach a weaker second leak past the sources that mop up a strong
+   * plume, and their strengths are the least certain.
+   */
+  readonly rankedRounds: number;
   readonly maxCandidates: number;
   /** Fitted leaks at least this far apart, m; listed spots at least `separationM` apart. */
   readonly sourceSeparationM: number;
@@ -101,7 +107,8 @@ export const LOCATOR_SETTINGS: LocatorSettings = {
   sources: {
     driftStrengths: [0.4, 0.8],
     driftPenalty: 3,
-    maxLeaks: 3,
+    maxLeaks: 8,
+    rankedRounds: 3,
     maxCandidates: 5,
     sourceSeparationM: 4,
     separationM: 2,

@@ -114,6 +114,7 @@ export function sourcesStage(
     gridWidth: grid.width,
     cellSize: grid.cellSize,
     maxLeaks: s.maxLeaks,
+    rankedRounds: s.rankedRounds,
     maxCandidates: s.maxCandidates,
     separationM: s.separationM,
     alternateFraction: s.alternateFraction,
