@@ -7,6 +7,7 @@ import { createMailQueue } from "./mail/mail-queue";
 import { startFakeSmtp, type FakeSmtp } from "./mail/fake-smtp";
 import { createLifecycle } from "./lifecycle";
 import { storageFromEnv } from "./storage/storage-from-env";
+import { closeCpuPool, configureCpuPool } from "./jobs/cpu-pool";
 
 /** The fake SMTP server on its usual port, or any free one when another checkout already has it. */
 async function startFakeSmtpOnFreePort(db: Parameters<typeof startFakeSmtp>[0], port: number): Promise<FakeSmtp> {
@@ -54,6 +55,12 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
   // Every process runs the mail worker: any of them may deliver any message.
   await mailer.start();
 
+  configureCpuPool({
+    maxThreads: env.CPU_WORKERS,
+    maxQueue: env.CPU_QUEUE_MAX,
+    taskTimeoutMs: env.CPU_TASK_TIMEOUT_MS,
+    maxHeapMb: env.CPU_WORKER_HEAP_MB,
+  });
   const uploads = storageFromEnv(env);
   logger.info({ storage: uploads.kind }, "uploads storage");
   const ctx: AppContext = {
@@ -72,6 +79,8 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
       outboxEnabled: Boolean(fakeSmtp),
       uploadsDir: env.UPLOADS_DIR,
       planImageLimits: { maxPixels: Math.round(env.PLAN_MAX_MEGAPIXELS * 1_000_000) },
+      decodeQueue: { concurrency: env.DECODE_CONCURRENCY, queueMax: env.DECODE_QUEUE_MAX },
+      uploadTmpDir: env.UPLOAD_TMP_DIR,
       secureCookies: (env.APP_URL ?? "").startsWith("https://"),
       syncThrottle: { limit: env.SYNC_RATE_LIMIT, windowMs: env.SYNC_RATE_WINDOW_MS },
       trustProxy: env.TRUST_PROXY,
@@ -86,6 +95,7 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
       await mailer.stop();
       await ctx.analysisRunner?.close();
       await ctx.reportRunner?.close();
+      await closeCpuPool();
       mailer.close();
       uploads.close();
       await fakeSmtp?.close();

@@ -5,6 +5,7 @@ import { createApp } from "./app";
 import { seedDemoIfEmpty, DEMO_SIGN_INS } from "./db/seed/demo";
 import { startDigestSchedule } from "./jobs/digest";
 import { waitUntil } from "./lifecycle";
+import { cpuPoolLoad } from "./jobs/cpu-pool";
 
 // Listening and shutting down only; the app itself is built in app.ts.
 const env = readEnv();
@@ -40,8 +41,8 @@ const server = createApp(ctx).listen(env.PORT, env.HOST, () => {
 
 let closing: string | null = null;
 /**
- * Graceful stop: report not-ready (for SHUTDOWN_DELAY_MS while still serving), stop accepting, let in-flight requests and worker jobs finish
- * (bounded by SHUTDOWN_GRACE_MS), then close the pool.
+ * Graceful stop: report not-ready (for SHUTDOWN_DELAY_MS while still serving), stop accepting, let in-flight requests and the CPU
+ * pool's tasks finish (bounded by SHUTDOWN_GRACE_MS), then stop the pool's workers and close the database pool.
  */
 async function shutdown(signal: string) {
   if (closing) {
@@ -71,10 +72,7 @@ async function shutdown(signal: string) {
   await closed;
   clearTimeout(cutOff);
   clearInterval(sweepIdle);
-  const jobsDone = await waitUntil(
-    () => (ctx.analysisRunner?.load ?? 0) + (ctx.reportRunner?.load ?? 0) === 0,
-    Math.max(deadline, Date.now() + 1_000),
-  );
+  const jobsDone = await waitUntil(() => cpuPoolLoad() === 0, Math.max(deadline, Date.now() + 1_000));
   if (!jobsDone) ctx.logger.warn("grace period over: stopping the jobs still running");
   await runtime.close();
   ctx.logger.info("stopped");

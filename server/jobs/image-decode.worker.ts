@@ -1,32 +1,27 @@
 /**
- * Runs in a worker_threads worker: decoding a large plan image takes hundreds of milliseconds of
+ * Runs on the CPU pool: decoding a large plan image or photo takes hundreds of milliseconds of
  * CPU, which must not stall other requests on the event loop. jimp applies the JPEG's EXIF
  * orientation while reading (Jimp.fromBuffer → attemptExifRotate), so the display copy and the
  * thumbnail come out upright.
  */
-import { parentPort } from "node:worker_threads";
 import { Jimp, JimpMime } from "jimp";
+import { workerTask } from "./worker-task";
 
 export interface DecodeRequest {
-  id: number;
   data: Uint8Array;
   mime: "image/png" | "image/jpeg";
   displayMaxSide: number;
   thumbMaxSide: number;
 }
 
-export type DecodeResponse =
-  | {
-      id: number;
-      ok: true;
-      width: number;
-      height: number;
-      display: Uint8Array;
-      displayWidth: number;
-      displayHeight: number;
-      thumb: Uint8Array;
-    }
-  | { id: number; ok: false; message: string };
+export interface DecodedImage {
+  width: number;
+  height: number;
+  display: Uint8Array;
+  displayWidth: number;
+  displayHeight: number;
+  thumb: Uint8Array;
+}
 
 type Image = Awaited<ReturnType<typeof Jimp.fromBuffer>>;
 
@@ -42,7 +37,7 @@ async function encode(image: { getBuffer: Image["getBuffer"] }, mime: DecodeRequ
   return mime === "image/png" ? image.getBuffer(JimpMime.png) : image.getBuffer(JimpMime.jpeg, { quality: 85 });
 }
 
-async function handle(req: DecodeRequest): Promise<DecodeResponse> {
+async function handle(req: DecodeRequest): Promise<DecodedImage> {
   const image = await Jimp.fromBuffer(Buffer.from(req.data.buffer, req.data.byteOffset, req.data.byteLength));
   const { width, height } = image.bitmap;
   // Shrink the one bitmap in steps (display, then thumbnail from the display copy) instead of
@@ -53,17 +48,17 @@ async function handle(req: DecodeRequest): Promise<DecodeResponse> {
   const display = await encode(image, req.mime);
   capInPlace(image, req.thumbMaxSide);
   const thumb = await encode(image, req.mime);
-  return { id: req.id, ok: true, width, height, display, displayWidth, displayHeight, thumb };
+  // Fresh copies: jimp's small buffers may share Node's buffer pool, which cannot be moved.
+  return {
+    width,
+    height,
+    display: new Uint8Array(display),
+    displayWidth,
+    displayHeight,
+    thumb: new Uint8Array(thumb),
+  };
 }
 
-parentPort?.on("message", (req: DecodeRequest) => {
-  handle(req).then(
-    (res) => parentPort!.postMessage(res),
-    (err: unknown) =>
-      parentPort!.postMessage({
-        id: req.id,
-        ok: false,
-        message: err instanceof Error ? err.message : String(err),
-      } satisfies DecodeResponse),
-  );
+export default workerTask<DecodeRequest, DecodedImage>(handle, {
+  transferables: (r) => [r.display.buffer as ArrayBuffer, r.thumb.buffer as ArrayBuffer],
 });
