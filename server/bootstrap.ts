@@ -60,6 +60,7 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
     maxQueue: env.CPU_QUEUE_MAX,
     taskTimeoutMs: env.CPU_TASK_TIMEOUT_MS,
     maxHeapMb: env.CPU_WORKER_HEAP_MB,
+    niceIncrement: env.CPU_WORKER_NICE,
   });
   const uploads = storageFromEnv(env);
   logger.info({ storage: uploads.kind }, "uploads storage");

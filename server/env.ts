@@ -92,6 +92,7 @@ const envSchema = z
     CPU_QUEUE_MAX: z.coerce.number().int().min(0).max(10_000).default(100),
     CPU_TASK_TIMEOUT_MS: z.coerce.number().int().min(1000).max(600_000).default(120_000),
     CPU_WORKER_HEAP_MB: z.coerce.number().int().min(64).max(4096).default(512),
+    CPU_WORKER_NICE: z.coerce.number().int().min(0).max(19).default(10),
     // Uploaded images decoded at once, and uploads waiting for that (beyond it 503); docs/decisions/0081.
     DECODE_CONCURRENCY: z.coerce.number().int().min(1).max(8).default(1),
     DECODE_QUEUE_MAX: z.coerce.number().int().min(0).max(1000).default(16),
