@@ -19,7 +19,7 @@ export interface CpuPoolOptions {
   maxThreads: number;
   /** Tasks waiting for a worker at most; beyond it run() throws CpuBusyError. */
   maxQueue: number;
-  /** A task still running after this long is stopped (its worker is replaced). */
+  /** A task not finished this long after it was handed to the pool (queue wait included) is stopped; a running one's worker is replaced. */
   taskTimeoutMs: number;
   /** Each worker's JavaScript heap (old generation) at most, in MB. */
   maxHeapMb: number;
@@ -88,7 +88,8 @@ export function createCpuPool(options: Partial<CpuPoolOptions> = {}) {
     filename: POOL_ENTRY,
     minThreads: 0,
     maxThreads: o.maxThreads,
-    maxQueue: o.maxQueue,
+    // The queue limit is counted here, in run(): piscina's maxQueue skips tasks that carry an
+    // AbortSignal, and every task here carries one (its time limit).
     // Starting a worker (tsx, the task's imports) costs a few hundred ms: keep one a while.
     idleTimeout: 60_000,
     // A worker waits for tasks on its event loop, not in Atomics.wait, so async task code is never parked.
@@ -96,32 +97,31 @@ export function createCpuPool(options: Partial<CpuPoolOptions> = {}) {
     resourceLimits: { maxOldGenerationSizeMb: o.maxHeapMb },
     niceIncrement: o.niceIncrement,
   });
-  let running = 0;
+  let inFlight = 0;
 
   return {
     options: o,
     async run<T, R>(task: WorkerTaskName, payload: T, run: RunOptions = {}): Promise<R> {
+      if (inFlight >= o.maxThreads + o.maxQueue) throw new CpuBusyError();
       const timeoutMs = run.timeoutMs ?? o.taskTimeoutMs;
       const timeout = AbortSignal.timeout(timeoutMs);
       const signal = run.signal ? AbortSignal.any([timeout, run.signal]) : timeout;
-      running++;
+      inFlight++;
       let reply: TaskReply<R>;
       try {
         reply = await piscina.run({ module: workerModule(task), payload }, { transferList: run.transfer, signal });
       } catch (err) {
-        if (err instanceof Error && /Task queue is at limit|No task queue available/.test(err.message))
-          throw new CpuBusyError();
         if (timeout.aborted) throw new CpuTimeoutError(task, timeoutMs);
         throw err;
       } finally {
-        running--;
+        inFlight--;
       }
       if (!reply.ok) throw new JobError(reply.message, reply.problems);
       return reply.result;
     },
     /** Tasks waiting for a worker plus those running. */
     get load() {
-      return running;
+      return inFlight;
     },
     get workers() {
       return piscina.threads.length;
