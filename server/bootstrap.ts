@@ -8,6 +8,7 @@ import { startFakeSmtp, type FakeSmtp } from "./mail/fake-smtp";
 import { createLifecycle } from "./lifecycle";
 import { storageFromEnv } from "./storage/storage-from-env";
 import { closeCpuPool, configureCpuPool } from "./jobs/cpu-pool";
+import { startPruning } from "./jobs/pruning";
 
 /** The fake SMTP server on its usual port, or any free one when another checkout already has it. */
 async function startFakeSmtpOnFreePort(db: Parameters<typeof startFakeSmtp>[0], port: number): Promise<FakeSmtp> {
@@ -54,6 +55,17 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
   });
   // Every process runs the mail worker: any of them may deliver any message.
   await mailer.start();
+  // Every process takes the daily pruning job too (pg-boss hands each day's job to one of them).
+  const pruning = await startPruning(
+    db,
+    logger,
+    {
+      securityLog: env.SECURITY_LOG_RETENTION_DAYS,
+      sentMail: env.MAIL_SENT_RETENTION_DAYS,
+      failedMail: env.MAIL_FAILED_RETENTION_DAYS,
+    },
+    { pollingIntervalS: Math.max(env.JOB_POLL_INTERVAL_S, 30) },
+  );
 
   configureCpuPool({
     maxThreads: env.CPU_WORKERS,
@@ -93,6 +105,7 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
     ctx,
     fakeSmtp,
     async close() {
+      await pruning.stop();
       await mailer.stop();
       await ctx.analysisRunner?.close();
       await ctx.reportRunner?.close();
