@@ -92,7 +92,11 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
       outboxEnabled: Boolean(fakeSmtp),
       uploadsDir: env.UPLOADS_DIR,
       planImageLimits: { maxPixels: Math.round(env.PLAN_MAX_MEGAPIXELS * 1_000_000) },
-      decodeQueue: { concurrency: env.DECODE_CONCURRENCY, queueMax: env.DECODE_QUEUE_MAX },
+      decodeQueue: {
+        concurrency: env.DECODE_CONCURRENCY,
+        queueMax: env.DECODE_QUEUE_MAX,
+        maxWaitMs: env.DECODE_WAIT_MS,
+      },
       uploadTmpDir: env.UPLOAD_TMP_DIR,
       secureCookies: (env.APP_URL ?? "").startsWith("https://"),
       syncThrottle: { limit: env.SYNC_RATE_LIMIT, windowMs: env.SYNC_RATE_WINDOW_MS },

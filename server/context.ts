@@ -37,7 +37,7 @@ export interface AppConfig {
   serveClient: boolean;
   planImageLimits?: Partial<PlanImageLimits>;
   /** Images decoded at once and uploads waiting for that (server/api/plans/image-decoder.ts). */
-  decodeQueue?: { concurrency?: number; queueMax?: number };
+  decodeQueue?: { concurrency?: number; queueMax?: number; maxWaitMs?: number };
   /** Where uploads are written while their request runs (default: the system's temp folder). */
   uploadTmpDir?: string;
   /** Per-member limit on the Walk sync writes (server/middleware/sync-throttle.ts). */

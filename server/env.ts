@@ -92,10 +92,12 @@ const envSchema = z
     CPU_QUEUE_MAX: z.coerce.number().int().min(0).max(10_000).default(100),
     CPU_TASK_TIMEOUT_MS: z.coerce.number().int().min(1000).max(600_000).default(120_000),
     CPU_WORKER_HEAP_MB: z.coerce.number().int().min(64).max(4096).default(512),
-    CPU_WORKER_NICE: z.coerce.number().int().min(0).max(19).default(10),
-    // Uploaded images decoded at once, and uploads waiting for that (beyond it 503); docs/decisions/0081.
+    CPU_WORKER_NICE: z.coerce.number().int().min(0).max(19).default(0),
+    // Uploaded images decoded at once, uploads waiting for that, and how long one may wait (beyond
+    // either, 503); docs/decisions/0081.
     DECODE_CONCURRENCY: z.coerce.number().int().min(1).max(8).default(1),
     DECODE_QUEUE_MAX: z.coerce.number().int().min(0).max(1000).default(16),
+    DECODE_WAIT_MS: z.coerce.number().int().min(1000).max(600_000).default(60_000),
     // Where uploads stream to while their request runs (default: the system's temp folder).
     UPLOAD_TMP_DIR: z.string().min(1).optional(),
     // Pruning, once a day (server/jobs/pruning.ts, docs/decisions/0082): security log rows older than

@@ -23,7 +23,7 @@ export interface CpuPoolOptions {
   taskTimeoutMs: number;
   /** Each worker's JavaScript heap (old generation) at most, in MB. */
   maxHeapMb: number;
-  /** How much lower the workers' scheduling priority is than the event loop's (Unix nice, 0-19). */
+  /** How much lower the workers' scheduling priority is than the event loop's (Unix nice, 0-19; needs @napi-rs/nice). */
   niceIncrement: number;
 }
 
@@ -33,9 +33,9 @@ export function defaultCpuPoolOptions(): CpuPoolOptions {
     maxQueue: 100,
     taskTimeoutMs: 120_000,
     maxHeapMb: 512,
-    // Answering requests comes first: on a busy machine the kernel gives the event loop the core
-    // before a worker hashing a password or drawing a PDF (bench:sign-in measures the effect).
-    niceIncrement: 10,
+    // 0: on a machine shared with other work, a lowered priority starved the workers (a 40-megapixel
+    // decode took minutes) for no measurable gain in bench:sign-in (docs/decisions/0080).
+    niceIncrement: 0,
   };
 }
 

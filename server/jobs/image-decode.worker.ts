@@ -4,7 +4,7 @@
  * orientation while reading (Jimp.fromBuffer → attemptExifRotate), so the display copy and the
  * thumbnail come out upright.
  */
-import { Jimp, JimpMime } from "jimp";
+import { Jimp, JimpMime, ResizeStrategy } from "jimp";
 import { workerTask } from "./worker-task";
 
 export interface DecodeRequest {
@@ -25,12 +25,21 @@ export interface DecodedImage {
 
 type Image = Awaited<ReturnType<typeof Jimp.fromBuffer>>;
 
+/**
+ * jimp's default resize keeps a Float32 buffer of the target width × the source height × 4 channels:
+ * 350 MB for a 40-megapixel plan shrunk to 4096 px. Above this size the bilinear resize is used,
+ * which needs only the target bitmap (slightly more aliasing, on a shrink of less than 2:1 here).
+ */
+const DEFAULT_RESIZE_MAX_BUFFER = 64 * 1024 * 1024;
+
 /** Shrinks in place (jimp's resize mutates) so the longest side is at most maxSide; never enlarges. */
 function capInPlace(image: Image, maxSide: number): void {
   const { width, height } = image.bitmap;
   if (Math.max(width, height) <= maxSide) return;
-  if (width >= height) image.resize({ w: maxSide });
-  else image.resize({ h: maxSide });
+  const w = width >= height ? maxSide : Math.round((width * maxSide) / height);
+  const h = width >= height ? Math.round((height * maxSide) / width) : maxSide;
+  const floatBuffer = w * height * 4 * Float32Array.BYTES_PER_ELEMENT;
+  image.resize({ w, h, ...(floatBuffer > DEFAULT_RESIZE_MAX_BUFFER ? { mode: ResizeStrategy.BILINEAR } : {}) });
 }
 
 async function encode(image: { getBuffer: Image["getBuffer"] }, mime: DecodeRequest["mime"]): Promise<Buffer> {

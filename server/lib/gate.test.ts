@@ -18,6 +18,17 @@ describe("a gate", () => {
     expect({ active: gate.active, waiting: gate.waiting }).toEqual({ active: 0, waiting: 0 });
   });
 
+  it("refuses one that has waited maxWaitMs, and hands its turn to the next", async () => {
+    const gate = createGate({ concurrency: 1, queueMax: 2, maxWaitMs: 50 }, () => new Error("waited too long"));
+    const first = await gate.acquire();
+    await expect(gate.acquire()).rejects.toThrow("waited too long");
+    expect(gate.waiting).toBe(0);
+    const next = gate.acquire();
+    first();
+    (await next)();
+    expect({ active: gate.active, waiting: gate.waiting }).toEqual({ active: 0, waiting: 0 });
+  });
+
   it("frees the place when the work fails", async () => {
     const gate = createGate({ concurrency: 1, queueMax: 0 }, () => new Error("full"));
     await expect(gate.run(async () => Promise.reject(new Error("bad image")))).rejects.toThrow("bad image");

@@ -1,8 +1,9 @@
 /**
  * At most `concurrency` holders at once and at most `queueMax` waiting (first come, first served);
- * one more is refused with `busy()` at once rather than left to hang.
+ * one more is refused with `busy()` at once rather than left to hang, and so is one that has waited
+ * `maxWaitMs` (when given) without getting in.
  */
-export function createGate(limits: { concurrency: number; queueMax: number }, busy: () => Error) {
+export function createGate(limits: { concurrency: number; queueMax: number; maxWaitMs?: number }, busy: () => Error) {
   let active = 0;
   const waiting: (() => void)[] = [];
 
@@ -19,7 +20,21 @@ export function createGate(limits: { concurrency: number; queueMax: number }, bu
         active++;
       } else {
         if (waiting.length >= limits.queueMax) throw busy();
-        await new Promise<void>((resolve) => waiting.push(resolve));
+        await new Promise<void>((resolve, reject) => {
+          const timer =
+            limits.maxWaitMs === undefined
+              ? undefined
+              : setTimeout(() => {
+                  const k = waiting.indexOf(enter);
+                  if (k >= 0) waiting.splice(k, 1);
+                  reject(busy());
+                }, limits.maxWaitMs);
+          function enter() {
+            clearTimeout(timer);
+            resolve();
+          }
+          waiting.push(enter);
+        });
       }
       let released = false;
       return () => {

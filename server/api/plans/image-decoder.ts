@@ -2,7 +2,7 @@
  * Decoding uploaded images (plans, finding photos) on the CPU pool, one at a time by default: a
  * 40-megapixel image is 160 MB of RGBA while it is decoded and resized, so the number decoded at
  * once bounds the memory uploads can take. Uploads wait for a place in a bounded queue (their bytes
- * stay in the temporary file meanwhile); a full queue is a 503 with Retry-After.
+ * stay in the temporary file meanwhile); a full queue, or a wait past maxWaitMs, is a 503 with Retry-After.
  * docs/decisions/0081-bounded-uploads.md
  */
 import type { DecodedImage, DecodeRequest } from "../../jobs/image-decode.worker";
@@ -19,9 +19,11 @@ export interface DecodeQueueLimits {
   concurrency: number;
   /** Uploads waiting for a place at most; one more is answered 503. */
   queueMax: number;
+  /** An upload that has waited this long for a place is answered 503 instead of waiting on. */
+  maxWaitMs: number;
 }
 
-export const DEFAULT_DECODE_QUEUE: DecodeQueueLimits = { concurrency: 1, queueMax: 16 };
+export const DEFAULT_DECODE_QUEUE: DecodeQueueLimits = { concurrency: 1, queueMax: 16, maxWaitMs: 60_000 };
 
 const tooBig = () =>
   new HttpError(
