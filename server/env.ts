@@ -80,15 +80,16 @@ const envSchema = z
       .positive("PLAN_MAX_MEGAPIXELS must be more than 0")
       .max(200, "PLAN_MAX_MEGAPIXELS must be at most 200")
       .default(40),
-    // The one CPU worker pool (server/jobs/cpu-pool.ts, docs/decisions/0080): workers at most (never
-    // more than the cores: the work is CPU-bound and the event loop needs one), tasks waiting at most
-    // (beyond it 503), the time limit per task, and each worker's JavaScript heap.
+    // The one CPU worker pool (server/jobs/cpu-pool.ts, docs/decisions/0080): workers at most (one
+    // per core by default and never more: the work is CPU-bound; long tasks leave one worker to
+    // password checks), tasks waiting at most (beyond it 503), the time limit per task, and each
+    // worker's JavaScript heap.
     CPU_WORKERS: z.coerce
       .number()
       .int()
       .min(1, "CPU_WORKERS must be at least 1")
       .max(CORES, `CPU_WORKERS must be at most ${CORES}, the cores of this machine`)
-      .default(Math.max(1, CORES - 1)),
+      .default(CORES),
     CPU_QUEUE_MAX: z.coerce.number().int().min(0).max(10_000).default(100),
     CPU_TASK_TIMEOUT_MS: z.coerce.number().int().min(1000).max(600_000).default(120_000),
     CPU_WORKER_HEAP_MB: z.coerce.number().int().min(64).max(4096).default(512),

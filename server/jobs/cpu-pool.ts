@@ -1,7 +1,7 @@
 /**
  * The one pool of worker threads for CPU-heavy work in this process (piscina): the locator, report
  * PDFs, plan and photo decoding, password hashing. The event loop keeps answering requests while
- * tasks run. Bounded three ways: at most `maxThreads` workers (the whole process's CPU budget), at
+ * tasks run, and password checks keep a worker of their own while long tasks run (SHORT_TASKS). Bounded three ways: at most `maxThreads` workers (the whole process's CPU budget), at
  * most `maxQueue` tasks waiting (more is CpuBusyError: 503 with Retry-After), and a time limit per
  * task (the worker running an overdue task is stopped and replaced). Each worker's JavaScript heap
  * is capped by `maxHeapMb` (piscina resourceLimits): a task that needs more ends its worker, not the
@@ -11,11 +11,19 @@
 import os from "node:os";
 import { Piscina } from "piscina";
 import { HttpError } from "../lib/http-error";
+import { createGate } from "../lib/gate";
 import { POOL_ENTRY, workerModule, type WorkerTaskName } from "./worker-files";
 import type { TaskReply } from "./worker-task";
 
+/**
+ * Short tasks (a password check is a quarter of a second) always find a worker: the long kinds
+ * (the locator, PDFs, decoding) may hold at most maxThreads - 1 workers at once, so a sign-in never
+ * waits behind a ten-second analysis. With one worker there is no such lane.
+ */
+const SHORT_TASKS: ReadonlySet<WorkerTaskName> = new Set(["password"]);
+
 export interface CpuPoolOptions {
-  /** Worker threads at most (default: one per core less one for the event loop, at least one). */
+  /** Worker threads at most (default: one per core; the long kinds leave one of them to short tasks). */
   maxThreads: number;
   /** Tasks waiting for a worker at most; beyond it run() throws CpuBusyError. */
   maxQueue: number;
@@ -29,7 +37,7 @@ export interface CpuPoolOptions {
 
 export function defaultCpuPoolOptions(): CpuPoolOptions {
   return {
-    maxThreads: Math.max(1, os.availableParallelism() - 1),
+    maxThreads: os.availableParallelism(),
     maxQueue: 100,
     taskTimeoutMs: 120_000,
     maxHeapMb: 512,
@@ -98,6 +106,11 @@ export function createCpuPool(options: Partial<CpuPoolOptions> = {}) {
     niceIncrement: o.niceIncrement,
   });
   let inFlight = 0;
+  // Long tasks wait here for one of their maxThreads - 1 workers; the queue limit is counted in run().
+  const longLane = createGate(
+    { concurrency: Math.max(1, o.maxThreads - 1), queueMax: Number.MAX_SAFE_INTEGER },
+    () => new CpuBusyError(),
+  );
 
   return {
     options: o,
@@ -109,7 +122,9 @@ export function createCpuPool(options: Partial<CpuPoolOptions> = {}) {
       inFlight++;
       let reply: TaskReply<R>;
       try {
-        reply = await piscina.run({ module: workerModule(task), payload }, { transferList: run.transfer, signal });
+        const go = (): Promise<TaskReply<R>> =>
+          piscina.run({ module: workerModule(task), payload }, { transferList: run.transfer, signal });
+        reply = SHORT_TASKS.has(task) ? await go() : await longLane.run(go);
       } catch (err) {
         if (timeout.aborted) throw new CpuTimeoutError(task, timeoutMs);
         throw err;
