@@ -1,7 +1,7 @@
 /**
  * The one pool of worker threads for CPU-heavy work in this process (piscina): the locator, report
  * PDFs, plan and photo decoding, password hashing. The event loop keeps answering requests while
- * tasks run, and password checks keep a worker of their own while long tasks run (SHORT_TASKS). Bounded three ways: at most `maxThreads` workers (the whole process's CPU budget), at
+ * tasks run, and password checks and long tasks each keep to a lane of workers (SHORT_TASKS). Bounded three ways: at most `maxThreads` workers (the whole process's CPU budget), at
  * most `maxQueue` tasks waiting (more is CpuBusyError: 503 with Retry-After), and a time limit per
  * task (the worker running an overdue task is stopped and replaced). Each worker's JavaScript heap
  * is capped by `maxHeapMb` (piscina resourceLimits): a task that needs more ends its worker, not the
@@ -16,9 +16,10 @@ import { POOL_ENTRY, workerModule, type WorkerTaskName } from "./worker-files";
 import type { TaskReply } from "./worker-task";
 
 /**
- * Short tasks (a password check is a quarter of a second) always find a worker: the long kinds
- * (the locator, PDFs, decoding) may hold at most maxThreads - 1 workers at once, so a sign-in never
- * waits behind a ten-second analysis. With one worker there is no such lane.
+ * Two lanes of at most maxThreads - 1 workers each (at least one): the long kinds (the locator,
+ * PDFs, decoding) and short tasks (a password check is a quarter of a second). A sign-in never waits
+ * behind a ten-second analysis, and a burst of sign-ins never takes every core from the event loop
+ * (bench:sign-in). With one worker the lanes share it.
  */
 const SHORT_TASKS: ReadonlySet<WorkerTaskName> = new Set(["password"]);
 
@@ -106,11 +107,14 @@ export function createCpuPool(options: Partial<CpuPoolOptions> = {}) {
     niceIncrement: o.niceIncrement,
   });
   let inFlight = 0;
-  // Long tasks wait here for one of their maxThreads - 1 workers; the queue limit is counted in run().
-  const longLane = createGate(
-    { concurrency: Math.max(1, o.maxThreads - 1), queueMax: Number.MAX_SAFE_INTEGER },
-    () => new CpuBusyError(),
-  );
+  // Each lane's tasks wait here for one of its workers; the queue limit is counted in run().
+  const lane = () =>
+    createGate(
+      { concurrency: Math.max(1, o.maxThreads - 1), queueMax: Number.MAX_SAFE_INTEGER },
+      () => new CpuBusyError(),
+    );
+  const shortLane = lane();
+  const longLane = lane();
 
   return {
     options: o,
@@ -124,7 +128,7 @@ export function createCpuPool(options: Partial<CpuPoolOptions> = {}) {
       try {
         const go = (): Promise<TaskReply<R>> =>
           piscina.run({ module: workerModule(task), payload }, { transferList: run.transfer, signal });
-        reply = SHORT_TASKS.has(task) ? await go() : await longLane.run(go);
+        reply = await (SHORT_TASKS.has(task) ? shortLane : longLane).run(go);
       } catch (err) {
         if (timeout.aborted) throw new CpuTimeoutError(task, timeoutMs);
         throw err;
