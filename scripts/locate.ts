@@ -3,6 +3,7 @@
 import { readFileSync } from "node:fs";
 import { LocatorInputError, parseLocatorInput } from "#core/contracts/locator-input";
 import { locate } from "#core/analysis/locate";
+import { commandLineOutput } from "#core/domain/locator-words/command-line-output";
 
 function fail(message: string, code: number): never {
   process.stderr.write(`locate: ${message}\n`);
@@ -30,13 +31,9 @@ try {
 }
 
 try {
-  const result = locate(parseLocatorInput(json));
-  const out: Record<string, unknown> = {
-    candidates: result.candidates,
-    background: result.background,
-    diagnostics: result.diagnostics,
-    assumptions: result.assumptions,
-  };
+  const input = parseLocatorInput(json);
+  const result = locate(input);
+  const out: Record<string, unknown> = { ...commandLineOutput(input, result) };
   if (withReadings) out.readings = result.readings;
   // the delay checked against the readings: stated, estimated and used shift, s (docs/locator/pipeline.md)
   if (withDelay) out.delay = result.delay;

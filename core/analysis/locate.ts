@@ -114,7 +114,7 @@ export function locate(
     candidates: [...placement.candidates],
     background: { ppm: round2(field.background.ppm) },
     diagnostics: [...report.diagnostics, ...delayNotes],
-    assumptions: [...report.assumptions],
+    assumptions: report.assumptions,
     readings: [...report.readings],
     field: field.map,
     delay,

@@ -1,7 +1,15 @@
 import { z } from "zod";
 import { text } from "./text";
 import { SECONDS_STEP } from "./quantities";
-import type { Candidate, Diagnostic, CorrectedReading } from "./locator-output";
+import { locatorFixtureKinds, locatorRiskPointKinds } from "./locator-input";
+import type {
+  CorrectedReading,
+  DelayFacts,
+  LocatorAssumptions,
+  LocatorDiagnostic,
+  SuspectSpotFacts,
+} from "./locator-output";
+import type { SpotRefrigerant } from "../domain/locator-words/spot-refrigerant";
 
 // The field map's analysis: GET /api/sweeps/:id/analysis. Candidates are suspect spots.
 
@@ -38,7 +46,27 @@ export const analysisParams = z.object({
 });
 export type AnalysisParams = z.infer<typeof analysisParams>;
 
-/** A suspect spot: the locator's `Candidate` (locator-output.ts; the checks at the end keep the two equal). */
+const fixtureKind = z.enum(locatorFixtureKinds);
+const riskPointKind = z.enum(locatorRiskPointKinds);
+
+/** Why a spot is listed (the locator's `SpotReason`, worded by core/domain/locator-words/). */
+const spotReason = z.object({
+  kind: z.enum(["fitted", "alternative"]),
+  supportCount: z.number(),
+  peakPpm: z.number(),
+  backgroundPpm: z.number(),
+  fixture: z.object({ id: text(), kind: fixtureKind, distanceM: z.number() }).nullable(),
+  oneSided: z.boolean(),
+});
+
+const spotNextCheck = z.discriminatedUnion("kind", [
+  z.object({ kind: z.literal("risk-point-first"), riskPointId: text(), riskPointKind, distanceM: z.number() }),
+  z.object({ kind: z.literal("stop-fans"), fixtureId: text(), spacingM: z.number(), withinM: z.number() }),
+  z.object({ kind: z.literal("grid-recheck"), spacingM: z.number(), withinM: z.number() }),
+  z.object({ kind: z.literal("other-face") }),
+]);
+
+/** A suspect spot as the locator's facts (`SuspectSpotFacts`; the checks at the end keep the two equal). */
 export const suspectSpot = z.object({
   rank: z.number(),
   x: z.number(),
@@ -46,35 +74,85 @@ export const suspectSpot = z.object({
   radius: z.number(),
   score: z.number(),
   strength: z.number(),
-  strengthGPerYear: z.number(),
+  molPerYear: z.number(),
   fixtureId: text().nullable(),
   riskPointId: text().nullable(),
-  reason: text(),
-  nextCheck: text(),
+  reason: spotReason,
+  nextChecks: z.array(spotNextCheck),
 });
 export type SuspectSpot = z.infer<typeof suspectSpot>;
 
-const LOCATOR_DIAGNOSTIC_KINDS = [
-  "fans-mixing",
-  "benign-source",
-  "sparse-coverage",
-  "one-sided-pass",
-  "early-readings",
-  "over-range",
-  "delay-check",
-  "delay-uncertain",
+/** The refrigerant a spot's strength is weighed in, looked up when the analysis is read (fixtures may be relinked). */
+export const spotRefrigerantSchema = z.discriminatedUnion("source", [
+  z.object({ source: z.literal("system"), refrigerantId: text(), molarMassGPerMol: z.number(), systemName: text() }),
+  z.object({
+    source: z.literal("default"),
+    refrigerantId: text(),
+    molarMassGPerMol: z.number(),
+    why: z.enum(["no-fixture", "no-system", "unknown-refrigerant", "no-systems-known"]),
+  }),
+]);
+
+export const suspectSpotWithRefrigerant = suspectSpot.extend({ refrigerant: spotRefrigerantSchema });
+export type SuspectSpotWithRefrigerant = z.infer<typeof suspectSpotWithRefrigerant>;
+
+const locatorDiagnostic = [
+  z.object({ kind: z.literal("fans-mixing"), fixtureId: text(), count: z.number(), levelPpm: z.number() }),
+  z.object({
+    kind: z.literal("benign-source"),
+    zoneId: text(),
+    note: text().nullable(),
+    count: z.number(),
+    peakPpm: z.number(),
+  }),
+  z.object({
+    kind: z.literal("sparse-coverage"),
+    count: z.number(),
+    gapM: z.number(),
+    longestM: z.number(),
+    at: z.object({ x: z.number(), y: z.number() }),
+  }),
+  z.object({ kind: z.literal("one-sided-pass") }),
+  z.object({ kind: z.literal("early-readings"), count: z.number(), shiftS: z.number() }),
+  z.object({ kind: z.literal("over-range"), count: z.number() }),
+  z.object({ kind: z.literal("delay-check"), statedS: z.number(), estimatedS: z.number(), used: z.boolean() }),
+  z.object({
+    kind: z.literal("delay-uncertain"),
+    plumePpm: z.number(),
+    alarmPpm: z.number(),
+    statedS: z.number(),
+    usedS: z.number().nullable(),
+  }),
 ] as const;
-/** API-added diagnostics beside the locator's own kinds. */
+/** API-added diagnostics beside the locator's own kinds: about the detector, already in words (no lengths, no ids). */
 const API_DIAGNOSTIC_KINDS = ["detector-overdue", "detector-settings", "delay-changed"] as const;
 
-export const analysisDiagnostic = z.object({
-  kind: z.enum([...LOCATOR_DIAGNOSTIC_KINDS, ...API_DIAGNOSTIC_KINDS]),
-  message: text(),
-  fixtureId: text().optional(),
-  zoneId: text().optional(),
-});
+export const analysisDiagnostic = z.discriminatedUnion("kind", [
+  ...locatorDiagnostic,
+  z.object({ kind: z.enum(API_DIAGNOSTIC_KINDS), message: text() }),
+]);
 export type AnalysisDiagnostic = z.infer<typeof analysisDiagnostic>;
 export type AnalysisDiagnosticKind = AnalysisDiagnostic["kind"];
+export type DetectorDiagnostic = Extract<AnalysisDiagnostic, { message: string }>;
+
+const locatorAssumptions = z.object({
+  shiftS: z.number(),
+  mixingHeightM: z.number(),
+  airChangesPerH: z.number(),
+  molarVolumeL: z.number(),
+  temperatureC: z.number(),
+  pressureKPa: z.number(),
+});
+
+/** The delay checked against the readings (`DelayFacts`). */
+export const delayFacts = z.object({
+  statedS: z.number(),
+  estimatedS: z.number().nullable(),
+  supported: z.boolean(),
+  usedS: z.number(),
+  statedMisfit: z.number().nullable(),
+  estimatedMisfit: z.number().nullable(),
+});
 
 const READING_FLAGS = ["before-delay", "path-gap", "snapped", "over-range", "in-benign-zone"] as const;
 
@@ -95,8 +173,9 @@ export const analysisSummary = z.object({
   candidates: z.array(suspectSpot),
   background: z.object({ ppm: z.number() }),
   diagnostics: z.array(analysisDiagnostic),
-  assumptions: z.array(text()),
+  assumptions: locatorAssumptions,
   readings: z.array(analysisReading),
+  delay: delayFacts,
 });
 export type AnalysisSummary = z.infer<typeof analysisSummary>;
 
@@ -113,6 +192,7 @@ export type EncodedField = z.infer<typeof encodedField>;
 
 /** The answer of GET /api/sweeps/:id/analysis; the client parses it with this same schema. */
 export const analysisResponse = analysisSummary.extend({
+  candidates: z.array(suspectSpotWithRefrigerant),
   sweepId: text(),
   params: analysisParams,
   /** Revision of the readings this result was computed from … */
@@ -132,8 +212,11 @@ export type AnalysisResponse = z.infer<typeof analysisResponse>;
 // The locator's own types and these schemas must describe the same values: a change to one side
 // that the other does not follow fails the typecheck here.
 type Same<A, B> = [A] extends [B] ? ([B] extends [A] ? true : false) : false;
-const sameSpot: Same<Candidate, SuspectSpot> = true;
-const sameKinds: Same<Diagnostic["kind"], (typeof LOCATOR_DIAGNOSTIC_KINDS)[number]> = true;
+const sameSpot: Same<SuspectSpotFacts, SuspectSpot> = true;
+const sameDiagnostics: Same<LocatorDiagnostic, Exclude<AnalysisDiagnostic, DetectorDiagnostic>> = true;
+const sameAssumptions: Same<LocatorAssumptions, z.infer<typeof locatorAssumptions>> = true;
+const sameDelay: Same<DelayFacts, z.infer<typeof delayFacts>> = true;
 const sameReading: Same<Omit<CorrectedReading, "flags">, Omit<AnalysisReading, "readingId" | "flags">> = true;
 const sameFlags: Same<CorrectedReading["flags"][number], AnalysisReading["flags"][number]> = true;
-void [sameSpot, sameKinds, sameReading, sameFlags];
+const sameRefrigerant: Same<SpotRefrigerant, z.infer<typeof spotRefrigerantSchema>> = true;
+void [sameSpot, sameDiagnostics, sameAssumptions, sameDelay, sameReading, sameFlags, sameRefrigerant];

@@ -54,20 +54,20 @@ const polygon = z.array(vertex, { error: "polygon must be an array of [x, y] ver
 
 const id = text({ error: "id must be a string" }).min(1, "id must not be empty");
 
-export const fixtureKinds = ["open-case", "island-case", "door-case", "walk-in", "machine-room"] as const;
-export const riskPointKinds = ["line-set", "valve", "coil"] as const;
-export const readingPoints = ["grille", "supply", "return", "floor", "high", "ambient"] as const;
+export const locatorFixtureKinds = ["open-case", "island-case", "door-case", "walk-in", "machine-room"] as const;
+export const locatorRiskPointKinds = ["line-set", "valve", "coil"] as const;
+export const locatorReadingPoints = ["grille", "supply", "return", "floor", "high", "ambient"] as const;
 
 const obstacle = z.object({ id, polygon });
 const fixture = z.object({
   id,
-  kind: z.enum(fixtureKinds, { error: `kind must be one of ${fixtureKinds.join(", ")}` }),
+  kind: z.enum(locatorFixtureKinds, { error: `kind must be one of ${locatorFixtureKinds.join(", ")}` }),
   polygon,
   fans: z.boolean({ error: "fans must be true or false" }).optional().default(false),
 });
 const riskPoint = z.object({
   id,
-  kind: z.enum(riskPointKinds, { error: `kind must be one of ${riskPointKinds.join(", ")}` }),
+  kind: z.enum(locatorRiskPointKinds, { error: `kind must be one of ${locatorRiskPointKinds.join(", ")}` }),
   x: finite("x"),
   y: finite("y"),
 });
@@ -106,7 +106,7 @@ const reading = z.object({
     .refine((v) => Number.isFinite(v), "ppm must be finite")
     .refine((v) => v >= 0, "ppm must not be negative"),
   atLeast: z.boolean({ error: "atLeast must be true or false" }).optional(),
-  point: z.enum(readingPoints, { error: `point must be one of ${readingPoints.join(", ")}` }).optional(),
+  point: z.enum(locatorReadingPoints, { error: `point must be one of ${locatorReadingPoints.join(", ")}` }).optional(),
   note: text().optional(),
 });
 
@@ -146,12 +146,15 @@ export const locatorInputSchema = z
 
 export type LocatorInput = z.output<typeof locatorInputSchema>;
 export type LocatorInputRaw = z.input<typeof locatorInputSchema>;
-export type Reading = LocatorInput["readings"][number];
-export type Fixture = LocatorInput["plan"]["fixtures"][number];
-export type RiskPoint = LocatorInput["plan"]["riskPoints"][number];
-export type BackgroundZone = LocatorInput["plan"]["backgroundZones"][number];
-export type Instrument = LocatorInput["instrument"];
-export type FixtureKind = (typeof fixtureKinds)[number];
+// Named apart from the product's Fixture and Reading (core/contracts/fixtures.ts, sweeps.ts): these are the
+// command-line format's records; the JSON field names stay those of docs/locator/command-line.md.
+export type LocatorReading = LocatorInput["readings"][number];
+export type LocatorFixture = LocatorInput["plan"]["fixtures"][number];
+export type LocatorRiskPoint = LocatorInput["plan"]["riskPoints"][number];
+export type LocatorBackgroundZone = LocatorInput["plan"]["backgroundZones"][number];
+export type LocatorInstrument = LocatorInput["instrument"];
+export type LocatorFixtureKind = (typeof locatorFixtureKinds)[number];
+export type LocatorRiskPointKind = (typeof locatorRiskPointKinds)[number];
 
 /** "readings[3].ppm: ppm must not be negative" — one line per problem, naming the field. */
 export function formatIssues(error: z.ZodError): string[] {

@@ -4,6 +4,7 @@
  *  2. a sweep report PDF for a 500-reading sweep (field map drawn with jimp + pdfkit), target < 3 s.
  * The field is the locator's own output for the 100 m × 60 m benchmark store at 0.25 m cells.
  */
+import { commandLineOutput } from "#core/domain/locator-words/command-line-output";
 import { mkdtempSync, readFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
@@ -80,6 +81,7 @@ async function reportPdf(result: ReturnType<typeof locate>, input: ReturnType<ty
       spots: result.candidates.map((c) => ({ x: c.x, y: c.y, radiusM: c.radius })),
       widthPx: 1400,
     });
+    const words = commandLineOutput(input, result);
     const model: SweepReportModel = {
       title: "Sweep report — Benchmark Foods – Riverside",
       paper: "a4",
@@ -99,7 +101,10 @@ async function reportPdf(result: ReturnType<typeof locate>, input: ReturnType<ty
         settings: "transport delay 5 s, time constant 1.5 s, alarm at 2 ppm",
       },
       background: `${result.background.ppm.toFixed(1)} ppm`,
-      suspects: result.candidates.map((c) => ({
+      delayCheck: "—",
+      noSpot: "No credible leak: nothing stands out from the background on this sweep.",
+      assumptions: words.assumptions,
+      suspects: words.candidates.map((c) => ({
         rank: c.rank,
         position: `${c.x.toFixed(1)} m, ${c.y.toFixed(1)} m`,
         radius: `${c.radius.toFixed(1)} m`,
@@ -113,7 +118,7 @@ async function reportPdf(result: ReturnType<typeof locate>, input: ReturnType<ty
         y: c.y,
         radiusM: c.radius,
       })),
-      diagnostics: result.diagnostics.map((d) => d.message),
+      diagnostics: words.diagnostics.map((d) => d.message),
       findings: [],
       readings: result.readings.map((r, i) => ({
         n: i + 1,

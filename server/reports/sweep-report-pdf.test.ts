@@ -33,6 +33,12 @@ function model(png: Buffer, readings: number, paper: SweepReportModel["paper"]):
       settings: "transport delay 5 s, response 1.5 s, alarm 2 ppm",
     },
     background: "about 0.4 ppm",
+    delayCheck:
+      "Readings fit a 6.5 s delay better than the detector's 5 s. Passes over the same spots agree better with 6.5 s, so the spots are placed with it.",
+    noSpot: "No credible leak: nothing stands out from the background on this sweep.",
+    assumptions: [
+      "Strength per year assumes the store air is well mixed over 9 ft 10 in height with 2 air changes per hour; treat it as an order of magnitude.",
+    ],
     suspects: Array.from({ length: 4 }, (_, i) => ({
       rank: i + 1,
       position: `${12 + i} ft 3 in, 40 ft ${i} in`,

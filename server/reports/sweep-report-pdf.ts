@@ -165,6 +165,7 @@ export function buildSweepReportPdf(m: SweepReportModel): Promise<Buffer> {
     ["Detector", `${m.detector.name} (${m.detector.principle})`],
     ["Calibration / bump check", m.detector.calibration],
     ["Detector settings", m.detector.settings],
+    ["Delay check", m.delayCheck],
     ["Background", m.background],
   ]);
 
@@ -173,8 +174,7 @@ export function buildSweepReportPdf(m: SweepReportModel): Promise<Buffer> {
   else doc.fillColor(MUTED).text("No field map: the sweep could not be analysed.");
 
   heading(doc, "Suspect spots");
-  if (m.suspects.length === 0)
-    doc.fillColor(INK).text("No credible leak: no suspect spot stands out from the background.");
+  if (m.suspects.length === 0) doc.fillColor(INK).text(m.noSpot);
   for (const s of m.suspects) {
     if (doc.y > doc.page.height - MARGIN - 60) doc.addPage();
     doc
@@ -190,6 +190,9 @@ export function buildSweepReportPdf(m: SweepReportModel): Promise<Buffer> {
     doc.fillColor(MUTED).text(`Next check: ${s.nextCheck}`, { indent: 12 });
     doc.moveDown(0.4);
   }
+
+  for (const a of m.assumptions) doc.font("regular").fontSize(8.5).fillColor(MUTED).text(a);
+  doc.fontSize(10);
 
   heading(doc, "Diagnostics");
   if (m.diagnostics.length === 0) doc.fillColor(INK).text("Nothing to report.");

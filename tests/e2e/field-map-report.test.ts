@@ -13,6 +13,7 @@ let server: E2eServer;
 let browser: Browser;
 let uploads: string;
 const shots = path.join(os.tmpdir(), "plumeline-fieldmap-shots");
+const screens = path.resolve(import.meta.dirname, "../../test-results/screens");
 
 beforeAll(async () => {
   uploads = await fs.mkdtemp(path.join(os.tmpdir(), "plumeline-e2e-demo-"));
@@ -55,6 +56,21 @@ it("an engineer opens the latest sweep's field map, compares it with the month b
   });
   expect(painted).toBeGreaterThan(50);
   await page.screenshot({ path: path.join(shots, "field-map.png"), fullPage: true });
+  // the demo company works in feet and inches: every length of a spot is in ft-in, none in metres,
+  // and spots, risk points and fixtures are named as drawn
+  const spotText = (await page.getByTestId("suspect-spot").first().textContent()) ?? "";
+  expect(spotText).toMatch(/\d+ ft( \d+ in)? across, \d+ ft( \d+ in)? down, within \d+ ft/);
+  expect(spotText).not.toMatch(/\d m\b/);
+  expect(spotText).toMatch(/about [\d,.]+ (lb|oz)\/yr of R-[\dA-Z]+/);
+  expect(spotText).not.toMatch(/[0-9a-f]{8}-[0-9a-f]{4}-/);
+  // the delay checked against the readings, shown beside the spots
+  const delayCheck = page.getByTestId("delay-check");
+  await expect(delayCheck.textContent()).resolves.toMatch(
+    /Delay check(Readings (fit|agree)|The delay could not be checked)/,
+  );
+  await delayCheck.scrollIntoViewIfNeeded();
+  await fs.mkdir(screens, { recursive: true });
+  await page.screenshot({ path: path.join(screens, "field-map-ft-in-delay-check.png"), fullPage: true });
   await page.getByRole("button", { name: "Zoom to spot 1" }).click();
   await page.getByRole("button", { name: "Show whole plan" }).waitFor();
 

@@ -1,4 +1,4 @@
-import type { Candidate, CorrectedReading } from "../../contracts/locator-output";
+import type { CorrectedReading, SuspectSpotFacts } from "../../contracts/locator-output";
 import type { ProbePlace } from "./probe-places";
 
 /** One place the leak could be, with how much the readings so far favour it (weights sum to 1). */
@@ -33,7 +33,7 @@ export type Kernel = (d: number) => number;
  * amplitude that best fits the corrected readings by least squares.
  */
 export function hypothesesOf(
-  candidates: readonly Candidate[],
+  candidates: readonly Pick<SuspectSpotFacts, "rank" | "x" | "y" | "radius" | "score" | "fixtureId">[],
   readings: readonly CorrectedReading[],
   kernel: Kernel,
   top = 3,

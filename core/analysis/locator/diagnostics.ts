@@ -1,9 +1,9 @@
-import type { BackgroundZone, Fixture } from "../../contracts/locator-input";
-import type { Diagnostic } from "../../contracts/locator-output";
+import type { LocatorBackgroundZone, LocatorFixture } from "../../contracts/locator-input";
+import type { LocatorDiagnostic } from "../../contracts/locator-output";
 import { pointInPolygon } from "../geometry/point-in-polygon";
 import { distanceToPolygonEdge } from "../geometry/segments";
 
-const r1 = (v: number) => (Math.round(v * 10) / 10).toString();
+const r2 = (v: number) => Math.round(v * 100) / 100;
 
 function quantile(sorted: number[], p: number): number {
   const pos = (sorted.length - 1) * p;
@@ -18,13 +18,13 @@ function quantile(sorted: number[], p: number): number {
  * excess (common practice, no published source).
  */
 export function fansMixing(
-  fixture: Fixture,
+  fixture: LocatorFixture,
   xs: Float64Array,
   ys: Float64Array,
   y: Float64Array,
   background: number,
   alarmPpm: number,
-): Diagnostic | null {
+): LocatorDiagnostic | null {
   if (!fixture.fans) return null;
   const inside: number[] = [];
   for (let i = 0; i < xs.length; i++) {
@@ -37,25 +37,16 @@ export function fansMixing(
   const med = quantile(inside, 0.5);
   if (med < alarmPpm) return null;
   if (quantile(inside, 0.9) - quantile(inside, 0.1) > 0.5 * med) return null;
-  return {
-    kind: "fans-mixing",
-    fixtureId: fixture.id,
-    message: `${inside.length} readings across ${fixture.id} are level at about ${r1(med + background)} ppm: its fans are mixing the gas. Stop the fans (or wait for defrost), let the air settle and sweep it again.`,
-  };
+  return { kind: "fans-mixing", fixtureId: fixture.id, count: inside.length, levelPpm: r2(med + background) };
 }
 
-export function benignSource(zone: BackgroundZone, explained: number, peak: number): Diagnostic | null {
+export function benignSource(zone: LocatorBackgroundZone, explained: number, peak: number): LocatorDiagnostic | null {
   if (explained === 0) return null;
-  const what = zone.note ? ` (${zone.note})` : "";
-  return {
-    kind: "benign-source",
-    zoneId: zone.id,
-    message: `${explained} readings near ${zone.id}${what}, up to ${r1(peak)} ppm, are explained by that benign-source zone and not counted as leak evidence.`,
-  };
+  return { kind: "benign-source", zoneId: zone.id, note: zone.note || null, count: explained, peakPpm: r2(peak) };
 }
 
 /** Stretches between consecutive taps longer than `gapM`, where a leak could be walked past unseen. */
-export function sparseCoverage(xs: Float64Array, ys: Float64Array, gapM: number): Diagnostic | null {
+export function sparseCoverage(xs: Float64Array, ys: Float64Array, gapM: number): LocatorDiagnostic | null {
   let count = 0;
   let longest = 0;
   let at: [number, number] = [0, 0];
@@ -70,10 +61,7 @@ export function sparseCoverage(xs: Float64Array, ys: Float64Array, gapM: number)
     }
   }
   if (count === 0) return null;
-  return {
-    kind: "sparse-coverage",
-    message: `${count} gap${count > 1 ? "s" : ""} between taps ${count > 1 ? "are" : "is"} longer than ${r1(gapM)} m (longest ${r1(longest)} m, around x ${r1(at[0])} m, y ${r1(at[1])} m). A leak there could be missed: walk those stretches again, tapping every 1.2–1.5 m.`,
-  };
+  return { kind: "sparse-coverage", count, gapM, longestM: r2(longest), at: { x: r2(at[0]), y: r2(at[1]) } };
 }
 
 /**

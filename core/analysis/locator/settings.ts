@@ -72,10 +72,9 @@ export interface PlacementSettings {
 export interface ReportSettings {
   /** Tap gaps longer than this are reported as sparse coverage, m (common practice, no published source). */
   readonly coverageGapM: number;
-  /** The well-mixed assumption behind the g/yr estimate. */
+  /** The well-mixed assumption behind the strength per year (the refrigerant is chosen when it is worded). */
   readonly airChangesPerH: number;
   readonly mixingHeightM: number;
-  readonly molarMassGPerMol: number;
 }
 
 export interface LocatorSettings {
@@ -121,7 +120,5 @@ export const LOCATOR_SETTINGS: LocatorSettings = {
     coverageGapM: 3,
     airChangesPerH: 2,
     mixingHeightM: 3,
-    // R-404A, a common supermarket blend (docs/reference/standards.md §3, molar mass derived there)
-    molarMassGPerMol: 97.6,
   },
 };

@@ -1,5 +1,10 @@
 import type { LocatorInput } from "../../contracts/locator-input";
-import type { CorrectedReading, Diagnostic, ReadingFlag } from "../../contracts/locator-output";
+import type {
+  CorrectedReading,
+  LocatorAssumptions,
+  LocatorDiagnostic,
+  ReadingFlag,
+} from "../../contracts/locator-output";
 import { cellIndexOf, type PlanGrid } from "../grid/plan-grid";
 import { benignSource, fansMixing, sparseCoverage } from "../locator/diagnostics";
 import type { ReportSettings, SourceSettings } from "../locator/settings";
@@ -13,9 +18,9 @@ import type { ZonesResult } from "./zones-stage";
 
 /** Stage 6: what the technician should know about the sweep, each reading's correction, and the assumptions. */
 export interface DiagnosticsResult {
-  readonly diagnostics: readonly Diagnostic[];
+  readonly diagnostics: readonly LocatorDiagnostic[];
   readonly readings: readonly CorrectedReading[];
-  readonly assumptions: readonly string[];
+  readonly assumptions: LocatorAssumptions;
 }
 
 export function diagnosticsStage(
@@ -35,7 +40,7 @@ export function diagnosticsStage(
   const n = y.length;
   const background = field.background.ppm;
   const delayS = round2(shiftS);
-  const diagnostics: Diagnostic[] = [];
+  const diagnostics: LocatorDiagnostic[] = [];
   for (const f of plan.fixtures) {
     const d = fansMixing(f, xs, ys, y, background, instrument.alarmPpm);
     if (d) diagnostics.push(d);
@@ -59,25 +64,15 @@ export function diagnosticsStage(
   );
   if (coverage) diagnostics.push(coverage);
   if (placement.topOneSided) {
-    diagnostics.push({
-      kind: "one-sided-pass",
-      message:
-        "The top suspect spot is seen from one pass only, so which side of the path it is on cannot be told: make a pass along the other face.",
-    });
+    diagnostics.push({ kind: "one-sided-pass" });
   }
   const early = positions.filter((l) => l.beforeDelay).length;
   if (early > 0) {
-    diagnostics.push({
-      kind: "early-readings",
-      message: `${early} reading${early > 1 ? "s were" : " was"} taken before one delay (${delayS} s) had passed and ${early > 1 ? "are" : "is"} placed at the first tap.`,
-    });
+    diagnostics.push({ kind: "early-readings", count: early, shiftS: delayS });
   }
   const over = censored.reduce((a, b) => a + b, 0);
   if (over > 0) {
-    diagnostics.push({
-      kind: "over-range",
-      message: `${over} reading${over > 1 ? "s were" : " was"} over range and counted as "at least" that value.`,
-    });
+    diagnostics.push({ kind: "over-range", count: over });
   }
 
   const corrected: CorrectedReading[] = readings.map((r, i) => {
@@ -101,11 +96,13 @@ export function diagnosticsStage(
   return {
     diagnostics,
     readings: corrected,
-    assumptions: [
-      `Readings moved back along the walk by the transport delay plus the sensor time constant (${delayS} s).`,
-      `Strength in g/yr assumes the store air is well mixed over ${rep.mixingHeightM} m height with ${rep.airChangesPerH} air changes per hour, ` +
-        `a refrigerant of ${rep.molarMassGPerMol} g/mol and ${MOLAR_VOLUME_25C_L} L/mol (25 °C, 101.325 kPa); treat it as an order of magnitude.`,
-      "Suspect spots are search zones for a hand check, not pinpoints; follow local codes and certified practice when working on the system.",
-    ],
+    assumptions: {
+      shiftS: delayS,
+      mixingHeightM: rep.mixingHeightM,
+      airChangesPerH: rep.airChangesPerH,
+      molarVolumeL: MOLAR_VOLUME_25C_L,
+      temperatureC: 25,
+      pressureKPa: 101.325,
+    },
   };
 }

@@ -1,4 +1,4 @@
-import type { Instrument, Reading } from "../../contracts/locator-input";
+import type { LocatorInstrument, LocatorReading } from "../../contracts/locator-input";
 import { nearestFreeCell, type PlanGrid } from "../grid/plan-grid";
 import { gridRoute } from "../lag/grid-route";
 import type { LaggedPosition } from "../lag/lag-correct";
@@ -22,8 +22,8 @@ export interface LagResult {
  * time constant: the same walkLag the Walk screen's lag hint calls, so both mark the same point.
  */
 export function lagStage(
-  readings: readonly Reading[],
-  instrument: Pick<Instrument, "transportDelayS" | "timeConstantS">,
+  readings: readonly LocatorReading[],
+  instrument: Pick<LocatorInstrument, "transportDelayS" | "timeConstantS">,
   grid: PlanGrid,
   walkSpeedMps: number,
 ): LagResult {

@@ -1,7 +1,6 @@
 import type { LocatorInput } from "../../contracts/locator-input";
-import type { Candidate } from "../../contracts/locator-output";
+import type { SuspectSpotFacts } from "../../contracts/locator-output";
 import { cellCentre, cellIndexOf, cellsInside, type PlanGrid } from "../grid/plan-grid";
-import { candidateNextCheck, candidateReason, type CandidateFacts } from "../locator/candidate-words";
 import { oneSidedPass } from "../locator/diagnostics";
 import type { FoundSource } from "../locator/greedy-sources";
 import { refineCell } from "../locator/local-refine";
@@ -9,6 +8,7 @@ import { nearestFixture, nearestRiskPoint } from "../locator/nearest-features";
 import { kernelColumn } from "../locator/reading-fields";
 import type { PlacementSettings, ReportSettings, SourceSettings } from "../locator/settings";
 import { kernelArea } from "../locator/source-kernel";
+import { spotNextChecks, spotReason, type SpotGeometry } from "../locator/spot-facts";
 import { HOURS_PER_YEAR, ppmToMgPerM3, wellMixedEmission } from "../locator/units";
 import type { FieldResult } from "./field-stage";
 import type { LagResult } from "./lag-stage";
@@ -17,7 +17,7 @@ import { supportingReadings, type SourcesResult, type SupportRule } from "./sour
 
 /** Stage 5: where each found source is listed, how sure the list is, and the facts behind each spot. */
 export interface PlacementResult {
-  readonly candidates: readonly Candidate[];
+  readonly candidates: readonly SuspectSpotFacts[];
   /** The top spot is seen from one pass only (its side of the path is uncertain). */
   readonly topOneSided: boolean;
 }
@@ -147,15 +147,12 @@ export function placementStage(
 
   const r = settings.report;
   const topQ = Math.max(placed[0]?.q ?? 0, 1e-12);
-  const gPerYearPerQ =
-    (wellMixedEmission(
-      ppmToMgPerM3(1, r.molarMassGPerMol),
-      r.airChangesPerH,
-      kernelArea(field.kernel) * r.mixingHeightM,
-    ) *
+  // moles per year: the room balance at a molar mass of 1 g/mol gives g/yr numerically equal to mol/yr
+  const molPerYearPerQ =
+    (wellMixedEmission(ppmToMgPerM3(1, 1), r.airChangesPerH, kernelArea(field.kernel) * r.mixingHeightM) *
       HOURS_PER_YEAR) /
     1000;
-  const candidates: Candidate[] = [];
+  const candidates: SuspectSpotFacts[] = [];
   let topOneSided = false;
   placed.forEach((s, rank) => {
     const [x, y0] = cellCentre(grid, s.cell);
@@ -173,7 +170,7 @@ export function placementStage(
     );
     const fixture = nearestFixture(plan.fixtures, x, y0);
     const riskPoint = nearestRiskPoint(plan.riskPoints, x, y0);
-    const facts: CandidateFacts = {
+    const facts: SpotGeometry = {
       alternate: s.alternate,
       supportCount: sup.length,
       peakPpm: sup.reduce((m, i) => Math.max(m, y[i]), 0),
@@ -192,11 +189,11 @@ export function placementStage(
       radius: round2(radius),
       score: round2(score),
       strength: round2(s.q / topQ),
-      strengthGPerYear: Math.round(s.q * gPerYearPerQ),
+      molPerYear: s.q * molPerYearPerQ,
       fixtureId: fixture?.item.id ?? null,
       riskPointId: riskPoint?.item.id ?? null,
-      reason: candidateReason(facts),
-      nextCheck: candidateNextCheck(facts),
+      reason: spotReason(facts),
+      nextChecks: spotNextChecks(facts),
     });
   });
   return { candidates, topOneSided };

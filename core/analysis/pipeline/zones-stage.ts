@@ -1,4 +1,4 @@
-import type { BackgroundZone } from "../../contracts/locator-input";
+import type { LocatorBackgroundZone } from "../../contracts/locator-input";
 import { polygonCentroid } from "../geometry/polygon-area";
 import { GeodesicSearch } from "../grid/geodesic-distance";
 import { cellsInside, nearestFreeCell, type PlanGrid } from "../grid/plan-grid";
@@ -30,7 +30,7 @@ export interface ZonesResult {
 }
 
 export function zonesStage(
-  zones: readonly BackgroundZone[],
+  zones: readonly LocatorBackgroundZone[],
   alarmPpm: number,
   grid: PlanGrid,
   stepScale: Float32Array | null,

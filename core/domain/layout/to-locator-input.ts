@@ -6,13 +6,11 @@
 import { clipPolygonToRect } from "../../analysis/geometry/clip-to-rect";
 import { FIXTURE_FAMILY, isRoomKind, type FixtureKind } from "../../contracts/fixture-kinds";
 import type { Fixture, PlanBounds, Vertex } from "../../contracts/fixtures";
+import type { LocatorFixtureKind, LocatorRiskPointKind } from "../../contracts/locator-input";
 import { roomWalls } from "./room-walls";
 
 /** Room walls as thin polygons: 0.1 m, a typical insulated walk-in panel (about 4 in; common practice, no published source). */
 export const ROOM_WALL_THICKNESS_M = 0.1;
-
-export type LocatorFixtureKind = "open-case" | "island-case" | "door-case" | "walk-in" | "machine-room";
-export type LocatorRiskPointKind = "line-set" | "valve" | "coil";
 
 export interface LocatorPlan {
   width: number;

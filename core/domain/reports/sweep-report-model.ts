@@ -40,7 +40,13 @@ export interface SweepReportModel {
   sweep: { started: string; submitted: string; status: string; technician: string; conditions: string };
   detector: { name: string; principle: string; calibration: string; settings: string };
   background: string;
+  /** The delay checked against the readings, in one or two sentences (core/domain/locator-words/). */
+  delayCheck: string;
   suspects: ReportSuspect[];
+  /** Said instead of the list when no spot is listed: never "clean" for a plume far above the alarm. */
+  noSpot: string;
+  /** What the positions and strengths assume. */
+  assumptions: string[];
   diagnostics: string[];
   findings: { status: string; found: string; where: string; note: string }[];
   readings: ReportReading[];

@@ -13,6 +13,8 @@ const SETTLED_M = 0.3;
 const SETTLED_READINGS = 3;
 /** Probe places are looked for this far around the first suspect (m). */
 const REACH_M = 6;
+/** The live suspects are those within this distance of the alarm that started the search (m). */
+const WINDOW_M = 8;
 
 export const guided: Policy = {
   name: "guided",
@@ -21,6 +23,8 @@ export const guided: Policy = {
     const source = createSourceKernel(k.screeningLengthM, k.nearCutoffM, k.truncationM);
     const kernel = (d: number) => source.at(d);
     const marks: { x: number; y: number }[] = [];
+    const readings = world.technician.readings;
+    const alarm = readings[readings.length - 1];
     for (;;) {
       const input = parseLocatorInput({
         plan: world.plan,
@@ -28,7 +32,9 @@ export const guided: Policy = {
         readings: world.technician.readings,
       });
       const result = locate(input);
-      const first = result.candidates[0];
+      // The evidence around this alarm, not a spot elsewhere in the store the sweep passed earlier.
+      const near = result.candidates.filter((c) => Math.hypot(c.x - alarm.x, c.y - alarm.y) <= WINDOW_M);
+      const first = near[0];
       // No credible spot from the readings so far: the alarm was a blip, and the sweep goes on.
       if (!first) return "nothing";
       marks.push({ x: first.x, y: first.y });
@@ -39,7 +45,7 @@ export const guided: Policy = {
       if (settled) return "marked";
       const [x, y] = world.technician.position;
       const places = probePlaces(input.plan, first, REACH_M);
-      const next = nextProbes(hypothesesOf(result.candidates, result.readings, kernel), places, kernel, { x, y })[0];
+      const next = nextProbes(hypothesesOf(near, result.readings, kernel), places, kernel, { x, y })[0];
       if (!next) return "marked";
       world.technician.probeAt(world.map, [next.x, next.y]);
     }

@@ -13,13 +13,17 @@ export interface AnalysisInputs {
   readings: SweepReadingRow[];
   plan: ReturnType<typeof toLocatorPlan>;
   detectorName: string;
-  /** Fixture id → the name drawn on the plan, for the locator's sentences. */
-  labels: Map<string, string>;
 }
+
+/**
+ * Version of the stored result's shape: results stored under another version are never read (their
+ * keys differ), so a change to `analysisSummary` bumps it. 2: facts instead of sentences.
+ */
+const RESULT_VERSION = 2;
 
 /** Canonical text of a parameter set: the cache key beside the sweep id. */
 export function paramsKey(p: AnalysisParams): string {
-  return `delay=${p.transportDelayS};tau=${p.timeConstantS};alarm=${p.alarmPpm};cell=${p.cellSize}`;
+  return `v${RESULT_VERSION};delay=${p.transportDelayS};tau=${p.timeConstantS};alarm=${p.alarmPpm};cell=${p.cellSize}`;
 }
 
 /**
@@ -58,8 +62,7 @@ export async function loadAnalysisInputs(ctx: AppContext, sweepId: string): Prom
         .orderBy(asc(fixtures.position));
       const [det] = await tx.select({ name: detectors.name }).from(detectors).where(eq(detectors.id, sweep.detectorId));
       const plan = toLocatorPlan(bounds, fixtureRows.map(rowToFixture), { fansRunning: sweep.fans === "running" });
-      const labels = new Map(fixtureRows.map((f) => [f.id.toLowerCase(), f.label || f.kind.replace(/-/g, " ")]));
-      return { sweep, readings: rows, plan, detectorName: det?.name ?? "The detector", labels };
+      return { sweep, readings: rows, plan, detectorName: det?.name ?? "The detector" };
     },
     { isolationLevel: "repeatable read", accessMode: "read only" },
   );

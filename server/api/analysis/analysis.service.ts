@@ -12,13 +12,13 @@ import { analyses } from "../../db/schema/index";
 import { detectorDiagnostics } from "#core/domain/fieldmap/detector-diagnostics";
 import { bytesToFloat32, float32ToBytes, quantiseConfidence } from "#core/domain/fieldmap/field-codec";
 import { sweepLocatorInput } from "#core/domain/fieldmap/sweep-locator-input";
-import { nameFixtures } from "#core/domain/fieldmap/name-fixtures";
 import { HttpError } from "../../lib/http-error";
 import { createAnalysisRunner, type AnalysisRunner } from "../../jobs/analysis-runner";
 import { JobError } from "../../jobs/cpu-pool";
 import type { Viewer } from "../../access/store-access";
 import { loadVisibleSweep, type SweepRow } from "../../access/sweep-access";
 import { loadAnalysisInputs, paramsKey } from "./analysis-inputs";
+import { withRefrigerants } from "./spot-refrigerants";
 
 export type AnalysisRow = typeof analyses.$inferSelect;
 
@@ -67,8 +67,7 @@ export function sweepParams(
 }
 
 async function compute(ctx: AppContext, sweepId: string, params: AnalysisParams): Promise<AnalysisRow> {
-  const { sweep, readings, plan, detectorName, labels } = await loadAnalysisInputs(ctx, sweepId);
-  const named = (text: string) => nameFixtures(text, labels);
+  const { sweep, readings, plan, detectorName } = await loadAnalysisInputs(ctx, sweepId);
   const { input: raw, readingIds } = sweepLocatorInput(plan, sweep.startedAt, readings, params);
   let input;
   try {
@@ -95,7 +94,7 @@ async function compute(ctx: AppContext, sweepId: string, params: AnalysisParams)
   const durationMs = Math.round(performance.now() - started);
   const overdue = sweep.warnings.find((w) => w.code === "detector-overdue")?.message ?? null;
   const summary: AnalysisSummary = {
-    candidates: result.candidates.map((c) => ({ ...c, reason: named(c.reason), nextCheck: named(c.nextCheck) })),
+    candidates: result.candidates,
     background: result.background,
     diagnostics: [
       ...detectorDiagnostics(
@@ -108,10 +107,11 @@ async function compute(ctx: AppContext, sweepId: string, params: AnalysisParams)
         },
         params,
       ),
-      ...result.diagnostics.map((d) => ({ ...d, message: named(d.message) })),
+      ...result.diagnostics,
     ],
     assumptions: result.assumptions,
     readings: result.readings.map((r) => ({ ...r, readingId: readingIds[r.index] })),
+    delay: result.delay,
   };
   const values = {
     companyId: sweep.companyId,
@@ -175,11 +175,17 @@ function computeOnce(ctx: AppContext, sweep: SweepRow, params: AnalysisParams): 
   return p;
 }
 
-function toResponse(row: AnalysisRow, sweep: SweepRow, recomputing: boolean): AnalysisResponse {
+async function toResponse(
+  ctx: AppContext,
+  row: AnalysisRow,
+  sweep: SweepRow,
+  recomputing: boolean,
+): Promise<AnalysisResponse> {
   return {
     sweepId: row.sweepId,
     params: row.params,
     ...row.result,
+    candidates: await withRefrigerants(ctx, sweep.planId, row.result.candidates),
     readingsRevision: row.readingsRevision,
     currentReadingsRevision: sweep.readingsRevision,
     stale: row.readingsRevision !== sweep.readingsRevision,
@@ -230,14 +236,15 @@ export async function getAnalysis(
       Object.fromEntries(Object.keys(tuned).map((k) => [k, "may be changed by owners, lead techs and engineers only"])),
     );
   const row = await cachedAnalysis(ctx, sweepId, params);
-  if (row && row.readingsRevision === sweep.readingsRevision) return toResponse(row, sweep, false);
+  if (row && row.readingsRevision === sweep.readingsRevision) return toResponse(ctx, row, sweep, false);
   if (row && q.wait !== "true") {
     // Show what we have, say it is stale, and recompute in the background; the client asks again.
     computeOnce(ctx, sweep, params).catch((err) => ctx.logger.warn({ err, sweepId }, "analysis recompute failed"));
-    return toResponse(row, sweep, true);
+    return toResponse(ctx, row, sweep, true);
   }
   const fresh = await computeOnce(ctx, sweep, params);
   return toResponse(
+    ctx,
     fresh,
     { ...sweep, readingsRevision: Math.max(sweep.readingsRevision, fresh.readingsRevision) },
     false,

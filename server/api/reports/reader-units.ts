@@ -1,18 +1,23 @@
 import { eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { companies } from "../../db/schema/index";
-import type { LengthPreference } from "#core/domain/units/format-units";
+import type { LengthPreference, MassPreference } from "#core/domain/units/format-units";
 
-/** The reader's length unit: their own choice, else the company's default. */
-export async function readerLengthUnit(
+export interface ReaderUnits {
+  length: LengthPreference;
+  mass: MassPreference;
+}
+
+/** The reader's length and mass units: their own choices, else the company's defaults. */
+export async function readerUnits(
   ctx: AppContext,
-  user: { lengthUnit: LengthPreference | null },
+  user: { lengthUnit: LengthPreference | null; massUnit: MassPreference | null },
   companyId: string,
-): Promise<LengthPreference> {
-  if (user.lengthUnit) return user.lengthUnit;
+): Promise<ReaderUnits> {
+  if (user.lengthUnit && user.massUnit) return { length: user.lengthUnit, mass: user.massUnit };
   const [c] = await ctx.db
-    .select({ lengthUnit: companies.lengthUnit })
+    .select({ lengthUnit: companies.lengthUnit, massUnit: companies.massUnit })
     .from(companies)
     .where(eq(companies.id, companyId));
-  return c?.lengthUnit ?? "m";
+  return { length: user.lengthUnit ?? c?.lengthUnit ?? "m", mass: user.massUnit ?? c?.massUnit ?? "kg" };
 }

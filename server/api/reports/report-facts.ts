@@ -24,7 +24,10 @@ import type { CsvReading } from "#core/domain/reports/readings-csv";
 import type { SweepReportModel } from "#core/domain/reports/sweep-report-model";
 import { findRefrigerant } from "#core/domain/refrigerants/catalogue";
 import { cautionsFor, type Caution } from "#core/domain/safety/cautions";
-import { formatLength, type LengthPreference } from "#core/domain/units/format-units";
+import { formatLength } from "#core/domain/units/format-units";
+import { presentAnalysis } from "#core/domain/locator-words/present-analysis";
+import type { ReaderUnits } from "./reader-units";
+import { withRefrigerants } from "../analysis/spot-refrigerants";
 import { HttpError } from "../../lib/http-error";
 import type { Viewer } from "../../access/store-access";
 import { loadVisibleSweep, type SweepRow } from "../../access/sweep-access";
@@ -63,8 +66,9 @@ export async function loadReportFacts(
   ctx: AppContext,
   viewer: Viewer,
   sweepId: string,
-  unit: LengthPreference,
+  units: ReaderUnits,
 ): Promise<ReportFacts> {
+  const unit = units.length;
   const sweep = await loadVisibleSweep(ctx, viewer, sweepId);
   let analysis: AnalysisRow | null = null;
   let analysisProblem: string | null = null;
@@ -103,6 +107,16 @@ export async function loadReportFacts(
   const len = (m: number) => formatLength(m, unit, { decimals: 1 });
   const pos = (x: number, y: number) => `${len(x)}, ${len(y)}`;
   const summary = analysis?.result ?? null;
+  const words = summary
+    ? presentAnalysis(
+        {
+          ...summary,
+          candidates: await withRefrigerants(ctx, sweep.planId, summary.candidates),
+          params: analysis!.params,
+        },
+        { ...units, names: new Map(fixtureRows.map((f) => [f.id, f.label])), delaySetByHand: false },
+      )
+    : null;
   const corrected = new Map(summary?.readings.map((r) => [r.readingId, r]) ?? []);
   const maxPpm = niceMaxPpm(Math.max(0, ...readingRows.map((r) => r.ppm)), sweep.alarmPpm);
   const scale = createConcentrationScale({ maxPpm, log: true });
@@ -137,21 +151,24 @@ export async function loadReportFacts(
       settings: `transport delay ${sweep.transportDelayS} s, response time constant ${sweep.timeConstantS} s, alarm at ${sweep.alarmPpm} ppm (as at the sweep)`,
     },
     background: summary ? `${summary.background.ppm.toFixed(1)} ppm (estimated from the readings)` : "—",
-    suspects: (summary?.candidates ?? []).map((c) => ({
+    delayCheck: words ? `${words.delay.headline} ${words.delay.detail}` : "—",
+    suspects: (summary?.candidates ?? []).map((c, i) => ({
       rank: c.rank,
       position: pos(c.x, c.y),
       radius: len(c.radius),
       score: c.score,
-      strength: `${c.strength.toFixed(2)} of the strongest${Number.isFinite(c.strengthGPerYear) ? `, about ${Math.round(c.strengthGPerYear)} g/yr if well mixed` : ""}`,
-      fixture: c.fixtureId ? (label.get(c.fixtureId) ?? "a fixture") : "open floor",
-      riskPoint: c.riskPointId ? (label.get(c.riskPointId) ?? "a risk point") : "none near",
-      reason: c.reason,
-      nextCheck: c.nextCheck,
+      strength: words!.spots[i].strength,
+      fixture: words!.spots[i].place,
+      riskPoint: words!.spots[i].riskPoint,
+      reason: words!.spots[i].reason,
+      nextCheck: words!.spots[i].nextCheck,
       x: c.x,
       y: c.y,
       radiusM: c.radius,
     })),
-    diagnostics: [...(analysisProblem ? [analysisProblem] : []), ...(summary?.diagnostics.map((d) => d.message) ?? [])],
+    noSpot: words?.noSpot ?? "The sweep could not be analysed, so nothing can be said about leaks from it.",
+    assumptions: words?.assumptions ?? [],
+    diagnostics: [...(analysisProblem ? [analysisProblem] : []), ...(words?.diagnostics.map((d) => d.text) ?? [])],
     findings: findingRows.map((f) => ({
       status: f.status,
       found: zonedDateTime(f.foundAt, tz),

@@ -5,7 +5,7 @@ import { logExport } from "../../lib/security-log";
 import { sendReportInput } from "#core/contracts/reports";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
-import { readerLengthUnit } from "./reader-units";
+import { readerUnits } from "./reader-units";
 import {
   listReportSends,
   reportRecipients,
@@ -21,10 +21,10 @@ const sendParams = z.object({ id: z.uuid("must be a valid id"), sendId: z.uuid("
 
 export function reportsRouter(ctx: AppContext): Router {
   const router = Router();
-  const unit = (req: Request) => readerLengthUnit(ctx, req.auth!.user, member(req).companyId);
+  const units = (req: Request) => readerUnits(ctx, req.auth!.user, member(req).companyId);
 
   router.get("/sweeps/:id/report.pdf", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
-    const { filename, pdf } = await sweepReportPdf(ctx, member(req), res.locals.params.id, await unit(req));
+    const { filename, pdf } = await sweepReportPdf(ctx, member(req), res.locals.params.id, await units(req));
     await logExport(ctx, req, "report.pdf", { sweepId: res.locals.params.id });
     res.type("application/pdf").setHeader("Content-Disposition", `attachment; filename="${filename}"`);
     res.send(pdf);
@@ -34,7 +34,7 @@ export function reportsRouter(ctx: AppContext): Router {
     requireMember("sweeps.read"),
     validate(idParam, "params"),
     async (req, res) => {
-      const { filename, csv } = await sweepReadingsCsv(ctx, member(req), res.locals.params.id, await unit(req));
+      const { filename, csv } = await sweepReadingsCsv(ctx, member(req), res.locals.params.id, await units(req));
       await logExport(ctx, req, "readings.csv", { sweepId: res.locals.params.id });
       res.type("text/csv; charset=utf-8").setHeader("Content-Disposition", `attachment; filename="${filename}"`);
       res.send(csv);
@@ -65,7 +65,7 @@ export function reportsRouter(ctx: AppContext): Router {
       res
         .status(201)
         .json(
-          await sendSweepReport(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body, await unit(req)),
+          await sendSweepReport(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body, await units(req)),
         );
     },
   );

@@ -5,7 +5,6 @@ import type { ReportRecipient, ReportSend, SendReportInput } from "#core/contrac
 import { memberships, membershipStores, reportSends, users } from "../../db/schema/index";
 import { createConcentrationScale } from "#core/domain/fieldmap/concentration-ramp";
 import { readingsCsv } from "#core/domain/reports/readings-csv";
-import type { LengthPreference } from "#core/domain/units/format-units";
 import { badRequest, conflict, notFound } from "../../lib/http-error";
 import { deliveriesFor } from "../../mail/mail-status";
 import { createReportRunner } from "../../jobs/report-runner";
@@ -14,6 +13,7 @@ import { uploadsStorage } from "../../storage/uploads-storage";
 import type { Viewer } from "../../access/store-access";
 import { loadVisibleSweep } from "../../access/sweep-access";
 import { loadReportFacts, type ReportFacts } from "./report-facts";
+import type { ReaderUnits } from "./reader-units";
 
 const slug = (s: string) =>
   s
@@ -52,9 +52,9 @@ export async function sweepReportPdf(
   ctx: AppContext,
   viewer: Viewer,
   sweepId: string,
-  unit: LengthPreference,
+  units: ReaderUnits,
 ): Promise<{ filename: string; pdf: Buffer }> {
-  const facts = await loadReportFacts(ctx, viewer, sweepId, unit);
+  const facts = await loadReportFacts(ctx, viewer, sweepId, units);
   return { filename: `${fileBase(facts)}.pdf`, pdf: await buildReportPdf(ctx, facts) };
 }
 
@@ -62,10 +62,10 @@ export async function sweepReadingsCsv(
   ctx: AppContext,
   viewer: Viewer,
   sweepId: string,
-  unit: LengthPreference,
+  units: ReaderUnits,
 ): Promise<{ filename: string; csv: string }> {
-  const facts = await loadReportFacts(ctx, viewer, sweepId, unit);
-  return { filename: `${fileBase(facts)}-readings.csv`, csv: readingsCsv(facts.csv, unit, facts.timeZone) };
+  const facts = await loadReportFacts(ctx, viewer, sweepId, units);
+  return { filename: `${fileBase(facts)}-readings.csv`, csv: readingsCsv(facts.csv, units.length, facts.timeZone) };
 }
 
 /** The store contacts named on the sweep's store: the "send to the store contact" choice. */
@@ -98,9 +98,9 @@ export async function sendSweepReport(
   userId: string,
   sweepId: string,
   input: ParsedSend,
-  unit: LengthPreference,
+  units: ReaderUnits,
 ): Promise<ReportSend> {
-  const facts = await loadReportFacts(ctx, viewer, sweepId, unit);
+  const facts = await loadReportFacts(ctx, viewer, sweepId, units);
   const to = new Set(input.addresses.map((a) => a.toLowerCase()));
   if (input.storeContacts) {
     const contacts = await storeContacts(ctx, facts.sweep.companyId, facts.sweep.storeId);
@@ -118,9 +118,7 @@ export async function sendSweepReport(
   const text = [
     input.message,
     `${sender?.name ?? "A colleague"} sent you the sweep report for ${facts.storeName} (${facts.model.company}).`,
-    top
-      ? `Top suspect spot: ${top.fixture} at ${top.position} — ${top.reason}`
-      : "No credible leak was found on this sweep.",
+    top ? `Top suspect spot: ${top.fixture} at ${top.position} — ${top.reason}` : facts.model.noSpot,
     "The report is attached as a PDF. Safety: leak checks and repairs are for certified technicians; local codes apply.",
   ]
     .filter(Boolean)

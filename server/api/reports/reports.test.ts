@@ -6,7 +6,7 @@ import { agentFor, createTestApp, drainMail, type Agent, type TestApp } from "..
 import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 import { pdfText } from "../../../tests/helpers/pdf-text";
 import { caseLineFixtures, caseWalkReadings } from "../../../tests/helpers/sweep-walk";
-import { detectors, outboxMessages, reportSends, users } from "../../db/schema/index";
+import { detectors, outboxMessages, reportSends, systems, users } from "../../db/schema/index";
 import type { Role } from "#core/domain/roles";
 
 let t: TestApp;
@@ -38,9 +38,20 @@ beforeAll(async () => {
   co = await seedCompany(t.ctx, "Ćwikła & Sons Grocers");
   const owner = await as("owner");
   const plan = await owner.post(`/api/stores/${co.store.id}/plans/blank`, { width: 30, depth: 12, unit: "m" });
+  const [rack] = await t.ctx.db
+    .insert(systems)
+    .values({
+      companyId: co.company.id,
+      storeId: co.store.id,
+      name: "Rack B",
+      refrigerantId: "R-448A",
+      fullChargeKg: 250,
+      applianceType: "commercial-refrigeration",
+    })
+    .returning();
   const put = await owner.put(`/api/plans/${plan.body.id}/fixtures`, {
     layoutRevision: plan.body.layoutRevision,
-    fixtures: caseLineFixtures(caseId, dropId),
+    fixtures: caseLineFixtures(caseId, dropId).map((f) => (f.id === caseId ? { ...f, systemId: rack.id } : f)),
   });
   expect(put.status).toBe(200);
   const [d] = await t.ctx.db
@@ -94,7 +105,15 @@ describe("sweep report PDF", () => {
     expect(text).toContain(co.store.name);
     expect(text).toContain(`1. Dairy 1–4 — at `);
     expect(text).toContain(`score ${top.score.toFixed(2)}`);
-    expect(text).toContain(top.nextCheck.slice(0, 30));
+    // the presenter's words: names, not ids; the strength in the case's system's refrigerant (lines joined)
+    const flat = text.replace(/\s+/g, " ");
+    expect(flat).toContain("Look at the line-set drop Drop D2");
+    expect(flat).toContain("inside the open case Dairy 1–4");
+    expect(flat).toMatch(/of R-448A if well mixed/);
+    expect(flat).toMatch(/R-448A \(86\.28 g\/mol, the refrigerant of Rack B\) for spots? 1/);
+    expect(flat).toMatch(/Delay check/);
+    expect(text).not.toContain(caseId);
+    expect(text).not.toContain(dropId);
     expect(text).toMatch(/Readings \(\d+\)/);
     // Atkinson Hyperlegible embedded, not a standard-14 font
     expect(bytes.toString("latin1")).toMatch(/\/FontFile2/);
@@ -184,6 +203,10 @@ describe("e-mailing the report", () => {
     const caught = await t.ctx.db.select().from(outboxMessages).where(eq(outboxMessages.subject, res.body.subject));
     expect(caught).toHaveLength(1);
     expect(caught[0].to.sort()).toEqual(res.body.recipients.sort());
+    // the suspect worded by the same presenter as the PDF: by name, never by id
+    expect(caught[0].text).toContain("Top suspect spot: Dairy 1–4 at ");
+    expect(caught[0].text).toContain("one source inside the open case Dairy 1–4 explains them best");
+    expect(caught[0].text).not.toContain(caseId);
     expect(caught[0].attachments).toHaveLength(1);
     expect(caught[0].attachments[0]).toMatchObject({ filename: res.body.filename, contentType: "application/pdf" });
     expect(caught[0].attachments[0].size).toBeGreaterThan(10_000);

@@ -16,6 +16,10 @@ import { useSweep } from "../../entities/sweeps/sweeps-api";
 import { useFindingFromSpot } from "../../features/fieldmap/api/findings";
 import { useReviewSweep } from "../../features/fieldmap/api/reports";
 import { DelayControl } from "../../features/fieldmap/components/delay-control";
+import { DelayCheckPanel } from "../../features/fieldmap/components/delay-check-panel";
+import { useUpdateDetectorDelay } from "../../features/fieldmap/api/update-detector-delay";
+import { presentAnalysis } from "#core/domain/locator-words/present-analysis";
+import { useUnitPreferences } from "../shell/use-unit-preferences";
 import { FieldCanvas } from "../../features/fieldmap/components/field-canvas";
 import { FindingsPanel } from "../../features/fieldmap/components/findings-panel";
 import { LayerToggles } from "../../features/fieldmap/components/layer-toggles";
@@ -43,8 +47,8 @@ function FieldMapPage() {
   const [search, setSearch] = useSearchParams();
   const delayParam = search.get("transportDelayS");
   const delay = delayParam === null || !Number.isFinite(Number(delayParam)) ? null : Number(delayParam);
-  const { session, membership } = useSignedIn();
-  const unit = session.units.length;
+  const { membership } = useSignedIn();
+  const units = useUnitPreferences();
   const sweep = useSweep(sweepId);
   const plans = usePlans(storeId);
   const stores = useStores();
@@ -54,6 +58,7 @@ function FieldMapPage() {
   const findings = useFindings(storeId);
   const review = useReviewSweep(sweepId);
   const makeFinding = useFindingFromSpot(storeId, sweepId, sweep.data?.planId ?? "");
+  const updateDelay = useUpdateDetectorDelay();
   const [layers, setLayers] = useState(DEFAULT_LAYERS);
   const [log, setLog] = useState(true);
   const [selected, setSelected] = useState<number | null>(null);
@@ -72,6 +77,19 @@ function FieldMapPage() {
     const m = new Map((fixtures.data?.fixtures ?? []).map((f) => [f.id, f.label || f.kind]));
     return (id: string | null) => (id ? (m.get(id) ?? null) : null);
   }, [fixtures.data]);
+  // the one presenter (core/domain/locator-words/): the reader's units and the names on the plan
+  const words = useMemo(
+    () =>
+      a
+        ? presentAnalysis(a, {
+            length: units.length,
+            mass: units.mass,
+            names: new Map((fixtures.data?.fixtures ?? []).map((f) => [f.id, f.label])),
+            delaySetByHand: delay !== null,
+          })
+        : null,
+    [a, units.length, units.mass, fixtures.data, delay],
+  );
   const overlayFixtures = useMemo(
     () =>
       (fixtures.data?.fixtures ?? []).map((f) => ({
@@ -200,17 +218,18 @@ function FieldMapPage() {
             {a ? (
               <SuspectList
                 spots={a.candidates}
-                fixtureLabel={label}
-                unit={unit}
+                words={words!.spots}
+                noSpot={words!.noSpot ?? ""}
                 selected={selected}
                 onSelect={setSelected}
                 findingRanks={findingRanks}
-                busyRank={makeFinding.isPending ? (makeFinding.variables?.rank ?? null) : null}
+                busyRank={makeFinding.isPending ? (makeFinding.variables?.spot.rank ?? null) : null}
                 onMakeFinding={
                   can(membership.role, "findings.record")
-                    ? (spot) =>
+                    ? (spot, spotWords) =>
                         makeFinding.mutate({
-                          ...spot,
+                          spot,
+                          words: spotWords,
                           fixtureIsAirVolume: AIR.has(
                             fixtures.data?.fixtures.find((f) => f.id === spot.fixtureId)?.kind ?? "",
                           ),
@@ -221,13 +240,24 @@ function FieldMapPage() {
             ) : null}
             {makeFinding.isError ? <Alert tone="error">{makeFinding.error.message}</Alert> : null}
           </section>
+          {words ? (
+            <DelayCheckPanel
+              words={words.delay}
+              sweepDelayS={s.transportDelayS}
+              canUpdate={can(membership.role, "detectors.manage")}
+              onUpdate={(v) => updateDelay.mutate({ detectorId: s.detectorId, transportDelayS: v })}
+              busy={updateDelay.isPending}
+              updatedTo={updateDelay.isSuccess ? updateDelay.variables.transportDelayS : null}
+              error={updateDelay.isError ? updateDelay.error.message : null}
+            />
+          ) : null}
           <section>
             <h2 className="mb-2 text-xl font-bold">Diagnostics</h2>
             {a && a.diagnostics.length === 0 ? <p className="text-sm">Nothing unusual about this sweep.</p> : null}
             <ul className="space-y-2">
-              {a?.diagnostics.map((d, i) => (
+              {words?.diagnostics.map((d, i) => (
                 <li key={i}>
-                  <Alert tone={d.kind.startsWith("detector") ? "error" : "note"}>{d.message}</Alert>
+                  <Alert tone={d.kind.startsWith("detector") ? "error" : "note"}>{d.text}</Alert>
                 </li>
               ))}
             </ul>

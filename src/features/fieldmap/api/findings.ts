@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { SuspectSpot } from "#core/contracts/analysis";
+import type { PresentedSpot } from "#core/domain/locator-words/present-analysis";
 import { findingDetail, type FindingDetail } from "#core/contracts/finding-actions";
 import { invalidateEntity } from "../../../entities/invalidate";
 import { api } from "../../../lib/api-client";
@@ -8,17 +9,25 @@ import { api } from "../../../lib/api-client";
 export function useFindingFromSpot(storeId: string, sweepId: string, planId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (spot: SuspectSpot & { fixtureIsAirVolume: boolean }) =>
+    mutationFn: ({
+      spot,
+      words,
+      fixtureIsAirVolume,
+    }: {
+      spot: SuspectSpot;
+      words: PresentedSpot;
+      fixtureIsAirVolume: boolean;
+    }) =>
       api.post(`/api/stores/${storeId}/findings`, findingDetail, {
         clientId: crypto.randomUUID(),
         source: "suspect-spot",
         status: "suspected",
         sweepId,
         planId,
-        fixtureId: spot.fixtureIsAirVolume ? spot.fixtureId : null,
+        fixtureId: fixtureIsAirVolume ? spot.fixtureId : null,
         x: spot.x,
         y: spot.y,
-        note: `Suspect spot ${spot.rank}: ${spot.reason} Next check: ${spot.nextCheck}`,
+        note: `Suspect spot ${spot.rank}: ${words.reason} Next check: ${words.nextCheck}`,
       }),
     onSuccess: () => invalidateEntity(qc, "finding"),
   });

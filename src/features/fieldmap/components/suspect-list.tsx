@@ -1,83 +1,82 @@
-import { formatLength, type LengthPreference } from "#core/domain/units/format-units";
-import { Button } from "../../../components/ui/button";
 import type { SuspectSpot } from "#core/contracts/analysis";
+import type { PresentedSpot } from "#core/domain/locator-words/present-analysis";
+import { formatNumber } from "#core/domain/locator-words/number-words";
+import { Button } from "../../../components/ui/button";
 
 export interface SuspectListProps {
   spots: SuspectSpot[];
-  fixtureLabel(id: string | null): string | null;
-  unit: LengthPreference;
+  /** The same spots in words (core/domain/locator-words/present-analysis.ts), in the reader's units. */
+  words: PresentedSpot[];
+  /** What to say when no spot is listed. */
+  noSpot: string;
   selected: number | null;
   onSelect(rank: number | null): void;
   /** Present when the reader may record findings. */
-  onMakeFinding?: (spot: SuspectSpot) => void;
+  onMakeFinding?: (spot: SuspectSpot, words: PresentedSpot) => void;
   /** Ranks that already have a finding from this sweep. */
   findingRanks: Set<number>;
   busyRank: number | null;
 }
 
 export function SuspectList(p: SuspectListProps) {
-  if (p.spots.length === 0) {
-    return (
-      <p className="rounded-md edge bg-surface p-4">
-        No credible leak: nothing stands out from the background on this sweep.
-      </p>
-    );
-  }
-  const len = (m: number) => formatLength(m, p.unit, { decimals: 1 });
+  if (p.spots.length === 0) return <p className="rounded-md edge bg-surface p-4">{p.noSpot}</p>;
   return (
     <ol className="space-y-3" aria-label="Suspect spots">
-      {p.spots.map((s) => (
-        <li
-          key={s.rank}
-          className={`rounded-md edge bg-surface p-3 ${p.selected === s.rank ? "ring-2 ring-accent" : ""}`}
-          data-testid="suspect-spot"
-        >
-          <div className="flex items-start justify-between gap-2">
-            <p className="font-bold">
-              <span className="mr-2 inline-flex h-7 w-7 items-center justify-center rounded-full bg-[#14143c] text-white">
-                {s.rank}
+      {p.spots.map((s, i) => {
+        const w = p.words[i];
+        return (
+          <li
+            key={s.rank}
+            className={`rounded-md edge bg-surface p-3 ${p.selected === s.rank ? "ring-2 ring-accent" : ""}`}
+            data-testid="suspect-spot"
+          >
+            <div className="flex items-start justify-between gap-2">
+              <p className="font-bold">
+                <span className="mr-2 inline-flex h-7 w-7 items-center justify-center rounded-full bg-[#14143c] text-white">
+                  {s.rank}
+                </span>
+                {w.place}
+              </p>
+              <span className="text-sm text-muted" title="For ordering only, 0 to 1">
+                score {formatNumber(s.score, 2)}
               </span>
-              {p.fixtureLabel(s.fixtureId) ?? "Open floor"}
+            </div>
+            <p className="mt-1 text-sm">{w.reason}</p>
+            <p className="mt-1 text-sm">
+              <span className="font-bold">Next check:</span> {w.nextCheck}
             </p>
-            <span className="text-sm text-muted" title="For ordering only, 0 to 1">
-              score {s.score.toFixed(2)}
-            </span>
-          </div>
-          <p className="mt-1 text-sm">{s.reason}</p>
-          <p className="mt-1 text-sm">
-            <span className="font-bold">Next check:</span> {s.nextCheck}
-          </p>
-          <dl className="mt-1 grid grid-cols-[auto_1fr] gap-x-3 text-sm text-muted">
-            <dt>Where</dt>
-            <dd>
-              {len(s.x)} across, {len(s.y)} down, within {len(s.radius)}
-            </dd>
-            <dt>Nearest risk point</dt>
-            <dd>{p.fixtureLabel(s.riskPointId) ?? "none near"}</dd>
-            <dt>Strength</dt>
-            <dd>
-              {s.strength.toFixed(2)} of the strongest
-              {Number.isFinite(s.strengthGPerYear)
-                ? `, about ${Math.round(s.strengthGPerYear)} g/yr if well mixed`
-                : ""}
-            </dd>
-          </dl>
-          <div className="mt-2 flex flex-wrap gap-2">
-            <Button variant="secondary" onClick={() => p.onSelect(p.selected === s.rank ? null : s.rank)}>
-              {p.selected === s.rank ? "Show whole plan" : `Zoom to spot ${s.rank}`}
-            </Button>
-            {p.onMakeFinding ? (
-              p.findingRanks.has(s.rank) ? (
-                <span className="self-center text-sm text-ok">Finding recorded</span>
-              ) : (
-                <Button busy={p.busyRank === s.rank} onClick={() => p.onMakeFinding!(s)}>
-                  Make a finding
-                </Button>
-              )
+            {w.cautions.length > 0 ? (
+              <ul className="mt-1 space-y-1 text-sm text-danger" aria-label={`Cautions at spot ${s.rank}`}>
+                {w.cautions.map((c) => (
+                  <li key={c}>⚠ {c}</li>
+                ))}
+              </ul>
             ) : null}
-          </div>
-        </li>
-      ))}
+            <dl className="mt-1 grid grid-cols-[auto_1fr] gap-x-3 text-sm text-muted">
+              <dt>Where</dt>
+              <dd>{w.where}</dd>
+              <dt>Nearest risk point</dt>
+              <dd>{w.riskPoint}</dd>
+              <dt>Strength</dt>
+              <dd>{w.strength}</dd>
+            </dl>
+            <div className="mt-2 flex flex-wrap gap-2">
+              <Button variant="secondary" onClick={() => p.onSelect(p.selected === s.rank ? null : s.rank)}>
+                {p.selected === s.rank ? "Show whole plan" : `Zoom to spot ${s.rank}`}
+              </Button>
+              {p.onMakeFinding ? (
+                p.findingRanks.has(s.rank) ? (
+                  <span className="self-center text-sm text-ok">Finding recorded</span>
+                ) : (
+                  <Button busy={p.busyRank === s.rank} onClick={() => p.onMakeFinding!(s, w)}>
+                    Make a finding
+                  </Button>
+                )
+              ) : null}
+            </div>
+          </li>
+        );
+      })}
     </ol>
   );
 }
