@@ -9,6 +9,8 @@ import { createLifecycle } from "./lifecycle";
 import { storageFromEnv } from "./storage/storage-from-env";
 import { createJobQueue } from "./jobs/job-queue";
 import { startJobs } from "./jobs/job-kinds";
+import { closeCpuPool, configureCpuPool } from "./jobs/cpu-pool";
+import { startPruning } from "./jobs/pruning";
 
 /** The fake SMTP server on its usual port, or any free one when another checkout already has it. */
 async function startFakeSmtpOnFreePort(db: Parameters<typeof startFakeSmtp>[0], port: number): Promise<FakeSmtp> {
@@ -55,7 +57,25 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
   });
   // Every process runs the mail worker: any of them may deliver any message.
   await mailer.start();
+  // Every process takes the daily pruning job too (pg-boss hands each day's job to one of them).
+  const pruning = await startPruning(
+    db,
+    logger,
+    {
+      securityLog: env.SECURITY_LOG_RETENTION_DAYS,
+      sentMail: env.MAIL_SENT_RETENTION_DAYS,
+      failedMail: env.MAIL_FAILED_RETENTION_DAYS,
+    },
+    { pollingIntervalS: Math.max(env.JOB_POLL_INTERVAL_S, 30) },
+  );
 
+  configureCpuPool({
+    maxThreads: env.CPU_WORKERS,
+    maxQueue: env.CPU_QUEUE_MAX,
+    taskTimeoutMs: env.CPU_TASK_TIMEOUT_MS,
+    maxHeapMb: env.CPU_WORKER_HEAP_MB,
+    niceIncrement: env.CPU_WORKER_NICE,
+  });
   const uploads = storageFromEnv(env);
   logger.info({ storage: uploads.kind }, "uploads storage");
   const ctx: AppContext = {
@@ -74,6 +94,12 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
       outboxEnabled: Boolean(fakeSmtp),
       uploadsDir: env.UPLOADS_DIR,
       planImageLimits: { maxPixels: Math.round(env.PLAN_MAX_MEGAPIXELS * 1_000_000) },
+      decodeQueue: {
+        concurrency: env.DECODE_CONCURRENCY,
+        queueMax: env.DECODE_QUEUE_MAX,
+        maxWaitMs: env.DECODE_WAIT_MS,
+      },
+      uploadTmpDir: env.UPLOAD_TMP_DIR,
       secureCookies: (env.APP_URL ?? "").startsWith("https://"),
       syncThrottle: { limit: env.SYNC_RATE_LIMIT, windowMs: env.SYNC_RATE_WINDOW_MS },
       trustProxy: env.TRUST_PROXY,
@@ -93,9 +119,11 @@ export async function bootstrap(env: Env, overrides: { appUrl?: string } = {}): 
     fakeSmtp,
     async close() {
       await jobs.stop();
+      await pruning.stop();
       await mailer.stop();
       await ctx.analysisRunner?.close();
       await ctx.reportRunner?.close();
+      await closeCpuPool();
       mailer.close();
       uploads.close();
       await fakeSmtp?.close();

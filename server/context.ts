@@ -37,6 +37,10 @@ export interface AppConfig {
   /** Serve the built client from dist/client (off in API-only tests). */
   serveClient: boolean;
   planImageLimits?: Partial<PlanImageLimits>;
+  /** Images decoded at once and uploads waiting for that (server/api/plans/image-decoder.ts). */
+  decodeQueue?: { concurrency?: number; queueMax?: number; maxWaitMs?: number };
+  /** Where uploads are written while their request runs (default: the system's temp folder). */
+  uploadTmpDir?: string;
   /** Per-member limit on the Walk sync writes (server/middleware/sync-throttle.ts). */
   syncThrottle?: { limit?: number; windowMs?: number };
 }
@@ -51,9 +55,9 @@ export interface AppContext {
   logger: Logger;
   /** Where uploads live (server/storage/storage-from-env.ts); tests without one get a disk store under config.uploadsDir. */
   storage?: BlobStorage;
-  /** Worker threads that run the locator; made on first use (server/api/analysis). */
+  /** The locator on the process's CPU pool (server/jobs/cpu-pool.ts); made on first use (server/api/analysis). */
   analysisRunner?: AnalysisRunner;
-  /** The worker that draws and lays out report PDFs; made on first use (server/api/reports). */
+  /** Report PDFs on the process's CPU pool; made on first use (server/api/reports). */
   reportRunner?: ReportRunner;
   /** The background job worker (analyses, digests; server/jobs/job-kinds.ts), in app processes; absent in API tests, which run that work inline. */
   jobs?: JobQueue;

@@ -1,3 +1,4 @@
+import os from "node:os";
 import { z } from "zod";
 
 // All configuration comes from the environment, checked once at start-up with a clear message.
@@ -25,6 +26,8 @@ const trustProxySchema = z
     });
     return z.NEVER;
   });
+
+const CORES = os.availableParallelism();
 
 const envSchema = z
   .object({
@@ -81,6 +84,37 @@ const envSchema = z
       .positive("PLAN_MAX_MEGAPIXELS must be more than 0")
       .max(200, "PLAN_MAX_MEGAPIXELS must be at most 200")
       .default(40),
+    // The one CPU worker pool (server/jobs/cpu-pool.ts, docs/decisions/0080): workers at most (one
+    // per core by default and never more: the work is CPU-bound; long tasks leave one worker to
+    // password checks), tasks waiting at most (beyond it 503), the time limit per task, and each
+    // worker's JavaScript heap.
+    CPU_WORKERS: z.coerce
+      .number()
+      .int()
+      .min(1, "CPU_WORKERS must be at least 1")
+      .max(CORES, `CPU_WORKERS must be at most ${CORES}, the cores of this machine`)
+      .default(CORES),
+    CPU_QUEUE_MAX: z.coerce.number().int().min(0).max(10_000).default(100),
+    CPU_TASK_TIMEOUT_MS: z.coerce.number().int().min(1000).max(600_000).default(120_000),
+    CPU_WORKER_HEAP_MB: z.coerce.number().int().min(64).max(4096).default(512),
+    CPU_WORKER_NICE: z.coerce.number().int().min(0).max(19).default(0),
+    // Uploaded images decoded at once, uploads waiting for that, and how long one may wait (beyond
+    // either, 503); docs/decisions/0081.
+    DECODE_CONCURRENCY: z.coerce.number().int().min(1).max(8).default(1),
+    DECODE_QUEUE_MAX: z.coerce.number().int().min(0).max(1000).default(16),
+    DECODE_WAIT_MS: z.coerce.number().int().min(1000).max(600_000).default(60_000),
+    // Where uploads stream to while their request runs (default: the system's temp folder).
+    UPLOAD_TMP_DIR: z.string().min(1).optional(),
+    // Pruning, once a day (server/jobs/pruning.ts, docs/decisions/0082): security log rows older than
+    // this (at least a year and a day, so a whole year is always visible), sent mail, failed mail.
+    SECURITY_LOG_RETENTION_DAYS: z.coerce
+      .number()
+      .int()
+      .min(366, "SECURITY_LOG_RETENTION_DAYS must be at least 366, so a whole year stays visible")
+      .max(36_500)
+      .default(400),
+    MAIL_SENT_RETENTION_DAYS: z.coerce.number().int().min(1).max(36_500).default(90),
+    MAIL_FAILED_RETENTION_DAYS: z.coerce.number().int().min(1).max(36_500).default(365),
     LOG_LEVEL: z.enum(["fatal", "error", "warn", "info", "debug", "trace", "silent"]).default("info"),
     SEED_DEMO: z.enum(["true", "false"]).default("true"),
     // Walk sync writes per member per window; over it the answer is 503 with Retry-After.

@@ -4,6 +4,7 @@ import { bootstrap } from "./bootstrap";
 import { createApp } from "./app";
 import { seedDemoIfEmpty, DEMO_SIGN_INS } from "./db/seed/demo";
 import { waitUntil } from "./lifecycle";
+import { cpuPoolLoad } from "./jobs/cpu-pool";
 
 // Listening and shutting down only; the app itself is built in app.ts.
 const env = readEnv();
@@ -36,8 +37,8 @@ const server = createApp(ctx).listen(env.PORT, env.HOST, () => {
 
 let closing: string | null = null;
 /**
- * Graceful stop: report not-ready (for SHUTDOWN_DELAY_MS while still serving), stop accepting, let in-flight requests and worker jobs finish
- * (bounded by SHUTDOWN_GRACE_MS), then close the pool.
+ * Graceful stop: report not-ready (for SHUTDOWN_DELAY_MS while still serving), stop accepting, let in-flight requests and the CPU
+ * pool's tasks finish (bounded by SHUTDOWN_GRACE_MS), then stop the pool's workers and close the database pool.
  */
 async function shutdown(signal: string) {
   if (closing) {
@@ -67,7 +68,7 @@ async function shutdown(signal: string) {
   clearTimeout(cutOff);
   clearInterval(sweepIdle);
   const jobsDone = await waitUntil(
-    () => (ctx.analysisRunner?.load ?? 0) + (ctx.reportRunner?.load ?? 0) + (ctx.jobs?.active ?? 0) === 0,
+    () => cpuPoolLoad() + (ctx.jobs?.active ?? 0) === 0,
     Math.max(deadline, Date.now() + 1_000),
   );
   if (!jobsDone) ctx.logger.warn("grace period over: stopping the jobs still running");

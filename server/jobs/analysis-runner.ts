@@ -1,14 +1,10 @@
-/** The locator behind a worker pool: `run` resolves with the result or rejects with JobError. */
+/** The locator on the process's CPU pool: `run` resolves with the result or rejects with JobError. */
 import type { LocatorResult } from "#core/contracts/locator-output";
 import type { AnalysisJob } from "./analysis.worker";
-import { createWorkerPool, defaultPoolSize } from "./worker-pool";
-import { serverModule } from "../paths";
+import { createCpuRunner } from "./cpu-runner";
 
-export function createAnalysisRunner(size = defaultPoolSize()) {
-  return createWorkerPool<AnalysisJob, LocatorResult>({
-    module: serverModule("jobs/analysis.worker"),
-    size,
-  });
+export function createAnalysisRunner() {
+  return createCpuRunner<AnalysisJob, LocatorResult>("analysis");
 }
 
 export type AnalysisRunner = ReturnType<typeof createAnalysisRunner>;

@@ -1,10 +1,9 @@
-/** The report renderer behind a one-worker pool (reports are occasional; the locator keeps its own). */
+/** The report renderer (field map + PDF) on the process's CPU pool. */
 import type { ReportJob } from "./report.worker";
-import { createWorkerPool } from "./worker-pool";
-import { serverModule } from "../paths";
+import { createCpuRunner } from "./cpu-runner";
 
-export function createReportRunner(size = 1) {
-  return createWorkerPool<ReportJob, Uint8Array>({ module: serverModule("jobs/report.worker"), size });
+export function createReportRunner() {
+  return createCpuRunner<ReportJob, Uint8Array>("report");
 }
 
 export type ReportRunner = ReturnType<typeof createReportRunner>;

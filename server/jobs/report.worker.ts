@@ -1,10 +1,10 @@
-/** Draws the report's field map (jimp) and lays out the PDF (pdfkit) in a worker thread: about a second of CPU. */
+/** Draws the report's field map (jimp) and lays out the PDF (pdfkit) on the CPU pool: about a second of CPU. */
 import { CONCENTRATION_LUT, createConcentrationScale } from "#core/domain/fieldmap/concentration-ramp";
 import type { FieldGridLike } from "#core/domain/fieldmap/field-grid";
 import type { SweepReportModel } from "#core/domain/reports/sweep-report-model";
 import { renderFieldMapPng } from "../reports/field-map-png";
 import { buildSweepReportPdf } from "../reports/sweep-report-pdf";
-import { serveJobs } from "./serve-jobs";
+import { workerTask } from "./worker-task";
 
 export interface ReportJob {
   model: SweepReportModel;
@@ -19,7 +19,7 @@ export interface ReportJob {
   } | null;
 }
 
-serveJobs<ReportJob, Uint8Array>(
+export default workerTask<ReportJob, Uint8Array>(
   async ({ model, map }) => {
     if (map) {
       const scale = createConcentrationScale({ maxPpm: map.maxPpm, log: true });

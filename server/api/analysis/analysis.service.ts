@@ -16,7 +16,7 @@ import { bytesToFloat32, float32ToBytes, quantiseConfidence } from "#core/domain
 import { sweepLocatorInput } from "#core/domain/fieldmap/sweep-locator-input";
 import { HttpError } from "../../lib/http-error";
 import { createAnalysisRunner, type AnalysisRunner } from "../../jobs/analysis-runner";
-import { JobError } from "../../jobs/worker-pool";
+import { JobError } from "../../jobs/cpu-pool";
 import type { Viewer } from "../../access/store-access";
 import { loadVisibleSweep, type SweepRow } from "../../access/sweep-access";
 import { loadAnalysisInputs, paramsKey } from "./analysis-inputs";

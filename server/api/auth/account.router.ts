@@ -1,5 +1,4 @@
 import { Router } from "express";
-import bcrypt from "bcryptjs";
 import { eq } from "drizzle-orm";
 import { z } from "zod";
 import type { AppContext } from "../../context";
@@ -11,6 +10,7 @@ import { badRequest, notFound } from "../../lib/http-error";
 import { requireUser } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { hashPassword } from "./auth.service";
+import { bcryptCompare } from "../../jobs/passwords";
 import { logSecurityEvent } from "../../lib/security-log";
 import { endUserSession, endUserSessions, listUserSessions } from "./user-sessions";
 
@@ -31,7 +31,7 @@ export function accountRouter(ctx: AppContext): Router {
     const userId = req.auth!.user.id;
     await takeAttempt(ctx, guesses, userId, "password attempts");
     const [user] = await ctx.db.select().from(users).where(eq(users.id, userId));
-    if (!(await bcrypt.compare(input.currentPassword, user.passwordHash)))
+    if (!(await bcryptCompare(input.currentPassword, user.passwordHash)))
       throw badRequest("Please check: currentPassword does not match.", {
         currentPassword: "does not match your current password",
       });

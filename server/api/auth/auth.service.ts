@@ -1,4 +1,3 @@
-import bcrypt from "bcryptjs";
 import type { Request } from "express";
 import { and, desc, eq, gt, isNull } from "drizzle-orm";
 import type { AppContext } from "../../context";
@@ -10,24 +9,29 @@ import { rotateCsrfToken } from "../../middleware/csrf";
 import { listMemberships } from "./session-info";
 import { logSecurityEvent } from "../../lib/security-log";
 import { endUserSessions } from "./user-sessions";
+import { bcryptCompare, bcryptHash } from "../../jobs/passwords";
 
 const RESET_VALID_MS = 60 * 60 * 1000;
 // Compared against when the e-mail is unknown, so a wrong e-mail costs the same time as a wrong password:
-// made once per cost, at the cost real passwords are hashed with.
+// made once per cost, at the cost real passwords are hashed with. Hashing and comparing run on the CPU pool.
 const dummyHashes = new Map<number, Promise<string>>();
 export function dummyHashFor(cost: number): Promise<string> {
   let hash = dummyHashes.get(cost);
-  if (!hash) dummyHashes.set(cost, (hash = bcrypt.hash("not-a-real-password", cost)));
+  if (!hash) {
+    dummyHashes.set(cost, (hash = bcryptHash("not-a-real-password", cost)));
+    // a failed attempt (a full queue) is not remembered: the next sign-in makes it again
+    hash.catch(() => dummyHashes.delete(cost));
+  }
   return hash;
 }
 
 export async function hashPassword(ctx: AppContext, password: string): Promise<string> {
-  return bcrypt.hash(password, ctx.config.bcryptCost);
+  return bcryptHash(password, ctx.config.bcryptCost);
 }
 
 export async function verifyCredentials(ctx: AppContext, email: string, password: string, req: Request | null = null) {
   const [user] = await ctx.db.select().from(users).where(eq(users.email, email));
-  const ok = await bcrypt.compare(password, user?.passwordHash ?? (await dummyHashFor(ctx.config.bcryptCost)));
+  const ok = await bcryptCompare(password, user?.passwordHash ?? (await dummyHashFor(ctx.config.bcryptCost)));
   if (user && !ok) await logSecurityEvent(ctx, req, { kind: "sign-in-failed", companyId: null, userId: user.id });
   if (!user || !ok)
     throw new HttpError(401, "invalid_credentials", "That e-mail and password do not match an account.");

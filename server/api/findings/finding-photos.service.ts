@@ -1,10 +1,11 @@
 import { randomUUID } from "node:crypto";
+import { readFile } from "node:fs/promises";
 import { and, eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { findingPhotos } from "../../db/schema/index";
 import { HttpError } from "../../lib/http-error";
 import { checkPlanImageHeader } from "../plans/image-intake";
-import { ImageDecodeError } from "../plans/image-decoder";
+import { ImageDecodeError, type ImageDecoder } from "../plans/image-decoder";
 import { planImageDecoder } from "../plans/plan-resources";
 import { uploadsStorage } from "../../storage/uploads-storage";
 import type { Viewer } from "../../access/store-access";
@@ -20,8 +21,9 @@ export const PHOTO_LIMITS = {
 const EXT = { "image/png": "png", "image/jpeg": "jpg" } as const;
 
 /**
- * Checks the photo by its content (PNG/JPEG magic bytes, then the header's size), makes a
- * display copy and a thumbnail in the decoder worker, and stores both through the blob storage.
+ * Once a decoding place is free (bounded queue), checks the photo by its content (PNG/JPEG magic
+ * bytes, then the header's size), makes a display copy and a thumbnail on the CPU pool, and stores
+ * both through the blob storage.
  */
 export async function addFindingPhoto(
   ctx: AppContext,
@@ -35,9 +37,21 @@ export async function addFindingPhoto(
     throw new HttpError(400, "validation_failed", 'Attach the photo in the form field "photo".', {
       photo: "is required (a PNG or JPEG file)",
     });
+  const decoder = planImageDecoder(ctx);
+  return decoder.withSlot(async () => storePhoto(ctx, viewer, userId, row.id, await readFile(file.path), decoder));
+}
+
+async function storePhoto(
+  ctx: AppContext,
+  viewer: Viewer,
+  userId: string,
+  findingId: string,
+  data: Buffer,
+  decoder: ImageDecoder,
+): Promise<string> {
   let header;
   try {
-    header = checkPlanImageHeader(file.buffer, PHOTO_LIMITS.maxPixels);
+    header = checkPlanImageHeader(data, PHOTO_LIMITS.maxPixels);
   } catch (err) {
     if (err instanceof HttpError && err.code === "unsupported_image") {
       throw new HttpError(
@@ -51,8 +65,8 @@ export async function addFindingPhoto(
   }
   let decoded;
   try {
-    decoded = await planImageDecoder().decode({
-      data: file.buffer,
+    decoded = await decoder.decode({
+      data,
       mime: header.mime,
       displayMaxSide: PHOTO_LIMITS.displayMaxSide,
       thumbMaxSide: PHOTO_LIMITS.thumbMaxSide,
@@ -68,7 +82,7 @@ export async function addFindingPhoto(
     throw err;
   }
   const id = randomUUID();
-  const prefix = `findings/${viewer.companyId}/${row.id}/${id}`;
+  const prefix = `findings/${viewer.companyId}/${findingId}/${id}`;
   const key = `${prefix}/photo.${EXT[header.mime]}`;
   const thumbKey = `${prefix}/thumb.${EXT[header.mime]}`;
   const storage = uploadsStorage(ctx);
@@ -77,7 +91,7 @@ export async function addFindingPhoto(
   try {
     await ctx.db
       .insert(findingPhotos)
-      .values({ id, findingId: row.id, companyId: viewer.companyId, key, thumbKey, mime: header.mime, byId: userId });
+      .values({ id, findingId, companyId: viewer.companyId, key, thumbKey, mime: header.mime, byId: userId });
   } catch (err) {
     await Promise.allSettled([storage.delete(key), storage.delete(thumbKey)]);
     throw err;

@@ -4,7 +4,7 @@ import type { AppContext } from "../../context";
 import { findingActionInput } from "#core/contracts/finding-actions";
 import { createFindingInput } from "#core/contracts/findings";
 import { member, requireMember } from "../../middleware/auth";
-import { singleUpload } from "../../middleware/upload";
+import { singleUpload, uploadTmpDir } from "../../middleware/upload";
 import { validate } from "../../middleware/validate";
 import { addFindingPhoto, PHOTO_LIMITS, readFindingPhoto } from "./finding-photos.service";
 import { addFindingEvent, createFinding, getFinding, listFindings, loadFindingRow } from "./findings.service";
@@ -75,12 +75,16 @@ export function findingsRouter(ctx: AppContext): Router {
     "/findings/:id/photos",
     requireMember("findings.record"),
     validate(idParam, "params"),
-    // The finding is checked before the body is read: no upload is buffered for a stranger's finding.
+    // The finding is checked before the body is read: no upload is taken in for a stranger's finding.
     async (req, res, next) => {
       await loadFindingRow(ctx, member(req), res.locals.params.id);
       next();
     },
-    singleUpload("photo", () => PHOTO_LIMITS.maxBytes),
+    singleUpload(
+      "photo",
+      () => PHOTO_LIMITS.maxBytes,
+      () => uploadTmpDir(ctx.config.uploadTmpDir),
+    ),
     async (req, res) => {
       await addFindingPhoto(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.file);
       res.status(201).json(await getFinding(ctx, member(req), res.locals.params.id));

@@ -1,64 +1,71 @@
-import { Worker } from "node:worker_threads";
-import { COMPILED, serverModule } from "../../paths";
-import type { DecodeRequest, DecodeResponse } from "./image-decode.worker";
+/**
+ * Decoding uploaded images (plans, finding photos) on the CPU pool, one at a time by default: a
+ * 40-megapixel image is 160 MB of RGBA while it is decoded and resized, so the number decoded at
+ * once bounds the memory uploads can take. Uploads wait for a place in a bounded queue (their bytes
+ * stay in the temporary file meanwhile); a full queue, or a wait past maxWaitMs, is a 503 with Retry-After.
+ * docs/decisions/0081-bounded-uploads.md
+ */
+import type { DecodedImage, DecodeRequest } from "../../jobs/image-decode.worker";
+import { cpuPool, CpuTimeoutError, JobError } from "../../jobs/cpu-pool";
+import { createGate } from "../../lib/gate";
+import { HttpError } from "../../lib/http-error";
 
-export type DecodedPlanImage = Extract<DecodeResponse, { ok: true }>;
+export type DecodedPlanImage = DecodedImage;
 
 export class ImageDecodeError extends Error {}
 
-// From source the worker registers tsx first (the .mjs entry); the compiled module starts as it is.
-const ENTRY = COMPILED
-  ? serverModule("api/plans/image-decode.worker")
-  : new URL("./image-decode.worker-entry.mjs", import.meta.url);
+export interface DecodeQueueLimits {
+  /** Images decoded at once in this process. */
+  concurrency: number;
+  /** Uploads waiting for a place at most; one more is answered 503. */
+  queueMax: number;
+  /** An upload that has waited this long for a place is answered 503 instead of waiting on. */
+  maxWaitMs: number;
+}
 
-/**
- * One long-lived worker thread that decodes and resizes plan images, started on first use.
- * Requests queue in the worker (uploads are rare); a crashed worker fails its pending requests
- * and is replaced on the next call.
- */
-export function createImageDecoder() {
-  let worker: Worker | null = null;
-  let nextId = 1;
-  const pending = new Map<number, { resolve(r: DecodedPlanImage): void; reject(e: Error): void }>();
+export const DEFAULT_DECODE_QUEUE: DecodeQueueLimits = { concurrency: 1, queueMax: 16, maxWaitMs: 60_000 };
 
-  const failAll = (from: Worker, err: Error) => {
-    if (worker !== from) return;
-    for (const p of pending.values()) p.reject(err);
-    pending.clear();
-    worker = null;
-  };
+const tooBig = () =>
+  new HttpError(
+    413,
+    "image_too_large_to_decode",
+    "The image needs more memory or time to decode than the server allows. Export it at a lower resolution and try again.",
+  );
 
-  const start = () => {
-    const w = new Worker(ENTRY);
-    w.unref(); // an idle decoder must not keep the process (or a test run) alive
-    w.on("message", (res: DecodeResponse) => {
-      const p = pending.get(res.id);
-      if (!p) return;
-      pending.delete(res.id);
-      if (res.ok) p.resolve(res);
-      else p.reject(new ImageDecodeError(res.message));
-    });
-    w.on("error", (err) => failAll(w, err));
-    w.on("exit", (code) => failAll(w, new Error(`the image worker stopped (exit code ${code})`)));
-    return w;
-  };
-
+export function createImageDecoder(limits: DecodeQueueLimits = DEFAULT_DECODE_QUEUE) {
+  const gate = createGate(
+    limits,
+    () =>
+      new HttpError(
+        503,
+        "busy",
+        "Other uploads are being processed right now; please try again in a few seconds.",
+        undefined,
+        { retryAfterSeconds: 5 },
+      ),
+  );
   return {
-    decode(input: Omit<DecodeRequest, "id">): Promise<DecodedPlanImage> {
-      worker ??= start();
-      const id = nextId++;
-      const w = worker;
-      return new Promise((resolve, reject) => {
-        pending.set(id, { resolve, reject });
-        // Copy into a transferable buffer: the request's Buffer may share a pooled ArrayBuffer.
-        const data = new Uint8Array(input.data);
-        w.postMessage({ ...input, id, data } satisfies DecodeRequest, [data.buffer]);
-      });
+    gate,
+    /** Runs `work` (read the upload, check it, decode it, store it) once a decoding place is free. */
+    withSlot<R>(work: () => Promise<R>): Promise<R> {
+      return gate.run(work);
     },
-    async close() {
-      const w = worker;
-      worker = null;
-      if (w) await w.terminate();
+    async decode(input: DecodeRequest): Promise<DecodedPlanImage> {
+      // A copy to move to the worker: the caller keeps its bytes (the original is stored as uploaded).
+      const data = new Uint8Array(input.data);
+      try {
+        return await cpuPool().run<DecodeRequest, DecodedImage>(
+          "image-decode",
+          { ...input, data },
+          { transfer: [data.buffer] },
+        );
+      } catch (err) {
+        if (err instanceof JobError) throw new ImageDecodeError(err.message);
+        if (err instanceof CpuTimeoutError) throw tooBig();
+        // The worker hit its heap cap (piscina resourceLimits) and was replaced.
+        if ((err as NodeJS.ErrnoException)?.code === "ERR_WORKER_OUT_OF_MEMORY") throw tooBig();
+        throw err;
+      }
     },
   };
 }

@@ -1,5 +1,5 @@
 import type { AppContext, PlanImageLimits } from "../../context";
-import { createImageDecoder, type ImageDecoder } from "./image-decoder";
+import { createImageDecoder, DEFAULT_DECODE_QUEUE, type ImageDecoder } from "./image-decoder";
 
 export const DEFAULT_PLAN_IMAGE_LIMITS: PlanImageLimits = {
   maxBytes: 25 * 1024 * 1024, // "up to 25 MB" (docs/product.md)
@@ -14,8 +14,11 @@ export function planImageLimits(ctx: AppContext): PlanImageLimits {
   return { ...DEFAULT_PLAN_IMAGE_LIMITS, ...ctx.config.planImageLimits };
 }
 
-// One decoder worker per process: decoding is CPU-bound and the machine has two cores.
-let decoder: ImageDecoder | null = null;
-export function planImageDecoder(): ImageDecoder {
-  return (decoder ??= createImageDecoder());
+// One decoding queue per app (so a test's app has its own); the decoding itself runs on the
+// process's CPU pool.
+const decoders = new WeakMap<AppContext, ImageDecoder>();
+export function planImageDecoder(ctx: AppContext): ImageDecoder {
+  let d = decoders.get(ctx);
+  if (!d) decoders.set(ctx, (d = createImageDecoder({ ...DEFAULT_DECODE_QUEUE, ...ctx.config.decodeQueue })));
+  return d;
 }

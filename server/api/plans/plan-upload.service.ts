@@ -1,4 +1,5 @@
 import { randomUUID } from "node:crypto";
+import { readFile } from "node:fs/promises";
 import type { AppContext } from "../../context";
 import type { BlankPlanInput, Plan } from "#core/contracts/plans";
 import { METRES_PER_FOOT } from "#core/analysis/geometry/units";
@@ -6,24 +7,26 @@ import { badRequest, HttpError } from "../../lib/http-error";
 import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { BLANK_PLAN_MAX_M } from "#core/contracts/plans";
 import { checkPlanImageHeader } from "./image-intake";
-import { ImageDecodeError } from "./image-decoder";
+import { ImageDecodeError, type ImageDecoder } from "./image-decoder";
 import { fixtureCounts } from "../../access/plan-access";
 import { planImageDecoder, planImageLimits } from "./plan-resources";
 import { uploadsStorage } from "../../storage/uploads-storage";
 import { toPlan } from "../../db/plans/plan-rows";
 import { addPlanVersion } from "../../db/plans/plan-versions";
 
+/** The upload as multer left it: a temporary file, removed once the request is answered. */
 export interface UploadedFile {
-  buffer: Buffer;
+  path: string;
   originalname: string;
 }
 
 const EXT = { "image/png": "png", "image/jpeg": "jpg" } as const;
 
 /**
- * A new plan version from an uploaded drawing. Order matters: the header is checked before any
- * decoding (type by content, pixel budget), decoding runs in the worker, and the three files are
- * written before the row; if anything fails, every file written so far is removed again.
+ * A new plan version from an uploaded drawing. Order matters: the upload waits for a decoding place
+ * (bounded queue), the header is checked before any decoding (type by content, pixel budget),
+ * decoding runs on the CPU pool, and the three files are written before the row; if anything fails,
+ * every file written so far is removed again.
  */
 export async function createImagePlan(
   ctx: AppContext,
@@ -37,13 +40,28 @@ export async function createImagePlan(
     throw badRequest('Please attach the floor plan image in the form field "image".', {
       image: "is required: a PNG or JPEG file",
     });
+  const decoder = planImageDecoder(ctx);
+  return decoder.withSlot(async () => {
+    const data = await readFile(file.path);
+    return storeImagePlan(ctx, viewer, userId, storeId, data, decoder);
+  });
+}
+
+async function storeImagePlan(
+  ctx: AppContext,
+  viewer: Viewer,
+  userId: string,
+  storeId: string,
+  data: Buffer,
+  decoder: ImageDecoder,
+): Promise<Plan> {
   const limits = planImageLimits(ctx);
-  const header = checkPlanImageHeader(file.buffer, limits.maxPixels);
+  const header = checkPlanImageHeader(data, limits.maxPixels);
 
   let decoded;
   try {
-    decoded = await planImageDecoder().decode({
-      data: file.buffer,
+    decoded = await decoder.decode({
+      data,
       mime: header.mime,
       displayMaxSide: limits.displayMaxSide,
       thumbMaxSide: limits.thumbMaxSide,
@@ -71,7 +89,7 @@ export async function createImagePlan(
   const written: string[] = [];
   try {
     for (const [key, bytes] of [
-      [keys.original, file.buffer],
+      [keys.original, data],
       [keys.display, decoded.display],
       [keys.thumb, decoded.thumb],
     ] as const) {

@@ -9,7 +9,7 @@ import {
   imageVariantSchema,
 } from "#core/contracts/plans";
 import { member, requireMember } from "../../middleware/auth";
-import { singleUpload } from "../../middleware/upload";
+import { singleUpload, uploadTmpDir } from "../../middleware/upload";
 import { validate } from "../../middleware/validate";
 import { loadVisibleStore } from "../../access/store-access";
 import { setAlignment } from "./alignment.service";
@@ -39,12 +39,16 @@ export function plansRouter(ctx: AppContext): Router {
     "/stores/:storeId/plans",
     requireMember("plans.edit"),
     validate(storeParam, "params"),
-    // The store is checked before the body is read: no upload is buffered for a stranger's store.
+    // The store is checked before the body is read: no upload is taken in for a stranger's store.
     async (req, res, next) => {
       await loadVisibleStore(ctx, member(req), res.locals.params.storeId);
       next();
     },
-    singleUpload("image", () => planImageLimits(ctx).maxBytes),
+    singleUpload(
+      "image",
+      () => planImageLimits(ctx).maxBytes,
+      () => uploadTmpDir(ctx.config.uploadTmpDir),
+    ),
     async (req, res) => {
       res
         .status(201)
