@@ -18,7 +18,7 @@ import { signInThroughForm } from "../helpers/e2e-session";
 import { signIn } from "../helpers/test-app";
 import { touchDrag, touchSession } from "../helpers/touch";
 import { mapStoreForWalk } from "../helpers/walk-e2e";
-import { plans } from "../../server/db/schema/index";
+import { plans, users } from "../../server/db/schema/index";
 
 const SCREENS = path.resolve(import.meta.dirname, "../../test-results/screens");
 const STAGE = "[data-testid=layout-stage]";
@@ -42,6 +42,8 @@ beforeAll(async () => {
     createdById: co.people["lead-tech"].userId,
   });
   planId = (await server.ctx.db.select().from(plans).where(eq(plans.storeId, co.store.id)))[0].id;
+  // The lead tech reads lengths in feet and inches.
+  await server.ctx.db.update(users).set({ lengthUnit: "ft-in" }).where(eq(users.id, co.people["lead-tech"].userId));
   // A 0.6 m × 0.6 m column between two aisles, as a lead tech would draw one.
   const lead = await signIn(server.app, co.people["lead-tech"]);
   const now = (await lead.get(`/api/plans/${planId}/fixtures`)).body;
@@ -194,6 +196,9 @@ it("on a 1366 × 860 laptop the whole plan is on screen under the tools, the fir
   expect(m.visible.height).toBeCloseTo(m.plan.bottom - m.plan.top, 6);
   expect(m.visible.width).toBeCloseTo(m.plan.right - m.plan.left, 6);
 
+  // The scale in the member's feet and inches, not metres.
+  await page.getByRole("figure", { name: /^Scale bar: \d+ (ft|in)$/ }).waitFor();
+
   // The first drag, grabbed on the plan's top row: the walk-in freezer (13.5–21.5 m × 1–7 m)
   // 1 m down, where its back meets the partition (8 m).
   const freezer = (await stored(page)).find((f) => f.label === "Walk-in freezer")!;
@@ -224,6 +229,9 @@ it("on a 1366 × 860 laptop the whole plan is on screen under the tools, the fir
   );
   expect(boxOf(copy).minX).toBeCloseTo(moved.maxX, 6);
   await page.screenshot({ path: path.join(SCREENS, "layout-duplicate-laptop.png") });
+  // The store page gives the drawing's scale per pixel in inches too.
+  await page.goto(`${server.url}/stores/${co.store.id}`);
+  await page.getByText(/Calibrated: 1 px = [\d.]+ (in|ft)$/).waitFor();
   expect(failures).toEqual([]);
   await context.close();
 });
