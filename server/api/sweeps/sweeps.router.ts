@@ -56,7 +56,7 @@ export function sweepsRouter(ctx: AppContext): Router {
     res.json(await setSweepStatus(ctx, member(req), userId(req), res.locals.params.id, "reviewed"));
   });
 
-  router.get("/sweeps/:id/readings", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
+  router.get("/sweeps/:id/readings", requireMember("sweeps.read"), validate(idParam, "params"), async (req, res) => {
     res.json({ readings: await listReadings(ctx, member(req), res.locals.params.id) });
   });
   router.post(
@@ -100,7 +100,7 @@ export function sweepsRouter(ctx: AppContext): Router {
       );
     },
   );
-  router.get("/sweeps/:id/audit", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
+  router.get("/sweeps/:id/audit", requireMember("sweeps.read"), validate(idParam, "params"), async (req, res) => {
     res.json({ entries: await readingAuditTrail(ctx, member(req), res.locals.params.id) });
   });
 

@@ -282,6 +282,9 @@ describe("roles and status", () => {
     const contact = await as("store-contact");
     expect((await contact.get(`/api/sweeps/${s.id}`)).status).toBe(200);
     expect((await contact.post(`/api/sweeps/${s.id}/readings`, { readings: [reading(1)] })).status).toBe(403);
+    // Nor read the readings and their audit: a store manager gets the report, not the evidence (decision 0072).
+    expect((await contact.get(`/api/sweeps/${s.id}/readings`)).status).toBe(403);
+    expect((await contact.get(`/api/sweeps/${s.id}/audit`)).status).toBe(403);
     expect(
       (
         await contact.post(`/api/stores/${co.store.id}/sweeps`, {
