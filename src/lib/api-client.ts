@@ -60,7 +60,7 @@ function track<T>(set: Set<Promise<unknown>>, promise: Promise<T>): Promise<T> {
  * A page opened straight from an e-mail link (invitation, password reset) may post before
  * anything has read the session; read it first so the request carries a token.
  */
-async function ensureCsrfToken(): Promise<void> {
+export async function ensureCsrfToken(): Promise<void> {
   if (csrfToken) return;
   try {
     await settled(sessionWrites);
@@ -98,7 +98,7 @@ function rememberCsrf(body: unknown): void {
   }
 }
 
-function toError(status: number, body: unknown): ApiRequestError {
+export function toError(status: number, body: unknown): ApiRequestError {
   const parsed = apiErrorSchema.safeParse(body);
   if (parsed.success) {
     const { code, message, fields } = parsed.data.error;

@@ -84,16 +84,46 @@ it("an engineer opens the latest sweep's field map, compares it with the month b
   await page.goBack();
   await canvas.waitFor();
 
-  // download the PDF report
+  // Every text the long-work status regions show, in order, as a screen reader is told them.
+  await page.evaluate(() => {
+    const seen: string[] = [];
+    (window as unknown as { statusSeen: string[] }).statusSeen = seen;
+    new MutationObserver(() => {
+      for (const el of document.querySelectorAll(
+        "[data-testid=pdf-download-status], [data-testid=analysis-progress]",
+      )) {
+        const text = el.textContent ?? "";
+        if (text && !seen.includes(text)) seen.push(text);
+      }
+    }).observe(document.body, { subtree: true, childList: true, characterData: true });
+  });
+  const statusSeen = () => page.evaluate(() => (window as unknown as { statusSeen: string[] }).statusSeen);
+
+  // download the PDF report: the page says it is making it, then that it is downloaded
   const [download] = await Promise.all([
     page.waitForEvent("download"),
-    page.getByRole("link", { name: "Download the PDF report" }).click(),
+    page.getByRole("button", { name: "Download the PDF report" }).click(),
   ]);
+  await page
+    .getByTestId("pdf-download-status")
+    .getByText(/The PDF report is downloaded \(/)
+    .waitFor();
+  expect(await statusSeen()).toContain("Making the PDF report… this takes a few seconds.");
   const file = await download.path();
   const bytes = await fs.readFile(file!);
   expect(bytes.subarray(0, 5).toString("latin1")).toBe("%PDF-");
   // parsed back by pdf-lib: a valid PDF of several pages
   expect((await PDFDocument.load(bytes)).getPageCount()).toBeGreaterThanOrEqual(2);
+
+  // another transport delay: the map says it is recomputing, then that it is up to date
+  await page.getByLabel("Transport delay (s)").fill("7");
+  await page.getByRole("button", { name: "Recompute" }).click();
+  await page
+    .getByTestId("analysis-progress")
+    .getByText(/The field map is up to date/)
+    .waitFor({ timeout: 60_000 });
+  expect(await statusSeen()).toContain("Recomputing the field map…");
+  expect(await page.getByRole("button", { name: "Recompute" }).isEnabled()).toBe(true);
 
   // send it to the store contact and a typed address
   await page.getByLabel("Other addresses").fill("regional.manager@example.org");

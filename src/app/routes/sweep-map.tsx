@@ -20,6 +20,7 @@ import { DelayCheckPanel } from "../../features/fieldmap/components/delay-check-
 import { useUpdateDetectorDelay } from "../../features/fieldmap/api/update-detector-delay";
 import { presentAnalysis } from "#core/domain/locator-words/present-analysis";
 import { useUnitPreferences } from "../shell/use-unit-preferences";
+import { AnalysisProgress } from "../../features/fieldmap/components/analysis-progress";
 import { FieldCanvas } from "../../features/fieldmap/components/field-canvas";
 import { FindingsPanel } from "../../features/fieldmap/components/findings-panel";
 import { LayerToggles } from "../../features/fieldmap/components/layer-toggles";
@@ -69,6 +70,8 @@ function FieldMapPage() {
   useDocumentTitle(store ? `Field map · ${store.name}` : "Field map");
 
   const a = analysis.data;
+  // A recompute runs while the answer is on its way or the server says the map it has is stale.
+  const recomputing = analysis.isFetching || Boolean(a?.stale);
   const { scale, paint } = useMemo(
     () => concentrationPaint(a?.readings.map((r) => r.ppm) ?? [], sweep.data?.alarmPpm ?? 2, log),
     [a, sweep.data?.alarmPpm, log],
@@ -161,7 +164,7 @@ function FieldMapPage() {
       ) : null}
       <div className="grid items-start gap-6 xl:grid-cols-[minmax(0,3fr)_minmax(20rem,1.2fr)]">
         <div className="space-y-4">
-          <div ref={wrapRef} className="relative">
+          <div ref={wrapRef} className="relative" aria-busy={recomputing}>
             {a ? (
               <FieldCanvas
                 label={`Field map with ${a.candidates.length} numbered suspect spots`}
@@ -181,9 +184,9 @@ function FieldMapPage() {
             ) : analysis.isPending ? (
               <Spinner label="Computing the field map on the server…" />
             ) : null}
-            {analysis.isFetching && a ? (
-              <p className="absolute right-2 top-2 rounded bg-surface px-2 text-sm">Updating…</p>
-            ) : null}
+            <div className="absolute right-2 top-2">
+              <AnalysisProgress working={recomputing} computedAt={a ? zoned(a.computedAt) : null} />
+            </div>
           </div>
           <RampLegend
             title={`Lag-corrected concentration, ${log ? "log" : "linear"} scale`}
@@ -196,7 +199,7 @@ function FieldMapPage() {
             <DelayControl
               detectorDelayS={s.transportDelayS}
               current={delay ?? s.transportDelayS}
-              busy={analysis.isFetching}
+              busy={recomputing}
               onApply={(v) => {
                 const next = new URLSearchParams(search);
                 if (v === null) next.delete("transportDelayS");

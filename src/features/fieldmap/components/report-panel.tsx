@@ -6,6 +6,7 @@ import { TextField } from "../../../components/ui/text-field";
 import { isApiRequestError } from "../../../lib/api-client";
 import { MailDeliveryStatus } from "../../../components/mail-delivery-status";
 import { useReportRecipients, useReportSends, useRetryReportSend, useSendReport } from "../api/reports";
+import { PdfDownload } from "./pdf-download";
 
 /** Download the PDF or the readings CSV; e-mail the PDF to the store contact or anyone typed in. */
 export function ReportPanel({
@@ -33,14 +34,12 @@ export function ReportPanel({
       .join("; ") || undefined;
   return (
     <div className="space-y-3">
-      <div className="flex flex-wrap gap-2">
-        <a
-          className="inline-flex min-h-11 items-center rounded-md edge bg-surface px-4 font-bold no-underline"
+      <div className="flex flex-wrap items-start gap-2">
+        <PdfDownload
           href={`/api/sweeps/${sweepId}/report.pdf`}
-          download
-        >
-          Download the PDF report
-        </a>
+          label="Download the PDF report"
+          fallbackName="sweep-report.pdf"
+        />
         <a
           className="inline-flex min-h-11 items-center rounded-md edge bg-surface px-4 font-bold no-underline"
           href={`/api/sweeps/${sweepId}/readings.csv`}
@@ -90,7 +89,8 @@ export function ReportPanel({
       {sends.data?.length ? (
         <div>
           <p className="font-bold">Sent</p>
-          <ul className="text-sm" data-testid="report-sends">
+          {/* Polite live list: "Queued" turning into "E-mail sent" (or why not) is announced. */}
+          <ul className="text-sm" data-testid="report-sends" aria-live="polite">
             {sends.data.map((s) => (
               <li key={s.id}>
                 {zoned(s.sentAt)}: {s.sentBy ?? "someone"} sent {s.filename} to {s.recipients.join(", ")}.{" "}

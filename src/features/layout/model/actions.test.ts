@@ -85,6 +85,17 @@ describe("actions", () => {
     expect(s.fixtures[uuid(1000)].label).toBe("Dairy 2");
   });
 
+  it("numbers the copies of an unnumbered label without repeating a label already on the plan", () => {
+    const s0 = createScene(plan, [
+      openCase(1, rect(2, 2, 2.4, 1.1), "Freezer"),
+      openCase(2, rect(2, 6, 2.4, 1.1), "Freezer 3"),
+    ]);
+    const s1 = applyAction(s0, act.array([uuid(1)], 4, 2.4, [1, 0], idSource()));
+    expect(s1.selection.map((id) => s1.fixtures[id].label)).toEqual(["Freezer 2", "Freezer 4", "Freezer 5"]);
+    const s2 = applyAction(s1, act.duplicate([uuid(1)], 0, 2, idSource(2000)));
+    expect(s2.fixtures[uuid(2000)].label).toBe("Freezer 6");
+  });
+
   it("resizes to a new box and keeps a room's door on its edge", () => {
     const s = applyAction(store(), act.resize(uuid(2), { minX: 30, minY: 2, maxX: 33, maxY: 6 }));
     expect(poly(s, uuid(2))).toEqual(rect(30, 2, 3, 4));

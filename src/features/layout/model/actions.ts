@@ -9,7 +9,7 @@ import type { Bounds, Vec } from "#core/analysis/geometry/types";
 import { LABEL_MAX, type Fixture, type RoomDoor, type Vertex } from "#core/contracts/fixtures";
 import type { FixtureKind } from "#core/contracts/fixture-kinds";
 import { canChangeKind, changeKind } from "./change-kind";
-import { arrayCopies, copyFixture } from "./copies";
+import { arrayCopies, duplicateCopies } from "./copies";
 import {
   fitDoor,
   fixtureCentroid,
@@ -228,14 +228,27 @@ export function applyAction(scene: Scene, action: SceneAction): Scene {
         }),
       );
     case "duplicate": {
-      const sources = action.ids.map((id) => scene.fixtures[id]);
-      const copies = sources.flatMap((f, i) => (f ? [copyFixture(f, action.newIds[i], action.dx, action.dy, 1)] : []));
-      return appendFixtures(scene, copies);
+      const pairs = action.ids.flatMap((id, i) =>
+        scene.fixtures[id] ? [[scene.fixtures[id], action.newIds[i]] as const] : [],
+      );
+      const sources = pairs.map(([f]) => f);
+      const ids = pairs.map(([, id]) => id);
+      return appendFixtures(scene, duplicateCopies(sources, action.dx, action.dy, ids, Object.values(scene.fixtures)));
     }
     case "array": {
       const sources = existing(scene, action.ids);
       if (sources.length !== action.ids.length) return scene; // ids would no longer line up with newIds
-      return appendFixtures(scene, arrayCopies(sources, action.count, action.spacing, action.direction, action.newIds));
+      return appendFixtures(
+        scene,
+        arrayCopies(
+          sources,
+          action.count,
+          action.spacing,
+          action.direction,
+          action.newIds,
+          Object.values(scene.fixtures),
+        ),
+      );
     }
     case "delete": {
       const gone = new Set(action.ids.filter((id) => scene.fixtures[id]));

@@ -1,23 +1,30 @@
 /**
  * Making copies of fixtures: duplicates with an offset and arrays (rows of identical cases).
- * New ids come from the caller, so the reducer stays pure and replays give the same ids.
+ * New ids come from the caller, so the reducer stays pure and replays give the same ids; the
+ * copies' labels are numbered against the labels already on the plan (copy-labels.ts).
  */
 import type { Fixture } from "#core/contracts/fixtures";
+import { copyLabels } from "./copy-labels";
 import { translateFixture } from "./fixture-geometry";
 
-/**
- * The label of the k-th copy: a trailing number counts on ("Dairy 3" → "Dairy 4", keeping
- * zero padding: "C09" → "C10"); other labels are kept as they are.
- */
-export function nextLabel(label: string, k: number): string {
-  const m = /^(.*?)(\d+)$/.exec(label);
-  if (!m) return label;
-  const n = String(Number(m[2]) + k).padStart(m[2].length, "0");
-  return `${m[1]}${n}`;
+function copyFixture<F extends Fixture>(f: F, newId: string, dx: number, dy: number, label: string): F {
+  return { ...translateFixture(f, dx, dy), id: newId, label };
 }
 
-export function copyFixture<F extends Fixture>(f: F, newId: string, dx: number, dy: number, k: number): F {
-  return { ...translateFixture(f, dx, dy), id: newId, label: nextLabel(f.label, k) };
+/** One copy of each source moved by (dx, dy); `newIds[j]` is the id of source j's copy. */
+export function duplicateCopies(
+  sources: readonly Fixture[],
+  dx: number,
+  dy: number,
+  newIds: readonly string[],
+  onPlan: readonly Fixture[],
+): Fixture[] {
+  const labels = copyLabels(
+    sources.map((f) => f.label),
+    1,
+    onPlan.map((f) => f.label),
+  );
+  return sources.map((f, j) => copyFixture(f, newIds[j], dx, dy, labels[j][0]));
 }
 
 /**
@@ -31,14 +38,21 @@ export function arrayCopies(
   spacing: number,
   direction: readonly [number, number],
   newIds: readonly string[],
+  onPlan: readonly Fixture[],
 ): Fixture[] {
   const len = Math.hypot(direction[0], direction[1]);
   const ux = direction[0] / len;
   const uy = direction[1] / len;
+  const labels = copyLabels(
+    sources.map((f) => f.label),
+    count - 1,
+    onPlan.map((f) => f.label),
+  );
   const out: Fixture[] = [];
   for (let k = 1; k < count; k++) {
     sources.forEach((f, j) => {
-      out.push(copyFixture(f, newIds[(k - 1) * sources.length + j], k * spacing * ux, k * spacing * uy, k));
+      const id = newIds[(k - 1) * sources.length + j];
+      out.push(copyFixture(f, id, k * spacing * ux, k * spacing * uy, labels[j][k - 1]));
     });
   }
   return out;

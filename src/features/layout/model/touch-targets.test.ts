@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { anchorHitRect, targetSizes, TOUCH_TARGET_PX } from "./touch-targets";
+import { ALL_ANCHORS, anchorHitRect, selectionHandles, targetSizes, TOUCH_TARGET_PX } from "./touch-targets";
 
 const CORNERS = ["top-left", "top-right", "bottom-left", "bottom-right"];
 const EDGES = ["top-center", "bottom-center", "middle-left", "middle-right"];
@@ -61,5 +61,40 @@ describe("anchorHitRect", () => {
   it("is the drawn square itself for a mouse, and refuses sizes that are not positive", () => {
     expect(anchorHitRect("top-left", 12, 12, 6)).toEqual({ x: 0, y: 0, width: 12, height: 12 });
     expect(() => anchorHitRect("top-left", 0, 48)).toThrow(/visualPx and hitPx must be positive/);
+  });
+});
+
+describe("handles round a small selection", () => {
+  const touch = targetSizes("touch");
+  it("leave a large fixture's handles as they were", () => {
+    const h = selectionHandles(300, 120, touch);
+    expect(h.inwardPx).toBe(10);
+    expect(h.anchors).toHaveLength(8);
+  });
+
+  it("keep a finger-sized middle free on a fixture a little over one target wide", () => {
+    // 60 px: handles reach 6 px in from each side, leaving 48 px (Material Design's touch target).
+    const h = selectionHandles(60, 200, touch);
+    expect(60 - 2 * h.inwardPx).toBe(TOUCH_TARGET_PX);
+    expect(h.anchors).toEqual(CORNERS);
+  });
+
+  it("put every handle's target outside a fixture smaller than a finger, and only at its corners", () => {
+    // A 0.6 m case at 50 px per metre is 30 px on screen.
+    const h = selectionHandles(30, 30, touch);
+    expect(h.inwardPx).toBe(0);
+    expect(h.anchors).toEqual(CORNERS);
+    for (const name of h.anchors) {
+      const r = anchorHitRect(name, touch.anchorVisualPx, touch.anchorHitPx, h.inwardPx);
+      const c = touch.anchorVisualPx / 2;
+      // The handle's centre is the outline's corner: the target lies wholly on the outside.
+      const x0 = r.x - c;
+      const x1 = r.x + r.width - c;
+      expect(name.includes("left") ? x1 <= 0 : x0 >= 0).toBe(true);
+    }
+  });
+
+  it("uses the mouse's small targets with a mouse", () => {
+    expect(selectionHandles(30, 30, targetSizes("mouse"))).toEqual({ inwardPx: 9, anchors: ALL_ANCHORS });
   });
 });

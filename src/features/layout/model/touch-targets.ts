@@ -70,3 +70,28 @@ export function anchorHitRect(name: string, visualPx: number, hitPx: number, inw
   const y = rotater ? c - size / 2 : along(name.includes("top"), name.includes("bottom"));
   return { x, y, width: size, height: size };
 }
+
+export const CORNER_ANCHORS = ["top-left", "top-right", "bottom-left", "bottom-right"] as const;
+export const ALL_ANCHORS = [...CORNER_ANCHORS, "top-center", "bottom-center", "middle-left", "middle-right"] as const;
+
+/** How far handles may reach into a selection at most (anchorHitRect's default). */
+export const MAX_INWARD_PX = 10;
+
+/**
+ * The transformer's handles around a selection of this size on screen, so a finger can still
+ * grab its body: each handle's target reaches into the outline only as far as leaves a
+ * target-sized middle (none of it on a small fixture, whose handles then lie wholly outside),
+ * and a side shorter than two targets keeps only its corner handles, so edge handles do not
+ * crowd the corners' targets.
+ */
+export function selectionHandles(
+  widthPx: number,
+  heightPx: number,
+  sizes: TargetSizes,
+): { inwardPx: number; anchors: readonly string[] } {
+  const side = Math.min(Math.abs(widthPx), Math.abs(heightPx));
+  if (Number.isNaN(side))
+    throw new RangeError(`selectionHandles: the selection's size must be numbers (got ${widthPx}, ${heightPx})`);
+  const inwardPx = Math.max(0, Math.min(MAX_INWARD_PX, (side - sizes.anchorHitPx) / 2));
+  return { inwardPx, anchors: side < 2 * sizes.anchorHitPx ? CORNER_ANCHORS : ALL_ANCHORS };
+}

@@ -15,7 +15,15 @@ import type { Scene } from "../../model/scene";
 import type { SnapGuide } from "../../model/snapping";
 import { idleState, runTool, type ActiveTool, type AnyToolState } from "../../model/tools/active-tool";
 import { toolContext } from "../../model/tools/context";
-import { anchorHitRect, targetSizes, type PointerKind } from "../../model/touch-targets";
+import {
+  ALL_ANCHORS,
+  anchorHitRect,
+  MAX_INWARD_PX,
+  selectionHandles,
+  targetSizes,
+  type PointerKind,
+} from "../../model/touch-targets";
+import { unionBounds } from "../../model/fixture-geometry";
 import type { ToolEvent, ToolPreview } from "../../model/tools/tool";
 import { useShapeHandlers } from "../../hooks/use-shape-handlers";
 import { applyPinch } from "../../../../lib/plan-view/pinch";
@@ -46,6 +54,8 @@ export interface EditorStageProps {
   /** Keys for the tool in hand (Escape, Enter, Backspace while drawing); set by the stage. */
   toolKeys: React.MutableRefObject<((key: string) => boolean) | null>;
 }
+
+const NO_SELECTION_HANDLES = { inwardPx: MAX_INWARD_PX, anchors: ALL_ANCHORS };
 
 /** Snap distance is a screen distance (the same feel at every zoom); pick and drag distances follow the pointer (touch-targets.ts). */
 const SNAP_PX = 8;
@@ -295,6 +305,22 @@ export function EditorStage(p: EditorStageProps) {
     onPinch: (step) => p.onViewChange((v) => applyPinch(v, step, IMAGE_ZOOM)),
   });
 
+  // Handles sized to the selection on screen, so a small fixture's body stays grabbable by a finger.
+  const outlines = p.canEdit && active.tool === "select" ? selectedOutlineBox(scene) : null;
+  const handles = outlines
+    ? selectionHandles(
+        ((outlines.maxX - outlines.minX) / mpp) * view.zoom,
+        ((outlines.maxY - outlines.minY) / mpp) * view.zoom,
+        sizes,
+      )
+    : NO_SELECTION_HANDLES;
+  const inwardRef = useRef(handles.inwardPx);
+  inwardRef.current = handles.inwardPx;
+  // The style function reads the reach when Konva lays the handles out: lay them out again when it changes.
+  useEffect(() => {
+    transformer.current?.forceUpdate();
+  }, [handles.inwardPx]);
+
   const unit = quantise(mpp / view.zoom);
   const k = 1 / mpp;
   const draggable = p.canEdit && active.tool === "select" && !p.panning;
@@ -345,10 +371,16 @@ export function EditorStage(p: EditorStageProps) {
           keepRatio={false}
           ignoreStroke
           anchorSize={sizes.anchorVisualPx}
+          enabledAnchors={handles.anchors as string[]}
           rotateAnchorOffset={sizes.rotateOffsetPx}
           anchorStyleFunc={(anchor) => {
             // A finger-sized target that reaches out from the outline (touch-targets.ts).
-            const r = anchorHitRect(anchor.name(), sizesRef.current.anchorVisualPx, sizesRef.current.anchorHitPx);
+            const r = anchorHitRect(
+              anchor.name(),
+              sizesRef.current.anchorVisualPx,
+              sizesRef.current.anchorHitPx,
+              inwardRef.current,
+            );
             anchor.hitFunc((ctx, shape) => {
               ctx.beginPath();
               ctx.rect(r.x, r.y, r.width, r.height);
@@ -386,6 +418,11 @@ export function EditorStage(p: EditorStageProps) {
       </Layer>
     </Stage>
   );
+}
+
+/** The box round the selected outlines (points have no handles), in plan metres. */
+function selectedOutlineBox(scene: Scene) {
+  return unionBounds(scene.selection.map((id) => scene.fixtures[id]).filter((f) => f !== undefined && !("point" in f)));
 }
 
 /** The selected outline's corners, as squares to grab with the corner tool (it hit-tests them itself). */

@@ -86,7 +86,7 @@ export function EditorToolbar(p: Props) {
     <div
       role="toolbar"
       aria-label="Layout tools"
-      className="flex flex-wrap items-end gap-2 rounded-md bg-surface p-2 edge"
+      className="flex flex-wrap items-center gap-2 rounded-md bg-surface p-2 edge"
     >
       <div className="flex flex-wrap gap-1" role="group" aria-label="Tool">
         <ToolButton pressed={p.active.tool === "select"} onClick={() => p.onTool("select")} shortcut="V">
@@ -116,8 +116,8 @@ export function EditorToolbar(p: Props) {
         ) : null}
       </div>
       {p.canEdit ? (
-        <div>
-          <label htmlFor={kindId} className="block text-sm font-bold">
+        <div className="flex items-center gap-2">
+          <label htmlFor={kindId} className="text-sm font-bold">
             Kind to draw
           </label>
           <select
@@ -169,9 +169,9 @@ export function EditorToolbar(p: Props) {
         </Button>
       </div>
       {p.canEdit ? (
-        <div className="flex flex-wrap items-end gap-2">
-          <div>
-            <label htmlFor={gridId} className="block text-sm font-bold">
+        <div className="flex flex-wrap items-center gap-2">
+          <div className="flex items-center gap-2">
+            <label htmlFor={gridId} className="text-sm font-bold">
               Snap to grid
             </label>
             <select

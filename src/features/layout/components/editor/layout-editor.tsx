@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useMemo, useRef, useState } from "react";
+import { useCallback, useMemo, useRef, useState } from "react";
 import type { FixtureKind } from "#core/contracts/fixture-kinds";
 import type { FixturesResponse, Plan } from "#core/contracts/plans";
 import type { LengthPreference } from "#core/domain/units/format-units";
@@ -9,10 +9,12 @@ import { useHtmlImage } from "../../../../lib/use-html-image";
 import { getPlanFixtures as getFixtures } from "../../../../entities/plans/plans-api";
 import { useAutosave } from "../../hooks/use-autosave";
 import { useEditorHistory } from "../../hooks/use-editor-history";
+import { useWorkspaceStage } from "../../hooks/use-workspace-stage";
 import { useEditorShortcuts, VIEW_KEY_HELP } from "../../hooks/use-editor-shortcuts";
-import { array, duplicate, remove, select } from "../../model/actions";
-import { fitView, IMAGE_ZOOM, stagePoint, zoomAbout, type View } from "../../../../lib/plan-view/coordinates";
+import { applyAction, array, duplicate, remove, select, type SceneAction } from "../../model/actions";
+import { stagePoint, zoomAbout, type View } from "../../../../lib/plan-view/coordinates";
 import { duplicateOffset } from "../../model/duplicate-offset";
+import { revealBox } from "../../model/reveal";
 import { unionBounds } from "../../model/fixture-geometry";
 import { createScene, sceneFixtures, selectedFixtures } from "../../model/scene";
 import { SHORTCUT_HELP } from "../../model/shortcuts";
@@ -68,8 +70,8 @@ function EditorBody({
   const autosave = useAutosave(plan.id, scene, initial.layoutRevision, canEdit);
   const box = useRef<HTMLDivElement>(null);
   const bar = useRef<HTMLDivElement>(null);
-  const [size, setSize] = useState({ width: 800, height: 560 });
   const [view, setView] = useState<View>({ panX: 0, panY: 0, zoom: 1 });
+  const size = useWorkspaceStage(box, bar, backdrop, view, setView);
   const [kind, setKind] = useState<FixtureKind>("open-case");
   const [shape, setShape] = useState<DrawShape>("rectangle");
   const [active, setActive] = useState<ActiveTool>({ tool: "select" });
@@ -81,36 +83,13 @@ function EditorBody({
   const [reloading, setReloading] = useState(false);
   const [drawingOutline, setDrawingOutline] = useState(false);
   const toolKeys = useRef<((key: string) => boolean) | null>(null);
-  const fitted = useRef(false);
-
-  useEffect(() => {
-    const el = box.current;
-    if (!el) return;
-    const measure = () => {
-      const width = Math.max(320, el.clientWidth);
-      // The tools stay pinned above the stage when the page scrolls to it (a finger on the stage
-      // pans the plan, not the page), so the stage must fit under them in the window.
-      const barHeight = bar.current?.offsetHeight ?? 0;
-      const height = Math.max(360, Math.min(window.innerHeight - 260, window.innerHeight - barHeight - 24, 900));
-      setSize({ width, height });
-      if (!fitted.current) {
-        fitted.current = true;
-        setView(fitView(backdrop.widthPx, backdrop.heightPx, width, height, 16, IMAGE_ZOOM));
-      }
-    };
-    measure();
-    const ro = new ResizeObserver(measure);
-    ro.observe(el);
-    return () => ro.disconnect();
-  }, [backdrop]);
 
   const zoom = useCallback(
     (direction: "in" | "out" | "fit") => {
-      if (direction === "fit")
-        setView(fitView(backdrop.widthPx, backdrop.heightPx, size.width, size.height, 16, IMAGE_ZOOM));
+      if (direction === "fit") size.fit();
       else setView((v) => zoomAbout(v, stagePoint(size.width / 2, size.height / 2), direction === "in" ? 1.25 : 0.8));
     },
-    [backdrop, size],
+    [size],
   );
 
   const chooseTool = useCallback(
@@ -130,11 +109,30 @@ function EditorBody({
     [kind, scene],
   );
 
+  /** Applies a copying action and brings the originals and their copies into view. */
+  const makeCopies = useCallback(
+    (action: SceneAction) => {
+      const originals = unionBounds(selectedFixtures(scene));
+      const copies = unionBounds(selectedFixtures(applyAction(scene, action)));
+      editor.apply([action]);
+      if (!originals || !copies) return;
+      const px = 1 / backdrop.metresPerPixel;
+      const box = {
+        minX: Math.min(originals.minX, copies.minX) * px,
+        minY: Math.min(originals.minY, copies.minY) * px,
+        maxX: Math.max(originals.maxX, copies.maxX) * px,
+        maxY: Math.max(originals.maxY, copies.maxY) * px,
+      };
+      setView((v) => revealBox(v, box, size));
+    },
+    [scene, editor, backdrop, size],
+  );
+
   const doDuplicate = useCallback(() => {
     if (scene.selection.length === 0) return;
     const [dx, dy] = duplicateOffset(scene, scene.selection);
-    editor.apply([duplicate(scene.selection, dx, dy, () => crypto.randomUUID())]);
-  }, [scene, editor]);
+    makeCopies(duplicate(scene.selection, dx, dy, () => crypto.randomUUID()));
+  }, [scene, makeCopies]);
 
   const doDelete = useCallback(() => {
     if (scene.selection.length) editor.apply([remove(scene.selection)]);
@@ -176,13 +174,10 @@ function EditorBody({
   );
   const state = autosave.state;
 
+  // At least a window tall from the tools down, so the page can always scroll them to the top.
   return (
-    <div className="space-y-3">
-      <div
-        ref={bar}
-        className="sticky top-0 z-10 -mx-1 flex flex-wrap items-center justify-between gap-2 bg-paper px-1 py-1"
-        data-testid="editor-bar"
-      >
+    <div className="min-h-dvh space-y-3">
+      <div ref={bar} className="flex flex-wrap items-center justify-between gap-2" data-testid="editor-bar">
         <EditorToolbar
           active={active}
           kind={kind}
@@ -249,6 +244,8 @@ function EditorBody({
             data-pan-x={view.panX}
             data-pan-y={view.panY}
             data-mpp={backdrop.metresPerPixel}
+            data-plan-width={scene.plan.width}
+            data-plan-height={scene.plan.height}
             aria-label="Floor plan with fixtures. The list below holds the same fixtures for keyboard and screen reader use."
             role="application"
           >
@@ -297,7 +294,7 @@ function EditorBody({
               onClose={() => setArrayOpen(false)}
               onArray={(count, spacing, direction) => {
                 try {
-                  editor.apply([array(scene.selection, count, spacing, direction, () => crypto.randomUUID())]);
+                  makeCopies(array(scene.selection, count, spacing, direction, () => crypto.randomUUID()));
                   setArrayOpen(false);
                   // Back to the plan to see the copies (below xl the dialog sits under the stage).
                   box.current?.scrollIntoView?.({ block: "nearest" });

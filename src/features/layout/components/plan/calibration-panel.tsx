@@ -7,6 +7,7 @@ import { TextField } from "../../../../components/ui/text-field";
 import { fieldMessage, formErrorMessage, serverFieldErrors } from "../../../../lib/form-errors";
 import { useCalibratePlan } from "../../api/calibrate-plan";
 import { metresPerPixelFromLine } from "../../model/calibration";
+import { pixelScaleText } from "../../model/scale-readout";
 import type { ImagePoint } from "../../../../lib/plan-view/coordinates";
 import { readLengthEntry } from "../../model/length-entry";
 import { ImagePointPicker } from "./image-point-picker";
@@ -48,7 +49,7 @@ export function CalibrationPanel({
   if (points.length === 2 && entry.ok) {
     try {
       const mpp = metresPerPixelFromLine(points[0], points[1], entry.length);
-      preview = `${(mpp * 100).toFixed(3)} cm per pixel; the drawing is ${formatLength(mpp * image.widthPx, preference, { decimals: 1 })} × ${formatLength(mpp * image.heightPx, preference, { decimals: 1 })}.`;
+      preview = `${pixelScaleText(mpp, preference)}; the drawing is ${formatLength(mpp * image.widthPx, preference, { decimals: 1 })} × ${formatLength(mpp * image.heightPx, preference, { decimals: 1 })}.`;
     } catch (e) {
       preview = e instanceof RangeError ? e.message : null;
     }

@@ -13,6 +13,7 @@ import { AlignmentPanel } from "./alignment-panel";
 import { CalibrationPanel } from "./calibration-panel";
 import { PlanUploadForm } from "./plan-upload-form";
 import { ScaleBar } from "./scale-bar";
+import { pixelScaleText } from "../../model/scale-readout";
 
 const THUMB_WIDTH = 320;
 
@@ -166,7 +167,7 @@ function PlanCard({ plan, preference, day }: { plan: Plan; preference: LengthPre
           {plan.source === "blank" ? (
             "Drawn to size"
           ) : plan.calibrated && plan.metresPerPixel ? (
-            `Calibrated: ${(plan.metresPerPixel * 100).toFixed(3)} cm per pixel`
+            `Calibrated: ${pixelScaleText(plan.metresPerPixel, preference)}`
           ) : (
             <span className="font-bold text-note">Not calibrated yet — set the scale before drawing fixtures</span>
           )}

@@ -8,6 +8,8 @@ import { formatBytes } from "../../../../lib/format";
 import { formErrorMessage, serverFieldErrors } from "../../../../lib/form-errors";
 import { useCreateBlankPlan } from "../../api/create-blank-plan";
 import { PLAN_IMAGE_TYPES, useUploadPlan } from "../../api/upload-plan";
+import { uploadStatusText } from "../../model/upload-status";
+import type { UploadProgress } from "../../../../lib/upload-with-progress";
 import { readLengthEntry } from "../../model/length-entry";
 import { toMetres } from "#core/analysis/geometry/units";
 
@@ -27,6 +29,7 @@ export function PlanUploadForm({
   const [file, setFile] = useState<File | null>(null);
   const [typeError, setTypeError] = useState<string | null>(null);
   const upload = useUploadPlan();
+  const [progress, setProgress] = useState<UploadProgress | null>(null);
 
   function submit(e: FormEvent) {
     e.preventDefault();
@@ -34,7 +37,11 @@ export function PlanUploadForm({
       setTypeError("Choose a PNG or JPEG file first.");
       return;
     }
-    upload.mutate({ storeId, file }, { onSuccess: (saved) => onDone(saved) });
+    if (upload.isPending) return; // one upload at a time
+    upload.mutate(
+      { storeId, file, onProgress: setProgress },
+      { onSuccess: (saved) => onDone(saved), onSettled: () => setProgress(null) },
+    );
   }
 
   function pick(f: File | null) {
@@ -50,7 +57,12 @@ export function PlanUploadForm({
   const uploadError = formErrorMessage(upload.error);
   return (
     <div className="grid gap-4 lg:grid-cols-2">
-      <form onSubmit={submit} noValidate className="space-y-3 rounded-md bg-surface p-4 edge">
+      <form
+        onSubmit={submit}
+        noValidate
+        aria-busy={upload.isPending}
+        className="space-y-3 rounded-md bg-surface p-4 edge"
+      >
         <h3 className="text-lg font-bold">{hasPlan ? "Upload a new drawing" : "Upload the floor plan"}</h3>
         <p className="text-muted">
           A PNG or JPEG of up to 25 MB.
@@ -84,6 +96,20 @@ export function PlanUploadForm({
         <Button type="submit" busy={upload.isPending}>
           Upload drawing
         </Button>
+        <div role="status" aria-live="polite" data-testid="plan-upload-status">
+          {progress ? (
+            <div className="space-y-1">
+              <p className="font-bold">{uploadStatusText(progress)}</p>
+              {/* A bar that fills while bytes go up, then moves without a value while the server works. */}
+              <progress
+                className="h-3 w-full"
+                aria-label="Upload progress"
+                max={1}
+                value={progress.stage === "uploading" && progress.fraction !== null ? progress.fraction : undefined}
+              />
+            </div>
+          ) : null}
+        </div>
       </form>
       {hasPlan ? null : <BlankPlanForm storeId={storeId} preference={preference} onDone={onDone} />}
     </div>

@@ -1,5 +1,5 @@
 import type { LengthPreference } from "#core/domain/units/format-units";
-import { pickScaleBar } from "../../model/calibration";
+import { scaleBarReadout } from "../../model/scale-readout";
 
 /**
  * A graduated bar of a round length (1-2-5 series) for a plan drawn at `metresPerScreenPixel`;
@@ -14,9 +14,9 @@ export function ScaleBar({
   maxPixels?: number;
   preference: LengthPreference;
 }) {
-  const bar = pickScaleBar(metresPerScreenPixel, maxPixels, preference === "ft-in" ? "ft" : "m");
+  const bar = scaleBarReadout(metresPerScreenPixel, maxPixels, preference);
   const w = Math.max(1, Math.round(bar.pixels));
-  const label = `${bar.value} ${bar.unit}`;
+  const label = bar.label;
   return (
     <figure className="inline-flex items-center gap-2" aria-label={`Scale bar: ${label}`}>
       <svg width={w + 2} height={14} aria-hidden="true">
