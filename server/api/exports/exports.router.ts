@@ -6,6 +6,8 @@ import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { getSystemRecords } from "../compliance/records.service";
 import { listFindings } from "../findings/findings.service";
+import { readerLengthUnit } from "../reports/reader-units";
+import { loadArchive, writeArchive } from "./company-archive";
 import { leakRateStatementPdf } from "./leak-rate-statement";
 import { recordsCsv } from "./records-csv";
 
@@ -53,6 +55,27 @@ export function exportsRouter(ctx: AppContext): Router {
       res.send(pdf);
     },
   );
+
+  // The owner's whole record set (docs/decisions/0046-owners-record-archive.md). Tables are read
+  // before the headers go out; the PDFs are made while the zip streams.
+  router.get("/company/records-archive.zip", requireMember("records.export"), async (req, res) => {
+    const viewer = member(req);
+    const tables = await loadArchive(ctx, viewer);
+    const unit = await readerLengthUnit(ctx, req.auth!.user, viewer.companyId);
+    const day = new Date().toISOString().slice(0, 10);
+    await logExport(ctx, req, "records-archive.zip", { companyId: viewer.companyId });
+    res.set({
+      "Content-Type": "application/zip",
+      "Content-Disposition": `attachment; filename="plumeline-records-${day}.zip"`,
+    });
+    try {
+      await writeArchive(ctx, viewer, tables, unit, res);
+    } catch (err) {
+      // The headers are gone, so no JSON error can follow: end the stream so the download fails visibly.
+      req.log?.error({ err }, "records archive stopped");
+      res.destroy(err instanceof Error ? err : undefined);
+    }
+  });
 
   return router;
 }

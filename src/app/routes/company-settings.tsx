@@ -8,6 +8,7 @@ import { ReadingsSection } from "../../features/compliance/components/readings-s
 import { useCompanySettings } from "../../features/settings/api/get-company-settings";
 import { CompanySettingsForm } from "../../features/settings/components/company-settings-form";
 import { CustomProfileSection } from "../../features/settings/components/custom-profile-section";
+import { RecordsArchiveSection } from "../../features/settings/components/records-archive-section";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
 
@@ -43,6 +44,7 @@ export function Component() {
         />
       ) : null}
       {settings.data ? <ReadingsSection key={`readings-${membership.companyId}`} /> : null}
+      {can(membership.role, "records.export") ? <RecordsArchiveSection /> : null}
     </>
   );
 }
