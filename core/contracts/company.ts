@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { text } from "./text";
-import { lengthUnitSchema, massUnitSchema } from "./units";
+import { lengthUnitSchema, massUnitSchema, numberFormatSchema } from "./units";
 
 export const RULE_PROFILES = ["us-federal", "eu-fgas", "custom"] as const;
 export const LEAK_RATE_METHODS = ["annualizing", "rolling-average"] as const;
@@ -9,6 +9,7 @@ export const companySettings = z.object({
   name: text().trim().min(1, "is required").max(120, "must be at most 120 characters"),
   lengthUnit: lengthUnitSchema,
   massUnit: massUnitSchema,
+  numberFormat: numberFormatSchema,
   ruleProfile: z.enum(RULE_PROFILES),
   leakRateMethod: z.enum(LEAK_RATE_METHODS),
   detectorCheckIntervalDays: z
@@ -17,3 +18,5 @@ export const companySettings = z.object({
     .max(730, "must be at most 730 days"),
 });
 export type CompanySettings = z.infer<typeof companySettings>;
+/** PUT /api/company/settings: the number format may be left out (kept as it is) by clients older than it. */
+export const companySettingsInput = companySettings.partial({ numberFormat: true });

@@ -101,7 +101,7 @@ async function recordsFor(f: CompanyFixture) {
 
 beforeAll(async () => {
   t = await createTestApp();
-  a = await companyFixture(t, "Larkspur Grocers");
+  a = await companyFixture(t, "Fernbrook Grocers");
   b = await companyFixture(t, "Quillon Markets");
   await recordsFor(a);
   await recordsFor(b);

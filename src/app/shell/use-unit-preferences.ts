@@ -1,3 +1,4 @@
+import type { NumberFormat } from "#core/domain/numbers/number-format";
 import type { LengthPreference, MassPreference } from "#core/domain/units/format-units";
 import { useCompanySettings } from "../../features/settings/api/get-company-settings";
 import { useSignedIn } from "./session-context";
@@ -5,6 +6,8 @@ import { useSignedIn } from "./session-context";
 export interface UnitPreferences {
   length: LengthPreference;
   mass: MassPreference;
+  /** The company's number format (a company setting, not a personal one: records read alike). */
+  number: NumberFormat;
 }
 
 /** The person's own units, else the company's default (docs/product.md); metres and kg until loaded. */
@@ -14,5 +17,6 @@ export function useUnitPreferences(): UnitPreferences {
   return {
     length: user.lengthUnit ?? company.data?.lengthUnit ?? "m",
     mass: user.massUnit ?? company.data?.massUnit ?? "kg",
+    number: company.data?.numberFormat ?? "1,234.5",
   };
 }

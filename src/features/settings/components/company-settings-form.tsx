@@ -12,7 +12,14 @@ import {
   type FieldErrors,
 } from "../../../lib/form-errors";
 import { companySettings, useUpdateCompanySettings } from "../api/update-company-settings";
-import { LEAK_RATE_METHOD_LABELS, LENGTH_LABELS, MASS_LABELS, RULE_PROFILE_LABELS, optionsOf } from "./unit-labels";
+import {
+  LEAK_RATE_METHOD_LABELS,
+  LENGTH_LABELS,
+  MASS_LABELS,
+  NUMBER_FORMAT_LABELS,
+  RULE_PROFILE_LABELS,
+  optionsOf,
+} from "./unit-labels";
 
 export interface CompanySettingsFormProps {
   settings: CompanySettings;
@@ -95,6 +102,15 @@ export function CompanySettingsForm({ settings, editable, onSaved }: CompanySett
             value={draft.massUnit}
             onChange={(e) => set("massUnit", e.target.value as Draft["massUnit"])}
             error={errors.massUnit}
+          />
+          <Select
+            label="Number format"
+            name="numberFormat"
+            hint="How numbers are shown and typed: with a decimal comma, 1,200 is one point two."
+            options={optionsOf(NUMBER_FORMAT_LABELS)}
+            value={draft.numberFormat}
+            onChange={(e) => set("numberFormat", e.target.value as Draft["numberFormat"])}
+            error={errors.numberFormat}
           />
         </section>
         <section className="grid gap-4 sm:grid-cols-2" aria-labelledby="rules-heading">

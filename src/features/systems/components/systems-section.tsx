@@ -1,6 +1,8 @@
 import { useState } from "react";
 import { APPLIANCE_TYPE_NAMES, type System } from "#core/contracts/systems";
-import { formatMass, type MassPreference } from "#core/domain/units/format-units";
+import { formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
+import type { MassPreference } from "#core/domain/units/format-units";
+import { kgToPounds } from "#core/domain/units/mass";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { DataTable } from "../../../components/ui/data-table";
@@ -16,11 +18,16 @@ import { SystemForm } from "./system-form";
 export function SystemsSection({
   storeId,
   canEdit,
+  canRevise = false,
   massUnit,
+  numberFormat = "1,234.5",
 }: {
   storeId: string;
   canEdit: boolean;
+  /** Engineers and owners change dated facts by a revision (docs/decisions/0043-system-revisions.md). */
+  canRevise?: boolean;
   massUnit: MassPreference;
+  numberFormat?: NumberFormat;
 }) {
   const systems = useSystems(storeId);
   const [editing, setEditing] = useState<string | "new" | null>(null);
@@ -57,6 +64,8 @@ export function SystemsSection({
           storeId={storeId}
           system={editedSystem}
           massUnit={massUnit}
+          numberFormat={numberFormat}
+          canRevise={canRevise}
           onDone={() => setEditing(null)}
           onCancel={() => setEditing(null)}
         />
@@ -95,10 +104,14 @@ export function SystemsSection({
                   "not known"
                 ),
             },
-            { header: "Full charge", cell: (s) => formatMass(s.fullChargeKg, massUnit, 1) },
+            {
+              header: "Full charge",
+              cell: (s) =>
+                `${formatQuantity(massUnit === "lb" ? kgToPounds(s.fullChargeKg) : s.fullChargeKg, numberFormat, 1)} ${massUnit}`,
+            },
             { header: "Appliance type", cell: (s) => APPLIANCE_TYPE_NAMES[s.applianceType] },
             { header: "Automatic leak detection", cell: (s) => (s.automaticLeakDetection ? "Yes" : "No") },
-            ...(canEdit
+            ...(canEdit || canRevise
               ? [
                   {
                     header: "Actions",
@@ -124,13 +137,15 @@ export function SystemsSection({
                           <Button variant="secondary" onClick={() => setEditing(s.id)} aria-label={`Edit ${s.name}`}>
                             Edit
                           </Button>
-                          <Button
-                            variant="quiet"
-                            onClick={() => setConfirmDelete(s.id)}
-                            aria-label={`Delete ${s.name}`}
-                          >
-                            Delete
-                          </Button>
+                          {canEdit ? (
+                            <Button
+                              variant="quiet"
+                              onClick={() => setConfirmDelete(s.id)}
+                              aria-label={`Delete ${s.name}`}
+                            >
+                              Delete
+                            </Button>
+                          ) : null}
                         </div>
                       ),
                   },
