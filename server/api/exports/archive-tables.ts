@@ -8,6 +8,7 @@ import {
   findings,
   leakChecks,
   memberships,
+  readingAcceptances,
   readingAudit,
   readings,
   stores,
@@ -50,6 +51,7 @@ export async function archiveTables(ctx: AppContext, companyId: string): Promise
     sweepRows,
     readingRows,
     editRows,
+    acceptanceRows,
   ] = await Promise.all([
     db.select().from(stores).where(eq(stores.companyId, companyId)).orderBy(asc(stores.createdAt), asc(stores.id)),
     db
@@ -101,6 +103,11 @@ export async function archiveTables(ctx: AppContext, companyId: string): Promise
       .where(inArray(readings.sweepId, companySweeps))
       .orderBy(asc(readings.sweepId), asc(readings.takenAt), asc(readings.id)),
     db.select().from(readingAudit).where(inArray(readingAudit.sweepId, companySweeps)).orderBy(asc(readingAudit.id)),
+    db
+      .select()
+      .from(readingAcceptances)
+      .where(eq(readingAcceptances.companyId, companyId))
+      .orderBy(asc(readingAcceptances.at), asc(readingAcceptances.id)),
   ]);
   return [
     { file: "stores.csv", columns: cols(stores), rows: storeRows },
@@ -114,6 +121,7 @@ export async function archiveTables(ctx: AppContext, companyId: string): Promise
     { file: "finding-steps.csv", columns: cols(findingEvents), rows: stepRows },
     { file: "chronic-leaker-filings.csv", columns: cols(chronicLeakerReports), rows: filingRows },
     { file: "compliance-audit.csv", columns: cols(complianceAudit), rows: auditRows },
+    { file: "rule-readings-accepted.csv", columns: cols(readingAcceptances), rows: acceptanceRows },
     { file: "sweeps.csv", columns: cols(sweeps), rows: sweepRows },
     { file: "readings.csv", columns: cols(readings), rows: readingRows },
     { file: "reading-edits.csv", columns: cols(readingAudit), rows: editRows },

@@ -90,6 +90,8 @@ async function recordsFor(f: CompanyFixture) {
     fullCharge: { value: 320, unit: "kg" },
   });
   await owner.post(`/api/sweeps/${f.main.sweep}/submit`, {});
+  const { readings: listed } = (await owner.get("/api/compliance/readings")).body;
+  expect((await owner.post("/api/compliance/readings/accept", { text: listed[0].text })).status).toBe(200);
   // The other store's system has a record, so removing it retires it: its records stay in the archive.
   await technician.post(`/api/systems/${f.other.system}/charge-additions`, {
     amount: { value: 2, unit: "kg" },
@@ -170,8 +172,10 @@ describe("the owner's record archive", () => {
     const audit = await t.ctx.db.select().from(complianceAudit).where(eq(complianceAudit.companyId, co));
     const auditCsv = csvRows(files, "compliance-audit.csv");
     expect(auditCsv.map((r) => r.id).sort()).toEqual(audit.map((r) => r.id).sort());
-    expect(auditCsv.map((r) => r.action).sort()).toEqual(["system-retired", "system-revised"]);
+    expect(auditCsv.map((r) => r.action).sort()).toEqual(["reading-accepted", "system-retired", "system-revised"]);
     expect(csvRows(files, "chronic-leaker-filings.csv")).toEqual([]);
+    const [accepted] = csvRows(files, "rule-readings-accepted.csv");
+    expect(accepted).toMatchObject({ profile_id: "us-federal", by_id: a.co.people.owner.userId });
 
     const sw = await t.ctx.db.select().from(sweeps).where(eq(sweeps.companyId, co));
     expect(

@@ -43,7 +43,9 @@ export function Component() {
           editable={can(membership.role, "settings.manage")}
         />
       ) : null}
-      {settings.data ? <ReadingsSection key={`readings-${membership.companyId}`} /> : null}
+      {settings.data ? (
+        <ReadingsSection key={`readings-${membership.companyId}`} canAccept={can(membership.role, "settings.manage")} />
+      ) : null}
       {can(membership.role, "records.export") ? <RecordsArchiveSection /> : null}
     </>
   );
