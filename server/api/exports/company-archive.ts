@@ -9,6 +9,7 @@ import { getSystemRecords } from "../compliance/records.service";
 import { listFindings } from "../findings/findings.service";
 import { sweepReportPdf } from "../reports/reports.service";
 import { archiveTables, type ArchiveTable } from "./archive-tables";
+import { companyMassDisplay } from "./company-display";
 import { leakRateStatementPdf } from "./leak-rate-statement";
 
 const slug = (s: string) =>
@@ -54,13 +55,14 @@ export async function writeArchive(
     listed.push(`tables/${t.file} (${t.rows.length} rows)`);
   }
 
+  const display = await companyMassDisplay(ctx, viewer.companyId);
   const systems = tables.find((t) => t.file === "systems.csv")?.rows ?? [];
   for (const s of systems as { id: string; name: string; storeId: string }[]) {
     const name = `statements/${slug(s.name)}-${s.id.slice(0, 8)}.pdf`;
     try {
       const records = await getSystemRecords(ctx, viewer, s.id, now);
       const list = await listFindings(ctx, viewer, s.storeId, { systemId: s.id });
-      zip.addBuffer(await leakRateStatementPdf(records, list, now), name, { mtime });
+      zip.addBuffer(await leakRateStatementPdf(records, list, now, display), name, { mtime });
       listed.push(name);
     } catch (err) {
       if (!(err instanceof HttpError)) throw err;

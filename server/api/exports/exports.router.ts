@@ -8,6 +8,7 @@ import { getSystemRecords } from "../compliance/records.service";
 import { listFindings } from "../findings/findings.service";
 import { readerLengthUnit } from "../reports/reader-units";
 import { loadArchive, writeArchive } from "./company-archive";
+import { companyMassDisplay } from "./company-display";
 import { leakRateStatementPdf } from "./leak-rate-statement";
 import { recordsCsv } from "./records-csv";
 
@@ -35,7 +36,7 @@ export function exportsRouter(ctx: AppContext): Router {
         "Content-Disposition": `attachment; filename="${fileName(records.system.name, "csv")}"`,
       });
       await logExport(ctx, req, "records.csv", { systemId: records.system.id });
-      res.send(recordsCsv(records, list));
+      res.send(recordsCsv(records, list, (await companyMassDisplay(ctx, member(req).companyId)).mass));
     },
   );
 
@@ -46,7 +47,8 @@ export function exportsRouter(ctx: AppContext): Router {
     async (req, res) => {
       const records = await getSystemRecords(ctx, member(req), res.locals.params.id);
       const list = await listFindings(ctx, member(req), records.store.id, { systemId: records.system.id });
-      const pdf = await leakRateStatementPdf(records, list);
+      const display = await companyMassDisplay(ctx, member(req).companyId);
+      const pdf = await leakRateStatementPdf(records, list, new Date(), display);
       await logExport(ctx, req, "leak-rate-statement.pdf", { systemId: records.system.id });
       res.set({
         "Content-Type": "application/pdf",

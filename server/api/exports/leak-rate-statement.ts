@@ -4,8 +4,7 @@ import type { FindingDetail } from "#core/contracts/finding-actions";
 import { APPLIANCE_TYPE_NAMES } from "#core/contracts/systems";
 import { statementFonts } from "./fonts";
 import { readableSource } from "#core/domain/compliance/citations";
-
-const KG_PER_LB = 0.45359237; // NIST SP 811, appendix B.8
+import { DEFAULT_MASS_DISPLAY, printMass, type MassDisplay } from "./company-display";
 
 /**
  * The leak-rate statement of one system as a PDF: what the system is, which rule applies and
@@ -16,6 +15,7 @@ export function leakRateStatementPdf(
   r: SystemRecordsView,
   findingList: FindingDetail[],
   generatedAt = new Date(),
+  display: MassDisplay = DEFAULT_MASS_DISPLAY,
 ): Promise<Buffer> {
   const fonts = statementFonts();
   const doc = new PDFDocument({
@@ -35,7 +35,8 @@ export function leakRateStatementPdf(
   const h = (text: string) =>
     doc.moveDown(0.6).font("bold").fontSize(12).text(text).moveDown(0.2).font("body").fontSize(9.5);
   const line = (text: string) => doc.text(text);
-  const mass = (kg: number) => `${kg.toFixed(2)} kg (${(kg / KG_PER_LB).toFixed(1)} lb)`;
+  // The company's unit first, grouped in its number format (docs/decisions/0047-company-number-format.md).
+  const mass = (kg: number) => printMass(kg, display);
 
   doc.font("bold").fontSize(17).text("Leak-rate statement");
   doc.font("body").fontSize(10).text(`${r.system.name} · ${r.store.name}`);

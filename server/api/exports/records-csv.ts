@@ -10,7 +10,7 @@ const KG_PER_LB = 0.45359237; // NIST SP 811, appendix B.8
  * chronic-leaker report marked filed. Free text that begins like a formula (=, +, -, @, tab, CR) is
  * written with a leading ' so a spreadsheet shows it as text (OWASP CSV injection guidance).
  */
-export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[]): string {
+export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[], massFirst: "kg" | "lb" = "kg"): string {
   const rateAt = new Map(r.leakRates.flatMap((p) => p.additionIds.map((id) => [id, p] as const)));
   const rows: Record<string, string | number>[] = [];
   for (const a of r.additions) {
@@ -107,6 +107,12 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[]): 
     gwp_basis: gwp?.statement ?? "",
     co2e_tonnes: r.co2e.known && r.co2e.tonnes !== null ? Math.round(r.co2e.tonnes * 1000) / 1000 : "",
   }));
+  // An lb company reads lb first (amount_lb before amount_kg); the columns are the same either way.
+  const keys = Object.keys(withBasis[0] ?? {});
+  const fields =
+    massFirst === "lb"
+      ? keys.map((k) => (k === "amount_kg" ? "amount_lb" : k === "amount_lb" ? "amount_kg" : k))
+      : keys;
   // Text cells escaped against formula injection (core/domain/reports/csv-cells.ts); numbers stay numbers.
-  return unparseCsv(withBasis);
+  return withBasis.length > 0 ? unparseCsv({ fields, data: withBasis }) : unparseCsv(withBasis);
 }
