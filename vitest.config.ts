@@ -35,6 +35,7 @@ export default defineConfig({
           environment: "jsdom",
           include: ["src/**/*.test.{ts,tsx}"],
           setupFiles: ["tests/helpers/client-setup.ts"],
+          testTimeout: 20_000,
           // jsdom start-up under a loaded machine can outlast findBy* timeouts; one more try.
           retry: 1,
         },

@@ -21,6 +21,8 @@ export type Permission =
   | "plans.edit"
   | "detectors.read"
   | "detectors.manage"
+  /** A sweep's evidence: its readings and their audit, the readings CSV, field maps and trends, report sends. */
+  | "sweeps.read"
   | "sweeps.record"
   | "sweeps.review"
   /** Ask for a field map at another delay or time constant than the detector's (a new computation). */
@@ -44,6 +46,7 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "plans.edit",
     "detectors.read",
     "detectors.manage",
+    "sweeps.read",
     "sweeps.record",
     "sweeps.review",
     "analyses.tune",
@@ -61,17 +64,19 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "plans.edit",
     "detectors.read",
     "detectors.manage",
+    "sweeps.read",
     "sweeps.record",
     "analyses.tune",
     "findings.record",
   ],
-  technician: ["members.read", "stores.read", "detectors.read", "sweeps.record", "findings.record"],
+  technician: ["members.read", "stores.read", "detectors.read", "sweeps.read", "sweeps.record", "findings.record"],
   // Engineers read everything (docs/product.md), detectors included: their lag figures explain an analysis.
   engineer: [
     "members.read",
     "outbox.read",
     "stores.read",
     "detectors.read",
+    "sweeps.read",
     "sweeps.review",
     "analyses.tune",
     "findings.record",
@@ -79,7 +84,9 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "compliance.manage",
     "reports.send",
   ],
-  // Read-only, and only for the stores named on the membership (enforced per store).
+  // A store manager's view, only for the stores named on the membership (enforced per store): the store,
+  // its plan, systems and their records, findings, due dates and the sweep reports. Not the evidence
+  // behind a report (readings, their audit, field maps): decision 0072.
   "store-contact": ["stores.read"],
 };
 

@@ -89,13 +89,7 @@ try {
             atLeast: false,
             samplePoint: "grille",
             note: "",
-            draft: false,
-            state: "pending",
-            onServer: false,
-            editPending: false,
-            deletePending: false,
-            editedAt: null,
-            reasons: null,
+            sync: { kind: "queued-new" },
           });
         }
         tx.objectStore("meta").put(2_000_000, "seq");
@@ -122,12 +116,12 @@ try {
       });
       const states = () => new Promise((resolve) => {
         const all = db.transaction("readings").objectStore("readings").getAll();
-        all.onsuccess = () => resolve(all.result.filter((r) => r.sweepId === ${JSON.stringify(sweepId)}).map((r) => r.state));
+        all.onsuccess = () => resolve(all.result.filter((r) => r.sweepId === ${JSON.stringify(sweepId)}).map((r) => r.sync.kind));
       });
       const t = performance.now();
       window.dispatchEvent(new Event("online"));
       for (;;) {
-        const left = (await states()).filter((s) => s === "pending").length;
+        const left = (await states()).filter((s) => s.startsWith("queued-")).length;
         if (left === 0) break;
         await new Promise((r) => setTimeout(r, 20));
       }

@@ -1,9 +1,10 @@
 import type { Request } from "express";
 import type { AppContext } from "../context";
-import { securityEvents, SECURITY_EVENT_KINDS } from "../db/schema/index";
+import type { SecurityEventKind } from "#core/contracts/security-log";
+import { securityEvents } from "../db/schema/index";
 
 export interface SecurityEventInput {
-  kind: (typeof SECURITY_EVENT_KINDS)[number];
+  kind: SecurityEventKind;
   /** Null for events about a person's account (shown to the owners of each of their companies). */
   companyId: string | null;
   userId: string;

@@ -18,15 +18,43 @@ export function serverFieldErrors(error: unknown): FieldErrors {
   return isApiRequestError(error) ? error.fields : {};
 }
 
-/** The message to show above a form for a failed request, when it is not only about fields. */
+/**
+ * The message to show above a form for a failed request. Refused fields are named with the reason,
+ * so a field that is off screen, folded away or not on the form at all is never a silent "marked".
+ */
 export function formErrorMessage(error: unknown): string | null {
   if (!error) return null;
   if (isApiRequestError(error)) {
     if (error.code === "validation_failed" && Object.keys(error.fields).length > 0)
-      return "Please correct the marked fields.";
+      return fieldErrorSummary(error.fields);
     return error.message;
   }
   return "Something went wrong. Please try again.";
+}
+
+/** "Please correct: E-mail must be at most 254 characters. Time zone is not a time zone." */
+export function fieldErrorSummary(fields: FieldErrors): string {
+  const lines = Object.entries(fields).map(([key, message]) => fieldMessage(fieldLabel(key), message));
+  return `Please correct: ${lines.join(" ")}`;
+}
+
+/**
+ * A field's name as the person reads it: the label of the form control carrying that name when one is
+ * on the page, else the key in words ("levels.2.fromPpm" → "Levels 3 from ppm").
+ */
+export function fieldLabel(key: string): string {
+  const [name] = key.split(".");
+  const control = typeof document === "undefined" ? null : document.getElementsByName(name)[0];
+  const label = control && "labels" in control ? (control as HTMLInputElement).labels?.[0]?.textContent : null;
+  if (label?.trim()) return label.trim();
+  return key
+    .split(".")
+    .map((part) => (/^\d+$/.test(part) ? String(Number(part) + 1) : part))
+    .join(" ")
+    .replace(/([a-z])([A-Z])/g, "$1 $2")
+    .replace(/\b(Ppm|Id)\b/gi, (w) => (w.toLowerCase() === "ppm" ? "ppm" : "id"))
+    .toLowerCase()
+    .replace(/^./, (c) => c.toUpperCase());
 }
 
 // Schema messages are fragments ("is required", "must be at least 10 characters") so that the

@@ -74,9 +74,7 @@ describe("one bad character in the offline queue", () => {
         timeConstantS: 0,
         alarmPpm: 0,
         warnings: [],
-        onServer: false,
-        submitPending: false,
-        rejected: null,
+        sync: { kind: "queued-new", thenSubmit: false },
       });
       const notes = Array.from({ length: 30 }, (_, i) => (i === 17 ? poison : `case ${i} 🧊`));
       for (const [i, note] of notes.entries())
@@ -99,8 +97,10 @@ describe("one bad character in the offline queue", () => {
       expect(stored.some((r) => r.note.includes("\uFFFD"))).toBe(false);
       const local = await sweepReadings(db, sweepId);
       const held = local.find((r) => r.note === poison)!;
-      expect(held.state).toBe("rejected");
-      expect(held.reasons?.note).toMatch(what === "a NUL character" ? /NUL/ : /surrogate/);
+      expect(held.sync.kind).toBe("refused");
+      expect(held.sync.kind === "refused" ? held.sync.reasons.note : "").toMatch(
+        what === "a NUL character" ? /NUL/ : /surrogate/,
+      );
       // Nothing waits any more: the loop has no reason to retry every few seconds.
       expect(await queueCounts(db)).toEqual({ waiting: 0, rejected: 1 });
       db.close();

@@ -3,8 +3,12 @@
 import "vitest-canvas-mock";
 // DOM matchers (toBeVisible, toHaveTextContent, …) so tests assert what a person would see.
 import "@testing-library/jest-dom/vitest";
-import { cleanup } from "@testing-library/react";
+import { cleanup, configure } from "@testing-library/react";
 import { afterEach, vi } from "vitest";
+
+// A lazy route's first import and jsdom's start-up take seconds on a loaded 2-core machine: findBy*
+// waits up to 5 s (the library's default is 1 s) rather than failing on a slow machine.
+configure({ asyncUtilTimeout: 5_000 });
 
 // Vitest runs without globals here, so Testing Library cannot register its own cleanup.
 afterEach(() => {

@@ -41,3 +41,14 @@ export function formatInZone(at: Date | string, timeZone: string, style: MomentS
     return formatter("UTC", style).format(date);
   }
 }
+
+/**
+ * A calendar day ("2026-12-07": a due date, the day a charge was added) written like every other
+ * date: "7 Dec 2026". A calendar day has no zone of its own: it is already the store's day, so it is
+ * read as that day at noon UTC and written in UTC. No day is "—"; anything else is returned as given.
+ */
+export function formatCalendarDay(day: string | null): string {
+  if (day === null) return "—";
+  if (!/^\d{4}-\d{2}-\d{2}$/.test(day)) return day;
+  return formatInZone(`${day}T12:00:00Z`, "UTC", "date");
+}

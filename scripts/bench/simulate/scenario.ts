@@ -9,8 +9,20 @@ import { generateLayout, round } from "./store-plan";
 import type { Family, FixtureSpec, StoreLayout } from "./store-types";
 import { Technician } from "./technician";
 import { buildOperator, solveSteady, type TransportOperator } from "./transport";
-import { buildWalkMap } from "./walk-path";
+import { buildWalkMap, type WalkMap } from "./walk-path";
 import { chooseLeaks, type TrueLeak } from "./leak-sites";
+
+export interface World {
+  layout: StoreLayout;
+  map: WalkMap;
+  technician: Technician;
+  plan: Scenario["input"]["plan"];
+  instrument: Scenario["input"]["instrument"];
+  truth: Scenario["truth"];
+  notes: Omit<Scenario["notes"], "samplesInSolid">;
+  /** Probe positions on a solid cell so far: should stay zero (a routing fault otherwise). */
+  samplesInSolid: () => number;
+}
 
 export interface Scenario {
   input: {
@@ -100,7 +112,12 @@ function solveFor(op: TransportOperator, grid: Grid, cells: number[], iterations
   return res.field;
 }
 
-export function buildScenario(family: Family, key: number): Scenario {
+/**
+ * One simulated store before anyone sweeps it: the layout, the solved gas field, the instrument and a
+ * technician standing at the first case with the detector warmed up. The benchmark sweeps every leg;
+ * the guidance benchmark (scripts/bench/guide/) lets a policy decide where the technician goes next.
+ */
+export function buildWorld(family: Family, key: number): World {
   const random = createRandom(key);
   const layout = generateLayout(random);
   for (const f of layout.fixtures) f.fans = family === "single-still" && isCase(f) ? false : true;
@@ -181,23 +198,34 @@ export function buildScenario(family: Family, key: number): Scenario {
     15,
   );
   const map = buildWalkMap(grid, caseMask);
-  for (const leg of layout.legs) tech.sweep(map, leg);
+  const plan: Scenario["input"]["plan"] = {
+    width: layout.width,
+    height: layout.height,
+    obstacles: layout.solids.map((s) => ({ id: s.id, polygon: polygon(s.rect) })),
+    fixtures: layout.fixtures.map((f) => ({ id: f.id, kind: f.kind, polygon: polygon(f.rect), fans: f.fans })),
+    riskPoints: layout.riskPoints.map((p) => ({ id: p.id, kind: p.kind, x: p.x, y: p.y })),
+    backgroundZones: zoneListed
+      ? [{ id: layout.zone.id, polygon: polygon(layout.zone.rect), note: layout.zone.note }]
+      : [],
+  };
   return {
-    input: {
-      plan: {
-        width: layout.width,
-        height: layout.height,
-        obstacles: layout.solids.map((s) => ({ id: s.id, polygon: polygon(s.rect) })),
-        fixtures: layout.fixtures.map((f) => ({ id: f.id, kind: f.kind, polygon: polygon(f.rect), fans: f.fans })),
-        riskPoints: layout.riskPoints.map((p) => ({ id: p.id, kind: p.kind, x: p.x, y: p.y })),
-        backgroundZones: zoneListed
-          ? [{ id: layout.zone.id, polygon: polygon(layout.zone.rect), note: layout.zone.note }]
-          : [],
-      },
-      instrument,
-      readings: tech.readings,
-    },
+    layout,
+    map,
+    technician: tech,
+    plan,
+    instrument,
     truth: { family, leaks, benignZoneActive: zoneActive },
-    notes: { cells: grid.nx * grid.ny, cellSize: grid.h, solveIterations: iterations, peakPpm: peaks, samplesInSolid },
+    notes: { cells: grid.nx * grid.ny, cellSize: grid.h, solveIterations: iterations, peakPpm: peaks },
+    samplesInSolid: () => samplesInSolid,
+  };
+}
+
+export function buildScenario(family: Family, key: number): Scenario {
+  const world = buildWorld(family, key);
+  for (const leg of world.layout.legs) world.technician.sweep(world.map, leg);
+  return {
+    input: { plan: world.plan, instrument: world.instrument, readings: world.technician.readings },
+    truth: world.truth,
+    notes: { ...world.notes, samplesInSolid: world.samplesInSolid() },
   };
 }

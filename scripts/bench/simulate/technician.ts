@@ -32,10 +32,10 @@ interface Tap {
   ppm: number;
 }
 
-const length = (pts: Point[]) =>
+export const length = (pts: Point[]) =>
   pts.slice(1).reduce((acc, p, k) => acc + Math.hypot(p[0] - pts[k][0], p[1] - pts[k][1]), 0);
 
-function pointAt(pts: Point[], s: number): Point {
+export function pointAt(pts: Point[], s: number): Point {
   let acc = 0;
   for (let k = 1; k < pts.length; k++) {
     const seg = Math.hypot(pts[k][0] - pts[k - 1][0], pts[k][1] - pts[k - 1][1]);
@@ -71,6 +71,8 @@ export class Technician {
   private x: number;
   private y: number;
   private t: number;
+  /** Metres walked since the sweep's clock started (the guidance benchmark counts them). */
+  walkedM = 0;
 
   constructor(
     private readonly settings: TechnicianSettings,
@@ -97,6 +99,7 @@ export class Technician {
 
   private moveTo(p: Point, speed: number): void {
     const d = Math.hypot(p[0] - this.x, p[1] - this.y);
+    if (this.t >= 0) this.walkedM += d;
     const steps = Math.max(1, Math.ceil(d / (speed * this.dt)));
     const x0 = this.x,
       y0 = this.y;
@@ -138,6 +141,7 @@ export class Technician {
     spacing: [number, number],
     dwellS: [number, number],
     speed: number,
+    stop?: (ppm: number) => boolean,
   ): Tap[] {
     const taps: Tap[] = [];
     const dir = b >= a ? 1 : -1;
@@ -147,6 +151,7 @@ export class Technician {
       for (const w of between(pts, here, s)) this.moveTo(w, speed);
       here = s;
       taps.push({ s, ppm: this.tap() });
+      if (stop?.(taps[taps.length - 1].ppm)) return taps;
       this.dwell(this.random.uniform(dwellS[0], dwellS[1]));
       s += dir * this.random.uniform(spacing[0], spacing[1]);
     }
@@ -168,5 +173,46 @@ export class Technician {
     const lo = Math.max(0, Math.max(hi - 15, Math.min(...alarms.map((a) => a.s)) - this.random.uniform(2.5, 4)));
     for (const w of between(pts, last, hi)) this.moveTo(w, st.speed);
     this.sweepSpan(pts, hi, lo, st.recheckSpacing, st.recheckDwellS, st.speed * st.recheckSpeedFactor);
+  }
+
+  /**
+   * The first pass of a leg, from arc length `fromS`, that stops at the first reading at or above the
+   * alarm (the closed-loop guidance benchmark takes over there). Returns that stop's arc length, or null.
+   */
+  sweepUntilAlarm(map: WalkMap, leg: Leg, fromS = 0): number | null {
+    const st = this.settings;
+    const total = length(leg.points);
+    if (fromS > total) return null;
+    this.walkTo(map, pointAt(leg.points, fromS));
+    const taps = this.sweepSpan(
+      leg.points,
+      fromS,
+      total,
+      st.stopSpacing,
+      st.dwellS,
+      st.speed,
+      (ppm) => ppm >= st.alarmPpm,
+    );
+    const last = taps[taps.length - 1];
+    return last && last.ppm >= st.alarmPpm ? last.s : null;
+  }
+
+  /** Walks to `p` (around bodies), waits as on a re-check and reads the display there. */
+  probeAt(map: WalkMap, p: Point): SimReading {
+    const st = this.settings;
+    this.walkTo(map, p);
+    this.moveTo(p, st.speed);
+    this.dwell(this.random.uniform(st.recheckDwellS[0], st.recheckDwellS[1]));
+    this.tap();
+    return this.readings[this.readings.length - 1];
+  }
+
+  get position(): Point {
+    return [this.x, this.y];
+  }
+
+  /** The walking pace the technician keeps between stops (m/s). */
+  get speed(): number {
+    return this.settings.speed;
   }
 }

@@ -15,7 +15,7 @@ export function analysisRouter(ctx: AppContext): Router {
   const router = Router();
   router.get(
     "/sweeps/:id/analysis",
-    requireMember("stores.read"),
+    requireMember("sweeps.read"),
     validate(idParam, "params"),
     validate(analysisQuery, "query"),
     async (req, res) => {
@@ -24,7 +24,7 @@ export function analysisRouter(ctx: AppContext): Router {
   );
   router.get(
     "/stores/:storeId/fixture-trends",
-    requireMember("stores.read"),
+    requireMember("sweeps.read"),
     validate(storeParam, "params"),
     validate(fixtureTrendsQuery, "query"),
     async (req, res) => {

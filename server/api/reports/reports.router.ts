@@ -31,7 +31,7 @@ export function reportsRouter(ctx: AppContext): Router {
   });
   router.get(
     "/sweeps/:id/readings.csv",
-    requireMember("stores.read"),
+    requireMember("sweeps.read"),
     validate(idParam, "params"),
     async (req, res) => {
       const { filename, csv } = await sweepReadingsCsv(ctx, member(req), res.locals.params.id, await unit(req));
@@ -50,7 +50,7 @@ export function reportsRouter(ctx: AppContext): Router {
   );
   router.get(
     "/sweeps/:id/report/sends",
-    requireMember("stores.read"),
+    requireMember("sweeps.read"),
     validate(idParam, "params"),
     async (req, res) => {
       res.json({ sends: await listReportSends(ctx, member(req), res.locals.params.id) });

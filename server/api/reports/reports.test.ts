@@ -119,7 +119,8 @@ describe("sweep report PDF", () => {
     });
     const contact = await as("store-contact");
     expect((await contact.agent.get(`/api/sweeps/${s2.body.id}/report.pdf`)).status).toBe(404);
-    expect((await contact.agent.get(`/api/sweeps/${s2.body.id}/readings.csv`)).status).toBe(404);
+    // The readings behind a report are the service team's evidence, not the store's (decision 0072).
+    expect((await contact.agent.get(`/api/sweeps/${sweepId}/readings.csv`)).status).toBe(403);
   });
 });
 

@@ -56,7 +56,7 @@ describe("company sign-up", () => {
     expect(confirmed.body.memberships).toEqual([
       { companyId: confirmed.body.activeCompanyId, companyName: "Fairbrook Cold Service", role: "owner" },
     ]);
-    expect(confirmed.body.units).toEqual({ length: "m", mass: "kg" });
+    expect(confirmed.body.units).toEqual({ length: "m", mass: "kg", number: "1 234,5" });
     const [company] = await t.ctx.db.select().from(companies).where(eq(companies.name, "Fairbrook Cold Service"));
     expect(company).toMatchObject({ ruleProfile: "eu-fgas", lengthUnit: "m", massUnit: "kg", numberFormat: "1 234,5" });
 

@@ -6,7 +6,7 @@ import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { syncThrottle } from "../../middleware/sync-throttle";
 import { deleteReading, editReading, listReadings, readingAuditTrail, uploadReadings } from "./readings.service";
-import { createSweep, getSweep, listSweeps, setSweepStatus } from "./sweeps.service";
+import { createSweep, getSweep, listInProgressSweeps, listSweeps, setSweepStatus } from "./sweeps.service";
 
 const storeParam = z.object({ storeId: z.uuid("must be a valid id") });
 const idParam = z.object({ id: z.uuid("must be a valid id") });
@@ -40,6 +40,10 @@ export function sweepsRouter(ctx: AppContext): Router {
       res.status(created ? 201 : 200).json(sweep);
     },
   );
+  // Before /sweeps/:id, which would read "in-progress" as an id.
+  router.get("/sweeps/in-progress", requireMember("sweeps.record"), async (req, res) => {
+    res.json({ sweeps: await listInProgressSweeps(ctx, member(req), userId(req)) });
+  });
   router.get("/sweeps/:id", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
     res.json(await getSweep(ctx, member(req), res.locals.params.id));
   });
@@ -56,7 +60,7 @@ export function sweepsRouter(ctx: AppContext): Router {
     res.json(await setSweepStatus(ctx, member(req), userId(req), res.locals.params.id, "reviewed"));
   });
 
-  router.get("/sweeps/:id/readings", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
+  router.get("/sweeps/:id/readings", requireMember("sweeps.read"), validate(idParam, "params"), async (req, res) => {
     res.json({ readings: await listReadings(ctx, member(req), res.locals.params.id) });
   });
   router.post(
@@ -100,7 +104,7 @@ export function sweepsRouter(ctx: AppContext): Router {
       );
     },
   );
-  router.get("/sweeps/:id/audit", requireMember("stores.read"), validate(idParam, "params"), async (req, res) => {
+  router.get("/sweeps/:id/audit", requireMember("sweeps.read"), validate(idParam, "params"), async (req, res) => {
     res.json({ entries: await readingAuditTrail(ctx, member(req), res.locals.params.id) });
   });
 

@@ -1,12 +1,12 @@
-import { and, count, desc, eq, inArray } from "drizzle-orm";
+import { and, count, desc, eq, inArray, isNull, sql } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import { companies, detectors, plans, readings, sweeps, systems, users } from "../../db/schema/index";
+import { companies, detectors, plans, readings, stores, sweeps, systems, users } from "../../db/schema/index";
 import type { CreateSweepInput, Sweep } from "#core/contracts/sweeps";
 import { DEVICE_CLOCK_TOLERANCE_MS, SWEEP_UPLOAD_MAX_AGE_MS } from "#core/contracts/sweeps";
 import { startWarnings } from "#core/domain/sweeps/start-warnings";
 import { badRequest, conflict, HttpError } from "../../lib/http-error";
 import { checkStatus } from "../detectors/detectors.service";
-import { loadVisibleStore, type Viewer } from "../../access/store-access";
+import { loadVisibleStore, visibleStores, type Viewer } from "../../access/store-access";
 import { loadVisibleSweep, type SweepRow } from "../../access/sweep-access";
 
 type Parsed = Omit<CreateSweepInput, "systemIds"> & { systemIds: string[] };
@@ -166,6 +166,34 @@ export async function listSweeps(ctx: AppContext, viewer: Viewer, storeId: strin
     .where(and(eq(sweeps.storeId, storeId), eq(sweeps.companyId, viewer.companyId)))
     .orderBy(desc(sweeps.startedAt));
   return toSweeps(ctx, rows);
+}
+
+/** How many in-progress sweeps the resume list shows at most (a technician has a handful). */
+export const IN_PROGRESS_LIST_MAX = 50;
+
+/**
+ * The company's sweeps still in progress in the stores this viewer sees: the viewer's own first,
+ * then the newest. It is where a technician who left a sweep half-way finds it again.
+ */
+export async function listInProgressSweeps(ctx: AppContext, viewer: Viewer, userId: string): Promise<Sweep[]> {
+  const rows = await ctx.db
+    .select({ sweep: sweeps })
+    .from(sweeps)
+    .innerJoin(stores, eq(stores.id, sweeps.storeId))
+    .where(
+      and(
+        eq(sweeps.companyId, viewer.companyId),
+        eq(sweeps.status, "in-progress"),
+        visibleStores(viewer),
+        isNull(stores.archivedAt),
+      ),
+    )
+    .orderBy(sql`${sweeps.technicianId} = ${userId} desc`, desc(sweeps.startedAt))
+    .limit(IN_PROGRESS_LIST_MAX);
+  return toSweeps(
+    ctx,
+    rows.map((r) => r.sweep),
+  );
 }
 
 export async function getSweep(ctx: AppContext, viewer: Viewer, id: string): Promise<Sweep> {

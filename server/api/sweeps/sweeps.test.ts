@@ -282,6 +282,9 @@ describe("roles and status", () => {
     const contact = await as("store-contact");
     expect((await contact.get(`/api/sweeps/${s.id}`)).status).toBe(200);
     expect((await contact.post(`/api/sweeps/${s.id}/readings`, { readings: [reading(1)] })).status).toBe(403);
+    // Nor read the readings and their audit: a store manager gets the report, not the evidence (decision 0072).
+    expect((await contact.get(`/api/sweeps/${s.id}/readings`)).status).toBe(403);
+    expect((await contact.get(`/api/sweeps/${s.id}/audit`)).status).toBe(403);
     expect(
       (
         await contact.post(`/api/stores/${co.store.id}/sweeps`, {
@@ -315,6 +318,35 @@ describe("roles and status", () => {
       (await (await as("owner", other)).post(`/api/sweeps/${s.id}/readings`, { readings: [reading(1)] })).status,
     ).toBe(404);
     expect((await (await as("owner", other)).get(`/api/stores/${co.store.id}/sweeps`)).status).toBe(404);
+  });
+
+  it("lists the sweeps still in progress for resuming, the member's own first, never another company's or a submitted one", async () => {
+    const tech = await as("technician");
+    const lead = await as("lead-tech");
+    const older = await startSweep(lead, { startedAt: new Date(startedAt.getTime() - 60_000).toISOString() });
+    const mine = await startSweep(tech, { startedAt: new Date(startedAt.getTime() - 120_000).toISOString() });
+    await tech.post(`/api/sweeps/${mine.id}/readings`, { readings: [reading(1), reading(2)] });
+    const done = await startSweep(tech);
+    expect((await tech.post(`/api/sweeps/${done.id}/submit`, {})).status).toBe(200);
+
+    const res = await tech.get("/api/sweeps/in-progress");
+    expect(res.status).toBe(200);
+    const list: { id: string; technicianId: string; readingCount: number; status: string }[] = res.body.sweeps;
+    const ids = list.map((x) => x.id);
+    expect(ids).toContain(older.id);
+    expect(ids).not.toContain(done.id);
+    expect(list.every((x) => x.status === "in-progress")).toBe(true);
+    // The member's own first, even when another member's started later.
+    const firstOther = list.findIndex((x) => x.technicianId !== co.people.technician.userId);
+    const lastOwn = list.findLastIndex((x) => x.technicianId === co.people.technician.userId);
+    expect(lastOwn).toBeLessThan(firstOther);
+    expect(list.find((x) => x.id === mine.id)?.readingCount).toBe(2);
+    // The lead tech sees the same sweeps with theirs first.
+    expect((await lead.get("/api/sweeps/in-progress")).body.sweeps[0].technicianId).toBe(co.people["lead-tech"].userId);
+    // Another company sees none of them; a store contact cannot record, so has no resume list.
+    const strangers = (await (await as("owner", other)).get("/api/sweeps/in-progress")).body.sweeps as { id: string }[];
+    expect(strangers.some((x) => ids.includes(x.id))).toBe(false);
+    expect((await (await as("store-contact")).get("/api/sweeps/in-progress")).status).toBe(403);
   });
 
   it("goes in progress → submitted → reviewed, only an engineer or owner reviews, and a reviewed sweep takes no readings", async () => {

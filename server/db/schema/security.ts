@@ -1,6 +1,7 @@
 import { index, integer, jsonb, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
 import { companies } from "./companies";
 import { users } from "./users";
+import { SECURITY_EVENT_KINDS } from "#core/contracts/security-log";
 
 /**
  * Attempt counters of the sign-in and password-reset limits (server/lib/attempt-limiter.ts), kept in
@@ -11,16 +12,6 @@ export const rateLimitHits = pgTable("rate_limit_hits", {
   hits: integer().notNull(),
   resetAt: timestamp({ withTimezone: true }).notNull(),
 });
-
-export const SECURITY_EVENT_KINDS = [
-  "sign-in",
-  "sign-in-failed",
-  "password-changed",
-  "password-reset",
-  "role-changed",
-  "member-removed",
-  "export",
-] as const;
 
 /**
  * What the owner reads on the security log: sign-ins, password and role changes, exports. Events about

@@ -20,11 +20,20 @@ import { DEFAULT_LAYERS } from "../../features/fieldmap/model/layers";
 import { concentrationPaint } from "../../features/fieldmap/model/scale-paint";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { formatInZone } from "#core/domain/dates/format-in-zone";
+import { can } from "#core/domain/roles";
+import { useSignedIn } from "../shell/session-context";
+import { Component as NotFound } from "./not-found";
 
 const SIDE_LAYERS = { ...DEFAULT_LAYERS, corrected: false, path: false };
 const DIFF_LAYERS = { ...SIDE_LAYERS, suspects: false, riskPoints: false };
 
+/** Comparing months reads field maps: the service team's, not a store contact's (decision 0072). */
 export function Component() {
+  const { membership } = useSignedIn();
+  return can(membership.role, "sweeps.read") ? <ComparePage /> : <NotFound />;
+}
+
+function ComparePage() {
   const { storeId = "" } = useParams();
   const [search, setSearch] = useSearchParams();
   const trends = useFixtureTrends(storeId, search.get("a"), search.get("b"));

@@ -1,5 +1,7 @@
 import { useQueryClient } from "@tanstack/react-query";
 import { PageHeader } from "../../components/ui/page-header";
+import { PasswordChangeForm } from "../../features/account/components/password-change-form";
+import { SessionsList } from "../../features/account/components/sessions-list";
 import { updateSession } from "../../features/auth/api/session-cache";
 import { useCompanySettings } from "../../features/settings/api/get-company-settings";
 import { ProfileForm } from "../../features/settings/components/profile-form";
@@ -15,9 +17,21 @@ export function Component() {
     <>
       <PageHeader
         title="Profile"
-        description="Your name, and the units you want figures shown in. Your choice overrides the company default for you only."
+        description="Your name, the units you want figures shown in, your password and where you are signed in."
       />
       <ProfileForm user={user} companyDefaults={settings.data} onSaved={(info) => updateSession(queryClient, info)} />
+      <section aria-labelledby="password-heading" className="mt-10 space-y-3">
+        <h2 id="password-heading" className="text-xl font-bold">
+          Password
+        </h2>
+        <PasswordChangeForm />
+      </section>
+      <section aria-labelledby="sessions-heading" className="mt-10 space-y-3">
+        <h2 id="sessions-heading" className="text-xl font-bold">
+          Where you are signed in
+        </h2>
+        <SessionsList />
+      </section>
     </>
   );
 }

@@ -25,6 +25,7 @@ export const STORE_SECTIONS: readonly { id: string; Component: ComponentType<Sto
     Component: ({ store, role, units }) => (
       <PlanSection
         storeId={store.id}
+        timeZone={store.timeZone}
         canEdit={can(role, "plans.edit") && !store.archivedAt}
         preference={units.length}
       />
@@ -42,6 +43,11 @@ export const STORE_SECTIONS: readonly { id: string; Component: ComponentType<Sto
       />
     ),
   },
-  { id: "sweeps", Component: ({ store }) => <StoreSweepsSection storeId={store.id} timeZone={store.timeZone} /> },
+  {
+    id: "sweeps",
+    Component: ({ store, role }) => (
+      <StoreSweepsSection storeId={store.id} timeZone={store.timeZone} canCompare={can(role, "sweeps.read")} />
+    ),
+  },
   { id: "records", Component: ({ store }) => <StoreRecordsSection storeId={store.id} /> },
 ];

@@ -8,10 +8,14 @@ import { useStores } from "../../entities/stores/stores-api";
 import { useSweeps as useStoreSweeps } from "../../entities/sweeps/sweeps-api";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { formatInZone } from "#core/domain/dates/format-in-zone";
+import { can } from "#core/domain/roles";
+import { useSignedIn } from "../shell/session-context";
 
-/** A store's sweeps, newest first, each opening its field map. */
+/** A store's sweeps, newest first, each opening its field map (a store contact: its report, decision 0072). */
 export function Component() {
   const { storeId = "" } = useParams();
+  const { membership } = useSignedIn();
+  const evidence = can(membership.role, "sweeps.read");
   const sweeps = useStoreSweeps(storeId);
   const stores = useStores();
   const store = stores.data?.find((s) => s.id === storeId);
@@ -27,7 +31,7 @@ export function Component() {
       <PageHeader
         title={`Sweeps — ${store?.name ?? "store"}`}
         actions={
-          list.length > 1 ? (
+          evidence && list.length > 1 ? (
             <Link
               className="inline-flex min-h-11 items-center rounded-md edge bg-surface px-4 font-bold no-underline"
               to={`/stores/${storeId}/compare`}
@@ -56,7 +60,7 @@ export function Component() {
               className="inline-flex min-h-11 items-center rounded-md bg-accent px-4 font-bold text-on-accent no-underline"
               to={`/stores/${storeId}/sweeps/${s.id}/map`}
             >
-              Open field map
+              {evidence ? "Open field map" : "Open report"}
             </Link>
           </li>
         ))}

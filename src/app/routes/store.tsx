@@ -5,6 +5,7 @@ import { QueryError } from "../../components/ui/query-error";
 import { Spinner } from "../../components/ui/spinner";
 import { useStore } from "../../entities/stores/stores-api";
 import { StoreSummary } from "../../features/stores/components/store-summary";
+import { ResumeSweeps } from "../../features/walk/components/resume-sweeps";
 import { StartSweepLink } from "../../features/walk/components/start-sweep-link";
 import { useKeepStoreOnDevice } from "../../features/walk/hooks/use-keep-store-on-device";
 import { useDocumentTitle } from "../../lib/use-document-title";
@@ -14,7 +15,7 @@ import { STORE_SECTIONS } from "./store-sections";
 
 export function Component() {
   const { storeId = "" } = useParams();
-  const { membership } = useSignedIn();
+  const { membership, user } = useSignedIn();
   const units = useUnitPreferences();
   const store = useStore(storeId);
   const records = can(membership.role, "sweeps.record");
@@ -36,6 +37,7 @@ export function Component() {
         description={s.archivedAt ? "Archived store" : undefined}
         actions={records && !s.archivedAt ? <StartSweepLink storeId={s.id} /> : undefined}
       />
+      {records && !s.archivedAt ? <ResumeSweeps userId={user.id} storeId={s.id} /> : null}
       <div className="space-y-10">
         <StoreSummary store={s} canEdit={can(membership.role, "stores.edit")} />
         {STORE_SECTIONS.map(({ id, Component: Section }) => (

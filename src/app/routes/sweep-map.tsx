@@ -28,10 +28,17 @@ import { concentrationPaint } from "../../features/fieldmap/model/scale-paint";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
 import { formatInZone } from "#core/domain/dates/format-in-zone";
+import { SweepReportPage } from "./sweep-report-page";
 
 const AIR = new Set<string>(AIR_VOLUME_KINDS);
 
+/** The field map for the service team; a store contact gets the sweep's report instead (decision 0072). */
 export function Component() {
+  const { membership } = useSignedIn();
+  return can(membership.role, "sweeps.read") ? <FieldMapPage /> : <SweepReportPage />;
+}
+
+function FieldMapPage() {
   const { storeId = "", sweepId = "" } = useParams();
   const [search, setSearch] = useSearchParams();
   const delayParam = search.get("transportDelayS");

@@ -1,4 +1,5 @@
 import { useNavigate, useParams } from "react-router";
+import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 import { COMPONENT_LABELS } from "#core/contracts/findings";
 import { can } from "#core/domain/roles";
 import { PageHeader } from "../../components/ui/page-header";
@@ -63,7 +64,7 @@ export function Component() {
                     {f.events[0]?.on} · {f.component ? COMPONENT_LABELS[f.component] : "component not yet known"} ·{" "}
                     {f.status}
                   </Link>
-                  {f.deadlines[0] ? ` · due ${f.deadlines[0].dueOn}` : ""}
+                  {f.deadlines[0] ? ` · due ${formatCalendarDay(f.deadlines[0].dueOn)}` : ""}
                 </li>
               ))}
             </ul>

@@ -65,7 +65,46 @@ describe("team page", () => {
     );
     expect(
       screen.getByRole("button", { name: "Send the invitation to sam.reyes@northfield.example again" }),
-    ).toBeTruthy();
+    ).toBeVisible();
+  });
+
+  it("shows the owner the security log in words, failed sign-ins marked", async () => {
+    stubFetch({
+      "GET /api/auth/session": { body: sessionFor("owner") },
+      "GET /api/team": { body: TEAM },
+      "GET /api/stores": { body: { stores: [STORE] } },
+      "GET /api/company/security-log": {
+        body: {
+          events: [
+            {
+              id: "0b1c2d3e-4f50-4a61-8b72-c3d4e5f60718",
+              kind: "role-changed",
+              who: "sam.reyes@northfield.example",
+              by: "ines.varga@northfield.example",
+              detail: { from: "technician", to: "lead-tech" },
+              ip: "203.0.113.7",
+              at: "2026-12-02T15:00:00.000Z",
+            },
+            {
+              id: "1c2d3e4f-5061-4b72-8c83-d4e5f6071829",
+              kind: "sign-in-failed",
+              who: "sam.reyes@northfield.example",
+              by: null,
+              detail: {},
+              ip: "198.51.100.20",
+              at: "2026-12-01T15:00:00.000Z",
+            },
+          ],
+        },
+      },
+    });
+    renderApp("/team");
+    const events = await screen.findAllByTestId("security-event");
+    expect(events.map((e) => e.querySelector("p")?.textContent)).toEqual([
+      "ines.varga@northfield.example changed sam.reyes@northfield.example's role from Technician to Lead tech.",
+      "Someone tried to sign in as sam.reyes@northfield.example with a wrong password.",
+    ]);
+    expect(events[0].textContent).toContain("from 203.0.113.7");
   });
 
   it("shows a technician the members but no invite form and no owner actions", async () => {
@@ -78,5 +117,6 @@ describe("team page", () => {
     expect(await screen.findByText("ines.varga@northfield.example")).toBeVisible();
     expect(screen.queryByRole("form", { name: "Invite a member" })).toBeNull();
     expect(screen.queryByRole("button", { name: /Revoke|Remove|Change role/ })).toBeNull();
+    expect(screen.queryByRole("heading", { name: "Security log" })).toBeNull();
   });
 });

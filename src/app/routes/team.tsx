@@ -7,6 +7,7 @@ import { useTeam } from "../../features/team/api/get-team";
 import { InvitationsList } from "../../features/team/components/invitations-list";
 import { InviteForm } from "../../features/team/components/invite-form";
 import { MembersTable } from "../../features/team/components/members-table";
+import { SecurityLogList } from "../../features/account/components/security-log-list";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
 import { Component as NotFound } from "./not-found";
@@ -51,6 +52,18 @@ export function Component() {
           </section>
           {canManage ? (
             <InviteForm stores={stores.data} storesLoading={stores.isPending} outboxHint={session.outboxEnabled} />
+          ) : null}
+          {canManage ? (
+            <section aria-labelledby="security-heading" className="space-y-3">
+              <h2 id="security-heading" className="text-xl font-bold">
+                Security log
+              </h2>
+              <p className="max-w-prose text-muted">
+                Sign-ins, failed sign-ins, password and role changes, removals and downloads of records, for everyone in{" "}
+                {membership.companyName}. Times are in your own time zone.
+              </p>
+              <SecurityLogList />
+            </section>
           ) : null}
         </div>
       ) : null}

@@ -4,6 +4,7 @@ import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
 import { Spinner } from "../../components/ui/spinner";
 import { useStores } from "../../entities/stores/stores-api";
+import { ResumeSweeps } from "../../features/walk/components/resume-sweeps";
 import { StartSweepForm } from "../../features/walk/components/start-sweep-form";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
@@ -14,7 +15,7 @@ export function Component() {
   useDocumentTitle("Start a sweep");
   const { storeId } = useParams();
   const navigate = useNavigate();
-  const { membership } = useSignedIn();
+  const { membership, user } = useSignedIn();
   const stores = useStores({}, { enabled: !storeId });
   if (!can(membership.role, "sweeps.record")) return <NotFound />;
   if (!storeId) {
@@ -24,6 +25,7 @@ export function Component() {
           title="Walk"
           description="Choose the store to sweep. Its plan is kept on this device, so the sweep works without a connection."
         />
+        <ResumeSweeps userId={user.id} storeNames={new Map((stores.data ?? []).map((s) => [s.id, s.name]))} />
         {stores.isPending ? <Spinner label="Loading stores…" /> : null}
         {stores.isError ? (
           <QueryError error={stores.error} what="the stores" onRetry={() => void stores.refetch()} />
@@ -48,6 +50,7 @@ export function Component() {
   return (
     <>
       <PageHeader title="Start a sweep" />
+      <ResumeSweeps userId={user.id} storeId={storeId} />
       <StartSweepForm storeId={storeId} onStarted={(id) => navigate(`/stores/${storeId}/walk/${id}`)} />
     </>
   );

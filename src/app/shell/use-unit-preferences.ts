@@ -1,6 +1,5 @@
 import type { NumberFormat } from "#core/domain/numbers/number-format";
 import type { LengthPreference, MassPreference } from "#core/domain/units/format-units";
-import { useCompanySettings } from "../../features/settings/api/get-company-settings";
 import { useSignedIn } from "./session-context";
 
 export interface UnitPreferences {
@@ -10,13 +9,13 @@ export interface UnitPreferences {
   number: NumberFormat;
 }
 
-/** The person's own units, else the company's default (docs/product.md); metres and kg until loaded. */
+/**
+ * The units to show: the person's own choice, else the company's default (docs/product.md), as
+ * the server resolved them into the session. The session is the copy the device keeps for working
+ * offline, so after a reload without a connection lengths stay in the member's units rather than
+ * falling back to metres while the company settings cannot be fetched.
+ */
 export function useUnitPreferences(): UnitPreferences {
-  const { user } = useSignedIn();
-  const company = useCompanySettings();
-  return {
-    length: user.lengthUnit ?? company.data?.lengthUnit ?? "m",
-    mass: user.massUnit ?? company.data?.massUnit ?? "kg",
-    number: company.data?.numberFormat ?? "1,234.5",
-  };
+  const { session } = useSignedIn();
+  return { length: session.units.length, mass: session.units.mass, number: session.units.number };
 }

@@ -16,6 +16,11 @@ export function useSweeps(storeId: string) {
   return useQuery(sweepsQueryOptions(storeId));
 }
 
+/** The company's sweeps still in progress in the stores the member sees, the member's own first. */
+export async function getInProgressSweeps(signal?: AbortSignal) {
+  return (await api.get("/api/sweeps/in-progress", sweepListResponse, signal)).sweeps;
+}
+
 export function getSweep(id: string, signal?: AbortSignal) {
   return api.get(`/api/sweeps/${id}`, sweep, signal);
 }

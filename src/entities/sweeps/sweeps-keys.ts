@@ -3,6 +3,8 @@ export const sweepsKeys = {
   all: ["sweeps"] as const,
   lists: () => [...sweepsKeys.all, "list"] as const,
   list: (storeId: string) => [...sweepsKeys.lists(), { storeId }] as const,
+  /** The company's sweeps still in progress, for resuming (GET /api/sweeps/in-progress). */
+  inProgress: () => [...sweepsKeys.lists(), "in-progress"] as const,
   details: () => [...sweepsKeys.all, "detail"] as const,
   detail: (id: string) => [...sweepsKeys.details(), id] as const,
   analyses: (id: string) => [...sweepsKeys.detail(id), "analysis"] as const,

@@ -56,7 +56,7 @@ describe("sign-in form", () => {
 
     expect(await screen.findByText("E-mail must be at most 254 characters.")).toBeVisible();
     expect(document.activeElement).toBe(screen.getByLabelText("E-mail"));
-    expect(screen.getByRole("alert").textContent).toBe("Please correct the marked fields.");
+    expect(screen.getByRole("alert").textContent).toBe("Please correct: E-mail must be at most 254 characters.");
   });
 
   it("says plainly when the e-mail and password do not match", async () => {

@@ -1,4 +1,5 @@
 import { useState, type FormEvent } from "react";
+import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 import type { SystemRecordsView } from "#core/contracts/compliance";
 import { APPLIANCE_TYPE_NAMES, APPLIANCE_TYPES, REVISION_KINDS } from "#core/contracts/systems";
 import { Button } from "../../../components/ui/button";
@@ -45,7 +46,7 @@ export function RevisionsSection({ r, unit, canRevise }: { r: SystemRecordsView;
             { header: "Full charge", cell: (x) => formatMass(x.fullChargeKg, unit) },
             { header: "Appliance", cell: (x) => APPLIANCE_TYPE_NAMES[x.applianceType] },
             { header: "Leak detection", cell: (x) => (x.automaticLeakDetection ? "Automatic" : "None") },
-            { header: "In service", cell: (x) => x.inServiceOn },
+            { header: "In service", cell: (x) => (x.inServiceOn ? formatCalendarDay(x.inServiceOn) : "—") },
             { header: "Reason", cell: (x) => `${x.reason}${x.by ? ` (${x.by})` : ""}` },
           ]}
         />

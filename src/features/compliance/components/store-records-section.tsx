@@ -1,4 +1,5 @@
 import { Link } from "react-router";
+import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 import { COMPONENT_LABELS, type FINDING_COMPONENTS } from "#core/contracts/findings";
 import { QueryError } from "../../../components/ui/query-error";
 import { Spinner } from "../../../components/ui/spinner";
@@ -44,8 +45,8 @@ export function StoreRecordsSection({ storeId }: { storeId: string }) {
               <ul className="space-y-1">
                 {today.data.due.map((d) => (
                   <li key={`${d.kind}-${d.systemId}-${d.findingId}-${d.dueOn}`}>
-                    <span className="font-bold">{d.dueOn}</span> ({STATE_LABELS[d.state].toLowerCase()},{" "}
-                    {daysInWords(d.daysLeft)}):{" "}
+                    <span className="font-bold">{formatCalendarDay(d.dueOn)}</span> (
+                    {STATE_LABELS[d.state].toLowerCase()}, {daysInWords(d.daysLeft)}):{" "}
                     <Link className="text-accent underline" to={d.link}>
                       {d.what}
                     </Link>

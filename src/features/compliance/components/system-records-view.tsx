@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 import { Link } from "react-router";
 import type { SystemRecordsView } from "#core/contracts/compliance";
 import { APPLIANCE_TYPE_NAMES } from "#core/contracts/systems";
@@ -95,14 +96,16 @@ export function SystemRecords({
             <span className="block text-sm text-muted">GWP basis: {r.system.refrigerant.gwp.statement}</span>
           ) : null}
         </Fact>
-        <Fact label="Next inspection">{r.nextInspection ? r.nextInspection.dueOn : "None scheduled"}</Fact>
+        <Fact label="Next inspection">
+          {r.nextInspection ? formatCalendarDay(r.nextInspection.dueOn) : "None scheduled"}
+        </Fact>
         <Fact label="Appliance">{APPLIANCE_TYPE_NAMES[r.system.applianceType]}</Fact>
         <Fact label="Leak detection">
           {r.system.automaticLeakDetection ? "Automatic" : "None"}
           {r.automaticLeakDetection?.required ? (
             <span className={r.system.automaticLeakDetection ? "block text-sm" : "block text-sm text-danger"}>
               Required
-              {r.automaticLeakDetection.dueOn ? ` by ${r.automaticLeakDetection.dueOn}` : ""} (
+              {r.automaticLeakDetection.dueOn ? ` by ${formatCalendarDay(r.automaticLeakDetection.dueOn)}` : ""} (
               <SourceText source={r.automaticLeakDetection.source} />)
             </span>
           ) : null}
@@ -160,7 +163,8 @@ export function SystemRecords({
           <ul className="space-y-2">
             {r.due.map((d) => (
               <li key={`${d.kind}-${d.dueOn}-${d.findingId}`} className="rounded-md bg-surface p-3 edge">
-                <span className="font-bold">{d.dueOn}</span> · {STATE_LABELS[d.state]}, {daysInWords(d.daysLeft)} ·{" "}
+                <span className="font-bold">{formatCalendarDay(d.dueOn)}</span> · {STATE_LABELS[d.state]},{" "}
+                {daysInWords(d.daysLeft)} ·{" "}
                 {d.findingId ? (
                   <Link className="text-accent underline" to={d.link}>
                     {d.what}
@@ -241,7 +245,10 @@ export function SystemRecords({
           rows={[...r.additions].reverse()}
           rowKey={(x) => x.id}
           columns={[
-            { header: "Date", cell: (x) => (x.voided ? <s>{x.addedOn}</s> : x.addedOn) },
+            {
+              header: "Date",
+              cell: (x) => (x.voided ? <s>{formatCalendarDay(x.addedOn)}</s> : formatCalendarDay(x.addedOn)),
+            },
             {
               header: "Amount",
               cell: (x) => (
@@ -331,7 +338,7 @@ export function SystemRecords({
           <ul className="space-y-1">
             {r.leakChecks.map((c) => (
               <li key={c.id}>
-                {c.checkedOn}: {c.leakFound ? "leak found" : "no leak found"} — {c.by}
+                {formatCalendarDay(c.checkedOn)}: {c.leakFound ? "leak found" : "no leak found"} — {c.by}
                 {c.note ? ` (${c.note})` : ""}
               </li>
             ))}

@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 import { Link } from "react-router";
 import { COMPONENT_LABELS, type FINDING_COMPONENTS } from "#core/contracts/findings";
 import type { TodayView as TodayData } from "#core/contracts/compliance";
@@ -72,7 +73,7 @@ export function TodayView({
                 header: "Due",
                 cell: (r) => (
                   <span className={STATE_TONE[r.state]}>
-                    {r.dueOn ?? "—"}
+                    {formatCalendarDay(r.dueOn ?? null)}
                     <br />
                     <span className="text-sm">
                       {STATE_LABELS[r.state]}, {daysInWords(r.daysLeft)}
@@ -183,7 +184,7 @@ export function TodayView({
               },
               { header: "Status", cell: (r) => (r.status === "verified" ? "verified, ready to close" : r.status) },
               { header: "Store", cell: (r) => r.storeName },
-              { header: "Found", cell: (r) => r.foundOn },
+              { header: "Found", cell: (r) => formatCalendarDay(r.foundOn) },
               {
                 header: "Deadline",
                 cell: (r) =>

@@ -29,7 +29,10 @@ describe("detector form: level scale", () => {
     fillLevel(1, "Low", "3", "15");
     fillLevel(2, "High", "10", "");
     fireEvent.click(screen.getByRole("button", { name: "Add detector" }));
-    expect(await screen.findByText(/must not overlap level 1 \(up to 15 ppm\)/)).toBeVisible();
+    // The field says why; the summary above the form says which field and why.
+    expect(await screen.findByRole("alert")).toHaveTextContent(
+      /^Please correct: Level 2 min ppm must not overlap level 1 \(up to 15 ppm\)/,
+    );
     expect(screen.getByLabelText("Level 2 from (ppm)").getAttribute("aria-invalid")).toBe("true");
     expect(calls.filter((c) => c.method === "POST")).toHaveLength(0);
 

@@ -5,6 +5,7 @@ import { Button } from "../../../components/ui/button";
 import { Select } from "../../../components/ui/select";
 import { TextField } from "../../../components/ui/text-field";
 import { isApiRequestError } from "../../../lib/api-client";
+import { fieldErrorSummary } from "../../../lib/form-errors";
 import { useSaveDetector } from "../api/detectors-api";
 import { parseRows, toRows, type LevelRow } from "../model/level-rows";
 import { LevelScaleEditor } from "./level-scale-editor";
@@ -99,7 +100,9 @@ export function DetectorForm({ existing, onDone }: { existing: Detector | null; 
           if (save.isError) save.reset();
         }}
       />
-      {Object.keys(levelErrors).length ? <Alert tone="error">Please correct the marked levels.</Alert> : null}
+      {Object.keys(levelErrors).length ? (
+        <Alert tone="error">{fieldErrorSummary(levelRowErrors(levelErrors))}</Alert>
+      ) : null}
       {save.isError && !Object.keys(fields).length ? <Alert tone="error">{save.error.message}</Alert> : null}
       <div className="flex gap-2 sm:col-span-2">
         <Button type="submit" busy={save.isPending}>
@@ -111,4 +114,9 @@ export function DetectorForm({ existing, onDone }: { existing: Detector | null; 
       </div>
     </form>
   );
+}
+
+/** Row problems ("1.minPpm") named for the reader: "Level 2 min ppm must be …". */
+function levelRowErrors(problems: Record<string, string>): Record<string, string> {
+  return Object.fromEntries(Object.entries(problems).map(([key, message]) => [`level.${key}`, message]));
 }

@@ -8,7 +8,8 @@ import { formatInZone } from "#core/domain/dates/format-in-zone";
 const LINK = "inline-flex min-h-11 items-center rounded-md px-4 font-bold no-underline";
 
 /** The store page's sweeps section: the latest few with their field maps (starting one is in the page header). */
-export function StoreSweepsSection({ storeId, timeZone }: { storeId: string; timeZone: string }) {
+export function StoreSweepsSection(p: { storeId: string; timeZone: string; canCompare: boolean }) {
+  const { storeId, timeZone } = p;
   const sweeps = useStoreSweeps(storeId);
   const when = (iso: string) => formatInZone(iso, timeZone);
   const latest = [...(sweeps.data ?? [])].sort((a, b) => b.startedAt.localeCompare(a.startedAt)).slice(0, 3);
@@ -43,7 +44,7 @@ export function StoreSweepsSection({ storeId, timeZone }: { storeId: string; tim
             All sweeps
           </Link>
         ) : null}
-        {(sweeps.data?.length ?? 0) > 1 ? (
+        {p.canCompare && (sweeps.data?.length ?? 0) > 1 ? (
           <Link className={`${LINK} edge bg-surface`} to={`/stores/${storeId}/compare`}>
             Compare months
           </Link>

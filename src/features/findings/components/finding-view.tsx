@@ -1,4 +1,5 @@
 import { Link } from "react-router";
+import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 import type { FindingDetail } from "#core/contracts/finding-actions";
 import { COMPONENT_LABELS, FINDING_EVENT_LABELS } from "#core/contracts/findings";
 import { Alert } from "../../../components/ui/alert";
@@ -68,7 +69,7 @@ export function FindingView({
             <Alert
               key={d.what}
               tone={d.state === "overdue" || d.state === "due-today" ? "error" : "note"}
-              title={`${d.what}: ${d.dueOn}`}
+              title={`${d.what}: ${formatCalendarDay(d.dueOn)}`}
             >
               <p className="text-sm">
                 Rule: <SourceText source={d.source} />

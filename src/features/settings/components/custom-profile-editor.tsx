@@ -4,7 +4,13 @@ import { APPLIANCE_TYPES } from "#core/contracts/systems";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
-import { formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
+import {
+  fieldErrorSummary,
+  formErrorMessage,
+  serverFieldErrors,
+  zodFieldErrors,
+  type FieldErrors,
+} from "../../../lib/form-errors";
 import { ruleProfileSchema, useSaveCustomProfile } from "../api/custom-profile";
 import {
   addTopBand,
@@ -184,7 +190,7 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
       {formError ? (
         <Alert tone="error">{formError}</Alert>
       ) : invalid && Object.keys(clientErrors).length ? (
-        <Alert tone="error">Please correct the marked fields.</Alert>
+        <Alert tone="error">{fieldErrorSummary(clientErrors)}</Alert>
       ) : null}
       {saved ? (
         <Alert tone="success">

@@ -1,6 +1,8 @@
 import { getSweep, getSweepReadings } from "../../../entities/sweeps/sweeps-api";
 import type { LocalReading, LocalSweep } from "../model/local-types";
 import type { WalkDb } from "../model/walk-db";
+import { SYNCED } from "../model/reading-sync";
+import { SWEEP_ON_SERVER } from "../model/sweep-sync";
 
 /**
  * A sweep this device does not hold (opened from another device's link): copy it and its
@@ -24,9 +26,7 @@ export async function pullSweep(db: WalkDb, sweepId: string): Promise<LocalSweep
     timeConstantS: s.timeConstantS,
     alarmPpm: s.alarmPpm,
     warnings: s.warnings,
-    onServer: true,
-    submitPending: false,
-    rejected: null,
+    sync: SWEEP_ON_SERVER,
   };
   const tx = db.transaction(["sweeps", "readings", "meta"], "readwrite");
   await tx.objectStore("sweeps").put(local);
@@ -45,13 +45,7 @@ export async function pullSweep(db: WalkDb, sweepId: string): Promise<LocalSweep
       atLeast: r.atLeast,
       samplePoint: r.samplePoint,
       note: r.note,
-      draft: false,
-      state: "synced",
-      onServer: true,
-      editPending: false,
-      deletePending: false,
-      editedAt: null,
-      reasons: null,
+      sync: SYNCED,
     };
     await tx.objectStore("readings").put(row);
   }

@@ -56,9 +56,10 @@ export async function fetchPlanPack(queryClient: QueryClient, planId: string): P
 /** The store's pack from the server (cached as a side effect), or the device's copy when offline. */
 export async function loadStorePack(queryClient: QueryClient, storeId: string): Promise<StorePack> {
   try {
+    // No retry here: without a connection the device's copy answers at once instead of after a retry's wait.
     const [detail, detectors] = await Promise.all([
-      queryClient.fetchQuery(storeDetailQueryOptions(storeId)),
-      queryClient.fetchQuery(detectorsQueryOptions(false)),
+      queryClient.fetchQuery({ ...storeDetailQueryOptions(storeId), retry: false }),
+      queryClient.fetchQuery({ ...detectorsQueryOptions(false), retry: false }),
     ]);
     const pack: StorePack = { ...detail, detectors, savedAt: new Date().toISOString(), fromCache: false };
     await put(`store:${storeId}`, pack);
@@ -84,6 +85,8 @@ export function storePackQueryOptions(storeId: string) {
     queryFn: ({ client }) => loadStorePack(client, storeId),
     retry: false,
     staleTime: 60_000,
+    // It answers from the device when the server cannot: never paused for want of a connection.
+    networkMode: "always",
   });
 }
 
@@ -97,6 +100,7 @@ export function usePlanPack(planId: string | undefined) {
     queryFn: ({ client }) => loadPlanPack(client, planId!),
     enabled: !!planId,
     retry: false,
+    networkMode: "always",
     staleTime: Infinity,
   });
 }

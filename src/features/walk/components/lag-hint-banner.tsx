@@ -1,16 +1,30 @@
 import { formatLength, type LengthPreference } from "#core/domain/units/format-units";
 import type { LagHint } from "../model/lag-hint";
 
-/** Where an alarm's air was really sampled, and the closer re-check to make from there. */
+/**
+ * The sweep's peak so far (not merely the latest alarm), where its air was really sampled, and the
+ * closer re-check to make from there.
+ */
 export function LagHintBanner({
   hint,
   ppm,
+  atLeast = false,
+  readingNumber,
+  place,
   lengthUnit = "m",
+  compact = false,
   onDismiss,
 }: {
   hint: LagHint;
   ppm: number;
+  atLeast?: boolean;
+  /** The peak reading's number in the sweep (#1 is the first tap). */
+  readingNumber: number;
+  /** The fixture where the peak's air was sampled, when it is at one. */
+  place: string | null;
   lengthUnit?: LengthPreference;
+  /** One line (the keypad is open and the plan needs the room): the peak and its place only. */
+  compact?: boolean;
   onDismiss(): void;
 }) {
   // Feet to the nearest inch: a walking distance, not a measurement.
@@ -18,14 +32,23 @@ export function LagHintBanner({
   return (
     <div
       role="alert"
-      className="flex items-center justify-between gap-2 rounded-md border-l-4 border-danger bg-danger-soft px-3 py-1 edge"
+      className="flex items-center justify-between gap-2 rounded-md border-l-4 border-danger bg-danger-soft px-3 py-1 text-sm leading-snug edge"
       data-testid="lag-hint"
+      data-peak-index={hint.index}
     >
-      <span>
-        <strong>Alarm: {ppm} ppm.</strong>{" "}
-        {hint.beforeDelay
-          ? "The detector had not yet drawn air from beyond the first reading: re-check around the start."
-          : `The air was sampled about ${len(hint.backM)} back along your path (yellow diamond). Re-check at about ${len(0.6)} spacing from there (rings).`}
+      <span className={compact ? "line-clamp-2" : undefined}>
+        <strong className="text-base">
+          Alarm: {atLeast ? "≥ " : ""}
+          {ppm} ppm
+        </strong>{" "}
+        <span data-testid="lag-hint-peak">
+          peak so far (#{readingNumber}){place ? `, sampled at ${place}` : ""}.
+        </span>{" "}
+        {compact
+          ? null
+          : hint.beforeDelay
+            ? "The detector had not yet drawn air from beyond the first reading: re-check around the start."
+            : `Its air was about ${len(hint.backM)} back along your path (yellow diamond): re-check at about ${len(0.6)} spacing (rings).`}
       </span>
       <button type="button" className="min-h-12 shrink-0 font-bold underline" onClick={onDismiss}>
         OK

@@ -18,6 +18,8 @@ import {
 import { backdropOf } from "../../../lib/plan-view/fixture-look";
 import { applyPinch, pinchStep } from "../../../lib/plan-view/pinch";
 import { WALK_ZOOM } from "../model/walk-view";
+import { ALARM_DOT_FACTOR, markLooks, pathWidthPx, readingDotRadiusPx, TRACE_DOT_FACTOR } from "../model/plan-marks";
+import { PlanLegend } from "./plan-legend";
 
 /** A finger that moves less than this is a tap, not a pan (px). */
 const TAP_SLOP_PX = 10;
@@ -89,23 +91,42 @@ export function PlanStage(props: PlanStageProps) {
 
   const focusRef = useRef(props.focus);
   focusRef.current = props.focus;
+  // True while the view is the whole-plan fit (first open, "All"); any pan or zoom by hand clears it.
+  const fitted = useRef(true);
+  const fit = () => {
+    fitted.current = true;
+    setView(fitClearOfControls(props.widthM, props.heightM, w, h));
+  };
+  const byHand = (v: View) => {
+    fitted.current = false;
+    setView(v);
+  };
+  /** Slides the plan just enough to keep the open reading clear of the box's edges. */
+  const follow = (v: View) => {
+    const f = focusRef.current;
+    if (!f) return;
+    const mx = Math.min(64, w * 0.2);
+    const my = Math.min(64, h * 0.2);
+    const { x: sx, y: sy } = planToStage(planPoint(f.x, f.y), METRE_BASE, v);
+    const dx = sx > w - mx ? w - mx - sx : sx < mx ? mx - sx : 0;
+    const dy = sy > h - my ? h - my - sy : sy < my ? my - sy : 0;
+    if (dx || dy) setView(panBy(v, dx, dy));
+  };
   useEffect(() => {
     if (w <= 0 || h <= 0) return;
     const v = viewRef.current;
-    if (!v) {
-      setView(fitView(props.widthM, props.heightM, w, h, 12, WALK_ZOOM));
-      return;
-    }
-    // The keypad opening or closing resizes the box. The plan stays put under the finger; only
-    // when the reading being entered would be hidden does it slide just enough to show it.
-    const f = focusRef.current;
-    if (!f) return;
-    const margin = 40;
-    const { x: sx, y: sy } = planToStage(planPoint(f.x, f.y), METRE_BASE, v);
-    const dx = sx > w - margin ? w - margin - sx : sx < margin ? margin - sx : 0;
-    const dy = sy > h - margin ? h - margin - sy : sy < margin ? margin - sy : 0;
-    if (dx || dy) setView(panBy(v, dx, dy));
+    // A banner or the keypad coming or going resizes the box. A plan still at its whole-plan fit
+    // fits again, so none of it hides; one zoomed in by hand stays put under the finger and only
+    // slides to keep the open reading in sight.
+    if (!v || fitted.current) fit();
+    else follow(v);
+    // the size is what changed
   }, [w, h, props.widthM, props.heightM]);
+  // The plan follows the open reading as the taps move on.
+  useEffect(() => {
+    const v = viewRef.current;
+    if (v && props.focus) follow(v);
+  }, [props.focus?.x, props.focus?.y]);
 
   function local(e: React.PointerEvent) {
     const r = box.current!.getBoundingClientRect();
@@ -127,10 +148,10 @@ export function PlanStage(props: PlanStageProps) {
     if (pointers.current.size === 1) {
       if (!moved.current && Math.hypot(p.x - prev.startX, p.y - prev.startY) < TAP_SLOP_PX) return;
       moved.current = true;
-      setView(panBy(v, p.x - prev.x, p.y - prev.y));
+      byHand(panBy(v, p.x - prev.x, p.y - prev.y));
     } else if (pointers.current.size === 2) {
       const other = [...pointers.current.entries()].find(([id]) => id !== e.pointerId)![1];
-      setView(applyPinch(v, pinchStep([prev, other], [p, other]), WALK_ZOOM));
+      byHand(applyPinch(v, pinchStep([prev, other], [p, other]), WALK_ZOOM));
     }
     pointers.current.set(e.pointerId, { ...prev, x: p.x, y: p.y });
   }
@@ -154,7 +175,7 @@ export function PlanStage(props: PlanStageProps) {
       x: e.clientX - box.current!.getBoundingClientRect().left,
       y: e.clientY - box.current!.getBoundingClientRect().top,
     };
-    setView(zoomAbout(v, stagePoint(p.x, p.y), Math.exp(-e.deltaY / 400), WALK_ZOOM));
+    byHand(zoomAbout(v, stagePoint(p.x, p.y), Math.exp(-e.deltaY / 400), WALK_ZOOM));
   }
 
   // Buttons as well as pinching: a gloved hand cannot always pinch. Zoom about the reading on
@@ -164,7 +185,7 @@ export function PlanStage(props: PlanStageProps) {
     if (!v) return;
     const f = focusRef.current;
     const c = f ? planToStage(planPoint(f.x, f.y), METRE_BASE, v) : stagePoint(w / 2, h / 2);
-    setView(zoomAbout(v, c, factor, WALK_ZOOM));
+    byHand(zoomAbout(v, c, factor, WALK_ZOOM));
   }
 
   const ink = props.highContrast ? "#000000" : "#1c2529";
@@ -175,6 +196,7 @@ export function PlanStage(props: PlanStageProps) {
       ref={box}
       data-testid="walk-plan"
       data-view={view ? `${view.zoom} ${view.panX} ${view.panY}` : ""}
+      data-fitted={fitted.current ? "yes" : "no"}
       className="relative h-full w-full touch-none select-none overflow-hidden bg-paper"
       onPointerDown={onPointerDown}
       onPointerMove={onPointerMove}
@@ -226,6 +248,7 @@ export function PlanStage(props: PlanStageProps) {
           </Layer>
         </Stage>
       ) : null}
+      <PlanLegend highContrast={props.highContrast} />
       <div
         className="absolute right-2 top-2 flex flex-col gap-2"
         onPointerDown={(e) => e.stopPropagation()}
@@ -237,17 +260,26 @@ export function PlanStage(props: PlanStageProps) {
         <button type="button" className={ZOOM} aria-label="Zoom out" onClick={() => zoomBy(1 / 1.6)}>
           −
         </button>
-        <button
-          type="button"
-          className={`${ZOOM} text-sm`}
-          aria-label="Show the whole plan"
-          onClick={() => setView(fitView(props.widthM, props.heightM, w, h, 12, WALK_ZOOM))}
-        >
+        <button type="button" className={`${ZOOM} text-sm`} aria-label="Show the whole plan" onClick={() => fit()}>
           All
         </button>
       </div>
     </div>
   );
+}
+
+/** The Key and + buttons sit in the plan's top corners: 48 px and a gap. */
+const CONTROLS_TOP_PX = 60;
+
+/**
+ * The whole plan, as large as fits; when the box has the height to spare, its top edge is moved
+ * below the buttons in the corners so they cover none of it.
+ */
+function fitClearOfControls(widthM: number, heightM: number, w: number, h: number): View {
+  const v = fitView(widthM, heightM, w, h, 12, WALK_ZOOM);
+  const planH = heightM * v.zoom;
+  if (v.panY < CONTROLS_TOP_PX && CONTROLS_TOP_PX + planH <= h - 12) return { ...v, panY: CONTROLS_TOP_PX };
+  return v;
 }
 
 const ZOOM =
@@ -266,50 +298,49 @@ function Fixtures({
   highContrast: boolean;
   pointR: number;
 }) {
-  const shapes = useMemo(
-    () =>
-      fixtures.map((f) => {
-        const open = unsampled.has(f.id);
-        // Not yet sampled: a thick dashed outline (shape, not just colour, tells it apart).
-        const stroke = open ? (highContrast ? "#000000" : "#b35c00") : highContrast ? "#000000" : "#6b7a80";
-        if ("point" in f) {
-          const d = pointR;
-          return (
-            <Line
-              key={f.id}
-              points={[
-                f.point.x - d,
-                f.point.y,
-                f.point.x,
-                f.point.y - d,
-                f.point.x + d,
-                f.point.y,
-                f.point.x,
-                f.point.y + d,
-              ]}
-              closed
-              stroke={stroke}
-              strokeWidth={1.5}
-              strokeScaleEnabled={false}
-              fill={open ? (highContrast ? "#ffd600" : "#f0b45a") : "#ffffff"}
-            />
-          );
-        }
+  const shapes = useMemo(() => {
+    const look = markLooks(highContrast);
+    return fixtures.map((f) => {
+      const open = unsampled.has(f.id);
+      // Not yet sampled: a thick dashed outline (shape, not just colour, tells it apart).
+      const stroke = open ? look.unsampledFixture.stroke : look.sampledFixture.stroke;
+      if ("point" in f) {
+        const d = pointR;
         return (
           <Line
             key={f.id}
-            points={f.polygon.flat()}
+            points={[
+              f.point.x - d,
+              f.point.y,
+              f.point.x,
+              f.point.y - d,
+              f.point.x + d,
+              f.point.y,
+              f.point.x,
+              f.point.y + d,
+            ]}
             closed
             stroke={stroke}
-            strokeWidth={open ? 3 : 1}
-            dash={open ? [8, 5] : undefined}
+            strokeWidth={1.5}
             strokeScaleEnabled={false}
-            fill={backdropOf(f.kind) === "ink" ? ink : open ? "rgba(179,92,0,0.08)" : "rgba(31,78,95,0.06)"}
+            fill={open ? look.unsampledPoint.fill : look.sampledPoint.fill}
           />
         );
-      }),
-    [fixtures, unsampled, ink, highContrast, pointR],
-  );
+      }
+      return (
+        <Line
+          key={f.id}
+          points={f.polygon.flat()}
+          closed
+          stroke={stroke}
+          strokeWidth={open ? 3 : 1}
+          dash={open ? [8, 5] : undefined}
+          strokeScaleEnabled={false}
+          fill={backdropOf(f.kind) === "ink" ? ink : open ? look.unsampledFixture.fill : look.sampledFixture.fill}
+        />
+      );
+    });
+  }, [fixtures, unsampled, ink, highContrast, pointR]);
   return <>{shapes}</>;
 }
 
@@ -337,30 +368,32 @@ function ReadingsShape({
       sceneFunc={(ctx: Context) => {
         const started = performance.now();
         const c = ctx._context;
-        const r = 7 / scale;
+        const look = markLooks(highContrast);
+        // Sized by zoom, so neighbours stay apart at the whole-store view (plan-marks.ts).
+        const r = readingDotRadiusPx(scale) / scale;
         c.lineJoin = "round";
-        c.lineWidth = (highContrast ? 3 : 2) / scale;
-        c.strokeStyle = highContrast ? "#000000" : "#1f4e5f";
+        c.lineWidth = pathWidthPx(scale, highContrast) / scale;
+        c.strokeStyle = look.path.stroke;
         c.beginPath();
         readings.forEach((p, i) => (i === 0 ? c.moveTo(p.x, p.y) : c.lineTo(p.x, p.y)));
         c.stroke();
         for (const p of readings) {
           const alarm = p.ppm >= alarmPpm;
           c.beginPath();
-          c.arc(p.x, p.y, alarm ? r * 1.5 : p.ppm > 0 ? r * 1.15 : r, 0, Math.PI * 2);
-          c.fillStyle = alarm
-            ? highContrast
-              ? "#000000"
-              : "#9b2c2c"
-            : p.ppm > 0
-              ? highContrast
-                ? "#ffd600"
-                : "#e0a100"
-              : "#ffffff";
+          const selected = p.id === selectedId;
+          const dot = alarm ? look.readingAlarm : p.ppm > 0 ? look.readingTrace : look.readingZero;
+          c.arc(
+            p.x,
+            p.y,
+            (alarm ? r * ALARM_DOT_FACTOR : p.ppm > 0 ? r * TRACE_DOT_FACTOR : r) * (selected ? 1.5 : 1),
+            0,
+            Math.PI * 2,
+          );
+          c.fillStyle = dot.fill;
           c.fill();
-          c.lineWidth = (p.id === selectedId ? 4 : 2) / scale;
-          c.setLineDash(p.state === "rejected" ? [3 / scale, 2 / scale] : []);
-          c.strokeStyle = p.id === selectedId ? "#d98e04" : "#1c2529";
+          c.lineWidth = (selected ? 4 : r * scale < 4 ? 1 : 2) / scale;
+          c.setLineDash(p.sync.kind === "refused" ? [3 / scale, 2 / scale] : []);
+          c.strokeStyle = selected ? look.openReading.stroke : dot.stroke;
           c.stroke();
         }
         c.setLineDash([]);
@@ -377,13 +410,14 @@ function ReadingsShape({
 /** Where the alarm's air really was (a diamond) and the suggested closer re-check spots (rings). */
 function LagMarks({ hint, readings, scale }: { hint: LagHint; readings: readonly LocalReading[]; scale: number }) {
   const tap = readings[hint.index];
+  const look = markLooks(false);
   const d = 10 / scale;
   return (
     <>
       {tap ? (
         <Line
           points={[tap.x, tap.y, hint.x, hint.y]}
-          stroke="#9b2c2c"
+          stroke={look.recheck.stroke}
           strokeWidth={2}
           dash={[6, 4]}
           strokeScaleEnabled={false}
@@ -394,7 +428,7 @@ function LagMarks({ hint, readings, scale }: { hint: LagHint; readings: readonly
           key={i}
           points={circlePoints(p.x, p.y, 5 / scale)}
           closed
-          stroke="#9b2c2c"
+          stroke={look.recheck.stroke}
           strokeWidth={2}
           strokeScaleEnabled={false}
         />
@@ -402,8 +436,8 @@ function LagMarks({ hint, readings, scale }: { hint: LagHint; readings: readonly
       <Line
         points={[hint.x - d, hint.y, hint.x, hint.y - d, hint.x + d, hint.y, hint.x, hint.y + d]}
         closed
-        fill="#ffd600"
-        stroke="#000000"
+        fill={look.sampledAt.fill}
+        stroke={look.sampledAt.stroke}
         strokeWidth={3}
         strokeScaleEnabled={false}
       />

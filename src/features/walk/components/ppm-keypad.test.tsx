@@ -37,6 +37,16 @@ describe("the ppm keypad", () => {
     expect(onSave).toHaveBeenLastCalledWith({ ppm: 2.5, atLeast: false, samplePoint: "return", note: "" });
   });
 
+  it("keeps the remembered sample point behind one button and changes it from the choices it opens", () => {
+    const onSave = setup();
+    expect(screen.queryByRole("radiogroup", { name: "Sample point" })).toBeNull();
+    fireEvent.click(screen.getByRole("button", { name: /^Sample point: Return air/ }));
+    fireEvent.click(screen.getByRole("radio", { name: "Floor level" }));
+    expect(screen.queryByRole("radiogroup", { name: "Sample point" })).toBeNull();
+    fireEvent.click(screen.getByRole("button", { name: "0 ppm — save" }));
+    expect(onSave).toHaveBeenLastCalledWith({ ppm: 0, atLeast: false, samplePoint: "floor", note: "" });
+  });
+
   it("refuses a value above the 10,000 ppm ceiling", () => {
     setup();
     for (const k of ["1", "2", "0", "0", "0"])

@@ -28,7 +28,7 @@ const KEY =
   "flex h-12 min-w-12 items-center justify-center rounded-md text-2xl font-bold edge active:opacity-70 disabled:opacity-50";
 
 /**
- * A large ppm keypad for a gloved thumb: every key at least 48 × 48 px. "0 ppm" saves a zero in
+ * A compact ppm keypad for a gloved thumb: every key at least 48 × 48 px, in three rows. "0 ppm" saves a zero in
  * one tap; "Over range" stores the typed value as "at least" (a pegged display).
  */
 export function PpmKeypad(props: PpmKeypadProps) {
@@ -37,6 +37,8 @@ export function PpmKeypad(props: PpmKeypadProps) {
   const [samplePoint, setSamplePoint] = useState<SamplePoint>(props.initial.samplePoint);
   const [note, setNote] = useState(props.initial.note);
   const [noteOpen, setNoteOpen] = useState(props.initial.note !== "");
+  // The sample point is remembered from the reading before: its choices open only when asked for.
+  const [pointsOpen, setPointsOpen] = useState(false);
   const value = typed === "" || typed === "." ? 0 : Number(typed);
   const tooHigh = value > PPM_CEILING;
 
@@ -57,25 +59,42 @@ export function PpmKeypad(props: PpmKeypadProps) {
     type(typed === "0" && k !== "." ? k : typed + k);
   }
 
+  const keys = (list: string[]) =>
+    list.map((k) => (
+      <button key={k} type="button" className={`${KEY} bg-surface`} onClick={() => press(k)}>
+        {k}
+      </button>
+    ));
+
   return (
     <section
       aria-label="Enter the detector's reading"
       className="flex flex-col gap-2 bg-surface p-2 edge border-x-0 border-b-0"
+      data-testid="ppm-keypad"
     >
-      <div className="flex items-center gap-2">
-        <h2 className="shrink-0 font-bold">{props.title}</h2>
+      <div className="flex items-center gap-1.5">
+        <h2 className="shrink-0 text-sm font-bold">{props.title}</h2>
         <output
           aria-live="polite"
           aria-label="Value"
-          className={`block min-w-0 flex-1 truncate rounded-md px-3 text-right text-3xl font-bold edge ${tooHigh ? "border-danger text-danger" : ""}`}
+          className={`block min-w-0 flex-1 truncate rounded-md px-2 text-right text-2xl font-bold leading-[3rem] edge ${tooHigh ? "border-danger text-danger" : ""}`}
         >
           {atLeast ? "≥ " : ""}
-          {typed === "" ? "0" : typed} <span className="text-lg">ppm</span>
+          {typed === "" ? "0" : typed} <span className="text-base">ppm</span>
         </output>
+        <button
+          type="button"
+          className="min-h-12 max-w-24 shrink-0 truncate rounded-md px-2 text-sm font-bold edge"
+          aria-expanded={pointsOpen}
+          aria-label={`Sample point: ${SAMPLE_POINT_LABELS[samplePoint]}. Change it`}
+          onClick={() => setPointsOpen(!pointsOpen)}
+        >
+          {SAMPLE_POINT_LABELS[samplePoint]} ▾
+        </button>
         {props.onMove ? (
           <button
             type="button"
-            className="min-h-12 min-w-12 shrink-0 rounded-md px-2 font-bold edge"
+            className="min-h-12 min-w-12 shrink-0 rounded-md px-1 text-sm font-bold edge"
             onClick={props.onMove}
           >
             Move
@@ -83,26 +102,31 @@ export function PpmKeypad(props: PpmKeypadProps) {
         ) : null}
         <button
           type="button"
-          className="min-h-12 shrink-0 rounded-md px-2 font-bold text-accent underline"
+          className="min-h-12 shrink-0 rounded-md px-1 text-sm font-bold text-accent underline"
           onClick={props.onCancel}
         >
           {props.cancelLabel}
         </button>
       </div>
-      <div role="radiogroup" aria-label="Sample point" className="flex gap-2 overflow-x-auto">
-        {SAMPLE_POINTS.map((p) => (
-          <button
-            key={p}
-            type="button"
-            role="radio"
-            aria-checked={samplePoint === p}
-            onClick={() => setSamplePoint(p)}
-            className={`min-h-12 shrink-0 rounded-full px-3 font-bold edge ${samplePoint === p ? "bg-accent text-on-accent" : "bg-surface"}`}
-          >
-            {SAMPLE_POINT_LABELS[p]}
-          </button>
-        ))}
-      </div>
+      {pointsOpen ? (
+        <div role="radiogroup" aria-label="Sample point" className="flex gap-2 overflow-x-auto">
+          {SAMPLE_POINTS.map((p) => (
+            <button
+              key={p}
+              type="button"
+              role="radio"
+              aria-checked={samplePoint === p}
+              onClick={() => {
+                setSamplePoint(p);
+                setPointsOpen(false);
+              }}
+              className={`min-h-12 shrink-0 rounded-full px-3 font-bold edge ${samplePoint === p ? "bg-accent text-on-accent" : "bg-surface"}`}
+            >
+              {SAMPLE_POINT_LABELS[p]}
+            </button>
+          ))}
+        </div>
+      ) : null}
       {tooHigh ? (
         <p className="text-danger">
           Above the {PPM_CEILING.toLocaleString("en-US")} ppm ceiling: enter the display's top value and press Over
@@ -147,12 +171,10 @@ export function PpmKeypad(props: PpmKeypadProps) {
           ))}
         </div>
       ) : null}
-      <div className="grid grid-cols-4 gap-2">
-        {["7", "8", "9"].map((k) => (
-          <button key={k} type="button" className={`${KEY} bg-surface`} onClick={() => press(k)}>
-            {k}
-          </button>
-        ))}
+      {/* Three rows of keys, six across (each still at least 48 px wide on a 360 px phone): the plan
+          keeps about a third of a phone screen while a value is typed (docs/decisions/0091). */}
+      <div className="grid grid-cols-6 gap-2">
+        {keys(["1", "2", "3", "4", "5"])}
         <button
           type="button"
           className={`${KEY} bg-surface`}
@@ -161,37 +183,32 @@ export function PpmKeypad(props: PpmKeypadProps) {
         >
           ⌫
         </button>
-        {["4", "5", "6"].map((k) => (
-          <button key={k} type="button" className={`${KEY} bg-surface`} onClick={() => press(k)}>
-            {k}
-          </button>
-        ))}
+        {keys(["6", "7", "8", "9", "0"])}
+        <button type="button" className={`${KEY} bg-surface`} onClick={() => press(".")} aria-label="Decimal point">
+          .
+        </button>
+        <button
+          type="button"
+          className={`${KEY} col-span-2 bg-ok px-1 text-base leading-tight text-on-accent`}
+          onClick={() => props.onSave({ ...current(false, 0) })}
+        >
+          0 ppm — save
+        </button>
         <button
           type="button"
           aria-pressed={atLeast}
-          className={`${KEY} text-base ${atLeast ? "bg-accent text-on-accent" : "bg-surface"}`}
+          className={`${KEY} px-0.5 text-xs leading-tight ${atLeast ? "bg-accent text-on-accent" : "bg-surface"}`}
           onClick={() => setAtLeast(!atLeast)}
         >
           Over range
         </button>
-        {["1", "2", "3"].map((k) => (
-          <button key={k} type="button" className={`${KEY} bg-surface`} onClick={() => press(k)}>
-            {k}
-          </button>
-        ))}
         <button
           type="button"
-          className={`${KEY} bg-surface text-base`}
+          className={`${KEY} bg-surface px-0.5 text-sm`}
           aria-expanded={noteOpen}
           onClick={() => setNoteOpen(!noteOpen)}
         >
           Note
-        </button>
-        <button type="button" className={`${KEY} bg-surface`} onClick={() => press(".")} aria-label="Decimal point">
-          .
-        </button>
-        <button type="button" className={`${KEY} bg-surface`} onClick={() => press("0")}>
-          0
         </button>
         <button
           type="button"
@@ -200,13 +217,6 @@ export function PpmKeypad(props: PpmKeypadProps) {
           onClick={() => props.onSave(current())}
         >
           Save
-        </button>
-        <button
-          type="button"
-          className={`${KEY} col-span-4 bg-ok text-xl text-on-accent`}
-          onClick={() => props.onSave({ ...current(false, 0) })}
-        >
-          0 ppm — save
         </button>
       </div>
       {noteOpen ? (

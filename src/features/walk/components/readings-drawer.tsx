@@ -5,10 +5,16 @@ import type { LocalFinding, LocalReading } from "../model/local-types";
 import { formatInZone } from "#core/domain/dates/format-in-zone";
 
 function stateWord(r: LocalReading): string {
-  if (r.draft) return "On the keypad — kept on this device";
-  if (r.state === "rejected") return "Refused — fix it";
-  if (r.state === "pending" || r.editPending) return "Waiting to upload";
-  return "Uploaded";
+  switch (r.sync.kind) {
+    case "draft":
+      return "On the keypad — kept on this device";
+    case "refused":
+      return "Refused — fix it";
+    case "synced":
+      return "Uploaded";
+    default:
+      return "Waiting to upload";
+  }
 }
 
 /** Every reading of the sweep, newest first, to edit or delete; refused ones show why. */
@@ -73,7 +79,7 @@ export function ReadingsDrawer(props: {
         {list.map(({ r, n }) => (
           <li
             key={r.id}
-            className={`rounded-md p-3 edge ${r.state === "rejected" ? "border-danger bg-danger-soft" : ""}`}
+            className={`rounded-md p-3 edge ${r.sync.kind === "refused" ? "border-danger bg-danger-soft" : ""}`}
             data-testid="reading-row"
           >
             <div className="flex flex-wrap items-baseline justify-between gap-2">
@@ -86,9 +92,9 @@ export function ReadingsDrawer(props: {
               </span>
             </div>
             {r.note ? <p>{r.note}</p> : null}
-            {r.reasons ? (
+            {r.sync.kind === "refused" ? (
               <ul className="text-danger">
-                {Object.entries(r.reasons).map(([k, m]) => (
+                {Object.entries(r.sync.reasons).map(([k, m]) => (
                   <li key={k}>{k ? `${k} ${m}` : m}</li>
                 ))}
               </ul>

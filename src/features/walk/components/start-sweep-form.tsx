@@ -10,6 +10,7 @@ import { fetchPlanPack, useStorePack } from "../api/store-pack";
 import { syncNow } from "../hooks/sync-loop";
 import type { LocalSweep } from "../model/local-types";
 import { saveSweep } from "../model/reading-store";
+import { SWEEP_QUEUED_NEW } from "../model/sweep-sync";
 import { walkDb } from "../model/walk-db";
 import { formatDateTime } from "../../../lib/format";
 
@@ -74,9 +75,7 @@ export function StartSweepForm({ storeId, onStarted }: { storeId: string; onStar
         timeConstantS: detector.timeConstantS,
         alarmPpm: detector.alarmPpm,
         warnings,
-        onServer: false,
-        submitPending: false,
-        rejected: null,
+        sync: SWEEP_QUEUED_NEW,
       };
       await saveSweep(await walkDb(), sweep);
       void syncNow();

@@ -14,7 +14,7 @@ export function SubmitSummary(props: {
   onClose(): void;
 }) {
   const alarms = props.readings.filter((r) => r.ppm >= props.alarmPpm);
-  const rejected = props.readings.filter((r) => r.state === "rejected");
+  const rejected = props.readings.filter((r) => r.sync.kind === "refused");
   return (
     <Dialog title="Submit this sweep?" open={props.open} onClose={props.onClose}>
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-lg">

@@ -13,10 +13,11 @@ import { useQueuedFindings } from "../hooks/use-queued-findings";
 import { useOpenReading } from "../hooks/use-open-reading";
 import { useWalk } from "../hooks/use-walk";
 import { fixtureAt, unsampledFixtures } from "../model/coverage";
-import { latestLagHint } from "../model/lag-hint";
+import { peakLagHint } from "../model/lag-hint";
 import type { LocalReading } from "../model/local-types";
 import { enteredRoom, roomSystemIds } from "../model/room-entry";
 import { walkModelFor } from "../model/walk-model";
+import { submitQueued, sweepStateText } from "../model/sweep-sync";
 import { editedReading, walkStep, type WalkEvent, type WalkMode } from "../model/walk-mode";
 import { CautionDialog } from "./caution-dialog";
 import { LagHintBanner } from "./lag-hint-banner";
@@ -29,6 +30,8 @@ import { SubmitSummary } from "./submit-summary";
 import { SweepWarnings } from "./sweep-warnings";
 import { SyncBanner } from "./sync-banner";
 import { WalkTools } from "./walk-tools";
+
+const SUBMITTED_NOTICE = "Sweep submitted on this device. It goes to the server as soon as every reading is uploaded.";
 
 /** The sweep capture screen: the plan fills the screen; one tap drops a reading there. */
 export function WalkScreen({
@@ -75,7 +78,7 @@ export function WalkScreen({
   // Kept identical while only the open reading changes (typing), so the lag hint is not redone per key.
   const committedRef = useRef<LocalReading[]>([]);
   const committed = useMemo(() => {
-    const next = walk.readings.filter((r) => !r.draft);
+    const next = walk.readings.filter((r) => r.sync.kind !== "draft");
     const prev = committedRef.current;
     if (prev.length === next.length && next.every((r, i) => r === prev[i])) return prev;
     committedRef.current = next;
@@ -107,7 +110,7 @@ export function WalkScreen({
   }, [planPack.data]);
   const hint = useMemo(
     () =>
-      sweep ? latestLagHint(committed, sweep.transportDelayS, sweep.timeConstantS, sweep.alarmPpm, walkModel) : null,
+      sweep ? peakLagHint(committed, sweep.transportDelayS, sweep.timeConstantS, sweep.alarmPpm, walkModel) : null,
     [committed, sweep, walkModel],
   );
   const recent = useMemo(() => {
@@ -143,7 +146,7 @@ export function WalkScreen({
     }
     if (effect.kind !== "take-reading") return;
     const open = draftRef.current;
-    const before = readingsRef.current.filter((r) => !r.draft || r.id === open);
+    const before = readingsRef.current.filter((r) => r.sync.kind !== "draft" || r.id === open);
     const previous = before.length ? before[before.length - 1] : null;
     const room = enteredRoom(fixtures, previous, { x, y });
     if (room) {
@@ -189,7 +192,7 @@ export function WalkScreen({
     setDialog(null);
     await commitOpen();
     await walk.submit();
-    setNotice("Sweep submitted. It goes to the server as soon as every reading is uploaded.");
+    setNotice(SUBMITTED_NOTICE);
   });
 
   const leave = serial(async () => {
@@ -199,6 +202,12 @@ export function WalkScreen({
 
   const keypadFor = draft ?? editing;
   const showHint = hint && hint.index !== dismissedAlarm ? hint : null;
+  const peak = showHint ? committed[showHint.index] : undefined;
+  // Where the peak's air was sampled (the lag-corrected point), else where it was tapped.
+  const peakFixture = showHint
+    ? (fixtureAt(fixtures, showHint.x, showHint.y) ?? (peak ? fixtureAt(fixtures, peak.x, peak.y) : null))
+    : null;
+  const peakPlace = peakFixture ? peakFixture.label || FIXTURE_KIND_NAMES[peakFixture.kind] : null;
 
   return (
     <div className="fixed inset-0 z-30 flex flex-col bg-paper" data-testid="walk-screen">
@@ -214,9 +223,9 @@ export function WalkScreen({
           <p className="min-w-0 flex-1 text-center leading-tight">
             <span className="block truncate font-bold">{storePack.data?.store.name ?? "Sweep"}</span>
             <span className="block truncate text-sm text-muted" data-testid="walk-count">
-              {countOf(all.length, "reading")}
-              {sweep.status !== "in-progress" ? ` · ${sweep.status}` : sweep.submitPending ? " · submitting" : ""} ·{" "}
-              {sweep.detectorName}
+              {[countOf(all.length, "reading"), sweepStateText(sweep.status, sweep.sync), sweep.detectorName]
+                .filter(Boolean)
+                .join(" · ")}
             </span>
           </p>
           {contrastToggle}
@@ -224,9 +233,9 @@ export function WalkScreen({
         <SweepWarnings warnings={sweep.warnings}>
           <SyncBanner status={sync} onShowRejected={() => setDialog("list")} />
         </SweepWarnings>
-        {sweep.rejected ? (
+        {sweep.sync.kind === "refused" ? (
           <Alert tone="error" title="The server refused this sweep">
-            {Object.entries(sweep.rejected)
+            {Object.entries(sweep.sync.reasons)
               .map(([k, m]) => (k ? `${k} ${m}` : m))
               .join("; ")}{" "}
             Its readings stay on this device.
@@ -252,7 +261,11 @@ export function WalkScreen({
         ) : null}
         {notice ? (
           <Alert tone="success">
-            <span>{notice} </span>
+            <span>
+              {notice === SUBMITTED_NOTICE && sweep.status !== "in-progress"
+                ? "Sweep submitted: the server has it."
+                : notice}{" "}
+            </span>
             <button type="button" className="min-h-12 underline" onClick={() => setNotice(null)}>
               Dismiss
             </button>
@@ -261,8 +274,12 @@ export function WalkScreen({
         {showHint ? (
           <LagHintBanner
             hint={showHint}
-            ppm={committed[showHint.index]?.ppm ?? 0}
+            ppm={peak?.ppm ?? 0}
+            atLeast={peak?.atLeast ?? false}
+            readingNumber={peak ? all.indexOf(peak) + 1 : 0}
+            place={peakPlace}
             lengthUnit={lengthUnit}
+            compact={keypadFor !== null}
             onDismiss={() => setDismissedAlarm(showHint.index)}
           />
         ) : null}
@@ -311,7 +328,7 @@ export function WalkScreen({
       <WalkTools
         readOnly={readOnly}
         canUndo={all.length > 0}
-        canSubmit={sweep.status === "in-progress" && !sweep.submitPending}
+        canSubmit={sweep.status === "in-progress" && !submitQueued(sweep.sync)}
         leakMode={mode.kind === "placing-leak"}
         onUndo={() => undo()}
         onList={() => setDialog("list")}

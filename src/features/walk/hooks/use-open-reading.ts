@@ -32,7 +32,7 @@ export function useOpenReading(walk: ReturnType<typeof useWalk>) {
   useEffect(() => {
     if (walk.loading || restored.current) return;
     restored.current = true;
-    const leftover = walk.readings.findLast((r) => r.draft);
+    const leftover = walk.readings.findLast((r) => r.sync.kind === "draft");
     if (leftover) setDraftId(leftover.id);
   }, [walk.loading, walk.readings]);
 
@@ -66,7 +66,7 @@ export function useOpenReading(walk: ReturnType<typeof useWalk>) {
       await walk.remove(id);
       return;
     }
-    const done = readingsRef.current.filter((r) => !r.draft);
+    const done = readingsRef.current.filter((r) => r.sync.kind !== "draft");
     const last = done[done.length - 1];
     if (last) await walk.remove(last.id);
   });
@@ -78,7 +78,7 @@ export function useOpenReading(walk: ReturnType<typeof useWalk>) {
     const r = readingsRef.current.find((x) => x.id === id);
     if (
       !r ||
-      !r.draft ||
+      r.sync.kind !== "draft" ||
       (r.ppm === v.ppm && r.atLeast === v.atLeast && r.samplePoint === v.samplePoint && r.note === v.note)
     )
       return;

@@ -13,6 +13,7 @@ import {
   updateReading,
 } from "../model/reading-store";
 import { walkDb } from "../model/walk-db";
+import { afterSubmitAsked } from "../model/sweep-sync";
 import { refreshCounts, subscribeSync, syncSoon } from "./sync-loop";
 
 export interface WalkState {
@@ -74,7 +75,7 @@ export function useWalk(sweepId: string) {
     return subscribeSync((s) => {
       if (s.lastReport && s.lastReport !== last) {
         last = s.lastReport;
-        if (s.lastReport.confirmed + s.lastReport.rejected > 0) void reload();
+        if (s.lastReport.confirmed + s.lastReport.rejected + s.lastReport.submitted > 0) void reload();
       }
     });
   }, [reload]);
@@ -149,7 +150,7 @@ export function useWalk(sweepId: string) {
       const db = await walkDb();
       const now = await db.get("readings", id);
       if (!now) return undefined;
-      return now.draft ? keepDraft(id, { x, y }) : save(id, { x, y });
+      return now.sync.kind === "draft" ? keepDraft(id, { x, y }) : save(id, { x, y });
     },
     [keepDraft, save],
   );
@@ -180,7 +181,7 @@ export function useWalk(sweepId: string) {
     if (!s) return;
     // The reading still on the keypad is part of the sweep: it is committed with the submit.
     await commitDrafts(db, sweepId);
-    await saveSweep(db, { ...s, submitPending: true });
+    await saveSweep(db, { ...s, sync: afterSubmitAsked(s.sync) });
     await reload();
     changed();
   }, [sweepId, reload, changed]);

@@ -3,7 +3,7 @@ import type { Fixture } from "#core/contracts/fixtures";
 import { locatorInputSchema } from "#core/contracts/locator-input";
 import { locate } from "#core/analysis/locate";
 import { toLocatorPlan } from "#core/domain/layout/to-locator-input";
-import { latestLagHint, RECHECK_SPACING_M } from "./lag-hint";
+import { peakIndex, peakLagHint, RECHECK_SPACING_M } from "./lag-hint";
 import { walkModelFor } from "./walk-model";
 
 const start = Date.parse("2026-11-02T14:00:00Z");
@@ -18,7 +18,7 @@ const walk = (n: number, ppmAt: (i: number) => number) =>
 
 describe("the Walk screen's lag hint", () => {
   it("marks the alarm's air 5 m back on a 1 m/s straight walk with a 5 s delay (common practice delay, worked example)", () => {
-    const hint = latestLagHint(
+    const hint = peakLagHint(
       walk(13, (i) => (i === 12 ? 6 : 0)),
       5,
       0,
@@ -33,7 +33,7 @@ describe("the Walk screen's lag hint", () => {
 
   it("adds the sensor's time constant to the transport delay", () => {
     expect(
-      latestLagHint(
+      peakLagHint(
         walk(13, (i) => (i === 12 ? 6 : 0)),
         3.5,
         1.5,
@@ -44,7 +44,7 @@ describe("the Walk screen's lag hint", () => {
 
   it("flags an alarm before one delay has passed and places it at the first reading", () => {
     expect(
-      latestLagHint(
+      peakLagHint(
         walk(4, (i) => (i === 3 ? 9 : 0)),
         5,
         0,
@@ -53,9 +53,22 @@ describe("the Walk screen's lag hint", () => {
     ).toMatchObject({ x: 0, beforeDelay: true });
   });
 
+  it("follows the sweep's peak, not the latest reading at or above the alarm", () => {
+    // 30 ppm at x = 8, then a 2 ppm alarm at x = 12: the hint stays on the 30 ppm peak.
+    const hint = peakLagHint(
+      walk(13, (i) => (i === 8 ? 30 : i === 12 ? 2 : 0)),
+      5,
+      0,
+      2,
+    )!;
+    expect(hint).toMatchObject({ index: 8, x: 3, beforeDelay: false });
+    expect(peakIndex([{ ppm: 3 }, { ppm: 9 }, { ppm: 9 }, { ppm: 4 }], 2)).toBe(2); // the later of equal peaks
+    expect(peakIndex([{ ppm: 1 }, { ppm: 0 }], 2)).toBe(-1);
+  });
+
   it("gives no hint below the alarm level", () => {
     expect(
-      latestLagHint(
+      peakLagHint(
         walk(10, () => 1.9),
         5,
         0,
@@ -96,7 +109,7 @@ describe("the lag hint and the locator agree", () => {
   }));
 
   it("places the alarm's air where the server's locator corrects that reading to, around the shelving", () => {
-    const hint = latestLagHint(readings, 3.5, 0, 2, walkModelFor(plan, [gondola]))!;
+    const hint = peakLagHint(readings, 3.5, 0, 2, walkModelFor(plan, [gondola]))!;
     const result = locate(
       locatorInputSchema.parse({
         plan: toLocatorPlan({ width: 10, height: 6 }, [gondola], { fansRunning: true }),
@@ -110,14 +123,14 @@ describe("the lag hint and the locator agree", () => {
     expect(Math.abs(hint.y - corrected.y)).toBeLessThanOrEqual(0.005);
     // not inside the shelving run (x 4–5 m, y 0–4 m), where a straight line between the taps puts it
     expect(hint.x >= 4 && hint.x <= 5 && hint.y <= 4).toBe(false);
-    const straight = latestLagHint(readings, 3.5, 0, 2)!;
+    const straight = peakLagHint(readings, 3.5, 0, 2)!;
     expect(straight.y).toBeCloseTo(2, 9);
     expect(straight.x).toBeGreaterThan(4);
     expect(straight.x).toBeLessThan(5);
   });
 
   it("measures the way back along the route, not across the shelving", () => {
-    const hint = latestLagHint(readings, 3.5, 0, 2, walkModelFor(plan, [gondola]))!;
+    const hint = peakLagHint(readings, 3.5, 0, 2, walkModelFor(plan, [gondola]))!;
     // 1 m from the alarm tap back to (6, 2), then part of the leg round the run's end
     expect(hint.backM).toBeGreaterThan(1 + Math.hypot(hint.x - 6, hint.y - 2) - 1e-6);
     for (const p of hint.recheck) expect(p.x >= 4 && p.x <= 5 && p.y <= 4).toBe(false);

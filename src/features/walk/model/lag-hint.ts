@@ -10,7 +10,7 @@ export const RECHECK_SPACING_M = 0.6;
 const RECHECK_EACH_SIDE = 3;
 
 export interface LagHint {
-  /** Index of the alarm reading in the path. */
+  /** Index of the sweep's peak reading (at or above the alarm) in the path. */
   index: number;
   /** Where the air behind the alarm was really sampled (the shared lag function). */
   x: number;
@@ -59,26 +59,31 @@ function walkedPath(taps: readonly Tap[], from: number, to: number, route: Route
 }
 
 /**
- * For the latest reading at or above the alarm level: the lag-corrected point (one transport
+ * The sweep's peak so far: the highest reading at or above the alarm level, the latest of equal
+ * ones; -1 when none. A lower alarm after it does not replace it: the peak is where to look first.
+ */
+export function peakIndex(readings: readonly { ppm: number }[], alarmPpm: number): number {
+  let index = -1;
+  for (let i = 0; i < readings.length; i++)
+    if (readings[i].ppm >= alarmPpm && (index < 0 || readings[i].ppm >= readings[index].ppm)) index = i;
+  return index;
+}
+
+/**
+ * For the sweep's peak reading at or above the alarm level: the lag-corrected point (one transport
  * delay plus the sensor's time constant back along the walked route, by walkLag, the function the
  * server's locator uses, with the same route and pace) and re-check spots around it. Null when no
  * alarm. Only the taps from the one before the sampled moment are handed to walkLag: the result
  * for the alarm is the same (it depends on those alone) and a long sweep costs no more than a short one.
  */
-export function latestLagHint(
+export function peakLagHint(
   readings: readonly PathReading[],
   delayS: number,
   timeConstantS: number,
   alarmPpm: number,
   walk: WalkModel = {},
 ): LagHint | null {
-  let index = -1;
-  for (let i = readings.length - 1; i >= 0; i--) {
-    if (readings[i].ppm >= alarmPpm) {
-      index = i;
-      break;
-    }
-  }
+  const index = peakIndex(readings, alarmPpm);
   if (index < 0) return null;
   const t0 = Date.parse(readings[0].takenAt);
   const taps: Tap[] = readings

@@ -1,7 +1,9 @@
 import type { CreateFindingInput } from "#core/contracts/findings";
 import type { SamplePoint, SweepWarning } from "#core/contracts/sweeps";
+import type { ReadingSync } from "./reading-sync";
+import type { SweepSync } from "./sweep-sync";
 
-/** A sweep as the device holds it; `onServer` turns true once the server has it. */
+/** A sweep as the device holds it; `sync` says what the server has of it. */
 export interface LocalSweep {
   id: string;
   storeId: string;
@@ -17,15 +19,8 @@ export interface LocalSweep {
   timeConstantS: number;
   alarmPpm: number;
   warnings: SweepWarning[];
-  onServer: boolean;
-  /** Submit waits in the queue until the readings before it are uploaded. */
-  submitPending: boolean;
-  /** The server refused the sweep itself (e.g. its plan was removed): reason per field. */
-  rejected: Record<string, string> | null;
+  sync: SweepSync;
 }
-
-/** draft: still on the keypad; pending: a change waits for the server; synced; rejected: refused, kept for fixing. */
-export type SyncState = "draft" | "pending" | "synced" | "rejected";
 
 /** A reading as the device holds it. It is written here FIRST, before any upload. */
 export interface LocalReading {
@@ -40,14 +35,7 @@ export interface LocalReading {
   atLeast: boolean;
   samplePoint: SamplePoint;
   note: string;
-  /** Still on the keypad: not uploaded until the value is confirmed. */
-  draft: boolean;
-  state: SyncState;
-  onServer: boolean;
-  editPending: boolean;
-  deletePending: boolean;
-  editedAt: string | null;
-  reasons: Record<string, string> | null;
+  sync: ReadingSync;
 }
 
 export type ReadingValues = Pick<LocalReading, "x" | "y" | "takenAt" | "ppm" | "atLeast" | "samplePoint" | "note">;

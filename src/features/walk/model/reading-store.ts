@@ -1,6 +1,9 @@
 import { findingCounts } from "./finding-queue";
 import type { WalkDb } from "./walk-db";
 import type { LocalReading, LocalSweep, ReadingValues } from "./local-types";
+import { afterRemove, afterValuesChange, DRAFT, isDeleted, isQueued, QUEUED_NEW, QUEUED_RANGE } from "./reading-sync";
+import type { LocalSweepSummary } from "./resume-list";
+import { sweepWaits } from "./sweep-sync";
 
 /**
  * "relaxed": the commit is handed to the operating system without waiting for the disk flush
@@ -10,8 +13,8 @@ import type { LocalReading, LocalSweep, ReadingValues } from "./local-types";
 const RELAXED = { durability: "relaxed" } as const;
 
 // Every change to a sweep's readings goes through these functions, which write IndexedDB in one
-// transaction each. The sync queue later reads the flags they leave (pending, editPending,
-// deletePending) and sends the changes.
+// transaction each. The sync queue later reads the state they leave (reading-sync.ts) and sends
+// the changes.
 
 export async function saveSweep(db: WalkDb, sweep: LocalSweep): Promise<void> {
   await db.put("sweeps", sweep);
@@ -36,13 +39,7 @@ export async function addReading(
     sweepId,
     seq,
     ...values,
-    draft: options.draft ?? false,
-    state: options.draft ? "draft" : "pending",
-    onServer: false,
-    editPending: false,
-    deletePending: false,
-    editedAt: null,
-    reasons: null,
+    sync: options.draft ? DRAFT : QUEUED_NEW,
   };
   await tx.objectStore("meta").put(seq, "seq");
   await tx.objectStore("readings").put(reading);
@@ -60,18 +57,13 @@ export async function updateReading(
   const tx = db.transaction("readings", "readwrite", RELAXED);
   const r = await tx.store.get(id);
   if (!r) return undefined;
-  const next: LocalReading = { ...r, ...values };
-  if (options.commit) next.draft = false;
-  if (r.onServer) {
-    // Already uploaded: the change travels as an edit (audited on the server).
-    next.editPending = true;
-    next.editedAt = new Date().toISOString();
-    next.state = "pending";
-  } else {
-    // Not uploaded yet: the upload carries the new values; a rejected one is queued again.
-    next.state = next.draft ? "draft" : "pending";
-    next.reasons = null;
-  }
+  // On the server already: the change travels as an edit (audited there). Not yet: the upload
+  // carries the new values. A refused one is queued again.
+  const next: LocalReading = {
+    ...r,
+    ...values,
+    sync: afterValuesChange(r.sync, options.commit ?? false, new Date().toISOString()),
+  };
   await tx.store.put(next);
   await tx.done;
   return next;
@@ -89,7 +81,7 @@ export async function keepDraftValues(
 ): Promise<LocalReading | undefined> {
   const tx = db.transaction("readings", "readwrite", RELAXED);
   const r = await tx.store.get(id);
-  if (!r || !r.draft) return undefined;
+  if (!r || r.sync.kind !== "draft") return undefined;
   const next: LocalReading = { ...r, ...values };
   await tx.store.put(next);
   await tx.done;
@@ -99,8 +91,8 @@ export async function keepDraftValues(
 /** Commits every open reading of a sweep as it stands on the device (before a submit). */
 export async function commitDrafts(db: WalkDb, sweepId: string): Promise<number> {
   const tx = db.transaction("readings", "readwrite", RELAXED);
-  const open = (await tx.store.index("byState").getAll("draft")).filter((r) => r.sweepId === sweepId);
-  await Promise.all(open.map((r) => tx.store.put({ ...r, draft: false, state: "pending" })));
+  const open = (await tx.store.index("bySync").getAll("draft")).filter((r) => r.sweepId === sweepId);
+  await Promise.all(open.map((r) => tx.store.put({ ...r, sync: QUEUED_NEW })));
   await tx.done;
   return open.length;
 }
@@ -110,8 +102,8 @@ export async function removeReading(db: WalkDb, id: string): Promise<void> {
   const tx = db.transaction("readings", "readwrite");
   const r = await tx.store.get(id);
   if (!r) return;
-  if (r.onServer)
-    await tx.store.put({ ...r, deletePending: true, editedAt: new Date().toISOString(), state: "pending" });
+  const next = afterRemove(r.sync, new Date().toISOString());
+  if (next) await tx.store.put({ ...r, sync: next });
   else await tx.store.delete(id);
   await tx.done;
 }
@@ -120,14 +112,31 @@ export async function removeReading(db: WalkDb, id: string): Promise<void> {
 export async function sweepReadings(db: WalkDb, sweepId: string): Promise<LocalReading[]> {
   const range = IDBKeyRange.bound([sweepId, -Infinity], [sweepId, Infinity]);
   const all = await db.getAllFromIndex("readings", "bySweepSeq", range);
-  return all.filter((r) => !r.deletePending);
+  return all.filter((r) => !isDeleted(r.sync));
+}
+
+/** Every sweep on the device; for those in progress, how many readings they hold and how many wait. */
+export async function sweepSummaries(db: WalkDb): Promise<LocalSweepSummary[]> {
+  const out: LocalSweepSummary[] = [];
+  for (const sweep of await db.getAll("sweeps")) {
+    let readings = 0;
+    let waiting = 0;
+    if (sweep.status === "in-progress")
+      for (const r of await db.getAllFromIndex("readings", "bySweep", sweep.id)) {
+        if (isDeleted(r.sync)) continue;
+        readings++;
+        if (r.sync.kind === "draft" || isQueued(r.sync)) waiting++;
+      }
+    out.push({ sweep, readings, waiting });
+  }
+  return out;
 }
 
 /** What the banner counts: changes (readings, sweeps, findings) not yet on the server; rejected ones apart. */
 export async function queueCounts(db: WalkDb): Promise<{ waiting: number; rejected: number }> {
-  let waiting = await db.countFromIndex("readings", "byState", "pending");
-  const rejected = await db.countFromIndex("readings", "byState", "rejected");
-  for (const s of await db.getAll("sweeps")) if ((!s.onServer && !s.rejected) || s.submitPending) waiting++;
+  let waiting = await db.countFromIndex("readings", "bySync", IDBKeyRange.bound(...QUEUED_RANGE));
+  const rejected = await db.countFromIndex("readings", "bySync", "refused");
+  for (const s of await db.getAll("sweeps")) if (sweepWaits(s.sync)) waiting++;
   const leaks = await findingCounts(db);
   return { waiting: waiting + leaks.waiting, rejected: rejected + leaks.rejected };
 }

@@ -118,9 +118,7 @@ const sweep: LocalSweep = {
   timeConstantS: 1.5,
   alarmPpm: 2,
   warnings: [],
-  onServer: false,
-  submitPending: false,
-  rejected: null,
+  sync: { kind: "queued-new", thenSubmit: false },
 };
 const values = (i: number, ppm = 0) => ({
   x: i,
@@ -143,7 +141,7 @@ describe("the sync queue", () => {
     for (let i = 0; i < 10; i++) await addReading(db, sweep.id, values(i));
     expect(await queueCounts(db)).toEqual({ waiting: 11, rejected: 0 }); // 10 readings + the sweep
     const report = await syncOnce(db, server);
-    expect(report).toEqual({ confirmed: 10, rejected: 0, stoppedBy: null });
+    expect(report).toEqual({ confirmed: 10, rejected: 0, submitted: 0, stoppedBy: null });
     expect(server.order).toEqual((await sweepReadings(db, sweep.id)).map((r) => r.id));
     expect(await queueCounts(db)).toEqual({ waiting: 0, rejected: 0 });
   });
@@ -169,7 +167,12 @@ describe("the sync queue", () => {
     const report = await syncOnce(db, server);
     expect(report).toMatchObject({ confirmed: 2, rejected: 1 });
     const kept = (await sweepReadings(db, sweep.id)).find((r) => r.id === bad.id)!;
-    expect(kept).toMatchObject({ state: "rejected", reasons: { ppm: "must be 0 ppm or more" } });
+    expect(kept.sync).toEqual({
+      kind: "refused",
+      change: "new",
+      reasons: { ppm: "must be 0 ppm or more" },
+      editedAt: null,
+    });
     // a later reading is not held up by the rejected one
     await addReading(db, sweep.id, values(3));
     expect((await syncOnce(db, server)).confirmed).toBe(1);
@@ -196,14 +199,14 @@ describe("the sync queue", () => {
     await updateReading(db, a.id, { ppm: 4, note: "re-read" });
     await removeReading(db, b.id);
     expect((await sweepReadings(db, sweep.id)).map((r) => r.id)).toEqual([a.id]);
-    await saveSweep(db, { ...(await db.get("sweeps", sweep.id))!, submitPending: true });
+    await saveSweep(db, { ...(await db.get("sweeps", sweep.id))!, sync: { kind: "queued-submit" } });
     await addReading(db, sweep.id, values(2));
     await syncOnce(db, server);
     expect(server.edits).toMatchObject([{ id: a.id, body: { ppm: 4, note: "re-read" } }]);
     expect(server.deletes).toEqual([b.id]);
     expect(server.readings.size).toBe(3);
     expect(server.submitted).toEqual([sweep.id]);
-    expect((await db.get("sweeps", sweep.id))?.status).toBe("submitted");
+    expect(await db.get("sweeps", sweep.id)).toMatchObject({ status: "submitted", sync: { kind: "on-server" } });
     expect(await db.get("readings", b.id)).toBeUndefined();
   });
 
@@ -229,15 +232,19 @@ describe("the sync queue", () => {
     await addReading(db, other.id, values(1));
     const report = await syncOnce(db, server);
     expect(report).toMatchObject({ confirmed: 1, stoppedBy: null });
-    expect((await db.get("sweeps", sweep.id))?.rejected).toEqual({ planId: "is not calibrated yet" });
+    expect((await db.get("sweeps", sweep.id))?.sync).toEqual({
+      kind: "refused",
+      reasons: { planId: "is not calibrated yet" },
+      thenSubmit: false,
+    });
     expect([...server.readings.keys()]).toHaveLength(1);
-    expect((await sweepReadings(db, sweep.id))[0].state).toBe("pending"); // still on the device
+    expect((await sweepReadings(db, sweep.id))[0].sync).toEqual({ kind: "queued-new" }); // still on the device
   });
 
   it("keeps a reading open on the keypad off the server, lets typing change only the open one, and holds the submit until it is committed", async () => {
     const a = await addReading(db, sweep.id, values(0), { draft: true });
     await keepDraftValues(db, a.id, { ppm: 7 });
-    await saveSweep(db, { ...(await db.get("sweeps", sweep.id))!, submitPending: true });
+    await saveSweep(db, { ...(await db.get("sweeps", sweep.id))!, sync: { kind: "queued-new", thenSubmit: true } });
     await syncOnce(db, server);
     expect(server.readings.size).toBe(0);
     expect(server.submitted).toEqual([]); // the open reading belongs to the sweep
@@ -302,7 +309,7 @@ describe("the sync queue", () => {
     expect(server.findings.size).toBe(0);
     expect((await db.get("findings", held))?.state).toBe("pending");
     server.refuseSweeps.clear();
-    await saveSweep(db, { ...(await db.get("sweeps", sweep.id))!, rejected: null });
+    await saveSweep(db, { ...(await db.get("sweeps", sweep.id))!, sync: { kind: "queued-new", thenSubmit: false } });
     const bad = crypto.randomUUID();
     await queueFinding(db, "s", leak(bad, { component: null }), null);
     const report = await syncOnce(db, server);

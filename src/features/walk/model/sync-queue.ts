@@ -2,6 +2,15 @@ import type { ReadingInput } from "#core/contracts/sweeps";
 import { READINGS_BATCH_MAX } from "#core/contracts/sweeps";
 import { syncFindings } from "./finding-queue";
 import type { LocalReading, ReadingValues } from "./local-types";
+import {
+  afterEditConfirmed,
+  afterRefused,
+  afterUploadConfirmed,
+  editedAtOf,
+  isOnServer,
+  QUEUED_RANGE,
+} from "./reading-sync";
+import { afterSweepCreated, afterSweepRefused, sweepOnServer } from "./sweep-sync";
 import { RefusedError, type SyncTransport } from "./sync-transport";
 import type { WalkDb } from "./walk-db";
 
@@ -9,6 +18,8 @@ export interface SyncReport {
   /** Readings the server confirmed in this pass (stored now or already). */
   confirmed: number;
   rejected: number;
+  /** Sweeps whose submit the server confirmed in this pass. */
+  submitted: number;
   /** Why the pass stopped early (offline, server down, signed out); null when it got through. */
   stoppedBy: string | null;
 }
@@ -16,6 +27,10 @@ export interface SyncReport {
 /** 401 means the session ended: nothing is wrong with the data, so it stays queued. */
 function isRefusal(e: unknown): e is RefusedError {
   return e instanceof RefusedError && e.status !== 401;
+}
+
+function reasonsOf(e: RefusedError): Record<string, string> {
+  return Object.keys(e.fields).length ? e.fields : { "": e.message };
 }
 
 function valuesKey(r: ReadingValues): string {
@@ -46,10 +61,10 @@ export async function syncOnce(
   transport: SyncTransport,
   batchSize = READINGS_BATCH_MAX,
 ): Promise<SyncReport> {
-  const report: SyncReport = { confirmed: 0, rejected: 0, stoppedBy: null };
+  const report: SyncReport = { confirmed: 0, rejected: 0, submitted: 0, stoppedBy: null };
   try {
     for (const s of await db.getAll("sweeps")) {
-      if (s.onServer || s.rejected) continue;
+      if (s.sync.kind !== "queued-new") continue;
       try {
         await transport.createSweep(s.storeId, {
           id: s.id,
@@ -60,17 +75,21 @@ export async function syncOnce(
           defrost: s.defrost,
           startedAt: s.startedAt,
         });
-        await db.put("sweeps", { ...s, onServer: true });
+        await db.put("sweeps", { ...s, sync: afterSweepCreated(s.sync) });
       } catch (e) {
         if (!isRefusal(e)) throw e;
-        await db.put("sweeps", { ...s, rejected: Object.keys(e.fields).length ? e.fields : { "": e.message } });
+        await db.put("sweeps", { ...s, sync: afterSweepRefused(s.sync, reasonsOf(e)) });
       }
     }
     const sweeps = new Map((await db.getAll("sweeps")).map((s) => [s.id, s]));
-    const all = (await db.getAllFromIndex("readings", "byState", "pending")).sort((a, b) => a.seq - b.seq);
-    const fresh = all.filter(
-      (r) => !r.onServer && !r.draft && !r.deletePending && r.state === "pending" && sweeps.get(r.sweepId)?.onServer,
+    const onServer = (sweepId: string) => {
+      const s = sweeps.get(sweepId);
+      return s !== undefined && sweepOnServer(s.sync);
+    };
+    const all = (await db.getAllFromIndex("readings", "bySync", IDBKeyRange.bound(...QUEUED_RANGE))).sort(
+      (a, b) => a.seq - b.seq,
     );
+    const fresh = all.filter((r) => r.sync.kind === "queued-new" && onServer(r.sweepId));
     const bySweep = new Map<string, LocalReading[]>();
     for (const r of fresh) bySweep.set(r.sweepId, [...(bySweep.get(r.sweepId) ?? []), r]);
     for (const [sweepId, list] of bySweep) {
@@ -78,23 +97,24 @@ export async function syncOnce(
         await uploadBatch(db, transport, sweepId, list.slice(i, i + batchSize), report);
     }
     // Pinpointed leaks after the readings: their sweep must be on the server.
-    const leaks = await syncFindings(db, transport, (id) => sweeps.get(id)?.onServer === true);
+    const leaks = await syncFindings(db, transport, onServer);
     report.confirmed += leaks.confirmed;
     report.rejected += leaks.rejected;
     for (const r of all) {
-      if (r.onServer && r.deletePending && r.state === "pending") await sendDelete(db, transport, r);
-      else if (r.onServer && r.editPending && r.state === "pending") await sendEdit(db, transport, r, report);
+      if (r.sync.kind === "queued-delete") await sendDelete(db, transport, r, report);
+      else if (r.sync.kind === "queued-edit") await sendEdit(db, transport, r, report);
     }
     for (const s of await db.getAll("sweeps")) {
-      if (!s.submitPending || !s.onServer) continue;
+      if (s.sync.kind !== "queued-submit") continue;
       // An open reading still on a keypad holds the submit back too: it belongs to the sweep.
       const left = [
-        ...(await db.getAllFromIndex("readings", "byState", "pending")),
-        ...(await db.getAllFromIndex("readings", "byState", "draft")),
+        ...(await db.getAllFromIndex("readings", "bySync", IDBKeyRange.bound(...QUEUED_RANGE))),
+        ...(await db.getAllFromIndex("readings", "bySync", "draft")),
       ].some((r) => r.sweepId === s.id);
       if (left) continue;
       await transport.submitSweep(s.id);
-      await db.put("sweeps", { ...s, submitPending: false, status: "submitted" });
+      await db.put("sweeps", { ...s, sync: { kind: "on-server" }, status: "submitted" });
+      report.submitted++;
     }
   } catch (e) {
     report.stoppedBy = e instanceof Error ? e.message : String(e);
@@ -119,7 +139,7 @@ async function uploadBatch(
     if (!isRefusal(e)) throw e;
     // The whole batch was refused (e.g. the sweep was reviewed): each reading keeps the reason.
     confirmed = new Set();
-    for (const r of list) reasons.set(r.id, Object.keys(e.fields).length ? e.fields : { "": e.message });
+    for (const r of list) reasons.set(r.id, reasonsOf(e));
   }
   const sent = new Map(list.map((r) => [r.id, valuesKey(r)]));
   // One transaction, requests pipelined (not awaited one by one): a thousand readings are marked
@@ -128,6 +148,7 @@ async function uploadBatch(
   const tx = db.transaction("readings", "readwrite", { durability: "relaxed" });
   const ids = [...sent.keys()];
   const current = await Promise.all(ids.map((id) => tx.store.get(id)));
+  const stamp = new Date().toISOString();
   const writes: Promise<unknown>[] = [];
   current.forEach((now, i) => {
     const id = ids[i];
@@ -136,18 +157,10 @@ async function uploadBatch(
       report.confirmed++;
       // Changed on the keypad while the upload was in flight: the server has the old values.
       const changed = valuesKey(now) !== sent.get(id);
-      writes.push(
-        tx.store.put({
-          ...now,
-          onServer: true,
-          state: changed || now.deletePending ? "pending" : "synced",
-          editPending: changed,
-          reasons: null,
-        }),
-      );
-    } else if (reasons.has(id) && valuesKey(now) === sent.get(id)) {
+      writes.push(tx.store.put({ ...now, sync: afterUploadConfirmed(now.sync, changed, stamp) }));
+    } else if (reasons.has(id) && valuesKey(now) === sent.get(id) && !isOnServer(now.sync)) {
       report.rejected++;
-      writes.push(tx.store.put({ ...now, state: "rejected", reasons: reasons.get(id)! }));
+      writes.push(tx.store.put({ ...now, sync: afterRefused(now.sync, reasons.get(id)!) }));
     }
   });
   await Promise.all(writes);
@@ -165,7 +178,7 @@ async function sendEdit(db: WalkDb, transport: SyncTransport, r: LocalReading, r
       atLeast: r.atLeast,
       samplePoint: r.samplePoint,
       note: r.note,
-      ...(r.editedAt ? { editedAt: r.editedAt } : {}),
+      ...(editedAtOf(r.sync) ? { editedAt: editedAtOf(r.sync)! } : {}),
     });
   } catch (e) {
     if (!isRefusal(e)) throw e;
@@ -174,30 +187,22 @@ async function sendEdit(db: WalkDb, transport: SyncTransport, r: LocalReading, r
       return;
     }
     report.rejected++;
-    await db.put("readings", {
-      ...r,
-      state: "rejected",
-      reasons: Object.keys(e.fields).length ? e.fields : { "": e.message },
-    });
+    await db.put("readings", { ...r, sync: afterRefused(r.sync, reasonsOf(e)) });
     return;
   }
   const now = await db.get("readings", r.id);
-  if (now && valuesKey(now) === key && !now.deletePending)
-    await db.put("readings", { ...now, editPending: false, state: "synced", reasons: null });
+  if (now) await db.put("readings", { ...now, sync: afterEditConfirmed(now.sync, valuesKey(now) !== key) });
 }
 
-async function sendDelete(db: WalkDb, transport: SyncTransport, r: LocalReading): Promise<void> {
+async function sendDelete(db: WalkDb, transport: SyncTransport, r: LocalReading, report: SyncReport): Promise<void> {
   try {
-    await transport.deleteReading(r.sweepId, r.id, r.editedAt);
+    await transport.deleteReading(r.sweepId, r.id, editedAtOf(r.sync));
   } catch (e) {
     if (!isRefusal(e)) throw e;
     if (e.status !== 404) {
       // e.g. the sweep was reviewed meanwhile: keep it, say why, and go on with the rest.
-      await db.put("readings", {
-        ...r,
-        state: "rejected",
-        reasons: Object.keys(e.fields).length ? e.fields : { "": e.message },
-      });
+      report.rejected++;
+      await db.put("readings", { ...r, sync: afterRefused(r.sync, reasonsOf(e)) });
       return;
     }
   }

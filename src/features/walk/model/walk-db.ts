@@ -1,5 +1,7 @@
-import { openDB, type DBSchema, type IDBPDatabase } from "idb";
+import { openDB, type DBSchema, type IDBPDatabase, type IDBPTransaction, type StoreNames } from "idb";
 import type { LocalFinding, LocalReading, LocalSweep } from "./local-types";
+import { syncFromLegacy, type LegacyReadingFlags } from "./reading-sync";
+import { sweepSyncFromLegacy, type LegacySweepFlags } from "./sweep-sync";
 
 // The device's own copy of everything a sweep needs. Readings land here before any upload, so a
 // reload, a lost connection, a server restart or a crashed tab loses nothing.
@@ -9,7 +11,8 @@ export interface WalkDbSchema extends DBSchema {
   readings: {
     key: string;
     value: LocalReading;
-    indexes: { bySweep: string; bySweepSeq: [string, number]; byState: string };
+    /** bySync: the kind of `sync` (draft, queued-new, …): the queue reads only what waits. */
+    indexes: { bySweep: string; bySweepSeq: [string, number]; bySync: string };
   };
   /** Plan, fixtures, image, detectors, systems of a store: cached whenever a store is opened. */
   cache: { key: string; value: { key: string; value: unknown; savedAt: string } };
@@ -27,8 +30,8 @@ export function openWalkDb(name = WALK_DB_NAME, factory?: IDBFactory): Promise<W
   // idb opens with the global factory; tests pass fake-indexeddb's.
   if (factory) (globalThis as { indexedDB: IDBFactory }).indexedDB = factory;
   try {
-    return openDB<WalkDbSchema>(name, 3, {
-      upgrade(db, oldVersion, _newVersion, tx) {
+    return openDB<WalkDbSchema>(name, WALK_DB_VERSION, {
+      async upgrade(db, oldVersion, _newVersion, tx) {
         if (oldVersion < 1) {
           db.createObjectStore("sweeps", { keyPath: "id" });
           const readings = db.createObjectStore("readings", { keyPath: "id" });
@@ -37,13 +40,48 @@ export function openWalkDb(name = WALK_DB_NAME, factory?: IDBFactory): Promise<W
           db.createObjectStore("cache", { keyPath: "key" });
           db.createObjectStore("meta");
         }
-        // The queue reads only what waits, not the whole sweep, on every pass.
-        if (oldVersion < 2) tx.objectStore("readings").createIndex("byState", "state");
+        // Version 2 indexed the old `state` flag; version 4 replaces it by the `sync` union.
         if (oldVersion < 3) db.createObjectStore("findings", { keyPath: "clientId" });
+        if (oldVersion < 4) await toSyncUnion(tx, oldVersion);
       },
     });
   } finally {
     if (factory) (globalThis as { indexedDB: IDBFactory }).indexedDB = previous;
+  }
+}
+
+/** 4: a reading's and a sweep's sync state became one union each (reading-sync.ts, sweep-sync.ts). */
+export const WALK_DB_VERSION = 4;
+
+type UpgradeTx = IDBPTransaction<WalkDbSchema, StoreNames<WalkDbSchema>[], "versionchange">;
+
+/**
+ * Converts what a device already holds from the old flags (draft, state, onServer, editPending,
+ * deletePending, reasons; onServer, submitPending, rejected) into the unions, in the upgrade's own
+ * transaction: a reading waiting to upload before the app update still waits after it.
+ */
+async function toSyncUnion(tx: UpgradeTx, oldVersion: number): Promise<void> {
+  const now = new Date().toISOString();
+  const readings = tx.objectStore("readings");
+  // The old index is typed out of the schema now; the store still has it on devices at version 2 or 3.
+  const untyped = readings as unknown as { indexNames: DOMStringList; deleteIndex(name: string): void };
+  if (oldVersion >= 2 && untyped.indexNames.contains("byState")) untyped.deleteIndex("byState");
+  readings.createIndex("bySync", "sync.kind");
+  for (let c = await readings.openCursor(); c; c = await c.continue()) {
+    const old = c.value as LocalReading & LegacyReadingFlags;
+    if (old.sync) continue;
+    const { draft, state, onServer, editPending, deletePending, editedAt, reasons, ...rest } = old;
+    await c.update({
+      ...rest,
+      sync: syncFromLegacy({ draft, state, onServer, editPending, deletePending, editedAt, reasons }, now),
+    });
+  }
+  const sweeps = tx.objectStore("sweeps");
+  for (let c = await sweeps.openCursor(); c; c = await c.continue()) {
+    const old = c.value as LocalSweep & LegacySweepFlags;
+    if (old.sync) continue;
+    const { onServer, submitPending, rejected, ...rest } = old;
+    await c.update({ ...rest, sync: sweepSyncFromLegacy({ onServer, submitPending, rejected }) });
   }
 }
 

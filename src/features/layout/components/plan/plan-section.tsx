@@ -7,7 +7,7 @@ import { Button } from "../../../../components/ui/button";
 import { EmptyState } from "../../../../components/ui/empty-state";
 import { QueryError } from "../../../../components/ui/query-error";
 import { Spinner } from "../../../../components/ui/spinner";
-import { formatDate } from "../../../../lib/format";
+import { formatInZone } from "#core/domain/dates/format-in-zone";
 import { usePlans } from "../../../../entities/plans/plans-api";
 import { AlignmentPanel } from "./alignment-panel";
 import { CalibrationPanel } from "./calibration-panel";
@@ -18,16 +18,22 @@ const THUMB_WIDTH = 320;
 
 type Panel = "upload" | "calibrate" | "align" | null;
 
+type DayFormat = (iso: string) => string;
+
 /** The store page's plan: the current version, its scale, and the ways to change it. */
 export function PlanSection({
   storeId,
+  timeZone,
   canEdit,
   preference,
 }: {
   storeId: string;
+  /** The store's zone: a version's date is the store's day, whoever reads it. */
+  timeZone: string;
   canEdit: boolean;
   preference: LengthPreference;
 }) {
+  const day = (iso: string) => formatInZone(iso, timeZone, "date");
   const plans = usePlans(storeId);
   const [panel, setPanel] = useState<Panel>(null);
   const [notice, setNotice] = useState<string | null>(null);
@@ -58,7 +64,7 @@ export function PlanSection({
       {current ? (
         <>
           {notice ? <Alert tone="success">{notice}</Alert> : null}
-          <PlanCard plan={current} preference={preference} />
+          <PlanCard plan={current} preference={preference} day={day} />
           <div className="flex flex-wrap gap-2">
             {current.calibrated ? (
               <Link
@@ -114,14 +120,14 @@ export function PlanSection({
               onDone={(p) => after(p, `Version ${p.version} is uploaded; the fixtures were copied onto it.`)}
             />
           ) : null}
-          {plans.data && plans.data.length > 1 ? <VersionList plans={plans.data} /> : null}
+          {plans.data && plans.data.length > 1 ? <VersionList plans={plans.data} day={day} /> : null}
         </>
       ) : null}
     </section>
   );
 }
 
-function PlanCard({ plan, preference }: { plan: Plan; preference: LengthPreference }) {
+function PlanCard({ plan, preference, day }: { plan: Plan; preference: LengthPreference; day: DayFormat }) {
   const w = plan.widthM;
   const h = plan.heightM;
   const aspect = plan.image ? plan.image.heightPx / plan.image.widthPx : w && h ? h / w : 0.6;
@@ -153,7 +159,7 @@ function PlanCard({ plan, preference }: { plan: Plan; preference: LengthPreferen
       <dl className="grid content-start gap-x-6 gap-y-1 sm:grid-cols-[max-content_1fr]">
         <dt className="font-bold">Version</dt>
         <dd>
-          {plan.version} {plan.source === "blank" ? "(blank plan)" : "(drawing)"}, from {formatDate(plan.createdAt)}
+          {plan.version} {plan.source === "blank" ? "(blank plan)" : "(drawing)"}, from {day(plan.createdAt)}
         </dd>
         <dt className="font-bold">Scale</dt>
         <dd>
@@ -197,15 +203,15 @@ function PlanCard({ plan, preference }: { plan: Plan; preference: LengthPreferen
   );
 }
 
-function VersionList({ plans }: { plans: readonly Plan[] }) {
+function VersionList({ plans, day }: { plans: readonly Plan[]; day: DayFormat }) {
   return (
     <details className="rounded-md bg-surface p-4 edge">
       <summary className="min-h-11 cursor-pointer py-2 font-bold">All plan versions ({plans.length})</summary>
       <ul className="mt-2 space-y-1">
         {plans.map((p) => (
           <li key={p.id}>
-            Version {p.version}: {p.source === "blank" ? "blank plan" : "drawing"}, {formatDate(p.createdAt)},{" "}
-            {p.fixtureCount} fixtures
+            Version {p.version}: {p.source === "blank" ? "blank plan" : "drawing"}, {day(p.createdAt)}, {p.fixtureCount}{" "}
+            fixtures
             {p.calibrated ? "" : ", not calibrated"}
             {p === plans[0] ? " — current" : ""}
           </li>
