@@ -2,7 +2,7 @@ import { z } from "zod";
 import { text } from "./text";
 import { emailSchema, idSchema, passwordSchema, personNameSchema } from "./common";
 import { ROLES } from "../domain/roles";
-import { lengthUnitSchema, massUnitSchema } from "./units";
+import { lengthUnitSchema, massUnitSchema, numberFormatSchema } from "./units";
 
 export const signInInput = z.object({
   email: emailSchema,
@@ -39,7 +39,8 @@ export const sessionInfo = z.object({
   /** True when mail goes to the built-in fake SMTP server (demo and tests): the Outbox is then shown. */
   outboxEnabled: z.boolean(),
   /** The units to show: the person's own choice, else the active company's default. */
-  units: z.object({ length: lengthUnitSchema, mass: massUnitSchema }),
+  /** `number` is the company's number format; a session kept on a device from before it reads as 1,234.5. */
+  units: z.object({ length: lengthUnitSchema, mass: massUnitSchema, number: numberFormatSchema.default("1,234.5") }),
 });
 export type SessionInfo = z.infer<typeof sessionInfo>;
 

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { text } from "./text";
-import { lengthUnitSchema, massUnitSchema } from "./units";
+import { lengthUnitSchema, massUnitSchema, numberFormatSchema } from "./units";
 import { PAPER_SETTINGS } from "../domain/reports/paper";
 
 export const RULE_PROFILES = ["us-federal", "eu-fgas", "custom"] as const;
@@ -10,6 +10,7 @@ export const companySettings = z.object({
   name: text().trim().min(1, "is required").max(120, "must be at most 120 characters"),
   lengthUnit: lengthUnitSchema,
   massUnit: massUnitSchema,
+  numberFormat: numberFormatSchema,
   ruleProfile: z.enum(RULE_PROFILES),
   leakRateMethod: z.enum(LEAK_RATE_METHODS),
   detectorCheckIntervalDays: z
@@ -20,3 +21,5 @@ export const companySettings = z.object({
   paperSize: z.enum(PAPER_SETTINGS, "must be profile, letter or a4").optional(),
 });
 export type CompanySettings = z.infer<typeof companySettings>;
+/** PUT /api/company/settings: the number format may be left out (kept as it is) by clients older than it. */
+export const companySettingsInput = companySettings.partial({ numberFormat: true });

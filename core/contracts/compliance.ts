@@ -244,13 +244,23 @@ export const digestSendResult = z.object({
 
 /** GET /api/compliance/readings: how the company's profile reads rules not confirmed in their text. */
 export const readingsResponse = z.object({
+  profileId: text(),
   profileName: text(),
   readings: z.array(
     z.object({
       text: text(),
       kind: z.enum(["profile-value", "product-reading"]),
       decision: text().optional(),
+      /** The owner's acceptance of these very words under this profile, or null while none. */
+      accepted: z.object({ by: text(), at: text(), note: text() }).nullable(),
     }),
   ),
 });
 export type ReadingsResponse = z.infer<typeof readingsResponse>;
+
+/** POST /api/compliance/readings/accept: an owner accepts one listed reading as it is worded. */
+export const acceptReadingInput = z.object({
+  text: text({ error: "must be text" }).trim().min(1, "is required").max(2000, "must be at most 2,000 characters"),
+  note: text({ error: "must be text" }).trim().max(500, "must be at most 500 characters").default(""),
+});
+export type AcceptReadingInput = z.infer<typeof acceptReadingInput>;

@@ -31,7 +31,9 @@ export type Permission =
   | "findings.close"
   | "compliance.manage"
   | "reports.send"
-  | "digest.send";
+  | "digest.send"
+  /** Download the company's whole record set in one archive (for an auditor, or on leaving the service). */
+  | "records.export";
 
 const GRANTS: Record<Role, readonly Permission[]> = {
   owner: [
@@ -53,6 +55,7 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "compliance.manage",
     "reports.send",
     "digest.send",
+    "records.export",
   ],
   "lead-tech": [
     "members.read",

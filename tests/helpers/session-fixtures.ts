@@ -13,7 +13,7 @@ export function signedOutSession(csrfToken = "csrf-signed-out"): SessionInfo {
     memberships: [],
     csrfToken,
     outboxEnabled: true,
-    units: { length: "m", mass: "kg" },
+    units: { length: "m", mass: "kg", number: "1,234.5" },
   };
 }
 
@@ -30,6 +30,6 @@ export function sessionFor(
     memberships,
     csrfToken: options.csrfToken ?? "csrf-signed-in",
     outboxEnabled: options.outboxEnabled ?? true,
-    units: { length: "m", mass: "kg" },
+    units: { length: "m", mass: "kg", number: "1,234.5" },
   };
 }

@@ -11,7 +11,8 @@ export function copyProfile(base: RuleProfile, id: string, name: string): RulePr
   if (!id.trim()) throw new DomainInputError("id", "is empty");
   if (!name.trim()) throw new DomainInputError("name", "is empty");
   const copy = structuredClone(base);
-  return { ...copy, id, name, kind: "custom", basedOn: base.kind === "custom" ? base.basedOn : base.id };
+  // A built-in profile's kind is its id ("us-federal", "eu-fgas").
+  return { ...copy, id, name, kind: "custom", basedOn: base.kind === "custom" ? base.basedOn : base.kind };
 }
 
 function checkSource(s: Sourced<unknown>, field: string): void {

@@ -174,8 +174,8 @@ describe("units", () => {
   it("follow the person's own choice, else the company default", async () => {
     const a = await agentFor(t.app);
     const signedIn = await a.post("/api/auth/sign-in", { email: acme.people["lead-tech"].email, password: PASSWORD });
-    expect(signedIn.body.units).toEqual({ length: "m", mass: "kg" });
+    expect(signedIn.body.units).toEqual({ length: "m", mass: "kg", number: "1,234.5" });
     const own = await a.patch("/api/profile", { name: "Lead", lengthUnit: "ft-in", massUnit: null });
-    expect(own.body.units).toEqual({ length: "ft-in", mass: "kg" });
+    expect(own.body.units).toEqual({ length: "ft-in", mass: "kg", number: "1,234.5" });
   });
 });

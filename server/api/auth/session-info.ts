@@ -14,7 +14,7 @@ export async function listMemberships(ctx: AppContext, userId: string) {
     .orderBy(asc(companies.name));
 }
 
-const METRIC = { length: "m", mass: "kg" } as const;
+const METRIC = { length: "m", mass: "kg", number: "1,234.5" } as const;
 
 /** What GET /api/auth/session answers; also the reply to every call that changes the session. */
 export async function sessionInfo(ctx: AppContext, req: Request): Promise<SessionInfo> {
@@ -31,7 +31,7 @@ export async function sessionInfo(ctx: AppContext, req: Request): Promise<Sessio
     };
   const [company] = auth.membership
     ? await ctx.db
-        .select({ length: companies.lengthUnit, mass: companies.massUnit })
+        .select({ length: companies.lengthUnit, mass: companies.massUnit, number: companies.numberFormat })
         .from(companies)
         .where(eq(companies.id, auth.membership.companyId))
     : [METRIC];
@@ -41,6 +41,10 @@ export async function sessionInfo(ctx: AppContext, req: Request): Promise<Sessio
     memberships: await listMemberships(ctx, auth.user.id),
     csrfToken,
     outboxEnabled: ctx.config.outboxEnabled,
-    units: { length: auth.user.lengthUnit ?? company.length, mass: auth.user.massUnit ?? company.mass },
+    units: {
+      length: auth.user.lengthUnit ?? company.length,
+      mass: auth.user.massUnit ?? company.mass,
+      number: company.number,
+    },
   };
 }

@@ -2,7 +2,7 @@ import { Router } from "express";
 import { eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { securityLogRouter } from "./security-log.router";
-import { companySettings, type CompanySettings } from "#core/contracts/company";
+import { companySettingsInput, type CompanySettings } from "#core/contracts/company";
 import { companies } from "../../db/schema/index";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
@@ -13,6 +13,7 @@ async function readSettings(ctx: AppContext, companyId: string): Promise<Company
     name: c.name,
     lengthUnit: c.lengthUnit,
     massUnit: c.massUnit,
+    numberFormat: c.numberFormat,
     ruleProfile: c.ruleProfile,
     leakRateMethod: c.leakRateMethod,
     detectorCheckIntervalDays: c.detectorCheckIntervalDays,
@@ -27,14 +28,19 @@ export function companyRouter(ctx: AppContext): Router {
     res.json(await readSettings(ctx, member(req).companyId));
   });
 
-  router.put("/company/settings", requireMember("settings.manage"), validate(companySettings), async (req, res) => {
-    const companyId = member(req).companyId;
-    await ctx.db
-      .update(companies)
-      .set(req.body as CompanySettings)
-      .where(eq(companies.id, companyId));
-    res.json(await readSettings(ctx, companyId));
-  });
+  router.put(
+    "/company/settings",
+    requireMember("settings.manage"),
+    validate(companySettingsInput),
+    async (req, res) => {
+      const companyId = member(req).companyId;
+      await ctx.db
+        .update(companies)
+        .set(req.body as Partial<CompanySettings>)
+        .where(eq(companies.id, companyId));
+      res.json(await readSettings(ctx, companyId));
+    },
+  );
 
   router.use(securityLogRouter(ctx));
   return router;

@@ -1,7 +1,6 @@
 import { Router } from "express";
 import type { AppContext } from "../../context";
 import { ruleProfileSchema, startCustomProfileInput, type RuleProfileInput } from "#core/contracts/rule-profile";
-import type { RuleProfile } from "#core/domain/compliance/rule-profile";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { readCustomProfile, saveCustomProfile, startFrom } from "./custom-profile.service";
@@ -34,9 +33,7 @@ export function customProfileRouter(ctx: AppContext): Router {
     validate(ruleProfileSchema),
     async (req, res) => {
       const m = member(req);
-      res.json(
-        await saveCustomProfile(ctx, m.companyId, req.auth!.user.id, req.body as RuleProfileInput as RuleProfile),
-      );
+      res.json(await saveCustomProfile(ctx, m.companyId, req.auth!.user.id, req.body as RuleProfileInput));
     },
   );
 

@@ -7,8 +7,8 @@ import {
   chargeVoidInput,
   chronicReportInput,
   leakCheckInput,
+  acceptReadingInput,
 } from "#core/contracts/compliance";
-import { profileReadings } from "#core/domain/compliance/readings";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import {
@@ -19,7 +19,7 @@ import {
   getSystemRecords,
   voidCharge,
 } from "./records.service";
-import { companyRules } from "./system-records";
+import { acceptReading, listReadings } from "./reading-acceptances";
 
 const idParam = z.object({ id: z.uuid("must be a valid id") });
 
@@ -87,9 +87,18 @@ export function complianceRouter(ctx: AppContext): Router {
 
   // The rule-profile page's list of readings, linked from every "reading" marker.
   router.get("/compliance/readings", requireMember("stores.read"), async (req, res) => {
-    const { profile } = await companyRules(ctx, member(req).companyId);
-    res.json({ profileName: profile.name, readings: profileReadings(profile) });
+    res.json(await listReadings(ctx, member(req).companyId));
   });
+
+  // The owner accepts a reading as worded (who and when, audited); changing one is a custom profile.
+  router.post(
+    "/compliance/readings/accept",
+    requireMember("settings.manage"),
+    validate(acceptReadingInput),
+    async (req, res) => {
+      res.json(await acceptReading(ctx, member(req), req.auth!.user.id, req.body));
+    },
+  );
 
   return router;
 }

@@ -1,4 +1,6 @@
+import { and, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { complianceAudit } from "../../db/schema/index";
 import { createTestApp, type TestApp, signIn } from "../../../tests/helpers/test-app";
 import { seedCompany } from "../../../tests/helpers/fixtures";
 import { pdfText } from "../../../tests/helpers/pdf-text";
@@ -51,5 +53,52 @@ describe("research notes never reach a customer (docs/decisions/0044-readings-an
     for (const out of [text, JSON.stringify(rec.due)])
       expect(out).not.toMatch(/from memory|study guide|ACHR|magazine|Legal Register|not yet confirmed/i);
     expect(text).toContain("“reading”: how the product applies a rule whose text it has not confirmed");
+  });
+});
+
+describe("accepting a reading (docs/decisions/0048-accepting-readings.md)", () => {
+  it("records who accepted which words and when, once, in the compliance audit trail", async () => {
+    const owner = await signIn(t.app, co.people.owner);
+    const before = (await owner.get("/api/compliance/readings")).body;
+    expect(before.profileId).toBe("us-federal");
+    expect(before.readings.every((r: { accepted: unknown }) => r.accepted === null)).toBe(true);
+    // The repair clock from the first exceedance is the product's reading of 40 CFR 82.157(d) /
+    // 84.106 (docs/reference/standards.md §1; docs/decisions/0041-repair-clock.md).
+    const clock = before.readings.find((r: { text: string }) => /first leak rate above the threshold/.test(r.text));
+    const res = await owner.post("/api/compliance/readings/accept", { text: clock.text, note: "Agreed with counsel" });
+    expect(res.status).toBe(200);
+    const accepted = res.body.readings.find((r: { text: string }) => r.text === clock.text).accepted;
+    expect(accepted).toMatchObject({ by: "owner of Fernhollow Market", note: "Agreed with counsel" });
+    expect(Date.now() - Date.parse(accepted.at)).toBeLessThan(60_000);
+    expect(res.body.readings.filter((r: { accepted: unknown }) => r.accepted).length).toBe(1);
+
+    // Again: nothing new, the first acceptance stands.
+    const again = await owner.post("/api/compliance/readings/accept", { text: clock.text, note: "twice" });
+    expect(again.body.readings.find((r: { text: string }) => r.text === clock.text).accepted).toEqual(accepted);
+    const audit = await t.ctx.db
+      .select()
+      .from(complianceAudit)
+      .where(and(eq(complianceAudit.companyId, co.company.id), eq(complianceAudit.action, "reading-accepted")));
+    expect(audit).toHaveLength(1);
+    expect(audit[0].summary).toContain(clock.text);
+
+    // Everyone sees the acceptance; another company's list is untouched.
+    const tech = await signIn(t.app, co.people.technician);
+    const seen = (await tech.get("/api/compliance/readings")).body.readings;
+    expect(seen.find((r: { text: string }) => r.text === clock.text).accepted.by).toBe("owner of Fernhollow Market");
+    const other = await seedCompany(t.ctx, "Wrenfield Foods");
+    const stranger = await signIn(t.app, other.people.owner);
+    const theirs = (await stranger.get("/api/compliance/readings")).body.readings;
+    expect(theirs.every((r: { accepted: unknown }) => r.accepted === null)).toBe(true);
+  });
+
+  it("refuses words that are not listed now, naming the field, and is the owner's to give", async () => {
+    const owner = await signIn(t.app, co.people.owner);
+    const res = await owner.post("/api/compliance/readings/accept", { text: "Leaks may be ignored." });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields.text).toMatch(/is not a reading of US federal/);
+    const { readings } = (await owner.get("/api/compliance/readings")).body;
+    const engineer = await signIn(t.app, co.people.engineer);
+    expect((await engineer.post("/api/compliance/readings/accept", { text: readings[0].text })).status).toBe(403);
   });
 });

@@ -1,6 +1,5 @@
 import { Router } from "express";
 import { z } from "zod";
-import { eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import { logExport } from "../../lib/security-log";
 import { member, requireMember } from "../../middleware/auth";
@@ -9,7 +8,9 @@ import { getSystemRecords } from "../compliance/records.service";
 import { listFindings } from "../findings/findings.service";
 import { companyRules } from "../compliance/system-records";
 import { companyPaper } from "../../reports/company-paper";
-import { companies } from "../../db/schema/index";
+import { readerUnits } from "../reports/reader-units";
+import { loadArchive, writeArchive } from "./company-archive";
+import { companyMassDisplay } from "./company-display";
 import { leakRateStatementPdf } from "./leak-rate-statement";
 import { recordsCsv } from "./records-csv";
 
@@ -37,7 +38,7 @@ export function exportsRouter(ctx: AppContext): Router {
         "Content-Disposition": `attachment; filename="${fileName(records.system.name, "csv")}"`,
       });
       await logExport(ctx, req, "records.csv", { systemId: records.system.id });
-      res.send(recordsCsv(records, list));
+      res.send(recordsCsv(records, list, (await companyMassDisplay(ctx, member(req).companyId)).mass));
     },
   );
 
@@ -49,13 +50,14 @@ export function exportsRouter(ctx: AppContext): Router {
       const records = await getSystemRecords(ctx, member(req), res.locals.params.id);
       const list = await listFindings(ctx, member(req), records.store.id, { systemId: records.system.id });
       const companyId = member(req).companyId;
-      const [{ profile }, [company]] = await Promise.all([
+      const [{ profile }, display] = await Promise.all([
         companyRules(ctx, companyId),
-        ctx.db.select({ massUnit: companies.massUnit }).from(companies).where(eq(companies.id, companyId)),
+        companyMassDisplay(ctx, companyId),
       ]);
       const pdf = await leakRateStatementPdf(records, list, {
         paper: await companyPaper(ctx, companyId, profile),
-        massUnit: company?.massUnit ?? "kg",
+        massUnit: display.mass,
+        numberFormat: display.number,
       });
       await logExport(ctx, req, "leak-rate-statement.pdf", { systemId: records.system.id });
       res.set({
@@ -65,6 +67,27 @@ export function exportsRouter(ctx: AppContext): Router {
       res.send(pdf);
     },
   );
+
+  // The owner's whole record set (docs/decisions/0046-owners-record-archive.md). Tables are read
+  // before the headers go out; the PDFs are made while the zip streams.
+  router.get("/company/records-archive.zip", requireMember("records.export"), async (req, res) => {
+    const viewer = member(req);
+    const tables = await loadArchive(ctx, viewer);
+    const units = await readerUnits(ctx, req.auth!.user, viewer.companyId);
+    const day = new Date().toISOString().slice(0, 10);
+    await logExport(ctx, req, "records-archive.zip", { companyId: viewer.companyId });
+    res.set({
+      "Content-Type": "application/zip",
+      "Content-Disposition": `attachment; filename="plumeline-records-${day}.zip"`,
+    });
+    try {
+      await writeArchive(ctx, viewer, tables, units, res);
+    } catch (err) {
+      // The headers are gone, so no JSON error can follow: end the stream so the download fails visibly.
+      req.log?.error({ err }, "records archive stopped");
+      res.destroy(err instanceof Error ? err : undefined);
+    }
+  });
 
   return router;
 }

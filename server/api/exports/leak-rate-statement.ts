@@ -5,7 +5,7 @@ import { FINDING_EVENT_LABELS } from "#core/contracts/findings";
 import { APPLIANCE_TYPE_NAMES } from "#core/contracts/systems";
 import { readableSource } from "#core/domain/compliance/citations";
 import { formatCalendarDay as day, formatInZone } from "#core/domain/dates/format-in-zone";
-import { formatFixed } from "#core/domain/numbers/round-half-up";
+import { formatGrouped, type NumberFormat } from "#core/domain/numbers/number-format";
 import type { Paper } from "#core/domain/reports/paper";
 import { kgToPounds } from "#core/domain/units/mass";
 import type { MassPreference } from "#core/domain/units/format-units";
@@ -25,13 +25,15 @@ export interface StatementOptions {
   paper: Paper;
   /** The company's mass unit, printed first; the other follows in brackets (statements go to non-members). */
   massUnit: MassPreference;
+  /** The company's number format ("1,234.5", "1.234,5", "1 234,5"); figures are grouped in it. */
+  numberFormat?: NumberFormat;
   generatedAt?: Date;
 }
 
-/** `4.54 kg (10.0 lb)` or `10.0 lb (4.54 kg)`: the company's unit first. */
-export function statementMass(kg: number, first: MassPreference): string {
-  const metric = `${formatFixed(kg, 2)} kg`;
-  const pounds = `${formatFixed(kgToPounds(kg), 1)} lb`;
+/** `4.54 kg (10.0 lb)` or `1,500.0 lb (680.39 kg)`: the company's unit first, grouped in its number format. */
+export function statementMass(kg: number, first: MassPreference, format: NumberFormat = "1,234.5"): string {
+  const metric = `${formatGrouped(kg, format, 2)} kg`;
+  const pounds = `${formatGrouped(kgToPounds(kg), format, 1)} lb`;
   return first === "lb" ? `${pounds} (${metric})` : `${metric} (${pounds})`;
 }
 
@@ -343,7 +345,7 @@ export function leakRateStatementPdf(
     doc.on("end", () => resolve(Buffer.concat(chunks)));
     doc.on("error", reject);
   });
-  const mass = (kg: number) => statementMass(kg, options.massUnit);
+  const mass = (kg: number) => statementMass(kg, options.massUnit, options.numberFormat);
   const generated = `made ${formatInZone(options.generatedAt ?? new Date(), r.store.timeZone, "dateTime")}`;
 
   doc.font("bold").fontSize(17).fillColor(INK).text("Leak-rate statement", MARGIN);

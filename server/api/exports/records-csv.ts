@@ -1,8 +1,7 @@
 import { unparseCsv } from "#core/domain/reports/csv-cells";
 import type { SystemRecordsView } from "#core/contracts/compliance";
 import type { FindingDetail } from "#core/contracts/finding-actions";
-
-const KG_PER_LB = 0.45359237; // NIST SP 811, appendix B.8
+import { kgToPounds } from "#core/domain/units/mass";
 
 /**
  * One CSV of a system's records: every charge-added entry (voided ones too, with who voided them
@@ -10,7 +9,7 @@ const KG_PER_LB = 0.45359237; // NIST SP 811, appendix B.8
  * chronic-leaker report marked filed. Free text that begins like a formula (=, +, -, @, tab, CR) is
  * written with a leading ' so a spreadsheet shows it as text (OWASP CSV injection guidance).
  */
-export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[]): string {
+export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[], massFirst: "kg" | "lb" = "kg"): string {
   const rateAt = new Map(r.leakRates.flatMap((p) => p.additionIds.map((id) => [id, p] as const)));
   const rows: Record<string, string | number>[] = [];
   for (const a of r.additions) {
@@ -21,7 +20,7 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[]): 
       system: r.system.name,
       refrigerant: r.system.refrigerantId,
       amount_kg: Number(a.amountKg.toFixed(4)),
-      amount_lb: Number((a.amountKg / KG_PER_LB).toFixed(3)),
+      amount_lb: Number(kgToPounds(a.amountKg).toFixed(3)),
       entered: `${a.enteredValue} ${a.enteredUnit}`,
       technician: a.technician,
       reason: a.reason,
@@ -78,7 +77,7 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[]): 
       system: r.system.name,
       refrigerant: r.system.refrigerantId,
       amount_kg: Number(y.addedKg.toFixed(4)),
-      amount_lb: Number((y.addedKg / KG_PER_LB).toFixed(3)),
+      amount_lb: Number(kgToPounds(y.addedKg).toFixed(3)),
       entered: "",
       technician: y.filed.by,
       reason: y.filed.reference ? `reference ${y.filed.reference}` : y.filed.note,
@@ -107,6 +106,12 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[]): 
     gwp_basis: gwp?.statement ?? "",
     co2e_tonnes: r.co2e.known && r.co2e.tonnes !== null ? Math.round(r.co2e.tonnes * 1000) / 1000 : "",
   }));
+  // An lb company reads lb first (amount_lb before amount_kg); the columns are the same either way.
+  const keys = Object.keys(withBasis[0] ?? {});
+  const fields =
+    massFirst === "lb"
+      ? keys.map((k) => (k === "amount_kg" ? "amount_lb" : k === "amount_lb" ? "amount_kg" : k))
+      : keys;
   // Text cells escaped against formula injection (core/domain/reports/csv-cells.ts); numbers stay numbers.
-  return unparseCsv(withBasis);
+  return withBasis.length > 0 ? unparseCsv({ fields, data: withBasis }) : unparseCsv(withBasis);
 }

@@ -29,6 +29,7 @@ export async function requestSignUp(ctx: AppContext, input: Required<SignUpInput
       ruleProfile: input.ruleProfile,
       lengthUnit: input.lengthUnit,
       massUnit: input.massUnit,
+      numberFormat: input.numberFormat,
       tokenHash: hash,
       expiresAt: new Date(Date.now() + CONFIRM_VALID_MS),
     });
@@ -72,6 +73,7 @@ export async function confirmSignUp(ctx: AppContext, token: string): Promise<{ u
         ruleProfile: signup.ruleProfile,
         lengthUnit: signup.lengthUnit,
         massUnit: signup.massUnit,
+        numberFormat: signup.numberFormat,
       })
       .returning();
     const [user] = await tx

@@ -21,6 +21,7 @@ const form = (email: string) => ({
   ruleProfile: "eu-fgas",
   lengthUnit: "m",
   massUnit: "kg",
+  numberFormat: "1 234,5",
 });
 
 /** The mail goes through the outgoing queue: send what waits, then wait for the fake server to file it. */
@@ -55,9 +56,9 @@ describe("company sign-up", () => {
     expect(confirmed.body.memberships).toEqual([
       { companyId: confirmed.body.activeCompanyId, companyName: "Fairbrook Cold Service", role: "owner" },
     ]);
-    expect(confirmed.body.units).toEqual({ length: "m", mass: "kg" });
+    expect(confirmed.body.units).toEqual({ length: "m", mass: "kg", number: "1 234,5" });
     const [company] = await t.ctx.db.select().from(companies).where(eq(companies.name, "Fairbrook Cold Service"));
-    expect(company).toMatchObject({ ruleProfile: "eu-fgas", lengthUnit: "m", massUnit: "kg" });
+    expect(company).toMatchObject({ ruleProfile: "eu-fgas", lengthUnit: "m", massUnit: "kg", numberFormat: "1 234,5" });
 
     // the link works once; the owner signs in with the password chosen on the form
     expect((await visitor.post("/api/signup/confirm", { token })).body.error.code).toBe("invalid_token");

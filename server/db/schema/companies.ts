@@ -1,4 +1,5 @@
 import { index, integer, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import { NUMBER_FORMATS } from "#core/domain/numbers/number-format";
 import { users } from "./users";
 
 export const companies = pgTable("companies", {
@@ -10,6 +11,8 @@ export const companies = pgTable("companies", {
   massUnit: text({ enum: ["kg", "lb"] })
     .notNull()
     .default("kg"),
+  /** How numbers are written and read: "1,234.5", "1.234,5" or "1 234,5" (core/domain/numbers/number-format.ts). */
+  numberFormat: text({ enum: NUMBER_FORMATS }).notNull().default("1,234.5"),
   ruleProfile: text({ enum: ["us-federal", "eu-fgas", "custom"] })
     .notNull()
     .default("us-federal"),

@@ -148,7 +148,12 @@ export const chronicLeakerReports = pgTable(
   (t) => [uniqueIndex("chronic_leaker_reports_system_year").on(t.systemId, t.year)],
 );
 
-export const COMPLIANCE_AUDIT_ACTIONS = ["chronic-report-filed", "system-retired", "system-revised"] as const;
+export const COMPLIANCE_AUDIT_ACTIONS = [
+  "chronic-report-filed",
+  "system-retired",
+  "system-revised",
+  "reading-accepted",
+] as const;
 
 /** What was done to a system's compliance records, by whom and when (append-only). */
 export const complianceAudit = pgTable(
@@ -167,4 +172,29 @@ export const complianceAudit = pgTable(
     at: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index("compliance_audit_system").on(t.systemId, t.at)],
+);
+
+/**
+ * An owner's acceptance of one "reading" of the rule profile (a rule applied without its text
+ * confirmed), in the words the owner saw. Appended, never edited: changed wording is a new reading
+ * to accept. The compliance audit trail records each acceptance too.
+ */
+export const readingAcceptances = pgTable(
+  "reading_acceptances",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    companyId: uuid()
+      .notNull()
+      .references(() => companies.id, { onDelete: "cascade" }),
+    /** The profile the reading belongs to ("us-federal", "eu-fgas" or "custom"). */
+    profileId: text().notNull(),
+    /** The reading's words as listed when accepted. */
+    text: text().notNull(),
+    note: text().notNull().default(""),
+    byId: uuid()
+      .notNull()
+      .references(() => users.id),
+    at: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("reading_acceptances_company").on(t.companyId, t.profileId)],
 );

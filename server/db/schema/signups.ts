@@ -1,4 +1,5 @@
 import { index, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { NUMBER_FORMATS } from "#core/domain/numbers/number-format";
 
 /**
  * A company sign-up waiting for its e-mail to be confirmed. Nothing else exists until the link is
@@ -15,6 +16,7 @@ export const companySignups = pgTable(
     ruleProfile: text({ enum: ["us-federal", "eu-fgas"] }).notNull(),
     lengthUnit: text({ enum: ["m", "ft-in"] }).notNull(),
     massUnit: text({ enum: ["kg", "lb"] }).notNull(),
+    numberFormat: text({ enum: NUMBER_FORMATS }).notNull().default("1,234.5"),
     // SHA-256 of the e-mailed token, as for password resets.
     tokenHash: text().notNull().unique(),
     expiresAt: timestamp({ withTimezone: true }).notNull(),

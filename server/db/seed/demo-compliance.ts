@@ -4,7 +4,16 @@ import { addDays } from "#core/domain/dates/calendar-date";
 import { localDateOf } from "#core/domain/dates/time-zone";
 import type { Role } from "#core/domain/roles";
 import { KG_PER_POUND } from "#core/domain/units/mass";
-import { chargeAdditions, detectors, findingEvents, findings, fixtures, plans, systems } from "../schema/index";
+import {
+  chargeAdditions,
+  detectors,
+  findingEvents,
+  findings,
+  fixtures,
+  plans,
+  systemRevisions,
+  systems,
+} from "../schema/index";
 
 type EventKind = (typeof findingEvents.$inferInsert)["kind"];
 type Status = (typeof findingEvents.$inferInsert)["status"];
@@ -28,9 +37,26 @@ export async function seedDemoCompliance(
   // The systems were put on record well before their first addition.
   await tx
     .update(systems)
-    .set({ createdAt: new Date(`${day(420)}T17:00:00Z`) })
+    .set({ createdAt: new Date(`${day(420)}T17:00:00Z`), inServiceOn: day(420) })
     .where(eq(systems.storeId, ids.storeId));
   const rows = await tx.select().from(systems).where(eq(systems.storeId, ids.storeId));
+  // Each system's first revision, as entering a system writes one (docs/decisions/0043-system-revisions.md).
+  await tx.insert(systemRevisions).values(
+    rows.map((r) => ({
+      companyId: ids.companyId,
+      systemId: r.id,
+      effectiveFrom: day(420),
+      kind: "first" as const,
+      refrigerantId: r.refrigerantId,
+      fullChargeKg: r.fullChargeKg,
+      applianceType: r.applianceType,
+      automaticLeakDetection: r.automaticLeakDetection,
+      inServiceOn: day(420),
+      reason: "Entered",
+      byId: ids.people["lead-tech"],
+      recordedAt: new Date(`${day(420)}T17:00:00Z`),
+    })),
+  );
   const sys = (refrigerantId: string) => rows.find((r) => r.refrigerantId === refrigerantId)!;
   const rackA = sys("R-448A");
   const rackB = sys("R-744");

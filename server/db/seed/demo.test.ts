@@ -35,6 +35,12 @@ describe("demo seed", () => {
       "R-448A",
       "R-744",
     ]);
+    // Every demo system starts its history with a first revision (docs/decisions/0043-system-revisions.md).
+    for (const s of detail.systems as { id: string; inServiceOn: string; refrigerantId: string }[]) {
+      const { revisions } = (await lead.get(`/api/systems/${s.id}/revisions`)).body;
+      expect(revisions.map((r: { kind: string }) => r.kind)).toEqual(["first"]);
+      expect(revisions[0]).toMatchObject({ effectiveFrom: s.inServiceOn, refrigerantId: s.refrigerantId });
+    }
     expect(detail.currentPlan).toMatchObject({
       calibrated: true,
       source: "image",

@@ -9,6 +9,7 @@ import { useCompanySettings } from "../../features/settings/api/get-company-sett
 import { CompanySettingsForm } from "../../features/settings/components/company-settings-form";
 import { CustomProfileSection } from "../../features/settings/components/custom-profile-section";
 import { FailedJobsSection } from "../../features/settings/components/failed-jobs-section";
+import { RecordsArchiveSection } from "../../features/settings/components/records-archive-section";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
 
@@ -43,7 +44,10 @@ export function Component() {
           editable={can(membership.role, "settings.manage")}
         />
       ) : null}
-      {settings.data ? <ReadingsSection key={`readings-${membership.companyId}`} /> : null}
+      {settings.data ? (
+        <ReadingsSection key={`readings-${membership.companyId}`} canAccept={can(membership.role, "settings.manage")} />
+      ) : null}
+      {can(membership.role, "records.export") ? <RecordsArchiveSection /> : null}
       {/* Only owners manage the company (settings.manage): the list is theirs. */}
       {settings.data && can(membership.role, "settings.manage") ? (
         <FailedJobsSection key={`failed-jobs-${membership.companyId}`} />

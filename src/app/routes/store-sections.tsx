@@ -37,7 +37,9 @@ export const STORE_SECTIONS: readonly { id: string; Component: ComponentType<Sto
       <SystemsSection
         storeId={store.id}
         canEdit={can(role, "stores.edit") && !store.archivedAt}
+        canRevise={can(role, "compliance.manage") && !store.archivedAt}
         massUnit={units.mass}
+        numberFormat={units.number}
       />
     ),
   },

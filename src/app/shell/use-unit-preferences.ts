@@ -1,9 +1,12 @@
+import type { NumberFormat } from "#core/domain/numbers/number-format";
 import type { LengthPreference, MassPreference } from "#core/domain/units/format-units";
 import { useSignedIn } from "./session-context";
 
 export interface UnitPreferences {
   length: LengthPreference;
   mass: MassPreference;
+  /** The company's number format (a company setting, not a personal one: records read alike). */
+  number: NumberFormat;
 }
 
 /**
@@ -14,5 +17,5 @@ export interface UnitPreferences {
  */
 export function useUnitPreferences(): UnitPreferences {
   const { session } = useSignedIn();
-  return { length: session.units.length, mass: session.units.mass };
+  return { length: session.units.length, mass: session.units.mass, number: session.units.number };
 }

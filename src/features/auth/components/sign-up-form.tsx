@@ -1,3 +1,4 @@
+import { NUMBER_FORMAT_NAMES, NUMBER_FORMATS } from "#core/domain/numbers/number-format";
 import { useState, type FormEvent } from "react";
 import { Link } from "react-router";
 import { Alert } from "../../../components/ui/alert";
@@ -29,6 +30,7 @@ export function SignUpForm() {
     ruleProfile: "us-federal",
     lengthUnit: "ft-in",
     massUnit: "lb",
+    numberFormat: "1,234.5",
   });
   const [clientErrors, setClientErrors] = useState<FieldErrors>({});
   const [sentTo, setSentTo] = useState<string | null>(null);
@@ -147,6 +149,14 @@ export function SignUpForm() {
           value={values.massUnit}
           onChange={set("massUnit")}
           error={errors.massUnit}
+        />
+        <Select
+          label="Numbers written as"
+          name="numberFormat"
+          options={NUMBER_FORMATS.map((f) => ({ value: f, label: NUMBER_FORMAT_NAMES[f] }))}
+          value={values.numberFormat}
+          onChange={set("numberFormat")}
+          error={errors.numberFormat}
         />
       </div>
       <div className="flex flex-wrap items-center justify-between gap-3">

@@ -11,6 +11,7 @@ import { TextField } from "../../../components/ui/text-field";
 import { formErrorMessage, serverFieldErrors } from "../../../lib/form-errors";
 import { useAddSystemRevision, useSystemRevisions } from "../api/system-revisions";
 import { formatMass, type MassUnit } from "../model/figures";
+import { kgToPounds } from "#core/domain/units/mass";
 
 const KIND_NAMES: Record<string, string> = {
   first: "First values",
@@ -18,7 +19,6 @@ const KIND_NAMES: Record<string, string> = {
   correction: "Correction",
   retrofit: "Retrofit",
 };
-const KG_PER_LB = 0.45359237; // NIST SP 811, appendix B.8
 
 /**
  * The system's dated facts: each revision is in force from its day until the next one, and every
@@ -58,7 +58,7 @@ export function RevisionsSection({ r, unit, canRevise }: { r: SystemRecordsView;
 
 function RevisionForm({ r, unit }: { r: SystemRecordsView; unit: MassUnit }) {
   const s = r.system;
-  const current = unit === "lb" ? s.fullChargeKg / KG_PER_LB : s.fullChargeKg;
+  const current = unit === "lb" ? kgToPounds(s.fullChargeKg) : s.fullChargeKg;
   const [effectiveFrom, setEffectiveFrom] = useState(r.today);
   const [kind, setKind] = useState<(typeof REVISION_KINDS)[number]>("change");
   const [reason, setReason] = useState("");

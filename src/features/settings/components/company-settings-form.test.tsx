@@ -10,6 +10,7 @@ const settings: CompanySettings = {
   name: "Northfield Cold Care",
   lengthUnit: "ft-in",
   massUnit: "lb",
+  numberFormat: "1,234.5",
   ruleProfile: "us-federal",
   leakRateMethod: "annualizing",
   detectorCheckIntervalDays: 30,
@@ -47,6 +48,7 @@ describe("company settings form", () => {
     renderOnRoute(<CompanySettingsForm settings={settings} editable onSaved={onSaved} />, { path: "/settings" });
     fireEvent.change(screen.getByLabelText("Length"), { target: { value: "m" } });
     fireEvent.change(screen.getByLabelText("Mass"), { target: { value: "kg" } });
+    fireEvent.change(screen.getByLabelText("Number format"), { target: { value: "1.234,5" } });
     fireEvent.change(screen.getByLabelText("Rule profile"), { target: { value: "eu-fgas" } });
     fireEvent.change(screen.getByLabelText("Leak-rate method"), { target: { value: "rolling-average" } });
     fireEvent.change(screen.getByLabelText("Detector check interval (days)"), { target: { value: "90" } });
@@ -58,6 +60,7 @@ describe("company settings form", () => {
       ...settings,
       lengthUnit: "m",
       massUnit: "kg",
+      numberFormat: "1.234,5",
       ruleProfile: "eu-fgas",
       leakRateMethod: "rolling-average",
       detectorCheckIntervalDays: 90,

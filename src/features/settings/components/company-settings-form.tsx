@@ -16,6 +16,7 @@ import {
   LEAK_RATE_METHOD_LABELS,
   LENGTH_LABELS,
   MASS_LABELS,
+  NUMBER_FORMAT_LABELS,
   PAPER_LABELS,
   RULE_PROFILE_LABELS,
   optionsOf,
@@ -106,6 +107,15 @@ export function CompanySettingsForm({ settings, editable, onSaved }: CompanySett
             value={draft.massUnit}
             onChange={(e) => set("massUnit", e.target.value as Draft["massUnit"])}
             error={errors.massUnit}
+          />
+          <Select
+            label="Number format"
+            name="numberFormat"
+            hint="How numbers are shown and typed: with a decimal comma, 1,200 is one point two."
+            options={optionsOf(NUMBER_FORMAT_LABELS)}
+            value={draft.numberFormat}
+            onChange={(e) => set("numberFormat", e.target.value as Draft["numberFormat"])}
+            error={errors.numberFormat}
           />
         </section>
         <section className="grid gap-4 sm:grid-cols-2" aria-labelledby="rules-heading">

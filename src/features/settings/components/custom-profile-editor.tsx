@@ -1,5 +1,6 @@
 import { useState, type FormEvent, type ReactNode } from "react";
-import type { RuleProfileInput } from "#core/contracts/rule-profile";
+import { RULE_PROFILE_FIELDS as F, type RuleProfileInput } from "#core/contracts/rule-profile";
+import { APPLIANCE_TYPES } from "#core/contracts/systems";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
@@ -20,12 +21,6 @@ import {
   setAt,
   type DraftPath,
 } from "../model/profile-draft";
-
-const APPLIANCE_LABELS = {
-  "commercial-refrigeration": "Commercial refrigeration",
-  "industrial-process": "Industrial process refrigeration",
-  "comfort-cooling": "Comfort cooling",
-} as const;
 
 type Draft = RuleProfileInput;
 type Set = (path: DraftPath, value: unknown) => void;
@@ -214,34 +209,20 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
         disabled={disabled}
       />
 
-      <SourcedNumber label="Keep records (years)" path={["recordRetentionYears"]} {...common} />
+      <SourcedNumber {...F.recordRetentionYears} path={["recordRetentionYears"]} {...common} />
 
       {draft.leakRateParts.map((part, i) => {
         const p = (...rest: (string | number)[]): DraftPath => ["leakRateParts", i, ...rest];
         return (
           <Group key={part.id} title={part.title}>
             <h3 className="font-bold">Leak-rate thresholds (% per year) by appliance type</h3>
-            {(Object.keys(APPLIANCE_LABELS) as (keyof typeof APPLIANCE_LABELS)[]).map((a) => (
-              <SourcedNumber key={a} label={APPLIANCE_LABELS[a]} path={p("thresholds", a)} {...common} />
+            {APPLIANCE_TYPES.map((a) => (
+              <SourcedNumber key={a} {...F[`thresholds.${a}`]} path={p("thresholds", a)} {...common} />
             ))}
             <h3 className="font-bold">Deadlines</h3>
-            <SourcedNumber
-              label="Repair within (days)"
-              hint="From the day the leak rate above the threshold is learned."
-              path={p("repairDays")}
-              {...common}
-            />
-            <SourcedNumber
-              label="Initial verification test (days after the repair)"
-              hint="0: on the day of the repair."
-              path={p("initialVerificationDays")}
-              {...common}
-            />
-            <SourcedNumber
-              label="Follow-up verification test (days after the initial test)"
-              path={p("followUpVerificationDays")}
-              {...common}
-            />
+            <SourcedNumber {...F.repairDays} path={p("repairDays")} {...common} />
+            <SourcedNumber {...F.initialVerificationDays} path={p("initialVerificationDays")} {...common} />
+            <SourcedNumber {...F.followUpVerificationDays} path={p("followUpVerificationDays")} {...common} />
             {part.inspectionsAfterBreach ? (
               <>
                 <h3 className="font-bold">Leak inspections after a breach</h3>
@@ -249,9 +230,7 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
                   {(["largeEveryMonths", "otherEveryMonths"] as const).map((k) => (
                     <NumberBox
                       key={k}
-                      label={
-                        k === "largeEveryMonths" ? "Large systems: every (months)" : "Other systems: every (months)"
-                      }
+                      label={F[`inspectionsAfterBreach.value.${k}`].label}
                       name={pathKey(p("inspectionsAfterBreach", "value", k))}
                       value={part.inspectionsAfterBreach!.value[k]}
                       onValue={(x) => set(p("inspectionsAfterBreach", "value", k), x)}
@@ -261,7 +240,7 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
                   ))}
                 </div>
                 <SourceBox
-                  label="Source for the inspection intervals"
+                  label={F["inspectionsAfterBreach.source"].label}
                   path={p("inspectionsAfterBreach", "source")}
                   {...common}
                 />
@@ -269,7 +248,7 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
             ) : null}
             <h3 className="font-bold">Chronic leaker</h3>
             <SourcedNumber
-              label="Added in a calendar year (% of full charge)"
+              {...F["chronicLeaker.percentOfFullCharge"]}
               path={p("chronicLeaker", "percentOfFullCharge")}
               {...common}
             />
@@ -277,7 +256,7 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
               {(["month", "day"] as const).map((k) => (
                 <NumberBox
                   key={k}
-                  label={k === "month" ? "Report by: month" : "Report by: day"}
+                  label={F[`chronicLeaker.reportBy.value.${k}`].label}
                   name={pathKey(p("chronicLeaker", "reportBy", "value", k))}
                   value={part.chronicLeaker.reportBy.value[k]}
                   onValue={(x) => set(p("chronicLeaker", "reportBy", "value", k), x)}
@@ -286,7 +265,7 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
                 />
               ))}
               <SourceBox
-                label="Source for the report date"
+                label={F["chronicLeaker.reportBy.source"].label}
                 path={p("chronicLeaker", "reportBy", "source")}
                 {...common}
               />
@@ -361,9 +340,13 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
               </Button>
             </div>
           ) : null}
-          <SourceBox label="Source for the CO2e bands" path={["leakChecks", "co2eBands", "source"]} {...common} />
+          <SourceBox
+            label={F["leakChecks.co2eBands.source"].label}
+            path={["leakChecks", "co2eBands", "source"]}
+            {...common}
+          />
           <SourcedNumber
-            label="Re-check after a repair (months)"
+            {...F["leakChecks.recheckAfterRepairMonths"]}
             path={["leakChecks", "recheckAfterRepairMonths"]}
             {...common}
           />

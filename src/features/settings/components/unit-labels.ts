@@ -1,8 +1,11 @@
 import type { LengthUnit, MassUnit } from "#core/contracts/units";
+import { NUMBER_FORMAT_NAMES, type NumberFormat } from "#core/domain/numbers/number-format";
 import type { CompanySettings } from "#core/contracts/company";
 
 export const LENGTH_LABELS: Record<LengthUnit, string> = { m: "Metres", "ft-in": "Feet and inches" };
 export const MASS_LABELS: Record<MassUnit, string> = { kg: "Kilograms (kg)", lb: "Pounds (lb)" };
+
+export const NUMBER_FORMAT_LABELS: Record<NumberFormat, string> = { ...NUMBER_FORMAT_NAMES };
 
 export const RULE_PROFILE_LABELS: Record<CompanySettings["ruleProfile"], string> = {
   "us-federal": "US federal (EPA refrigerant management)",

@@ -101,3 +101,127 @@ describe("system form", () => {
     });
   });
 });
+
+const SYSTEM_ID = "5b6c7d8e-9f0a-4b1c-8d2e-3f4a5b6c7d8e";
+const rack = {
+  id: SYSTEM_ID,
+  storeId: STORE_ID,
+  name: "Rack A",
+  refrigerantId: "R-448A",
+  // 1,200 lb × 0.45359237 kg/lb (NIST SP 811, appendix B.8)
+  fullChargeKg: 1200 * 0.45359237,
+  applianceType: "commercial-refrigeration" as const,
+  automaticLeakDetection: false,
+  inServiceOn: "2025-03-01",
+  retired: null,
+  refrigerant: CATALOGUE.refrigerants.find((r) => r.id === "R-448A")!,
+  cautions: [],
+  createdAt: "2025-03-01T12:00:00.000Z",
+  updatedAt: "2025-03-01T12:00:00.000Z",
+};
+
+function openEdit(canRevise: boolean) {
+  const calls = stubFetch({
+    "GET /api/refrigerants": { body: CATALOGUE },
+    [`POST /api/systems/${SYSTEM_ID}/revisions`]: { status: 201, body: rack },
+    [`PATCH /api/systems/${SYSTEM_ID}`]: { body: rack },
+  });
+  renderOnRoute(
+    <SystemForm
+      storeId={STORE_ID}
+      system={rack}
+      massUnit="lb"
+      numberFormat="1,234.5"
+      canRevise={canRevise}
+      onDone={() => {}}
+      onCancel={() => {}}
+    />,
+  );
+  return calls;
+}
+
+describe("system form: grouped numbers in the company's format", () => {
+  it('reads "1,200" as twelve hundred with a decimal point, and echoes what it read', async () => {
+    const calls = open("lb");
+    fireEvent.change(screen.getByLabelText("System name"), { target: { value: "Rack C" } });
+    await waitFor(() => expect(screen.getAllByRole("option").length).toBeGreaterThan(10));
+    fireEvent.change(screen.getByLabelText("Refrigerant"), { target: { value: "R-448A" } });
+    fireEvent.change(screen.getByLabelText("Full charge"), { target: { value: "1,200" } });
+    expect(screen.getByText("Read as 1,200 lb")).toBeVisible();
+    fireEvent.click(screen.getByRole("button", { name: "Add system" }));
+    await waitFor(() => expect(calls.some((c) => c.method === "POST")).toBe(true));
+    expect(calls.find((c) => c.method === "POST")!.body).toMatchObject({ fullCharge: { value: 1200, unit: "lb" } });
+  });
+
+  it('reads "1,200" as one point two in a decimal-comma format', async () => {
+    const calls = stubFetch({ "GET /api/refrigerants": { body: CATALOGUE }, "POST /api/stores/x/systems": {} });
+    renderOnRoute(
+      <SystemForm storeId="x" massUnit="kg" numberFormat="1.234,5" onDone={() => {}} onCancel={() => {}} />,
+    );
+    fireEvent.change(screen.getByLabelText("Full charge"), { target: { value: "1,200" } });
+    expect(screen.getByText("Read as 1,2 kg")).toBeVisible();
+    fireEvent.change(screen.getByLabelText("Full charge"), { target: { value: "1.200,5" } });
+    expect(screen.getByText("Read as 1.200,5 kg")).toBeVisible();
+    expect(calls.filter((c) => c.method === "POST")).toHaveLength(0);
+  });
+
+  it("refuses digits grouped wrongly with the reason, before any request", async () => {
+    const calls = open("lb");
+    fireEvent.change(screen.getByLabelText("Full charge"), { target: { value: "12,00" } });
+    fireEvent.click(screen.getByRole("button", { name: "Add system" }));
+    expect(
+      await screen.findByText('Full charge must group thousands in threes: in 1,234.5 the decimal mark is ".".'),
+    ).toBeVisible();
+    expect(calls.filter((c) => c.method === "POST")).toHaveLength(0);
+  });
+
+  it("offers lb first to an lb company", async () => {
+    open("lb");
+    const unit = screen.getByLabelText("Charge unit") as HTMLSelectElement;
+    expect([...unit.options].map((o) => o.value)).toEqual(["lb", "kg"]);
+  });
+});
+
+describe("system form: editing a dated fact makes a revision", () => {
+  it("asks for the day, kind and reason, then posts a revision (docs/decisions/0043-system-revisions.md)", async () => {
+    const calls = openEdit(true);
+    const charge = screen.getByLabelText("Full charge") as HTMLInputElement;
+    expect(charge.value).toBe("1,200");
+    expect(screen.queryByLabelText("Reason")).toBeNull();
+    fireEvent.change(charge, { target: { value: "1,350" } });
+    expect(screen.getByText(/You changed the full charge/)).toBeVisible();
+    fireEvent.change(screen.getByLabelText("Takes effect on"), { target: { value: "2026-06-01" } });
+    fireEvent.click(screen.getByRole("button", { name: "Save revision" }));
+    expect(await screen.findByText("Reason is required.")).toBeVisible();
+    expect(calls.filter((c) => c.method !== "GET")).toHaveLength(0);
+
+    fireEvent.change(screen.getByLabelText("Reason"), { target: { value: "Receiver added" } });
+    fireEvent.click(screen.getByRole("button", { name: "Save revision" }));
+    await waitFor(() => expect(calls.some((c) => c.method === "POST")).toBe(true));
+    const post = calls.find((c) => c.method === "POST")!;
+    expect(post.path).toBe(`/api/systems/${SYSTEM_ID}/revisions`);
+    expect(post.body).toEqual({
+      effectiveFrom: "2026-06-01",
+      kind: "change",
+      reason: "Receiver added",
+      fullCharge: { value: 1350, unit: "lb" },
+    });
+    expect(calls.some((c) => c.method === "PATCH")).toBe(false);
+  });
+
+  it("calls a new refrigerant a retrofit by default", async () => {
+    openEdit(true);
+    await waitFor(() => expect(screen.getAllByRole("option").length).toBeGreaterThan(10));
+    fireEvent.change(screen.getByLabelText("Refrigerant"), { target: { value: "R-744" } });
+    expect((screen.getByLabelText("Kind of change") as HTMLSelectElement).value).toBe("retrofit");
+  });
+
+  it("renames with a plain edit and sends no revision", async () => {
+    const calls = openEdit(true);
+    fireEvent.change(screen.getByLabelText("System name"), { target: { value: "Rack A (MT)" } });
+    fireEvent.click(screen.getByRole("button", { name: "Save system" }));
+    await waitFor(() => expect(calls.some((c) => c.method === "PATCH")).toBe(true));
+    expect(calls.find((c) => c.method === "PATCH")!.body).toEqual({ name: "Rack A (MT)" });
+    expect(calls.some((c) => c.method === "POST")).toBe(false);
+  });
+});

@@ -2,11 +2,12 @@ import { useState, type FormEvent } from "react";
 import {
   APPLIANCE_TYPE_NAMES,
   APPLIANCE_TYPES,
+  revisionInput,
   type ApplianceType,
   type System,
   type SystemInput,
 } from "#core/contracts/systems";
-import { kgToPounds } from "#core/domain/units/mass";
+import type { NumberFormat } from "#core/domain/numbers/number-format";
 import type { MassPreference } from "#core/domain/units/format-units";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
@@ -14,68 +15,118 @@ import { Checkbox } from "../../../components/ui/checkbox";
 import { Select } from "../../../components/ui/select";
 import { TextField } from "../../../components/ui/text-field";
 import { formErrorMessage, serverFieldErrors, zodFieldErrors, type FieldErrors } from "../../../lib/form-errors";
+import { useAddRevision } from "../api/add-revision";
 import { createSystemInput, useCreateSystem } from "../api/create-system";
 import { useRefrigerants } from "../api/get-refrigerants";
 import { useUpdateSystem } from "../api/update-system";
+import { changedFacts, draftOf, readCharge, type SystemDraft } from "../model/system-draft";
 import { RefrigerantCautions } from "./refrigerant-cautions";
 import { RefrigerantPicker } from "./refrigerant-picker";
+import { RevisionFields, type RevisionDraft } from "./revision-fields";
 
-function chargeText(kg: number, unit: MassPreference): string {
-  const v = unit === "lb" ? kgToPounds(kg) : kg;
-  return String(Number(v.toFixed(3)));
-}
+const FACT_NAMES: Record<string, string> = {
+  refrigerantId: "the refrigerant",
+  fullCharge: "the full charge",
+  applianceType: "the appliance type",
+  automaticLeakDetection: "automatic leak detection",
+  inServiceOn: "the in-service date",
+};
 
-/** Adds a system to a store, or edits one; the charge is typed in kg or lb and kept in kg. */
+const localToday = () => new Date().toLocaleDateString("sv-SE");
+
+/**
+ * Adds a system to a store, or edits one. The charge is typed in kg or lb in the company's number
+ * format and echoed as read. An edit of a dated fact by someone who may revise (engineers, owners)
+ * becomes a dated revision with its day and reason; the name alone is a plain edit.
+ */
 export function SystemForm({
   storeId,
   system,
   massUnit,
+  numberFormat = "1,234.5",
+  canRevise = false,
   onDone,
   onCancel,
 }: {
   storeId: string;
   system?: System;
   massUnit: MassPreference;
+  numberFormat?: NumberFormat;
+  canRevise?: boolean;
   onDone: () => void;
   onCancel: () => void;
 }) {
   const refrigerants = useRefrigerants();
-  const [name, setName] = useState(system?.name ?? "");
-  const [refrigerantId, setRefrigerantId] = useState(system?.refrigerantId ?? "");
-  const [unit, setUnit] = useState<MassPreference>(massUnit);
-  const [charge, setCharge] = useState(system ? chargeText(system.fullChargeKg, massUnit) : "");
-  const [applianceType, setApplianceType] = useState<ApplianceType>(
-    system?.applianceType ?? "commercial-refrigeration",
+  const [initial] = useState<SystemDraft>(() =>
+    system
+      ? draftOf(system, massUnit, numberFormat)
+      : {
+          name: "",
+          refrigerantId: "",
+          charge: "",
+          unit: massUnit,
+          applianceType: "commercial-refrigeration",
+          automaticLeakDetection: false,
+          inServiceOn: "",
+        },
   );
-  const [ald, setAld] = useState(system?.automaticLeakDetection ?? false);
+  const [draft, setDraft] = useState<SystemDraft>(initial);
+  const [revision, setRevision] = useState<Omit<RevisionDraft, "kind"> & { kind: RevisionDraft["kind"] | null }>({
+    effectiveFrom: localToday(),
+    kind: null,
+    reason: "",
+  });
   const [clientErrors, setClientErrors] = useState<FieldErrors>({});
   const create = useCreateSystem();
   const update = useUpdateSystem();
-  const mutation = system ? update : create;
-  const errors = { ...serverFieldErrors(mutation.error), ...clientErrors };
-  const picked = refrigerants.data?.find((r) => r.id === refrigerantId) ?? null;
+  const revise = useAddRevision();
+  const facts = system ? changedFacts(initial, draft, numberFormat) : {};
+  const factKeys = Object.keys(facts);
+  const asRevision = Boolean(system) && canRevise && factKeys.length > 0;
+  const kind = revision.kind ?? (facts.refrigerantId ? "retrofit" : "change");
+  const mutations = [create, update, revise];
+  const errors = {
+    ...Object.assign({}, ...mutations.map((m) => serverFieldErrors(m.error))),
+    ...clientErrors,
+  } as FieldErrors;
+  const read = readCharge(draft, numberFormat);
+  const picked = refrigerants.data?.find((r) => r.id === draft.refrigerantId) ?? null;
+  const set = <K extends keyof SystemDraft>(k: K, v: SystemDraft[K]) => setDraft((d) => ({ ...d, [k]: v }));
 
   function submit(e: FormEvent) {
     e.preventDefault();
-    const value = charge.trim() === "" ? Number.NaN : Number(charge);
     const values: SystemInput = {
-      name,
-      refrigerantId,
-      fullCharge: { value, unit },
-      applianceType,
-      automaticLeakDetection: ald,
+      name: draft.name,
+      refrigerantId: draft.refrigerantId,
+      fullCharge: read.charge,
+      applianceType: draft.applianceType,
+      automaticLeakDetection: draft.automaticLeakDetection,
+      ...(draft.inServiceOn ? { inServiceOn: draft.inServiceOn } : {}),
     };
     const parsed = createSystemInput.safeParse(values);
-    if (!parsed.success) {
-      setClientErrors(zodFieldErrors(parsed.error));
+    const found: FieldErrors = parsed.success ? {} : zodFieldErrors(parsed.error);
+    if (read.problem) found["fullCharge.value"] = read.problem;
+    const rev = asRevision ? revisionInput.safeParse({ ...revision, kind, ...facts }) : null;
+    if (rev && !rev.success) Object.assign(found, zodFieldErrors(rev.error));
+    setClientErrors(found);
+    if (Object.keys(found).length > 0 || !parsed.success) return;
+    const done = { onSuccess: () => onDone() };
+    if (!system) return create.mutate({ storeId, input: parsed.data }, done);
+    if (rev?.success) {
+      const reviseNow = () => revise.mutate({ id: system.id, input: rev.data }, done);
+      if (draft.name !== system.name)
+        update.mutate({ id: system.id, input: { name: parsed.data.name } }, { onSuccess: reviseNow });
+      else reviseNow();
       return;
     }
-    setClientErrors({});
-    if (system) update.mutate({ id: system.id, input: parsed.data }, { onSuccess: () => onDone() });
-    else create.mutate({ storeId, input: parsed.data }, { onSuccess: () => onDone() });
+    // Without the right to revise (or with only the name changed), a plain edit: the server refuses
+    // a dated fact once records exist, naming the field.
+    const input = { ...(draft.name !== system.name ? { name: parsed.data.name } : {}), ...facts };
+    if (Object.keys(input).length === 0) return onDone();
+    update.mutate({ id: system.id, input }, done);
   }
 
-  const formError = formErrorMessage(mutation.error);
+  const formError = mutations.map((m) => formErrorMessage(m.error)).find(Boolean) ?? null;
   return (
     <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,22rem)]">
       <form onSubmit={submit} noValidate className="space-y-4 rounded-md bg-surface p-4 edge">
@@ -84,48 +135,77 @@ export function SystemForm({
         <TextField
           label="System name"
           hint="As on the rack or unit, e.g. Rack A (medium temperature)"
-          value={name}
-          onChange={(e) => setName(e.target.value)}
+          value={draft.name}
+          onChange={(e) => set("name", e.target.value)}
           error={errors.name}
         />
         <RefrigerantPicker
           refrigerants={refrigerants.data ?? []}
-          value={refrigerantId}
-          onChange={setRefrigerantId}
+          value={draft.refrigerantId}
+          onChange={(v) => set("refrigerantId", v)}
           error={errors.refrigerantId}
         />
         <div className="flex flex-wrap items-start gap-3">
           <TextField
             label="Full charge"
             inputMode="decimal"
-            value={charge}
-            onChange={(e) => setCharge(e.target.value)}
+            hint={read.echo ? `Read as ${read.echo}` : `Written as ${numberFormat}`}
+            value={draft.charge}
+            onChange={(e) => set("charge", e.target.value)}
             error={errors["fullCharge.value"] ?? errors.fullCharge}
-            className="w-48"
+            className="w-56"
           />
           <Select
             label="Charge unit"
-            value={unit}
-            onChange={(e) => setUnit(e.target.value as MassPreference)}
-            options={[
-              { value: "kg", label: "kg" },
-              { value: "lb", label: "lb" },
-            ]}
+            value={draft.unit}
+            onChange={(e) => set("unit", e.target.value as MassPreference)}
+            options={
+              massUnit === "lb"
+                ? [
+                    { value: "lb", label: "lb" },
+                    { value: "kg", label: "kg" },
+                  ]
+                : [
+                    { value: "kg", label: "kg" },
+                    { value: "lb", label: "lb" },
+                  ]
+            }
             error={errors["fullCharge.unit"]}
             className="w-28"
           />
         </div>
         <Select
           label="Appliance type"
-          value={applianceType}
-          onChange={(e) => setApplianceType(e.target.value as ApplianceType)}
+          value={draft.applianceType}
+          onChange={(e) => set("applianceType", e.target.value as ApplianceType)}
           options={APPLIANCE_TYPES.map((t) => ({ value: t, label: APPLIANCE_TYPE_NAMES[t] }))}
           error={errors.applianceType}
         />
-        <Checkbox label="Has automatic leak detection" checked={ald} onChange={(e) => setAld(e.target.checked)} />
+        <Checkbox
+          label="Has automatic leak detection"
+          checked={draft.automaticLeakDetection}
+          onChange={(e) => set("automaticLeakDetection", e.target.checked)}
+        />
+        <TextField
+          label="In service since"
+          type="date"
+          hint={system ? undefined : "Leave empty for today"}
+          value={draft.inServiceOn}
+          onChange={(e) => set("inServiceOn", e.target.value)}
+          error={errors.inServiceOn}
+          className="w-56"
+        />
+        {asRevision ? (
+          <RevisionFields
+            value={{ ...revision, kind }}
+            onChange={setRevision}
+            changed={factKeys.map((k) => FACT_NAMES[k] ?? k)}
+            errors={errors}
+          />
+        ) : null}
         <div className="flex flex-wrap gap-2">
-          <Button type="submit" busy={mutation.isPending}>
-            {system ? "Save system" : "Add system"}
+          <Button type="submit" busy={mutations.some((m) => m.isPending)}>
+            {system ? (asRevision ? "Save revision" : "Save system") : "Add system"}
           </Button>
           <Button variant="secondary" onClick={onCancel}>
             Cancel

@@ -1,6 +1,8 @@
 import { useState } from "react";
 import { APPLIANCE_TYPE_NAMES, type System } from "#core/contracts/systems";
-import { formatMass, type MassPreference } from "#core/domain/units/format-units";
+import { formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
+import type { MassPreference } from "#core/domain/units/format-units";
+import { kgToPounds } from "#core/domain/units/mass";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { DataTable } from "../../../components/ui/data-table";
@@ -16,11 +18,16 @@ import { SystemForm } from "./system-form";
 export function SystemsSection({
   storeId,
   canEdit,
+  canRevise = false,
   massUnit,
+  numberFormat = "1,234.5",
 }: {
   storeId: string;
   canEdit: boolean;
+  /** Engineers and owners change dated facts by a revision (docs/decisions/0043-system-revisions.md). */
+  canRevise?: boolean;
   massUnit: MassPreference;
+  numberFormat?: NumberFormat;
 }) {
   const systems = useSystems(storeId);
   const [editing, setEditing] = useState<string | "new" | null>(null);
@@ -57,6 +64,8 @@ export function SystemsSection({
           storeId={storeId}
           system={editedSystem}
           massUnit={massUnit}
+          numberFormat={numberFormat}
+          canRevise={canRevise}
           onDone={() => setEditing(null)}
           onCancel={() => setEditing(null)}
         />
@@ -106,7 +115,8 @@ export function SystemsSection({
             },
             {
               header: "Full charge",
-              cell: (s) => formatMass(s.fullChargeKg, massUnit, 1),
+              cell: (s) =>
+                `${formatQuantity(massUnit === "lb" ? kgToPounds(s.fullChargeKg) : s.fullChargeKg, numberFormat, 1)} ${massUnit}`,
               sortValue: (s) => s.fullChargeKg,
             },
             {
@@ -115,7 +125,7 @@ export function SystemsSection({
               filterValue: (s) => APPLIANCE_TYPE_NAMES[s.applianceType],
             },
             { header: "Automatic leak detection", cell: (s) => (s.automaticLeakDetection ? "Yes" : "No") },
-            ...(canEdit
+            ...(canEdit || canRevise
               ? [
                   {
                     header: "Actions",
@@ -142,13 +152,15 @@ export function SystemsSection({
                           <Button variant="secondary" onClick={() => setEditing(s.id)} aria-label={`Edit ${s.name}`}>
                             Edit
                           </Button>
-                          <Button
-                            variant="quiet"
-                            onClick={() => setConfirmDelete(s.id)}
-                            aria-label={`Delete ${s.name}`}
-                          >
-                            Delete
-                          </Button>
+                          {canEdit ? (
+                            <Button
+                              variant="quiet"
+                              onClick={() => setConfirmDelete(s.id)}
+                              aria-label={`Delete ${s.name}`}
+                            >
+                              Delete
+                            </Button>
+                          ) : null}
                         </div>
                       ),
                   },

@@ -1,0 +1,129 @@
+import { asc, eq, getTableColumns, inArray, type Table } from "drizzle-orm";
+import type { AppContext } from "../../context";
+import {
+  chargeAdditions,
+  chronicLeakerReports,
+  complianceAudit,
+  findingEvents,
+  findings,
+  leakChecks,
+  memberships,
+  readingAcceptances,
+  readingAudit,
+  readings,
+  stores,
+  sweeps,
+  systemRevisions,
+  systems,
+  users,
+} from "../../db/schema/index";
+
+/** One CSV of the owner's archive: its file name and its rows as the database holds them. */
+export interface ArchiveTable {
+  file: string;
+  /** Column names in order (camelCase, as in the schema); an empty table still has its header. */
+  columns: string[];
+  rows: Record<string, unknown>[];
+}
+
+const cols = (t: Table) => Object.keys(getTableColumns(t));
+
+/**
+ * Every table of records a company owns, read with its company filter and nothing else, so the
+ * archive is the record set itself rather than a view of it. Readings and finding steps reach
+ * the company through their sweep and finding. Ordered by time so an auditor reads them in order.
+ */
+export async function archiveTables(ctx: AppContext, companyId: string): Promise<ArchiveTable[]> {
+  const db = ctx.db;
+  const companySweeps = db.select({ id: sweeps.id }).from(sweeps).where(eq(sweeps.companyId, companyId));
+  const companyFindings = db.select({ id: findings.id }).from(findings).where(eq(findings.companyId, companyId));
+  const [
+    storeRows,
+    people,
+    systemRows,
+    revisionRows,
+    additionRows,
+    checkRows,
+    findingRows,
+    stepRows,
+    filingRows,
+    auditRows,
+    sweepRows,
+    readingRows,
+    editRows,
+    acceptanceRows,
+  ] = await Promise.all([
+    db.select().from(stores).where(eq(stores.companyId, companyId)).orderBy(asc(stores.createdAt), asc(stores.id)),
+    db
+      .select({ id: users.id, name: users.name, role: memberships.role })
+      .from(memberships)
+      .innerJoin(users, eq(users.id, memberships.userId))
+      .where(eq(memberships.companyId, companyId))
+      .orderBy(asc(users.name), asc(users.id)),
+    db.select().from(systems).where(eq(systems.companyId, companyId)).orderBy(asc(systems.createdAt), asc(systems.id)),
+    db
+      .select()
+      .from(systemRevisions)
+      .where(eq(systemRevisions.companyId, companyId))
+      .orderBy(asc(systemRevisions.effectiveFrom), asc(systemRevisions.recordedAt), asc(systemRevisions.id)),
+    db
+      .select()
+      .from(chargeAdditions)
+      .where(eq(chargeAdditions.companyId, companyId))
+      .orderBy(asc(chargeAdditions.addedOn), asc(chargeAdditions.recordedAt), asc(chargeAdditions.id)),
+    db
+      .select()
+      .from(leakChecks)
+      .where(eq(leakChecks.companyId, companyId))
+      .orderBy(asc(leakChecks.checkedOn), asc(leakChecks.recordedAt), asc(leakChecks.id)),
+    db
+      .select()
+      .from(findings)
+      .where(eq(findings.companyId, companyId))
+      .orderBy(asc(findings.foundAt), asc(findings.id)),
+    db
+      .select()
+      .from(findingEvents)
+      .where(inArray(findingEvents.findingId, companyFindings))
+      .orderBy(asc(findingEvents.at), asc(findingEvents.id)),
+    db
+      .select()
+      .from(chronicLeakerReports)
+      .where(eq(chronicLeakerReports.companyId, companyId))
+      .orderBy(asc(chronicLeakerReports.year), asc(chronicLeakerReports.id)),
+    db
+      .select()
+      .from(complianceAudit)
+      .where(eq(complianceAudit.companyId, companyId))
+      .orderBy(asc(complianceAudit.at), asc(complianceAudit.id)),
+    db.select().from(sweeps).where(eq(sweeps.companyId, companyId)).orderBy(asc(sweeps.startedAt), asc(sweeps.id)),
+    db
+      .select()
+      .from(readings)
+      .where(inArray(readings.sweepId, companySweeps))
+      .orderBy(asc(readings.sweepId), asc(readings.takenAt), asc(readings.id)),
+    db.select().from(readingAudit).where(inArray(readingAudit.sweepId, companySweeps)).orderBy(asc(readingAudit.id)),
+    db
+      .select()
+      .from(readingAcceptances)
+      .where(eq(readingAcceptances.companyId, companyId))
+      .orderBy(asc(readingAcceptances.at), asc(readingAcceptances.id)),
+  ]);
+  return [
+    { file: "stores.csv", columns: cols(stores), rows: storeRows },
+    { file: "people.csv", columns: ["id", "name", "role"], rows: people },
+    { file: "systems.csv", columns: cols(systems), rows: systemRows },
+    { file: "system-revisions.csv", columns: cols(systemRevisions), rows: revisionRows },
+    { file: "charge-added.csv", columns: cols(chargeAdditions), rows: additionRows },
+    { file: "leak-checks.csv", columns: cols(leakChecks), rows: checkRows },
+    { file: "findings.csv", columns: cols(findings), rows: findingRows },
+    // Repairs, verification tests (initial and follow-up) and closing are steps of a finding.
+    { file: "finding-steps.csv", columns: cols(findingEvents), rows: stepRows },
+    { file: "chronic-leaker-filings.csv", columns: cols(chronicLeakerReports), rows: filingRows },
+    { file: "compliance-audit.csv", columns: cols(complianceAudit), rows: auditRows },
+    { file: "rule-readings-accepted.csv", columns: cols(readingAcceptances), rows: acceptanceRows },
+    { file: "sweeps.csv", columns: cols(sweeps), rows: sweepRows },
+    { file: "readings.csv", columns: cols(readings), rows: readingRows },
+    { file: "reading-edits.csv", columns: cols(readingAudit), rows: editRows },
+  ];
+}
