@@ -1,5 +1,6 @@
 import type { DueItem } from "#core/contracts/compliance";
 import { readableSource } from "#core/domain/compliance/citations";
+import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 
 const STATE_WORDS: Record<DueItem["state"], string> = {
   overdue: "OVERDUE",
@@ -19,7 +20,7 @@ export function digestMail(args: {
   const lines = args.items.map((i) => {
     const where = [i.storeName, i.systemName].filter(Boolean).join(" · ") || "Company";
     const when = i.dueOn
-      ? `${i.dueOn} (${STATE_WORDS[i.state]}${i.daysLeft !== null && i.daysLeft < 0 ? `, ${-i.daysLeft} days late` : ""})`
+      ? `${formatCalendarDay(i.dueOn)} (${STATE_WORDS[i.state]}${i.daysLeft !== null && i.daysLeft < 0 ? `, ${-i.daysLeft} days late` : ""})`
       : "no date on record (overdue)";
     return [
       `- ${when}: ${i.what}`,
@@ -34,7 +35,7 @@ export function digestMail(args: {
   return {
     subject,
     text: [
-      `What falls due for ${args.companyName} from ${args.localDate} through the next ${args.days} days, including anything overdue.`,
+      `What falls due for ${args.companyName} from ${formatCalendarDay(args.localDate)} through the next ${args.days} days, including anything overdue.`,
       "",
       ...(lines.length ? lines : ["Nothing is due. The Today screen has the full picture."]),
       "",

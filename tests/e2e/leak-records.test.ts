@@ -119,7 +119,7 @@ it("a technician confirms a leak and records charge added; the leak rate and Tod
     .getByText(/Repair: leak rate 60\.8 %/)
     .first()
     .waitFor();
-  await owner.getByText(new RegExp(`${repairDue} \\(due soon`)).waitFor();
+  await owner.getByText(new RegExp(`${formatCalendarDay(repairDue)} \\(due soon`)).waitFor();
 
   // The technician records the repair; the deadline and the over-threshold line go.
   await tech
@@ -141,16 +141,22 @@ it("a technician confirms a leak and records charge added; the leak rate and Tod
   // initial test on the repair day ("as soon as practicable" [S:R8]), then the follow-up within
   // 10 days of it (docs/reference/standards.md §1 [M]).
   const today = localDay(0);
-  await owner.getByRole("link", { name: `Initial verification test after the repair of ${today}` }).waitFor();
+  await owner
+    .getByRole("link", { name: `Initial verification test after the repair of ${formatCalendarDay(today)}` })
+    .waitFor();
   await tech.getByRole("button", { name: "Record the initial verification test", exact: true }).click();
   await tech.getByLabel("Result").selectOption("passed");
   await tech.getByRole("button", { name: "Save: record the initial verification test" }).click();
   await tech
-    .getByText(`Follow-up verification test after the initial test of ${today}: ${formatCalendarDay(localDay(-10))}`)
+    .getByText(
+      `Follow-up verification test after the initial test of ${formatCalendarDay(today)}: ${formatCalendarDay(localDay(-10))}`,
+    )
     .waitFor();
   await owner.reload(); // the owner was already on Today
   await owner.getByRole("heading", { name: "Systems", exact: true }).waitFor();
-  await owner.getByRole("link", { name: `Follow-up verification test after the initial test of ${today}` }).click();
+  await owner
+    .getByRole("link", { name: `Follow-up verification test after the initial test of ${formatCalendarDay(today)}` })
+    .click();
   await owner.waitForURL(/\/findings\//); // the item leads to the finding it comes from
   await owner.getByRole("heading", { name: "Deadlines" }).waitFor();
   // Sources read as citations, never as our internal tags.

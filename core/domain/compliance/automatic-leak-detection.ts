@@ -1,6 +1,7 @@
 import { addDays, compareDates, type IsoDate } from "../dates/calendar-date";
 import { automaticLeakDetectionRequired } from "./inspections-after-breach";
 import type { ApplianceType, LeakRatePart } from "./rule-profile";
+import { formatCalendarDay as day } from "../dates/format-in-zone";
 
 export interface AutomaticLeakDetection {
   required: boolean;
@@ -38,7 +39,7 @@ export function automaticLeakDetection(
   return {
     required: true,
     dueOn,
-    reason: `required from ${limit.value.toLocaleString("en-US")} ${limit.unit}${dueOn ? `; install by ${dueOn} (in service ${system.inServiceOn})` : ""}`,
+    reason: `required from ${limit.value.toLocaleString("en-US")} ${limit.unit}${dueOn ? `; install by ${day(dueOn)} (in service ${day(system.inServiceOn)})` : ""}`,
     source: rule.source,
   };
 }

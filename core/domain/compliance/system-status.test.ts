@@ -90,7 +90,7 @@ describe("system status", () => {
         kind: "initial-test",
         dueOn: "2028-02-29",
         findingId: "f",
-        what: "Initial verification test after the repair of 2028-02-29",
+        what: "Initial verification test after the repair of 29 Feb 2028",
       }),
     ]);
     // Once it passed (1 Mar 2028), the follow-up is due 10 days later [M]: 11 Mar.

@@ -13,6 +13,7 @@ import { inspectionsAfterBreach } from "./inspections-after-breach";
 import { leakCheckInterval, nextInspectionDate, type LeakCheckInterval } from "./leak-check-interval";
 import type { ChargeAddition } from "./leak-rate";
 import type { ApplianceType, LeakRateMethod, RuleProfile } from "./rule-profile";
+import { formatCalendarDay as day } from "../dates/format-in-zone";
 
 /** What one system's records say, on one day of the store's calendar. Pure: the caller loads the rows. */
 export interface SystemRecords {
@@ -139,7 +140,7 @@ export function systemStatus(
     due.push({
       kind: "repair",
       dueOn: unrepairedBreach.repairDue,
-      what: `Repair: leak rate ${unrepairedBreach.percent.toFixed(1)} % on ${unrepairedBreach.date} is above ${unrepairedBreach.thresholdPercent} %${open && open.exceedances.length > 1 ? ` (first of ${open.exceedances.length} exceedances before a repair; the deadline runs from the first)` : ""}`,
+      what: `Repair: leak rate ${unrepairedBreach.percent.toFixed(1)} % on ${day(unrepairedBreach.date)} is above ${unrepairedBreach.thresholdPercent} %${open && open.exceedances.length > 1 ? ` (first of ${open.exceedances.length} exceedances before a repair; the deadline runs from the first)` : ""}`,
       source: `${breachPart.title}; ${breachPart.repairDays.source}`,
     });
   }
@@ -151,7 +152,7 @@ export function systemStatus(
       due.push({
         kind: "initial-test",
         dueOn: initialVerificationDueDate(part, f.repairedOn),
-        what: `Initial verification test after the repair of ${f.repairedOn}`,
+        what: `Initial verification test after the repair of ${day(f.repairedOn)}`,
         source: part.initialVerificationDays.source,
         findingId: f.findingId,
       });
@@ -159,7 +160,7 @@ export function systemStatus(
       due.push({
         kind: "follow-up-test",
         dueOn: followUpVerificationDueDate(part, f.initialTestOn),
-        what: `Follow-up verification test after the initial test of ${f.initialTestOn}`,
+        what: `Follow-up verification test after the initial test of ${day(f.initialTestOn)}`,
         source: part.followUpVerificationDays.source,
         findingId: f.findingId,
       });
@@ -225,7 +226,7 @@ export function systemStatus(
       const from = lastCheck ?? facts.enteredOn;
       nextInspection = {
         dueOn: nextInspectionDate(from, applied.months),
-        reason: `${lastCheck ? `last leak check ${lastCheck}` : `no leak check recorded since the system was entered on ${facts.enteredOn}`}; ${applied.reason}`,
+        reason: `${lastCheck ? `last leak check ${day(lastCheck)}` : `no leak check recorded since the system was entered on ${day(facts.enteredOn)}`}; ${applied.reason}`,
         source: profile.leakChecks.co2eBands.source,
       };
     }
@@ -247,7 +248,7 @@ export function systemStatus(
         const from = run.lastCheck ?? run.start;
         nextInspection = {
           dueOn: addMonths(from, plan.everyMonths),
-          reason: `inspections since the breach of ${run.start}: ${plan.reason} (${run.clean} clean so far${run.lastCheck ? `, last ${run.lastCheck}` : ""})`,
+          reason: `inspections since the breach of ${day(run.start)}: ${plan.reason} (${run.clean} clean so far${run.lastCheck ? `, last ${day(run.lastCheck)}` : ""})`,
           source: breachPart.inspectionsAfterBreach?.source ?? "",
         };
       }

@@ -20,7 +20,7 @@ const today: TodayView = {
   due: [
     {
       kind: "repair",
-      what: "Repair: leak rate 37.6 % on 2026-04-19 is above 20 %",
+      what: "Repair: leak rate 37.6 % on 19 Apr 2026 is above 20 %",
       dueOn: "2026-05-19",
       state: "upcoming",
       daysLeft: 18,
@@ -90,7 +90,7 @@ describe("Today page", () => {
     const rows = within(due).getAllByRole("row").slice(1);
     expect(rows.map((r) => within(r).getAllByRole("link")[0].textContent)).toEqual([
       "Leak inspection",
-      "Repair: leak rate 37.6 % on 2026-04-19 is above 20 %",
+      "Repair: leak rate 37.6 % on 19 Apr 2026 is above 20 %",
     ]);
     expect(
       within(due)
