@@ -312,7 +312,7 @@ function failedRepairItems(
       .filter((e) =>
         e.repairedOn ? compareDates(e.repairedOn, e.repairDue) > 0 : compareDates(today, e.repairDue) > 0,
       )
-      .map((e) => ({ on: e.repairDue, why: `no repair by ${e.repairDue}`, partId: e.partId })),
+      .map((e) => ({ on: e.repairDue, why: `no repair by ${day(e.repairDue)}`, partId: e.partId })),
   ].filter((t) => !retrofits.some((r) => compareDates(r, t.on) >= 0));
   const first = triggers.sort((x, y) => compareDates(x.on, y.on))[0];
   if (!first) return [];
