@@ -115,7 +115,13 @@ export async function loadReportFacts(
           candidates: await withRefrigerants(ctx, sweep.planId, summary.candidates),
           params: analysis!.params,
         },
-        { ...units, names: new Map(fixtureRows.map((f) => [f.id, f.label])), delaySetByHand: false },
+        {
+          length: units.length,
+          mass: units.mass,
+          numbers: units.number,
+          names: new Map(fixtureRows.map((f) => [f.id, f.label])),
+          delaySetByHand: false,
+        },
       )
     : null;
   const corrected = new Map(summary?.readings.map((r) => [r.readingId, r]) ?? []);

@@ -87,11 +87,12 @@ function FieldMapPage() {
         ? presentAnalysis(a, {
             length: units.length,
             mass: units.mass,
+            numbers: units.number,
             names: new Map((fixtures.data?.fixtures ?? []).map((f) => [f.id, f.label])),
             delaySetByHand: delay !== null,
           })
         : null,
-    [a, units.length, units.mass, fixtures.data, delay],
+    [a, units.length, units.mass, units.number, fixtures.data, delay],
   );
   const overlayFixtures = useMemo(
     () =>
