@@ -52,7 +52,6 @@ export function fieldLabel(key: string): string {
     .map((part) => (/^\d+$/.test(part) ? String(Number(part) + 1) : part))
     .join(" ")
     .replace(/([a-z])([A-Z])/g, "$1 $2")
-    .replace(/\b(Ppm|Id)\b/gi, (w) => (w.toLowerCase() === "ppm" ? "ppm" : "id"))
     .toLowerCase()
     .replace(/^./, (c) => c.toUpperCase());
 }

@@ -1,3 +1,4 @@
+import type { NumberFormat } from "../numbers/number-format";
 import { roundHalfUp } from "../numbers/round-half-up";
 
 /**
@@ -5,7 +6,7 @@ import { roundHalfUp } from "../numbers/round-half-up";
  * default (US and UK usage); "1.234,5" and "1 234,5" are the usual decimal-comma forms (ISO 80000-1,
  * 7.3.2, allows a space or a narrow space for grouping).
  */
-export type NumberStyle = "1,234.5" | "1.234,5" | "1 234,5";
+export type NumberStyle = NumberFormat;
 
 const MARKS: Record<NumberStyle, { group: string; decimal: string }> = {
   "1,234.5": { group: ",", decimal: "." },

@@ -86,7 +86,7 @@ describe("Today page", () => {
   it("lists due items with their rule and links, and narrows to one store", async () => {
     stubFetch({ "GET /api/auth/session": { body: sessionFor("engineer") }, "GET /api/today": { body: today } });
     renderApp("/today");
-    const due = await screen.findByRole("table", { name: "Due and overdue" }, { timeout: 5000 });
+    const due = await screen.findByRole("table", { name: "Due and overdue" });
     const rows = within(due).getAllByRole("row").slice(1);
     expect(rows.map((r) => within(r).getAllByRole("link")[0].textContent)).toEqual([
       "Leak inspection",
@@ -114,7 +114,7 @@ describe("Today page", () => {
   it("lands owners on Today from /", async () => {
     stubFetch({ "GET /api/auth/session": { body: sessionFor("owner") }, "GET /api/today": { body: today } });
     const { router } = renderApp("/");
-    await screen.findByRole("heading", { name: "Today" }, { timeout: 5000 });
+    await screen.findByRole("heading", { name: "Today" });
     expect(router.state.location.pathname).toBe("/today");
     expect(screen.getByRole("button", { name: "Send today's digest now" })).toBeVisible();
   });
