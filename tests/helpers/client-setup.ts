@@ -4,7 +4,7 @@ import "vitest-canvas-mock";
 // DOM matchers (toBeVisible, toHaveTextContent, …) so tests assert what a person would see.
 import "@testing-library/jest-dom/vitest";
 import { cleanup, configure } from "@testing-library/react";
-import { afterEach, vi } from "vitest";
+import { afterEach, beforeAll, vi } from "vitest";
 
 // A lazy route's first import and jsdom's start-up take seconds on a loaded 2-core machine: findBy*
 // waits up to 5 s (the library's default is 1 s) rather than failing on a slow machine.
@@ -16,4 +16,14 @@ afterEach(() => {
   vi.unstubAllGlobals();
   localStorage.clear();
   document.documentElement.className = "";
+});
+
+// One jsdom serves many files in turn (tests/helpers/client-fresh-modules.ts): each file starts
+// from an empty page and storage, at the same address, as it would in a jsdom of its own.
+beforeAll(() => {
+  document.body.innerHTML = "";
+  document.title = "";
+  localStorage.clear();
+  sessionStorage.clear();
+  window.history.replaceState(null, "", "/");
 });
