@@ -89,7 +89,8 @@ export default defineConfig({
           environment: "node",
           include: ["tests/e2e/**/*.test.ts"],
           globalSetup: ["tests/helpers/global-setup.ts"],
-          fileParallelism: false,
+          // Each file has its own app on port 0, its own database and its own Chromium, so browser
+          // files run beside other files (SuiteOrder above pairs them with server files; decision 0083).
           // A known intermittent failure (elements detached mid-click after sign-in, about one run
           // in six) is under investigation; until it is found, a browser test gets two more tries.
           retry: 2,
