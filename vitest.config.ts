@@ -53,6 +53,9 @@ export default defineConfig({
           name: "unit",
           environment: "node",
           include: ["core/**/*.test.ts", "scripts/**/*.test.ts", "tests/walls/**/*.test.ts"],
+          // One worker serves many files in turn; our modules are evaluated afresh for each file.
+          isolate: false,
+          setupFiles: ["tests/helpers/fresh-modules.ts"],
           testTimeout: 30_000,
         },
       },
@@ -74,9 +77,9 @@ export default defineConfig({
           environment: "jsdom",
           include: ["src/**/*.test.{ts,tsx}"],
           // One worker and one jsdom serve many files in turn; our modules are still evaluated
-          // afresh for each file (tests/helpers/client-fresh-modules.ts, decision 0083).
+          // afresh for each file (tests/helpers/fresh-modules.ts, decision 0083).
           isolate: false,
-          setupFiles: ["tests/helpers/client-fresh-modules.ts", "tests/helpers/client-setup.ts"],
+          setupFiles: ["tests/helpers/fresh-modules.ts", "tests/helpers/client-setup.ts"],
           testTimeout: 20_000,
           // jsdom start-up under a loaded machine can outlast findBy* timeouts; one more try.
           retry: 1,

@@ -18,7 +18,7 @@ afterEach(() => {
   document.documentElement.className = "";
 });
 
-// One jsdom serves many files in turn (tests/helpers/client-fresh-modules.ts): each file starts
+// One jsdom serves many files in turn (tests/helpers/fresh-modules.ts): each file starts
 // from an empty page and storage, at the same address, as it would in a jsdom of its own.
 beforeAll(() => {
   document.body.innerHTML = "";

@@ -1,8 +1,0 @@
-// The client project reuses one jsdom worker from file to file (`isolate: false`, vitest.config.ts):
-// starting a worker and a jsdom for each of some 80 files took most of the project's time. Every
-// module of ours is still evaluated afresh for each file, as in a new worker, so no module-level
-// state (the CSRF token in src/lib/api-client.ts, the Walk sync loop) passes from one file to the
-// next. Listed first in setupFiles, so the other setup file and the test file import fresh copies.
-import { vi } from "vitest";
-
-vi.resetModules();
