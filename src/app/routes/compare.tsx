@@ -22,6 +22,8 @@ import { useDocumentTitle } from "../../lib/use-document-title";
 import { formatInZone } from "#core/domain/dates/format-in-zone";
 import { can } from "#core/domain/roles";
 import { useSignedIn } from "../shell/session-context";
+import { useUnitPreferences } from "../shell/use-unit-preferences";
+import { formatGrouped } from "#core/domain/numbers/number-format";
 import { Component as NotFound } from "./not-found";
 
 const SIDE_LAYERS = { ...DEFAULT_LAYERS, corrected: false, path: false };
@@ -35,6 +37,9 @@ export function Component() {
 
 function ComparePage() {
   const { storeId = "" } = useParams();
+  const numberFormat = useUnitPreferences().number;
+  // ppm to one place, in the company's number format
+  const ppm = (v: number) => formatGrouped(v, numberFormat, 1);
   const [search, setSearch] = useSearchParams();
   const trends = useFixtureTrends(storeId, search.get("a"), search.get("b"));
   const stores = useStores();
@@ -191,8 +196,8 @@ function ComparePage() {
                 ticks={diff.ds.ticks()}
               />
               <p className="mt-2 text-sm text-muted">
-                Largest change {diff.grid.maxAbs.toFixed(1)} ppm. Areas either sweep left unsampled are hatched: no
-                change can be told there.
+                Largest change {ppm(diff.grid.maxAbs)} ppm. Areas either sweep left unsampled are hatched: no change can
+                be told there.
               </p>
             </div>
           </div>
@@ -231,16 +236,12 @@ function ComparePage() {
                         label={`${f.label}: peak ppm per sweep`}
                       />
                     </td>
-                    <td className="p-2">
-                      {la ? `${la.peakPpm.toFixed(1)} / ${la.meanPpm.toFixed(1)}` : "not sampled"}
-                    </td>
-                    <td className="p-2">
-                      {lb ? `${lb.peakPpm.toFixed(1)} / ${lb.meanPpm.toFixed(1)}` : "not sampled"}
-                    </td>
+                    <td className="p-2">{la ? `${ppm(la.peakPpm)} / ${ppm(la.meanPpm)}` : "not sampled"}</td>
+                    <td className="p-2">{lb ? `${ppm(lb.peakPpm)} / ${ppm(lb.meanPpm)}` : "not sampled"}</td>
                     <td
                       className={`p-2 font-bold ${f.change !== null && f.change > 1 ? "text-danger" : f.change !== null && f.change < -1 ? "text-ok" : ""}`}
                     >
-                      {f.change === null ? "—" : `${f.change > 0 ? "+" : ""}${f.change.toFixed(1)} ppm`}
+                      {f.change === null ? "—" : `${f.change > 0 ? "+" : ""}${ppm(f.change)} ppm`}
                     </td>
                   </tr>
                 );
