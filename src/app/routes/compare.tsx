@@ -161,6 +161,7 @@ function ComparePage() {
       </div>
       <div className="mt-3">
         <RampLegend
+          numberFormat={numberFormat}
           title="Both maps: lag-corrected concentration (log scale)"
           lut={paint.lut}
           position={scale.position}
@@ -190,6 +191,7 @@ function ComparePage() {
             />
             <div>
               <RampLegend
+                numberFormat={numberFormat}
                 title="Change in ppm (blue: lower now, copper: higher now)"
                 lut={DIFFERENCE_LUT}
                 position={(v) => diff.ds.index(v) / 255}

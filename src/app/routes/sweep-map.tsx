@@ -191,6 +191,7 @@ function FieldMapPage() {
             </div>
           </div>
           <RampLegend
+            numberFormat={units.number}
             title={`Lag-corrected concentration, ${log ? "log" : "linear"} scale`}
             lut={paint.lut}
             position={scale.position}
