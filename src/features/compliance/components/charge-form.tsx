@@ -100,10 +100,11 @@ export function ChargeForm({
           label="Unit"
           value={amountUnit}
           onChange={(e) => setAmountUnit(e.target.value as MassUnit)}
-          options={[
-            { value: "kg", label: "kg" },
-            { value: "lb", label: "lb" },
-          ]}
+          // The reader's own unit first: an lb company sees lb first everywhere.
+          options={(unit === "lb" ? (["lb", "kg"] as const) : (["kg", "lb"] as const)).map((u) => ({
+            value: u,
+            label: u,
+          }))}
           error={fields["amount.unit"]}
         />
       </div>

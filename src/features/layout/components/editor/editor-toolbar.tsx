@@ -37,7 +37,7 @@ interface Props {
 }
 
 /** A group of buttons: one unbroken run in the phone's scrolling row, wrapping from `sm` up. */
-const GROUP = "flex shrink-0 flex-nowrap gap-1 sm:flex-wrap";
+const GROUP = "flex shrink-0 flex-nowrap gap-1 sm:shrink sm:flex-wrap";
 
 const FAMILIES: FixtureFamily[] = ["air-volume", "solid-body", "zone", "point"];
 
@@ -94,7 +94,7 @@ export function EditorToolbar(p: Props) {
       role="toolbar"
       aria-label="Layout tools"
       data-testid="editor-toolbar"
-      className="flex min-w-0 flex-1 flex-nowrap items-center gap-2 overflow-x-auto overscroll-x-contain rounded-md bg-surface p-2 edge sm:flex-none sm:flex-wrap sm:overflow-visible"
+      className="flex min-w-0 flex-1 flex-nowrap items-center gap-2 overflow-x-auto overscroll-x-contain rounded-md bg-surface p-2 edge sm:flex-initial sm:flex-wrap sm:overflow-visible"
     >
       <div className={GROUP} role="group" aria-label="Tool">
         <ToolButton pressed={p.active.tool === "select"} onClick={() => p.onTool("select")} shortcut="V">
@@ -124,7 +124,7 @@ export function EditorToolbar(p: Props) {
         ) : null}
       </div>
       {p.canEdit ? (
-        <div className="flex shrink-0 items-center gap-2">
+        <div className="flex shrink-0 items-center gap-2 sm:shrink">
           <label htmlFor={kindId} className="whitespace-nowrap text-sm font-bold">
             Kind to draw
           </label>
@@ -177,8 +177,8 @@ export function EditorToolbar(p: Props) {
         </Button>
       </div>
       {p.canEdit ? (
-        <div className="flex shrink-0 items-center gap-2 sm:flex-wrap">
-          <div className="flex shrink-0 items-center gap-2">
+        <div className="flex shrink-0 items-center gap-2 sm:shrink sm:flex-wrap">
+          <div className="flex shrink-0 items-center gap-2 sm:shrink">
             <label htmlFor={gridId} className="whitespace-nowrap text-sm font-bold">
               Snap to grid
             </label>
