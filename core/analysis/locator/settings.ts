@@ -131,7 +131,7 @@ export const LOCATOR_SETTINGS: LocatorSettings = {
     riskPointLogOdds: 3,
     maxReachM: 4,
   },
-  placement: { refineRadiusM: 1.5, refineInflation: 200, minRadiusM: 2.5, radiusScale: 3 },
+  placement: { refineRadiusM: 1.5, refineInflation: 200, minRadiusM: 3.25, radiusScale: 3 },
   report: {
     coverageGapM: 3,
     airChangesPerH: 2,
