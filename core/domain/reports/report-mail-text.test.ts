@@ -8,7 +8,7 @@ const spot = (rank: number, x: number, fixture: string): ReportSuspect => ({
   rank,
   position: `${x} m, 6 m`,
   radius: "1 m",
-  score: 1 - rank / 10,
+  score: (1 - rank / 10).toFixed(2),
   strength: "0.9 of the strongest",
   fixture,
   riskPoint: "none near",

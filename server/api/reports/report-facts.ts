@@ -25,6 +25,7 @@ import type { SweepReportModel } from "#core/domain/reports/sweep-report-model";
 import { findRefrigerant } from "#core/domain/refrigerants/catalogue";
 import { cautionsFor, type Caution } from "#core/domain/safety/cautions";
 import { formatLength } from "#core/domain/units/format-units";
+import { formatGrouped, formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
 import { presentAnalysis } from "#core/domain/locator-words/present-analysis";
 import type { ReaderUnits } from "./reader-units";
 import { withRefrigerants } from "../analysis/spot-refrigerants";
@@ -46,6 +47,8 @@ export interface ReportFacts {
   maxPpm: number;
   planImage: { displayKey: string | null; widthM: number; heightM: number };
   outlines: [number, number][][];
+  /** The company's number format, for what is worded outside the model (the map's legend). */
+  numbers: NumberFormat;
 }
 
 export function zonedDateTime(d: Date, timeZone: string): string {
@@ -105,7 +108,10 @@ export async function loadReportFacts(
       : Promise.resolve([]),
   ]);
   const label = new Map(fixtureRows.map((f) => [f.id, f.label || f.kind]));
-  const len = (m: number) => formatLength(m, unit, { decimals: 1 });
+  const fmt = units.number;
+  // Metres to one decimal in the company's number format; feet and inches to the half inch.
+  const len = (m: number) => (unit === "m" ? `${formatGrouped(m, fmt, 1)} m` : formatLength(m, unit));
+  const qty = (v: number) => formatQuantity(v, fmt);
   const pos = (x: number, y: number) => `${len(x)}, ${len(y)}`;
   const summary = analysis?.result ?? null;
   const words = summary
@@ -155,15 +161,15 @@ export async function loadReportFacts(
       name: det?.name ?? "",
       principle: PRINCIPLES[det?.principle ?? "other"] ?? "other principle",
       calibration: det?.lastCheckedOn ? `last checked ${det.lastCheckedOn}` : "no calibration / bump check on record",
-      settings: `transport delay ${sweep.transportDelayS} s, response time constant ${sweep.timeConstantS} s, alarm at ${sweep.alarmPpm} ppm (as at the sweep)`,
+      settings: `transport delay ${qty(sweep.transportDelayS)} s, response time constant ${qty(sweep.timeConstantS)} s, alarm at ${qty(sweep.alarmPpm)} ppm (as at the sweep)`,
     },
-    background: summary ? `${summary.background.ppm.toFixed(1)} ppm (estimated from the readings)` : "—",
+    background: summary ? `${formatGrouped(summary.background.ppm, fmt, 1)} ppm (estimated from the readings)` : "—",
     delayCheck: words ? `${words.delay.headline} ${words.delay.detail}` : "—",
     suspects: (summary?.candidates ?? []).map((c, i) => ({
       rank: c.rank,
       position: pos(c.x, c.y),
       radius: len(c.radius),
-      score: c.score,
+      score: formatGrouped(c.score, fmt, 2),
       strength: words!.spots[i].strength,
       fixture: words!.spots[i].place,
       riskPoint: words!.spots[i].riskPoint,
@@ -198,7 +204,7 @@ export async function loadReportFacts(
         time: zonedTime(r.takenAt, tz),
         raw: pos(r.x, r.y),
         corrected: c ? pos(c.corrected.x, c.corrected.y) : "—",
-        ppm: `${r.atLeast ? "≥ " : ""}${r.ppm}`,
+        ppm: `${r.atLeast ? "≥ " : ""}${qty(r.ppm)}`,
         point: SAMPLE_POINT_LABELS[r.samplePoint],
         note: r.note,
       };
@@ -237,5 +243,6 @@ export async function loadReportFacts(
       heightM: plan.heightM ?? 1,
     },
     outlines,
+    numbers: fmt,
   };
 }
