@@ -205,6 +205,10 @@ describe("e-mailing the report", () => {
     // which queues the e-mail; drained here, in-process, as the job and the mail worker would.
     expect(res.body.delivery).toMatchObject({ state: "preparing", attempts: 0, error: null });
     expect(res.body.bytes).toBeNull();
+    const waiting = await eng.get("/api/outbox/on-its-way");
+    expect(waiting.body.messages).toContainEqual(
+      expect.objectContaining({ kind: "report", subject: res.body.subject, state: "preparing", attempts: 0 }),
+    );
     expect(await drainMail(t)).toBe(1);
     // the fake SMTP server files what it received (Outbox table)
     const caught = await t.ctx.db.select().from(outboxMessages).where(eq(outboxMessages.subject, res.body.subject));
@@ -409,6 +413,14 @@ describe("the report's PDF as a job", () => {
     expect(res.body.delivery.state).toBe("preparing");
     // The worker makes the PDF and queues the e-mail (the mail worker is not running here: drained below).
     const queued = await sendState(eng, res.body.id, "queued");
+    // The Outbox lists it as on its way until it is sent.
+    const onItsWay = async () =>
+      (await eng.get("/api/outbox/on-its-way")).body.messages.filter((m: { to: string[] }) =>
+        m.to.includes("dc.manager@example.org"),
+      );
+    expect(await onItsWay()).toEqual([
+      expect.objectContaining({ kind: "report", subject: res.body.subject, state: "queued", error: null }),
+    ]);
     expect(queued.delivery).toMatchObject({ state: "queued", attempts: 0, error: null });
     expect(queued.bytes).toBeGreaterThan(10_000);
     const { rows } = await t.ctx.pool.query("select state from pgboss.job where name = $1 and data->>'sendId' = $2", [
@@ -417,6 +429,7 @@ describe("the report's PDF as a job", () => {
     ]);
     expect(rows.map((r) => r.state)).toEqual(["completed"]);
     expect(await drainMail(t)).toBe(1);
+    expect(await onItsWay()).toEqual([]);
     const mail = (await t.ctx.db.select().from(outboxMessages)).find((m) => m.to.includes("dc.manager@example.org"))!;
     expect(mail.attachments).toEqual([expect.objectContaining({ contentType: "application/pdf", size: queued.bytes })]);
     expect(mail.text).toContain("sent you the sweep report for");
@@ -440,6 +453,15 @@ describe("the report's PDF as a job", () => {
       error: "The PDF report could not be made: the drawing ran out of memory",
     });
     expect(failed.bytes).toBeNull();
+    const outbox = await eng.get("/api/outbox/on-its-way");
+    expect(outbox.body.messages).toContainEqual(
+      expect.objectContaining({
+        kind: "report",
+        to: ["audit@example.org"],
+        state: "failed",
+        error: failed.delivery.error,
+      }),
+    );
     // The dead job is in the dead-letter queue and on the owner's Failed jobs list, with the reason.
     const dead = await t.ctx.pool.query("select data from pgboss.job where name = $1", [JOBS_DEAD_LETTER]);
     expect(dead.rows.map((r) => r.data.sendId)).toContain(res.body.id);
