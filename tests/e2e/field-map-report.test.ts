@@ -135,6 +135,7 @@ it("an engineer opens the latest sweep's field map, compares it with the month b
     .waitFor();
   // The server's job makes the PDF, then the mail queue sends it: the live list follows it to "E-mail sent".
   await page.getByTestId("report-sends").getByText("E-mail sent.").first().waitFor({ timeout: 60_000 });
+  await page.screenshot({ path: path.join(screens, "report-sent-after-its-pdf-job.png"), fullPage: true });
 
   // and find it in the Outbox, with the PDF attached
   await page.getByRole("link", { name: "Outbox" }).click();
@@ -146,6 +147,8 @@ it("an engineer opens the latest sweep's field map, compares it with the month b
     .getByText(/sweep-larkspur-market-cedar-hollow-\d{4}-\d{2}-\d{2}\.pdf/)
     .first()
     .waitFor();
+  await page.getByTestId("on-its-way").waitFor();
+  await page.screenshot({ path: path.join(screens, "outbox-with-not-delivered-yet.png"), fullPage: true });
   expect(failures).toEqual([]);
   await context.close();
 });

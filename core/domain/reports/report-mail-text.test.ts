@@ -64,4 +64,13 @@ describe("report e-mail summary", () => {
       "Checked, no leak",
     ]);
   });
+
+  it("ends a finding's sentence once when its note already ends with a full stop", () => {
+    const findings: ReportFinding[] = [
+      { status: "confirmed", found: "3 Nov", where: "Dairy 2", note: "Traced to a brazed joint. ", x: 4, y: 6 },
+    ];
+    expect(reportMailFindings(findings, [])).toEqual([
+      "Confirmed leak: Dairy 2, found 3 Nov — Traced to a brazed joint.",
+    ]);
+  });
 });

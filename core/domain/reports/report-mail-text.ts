@@ -48,7 +48,9 @@ export function reportMailFindings(
   const lines = findingsWorstFirst(findings).map((f) => {
     const spots = spotsAnswered(f, suspects);
     const spot = spots.length ? ` (suspect spot ${spots.join(", ")})` : "";
-    return `${findingHeading(f.status)}: ${f.where}${spot}, found ${f.found}${f.note ? ` — ${f.note}` : ""}.`;
+    // A note that ends its own sentence does not get a second full stop.
+    const note = f.note.replace(/[.\s]+$/, "");
+    return `${findingHeading(f.status)}: ${f.where}${spot}, found ${f.found}${note ? ` — ${note}` : ""}.`;
   });
   // A spot with any finding inside its radius has been looked at (even one dismissed): not "still to check".
   const open = suspects.filter((s) => !findings.some((f) => answers(s, f)));

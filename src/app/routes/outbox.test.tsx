@@ -34,7 +34,7 @@ describe("outbox page", () => {
       "GET /api/outbox/on-its-way": { body: { messages: [] } },
     });
     renderApp("/outbox");
-    expect(await screen.findByText("Everything sent has arrived below.")).toBeVisible();
+    expect(await screen.findByText("Nothing is waiting: everything sent has arrived below.")).toBeVisible();
     const list = await screen.findByRole("table", { name: "Messages, newest first" });
     const subjects = [...list.querySelectorAll("tbody span.font-bold")].map((el) => el.textContent);
     expect(subjects).toEqual(["Choose a new password", "You are invited to Northfield Cold Care"]);

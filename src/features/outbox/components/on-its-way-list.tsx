@@ -8,13 +8,13 @@ import { formatDateTime } from "../../../lib/format";
  */
 export function OnItsWayList({ messages }: { messages: readonly OutgoingMessage[] }) {
   return (
-    <section aria-labelledby="on-its-way" className="space-y-2">
+    <section aria-labelledby="on-its-way" className="mb-6 space-y-1">
       <h2 id="on-its-way" className="text-lg font-bold">
         Not delivered yet
       </h2>
       <div aria-live="polite" data-testid="on-its-way">
         {messages.length === 0 ? (
-          <p className="text-muted">Everything sent has arrived below.</p>
+          <p className="text-sm text-muted">Nothing is waiting: everything sent has arrived below.</p>
         ) : (
           <ul className="space-y-1 text-sm">
             {messages.map((m) => (
