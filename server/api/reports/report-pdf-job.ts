@@ -68,7 +68,12 @@ export async function runReportPdfJob(ctx: AppContext, { sendId }: { sendId: str
     .from(reportSends)
     .innerJoin(outgoingMail, and(eq(outgoingMail.subjectId, reportSends.id), eq(outgoingMail.kind, "report")))
     .where(and(eq(reportSends.id, sendId), eq(outgoingMail.state, "preparing")));
-  if (!row) return;
+  if (!row) {
+    // Made by another try, or the send went with its sweep: a message left preparing says so.
+    const [send] = await ctx.db.select({ id: reportSends.id }).from(reportSends).where(eq(reportSends.id, sendId));
+    if (!send) await reportPdfGaveUp(ctx, { sendId }, "the sweep it was made from has been deleted");
+    return;
+  }
   const { send } = row;
   const [sender] = send.sentById
     ? await ctx.db
