@@ -27,6 +27,8 @@ import { cautionsFor, type Caution } from "#core/domain/safety/cautions";
 import { formatLength } from "#core/domain/units/format-units";
 import { formatGrouped, formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
 import { presentAnalysis } from "#core/domain/locator-words/present-analysis";
+import { gramsPerYear } from "#core/domain/locator-words/spot-words";
+import { massPerYearWords } from "#core/domain/locator-words/mass-words";
 import type { ReaderUnits } from "./reader-units";
 import { withRefrigerants } from "../analysis/spot-refrigerants";
 import { HttpError } from "../../lib/http-error";
@@ -114,11 +116,22 @@ export async function loadReportFacts(
   const qty = (v: number) => formatQuantity(v, fmt);
   const pos = (x: number, y: number) => `${len(x)}, ${len(y)}`;
   const summary = analysis?.result ?? null;
+  const spots = summary ? await withRefrigerants(ctx, sweep.planId, summary.candidates) : [];
+  // The report goes to people with no unit preference (store contacts): a strength reads in the
+  // reader's mass unit first and the other in brackets, as the leak-rate statement does (decision 0103).
+  const otherMass = units.mass === "lb" ? "kg" : "lb";
+  const bothMasses = (strength: string, i: number) => {
+    const s = spots[i];
+    if (!s || !Number.isFinite(s.molPerYear)) return strength;
+    const grams = gramsPerYear(s, s.refrigerant);
+    const first = massPerYearWords(grams, units.mass, fmt);
+    return strength.replace(first, `${first} (${massPerYearWords(grams, otherMass, fmt)})`);
+  };
   const words = summary
     ? presentAnalysis(
         {
           ...summary,
-          candidates: await withRefrigerants(ctx, sweep.planId, summary.candidates),
+          candidates: spots,
           params: analysis!.params,
         },
         {
@@ -170,7 +183,7 @@ export async function loadReportFacts(
       position: pos(c.x, c.y),
       radius: len(c.radius),
       score: formatGrouped(c.score, fmt, 2),
-      strength: words!.spots[i].strength,
+      strength: bothMasses(words!.spots[i].strength, i),
       fixture: words!.spots[i].place,
       riskPoint: words!.spots[i].riskPoint,
       reason: words!.spots[i].reason,

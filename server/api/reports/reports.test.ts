@@ -310,10 +310,15 @@ describe("e-mailing the report", () => {
       expect(flat).toMatch(/1\. Dairy 1–4 — at \d+,\d m, \d+,\d m \(within \d+,\d m\), score \d,\d\d/);
       expect(flat).toMatch(/Background \d+,\d ppm/);
       expect(flat).not.toMatch(/score \d\.\d\d/);
-      // The company works in pounds: the strength in lb (or oz) a year, never kg or g
-      // (1 lb = 0.45359237 kg exactly, NIST SP 811 B.8).
-      expect(flat).toMatch(/about [\d.,]+ (lb|oz)\/yr of R-448A/);
-      expect(flat).not.toMatch(/\d (kg|g)\/yr/);
+      // The company works in pounds: the strength in lb (or oz) a year first, kg (or g) in brackets, and
+      // the two agree (1 lb = 0.45359237 kg exactly, 16 oz; NIST SP 811, B.8), within their two significant figures.
+      const both = flat.match(/about ([\d.,]+) (lb|oz)\/yr \(([\d.,]+) (kg|g)\/yr\) of R-448A/);
+      expect(both, flat).not.toBeNull();
+      const read = (v: string) => Number(v.replace(/\./g, "").replace(",", "."));
+      const kg = read(both![1]) * (both![2] === "lb" ? 0.45359237 : 0.45359237 / 16);
+      const other = read(both![3]) / (both![4] === "kg" ? 1 : 1000);
+      expect(Math.abs(kg - other) / other).toBeLessThan(0.1); // each side rounded to two figures: at most 5 % off
+      expect(flat).not.toMatch(/of the strongest, about [\d.,]+ (kg|g)\/yr/);
     } finally {
       await t.ctx.db.update(companies).set(before).where(eq(companies.id, co.company.id));
       await t.ctx.db.update(users).set({ lengthUnit: null }).where(eq(users.id, co.people.engineer.userId));
