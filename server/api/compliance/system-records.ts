@@ -16,7 +16,7 @@ import type { ChargeAddition } from "#core/domain/compliance/leak-rate";
 import type { LeakRateMethod, RuleProfile } from "#core/domain/compliance/rule-profile";
 import { systemStatus, type SystemStatus } from "#core/domain/compliance/system-status";
 import { localDateOf } from "#core/domain/dates/time-zone";
-import { getRefrigerant } from "#core/domain/refrigerants/catalogue";
+import { lookupFor, resolveStored } from "../refrigerants/company-refrigerant-lookup";
 import { revisionsOf } from "../systems/revision-rows";
 
 export type SystemRow = typeof systems.$inferSelect;
@@ -68,7 +68,7 @@ export async function statusesOf(
 ): Promise<SystemWithStatus[]> {
   if (rows.length === 0) return [];
   const ids = rows.map((r) => r.system.id);
-  const [adds, events, checks, filed, revisions] = await Promise.all([
+  const [adds, events, checks, filed, revisions, lookup] = await Promise.all([
     ctx.db
       .select()
       .from(chargeAdditions)
@@ -93,6 +93,8 @@ export async function statusesOf(
       .from(chronicLeakerReports)
       .where(inArray(chronicLeakerReports.systemId, ids)),
     revisionsOf(ctx, ids),
+    // The company's own refrigerants count as the catalogue's do (docs/decisions/0073).
+    lookupFor(ctx, rows[0].system.companyId),
   ]);
   return rows.map(({ system, store }) => {
     const today = localDateOf(now, store.timeZone);
@@ -123,7 +125,7 @@ export async function statusesOf(
       rules.profile,
       rules.method,
       {
-        refrigerant: getRefrigerant(system.refrigerantId),
+        refrigerant: resolveStored(lookup, system.refrigerantId),
         fullChargeKg: system.fullChargeKg,
         applianceType: system.applianceType,
         automaticLeakDetection: system.automaticLeakDetection,
@@ -134,7 +136,7 @@ export async function statusesOf(
           .map((r) => ({
             effectiveFrom: r.effectiveFrom,
             kind: r.kind,
-            refrigerant: getRefrigerant(r.refrigerantId),
+            refrigerant: resolveStored(lookup, r.refrigerantId),
             fullChargeKg: r.fullChargeKg,
             applianceType: r.applianceType,
             automaticLeakDetection: r.automaticLeakDetection,

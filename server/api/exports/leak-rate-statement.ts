@@ -1,4 +1,5 @@
 import PDFDocument from "pdfkit";
+import { refrigerantCell } from "./records-csv";
 import type { SystemRecordsView } from "#core/contracts/compliance";
 import type { FindingDetail } from "#core/contracts/finding-actions";
 import { FINDING_EVENT_LABELS } from "#core/contracts/findings";
@@ -62,7 +63,7 @@ function systemSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => str
   const gwp = r.system.refrigerant.gwp;
   para(
     doc,
-    `Refrigerant ${r.system.refrigerantId} (safety class ${r.system.refrigerant.safetyClass}${gwp ? `, GWP ${gwp.value} on ${gwp.basis}` : ""}); full charge ${mass(r.system.fullChargeKg)}.`,
+    `Refrigerant ${refrigerantCell(r.system.refrigerant)} (safety class ${r.system.refrigerant.safetyClass}${gwp ? `, GWP ${gwp.value} on ${gwp.basis}` : ""}); full charge ${mass(r.system.fullChargeKg)}.`,
   );
   para(
     doc,
