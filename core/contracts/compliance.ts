@@ -190,6 +190,8 @@ export const todayResponse = z.object({
       storeId: z.uuid(),
       storeName: text(),
       refrigerantId: text(),
+      /** What a reader sees: the R-number, or the company's name for its own refrigerant. */
+      refrigerantName: text(),
       percent: z.number(),
       thresholdPercent: z.number(),
       on: text(),
@@ -206,6 +208,8 @@ export const todayResponse = z.object({
       storeId: z.uuid(),
       storeName: text(),
       refrigerantId: text(),
+      /** What a reader sees: the R-number, or the company's name for its own refrigerant. */
+      refrigerantName: text(),
       latestPercent: z.number().nullable(),
       latestOn: text().nullable(),
       thresholdPercent: z.number().nullable(),

@@ -169,6 +169,8 @@ export const systemRevision = z.object({
   effectiveFrom: text(),
   kind: z.enum(["first", ...REVISION_KINDS]),
   refrigerantId: text(),
+  /** What a reader sees: the R-number, or the company's name for its own refrigerant. */
+  refrigerantName: text(),
   fullChargeKg: z.number(),
   applianceType: applianceTypeSchema,
   automaticLeakDetection: z.boolean(),

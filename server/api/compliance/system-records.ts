@@ -17,6 +17,7 @@ import type { LeakRateMethod, RuleProfile } from "#core/domain/compliance/rule-p
 import { systemStatus, type SystemStatus } from "#core/domain/compliance/system-status";
 import { localDateOf } from "#core/domain/dates/time-zone";
 import { lookupFor, resolveStored } from "../refrigerants/company-refrigerant-lookup";
+import { designationOf } from "#core/domain/refrigerants/types";
 import { revisionsOf } from "../systems/revision-rows";
 
 export type SystemRow = typeof systems.$inferSelect;
@@ -54,6 +55,8 @@ export interface SystemWithStatus {
   store: StoreRow;
   today: string;
   status: SystemStatus;
+  /** The designation a reader sees: the R-number, or the company's name for its own refrigerant. */
+  refrigerantName: string;
 }
 
 /**
@@ -158,7 +161,13 @@ export async function statusesOf(
       },
       today,
     );
-    return { system, store, today, status };
+    return {
+      system,
+      store,
+      today,
+      status,
+      refrigerantName: designationOf(resolveStored(lookup, system.refrigerantId)),
+    };
   });
 }
 

@@ -8,7 +8,7 @@ import { badRequest } from "../../lib/http-error";
 import { eventDay } from "../findings/findings.service";
 import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { designationOf } from "#core/domain/refrigerants/types";
-import { holdRefrigerant } from "../refrigerants/company-refrigerant-lookup";
+import { holdRefrigerant, lookupFor, resolveStored } from "../refrigerants/company-refrigerant-lookup";
 import { chargeToKg, companyGwpBases, knownRefrigerant, loadSystem, refuseRetired, toSystem } from "./systems.service";
 
 type RevisionRow = typeof systemRevisions.$inferSelect;
@@ -27,6 +27,7 @@ function inForce(rows: readonly RevisionRow[], date: IsoDate): RevisionRow | nul
 
 export async function listRevisions(ctx: AppContext, viewer: Viewer, systemId: string) {
   await loadSystem(ctx, viewer, systemId);
+  const lookup = await lookupFor(ctx, viewer.companyId);
   const rows = await ctx.db
     .select({ r: systemRevisions, by: users.name })
     .from(systemRevisions)
@@ -38,6 +39,7 @@ export async function listRevisions(ctx: AppContext, viewer: Viewer, systemId: s
     effectiveFrom: r.effectiveFrom,
     kind: r.kind,
     refrigerantId: r.refrigerantId,
+    refrigerantName: designationOf(resolveStored(lookup, r.refrigerantId)),
     fullChargeKg: r.fullChargeKg,
     applianceType: r.applianceType,
     automaticLeakDetection: r.automaticLeakDetection,
