@@ -1,3 +1,4 @@
+import { refrigerantCell } from "./records-csv";
 import type { SystemRecordsView } from "#core/contracts/compliance";
 import type { FindingDetail } from "#core/contracts/finding-actions";
 import { FINDING_EVENT_LABELS } from "#core/contracts/findings";
@@ -61,7 +62,7 @@ function systemSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => str
   const gwp = r.system.refrigerant.gwp;
   para(
     doc,
-    `Refrigerant ${r.system.refrigerantId} (safety class ${r.system.refrigerant.safetyClass}${gwp ? `, GWP ${gwp.value} on ${gwp.basis}` : ""}); full charge ${mass(r.system.fullChargeKg)}.`,
+    `Refrigerant ${refrigerantCell(r.system.refrigerant)} (safety class ${r.system.refrigerant.safetyClass}${gwp ? `, GWP ${gwp.value} on ${gwp.basis}` : ""}); full charge ${mass(r.system.fullChargeKg)}.`,
   );
   para(
     doc,

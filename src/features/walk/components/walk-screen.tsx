@@ -1,4 +1,5 @@
 import { useMemo, useRef, useState, type ReactNode } from "react";
+import type { RefrigerantSummary } from "#core/contracts/systems";
 import { useNavigate } from "react-router";
 import type { CautionPlace } from "#core/domain/safety/cautions";
 import { FIXTURE_KIND_NAMES } from "#core/contracts/fixture-kinds";
@@ -65,7 +66,11 @@ export function WalkScreen({
     return step.effect;
   };
   const editing = editedReading(mode);
-  const [caution, setCaution] = useState<{ place: CautionPlace; name: string; refrigerantIds: string[] } | null>(null);
+  const [caution, setCaution] = useState<{
+    place: CautionPlace;
+    name: string;
+    refrigerants: RefrigerantSummary[];
+  } | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
   const [dialog, setDialog] = useState<"list" | "summary" | "import" | null>(null);
   const [dismissedAlarm, setDismissedAlarm] = useState(-1);
@@ -152,13 +157,11 @@ export function WalkScreen({
     if (room) {
       // The room's systems (from the store pack kept on the device) decide which cautions apply.
       const ids = roomSystemIds(fixtures, room.fixture);
-      const refrigerantIds = (storePack.data?.systems ?? [])
-        .filter((x) => ids.includes(x.id))
-        .map((x) => x.refrigerantId);
+      const refrigerants = (storePack.data?.systems ?? []).filter((x) => ids.includes(x.id)).map((x) => x.refrigerant);
       setCaution({
         place: room.place,
         name: room.fixture.label || FIXTURE_KIND_NAMES[room.fixture.kind],
-        refrigerantIds,
+        refrigerants,
       });
     }
     const v = typed.current;
@@ -339,7 +342,7 @@ export function WalkScreen({
       <CautionDialog
         place={caution?.place ?? null}
         name={caution?.name ?? ""}
-        refrigerantIds={caution?.refrigerantIds ?? []}
+        refrigerants={caution?.refrigerants ?? []}
         onClose={() => setCaution(null)}
       />
       <ReadingsDrawer
