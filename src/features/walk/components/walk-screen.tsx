@@ -4,6 +4,7 @@ import type { CautionPlace } from "#core/domain/safety/cautions";
 import { FIXTURE_KIND_NAMES } from "#core/contracts/fixture-kinds";
 import { Alert } from "../../../components/ui/alert";
 import type { LengthPreference } from "#core/domain/units/format-units";
+import type { NumberFormat } from "#core/domain/numbers/number-format";
 import { Spinner } from "../../../components/ui/spinner";
 import { countOf } from "../../../lib/format";
 import { usePlanPack, useStorePack } from "../api/store-pack";
@@ -12,6 +13,7 @@ import { useSyncStatus } from "../hooks/use-sync-status";
 import { useQueuedFindings } from "../hooks/use-queued-findings";
 import { useOpenReading } from "../hooks/use-open-reading";
 import { useWalk } from "../hooks/use-walk";
+import { useLiveGuide } from "../hooks/use-live-guide";
 import { fixtureAt, unsampledFixtures } from "../model/coverage";
 import { peakLagHint } from "../model/lag-hint";
 import type { LocalReading } from "../model/local-types";
@@ -22,6 +24,9 @@ import { editedReading, walkStep, type WalkEvent, type WalkMode } from "../model
 import { CautionDialog } from "./caution-dialog";
 import { LagHintBanner } from "./lag-hint-banner";
 import { LeakForm } from "./leak-form";
+import { LiveGuidePanel } from "./live-guide-panel";
+import { LiveMarks } from "./live-marks";
+import { liveWordsContext } from "../model/live-words";
 import { LogImport } from "./log-import";
 import { PlanStage } from "./plan-stage";
 import { PpmKeypad, type KeypadValue } from "./ppm-keypad";
@@ -40,12 +45,14 @@ export function WalkScreen({
   contrastToggle,
   leaveTo,
   lengthUnit = "m",
+  numberFormat = "1,234.5",
 }: {
   storeId: string;
   sweepId: string;
   contrastToggle: ReactNode;
   leaveTo: string;
   lengthUnit?: LengthPreference;
+  numberFormat?: NumberFormat;
 }) {
   const walk = useWalk(sweepId);
   const storePack = useStorePack(storeId);
@@ -112,6 +119,11 @@ export function WalkScreen({
     () =>
       sweep ? peakLagHint(committed, sweep.transportDelayS, sweep.timeConstantS, sweep.alarmPpm, walkModel) : null,
     [committed, sweep, walkModel],
+  );
+  const live = useLiveGuide({ sweep: sweep ?? null, plan: planDims ?? null, fixtures, readings: committed });
+  const liveWords = useMemo(
+    () => liveWordsContext(fixtures, lengthUnit, numberFormat, sweep?.timeConstantS ?? 0),
+    [fixtures, lengthUnit, numberFormat, sweep?.timeConstantS],
   );
   const recent = useMemo(() => {
     const out: number[] = [];
@@ -299,8 +311,24 @@ export function WalkScreen({
             focus={keypadFor ? { x: keypadFor.x, y: keypadFor.y } : null}
             highContrast={highContrast}
             onTap={(x, y, at) => onTap(x, y, at)}
+            overlay={(zoom) => (
+              <LiveMarks
+                suspects={live.estimate?.kind === "suspects" ? live.estimate.suspects : []}
+                probes={live.probes}
+                zoom={zoom}
+                highContrast={highContrast}
+              />
+            )}
           />
         </div>
+        {keypadFor || readOnly ? null : (
+          <LiveGuidePanel
+            state={live}
+            words={liveWords}
+            from={committed.length ? committed[committed.length - 1] : null}
+            onProbe={(p) => onTap(p.x, p.y, Date.now())}
+          />
+        )}
         {keypadFor ? (
           <div className="landscape:md:w-96 landscape:md:overflow-y-auto">
             <PpmKeypad

@@ -1,0 +1,93 @@
+import { useState } from "react";
+import type { LiveProbe } from "#core/analysis/guide/live-guide";
+import type { WordsContext } from "#core/domain/locator-words/words-context";
+import {
+  LIVE_PROVISIONAL_WORDS,
+  liveSuspectWords,
+  probePlaceWords,
+  probeReasonWords,
+} from "#core/domain/locator-words/live-guide-words";
+import { lengthWords } from "#core/domain/locator-words/length-words";
+import type { LiveState } from "../model/live-state";
+
+/**
+ * The live estimate under the Walk plan: the first suspect, the next probe points in walking order
+ * with why each helps (tapping one opens the keypad there, as tapping the plan does), and the label
+ * that says it is provisional. Folds to one line so the plan keeps the screen.
+ */
+export function LiveGuidePanel({
+  state,
+  words,
+  from,
+  onProbe,
+}: {
+  state: LiveState;
+  words: WordsContext;
+  /** Where the technician stands (the last reading), for "2.1 m from you". */
+  from: { x: number; y: number } | null;
+  onProbe(probe: LiveProbe): void;
+}) {
+  const [folded, setFolded] = useState(false);
+  const e = state.estimate;
+  if (!e || e.kind === "no-alarm") return null;
+  const first = e.kind === "suspects" ? e.suspects[0] : null;
+  return (
+    <section
+      aria-label="Live guide"
+      data-testid="live-guide"
+      data-suspects={e.kind === "suspects" ? e.suspects.length : 0}
+      data-probes={state.probes.length}
+      className="border-t-2 border-[#5b2d8c] bg-surface px-2 py-1"
+    >
+      <div className="flex items-center justify-between gap-2">
+        <p className="min-w-0 flex-1 truncate font-bold" data-testid="live-first">
+          {first ? liveSuspectWords(first, words) : "Live estimate: no spot fits the readings yet"}
+        </p>
+        <button
+          type="button"
+          className="min-h-12 shrink-0 px-2 font-bold underline"
+          aria-expanded={!folded}
+          onClick={() => setFolded(!folded)}
+        >
+          {folded ? "Show guide" : "Hide"}
+        </button>
+      </div>
+      {folded ? null : (
+        <>
+          {state.probes.length ? (
+            <ol className="flex flex-col gap-1" aria-label="Where to probe next">
+              {state.probes.map((p, i) => (
+                <li key={`${p.x},${p.y},${p.kind}`}>
+                  <button
+                    type="button"
+                    className="flex min-h-12 w-full items-center gap-2 rounded-md px-2 text-left edge active:opacity-70"
+                    onClick={() => onProbe(p)}
+                  >
+                    <span
+                      aria-hidden="true"
+                      className="flex h-7 w-7 shrink-0 items-center justify-center border-2 border-[#1d6b4f] bg-[#e8f3ee] font-bold text-[#1d6b4f]"
+                    >
+                      {i + 1}
+                    </span>
+                    <span className="min-w-0 leading-tight">
+                      <span className="block font-bold">
+                        Probe {i + 1}: {probePlaceWords(p, words)}
+                        {from
+                          ? ` · ${lengthWords(Math.hypot(p.x - from.x, p.y - from.y), words.length, words.numbers)} away`
+                          : ""}
+                      </span>
+                      <span className="block text-sm">{capitalised(probeReasonWords(p, words))}</span>
+                    </span>
+                  </button>
+                </li>
+              ))}
+            </ol>
+          ) : null}
+          <p className="text-sm text-muted">{LIVE_PROVISIONAL_WORDS}</p>
+        </>
+      )}
+    </section>
+  );
+}
+
+const capitalised = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
