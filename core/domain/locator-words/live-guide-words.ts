@@ -41,3 +41,19 @@ export function probeReasonWords(p: LiveProbe, ctx: WordsContext): string {
   }
   return `narrows down where on ${spotName(r.rank, r.fixtureId, ctx)} the leak is`;
 }
+
+/**
+ * The check the trade makes to confirm a leak in a case once the spot has settled: read the air the
+ * case's fans blow off its coil, at the discharge (supply-air) grille, against the aisle's reading; the
+ * coil and its joints sit in that air stream (common practice, no published source).
+ */
+export function supplyAirAskWords(s: LiveSuspect, settledOver: number, ctx: WordsContext): string {
+  const where = (s.fixtureId && ctx.name(s.fixtureId)) || "this spot";
+  return `Suspect 1 has stayed on ${where} over the last ${settledOver} estimates. Confirm it: read the supply air at ${where}'s discharge grille, where the air leaves the coil. Higher than the aisle there points to a leak in this case.`;
+}
+
+/** The note kept with the supply-air reading, naming the suspect it checks. */
+export function supplyAirNote(s: LiveSuspect, ctx: WordsContext): string {
+  const where = (s.fixtureId && ctx.name(s.fixtureId)) || "open floor";
+  return `Supply-air check of live suspect 1 (${where}, ${lengthWords(s.x, ctx.length, ctx.numbers)} across, ${lengthWords(s.y, ctx.length, ctx.numbers)} down)`;
+}

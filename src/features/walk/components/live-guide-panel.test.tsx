@@ -40,9 +40,11 @@ const state: LiveState = {
   probes,
 };
 
+const noCheck = { supply: { kind: "none" } as const, onSupplyCheck: () => {} };
+
 describe("LiveGuidePanel", () => {
   it("lists the next probe points in walking order with their reasons, and says it is provisional", () => {
-    render(<LiveGuidePanel state={state} words={words} from={{ x: 4, y: 4.2 }} onProbe={() => {}} />);
+    render(<LiveGuidePanel state={state} words={words} from={{ x: 4, y: 4.2 }} onProbe={() => {}} {...noCheck} />);
     expect(screen.getByTestId("live-first").textContent).toBe("Suspect 1: Dairy 3, within 2.5 m");
     const items = screen.getAllByRole("listitem").map((li) => li.textContent);
     expect(items[0]).toContain("Probe 1: Dairy 3, at the front grille · 3.0 m away");
@@ -53,13 +55,15 @@ describe("LiveGuidePanel", () => {
 
   it("hands the tapped probe point to the screen, which opens the keypad there", () => {
     const onProbe = vi.fn();
-    render(<LiveGuidePanel state={state} words={words} from={null} onProbe={onProbe} />);
+    render(<LiveGuidePanel state={state} words={words} from={null} onProbe={onProbe} {...noCheck} />);
     fireEvent.click(screen.getByRole("button", { name: /Probe 2/ }));
     expect(onProbe).toHaveBeenCalledWith(probes[1]);
   });
 
   it("folds to one line, and shows nothing before any reading reaches the alarm", () => {
-    const { unmount } = render(<LiveGuidePanel state={state} words={words} from={null} onProbe={() => {}} />);
+    const { unmount } = render(
+      <LiveGuidePanel state={state} words={words} from={null} onProbe={() => {}} {...noCheck} />,
+    );
     fireEvent.click(screen.getByRole("button", { name: "Hide" }));
     expect(screen.queryAllByRole("listitem")).toHaveLength(0);
     expect(screen.getByTestId("live-first")).toBeTruthy();
@@ -70,8 +74,29 @@ describe("LiveGuidePanel", () => {
         words={words}
         from={null}
         onProbe={() => {}}
+        {...noCheck}
       />,
     );
     expect(quiet.container.textContent).toBe("");
+  });
+
+  it("asks for the supply-air check of a settled suspect and hands the suspect over when asked to read it", () => {
+    const onSupplyCheck = vi.fn();
+    const suspect = state.estimate?.kind === "suspects" ? state.estimate.suspects[0] : null;
+    render(
+      <LiveGuidePanel
+        state={state}
+        words={words}
+        from={null}
+        onProbe={() => {}}
+        supply={{ kind: "ask", suspect: suspect! }}
+        onSupplyCheck={onSupplyCheck}
+      />,
+    );
+    expect(screen.getByTestId("supply-ask").textContent).toMatch(
+      /Suspect 1 has stayed on Dairy 3 over the last 3 estimates\. Confirm it: read the supply air at Dairy 3's discharge grille/,
+    );
+    fireEvent.click(screen.getByRole("button", { name: "Read the supply air here" }));
+    expect(onSupplyCheck).toHaveBeenCalledWith(suspect);
   });
 });

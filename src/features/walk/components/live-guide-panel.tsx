@@ -1,11 +1,15 @@
 import { useState } from "react";
-import type { LiveProbe } from "#core/analysis/guide/live-guide";
+import type { LiveProbe, LiveSuspect } from "#core/analysis/guide/live-guide";
+import { formatShort } from "#core/domain/locator-words/number-words";
+import { SETTLE_ESTIMATES } from "../model/live-state";
+import type { SupplyCheck } from "../model/supply-check";
 import type { WordsContext } from "#core/domain/locator-words/words-context";
 import {
   LIVE_PROVISIONAL_WORDS,
   liveSuspectWords,
   probePlaceWords,
   probeReasonWords,
+  supplyAirAskWords,
 } from "#core/domain/locator-words/live-guide-words";
 import { lengthWords } from "#core/domain/locator-words/length-words";
 import type { LiveState } from "../model/live-state";
@@ -20,12 +24,17 @@ export function LiveGuidePanel({
   words,
   from,
   onProbe,
+  supply,
+  onSupplyCheck,
 }: {
   state: LiveState;
   words: WordsContext;
   /** Where the technician stands (the last reading), for "2.1 m from you". */
   from: { x: number; y: number } | null;
   onProbe(probe: LiveProbe): void;
+  /** The supply-air check of the settled first suspect: asked for, or made. */
+  supply: SupplyCheck;
+  onSupplyCheck(suspect: LiveSuspect): void;
 }) {
   const [folded, setFolded] = useState(false);
   const e = state.estimate;
@@ -54,6 +63,28 @@ export function LiveGuidePanel({
       </div>
       {folded ? null : (
         <>
+          {supply.kind === "ask" ? (
+            <div
+              role="status"
+              className="my-1 rounded-md border-l-4 border-[#5b2d8c] bg-paper px-2 py-1"
+              data-testid="supply-ask"
+            >
+              <p className="text-sm">{supplyAirAskWords(supply.suspect, SETTLE_ESTIMATES, words)}</p>
+              <button
+                type="button"
+                className="min-h-12 font-bold underline"
+                onClick={() => onSupplyCheck(supply.suspect)}
+              >
+                Read the supply air here
+              </button>
+            </div>
+          ) : null}
+          {supply.kind === "read" ? (
+            <p className="text-sm font-bold" data-testid="supply-read">
+              Supply air read at suspect 1: {formatShort(supply.reading.ppm, words.numbers)} ppm
+              {supply.reading.atLeast ? " or more" : ""}.
+            </p>
+          ) : null}
           {state.probes.length ? (
             <ol className="flex flex-col gap-1" aria-label="Where to probe next">
               {state.probes.map((p, i) => (
@@ -61,6 +92,7 @@ export function LiveGuidePanel({
                   <button
                     type="button"
                     className="flex min-h-12 w-full items-center gap-2 rounded-md px-2 text-left edge active:opacity-70"
+                    data-at={`${p.x} ${p.y}`}
                     onClick={() => onProbe(p)}
                   >
                     <span

@@ -27,6 +27,9 @@ import { LeakForm } from "./leak-form";
 import { LiveGuidePanel } from "./live-guide-panel";
 import { LiveMarks } from "./live-marks";
 import { liveWordsContext } from "../model/live-words";
+import { settledSuspect } from "../model/live-state";
+import { supplyCheckOf } from "../model/supply-check";
+import { supplyAirNote } from "#core/domain/locator-words/live-guide-words";
 import { LogImport } from "./log-import";
 import { PlanStage } from "./plan-stage";
 import { PpmKeypad, type KeypadValue } from "./ppm-keypad";
@@ -125,6 +128,7 @@ export function WalkScreen({
     () => liveWordsContext(fixtures, lengthUnit, numberFormat, sweep?.timeConstantS ?? 0),
     [fixtures, lengthUnit, numberFormat, sweep?.timeConstantS],
   );
+  const supply = useMemo(() => supplyCheckOf(settledSuspect(live), committed), [live, committed]);
   const recent = useMemo(() => {
     const out: number[] = [];
     for (let i = committed.length - 1; i >= 0 && out.length < 4; i--)
@@ -149,7 +153,7 @@ export function WalkScreen({
   const draft = walk.readings.find((r) => r.id === draftId) ?? null;
   const readOnly = sweep.status === "reviewed";
 
-  const onTap = serial(async (x: number, y: number, at: number) => {
+  const onTap = serial(async (x: number, y: number, at: number, preset?: { samplePoint: "supply"; note: string }) => {
     const effect = send({ type: "tap", x, y, fixtureId: fixtureAt(fixtures, x, y)?.id ?? null });
     if (effect.kind === "move-reading") {
       const moved = await walk.move(effect.readingId, x, y);
@@ -183,8 +187,9 @@ export function WalkScreen({
           x,
           y,
           at,
+          preset,
         )
-      : await walk.tap(x, y, at);
+      : await walk.tap(x, y, at, preset);
     setDraftId(r.id);
   });
 
@@ -327,6 +332,10 @@ export function WalkScreen({
             words={liveWords}
             from={committed.length ? committed[committed.length - 1] : null}
             onProbe={(p) => onTap(p.x, p.y, Date.now())}
+            supply={supply}
+            onSupplyCheck={(s) =>
+              onTap(s.x, s.y, Date.now(), { samplePoint: "supply", note: supplyAirNote(s, liveWords) })
+            }
           />
         )}
         {keypadFor ? (

@@ -2,7 +2,8 @@ import { useEffect, useMemo, useRef, useState } from "react";
 import type { Fixture } from "#core/contracts/fixtures";
 import { toLocatorPlan, type LocatorPlan } from "#core/domain/layout/to-locator-input";
 import type { LocalReading, LocalSweep } from "../model/local-types";
-import type { LiveReply, LiveRequest } from "../model/live-messages";
+import type { LiveReply } from "../model/live-messages";
+import { liveRequest } from "../model/live-request";
 import { LIVE_START, liveReplied, liveRequested, type LiveState } from "../model/live-state";
 
 /** Wait this long after the last committed reading before asking again: a burst of saves asks once (ms). */
@@ -38,7 +39,15 @@ export function useLiveGuide(args: {
   useEffect(() => {
     if (typeof Worker === "undefined") return;
     const w = new Worker(new URL("../worker/live-guide.worker.ts", import.meta.url), { type: "module" });
-    w.onmessage = (e: MessageEvent<LiveReply>) => setState((s) => liveReplied(s, e.data));
+    w.onmessage = (e: MessageEvent<LiveReply>) => {
+      setState((s) => liveReplied(s, e.data));
+      // Tells whoever listens (bench:live times the updates with it) what the worker answered and when.
+      const { id, kind } = e.data;
+      const ms = "ms" in e.data ? e.data.ms : null;
+      window.dispatchEvent(
+        new CustomEvent("plumeline:live-reply", { detail: { id, kind, ms, at: performance.now() } }),
+      );
+    };
     w.onerror = (e) => {
       e.preventDefault();
       setState((s) => ({ ...s, problems: ["The live estimate stopped on this device."] }));
@@ -55,30 +64,12 @@ export function useLiveGuide(args: {
     if (!w || !sweep || !locatorPlan) return;
     const timer = setTimeout(() => {
       const id = nextId.current++;
-      const last = readings[readings.length - 1];
-      const request: LiveRequest = {
-        id,
-        plan: locatorPlan,
-        instrument: {
-          transportDelayS: sweep.transportDelayS,
-          timeConstantS: sweep.timeConstantS,
-          alarmPpm: sweep.alarmPpm,
-        },
-        startedAt: sweep.startedAt,
-        readings: readings.map((r) => ({
-          id: r.id,
-          x: r.x,
-          y: r.y,
-          takenAt: r.takenAt,
-          ppm: r.ppm,
-          atLeast: r.atLeast,
-          samplePoint: r.samplePoint,
-          note: r.note,
-        })),
-        from: last ? { x: last.x, y: last.y } : null,
-      };
+      const request = liveRequest(id, sweep, locatorPlan, readings);
       setState((s) => liveRequested(s, id));
       w.postMessage(request);
+      window.dispatchEvent(
+        new CustomEvent("plumeline:live-request", { detail: { id, readings: readings.length, at: performance.now() } }),
+      );
     }, DEBOUNCE_MS);
     return () => clearTimeout(timer);
   }, [readings, locatorPlan, sweep?.id, sweep?.transportDelayS, sweep?.timeConstantS, sweep?.alarmPpm]);
