@@ -45,11 +45,20 @@ export function windowMarginM(input: LocatorInput, walkSpeedMps: number): number
 }
 
 /**
+ * Grid cell of the live estimate, m: twice the server's 0.25 m, a quarter of the cells, so an update
+ * with 300 readings keeps pace on a phone. The spot it gives stays within the radius of the full
+ * analysis's on the demo sweep (tests/api/live-guide-agreement.test.ts); the radius floor is 2.5 m.
+ */
+export const LIVE_CELL_SIZE_M = 0.5;
+
+/**
  * The live suspects: the same locator as the server's analysis, run on the window of the plan around
- * the alarm readings (evidence-window.ts), its spots moved back to plan coordinates. Pure and
- * deterministic; the Walk screen runs it in a Web Worker after each committed reading.
+ * the alarm readings (evidence-window.ts) at LIVE_CELL_SIZE_M, its spots moved back to plan
+ * coordinates. Pure and deterministic; the Walk screen runs it in a Web Worker after each committed
+ * reading.
  */
 export function liveFit(input: LocatorInput, options: Partial<LocatorOptions> = {}): LiveFit {
+  options = { cellSize: LIVE_CELL_SIZE_M, ...options };
   const walkSpeedMps = options.walkSpeedMps ?? 1;
   const box = evidenceBox(input, windowMarginM(input, walkSpeedMps));
   if (!box)

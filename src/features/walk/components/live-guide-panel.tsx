@@ -46,7 +46,7 @@ export function LiveGuidePanel({
       data-testid="live-guide"
       data-suspects={e.kind === "suspects" ? e.suspects.length : 0}
       data-probes={state.probes.length}
-      className="border-t-2 border-[#5b2d8c] bg-surface px-2 py-1"
+      className="max-h-[34vh] overflow-y-auto border-t-2 border-[#5b2d8c] bg-surface px-2 py-1"
     >
       <div className="flex items-center justify-between gap-2">
         <p className="min-w-0 flex-1 truncate font-bold" data-testid="live-first">

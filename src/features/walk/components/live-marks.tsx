@@ -20,6 +20,10 @@ export function LiveMarks({
 }) {
   const look = markLooks(highContrast);
   const px = (n: number) => n / zoom;
+  // A probe square is 0.5 m across, kept between 10 and 22 px: probe points 0.6 m apart stay apart at
+  // the whole-store view. Its number shows once the square is big enough to read it.
+  const side = Math.min(22, Math.max(10, 0.5 * zoom));
+  const numbered = side >= 18;
   return (
     <>
       {suspects.map((s) => (
@@ -53,10 +57,10 @@ export function LiveMarks({
       {probes.map((p, i) => (
         <Rect
           key={`p${i}`}
-          x={p.x - px(11)}
-          y={p.y - px(11)}
-          width={px(22)}
-          height={px(22)}
+          x={p.x - px(side / 2)}
+          y={p.y - px(side / 2)}
+          width={px(side)}
+          height={px(side)}
           fill={look.nextProbe.fill}
           stroke={look.nextProbe.stroke}
           strokeWidth={2}
@@ -64,7 +68,7 @@ export function LiveMarks({
           listening={false}
         />
       ))}
-      {probes.map((p, i) => (
+      {(numbered ? probes : []).map((p, i) => (
         <Text
           key={`n${i}`}
           x={p.x - px(11)}
