@@ -94,6 +94,10 @@ it("on a phone, offline, after the demo sweep's readings: live suspects and next
 
   const guide = page.getByTestId("live-guide");
   await page.locator('[data-testid="live-guide"]:not([data-suspects="0"]):not([data-probes="0"])').waitFor();
+  // Folded to one line over the plan's bottom edge at first; opened, it lists the probe points.
+  await expect(page.getByTestId("live-folded").textContent()).resolves.toMatch(/probe point/);
+  await page.screenshot({ path: path.join(SCREENS, "walk-live-guide-folded.png") });
+  await page.getByRole("button", { name: "Show guide" }).tap();
   const first = await page.getByTestId("live-first").textContent();
   // The demo's latest leak is a brazed joint behind Dairy 3 (server/db/seed/demo-story.ts).
   expect(first).toMatch(/^Suspect 1: Dairy 3, within /);

@@ -40,7 +40,7 @@ const state: LiveState = {
   probes,
 };
 
-const noCheck = { supply: { kind: "none" } as const, onSupplyCheck: () => {} };
+const noCheck = { supply: { kind: "none" } as const, onSupplyCheck: () => {}, folded: false, onFold: () => {} };
 
 describe("LiveGuidePanel", () => {
   it("lists the next probe points in walking order with their reasons, and says it is provisional", () => {
@@ -60,13 +60,18 @@ describe("LiveGuidePanel", () => {
     expect(onProbe).toHaveBeenCalledWith(probes[1]);
   });
 
-  it("folds to one line, and shows nothing before any reading reaches the alarm", () => {
-    const { unmount } = render(
-      <LiveGuidePanel state={state} words={words} from={null} onProbe={() => {}} {...noCheck} />,
+  it("folds to one line that still names the first suspect and counts the probe points, and shows nothing before any reading reaches the alarm", () => {
+    const onFold = vi.fn();
+    const { rerender, unmount } = render(
+      <LiveGuidePanel state={state} words={words} from={null} onProbe={() => {}} {...noCheck} onFold={onFold} />,
     );
     fireEvent.click(screen.getByRole("button", { name: "Hide" }));
+    expect(onFold).toHaveBeenCalledWith(true);
+    rerender(<LiveGuidePanel state={state} words={words} from={null} onProbe={() => {}} {...noCheck} folded />);
     expect(screen.queryAllByRole("listitem")).toHaveLength(0);
-    expect(screen.getByTestId("live-first")).toBeTruthy();
+    expect(screen.getByTestId("live-first").textContent).toBe("Suspect 1: Dairy 3, within 2.5 m");
+    expect(screen.getByTestId("live-folded").textContent).toBe("2 probe points · live estimate");
+    expect(screen.getByRole("button", { name: "Show guide" })).toBeTruthy();
     unmount();
     const quiet = render(
       <LiveGuidePanel
@@ -91,6 +96,8 @@ describe("LiveGuidePanel", () => {
         onProbe={() => {}}
         supply={{ kind: "ask", suspect: suspect! }}
         onSupplyCheck={onSupplyCheck}
+        folded={false}
+        onFold={() => {}}
       />,
     );
     expect(screen.getByTestId("supply-ask").textContent).toMatch(

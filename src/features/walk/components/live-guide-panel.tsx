@@ -1,4 +1,3 @@
-import { useState } from "react";
 import type { LiveProbe, LiveSuspect } from "#core/analysis/guide/live-guide";
 import { formatShort } from "#core/domain/locator-words/number-words";
 import { SETTLE_ESTIMATES } from "../model/live-state";
@@ -15,7 +14,8 @@ import { lengthWords } from "#core/domain/locator-words/length-words";
 import type { LiveState } from "../model/live-state";
 
 /**
- * The live estimate under the Walk plan: the first suspect, the next probe points in walking order
+ * The live estimate over the bottom of the Walk plan (over it, not beside it, so the plan never moves
+ * under a finger when an answer comes): the first suspect, the next probe points in walking order
  * with why each helps (tapping one opens the keypad there, as tapping the plan does), and the label
  * that says it is provisional. Folds to one line so the plan keeps the screen.
  */
@@ -26,6 +26,8 @@ export function LiveGuidePanel({
   onProbe,
   supply,
   onSupplyCheck,
+  folded,
+  onFold,
 }: {
   state: LiveState;
   words: WordsContext;
@@ -35,8 +37,10 @@ export function LiveGuidePanel({
   /** The supply-air check of the settled first suspect: asked for, or made. */
   supply: SupplyCheck;
   onSupplyCheck(suspect: LiveSuspect): void;
+  /** Folded to one line (the screen keeps this, so it stays as set while the keypad comes and goes). */
+  folded: boolean;
+  onFold(folded: boolean): void;
 }) {
-  const [folded, setFolded] = useState(false);
   const e = state.estimate;
   if (!e || e.kind === "no-alarm") return null;
   const first = e.kind === "suspects" ? e.suspects[0] : null;
@@ -46,17 +50,30 @@ export function LiveGuidePanel({
       data-testid="live-guide"
       data-suspects={e.kind === "suspects" ? e.suspects.length : 0}
       data-probes={state.probes.length}
-      className="max-h-[34vh] overflow-y-auto border-t-2 border-[#5b2d8c] bg-surface px-2 py-1"
+      className="absolute inset-x-0 bottom-0 max-h-[34vh] overflow-y-auto border-t-2 border-[#5b2d8c] bg-surface/95 px-2 py-1"
     >
       <div className="flex items-center justify-between gap-2">
-        <p className="min-w-0 flex-1 truncate font-bold" data-testid="live-first">
-          {first ? liveSuspectWords(first, words) : "Live estimate: no spot fits the readings yet"}
+        <p className="min-w-0 flex-1 leading-tight">
+          <span className="block truncate font-bold" data-testid="live-first">
+            {first ? liveSuspectWords(first, words) : "Live estimate: no spot fits the readings yet"}
+          </span>
+          {folded ? (
+            <span className="block truncate text-sm" data-testid="live-folded">
+              {[
+                state.probes.length ? `${state.probes.length} probe point${state.probes.length > 1 ? "s" : ""}` : null,
+                supply.kind === "ask" ? "supply-air check due" : null,
+                "live estimate",
+              ]
+                .filter(Boolean)
+                .join(" · ")}
+            </span>
+          ) : null}
         </p>
         <button
           type="button"
           className="min-h-12 shrink-0 px-2 font-bold underline"
           aria-expanded={!folded}
-          onClick={() => setFolded(!folded)}
+          onClick={() => onFold(!folded)}
         >
           {folded ? "Show guide" : "Hide"}
         </button>

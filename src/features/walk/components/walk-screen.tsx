@@ -128,6 +128,8 @@ export function WalkScreen({
     () => liveWordsContext(fixtures, lengthUnit, numberFormat, sweep?.timeConstantS ?? 0),
     [fixtures, lengthUnit, numberFormat, sweep?.timeConstantS],
   );
+  // The live guide starts folded to one line over the plan's bottom edge: the plan stays the screen.
+  const [guideOpen, setGuideOpen] = useState(false);
   const supply = useMemo(() => supplyCheckOf(settledSuspect(live), committed), [live, committed]);
   const recent = useMemo(() => {
     const out: number[] = [];
@@ -302,7 +304,7 @@ export function WalkScreen({
         ) : null}
       </header>
       <div className="flex min-h-0 flex-1 flex-col landscape:md:flex-row">
-        <div className="min-h-0 min-w-0 flex-1">
+        <div className="relative min-h-0 min-w-0 flex-1">
           <PlanStage
             widthM={plan.widthM ?? 1}
             heightM={plan.heightM ?? 1}
@@ -325,19 +327,21 @@ export function WalkScreen({
               />
             )}
           />
+          {keypadFor || readOnly ? null : (
+            <LiveGuidePanel
+              state={live}
+              words={liveWords}
+              from={committed.length ? committed[committed.length - 1] : null}
+              onProbe={(p) => onTap(p.x, p.y, Date.now())}
+              supply={supply}
+              onSupplyCheck={(s) =>
+                onTap(s.x, s.y, Date.now(), { samplePoint: "supply", note: supplyAirNote(s, liveWords) })
+              }
+              folded={!guideOpen}
+              onFold={(folded) => setGuideOpen(!folded)}
+            />
+          )}
         </div>
-        {keypadFor || readOnly ? null : (
-          <LiveGuidePanel
-            state={live}
-            words={liveWords}
-            from={committed.length ? committed[committed.length - 1] : null}
-            onProbe={(p) => onTap(p.x, p.y, Date.now())}
-            supply={supply}
-            onSupplyCheck={(s) =>
-              onTap(s.x, s.y, Date.now(), { samplePoint: "supply", note: supplyAirNote(s, liveWords) })
-            }
-          />
-        )}
         {keypadFor ? (
           <div className="landscape:md:w-96 landscape:md:overflow-y-auto">
             <PpmKeypad
