@@ -111,6 +111,8 @@ it("on a phone, offline, after the demo sweep's readings: live suspects and next
   await page.screenshot({ path: path.join(SCREENS, "walk-live-guide-phone-offline.png") });
 
   const [px, py] = (await probes.first().getAttribute("data-at"))!.split(" ").map(Number);
+  const estimates = async () => Number(await guide.getAttribute("data-estimates"));
+  let counted = await estimates();
   await probes.first().tap();
   await page.getByRole("heading", { name: `#${taps.length + 1}`, exact: true }).waitFor();
   await page.getByRole("button", { name: "0 ppm — save" }).waitFor();
@@ -135,10 +137,13 @@ it("on a phone, offline, after the demo sweep's readings: live suspects and next
 
   // Two more readings at the next probe points: the first suspect holds, and the screen asks for the
   // supply-air check, which opens the keypad on the suspect with the sample point set to supply air.
+  // Each save is answered before the next (the panel is away while the keypad is open), so every
+  // estimate counts toward the settling.
   const settled = page.getByTestId("supply-ask");
-  for (let i = 0; i < 4 && !(await settled.isVisible()); i++) {
+  for (let i = 0; i < 6; i++) {
     if (i > 0) {
       await page.locator('[data-testid="live-guide"]:not([data-probes="0"])').waitFor();
+      counted = await estimates();
       await probes.first().tap();
       await page.getByRole("heading", { name: `#${taps.length + 1 + i}`, exact: true }).waitFor();
     }
@@ -148,7 +153,11 @@ it("on a phone, offline, after the demo sweep's readings: live suspects and next
       .getByTestId("walk-count")
       .filter({ hasText: `${taps.length + 1 + i} readings` })
       .waitFor();
-    await page.waitForTimeout(1500);
+    await page.waitForFunction(
+      (n) => Number(document.querySelector('[data-testid="live-guide"]')?.getAttribute("data-estimates")) > n,
+      counted,
+    );
+    if (await settled.isVisible()) break;
   }
   await settled.waitFor();
   await page.screenshot({ path: path.join(SCREENS, "walk-live-guide-supply-ask.png") });

@@ -50,6 +50,7 @@ export function LiveGuidePanel({
       data-testid="live-guide"
       data-suspects={e.kind === "suspects" ? e.suspects.length : 0}
       data-probes={state.probes.length}
+      data-estimates={state.answered}
       className="absolute inset-x-0 bottom-0 max-h-[34vh] overflow-y-auto border-t-2 border-[#5b2d8c] bg-surface/95 px-2 py-1"
     >
       <div className="flex items-center justify-between gap-2">

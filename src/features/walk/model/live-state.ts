@@ -18,6 +18,8 @@ export interface LiveState {
   firsts: LiveSuspect[];
   /** What the worker said was wrong with the last request, if anything. */
   problems: string[];
+  /** Estimates taken in so far (stale ones not counted). */
+  answered: number;
   /** Milliseconds the worker took for the last estimate and probes. */
   ms: { estimate: number; probes: number };
 }
@@ -28,6 +30,7 @@ export const LIVE_START: LiveState = {
   probes: [],
   firsts: [],
   problems: [],
+  answered: 0,
   ms: { estimate: 0, probes: 0 },
 };
 
@@ -52,6 +55,7 @@ export function liveReplied(s: LiveState, reply: LiveReply): LiveState {
         probes: [],
         firsts: first ? [...s.firsts, first].slice(-SETTLE_ESTIMATES) : [],
         problems: [],
+        answered: s.answered + 1,
         ms: { estimate: reply.ms, probes: 0 },
       };
     }
