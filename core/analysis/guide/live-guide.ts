@@ -95,6 +95,9 @@ export function liveFit(input: LocatorInput, options: Partial<LocatorOptions> = 
 /** Probe places are looked for this far around the first suspect, m (a short walk along a lineup). */
 export const PROBE_REACH_M = 6;
 
+/** A probe place this close to a reading already taken counts as read, m (about a tap's jitter on the plan). */
+export const TAKEN_WITHIN_M = 0.3;
+
 /** A next probe point in plan coordinates, with the facts of why it was chosen. */
 export type LiveProbe = Omit<ProbeSuggestion, "value">;
 
@@ -110,7 +113,11 @@ export function liveProbes(fit: LiveFit, from: { x: number; y: number }, n = 3):
   const source = createSourceKernel(k.screeningLengthM, k.nearCutoffM, k.truncationM);
   const kernel = (d: number) => source.at(d);
   const first = candidates[0];
-  const places = probePlaces(window.input.plan, first, PROBE_REACH_M);
+  // A place where a reading was already taken is not offered again: the technician has its answer.
+  const taken = window.input.readings;
+  const places = probePlaces(window.input.plan, first, PROBE_REACH_M).filter(
+    (p) => !taken.some((r) => Math.hypot(r.x - p.x, r.y - p.y) < TAKEN_WITHIN_M),
+  );
   const hypotheses = hypothesesOf(candidates, fit.corrected, kernel);
   const here = { x: from.x - box.x, y: from.y - box.y };
   return nextProbes(hypotheses, places, kernel, here, n).map(({ value: _value, ...p }) => ({
