@@ -1,5 +1,5 @@
 import type { LiveProbe, LiveSuspect } from "#core/analysis/guide/live-guide";
-import { formatShort } from "#core/domain/locator-words/number-words";
+import { formatShort } from "#core/domain/numbers/number-format";
 import { SETTLE_ESTIMATES } from "../model/live-state";
 import type { SupplyCheck } from "../model/supply-check";
 import type { WordsContext } from "#core/domain/locator-words/words-context";
