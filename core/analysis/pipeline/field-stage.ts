@@ -29,6 +29,8 @@ export function fieldStage(
   lag: LagResult,
   zones: Pick<ZonesResult, "zoneOfReading">,
   settings: { kernel: KernelSettings; noise: NoiseSettings },
+  /** Search only from these readings (a partial field, see accumulateReadingFields); null = all. */
+  searched: Uint8Array | null = null,
 ): FieldResult {
   const k = settings.kernel;
   const n = lag.ppm.length;
@@ -42,7 +44,17 @@ export function fieldStage(
   const usable = new Uint8Array(n);
   for (let i = 0; i < n; i++) usable[i] = !lag.censored[i] && zones.zoneOfReading[i] < 0 ? 1 : 0;
   const weights = readingWeights(lag.ppm, settings.noise);
-  const fields = accumulateReadingFields(grid, lag.xs, lag.ys, lag.ppm, weights, kernel, k.mapSigmaM, stepScale);
+  const fields = accumulateReadingFields(
+    grid,
+    lag.xs,
+    lag.ys,
+    lag.ppm,
+    weights,
+    kernel,
+    k.mapSigmaM,
+    stepScale,
+    searched,
+  );
   return {
     background: estimateBackground(lag.ppm, usable),
     weights,
