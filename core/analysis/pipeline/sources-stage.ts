@@ -49,9 +49,14 @@ export function supportingReadings(
   return idx;
 }
 
-export function supportRule(field: FieldResult, zones: ZonesResult, sources: SourceSettings): SupportRule {
+export function supportRule(
+  field: Pick<FieldResult, "kernels">,
+  zones: ZonesResult,
+  sources: SourceSettings,
+): SupportRule {
   return {
-    threshold: field.kernel.at(sources.supportRadiusM),
+    // with several air models, a reading within the radius in any of them supports the spot
+    threshold: Math.min(...field.kernels.map((k) => k.at(sources.supportRadiusM))),
     elevatedPpm: sources.elevatedPpm,
     zoneOfReading: zones.zoneOfReading,
   };
