@@ -2,6 +2,7 @@ import { gridCellCount, LocatorInputError, MAX_GRID_CELLS, type LocatorInput } f
 import type { DelayFacts, LocatorResult } from "../contracts/locator-output";
 import { createPlanGrid } from "./grid/plan-grid";
 import { DEFAULT_LOCATOR_OPTIONS, type LocatorOptions } from "./locator/locator-options";
+import { mixedLevel } from "./locator/mixed-level";
 import { readingAir } from "./locator/pass-air";
 import { casesRunFans, fanStepScale } from "./locator/plan-masks";
 import { LOCATOR_SETTINGS, type LocatorSettings } from "./locator/settings";
@@ -70,12 +71,18 @@ export function locate(
       nearCutoffM: k.nearCutoffM,
       elevatedPpm: settings.sources.elevatedPpm,
     });
-    const field = fieldStage(grid, stepScale, casesRunFans(plan.fixtures), lag, zones, settings, other);
-    const sources = sourcesStage(plan, grid, lag, zones, field, {
-      kernel: k,
-      sources: settings.sources,
-      zoneMarginM: settings.zones.marginM,
-    });
+    const level = other ? mixedLevel(plan, air, lag, zones.zoneOfReading, instrument.alarmPpm) : null;
+    const otherAir = other && level ? { ...other, levelOnly: level.levelOnly } : other;
+    const field = fieldStage(grid, stepScale, casesRunFans(plan.fixtures), lag, zones, settings, otherAir);
+    const sources = sourcesStage(
+      plan,
+      grid,
+      lag,
+      zones,
+      field,
+      { kernel: k, sources: settings.sources, zoneMarginM: settings.zones.marginM },
+      level?.columns ?? [],
+    );
     const rule = supportRule(field, zones, settings.sources);
     const placement = placementStage(plan, grid, lag, field, sources, rule, settings);
     return { lag, zones, field, sources, placement };

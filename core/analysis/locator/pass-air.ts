@@ -24,12 +24,15 @@ export function fixturesInPass(fixtures: readonly LocatorFixture[], pass: Locato
 }
 
 /** One model per pass that changes the air and holds readings; passes that change nothing share model 0. */
-export function readingAir(input: Pick<LocatorInput, "plan" | "readings" | "passes">): ReadingAir {
+export function readingAir(
+  input: Pick<LocatorInput, "plan" | "readings"> & { passes?: LocatorInput["passes"] },
+): ReadingAir {
   const fixtures = input.plan.fixtures;
   const models: (readonly LocatorFixture[])[] = [fixtures];
   const modelOfPass = new Map<string, number>();
   const modelOfReading = new Int32Array(input.readings.length);
-  const byId = new Map(input.passes.map((p) => [p.id, p]));
+  // callers that build the input in code (benchmarks, the Walk screen) may leave `passes` out
+  const byId = new Map((input.passes ?? []).map((p) => [p.id, p]));
   input.readings.forEach((r, i) => {
     if (r.pass === undefined) return;
     let m = modelOfPass.get(r.pass);
@@ -42,4 +45,16 @@ export function readingAir(input: Pick<LocatorInput, "plan" | "readings" | "pass
     modelOfReading[i] = m;
   });
   return { models, modelOfReading };
+}
+
+/** The readings taken while fixture `k`'s fans ran (its own air model says so). */
+export function readingsWithFansOn(air: ReadingAir, k: number): number[] {
+  const keep: number[] = [];
+  for (let i = 0; i < air.modelOfReading.length; i++) if (air.models[air.modelOfReading[i]][k].fans) keep.push(i);
+  return keep;
+}
+
+/** Whether a pass stilled fixture `k` whose fans run in the plan's own air. */
+export function stilledByAPass(air: ReadingAir, k: number): boolean {
+  return air.models[0][k].fans && air.models.some((m) => !m[k].fans);
 }

@@ -7,7 +7,7 @@ import type {
 } from "../../contracts/locator-output";
 import { cellIndexOf, type PlanGrid } from "../grid/plan-grid";
 import { benignSource, fansMixing, sparseCoverage } from "../locator/diagnostics";
-import type { ReadingAir } from "../locator/pass-air";
+import { readingsWithFansOn, type ReadingAir } from "../locator/pass-air";
 import type { ReportSettings, SourceSettings } from "../locator/settings";
 import { MOLAR_VOLUME_25C_L } from "../locator/units";
 import type { FieldResult } from "./field-stage";
@@ -111,11 +111,4 @@ export function diagnosticsStage(
       pressureKPa: 101.325,
     },
   };
-}
-
-/** The readings taken while fixture `k`'s fans ran (its own air model says so). */
-function readingsWithFansOn(air: ReadingAir, k: number): number[] {
-  const keep: number[] = [];
-  for (let i = 0; i < air.modelOfReading.length; i++) if (air.models[air.modelOfReading[i]][k].fans) keep.push(i);
-  return keep;
 }

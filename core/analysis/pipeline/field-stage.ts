@@ -38,6 +38,8 @@ export interface OtherAir {
   /** Models 1, 2, …; model 0 is the plan's own (`stepScale`, `fansStir`). */
   readonly models: readonly AirModel[];
   readonly modelOfReading: Int32Array;
+  /** 1 for a reading that only says a stilled fixture's level (locator/mixed-level.ts): drawn on the map, fitted by no point source. */
+  readonly levelOnly?: Uint8Array;
 }
 
 /**
@@ -71,7 +73,7 @@ export function fieldStage(
   const usable = new Uint8Array(n);
   for (let i = 0; i < n; i++) usable[i] = !lag.censored[i] && zones.zoneOfReading[i] < 0 ? 1 : 0;
   const weights = readingWeights(lag.ppm, settings.noise);
-  const fields = fieldsByModel(grid, lag, weights, models, kernels, modelOfReading, k.mapSigmaM);
+  const fields = fieldsByModel(grid, lag, weights, models, kernels, modelOfReading, other?.levelOnly, k.mapSigmaM);
   return {
     background: estimateBackground(lag.ppm, usable),
     weights,
@@ -91,26 +93,45 @@ function fieldsByModel(
   models: readonly AirModel[],
   kernels: readonly SourceKernel[],
   modelOfReading: Int32Array,
+  levelOnly: Uint8Array | undefined,
   mapSigmaM: number,
 ): ReadingFields {
-  const used = models.map((_, m) => modelOfReading.some((v) => v === m));
-  if (!used.slice(1).some(Boolean))
+  const n = lag.ppm.length;
+  // a part per air model, and apart from it that model's level-only readings
+  const partOf = (i: number) => 2 * modelOfReading[i] + (levelOnly?.[i] ? 1 : 0);
+  const used = new Set(Array.from({ length: n }, (_, i) => partOf(i)));
+  if (used.size === 1 && used.has(0))
     return accumulateReadingFields(grid, lag.xs, lag.ys, lag.ppm, weights, kernels[0], mapSigmaM, models[0].stepScale);
-  const parts = models.flatMap((model, m) => {
-    if (!used[m]) return [];
-    const readings = Int32Array.from(modelOfReading.keys()).filter((i) => modelOfReading[i] === m);
-    const pick = (a: Float64Array) => Float64Array.from(readings, (i) => a[i]);
-    const fields = accumulateReadingFields(
-      grid,
-      pick(lag.xs),
-      pick(lag.ys),
-      pick(lag.ppm),
-      pick(weights),
-      kernels[m],
-      mapSigmaM,
-      model.stepScale,
-    );
-    return [{ fields, readings }];
-  });
-  return mergeReadingFields(parts, lag.ppm.length, grid.width * grid.height);
+  const parts = [...used]
+    .sort((a, b) => a - b)
+    .map((part) => {
+      const m = part >> 1;
+      const readings = Int32Array.from({ length: n }, (_, i) => i).filter((i) => partOf(i) === part);
+      const pick = (a: Float64Array) => Float64Array.from(readings, (i) => a[i]);
+      const fields = accumulateReadingFields(
+        grid,
+        pick(lag.xs),
+        pick(lag.ys),
+        pick(lag.ppm),
+        pick(weights),
+        kernels[m],
+        mapSigmaM,
+        models[m].stepScale,
+      );
+      return { fields: part & 1 ? withoutKernel(fields) : fields, readings };
+    });
+  return mergeReadingFields(parts, n, grid.width * grid.height);
+}
+
+/** The same readings on the map (Ω sums, nearest reading) with no kernel value anywhere: no source reaches them. */
+function withoutKernel(f: ReadingFields): ReadingFields {
+  return {
+    ...f,
+    start: new Int32Array(f.start.length),
+    cell: new Int32Array(0),
+    kernel: new Float32Array(0),
+    dist: new Float32Array(0),
+    sumWG: new Float64Array(f.sumWG.length),
+    sumWGG: new Float64Array(f.sumWGG.length),
+  };
 }

@@ -21,7 +21,7 @@ export interface SourcesResult {
   readonly prior: Float64Array | null;
   /** Fitted sources (strongest first), then alternatives of the first scan. */
   readonly found: readonly FoundSource[];
-  /** The final joint fit: background b, then one strength per zone, then per fitted source. */
+  /** The final joint fit: background b, then one strength per zone, per stilled fixture's level, then per fitted source. */
   readonly fit: NonnegativeFit;
   readonly firstScan: ScanResult;
   /** Residual variance of the final fit (at least 1), which tempers every Δχ² later on. */
@@ -69,6 +69,8 @@ export function sourcesStage(
   zones: ZonesResult,
   field: FieldResult,
   settings: { kernel: KernelSettings; sources: SourceSettings; zoneMarginM: number },
+  /** Fixed columns fitted with the zones' after them: the level of fixtures a pinpoint pass stilled (mixed-level.ts). */
+  levels: readonly Float64Array[] = [],
 ): SourcesResult {
   const s = settings.sources;
   const y = lag.ppm;
@@ -114,7 +116,7 @@ export function sourcesStage(
     y,
     w: field.weights,
     censored: lag.censored,
-    nuisance: zones.columns as Float64Array[],
+    nuisance: [...zones.columns, ...levels],
     allowed,
     gridWidth: grid.width,
     cellSize: grid.cellSize,
@@ -137,7 +139,7 @@ export function sourcesStage(
       return true;
     },
   });
-  const dof = Math.max(1, n - 2 - greedy.sources.length - zones.columns.length);
+  const dof = Math.max(1, n - 2 - greedy.sources.length - zones.columns.length - levels.length);
   return {
     fields,
     allowed,

@@ -23,6 +23,7 @@ import { CautionDialog } from "./caution-dialog";
 import { LagHintBanner } from "./lag-hint-banner";
 import { LeakForm } from "./leak-form";
 import { LogImport } from "./log-import";
+import { PinpointPassPanel } from "./pinpoint-pass-panel";
 import { PlanStage } from "./plan-stage";
 import { PpmKeypad, type KeypadValue } from "./ppm-keypad";
 import { ReadingsDrawer } from "./readings-drawer";
@@ -271,6 +272,14 @@ export function WalkScreen({
             </button>
           </Alert>
         ) : null}
+        <PinpointPassPanel
+          sweep={sweep}
+          fixtures={fixtures}
+          committed={committed}
+          systems={storePack.data?.systems ?? []}
+          readOnly={readOnly}
+          reload={walk.reload}
+        />
         {showHint ? (
           <LagHintBanner
             hint={showHint}
