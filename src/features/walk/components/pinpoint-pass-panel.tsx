@@ -7,7 +7,9 @@ import { mixingAdvice } from "../model/mixing-advice";
 import { clockText, passConditionText, passNumbers } from "../model/pinpoint-pass";
 import { StartPassDialog } from "./start-pass-dialog";
 
-const BANNER = "flex items-center justify-between gap-2 rounded-md border-l-4 px-3 py-1 text-sm leading-snug edge";
+// The words over the whole width, the actions in a row under them: a phone's header stays short.
+const BANNER = "flex flex-col gap-0 rounded-md border-l-4 px-3 pt-1 text-sm leading-snug edge";
+const ACTIONS = "flex flex-wrap justify-end gap-x-3";
 
 /**
  * The still-air pass on the Walk screen: the advice when readings say the fans are mixing the gas, the
@@ -58,7 +60,7 @@ export function PinpointPassPanel({
               : `Restore the fans in ${clockText(r.leftMs)}.`}
           </span>
         </span>
-        <span className="flex shrink-0 gap-1">
+        <span className={ACTIONS}>
           <button
             type="button"
             className="min-h-12 px-2 font-bold underline"
@@ -84,7 +86,7 @@ export function PinpointPassPanel({
             </strong>{" "}
             its fans are mixing the gas. Stop them or start a defrost, then re-check in still air.
           </span>
-          <span className="flex shrink-0 gap-1">
+          <span className={ACTIONS}>
             <button
               type="button"
               className="min-h-12 px-2 font-bold underline"
