@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { agentFor, createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
 import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 import { caseLineFixtures } from "../../../tests/helpers/sweep-walk";
+import { pdfText } from "../../../tests/helpers/pdf-text";
 import { detectors } from "../../db/schema/index";
 import type { Role } from "#core/domain/roles";
 
@@ -196,6 +197,16 @@ describe("readings in a pass", () => {
   });
 });
 
+/** Reads a binary answer (the PDF) whole. */
+const binary = (
+  res: NodeJS.ReadableStream & { setEncoding(e: string): void; on: Function },
+  cb: (e: Error | null, b: Buffer) => void,
+) => {
+  const chunks: Buffer[] = [];
+  res.on("data", (c: Buffer) => chunks.push(c));
+  res.on("end", () => cb(null, Buffer.concat(chunks)));
+};
+
 /** The ppm at each tap: `c` where the probe was 6.5 s earlier, by time between taps, to a tenth of a ppm. */
 function sampled(taps: { x: number; y: number; s: number }[], c: (x: number, y: number) => number) {
   return taps.map((tap) => {
@@ -246,5 +257,17 @@ describe("the analysis of a sweep with a pinpoint pass", () => {
     const top = res.body.candidates[0];
     expect(top, JSON.stringify(kinds)).toBeDefined();
     expect(Math.hypot(top.x - leak.x, top.y - leak.y), JSON.stringify(res.body.candidates.slice(0, 3))).toBeLessThan(1);
+
+    // The report says which reading was in which pass, and the passes' conditions.
+    const pdf = await (await as("engineer")).agent
+      .get(`/api/sweeps/${sweepId}/report.pdf`)
+      .buffer(true)
+      .parse(binary as never);
+    expect(pdf.status).toBe(200);
+    const text = (await pdfText(pdf.body as Buffer)).join("\n");
+    expect(text).toMatch(/pass 1: fans running; pass 2: fans stopped at Dairy 1–4, [\d:]+–not ended/);
+    // each row's point cell ends with its pass (it may wrap onto a second line)
+    expect(text.match(/grille,\s+pass 2/g)).toHaveLength(still.length);
+    expect(text.match(/grille,\s+pass 1/g)).toHaveLength(first.length);
   });
 });
