@@ -134,6 +134,16 @@ it("on a phone with touch: level readings along a case advise stopping its fans;
   expect(top.x).toBeGreaterThan(2);
   expect(top.x).toBeLessThan(5.7);
   expect(top.y).toBeGreaterThan(8);
+
+  // The field map says which taps were in which pass (squares for the pinpoint pass).
+  await page.goto(`${suite.server.url}/stores/${suite.co.store.id}/sweeps/${sweepId}/map`);
+  const key = page.getByTestId("pass-key");
+  // (the fixtures' names arrive with the plan's layout, after the sweep)
+  await key
+    .filter({ hasText: /Pass 1 \(circles\): fans running.*Pass 2 \(squares\): fans stopped at Dairy 1/ })
+    .waitFor();
+  await page.getByLabel(/Field map with \d+ numbered suspect spots/).waitFor();
+  await page.screenshot({ path: path.join(SCREENS, "walk-pinpoint-field-map.png"), fullPage: true });
   expect(failures).toEqual([]);
   await context.close();
 });
