@@ -1,5 +1,6 @@
 import { useState, type FormEvent } from "react";
 import { Alert } from "../../../components/ui/alert";
+import { NewPasswordFields } from "../../../components/new-password-fields";
 import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
 import {
@@ -65,24 +66,13 @@ export function PasswordChangeForm() {
         onChange={(e) => setCurrent(e.target.value)}
         error={errors.currentPassword}
       />
-      <TextField
-        label="New password"
+      <NewPasswordFields
         name="newPassword"
-        type="password"
-        autoComplete="new-password"
-        hint="At least 10 characters."
-        value={next}
-        onChange={(e) => setNext(e.target.value)}
-        error={errors.newPassword}
-      />
-      <TextField
-        label="New password again"
-        name="confirm"
-        type="password"
-        autoComplete="new-password"
-        value={again}
-        onChange={(e) => setAgain(e.target.value)}
-        error={errors.confirm}
+        password={next}
+        confirm={again}
+        onPassword={setNext}
+        onConfirm={setAgain}
+        errors={errors}
       />
       <Button type="submit" busy={change.isPending}>
         Change password

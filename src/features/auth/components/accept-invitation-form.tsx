@@ -15,7 +15,7 @@ import {
   type FieldErrors,
 } from "../../../lib/form-errors";
 import { acceptInvitationInput, newAccountPassword, useAcceptInvitation } from "../api/accept-invitation";
-import { NewPasswordFields } from "./new-password-fields";
+import { NewPasswordFields } from "../../../components/new-password-fields";
 
 type Preview = z.infer<typeof invitationPreview>;
 

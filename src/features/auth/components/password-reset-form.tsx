@@ -10,7 +10,7 @@ import {
   type FieldErrors,
 } from "../../../lib/form-errors";
 import { passwordResetConfirmInput, useConfirmPasswordReset } from "../api/confirm-password-reset";
-import { NewPasswordFields } from "./new-password-fields";
+import { NewPasswordFields } from "../../../components/new-password-fields";
 
 export function PasswordResetForm({ token }: { token: string }) {
   const [password, setPassword] = useState("");

@@ -1,4 +1,4 @@
-import { TextField } from "../../../components/ui/text-field";
+import { TextField } from "./ui/text-field";
 
 export interface NewPasswordFieldsProps {
   password: string;
@@ -6,21 +6,30 @@ export interface NewPasswordFieldsProps {
   onPassword: (value: string) => void;
   onConfirm: (value: string) => void;
   errors: Record<string, string>;
+  /** The first field's form name, which is also the key of its error (forms' contracts differ). */
+  name?: string;
 }
 
-/** A new password typed twice: a typo here would lock the person out. */
-export function NewPasswordFields({ password, confirm, onPassword, onConfirm, errors }: NewPasswordFieldsProps) {
+/** A new password typed twice: a typo here would lock the person out. Shared by reset, invitation and profile. */
+export function NewPasswordFields({
+  password,
+  confirm,
+  onPassword,
+  onConfirm,
+  errors,
+  name = "password",
+}: NewPasswordFieldsProps) {
   return (
     <>
       <TextField
         label="New password"
-        name="password"
+        name={name}
         type="password"
         autoComplete="new-password"
         hint="At least 10 characters."
         value={password}
         onChange={(e) => onPassword(e.target.value)}
-        error={errors.password}
+        error={errors[name]}
       />
       <TextField
         label="New password again"
