@@ -67,8 +67,9 @@ describe("the joint fit of a first pass and a still-air pass", () => {
       expect(errorOf(top, leakX)).toBeLessThan(0.5);
       expect(errorOf(top, leakX)).toBeLessThan(top.radius);
       expect(top.radius).toBeLessThan(firstRadius);
-      // the first pass's readings are still the fans-running evidence they were
-      expect(joint.diagnostics.some((d) => d.kind === "fans-mixing")).toBe(true);
+      // the first pass's readings are still the fans-running evidence they were, and the pass is said to follow
+      expect(joint.diagnostics.find((d) => d.kind === "fans-mixing")).toMatchObject({ stilledByPass: true });
+      expect(first.diagnostics.find((d) => d.kind === "fans-mixing")).not.toHaveProperty("stilledByPass");
     });
   }
 

@@ -7,7 +7,7 @@ import type {
 } from "../../contracts/locator-output";
 import { cellIndexOf, type PlanGrid } from "../grid/plan-grid";
 import { benignSource, fansMixing, sparseCoverage } from "../locator/diagnostics";
-import { readingsWithFansOn, type ReadingAir } from "../locator/pass-air";
+import { readingsWithFansOn, stilledByAPass, type ReadingAir } from "../locator/pass-air";
 import type { ReportSettings, SourceSettings } from "../locator/settings";
 import { MOLAR_VOLUME_25C_L } from "../locator/units";
 import type { FieldResult } from "./field-stage";
@@ -49,7 +49,7 @@ export function diagnosticsStage(
     const keep = air && air.models.length > 1 ? readingsWithFansOn(air, k) : null;
     const pick = (v: Float64Array) => (keep ? Float64Array.from(keep, (i) => v[i]) : v);
     const d = fansMixing(f, pick(xs), pick(ys), pick(y), background, instrument.alarmPpm);
-    if (d) diagnostics.push(d);
+    if (d?.kind === "fans-mixing") diagnostics.push(air && stilledByAPass(air, k) ? { ...d, stilledByPass: true } : d);
   });
   plan.backgroundZones.forEach((zone, z) => {
     let explained = 0;
