@@ -1,6 +1,6 @@
 import type { LocatorAssumptions } from "../../contracts/locator-output";
 import { lengthWords } from "./length-words";
-import { formatNumber, formatShort } from "./number-words";
+import { formatGrouped, formatShort } from "../numbers/number-format";
 import type { SpotRefrigerant } from "./spot-refrigerant";
 import type { WordsContext } from "./words-context";
 
@@ -25,7 +25,7 @@ function refrigerantWords(spots: readonly { rank: number; refrigerant: SpotRefri
   }
   return [...groups.values()]
     .map(({ r, ranks }) => {
-      const m = `${formatNumber(r.molarMassGPerMol, 2, ctx.numbers)} g/mol`;
+      const m = `${formatGrouped(r.molarMassGPerMol, ctx.numbers, 2)} g/mol`;
       return r.source === "system"
         ? `${r.refrigerantId} (${m}, the refrigerant of ${r.systemName}) for ${spotList(ranks)}`
         : `${r.refrigerantId} (${m}), a default blend because ${DEFAULT_WHY[r.why]}, for ${spotList(ranks)}`;
@@ -51,7 +51,7 @@ export function assumptionWords(
   return [
     `Readings moved back along the walk by the transport delay plus the sensor time constant (${formatShort(a.shiftS, ctx.numbers)} s).`,
     `Strength per year assumes the store air is well mixed over ${lengthWords(a.mixingHeightM, ctx.length, ctx.numbers)} height with ${formatShort(a.airChangesPerH, ctx.numbers)} air changes per hour, ` +
-      `at ${temperature} and ${formatNumber(a.pressureKPa, 3, ctx.numbers)} kPa (${formatNumber(a.molarVolumeL, 3, ctx.numbers)} L/mol); treat it as an order of magnitude.${weighed}`,
+      `at ${temperature} and ${formatGrouped(a.pressureKPa, ctx.numbers, 3)} kPa (${formatGrouped(a.molarVolumeL, ctx.numbers, 3)} L/mol); treat it as an order of magnitude.${weighed}`,
     "Suspect spots are search zones for a hand check, not pinpoints; follow local codes and certified practice when working on the system.",
   ];
 }

@@ -1,5 +1,5 @@
 import type { DelayFacts } from "../../contracts/locator-output";
-import { formatShort } from "./number-words";
+import { formatShort } from "../numbers/number-format";
 import type { WordsContext } from "./words-context";
 
 // The locator checks shifts (transport delay plus the sensor's time constant); people set the delay, so

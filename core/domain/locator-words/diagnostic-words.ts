@@ -1,7 +1,7 @@
 import type { LocatorDiagnostic } from "../../contracts/locator-output";
 import { delayOfShift, secondsWords, statedDelayWords } from "./delay-words";
 import { lengthRangeWords, lengthWords } from "./length-words";
-import { formatShort } from "./number-words";
+import { formatShort } from "../numbers/number-format";
 import type { WordsContext } from "./words-context";
 
 const plural = (n: number, one: string, many: string) => (n === 1 ? one : many);

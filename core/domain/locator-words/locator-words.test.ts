@@ -7,7 +7,7 @@ import { delayCheckWords } from "./delay-words";
 import { diagnosticWords, noSpotWords } from "./diagnostic-words";
 import { lengthWords } from "./length-words";
 import { massPerYearWords } from "./mass-words";
-import { formatNumber, formatSignificant } from "./number-words";
+import { formatGrouped, formatSignificant } from "../numbers/number-format";
 import { presentAnalysis, wordsContext, type ReaderSettings } from "./present-analysis";
 import { spotRefrigerant } from "./spot-refrigerant";
 import { gramsPerYear } from "./spot-words";
@@ -250,9 +250,15 @@ describe("diagnostics and the delay in words", () => {
 
 describe("numbers", () => {
   it("groups thousands and rounds to what an estimate can claim", () => {
-    expect(formatNumber(319512.4, 0)).toBe("319,512");
-    expect(formatNumber(1234.5, 1, "1.234,5")).toBe("1.234,5");
-    expect(formatNumber(12345.5, 1, "1 234,5")).toBe("12\u00a0345,5");
+    expect(formatGrouped(319512.4, "1,234.5", 0)).toBe("319,512");
+    expect(formatGrouped(1234.5, "1.234,5", 1)).toBe("1.234,5");
+    // The locator's words share the records' number format (docs/decisions/0054): the space format
+    // groups as CLDR's fr-FR does (U+202F, four digits grouped too), no longer with U+00A0 and an
+    // ungrouped four-digit number; checked against Intl.NumberFormat.
+    const fr = new Intl.NumberFormat("fr-FR", { minimumFractionDigits: 1, maximumFractionDigits: 1 });
+    expect(formatGrouped(12345.5, "1 234,5", 1)).toBe(fr.format(12345.5));
+    expect(formatGrouped(1234.5, "1 234,5", 1)).toBe(fr.format(1234.5));
+    expect(formatGrouped(1234.5, "1 234,5", 1)).toBe("1\u202f234,5");
     expect(formatSignificant(319512, 2)).toBe("320,000");
     expect(formatSignificant(3.456, 2)).toBe("3.5");
     expect(lengthWords(0.3048, "ft-in")).toBe("1 ft");

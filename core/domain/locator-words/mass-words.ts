@@ -1,6 +1,6 @@
 import { KG_PER_POUND, OUNCES_PER_POUND } from "../units/mass";
 import type { MassPreference } from "../units/format-units";
-import { formatSignificant, type NumberStyle } from "./number-words";
+import { formatSignificant, type NumberFormat } from "../numbers/number-format";
 
 const GRAMS_PER_POUND = KG_PER_POUND * 1000;
 
@@ -8,7 +8,7 @@ const GRAMS_PER_POUND = KG_PER_POUND * 1000;
  * An emission per year to two significant figures, in the reader's mass unit: g/yr below 1 kg and kg/yr
  * above it, or oz/yr below 1 lb and lb/yr above it (a figure that would round up to 1,000 g or 16 oz moves up a unit) (1 lb = 453.59237 g, 16 oz; NIST SP 811, B.8).
  */
-export function massPerYearWords(grams: number, unit: MassPreference, style: NumberStyle = "1,234.5"): string {
+export function massPerYearWords(grams: number, unit: MassPreference, style: NumberFormat = "1,234.5"): string {
   if (unit === "kg") {
     return grams < 995
       ? `${formatSignificant(grams, 2, style)} g/yr`

@@ -4,7 +4,7 @@ import type { LengthPreference, MassPreference } from "../units/format-units";
 import { assumptionWords } from "./assumption-words";
 import { delayCheckWords, type DelayCheckWords } from "./delay-words";
 import { diagnosticWords, noSpotWords } from "./diagnostic-words";
-import type { NumberStyle } from "./number-words";
+import { DEFAULT_NUMBER_FORMAT, type NumberFormat } from "../numbers/number-format";
 import { nextCheckWords, spotReasonWords, strengthWords, whereWords } from "./spot-words";
 import type { WordsContext } from "./words-context";
 import { findRefrigerant } from "../refrigerants/catalogue";
@@ -54,7 +54,7 @@ export interface AnalysisFacts {
 export interface ReaderSettings {
   length: LengthPreference;
   mass: MassPreference;
-  numbers?: NumberStyle;
+  numbers?: NumberFormat;
   /** Fixture id → the name on the plan (an empty name counts as none). */
   names: ReadonlyMap<string, string>;
   delaySetByHand: boolean;
@@ -64,7 +64,7 @@ export function wordsContext(r: ReaderSettings, timeConstantS: number): WordsCon
   return {
     length: r.length,
     mass: r.mass,
-    numbers: r.numbers ?? "1,234.5",
+    numbers: r.numbers ?? DEFAULT_NUMBER_FORMAT,
     name: (id) => r.names.get(id) || null,
     timeConstantS,
     delaySetByHand: r.delaySetByHand,

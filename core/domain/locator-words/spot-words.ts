@@ -1,7 +1,7 @@
 import type { SpotNextCheck, SpotReason, SuspectSpotFacts } from "../../contracts/locator-output";
 import { lengthWords } from "./length-words";
 import { massPerYearWords } from "./mass-words";
-import { formatNumber, formatShort } from "./number-words";
+import { formatGrouped, formatShort } from "../numbers/number-format";
 import type { SpotRefrigerant } from "./spot-refrigerant";
 import { fixtureWords, riskPointWords, type WordsContext } from "./words-context";
 
@@ -53,7 +53,7 @@ export function strengthWords(
   refrigerant: SpotRefrigerant,
   ctx: WordsContext,
 ): string {
-  const share = `${formatNumber(spot.strength, 2, ctx.numbers)} of the strongest`;
+  const share = `${formatGrouped(spot.strength, ctx.numbers, 2)} of the strongest`;
   if (!Number.isFinite(spot.molPerYear)) return share;
   const mass = massPerYearWords(gramsPerYear(spot, refrigerant), ctx.mass, ctx.numbers);
   const which = refrigerant.source === "default" ? `${refrigerant.refrigerantId}, assumed` : refrigerant.refrigerantId;

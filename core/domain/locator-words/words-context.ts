@@ -1,12 +1,12 @@
 import type { LocatorFixtureKind, LocatorRiskPointKind } from "../../contracts/locator-input";
 import type { LengthPreference, MassPreference } from "../units/format-units";
-import type { NumberStyle } from "./number-words";
+import type { NumberFormat } from "../numbers/number-format";
 
 /** What the words depend on: the reader's units and number style, the names on the plan, the instrument. */
 export interface WordsContext {
   length: LengthPreference;
   mass: MassPreference;
-  numbers: NumberStyle;
+  numbers: NumberFormat;
   /** The name the lead tech gave a fixture, risk point or zone (by the locator's id); null when it has none. */
   name(id: string): string | null;
   /** The time constant of this analysis, s: the locator's shifts are the delay plus it. */

@@ -3,6 +3,8 @@ import { roundHalfUp } from "./round-half-up";
 import {
   formatGrouped,
   formatQuantity,
+  formatShort,
+  formatSignificant,
   NUMBER_FORMATS,
   parseGroupedNumber,
   readGroupedNumber,
@@ -101,5 +103,18 @@ describe("formatQuantity (sensible precision; common practice, no published sour
     expect(formatQuantity(0.045359, "1,234.5")).toBe("0.045");
     expect(formatQuantity(12.0, "1,234.5")).toBe("12");
     expect(formatQuantity(1234.56, "1,234.5", 1)).toBe("1,234.6");
+  });
+});
+
+describe("formatShort and formatSignificant (the locator's figures)", () => {
+  it("round to what an estimate can claim, grouped as CLDR writes each locale (Intl.NumberFormat)", () => {
+    for (const format of NUMBER_FORMATS) {
+      const sig = new Intl.NumberFormat(LOCALE[format], { maximumSignificantDigits: 2 });
+      for (const v of [319512, 3.456, 0.0123, 1234]) {
+        expect(formatSignificant(v, 2, format)).toBe(sig.format(v));
+      }
+      const short = new Intl.NumberFormat(LOCALE[format], { maximumFractionDigits: 1 });
+      for (const v of [12, 2.5, 0.3, 1234.56, 6.04]) expect(formatShort(v, format)).toBe(short.format(v));
+    }
   });
 });

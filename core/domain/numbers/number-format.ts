@@ -1,5 +1,5 @@
 import { DomainInputError, requireFinite } from "../input-error";
-import { formatFixed } from "./round-half-up";
+import { formatFixed, roundHalfUp } from "./round-half-up";
 
 /**
  * How a company writes numbers: thousands grouped by a comma with a decimal point ("1,234.5", as in
@@ -9,6 +9,9 @@ import { formatFixed } from "./round-half-up";
  */
 export const NUMBER_FORMATS = ["1,234.5", "1.234,5", "1 234,5"] as const;
 export type NumberFormat = (typeof NUMBER_FORMATS)[number];
+
+/** Where nothing says otherwise (the command line, a company made before the setting). */
+export const DEFAULT_NUMBER_FORMAT: NumberFormat = "1,234.5";
 
 /** The formats in words, for the sign-up and settings forms. */
 export const NUMBER_FORMAT_NAMES: Readonly<Record<NumberFormat, string>> = {
@@ -25,6 +28,9 @@ interface Marks {
 }
 
 // U+00A0 no-break space and U+202F narrow no-break space: what Intl and word processors put between groups.
+// Written, the space format groups every number from 1,000 up with U+202F, as CLDR's fr-FR does
+// (Intl.NumberFormat; number-format.test.ts checks it), not ISO 80000-1's optional ungrouped
+// four digits: one rule for screens, CSVs and PDFs, and the narrow space keeps a number on one line.
 const MARKS: Record<NumberFormat, Marks> = {
   "1,234.5": { group: ",", decimal: ".", groupInput: [","] },
   "1.234,5": { group: ".", decimal: ",", groupInput: ["."] },
@@ -120,4 +126,25 @@ export function formatQuantity(value: number, format: NumberFormat, decimals = s
   const mark = MARKS[format].decimal;
   if (!text.includes(mark)) return text;
   return text.replace(/0+$/, "").replace(new RegExp(`\\${mark}$`), "");
+}
+
+/** At most one decimal, none when it is zero: 12, 2.5, 0.3 (the locator's seconds, ppm and ratios). */
+export function formatShort(value: number, format: NumberFormat = DEFAULT_NUMBER_FORMAT): string {
+  const tenth = roundHalfUp(value, 1);
+  return formatGrouped(tenth, format, Number.isInteger(tenth) ? 0 : 1);
+}
+
+/** Rounded to `digits` significant figures (an estimate's honest precision): 319,512 → 320,000 at 2. */
+export function formatSignificant(value: number, digits: number, format: NumberFormat = DEFAULT_NUMBER_FORMAT): string {
+  if (value === 0 || !Number.isFinite(value)) return formatGrouped(0, format, 0);
+  const at = (magnitude: number) => {
+    const decimals = Math.max(0, digits - 1 - magnitude);
+    const step = 10 ** (magnitude - digits + 1);
+    return { decimals, rounded: decimals > 0 ? roundHalfUp(value, decimals) : Math.round(value / step) * step };
+  };
+  const magnitude = Math.floor(Math.log10(Math.abs(value)));
+  let r = at(magnitude);
+  // 0.998 rounds up to 1.0, a figure of the next decade: write it with that decade's decimals
+  if (Math.abs(r.rounded) >= 10 ** (magnitude + 1)) r = at(magnitude + 1);
+  return formatGrouped(r.rounded, format, r.decimals);
 }

@@ -22,6 +22,8 @@ import { useDocumentTitle } from "../../lib/use-document-title";
 import { formatInZone } from "#core/domain/dates/format-in-zone";
 import { can } from "#core/domain/roles";
 import { useSignedIn } from "../shell/session-context";
+import { useUnitPreferences } from "../shell/use-unit-preferences";
+import { formatGrouped } from "#core/domain/numbers/number-format";
 import { Component as NotFound } from "./not-found";
 
 const SIDE_LAYERS = { ...DEFAULT_LAYERS, corrected: false, path: false };
@@ -35,6 +37,9 @@ export function Component() {
 
 function ComparePage() {
   const { storeId = "" } = useParams();
+  const numberFormat = useUnitPreferences().number;
+  // ppm to one place, in the company's number format
+  const ppm = (v: number) => formatGrouped(v, numberFormat, 1);
   const [search, setSearch] = useSearchParams();
   const trends = useFixtureTrends(storeId, search.get("a"), search.get("b"));
   const stores = useStores();
@@ -156,6 +161,7 @@ function ComparePage() {
       </div>
       <div className="mt-3">
         <RampLegend
+          numberFormat={numberFormat}
           title="Both maps: lag-corrected concentration (log scale)"
           lut={paint.lut}
           position={scale.position}
@@ -185,14 +191,15 @@ function ComparePage() {
             />
             <div>
               <RampLegend
+                numberFormat={numberFormat}
                 title="Change in ppm (blue: lower now, copper: higher now)"
                 lut={DIFFERENCE_LUT}
                 position={(v) => diff.ds.index(v) / 255}
                 ticks={diff.ds.ticks()}
               />
               <p className="mt-2 text-sm text-muted">
-                Largest change {diff.grid.maxAbs.toFixed(1)} ppm. Areas either sweep left unsampled are hatched: no
-                change can be told there.
+                Largest change {ppm(diff.grid.maxAbs)} ppm. Areas either sweep left unsampled are hatched: no change can
+                be told there.
               </p>
             </div>
           </div>
@@ -231,16 +238,12 @@ function ComparePage() {
                         label={`${f.label}: peak ppm per sweep`}
                       />
                     </td>
-                    <td className="p-2">
-                      {la ? `${la.peakPpm.toFixed(1)} / ${la.meanPpm.toFixed(1)}` : "not sampled"}
-                    </td>
-                    <td className="p-2">
-                      {lb ? `${lb.peakPpm.toFixed(1)} / ${lb.meanPpm.toFixed(1)}` : "not sampled"}
-                    </td>
+                    <td className="p-2">{la ? `${ppm(la.peakPpm)} / ${ppm(la.meanPpm)}` : "not sampled"}</td>
+                    <td className="p-2">{lb ? `${ppm(lb.peakPpm)} / ${ppm(lb.meanPpm)}` : "not sampled"}</td>
                     <td
                       className={`p-2 font-bold ${f.change !== null && f.change > 1 ? "text-danger" : f.change !== null && f.change < -1 ? "text-ok" : ""}`}
                     >
-                      {f.change === null ? "—" : `${f.change > 0 ? "+" : ""}${f.change.toFixed(1)} ppm`}
+                      {f.change === null ? "—" : `${f.change > 0 ? "+" : ""}${ppm(f.change)} ppm`}
                     </td>
                   </tr>
                 );

@@ -45,9 +45,17 @@ export const STORE_SECTIONS: readonly { id: string; Component: ComponentType<Sto
   },
   {
     id: "sweeps",
-    Component: ({ store, role }) => (
-      <StoreSweepsSection storeId={store.id} timeZone={store.timeZone} canCompare={can(role, "sweeps.read")} />
+    Component: ({ store, role, units }) => (
+      <StoreSweepsSection
+        storeId={store.id}
+        timeZone={store.timeZone}
+        canCompare={can(role, "sweeps.read")}
+        numberFormat={units.number}
+      />
     ),
   },
-  { id: "records", Component: ({ store }) => <StoreRecordsSection storeId={store.id} /> },
+  {
+    id: "records",
+    Component: ({ store, units }) => <StoreRecordsSection storeId={store.id} numberFormat={units.number} />,
+  },
 ];

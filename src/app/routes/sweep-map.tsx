@@ -22,6 +22,7 @@ import { DelayCheckPanel } from "../../features/fieldmap/components/delay-check-
 import { useUpdateDetectorDelay } from "../../features/fieldmap/api/update-detector-delay";
 import { presentAnalysis } from "#core/domain/locator-words/present-analysis";
 import { useUnitPreferences } from "../shell/use-unit-preferences";
+import { formatGrouped, formatShort } from "#core/domain/numbers/number-format";
 import { AnalysisProgress } from "../../features/fieldmap/components/analysis-progress";
 import { FieldCanvas } from "../../features/fieldmap/components/field-canvas";
 import { FindingsPanel } from "../../features/fieldmap/components/findings-panel";
@@ -194,6 +195,7 @@ function FieldMapPage() {
             </div>
           </div>
           <RampLegend
+            numberFormat={units.number}
             title={`Lag-corrected concentration, ${log ? "log" : "linear"} scale`}
             lut={paint.lut}
             position={scale.position}
@@ -218,8 +220,10 @@ function FieldMapPage() {
           ) : null}
           {a ? (
             <p className="text-sm text-muted">
-              Background {a.background.ppm.toFixed(1)} ppm · transport delay {a.params.transportDelayS} s, time constant{" "}
-              {a.params.timeConstantS} s · computed {zoned(a.computedAt)} in {a.durationMs} ms
+              Background {formatGrouped(a.background.ppm, units.number, 1)} ppm · transport delay{" "}
+              {formatShort(a.params.transportDelayS, units.number)} s, time constant{" "}
+              {formatShort(a.params.timeConstantS, units.number)} s · computed {zoned(a.computedAt)} in {a.durationMs}{" "}
+              ms
             </p>
           ) : null}
         </div>
@@ -234,6 +238,7 @@ function FieldMapPage() {
                 selected={selected}
                 onSelect={setSelected}
                 findingRanks={findingRanks}
+                numberFormat={units.number}
                 busyRank={makeFinding.isPending ? (makeFinding.variables?.spot.rank ?? null) : null}
                 onMakeFinding={
                   can(membership.role, "findings.record")
@@ -260,6 +265,7 @@ function FieldMapPage() {
               busy={updateDelay.isPending}
               updatedTo={updateDelay.isSuccess ? updateDelay.variables.transportDelayS : null}
               error={updateDelay.isError ? updateDelay.error.message : null}
+              numberFormat={units.number}
             />
           ) : null}
           <section>

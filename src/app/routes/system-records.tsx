@@ -23,7 +23,7 @@ export function Component() {
   const findings = useFindings(records.data?.store.id, systemId);
   const navigate = useNavigate();
   useDocumentTitle(records.data ? records.data.system.name : "System records");
-  const unit = useUnitPreferences().mass;
+  const { mass: unit, number: numberFormat } = useUnitPreferences();
   const canRecord = can(membership.role, "findings.record");
   useScrollToHash(!!records.data && !findings.isPending);
   if (records.isPending) return <Spinner label="Loading the system's records…" />;
@@ -41,6 +41,7 @@ export function Component() {
         <SystemRecords
           r={r}
           unit={unit}
+          numberFormat={numberFormat}
           canRecord={canRecord}
           canFile={can(membership.role, "compliance.manage")}
           findings={list

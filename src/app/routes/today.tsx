@@ -11,10 +11,12 @@ import { TodayView } from "../../features/compliance/components/today-view";
 import { formErrorMessage } from "../../lib/form-errors";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
+import { useUnitPreferences } from "../shell/use-unit-preferences";
 
 export function Component() {
   useDocumentTitle("Today");
   const { membership, session } = useSignedIn();
+  const units = useUnitPreferences();
   const [params, setParams] = useSearchParams();
   const storeId = params.get("store");
   // All stores load once; the store filter narrows on the screen (the API also takes ?storeId=).
@@ -63,6 +65,7 @@ export function Component() {
         <TodayView
           data={today.data}
           storeId={storeId}
+          numberFormat={units.number}
           onStoreChange={(id) => setParams(id ? { store: id } : {}, { replace: true })}
         />
       ) : null}

@@ -5,13 +5,19 @@ import { Select } from "../../../components/ui/select";
 import { TextField } from "../../../components/ui/text-field";
 import { formErrorMessage, serverFieldErrors } from "../../../lib/form-errors";
 import { useRecordCharge } from "../api/record-charge";
+import type { NumberFormat } from "#core/domain/numbers/number-format";
+import { amountHint, readAmount } from "../model/amount-entry";
 import type { MassUnit } from "../model/figures";
 
-/** Record refrigerant put into a system; or, with `corrects`, a correction that voids that entry. */
+/**
+ * Record refrigerant put into a system; or, with `corrects`, a correction that voids that entry.
+ * The amount is read in the company's number format and echoed under the field before it is sent.
+ */
 export function ChargeForm({
   systemId,
   today,
   unit,
+  numberFormat,
   findings,
   corrects,
   onDone,
@@ -19,6 +25,7 @@ export function ChargeForm({
   systemId: string;
   today: string;
   unit: MassUnit;
+  numberFormat: NumberFormat;
   findings: { id: string; label: string }[];
   corrects?: { id: string; addedOn: string };
   onDone?: () => void;
@@ -29,6 +36,8 @@ export function ChargeForm({
   const [reason, setReason] = useState("");
   const [findingId, setFindingId] = useState("");
   const [voidReason, setVoidReason] = useState("");
+  const [amountProblem, setAmountProblem] = useState<string | null>(null);
+  const read = readAmount(amount, amountUnit, numberFormat);
   const mutation = useRecordCharge({
     onDone: () => {
       setAmount("");
@@ -40,9 +49,12 @@ export function ChargeForm({
   const fields = serverFieldErrors(mutation.error);
   const submit = (e: FormEvent) => {
     e.preventDefault();
+    // Nothing is sent that the form could not read: the field says why, and what was typed stays.
+    setAmountProblem(read.problem);
+    if (read.problem) return;
     const input = {
       addedOn,
-      amount: { value: Number(amount), unit: amountUnit },
+      amount: { value: read.value, unit: amountUnit },
       reason,
       findingId: findingId || null,
     };
@@ -76,18 +88,23 @@ export function ChargeForm({
           label="Amount added"
           inputMode="decimal"
           value={amount}
-          onChange={(e) => setAmount(e.target.value)}
-          error={fields["amount.value"]}
+          onChange={(e) => {
+            setAmount(e.target.value);
+            setAmountProblem(null);
+          }}
+          hint={amountHint(amount, read, numberFormat)}
+          error={amountProblem ?? fields["amount.value"]}
           required
         />
         <Select
           label="Unit"
           value={amountUnit}
           onChange={(e) => setAmountUnit(e.target.value as MassUnit)}
-          options={[
-            { value: "kg", label: "kg" },
-            { value: "lb", label: "lb" },
-          ]}
+          // The reader's own unit first: an lb company sees lb first everywhere.
+          options={(unit === "lb" ? (["lb", "kg"] as const) : (["kg", "lb"] as const)).map((u) => ({
+            value: u,
+            label: u,
+          }))}
           error={fields["amount.unit"]}
         />
       </div>

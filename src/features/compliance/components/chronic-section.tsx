@@ -5,6 +5,7 @@ import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
 import { formErrorMessage, serverFieldErrors } from "../../../lib/form-errors";
 import { useRecordCharge } from "../api/record-charge";
+import type { NumberFormat } from "#core/domain/numbers/number-format";
 import { formatMass, formatPercent, type MassUnit } from "../model/figures";
 
 type Year = SystemRecordsView["chronic"][number];
@@ -54,7 +55,17 @@ function FileReportForm({ systemId, year, today }: { systemId: string; year: num
 }
 
 /** Refrigerant added per calendar year, the chronic-leaker years and their reports. */
-export function ChronicSection({ r, unit, canFile }: { r: SystemRecordsView; unit: MassUnit; canFile: boolean }) {
+export function ChronicSection({
+  r,
+  unit,
+  numberFormat,
+  canFile,
+}: {
+  r: SystemRecordsView;
+  unit: MassUnit;
+  numberFormat: NumberFormat;
+  canFile: boolean;
+}) {
   if (r.chronic.length === 0 && r.audit.length === 0) return null;
   const fileable = (y: Year) => y.chronic && !y.filed && Number(r.today.slice(0, 4)) > y.year;
   return (
@@ -65,7 +76,8 @@ export function ChronicSection({ r, unit, canFile }: { r: SystemRecordsView; uni
       <ul className="space-y-2">
         {r.chronic.map((y) => (
           <li key={y.year} className={y.chronic && !y.filed ? "font-bold text-danger" : undefined}>
-            {y.year}: {formatMass(y.addedKg, unit)}, {formatPercent(y.percent)} of the full charge
+            {y.year}: {formatMass(y.addedKg, unit, numberFormat)}, {formatPercent(y.percent, numberFormat)} of the full
+            charge
             {y.chronic
               ? y.filed
                 ? ` — chronic leaker; report filed on ${y.filed.on} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}`

@@ -41,7 +41,7 @@ describe("system history on the records page", () => {
         body: { error: { code: "validation_failed", message: "Please check." } },
       },
     });
-    renderOnRoute(<RevisionsSection r={r} unit="lb" canRevise />, { path: "/systems/x" });
+    renderOnRoute(<RevisionsSection r={r} unit="lb" numberFormat="1,234.5" canRevise />, { path: "/systems/x" });
     expect(await screen.findByText("First values")).toBeVisible();
     expect(screen.getByText("100.0 lb")).toBeVisible();
     fireEvent.change(screen.getByLabelText("Kind"), { target: { value: "retrofit" } });
@@ -60,8 +60,40 @@ describe("system history on the records page", () => {
 
   it("offers no form to those who may not revise", async () => {
     stubFetch({ [`GET /api/systems/${SYSTEM_ID}/revisions`]: { body: { revisions: [first] } } });
-    renderOnRoute(<RevisionsSection r={r} unit="kg" canRevise={false} />, { path: "/systems/x" });
+    renderOnRoute(<RevisionsSection r={r} unit="kg" numberFormat="1,234.5" canRevise={false} />, {
+      path: "/systems/x",
+    });
     expect(await screen.findByText("45.36 kg")).toBeVisible();
     expect(screen.queryByRole("button", { name: "Record the change" })).toBeNull();
+  });
+
+  it("reads a full charge in a decimal-comma company's format, echoes it and sends twelve hundred and a half", async () => {
+    const calls = stubFetch({
+      [`GET /api/systems/${SYSTEM_ID}/revisions`]: { body: { revisions: [first] } },
+      [`POST /api/systems/${SYSTEM_ID}/revisions`]: {
+        status: 400,
+        body: { error: { code: "validation_failed", message: "Please check." } },
+      },
+    });
+    renderOnRoute(<RevisionsSection r={r} unit="lb" numberFormat="1.234,5" canRevise />, { path: "/systems/x" });
+    // 100 lb written as the company writes numbers (de-DE's CLDR symbols: "100,0").
+    expect(await screen.findByText("100,0 lb")).toBeVisible();
+    const charge = screen.getByLabelText("Full charge (lb)");
+    expect(charge).toHaveValue("100");
+    fireEvent.change(charge, { target: { value: "1.5" } });
+    fireEvent.change(screen.getByLabelText("Reason"), { target: { value: "Recounted the charge" } });
+    fireEvent.click(screen.getByRole("button", { name: "Record the change" }));
+    // Refused with the reason, nothing sent, the text kept.
+    expect(await screen.findByText(/must group thousands in threes/)).toBeVisible();
+    expect(calls.some((c) => c.method === "POST")).toBe(false);
+    expect(charge).toHaveValue("1.5");
+    fireEvent.change(charge, { target: { value: "1.200,5" } });
+    expect(screen.getByText("Read as 1.200,5 lb")).toBeVisible();
+    fireEvent.click(screen.getByRole("button", { name: "Record the change" }));
+    await waitFor(() => expect(calls.some((c) => c.method === "POST")).toBe(true));
+    expect(calls.find((c) => c.method === "POST")!.body).toMatchObject({
+      fullCharge: { value: 1200.5, unit: "lb" },
+      reason: "Recounted the charge",
+    });
   });
 });

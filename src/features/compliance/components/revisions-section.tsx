@@ -10,6 +10,8 @@ import { Select } from "../../../components/ui/select";
 import { TextField } from "../../../components/ui/text-field";
 import { formErrorMessage, serverFieldErrors } from "../../../lib/form-errors";
 import { useAddSystemRevision, useSystemRevisions } from "../api/system-revisions";
+import { formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
+import { amountHint, readAmount } from "../model/amount-entry";
 import { formatMass, type MassUnit } from "../model/figures";
 import { kgToPounds } from "#core/domain/units/mass";
 
@@ -24,7 +26,17 @@ const KIND_NAMES: Record<string, string> = {
  * The system's dated facts: each revision is in force from its day until the next one, and every
  * figure uses the values of its own date (docs/decisions/0043-system-revisions.md).
  */
-export function RevisionsSection({ r, unit, canRevise }: { r: SystemRecordsView; unit: MassUnit; canRevise: boolean }) {
+export function RevisionsSection({
+  r,
+  unit,
+  numberFormat,
+  canRevise,
+}: {
+  r: SystemRecordsView;
+  unit: MassUnit;
+  numberFormat: NumberFormat;
+  canRevise: boolean;
+}) {
   const revisions = useSystemRevisions(r.system.id);
   return (
     <section id="revisions" aria-labelledby="revisions-heading" className="space-y-2">
@@ -43,7 +55,7 @@ export function RevisionsSection({ r, unit, canRevise }: { r: SystemRecordsView;
             { header: "From", cell: (x) => x.effectiveFrom },
             { header: "Kind", cell: (x) => KIND_NAMES[x.kind] ?? x.kind },
             { header: "Refrigerant", cell: (x) => x.refrigerantId },
-            { header: "Full charge", cell: (x) => formatMass(x.fullChargeKg, unit) },
+            { header: "Full charge", cell: (x) => formatMass(x.fullChargeKg, unit, numberFormat) },
             { header: "Appliance", cell: (x) => APPLIANCE_TYPE_NAMES[x.applianceType] },
             { header: "Leak detection", cell: (x) => (x.automaticLeakDetection ? "Automatic" : "None") },
             { header: "In service", cell: (x) => (x.inServiceOn ? formatCalendarDay(x.inServiceOn) : "—") },
@@ -51,26 +63,32 @@ export function RevisionsSection({ r, unit, canRevise }: { r: SystemRecordsView;
           ]}
         />
       ) : null}
-      {canRevise && !r.system.retired ? <RevisionForm r={r} unit={unit} /> : null}
+      {canRevise && !r.system.retired ? <RevisionForm r={r} unit={unit} numberFormat={numberFormat} /> : null}
     </section>
   );
 }
 
-function RevisionForm({ r, unit }: { r: SystemRecordsView; unit: MassUnit }) {
+function RevisionForm({ r, unit, numberFormat }: { r: SystemRecordsView; unit: MassUnit; numberFormat: NumberFormat }) {
   const s = r.system;
   const current = unit === "lb" ? kgToPounds(s.fullChargeKg) : s.fullChargeKg;
   const [effectiveFrom, setEffectiveFrom] = useState(r.today);
   const [kind, setKind] = useState<(typeof REVISION_KINDS)[number]>("change");
   const [reason, setReason] = useState("");
   const [refrigerantId, setRefrigerantId] = useState(s.refrigerantId);
-  const [charge, setCharge] = useState(String(Number(current.toFixed(2))));
+  const initialCharge = formatQuantity(current, numberFormat, 3);
+  const [charge, setCharge] = useState(initialCharge);
+  const [chargeProblem, setChargeProblem] = useState<string | null>(null);
+  const read = readAmount(charge, unit, numberFormat);
   const [applianceType, setApplianceType] = useState(s.applianceType);
   const [ald, setAld] = useState(s.automaticLeakDetection);
   const mutation = useAddSystemRevision({ onDone: () => setReason("") });
   const fields = serverFieldErrors(mutation.error);
   const submit = (e: FormEvent) => {
     e.preventDefault();
-    const value = Number(charge);
+    // A charge left as it opened is not a change (re-reading a rounded figure must not move history).
+    const changed = charge.trim() !== initialCharge;
+    setChargeProblem(changed ? read.problem : null);
+    if (changed && read.problem) return;
     // Only what changed is sent: the rest stays as it was on that day.
     mutation.mutate({
       systemId: s.id,
@@ -79,7 +97,7 @@ function RevisionForm({ r, unit }: { r: SystemRecordsView; unit: MassUnit }) {
         kind,
         reason,
         ...(refrigerantId.trim() !== s.refrigerantId ? { refrigerantId: refrigerantId.trim() } : {}),
-        ...(charge.trim() !== "" && Math.abs(value - current) > 1e-9 ? { fullCharge: { value, unit } } : {}),
+        ...(changed ? { fullCharge: { value: read.value, unit } } : {}),
         ...(applianceType !== s.applianceType ? { applianceType } : {}),
         ...(ald !== s.automaticLeakDetection ? { automaticLeakDetection: ald } : {}),
       },
@@ -117,8 +135,12 @@ function RevisionForm({ r, unit }: { r: SystemRecordsView; unit: MassUnit }) {
         label={`Full charge (${unit})`}
         inputMode="decimal"
         value={charge}
-        onChange={(e) => setCharge(e.target.value)}
-        error={fields["fullCharge.value"] ?? fields.fullCharge}
+        onChange={(e) => {
+          setCharge(e.target.value);
+          setChargeProblem(null);
+        }}
+        hint={amountHint(charge, read, numberFormat)}
+        error={chargeProblem ?? fields["fullCharge.value"] ?? fields.fullCharge}
       />
       <Select
         label="Appliance type"

@@ -4,10 +4,11 @@ import { COMPONENT_LABELS, type FINDING_COMPONENTS } from "#core/contracts/findi
 import { QueryError } from "../../../components/ui/query-error";
 import { Spinner } from "../../../components/ui/spinner";
 import { useToday } from "../../../entities/records/records-api";
+import type { NumberFormat } from "#core/domain/numbers/number-format";
 import { daysInWords, formatPercent, STATE_LABELS } from "../model/figures";
 
 /** The store page's records section: each system's latest leak rate, what is due, open findings. */
-export function StoreRecordsSection({ storeId }: { storeId: string }) {
+export function StoreRecordsSection({ storeId, numberFormat }: { storeId: string; numberFormat: NumberFormat }) {
   const today = useToday(storeId);
   return (
     <section aria-labelledby="store-records" className="space-y-3">
@@ -30,7 +31,7 @@ export function StoreRecordsSection({ storeId }: { storeId: string }) {
                   </Link>
                   :{" "}
                   <span className={s.breachOpen ? "font-bold text-danger" : ""}>
-                    {s.latestPercent === null ? "no additions" : formatPercent(s.latestPercent)}
+                    {s.latestPercent === null ? "no additions" : formatPercent(s.latestPercent, numberFormat)}
                   </span>
                   {s.thresholdPercent !== null ? ` (threshold ${s.thresholdPercent} %)` : " (no threshold applies)"}
                 </li>

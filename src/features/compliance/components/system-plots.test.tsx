@@ -57,7 +57,7 @@ const records = (leakRateRules: boolean) =>
 
 describe("system plots", () => {
   it("under a threshold rule: the leak rate against the threshold and the charge added, each with its data as a table", () => {
-    render(<SystemPlots r={records(true)} unit="lb" />);
+    render(<SystemPlots r={records(true)} unit="lb" numberFormat="1,234.5" />);
     const rate = screen.getByRole("figure", { name: "Leak rate at each addition" });
     expect(within(rate).getByText(/2 figures, 1 above the threshold/)).toBeInTheDocument();
     const rows = within(rate)
@@ -71,10 +71,13 @@ describe("system plots", () => {
   });
 
   it("under EU F-gas: no leak-rate plot; the charge added and the leak checks", () => {
-    render(<SystemPlots r={records(false)} unit="kg" />);
+    // A decimal-comma company: 14 lb is 6.35029318 kg (NIST SP 811), written "6,35" as de-DE's CLDR symbols have it.
+    render(<SystemPlots r={records(false)} unit="kg" numberFormat="1.234,5" />);
     expect(screen.queryByRole("figure", { name: "Leak rate at each addition" })).toBeNull();
     const plot = screen.getByRole("figure", { name: "Charge added and leak checks over time" });
     expect(within(plot).getByText(/1 leak check, 1 finding a leak/)).toBeInTheDocument();
+    expect(within(plot).getByText(/^6,35 kg added over 2 days/)).toBeInTheDocument();
+    expect(within(plot).getByRole("cell", { name: "6,35" })).toBeInTheDocument();
     expect(within(plot).getByRole("cell", { name: "leak found" })).toBeInTheDocument();
   });
 });

@@ -1,5 +1,6 @@
 import { Bar, CartesianGrid, ComposedChart, Legend, Line, Scatter, Tooltip, XAxis, YAxis } from "recharts";
 import type { SystemRecordsView } from "#core/contracts/compliance";
+import { formatGrouped, formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
 import type { MassUnit } from "../model/figures";
 import { chargeSeries, dayLabel, leakCheckSeries, leakRateSeries, timeDomain } from "../model/plot-series";
 
@@ -22,7 +23,8 @@ const timeAxis = (ts: number[]) => (
   />
 );
 
-function LeakRatePlot({ r }: { r: SystemRecordsView }) {
+function LeakRatePlot({ r, numberFormat }: { r: SystemRecordsView; numberFormat: NumberFormat }) {
+  const one = (v: number) => formatGrouped(v, numberFormat, 1);
   const data = leakRateSeries(r);
   const above = data.filter((p) => p.exceeds).length;
   const hasThreshold = data.some((p) => p.threshold !== null);
@@ -34,8 +36,8 @@ function LeakRatePlot({ r }: { r: SystemRecordsView }) {
         head: ["Date", "Leak rate (% per year)", "Threshold (% per year)"],
         rows: data.map((p) => [
           formatCalendarDay(p.day),
-          p.percent.toFixed(1),
-          p.threshold === null ? "none" : p.threshold,
+          one(p.percent),
+          p.threshold === null ? "none" : formatQuantity(p.threshold, numberFormat),
         ]),
       }}
     >
@@ -45,10 +47,11 @@ function LeakRatePlot({ r }: { r: SystemRecordsView }) {
           {timeAxis(data.map((p) => p.t))}
           <YAxis
             unit=" %"
+            tickFormatter={(v: number) => formatGrouped(v, numberFormat, 0)}
             width={64}
             label={{ value: "Leak rate, % per year", angle: -90, position: "insideLeft", offset: 4, dy: 60 }}
           />
-          <Tooltip labelFormatter={(t) => dayLabel(Number(t))} formatter={(v) => `${Number(v).toFixed(1)} %`} />
+          <Tooltip labelFormatter={(t) => dayLabel(Number(t))} formatter={(v) => `${one(Number(v))} %`} />
           <Legend verticalAlign="top" height={28} />
           <Line
             name="Threshold"
@@ -73,23 +76,34 @@ function LeakRatePlot({ r }: { r: SystemRecordsView }) {
   );
 }
 
-function ChargePlot({ r, unit, withChecks }: { r: SystemRecordsView; unit: MassUnit; withChecks: boolean }) {
+function ChargePlot({
+  r,
+  unit,
+  numberFormat,
+  withChecks,
+}: {
+  r: SystemRecordsView;
+  unit: MassUnit;
+  numberFormat: NumberFormat;
+  withChecks: boolean;
+}) {
   const charge = chargeSeries(r, unit);
   const checks = withChecks ? leakCheckSeries(r) : [];
   const found = checks.filter((c) => c.leakFound).map((c) => ({ t: c.t, y: 0 }));
   const clean = checks.filter((c) => !c.leakFound).map((c) => ({ t: c.t, y: 0 }));
   const total = charge.at(-1)?.total ?? 0;
   const digits = unit === "lb" ? 1 : 2;
+  const fixed = (v: number) => formatGrouped(v, numberFormat, digits);
   const title = withChecks ? "Charge added and leak checks over time" : "Charge added over time";
   return (
     <Plot
       title={title}
-      summary={`${total.toFixed(digits)} ${unit} added over ${charge.length} day${charge.length === 1 ? "" : "s"} (bars: each day's addition; line: running total)${withChecks ? `; ${checks.length} leak check${checks.length === 1 ? "" : "s"}, ${found.length} finding a leak (marks on the date axis)` : ""}.`}
+      summary={`${fixed(total)} ${unit} added over ${charge.length} day${charge.length === 1 ? "" : "s"} (bars: each day's addition; line: running total)${withChecks ? `; ${checks.length} leak check${checks.length === 1 ? "" : "s"}, ${found.length} finding a leak (marks on the date axis)` : ""}.`}
       table={{
         head: ["Date", `Added (${unit})`, `Running total (${unit})`, ...(withChecks ? ["Leak check"] : [])],
         // Oldest first, additions and checks interleaved by their ISO day; shown as every screen writes days.
         rows: [
-          ...charge.map((p) => [p.day, p.added.toFixed(digits), p.total.toFixed(digits), ...(withChecks ? [""] : [])]),
+          ...charge.map((p) => [p.day, fixed(p.added), fixed(p.total), ...(withChecks ? [""] : [])]),
           ...checks.map((c) => [c.day, "", "", c.leakFound ? "leak found" : "no leak found"]),
         ]
           .sort((a, b) => a[0].localeCompare(b[0]))
@@ -102,13 +116,11 @@ function ChargePlot({ r, unit, withChecks }: { r: SystemRecordsView; unit: MassU
           {timeAxis([...charge.map((p) => p.t), ...checks.map((c) => c.t)])}
           <YAxis
             unit={` ${unit}`}
+            tickFormatter={(v: number) => formatQuantity(v, numberFormat)}
             width={64}
             label={{ value: `Refrigerant, ${unit}`, angle: -90, position: "insideLeft", offset: 4, dy: 50 }}
           />
-          <Tooltip
-            labelFormatter={(t) => dayLabel(Number(t))}
-            formatter={(v) => `${Number(v).toFixed(digits)} ${unit}`}
-          />
+          <Tooltip labelFormatter={(t) => dayLabel(Number(t))} formatter={(v) => `${fixed(Number(v))} ${unit}`} />
           <Legend verticalAlign="top" height={28} />
           <Bar name="Added that day" dataKey="added" fill={ACCENT} barSize={10} isAnimationActive={false} />
           <Line
@@ -150,7 +162,15 @@ function ChargePlot({ r, unit, withChecks }: { r: SystemRecordsView; unit: MassU
  * (the US parts) the leak rate at each addition against it, and the charge added; under EU F-gas,
  * which sets leak-check intervals instead of a threshold, the charge added and the leak checks.
  */
-export function SystemPlots({ r, unit }: { r: SystemRecordsView; unit: MassUnit }) {
+export function SystemPlots({
+  r,
+  unit,
+  numberFormat,
+}: {
+  r: SystemRecordsView;
+  unit: MassUnit;
+  numberFormat: NumberFormat;
+}) {
   const anything = r.additions.some((a) => !a.voided) || r.leakChecks.length > 0;
   if (!anything) return null;
   return (
@@ -159,8 +179,8 @@ export function SystemPlots({ r, unit }: { r: SystemRecordsView; unit: MassUnit 
         Over time
       </h2>
       <div className="grid gap-4 xl:grid-cols-2">
-        {r.profile.leakRateRules && r.leakRates.length ? <LeakRatePlot r={r} /> : null}
-        <ChargePlot r={r} unit={unit} withChecks={!r.profile.leakRateRules} />
+        {r.profile.leakRateRules && r.leakRates.length ? <LeakRatePlot r={r} numberFormat={numberFormat} /> : null}
+        <ChargePlot r={r} unit={unit} numberFormat={numberFormat} withChecks={!r.profile.leakRateRules} />
       </div>
     </section>
   );

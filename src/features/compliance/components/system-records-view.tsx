@@ -9,6 +9,7 @@ import { DataTable } from "../../../components/ui/data-table";
 import { TextField } from "../../../components/ui/text-field";
 import { serverFieldErrors } from "../../../lib/form-errors";
 import { useRecordCharge } from "../api/record-charge";
+import { formatGrouped, formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
 import { daysInWords, formatMass, formatPercent, STATE_LABELS, type MassUnit } from "../model/figures";
 import { ChargeForm } from "./charge-form";
 import { ChronicSection } from "./chronic-section";
@@ -58,12 +59,15 @@ function VoidForm({ id, onDone }: { id: string; onDone: () => void }) {
 export function SystemRecords({
   r,
   unit,
+  numberFormat,
   canRecord,
   canFile = false,
   findings,
 }: {
   r: SystemRecordsView;
   unit: MassUnit;
+  /** The company's number format: every figure here is written in it. */
+  numberFormat: NumberFormat;
   canRecord: boolean;
   canFile?: boolean;
   findings: { id: string; label: string }[];
@@ -71,18 +75,21 @@ export function SystemRecords({
   const [editing, setEditing] = useState<{ id: string; mode: "correct" | "void" } | null>(null);
   const byId = new Map(r.additions.map((a) => [a.id, a]));
   const a = r.applicability;
+  const mass = (kg: number) => formatMass(kg, unit, numberFormat);
+  const percent = (p: number) => formatPercent(p, numberFormat);
+  const gwp = (v: number) => formatGrouped(v, numberFormat, 0);
   return (
     <div className="space-y-8">
       <dl className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
         <Fact label="Refrigerant">
           {r.system.refrigerantId} · class {r.system.refrigerant.safetyClass}
-          {r.system.refrigerant.gwp ? ` · GWP ${r.system.refrigerant.gwp.value}` : ""}
+          {r.system.refrigerant.gwp ? ` · GWP ${gwp(r.system.refrigerant.gwp.value)}` : ""}
         </Fact>
-        <Fact label="Full charge">{formatMass(r.system.fullChargeKg, unit)}</Fact>
+        <Fact label="Full charge">{mass(r.system.fullChargeKg)}</Fact>
         <Fact label="Latest leak rate">
           {r.latest ? (
             <span className={r.latest.exceeds ? "text-danger" : ""}>
-              {formatPercent(r.latest.percent)} on {r.latest.date}
+              {percent(r.latest.percent)} on {r.latest.date}
             </span>
           ) : (
             "No additions yet"
@@ -92,7 +99,9 @@ export function SystemRecords({
           {a.thresholdPercent === null ? "None applies" : `${a.thresholdPercent} % per year`}
         </Fact>
         <Fact label="CO2-equivalent">
-          {r.co2e.known && r.co2e.tonnes !== null ? `${r.co2e.tonnes.toFixed(2)} t (GWP ${r.co2e.gwp})` : "Unknown"}
+          {r.co2e.known && r.co2e.tonnes !== null
+            ? `${formatQuantity(r.co2e.tonnes, numberFormat)} t (GWP ${r.co2e.gwp === null ? "unknown" : gwp(r.co2e.gwp)})`
+            : "Unknown"}
           {r.system.refrigerant.gwp ? (
             <span className="block text-sm text-muted">GWP basis: {r.system.refrigerant.gwp.statement}</span>
           ) : null}
@@ -182,7 +191,7 @@ export function SystemRecords({
         </section>
       ) : null}
 
-      <SystemPlots r={r} unit={unit} />
+      <SystemPlots r={r} unit={unit} numberFormat={numberFormat} />
 
       <section id="leak-rates" aria-labelledby="rates" className="space-y-2">
         <h2 id="rates" className="text-xl font-bold">
@@ -208,24 +217,20 @@ export function SystemRecords({
               { header: "Date", cell: (p) => p.date, sortValue: (p) => p.date },
               {
                 header: "Added",
-                cell: (p) =>
-                  formatMass(
-                    p.additionIds.reduce((s, id) => s + (byId.get(id)?.amountKg ?? 0), 0),
-                    unit,
-                  ),
+                cell: (p) => mass(p.additionIds.reduce((s, id) => s + (byId.get(id)?.amountKg ?? 0), 0)),
               },
               {
                 header: p0(r),
                 cell: (p) => (p.method === "annualizing" ? `${p.days} days` : `${p.windowStart} to ${p.date}`),
               },
-              { header: "Counted", cell: (p) => formatMass(p.countedKg, unit) },
+              { header: "Counted", cell: (p) => mass(p.countedKg) },
               {
                 header: "Leak rate",
                 sortValue: (p) => p.percent,
                 filterValue: (p) => (p.exceeds ? "above the threshold" : "within the threshold"),
                 cell: (p) => (
                   <span className={p.exceeds ? "font-bold text-danger" : ""}>
-                    {formatPercent(p.percent)}
+                    {percent(p.percent)}
                     {p.exceeds ? " — above threshold" : ""}
                   </span>
                 ),
@@ -237,14 +242,22 @@ export function SystemRecords({
         )}
       </section>
 
-      <ChronicSection r={r} unit={unit} canFile={canFile} />
-      <RevisionsSection r={r} unit={unit} canRevise={canFile} />
+      <ChronicSection r={r} unit={unit} numberFormat={numberFormat} canFile={canFile} />
+      <RevisionsSection r={r} unit={unit} numberFormat={numberFormat} canRevise={canFile} />
 
       <section aria-labelledby="charge" className="space-y-3">
         <h2 id="charge" className="text-xl font-bold">
           Charge added
         </h2>
-        {canRecord ? <ChargeForm systemId={r.system.id} today={r.today} unit={unit} findings={findings} /> : null}
+        {canRecord ? (
+          <ChargeForm
+            systemId={r.system.id}
+            today={r.today}
+            unit={unit}
+            numberFormat={numberFormat}
+            findings={findings}
+          />
+        ) : null}
         <DataTable
           caption="Charge-added entries, voided ones kept"
           rows={[...r.additions].reverse()}
@@ -261,7 +274,7 @@ export function SystemRecords({
               sortValue: (x) => x.amountKg,
               cell: (x) => (
                 <>
-                  {x.voided ? <s>{formatMass(x.amountKg, unit)}</s> : formatMass(x.amountKg, unit)}
+                  {x.voided ? <s>{mass(x.amountKg)}</s> : mass(x.amountKg)}
                   <br />
                   <span className="text-sm text-muted">
                     entered {x.enteredValue} {x.enteredUnit}
@@ -332,6 +345,7 @@ export function SystemRecords({
                   systemId={r.system.id}
                   today={r.today}
                   unit={unit}
+                  numberFormat={numberFormat}
                   findings={findings}
                   corrects={{ id: x.id, addedOn: x.addedOn }}
                   onDone={() => setEditing(null)}

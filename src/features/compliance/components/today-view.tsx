@@ -6,6 +6,7 @@ import type { TodayView as TodayData } from "#core/contracts/compliance";
 import { DataTable } from "../../../components/ui/data-table";
 import { EmptyState } from "../../../components/ui/empty-state";
 import { Select } from "../../../components/ui/select";
+import type { NumberFormat } from "#core/domain/numbers/number-format";
 import { arrangeDue, daysInWords, DUE_KIND_LABELS, formatPercent, STATE_LABELS, type DueSort } from "../model/figures";
 import { SourceText } from "../../../components/ui/source-text";
 
@@ -25,8 +26,11 @@ export function TodayView({
   data,
   storeId,
   onStoreChange,
+  numberFormat,
 }: {
   data: TodayData;
+  /** The company's number format, for the leak rates. */
+  numberFormat: NumberFormat;
   storeId: string | null;
   onStoreChange: (id: string | null) => void;
 }) {
@@ -150,7 +154,7 @@ export function TodayView({
                 sortValue: (r) => r.percent,
                 cell: (r) => (
                   <Link className="font-bold text-danger underline" to={r.link}>
-                    {formatPercent(r.percent)}
+                    {formatPercent(r.percent, numberFormat)}
                   </Link>
                 ),
               },
@@ -257,7 +261,7 @@ export function TodayView({
                       className={`underline ${r.breachOpen ? "font-bold text-danger" : "text-accent"}`}
                       to={`${r.link}#leak-rates`}
                     >
-                      {formatPercent(r.latestPercent)} on {r.latestOn}
+                      {formatPercent(r.latestPercent, numberFormat)} on {r.latestOn}
                     </Link>
                     {r.repairedSince ? (
                       <span className="block text-sm text-muted">above the threshold; repaired since</span>

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import type { DueItem } from "#core/contracts/compliance";
-import { arrangeDue, daysInWords, formatMass } from "./figures";
+import { arrangeDue, daysInWords, formatMass, formatPercent } from "./figures";
 
 const item = (over: Partial<DueItem>): DueItem => ({
   kind: "repair",
@@ -21,8 +21,18 @@ const item = (over: Partial<DueItem>): DueItem => ({
 
 describe("Today figures", () => {
   it("shows kg as lb with the exact factor (NIST SP 811: 1 lb = 0.45359237 kg)", () => {
-    expect(formatMass(0.45359237 * 150, "lb")).toBe("150.0 lb");
-    expect(formatMass(68.0388555, "kg")).toBe("68.04 kg");
+    expect(formatMass(0.45359237 * 150, "lb", "1,234.5")).toBe("150.0 lb");
+    expect(formatMass(68.0388555, "kg", "1,234.5")).toBe("68.04 kg");
+  });
+
+  it("groups masses and percentages in the company's number format, as CLDR writes de-DE and fr-FR (Intl.NumberFormat)", () => {
+    const de = new Intl.NumberFormat("de-DE", { minimumFractionDigits: 1, maximumFractionDigits: 1 });
+    const fr = new Intl.NumberFormat("fr-FR", { minimumFractionDigits: 2, maximumFractionDigits: 2 });
+    // 1,500 lb of charge is 680.388555 kg (NIST SP 811 factor).
+    expect(formatMass(0.45359237 * 1500, "lb", "1.234,5")).toBe(`${de.format(1500)} lb`);
+    expect(formatMass(0.45359237 * 1500, "lb", "1.234,5")).toBe("1.500,0 lb");
+    expect(formatMass(1234.567, "kg", "1 234,5")).toBe(`${fr.format(1234.567)} kg`);
+    expect(formatPercent(125.04, "1.234,5")).toBe("125,0 %");
   });
 
   it("filters by store and sorts by due date, store or kind, undated first", () => {

@@ -1,15 +1,19 @@
 import type { DueItem } from "#core/contracts/compliance";
 import { KG_PER_POUND } from "#core/domain/units/mass";
+import { formatGrouped, type NumberFormat } from "#core/domain/numbers/number-format";
 
 export type MassUnit = "kg" | "lb";
 
-/** A mass in the reader's unit, from kg as stored (1 lb = 0.45359237 kg exactly, NIST SP 811). */
-export function formatMass(kg: number, unit: MassUnit): string {
-  return unit === "lb" ? `${(kg / KG_PER_POUND).toFixed(1)} lb` : `${kg.toFixed(2)} kg`;
+/**
+ * A mass in the reader's unit, from kg as stored (1 lb = 0.45359237 kg exactly, NIST SP 811),
+ * grouped in the company's number format: "1,500.0 lb", "680,39 kg".
+ */
+export function formatMass(kg: number, unit: MassUnit, format: NumberFormat): string {
+  return unit === "lb" ? `${formatGrouped(kg / KG_PER_POUND, format, 1)} lb` : `${formatGrouped(kg, format, 2)} kg`;
 }
 
-export function formatPercent(p: number): string {
-  return `${p.toFixed(1)} %`;
+export function formatPercent(p: number, format: NumberFormat): string {
+  return `${formatGrouped(p, format, 1)} %`;
 }
 
 export const STATE_LABELS: Record<DueItem["state"], string> = {

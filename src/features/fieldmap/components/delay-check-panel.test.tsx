@@ -15,6 +15,7 @@ describe("delay check panel", () => {
     const onUpdate = vi.fn();
     const { rerender } = render(
       <DelayCheckPanel
+        numberFormat="1,234.5"
         words={words}
         sweepDelayS={5}
         canUpdate
@@ -29,6 +30,7 @@ describe("delay check panel", () => {
     expect(onUpdate).toHaveBeenCalledWith(6.5);
     rerender(
       <DelayCheckPanel
+        numberFormat="1,234.5"
         words={words}
         sweepDelayS={5}
         canUpdate
@@ -45,6 +47,7 @@ describe("delay check panel", () => {
   it("offers nothing to members who may not edit detectors, or when the readings support no other delay", () => {
     render(
       <DelayCheckPanel
+        numberFormat="1,234.5"
         words={words}
         sweepDelayS={5}
         canUpdate={false}
@@ -57,6 +60,7 @@ describe("delay check panel", () => {
     expect(screen.queryByRole("button")).toBeNull();
     render(
       <DelayCheckPanel
+        numberFormat="1,234.5"
         words={{ ...words, suggestedDelayS: null }}
         sweepDelayS={5}
         canUpdate
@@ -67,5 +71,30 @@ describe("delay check panel", () => {
       />,
     );
     expect(screen.queryByRole("button")).toBeNull();
+  });
+
+  it("writes the seconds in a decimal-comma company's format, in the words and on the button", () => {
+    // CLDR's de-DE symbols (Intl.NumberFormat): 6.5 is written "6,5".
+    const de = new Intl.NumberFormat("de-DE").format(6.5);
+    const commaWords = delayCheckWords(
+      { statedS: 6.5, estimatedS: 8, supported: true, usedS: 8, statedMisfit: 0.4, estimatedMisfit: 0.1 },
+      wordsContext({ length: "m", mass: "kg", names: new Map(), delaySetByHand: false, numbers: "1.234,5" }, 1.5),
+    );
+    const onUpdate = vi.fn();
+    render(
+      <DelayCheckPanel
+        numberFormat="1.234,5"
+        words={commaWords}
+        sweepDelayS={5}
+        canUpdate
+        onUpdate={onUpdate}
+        busy={false}
+        updatedTo={null}
+        error={null}
+      />,
+    );
+    expect(screen.getByText(`Readings fit a ${de} s delay better than the detector's 5 s.`)).toBeVisible();
+    fireEvent.click(screen.getByRole("button", { name: `Set the detector's delay to ${de} s` }));
+    expect(onUpdate).toHaveBeenCalledWith(6.5);
   });
 });

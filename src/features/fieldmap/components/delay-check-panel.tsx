@@ -1,5 +1,5 @@
 import type { DelayCheckWords } from "#core/domain/locator-words/delay-words";
-import { formatShort } from "#core/domain/locator-words/number-words";
+import { formatShort, type NumberFormat } from "#core/domain/numbers/number-format";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 
@@ -16,7 +16,10 @@ export function DelayCheckPanel(p: {
   busy: boolean;
   updatedTo: number | null;
   error: string | null;
+  /** The company's number format. */
+  numberFormat: NumberFormat;
 }) {
+  const seconds = (s: number) => formatShort(s, p.numberFormat);
   const offer = p.words.suggestedDelayS;
   return (
     <section aria-labelledby="delay-check-title" className="rounded-md edge bg-surface p-3" data-testid="delay-check">
@@ -28,15 +31,15 @@ export function DelayCheckPanel(p: {
       {offer !== null && p.canUpdate && p.updatedTo === null && offer !== p.sweepDelayS ? (
         <div className="mt-2">
           <Button variant="secondary" busy={p.busy} onClick={() => p.onUpdate(offer)}>
-            Set the detector's delay to {formatShort(offer)} s
+            Set the detector's delay to {seconds(offer)} s
           </Button>
         </div>
       ) : null}
       {p.updatedTo !== null ? (
         <div className="mt-2">
           <Alert tone="success">
-            The detector's delay is now {formatShort(p.updatedTo)} s: sweeps started from now on use it. This sweep
-            keeps the {formatShort(p.sweepDelayS)} s it was recorded with.
+            The detector's delay is now {seconds(p.updatedTo)} s: sweeps started from now on use it. This sweep keeps
+            the {seconds(p.sweepDelayS)} s it was recorded with.
           </Alert>
         </div>
       ) : null}

@@ -1,4 +1,5 @@
 import { LUT_SIZE } from "#core/domain/fieldmap/concentration-ramp";
+import { formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
 
 /** A ramp bar with ppm ticks, and a swatch for unknown (hatched) areas. */
 export function RampLegend({
@@ -7,7 +8,10 @@ export function RampLegend({
   ticks,
   unit = "ppm",
   title,
+  numberFormat,
 }: {
+  /** The company's number format, for the ticks. */
+  numberFormat: NumberFormat;
   lut: Uint8ClampedArray;
   position(v: number): number;
   ticks: number[];
@@ -32,7 +36,7 @@ export function RampLegend({
             className="absolute -translate-x-1/2 text-xs text-muted"
             style={{ left: `${position(t) * 100}%` }}
           >
-            {t > 0 && unit === "ppm" && ticks.some((x) => x < 0) ? `+${t}` : t}
+            {`${t > 0 && unit === "ppm" && ticks.some((x) => x < 0) ? "+" : ""}${formatQuantity(t, numberFormat)}`}
           </span>
         ))}
       </div>

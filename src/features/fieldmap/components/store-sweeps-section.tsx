@@ -1,3 +1,4 @@
+import type { NumberFormat } from "#core/domain/numbers/number-format";
 import { Link } from "react-router";
 import { countOf } from "../../../lib/format";
 import { QueryError } from "../../../components/ui/query-error";
@@ -10,7 +11,13 @@ import { SweepSummaryPlot } from "./sweep-summary-plot";
 const LINK = "inline-flex min-h-11 items-center rounded-md px-4 font-bold no-underline";
 
 /** The store page's sweeps section: the latest few with their field maps (starting one is in the page header). */
-export function StoreSweepsSection(p: { storeId: string; timeZone: string; canCompare: boolean }) {
+export function StoreSweepsSection(p: {
+  storeId: string;
+  timeZone: string;
+  canCompare: boolean;
+  /** The company's number format. */
+  numberFormat: NumberFormat;
+}) {
   const { storeId, timeZone } = p;
   const sweeps = useStoreSweeps(storeId);
   const summary = useSweepSummary(storeId);
@@ -41,7 +48,9 @@ export function StoreSweepsSection(p: { storeId: string; timeZone: string; canCo
           ))}
         </ul>
       ) : null}
-      {summary.data?.length ? <SweepSummaryPlot sweeps={summary.data} timeZone={timeZone} /> : null}
+      {summary.data?.length ? (
+        <SweepSummaryPlot sweeps={summary.data} timeZone={timeZone} numberFormat={p.numberFormat} />
+      ) : null}
       <div className="flex flex-wrap gap-2">
         {sweeps.data?.length ? (
           <Link className={`${LINK} edge bg-surface`} to={`/stores/${storeId}/sweeps`}>

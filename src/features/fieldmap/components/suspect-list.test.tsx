@@ -66,6 +66,7 @@ describe("suspect list", () => {
     const w = wordsIn("ft-in");
     render(
       <SuspectList
+        numberFormat="1,234.5"
         spots={[spot]}
         words={w.spots}
         noSpot=""
@@ -91,6 +92,7 @@ describe("suspect list", () => {
     const w = wordsIn("m");
     const { rerender } = render(
       <SuspectList
+        numberFormat="1,234.5"
         spots={[spot]}
         words={w.spots}
         noSpot=""
@@ -107,6 +109,7 @@ describe("suspect list", () => {
     expect(onMake).toHaveBeenCalledWith(spot, w.spots[0]);
     rerender(
       <SuspectList
+        numberFormat="1,234.5"
         spots={[spot]}
         words={w.spots}
         noSpot=""
@@ -125,6 +128,7 @@ describe("suspect list", () => {
     const w = wordsIn("m", []);
     render(
       <SuspectList
+        numberFormat="1,234.5"
         spots={[]}
         words={[]}
         noSpot={w.noSpot!}

@@ -1,6 +1,6 @@
 import type { SuspectSpot } from "#core/contracts/analysis";
 import type { PresentedSpot } from "#core/domain/locator-words/present-analysis";
-import { formatNumber } from "#core/domain/locator-words/number-words";
+import { formatGrouped, type NumberFormat } from "#core/domain/numbers/number-format";
 import { Button } from "../../../components/ui/button";
 
 export interface SuspectListProps {
@@ -16,6 +16,8 @@ export interface SuspectListProps {
   /** Ranks that already have a finding from this sweep. */
   findingRanks: Set<number>;
   busyRank: number | null;
+  /** The company's number format. */
+  numberFormat: NumberFormat;
 }
 
 export function SuspectList(p: SuspectListProps) {
@@ -38,7 +40,7 @@ export function SuspectList(p: SuspectListProps) {
                 {w.place}
               </p>
               <span className="text-sm text-muted" title="For ordering only, 0 to 1">
-                score {formatNumber(s.score, 2)}
+                score {formatGrouped(s.score, p.numberFormat, 2)}
               </span>
             </div>
             <p className="mt-1 text-sm">{w.reason}</p>

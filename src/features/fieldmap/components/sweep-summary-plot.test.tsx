@@ -19,6 +19,7 @@ describe("sweep summary plot", () => {
   it("titles the plot, says what is not analysed yet, and lists the same figures as a table", () => {
     render(
       <SweepSummaryPlot
+        numberFormat="1,234.5"
         timeZone="America/Chicago"
         sweeps={[
           sweep("00000000-0000-4000-8000-000000000001", "2026-10-04T13:00:00Z", { findings: 2, confirmed: 1 }),

@@ -1,16 +1,26 @@
 import { Bar, CartesianGrid, ComposedChart, Legend, Line, Tooltip, XAxis, YAxis } from "recharts";
 import type { SweepSummaryItem } from "#core/contracts/sweep-summary";
 import { formatInZone } from "#core/domain/dates/format-in-zone";
+import { formatShort, type NumberFormat } from "#core/domain/numbers/number-format";
 import { PLOT_COLOURS, Plot } from "../../../components/ui/plot-frame";
 
-const peakText = (s: SweepSummaryItem) =>
-  s.peakPpm === null ? "no readings" : `${s.peakAtLeast ? "≥ " : ""}${Math.round(s.peakPpm * 10) / 10} ppm`;
+const peakText = (s: SweepSummaryItem, format: NumberFormat) =>
+  s.peakPpm === null ? "no readings" : `${s.peakAtLeast ? "≥ " : ""}${formatShort(s.peakPpm, format)} ppm`;
 
 /**
  * The store's last sweeps side by side: suspect spots and findings per sweep (bars, counts) and the
  * highest reading (line, ppm on its own axis), so a store that is getting worse shows at a glance.
  */
-export function SweepSummaryPlot({ sweeps, timeZone }: { sweeps: SweepSummaryItem[]; timeZone: string }) {
+export function SweepSummaryPlot({
+  sweeps,
+  timeZone,
+  numberFormat,
+}: {
+  sweeps: SweepSummaryItem[];
+  timeZone: string;
+  /** The company's number format. */
+  numberFormat: NumberFormat;
+}) {
   const data = sweeps.map((s) => ({
     ...s,
     label: formatInZone(s.startedAt, timeZone, "date"),
@@ -30,7 +40,7 @@ export function SweepSummaryPlot({ sweeps, timeZone }: { sweeps: SweepSummaryIte
           s.suspects ?? "not analysed yet",
           s.findings,
           s.confirmed,
-          peakText(s),
+          peakText(s, numberFormat),
         ]),
       }}
     >

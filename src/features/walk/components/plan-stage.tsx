@@ -5,7 +5,6 @@ import type { Fixture } from "#core/contracts/fixtures";
 import type { LocalReading } from "../model/local-types";
 import type { LagHint } from "../model/lag-hint";
 import {
-  fitView,
   METRE_BASE,
   panBy,
   planPoint,
@@ -18,6 +17,7 @@ import {
 import { backdropOf } from "../../../lib/plan-view/fixture-look";
 import { applyPinch, pinchStep } from "../../../lib/plan-view/pinch";
 import { WALK_ZOOM } from "../model/walk-view";
+import { fitClearOfControls } from "../model/walk-fit";
 import { ALARM_DOT_FACTOR, markLooks, pathWidthPx, readingDotRadiusPx, TRACE_DOT_FACTOR } from "../model/plan-marks";
 import { PlanLegend } from "./plan-legend";
 
@@ -249,8 +249,10 @@ export function PlanStage(props: PlanStageProps) {
         </Stage>
       ) : null}
       <PlanLegend highContrast={props.highContrast} />
+      {/* One row in the top-right corner, sized as model/walk-fit.ts expects: the fit keeps the plan clear of it. */}
       <div
-        className="absolute right-2 top-2 flex flex-col gap-2"
+        className="absolute right-2 top-2 flex flex-row gap-2"
+        data-testid="walk-zoom"
         onPointerDown={(e) => e.stopPropagation()}
         onPointerUp={(e) => e.stopPropagation()}
       >
@@ -266,20 +268,6 @@ export function PlanStage(props: PlanStageProps) {
       </div>
     </div>
   );
-}
-
-/** The Key and + buttons sit in the plan's top corners: 48 px and a gap. */
-const CONTROLS_TOP_PX = 60;
-
-/**
- * The whole plan, as large as fits; when the box has the height to spare, its top edge is moved
- * below the buttons in the corners so they cover none of it.
- */
-function fitClearOfControls(widthM: number, heightM: number, w: number, h: number): View {
-  const v = fitView(widthM, heightM, w, h, 12, WALK_ZOOM);
-  const planH = heightM * v.zoom;
-  if (v.panY < CONTROLS_TOP_PX && CONTROLS_TOP_PX + planH <= h - 12) return { ...v, panY: CONTROLS_TOP_PX };
-  return v;
 }
 
 const ZOOM =

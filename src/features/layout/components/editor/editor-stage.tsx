@@ -173,6 +173,30 @@ export function EditorStage(p: EditorStageProps) {
     p.onMessage(r.message);
     if (r.actions.length) p.apply(r.actions);
   }
+  const feedRef = useRef(feed);
+  feedRef.current = feed;
+
+  // The pointer of the gesture under way, and the last plan point the tool saw from it. Konva hears
+  // only what happens over its canvas: a mouse let go past the stage's edge, or a pointer the
+  // browser cancels, never reaches onUp, and the tool would keep its drag and draw its outline on.
+  const loose = useRef<{ id: number; point: PlanPoint } | null>(null);
+  useEffect(() => {
+    // Bubbling on the window runs after Konva's own listener: a release over the stage has gone
+    // through onUp already (which clears `loose`).
+    const end = (evt: PointerEvent) => {
+      const l = loose.current;
+      if (!l || evt.pointerId !== l.id) return;
+      loose.current = null;
+      if ((toolState.current as { phase: string }).phase === "idle") return;
+      feedRef.current(evt.type === "pointercancel" ? { type: "cancel" } : { type: "pointer-up", point: l.point });
+    };
+    window.addEventListener("pointerup", end);
+    window.addEventListener("pointercancel", end);
+    return () => {
+      window.removeEventListener("pointerup", end);
+      window.removeEventListener("pointercancel", end);
+    };
+  }, []);
   p.toolKeys.current = (key: string) => {
     const state = toolState.current as { phase: string; active?: unknown };
     if (active.tool === "vertex") {
@@ -223,7 +247,11 @@ export function EditorStage(p: EditorStageProps) {
     }
     if (!p.canEdit && active.tool !== "select") return;
     const pt = pointer(stage);
-    if (pt) feed({ type: "pointer-down", point: pt, shift: e.evt.shiftKey });
+    if (!pt) return;
+    // A release never heard (let go outside the window): that gesture ends before this one starts.
+    if (loose.current) feed({ type: "cancel" });
+    loose.current = { id: e.evt.pointerId, point: pt };
+    feed({ type: "pointer-down", point: pt, shift: e.evt.shiftKey });
   }
 
   function onMove(e: Konva.KonvaEventObject<PointerEvent>) {
@@ -245,13 +273,16 @@ export function EditorStage(p: EditorStageProps) {
     }
     if ((toolState.current as { phase: string }).phase === "idle" && active.tool !== "polygon") return;
     const pt = pointer(stage);
-    if (pt) feed({ type: "pointer-move", point: pt, shift: e.evt.shiftKey });
+    if (!pt) return;
+    if (loose.current?.id === e.evt.pointerId) loose.current.point = pt;
+    feed({ type: "pointer-move", point: pt, shift: e.evt.shiftKey });
   }
 
   function onUp(e: Konva.KonvaEventObject<PointerEvent>) {
     const stage = e.target.getStage();
     const finger = fingerPress.current;
     fingerPress.current = null;
+    loose.current = null;
     if (panStart.current) {
       panStart.current = null;
       return;
@@ -292,6 +323,7 @@ export function EditorStage(p: EditorStageProps) {
   useTwoFingerPinch(() => stageRef.current?.container(), pinching, {
     onStart: () => {
       cancel();
+      loose.current = null;
       panStart.current = null;
       fingerPress.current = null;
       // Each finger's press reached the tool before the browser said it was a pinch: go back to
@@ -449,12 +481,16 @@ function CornerHandles({ scene, unit, sizePx }: { scene: Scene; unit: number; si
   );
 }
 
+/** Konva name of every node a tool's preview draws (browser tests look for strays by it). */
+const PREVIEW_NAME = "tool-preview";
+
 function PreviewShape({ preview }: { preview: ToolPreview | null }) {
   if (!preview) return null;
   if (preview.kind === "marquee") {
     const b = preview.box;
     return (
       <Rect
+        name={PREVIEW_NAME}
         x={b.minX}
         y={b.minY}
         width={b.maxX - b.minX}
@@ -472,6 +508,7 @@ function PreviewShape({ preview }: { preview: ToolPreview | null }) {
   return (
     <>
       <Line
+        name={PREVIEW_NAME}
         points={vs.flatMap((v) => [v.x, v.y])}
         closed={preview.closed}
         stroke="#1f4e5f"
@@ -483,6 +520,7 @@ function PreviewShape({ preview }: { preview: ToolPreview | null }) {
       {preview.vertices.map((v, i) => (
         <Rect
           key={i}
+          name={PREVIEW_NAME}
           x={v.x}
           y={v.y}
           width={0.001}

@@ -36,6 +36,9 @@ interface Props {
   onSnapToFixtures: (on: boolean) => void;
 }
 
+/** A group of buttons: one unbroken run in the phone's scrolling row, wrapping from `sm` up. */
+const GROUP = "flex shrink-0 flex-nowrap gap-1 sm:shrink sm:flex-wrap";
+
 const FAMILIES: FixtureFamily[] = ["air-volume", "solid-body", "zone", "point"];
 
 // Snap steps in the user's units: 0.1 / 0.5 / 1 m, or 6 in / 1 ft / 2 ft (0.3048 m per foot, NIST SP 811).
@@ -76,7 +79,11 @@ function ToolButton({
   );
 }
 
-/** Tools, the kind to draw, edits and the view; every button is at least 44 px (Button). */
+/**
+ * Tools, the kind to draw, edits and the view; every button is at least 44 px (Button). On a phone
+ * (below Tailwind's `sm`, 640 px) they stay in one row that scrolls sideways under the thumb, so
+ * the plan keeps the screen; from `sm` up the groups wrap as the width allows.
+ */
 export function EditorToolbar(p: Props) {
   const kindId = useId();
   const gridId = useId();
@@ -86,9 +93,10 @@ export function EditorToolbar(p: Props) {
     <div
       role="toolbar"
       aria-label="Layout tools"
-      className="flex flex-wrap items-center gap-2 rounded-md bg-surface p-2 edge"
+      data-testid="editor-toolbar"
+      className="flex min-w-0 flex-1 flex-nowrap items-center gap-2 overflow-x-auto overscroll-x-contain rounded-md bg-surface p-2 edge sm:flex-initial sm:flex-wrap sm:overflow-visible"
     >
-      <div className="flex flex-wrap gap-1" role="group" aria-label="Tool">
+      <div className={GROUP} role="group" aria-label="Tool">
         <ToolButton pressed={p.active.tool === "select"} onClick={() => p.onTool("select")} shortcut="V">
           Select
         </ToolButton>
@@ -116,8 +124,8 @@ export function EditorToolbar(p: Props) {
         ) : null}
       </div>
       {p.canEdit ? (
-        <div className="flex items-center gap-2">
-          <label htmlFor={kindId} className="text-sm font-bold">
+        <div className="flex shrink-0 items-center gap-2 sm:shrink">
+          <label htmlFor={kindId} className="whitespace-nowrap text-sm font-bold">
             Kind to draw
           </label>
           <select
@@ -139,7 +147,7 @@ export function EditorToolbar(p: Props) {
         </div>
       ) : null}
       {p.canEdit ? (
-        <div className="flex flex-wrap gap-1" role="group" aria-label="Edit">
+        <div className={GROUP} role="group" aria-label="Edit">
           <Button variant="secondary" onClick={p.onUndo} disabled={!p.canUndo} aria-keyshortcuts="Control+Z">
             Undo
           </Button>
@@ -157,7 +165,7 @@ export function EditorToolbar(p: Props) {
           </Button>
         </div>
       ) : null}
-      <div className="flex flex-wrap gap-1" role="group" aria-label="View">
+      <div className={GROUP} role="group" aria-label="View">
         <Button variant="secondary" onClick={() => p.onZoom("in")} aria-label="Zoom in">
           +
         </Button>
@@ -169,9 +177,9 @@ export function EditorToolbar(p: Props) {
         </Button>
       </div>
       {p.canEdit ? (
-        <div className="flex flex-wrap items-center gap-2">
-          <div className="flex items-center gap-2">
-            <label htmlFor={gridId} className="text-sm font-bold">
+        <div className="flex shrink-0 items-center gap-2 sm:shrink sm:flex-wrap">
+          <div className="flex shrink-0 items-center gap-2 sm:shrink">
+            <label htmlFor={gridId} className="whitespace-nowrap text-sm font-bold">
               Snap to grid
             </label>
             <select
@@ -188,7 +196,7 @@ export function EditorToolbar(p: Props) {
               ))}
             </select>
           </div>
-          <label className="flex min-h-11 items-center gap-2 px-1">
+          <label className="flex min-h-11 shrink-0 items-center gap-2 whitespace-nowrap px-1">
             <input
               type="checkbox"
               className="size-6 accent-accent"

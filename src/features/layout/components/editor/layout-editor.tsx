@@ -177,7 +177,11 @@ function EditorBody({
   // At least a window tall from the tools down, so the page can always scroll them to the top.
   return (
     <div className="min-h-dvh space-y-3">
-      <div ref={bar} className="flex flex-wrap items-center justify-between gap-2" data-testid="editor-bar">
+      <div
+        ref={bar}
+        className="flex flex-nowrap items-center justify-between gap-2 sm:flex-wrap"
+        data-testid="editor-bar"
+      >
         <EditorToolbar
           active={active}
           kind={kind}

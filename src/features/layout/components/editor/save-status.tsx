@@ -27,10 +27,12 @@ export function SaveStatus({ state, onRetry }: { state: SaveState; onRetry: () =
       role="status"
       aria-live="polite"
       data-save-status={state.status}
-      className={`flex min-h-11 items-center gap-2 rounded-md px-3 font-bold edge ${bad ? "border-danger bg-danger-soft text-danger" : "bg-surface"}`}
+      title={TEXT[state.status]}
+      className={`flex min-h-11 shrink-0 items-center gap-2 rounded-md px-3 font-bold edge ${bad ? "border-danger bg-danger-soft text-danger" : "bg-surface"}`}
     >
       <span aria-hidden="true">{MARK[state.status]}</span>
-      <span>{TEXT[state.status]}</span>
+      {/* On a phone the words of a good state make room for the tools; a problem always says itself. */}
+      <span className={bad ? "" : "sr-only sm:not-sr-only"}>{TEXT[state.status]}</span>
       {state.status === "failed" ? (
         <Button variant="quiet" onClick={onRetry}>
           Try again

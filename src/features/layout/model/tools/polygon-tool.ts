@@ -54,6 +54,9 @@ export function polygonTool(kind: FixtureKind, state: PolygonToolState, event: T
       return placing(vertices, ctx.snap(event.point));
     case "pointer-up":
       return placing(vertices, hover);
+    case "cancel":
+      // Corners are placed one tap at a time: a lost pointer takes none of them back.
+      return placing(vertices, hover);
     case "pointer-down": {
       const p = ctx.snap(event.point);
       if (vertices.length >= 3 && distance(p, vertices[0]) <= ctx.pickToleranceM)

@@ -34,6 +34,7 @@ export function rectangleTool(
 ): ToolResult<RectangleToolState> {
   if (event.type === "key") return event.key === "Escape" ? result(RECTANGLE_IDLE) : result(state, [], preview(state));
   if (event.type === "double-click") return result(state, [], preview(state));
+  if (event.type === "cancel") return result(RECTANGLE_IDLE);
   const p = ctx.snap(event.point);
   switch (state.phase) {
     case "idle":

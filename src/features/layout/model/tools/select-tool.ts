@@ -56,6 +56,8 @@ export function selectTool(state: SelectToolState, event: ToolEvent, ctx: ToolCo
     return result(state);
   }
   if (event.type === "double-click") return result(state);
+  // A lost pointer ends a drag or a marquee; a selection made by the press stays.
+  if (event.type === "cancel") return result(SELECT_IDLE);
   switch (state.phase) {
     case "idle":
       return event.type === "pointer-down" ? pressed(event.point, event.shift ?? false, ctx) : result(state);

@@ -13,7 +13,12 @@ export type ToolEvent =
   | { type: "pointer-move"; point: PlanPoint; shift?: boolean }
   | { type: "pointer-up"; point: PlanPoint; shift?: boolean }
   | { type: "double-click"; point: PlanPoint }
-  | { type: "key"; key: string };
+  | { type: "key"; key: string }
+  /**
+   * The pointer was lost before it was let go (the browser cancelled it): the gesture under way
+   * ends and records nothing, and its preview goes.
+   */
+  | { type: "cancel" };
 
 /** What the view draws while a gesture is under way; nothing is in the scene yet. */
 export type ToolPreview =

@@ -64,6 +64,7 @@ export function vertexTool(state: VertexToolState, event: ToolEvent, ctx: ToolCo
         ? result({ phase: "idle", active: { id: state.id, index: state.index } })
         : result(state);
     if (event.type === "double-click") return result(state);
+    if (event.type === "cancel") return result({ phase: "idle", active: { id: state.id, index: state.index } });
     // A press that never travels past the drag threshold only picks the corner (for Delete).
     const moved = state.moved || distance(event.point, state.start) > ctx.dragThresholdM;
     const active = { id: f.id, index: state.index };
