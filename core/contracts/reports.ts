@@ -35,8 +35,9 @@ export const reportSend = z.object({
   recipients: z.array(text()),
   subject: text(),
   filename: text(),
-  bytes: z.number(),
-  /** When the sender pressed Send (the message is queued then; `delivery` says when it went). */
+  /** The PDF's size; null until the job has made it (`delivery.state` "preparing"). */
+  bytes: z.number().nullable(),
+  /** When the sender pressed Send (the send is recorded then; `delivery` says when it went). */
   sentAt: text(),
   /** Null for sends recorded before mail went through the queue. */
   delivery: mailDelivery.nullable(),

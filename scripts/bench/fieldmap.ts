@@ -108,7 +108,7 @@ async function reportPdf(result: ReturnType<typeof locate>, input: ReturnType<ty
         rank: c.rank,
         position: `${c.x.toFixed(1)} m, ${c.y.toFixed(1)} m`,
         radius: `${c.radius.toFixed(1)} m`,
-        score: c.score,
+        score: c.score.toFixed(2),
         strength: c.strength.toFixed(2),
         fixture: c.fixtureId ?? "open floor",
         riskPoint: c.riskPointId ?? "none near",

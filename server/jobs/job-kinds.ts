@@ -1,11 +1,19 @@
 /**
  * The kinds of background job every app process runs (server/jobs/job-queue.ts, decision 0085):
- * analyses, the hourly digest pass (a pg-boss cron schedule, queued once across all processes) and
- * one digest job per company, each with its retries and time limit.
+ * analyses, sent reports' PDFs (decision 0096), the hourly digest pass (a pg-boss cron schedule,
+ * queued once across all processes) and one digest job per company, each with its retries and time limit.
  */
 import { z } from "zod";
 import type { AppContext } from "../context";
 import { ANALYSIS_JOB, ANALYSIS_TIME_LIMIT_S, runAnalysisJob } from "../api/analysis/analysis.service";
+import {
+  REPORT_PDF_JOB,
+  REPORT_PDF_SWEEP_JOB,
+  REPORT_PDF_TIME_LIMIT_S,
+  reportPdfGaveUp,
+  runReportPdfJob,
+  sweepPreparingReports,
+} from "../api/reports/report-pdf-job";
 import { companiesPastDigestHour, sendDigest } from "./digest";
 import type { JobDefinition, JobQueue } from "./job-queue";
 
@@ -23,6 +31,7 @@ const analysisData = z.object({
   }),
 });
 const digestData = z.object({ companyId: z.uuid() });
+const reportPdfData = z.object({ sendId: z.uuid(), companyId: z.uuid() });
 
 export function jobDefinitions(ctx: AppContext, jobs: JobQueue): Record<string, JobDefinition> {
   return {
@@ -32,6 +41,23 @@ export function jobDefinitions(ctx: AppContext, jobs: JobQueue): Record<string, 
       timeLimitS: ANALYSIS_TIME_LIMIT_S,
       policy: "short",
       run: (data) => runAnalysisJob(ctx, analysisData.parse(data)),
+    },
+    // A sent report's PDF; after the last try the send shows "failed" with the reason.
+    [REPORT_PDF_JOB]: {
+      retryLimit: 2,
+      retryDelayS: 10,
+      timeLimitS: REPORT_PDF_TIME_LIMIT_S,
+      run: (data) => runReportPdfJob(ctx, reportPdfData.parse(data)),
+      gaveUp: (data, reason) => reportPdfGaveUp(ctx, reportPdfData.parse(data), reason),
+    },
+    // Every minute, once across processes: sends whose PDF job was never handed over, or died for good.
+    [REPORT_PDF_SWEEP_JOB]: {
+      retryLimit: 0,
+      retryDelayS: 60,
+      timeLimitS: 60,
+      policy: "short",
+      cron: "* * * * *",
+      run: () => sweepPreparingReports(ctx),
     },
     // Minute 5 of every hour (UTC), as the croner schedule before it; a company's digest goes out
     // at the first pass after 06:00 its local time, once a day (sendDigest's claim, decision 0010).

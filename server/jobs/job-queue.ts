@@ -26,6 +26,8 @@ export interface JobDefinition {
   cron?: string;
   /** Resolves when done (with an output pg-boss keeps on the job, e.g. a refusal that is not worth a retry). */
   run(data: Record<string, unknown>): Promise<{ reason: string } | void>;
+  /** Called once when the last try has failed, before the job is dead-lettered: show the failure where the user looks. */
+  gaveUp?(data: Record<string, unknown>, reason: string): Promise<void>;
 }
 
 export interface JobQueueOptions {
@@ -81,7 +83,7 @@ export function createJobQueue(db: Db, logger: Logger, options: Partial<JobQueue
   async function loop(b: PgBoss, name: string, def: JobDefinition): Promise<void> {
     while (boss === b) {
       try {
-        const [job] = await b.fetch<Record<string, unknown>>(name, { batchSize: 1 });
+        const [job] = await b.fetch<Record<string, unknown>>(name, { batchSize: 1, includeMetadata: true });
         if (!job) {
           await pause(name, opts.pollingIntervalS * 1000);
           continue;
@@ -92,7 +94,12 @@ export function createJobQueue(db: Db, logger: Logger, options: Partial<JobQueue
           if (output) await b.complete(name, job.id, output);
           else await b.complete(name, job.id);
         } catch (err) {
-          logger.warn({ job: name, jobId: job.id, err: { message: reasonOf(err) } }, "job failed; pg-boss retries it");
+          const last = job.retryCount >= job.retryLimit;
+          logger.warn(
+            { job: name, jobId: job.id, last, err: { message: reasonOf(err) } },
+            last ? "job failed for good" : "job failed; pg-boss retries it",
+          );
+          if (last && def.gaveUp) await def.gaveUp(job.data, reasonOf(err));
           await b.fail(name, job.id, { reason: reasonOf(err) });
         } finally {
           active--;

@@ -2,7 +2,7 @@
  * The durable outgoing mail queue. A message is a row in `outgoing_mail`, written (in the
  * caller's transaction when it has one) before the request answers; a pg-boss job then delivers
  * it over SMTP, retried with exponential backoff, so a mail server outage delays mail instead of
- * failing the request. Each row keeps its state (queued, sent, failed), attempts and last error
+ * failing the request. Each row keeps its state (preparing, queued, sent, failed), attempts and last error
  * for the screen it was sent from. A row is claimed with a short lease before sending, so two
  * jobs for one message (a re-handed row) never both send it.
  */
@@ -14,7 +14,12 @@ import { outgoingMail, type MAIL_KINDS } from "../db/schema/index";
 import type { MailTransport, OutgoingMail } from "./mailer";
 
 export type MailKind = (typeof MAIL_KINDS)[number];
-export type Queueable = OutgoingMail & { kind: MailKind; subjectId?: string | null };
+export type Queueable = OutgoingMail & {
+  kind: MailKind;
+  subjectId?: string | null;
+  /** Written "preparing": its attachment is still being made (a report's PDF job); not sent until it is "queued". */
+  preparing?: boolean;
+};
 type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 
 export const MAIL_JOB = "mail-send";
@@ -87,7 +92,10 @@ export function createMailQueue(
     }
   }
 
-  /** Writes the message; pass the transaction that creates what it is about. Call notify after commit. */
+  /**
+   * Writes the message; pass the transaction that creates what it is about. Call notify after commit
+   * (a "preparing" message is handed over by whatever finishes it, server/api/reports/report-pdf-job.ts).
+   */
   async function queue(mail: Queueable, tx: Db | Tx = db): Promise<string> {
     const [row] = await tx
       .insert(outgoingMail)
@@ -95,6 +103,7 @@ export function createMailQueue(
         companyId: mail.companyId ?? null,
         kind: mail.kind,
         subjectId: mail.subjectId ?? null,
+        state: mail.preparing ? "preparing" : "queued",
         to: Array.isArray(mail.to) ? mail.to : [mail.to],
         subject: mail.subject,
         text: mail.text,

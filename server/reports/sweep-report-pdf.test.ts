@@ -43,7 +43,7 @@ function model(png: Buffer, readings: number, paper: SweepReportModel["paper"]):
       rank: i + 1,
       position: `${12 + i} ft 3 in, 40 ft ${i} in`,
       radius: "3 ft 3 in",
-      score: 0.9 - i * 0.2,
+      score: (0.9 - i * 0.2).toFixed(2),
       strength: "about 2.4 lb/yr",
       fixture: `Frozen food reach-in ${i + 3} with a rather long descriptive name from the layout`,
       riskPoint: "line-set drop at the end of the frozen food line",
@@ -56,7 +56,7 @@ function model(png: Buffer, readings: number, paper: SweepReportModel["paper"]):
     })),
     diagnostics: ["The fans spread the gas along the line: stop the fans or defrost and re-check."],
     findings: [
-      { status: "Confirmed", found: "4 Nov 2026", where: "Frozen food reach-in 4, coil", note: "bubbles at a U-bend" },
+      { status: "confirmed", found: "4 Nov 2026", where: "Frozen food reach-in 4, coil", note: "bubbles at a U-bend" },
     ],
     readings: Array.from({ length: readings }, (_, i) => ({
       n: i + 1,
@@ -105,5 +105,30 @@ describe("sweep report PDF layout", () => {
       // two pages of facts, map and suspects, then about 45 rows a page (a tenth of them three lines)
       expect(pages.length).toBeLessThanOrEqual(6);
     }
+  });
+
+  it("lists the findings before the suspect spots, confirmed first, each with the spot it answers", async () => {
+    const m = model(await mapPng(), 5, "letter");
+    // Recorded in this order: a suspicion at spot 1, a dismissed check, then the leak confirmed at spot 2.
+    m.findings = [
+      { status: "suspected", found: "4 Nov 2026, 07:40", where: "Frozen food reach-in 3", note: "", x: 4, y: 6 },
+      { status: "dismissed", found: "4 Nov 2026, 07:45", where: "Dairy wall", note: "nothing at the coil" },
+      { status: "confirmed", found: "4 Nov 2026, 07:58", where: "Frozen food reach-in 4, coil", note: "", x: 7, y: 6 },
+    ];
+    const text = (await pdfLayout(await buildSweepReportPdf(m))).map((p) => p.text).join("\n");
+    const flat = text.replace(/\s+/g, " ");
+    const at = (s: string) => {
+      const i = flat.indexOf(s);
+      expect(i, s).toBeGreaterThanOrEqual(0);
+      return i;
+    };
+    const confirmed = at("Confirmed leak — Frozen food reach-in 4, coil (suspect spot 2)");
+    const suspected = at("Suspected, not yet confirmed — Frozen food reach-in 3 (suspect spot 1)");
+    const dismissed = at("Checked, no leak — Dairy wall");
+    const spots = at("Suspect spots");
+    expect(at("Findings")).toBeLessThan(confirmed);
+    expect([confirmed, suspected, dismissed, spots]).toEqual(
+      [...[confirmed, suspected, dismissed, spots]].sort((a, b) => a - b),
+    );
   });
 });

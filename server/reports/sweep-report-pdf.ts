@@ -1,12 +1,13 @@
 /**
  * Lays out a sweep report (US Letter or A4, by the company's rules) with pdfkit: facts, the field map with numbered suspect spots, the
- * suspect list, diagnostics, findings, the readings table and the safety cautions. Atkinson
+ * findings (confirmed first), the suspect list, diagnostics, the readings table and the safety cautions. Atkinson
  * Hyperlegible is embedded (subset) so accented names print. Resolves with the whole PDF.
  */
 import PDFDocument from "pdfkit";
 import type { SweepReportModel } from "#core/domain/reports/sweep-report-model";
 import { REPORT_FONTS } from "./fonts";
 import { readableSource } from "#core/domain/compliance/citations";
+import { findingHeading, findingsWorstFirst, spotsAnswered } from "#core/domain/reports/report-mail-text";
 
 const MARGIN = 48;
 const INK = "#1f2430";
@@ -173,6 +174,19 @@ export function buildSweepReportPdf(m: SweepReportModel): Promise<Buffer> {
   if (m.map) fieldMap(doc, m.map, m.suspects);
   else doc.fillColor(MUTED).text("No field map: the sweep could not be analysed.");
 
+  // What was found comes before what is only suspected, worst first (as the report e-mail says it).
+  heading(doc, "Findings");
+  if (m.findings.length === 0) doc.fillColor(INK).text("No findings recorded from this sweep.");
+  for (const f of findingsWorstFirst(m.findings)) {
+    const spots = spotsAnswered(f, m.suspects);
+    const spot = spots.length ? ` (suspect spot ${spots.join(", ")})` : "";
+    doc
+      .fillColor(INK)
+      .text(`• ${findingHeading(f.status)} — ${f.where}${spot}, found ${f.found}${f.note ? `: ${f.note}` : ""}`, {
+        indent: 4,
+      });
+  }
+
   heading(doc, "Suspect spots");
   if (m.suspects.length === 0) doc.fillColor(INK).text(m.noSpot);
   for (const s of m.suspects) {
@@ -181,7 +195,7 @@ export function buildSweepReportPdf(m: SweepReportModel): Promise<Buffer> {
       .font("bold")
       .fontSize(10.5)
       .fillColor(INK)
-      .text(`${s.rank}. ${s.fixture} — at ${s.position} (within ${s.radius}), score ${s.score.toFixed(2)}`);
+      .text(`${s.rank}. ${s.fixture} — at ${s.position} (within ${s.radius}), score ${s.score}`);
     doc
       .font("regular")
       .fontSize(10)
@@ -197,13 +211,6 @@ export function buildSweepReportPdf(m: SweepReportModel): Promise<Buffer> {
   heading(doc, "Diagnostics");
   if (m.diagnostics.length === 0) doc.fillColor(INK).text("Nothing to report.");
   for (const d of m.diagnostics) doc.fillColor(INK).text(`• ${d}`, { indent: 4 });
-
-  heading(doc, "Findings");
-  if (m.findings.length === 0) doc.fillColor(INK).text("No findings recorded from this sweep.");
-  for (const f of m.findings)
-    doc
-      .fillColor(INK)
-      .text(`• ${f.status} — ${f.where}, found ${f.found}${f.note ? `: ${f.note}` : ""}`, { indent: 4 });
 
   heading(doc, `Readings (${m.readings.length})`);
   readingsTable(doc, m.readings);

@@ -1,16 +1,20 @@
 import type { MailDelivery } from "#core/contracts/mail-delivery";
 
-/** Queued mail is looked at again every few seconds until it is sent or has failed. */
+/** Mail being prepared or queued is looked at again every few seconds until it is sent or has failed. */
 export const MAIL_REFRESH_MS = 3_000;
 
 export function anyQueued(items: readonly { delivery: MailDelivery | null }[] | undefined): boolean {
-  return Boolean(items?.some((i) => i.delivery?.state === "queued"));
+  return Boolean(items?.some((i) => i.delivery?.state === "queued" || i.delivery?.state === "preparing"));
 }
 
-/** Where a queued e-mail stands, in words: waiting, retrying (with why), sent, or not delivered (with why). */
+/** Where a queued e-mail stands, in words: its PDF being made, waiting, retrying (with why), sent, or not delivered (with why). */
 export function MailDeliveryStatus({ delivery }: { delivery: MailDelivery | null }) {
   if (!delivery) return null;
   if (delivery.state === "sent") return <span>E-mail sent.</span>;
+  if (delivery.state === "preparing") return <span>Making the PDF: the e-mail goes out once it is ready.</span>;
+  // Nothing was tried: the attachment could not be made (the reason says so).
+  if (delivery.state === "failed" && delivery.attempts === 0)
+    return <strong className="text-red-800">Not sent: {delivery.error ?? "it could not be prepared"}</strong>;
   if (delivery.state === "failed")
     return (
       <strong className="text-red-800">

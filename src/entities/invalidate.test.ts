@@ -16,6 +16,7 @@ function cacheWithEverything() {
     fixtures: fixturesKeys.list("p1"),
     sweep: sweepsKeys.detail("w1"),
     analysis: sweepsKeys.analysis("w1", null),
+    sweepSummary: sweepsKeys.summary("s1"),
     storeFindings: findingsKeys.list("s1"),
     systemFindings: findingsKeys.list("s1", "sys1"),
     finding: findingsKeys.detail("f1"),
@@ -33,11 +34,11 @@ function cacheWithEverything() {
 }
 
 describe("invalidation by entity", () => {
-  it("a finding changed anywhere makes every findings list, Today and the system's records stale", async () => {
+  it("a finding changed anywhere makes every findings list, Today, the system's records and the store's sweep summary stale", async () => {
     const { qc, stale } = cacheWithEverything();
     await invalidateEntity(qc, "finding");
     expect(stale()).toEqual(
-      ["finding", "storeFindings", "systemFindings", "systemRecords", "today", "todayOfStore"].sort(),
+      ["finding", "storeFindings", "systemFindings", "systemRecords", "sweepSummary", "today", "todayOfStore"].sort(),
     );
   });
 
@@ -47,9 +48,9 @@ describe("invalidation by entity", () => {
     expect(stale()).toEqual(["plans", "storePage"]);
   });
 
-  it("a reviewed sweep refreshes sweeps and their analyses, nothing of the records", async () => {
+  it("a reviewed sweep refreshes sweeps, their analyses and the store's sweep summary, nothing of the records", async () => {
     const { qc, stale } = cacheWithEverything();
     await invalidateEntity(qc, "sweep");
-    expect(stale()).toEqual(["analysis", "sweep"]);
+    expect(stale()).toEqual(["analysis", "sweep", "sweepSummary"]);
   });
 });

@@ -27,8 +27,9 @@ export const STALE_AFTER: Record<Entity, readonly QueryKey[]> = {
   // Today lists the detectors' calibration checks.
   detector: [detectorsKeys.all, recordsKeys.todays()],
   sweep: [sweepsKeys.all],
-  // A finding's status moves deadlines: Today's lists and the system's records.
-  finding: [findingsKeys.all, recordsKeys.all],
+  // A finding's status moves deadlines: Today's lists and the system's records; the store page's
+  // sweep summary counts each sweep's findings.
+  finding: [findingsKeys.all, recordsKeys.all, sweepsKeys.summaries()],
   // A charge addition moves the leak rate, so the repair deadlines of its system's findings.
   charge: [recordsKeys.all, findingsKeys.all],
 };

@@ -128,11 +128,14 @@ it("an engineer opens the latest sweep's field map, compares it with the month b
   // send it to the store contact and a typed address
   await page.getByLabel("Other addresses").fill("regional.manager@example.org");
   await page.getByRole("button", { name: "Send the report" }).click();
-  await page.getByText(/Queued for .*regional\.manager@example\.org/).waitFor();
+  await page.getByText(/Sending to .*regional\.manager@example\.org/).waitFor();
   await page
     .getByTestId("report-sends")
     .getByText(/regional\.manager@example\.org/)
     .waitFor();
+  // The server's job makes the PDF, then the mail queue sends it: the live list follows it to "E-mail sent".
+  await page.getByTestId("report-sends").getByText("E-mail sent.").first().waitFor({ timeout: 60_000 });
+  await page.screenshot({ path: path.join(screens, "report-sent-after-its-pdf-job.png"), fullPage: true });
 
   // and find it in the Outbox, with the PDF attached
   await page.getByRole("link", { name: "Outbox" }).click();
@@ -144,6 +147,8 @@ it("an engineer opens the latest sweep's field map, compares it with the month b
     .getByText(/sweep-larkspur-market-cedar-hollow-\d{4}-\d{2}-\d{2}\.pdf/)
     .first()
     .waitFor();
+  await page.getByTestId("on-its-way").waitFor();
+  await page.screenshot({ path: path.join(screens, "outbox-with-not-delivered-yet.png"), fullPage: true });
   expect(failures).toEqual([]);
   await context.close();
 });

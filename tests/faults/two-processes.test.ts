@@ -1,6 +1,7 @@
 // Two app processes (the production build) on one database, as behind a load balancer: a session
-// made on one is good on the other, a job queued by one is run by the other, and the sign-in and
-// sync limits count across both (they live in PostgreSQL). Own cluster, loopback, bounded in time.
+// made on one is good on the other, jobs queued by one (an analysis, a report's PDF) are run by the
+// other, and the sign-in and sync limits count across both (they live in PostgreSQL). Own cluster,
+// loopback, bounded in time.
 import pg from "pg";
 import { afterAll, beforeAll, expect, it } from "vitest";
 import { startOwnCluster, type OwnCluster } from "../helpers/own-cluster";
@@ -59,6 +60,33 @@ it("an analysis queued by the process that runs no jobs is run by the other, and
   try {
     const { rows } = await c.query("select state from pgboss.job where name = 'analysis' and data->>'sweepId' = $1", [
       f.sweepId,
+    ]);
+    expect(rows.map((r) => r.state)).toEqual(["completed"]);
+  } finally {
+    await c.end();
+  }
+}, 120_000);
+
+it("a report sent to the process that runs no jobs answers at once; the other makes its PDF and it is mailed", async () => {
+  const res = await f.owner.request("POST", `/api/sweeps/${f.sweepId}/report/send`, {
+    addresses: ["buyer@tamarack.test"],
+  });
+  expect(res.status, await res.clone().text()).toBe(201);
+  const sent = await res.json();
+  expect(sent.delivery.state).toBe("preparing");
+  let send: { bytes: number | null; delivery: { state: string } } | undefined;
+  for (const by = Date.now() + 90_000; Date.now() < by; await new Promise((r) => setTimeout(r, 500))) {
+    const list = await (await f.owner.request("GET", `/api/sweeps/${f.sweepId}/report/sends`)).json();
+    send = list.sends.find((s: { id: string }) => s.id === sent.id);
+    if (send?.delivery.state === "sent" || send?.delivery.state === "failed") break;
+  }
+  expect(send?.delivery.state).toBe("sent");
+  expect(send?.bytes).toBeGreaterThan(10_000);
+  const c = new pg.Client({ connectionString: f.databaseUrl });
+  await c.connect();
+  try {
+    const { rows } = await c.query("select state from pgboss.job where name = 'report-pdf' and data->>'sendId' = $1", [
+      sent.id,
     ]);
     expect(rows.map((r) => r.state)).toEqual(["completed"]);
   } finally {

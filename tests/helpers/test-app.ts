@@ -6,6 +6,7 @@ import type { AppConfig, AppContext } from "../../server/context";
 import { createSmtpMailer } from "../../server/mail/mailer";
 import { createMailQueue } from "../../server/mail/mail-queue";
 import { startFakeSmtp, type FakeSmtp } from "../../server/mail/fake-smtp";
+import { prepareReports } from "../../server/api/reports/report-pdf-job";
 import { PASSWORD } from "./fixtures";
 import { createTestDatabase, type TestDatabase } from "./test-db";
 
@@ -74,8 +75,12 @@ export async function createTestApp(config: Partial<AppConfig> = {}): Promise<Te
   };
 }
 
-/** Delivers every queued message now, so a test can read the Outbox right after sending. */
+/**
+ * Makes every sent report's PDF (the job's work, done here in-process) and delivers every queued
+ * message now, so a test can read the Outbox right after sending.
+ */
 export async function drainMail(t: { ctx: AppContext }): Promise<number> {
+  await prepareReports(t.ctx);
   return t.ctx.mailer.drain();
 }
 

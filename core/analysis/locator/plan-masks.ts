@@ -1,4 +1,5 @@
 import type { LocatorInput } from "../../contracts/locator-input";
+import type { SourceSettings } from "./settings";
 import { GeodesicSearch } from "../grid/geodesic-distance";
 import { cellsInside, nearestFreeCell, type PlanGrid } from "../grid/plan-grid";
 
@@ -83,12 +84,17 @@ export function casesRunFans(fixtures: LocatorInput["plan"]["fixtures"]): boolea
 }
 
 /**
- * Whether the weak store drift is fitted (local-drift.ts): only in still air. Where most cases run
- * their fans, their stirring (eddy diffusivity 0.1–0.3 m²/s against 0.01–0.05 in aisles, docs/locator/design-ranges.md
- * ranges) spreads the gas far more than a 0.02–0.1 m/s drift carries it, and a drifted kernel then
- * only bends to the plume's shape: on the demo store's fan-stirred lineups it moved the top suspect
- * onto the neighbouring case.
+ * The drift strengths a = u/(2K) tried per candidate cell (local-drift.ts). Where most cases run their
+ * fans, their stirring raises the eddy diffusivity (0.1–0.3 m²/s against 0.01–0.05 in aisles,
+ * docs/locator/design-ranges.md), so the same 0.02–0.1 m/s drift gives a smaller a: only the weaker
+ * strengths are tried there, with a higher bar. Stronger ones let a spot several metres upwind explain a
+ * whole lineup's plume (decision 0062).
  */
-export function fitsDrift(strengths: readonly number[], fixtures: LocatorInput["plan"]["fixtures"]): boolean {
-  return strengths.length > 0 && !casesRunFans(fixtures);
+export function driftTrials(
+  settings: Pick<SourceSettings, "driftStrengths" | "driftPenalty" | "fansDriftStrengths" | "fansDriftPenalty">,
+  fansStir: boolean,
+): { strengths: readonly number[]; penalty: number } {
+  return fansStir
+    ? { strengths: settings.fansDriftStrengths, penalty: settings.fansDriftPenalty }
+    : { strengths: settings.driftStrengths, penalty: settings.driftPenalty };
 }

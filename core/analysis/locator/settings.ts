@@ -36,6 +36,13 @@ export interface ZoneSettings {
 export interface SourceSettings {
   /** Drift strengths a = u/(2K) tried per candidate cell in still air, 1/m, and the bar a drift must clear. */
   readonly driftStrengths: readonly number[];
+  /**
+   * The same where most cases run their fans: their stirring raises K, so a is smaller; and a higher bar,
+   * since the air curtains also spread gas evenly along a lineup, which a drift can mimic from the
+   * neighbouring case (decision 0062).
+   */
+  readonly fansDriftStrengths: readonly number[];
+  readonly fansDriftPenalty: number;
   readonly driftPenalty: number;
   /** Leaks fitted at once, and spots listed at most. */
   readonly maxLeaks: number;
@@ -106,6 +113,8 @@ export const LOCATOR_SETTINGS: LocatorSettings = {
   zones: { screeningLengthM: 12, typicalAlarms: 3, marginM: 1.5 },
   sources: {
     driftStrengths: [0.4, 0.8],
+    fansDriftStrengths: [0.4],
+    fansDriftPenalty: 25,
     driftPenalty: 3,
     maxLeaks: 8,
     rankedRounds: 3,
@@ -122,7 +131,7 @@ export const LOCATOR_SETTINGS: LocatorSettings = {
     riskPointLogOdds: 3,
     maxReachM: 4,
   },
-  placement: { refineRadiusM: 1.5, refineInflation: 200, minRadiusM: 2.5, radiusScale: 3 },
+  placement: { refineRadiusM: 1.5, refineInflation: 200, minRadiusM: 3.25, radiusScale: 3 },
   report: {
     coverageGapM: 3,
     airChangesPerH: 2,

@@ -4,12 +4,13 @@ import { cellCentre } from "../grid/plan-grid";
 import { fieldStage } from "./field-stage";
 import { lagStage } from "./lag-stage";
 import { aisle, gridOf, plume, rect } from "./stage-fixtures";
-import { sourcesStage, supportingReadings } from "./sources-stage";
+import { outsideFanRooms, sourcesStage, supportingReadings } from "./sources-stage";
+import { besselK0 } from "../locator/bessel-k0";
 import { zonesStage } from "./zones-stage";
 
 const S = LOCATOR_SETTINGS;
 
-function run(ppm: number[], fans = false) {
+function run(ppm: number[], fans = false, fansDrift = S.sources.fansDriftStrengths) {
   // a case along the north wall, open to the aisle; its fans decide the kernel and the drift
   const input = aisle(ppm, { fixtures: [{ id: "case-1", kind: "open-case", polygon: rect(0, 0, 12, 1), fans }] });
   const grid = gridOf(input);
@@ -24,7 +25,7 @@ function run(ppm: number[], fans = false) {
   const sumBefore = Float64Array.from(field.fields.sumWG);
   const sources = sourcesStage(input.plan, grid, lag, zones, field, {
     kernel: S.kernel,
-    sources: S.sources,
+    sources: { ...S.sources, fansDriftStrengths: fansDrift },
     zoneMarginM: S.zones.marginM,
   });
   // the field stage's result is read, never rewritten (the drift makes new fields)
@@ -42,6 +43,41 @@ describe("sources stage", () => {
       expect(Math.abs(x - 6.5)).toBeLessThan(1.5);
       expect(y).toBeLessThan(1.3); // on the case (0-1 m) or its 0.3 m margin
     }
+  });
+
+  it("puts a leak whose plume trails downwind along a fan-stirred case at the plume's upwind end", () => {
+    // readings from the steady advection-diffusion point source with drift a = u/(2K) = 0.3 /m east,
+    // C ∝ exp(a·Δx)·K0(r·√(a² + 1/L²)), L = 1.5 m (moving point source, Carslaw & Jaeger, Conduction
+    // of Heat in Solids, from memory; checked against the equation in locator/local-drift.test.ts);
+    // the leak is on the case at x = 4 m, the taps 1.5 m away on the aisle
+    const a = 0.3,
+      L = 1.5;
+    const k = Math.sqrt(a * a + 1 / (L * L));
+    const at = (x: number) => Math.exp(a * (x - 4)) * besselK0(Math.hypot(x - 4, 1.5) * k);
+    const ppm = Array.from({ length: 12 }, (_, i) => Math.round(0.5 + (20 * at(i + 0.5)) / at(4)));
+    const { grid, sources } = run(ppm, true);
+    const [x] = cellCentre(grid, sources.found[0].cell);
+    expect(Math.abs(x - 4)).toBeLessThan(0.5);
+    // without a drift the isotropic kernel centres on the plume, downwind of the leak
+    const [still] = cellCentre(grid, run(ppm, true, []).sources.found[0].cell);
+    expect(still - 4).toBeGreaterThan(0.75);
+  });
+
+  it("fits no drift inside a walk-in whose fans run: its fans mix the room", () => {
+    const input = aisle(new Array(12).fill(1), {
+      fixtures: [
+        { id: "wi-1", kind: "walk-in", polygon: rect(0, 0, 4, 1), fans: true },
+        { id: "wi-2", kind: "walk-in", polygon: rect(6, 0, 10, 1), fans: false },
+      ],
+    });
+    const grid = gridOf(input);
+    const allowed = new Uint8Array(grid.width * grid.height).fill(1);
+    const kept = outsideFanRooms(allowed, grid, input.plan);
+    const at = (x: number, y: number) => Math.floor(y / 0.25) * grid.width + Math.floor(x / 0.25);
+    expect(kept[at(2, 0.5)]).toBe(0);
+    expect(kept[at(8, 0.5)]).toBe(1);
+    expect(kept[at(2, 3)]).toBe(1);
+    expect(allowed[at(2, 0.5)]).toBe(1); // a new mask, the allowed cells left as they were
   });
 
   it("finds nothing in level readings", () => {

@@ -3,7 +3,7 @@ import type { PlanGrid } from "../grid/plan-grid";
 import { findSources, residualOf, type FoundSource } from "../locator/greedy-sources";
 import { chooseLocalDrift } from "../locator/local-drift";
 import type { NonnegativeFit } from "../locator/nonnegative-fit";
-import { equipmentMask, fitsDrift, riskPointPrior } from "../locator/plan-masks";
+import { driftTrials, equipmentMask, fanStepScale, riskPointPrior } from "../locator/plan-masks";
 import type { ReadingFields } from "../locator/reading-fields";
 import type { KernelSettings, SourceSettings } from "../locator/settings";
 import type { ScanResult } from "../locator/source-scan";
@@ -62,6 +62,18 @@ export function supportRule(
   };
 }
 
+/**
+ * The allowed cells minus walk-ins and machine rooms whose fans run: their fans mix the room, so a
+ * drift inside says nothing and only lets a spot there explain readings outside (no drift is fitted).
+ */
+export function outsideFanRooms(allowed: Uint8Array, grid: PlanGrid, plan: LocatorInput["plan"]): Uint8Array {
+  const rooms = fanStepScale(grid, plan, 0.5);
+  if (!rooms) return allowed;
+  const out = new Uint8Array(allowed);
+  for (let c = 0; c < out.length; c++) if (rooms[c] < 1) out[c] = 0;
+  return out;
+}
+
 export function sourcesStage(
   plan: LocatorInput["plan"],
   grid: PlanGrid,
@@ -89,8 +101,10 @@ export function sourcesStage(
         : 0;
   }
   let fields = field.fields;
-  if (fitsDrift(s.driftStrengths, plan.fixtures)) {
-    // in still air each candidate source takes the weak drift that fits its readings best (local-drift.ts)
+  const drift = driftTrials(s, field.fansStir);
+  if (drift.strengths.length > 0) {
+    // each candidate source takes the weak drift that fits its readings best (local-drift.ts); where
+    // fans stir the store the drifted kernel keeps the far-field part the fields were built with
     const k = settings.kernel;
     fields = chooseLocalDrift(
       fields,
@@ -98,14 +112,14 @@ export function sourcesStage(
       grid.cellSize,
       field.weights,
       residualOf(y, zones.columns, zones.zoneOnlyQ),
-      allowed,
+      outsideFanRooms(allowed, grid, plan),
       {
         screeningLengthM: k.screeningLengthM,
-        far: null,
+        far: field.fansStir && k.farShare > 0 ? { lengthM: k.farScreeningLengthM, share: k.farShare } : null,
         nearCutoffM: k.nearCutoffM,
         truncationM: k.truncationM,
-        strengths: s.driftStrengths,
-        penalty: s.driftPenalty,
+        strengths: drift.strengths,
+        penalty: drift.penalty,
       },
     ).fields;
   }

@@ -8,7 +8,7 @@ const spot = (rank: number, x: number, fixture: string): ReportSuspect => ({
   rank,
   position: `${x} m, 6 m`,
   radius: "1 m",
-  score: 1 - rank / 10,
+  score: (1 - rank / 10).toFixed(2),
   strength: "0.9 of the strongest",
   fixture,
   riskPoint: "none near",
@@ -62,6 +62,15 @@ describe("report e-mail summary", () => {
       "Repaired leak",
       "Suspected, not yet confirmed",
       "Checked, no leak",
+    ]);
+  });
+
+  it("ends a finding's sentence once when its note already ends with a full stop", () => {
+    const findings: ReportFinding[] = [
+      { status: "confirmed", found: "3 Nov", where: "Dairy 2", note: "Traced to a brazed joint. ", x: 4, y: 6 },
+    ];
+    expect(reportMailFindings(findings, [])).toEqual([
+      "Confirmed leak: Dairy 2, found 3 Nov — Traced to a brazed joint.",
     ]);
   });
 });

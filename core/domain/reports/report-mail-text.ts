@@ -16,6 +16,25 @@ const HEADINGS: Record<string, string> = {
   dismissed: "Checked, no leak",
 };
 
+/** A finding's status as the report names it ("Confirmed leak"). */
+export function findingHeading(status: string): string {
+  return HEADINGS[status] ?? status;
+}
+
+/** Confirmed first, then repaired, verified, closed, still suspected, dismissed; in found order within each. */
+export function findingsWorstFirst<F extends { status: string }>(findings: readonly F[]): F[] {
+  const rank = (status: string) => {
+    const i = ORDER.indexOf(status);
+    return i === -1 ? ORDER.length : i;
+  };
+  return [...findings].sort((a, b) => rank(a.status) - rank(b.status));
+}
+
+/** The suspect spots whose search radius holds the finding (the spots it answers). */
+export function spotsAnswered(f: ReportFinding, suspects: readonly ReportSuspect[]): number[] {
+  return suspects.filter((s) => answers(s, f)).map((s) => s.rank);
+}
+
 function answers(s: ReportSuspect, f: ReportFinding): boolean {
   return f.x != null && f.y != null && Math.hypot(f.x - s.x, f.y - s.y) <= s.radiusM;
 }
@@ -26,15 +45,12 @@ export function reportMailFindings(
   /** Said when there is nothing to name (the report model's wording for "no spot listed"). */
   nothing = "No credible leak was found on this sweep.",
 ): string[] {
-  const rank = (status: string) => {
-    const i = ORDER.indexOf(status);
-    return i === -1 ? ORDER.length : i;
-  };
-  const sorted = [...findings].sort((a, b) => rank(a.status) - rank(b.status));
-  const lines = sorted.map((f) => {
-    const spots = suspects.filter((s) => answers(s, f)).map((s) => s.rank);
+  const lines = findingsWorstFirst(findings).map((f) => {
+    const spots = spotsAnswered(f, suspects);
     const spot = spots.length ? ` (suspect spot ${spots.join(", ")})` : "";
-    return `${HEADINGS[f.status] ?? f.status}: ${f.where}${spot}, found ${f.found}${f.note ? ` — ${f.note}` : ""}.`;
+    // A note that ends its own sentence does not get a second full stop.
+    const note = f.note.replace(/[.\s]+$/, "");
+    return `${findingHeading(f.status)}: ${f.where}${spot}, found ${f.found}${note ? ` — ${note}` : ""}.`;
   });
   // A spot with any finding inside its radius has been looked at (even one dismissed): not "still to check".
   const open = suspects.filter((s) => !findings.some((f) => answers(s, f)));

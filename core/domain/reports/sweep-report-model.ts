@@ -9,7 +9,8 @@ export interface ReportSuspect {
   /** "12.1 m, 3.3 m" or "39 ft 8 in, 10 ft 10 in" */
   position: string;
   radius: string;
-  score: number;
+  /** The locator's score to two places, in the company's number format ("0.87", "0,87"). */
+  score: string;
   strength: string;
   fixture: string;
   riskPoint: string;

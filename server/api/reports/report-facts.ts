@@ -26,7 +26,10 @@ import type { SweepReportModel } from "#core/domain/reports/sweep-report-model";
 import { findRefrigerant } from "#core/domain/refrigerants/catalogue";
 import { cautionsFor, type Caution } from "#core/domain/safety/cautions";
 import { formatLength } from "#core/domain/units/format-units";
+import { formatGrouped, formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
 import { presentAnalysis } from "#core/domain/locator-words/present-analysis";
+import { gramsPerYear } from "#core/domain/locator-words/spot-words";
+import { massPerYearWords } from "#core/domain/locator-words/mass-words";
 import type { ReaderUnits } from "./reader-units";
 import { withRefrigerants } from "../analysis/spot-refrigerants";
 import { HttpError } from "../../lib/http-error";
@@ -48,6 +51,8 @@ export interface ReportFacts {
   maxPpm: number;
   planImage: { displayKey: string | null; widthM: number; heightM: number };
   outlines: [number, number][][];
+  /** The company's number format, for what is worded outside the model (the map's legend). */
+  numbers: NumberFormat;
 }
 
 export function zonedDateTime(d: Date, timeZone: string): string {
@@ -113,14 +118,28 @@ export async function loadReportFacts(
   ]);
   const passOf = passNumberOf(passRows);
   const label = new Map(fixtureRows.map((f) => [f.id, f.label || f.kind]));
-  const len = (m: number) => formatLength(m, unit, { decimals: 1 });
+  const fmt = units.number;
+  // Metres to one decimal in the company's number format; feet and inches to the half inch.
+  const len = (m: number) => (unit === "m" ? `${formatGrouped(m, fmt, 1)} m` : formatLength(m, unit));
+  const qty = (v: number) => formatQuantity(v, fmt);
   const pos = (x: number, y: number) => `${len(x)}, ${len(y)}`;
   const summary = analysis?.result ?? null;
+  const spots = summary ? await withRefrigerants(ctx, sweep.planId, summary.candidates) : [];
+  // The report goes to people with no unit preference (store contacts): a strength reads in the
+  // reader's mass unit first and the other in brackets, as the leak-rate statement does (decision 0103).
+  const otherMass = units.mass === "lb" ? "kg" : "lb";
+  const bothMasses = (strength: string, i: number) => {
+    const s = spots[i];
+    if (!s || !Number.isFinite(s.molPerYear)) return strength;
+    const grams = gramsPerYear(s, s.refrigerant);
+    const first = massPerYearWords(grams, units.mass, fmt);
+    return strength.replace(first, `${first} (${massPerYearWords(grams, otherMass, fmt)})`);
+  };
   const words = summary
     ? presentAnalysis(
         {
           ...summary,
-          candidates: await withRefrigerants(ctx, sweep.planId, summary.candidates),
+          candidates: spots,
           params: analysis!.params,
         },
         {
@@ -168,16 +187,16 @@ export async function loadReportFacts(
       name: det?.name ?? "",
       principle: PRINCIPLES[det?.principle ?? "other"] ?? "other principle",
       calibration: det?.lastCheckedOn ? `last checked ${det.lastCheckedOn}` : "no calibration / bump check on record",
-      settings: `transport delay ${sweep.transportDelayS} s, response time constant ${sweep.timeConstantS} s, alarm at ${sweep.alarmPpm} ppm (as at the sweep)`,
+      settings: `transport delay ${qty(sweep.transportDelayS)} s, response time constant ${qty(sweep.timeConstantS)} s, alarm at ${qty(sweep.alarmPpm)} ppm (as at the sweep)`,
     },
-    background: summary ? `${summary.background.ppm.toFixed(1)} ppm (estimated from the readings)` : "—",
+    background: summary ? `${formatGrouped(summary.background.ppm, fmt, 1)} ppm (estimated from the readings)` : "—",
     delayCheck: words ? `${words.delay.headline} ${words.delay.detail}` : "—",
     suspects: (summary?.candidates ?? []).map((c, i) => ({
       rank: c.rank,
       position: pos(c.x, c.y),
       radius: len(c.radius),
-      score: c.score,
-      strength: words!.spots[i].strength,
+      score: formatGrouped(c.score, fmt, 2),
+      strength: bothMasses(words!.spots[i].strength, i),
       fixture: words!.spots[i].place,
       riskPoint: words!.spots[i].riskPoint,
       reason: words!.spots[i].reason,
@@ -211,7 +230,7 @@ export async function loadReportFacts(
         time: zonedTime(r.takenAt, tz),
         raw: pos(r.x, r.y),
         corrected: c ? pos(c.corrected.x, c.corrected.y) : "—",
-        ppm: `${r.atLeast ? "≥ " : ""}${r.ppm}`,
+        ppm: `${r.atLeast ? "≥ " : ""}${qty(r.ppm)}`,
         // the pass a reading was taken in, when the sweep had more than one
         point: `${SAMPLE_POINT_LABELS[r.samplePoint]}${passRows.length ? `, pass ${passOf(r.passId)}` : ""}`,
         note: r.note,
@@ -251,5 +270,6 @@ export async function loadReportFacts(
       heightM: plan.heightM ?? 1,
     },
     outlines,
+    numbers: fmt,
   };
 }

@@ -62,11 +62,7 @@ export function reportsRouter(ctx: AppContext): Router {
     validate(idParam, "params"),
     validate(sendReportInput),
     async (req, res) => {
-      res
-        .status(201)
-        .json(
-          await sendSweepReport(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body, await units(req)),
-        );
+      res.status(201).json(await sendSweepReport(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
     },
   );
   router.post(

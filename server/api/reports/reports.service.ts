@@ -2,52 +2,19 @@
 import { and, desc, eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import type { ReportRecipient, ReportSend, SendReportInput } from "#core/contracts/reports";
-import { memberships, membershipStores, reportSends, users } from "../../db/schema/index";
-import { createConcentrationScale } from "#core/domain/fieldmap/concentration-ramp";
+import type { MailDelivery } from "#core/contracts/mail-delivery";
+import { memberships, membershipStores, outgoingMail, reportSends, stores, users } from "../../db/schema/index";
 import { readingsCsv } from "#core/domain/reports/readings-csv";
-import { reportMailFindings } from "#core/domain/reports/report-mail-text";
 import { badRequest, conflict, notFound } from "../../lib/http-error";
 import { deliveriesFor } from "../../mail/mail-status";
-import { createReportRunner } from "../../jobs/report-runner";
-import type { ReportJob } from "../../jobs/report.worker";
-import { uploadsStorage } from "../../storage/uploads-storage";
 import type { Viewer } from "../../access/store-access";
 import { loadVisibleSweep } from "../../access/sweep-access";
-import { loadReportFacts, type ReportFacts } from "./report-facts";
+import { loadReportFacts, zonedDateTime, type ReportFacts } from "./report-facts";
 import type { ReaderUnits } from "./reader-units";
+import { buildReportPdf, reportFileBase } from "./report-pdf";
+import { queueReportPdf } from "./report-pdf-job";
 
-const slug = (s: string) =>
-  s
-    .normalize("NFKD")
-    .replace(/[^\w]+/g, "-")
-    .replace(/^-|-$/g, "")
-    .toLowerCase();
-
-function fileBase(f: ReportFacts): string {
-  const day = new Intl.DateTimeFormat("sv-SE", { timeZone: f.timeZone }).format(f.sweep.startedAt);
-  return `sweep-${slug(f.storeName)}-${day}`;
-}
-
-/** The PDF, drawn and laid out in a worker thread so the event loop keeps answering meanwhile. */
-export async function buildReportPdf(ctx: AppContext, f: ReportFacts): Promise<Buffer> {
-  let map: ReportJob["map"] = null;
-  if (f.field) {
-    const scale = createConcentrationScale({ maxPpm: f.maxPpm, log: true });
-    const planImage = f.planImage.displayKey ? await uploadsStorage(ctx).get(f.planImage.displayKey) : null;
-    map = {
-      planImage: planImage ? new Uint8Array(planImage) : null,
-      widthM: f.planImage.widthM,
-      heightM: f.planImage.heightM,
-      field: f.field,
-      maxPpm: f.maxPpm,
-      outlines: f.outlines,
-      legend: `Colour: lag-corrected concentration on a log scale from 0 (pale sand) to ${f.maxPpm} ppm (deep plum); ${scale.ticks().join(", ")} ppm. Hatched or clear: not sampled enough to say — unknown, not clean. Numbered rings: suspect spots with their search radius.`,
-    };
-  }
-  ctx.reportRunner ??= createReportRunner();
-  const bytes = await ctx.reportRunner.run({ model: f.model, map });
-  return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
-}
+const fileBase = (f: ReportFacts) => reportFileBase(f.storeName, f.timeZone, f.sweep.startedAt);
 
 export async function sweepReportPdf(
   ctx: AppContext,
@@ -93,83 +60,91 @@ export async function reportRecipients(ctx: AppContext, viewer: Viewer, sweepId:
 
 type ParsedSend = Required<Pick<SendReportInput, "storeContacts" | "addresses" | "message">>;
 
+/** A send as its sender sees it; the size is unknown until the PDF is made. */
+function sendView(
+  s: typeof reportSends.$inferSelect,
+  sentBy: string | null,
+  delivery: MailDelivery | null,
+): ReportSend {
+  return {
+    id: s.id,
+    sweepId: s.sweepId,
+    sentBy,
+    recipients: s.recipients,
+    subject: s.subject,
+    filename: s.filename,
+    bytes: s.bytes > 0 ? s.bytes : null,
+    sentAt: s.sentAt.toISOString(),
+    delivery,
+  };
+}
+
+/**
+ * Records the send and answers at once: the PDF is made by a job (report-pdf-job.ts), which then
+ * queues the e-mail. Only what is cheap is done here: the access check, the recipients, the subject.
+ */
 export async function sendSweepReport(
   ctx: AppContext,
   viewer: Viewer,
   userId: string,
   sweepId: string,
   input: ParsedSend,
-  units: ReaderUnits,
 ): Promise<ReportSend> {
-  const facts = await loadReportFacts(ctx, viewer, sweepId, units);
+  const sweep = await loadVisibleSweep(ctx, viewer, sweepId);
   const to = new Set(input.addresses.map((a) => a.toLowerCase()));
   if (input.storeContacts) {
-    const contacts = await storeContacts(ctx, facts.sweep.companyId, facts.sweep.storeId);
+    const contacts = await storeContacts(ctx, sweep.companyId, sweep.storeId);
     if (contacts.length === 0 && to.size === 0)
       throw badRequest("This store has no store contact yet: type an address instead.", {
         storeContacts: "the store has no store contact",
       });
     for (const c of contacts) to.add(c.email.toLowerCase());
   }
-  const pdf = await buildReportPdf(ctx, facts);
-  const filename = `${fileBase(facts)}.pdf`;
-  const [sender] = await ctx.db.select({ name: users.name }).from(users).where(eq(users.id, userId));
-  const subject = `Sweep report: ${facts.storeName}, ${facts.model.sweep.started}`;
-  const text = [
-    input.message,
-    `${sender?.name ?? "A colleague"} sent you the sweep report for ${facts.storeName} (${facts.model.company}).`,
-    ...reportMailFindings(facts.model.findings, facts.model.suspects, facts.model.noSpot),
-    "The report is attached as a PDF. Safety: leak checks and repairs are for certified technicians; local codes apply.",
-  ]
-    .filter(Boolean)
-    .join("\n\n");
+  const [[store], [sender]] = await Promise.all([
+    ctx.db.select({ name: stores.name, timeZone: stores.timeZone }).from(stores).where(eq(stores.id, sweep.storeId)),
+    ctx.db.select({ name: users.name }).from(users).where(eq(users.id, userId)),
+  ]);
+  const filename = `${reportFileBase(store.name, store.timeZone, sweep.startedAt)}.pdf`;
+  const subject = `Sweep report: ${store.name}, ${zonedDateTime(sweep.startedAt, store.timeZone)}`;
   const recipients = [...to];
-  // The PDF is made now and kept with the queued message: the recipients get the report as it
-  // was when it was sent, even if the sweep changes before the mail server takes it.
   const { row, mailId } = await ctx.db.transaction(async (tx) => {
     const [row] = await tx
       .insert(reportSends)
       .values({
-        companyId: facts.sweep.companyId,
+        companyId: sweep.companyId,
         sweepId,
         sentById: userId,
         recipients,
         subject,
         filename,
-        bytes: pdf.length,
-        readingsRevision: facts.sweep.readingsRevision,
+        bytes: 0,
+        readingsRevision: sweep.readingsRevision,
       })
       .returning();
+    // "preparing" until the job has made the PDF; meanwhile its body is the sender's own note.
     const mailId = await ctx.mailer.queue(
       {
         kind: "report",
         subjectId: row.id,
         to: recipients,
         subject,
-        text,
-        attachments: [{ filename, content: pdf, contentType: "application/pdf" }],
-        companyId: facts.sweep.companyId,
+        text: input.message,
+        companyId: sweep.companyId,
+        preparing: true,
       },
       tx,
     );
     return { row, mailId };
   });
-  await ctx.mailer.notify(mailId);
+  await queueReportPdf(ctx, sweep.companyId, row.id, mailId);
   const delivery = (await deliveriesFor(ctx.db, [row.id])).get(row.id) ?? null;
-  return {
-    id: row.id,
-    sweepId,
-    sentBy: sender?.name ?? null,
-    recipients,
-    subject,
-    filename,
-    bytes: row.bytes,
-    sentAt: row.sentAt.toISOString(),
-    delivery,
-  };
+  return sendView(row, sender?.name ?? null, delivery);
 }
 
-/** Puts a report send whose e-mail failed back in the queue, unchanged (same PDF, same recipients). */
+/**
+ * Puts a report send whose e-mail failed back in the queue: unchanged (same PDF, same recipients)
+ * when its PDF was made, or back to "preparing" for a new try at the PDF when making it failed.
+ */
 export async function retryReportSend(ctx: AppContext, viewer: Viewer, sweepId: string, sendId: string) {
   await loadVisibleSweep(ctx, viewer, sweepId);
   const [send] = await ctx.db
@@ -179,7 +154,19 @@ export async function retryReportSend(ctx: AppContext, viewer: Viewer, sweepId: 
   if (!send) throw notFound("That report send");
   const delivery = (await deliveriesFor(ctx.db, [send.id])).get(send.id);
   if (!delivery || delivery.state !== "failed") throw conflict("Only a send whose e-mail failed can be sent again.");
-  await ctx.mailer.retry(delivery.mailId);
+  const [mail] = await ctx.db
+    .select({ attachments: outgoingMail.attachments, companyId: outgoingMail.companyId })
+    .from(outgoingMail)
+    .where(eq(outgoingMail.id, delivery.mailId));
+  if (mail && mail.attachments.length === 0) {
+    // The PDF was never made (a report's message always carries it once made): make it again.
+    const back = await ctx.db
+      .update(outgoingMail)
+      .set({ state: "preparing", attempts: 0, lastError: null, jobId: null, lockedUntil: null })
+      .where(and(eq(outgoingMail.id, delivery.mailId), eq(outgoingMail.state, "failed")))
+      .returning({ id: outgoingMail.id });
+    if (back.length) await queueReportPdf(ctx, mail.companyId ?? viewer.companyId, send.id, delivery.mailId);
+  } else await ctx.mailer.retry(delivery.mailId);
   return (await listReportSends(ctx, viewer, sweepId)).find((s) => s.id === send.id)!;
 }
 
@@ -195,15 +182,5 @@ export async function listReportSends(ctx: AppContext, viewer: Viewer, sweepId: 
     ctx.db,
     rows.map(({ s }) => s.id),
   );
-  return rows.map(({ s, by }) => ({
-    id: s.id,
-    sweepId: s.sweepId,
-    sentBy: by,
-    recipients: s.recipients,
-    subject: s.subject,
-    filename: s.filename,
-    bytes: s.bytes,
-    sentAt: s.sentAt.toISOString(),
-    delivery: deliveries.get(s.id) ?? null,
-  }));
+  return rows.map(({ s, by }) => sendView(s, by, deliveries.get(s.id) ?? null));
 }

@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
 import Papa from "papaparse";
 import { PDFDocument } from "pdf-lib";
 import { eq } from "drizzle-orm";
@@ -6,7 +6,12 @@ import { agentFor, createTestApp, drainMail, type Agent, type TestApp } from "..
 import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 import { pdfText } from "../../../tests/helpers/pdf-text";
 import { caseLineFixtures, caseWalkReadings } from "../../../tests/helpers/sweep-walk";
-import { companies, detectors, outboxMessages, reportSends, systems, users } from "../../db/schema/index";
+import pino from "pino";
+import { companies, detectors, outboxMessages, outgoingMail, reportSends, systems, users } from "../../db/schema/index";
+import type { AppContext } from "../../context";
+import { createJobQueue, JOBS_DEAD_LETTER, type JobQueue } from "../../jobs/job-queue";
+import { startJobs } from "../../jobs/job-kinds";
+import { prepareReports, REPORT_PDF_JOB } from "./report-pdf-job";
 import type { Role } from "#core/domain/roles";
 
 let t: TestApp;
@@ -196,8 +201,14 @@ describe("e-mailing the report", () => {
     expect(res.body.recipients.sort()).toEqual(
       [co.people["store-contact"].email.toLowerCase(), "area.manager@example.org"].sort(),
     );
-    // Answered once queued; the queue's worker (drained here) hands it to SMTP.
-    expect(res.body.delivery).toMatchObject({ state: "queued", attempts: 0, error: null });
+    // Answered as soon as the send is recorded: the PDF is made afterwards by a job ("preparing"),
+    // which queues the e-mail; drained here, in-process, as the job and the mail worker would.
+    expect(res.body.delivery).toMatchObject({ state: "preparing", attempts: 0, error: null });
+    expect(res.body.bytes).toBeNull();
+    const waiting = await eng.get("/api/outbox/on-its-way");
+    expect(waiting.body.messages).toContainEqual(
+      expect.objectContaining({ kind: "report", subject: res.body.subject, state: "preparing", attempts: 0 }),
+    );
     expect(await drainMail(t)).toBe(1);
     // the fake SMTP server files what it received (Outbox table)
     const caught = await t.ctx.db.select().from(outboxMessages).where(eq(outboxMessages.subject, res.body.subject));
@@ -218,6 +229,7 @@ describe("e-mailing the report", () => {
     expect(sends.body.sends[0]).toMatchObject({
       id: res.body.id,
       sentBy: "engineer of Ćwikła & Sons Grocers",
+      bytes: caught[0].attachments[0].size,
       delivery: { state: "sent", attempts: 1, error: null },
     });
   });
@@ -266,6 +278,54 @@ describe("e-mailing the report", () => {
     expect(mail.text).not.toMatch(/still to check:\n1\. /);
   });
 
+  it("the e-mailed PDF lists findings before suspects, confirmed first, in the company's number format and the sender's units", async () => {
+    const [before] = await t.ctx.db
+      .select({ numberFormat: companies.numberFormat, lengthUnit: companies.lengthUnit, massUnit: companies.massUnit })
+      .from(companies)
+      .where(eq(companies.id, co.company.id));
+    // A company writing 1.234,5 with lb and feet; this engineer reads lengths in metres.
+    await t.ctx.db
+      .update(companies)
+      .set({ numberFormat: "1.234,5", lengthUnit: "ft-in", massUnit: "lb" })
+      .where(eq(companies.id, co.company.id));
+    await t.ctx.db.update(users).set({ lengthUnit: "m" }).where(eq(users.id, co.people.engineer.userId));
+    try {
+      const eng = await as("engineer");
+      const res = await eng.post(`/api/sweeps/${sweepId}/report/send`, { addresses: ["records@example.org"] });
+      expect(res.status, JSON.stringify(res.body)).toBe(201);
+      // The job's work, in-process: the PDF it made waits with the queued message.
+      await prepareReports(t.ctx);
+      const [mail] = await t.ctx.db.select().from(outgoingMail).where(eq(outgoingMail.subjectId, res.body.id));
+      expect(mail.state).toBe("queued");
+      const pdf = Buffer.from(mail.attachments[0].contentBase64, "base64");
+      const flat = (await pdfText(pdf)).join("\n").replace(/\s+/g, " ");
+      // Findings first, the confirmed leak before the earlier suspicion, then the suspect spots.
+      const confirmed = flat.indexOf("Confirmed leak — Drop D2, Flare");
+      const suspected = flat.indexOf("Suspected, not yet confirmed — Dairy 1–4");
+      const spots = flat.indexOf("Suspect spots");
+      expect(confirmed, flat).toBeGreaterThan(0);
+      expect(suspected).toBeGreaterThan(confirmed);
+      expect(spots).toBeGreaterThan(suspected);
+      // 1.234,5: a decimal comma (core/domain/numbers/number-format.ts), in positions, score and background.
+      expect(flat).toMatch(/1\. Dairy 1–4 — at \d+,\d m, \d+,\d m \(within \d+,\d m\), score \d,\d\d/);
+      expect(flat).toMatch(/Background \d+,\d ppm/);
+      expect(flat).not.toMatch(/score \d\.\d\d/);
+      // The company works in pounds: the strength in lb (or oz) a year first, kg (or g) in brackets, and
+      // the two agree (1 lb = 0.45359237 kg exactly, 16 oz; NIST SP 811, B.8), within their two significant figures.
+      const both = flat.match(/about ([\d.,]+) (lb|oz)\/yr \(([\d.,]+) (kg|g)\/yr\) of R-448A/);
+      expect(both, flat).not.toBeNull();
+      const read = (v: string) => Number(v.replace(/\./g, "").replace(",", "."));
+      const kg = read(both![1]) * (both![2] === "lb" ? 0.45359237 : 0.45359237 / 16);
+      const other = read(both![3]) / (both![4] === "kg" ? 1 : 1000);
+      expect(Math.abs(kg - other) / other).toBeLessThan(0.1); // each side rounded to two figures: at most 5 % off
+      expect(flat).not.toMatch(/of the strongest, about [\d.,]+ (kg|g)\/yr/);
+    } finally {
+      await t.ctx.db.update(companies).set(before).where(eq(companies.id, co.company.id));
+      await t.ctx.db.update(users).set({ lengthUnit: null }).where(eq(users.id, co.people.engineer.userId));
+      await drainMail(t);
+    }
+  });
+
   it("prints the sweep report on the company's paper setting", async () => {
     const pageSize = async () => {
       const res = await (await as("engineer")).agent
@@ -312,4 +372,124 @@ describe("e-mailing the report", () => {
     });
     expect(list.body.error.message).toContain("“dana@” is not an e-mail address");
   });
+});
+
+describe("the report's PDF as a job", () => {
+  const quiet = pino({ level: "silent" });
+  const started: JobQueue[] = [];
+  const jobQueue = () => {
+    const q = createJobQueue(t.database.db, quiet, { pollingIntervalS: 0.5 });
+    started.push(q);
+    return q;
+  };
+  /** A worker in its own context (as another process would be), leaving the app's own untouched. */
+  async function worker(overrides: Partial<AppContext> = {}, retries?: { limit: number; delayS: number }) {
+    const ctx: AppContext = { ...t.ctx, ...overrides };
+    await startJobs(ctx, jobQueue(), { digests: false, retries });
+    return ctx;
+  }
+  /** The app queues jobs but takes none (RUN_JOBS=false): whatever runs them is another worker. */
+  async function queueOnly() {
+    const q = jobQueue();
+    await startJobs(t.ctx, q, { digests: false, work: false });
+    return q;
+  }
+  async function sendState(agent: Agent, sendId: string, want: string) {
+    const by = Date.now() + 60_000;
+    for (;;) {
+      const res = await agent.get(`/api/sweeps/${sweepId}/report/sends`);
+      const send = res.body.sends.find((x: { id: string }) => x.id === sendId);
+      if (send?.delivery?.state === want || Date.now() > by) return send;
+      await new Promise((r) => setTimeout(r, 250));
+    }
+  }
+  afterEach(async () => {
+    t.ctx.jobs = undefined;
+    for (const q of started.splice(0)) await q.stop(2_000);
+  });
+
+  it("is made by a worker in another process while the app that took the send only queues it", async () => {
+    const web = await queueOnly();
+    expect(web.working).toBe(false);
+    await worker();
+    const eng = await as("engineer");
+    const res = await eng.post(`/api/sweeps/${sweepId}/report/send`, { addresses: ["dc.manager@example.org"] });
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    expect(res.body.delivery.state).toBe("preparing");
+    // The worker makes the PDF and queues the e-mail (the mail worker is not running here: drained below).
+    const queued = await sendState(eng, res.body.id, "queued");
+    // The Outbox lists it as on its way until it is sent.
+    const onItsWay = async () =>
+      (await eng.get("/api/outbox/on-its-way")).body.messages.filter((m: { to: string[] }) =>
+        m.to.includes("dc.manager@example.org"),
+      );
+    expect(await onItsWay()).toEqual([
+      expect.objectContaining({ kind: "report", subject: res.body.subject, state: "queued", error: null }),
+    ]);
+    expect(queued.delivery).toMatchObject({ state: "queued", attempts: 0, error: null });
+    expect(queued.bytes).toBeGreaterThan(10_000);
+    const { rows } = await t.ctx.pool.query("select state from pgboss.job where name = $1 and data->>'sendId' = $2", [
+      REPORT_PDF_JOB,
+      res.body.id,
+    ]);
+    expect(rows.map((r) => r.state)).toEqual(["completed"]);
+    expect(await drainMail(t)).toBe(1);
+    expect(await onItsWay()).toEqual([]);
+    const mail = (await t.ctx.db.select().from(outboxMessages)).find((m) => m.to.includes("dc.manager@example.org"))!;
+    expect(mail.attachments).toEqual([expect.objectContaining({ contentType: "application/pdf", size: queued.bytes })]);
+    expect(mail.text).toContain("sent you the sweep report for");
+  }, 120_000);
+
+  it("a PDF that cannot be made leaves the send failed with a plain reason, listed for the owner; Send again makes it", async () => {
+    await queueOnly();
+    // The CPU pool's drawing fails on every try (no retries: the last try is the first).
+    await worker(
+      { reportRunner: { run: () => Promise.reject(new Error("the drawing ran out of memory")) } as never },
+      { limit: 0, delayS: 1 },
+    );
+    const eng = await as("engineer");
+    const res = await eng.post(`/api/sweeps/${sweepId}/report/send`, { addresses: ["audit@example.org"] });
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    expect(res.body.delivery.state).toBe("preparing");
+    const failed = await sendState(eng, res.body.id, "failed");
+    expect(failed.delivery).toMatchObject({
+      state: "failed",
+      attempts: 0,
+      error: "The PDF report could not be made: the drawing ran out of memory",
+    });
+    expect(failed.bytes).toBeNull();
+    const outbox = await eng.get("/api/outbox/on-its-way");
+    expect(outbox.body.messages).toContainEqual(
+      expect.objectContaining({
+        kind: "report",
+        to: ["audit@example.org"],
+        state: "failed",
+        error: failed.delivery.error,
+      }),
+    );
+    // The dead job is in the dead-letter queue and on the owner's Failed jobs list, with the reason.
+    const dead = await t.ctx.pool.query("select data from pgboss.job where name = $1", [JOBS_DEAD_LETTER]);
+    expect(dead.rows.map((r) => r.data.sendId)).toContain(res.body.id);
+    const owner = await as("owner");
+    const list = await owner.get("/api/jobs/failed");
+    expect(list.body.jobs).toContainEqual(
+      expect.objectContaining({
+        kind: "report",
+        subjectId: res.body.id,
+        to: ["audit@example.org"],
+        reason: "The PDF report could not be made: the drawing ran out of memory",
+      }),
+    );
+    for (const q of started.splice(0)) await q.stop(2_000);
+    t.ctx.jobs = undefined;
+    // "Send again" tries the PDF again (not a mail without its attachment); drained in-process here.
+    const again = await eng.post(`/api/sweeps/${sweepId}/report/sends/${res.body.id}/retry`);
+    expect(again.status, JSON.stringify(again.body)).toBe(200);
+    expect(again.body.delivery).toMatchObject({ state: "preparing", error: null });
+    await drainMail(t);
+    const sent = await sendState(eng, res.body.id, "sent");
+    expect(sent.delivery.state).toBe("sent");
+    const mail = (await t.ctx.db.select().from(outboxMessages)).find((m) => m.to.includes("audit@example.org"))!;
+    expect(mail.attachments).toHaveLength(1);
+  }, 120_000);
 });

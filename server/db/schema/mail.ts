@@ -1,4 +1,5 @@
 import { index, integer, jsonb, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { MAIL_DELIVERY_STATES } from "#core/contracts/mail-delivery";
 
 /** Messages caught by the built-in fake SMTP server (demo and tests), listed on the Outbox screen. */
 export const outboxMessages = pgTable(
@@ -20,7 +21,8 @@ export const outboxMessages = pgTable(
 );
 
 export const MAIL_KINDS = ["invitation", "report", "digest", "password-reset", "sign-up"] as const;
-export const MAIL_STATES = ["queued", "sent", "failed"] as const;
+/** "preparing": a report whose PDF a job is still making (its `text` is then the sender's own note). */
+export const MAIL_STATES = MAIL_DELIVERY_STATES;
 
 /**
  * The durable outgoing mail queue's messages (server/mail/mail-queue.ts): written in the request's
@@ -46,7 +48,10 @@ export const outgoingMail = pgTable(
     state: text({ enum: MAIL_STATES }).notNull().default("queued"),
     attempts: integer().notNull().default(0),
     lastError: text(),
-    /** The job that delivers it; null until handed to the job queue (a sweep re-hands such rows). */
+    /**
+     * The job that delivers it; null until handed to the job queue (a sweep re-hands such rows).
+     * While "preparing", the job that makes its attachment.
+     */
     jobId: text(),
     /** A worker delivering it holds it until then, so two jobs for one message never both send. */
     lockedUntil: timestamp({ withTimezone: true }),

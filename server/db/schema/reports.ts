@@ -3,7 +3,10 @@ import { companies } from "./companies";
 import { sweeps } from "./sweeps";
 import { users } from "./users";
 
-/** Every sweep report e-mailed: who sent which report to whom and when. Never updated. */
+/**
+ * Every sweep report e-mailed: who sent which report to whom and when. Written when Send is pressed;
+ * updated once, by the job that makes its PDF (its size and the readings revision it was made from).
+ */
 export const reportSends = pgTable(
   "report_sends",
   {
@@ -18,8 +21,9 @@ export const reportSends = pgTable(
     recipients: text().array().notNull(),
     subject: text().notNull(),
     filename: text().notNull(),
+    /** The PDF's size; 0 until the job has made it (a PDF is never empty). */
     bytes: integer().notNull(),
-    /** The sweep's readings revision the report was made from. */
+    /** The sweep's readings revision the report was made from (at Send until the PDF is made). */
     readingsRevision: integer().notNull(),
     sentAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },

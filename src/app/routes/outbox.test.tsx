@@ -1,4 +1,4 @@
-import { fireEvent, screen } from "@testing-library/react";
+import { fireEvent, screen, within } from "@testing-library/react";
 import { describe, expect, it } from "vitest";
 import { renderApp } from "../../../tests/helpers/render-client";
 import { sessionFor } from "../../../tests/helpers/session-fixtures";
@@ -31,8 +31,10 @@ describe("outbox page", () => {
           ],
         },
       },
+      "GET /api/outbox/on-its-way": { body: { messages: [] } },
     });
     renderApp("/outbox");
+    expect(await screen.findByText("Nothing is waiting: everything sent has arrived below.")).toBeVisible();
     const list = await screen.findByRole("table", { name: "Messages, newest first" });
     const subjects = [...list.querySelectorAll("tbody span.font-bold")].map((el) => el.textContent);
     expect(subjects).toEqual(["Choose a new password", "You are invited to Northfield Cold Care"]);
@@ -49,6 +51,46 @@ describe("outbox page", () => {
       name: "http://127.0.0.1:5180/reset-password/abcdefghijklmnopqrstu",
     });
     expect(link.getAttribute("href")).toBe("http://127.0.0.1:5180/reset-password/abcdefghijklmnopqrstu");
+  });
+
+  it("lists the mail not delivered yet, a report's PDF being made and a failure with its reason, as a live region", async () => {
+    stubFetch({
+      "GET /api/auth/session": { body: sessionFor("engineer") },
+      "GET /api/outbox": { body: { messages: [] } },
+      "GET /api/outbox/on-its-way": {
+        body: {
+          messages: [
+            {
+              id: "1f2e3d4c-5b6a-4798-8a7b-6c5d4e3f2a1b",
+              kind: "report",
+              to: ["area.manager@example.org"],
+              subject: "Sweep report: Thistle Lane Grocers, 2 Dec 2026, 07:10",
+              state: "preparing",
+              attempts: 0,
+              error: null,
+              queuedAt: "2026-12-02T09:00:00.000Z",
+            },
+            {
+              id: "2a3b4c5d-6e7f-4a8b-9c0d-1e2f3a4b5c6d",
+              kind: "invitation",
+              to: ["lee.ambrose@example.org"],
+              subject: "You are invited to Northfield Cold Care",
+              state: "failed",
+              attempts: 4,
+              error: "The mail server could not be reached.",
+              queuedAt: "2026-12-02T08:00:00.000Z",
+            },
+          ],
+        },
+      },
+    });
+    renderApp("/outbox");
+    const region = await screen.findByTestId("on-its-way");
+    expect(region).toHaveAttribute("aria-live", "polite");
+    expect(await within(region).findByText("Making the PDF: the e-mail goes out once it is ready.")).toBeVisible();
+    expect(
+      within(region).getByText("Not delivered after 4 tries: The mail server could not be reached."),
+    ).toBeVisible();
   });
 
   it("is not there when the installation sends real mail", async () => {

@@ -6,6 +6,8 @@ import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
 import { Spinner } from "../../components/ui/spinner";
 import { useOutbox } from "../../features/outbox/api/get-outbox";
+import { useOnItsWay } from "../../features/outbox/api/get-on-its-way";
+import { OnItsWayList } from "../../features/outbox/components/on-its-way-list";
 import { OutboxList } from "../../features/outbox/components/outbox-list";
 import { OutboxMessageView } from "../../features/outbox/components/outbox-message-view";
 import { useDocumentTitle } from "../../lib/use-document-title";
@@ -19,6 +21,7 @@ export function Component() {
   const allowed = session.outboxEnabled && can(membership.role, "outbox.read");
   // Asking would only earn a 404 or 403: do not.
   const outbox = useOutbox({ enabled: allowed });
+  const onItsWay = useOnItsWay({ enabled: allowed });
 
   if (!allowed) return <NotFound />;
   const selected = messageId ? outbox.data?.find((m) => m.id === messageId) : undefined;
@@ -33,6 +36,10 @@ export function Component() {
           </Button>
         }
       />
+      {onItsWay.data ? <OnItsWayList messages={onItsWay.data} /> : null}
+      {onItsWay.isError ? (
+        <QueryError error={onItsWay.error} what="the mail not delivered yet" onRetry={() => void onItsWay.refetch()} />
+      ) : null}
       {outbox.isPending ? <Spinner label="Loading messages…" /> : null}
       {outbox.isError ? (
         <QueryError error={outbox.error} what="the Outbox" onRetry={() => void outbox.refetch()} />

@@ -5,6 +5,9 @@ export const sweepsKeys = {
   list: (storeId: string) => [...sweepsKeys.lists(), { storeId }] as const,
   /** The company's sweeps still in progress, for resuming (GET /api/sweeps/in-progress). */
   inProgress: () => [...sweepsKeys.lists(), "in-progress"] as const,
+  /** A store's last sweeps with their peaks, findings and suspects (the store page's plot). */
+  summaries: () => [...sweepsKeys.all, "summary"] as const,
+  summary: (storeId: string) => [...sweepsKeys.summaries(), storeId] as const,
   details: () => [...sweepsKeys.all, "detail"] as const,
   detail: (id: string) => [...sweepsKeys.details(), id] as const,
   analyses: (id: string) => [...sweepsKeys.detail(id), "analysis"] as const,

@@ -3,7 +3,6 @@ export const fieldmapKeys = {
   all: ["fieldmap"] as const,
   sends: (sweepId: string) => [...fieldmapKeys.all, "sweep", sweepId, "sends"] as const,
   recipients: (sweepId: string) => [...fieldmapKeys.all, "sweep", sweepId, "recipients"] as const,
-  summary: (storeId: string) => [...fieldmapKeys.all, "store", storeId, "sweep-summary"] as const,
   trends: (storeId: string, a: string | null, b: string | null) =>
     [...fieldmapKeys.all, "store", storeId, "trends", a, b] as const,
 };

@@ -81,7 +81,10 @@ export function ReportPanel({
             Send the report
           </Button>
           {send.isSuccess ? (
-            <Alert tone="success">Queued for {send.data.recipients.join(", ")}: it goes out in a moment.</Alert>
+            <Alert tone="success">
+              Sending to {send.data.recipients.join(", ")}: the PDF is being made, then the e-mail goes out. Its
+              progress shows under “Sent”.
+            </Alert>
           ) : null}
           {send.isError && !addressError ? <Alert tone="error">{send.error.message}</Alert> : null}
         </form>
@@ -89,7 +92,7 @@ export function ReportPanel({
       {sends.data?.length ? (
         <div>
           <p className="font-bold">Sent</p>
-          {/* Polite live list: "Queued" turning into "E-mail sent" (or why not) is announced. */}
+          {/* Polite live list: "Making the PDF", then "Queued", turning into "E-mail sent" (or why not) is announced. */}
           <ul className="text-sm" data-testid="report-sends" aria-live="polite">
             {sends.data.map((s) => (
               <li key={s.id}>
