@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { parseLocatorInput, type LocatorInputRaw } from "../contracts/locator-input";
 import { locate } from "./locate";
+import { LOCATOR_SETTINGS } from "./locator/settings";
 
 // A pinpoint pass fitted with the first pass. The readings come from a model unlike the locator's kernel
 // (level along a fan-stirred case in the first pass; an exponential fall-off of 0.4 per metre round the
@@ -66,7 +67,9 @@ describe("the joint fit of a first pass and a still-air pass", () => {
       const top = joint.candidates[0];
       expect(errorOf(top, leakX)).toBeLessThan(0.5);
       expect(errorOf(top, leakX)).toBeLessThan(top.radius);
-      expect(top.radius).toBeLessThan(firstRadius);
+      // as tight as the locator reports any spot (its radius floor), never wider than the first pass's
+      expect(top.radius).toBe(LOCATOR_SETTINGS.placement.minRadiusM);
+      expect(top.radius).toBeLessThanOrEqual(firstRadius);
       // the first pass's readings are still the fans-running evidence they were, and the pass is said to follow
       expect(joint.diagnostics.find((d) => d.kind === "fans-mixing")).toMatchObject({ stilledByPass: true });
       expect(first.diagnostics.find((d) => d.kind === "fans-mixing")).not.toHaveProperty("stilledByPass");
