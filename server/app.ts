@@ -22,6 +22,7 @@ import { outboxRouter } from "./api/outbox/outbox.router";
 import { storesRouter } from "./api/stores/stores.router";
 import { detectorsRouter } from "./api/detectors/detectors.router";
 import { systemsRouter } from "./api/systems/systems.router";
+import { companyRefrigerantsRouter } from "./api/refrigerants/company-refrigerants.router";
 import { plansRouter } from "./api/plans/plans.router";
 import { analysisRouter } from "./api/analysis/analysis.router";
 import { reportsRouter } from "./api/reports/reports.router";
@@ -108,6 +109,7 @@ export function createApp(ctx: AppContext): Express {
   api.use(storesRouter(ctx));
   api.use(detectorsRouter(ctx));
   api.use(systemsRouter(ctx));
+  api.use(companyRefrigerantsRouter(ctx));
   api.use(plansRouter(ctx));
   api.use(analysisRouter(ctx));
   api.use(reportsRouter(ctx));

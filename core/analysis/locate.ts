@@ -11,6 +11,7 @@ import { diagnosticsStage } from "./pipeline/diagnostics-stage";
 import { fieldStage, type OtherAir } from "./pipeline/field-stage";
 import { lagStage } from "./pipeline/lag-stage";
 import { placementStage } from "./pipeline/placement-stage";
+import { spotFitsPlume } from "./pipeline/retry-screen";
 import { round2 } from "./pipeline/numbers";
 import { sourcesStage, supportRule } from "./pipeline/sources-stage";
 import { zonesStage } from "./pipeline/zones-stage";
@@ -63,7 +64,7 @@ export function locate(
         }
       : null;
 
-  const stages = (shift: Pick<LocatorInput["instrument"], "transportDelayS" | "timeConstantS">) => {
+  const lagAndZones = (shift: Pick<LocatorInput["instrument"], "transportDelayS" | "timeConstantS">) => {
     const lag = lagStage(readings, shift, grid, o.walkSpeedMps);
     const zones = zonesStage(plan.backgroundZones, instrument.alarmPpm, grid, stepScale, lag, {
       zones: settings.zones,
@@ -71,9 +72,12 @@ export function locate(
       nearCutoffM: k.nearCutoffM,
       elevatedPpm: settings.sources.elevatedPpm,
     });
+    return { lag, zones };
+  };
+  const stages = ({ lag, zones }: ReturnType<typeof lagAndZones>) => {
     const level = other ? mixedLevel(plan, air, lag, zones.zoneOfReading, instrument.alarmPpm) : null;
     const otherAir = other && level ? { ...other, levelOnly: level.levelOnly } : other;
-    const field = fieldStage(grid, stepScale, casesRunFans(plan.fixtures), lag, zones, settings, otherAir);
+    const field = fieldStage(grid, stepScale, casesRunFans(plan.fixtures), lag, zones, settings, null, otherAir);
     const sources = sourcesStage(
       plan,
       grid,
@@ -92,8 +96,9 @@ export function locate(
   const check = delayStage(readings, instrument, grid, o.walkSpeedMps);
   const useEstimate = o.delayFromReadings && check.supported && check.estimatedS !== null;
   let usedS = useEstimate ? check.estimatedS! : check.statedS;
-  let run = stages(useEstimate ? { transportDelayS: usedS, timeConstantS: 0 } : instrument);
-  const plume = strongestUnexplained(run.lag.ppm, run.zones.zoneOfReading);
+  let run = stages(lagAndZones(useEstimate ? { transportDelayS: usedS, timeConstantS: 0 } : instrument));
+  const peak = strongestUnexplained(run.lag.ppm, run.zones.zoneOfReading);
+  const plume = peak < 0 ? 0 : run.lag.ppm[peak];
   // A plume far above the alarm that no spot fits is more likely a wrong delay than no leak: try the
   // delay the readings fit best, then a few shares of the stated one, and keep the first with which
   // a spot fits, before saying nothing was found.
@@ -104,7 +109,10 @@ export function locate(
     for (const shift of [check.estimatedS, ...RETRY_SHARES.map((f) => f * check.statedS)]) {
       if (shift === null || tried.has(shift)) continue;
       tried.add(shift);
-      const retry = stages({ transportDelayS: shift, timeConstantS: 0 });
+      const trial = lagAndZones({ transportDelayS: shift, timeConstantS: 0 });
+      // a full run only where the plume alone already fits a spot (the field's searches are the cost)
+      if (!spotFitsPlume(plan, grid, stepScale, trial.lag, trial.zones, peak, settings)) continue;
+      const retry = stages(trial);
       if (retry.placement.candidates.length > 0) {
         run = retry;
         usedS = shift;
@@ -151,9 +159,9 @@ const RETRY_SHARES = [0.5, 2, 0.75, 1.5];
 
 const round3 = (v: number) => Math.round(v * 1000) / 1000;
 
-/** The highest reading that no active benign-source zone explains. */
+/** The highest reading that no active benign-source zone explains (its index; -1 when none is above 0). */
 function strongestUnexplained(ppm: Float64Array, zoneOfReading: Int32Array): number {
-  let top = 0;
-  for (let i = 0; i < ppm.length; i++) if (zoneOfReading[i] < 0 && ppm[i] > top) top = ppm[i];
+  let top = -1;
+  for (let i = 0; i < ppm.length; i++) if (zoneOfReading[i] < 0 && ppm[i] > (top < 0 ? 0 : ppm[top])) top = i;
   return top;
 }

@@ -83,8 +83,25 @@ export const suspectSpot = z.object({
 export type SuspectSpot = z.infer<typeof suspectSpot>;
 
 /** The refrigerant a spot's strength is weighed in, looked up when the analysis is read (fixtures may be relinked). */
+/** A refrigerant the company entered, carried with the spot so every reader can word it and give its cautions. */
+const enteredRefrigerant = z.object({
+  name: text(),
+  safetyClass: text(),
+  components: z.array(z.object({ id: text(), massPercent: z.number() })).nullable(),
+  molarMass: z.number().nullable(),
+});
+
 export const spotRefrigerantSchema = z.discriminatedUnion("source", [
-  z.object({ source: z.literal("system"), refrigerantId: text(), molarMassGPerMol: z.number(), systemName: text() }),
+  z.object({
+    source: z.literal("system"),
+    refrigerantId: text(),
+    molarMassGPerMol: z.number(),
+    systemName: text(),
+    /** Set for a company's own refrigerant (docs/decisions/0073). */
+    entered: enteredRefrigerant.optional(),
+    /** Set when its molar mass is not known: the default blend's whose molar mass was used instead. */
+    molarMassAssumedFrom: text().optional(),
+  }),
   z.object({
     source: z.literal("default"),
     refrigerantId: text(),

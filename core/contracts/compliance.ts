@@ -190,6 +190,8 @@ export const todayResponse = z.object({
       storeId: z.uuid(),
       storeName: text(),
       refrigerantId: text(),
+      /** What a reader sees: the R-number, or the company's name for its own refrigerant. */
+      refrigerantName: text(),
       percent: z.number(),
       thresholdPercent: z.number(),
       on: text(),
@@ -206,6 +208,8 @@ export const todayResponse = z.object({
       storeId: z.uuid(),
       storeName: text(),
       refrigerantId: text(),
+      /** What a reader sees: the R-number, or the company's name for its own refrigerant. */
+      refrigerantName: text(),
       latestPercent: z.number().nullable(),
       latestOn: text().nullable(),
       thresholdPercent: z.number().nullable(),
@@ -251,8 +255,10 @@ export const readingsResponse = z.object({
       text: text(),
       kind: z.enum(["profile-value", "product-reading"]),
       decision: text().optional(),
-      /** The owner's acceptance of these very words under this profile, or null while none. */
+      /** The owner's acceptance of these very words under this profile, or null while none (or withdrawn). */
       accepted: z.object({ by: text(), at: text(), note: text() }).nullable(),
+      /** Every acceptance and withdrawal of these words under this profile, oldest first (never deleted). */
+      history: z.array(z.object({ kind: z.enum(["accepted", "withdrawn"]), by: text(), at: text(), note: text() })),
     }),
   ),
 });
@@ -264,3 +270,10 @@ export const acceptReadingInput = z.object({
   note: text({ error: "must be text" }).trim().max(500, "must be at most 500 characters").default(""),
 });
 export type AcceptReadingInput = z.infer<typeof acceptReadingInput>;
+
+/** POST /api/compliance/readings/withdraw: an owner withdraws the acceptance of a listed reading, saying why. */
+export const withdrawReadingInput = z.object({
+  text: text({ error: "must be text" }).trim().min(1, "is required").max(2000, "must be at most 2,000 characters"),
+  reason: text({ error: "must be text" }).trim().min(1, "is required").max(500, "must be at most 500 characters"),
+});
+export type WithdrawReadingInput = z.infer<typeof withdrawReadingInput>;

@@ -178,7 +178,10 @@ export const locatorInputSchema = z
     });
   });
 
-export type LocatorInput = z.output<typeof locatorInputSchema>;
+/** The parsed input; `passes` may be left out by callers that build an input in code (it is then none). */
+export type LocatorInput = Omit<z.output<typeof locatorInputSchema>, "passes"> & {
+  passes?: z.output<typeof locatorInputSchema>["passes"];
+};
 export type LocatorInputRaw = z.input<typeof locatorInputSchema>;
 // Named apart from the product's Fixture and Reading (core/contracts/fixtures.ts, sweeps.ts): these are the
 // command-line format's records; the JSON field names stay those of docs/locator/command-line.md.
@@ -187,7 +190,7 @@ export type LocatorFixture = LocatorInput["plan"]["fixtures"][number];
 export type LocatorRiskPoint = LocatorInput["plan"]["riskPoints"][number];
 export type LocatorBackgroundZone = LocatorInput["plan"]["backgroundZones"][number];
 export type LocatorInstrument = LocatorInput["instrument"];
-export type LocatorPass = LocatorInput["passes"][number];
+export type LocatorPass = z.output<typeof locatorInputSchema>["passes"][number];
 export type LocatorFixtureKind = (typeof locatorFixtureKinds)[number];
 export type LocatorRiskPointKind = (typeof locatorRiskPointKinds)[number];
 

@@ -28,11 +28,14 @@ export type ChargeInput = z.infer<typeof chargeInput>;
 
 const systemFields = {
   name: text({ error: "must be text" }).trim().min(1, "is required").max(120, "must be at most 120 characters"),
-  /** An R-number from the catalogue (GET /api/refrigerants); checked on the server. */
+  /**
+   * An R-number from the catalogue, or `company:<id>` for one of the company's own refrigerants
+   * (GET /api/refrigerants lists both); checked on the server.
+   */
   refrigerantId: text({ error: "must be an R-number such as R-448A" })
     .trim()
     .min(1, "is required")
-    .max(40, "must be at most 40 characters"),
+    .max(60, "must be at most 60 characters"),
   fullCharge: chargeInput,
   applianceType: applianceTypeSchema,
   automaticLeakDetection: z.boolean({ error: "must be true or false" }),
@@ -65,8 +68,13 @@ export const gwpSummary = z.object({
 });
 
 export const refrigerantSummary = z.object({
+  /** The catalogue R-number, or `company:<id>` for a refrigerant the company entered. */
   id: text(),
   name: text(),
+  /** What a reader sees: the R-number, or the company's own name for its refrigerant. */
+  designation: text(),
+  /** Entered by the company, not from the catalogue: shown as such beside every figure. */
+  enteredByCompany: z.boolean(),
   safetyClass: text(),
   safetyClassSource: text(),
   /** null when no basis in the list has a value for every component. */
@@ -161,6 +169,8 @@ export const systemRevision = z.object({
   effectiveFrom: text(),
   kind: z.enum(["first", ...REVISION_KINDS]),
   refrigerantId: text(),
+  /** What a reader sees: the R-number, or the company's name for its own refrigerant. */
+  refrigerantName: text(),
   fullChargeKg: z.number(),
   applianceType: applianceTypeSchema,
   automaticLeakDetection: z.boolean(),

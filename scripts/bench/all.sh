@@ -13,7 +13,7 @@ export BENCH_DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/postgres"
 export TEST_ADMIN_DATABASE_URL="$BENCH_DATABASE_URL"
 npx vite build --logLevel error
 
-for area in locate analysis layout walk fieldmap sign-in uploads load; do
+for area in locate analysis layout walk live fieldmap sign-in uploads load; do
   log "bench:$area"
   npm run -s "bench:$area" || log "bench:$area failed (exit $?)"
 done

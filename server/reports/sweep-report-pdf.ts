@@ -3,9 +3,8 @@
  * findings (confirmed first), the suspect list, diagnostics, the readings table and the safety cautions. Atkinson
  * Hyperlegible is embedded (subset) so accented names print. Resolves with the whole PDF.
  */
-import PDFDocument from "pdfkit";
 import type { SweepReportModel } from "#core/domain/reports/sweep-report-model";
-import { REPORT_FONTS } from "./fonts";
+import { reportDocument } from "./report-document";
 import { readableSource } from "#core/domain/compliance/citations";
 import { findingHeading, findingsWorstFirst, spotsAnswered } from "#core/domain/reports/report-mail-text";
 
@@ -138,14 +137,12 @@ function readingsTable(doc: Doc, readings: SweepReportModel["readings"]) {
 }
 
 export function buildSweepReportPdf(m: SweepReportModel): Promise<Buffer> {
-  const doc = new PDFDocument({
+  const doc = reportDocument({
     size: m.paper === "a4" ? "A4" : "LETTER",
     margin: MARGIN,
     bufferPages: true,
     info: { Title: m.title, Author: m.company, Subject: `Sweep report for ${m.store.name}`, Creator: "Plumeline" },
   });
-  doc.registerFont("regular", REPORT_FONTS.regular);
-  doc.registerFont("bold", REPORT_FONTS.bold);
   const chunks: Buffer[] = [];
   const done = new Promise<Buffer>((resolve, reject) => {
     doc.on("data", (c: Buffer) => chunks.push(c));

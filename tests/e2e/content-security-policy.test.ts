@@ -73,6 +73,14 @@ it("runs the client's screens without a CSP violation, and blocks an inline scri
     await page.waitForLoadState("networkidle");
     seen.push(...(await csp.violations()).map((v) => ({ ...v, source: `${path}: ${v.source}` })));
   }
+  // The Walk screen of a sweep starts its live-guide Web Worker from our origin (worker-src 'self').
+  await page.goto(`${server.url}/stores/${co.store.id}/walk`);
+  const worker = page.waitForEvent("worker");
+  await page.getByRole("button", { name: "Start the sweep" }).click();
+  await page.getByTestId("walk-plan").waitFor();
+  expect(new URL((await worker).url()).origin).toBe(server.url);
+  await page.waitForLoadState("networkidle");
+  seen.push(...(await csp.violations()).map((v) => ({ ...v, source: `walk: ${v.source}` })));
   expect(seen).toEqual([]);
   expect(csp.consoleReports).toEqual([]);
 

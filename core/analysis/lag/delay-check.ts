@@ -80,12 +80,17 @@ export function checkDelay(
   const raisedIdx: number[] = [];
   for (let i = 0; i < n; i++) if (raised[i]) raisedIdx.push(i);
   if (raisedIdx.length === 0) return none;
-  const memo = new Map<string, ReturnType<Route>>();
+  // Every trial shift asks for the same legs between consecutive taps: remembered by the tap objects
+  // (a string key per call cost more than the rest of the check).
+  const memo = new Map<Tap, { to: Tap; route: ReturnType<Route> }[]>();
   const cachedRoute: Route | undefined = route
     ? (a, b) => {
-        const key = `${a.x},${a.y},${b.x},${b.y}`;
-        if (!memo.has(key)) memo.set(key, route(a, b));
-        return memo.get(key)!;
+        let legs = memo.get(a);
+        if (!legs) memo.set(a, (legs = []));
+        for (const leg of legs) if (leg.to === b) return leg.route;
+        const found = route(a, b);
+        legs.push({ to: b, route: found });
+        return found;
       }
     : undefined;
   const r2 = 2 * settings.radiusM * settings.radiusM;

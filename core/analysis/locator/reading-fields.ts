@@ -42,6 +42,12 @@ export function accumulateReadingFields(
   kernel: SourceKernel,
   mapSigmaM: number,
   stepScale: Float32Array | null = null,
+  /**
+   * Only the groups holding a reading marked here are searched (the others keep no entries, as if no
+   * cell were within reach): a partial field, exact for the cells every unsearched reading is out of
+   * reach of. Null searches every group.
+   */
+  searched: Uint8Array | null = null,
 ): ReadingFields {
   const n = values.length;
   if (xs.length !== n || ys.length !== n) throw new Error("reading fields: need one position per reading");
@@ -72,6 +78,11 @@ export function accumulateReadingFields(
     groupOfReading[i] = g;
   }
   const groups = groupCellList.length;
+  let groupSearched: Uint8Array | null = null;
+  if (searched) {
+    groupSearched = new Uint8Array(groups);
+    for (let i = 0; i < n; i++) if (searched[i]) groupSearched[groupOfReading[i]] = 1;
+  }
 
   const sumWG = new Float64Array(cells);
   const sumWGG = new Float64Array(cells);
@@ -80,7 +91,7 @@ export function accumulateReadingFields(
   const nearestReading = new Float32Array(cells).fill(Infinity);
   const start = new Int32Array(groups + 1);
   const perSearch = Math.ceil((Math.PI * kernel.truncationM ** 2) / grid.cellSize ** 2);
-  let cap = Math.max(1024, groups * perSearch);
+  let cap = Math.max(1024, (groupSearched ? groupSearched.reduce((a, b) => a + b, 0) : groups) * perSearch);
   let cellArr = new Int32Array(cap);
   let kernArr = new Float32Array(cap);
   let distArr = new Float32Array(cap);
@@ -90,8 +101,12 @@ export function accumulateReadingFields(
   const mapCut = 3 * mapSigmaM;
   const inv2s2 = 1 / (2 * mapSigmaM * mapSigmaM);
   for (let g = 0; g < groups; g++) {
+    if (groupSearched && !groupSearched[g]) {
+      start[g] = used;
+      continue;
+    }
     const i = groupFirst[g];
-    const settled = search.fromPoint(xs[i], ys[i], kernel.truncationM);
+    const settled = search.reach(xs[i], ys[i], kernel.truncationM);
     const { dist } = search;
     const list = search.settled;
     if (used + settled > cap) {

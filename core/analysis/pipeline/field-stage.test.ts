@@ -52,7 +52,7 @@ describe("field stage with readings in other air (a pinpoint pass)", () => {
     const zoneOfReading = new Int32Array(12).fill(-1);
     // the first six taps with the fans running, the last six in still air
     const modelOfReading = Int32Array.from({ length: 12 }, (_, i) => (i < 6 ? 0 : 1));
-    const field = fieldStage(grid, null, true, lag, { zoneOfReading }, LOCATOR_SETTINGS, {
+    const field = fieldStage(grid, null, true, lag, { zoneOfReading }, LOCATOR_SETTINGS, null, {
       models: [{ fansStir: false, stepScale: null }],
       modelOfReading,
     });
@@ -74,7 +74,7 @@ describe("field stage with readings in other air (a pinpoint pass)", () => {
     expect(col[5]).toBeGreaterThan(col[6]); // taps 5 and 6 (x = 5.5 and 6.5) about as far, the still one lower
     // with every reading in the plan's air the result is the plain field stage's
     const plain = fieldStage(grid, null, true, lag, { zoneOfReading }, LOCATOR_SETTINGS);
-    const same = fieldStage(grid, null, true, lag, { zoneOfReading }, LOCATOR_SETTINGS, {
+    const same = fieldStage(grid, null, true, lag, { zoneOfReading }, LOCATOR_SETTINGS, null, {
       models: [{ fansStir: false, stepScale: null }],
       modelOfReading: new Int32Array(12),
     });

@@ -54,6 +54,8 @@ export function fieldStage(
   lag: LagResult,
   zones: Pick<ZonesResult, "zoneOfReading">,
   settings: { kernel: KernelSettings; noise: NoiseSettings },
+  /** Search only from these readings (a partial field, see accumulateReadingFields); null = all. */
+  searched: Uint8Array | null = null,
   other: OtherAir | null = null,
 ): FieldResult {
   const k = settings.kernel;
@@ -73,7 +75,17 @@ export function fieldStage(
   const usable = new Uint8Array(n);
   for (let i = 0; i < n; i++) usable[i] = !lag.censored[i] && zones.zoneOfReading[i] < 0 ? 1 : 0;
   const weights = readingWeights(lag.ppm, settings.noise);
-  const fields = fieldsByModel(grid, lag, weights, models, kernels, modelOfReading, other?.levelOnly, k.mapSigmaM);
+  const fields = fieldsByModel(
+    grid,
+    lag,
+    weights,
+    models,
+    kernels,
+    modelOfReading,
+    other?.levelOnly,
+    k.mapSigmaM,
+    searched,
+  );
   return {
     background: estimateBackground(lag.ppm, usable),
     weights,
@@ -95,13 +107,24 @@ function fieldsByModel(
   modelOfReading: Int32Array,
   levelOnly: Uint8Array | undefined,
   mapSigmaM: number,
+  searched: Uint8Array | null,
 ): ReadingFields {
   const n = lag.ppm.length;
   // a part per air model, and apart from it that model's level-only readings
   const partOf = (i: number) => 2 * modelOfReading[i] + (levelOnly?.[i] ? 1 : 0);
   const used = new Set(Array.from({ length: n }, (_, i) => partOf(i)));
   if (used.size === 1 && used.has(0))
-    return accumulateReadingFields(grid, lag.xs, lag.ys, lag.ppm, weights, kernels[0], mapSigmaM, models[0].stepScale);
+    return accumulateReadingFields(
+      grid,
+      lag.xs,
+      lag.ys,
+      lag.ppm,
+      weights,
+      kernels[0],
+      mapSigmaM,
+      models[0].stepScale,
+      searched,
+    );
   const parts = [...used]
     .sort((a, b) => a - b)
     .map((part) => {
@@ -117,6 +140,7 @@ function fieldsByModel(
         kernels[m],
         mapSigmaM,
         models[m].stepScale,
+        searched ? Uint8Array.from(readings, (i) => searched[i]) : null,
       );
       return { fields: part & 1 ? withoutKernel(fields) : fields, readings };
     });

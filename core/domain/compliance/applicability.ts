@@ -2,7 +2,7 @@ import { compareDates, type IsoDate } from "../dates/calendar-date";
 import { DomainInputError, requirePositive } from "../input-error";
 import { isOzoneDepleting } from "../refrigerants/catalogue";
 import { gwpOf } from "../refrigerants/gwp";
-import type { Refrigerant } from "../refrigerants/types";
+import { designationOf, type Refrigerant } from "../refrigerants/types";
 import { KG_PER_POUND } from "../units/mass";
 import {
   APPLIANCE_TYPES,
@@ -47,13 +47,13 @@ export function applicableLeakRatePart(
   for (const part of profile.leakRateParts) {
     const covers = part.covers.value;
     if (covers.ozoneDepleting !== ods) {
-      reasons.push(`${part.title}: ${refrigerant.id} is ${ods ? "" : "not "}ozone-depleting`);
+      reasons.push(`${part.title}: ${designationOf(refrigerant)} is ${ods ? "" : "not "}ozone-depleting`);
       continue;
     }
     if (!covers.ozoneDepleting) {
       const g = gwpOf(refrigerant, profile.gwpBases.value);
       if (!g.known) {
-        reasons.push(`${part.title}: GWP of ${refrigerant.id} unknown (${g.reason})`);
+        reasons.push(`${part.title}: GWP of ${designationOf(refrigerant)} unknown (${g.reason})`);
         continue;
       }
       if (!(g.value > covers.gwpAbove)) {
@@ -76,7 +76,7 @@ export function applicableLeakRatePart(
     return {
       applies: true,
       part,
-      reason: `${part.title}: ${refrigerant.id}, full charge at least ${limit.value} ${limit.unit}`,
+      reason: `${part.title}: ${designationOf(refrigerant)}, full charge at least ${limit.value} ${limit.unit}`,
     };
   }
   return {

@@ -1,7 +1,7 @@
 import { requireNonNegative } from "../input-error";
 import { roundHalfUp } from "../numbers/round-half-up";
 import { gwpOf } from "../refrigerants/gwp";
-import type { Refrigerant } from "../refrigerants/types";
+import { componentsOf, type Refrigerant } from "../refrigerants/types";
 import type { RuleProfile } from "./rule-profile";
 
 /** `t CO2e = kg × GWP / 1000` (Regulation (EU) 2024/573 Art. 3 [S:E7]). */
@@ -18,7 +18,7 @@ export function systemCo2e(profile: RuleProfile, refrigerant: Refrigerant, charg
   const g = gwpOf(refrigerant, profile.gwpBases.value);
   if (!g.known) return { known: false, reason: g.reason };
   const source =
-    refrigerant.kind === "blend"
+    componentsOf(refrigerant) !== null
       ? `[D] from components by mass (${g.terms
           .map((t) => t.basis)
           .filter((b, i, a) => a.indexOf(b) === i)

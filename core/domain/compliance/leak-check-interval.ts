@@ -1,23 +1,30 @@
 import { addMonths, type IsoDate } from "../dates/calendar-date";
 import { requireNonNegative } from "../input-error";
 import { getPure } from "../refrigerants/catalogue";
-import type { Refrigerant } from "../refrigerants/types";
+import { fgasGroupOfKinds, type FgasGroup } from "../refrigerants/fgas-kinds";
+import {
+  componentsOf,
+  designationOf,
+  type Refrigerant,
+  type RefrigerantKind,
+  type SubstanceClass,
+} from "../refrigerants/types";
 import { systemCo2e, tonnesForComparison } from "./co2e";
 import type { LeakCheckBand, RuleProfile } from "./rule-profile";
 
-/** Which EU group a refrigerant falls in for leak checks. */
-export type FgasGroup = "annex-I" | "annex-II-hfo" | "not-covered";
+/** A company refrigerant entered by its GWP falls in the group of the class the company stated. */
+const COMPANY_CLASS_GROUP: Record<SubstanceClass, FgasGroup> = {
+  hfc: "annex-I",
+  hfo: "annex-II-hfo",
+  ods: "not-covered",
+  other: "not-covered",
+};
 
-/**
- * HFCs and mixtures containing any HFC are Annex I gases (checked by CO2e); pure HFOs (and mixtures
- * of HFOs only) are Annex II section 1 (checked by kg, 2024/573). HCFCs fall under the ozone
- * regulation and natural refrigerants under neither (docs/reference/standards.md §2).
- */
+/** The EU group of a refrigerant: by its components' kinds (refrigerants/fgas-kinds.ts), or a company's stated class. */
 export function fgasGroup(r: Refrigerant): FgasGroup {
-  const kinds = r.kind === "blend" ? r.components.map((c) => getPure(c.id).kind) : [r.kind];
-  if (kinds.includes("HFC")) return "annex-I";
-  if (kinds.includes("HFO") && kinds.every((k) => k === "HFO")) return "annex-II-hfo";
-  return "not-covered";
+  const components = componentsOf(r);
+  if (r.kind === "company" && !components) return COMPANY_CLASS_GROUP[r.substanceClass];
+  return fgasGroupOfKinds(components ? components.map((c) => getPure(c.id).kind) : [r.kind as RefrigerantKind]);
 }
 
 export type LeakCheckInterval =
@@ -51,7 +58,10 @@ export function leakCheckInterval(
   if (!rules) return { required: false, reason: `${profile.name} sets no periodic leak checks` };
   const group = fgasGroup(refrigerant);
   if (group === "not-covered")
-    return { required: false, reason: `${refrigerant.id} is not a fluorinated gas covered by leak-check rules` };
+    return {
+      required: false,
+      reason: `${designationOf(refrigerant)} is not a fluorinated gas covered by leak-check rules`,
+    };
 
   let amount: number;
   let bands: LeakCheckBand[];

@@ -45,15 +45,24 @@ const sourcesOf = (node: unknown): string[] =>
 
 const MARKER = new RegExp(`\\s*\\((?:${UNCONFIRMED})\\)|;?\\s*${UNCONFIRMED}(?=\\))`, "g");
 
+/**
+ * The reading a figure's source stands on, in the words the rule-profile page lists it: the source
+ * as people read it without its "reading" marker. Null when the source is no reading (nothing [M]).
+ */
+export function readingTextOf(source: string): string | null {
+  if (!source.includes("[M]")) return null;
+  const text = readableSource(source)
+    .replace(MARKER, "")
+    .replace(/\(\s*\)/g, "")
+    .trim();
+  return text || null;
+}
+
 export function profileReadings(profile: RuleProfile): Reading[] {
   const seen = new Set<string>();
   const values: Reading[] = [];
   for (const source of sourcesOf(profile)) {
-    if (!source.includes("[M]")) continue;
-    const text = readableSource(source)
-      .replace(MARKER, "")
-      .replace(/\(\s*\)/g, "")
-      .trim();
+    const text = readingTextOf(source);
     if (!text || seen.has(text)) continue;
     seen.add(text);
     values.push({ kind: "profile-value", text });

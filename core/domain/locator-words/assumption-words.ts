@@ -1,7 +1,7 @@
 import type { LocatorAssumptions } from "../../contracts/locator-output";
 import { lengthWords } from "./length-words";
 import { formatGrouped, formatShort } from "../numbers/number-format";
-import type { SpotRefrigerant } from "./spot-refrigerant";
+import { spotRefrigerantName, type SpotRefrigerant } from "./spot-refrigerant";
 import type { WordsContext } from "./words-context";
 
 const DEFAULT_WHY: Record<Extract<SpotRefrigerant, { source: "default" }>["why"], string> = {
@@ -26,8 +26,10 @@ function refrigerantWords(spots: readonly { rank: number; refrigerant: SpotRefri
   return [...groups.values()]
     .map(({ r, ranks }) => {
       const m = `${formatGrouped(r.molarMassGPerMol, ctx.numbers, 2)} g/mol`;
+      if (r.source === "system" && r.molarMassAssumedFrom)
+        return `${spotRefrigerantName(r)} (molar mass not known, so ${r.molarMassAssumedFrom}'s ${m} assumed; the refrigerant of ${r.systemName}) for ${spotList(ranks)}`;
       return r.source === "system"
-        ? `${r.refrigerantId} (${m}, the refrigerant of ${r.systemName}) for ${spotList(ranks)}`
+        ? `${spotRefrigerantName(r)} (${m}, the refrigerant of ${r.systemName}) for ${spotList(ranks)}`
         : `${r.refrigerantId} (${m}), a default blend because ${DEFAULT_WHY[r.why]}, for ${spotList(ranks)}`;
     })
     .join("; ");

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import type { SuspectSpotWithRefrigerant } from "../../contracts/analysis";
 import type { LocatorAssumptions } from "../../contracts/locator-output";
 import { getRefrigerant } from "../refrigerants/catalogue";
+import { checkCompanyRefrigerant, refrigerantLookup, toCompanyRefrigerant } from "../refrigerants/company-refrigerant";
 import { molarMassOf } from "../refrigerants/molar-mass";
 import { delayCheckWords } from "./delay-words";
 import { diagnosticWords, noSpotWords } from "./diagnostic-words";
@@ -264,5 +265,38 @@ describe("numbers", () => {
     expect(lengthWords(0.3048, "ft-in")).toBe("1 ft");
     expect(lengthWords(1.2, "ft-in")).toBe("3 ft 11 in");
     expect(lengthWords(1.25, "m", "1.234,5")).toBe("1,3 m");
+  });
+});
+
+describe("a company's own refrigerant at a spot (docs/decisions/0073)", () => {
+  const own = toCompanyRefrigerant({
+    ...checkCompanyRefrigerant({
+      name: "House HC mix",
+      safetyClass: "A3",
+      substanceClass: "other",
+      statedGwp: { value: 3, basis: "EU-517/2014", source: "maker's data sheet" },
+    }),
+    id: "7e6d5c4b-3a29-4817-8695-a4b3c2d1e0f9",
+    retired: false,
+  });
+  const atSpot = {
+    ...spot,
+    refrigerant: spotRefrigerant(
+      CASE,
+      () => ({ systemName: "Island 2", refrigerantId: own.id }),
+      refrigerantLookup([own]),
+    ),
+  };
+
+  it("is named as the company named it, says the fallback molar mass it assumed, and keeps its cautions", () => {
+    const words = presentAnalysis(facts([atSpot]), reader("m", "kg"));
+    // No molar mass known: weighed as R-404A, 97.60 g/mol ([D] docs/reference/standards.md §3), and said so.
+    expect(words.spots[0].strength).toMatch(/of House HC mix, weighed as R-404A if well mixed$/);
+    expect(JSON.stringify(words)).toContain(
+      "House HC mix (molar mass not known, so R-404A's 97.60 g/mol assumed; the refrigerant of Island 2) for spot 1",
+    );
+    // Safety group A3 is flammable (ASHRAE 34; docs/reference/standards.md §8).
+    expect(words.spots[0].cautions[0]).toMatch(/flammable/);
+    expect(JSON.stringify(words)).not.toContain(own.id);
   });
 });

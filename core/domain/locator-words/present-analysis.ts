@@ -1,4 +1,5 @@
 import type { AnalysisDiagnostic, SuspectSpotWithRefrigerant } from "../../contracts/analysis";
+import { cautionRefrigerant } from "./spot-refrigerant";
 import type { DelayFacts, LocatorAssumptions } from "../../contracts/locator-output";
 import type { LengthPreference, MassPreference } from "../units/format-units";
 import { assumptionWords } from "./assumption-words";
@@ -7,7 +8,6 @@ import { diagnosticWords, noSpotWords } from "./diagnostic-words";
 import { DEFAULT_NUMBER_FORMAT, type NumberFormat } from "../numbers/number-format";
 import { nextCheckWords, spotReasonWords, strengthWords, whereWords } from "./spot-words";
 import type { WordsContext } from "./words-context";
-import { findRefrigerant } from "../refrigerants/catalogue";
 import { cautionsFor, type CautionId, type CautionPlace } from "../safety/cautions";
 
 /**
@@ -109,7 +109,7 @@ const PLACE: Partial<Record<string, CautionPlace>> = { "walk-in": "walk-in", "ma
  * law notices (nitrogen for pressure tests, certification, codes) are on the report's safety section; the default blend is not the system's, so it adds none.
  */
 function spotCautions(c: SuspectSpotWithRefrigerant): string[] {
-  const refrigerant = c.refrigerant.source === "system" ? findRefrigerant(c.refrigerant.refrigerantId) : undefined;
+  const refrigerant = cautionRefrigerant(c.refrigerant);
   const place = c.reason.fixture?.distanceM === 0 ? PLACE[c.reason.fixture.kind] : undefined;
   return cautionsFor({ refrigerant, place: place ?? "sales-floor" })
     .filter((k) => SPOT_WARNINGS.has(k.id))

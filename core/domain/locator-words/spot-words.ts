@@ -2,7 +2,7 @@ import type { SpotNextCheck, SpotReason, SuspectSpotFacts } from "../../contract
 import { lengthWords } from "./length-words";
 import { massPerYearWords } from "./mass-words";
 import { formatGrouped, formatShort } from "../numbers/number-format";
-import type { SpotRefrigerant } from "./spot-refrigerant";
+import { spotRefrigerantName, type SpotRefrigerant } from "./spot-refrigerant";
 import { fixtureWords, riskPointWords, type WordsContext } from "./words-context";
 
 /** Why this spot, in plain words. */
@@ -56,7 +56,13 @@ export function strengthWords(
   const share = `${formatGrouped(spot.strength, ctx.numbers, 2)} of the strongest`;
   if (!Number.isFinite(spot.molPerYear)) return share;
   const mass = massPerYearWords(gramsPerYear(spot, refrigerant), ctx.mass, ctx.numbers);
-  const which = refrigerant.source === "default" ? `${refrigerant.refrigerantId}, assumed` : refrigerant.refrigerantId;
+  const name = spotRefrigerantName(refrigerant);
+  const which =
+    refrigerant.source === "default"
+      ? `${name}, assumed`
+      : refrigerant.molarMassAssumedFrom
+        ? `${name}, weighed as ${refrigerant.molarMassAssumedFrom}`
+        : name;
   return `${share}, about ${mass} of ${which} if well mixed`;
 }
 

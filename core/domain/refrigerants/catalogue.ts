@@ -1,10 +1,10 @@
 import { DomainInputError } from "../input-error";
 import { BLENDS } from "./blends";
 import { PURE_REFRIGERANTS } from "./pure-substances";
-import type { PureRefrigerant, Refrigerant } from "./types";
+import type { CatalogueRefrigerant, PureRefrigerant, Refrigerant } from "./types";
 
 /** Every refrigerant Plumeline knows, pure substances first. */
-export const REFRIGERANTS: readonly Refrigerant[] = [...PURE_REFRIGERANTS, ...BLENDS];
+export const REFRIGERANTS: readonly CatalogueRefrigerant[] = [...PURE_REFRIGERANTS, ...BLENDS];
 
 const byKey = new Map(REFRIGERANTS.map((r) => [keyOf(r.id), r]));
 
@@ -18,12 +18,12 @@ function keyOf(text: string): string {
 }
 
 /** Looks a refrigerant up by its R-number, forgiving case, spaces and the hyphen. */
-export function findRefrigerant(id: string): Refrigerant | undefined {
+export function findRefrigerant(id: string): CatalogueRefrigerant | undefined {
   return typeof id === "string" ? byKey.get(keyOf(id)) : undefined;
 }
 
 /** Like findRefrigerant, but an unknown R-number is a field error. */
-export function getRefrigerant(id: string, field = "refrigerant"): Refrigerant {
+export function getRefrigerant(id: string, field = "refrigerant"): CatalogueRefrigerant {
   const r = findRefrigerant(id);
   if (!r) throw new DomainInputError(field, `unknown refrigerant ${JSON.stringify(id)}`);
   return r;
@@ -38,5 +38,6 @@ export function getPure(id: string): PureRefrigerant {
 
 /** True when the refrigerant is, or contains, an ozone-depleting substance (R-22 is an HCFC). */
 export function isOzoneDepleting(r: Refrigerant): boolean {
+  if (r.kind === "company") return r.substanceClass === "ods";
   return r.kind === "blend" ? r.components.some((c) => getPure(c.id).ods) : r.ods;
 }

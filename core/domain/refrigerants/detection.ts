@@ -1,6 +1,6 @@
 import { getPure } from "./catalogue";
 import { elementCounts, isHalogenated } from "./formula";
-import type { PureRefrigerant, Refrigerant } from "./types";
+import { componentsOf, designationOf, type PureRefrigerant, type Refrigerant } from "./types";
 
 /** Sensing principles as recorded on a detector. */
 export type SensingPrinciple = "heated-diode" | "infrared" | "other";
@@ -70,20 +70,25 @@ export function canDetect(
   r: Refrigerant,
   options: { band?: InfraredBand } = {},
 ): DetectionVerdict {
-  if (r.kind !== "blend") return pureVerdict(principle, r, options.band);
-  const verdicts = r.components.map((c) => ({ c, v: pureVerdict(principle, getPure(c.id), options.band) }));
+  const components = componentsOf(r);
+  const name = designationOf(r);
+  if (!components) {
+    if (r.kind !== "company") return pureVerdict(principle, r as PureRefrigerant, options.band);
+    return { answer: "unknown", reason: `${name} was entered without a composition; check the maker's list.` };
+  }
+  const verdicts = components.map((c) => ({ c, v: pureVerdict(principle, getPure(c.id), options.band) }));
   if (verdicts.some(({ v }) => v.answer === "unknown")) {
     return { answer: "unknown", reason: verdicts.find(({ v }) => v.answer === "unknown")!.v.reason };
   }
   const visible = verdicts.filter(({ v }) => v.answer === "yes");
   const share = visible.reduce((s, { c }) => s + c.massPercent, 0);
   const seen = visible.map(({ c }) => c.id).join(", ");
-  if (share === 0) return { answer: "no", reason: `This instrument sees none of ${r.id}'s components.` };
+  if (share === 0) return { answer: "no", reason: `This instrument sees none of ${name}'s components.` };
   if (share >= BLEND_VISIBLE_SHARE) {
-    return { answer: "yes", reason: `It sees ${seen}, ${share.toFixed(1).replace(/\.0$/, "")}% of ${r.id} by mass.` };
+    return { answer: "yes", reason: `It sees ${seen}, ${share.toFixed(1).replace(/\.0$/, "")}% of ${name} by mass.` };
   }
   return {
     answer: "unknown",
-    reason: `It sees only ${seen}, ${share}% of ${r.id} by mass; a leak may read far lower than the blend's concentration.`,
+    reason: `It sees only ${seen}, ${share}% of ${name} by mass; a leak may read far lower than the blend's concentration.`,
   };
 }

@@ -1,7 +1,7 @@
 import { DomainInputError } from "../input-error";
 import { roundHalfUp } from "../numbers/round-half-up";
 import { getPure } from "./catalogue";
-import type { GwpBasis, PureRefrigerant, Refrigerant } from "./types";
+import { componentsOf, type CompanyRefrigerant, type GwpBasis, type PureRefrigerant, type Refrigerant } from "./types";
 
 export interface GwpTerm {
   id: string;
@@ -39,10 +39,11 @@ function pureGwp(r: PureRefrigerant, bases: readonly GwpBasis[]) {
  */
 export function gwpOf(r: Refrigerant, bases: readonly GwpBasis[]): GwpResult {
   if (bases.length === 0) throw new DomainInputError("bases", "list at least one GWP basis");
-  const parts =
-    r.kind === "blend"
-      ? r.components.map((c) => ({ pure: getPure(c.id), massPercent: c.massPercent }))
-      : [{ pure: r, massPercent: 100 }];
+  const components = componentsOf(r);
+  if (r.kind === "company" && !components) return statedGwpOf(r, bases);
+  const parts = components
+    ? components.map((c) => ({ pure: getPure(c.id), massPercent: c.massPercent }))
+    : [{ pure: r as PureRefrigerant, massPercent: 100 }];
   const terms: GwpTerm[] = [];
   const missing: string[] = [];
   for (const { pure, massPercent } of parts) {
@@ -53,7 +54,27 @@ export function gwpOf(r: Refrigerant, bases: readonly GwpBasis[]): GwpResult {
   if (missing.length > 0) {
     return { known: false, missing, reason: `no GWP for ${missing.join(", ")} on ${bases.join(" or ")}` };
   }
-  if (r.kind !== "blend") return { known: true, value: terms[0].gwp, exact: terms[0].gwp, terms };
+  if (!components) return { known: true, value: terms[0].gwp, exact: terms[0].gwp, terms };
   const exact = terms.reduce((sum, t) => sum + t.massPercent * t.gwp, 0) / 100;
   return { known: true, value: roundHalfUp(exact), exact, terms };
+}
+
+/**
+ * A GWP the company stated counts only on a profile whose bases include the basis it was stated on:
+ * an AR5 figure is not silently used where the profile reads AR4.
+ */
+function statedGwpOf(r: CompanyRefrigerant, bases: readonly GwpBasis[]): GwpResult {
+  const stated = r.statedGwp;
+  if (!stated)
+    return { known: false, missing: [r.name], reason: `${r.name} has neither a composition nor a stated GWP` };
+  if (!bases.includes(stated.basis)) {
+    return {
+      known: false,
+      missing: [r.name],
+      reason: `the GWP of ${r.name} was stated on ${stated.basis}, which is not among ${bases.join(", ")}`,
+    };
+  }
+  const source = `entered by the company: ${stated.source}`;
+  const term = { id: r.id, massPercent: 100, gwp: stated.value, basis: stated.basis, source };
+  return { known: true, value: stated.value, exact: stated.value, terms: [term] };
 }

@@ -1,6 +1,6 @@
 import type { Caution, RefrigerantSummary } from "#core/contracts/systems";
 import { gwpOf } from "#core/domain/refrigerants/gwp";
-import type { GwpBasis, Refrigerant } from "#core/domain/refrigerants/types";
+import { componentsOf, designationOf, type GwpBasis, type Refrigerant } from "#core/domain/refrigerants/types";
 import { cautionsFor } from "#core/domain/safety/cautions";
 
 /** The GWP bases a company's profile prescribes and its stated choice in words. */
@@ -15,20 +15,27 @@ export function summarizeRefrigerant(r: Refrigerant, choice: GwpChoice): Refrige
   return {
     id: r.id,
     name: r.name,
+    designation: designationOf(r),
+    enteredByCompany: r.kind === "company",
     safetyClass: r.safetyClass.value,
     safetyClassSource: r.safetyClass.source,
     gwp: gwp.known
       ? {
           value: gwp.value,
           basis,
-          statement: choice.statement,
+          statement:
+            r.kind === "company" && r.statedGwp
+              ? `stated by the company on ${r.statedGwp.basis} (${r.statedGwp.source})`
+              : choice.statement,
           source: [...new Set(gwp.terms.map((t) => t.source))].join("; "),
         }
       : null,
     gwpNote: gwp.known
-      ? r.kind === "blend"
+      ? componentsOf(r)
         ? "mass-weighted sum of the components' GWP-100, rounded half up"
-        : null
+        : r.kind === "company"
+          ? "stated by the company"
+          : null
       : gwp.reason,
   };
 }

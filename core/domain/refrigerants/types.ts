@@ -53,4 +53,49 @@ export interface BlendRefrigerant extends RefrigerantBase {
   compositionSource: string;
 }
 
-export type Refrigerant = PureRefrigerant | BlendRefrigerant;
+/**
+ * What a company says its own refrigerant is, for the rules: it contains an ozone-depleting substance
+ * (US Part 82), an HFC (EU Annex I; US Part 84 when its GWP is above 53), HFOs only (EU Annex II
+ * section 1), or no fluorinated gas at all (hydrocarbons, natural refrigerants).
+ */
+export type SubstanceClass = "ods" | "hfc" | "hfo" | "other";
+
+/** A GWP the company states for its refrigerant, on one basis, with where it read it. */
+export interface StatedGwp {
+  value: number;
+  basis: GwpBasis;
+  source: string;
+}
+
+/**
+ * A refrigerant a company entered itself because the catalogue lacks it (docs/decisions/0073).
+ * Either `components` (catalogue refrigerants by mass %, so its GWP is computed on each profile's
+ * basis as a catalogue blend's is) or `statedGwp` is set, never both. Fixed once entered.
+ */
+export interface CompanyRefrigerant extends RefrigerantBase {
+  kind: "company";
+  substanceClass: SubstanceClass;
+  components: readonly BlendComponent[] | null;
+  statedGwp: StatedGwp | null;
+  /** g/mol; null when the company does not know it and gave no composition. */
+  molarMass: number | null;
+  /** Hidden from the system form's picker; systems that use it keep it. */
+  retired: boolean;
+}
+
+/** What the catalogue holds: the same for every company. */
+export type CatalogueRefrigerant = PureRefrigerant | BlendRefrigerant;
+
+export type Refrigerant = CatalogueRefrigerant | CompanyRefrigerant;
+
+/** Blends and company refrigerants entered by composition: both are sums over catalogue components. */
+export function componentsOf(r: Refrigerant): readonly BlendComponent[] | null {
+  if (r.kind === "blend") return r.components;
+  if (r.kind === "company") return r.components;
+  return null;
+}
+
+/** The designation a reader sees: the R-number, or the name a company gave its own refrigerant. */
+export function designationOf(r: Refrigerant): string {
+  return r.kind === "company" ? r.name : r.id;
+}

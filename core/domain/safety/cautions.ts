@@ -1,5 +1,5 @@
 import { densityRelativeToAir } from "../refrigerants/molar-mass";
-import type { Refrigerant } from "../refrigerants/types";
+import { componentsOf, designationOf, type Refrigerant } from "../refrigerants/types";
 
 /**
  * The usual cautions shown beside refrigerants, systems and findings. Wording is our own, calm and
@@ -10,6 +10,7 @@ export type CautionId =
   | "flammable"
   | "high-pressure-co2"
   | "toxic-ammonia"
+  | "higher-toxicity"
   | "co2-exposure"
   | "oxygen-displacement"
   | "pressure-test-nitrogen"
@@ -48,6 +49,14 @@ const TOXIC_AMMONIA: Caution = {
   source: "[M] safety class B2L; rises: density 0.59 × air [D] docs/reference/standards.md §4, §8",
 };
 
+/** ASHRAE 34 class B: toxicity evidence below 400 ppm; only company refrigerants other than ammonia reach this. */
+const HIGHER_TOXICITY: Caution = {
+  id: "higher-toxicity",
+  level: "warning",
+  text: "This refrigerant is in a higher-toxicity safety class (B). Wear the protection your procedure requires, ventilate before you search, and leave if the room's detector alarms.",
+  source: "ASHRAE 34 safety group letter B (higher toxicity) [M]",
+};
+
 /** CO2 exposure limits as docs/reference/standards.md §5 states them; the site's detector and codes decide. */
 const CO2_EXPOSURE: Caution = {
   id: "co2-exposure",
@@ -63,8 +72,14 @@ function oxygenCaution(r: Refrigerant | undefined, place: CautionPlace | undefin
       : place === "machine-room"
         ? "this machine room"
         : "closed rooms such as walk-ins and machine rooms";
-  const rises = r !== undefined && densityRelativeToAir(r) < 1;
-  const layer = rises ? "collects near the ceiling" : "fills from the floor up";
+  const density = r === undefined ? undefined : densityRelativeToAir(r);
+  // A company refrigerant entered without molar mass or composition: say both places, not a guess.
+  const layer =
+    density === null
+      ? "may fill from the floor up or collect near the ceiling (its density is not known)"
+      : density !== undefined && density < 1
+        ? "collects near the ceiling"
+        : "fills from the floor up";
   return {
     id: "oxygen-displacement",
     level: "warning",
@@ -100,6 +115,10 @@ export function isFlammableClass(safetyClass: string): boolean {
   return /^[AB](2L|2|3)$/.test(safetyClass);
 }
 
+function isHigherToxicityClass(safetyClass: string): boolean {
+  return safetyClass.startsWith("B");
+}
+
 /**
  * Cautions for a refrigerant and/or a place, warnings first, then practice and law. With neither
  * argument it returns the general set (oxygen displacement, nitrogen, certification, codes).
@@ -109,6 +128,7 @@ export function cautionsFor(options: { refrigerant?: Refrigerant; place?: Cautio
   const list: Caution[] = [];
   if (r && r.id === "R-717") list.push(TOXIC_AMMONIA);
   else if (r && isFlammableClass(r.safetyClass.value)) list.push(FLAMMABLE);
+  if (r && r.id !== "R-717" && isHigherToxicityClass(r.safetyClass.value)) list.push(HIGHER_TOXICITY);
   if (r && isMostlyCo2(r)) list.push(HIGH_PRESSURE_CO2, CO2_EXPOSURE);
   if (place !== "sales-floor") list.push(oxygenCaution(r, place));
   list.push(PRESSURE_TEST, CERTIFIED, CODES);
@@ -116,7 +136,7 @@ export function cautionsFor(options: { refrigerant?: Refrigerant; place?: Cautio
 }
 
 function isMostlyCo2(r: Refrigerant): boolean {
-  return r.id === "R-744" || (r.kind === "blend" && r.components.some((c) => c.id === "R-744" && c.massPercent >= 50));
+  return r.id === "R-744" || (componentsOf(r)?.some((c) => c.id === "R-744" && c.massPercent >= 50) ?? false);
 }
 
 /**
@@ -133,7 +153,10 @@ export function roomCautions(place: CautionPlace, refrigerants: readonly Refrige
   if (distinct.some(isMostlyCo2)) list.push(CO2_EXPOSURE, HIGH_PRESSURE_CO2);
   const flammable = distinct.filter((r) => r.id !== "R-717" && isFlammableClass(r.safetyClass.value));
   if (flammable.length)
-    list.push({ ...FLAMMABLE, text: `${flammable.map((r) => r.id).join(", ")}: ${FLAMMABLE.text}` });
+    list.push({ ...FLAMMABLE, text: `${flammable.map(designationOf).join(", ")}: ${FLAMMABLE.text}` });
+  const toxic = distinct.filter((r) => r.id !== "R-717" && isHigherToxicityClass(r.safetyClass.value));
+  if (toxic.length)
+    list.push({ ...HIGHER_TOXICITY, text: `${toxic.map(designationOf).join(", ")}: ${HIGHER_TOXICITY.text}` });
   list.push(roomOxygenCaution(place, distinct));
   list.push(CODES);
   return list;
@@ -142,11 +165,15 @@ export function roomCautions(place: CautionPlace, refrigerants: readonly Refrige
 function roomOxygenCaution(place: CautionPlace, refrigerants: readonly Refrigerant[]): Caution {
   if (refrigerants.length === 0) return oxygenCaution(undefined, place);
   const where = place === "machine-room" ? "this machine room" : "this walk-in";
-  const rising = refrigerants.filter((r) => densityRelativeToAir(r) < 1).map((r) => r.id);
-  const sinking = refrigerants.filter((r) => densityRelativeToAir(r) >= 1).map((r) => r.id);
+  const densityOf = (r: Refrigerant) => densityRelativeToAir(r);
+  const named = (list: readonly Refrigerant[]) => list.map(designationOf).join(", ");
+  const rising = refrigerants.filter((r) => (densityOf(r) ?? 1) < 1);
+  const sinking = refrigerants.filter((r) => (densityOf(r) ?? 0) >= 1);
+  const unknown = refrigerants.filter((r) => densityOf(r) === null);
   const layers = [
-    sinking.length ? `${sinking.join(", ")} ${sinking.length > 1 ? "fill" : "fills"} it from the floor up` : "",
-    rising.length ? `${rising.join(", ")} ${rising.length > 1 ? "collect" : "collects"} near the ceiling` : "",
+    sinking.length ? `${named(sinking)} ${sinking.length > 1 ? "fill" : "fills"} it from the floor up` : "",
+    rising.length ? `${named(rising)} ${rising.length > 1 ? "collect" : "collects"} near the ceiling` : "",
+    unknown.length ? `${named(unknown)} may fill it from the floor up or collect near the ceiling` : "",
   ].filter(Boolean);
   const base = oxygenCaution(undefined, place);
   return {

@@ -1,4 +1,5 @@
 import { findRefrigerant } from "../refrigerants/catalogue";
+import { designationOf, type Refrigerant } from "../refrigerants/types";
 import { canDetect, type SensingPrinciple } from "../refrigerants/detection";
 import type { SweepWarning } from "../../contracts/sweeps";
 
@@ -21,7 +22,11 @@ export interface WarningSystem {
  * reads nothing and proves nothing; docs/reference/standards.md via canDetect). Pure, so the Walk screen can
  * show the same warnings when a sweep starts offline.
  */
-export function startWarnings(detector: WarningDetector, systems: readonly WarningSystem[]): SweepWarning[] {
+export function startWarnings(
+  detector: WarningDetector,
+  systems: readonly WarningSystem[],
+  lookup: (id: string) => Refrigerant | undefined = findRefrigerant,
+): SweepWarning[] {
   const out: SweepWarning[] = [];
   if (detector.overdue) {
     out.push({
@@ -32,20 +37,21 @@ export function startWarnings(detector: WarningDetector, systems: readonly Warni
     });
   }
   for (const s of systems) {
-    const r = findRefrigerant(s.refrigerantId);
+    const r = lookup(s.refrigerantId);
     if (!r) continue;
+    const named = designationOf(r);
     const v = canDetect(detector.principle, r);
     if (v.answer === "no") {
       out.push({
         code: "detector-blind",
         systemId: s.id,
-        message: `${detector.name} cannot see ${r.id} on ${s.name}: ${v.reason} Use a detector made for this refrigerant.`,
+        message: `${detector.name} cannot see ${named} on ${s.name}: ${v.reason} Use a detector made for this refrigerant.`,
       });
     } else if (v.answer === "unknown") {
       out.push({
         code: "detector-unsure",
         systemId: s.id,
-        message: `${detector.name} may not see ${r.id} on ${s.name}: ${v.reason}`,
+        message: `${detector.name} may not see ${named} on ${s.name}: ${v.reason}`,
       });
     }
   }

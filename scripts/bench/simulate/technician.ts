@@ -71,8 +71,11 @@ export class Technician {
   private x: number;
   private y: number;
   private t: number;
+  private stops: { s: number; t: number }[] = [];
   /** Metres walked since the sweep's clock started (the guidance benchmark counts them). */
   walkedM = 0;
+  /** Arc length and clock time of each stop of the last `sweepUntilAlarm` (where the technician stood when). */
+  lastStops: { s: number; t: number }[] = [];
 
   constructor(
     private readonly settings: TechnicianSettings,
@@ -150,6 +153,7 @@ export class Technician {
     while (dir * (b - s) >= -1e-9) {
       for (const w of between(pts, here, s)) this.moveTo(w, speed);
       here = s;
+      this.stops.push({ s, t: this.t });
       taps.push({ s, ppm: this.tap() });
       if (stop?.(taps[taps.length - 1].ppm)) return taps;
       this.dwell(this.random.uniform(dwellS[0], dwellS[1]));
@@ -184,6 +188,7 @@ export class Technician {
     const total = length(leg.points);
     if (fromS > total) return null;
     this.walkTo(map, pointAt(leg.points, fromS));
+    this.stops = [];
     const taps = this.sweepSpan(
       leg.points,
       fromS,
@@ -193,16 +198,20 @@ export class Technician {
       st.speed,
       (ppm) => ppm >= st.alarmPpm,
     );
+    this.lastStops = this.stops;
     const last = taps[taps.length - 1];
     return last && last.ppm >= st.alarmPpm ? last.s : null;
   }
 
-  /** Walks to `p` (around bodies), waits as on a re-check and reads the display there. */
-  probeAt(map: WalkMap, p: Point): SimReading {
+  /**
+   * Walks to `p` (around bodies), waits and reads the display there: `holdS` seconds when given (long
+   * enough for the air drawn in at `p` to reach the display), else as long as on a sweep's re-check.
+   */
+  probeAt(map: WalkMap, p: Point, holdS?: number): SimReading {
     const st = this.settings;
     this.walkTo(map, p);
     this.moveTo(p, st.speed);
-    this.dwell(this.random.uniform(st.recheckDwellS[0], st.recheckDwellS[1]));
+    this.dwell(holdS ?? this.random.uniform(st.recheckDwellS[0], st.recheckDwellS[1]));
     this.tap();
     return this.readings[this.readings.length - 1];
   }

@@ -8,6 +8,7 @@ import {
   chronicReportInput,
   leakCheckInput,
   acceptReadingInput,
+  withdrawReadingInput,
 } from "#core/contracts/compliance";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
@@ -19,7 +20,7 @@ import {
   getSystemRecords,
   voidCharge,
 } from "./records.service";
-import { acceptReading, listReadings } from "./reading-acceptances";
+import { acceptReading, listReadings, withdrawReading } from "./reading-acceptances";
 
 const idParam = z.object({ id: z.uuid("must be a valid id") });
 
@@ -97,6 +98,16 @@ export function complianceRouter(ctx: AppContext): Router {
     validate(acceptReadingInput),
     async (req, res) => {
       res.json(await acceptReading(ctx, member(req), req.auth!.user.id, req.body));
+    },
+  );
+
+  // The owner withdraws an acceptance, saying why; both stay in the history and on the audit trail.
+  router.post(
+    "/compliance/readings/withdraw",
+    requireMember("settings.manage"),
+    validate(withdrawReadingInput),
+    async (req, res) => {
+      res.json(await withdrawReading(ctx, member(req), req.auth!.user.id, req.body));
     },
   );
 

@@ -1,6 +1,6 @@
 import { and, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { complianceAudit } from "../../db/schema/index";
+import { complianceAudit, readingAcceptances } from "../../db/schema/index";
 import { createTestApp, type TestApp, signIn } from "../../../tests/helpers/test-app";
 import { seedCompany } from "../../../tests/helpers/fixtures";
 import { pdfText } from "../../../tests/helpers/pdf-text";
@@ -100,5 +100,81 @@ describe("accepting a reading (docs/decisions/0048-accepting-readings.md)", () =
     const { readings } = (await owner.get("/api/compliance/readings")).body;
     const engineer = await signIn(t.app, co.people.engineer);
     expect((await engineer.post("/api/compliance/readings/accept", { text: readings[0].text })).status).toBe(403);
+  });
+});
+
+describe("withdrawing an acceptance (docs/decisions/0048-accepting-readings.md)", () => {
+  it("keeps the acceptance and the withdrawal in the history, audits both, and lets the owner accept again", async () => {
+    const co2 = await seedCompany(t.ctx, "Alderbrook Pantry");
+    const owner = await signIn(t.app, co2.people.owner);
+    const { readings } = (await owner.get("/api/compliance/readings")).body;
+    // The same-leak grouping is the product's reading of "multiple additions for the same leak count
+    // together", [M] in docs/reference/standards.md §1 (docs/decisions/0042-same-leak-additions.md).
+    const same = readings.find((r: { text: string }) => /for the same leak/.test(r.text));
+    await owner.post("/api/compliance/readings/accept", { text: same.text, note: "" });
+
+    const res = await owner.post("/api/compliance/readings/withdraw", {
+      text: same.text,
+      reason: "Counsel reads visits on different days as separate leaks",
+    });
+    expect(res.status).toBe(200);
+    const after = res.body.readings.find((r: { text: string }) => r.text === same.text);
+    expect(after.accepted).toBeNull();
+    expect(after.history.map((h: { kind: string }) => h.kind)).toEqual(["accepted", "withdrawn"]);
+    expect(after.history[1]).toMatchObject({
+      by: "owner of Alderbrook Pantry",
+      note: "Counsel reads visits on different days as separate leaks",
+    });
+
+    // Nothing to withdraw now: a field error, and nothing written.
+    const twice = await owner.post("/api/compliance/readings/withdraw", { text: same.text, reason: "again" });
+    expect(twice.status).toBe(400);
+    expect(twice.body.error.fields.text).toMatch(/is not accepted now/);
+
+    // Accepted again: a new acceptance; the history keeps all three.
+    const again = await owner.post("/api/compliance/readings/accept", { text: same.text, note: "Reconsidered" });
+    const last = again.body.readings.find((r: { text: string }) => r.text === same.text);
+    expect(last.accepted).toMatchObject({ note: "Reconsidered" });
+    expect(last.history.map((h: { kind: string }) => h.kind)).toEqual(["accepted", "withdrawn", "accepted"]);
+
+    const audit = await t.ctx.db
+      .select()
+      .from(complianceAudit)
+      .where(eq(complianceAudit.companyId, co2.company.id))
+      .orderBy(complianceAudit.at);
+    expect(audit.map((a) => a.action)).toEqual(["reading-accepted", "reading-withdrawn", "reading-accepted"]);
+    expect(audit[1].summary).toContain("Counsel reads visits on different days as separate leaks");
+    const rows = await t.ctx.db
+      .select()
+      .from(readingAcceptances)
+      .where(eq(readingAcceptances.companyId, co2.company.id));
+    expect(rows).toHaveLength(2);
+  });
+
+  it("needs a reason and a listed reading, is the owner's alone, and never reaches another company", async () => {
+    const co3 = await seedCompany(t.ctx, "Quillon Greens");
+    const owner = await signIn(t.app, co3.people.owner);
+    const { readings } = (await owner.get("/api/compliance/readings")).body;
+    await owner.post("/api/compliance/readings/accept", { text: readings[0].text });
+    const noReason = await owner.post("/api/compliance/readings/withdraw", { text: readings[0].text, reason: " " });
+    expect(noReason.status).toBe(400);
+    expect(noReason.body.error.fields.reason).toBe("is required");
+    const unlisted = await owner.post("/api/compliance/readings/withdraw", {
+      text: "Leaks may be ignored.",
+      reason: "x",
+    });
+    expect(unlisted.body.error.fields.text).toMatch(/is not a reading of US federal/);
+    for (const role of ["engineer", "lead-tech", "technician"] as const) {
+      const a = await signIn(t.app, co3.people[role]);
+      const r = await a.post("/api/compliance/readings/withdraw", { text: readings[0].text, reason: "no" });
+      expect(r.status, role).toBe(403);
+    }
+    // Another company's owner withdrawing the same words touches only their own (nothing accepted there).
+    const stranger = await signIn(t.app, (await seedCompany(t.ctx, "Tarnfield Foods")).people.owner);
+    const theirs = await stranger.post("/api/compliance/readings/withdraw", { text: readings[0].text, reason: "no" });
+    expect(theirs.status).toBe(400);
+    const mine = (await owner.get("/api/compliance/readings")).body.readings[0];
+    expect(mine.accepted).not.toBeNull();
+    expect(mine.history).toHaveLength(1);
   });
 });

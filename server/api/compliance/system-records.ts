@@ -16,7 +16,8 @@ import type { ChargeAddition } from "#core/domain/compliance/leak-rate";
 import type { LeakRateMethod, RuleProfile } from "#core/domain/compliance/rule-profile";
 import { systemStatus, type SystemStatus } from "#core/domain/compliance/system-status";
 import { localDateOf } from "#core/domain/dates/time-zone";
-import { getRefrigerant } from "#core/domain/refrigerants/catalogue";
+import { lookupFor, resolveStored } from "../refrigerants/company-refrigerant-lookup";
+import { designationOf } from "#core/domain/refrigerants/types";
 import { revisionsOf } from "../systems/revision-rows";
 
 export type SystemRow = typeof systems.$inferSelect;
@@ -54,6 +55,8 @@ export interface SystemWithStatus {
   store: StoreRow;
   today: string;
   status: SystemStatus;
+  /** The designation a reader sees: the R-number, or the company's name for its own refrigerant. */
+  refrigerantName: string;
 }
 
 /**
@@ -68,7 +71,7 @@ export async function statusesOf(
 ): Promise<SystemWithStatus[]> {
   if (rows.length === 0) return [];
   const ids = rows.map((r) => r.system.id);
-  const [adds, events, checks, filed, revisions] = await Promise.all([
+  const [adds, events, checks, filed, revisions, lookup] = await Promise.all([
     ctx.db
       .select()
       .from(chargeAdditions)
@@ -93,6 +96,8 @@ export async function statusesOf(
       .from(chronicLeakerReports)
       .where(inArray(chronicLeakerReports.systemId, ids)),
     revisionsOf(ctx, ids),
+    // The company's own refrigerants count as the catalogue's do (docs/decisions/0073).
+    lookupFor(ctx, rows[0].system.companyId),
   ]);
   return rows.map(({ system, store }) => {
     const today = localDateOf(now, store.timeZone);
@@ -123,7 +128,7 @@ export async function statusesOf(
       rules.profile,
       rules.method,
       {
-        refrigerant: getRefrigerant(system.refrigerantId),
+        refrigerant: resolveStored(lookup, system.refrigerantId),
         fullChargeKg: system.fullChargeKg,
         applianceType: system.applianceType,
         automaticLeakDetection: system.automaticLeakDetection,
@@ -134,7 +139,7 @@ export async function statusesOf(
           .map((r) => ({
             effectiveFrom: r.effectiveFrom,
             kind: r.kind,
-            refrigerant: getRefrigerant(r.refrigerantId),
+            refrigerant: resolveStored(lookup, r.refrigerantId),
             fullChargeKg: r.fullChargeKg,
             applianceType: r.applianceType,
             automaticLeakDetection: r.automaticLeakDetection,
@@ -156,7 +161,13 @@ export async function statusesOf(
       },
       today,
     );
-    return { system, store, today, status };
+    return {
+      system,
+      store,
+      today,
+      status,
+      refrigerantName: designationOf(resolveStored(lookup, system.refrigerantId)),
+    };
   });
 }
 

@@ -9,6 +9,8 @@ import {
   leakChecks,
   memberships,
   readingAcceptances,
+  readingWithdrawals,
+  companyRefrigerants,
   readingAudit,
   readings,
   stores,
@@ -52,6 +54,8 @@ export async function archiveTables(ctx: AppContext, companyId: string): Promise
     readingRows,
     editRows,
     acceptanceRows,
+    withdrawalRows,
+    ownRefrigerantRows,
   ] = await Promise.all([
     db.select().from(stores).where(eq(stores.companyId, companyId)).orderBy(asc(stores.createdAt), asc(stores.id)),
     db
@@ -108,6 +112,16 @@ export async function archiveTables(ctx: AppContext, companyId: string): Promise
       .from(readingAcceptances)
       .where(eq(readingAcceptances.companyId, companyId))
       .orderBy(asc(readingAcceptances.at), asc(readingAcceptances.id)),
+    db
+      .select()
+      .from(readingWithdrawals)
+      .where(eq(readingWithdrawals.companyId, companyId))
+      .orderBy(asc(readingWithdrawals.at), asc(readingWithdrawals.id)),
+    db
+      .select()
+      .from(companyRefrigerants)
+      .where(eq(companyRefrigerants.companyId, companyId))
+      .orderBy(asc(companyRefrigerants.enteredAt), asc(companyRefrigerants.id)),
   ]);
   return [
     { file: "stores.csv", columns: cols(stores), rows: storeRows },
@@ -122,6 +136,9 @@ export async function archiveTables(ctx: AppContext, companyId: string): Promise
     { file: "chronic-leaker-filings.csv", columns: cols(chronicLeakerReports), rows: filingRows },
     { file: "compliance-audit.csv", columns: cols(complianceAudit), rows: auditRows },
     { file: "rule-readings-accepted.csv", columns: cols(readingAcceptances), rows: acceptanceRows },
+    { file: "rule-readings-withdrawn.csv", columns: cols(readingWithdrawals), rows: withdrawalRows },
+    // A system's refrigerant_id "company:<id>" names a row here (entered by the company, decision 0073).
+    { file: "company-refrigerants.csv", columns: cols(companyRefrigerants), rows: ownRefrigerantRows },
     { file: "sweeps.csv", columns: cols(sweeps), rows: sweepRows },
     { file: "readings.csv", columns: cols(readings), rows: readingRows },
     { file: "reading-edits.csv", columns: cols(readingAudit), rows: editRows },

@@ -1,4 +1,4 @@
-import PDFDocument from "pdfkit";
+import { refrigerantCell } from "./records-csv";
 import type { SystemRecordsView } from "#core/contracts/compliance";
 import type { FindingDetail } from "#core/contracts/finding-actions";
 import { FINDING_EVENT_LABELS } from "#core/contracts/findings";
@@ -10,13 +10,13 @@ import type { Paper } from "#core/domain/reports/paper";
 import { kgToPounds } from "#core/domain/units/mass";
 import type { MassPreference } from "#core/domain/units/format-units";
 import { drawTable, type PdfColumn } from "../../reports/pdf-table";
-import { statementFonts } from "./fonts";
+import { reportDocument } from "../../reports/report-document";
 
 const MARGIN = 48;
 const INK = "#1f2430";
 const MUTED = "#5b6270";
 const RULE = "#c9ccd3";
-const TABLE = { font: "body", boldFont: "bold", size: 8.5, ink: INK, muted: MUTED, rule: RULE };
+const TABLE = { font: "regular", boldFont: "bold", size: 8.5, ink: INK, muted: MUTED, rule: RULE };
 
 type Doc = PDFKit.PDFDocument;
 
@@ -41,12 +41,12 @@ function heading(doc: Doc, text: string) {
   // Keep a heading with at least a few lines of what follows it.
   if (doc.y > doc.page.height - doc.page.margins.bottom - 70) doc.addPage();
   doc.moveDown(0.7).font("bold").fontSize(12).fillColor(INK).text(text, MARGIN);
-  doc.moveDown(0.25).font("body").fontSize(9.5);
+  doc.moveDown(0.25).font("regular").fontSize(9.5);
 }
 
 function para(doc: Doc, text: string, colour = INK, size = 9.5) {
   doc
-    .font("body")
+    .font("regular")
     .fontSize(size)
     .fillColor(colour)
     .text(text, MARGIN, doc.y, { width: doc.page.width - 2 * MARGIN });
@@ -62,7 +62,7 @@ function systemSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => str
   const gwp = r.system.refrigerant.gwp;
   para(
     doc,
-    `Refrigerant ${r.system.refrigerantId} (safety class ${r.system.refrigerant.safetyClass}${gwp ? `, GWP ${gwp.value} on ${gwp.basis}` : ""}); full charge ${mass(r.system.fullChargeKg)}.`,
+    `Refrigerant ${refrigerantCell(r.system.refrigerant)} (safety class ${r.system.refrigerant.safetyClass}${gwp ? `, GWP ${gwp.value} on ${gwp.basis}` : ""}); full charge ${mass(r.system.fullChargeKg)}.`,
   );
   para(
     doc,
@@ -312,7 +312,7 @@ function footers(doc: Doc, r: SystemRecordsView, generated: string) {
     doc.page.margins.bottom = 0;
     const y = doc.page.height - MARGIN + 16;
     const page = `page ${i + 1} of ${range.count}`;
-    doc.font("body").fontSize(8).fillColor(MUTED);
+    doc.font("regular").fontSize(8).fillColor(MUTED);
     const pageWidth = doc.widthOfString(page);
     doc.text(page, MARGIN + width - pageWidth, y, { lineBreak: false });
     const title = fitted(doc, `${r.system.name} · ${r.store.name} · ${generated}`, width - pageWidth - 16);
@@ -330,15 +330,12 @@ export function leakRateStatementPdf(
   findingList: FindingDetail[],
   options: StatementOptions,
 ): Promise<Buffer> {
-  const fonts = statementFonts();
-  const doc = new PDFDocument({
+  const doc = reportDocument({
     size: options.paper === "a4" ? "A4" : "LETTER",
     margin: MARGIN,
     bufferPages: true,
     info: { Title: `Leak-rate statement – ${r.system.name}`, Creator: "Plumeline" },
   });
-  doc.registerFont("body", fonts.regular);
-  doc.registerFont("bold", fonts.bold);
   const chunks: Buffer[] = [];
   doc.on("data", (c: Buffer) => chunks.push(c));
   const done = new Promise<Buffer>((resolve, reject) => {

@@ -10,6 +10,7 @@ import { kgToPounds } from "#core/domain/units/mass";
  * written with a leading ' so a spreadsheet shows it as text (OWASP CSV injection guidance).
  */
 export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[], massFirst: "kg" | "lb" = "kg"): string {
+  const refrigerant = refrigerantCell(r.system.refrigerant);
   const rateAt = new Map(r.leakRates.flatMap((p) => p.additionIds.map((id) => [id, p] as const)));
   const rows: Record<string, string | number>[] = [];
   for (const a of r.additions) {
@@ -18,7 +19,7 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[], m
       record: "charge added",
       date: a.addedOn,
       system: r.system.name,
-      refrigerant: r.system.refrigerantId,
+      refrigerant,
       amount_kg: Number(a.amountKg.toFixed(4)),
       amount_lb: Number(kgToPounds(a.amountKg).toFixed(3)),
       entered: `${a.enteredValue} ${a.enteredUnit}`,
@@ -46,7 +47,7 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[], m
         record: `finding ${e.kind}${e.result ? ` (${e.result})` : ""}`,
         date: e.on,
         system: r.system.name,
-        refrigerant: r.system.refrigerantId,
+        refrigerant,
         amount_kg: "",
         amount_lb: "",
         entered: "",
@@ -75,7 +76,7 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[], m
       record: `chronic-leaker report for ${y.year} filed`,
       date: y.filed.on,
       system: r.system.name,
-      refrigerant: r.system.refrigerantId,
+      refrigerant,
       amount_kg: Number(y.addedKg.toFixed(4)),
       amount_lb: Number(kgToPounds(y.addedKg).toFixed(3)),
       entered: "",
@@ -114,4 +115,9 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[], m
       : keys;
   // Text cells escaped against formula injection (core/domain/reports/csv-cells.ts); numbers stay numbers.
   return withBasis.length > 0 ? unparseCsv({ fields, data: withBasis }) : unparseCsv(withBasis);
+}
+
+/** The designation, and for a company's own refrigerant that the company entered it (decision 0073). */
+export function refrigerantCell(r: { designation: string; enteredByCompany: boolean }): string {
+  return r.enteredByCompany ? `${r.designation} (entered by the company)` : r.designation;
 }

@@ -4,7 +4,7 @@ import type { FindingDetail } from "#core/contracts/finding-actions";
 import { findingEvents, findingPhotos, findings, fixtures, systems, users } from "../../db/schema/index";
 import { dueStatus } from "#core/domain/compliance/deadlines";
 import { nextActions, type LifecycleEvent } from "#core/domain/findings/lifecycle";
-import { findRefrigerant } from "#core/domain/refrigerants/catalogue";
+import { lookupFor } from "../refrigerants/company-refrigerant-lookup";
 import { cautionsFor, type CautionPlace } from "#core/domain/safety/cautions";
 import type { StoreRow, SystemWithStatus } from "../compliance/system-records";
 
@@ -23,6 +23,7 @@ export async function toFindingDetails(
 ): Promise<FindingDetail[]> {
   if (rows.length === 0) return [];
   const ids = rows.map((r) => r.id);
+  const lookup = await lookupFor(ctx, rows[0].companyId);
   const [events, photos, sys] = await Promise.all([
     ctx.db
       .select({ e: findingEvents, by: users.name })
@@ -82,7 +83,7 @@ export async function toFindingDetails(
       for (const d of relevant)
         deadlines.push({ what: d.what, dueOn: d.dueOn, source: d.source, ...dueStatus(d.dueOn, now, store.timeZone) });
     }
-    const refrigerant = system ? findRefrigerant(system.refrigerantId) : undefined;
+    const refrigerant = system ? lookup(system.refrigerantId) : undefined;
     // Cautions sit where the risk is: a finding in a walk-in or machine room gets the room's wording.
     const fixture = fixtureKinds.find((f) => f.id === row.fixtureId && (!row.planId || f.planId === row.planId));
     const kind = fixture?.kind;

@@ -23,7 +23,7 @@ import { createConcentrationScale, niceMaxPpm } from "#core/domain/fieldmap/conc
 import type { FieldGridLike } from "#core/domain/fieldmap/field-grid";
 import type { CsvReading } from "#core/domain/reports/readings-csv";
 import type { SweepReportModel } from "#core/domain/reports/sweep-report-model";
-import { findRefrigerant } from "#core/domain/refrigerants/catalogue";
+import { lookupFor } from "../refrigerants/company-refrigerant-lookup";
 import { cautionsFor, type Caution } from "#core/domain/safety/cautions";
 import { formatLength } from "#core/domain/units/format-units";
 import { formatGrouped, formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
@@ -157,8 +157,9 @@ export async function loadReportFacts(
   const t0 = Math.min(sweep.startedAt.getTime(), readingRows[0]?.takenAt.getTime() ?? Infinity);
 
   const cautions = new Map<string, Caution>();
+  const lookup = await lookupFor(ctx, sweep.companyId);
   for (const s of systemRows) {
-    const r = findRefrigerant(s.refrigerantId);
+    const r = lookup(s.refrigerantId);
     for (const c of cautionsFor(r ? { refrigerant: r } : {})) cautions.set(c.id, c);
   }
   if (cautions.size === 0) for (const c of cautionsFor()) cautions.set(c.id, c);

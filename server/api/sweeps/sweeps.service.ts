@@ -1,4 +1,5 @@
 import { and, count, desc, eq, inArray, isNull, sql } from "drizzle-orm";
+import { lookupFor } from "../refrigerants/company-refrigerant-lookup";
 import type { AppContext } from "../../context";
 import { companies, detectors, plans, readings, stores, sweeps, systems, users } from "../../db/schema/index";
 import type { CreateSweepInput, Sweep } from "#core/contracts/sweeps";
@@ -130,7 +131,11 @@ export async function createSweep(
     .from(companies)
     .where(eq(companies.id, viewer.companyId));
   const status = checkStatus(det.lastCheckedOn, company.days, startedAt, store.timeZone);
-  const warnings = startWarnings({ name: det.name, principle: det.principle, ...status }, hunted);
+  const warnings = startWarnings(
+    { name: det.name, principle: det.principle, ...status },
+    hunted,
+    await lookupFor(ctx, viewer.companyId),
+  );
   // Share lock on the plan: a re-calibration (which locks it for update) either sees this sweep
   // or finishes first, so it never moves fixtures under a sweep.
   const row = await ctx.db.transaction(async (tx) => {

@@ -7,6 +7,8 @@ import { compareDates, type IsoDate } from "#core/domain/dates/calendar-date";
 import { badRequest } from "../../lib/http-error";
 import { eventDay } from "../findings/findings.service";
 import { loadVisibleStore, type Viewer } from "../../access/store-access";
+import { designationOf } from "#core/domain/refrigerants/types";
+import { holdRefrigerant, lookupFor, resolveStored } from "../refrigerants/company-refrigerant-lookup";
 import { chargeToKg, companyGwpBases, knownRefrigerant, loadSystem, refuseRetired, toSystem } from "./systems.service";
 
 type RevisionRow = typeof systemRevisions.$inferSelect;
@@ -25,6 +27,7 @@ function inForce(rows: readonly RevisionRow[], date: IsoDate): RevisionRow | nul
 
 export async function listRevisions(ctx: AppContext, viewer: Viewer, systemId: string) {
   await loadSystem(ctx, viewer, systemId);
+  const lookup = await lookupFor(ctx, viewer.companyId);
   const rows = await ctx.db
     .select({ r: systemRevisions, by: users.name })
     .from(systemRevisions)
@@ -36,6 +39,7 @@ export async function listRevisions(ctx: AppContext, viewer: Viewer, systemId: s
     effectiveFrom: r.effectiveFrom,
     kind: r.kind,
     refrigerantId: r.refrigerantId,
+    refrigerantName: designationOf(resolveStored(lookup, r.refrigerantId)),
     fullChargeKg: r.fullChargeKg,
     applianceType: r.applianceType,
     automaticLeakDetection: r.automaticLeakDetection,
@@ -72,8 +76,15 @@ export async function addRevision(
     automaticLeakDetection: system.automaticLeakDetection,
     inServiceOn: system.inServiceOn ?? effectiveFrom,
   };
+  const choice = await companyGwpBases(ctx, viewer.companyId);
+  const named = (id: string) => {
+    const r = choice.lookup(id);
+    return r ? designationOf(r) : id;
+  };
+  const sameRefrigerant =
+    input.refrigerantId === undefined || choice.lookup(input.refrigerantId)?.id === base.refrigerantId;
   const facts: Facts = {
-    refrigerantId: input.refrigerantId !== undefined ? knownRefrigerant(input.refrigerantId).id : base.refrigerantId,
+    refrigerantId: sameRefrigerant ? base.refrigerantId : knownRefrigerant(input.refrigerantId!, choice.lookup).id,
     fullChargeKg: input.fullCharge !== undefined ? chargeToKg(input.fullCharge) : base.fullChargeKg,
     applianceType: input.applianceType ?? base.applianceType,
     automaticLeakDetection: input.automaticLeakDetection ?? base.automaticLeakDetection,
@@ -81,8 +92,8 @@ export async function addRevision(
   };
   const newRefrigerant = facts.refrigerantId !== base.refrigerantId;
   if (input.kind === "retrofit" && !newRefrigerant)
-    throw badRequest(`Please check: a retrofit needs a refrigerant other than ${base.refrigerantId}.`, {
-      refrigerantId: `must differ from ${base.refrigerantId}, the refrigerant in force on ${effectiveFrom}`,
+    throw badRequest(`Please check: a retrofit needs a refrigerant other than ${named(base.refrigerantId)}.`, {
+      refrigerantId: `must differ from ${named(base.refrigerantId)}, the refrigerant in force on ${effectiveFrom}`,
     });
   if (input.kind === "change" && newRefrigerant)
     throw badRequest("Please check: a change of refrigerant is a retrofit (or a correction of a wrong entry).", {
@@ -93,6 +104,7 @@ export async function addRevision(
       effectiveFrom: `must be on or after the in-service day ${facts.inServiceOn}`,
     });
   const updated = await ctx.db.transaction(async (tx) => {
+    if (newRefrigerant) await holdRefrigerant(tx, viewer.companyId, facts.refrigerantId);
     const [row] = await tx
       .insert(systemRevisions)
       .values({
@@ -123,17 +135,17 @@ export async function addRevision(
       systemId,
       action: "system-revised",
       byId: userId,
-      summary: `${input.kind === "retrofit" ? "Retrofit" : input.kind === "correction" ? "Correction" : "Change"} from ${effectiveFrom}: ${describeChange(base, facts)}; reason: ${input.reason}`,
+      summary: `${input.kind === "retrofit" ? "Retrofit" : input.kind === "correction" ? "Correction" : "Change"} from ${effectiveFrom}: ${describeChange(base, facts, named)}; reason: ${input.reason}`,
     });
     return s;
   });
-  return toSystem(updated, await companyGwpBases(ctx, viewer.companyId));
+  return toSystem(updated, choice);
 }
 
-function describeChange(before: Facts, after: Facts): string {
+function describeChange(before: Facts, after: Facts, named: (id: string) => string): string {
   const parts: string[] = [];
   if (before.refrigerantId !== after.refrigerantId)
-    parts.push(`refrigerant ${before.refrigerantId} → ${after.refrigerantId}`);
+    parts.push(`refrigerant ${named(before.refrigerantId)} → ${named(after.refrigerantId)}`);
   if (before.fullChargeKg !== after.fullChargeKg)
     parts.push(`full charge ${before.fullChargeKg.toFixed(2)} kg → ${after.fullChargeKg.toFixed(2)} kg`);
   if (before.applianceType !== after.applianceType)

@@ -7,6 +7,7 @@ import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { refrigerantCautions, summarizeRefrigerant } from "#core/domain/refrigerants/refrigerant-summary";
 import { removeSystem } from "./retire-system";
+import { companyRefrigerantsOf } from "../refrigerants/company-refrigerant-lookup";
 import { addRevision, listRevisions } from "./system-revisions.service";
 import { companyGwpBases, createSystem, getSystem, listSystems, updateSystem } from "./systems.service";
 
@@ -16,11 +17,16 @@ const idParam = z.object({ id: z.uuid("must be a valid id") });
 export function systemsRouter(ctx: AppContext): Router {
   const router = Router();
 
-  /** The catalogue for the system form's picker: safety class, GWP on the company's bases, cautions. */
+  /**
+   * The system form's picker: the catalogue, then the company's own refrigerants not retired, each
+   * with safety class, GWP on the company's bases and cautions.
+   */
   router.get("/refrigerants", requireMember("stores.read"), async (req, res) => {
-    const bases = await companyGwpBases(ctx, member(req).companyId);
+    const companyId = member(req).companyId;
+    const [bases, own] = await Promise.all([companyGwpBases(ctx, companyId), companyRefrigerantsOf(ctx, companyId)]);
+    const offered = [...REFRIGERANTS, ...own.filter((r) => !r.retired)];
     res.json({
-      refrigerants: REFRIGERANTS.map((r) => ({ ...summarizeRefrigerant(r, bases), cautions: refrigerantCautions(r) })),
+      refrigerants: offered.map((r) => ({ ...summarizeRefrigerant(r, bases), cautions: refrigerantCautions(r) })),
     });
   });
 

@@ -3,7 +3,6 @@ import type { AppContext } from "../../context";
 import type { ChargeInput, System, SystemInput, SystemUpdateInput } from "#core/contracts/systems";
 import { systemRevisions, systems } from "../../db/schema/index";
 import { companyRules } from "../compliance/system-records";
-import { findRefrigerant } from "#core/domain/refrigerants/catalogue";
 import type { Refrigerant } from "#core/domain/refrigerants/types";
 import { KG_PER_POUND } from "#core/domain/units/mass";
 import { badRequest, conflict, HttpError, notFound } from "../../lib/http-error";
@@ -16,35 +15,49 @@ import {
 } from "#core/domain/refrigerants/refrigerant-summary";
 import { eventDay } from "../findings/findings.service";
 import { hasRecords } from "./system-has-records";
+import {
+  holdRefrigerant,
+  lookupFor,
+  resolveStored,
+  type RefrigerantLookup,
+} from "../refrigerants/company-refrigerant-lookup";
 
 type SystemRow = typeof systems.$inferSelect;
-type Bases = GwpChoice;
+/** The profile's GWP choice and the company's refrigerants (the catalogue and its own). */
+type Bases = GwpChoice & { lookup: RefrigerantLookup };
 
 /** kg as stored; lb converted at exactly 0.45359237 kg/lb (NIST SP 811, appendix B.8). */
 export function chargeToKg(charge: ChargeInput): number {
   return charge.unit === "lb" ? charge.value * KG_PER_POUND : charge.value;
 }
 
-export function knownRefrigerant(id: string): Refrigerant {
-  const r = findRefrigerant(id);
+/**
+ * A refrigerant a system may newly name: from the catalogue, or one the company entered and has
+ * not retired. Another company's refrigerant reads as unknown.
+ */
+export function knownRefrigerant(id: string, lookup: RefrigerantLookup): Refrigerant {
+  const r = lookup(id);
   if (!r) {
-    throw badRequest(`Please check: refrigerantId ${JSON.stringify(id)} is not in the refrigerant catalogue.`, {
-      refrigerantId: `is not a refrigerant in the catalogue (e.g. R-448A, R-744, R-404A)`,
+    throw badRequest(`Please check: refrigerantId ${JSON.stringify(id)} is not a refrigerant you can use.`, {
+      refrigerantId: `is not in the catalogue (e.g. R-448A, R-744, R-404A) nor among the company's own refrigerants`,
     });
   }
+  if (r.kind === "company" && r.retired)
+    throw badRequest(`Please check: ${r.name} was retired by the company.`, {
+      refrigerantId: `${r.name} was retired: bring it back under the company's refrigerants first`,
+    });
   return r;
 }
 
 /** The GWP bases of the profile the company works under (its own, for a custom profile), with its stated basis. */
 export async function companyGwpBases(ctx: AppContext, companyId: string): Promise<Bases> {
-  const { profile } = await companyRules(ctx, companyId);
-  return { bases: profile.gwpBases.value, statement: gwpBasisStatement(profile) };
+  const [{ profile }, lookup] = await Promise.all([companyRules(ctx, companyId), lookupFor(ctx, companyId)]);
+  return { bases: profile.gwpBases.value, statement: gwpBasisStatement(profile), lookup };
 }
 
 export function toSystem(row: SystemRow, bases: Bases): System {
-  // Rows only ever hold catalogue ids (checked on write); a missing one is a catalogue regression.
-  const r = findRefrigerant(row.refrigerantId);
-  if (!r) throw new Error(`system ${row.id} names ${row.refrigerantId}, which the catalogue no longer has`);
+  // Rows only hold ids checked on write; a missing one is a regression, not bad input.
+  const r = resolveStored(bases.lookup, row.refrigerantId);
   return {
     id: row.id,
     storeId: row.storeId,
@@ -107,7 +120,8 @@ export async function createSystem(
   input: SystemInput,
 ): Promise<System> {
   const store = await loadVisibleStore(ctx, viewer, storeId);
-  const r = knownRefrigerant(input.refrigerantId);
+  const choice = await companyGwpBases(ctx, viewer.companyId);
+  const r = knownRefrigerant(input.refrigerantId, choice.lookup);
   const facts = {
     refrigerantId: r.id,
     fullChargeKg: chargeToKg(input.fullCharge),
@@ -117,6 +131,7 @@ export async function createSystem(
   };
   // The system and its first revision together: history has a starting point from day one.
   const row = await ctx.db.transaction(async (tx) => {
+    await holdRefrigerant(tx, viewer.companyId, facts.refrigerantId);
     const [created] = await tx
       .insert(systems)
       .values({ companyId: viewer.companyId, storeId, name: input.name, ...facts })
@@ -132,7 +147,7 @@ export async function createSystem(
     });
     return created;
   });
-  return toSystem(row, await companyGwpBases(ctx, viewer.companyId));
+  return toSystem(row, choice);
 }
 
 /**
@@ -151,8 +166,10 @@ export async function updateSystem(
   const current = await loadSystem(ctx, viewer, systemId);
   refuseRetired(current);
   const { name, fullCharge, refrigerantId, ...rest } = input;
+  const choice = await companyGwpBases(ctx, viewer.companyId);
+  const sameRefrigerant = refrigerantId === undefined || choice.lookup(refrigerantId)?.id === current.refrigerantId;
   const facts = {
-    refrigerantId: refrigerantId !== undefined ? knownRefrigerant(refrigerantId).id : current.refrigerantId,
+    refrigerantId: sameRefrigerant ? current.refrigerantId : knownRefrigerant(refrigerantId, choice.lookup).id,
     fullChargeKg: fullCharge !== undefined ? chargeToKg(fullCharge) : current.fullChargeKg,
     applianceType: rest.applianceType ?? current.applianceType,
     automaticLeakDetection: rest.automaticLeakDetection ?? current.automaticLeakDetection,
@@ -172,6 +189,7 @@ export async function updateSystem(
     eventDay(facts.inServiceOn, store, "inServiceOn");
   }
   const row = await ctx.db.transaction(async (tx) => {
+    if (changed.includes("refrigerantId")) await holdRefrigerant(tx, viewer.companyId, facts.refrigerantId);
     const [updated] = await tx
       .update(systems)
       .set({ ...(name !== undefined ? { name } : {}), ...facts, updatedAt: new Date() })
@@ -189,7 +207,7 @@ export async function updateSystem(
       });
     return updated;
   });
-  return toSystem(row, await companyGwpBases(ctx, viewer.companyId));
+  return toSystem(row, choice);
 }
 
 /** A retired system's facts are history: no edit and no new record changes them. */

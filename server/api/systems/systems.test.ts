@@ -99,7 +99,9 @@ describe("systems", () => {
     const lead = await signedIn("lead-tech");
     const unknown = await lead.post(`/api/stores/${co.store.id}/systems`, { ...rack, refrigerantId: "R-9999" });
     expect(unknown.status).toBe(400);
-    expect(unknown.body.error.fields.refrigerantId).toMatch(/not a refrigerant in the catalogue/);
+    expect(unknown.body.error.fields.refrigerantId).toMatch(
+      /is not in the catalogue .* nor among the company.s own refrigerants/,
+    );
     const bad = await lead.post(`/api/stores/${co.store.id}/systems`, {
       ...rack,
       name: "",

@@ -153,6 +153,11 @@ export const COMPLIANCE_AUDIT_ACTIONS = [
   "system-retired",
   "system-revised",
   "reading-accepted",
+  "reading-withdrawn",
+  "refrigerant-entered",
+  "refrigerant-retired",
+  "refrigerant-restored",
+  "refrigerant-deleted",
 ] as const;
 
 /** What was done to a system's compliance records, by whom and when (append-only). */
@@ -197,4 +202,28 @@ export const readingAcceptances = pgTable(
     at: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index("reading_acceptances_company").on(t.companyId, t.profileId)],
+);
+
+/**
+ * An owner's withdrawal of an acceptance, with the reason. Appended, never edited: the acceptance
+ * row stays, so history shows both; the reading reads as not accepted until accepted again
+ * (docs/decisions/0048-accepting-readings.md).
+ */
+export const readingWithdrawals = pgTable(
+  "reading_withdrawals",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    companyId: uuid()
+      .notNull()
+      .references(() => companies.id, { onDelete: "cascade" }),
+    acceptanceId: uuid()
+      .notNull()
+      .references(() => readingAcceptances.id, { onDelete: "restrict" }),
+    reason: text().notNull(),
+    byId: uuid()
+      .notNull()
+      .references(() => users.id),
+    at: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex("reading_withdrawals_acceptance").on(t.acceptanceId)],
 );

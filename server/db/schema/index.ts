@@ -13,3 +13,4 @@ export * from "./reports";
 export * from "./system-revisions";
 export * from "./signups";
 export * from "./security";
+export * from "./refrigerants";

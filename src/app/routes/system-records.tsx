@@ -8,6 +8,7 @@ import { Spinner } from "../../components/ui/spinner";
 import { useFindings } from "../../entities/findings/findings-api";
 import { useSystemRecords } from "../../entities/records/records-api";
 import { SystemRecords } from "../../features/compliance/components/system-records-view";
+import { AcceptedReadings } from "../../features/compliance/components/accepted-readings";
 import { NewFindingForm } from "../../features/findings/components/new-finding-form";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
@@ -38,19 +39,21 @@ export function Component() {
         description={`${r.store.name} · records on the store's calendar (${r.store.timeZone}); today is ${r.today}.`}
       />
       <div className="space-y-8">
-        <SystemRecords
-          r={r}
-          unit={unit}
-          numberFormat={numberFormat}
-          canRecord={canRecord}
-          canFile={can(membership.role, "compliance.manage")}
-          findings={list
-            .filter((f) => f.status !== "dismissed")
-            .map((f) => ({
-              id: f.id,
-              label: `${f.events[0]?.on ?? ""} ${f.component ? COMPONENT_LABELS[f.component] : "leak"} (${f.status})`,
-            }))}
-        />
+        <AcceptedReadings>
+          <SystemRecords
+            r={r}
+            unit={unit}
+            numberFormat={numberFormat}
+            canRecord={canRecord}
+            canFile={can(membership.role, "compliance.manage")}
+            findings={list
+              .filter((f) => f.status !== "dismissed")
+              .map((f) => ({
+                id: f.id,
+                label: `${f.events[0]?.on ?? ""} ${f.component ? COMPONENT_LABELS[f.component] : "leak"} (${f.status})`,
+              }))}
+          />
+        </AcceptedReadings>
         <section aria-labelledby="sys-findings" className="space-y-3">
           <h2 id="sys-findings" className="text-xl font-bold">
             Findings on this system

@@ -56,6 +56,7 @@ const today: TodayView = {
       storeId: A,
       storeName: "Maple Street Market",
       refrigerantId: "R-448A",
+      refrigerantName: "R-448A",
       percent: 37.6,
       thresholdPercent: 20,
       on: "2026-04-19",

@@ -8,6 +8,7 @@ import { Spinner } from "../../components/ui/spinner";
 import { useToday } from "../../entities/records/records-api";
 import { useSendDigestNow } from "../../features/compliance/api/send-digest";
 import { TodayView } from "../../features/compliance/components/today-view";
+import { AcceptedReadings } from "../../features/compliance/components/accepted-readings";
 import { formErrorMessage } from "../../lib/form-errors";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { useSignedIn } from "../shell/session-context";
@@ -62,12 +63,14 @@ export function Component() {
         <QueryError error={today.error} what="the Today list" onRetry={() => void today.refetch()} />
       ) : null}
       {today.data ? (
-        <TodayView
-          data={today.data}
-          storeId={storeId}
-          numberFormat={units.number}
-          onStoreChange={(id) => setParams(id ? { store: id } : {}, { replace: true })}
-        />
+        <AcceptedReadings>
+          <TodayView
+            data={today.data}
+            storeId={storeId}
+            numberFormat={units.number}
+            onStoreChange={(id) => setParams(id ? { store: id } : {}, { replace: true })}
+          />
+        </AcceptedReadings>
       ) : null}
     </>
   );

@@ -17,6 +17,7 @@ export function Component() {
       contrastToggle={<ContrastToggle />}
       leaveTo={`/stores/${storeId}/walk`}
       lengthUnit={units.length}
+      numberFormat={units.number}
     />
   );
 }

@@ -5,14 +5,17 @@ import { Spinner } from "../../../components/ui/spinner";
 import { formErrorMessage } from "../../../lib/form-errors";
 import { useAcceptReading } from "../api/accept-reading";
 import { useReadings } from "../api/get-readings";
+import { ReadingHistory } from "./reading-history";
+import { WithdrawReading } from "./withdraw-reading";
 
 const day = (iso: string) => iso.slice(0, 10);
 
 /**
  * Every "reading" of the company's rule profile, listed once in plain words: how the product
  * applies a rule whose text it has not confirmed. Each "reading" marker on screens and statements
- * links here. The owner accepts each as worded (recorded with who and when, and audited) or
- * changes a value by starting a custom profile (docs/decisions/0048-accepting-readings.md).
+ * links here. The owner accepts each as worded (recorded with who and when, and audited), withdraws
+ * an acceptance with a reason (both stay in its history), or changes a value by starting a custom
+ * profile (docs/decisions/0048-accepting-readings.md).
  */
 export function ReadingsSection({ canAccept = false }: { canAccept?: boolean }) {
   const readings = useReadings();
@@ -40,10 +43,13 @@ export function ReadingsSection({ canAccept = false }: { canAccept?: boolean }) 
               <li key={r.text} className="rounded-md bg-surface p-3 edge">
                 <p>{r.text}</p>
                 {r.accepted ? (
-                  <p className="mt-1 text-sm text-muted">
-                    Accepted by {r.accepted.by} on {day(r.accepted.at)}
-                    {r.accepted.note ? ` (${r.accepted.note})` : ""}.
-                  </p>
+                  <>
+                    <p className="mt-1 text-sm text-muted">
+                      Accepted by {r.accepted.by} on {day(r.accepted.at)}
+                      {r.accepted.note ? ` (${r.accepted.note})` : ""}.
+                    </p>
+                    {canAccept ? <WithdrawReading text={r.text} /> : null}
+                  </>
                 ) : canAccept ? (
                   <div className="mt-2 flex flex-wrap items-center gap-2">
                     <Button
@@ -61,6 +67,7 @@ export function ReadingsSection({ canAccept = false }: { canAccept?: boolean }) 
                 ) : (
                   <p className="mt-1 text-sm text-muted">Not accepted by the owner yet.</p>
                 )}
+                <ReadingHistory history={r.history} />
               </li>
             ))}
           </ul>

@@ -23,6 +23,7 @@ const first = {
   effectiveFrom: "2015-04-01",
   kind: "first",
   refrigerantId: "R-22",
+  refrigerantName: "R-22",
   fullChargeKg: 45.359237,
   applianceType: "commercial-refrigeration",
   automaticLeakDetection: false,

@@ -54,7 +54,7 @@ export function RevisionsSection({
           columns={[
             { header: "From", cell: (x) => x.effectiveFrom },
             { header: "Kind", cell: (x) => KIND_NAMES[x.kind] ?? x.kind },
-            { header: "Refrigerant", cell: (x) => x.refrigerantId },
+            { header: "Refrigerant", cell: (x) => x.refrigerantName },
             { header: "Full charge", cell: (x) => formatMass(x.fullChargeKg, unit, numberFormat) },
             { header: "Appliance", cell: (x) => APPLIANCE_TYPE_NAMES[x.applianceType] },
             { header: "Leak detection", cell: (x) => (x.automaticLeakDetection ? "Automatic" : "None") },

@@ -82,7 +82,9 @@ export function SystemRecords({
     <div className="space-y-8">
       <dl className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
         <Fact label="Refrigerant">
-          {r.system.refrigerantId} · class {r.system.refrigerant.safetyClass}
+          {r.system.refrigerant.designation}
+          {r.system.refrigerant.enteredByCompany ? " (entered by the company)" : ""} · class{" "}
+          {r.system.refrigerant.safetyClass}
           {r.system.refrigerant.gwp ? ` · GWP ${gwp(r.system.refrigerant.gwp.value)}` : ""}
         </Fact>
         <Fact label="Full charge">{mass(r.system.fullChargeKg)}</Fact>

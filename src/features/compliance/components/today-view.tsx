@@ -240,7 +240,7 @@ export function TodayView({
             {
               header: "System",
               sortValue: (r) => r.name,
-              searchText: (r) => `${r.name} ${r.storeName} ${r.refrigerantId}`,
+              searchText: (r) => `${r.name} ${r.storeName} ${r.refrigerantName}`,
               cell: (r) => (
                 <Link className="text-accent underline" to={r.link}>
                   {r.name}
@@ -248,7 +248,7 @@ export function TodayView({
               ),
             },
             { header: "Store", cell: (r) => r.storeName },
-            { header: "Refrigerant", cell: (r) => r.refrigerantId, filterValue: (r) => r.refrigerantId },
+            { header: "Refrigerant", cell: (r) => r.refrigerantName, filterValue: (r) => r.refrigerantName },
             {
               header: "Latest leak rate",
               sortValue: (r) => r.latestPercent,

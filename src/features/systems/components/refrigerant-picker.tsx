@@ -17,6 +17,10 @@ export function RefrigerantPicker({
 }) {
   const id = useId();
   const picked = refrigerants.find((r) => r.id === value) ?? null;
+  const groups = [
+    { label: "Catalogue", list: refrigerants.filter((r) => !r.enteredByCompany) },
+    { label: "Entered by the company", list: refrigerants.filter((r) => r.enteredByCompany) },
+  ];
   return (
     <div>
       <label htmlFor={id} className="block font-bold">
@@ -31,18 +35,25 @@ export function RefrigerantPicker({
         className={`mt-1 block min-h-11 w-full rounded-md bg-surface px-3 py-2 text-ink edge ${error ? "border-danger" : ""}`}
       >
         <option value="">Choose a refrigerant…</option>
-        {refrigerants.map((r) => (
-          <option key={r.id} value={r.id}>
-            {r.id} · {r.safetyClass}
-            {r.gwp ? ` · GWP ${r.gwp.value}` : ""}
-          </option>
-        ))}
+        {groups.map((g) =>
+          g.list.length === 0 ? null : (
+            <optgroup key={g.label} label={g.label}>
+              {g.list.map((r) => (
+                <option key={r.id} value={r.id}>
+                  {r.designation} · {r.safetyClass}
+                  {r.gwp ? ` · GWP ${r.gwp.value}` : ""}
+                </option>
+              ))}
+            </optgroup>
+          ),
+        )}
       </select>
       <div id={`${id}-facts`} className="mt-1 text-sm text-muted" aria-live="polite">
         {picked ? (
           <>
             <p>
-              {picked.name}: safety class <span className="font-bold text-ink">{picked.safetyClass}</span> (
+              {picked.enteredByCompany ? `${picked.designation}, entered by the company` : picked.name}: safety class{" "}
+              <span className="font-bold text-ink">{picked.safetyClass}</span> (
               <SourceText source={picked.safetyClassSource} />
               ).
             </p>

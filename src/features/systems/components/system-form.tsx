@@ -212,7 +212,7 @@ export function SystemForm({
           </Button>
         </div>
       </form>
-      <RefrigerantCautions refrigerantName={picked?.id ?? null} cautions={picked?.cautions ?? []} />
+      <RefrigerantCautions refrigerantName={picked?.designation ?? null} cautions={picked?.cautions ?? []} />
     </div>
   );
 }

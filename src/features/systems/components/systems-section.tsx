@@ -13,6 +13,7 @@ import { formErrorMessage } from "../../../lib/form-errors";
 import { useDeleteSystem } from "../api/delete-system";
 import { useSystems } from "../../../entities/systems/systems-api";
 import { SystemForm } from "./system-form";
+import { CompanyRefrigerantsPanel } from "./company-refrigerants-panel";
 
 /** The store page's systems: racks and condensing units with refrigerant, charge and detection. */
 export function SystemsSection({
@@ -90,15 +91,18 @@ export function SystemsSection({
               header: "System",
               cell: (s) => <span className="font-bold">{s.name}</span>,
               sortValue: (s) => s.name,
-              searchText: (s) => `${s.name} ${s.refrigerantId} ${APPLIANCE_TYPE_NAMES[s.applianceType]}`,
+              searchText: (s) => `${s.name} ${s.refrigerant.designation} ${APPLIANCE_TYPE_NAMES[s.applianceType]}`,
             },
             {
               header: "Refrigerant",
-              sortValue: (s) => s.refrigerantId,
-              filterValue: (s) => s.refrigerantId,
+              sortValue: (s) => s.refrigerant.designation,
+              filterValue: (s) => s.refrigerant.designation,
               cell: (s) => (
                 <>
-                  {s.refrigerantId} <span className="text-muted">({s.refrigerant.safetyClass})</span>
+                  {s.refrigerant.designation} <span className="text-muted">({s.refrigerant.safetyClass})</span>
+                  {s.refrigerant.enteredByCompany ? (
+                    <span className="block text-sm text-muted">entered by the company</span>
+                  ) : null}
                 </>
               ),
             },
@@ -169,6 +173,10 @@ export function SystemsSection({
           ]}
         />
       ) : null}
+      <details className="rounded-md bg-paper p-3 edge">
+        <summary className="min-h-11 cursor-pointer py-2 font-bold">Refrigerant not in the catalogue?</summary>
+        <CompanyRefrigerantsPanel canEdit={canEdit} numberFormat={numberFormat} />
+      </details>
     </section>
   );
 }

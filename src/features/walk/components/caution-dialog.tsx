@@ -1,5 +1,5 @@
-import { findRefrigerant } from "#core/domain/refrigerants/catalogue";
-import type { Refrigerant } from "#core/domain/refrigerants/types";
+import type { RefrigerantSummary } from "#core/contracts/systems";
+import { refrigerantOfSummary } from "#core/domain/refrigerants/company-refrigerant";
 import { roomCautions, type CautionPlace } from "#core/domain/safety/cautions";
 import { Button } from "../../../components/ui/button";
 import { Dialog } from "../../../components/ui/dialog";
@@ -11,15 +11,16 @@ import { Dialog } from "../../../components/ui/dialog";
 export function CautionDialog({
   place,
   name,
-  refrigerantIds = [],
+  refrigerants: summaries = [],
   onClose,
 }: {
   place: CautionPlace | null;
   name: string;
-  refrigerantIds?: readonly string[];
+  /** The refrigerants of the room's systems, as the store pack holds them (a company's own ones too). */
+  refrigerants?: readonly RefrigerantSummary[];
   onClose(): void;
 }) {
-  const refrigerants = refrigerantIds.map(findRefrigerant).filter((r): r is Refrigerant => r !== undefined);
+  const refrigerants = summaries.map(refrigerantOfSummary);
   const cautions = place ? roomCautions(place, refrigerants) : [];
   return (
     <Dialog

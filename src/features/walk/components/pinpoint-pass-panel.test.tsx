@@ -55,7 +55,18 @@ const level = [
   ...[6, 6.5, 6, 7, 6.5].map((ppm, i) => reading(1.5 + i, 3.2, ppm)),
   ...[1, 3, 5].map((x) => reading(x, 6, 0.5)),
 ];
-const panel = (s: LocalSweep, committed: LocalReading[], systems = [{ id: CASE.systemId!, refrigerantId: "R-290" }]) =>
+// R-290 is safety class A3 (ASHRAE 34): flammable
+const R290 = {
+  id: "R-290",
+  name: "Propane",
+  designation: "R-290",
+  enteredByCompany: false,
+  safetyClass: "A3",
+  safetyClassSource: "ASHRAE 34",
+  gwp: null,
+  gwpNote: null,
+};
+const panel = (s: LocalSweep, committed: LocalReading[], systems = [{ id: CASE.systemId!, refrigerant: R290 }]) =>
   render(
     <PinpointPassPanel
       sweep={s}

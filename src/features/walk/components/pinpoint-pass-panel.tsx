@@ -1,5 +1,6 @@
 import { useMemo, useState } from "react";
 import type { Fixture } from "#core/contracts/fixtures";
+import type { RefrigerantSummary } from "#core/contracts/systems";
 import { FIXTURE_KIND_NAMES } from "#core/contracts/fixture-kinds";
 import { usePinpointPass } from "../hooks/use-pinpoint-pass";
 import type { LocalReading, LocalSweep } from "../model/local-types";
@@ -26,7 +27,7 @@ export function PinpointPassPanel({
   sweep: LocalSweep;
   fixtures: readonly Fixture[];
   committed: readonly LocalReading[];
-  systems: readonly { id: string; refrigerantId: string }[];
+  systems: readonly { id: string; refrigerant: RefrigerantSummary }[];
   readOnly: boolean;
   reload(): Promise<void>;
 }) {

@@ -1,7 +1,7 @@
 import { useState } from "react";
 import { ALARM_DOT_FACTOR, markLooks, TRACE_DOT_FACTOR, type MarkLook } from "../model/plan-marks";
 
-type Swatch = "area" | "area-dashed" | "diamond" | "dot" | "ring" | "dashed-dot";
+type Swatch = "area" | "area-dashed" | "diamond" | "dot" | "ring" | "dashed-dot" | "dashed-ring" | "square";
 
 function SwatchIcon({ kind, look, scale = 1 }: { kind: Swatch; look: MarkLook; scale?: number }) {
   const r = 5 * scale;
@@ -34,6 +34,12 @@ function SwatchIcon({ kind, look, scale = 1 }: { kind: Swatch; look: MarkLook; s
         />
       ) : null}
       {kind === "ring" ? <circle cx="14" cy="10" r={r} fill="none" stroke={look.stroke} strokeWidth="3" /> : null}
+      {kind === "dashed-ring" ? (
+        <circle cx="14" cy="10" r="8" fill={look.fill} stroke={look.stroke} strokeWidth="2" strokeDasharray="4 3" />
+      ) : null}
+      {kind === "square" ? (
+        <rect x="8" y="4" width="12" height="12" fill={look.fill} stroke={look.stroke} strokeWidth="2" />
+      ) : null}
     </svg>
   );
 }
@@ -57,6 +63,8 @@ export function PlanLegend({ highContrast }: { highContrast: boolean }) {
     ["dashed-dot", look.readingZero, "Refused by the server: fix it"],
     ["diamond", look.sampledAt, "Where the peak's air was sampled"],
     ["ring", look.recheck, "Re-check here"],
+    ["dashed-ring", look.liveSuspect, "Live suspect and its radius (an estimate on this device)"],
+    ["square", look.nextProbe, "Next probe point (numbered in walking order)"],
   ];
   return (
     <div

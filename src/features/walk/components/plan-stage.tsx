@@ -1,4 +1,4 @@
-import { useEffect, useMemo, useRef, useState } from "react";
+import { useEffect, useMemo, useRef, useState, type ReactNode } from "react";
 import { Group, Image as KonvaImage, Layer, Line, Shape, Stage } from "react-konva";
 import type { Context } from "konva/lib/Context";
 import type { Fixture } from "#core/contracts/fixtures";
@@ -39,6 +39,8 @@ export interface PlanStageProps {
   focus: { x: number; y: number } | null;
   /** A tap at plan metres (x, y), with the device time of the finger going down. */
   onTap(x: number, y: number, at: number): void;
+  /** More marks drawn over the readings, in plan metres, given the view's zoom (px per metre). */
+  overlay?: (zoom: number) => ReactNode;
 }
 
 function useBlobImage(blob: Blob | null): HTMLImageElement | null {
@@ -244,6 +246,7 @@ export function PlanStage(props: PlanStageProps) {
                 highContrast={props.highContrast}
               />
               {props.lagHint ? <LagMarks hint={props.lagHint} readings={props.readings} scale={view.zoom} /> : null}
+              {props.overlay?.(view.zoom)}
             </Group>
           </Layer>
         </Stage>

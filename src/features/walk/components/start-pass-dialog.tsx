@@ -1,8 +1,8 @@
 import { useState } from "react";
 import type { Fixture } from "#core/contracts/fixtures";
 import { FIXTURE_KIND_NAMES } from "#core/contracts/fixture-kinds";
-import { findRefrigerant } from "#core/domain/refrigerants/catalogue";
-import type { Refrigerant } from "#core/domain/refrigerants/types";
+import type { RefrigerantSummary } from "#core/contracts/systems";
+import { refrigerantOfSummary } from "#core/domain/refrigerants/company-refrigerant";
 import { pinpointPassCautions } from "#core/domain/safety/pinpoint-cautions";
 import { Button } from "../../../components/ui/button";
 import { Cautions } from "../../../components/ui/cautions";
@@ -30,7 +30,8 @@ export function StartPassDialog({
 }: {
   fixture: Fixture;
   fixtures: readonly Fixture[];
-  systems: readonly { id: string; refrigerantId: string }[];
+  /** The store's systems with their refrigerants, as the store pack holds them (a company's own ones too). */
+  systems: readonly { id: string; refrigerant: RefrigerantSummary }[];
   onStart(start: PassStart): void;
   onClose(): void;
 }) {
@@ -39,10 +40,7 @@ export function StartPassDialog({
   const room =
     fixture.kind === "walk-in-cooler" || fixture.kind === "walk-in-freezer" || fixture.kind === "machine-room";
   const ids = roomSystemIds(fixtures, fixture);
-  const refrigerants = systems
-    .filter((s) => ids.includes(s.id))
-    .map((s) => findRefrigerant(s.refrigerantId))
-    .filter((r): r is Refrigerant => r !== undefined);
+  const refrigerants = systems.filter((s) => ids.includes(s.id)).map((s) => refrigerantOfSummary(s.refrigerant));
   const place = fixture.kind === "machine-room" ? "machine-room" : room ? "walk-in" : "sales-floor";
   const name = fixture.label || FIXTURE_KIND_NAMES[fixture.kind];
   return (

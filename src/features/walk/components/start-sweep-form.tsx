@@ -137,7 +137,7 @@ export function StartSweepForm({ storeId, onStarted }: { storeId: string; onStar
                   setSystemIds(e.target.checked ? [...systemIds, s.id] : systemIds.filter((x) => x !== s.id))
                 }
               />
-              {s.name} · {s.refrigerantId}
+              {s.name} · {s.refrigerant.designation}
             </label>
           ))}
         </div>

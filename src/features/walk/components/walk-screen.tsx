@@ -1,9 +1,11 @@
 import { useMemo, useRef, useState, type ReactNode } from "react";
+import type { RefrigerantSummary } from "#core/contracts/systems";
 import { useNavigate } from "react-router";
 import type { CautionPlace } from "#core/domain/safety/cautions";
 import { FIXTURE_KIND_NAMES } from "#core/contracts/fixture-kinds";
 import { Alert } from "../../../components/ui/alert";
 import type { LengthPreference } from "#core/domain/units/format-units";
+import type { NumberFormat } from "#core/domain/numbers/number-format";
 import { Spinner } from "../../../components/ui/spinner";
 import { countOf } from "../../../lib/format";
 import { usePlanPack, useStorePack } from "../api/store-pack";
@@ -12,6 +14,7 @@ import { useSyncStatus } from "../hooks/use-sync-status";
 import { useQueuedFindings } from "../hooks/use-queued-findings";
 import { useOpenReading } from "../hooks/use-open-reading";
 import { useWalk } from "../hooks/use-walk";
+import { useLiveGuide } from "../hooks/use-live-guide";
 import { fixtureAt, unsampledFixtures } from "../model/coverage";
 import { peakLagHint } from "../model/lag-hint";
 import type { LocalReading } from "../model/local-types";
@@ -22,6 +25,12 @@ import { editedReading, walkStep, type WalkEvent, type WalkMode } from "../model
 import { CautionDialog } from "./caution-dialog";
 import { LagHintBanner } from "./lag-hint-banner";
 import { LeakForm } from "./leak-form";
+import { LiveGuidePanel } from "./live-guide-panel";
+import { LiveMarks } from "./live-marks";
+import { liveWordsContext } from "../model/live-words";
+import { settledSuspect } from "../model/live-state";
+import { supplyCheckOf } from "../model/supply-check";
+import { supplyAirNote } from "#core/domain/locator-words/live-guide-words";
 import { LogImport } from "./log-import";
 import { PinpointPassPanel } from "./pinpoint-pass-panel";
 import { PlanStage } from "./plan-stage";
@@ -41,12 +50,14 @@ export function WalkScreen({
   contrastToggle,
   leaveTo,
   lengthUnit = "m",
+  numberFormat = "1,234.5",
 }: {
   storeId: string;
   sweepId: string;
   contrastToggle: ReactNode;
   leaveTo: string;
   lengthUnit?: LengthPreference;
+  numberFormat?: NumberFormat;
 }) {
   const walk = useWalk(sweepId);
   const storePack = useStorePack(storeId);
@@ -66,7 +77,11 @@ export function WalkScreen({
     return step.effect;
   };
   const editing = editedReading(mode);
-  const [caution, setCaution] = useState<{ place: CautionPlace; name: string; refrigerantIds: string[] } | null>(null);
+  const [caution, setCaution] = useState<{
+    place: CautionPlace;
+    name: string;
+    refrigerants: RefrigerantSummary[];
+  } | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
   const [dialog, setDialog] = useState<"list" | "summary" | "import" | null>(null);
   const [dismissedAlarm, setDismissedAlarm] = useState(-1);
@@ -114,6 +129,14 @@ export function WalkScreen({
       sweep ? peakLagHint(committed, sweep.transportDelayS, sweep.timeConstantS, sweep.alarmPpm, walkModel) : null,
     [committed, sweep, walkModel],
   );
+  const live = useLiveGuide({ sweep: sweep ?? null, plan: planDims ?? null, fixtures, readings: committed });
+  const liveWords = useMemo(
+    () => liveWordsContext(fixtures, lengthUnit, numberFormat, sweep?.timeConstantS ?? 0),
+    [fixtures, lengthUnit, numberFormat, sweep?.timeConstantS],
+  );
+  // The live guide starts folded to one line over the plan's bottom edge: the plan stays the screen.
+  const [guideOpen, setGuideOpen] = useState(false);
+  const supply = useMemo(() => supplyCheckOf(settledSuspect(live), committed), [live, committed]);
   const recent = useMemo(() => {
     const out: number[] = [];
     for (let i = committed.length - 1; i >= 0 && out.length < 4; i--)
@@ -138,7 +161,7 @@ export function WalkScreen({
   const draft = walk.readings.find((r) => r.id === draftId) ?? null;
   const readOnly = sweep.status === "reviewed";
 
-  const onTap = serial(async (x: number, y: number, at: number) => {
+  const onTap = serial(async (x: number, y: number, at: number, preset?: { samplePoint: "supply"; note: string }) => {
     const effect = send({ type: "tap", x, y, fixtureId: fixtureAt(fixtures, x, y)?.id ?? null });
     if (effect.kind === "move-reading") {
       const moved = await walk.move(effect.readingId, x, y);
@@ -153,13 +176,11 @@ export function WalkScreen({
     if (room) {
       // The room's systems (from the store pack kept on the device) decide which cautions apply.
       const ids = roomSystemIds(fixtures, room.fixture);
-      const refrigerantIds = (storePack.data?.systems ?? [])
-        .filter((x) => ids.includes(x.id))
-        .map((x) => x.refrigerantId);
+      const refrigerants = (storePack.data?.systems ?? []).filter((x) => ids.includes(x.id)).map((x) => x.refrigerant);
       setCaution({
         place: room.place,
         name: room.fixture.label || FIXTURE_KIND_NAMES[room.fixture.kind],
-        refrigerantIds,
+        refrigerants,
       });
     }
     const v = typed.current;
@@ -172,8 +193,9 @@ export function WalkScreen({
           x,
           y,
           at,
+          preset,
         )
-      : await walk.tap(x, y, at);
+      : await walk.tap(x, y, at, preset);
     setDraftId(r.id);
   });
 
@@ -294,7 +316,7 @@ export function WalkScreen({
         ) : null}
       </header>
       <div className="flex min-h-0 flex-1 flex-col landscape:md:flex-row">
-        <div className="min-h-0 min-w-0 flex-1">
+        <div className="relative min-h-0 min-w-0 flex-1">
           <PlanStage
             widthM={plan.widthM ?? 1}
             heightM={plan.heightM ?? 1}
@@ -308,7 +330,29 @@ export function WalkScreen({
             focus={keypadFor ? { x: keypadFor.x, y: keypadFor.y } : null}
             highContrast={highContrast}
             onTap={(x, y, at) => onTap(x, y, at)}
+            overlay={(zoom) => (
+              <LiveMarks
+                suspects={live.estimate?.kind === "suspects" ? live.estimate.suspects : []}
+                probes={live.probes}
+                zoom={zoom}
+                highContrast={highContrast}
+              />
+            )}
           />
+          {keypadFor || readOnly ? null : (
+            <LiveGuidePanel
+              state={live}
+              words={liveWords}
+              from={committed.length ? committed[committed.length - 1] : null}
+              onProbe={(p) => onTap(p.x, p.y, Date.now())}
+              supply={supply}
+              onSupplyCheck={(s) =>
+                onTap(s.x, s.y, Date.now(), { samplePoint: "supply", note: supplyAirNote(s, liveWords) })
+              }
+              folded={!guideOpen}
+              onFold={(folded) => setGuideOpen(!folded)}
+            />
+          )}
         </div>
         {keypadFor ? (
           <div className="landscape:md:w-96 landscape:md:overflow-y-auto">
@@ -348,7 +392,7 @@ export function WalkScreen({
       <CautionDialog
         place={caution?.place ?? null}
         name={caution?.name ?? ""}
-        refrigerantIds={caution?.refrigerantIds ?? []}
+        refrigerants={caution?.refrigerants ?? []}
         onClose={() => setCaution(null)}
       />
       <ReadingsDrawer

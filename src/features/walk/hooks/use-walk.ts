@@ -17,6 +17,9 @@ import { afterSubmitAsked } from "../model/sweep-sync";
 import { passIdAt, passIdForNewReading } from "../model/pinpoint-pass";
 import { refreshCounts, subscribeSync, syncSoon } from "./sync-loop";
 
+/** Values a new reading starts with instead of the defaults. */
+type ReadingPreset = Partial<Pick<ReadingValues, "samplePoint" | "note">>;
+
 export interface WalkState {
   sweep: LocalSweep | null;
   readings: LocalReading[];
@@ -84,9 +87,12 @@ export function useWalk(sweepId: string) {
     });
   }, [reload]);
 
-  /** A tap on the plan: the reading exists (on the device) from this moment, as a keypad draft. */
+  /**
+   * A tap on the plan: the reading exists (on the device) from this moment, as a keypad draft. A
+   * preset sample point and note (the supply-air check the live guide asks for) replace the defaults.
+   */
   const tap = useCallback(
-    async (x: number, y: number, at: number) => {
+    async (x: number, y: number, at: number, preset: ReadingPreset = {}) => {
       const db = await walkDb();
       const values: ReadingValues = {
         x,
@@ -96,6 +102,7 @@ export function useWalk(sweepId: string) {
         atLeast: false,
         samplePoint: lastSamplePoint(readingsRef.current),
         note: "",
+        ...preset,
       };
       const r = await addReading(db, sweepId, values, { draft: true, passId: passIdForNewReading(sweepRef.current) });
       setState((s) => ({ ...s, readings: [...s.readings, r] }));
@@ -109,14 +116,21 @@ export function useWalk(sweepId: string) {
    * draw both in ONE render (a tap must show at once, even in a sweep of thousands).
    */
   const saveAndTap = useCallback(
-    async (id: string, values: Partial<ReadingValues>, x: number, y: number, at: number) => {
+    async (
+      id: string,
+      values: Partial<ReadingValues>,
+      x: number,
+      y: number,
+      at: number,
+      preset: ReadingPreset = {},
+    ) => {
       const db = await walkDb();
       const saved = await updateReading(db, id, values, { commit: true });
       const samplePoint = saved?.samplePoint ?? lastSamplePoint(readingsRef.current);
       const r = await addReading(
         db,
         sweepId,
-        { x, y, takenAt: new Date(at).toISOString(), ppm: 0, atLeast: false, samplePoint, note: "" },
+        { x, y, takenAt: new Date(at).toISOString(), ppm: 0, atLeast: false, samplePoint, note: "", ...preset },
         { draft: true, passId: passIdForNewReading(sweepRef.current) },
       );
       setState((s) => ({ ...s, readings: [...s.readings.map((x) => (x.id === id && saved ? saved : x)), r] }));

@@ -55,8 +55,8 @@ export interface LocalReading {
   atLeast: boolean;
   samplePoint: SamplePoint;
   note: string;
-  /** The pinpoint pass it was taken in; null = the first pass. */
-  passId: string | null;
+  /** The pinpoint pass it was taken in; null (or absent, in rows made in code) = the first pass. */
+  passId?: string | null;
   sync: ReadingSync;
 }
 

@@ -30,7 +30,7 @@ function fansRanFor(
   sweep: Pick<LocalSweep, "fans">,
   passes: Map<string, LocalPass>,
 ) {
-  if (r.passId === null) return sweep.fans === "running";
+  if (!r.passId) return sweep.fans === "running";
   const p = passes.get(r.passId);
   if (!p) return sweep.fans === "running";
   const stills = p.fans === "stopped" || p.defrost;

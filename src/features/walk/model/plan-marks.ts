@@ -21,6 +21,8 @@ export function markLooks(highContrast: boolean) {
     path: { fill: "none", stroke: highContrast ? "#000000" : "#1f4e5f" },
     sampledAt: { fill: "#ffd600", stroke: "#000000" },
     recheck: { fill: "none", stroke: "#9b2c2c" },
+    liveSuspect: { fill: "rgba(91,45,140,0.10)", stroke: highContrast ? "#000000" : "#5b2d8c" },
+    nextProbe: { fill: highContrast ? "#ffffff" : "#e8f3ee", stroke: highContrast ? "#000000" : "#1d6b4f" },
   } satisfies Record<string, MarkLook>;
 }
 

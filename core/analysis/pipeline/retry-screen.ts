@@ -1,0 +1,71 @@
+import type { LocatorInput } from "../../contracts/locator-input";
+import type { PlanGrid } from "../grid/plan-grid";
+import { casesRunFans } from "../locator/plan-masks";
+import type { LocatorSettings } from "../locator/settings";
+import { fieldStage } from "./field-stage";
+import type { LagResult } from "./lag-stage";
+import { sourcesStage } from "./sources-stage";
+import type { ZonesResult } from "./zones-stage";
+
+// Cells this close to the plume's peak reading are the ones the screen judges, m: a spot that fits a
+// plume lies by its strongest reading, and a lag the screen tries moves that reading with the rest.
+const PLUME_REGION_M = 6;
+
+/**
+ * Whether a spot fits the plume with this lag, judged on the plume alone before a full run is spent on
+ * it. Only the readings within reach of the cells around the peak reading are searched (the costly part
+ * of the field stage); every reading still counts in the background, weights and totals of the fit, so
+ * for the cells around the peak the fit is the full run's. The full run takes its first source from the
+ * best cell of the whole plan, the screen from the best cell around the peak: they differ only when a
+ * better-fitting cell lies farther from the peak (or gas reaches a cell of the region through a
+ * fan-stirred room from farther than the straight-line cut-off), and then a retry may be skipped that a
+ * full run would have kept. The benchmark sets showed no such store (docs/locator/pipeline.md).
+ */
+export function spotFitsPlume(
+  plan: LocatorInput["plan"],
+  grid: PlanGrid,
+  stepScale: Float32Array | null,
+  lag: LagResult,
+  zones: ZonesResult,
+  peak: number,
+  settings: LocatorSettings,
+): boolean {
+  const k = settings.kernel;
+  const n = lag.ppm.length;
+  const px = lag.xs[peak];
+  const py = lag.ys[peak];
+  // a reading farther than this (straight line) from the peak reaches no cell of the region within the
+  // kernel's truncation, give or take the snapping of positions to cells
+  const reachM = PLUME_REGION_M + k.truncationM + 2 * grid.cellSize;
+  const searched = new Uint8Array(n);
+  for (let i = 0; i < n; i++) searched[i] = Math.hypot(lag.xs[i] - px, lag.ys[i] - py) <= reachM ? 1 : 0;
+  const field = fieldStage(grid, stepScale, casesRunFans(plan.fixtures), lag, zones, settings, searched);
+  // cells outside the region are ruled out as they are for a spot out of every reading's reach
+  const nearestReading = new Float32Array(field.fields.nearestReading.length).fill(Infinity);
+  const h = grid.cellSize;
+  const r2 = PLUME_REGION_M * PLUME_REGION_M;
+  const i0 = Math.max(0, Math.floor((px - PLUME_REGION_M) / h));
+  const i1 = Math.min(grid.width - 1, Math.floor((px + PLUME_REGION_M) / h));
+  const j0 = Math.max(0, Math.floor((py - PLUME_REGION_M) / h));
+  const j1 = Math.min(grid.height - 1, Math.floor((py + PLUME_REGION_M) / h));
+  for (let j = j0; j <= j1; j++) {
+    for (let i = i0; i <= i1; i++) {
+      const c = j * grid.width + i;
+      if (((i + 0.5) * h - px) ** 2 + ((j + 0.5) * h - py) ** 2 <= r2)
+        nearestReading[c] = field.fields.nearestReading[c];
+    }
+  }
+  const sources = sourcesStage(
+    plan,
+    grid,
+    lag,
+    zones,
+    { ...field, fields: { ...field.fields, nearestReading } },
+    {
+      kernel: k,
+      sources: settings.sources,
+      zoneMarginM: settings.zones.marginM,
+    },
+  );
+  return sources.found.length > 0;
+}
