@@ -2,11 +2,13 @@ import { gridCellCount, LocatorInputError, MAX_GRID_CELLS, type LocatorInput } f
 import type { DelayFacts, LocatorResult } from "../contracts/locator-output";
 import { createPlanGrid } from "./grid/plan-grid";
 import { DEFAULT_LOCATOR_OPTIONS, type LocatorOptions } from "./locator/locator-options";
+import { mixedLevel } from "./locator/mixed-level";
+import { readingAir } from "./locator/pass-air";
 import { casesRunFans, fanStepScale } from "./locator/plan-masks";
 import { LOCATOR_SETTINGS, type LocatorSettings } from "./locator/settings";
 import { delayDiagnostics, delayStage } from "./pipeline/delay-stage";
 import { diagnosticsStage } from "./pipeline/diagnostics-stage";
-import { fieldStage } from "./pipeline/field-stage";
+import { fieldStage, type OtherAir } from "./pipeline/field-stage";
 import { lagStage } from "./pipeline/lag-stage";
 import { placementStage } from "./pipeline/placement-stage";
 import { spotFitsPlume } from "./pipeline/retry-screen";
@@ -48,6 +50,19 @@ export function locate(
   );
   const k = settings.kernel;
   const stepScale = k.fanMixingScale < 1 ? fanStepScale(grid, plan, k.fanMixingScale) : null;
+  // Pinpoint passes (fans stopped, a defrost): their readings get their own air in the field stage.
+  const air = readingAir(input);
+  const other: OtherAir | null =
+    air.models.length > 1
+      ? {
+          models: air.models.slice(1).map((fixtures) => ({
+            fansStir: casesRunFans([...fixtures]),
+            stepScale:
+              k.fanMixingScale < 1 ? fanStepScale(grid, { ...plan, fixtures: [...fixtures] }, k.fanMixingScale) : null,
+          })),
+          modelOfReading: air.modelOfReading,
+        }
+      : null;
 
   const lagAndZones = (shift: Pick<LocatorInput["instrument"], "transportDelayS" | "timeConstantS">) => {
     const lag = lagStage(readings, shift, grid, o.walkSpeedMps);
@@ -60,12 +75,18 @@ export function locate(
     return { lag, zones };
   };
   const stages = ({ lag, zones }: ReturnType<typeof lagAndZones>) => {
-    const field = fieldStage(grid, stepScale, casesRunFans(plan.fixtures), lag, zones, settings);
-    const sources = sourcesStage(plan, grid, lag, zones, field, {
-      kernel: k,
-      sources: settings.sources,
-      zoneMarginM: settings.zones.marginM,
-    });
+    const level = other ? mixedLevel(plan, air, lag, zones.zoneOfReading, instrument.alarmPpm) : null;
+    const otherAir = other && level ? { ...other, levelOnly: level.levelOnly } : other;
+    const field = fieldStage(grid, stepScale, casesRunFans(plan.fixtures), lag, zones, settings, null, otherAir);
+    const sources = sourcesStage(
+      plan,
+      grid,
+      lag,
+      zones,
+      field,
+      { kernel: k, sources: settings.sources, zoneMarginM: settings.zones.marginM },
+      level?.columns ?? [],
+    );
     const rule = supportRule(field, zones, settings.sources);
     const placement = placementStage(plan, grid, lag, field, sources, rule, settings);
     return { lag, zones, field, sources, placement };
@@ -100,7 +121,7 @@ export function locate(
     }
   }
   const { lag, zones, field, sources, placement } = run;
-  const report = diagnosticsStage(input, grid, lag, zones, field, sources, placement, usedS, settings);
+  const report = diagnosticsStage(input, grid, lag, zones, field, sources, placement, usedS, settings, air);
   const delay: DelayFacts = {
     statedS: round2(check.statedS),
     estimatedS: check.estimatedS,

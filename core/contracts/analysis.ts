@@ -114,7 +114,13 @@ export const suspectSpotWithRefrigerant = suspectSpot.extend({ refrigerant: spot
 export type SuspectSpotWithRefrigerant = z.infer<typeof suspectSpotWithRefrigerant>;
 
 const locatorDiagnostic = [
-  z.object({ kind: z.literal("fans-mixing"), fixtureId: text(), count: z.number(), levelPpm: z.number() }),
+  z.object({
+    kind: z.literal("fans-mixing"),
+    fixtureId: text(),
+    count: z.number(),
+    levelPpm: z.number(),
+    stilledByPass: z.boolean().optional(),
+  }),
   z.object({
     kind: z.literal("benign-source"),
     zoneId: text(),

@@ -105,6 +105,27 @@ describe("locator input contract (docs/locator/command-line.md)", () => {
     ]);
   });
 
+  it("accepts pinpoint passes and names what is wrong with one", () => {
+    const x = good();
+    x.passes = [{ id: "p2", fans: "stopped", fixture: "c1" }];
+    x.readings.push({ x: 3, y: 3, t: 9, ppm: 4, pass: "p2" });
+    expect(problems(x)).toEqual([]);
+    expect(parseLocatorInput(x).passes).toEqual([{ id: "p2", fans: "stopped", defrost: false, fixture: "c1" }]);
+    const y = good();
+    y.passes = [
+      { id: "p2", fans: "idle" as "stopped" },
+      { id: "p2", fans: "running", defrost: true, fixture: "nowhere" },
+    ];
+    y.readings.push({ x: 3, y: 3, t: 9, ppm: 4, pass: "p9" });
+    expect(problems(y)).toEqual(["passes[0].fans: fans must be running or stopped"]);
+    y.passes[0].fans = "stopped";
+    expect(problems(y)).toEqual([
+      'passes[1].id: pass id "p2" is used twice',
+      'passes[1].fixture: fixture "nowhere" is not a fixture of the plan',
+      'readings[2].pass: pass "p9" is not in passes',
+    ]);
+  });
+
   it("rejects readings outside the plan", () => {
     const x = good();
     x.readings[0].x = 21;

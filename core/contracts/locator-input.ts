@@ -108,6 +108,20 @@ const reading = z.object({
   atLeast: z.boolean({ error: "atLeast must be true or false" }).optional(),
   point: z.enum(locatorReadingPoints, { error: `point must be one of ${locatorReadingPoints.join(", ")}` }).optional(),
   note: text().optional(),
+  /** The id of the pass the reading was taken in (`passes`); without it, the plan's conditions as given. */
+  pass: id.optional(),
+});
+
+/**
+ * A later pass over part of the store under other air conditions (fans stopped, a defrost), so its
+ * readings are fitted with their own air model while the sources stay shared with the first pass.
+ */
+const pass = z.object({
+  id,
+  fans: z.enum(["running", "stopped"], { error: "fans must be running or stopped" }),
+  defrost: z.boolean({ error: "defrost must be true or false" }).optional().default(false),
+  /** The fixture whose fans were stopped or which was in defrost; without it, every fixture. */
+  fixture: id.optional(),
 });
 
 export const locatorInputSchema = z
@@ -115,6 +129,11 @@ export const locatorInputSchema = z
     plan,
     instrument,
     readings: z.array(reading, { error: "readings must be an array" }).min(1, "readings must not be empty"),
+    passes: z
+      .array(pass, { error: "passes must be an array" })
+      .max(100, "passes must hold at most 100 passes")
+      .optional()
+      .default([]),
   })
   .superRefine((input, ctx) => {
     const { width, height } = input.plan;
@@ -126,7 +145,22 @@ export const locatorInputSchema = z
         message: `a ${width} m x ${height} m plan needs ${cells} cells at ${DEFAULT_CELL_SIZE_M} m, over the memory budget of ${MAX_GRID_CELLS}`,
       });
     }
+    const passIds = new Set<string>();
+    const fixtureIds = new Set(input.plan.fixtures.map((f) => f.id));
+    input.passes.forEach((p, i) => {
+      if (passIds.has(p.id))
+        ctx.addIssue({ code: "custom", path: ["passes", i, "id"], message: `pass id "${p.id}" is used twice` });
+      passIds.add(p.id);
+      if (p.fixture !== undefined && !fixtureIds.has(p.fixture))
+        ctx.addIssue({
+          code: "custom",
+          path: ["passes", i, "fixture"],
+          message: `fixture "${p.fixture}" is not a fixture of the plan`,
+        });
+    });
     input.readings.forEach((r, i) => {
+      if (r.pass !== undefined && !passIds.has(r.pass))
+        ctx.addIssue({ code: "custom", path: ["readings", i, "pass"], message: `pass "${r.pass}" is not in passes` });
       if (r.x < 0 || r.x > width || r.y < 0 || r.y > height) {
         ctx.addIssue({
           code: "custom",
@@ -144,7 +178,10 @@ export const locatorInputSchema = z
     });
   });
 
-export type LocatorInput = z.output<typeof locatorInputSchema>;
+/** The parsed input; `passes` may be left out by callers that build an input in code (it is then none). */
+export type LocatorInput = Omit<z.output<typeof locatorInputSchema>, "passes"> & {
+  passes?: z.output<typeof locatorInputSchema>["passes"];
+};
 export type LocatorInputRaw = z.input<typeof locatorInputSchema>;
 // Named apart from the product's Fixture and Reading (core/contracts/fixtures.ts, sweeps.ts): these are the
 // command-line format's records; the JSON field names stay those of docs/locator/command-line.md.
@@ -153,6 +190,7 @@ export type LocatorFixture = LocatorInput["plan"]["fixtures"][number];
 export type LocatorRiskPoint = LocatorInput["plan"]["riskPoints"][number];
 export type LocatorBackgroundZone = LocatorInput["plan"]["backgroundZones"][number];
 export type LocatorInstrument = LocatorInput["instrument"];
+export type LocatorPass = z.output<typeof locatorInputSchema>["passes"][number];
 export type LocatorFixtureKind = (typeof locatorFixtureKinds)[number];
 export type LocatorRiskPointKind = (typeof locatorRiskPointKinds)[number];
 

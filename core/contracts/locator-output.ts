@@ -53,7 +53,14 @@ export interface SuspectSpotFacts {
 /** What the technician should know about the sweep, as facts. */
 export type LocatorDiagnostic =
   /** Readings level and above the alarm all over a fixture whose fans run. */
-  | { kind: "fans-mixing"; fixtureId: string; count: number; levelPpm: number }
+  | {
+      kind: "fans-mixing";
+      fixtureId: string;
+      count: number;
+      levelPpm: number;
+      /** A pinpoint pass stilled the fixture afterwards: its readings placed the spots (decision 0111). */
+      stilledByPass?: boolean;
+    }
   /** Readings near a background zone explained by it. */
   | { kind: "benign-source"; zoneId: string; note: string | null; count: number; peakPpm: number }
   /** Taps farther apart than gapM somewhere; the longest gap and its middle, m. */

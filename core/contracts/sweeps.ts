@@ -57,6 +57,33 @@ export const sweepWarning = z.object({
 });
 export type SweepWarning = z.infer<typeof sweepWarning>;
 
+/**
+ * A pinpoint pass as the device sends it (PUT /sweeps/:id/passes/:passId, idempotent by id): the air
+ * conditions it was walked in are kept as first stored; a resend may add its end.
+ */
+export const sweepPassInput = z.object({
+  fans: z.enum(["running", "stopped"], "must be running or stopped"),
+  defrost: z.boolean("must be true or false"),
+  /** The fixture the pass covers (its fans stopped, or in defrost); absent or null: the whole store. */
+  fixtureId: z.uuid("must be a valid id").nullable().optional(),
+  startedAt: instant,
+  endedAt: instant.nullable().optional(),
+});
+export type SweepPassInput = z.input<typeof sweepPassInput>;
+
+export const sweepPass = z.object({
+  id: z.uuid(),
+  sweepId: z.uuid(),
+  /** 2, 3, … in order of start (the first pass is the sweep's own conditions). */
+  number: z.number().int().min(2),
+  fans: z.enum(["running", "stopped"]),
+  defrost: z.boolean(),
+  fixtureId: z.uuid().nullable(),
+  startedAt: text(),
+  endedAt: text().nullable(),
+});
+export type SweepPass = z.infer<typeof sweepPass>;
+
 export const sweep = z.object({
   id: z.uuid(),
   storeId: z.uuid(),
@@ -78,6 +105,8 @@ export const sweep = z.object({
   reviewedAt: text().nullable(),
   readingsRevision: z.number(),
   readingCount: z.number(),
+  /** Pinpoint passes in order of start; a server before passes sent none. */
+  passes: z.array(sweepPass).default([]),
 });
 export type Sweep = z.infer<typeof sweep>;
 
@@ -105,6 +134,8 @@ export const readingInput = z.object({
   atLeast: z.boolean("must be true or false").default(false),
   samplePoint: z.enum(SAMPLE_POINTS, `must be one of: ${SAMPLE_POINTS.join(", ")}`),
   note: text("must be text").trim().max(500, "must be at most 500 characters").default(""),
+  /** The pinpoint pass it was taken in; absent or null: the first pass (older devices send none). */
+  passId: z.uuid("must be a valid id").nullable().optional(),
 });
 export type ReadingInput = z.input<typeof readingInput>;
 
@@ -143,6 +174,8 @@ export const reading = z.object({
   atLeast: z.boolean(),
   samplePoint: z.enum(SAMPLE_POINTS),
   note: text(),
+  /** Null: the first pass. */
+  passId: z.uuid().nullable().default(null),
   receivedAt: text(),
   updatedAt: text(),
 });
@@ -150,7 +183,7 @@ export type Reading = z.infer<typeof reading>;
 
 /** An edit of a reading; `editedAt` is the device's time of the edit (kept in the audit trail). */
 export const readingEditInput = readingInput
-  .omit({ id: true, takenAt: true })
+  .omit({ id: true, takenAt: true, passId: true })
   .extend({ takenAt: instant })
   .partial()
   .extend({ editedAt: instant.optional() });

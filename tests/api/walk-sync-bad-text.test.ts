@@ -68,6 +68,7 @@ describe("one bad character in the offline queue", () => {
         systemIds: [],
         fans: "running",
         defrost: false,
+        passes: [],
         startedAt,
         status: "in-progress",
         transportDelayS: 0,

@@ -102,6 +102,7 @@ export function fillPath(path: string, f: CompanyFixture, ids: StoreIds): string
     .replace(":storeId", ids.store)
     .replace(":readingId", ids.reading)
     .replace(":photoId", crypto.randomUUID())
+    .replace(":passId", crypto.randomUUID())
     .replace(":token", "a".repeat(43))
     .replace(":id", byResource[first] ?? crypto.randomUUID());
 }

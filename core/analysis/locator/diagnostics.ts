@@ -12,6 +12,9 @@ function quantile(sorted: number[], p: number): number {
   return sorted[lo] + (sorted[hi] - sorted[lo]) * (pos - lo);
 }
 
+/** A reading this close to a fixture's outline was taken at it (a probe at the case front), m. */
+export const MIXING_REACH_M = 0.3;
+
 /**
  * Readings level and elevated across a whole fixture whose fans run: the fans spread the gas through
  * it, so no spot inside can be told from another. "Level" = the 10–90% spread is under half the median
@@ -29,7 +32,7 @@ export function fansMixing(
   const inside: number[] = [];
   for (let i = 0; i < xs.length; i++) {
     const p = [xs[i], ys[i]] as const;
-    if (pointInPolygon(p, fixture.polygon) || distanceToPolygonEdge(p, fixture.polygon) <= 0.3)
+    if (pointInPolygon(p, fixture.polygon) || distanceToPolygonEdge(p, fixture.polygon) <= MIXING_REACH_M)
       inside.push(y[i] - background);
   }
   if (inside.length < 4) return null;

@@ -7,6 +7,7 @@ import type {
 } from "../../contracts/locator-output";
 import { cellIndexOf, type PlanGrid } from "../grid/plan-grid";
 import { benignSource, fansMixing, sparseCoverage } from "../locator/diagnostics";
+import { readingsWithFansOn, stilledByAPass, type ReadingAir } from "../locator/pass-air";
 import type { ReportSettings, SourceSettings } from "../locator/settings";
 import { MOLAR_VOLUME_25C_L } from "../locator/units";
 import type { FieldResult } from "./field-stage";
@@ -34,6 +35,8 @@ export function diagnosticsStage(
   /** The lag the readings were moved back by (delay plus time constant), s. */
   shiftS: number,
   settings: { sources: Pick<SourceSettings, "elevatedPpm">; report: ReportSettings },
+  /** Each reading's air (pinpoint passes); without it every reading is in the plan's. */
+  air: ReadingAir | null = null,
 ): DiagnosticsResult {
   const { plan, instrument, readings } = input;
   const { xs, ys, ppm: y, censored, positions } = lag;
@@ -41,10 +44,13 @@ export function diagnosticsStage(
   const background = field.background.ppm;
   const delayS = round2(shiftS);
   const diagnostics: LocatorDiagnostic[] = [];
-  for (const f of plan.fixtures) {
-    const d = fansMixing(f, xs, ys, y, background, instrument.alarmPpm);
-    if (d) diagnostics.push(d);
-  }
+  plan.fixtures.forEach((f, k) => {
+    // only readings taken while this fixture's fans ran can say they mix its gas
+    const keep = air && air.models.length > 1 ? readingsWithFansOn(air, k) : null;
+    const pick = (v: Float64Array) => (keep ? Float64Array.from(keep, (i) => v[i]) : v);
+    const d = fansMixing(f, pick(xs), pick(ys), pick(y), background, instrument.alarmPpm);
+    if (d?.kind === "fans-mixing") diagnostics.push(air && stilledByAPass(air, k) ? { ...d, stilledByPass: true } : d);
+  });
   plan.backgroundZones.forEach((zone, z) => {
     let explained = 0;
     let peak = 0;

@@ -21,7 +21,7 @@ export interface SourcesResult {
   readonly prior: Float64Array | null;
   /** Fitted sources (strongest first), then alternatives of the first scan. */
   readonly found: readonly FoundSource[];
-  /** The final joint fit: background b, then one strength per zone, then per fitted source. */
+  /** The final joint fit: background b, then one strength per zone, per stilled fixture's level, then per fitted source. */
   readonly fit: NonnegativeFit;
   readonly firstScan: ScanResult;
   /** Residual variance of the final fit (at least 1), which tempers every Δχ² later on. */
@@ -49,9 +49,14 @@ export function supportingReadings(
   return idx;
 }
 
-export function supportRule(field: FieldResult, zones: ZonesResult, sources: SourceSettings): SupportRule {
+export function supportRule(
+  field: Pick<FieldResult, "kernels">,
+  zones: ZonesResult,
+  sources: SourceSettings,
+): SupportRule {
   return {
-    threshold: field.kernel.at(sources.supportRadiusM),
+    // with several air models, a reading within the radius in any of them supports the spot
+    threshold: Math.min(...field.kernels.map((k) => k.at(sources.supportRadiusM))),
     elevatedPpm: sources.elevatedPpm,
     zoneOfReading: zones.zoneOfReading,
   };
@@ -76,6 +81,8 @@ export function sourcesStage(
   zones: ZonesResult,
   field: FieldResult,
   settings: { kernel: KernelSettings; sources: SourceSettings; zoneMarginM: number },
+  /** Fixed columns fitted with the zones' after them: the level of fixtures a pinpoint pass stilled (mixed-level.ts). */
+  levels: readonly Float64Array[] = [],
 ): SourcesResult {
   const s = settings.sources;
   const y = lag.ppm;
@@ -123,7 +130,7 @@ export function sourcesStage(
     y,
     w: field.weights,
     censored: lag.censored,
-    nuisance: zones.columns as Float64Array[],
+    nuisance: [...zones.columns, ...levels],
     allowed,
     gridWidth: grid.width,
     cellSize: grid.cellSize,
@@ -146,7 +153,7 @@ export function sourcesStage(
       return true;
     },
   });
-  const dof = Math.max(1, n - 2 - greedy.sources.length - zones.columns.length);
+  const dof = Math.max(1, n - 2 - greedy.sources.length - zones.columns.length - levels.length);
   return {
     fields,
     allowed,

@@ -13,6 +13,8 @@ export function diagnosticWords(d: LocatorDiagnostic, ctx: WordsContext): string
   const name = (id: string, fallback: string) => ctx.name(id) ?? fallback;
   switch (d.kind) {
     case "fans-mixing":
+      if (d.stilledByPass)
+        return `${d.count} readings across ${name(d.fixtureId, "a fixture")} were level at about ${ppm(d.levelPpm)} while its fans ran: they mixed the gas. A still-air pass followed, and its readings place the spots.`;
       return `${d.count} readings across ${name(d.fixtureId, "a fixture")} are level at about ${ppm(d.levelPpm)}: its fans are mixing the gas. Stop the fans (or wait for defrost), let the air settle and sweep it again.`;
     case "benign-source":
       return `${d.count} ${plural(d.count, "reading", "readings")} near ${name(d.zoneId, "a benign-source zone")}${d.note ? ` (${d.note})` : ""}, up to ${ppm(d.peakPpm)}, ${plural(d.count, "is", "are")} explained by that benign-source zone and not counted as leak evidence.`;

@@ -200,6 +200,14 @@ describe("diagnostics and the delay in words", () => {
   it("names the fixture whose fans mix the gas", () => {
     const text = diagnosticWords({ kind: "fans-mixing", fixtureId: CASE, count: 9, levelPpm: 12.25 }, ctx);
     expect(text).toMatch(/^9 readings across Dairy 3 are level at about 12\.3 ppm/);
+    // after a still-air pass over it, the advice to stop the fans is history, not a next step
+    const after = diagnosticWords(
+      { kind: "fans-mixing", fixtureId: CASE, count: 9, levelPpm: 12.25, stilledByPass: true },
+      ctx,
+    );
+    expect(after).toMatch(/^9 readings across Dairy 3 were level at about 12\.3 ppm while its fans ran/);
+    expect(after).toMatch(/A still-air pass followed/);
+    expect(after).not.toMatch(/Stop the fans/);
   });
 
   it("speaks of the detector's delay (the shift less the time constant)", () => {

@@ -15,7 +15,8 @@ export type CautionId =
   | "oxygen-displacement"
   | "pressure-test-nitrogen"
   | "certified-technicians"
-  | "codes-govern";
+  | "codes-govern"
+  | "product-temperature";
 
 export type CautionPlace = "walk-in" | "machine-room" | "sales-floor";
 

@@ -1,9 +1,9 @@
 import { asc, eq } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import type { AnalysisParams } from "#core/contracts/analysis";
-import { detectors, fixtures, plans, readings, sweeps } from "../../db/schema/index";
+import { detectors, fixtures, plans, readings, sweepPasses, sweeps } from "../../db/schema/index";
 import { toLocatorPlan } from "#core/domain/layout/to-locator-input";
-import type { SweepReadingRow } from "#core/domain/fieldmap/sweep-locator-input";
+import type { SweepPassConditions, SweepReadingRow } from "#core/domain/fieldmap/sweep-locator-input";
 import { badRequest, notFound } from "../../lib/http-error";
 import { planBounds, rowToFixture } from "../../db/plans/plan-rows";
 import type { SweepRow } from "../../access/sweep-access";
@@ -11,6 +11,7 @@ import type { SweepRow } from "../../access/sweep-access";
 export interface AnalysisInputs {
   sweep: SweepRow;
   readings: SweepReadingRow[];
+  passes: SweepPassConditions[];
   plan: ReturnType<typeof toLocatorPlan>;
   detectorName: string;
 }
@@ -45,6 +46,7 @@ export async function loadAnalysisInputs(ctx: AppContext, sweepId: string): Prom
           atLeast: readings.atLeast,
           samplePoint: readings.samplePoint,
           note: readings.note,
+          passId: readings.passId,
         })
         .from(readings)
         .where(eq(readings.sweepId, sweepId))
@@ -62,7 +64,17 @@ export async function loadAnalysisInputs(ctx: AppContext, sweepId: string): Prom
         .orderBy(asc(fixtures.position));
       const [det] = await tx.select({ name: detectors.name }).from(detectors).where(eq(detectors.id, sweep.detectorId));
       const plan = toLocatorPlan(bounds, fixtureRows.map(rowToFixture), { fansRunning: sweep.fans === "running" });
-      return { sweep, readings: rows, plan, detectorName: det?.name ?? "The detector" };
+      const passes = await tx
+        .select({
+          id: sweepPasses.id,
+          fans: sweepPasses.fans,
+          defrost: sweepPasses.defrost,
+          fixtureId: sweepPasses.fixtureId,
+        })
+        .from(sweepPasses)
+        .where(eq(sweepPasses.sweepId, sweepId))
+        .orderBy(asc(sweepPasses.startedAt));
+      return { sweep, readings: rows, passes, plan, detectorName: det?.name ?? "The detector" };
     },
     { isolationLevel: "repeatable read", accessMode: "read only" },
   );

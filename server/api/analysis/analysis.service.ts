@@ -76,8 +76,8 @@ export function sweepParams(
 }
 
 async function compute(ctx: AppContext, sweepId: string, params: AnalysisParams): Promise<AnalysisRow> {
-  const { sweep, readings, plan, detectorName } = await loadAnalysisInputs(ctx, sweepId);
-  const { input: raw, readingIds } = sweepLocatorInput(plan, sweep.startedAt, readings, params);
+  const { sweep, readings, passes, plan, detectorName } = await loadAnalysisInputs(ctx, sweepId);
+  const { input: raw, readingIds } = sweepLocatorInput(plan, sweep.startedAt, readings, params, passes);
   let input;
   try {
     input = parseLocatorInput(raw);

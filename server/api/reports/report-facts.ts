@@ -13,6 +13,7 @@ import {
   plans,
   readings,
   stores,
+  sweepPasses,
   systems,
   users,
 } from "../../db/schema/index";
@@ -38,6 +39,7 @@ import { ensureAnalysis, rowField, type AnalysisRow } from "../analysis/analysis
 import { companyRules } from "../compliance/system-records";
 import { companyPaper } from "../../reports/company-paper";
 import { formatInZone } from "#core/domain/dates/format-in-zone";
+import { passNumberOf, sweepConditionsWords } from "#core/domain/sweeps/pass-words";
 
 export interface ReportFacts {
   sweep: SweepRow;
@@ -93,7 +95,7 @@ export async function loadReportFacts(
   ]);
   const tz = store.timeZone;
   const paper = await companyPaper(ctx, sweep.companyId, rules.profile);
-  const [fixtureRows, readingRows, findingRows, systemRows] = await Promise.all([
+  const [fixtureRows, readingRows, findingRows, systemRows, passRows] = await Promise.all([
     ctx.db.select().from(fixtures).where(eq(fixtures.planId, sweep.planId)).orderBy(asc(fixtures.position)),
     ctx.db
       .select()
@@ -108,7 +110,13 @@ export async function loadReportFacts(
     sweep.systemIds.length
       ? ctx.db.select().from(systems).where(inArray(systems.id, sweep.systemIds))
       : Promise.resolve([]),
+    ctx.db
+      .select()
+      .from(sweepPasses)
+      .where(eq(sweepPasses.sweepId, sweep.id))
+      .orderBy(asc(sweepPasses.startedAt), asc(sweepPasses.id)),
   ]);
+  const passOf = passNumberOf(passRows);
   const label = new Map(fixtureRows.map((f) => [f.id, f.label || f.kind]));
   const fmt = units.number;
   // Metres to one decimal in the company's number format; feet and inches to the half inch.
@@ -169,7 +177,12 @@ export async function loadReportFacts(
           ? `reviewed ${zonedDateTime(sweep.reviewedAt, tz)}`
           : sweep.status.replace("-", " "),
       technician: tech?.name ?? "",
-      conditions: `fans ${sweep.fans}${sweep.defrost ? ", in defrost" : ""}`,
+      conditions: sweepConditionsWords(
+        sweep,
+        passRows,
+        (id) => label.get(id) ?? "a fixture",
+        (d) => zonedTime(d, tz),
+      ),
     },
     detector: {
       name: det?.name ?? "",
@@ -219,7 +232,8 @@ export async function loadReportFacts(
         raw: pos(r.x, r.y),
         corrected: c ? pos(c.corrected.x, c.corrected.y) : "—",
         ppm: `${r.atLeast ? "≥ " : ""}${qty(r.ppm)}`,
-        point: SAMPLE_POINT_LABELS[r.samplePoint],
+        // the pass a reading was taken in, when the sweep had more than one
+        point: `${SAMPLE_POINT_LABELS[r.samplePoint]}${passRows.length ? `, pass ${passOf(r.passId)}` : ""}`,
         note: r.note,
       };
     }),

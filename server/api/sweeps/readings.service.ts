@@ -15,6 +15,7 @@ import { HttpError, notFound } from "../../lib/http-error";
 import { zodFields } from "../../lib/zod-fields";
 import type { Viewer } from "../../access/store-access";
 import { loadVisibleSweep, type SweepRow } from "../../access/sweep-access";
+import { passIdsOfSweep } from "./passes.service";
 
 type ReadingRow = typeof readings.$inferSelect;
 
@@ -29,6 +30,7 @@ function toReading(r: ReadingRow): Reading {
     atLeast: r.atLeast,
     samplePoint: r.samplePoint,
     note: r.note,
+    passId: r.passId,
     receivedAt: r.receivedAt.toISOString(),
     updatedAt: r.updatedAt.toISOString(),
   };
@@ -70,7 +72,7 @@ function assertOpen(sweep: SweepRow): void {
 }
 
 /**
- * Inserts a batch as ten column arrays through unnest: one statement with ten parameters instead
+ * Inserts a batch as eleven column arrays through unnest: one statement with eleven parameters instead
  * of twelve thousand, which keeps a 1,000-reading upload well inside the sync target. Ids already
  * stored are skipped (on conflict do nothing), so only the newly stored ids come back.
  */
@@ -79,11 +81,12 @@ async function insertReadings(tx: Tx, rows: (typeof readings.$inferInsert)[]): P
   // sql.param keeps each array ONE parameter (a bare array would expand into a list).
   const col = <T>(f: (r: typeof readings.$inferInsert) => T) => sql.param(rows.map(f));
   const result = await tx.execute<{ id: string }>(sql`
-    insert into readings (id, sweep_id, x, y, taken_at, ppm, at_least, sample_point, note, recorded_by_id)
+    insert into readings (id, sweep_id, x, y, taken_at, ppm, at_least, sample_point, note, recorded_by_id, pass_id)
     select * from unnest(
       ${col((r) => r.id)}::uuid[], ${col((r) => r.sweepId)}::uuid[], ${col((r) => r.x)}::float8[], ${col((r) => r.y)}::float8[],
       ${col((r) => (r.takenAt as Date).toISOString())}::timestamptz[], ${col((r) => r.ppm)}::float8[], ${col((r) => r.atLeast ?? false)}::boolean[],
-      ${col((r) => r.samplePoint)}::text[], ${col((r) => r.note ?? "")}::text[], ${col((r) => r.recordedById ?? null)}::uuid[]
+      ${col((r) => r.samplePoint)}::text[], ${col((r) => r.note ?? "")}::text[], ${col((r) => r.recordedById ?? null)}::uuid[],
+      ${col((r) => r.passId ?? null)}::uuid[]
     )
     on conflict (id) do nothing
     returning id`);
@@ -118,6 +121,12 @@ export async function uploadReadings(
   const good: (typeof readings.$inferInsert)[] = [];
   const seen = new Set<string>();
   const batchDuplicates: string[] = [];
+  // A reading names its pass by id; the pass must have reached the server first (the queue sends passes first).
+  const named = items.flatMap((item) => {
+    const passId = item && typeof item === "object" ? (item as { passId?: unknown }).passId : undefined;
+    return typeof passId === "string" && /^[0-9a-f-]{36}$/i.test(passId) ? [passId] : [];
+  });
+  const knownPasses = await passIdsOfSweep(ctx, sweepId, [...new Set(named)]);
   items.forEach((item, index) => {
     const id =
       item && typeof item === "object" && typeof (item as { id?: unknown }).id === "string"
@@ -131,6 +140,7 @@ export async function uploadReadings(
     const r = parsed.data;
     const takenAt = new Date(r.takenAt);
     const problems = readingProblems({ x: r.x, y: r.y, takenAtMs: takenAt.getTime() }, c);
+    if (r.passId && !knownPasses.has(r.passId)) problems.passId = "is not a pass of this sweep";
     if (Object.keys(problems).length) {
       rejected.push({ index, id: r.id, reasons: problems });
       return;
@@ -150,6 +160,7 @@ export async function uploadReadings(
       atLeast: r.atLeast,
       samplePoint: r.samplePoint,
       note: r.note,
+      passId: r.passId ?? null,
       recordedById: userId,
     });
   });

@@ -1,16 +1,18 @@
 import { Router } from "express";
 import { z } from "zod";
 import type { AppContext } from "../../context";
-import { createSweepInput, readingEditInput, readingsBatchInput } from "#core/contracts/sweeps";
+import { createSweepInput, readingEditInput, readingsBatchInput, sweepPassInput } from "#core/contracts/sweeps";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { syncThrottle } from "../../middleware/sync-throttle";
 import { deleteReading, editReading, listReadings, readingAuditTrail, uploadReadings } from "./readings.service";
+import { savePass } from "./passes.service";
 import { createSweep, getSweep, listInProgressSweeps, listSweeps, setSweepStatus } from "./sweeps.service";
 
 const storeParam = z.object({ storeId: z.uuid("must be a valid id") });
 const idParam = z.object({ id: z.uuid("must be a valid id") });
 const readingParam = z.object({ id: z.uuid("must be a valid id"), readingId: z.uuid("must be a valid id") });
+const passParam = z.object({ id: z.uuid("must be a valid id"), passId: z.uuid("must be a valid id") });
 const deleteQuery = z.object({
   editedAt: z.iso.datetime({ offset: true, message: "must be a date and time" }).optional(),
 });
@@ -59,6 +61,19 @@ export function sweepsRouter(ctx: AppContext): Router {
   router.post("/sweeps/:id/review", requireMember("sweeps.review"), validate(idParam, "params"), async (req, res) => {
     res.json(await setSweepStatus(ctx, member(req), userId(req), res.locals.params.id, "reviewed"));
   });
+
+  // A pinpoint pass: made on the device (its id too), so a resend is harmless; a resend may add the end.
+  router.put(
+    "/sweeps/:id/passes/:passId",
+    requireMember("sweeps.record"),
+    throttle,
+    validate(passParam, "params"),
+    validate(sweepPassInput),
+    async (req, res) => {
+      const { id, passId } = res.locals.params;
+      res.json(await savePass(ctx, member(req), userId(req), id, passId, req.body));
+    },
+  );
 
   router.get("/sweeps/:id/readings", requireMember("sweeps.read"), validate(idParam, "params"), async (req, res) => {
     res.json({ readings: await listReadings(ctx, member(req), res.locals.params.id) });

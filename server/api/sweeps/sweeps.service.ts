@@ -9,6 +9,7 @@ import { badRequest, conflict, HttpError } from "../../lib/http-error";
 import { checkStatus } from "../detectors/detectors.service";
 import { loadVisibleStore, visibleStores, type Viewer } from "../../access/store-access";
 import { loadVisibleSweep, type SweepRow } from "../../access/sweep-access";
+import { passesOf } from "./passes.service";
 
 type Parsed = Omit<CreateSweepInput, "systemIds"> & { systemIds: string[] };
 
@@ -29,6 +30,7 @@ async function toSweeps(ctx: AppContext, rows: SweepRow[]): Promise<Sweep[]> {
     .select({ id: users.id, name: users.name })
     .from(users)
     .where(inArray(users.id, [...new Set(rows.map((r) => r.technicianId))]));
+  const passes = await passesOf(ctx, ids);
   const detName = new Map(dets.map((d) => [d.id, d.name]));
   const techName = new Map(techs.map((u) => [u.id, u.name]));
   return rows.map((r) => ({
@@ -52,6 +54,7 @@ async function toSweeps(ctx: AppContext, rows: SweepRow[]): Promise<Sweep[]> {
     reviewedAt: r.reviewedAt?.toISOString() ?? null,
     readingsRevision: r.readingsRevision,
     readingCount: byId.get(r.id) ?? 0,
+    passes: passes.get(r.id) ?? [],
   }));
 }
 

@@ -74,6 +74,31 @@ export const sweeps = pgTable(
   ],
 );
 
+/**
+ * A pinpoint pass: part of a sweep walked again under other air conditions (fans stopped, a defrost),
+ * optionally over one fixture. The sweep's own fans/defrost are its first pass, which has no row: a
+ * reading without a pass belongs to it. The id is made on the device, so a resend stores it once.
+ */
+export const sweepPasses = pgTable(
+  "sweep_passes",
+  {
+    id: uuid().primaryKey(),
+    sweepId: uuid()
+      .notNull()
+      .references(() => sweeps.id, { onDelete: "cascade" }),
+    fans: text({ enum: FANS_VALUES }).notNull(),
+    defrost: boolean().notNull(),
+    /** The fixture (stable id on the sweep's plan) whose fans were stopped or which was in defrost; null = all. */
+    fixtureId: uuid(),
+    /** Device times of the start and the end (the same clock as the readings' timestamps). */
+    startedAt: timestamp({ withTimezone: true, precision: 3 }).notNull(),
+    endedAt: timestamp({ withTimezone: true, precision: 3 }),
+    startedById: uuid().references(() => users.id, { onDelete: "set null" }),
+    receivedAt: timestamp({ withTimezone: true, precision: 3 }).notNull().defaultNow(),
+  },
+  (t) => [index("sweep_passes_sweep").on(t.sweepId, t.startedAt)],
+);
+
 /** One tap on the plan. The id is made on the device, so a retried upload stores it once. */
 export const readings = pgTable(
   "readings",
@@ -92,6 +117,8 @@ export const readings = pgTable(
     atLeast: boolean().notNull().default(false),
     samplePoint: text({ enum: SAMPLE_POINT_VALUES }).notNull(),
     note: text().notNull().default(""),
+    /** The pinpoint pass it was taken in; null = the first pass (the sweep's own conditions). */
+    passId: uuid().references(() => sweepPasses.id),
     recordedById: uuid().references(() => users.id, { onDelete: "set null" }),
     /** Server receive time of the first upload and of the last edit (the edit rule compares these). */
     receivedAt: timestamp({ withTimezone: true, precision: 3 }).notNull().defaultNow(),

@@ -12,7 +12,9 @@ import { useFindings } from "../../entities/findings/findings-api";
 import { usePlanFixtures, usePlans } from "../../entities/plans/plans-api";
 import { useStores } from "../../entities/stores/stores-api";
 import { useAnalysis } from "../../entities/sweeps/analysis-api";
-import { useSweep } from "../../entities/sweeps/sweeps-api";
+import { useSweep, useSweepReadings } from "../../entities/sweeps/sweeps-api";
+import { PassKey } from "../../features/fieldmap/components/pass-key";
+import { withPasses } from "../../features/fieldmap/model/reading-passes";
 import { useFindingFromSpot } from "../../features/fieldmap/api/findings";
 import { useReviewSweep } from "../../features/fieldmap/api/reports";
 import { DelayControl } from "../../features/fieldmap/components/delay-control";
@@ -57,6 +59,8 @@ function FieldMapPage() {
   const plan = plans.data?.find((p) => p.id === sweep.data?.planId);
   const fixtures = usePlanFixtures(sweep.data?.planId);
   const analysis = useAnalysis(sweepId, delay, !!sweep.data);
+  // which pass each reading was taken in, drawn on the map when the sweep has pinpoint passes
+  const stored = useSweepReadings(sweepId, (sweep.data?.passes.length ?? 0) > 0);
   const findings = useFindings(storeId);
   const review = useReviewSweep(sweepId);
   const makeFinding = useFindingFromSpot(storeId, sweepId, sweep.data?.planId ?? "");
@@ -177,7 +181,7 @@ function FieldMapPage() {
                 paint={paint}
                 layers={layers}
                 fixtures={overlayFixtures}
-                readings={a.readings}
+                readings={withPasses(a.readings, stored.data, sweep.data?.passes ?? [])}
                 spots={a.candidates}
                 selected={selected}
                 width={width}
@@ -198,6 +202,9 @@ function FieldMapPage() {
             ticks={scale.ticks()}
           />
           <LayerToggles layers={layers} onChange={setLayers} log={log} onLog={setLog} />
+          {sweep.data ? (
+            <PassKey sweep={sweep.data} name={(id) => label(id) ?? "a fixture"} time={(iso) => zoned(iso)} />
+          ) : null}
           {can(membership.role, "analyses.tune") ? (
             <DelayControl
               detectorDelayS={s.transportDelayS}

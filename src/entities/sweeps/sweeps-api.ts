@@ -37,3 +37,12 @@ export function useSweep(id: string) {
 export async function getSweepReadings(id: string, signal?: AbortSignal) {
   return (await api.get(`/api/sweeps/${id}/readings`, readingListResponse, signal)).readings;
 }
+
+/** The stored readings, read only when `enabled` (the field map asks for them when the sweep has pinpoint passes). */
+export function useSweepReadings(id: string, enabled: boolean) {
+  return useQuery({
+    queryKey: sweepsKeys.readings(id),
+    queryFn: ({ signal }) => getSweepReadings(id, signal),
+    enabled,
+  });
+}

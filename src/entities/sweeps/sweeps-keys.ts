@@ -11,6 +11,7 @@ export const sweepsKeys = {
   details: () => [...sweepsKeys.all, "detail"] as const,
   detail: (id: string) => [...sweepsKeys.details(), id] as const,
   analyses: (id: string) => [...sweepsKeys.detail(id), "analysis"] as const,
+  readings: (id: string) => [...sweepsKeys.detail(id), "readings"] as const,
   analysis: (id: string, transportDelayS: number | null) =>
     [...sweepsKeys.analyses(id), transportDelayS ?? "detector"] as const,
 };

@@ -15,6 +15,8 @@ export interface OverlayReading {
   raw: { x: number; y: number };
   corrected: { x: number; y: number };
   ppm: number;
+  /** The pass it was taken in: 1 (or absent) for the first, 2, 3, … for pinpoint passes (drawn as squares). */
+  pass?: number;
 }
 
 export interface OverlaySpot {
@@ -112,7 +114,9 @@ export function drawTaps(
       }
     }
     ctx.beginPath();
-    ctx.arc(px, py, which === "raw" ? 3.5 : 2.5, 0, 2 * Math.PI);
+    const size = which === "raw" ? 3.5 : 2.5;
+    if ((r.pass ?? 1) > 1) ctx.rect(px - size, py - size, 2 * size, 2 * size);
+    else ctx.arc(px, py, size, 0, 2 * Math.PI);
     if (which === "raw") {
       ctx.strokeStyle = "#1c2529";
       ctx.lineWidth = 1.2;

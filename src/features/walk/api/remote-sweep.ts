@@ -3,6 +3,7 @@ import type { LocalReading, LocalSweep } from "../model/local-types";
 import type { WalkDb } from "../model/walk-db";
 import { SYNCED } from "../model/reading-sync";
 import { SWEEP_ON_SERVER } from "../model/sweep-sync";
+import { DEFAULT_RESTORE_AFTER_MIN } from "../model/pinpoint-pass";
 
 /**
  * A sweep this device does not hold (opened from another device's link): copy it and its
@@ -27,6 +28,17 @@ export async function pullSweep(db: WalkDb, sweepId: string): Promise<LocalSweep
     alarmPpm: s.alarmPpm,
     warnings: s.warnings,
     sync: SWEEP_ON_SERVER,
+    // the device keeps its own reminder; a pass pulled from the server gets the default
+    passes: s.passes.map((p) => ({
+      id: p.id,
+      fans: p.fans,
+      defrost: p.defrost,
+      fixtureId: p.fixtureId,
+      startedAt: p.startedAt,
+      endedAt: p.endedAt,
+      restoreAfterMin: DEFAULT_RESTORE_AFTER_MIN,
+      sync: { kind: "on-server" as const },
+    })),
   };
   const tx = db.transaction(["sweeps", "readings", "meta"], "readwrite");
   await tx.objectStore("sweeps").put(local);
@@ -45,6 +57,7 @@ export async function pullSweep(db: WalkDb, sweepId: string): Promise<LocalSweep
       atLeast: r.atLeast,
       samplePoint: r.samplePoint,
       note: r.note,
+      passId: r.passId,
       sync: SYNCED,
     };
     await tx.objectStore("readings").put(row);

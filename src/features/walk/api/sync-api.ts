@@ -3,6 +3,7 @@ import {
   type CreateSweepInput,
   type ReadingEditInput,
   type ReadingInput,
+  type SweepPassInput,
 } from "#core/contracts/sweeps";
 import { api, isApiRequestError } from "../../../lib/api-client";
 import { RefusedError, type SyncTransport } from "../model/sync-transport";
@@ -25,6 +26,9 @@ export const httpSyncTransport: SyncTransport = {
   },
   uploadReadings(sweepId: string, readings: ReadingInput[]) {
     return call(() => api.post(`/api/sweeps/${sweepId}/readings`, readingsBatchResult, { readings }));
+  },
+  async savePass(sweepId: string, passId: string, body: SweepPassInput) {
+    await call(() => api.put(`/api/sweeps/${sweepId}/passes/${passId}`, null, body));
   },
   async editReading(sweepId: string, readingId: string, body: ReadingEditInput) {
     await call(() => api.patch(`/api/sweeps/${sweepId}/readings/${readingId}`, null, body));

@@ -76,6 +76,7 @@ export function StartSweepForm({ storeId, onStarted }: { storeId: string; onStar
         alarmPpm: detector.alarmPpm,
         warnings,
         sync: SWEEP_QUEUED_NEW,
+        passes: [],
       };
       await saveSweep(await walkDb(), sweep);
       void syncNow();

@@ -32,6 +32,7 @@ import { settledSuspect } from "../model/live-state";
 import { supplyCheckOf } from "../model/supply-check";
 import { supplyAirNote } from "#core/domain/locator-words/live-guide-words";
 import { LogImport } from "./log-import";
+import { PinpointPassPanel } from "./pinpoint-pass-panel";
 import { PlanStage } from "./plan-stage";
 import { PpmKeypad, type KeypadValue } from "./ppm-keypad";
 import { ReadingsDrawer } from "./readings-drawer";
@@ -293,6 +294,14 @@ export function WalkScreen({
             </button>
           </Alert>
         ) : null}
+        <PinpointPassPanel
+          sweep={sweep}
+          fixtures={fixtures}
+          committed={committed}
+          systems={storePack.data?.systems ?? []}
+          readOnly={readOnly}
+          reload={walk.reload}
+        />
         {showHint ? (
           <LagHintBanner
             hint={showHint}

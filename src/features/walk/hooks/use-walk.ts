@@ -14,6 +14,7 @@ import {
 } from "../model/reading-store";
 import { walkDb } from "../model/walk-db";
 import { afterSubmitAsked } from "../model/sweep-sync";
+import { passIdAt, passIdForNewReading } from "../model/pinpoint-pass";
 import { refreshCounts, subscribeSync, syncSoon } from "./sync-loop";
 
 /** Values a new reading starts with instead of the defaults. */
@@ -39,6 +40,9 @@ export function useWalk(sweepId: string) {
   const [state, setState] = useState<WalkState>({ sweep: null, readings: [], loading: true, error: null });
   const readingsRef = useRef<LocalReading[]>([]);
   readingsRef.current = state.readings;
+  // A new reading belongs to the pinpoint pass open now, if any.
+  const sweepRef = useRef<LocalSweep | null>(null);
+  sweepRef.current = state.sweep;
 
   const reload = useCallback(async () => {
     const db = await walkDb();
@@ -100,7 +104,7 @@ export function useWalk(sweepId: string) {
         note: "",
         ...preset,
       };
-      const r = await addReading(db, sweepId, values, { draft: true });
+      const r = await addReading(db, sweepId, values, { draft: true, passId: passIdForNewReading(sweepRef.current) });
       setState((s) => ({ ...s, readings: [...s.readings, r] }));
       return r;
     },
@@ -127,7 +131,7 @@ export function useWalk(sweepId: string) {
         db,
         sweepId,
         { x, y, takenAt: new Date(at).toISOString(), ppm: 0, atLeast: false, samplePoint, note: "", ...preset },
-        { draft: true },
+        { draft: true, passId: passIdForNewReading(sweepRef.current) },
       );
       setState((s) => ({ ...s, readings: [...s.readings.map((x) => (x.id === id && saved ? saved : x)), r] }));
       changed();
@@ -182,7 +186,7 @@ export function useWalk(sweepId: string) {
   const addMany = useCallback(
     async (list: ReadingValues[]) => {
       const db = await walkDb();
-      for (const v of list) await addReading(db, sweepId, v);
+      for (const v of list) await addReading(db, sweepId, v, { passId: passIdAt(sweepRef.current, v.takenAt) });
       await reload();
       changed();
     },

@@ -20,6 +20,26 @@ export interface LocalSweep {
   alarmPpm: number;
   warnings: SweepWarning[];
   sync: SweepSync;
+  /** Pinpoint passes in order of start (the sweep's own fans/defrost are the first pass). */
+  passes: LocalPass[];
+}
+
+/**
+ * A pinpoint pass as the device holds it: the air it is walked in, and when the technician wants to be
+ * told to restore the fans. Written here first, like a reading; `sync` says whether the server has it
+ * (its start, and its end once ended).
+ */
+export interface LocalPass {
+  id: string;
+  fans: "running" | "stopped";
+  defrost: boolean;
+  /** The fixture whose fans were stopped or which is in defrost; null = the whole store. */
+  fixtureId: string | null;
+  startedAt: string;
+  endedAt: string | null;
+  /** Minutes after the start at which the screen asks for the fans to be restored. */
+  restoreAfterMin: number;
+  sync: { kind: "queued" } | { kind: "on-server" } | { kind: "refused"; reasons: Record<string, string> };
 }
 
 /** A reading as the device holds it. It is written here FIRST, before any upload. */
@@ -35,6 +55,8 @@ export interface LocalReading {
   atLeast: boolean;
   samplePoint: SamplePoint;
   note: string;
+  /** The pinpoint pass it was taken in; null (or absent, in rows made in code) = the first pass. */
+  passId?: string | null;
   sync: ReadingSync;
 }
 

@@ -29,7 +29,7 @@ export async function addReading(
   db: WalkDb,
   sweepId: string,
   values: ReadingValues,
-  options: { id?: string; draft?: boolean } = {},
+  options: { id?: string; draft?: boolean; passId?: string | null } = {},
 ): Promise<LocalReading> {
   // One transaction for the counter and the reading: a tap costs a single IndexedDB commit.
   const tx = db.transaction(["readings", "meta"], "readwrite", RELAXED);
@@ -39,6 +39,7 @@ export async function addReading(
     sweepId,
     seq,
     ...values,
+    passId: options.passId ?? null,
     sync: options.draft ? DRAFT : QUEUED_NEW,
   };
   await tx.objectStore("meta").put(seq, "seq");

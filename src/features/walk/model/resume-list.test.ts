@@ -18,6 +18,7 @@ function local(id: string, startedAt: string, over: Partial<LocalSweep> = {}): L
     fans: "running",
     defrost: false,
     startedAt,
+    passes: [],
     status: "in-progress",
     transportDelayS: 5,
     timeConstantS: 1.5,
@@ -36,6 +37,7 @@ function remote(
 ): Sweep {
   return {
     ...local(id, startedAt),
+    passes: [],
     technicianId,
     technicianName: technicianId === ME ? "Me" : "Dana",
     status: status as Sweep["status"],

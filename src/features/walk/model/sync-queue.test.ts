@@ -1,7 +1,13 @@
 import "fake-indexeddb/auto";
 import { beforeEach, describe, expect, it } from "vitest";
 import type { CreateFindingInput } from "#core/contracts/findings";
-import type { CreateSweepInput, ReadingEditInput, ReadingInput, ReadingsBatchResult } from "#core/contracts/sweeps";
+import type {
+  CreateSweepInput,
+  ReadingEditInput,
+  ReadingInput,
+  ReadingsBatchResult,
+  SweepPassInput,
+} from "#core/contracts/sweeps";
 import type { LocalSweep } from "./local-types";
 import { discardFinding, queueFinding } from "./finding-queue";
 import {
@@ -45,6 +51,14 @@ class FakeServer implements SyncTransport {
       throw new RefusedError(400, "Please check: planId is not calibrated yet.", { planId: "is not calibrated yet" });
     this.sweeps.add(body.id!);
   }
+  passes = new Map<string, SweepPassInput & { sweepId: string }>();
+  async savePass(sweepId: string, passId: string, body: SweepPassInput) {
+    this.check();
+    if (!this.sweeps.has(sweepId)) throw new RefusedError(404, "That sweep was not found.", {});
+    if (body.fixtureId === BAD_FIXTURE)
+      throw new RefusedError(400, "Please check: fixtureId.", { fixtureId: "is not a fixture of the sweep's plan" });
+    this.passes.set(passId, { ...this.passes.get(passId), ...body, sweepId });
+  }
   async uploadReadings(sweepId: string, list: ReadingInput[]): Promise<ReadingsBatchResult> {
     this.check();
     if (!this.sweeps.has(sweepId)) throw new RefusedError(404, "That sweep was not found.", {});
@@ -52,6 +66,8 @@ class FakeServer implements SyncTransport {
     const result: ReadingsBatchResult = { stored: [], duplicates: [], rejected: [], readingsRevision: 0 };
     list.forEach((r, index) => {
       if (r.ppm < 0) result.rejected.push({ index, id: r.id, reasons: { ppm: "must be 0 ppm or more" } });
+      else if (r.passId && !this.passes.has(r.passId))
+        result.rejected.push({ index, id: r.id, reasons: { passId: "is not a pass of this sweep" } });
       else if (this.readings.has(r.id)) result.duplicates.push(r.id);
       else {
         this.readings.set(r.id, r);
@@ -119,7 +135,10 @@ const sweep: LocalSweep = {
   alarmPpm: 2,
   warnings: [],
   sync: { kind: "queued-new", thenSubmit: false },
+  passes: [],
 };
+/** A fixture id the fake server refuses for a pass. */
+const BAD_FIXTURE = "0b5d1a3e-2c4f-4e6a-8b7c-9d0e1f2a3b4c";
 const values = (i: number, ppm = 0) => ({
   x: i,
   y: 2,
@@ -321,5 +340,40 @@ describe("the sync queue", () => {
     expect(await queueCounts(db)).toEqual({ waiting: 0, rejected: 1 });
     await discardFinding(db, bad);
     expect(await queueCounts(db)).toEqual({ waiting: 0, rejected: 0 });
+  });
+});
+
+describe("the sync queue with pinpoint passes", () => {
+  it("holds a refused pass with its reasons and still sends the other readings; the pass's readings come back refused by field", async () => {
+    await saveSweep(db, {
+      ...sweep,
+      passes: [
+        {
+          id: "bad-pass",
+          fans: "stopped",
+          defrost: false,
+          fixtureId: BAD_FIXTURE,
+          startedAt: values(5).takenAt,
+          endedAt: null,
+          restoreAfterMin: 20,
+          sync: { kind: "queued" },
+        },
+      ],
+    });
+    const plain = await addReading(db, sweep.id, values(1));
+    const inPass = await addReading(db, sweep.id, values(6), { passId: "bad-pass" });
+    const report = await syncOnce(db, server);
+    expect(report.stoppedBy).toBeNull();
+    expect(server.readings.has(plain.id)).toBe(true);
+    // the fake server knows no such pass: the reading is refused alone, as the real one does by field
+    expect(server.readings.has(inPass.id)).toBe(false);
+    expect((await db.get("sweeps", sweep.id))!.passes[0].sync).toEqual({
+      kind: "refused",
+      reasons: { fixtureId: "is not a fixture of the sweep's plan" },
+    });
+    const left = (await sweepReadings(db, sweep.id)).find((r) => r.id === inPass.id)!;
+    expect(left.sync).toMatchObject({ kind: "refused", reasons: { passId: "is not a pass of this sweep" } });
+    // a second pass of the queue sends nothing more: nothing is stuck, nothing is lost
+    expect(await syncOnce(db, server)).toMatchObject({ confirmed: 0, stoppedBy: null });
   });
 });

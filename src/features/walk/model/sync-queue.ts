@@ -11,6 +11,7 @@ import {
   QUEUED_RANGE,
 } from "./reading-sync";
 import { afterSweepCreated, afterSweepRefused, sweepOnServer } from "./sweep-sync";
+import { passConfirmed, passRefused } from "./pinpoint-pass";
 import { RefusedError, type SyncTransport } from "./sync-transport";
 import type { WalkDb } from "./walk-db";
 
@@ -47,6 +48,8 @@ function toInput(r: LocalReading): ReadingInput {
     atLeast: r.atLeast,
     samplePoint: r.samplePoint,
     note: r.note,
+    // older rows read before the version 5 upgrade ran have no passId: the first pass
+    ...(r.passId ? { passId: r.passId } : {}),
   };
 }
 
@@ -80,6 +83,10 @@ export async function syncOnce(
         if (!isRefusal(e)) throw e;
         await db.put("sweeps", { ...s, sync: afterSweepRefused(s.sync, reasonsOf(e)) });
       }
+    }
+    // Passes before readings: a reading names its pass, which the server must know first.
+    for (const s of await db.getAll("sweeps")) {
+      if (sweepOnServer(s.sync)) await sendPasses(db, transport, s.id);
     }
     const sweeps = new Map((await db.getAll("sweeps")).map((s) => [s.id, s]));
     const onServer = (sweepId: string) => {
@@ -120,6 +127,29 @@ export async function syncOnce(
     report.stoppedBy = e instanceof Error ? e.message : String(e);
   }
   return report;
+}
+
+/** Sends each queued pass of a sweep; a refused one keeps its reasons and never blocks the others. */
+async function sendPasses(db: WalkDb, transport: SyncTransport, sweepId: string): Promise<void> {
+  const sweep = await db.get("sweeps", sweepId);
+  for (const p of sweep?.passes ?? []) {
+    if (p.sync.kind !== "queued") continue;
+    try {
+      await transport.savePass(sweepId, p.id, {
+        fans: p.fans,
+        defrost: p.defrost,
+        fixtureId: p.fixtureId,
+        startedAt: p.startedAt,
+        endedAt: p.endedAt,
+      });
+      const now = await db.get("sweeps", sweepId);
+      if (now) await db.put("sweeps", passConfirmed(now, p));
+    } catch (e) {
+      if (!isRefusal(e)) throw e;
+      const now = await db.get("sweeps", sweepId);
+      if (now) await db.put("sweeps", passRefused(now, p.id, reasonsOf(e)));
+    }
+  }
 }
 
 async function uploadBatch(

@@ -96,6 +96,7 @@ class Recorder implements SyncTransport {
   edits: string[] = [];
   deletes: string[] = [];
   async createSweep() {}
+  async savePass() {}
   async uploadReadings(_s: string, list: { id?: string }[]) {
     this.uploads.push(...list.map((r) => r.id!));
     return { stored: list.map((r) => r.id!), duplicates: [], rejected: [], readingsRevision: 1 };

@@ -43,6 +43,7 @@ export function openWalkDb(name = WALK_DB_NAME, factory?: IDBFactory): Promise<W
         // Version 2 indexed the old `state` flag; version 4 replaces it by the `sync` union.
         if (oldVersion < 3) db.createObjectStore("findings", { keyPath: "clientId" });
         if (oldVersion < 4) await toSyncUnion(tx, oldVersion);
+        if (oldVersion < 5) await toPasses(tx);
       },
     });
   } finally {
@@ -50,8 +51,11 @@ export function openWalkDb(name = WALK_DB_NAME, factory?: IDBFactory): Promise<W
   }
 }
 
-/** 4: a reading's and a sweep's sync state became one union each (reading-sync.ts, sweep-sync.ts). */
-export const WALK_DB_VERSION = 4;
+/**
+ * 4: a reading's and a sweep's sync state became one union each (reading-sync.ts, sweep-sync.ts).
+ * 5: a sweep holds its pinpoint passes and a reading the pass it was taken in (pinpoint-pass.ts).
+ */
+export const WALK_DB_VERSION = 5;
 
 type UpgradeTx = IDBPTransaction<WalkDbSchema, StoreNames<WalkDbSchema>[], "versionchange">;
 
@@ -82,6 +86,21 @@ async function toSyncUnion(tx: UpgradeTx, oldVersion: number): Promise<void> {
     if (old.sync) continue;
     const { onServer, submitPending, rejected, ...rest } = old;
     await c.update({ ...rest, sync: sweepSyncFromLegacy({ onServer, submitPending, rejected }) });
+  }
+}
+
+/**
+ * Every sweep and reading already on the device was taken before passes existed: the sweep has none and
+ * each reading belongs to its first pass (null), in the upgrade's own transaction as for version 4.
+ */
+async function toPasses(tx: UpgradeTx): Promise<void> {
+  const sweeps = tx.objectStore("sweeps");
+  for (let c = await sweeps.openCursor(); c; c = await c.continue()) {
+    if (!Array.isArray(c.value.passes)) await c.update({ ...c.value, passes: [] });
+  }
+  const readings = tx.objectStore("readings");
+  for (let c = await readings.openCursor(); c; c = await c.continue()) {
+    if (c.value.passId === undefined) await c.update({ ...c.value, passId: null });
   }
 }
 

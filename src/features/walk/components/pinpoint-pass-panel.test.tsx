@@ -1,0 +1,134 @@
+import { fireEvent, render, screen } from "@testing-library/react";
+import { beforeAll, describe, expect, it } from "vitest";
+import type { Fixture } from "#core/contracts/fixtures";
+import type { LocalReading, LocalSweep } from "../model/local-types";
+import { startPass } from "../model/pinpoint-pass";
+import { PinpointPassPanel } from "./pinpoint-pass-panel";
+
+const CASE: Fixture = {
+  id: "11111111-1111-4111-8111-111111111111",
+  kind: "open-case",
+  label: "Dairy 3",
+  systemId: "22222222-2222-4222-8222-222222222222",
+  hasFans: true,
+  polygon: [
+    [1, 2],
+    [9, 2],
+    [9, 3],
+    [1, 3],
+  ],
+};
+const sweep: LocalSweep = {
+  id: "s",
+  storeId: "st",
+  planId: "p",
+  detectorId: "d",
+  detectorName: "Diode",
+  systemIds: [],
+  fans: "running",
+  defrost: false,
+  startedAt: new Date(Date.now() - 30 * 60_000).toISOString(),
+  status: "in-progress",
+  transportDelayS: 5,
+  timeConstantS: 1.5,
+  alarmPpm: 2,
+  warnings: [],
+  sync: { kind: "on-server" },
+  passes: [],
+};
+let seq = 0;
+const reading = (x: number, y: number, ppm: number): LocalReading => ({
+  id: `r${++seq}`,
+  sweepId: "s",
+  seq,
+  x,
+  y,
+  takenAt: new Date().toISOString(),
+  ppm,
+  atLeast: false,
+  samplePoint: "grille",
+  note: "",
+  passId: null,
+  sync: { kind: "synced" },
+});
+const level = [
+  ...[6, 6.5, 6, 7, 6.5].map((ppm, i) => reading(1.5 + i, 3.2, ppm)),
+  ...[1, 3, 5].map((x) => reading(x, 6, 0.5)),
+];
+// R-290 is safety class A3 (ASHRAE 34): flammable
+const R290 = {
+  id: "R-290",
+  name: "Propane",
+  designation: "R-290",
+  enteredByCompany: false,
+  safetyClass: "A3",
+  safetyClassSource: "ASHRAE 34",
+  gwp: null,
+  gwpNote: null,
+};
+const panel = (s: LocalSweep, committed: LocalReading[], systems = [{ id: CASE.systemId!, refrigerant: R290 }]) =>
+  render(
+    <PinpointPassPanel
+      sweep={s}
+      fixtures={[CASE]}
+      committed={committed}
+      systems={systems}
+      readOnly={false}
+      reload={async () => {}}
+    />,
+  );
+
+// jsdom has no modal dialogs: opening one only sets its open attribute here (the browser test opens it for real).
+beforeAll(() => {
+  HTMLDialogElement.prototype.showModal ??= function (this: HTMLDialogElement) {
+    this.setAttribute("open", "");
+  };
+  HTMLDialogElement.prototype.close ??= function (this: HTMLDialogElement) {
+    this.removeAttribute("open");
+  };
+});
+
+describe("the still-air pass panel", () => {
+  it("advises stopping the fans of a case its readings say are mixing, and opens the start with the cautions", () => {
+    panel(sweep, level);
+    expect(screen.getByTestId("mixing-advice").textContent).toMatch(
+      /Level at about 6\.5 ppm across Dairy 3: its fans are mixing the gas/,
+    );
+    fireEvent.click(screen.getByRole("button", { name: "Still-air pass…" }));
+    const dialog = screen.getByRole("dialog", { hidden: true });
+    const text = dialog.textContent ?? "";
+    // product temperature first; the case's system runs R-290 (ASHRAE 34 class A3): the flammable caution;
+    // the last one defers to the codes
+    expect(text).toMatch(/product warms up/);
+    expect(text).toMatch(/flammable/);
+    expect(text).toMatch(/local codes/);
+    expect(text.indexOf("product warms up")).toBeLessThan(text.indexOf("local codes"));
+  });
+
+  it("says nothing while the readings point at a spot", () => {
+    panel(sweep, [...[1, 2, 9, 2, 1].map((ppm, i) => reading(1.5 + i, 3.2, ppm)), reading(3, 6, 0.5)]);
+    expect(screen.queryByTestId("mixing-advice")).toBeNull();
+  });
+
+  it("shows the open pass with the time left to restore the fans, and turns to an alert once it is due", () => {
+    const open = startPass(sweep, { condition: "fans-stopped", fixtureId: CASE.id }, "p2", new Date().toISOString());
+    const { unmount } = panel(open, level);
+    const banner = screen.getByTestId("pass-banner");
+    expect(banner.getAttribute("role")).toBe("status");
+    expect(banner.textContent).toMatch(/Pass 2: fans stopped at Dairy 3\. Restore the fans in (20:00|19:5\d)\./);
+    expect(screen.queryByTestId("mixing-advice")).toBeNull();
+    unmount();
+    const late = startPass(
+      sweep,
+      { condition: "defrost", fixtureId: null },
+      "p2",
+      new Date(Date.now() - 25 * 60_000).toISOString(),
+    );
+    panel(late, level);
+    const due = screen.getByTestId("pass-banner");
+    expect(due.getAttribute("role")).toBe("alert");
+    expect(due.textContent).toMatch(
+      /Pass 2: in defrost at the whole store\. Restore the fans now: 5:0\d past the 20 min reminder\./,
+    );
+  });
+});

@@ -1,0 +1,122 @@
+import { useMemo, useState } from "react";
+import type { Fixture } from "#core/contracts/fixtures";
+import type { RefrigerantSummary } from "#core/contracts/systems";
+import { FIXTURE_KIND_NAMES } from "#core/contracts/fixture-kinds";
+import { usePinpointPass } from "../hooks/use-pinpoint-pass";
+import type { LocalReading, LocalSweep } from "../model/local-types";
+import { mixingAdvice } from "../model/mixing-advice";
+import { clockText, passConditionText, passNumbers } from "../model/pinpoint-pass";
+import { StartPassDialog } from "./start-pass-dialog";
+
+// The words over the whole width, the actions in a row under them: a phone's header stays short.
+const BANNER = "flex flex-col gap-0 rounded-md border-l-4 px-3 pt-1 text-sm leading-snug edge";
+const ACTIONS = "flex flex-wrap justify-end gap-x-3";
+
+/**
+ * The still-air pass on the Walk screen: the advice when readings say the fans are mixing the gas, the
+ * start dialog with its cautions, and while a pass is open, its reminder to restore the fans.
+ */
+export function PinpointPassPanel({
+  sweep,
+  fixtures,
+  committed,
+  systems,
+  readOnly,
+  reload,
+}: {
+  sweep: LocalSweep;
+  fixtures: readonly Fixture[];
+  committed: readonly LocalReading[];
+  systems: readonly { id: string; refrigerant: RefrigerantSummary }[];
+  readOnly: boolean;
+  reload(): Promise<void>;
+}) {
+  const pass = usePinpointPass(sweep, reload);
+  const [dismissed, setDismissed] = useState<readonly string[]>([]);
+  const [starting, setStarting] = useState<Fixture | null>(null);
+  const advice = useMemo(
+    () => mixingAdvice(sweep, fixtures, committed, sweep.alarmPpm),
+    [sweep, fixtures, committed],
+  ).filter((a) => !dismissed.includes(a.fixture.id));
+  const name = (f: Fixture | undefined) => (f ? f.label || FIXTURE_KIND_NAMES[f.kind] : "the whole store");
+
+  if (readOnly || sweep.status !== "in-progress") return null;
+  if (pass.open && pass.reminder) {
+    const r = pass.reminder;
+    const number = passNumbers(sweep).get(pass.open.id) ?? 2;
+    const where = name(fixtures.find((f) => f.id === pass.open!.fixtureId));
+    return (
+      <div
+        role={r.overdue ? "alert" : "status"}
+        data-testid="pass-banner"
+        className={`${BANNER} ${r.overdue ? "border-danger bg-danger-soft" : "border-accent bg-accent-soft"}`}
+      >
+        <span>
+          <strong className="text-base">
+            Pass {number}: {passConditionText(pass.open)} at {where}.
+          </strong>{" "}
+          <span data-testid="pass-timer">
+            {r.overdue
+              ? `Restore the fans now: ${clockText(r.leftMs)} past the ${pass.open.restoreAfterMin} min reminder.`
+              : `Restore the fans in ${clockText(r.leftMs)}.`}
+          </span>
+        </span>
+        <span className={ACTIONS}>
+          <button
+            type="button"
+            className="min-h-12 px-2 font-bold underline"
+            onClick={() => void pass.setMinutes(pass.open!.id, pass.open!.restoreAfterMin + 5)}
+          >
+            +5 min
+          </button>
+          <button type="button" className="min-h-12 px-2 font-bold underline" onClick={() => void pass.end()}>
+            Fans back on — end pass
+          </button>
+        </span>
+      </div>
+    );
+  }
+  const first = advice[0];
+  return (
+    <>
+      {first ? (
+        <div role="status" data-testid="mixing-advice" className={`${BANNER} border-note bg-note-soft`}>
+          <span>
+            <strong className="text-base">
+              Level at about {first.levelPpm} ppm across {name(first.fixture)}:
+            </strong>{" "}
+            its fans are mixing the gas. Stop them or start a defrost, then re-check in still air.
+          </span>
+          <span className={ACTIONS}>
+            <button
+              type="button"
+              className="min-h-12 px-2 font-bold underline"
+              onClick={() => setStarting(first.fixture)}
+            >
+              Still-air pass…
+            </button>
+            <button
+              type="button"
+              className="min-h-12 px-2 underline"
+              onClick={() => setDismissed((d) => [...d, first.fixture.id])}
+            >
+              Not now
+            </button>
+          </span>
+        </div>
+      ) : null}
+      {starting ? (
+        <StartPassDialog
+          fixture={starting}
+          fixtures={fixtures}
+          systems={systems}
+          onClose={() => setStarting(null)}
+          onStart={(s) => {
+            setStarting(null);
+            void pass.start(s);
+          }}
+        />
+      ) : null}
+    </>
+  );
+}
