@@ -37,6 +37,19 @@ describe("the ppm keypad", () => {
     expect(onSave).toHaveBeenLastCalledWith({ ppm: 2.5, atLeast: false, samplePoint: "return", note: "" });
   });
 
+  it("shows a decimal-comma company's mark on the key, in the value and in the recent picks, and saves the number", () => {
+    // "1.234,5" and "1 234,5" write the decimal mark as a comma (CLDR de-DE, fr-FR: Intl.NumberFormat).
+    const mark = new Intl.NumberFormat("de-DE").formatToParts(1.5).find((p) => p.type === "decimal")!.value;
+    const onSave = setup({ numberFormat: "1.234,5" });
+    for (const k of ["1", "Decimal point", "5"]) fireEvent.click(screen.getByRole("button", { name: k }));
+    expect(screen.getByRole("button", { name: "Decimal point" }).textContent).toBe(mark);
+    expect(screen.getByLabelText("Value").textContent).toContain(`1${mark}5`);
+    fireEvent.click(screen.getByRole("button", { name: "Save" }));
+    expect(onSave).toHaveBeenLastCalledWith({ ppm: 1.5, atLeast: false, samplePoint: "return", note: "" });
+    fireEvent.click(screen.getByRole("button", { name: `2${mark}5 ppm` }));
+    expect(onSave).toHaveBeenLastCalledWith({ ppm: 2.5, atLeast: false, samplePoint: "return", note: "" });
+  });
+
   it("keeps the remembered sample point behind one button and changes it from the choices it opens", () => {
     const onSave = setup();
     expect(screen.queryByRole("radiogroup", { name: "Sample point" })).toBeNull();

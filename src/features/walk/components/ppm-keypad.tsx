@@ -1,5 +1,6 @@
 import { useEffect, useRef, useState } from "react";
 import { PPM_CEILING, SAMPLE_POINTS, SAMPLE_POINT_LABELS, type SamplePoint } from "#core/contracts/sweeps";
+import { formatShort, type NumberFormat } from "#core/domain/numbers/number-format";
 
 export interface KeypadValue {
   ppm: number;
@@ -22,6 +23,8 @@ export interface PpmKeypadProps {
   onTyped?(value: KeypadValue): void;
   /** Move this reading: the next tap on the plan places it. */
   onMove?(): void;
+  /** The company's number format: the decimal key and the shown value use its decimal mark. */
+  numberFormat?: NumberFormat;
 }
 
 const KEY =
@@ -32,6 +35,9 @@ const KEY =
  * one tap; "Over range" stores the typed value as "at least" (a pegged display).
  */
 export function PpmKeypad(props: PpmKeypadProps) {
+  const format = props.numberFormat ?? "1,234.5";
+  // The typed text keeps "." inside; only what the technician sees uses the company's mark.
+  const mark = format === "1,234.5" ? "." : ",";
   const [typed, setTyped] = useState(props.initial.ppm === 0 ? "" : String(props.initial.ppm));
   const [atLeast, setAtLeast] = useState(props.initial.atLeast);
   const [samplePoint, setSamplePoint] = useState<SamplePoint>(props.initial.samplePoint);
@@ -80,7 +86,7 @@ export function PpmKeypad(props: PpmKeypadProps) {
           className={`block min-w-0 flex-1 truncate rounded-md px-2 text-right text-2xl font-bold leading-[3rem] edge ${tooHigh ? "border-danger text-danger" : ""}`}
         >
           {atLeast ? "≥ " : ""}
-          {typed === "" ? "0" : typed} <span className="text-base">ppm</span>
+          {typed === "" ? "0" : typed.replace(".", mark)} <span className="text-base">ppm</span>
         </output>
         <button
           type="button"
@@ -129,8 +135,7 @@ export function PpmKeypad(props: PpmKeypadProps) {
       ) : null}
       {tooHigh ? (
         <p className="text-danger">
-          Above the {PPM_CEILING.toLocaleString("en-US")} ppm ceiling: enter the display's top value and press Over
-          range.
+          Above the {formatShort(PPM_CEILING, format)} ppm ceiling: enter the display's top value and press Over range.
         </p>
       ) : null}
       {props.recent.length ? (
@@ -142,7 +147,7 @@ export function PpmKeypad(props: PpmKeypadProps) {
               className="min-h-12 flex-1 rounded-md font-bold edge bg-accent-soft"
               onClick={() => props.onSave(current(false, v))}
             >
-              {v} ppm
+              {String(v).replace(".", mark)} ppm
             </button>
           ))}
         </div>
@@ -185,7 +190,7 @@ export function PpmKeypad(props: PpmKeypadProps) {
         </button>
         {keys(["6", "7", "8", "9", "0"])}
         <button type="button" className={`${KEY} bg-surface`} onClick={() => press(".")} aria-label="Decimal point">
-          .
+          {mark}
         </button>
         <button
           type="button"

@@ -371,6 +371,7 @@ export function WalkScreen({
               levels={storePack.data?.detectors.find((d) => d.id === sweep.detectorId)?.levelScale ?? null}
               onTyped={(v) => (editing ? undefined : keepTyped(keypadFor.id, v))}
               onMove={() => send({ type: "move", readingId: keypadFor.id })}
+              numberFormat={numberFormat}
               onSave={(v) => saveKeypad(v)}
               cancelLabel={editing ? "Cancel" : "Discard"}
               onCancel={() => (editing ? send({ type: "cancel" }) : undo())}
