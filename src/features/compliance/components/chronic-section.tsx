@@ -1,4 +1,5 @@
 import { useState, type FormEvent } from "react";
+import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 import type { SystemRecordsView } from "#core/contracts/compliance";
 import { SourceText } from "../../../components/ui/source-text";
 import { Button } from "../../../components/ui/button";
@@ -80,7 +81,7 @@ export function ChronicSection({
             charge
             {y.chronic
               ? y.filed
-                ? ` — chronic leaker; report filed on ${y.filed.on} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}`
+                ? ` — chronic leaker; report filed on ${formatCalendarDay(y.filed.on)} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}`
                 : ` — chronic leaker; report due ${y.reportDue}`
               : ""}
             {canFile && fileable(y) ? <FileReportForm systemId={r.system.id} year={y.year} today={r.today} /> : null}

@@ -163,7 +163,7 @@ export function TodayView({
                 header: "Calculated",
                 cell: (r) => (
                   <>
-                    {r.on}
+                    {formatCalendarDay(r.on)}
                     <p className="max-w-xs text-sm text-muted">
                       <SourceText source={`${r.partTitle}; ${r.source}`} />
                     </p>

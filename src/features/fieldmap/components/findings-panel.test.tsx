@@ -53,5 +53,8 @@ describe("findings panel", () => {
     });
     expect(screen.getAllByText(/Repaired by Ben Ortiz/)).toHaveLength(1);
     expect(screen.getByText(/Initial verification test \(passed\) by Ben Ortiz/)).toBeVisible();
+    // Days read as everywhere else in the app ("2 Nov 2026"), never as ISO text.
+    expect(screen.getByText(/2 Nov 2026: Found/)).toBeVisible();
+    expect(screen.queryByText(/2026-11-0\d:/)).toBeNull();
   });
 });

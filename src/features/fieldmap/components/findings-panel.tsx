@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
@@ -66,7 +67,7 @@ export function FindingsPanel({
           <ul className="mt-1 text-sm text-muted">
             {f.events.map((e) => (
               <li key={e.id}>
-                {e.on}: {FINDING_EVENT_LABELS[e.kind]}
+                {formatCalendarDay(e.on)}: {FINDING_EVENT_LABELS[e.kind]}
                 {e.result ? ` (${e.result})` : ""} by {e.by}
                 {e.note ? ` — ${e.note}` : ""}
               </li>

@@ -86,7 +86,7 @@ export function FindingView({
         <ol className="space-y-2 border-l-4 border-line pl-4">
           {finding.events.map((e) => (
             <li key={e.id}>
-              <span className="font-bold">{e.on}</span> · {FINDING_EVENT_LABELS[e.kind]}
+              <span className="font-bold">{formatCalendarDay(e.on)}</span> · {FINDING_EVENT_LABELS[e.kind]}
               {e.result ? ` — ${e.result}` : ""} · signed {e.by}
               {e.note ? <p className="text-muted">{e.note}</p> : null}
             </li>
