@@ -18,11 +18,12 @@ import { startE2eServer, type E2eServer } from "../helpers/e2e-server";
 import { PASSWORD, seedCompany } from "../helpers/fixtures";
 import { signInThroughForm } from "../helpers/e2e-session";
 import { touchDrag, touchSession } from "../helpers/touch";
+import { LAYOUT_STAGE, stageSettled } from "../helpers/layout-e2e";
 import { mapStoreForWalk } from "../helpers/walk-e2e";
 import { plans } from "../../server/db/schema/index";
 
 const SCREENS = path.resolve(import.meta.dirname, "../../test-results/screens");
-const STAGE = "[data-testid=layout-stage]";
+const STAGE = LAYOUT_STAGE;
 
 type Box = { x: number; y: number; width: number; height: number };
 type Stored = { id: string; label: string; polygon?: number[][]; point?: { x: number; y: number } };
@@ -62,25 +63,8 @@ async function openEditor(viewport: { width: number; height: number }, touch: bo
   await signInThroughForm(page, server.url, co.people["lead-tech"].email, PASSWORD);
   await page.goto(`${server.url}/stores/${co.store.id}/plans/${planId}/layout`);
   await page.locator(`${STAGE} canvas`).first().waitFor();
-  await steady(page);
+  await stageSettled(page);
   return { context, page, failures };
-}
-
-/** Resolves once the stage's box and view have stopped changing (the fit and the scroll run after layout). */
-async function steady(page: Page) {
-  const look = () =>
-    page.evaluate((sel) => {
-      const s = document.querySelector(sel) as HTMLElement;
-      return JSON.stringify([s.getBoundingClientRect(), s.dataset.zoom, s.dataset.panX, s.dataset.panY]);
-    }, STAGE);
-  let last = await look();
-  for (let i = 0; i < 40; i++) {
-    await page.waitForTimeout(150);
-    const now = await look();
-    if (now === last) return;
-    last = now;
-  }
-  throw new Error("the editor's stage never settled");
 }
 
 /** Screen point of plan metres, from the view the stage reports. */

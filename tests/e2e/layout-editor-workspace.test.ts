@@ -17,11 +17,12 @@ import { PASSWORD, seedCompany } from "../helpers/fixtures";
 import { signInThroughForm } from "../helpers/e2e-session";
 import { signIn } from "../helpers/test-app";
 import { touchDrag, touchSession } from "../helpers/touch";
+import { LAYOUT_STAGE, stageSettled } from "../helpers/layout-e2e";
 import { mapStoreForWalk } from "../helpers/walk-e2e";
 import { plans, users } from "../../server/db/schema/index";
 
 const SCREENS = path.resolve(import.meta.dirname, "../../test-results/screens");
-const STAGE = "[data-testid=layout-stage]";
+const STAGE = LAYOUT_STAGE;
 /** fitView's margin round the drawing (src/features/layout/hooks/use-workspace-stage.ts). */
 const FIT_MARGIN = 16;
 
@@ -84,25 +85,8 @@ async function openEditor(viewport: { width: number; height: number }, touch: bo
   await signInThroughForm(page, server.url, co.people["lead-tech"].email, PASSWORD);
   await page.goto(`${server.url}/stores/${co.store.id}/plans/${planId}/layout`);
   await page.locator(`${STAGE} canvas`).first().waitFor();
-  await steady(page);
+  await stageSettled(page);
   return { context, page, failures };
-}
-
-/** Resolves once the stage's box and view have stopped changing (the fit and the scroll run after layout). */
-async function steady(page: Page) {
-  const look = () =>
-    page.evaluate((sel) => {
-      const s = document.querySelector(sel) as HTMLElement;
-      return JSON.stringify([s.getBoundingClientRect(), s.dataset.zoom, s.dataset.panX, s.dataset.panY]);
-    }, STAGE);
-  let last = await look();
-  for (let i = 0; i < 40; i++) {
-    await page.waitForTimeout(120);
-    const now = await look();
-    if (now === last) return;
-    last = now;
-  }
-  throw new Error("the editor's stage never settled");
 }
 
 /** The stage, the tools and the drawing's box on screen (CSS px), from the view the stage reports. */
@@ -222,7 +206,7 @@ it("on a 1366 × 860 laptop the whole plan is on screen under the tools, the fir
   const scrolled = await measure(page);
   expect(scrolled.bar.bottom).toBeLessThanOrEqual(scrolled.stage.top);
   await page.mouse.wheel(0, -250);
-  await steady(page);
+  await stageSettled(page);
 
   // Still selected from the drag: Duplicate names the copy "Walk-in freezer 2", to its right.
   const copy = await duplicateAndCheck(page, "Walk-in freezer", "Walk-in freezer 2", () =>
@@ -282,7 +266,7 @@ it("on a landscape tablet the plan shows more than 330 px high, and a selected 0
     await zoomIn.tap();
     await page.waitForTimeout(120);
   }
-  await steady(page);
+  await stageSettled(page);
   const z = await measure(page);
   const sidePx = 0.6 * z.scale;
   expect(sidePx).toBeGreaterThan(14);
@@ -318,7 +302,7 @@ it("on a phone, zoomed in, a duplicate of Aisle 2 is named past the aisles alrea
     await zoomIn.tap();
     await page.waitForTimeout(120);
   }
-  await steady(page);
+  await stageSettled(page);
   // Aisle 2 (26–27.2 m × 13–27 m), a gondola, tapped in its middle.
   const aisle = await at(page, 26.6, 20);
   await page.touchscreen.tap(aisle.x, aisle.y);

@@ -37,3 +37,23 @@ export async function pickerScreen(page: Page, x: number, y: number) {
   );
   return { x: box.x + panX + x * zoom, y: box.y + panY + y * zoom };
 }
+
+/** The layout editor's stage, as the editor marks it. */
+export const LAYOUT_STAGE = "[data-testid=layout-stage]";
+
+/** Resolves once the stage's box and view have stopped changing (the fit and the scroll run after layout). */
+export async function stageSettled(page: Page, stage = LAYOUT_STAGE): Promise<void> {
+  const look = () =>
+    page.evaluate((sel) => {
+      const s = document.querySelector(sel) as HTMLElement;
+      return JSON.stringify([s.getBoundingClientRect(), s.dataset.zoom, s.dataset.panX, s.dataset.panY]);
+    }, stage);
+  let last = await look();
+  for (let i = 0; i < 40; i++) {
+    await page.waitForTimeout(150);
+    const now = await look();
+    if (now === last) return;
+    last = now;
+  }
+  throw new Error("the editor's stage never settled");
+}
