@@ -80,6 +80,11 @@ export const refrigerantSummary = z.object({
   /** null when no basis in the list has a value for every component. */
   gwp: gwpSummary.nullable(),
   gwpNote: text().nullable(),
+  /**
+   * A company refrigerant entered by composition: its catalogue components by mass %, so a device
+   * offline can tell which detectors see it as the server does. Absent otherwise.
+   */
+  components: z.array(z.object({ id: text(), massPercent: z.number().min(0).max(100) })).optional(),
 });
 export type RefrigerantSummary = z.infer<typeof refrigerantSummary>;
 

@@ -8,9 +8,12 @@ import { spotRefrigerant } from "../locator-words/spot-refrigerant";
 import { cautionsFor, roomCautions } from "../safety/cautions";
 import { poundsToKg } from "../units/mass";
 import { getRefrigerant, isOzoneDepleting } from "./catalogue";
+import { startWarnings } from "../sweeps/start-warnings";
+import { summarizeRefrigerant } from "./refrigerant-summary";
 import {
   checkCompanyRefrigerant,
   refrigerantLookup,
+  refrigerantOfSummary,
   toCompanyRefrigerant,
   type CompanyRefrigerantFacts,
 } from "./company-refrigerant";
@@ -251,5 +254,21 @@ describe("the lookup", () => {
     expect(lookup(own.id)).toBe(own);
     expect(lookup("company:00000000-0000-4000-8000-000000000999")).toBeUndefined();
     expect(lookup(own.name)).toBeUndefined();
+  });
+
+  it("warns about a detector that cannot see it from the device's summary as the server does from the full entry", () => {
+    // Heated-diode sensors respond to halogen compounds; have none
+    // (docs/reference/standards.md, detection section); a blend of only those is invisible to one.
+    const own = byComposition("Store CO2-propane mix", [
+      ["R-744", 90],
+      ["R-290", 10],
+    ]);
+    const diode = { name: "Diode sniffer", principle: "heated-diode" as const, overdue: false, checkDueOn: null };
+    const systems = [{ id: "s1", name: "Booster", refrigerantId: own.id }];
+    const server = startWarnings(diode, systems, (id) => (id === own.id ? own : undefined));
+    const summary = summarizeRefrigerant(own, { bases: ["AR4"], statement: "AR4" });
+    const device = startWarnings(diode, systems, (id) => (id === own.id ? refrigerantOfSummary(summary) : undefined));
+    expect(server.map((w) => w.code)).toEqual(["detector-blind"]);
+    expect(device).toEqual(server);
   });
 });

@@ -145,10 +145,16 @@ export function refrigerantLookup(own: readonly CompanyRefrigerant[]): (id: stri
 
 /**
  * The refrigerant behind a summary the client holds (a system's, kept on the device for the Walk):
- * the catalogue's own, or a company's as far as the summary says, enough for the room's cautions
- * (safety class; where a leak collects is then said to be unknown).
+ * the catalogue's own, or a company's as far as the summary says: enough for the room's cautions
+ * (safety class; where a leak collects is then said to be unknown) and, with its composition, for
+ * which detectors see it.
  */
-export function refrigerantOfSummary(s: { id: string; designation: string; safetyClass: string }): Refrigerant {
+export function refrigerantOfSummary(s: {
+  id: string;
+  designation: string;
+  safetyClass: string;
+  components?: readonly { id: string; massPercent: number }[];
+}): Refrigerant {
   return (
     findRefrigerant(s.id) ?? {
       id: s.id,
@@ -156,7 +162,7 @@ export function refrigerantOfSummary(s: { id: string; designation: string; safet
       kind: "company",
       safetyClass: { value: s.safetyClass as SafetyClass, source: "entered by the company" },
       substanceClass: "other",
-      components: null,
+      components: s.components ?? null,
       statedGwp: null,
       molarMass: null,
       retired: false,

@@ -17,6 +17,7 @@ export function summarizeRefrigerant(r: Refrigerant, choice: GwpChoice): Refrige
     name: r.name,
     designation: designationOf(r),
     enteredByCompany: r.kind === "company",
+    ...(r.kind === "company" && r.components ? { components: r.components.map((c) => ({ ...c })) } : {}),
     safetyClass: r.safetyClass.value,
     safetyClassSource: r.safetyClass.source,
     gwp: gwp.known

@@ -1,5 +1,6 @@
 import { useQueryClient } from "@tanstack/react-query";
 import { useEffect, useMemo, useState } from "react";
+import { refrigerantOfSummary } from "#core/domain/refrigerants/company-refrigerant";
 import { startWarnings } from "#core/domain/sweeps/start-warnings";
 import { Alert } from "../../../components/ui/alert";
 import { Button } from "../../../components/ui/button";
@@ -44,6 +45,11 @@ export function StartSweepForm({ storeId, onStarted }: { storeId: string; onStar
         ? startWarnings(
             detector,
             data.systems.filter((s) => systemIds.includes(s.id)),
+            // the store copy's summaries know the company's own refrigerants, offline too
+            (id) => {
+              const summary = data.systems.find((s) => s.refrigerantId === id)?.refrigerant;
+              return summary ? refrigerantOfSummary(summary) : undefined;
+            },
           )
         : [],
     [detector, data, systemIds],
