@@ -69,3 +69,18 @@ export function profileReadings(profile: RuleProfile): Reading[] {
   }
   return [...PRODUCT_READINGS, ...values];
 }
+
+// "(reading)" or "(40 CFR 84.106; reading)": the marker stands alone inside a citation's brackets.
+const STANDALONE_MARKER = new RegExp(`(?<=[(;] ?)${UNCONFIRMED}(?=[;)])`, "g");
+
+/**
+ * A rule source as a printed page reads it: the citation, with each "reading" marker saying whether
+ * the owner has accepted the reading behind it ("reading, accepted" / "reading, not accepted"), as the
+ * screens do (docs/decisions/0048-accepting-readings.md). `accepted` null: the markers stay plain.
+ */
+export function citedWithAcceptance(source: string, accepted: ReadonlySet<string> | null): string {
+  const cited = readableSource(source);
+  const reading = accepted ? readingTextOf(source) : null;
+  if (reading === null) return cited;
+  return cited.replace(STANDALONE_MARKER, `${UNCONFIRMED}, ${accepted!.has(reading) ? "accepted" : "not accepted"}`);
+}

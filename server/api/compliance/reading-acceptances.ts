@@ -73,6 +73,12 @@ export async function listReadings(ctx: AppContext, companyId: string): Promise<
   };
 }
 
+/** The words of the readings the owner has accepted now: what a printed statement marks as accepted. */
+export async function acceptedReadingTexts(ctx: AppContext, companyId: string): Promise<Set<string>> {
+  const { readings } = await listReadings(ctx, companyId);
+  return new Set(readings.filter((r) => r.accepted).map((r) => r.text));
+}
+
 function notListed(profileName: string) {
   return badRequest(`Please check: that is not one of the readings of ${profileName} as listed now.`, {
     text: `is not a reading of ${profileName} as listed now (reload the list)`,

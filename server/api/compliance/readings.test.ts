@@ -178,3 +178,47 @@ describe("withdrawing an acceptance (docs/decisions/0048-accepting-readings.md)"
     expect(mine.history).toHaveLength(1);
   });
 });
+
+describe("a printed statement says whether each reading is accepted (docs/decisions/0048-accepting-readings.md)", () => {
+  it("prints 'reading, accepted' after the owner accepts and 'reading, not accepted' after the withdrawal", async () => {
+    const co3 = await seedCompany(t.ctx, "Brackenmoor Grocers");
+    const owner = await signIn(t.app, co3.people.owner);
+    const lead = await signIn(t.app, co3.people["lead-tech"]);
+    const sys = await lead.post(`/api/stores/${co3.store.id}/systems`, {
+      name: "Rack Q",
+      refrigerantId: "R-404A",
+      fullCharge: { value: 100, unit: "lb" },
+      applianceType: "commercial-refrigeration",
+      automaticLeakDetection: false,
+    });
+    // 30 lb into a 100 lb system: far above 40 CFR 84.106's threshold, so repair and verification steps fall due.
+    await lead.post(`/api/systems/${sys.body.id}/charge-additions`, {
+      addedOn: "2026-03-01",
+      amount: { value: 30, unit: "lb" },
+      reason: "Top-up",
+    });
+    const statement = async () => {
+      const pdf = await owner.agent
+        .get(`/api/systems/${sys.body.id}/leak-rate-statement.pdf`)
+        .buffer(true)
+        .parse(binary);
+      return (await pdfText(pdf.body as Buffer)).join(" ").replace(/\s+/g, " ");
+    };
+    const before = await statement();
+    expect(before).toMatch(/reading, not accepted/);
+    expect(before).not.toMatch(/reading, accepted/);
+
+    const { readings } = (await owner.get("/api/compliance/readings")).body;
+    for (const r of readings as { text: string }[])
+      await owner.post("/api/compliance/readings/accept", { text: r.text, note: "" });
+    const accepted = await statement();
+    expect(accepted).toMatch(/reading, accepted/);
+    expect(accepted).not.toMatch(/reading, not accepted/);
+
+    for (const r of readings as { text: string }[])
+      await owner.post("/api/compliance/readings/withdraw", { text: r.text, reason: "Under review" });
+    const withdrawn = await statement();
+    expect(withdrawn).toMatch(/reading, not accepted/);
+    expect(withdrawn).not.toMatch(/reading, accepted/);
+  });
+});

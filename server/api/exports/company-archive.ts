@@ -1,3 +1,4 @@
+import { acceptedReadingTexts } from "../compliance/reading-acceptances";
 import type { Writable } from "node:stream";
 import { ZipFile } from "yazl";
 import type { AppContext } from "../../context";
@@ -63,6 +64,7 @@ export async function writeArchive(
     paper: await companyPaper(ctx, viewer.companyId, profile),
     massUnit: display.mass,
     numberFormat: display.number,
+    acceptedReadings: await acceptedReadingTexts(ctx, viewer.companyId),
     generatedAt: now,
   };
   const systems = tables.find((t) => t.file === "systems.csv")?.rows ?? [];

@@ -7,6 +7,7 @@ import { validate } from "../../middleware/validate";
 import { getSystemRecords } from "../compliance/records.service";
 import { listFindings } from "../findings/findings.service";
 import { companyRules } from "../compliance/system-records";
+import { acceptedReadingTexts } from "../compliance/reading-acceptances";
 import { companyPaper } from "../../reports/company-paper";
 import { readerUnits } from "../reports/reader-units";
 import { loadArchive, writeArchive } from "./company-archive";
@@ -50,14 +51,16 @@ export function exportsRouter(ctx: AppContext): Router {
       const records = await getSystemRecords(ctx, member(req), res.locals.params.id);
       const list = await listFindings(ctx, member(req), records.store.id, { systemId: records.system.id });
       const companyId = member(req).companyId;
-      const [{ profile }, display] = await Promise.all([
+      const [{ profile }, display, acceptedReadings] = await Promise.all([
         companyRules(ctx, companyId),
         companyMassDisplay(ctx, companyId),
+        acceptedReadingTexts(ctx, companyId),
       ]);
       const pdf = await leakRateStatementPdf(records, list, {
         paper: await companyPaper(ctx, companyId, profile),
         massUnit: display.mass,
         numberFormat: display.number,
+        acceptedReadings,
       });
       await logExport(ctx, req, "leak-rate-statement.pdf", { systemId: records.system.id });
       res.set({

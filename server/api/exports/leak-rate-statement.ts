@@ -3,7 +3,7 @@ import type { SystemRecordsView } from "#core/contracts/compliance";
 import type { FindingDetail } from "#core/contracts/finding-actions";
 import { FINDING_EVENT_LABELS } from "#core/contracts/findings";
 import { APPLIANCE_TYPE_NAMES } from "#core/contracts/systems";
-import { readableSource } from "#core/domain/compliance/citations";
+import { citedWithAcceptance } from "#core/domain/compliance/readings";
 import { formatCalendarDay as day, formatInZone } from "#core/domain/dates/format-in-zone";
 import { formatGrouped, type NumberFormat } from "#core/domain/numbers/number-format";
 import type { Paper } from "#core/domain/reports/paper";
@@ -27,8 +27,13 @@ export interface StatementOptions {
   massUnit: MassPreference;
   /** The company's number format ("1,234.5", "1.234,5", "1 234,5"); figures are grouped in it. */
   numberFormat?: NumberFormat;
+  /** The readings the owner has accepted (their words): each "reading" marker says whether it is; null leaves them plain. */
+  acceptedReadings?: ReadonlySet<string> | null;
   generatedAt?: Date;
 }
+
+/** A rule source as the page prints it. */
+type Cite = (source: string) => string;
 
 /** `4.54 kg (10.0 lb)` or `1,500.0 lb (680.39 kg)`: the company's unit first, grouped in its number format. */
 export function statementMass(kg: number, first: MassPreference, format: NumberFormat = "1,234.5"): string {
@@ -57,7 +62,7 @@ function table(doc: Doc, columns: PdfColumn[], rows: string[][]) {
   drawTable(doc, columns, rows, TABLE);
 }
 
-function systemSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string) {
+function systemSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string, cite: Cite) {
   heading(doc, "System");
   const gwp = r.system.refrigerant.gwp;
   para(
@@ -71,12 +76,12 @@ function systemSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => str
   if (r.co2e.known && r.co2e.tonnes !== null)
     para(
       doc,
-      `CO2-equivalent of the charge: ${r.co2e.tonnes.toFixed(2)} t (kg × GWP ${r.co2e.gwp} / 1000; GWP source ${readableSource(r.co2e.source)}).`,
+      `CO2-equivalent of the charge: ${r.co2e.tonnes.toFixed(2)} t (kg × GWP ${r.co2e.gwp} / 1000; GWP source ${cite(r.co2e.source)}).`,
     );
   if (gwp) para(doc, `GWP basis: ${gwp.statement}.`);
 }
 
-function profileSection(doc: Doc, r: SystemRecordsView) {
+function profileSection(doc: Doc, r: SystemRecordsView, cite: Cite) {
   heading(doc, "Rule profile");
   para(
     doc,
@@ -88,7 +93,7 @@ function profileSection(doc: Doc, r: SystemRecordsView) {
     para(
       doc,
       r.applicability.applies
-        ? `Applies: ${r.applicability.reason}. Threshold ${r.applicability.thresholdPercent} % per year (${readableSource(r.applicability.thresholdSource ?? "")}).`
+        ? `Applies: ${r.applicability.reason}. Threshold ${r.applicability.thresholdPercent} % per year (${cite(r.applicability.thresholdSource ?? "")}).`
         : `No leak-rate threshold applies: ${r.applicability.reason}.`,
     );
   if (r.leakCheck)
@@ -99,7 +104,7 @@ function profileSection(doc: Doc, r: SystemRecordsView) {
   if (r.nextInspection)
     para(
       doc,
-      `Next inspection due ${day(r.nextInspection.dueOn)} (${r.nextInspection.reason}; ${readableSource(r.nextInspection.source)}).`,
+      `Next inspection due ${day(r.nextInspection.dueOn)} (${r.nextInspection.reason}; ${cite(r.nextInspection.source)}).`,
     );
 }
 
@@ -178,7 +183,7 @@ function euRecordsSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => 
     );
 }
 
-function chronicSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string) {
+function chronicSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string, cite: Cite) {
   if (!r.chronic.length) return;
   heading(doc, "Added per calendar year");
   table(
@@ -203,7 +208,7 @@ function chronicSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => st
   if (r.chronicRule)
     para(
       doc,
-      `Chronic leaker from ${r.chronicRule.percent} % of the full charge in a calendar year, reported by ${r.chronicRule.reportBy} (${readableSource(r.chronicRule.source)}).`,
+      `Chronic leaker from ${r.chronicRule.percent} % of the full charge in a calendar year, reported by ${r.chronicRule.reportBy} (${cite(r.chronicRule.source)}).`,
     );
 }
 
@@ -262,7 +267,7 @@ function findingsSection(doc: Doc, findingList: FindingDetail[]) {
   }
 }
 
-function dueSection(doc: Doc, r: SystemRecordsView) {
+function dueSection(doc: Doc, r: SystemRecordsView, cite: Cite) {
   if (!r.due.length) return;
   heading(doc, "Due");
   table(
@@ -273,20 +278,17 @@ function dueSection(doc: Doc, r: SystemRecordsView) {
       { title: "What", share: 212 },
       { title: "Rule", share: 150 },
     ],
-    r.due.map((d) => [d.dueOn ? day(d.dueOn) : "no date", d.state.replace("-", " "), d.what, readableSource(d.source)]),
+    r.due.map((d) => [d.dueOn ? day(d.dueOn) : "no date", d.state.replace("-", " "), d.what, cite(d.source)]),
   );
 }
 
-function recordKeepingSection(doc: Doc, r: SystemRecordsView) {
+function recordKeepingSection(doc: Doc, r: SystemRecordsView, cite: Cite) {
   heading(doc, "Record keeping and safety");
   para(
     doc,
     "“reading”: how the product applies a rule whose text it has not confirmed; every reading is listed once on the company's rule-profile page (Settings, Readings).",
   );
-  para(
-    doc,
-    `Keep these records for at least ${r.profile.retentionYears} years (${readableSource(r.profile.retentionSource)}).`,
-  );
+  para(doc, `Keep these records for at least ${r.profile.retentionYears} years (${cite(r.profile.retentionSource)}).`);
   para(
     doc,
     r.profile.wording === "eu"
@@ -343,6 +345,7 @@ export function leakRateStatementPdf(
     doc.on("error", reject);
   });
   const mass = (kg: number) => statementMass(kg, options.massUnit, options.numberFormat);
+  const cite = (source: string) => citedWithAcceptance(source, options.acceptedReadings ?? null);
   const generated = `made ${formatInZone(options.generatedAt ?? new Date(), r.store.timeZone, "dateTime")}`;
 
   doc.font("bold").fontSize(17).fillColor(INK).text("Leak-rate statement", MARGIN);
@@ -354,15 +357,15 @@ export function leakRateStatementPdf(
     8.5,
   );
 
-  systemSection(doc, r, mass);
-  profileSection(doc, r);
+  systemSection(doc, r, mass, cite);
+  profileSection(doc, r, cite);
   if (r.profile.leakRateRules) leakRateSection(doc, r, mass);
   else euRecordsSection(doc, r, mass);
-  chronicSection(doc, r, mass);
+  chronicSection(doc, r, mass, cite);
   voidedSection(doc, r, mass);
   findingsSection(doc, findingList);
-  dueSection(doc, r);
-  recordKeepingSection(doc, r);
+  dueSection(doc, r, cite);
+  recordKeepingSection(doc, r, cite);
   footers(doc, r, generated);
   doc.end();
   return done;
