@@ -145,11 +145,12 @@ it("on a laptop a system's records show the leak rate against the threshold and 
   const rate = page.getByRole("figure", { name: "Leak rate at each addition" });
   await rate.waitFor();
   const charge = page.getByRole("figure", { name: "Charge added over time" });
-  // drawn: a line through the figures and a bar per day of charge added (7 additions)
-  expect(await rate.locator("svg .recharts-line-curve").count()).toBeGreaterThanOrEqual(1);
-  expect(await charge.locator("svg .recharts-bar-rectangle").count()).toBe(7);
+  // drawn: a line through the figures and a bar per day of charge added (7 additions). The charts
+  // draw once their container has been measured, after the figure is on the page: wait for the marks.
+  await rate.locator("svg .recharts-line-curve").first().waitFor({ state: "attached" });
+  await expect.poll(() => charge.locator("svg .recharts-bar-rectangle").count()).toBe(7);
   // axis labels in the member's units (the company weighs in pounds)
-  expect(await charge.locator(".recharts-label").allTextContents()).toContain("Refrigerant, lb");
+  await expect.poll(() => charge.locator(".recharts-label").allTextContents()).toContain("Refrigerant, lb");
   await page.getByRole("heading", { name: "Over time" }).scrollIntoViewIfNeeded();
   await page.screenshot({ path: path.join(SCREENS, "system-plots-1366.png") });
   await context.close();
