@@ -35,7 +35,7 @@ if (!existsSync(path.resolve(import.meta.dirname, "../../dist/client/index.html"
 
 const { startE2eServer } = await import("../../tests/helpers/e2e-server");
 const { seedCompany, PASSWORD } = await import("../../tests/helpers/fixtures");
-const { mapStoreForWalk, planToScreen, waitForServiceWorker, waitForSteadyPlan } = await import(
+const { mapStoreForWalk, planToScreen, queueTapsOnDevice, waitForServiceWorker, waitForSteadyPlan } = await import(
   "../../tests/helpers/walk-e2e"
 );
 const { launchBrowser, newContext } = await import("../../tests/helpers/browser");
@@ -156,43 +156,8 @@ try {
   const taps = benchTaps();
   const first = taps.slice(0, READINGS - UPDATES);
   const later = taps.slice(READINGS - UPDATES);
-  await page.evaluate(
-    async ({ sweepId, taps }) => {
-      const db: IDBDatabase = await new Promise((resolve, reject) => {
-        const r = indexedDB.open("plumeline-walk");
-        r.onsuccess = () => resolve(r.result);
-        r.onerror = () => reject(r.error);
-      });
-      const sweep: { startedAt: string } = await new Promise((resolve) => {
-        const g = db.transaction("sweeps").objectStore("sweeps").get(sweepId);
-        g.onsuccess = () => resolve(g.result);
-      });
-      const t0 = Date.parse(sweep.startedAt) - 3_600_000;
-      const tx = db.transaction(["readings", "meta"], "readwrite");
-      taps.forEach((tap, i) =>
-        tx.objectStore("readings").put({
-          id: crypto.randomUUID(),
-          sweepId,
-          seq: 1000 + i,
-          x: tap.x,
-          y: tap.y,
-          takenAt: new Date(t0 + Math.round(tap.t * 1000)).toISOString(),
-          ppm: tap.ppm,
-          atLeast: tap.atLeast,
-          samplePoint: "grille",
-          note: "",
-          sync: { kind: "queued-new" },
-        }),
-      );
-      tx.objectStore("meta").put(5000, "seq");
-      await new Promise((resolve, reject) => {
-        tx.oncomplete = resolve;
-        tx.onerror = () => reject(tx.error);
-      });
-      db.close();
-    },
-    { sweepId, taps: first },
-  );
+  // written an hour back, so the whole walk lies before now and the keypad's taps follow it in time
+  await queueTapsOnDevice(page, sweepId, first, -3_600_000);
   await page.reload();
   await page
     .getByTestId("walk-count")

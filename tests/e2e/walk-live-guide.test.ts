@@ -6,7 +6,7 @@ import { signInThroughForm } from "../helpers/e2e-session";
 import { walkSuite } from "../helpers/walk-suite";
 import { PASSWORD } from "../helpers/fixtures";
 import { latestDemoTaps } from "../helpers/demo-sweep-taps";
-import { waitForServiceWorker, waitForSteadyPlan } from "../helpers/walk-e2e";
+import { queueTapsOnDevice, waitForServiceWorker, waitForSteadyPlan } from "../helpers/walk-e2e";
 
 const suite = walkSuite("Ashgrove Pantry");
 const SCREENS = path.resolve(import.meta.dirname, "../../test-results/screens");
@@ -39,49 +39,14 @@ it("on a phone, offline, after the demo sweep's readings: live suspects and next
   // No signal from here on: the readings stay on the device and the estimate is made there.
   await context.setOffline(true);
   const taps = latestDemoTaps();
-  await page.evaluate(
-    async ({ sweepId, taps }) => {
-      const db: IDBDatabase = await new Promise((resolve, reject) => {
-        const r = indexedDB.open("plumeline-walk");
-        r.onsuccess = () => resolve(r.result);
-        r.onerror = () => reject(r.error);
-      });
-      const sweep: { startedAt: string } = await new Promise((resolve) => {
-        const g = db.transaction("sweeps").objectStore("sweeps").get(sweepId);
-        g.onsuccess = () => resolve(g.result);
-      });
-      const t0 = Date.parse(sweep.startedAt);
-      const tx = db.transaction(["readings", "meta"], "readwrite");
-      taps.forEach((tap, i) =>
-        tx.objectStore("readings").put({
-          id: crypto.randomUUID(),
-          sweepId,
-          seq: 1000 + i,
-          x: tap.x,
-          y: tap.y,
-          takenAt: new Date(t0 + Math.round(tap.t * 1000)).toISOString(),
-          ppm: tap.ppm,
-          atLeast: tap.atLeast,
-          samplePoint: "grille",
-          note: "",
-          sync: { kind: "queued-new" },
-        }),
-      );
-      tx.objectStore("meta").put(5000, "seq");
-      await new Promise((resolve, reject) => {
-        tx.oncomplete = resolve;
-        tx.onerror = () => reject(tx.error);
-      });
-      db.close();
-    },
-    {
-      sweepId,
-      taps: taps.map((t) => ({
-        ...t,
-        x: Math.min(59.95, Math.max(0.05, t.x)),
-        y: Math.min(35.95, Math.max(0.05, t.y)),
-      })),
-    },
+  await queueTapsOnDevice(
+    page,
+    sweepId,
+    taps.map((t) => ({
+      ...t,
+      x: Math.min(59.95, Math.max(0.05, t.x)),
+      y: Math.min(35.95, Math.max(0.05, t.y)),
+    })),
   );
   // Reloaded offline: the service worker serves the app shell and the worker script from its cache.
   await page.reload();

@@ -76,3 +76,57 @@ export async function until<T>(what: string, read: () => Promise<T>, ok: (v: T) 
     await new Promise((r) => setTimeout(r, 200));
   }
 }
+
+/** A tap as the demo and benchmark sweeps list them: `t` seconds into the walk. */
+export interface DeviceTap {
+  x: number;
+  y: number;
+  t: number;
+  ppm: number;
+  atLeast: boolean;
+}
+
+/**
+ * Writes taps straight into the device's IndexedDB for a sweep, queued for upload as the keypad
+ * leaves them, in one transaction (quicker than tapping hundreds). Each is taken `t` seconds after
+ * the sweep's start plus `offsetMs`. The page must be reloaded to show them.
+ */
+export async function queueTapsOnDevice(page: Page, sweepId: string, taps: readonly DeviceTap[], offsetMs = 0) {
+  await page.evaluate(
+    async ({ sweepId, taps, offsetMs }) => {
+      const db: IDBDatabase = await new Promise((resolve, reject) => {
+        const r = indexedDB.open("plumeline-walk");
+        r.onsuccess = () => resolve(r.result);
+        r.onerror = () => reject(r.error);
+      });
+      const sweep: { startedAt: string } = await new Promise((resolve) => {
+        const g = db.transaction("sweeps").objectStore("sweeps").get(sweepId);
+        g.onsuccess = () => resolve(g.result);
+      });
+      const t0 = Date.parse(sweep.startedAt) + offsetMs;
+      const tx = db.transaction(["readings", "meta"], "readwrite");
+      taps.forEach((tap, i) =>
+        tx.objectStore("readings").put({
+          id: crypto.randomUUID(),
+          sweepId,
+          seq: 1000 + i,
+          x: tap.x,
+          y: tap.y,
+          takenAt: new Date(t0 + Math.round(tap.t * 1000)).toISOString(),
+          ppm: tap.ppm,
+          atLeast: tap.atLeast,
+          samplePoint: "grille",
+          note: "",
+          sync: { kind: "queued-new" },
+        }),
+      );
+      tx.objectStore("meta").put(5000, "seq");
+      await new Promise((resolve, reject) => {
+        tx.oncomplete = resolve;
+        tx.onerror = () => reject(tx.error);
+      });
+      db.close();
+    },
+    { sweepId, taps, offsetMs },
+  );
+}
