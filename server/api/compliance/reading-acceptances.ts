@@ -3,6 +3,7 @@ import { alias } from "drizzle-orm/pg-core";
 import type { AppContext } from "../../context";
 import type { AcceptReadingInput, ReadingsResponse, WithdrawReadingInput } from "#core/contracts/compliance";
 import { profileReadings } from "#core/domain/compliance/readings";
+import type { RuleProfile } from "#core/domain/compliance/rule-profile";
 import { complianceAudit, readingAcceptances, readingWithdrawals, users } from "../../db/schema/index";
 import { badRequest } from "../../lib/http-error";
 import type { Viewer } from "../../access/store-access";
@@ -73,10 +74,17 @@ export async function listReadings(ctx: AppContext, companyId: string): Promise<
   };
 }
 
-/** The words of the readings the owner has accepted now: what a printed statement marks as accepted. */
-export async function acceptedReadingTexts(ctx: AppContext, companyId: string): Promise<Set<string>> {
-  const { readings } = await listReadings(ctx, companyId);
-  return new Set(readings.filter((r) => r.accepted).map((r) => r.text));
+/**
+ * The words of the profile's readings the owner has accepted now: what a printed statement marks as
+ * accepted. Takes the profile the caller has already read.
+ */
+export async function acceptedReadingTexts(
+  ctx: AppContext,
+  companyId: string,
+  profile: RuleProfile,
+): Promise<Set<string>> {
+  const { standing } = await acceptanceHistory(ctx, companyId, profile.id);
+  return new Set(profileReadings(profile).map((r) => r.text).filter((text) => standing.has(text)));
 }
 
 function notListed(profileName: string) {

@@ -64,7 +64,7 @@ export async function writeArchive(
     paper: await companyPaper(ctx, viewer.companyId, profile),
     massUnit: display.mass,
     numberFormat: display.number,
-    acceptedReadings: await acceptedReadingTexts(ctx, viewer.companyId),
+    acceptedReadings: await acceptedReadingTexts(ctx, viewer.companyId, profile),
     generatedAt: now,
   };
   const systems = tables.find((t) => t.file === "systems.csv")?.rows ?? [];

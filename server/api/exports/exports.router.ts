@@ -51,13 +51,16 @@ export function exportsRouter(ctx: AppContext): Router {
       const records = await getSystemRecords(ctx, member(req), res.locals.params.id);
       const list = await listFindings(ctx, member(req), records.store.id, { systemId: records.system.id });
       const companyId = member(req).companyId;
-      const [{ profile }, display, acceptedReadings] = await Promise.all([
+      const [{ profile }, display] = await Promise.all([
         companyRules(ctx, companyId),
         companyMassDisplay(ctx, companyId),
-        acceptedReadingTexts(ctx, companyId),
+      ]);
+      const [paper, acceptedReadings] = await Promise.all([
+        companyPaper(ctx, companyId, profile),
+        acceptedReadingTexts(ctx, companyId, profile),
       ]);
       const pdf = await leakRateStatementPdf(records, list, {
-        paper: await companyPaper(ctx, companyId, profile),
+        paper,
         massUnit: display.mass,
         numberFormat: display.number,
         acceptedReadings,
