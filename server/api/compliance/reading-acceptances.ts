@@ -84,7 +84,11 @@ export async function acceptedReadingTexts(
   profile: RuleProfile,
 ): Promise<Set<string>> {
   const { standing } = await acceptanceHistory(ctx, companyId, profile.id);
-  return new Set(profileReadings(profile).map((r) => r.text).filter((text) => standing.has(text)));
+  return new Set(
+    profileReadings(profile)
+      .map((r) => r.text)
+      .filter((text) => standing.has(text)),
+  );
 }
 
 function notListed(profileName: string) {
