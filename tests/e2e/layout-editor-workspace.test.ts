@@ -11,13 +11,12 @@ import { mkdir } from "node:fs/promises";
 import { afterAll, beforeAll, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { eq } from "drizzle-orm";
-import { launchBrowser, newContext } from "../helpers/browser";
+import { launchBrowser } from "../helpers/browser";
 import { startE2eServer, type E2eServer } from "../helpers/e2e-server";
-import { PASSWORD, seedCompany } from "../helpers/fixtures";
-import { signInThroughForm } from "../helpers/e2e-session";
+import { seedCompany } from "../helpers/fixtures";
 import { signIn } from "../helpers/test-app";
 import { touchDrag, touchSession } from "../helpers/touch";
-import { LAYOUT_STAGE, stageSettled } from "../helpers/layout-e2e";
+import { LAYOUT_STAGE, openLayoutEditor, stageSettled } from "../helpers/layout-e2e";
 import { mapStoreForWalk } from "../helpers/walk-e2e";
 import { plans, users } from "../../server/db/schema/index";
 
@@ -74,19 +73,9 @@ afterAll(async () => {
   await server?.close();
 });
 
-const TOUCH = { hasTouch: true, isMobile: true, deviceScaleFactor: 2 };
-
-async function openEditor(viewport: { width: number; height: number }, touch: boolean) {
-  const context = await newContext(browser, { viewport, ...(touch ? TOUCH : {}) });
-  const page = await context.newPage();
-  const failures: string[] = [];
-  page.on("pageerror", (e) => failures.push(String(e)));
-  page.on("console", (m) => m.type() === "error" && failures.push(m.text()));
-  await signInThroughForm(page, server.url, co.people["lead-tech"].email, PASSWORD);
-  await page.goto(`${server.url}/stores/${co.store.id}/plans/${planId}/layout`);
-  await page.locator(`${STAGE} canvas`).first().waitFor();
-  await stageSettled(page);
-  return { context, page, failures };
+function openEditor(viewport: { width: number; height: number }, touch: boolean) {
+  const at = { url: server.url, email: co.people["lead-tech"].email, storeId: co.store.id, planId };
+  return openLayoutEditor(browser, at, viewport, touch);
 }
 
 /** The stage, the tools and the drawing's box on screen (CSS px), from the view the stage reports. */

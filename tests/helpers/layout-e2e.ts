@@ -1,7 +1,10 @@
 import { mkdtemp, writeFile } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import type { Page } from "playwright-core";
+import type { Browser, Page } from "playwright-core";
+import { newContext } from "./browser";
+import { signInThroughForm } from "./e2e-session";
+import { PASSWORD } from "./fixtures";
 import { Jimp, JimpMime } from "jimp";
 
 /**
@@ -56,4 +59,29 @@ export async function stageSettled(page: Page, stage = LAYOUT_STAGE): Promise<vo
     last = now;
   }
   throw new Error("the editor's stage never settled");
+}
+
+/**
+ * A fresh browser context at `viewport` (a phone or tablet's touch when `touch`), signed in through the
+ * form, on a plan's layout editor once its stage has settled; `failures` collects page errors.
+ */
+export async function openLayoutEditor(
+  browser: Browser,
+  at: { url: string; email: string; storeId: string; planId: string },
+  viewport: { width: number; height: number },
+  touch: boolean,
+) {
+  const context = await newContext(browser, {
+    viewport,
+    ...(touch ? { hasTouch: true, isMobile: true, deviceScaleFactor: 2 } : {}),
+  });
+  const page = await context.newPage();
+  const failures: string[] = [];
+  page.on("pageerror", (e) => failures.push(String(e)));
+  page.on("console", (m) => m.type() === "error" && failures.push(m.text()));
+  await signInThroughForm(page, at.url, at.email, PASSWORD);
+  await page.goto(`${at.url}/stores/${at.storeId}/plans/${at.planId}/layout`);
+  await page.locator(`${LAYOUT_STAGE} canvas`).first().waitFor();
+  await stageSettled(page);
+  return { context, page, failures };
 }
