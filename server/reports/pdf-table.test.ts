@@ -7,6 +7,7 @@ import { describe, expect, it } from "vitest";
 import { reportDocument } from "./report-document";
 import { CONTINUED_MARK, CUT_MARK, drawTable, type PdfColumn } from "./pdf-table";
 import { overlappingText, pdfLayout } from "../../tests/helpers/pdf-text";
+import { renderPdfPages } from "../../tests/helpers/pdf-pages";
 
 const MARGIN = 50;
 const STYLE = { font: "regular", boldFont: "bold", size: 8.5, ink: "#111111", muted: "#555555", rule: "#999999" };
@@ -16,7 +17,8 @@ const COLUMNS: PdfColumn[] = [
   { title: "Added", share: 1, align: "right" },
 ];
 
-async function tablePdf(size: "A4" | "LETTER", rows: string[][], columns = COLUMNS) {
+/** The table's pages as pdfjs reads them; also rendered to test-results/pdf/<name>-N.png for a person. */
+async function tablePdf(name: string, size: "A4" | "LETTER", rows: string[][], columns = COLUMNS) {
   const doc = reportDocument({ size, margin: MARGIN });
   const chunks: Buffer[] = [];
   doc.on("data", (c: Buffer) => chunks.push(c));
@@ -25,7 +27,9 @@ async function tablePdf(size: "A4" | "LETTER", rows: string[][], columns = COLUM
   drawTable(doc, columns, rows, STYLE);
   doc.end();
   await ended;
-  return pdfLayout(new Uint8Array(Buffer.concat(chunks)));
+  const bytes = new Uint8Array(Buffer.concat(chunks));
+  renderPdfPages(bytes, name);
+  return pdfLayout(bytes);
 }
 
 /** Every text run inside the page's margins (a run's box reaches a little below its baseline). */
@@ -44,7 +48,7 @@ describe("a table cell taller than a page", () => {
 
   for (const size of ["A4", "LETTER"] as const) {
     it(`on ${size}: split across pages under the header, marked, within the margins, no word lost`, async () => {
-      const pages = await tablePdf(size, rows);
+      const pages = await tablePdf(`pdf-table-split-${size.toLowerCase()}`, size, rows);
       expect(pages.length).toBeGreaterThanOrEqual(2);
       expect(pages.length).toBeLessThanOrEqual(5);
       for (const [n, page] of pages.entries()) {
@@ -72,6 +76,7 @@ describe("a table cell taller than a page", () => {
     // wider than its column character by character, so a longer one only makes the test slower.)
     const token = "X".repeat(1_000);
     const pages = await tablePdf(
+      "pdf-table-token-a4",
       "A4",
       [["2026-03-09", token, "1.0 lb"]],
       [
