@@ -95,7 +95,30 @@ describe("the live estimate", () => {
     }
   });
 
-  it("suggests nothing without a suspect", () => {
+  it("suggests nothing without an alarm", () => {
     expect(liveProbes(liveFit(store(null, 50)), { x: 0, y: 0 })).toEqual([]);
+  });
+
+  it("with an alarm but no credible spot yet, traces the gas between where the alarm's air was drawn in and the alarm", () => {
+    // One 3 ppm reading at x = 11 over 0.4 ppm elsewhere, 3 s of delay at a tap a metre every 2 s: its
+    // air was drawn in about 3 m back along the walk. One reading is not a credible spot.
+    const base = store(null);
+    const readings = base.readings.map((r) => ({ ...r, ppm: r.x === 11 ? 3 : 0.4 }));
+    const input = parseLocatorInput({
+      plan: base.plan,
+      instrument: { transportDelayS: 3, timeConstantS: 0, alarmPpm: 2 },
+      readings,
+    });
+    const fit = liveFit(input);
+    expect(fit.estimate.kind).toBe("no-spot");
+    const probes = liveProbes(fit, { x: 11, y: 2.2 });
+    expect(probes.length).toBeGreaterThan(0);
+    for (const p of probes) {
+      expect(p.reason.kind).toBe("traces");
+      // within the search's reach (3 m) of the stretch from x ≈ 8 to the alarm at x = 11
+      expect(p.x).toBeGreaterThan(8 - 3.5);
+      expect(p.x).toBeLessThan(11 + 3.5);
+      if (p.kind === "case-front") expect(CASES.some((c) => pointInPolygon([p.x, p.y], c.polygon))).toBe(false);
+    }
   });
 });

@@ -3,7 +3,8 @@ import type { CorrectedReading, SuspectSpotFacts } from "../../contracts/locator
 import { locate, type LocatorOptions } from "../locate";
 import { LOCATOR_SETTINGS } from "../locator/settings";
 import { createSourceKernel } from "../locator/source-kernel";
-import { cutToWindow, evidenceBox, type PlanBox } from "./evidence-window";
+import { evidenceOf, searchAroundAlarm } from "./evidence-search";
+import { cutToWindow, evidenceBox, type EvidenceWindow, type PlanBox } from "./evidence-window";
 import { hypothesesOf, nextProbes, type ProbeSuggestion } from "./next-probes";
 import { probePlaces } from "./probe-places";
 
@@ -107,11 +108,9 @@ export type LiveProbe = Omit<ProbeSuggestion, "value">;
  */
 export function liveProbes(fit: LiveFit, from: { x: number; y: number }, n = 3): LiveProbe[] {
   const { window, candidates } = fit;
-  if (!window || candidates.length === 0) return [];
+  if (!window) return [];
+  if (candidates.length === 0) return alarmProbes(fit, window, from, n);
   const { box } = window;
-  const k = LOCATOR_SETTINGS.kernel;
-  const source = createSourceKernel(k.screeningLengthM, k.nearCutoffM, k.truncationM);
-  const kernel = (d: number) => source.at(d);
   const first = candidates[0];
   // A place where a reading was already taken is not offered again: the technician has its answer.
   const taken = window.input.readings;
@@ -120,11 +119,48 @@ export function liveProbes(fit: LiveFit, from: { x: number; y: number }, n = 3):
   );
   const hypotheses = hypothesesOf(candidates, fit.corrected, kernel);
   const here = { x: from.x - box.x, y: from.y - box.y };
-  return nextProbes(hypotheses, places, kernel, here, n).map(({ value: _value, ...p }) => ({
-    ...p,
-    x: round2(p.x + box.x),
-    y: round2(p.y + box.y),
-  }));
+  return toPlan(nextProbes(hypotheses, places, kernel, here, n), box);
 }
+
+/**
+ * While no spot is credible: where the strongest alarm's gas came from (evidence-search.ts), probing
+ * between where its air was drawn in and where it was read, to bracket the peak along the case.
+ */
+function alarmProbes(fit: LiveFit, window: EvidenceWindow, from: { x: number; y: number }, n: number): LiveProbe[] {
+  const alarm = strongestAlarm(fit.corrected, window.input.instrument.alarmPpm);
+  if (!alarm) return [];
+  const { box } = window;
+  const search = searchAroundAlarm({
+    plan: window.input.plan,
+    origin: alarm.corrected,
+    alarm: alarm.raw,
+    evidence: evidenceOf(fit.corrected, window.input.instrument),
+    read: window.input.readings,
+    from: { x: from.x - box.x, y: from.y - box.y },
+    kernel,
+    n,
+  });
+  return toPlan(search.probes, box);
+}
+
+/** The strongest reading at or above the alarm outside benign zones (the latest of equals), as the window anchors on. */
+function strongestAlarm(readings: readonly CorrectedReading[], alarmPpm: number): CorrectedReading | null {
+  let best: CorrectedReading | null = null;
+  for (const r of readings) {
+    if (r.ppm < alarmPpm || r.flags.includes("in-benign-zone")) continue;
+    if (!best || r.ppm >= best.ppm) best = r;
+  }
+  return best;
+}
+
+const toPlan = (probes: ProbeSuggestion[], box: PlanBox): LiveProbe[] =>
+  probes.map(({ value: _value, ...p }) => ({ ...p, x: round2(p.x + box.x), y: round2(p.y + box.y) }));
+
+const sourceKernel = createSourceKernel(
+  LOCATOR_SETTINGS.kernel.screeningLengthM,
+  LOCATOR_SETTINGS.kernel.nearCutoffM,
+  LOCATOR_SETTINGS.kernel.truncationM,
+);
+const kernel = (d: number) => sourceKernel.at(d);
 
 const round2 = (v: number) => Math.round(v * 100) / 100;

@@ -16,7 +16,9 @@ export interface Hypothesis {
 /** Why a probe place was chosen, as facts; the words are the presenter's. */
 export type ProbeReason =
   | { kind: "separates"; ranks: [number, number]; fixtureIds: [string | null, string | null] }
-  | { kind: "narrows"; rank: number; fixtureId: string | null };
+  | { kind: "narrows"; rank: number; fixtureId: string | null }
+  /** Before any credible spot: finds where along this fixture the alarm's gas is strongest (evidence-search.ts). */
+  | { kind: "traces"; fixtureId: string | null };
 
 export interface ProbeSuggestion extends ProbePlace {
   /** Expected information from a reading here (a sum of pairwise separations; larger tells more). */

@@ -39,6 +39,10 @@ export function probeReasonWords(p: LiveProbe, ctx: WordsContext): string {
     const b = spotName(r.ranks[1], r.fixtureIds[1], ctx);
     return a === b ? `tells two spots on ${a} apart` : `tells ${a} from ${b}`;
   }
+  if (r.kind === "traces") {
+    const where = (r.fixtureId && ctx.name(r.fixtureId)) || "the cases here";
+    return `finds where along ${where} the alarm's gas is strongest`;
+  }
   return `narrows down where on ${spotName(r.rank, r.fixtureId, ctx)} the leak is`;
 }
 

@@ -1,9 +1,12 @@
 // Plumeline's way after an alarm: run the locator on the readings so far, mark its first suspect, and
-// take the next reading where it best tells the current hypotheses apart (core/analysis/guide). Stop
-// when the first suspect has settled: it moved less than SETTLED_M over the last SETTLED_READINGS.
-// While the readings support no suspect yet, the next reading goes where the alarm's air was drawn in
-// (probesAroundAlarm), at most ORIGIN_PROBES times before the alarm counts as a passing wisp.
-import { hypothesesOf, nextProbes, probesAroundAlarm } from "#core/analysis/guide/next-probes";
+// take the next reading where it best tells the current hypotheses apart (core/analysis/guide). While
+// the locator finds no credible spot near the alarm, the readings around where the alarm's air was
+// drawn in are weighed site by site (evidence-search.ts): the likeliest site is a provisional mark and
+// the next reading brackets the gas's peak along the case. Stop when the mark has settled: it moved
+// less than SETTLED_M over the last SETTLED_READINGS. If no probe reaches the alarm after
+// ORIGIN_PROBES readings, the alarm counts as a passing wisp and the sweep goes on.
+import { evidenceOf, searchAroundAlarm } from "#core/analysis/guide/evidence-search";
+import { hypothesesOf, nextProbes } from "#core/analysis/guide/next-probes";
 import { probePlaces } from "#core/analysis/guide/probe-places";
 import { locate } from "#core/analysis/locate";
 import { createSourceKernel } from "#core/analysis/locator/source-kernel";
@@ -18,10 +21,8 @@ const SETTLED_READINGS = 3;
 const REACH_M = 6;
 /** The live suspects are those within this distance of the alarm that started the search (m). */
 const WINDOW_M = 8;
-/** Readings taken around the alarm's origin while no suspect is supported, before giving up on it. */
+/** Probes around the alarm's origin that never reach the alarm before it counts as a wisp. */
 const ORIGIN_PROBES = 4;
-/** Probe places around the alarm's origin are looked for this far from it (m). */
-const ORIGIN_REACH_M = 3;
 
 export const guided: Policy = {
   name: "guided",
@@ -34,7 +35,9 @@ export const guided: Policy = {
     const alarmIndex = readings.length - 1;
     const alarm = readings[alarmIndex];
     const hold = holdS(world);
-    let originProbes = 0;
+    const alarmPpm = world.instrument.alarmPpm;
+    /** The places this search has probed (the technician knows where they held the probe). */
+    const visited: { x: number; y: number }[] = [];
     for (;;) {
       const input = parseLocatorInput({
         plan: world.plan,
@@ -46,28 +49,55 @@ export const guided: Policy = {
       const near = result.candidates.filter((c) => Math.hypot(c.x - alarm.x, c.y - alarm.y) <= WINDOW_M);
       const first = near[0];
       const [x, y] = world.technician.position;
-      if (!first) {
-        // No credible spot from the readings so far: look where the alarm's air came from, then walk on.
-        if (originProbes >= ORIGIN_PROBES) return "nothing";
+      const here = { x, y };
+      const probes = readings.slice(alarmIndex + 1);
+      let mark: { x: number; y: number } | null;
+      let next: { x: number; y: number } | undefined;
+      if (first) {
+        mark = { x: first.x, y: first.y };
+        const places = probePlaces(input.plan, first, REACH_M);
+        next = nextProbes(hypothesesOf(near, result.readings, kernel), places, kernel, here)[0];
+      } else {
+        // No credible spot yet: weigh the places around where the alarm's air came from.
         const origin = result.readings[alarmIndex].corrected;
-        const taken = readings.slice(alarmIndex);
-        const next = probesAroundAlarm(origin, probePlaces(input.plan, origin, ORIGIN_REACH_M), taken)[0];
-        if (!next) return "nothing";
-        originProbes++;
-        world.technician.probeAt(world.map, [next.x, next.y], hold);
-        yield { mark: null };
-        continue;
+        // Each reading at the place its air came from: a held probe read the air where it stood.
+        const evidence = evidenceOf(result.readings, input.instrument);
+        if (probes.length >= ORIGIN_PROBES && !probes.some((r) => r.ppm >= alarmPpm)) return "nothing";
+        const search = searchAroundAlarm({
+          plan: input.plan,
+          origin,
+          alarm,
+          evidence,
+          read: visited,
+          from: here,
+          kernel,
+        });
+        mark = probes.length > 0 && search.mark ? { x: search.mark.x, y: search.mark.y } : null;
+        next = search.probes[0];
+        if (!next && probes.length === 0) return "nothing";
       }
-      marks.push({ x: first.x, y: first.y });
+      if (mark) marks.push(mark);
+      const last = marks[marks.length - 1];
       const settled =
+        mark !== null &&
         marks.length >= SETTLED_READINGS + 1 &&
-        marks.slice(-SETTLED_READINGS - 1).every((m) => Math.hypot(m.x - first!.x, m.y - first!.y) <= SETTLED_M);
-      yield { mark: marks[marks.length - 1] };
+        marks.slice(-SETTLED_READINGS - 1).every((m) => Math.hypot(m.x - last.x, m.y - last.y) <= SETTLED_M);
+      if (process.env.GUIDE_DEBUG)
+        console.log(
+          JSON.stringify({
+            mode: first ? "locator" : "evidence",
+            at: here,
+            last: readings[readings.length - 1],
+            origin: result.readings[alarmIndex].corrected,
+            mark,
+            next,
+          }),
+        );
+      yield { mark };
       if (settled) return "marked";
-      const places = probePlaces(input.plan, first, REACH_M);
-      const next = nextProbes(hypothesesOf(near, result.readings, kernel), places, kernel, { x, y })[0];
-      if (!next) return "marked";
+      if (!next) return mark ? "marked" : "nothing";
       // held as long as the trade rule's re-checks, so a reading is of the air where it was taken
+      visited.push(next);
       world.technician.probeAt(world.map, [next.x, next.y], hold);
     }
   },
