@@ -236,18 +236,38 @@ export function searchAroundAlarm(args: {
   from: { x: number; y: number };
   kernel: Kernel;
   n?: number;
+  /** More places to search around (a credible suspect spot and its radius). */
+  also?: readonly { x: number; y: number; reach: number }[];
 }): AlarmSearch {
   const { plan, origin, alarm, evidence, read, from, kernel } = args;
   const centre = { x: (origin.x + alarm.x) / 2, y: (origin.y + alarm.y) / 2 };
   const reach = Math.hypot(alarm.x - origin.x, alarm.y - origin.y) / 2 + ALARM_REACH_M;
   // Readings farther out than a plume carries say nothing about these sites.
   const near = evidence.filter((r) => Math.hypot(r.x - centre.x, r.y - centre.y) <= reach + EVIDENCE_REACH_M);
-  const hypotheses = weighSites(leakSites(plan, centre, reach), near, backgroundOf(near), kernel);
-  const places = probePlaces(plan, centre, reach).filter(
+  // Where the gas is strongest so far, the search reaches on past the stretch: a plume mixed along
+  // a case reads alike for metres, and its source may lie beyond.
+  const strongest = near.reduce<EvidenceReading | null>((a, r) => (!a || r.ppm > a.ppm ? r : a), null);
+  const discs = [{ at: centre, reach }];
+  if (strongest) discs.push({ at: strongest, reach: ALARM_REACH_M });
+  for (const a of args.also ?? []) discs.push({ at: a, reach: a.reach });
+  const sites = unique(discs.flatMap((d) => leakSites(plan, d.at, d.reach)));
+  const hypotheses = weighSites(sites, near, backgroundOf(near), kernel);
+  const places = unique(discs.flatMap((d) => probePlaces(plan, d.at, d.reach))).filter(
     (p) => !read.some((r) => Math.hypot(r.x - p.x, r.y - p.y) < READ_WITHIN_M),
   );
   return {
     mark: provisionalMark(hypotheses),
     probes: evidenceProbes(hypotheses, places, kernel, from, args.n ?? 3),
   };
+}
+
+/** The same place found from two discs once. */
+function unique<T extends { x: number; y: number }>(items: T[]): T[] {
+  const seen = new Set<string>();
+  return items.filter((p) => {
+    const key = `${p.x.toFixed(3)},${p.y.toFixed(3)}`;
+    if (seen.has(key)) return false;
+    seen.add(key);
+    return true;
+  });
 }

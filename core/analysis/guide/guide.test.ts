@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import type { Candidate, CorrectedReading } from "../../contracts/locator-output";
 import { parseLocatorInput } from "../../contracts/locator-input";
 import { rect } from "../pipeline/stage-fixtures";
-import { hypothesesOf, nextProbes, probesAroundAlarm, type Hypothesis } from "./next-probes";
+import { hypothesesOf, nextProbes, type Hypothesis } from "./next-probes";
 import { probePlaces } from "./probe-places";
 
 // A 12 x 6 m aisle with two 2.4 m cases against the north wall (y 0..1), side by side, and a walk-in.
@@ -108,20 +108,5 @@ describe("hypothesesOf", () => {
     expect(hs).toHaveLength(5);
     expect(hs[0].amplitude).toBeCloseTo(12, 9);
     expect(hs.reduce((s, x) => s + x.weight, 0)).toBeCloseTo(1, 9);
-  });
-});
-
-describe("probesAroundAlarm", () => {
-  it("goes first to the case front nearest where the alarm's air was drawn in, not where a reading was taken", () => {
-    const places = probePlaces(plan, { x: 3.4, y: 1.5 }, 3).filter((p) => p.kind === "case-front");
-    const origin = { x: 3.0, y: 1.6 };
-    const [first, second] = probesAroundAlarm(origin, places, []);
-    const distances = places.map((p) => Math.hypot(p.x - origin.x, p.y - origin.y)).sort((a, b) => a - b);
-    expect(Math.hypot(first.x - origin.x, first.y - origin.y)).toBeCloseTo(distances[0], 9);
-    expect(Math.hypot(second.x - origin.x, second.y - origin.y)).toBeCloseTo(distances[1], 9);
-    // a reading already taken at the nearest place sends the next probe elsewhere
-    const next = probesAroundAlarm(origin, places, [{ x: first.x, y: first.y }]);
-    expect(next.every((p) => Math.hypot(p.x - first.x, p.y - first.y) >= 0.6)).toBe(true);
-    expect(next.length).toBe(3);
   });
 });

@@ -143,25 +143,3 @@ function permutations<T>(items: T[]): T[][] {
     permutations([...items.slice(0, k), ...items.slice(k + 1)]).map((rest) => [item, ...rest]),
   );
 }
-
-/**
- * Before the readings support any suspect spot: up to `n` probe places nearest to where the alarm's
- * air was drawn in (the alarm reading moved back along the walk by the delay), skipping places within
- * `minSpacingM` of a reading already taken, nearest first. The trade re-checks there first too (walk
- * back one delay, common practice, no published source); each reading there either starts a suspect or
- * shows the alarm was a passing wisp.
- */
-export function probesAroundAlarm(
-  origin: { x: number; y: number },
-  places: readonly ProbePlace[],
-  taken: readonly { x: number; y: number }[],
-  n = 3,
-  minSpacingM = 0.6,
-): ProbePlace[] {
-  const fresh = places.filter((p) => taken.every((t) => Math.hypot(t.x - p.x, t.y - p.y) >= minSpacingM));
-  return fresh
-    .map((p) => ({ p, d: Math.hypot(p.x - origin.x, p.y - origin.y) }))
-    .sort((a, b) => a.d - b.d)
-    .slice(0, n)
-    .map(({ p }) => p);
-}

@@ -1,4 +1,4 @@
-import type { LiveProbe, LiveSuspect } from "../../analysis/guide/live-guide";
+import type { LiveLead, LiveProbe, LiveSuspect } from "../../analysis/guide/live-guide";
 import { lengthWords } from "./length-words";
 import type { WordsContext } from "./words-context";
 
@@ -14,6 +14,12 @@ function spotName(rank: number, fixtureId: string | null, ctx: WordsContext): st
 export function liveSuspectWords(s: LiveSuspect, ctx: WordsContext): string {
   const where = (s.fixtureId && ctx.name(s.fixtureId)) || "open floor";
   return `Suspect ${s.rank}: ${where}, within ${lengthWords(s.radius, ctx.length, ctx.numbers)}`;
+}
+
+/** Before any credible spot: where the gas is strongest so far, said to be provisional. */
+export function liveLeadWords(lead: LiveLead, ctx: WordsContext): string {
+  const name = lead.fixtureId && ctx.name(lead.fixtureId);
+  return `No credible spot yet: the gas is strongest so far ${name ? `at ${name}` : "here"}`;
 }
 
 /** Where the probe goes, as the technician finds it on the floor. */

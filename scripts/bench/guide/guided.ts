@@ -17,6 +17,8 @@ import { holdS } from "./trade-rule";
 
 const SETTLED_M = 0.3;
 const SETTLED_READINGS = 3;
+/** A provisional mark (no credible spot yet) settles only once it holds this share of the sites' weight. */
+const SETTLED_SHARE = Number(process.env.GUIDE_SHARE ?? 0.6);
 /** Probe places are looked for this far around the first suspect (m). */
 const REACH_M = 6;
 /** The live suspects are those within this distance of the alarm that started the search (m). */
@@ -52,8 +54,10 @@ export const guided: Policy = {
       const here = { x, y };
       const probes = readings.slice(alarmIndex + 1);
       let mark: { x: number; y: number } | null;
+      /** How much of the weight the provisional mark holds (1 for the locator's credible spot). */
+      let provisionalShare = 1;
       let next: { x: number; y: number } | undefined;
-      if (first) {
+      if (first && process.env.GUIDE_MARK !== "evidence") {
         mark = { x: first.x, y: first.y };
         const places = probePlaces(input.plan, first, REACH_M);
         next = nextProbes(hypothesesOf(near, result.readings, kernel), places, kernel, here)[0];
@@ -72,7 +76,10 @@ export const guided: Policy = {
           from: here,
           kernel,
         });
-        mark = probes.length > 0 && search.mark ? { x: search.mark.x, y: search.mark.y } : null;
+        // Marked once a re-check has reached the alarm, as the trade rule marks only a peak at the alarm.
+        const confirmed = probes.some((r) => r.ppm >= alarmPpm);
+        mark = confirmed && search.mark ? { x: search.mark.x, y: search.mark.y } : null;
+        provisionalShare = search.mark?.share ?? 0;
         next = search.probes[0];
         if (!next && probes.length === 0) return "nothing";
       }
@@ -80,12 +87,13 @@ export const guided: Policy = {
       const last = marks[marks.length - 1];
       const settled =
         mark !== null &&
+        provisionalShare >= SETTLED_SHARE &&
         marks.length >= SETTLED_READINGS + 1 &&
         marks.slice(-SETTLED_READINGS - 1).every((m) => Math.hypot(m.x - last.x, m.y - last.y) <= SETTLED_M);
       if (process.env.GUIDE_DEBUG)
         console.log(
           JSON.stringify({
-            mode: first ? "locator" : "evidence",
+            mode: first ? "credible" : "evidence",
             at: here,
             last: readings[readings.length - 1],
             origin: result.readings[alarmIndex].corrected,
