@@ -3,7 +3,7 @@ import type { CorrectedReading } from "../../contracts/locator-output";
 import { pointInPolygon } from "../geometry/point-in-polygon";
 import type { Hypothesis, Kernel, ProbeSuggestion } from "./next-probes";
 import { nextProbes } from "./next-probes";
-import { probePlaces, type ProbePlace } from "./probe-places";
+import { probePlaces, roomWithin, type ProbePlace } from "./probe-places";
 
 // Before the locator finds a credible spot (a weak plume, a few readings), the readings near an alarm
 // still say where along a case the gas is strongest. Here the places a leak could be near where the
@@ -62,7 +62,8 @@ const ROOMS = new Set(["walk-in", "machine-room"]);
  * The places within `reachM` of `near` where a leak could be (common practice, no published source:
  * leaks are found at case backs, joints, coils and line-set drops): every SITE_SPACING_M along each
  * case side that no probe can reach (against a wall, a spine or another case), BACK_INSET_M inside;
- * for a case open on every side (an island), along its middle; each risk point; a room's middle.
+ * for a case open on every side (an island), along its middle; each risk point; the middle and the
+ * risk points of a walk-in or machine room whose walls come within reach.
  */
 export function leakSites(plan: Plan, near: { x: number; y: number }, reachM: number): LeakSite[] {
   const within = (x: number, y: number) => Math.hypot(x - near.x, y - near.y) <= reachM;
@@ -77,8 +78,13 @@ export function leakSites(plan: Plan, near: { x: number; y: number }, reachM: nu
   for (const f of plan.fixtures) {
     const ring = f.polygon;
     if (ROOMS.has(f.kind)) {
+      // A room whose walls come within reach: its middle, and its risk points (coils, drops) below.
+      if (!roomWithin(ring, near, reachM)) continue;
       const [cx, cy] = centroid(ring);
-      if (within(cx, cy)) out.push({ x: cx, y: cy, fixtureId: f.id, prior: 1 });
+      out.push({ x: cx, y: cy, fixtureId: f.id, prior: 1 });
+      for (const p of plan.riskPoints)
+        if (!within(p.x, p.y) && pointInPolygon([p.x, p.y], ring))
+          out.push({ x: p.x, y: p.y, fixtureId: f.id, prior: RISK_POINT_ODDS });
       continue;
     }
     const backs: { ax: number; ay: number; bx: number; by: number; nx: number; ny: number }[] = [];
