@@ -37,6 +37,16 @@ describe("probePlaces", () => {
     for (let k = 1; k < xs.length; k++) expect(xs[k] - xs[k - 1]).toBeCloseTo(0.6, 5);
   });
 
+  it("offers a walk-in whose wall is within reach though its middle is not", () => {
+    // the walk-in's middle (10, 1.5) is 3.5 m from (6.5, 1); its west wall (x = 8) is 1.5 m away
+    const places = probePlaces(plan, { x: 6.5, y: 1 }, 2);
+    expect(places.filter((p) => p.fixtureId === "walk-in").map((p) => [p.kind, p.x, p.y])).toEqual([
+      ["room-low", 10, 1.5],
+      ["room-high", 10, 1.5],
+    ]);
+    expect(probePlaces(plan, { x: 5, y: 1 }, 2).some((p) => p.fixtureId === "walk-in")).toBe(false);
+  });
+
   it("offers the middle of a walk-in low and high, and line-set drops", () => {
     const all = probePlaces(plan, { x: 8, y: 1 }, 5);
     expect(all.filter((p) => p.fixtureId === "walk-in").map((p) => p.kind)).toEqual(["room-low", "room-high"]);
