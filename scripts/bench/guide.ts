@@ -54,7 +54,13 @@ function summarise(rows: LoopResult[]) {
 
 const started = Date.now();
 const all: LoopResult[] = merge
-  ? merge.split(",").flatMap((f) => JSON.parse(readFileSync(f, "utf8")) as LoopResult[])
+  ? merge.split(",").flatMap((f) =>
+      // JSON writes Infinity (nothing marked) as null
+      (JSON.parse(readFileSync(f, "utf8")) as LoopResult[]).map((r) => ({
+        ...r,
+        finalErrorM: r.finalErrorM ?? Number.POSITIVE_INFINITY,
+      })),
+    )
   : [];
 for (const family of merge ? [] : families) {
   for (let n = first; n < first + perFamily; n++) {
