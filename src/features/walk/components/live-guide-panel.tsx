@@ -5,6 +5,7 @@ import type { SupplyCheck } from "../model/supply-check";
 import type { WordsContext } from "#core/domain/locator-words/words-context";
 import {
   LIVE_PROVISIONAL_WORDS,
+  liveLeadWords,
   liveSuspectWords,
   probePlaceWords,
   probeReasonWords,
@@ -56,7 +57,11 @@ export function LiveGuidePanel({
       <div className="flex items-center justify-between gap-2">
         <p className="min-w-0 flex-1 leading-tight">
           <span className="block truncate font-bold" data-testid="live-first">
-            {first ? liveSuspectWords(first, words) : "Live estimate: no spot fits the readings yet"}
+            {first
+              ? liveSuspectWords(first, words)
+              : e.kind === "no-spot" && e.lead
+                ? liveLeadWords(e.lead, words)
+                : "Live estimate: no spot fits the readings yet"}
           </span>
           {folded ? (
             <span className="block truncate text-sm" data-testid="live-folded">

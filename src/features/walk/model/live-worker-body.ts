@@ -45,7 +45,8 @@ export function liveWorkerBody(host: LiveWorkerHost) {
       return;
     }
     host.post({ id: req.id, kind: "estimate", estimate: fit.estimate, ms: host.now() - started });
-    if (fit.estimate.kind !== "suspects") {
+    // With no suspect yet the probes trace the alarm's gas (evidence-search.ts); with no alarm there are none.
+    if (fit.estimate.kind === "no-alarm") {
       host.post({ id: req.id, kind: "probes", probes: [], ms: 0 });
       return;
     }
