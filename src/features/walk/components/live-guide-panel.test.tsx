@@ -1,3 +1,4 @@
+import { MemoryRouter } from "react-router";
 import { describe, expect, it, vi } from "vitest";
 import { fireEvent, render, screen } from "@testing-library/react";
 import { wordsContext } from "#core/domain/locator-words/present-analysis";
@@ -83,6 +84,24 @@ describe("LiveGuidePanel", () => {
       />,
     );
     expect(quiet.container.textContent).toBe("");
+  });
+
+  it("once the sweep is submitted, points to its field map as the reference instead of the probe points", () => {
+    render(
+      <MemoryRouter>
+        <LiveGuidePanel
+          state={state}
+          words={words}
+          from={null}
+          onProbe={() => {}}
+          {...noCheck}
+          folded
+          fieldMapHref="/stores/st/sweeps/sw/map"
+        />
+      </MemoryRouter>,
+    );
+    expect(screen.getByTestId("live-folded").textContent).toBe("Submitted: see the field map");
+    expect(screen.getByRole("link", { name: "field map" }).getAttribute("href")).toBe("/stores/st/sweeps/sw/map");
   });
 
   it("asks for the supply-air check of a settled suspect and hands the suspect over when asked to read it", () => {

@@ -1,3 +1,4 @@
+import { Link } from "react-router";
 import type { LiveProbe, LiveSuspect } from "#core/analysis/guide/live-guide";
 import { formatShort } from "#core/domain/numbers/number-format";
 import { SETTLE_ESTIMATES } from "../model/live-state";
@@ -28,6 +29,7 @@ export function LiveGuidePanel({
   onSupplyCheck,
   folded,
   onFold,
+  fieldMapHref = null,
 }: {
   state: LiveState;
   words: WordsContext;
@@ -40,6 +42,8 @@ export function LiveGuidePanel({
   /** Folded to one line (the screen keeps this, so it stays as set while the keypad comes and goes). */
   folded: boolean;
   onFold(folded: boolean): void;
+  /** Once the sweep is submitted: its field map, where the full analysis (the reference) is. */
+  fieldMapHref?: string | null;
 }) {
   const e = state.estimate;
   if (!e || e.kind === "no-alarm") return null;
@@ -55,10 +59,22 @@ export function LiveGuidePanel({
     >
       <div className="flex items-center justify-between gap-2">
         <p className="min-w-0 flex-1 leading-tight">
-          <span className="block truncate font-bold" data-testid="live-first">
+          <span
+            className="block truncate font-bold"
+            data-testid="live-first"
+            data-at={first ? `${first.x} ${first.y} ${first.radius}` : undefined}
+            data-fixture={first?.fixtureId ?? undefined}
+          >
             {first ? liveSuspectWords(first, words) : "Live estimate: no spot fits the readings yet"}
           </span>
-          {folded ? (
+          {folded && fieldMapHref ? (
+            <span className="block truncate text-sm" data-testid="live-folded">
+              Submitted: see the{" "}
+              <Link to={fieldMapHref} className="font-bold underline">
+                field map
+              </Link>
+            </span>
+          ) : folded ? (
             <span className="block truncate text-sm" data-testid="live-folded">
               {[
                 state.probes.length ? `${state.probes.length} probe point${state.probes.length > 1 ? "s" : ""}` : null,
@@ -133,7 +149,17 @@ export function LiveGuidePanel({
               ))}
             </ol>
           ) : null}
-          <p className="text-sm text-muted">{LIVE_PROVISIONAL_WORDS}</p>
+          {fieldMapHref ? (
+            <p className="text-sm">
+              Submitted: the full analysis on the{" "}
+              <Link to={fieldMapHref} className="font-bold underline">
+                field map
+              </Link>{" "}
+              is the reference.
+            </p>
+          ) : (
+            <p className="text-sm text-muted">{LIVE_PROVISIONAL_WORDS}</p>
+          )}
         </>
       )}
     </section>
