@@ -54,6 +54,22 @@ describe("LiveGuidePanel", () => {
     expect(screen.getByText(/the full analysis after submit is the reference/)).toBeTruthy();
   });
 
+  it("tells two probe points at the same place apart by the distance between them", () => {
+    const twin: LiveProbe = { ...probes[0], x: 5.2, reason: { kind: "narrows", rank: 1, fixtureId: "c3" } };
+    render(
+      <LiveGuidePanel
+        state={{ ...state, probes: [probes[0], twin] }}
+        words={words}
+        from={null}
+        onProbe={() => {}}
+        {...noCheck}
+      />,
+    );
+    const items = screen.getAllByRole("listitem").map((li) => li.textContent);
+    expect(items[0]).toMatch(/^1Probe 1: Dairy 3, at the front grille(Tells|$)/);
+    expect(items[1]).toContain("Probe 2: Dairy 3, at the front grille, 1.2 m from probe 1");
+  });
+
   it("hands the tapped probe point to the screen, which opens the keypad there", () => {
     const onProbe = vi.fn();
     render(<LiveGuidePanel state={state} words={words} from={null} onProbe={onProbe} {...noCheck} />);

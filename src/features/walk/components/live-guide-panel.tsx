@@ -138,6 +138,7 @@ export function LiveGuidePanel({
                     <span className="min-w-0 leading-tight">
                       <span className="block font-bold">
                         Probe {i + 1}: {probePlaceWords(p, words)}
+                        {sameAs(state.probes, i, words)}
                         {from
                           ? ` · ${lengthWords(Math.hypot(p.x - from.x, p.y - from.y), words.length, words.numbers)} away`
                           : ""}
@@ -167,3 +168,15 @@ export function LiveGuidePanel({
 }
 
 const capitalised = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
+
+/**
+ * Two probe points at the same place in words ("Dairy 4, at the front grille") read alike in the list:
+ * the later one says how far it is from the first of them (the plan numbers both).
+ */
+function sameAs(probes: readonly LiveProbe[], i: number, words: WordsContext): string {
+  const place = probePlaceWords(probes[i], words);
+  const k = probes.findIndex((q) => probePlaceWords(q, words) === place);
+  if (k < 0 || k >= i) return "";
+  const d = Math.hypot(probes[i].x - probes[k].x, probes[i].y - probes[k].y);
+  return `, ${lengthWords(d, words.length, words.numbers)} from probe ${k + 1}`;
+}
