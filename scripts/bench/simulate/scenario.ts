@@ -250,7 +250,8 @@ export function buildWorld(family: Family, key: number): World {
 export function buildScenario(family: Family, key: number): Scenario {
   const world = buildWorld(family, key);
   for (const leg of world.layout.legs) world.technician.sweep(world.map, leg);
-  const passes = family === "pinpoint-pass" ? [stillAirPass(world)] : [];
+  const passes =
+    family === "pinpoint-pass" ? [stillAirPass({ ...world, delayS: world.instrument.transportDelayS })] : [];
   return {
     input: {
       plan: world.plan,

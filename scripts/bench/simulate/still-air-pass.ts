@@ -1,5 +1,5 @@
 // The pinpoint-pass family's second pass. After sweeping every leg with the fans running, the
-// technician takes the case nearest the highest reading, stops its fans at the controller and waits
+// technician walks back one delay from the highest reading, takes the case nearest that tap, stops its fans at the controller and waits
 // 3–6 min for the air to settle, then re-checks that case's front at the re-check's spacing and pace
 // in still air (the gas field solved again without those fans). The pass's readings carry its id. The
 // choice of case is the trade's rule of thumb (common practice, no published source), never the locator's.
@@ -15,6 +15,8 @@ interface PassWorld {
   map: WalkMap;
   technician: Technician;
   random: Random;
+  /** The detector's stated transport delay, s. */
+  delayS: number;
   stopFans(fixtureId: string): void;
 }
 
@@ -23,7 +25,11 @@ export const PASS_ID = "p2";
 export function stillAirPass(world: PassWorld): { id: string; fans: "stopped"; fixture: string } {
   const tech = world.technician;
   const readings = tech.readings;
-  const peak = readings.reduce((a, r) => (r.ppm > a.ppm ? r : a), readings[0]);
+  const top = readings.reduce((a, r) => (r.ppm > a.ppm ? r : a), readings[0]);
+  // the trade's rule: the gas of the peak was drawn in about one (stated) delay earlier, so walk back
+  // to where the probe was then (common practice, no published source)
+  const back = top.t - world.delayS;
+  const peak = readings.reduce((a, r) => (r.t <= top.t && Math.abs(r.t - back) < Math.abs(a.t - back) ? r : a), top);
   const cases = world.layout.fixtures.filter(
     (f) => f.kind === "open-case" || f.kind === "door-case" || f.kind === "island-case",
   );

@@ -10,6 +10,8 @@ export const FAMILIES = [
   "pinpoint-pass",
 ] as const;
 export type Family = (typeof FAMILIES)[number];
+/** Made only when `generate.ts --family` names them: the committed and held-out sets hold none yet. */
+export const ON_REQUEST_FAMILIES: readonly Family[] = ["pinpoint-pass"];
 
 // The invented store as the simulation sees it: axis-aligned rectangles for bodies and air volumes,
 // plus the sweep legs a technician would follow. The contract's polygons are made from these.
