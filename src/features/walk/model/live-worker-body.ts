@@ -86,7 +86,7 @@ export function liveWorkerBody(host: LiveWorkerHost) {
 /** The request as the locator's input, built the way the server builds it for a stored sweep. */
 function toInput(req: LiveRequest) {
   const rows = req.readings.map((r) => ({ ...r, takenAt: new Date(r.takenAt) }));
-  const { input } = sweepLocatorInput(req.plan, new Date(req.startedAt), rows, req.instrument);
+  const { input } = sweepLocatorInput(req.plan, new Date(req.startedAt), rows, req.instrument, req.passes ?? []);
   return parseLocatorInput(input);
 }
 
