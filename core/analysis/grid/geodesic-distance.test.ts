@@ -117,6 +117,39 @@ describe("geodesic distance on the plan grid", () => {
     expect(s.dist[cellIndexOf(grid, 5.0, 3.0)]).toBe(Infinity); // the wall itself
   });
 
+  it("the bucket search from many cells (reachFromCells) settles the heap's cells at the heap's distances", () => {
+    const grid = createPlanGrid(10, 10, h, [
+      [
+        [4.9, 0],
+        [5.1, 0],
+        [5.1, 6],
+        [4.9, 6],
+      ],
+    ]);
+    const scale = new Float32Array(grid.width * grid.height).fill(1);
+    for (let k = 0; k < scale.length; k++)
+      if (k % grid.width >= 28 && Math.floor(k / grid.width) >= 28) scale[k] = 0.35;
+    // two drawn "cases" beside the wall, one cell given twice, one seed inside the wall (ignored)
+    const seeds: number[] = [cellIndexOf(grid, 5, 3)];
+    for (let j = 8; j < 12; j++) for (let i = 8; i < 17; i++) seeds.push(j * grid.width + i);
+    for (let j = 30; j < 34; j++) for (let i = 22; i < 36; i++) seeds.push(j * grid.width + i);
+    seeds.push(seeds[5]);
+    for (const stepScale of [null, scale]) {
+      for (const margin of [0, 0.3, 1.7]) {
+        const heap = new GeodesicSearch(grid, stepScale);
+        const buckets = new GeodesicSearch(grid, stepScale);
+        const settled = heap.fromCells(seeds, margin);
+        expect(buckets.reachFromCells(seeds, margin)).toBe(settled);
+        const reached = new Set(Array.from(buckets.settled.subarray(0, settled)));
+        for (let q = 0; q < settled; q++) {
+          expect(reached.has(heap.settled[q])).toBe(true);
+          expect(buckets.dist[heap.settled[q]]).toBe(heap.dist[heap.settled[q]]);
+        }
+        for (let c = 0; c < grid.width * grid.height; c++) expect(buckets.dist[c]).toBe(heap.dist[c]);
+      }
+    }
+  });
+
   it("routes a walk round a wall instead of through it", () => {
     const grid = createPlanGrid(10, 10, h, [
       [

@@ -45,7 +45,8 @@ export function accumulateReadingFields(
   /**
    * Only the groups holding a reading marked here are searched (the others keep no entries, as if no
    * cell were within reach): a partial field, exact for the cells every unsearched reading is out of
-   * reach of. Null searches every group.
+   * reach of. Null searches every group. A partial field draws no map: its Ω sums stay 0 (the map
+   * comes from a full field; a retry screen only fits sources).
    */
   searched: Uint8Array | null = null,
 ): ReadingFields {
@@ -98,7 +99,7 @@ export function accumulateReadingFields(
   let used = 0;
 
   const search = new GeodesicSearch(grid, stepScale);
-  const mapCut = 3 * mapSigmaM;
+  const mapCut = searched ? -1 : 3 * mapSigmaM;
   const inv2s2 = 1 / (2 * mapSigmaM * mapSigmaM);
   for (let g = 0; g < groups; g++) {
     if (groupSearched && !groupSearched[g]) {

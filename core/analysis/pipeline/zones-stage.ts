@@ -52,7 +52,7 @@ export function zonesStage(
       const [cx, cy] = polygonCentroid(zone.polygon);
       zc = [nearestFreeCell(grid, cx, cy)].filter((k) => k >= 0);
     }
-    const settled = search.fromCells(zc, kernel.truncationM);
+    const settled = search.reachFromCells(zc, kernel.truncationM);
     const dist = new Float32Array(cells).fill(Infinity);
     for (let q = 0; q < settled; q++) dist[search.settled[q]] = search.dist[search.settled[q]];
     cellDist.push(dist);
