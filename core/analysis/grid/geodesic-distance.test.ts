@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { GeodesicSearch } from "./geodesic-distance";
+import { borrowSearch, GeodesicSearch, giveBackSearch } from "./geodesic-distance";
 import { routeBetween } from "./grid-path";
 import { cellIndexOf, createPlanGrid } from "./plan-grid";
 
@@ -148,6 +148,29 @@ describe("geodesic distance on the plan grid", () => {
         for (let c = 0; c < grid.width * grid.height; c++) expect(buckets.dist[c]).toBe(heap.dist[c]);
       }
     }
+  });
+
+  it("a search given back and lent again gives a new search's distances, and only on its own step scale", () => {
+    const grid = createPlanGrid(10, 10, h, [
+      [
+        [4.9, 0],
+        [5.1, 0],
+        [5.1, 6],
+        [4.9, 6],
+      ],
+    ]);
+    const scale = new Float32Array(grid.width * grid.height).fill(0.5);
+    const first = borrowSearch(grid);
+    first.reach(2.1, 2.1, 9);
+    giveBackSearch(first);
+    expect(borrowSearch(grid, scale)).not.toBe(first); // another step scale: another search
+    const again = borrowSearch(grid);
+    expect(again).toBe(first);
+    again.reach(8.3, 1.4, 4);
+    const fresh = new GeodesicSearch(grid);
+    fresh.reach(8.3, 1.4, 4);
+    for (let c = 0; c < grid.width * grid.height; c++) expect(again.dist[c]).toBe(fresh.dist[c]);
+    expect(borrowSearch(grid)).not.toBe(first); // lent out: not lent twice
   });
 
   it("routes a walk round a wall instead of through it", () => {

@@ -226,6 +226,26 @@ export class GeodesicSearch {
   }
 }
 
+// A search holds two arrays the size of the plan (about 1 MB on a 100 m x 60 m plan at 0.25 m), and an
+// analysis searches the same grid again and again (each delay it tries): a search given back is lent
+// to the next caller on the same grid and step scale instead of a new one. Every run resets what the
+// previous one touched, so a lent search gives the same distances as a new one.
+const spareSearches = new WeakMap<PlanGrid, GeodesicSearch[]>();
+
+/** A search on this grid and step scale; give it back with `giveBackSearch` when done with it. */
+export function borrowSearch(grid: PlanGrid, stepScale: Float32Array | null = null): GeodesicSearch {
+  const spare = spareSearches.get(grid);
+  const k = spare ? spare.findIndex((s) => s.stepScale === stepScale) : -1;
+  return k >= 0 ? spare!.splice(k, 1)[0] : new GeodesicSearch(grid, stepScale);
+}
+
+/** Gives a borrowed search back; the caller must not use it afterwards. */
+export function giveBackSearch(search: GeodesicSearch): void {
+  const spare = spareSearches.get(search.grid) ?? [];
+  if (spare.length < 4) spare.push(search);
+  spareSearches.set(search.grid, spare);
+}
+
 // The allowed moves depend only on the grid, which is immutable: worked out once per grid and shared by
 // every search on it (an analysis makes several searches per pipeline run, and may run it again).
 const movesByGrid = new WeakMap<PlanGrid, Uint8Array>();

@@ -1,4 +1,4 @@
-import { GeodesicSearch } from "../grid/geodesic-distance";
+import { borrowSearch, giveBackSearch } from "../grid/geodesic-distance";
 import { nearestFreeCell, type PlanGrid } from "../grid/plan-grid";
 import type { SourceKernel } from "./source-kernel";
 
@@ -98,7 +98,7 @@ export function accumulateReadingFields(
   let distArr = new Float32Array(cap);
   let used = 0;
 
-  const search = new GeodesicSearch(grid, stepScale);
+  const search = borrowSearch(grid, stepScale);
   const mapCut = searched ? -1 : 3 * mapSigmaM;
   const inv2s2 = 1 / (2 * mapSigmaM * mapSigmaM);
   for (let g = 0; g < groups; g++) {
@@ -149,6 +149,7 @@ export function accumulateReadingFields(
     }
   }
   start[groups] = used;
+  giveBackSearch(search);
   return {
     groupCell: Int32Array.from(groupCellList),
     groupOfReading,
