@@ -173,6 +173,49 @@ describe("geodesic distance on the plan grid", () => {
     expect(borrowSearch(grid)).not.toBe(first); // lent out: not lent twice
   });
 
+  it("a search with a focus circle gives the circle's cells the full search's distances, and settles fewer cells", () => {
+    const grid = createPlanGrid(20, 12, h, [
+      [
+        [9.9, 0],
+        [10.1, 0],
+        [10.1, 8],
+        [9.9, 8],
+      ],
+    ]);
+    // a fan-stirred room (steps cost 0.35 of their length) between the readings and the circle
+    const scale = new Float32Array(grid.width * grid.height).fill(1);
+    for (let k = 0; k < scale.length; k++) {
+      const i = k % grid.width;
+      if (i >= 44 && i < 56 && Math.floor(k / grid.width) >= 32) scale[k] = 0.35;
+    }
+    const focus = { x: 13, y: 6, radiusM: 3 };
+    const inCircle = (c: number) =>
+      Math.hypot(((c % grid.width) + 0.5) * h - focus.x, (Math.floor(c / grid.width) + 0.5) * h - focus.y) <= 3;
+    for (const stepScale of [null, scale]) {
+      const full = new GeodesicSearch(grid, stepScale);
+      const part = new GeodesicSearch(grid, stepScale);
+      // beside the circle, behind the wall (the path goes round its end), far off (reaches nothing)
+      for (const [x, y] of [
+        [12.2, 3.1],
+        [8.4, 7.0],
+        [9.1, 10.6],
+        [2.2, 2.2],
+      ]) {
+        const all = full.reach(x, y, 6);
+        const some = part.reach(x, y, 6, focus);
+        expect(some).toBeLessThanOrEqual(all);
+        let checked = 0;
+        for (let c = 0; c < grid.width * grid.height; c++) {
+          if (!inCircle(c)) continue;
+          expect(part.dist[c]).toBe(full.dist[c]);
+          if (full.dist[c] < Infinity) checked++;
+        }
+        if (x === 8.4 || x === 12.2) expect(checked).toBeGreaterThan(20);
+        if (x === 2.2) expect(some).toBeLessThan(all / 4);
+      }
+    }
+  });
+
   it("routes a walk round a wall instead of through it", () => {
     const grid = createPlanGrid(10, 10, h, [
       [

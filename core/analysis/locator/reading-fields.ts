@@ -1,4 +1,4 @@
-import { borrowSearch, giveBackSearch } from "../grid/geodesic-distance";
+import { borrowSearch, giveBackSearch, type SearchFocus } from "../grid/geodesic-distance";
 import { nearestFreeCell, type PlanGrid } from "../grid/plan-grid";
 import type { SourceKernel } from "./source-kernel";
 
@@ -49,6 +49,11 @@ export function accumulateReadingFields(
    * comes from a full field; a retry screen only fits sources).
    */
   searched: Uint8Array | null = null,
+  /**
+   * Only the cells of this circle are wanted (a retry screen's region): the searches do not step on
+   * from cells that cannot reach it, so cells outside it may hold fewer entries than a full field's.
+   */
+  focus: SearchFocus | null = null,
 ): ReadingFields {
   const n = values.length;
   if (xs.length !== n || ys.length !== n) throw new Error("reading fields: need one position per reading");
@@ -107,7 +112,7 @@ export function accumulateReadingFields(
       continue;
     }
     const i = groupFirst[g];
-    const settled = search.reach(xs[i], ys[i], kernel.truncationM);
+    const settled = search.reach(xs[i], ys[i], kernel.truncationM, focus);
     const { dist } = search;
     const list = search.settled;
     if (used + settled > cap) {
