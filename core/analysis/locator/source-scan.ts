@@ -48,7 +48,7 @@ export function backgroundChi2(totals: ScanTotals): number {
 }
 
 /** Q and b of the last fitOneCell that found a source (one object, so the per-cell loops allocate nothing). */
-export const cellFit = { q: 0, b: 0 };
+const cellFit = { q: 0, b: 0 };
 
 /**
  * The fit at one cell from its sums: Δχ² over the background-only model (chi0), 0 when no source with
