@@ -10,7 +10,11 @@ const root = path.resolve(import.meta.dirname, "..");
 const out = path.join(root, "dist/scripts/locate.js");
 
 function newestSource() {
-  let newest = statSync(path.join(root, "scripts/locate.ts")).mtimeMs;
+  // the build script too: a change to how the command is built must rebuild it
+  let newest = Math.max(
+    statSync(path.join(root, "scripts/locate.ts")).mtimeMs,
+    statSync(path.join(root, "scripts/build.mjs")).mtimeMs,
+  );
   for (const f of readdirSync(path.join(root, "core"), { recursive: true })) {
     if (!String(f).endsWith(".ts")) continue;
     newest = Math.max(newest, statSync(path.join(root, "core", String(f))).mtimeMs);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { GeodesicSearch } from "./geodesic-distance";
+import { borrowSearch, GeodesicSearch, giveBackSearch } from "./geodesic-distance";
 import { routeBetween } from "./grid-path";
 import { cellIndexOf, createPlanGrid } from "./plan-grid";
 
@@ -115,6 +115,105 @@ describe("geodesic distance on the plan grid", () => {
     s.reach(2.125, 2.125, 30);
     expect(s.dist[cellIndexOf(grid, 7.875, 2.125)]).toBeCloseTo(octile(10, 16) + 3 * h + octile(10, 16), 9);
     expect(s.dist[cellIndexOf(grid, 5.0, 3.0)]).toBe(Infinity); // the wall itself
+  });
+
+  it("the bucket search from many cells (reachFromCells) settles the heap's cells at the heap's distances", () => {
+    const grid = createPlanGrid(10, 10, h, [
+      [
+        [4.9, 0],
+        [5.1, 0],
+        [5.1, 6],
+        [4.9, 6],
+      ],
+    ]);
+    const scale = new Float32Array(grid.width * grid.height).fill(1);
+    for (let k = 0; k < scale.length; k++)
+      if (k % grid.width >= 28 && Math.floor(k / grid.width) >= 28) scale[k] = 0.35;
+    // two drawn "cases" beside the wall, one cell given twice, one seed inside the wall (ignored)
+    const seeds: number[] = [cellIndexOf(grid, 5, 3)];
+    for (let j = 8; j < 12; j++) for (let i = 8; i < 17; i++) seeds.push(j * grid.width + i);
+    for (let j = 30; j < 34; j++) for (let i = 22; i < 36; i++) seeds.push(j * grid.width + i);
+    seeds.push(seeds[5]);
+    for (const stepScale of [null, scale]) {
+      for (const margin of [0, 0.3, 1.7]) {
+        const heap = new GeodesicSearch(grid, stepScale);
+        const buckets = new GeodesicSearch(grid, stepScale);
+        const settled = heap.fromCells(seeds, margin);
+        expect(buckets.reachFromCells(seeds, margin)).toBe(settled);
+        const reached = new Set(Array.from(buckets.settled.subarray(0, settled)));
+        for (let q = 0; q < settled; q++) {
+          expect(reached.has(heap.settled[q])).toBe(true);
+          expect(buckets.dist[heap.settled[q]]).toBe(heap.dist[heap.settled[q]]);
+        }
+        for (let c = 0; c < grid.width * grid.height; c++) expect(buckets.dist[c]).toBe(heap.dist[c]);
+      }
+    }
+  });
+
+  it("a search given back and lent again gives a new search's distances, and only on its own step scale", () => {
+    const grid = createPlanGrid(10, 10, h, [
+      [
+        [4.9, 0],
+        [5.1, 0],
+        [5.1, 6],
+        [4.9, 6],
+      ],
+    ]);
+    const scale = new Float32Array(grid.width * grid.height).fill(0.5);
+    const first = borrowSearch(grid);
+    first.reach(2.1, 2.1, 9);
+    giveBackSearch(first);
+    expect(borrowSearch(grid, scale)).not.toBe(first); // another step scale: another search
+    const again = borrowSearch(grid);
+    expect(again).toBe(first);
+    again.reach(8.3, 1.4, 4);
+    const fresh = new GeodesicSearch(grid);
+    fresh.reach(8.3, 1.4, 4);
+    for (let c = 0; c < grid.width * grid.height; c++) expect(again.dist[c]).toBe(fresh.dist[c]);
+    expect(borrowSearch(grid)).not.toBe(first); // lent out: not lent twice
+  });
+
+  it("a search with a focus circle gives the circle's cells the full search's distances, and settles fewer cells", () => {
+    const grid = createPlanGrid(20, 12, h, [
+      [
+        [9.9, 0],
+        [10.1, 0],
+        [10.1, 8],
+        [9.9, 8],
+      ],
+    ]);
+    // a fan-stirred room (steps cost 0.35 of their length) between the readings and the circle
+    const scale = new Float32Array(grid.width * grid.height).fill(1);
+    for (let k = 0; k < scale.length; k++) {
+      const i = k % grid.width;
+      if (i >= 44 && i < 56 && Math.floor(k / grid.width) >= 32) scale[k] = 0.35;
+    }
+    const focus = { x: 13, y: 6, radiusM: 3 };
+    const inCircle = (c: number) =>
+      Math.hypot(((c % grid.width) + 0.5) * h - focus.x, (Math.floor(c / grid.width) + 0.5) * h - focus.y) <= 3;
+    for (const stepScale of [null, scale]) {
+      const full = new GeodesicSearch(grid, stepScale);
+      const part = new GeodesicSearch(grid, stepScale);
+      // beside the circle, behind the wall (the path goes round its end), far off (reaches nothing)
+      for (const [x, y] of [
+        [12.2, 3.1],
+        [8.4, 7.0],
+        [9.1, 10.6],
+        [2.2, 2.2],
+      ]) {
+        const all = full.reach(x, y, 6);
+        const some = part.reach(x, y, 6, focus);
+        expect(some).toBeLessThanOrEqual(all);
+        let checked = 0;
+        for (let c = 0; c < grid.width * grid.height; c++) {
+          if (!inCircle(c)) continue;
+          expect(part.dist[c]).toBe(full.dist[c]);
+          if (full.dist[c] < Infinity) checked++;
+        }
+        if (x === 8.4 || x === 12.2) expect(checked).toBeGreaterThan(20);
+        if (x === 2.2) expect(some).toBeLessThan(all / 4);
+      }
+    }
   });
 
   it("routes a walk round a wall instead of through it", () => {

@@ -2,6 +2,17 @@ import { MinHeap } from "./binary-heap";
 import { cellCentre, nearestFreeCell, type PlanGrid } from "./plan-grid";
 
 /**
+ * A circle of cell centres whose distances alone are wanted: a search with a focus does not step on from
+ * a cell that cannot reach the circle within its maximum distance. The circle's cells get exactly the
+ * distances of a search without focus; cells outside it may be left unreached.
+ */
+export interface SearchFocus {
+  readonly x: number;
+  readonly y: number;
+  readonly radiusM: number;
+}
+
+/**
  * Obstacle-aware (geodesic) distance on the plan grid: Dijkstra over 8-connected free cells,
  * truncated at a maximum distance so one search per reading stays local (docs/reference/locator-methods.md §2).
  * A diagonal step is allowed only when both orthogonal neighbours are free, so paths never cut
@@ -47,8 +58,39 @@ export class GeodesicSearch {
     this.offsets = Int32Array.from([1, -1, w, -w, w + 1, -w + 1, w - 1, -w - 1]);
     this.steps = Float64Array.from([h, h, h, h, h * Math.SQRT2, h * Math.SQRT2, h * Math.SQRT2, h * Math.SQRT2]);
     let minScale = 1;
-    if (stepScale) for (let k = 0; k < stepScale.length; k++) if (stepScale[k] < minScale) minScale = stepScale[k];
+    const box = [Infinity, Infinity, -Infinity, -Infinity];
+    if (stepScale)
+      for (let k = 0; k < stepScale.length; k++) {
+        if (stepScale[k] < minScale) minScale = stepScale[k];
+        if (stepScale[k] < 1) {
+          const [cx, cy] = cellCentre(grid, k);
+          box[0] = Math.min(box[0], cx);
+          box[1] = Math.min(box[1], cy);
+          box[2] = Math.max(box[2], cx);
+          box[3] = Math.max(box[3], cy);
+        }
+      }
     this.bucketWidth = (h * minScale) / 2;
+    this.minScale = minScale;
+    this.shortBox = box;
+  }
+
+  /** The smallest step scale (at most 1): no path is shorter than this times the straight line. */
+  private readonly minScale: number;
+  /** Bounding box (x0, y0, x1, y1) of the centres of cells whose steps are shortened (scale < 1). */
+  private readonly shortBox: number[];
+
+  /**
+   * What no path from (x, y) within maxDistance is shorter than, times the straight line: 1 when the
+   * shortened cells are too far to be reached (every step before the first of them costs its length),
+   * else the smallest scale.
+   */
+  private floorFrom(x: number, y: number, maxDistance: number): number {
+    const [x0, y0, x1, y1] = this.shortBox;
+    if (!(x0 <= x1)) return 1;
+    const dx = Math.max(x0 - x, 0, x - x1);
+    const dy = Math.max(y0 - y, 0, y - y1);
+    return Math.hypot(dx, dy) > maxDistance + 2 * this.grid.cellSize ? 1 : this.minScale;
   }
 
   /**
@@ -68,11 +110,12 @@ export class GeodesicSearch {
    * are half the cheapest step wide, so a cell is final when its bucket comes up (Dial's method with wide
    * buckets) and every distance is the same sum of the same steps as the heap's.
    */
-  reach(x: number, y: number, maxDistance: number): number {
+  reach(x: number, y: number, maxDistance: number, focus: SearchFocus | null = null): number {
     if (!(this.bucketWidth > 0) || !Number.isFinite(maxDistance / this.bucketWidth))
       return this.fromPoint(x, y, maxDistance);
     const seeds = this.seedPoint(x, y);
-    return seeds === 0 ? 0 : this.runBuckets(maxDistance);
+    if (seeds === 0) return 0;
+    return this.runBuckets(maxDistance, true, focus, focus ? this.floorFrom(x, y, maxDistance) : 1);
   }
 
   /** Resets, then seeds the point's own cell and its free neighbours at their Euclidean distance; the seed count. */
@@ -105,6 +148,25 @@ export class GeodesicSearch {
     this.reset();
     for (const k of cells) if (!this.grid.blocked[k]) this.seed(k, 0, -1);
     return this.run(maxDistance, -1);
+  }
+
+  /**
+   * The same distances as fromCells, found with the bucket queue (see reach): the settled cells in no
+   * particular order and no `parent`. With thousands of seeds (every cell of a plan's fixtures) the heap
+   * spends most of its time ordering cells that all start at 0.
+   */
+  reachFromCells(cells: readonly number[], maxDistance: number): number {
+    if (!(this.bucketWidth > 0) || !Number.isFinite(maxDistance / this.bucketWidth) || !(maxDistance >= 0))
+      return this.fromCells(cells, maxDistance);
+    this.reset();
+    this.buckets.reset(Math.floor(maxDistance / this.bucketWidth) + 1);
+    for (const k of cells) {
+      if (this.grid.blocked[k] || this.dist[k] === 0) continue;
+      this.markDirty(k);
+      this.dist[k] = 0;
+      this.buckets.push(0, 0, k);
+    }
+    return this.runBuckets(maxDistance, false);
   }
 
   private seed(k: number, d: number, from: number): void {
@@ -148,12 +210,15 @@ export class GeodesicSearch {
     return this.settledCount;
   }
 
-  private runBuckets(maxDistance: number): number {
+  /** `fromHeap`: the seeds are in the heap (seedPoint), else already in the buckets. */
+  private runBuckets(maxDistance: number, fromHeap = true, focus: SearchFocus | null = null, floor = 1): number {
     const { heap, dist, offsets, steps, moves, buckets } = this;
     const scale = this.stepScale;
     const width = this.bucketWidth;
+    const gw = this.grid.width;
+    const h = this.grid.cellSize;
     const last = Math.floor(maxDistance / width);
-    buckets.reset(last + 1);
+    if (fromHeap) buckets.reset(last + 1);
     // the seeds, from the heap seedPoint filled
     while (heap.size > 0) {
       const key = heap.peekKey();
@@ -167,6 +232,13 @@ export class GeodesicSearch {
         if (key !== dist[u]) continue; // stale entry
         if (this.settledCount === this.settled.length) this.settled = growInt32(this.settled);
         this.settled[this.settledCount++] = u;
+        if (focus) {
+          // no step from here can still reach the focus circle within maxDistance: no path is shorter
+          // than `floor` times the straight line (a small margin keeps rounding on the safe side)
+          const ui = u % gw;
+          const off = Math.hypot((ui + 0.5) * h - focus.x, ((u - ui) / gw + 0.5) * h - focus.y) - focus.radiusM;
+          if (key + floor * off > maxDistance + 1e-9) continue;
+        }
         const mask = moves[u];
         for (let m = 0; m < 8; m++) {
           if (!(mask & (1 << m))) continue;
@@ -204,6 +276,26 @@ export class GeodesicSearch {
     this.settledCount = 0;
     this.heap.clear();
   }
+}
+
+// A search holds two arrays the size of the plan (about 1 MB on a 100 m x 60 m plan at 0.25 m), and an
+// analysis searches the same grid again and again (each delay it tries): a search given back is lent
+// to the next caller on the same grid and step scale instead of a new one. Every run resets what the
+// previous one touched, so a lent search gives the same distances as a new one.
+const spareSearches = new WeakMap<PlanGrid, GeodesicSearch[]>();
+
+/** A search on this grid and step scale; give it back with `giveBackSearch` when done with it. */
+export function borrowSearch(grid: PlanGrid, stepScale: Float32Array | null = null): GeodesicSearch {
+  const spare = spareSearches.get(grid);
+  const k = spare ? spare.findIndex((s) => s.stepScale === stepScale) : -1;
+  return k >= 0 ? spare!.splice(k, 1)[0] : new GeodesicSearch(grid, stepScale);
+}
+
+/** Gives a borrowed search back; the caller must not use it afterwards. */
+export function giveBackSearch(search: GeodesicSearch): void {
+  const spare = spareSearches.get(search.grid) ?? [];
+  if (spare.length < 4) spare.push(search);
+  spareSearches.set(search.grid, spare);
 }
 
 // The allowed moves depend only on the grid, which is immutable: worked out once per grid and shared by

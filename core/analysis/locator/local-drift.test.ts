@@ -126,6 +126,86 @@ describe("choosing a drift per candidate source", () => {
     for (let e = 0; e < before.length; e += 97) expect(choice.fields.kernel[e]).toBeCloseTo(before[e], 5);
   });
 
+  it("chooses on a patchy set of allowed cells as a plain per-cell search over every direction does", () => {
+    // The choice keeps sums for the allowed cells only; a plain search (every allowed cell, strength and
+    // direction, its own kernel from the closed form, the same scan) must pick the same drift everywhere.
+    const fields = build();
+    const patchy = new Uint8Array(allowed.length);
+    for (let c = 0; c < patchy.length; c++) patchy[c] = (c * 7919) % 5 < 3 ? 1 : 0;
+    const settings = { screeningLengthM: L, nearCutoffM: 0.3, truncationM: 6, strengths: [0.4, 0.8], penalty: 3 };
+    const choice = chooseLocalDrift(fields, grid.width, grid.cellSize, w, y, patchy, settings);
+    const sums = { sumW: 0, sumWR: 0, sumWRR: 0 };
+    for (let i = 0; i < y.length; i++) {
+      sums.sumW += w[i];
+      sums.sumWR += w[i] * y[i];
+      sums.sumWRR += w[i] * y[i] ** 2;
+    }
+    const plain = scanSources(
+      fields.sumWG,
+      fields.sumWGG,
+      sumWeightedKernelTimes(fields, w, y, new Float64Array(patchy.length)),
+      sums,
+      patchy,
+    );
+    const max = Math.max(...plain.delta);
+    const bar = 3 * Math.max(1, (plain.chi2Background - max) / (y.length - 2));
+    // per group the weights and weighted readings, per cell the entries that reach it
+    const gw = new Float64Array(fields.groupCell.length);
+    const gwr = new Float64Array(fields.groupCell.length);
+    for (let i = 0; i < y.length; i++) {
+      gw[fields.groupOfReading[i]] += w[i];
+      gwr[fields.groupOfReading[i]] += w[i] * y[i];
+    }
+    const reaching = new Map<number, [number, number][]>();
+    for (let gi = 0; gi < fields.groupCell.length; gi++)
+      for (let e = fields.start[gi]; e < fields.start[gi + 1]; e++) {
+        const list = reaching.get(fields.cell[e]) ?? [];
+        list.push([gi, e]);
+        reaching.set(fields.cell[e], list);
+      }
+    const kernels = settings.strengths.map((a) =>
+      DRIFT_DIRECTIONS.map(([ux, uy]) => driftedKernel(L, 0.3, 6, [a * ux, a * uy])),
+    );
+    let drifted = 0;
+    for (let c = 0; c < patchy.length; c++) {
+      if (!patchy[c]) {
+        expect(choice.strength[c]).toBe(0);
+        continue;
+      }
+      const cx = ((c % grid.width) + 0.5) * 0.25;
+      const cy = (Math.floor(c / grid.width) + 0.5) * 0.25;
+      let best = plain.delta[c] + bar;
+      let pick = [0, 0];
+      kernels.forEach((row, si) =>
+        row.forEach((g, k) => {
+          let swg = 0,
+            swgg = 0,
+            swgr = 0;
+          for (const [gi, e] of reaching.get(c) ?? []) {
+            const v = g(fields.dist[e], fields.groupX[gi] - cx, fields.groupY[gi] - cy);
+            swg += gw[gi] * v;
+            swgg += gw[gi] * v * v;
+            swgr += gwr[gi] * v;
+          }
+          const one = scanSources(
+            Float64Array.of(swg),
+            Float64Array.of(swgg),
+            Float64Array.of(swgr),
+            sums,
+            Uint8Array.of(1),
+          );
+          if (one.delta[0] > best) {
+            best = one.delta[0];
+            pick = [si + 1, k];
+          }
+        }),
+      );
+      expect([c, choice.strength[c], pick[0] ? choice.direction[c] : 0]).toEqual([c, pick[0], pick[1]]);
+      if (pick[0]) drifted++;
+    }
+    expect(drifted).toBeGreaterThan(20); // the plume's cells do take a drift
+  });
+
   it("names the field and the reason for bad settings", () => {
     expect(() =>
       chooseLocalDrift(build(), grid.width, grid.cellSize, w, y, allowed, {

@@ -1,5 +1,5 @@
 import type { ReadingFields } from "./reading-fields";
-import { scanSources, type ScanTotals } from "./source-scan";
+import { backgroundChi2, fitOneCell, type ScanTotals } from "./source-scan";
 import { besselK0 } from "./bessel-k0";
 import { createSourceKernel, type SourceKernel } from "./source-kernel";
 
@@ -77,6 +77,10 @@ function radialPart(
  * fit, columns) uses it; the fields given are left as they were. They must be built with the same
  * screening lengths (cells left without drift keep the kernel they were built with).
  * Also returns per cell the chosen strength index + 1 and direction (0 = no drift).
+ *
+ * Only the allowed cells can take a drift, so the drifted sums are kept for them alone, in one compact
+ * slot per allowed cell (a retry screen allows a few thousand of a plan's 100,000 cells). Each cell's
+ * sums add the same terms in the same order as a sum over every cell would, so the choice is the same.
  */
 export function chooseLocalDrift(
   fields: ReadingFields,
@@ -106,62 +110,89 @@ export function chooseLocalDrift(
     swrr += w[i] * r[i] * r[i];
   }
   const totals: ScanTotals = { sumW: sw, sumWR: swr, sumWRR: swrr };
-  const entries = cell.length;
-  const dxs = new Float32Array(entries);
-  const dys = new Float32Array(entries);
-  for (let g = 0; g < groups; g++) {
-    for (let e = start[g], end = start[g + 1]; e < end; e++) {
-      const c = cell[e];
-      const ci = c % gridWidth;
-      dxs[e] = groupX[g] - (ci + 0.5) * cellSize;
-      dys[e] = groupY[g] - ((c - ci) / gridWidth + 0.5) * cellSize;
+  const chi0 = backgroundChi2(totals);
+
+  // the allowed cells' slots, and the entries that reach them, group by group as stored
+  const slotOf = new Int32Array(cells).fill(-1);
+  const slotCell: number[] = [];
+  let reaching = 0;
+  for (let e = 0; e < cell.length; e++) {
+    const c = cell[e];
+    if (!allowed[c]) continue;
+    reaching++;
+    if (slotOf[c] < 0) {
+      slotOf[c] = slotCell.length;
+      slotCell.push(c);
     }
   }
+  const slots = slotCell.length;
+  const entry = new Int32Array(reaching);
+  const slot = new Int32Array(reaching);
+  const entryStart = new Int32Array(groups + 1);
+  // the straight displacement reading − cell, stored as the kernel's entries are (single precision)
+  const dxs = new Float32Array(reaching);
+  const dys = new Float32Array(reaching);
+  let m = 0;
+  for (let g = 0; g < groups; g++) {
+    entryStart[g] = m;
+    for (let e = start[g], end = start[g + 1]; e < end; e++) {
+      const c = cell[e];
+      const s = slotOf[c];
+      if (s < 0) continue;
+      const ci = c % gridWidth;
+      entry[m] = e;
+      slot[m] = s;
+      dxs[m] = groupX[g] - (ci + 0.5) * cellSize;
+      dys[m] = groupY[g] - ((c - ci) / gridWidth + 0.5) * cellSize;
+      m++;
+    }
+  }
+  entryStart[groups] = m;
   const far = settings.far ?? null;
   const radial = settings.strengths.map((v) =>
     radialPart(settings.screeningLengthM, settings.nearCutoffM, settings.truncationM, v, far),
   );
 
-  // no drift: the scan every drift must beat
-  const sumWGR = new Float64Array(cells);
+  // no drift: the fit every drift must beat
+  const sumGR = new Float64Array(slots);
   for (let g = 0; g < groups; g++) {
     const ar = gwr[g];
-    for (let e = start[g], end = start[g + 1]; e < end; e++) sumWGR[cell[e]] += ar * fields.kernel[e];
+    for (let k = entryStart[g]; k < entryStart[g + 1]; k++) sumGR[slot[k]] += ar * fields.kernel[entry[k]];
   }
-  const scan0 = scanSources(fields.sumWG, fields.sumWGG, sumWGR, totals, allowed);
-  const best = Float64Array.from(scan0.delta);
+  const best = new Float64Array(slots);
   let max = 0;
-  for (let c = 0; c < cells; c++) max = Math.max(max, best[c]);
-  const bar = settings.penalty * Math.max(1, (scan0.chi2Background - max) / Math.max(1, n - 2));
-  for (let c = 0; c < cells; c++) best[c] += bar;
-  const strength = new Uint8Array(cells);
-  const direction = new Uint8Array(cells);
+  for (let s = 0; s < slots; s++) {
+    const c = slotCell[s];
+    best[s] = fitOneCell(fields.sumWG[c], fields.sumWGG[c], sumGR[s], totals, chi0);
+    max = Math.max(max, best[s]);
+  }
+  const bar = settings.penalty * Math.max(1, (chi0 - max) / Math.max(1, n - 2));
+  for (let s = 0; s < slots; s++) best[s] += bar;
+  const slotStrength = new Uint8Array(slots);
+  const slotDirection = new Uint8Array(slots);
 
-  // eight directions per strength in one pass: exp(a·Δ) from four exponentials per entry
+  // eight directions per strength in one pass: exp(a·Δ) from four exponentials per entry; the sums of
+  // direction k for slot s at [s·8 + k]
   const D = DRIFT_DIRECTIONS.length;
-  const sG = Array.from({ length: D }, () => new Float64Array(cells));
-  const sGG = Array.from({ length: D }, () => new Float64Array(cells));
-  const sGR = Array.from({ length: D }, () => new Float64Array(cells));
+  const sG = new Float64Array(slots * D);
+  const sGG = new Float64Array(slots * D);
+  const sGR = new Float64Array(slots * D);
   const f = new Float64Array(D);
   const h = Math.SQRT1_2;
   radial.forEach(({ table, scale }, si) => {
     const a = settings.strengths[si];
-    for (let k = 0; k < D; k++) {
-      sG[k].fill(0);
-      sGG[k].fill(0);
-      sGR[k].fill(0);
-    }
+    sG.fill(0);
+    sGG.fill(0);
+    sGR.fill(0);
     for (let g = 0; g < groups; g++) {
       const aw = gw[g],
         ar = gwr[g];
-      for (let e = start[g], end = start[g + 1]; e < end; e++) {
-        const c = cell[e];
-        if (!allowed[c]) continue; // only cells that may hold a suspect spot need a drift
-        const t = scale * table.at(dist[e]);
-        const ex = Math.exp(a * dxs[e]),
-          ey = Math.exp(a * dys[e]);
-        const hx = Math.exp(a * h * dxs[e]),
-          hy = Math.exp(a * h * dys[e]);
+      for (let k = entryStart[g]; k < entryStart[g + 1]; k++) {
+        const t = scale * table.at(dist[entry[k]]);
+        const ex = Math.exp(a * dxs[k]),
+          ey = Math.exp(a * dys[k]);
+        const hx = Math.exp(a * h * dxs[k]),
+          hy = Math.exp(a * h * dys[k]);
         f[0] = t * ex;
         f[1] = t * hx * hy;
         f[2] = t * ey;
@@ -170,40 +201,51 @@ export function chooseLocalDrift(
         f[5] = t / (hx * hy);
         f[6] = t / ey;
         f[7] = (t * hx) / hy;
-        for (let k = 0; k < D; k++) {
-          const v = f[k];
-          sG[k][c] += aw * v;
-          sGG[k][c] += aw * v * v;
-          sGR[k][c] += ar * v;
+        const o = slot[k] * D;
+        for (let d = 0; d < D; d++) {
+          const v = f[d];
+          sG[o + d] += aw * v;
+          sGG[o + d] += aw * v * v;
+          sGR[o + d] += ar * v;
         }
       }
     }
-    for (let k = 0; k < D; k++) {
-      const scan = scanSources(sG[k], sGG[k], sGR[k], totals, allowed);
-      for (let c = 0; c < cells; c++) {
-        if (scan.delta[c] > best[c]) {
-          best[c] = scan.delta[c];
-          strength[c] = si + 1;
-          direction[c] = k;
+    // directions in order within a strength, as the choice breaks ties towards the first tried
+    for (let s = 0; s < slots; s++) {
+      const o = s * D;
+      for (let d = 0; d < D; d++) {
+        const delta = fitOneCell(sG[o + d], sGG[o + d], sGR[o + d], totals, chi0);
+        if (delta > best[s]) {
+          best[s] = delta;
+          slotStrength[s] = si + 1;
+          slotDirection[s] = d;
         }
       }
     }
   });
+  const strength = new Uint8Array(cells);
+  const direction = new Uint8Array(cells);
+  for (let s = 0; s < slots; s++) {
+    strength[slotCell[s]] = slotStrength[s];
+    direction[slotCell[s]] = slotDirection[s];
+  }
 
   // the chosen kernel, in new fields
   const kernel = Float32Array.from(fields.kernel);
+  for (let k = 0; k < m; k++) {
+    const si = slotStrength[slot[k]];
+    if (si === 0) continue;
+    const a = settings.strengths[si - 1];
+    const [ux, uy] = DRIFT_DIRECTIONS[slotDirection[slot[k]]];
+    const e = entry[k];
+    kernel[e] = radial[si - 1].scale * radial[si - 1].table.at(dist[e]) * Math.exp(a * (ux * dxs[k] + uy * dys[k]));
+  }
   const sumWG = new Float64Array(cells);
   const sumWGG = new Float64Array(cells);
   for (let g = 0; g < groups; g++) {
     const aw = gw[g];
     for (let e = start[g], end = start[g + 1]; e < end; e++) {
       const c = cell[e];
-      const si = strength[c];
-      if (si > 0) {
-        const a = settings.strengths[si - 1];
-        const [ux, uy] = DRIFT_DIRECTIONS[direction[c]];
-        kernel[e] = radial[si - 1].scale * radial[si - 1].table.at(dist[e]) * Math.exp(a * (ux * dxs[e] + uy * dys[e]));
-      }
       sumWG[c] += aw * kernel[e];
       sumWGG[c] += aw * kernel[e] * kernel[e];
     }

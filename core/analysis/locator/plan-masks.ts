@@ -38,7 +38,7 @@ function drawEquipmentMask(grid: PlanGrid, plan: LocatorInput["plan"], margin: n
     const k = nearestFreeCell(grid, p.x, p.y);
     if (k >= 0) seeds.push(k);
   }
-  const settled = search.fromCells(seeds, margin);
+  const settled = search.reachFromCells(seeds, margin);
   for (let q = 0; q < settled; q++) mask[search.settled[q]] = 1;
   for (const p of plan.riskPoints) {
     const settledRp = search.fromPoint(p.x, p.y, 1);

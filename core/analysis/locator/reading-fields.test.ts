@@ -28,6 +28,9 @@ describe("reading fields", () => {
     expect(part.sumWG[far]).toBe(0);
     expect(part.nearestReading[far]).toBe(Infinity);
     expect(full.sumWG[far]).toBeGreaterThan(0);
+    // a partial field draws no map: the full field's does
+    expect(part.omega.every((v) => v === 0)).toBe(true);
+    expect(full.omega[cellIndexOf(grid, 2.125, 2.125)]).toBeGreaterThan(0);
     // every reading keeps its group; the unsearched ones hold no entries
     expect(part.groupOfReading.length).toBe(29);
     const g = part.groupOfReading[20];

@@ -1,4 +1,4 @@
-import { GeodesicSearch } from "../grid/geodesic-distance";
+import { borrowSearch, giveBackSearch, type SearchFocus } from "../grid/geodesic-distance";
 import { nearestFreeCell, type PlanGrid } from "../grid/plan-grid";
 import type { SourceKernel } from "./source-kernel";
 
@@ -45,9 +45,15 @@ export function accumulateReadingFields(
   /**
    * Only the groups holding a reading marked here are searched (the others keep no entries, as if no
    * cell were within reach): a partial field, exact for the cells every unsearched reading is out of
-   * reach of. Null searches every group.
+   * reach of. Null searches every group. A partial field draws no map: its Ω sums stay 0 (the map
+   * comes from a full field; a retry screen only fits sources).
    */
   searched: Uint8Array | null = null,
+  /**
+   * Only the cells of this circle are wanted (a retry screen's region): the searches do not step on
+   * from cells that cannot reach it, so cells outside it may hold fewer entries than a full field's.
+   */
+  focus: SearchFocus | null = null,
 ): ReadingFields {
   const n = values.length;
   if (xs.length !== n || ys.length !== n) throw new Error("reading fields: need one position per reading");
@@ -97,8 +103,8 @@ export function accumulateReadingFields(
   let distArr = new Float32Array(cap);
   let used = 0;
 
-  const search = new GeodesicSearch(grid, stepScale);
-  const mapCut = 3 * mapSigmaM;
+  const search = borrowSearch(grid, stepScale);
+  const mapCut = searched ? -1 : 3 * mapSigmaM;
   const inv2s2 = 1 / (2 * mapSigmaM * mapSigmaM);
   for (let g = 0; g < groups; g++) {
     if (groupSearched && !groupSearched[g]) {
@@ -106,7 +112,7 @@ export function accumulateReadingFields(
       continue;
     }
     const i = groupFirst[g];
-    const settled = search.reach(xs[i], ys[i], kernel.truncationM);
+    const settled = search.reach(xs[i], ys[i], kernel.truncationM, focus);
     const { dist } = search;
     const list = search.settled;
     if (used + settled > cap) {
@@ -148,6 +154,7 @@ export function accumulateReadingFields(
     }
   }
   start[groups] = used;
+  giveBackSearch(search);
   return {
     groupCell: Int32Array.from(groupCellList),
     groupOfReading,

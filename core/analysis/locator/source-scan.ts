@@ -27,32 +27,51 @@ export function scanSources(
   const delta = new Float64Array(n);
   const q = new Float64Array(n);
   const b = new Float64Array(n);
-  const { sumW: sw, sumWR: swr, sumWRR: swrr } = totals;
-  const b0 = Math.max(0, swr / sw);
-  const chi0 = swrr - 2 * b0 * swr + b0 * b0 * sw;
+  const chi0 = backgroundChi2(totals);
   for (let c = 0; c < n; c++) {
     if (!allowed[c]) continue;
-    const swg = sumWG[c];
-    const swgg = sumWGG[c];
-    const swgr = sumWGR[c];
-    if (swgg <= 0) continue;
-    const det = sw * swgg - swg * swg;
-    let qc = det > 1e-12 * sw * swgg ? (sw * swgr - swg * swr) / det : swgr / swgg;
-    let bc = (swr - qc * swg) / sw;
-    if (bc < 0) {
-      bc = 0;
-      qc = swgr / swgg;
-    }
-    if (!(qc > 0)) continue;
-    const chi = swrr - 2 * bc * swr - 2 * qc * swgr + bc * bc * sw + 2 * bc * qc * swg + qc * qc * swgg;
-    const d = chi0 - chi;
+    const d = fitOneCell(sumWG[c], sumWGG[c], sumWGR[c], totals, chi0);
     if (d > 0) {
       delta[c] = d;
-      q[c] = qc;
-      b[c] = bc;
+      q[c] = cellFit.q;
+      b[c] = cellFit.b;
     }
   }
   return { delta, q, b, chi2Background: chi0 };
+}
+
+/** χ² of the background-only model b₀ = max(0, Σwr/Σw). */
+export function backgroundChi2(totals: ScanTotals): number {
+  const { sumW: sw, sumWR: swr, sumWRR: swrr } = totals;
+  const b0 = Math.max(0, swr / sw);
+  return swrr - 2 * b0 * swr + b0 * b0 * sw;
+}
+
+/** Q and b of the last fitOneCell that found a source (one object, so the per-cell loops allocate nothing). */
+const cellFit = { q: 0, b: 0 };
+
+/**
+ * The fit at one cell from its sums: Δχ² over the background-only model (chi0), 0 when no source with
+ * Q > 0 fits; Q and b are left in `cellFit`. Shared by the scan and the drift choice (local-drift.ts) so
+ * both compute every cell the same way.
+ */
+export function fitOneCell(swg: number, swgg: number, swgr: number, totals: ScanTotals, chi0: number): number {
+  if (swgg <= 0) return 0;
+  const { sumW: sw, sumWR: swr, sumWRR: swrr } = totals;
+  const det = sw * swgg - swg * swg;
+  let qc = det > 1e-12 * sw * swgg ? (sw * swgr - swg * swr) / det : swgr / swgg;
+  let bc = (swr - qc * swg) / sw;
+  if (bc < 0) {
+    bc = 0;
+    qc = swgr / swgg;
+  }
+  if (!(qc > 0)) return 0;
+  const chi = swrr - 2 * bc * swr - 2 * qc * swgr + bc * bc * sw + 2 * bc * qc * swg + qc * qc * swgg;
+  const d = chi0 - chi;
+  if (!(d > 0)) return 0;
+  cellFit.q = qc;
+  cellFit.b = bc;
+  return d;
 }
 
 /**

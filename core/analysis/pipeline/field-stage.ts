@@ -1,4 +1,5 @@
 import type { FieldGrid } from "../../contracts/locator-output";
+import type { SearchFocus } from "../grid/geodesic-distance";
 import type { PlanGrid } from "../grid/plan-grid";
 import { estimateBackground } from "../locator/background";
 import { fieldMap } from "../locator/field-map";
@@ -57,6 +58,8 @@ export function fieldStage(
   /** Search only from these readings (a partial field, see accumulateReadingFields); null = all. */
   searched: Uint8Array | null = null,
   other: OtherAir | null = null,
+  /** Only this circle's cells are wanted (see accumulateReadingFields); null = every cell. */
+  focus: SearchFocus | null = null,
 ): FieldResult {
   const k = settings.kernel;
   const n = lag.ppm.length;
@@ -85,6 +88,7 @@ export function fieldStage(
     other?.levelOnly,
     k.mapSigmaM,
     searched,
+    focus,
   );
   return {
     background: estimateBackground(lag.ppm, usable),
@@ -108,6 +112,7 @@ function fieldsByModel(
   levelOnly: Uint8Array | undefined,
   mapSigmaM: number,
   searched: Uint8Array | null,
+  focus: SearchFocus | null,
 ): ReadingFields {
   const n = lag.ppm.length;
   // a part per air model, and apart from it that model's level-only readings
@@ -124,6 +129,7 @@ function fieldsByModel(
       mapSigmaM,
       models[0].stepScale,
       searched,
+      focus,
     );
   const parts = [...used]
     .sort((a, b) => a - b)
@@ -141,6 +147,7 @@ function fieldsByModel(
         mapSigmaM,
         models[m].stepScale,
         searched ? Uint8Array.from(readings, (i) => searched[i]) : null,
+        focus,
       );
       return { fields: part & 1 ? withoutKernel(fields) : fields, readings };
     });

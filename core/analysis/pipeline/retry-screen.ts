@@ -52,6 +52,8 @@ export function spotFitsPlume(
   const reachM = PLUME_REGION_M + k.truncationM + 2 * grid.cellSize;
   const searched = new Uint8Array(n);
   for (let i = 0; i < n; i++) searched[i] = Math.hypot(lag.xs[i] - px, lag.ys[i] - py) <= reachM ? 1 : 0;
+  // only the region's cells are read below, so the searches need not step on from cells that cannot reach it
+  const focus = { x: px, y: py, radiusM: PLUME_REGION_M };
   const field = fieldStage(
     grid,
     stepScale,
@@ -61,6 +63,7 @@ export function spotFitsPlume(
     settings,
     searched,
     passes.otherAir,
+    focus,
   );
   // cells outside the region are ruled out as they are for a spot out of every reading's reach
   const nearestReading = new Float32Array(field.fields.nearestReading.length).fill(Infinity);

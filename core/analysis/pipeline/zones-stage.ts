@@ -1,6 +1,6 @@
 import type { LocatorBackgroundZone } from "../../contracts/locator-input";
 import { polygonCentroid } from "../geometry/polygon-area";
-import { GeodesicSearch } from "../grid/geodesic-distance";
+import { borrowSearch, giveBackSearch } from "../grid/geodesic-distance";
 import { cellsInside, nearestFreeCell, type PlanGrid } from "../grid/plan-grid";
 import { fitNonnegative } from "../locator/nonnegative-fit";
 import type { NoiseSettings, ZoneSettings } from "../locator/settings";
@@ -43,7 +43,7 @@ export function zonesStage(
   const z0 = settings.zones;
   // a zone is a spread-out source whose gas drifts far, so it gets a longer kernel
   const kernel = createSourceKernel(z0.screeningLengthM, settings.nearCutoffM, 2 * z0.screeningLengthM + z0.marginM);
-  const search = new GeodesicSearch(grid, stepScale);
+  const search = borrowSearch(grid, stepScale);
   const cellDist: Float32Array[] = [];
   const readingDist: Float64Array[] = [];
   const columns = zones.map((zone) => {
@@ -52,7 +52,7 @@ export function zonesStage(
       const [cx, cy] = polygonCentroid(zone.polygon);
       zc = [nearestFreeCell(grid, cx, cy)].filter((k) => k >= 0);
     }
-    const settled = search.fromCells(zc, kernel.truncationM);
+    const settled = search.reachFromCells(zc, kernel.truncationM);
     const dist = new Float32Array(cells).fill(Infinity);
     for (let q = 0; q < settled; q++) dist[search.settled[q]] = search.dist[search.settled[q]];
     cellDist.push(dist);
@@ -60,6 +60,7 @@ export function zonesStage(
     readingDist.push(rd);
     return Float64Array.from(rd, (d) => kernel.at(d));
   });
+  giveBackSearch(search);
   // Only an active zone explains the readings around it and keeps suspect spots off its surroundings.
   // Gas spreading from a zone is strongest at it, so a zone that reads nothing where it is cannot be
   // what raised readings elsewhere.
