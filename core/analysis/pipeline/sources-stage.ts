@@ -156,9 +156,12 @@ export function sourcesStage(
       if (delta < s.minDeltaChi2) return false;
       const sup = supportingReadings(rule, column, b, residual);
       if (sup.length < s.minSupport) return false;
-      // Whether there is a leak at all: a weak fit must show a peak, not only a broad rise (diffuse-bump.ts).
+      // Whether there is a leak at all, where the plan lists a benign source: a weak fit must show a peak,
+      // not only a broad rise, which is most simply that source's gas stirred by fans (diffuse-bump.ts).
+      // Elsewhere a broad rise is still checked by hand: it may be a leak smeared by fans or a wrong delay.
       if (
         fitted === 0 &&
+        zones.columns.length > 0 &&
         delta < s.broadRiseDeltaChi2 &&
         pointOverBroad(residual, field.weights, lag.censored, broadColumn(c), column) < s.minPeakOverBroad
       )
