@@ -44,6 +44,8 @@ export interface GreedyInput {
     b: number,
     residual: Float64Array,
     delta: number,
+    /** Sources fitted before this one (0: whether there is any leak at all). */
+    fitted: number,
   ) => boolean;
 }
 
@@ -215,8 +217,11 @@ export function findSources(input: GreedyInput): GreedyResult {
     // on its own; the prior only chooses where, among cells the readings allow.
     const ml = input.prior ? bestWithPrior(scan, null, n) : best;
     const mlColumn = ml === best ? column : kernelColumn(fields, ml, n);
-    if (!input.credible(ml, mlColumn, scan.q[ml], scan.b[ml], residual, scan.delta[ml])) break;
-    if (ml !== best && !input.credible(best, column, scan.q[best], scan.b[best], residual, scan.delta[best])) {
+    if (!input.credible(ml, mlColumn, scan.q[ml], scan.b[ml], residual, scan.delta[ml], sources.length)) break;
+    if (
+      ml !== best &&
+      !input.credible(best, column, scan.q[best], scan.b[best], residual, scan.delta[best], sources.length)
+    ) {
       best = ml;
       column = mlColumn;
     }
@@ -258,7 +263,8 @@ export function findSources(input: GreedyInput): GreedyResult {
       if (sources.length >= input.maxCandidates) break;
       if (sources.some((s) => near(s.cell, c))) continue;
       const column = kernelColumn(fields, c, n);
-      if (!input.credible(c, column, firstScan.q[c], firstScan.b[c], residual0, firstScan.delta[c])) continue;
+      if (!input.credible(c, column, firstScan.q[c], firstScan.b[c], residual0, firstScan.delta[c], sources.length))
+        continue;
       sources.push({
         cell: c,
         delta: firstScan.delta[c],

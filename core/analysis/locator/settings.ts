@@ -65,6 +65,14 @@ export interface SourceSettings {
   readonly supportRadiusM: number;
   readonly minSupport: number;
   readonly elevatedPpm: number;
+  /**
+   * Whether there is any leak: a first spot with Δχ² under `broadRiseDeltaChi2` must also save
+   * `minPeakOverBroad` of χ² over a broad bump (a Gaussian of width `diffuseSigmaM`) at the same place,
+   * so a gentle rise spread by fans (a benign source's gas, uneven background) is no leak (decision 0063).
+   */
+  readonly diffuseSigmaM: number;
+  readonly minPeakOverBroad: number;
+  readonly broadRiseDeltaChi2: number;
   /** Equipment mask margin for drawing error, m. */
   readonly equipmentMarginM: number;
   /** Log prior odds of a leak within 0.5 m of a risk point (common practice, no published source). */
@@ -127,6 +135,9 @@ export const LOCATOR_SETTINGS: LocatorSettings = {
     supportRadiusM: 3,
     minSupport: 2,
     elevatedPpm: 1.5,
+    diffuseSigmaM: 5,
+    minPeakOverBroad: 5,
+    broadRiseDeltaChi2: 70,
     equipmentMarginM: 0.3,
     riskPointLogOdds: 3,
     maxReachM: 4,

@@ -3,6 +3,7 @@ import { LOCATOR_SETTINGS } from "../locator/settings";
 import { cellCentre } from "../grid/plan-grid";
 import { fieldStage } from "./field-stage";
 import { lagStage } from "./lag-stage";
+import { parseLocatorInput } from "../../contracts/locator-input";
 import { aisle, gridOf, plume, rect } from "./stage-fixtures";
 import { outsideFanRooms, sourcesStage, supportingReadings } from "./sources-stage";
 import { besselK0 } from "../locator/bessel-k0";
@@ -78,6 +79,44 @@ describe("sources stage", () => {
     expect(kept[at(8, 0.5)]).toBe(1);
     expect(kept[at(2, 3)]).toBe(1);
     expect(allowed[at(2, 0.5)]).toBe(1); // a new mask, the allowed cells left as they were
+  });
+
+  it("finds no leak in a gentle rise over tens of metres where a benign source is listed, but does in a peak on it", () => {
+    // a 40 m fan-stirred lineup walked twice, a tap every 0.5 m; the gas of a benign source (listed at
+    // the far end of the aisle) spread by the fans lifts readings by up to 2.5 ppm over ±10 m (integer
+    // readings, as a heated-diode sniffer shows)
+    const xs = Array.from({ length: 80 }, (_, i) => i * 0.5 + 0.25);
+    const rise = (x: number) => 1 + 2.5 * Math.exp(-0.5 * ((x - 20) / 5) ** 2);
+    const zone = { id: "aerosols", polygon: rect(39, 3, 40, 4) };
+    const runLong = (ppmAt: (x: number) => number, sources = S.sources, zones = [zone]) => {
+      const input = parseLocatorInput({
+        plan: {
+          width: 40,
+          height: 4,
+          fixtures: [{ id: "lineup", kind: "open-case", polygon: rect(0, 0, 40, 1), fans: true }],
+          backgroundZones: zones,
+        },
+        instrument: { transportDelayS: 0, timeConstantS: 0, alarmPpm: 2 },
+        readings: [...xs, ...xs.toReversed()].map((x, t) => ({ x, y: 2, t, ppm: Math.round(ppmAt(x)) })),
+      });
+      const grid = gridOf(input);
+      const lag = lagStage(input.readings, input.instrument, grid, 0);
+      const z = zonesStage(input.plan.backgroundZones, 2, grid, null, lag, {
+        zones: S.zones,
+        noise: S.noise,
+        nearCutoffM: S.kernel.nearCutoffM,
+        elevatedPpm: S.sources.elevatedPpm,
+      });
+      const field = fieldStage(grid, null, true, lag, z, S);
+      return sourcesStage(input.plan, grid, lag, z, field, { kernel: S.kernel, sources, zoneMarginM: 1.5 }).found;
+    };
+    expect(runLong(rise)).toEqual([]);
+    // the same readings judged without the broad-rise test: a point source "fits" somewhere on the rise
+    expect(runLong(rise, { ...S.sources, minPeakOverBroad: 0 }).length).toBeGreaterThan(0);
+    // with no benign source listed the rise is left for a hand check (a leak smeared by fans or a wrong delay)
+    expect(runLong(rise, S.sources, []).length).toBeGreaterThan(0);
+    // a leak's peak of 6 ppm at x = 20 m on the same rise (halving every metre) is a leak
+    expect(runLong((x) => rise(x) + 6 * 0.5 ** Math.abs(x - 20)).length).toBeGreaterThan(0);
   });
 
   it("finds nothing in level readings", () => {

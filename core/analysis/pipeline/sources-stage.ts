@@ -1,6 +1,7 @@
 import type { LocatorInput } from "../../contracts/locator-input";
 import type { PlanGrid } from "../grid/plan-grid";
 import { findSources, residualOf, type FoundSource } from "../locator/greedy-sources";
+import { broadKernel, diffuseBump, pointOverBroad, type DiffuseBump } from "../locator/diffuse-bump";
 import { chooseLocalDrift } from "../locator/local-drift";
 import type { NonnegativeFit } from "../locator/nonnegative-fit";
 import { driftTrials, equipmentMask, fanStepScale, riskPointPrior } from "../locator/plan-masks";
@@ -125,6 +126,15 @@ export function sourcesStage(
   }
   const prior = s.riskPointLogOdds > 0 ? riskPointPrior(grid, plan, s.riskPointLogOdds) : null;
   const rule = supportRule(field, zones, s);
+  // made on first use: most stores' first spot fits too well to need the broad-rise test
+  let bump: DiffuseBump | null = null;
+  const broadColumn = (c: number) =>
+    (bump ??= diffuseBump(
+      grid,
+      fanStepScale(grid, plan, settings.kernel.fanMixingScale),
+      lag.cell,
+      broadKernel(s.diffuseSigmaM),
+    )).column(c);
   const greedy = findSources({
     fields,
     y,
@@ -142,10 +152,20 @@ export function sourcesStage(
     sourceSeparationM: s.sourceSeparationM,
     prior,
     tailReachM: s.tailReachM,
-    credible: (c, column, _q, b, residual, delta) => {
+    credible: (c, column, _q, b, residual, delta, fitted) => {
       if (delta < s.minDeltaChi2) return false;
       const sup = supportingReadings(rule, column, b, residual);
       if (sup.length < s.minSupport) return false;
+      // Whether there is a leak at all, where the plan lists a benign source: a weak fit must show a peak,
+      // not only a broad rise, which is most simply that source's gas stirred by fans (diffuse-bump.ts).
+      // Elsewhere a broad rise is still checked by hand: it may be a leak smeared by fans or a wrong delay.
+      if (
+        fitted === 0 &&
+        zones.columns.length > 0 &&
+        delta < s.broadRiseDeltaChi2 &&
+        pointOverBroad(residual, field.weights, lag.censored, broadColumn(c), column) < s.minPeakOverBroad
+      )
+        return false;
       // Within reach of a benign-source zone, a spot must read more than the zone does: gas spreading
       // from the zone thins out with distance, so weaker readings there are most simply the zone's.
       const z = zones.nearest[c];
