@@ -52,7 +52,7 @@ export function RevisionsSection({
           rows={revisions.data.revisions}
           rowKey={(x) => x.id}
           columns={[
-            { header: "From", cell: (x) => x.effectiveFrom },
+            { header: "From", cell: (x) => formatCalendarDay(x.effectiveFrom) },
             { header: "Kind", cell: (x) => KIND_NAMES[x.kind] ?? x.kind },
             { header: "Refrigerant", cell: (x) => x.refrigerantName },
             { header: "Full charge", cell: (x) => formatMass(x.fullChargeKg, unit, numberFormat) },
