@@ -280,7 +280,8 @@ export function systemStatus(
     co2e,
     leakCheck,
     automaticLeakDetection: ald,
-    nextInspection,
+    // A retired system owes no inspection (docs/decisions/0040-no-record-is-lost.md): none is shown as next.
+    nextInspection: rec.retiredOn ? null : nextInspection,
     due: (rec.retiredOn ? due.filter((d) => stillDueWhenRetired(d, rec.retiredOn!)) : due).sort((x, y) =>
       compareDates(x.dueOn, y.dueOn),
     ),
@@ -304,7 +305,7 @@ function failedRepairItems(
   const triggers: Trigger[] = [
     ...failedFollowUps.map((f) => ({
       on: f.on,
-      why: `the follow-up verification test of ${f.on} failed`,
+      why: `the follow-up verification test of ${day(f.on)} failed`,
       partId: null,
       findingId: f.findingId,
     })),
