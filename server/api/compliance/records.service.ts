@@ -58,6 +58,7 @@ const toRow = (p: AssessedPoint) => ({
   additionIds: p.additionIds,
   partId: p.partId,
   thresholdPercent: p.thresholdPercent,
+  thresholdSource: p.thresholdSource,
   exceeds: p.exceeds,
   repairDue: p.repairDue ?? null,
 });

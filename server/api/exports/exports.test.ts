@@ -192,4 +192,58 @@ describe("records export", () => {
     expect(text).toContain("GWP 1,386 on AR4 + AR5");
     expect(text).toContain("today is");
   });
+
+  it("cites for each figure the part in force on its date: after a retrofit, the R-22 figure keeps 82.157", async () => {
+    const lead = await agentFor(t.app);
+    await lead.post("/api/auth/sign-in", { email: co.people.owner.email, password: PASSWORD });
+    const id = (
+      await lead.post(`/api/stores/${co.store.id}/systems`, {
+        name: "Rack D (retrofitted)",
+        refrigerantId: "R-22",
+        fullCharge: { value: 180, unit: "lb" },
+        applianceType: "commercial-refrigeration",
+        automaticLeakDetection: false,
+        inServiceOn: "2019-05-01",
+      })
+    ).body.id;
+    // R-22 is ozone-depleting, 180 lb ≥ 50 lb: 40 CFR 82 subpart F, 20 % for commercial refrigeration [S:R1].
+    // 45/180 over the first calculation's 365 days [M] = 25 %.
+    await tech.post(`/api/systems/${id}/charge-additions`, {
+      addedOn: "2026-04-02",
+      amount: { value: 45, unit: "lb" },
+      reason: "Recharge",
+    });
+    const revised = await lead.post(`/api/systems/${id}/revisions`, {
+      effectiveFrom: "2026-05-12",
+      kind: "retrofit",
+      reason: "Converted to R-448A",
+      refrigerantId: "R-448A",
+    });
+    expect(revised.status).toBe(201);
+    // The retrofit fill counts no loss (82.157 [S:R1]); 40 lb 81 days later: 40/180 ÷ (81/365) × 100 = 100.137 %,
+    // now under 40 CFR 84 subpart C (R-448A, GWP > 53 [S:R4]).
+    await tech.post(`/api/systems/${id}/charge-additions`, {
+      addedOn: "2026-05-12",
+      amount: { value: 165, unit: "lb" },
+      reason: "Retrofit fill",
+      excluded: "retrofit",
+    });
+    await tech.post(`/api/systems/${id}/charge-additions`, {
+      addedOn: "2026-08-01",
+      amount: { value: 40, unit: "lb" },
+      reason: "Top-up",
+    });
+    const rows = Papa.parse<Record<string, string>>((await tech.get(`/api/systems/${id}/records.csv`)).text, {
+      header: true,
+    }).data;
+    expect(rows.map((r) => [r.date, r.leak_rate_percent, r.threshold_rule])).toEqual([
+      ["2026-04-02", "25", "40 CFR 82.157(c), commercial refrigeration"],
+      ["2026-05-12", "", ""],
+      ["2026-08-01", "100.14", "40 CFR 84.106, commercial refrigeration"],
+    ]);
+    const res = await tech.agent.get(`/api/systems/${id}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+    const text = (await pdfText(res.body as Buffer)).join(" ").replace(/\s+/g, " ");
+    expect(text).toMatch(/25\.0 % \(above\) 20 % \(40 CFR 82\.157\(c\), commercial refrigeration\)/);
+    expect(text).toMatch(/100\.1 % \(above\) 20 % \(40 CFR 84\.106, commercial refrigeration\)/);
+  });
 });

@@ -122,7 +122,7 @@ function profileSection(doc: Doc, r: SystemRecordsView, cite: Cite) {
     );
 }
 
-function leakRateSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string) {
+function leakRateSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string, cite: Cite) {
   heading(doc, "Leak rate at every addition");
   const byId = new Map(r.additions.map((a) => [a.id, a]));
   const rows = r.leakRates.map((p) => [
@@ -131,7 +131,10 @@ function leakRateSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => s
     p.method === "annualizing" ? `${p.days} d` : `from ${day(p.windowStart)}`,
     mass(p.countedKg),
     `${p.percent.toFixed(1)} %${p.exceeds ? " (above)" : ""}`,
-    p.thresholdPercent === null ? "none" : `${p.thresholdPercent} %`,
+    // Each figure cites the part in force on its own date (after a retrofit, earlier figures keep theirs).
+    p.thresholdPercent === null
+      ? "none"
+      : `${p.thresholdPercent} %${p.thresholdSource ? ` (${cite(p.thresholdSource)})` : ""}`,
     day(p.repairDue),
   ]);
   if (rows.length)
@@ -139,12 +142,12 @@ function leakRateSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => s
       doc,
       [
         { title: "Date", share: 62 },
-        { title: "Added", share: 92 },
-        { title: r.profile.method === "annualizing" ? "Days" : "Window", share: 62 },
-        { title: "Counted", share: 92 },
-        { title: "Leak rate", share: 62, align: "right" },
-        { title: "Threshold", share: 52, align: "right" },
-        { title: "Repair due", share: 64 },
+        { title: "Added", share: 80 },
+        { title: r.profile.method === "annualizing" ? "Days" : "Window", share: 44 },
+        { title: "Counted", share: 80 },
+        { title: "Leak rate", share: 58, align: "right" },
+        { title: "Threshold (rule)", share: 104 },
+        { title: "Repair due", share: 58 },
       ],
       rows,
     );
@@ -373,7 +376,7 @@ export function leakRateStatementPdf(
 
   systemSection(doc, r, mass, cite, options.numberFormat ?? "1,234.5");
   profileSection(doc, r, cite);
-  if (r.profile.leakRateRules) leakRateSection(doc, r, mass);
+  if (r.profile.leakRateRules) leakRateSection(doc, r, mass, cite);
   else euRecordsSection(doc, r, mass);
   chronicSection(doc, r, mass, cite);
   voidedSection(doc, r, mass);

@@ -241,7 +241,23 @@ export function SystemRecords({
                   </span>
                 ),
               },
-              { header: "Threshold", cell: (p) => (p.thresholdPercent === null ? "none" : `${p.thresholdPercent} %`) },
+              {
+                header: "Threshold",
+                // Each figure cites the part in force on its own date: after a retrofit, earlier figures keep theirs.
+                cell: (p) =>
+                  p.thresholdPercent === null ? (
+                    "none"
+                  ) : (
+                    <>
+                      {p.thresholdPercent} %
+                      {p.thresholdSource ? (
+                        <span className="block text-sm text-muted">
+                          <SourceText source={p.thresholdSource} />
+                        </span>
+                      ) : null}
+                    </>
+                  ),
+              },
               { header: "Repair due", cell: (p) => (p.repairDue ? formatCalendarDay(p.repairDue) : "") },
             ]}
           />
