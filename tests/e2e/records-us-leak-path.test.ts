@@ -205,3 +205,101 @@ it("an R-448A rack: a leak topped up twice before its repair is one figure on th
   await engineerContext.close();
   await ownerContext.close();
 });
+
+it("on a phone a repair's follow-up test fails and a retrofit-or-retire plan falls due; the R-22 rack's retrofit closes it and keeps 82.157 on the old figure; a 1,650 lb rack owes automatic leak detection", async () => {
+  const failures: string[] = [];
+  const owner = await agentFor(server.app);
+  await owner.post("/api/auth/sign-in", { email: co.people.owner.email, password: PASSWORD });
+  const create = async (name: string, refrigerantId: string, lb: number, inServiceOn: string) =>
+    (
+      await owner.post(`/api/stores/${co.store.id}/systems`, {
+        name,
+        refrigerantId,
+        fullCharge: { value: lb, unit: "lb" },
+        applianceType: "commercial-refrigeration",
+        automaticLeakDetection: false,
+        inServiceOn,
+      })
+    ).body.id as string;
+  const rackD = await create("Rack D – deli and dairy", "R-22", 180, "2019-05-01");
+  const rackE = await create("Rack E – booster for the new wing", "R-448A", 1650, "2026-09-01");
+
+  // The technician, on a phone in the machine room.
+  const phoneContext = await newContext(browser, {
+    viewport: { width: 390, height: 844 },
+    isMobile: true,
+    hasTouch: true,
+  });
+  const phone = await phoneContext.newPage();
+  phone.on("pageerror", (e) => failures.push(String(e)));
+  await signInThroughForm(phone, server.url, co.people.technician.email, PASSWORD);
+  await phone.goto(`${server.url}/systems/${rackD}`);
+  await newFinding(phone, "2026-04-02", "brazed-joint", "Oil at the brazed tee above the deli case, 40 ppm");
+  await nextStep(phone, "Confirm the leak", "2026-04-02");
+  await phone.getByTestId("finding-status").filter({ hasText: "confirmed" }).waitFor();
+  await phone.getByRole("link", { name: "system records" }).click();
+  // R-22 is ozone-depleting and 180 lb ≥ 50 lb: 40 CFR 82 subpart F, 20 % [S:R1]; 45/180 over 365 days [M] = 25 %.
+  await recordCharge(
+    phone,
+    "2026-04-02",
+    "45",
+    "Recharge after finding the brazed tee leak",
+    "2 Apr 2026 Brazed joint (confirmed)",
+  );
+  await leakRow(phone, "2 Apr 2026").filter({ hasText: "25.0 % — above threshold" }).waitFor();
+  // On a phone the records page is one column: nothing, the plots included, makes it scroll sideways.
+  expect(await phone.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBeLessThanOrEqual(0);
+  await shot(phone, "records-us-phone-records-390");
+  await phone.getByRole("link", { name: /Brazed joint · confirmed/ }).click();
+  await nextStep(phone, "Record the repair", "2026-04-10");
+  await phone.getByTestId("finding-status").filter({ hasText: "repaired" }).waitFor();
+  await nextStep(phone, "Record the initial verification test", "2026-04-10", "passed");
+  await phone.getByText("Follow-up verification test after the initial test of 10 Apr 2026").first().waitFor();
+  await nextStep(phone, "Record the follow-up verification test", "2026-04-17", "failed");
+  // The repair did not hold: a retrofit-or-retire plan within 30 days, carried out within a year (82.157 [M]).
+  await phone
+    .getByText("Retrofit-or-retire plan: the follow-up verification test of 17 Apr 2026 failed: 17 May 2026")
+    .waitFor();
+  await phone.getByText(/Retrofit or retire the system under its plan .*: 17 Apr 2027/).waitFor();
+  await phone
+    .getByText(/Rule: 40 CFR 82\.157: when a repair does not hold/)
+    .first()
+    .waitFor();
+  await shot(phone, "records-us-failed-follow-up-390");
+  const wide = await phone.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+  expect(wide).toBeLessThanOrEqual(0); // nothing to scroll sideways on the phone
+  await phoneContext.close();
+
+  // The engineer retrofits the rack to R-448A on 12 May 2026 and records the fill as not counted (82.157 [S:R1]).
+  const context = await newContext(browser, { viewport: { width: 1366, height: 860 } });
+  const page = await context.newPage();
+  page.on("pageerror", (e) => failures.push(String(e)));
+  await signInThroughForm(page, server.url, co.people.engineer.email, PASSWORD);
+  await page.goto(`${server.url}/systems/${rackD}`);
+  const revision = page.getByRole("form", { name: "Record a change to the system" });
+  await revision.getByLabel("In force from").fill("2026-05-12");
+  await revision.getByLabel("Kind").selectOption("retrofit");
+  await revision.getByLabel("Refrigerant").fill("R-448A");
+  await revision.getByLabel("Reason").fill("Converted from R-22 to R-448A: POE oil, TXVs reset");
+  await revision.getByRole("button", { name: "Record the change" }).click();
+  await page.getByRole("table", { name: "System history" }).getByRole("row").filter({ hasText: "Retrofit" }).waitFor();
+  const form = page.getByRole("form", { name: "Record charge added" });
+  await form.getByLabel("Leak-rate calculation").selectOption("retrofit");
+  await recordCharge(page, "2026-05-12", "165", "Charged with R-448A after the retrofit");
+  await page.getByText("entered 165 lb; not counted: fill after a retrofit").waitFor();
+  // No figure for the fill; the R-22 figure keeps its part's rule; the plan items are closed by the retrofit.
+  expect(await leakRow(page, "12 May 2026").count()).toBe(0);
+  await leakRow(page, "2 Apr 2026").filter({ hasText: "40 CFR 82.157(c), commercial refrigeration" }).waitFor();
+  await page.getByText(/Rule: 40 CFR 84 subpart C/).waitFor();
+  expect(await page.getByText(/Retrofit-or-retire plan/).count()).toBe(0);
+  await shot(page, "records-us-retrofit-1366");
+
+  // Automatic leak detection: 1,650 lb ≥ 1,500 lb of commercial refrigeration [S:R4]; in service 1 Sept 2026,
+  // so within 30 days [M]: by 1 Oct 2026.
+  await page.goto(`${server.url}/systems/${rackE}`);
+  await page.getByText(/Install automatic leak detection \(required from 1,500 lb; install by 1 Oct 2026/).waitFor();
+  await page.getByText(/Required by 1 Oct 2026 \(40 CFR 84\.106: automatic leak detection required/).waitFor();
+  await shot(page, "records-us-automatic-leak-detection-1366");
+  expect(failures).toEqual([]);
+  await context.close();
+});

@@ -34,7 +34,9 @@ export function Plot({
 }) {
   const [ref, width] = useBoxWidth();
   return (
-    <figure className="space-y-1 rounded-md bg-surface p-3 edge" aria-label={title}>
+    // min-w-0: a grid item is at least as wide as its content by default, so a chart drawn wide once (a
+    // phone's first layout, a rotated tablet) would hold its box wide and never be measured narrower.
+    <figure className="min-w-0 space-y-1 rounded-md bg-surface p-3 edge" aria-label={title}>
       <figcaption className="font-bold">{title}</figcaption>
       <p className="text-sm text-muted">{summary}</p>
       <div ref={ref} aria-hidden="true" data-testid="plot">
