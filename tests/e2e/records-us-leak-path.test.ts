@@ -300,6 +300,12 @@ it("on a phone a repair's follow-up test fails and a retrofit-or-retire plan fal
   await page.getByText(/Install automatic leak detection \(required from 1,500 lb; install by 1 Oct 2026/).waitFor();
   await page.getByText(/Required by 1 Oct 2026 \(40 CFR 84\.106: automatic leak detection required/).waitFor();
   await shot(page, "records-us-automatic-leak-detection-1366");
+
+  // Today gathers what every system owes, each day written as the records write it.
+  await page.getByRole("link", { name: "Today", exact: true }).click();
+  await page.getByRole("heading", { name: "Systems", exact: true }).waitFor();
+  await page.getByRole("link", { name: /Install automatic leak detection/ }).waitFor();
+  await shot(page, "records-us-today-1366");
   expect(failures).toEqual([]);
   await context.close();
 });
