@@ -292,6 +292,8 @@ it("on a phone a repair's follow-up test fails and a retrofit-or-retire plan fal
   await leakRow(page, "2 Apr 2026").filter({ hasText: "40 CFR 82.157(c), commercial refrigeration" }).waitFor();
   await page.getByText(/Rule: 40 CFR 84 subpart C/).waitFor();
   expect(await page.getByText(/Retrofit-or-retire plan/).count()).toBe(0);
+  // 2026's refrigerant was added under R-22, so the year is judged by Part 82's chronic-leaker rule (decision 0043).
+  await page.getByText(/is a chronic leaker, reported by 1 March of the next year \(40 CFR 82\.157/).waitFor();
   await shot(page, "records-us-retrofit-1366");
 
   // Automatic leak detection: 1,650 lb ≥ 1,500 lb of commercial refrigeration [S:R4]; in service 1 Sept 2026,
