@@ -78,6 +78,8 @@ export const leakRateRow = z.object({
   additionIds: z.array(z.uuid()),
   partId: text().nullable(),
   thresholdPercent: z.number().nullable(),
+  /** The rule of the part in force on the figure's date (after a retrofit, earlier figures keep theirs). */
+  thresholdSource: text().nullable(),
   exceeds: z.boolean(),
   repairDue: text().nullable(),
 });

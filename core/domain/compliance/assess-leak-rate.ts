@@ -16,6 +16,8 @@ export interface AssessedPoint extends LeakRatePoint {
   /** The part in force on this date, or null when none applies (then there is no threshold). */
   partId: string | null;
   thresholdPercent: number | null;
+  /** The rule the threshold comes from, for the part in force on this date (a tag-bearing source). */
+  thresholdSource: string | null;
   exceeds: boolean;
   /**
    * When the rate exceeds the threshold: repair due, counted from the group's first addition. The
@@ -78,17 +80,18 @@ export function assessLeakRate(
   return history.map((point) => {
     const facts = on(point.date);
     const a = applicableLeakRatePart(profile, facts.refrigerant, facts.fullChargeKg, point.date);
-    if (!a.applies) return { ...point, partId: null, thresholdPercent: null, exceeds: false };
-    const threshold = leakRateThreshold(a.part, facts.applianceType).percent;
+    if (!a.applies) return { ...point, partId: null, thresholdPercent: null, thresholdSource: null, exceeds: false };
+    const { percent: threshold, source: thresholdSource } = leakRateThreshold(a.part, facts.applianceType);
     const exceeds = exceedsThreshold(point.percent, threshold);
     return exceeds
       ? {
           ...point,
           partId: a.part.id,
           thresholdPercent: threshold,
+          thresholdSource,
           exceeds,
           repairDue: repairDueDate(a.part, point.clockFrom),
         }
-      : { ...point, partId: a.part.id, thresholdPercent: threshold, exceeds };
+      : { ...point, partId: a.part.id, thresholdPercent: threshold, thresholdSource, exceeds };
   });
 }

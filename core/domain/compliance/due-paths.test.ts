@@ -47,6 +47,9 @@ describe("the failed-repair path: a retrofit-or-retire plan falls due (docs/refe
       ["retrofit-or-retire-plan", "2026-06-09"],
       ["retrofit-or-retire", "2027-05-10"],
     ]);
+    // The item names the failed test's day as every screen writes days.
+    const plan = systemStatus(US_FEDERAL_PROFILE, "annualizing", rec, "2026-05-11").due[0];
+    expect(plan.what).toBe("Retrofit-or-retire plan: the follow-up verification test of 10 May 2026 failed");
     // A retrofit on or after the failure closes both.
     const retrofitted = {
       ...rec,

@@ -43,6 +43,10 @@ describe("the repair clock runs from the first exceedance of a breach episode (d
     expect(s.unrepairedBreach?.date).toBe("2026-03-03");
     expect(s.due.find((d) => d.kind === "repair")?.dueOn).toBe("2026-04-02");
     expect(s.points.filter((p) => p.exceeds).map((p) => p.repairDue)).toEqual(["2026-04-02", "2026-04-02"]);
+    // A single addition's figure is its own clock start: the item names only the episode's first exceedance.
+    expect(s.due.find((d) => d.kind === "repair")?.what).toBe(
+      "Repair: leak rate 60.8 % on 3 Mar 2026 is above 20 % (first of 2 exceedances before a repair; the deadline runs from the first)",
+    );
   });
 
   it("a repair on or after the first exceedance closes the episode; a later exceedance opens a new one", () => {
@@ -100,6 +104,10 @@ describe("additions for the same leak are one calculation (docs/reference/standa
     const s = status({ additions: topUps }, "2026-04-03");
     // 36.5 % > 20 % [S:R4]: 1 Apr + 30 days = 1 May.
     expect(s.due.find((d) => d.kind === "repair")?.dueOn).toBe("2026-05-01");
+    // The figure is dated 2 Apr, so the item says why the 30 days end on 1 May and not on 2 May.
+    expect(s.due.find((d) => d.kind === "repair")?.what).toBe(
+      "Repair: leak rate 36.5 % on 2 Apr 2026 is above 20 % (the deadline runs from the first addition for this leak, on 1 Apr 2026)",
+    );
   });
 
   it("an addition after the leak's repair starts a new group", () => {

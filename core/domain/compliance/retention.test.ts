@@ -45,5 +45,8 @@ describe("record retention follows the rule profile", () => {
     const retired = systemStatus(US_FEDERAL_PROFILE, "annualizing", { ...rec, retiredOn: "2027-01-05" }, "2027-01-10");
     // Report by 1 March of the next year [S:R7].
     expect(retired.due.map((d) => [d.kind, d.dueOn])).toEqual([["chronic-leaker-report", "2027-03-01"]]);
+    // Nor is a next inspection named, on the screen or in the statement, while the in-service one has one.
+    expect(inService.nextInspection).not.toBeNull();
+    expect(retired.nextInspection).toBeNull();
   });
 });

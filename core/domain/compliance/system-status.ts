@@ -140,7 +140,7 @@ export function systemStatus(
     due.push({
       kind: "repair",
       dueOn: unrepairedBreach.repairDue,
-      what: `Repair: leak rate ${unrepairedBreach.percent.toFixed(1)} % on ${day(unrepairedBreach.date)} is above ${unrepairedBreach.thresholdPercent} %${open && open.exceedances.length > 1 ? ` (first of ${open.exceedances.length} exceedances before a repair; the deadline runs from the first)` : ""}`,
+      what: `Repair: leak rate ${unrepairedBreach.percent.toFixed(1)} % on ${day(unrepairedBreach.date)} is above ${unrepairedBreach.thresholdPercent} %${repairClockNote(open!)}`,
       source: `${breachPart.title}; ${breachPart.repairDays.source}`,
     });
   }
@@ -280,7 +280,8 @@ export function systemStatus(
     co2e,
     leakCheck,
     automaticLeakDetection: ald,
-    nextInspection,
+    // A retired system owes no inspection (docs/decisions/0040-no-record-is-lost.md): none is shown as next.
+    nextInspection: rec.retiredOn ? null : nextInspection,
     due: (rec.retiredOn ? due.filter((d) => stillDueWhenRetired(d, rec.retiredOn!)) : due).sort((x, y) =>
       compareDates(x.dueOn, y.dueOn),
     ),
@@ -304,7 +305,7 @@ function failedRepairItems(
   const triggers: Trigger[] = [
     ...failedFollowUps.map((f) => ({
       on: f.on,
-      why: `the follow-up verification test of ${f.on} failed`,
+      why: `the follow-up verification test of ${day(f.on)} failed`,
       partId: null,
       findingId: f.findingId,
     })),
@@ -377,4 +378,18 @@ export function inspectionRun(
     if (run.clean >= untilClean) run = null;
   }
   return run;
+}
+
+/**
+ * Why the repair deadline is not 30 days after the figure's own date, when it is not: the clock runs
+ * from the first exceedance of the episode, and a figure of several additions for one leak from its
+ * first addition (docs/decisions/0041-repair-clock.md, 0042-same-leak-additions.md).
+ */
+function repairClockNote(open: { first: { date: IsoDate; clockFrom: IsoDate }; exceedances: readonly unknown[] }) {
+  const fromFirstAddition = open.first.clockFrom !== open.first.date;
+  if (open.exceedances.length > 1)
+    return ` (first of ${open.exceedances.length} exceedances before a repair; the deadline runs from the first${fromFirstAddition ? `, from its first addition on ${day(open.first.clockFrom)}` : ""})`;
+  return fromFirstAddition
+    ? ` (the deadline runs from the first addition for this leak, on ${day(open.first.clockFrom)})`
+    : "";
 }

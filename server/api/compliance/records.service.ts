@@ -58,6 +58,7 @@ const toRow = (p: AssessedPoint) => ({
   additionIds: p.additionIds,
   partId: p.partId,
   thresholdPercent: p.thresholdPercent,
+  thresholdSource: p.thresholdSource,
   exceeds: p.exceeds,
   repairDue: p.repairDue ?? null,
 });
@@ -156,8 +157,12 @@ export async function getSystemRecords(
     leakRates: st.points.map(toRow),
     latest: st.latest ? toRow(st.latest) : null,
     overThreshold: st.overThreshold,
+    // The rule the listed years were judged by: the part of the latest year (after a retrofit that may be
+    // the part before it, docs/decisions/0043-system-revisions.md), else the part in force today.
     chronicRule: chronicRuleOf(
-      rules.profile.leakRateParts.find((p) => p.id === (st.applicability.partId ?? st.latest?.partId)) ?? null,
+      rules.profile.leakRateParts.find(
+        (p) => p.id === (st.chronic.at(-1)?.partId ?? st.applicability.partId ?? st.latest?.partId),
+      ) ?? null,
     ),
     chronic: st.chronic.map((y) => {
       const f = reports.find((x) => x.r.year === y.year);

@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { agentFor, createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
 import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 import { pdfText } from "../../../tests/helpers/pdf-text";
+import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;
@@ -135,7 +136,7 @@ describe("records export", () => {
       // system, 12 with one (Regulation (EU) 2024/573 Art. 5 intervals, docs/reference/standards.md §2 [S:E1]).
       expect(text).toContain("every 6 months, with one every 12 months");
       // GWP basis stated beside the CO2e: R-448A is 1387 on AR4 with the 517/2014 HFO values (docs/reference/standards.md §3 [D]).
-      expect(text).toContain("kg × GWP 1387 / 1000");
+      expect(text).toContain("kg × GWP 1,387 / 1000");
       expect(text).toContain("GWP basis: IPCC AR4 100-year values as in Regulation (EU) 2024/573 Annex I");
       const csv = Papa.parse<Record<string, string>>((await tech.get(`/api/systems/${systemId}/records.csv`)).text, {
         header: true,
@@ -147,5 +148,102 @@ describe("records export", () => {
     } finally {
       expect((await owner.put("/api/company/settings", settings("us-federal"))).status).toBe(200);
     }
+  });
+
+  it("says in the statement that a system is retired, until when its records are kept, and names each finding's component", async () => {
+    const owner = await agentFor(t.app);
+    await owner.post("/api/auth/sign-in", { email: co.people.owner.email, password: PASSWORD });
+    const id = (
+      await owner.post(`/api/stores/${co.store.id}/systems`, {
+        name: "Rack R (retired)",
+        refrigerantId: "R-448A",
+        fullCharge: { value: 620, unit: "lb" },
+        applianceType: "commercial-refrigeration",
+        automaticLeakDetection: false,
+        inServiceOn: "2024-03-01",
+      })
+    ).body.id;
+    await tech.post(`/api/systems/${id}/charge-additions`, {
+      addedOn: "2026-02-09",
+      amount: { value: 150, unit: "lb" },
+      reason: "Recharge",
+    });
+    await tech.post(`/api/stores/${co.store.id}/findings`, {
+      systemId: id,
+      status: "confirmed",
+      component: "brazed-joint",
+      foundAt: "2026-02-09T17:00:00Z",
+    });
+    const retired = await owner.post(`/api/systems/${id}/retire`, { reason: "Replaced by a CO2 booster" });
+    expect(retired.status).toBe(200);
+    const res = await tech.agent.get(`/api/systems/${id}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+    const text = (await pdfText(res.body as Buffer)).join(" ").replace(/\s+/g, " ");
+    const records = (await tech.get(`/api/systems/${id}/records`)).body;
+    // Kept 3 years after the retirement day (docs/reference/standards.md §1 [S:R6,R7]; docs/decisions/0040).
+    expect(records.retention.keptUntil).toBe(`${Number(records.today.slice(0, 4)) + 3}${records.today.slice(4)}`);
+    expect(text).toContain(`Retired on ${formatCalendarDay(records.today)} (Replaced by a CO2 booster)`);
+    expect(text).toContain(`kept at least until ${formatCalendarDay(records.retention.keptUntil)}`);
+    // 150 lb into 620 lb over 365 days (84.102, first calculation in 2026 [M]) = 24.2 % > 20 %: a breach, and
+    // yet a retired system owes no inspection, so none is named as next (docs/decisions/0040).
+    expect(text).toContain("24.2 %");
+    expect(text).not.toContain("Next inspection");
+    // The component in words, as on the screens; the GWP grouped in the company's format.
+    expect(text).toContain("Brazed joint – confirmed");
+    expect(text).toContain("GWP 1,386 on AR4 + AR5");
+    expect(text).toContain("today is");
+  });
+
+  it("cites for each figure the part in force on its date: after a retrofit, the R-22 figure keeps 82.157", async () => {
+    const lead = await agentFor(t.app);
+    await lead.post("/api/auth/sign-in", { email: co.people.owner.email, password: PASSWORD });
+    const id = (
+      await lead.post(`/api/stores/${co.store.id}/systems`, {
+        name: "Rack D (retrofitted)",
+        refrigerantId: "R-22",
+        fullCharge: { value: 180, unit: "lb" },
+        applianceType: "commercial-refrigeration",
+        automaticLeakDetection: false,
+        inServiceOn: "2019-05-01",
+      })
+    ).body.id;
+    // R-22 is ozone-depleting, 180 lb ≥ 50 lb: 40 CFR 82 subpart F, 20 % for commercial refrigeration [S:R1].
+    // 45/180 over the first calculation's 365 days [M] = 25 %.
+    await tech.post(`/api/systems/${id}/charge-additions`, {
+      addedOn: "2026-04-02",
+      amount: { value: 45, unit: "lb" },
+      reason: "Recharge",
+    });
+    const revised = await lead.post(`/api/systems/${id}/revisions`, {
+      effectiveFrom: "2026-05-12",
+      kind: "retrofit",
+      reason: "Converted to R-448A",
+      refrigerantId: "R-448A",
+    });
+    expect(revised.status).toBe(201);
+    // The retrofit fill counts no loss (82.157 [S:R1]); 40 lb 81 days later: 40/180 ÷ (81/365) × 100 = 100.137 %,
+    // now under 40 CFR 84 subpart C (R-448A, GWP > 53 [S:R4]).
+    await tech.post(`/api/systems/${id}/charge-additions`, {
+      addedOn: "2026-05-12",
+      amount: { value: 165, unit: "lb" },
+      reason: "Retrofit fill",
+      excluded: "retrofit",
+    });
+    await tech.post(`/api/systems/${id}/charge-additions`, {
+      addedOn: "2026-08-01",
+      amount: { value: 40, unit: "lb" },
+      reason: "Top-up",
+    });
+    const rows = Papa.parse<Record<string, string>>((await tech.get(`/api/systems/${id}/records.csv`)).text, {
+      header: true,
+    }).data;
+    expect(rows.map((r) => [r.date, r.leak_rate_percent, r.threshold_rule])).toEqual([
+      ["2026-04-02", "25", "40 CFR 82.157(c), commercial refrigeration"],
+      ["2026-05-12", "", ""],
+      ["2026-08-01", "100.14", "40 CFR 84.106, commercial refrigeration"],
+    ]);
+    const res = await tech.agent.get(`/api/systems/${id}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+    const text = (await pdfText(res.body as Buffer)).join(" ").replace(/\s+/g, " ");
+    expect(text).toMatch(/25\.0 % \(above\) 20 % \(40 CFR 82\.157\(c\), commercial refrigeration\)/);
+    expect(text).toMatch(/100\.1 % \(above\) 20 % \(40 CFR 84\.106, commercial refrigeration\)/);
   });
 });

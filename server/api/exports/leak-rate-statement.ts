@@ -1,7 +1,7 @@
 import { refrigerantCell } from "./records-csv";
 import type { SystemRecordsView } from "#core/contracts/compliance";
 import type { FindingDetail } from "#core/contracts/finding-actions";
-import { FINDING_EVENT_LABELS } from "#core/contracts/findings";
+import { COMPONENT_LABELS, FINDING_EVENT_LABELS } from "#core/contracts/findings";
 import { APPLIANCE_TYPE_NAMES } from "#core/contracts/systems";
 import { citedWithAcceptance } from "#core/domain/compliance/readings";
 import { formatCalendarDay as day, formatInZone } from "#core/domain/dates/format-in-zone";
@@ -19,6 +19,13 @@ const RULE = "#c9ccd3";
 const TABLE = { font: "regular", boldFont: "bold", size: 8.5, ink: INK, muted: MUTED, rule: RULE };
 
 type Doc = PDFKit.PDFDocument;
+
+/** Why a finding was dismissed, in words (the screen's dismiss form offers the same three). */
+const DISMISS_REASON_WORDS: Record<string, string> = {
+  "benign-source": "a benign source, not a leak",
+  "no-leak-found": "no leak found",
+  other: "other reason, see the note",
+};
 
 export interface StatementOptions {
   /** US Letter or A4: the company's paper setting (core/domain/reports/paper.ts). */
@@ -62,12 +69,12 @@ function table(doc: Doc, columns: PdfColumn[], rows: string[][]) {
   drawTable(doc, columns, rows, TABLE);
 }
 
-function systemSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string, cite: Cite) {
+function systemSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string, cite: Cite, format: NumberFormat) {
   heading(doc, "System");
   const gwp = r.system.refrigerant.gwp;
   para(
     doc,
-    `Refrigerant ${refrigerantCell(r.system.refrigerant)} (safety class ${r.system.refrigerant.safetyClass}${gwp ? `, GWP ${gwp.value} on ${gwp.basis}` : ""}); full charge ${mass(r.system.fullChargeKg)}.`,
+    `Refrigerant ${refrigerantCell(r.system.refrigerant)} (safety class ${r.system.refrigerant.safetyClass}${gwp ? `, GWP ${formatGrouped(gwp.value, format, 0)} on ${gwp.basis}` : ""}); full charge ${mass(r.system.fullChargeKg)}.`,
   );
   para(
     doc,
@@ -76,9 +83,16 @@ function systemSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => str
   if (r.co2e.known && r.co2e.tonnes !== null)
     para(
       doc,
-      `CO2-equivalent of the charge: ${r.co2e.tonnes.toFixed(2)} t (kg × GWP ${r.co2e.gwp} / 1000; GWP source ${cite(r.co2e.source)}).`,
+      `CO2-equivalent of the charge: ${formatGrouped(r.co2e.tonnes, format, 2)} t (kg × GWP ${r.co2e.gwp === null ? "unknown" : formatGrouped(r.co2e.gwp, format, 0)} / 1000; GWP source ${cite(r.co2e.source)}).`,
     );
   if (gwp) para(doc, `GWP basis: ${gwp.statement}.`);
+  // A retired system's statement says so: its records stay, and until when the rule asks for them
+  // (docs/decisions/0040-no-record-is-lost.md).
+  if (r.system.retired)
+    para(
+      doc,
+      `Retired on ${formatInZone(r.system.retired.at, r.store.timeZone, "date")}${r.system.retired.reason ? ` (${r.system.retired.reason})` : ""}; it owes no repair, test or inspection from then, and its records are kept${r.retention.keptUntil ? ` at least until ${day(r.retention.keptUntil)}` : ""}.`,
+    );
 }
 
 function profileSection(doc: Doc, r: SystemRecordsView, cite: Cite) {
@@ -108,7 +122,7 @@ function profileSection(doc: Doc, r: SystemRecordsView, cite: Cite) {
     );
 }
 
-function leakRateSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string) {
+function leakRateSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string, cite: Cite) {
   heading(doc, "Leak rate at every addition");
   const byId = new Map(r.additions.map((a) => [a.id, a]));
   const rows = r.leakRates.map((p) => [
@@ -117,7 +131,10 @@ function leakRateSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => s
     p.method === "annualizing" ? `${p.days} d` : `from ${day(p.windowStart)}`,
     mass(p.countedKg),
     `${p.percent.toFixed(1)} %${p.exceeds ? " (above)" : ""}`,
-    p.thresholdPercent === null ? "none" : `${p.thresholdPercent} %`,
+    // Each figure cites the part in force on its own date (after a retrofit, earlier figures keep theirs).
+    p.thresholdPercent === null
+      ? "none"
+      : `${p.thresholdPercent} %${p.thresholdSource ? ` (${cite(p.thresholdSource)})` : ""}`,
     day(p.repairDue),
   ]);
   if (rows.length)
@@ -125,12 +142,12 @@ function leakRateSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => s
       doc,
       [
         { title: "Date", share: 62 },
-        { title: "Added", share: 92 },
-        { title: r.profile.method === "annualizing" ? "Days" : "Window", share: 62 },
-        { title: "Counted", share: 92 },
-        { title: "Leak rate", share: 62, align: "right" },
-        { title: "Threshold", share: 52, align: "right" },
-        { title: "Repair due", share: 64 },
+        { title: "Added", share: 80 },
+        { title: r.profile.method === "annualizing" ? "Days" : "Window", share: 44 },
+        { title: "Counted", share: 80 },
+        { title: "Leak rate", share: 58, align: "right" },
+        { title: "Threshold (rule)", share: 104 },
+        { title: "Repair due", share: 58 },
       ],
       rows,
     );
@@ -246,7 +263,7 @@ function findingsSection(doc: Doc, findingList: FindingDetail[]) {
       .fontSize(9.5)
       .fillColor(INK)
       .text(
-        `${f.component ?? "Component not recorded"} – ${f.status}${f.dismissReason ? ` (${f.dismissReason})` : ""}`,
+        `${f.component ? COMPONENT_LABELS[f.component] : "Component not recorded"} – ${f.status}${f.dismissReason ? ` (${DISMISS_REASON_WORDS[f.dismissReason] ?? f.dismissReason})` : ""}`,
         MARGIN,
       );
     table(
@@ -352,14 +369,14 @@ export function leakRateStatementPdf(
   para(doc, `${r.system.name} · ${r.store.name}`, INK, 10);
   para(
     doc,
-    `${generated}; dates are on the store's calendar (${r.store.timeZone}); today there is ${day(r.today)}.`,
+    `${generated}; dates are on the store's calendar (${r.store.timeZone}); today is ${day(r.today)}.`,
     MUTED,
     8.5,
   );
 
-  systemSection(doc, r, mass, cite);
+  systemSection(doc, r, mass, cite, options.numberFormat ?? "1,234.5");
   profileSection(doc, r, cite);
-  if (r.profile.leakRateRules) leakRateSection(doc, r, mass);
+  if (r.profile.leakRateRules) leakRateSection(doc, r, mass, cite);
   else euRecordsSection(doc, r, mass);
   chronicSection(doc, r, mass, cite);
   voidedSection(doc, r, mass);

@@ -2,6 +2,7 @@ import { unparseCsv } from "#core/domain/reports/csv-cells";
 import type { SystemRecordsView } from "#core/contracts/compliance";
 import type { FindingDetail } from "#core/contracts/finding-actions";
 import { kgToPounds } from "#core/domain/units/mass";
+import { readableSource } from "#core/domain/compliance/citations";
 
 /**
  * One CSV of a system's records: every charge-added entry (voided ones too, with who voided them
@@ -29,6 +30,7 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[], m
       leak_rate_percent: p ? Number(p.percent.toFixed(2)) : "",
       method: p ? p.method : "",
       threshold_percent: p?.thresholdPercent ?? "",
+      threshold_rule: p?.thresholdSource ? readableSource(p.thresholdSource) : "",
       exceeds: p ? (p.exceeds ? "yes" : "no") : "",
       repair_due: p?.repairDue ?? "",
       finding_id: a.findingId ?? "",
@@ -57,6 +59,7 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[], m
         leak_rate_percent: "",
         method: "",
         threshold_percent: "",
+        threshold_rule: "",
         exceeds: "",
         repair_due: "",
         finding_id: f.id,
@@ -86,6 +89,7 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[], m
       leak_rate_percent: "",
       method: "",
       threshold_percent: "",
+      threshold_rule: "",
       exceeds: "",
       repair_due: "",
       finding_id: "",

@@ -1,3 +1,4 @@
+import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 import { and, asc, desc, eq, inArray } from "drizzle-orm";
 import type { z } from "zod";
 import type { AppContext } from "../../context";
@@ -273,9 +274,13 @@ export async function addFindingEvent(
     if (!t.ok) throw conflict(t.message);
     const last = events.at(-1);
     if (last && compareDates(on, last.on) < 0) {
-      throw badRequest(`Please check: on ${on} is before the finding's previous step (${last.on}).`, {
-        on: `must not be before ${last.on}, the previous step`,
-      });
+      // Days written as every screen writes them: the form shows this under its date field.
+      throw badRequest(
+        `Please check: ${formatCalendarDay(on)} is before the finding's previous step (${formatCalendarDay(last.on)}).`,
+        {
+          on: `must not be before ${formatCalendarDay(last.on)}, the day of the previous step`,
+        },
+      );
     }
     if (input.action === "confirm" && !input.component && !row.component) {
       throw badRequest("Please check: component is required to confirm a leak (where on the system it is).", {

@@ -226,7 +226,7 @@ describe("findings: lifecycle and its role rules", () => {
     expect(future.status).toBe(400);
     expect(future.body.error.fields.on).toMatch(/must not be after today/);
     const before = await tech.post(`/api/findings/${f.id}/events`, { action: "confirm", on: "2026-01-09" });
-    expect(before.body.error.fields.on).toBe("must not be before 2026-01-10, the previous step");
+    expect(before.body.error.fields.on).toBe("must not be before 10 Jan 2026, the day of the previous step");
     const notADay = await tech.post(`/api/findings/${f.id}/events`, { action: "confirm", on: "2026-02-30" });
     expect(notADay.body.error.fields.on).toMatch(/does not exist/);
     expect(

@@ -1,4 +1,5 @@
 import { Link, useParams } from "react-router";
+import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 import { localDateOf } from "#core/domain/dates/time-zone";
 import { can } from "#core/domain/roles";
 import { PageHeader } from "../../components/ui/page-header";
@@ -27,7 +28,7 @@ export function Component() {
         title={`Finding: ${f.systemName ?? "no system"}`}
         description={
           <>
-            {f.storeName} · found {f.events[0]?.on} by {f.foundBy}
+            {f.storeName} · found {formatCalendarDay(f.events[0]?.on ?? null)} by {f.foundBy}
             {f.systemId ? (
               <>
                 {" "}

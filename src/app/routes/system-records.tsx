@@ -36,7 +36,7 @@ export function Component() {
     <>
       <PageHeader
         title={r.system.name}
-        description={`${r.store.name} · records on the store's calendar (${r.store.timeZone}); today is ${r.today}.`}
+        description={`${r.store.name} · records on the store's calendar (${r.store.timeZone}); today is ${formatCalendarDay(r.today)}.`}
       />
       <div className="space-y-8">
         <AcceptedReadings>
@@ -50,7 +50,7 @@ export function Component() {
               .filter((f) => f.status !== "dismissed")
               .map((f) => ({
                 id: f.id,
-                label: `${f.events[0]?.on ?? ""} ${f.component ? COMPONENT_LABELS[f.component] : "leak"} (${f.status})`,
+                label: `${formatCalendarDay(f.events[0]?.on ?? null)} ${f.component ? COMPONENT_LABELS[f.component] : "leak"} (${f.status})`,
               }))}
           />
         </AcceptedReadings>
@@ -65,8 +65,8 @@ export function Component() {
               {list.map((f) => (
                 <li key={f.id}>
                   <Link className="text-accent underline" to={`/findings/${f.id}`}>
-                    {f.events[0]?.on} · {f.component ? COMPONENT_LABELS[f.component] : "component not yet known"} ·{" "}
-                    {f.status}
+                    {formatCalendarDay(f.events[0]?.on ?? null)} ·{" "}
+                    {f.component ? COMPONENT_LABELS[f.component] : "component not yet known"} · {f.status}
                   </Link>
                   {f.deadlines[0] ? ` · due ${formatCalendarDay(f.deadlines[0].dueOn)}` : ""}
                 </li>
@@ -77,6 +77,8 @@ export function Component() {
             <NewFindingForm
               storeId={r.store.id}
               systemId={r.system.id}
+              today={r.today}
+              timeZone={r.store.timeZone}
               onCreated={(id) => navigate(`/findings/${id}`)}
             />
           ) : null}

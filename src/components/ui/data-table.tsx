@@ -135,8 +135,15 @@ export function DataTable<Row extends RowData>({
           Showing {shown.length} of {rows.length}.
         </p>
       ) : null}
-      {/* A scrolling region must be reachable by keyboard to be scrolled (WCAG 2.1.1). */}
-      <div className="rounded-md bg-surface edge md:overflow-x-auto" role="region" aria-label={caption} tabIndex={0}>
+      {/* A scrolling region must be reachable by keyboard to be scrolled (WCAG 2.1.1). On a phone the rows are
+          cards and the header row is for screen readers only: the box holds it (relative, overflow hidden), or its
+          full-width row would widen the page and a phone browser would zoom out to show it. */}
+      <div
+        className="rounded-md bg-surface edge max-md:relative max-md:overflow-hidden md:overflow-x-auto"
+        role="region"
+        aria-label={caption}
+        tabIndex={0}
+      >
         <table className="w-full border-collapse text-left max-md:block" role="table">
           <caption className="sr-only">{caption}</caption>
           <thead className="max-md:sr-only">

@@ -34,33 +34,38 @@ export function Plot({
 }) {
   const [ref, width] = useBoxWidth();
   return (
-    <figure className="space-y-1 rounded-md bg-surface p-3 edge" aria-label={title}>
+    // min-w-0: a grid item is at least as wide as its content by default, so a chart drawn wide once (a
+    // phone's first layout, a rotated tablet) would hold its box wide and never be measured narrower.
+    <figure className="min-w-0 space-y-1 rounded-md bg-surface p-3 edge" aria-label={title}>
       <figcaption className="font-bold">{title}</figcaption>
       <p className="text-sm text-muted">{summary}</p>
       <div ref={ref} aria-hidden="true" data-testid="plot">
         {children(width)}
       </div>
-      <table className="sr-only">
-        <caption>{title}</caption>
-        <thead>
-          <tr>
-            {table.head.map((h) => (
-              <th key={h} scope="col">
-                {h}
-              </th>
-            ))}
-          </tr>
-        </thead>
-        <tbody>
-          {table.rows.map((row, i) => (
-            <tr key={i}>
-              {row.map((c, j) => (
-                <td key={j}>{c}</td>
+      {/* The data for screen readers. A table does not shrink to sr-only's 1 px: the box around it does. */}
+      <div className="sr-only">
+        <table>
+          <caption>{title}</caption>
+          <thead>
+            <tr>
+              {table.head.map((h) => (
+                <th key={h} scope="col">
+                  {h}
+                </th>
               ))}
             </tr>
-          ))}
-        </tbody>
-      </table>
+          </thead>
+          <tbody>
+            {table.rows.map((row, i) => (
+              <tr key={i}>
+                {row.map((c, j) => (
+                  <td key={j}>{c}</td>
+                ))}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
     </figure>
   );
 }

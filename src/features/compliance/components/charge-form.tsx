@@ -8,6 +8,8 @@ import { useRecordCharge } from "../api/record-charge";
 import type { NumberFormat } from "#core/domain/numbers/number-format";
 import { amountHint, readAmount } from "../model/amount-entry";
 import type { MassUnit } from "../model/figures";
+import { EXCLUSION_NAMES } from "../model/exclusions";
+import { EXCLUSIONS } from "#core/contracts/compliance";
 
 /**
  * Record refrigerant put into a system; or, with `corrects`, a correction that voids that entry.
@@ -27,7 +29,7 @@ export function ChargeForm({
   unit: MassUnit;
   numberFormat: NumberFormat;
   findings: { id: string; label: string }[];
-  corrects?: { id: string; addedOn: string };
+  corrects?: { id: string; addedOn: string; excluded?: (typeof EXCLUSIONS)[number] | null };
   onDone?: () => void;
 }) {
   const [addedOn, setAddedOn] = useState(corrects?.addedOn ?? today);
@@ -35,6 +37,7 @@ export function ChargeForm({
   const [amountUnit, setAmountUnit] = useState<MassUnit>(unit);
   const [reason, setReason] = useState("");
   const [findingId, setFindingId] = useState("");
+  const [excluded, setExcluded] = useState<(typeof EXCLUSIONS)[number] | "">(corrects?.excluded ?? "");
   const [voidReason, setVoidReason] = useState("");
   const [amountProblem, setAmountProblem] = useState<string | null>(null);
   const read = readAmount(amount, amountUnit, numberFormat);
@@ -57,6 +60,7 @@ export function ChargeForm({
       amount: { value: read.value, unit: amountUnit },
       reason,
       findingId: findingId || null,
+      excluded: excluded || null,
     };
     if (corrects) mutation.mutate({ kind: "correct", additionId: corrects.id, input: { ...input, voidReason } });
     else mutation.mutate({ kind: "add", systemId, input });
@@ -122,6 +126,19 @@ export function ChargeForm({
         onChange={(e) => setFindingId(e.target.value)}
         options={[{ value: "", label: "None" }, ...findings.map((f) => ({ value: f.id, label: f.label }))]}
         error={fields.findingId}
+      />
+      <Select
+        label="Leak-rate calculation"
+        value={excluded}
+        onChange={(e) => setExcluded(e.target.value as typeof excluded)}
+        // 40 CFR 82.157 / 84.106: no leak rate after a retrofit, a new installation or a seasonal
+        // variance (docs/reference/standards.md §1 [S:R1]); such a fill is recorded but counts no loss.
+        hint="Refrigerant put in for one of these is recorded but is not a leak"
+        options={[
+          { value: "", label: "Counted: refrigerant lost to a leak" },
+          ...EXCLUSIONS.map((x) => ({ value: x, label: `Not counted: ${EXCLUSION_NAMES[x]}` })),
+        ]}
+        error={fields.excluded}
       />
       {corrects ? (
         <TextField

@@ -82,7 +82,7 @@ export function ChronicSection({
             {y.chronic
               ? y.filed
                 ? ` — chronic leaker; report filed on ${formatCalendarDay(y.filed.on)} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}`
-                : ` — chronic leaker; report due ${y.reportDue}`
+                : ` — chronic leaker; report due ${formatCalendarDay(y.reportDue)}`
               : ""}
             {canFile && fileable(y) ? <FileReportForm systemId={r.system.id} year={y.year} today={r.today} /> : null}
           </li>

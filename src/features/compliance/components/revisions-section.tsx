@@ -14,6 +14,7 @@ import { formatQuantity, type NumberFormat } from "#core/domain/numbers/number-f
 import { amountHint, readAmount } from "../model/amount-entry";
 import { formatMass, type MassUnit } from "../model/figures";
 import { kgToPounds } from "#core/domain/units/mass";
+import { REFRIGERANTS } from "#core/domain/refrigerants/catalogue";
 
 const KIND_NAMES: Record<string, string> = {
   first: "First values",
@@ -52,7 +53,7 @@ export function RevisionsSection({
           rows={revisions.data.revisions}
           rowKey={(x) => x.id}
           columns={[
-            { header: "From", cell: (x) => x.effectiveFrom },
+            { header: "From", cell: (x) => formatCalendarDay(x.effectiveFrom) },
             { header: "Kind", cell: (x) => KIND_NAMES[x.kind] ?? x.kind },
             { header: "Refrigerant", cell: (x) => x.refrigerantName },
             { header: "Full charge", cell: (x) => formatMass(x.fullChargeKg, unit, numberFormat) },
@@ -130,7 +131,15 @@ function RevisionForm({ r, unit, numberFormat }: { r: SystemRecordsView; unit: M
         value={refrigerantId}
         onChange={(e) => setRefrigerantId(e.target.value)}
         error={fields.refrigerantId}
+        // The catalogue's designations are offered as one types; a company's own refrigerant keeps its id.
+        list="revision-refrigerants"
+        hint="Its designation, e.g. R-448A"
       />
+      <datalist id="revision-refrigerants">
+        {REFRIGERANTS.map((x) => (
+          <option key={x.id} value={x.id} />
+        ))}
+      </datalist>
       <TextField
         label={`Full charge (${unit})`}
         inputMode="decimal"

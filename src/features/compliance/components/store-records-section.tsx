@@ -69,7 +69,7 @@ export function StoreRecordsSection({ storeId, numberFormat }: { storeId: string
                       {f.systemName ?? "no system"}
                     </Link>{" "}
                     · {f.status}
-                    {f.deadline ? ` · due ${f.deadline}` : ""}
+                    {f.deadline ? ` · due ${formatCalendarDay(f.deadline)}` : ""}
                   </li>
                 ))}
               </ul>

@@ -66,7 +66,7 @@ describe("system plots", () => {
     expect(rows).toEqual(["DateLeak rate (% per year)Threshold (% per year)", "15 Jan 20264.020", "1 Mar 202681.120"]);
     const charge = screen.getByRole("figure", { name: "Charge added over time" });
     // in the reader's unit: 4 lb then 10 lb, 14 lb in all (1 lb = 0.45359237 kg, NIST SP 811)
-    expect(within(charge).getByText(/14\.0 lb added over 2 days/)).toBeInTheDocument();
+    expect(within(charge).getByText(/14\.0 lb added on 2 days/)).toBeInTheDocument();
     expect(screen.queryByRole("figure", { name: /leak checks/ })).toBeNull();
   });
 
@@ -76,7 +76,7 @@ describe("system plots", () => {
     expect(screen.queryByRole("figure", { name: "Leak rate at each addition" })).toBeNull();
     const plot = screen.getByRole("figure", { name: "Charge added and leak checks over time" });
     expect(within(plot).getByText(/1 leak check, 1 finding a leak/)).toBeInTheDocument();
-    expect(within(plot).getByText(/^6,35 kg added over 2 days/)).toBeInTheDocument();
+    expect(within(plot).getByText(/^6,35 kg added on 2 days/)).toBeInTheDocument();
     expect(within(plot).getByRole("cell", { name: "6,35" })).toBeInTheDocument();
     expect(within(plot).getByRole("cell", { name: "leak found" })).toBeInTheDocument();
   });

@@ -98,7 +98,7 @@ function ChargePlot({
   return (
     <Plot
       title={title}
-      summary={`${fixed(total)} ${unit} added over ${charge.length} day${charge.length === 1 ? "" : "s"} (bars: each day's addition; line: running total)${withChecks ? `; ${checks.length} leak check${checks.length === 1 ? "" : "s"}, ${found.length} finding a leak (marks on the date axis)` : ""}.`}
+      summary={`${fixed(total)} ${unit} added on ${charge.length} day${charge.length === 1 ? "" : "s"} (bars: each day's addition; line: running total)${withChecks ? `; ${checks.length} leak check${checks.length === 1 ? "" : "s"}, ${found.length} finding a leak (marks on the date axis)` : ""}.`}
       table={{
         head: ["Date", `Added (${unit})`, `Running total (${unit})`, ...(withChecks ? ["Leak check"] : [])],
         // Oldest first, additions and checks interleaved by their ISO day; shown as every screen writes days.

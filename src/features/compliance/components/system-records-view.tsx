@@ -1,5 +1,5 @@
 import { useState } from "react";
-import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
+import { formatCalendarDay, formatInZone } from "#core/domain/dates/format-in-zone";
 import { Link } from "react-router";
 import type { SystemRecordsView } from "#core/contracts/compliance";
 import { APPLIANCE_TYPE_NAMES } from "#core/contracts/systems";
@@ -12,6 +12,7 @@ import { useRecordCharge } from "../api/record-charge";
 import { formatGrouped, formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
 import { daysInWords, formatMass, formatPercent, STATE_LABELS, type MassUnit } from "../model/figures";
 import { ChargeForm } from "./charge-form";
+import { EXCLUSION_NAMES } from "../model/exclusions";
 import { ChronicSection } from "./chronic-section";
 import { SystemPlots } from "./system-plots";
 import { RevisionsSection } from "./revisions-section";
@@ -91,7 +92,7 @@ export function SystemRecords({
         <Fact label="Latest leak rate">
           {r.latest ? (
             <span className={r.latest.exceeds ? "text-danger" : ""}>
-              {percent(r.latest.percent)} on {r.latest.date}
+              {percent(r.latest.percent)} on {formatCalendarDay(r.latest.date)}
             </span>
           ) : (
             "No additions yet"
@@ -144,9 +145,9 @@ export function SystemRecords({
         {r.system.retired ? (
           <p>
             <span className="font-bold text-ink">Retired: </span>
-            {r.system.retired.at.slice(0, 10)}
+            {formatInZone(r.system.retired.at, r.store.timeZone, "date")}
             {r.system.retired.reason ? ` (${r.system.retired.reason})` : ""}. Its records stay as they are
-            {r.retention.keptUntil ? ` and are kept at least until ${r.retention.keptUntil}` : ""}.
+            {r.retention.keptUntil ? ` and are kept at least until ${formatCalendarDay(r.retention.keptUntil)}` : ""}.
           </p>
         ) : null}
         {r.leakCheck ? (
@@ -216,14 +217,17 @@ export function SystemRecords({
             rows={r.leakRates}
             rowKey={(p) => p.date}
             columns={[
-              { header: "Date", cell: (p) => p.date, sortValue: (p) => p.date },
+              { header: "Date", cell: (p) => formatCalendarDay(p.date), sortValue: (p) => p.date },
               {
                 header: "Added",
                 cell: (p) => mass(p.additionIds.reduce((s, id) => s + (byId.get(id)?.amountKg ?? 0), 0)),
               },
               {
                 header: p0(r),
-                cell: (p) => (p.method === "annualizing" ? `${p.days} days` : `${p.windowStart} to ${p.date}`),
+                cell: (p) =>
+                  p.method === "annualizing"
+                    ? `${p.days} days`
+                    : `${formatCalendarDay(p.windowStart)} to ${formatCalendarDay(p.date)}`,
               },
               { header: "Counted", cell: (p) => mass(p.countedKg) },
               {
@@ -237,8 +241,24 @@ export function SystemRecords({
                   </span>
                 ),
               },
-              { header: "Threshold", cell: (p) => (p.thresholdPercent === null ? "none" : `${p.thresholdPercent} %`) },
-              { header: "Repair due", cell: (p) => p.repairDue ?? "" },
+              {
+                header: "Threshold",
+                // Each figure cites the part in force on its own date: after a retrofit, earlier figures keep theirs.
+                cell: (p) =>
+                  p.thresholdPercent === null ? (
+                    "none"
+                  ) : (
+                    <>
+                      {p.thresholdPercent} %
+                      {p.thresholdSource ? (
+                        <span className="block text-sm text-muted">
+                          <SourceText source={p.thresholdSource} />
+                        </span>
+                      ) : null}
+                    </>
+                  ),
+              },
+              { header: "Repair due", cell: (p) => (p.repairDue ? formatCalendarDay(p.repairDue) : "") },
             ]}
           />
         )}
@@ -280,6 +300,7 @@ export function SystemRecords({
                   <br />
                   <span className="text-sm text-muted">
                     entered {x.enteredValue} {x.enteredUnit}
+                    {x.excluded ? `; not counted: ${EXCLUSION_NAMES[x.excluded]}` : ""}
                   </span>
                 </>
               ),
@@ -315,7 +336,7 @@ export function SystemRecords({
               cell: (x) =>
                 x.voided ? (
                   <span className="text-sm">
-                    Voided {x.voided.at.slice(0, 10)} by {x.voided.by}: {x.voided.reason}
+                    Voided {formatInZone(x.voided.at, r.store.timeZone, "date")} by {x.voided.by}: {x.voided.reason}
                     {x.voided.byEntryId ? " (corrected)" : ""}
                   </span>
                 ) : (
@@ -349,7 +370,7 @@ export function SystemRecords({
                   unit={unit}
                   numberFormat={numberFormat}
                   findings={findings}
-                  corrects={{ id: x.id, addedOn: x.addedOn }}
+                  corrects={{ id: x.id, addedOn: x.addedOn, excluded: x.excluded }}
                   onDone={() => setEditing(null)}
                 />
               ) : (

@@ -6,17 +6,28 @@ import { Select } from "../../../components/ui/select";
 import { TextField } from "../../../components/ui/text-field";
 import { formErrorMessage, serverFieldErrors } from "../../../lib/form-errors";
 import { useChangeFinding } from "../api/change-finding";
+import { foundAtFor } from "../model/found-at";
 
-/** Record a finding by hand on a system (the Walk screen and the field map make theirs from a spot). */
+/**
+ * Record a finding by hand on a system (the Walk screen and the field map make theirs from a spot).
+ * A leak found on an earlier day (typed up from a service ticket) keeps that day, so its later
+ * steps and the charge added for it can be dated as they happened.
+ */
 export function NewFindingForm({
   storeId,
   systemId,
+  today,
+  timeZone,
   onCreated,
 }: {
   storeId: string;
   systemId: string;
+  /** Today on the store's calendar, and the store's zone: the found day is read on that calendar. */
+  today: string;
+  timeZone: string;
   onCreated: (id: string) => void;
 }) {
+  const [foundOn, setFoundOn] = useState(today);
   const [component, setComponent] = useState("");
   const [note, setNote] = useState("");
   const m = useChangeFinding({ onDone: onCreated });
@@ -32,6 +43,7 @@ export function NewFindingForm({
         note,
         component: (component || null) as (typeof FINDING_COMPONENTS)[number] | null,
         clientId: crypto.randomUUID(),
+        foundAt: foundAtFor(foundOn, today, timeZone),
       },
     });
   };
@@ -43,6 +55,15 @@ export function NewFindingForm({
           <Alert tone="error">{message}</Alert>
         </div>
       ) : null}
+      <TextField
+        label="Found on"
+        type="date"
+        max={today}
+        value={foundOn}
+        onChange={(e) => setFoundOn(e.target.value)}
+        error={fields.foundAt}
+        hint="On the store's calendar"
+      />
       <Select
         label="Component (if known)"
         value={component}
