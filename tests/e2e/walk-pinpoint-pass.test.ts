@@ -70,7 +70,7 @@ it("on a phone with touch: level readings along a case advise stopping its fans;
   await expect(dialog.textContent()).resolves.toMatch(/product warms up/);
   await expect(dialog.textContent()).resolves.toMatch(/local codes/);
   await dialog.getByRole("button", { name: "5 minutes more" }).tap();
-  await expect(dialog.getByTestId("pass-minutes").textContent()).resolves.toBe("25 min");
+  await expect.poll(() => dialog.getByTestId("pass-minutes").textContent()).toBe("25 min");
   await page.screenshot({ path: path.join(SCREENS, "walk-pinpoint-start.png") });
   await dialog.getByRole("button", { name: "Start still-air pass" }).tap();
   const banner = page.getByTestId("pass-banner");
