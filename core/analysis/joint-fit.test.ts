@@ -67,9 +67,10 @@ describe("the joint fit of a first pass and a still-air pass", () => {
       const top = joint.candidates[0];
       expect(errorOf(top, leakX)).toBeLessThan(0.5);
       expect(errorOf(top, leakX)).toBeLessThan(top.radius);
-      // as tight as the locator reports any spot (its radius floor), never wider than the first pass's
-      expect(top.radius).toBe(LOCATOR_SETTINGS.placement.minRadiusM);
-      expect(top.radius).toBeLessThanOrEqual(firstRadius);
+      // tighter than the first pass's wide spot that covers the leak ("somewhere in this case"); the radius
+      // follows how far the tempered posterior spreads (posterior-radius.ts), so it is not the floor here
+      expect(top.radius).toBeLessThan(firstRadius);
+      expect(top.radius).toBeGreaterThanOrEqual(LOCATOR_SETTINGS.placement.minRadiusM);
       // the first pass's readings are still the fans-running evidence they were, and the pass is said to follow
       expect(joint.diagnostics.find((d) => d.kind === "fans-mixing")).toMatchObject({ stilledByPass: true });
       expect(first.diagnostics.find((d) => d.kind === "fans-mixing")).not.toHaveProperty("stilledByPass");

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { checkDelay } from "./delay-check";
+import { checkDelay, DELAY_CHECK_SETTINGS } from "./delay-check";
 
 // A technician walks a 20 m aisle east at 1 m/s, turns and walks back, a tap every half second; a leak at
 // x = 10 m gives 1 + 20·exp(−|x − 10|) ppm. Each reading is the air drawn in `trueShift` seconds before
@@ -32,6 +32,19 @@ describe("delay check", () => {
     const c = checkDelay(sweep(6), 2, 1, undefined, undefined);
     expect(c.estimatedS).toBe(6);
     expect(c.supported).toBe(true);
+  });
+
+  it("finds a delay under 0.4 of the stated one but does not take it as supported", () => {
+    // 1 s against a stated 8 s: lined up as clearly as above, but a detector eight times faster than
+    // stated is more likely a plume read on one pass (0.4 x 8 = 3.2 s > 1 s)
+    const c = checkDelay(sweep(1), 8, 1, undefined, undefined);
+    expect(c.estimatedS).toBe(1);
+    expect(c.supported).toBe(false);
+    // every other rule holds: without the share it would be taken
+    const anyShare = { ...DELAY_CHECK_SETTINGS, minShareOfStated: 0 };
+    expect(checkDelay(sweep(1), 8, 1, undefined, undefined, anyShare).supported).toBe(true);
+    // the same readings against a stated 2 s: 1 s is half of it, and taken
+    expect(checkDelay(sweep(1), 2.4, 1, undefined, undefined)).toMatchObject({ estimatedS: 1, supported: true });
   });
 
   it("says nothing when no reading is raised or no spot is visited twice", () => {

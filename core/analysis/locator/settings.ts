@@ -85,9 +85,16 @@ export interface PlacementSettings {
   /** Local refinement radius, m, and the tempering of Δχ² (times the residual variance). */
   readonly refineRadiusM: number;
   readonly refineInflation: number;
-  /** Radius = max(minRadiusM, radiusScale · misfit-contour radius), calibrated for 80–95 % coverage. */
+  /**
+   * Radius = max(minRadiusM, radiusScale · the radius holding `radiusShare` of the posterior tempered by
+   * `radiusInflation` times the residual variance, within `radiusReachM`), calibrated for 80–95 % coverage
+   * (docs/locator/benchmark-baseline.md, "Fourth round").
+   */
   readonly minRadiusM: number;
   readonly radiusScale: number;
+  readonly radiusInflation: number;
+  readonly radiusShare: number;
+  readonly radiusReachM: number;
 }
 
 export interface ReportSettings {
@@ -142,7 +149,15 @@ export const LOCATOR_SETTINGS: LocatorSettings = {
     riskPointLogOdds: 3,
     maxReachM: 4,
   },
-  placement: { refineRadiusM: 1.5, refineInflation: 200, minRadiusM: 3.25, radiusScale: 3 },
+  placement: {
+    refineRadiusM: 1.5,
+    refineInflation: 200,
+    minRadiusM: 2,
+    radiusScale: 1.75,
+    radiusInflation: 25,
+    radiusShare: 0.5,
+    radiusReachM: 8,
+  },
   report: {
     coverageGapM: 3,
     airChangesPerH: 2,

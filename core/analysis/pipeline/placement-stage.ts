@@ -4,6 +4,7 @@ import { cellCentre, cellIndexOf, cellsInside, type PlanGrid } from "../grid/pla
 import { oneSidedPass } from "../locator/diagnostics";
 import type { FoundSource } from "../locator/greedy-sources";
 import { refineCell } from "../locator/local-refine";
+import { posteriorRadius } from "../locator/posterior-radius";
 import { nearestFixture, nearestRiskPoint } from "../locator/nearest-features";
 import { kernelColumn } from "../locator/reading-fields";
 import type { PlacementSettings, ReportSettings, SourceSettings } from "../locator/settings";
@@ -166,7 +167,18 @@ export function placementStage(
     if (rank === 0) topOneSided = side.oneSided;
     const radius = Math.max(
       p.minRadiusM,
-      p.radiusScale * misfitRadius(s.surface, s.cell, 5.99 * s2, grid.width, grid.cellSize),
+      p.radiusScale *
+        posteriorRadius(
+          s.surface,
+          allowed,
+          s.cell,
+          grid.width,
+          grid.cellSize,
+          p.radiusReachM,
+          p.radiusInflation * s2,
+          prior,
+          p.radiusShare,
+        ),
     );
     const fixture = nearestFixture(plan.fixtures, x, y0);
     const riskPoint = nearestRiskPoint(plan.riskPoints, x, y0);
@@ -197,26 +209,4 @@ export function placementStage(
     });
   });
   return { candidates, topOneSided };
-}
-
-/** √(area/π) of the cells near `c` whose Δχ² is within `tolerance` of the value at c. */
-export function misfitRadius(
-  delta: Float64Array,
-  c: number,
-  tolerance: number,
-  width: number,
-  cellSize: number,
-): number {
-  const reach = Math.ceil(6 / cellSize);
-  const ci = c % width;
-  const cj = (c - ci) / width;
-  const height = delta.length / width;
-  const floor = delta[c] - tolerance;
-  let count = 0;
-  for (let j = Math.max(0, cj - reach); j <= Math.min(height - 1, cj + reach); j++) {
-    for (let i = Math.max(0, ci - reach); i <= Math.min(width - 1, ci + reach); i++) {
-      if (delta[j * width + i] >= floor && delta[j * width + i] > 0) count++;
-    }
-  }
-  return Math.sqrt((count * cellSize * cellSize) / Math.PI);
 }
