@@ -85,7 +85,7 @@ describe("under EU F-gas rules the cautions name no US rule", () => {
   // they were read in (standards.md §5 [S:S2], the OSHA PEL preamble of 1989): a source, not a rule.
   const US_WORDS = /EPA|Section 608|OSHA|29 CFR|40 CFR|IMC|ASHRAE 15|CSA B52/;
   const US_RULES = /EPA|Section 608|29 CFR|40 CFR|IMC|ASHRAE 15|CSA B52/;
-  const words = (list: { text: string; source: string }[]) => {
+  const words = (list: { id: string; text: string; source: string }[]) => {
     for (const c of list) expect(readableSource(c.source), c.id).not.toMatch(US_RULES);
     return list.map((c) => c.text).join("\n");
   };

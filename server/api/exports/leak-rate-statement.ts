@@ -1,11 +1,11 @@
 import { refrigerantCell } from "./records-csv";
 import type { SystemRecordsView } from "#core/contracts/compliance";
 import type { FindingDetail } from "#core/contracts/finding-actions";
-import { FINDING_EVENT_LABELS } from "#core/contracts/findings";
+import { COMPONENT_LABELS, FINDING_EVENT_LABELS, type FINDING_COMPONENTS } from "#core/contracts/findings";
 import { APPLIANCE_TYPE_NAMES } from "#core/contracts/systems";
 import { citedWithAcceptance } from "#core/domain/compliance/readings";
 import { formatCalendarDay as day, formatInZone } from "#core/domain/dates/format-in-zone";
-import { formatGrouped, type NumberFormat } from "#core/domain/numbers/number-format";
+import { formatGrouped, formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
 import type { Paper } from "#core/domain/reports/paper";
 import { kgToPounds } from "#core/domain/units/mass";
 import type { MassPreference } from "#core/domain/units/format-units";
@@ -62,7 +62,13 @@ function table(doc: Doc, columns: PdfColumn[], rows: string[][]) {
   drawTable(doc, columns, rows, TABLE);
 }
 
-function systemSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string, cite: Cite) {
+function systemSection(
+  doc: Doc,
+  r: SystemRecordsView,
+  mass: (kg: number) => string,
+  cite: Cite,
+  numberFormat: NumberFormat = "1,234.5",
+) {
   heading(doc, "System");
   const gwp = r.system.refrigerant.gwp;
   para(
@@ -76,7 +82,7 @@ function systemSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => str
   if (r.co2e.known && r.co2e.tonnes !== null)
     para(
       doc,
-      `CO2-equivalent of the charge: ${r.co2e.tonnes.toFixed(2)} t (kg × GWP ${r.co2e.gwp} / 1000; GWP source ${cite(r.co2e.source)}).`,
+      `CO2-equivalent of the charge: ${formatQuantity(r.co2e.tonnes, numberFormat)} t (kg × GWP ${r.co2e.gwp} / 1000; GWP source ${cite(r.co2e.source)}).`,
     );
   if (gwp) para(doc, `GWP basis: ${gwp.statement}.`);
 }
@@ -104,7 +110,7 @@ function profileSection(doc: Doc, r: SystemRecordsView, cite: Cite) {
   if (r.nextInspection)
     para(
       doc,
-      `Next inspection due ${day(r.nextInspection.dueOn)} (${r.nextInspection.reason}; ${cite(r.nextInspection.source)}).`,
+      `${r.profile.wording === "eu" ? "Next leak check" : "Next inspection"} due ${day(r.nextInspection.dueOn)} (${r.nextInspection.reason}; ${cite(r.nextInspection.source)}).`,
     );
 }
 
@@ -246,7 +252,7 @@ function findingsSection(doc: Doc, findingList: FindingDetail[]) {
       .fontSize(9.5)
       .fillColor(INK)
       .text(
-        `${f.component ?? "Component not recorded"} – ${f.status}${f.dismissReason ? ` (${f.dismissReason})` : ""}`,
+        `${f.component ? (COMPONENT_LABELS[f.component as (typeof FINDING_COMPONENTS)[number]] ?? f.component) : "Component not recorded"} – ${f.status}${f.dismissReason ? ` (${f.dismissReason})` : ""}`,
         MARGIN,
       );
     table(
@@ -357,7 +363,7 @@ export function leakRateStatementPdf(
     8.5,
   );
 
-  systemSection(doc, r, mass, cite);
+  systemSection(doc, r, mass, cite, options.numberFormat);
   profileSection(doc, r, cite);
   if (r.profile.leakRateRules) leakRateSection(doc, r, mass);
   else euRecordsSection(doc, r, mass);

@@ -49,6 +49,8 @@ export function StoreRecordsSection({ storeId, numberFormat }: { storeId: string
                     <span className="font-bold">{formatCalendarDay(d.dueOn)}</span> (
                     {STATE_LABELS[d.state].toLowerCase()}, {daysInWords(d.daysLeft)}):{" "}
                     <Link className="text-accent underline" to={d.link}>
+                      {/* A store has several systems: each item says whose it is. */}
+                      {d.systemName ? `${d.systemName}: ` : ""}
                       {d.what}
                     </Link>
                   </li>
