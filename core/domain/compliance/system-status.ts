@@ -290,7 +290,8 @@ export function systemStatus(
     co2e,
     leakCheck,
     automaticLeakDetection: ald,
-    nextInspection,
+    // A retired system owes no inspection (docs/decisions/0040): no next date to show either.
+    nextInspection: rec.retiredOn ? null : nextInspection,
     due: (rec.retiredOn ? due.filter((d) => stillDueWhenRetired(d, rec.retiredOn!)) : due).sort((x, y) =>
       compareDates(x.dueOn, y.dueOn),
     ),

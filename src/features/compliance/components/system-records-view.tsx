@@ -150,9 +150,9 @@ export function SystemRecords({
         {r.system.retired ? (
           <p>
             <span className="font-bold text-ink">Retired: </span>
-            {r.system.retired.at.slice(0, 10)}
+            {formatCalendarDay(r.system.retired.at.slice(0, 10))}
             {r.system.retired.reason ? ` (${r.system.retired.reason})` : ""}. Its records stay as they are
-            {r.retention.keptUntil ? ` and are kept at least until ${r.retention.keptUntil}` : ""}.
+            {r.retention.keptUntil ? ` and are kept at least until ${formatCalendarDay(r.retention.keptUntil)}` : ""}.
           </p>
         ) : null}
         {r.leakCheck ? (
