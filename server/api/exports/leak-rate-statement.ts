@@ -85,6 +85,12 @@ function systemSection(
       `CO2-equivalent of the charge: ${formatQuantity(r.co2e.tonnes, numberFormat)} t (kg × GWP ${r.co2e.gwp} / 1000; GWP source ${cite(r.co2e.source)}).`,
     );
   if (gwp) para(doc, `GWP basis: ${gwp.statement}.`);
+  // A retired system's statement says so: out of service, its records kept (docs/decisions/0040).
+  if (r.system.retired)
+    para(
+      doc,
+      `Retired on ${day(r.system.retired.at.slice(0, 10))}${r.system.retired.reason ? ` (${r.system.retired.reason})` : ""}: no leak check or repair falls due any more; its records are kept${r.retention.keptUntil ? ` at least until ${day(r.retention.keptUntil)}` : ""}.`,
+    );
 }
 
 function profileSection(doc: Doc, r: SystemRecordsView, cite: Cite) {
