@@ -321,7 +321,7 @@ export function SystemRecords({
               cell: (x) =>
                 x.voided ? (
                   <span className="text-sm">
-                    Voided {x.voided.at.slice(0, 10)} by {x.voided.by}: {x.voided.reason}
+                    Voided {formatCalendarDay(x.voided.at.slice(0, 10))} by {x.voided.by}: {x.voided.reason}
                     {x.voided.byEntryId ? " (corrected)" : ""}
                   </span>
                 ) : (
