@@ -197,7 +197,7 @@ it("an EU engineer follows a leak from the check through repair and re-check, in
     await charge.getByLabel("Reason").fill(reason);
     await charge.getByLabel("Linked finding").selectOption({ index: 1 });
     await charge.getByRole("button", { name: "Record charge added" }).click();
-    await page.getByText(reason, { exact: true }).first().waitFor();
+    await page.getByRole("cell", { name: reason }).first().waitFor();
   };
   await addCharge("8,5", "Nachfüllung nach Leckfund");
   await addCharge("8,5", "Doppelt erfasst");
@@ -297,6 +297,10 @@ it("a retired system keeps every record: its page, the store's list of retired s
   await page.getByText(`kept at least until ${formatCalendarDay(kept)}`).waitFor();
   await page.getByText("None scheduled", { exact: true }).waitFor();
   await page.getByText("Nachfüllung nach Scheuerstelle am Kapillarrohr").waitFor();
+  // No new entry on a retired system (decision 0040): the forms for them are gone, corrections stay.
+  expect(await page.getByRole("form", { name: "Record charge added" }).count()).toBe(0);
+  expect(await page.getByRole("form", { name: "Record a leak check" }).count()).toBe(0);
+  await page.getByRole("button", { name: "Correct" }).first().waitFor();
   await noUsWords(page, "retired system");
   await page.screenshot({ path: path.join(SCREENS, "records-eu-retired-system.png"), fullPage: true });
 

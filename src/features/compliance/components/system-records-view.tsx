@@ -76,6 +76,8 @@ export function SystemRecords({
   const byId = new Map(r.additions.map((a) => [a.id, a]));
   const a = r.applicability;
   const eu = r.profile.wording === "eu";
+  // A retired system takes no new entry or change; corrections of its entries stay possible (decision 0040).
+  const retired = r.system.retired !== null;
   const mass = (kg: number) => formatMass(kg, unit, numberFormat);
   const percent = (p: number) => formatPercent(p, numberFormat);
   const gwp = (v: number) => formatGrouped(v, numberFormat, 0);
@@ -251,13 +253,13 @@ export function SystemRecords({
       </section>
 
       <ChronicSection r={r} unit={unit} numberFormat={numberFormat} canFile={canFile} />
-      <RevisionsSection r={r} unit={unit} numberFormat={numberFormat} canRevise={canFile} />
+      <RevisionsSection r={r} unit={unit} numberFormat={numberFormat} canRevise={canFile && !retired} />
 
       <section aria-labelledby="charge" className="space-y-3">
         <h2 id="charge" className="text-xl font-bold">
           Charge added
         </h2>
-        {canRecord ? (
+        {canRecord && !retired ? (
           <ChargeForm
             systemId={r.system.id}
             today={r.today}
@@ -370,7 +372,7 @@ export function SystemRecords({
         <h2 id="checks" className="text-xl font-bold">
           {eu ? "Leak checks" : "Leak checks and inspections"}
         </h2>
-        {canRecord ? <LeakCheckForm systemId={r.system.id} today={r.today} /> : null}
+        {canRecord && !retired ? <LeakCheckForm systemId={r.system.id} today={r.today} /> : null}
         {r.leakChecks.length === 0 ? (
           <p className="text-muted">No leak check recorded.</p>
         ) : (

@@ -238,60 +238,63 @@ export function TodayView({
           rows={inStore(data.systems)}
           rowKey={(r) => r.id}
           search="Search systems"
-          columns={(
-            [
-              {
-                header: "System",
-                sortValue: (r) => r.name,
-                searchText: (r) => `${r.name} ${r.storeName} ${r.refrigerantName}`,
-                cell: (r) => (
-                  <Link className="text-accent underline" to={r.link}>
-                    {r.name}
-                  </Link>
-                ),
-              },
-              { header: "Store", cell: (r) => r.storeName },
-              { header: "Refrigerant", cell: (r) => r.refrigerantName, filterValue: (r) => r.refrigerantName },
-              {
-                header: "Latest leak rate",
-                sortValue: (r) => r.latestPercent,
-                cell: (r) =>
-                  r.latestPercent === null ? (
-                    "no additions"
-                  ) : (
-                    <>
-                      <Link
-                        className={`underline ${r.breachOpen ? "font-bold text-danger" : "text-accent"}`}
-                        to={`${r.link}#leak-rates`}
-                      >
-                        {formatPercent(r.latestPercent, numberFormat)} on {r.latestOn}
-                      </Link>
-                      {r.repairedSince ? (
-                        <span className="block text-sm text-muted">above the threshold; repaired since</span>
-                      ) : null}
-                    </>
-                  ),
-              },
-              {
-                header: "Threshold",
-                cell: (r) => (r.thresholdPercent === null ? "none applies" : `${r.thresholdPercent} %`),
-              },
-              {
-                header: eu ? "Next leak check" : "Next inspection",
-                sortValue: (r) => r.nextInspection ?? "",
-                cell: (r) =>
-                  r.nextInspection ? (
-                    <Link className="text-accent underline" to={`${r.link}#checks`}>
-                      {formatCalendarDay(r.nextInspection)}
+          columns={withoutRates<TodayData["systems"][number]>(eu, [
+            {
+              header: "System",
+              sortValue: (r) => r.name,
+              searchText: (r) => `${r.name} ${r.storeName} ${r.refrigerantName}`,
+              cell: (r) => (
+                <Link className="text-accent underline" to={r.link}>
+                  {r.name}
+                </Link>
+              ),
+            },
+            { header: "Store", cell: (r) => r.storeName },
+            { header: "Refrigerant", cell: (r) => r.refrigerantName, filterValue: (r) => r.refrigerantName },
+            {
+              header: "Latest leak rate",
+              sortValue: (r) => r.latestPercent,
+              cell: (r) =>
+                r.latestPercent === null ? (
+                  "no additions"
+                ) : (
+                  <>
+                    <Link
+                      className={`underline ${r.breachOpen ? "font-bold text-danger" : "text-accent"}`}
+                      to={`${r.link}#leak-rates`}
+                    >
+                      {formatPercent(r.latestPercent, numberFormat)} on {r.latestOn}
                     </Link>
-                  ) : (
-                    "—"
-                  ),
-              },
-            ] satisfies Column<TodayData["systems"][number]>[]
-          ).filter((c) => !eu || (c.header !== "Latest leak rate" && c.header !== "Threshold"))}
+                    {r.repairedSince ? (
+                      <span className="block text-sm text-muted">above the threshold; repaired since</span>
+                    ) : null}
+                  </>
+                ),
+            },
+            {
+              header: "Threshold",
+              cell: (r) => (r.thresholdPercent === null ? "none applies" : `${r.thresholdPercent} %`),
+            },
+            {
+              header: eu ? "Next leak check" : "Next inspection",
+              sortValue: (r) => r.nextInspection ?? "",
+              cell: (r) =>
+                r.nextInspection ? (
+                  <Link className="text-accent underline" to={`${r.link}#checks`}>
+                    {formatCalendarDay(r.nextInspection)}
+                  </Link>
+                ) : (
+                  "—"
+                ),
+            },
+          ])}
         />
       </section>
     </div>
   );
+}
+
+/** Under EU F-gas the systems table has no leak-rate or threshold column (neither applies there). */
+function withoutRates<Row>(eu: boolean, columns: Column<Row>[]): Column<Row>[] {
+  return eu ? columns.filter((c) => c.header !== "Latest leak rate" && c.header !== "Threshold") : columns;
 }
