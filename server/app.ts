@@ -72,7 +72,12 @@ export function createApp(ctx: AppContext): Express {
   app.use(express.json({ limit: "5mb", verify: refuseDeepJson }));
 
   const PgStore = connectPgSimple(session);
+  // Only the API has sessions. The rolling cookie is set again on every answer that loaded one: an
+  // asset or app-shell answer still in flight when sign-in rotates the session id (a new service
+  // worker fetches the whole shell on a first visit, which is when people sign in) would put the
+  // old, signed-out cookie back (docs/decisions/0121-sessions-only-on-the-api.md).
   app.use(
+    "/api",
     session({
       name: "plumeline.sid",
       store: new PgStore({

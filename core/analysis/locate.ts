@@ -11,7 +11,7 @@ import { diagnosticsStage } from "./pipeline/diagnostics-stage";
 import { fieldStage, type OtherAir } from "./pipeline/field-stage";
 import { lagStage } from "./pipeline/lag-stage";
 import { placementStage } from "./pipeline/placement-stage";
-import { spotFitsPlume } from "./pipeline/retry-screen";
+import { spotFitsPlume, type PassFit } from "./pipeline/retry-screen";
 import { round2 } from "./pipeline/numbers";
 import { sourcesStage, supportRule } from "./pipeline/sources-stage";
 import { zonesStage } from "./pipeline/zones-stage";
@@ -74,9 +74,16 @@ export function locate(
     });
     return { lag, zones };
   };
-  const stages = ({ lag, zones }: ReturnType<typeof lagAndZones>) => {
+  // each pass in its own air, and a stilled fixture's mixed readings as its level (they depend on the lag)
+  const passFit = ({ lag, zones }: ReturnType<typeof lagAndZones>): PassFit => {
     const level = other ? mixedLevel(plan, air, lag, zones.zoneOfReading, instrument.alarmPpm) : null;
-    const otherAir = other && level ? { ...other, levelOnly: level.levelOnly } : other;
+    return {
+      otherAir: other && level ? { ...other, levelOnly: level.levelOnly } : other,
+      levelColumns: level?.columns ?? [],
+    };
+  };
+  const stages = ({ lag, zones }: ReturnType<typeof lagAndZones>) => {
+    const { otherAir, levelColumns } = passFit({ lag, zones });
     const field = fieldStage(grid, stepScale, casesRunFans(plan.fixtures), lag, zones, settings, null, otherAir);
     const sources = sourcesStage(
       plan,
@@ -85,7 +92,7 @@ export function locate(
       zones,
       field,
       { kernel: k, sources: settings.sources, zoneMarginM: settings.zones.marginM },
-      level?.columns ?? [],
+      levelColumns,
     );
     const rule = supportRule(field, zones, settings.sources);
     const placement = placementStage(plan, grid, lag, field, sources, rule, settings);
@@ -111,7 +118,7 @@ export function locate(
       tried.add(shift);
       const trial = lagAndZones({ transportDelayS: shift, timeConstantS: 0 });
       // a full run only where the plume alone already fits a spot (the field's searches are the cost)
-      if (!spotFitsPlume(plan, grid, stepScale, trial.lag, trial.zones, peak, settings)) continue;
+      if (!spotFitsPlume(plan, grid, stepScale, trial.lag, trial.zones, peak, settings, passFit(trial))) continue;
       const retry = stages(trial);
       if (retry.placement.candidates.length > 0) {
         run = retry;

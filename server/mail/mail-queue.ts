@@ -70,13 +70,19 @@ export function createMailQueue(
 
   /** Takes one job at a time while the worker runs; every call is awaited and every failure caught. */
   async function runLoop(b: PgBoss): Promise<void> {
+    // A job fetched just before the database went away is still this worker's: it is delivered again
+    // once the database answers, instead of waiting out pg-boss's expiry.
+    type MailJob = { id: string; data: { mailId: string }; retryCount: number; retryLimit: number };
+    let held: MailJob | null = null;
     while (boss === b) {
       try {
-        const [job] = await b.fetch<{ mailId: string }>(MAIL_JOB, { includeMetadata: true, batchSize: 1 });
+        const job: MailJob | undefined =
+          held ?? (await b.fetch<{ mailId: string }>(MAIL_JOB, { includeMetadata: true, batchSize: 1 }))[0];
         if (!job) {
           await pause(opts.pollingIntervalS * 1000);
           continue;
         }
+        held = job;
         try {
           await deliver(job.data.mailId, job.retryCount >= job.retryLimit);
           await b.complete(MAIL_JOB, job.id);
@@ -84,8 +90,9 @@ export function createMailQueue(
           // Retried later with backoff; after the last try pg-boss moves it to the dead letter queue.
           await b.fail(MAIL_JOB, job.id, { reason: describeMailError(err) });
         }
+        held = null;
       } catch (err) {
-        // The database is away (or the job vanished): the job expires and is retried; wait a poll.
+        // The database is away (or the job vanished): wait a poll and try the held job again.
         logger.warn({ err: { message: (err as Error).message } }, "mail worker: job queue unavailable");
         await pause(opts.pollingIntervalS * 1000);
       }
@@ -137,6 +144,12 @@ export function createMailQueue(
 
   /** One delivery attempt. `final` marks the last try: a failure then leaves the message failed. */
   async function deliver(id: string, final: boolean): Promise<"sent" | "skipped"> {
+    const outcome = unrecorded.get(id);
+    if (outcome === "sent") {
+      await recordSent(id);
+      return "sent";
+    }
+    if (outcome) await recordFailure(id, outcome);
     const [row] = await db
       .update(outgoingMail)
       .set({ lockedUntil: sql`now() + make_interval(secs => ${LEASE_S})`, attempts: sql`${outgoingMail.attempts} + 1` })
@@ -164,15 +177,33 @@ export function createMailQueue(
         })),
       });
     } catch (err) {
-      const reason = describeMailError(err);
-      await db
-        .update(outgoingMail)
-        .set({ lastError: reason, lockedUntil: null, state: final ? "failed" : "queued" })
-        .where(eq(outgoingMail.id, id));
-      logger.warn({ mailId: id, attempt: row.attempts, final, reason }, "mail delivery failed");
+      const failure = { reason: describeMailError(err), final };
+      unrecorded.set(id, failure);
+      logger.warn({ mailId: id, attempt: row.attempts, ...failure }, "mail delivery failed");
+      await recordFailure(id, failure);
       throw err;
     }
-    // Sent: keep who, what and when; drop the body (it may hold a sign-in link) and the attachment.
+    unrecorded.set(id, "sent");
+    await recordSent(id);
+    return "sent";
+  }
+
+  /**
+   * Outcomes the database did not take yet (it went away between the SMTP answer and the update): a
+   * message the server accepted is never sent twice, and a failed one is not locked for a lease.
+   */
+  const unrecorded = new Map<string, "sent" | { reason: string; final: boolean }>();
+
+  async function recordFailure(id: string, failure: { reason: string; final: boolean }) {
+    await db
+      .update(outgoingMail)
+      .set({ lastError: failure.reason, lockedUntil: null, state: failure.final ? "failed" : "queued" })
+      .where(eq(outgoingMail.id, id));
+    unrecorded.delete(id);
+  }
+
+  /** Sent: keep who, what and when; drop the body (it may hold a sign-in link) and the attachment. */
+  async function recordSent(id: string) {
     await db
       .update(outgoingMail)
       .set({
@@ -185,7 +216,7 @@ export function createMailQueue(
         attachments: [],
       })
       .where(eq(outgoingMail.id, id));
-    return "sent";
+    unrecorded.delete(id);
   }
 
   /** Rows committed but never handed to the job queue (a crash between commit and hand-over). */

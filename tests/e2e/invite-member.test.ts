@@ -48,10 +48,12 @@ it("an owner invites a technician, reads the invitation in the Outbox, and the n
   await guest.getByLabel("New password again").fill("a long enough secret");
   await guest.getByRole("button", { name: /join|accept/i }).click();
   await guest.getByRole("button", { name: "Sign out" }).waitFor();
-  await expect(guest.getByText("Wrenfield Market").first().isVisible()).resolves.toBe(true);
+  await guest.getByText("Wrenfield Market").first().waitFor();
 
-  // The owner, reloading the Team page, now sees the new member.
+  // The owner, reloading the Team page, now sees the new member. The router changes the address
+  // only once the route is ready: reloading before then would reload the Outbox message instead.
   await page.getByRole("link", { name: "Team" }).click();
+  await page.waitForURL((url) => url.pathname === "/team");
   await page.reload();
   await page.getByRole("cell", { name: "Sam Newhire", exact: true }).waitFor();
   expect(failures).toEqual([]);

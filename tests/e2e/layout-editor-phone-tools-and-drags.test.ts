@@ -17,7 +17,7 @@ import { launchBrowser } from "../helpers/browser";
 import { startE2eServer, type E2eServer } from "../helpers/e2e-server";
 import { seedCompany } from "../helpers/fixtures";
 import { touchDrag, touchSession } from "../helpers/touch";
-import { LAYOUT_STAGE, openLayoutEditor } from "../helpers/layout-e2e";
+import { LAYOUT_STAGE, openLayoutEditor, storedFixtures } from "../helpers/layout-e2e";
 import { mapStoreForWalk } from "../helpers/walk-e2e";
 import { plans } from "../../server/db/schema/index";
 
@@ -25,7 +25,6 @@ const SCREENS = path.resolve(import.meta.dirname, "../../test-results/screens");
 const STAGE = LAYOUT_STAGE;
 
 type Box = { x: number; y: number; width: number; height: number };
-type Stored = { id: string; label: string; polygon?: number[][]; point?: { x: number; y: number } };
 
 let server: E2eServer;
 let browser: Browser;
@@ -137,10 +136,9 @@ async function strayOutlines(page: Page): Promise<string[]> {
   });
 }
 
-async function stored(page: Page): Promise<Stored[]> {
-  await page.waitForTimeout(300);
-  await page.locator("[data-save-status=saved]").waitFor({ timeout: 15_000 });
-  return (await (await page.request.get(`${server.url}/api/plans/${planId}/fixtures`)).json()).fixtures;
+/** The stored fixtures; after `edit` has been saved when one is given. */
+function stored(page: Page, edit?: () => Promise<unknown>) {
+  return storedFixtures(page, server.url, planId, edit);
 }
 
 async function mouseDrag(page: Page, from: { x: number; y: number }, to: { x: number; y: number }) {
@@ -199,17 +197,23 @@ it("on a laptop, dragging a risk point, an unselected case and a selected one le
 
   // A risk point (Drop M1 at 39.3 m, 8.9 m): points have no transformer on the drag layer.
   const drop = await at(page, 39.3, 8.9);
-  await mouseDrag(page, drop, { x: drop.x + 2 * drop.scale, y: drop.y + drop.scale });
-  expect(await staleLayers(page)).toEqual([]);
-  const moved = (await stored(page)).find((f) => f.label === "Drop M1 (meat)")!;
+  const afterDrop = await stored(page, async () => {
+    await mouseDrag(page, drop, { x: drop.x + 2 * drop.scale, y: drop.y + drop.scale });
+    // Looked at as the drag ends, before the save's answer redraws anything.
+    expect(await staleLayers(page)).toEqual([]);
+  });
+  const moved = afterDrop.find((f) => f.label === "Drop M1 (meat)")!;
   expect(moved.point!.x).toBeGreaterThan(40);
   await page.screenshot({ path: path.join(SCREENS, "layout-no-ghost-point-laptop.png") });
 
   // The walk-in freezer (13.5–21.5 m × 1–7 m), pressed and dragged in one go, then dragged again selected.
   for (const dy of [2, -1]) {
     const from = await at(page, 19.5, 4);
-    await mouseDrag(page, from, { x: from.x, y: from.y + dy * from.scale });
-    await stored(page);
+    await stored(page, async () => {
+      await mouseDrag(page, from, { x: from.x, y: from.y + dy * from.scale });
+      expect(await staleLayers(page)).toEqual([]);
+      expect(await strayOutlines(page)).toEqual([]);
+    });
     expect(await staleLayers(page)).toEqual([]);
     expect(await strayOutlines(page)).toEqual([]);
   }
@@ -254,8 +258,8 @@ it("on a tablet, a case dragged by a finger leaves no outline where it was", asy
   await page.touchscreen.tap(from.x, from.y);
   await page.getByLabel("Kind", { exact: true }).waitFor();
   await page.waitForTimeout(350);
-  await touchDrag(cdp, from, { x: from.x, y: from.y + 2 * from.scale }, 12);
-  const after = (await stored(page)).find((f) => f.id === before.id)!;
+  const afterDrag = await stored(page, () => touchDrag(cdp, from, { x: from.x, y: from.y + 2 * from.scale }, 12));
+  const after = afterDrag.find((f) => f.id === before.id)!;
   expect(after.polygon![0][1]).toBeGreaterThan(before.polygon![0][1] + 1);
   expect(await staleLayers(page)).toEqual([]);
   expect(await strayOutlines(page)).toEqual([]);

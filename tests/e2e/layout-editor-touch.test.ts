@@ -13,7 +13,7 @@ import { launchBrowser, newContext } from "../helpers/browser";
 import { startE2eServer, type E2eServer } from "../helpers/e2e-server";
 import { PASSWORD, seedCompany } from "../helpers/fixtures";
 import { signInThroughForm } from "../helpers/e2e-session";
-import { drawingPng, numberAttr, pickerScreen } from "../helpers/layout-e2e";
+import { drawingPng, numberAttr, pickerScreen, storedFixtures } from "../helpers/layout-e2e";
 import { pinch, touchDrag, touchSession } from "../helpers/touch";
 
 let server: E2eServer;
@@ -79,15 +79,9 @@ async function tapButton(page: Page, name: string) {
 
 const count = (page: Page, n: number) => page.getByRole("heading", { name: `All fixtures (${n})` }).waitFor();
 
-async function stored(page: Page) {
-  await page.waitForTimeout(300);
-  await page.locator("[data-save-status=saved]").waitFor({ timeout: 15_000 });
-  return (await (await page.request.get(`${server.url}/api/plans/${planId}/fixtures`)).json()).fixtures as {
-    id: string;
-    kind: string;
-    polygon?: number[][];
-    point?: { x: number; y: number };
-  }[];
+/** The stored fixtures; after `edit` has been saved when one is given. */
+function stored(page: Page, edit?: () => Promise<unknown>) {
+  return storedFixtures(page, server.url, planId, edit);
 }
 
 function boxOf(polygon: number[][]) {
@@ -182,9 +176,10 @@ it("on a landscape tablet, sets the scale and draws, selects, moves, resizes, pi
   // 3. A line-set drop at (8, 7) m.
   await page.getByLabel("Kind to draw").selectOption("line-set-drop");
   await tapButton(page, "Place point");
-  await tap(page, await at(page, 8, 7));
-  await count(page, 3);
-  let fixtures = await stored(page);
+  let fixtures = await stored(page, async () => {
+    await tap(page, await at(page, 8, 7));
+    await count(page, 3);
+  });
   const walkIn = fixtures.find((f) => f.kind === "walk-in-cooler")!;
   [
     [9, 1],
@@ -210,8 +205,7 @@ it("on a landscape tablet, sets the scale and draws, selects, moves, resizes, pi
   const v0 = await stageView(page);
   const pxPerM = v0.zoom / v0.mpp;
   const body = await at(page, 3, 2.6);
-  await touchDrag(cdp, body, { x: body.x + pxPerM, y: body.y });
-  fixtures = await stored(page);
+  fixtures = await stored(page, () => touchDrag(cdp, body, { x: body.x + pxPerM, y: body.y }));
   let kase = boxOf(fixtures.find((f) => f.id === caseId)!.polygon!);
   expect(kase.minX).toBeCloseTo(3, 6);
   expect(kase.maxX).toBeCloseTo(6.5, 6);
@@ -220,8 +214,9 @@ it("on a landscape tablet, sets the scale and draws, selects, moves, resizes, pi
   // drawn handle, inside its 48 px finger target (a 12 px handle would have been missed and the
   // finger would have panned the plan). Dragged 40 px right.
   const corner = await at(page, 6.5, 3.2);
-  await touchDrag(cdp, { x: corner.x + 18, y: corner.y + 18 }, { x: corner.x + 58, y: corner.y + 18 });
-  fixtures = await stored(page);
+  fixtures = await stored(page, () =>
+    touchDrag(cdp, { x: corner.x + 18, y: corner.y + 18 }, { x: corner.x + 58, y: corner.y + 18 }),
+  );
   kase = boxOf(fixtures.find((f) => f.id === caseId)!.polygon!);
   expect(kase.minX).toBeCloseTo(3, 6);
   expect(kase.maxX).toBeCloseTo(6.5 + 40 / pxPerM, 1);
@@ -266,10 +261,10 @@ it("on a landscape tablet, sets the scale and draws, selects, moves, resizes, pi
   await count(page, 3);
   await tapButton(page, "Redo");
   await count(page, 5);
-  await tapButton(page, "Delete");
-  await count(page, 3);
-
-  fixtures = await stored(page);
+  fixtures = await stored(page, async () => {
+    await tapButton(page, "Delete");
+    await count(page, 3);
+  });
   expect(fixtures.map((f) => f.kind).sort()).toEqual(["line-set-drop", "open-case", "walk-in-cooler"]);
   const dropAt = fixtures.find((f) => f.kind === "line-set-drop")!.point!;
   expect(dropAt.x).toBeCloseTo(8, 6);

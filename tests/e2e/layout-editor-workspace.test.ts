@@ -16,7 +16,7 @@ import { startE2eServer, type E2eServer } from "../helpers/e2e-server";
 import { seedCompany } from "../helpers/fixtures";
 import { signIn } from "../helpers/test-app";
 import { touchDrag, touchSession } from "../helpers/touch";
-import { LAYOUT_STAGE, openLayoutEditor, stageSettled } from "../helpers/layout-e2e";
+import { LAYOUT_STAGE, openLayoutEditor, stageSettled, storedFixtures } from "../helpers/layout-e2e";
 import { mapStoreForWalk } from "../helpers/walk-e2e";
 import { plans, users } from "../../server/db/schema/index";
 
@@ -24,8 +24,6 @@ const SCREENS = path.resolve(import.meta.dirname, "../../test-results/screens");
 const STAGE = LAYOUT_STAGE;
 /** fitView's margin round the drawing (src/features/layout/hooks/use-workspace-stage.ts). */
 const FIT_MARGIN = 16;
-
-type Stored = { id: string; label: string; polygon?: number[][]; point?: { x: number; y: number } };
 
 let server: E2eServer;
 let browser: Browser;
@@ -114,13 +112,12 @@ async function at(page: Page, x: number, y: number) {
   return { x: m.plan.left + x * m.scale, y: m.plan.top + y * m.scale };
 }
 
-async function stored(page: Page): Promise<Stored[]> {
-  await page.waitForTimeout(300);
-  await page.locator("[data-save-status=saved]").waitFor({ timeout: 15_000 });
-  return (await (await page.request.get(`${server.url}/api/plans/${planId}/fixtures`)).json()).fixtures;
+/** The stored fixtures; after `edit` has been saved when one is given. */
+function stored(page: Page, edit?: () => Promise<unknown>) {
+  return storedFixtures(page, server.url, planId, edit);
 }
 
-function boxOf(f: Stored) {
+function boxOf(f: { polygon?: number[][] }) {
   const xs = f.polygon!.map((p) => p[0]);
   const ys = f.polygon!.map((p) => p[1]);
   return { minX: Math.min(...xs), maxX: Math.max(...xs), minY: Math.min(...ys), maxY: Math.max(...ys) };
@@ -133,8 +130,7 @@ function boxOf(f: Stored) {
  */
 async function duplicateAndCheck(page: Page, label: string, expected: string, press: () => Promise<void>) {
   const before = await stored(page);
-  await press();
-  const after = await stored(page);
+  const after = await stored(page, press);
   expect(after).toHaveLength(before.length + 1);
   const copy = after.find((f) => !before.some((b) => b.id === f.id))!;
   expect(copy.label).toBe(expected);
@@ -176,12 +172,14 @@ it("on a 1366 × 860 laptop the whole plan is on screen under the tools, the fir
   // 1 m down, where its back meets the partition (8 m).
   const freezer = (await stored(page)).find((f) => f.label === "Walk-in freezer")!;
   const from = await at(page, 19.5, 2);
-  await page.mouse.move(from.x, from.y);
-  await page.mouse.down();
-  await page.mouse.move(from.x, from.y + m.scale / 2, { steps: 4 });
-  await page.mouse.move(from.x, from.y + m.scale, { steps: 4 });
-  await page.mouse.up();
-  const moved = boxOf((await stored(page)).find((f) => f.id === freezer.id)!);
+  const afterDrag = await stored(page, async () => {
+    await page.mouse.move(from.x, from.y);
+    await page.mouse.down();
+    await page.mouse.move(from.x, from.y + m.scale / 2, { steps: 4 });
+    await page.mouse.move(from.x, from.y + m.scale, { steps: 4 });
+    await page.mouse.up();
+  });
+  const moved = boxOf(afterDrag.find((f) => f.id === freezer.id)!);
   await page.screenshot({ path: path.join(SCREENS, "layout-first-drag-laptop.png") });
   expect(moved.minY).toBeCloseTo(2, 6);
   // Sideways only what snapping to a neighbour's edge takes (its right side to Aisle 1's at 22 m).
@@ -190,8 +188,11 @@ it("on a 1366 × 860 laptop the whole plan is on screen under the tools, the fir
 
   // The page scrolled on (to the list below) carries the tools away with the plan: never over it.
   await page.mouse.move(1300, 300);
+  const top = await page.evaluate(() => window.scrollY);
   await page.mouse.wheel(0, 250);
-  await page.waitForTimeout(200);
+  // Measured once the page has moved (a fixed pause could measure it before the scroll).
+  await page.waitForFunction((y) => window.scrollY > y, top);
+  await stageSettled(page);
   const scrolled = await measure(page);
   expect(scrolled.bar.bottom).toBeLessThanOrEqual(scrolled.stage.top);
   await page.mouse.wheel(0, -250);
@@ -269,8 +270,8 @@ it("on a landscape tablet the plan shows more than 330 px high, and a selected 0
   // The finger lands on the body (off its exact centre, as a finger does) and drags it 1 m right,
   // still between Aisles 3 and 4.
   const start = { x: centre.x - sidePx / 4, y: centre.y + sidePx / 4 };
-  await touchDrag(cdp, start, { x: start.x + z.scale, y: start.y }, 12);
-  const column = (await stored(page)).find((f) => f.label === "Column C1")!;
+  const afterDrag = await stored(page, () => touchDrag(cdp, start, { x: start.x + z.scale, y: start.y }, 12));
+  const column = afterDrag.find((f) => f.label === "Column C1")!;
   const b = boxOf(column);
   // Moved, not resized: still 0.6 m square, about 1 m right (the grid or a neighbour's edge may
   // take the last few centimetres).

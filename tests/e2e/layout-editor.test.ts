@@ -9,7 +9,7 @@ import { launchBrowser, newContext } from "../helpers/browser";
 import { startE2eServer, type E2eServer } from "../helpers/e2e-server";
 import { PASSWORD, seedCompany } from "../helpers/fixtures";
 import { signInThroughForm } from "../helpers/e2e-session";
-import { drawingPng, numberAttr, pickerScreen } from "../helpers/layout-e2e";
+import { drawingPng, numberAttr, pickerScreen, storedFixtures } from "../helpers/layout-e2e";
 import { eq } from "drizzle-orm";
 import { stores } from "../../server/db/schema/index";
 
@@ -119,15 +119,15 @@ it("creates a store, uploads and calibrates a plan, draws three fixtures and fin
   await page.getByRole("button", { name: "Select", pressed: true }).waitFor();
   const from = await editorScreen(page, 8, 6);
   const to = await editorScreen(page, 10, 7);
-  await page.mouse.move(from.x, from.y);
-  await page.mouse.down();
-  await page.mouse.move(from.x + 10, from.y + 5, { steps: 3 });
-  await page.mouse.move(to.x, to.y, { steps: 8 });
-  await page.mouse.up();
-  await page.getByRole("cell", { name: "10.00 m, 7.00 m" }).waitFor();
-
-  await page.waitForTimeout(300);
-  await page.locator("[data-save-status=saved]").waitFor({ timeout: 15_000 });
+  // Everything up to the drag is saved once the drag's own save is in (autosave waits for a pause).
+  await storedFixtures(page, server.url, plan.id, async () => {
+    await page.mouse.move(from.x, from.y);
+    await page.mouse.down();
+    await page.mouse.move(from.x + 10, from.y + 5, { steps: 3 });
+    await page.mouse.move(to.x, to.y, { steps: 8 });
+    await page.mouse.up();
+    await page.getByRole("cell", { name: "10.00 m, 7.00 m" }).waitFor();
+  });
 
   const check = async () => {
     const r = await (await page.request.get(`${server.url}/api/plans/${plan.id}/fixtures`)).json();

@@ -42,7 +42,8 @@ it("on a phone the header is one row and the navigation opens from Menu; the hel
   await nav.getByRole("link", { name: "Help" }).tap();
 
   await page.getByRole("heading", { name: "Help", level: 1 }).waitFor();
-  expect(await nav.isVisible()).toBe(false); // the menu folds after a page change
+  // The menu folds after a page change (on the render after the new page's, so waited for).
+  await nav.waitFor({ state: "hidden" });
   const topics = await page.locator("main li a").allTextContents();
   expect(topics[0]).toBe("How a sweep works");
   await page.getByRole("link", { name: "How a sweep works" }).tap();

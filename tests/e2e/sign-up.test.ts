@@ -21,8 +21,9 @@ afterAll(async () => {
   await server?.close();
 });
 
+/** The link in the mail to `address`, once the mail worker has sent it (bounded well inside the test's time). */
 async function linkMailedTo(address: string): Promise<string> {
-  for (let i = 0; i < 100; i++) {
+  for (let i = 0; i < 1200; i++) {
     const [m] = await server.ctx.db
       .select()
       .from(outboxMessages)

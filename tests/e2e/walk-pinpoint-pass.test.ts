@@ -16,7 +16,7 @@ mkdirSync(SCREENS, { recursive: true });
 const PHONE = { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, deviceScaleFactor: 2 };
 
 // The demo plan's Dairy 1 (x 2–5.66 m, front at y = 9.5 m, fans): taps 0.2 m in front of it, 0.7 m
-// apart, and three across the aisle. Along the case the taps are 7 s apart, a re-check's pace: the
+// apart, and three across the aisle. Along the case the taps are 7 s apart on the page's clock, a re-check's pace: the
 // detector's air (5 s delay + 1.5 s time constant) then comes from the tap before, on the same front.
 const AISLE = [
   { x: 12, y: 11.5 },
@@ -45,6 +45,8 @@ it("on a phone with touch: level readings along a case advise stopping its fans;
   page.setDefaultTimeout(15_000);
   const failures: string[] = [];
   page.on("pageerror", (e) => failures.push(String(e)));
+  // the page's clock runs on and jumps over the stops along the case (no real waiting)
+  await context.clock.install();
   await signInThroughForm(page, suite.server.url, suite.co.people.technician.email, PASSWORD);
   await page.goto(`${suite.server.url}/stores/${suite.co.store.id}/walk`);
   await page.getByRole("button", { name: "Start the sweep" }).tap();
@@ -57,7 +59,7 @@ it("on a phone with touch: level readings along a case advise stopping its fans;
   let n = 0;
   for (const s of AISLE) await record(page, s, "0", ++n);
   for (const [i, s] of FRONT.entries()) {
-    await page.waitForTimeout(PACE_MS);
+    await context.clock.fastForward(PACE_MS);
     await record(page, s, ["6", "7", "6", "7", "6"][i], ++n);
   }
   const advice = page.getByTestId("mixing-advice");
@@ -70,7 +72,7 @@ it("on a phone with touch: level readings along a case advise stopping its fans;
   await expect(dialog.textContent()).resolves.toMatch(/product warms up/);
   await expect(dialog.textContent()).resolves.toMatch(/local codes/);
   await dialog.getByRole("button", { name: "5 minutes more" }).tap();
-  await expect(dialog.getByTestId("pass-minutes").textContent()).resolves.toBe("25 min");
+  await expect.poll(() => dialog.getByTestId("pass-minutes").textContent()).toBe("25 min");
   await page.screenshot({ path: path.join(SCREENS, "walk-pinpoint-start.png") });
   await dialog.getByRole("button", { name: "Start still-air pass" }).tap();
   const banner = page.getByTestId("pass-banner");
@@ -80,7 +82,7 @@ it("on a phone with touch: level readings along a case advise stopping its fans;
 
   // Readings in still air peak at the leak, about the third tap.
   for (const [i, s] of FRONT.entries()) {
-    await page.waitForTimeout(PACE_MS);
+    await context.clock.fastForward(PACE_MS);
     await record(page, s, ["3", "9", "20", "12", "4"][i], ++n);
   }
   await page.screenshot({ path: path.join(SCREENS, "walk-pinpoint-pass-timer.png") });

@@ -7,8 +7,10 @@ import { cleanup, configure } from "@testing-library/react";
 import { afterEach, beforeAll, vi } from "vitest";
 
 // A lazy route's first import and jsdom's start-up take seconds on a loaded 2-core machine: findBy*
-// waits up to 5 s (the library's default is 1 s) rather than failing on a slow machine.
-configure({ asyncUtilTimeout: 5_000 });
+// waits up to 15 s (the library's default is 1 s) rather than failing on a slow machine. At a load
+// of 50 the app's first route took more than 5 s twice in a row ("Opening Plumeline…"); a wait
+// is a bound for a hang, never a claim about speed (decision 0119).
+configure({ asyncUtilTimeout: 15_000 });
 
 // Vitest runs without globals here, so Testing Library cannot register its own cleanup.
 afterEach(() => {

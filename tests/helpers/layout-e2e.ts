@@ -1,6 +1,6 @@
 import { mkdtemp, writeFile } from "node:fs/promises";
 import { tmpdir } from "node:os";
-import { join } from "node:path";
+import path, { join } from "node:path";
 import type { Browser, Page } from "playwright-core";
 import { newContext } from "./browser";
 import { signInThroughForm } from "./e2e-session";
@@ -39,6 +39,56 @@ export async function pickerScreen(page: Page, x: number, y: number) {
     ["data-zoom", "data-pan-x", "data-pan-y"].map((a) => numberAttr(page, "[data-testid=picker-view]", a)),
   );
   return { x: box.x + panX + x * zoom, y: box.y + panY + y * zoom };
+}
+
+/** A fixture as `GET /api/plans/:id/fixtures` answers it. */
+export type StoredFixture = {
+  id: string;
+  kind: string;
+  label: string;
+  polygon?: number[][];
+  point?: { x: number; y: number };
+};
+
+async function serverLayout(page: Page, baseUrl: string, planId: string) {
+  // A GET is safe to send again: a connection the server reset under a loaded run (seen once as
+  // ECONNRESET on a kept-alive socket) is retried, as a browser does, not taken as the answer.
+  for (let attempt = 1; ; attempt++) {
+    try {
+      const res = await page.request.get(`${baseUrl}/api/plans/${planId}/fixtures`);
+      return (await res.json()) as { layoutRevision: number; fixtures: StoredFixture[] };
+    } catch (e) {
+      if (attempt >= 3 || !/ECONNRESET|socket hang up/.test(String(e))) throw e;
+    }
+  }
+}
+
+/**
+ * The plan's fixtures as the server holds them once the editor has nothing left to save. With
+ * `edit`, runs it first and waits for the save it causes: the server's layout revision past the one
+ * before the edit, then the editor saying "saved". (A fixed pause before looking for "saved" could
+ * find the state from before the edit on a slow machine, and read the layout the edit had not reached.)
+ */
+export async function storedFixtures(
+  page: Page,
+  baseUrl: string,
+  planId: string,
+  edit?: () => Promise<unknown>,
+): Promise<StoredFixture[]> {
+  const saved = page.locator("[data-save-status=saved]");
+  if (edit) {
+    const before = (await serverLayout(page, baseUrl, planId)).layoutRevision;
+    await edit();
+    for (let waited = 0; (await serverLayout(page, baseUrl, planId)).layoutRevision <= before; waited += 250) {
+      if (waited > 30_000) {
+        const status = await page.locator("[data-save-status]").getAttribute("data-save-status");
+        throw new Error(`the edit was never saved (layout revision still ${before}, save status "${status}")`);
+      }
+      await page.waitForTimeout(250);
+    }
+  }
+  await saved.waitFor({ timeout: 15_000 });
+  return (await serverLayout(page, baseUrl, planId)).fixtures;
 }
 
 /** The layout editor's stage, as the editor marks it. */
@@ -81,7 +131,22 @@ export async function openLayoutEditor(
   page.on("console", (m) => m.type() === "error" && failures.push(m.text()));
   await signInThroughForm(page, at.url, at.email, PASSWORD);
   await page.goto(`${at.url}/stores/${at.storeId}/plans/${at.planId}/layout`);
-  await page.locator(`${LAYOUT_STAGE} canvas`).first().waitFor();
+  await page
+    .locator(`${LAYOUT_STAGE} canvas`)
+    .first()
+    .waitFor()
+    .catch(async (e) => {
+      // Once in many loaded runs the editor had not opened after 30 s: say what the page showed.
+      const shot = path.resolve(import.meta.dirname, `../../test-results/screens/layout-not-open-${Date.now()}.png`);
+      await page.screenshot({ path: shot }).catch(() => undefined);
+      const shown = await page
+        .locator("main")
+        .innerText({ timeout: 1000 })
+        .catch(() => "(no main)");
+      throw new Error(`the layout editor did not open; the page showed: ${shown.slice(0, 300)} (screenshot ${shot})`, {
+        cause: e,
+      });
+    });
   await stageSettled(page);
   return { context, page, failures };
 }

@@ -6,7 +6,7 @@ import { outboxMessages } from "../../server/db/schema/index";
  * The newest message to `to` caught after `since`. Some mail is queued only after the answer (so
  * known and unknown addresses answer alike): poll briefly, delivering what the queue holds each time.
  */
-export async function waitForMail(ctx: Pick<AppContext, "db" | "mailer">, to: string, since: Date, timeoutMs = 10_000) {
+export async function waitForMail(ctx: Pick<AppContext, "db" | "mailer">, to: string, since: Date, timeoutMs = 20_000) {
   const until = Date.now() + timeoutMs;
   for (;;) {
     await ctx.mailer.drain();

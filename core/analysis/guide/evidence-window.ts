@@ -62,7 +62,8 @@ const MIN_AREA_M2 = 1e-4;
 
 /**
  * The input cut to `box`: obstacles, fixtures and zones clipped to it, risk points and readings inside
- * it, everything moved so the box's corner is the origin. Readings keep their times (and so their order).
+ * it, everything moved so the box's corner is the origin. Readings keep their times (and so their order)
+ * and their passes.
  */
 export function cutToWindow(input: LocatorInput, box: PlanBox): EvidenceWindow {
   const { plan } = input;
@@ -97,5 +98,6 @@ export function cutToWindow(input: LocatorInput, box: PlanBox): EvidenceWindow {
     kept.push(i);
     readings.push({ ...r, x: r.x - box.x, y: r.y - box.y });
   });
-  return { box, kept, input: { plan: cut, instrument: input.instrument, readings } };
+  // the passes travel with their readings: a pass over a fixture outside the window changes no air in it
+  return { box, kept, input: { plan: cut, instrument: input.instrument, readings, passes: input.passes } };
 }

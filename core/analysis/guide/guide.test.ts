@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import type { Candidate, CorrectedReading } from "../../contracts/locator-output";
 import { parseLocatorInput } from "../../contracts/locator-input";
 import { rect } from "../pipeline/stage-fixtures";
-import { hypothesesOf, nextProbes, probesAroundAlarm, type Hypothesis } from "./next-probes";
+import { hypothesesOf, nextProbes, type Hypothesis } from "./next-probes";
 import { probePlaces } from "./probe-places";
 
 // A 12 x 6 m aisle with two 2.4 m cases against the north wall (y 0..1), side by side, and a walk-in.
@@ -35,6 +35,16 @@ describe("probePlaces", () => {
     }
     const xs = fronts.map((p) => p.x).sort((a, b) => a - b);
     for (let k = 1; k < xs.length; k++) expect(xs[k] - xs[k - 1]).toBeCloseTo(0.6, 5);
+  });
+
+  it("offers a walk-in whose wall is within reach though its middle is not", () => {
+    // the walk-in's middle (10, 1.5) is 3.5 m from (6.5, 1); its west wall (x = 8) is 1.5 m away
+    const places = probePlaces(plan, { x: 6.5, y: 1 }, 2);
+    expect(places.filter((p) => p.fixtureId === "walk-in").map((p) => [p.kind, p.x, p.y])).toEqual([
+      ["room-low", 10, 1.5],
+      ["room-high", 10, 1.5],
+    ]);
+    expect(probePlaces(plan, { x: 5, y: 1 }, 2).some((p) => p.fixtureId === "walk-in")).toBe(false);
   });
 
   it("offers the middle of a walk-in low and high, and line-set drops", () => {
@@ -108,20 +118,5 @@ describe("hypothesesOf", () => {
     expect(hs).toHaveLength(5);
     expect(hs[0].amplitude).toBeCloseTo(12, 9);
     expect(hs.reduce((s, x) => s + x.weight, 0)).toBeCloseTo(1, 9);
-  });
-});
-
-describe("probesAroundAlarm", () => {
-  it("goes first to the case front nearest where the alarm's air was drawn in, not where a reading was taken", () => {
-    const places = probePlaces(plan, { x: 3.4, y: 1.5 }, 3).filter((p) => p.kind === "case-front");
-    const origin = { x: 3.0, y: 1.6 };
-    const [first, second] = probesAroundAlarm(origin, places, []);
-    const distances = places.map((p) => Math.hypot(p.x - origin.x, p.y - origin.y)).sort((a, b) => a - b);
-    expect(Math.hypot(first.x - origin.x, first.y - origin.y)).toBeCloseTo(distances[0], 9);
-    expect(Math.hypot(second.x - origin.x, second.y - origin.y)).toBeCloseTo(distances[1], 9);
-    // a reading already taken at the nearest place sends the next probe elsewhere
-    const next = probesAroundAlarm(origin, places, [{ x: first.x, y: first.y }]);
-    expect(next.every((p) => Math.hypot(p.x - first.x, p.y - first.y) >= 0.6)).toBe(true);
-    expect(next.length).toBe(3);
   });
 });

@@ -69,6 +69,21 @@ describe("the evidence window", () => {
 });
 
 describe("the live estimate", () => {
+  it("before any credible spot, leads to the case where two alarm readings' gas was strongest", () => {
+    // Two 3 ppm readings over 0.4 ppm elsewhere, no delay: too weak for a credible spot, enough to
+    // say the gas is strongest so far in front of case 4 (x 9.2-11.6), at its back or the drop.
+    const base = store(null);
+    const readings = base.readings.map((r) => ({ ...r, ppm: r.x === 10 || r.x === 11 ? 3 : 0.4 }));
+    const input = parseLocatorInput({ ...base, readings });
+    const { estimate } = liveFit(input);
+    expect(estimate.kind).toBe("no-spot");
+    if (estimate.kind !== "no-spot") return;
+    expect(estimate.lead).toBeDefined();
+    expect(estimate.lead!.fixtureId).toBe("case-4");
+    expect(estimate.lead!.x).toBeGreaterThan(9.2);
+    expect(estimate.lead!.x).toBeLessThan(11.6);
+  });
+
   it("puts its first suspect where the full analysis of the whole plan puts it, within its radius", () => {
     // The reference is the same locator on the whole store, as the server runs it after submit.
     const input = store(33);
@@ -95,7 +110,32 @@ describe("the live estimate", () => {
     }
   });
 
-  it("suggests nothing without a suspect", () => {
+  it("suggests nothing without an alarm", () => {
     expect(liveProbes(liveFit(store(null, 50)), { x: 0, y: 0 })).toEqual([]);
+  });
+
+  it("with an alarm but no credible spot yet, traces the gas between where the alarm's air was drawn in and the alarm", () => {
+    // One 3 ppm reading at x = 11 over 0.4 ppm elsewhere, 3 s of delay at a tap a metre every 2 s: its
+    // air was drawn in about 3 m back along the walk. One reading is not a credible spot.
+    const base = store(null);
+    const readings = base.readings.map((r) => ({ ...r, ppm: r.x === 11 ? 3 : 0.4 }));
+    const input = parseLocatorInput({
+      plan: base.plan,
+      instrument: { transportDelayS: 3, timeConstantS: 0, alarmPpm: 2 },
+      readings,
+    });
+    const fit = liveFit(input);
+    expect(fit.estimate).toMatchObject({ kind: "no-spot" });
+    // one reading at the alarm is no lead yet: it may be a wisp
+    expect(fit.estimate.kind === "no-spot" && fit.estimate.lead).toBeFalsy();
+    const probes = liveProbes(fit, { x: 11, y: 2.2 });
+    expect(probes.length).toBeGreaterThan(0);
+    for (const p of probes) {
+      expect(p.reason.kind).toBe("traces");
+      // within the search's reach (3 m) of the stretch from x ≈ 8 to the alarm at x = 11
+      expect(p.x).toBeGreaterThan(8 - 3.5);
+      expect(p.x).toBeLessThan(11 + 3.5);
+      if (p.kind === "case-front") expect(CASES.some((c) => pointInPolygon([p.x, p.y], c.polygon))).toBe(false);
+    }
   });
 });

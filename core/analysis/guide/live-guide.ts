@@ -3,7 +3,8 @@ import type { CorrectedReading, SuspectSpotFacts } from "../../contracts/locator
 import { locate, type LocatorOptions } from "../locate";
 import { LOCATOR_SETTINGS } from "../locator/settings";
 import { createSourceKernel } from "../locator/source-kernel";
-import { cutToWindow, evidenceBox, type PlanBox } from "./evidence-window";
+import { evidenceOf, searchAroundAlarm } from "./evidence-search";
+import { cutToWindow, evidenceBox, type EvidenceWindow, type PlanBox } from "./evidence-window";
 import { hypothesesOf, nextProbes, type ProbeSuggestion } from "./next-probes";
 import { probePlaces } from "./probe-places";
 
@@ -21,8 +22,20 @@ export interface LiveSuspect {
 /** The live estimate on the readings the device holds; `box` is the part of the plan it looked at. */
 export type LiveEstimate =
   | { kind: "no-alarm"; readings: number }
-  | { kind: "no-spot"; readings: number; box: PlanBox }
+  | { kind: "no-spot"; readings: number; box: PlanBox; lead?: LiveLead }
   | { kind: "suspects"; readings: number; box: PlanBox; suspects: LiveSuspect[] };
+
+/**
+ * Before any spot is credible: where the gas is strongest so far (the likeliest leak site around the
+ * strongest alarm, evidence-search.ts), and the share of the sites' weight within 0.6 m of it. A lead
+ * to probe around, not a suspect spot: the locator has not found it credible.
+ */
+export interface LiveLead {
+  x: number;
+  y: number;
+  fixtureId: string | null;
+  share: number;
+}
 
 /** What the next-probe step needs from the estimate, kept in the window's own coordinates. */
 export interface LiveFit {
@@ -82,10 +95,13 @@ export function liveFit(input: LocatorInput, options: Partial<LocatorOptions> = 
     riskPointId: c.riskPointId,
   }));
   const n = window.input.readings.length;
+  const lead = suspects.length ? null : leadOf(window, result.readings);
   return {
     estimate: suspects.length
       ? { kind: "suspects", readings: n, box, suspects }
-      : { kind: "no-spot", readings: n, box },
+      : lead
+        ? { kind: "no-spot", readings: n, box, lead }
+        : { kind: "no-spot", readings: n, box },
     window,
     candidates: result.candidates,
     corrected: result.readings,
@@ -107,11 +123,9 @@ export type LiveProbe = Omit<ProbeSuggestion, "value">;
  */
 export function liveProbes(fit: LiveFit, from: { x: number; y: number }, n = 3): LiveProbe[] {
   const { window, candidates } = fit;
-  if (!window || candidates.length === 0) return [];
+  if (!window) return [];
+  if (candidates.length === 0) return alarmProbes(fit, window, from, n);
   const { box } = window;
-  const k = LOCATOR_SETTINGS.kernel;
-  const source = createSourceKernel(k.screeningLengthM, k.nearCutoffM, k.truncationM);
-  const kernel = (d: number) => source.at(d);
   const first = candidates[0];
   // A place where a reading was already taken is not offered again: the technician has its answer.
   const taken = window.input.readings;
@@ -120,11 +134,63 @@ export function liveProbes(fit: LiveFit, from: { x: number; y: number }, n = 3):
   );
   const hypotheses = hypothesesOf(candidates, fit.corrected, kernel);
   const here = { x: from.x - box.x, y: from.y - box.y };
-  return nextProbes(hypotheses, places, kernel, here, n).map(({ value: _value, ...p }) => ({
-    ...p,
-    x: round2(p.x + box.x),
-    y: round2(p.y + box.y),
-  }));
+  return toPlan(nextProbes(hypotheses, places, kernel, here, n), box);
 }
+
+/** A lead once two readings have reached the alarm (one may be a wisp; the trade re-checks it too). */
+function leadOf(window: EvidenceWindow, corrected: CorrectedReading[]): LiveLead | null {
+  const alarmPpm = window.input.instrument.alarmPpm;
+  if (corrected.filter((r) => r.ppm >= alarmPpm && !r.flags.includes("in-benign-zone")).length < 2) return null;
+  const mark = alarmSearch(window, corrected, { x: 0, y: 0 }, 0)?.mark;
+  if (!mark) return null;
+  const { box } = window;
+  return { x: round2(mark.x + box.x), y: round2(mark.y + box.y), fixtureId: mark.fixtureId, share: round2(mark.share) };
+}
+
+/**
+ * While no spot is credible: where the strongest alarm's gas came from (evidence-search.ts), probing
+ * between where its air was drawn in and where it was read, to bracket the peak along the case.
+ */
+function alarmProbes(fit: LiveFit, window: EvidenceWindow, from: { x: number; y: number }, n: number): LiveProbe[] {
+  const { box } = window;
+  const search = alarmSearch(window, fit.corrected, { x: from.x - box.x, y: from.y - box.y }, n);
+  return search ? toPlan(search.probes, box) : [];
+}
+
+/** searchAroundAlarm on the window, about its strongest alarm (window coordinates). */
+function alarmSearch(window: EvidenceWindow, corrected: CorrectedReading[], from: { x: number; y: number }, n: number) {
+  const alarm = strongestAlarm(corrected, window.input.instrument.alarmPpm);
+  if (!alarm) return null;
+  return searchAroundAlarm({
+    plan: window.input.plan,
+    origin: alarm.corrected,
+    alarm: alarm.raw,
+    evidence: evidenceOf(corrected, window.input.instrument),
+    read: window.input.readings,
+    from,
+    kernel,
+    n,
+  });
+}
+
+/** The strongest reading at or above the alarm outside benign zones (the latest of equals), as the window anchors on. */
+function strongestAlarm(readings: readonly CorrectedReading[], alarmPpm: number): CorrectedReading | null {
+  let best: CorrectedReading | null = null;
+  for (const r of readings) {
+    if (r.ppm < alarmPpm || r.flags.includes("in-benign-zone")) continue;
+    if (!best || r.ppm >= best.ppm) best = r;
+  }
+  return best;
+}
+
+const toPlan = (probes: ProbeSuggestion[], box: PlanBox): LiveProbe[] =>
+  probes.map(({ value: _value, ...p }) => ({ ...p, x: round2(p.x + box.x), y: round2(p.y + box.y) }));
+
+const sourceKernel = createSourceKernel(
+  LOCATOR_SETTINGS.kernel.screeningLengthM,
+  LOCATOR_SETTINGS.kernel.nearCutoffM,
+  LOCATOR_SETTINGS.kernel.truncationM,
+);
+const kernel = (d: number) => sourceKernel.at(d);
 
 const round2 = (v: number) => Math.round(v * 100) / 100;

@@ -16,7 +16,9 @@ export interface Hypothesis {
 /** Why a probe place was chosen, as facts; the words are the presenter's. */
 export type ProbeReason =
   | { kind: "separates"; ranks: [number, number]; fixtureIds: [string | null, string | null] }
-  | { kind: "narrows"; rank: number; fixtureId: string | null };
+  | { kind: "narrows"; rank: number; fixtureId: string | null }
+  /** Before any credible spot: finds where along this fixture the alarm's gas is strongest (evidence-search.ts). */
+  | { kind: "traces"; fixtureId: string | null };
 
 export interface ProbeSuggestion extends ProbePlace {
   /** Expected information from a reading here (a sum of pairwise separations; larger tells more). */
@@ -140,26 +142,4 @@ function permutations<T>(items: T[]): T[][] {
   return items.flatMap((item, k) =>
     permutations([...items.slice(0, k), ...items.slice(k + 1)]).map((rest) => [item, ...rest]),
   );
-}
-
-/**
- * Before the readings support any suspect spot: up to `n` probe places nearest to where the alarm's
- * air was drawn in (the alarm reading moved back along the walk by the delay), skipping places within
- * `minSpacingM` of a reading already taken, nearest first. The trade re-checks there first too (walk
- * back one delay, common practice, no published source); each reading there either starts a suspect or
- * shows the alarm was a passing wisp.
- */
-export function probesAroundAlarm(
-  origin: { x: number; y: number },
-  places: readonly ProbePlace[],
-  taken: readonly { x: number; y: number }[],
-  n = 3,
-  minSpacingM = 0.6,
-): ProbePlace[] {
-  const fresh = places.filter((p) => taken.every((t) => Math.hypot(t.x - p.x, t.y - p.y) >= minSpacingM));
-  return fresh
-    .map((p) => ({ p, d: Math.hypot(p.x - origin.x, p.y - origin.y) }))
-    .sort((a, b) => a.d - b.d)
-    .slice(0, n)
-    .map(({ p }) => p);
 }

@@ -1,5 +1,6 @@
 import type { LocatorInput } from "../../contracts/locator-input";
 import { pointInPolygon } from "../geometry/point-in-polygon";
+import { distanceToPolygonEdge } from "../geometry/segments";
 
 type Plan = LocatorInput["plan"];
 type ProbeKind = "case-front" | "room-low" | "room-high" | "line-set";
@@ -19,8 +20,8 @@ const ROOMS = new Set(["walk-in", "machine-room"]);
 
 /**
  * Probe places within `reachM` of `near`: every `spacingM` along the open sides of each case (not
- * inside a solid body or another fixture), the middle of each walk-in and machine room (low and
- * high), and each line-set drop. The trade re-checks case fronts every 0.6 m (common practice, no
+ * inside a solid body or another fixture), the middle of each walk-in and machine room whose walls
+ * come within reach (low and high), and each line-set drop. The trade re-checks case fronts every 0.6 m (common practice, no
  * published source).
  */
 export function probePlaces(plan: Plan, near: { x: number; y: number }, reachM: number, spacingM = 0.6): ProbePlace[] {
@@ -36,7 +37,8 @@ export function probePlaces(plan: Plan, near: { x: number; y: number }, reachM: 
   for (const f of plan.fixtures) {
     if (ROOMS.has(f.kind)) {
       const [cx, cy] = centroid(f.polygon);
-      if (within(cx, cy)) {
+      // A room counts when its walls come within reach: its gas leaves by the door, its fans mix it.
+      if (roomWithin(f.polygon, near, reachM)) {
         out.push({ x: cx, y: cy, kind: "room-low", fixtureId: f.id });
         out.push({ x: cx, y: cy, kind: "room-high", fixtureId: f.id });
       }
@@ -65,6 +67,12 @@ export function probePlaces(plan: Plan, near: { x: number; y: number }, reachM: 
   for (const p of plan.riskPoints)
     if (p.kind === "line-set" && within(p.x, p.y)) out.push({ x: p.x, y: p.y, kind: "line-set", fixtureId: null });
   return out;
+}
+
+/** Whether a room's outline comes within `reachM` of `near` (or holds it). */
+export function roomWithin(ring: readonly (readonly number[])[], near: { x: number; y: number }, reachM: number) {
+  const polygon = ring.map(([x, y]) => [x, y] as [number, number]);
+  return pointInPolygon([near.x, near.y], polygon) || distanceToPolygonEdge([near.x, near.y], polygon) <= reachM;
 }
 
 function centroid(ring: readonly (readonly number[])[]): [number, number] {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { createPlanGrid } from "../grid/plan-grid";
 import { gridRoute } from "./grid-route";
-import { lagCorrect, type Tap } from "./lag-correct";
+import { lagCorrect, NEW_WALK_PAUSE, type Tap } from "./lag-correct";
 
 // Worked example (docs/locator/method.md, lag correction): walking 1 m/s with 5 s of delay, a reading describes the air 5 m back.
 describe("lag correction", () => {
@@ -92,5 +92,51 @@ describe("lag correction", () => {
         0,
       ),
     ).toThrow(/time order/);
+  });
+
+  describe("a pinpoint pass or a long pause starts a new walk", () => {
+    // the first pass along x at 1 m/s, one tap a second from x 0 to 10
+    const first: Tap[] = Array.from({ length: 11 }, (_, t) => ({ x: t, y: 0, t }));
+    const then = (x0: number, t0: number, pass?: string): Tap[] =>
+      Array.from({ length: 8 }, (_, k) => ({ x: x0 + k, y: 0, t: t0 + k, ...(pass ? { pass } : {}) }));
+
+    it("places a pass's first readings at its first tap, not back along the walk from the last pass", () => {
+      // four seconds later the pass starts at x 12: s = 14 - 5 = 9 s would be x 9 in the first pass
+      const taps = [...first, ...then(12, 14, "p2")];
+      const out = lagCorrect(taps, 5, 0, { walkSpeedMps: 1 });
+      expect(out[11]).toEqual({ x: 12, y: 0, beforeDelay: true, pathGap: false });
+      expect(out.slice(11, 16).map((p) => p.beforeDelay)).toEqual([true, true, true, true, true]);
+      // five seconds into the pass the walk is its own again: x 17 at 19 s was sampled at x 12
+      expect(out[16]).toEqual({ x: 12, y: 0, beforeDelay: false, pathGap: false });
+      expect(out[18].x).toBe(14);
+      // the same taps in one pass: moved back across the gap as before (s = 9 s: x 9)
+      expect(lagCorrect([...first, ...then(12, 14)], 5, 0, { walkSpeedMps: 1 })[11].x).toBe(9);
+    });
+
+    it("starts a walk again when the pass ends and readings return to the first pass", () => {
+      const taps = [...first, ...then(12, 14, "p2"), ...then(30, 40)];
+      const out = lagCorrect(taps, 5, 0, { walkSpeedMps: 1 });
+      expect(out[19]).toEqual({ x: 30, y: 0, beforeDelay: true, pathGap: false });
+      // a null pass is the first pass, as an absent one
+      const nulls = taps.map((tp) => ({ ...tp, pass: tp.pass ?? null }));
+      expect(lagCorrect(nulls, 5, 0, { walkSpeedMps: 1 })).toEqual(out);
+    });
+
+    it("takes a pause of over a minute and ten shifts, less the walk at pace, as a new walk", () => {
+      expect(NEW_WALK_PAUSE).toEqual({ minS: 60, shifts: 10 });
+      const at = (gapS: number, x = 12, delayS = 5, pace = true) =>
+        lagCorrect([...first, { x, y: 0, t: 10 + gapS }], delayS, 0, pace ? { walkSpeedMps: 1 } : {})[11];
+      // 2 m in 90 s: 88 s standing, a pause: the reading stays at its own tap
+      expect(at(90)).toEqual({ x: 12, y: 0, beforeDelay: true, pathGap: false });
+      // 2 m in 50 s: 48 s standing at x 10, no pause; 5 s back is still standing there
+      expect(at(50)).toEqual({ x: 10, y: 0, beforeDelay: false, pathGap: false });
+      // 80 m in 90 s at 1 m/s is a walk, not a pause: 5 s back is 5 m back along it
+      expect(at(90, 90)).toMatchObject({ x: 85, beforeDelay: false });
+      // with an 8 s delay the pause must be 80 s: 70 s (68 s standing) is none
+      expect(at(70, 12, 8)).toMatchObject({ x: 10, beforeDelay: false });
+      expect(at(83, 12, 8)).toMatchObject({ x: 12, beforeDelay: true });
+      // without a pace the whole gap counts: 70 s is a pause
+      expect(at(70, 90, 5, false)).toMatchObject({ x: 90, beforeDelay: true });
+    });
   });
 });

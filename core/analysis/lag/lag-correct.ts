@@ -6,6 +6,8 @@ export interface Tap {
   y: number;
   /** Seconds from the sweep's start, at the position tap. */
   t: number;
+  /** The pinpoint pass the tap belongs to (absent or null: the first pass); a change of pass starts a new walk. */
+  pass?: string | null;
 }
 
 /** The walked route from tap a to tap b as a polyline that starts at a and ends at b, or null if unknown. */
@@ -14,7 +16,7 @@ export type Route = (a: Tap, b: Tap) => readonly (readonly [number, number])[] |
 export interface LaggedPosition {
   x: number;
   y: number;
-  /** The reading was taken before one delay had elapsed: it is placed at the first tap. */
+  /** The reading was taken before one delay had elapsed since its walk began: it is placed at the walk's first tap. */
   beforeDelay: boolean;
   /** The probe was between two taps farther apart than `maxStepM`, so where it went is a guess. */
   pathGap: boolean;
@@ -27,6 +29,11 @@ export interface LaggedPosition {
  * interpolated in time between the taps around s and along the walked route between them (around solid
  * bodies when `route` says so; straight otherwise), evenly or stop-and-go (`walkSpeedMps`).
  * Taps must be in time order.
+ *
+ * The walked path is cut into walks: a pinpoint pass starts a new one (the technician went to stop the
+ * fans or start a defrost, which takes minutes), and so does a pause much longer than the shift. No
+ * reading is moved back across the cut: where the probe was before a walk's first tap is not known, so a
+ * reading taken less than one shift into a walk is placed at its first tap, as at the sweep's start.
  */
 export interface LagOptions {
   /** The walked route between taps; straight when absent. */
@@ -40,6 +47,16 @@ export interface LagOptions {
    */
   walkSpeedMps?: number;
 }
+
+/**
+ * A pause of at least `minS` and `shifts` times the shift (delay + τ) starts a new walk. The pause is
+ * the time between two taps less the walk between them at `walkSpeedMps` (the whole gap without a
+ * pace), so a long walk across the store is not a pause. A minute and ten shifts: far longer than a
+ * stop of a sweep or a re-check (seconds) and than a slow walker's surplus on a crossing of a large
+ * store, shorter than stopping a case's fans and letting the air settle (common practice, no
+ * published source).
+ */
+export const NEW_WALK_PAUSE = { minS: 60, shifts: 10 } as const;
 
 export function lagCorrect(
   taps: readonly Tap[],
@@ -71,11 +88,26 @@ export function lagCorrect(
     }
     return r;
   };
-  return taps.map((tap) => {
+  const pauseS = Math.max(NEW_WALK_PAUSE.minS, NEW_WALK_PAUSE.shifts * shift);
+  // the first and last tap of each tap's walk
+  const firstOf = new Int32Array(taps.length);
+  for (let k = 1; k < taps.length; k++) {
+    const gap = taps[k].t - taps[k - 1].t;
+    const newPass = (taps[k].pass ?? null) !== (taps[k - 1].pass ?? null);
+    // the route is asked for only when the gap alone could be a pause
+    const paused =
+      gap > pauseS && gap - (walkSpeedMps !== undefined ? polylineLength(routeOf(k - 1)) / walkSpeedMps : 0) > pauseS;
+    firstOf[k] = newPass || paused ? k : firstOf[k - 1];
+  }
+  const lastOf = new Int32Array(taps.length);
+  for (let k = taps.length - 1; k >= 0; k--)
+    lastOf[k] = k + 1 < taps.length && firstOf[k + 1] === firstOf[k] ? lastOf[k + 1] : k;
+  return taps.map((tap, k) => {
     const s = tap.t - shift;
-    if (s < taps[0].t) return { x: taps[0].x, y: taps[0].y, beforeDelay: true, pathGap: false };
-    const j = lastTapAtOrBefore(taps, s);
-    if (j >= taps.length - 1) return { x: taps[j].x, y: taps[j].y, beforeDelay: false, pathGap: false };
+    const first = taps[firstOf[k]];
+    if (s < first.t) return { x: first.x, y: first.y, beforeDelay: true, pathGap: false };
+    const j = Math.min(lastTapAtOrBefore(taps, s), lastOf[k]);
+    if (j >= lastOf[k]) return { x: taps[j].x, y: taps[j].y, beforeDelay: false, pathGap: false };
     const a = taps[j];
     const b = taps[j + 1];
     const path = routeOf(j);

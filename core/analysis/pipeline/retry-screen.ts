@@ -2,10 +2,20 @@ import type { LocatorInput } from "../../contracts/locator-input";
 import type { PlanGrid } from "../grid/plan-grid";
 import { casesRunFans } from "../locator/plan-masks";
 import type { LocatorSettings } from "../locator/settings";
-import { fieldStage } from "./field-stage";
+import { fieldStage, type OtherAir } from "./field-stage";
 import type { LagResult } from "./lag-stage";
 import { sourcesStage } from "./sources-stage";
 import type { ZonesResult } from "./zones-stage";
+
+/** What the field and sources stages need to fit every pass (locate.ts works it out per lag). */
+export interface PassFit {
+  /** The pinpoint passes' own air (null: one pass, or none that changes the air). */
+  readonly otherAir: OtherAir | null;
+  /** One fixed column per stilled fixture whose mixed readings say its level only (locator/mixed-level.ts). */
+  readonly levelColumns: readonly Float64Array[];
+}
+
+export const NO_PASSES: PassFit = { otherAir: null, levelColumns: [] };
 
 // Cells this close to the plume's peak reading are the ones the screen judges, m: a spot that fits a
 // plume lies by its strongest reading, and a lag the screen tries moves that reading with the rest.
@@ -20,6 +30,8 @@ const PLUME_REGION_M = 6;
  * better-fitting cell lies farther from the peak (or gas reaches a cell of the region through a
  * fan-stirred room from farther than the straight-line cut-off), and then a retry may be skipped that a
  * full run would have kept. The benchmark sets showed no such store (docs/locator/pipeline.md).
+ * Every pass is seen as the full run sees it (`passes`): each reading searched in its own air, a
+ * stilled fixture's mixed readings as its level only.
  */
 export function spotFitsPlume(
   plan: LocatorInput["plan"],
@@ -29,6 +41,7 @@ export function spotFitsPlume(
   zones: ZonesResult,
   peak: number,
   settings: LocatorSettings,
+  passes: PassFit = NO_PASSES,
 ): boolean {
   const k = settings.kernel;
   const n = lag.ppm.length;
@@ -39,7 +52,16 @@ export function spotFitsPlume(
   const reachM = PLUME_REGION_M + k.truncationM + 2 * grid.cellSize;
   const searched = new Uint8Array(n);
   for (let i = 0; i < n; i++) searched[i] = Math.hypot(lag.xs[i] - px, lag.ys[i] - py) <= reachM ? 1 : 0;
-  const field = fieldStage(grid, stepScale, casesRunFans(plan.fixtures), lag, zones, settings, searched);
+  const field = fieldStage(
+    grid,
+    stepScale,
+    casesRunFans(plan.fixtures),
+    lag,
+    zones,
+    settings,
+    searched,
+    passes.otherAir,
+  );
   // cells outside the region are ruled out as they are for a spot out of every reading's reach
   const nearestReading = new Float32Array(field.fields.nearestReading.length).fill(Infinity);
   const h = grid.cellSize;
@@ -66,6 +88,7 @@ export function spotFitsPlume(
       sources: settings.sources,
       zoneMarginM: settings.zones.marginM,
     },
+    passes.levelColumns,
   );
   return sources.found.length > 0;
 }

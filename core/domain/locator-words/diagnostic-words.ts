@@ -23,7 +23,7 @@ export function diagnosticWords(d: LocatorDiagnostic, ctx: WordsContext): string
     case "one-sided-pass":
       return "The top suspect spot is seen from one pass only, so which side of the path it is on cannot be told: make a pass along the other face.";
     case "early-readings":
-      return `${d.count} ${plural(d.count, "reading was", "readings were")} taken before one delay plus response time (${secondsWords(d.shiftS, ctx)}) had passed and ${plural(d.count, "is", "are")} placed at the first tap.`;
+      return `${d.count} ${plural(d.count, "reading was", "readings were")} taken before one delay plus response time (${secondsWords(d.shiftS, ctx)}) had passed since their walk began (the sweep, a pinpoint pass, or a walk after a long pause) and ${plural(d.count, "is", "are")} placed at its first tap.`;
     case "over-range":
       return `${d.count} ${plural(d.count, "reading was", "readings were")} over range and counted as "at least" that value.`;
     case "delay-check": {

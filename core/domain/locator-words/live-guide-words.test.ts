@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import type { LiveProbe } from "../../analysis/guide/live-guide";
-import { liveSuspectWords, probePlaceWords, probeReasonWords } from "./live-guide-words";
+import { liveLeadWords, liveSuspectWords, probePlaceWords, probeReasonWords } from "./live-guide-words";
 import { wordsContext } from "./present-analysis";
 
 // Names from an invented store's plan.
@@ -30,6 +30,18 @@ describe("the live guide's words", () => {
     ).toBe("tells two spots on Dairy 4 apart");
     expect(probeReasonWords(probe({ reason: { kind: "narrows", rank: 2, fixtureId: null } }), ctx("m"))).toBe(
       "narrows down where on suspect 2 the leak is",
+    );
+  });
+
+  it("before a credible spot, says the probe traces the gas and where it is strongest so far, not a spot", () => {
+    expect(probeReasonWords(probe({ reason: { kind: "traces", fixtureId: "c5" } }), ctx("m"))).toBe(
+      "finds where along Dairy 5 the alarm's gas is strongest",
+    );
+    expect(liveLeadWords({ x: 3, y: 0.2, fixtureId: "c4", share: 0.4 }, ctx("m"))).toBe(
+      "No credible spot yet: the gas is strongest so far at Dairy 4",
+    );
+    expect(liveLeadWords({ x: 3, y: 0.2, fixtureId: null, share: 0.4 }, ctx("m"))).toBe(
+      "No credible spot yet: the gas is strongest so far here",
     );
   });
 

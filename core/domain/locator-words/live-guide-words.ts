@@ -1,4 +1,4 @@
-import type { LiveProbe, LiveSuspect } from "../../analysis/guide/live-guide";
+import type { LiveLead, LiveProbe, LiveSuspect } from "../../analysis/guide/live-guide";
 import { lengthWords } from "./length-words";
 import type { WordsContext } from "./words-context";
 
@@ -14,6 +14,12 @@ function spotName(rank: number, fixtureId: string | null, ctx: WordsContext): st
 export function liveSuspectWords(s: LiveSuspect, ctx: WordsContext): string {
   const where = (s.fixtureId && ctx.name(s.fixtureId)) || "open floor";
   return `Suspect ${s.rank}: ${where}, within ${lengthWords(s.radius, ctx.length, ctx.numbers)}`;
+}
+
+/** Before any credible spot: where the gas is strongest so far, said to be provisional. */
+export function liveLeadWords(lead: LiveLead, ctx: WordsContext): string {
+  const name = lead.fixtureId && ctx.name(lead.fixtureId);
+  return `No credible spot yet: the gas is strongest so far ${name ? `at ${name}` : "here"}`;
 }
 
 /** Where the probe goes, as the technician finds it on the floor. */
@@ -38,6 +44,10 @@ export function probeReasonWords(p: LiveProbe, ctx: WordsContext): string {
     const a = spotName(r.ranks[0], r.fixtureIds[0], ctx);
     const b = spotName(r.ranks[1], r.fixtureIds[1], ctx);
     return a === b ? `tells two spots on ${a} apart` : `tells ${a} from ${b}`;
+  }
+  if (r.kind === "traces") {
+    const where = (r.fixtureId && ctx.name(r.fixtureId)) || "the cases here";
+    return `finds where along ${where} the alarm's gas is strongest`;
   }
   return `narrows down where on ${spotName(r.rank, r.fixtureId, ctx)} the leak is`;
 }

@@ -1,10 +1,12 @@
-// Plumeline's way after an alarm: run the locator on the readings so far, mark its first suspect, and
-// take the next reading where it best tells the current hypotheses apart (core/analysis/guide). Stop
-// when the first suspect has settled: it moved less than SETTLED_M over the last SETTLED_READINGS.
-// While the readings support no suspect yet, the next reading goes where the alarm's air was drawn in
-// (probesAroundAlarm), at most ORIGIN_PROBES times before the alarm counts as a passing wisp.
-import { hypothesesOf, nextProbes, probesAroundAlarm } from "#core/analysis/guide/next-probes";
-import { probePlaces } from "#core/analysis/guide/probe-places";
+// Plumeline's way after an alarm (decision 0077): after each reading, run the locator on the readings so
+// far and weigh the places a leak could be around the alarm (core/analysis/guide/evidence-search.ts:
+// case backs, risk points and rooms between where the alarm's air was drawn in and the alarm, around
+// the strongest reading so far, and around the locator's first suspect once that is credible). The
+// likeliest place is the mark, once a re-check has reached the alarm; the next reading goes where it
+// best tells the likely places apart, held as long as the trade rule's re-checks. Stop when the mark
+// has settled: it moved less than SETTLED_M over the last SETTLED_READINGS and holds SETTLED_SHARE of
+// the weight. If ORIGIN_PROBES probes never reach the alarm, it was a passing wisp and the sweep goes on.
+import { evidenceOf, searchAroundAlarm } from "#core/analysis/guide/evidence-search";
 import { locate } from "#core/analysis/locate";
 import { createSourceKernel } from "#core/analysis/locator/source-kernel";
 import { LOCATOR_SETTINGS } from "#core/analysis/locator/settings";
@@ -14,14 +16,12 @@ import { holdS } from "./trade-rule";
 
 const SETTLED_M = 0.3;
 const SETTLED_READINGS = 3;
-/** Probe places are looked for this far around the first suspect (m). */
-const REACH_M = 6;
-/** The live suspects are those within this distance of the alarm that started the search (m). */
+/** The mark settles only once it holds this share of the sites' weight (tuned on stores 6001-6003). */
+const SETTLED_SHARE = 0.3;
+/** The locator's suspects are those within this distance of the alarm that started the search (m). */
 const WINDOW_M = 8;
-/** Readings taken around the alarm's origin while no suspect is supported, before giving up on it. */
+/** Probes around the alarm that never reach the alarm before it counts as a wisp. */
 const ORIGIN_PROBES = 4;
-/** Probe places around the alarm's origin are looked for this far from it (m). */
-const ORIGIN_REACH_M = 3;
 
 export const guided: Policy = {
   name: "guided",
@@ -34,7 +34,9 @@ export const guided: Policy = {
     const alarmIndex = readings.length - 1;
     const alarm = readings[alarmIndex];
     const hold = holdS(world);
-    let originProbes = 0;
+    const alarmPpm = world.instrument.alarmPpm;
+    /** The places this search has probed (the technician knows where they held the probe). */
+    const visited: { x: number; y: number }[] = [];
     for (;;) {
       const input = parseLocatorInput({
         plan: world.plan,
@@ -42,32 +44,38 @@ export const guided: Policy = {
         readings: world.technician.readings,
       });
       const result = locate(input);
-      // The evidence around this alarm, not a spot elsewhere in the store the sweep passed earlier.
-      const near = result.candidates.filter((c) => Math.hypot(c.x - alarm.x, c.y - alarm.y) <= WINDOW_M);
-      const first = near[0];
+      // The locator's evidence around this alarm, not a spot elsewhere in the store passed earlier.
+      const first = result.candidates.find((c) => Math.hypot(c.x - alarm.x, c.y - alarm.y) <= WINDOW_M);
       const [x, y] = world.technician.position;
-      if (!first) {
-        // No credible spot from the readings so far: look where the alarm's air came from, then walk on.
-        if (originProbes >= ORIGIN_PROBES) return "nothing";
-        const origin = result.readings[alarmIndex].corrected;
-        const taken = readings.slice(alarmIndex);
-        const next = probesAroundAlarm(origin, probePlaces(input.plan, origin, ORIGIN_REACH_M), taken)[0];
-        if (!next) return "nothing";
-        originProbes++;
-        world.technician.probeAt(world.map, [next.x, next.y], hold);
-        yield { mark: null };
-        continue;
-      }
-      marks.push({ x: first.x, y: first.y });
+      const probes = readings.slice(alarmIndex + 1);
+      if (probes.length >= ORIGIN_PROBES && !probes.some((r) => r.ppm >= alarmPpm)) return "nothing";
+      const search = searchAroundAlarm({
+        plan: input.plan,
+        origin: result.readings[alarmIndex].corrected,
+        alarm,
+        // each reading at the place its air came from: a held probe read the air where it stood
+        evidence: evidenceOf(result.readings, input.instrument),
+        read: visited,
+        from: { x, y },
+        kernel,
+        also: first ? [{ x: first.x, y: first.y, reach: first.radius / 2 }] : [],
+      });
+      // Marked once a re-check has reached the alarm, as the trade rule marks only a peak at the alarm.
+      const confirmed = probes.some((r) => r.ppm >= alarmPpm);
+      const mark = confirmed && search.mark ? { x: search.mark.x, y: search.mark.y } : null;
+      const next = search.probes[0];
+      if (mark) marks.push(mark);
       const settled =
+        mark !== null &&
+        (search.mark?.share ?? 0) >= SETTLED_SHARE &&
         marks.length >= SETTLED_READINGS + 1 &&
-        marks.slice(-SETTLED_READINGS - 1).every((m) => Math.hypot(m.x - first!.x, m.y - first!.y) <= SETTLED_M);
-      yield { mark: marks[marks.length - 1] };
+        marks.slice(-SETTLED_READINGS - 1).every((m) => Math.hypot(m.x - mark.x, m.y - mark.y) <= SETTLED_M);
+      if (process.env.GUIDE_TRACE)
+        console.log(JSON.stringify({ credible: !!first, last: readings.at(-1), mark, next }));
+      yield { mark };
       if (settled) return "marked";
-      const places = probePlaces(input.plan, first, REACH_M);
-      const next = nextProbes(hypothesesOf(near, result.readings, kernel), places, kernel, { x, y })[0];
-      if (!next) return "marked";
-      // held as long as the trade rule's re-checks, so a reading is of the air where it was taken
+      if (!next) return mark ? "marked" : "nothing";
+      visited.push(next);
       world.technician.probeAt(world.map, [next.x, next.y], hold);
     }
   },

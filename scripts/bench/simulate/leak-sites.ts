@@ -69,6 +69,7 @@ export function chooseLeaks(family: Family, layout: StoreLayout, grid: Grid, ran
       return [];
     case "single-fans":
     case "single-still":
+    case "pinpoint-pass":
       return [draw(cases, anyKind, () => true)];
     case "walkin-fans":
       return [draw(walkins, ["coil", "coil", "line-set"], () => true)];

@@ -11,6 +11,7 @@ import { Technician } from "./technician";
 import { buildOperator, solveSteady, type TransportOperator } from "./transport";
 import { buildWalkMap, type WalkMap } from "./walk-path";
 import { chooseLeaks, type TrueLeak } from "./leak-sites";
+import { stillAirPass } from "./still-air-pass";
 
 export interface World {
   layout: StoreLayout;
@@ -22,6 +23,10 @@ export interface World {
   notes: Omit<Scenario["notes"], "samplesInSolid">;
   /** Probe positions on a solid cell so far: should stay zero (a routing fault otherwise). */
   samplesInSolid: () => number;
+  /** The store's own random stream, for what the technician decides after the first pass. */
+  random: Random;
+  /** Stops the fans of one fixture: the technician from now on samples the air solved without them. */
+  stopFans: (fixtureId: string) => void;
 }
 
 export interface Scenario {
@@ -35,7 +40,9 @@ export interface Scenario {
       backgroundZones: { id: string; polygon: number[][]; note: string }[];
     };
     instrument: { transportDelayS: number; timeConstantS: number; alarmPpm: number };
-    readings: { x: number; y: number; t: number; ppm: number; atLeast?: boolean }[];
+    readings: { x: number; y: number; t: number; ppm: number; atLeast?: boolean; pass?: string }[];
+    /** Pinpoint passes (the pinpoint-pass family): the fans of one fixture stopped. */
+    passes?: { id: string; fans: "stopped"; fixture: string }[];
   };
   truth: { family: Family; leaks: TrueLeak[]; benignZoneActive: boolean };
   /** Simulation facts for the log, not part of either file. */
@@ -53,7 +60,7 @@ const isCase = (f: FixtureSpec) => f.kind === "open-case" || f.kind === "door-ca
 function rasterise(
   layout: StoreLayout,
   random: Random,
-): { grid: Grid; diffusivity: Float64Array; caseMask: Uint8Array } {
+): { grid: Grid; diffusivity: Float64Array; caseMask: Uint8Array; aisle: number } {
   const h = layout.width * layout.height > 2500 ? 0.2 : 0.15;
   const grid = createGrid(layout.width, layout.height, h);
   const aisle = random.uniform(0.01, 0.05); // eddy diffusivity of aisle air, m^2/s
@@ -74,7 +81,7 @@ function rasterise(
     fillRect(grid, diffusivity, alongY ? { x0, y0, x1, y1: y0 + h } : { x0, y0, x1: x0 + h, y1 }, aisle);
   }
   for (const s of layout.solids) fillRect(grid, grid.solid, s.rect, 1);
-  return { grid, diffusivity, caseMask };
+  return { grid, diffusivity, caseMask, aisle };
 }
 
 function airTerminals(layout: StoreLayout, random: Random): AirTerminal[] {
@@ -121,7 +128,7 @@ export function buildWorld(family: Family, key: number): World {
   const random = createRandom(key);
   const layout = generateLayout(random);
   for (const f of layout.fixtures) f.fans = family === "single-still" && isCase(f) ? false : true;
-  const { grid, diffusivity, caseMask } = rasterise(layout, random);
+  const { grid, diffusivity, caseMask, aisle } = rasterise(layout, random);
   const ach = random.uniform(1.5, 4); // air changes per hour, including exchange with the air above
   const drift = potentialDrift(grid, terminalFlows(grid, airTerminals(layout, random)), random.uniform(0.02, 0.08));
   const op = buildOperator(grid, diffusivity, ach / 3600, drift);
@@ -129,14 +136,32 @@ export function buildWorld(family: Family, key: number): World {
   const iterations: number[] = [];
   const peaks: number[] = [];
   const total = new Float64Array(grid.nx * grid.ny);
+  const scales: number[] = [];
   for (const leak of leaks) {
     const g = solveFor(op, grid, [cellOf(grid, leak.x, leak.y)], iterations);
     // Strength is set by what the sweep could see, so every benchmark leak is findable in principle.
     const target = family === "single-still" ? logUniform(random, 5, 40) : logUniform(random, 3, 25);
     const scale = target / peakAlongLegs(layout, grid, g);
     for (let k = 0; k < total.length; k++) total[k] += scale * g[k];
+    scales.push(scale);
     peaks.push(round(target));
   }
+  // What the technician's probe samples: the solved field, or after a fixture's fans are stopped, the
+  // field solved again with that fixture's air still (the same leaks at the same strengths).
+  let air = total;
+  const stopFans = (fixtureId: string) => {
+    const f = layout.fixtures.find((x) => x.id === fixtureId);
+    if (!f) throw new Error(`stop fans: no fixture ${fixtureId}`);
+    const still = Float64Array.from(diffusivity);
+    fillRect(grid, still, f.rect, aisle * random.uniform(0.4, 1));
+    const op2 = buildOperator(grid, still, ach / 3600, drift);
+    const field = new Float64Array(grid.nx * grid.ny);
+    leaks.forEach((leak, i) => {
+      const g = solveFor(op2, grid, [cellOf(grid, leak.x, leak.y)], iterations);
+      for (let k = 0; k < field.length; k++) field[k] += scales[i] * g[k];
+    });
+    air = field;
+  };
   const zoneActive = family === "bg-zone";
   const zoneListed = zoneActive || random.chance(0.5);
   if (zoneActive) {
@@ -189,7 +214,7 @@ export function buildWorld(family: Family, key: number): World {
     dt,
     (x, y) => {
       if (grid.solid[cellOf(grid, x, y)]) samplesInSolid++;
-      return sampleField(grid, total, x, y);
+      return sampleField(grid, air, x, y);
     },
     random.uniform(0, 0.6),
     random,
@@ -217,14 +242,23 @@ export function buildWorld(family: Family, key: number): World {
     truth: { family, leaks, benignZoneActive: zoneActive },
     notes: { cells: grid.nx * grid.ny, cellSize: grid.h, solveIterations: iterations, peakPpm: peaks },
     samplesInSolid: () => samplesInSolid,
+    random,
+    stopFans,
   };
 }
 
 export function buildScenario(family: Family, key: number): Scenario {
   const world = buildWorld(family, key);
   for (const leg of world.layout.legs) world.technician.sweep(world.map, leg);
+  const passes =
+    family === "pinpoint-pass" ? [stillAirPass({ ...world, delayS: world.instrument.transportDelayS })] : [];
   return {
-    input: { plan: world.plan, instrument: world.instrument, readings: world.technician.readings },
+    input: {
+      plan: world.plan,
+      instrument: world.instrument,
+      readings: world.technician.readings,
+      ...(passes.length ? { passes } : {}),
+    },
     truth: world.truth,
     notes: { ...world.notes, samplesInSolid: world.samplesInSolid() },
   };

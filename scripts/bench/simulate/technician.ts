@@ -25,6 +25,8 @@ export interface SimReading {
   t: number;
   ppm: number;
   atLeast?: boolean;
+  /** The pinpoint pass it was taken in; absent: the first pass. */
+  pass?: string;
 }
 
 interface Tap {
@@ -214,6 +216,18 @@ export class Technician {
     this.dwell(holdS ?? this.random.uniform(st.recheckDwellS[0], st.recheckDwellS[1]));
     this.tap();
     return this.readings[this.readings.length - 1];
+  }
+
+  /** Stands where they are (the instrument keeps sampling): stopping a case's fans at its controller. */
+  pause(seconds: number): void {
+    this.dwell(seconds);
+  }
+
+  /** Walks to arc length `fromS` of a leg and re-checks it to `toS` at the re-check's spacing and pace. */
+  recheckSpan(map: WalkMap, leg: Leg, fromS: number, toS: number): void {
+    const st = this.settings;
+    this.walkTo(map, pointAt(leg.points, fromS));
+    this.sweepSpan(leg.points, fromS, toS, st.recheckSpacing, st.recheckDwellS, st.speed * st.recheckSpeedFactor);
   }
 
   get position(): Point {

@@ -260,23 +260,28 @@ describe("GET /api/sweeps/:id/analysis", () => {
     // both sessions log in first: a login (bcrypt) inside the window would outlast the analysis
     const engineer = await as("engineer");
     const watcher = await as("engineer");
-    let analysisDone = false;
-    const pending = engineer.get(`/api/sweeps/${id}/analysis`).then((r) => {
-      analysisDone = true;
-      return r;
-    });
-    while (runner.load === 0 && !analysisDone) await new Promise((r) => setTimeout(r, 2));
-    // the job is in the worker now: the event loop must still answer while it runs
+    // The event loop must answer while the job is in the worker. How long the job runs against how
+    // long an answer takes is the machine's business: when an analysis ends before any answer came
+    // back, it showed nothing either way, and another transport delay (a computation of its own,
+    // not the cached one) looks again. An analysis that held the event loop never lets one through.
     let answeredDuringJob = 0;
-    while (!analysisDone) {
-      const health = await watcher.get("/api/health");
-      expect(health.status).toBe(200);
-      if (!analysisDone && runner.load > 0) answeredDuringJob++;
+    for (let attempt = 0; attempt < 6 && answeredDuringJob === 0; attempt++) {
+      let analysisDone = false;
+      const pending = engineer.get(`/api/sweeps/${id}/analysis?transportDelayS=${5 + attempt}`).then((r) => {
+        analysisDone = true;
+        return r;
+      });
+      while (runner.load === 0 && !analysisDone) await new Promise((r) => setTimeout(r, 2));
+      while (!analysisDone) {
+        const health = await watcher.get("/api/health");
+        expect(health.status).toBe(200);
+        if (!analysisDone && runner.load > 0) answeredDuringJob++;
+      }
+      expect((await pending).status).toBe(200);
     }
     expect(answeredDuringJob).toBeGreaterThan(0);
-    expect((await pending).status).toBe(200);
     expect(runner.workers).toBeLessThanOrEqual(runner.size);
-  });
+  }, 120_000);
 
   it("adds overdue and mis-set detector diagnostics", async () => {
     const { id } = await sweepWithReadings(caseWalk(), overdueId);

@@ -1,5 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { readdirSync } from "node:fs";
+import path from "node:path";
 import request from "supertest";
+import { APP_ROOT } from "../../paths";
 import { agentFor, createTestApp, type TestApp } from "../../../tests/helpers/test-app";
 import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 
@@ -44,6 +47,35 @@ describe("session lifetime", () => {
     expect(await storedExpiry(signed)).toBeGreaterThan(29 * 24 * HOUR);
     const out = await a.post("/api/auth/sign-out");
     expect(cookieExpiry(out)).toBeLessThanOrEqual(WITHIN_HOUR);
+  });
+});
+
+describe("the session cookie outside the API", () => {
+  it("an asset or app-shell answer sets no cookie, so one in flight across a sign-in cannot sign the person out again", async () => {
+    const served = await createTestApp({ serveClient: true });
+    try {
+      const c = await seedCompany(served.ctx, "Hollin Foods");
+      // The sign-in form's anonymous session, as a first visit has it while its service worker
+      // fetches the app shell.
+      const anonymous = await request(served.app).get("/api/auth/session");
+      const oldCookie = ([] as string[]).concat(anonymous.headers["set-cookie"] ?? [])[0].split(";")[0];
+      const a = await agentFor(served.app);
+      expect((await a.post("/api/auth/sign-in", { email: c.people.owner.email, password: PASSWORD })).status).toBe(200);
+      // Answers to requests that left with the old cookie, landing after the sign-in.
+      const assets = readdirSync(path.join(APP_ROOT, "dist/client/assets")).filter((f) => f.endsWith(".js"));
+      expect(assets.length).toBeGreaterThan(0);
+      for (const url of ["/", "/stores", `/assets/${assets[0]}`, "/sw.js"]) {
+        const res = await request(served.app).get(url).set("Cookie", oldCookie);
+        expect(res.status, url).toBe(200);
+        expect(res.headers["set-cookie"], url).toBeUndefined();
+      }
+      // The API still renews its own cookie.
+      expect(
+        (await request(served.app).get("/api/auth/session").set("Cookie", oldCookie)).headers["set-cookie"],
+      ).toBeTruthy();
+    } finally {
+      await served.close();
+    }
   });
 });
 

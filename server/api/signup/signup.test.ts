@@ -27,7 +27,8 @@ const form = (email: string) => ({
 /** The mail goes through the outgoing queue: send what waits, then wait for the fake server to file it. */
 async function mailTo(address: string) {
   await drainMail(t);
-  for (let i = 0; i < 100; i++) {
+  // Up to 20 s for the fake server to file it: a loaded machine, not a rule of the app.
+  for (let i = 0; i < 400; i++) {
     const [m] = await t.ctx.db
       .select()
       .from(outboxMessages)

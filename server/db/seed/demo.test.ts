@@ -1,9 +1,10 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import fs from "node:fs/promises";
 import os from "node:os";
 import path from "node:path";
 import { agentFor, createTestApp, type TestApp } from "../../../tests/helpers/test-app";
 import { DEMO_SIGN_INS, seedDemoIfEmpty } from "./demo";
+import { cpuPool } from "../../jobs/cpu-pool";
 import { FIXTURE_FAMILY } from "#core/contracts/fixture-kinds";
 
 let t: TestApp;
@@ -19,7 +20,14 @@ afterAll(async () => {
 
 describe("demo seed", () => {
   it("seeds once and ships the demo store fully mapped", async () => {
+    // The demo password is hashed once, on the CPU pool: the seed runs at start-up in a server
+    // that already answers, and bcrypt at the production cost would hold its event loop.
+    const run = vi.spyOn(cpuPool(), "run");
     expect(await seedDemoIfEmpty(t.ctx)).toBe(true);
+    expect(
+      run.mock.calls.filter(([task, payload]) => task === "password" && (payload as { op: string }).op === "hash"),
+    ).toHaveLength(1);
+    run.mockRestore();
     expect(await seedDemoIfEmpty(t.ctx)).toBe(false);
 
     const lead = await agentFor(t.app);

@@ -1,6 +1,6 @@
-import bcrypt from "bcryptjs";
 import { sql } from "drizzle-orm";
 import type { AppContext } from "../../context";
+import { bcryptHash } from "../../jobs/passwords";
 import { companies, memberships, membershipStores, stores, users } from "../schema/index";
 import type { Role } from "#core/domain/roles";
 import { seedDemoLayout } from "./demo-store-map";
@@ -46,7 +46,9 @@ export async function seedDemoIfEmpty(ctx: AppContext): Promise<boolean> {
         timeZone: "America/Chicago",
       })
       .returning();
-    const passwordHash = await bcrypt.hash(DEMO_SIGN_INS.password, ctx.config.bcryptCost);
+    // On the CPU pool, as every password: at the production cost a hash is a quarter of a second of
+    // CPU, which bcryptjs would spend on the event loop of a server that is already answering.
+    const passwordHash = await bcryptHash(DEMO_SIGN_INS.password, ctx.config.bcryptCost);
     let leadTechId: string | null = null;
     const people = {} as Record<Role, string>;
     for (const person of DEMO_SIGN_INS.people) {

@@ -23,6 +23,9 @@ export function sessionQueryOptions() {
     queryFn: ({ signal }) => getSession(signal),
     // The session only changes through our own calls, which write the cache themselves.
     staleTime: 5 * 60_000,
+    // Without a connection getSession answers from the device (the Walk screen opens offline), so
+    // the read must run even after the browser said it is offline; only its retries wait.
+    networkMode: "offlineFirst",
   });
 }
 

@@ -40,9 +40,9 @@ describe("autosave", () => {
     const moved = applyAction(base, move([uuid(1)], 1, 0));
     rerender({ scene: moved });
     expect(result.current.state.status).toBe("unsaved");
-    await waitFor(() => expect(result.current.state.status).toBe("saved"), { timeout: 3000 });
+    await waitFor(() => expect(result.current.state.status).toBe("saved"), { timeout: 10_000 });
     rerender({ scene: applyAction(moved, move([uuid(1)], 1, 0)) });
-    await waitFor(() => expect(calls.filter((c) => c.method === "PUT")).toHaveLength(2), { timeout: 3000 });
+    await waitFor(() => expect(calls.filter((c) => c.method === "PUT")).toHaveLength(2), { timeout: 10_000 });
     await waitFor(() => expect(result.current.state.status).toBe("saved"));
     expect(
       calls.filter((c) => c.method === "PUT").map((c) => (c.body as { layoutRevision: number }).layoutRevision),
@@ -63,7 +63,7 @@ describe("autosave", () => {
     });
     const mine = applyAction(base, move([uuid(1)], 1, 0));
     rerender({ scene: mine });
-    await waitFor(() => expect(result.current.state.status).toBe("conflict"), { timeout: 3000 });
+    await waitFor(() => expect(result.current.state.status).toBe("conflict"), { timeout: 10_000 });
     // More edits after the conflict send nothing.
     rerender({ scene: applyAction(mine, move([uuid(1)], 0, 1)) });
     await new Promise((r) => setTimeout(r, 1200));
@@ -84,7 +84,7 @@ describe("autosave", () => {
     // A case pushed past the plan's right edge (40 m): the server would refuse it too.
     const outside = { ...base, fixtures: { [uuid(1)]: openCase(1, rect(38, 2, 3.75, 1.1)) } };
     rerender({ scene: outside });
-    await waitFor(() => expect(result.current.state.status).toBe("invalid"), { timeout: 3000 });
+    await waitFor(() => expect(result.current.state.status).toBe("invalid"), { timeout: 10_000 });
     const state = result.current.state as { status: "invalid"; errors: { path: string }[] };
     expect(state.errors.map((e) => e.path)).toContain("fixtures.0.polygon.1");
     expect(calls).toHaveLength(0);

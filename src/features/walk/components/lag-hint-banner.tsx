@@ -47,7 +47,7 @@ export function LagHintBanner({
         {compact
           ? null
           : hint.beforeDelay
-            ? "The detector had not yet drawn air from beyond the first reading: re-check around the start."
+            ? "The detector had not yet drawn air from before where this walk began (the sweep, a still-air pass or a long pause; yellow diamond): re-check around there."
             : `Its air was about ${len(hint.backM)} back along your path (yellow diamond): re-check at about ${len(0.6)} spacing (rings).`}
       </span>
       <button type="button" className="min-h-12 shrink-0 font-bold underline" onClick={onDismiss}>

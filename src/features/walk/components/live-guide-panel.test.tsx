@@ -1,3 +1,4 @@
+import { MemoryRouter } from "react-router";
 import { describe, expect, it, vi } from "vitest";
 import { fireEvent, render, screen } from "@testing-library/react";
 import { wordsContext } from "#core/domain/locator-words/present-analysis";
@@ -53,6 +54,22 @@ describe("LiveGuidePanel", () => {
     expect(screen.getByText(/the full analysis after submit is the reference/)).toBeTruthy();
   });
 
+  it("tells two probe points at the same place apart by the distance between them", () => {
+    const twin: LiveProbe = { ...probes[0], x: 5.2, reason: { kind: "narrows", rank: 1, fixtureId: "c3" } };
+    render(
+      <LiveGuidePanel
+        state={{ ...state, probes: [probes[0], twin] }}
+        words={words}
+        from={null}
+        onProbe={() => {}}
+        {...noCheck}
+      />,
+    );
+    const items = screen.getAllByRole("listitem").map((li) => li.textContent);
+    expect(items[0]).toMatch(/^1Probe 1: Dairy 3, at the front grille(Tells|$)/);
+    expect(items[1]).toContain("Probe 2: Dairy 3, at the front grille, 1.2 m from probe 1");
+  });
+
   it("hands the tapped probe point to the screen, which opens the keypad there", () => {
     const onProbe = vi.fn();
     render(<LiveGuidePanel state={state} words={words} from={null} onProbe={onProbe} {...noCheck} />);
@@ -83,6 +100,24 @@ describe("LiveGuidePanel", () => {
       />,
     );
     expect(quiet.container.textContent).toBe("");
+  });
+
+  it("once the sweep is submitted, points to its field map as the reference instead of the probe points", () => {
+    render(
+      <MemoryRouter>
+        <LiveGuidePanel
+          state={state}
+          words={words}
+          from={null}
+          onProbe={() => {}}
+          {...noCheck}
+          folded
+          fieldMapHref="/stores/st/sweeps/sw/map"
+        />
+      </MemoryRouter>,
+    );
+    expect(screen.getByTestId("live-folded").textContent).toBe("Submitted: see the field map");
+    expect(screen.getByRole("link", { name: "field map" }).getAttribute("href")).toBe("/stores/st/sweeps/sw/map");
   });
 
   it("asks for the supply-air check of a settled suspect and hands the suspect over when asked to read it", () => {

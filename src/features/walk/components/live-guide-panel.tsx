@@ -1,3 +1,4 @@
+import { Link } from "react-router";
 import type { LiveProbe, LiveSuspect } from "#core/analysis/guide/live-guide";
 import { formatShort } from "#core/domain/numbers/number-format";
 import { SETTLE_ESTIMATES } from "../model/live-state";
@@ -5,6 +6,7 @@ import type { SupplyCheck } from "../model/supply-check";
 import type { WordsContext } from "#core/domain/locator-words/words-context";
 import {
   LIVE_PROVISIONAL_WORDS,
+  liveLeadWords,
   liveSuspectWords,
   probePlaceWords,
   probeReasonWords,
@@ -28,6 +30,7 @@ export function LiveGuidePanel({
   onSupplyCheck,
   folded,
   onFold,
+  fieldMapHref = null,
 }: {
   state: LiveState;
   words: WordsContext;
@@ -40,6 +43,8 @@ export function LiveGuidePanel({
   /** Folded to one line (the screen keeps this, so it stays as set while the keypad comes and goes). */
   folded: boolean;
   onFold(folded: boolean): void;
+  /** Once the sweep is submitted: its field map, where the full analysis (the reference) is. */
+  fieldMapHref?: string | null;
 }) {
   const e = state.estimate;
   if (!e || e.kind === "no-alarm") return null;
@@ -55,10 +60,26 @@ export function LiveGuidePanel({
     >
       <div className="flex items-center justify-between gap-2">
         <p className="min-w-0 flex-1 leading-tight">
-          <span className="block truncate font-bold" data-testid="live-first">
-            {first ? liveSuspectWords(first, words) : "Live estimate: no spot fits the readings yet"}
+          <span
+            className="block truncate font-bold"
+            data-testid="live-first"
+            data-at={first ? `${first.x} ${first.y} ${first.radius}` : undefined}
+            data-fixture={first?.fixtureId ?? undefined}
+          >
+            {first
+              ? liveSuspectWords(first, words)
+              : e.kind === "no-spot" && e.lead
+                ? liveLeadWords(e.lead, words)
+                : "Live estimate: no spot fits the readings yet"}
           </span>
-          {folded ? (
+          {folded && fieldMapHref ? (
+            <span className="block truncate text-sm" data-testid="live-folded">
+              Submitted: see the{" "}
+              <Link to={fieldMapHref} className="font-bold underline">
+                field map
+              </Link>
+            </span>
+          ) : folded ? (
             <span className="block truncate text-sm" data-testid="live-folded">
               {[
                 state.probes.length ? `${state.probes.length} probe point${state.probes.length > 1 ? "s" : ""}` : null,
@@ -122,6 +143,7 @@ export function LiveGuidePanel({
                     <span className="min-w-0 leading-tight">
                       <span className="block font-bold">
                         Probe {i + 1}: {probePlaceWords(p, words)}
+                        {sameAs(state.probes, i, words)}
                         {from
                           ? ` · ${lengthWords(Math.hypot(p.x - from.x, p.y - from.y), words.length, words.numbers)} away`
                           : ""}
@@ -133,7 +155,17 @@ export function LiveGuidePanel({
               ))}
             </ol>
           ) : null}
-          <p className="text-sm text-muted">{LIVE_PROVISIONAL_WORDS}</p>
+          {fieldMapHref ? (
+            <p className="text-sm">
+              Submitted: the full analysis on the{" "}
+              <Link to={fieldMapHref} className="font-bold underline">
+                field map
+              </Link>{" "}
+              is the reference.
+            </p>
+          ) : (
+            <p className="text-sm text-muted">{LIVE_PROVISIONAL_WORDS}</p>
+          )}
         </>
       )}
     </section>
@@ -141,3 +173,15 @@ export function LiveGuidePanel({
 }
 
 const capitalised = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
+
+/**
+ * Two probe points at the same place in words ("Dairy 4, at the front grille") read alike in the list:
+ * the later one says how far it is from the first of them (the plan numbers both).
+ */
+function sameAs(probes: readonly LiveProbe[], i: number, words: WordsContext): string {
+  const place = probePlaceWords(probes[i], words);
+  const k = probes.findIndex((q) => probePlaceWords(q, words) === place);
+  if (k < 0 || k >= i) return "";
+  const d = Math.hypot(probes[i].x - probes[k].x, probes[i].y - probes[k].y);
+  return `, ${lengthWords(d, words.length, words.numbers)} from probe ${k + 1}`;
+}

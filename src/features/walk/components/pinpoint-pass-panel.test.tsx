@@ -66,7 +66,12 @@ const R290 = {
   gwp: null,
   gwpNote: null,
 };
-const panel = (s: LocalSweep, committed: LocalReading[], systems = [{ id: CASE.systemId!, refrigerant: R290 }]) =>
+const panel = (
+  s: LocalSweep,
+  committed: LocalReading[],
+  systems = [{ id: CASE.systemId!, refrigerant: R290 }],
+  settled: { fixtureId: string | null } | null = null,
+) =>
   render(
     <PinpointPassPanel
       sweep={s}
@@ -75,6 +80,7 @@ const panel = (s: LocalSweep, committed: LocalReading[], systems = [{ id: CASE.s
       systems={systems}
       readOnly={false}
       reload={async () => {}}
+      settled={settled && { rank: 1, x: 4, y: 2.5, radius: 3.3, score: 0.7, riskPointId: null, ...settled }}
     />,
   );
 
@@ -108,6 +114,19 @@ describe("the still-air pass panel", () => {
   it("says nothing while the readings point at a spot", () => {
     panel(sweep, [...[1, 2, 9, 2, 1].map((ppm, i) => reading(1.5 + i, 3.2, ppm)), reading(3, 6, 0.5)]);
     expect(screen.queryByTestId("mixing-advice")).toBeNull();
+  });
+
+  it("offers a still-air pass at the case a settled live suspect holds to when the readings are not level", () => {
+    const peaked = [...[1, 2, 9, 2, 1].map((ppm, i) => reading(1.5 + i, 3.2, ppm)), reading(3, 6, 0.5)];
+    panel(sweep, peaked, undefined, { fixtureId: CASE.id });
+    expect(screen.queryByTestId("mixing-advice")).toBeNull();
+    expect(screen.getByTestId("still-air-offer").textContent).toMatch(
+      /Suspect 1 holds at Dairy 3: its fans spread the gas\. Stop them or start a defrost/,
+    );
+    fireEvent.click(screen.getByRole("button", { name: "Still-air pass…" }));
+    const text = screen.getByRole("dialog", { hidden: true }).textContent ?? "";
+    expect(text).toMatch(/product warms up/);
+    expect(text).toMatch(/local codes/);
   });
 
   it("shows the open pass with the time left to restore the fans, and turns to an alert once it is due", () => {

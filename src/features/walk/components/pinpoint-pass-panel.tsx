@@ -1,10 +1,12 @@
 import { useMemo, useState } from "react";
 import type { Fixture } from "#core/contracts/fixtures";
 import type { RefrigerantSummary } from "#core/contracts/systems";
+import type { LiveSuspect } from "#core/analysis/guide/live-guide";
 import { FIXTURE_KIND_NAMES } from "#core/contracts/fixture-kinds";
 import { usePinpointPass } from "../hooks/use-pinpoint-pass";
 import type { LocalReading, LocalSweep } from "../model/local-types";
 import { mixingAdvice } from "../model/mixing-advice";
+import { stillAirOffer } from "../model/still-air-offer";
 import { clockText, passConditionText, passNumbers } from "../model/pinpoint-pass";
 import { StartPassDialog } from "./start-pass-dialog";
 
@@ -13,7 +15,8 @@ const BANNER = "flex flex-col gap-0 rounded-md border-l-4 px-3 pt-1 text-sm lead
 const ACTIONS = "flex flex-wrap justify-end gap-x-3";
 
 /**
- * The still-air pass on the Walk screen: the advice when readings say the fans are mixing the gas, the
+ * The still-air pass on the Walk screen: the advice when readings say the fans are mixing the gas (or,
+ * failing that, the offer once the live first suspect has settled at a fixture whose fans run), the
  * start dialog with its cautions, and while a pass is open, its reminder to restore the fans.
  */
 export function PinpointPassPanel({
@@ -23,6 +26,8 @@ export function PinpointPassPanel({
   systems,
   readOnly,
   reload,
+  settled,
+  onPassStarted,
 }: {
   sweep: LocalSweep;
   fixtures: readonly Fixture[];
@@ -30,6 +35,10 @@ export function PinpointPassPanel({
   systems: readonly { id: string; refrigerant: RefrigerantSummary }[];
   readOnly: boolean;
   reload(): Promise<void>;
+  /** The live first suspect once it has settled (model/live-state.ts), else null. */
+  settled?: LiveSuspect | null;
+  /** A pass has just been started here (the screen makes room for the plan). */
+  onPassStarted?: () => void;
 }) {
   const pass = usePinpointPass(sweep, reload);
   const [dismissed, setDismissed] = useState<readonly string[]>([]);
@@ -38,6 +47,8 @@ export function PinpointPassPanel({
     () => mixingAdvice(sweep, fixtures, committed, sweep.alarmPpm),
     [sweep, fixtures, committed],
   ).filter((a) => !dismissed.includes(a.fixture.id));
+  const offered = stillAirOffer(sweep, fixtures, settled ?? null);
+  const offer = offered && !dismissed.includes(offered.id) ? offered : null;
   const name = (f: Fixture | undefined) => (f ? f.label || FIXTURE_KIND_NAMES[f.kind] : "the whole store");
 
   if (readOnly || sweep.status !== "in-progress") return null;
@@ -104,6 +115,25 @@ export function PinpointPassPanel({
             </button>
           </span>
         </div>
+      ) : offer ? (
+        <div role="status" data-testid="still-air-offer" className={`${BANNER} border-note bg-note-soft`}>
+          <span>
+            <strong className="text-base">Suspect 1 holds at {name(offer)}:</strong> its fans spread the gas. Stop them
+            or start a defrost and re-check in still air to pin the leak down.
+          </span>
+          <span className={ACTIONS}>
+            <button type="button" className="min-h-12 px-2 font-bold underline" onClick={() => setStarting(offer)}>
+              Still-air pass…
+            </button>
+            <button
+              type="button"
+              className="min-h-12 px-2 underline"
+              onClick={() => setDismissed((d) => [...d, offer.id])}
+            >
+              Not now
+            </button>
+          </span>
+        </div>
       ) : null}
       {starting ? (
         <StartPassDialog
@@ -114,6 +144,7 @@ export function PinpointPassPanel({
           onStart={(s) => {
             setStarting(null);
             void pass.start(s);
+            onPassStarted?.();
           }}
         />
       ) : null}

@@ -139,7 +139,8 @@ export function WalkScreen({
   );
   // The live guide starts folded to one line over the plan's bottom edge: the plan stays the screen.
   const [guideOpen, setGuideOpen] = useState(false);
-  const supply = useMemo(() => supplyCheckOf(settledSuspect(live), committed), [live, committed]);
+  const settled = useMemo(() => settledSuspect(live), [live]);
+  const supply = useMemo(() => supplyCheckOf(settled, committed), [settled, committed]);
   const recent = useMemo(() => {
     const out: number[] = [];
     for (let i = committed.length - 1; i >= 0 && out.length < 4; i--)
@@ -304,6 +305,9 @@ export function WalkScreen({
           systems={storePack.data?.systems ?? []}
           readOnly={readOnly}
           reload={walk.reload}
+          settled={settled}
+          // the pass is walked on the plan: the guide folds to its one line
+          onPassStarted={() => setGuideOpen(false)}
         />
         {showHint ? (
           <LagHintBanner
@@ -354,6 +358,11 @@ export function WalkScreen({
               }
               folded={!guideOpen}
               onFold={(folded) => setGuideOpen(!folded)}
+              fieldMapHref={
+                sweep.status === "submitted" && sweep.sync.kind === "on-server"
+                  ? `/stores/${sweep.storeId}/sweeps/${sweep.id}/map`
+                  : null
+              }
             />
           )}
         </div>

@@ -66,6 +66,31 @@ describe("the Walk screen's lag hint", () => {
     expect(peakIndex([{ ppm: 1 }, { ppm: 0 }], 2)).toBe(-1);
   });
 
+  it("does not move a pinpoint pass's alarm back across the pause before the pass (docs/locator/method.md, step 1)", () => {
+    // the first pass along x 0–12, then three minutes later a still-air pass from x 20
+    const first = walk(13, () => 0);
+    const pass = Array.from({ length: 6 }, (_, k) => ({
+      x: 20 + k,
+      y: 0,
+      takenAt: new Date(start + (192 + k) * 1000).toISOString(),
+      ppm: k === 2 ? 9 : 0,
+      atLeast: false,
+      passId: "p2",
+    }));
+    // 2 s into the pass with a 5 s delay: its air was drawn in before the pass began, so at its first tap
+    expect(peakLagHint([...first, ...pass], 5, 0, 2, { walkSpeedMps: 1 })).toMatchObject({
+      index: 15,
+      x: 20,
+      beforeDelay: true,
+      recheck: [],
+    });
+    // 5 s in: 5 m back is the pass's own first tap; the re-check spots stay in the pass
+    const later = pass.map((r, k) => ({ ...r, ppm: k === 5 ? 9 : 0 }));
+    const hint = peakLagHint([...first, ...later], 5, 0, 2, { walkSpeedMps: 1 })!;
+    expect(hint).toMatchObject({ index: 18, x: 20, beforeDelay: false });
+    expect(Math.min(...hint.recheck.map((p) => p.x))).toBeGreaterThanOrEqual(20);
+  });
+
   it("gives no hint below the alarm level", () => {
     expect(
       peakLagHint(

@@ -15,7 +15,7 @@ export interface LagHint {
   /** Where the air behind the alarm was really sampled (the shared lag function). */
   x: number;
   y: number;
-  /** The alarm came before one transport delay had passed since the first reading. */
+  /** The alarm came before one transport delay had passed since its walk began (the sweep's or a pass's first reading, or the first after a long pause). */
   beforeDelay: boolean;
   /** Distance back along the walked path from the tap to that point, m. */
   backM: number;
@@ -29,6 +29,8 @@ interface PathReading {
   takenAt: string;
   ppm: number;
   atLeast: boolean;
+  /** The pinpoint pass it was taken in (null or absent: the first pass): a pass starts a new walk. */
+  passId?: string | null;
 }
 
 /** How the walk between taps is taken: the locator's route and pace (core/analysis/lag/walk-lag.ts). */
@@ -88,7 +90,7 @@ export function peakLagHint(
   const t0 = Date.parse(readings[0].takenAt);
   const taps: Tap[] = readings
     .slice(0, index + 1)
-    .map((r) => ({ x: r.x, y: r.y, t: (Date.parse(r.takenAt) - t0) / 1000 }));
+    .map((r) => ({ x: r.x, y: r.y, t: (Date.parse(r.takenAt) - t0) / 1000, pass: r.passId ?? null }));
   // walkLag needs taps in time order; an edited timestamp may break it, so sort a copy.
   const order = taps.map((_, i) => i).sort((a, b) => taps[a].t - taps[b].t || a - b);
   const sorted = order.map((i) => taps[i]);
@@ -99,9 +101,16 @@ export function peakLagHint(
   while (j > 0 && sorted[j].t > s) j--;
   const window = sorted.slice(j, p + 1);
   const lagged = walkLag(window, delayS, timeConstantS, walk.route, walk.walkSpeedMps)[window.length - 1];
-  // Back along the walked path to that point, and spots around it (reaching a little further back).
+  // within one delay of a pass's start or a long pause: placed at that walk's first reading
+  if (lagged.beforeDelay) return { index, x: lagged.x, y: lagged.y, beforeDelay: true, backM: 0, recheck: [] };
+  // Back along the walked path to that point, and spots around it (reaching a little further back,
+  // never into another pass: the walk between passes is not known).
   let k = j;
-  for (let back = 0; k > 0 && back < RECHECK_EACH_SIDE * RECHECK_SPACING_M + 0.2; k--)
+  for (
+    let back = 0;
+    k > 0 && back < RECHECK_EACH_SIDE * RECHECK_SPACING_M + 0.2 && sorted[k - 1].pass === sorted[k].pass;
+    k--
+  )
     back += Math.hypot(sorted[k].x - sorted[k - 1].x, sorted[k].y - sorted[k - 1].y);
   const path = walkedPath(sorted, k, p, walk.route);
   const total = length(path);

@@ -40,8 +40,21 @@ export const liveRequestSchema = z.object({
       atLeast: z.boolean(),
       samplePoint: z.enum(SAMPLE_POINTS),
       note: z.string(),
+      /** The pinpoint pass it was taken in; null or absent: the first pass. */
+      passId: z.string().nullable().optional(),
     }),
   ),
+  /** The sweep's pinpoint passes (fans stopped, a defrost): each reading is fitted in its own air, as after submit. */
+  passes: z
+    .array(
+      z.object({
+        id: z.string(),
+        fans: z.enum(["running", "stopped"]),
+        defrost: z.boolean(),
+        fixtureId: z.string().nullable(),
+      }),
+    )
+    .optional(),
   /** Where the technician stands (the last reading's place), for the order of the next probes. */
   from: z.object({ x: finite, y: finite }).nullable(),
 });

@@ -1,15 +1,33 @@
 import type { LocatorPlan } from "#core/domain/layout/to-locator-input";
-import type { LocalReading, LocalSweep } from "./local-types";
+import type { LocalPass, LocalReading, LocalSweep } from "./local-types";
 import type { LiveRequest } from "./live-messages";
 
-/** What the Walk screen sends its live-guide worker: the sweep's figures and every committed reading. */
+type PassConditions = Pick<LocalPass, "id" | "fans" | "defrost" | "fixtureId">;
+
+/**
+ * What the Walk screen sends its live-guide worker: the sweep's figures, its pinpoint passes and every
+ * committed reading with its pass, so the live fit sees each reading in its own air as the server's
+ * analysis will. A pass the sweep does not list (none on the device should) leaves its readings in
+ * the first pass rather than failing the estimate.
+ */
 export function liveRequest(
   id: number,
-  sweep: Pick<LocalSweep, "transportDelayS" | "timeConstantS" | "alarmPpm" | "startedAt">,
+  sweep: Pick<LocalSweep, "transportDelayS" | "timeConstantS" | "alarmPpm" | "startedAt"> & {
+    passes?: readonly PassConditions[];
+  },
   plan: LocatorPlan,
-  readings: readonly Pick<LocalReading, "id" | "x" | "y" | "takenAt" | "ppm" | "atLeast" | "samplePoint" | "note">[],
+  readings: readonly (Pick<LocalReading, "id" | "x" | "y" | "takenAt" | "ppm" | "atLeast" | "samplePoint" | "note"> & {
+    passId?: string | null;
+  })[],
 ): LiveRequest {
   const last = readings[readings.length - 1];
+  const passes = (sweep.passes ?? []).map((p) => ({
+    id: p.id,
+    fans: p.fans,
+    defrost: p.defrost,
+    fixtureId: p.fixtureId,
+  }));
+  const known = new Set(passes.map((p) => p.id));
   return {
     id,
     plan,
@@ -28,7 +46,9 @@ export function liveRequest(
       atLeast: r.atLeast,
       samplePoint: r.samplePoint,
       note: r.note,
+      passId: r.passId && known.has(r.passId) ? r.passId : null,
     })),
+    passes,
     from: last ? { x: last.x, y: last.y } : null,
   };
 }

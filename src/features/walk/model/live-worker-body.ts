@@ -45,7 +45,8 @@ export function liveWorkerBody(host: LiveWorkerHost) {
       return;
     }
     host.post({ id: req.id, kind: "estimate", estimate: fit.estimate, ms: host.now() - started });
-    if (fit.estimate.kind !== "suspects") {
+    // With no suspect yet the probes trace the alarm's gas (evidence-search.ts); with no alarm there are none.
+    if (fit.estimate.kind === "no-alarm") {
       host.post({ id: req.id, kind: "probes", probes: [], ms: 0 });
       return;
     }
@@ -85,7 +86,7 @@ export function liveWorkerBody(host: LiveWorkerHost) {
 /** The request as the locator's input, built the way the server builds it for a stored sweep. */
 function toInput(req: LiveRequest) {
   const rows = req.readings.map((r) => ({ ...r, takenAt: new Date(r.takenAt) }));
-  const { input } = sweepLocatorInput(req.plan, new Date(req.startedAt), rows, req.instrument);
+  const { input } = sweepLocatorInput(req.plan, new Date(req.startedAt), rows, req.instrument, req.passes ?? []);
   return parseLocatorInput(input);
 }
 
