@@ -41,6 +41,8 @@ export const sessionInfo = z.object({
   /** The units to show: the person's own choice, else the active company's default. */
   /** `number` is the company's number format; a session kept on a device from before it reads as 1,234.5. */
   units: z.object({ length: lengthUnitSchema, mass: massUnitSchema, number: numberFormatSchema.default("1,234.5") }),
+  /** Whose rules the safety cautions name (the company's rule profile); a session kept from before reads as "us". */
+  rules: z.enum(["us", "eu"]).default("us"),
 });
 export type SessionInfo = z.infer<typeof sessionInfo>;
 

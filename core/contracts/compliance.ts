@@ -183,6 +183,8 @@ export const chargeAdditionResponse = z.object({ addition: chargeAddition, recor
 
 export const todayResponse = z.object({
   generatedAt: text(),
+  /** Whose words: "eu" has no leak-rate thresholds (EU F-gas sets leak-check intervals instead). */
+  wording: z.enum(["us", "eu"]).default("us"),
   stores: z.array(z.object({ id: z.uuid(), name: text(), timeZone: text(), today: text() })),
   due: z.array(dueItem),
   overThreshold: z.array(

@@ -14,6 +14,7 @@ export function signedOutSession(csrfToken = "csrf-signed-out"): SessionInfo {
     csrfToken,
     outboxEnabled: true,
     units: { length: "m", mass: "kg", number: "1,234.5" },
+    rules: "us",
   };
 }
 
@@ -31,5 +32,6 @@ export function sessionFor(
     csrfToken: options.csrfToken ?? "csrf-signed-in",
     outboxEnabled: options.outboxEnabled ?? true,
     units: { length: "m", mass: "kg", number: "1,234.5" },
+    rules: "us",
   };
 }

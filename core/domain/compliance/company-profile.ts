@@ -29,3 +29,11 @@ export function profileFor(setting: CompanyRuleProfile, custom: RuleProfile | nu
   if (setting === "custom") return custom ?? startCustomProfile("us-federal");
   return BUILT_IN_PROFILES[setting];
 }
+
+/**
+ * Whose words a profile's records and cautions use: "eu" for a profile with periodic leak checks and
+ * no leak-rate parts (EU F-gas, or a custom copy of it), "us" otherwise.
+ */
+export function profileWording(profile: RuleProfile): "us" | "eu" {
+  return profile.leakRateParts.length === 0 && profile.leakChecks ? "eu" : "us";
+}

@@ -1,5 +1,6 @@
 import { addMonths, type IsoDate } from "../dates/calendar-date";
 import { requireNonNegative } from "../input-error";
+import { DEFAULT_NUMBER_FORMAT, formatQuantity, type NumberFormat } from "../numbers/number-format";
 import { getPure } from "../refrigerants/catalogue";
 import { fgasGroupOfKinds, type FgasGroup } from "../refrigerants/fgas-kinds";
 import {
@@ -51,9 +52,11 @@ export function leakCheckInterval(
   profile: RuleProfile,
   refrigerant: Refrigerant,
   chargeKg: number,
-  options: { hasLeakDetection: boolean; hermeticallySealed?: boolean },
+  options: { hasLeakDetection: boolean; hermeticallySealed?: boolean; numberFormat?: NumberFormat },
 ): LeakCheckInterval {
   requireNonNegative(chargeKg, "chargeKg");
+  // The reason is read by the company: its figures are written in its number format (docs/decisions/0047).
+  const n = (v: number) => formatQuantity(v, options.numberFormat ?? DEFAULT_NUMBER_FORMAT);
   const rules = profile.leakChecks;
   if (!rules) return { required: false, reason: `${profile.name} sets no periodic leak checks` };
   const group = fgasGroup(refrigerant);
@@ -75,7 +78,7 @@ export function leakCheckInterval(
     if (options.hermeticallySealed && amount < rules.hermeticExemptBelowTonnes.value) {
       return {
         required: false,
-        reason: `hermetically sealed and below ${rules.hermeticExemptBelowTonnes.value} t CO2e`,
+        reason: `hermetically sealed and below ${n(rules.hermeticExemptBelowTonnes.value)} t CO2e`,
       };
     }
   } else {
@@ -85,9 +88,12 @@ export function leakCheckInterval(
   }
   const band = findBand(bands, amount);
   if (!band)
-    return { required: false, reason: `${amount} ${measure} is below the first band (${bands[0].from} ${measure})` };
+    return {
+      required: false,
+      reason: `${n(amount)} ${measure} is below the first band (${n(bands[0].from)} ${measure})`,
+    };
   const months = options.hasLeakDetection ? band.monthsWithLds : band.monthsWithoutLds;
-  const top = band.to === null ? `≥ ${band.from}` : `${band.from} to < ${band.to}`;
+  const top = band.to === null ? `≥ ${n(band.from)}` : `${n(band.from)} to < ${n(band.to)}`;
   return {
     required: true,
     months,
@@ -95,7 +101,7 @@ export function leakCheckInterval(
     band,
     measure,
     amount,
-    reason: `${amount} ${measure} is in the ${top} ${measure} band: every ${months} months ${options.hasLeakDetection ? "with" : "without"} leak detection${band.ldsRequired ? "; a leak detection system is required" : ""}`,
+    reason: `${n(amount)} ${measure} is in the ${top} ${measure} band: every ${months} months ${options.hasLeakDetection ? "with" : "without"} leak detection${band.ldsRequired ? "; a leak detection system is required" : ""}`,
   };
 }
 

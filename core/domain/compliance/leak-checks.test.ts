@@ -48,6 +48,31 @@ describe("EU leak-check intervals from CO2e bands (517/2014 Art. 4, 2024/573 Art
     expect(months(20, false, "R-410A")).toBe(12);
     expect(months(20, true, "R-410A")).toBe(24);
   });
+  it("writes the reason's figures in the company's number format, at sensible precision", () => {
+    // 45.5 kg R-404A × 3922 / 1000 = 178.451 t (Art. 3 [S:E7]; GWP [S:E1]): the 50–500 t band, 6 months [S:E1].
+    // Written "178,5" in a 1.234,5 company (docs/decisions/0047: one place from 10 to 1,000, common practice).
+    const de = leakCheckInterval(EU_FGAS_PROFILE, r("R-404A"), 45.5, {
+      hasLeakDetection: false,
+      numberFormat: "1.234,5",
+    });
+    expect(de.reason).toBe("178,5 t CO2e is in the 50 to < 500 t CO2e band: every 6 months without leak detection");
+    // 1,250 kg R-449A × 1397 = 1,746.25 t (AR4 with the 517/2014 HFO values, standards.md §3 [D]): whole tonnes, grouped.
+    const big = leakCheckInterval(EU_FGAS_PROFILE, r("R-449A"), 1250, {
+      hasLeakDetection: true,
+      numberFormat: "1.234,5",
+    });
+    expect(big.reason).toMatch(/^1\.746 t CO2e is in the ≥ 500 t CO2e band: every 6 months with leak detection/);
+    // 2.1 kg R-404A = 8.2362 t: "8,24 t" (two places from 1 to 10).
+    const small = leakCheckInterval(EU_FGAS_PROFILE, r("R-404A"), 2.1, {
+      hasLeakDetection: false,
+      numberFormat: "1.234,5",
+    });
+    expect(small.reason).toMatch(/^8,24 t CO2e is in the 5 to < 50 t CO2e band/);
+    // Without a format: the default 1,234.5.
+    expect(leakCheckInterval(EU_FGAS_PROFILE, r("R-404A"), 2.1, { hasLeakDetection: false }).reason).toMatch(
+      /^8\.24 t/,
+    );
+  });
   it("exempts labelled hermetically sealed equipment below 10 t", () => {
     // [S:E1] hermetically sealed equipment < 10 t CO2e is exempt.
     expect(

@@ -50,3 +50,27 @@ describe("record retention follows the rule profile", () => {
     expect(retired.nextInspection).toBeNull();
   });
 });
+
+describe("a retired EU system shows no next leak check (docs/decisions/0040)", () => {
+  it("keeps the band and the interval, but names no next date once retired", () => {
+    // 2.1 kg R-404A = 8.24 t CO2e (Art. 3 [S:E7]; GWP 3922 [S:E1]): every 12 months without leak detection [S:E1].
+    const rec = {
+      refrigerant: getRefrigerant("R-404A"),
+      fullChargeKg: 2.1,
+      applianceType: "commercial-refrigeration" as const,
+      automaticLeakDetection: false,
+      enteredOn: "2025-01-10",
+      additions: [],
+      repairedOn: [],
+      pendingFollowUps: [],
+      followUpVerifiedOn: [],
+      leakChecks: [{ checkedOn: "2025-12-20", leakFound: false }],
+    };
+    const inService = systemStatus(EU_FGAS_PROFILE, "annualizing", rec, "2026-12-05");
+    expect(inService.nextInspection?.dueOn).toBe("2026-12-20");
+    const retired = systemStatus(EU_FGAS_PROFILE, "annualizing", { ...rec, retiredOn: "2026-12-05" }, "2026-12-05");
+    expect(retired.nextInspection).toBeNull();
+    expect(retired.due).toEqual([]);
+    expect(retired.leakCheck?.applied.required && retired.leakCheck.applied.months).toBe(12);
+  });
+});

@@ -14,6 +14,7 @@ import { leakCheckInterval, nextInspectionDate, type LeakCheckInterval } from ".
 import type { ChargeAddition } from "./leak-rate";
 import type { ApplianceType, LeakRateMethod, RuleProfile } from "./rule-profile";
 import { formatCalendarDay as day } from "../dates/format-in-zone";
+import { DEFAULT_NUMBER_FORMAT, type NumberFormat } from "../numbers/number-format";
 
 /** What one system's records say, on one day of the store's calendar. Pure: the caller loads the rows. */
 export interface SystemRecords {
@@ -98,6 +99,8 @@ export function systemStatus(
   method: LeakRateMethod,
   rec: SystemRecords,
   today: IsoDate,
+  /** The company's number format, for the figures in the reasons a reader sees. */
+  numberFormat: NumberFormat = DEFAULT_NUMBER_FORMAT,
 ): SystemStatus {
   const revisions: readonly SystemRevision[] = rec.revisions?.length
     ? rec.revisions
@@ -218,8 +221,14 @@ export function systemStatus(
   let leakCheck: SystemStatus["leakCheck"] = null;
   let nextInspection: SystemStatus["nextInspection"] = null;
   if (profile.leakChecks) {
-    const withLds = leakCheckInterval(profile, facts.refrigerant, facts.fullChargeKg, { hasLeakDetection: true });
-    const withoutLds = leakCheckInterval(profile, facts.refrigerant, facts.fullChargeKg, { hasLeakDetection: false });
+    const withLds = leakCheckInterval(profile, facts.refrigerant, facts.fullChargeKg, {
+      hasLeakDetection: true,
+      numberFormat,
+    });
+    const withoutLds = leakCheckInterval(profile, facts.refrigerant, facts.fullChargeKg, {
+      hasLeakDetection: false,
+      numberFormat,
+    });
     const applied = facts.automaticLeakDetection ? withLds : withoutLds;
     leakCheck = { withLds, withoutLds, applied };
     if (applied.required) {
@@ -258,7 +267,8 @@ export function systemStatus(
     due.push({
       kind: "inspection",
       dueOn: nextInspection.dueOn,
-      what: "Leak inspection",
+      // EU F-gas speaks of periodic leak checks (2024/573 Art. 5); the US parts of leak inspections.
+      what: profile.leakChecks ? "Periodic leak check" : "Leak inspection",
       source: nextInspection.source,
     });
 

@@ -1,7 +1,7 @@
 import type { Caution, RefrigerantSummary } from "#core/contracts/systems";
 import { gwpOf } from "#core/domain/refrigerants/gwp";
 import { componentsOf, designationOf, type GwpBasis, type Refrigerant } from "#core/domain/refrigerants/types";
-import { cautionsFor } from "#core/domain/safety/cautions";
+import { cautionsFor, type CautionRules } from "#core/domain/safety/cautions";
 
 /** The GWP bases a company's profile prescribes and its stated choice in words. */
 export interface GwpChoice {
@@ -42,6 +42,11 @@ export function summarizeRefrigerant(r: Refrigerant, choice: GwpChoice): Refrige
 }
 
 /** The cautions the system form shows for this refrigerant (they end by deferring to local codes). */
-export function refrigerantCautions(r: Refrigerant): Caution[] {
-  return cautionsFor({ refrigerant: r }).map((c) => ({ id: c.id, level: c.level, text: c.text, source: c.source }));
+export function refrigerantCautions(r: Refrigerant, rules: CautionRules = "us"): Caution[] {
+  return cautionsFor({ refrigerant: r, rules }).map((c) => ({
+    id: c.id,
+    level: c.level,
+    text: c.text,
+    source: c.source,
+  }));
 }

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { getRefrigerant } from "../refrigerants/catalogue";
 import { cautionsFor, isFlammableClass, roomCautions } from "./cautions";
+import { readableSource } from "../compliance/citations";
 
 const ids = (list: { id: string }[]) => list.map((c) => c.id);
 
@@ -75,5 +76,54 @@ describe("room cautions know the room's systems", () => {
       /this walk-in a large leak fills from the floor up/,
     );
     expect(room("walk-in", []).at(-1)!.id).toBe("codes-govern");
+  });
+});
+
+describe("under EU F-gas rules the cautions name no US rule", () => {
+  // What an EU company may not read (docs/decisions/0116-eu-words-for-cautions-and-leak-checks.md).
+  // The words name no US rule or code; the sources cite no US rule. The ACGIH values keep the document
+  // they were read in (standards.md §5 [S:S2], the OSHA PEL preamble of 1989): a source, not a rule.
+  const US_WORDS = /EPA|Section 608|OSHA|29 CFR|40 CFR|IMC|ASHRAE 15|CSA B52/;
+  const US_RULES = /EPA|Section 608|29 CFR|40 CFR|IMC|ASHRAE 15|CSA B52/;
+  const words = (list: { id: string; text: string; source: string }[]) => {
+    for (const c of list) expect(readableSource(c.source), c.id).not.toMatch(US_RULES);
+    return list.map((c) => c.text).join("\n");
+  };
+  const US = US_WORDS;
+
+  it("a finding on an R-744 system: certification under 2024/573, EN 378 and ISO 5149, and no US rule", () => {
+    const eu = cautionsFor({ refrigerant: getRefrigerant("R-744"), place: "machine-room", rules: "eu" });
+    expect(words(eu)).not.toMatch(US);
+    // Certified persons: Regulation (EU) 2024/573, Art. 10 (from memory: the article number is not in standards.md).
+    expect(eu.find((c) => c.id === "certified-technicians")!.text).toMatch(/Regulation \(EU\) 2024\/573/);
+    // The closing caution keeps the European codes (standards.md §8 disclaimer: EN 378, ISO 5149).
+    expect(eu.at(-1)!.text).toMatch(/EN 378, ISO 5149, national and local codes/);
+    // Dry nitrogen for pressure tests is trade practice there: common practice, no published source.
+    expect(readableSource(eu.find((c) => c.id === "pressure-test-nitrogen")!.source)).toBe(
+      "common practice, no published source",
+    );
+    // The US profile keeps its own words unchanged.
+    const us = cautionsFor({ refrigerant: getRefrigerant("R-744"), place: "machine-room" });
+    expect(us.map((c) => c.text).join("\n")).toMatch(/Section 608/);
+  });
+
+  it("a CO2 machine room on the Walk screen: ACGIH 5,000 ppm TWA and 30,000 ppm STEL, the site's detector and local codes", () => {
+    // ACGIH TLV 5,000 ppm TWA, 30,000 ppm STEL: docs/reference/standards.md §5 [S:S2].
+    const room = roomCautions("machine-room", [getRefrigerant("R-744")], "eu");
+    const co2 = room.find((c) => c.id === "co2-exposure")!.text;
+    expect(co2).toMatch(/5,000 ppm averaged over a work shift and 30,000 ppm over 15 minutes \(ACGIH\)/);
+    expect(co2).toMatch(/site's CO2 detector/);
+    expect(co2).toMatch(/Local codes/);
+    expect(words(room)).not.toMatch(US);
+  });
+
+  it("an ammonia or propane machine room: toxic and rising, or flammable, with no US rule", () => {
+    // R-717 B2L and lighter than air (standards.md §4 [D], §5 [M]); R-290 A3 (standards.md §5 [M], §8 [S:D2]).
+    const nh3 = roomCautions("machine-room", [getRefrigerant("R-717")], "eu");
+    expect(ids(nh3)).toContain("toxic-ammonia");
+    expect(nh3.find((c) => c.id === "oxygen-displacement")!.text).toMatch(/R-717 collects near the ceiling/);
+    const r290 = roomCautions("machine-room", [getRefrigerant("R-290")], "eu");
+    expect(r290.find((c) => c.id === "flammable")!.text).toMatch(/^R-290: This refrigerant is flammable/);
+    expect(words([...nh3, ...r290])).not.toMatch(US);
   });
 });

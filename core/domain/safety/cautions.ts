@@ -20,6 +20,12 @@ export type CautionId =
 
 export type CautionPlace = "walk-in" | "machine-room" | "sales-floor";
 
+/**
+ * Whose rules the reader works under, from the company's rule profile: the certification, codes and
+ * exposure limits a caution names are the ones of that place (an EU company reads no US rule).
+ */
+export type CautionRules = "us" | "eu";
+
 export interface Caution {
   id: CautionId;
   /** "warning" for what can hurt someone now; "notice" for practice and law. */
@@ -65,7 +71,14 @@ const CO2_EXPOSURE: Caution = {
   source: "[S:S2] ACGIH TLV 5,000 ppm TWA, 30,000 ppm STEL; OSHA PEL 5,000 ppm TWA [M]",
 };
 
-function oxygenCaution(r: Refrigerant | undefined, place: CautionPlace | undefined): Caution {
+/** The same limits without the US regulator's figure: the brief's ACGIH pair, the site's detector and codes. */
+const CO2_EXPOSURE_EU: Caution = {
+  ...CO2_EXPOSURE,
+  text: "CO2 (R-744) is harmful to breathe well before it displaces oxygen. Exposure limits: 5,000 ppm averaged over a work shift and 30,000 ppm over 15 minutes (ACGIH). Trust the site's CO2 detector: leave when it alarms. Local codes and the site's procedure govern.",
+  source: "[S:S2] ACGIH TLV 5,000 ppm TWA, 30,000 ppm STEL",
+};
+
+function oxygenCaution(r: Refrigerant | undefined, place: CautionPlace | undefined, rules: CautionRules): Caution {
   const where =
     place === "walk-in"
       ? "this walk-in"
@@ -85,7 +98,9 @@ function oxygenCaution(r: Refrigerant | undefined, place: CautionPlace | undefin
     level: "warning",
     text: `Any refrigerant displaces oxygen. In ${where} a large leak ${layer} without warning. Check the room's refrigerant detector and alarm before you go in, keep the door open and do not work alone; below 19.5 % oxygen the air is unsafe to breathe.`,
     source:
-      "[M] docs/reference/standards.md §8 (OSHA 19.5 % O2; confined spaces 29 CFR 1910.146); density vs air [D] §4",
+      rules === "eu"
+        ? "[M] docs/reference/standards.md §8 (19.5 % O2); density vs air [D] §4"
+        : "[M] docs/reference/standards.md §8 (OSHA 19.5 % O2; confined spaces 29 CFR 1910.146); density vs air [D] §4",
   };
 }
 
@@ -110,6 +125,23 @@ const CODES: Caution = {
   source: "docs/reference/standards.md §8 disclaimer",
 };
 
+/** Under EU rules: dry nitrogen for pressure tests is trade practice, not a rule we can cite there. */
+const PRESSURE_TEST_EU: Caution = { ...PRESSURE_TEST, source: "common practice, no published source" };
+
+/** Regulation (EU) 2024/573 asks for certified persons; the article number is from memory. */
+const CERTIFIED_EU: Caution = {
+  id: "certified-technicians",
+  level: "notice",
+  text: "Only certified persons attach gauges, check for leaks, or add or remove refrigerant (in the EU, a certificate under Regulation (EU) 2024/573 for the kind of equipment).",
+  source: "[M] Regulation (EU) 2024/573, Art. 10 (training and certification)",
+};
+
+/** The European codes only: EN 378 and ISO 5149, then national and local codes. */
+const CODES_EU: Caution = {
+  ...CODES,
+  text: "These notes do not replace the rules that apply where you work: EN 378, ISO 5149, national and local codes and licensed judgement govern.",
+};
+
 /** Flammability class 2L, 2 or 3 (ASHRAE 34: the digit after the toxicity letter). */
 export function isFlammableClass(safetyClass: string): boolean {
   return /^[AB](2L|2|3)$/.test(safetyClass);
@@ -123,15 +155,18 @@ function isHigherToxicityClass(safetyClass: string): boolean {
  * Cautions for a refrigerant and/or a place, warnings first, then practice and law. With neither
  * argument it returns the general set (oxygen displacement, nitrogen, certification, codes).
  */
-export function cautionsFor(options: { refrigerant?: Refrigerant; place?: CautionPlace } = {}): Caution[] {
-  const { refrigerant: r, place } = options;
+export function cautionsFor(
+  options: { refrigerant?: Refrigerant; place?: CautionPlace; rules?: CautionRules } = {},
+): Caution[] {
+  const { refrigerant: r, place, rules = "us" } = options;
+  const eu = rules === "eu";
   const list: Caution[] = [];
   if (r && r.id === "R-717") list.push(TOXIC_AMMONIA);
   else if (r && isFlammableClass(r.safetyClass.value)) list.push(FLAMMABLE);
   if (r && r.id !== "R-717" && isHigherToxicityClass(r.safetyClass.value)) list.push(HIGHER_TOXICITY);
-  if (r && isMostlyCo2(r)) list.push(HIGH_PRESSURE_CO2, CO2_EXPOSURE);
-  if (place !== "sales-floor") list.push(oxygenCaution(r, place));
-  list.push(PRESSURE_TEST, CERTIFIED, CODES);
+  if (r && isMostlyCo2(r)) list.push(HIGH_PRESSURE_CO2, eu ? CO2_EXPOSURE_EU : CO2_EXPOSURE);
+  if (place !== "sales-floor") list.push(oxygenCaution(r, place, rules));
+  list.push(...(eu ? [PRESSURE_TEST_EU, CERTIFIED_EU, CODES_EU] : [PRESSURE_TEST, CERTIFIED, CODES]));
   return list;
 }
 
@@ -146,24 +181,28 @@ function isMostlyCo2(r: Refrigerant): boolean {
  * (heavier than air: from the floor up; ammonia: near the ceiling). Without known systems it gives
  * the general room warning. The last caution defers to local codes.
  */
-export function roomCautions(place: CautionPlace, refrigerants: readonly Refrigerant[]): Caution[] {
+export function roomCautions(
+  place: CautionPlace,
+  refrigerants: readonly Refrigerant[],
+  rules: CautionRules = "us",
+): Caution[] {
   const distinct = [...new Map(refrigerants.map((r) => [r.id, r])).values()];
   const list: Caution[] = [];
   if (distinct.some((r) => r.id === "R-717")) list.push(TOXIC_AMMONIA);
-  if (distinct.some(isMostlyCo2)) list.push(CO2_EXPOSURE, HIGH_PRESSURE_CO2);
+  if (distinct.some(isMostlyCo2)) list.push(rules === "eu" ? CO2_EXPOSURE_EU : CO2_EXPOSURE, HIGH_PRESSURE_CO2);
   const flammable = distinct.filter((r) => r.id !== "R-717" && isFlammableClass(r.safetyClass.value));
   if (flammable.length)
     list.push({ ...FLAMMABLE, text: `${flammable.map(designationOf).join(", ")}: ${FLAMMABLE.text}` });
   const toxic = distinct.filter((r) => r.id !== "R-717" && isHigherToxicityClass(r.safetyClass.value));
   if (toxic.length)
     list.push({ ...HIGHER_TOXICITY, text: `${toxic.map(designationOf).join(", ")}: ${HIGHER_TOXICITY.text}` });
-  list.push(roomOxygenCaution(place, distinct));
-  list.push(CODES);
+  list.push(roomOxygenCaution(place, distinct, rules));
+  list.push(rules === "eu" ? CODES_EU : CODES);
   return list;
 }
 
-function roomOxygenCaution(place: CautionPlace, refrigerants: readonly Refrigerant[]): Caution {
-  if (refrigerants.length === 0) return oxygenCaution(undefined, place);
+function roomOxygenCaution(place: CautionPlace, refrigerants: readonly Refrigerant[], rules: CautionRules): Caution {
+  if (refrigerants.length === 0) return oxygenCaution(undefined, place, rules);
   const where = place === "machine-room" ? "this machine room" : "this walk-in";
   const densityOf = (r: Refrigerant) => densityRelativeToAir(r);
   const named = (list: readonly Refrigerant[]) => list.map(designationOf).join(", ");
@@ -175,7 +214,7 @@ function roomOxygenCaution(place: CautionPlace, refrigerants: readonly Refrigera
     rising.length ? `${named(rising)} ${rising.length > 1 ? "collect" : "collects"} near the ceiling` : "",
     unknown.length ? `${named(unknown)} may fill it from the floor up or collect near the ceiling` : "",
   ].filter(Boolean);
-  const base = oxygenCaution(undefined, place);
+  const base = oxygenCaution(undefined, place, rules);
   return {
     ...base,
     text: `Any refrigerant displaces oxygen. In ${where} a large leak of ${layers.join("; ")}, without warning. Check the room's refrigerant detector and alarm before you go in, keep the door open and do not work alone; below 19.5 % oxygen the air is unsafe to breathe.`,

@@ -4,6 +4,8 @@ import type { AppContext } from "../../context";
 import { companies, memberships } from "../../db/schema/index";
 import type { SessionInfo } from "#core/contracts/auth";
 import { issueCsrfToken } from "../../middleware/csrf";
+import { companyRules } from "../compliance/system-records";
+import { profileWording } from "#core/domain/compliance/company-profile";
 
 export async function listMemberships(ctx: AppContext, userId: string) {
   return ctx.db
@@ -28,6 +30,7 @@ export async function sessionInfo(ctx: AppContext, req: Request): Promise<Sessio
       csrfToken,
       outboxEnabled: ctx.config.outboxEnabled,
       units: METRIC,
+      rules: "us",
     };
   const [company] = auth.membership
     ? await ctx.db
@@ -46,5 +49,6 @@ export async function sessionInfo(ctx: AppContext, req: Request): Promise<Sessio
       mass: auth.user.massUnit ?? company.mass,
       number: company.number,
     },
+    rules: auth.membership ? profileWording((await companyRules(ctx, auth.membership.companyId)).profile) : "us",
   };
 }

@@ -28,6 +28,7 @@ import { eventDay } from "../findings/findings.service";
 import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { systemDueItems } from "./due-items";
 import { companyRules, statusesOf, systemWithStore } from "./system-records";
+import { profileWording } from "#core/domain/compliance/company-profile";
 
 type AdditionInput = z.output<typeof chargeAdditionInput>;
 type CorrectionInput = z.output<typeof chargeCorrectionInput>;
@@ -145,7 +146,7 @@ export async function getSystemRecords(
       method: rules.method,
       retentionYears: rules.profile.recordRetentionYears.value,
       retentionSource: rules.profile.recordRetentionYears.source,
-      wording: rules.profile.leakRateParts.length === 0 && rules.profile.leakChecks ? "eu" : "us",
+      wording: profileWording(rules.profile),
       leakRateRules: rules.profile.leakRateParts.length > 0,
     },
     retention: recordRetention(

@@ -19,6 +19,7 @@ import { localDateOf } from "#core/domain/dates/time-zone";
 import { lookupFor, resolveStored } from "../refrigerants/company-refrigerant-lookup";
 import { designationOf } from "#core/domain/refrigerants/types";
 import { revisionsOf } from "../systems/revision-rows";
+import type { NumberFormat } from "#core/domain/numbers/number-format";
 
 export type SystemRow = typeof systems.$inferSelect;
 export type StoreRow = typeof stores.$inferSelect;
@@ -26,6 +27,8 @@ export type StoreRow = typeof stores.$inferSelect;
 export interface CompanyRules {
   profile: RuleProfile;
   method: LeakRateMethod;
+  /** The company's number format: the figures in the rules' reasons are written in it. */
+  numberFormat?: NumberFormat;
 }
 
 /** The latest saved custom profile of a company, or null when none was saved. */
@@ -42,12 +45,12 @@ export async function latestCustomProfile(ctx: AppContext, companyId: string) {
 /** The company's rules: the profile its setting names (its own stored one for "custom") and its method. */
 export async function companyRules(ctx: AppContext, companyId: string): Promise<CompanyRules> {
   const [c] = await ctx.db
-    .select({ ruleProfile: companies.ruleProfile, method: companies.leakRateMethod })
+    .select({ ruleProfile: companies.ruleProfile, method: companies.leakRateMethod, number: companies.numberFormat })
     .from(companies)
     .where(eq(companies.id, companyId));
   const setting = c?.ruleProfile ?? "us-federal";
   const custom = setting === "custom" ? ((await latestCustomProfile(ctx, companyId))?.profile ?? null) : null;
-  return { profile: profileFor(setting, custom), method: c?.method ?? "annualizing" };
+  return { profile: profileFor(setting, custom), method: c?.method ?? "annualizing", numberFormat: c?.number };
 }
 
 export interface SystemWithStatus {
@@ -160,6 +163,7 @@ export async function statusesOf(
         retiredOn: system.retiredAt ? localDateOf(system.retiredAt, store.timeZone) : null,
       },
       today,
+      rules.numberFormat,
     );
     return {
       system,

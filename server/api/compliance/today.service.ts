@@ -10,6 +10,7 @@ import { checkStatus } from "../detectors/detectors.service";
 import { visibleStores, type Viewer } from "../../access/store-access";
 import { systemDueItems } from "./due-items";
 import { companyRules, statusesOf } from "./system-records";
+import { profileWording } from "#core/domain/compliance/company-profile";
 
 /** Overdue first, then by date; undated (never checked) at the top of what is overdue. */
 export function byUrgency(a: DueItem, b: DueItem): number {
@@ -154,6 +155,7 @@ export async function today(
 
   return {
     generatedAt: now.toISOString(),
+    wording: profileWording(rules.profile),
     stores: storeRows.map((s) => ({
       id: s.id,
       name: s.name,

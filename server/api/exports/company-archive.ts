@@ -18,6 +18,8 @@ import { leakRateStatementPdf } from "./leak-rate-statement";
 const slug = (s: string) =>
   s
     .normalize("NFKD")
+    // The accents NFKD splits off go, the letters stay: "Getränkekühler" → "getrankekuhler".
+    .replace(/\p{M}+/gu, "")
     .replace(/[^\w]+/g, "-")
     .replace(/^-|-$/g, "")
     .toLowerCase() || "x";

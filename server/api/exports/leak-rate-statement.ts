@@ -5,7 +5,7 @@ import { COMPONENT_LABELS, FINDING_EVENT_LABELS } from "#core/contracts/findings
 import { APPLIANCE_TYPE_NAMES } from "#core/contracts/systems";
 import { citedWithAcceptance } from "#core/domain/compliance/readings";
 import { formatCalendarDay as day, formatInZone } from "#core/domain/dates/format-in-zone";
-import { formatGrouped, type NumberFormat } from "#core/domain/numbers/number-format";
+import { formatGrouped, formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
 import type { Paper } from "#core/domain/reports/paper";
 import { kgToPounds } from "#core/domain/units/mass";
 import type { MassPreference } from "#core/domain/units/format-units";
@@ -69,7 +69,13 @@ function table(doc: Doc, columns: PdfColumn[], rows: string[][]) {
   drawTable(doc, columns, rows, TABLE);
 }
 
-function systemSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string, cite: Cite, format: NumberFormat) {
+function systemSection(
+  doc: Doc,
+  r: SystemRecordsView,
+  mass: (kg: number) => string,
+  cite: Cite,
+  format: NumberFormat = "1,234.5",
+) {
   heading(doc, "System");
   const gwp = r.system.refrigerant.gwp;
   para(
@@ -83,7 +89,7 @@ function systemSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => str
   if (r.co2e.known && r.co2e.tonnes !== null)
     para(
       doc,
-      `CO2-equivalent of the charge: ${formatGrouped(r.co2e.tonnes, format, 2)} t (kg × GWP ${r.co2e.gwp === null ? "unknown" : formatGrouped(r.co2e.gwp, format, 0)} / 1000; GWP source ${cite(r.co2e.source)}).`,
+      `CO2-equivalent of the charge: ${formatQuantity(r.co2e.tonnes, format)} t (kg × GWP ${r.co2e.gwp === null ? "unknown" : formatGrouped(r.co2e.gwp, format, 0)} / 1000; GWP source ${cite(r.co2e.source)}).`,
     );
   if (gwp) para(doc, `GWP basis: ${gwp.statement}.`);
   // A retired system's statement says so: its records stay, and until when the rule asks for them
@@ -91,7 +97,7 @@ function systemSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => str
   if (r.system.retired)
     para(
       doc,
-      `Retired on ${formatInZone(r.system.retired.at, r.store.timeZone, "date")}${r.system.retired.reason ? ` (${r.system.retired.reason})` : ""}; it owes no repair, test or inspection from then, and its records are kept${r.retention.keptUntil ? ` at least until ${day(r.retention.keptUntil)}` : ""}.`,
+      `Retired on ${formatInZone(r.system.retired.at, r.store.timeZone, "date")}${r.system.retired.reason ? ` (${r.system.retired.reason})` : ""}; no repair, test or leak check falls due from then, and its records are kept${r.retention.keptUntil ? ` at least until ${day(r.retention.keptUntil)}` : ""}.`,
     );
 }
 
@@ -118,7 +124,7 @@ function profileSection(doc: Doc, r: SystemRecordsView, cite: Cite) {
   if (r.nextInspection)
     para(
       doc,
-      `Next inspection due ${day(r.nextInspection.dueOn)} (${r.nextInspection.reason}; ${cite(r.nextInspection.source)}).`,
+      `${r.profile.wording === "eu" ? "Next leak check" : "Next inspection"} due ${day(r.nextInspection.dueOn)} (${r.nextInspection.reason}; ${cite(r.nextInspection.source)}).`,
     );
 }
 

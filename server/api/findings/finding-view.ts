@@ -6,7 +6,8 @@ import { dueStatus } from "#core/domain/compliance/deadlines";
 import { nextActions, type LifecycleEvent } from "#core/domain/findings/lifecycle";
 import { lookupFor } from "../refrigerants/company-refrigerant-lookup";
 import { cautionsFor, type CautionPlace } from "#core/domain/safety/cautions";
-import type { StoreRow, SystemWithStatus } from "../compliance/system-records";
+import { companyRules, type StoreRow, type SystemWithStatus } from "../compliance/system-records";
+import { profileWording } from "#core/domain/compliance/company-profile";
 
 export type FindingRow = typeof findings.$inferSelect;
 
@@ -24,6 +25,8 @@ export async function toFindingDetails(
   if (rows.length === 0) return [];
   const ids = rows.map((r) => r.id);
   const lookup = await lookupFor(ctx, rows[0].companyId);
+  // The cautions name the certification and codes of the company's rules (an EU company reads no US rule).
+  const rules = profileWording((await companyRules(ctx, rows[0].companyId)).profile);
   const [events, photos, sys] = await Promise.all([
     ctx.db
       .select({ e: findingEvents, by: users.name })
@@ -136,7 +139,7 @@ export async function toFindingDetails(
       dismissReason: row.dismissReason,
       nextActions: nextActions(lifecycle),
       deadlines,
-      cautions: cautionsFor({ refrigerant, place }).map((c) => ({
+      cautions: cautionsFor({ refrigerant, place, rules }).map((c) => ({
         id: c.id,
         level: c.level,
         text: c.text,

@@ -26,7 +26,10 @@ export function systemsRouter(ctx: AppContext): Router {
     const [bases, own] = await Promise.all([companyGwpBases(ctx, companyId), companyRefrigerantsOf(ctx, companyId)]);
     const offered = [...REFRIGERANTS, ...own.filter((r) => !r.retired)];
     res.json({
-      refrigerants: offered.map((r) => ({ ...summarizeRefrigerant(r, bases), cautions: refrigerantCautions(r) })),
+      refrigerants: offered.map((r) => ({
+        ...summarizeRefrigerant(r, bases),
+        cautions: refrigerantCautions(r, bases.rules),
+      })),
     });
   });
 

@@ -8,6 +8,8 @@ import { KG_PER_POUND } from "#core/domain/units/mass";
 import { badRequest, conflict, HttpError, notFound } from "../../lib/http-error";
 import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { gwpBasisStatement } from "#core/domain/compliance/co2e";
+import { profileWording } from "#core/domain/compliance/company-profile";
+import type { CautionRules } from "#core/domain/safety/cautions";
 import {
   refrigerantCautions,
   summarizeRefrigerant,
@@ -24,7 +26,8 @@ import {
 
 type SystemRow = typeof systems.$inferSelect;
 /** The profile's GWP choice and the company's refrigerants (the catalogue and its own). */
-type Bases = GwpChoice & { lookup: RefrigerantLookup };
+/** The company's GWP choice, its refrigerants, and whose rules its cautions name. */
+type Bases = GwpChoice & { lookup: RefrigerantLookup; rules: CautionRules };
 
 /** kg as stored; lb converted at exactly 0.45359237 kg/lb (NIST SP 811, appendix B.8). */
 export function chargeToKg(charge: ChargeInput): number {
@@ -52,7 +55,12 @@ export function knownRefrigerant(id: string, lookup: RefrigerantLookup): Refrige
 /** The GWP bases of the profile the company works under (its own, for a custom profile), with its stated basis. */
 export async function companyGwpBases(ctx: AppContext, companyId: string): Promise<Bases> {
   const [{ profile }, lookup] = await Promise.all([companyRules(ctx, companyId), lookupFor(ctx, companyId)]);
-  return { bases: profile.gwpBases.value, statement: gwpBasisStatement(profile), lookup };
+  return {
+    bases: profile.gwpBases.value,
+    statement: gwpBasisStatement(profile),
+    lookup,
+    rules: profileWording(profile),
+  };
 }
 
 export function toSystem(row: SystemRow, bases: Bases): System {
@@ -69,7 +77,7 @@ export function toSystem(row: SystemRow, bases: Bases): System {
     inServiceOn: row.inServiceOn ?? row.createdAt.toISOString().slice(0, 10),
     retired: row.retiredAt ? { at: row.retiredAt.toISOString(), reason: row.retireReason ?? "" } : null,
     refrigerant: summarizeRefrigerant(r, bases),
-    cautions: refrigerantCautions(r),
+    cautions: refrigerantCautions(r, bases.rules),
     createdAt: row.createdAt.toISOString(),
     updatedAt: row.updatedAt.toISOString(),
   };

@@ -13,6 +13,7 @@ const FIND = "3c2d1e0f-9a8b-4c7d-8e6f-5a4b3c2d1e0f";
 // Invented stores; the figures are what the server computed (its own tests check the formulas).
 const today: TodayView = {
   generatedAt: "2026-05-01T12:00:00.000Z",
+  wording: "us",
   stores: [
     { id: A, name: "Maple Street Market", timeZone: "America/Chicago", today: "2026-05-01" },
     { id: B, name: "Old Quay Depot", timeZone: "America/Chicago", today: "2026-05-01" },
@@ -118,5 +119,47 @@ describe("Today page", () => {
     await screen.findByRole("heading", { name: "Today" });
     expect(router.state.location.pathname).toBe("/today");
     expect(screen.getByRole("button", { name: "Send today's digest now" })).toBeVisible();
+  });
+
+  it("under EU F-gas shows leak checks, not leak rates: no over-threshold list, no rate or threshold column", async () => {
+    // Regulation (EU) 2024/573 sets leak-check intervals by CO2-equivalent and no leak-rate threshold
+    // (docs/reference/standards.md §2); invented store "Hafenkai Markt".
+    const eu: TodayView = {
+      generatedAt: "2026-05-01T12:00:00.000Z",
+      wording: "eu",
+      stores: [{ id: A, name: "Hafenkai Markt", timeZone: "Europe/Berlin", today: "2026-05-01" }],
+      due: [],
+      overThreshold: [],
+      systems: [
+        {
+          id: SYS,
+          name: "Verbund NK",
+          storeId: A,
+          storeName: "Hafenkai Markt",
+          refrigerantId: "R-404A",
+          refrigerantName: "R-404A",
+          latestPercent: null,
+          latestOn: null,
+          thresholdPercent: null,
+          breachOpen: false,
+          repairedSince: false,
+          nextInspection: "2026-09-14",
+          link: `/systems/${SYS}`,
+        },
+      ],
+      openFindings: [],
+    };
+    stubFetch({ "GET /api/auth/session": { body: sessionFor("engineer") }, "GET /api/today": { body: eu } });
+    renderApp("/today");
+    const systems = await screen.findByRole("table", { name: "Systems and their next leak check" });
+    const headers = within(systems)
+      .getAllByRole("columnheader")
+      .map((h) => h.textContent);
+    expect(headers.join(" | ")).toMatch(/Next leak check/);
+    expect(headers.join(" | ")).not.toMatch(/leak rate|Threshold|inspection/i);
+    expect(within(systems).getByRole("link", { name: "14 Sept 2026" }).getAttribute("href")).toBe(
+      `/systems/${SYS}#checks`,
+    );
+    expect(screen.queryByRole("heading", { name: "Systems over threshold" })).toBeNull();
   });
 });

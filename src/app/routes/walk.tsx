@@ -3,6 +3,7 @@ import { WalkScreen } from "../../features/walk/components/walk-screen";
 import { useDocumentTitle } from "../../lib/use-document-title";
 import { ContrastToggle } from "../shell/contrast-toggle";
 import { useUnitPreferences } from "../shell/use-unit-preferences";
+import { useSignedIn } from "../shell/session-context";
 
 export const handle = { fullScreen: true };
 
@@ -10,6 +11,7 @@ export function Component() {
   useDocumentTitle("Walk");
   const { storeId, sweepId } = useParams();
   const units = useUnitPreferences();
+  const { session } = useSignedIn();
   return (
     <WalkScreen
       storeId={storeId!}
@@ -18,6 +20,7 @@ export function Component() {
       leaveTo={`/stores/${storeId}/walk`}
       lengthUnit={units.length}
       numberFormat={units.number}
+      cautionRules={session.rules}
     />
   );
 }

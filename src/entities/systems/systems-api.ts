@@ -15,3 +15,14 @@ export function systemsQueryOptions(storeId: string) {
 export function useSystems(storeId: string) {
   return useQuery(systemsQueryOptions(storeId));
 }
+
+/** The store's retired systems: out of service, their records kept and readable (docs/decisions/0040). */
+export function useRetiredSystems(storeId: string) {
+  return useQuery({
+    queryKey: systemsKeys.retired(storeId),
+    queryFn: async ({ signal }) => {
+      const { systems } = await api.get(`/api/stores/${storeId}/systems?include=retired`, systemListResponse, signal);
+      return systems.filter((s) => s.retired !== null);
+    },
+  });
+}

@@ -30,10 +30,21 @@ export function StoreRecordsSection({ storeId, numberFormat }: { storeId: string
                     {s.name}
                   </Link>
                   :{" "}
-                  <span className={s.breachOpen ? "font-bold text-danger" : ""}>
-                    {s.latestPercent === null ? "no additions" : formatPercent(s.latestPercent, numberFormat)}
-                  </span>
-                  {s.thresholdPercent !== null ? ` (threshold ${s.thresholdPercent} %)` : " (no threshold applies)"}
+                  {today.data.wording === "eu" ? (
+                    // EU F-gas: leak checks by CO2-equivalent, no leak rate or threshold to show.
+                    s.nextInspection ? (
+                      `next leak check ${formatCalendarDay(s.nextInspection)}`
+                    ) : (
+                      "no periodic leak check"
+                    )
+                  ) : (
+                    <>
+                      <span className={s.breachOpen ? "font-bold text-danger" : ""}>
+                        {s.latestPercent === null ? "no additions" : formatPercent(s.latestPercent, numberFormat)}
+                      </span>
+                      {s.thresholdPercent !== null ? ` (threshold ${s.thresholdPercent} %)` : " (no threshold applies)"}
+                    </>
+                  )}
                 </li>
               ))}
             </ul>
@@ -49,6 +60,8 @@ export function StoreRecordsSection({ storeId, numberFormat }: { storeId: string
                     <span className="font-bold">{formatCalendarDay(d.dueOn)}</span> (
                     {STATE_LABELS[d.state].toLowerCase()}, {daysInWords(d.daysLeft)}):{" "}
                     <Link className="text-accent underline" to={d.link}>
+                      {/* A store has several systems: each item says whose it is. */}
+                      {d.systemName ? `${d.systemName}: ` : ""}
                       {d.what}
                     </Link>
                   </li>

@@ -76,9 +76,14 @@ export function SystemRecords({
   const [editing, setEditing] = useState<{ id: string; mode: "correct" | "void" } | null>(null);
   const byId = new Map(r.additions.map((a) => [a.id, a]));
   const a = r.applicability;
+  const eu = r.profile.wording === "eu";
+  // A retired system takes no new entry or change; corrections of its entries stay possible (decision 0040).
+  const retired = r.system.retired !== null;
   const mass = (kg: number) => formatMass(kg, unit, numberFormat);
   const percent = (p: number) => formatPercent(p, numberFormat);
   const gwp = (v: number) => formatGrouped(v, numberFormat, 0);
+  // The amount as it was typed, with all its places, in the company's marks ("8,5", never "8.5").
+  const asEntered = (v: number) => formatGrouped(v, numberFormat, Math.min(6, (String(v).split(".")[1] ?? "").length));
   return (
     <div className="space-y-8">
       <dl className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
@@ -94,6 +99,9 @@ export function SystemRecords({
             <span className={r.latest.exceeds ? "text-danger" : ""}>
               {percent(r.latest.percent)} on {formatCalendarDay(r.latest.date)}
             </span>
+          ) : !r.profile.leakRateRules && r.additions.length > 0 ? (
+            // EU F-gas sets no leak-rate rule: the additions are listed, not turned into a rate.
+            "Not calculated under this profile"
           ) : (
             "No additions yet"
           )}
@@ -109,7 +117,7 @@ export function SystemRecords({
             <span className="block text-sm text-muted">GWP basis: {r.system.refrigerant.gwp.statement}</span>
           ) : null}
         </Fact>
-        <Fact label="Next inspection">
+        <Fact label={eu ? "Next leak check" : "Next inspection"}>
           {r.nextInspection ? formatCalendarDay(r.nextInspection.dueOn) : "None scheduled"}
         </Fact>
         <Fact label="Appliance">{APPLIANCE_TYPE_NAMES[r.system.applianceType]}</Fact>
@@ -161,7 +169,7 @@ export function SystemRecords({
         ) : null}
         {r.nextInspection ? (
           <p>
-            <span className="font-bold text-ink">Next inspection: </span>
+            <span className="font-bold text-ink">{eu ? "Next leak check" : "Next inspection"}: </span>
             {r.nextInspection.reason} (<SourceText source={r.nextInspection.source} />
             ).
           </p>
@@ -265,13 +273,13 @@ export function SystemRecords({
       </section>
 
       <ChronicSection r={r} unit={unit} numberFormat={numberFormat} canFile={canFile} />
-      <RevisionsSection r={r} unit={unit} numberFormat={numberFormat} canRevise={canFile} />
+      <RevisionsSection r={r} unit={unit} numberFormat={numberFormat} canRevise={canFile && !retired} />
 
       <section aria-labelledby="charge" className="space-y-3">
         <h2 id="charge" className="text-xl font-bold">
           Charge added
         </h2>
-        {canRecord ? (
+        {canRecord && !retired ? (
           <ChargeForm
             systemId={r.system.id}
             today={r.today}
@@ -299,7 +307,7 @@ export function SystemRecords({
                   {x.voided ? <s>{mass(x.amountKg)}</s> : mass(x.amountKg)}
                   <br />
                   <span className="text-sm text-muted">
-                    entered {x.enteredValue} {x.enteredUnit}
+                    entered {asEntered(x.enteredValue)} {x.enteredUnit}
                     {x.excluded ? `; not counted: ${EXCLUSION_NAMES[x.excluded]}` : ""}
                   </span>
                 </>
@@ -383,9 +391,9 @@ export function SystemRecords({
 
       <section aria-labelledby="checks" className="space-y-3">
         <h2 id="checks" className="text-xl font-bold">
-          Leak checks and inspections
+          {eu ? "Leak checks" : "Leak checks and inspections"}
         </h2>
-        {canRecord ? <LeakCheckForm systemId={r.system.id} today={r.today} /> : null}
+        {canRecord && !retired ? <LeakCheckForm systemId={r.system.id} today={r.today} /> : null}
         {r.leakChecks.length === 0 ? (
           <p className="text-muted">No leak check recorded.</p>
         ) : (

@@ -3,7 +3,7 @@ import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 import { Link } from "react-router";
 import { COMPONENT_LABELS, type FINDING_COMPONENTS } from "#core/contracts/findings";
 import type { TodayView as TodayData } from "#core/contracts/compliance";
-import { DataTable } from "../../../components/ui/data-table";
+import { DataTable, type Column } from "../../../components/ui/data-table";
 import { EmptyState } from "../../../components/ui/empty-state";
 import { Select } from "../../../components/ui/select";
 import type { NumberFormat } from "#core/domain/numbers/number-format";
@@ -36,6 +36,8 @@ export function TodayView({
 }) {
   const [sort, setSort] = useState<DueSort>("due");
   const due = arrangeDue(data.due, storeId, sort);
+  // EU F-gas sets no leak-rate threshold: no over-threshold list, no rate or threshold columns.
+  const eu = data.wording === "eu";
   const inStore = <T extends { storeId: string | null }>(rows: T[]) =>
     rows.filter((r) => storeId === null || r.storeId === storeId);
   return (
@@ -126,7 +128,7 @@ export function TodayView({
         )}
       </section>
 
-      <section aria-labelledby="over-heading" className="space-y-2">
+      <section aria-labelledby="over-heading" className="space-y-2" hidden={eu}>
         <h2 id="over-heading" className="text-xl font-bold">
           Systems over threshold
         </h2>
@@ -232,11 +234,11 @@ export function TodayView({
           Systems
         </h2>
         <DataTable
-          caption="Systems and their latest leak rate"
+          caption={eu ? "Systems and their next leak check" : "Systems and their latest leak rate"}
           rows={inStore(data.systems)}
           rowKey={(r) => r.id}
           search="Search systems"
-          columns={[
+          columns={withoutRates<TodayData["systems"][number]>(eu, [
             {
               header: "System",
               sortValue: (r) => r.name,
@@ -274,20 +276,25 @@ export function TodayView({
               cell: (r) => (r.thresholdPercent === null ? "none applies" : `${r.thresholdPercent} %`),
             },
             {
-              header: "Next inspection",
+              header: eu ? "Next leak check" : "Next inspection",
               sortValue: (r) => r.nextInspection ?? "",
               cell: (r) =>
                 r.nextInspection ? (
                   <Link className="text-accent underline" to={`${r.link}#checks`}>
-                    {r.nextInspection}
+                    {formatCalendarDay(r.nextInspection)}
                   </Link>
                 ) : (
                   "—"
                 ),
             },
-          ]}
+          ])}
         />
       </section>
     </div>
   );
+}
+
+/** Under EU F-gas the systems table has no leak-rate or threshold column (neither applies there). */
+function withoutRates<Row>(eu: boolean, columns: Column<Row>[]): Column<Row>[] {
+  return eu ? columns.filter((c) => c.header !== "Latest leak rate" && c.header !== "Threshold") : columns;
 }

@@ -11,7 +11,8 @@ import { QueryError } from "../../../components/ui/query-error";
 import { Spinner } from "../../../components/ui/spinner";
 import { formErrorMessage } from "../../../lib/form-errors";
 import { useDeleteSystem } from "../api/delete-system";
-import { useSystems } from "../../../entities/systems/systems-api";
+import { useRetiredSystems, useSystems } from "../../../entities/systems/systems-api";
+import { RetiredSystems } from "./retired-systems";
 import { SystemForm } from "./system-form";
 import { CompanyRefrigerantsPanel } from "./company-refrigerants-panel";
 
@@ -31,6 +32,7 @@ export function SystemsSection({
   numberFormat?: NumberFormat;
 }) {
   const systems = useSystems(storeId);
+  const retired = useRetiredSystems(storeId);
   const [editing, setEditing] = useState<string | "new" | null>(null);
   const [confirmDelete, setConfirmDelete] = useState<string | null>(null);
   const del = useDeleteSystem();
@@ -173,6 +175,7 @@ export function SystemsSection({
           ]}
         />
       ) : null}
+      <RetiredSystems systems={retired.data ?? []} />
       <details className="rounded-md bg-paper p-3 edge">
         <summary className="min-h-11 cursor-pointer py-2 font-bold">Refrigerant not in the catalogue?</summary>
         <CompanyRefrigerantsPanel canEdit={canEdit} numberFormat={numberFormat} />

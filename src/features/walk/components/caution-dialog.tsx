@@ -1,6 +1,6 @@
 import type { RefrigerantSummary } from "#core/contracts/systems";
 import { refrigerantOfSummary } from "#core/domain/refrigerants/company-refrigerant";
-import { roomCautions, type CautionPlace } from "#core/domain/safety/cautions";
+import { roomCautions, type CautionPlace, type CautionRules } from "#core/domain/safety/cautions";
 import { Button } from "../../../components/ui/button";
 import { Dialog } from "../../../components/ui/dialog";
 
@@ -12,16 +12,19 @@ export function CautionDialog({
   place,
   name,
   refrigerants: summaries = [],
+  rules = "us",
   onClose,
 }: {
   place: CautionPlace | null;
   name: string;
   /** The refrigerants of the room's systems, as the store pack holds them (a company's own ones too). */
   refrigerants?: readonly RefrigerantSummary[];
+  /** Whose rules the cautions name: an EU company reads no US rule. */
+  rules?: CautionRules;
   onClose(): void;
 }) {
   const refrigerants = summaries.map(refrigerantOfSummary);
-  const cautions = place ? roomCautions(place, refrigerants) : [];
+  const cautions = place ? roomCautions(place, refrigerants, rules) : [];
   return (
     <Dialog
       title={`Before you enter ${name || (place === "machine-room" ? "the machine room" : "the walk-in")}`}

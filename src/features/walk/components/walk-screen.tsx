@@ -1,7 +1,7 @@
 import { useMemo, useRef, useState, type ReactNode } from "react";
 import type { RefrigerantSummary } from "#core/contracts/systems";
 import { useNavigate } from "react-router";
-import type { CautionPlace } from "#core/domain/safety/cautions";
+import type { CautionPlace, CautionRules } from "#core/domain/safety/cautions";
 import { FIXTURE_KIND_NAMES } from "#core/contracts/fixture-kinds";
 import { Alert } from "../../../components/ui/alert";
 import type { LengthPreference } from "#core/domain/units/format-units";
@@ -51,6 +51,7 @@ export function WalkScreen({
   leaveTo,
   lengthUnit = "m",
   numberFormat = "1,234.5",
+  cautionRules = "us",
 }: {
   storeId: string;
   sweepId: string;
@@ -58,6 +59,8 @@ export function WalkScreen({
   leaveTo: string;
   lengthUnit?: LengthPreference;
   numberFormat?: NumberFormat;
+  /** Whose rules the room cautions name (the company's profile, from the session kept offline). */
+  cautionRules?: CautionRules;
 }) {
   const walk = useWalk(sweepId);
   const storePack = useStorePack(storeId);
@@ -403,6 +406,7 @@ export function WalkScreen({
         place={caution?.place ?? null}
         name={caution?.name ?? ""}
         refrigerants={caution?.refrigerants ?? []}
+        rules={cautionRules}
         onClose={() => setCaution(null)}
       />
       <ReadingsDrawer
