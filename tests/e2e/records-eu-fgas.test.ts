@@ -252,6 +252,15 @@ it("an EU engineer follows a leak from the check through repair and re-check, in
   expect(text).not.toMatch(US_WORDS);
   renderPdfPages(bytes, "records-eu-statement");
 
+  // The clean re-check verifies the repair under EU rules: the engineer closes the finding, with no US
+  // verification test offered on the way (2024/573 [S:E6]).
+  await page.goto(findingUrl);
+  await page.getByRole("button", { name: "Close the finding", exact: true }).click();
+  await page.getByRole("button", { name: "Save: close the finding" }).click();
+  await page.getByTestId("finding-status").filter({ hasText: "closed" }).waitFor();
+  expect(await page.getByRole("button", { name: /verification test/ }).count()).toBe(0);
+  await noUsWords(page, "closed finding");
+
   // Today: leak checks, no rates or thresholds.
   await page.getByRole("link", { name: "Today", exact: true }).click();
   await page.getByRole("table", { name: "Systems and their next leak check" }).waitFor();

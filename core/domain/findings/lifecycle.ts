@@ -4,7 +4,9 @@ import type { Permission } from "../roles";
  * The finding lifecycle as data: suspected → confirmed → repaired → (initial verification test,
  * follow-up verification test) → verified → closed, or dismissed with a reason. A failed test
  * sends the finding back to confirmed: the leak is still there and needs another repair
- * (40 CFR 82.152 "verification test" definitions [S:R8]; the loop back is our reading).
+ * (40 CFR 82.152 "verification test" definitions [S:R8]; the loop back is our reading). Under EU F-gas
+ * rules there are no verification tests: a repaired finding closes once a leak check of its system
+ * found no leak on or after the repair day (the re-check, Regulation (EU) 2024/573 [S:E6]).
  */
 export type FindingStatus = "suspected" | "confirmed" | "repaired" | "verified" | "closed" | "dismissed";
 export type FindingEventKind =
@@ -65,6 +67,19 @@ export function currentStatus(events: readonly LifecycleEvent[]): FindingStatus 
   return events.at(-1)?.status ?? "suspected";
 }
 
+/**
+ * How the company's rules verify a repair: the US parts' initial and follow-up verification tests, or
+ * the EU re-check — a leak check with no leak found on or after the repair day, within a month
+ * (Regulation (EU) 2024/573 [S:E6]); the day of each clean leak check of the finding's system is given.
+ */
+export type Verification = { by: "tests" } | { by: "recheck"; cleanChecksOn: readonly string[] };
+const BY_TESTS: Verification = { by: "tests" };
+
+/** The day of the latest repair, if any. */
+function repairedOn(events: readonly LifecycleEvent[]): string | null {
+  return events.findLast((e) => e.kind === "repaired")?.on ?? null;
+}
+
 export type Transition = { ok: true; kind: FindingEventKind; status: FindingStatus } | { ok: false; message: string };
 
 /**
@@ -75,9 +90,22 @@ export function transition(
   events: readonly LifecycleEvent[],
   action: FindingAction,
   result?: "passed" | "failed",
+  verification: Verification = BY_TESTS,
 ): Transition {
   const status = currentStatus(events);
   const refuse = (why: string): Transition => ({ ok: false, message: `This finding is ${status}: ${why}` });
+  if (verification.by === "recheck") {
+    if (action === "initial-test" || action === "follow-up-test")
+      return refuse("under these rules a repair is verified by a leak check after it, not by verification tests.");
+    if (action === "close" && status === "repaired") {
+      const repair = repairedOn(events);
+      return repair && verification.cleanChecksOn.some((d) => d >= repair)
+        ? { ok: true, kind: "closed", status: "closed" }
+        : refuse(
+            "record the leak check after the repair first (no leak found, within a month of the repair), then close it.",
+          );
+    }
+  }
   switch (action) {
     case "confirm":
       return status === "suspected"
@@ -113,8 +141,8 @@ export function transition(
 }
 
 /** Actions that make sense next, for the buttons on the finding screen. */
-export function nextActions(events: readonly LifecycleEvent[]): FindingAction[] {
-  return FINDING_ACTIONS.filter((a) => transition(events, a, "passed").ok);
+export function nextActions(events: readonly LifecycleEvent[], verification: Verification = BY_TESTS): FindingAction[] {
+  return FINDING_ACTIONS.filter((a) => transition(events, a, "passed", verification).ok);
 }
 
 export function isOpen(status: FindingStatus): boolean {

@@ -66,6 +66,15 @@ describe("an engineer under EU F-gas: leak checks, repair and the re-check (Regu
     expect(
       (await lead.post(`/api/findings/${finding.body.id}/events`, { action: "repair", on: "2026-06-03" })).status,
     ).toBe(200);
+    // No US verification tests under EU rules, and the finding does not close before the re-check [S:E6].
+    const events = `/api/findings/${finding.body.id}/events`;
+    const early = await engineer.post(events, { action: "close", on: "2026-06-04" });
+    expect(early.status).toBe(409);
+    expect(early.body.error.message).toMatch(/leak check after the repair first/);
+    const test = await lead.post(events, { action: "initial-test", on: "2026-06-04", result: "passed" });
+    expect(test.status).toBe(409);
+    expect(test.body.error.message).toMatch(/verified by a leak check after it, not by verification tests/);
+    expect((await engineer.get(`/api/findings/${finding.body.id}`)).body.nextActions).toEqual([]);
     rec = (await engineer.get(`/api/systems/${id}/records`)).body;
     // Re-check within 1 month of the repair [S:E6]: 3 Jun → 3 Jul; no US verification tests, no leak rate.
     expect(rec.due.map((d: { kind: string; dueOn: string }) => [d.kind, d.dueOn])).toEqual([
@@ -82,5 +91,10 @@ describe("an engineer under EU F-gas: leak checks, repair and the re-check (Regu
     expect(rec.due.map((d: { kind: string; dueOn: string }) => [d.kind, d.dueOn])).toEqual([
       ["inspection", "2026-12-20"],
     ]);
+    // ...and lets the engineer close the finding: the repair held.
+    expect((await engineer.get(`/api/findings/${finding.body.id}`)).body.nextActions).toEqual(["close"]);
+    const closed = await engineer.post(events, { action: "close", on: "2026-06-20" });
+    expect(closed.status).toBe(200);
+    expect(closed.body.status).toBe("closed");
   });
 });

@@ -8,6 +8,7 @@ import { lookupFor } from "../refrigerants/company-refrigerant-lookup";
 import { cautionsFor, type CautionPlace } from "#core/domain/safety/cautions";
 import { companyRules, type StoreRow, type SystemWithStatus } from "../compliance/system-records";
 import { profileWording } from "#core/domain/compliance/company-profile";
+import { repairVerification } from "./repair-verification";
 
 export type FindingRow = typeof findings.$inferSelect;
 
@@ -65,6 +66,11 @@ export async function toFindingDetails(
         .where(inArray(fixtures.id, fixtureIds))
     : [];
   const names = new Map(foundBy.map((u) => [u.id, u.name]));
+  const verification = await repairVerification(
+    ctx,
+    rules,
+    rows.map((r) => r.systemId),
+  );
   return rows.map((row) => {
     const store = storesById.get(row.storeId)!;
     const mine = events.filter((x) => x.e.findingId === row.id);
@@ -137,7 +143,7 @@ export async function toFindingDetails(
       fixtureLabel: fixture?.label || null,
       refrigerantId: system?.refrigerantId ?? null,
       dismissReason: row.dismissReason,
-      nextActions: nextActions(lifecycle),
+      nextActions: nextActions(lifecycle, verification(row.systemId)),
       deadlines,
       cautions: cautionsFor({ refrigerant, place, rules }).map((c) => ({
         id: c.id,

@@ -14,6 +14,8 @@ import { badRequest, conflict, forbidden, notFound, HttpError } from "../../lib/
 import { companyRules, statusesOf, type StoreRow, type SystemWithStatus } from "../compliance/system-records";
 import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { toFindingDetails, type FindingRow } from "./finding-view";
+import { repairVerification } from "./repair-verification";
+import { profileWording } from "#core/domain/compliance/company-profile";
 
 type CreateInput = z.output<typeof createFindingInput>;
 
@@ -255,6 +257,9 @@ export async function addFindingEvent(
     );
   }
   const on = eventDay(input.on, store);
+  const verification = (
+    await repairVerification(ctx, profileWording((await companyRules(ctx, viewer.companyId)).profile), [row.systemId])
+  )(row.systemId);
   await ctx.db.transaction(async (tx) => {
     // Lock the finding so two people acting at once cannot both move it from the same status.
     await tx.select({ id: findings.id }).from(findings).where(eq(findings.id, row.id)).for("update");
@@ -270,7 +275,7 @@ export async function addFindingEvent(
       result: e.result,
     }));
     const result = "result" in input ? input.result : undefined;
-    const t = transition(lifecycle, input.action, result);
+    const t = transition(lifecycle, input.action, result, verification);
     if (!t.ok) throw conflict(t.message);
     const last = events.at(-1);
     if (last && compareDates(on, last.on) < 0) {
