@@ -36,5 +36,5 @@ export const EU_FGAS_PROFILE: RuleProfile = {
     hermeticExemptBelowTonnes: { value: 10, source: "[S:E1] hermetically sealed, labelled, < 10 t CO2e" },
     recheckAfterRepairMonths: { value: 1, source: "[S:E6] re-check within 1 month of a repair" },
   },
-  recordRetentionYears: { value: 5, source: "[S:E8b] 2024/573 Art. 7, records at least 5 years" },
+  recordRetentionYears: { value: 5, source: "[S:E8b] 2024/573 Art. 7" },
 };

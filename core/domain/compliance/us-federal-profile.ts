@@ -109,5 +109,5 @@ export const US_FEDERAL_PROFILE: RuleProfile = {
     note: "IPCC AR4 100-year values (the AIM Act's exchange values); a component with no AR4 value (the HFOs R-1234yf, R-1234ze(E)) takes its AR5 value, where AR5's \"<1\" counts as 1",
   },
   leakRateParts: [PART_82_SUBPART_F, PART_84_SUBPART_C],
-  recordRetentionYears: { value: 3, source: "[S:R6,R7] records kept 3 years" },
+  recordRetentionYears: { value: 3, source: "[S:R6,R7]" },
 };

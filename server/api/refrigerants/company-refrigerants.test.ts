@@ -193,7 +193,7 @@ describe("a company's own refrigerants (docs/decisions/0073)", () => {
       const pdf = await owner.agent.get(`/api/systems/${s.body.id}/leak-rate-statement.pdf`).buffer(true).parse(binary);
       const text = (await pdfText(pdf.body as Buffer)).join(" ").replace(/\s+/g, " ");
       expect(text).toContain("Refrigerant Imported HFC mix (entered by the company)");
-      expect(text).toContain("GWP 2500 on AR4");
+      expect(text).toContain("GWP 2,500 on AR4");
       expect(text).toContain("GWP basis: stated by the company on AR4 (maker's safety data sheet, section 12).");
     } finally {
       await useProfile(owner, "us-federal");
