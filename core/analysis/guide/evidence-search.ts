@@ -3,7 +3,7 @@ import type { CorrectedReading } from "../../contracts/locator-output";
 import { pointInPolygon } from "../geometry/point-in-polygon";
 import type { Hypothesis, Kernel, ProbeSuggestion } from "./next-probes";
 import { nextProbes } from "./next-probes";
-import { probePlaces, roomWithin, type ProbePlace } from "./probe-places";
+import { isOpenFloor, probePlaces, roomWithin, type ProbePlace } from "./probe-places";
 
 // Before the locator finds a credible spot (a weak plume, a few readings), the readings near an alarm
 // still say where along a case the gas is strongest. Here the places a leak could be near where the
@@ -67,13 +67,7 @@ const ROOMS = new Set(["walk-in", "machine-room"]);
  */
 export function leakSites(plan: Plan, near: { x: number; y: number }, reachM: number): LeakSite[] {
   const within = (x: number, y: number) => Math.hypot(x - near.x, y - near.y) <= reachM;
-  const open = (x: number, y: number) =>
-    x > 0 &&
-    y > 0 &&
-    x < plan.width &&
-    y < plan.height &&
-    !plan.obstacles.some((o) => pointInPolygon([x, y], o.polygon)) &&
-    !plan.fixtures.some((f) => pointInPolygon([x, y], f.polygon));
+  const open = isOpenFloor(plan);
   const out: LeakSite[] = [];
   for (const f of plan.fixtures) {
     const ring = f.polygon;

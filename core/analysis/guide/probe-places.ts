@@ -18,6 +18,17 @@ const FRONT_OFFSET_M = 0.15;
 
 const ROOMS = new Set(["walk-in", "machine-room"]);
 
+/** Whether a point is open floor: on the plan, not inside a solid body or a fixture. */
+export function isOpenFloor(plan: Plan): (x: number, y: number) => boolean {
+  return (x, y) =>
+    x > 0 &&
+    y > 0 &&
+    x < plan.width &&
+    y < plan.height &&
+    !plan.obstacles.some((o) => pointInPolygon([x, y], o.polygon)) &&
+    !plan.fixtures.some((f) => pointInPolygon([x, y], f.polygon));
+}
+
 /**
  * Probe places within `reachM` of `near`: every `spacingM` along the open sides of each case (not
  * inside a solid body or another fixture), the middle of each walk-in and machine room whose walls
@@ -26,13 +37,7 @@ const ROOMS = new Set(["walk-in", "machine-room"]);
  */
 export function probePlaces(plan: Plan, near: { x: number; y: number }, reachM: number, spacingM = 0.6): ProbePlace[] {
   const within = (x: number, y: number) => Math.hypot(x - near.x, y - near.y) <= reachM;
-  const open = (x: number, y: number) =>
-    x > 0 &&
-    y > 0 &&
-    x < plan.width &&
-    y < plan.height &&
-    !plan.obstacles.some((o) => pointInPolygon([x, y], o.polygon)) &&
-    !plan.fixtures.some((f) => pointInPolygon([x, y], f.polygon));
+  const open = isOpenFloor(plan);
   const out: ProbePlace[] = [];
   for (const f of plan.fixtures) {
     if (ROOMS.has(f.kind)) {
