@@ -37,3 +37,8 @@ export function profileFor(setting: CompanyRuleProfile, custom: RuleProfile | nu
 export function profileWording(profile: RuleProfile): "us" | "eu" {
   return profile.leakRateParts.length === 0 && profile.leakChecks ? "eu" : "us";
 }
+
+/** EU F-gas rules set leak checks, not a leak rate: a system's statement is named for what it holds. */
+export function statementTitle(leakRateRules: boolean): string {
+  return leakRateRules ? "Leak-rate statement" : "F-gas record statement";
+}

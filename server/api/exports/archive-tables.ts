@@ -1,5 +1,7 @@
 import { asc, eq, getTableColumns, inArray, type Table } from "drizzle-orm";
 import type { AppContext } from "../../context";
+import { companyRules } from "../compliance/system-records";
+import { profileWording } from "#core/domain/compliance/company-profile";
 import {
   chargeAdditions,
   chronicLeakerReports,
@@ -123,7 +125,11 @@ export async function archiveTables(ctx: AppContext, companyId: string): Promise
       .where(eq(companyRefrigerants.companyId, companyId))
       .orderBy(asc(companyRefrigerants.enteredAt), asc(companyRefrigerants.id)),
   ]);
-  return [
+  // No chronic-leaker report exists under EU F-gas rules: an EU company's archive has no such file,
+  // unless it holds filings from a time under US rules.
+  const noChronicFile =
+    filingRows.length === 0 && profileWording((await companyRules(ctx, companyId)).profile) === "eu";
+  const tables: ArchiveTable[] = [
     { file: "stores.csv", columns: cols(stores), rows: storeRows },
     { file: "people.csv", columns: ["id", "name", "role"], rows: people },
     { file: "systems.csv", columns: cols(systems), rows: systemRows },
@@ -143,4 +149,5 @@ export async function archiveTables(ctx: AppContext, companyId: string): Promise
     { file: "readings.csv", columns: cols(readings), rows: readingRows },
     { file: "reading-edits.csv", columns: cols(readingAudit), rows: editRows },
   ];
+  return noChronicFile ? tables.filter((x) => x.file !== "chronic-leaker-filings.csv") : tables;
 }

@@ -130,6 +130,9 @@ describe("records export", () => {
       const res = await tech.agent.get(`/api/systems/${systemId}/leak-rate-statement.pdf`).buffer(true).parse(binary);
       const text = (await pdfText(res.body as Buffer)).join(" ").replace(/\s+/g, " ");
       expect(text).not.toMatch(/CFR|EPA|Section 608|leak-rate method|No refrigerant has been added/);
+      // EU F-gas sets leak checks, not a leak rate: the statement is named for what it holds.
+      expect(text).toMatch(/^F-gas record statement /);
+      expect(text).not.toMatch(/Leak-rate statement/);
       // The 10 lb addition is a row of the refrigerant-added table (date, amount, technician); kg first for a kg company.
       expect(text).toContain("1 Feb 2026 4.54 kg (10.0 lb) technician of Hollyhock Foods");
       // 45.359237 kg × 1387 / 1000 = 62.913 t CO2e: the 50–500 t band, every 6 months without a leak detection

@@ -4,6 +4,7 @@ import type { FindingDetail } from "#core/contracts/finding-actions";
 import { COMPONENT_LABELS, FINDING_EVENT_LABELS } from "#core/contracts/findings";
 import { APPLIANCE_TYPE_NAMES } from "#core/contracts/systems";
 import { citedWithAcceptance } from "#core/domain/compliance/readings";
+import { statementTitle } from "#core/domain/compliance/company-profile";
 import { formatCalendarDay as day, formatInZone } from "#core/domain/dates/format-in-zone";
 import { formatGrouped, formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
 import type { Paper } from "#core/domain/reports/paper";
@@ -359,7 +360,7 @@ export function leakRateStatementPdf(
     size: options.paper === "a4" ? "A4" : "LETTER",
     margin: MARGIN,
     bufferPages: true,
-    info: { Title: `Leak-rate statement – ${r.system.name}`, Creator: "Plumeline" },
+    info: { Title: `${statementTitle(r.profile.leakRateRules)} – ${r.system.name}`, Creator: "Plumeline" },
   });
   const chunks: Buffer[] = [];
   doc.on("data", (c: Buffer) => chunks.push(c));
@@ -371,7 +372,7 @@ export function leakRateStatementPdf(
   const cite = (source: string) => citedWithAcceptance(source, options.acceptedReadings ?? null);
   const generated = `made ${formatInZone(options.generatedAt ?? new Date(), r.store.timeZone, "dateTime")}`;
 
-  doc.font("bold").fontSize(17).fillColor(INK).text("Leak-rate statement", MARGIN);
+  doc.font("bold").fontSize(17).fillColor(INK).text(statementTitle(r.profile.leakRateRules), MARGIN);
   para(doc, `${r.system.name} · ${r.store.name}`, INK, 10);
   para(
     doc,

@@ -1,5 +1,6 @@
 import { useState } from "react";
 import { formatCalendarDay, formatInZone } from "#core/domain/dates/format-in-zone";
+import { statementTitle } from "#core/domain/compliance/company-profile";
 import { Link } from "react-router";
 import type { SystemRecordsView } from "#core/contracts/compliance";
 import { APPLIANCE_TYPE_NAMES } from "#core/contracts/systems";
@@ -419,7 +420,7 @@ export function SystemRecords({
             target="_blank"
             rel="noreferrer"
           >
-            Leak-rate statement (PDF)
+            {statementTitle(r.profile.leakRateRules)} (PDF)
           </a>
           <a className="text-accent underline" href={`/api/systems/${r.system.id}/records.csv`}>
             Charge added and findings (CSV)
