@@ -74,7 +74,10 @@ export function createMailQueue(
     // once the database answers, instead of waiting out pg-boss's expiry.
     type MailJob = { id: string; data: { mailId: string }; retryCount: number; retryLimit: number };
     let held: MailJob | null = null;
+    let heldSince = 0;
     while (boss === b) {
+      // Held no longer than a lease: after that pg-boss's own expiry and retry take over.
+      if (held && Date.now() - heldSince > LEASE_S * 1000) held = null;
       try {
         const job: MailJob | undefined =
           held ?? (await b.fetch<{ mailId: string }>(MAIL_JOB, { includeMetadata: true, batchSize: 1 }))[0];
@@ -82,6 +85,7 @@ export function createMailQueue(
           await pause(opts.pollingIntervalS * 1000);
           continue;
         }
+        if (held !== job) heldSince = Date.now();
         held = job;
         try {
           await deliver(job.data.mailId, job.retryCount >= job.retryLimit);
