@@ -26,7 +26,8 @@ export interface SweepConditions {
   fansRunning: boolean;
 }
 
-const AIR_KIND: Partial<Record<FixtureKind, LocatorFixtureKind>> = {
+/** The layout kinds the locator models as air volumes, and the locator kind of each. */
+export const AIR_KIND: Partial<Record<FixtureKind, LocatorFixtureKind>> = {
   "open-case": "open-case",
   "island-case": "island-case",
   "door-case": "door-case",

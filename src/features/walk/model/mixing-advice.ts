@@ -1,6 +1,5 @@
 import type { Fixture } from "#core/contracts/fixtures";
-import { AIR_VOLUME_KINDS } from "#core/contracts/fixture-kinds";
-import type { LocatorFixture } from "#core/contracts/locator-input";
+import { AIR_KIND } from "#core/domain/layout/to-locator-input";
 import { estimateBackground } from "#core/analysis/locator/background";
 import { fansMixing } from "#core/analysis/locator/diagnostics";
 import type { LocalPass, LocalReading, LocalSweep } from "./local-types";
@@ -12,16 +11,6 @@ export interface MixingAdvice {
   count: number;
   levelPpm: number;
 }
-
-const AIR_KINDS = new Set<string>(AIR_VOLUME_KINDS);
-const LOCATOR_KIND: Record<string, LocatorFixture["kind"]> = {
-  "open-case": "open-case",
-  "island-case": "island-case",
-  "door-case": "door-case",
-  "walk-in-cooler": "walk-in",
-  "walk-in-freezer": "walk-in",
-  "machine-room": "machine-room",
-};
 
 /** Whether this reading was taken while the fixture's fans ran (first pass running, no pass stilling it). */
 function fansRanFor(
@@ -59,11 +48,12 @@ export function mixingAdvice(
   ).ppm;
   const out: MixingAdvice[] = [];
   for (const f of fixtures) {
-    if (!f.hasFans || !AIR_KINDS.has(f.kind) || !("polygon" in f) || stilled.has(f.id)) continue;
+    const kind = AIR_KIND[f.kind];
+    if (!f.hasFans || !kind || !("polygon" in f) || stilled.has(f.id)) continue;
     const running = committed.filter((r) => fansRanFor(r, f.id, sweep, passes));
     const polygon = f.polygon.map(([x, y]) => [x, y] as [number, number]);
     const d = fansMixing(
-      { id: f.id, kind: LOCATOR_KIND[f.kind], polygon, fans: true },
+      { id: f.id, kind, polygon, fans: true },
       Float64Array.from(running, (r) => r.x),
       Float64Array.from(running, (r) => r.y),
       Float64Array.from(running, (r) => r.ppm),
