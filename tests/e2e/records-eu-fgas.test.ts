@@ -11,7 +11,7 @@ import { mkdirSync } from "node:fs";
 import { afterAll, beforeAll, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { eq } from "drizzle-orm";
-import { fromBuffer, type Entry } from "yauzl";
+import { unzip } from "../helpers/unzip";
 import { chargeAdditions, companies, leakChecks, stores, systems } from "../../server/db/schema/index";
 import { launchBrowser, newContext } from "../helpers/browser";
 import { startE2eServer, type E2eServer } from "../helpers/e2e-server";
@@ -113,30 +113,6 @@ async function noUsWords(page: Page, where: string) {
 async function openRecords(page: Page, id: string, name: string) {
   await page.goto(`${server.url}/systems/${id}`);
   await page.getByRole("heading", { name, exact: true }).waitFor();
-}
-
-/** Every file of a zip, read with a zip reader of its own (yauzl). */
-function unzip(bytes: Buffer): Promise<Map<string, Buffer>> {
-  return new Promise((resolve, reject) => {
-    fromBuffer(bytes, { lazyEntries: true }, (err, zip) => {
-      if (err || !zip) return reject(err);
-      const files = new Map<string, Buffer>();
-      zip.on("entry", (entry: Entry) => {
-        zip.openReadStream(entry, (e, stream) => {
-          if (e || !stream) return reject(e);
-          const chunks: Buffer[] = [];
-          stream.on("data", (c: Buffer) => chunks.push(c));
-          stream.on("end", () => {
-            files.set(entry.fileName, Buffer.concat(chunks));
-            zip.readEntry();
-          });
-        });
-      });
-      zip.on("end", () => resolve(files));
-      zip.on("error", reject);
-      zip.readEntry();
-    });
-  });
 }
 
 it("an EU engineer follows a leak from the check through repair and re-check, in EU words and 1.234,5 numbers", async () => {

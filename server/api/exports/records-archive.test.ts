@@ -1,6 +1,6 @@
 import Papa from "papaparse";
 import { and, eq, inArray } from "drizzle-orm";
-import { fromBuffer, type Entry } from "yauzl";
+import { unzip } from "../../../tests/helpers/unzip";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTestApp, type Agent, type TestApp } from "../../../tests/helpers/test-app";
 import { companyFixture, type CompanyFixture } from "../../../tests/helpers/security-fixtures";
@@ -30,30 +30,6 @@ const binary = (
   res.on("data", (c) => chunks.push(c!));
   res.on("end", () => cb(null, Buffer.concat(chunks)));
 };
-
-/** Every file of a zip, read back with a zip reader of its own (yauzl), name → bytes. */
-function unzip(bytes: Buffer): Promise<Map<string, Buffer>> {
-  return new Promise((resolve, reject) => {
-    fromBuffer(bytes, { lazyEntries: true }, (err, zip) => {
-      if (err || !zip) return reject(err);
-      const files = new Map<string, Buffer>();
-      zip.on("entry", (entry: Entry) => {
-        zip.openReadStream(entry, (e, stream) => {
-          if (e || !stream) return reject(e);
-          const chunks: Buffer[] = [];
-          stream.on("data", (c: Buffer) => chunks.push(c));
-          stream.on("end", () => {
-            files.set(entry.fileName, Buffer.concat(chunks));
-            zip.readEntry();
-          });
-        });
-      });
-      zip.on("end", () => resolve(files));
-      zip.on("error", reject);
-      zip.readEntry();
-    });
-  });
-}
 
 const csvRows = (files: Map<string, Buffer>, name: string) => {
   const parsed = Papa.parse<Record<string, string>>(files.get(`tables/${name}`)!.toString("utf8"), {
