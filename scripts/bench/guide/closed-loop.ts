@@ -58,6 +58,8 @@ export function runLoop(family: Family, store: number, policy: Policy): LoopResu
       continue;
     }
     from ??= { readings: tech.readings.length, metres: tech.walkedM };
+    // the truth, for the person reading a trace (the policy never sees it)
+    if (process.env.GUIDE_TRACE) console.log(JSON.stringify({ leaks: world.truth.leaks, alarm: tap }));
     const run = policy.run({ world, leg: legs[leg], alarmAtS });
     let outcome: IteratorResult<PolicyStep, "marked" | "nothing">;
     while (!(outcome = run.next()).done) {

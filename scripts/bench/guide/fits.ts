@@ -1,7 +1,7 @@
 // The locator run the guided policy reads after each reading, in two forms that must give the same
 // guidance: the full analysis of every reading on the whole plan at the server's 0.25 m cells, and the
 // live guide's windowed estimate at 0.5 m cells (core/analysis/guide/live-guide.ts, the code the phone
-// runs), several times cheaper. `compare-fits.ts` measures how often the two agree.
+// runs), several times cheaper. `scripts/bench/guide-fits.ts` measures how often the two agree.
 import { liveFit } from "#core/analysis/guide/live-guide";
 import { locate } from "#core/analysis/locate";
 import type { LocatorInput } from "#core/contracts/locator-input";

@@ -4,22 +4,26 @@
 // the strongest reading so far, and around the locator's first suspect once that is credible). The
 // likeliest place is the mark, once a re-check has reached the alarm; the next reading goes where it
 // best tells the likely places apart, held as long as the trade rule's re-checks. Stop when the mark
-// has settled: it moved less than SETTLED_M over the last SETTLED_READINGS and holds SETTLED_SHARE of
-// the weight. If ORIGIN_PROBES probes never reach the alarm, it was a passing wisp and the sweep goes on.
+// has settled (settledOn: the last looks' marks within 0.6 m, each holding enough of the weight there). If ORIGIN_PROBES probes never reach the alarm, it was a passing wisp and the sweep goes on.
 import { evidenceOf, searchAroundAlarm } from "#core/analysis/guide/evidence-search";
 import type { ProbeSuggestion } from "#core/analysis/guide/next-probes";
 import { createSourceKernel } from "#core/analysis/locator/source-kernel";
 import { LOCATOR_SETTINGS } from "#core/analysis/locator/settings";
 import { parseLocatorInput } from "#core/contracts/locator-input";
 import type { World } from "../simulate/scenario";
+import { FOUND_WITHIN_M } from "./closed-loop";
 import { fullFit, windowFit, type Fitter } from "./fits";
 import type { Policy } from "./policy";
 import { holdS } from "./trade-rule";
 
-const SETTLED_M = 0.3;
-const SETTLED_READINGS = 3;
-/** The mark settles only once it holds this share of the sites' weight (tuned on stores 6001-6003). */
-const SETTLED_SHARE = 0.3;
+/**
+ * The mark has settled when the last SETTLED_LOOKS marks lie within FOUND_WITHIN_M of the latest one and
+ * each held at least SETTLED_SHARE of the sites' weight within that radius: the found criterion's own
+ * radius, so a mark alternating between two sites either side of the leak settles, and one sitting on a
+ * weak site while the readings still spread the weight does not (tried on stores 6001-6010).
+ */
+const SETTLED_LOOKS = Number(process.env.GUIDE_SETTLED_LOOKS ?? 3);
+const SETTLED_SHARE = Number(process.env.GUIDE_SETTLED_SHARE ?? 0.5);
 /** The locator's suspects are those within this distance of the alarm that started the search (m). */
 const WINDOW_M = 8;
 /** Probes around the alarm that never reach the alarm before it counts as a wisp. */
@@ -78,12 +82,25 @@ export function guidedView(
   return { credible: !!first, mark, next: search.probes[0], wisp: probes.length >= ORIGIN_PROBES && !confirmed };
 }
 
+/** Whether the latest marks have settled on one place (SETTLED_LOOKS, SETTLED_SHARE). */
+export function settledOn(marks: readonly GuidedView["mark"][]): boolean {
+  const last = marks.slice(-SETTLED_LOOKS);
+  const latest = marks.at(-1);
+  return (
+    !!latest &&
+    last.length === SETTLED_LOOKS &&
+    last.every(
+      (m) => m !== null && m.share >= SETTLED_SHARE && Math.hypot(m.x - latest.x, m.y - latest.y) <= FOUND_WITHIN_M,
+    )
+  );
+}
+
 /** `GUIDE_FIT=full` runs the full analysis after every reading instead of the live window. */
 const defaultFitter: Fitter = process.env.GUIDE_FIT === "full" ? fullFit : windowFit;
 
 /**
  * The guided policy reading `fitter`'s locator run; `observe` sees each look before the policy acts on
- * it (compare-fits.ts asks the other fit the same question there).
+ * it (guide-fits.ts asks the other fit the same question there).
  */
 export function guidedWith(
   fitter: Fitter,
@@ -97,7 +114,7 @@ export function guidedWith(
   return {
     name: "guided",
     *run({ world }) {
-      const marks: { x: number; y: number }[] = [];
+      const marks: GuidedView["mark"][] = [];
       const alarmIndex = world.technician.readings.length - 1;
       const hold = holdS(world);
       const visited: { x: number; y: number }[] = [];
@@ -106,12 +123,8 @@ export function guidedWith(
         observe?.({ world, alarmIndex, visited, view });
         if (view.wisp) return "nothing";
         const { mark, next } = view;
-        if (mark) marks.push(mark);
-        const settled =
-          mark !== null &&
-          mark.share >= SETTLED_SHARE &&
-          marks.length >= SETTLED_READINGS + 1 &&
-          marks.slice(-SETTLED_READINGS - 1).every((m) => Math.hypot(m.x - mark.x, m.y - mark.y) <= SETTLED_M);
+        marks.push(mark);
+        const settled = settledOn(marks);
         if (process.env.GUIDE_TRACE)
           console.log(JSON.stringify({ credible: view.credible, last: world.technician.readings.at(-1), mark, next }));
         yield { mark: mark && { x: mark.x, y: mark.y } };

@@ -1,13 +1,13 @@
-// Is the live window the same guidance as the full analysis? `npx tsx scripts/bench/guide/compare-fits.ts
+// Is the live window the same guidance as the full analysis? `npx tsx scripts/bench/guide-fits.ts
 // [--first K] [--stores N] [--families a,b]`: the guided policy runs on the full analysis after every
 // reading, and at each of its looks the live window (fits.ts) is asked the same question on the same
 // readings. Printed: how often the two send the next probe to the same place, how far apart their
 // marks are, whether both or neither have a mark, and the time each took.
 import { performance } from "node:perf_hooks";
-import { runLoop } from "./closed-loop";
-import { fullFit, windowFit, type Fitter } from "./fits";
-import { guidedView, guidedWith } from "./guided";
-import type { Family } from "../simulate/store-types";
+import { runLoop } from "./guide/closed-loop";
+import { fullFit, windowFit, type Fitter } from "./guide/fits";
+import { guidedView, guidedWith } from "./guide/guided";
+import type { Family } from "./simulate/store-types";
 
 const args = process.argv.slice(2);
 const option = (name: string, fallback: string) => {
