@@ -27,7 +27,7 @@ import { badRequest, conflict, notFound, HttpError } from "../../lib/http-error"
 import { eventDay } from "../findings/findings.service";
 import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { systemDueItems } from "./due-items";
-import { companyRules, statusesOf, systemWithStore } from "./system-records";
+import { companyRules, statusesOf, systemWithStore, type CompanyRules } from "./system-records";
 import { profileWording } from "#core/domain/compliance/company-profile";
 
 type AdditionInput = z.output<typeof chargeAdditionInput>;
@@ -109,9 +109,11 @@ export async function getSystemRecords(
   viewer: Viewer,
   systemId: string,
   now = new Date(),
+  /** The company's rules when the caller has read them already (a statement, the archive). */
+  preloaded?: CompanyRules,
 ): Promise<SystemRecordsView> {
   const row = await visibleSystem(ctx, viewer, systemId);
-  const rules = await companyRules(ctx, viewer.companyId);
+  const rules = preloaded ?? (await companyRules(ctx, viewer.companyId));
   const [s] = await statusesOf(ctx, rules, [row], now);
   const st = s.status;
   // Independent reads of the system's records: asked together, not one after another.
@@ -134,7 +136,7 @@ export async function getSystemRecords(
       .where(eq(complianceAudit.systemId, systemId))
       .orderBy(desc(complianceAudit.at), desc(complianceAudit.id)),
   ]);
-  const system = toSystem(row.system, await companyGwpBases(ctx, viewer.companyId));
+  const system = toSystem(row.system, await companyGwpBases(ctx, viewer.companyId, rules));
   const lc = st.leakCheck;
   return {
     system,

@@ -1,6 +1,6 @@
 import { asc, eq, getTableColumns, inArray, type Table } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import { companyRules } from "../compliance/system-records";
+import type { RuleProfile } from "#core/domain/compliance/rule-profile";
 import { profileWording } from "#core/domain/compliance/company-profile";
 import {
   chargeAdditions,
@@ -37,7 +37,7 @@ const cols = (t: Table) => Object.keys(getTableColumns(t));
  * archive is the record set itself rather than a view of it. Readings and finding steps reach
  * the company through their sweep and finding. Ordered by time so an auditor reads them in order.
  */
-export async function archiveTables(ctx: AppContext, companyId: string): Promise<ArchiveTable[]> {
+export async function archiveTables(ctx: AppContext, companyId: string, profile: RuleProfile): Promise<ArchiveTable[]> {
   const db = ctx.db;
   const companySweeps = db.select({ id: sweeps.id }).from(sweeps).where(eq(sweeps.companyId, companyId));
   const companyFindings = db.select({ id: findings.id }).from(findings).where(eq(findings.companyId, companyId));
@@ -127,8 +127,7 @@ export async function archiveTables(ctx: AppContext, companyId: string): Promise
   ]);
   // No chronic-leaker report exists under EU F-gas rules: an EU company's archive has no such file,
   // unless it holds filings from a time under US rules.
-  const noChronicFile =
-    filingRows.length === 0 && profileWording((await companyRules(ctx, companyId)).profile) === "eu";
+  const noChronicFile = filingRows.length === 0 && profileWording(profile) === "eu";
   const tables: ArchiveTable[] = [
     { file: "stores.csv", columns: cols(stores), rows: storeRows },
     { file: "people.csv", columns: ["id", "name", "role"], rows: people },
