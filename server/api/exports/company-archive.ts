@@ -6,6 +6,7 @@ import { tableCsv } from "#core/domain/reports/table-csv";
 import { HttpError } from "../../lib/http-error";
 import { getSystemRecords } from "../compliance/records.service";
 import { listFindings } from "../findings/findings.service";
+import { listRevisions } from "../systems/system-revisions.service";
 import type { ReaderUnits } from "../reports/reader-units";
 import { sweepReportPdf } from "../reports/reports.service";
 import { archiveTables, type ArchiveTable } from "./archive-tables";
@@ -60,7 +61,7 @@ export async function writeArchive(
   const listed: string[] = [];
   const skipped: string[] = [];
   for (const t of tables) {
-    zip.addBuffer(Buffer.from(tableCsv(t.columns, t.rows), "utf8"), `tables/${t.file}`, { mtime });
+    zip.addBuffer(Buffer.from(tableCsv(t.columns, t.rows, t.instants), "utf8"), `tables/${t.file}`, { mtime });
     listed.push(`tables/${t.file} (${t.rows.length} rows)`);
   }
 
@@ -71,7 +72,8 @@ export async function writeArchive(
     try {
       const records = await getSystemRecords(ctx, viewer, s.id, now, settings.rules);
       const list = await listFindings(ctx, viewer, s.storeId, { systemId: s.id });
-      zip.addBuffer(await leakRateStatementPdf(records, list, statement), name, { mtime });
+      const revisions = await listRevisions(ctx, viewer, s.id);
+      zip.addBuffer(await leakRateStatementPdf(records, list, statement, revisions), name, { mtime });
       listed.push(name);
     } catch (err) {
       if (!(err instanceof HttpError)) throw err;
@@ -96,7 +98,8 @@ export async function writeArchive(
   const readme = [
     `Plumeline record set, written ${now.toISOString()}.`,
     "Each CSV under tables/ is one table of records as stored: column names as in the database,",
-    "instants in ISO 8601 UTC, days as YYYY-MM-DD, masses in kg, people by id (see people.csv).",
+    "instants in ISO 8601 UTC (their columns end in _utc), days as YYYY-MM-DD, masses in kg,",
+    "people by id (see people.csv). The leak-rate statements write times in each store's zone.",
     "Text that a spreadsheet could run as a formula starts with a ' (OWASP CSV injection guidance).",
     "",
     "Contents:",

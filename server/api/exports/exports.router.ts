@@ -6,6 +6,7 @@ import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { getSystemRecords } from "../compliance/records.service";
 import { listFindings } from "../findings/findings.service";
+import { listRevisions } from "../systems/system-revisions.service";
 import { readerUnits } from "../reports/reader-units";
 import { loadArchive, writeArchive } from "./company-archive";
 import { leakRateStatementPdf } from "./leak-rate-statement";
@@ -32,12 +33,13 @@ export function exportsRouter(ctx: AppContext): Router {
       const { rules, statement } = await statementSettings(ctx, member(req).companyId);
       const records = await getSystemRecords(ctx, member(req), res.locals.params.id, new Date(), rules);
       const list = await listFindings(ctx, member(req), records.store.id, { systemId: records.system.id });
+      const revisions = await listRevisions(ctx, member(req), records.system.id);
       res.set({
         "Content-Type": "text/csv; charset=utf-8",
         "Content-Disposition": `attachment; filename="${fileName(records.system.name, "csv")}"`,
       });
       await logExport(ctx, req, "records.csv", { systemId: records.system.id });
-      res.send(recordsCsv(records, list, statement.massUnit));
+      res.send(recordsCsv(records, list, statement.massUnit, revisions));
     },
   );
 
@@ -50,7 +52,8 @@ export function exportsRouter(ctx: AppContext): Router {
       const { rules, statement } = await statementSettings(ctx, member(req).companyId);
       const records = await getSystemRecords(ctx, member(req), res.locals.params.id, new Date(), rules);
       const list = await listFindings(ctx, member(req), records.store.id, { systemId: records.system.id });
-      const pdf = await leakRateStatementPdf(records, list, statement);
+      const revisions = await listRevisions(ctx, member(req), records.system.id);
+      const pdf = await leakRateStatementPdf(records, list, statement, revisions);
       await logExport(ctx, req, "leak-rate-statement.pdf", { systemId: records.system.id });
       res.set({
         "Content-Type": "application/pdf",

@@ -3,7 +3,9 @@ import type { SystemRecordsView } from "#core/contracts/compliance";
 import type { FindingDetail } from "#core/contracts/finding-actions";
 import { COMPONENT_LABELS, FINDING_EVENT_LABELS } from "#core/contracts/findings";
 import { APPLIANCE_TYPE_NAMES } from "#core/contracts/systems";
+import { revisionHistory, type RevisionRow } from "#core/domain/compliance/revision-changes";
 import { citedWithAcceptance } from "#core/domain/compliance/readings";
+import { readableAuditEntry } from "#core/domain/compliance/audit-entry";
 import { statementTitle } from "#core/domain/compliance/company-profile";
 import { formatCalendarDay as day, formatInZone } from "#core/domain/dates/format-in-zone";
 import { formatGrouped, formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
@@ -100,6 +102,46 @@ function systemSection(
       doc,
       `Retired on ${formatInZone(r.system.retired.at, r.store.timeZone, "date")}${r.system.retired.reason ? ` (${r.system.retired.reason})` : ""}; no repair, test or leak check falls due from then, and its records are kept${r.retention.keptUntil ? ` at least until ${day(r.retention.keptUntil)}` : ""}.`,
     );
+}
+
+const KIND_WORDS: Record<RevisionRow["kind"], string> = {
+  first: "first values",
+  change: "change",
+  correction: "correction",
+  retrofit: "retrofit",
+};
+
+function historySection(
+  doc: Doc,
+  r: SystemRecordsView,
+  revisions: readonly RevisionRow[],
+  mass: (kg: number) => string,
+) {
+  // Why a figure uses the charge it uses: each figure reads the values in force on its own date
+  // (docs/decisions/0043-system-revisions.md, 0126-system-history-on-the-statement.md).
+  heading(doc, "System history");
+  if (!revisions.length) {
+    para(doc, "No dated values recorded: every figure uses the values above.");
+    return;
+  }
+  para(doc, "Each figure below uses the values in force on its own date: from a revision's day until the next one.");
+  table(
+    doc,
+    [
+      { title: "From", share: 62 },
+      { title: "Kind", share: 56 },
+      { title: "Values set", share: 170 },
+      { title: "Reason", share: 100 },
+      { title: "Recorded", share: 98 },
+    ],
+    revisionHistory(revisions, mass).map(({ revision: v, changes }) => [
+      day(v.effectiveFrom),
+      KIND_WORDS[v.kind],
+      changes,
+      v.reason,
+      `${v.by ? `${v.by}, ` : ""}${formatInZone(v.recordedAt, r.store.timeZone, "date")}`,
+    ]),
+  );
 }
 
 function profileSection(doc: Doc, r: SystemRecordsView, cite: Cite) {
@@ -306,6 +348,24 @@ function dueSection(doc: Doc, r: SystemRecordsView, cite: Cite) {
   );
 }
 
+function auditSection(doc: Doc, r: SystemRecordsView) {
+  if (!r.audit.length) return;
+  // Oldest first, as an auditor reads a trail; moments on the store's clock (docs/decisions/0125).
+  heading(doc, "Audit trail");
+  table(
+    doc,
+    [
+      { title: "When (store time)", share: 110 },
+      { title: "By", share: 100 },
+      { title: "What", share: 276 },
+    ],
+    [...r.audit].reverse().map((a) => {
+      const e = readableAuditEntry(a, r.store.timeZone);
+      return [e.when, e.by, e.summary];
+    }),
+  );
+}
+
 function recordKeepingSection(doc: Doc, r: SystemRecordsView, cite: Cite) {
   heading(doc, "Record keeping and safety");
   para(
@@ -355,6 +415,8 @@ export function leakRateStatementPdf(
   r: SystemRecordsView,
   findingList: FindingDetail[],
   options: StatementOptions,
+  /** The system's dated revisions in effect order (GET /api/systems/:id/revisions). */
+  revisions: readonly RevisionRow[],
 ): Promise<Buffer> {
   const doc = reportDocument({
     size: options.paper === "a4" ? "A4" : "LETTER",
@@ -382,6 +444,7 @@ export function leakRateStatementPdf(
   );
 
   systemSection(doc, r, mass, cite, options.numberFormat ?? "1,234.5");
+  historySection(doc, r, revisions, mass);
   profileSection(doc, r, cite);
   if (r.profile.leakRateRules) leakRateSection(doc, r, mass, cite);
   else euRecordsSection(doc, r, mass);
@@ -389,6 +452,7 @@ export function leakRateStatementPdf(
   voidedSection(doc, r, mass);
   findingsSection(doc, findingList);
   dueSection(doc, r, cite);
+  auditSection(doc, r);
   recordKeepingSection(doc, r, cite);
   footers(doc, r, generated);
   doc.end();

@@ -6,6 +6,7 @@ import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
 import { formErrorMessage, serverFieldErrors } from "../../../lib/form-errors";
 import { useRecordCharge } from "../api/record-charge";
+import { AuditTrail } from "./audit-trail";
 import type { NumberFormat } from "#core/domain/numbers/number-format";
 import { formatMass, formatPercent, type MassUnit } from "../model/figures";
 
@@ -95,18 +96,7 @@ export function ChronicSection({
           ).
         </p>
       ) : null}
-      {r.audit.length ? (
-        <>
-          <h3 className="font-bold">Audit trail</h3>
-          <ul className="space-y-1 text-sm">
-            {r.audit.map((a) => (
-              <li key={`${a.at}-${a.summary}`}>
-                {a.at.slice(0, 16).replace("T", " ")} UTC, {a.by}: {a.summary}
-              </li>
-            ))}
-          </ul>
-        </>
-      ) : null}
+      <AuditTrail r={r} />
     </section>
   );
 }
