@@ -153,6 +153,10 @@ export const systemRecords = z.object({
       percent: z.number(),
       chronic: z.boolean(),
       reportDue: text().nullable(),
+      /** Added while no leak-repair part applied to the system: listed, never counted. */
+      notCountedKg: z.number(),
+      /** Why the year is not judged when no part applied in it (the rule's reason), else null. */
+      noPart: text().nullable(),
       /** The report marked filed: the day (store calendar), who signed for it, the authority's reference. */
       filed: z.object({ on: text(), by: text(), reference: text(), note: text(), recordedAt: text() }).nullable(),
     }),

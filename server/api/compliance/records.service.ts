@@ -29,6 +29,7 @@ import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { systemDueItems } from "./due-items";
 import { companyRules, statusesOf, systemWithStore, type CompanyRules } from "./system-records";
 import { profileWording } from "#core/domain/compliance/company-profile";
+import { readableDays } from "#core/domain/compliance/audit-entry";
 
 type AdditionInput = z.output<typeof chargeAdditionInput>;
 type CorrectionInput = z.output<typeof chargeCorrectionInput>;
@@ -164,7 +165,8 @@ export async function getSystemRecords(
     // the part before it, docs/decisions/0043-system-revisions.md), else the part in force today.
     chronicRule: chronicRuleOf(
       rules.profile.leakRateParts.find(
-        (p) => p.id === (st.chronic.at(-1)?.partId ?? st.applicability.partId ?? st.latest?.partId),
+        (p) =>
+          p.id === (st.chronic.filter((y) => y.partId).at(-1)?.partId ?? st.applicability.partId ?? st.latest?.partId),
       ) ?? null,
     ),
     chronic: st.chronic.map((y) => {
@@ -175,6 +177,9 @@ export async function getSystemRecords(
         percent: y.percent,
         chronic: y.chronic,
         reportDue: y.reportDue ?? null,
+        notCountedKg: y.notCountedKg,
+        // No leak-repair part applied in the year: listed so the totals add up, not judged (decision 0127).
+        noPart: y.noPart === null ? null : readableDays(y.noPart),
         filed: f
           ? {
               on: f.r.filedOn,

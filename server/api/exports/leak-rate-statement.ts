@@ -260,16 +260,23 @@ function chronicSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => st
       { title: "Of full charge", share: 64, align: "right" },
       { title: "Chronic leaker", share: 290 },
     ],
-    r.chronic.map((y) => [
-      String(y.year),
-      mass(y.addedKg),
-      `${y.percent.toFixed(1)} %`,
-      y.chronic
-        ? y.filed
-          ? `yes; report filed on ${day(y.filed.on)} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}`
-          : `yes; report due ${day(y.reportDue)}`
-        : "no",
-    ]),
+    r.chronic.map((y) =>
+      // A year no leak-repair part reached is listed so the totals add up, and not judged (decision 0127).
+      y.noPart !== null
+        ? [String(y.year), mass(y.notCountedKg), "—", `not counted: no leak-repair part applied (${y.noPart})`]
+        : [
+            String(y.year),
+            mass(y.addedKg),
+            `${y.percent.toFixed(1)} %`,
+            `${
+              y.chronic
+                ? y.filed
+                  ? `yes; report filed on ${day(y.filed.on)} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}`
+                  : `yes; report due ${day(y.reportDue)}`
+                : "no"
+            }${y.notCountedKg > 0 ? `; ${mass(y.notCountedKg)} more added while no part applied, not counted` : ""}`,
+          ],
+    ),
   );
   if (r.chronicRule)
     para(

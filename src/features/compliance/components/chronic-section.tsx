@@ -69,6 +69,13 @@ export function ChronicSection({
   canFile: boolean;
 }) {
   if (r.chronic.length === 0 && r.audit.length === 0) return null;
+  // No years to list (no leak-repair part in the profile, or nothing added): the audit trail alone.
+  if (r.chronic.length === 0)
+    return (
+      <section aria-label="Audit trail" className="space-y-2">
+        <AuditTrail r={r} />
+      </section>
+    );
   const fileable = (y: Year) => y.chronic && !y.filed && Number(r.today.slice(0, 4)) > y.year;
   return (
     <section aria-labelledby="chronic" className="space-y-2">
@@ -78,8 +85,21 @@ export function ChronicSection({
       <ul className="space-y-2">
         {r.chronic.map((y) => (
           <li key={y.year} className={y.chronic && !y.filed ? "font-bold text-danger" : undefined}>
-            {y.year}: {formatMass(y.addedKg, unit, numberFormat)}, {formatPercent(y.percent, numberFormat)} of the full
-            charge
+            {y.noPart !== null ? (
+              // Listed so the totals add up with the charge-added trail, not judged (docs/decisions/0127).
+              <>
+                {y.year}: {formatMass(y.notCountedKg, unit, numberFormat)} added — not counted: no leak-repair part
+                applied to this system ({y.noPart})
+              </>
+            ) : (
+              <>
+                {y.year}: {formatMass(y.addedKg, unit, numberFormat)}, {formatPercent(y.percent, numberFormat)} of the
+                full charge
+                {y.notCountedKg > 0
+                  ? `; ${formatMass(y.notCountedKg, unit, numberFormat)} more added while no leak-repair part applied (not counted)`
+                  : ""}
+              </>
+            )}
             {y.chronic
               ? y.filed
                 ? ` — chronic leaker; report filed on ${formatCalendarDay(y.filed.on)} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}`
