@@ -21,14 +21,16 @@ describe("revisionChanges", () => {
 
   it("names only what a later revision changed, before and after", () => {
     const retrofit = { ...first, refrigerantName: "R-448A", fullChargeKg: 81.6466266 };
-    expect(revisionChanges(first, retrofit, lb)).toBe("refrigerant R-22 → R-448A; full charge 100.0 lb → 180.0 lb");
+    expect(revisionChanges(first, retrofit, lb)).toBe(
+      "refrigerant from R-22 to R-448A; full charge from 100.0 lb to 180.0 lb",
+    );
     expect(revisionChanges(retrofit, { ...retrofit, automaticLeakDetection: true }, lb)).toBe(
-      "automatic leak detection no → yes",
+      "automatic leak detection from no to yes",
     );
     expect(
       revisionChanges(first, { ...first, applianceType: "industrial-process", inServiceOn: "2015-05-01" }, lb),
     ).toBe(
-      "appliance type commercial refrigeration → industrial process refrigeration; in service since 1 Apr 2015 → 1 May 2015",
+      "appliance type from commercial refrigeration to industrial process refrigeration; in service since 1 May 2015 (was 1 Apr 2015)",
     );
     expect(revisionChanges(first, first, lb)).toBe("no value changed");
   });
@@ -44,8 +46,8 @@ describe("revisionChanges", () => {
     );
     expect(history.map((h) => h.changes)).toEqual([
       revisionChanges(null, first, lb),
-      "full charge 100.0 lb → 180.0 lb",
-      "refrigerant R-22 → R-407A",
+      "full charge from 100.0 lb to 180.0 lb",
+      "refrigerant from R-22 to R-407A",
     ]);
   });
 });

@@ -29,20 +29,20 @@ export function revisionChanges(previous: Facts | null, next: Facts, mass: (kg: 
     ].join("; ");
   const changed: string[] = [];
   if (previous.refrigerantName !== next.refrigerantName)
-    changed.push(`refrigerant ${previous.refrigerantName} → ${next.refrigerantName}`);
+    changed.push(`refrigerant from ${previous.refrigerantName} to ${next.refrigerantName}`);
   if (previous.fullChargeKg !== next.fullChargeKg)
-    changed.push(`full charge ${mass(previous.fullChargeKg)} → ${mass(next.fullChargeKg)}`);
+    changed.push(`full charge from ${mass(previous.fullChargeKg)} to ${mass(next.fullChargeKg)}`);
   if (previous.applianceType !== next.applianceType)
     changed.push(
-      `appliance type ${APPLIANCE_TYPE_NAMES[previous.applianceType].toLowerCase()} → ${APPLIANCE_TYPE_NAMES[next.applianceType].toLowerCase()}`,
+      `appliance type from ${APPLIANCE_TYPE_NAMES[previous.applianceType].toLowerCase()} to ${APPLIANCE_TYPE_NAMES[next.applianceType].toLowerCase()}`,
     );
   if (previous.automaticLeakDetection !== next.automaticLeakDetection)
     changed.push(
-      `automatic leak detection ${ald(previous.automaticLeakDetection)} → ${ald(next.automaticLeakDetection)}`,
+      `automatic leak detection from ${ald(previous.automaticLeakDetection)} to ${ald(next.automaticLeakDetection)}`,
     );
   if (previous.inServiceOn !== next.inServiceOn)
     changed.push(
-      `in service since ${formatCalendarDay(previous.inServiceOn)} → ${formatCalendarDay(next.inServiceOn)}`,
+      `in service since ${formatCalendarDay(next.inServiceOn)} (was ${formatCalendarDay(previous.inServiceOn)})`,
     );
   return changed.length ? changed.join("; ") : "no value changed";
 }

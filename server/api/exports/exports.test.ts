@@ -188,7 +188,7 @@ describe("records export", () => {
     expect(text).toContain(`Retired on ${formatCalendarDay(records.today)} (Replaced by a CO2 booster)`);
     expect(text).toContain(`kept at least until ${formatCalendarDay(records.retention.keptUntil)}`);
     // the retention line names its years once and cites the rule (40 CFR 82 subpart F and 84 subpart C [S:R6,R7])
-    expect(text).toContain("Keep these records for at least 3 years (40 CFR 82 subpart F;");
+    expect(text).toContain("Keep these records for at least 3 years (40 CFR 82 subpart F and 84 subpart C).");
     expect(text).not.toMatch(/records kept 3 years/);
     // 150 lb into 620 lb over 365 days (84.102, first calculation in 2026 [M]) = 24.2 % > 20 %: a breach, and
     // yet a retired system owes no inspection, so none is named as next (docs/decisions/0040).

@@ -155,7 +155,10 @@ export function recordsCsv(
     });
   }
   // The system's dated revisions: why a figure uses the charge it uses.
-  const kgAndLb = (kg: number) => `${Number(kg.toFixed(4))} kg (${Number(kgToPounds(kg).toFixed(3))} lb)`;
+  const kgAndLb = (kg: number) => {
+    const [metric, pounds] = [`${Number(kg.toFixed(4))} kg`, `${Number(kgToPounds(kg).toFixed(3))} lb`];
+    return massFirst === "lb" ? `${pounds} (${metric})` : `${metric} (${pounds})`;
+  };
   for (const { revision: v, changes } of revisionHistory(revisions, kgAndLb)) {
     rows.push({
       ...blank,

@@ -70,8 +70,7 @@ describe("the statement's system history and audit trail", () => {
       "100.0 lb (45.36 kg)",
       "2 Mar 2026",
       "retrofit",
-      // The report font has no arrow: the change prints with "to" (server/reports/report-document.ts).
-      "refrigerant R-22 to R-448A",
+      "refrigerant from R-22 to R-448A",
       "180.0 lb (81.65 kg)",
       "R-22 phase-out",
       "engineer of Brackenfield Grocers",
@@ -106,7 +105,7 @@ describe("the statement's system history and audit trail", () => {
       ["system revision: retrofit", "2026-03-02", "R-448A", "180", "R-22 phase-out"],
     ]);
     expect(revisions[1].changed).toBe(
-      "refrigerant R-22 → R-448A; full charge 45.3592 kg (100 lb) → 81.6466 kg (180 lb)",
+      "refrigerant from R-22 to R-448A; full charge from 100 lb (45.3592 kg) to 180 lb (81.6466 kg)",
     );
     expect(revisions[1].full_charge_kg).toBe("81.6466");
 
