@@ -7,6 +7,12 @@ const isoDate = text({ error: "must be a date as YYYY-MM-DD" }).regex(
   "must be a date as YYYY-MM-DD",
 );
 export const EXCLUSIONS = ["retrofit", "new-installation", "seasonal-variance"] as const;
+/** How a charge-added entry that counts no leak loss is named to a reader (40 CFR 82.157 [S:R1]). */
+export const EXCLUSION_NAMES: Record<(typeof EXCLUSIONS)[number], string> = {
+  retrofit: "fill after a retrofit",
+  "new-installation": "fill of a new installation",
+  "seasonal-variance": "seasonal variance",
+};
 
 /** Refrigerant put into a system. The day is on the store's calendar (default: its today). */
 export const chargeAdditionInput = z.object({

@@ -1,5 +1,5 @@
 import { refrigerantCell } from "./records-csv";
-import type { SystemRecordsView } from "#core/contracts/compliance";
+import { EXCLUSION_NAMES, type SystemRecordsView } from "#core/contracts/compliance";
 import type { FindingDetail } from "#core/contracts/finding-actions";
 import { COMPONENT_LABELS, FINDING_EVENT_LABELS } from "#core/contracts/findings";
 import { APPLIANCE_TYPE_NAMES } from "#core/contracts/systems";
@@ -205,7 +205,7 @@ function leakRateSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => s
       doc,
       r.additions.some((a) => !a.voided)
         ? "No leak-rate figure: the refrigerant added was excluded from the calculation."
-        : "No refrigerant has been added.",
+        : "No leak-rate figure yet: no refrigerant has been added.",
     );
   doc.moveDown(0.3);
   para(
@@ -218,13 +218,17 @@ function leakRateSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => s
   );
 }
 
-function euRecordsSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string) {
-  // EU F-gas: no leak-rate threshold; the record is the refrigerant added and the leak checks.
+/**
+ * Every live charge-added entry. Under leak-rate rules each says whether the leak rate counts it: an
+ * auditor finds the fill after a retrofit (no figure, 40 CFR 82.157) here, not only its absence from
+ * the figures.
+ */
+function additionsSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string) {
   heading(doc, "Refrigerant added");
   const live = r.additions.filter((a) => !a.voided);
-  if (live.length === 0) para(doc, "No refrigerant has been added.");
-  else
-    table(
+  if (live.length === 0) return para(doc, "No refrigerant has been added.");
+  if (!r.profile.leakRateRules)
+    return table(
       doc,
       [
         { title: "Date", share: 62 },
@@ -234,6 +238,28 @@ function euRecordsSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => 
       ],
       live.map((a) => [day(a.addedOn), mass(a.amountKg), a.technician, a.reason]),
     );
+  table(
+    doc,
+    [
+      { title: "Date", share: 62 },
+      { title: "Amount", share: 92 },
+      { title: "Technician", share: 96 },
+      { title: "Reason", share: 136 },
+      { title: "Leak rate", share: 100 },
+    ],
+    live.map((a) => [
+      day(a.addedOn),
+      mass(a.amountKg),
+      a.technician,
+      a.reason,
+      a.excluded ? `not counted: ${EXCLUSION_NAMES[a.excluded]}` : "counted",
+    ]),
+  );
+}
+
+function euRecordsSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string) {
+  // EU F-gas: no leak-rate threshold; the record is the refrigerant added and the leak checks.
+  additionsSection(doc, r, mass);
   heading(doc, "Leak checks");
   if (r.leakChecks.length === 0) para(doc, "No leak check recorded.");
   else
@@ -453,8 +479,10 @@ export function leakRateStatementPdf(
   systemSection(doc, r, mass, cite, options.numberFormat ?? "1,234.5");
   historySection(doc, r, revisions, mass);
   profileSection(doc, r, cite);
-  if (r.profile.leakRateRules) leakRateSection(doc, r, mass, cite);
-  else euRecordsSection(doc, r, mass);
+  if (r.profile.leakRateRules) {
+    additionsSection(doc, r, mass);
+    leakRateSection(doc, r, mass, cite);
+  } else euRecordsSection(doc, r, mass);
   chronicSection(doc, r, mass, cite);
   voidedSection(doc, r, mass);
   findingsSection(doc, findingList);

@@ -120,3 +120,21 @@ describe("the statement's system history and audit trail", () => {
     expect(charge.recorded_at).toMatch(/GMT-[45]$/);
   });
 });
+
+describe("the statement's list of refrigerant added", () => {
+  it("lists every entry, and says which the leak rate does not count (the fill after a retrofit, 40 CFR 82.157)", async () => {
+    const fill = await engineer.post(`/api/systems/${systemId}/charge-additions`, {
+      addedOn: "2026-03-02",
+      amount: { value: 165, unit: "lb" },
+      reason: "Retrofit fill",
+      excluded: "retrofit",
+    });
+    expect(fill.status, JSON.stringify(fill.body)).toBe(201);
+    const res = await engineer.agent.get(`/api/systems/${systemId}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+    const text = (await pdfText(res.body as Buffer)).join(" ").replace(/\s+/g, " ");
+    const added = text.slice(text.indexOf("Refrigerant added"), text.indexOf("Leak rate at every addition"));
+    // 12 lb = 5.44 kg and 165 lb = 74.84 kg (NIST SP 811).
+    expect(added).toMatch(/10 Jan 2026 12\.0 lb \(5\.44 kg\) .*Top-up counted/);
+    expect(added).toMatch(/2 Mar 2026 165\.0 lb \(74\.84 kg\) .*Retrofit fill not counted: fill after a retrofit/);
+  });
+});
