@@ -197,6 +197,11 @@ export const anyRuleProfileSchema = z.object({
       hfoBands: sourced(bands),
       hermeticExemptBelowTonnes: sourced(num("t CO2e").min(0, "must be 0 or more")),
       recheckAfterRepairMonths: sourced(wholeMonths),
+      /**
+       * How often a leak detection system must itself be checked where one is mandatory. Optional:
+       * custom profiles saved before it existed read as 12 months (docs/decisions/0123).
+       */
+      ldsCheckMonths: sourced(wholeMonths).optional(),
     })
     .optional(),
   recordRetentionYears: sourced(
