@@ -325,7 +325,7 @@ it("a retired system keeps every record: its page, the store's list of retired s
   await dialog.getByRole("button", { name: `Retire ${name}` }).click();
   await dialog.waitFor({ state: "hidden" });
   await phone.close();
-  await page.reload();
+  await page.goto(`${server.url}/stores/${co.store.id}`);
   await page.getByRole("heading", { name: "Retired systems" }).waitFor();
   await page.getByRole("heading", { name: "Retired systems" }).scrollIntoViewIfNeeded();
   await page.screenshot({ path: path.join(SCREENS, "records-eu-retired-list.png") });
