@@ -312,7 +312,7 @@ it("a retired system keeps every record: its page, the store's list of retired s
   expect(await small.getByRole("button", { name: `Delete ${name}` }).count()).toBe(0);
   await small.getByRole("button", { name: `Retire ${name}…` }).click();
   const dialog = small.getByRole("dialog", { name: `Retire ${name}` });
-  await dialog.getByLabel("Left service on").fill(localDay(101));
+  await dialog.getByLabel("Retired on").fill(localDay(101));
   await dialog.getByLabel("Reason").selectOption("replaced");
   await dialog.getByLabel("Note (optional)").fill("durch Truhe mit R-290");
   await dialog.getByRole("button", { name: `Retire ${name}` }).click();
@@ -321,7 +321,7 @@ it("a retired system keeps every record: its page, the store's list of retired s
     .first()
     .waitFor();
   await small.screenshot({ path: path.join(SCREENS, "records-eu-retire-dialog-phone.png") });
-  await dialog.getByLabel("Left service on").fill(localDay(1));
+  await dialog.getByLabel("Retired on").fill(localDay(1));
   await dialog.getByRole("button", { name: `Retire ${name}` }).click();
   await dialog.waitFor({ state: "hidden" });
   await phone.close();

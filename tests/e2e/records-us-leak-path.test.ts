@@ -158,13 +158,13 @@ it("an R-448A rack: a leak topped up twice before its repair is one figure on th
   expect(await row.getByRole("button", { name: `Delete ${rack}` }).count()).toBe(0);
   await row.getByRole("button", { name: `Retire ${rack}…` }).click();
   const dialog = owner.getByRole("dialog", { name: `Retire ${rack}` });
-  await dialog.getByLabel("Left service on").fill("2026-09-20");
+  await dialog.getByLabel("Retired on").fill("2026-09-20");
   await dialog.getByLabel("Reason").selectOption("replaced");
   await dialog.getByLabel("Note (optional)").fill("by the CO2 booster rack");
   await dialog.getByRole("button", { name: `Retire ${rack}` }).click();
   await dialog.getByText("must not be before 21 Sept 2026, when refrigerant was added").first().waitFor();
   await shot(owner, "records-us-retire-dialog-1366");
-  await dialog.getByLabel("Left service on").fill("2026-10-31");
+  await dialog.getByLabel("Retired on").fill("2026-10-31");
   await dialog.getByRole("button", { name: `Retire ${rack}` }).click();
   await dialog.waitFor({ state: "hidden" });
   await owner.getByRole("heading", { name: "Retired systems" }).waitFor();

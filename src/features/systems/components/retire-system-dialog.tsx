@@ -50,7 +50,8 @@ function RetireForm({ system, onClose }: { system: System; onClose(): void }) {
       </p>
       {message ? <Alert tone="error">{message}</Alert> : null}
       <TextField
-        label="Left service on"
+        label="Retired on"
+        hint="The day it left service, on the store's calendar"
         type="date"
         max={today}
         min={system.inServiceOn}
