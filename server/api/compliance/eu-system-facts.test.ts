@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { createTestApp, type Agent, type TestApp, signInOnce } from "../../../tests/helpers/test-app";
 import { seedCompany } from "../../../tests/helpers/fixtures";
 import { pdfText } from "../../../tests/helpers/pdf-text";
+import { unzip } from "../../../tests/helpers/unzip";
 import type { Role } from "#core/domain/roles";
 
 let t: TestApp;
@@ -258,5 +259,29 @@ describe("a retired system's day and reason in its CSV and statement (decision 0
     // Kept 5 years from the day it left service (2024/573 Art. 7, docs/reference/standards.md §2 [S:E8b]).
     expect(text).toContain("Retired on 31 Mar 2026 (Replaced by another system: by Rack 1)");
     expect(text).toContain("kept at least until 31 Mar 2031");
+  });
+});
+
+describe("the owner's archive holds the system's own facts (docs/decisions/0046, 0122–0124)", () => {
+  it("lists every detection system check, and each system's hermetic mark, retirement day and reason", async () => {
+    const owner = await signedIn("owner");
+    const zip = await owner.agent.get("/api/company/records-archive.zip").buffer(true).parse(binary);
+    expect(zip.status).toBe(200);
+    const files = await unzip(zip.body as Buffer);
+    const table = (name: string) =>
+      Papa.parse<Record<string, string>>(files.get(`tables/${name}`)!.toString("utf8"), { header: true }).data;
+    expect(table("leak-detection-checks.csv").map((r) => [r.checked_on, r.working, r.note])).toEqual([
+      ["2026-03-01", "true", "Sensors bump-tested, alarm relay tripped"],
+      ["2026-06-10", "false", ""],
+    ]);
+    const cooler = table("systems.csv").find((r) => r.name === "Old bottle cooler (plug-in)")!;
+    expect([cooler.hermetically_sealed, cooler.retired_on, cooler.retire_reason_kind, cooler.retire_reason]).toEqual([
+      "true",
+      "2026-03-31",
+      "replaced",
+      "by Rack 1",
+    ]);
+    // Nothing of another company's records.
+    expect([...files.values()].map((f) => f.toString("latin1")).join("\n")).not.toContain("Dunmere Foods");
   });
 });
