@@ -255,4 +255,8 @@ export const RULE_PROFILE_FIELDS = {
   "chronicLeaker.reportBy.source": { label: "Source for the report date" },
   "leakChecks.co2eBands.source": { label: "Source for the CO2e bands" },
   "leakChecks.recheckAfterRepairMonths": { label: "Re-check after a repair (months)" },
+  "leakChecks.ldsCheckMonths": {
+    label: "Check of a mandatory leak detection system (every … months)",
+    hint: "Where the band requires a leak detection system, the system itself is checked this often.",
+  },
 } as const satisfies Record<string, { label: string; hint?: string }>;

@@ -77,6 +77,21 @@ describe("the leak detection system's own check (EU, docs/reference/standards.md
     );
   });
 
+  it("takes the interval from the profile; a custom profile saved before the field existed reads 12 months", () => {
+    const leakChecks = EU_FGAS_PROFILE.leakChecks!;
+    const ownSix = {
+      ...EU_FGAS_PROFILE,
+      leakChecks: { ...leakChecks, ldsCheckMonths: { value: 6, source: "company policy" } },
+    };
+    const { ldsCheckMonths: _dropped, ...older } = leakChecks;
+    const olderProfile = { ...EU_FGAS_PROFILE, leakChecks: older };
+    const dueOn = (profile: typeof EU_FGAS_PROFILE) =>
+      systemStatus(profile, "annualizing", rack({}), "2026-06-01").due.find((x) => x.kind === "leak-detection-check")
+        ?.dueOn;
+    expect(dueOn(ownSix)).toBe("2025-09-10");
+    expect(dueOn(olderProfile)).toBe("2026-03-10");
+  });
+
   it("says when the mandatory detection system is not recorded on the system", () => {
     const d = status(rack({ automaticLeakDetection: false })).due.find((x) => x.kind === "leak-detection-check");
     expect(d?.what).toContain("none is recorded on the system");
