@@ -29,7 +29,7 @@ const mustRetire = (name: string) =>
   new HttpError(
     409,
     "records_exist",
-    `${name} has records, so it cannot be deleted: retire it with the day it left service and the reason (POST /api/systems/:id/retire).`,
+    `${name} has records, so it cannot be deleted: retire it instead ("Retire system…"), with the day it left service and the reason.`,
   );
 
 /**
