@@ -9,6 +9,7 @@ import {
   findingEvents,
   findings,
   leakChecks,
+  leakDetectionChecks,
   memberships,
   readingAcceptances,
   readingWithdrawals,
@@ -71,6 +72,7 @@ export async function archiveTables(ctx: AppContext, companyId: string, profile:
     acceptanceRows,
     withdrawalRows,
     ownRefrigerantRows,
+    ldsCheckRows,
   ] = await Promise.all([
     db.select().from(stores).where(eq(stores.companyId, companyId)).orderBy(asc(stores.createdAt), asc(stores.id)),
     db
@@ -137,6 +139,11 @@ export async function archiveTables(ctx: AppContext, companyId: string, profile:
       .from(companyRefrigerants)
       .where(eq(companyRefrigerants.companyId, companyId))
       .orderBy(asc(companyRefrigerants.enteredAt), asc(companyRefrigerants.id)),
+    db
+      .select()
+      .from(leakDetectionChecks)
+      .where(eq(leakDetectionChecks.companyId, companyId))
+      .orderBy(asc(leakDetectionChecks.checkedOn), asc(leakDetectionChecks.recordedAt), asc(leakDetectionChecks.id)),
   ]);
   // No chronic-leaker report exists under EU F-gas rules: an EU company's archive has no such file,
   // unless it holds filings from a time under US rules.
@@ -148,6 +155,8 @@ export async function archiveTables(ctx: AppContext, companyId: string, profile:
     table("system-revisions.csv", systemRevisions, revisionRows),
     table("charge-added.csv", chargeAdditions, additionRows),
     table("leak-checks.csv", leakChecks, checkRows),
+    // Checks of a system's leak detection system itself (EU, decision 0123).
+    table("leak-detection-checks.csv", leakDetectionChecks, ldsCheckRows),
     table("findings.csv", findings, findingRows),
     // Repairs, verification tests (initial and follow-up) and closing are steps of a finding.
     table("finding-steps.csv", findingEvents, stepRows),

@@ -7,6 +7,7 @@ import { readableAuditEntry } from "#core/domain/compliance/audit-entry";
 import { revisionHistory, type RevisionRow } from "#core/domain/compliance/revision-changes";
 import { formatInZone } from "#core/domain/dates/format-in-zone";
 import { localDateOf } from "#core/domain/dates/time-zone";
+import { retireReasonWords } from "#core/domain/compliance/retirement-words";
 
 /** The columns of a row before the GWP columns, in order: every kind of row has each of them. */
 const COLUMNS = [
@@ -196,6 +197,8 @@ export function recordsCsv(
       recorded_at_utc: a.at,
     });
   }
+  // Checks of its leak detection system and its retirement (decisions 0123, 0124).
+  rows.push(...systemFactRows(r, refrigerant, [...COLUMNS]));
   rows.sort((x, y) => String(x.date).localeCompare(String(y.date)));
   // The GWP, its stated basis and the charge's CO2-equivalent on every row, beside the figures.
   const gwp = r.system.refrigerant.gwp;
@@ -205,6 +208,7 @@ export function recordsCsv(
     gwp: gwp?.value ?? "",
     gwp_basis: gwp?.statement ?? "",
     co2e_tonnes: r.co2e.known && r.co2e.tonnes !== null ? Math.round(r.co2e.tonnes * 1000) / 1000 : "",
+    hermetically_sealed: r.system.hermeticallySealed ? "yes" : "no",
   }));
   // An lb company reads lb first (amount_lb before amount_kg); the columns are the same either way.
   const keys = Object.keys(withBasis[0] ?? {}); // COLUMNS, then the GWP columns
@@ -222,4 +226,35 @@ export function recordsCsv(
 /** The designation, and for a company's own refrigerant that the company entered it (decision 0073). */
 export function refrigerantCell(r: { designation: string; enteredByCompany: boolean }): string {
   return r.enteredByCompany ? `${r.designation} (entered by the company)` : r.designation;
+}
+
+/**
+ * The records of the system itself: each check of its leak detection system (decision 0123) and
+ * its retirement with the day and reason (decision 0124), as rows of the same columns.
+ */
+function systemFactRows(r: SystemRecordsView, refrigerant: string, keys: string[]): Record<string, string | number>[] {
+  const blank = Object.fromEntries(keys.map((k) => [k, ""]));
+  const rows: Record<string, string | number>[] = r.leakDetectionChecks.map((c) => ({
+    ...blank,
+    record: `leak detection system check (${c.working ? "working" : "fault found"})`,
+    date: c.checkedOn,
+    system: r.system.name,
+    refrigerant,
+    technician: c.by,
+    reason: c.note,
+    recorded_by: c.by,
+    entry_id: c.id,
+  }));
+  if (r.system.retired)
+    rows.push({
+      ...blank,
+      record: "system retired",
+      date: r.system.retired.on,
+      system: r.system.name,
+      refrigerant,
+      reason: retireReasonWords(r.system.retired),
+      recorded_at: formatInZone(r.system.retired.at, r.store.timeZone, "dateTime"),
+      recorded_at_utc: r.system.retired.at,
+    });
+  return rows;
 }
