@@ -281,10 +281,15 @@ export function systemStatus(
       fullChargeKg: facts.fullChargeKg,
       hasAutomaticLeakDetection: facts.automaticLeakDetection,
     });
+    // Inspections after a breach belong to the regime the breach happened in: a retrofit ends them as
+    // it ends the breach (docs/decisions/0043-system-revisions.md), so an earlier part's breach neither
+    // starts nor keeps a run under the part in force now.
+    const current = regimesOf(revisions).find((r) => inRegime(r, today));
+    const inCurrent = (d: IsoDate) => !current || inRegime(current, d);
     if (plan.required) {
       const run = inspectionRun(
-        points.filter((p) => p.exceeds).map((p) => p.date),
-        rec.leakChecks,
+        points.filter((p) => p.exceeds && inCurrent(p.date)).map((p) => p.date),
+        rec.leakChecks.filter((c) => inCurrent(c.checkedOn)),
         plan.untilPeriodsBelow,
       );
       if (run) {
