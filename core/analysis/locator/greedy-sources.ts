@@ -10,6 +10,8 @@ export interface FoundSource {
   column: Float64Array;
   /** True for an alternative spot of the first scan (e.g. the other side of a pass), not a fitted source. */
   alternate: boolean;
+  /** A spot from one strong reading that no fitted source explains (pipeline/one-reading.ts). */
+  oneReading?: boolean;
   q: number;
   /** The Δχ² map this spot was chosen on (its own round's scan), for refinement and radius. */
   surface: Float64Array;

@@ -95,6 +95,11 @@ export interface PlacementSettings {
   readonly radiusInflation: number;
   readonly radiusShare: number;
   readonly radiusReachM: number;
+  /**
+   * The radius of a spot from one reading, m: the tempered posterior of one reading is flat over every
+   * cell it sees, so the radius is the reach of its air instead (twice the kernel's screening length).
+   */
+  readonly oneReadingRadiusM: number;
 }
 
 export interface ReportSettings {
@@ -157,6 +162,7 @@ export const LOCATOR_SETTINGS: LocatorSettings = {
     radiusInflation: 25,
     radiusShare: 0.5,
     radiusReachM: 8,
+    oneReadingRadiusM: 3,
   },
   report: {
     coverageGapM: 3,
