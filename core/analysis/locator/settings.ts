@@ -47,9 +47,9 @@ export interface SourceSettings {
   /** Leaks fitted at once, and spots listed at most. */
   readonly maxLeaks: number;
   /**
-   * Sources of the greedy rounds after these are listed after the independent spots of these rounds:
-   * the later rounds are there to reach a weaker second leak past the sources that mop up a strong
-   * plume, and their strengths are the least certain.
+   * The first spot is the strongest source of these greedy rounds: the later rounds are there to reach
+   * a weaker second leak past the sources that mop up a strong plume, and their strengths are the
+   * least certain (the spots after the first go by the peak each explains, greedy-sources.ts).
    */
   readonly rankedRounds: number;
   readonly maxCandidates: number;
