@@ -42,6 +42,16 @@ export const leakCheckInput = z.object({
   note: text({ error: "must be text" }).trim().max(2000, "must be at most 2,000 characters").default(""),
 });
 
+/**
+ * A check of the system's leak detection system itself (EU: at least every 12 months where one is
+ * mandatory): the day, whether it worked as it should, and what was done.
+ */
+export const leakDetectionCheckInput = z.object({
+  checkedOn: isoDate.optional(),
+  working: z.boolean({ error: "must be true or false" }),
+  note: text({ error: "must be text" }).trim().max(2000, "must be at most 2,000 characters").default(""),
+});
+
 /** Mark a chronic-leaker report filed for one calendar year; the member recording it signs for it. */
 export const chronicReportInput = z.object({
   year: z.int("must be a whole calendar year").min(2000, "must be 2000 or later").max(2100, "must be 2100 or earlier"),
@@ -93,6 +103,7 @@ export const dueItemKinds = [
   "chronic-leaker-report",
   "detector-check",
   "automatic-leak-detection",
+  "leak-detection-check",
   "retrofit-or-retire-plan",
   "retrofit-or-retire",
 ] as const;
@@ -175,6 +186,12 @@ export const systemRecords = z.object({
   due: z.array(dueItem),
   additions: z.array(chargeAddition),
   leakChecks: z.array(z.object({ id: z.uuid(), checkedOn: text(), leakFound: z.boolean(), note: text(), by: text() })),
+  /** Checks of the leak detection system itself, oldest first. */
+  leakDetectionChecks: z.array(
+    z.object({ id: z.uuid(), checkedOn: text(), working: z.boolean(), note: text(), by: text() }),
+  ),
+  /** The leak detection system's own check is owed (EU, where one is mandatory): the form is offered. */
+  leakDetectionCheckOwed: z.boolean(),
   cautions: z.array(caution),
 });
 export type SystemRecordsView = z.infer<typeof systemRecords>;

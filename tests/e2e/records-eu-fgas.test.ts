@@ -133,7 +133,18 @@ it("an EU engineer follows a leak from the check through repair and re-check, in
     )
     .first()
     .waitFor();
+  // There the leak detection system itself is checked at least every 12 months (2024/573 Art. 5 [S:E2,E5]):
+  // owed from the in-service day until a check is recorded, then 12 months from a check that found it working.
+  await page.getByText(/Check of the leak detection system \(at least every 12 months; in service since/).waitFor();
+  const lds = page.getByRole("form", { name: "Record a check of the leak detection system" });
+  await lds.getByLabel("Detection system checked on").fill(localDay(2));
+  await lds.getByLabel("What was checked").fill("Sensoren mit Prüfgas getestet, Alarm und Relais ausgelöst");
+  await lds.getByRole("button", { name: "Record the detection system check" }).click();
+  await page.getByText(/working — engineer of Marlbeck Kältedienst \(Sensoren mit Prüfgas/).waitFor();
+  await page.getByText(/Check of the leak detection system \(at least every 12 months; last found working/).waitFor();
+  await page.getByText(`${formatCalendarDay(addMonths(localDay(2), 12))} · Upcoming`).waitFor();
   await noUsWords(page, "R-449A records");
+  await page.screenshot({ path: path.join(SCREENS, "records-eu-lds-check.png"), fullPage: true });
   // R-744 is no fluorinated gas: no periodic check (2024/573 Annex I lists F-gases only, §2).
   await openRecords(page, ids.co2, "CO2-Booster transkritisch");
   await page.getByText("R-744 is not a fluorinated gas covered by leak-check rules").waitFor();
@@ -266,19 +277,65 @@ it("a retired system keeps every record: its page, the store's list of retired s
   await signInThroughForm(page, server.url, co.people.owner.email, PASSWORD);
   const name = "Eistruhe Kasse 2 – Kühltruhe";
 
-  // A system with records is retired, never deleted (docs/decisions/0040).
+  // A small hermetic unit, as a new owner adds it: 1,9 kg R-404A × 3922 / 1000 = 7,45 t CO2e, factory-sealed
+  // and labelled, so below 10 t it owes no periodic leak check (docs/reference/standards.md §2 [S:E1]).
+  const sealed = "Getränkekühler Eingang (steckerfertig)";
   await page.goto(`${server.url}/stores/${co.store.id}`);
-  await page.getByRole("button", { name: `Delete ${name}` }).click();
-  await page.getByRole("button", { name: `Delete ${name}` }).click();
-  await page.getByText(`${name} has records, so it was retired instead of deleted`).waitFor();
-  await page.reload();
+  await page.getByRole("button", { name: "Add system" }).click();
+  await page.getByLabel("System name", { exact: true }).fill(sealed);
+  await page.getByLabel("Refrigerant", { exact: true }).selectOption("R-404A");
+  await page.getByLabel("Full charge", { exact: true }).fill("1,9");
+  await page.getByLabel("Hermetically sealed (factory-sealed, labelled as such)").check();
+  await page.getByText("carries a label saying it is hermetically sealed").screenshot({
+    path: path.join(SCREENS, "records-eu-hermetic-field.png"),
+  });
+  await page.getByRole("button", { name: "Add system" }).click(); // the form's own button
+  await page.getByRole("cell", { name: sealed, exact: true }).waitFor();
+  const listed = (await (await page.request.get(`${server.url}/api/stores/${co.store.id}/systems`)).json()) as {
+    systems: { id: string; name: string }[];
+  };
+  await openRecords(page, listed.systems.find((x) => x.name === sealed)!.id, sealed);
+  await page.getByText("Yes: factory-sealed, labelled as such").waitFor();
+  await page.getByText("hermetically sealed and below 10 t CO2e.").waitFor();
+  await page.getByText("None scheduled", { exact: true }).waitFor();
+  await noUsWords(page, "hermetic unit");
+  await page.screenshot({ path: path.join(SCREENS, "records-eu-hermetic-unit.png"), fullPage: true });
+
+  // On a phone, a system with records is retired, never deleted (docs/decisions/0040, 0124): the dialog
+  // asks the day it left service and why, and names a day before its last record as the mistake it is.
+  const phone = await newContext(browser, PHONE);
+  const small = await phone.newPage();
+  small.setDefaultTimeout(15_000);
+  small.on("pageerror", (e) => failures.push(String(e)));
+  await signInThroughForm(small, server.url, co.people.owner.email, PASSWORD);
+  await small.goto(`${server.url}/stores/${co.store.id}`);
+  expect(await small.getByRole("button", { name: `Delete ${name}` }).count()).toBe(0);
+  await small.getByRole("button", { name: `Retire ${name}…` }).click();
+  const dialog = small.getByRole("dialog", { name: `Retire ${name}` });
+  await dialog.getByLabel("Retired on").fill(localDay(101));
+  await dialog.getByLabel("Reason").selectOption("replaced");
+  await dialog.getByLabel("Note (optional)").fill("durch Truhe mit R-290");
+  await dialog.getByRole("button", { name: `Retire ${name}` }).click();
+  await dialog
+    .getByText(`must not be before ${formatCalendarDay(localDay(100))}, when refrigerant was added`)
+    .first()
+    .waitFor();
+  await small.screenshot({ path: path.join(SCREENS, "records-eu-retire-dialog-phone.png") });
+  await dialog.getByLabel("Retired on").fill(localDay(1));
+  await dialog.getByRole("button", { name: `Retire ${name}` }).click();
+  await dialog.waitFor({ state: "hidden" });
+  await phone.close();
+  await page.goto(`${server.url}/stores/${co.store.id}`);
   await page.getByRole("heading", { name: "Retired systems" }).waitFor();
   await page.getByRole("heading", { name: "Retired systems" }).scrollIntoViewIfNeeded();
   await page.screenshot({ path: path.join(SCREENS, "records-eu-retired-list.png") });
   await page.getByRole("link", { name, exact: true }).click();
   await page.getByRole("heading", { name, exact: true }).waitFor();
-  // Records kept at least 5 years after the retirement (2024/573 Art. 7 [S:E8b]); no next check owed.
-  const kept = `${Number(localDay(0).slice(0, 4)) + 5}${localDay(0).slice(4)}`;
+  // Records kept at least 5 years after the day it left service (2024/573 Art. 7 [S:E8b]); no next check owed.
+  await page
+    .getByText(`left service on ${formatCalendarDay(localDay(1))} (Replaced by another system: durch Truhe mit R-290)`)
+    .waitFor();
+  const kept = `${Number(localDay(1).slice(0, 4)) + 5}${localDay(1).slice(4)}`;
   await page.getByText(`kept at least until ${formatCalendarDay(kept)}`).waitFor();
   await page.getByText("None scheduled", { exact: true }).waitFor();
   await page.getByText("Nachfüllung nach Scheuerstelle am Kapillarrohr").waitFor();
@@ -304,7 +361,10 @@ it("a retired system keeps every record: its page, the store's list of retired s
   const statement = `statements/eistruhe-kasse-2-kuhltruhe-${ids.truhe.slice(0, 8)}.pdf`;
   expect([...files.keys()]).toContain(statement);
   const retiredText = (await pdfText(files.get(statement)!)).join("\n");
-  expect(retiredText).toContain(`Retired on ${formatCalendarDay(localDay(0))}`);
+  expect(retiredText.replace(/\s+/g, " ")).toContain(
+    `Retired on ${formatCalendarDay(localDay(1))} (Replaced by another system: durch Truhe mit R-290)`,
+  );
+  expect(csv("systems.csv")).toMatch(new RegExp(`${ids.truhe},.*,${localDay(1)},replaced,durch Truhe mit R-290,`));
   for (const [file, body] of files)
     if (file.endsWith(".pdf")) expect((await pdfText(body)).join("\n"), file).not.toMatch(US_WORDS);
   renderPdfPages(files.get(statement)!, "records-eu-retired-statement");

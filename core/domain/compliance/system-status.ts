@@ -11,6 +11,7 @@ import { systemCo2e, type SystemCo2e } from "./co2e";
 import { followUpVerificationDueDate, initialVerificationDueDate, recheckAfterRepairDueDate } from "./deadlines";
 import { inspectionsAfterBreach } from "./inspections-after-breach";
 import { leakCheckInterval, nextInspectionDate, type LeakCheckInterval } from "./leak-check-interval";
+import { leakDetectionCheckDue } from "./leak-detection-check";
 import type { ChargeAddition } from "./leak-rate";
 import type { ApplianceType, LeakRateMethod, RuleProfile } from "./rule-profile";
 import { formatCalendarDay as day } from "../dates/format-in-zone";
@@ -45,6 +46,10 @@ export interface SystemRecords {
   revisions?: readonly SystemRevision[];
   /** The day the system was retired (store calendar); from then only reports for earlier years fall due. */
   retiredOn?: IsoDate | null;
+  /** EU: factory-sealed and labelled as such (exempt from leak checks below the profile's limit). */
+  hermeticallySealed?: boolean;
+  /** Checks of the system's leak detection system itself (EU: yearly where one is mandatory). */
+  leakDetectionChecks?: readonly { checkedOn: IsoDate; working: boolean }[];
 }
 
 export interface DueDate {
@@ -56,6 +61,7 @@ export interface DueDate {
     | "inspection"
     | "chronic-leaker-report"
     | "automatic-leak-detection"
+    | "leak-detection-check"
     | "retrofit-or-retire-plan"
     | "retrofit-or-retire";
   dueOn: IsoDate;
@@ -221,16 +227,26 @@ export function systemStatus(
   let leakCheck: SystemStatus["leakCheck"] = null;
   let nextInspection: SystemStatus["nextInspection"] = null;
   if (profile.leakChecks) {
+    const hermeticallySealed = rec.hermeticallySealed ?? false;
     const withLds = leakCheckInterval(profile, facts.refrigerant, facts.fullChargeKg, {
       hasLeakDetection: true,
+      hermeticallySealed,
       numberFormat,
     });
     const withoutLds = leakCheckInterval(profile, facts.refrigerant, facts.fullChargeKg, {
       hasLeakDetection: false,
+      hermeticallySealed,
       numberFormat,
     });
     const applied = facts.automaticLeakDetection ? withLds : withoutLds;
     leakCheck = { withLds, withoutLds, applied };
+    const lds = leakDetectionCheckDue(
+      profile,
+      applied,
+      { inServiceOn: facts.enteredOn, hasLeakDetection: facts.automaticLeakDetection },
+      rec.leakDetectionChecks ?? [],
+    );
+    if (lds) due.push({ kind: "leak-detection-check", ...lds });
     if (applied.required) {
       const from = lastCheck ?? facts.enteredOn;
       nextInspection = {

@@ -9,6 +9,7 @@ import {
   findingEvents,
   findings,
   leakChecks,
+  leakDetectionChecks,
   memberships,
   readingAcceptances,
   readingWithdrawals,
@@ -58,6 +59,7 @@ export async function archiveTables(ctx: AppContext, companyId: string): Promise
     acceptanceRows,
     withdrawalRows,
     ownRefrigerantRows,
+    ldsCheckRows,
   ] = await Promise.all([
     db.select().from(stores).where(eq(stores.companyId, companyId)).orderBy(asc(stores.createdAt), asc(stores.id)),
     db
@@ -124,6 +126,11 @@ export async function archiveTables(ctx: AppContext, companyId: string): Promise
       .from(companyRefrigerants)
       .where(eq(companyRefrigerants.companyId, companyId))
       .orderBy(asc(companyRefrigerants.enteredAt), asc(companyRefrigerants.id)),
+    db
+      .select()
+      .from(leakDetectionChecks)
+      .where(eq(leakDetectionChecks.companyId, companyId))
+      .orderBy(asc(leakDetectionChecks.checkedOn), asc(leakDetectionChecks.recordedAt), asc(leakDetectionChecks.id)),
   ]);
   // No chronic-leaker report exists under EU F-gas rules: an EU company's archive has no such file,
   // unless it holds filings from a time under US rules.
@@ -136,6 +143,8 @@ export async function archiveTables(ctx: AppContext, companyId: string): Promise
     { file: "system-revisions.csv", columns: cols(systemRevisions), rows: revisionRows },
     { file: "charge-added.csv", columns: cols(chargeAdditions), rows: additionRows },
     { file: "leak-checks.csv", columns: cols(leakChecks), rows: checkRows },
+    // Checks of a system's leak detection system itself (EU, decision 0123).
+    { file: "leak-detection-checks.csv", columns: cols(leakDetectionChecks), rows: ldsCheckRows },
     { file: "findings.csv", columns: cols(findings), rows: findingRows },
     // Repairs, verification tests (initial and follow-up) and closing are steps of a finding.
     { file: "finding-steps.csv", columns: cols(findingEvents), rows: stepRows },

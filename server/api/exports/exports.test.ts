@@ -177,7 +177,11 @@ describe("records export", () => {
       component: "brazed-joint",
       foundAt: "2026-02-09T17:00:00Z",
     });
-    const retired = await owner.post(`/api/systems/${id}/retire`, { reason: "Replaced by a CO2 booster" });
+    const retired = await owner.post(`/api/systems/${id}/retire`, {
+      retiredOn: (await tech.get(`/api/systems/${id}/records`)).body.today,
+      reasonKind: "other",
+      reason: "Replaced by a CO2 booster",
+    });
     expect(retired.status).toBe(200);
     const res = await tech.agent.get(`/api/systems/${id}/leak-rate-statement.pdf`).buffer(true).parse(binary);
     const text = (await pdfText(res.body as Buffer)).join(" ").replace(/\s+/g, " ");

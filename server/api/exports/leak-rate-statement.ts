@@ -4,6 +4,7 @@ import type { FindingDetail } from "#core/contracts/finding-actions";
 import { COMPONENT_LABELS, FINDING_EVENT_LABELS } from "#core/contracts/findings";
 import { APPLIANCE_TYPE_NAMES } from "#core/contracts/systems";
 import { citedWithAcceptance } from "#core/domain/compliance/readings";
+import { retireReasonWords } from "#core/domain/compliance/retirement-words";
 import { statementTitle } from "#core/domain/compliance/company-profile";
 import { formatCalendarDay as day, formatInZone } from "#core/domain/dates/format-in-zone";
 import { formatGrouped, formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
@@ -85,7 +86,7 @@ function systemSection(
   );
   para(
     doc,
-    `${APPLIANCE_TYPE_NAMES[r.system.applianceType]}; automatic leak detection: ${r.system.automaticLeakDetection ? "yes" : "no"}.`,
+    `${APPLIANCE_TYPE_NAMES[r.system.applianceType]}; automatic leak detection: ${r.system.automaticLeakDetection ? "yes" : "no"}${r.profile.wording === "eu" || r.system.hermeticallySealed ? `; hermetically sealed: ${r.system.hermeticallySealed ? "yes (factory-sealed, labelled as such)" : "no"}` : ""}.`,
   );
   if (r.co2e.known && r.co2e.tonnes !== null)
     para(
@@ -98,7 +99,7 @@ function systemSection(
   if (r.system.retired)
     para(
       doc,
-      `Retired on ${formatInZone(r.system.retired.at, r.store.timeZone, "date")}${r.system.retired.reason ? ` (${r.system.retired.reason})` : ""}; no repair, test or leak check falls due from then, and its records are kept${r.retention.keptUntil ? ` at least until ${day(r.retention.keptUntil)}` : ""}.`,
+      `Retired on ${day(r.system.retired.on)}${retireReasonWords(r.system.retired) ? ` (${retireReasonWords(r.system.retired)})` : ""}; no repair, test or leak check falls due from then, and its records are kept${r.retention.keptUntil ? ` at least until ${day(r.retention.keptUntil)}` : ""}.`,
     );
 }
 
@@ -204,6 +205,25 @@ function euRecordsSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => 
         { title: "Note", share: 234 },
       ],
       r.leakChecks.map((c) => [day(c.checkedOn), c.leakFound ? "leak found" : "no leak found", c.by, c.note]),
+    );
+  ldsChecksSection(doc, r);
+}
+
+/** Checks of the leak detection system itself (EU, where one is mandatory: at least every 12 months, decision 0123). */
+function ldsChecksSection(doc: Doc, r: SystemRecordsView) {
+  if (!r.leakDetectionCheckOwed && r.leakDetectionChecks.length === 0) return;
+  heading(doc, "Checks of the leak detection system");
+  if (r.leakDetectionChecks.length === 0) para(doc, "No check of the leak detection system recorded.");
+  else
+    table(
+      doc,
+      [
+        { title: "Date", share: 62 },
+        { title: "Result", share: 80 },
+        { title: "Checked by", share: 110 },
+        { title: "Note", share: 234 },
+      ],
+      r.leakDetectionChecks.map((c) => [day(c.checkedOn), c.working ? "working" : "fault found", c.by, c.note]),
     );
 }
 

@@ -68,12 +68,15 @@ async function recordsFor(f: CompanyFixture) {
   await owner.post(`/api/sweeps/${f.main.sweep}/submit`, {});
   const { readings: listed } = (await owner.get("/api/compliance/readings")).body;
   expect((await owner.post("/api/compliance/readings/accept", { text: listed[0].text })).status).toBe(200);
-  // The other store's system has a record, so removing it retires it: its records stay in the archive.
+  // The other store's system has a record, so it is retired, not deleted: its records stay in the archive.
   await technician.post(`/api/systems/${f.other.system}/charge-additions`, {
     amount: { value: 2, unit: "kg" },
     reason: "Top-up",
   });
-  const removed = await owner.delete(`/api/systems/${f.other.system}`);
+  const removed = await owner.post(`/api/systems/${f.other.system}/retire`, {
+    retiredOn: storeToday(),
+    reasonKind: "store-closed",
+  });
   expect(removed.body.outcome).toBe("retired");
 }
 

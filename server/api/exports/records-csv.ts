@@ -3,6 +3,7 @@ import type { SystemRecordsView } from "#core/contracts/compliance";
 import type { FindingDetail } from "#core/contracts/finding-actions";
 import { kgToPounds } from "#core/domain/units/mass";
 import { readableSource } from "#core/domain/compliance/citations";
+import { retireReasonWords } from "#core/domain/compliance/retirement-words";
 
 /**
  * One CSV of a system's records: every charge-added entry (voided ones too, with who voided them
@@ -102,6 +103,7 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[], m
       entry_id: "",
     });
   }
+  rows.push(...systemFactRows(r, refrigerant, Object.keys(rows[0] ?? BLANK_ROW)));
   rows.sort((x, y) => String(x.date).localeCompare(String(y.date)));
   // The GWP, its stated basis and the charge's CO2-equivalent on every row, beside the figures.
   const gwp = r.system.refrigerant.gwp;
@@ -110,6 +112,7 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[], m
     gwp: gwp?.value ?? "",
     gwp_basis: gwp?.statement ?? "",
     co2e_tonnes: r.co2e.known && r.co2e.tonnes !== null ? Math.round(r.co2e.tonnes * 1000) / 1000 : "",
+    hermetically_sealed: r.system.hermeticallySealed ? "yes" : "no",
   }));
   // An lb company reads lb first (amount_lb before amount_kg); the columns are the same either way.
   const keys = Object.keys(withBasis[0] ?? {});
@@ -124,4 +127,41 @@ export function recordsCsv(r: SystemRecordsView, findingList: FindingDetail[], m
 /** The designation, and for a company's own refrigerant that the company entered it (decision 0073). */
 export function refrigerantCell(r: { designation: string; enteredByCompany: boolean }): string {
   return r.enteredByCompany ? `${r.designation} (entered by the company)` : r.designation;
+}
+
+/** The columns every row of the records CSV has, in order (a system with no other record still gets its rows). */
+const BLANK_ROW: Record<string, string> = Object.fromEntries(
+  "record date system refrigerant amount_kg amount_lb entered technician reason excluded leak_rate_percent method threshold_percent threshold_rule exceeds repair_due finding_id corrects voided status component recorded_by recorded_at entry_id"
+    .split(" ")
+    .map((k) => [k, ""]),
+);
+
+/**
+ * The records of the system itself: each check of its leak detection system (decision 0123) and
+ * its retirement with the day and reason (decision 0124), as rows of the same columns.
+ */
+function systemFactRows(r: SystemRecordsView, refrigerant: string, keys: string[]): Record<string, string | number>[] {
+  const blank = Object.fromEntries(keys.map((k) => [k, ""]));
+  const rows: Record<string, string | number>[] = r.leakDetectionChecks.map((c) => ({
+    ...blank,
+    record: `leak detection system check (${c.working ? "working" : "fault found"})`,
+    date: c.checkedOn,
+    system: r.system.name,
+    refrigerant,
+    technician: c.by,
+    reason: c.note,
+    recorded_by: c.by,
+    entry_id: c.id,
+  }));
+  if (r.system.retired)
+    rows.push({
+      ...blank,
+      record: "system retired",
+      date: r.system.retired.on,
+      system: r.system.name,
+      refrigerant,
+      reason: retireReasonWords(r.system.retired),
+      recorded_at: r.system.retired.at,
+    });
+  return rows;
 }
