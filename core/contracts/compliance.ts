@@ -7,6 +7,12 @@ const isoDate = text({ error: "must be a date as YYYY-MM-DD" }).regex(
   "must be a date as YYYY-MM-DD",
 );
 export const EXCLUSIONS = ["retrofit", "new-installation", "seasonal-variance"] as const;
+/** How a charge-added entry that counts no leak loss is named to a reader (40 CFR 82.157 [S:R1]). */
+export const EXCLUSION_NAMES: Record<(typeof EXCLUSIONS)[number], string> = {
+  retrofit: "fill after a retrofit",
+  "new-installation": "fill of a new installation",
+  "seasonal-variance": "seasonal variance",
+};
 
 /** Refrigerant put into a system. The day is on the store's calendar (default: its today). */
 export const chargeAdditionInput = z.object({
@@ -164,6 +170,10 @@ export const systemRecords = z.object({
       percent: z.number(),
       chronic: z.boolean(),
       reportDue: text().nullable(),
+      /** Added while no leak-repair part applied to the system: listed, never counted. */
+      notCountedKg: z.number(),
+      /** Why the year is not judged when no part applied in it (the rule's reason), else null. */
+      noPart: text().nullable(),
       /** The report marked filed: the day (store calendar), who signed for it, the authority's reference. */
       filed: z.object({ on: text(), by: text(), reference: text(), note: text(), recordedAt: text() }).nullable(),
     }),

@@ -29,8 +29,9 @@ import { eventDay } from "../findings/findings.service";
 import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { systemDueItems } from "./due-items";
 import { hasRecords } from "../systems/system-has-records";
-import { companyRules, retiredOnOf, statusesOf, systemWithStore } from "./system-records";
+import { companyRules, retiredOnOf, statusesOf, systemWithStore, type CompanyRules } from "./system-records";
 import { profileWording } from "#core/domain/compliance/company-profile";
+import { readableDays } from "#core/domain/compliance/audit-entry";
 
 type AdditionInput = z.output<typeof chargeAdditionInput>;
 type CorrectionInput = z.output<typeof chargeCorrectionInput>;
@@ -112,9 +113,11 @@ export async function getSystemRecords(
   viewer: Viewer,
   systemId: string,
   now = new Date(),
+  /** The company's rules when the caller has read them already (a statement, the archive). */
+  preloaded?: CompanyRules,
 ): Promise<SystemRecordsView> {
   const row = await visibleSystem(ctx, viewer, systemId);
-  const rules = await companyRules(ctx, viewer.companyId);
+  const rules = preloaded ?? (await companyRules(ctx, viewer.companyId));
   const [s] = await statusesOf(ctx, rules, [row], now);
   const st = s.status;
   // Independent reads of the system's records: asked together, not one after another.
@@ -144,7 +147,12 @@ export async function getSystemRecords(
       .orderBy(desc(complianceAudit.at), desc(complianceAudit.id)),
     hasRecords(ctx, systemId),
   ]);
-  const system = toSystem(row.system, await companyGwpBases(ctx, viewer.companyId), withRecords, row.store.timeZone);
+  const system = toSystem(
+    row.system,
+    await companyGwpBases(ctx, viewer.companyId, rules),
+    withRecords,
+    row.store.timeZone,
+  );
   const lc = st.leakCheck;
   return {
     system,
@@ -169,7 +177,8 @@ export async function getSystemRecords(
     // the part before it, docs/decisions/0043-system-revisions.md), else the part in force today.
     chronicRule: chronicRuleOf(
       rules.profile.leakRateParts.find(
-        (p) => p.id === (st.chronic.at(-1)?.partId ?? st.applicability.partId ?? st.latest?.partId),
+        (p) =>
+          p.id === (st.chronic.filter((y) => y.partId).at(-1)?.partId ?? st.applicability.partId ?? st.latest?.partId),
       ) ?? null,
     ),
     chronic: st.chronic.map((y) => {
@@ -180,6 +189,9 @@ export async function getSystemRecords(
         percent: y.percent,
         chronic: y.chronic,
         reportDue: y.reportDue ?? null,
+        notCountedKg: y.notCountedKg,
+        // No leak-repair part applied in the year: listed so the totals add up, not judged (decision 0127).
+        noPart: y.noPart === null ? null : readableDays(y.noPart),
         filed: f
           ? {
               on: f.r.filedOn,

@@ -49,10 +49,21 @@ export async function companyRules(ctx: AppContext, companyId: string): Promise<
     .select({ ruleProfile: companies.ruleProfile, method: companies.leakRateMethod, number: companies.numberFormat })
     .from(companies)
     .where(eq(companies.id, companyId));
+  return rulesOfSettings(ctx, companyId, c);
+}
+
+/** The rules from a company row the caller has already read (a custom profile is read from its own table). */
+export async function rulesOfSettings(
+  ctx: AppContext,
+  companyId: string,
+  c: { ruleProfile: RuleProfileSetting; method: LeakRateMethod; number: NumberFormat } | undefined,
+): Promise<CompanyRules> {
   const setting = c?.ruleProfile ?? "us-federal";
   const custom = setting === "custom" ? ((await latestCustomProfile(ctx, companyId))?.profile ?? null) : null;
   return { profile: profileFor(setting, custom), method: c?.method ?? "annualizing", numberFormat: c?.number };
 }
+
+type RuleProfileSetting = (typeof companies.$inferSelect)["ruleProfile"];
 
 export interface SystemWithStatus {
   system: SystemRow;

@@ -107,7 +107,7 @@ describe("the owner's record archive", () => {
     const sysCsv = csvRows(files, "systems.csv");
     expect(sysCsv.map((r) => r.id).sort()).toEqual(sysRows.map((r) => r.id).sort());
     const retired = sysCsv.find((r) => r.id === a.other.system)!;
-    expect(retired.retired_at).toBe(sysRows.find((r) => r.id === a.other.system)!.retiredAt!.toISOString());
+    expect(retired.retired_at_utc).toBe(sysRows.find((r) => r.id === a.other.system)!.retiredAt!.toISOString());
     const revs = await t.ctx.db.select().from(systemRevisions).where(eq(systemRevisions.companyId, co));
     const revCsv = csvRows(files, "system-revisions.csv");
     expect(revCsv.map((r) => r.id).sort()).toEqual(revs.map((r) => r.id).sort());
@@ -164,7 +164,7 @@ describe("the owner's record archive", () => {
     ).toEqual(sw.map((r) => r.id).sort());
     const rd = await t.ctx.db.select().from(readings).where(eq(readings.sweepId, a.main.sweep));
     const rdCsv = csvRows(files, "readings.csv").filter((r) => r.sweep_id === a.main.sweep);
-    expect(rdCsv.map((r) => [r.id, Number(r.ppm), r.taken_at])).toEqual(
+    expect(rdCsv.map((r) => [r.id, Number(r.ppm), r.taken_at_utc])).toEqual(
       rd.map((r) => [r.id, r.ppm, r.takenAt.toISOString()]),
     );
 

@@ -2,7 +2,7 @@ import { and, asc, eq, isNull } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import type { ChargeInput, System, SystemInput, SystemUpdateInput } from "#core/contracts/systems";
 import { complianceAudit, systemRevisions, systems } from "../../db/schema/index";
-import { companyRules } from "../compliance/system-records";
+import { companyRules, type CompanyRules } from "../compliance/system-records";
 import type { Refrigerant } from "#core/domain/refrigerants/types";
 import { KG_PER_POUND } from "#core/domain/units/mass";
 import { badRequest, conflict, HttpError, notFound } from "../../lib/http-error";
@@ -54,8 +54,9 @@ export function knownRefrigerant(id: string, lookup: RefrigerantLookup): Refrige
 }
 
 /** The GWP bases of the profile the company works under (its own, for a custom profile), with its stated basis. */
-export async function companyGwpBases(ctx: AppContext, companyId: string): Promise<Bases> {
-  const [{ profile }, lookup] = await Promise.all([companyRules(ctx, companyId), lookupFor(ctx, companyId)]);
+/** `rules`: the company's rules when the caller has read them already (no second read of the company row). */
+export async function companyGwpBases(ctx: AppContext, companyId: string, rules?: CompanyRules): Promise<Bases> {
+  const [{ profile }, lookup] = await Promise.all([rules ?? companyRules(ctx, companyId), lookupFor(ctx, companyId)]);
   return {
     bases: profile.gwpBases.value,
     statement: gwpBasisStatement(profile),

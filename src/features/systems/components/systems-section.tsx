@@ -136,7 +136,7 @@ export function SystemsSection({
               ? [
                   {
                     header: "Actions",
-                    className: "min-w-44",
+                    className: "min-w-72",
                     cell: (s: System) =>
                       confirmDelete === s.id ? (
                         <div className="flex flex-wrap items-center gap-2">
