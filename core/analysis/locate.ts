@@ -96,7 +96,10 @@ export function locate(
       levelColumns,
     );
     const rule = supportRule(field, zones, settings.sources);
-    const placement = placementStage(plan, grid, lag, field, sources, rule, settings);
+    const placement = placementStage(plan, grid, lag, field, sources, rule, settings, [
+      ...zones.columns,
+      ...levelColumns,
+    ]);
     return { lag, zones, field, sources, placement };
   };
   // The delay checked against the readings first: when they clearly fit another delay and nobody set

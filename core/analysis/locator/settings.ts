@@ -100,6 +100,16 @@ export interface PlacementSettings {
    * cell it sees, so the radius is the reach of its air instead (twice the kernel's screening length).
    */
   readonly oneReadingRadiusM: number;
+  /**
+   * Where most cases run their fans, the first spot is placed again within `upwindWindowM` of where the
+   * greedy fit put it, each cell taking one of these drift strengths (1/m) when it beats none by
+   * `upwindPenalty` times the residual variance (upwind-replace.ts, decision 0128); none = off.
+   */
+  readonly upwindStrengths: readonly number[];
+  readonly upwindPenalty: number;
+  readonly upwindWindowM: number;
+  readonly upwindMinMoveM: number;
+  readonly upwindMinGain: number;
 }
 
 export interface ReportSettings {
@@ -163,6 +173,11 @@ export const LOCATOR_SETTINGS: LocatorSettings = {
     radiusShare: 0.5,
     radiusReachM: 8,
     oneReadingRadiusM: 3,
+    upwindStrengths: [0.4, 1, 2],
+    upwindPenalty: 3,
+    upwindWindowM: 6,
+    upwindMinMoveM: 1.5,
+    upwindMinGain: 8,
   },
   report: {
     coverageGapM: 3,
