@@ -1,4 +1,4 @@
-import { createContext, useContext, type ReactNode } from "react";
+import { createContext, useContext, useLayoutEffect, useRef, type ReactNode } from "react";
 
 const Folded = createContext(false);
 
@@ -54,11 +54,16 @@ export function NoticeStrip({
   onOpen(open: boolean): void;
   children: ReactNode;
 }) {
+  // opened, the banners read from the top (the tap that opened them must not leave them scrolled)
+  const list = useRef<HTMLDivElement>(null);
+  useLayoutEffect(() => {
+    if (open && list.current) list.current.scrollTop = 0;
+  }, [open]);
   return (
     <div className="flex items-start gap-1" data-testid="notice-strip" data-open={open ? "yes" : "no"}>
       <Folded.Provider value={!open}>
         {open ? (
-          <div id="walk-notices" className="flex max-h-[30vh] min-w-0 flex-1 flex-col gap-1 overflow-y-auto">
+          <div ref={list} id="walk-notices" className="flex max-h-[30vh] min-w-0 flex-1 flex-col gap-1 overflow-y-auto">
             {children}
           </div>
         ) : (

@@ -264,7 +264,14 @@ export function WalkScreen({
           {contrastToggle}
         </div>
         {/* Every banner folds into one line that a tap opens: the plan keeps the phone (decision 0140). */}
-        <NoticeStrip open={noticesOpen && !keypadFor} onOpen={setNoticesOpen}>
+        {/* The banners and the guide open one at a time: the two together would cover the plan. */}
+        <NoticeStrip
+          open={noticesOpen && !keypadFor}
+          onOpen={(open) => {
+            setNoticesOpen(open);
+            if (open) setGuideOpen(false);
+          }}
+        >
           <PinpointPassPanel
             sweep={sweep}
             fixtures={fixtures}
@@ -357,7 +364,10 @@ export function WalkScreen({
                 onTap(s.x, s.y, Date.now(), { samplePoint: "supply", note: supplyAirNote(s, liveWords) })
               }
               folded={!guideOpen}
-              onFold={(folded) => setGuideOpen(!folded)}
+              onFold={(folded) => {
+                setGuideOpen(!folded);
+                if (!folded) setNoticesOpen(false);
+              }}
               fieldMapHref={
                 sweep.status === "submitted" && sweep.sync.kind === "on-server"
                   ? `/stores/${sweep.storeId}/sweeps/${sweep.id}/map`
