@@ -32,7 +32,7 @@ export function StripChip({
     <span
       role={role}
       {...data}
-      className={`block min-w-[4.5rem] shrink truncate rounded-md border-l-4 px-2 text-sm font-bold leading-[3rem] edge ${TONES[tone]}`}
+      className={`block min-w-[4.5rem] shrink truncate first:max-w-[55%] first:shrink-0 rounded-md border-l-4 px-2 text-sm font-bold leading-[3rem] edge ${TONES[tone]}`}
     >
       {children}
     </span>
