@@ -125,6 +125,8 @@ const envSchema = z
     // On SIGTERM: how long to keep serving while /readyz already says "draining", so a load balancer
     // stops sending new requests before the listener closes.
     SHUTDOWN_DELAY_MS: z.coerce.number().int().min(0).max(60_000).default(0),
+    // How long an idle keep-alive connection stays open: longer than a proxy's idle timeout (often 60 s).
+    KEEP_ALIVE_TIMEOUT_MS: z.coerce.number().int().min(1_000).max(600_000).default(65_000),
   })
   .superRefine((env, ctx) => {
     if (env.STORAGE === "s3" && !env.S3_BUCKET) {

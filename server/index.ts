@@ -5,6 +5,7 @@ import { createApp } from "./app";
 import { seedDemoIfEmpty, DEMO_SIGN_INS } from "./db/seed/demo";
 import { waitUntil } from "./lifecycle";
 import { cpuPoolLoad } from "./jobs/cpu-pool";
+import { applyIdleTimeouts } from "./lib/idle-timeouts";
 
 // Listening and shutting down only; the app itself is built in app.ts.
 const env = readEnv();
@@ -34,6 +35,7 @@ const server = createApp(ctx).listen(env.PORT, env.HOST, () => {
   ];
   console.log(lines.filter((l, i) => l !== "" || i === 0 || lines[i - 1] !== "").join("\n"));
 });
+applyIdleTimeouts(server, env.KEEP_ALIVE_TIMEOUT_MS);
 
 let closing: string | null = null;
 /**
