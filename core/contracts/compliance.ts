@@ -7,6 +7,12 @@ const isoDate = text({ error: "must be a date as YYYY-MM-DD" }).regex(
   "must be a date as YYYY-MM-DD",
 );
 export const EXCLUSIONS = ["retrofit", "new-installation", "seasonal-variance"] as const;
+/** How a charge-added entry that counts no leak loss is named to a reader (40 CFR 82.157 [S:R1]). */
+export const EXCLUSION_NAMES: Record<(typeof EXCLUSIONS)[number], string> = {
+  retrofit: "fill after a retrofit",
+  "new-installation": "fill of a new installation",
+  "seasonal-variance": "seasonal variance",
+};
 
 /** Refrigerant put into a system. The day is on the store's calendar (default: its today). */
 export const chargeAdditionInput = z.object({
@@ -39,6 +45,16 @@ export const chargeVoidInput = z.object({ voidReason });
 export const leakCheckInput = z.object({
   checkedOn: isoDate.optional(),
   leakFound: z.boolean({ error: "must be true or false" }),
+  note: text({ error: "must be text" }).trim().max(2000, "must be at most 2,000 characters").default(""),
+});
+
+/**
+ * A check of the system's leak detection system itself (EU: at least every 12 months where one is
+ * mandatory): the day, whether it worked as it should, and what was done.
+ */
+export const leakDetectionCheckInput = z.object({
+  checkedOn: isoDate.optional(),
+  working: z.boolean({ error: "must be true or false" }),
   note: text({ error: "must be text" }).trim().max(2000, "must be at most 2,000 characters").default(""),
 });
 
@@ -93,6 +109,7 @@ export const dueItemKinds = [
   "chronic-leaker-report",
   "detector-check",
   "automatic-leak-detection",
+  "leak-detection-check",
   "retrofit-or-retire-plan",
   "retrofit-or-retire",
 ] as const;
@@ -153,6 +170,10 @@ export const systemRecords = z.object({
       percent: z.number(),
       chronic: z.boolean(),
       reportDue: text().nullable(),
+      /** Added while no leak-repair part applied to the system: listed, never counted. */
+      notCountedKg: z.number(),
+      /** Why the year is not judged when no part applied in it (the rule's reason), else null. */
+      noPart: text().nullable(),
       /** The report marked filed: the day (store calendar), who signed for it, the authority's reference. */
       filed: z.object({ on: text(), by: text(), reference: text(), note: text(), recordedAt: text() }).nullable(),
     }),
@@ -175,6 +196,12 @@ export const systemRecords = z.object({
   due: z.array(dueItem),
   additions: z.array(chargeAddition),
   leakChecks: z.array(z.object({ id: z.uuid(), checkedOn: text(), leakFound: z.boolean(), note: text(), by: text() })),
+  /** Checks of the leak detection system itself, oldest first. */
+  leakDetectionChecks: z.array(
+    z.object({ id: z.uuid(), checkedOn: text(), working: z.boolean(), note: text(), by: text() }),
+  ),
+  /** The leak detection system's own check is owed (EU, where one is mandatory): the form is offered. */
+  leakDetectionCheckOwed: z.boolean(),
   cautions: z.array(caution),
 });
 export type SystemRecordsView = z.infer<typeof systemRecords>;

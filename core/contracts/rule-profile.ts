@@ -197,6 +197,11 @@ export const anyRuleProfileSchema = z.object({
       hfoBands: sourced(bands),
       hermeticExemptBelowTonnes: sourced(num("t CO2e").min(0, "must be 0 or more")),
       recheckAfterRepairMonths: sourced(wholeMonths),
+      /**
+       * How often a leak detection system must itself be checked where one is mandatory. Optional:
+       * custom profiles saved before it existed read as 12 months (docs/decisions/0123).
+       */
+      ldsCheckMonths: sourced(wholeMonths).optional(),
     })
     .optional(),
   recordRetentionYears: sourced(
@@ -250,4 +255,8 @@ export const RULE_PROFILE_FIELDS = {
   "chronicLeaker.reportBy.source": { label: "Source for the report date" },
   "leakChecks.co2eBands.source": { label: "Source for the CO2e bands" },
   "leakChecks.recheckAfterRepairMonths": { label: "Re-check after a repair (months)" },
+  "leakChecks.ldsCheckMonths": {
+    label: "Check of a mandatory leak detection system (every … months)",
+    hint: "Where the band requires a leak detection system, the system itself is checked this often.",
+  },
 } as const satisfies Record<string, { label: string; hint?: string }>;

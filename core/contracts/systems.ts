@@ -9,6 +9,15 @@ export const applianceTypeSchema = z.enum(APPLIANCE_TYPES, {
 });
 export type ApplianceType = z.infer<typeof applianceTypeSchema>;
 
+/** Why a system left service (decision 0124). */
+export const RETIRE_REASONS = ["replaced", "removed", "store-closed", "other"] as const;
+export const RETIRE_REASON_NAMES: Readonly<Record<(typeof RETIRE_REASONS)[number], string>> = {
+  replaced: "Replaced by another system",
+  removed: "Removed, not replaced",
+  "store-closed": "Store closed",
+  other: "Other",
+};
+
 export const APPLIANCE_TYPE_NAMES: Readonly<Record<ApplianceType, string>> = {
   "commercial-refrigeration": "Commercial refrigeration",
   "industrial-process": "Industrial process refrigeration",
@@ -39,6 +48,8 @@ const systemFields = {
   fullCharge: chargeInput,
   applianceType: applianceTypeSchema,
   automaticLeakDetection: z.boolean({ error: "must be true or false" }),
+  /** Factory-sealed and labelled as hermetically sealed (EU: exempt from leak checks below 10 t CO2e). */
+  hermeticallySealed: z.boolean({ error: "must be true or false" }).optional(),
 };
 
 const isoDay = z
@@ -104,9 +115,18 @@ export const system = z.object({
   fullChargeKg: z.number(),
   applianceType: applianceTypeSchema,
   automaticLeakDetection: z.boolean(),
+  hermeticallySealed: z.boolean(),
   inServiceOn: text(),
-  /** Set once the system left service; its records stay readable (never deleted). */
-  retired: z.object({ at: text(), reason: text() }).nullable(),
+  /**
+   * Set once the system left service; its records stay readable (never deleted). `on` is the day it
+   * left service (store calendar), `at` when that was recorded; `reasonKind` is null on systems
+   * retired before the reason was asked.
+   */
+  retired: z
+    .object({ at: text(), on: text(), reasonKind: z.enum(RETIRE_REASONS).nullable(), reason: text() })
+    .nullable(),
+  /** Any record names it: it can only be retired, never deleted. */
+  hasRecords: z.boolean(),
   refrigerant: refrigerantSummary,
   /** The usual cautions for this refrigerant, shown on the system form. */
   cautions: z.array(caution),
@@ -121,9 +141,21 @@ export const systemListQuery = z.object({
   include: z.enum(["retired"], { error: "must be retired (or left out)" }).optional(),
 });
 
-export const retireInput = z.object({
-  reason: text({ error: "must be text" }).trim().max(500, "must be at most 500 characters").default(""),
-});
+/**
+ * POST /api/systems/:id/retire: the day it left service (store calendar; not in the future, not
+ * before its in-service day, checked on the server) and why. `other` needs the reason in words.
+ */
+export const retireInput = z
+  .object({
+    retiredOn: isoDay,
+    reasonKind: z.enum(RETIRE_REASONS, { error: `must be one of: ${RETIRE_REASONS.join(", ")}` }),
+    reason: text({ error: "must be text" }).trim().max(500, "must be at most 500 characters").default(""),
+  })
+  .refine((v) => v.reasonKind !== "other" || v.reason.length > 0, {
+    message: "say why the system left service",
+    path: ["reason"],
+  });
+export type RetireInput = z.infer<typeof retireInput>;
 
 /** DELETE /api/systems/:id: deleted when it had no record, else retired with every record kept. */
 export const systemRemoval = z.discriminatedUnion("outcome", [

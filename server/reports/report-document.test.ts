@@ -33,6 +33,13 @@ describe("report document", () => {
     expect(page.text).not.toMatch(/[\u0000\u202f]/);
   });
 
+  it("prints a change's arrow, which the font lacks, as a word", async () => {
+    const pdf = await pdfOf((doc) => doc.font("regular").fontSize(11).text("refrigerant R-22 → R-448A"));
+    const [page] = await pdfLayout(pdf);
+    expect(page.text).toContain("refrigerant R-22 to R-448A");
+    expect(page.text).not.toMatch(/\u0000/);
+  });
+
   it("keeps every other character as written", () => {
     expect(printable("Dairy 3 – 12,5 lb (5,7 kg) · R-448A")).toBe("Dairy 3 – 12,5 lb (5,7 kg) · R-448A");
     expect(printable("1\u202f234\u2009m")).toBe("1\u00a0234 m");

@@ -6,8 +6,14 @@ import { REPORT_FONTS } from "./fonts";
  * format groups with a narrow no-break space (U+202F, as CLDR does); Atkinson Hyperlegible has only
  * the ordinary no-break space, and pdfkit would print a missing glyph as an empty box.
  */
-const STAND_INS: Record<string, string> = { "\u202F": "\u00A0", "\u2009": " ", "\u2007": "\u00A0" };
-const MISSING = /[\u202F\u2009\u2007]/g;
+const STAND_INS: Record<string, string> = {
+  "\u202F": "\u00A0",
+  "\u2009": " ",
+  "\u2007": "\u00A0",
+  // The font has no arrow: a change "R-22 → R-448A" (system history, audit trail) prints "R-22 to R-448A".
+  "\u2192": "to",
+};
+const MISSING = /[\u202F\u2009\u2007\u2192]/g;
 
 export function printable(text: string): string {
   return text.replace(MISSING, (c) => STAND_INS[c] ?? c);

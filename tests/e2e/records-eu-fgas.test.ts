@@ -3,8 +3,10 @@
  * size (1366 × 860): leak-check intervals by CO2-equivalent band, a leak found at a check, the
  * finding confirmed, charge added and one entry voided, the repair and the re-check within a month,
  * the statement PDF; then a system with records is retired and the owner's whole-record archive
- * still holds all of it. Nothing US appears on any screen or page (docs/decisions/0116). Invented
- * stores; screenshots to test-results/screens/, PDF pages to test-results/pdf/.
+ * still holds all of it. Nothing US appears on any screen or page (docs/decisions/0116). The systems
+ * and their earlier history are entered through the API as a user would, so each has its first
+ * revision, shown on the records page and the statement. Invented stores; screenshots to
+ * test-results/screens/, PDF pages to test-results/pdf/.
  */
 import path from "node:path";
 import { mkdirSync } from "node:fs";
@@ -12,7 +14,8 @@ import { afterAll, beforeAll, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { eq } from "drizzle-orm";
 import { unzip } from "../helpers/unzip";
-import { chargeAdditions, companies, leakChecks, stores, systems } from "../../server/db/schema/index";
+import { companies, stores } from "../../server/db/schema/index";
+import { signIn } from "../helpers/test-app";
 import { launchBrowser, newContext } from "../helpers/browser";
 import { startE2eServer, type E2eServer } from "../helpers/e2e-server";
 import { PASSWORD, seedCompany } from "../helpers/fixtures";
@@ -61,44 +64,39 @@ beforeAll(async () => {
     .update(stores)
     .set({ name: "Frischmarkt Lindenhof", timeZone: "Europe/Berlin" })
     .where(eq(stores.id, co.store.id));
+  // The systems and their history go in through the API, as a lead tech and a technician would enter
+  // them: each system gets its first revision, which the records and the statement show.
+  const owner = await signIn(server.app, co.people.owner);
+  const tech = await signIn(server.app, co.people.technician);
   const add = async (name: string, refrigerantId: string, kg: number, lds: boolean, since: number) => {
-    const [row] = await db
-      .insert(systems)
-      .values({
-        companyId: co.company.id,
-        storeId: co.store.id,
-        name,
-        refrigerantId,
-        fullChargeKg: kg,
-        applianceType: "commercial-refrigeration",
-        automaticLeakDetection: lds,
-        inServiceOn: localDay(since),
-      })
-      .returning();
-    return row.id;
+    const res = await owner.post(`/api/stores/${co.store.id}/systems`, {
+      name,
+      refrigerantId,
+      fullCharge: { value: kg, unit: "kg" },
+      applianceType: "commercial-refrigeration",
+      automaticLeakDetection: lds,
+      inServiceOn: localDay(since),
+    });
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    return res.body.id as string;
   };
   ids.nk = await add("Verbund NK – Molkerei", "R-404A", 45.5, false, 400);
   ids.tk = await add("Verbund TK – Tiefkühlinseln", "R-449A", 1250, true, 100);
   ids.co2 = await add("CO2-Booster transkritisch", "R-744", 310, true, 200);
   ids.truhe = await add("Eistruhe Kasse 2 – Kühltruhe", "R-404A", 2.1, false, 500);
-  const tech = co.people.technician.userId;
-  await db
-    .insert(leakChecks)
-    .values({ companyId: co.company.id, systemId: ids.nk, checkedOn: localDay(190), leakFound: false, byId: tech });
-  await db
-    .insert(leakChecks)
-    .values({ companyId: co.company.id, systemId: ids.truhe, checkedOn: localDay(200), leakFound: false, byId: tech });
-  await db.insert(chargeAdditions).values({
-    companyId: co.company.id,
-    systemId: ids.truhe,
+  for (const [id, daysAgo] of [
+    [ids.nk, 190],
+    [ids.truhe, 200],
+  ] as const) {
+    const res = await tech.post(`/api/systems/${id}/leak-checks`, { checkedOn: localDay(daysAgo), leakFound: false });
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+  }
+  const charge = await tech.post(`/api/systems/${ids.truhe}/charge-additions`, {
     addedOn: localDay(100),
-    amountKg: 0.35,
-    enteredValue: 0.35,
-    enteredUnit: "kg",
-    technicianId: tech,
+    amount: { value: 0.35, unit: "kg" },
     reason: "Nachfüllung nach Scheuerstelle am Kapillarrohr",
-    recordedById: tech,
   });
+  expect(charge.status, JSON.stringify(charge.body)).toBe(201);
   browser = await launchBrowser();
 });
 afterAll(async () => {
@@ -133,7 +131,18 @@ it("an EU engineer follows a leak from the check through repair and re-check, in
     )
     .first()
     .waitFor();
+  // There the leak detection system itself is checked at least every 12 months (2024/573 Art. 5 [S:E2,E5]):
+  // owed from the in-service day until a check is recorded, then 12 months from a check that found it working.
+  await page.getByText(/Check of the leak detection system \(at least every 12 months; in service since/).waitFor();
+  const lds = page.getByRole("form", { name: "Record a check of the leak detection system" });
+  await lds.getByLabel("Detection system checked on").fill(localDay(2));
+  await lds.getByLabel("What was checked").fill("Sensoren mit Prüfgas getestet, Alarm und Relais ausgelöst");
+  await lds.getByRole("button", { name: "Record the detection system check" }).click();
+  await page.getByText(/working — engineer of Marlbeck Kältedienst \(Sensoren mit Prüfgas/).waitFor();
+  await page.getByText(/Check of the leak detection system \(at least every 12 months; last found working/).waitFor();
+  await page.getByText(`${formatCalendarDay(addMonths(localDay(2), 12))} · Upcoming`).waitFor();
   await noUsWords(page, "R-449A records");
+  await page.screenshot({ path: path.join(SCREENS, "records-eu-lds-check.png"), fullPage: true });
   // R-744 is no fluorinated gas: no periodic check (2024/573 Annex I lists F-gases only, §2).
   await openRecords(page, ids.co2, "CO2-Booster transkritisch");
   await page.getByText("R-744 is not a fluorinated gas covered by leak-check rules").waitFor();
@@ -147,6 +156,14 @@ it("an EU engineer follows a leak from the check through repair and re-check, in
     .first()
     .waitFor();
   await page.getByText("Next leak check", { exact: true }).waitFor();
+  // Entered through the API, the system has its first revision: the history shows it (docs/decisions/0043).
+  await page
+    .getByRole("table", { name: "System history" })
+    .getByRole("row")
+    .filter({ hasText: "First values" })
+    .filter({ hasText: formatCalendarDay(localDay(400)) })
+    .first()
+    .waitFor();
   await noUsWords(page, "R-404A records before the leak");
 
   // A leak found at a check three days ago, then recorded as a finding and confirmed today.
@@ -224,6 +241,11 @@ it("an EU engineer follows a leak from the check through repair and re-check, in
   expect(text).toContain("CO2-equivalent of the charge: 178,5 t");
   expect(text).toContain(`Next leak check due ${formatCalendarDay(addMonths(localDay(0), 6))}`);
   expect(text).toContain("Brazed joint – repaired");
+  // The system's history: the first values and the day it entered service (docs/decisions/0126).
+  const history = text.slice(text.indexOf("System history"), text.indexOf("Rule profile")).replace(/\s+/g, " ");
+  expect(history).toContain("first values");
+  expect(history).toContain(`in service since ${formatCalendarDay(localDay(400))}`);
+  expect(history).toMatch(/45,5\d* kg/);
   expect(text).not.toContain("No refrigerant has been added");
   expect(text).not.toMatch(US_WORDS);
   renderPdfPages(bytes, "records-eu-statement");
@@ -266,19 +288,65 @@ it("a retired system keeps every record: its page, the store's list of retired s
   await signInThroughForm(page, server.url, co.people.owner.email, PASSWORD);
   const name = "Eistruhe Kasse 2 – Kühltruhe";
 
-  // A system with records is retired, never deleted (docs/decisions/0040).
+  // A small hermetic unit, as a new owner adds it: 1,9 kg R-404A × 3922 / 1000 = 7,45 t CO2e, factory-sealed
+  // and labelled, so below 10 t it owes no periodic leak check (docs/reference/standards.md §2 [S:E1]).
+  const sealed = "Getränkekühler Eingang (steckerfertig)";
   await page.goto(`${server.url}/stores/${co.store.id}`);
-  await page.getByRole("button", { name: `Delete ${name}` }).click();
-  await page.getByRole("button", { name: `Delete ${name}` }).click();
-  await page.getByText(`${name} has records, so it was retired instead of deleted`).waitFor();
-  await page.reload();
+  await page.getByRole("button", { name: "Add system" }).click();
+  await page.getByLabel("System name", { exact: true }).fill(sealed);
+  await page.getByLabel("Refrigerant", { exact: true }).selectOption("R-404A");
+  await page.getByLabel("Full charge", { exact: true }).fill("1,9");
+  await page.getByLabel("Hermetically sealed (factory-sealed, labelled as such)").check();
+  await page.getByText("carries a label saying it is hermetically sealed").screenshot({
+    path: path.join(SCREENS, "records-eu-hermetic-field.png"),
+  });
+  await page.getByRole("button", { name: "Add system" }).click(); // the form's own button
+  await page.getByRole("cell", { name: sealed, exact: true }).waitFor();
+  const listed = (await (await page.request.get(`${server.url}/api/stores/${co.store.id}/systems`)).json()) as {
+    systems: { id: string; name: string }[];
+  };
+  await openRecords(page, listed.systems.find((x) => x.name === sealed)!.id, sealed);
+  await page.getByText("Yes: factory-sealed, labelled as such").waitFor();
+  await page.getByText("hermetically sealed and below 10 t CO2e.").waitFor();
+  await page.getByText("None scheduled", { exact: true }).waitFor();
+  await noUsWords(page, "hermetic unit");
+  await page.screenshot({ path: path.join(SCREENS, "records-eu-hermetic-unit.png"), fullPage: true });
+
+  // On a phone, a system with records is retired, never deleted (docs/decisions/0040, 0124): the dialog
+  // asks the day it left service and why, and names a day before its last record as the mistake it is.
+  const phone = await newContext(browser, PHONE);
+  const small = await phone.newPage();
+  small.setDefaultTimeout(15_000);
+  small.on("pageerror", (e) => failures.push(String(e)));
+  await signInThroughForm(small, server.url, co.people.owner.email, PASSWORD);
+  await small.goto(`${server.url}/stores/${co.store.id}`);
+  expect(await small.getByRole("button", { name: `Delete ${name}` }).count()).toBe(0);
+  await small.getByRole("button", { name: `Retire ${name}…` }).click();
+  const dialog = small.getByRole("dialog", { name: `Retire ${name}` });
+  await dialog.getByLabel("Retired on").fill(localDay(101));
+  await dialog.getByLabel("Reason").selectOption("replaced");
+  await dialog.getByLabel("Note (optional)").fill("durch Truhe mit R-290");
+  await dialog.getByRole("button", { name: `Retire ${name}` }).click();
+  await dialog
+    .getByText(`must not be before ${formatCalendarDay(localDay(100))}, when refrigerant was added`)
+    .first()
+    .waitFor();
+  await small.screenshot({ path: path.join(SCREENS, "records-eu-retire-dialog-phone.png") });
+  await dialog.getByLabel("Retired on").fill(localDay(1));
+  await dialog.getByRole("button", { name: `Retire ${name}` }).click();
+  await dialog.waitFor({ state: "hidden" });
+  await phone.close();
+  await page.goto(`${server.url}/stores/${co.store.id}`);
   await page.getByRole("heading", { name: "Retired systems" }).waitFor();
   await page.getByRole("heading", { name: "Retired systems" }).scrollIntoViewIfNeeded();
   await page.screenshot({ path: path.join(SCREENS, "records-eu-retired-list.png") });
   await page.getByRole("link", { name, exact: true }).click();
   await page.getByRole("heading", { name, exact: true }).waitFor();
-  // Records kept at least 5 years after the retirement (2024/573 Art. 7 [S:E8b]); no next check owed.
-  const kept = `${Number(localDay(0).slice(0, 4)) + 5}${localDay(0).slice(4)}`;
+  // Records kept at least 5 years after the day it left service (2024/573 Art. 7 [S:E8b]); no next check owed.
+  await page
+    .getByText(`left service on ${formatCalendarDay(localDay(1))} (Replaced by another system: durch Truhe mit R-290)`)
+    .waitFor();
+  const kept = `${Number(localDay(1).slice(0, 4)) + 5}${localDay(1).slice(4)}`;
   await page.getByText(`kept at least until ${formatCalendarDay(kept)}`).waitFor();
   await page.getByText("None scheduled", { exact: true }).waitFor();
   await page.getByText("Nachfüllung nach Scheuerstelle am Kapillarrohr").waitFor();
@@ -304,7 +372,15 @@ it("a retired system keeps every record: its page, the store's list of retired s
   const statement = `statements/eistruhe-kasse-2-kuhltruhe-${ids.truhe.slice(0, 8)}.pdf`;
   expect([...files.keys()]).toContain(statement);
   const retiredText = (await pdfText(files.get(statement)!)).join("\n");
-  expect(retiredText).toContain(`Retired on ${formatCalendarDay(localDay(0))}`);
+  expect(retiredText.replace(/\s+/g, " ")).toContain(
+    `Retired on ${formatCalendarDay(localDay(1))} (Replaced by another system: durch Truhe mit R-290)`,
+  );
+  expect(csv("systems.csv")).toMatch(new RegExp(`${ids.truhe},.*,${localDay(1)},replaced,durch Truhe mit R-290,`));
+  // Its audit trail reads on the store's clock (Europe/Berlin: CET or CEST), never as a UTC instant (decision 0125).
+  const trail = retiredText.slice(retiredText.indexOf("Audit trail"), retiredText.indexOf("Record keeping"));
+  expect(trail.replace(/\s+/g, " ")).toMatch(/\d{1,2} [A-Z][a-z]{2} \d{4}, \d\d:\d\d CES?T/);
+  expect(trail).not.toMatch(/UTC|\d{4}-\d\d-\d\d/);
+  expect(csv("compliance-audit.csv").split("\r\n")[0]).toContain("at_utc");
   for (const [file, body] of files)
     if (file.endsWith(".pdf")) expect((await pdfText(body)).join("\n"), file).not.toMatch(US_WORDS);
   renderPdfPages(files.get(statement)!, "records-eu-retired-statement");

@@ -116,7 +116,7 @@ it("on a laptop the Systems table can be searched, filtered and sorted, and ever
   expect(await sidewaysOverflow(page)).toEqual([]);
   const box = (await region.boundingBox())!;
   for (const s of SYSTEMS) {
-    for (const name of [`Edit ${s.name}`, `Delete ${s.name}`]) {
+    for (const name of [`Edit ${s.name}`, `Retire ${s.name}…`]) {
       const b = (await page.getByRole("button", { name, exact: true }).boundingBox())!;
       expect(b.x + b.width, name).toBeLessThanOrEqual(Math.min(box.x + box.width, 1366));
       expect(b.x, name).toBeGreaterThanOrEqual(box.x);

@@ -144,20 +144,39 @@ it("an R-448A rack: a leak topped up twice before its repair is one figure on th
   await recordCharge(page, "2026-06-15", "300", "Recharge, receiver low");
   await recordCharge(page, "2026-09-21", "330", "Top-up, receiver low again");
   await page.getByText("2026: 820.0 lb, 132.3 % of the full charge — chronic leaker; report due 1 Mar 2027").waitFor();
-  expect(await page.getByText(/^2025: /).count()).toBe(0);
+  // 2025 is listed so the totals add up with the charge-added trail, and marked not counted (docs/decisions/0127).
+  await page
+    .getByText(
+      /^2025: 820\.0 lb added — not counted: no leak-repair part applied to this system \(.*40 CFR 84 subpart C.*applies from 1 Jan 2026\)$/,
+    )
+    .waitFor();
   const body = await page.locator("body").innerText();
   expect(body).not.toMatch(/\[(S:|M\]|D\])|from memory|study guide/);
   expect(body).not.toMatch(/\b20\d\d-\d\d-\d\d\b/); // every day written as "9 Feb 2026"
   await shot(page, "records-us-chronic-1366");
 
-  // Retired: the owner deletes it, it is retired instead; only the chronic-leaker report is still owed.
+  // Retired: a rack with records cannot be deleted, only retired with the day it left service and why
+  // (docs/decisions/0040, 0124); a day before its last top-up is refused; only the chronic-leaker report is still owed.
   await owner.reload();
   const row = owner.getByRole("row").filter({ hasText: rack });
-  await row.getByRole("button", { name: "Delete" }).click();
-  await owner.getByRole("button", { name: `Delete ${rack}` }).click();
-  await owner.getByText(/has records, so it was retired instead of deleted/).waitFor();
+  await row.getByText("has records: retire, not delete").waitFor();
+  expect(await row.getByRole("button", { name: `Delete ${rack}` }).count()).toBe(0);
+  await row.getByRole("button", { name: `Retire ${rack}…` }).click();
+  const dialog = owner.getByRole("dialog", { name: `Retire ${rack}` });
+  await dialog.getByLabel("Retired on").fill("2026-09-20");
+  await dialog.getByLabel("Reason").selectOption("replaced");
+  await dialog.getByLabel("Note (optional)").fill("by the CO2 booster rack");
+  await dialog.getByRole("button", { name: `Retire ${rack}` }).click();
+  await dialog.getByText("must not be before 21 Sept 2026, when refrigerant was added").first().waitFor();
+  await shot(owner, "records-us-retire-dialog-1366");
+  await dialog.getByLabel("Retired on").fill("2026-10-31");
+  await dialog.getByRole("button", { name: `Retire ${rack}` }).click();
+  await dialog.waitFor({ state: "hidden" });
+  await owner.getByRole("heading", { name: "Retired systems" }).waitFor();
   await page.reload();
-  await page.getByText(/^Retired: /).waitFor();
+  await page
+    .getByText(/^Retired: left service on 31 Oct 2026 \(Replaced by another system: by the CO2 booster rack\)/)
+    .waitFor();
   expect(await page.getByRole("region", { name: "Due", exact: true }).getByRole("listitem").allInnerTexts()).toEqual([
     expect.stringMatching(/^1 Mar 2027 · .*Chronic-leaker report for 2026: 132 % of the full charge added/),
   ]);
@@ -181,7 +200,10 @@ it("an R-448A rack: a leak topped up twice before its repair is one figure on th
   expect(text).toContain(
     "16 Feb 2026 190.0 lb (86.18 kg) 365 d 190.0 lb (86.18 kg) 30.6 % (above) 20 % (40 CFR 84.106",
   );
-  expect(text).toMatch(/Retired on \d+ \w+ 20\d\d/);
+  // Kept 3 years from the day it left service (docs/reference/standards.md §1 [S:R6,R7]).
+  expect(text).toContain(
+    "Retired on 31 Oct 2026 (Replaced by another system: by the CO2 booster rack); no repair, test or leak check falls due from then, and its records are kept at least until 31 Oct 2029",
+  );
   expect(text).toContain("2026 820.0 lb (371.95 kg) 132.3 % yes; report due 1 Mar 2027");
   expect(text).toContain("Flare fitting – verified");
   expect(text).toContain("leak rate % = (added ÷ full charge) ÷ (days ÷ 365) × 100");
@@ -199,6 +221,9 @@ it("an R-448A rack: a leak topped up twice before its repair is one figure on th
       ["2026-09-21", "330", "198.24"],
     ],
   );
+  expect(csv.filter((r) => r.record === "system retired").map((r) => [r.date, r.reason])).toEqual([
+    ["2026-10-31", "Replaced by another system: by the CO2 booster rack"],
+  ]);
   expect(csv.filter((r) => r.record.startsWith("finding")).map((r) => r.record)).toEqual([
     "finding found",
     "finding confirmed",

@@ -165,7 +165,7 @@ export function placementStage(
       y0,
     );
     if (rank === 0) topOneSided = side.oneSided;
-    const radius = Math.max(
+    const posteriorR = Math.max(
       p.minRadiusM,
       p.radiusScale *
         posteriorRadius(
@@ -180,10 +180,13 @@ export function placementStage(
           p.radiusShare,
         ),
     );
+    // one reading's posterior is flat over all it can see: its radius is the reach of its air instead
+    const radius = s.oneReading ? p.oneReadingRadiusM : posteriorR;
     const fixture = nearestFixture(plan.fixtures, x, y0);
     const riskPoint = nearestRiskPoint(plan.riskPoints, x, y0);
     const facts: SpotGeometry = {
       alternate: s.alternate,
+      oneReading: s.oneReading === true,
       supportCount: sup.length,
       peakPpm: sup.reduce((m, i) => Math.max(m, y[i]), 0),
       backgroundPpm: field.background.ppm,

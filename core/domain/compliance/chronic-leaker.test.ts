@@ -65,16 +65,21 @@ describe("chronic-leaker years follow the part that applied in that year", () =>
   // docs/reference/standards.md §1: Part 84 from 1 Jan 2026 [S:R4]; Part 82 leak repair covers ODS only since
   // 10 Apr 2020 [S:R1,R2]; 125 % of the full charge in a calendar year, report by 1 March [S:R7].
   const partOn = (date: string) => (date >= "2026-01-01" ? PART_84_SUBPART_C : null);
-  it("counts no HFC year before 2026", () => {
+  it("counts no HFC year before 2026, and lists it as not judged so the totals add up", () => {
     const years = chronicLeakerYears(partOn, poundsToKg(100), [
       lb("a", "2025-02-01", 70),
       lb("b", "2025-11-01", 60),
       lb("c", "2026-03-01", 80),
       lb("d", "2026-10-01", 50),
     ]);
-    expect(years.map((y) => [y.year, Math.round(y.percent), y.chronic, y.reportDue])).toEqual([
-      [2026, 130, true, "2027-03-01"],
+    expect(years.map((y) => [y.year, Math.round(y.percent), y.chronic, y.reportDue, y.partId])).toEqual([
+      // 130 lb added in 2025 would be 130 % under a part; no part applied, so the year is not judged.
+      [2025, 0, false, undefined, null],
+      [2026, 130, true, "2027-03-01", "40-cfr-84-subpart-c"],
     ]);
+    expect(years[0].notCountedKg).toBeCloseTo(poundsToKg(130), 12);
+    expect(years[0].lastNotCounted).toBe("2025-11-01");
+    expect(years[1].notCountedKg).toBe(0);
   });
   it("counts only the additions made while a part applied", () => {
     // A system that reached 15 lb only from 1 Jul (here: a part from that day): 100 lb before, 30 lb after.
@@ -83,5 +88,7 @@ describe("chronic-leaker years follow the part that applied in that year", () =>
       lb("b", "2026-08-01", 30),
     ]);
     expect(years.map((y) => [y.year, Math.round(y.percent), y.chronic])).toEqual([[2026, 150, true]]);
+    // The 100 lb added before the part applied is listed with the year, not counted.
+    expect(years[0].notCountedKg).toBeCloseTo(poundsToKg(100), 12);
   });
 });

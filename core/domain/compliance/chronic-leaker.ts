@@ -6,12 +6,17 @@ import type { LeakRatePart } from "./rule-profile";
 
 export interface ChronicLeakerYear {
   year: number;
+  /** Added while a leak-repair part applied: what the year is judged by (0 in a year no part reached). */
   addedKg: number;
-  /** Added as % of full charge. */
+  /** `addedKg` as % of the full charge. */
   percent: number;
   chronic: boolean;
-  /** The part whose chronic-leaker rule the year is judged by. */
-  partId: string;
+  /** The part whose chronic-leaker rule the year is judged by; null when no part applied in the year. */
+  partId: string | null;
+  /** Added while no part applied to the system: listed so the totals add up, never counted. */
+  notCountedKg: number;
+  /** The day of the year's last addition made while no part applied (why: the rule on that day). */
+  lastNotCounted: IsoDate | null;
   /** The report's due date when chronic. */
   reportDue?: string;
 }
@@ -27,7 +32,10 @@ export type PartOn = (date: IsoDate) => LeakRatePart | null;
  * Only additions made while a part applied to the system count, and a year is judged by the part
  * of its last counted addition: a Part 84 system has no chronic-leaker year before 1 Jan 2026, and
  * Part 82 covers only ozone-depleting refrigerants since 2020 (docs/reference/standards.md §1
- * [S:R1,R2,R4]). Pass a part instead of `partOn` when one part applied throughout.
+ * [S:R1,R2,R4]). A year with additions but no part is still listed, not judged (`partId` null), so
+ * the yearly totals reconcile with the charge-added trail
+ * (docs/decisions/0127-years-before-a-part-applied.md). Pass a part instead of `partOn` when one
+ * part applied throughout.
  */
 export function chronicLeakerYears(
   partOn: LeakRatePart | PartOn,
@@ -39,24 +47,40 @@ export function chronicLeakerYears(
   const chargeOn = typeof fullChargeKg === "function" ? fullChargeKg : () => fullChargeKg;
   validateAdditions(additions);
   const partAt: PartOn = typeof partOn === "function" ? partOn : () => partOn;
-  const byYear = new Map<number, { addedKg: number; part: LeakRatePart; lastDate: IsoDate }>();
+  type Year = {
+    addedKg: number;
+    part: LeakRatePart | null;
+    lastDate: IsoDate | null;
+    notCountedKg: number;
+    lastNotCounted: IsoDate | null;
+  };
+  const byYear = new Map<number, Year>();
   for (const a of additions) {
     if (a.voided || a.excluded) continue;
-    const part = partAt(a.date);
-    if (!part) continue;
     const year = yearOf(a.date);
-    const y = byYear.get(year);
-    if (!y) byYear.set(year, { addedKg: a.amountKg, part, lastDate: a.date });
-    else
-      byYear.set(year, { addedKg: y.addedKg + a.amountKg, ...(a.date >= y.lastDate ? { part, lastDate: a.date } : y) });
+    const y = byYear.get(year) ?? { addedKg: 0, part: null, lastDate: null, notCountedKg: 0, lastNotCounted: null };
+    const part = partAt(a.date);
+    if (!part) {
+      y.notCountedKg += a.amountKg;
+      if (!y.lastNotCounted || a.date >= y.lastNotCounted) y.lastNotCounted = a.date;
+    } else {
+      y.addedKg += a.amountKg;
+      if (!y.lastDate || a.date >= y.lastDate) {
+        y.part = part;
+        y.lastDate = a.date;
+      }
+    }
+    byYear.set(year, y);
   }
   return [...byYear.entries()]
     .sort(([a], [b]) => a - b)
-    .map(([year, { addedKg, part, lastDate }]) => {
+    .map(([year, { addedKg, part, lastDate, notCountedKg, lastNotCounted }]) => {
+      const listed = { year, notCountedKg, lastNotCounted };
+      if (!part || !lastDate) return { ...listed, addedKg: 0, percent: 0, chronic: false, partId: null };
       const percent = (addedKg / requirePositive(chargeOn(lastDate), "fullChargeKg")) * 100;
       // Tolerance of 1e-9 so 125 % typed in lb and stored in kg still "reaches" 125 %.
       const chronic = percent >= part.chronicLeaker.percentOfFullCharge.value * (1 - 1e-9);
-      const base = { year, addedKg, percent, chronic, partId: part.id };
+      const base = { ...listed, addedKg, percent, chronic, partId: part.id };
       return chronic ? { ...base, reportDue: chronicReportDueDate(part, year) } : base;
     });
 }

@@ -19,6 +19,8 @@ describe("readable citations", () => {
         "40 CFR 84 subpart C (HFCs and substitutes, GWP > 53); [S:R4] repair within 30 days of learning of the breach",
       ),
     ).toBe("40 CFR 84 subpart C (HFCs and substitutes, GWP > 53); repair within 30 days of learning of the breach");
+    // The US record-keeping rule is in 40 CFR 82 subpart F and 84 subpart C (standards.md §1 [S:R6,R7]): cited once.
+    expect(readableSource("[S:R6,R7]")).toBe("40 CFR 82 subpart F and 84 subpart C");
     expect(readableSource("[S:E8b] 2024/573 Art. 7, records at least 5 years")).toBe(
       "2024/573 Art. 7, records at least 5 years",
     );

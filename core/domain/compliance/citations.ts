@@ -110,7 +110,8 @@ export function readableSource(source: string): string {
           if (c) said.add(c.text);
         }
     }
-    const unique = [...new Set(notes)];
+    // "40 CFR 82 subpart F" is said again by "40 CFR 82 subpart F and 84 subpart C": cite the wider once.
+    const unique = [...new Set(notes)].filter((n, _, all) => !all.some((o) => o.startsWith(`${n} and `)));
     if (!rest) return unique.join("; ");
     // "definition [S:R8]": a one-word lead-in reads "definition: 40 CFR 82.152, …".
     if (!/\s/.test(rest) && unique.length && tags.every((t) => t.startsWith("S:")))

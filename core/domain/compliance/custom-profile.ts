@@ -121,5 +121,7 @@ export function validateRuleProfile(p: RuleProfile): void {
     checkBands(p.leakChecks.hfoBands, "leakChecks.hfoBands");
     checkNumber(p.leakChecks.hermeticExemptBelowTonnes, "leakChecks.hermeticExemptBelowTonnes", 0, 1e6);
     checkNumber(p.leakChecks.recheckAfterRepairMonths, "leakChecks.recheckAfterRepairMonths", 1, 120, true);
+    if (p.leakChecks.ldsCheckMonths)
+      checkNumber(p.leakChecks.ldsCheckMonths, "leakChecks.ldsCheckMonths", 1, 120, true);
   }
 }

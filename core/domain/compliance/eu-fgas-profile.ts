@@ -35,6 +35,7 @@ export const EU_FGAS_PROFILE: RuleProfile = {
     },
     hermeticExemptBelowTonnes: { value: 10, source: "[S:E1] hermetically sealed, labelled, < 10 t CO2e" },
     recheckAfterRepairMonths: { value: 1, source: "[S:E6] re-check within 1 month of a repair" },
+    ldsCheckMonths: { value: 12, source: "[S:E2,E5] a leak detection system is checked at least every 12 months" },
   },
   recordRetentionYears: { value: 5, source: "[S:E8b] 2024/573 Art. 7" },
 };

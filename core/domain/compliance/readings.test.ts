@@ -11,9 +11,10 @@ describe("readings and research notes (docs/decisions/0044-readings-and-research
     expect(readableSource("[M] 40 CFR 84.106: follow-up verification within 10 days; definition [S:R8]")).toBe(
       "40 CFR 84.106: follow-up verification within 10 days (reading); definition: 40 CFR 82.152",
     );
-    // R6 is a trade magazine's summary and R7 a study guide: a reader sees the rule they summarise.
+    // R6 is a trade magazine's summary and R7 a study guide: a reader sees the rule they summarise, once
+    // (R7's "82 subpart F and 84 subpart C" already says R6's "82 subpart F").
     expect(readableSource("[S:R6,R7] records kept 3 years")).toBe(
-      "records kept 3 years (40 CFR 82 subpart F; 40 CFR 82 subpart F and 84 subpart C)",
+      "records kept 3 years (40 CFR 82 subpart F and 84 subpart C)",
     );
     const all = [US_FEDERAL_PROFILE, EU_FGAS_PROFILE].flatMap((p) =>
       JSON.stringify(p)

@@ -81,4 +81,38 @@ describe("history does not change when a system is edited (docs/decisions/0043-s
     );
     expect(noFill.points.at(-1)).toMatchObject({ days: 365 });
   });
+
+  it("inspections after a breach run in the regime of the breach: a retrofit ends the Part 82 run", () => {
+    // Same rack. Under 100 lb (not ≥ 500 lb) the inspections after a breach are yearly until one period
+    // below the threshold (82.157 / 84.106, from memory). The retrofit on 1 May 2026 ends the Part 82
+    // breach of 1 Sep 2025; the Part 84 breach of 1 Jul 2026 starts its own run: due 1 Jul 2027.
+    const revisions = [revision("2015-04-01", "R-22", 100, "first"), revision("2026-05-01", "R-448A", 90, "retrofit")];
+    const additions = [
+      { id: "a", date: "2025-06-01", amountKg: lb(5) },
+      { id: "b", date: "2025-09-01", amountKg: lb(10) },
+      { id: "fill", date: "2026-05-01", amountKg: lb(90), excluded: "retrofit" as const },
+      { id: "c", date: "2026-07-01", amountKg: lb(5) },
+    ];
+    const s = systemStatus(US_FEDERAL_PROFILE, "annualizing", { ...base(revisions), additions }, "2026-07-02");
+    expect(s.nextInspection).toMatchObject({ dueOn: "2027-07-01" });
+    expect(s.nextInspection!.reason).toContain("since the breach of 1 Jul 2026");
+    expect(s.nextInspection!.source).toContain("84.106");
+    // Without a breach since the retrofit, no Part 82 inspection is owed on the retrofitted rack.
+    const before = systemStatus(
+      US_FEDERAL_PROFILE,
+      "annualizing",
+      { ...base(revisions), additions: additions.filter((a) => a.id !== "c") },
+      "2026-07-02",
+    );
+    expect(before.nextInspection).toBeNull();
+    // Before the retrofit the Part 82 run was owed: yearly from the breach of 1 Sep 2025.
+    const unretrofitted = systemStatus(
+      US_FEDERAL_PROFILE,
+      "annualizing",
+      { ...base(revisions.slice(0, 1)), additions: additions.slice(0, 2) },
+      "2026-04-02",
+    );
+    expect(unretrofitted.nextInspection).toMatchObject({ dueOn: "2026-09-01" });
+    expect(unretrofitted.nextInspection!.source).toContain("82.157");
+  });
 });

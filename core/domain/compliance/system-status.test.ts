@@ -3,6 +3,7 @@ import { getRefrigerant } from "../refrigerants/catalogue";
 import { KG_PER_POUND } from "../units/mass";
 import { inspectionRun, systemStatus, type SystemRecords } from "./system-status";
 import { US_FEDERAL_PROFILE } from "./us-federal-profile";
+import { EU_FGAS_PROFILE } from "./eu-fgas-profile";
 
 const lb = (n: number) => n * KG_PER_POUND; // NIST SP 811: 0.45359237 kg per lb exactly
 
@@ -124,5 +125,37 @@ describe("system status", () => {
     );
     expect(filed.due.some((d) => d.kind === "chronic-leaker-report")).toBe(false);
     expect(filed.chronic.find((y) => y.year === 2026)?.chronic).toBe(true); // the record itself stays
+  });
+});
+
+describe("added per calendar year before a leak-repair part applied (docs/decisions/0127)", () => {
+  // Part 84 applies to HFCs (GWP > 53) from 1 Jan 2026 [S:R4]; Part 82 leak repair covers ODS only since
+  // 10 Apr 2020 [S:R1,R2]; 125 % in a calendar year makes a chronic leaker [S:R7] (docs/reference/standards.md §1).
+  const rec = {
+    ...base,
+    enteredOn: "2024-03-01",
+    additions: [
+      { id: "a", date: "2025-04-20", amountKg: lb(800) },
+      { id: "b", date: "2025-10-02", amountKg: lb(820) },
+      { id: "c", date: "2026-02-09", amountKg: lb(150) },
+    ],
+  };
+
+  it("lists an HFC rack's 2025 as not judged, with the rule's reason, and judges 2026 alone", () => {
+    const s = systemStatus(US_FEDERAL_PROFILE, "annualizing", rec, "2026-03-01");
+    expect(s.chronic.map((y) => [y.year, y.partId, y.chronic, Math.round(y.percent)])).toEqual([
+      [2025, null, false, 0],
+      [2026, "40-cfr-84-subpart-c", false, 13],
+    ]);
+    // 1,620 lb into a 1,150 lb rack would be 141 %: no chronic-leaker report is due for 2025.
+    expect(s.chronic[0].notCountedKg).toBeCloseTo(lb(1620), 9);
+    expect(s.chronic[0].noPart).toMatch(/84.*applies from 2026-01-01/);
+    expect(s.due.some((d) => d.kind === "chronic-leaker-report")).toBe(false);
+    expect(s.chronic[1].noPart).toBeNull();
+  });
+
+  it("lists no years at all under a profile without leak-repair parts (EU F-gas has no chronic-leaker report)", () => {
+    const s = systemStatus(EU_FGAS_PROFILE, "annualizing", rec, "2026-03-01");
+    expect(s.chronic).toEqual([]);
   });
 });

@@ -11,6 +11,7 @@ import { systemCo2e, type SystemCo2e } from "./co2e";
 import { followUpVerificationDueDate, initialVerificationDueDate, recheckAfterRepairDueDate } from "./deadlines";
 import { inspectionsAfterBreach } from "./inspections-after-breach";
 import { leakCheckInterval, nextInspectionDate, type LeakCheckInterval } from "./leak-check-interval";
+import { leakDetectionCheckDue } from "./leak-detection-check";
 import type { ChargeAddition } from "./leak-rate";
 import type { ApplianceType, LeakRateMethod, RuleProfile } from "./rule-profile";
 import { formatCalendarDay as day } from "../dates/format-in-zone";
@@ -45,6 +46,10 @@ export interface SystemRecords {
   revisions?: readonly SystemRevision[];
   /** The day the system was retired (store calendar); from then only reports for earlier years fall due. */
   retiredOn?: IsoDate | null;
+  /** EU: factory-sealed and labelled as such (exempt from leak checks below the profile's limit). */
+  hermeticallySealed?: boolean;
+  /** Checks of the system's leak detection system itself (EU: yearly where one is mandatory). */
+  leakDetectionChecks?: readonly { checkedOn: IsoDate; working: boolean }[];
 }
 
 export interface DueDate {
@@ -56,6 +61,7 @@ export interface DueDate {
     | "inspection"
     | "chronic-leaker-report"
     | "automatic-leak-detection"
+    | "leak-detection-check"
     | "retrofit-or-retire-plan"
     | "retrofit-or-retire";
   dueOn: IsoDate;
@@ -83,7 +89,11 @@ export interface SystemStatus {
   unrepairedBreach: AssessedPoint | null;
   /** Every breach episode, oldest first (docs/decisions/0041-repair-clock.md). */
   episodes: BreachEpisode[];
-  chronic: ChronicLeakerYear[];
+  /**
+   * Added per calendar year under a profile with leak-repair parts (none under one without). A year in
+   * which no part applied is listed with `noPart`, the rule's reason on its last addition's day.
+   */
+  chronic: (ChronicLeakerYear & { noPart: string | null })[];
   co2e: SystemCo2e;
   leakCheck: { withLds: LeakCheckInterval; withoutLds: LeakCheckInterval; applied: LeakCheckInterval } | null;
   /** The part's automatic-leak-detection requirement for this system, or null when the part has none. */
@@ -200,7 +210,21 @@ export function systemStatus(
     const at = applicableLeakRatePart(profile, on(date).refrigerant, on(date).fullChargeKg, date);
     return at.applies ? at.part : null;
   };
-  const chronic = chronicLeakerYears(partOn, (date) => on(date).fullChargeKg, rec.additions);
+  // A profile without leak-repair parts (EU F-gas) has no chronic-leaker years to list at all.
+  const chronic = (
+    profile.leakRateParts.length ? chronicLeakerYears(partOn, (date) => on(date).fullChargeKg, rec.additions) : []
+  ).map((y) => ({
+    ...y,
+    noPart:
+      y.partId === null && y.lastNotCounted
+        ? applicableLeakRatePart(
+            profile,
+            on(y.lastNotCounted).refrigerant,
+            on(y.lastNotCounted).fullChargeKg,
+            y.lastNotCounted,
+          ).reason
+        : null,
+  }));
   const thisYear = Number(today.slice(0, 4));
   for (const y of chronic) {
     const yearPart = profile.leakRateParts.find((p) => p.id === y.partId);
@@ -221,16 +245,26 @@ export function systemStatus(
   let leakCheck: SystemStatus["leakCheck"] = null;
   let nextInspection: SystemStatus["nextInspection"] = null;
   if (profile.leakChecks) {
+    const hermeticallySealed = rec.hermeticallySealed ?? false;
     const withLds = leakCheckInterval(profile, facts.refrigerant, facts.fullChargeKg, {
       hasLeakDetection: true,
+      hermeticallySealed,
       numberFormat,
     });
     const withoutLds = leakCheckInterval(profile, facts.refrigerant, facts.fullChargeKg, {
       hasLeakDetection: false,
+      hermeticallySealed,
       numberFormat,
     });
     const applied = facts.automaticLeakDetection ? withLds : withoutLds;
     leakCheck = { withLds, withoutLds, applied };
+    const lds = leakDetectionCheckDue(
+      profile,
+      applied,
+      { inServiceOn: facts.enteredOn, hasLeakDetection: facts.automaticLeakDetection },
+      rec.leakDetectionChecks ?? [],
+    );
+    if (lds) due.push({ kind: "leak-detection-check", ...lds });
     if (applied.required) {
       const from = lastCheck ?? facts.enteredOn;
       nextInspection = {
@@ -247,10 +281,15 @@ export function systemStatus(
       fullChargeKg: facts.fullChargeKg,
       hasAutomaticLeakDetection: facts.automaticLeakDetection,
     });
+    // Inspections after a breach belong to the regime the breach happened in: a retrofit ends them as
+    // it ends the breach (docs/decisions/0043-system-revisions.md), so an earlier part's breach neither
+    // starts nor keeps a run under the part in force now.
+    const current = regimesOf(revisions).find((r) => inRegime(r, today));
+    const inCurrent = (d: IsoDate) => !current || inRegime(current, d);
     if (plan.required) {
       const run = inspectionRun(
-        points.filter((p) => p.exceeds).map((p) => p.date),
-        rec.leakChecks,
+        points.filter((p) => p.exceeds && inCurrent(p.date)).map((p) => p.date),
+        rec.leakChecks.filter((c) => inCurrent(c.checkedOn)),
         plan.untilPeriodsBelow,
       );
       if (run) {

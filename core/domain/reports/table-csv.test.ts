@@ -14,6 +14,15 @@ describe("tableCsv", () => {
     expect(row).toEqual(["a", "45.359237", "2026-03-01T12:00:00.000Z", '[{"code":"x"}]']);
   });
 
+  it("says in an instant column's name that it is UTC", () => {
+    const csv = tableCsv(["id", "at"], [{ id: "a", at: new Date("2026-11-01T06:30:00Z") }], ["at"]);
+    expect(Papa.parse<string[]>(csv.trim()).data).toEqual([
+      ["id", "at_utc"],
+      ["a", "2026-11-01T06:30:00.000Z"],
+    ]);
+    expect(tableCsv(["id", "voidedAt"], [], ["voidedAt"]).trim()).toBe("id,voided_at_utc");
+  });
+
   it("keeps the header of an empty table and leaves a missing value empty", () => {
     expect(tableCsv(["id", "voidedAt"], []).trim()).toBe("id,voided_at");
     expect(tableCsv(["id", "voidedAt"], [{ id: "b", voidedAt: null }])).toBe("id,voided_at\r\nb,");

@@ -17,10 +17,18 @@ export function storedCell(v: unknown): string | number | boolean {
   return JSON.stringify(v);
 }
 
-/** A table as CSV with a header of snake_case column names; formula-like text is escaped (decision 0025). */
-export function tableCsv(columns: readonly string[], rows: readonly Record<string, unknown>[]): string {
+/**
+ * A table as CSV with a header of snake_case column names; formula-like text is escaped (decision 0025).
+ * An instant column's header ends in `_utc` ("recorded_at_utc"), so a reader knows the zone without
+ * the readme (docs/decisions/0125-audit-trail-in-the-stores-time.md).
+ */
+export function tableCsv(
+  columns: readonly string[],
+  rows: readonly Record<string, unknown>[],
+  instants: readonly string[] = [],
+): string {
   return unparseCsv({
-    fields: columns.map(snakeCase),
+    fields: columns.map((c) => (instants.includes(c) ? `${snakeCase(c)}_utc` : snakeCase(c))),
     data: rows.map((r) => columns.map((c) => storedCell(r[c]))),
   });
 }

@@ -207,9 +207,17 @@ describe("the rolling-average method, the 125 % rule and EU leak checks", () => 
       reason: "Top-up",
     });
     // 30 lb into a 20 lb system within three weeks, but 75 % in 2026 alone: not chronic [S:R7]. The 2025
-    // addition counts in no year: Part 84 applies from 1 Jan 2026 and Part 82 covers only ODS since 2020 [S:R1,R2,R4].
-    expect(jan.body.records.chronic.map((y: { year: number; chronic: boolean }) => [y.year, y.chronic])).toEqual([
-      [2026, false],
+    // addition counts in no year: Part 84 applies from 1 Jan 2026 and Part 82 covers only ODS since 2020 [S:R1,R2,R4];
+    // 2025 is listed, not counted (docs/decisions/0127).
+    expect(
+      jan.body.records.chronic.map((y: { year: number; chronic: boolean; noPart: string | null }) => [
+        y.year,
+        y.chronic,
+        y.noPart !== null,
+      ]),
+    ).toEqual([
+      [2025, false, true],
+      [2026, false, false],
     ]);
     const feb = await tech.post(`/api/systems/${id}/charge-additions`, {
       addedOn: "2026-02-01",

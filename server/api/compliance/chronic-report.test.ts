@@ -163,7 +163,14 @@ describe("filing the chronic-leaker report", () => {
     }
     const rec = (await (await signedIn("engineer")).get(`/api/systems/${sys.body.id}/records`)).body;
     // 25 lb / 20 lb = 125 % in both years, but only 2026 is a Part 84 year: report by 1 March 2027.
-    expect(rec.chronic.map((y: { year: number; chronic: boolean }) => [y.year, y.chronic])).toEqual([[2026, true]]);
+    // 2025 is listed, so the yearly totals add up with the charge added, and not judged (docs/decisions/0127).
+    expect(rec.chronic.map((y: { year: number; chronic: boolean }) => [y.year, y.chronic])).toEqual([
+      [2025, false],
+      [2026, true],
+    ]);
+    expect(rec.chronic[0].notCountedKg).toBeCloseTo(25 * 0.45359237, 9); // NIST SP 811
+    expect(rec.chronic[0].noPart).toMatch(/40 CFR 84 subpart C.*applies from 1 Jan 2026/);
+    expect(rec.chronic[1]).toMatchObject({ noPart: null, notCountedKg: 0 });
     expect(
       rec.due.filter((d: { kind: string }) => d.kind === "chronic-leaker-report").map((d: { year: number }) => d.year),
     ).not.toContain(2025);

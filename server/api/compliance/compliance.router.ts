@@ -7,6 +7,7 @@ import {
   chargeVoidInput,
   chronicReportInput,
   leakCheckInput,
+  leakDetectionCheckInput,
   acceptReadingInput,
   withdrawReadingInput,
 } from "#core/contracts/compliance";
@@ -15,6 +16,7 @@ import { validate } from "../../middleware/validate";
 import {
   addCharge,
   addLeakCheck,
+  addLeakDetectionCheck,
   correctCharge,
   fileChronicReport,
   getSystemRecords,
@@ -70,6 +72,19 @@ export function complianceRouter(ctx: AppContext): Router {
     validate(leakCheckInput),
     async (req, res) => {
       res.status(201).json(await addLeakCheck(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
+    },
+  );
+
+  // The leak detection system's own check: a record of its own kind, audited (EU, decision 0123).
+  router.post(
+    "/systems/:id/leak-detection-checks",
+    requireMember("findings.record"),
+    validate(idParam, "params"),
+    validate(leakDetectionCheckInput),
+    async (req, res) => {
+      res
+        .status(201)
+        .json(await addLeakDetectionCheck(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
     },
   );
 

@@ -12,6 +12,7 @@ const SECTION: Record<DueItem["kind"], string> = {
   "chronic-leaker-report": "chronic",
   "detector-check": "checks",
   "automatic-leak-detection": "sys-due",
+  "leak-detection-check": "lds-checks",
   "retrofit-or-retire-plan": "leak-rates",
   "retrofit-or-retire": "leak-rates",
 };

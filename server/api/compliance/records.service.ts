@@ -8,6 +8,7 @@ import type {
   chargeCorrectionInput,
   chronicReportInput,
   leakCheckInput,
+  leakDetectionCheckInput,
 } from "#core/contracts/compliance";
 import {
   chargeAdditions,
@@ -15,25 +16,28 @@ import {
   complianceAudit,
   findings,
   leakChecks,
+  leakDetectionChecks,
   memberships,
   users,
 } from "../../db/schema/index";
 import type { AssessedPoint } from "#core/domain/compliance/assess-leak-rate";
 import type { LeakRatePart } from "#core/domain/compliance/rule-profile";
 import { recordRetention } from "#core/domain/compliance/retention";
-import { localDateOf } from "#core/domain/dates/time-zone";
 import { chargeToKg, companyGwpBases, refuseRetired, toSystem } from "../systems/systems.service";
 import { badRequest, conflict, notFound, HttpError } from "../../lib/http-error";
 import { eventDay } from "../findings/findings.service";
 import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { systemDueItems } from "./due-items";
-import { companyRules, statusesOf, systemWithStore } from "./system-records";
+import { hasRecords } from "../systems/system-has-records";
+import { companyRules, retiredOnOf, statusesOf, systemWithStore, type CompanyRules } from "./system-records";
 import { profileWording } from "#core/domain/compliance/company-profile";
+import { readableDays } from "#core/domain/compliance/audit-entry";
 
 type AdditionInput = z.output<typeof chargeAdditionInput>;
 type CorrectionInput = z.output<typeof chargeCorrectionInput>;
 type LeakCheckInput = z.output<typeof leakCheckInput>;
 type ChronicReportInput = z.output<typeof chronicReportInput>;
+type LeakDetectionCheckInput = z.output<typeof leakDetectionCheckInput>;
 
 /** The system and its store when the viewer may see them; 404 otherwise (never 403). */
 export async function visibleSystem(ctx: AppContext, viewer: Viewer, systemId: string) {
@@ -109,19 +113,27 @@ export async function getSystemRecords(
   viewer: Viewer,
   systemId: string,
   now = new Date(),
+  /** The company's rules when the caller has read them already (a statement, the archive). */
+  preloaded?: CompanyRules,
 ): Promise<SystemRecordsView> {
   const row = await visibleSystem(ctx, viewer, systemId);
-  const rules = await companyRules(ctx, viewer.companyId);
+  const rules = preloaded ?? (await companyRules(ctx, viewer.companyId));
   const [s] = await statusesOf(ctx, rules, [row], now);
   const st = s.status;
   // Independent reads of the system's records: asked together, not one after another.
-  const [checks, reports, audit] = await Promise.all([
+  const [checks, ldsChecks, reports, audit, withRecords] = await Promise.all([
     ctx.db
       .select({ c: leakChecks, by: users.name })
       .from(leakChecks)
       .innerJoin(users, eq(users.id, leakChecks.byId))
       .where(eq(leakChecks.systemId, systemId))
       .orderBy(asc(leakChecks.checkedOn), asc(leakChecks.recordedAt)),
+    ctx.db
+      .select({ c: leakDetectionChecks, by: users.name })
+      .from(leakDetectionChecks)
+      .innerJoin(users, eq(users.id, leakDetectionChecks.byId))
+      .where(eq(leakDetectionChecks.systemId, systemId))
+      .orderBy(asc(leakDetectionChecks.checkedOn), asc(leakDetectionChecks.recordedAt)),
     ctx.db
       .select({ r: chronicLeakerReports, by: users.name })
       .from(chronicLeakerReports)
@@ -133,8 +145,14 @@ export async function getSystemRecords(
       .innerJoin(users, eq(users.id, complianceAudit.byId))
       .where(eq(complianceAudit.systemId, systemId))
       .orderBy(desc(complianceAudit.at), desc(complianceAudit.id)),
+    hasRecords(ctx, systemId),
   ]);
-  const system = toSystem(row.system, await companyGwpBases(ctx, viewer.companyId));
+  const system = toSystem(
+    row.system,
+    await companyGwpBases(ctx, viewer.companyId, rules),
+    withRecords,
+    row.store.timeZone,
+  );
   const lc = st.leakCheck;
   return {
     system,
@@ -149,10 +167,7 @@ export async function getSystemRecords(
       wording: profileWording(rules.profile),
       leakRateRules: rules.profile.leakRateParts.length > 0,
     },
-    retention: recordRetention(
-      rules.profile,
-      row.system.retiredAt ? localDateOf(row.system.retiredAt, row.store.timeZone) : null,
-    ),
+    retention: recordRetention(rules.profile, retiredOnOf(row.system, row.store.timeZone)),
     applicability: st.applicability,
     automaticLeakDetection: st.automaticLeakDetection,
     leakRates: st.points.map(toRow),
@@ -162,7 +177,8 @@ export async function getSystemRecords(
     // the part before it, docs/decisions/0043-system-revisions.md), else the part in force today.
     chronicRule: chronicRuleOf(
       rules.profile.leakRateParts.find(
-        (p) => p.id === (st.chronic.at(-1)?.partId ?? st.applicability.partId ?? st.latest?.partId),
+        (p) =>
+          p.id === (st.chronic.filter((y) => y.partId).at(-1)?.partId ?? st.applicability.partId ?? st.latest?.partId),
       ) ?? null,
     ),
     chronic: st.chronic.map((y) => {
@@ -173,6 +189,9 @@ export async function getSystemRecords(
         percent: y.percent,
         chronic: y.chronic,
         reportDue: y.reportDue ?? null,
+        notCountedKg: y.notCountedKg,
+        // No leak-repair part applied in the year: listed so the totals add up, not judged (decision 0127).
+        noPart: y.noPart === null ? null : readableDays(y.noPart),
         filed: f
           ? {
               on: f.r.filedOn,
@@ -207,6 +226,14 @@ export async function getSystemRecords(
       note: x.c.note,
       by: x.by,
     })),
+    leakDetectionChecks: ldsChecks.map((x) => ({
+      id: x.c.id,
+      checkedOn: x.c.checkedOn,
+      working: x.c.working,
+      note: x.c.note,
+      by: x.by,
+    })),
+    leakDetectionCheckOwed: !!st.leakCheck?.applied.required && st.leakCheck.applied.ldsRequired,
     cautions: system.cautions,
   };
 }
@@ -381,6 +408,47 @@ export async function addLeakCheck(
     leakFound: input.leakFound,
     note: input.note,
     byId: userId,
+  });
+  return getSystemRecords(ctx, viewer, systemId);
+}
+
+/**
+ * Records a check of the system's leak detection system (a record of its own kind, EU: at least
+ * every 12 months where one is mandatory, docs/reference/standards.md §2 [S:E2,E5]), with an audit
+ * row in the same transaction. Only where the profile has leak checks: the US parts we hold state
+ * no such check (decision 0123).
+ */
+export async function addLeakDetectionCheck(
+  ctx: AppContext,
+  viewer: Viewer,
+  userId: string,
+  systemId: string,
+  input: LeakDetectionCheckInput,
+) {
+  const { store, system } = await visibleSystem(ctx, viewer, systemId);
+  refuseRetired(system);
+  const checkedOn = eventDay(input.checkedOn, store, "checkedOn");
+  const rules = await companyRules(ctx, viewer.companyId);
+  if (!rules.profile.leakChecks)
+    throw badRequest(`Please check: ${rules.profile.name} sets no check of a leak detection system.`, {
+      checkedOn: `${rules.profile.name} sets no check of a leak detection system; record a leak check instead`,
+    });
+  await ctx.db.transaction(async (tx) => {
+    await tx.insert(leakDetectionChecks).values({
+      companyId: viewer.companyId,
+      systemId,
+      checkedOn,
+      working: input.working,
+      note: input.note,
+      byId: userId,
+    });
+    await tx.insert(complianceAudit).values({
+      companyId: viewer.companyId,
+      systemId,
+      action: "leak-detection-checked",
+      byId: userId,
+      summary: `Leak detection system checked on ${checkedOn}: ${input.working ? "working" : "fault found"}${input.note ? ` (${input.note})` : ""}`,
+    });
   });
   return getSystemRecords(ctx, viewer, systemId);
 }

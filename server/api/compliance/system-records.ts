@@ -8,6 +8,7 @@ import {
   findingEvents,
   findings,
   leakChecks,
+  leakDetectionChecks,
   stores,
   systems,
 } from "../../db/schema/index";
@@ -48,10 +49,21 @@ export async function companyRules(ctx: AppContext, companyId: string): Promise<
     .select({ ruleProfile: companies.ruleProfile, method: companies.leakRateMethod, number: companies.numberFormat })
     .from(companies)
     .where(eq(companies.id, companyId));
+  return rulesOfSettings(ctx, companyId, c);
+}
+
+/** The rules from a company row the caller has already read (a custom profile is read from its own table). */
+export async function rulesOfSettings(
+  ctx: AppContext,
+  companyId: string,
+  c: { ruleProfile: RuleProfileSetting; method: LeakRateMethod; number: NumberFormat } | undefined,
+): Promise<CompanyRules> {
   const setting = c?.ruleProfile ?? "us-federal";
   const custom = setting === "custom" ? ((await latestCustomProfile(ctx, companyId))?.profile ?? null) : null;
   return { profile: profileFor(setting, custom), method: c?.method ?? "annualizing", numberFormat: c?.number };
 }
+
+type RuleProfileSetting = (typeof companies.$inferSelect)["ruleProfile"];
 
 export interface SystemWithStatus {
   system: SystemRow;
@@ -74,7 +86,7 @@ export async function statusesOf(
 ): Promise<SystemWithStatus[]> {
   if (rows.length === 0) return [];
   const ids = rows.map((r) => r.system.id);
-  const [adds, events, checks, filed, revisions, lookup] = await Promise.all([
+  const [adds, events, checks, ldsChecks, filed, revisions, lookup] = await Promise.all([
     ctx.db
       .select()
       .from(chargeAdditions)
@@ -94,6 +106,7 @@ export async function statusesOf(
       .where(inArray(findings.systemId, ids))
       .orderBy(asc(findingEvents.at), asc(findingEvents.id)),
     ctx.db.select().from(leakChecks).where(inArray(leakChecks.systemId, ids)),
+    ctx.db.select().from(leakDetectionChecks).where(inArray(leakDetectionChecks.systemId, ids)),
     ctx.db
       .select({ systemId: chronicLeakerReports.systemId, year: chronicLeakerReports.year })
       .from(chronicLeakerReports)
@@ -160,7 +173,11 @@ export async function statusesOf(
           .filter((c) => c.systemId === system.id)
           .map((c) => ({ checkedOn: c.checkedOn, leakFound: c.leakFound })),
         chronicReportsFiled: filed.filter((f) => f.systemId === system.id).map((f) => f.year),
-        retiredOn: system.retiredAt ? localDateOf(system.retiredAt, store.timeZone) : null,
+        retiredOn: retiredOnOf(system, store.timeZone),
+        hermeticallySealed: system.hermeticallySealed,
+        leakDetectionChecks: ldsChecks
+          .filter((c) => c.systemId === system.id)
+          .map((c) => ({ checkedOn: c.checkedOn, working: c.working })),
       },
       today,
       rules.numberFormat,
@@ -173,6 +190,12 @@ export async function statusesOf(
       refrigerantName: designationOf(resolveStored(lookup, system.refrigerantId)),
     };
   });
+}
+
+/** The day a system left service: as asked since it was (decision 0124), else the store's day of the retirement. */
+export function retiredOnOf(system: Pick<SystemRow, "retiredAt" | "retiredOn">, timeZone: string): string | null {
+  if (!system.retiredAt) return null;
+  return system.retiredOn ?? localDateOf(system.retiredAt, timeZone);
 }
 
 /** One system with its store, in the viewer's company (the caller checks store visibility). */

@@ -1,6 +1,6 @@
 import { asc, eq, getTableColumns, inArray, type Table } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import { companyRules } from "../compliance/system-records";
+import type { RuleProfile } from "#core/domain/compliance/rule-profile";
 import { profileWording } from "#core/domain/compliance/company-profile";
 import {
   chargeAdditions,
@@ -9,6 +9,7 @@ import {
   findingEvents,
   findings,
   leakChecks,
+  leakDetectionChecks,
   memberships,
   readingAcceptances,
   readingWithdrawals,
@@ -27,17 +28,30 @@ export interface ArchiveTable {
   file: string;
   /** Column names in order (camelCase, as in the schema); an empty table still has its header. */
   columns: string[];
+  /** The columns holding instants (timestamps): their header says they are UTC ("recorded_at_utc"). */
+  instants: string[];
   rows: Record<string, unknown>[];
 }
 
 const cols = (t: Table) => Object.keys(getTableColumns(t));
+const instantsOf = (t: Table) =>
+  Object.entries(getTableColumns(t))
+    .filter(([, c]) => c.columnType === "PgTimestamp")
+    .map(([name]) => name);
+/** A table of the archive: its columns and which of them are instants come from the schema. */
+const table = (file: string, t: Table, rows: Record<string, unknown>[]): ArchiveTable => ({
+  file,
+  columns: cols(t),
+  instants: instantsOf(t),
+  rows,
+});
 
 /**
  * Every table of records a company owns, read with its company filter and nothing else, so the
  * archive is the record set itself rather than a view of it. Readings and finding steps reach
  * the company through their sweep and finding. Ordered by time so an auditor reads them in order.
  */
-export async function archiveTables(ctx: AppContext, companyId: string): Promise<ArchiveTable[]> {
+export async function archiveTables(ctx: AppContext, companyId: string, profile: RuleProfile): Promise<ArchiveTable[]> {
   const db = ctx.db;
   const companySweeps = db.select({ id: sweeps.id }).from(sweeps).where(eq(sweeps.companyId, companyId));
   const companyFindings = db.select({ id: findings.id }).from(findings).where(eq(findings.companyId, companyId));
@@ -58,6 +72,7 @@ export async function archiveTables(ctx: AppContext, companyId: string): Promise
     acceptanceRows,
     withdrawalRows,
     ownRefrigerantRows,
+    ldsCheckRows,
   ] = await Promise.all([
     db.select().from(stores).where(eq(stores.companyId, companyId)).orderBy(asc(stores.createdAt), asc(stores.id)),
     db
@@ -124,30 +139,36 @@ export async function archiveTables(ctx: AppContext, companyId: string): Promise
       .from(companyRefrigerants)
       .where(eq(companyRefrigerants.companyId, companyId))
       .orderBy(asc(companyRefrigerants.enteredAt), asc(companyRefrigerants.id)),
+    db
+      .select()
+      .from(leakDetectionChecks)
+      .where(eq(leakDetectionChecks.companyId, companyId))
+      .orderBy(asc(leakDetectionChecks.checkedOn), asc(leakDetectionChecks.recordedAt), asc(leakDetectionChecks.id)),
   ]);
   // No chronic-leaker report exists under EU F-gas rules: an EU company's archive has no such file,
   // unless it holds filings from a time under US rules.
-  const noChronicFile =
-    filingRows.length === 0 && profileWording((await companyRules(ctx, companyId)).profile) === "eu";
+  const noChronicFile = filingRows.length === 0 && profileWording(profile) === "eu";
   const tables: ArchiveTable[] = [
-    { file: "stores.csv", columns: cols(stores), rows: storeRows },
-    { file: "people.csv", columns: ["id", "name", "role"], rows: people },
-    { file: "systems.csv", columns: cols(systems), rows: systemRows },
-    { file: "system-revisions.csv", columns: cols(systemRevisions), rows: revisionRows },
-    { file: "charge-added.csv", columns: cols(chargeAdditions), rows: additionRows },
-    { file: "leak-checks.csv", columns: cols(leakChecks), rows: checkRows },
-    { file: "findings.csv", columns: cols(findings), rows: findingRows },
+    table("stores.csv", stores, storeRows),
+    { file: "people.csv", columns: ["id", "name", "role"], instants: [], rows: people },
+    table("systems.csv", systems, systemRows),
+    table("system-revisions.csv", systemRevisions, revisionRows),
+    table("charge-added.csv", chargeAdditions, additionRows),
+    table("leak-checks.csv", leakChecks, checkRows),
+    // Checks of a system's leak detection system itself (EU, decision 0123).
+    table("leak-detection-checks.csv", leakDetectionChecks, ldsCheckRows),
+    table("findings.csv", findings, findingRows),
     // Repairs, verification tests (initial and follow-up) and closing are steps of a finding.
-    { file: "finding-steps.csv", columns: cols(findingEvents), rows: stepRows },
-    { file: "chronic-leaker-filings.csv", columns: cols(chronicLeakerReports), rows: filingRows },
-    { file: "compliance-audit.csv", columns: cols(complianceAudit), rows: auditRows },
-    { file: "rule-readings-accepted.csv", columns: cols(readingAcceptances), rows: acceptanceRows },
-    { file: "rule-readings-withdrawn.csv", columns: cols(readingWithdrawals), rows: withdrawalRows },
+    table("finding-steps.csv", findingEvents, stepRows),
+    table("chronic-leaker-filings.csv", chronicLeakerReports, filingRows),
+    table("compliance-audit.csv", complianceAudit, auditRows),
+    table("rule-readings-accepted.csv", readingAcceptances, acceptanceRows),
+    table("rule-readings-withdrawn.csv", readingWithdrawals, withdrawalRows),
     // A system's refrigerant_id "company:<id>" names a row here (entered by the company, decision 0073).
-    { file: "company-refrigerants.csv", columns: cols(companyRefrigerants), rows: ownRefrigerantRows },
-    { file: "sweeps.csv", columns: cols(sweeps), rows: sweepRows },
-    { file: "readings.csv", columns: cols(readings), rows: readingRows },
-    { file: "reading-edits.csv", columns: cols(readingAudit), rows: editRows },
+    table("company-refrigerants.csv", companyRefrigerants, ownRefrigerantRows),
+    table("sweeps.csv", sweeps, sweepRows),
+    table("readings.csv", readings, readingRows),
+    table("reading-edits.csv", readingAudit, editRows),
   ];
   return noChronicFile ? tables.filter((x) => x.file !== "chronic-leaker-filings.csv") : tables;
 }

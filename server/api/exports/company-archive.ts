@@ -1,4 +1,3 @@
-import { acceptedReadingTexts } from "../compliance/reading-acceptances";
 import type { Writable } from "node:stream";
 import { ZipFile } from "yazl";
 import type { AppContext } from "../../context";
@@ -7,13 +6,12 @@ import { tableCsv } from "#core/domain/reports/table-csv";
 import { HttpError } from "../../lib/http-error";
 import { getSystemRecords } from "../compliance/records.service";
 import { listFindings } from "../findings/findings.service";
+import { listRevisions } from "../systems/system-revisions.service";
 import type { ReaderUnits } from "../reports/reader-units";
 import { sweepReportPdf } from "../reports/reports.service";
-import { companyRules } from "../compliance/system-records";
-import { companyPaper } from "../../reports/company-paper";
 import { archiveTables, type ArchiveTable } from "./archive-tables";
-import { companyMassDisplay } from "./company-display";
 import { leakRateStatementPdf } from "./leak-rate-statement";
+import { statementSettings, type StatementSettings } from "./statement-settings";
 
 const slug = (s: string) =>
   s
@@ -24,9 +22,16 @@ const slug = (s: string) =>
     .replace(/^-|-$/g, "")
     .toLowerCase() || "x";
 
-/** What the archive holds, read before the first byte is sent so a failed read is still a clean error. */
-export async function loadArchive(ctx: AppContext, viewer: Viewer): Promise<ArchiveTable[]> {
-  return archiveTables(ctx, viewer.companyId);
+/** What the archive holds and how its statements print, read before the first byte is sent so a failed read is still a clean error. */
+export interface LoadedArchive {
+  tables: ArchiveTable[];
+  settings: StatementSettings;
+}
+
+export async function loadArchive(ctx: AppContext, viewer: Viewer): Promise<LoadedArchive> {
+  // The company's rules are read once: for which tables there are and for every statement.
+  const settings = await statementSettings(ctx, viewer.companyId);
+  return { tables: await archiveTables(ctx, viewer.companyId, settings.rules.profile), settings };
 }
 
 /**
@@ -39,7 +44,7 @@ export async function loadArchive(ctx: AppContext, viewer: Viewer): Promise<Arch
 export async function writeArchive(
   ctx: AppContext,
   viewer: Viewer,
-  tables: ArchiveTable[],
+  { tables, settings }: LoadedArchive,
   units: ReaderUnits,
   out: Writable,
   now = new Date(),
@@ -56,26 +61,19 @@ export async function writeArchive(
   const listed: string[] = [];
   const skipped: string[] = [];
   for (const t of tables) {
-    zip.addBuffer(Buffer.from(tableCsv(t.columns, t.rows), "utf8"), `tables/${t.file}`, { mtime });
+    zip.addBuffer(Buffer.from(tableCsv(t.columns, t.rows, t.instants), "utf8"), `tables/${t.file}`, { mtime });
     listed.push(`tables/${t.file} (${t.rows.length} rows)`);
   }
 
-  const display = await companyMassDisplay(ctx, viewer.companyId);
-  const { profile } = await companyRules(ctx, viewer.companyId);
-  const statement = {
-    paper: await companyPaper(ctx, viewer.companyId, profile),
-    massUnit: display.mass,
-    numberFormat: display.number,
-    acceptedReadings: await acceptedReadingTexts(ctx, viewer.companyId, profile),
-    generatedAt: now,
-  };
+  const statement = { ...settings.statement, generatedAt: now };
   const systems = tables.find((t) => t.file === "systems.csv")?.rows ?? [];
   for (const s of systems as { id: string; name: string; storeId: string }[]) {
     const name = `statements/${slug(s.name)}-${s.id.slice(0, 8)}.pdf`;
     try {
-      const records = await getSystemRecords(ctx, viewer, s.id, now);
+      const records = await getSystemRecords(ctx, viewer, s.id, now, settings.rules);
       const list = await listFindings(ctx, viewer, s.storeId, { systemId: s.id });
-      zip.addBuffer(await leakRateStatementPdf(records, list, statement), name, { mtime });
+      const revisions = await listRevisions(ctx, viewer, s.id);
+      zip.addBuffer(await leakRateStatementPdf(records, list, statement, revisions), name, { mtime });
       listed.push(name);
     } catch (err) {
       if (!(err instanceof HttpError)) throw err;
@@ -100,7 +98,8 @@ export async function writeArchive(
   const readme = [
     `Plumeline record set, written ${now.toISOString()}.`,
     "Each CSV under tables/ is one table of records as stored: column names as in the database,",
-    "instants in ISO 8601 UTC, days as YYYY-MM-DD, masses in kg, people by id (see people.csv).",
+    "instants in ISO 8601 UTC (their columns end in _utc), days as YYYY-MM-DD, masses in kg,",
+    "people by id (see people.csv). The leak-rate statements write times in each store's zone.",
     "Text that a spreadsheet could run as a formula starts with a ' (OWASP CSV injection guidance).",
     "",
     "Contents:",

@@ -6,14 +6,12 @@ import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { getSystemRecords } from "../compliance/records.service";
 import { listFindings } from "../findings/findings.service";
-import { companyRules } from "../compliance/system-records";
-import { acceptedReadingTexts } from "../compliance/reading-acceptances";
-import { companyPaper } from "../../reports/company-paper";
+import { listRevisions } from "../systems/system-revisions.service";
 import { readerUnits } from "../reports/reader-units";
 import { loadArchive, writeArchive } from "./company-archive";
-import { companyMassDisplay } from "./company-display";
 import { leakRateStatementPdf } from "./leak-rate-statement";
 import { recordsCsv } from "./records-csv";
+import { statementSettings } from "./statement-settings";
 
 const idParam = z.object({ id: z.uuid("must be a valid id") });
 const fileName = (name: string, ext: string) =>
@@ -32,14 +30,16 @@ export function exportsRouter(ctx: AppContext): Router {
     requireMember("stores.read"),
     validate(idParam, "params"),
     async (req, res) => {
-      const records = await getSystemRecords(ctx, member(req), res.locals.params.id);
+      const { rules, statement } = await statementSettings(ctx, member(req).companyId);
+      const records = await getSystemRecords(ctx, member(req), res.locals.params.id, new Date(), rules);
       const list = await listFindings(ctx, member(req), records.store.id, { systemId: records.system.id });
+      const revisions = await listRevisions(ctx, member(req), records.system.id);
       res.set({
         "Content-Type": "text/csv; charset=utf-8",
         "Content-Disposition": `attachment; filename="${fileName(records.system.name, "csv")}"`,
       });
       await logExport(ctx, req, "records.csv", { systemId: records.system.id });
-      res.send(recordsCsv(records, list, (await companyMassDisplay(ctx, member(req).companyId)).mass));
+      res.send(recordsCsv(records, list, statement.massUnit, revisions));
     },
   );
 
@@ -48,23 +48,12 @@ export function exportsRouter(ctx: AppContext): Router {
     requireMember("stores.read"),
     validate(idParam, "params"),
     async (req, res) => {
-      const records = await getSystemRecords(ctx, member(req), res.locals.params.id);
+      // The company row is read once for the rules, the unit, the number format and the paper.
+      const { rules, statement } = await statementSettings(ctx, member(req).companyId);
+      const records = await getSystemRecords(ctx, member(req), res.locals.params.id, new Date(), rules);
       const list = await listFindings(ctx, member(req), records.store.id, { systemId: records.system.id });
-      const companyId = member(req).companyId;
-      const [{ profile }, display] = await Promise.all([
-        companyRules(ctx, companyId),
-        companyMassDisplay(ctx, companyId),
-      ]);
-      const [paper, acceptedReadings] = await Promise.all([
-        companyPaper(ctx, companyId, profile),
-        acceptedReadingTexts(ctx, companyId, profile),
-      ]);
-      const pdf = await leakRateStatementPdf(records, list, {
-        paper,
-        massUnit: display.mass,
-        numberFormat: display.number,
-        acceptedReadings,
-      });
+      const revisions = await listRevisions(ctx, member(req), records.system.id);
+      const pdf = await leakRateStatementPdf(records, list, statement, revisions);
       await logExport(ctx, req, "leak-rate-statement.pdf", { systemId: records.system.id });
       res.set({
         "Content-Type": "application/pdf",
@@ -78,7 +67,7 @@ export function exportsRouter(ctx: AppContext): Router {
   // before the headers go out; the PDFs are made while the zip streams.
   router.get("/company/records-archive.zip", requireMember("records.export"), async (req, res) => {
     const viewer = member(req);
-    const tables = await loadArchive(ctx, viewer);
+    const loaded = await loadArchive(ctx, viewer);
     const units = await readerUnits(ctx, req.auth!.user, viewer.companyId);
     const day = new Date().toISOString().slice(0, 10);
     await logExport(ctx, req, "records-archive.zip", { companyId: viewer.companyId });
@@ -87,7 +76,7 @@ export function exportsRouter(ctx: AppContext): Router {
       "Content-Disposition": `attachment; filename="plumeline-records-${day}.zip"`,
     });
     try {
-      await writeArchive(ctx, viewer, tables, units, res);
+      await writeArchive(ctx, viewer, loaded, units, res);
     } catch (err) {
       // The headers are gone, so no JSON error can follow: end the stream so the download fails visibly.
       req.log?.error({ err }, "records archive stopped");

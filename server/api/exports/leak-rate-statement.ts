@@ -1,9 +1,12 @@
 import { refrigerantCell } from "./records-csv";
-import type { SystemRecordsView } from "#core/contracts/compliance";
+import { EXCLUSION_NAMES, type SystemRecordsView } from "#core/contracts/compliance";
 import type { FindingDetail } from "#core/contracts/finding-actions";
 import { COMPONENT_LABELS, FINDING_EVENT_LABELS } from "#core/contracts/findings";
 import { APPLIANCE_TYPE_NAMES } from "#core/contracts/systems";
+import { revisionHistory, type RevisionRow } from "#core/domain/compliance/revision-changes";
 import { citedWithAcceptance } from "#core/domain/compliance/readings";
+import { readableAuditEntry } from "#core/domain/compliance/audit-entry";
+import { retireReasonWords } from "#core/domain/compliance/retirement-words";
 import { statementTitle } from "#core/domain/compliance/company-profile";
 import { formatCalendarDay as day, formatInZone } from "#core/domain/dates/format-in-zone";
 import { formatGrouped, formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
@@ -85,7 +88,7 @@ function systemSection(
   );
   para(
     doc,
-    `${APPLIANCE_TYPE_NAMES[r.system.applianceType]}; automatic leak detection: ${r.system.automaticLeakDetection ? "yes" : "no"}.`,
+    `${APPLIANCE_TYPE_NAMES[r.system.applianceType]}; automatic leak detection: ${r.system.automaticLeakDetection ? "yes" : "no"}${r.profile.wording === "eu" || r.system.hermeticallySealed ? `; hermetically sealed: ${r.system.hermeticallySealed ? "yes (factory-sealed, labelled as such)" : "no"}` : ""}.`,
   );
   if (r.co2e.known && r.co2e.tonnes !== null)
     para(
@@ -98,8 +101,48 @@ function systemSection(
   if (r.system.retired)
     para(
       doc,
-      `Retired on ${formatInZone(r.system.retired.at, r.store.timeZone, "date")}${r.system.retired.reason ? ` (${r.system.retired.reason})` : ""}; no repair, test or leak check falls due from then, and its records are kept${r.retention.keptUntil ? ` at least until ${day(r.retention.keptUntil)}` : ""}.`,
+      `Retired on ${day(r.system.retired.on)}${retireReasonWords(r.system.retired) ? ` (${retireReasonWords(r.system.retired)})` : ""}; no repair, test or leak check falls due from then, and its records are kept${r.retention.keptUntil ? ` at least until ${day(r.retention.keptUntil)}` : ""}.`,
     );
+}
+
+const KIND_WORDS: Record<RevisionRow["kind"], string> = {
+  first: "first values",
+  change: "change",
+  correction: "correction",
+  retrofit: "retrofit",
+};
+
+function historySection(
+  doc: Doc,
+  r: SystemRecordsView,
+  revisions: readonly RevisionRow[],
+  mass: (kg: number) => string,
+) {
+  // Why a figure uses the charge it uses: each figure reads the values in force on its own date
+  // (docs/decisions/0043-system-revisions.md, 0126-system-history-on-the-statement.md).
+  heading(doc, "System history");
+  if (!revisions.length) {
+    para(doc, "No dated values recorded: every figure uses the values above.");
+    return;
+  }
+  para(doc, "Each figure below uses the values in force on its own date: from a revision's day until the next one.");
+  table(
+    doc,
+    [
+      { title: "From", share: 62 },
+      { title: "Kind", share: 56 },
+      { title: "Values set", share: 170 },
+      { title: "Reason", share: 100 },
+      { title: "Recorded", share: 98 },
+    ],
+    revisionHistory(revisions, mass).map(({ revision: v, changes }) => [
+      day(v.effectiveFrom),
+      KIND_WORDS[v.kind],
+      changes,
+      v.reason,
+      `${v.by ? `${v.by}, ` : ""}${formatInZone(v.recordedAt, r.store.timeZone, "date")}`,
+    ]),
+  );
 }
 
 function profileSection(doc: Doc, r: SystemRecordsView, cite: Cite) {
@@ -163,7 +206,7 @@ function leakRateSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => s
       doc,
       r.additions.some((a) => !a.voided)
         ? "No leak-rate figure: the refrigerant added was excluded from the calculation."
-        : "No refrigerant has been added.",
+        : "No leak-rate figure yet: no refrigerant has been added.",
     );
   doc.moveDown(0.3);
   para(
@@ -176,13 +219,17 @@ function leakRateSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => s
   );
 }
 
-function euRecordsSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string) {
-  // EU F-gas: no leak-rate threshold; the record is the refrigerant added and the leak checks.
+/**
+ * Every live charge-added entry. Under leak-rate rules each says whether the leak rate counts it: an
+ * auditor finds the fill after a retrofit (no figure, 40 CFR 82.157) here, not only its absence from
+ * the figures.
+ */
+function additionsSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string) {
   heading(doc, "Refrigerant added");
   const live = r.additions.filter((a) => !a.voided);
-  if (live.length === 0) para(doc, "No refrigerant has been added.");
-  else
-    table(
+  if (live.length === 0) return para(doc, "No refrigerant has been added.");
+  if (!r.profile.leakRateRules)
+    return table(
       doc,
       [
         { title: "Date", share: 62 },
@@ -192,6 +239,28 @@ function euRecordsSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => 
       ],
       live.map((a) => [day(a.addedOn), mass(a.amountKg), a.technician, a.reason]),
     );
+  table(
+    doc,
+    [
+      { title: "Date", share: 62 },
+      { title: "Amount", share: 92 },
+      { title: "Technician", share: 96 },
+      { title: "Reason", share: 136 },
+      { title: "Leak rate", share: 100 },
+    ],
+    live.map((a) => [
+      day(a.addedOn),
+      mass(a.amountKg),
+      a.technician,
+      a.reason,
+      a.excluded ? `not counted: ${EXCLUSION_NAMES[a.excluded]}` : "counted",
+    ]),
+  );
+}
+
+function euRecordsSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string) {
+  // EU F-gas: no leak-rate threshold; the record is the refrigerant added and the leak checks.
+  additionsSection(doc, r, mass);
   heading(doc, "Leak checks");
   if (r.leakChecks.length === 0) para(doc, "No leak check recorded.");
   else
@@ -204,6 +273,25 @@ function euRecordsSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => 
         { title: "Note", share: 234 },
       ],
       r.leakChecks.map((c) => [day(c.checkedOn), c.leakFound ? "leak found" : "no leak found", c.by, c.note]),
+    );
+  ldsChecksSection(doc, r);
+}
+
+/** Checks of the leak detection system itself (EU, where one is mandatory: at least every 12 months, decision 0123). */
+function ldsChecksSection(doc: Doc, r: SystemRecordsView) {
+  if (!r.leakDetectionCheckOwed && r.leakDetectionChecks.length === 0) return;
+  heading(doc, "Checks of the leak detection system");
+  if (r.leakDetectionChecks.length === 0) para(doc, "No check of the leak detection system recorded.");
+  else
+    table(
+      doc,
+      [
+        { title: "Date", share: 62 },
+        { title: "Result", share: 80 },
+        { title: "Checked by", share: 110 },
+        { title: "Note", share: 234 },
+      ],
+      r.leakDetectionChecks.map((c) => [day(c.checkedOn), c.working ? "working" : "fault found", c.by, c.note]),
     );
 }
 
@@ -218,16 +306,23 @@ function chronicSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => st
       { title: "Of full charge", share: 64, align: "right" },
       { title: "Chronic leaker", share: 290 },
     ],
-    r.chronic.map((y) => [
-      String(y.year),
-      mass(y.addedKg),
-      `${y.percent.toFixed(1)} %`,
-      y.chronic
-        ? y.filed
-          ? `yes; report filed on ${day(y.filed.on)} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}`
-          : `yes; report due ${day(y.reportDue)}`
-        : "no",
-    ]),
+    r.chronic.map((y) =>
+      // A year no leak-repair part reached is listed so the totals add up, and not judged (decision 0127).
+      y.noPart !== null
+        ? [String(y.year), mass(y.notCountedKg), "—", `not counted: no leak-repair part applied (${y.noPart})`]
+        : [
+            String(y.year),
+            mass(y.addedKg),
+            `${y.percent.toFixed(1)} %`,
+            `${
+              y.chronic
+                ? y.filed
+                  ? `yes; report filed on ${day(y.filed.on)} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}`
+                  : `yes; report due ${day(y.reportDue)}`
+                : "no"
+            }${y.notCountedKg > 0 ? `; ${mass(y.notCountedKg)} more added while no part applied, not counted` : ""}`,
+          ],
+    ),
   );
   if (r.chronicRule)
     para(
@@ -306,6 +401,24 @@ function dueSection(doc: Doc, r: SystemRecordsView, cite: Cite) {
   );
 }
 
+function auditSection(doc: Doc, r: SystemRecordsView) {
+  if (!r.audit.length) return;
+  // Oldest first, as an auditor reads a trail; moments on the store's clock (docs/decisions/0125).
+  heading(doc, "Audit trail");
+  table(
+    doc,
+    [
+      { title: "When (store time)", share: 110 },
+      { title: "By", share: 100 },
+      { title: "What", share: 276 },
+    ],
+    [...r.audit].reverse().map((a) => {
+      const e = readableAuditEntry(a, r.store.timeZone);
+      return [e.when, e.by, e.summary];
+    }),
+  );
+}
+
 function recordKeepingSection(doc: Doc, r: SystemRecordsView, cite: Cite) {
   heading(doc, "Record keeping and safety");
   para(
@@ -355,6 +468,8 @@ export function leakRateStatementPdf(
   r: SystemRecordsView,
   findingList: FindingDetail[],
   options: StatementOptions,
+  /** The system's dated revisions in effect order (GET /api/systems/:id/revisions). */
+  revisions: readonly RevisionRow[],
 ): Promise<Buffer> {
   const doc = reportDocument({
     size: options.paper === "a4" ? "A4" : "LETTER",
@@ -382,13 +497,17 @@ export function leakRateStatementPdf(
   );
 
   systemSection(doc, r, mass, cite, options.numberFormat ?? "1,234.5");
+  historySection(doc, r, revisions, mass);
   profileSection(doc, r, cite);
-  if (r.profile.leakRateRules) leakRateSection(doc, r, mass, cite);
-  else euRecordsSection(doc, r, mass);
+  if (r.profile.leakRateRules) {
+    additionsSection(doc, r, mass);
+    leakRateSection(doc, r, mass, cite);
+  } else euRecordsSection(doc, r, mass);
   chronicSection(doc, r, mass, cite);
   voidedSection(doc, r, mass);
   findingsSection(doc, findingList);
   dueSection(doc, r, cite);
+  auditSection(doc, r);
   recordKeepingSection(doc, r, cite);
   footers(doc, r, generated);
   doc.end();

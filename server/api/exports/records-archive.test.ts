@@ -68,12 +68,15 @@ async function recordsFor(f: CompanyFixture) {
   await owner.post(`/api/sweeps/${f.main.sweep}/submit`, {});
   const { readings: listed } = (await owner.get("/api/compliance/readings")).body;
   expect((await owner.post("/api/compliance/readings/accept", { text: listed[0].text })).status).toBe(200);
-  // The other store's system has a record, so removing it retires it: its records stay in the archive.
+  // The other store's system has a record, so it is retired, not deleted: its records stay in the archive.
   await technician.post(`/api/systems/${f.other.system}/charge-additions`, {
     amount: { value: 2, unit: "kg" },
     reason: "Top-up",
   });
-  const removed = await owner.delete(`/api/systems/${f.other.system}`);
+  const removed = await owner.post(`/api/systems/${f.other.system}/retire`, {
+    retiredOn: storeToday(),
+    reasonKind: "store-closed",
+  });
   expect(removed.body.outcome).toBe("retired");
 }
 
@@ -104,7 +107,7 @@ describe("the owner's record archive", () => {
     const sysCsv = csvRows(files, "systems.csv");
     expect(sysCsv.map((r) => r.id).sort()).toEqual(sysRows.map((r) => r.id).sort());
     const retired = sysCsv.find((r) => r.id === a.other.system)!;
-    expect(retired.retired_at).toBe(sysRows.find((r) => r.id === a.other.system)!.retiredAt!.toISOString());
+    expect(retired.retired_at_utc).toBe(sysRows.find((r) => r.id === a.other.system)!.retiredAt!.toISOString());
     const revs = await t.ctx.db.select().from(systemRevisions).where(eq(systemRevisions.companyId, co));
     const revCsv = csvRows(files, "system-revisions.csv");
     expect(revCsv.map((r) => r.id).sort()).toEqual(revs.map((r) => r.id).sort());
@@ -161,7 +164,7 @@ describe("the owner's record archive", () => {
     ).toEqual(sw.map((r) => r.id).sort());
     const rd = await t.ctx.db.select().from(readings).where(eq(readings.sweepId, a.main.sweep));
     const rdCsv = csvRows(files, "readings.csv").filter((r) => r.sweep_id === a.main.sweep);
-    expect(rdCsv.map((r) => [r.id, Number(r.ppm), r.taken_at])).toEqual(
+    expect(rdCsv.map((r) => [r.id, Number(r.ppm), r.taken_at_utc])).toEqual(
       rd.map((r) => [r.id, r.ppm, r.takenAt.toISOString()]),
     );
 

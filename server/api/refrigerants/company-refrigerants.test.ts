@@ -7,6 +7,7 @@ import { seedCompany } from "../../../tests/helpers/fixtures";
 import { pdfText } from "../../../tests/helpers/pdf-text";
 import type { Role } from "#core/domain/roles";
 import { archiveTables } from "../exports/archive-tables";
+import { US_FEDERAL_PROFILE } from "#core/domain/compliance/us-federal-profile";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;
@@ -233,7 +234,7 @@ describe("a company's own refrigerants (docs/decisions/0073)", () => {
     expect(actions).toEqual(expect.arrayContaining(["refrigerant-retired", "refrigerant-deleted"]));
 
     // The owner's archive lists it beside the systems that name it.
-    const tables = await archiveTables(t.ctx, co.company.id);
+    const tables = await archiveTables(t.ctx, co.company.id, US_FEDERAL_PROFILE);
     const own = tables.find((x) => x.file === "company-refrigerants.csv")!;
     expect(own.rows.map((r) => (r as { name: string }).name)).toEqual(["Imported HFC mix"]);
   });

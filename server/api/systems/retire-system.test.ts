@@ -27,6 +27,7 @@ async function newSystem(name: string) {
     fullCharge: lb(200),
     applianceType: "commercial-refrigeration",
     automaticLeakDetection: false,
+    inServiceOn: "2026-01-01",
   });
   expect(res.status).toBe(201);
   return res.body.id as string;
@@ -41,8 +42,8 @@ const settings = (ruleProfile: string) => ({
   detectorCheckIntervalDays: 30,
 });
 
-describe("no record is ever lost (docs/decisions/0040-no-record-is-lost.md)", () => {
-  it("retires a system with records when a lead tech deletes it, and keeps every record readable", async () => {
+describe("no record is ever lost (docs/decisions/0040-no-record-is-lost.md, 0124)", () => {
+  it("refuses to delete a system with records, retires it with its day and reason, and keeps every record readable", async () => {
     const id = await newSystem("Rack C (low temp)");
     const tech = await signedIn("technician");
     const add = await tech.post(`/api/systems/${id}/charge-additions`, {
@@ -56,20 +57,37 @@ describe("no record is ever lost (docs/decisions/0040-no-record-is-lost.md)", ()
     ).toBe(201);
 
     const lead = await signedIn("lead-tech");
+    const listed = await lead.get(`/api/stores/${co.store.id}/systems`);
+    expect(listed.body.systems.find((s: { id: string }) => s.id === id).hasRecords).toBe(true);
     const del = await lead.delete(`/api/systems/${id}`);
-    expect(del.status).toBe(200);
-    expect(del.body.outcome).toBe("retired");
-    expect(del.body.system.retired).toMatchObject({ reason: "" });
+    expect(del.status).toBe(409);
+    expect(del.body.error.message).toMatch(/has records, so it cannot be deleted: retire it/);
 
-    // Records are kept 3 years under US federal rules (docs/reference/standards.md §1, [S:R6,R7]).
+    const retire = await lead.post(`/api/systems/${id}/retire`, {
+      retiredOn: "2026-04-30",
+      reasonKind: "replaced",
+      reason: "by the new CO2 booster",
+    });
+    expect(retire.status, JSON.stringify(retire.body)).toBe(200);
+    expect(retire.body.system.retired).toMatchObject({
+      on: "2026-04-30",
+      reasonKind: "replaced",
+      reason: "by the new CO2 booster",
+    });
+
+    // Records are kept 3 years under US federal rules (docs/reference/standards.md §1, [S:R6,R7]), from the day it left service.
     const rec = await (await signedIn("engineer")).get(`/api/systems/${id}/records`);
     expect(rec.status).toBe(200);
     expect(rec.body.additions.map((a: { amountKg: number }) => a.amountKg)).toEqual([12 * 0.45359237]);
     expect(rec.body.leakChecks).toHaveLength(1);
     expect(rec.body.leakRates).toHaveLength(1);
-    expect(rec.body.audit.map((a: { action: string }) => a.action)).toEqual(["system-retired"]);
-    const retiredOn = localDateOf(new Date(rec.body.system.retired.at), co.store.timeZone);
-    expect(rec.body.retention).toMatchObject({ years: 3, keptUntil: addMonths(retiredOn, 36) });
+    expect(rec.body.audit.map((a: { action: string; summary: string }) => [a.action, a.summary])).toEqual([
+      [
+        "system-retired",
+        "Rack C (low temp) retired: left service on 2026-04-30; Replaced by another system (by the new CO2 booster); its records are kept",
+      ],
+    ]);
+    expect(rec.body.retention).toMatchObject({ years: 3, keptUntil: "2029-04-30" });
     // A retired system owes no repair, test or inspection.
     expect(rec.body.due).toEqual([]);
 
@@ -88,29 +106,81 @@ describe("no record is ever lost (docs/decisions/0040-no-record-is-lost.md)", ()
       reason: "late",
     });
     expect(late.status).toBe(409);
-    expect(late.body.error.message).toMatch(/was retired on/);
+    expect(late.body.error.message).toMatch(/was retired on 2026-04-30/);
     expect((await lead.delete(`/api/systems/${id}`)).status).toBe(409);
+    expect(
+      (await lead.post(`/api/systems/${id}/retire`, { retiredOn: "2026-05-01", reasonKind: "removed" })).status,
+    ).toBe(409);
   });
 
   it("deletes a system that has no record at all", async () => {
     const id = await newSystem("Spare condensing unit");
     const lead = await signedIn("lead-tech");
+    const listed = await lead.get(`/api/stores/${co.store.id}/systems`);
+    expect(listed.body.systems.find((s: { id: string }) => s.id === id).hasRecords).toBe(false);
     const del = await lead.delete(`/api/systems/${id}`);
     expect(del.status).toBe(200);
     expect(del.body).toEqual({ outcome: "deleted", system: null });
     expect((await lead.get(`/api/systems/${id}`)).status).toBe(404);
   });
 
-  it("retires on purpose with a reason, even without records; technicians may not", async () => {
+  it("asks the day and the reason, and names the field of each mistake; technicians may not retire", async () => {
     const id = await newSystem("Rack D");
-    expect((await (await signedIn("technician")).post(`/api/systems/${id}/retire`, { reason: "x" })).status).toBe(403);
-    const res = await (await signedIn("lead-tech")).post(`/api/systems/${id}/retire`, {
-      reason: "Replaced by a CO2 booster rack",
+    const lead = await signedIn("lead-tech");
+    await (await signedIn("technician")).post(`/api/systems/${id}/charge-additions`, {
+      addedOn: "2026-03-10",
+      amount: lb(3),
+      reason: "Top-up",
     });
-    expect(res.status).toBe(200);
-    expect(res.body).toMatchObject({
+    expect(
+      (
+        await (
+          await signedIn("technician")
+        ).post(`/api/systems/${id}/retire`, {
+          retiredOn: "2026-03-10",
+          reasonKind: "removed",
+        })
+      ).status,
+    ).toBe(403);
+    const refused = async (body: object) => {
+      const res = await lead.post(`/api/systems/${id}/retire`, body);
+      expect(res.status, JSON.stringify(res.body)).toBe(400);
+      return res.body.error.fields as Record<string, string>;
+    };
+    expect(await refused({ reasonKind: "removed" })).toHaveProperty("retiredOn");
+    expect(await refused({ retiredOn: "2026-03-10" })).toHaveProperty("reasonKind");
+    expect(await refused({ retiredOn: "2026-03-10", reasonKind: "sold" })).toHaveProperty("reasonKind");
+    expect((await refused({ retiredOn: "2026-03-10", reasonKind: "other" })).reason).toBe(
+      "say why the system left service",
+    );
+    const today = localDateOf(new Date(), co.store.timeZone);
+    const future = addMonths(today, 1);
+    expect((await refused({ retiredOn: future, reasonKind: "removed" })).retiredOn).toMatch(/must not be after today/);
+    // In service since the day it was entered (today): a day before it is refused…
+    const [row] = await t.ctx.db.select().from(systems).where(eq(systems.id, id));
+    await t.ctx.db.update(systems).set({ inServiceOn: "2026-01-15" }).where(eq(systems.id, id));
+    expect((await refused({ retiredOn: "2026-01-14", reasonKind: "removed" })).retiredOn).toBe(
+      "must not be before the day it entered service (15 Jan 2026)",
+    );
+    // …and so is a day before its last record, which would leave a record after the retirement.
+    expect((await refused({ retiredOn: "2026-03-09", reasonKind: "removed" })).retiredOn).toBe(
+      "must not be before 10 Mar 2026, when refrigerant was added",
+    );
+    expect(row.retiredAt).toBeNull();
+    // Nothing was changed by the refusals: still in service, no audit row.
+    const rec = await lead.get(`/api/systems/${id}/records`);
+    expect(rec.body.system.retired).toBeNull();
+    expect(rec.body.audit).toEqual([]);
+
+    const ok = await lead.post(`/api/systems/${id}/retire`, {
+      retiredOn: "2026-03-10",
+      reasonKind: "other",
+      reason: "Unit stolen from the yard",
+    });
+    expect(ok.status).toBe(200);
+    expect(ok.body).toMatchObject({
       outcome: "retired",
-      system: { retired: { reason: "Replaced by a CO2 booster rack" } },
+      system: { retired: { on: "2026-03-10", reasonKind: "other", reason: "Unit stolen from the yard" } },
     });
   });
 
@@ -130,10 +200,12 @@ describe("no record is ever lost (docs/decisions/0040-no-record-is-lost.md)", ()
       checkedOn: "2026-06-01",
       leakFound: false,
     });
-    expect((await owner.delete(`/api/systems/${id}`)).body.outcome).toBe("retired");
+    const retiredOn = localDateOf(new Date(), co.store.timeZone);
+    expect(
+      (await owner.post(`/api/systems/${id}/retire`, { retiredOn, reasonKind: "store-closed" })).body.outcome,
+    ).toBe("retired");
     const rec = await owner.get(`/api/systems/${id}/records`);
     expect(rec.body.retention.years).toBe(5);
-    const retiredOn = localDateOf(new Date(rec.body.system.retired.at), co.store.timeZone);
     expect(rec.body.retention.keptUntil).toBe(addMonths(retiredOn, 60));
     expect((await owner.put("/api/company/settings", settings("us-federal"))).status).toBe(200);
   });

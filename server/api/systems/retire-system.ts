@@ -1,8 +1,20 @@
-import { eq } from "drizzle-orm";
+import { and, desc, eq, isNull } from "drizzle-orm";
 import type { AppContext } from "../../context";
-import type { SystemRemoval } from "#core/contracts/systems";
-import { complianceAudit, systemRevisions, systems } from "../../db/schema/index";
+import { RETIRE_REASON_NAMES, type RetireInput, type SystemRemoval } from "#core/contracts/systems";
+import { compareDates } from "#core/domain/dates/calendar-date";
+import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
+import {
+  chargeAdditions,
+  complianceAudit,
+  leakChecks,
+  leakDetectionChecks,
+  stores,
+  systemRevisions,
+  systems,
+} from "../../db/schema/index";
 import type { Viewer } from "../../access/store-access";
+import { badRequest, conflict, HttpError } from "../../lib/http-error";
+import { eventDay } from "../findings/findings.service";
 import { hasRecords } from "./system-has-records";
 import { companyGwpBases, loadSystem, refuseRetired, toSystem } from "./systems.service";
 
@@ -13,49 +25,119 @@ function isForeignKeyViolation(e: unknown): boolean {
   return cause.code === FOREIGN_KEY_VIOLATION || cause.cause?.code === FOREIGN_KEY_VIOLATION;
 }
 
+const mustRetire = (name: string) =>
+  new HttpError(
+    409,
+    "records_exist",
+    `${name} has records, so it cannot be deleted: retire it instead ("Retire system…"), with the day it left service and the reason.`,
+  );
+
 /**
- * Removing a system (or retiring it on purpose, `alwaysRetire`): one without any record is deleted (fixtures linked to it lose the link); one
- * with records is retired instead, with an audit row, so every record and its audit trail stay for
- * the rule profile's retention period (docs/decisions/0040-no-record-is-lost.md). The records'
- * foreign keys restrict deletes, so a record written between the check and the delete also ends in
- * a retirement rather than a lost record.
+ * Deletes a system that no record names (fixtures linked to it lose the link). One with records is
+ * never deleted: the answer is 409 and the client offers "Retire system…", which asks the day and
+ * the reason (docs/decisions/0040-no-record-is-lost.md, 0124). The records' foreign keys restrict
+ * deletes, so a record written between the check and the delete also ends in that 409.
  */
-export async function removeSystem(
+export async function deleteSystem(ctx: AppContext, viewer: Viewer, systemId: string): Promise<SystemRemoval> {
+  const row = await loadSystem(ctx, viewer, systemId);
+  refuseRetired(row);
+  if (await hasRecords(ctx, systemId)) throw mustRetire(row.name);
+  try {
+    await ctx.db.transaction(async (tx) => {
+      await tx.delete(systemRevisions).where(eq(systemRevisions.systemId, systemId));
+      await tx.delete(systems).where(eq(systems.id, systemId));
+    });
+  } catch (e) {
+    if (isForeignKeyViolation(e)) throw mustRetire(row.name);
+    throw e;
+  }
+  return { outcome: "deleted", system: null };
+}
+
+/** The latest day any dated record of the system names: a retirement before it would leave a record after it. */
+async function lastRecordDay(ctx: AppContext, systemId: string): Promise<{ on: string; what: string } | null> {
+  const [add, check, lds] = await Promise.all([
+    ctx.db
+      .select({ on: chargeAdditions.addedOn })
+      .from(chargeAdditions)
+      .where(and(eq(chargeAdditions.systemId, systemId), isNull(chargeAdditions.voidedAt)))
+      .orderBy(desc(chargeAdditions.addedOn))
+      .limit(1),
+    ctx.db
+      .select({ on: leakChecks.checkedOn })
+      .from(leakChecks)
+      .where(eq(leakChecks.systemId, systemId))
+      .orderBy(desc(leakChecks.checkedOn))
+      .limit(1),
+    ctx.db
+      .select({ on: leakDetectionChecks.checkedOn })
+      .from(leakDetectionChecks)
+      .where(eq(leakDetectionChecks.systemId, systemId))
+      .orderBy(desc(leakDetectionChecks.checkedOn))
+      .limit(1),
+  ]);
+  const found = [
+    ...add.map((r) => ({ on: r.on, what: "refrigerant was added" })),
+    ...check.map((r) => ({ on: r.on, what: "a leak check was recorded" })),
+    ...lds.map((r) => ({ on: r.on, what: "its leak detection system was checked" })),
+  ].sort((a, b) => compareDates(b.on, a.on));
+  return found[0] ?? null;
+}
+
+/**
+ * Retires a system on the day it left service, with the reason, and an audit row in the same
+ * transaction; every record stays for the profile's retention period from that day. The day is on
+ * the store's calendar: not after today, not before the in-service day, not before its last record.
+ */
+export async function retireSystem(
   ctx: AppContext,
   viewer: Viewer,
   userId: string,
   systemId: string,
-  how: { reason: string; alwaysRetire: boolean },
+  input: RetireInput,
 ): Promise<SystemRemoval> {
-  const { reason } = how;
   const row = await loadSystem(ctx, viewer, systemId);
   refuseRetired(row);
-  if (!how.alwaysRetire && !(await hasRecords(ctx, systemId))) {
-    try {
-      await ctx.db.transaction(async (tx) => {
-        await tx.delete(systemRevisions).where(eq(systemRevisions.systemId, systemId));
-        await tx.delete(systems).where(eq(systems.id, systemId));
-      });
-      return { outcome: "deleted", system: null };
-    } catch (e) {
-      if (!isForeignKeyViolation(e)) throw e;
-    }
-  }
+  const [store] = await ctx.db.select().from(stores).where(eq(stores.id, row.storeId));
+  const retiredOn = eventDay(input.retiredOn, store, "retiredOn");
+  const inService = row.inServiceOn ?? row.createdAt.toISOString().slice(0, 10);
+  if (compareDates(retiredOn, inService) < 0)
+    throw badRequest(`Please check: retiredOn ${retiredOn} is before the system entered service (${inService}).`, {
+      retiredOn: `must not be before the day it entered service (${formatCalendarDay(inService)})`,
+    });
+  const last = await lastRecordDay(ctx, systemId);
+  if (last && compareDates(retiredOn, last.on) < 0)
+    throw badRequest(`Please check: retiredOn ${retiredOn} is before the system's last record (${last.on}).`, {
+      retiredOn: `must not be before ${formatCalendarDay(last.on)}, when ${last.what}`,
+    });
   const retired = await ctx.db.transaction(async (tx) => {
     const at = new Date();
     const [r] = await tx
       .update(systems)
-      .set({ retiredAt: at, retiredById: userId, retireReason: reason, updatedAt: at })
-      .where(eq(systems.id, systemId))
+      .set({
+        retiredAt: at,
+        retiredOn,
+        retiredById: userId,
+        retireReasonKind: input.reasonKind,
+        retireReason: input.reason,
+        updatedAt: at,
+      })
+      .where(and(eq(systems.id, systemId), isNull(systems.retiredAt)))
       .returning();
+    if (!r) throw conflict(`${row.name} was retired meanwhile; its records are kept as they are.`);
+    const why = input.reasonKind === "other" ? input.reason : RETIRE_REASON_NAMES[input.reasonKind];
+    const note = input.reasonKind !== "other" && input.reason ? ` (${input.reason})` : "";
     await tx.insert(complianceAudit).values({
       companyId: viewer.companyId,
       systemId,
       action: "system-retired",
       byId: userId,
-      summary: `${r.name} retired${reason ? `: ${reason}` : ""}; its records are kept`,
+      summary: `${r.name} retired: left service on ${retiredOn}; ${why}${note}; its records are kept`,
     });
     return r;
   });
-  return { outcome: "retired", system: toSystem(retired, await companyGwpBases(ctx, viewer.companyId)) };
+  return {
+    outcome: "retired",
+    system: toSystem(retired, await companyGwpBases(ctx, viewer.companyId), true, store.timeZone),
+  };
 }

@@ -139,7 +139,7 @@ export async function addRevision(
     });
     return s;
   });
-  return toSystem(updated, choice);
+  return toSystem(updated, choice, true);
 }
 
 function describeChange(before: Facts, after: Facts, named: (id: string) => string): string {

@@ -6,7 +6,7 @@ import { REFRIGERANTS } from "#core/domain/refrigerants/catalogue";
 import { member, requireMember } from "../../middleware/auth";
 import { validate } from "../../middleware/validate";
 import { refrigerantCautions, summarizeRefrigerant } from "#core/domain/refrigerants/refrigerant-summary";
-import { removeSystem } from "./retire-system";
+import { deleteSystem, retireSystem } from "./retire-system";
 import { companyRefrigerantsOf } from "../refrigerants/company-refrigerant-lookup";
 import { addRevision, listRevisions } from "./system-revisions.service";
 import { companyGwpBases, createSystem, getSystem, listSystems, updateSystem } from "./systems.service";
@@ -70,14 +70,9 @@ export function systemsRouter(ctx: AppContext): Router {
     },
   );
 
-  // A system with records is retired, never deleted: the answer says which happened.
+  // Only a system no record names is deleted; one with records answers 409 and is retired instead.
   router.delete("/systems/:id", requireMember("stores.edit"), validate(idParam, "params"), async (req, res) => {
-    res.json(
-      await removeSystem(ctx, member(req), req.auth!.user.id, res.locals.params.id, {
-        reason: "",
-        alwaysRetire: false,
-      }),
-    );
+    res.json(await deleteSystem(ctx, member(req), res.locals.params.id));
   });
 
   router.post(
@@ -86,12 +81,7 @@ export function systemsRouter(ctx: AppContext): Router {
     validate(idParam, "params"),
     validate(retireInput),
     async (req, res) => {
-      res.json(
-        await removeSystem(ctx, member(req), req.auth!.user.id, res.locals.params.id, {
-          reason: req.body.reason,
-          alwaysRetire: true,
-        }),
-      );
+      res.json(await retireSystem(ctx, member(req), req.auth!.user.id, res.locals.params.id, req.body));
     },
   );
 

@@ -1,8 +1,8 @@
 import { and, asc, eq, isNull } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import type { ChargeInput, System, SystemInput, SystemUpdateInput } from "#core/contracts/systems";
-import { systemRevisions, systems } from "../../db/schema/index";
-import { companyRules } from "../compliance/system-records";
+import { complianceAudit, systemRevisions, systems } from "../../db/schema/index";
+import { companyRules, type CompanyRules } from "../compliance/system-records";
 import type { Refrigerant } from "#core/domain/refrigerants/types";
 import { KG_PER_POUND } from "#core/domain/units/mass";
 import { badRequest, conflict, HttpError, notFound } from "../../lib/http-error";
@@ -16,7 +16,8 @@ import {
   type GwpChoice,
 } from "#core/domain/refrigerants/refrigerant-summary";
 import { eventDay } from "../findings/findings.service";
-import { hasRecords } from "./system-has-records";
+import { localDateOf } from "#core/domain/dates/time-zone";
+import { hasRecords, systemsWithRecords } from "./system-has-records";
 import {
   holdRefrigerant,
   lookupFor,
@@ -53,8 +54,9 @@ export function knownRefrigerant(id: string, lookup: RefrigerantLookup): Refrige
 }
 
 /** The GWP bases of the profile the company works under (its own, for a custom profile), with its stated basis. */
-export async function companyGwpBases(ctx: AppContext, companyId: string): Promise<Bases> {
-  const [{ profile }, lookup] = await Promise.all([companyRules(ctx, companyId), lookupFor(ctx, companyId)]);
+/** `rules`: the company's rules when the caller has read them already (no second read of the company row). */
+export async function companyGwpBases(ctx: AppContext, companyId: string, rules?: CompanyRules): Promise<Bases> {
+  const [{ profile }, lookup] = await Promise.all([rules ?? companyRules(ctx, companyId), lookupFor(ctx, companyId)]);
   return {
     bases: profile.gwpBases.value,
     statement: gwpBasisStatement(profile),
@@ -63,7 +65,8 @@ export async function companyGwpBases(ctx: AppContext, companyId: string): Promi
   };
 }
 
-export function toSystem(row: SystemRow, bases: Bases): System {
+/** A system as the API shows it; `hasRecords` says whether it can still be deleted or only retired. */
+export function toSystem(row: SystemRow, bases: Bases, hasRecords: boolean, storeTimeZone = "UTC"): System {
   // Rows only hold ids checked on write; a missing one is a regression, not bad input.
   const r = resolveStored(bases.lookup, row.refrigerantId);
   return {
@@ -74,8 +77,18 @@ export function toSystem(row: SystemRow, bases: Bases): System {
     fullChargeKg: row.fullChargeKg,
     applianceType: row.applianceType,
     automaticLeakDetection: row.automaticLeakDetection,
+    hermeticallySealed: row.hermeticallySealed,
     inServiceOn: row.inServiceOn ?? row.createdAt.toISOString().slice(0, 10),
-    retired: row.retiredAt ? { at: row.retiredAt.toISOString(), reason: row.retireReason ?? "" } : null,
+    retired: row.retiredAt
+      ? {
+          at: row.retiredAt.toISOString(),
+          // Rows retired before the day was asked: the store's day it was recorded.
+          on: row.retiredOn ?? localDateOf(row.retiredAt, storeTimeZone),
+          reasonKind: row.retireReasonKind,
+          reason: row.retireReason ?? "",
+        }
+      : null,
+    hasRecords,
     refrigerant: summarizeRefrigerant(r, bases),
     cautions: refrigerantCautions(r, bases.rules),
     createdAt: row.createdAt.toISOString(),
@@ -90,14 +103,18 @@ export async function listSystems(
   storeId: string,
   includeRetired = false,
 ): Promise<System[]> {
-  await loadVisibleStore(ctx, viewer, storeId);
+  const store = await loadVisibleStore(ctx, viewer, storeId);
   const bases = await companyGwpBases(ctx, viewer.companyId);
   const rows = await ctx.db
     .select()
     .from(systems)
     .where(and(eq(systems.storeId, storeId), includeRetired ? undefined : isNull(systems.retiredAt)))
     .orderBy(asc(systems.name), asc(systems.id));
-  return rows.map((r) => toSystem(r, bases));
+  const withRecords = await systemsWithRecords(
+    ctx,
+    rows.map((r) => r.id),
+  );
+  return rows.map((r) => toSystem(r, bases, withRecords.has(r.id), store.timeZone));
 }
 
 export async function loadSystem(ctx: AppContext, viewer: Viewer, systemId: string): Promise<SystemRow> {
@@ -117,7 +134,11 @@ export async function loadSystem(ctx: AppContext, viewer: Viewer, systemId: stri
 }
 
 export async function getSystem(ctx: AppContext, viewer: Viewer, systemId: string): Promise<System> {
-  return toSystem(await loadSystem(ctx, viewer, systemId), await companyGwpBases(ctx, viewer.companyId));
+  return toSystem(
+    await loadSystem(ctx, viewer, systemId),
+    await companyGwpBases(ctx, viewer.companyId),
+    await hasRecords(ctx, systemId),
+  );
 }
 
 export async function createSystem(
@@ -137,12 +158,13 @@ export async function createSystem(
     automaticLeakDetection: input.automaticLeakDetection,
     inServiceOn: eventDay(input.inServiceOn, store, "inServiceOn"),
   };
+  const hermeticallySealed = input.hermeticallySealed ?? false;
   // The system and its first revision together: history has a starting point from day one.
   const row = await ctx.db.transaction(async (tx) => {
     await holdRefrigerant(tx, viewer.companyId, facts.refrigerantId);
     const [created] = await tx
       .insert(systems)
-      .values({ companyId: viewer.companyId, storeId, name: input.name, ...facts })
+      .values({ companyId: viewer.companyId, storeId, name: input.name, hermeticallySealed, ...facts })
       .returning();
     await tx.insert(systemRevisions).values({
       companyId: viewer.companyId,
@@ -155,7 +177,7 @@ export async function createSystem(
     });
     return created;
   });
-  return toSystem(row, choice);
+  return toSystem(row, choice, false);
 }
 
 /**
@@ -173,7 +195,7 @@ export async function updateSystem(
 ): Promise<System> {
   const current = await loadSystem(ctx, viewer, systemId);
   refuseRetired(current);
-  const { name, fullCharge, refrigerantId, ...rest } = input;
+  const { name, fullCharge, refrigerantId, hermeticallySealed, ...rest } = input;
   const choice = await companyGwpBases(ctx, viewer.companyId);
   const sameRefrigerant = refrigerantId === undefined || choice.lookup(refrigerantId)?.id === current.refrigerantId;
   const facts = {
@@ -184,7 +206,9 @@ export async function updateSystem(
     inServiceOn: rest.inServiceOn ?? current.inServiceOn ?? current.createdAt.toISOString().slice(0, 10),
   };
   const changed = (Object.keys(facts) as (keyof typeof facts)[]).filter((k) => facts[k] !== current[k]);
-  if (changed.length > 0 && (await hasRecords(ctx, systemId))) {
+  const withRecords = await hasRecords(ctx, systemId);
+  const sealedChanged = hermeticallySealed !== undefined && hermeticallySealed !== current.hermeticallySealed;
+  if (changed.length > 0 && withRecords) {
     throw new HttpError(
       409,
       "records_exist",
@@ -200,9 +224,23 @@ export async function updateSystem(
     if (changed.includes("refrigerantId")) await holdRefrigerant(tx, viewer.companyId, facts.refrigerantId);
     const [updated] = await tx
       .update(systems)
-      .set({ ...(name !== undefined ? { name } : {}), ...facts, updatedAt: new Date() })
+      .set({
+        ...(name !== undefined ? { name } : {}),
+        ...(sealedChanged ? { hermeticallySealed } : {}),
+        ...facts,
+        updatedAt: new Date(),
+      })
       .where(eq(systems.id, systemId))
       .returning();
+    // A property, not a dated fact (decision 0122): once records exist its change is on the audit trail.
+    if (sealedChanged && withRecords)
+      await tx.insert(complianceAudit).values({
+        companyId: viewer.companyId,
+        systemId,
+        action: "system-hermetic-changed",
+        byId: userId,
+        summary: `${updated.name} ${hermeticallySealed ? "marked" : "no longer marked"} hermetically sealed (factory-sealed, labelled as such)`,
+      });
     if (changed.length > 0)
       await tx.insert(systemRevisions).values({
         companyId: viewer.companyId,
@@ -215,13 +253,13 @@ export async function updateSystem(
       });
     return updated;
   });
-  return toSystem(row, choice);
+  return toSystem(row, choice, withRecords);
 }
 
 /** A retired system's facts are history: no edit and no new record changes them. */
-export function refuseRetired(row: { name: string; retiredAt: Date | null }): void {
+export function refuseRetired(row: { name: string; retiredAt: Date | null; retiredOn: string | null }): void {
   if (row.retiredAt)
     throw conflict(
-      `${row.name} was retired on ${row.retiredAt.toISOString().slice(0, 10)}; its records are kept as they are.`,
+      `${row.name} was retired on ${row.retiredOn ?? row.retiredAt.toISOString().slice(0, 10)}; its records are kept as they are.`,
     );
 }

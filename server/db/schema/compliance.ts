@@ -80,6 +80,34 @@ export const leakChecks = pgTable(
   (t) => [index("leak_checks_system").on(t.systemId)],
 );
 
+/**
+ * A check of the system's leak detection system itself (EU: at least every 12 months where one is
+ * mandatory, docs/reference/standards.md §2 [S:E2,E5]). A record of its own kind: never edited,
+ * kept like the leak checks, each one on the compliance audit trail.
+ */
+export const leakDetectionChecks = pgTable(
+  "leak_detection_checks",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    companyId: uuid()
+      .notNull()
+      .references(() => companies.id, { onDelete: "cascade" }),
+    // Records outlive nothing they belong to: a system with records is retired, never deleted.
+    systemId: uuid()
+      .notNull()
+      .references(() => systems.id, { onDelete: "restrict" }),
+    checkedOn: date({ mode: "string" }).notNull(),
+    /** The detection system worked as it should (alarm at its set point, sensors and wiring sound). */
+    working: boolean().notNull(),
+    note: text().notNull().default(""),
+    byId: uuid()
+      .notNull()
+      .references(() => users.id),
+    recordedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("leak_detection_checks_system").on(t.systemId)],
+);
+
 /** One row per company and local day a digest went out: the unique key is what stops a second send. */
 export const digestRuns = pgTable(
   "digest_runs",
@@ -151,6 +179,8 @@ export const chronicLeakerReports = pgTable(
 export const COMPLIANCE_AUDIT_ACTIONS = [
   "chronic-report-filed",
   "system-retired",
+  "leak-detection-checked",
+  "system-hermetic-changed",
   "system-revised",
   "reading-accepted",
   "reading-withdrawn",

@@ -4,6 +4,9 @@ import { users } from "./users";
 
 export const APPLIANCE_TYPE_VALUES = ["commercial-refrigeration", "industrial-process", "comfort-cooling"] as const;
 
+/** Why a system left service: the reason's kind; `other` carries its words in `retireReason`. */
+export const RETIRE_REASON_KINDS = ["replaced", "removed", "store-closed", "other"] as const;
+
 /**
  * A rack or condensing unit of a store. The charge is kept in kg whatever unit it was typed in. The
  * dated facts (charge, refrigerant, type, detection, in-service day) also live in `system_revisions`;
@@ -25,6 +28,12 @@ export const systems = pgTable(
     fullChargeKg: doublePrecision().notNull(),
     applianceType: text({ enum: APPLIANCE_TYPE_VALUES }).notNull(),
     automaticLeakDetection: boolean().notNull().default(false),
+    /**
+     * Factory-sealed equipment labelled as hermetically sealed: below the EU profile's limit it owes no
+     * periodic leak check. A property of the equipment, not a dated fact
+     * (docs/decisions/0122-hermetically-sealed-is-a-property.md).
+     */
+    hermeticallySealed: boolean().notNull().default(false),
     /** The day it entered service (store calendar); null on rows from before it was asked: the day it was entered. */
     inServiceOn: date({ mode: "string" }),
     /**
@@ -33,6 +42,10 @@ export const systems = pgTable(
      */
     retiredAt: timestamp({ withTimezone: true }),
     retiredById: uuid().references(() => users.id),
+    /** The day it left service (store calendar); null on rows retired before it was asked: the day of `retiredAt`. */
+    retiredOn: date({ mode: "string" }),
+    retireReasonKind: text({ enum: RETIRE_REASON_KINDS }),
+    /** The reason's words: required for `other`, a note otherwise. */
     retireReason: text(),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),

@@ -7,6 +7,7 @@ import { SystemsSection } from "../../features/systems/components/systems-sectio
 import { StoreSweepsSection } from "../../features/fieldmap/components/store-sweeps-section";
 import { StoreRecordsSection } from "../../features/compliance/components/store-records-section";
 import type { UnitPreferences } from "../shell/use-unit-preferences";
+import { useSignedIn } from "../shell/session-context";
 
 /** What every section of the store page is given; each feature reads the rest itself. */
 export interface StoreSectionProps {
@@ -33,15 +34,19 @@ export const STORE_SECTIONS: readonly { id: string; Component: ComponentType<Sto
   },
   {
     id: "systems",
-    Component: ({ store, role, units }) => (
-      <SystemsSection
-        storeId={store.id}
-        canEdit={can(role, "stores.edit") && !store.archivedAt}
-        canRevise={can(role, "compliance.manage") && !store.archivedAt}
-        massUnit={units.mass}
-        numberFormat={units.number}
-      />
-    ),
+    Component: function Systems({ store, role, units }) {
+      const { session } = useSignedIn();
+      return (
+        <SystemsSection
+          storeId={store.id}
+          canEdit={can(role, "stores.edit") && !store.archivedAt}
+          canRevise={can(role, "compliance.manage") && !store.archivedAt}
+          rules={session.rules}
+          massUnit={units.mass}
+          numberFormat={units.number}
+        />
+      );
+    },
   },
   {
     id: "sweeps",

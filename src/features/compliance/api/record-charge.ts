@@ -7,6 +7,7 @@ import {
   chargeVoidInput,
   chronicReportInput,
   leakCheckInput,
+  leakDetectionCheckInput,
   systemRecords,
 } from "#core/contracts/compliance";
 import { api } from "../../../lib/api-client";
@@ -18,6 +19,7 @@ type Action =
   | { kind: "correct"; additionId: string; input: z.input<typeof chargeCorrectionInput> }
   | { kind: "void"; additionId: string; input: z.input<typeof chargeVoidInput> }
   | { kind: "leak-check"; systemId: string; input: z.input<typeof leakCheckInput> }
+  | { kind: "leak-detection-check"; systemId: string; input: z.input<typeof leakDetectionCheckInput> }
   | { kind: "chronic-report"; systemId: string; input: z.input<typeof chronicReportInput> };
 
 /** Every change to a system's records answers with the fresh records (the leak rate moves at once). */
@@ -34,6 +36,8 @@ export async function recordCharge(action: Action) {
       return api.post(`/api/charge-additions/${action.additionId}/void`, systemRecords, action.input);
     case "leak-check":
       return api.post(`/api/systems/${action.systemId}/leak-checks`, systemRecords, action.input);
+    case "leak-detection-check":
+      return api.post(`/api/systems/${action.systemId}/leak-detection-checks`, systemRecords, action.input);
     case "chronic-report":
       return api.post(`/api/systems/${action.systemId}/chronic-reports`, systemRecords, action.input);
   }

@@ -8,8 +8,7 @@ import { useRecordCharge } from "../api/record-charge";
 import type { NumberFormat } from "#core/domain/numbers/number-format";
 import { amountHint, readAmount } from "../model/amount-entry";
 import type { MassUnit } from "../model/figures";
-import { EXCLUSION_NAMES } from "../model/exclusions";
-import { EXCLUSIONS } from "#core/contracts/compliance";
+import { EXCLUSION_NAMES, EXCLUSIONS } from "#core/contracts/compliance";
 
 /**
  * Record refrigerant put into a system; or, with `corrects`, a correction that voids that entry.

@@ -6,6 +6,7 @@ import { Button } from "../../../components/ui/button";
 import { TextField } from "../../../components/ui/text-field";
 import { formErrorMessage, serverFieldErrors } from "../../../lib/form-errors";
 import { useRecordCharge } from "../api/record-charge";
+import { AuditTrail } from "./audit-trail";
 import type { NumberFormat } from "#core/domain/numbers/number-format";
 import { formatMass, formatPercent, type MassUnit } from "../model/figures";
 
@@ -68,6 +69,13 @@ export function ChronicSection({
   canFile: boolean;
 }) {
   if (r.chronic.length === 0 && r.audit.length === 0) return null;
+  // No years to list (no leak-repair part in the profile, or nothing added): the audit trail alone.
+  if (r.chronic.length === 0)
+    return (
+      <section aria-label="Audit trail" className="space-y-2">
+        <AuditTrail r={r} />
+      </section>
+    );
   const fileable = (y: Year) => y.chronic && !y.filed && Number(r.today.slice(0, 4)) > y.year;
   return (
     <section aria-labelledby="chronic" className="space-y-2">
@@ -77,8 +85,21 @@ export function ChronicSection({
       <ul className="space-y-2">
         {r.chronic.map((y) => (
           <li key={y.year} className={y.chronic && !y.filed ? "font-bold text-danger" : undefined}>
-            {y.year}: {formatMass(y.addedKg, unit, numberFormat)}, {formatPercent(y.percent, numberFormat)} of the full
-            charge
+            {y.noPart !== null ? (
+              // Listed so the totals add up with the charge-added trail, not judged (docs/decisions/0127).
+              <>
+                {y.year}: {formatMass(y.notCountedKg, unit, numberFormat)} added — not counted: no leak-repair part
+                applied to this system ({y.noPart})
+              </>
+            ) : (
+              <>
+                {y.year}: {formatMass(y.addedKg, unit, numberFormat)}, {formatPercent(y.percent, numberFormat)} of the
+                full charge
+                {y.notCountedKg > 0
+                  ? `; ${formatMass(y.notCountedKg, unit, numberFormat)} more added while no leak-repair part applied (not counted)`
+                  : ""}
+              </>
+            )}
             {y.chronic
               ? y.filed
                 ? ` — chronic leaker; report filed on ${formatCalendarDay(y.filed.on)} by ${y.filed.by}${y.filed.reference ? ` (reference ${y.filed.reference})` : ""}`
@@ -95,18 +116,7 @@ export function ChronicSection({
           ).
         </p>
       ) : null}
-      {r.audit.length ? (
-        <>
-          <h3 className="font-bold">Audit trail</h3>
-          <ul className="space-y-1 text-sm">
-            {r.audit.map((a) => (
-              <li key={`${a.at}-${a.summary}`}>
-                {a.at.slice(0, 16).replace("T", " ")} UTC, {a.by}: {a.summary}
-              </li>
-            ))}
-          </ul>
-        </>
-      ) : null}
+      <AuditTrail r={r} />
     </section>
   );
 }

@@ -2,7 +2,7 @@ import { useState } from "react";
 import { formatCalendarDay, formatInZone } from "#core/domain/dates/format-in-zone";
 import { statementTitle } from "#core/domain/compliance/company-profile";
 import { Link } from "react-router";
-import type { SystemRecordsView } from "#core/contracts/compliance";
+import { EXCLUSION_NAMES, type SystemRecordsView } from "#core/contracts/compliance";
 import { APPLIANCE_TYPE_NAMES } from "#core/contracts/systems";
 import { Button } from "../../../components/ui/button";
 import { Cautions } from "../../../components/ui/cautions";
@@ -13,11 +13,12 @@ import { useRecordCharge } from "../api/record-charge";
 import { formatGrouped, formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
 import { daysInWords, formatMass, formatPercent, STATE_LABELS, type MassUnit } from "../model/figures";
 import { ChargeForm } from "./charge-form";
-import { EXCLUSION_NAMES } from "../model/exclusions";
 import { ChronicSection } from "./chronic-section";
 import { SystemPlots } from "./system-plots";
 import { RevisionsSection } from "./revisions-section";
 import { LeakCheckForm } from "./leak-check-form";
+import { LeakDetectionChecks } from "./leak-detection-checks";
+import { retireReasonWords } from "#core/domain/compliance/retirement-words";
 import { readableSource } from "#core/domain/compliance/citations";
 import { Readable, SourceText } from "../../../components/ui/source-text";
 
@@ -132,6 +133,11 @@ export function SystemRecords({
             </span>
           ) : null}
         </Fact>
+        {eu || r.system.hermeticallySealed ? (
+          <Fact label="Hermetically sealed">
+            {r.system.hermeticallySealed ? "Yes: factory-sealed, labelled as such" : "No"}
+          </Fact>
+        ) : null}
       </dl>
       <div className="space-y-1 text-sm text-muted">
         <p>
@@ -154,8 +160,9 @@ export function SystemRecords({
         {r.system.retired ? (
           <p>
             <span className="font-bold text-ink">Retired: </span>
-            {formatInZone(r.system.retired.at, r.store.timeZone, "date")}
-            {r.system.retired.reason ? ` (${r.system.retired.reason})` : ""}. Its records stay as they are
+            left service on {formatCalendarDay(r.system.retired.on)}
+            {retireReasonWords(r.system.retired) ? ` (${retireReasonWords(r.system.retired)})` : ""}. Its records stay
+            as they are
             {r.retention.keptUntil ? ` and are kept at least until ${formatCalendarDay(r.retention.keptUntil)}` : ""}.
           </p>
         ) : null}
@@ -408,6 +415,8 @@ export function SystemRecords({
           </ul>
         )}
       </section>
+
+      <LeakDetectionChecks r={r} canRecord={canRecord && !retired} />
 
       <section aria-labelledby="exports" className="space-y-2">
         <h2 id="exports" className="text-xl font-bold">

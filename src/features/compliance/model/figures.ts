@@ -32,6 +32,7 @@ export const DUE_KIND_LABELS: Record<DueItem["kind"], string> = {
   "chronic-leaker-report": "Report",
   "detector-check": "Detector check",
   "automatic-leak-detection": "Leak detection",
+  "leak-detection-check": "Detection system check",
   "retrofit-or-retire-plan": "Retrofit-or-retire plan",
   "retrofit-or-retire": "Retrofit or retire",
 };

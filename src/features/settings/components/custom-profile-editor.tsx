@@ -350,6 +350,10 @@ export function CustomProfileEditor({ profile, editable }: { profile: Draft; edi
             path={["leakChecks", "recheckAfterRepairMonths"]}
             {...common}
           />
+          {/* Profiles copied before the field existed read it as 12 months and have none to edit (decision 0123). */}
+          {getAt(draft, ["leakChecks", "ldsCheckMonths"]) !== undefined ? (
+            <SourcedNumber {...F["leakChecks.ldsCheckMonths"]} path={["leakChecks", "ldsCheckMonths"]} {...common} />
+          ) : null}
         </Group>
       ) : null}
 

@@ -1,6 +1,7 @@
 import { Link } from "react-router";
 import type { System } from "#core/contracts/systems";
 import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
+import { retireReasonWords } from "#core/domain/compliance/retirement-words";
 
 /**
  * The store's retired systems, each a way back to its records: a retired system leaves the table
@@ -21,7 +22,7 @@ export function RetiredSystems({ systems }: { systems: readonly System[] }) {
               {s.name}
             </Link>
             {s.retired
-              ? ` — retired ${formatCalendarDay(s.retired.at.slice(0, 10))}${s.retired.reason ? ` (${s.retired.reason})` : ""}`
+              ? ` — left service ${formatCalendarDay(s.retired.on)}${retireReasonWords(s.retired) ? ` (${retireReasonWords(s.retired)})` : ""}`
               : ""}
           </li>
         ))}

@@ -112,8 +112,10 @@ const rack = {
   fullChargeKg: 1200 * 0.45359237,
   applianceType: "commercial-refrigeration" as const,
   automaticLeakDetection: false,
+  hermeticallySealed: false,
   inServiceOn: "2025-03-01",
   retired: null,
+  hasRecords: true,
   refrigerant: CATALOGUE.refrigerants.find((r) => r.id === "R-448A")!,
   cautions: [],
   createdAt: "2025-03-01T12:00:00.000Z",
@@ -223,5 +225,33 @@ describe("system form: editing a dated fact makes a revision", () => {
     await waitFor(() => expect(calls.some((c) => c.method === "PATCH")).toBe(true));
     expect(calls.find((c) => c.method === "PATCH")!.body).toEqual({ name: "Rack A (MT)" });
     expect(calls.some((c) => c.method === "POST")).toBe(false);
+  });
+});
+
+describe("system form: hermetically sealed (EU, docs/reference/standards.md §2 [S:E1]; decision 0122)", () => {
+  it("asks an EU company whether the unit is factory-sealed and labelled, says what that means, and sends it", async () => {
+    const calls = stubFetch({
+      "GET /api/refrigerants": { body: CATALOGUE },
+      [`POST /api/stores/${STORE_ID}/systems`]: apiError(400, "validation_failed", "Please check the fields.", {
+        name: "is taken",
+      }),
+    });
+    renderOnRoute(<SystemForm storeId={STORE_ID} massUnit="kg" rules="eu" onDone={() => {}} onCancel={() => {}} />);
+    const sealed = screen.getByLabelText("Hermetically sealed (factory-sealed, labelled as such)");
+    expect(screen.getByText(/carries a label saying it is hermetically sealed/)).toBeVisible();
+    fireEvent.change(screen.getByLabelText("System name"), { target: { value: "Bottle cooler" } });
+    await waitFor(() => expect(screen.getAllByRole("option").length).toBeGreaterThan(10));
+    fireEvent.change(screen.getByLabelText("Refrigerant"), { target: { value: "R-404A" } });
+    fireEvent.change(screen.getByLabelText("Full charge"), { target: { value: "1.9" } });
+    fireEvent.click(sealed);
+    fireEvent.click(screen.getByRole("button", { name: "Add system" }));
+    await screen.findByText("System name is taken.");
+    expect(calls.find((c) => c.method === "POST")!.body).toMatchObject({ hermeticallySealed: true });
+  });
+
+  it("does not ask a US company", () => {
+    stubFetch({ "GET /api/refrigerants": { body: CATALOGUE } });
+    renderOnRoute(<SystemForm storeId={STORE_ID} massUnit="lb" onDone={() => {}} onCancel={() => {}} />);
+    expect(screen.queryByLabelText(/Hermetically sealed/)).toBeNull();
   });
 });

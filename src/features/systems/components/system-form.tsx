@@ -45,6 +45,7 @@ export function SystemForm({
   massUnit,
   numberFormat = "1,234.5",
   canRevise = false,
+  rules = "us",
   onDone,
   onCancel,
 }: {
@@ -53,6 +54,8 @@ export function SystemForm({
   massUnit: MassPreference;
   numberFormat?: NumberFormat;
   canRevise?: boolean;
+  /** Whose rules the company works under: the EU profile asks whether the unit is hermetically sealed. */
+  rules?: "us" | "eu";
   onDone: () => void;
   onCancel: () => void;
 }) {
@@ -67,6 +70,7 @@ export function SystemForm({
           unit: massUnit,
           applianceType: "commercial-refrigeration",
           automaticLeakDetection: false,
+          hermeticallySealed: false,
           inServiceOn: "",
         },
   );
@@ -101,6 +105,7 @@ export function SystemForm({
       fullCharge: read.charge,
       applianceType: draft.applianceType,
       automaticLeakDetection: draft.automaticLeakDetection,
+      hermeticallySealed: draft.hermeticallySealed,
       ...(draft.inServiceOn ? { inServiceOn: draft.inServiceOn } : {}),
     };
     const parsed = createSystemInput.safeParse(values);
@@ -112,16 +117,22 @@ export function SystemForm({
     if (Object.keys(found).length > 0 || !parsed.success) return;
     const done = { onSuccess: () => onDone() };
     if (!system) return create.mutate({ storeId, input: parsed.data }, done);
+    // The name and the hermetic mark are plain properties, edited as such (decision 0122).
+    const plain = {
+      ...(draft.name !== system.name ? { name: parsed.data.name } : {}),
+      ...(draft.hermeticallySealed !== system.hermeticallySealed
+        ? { hermeticallySealed: draft.hermeticallySealed }
+        : {}),
+    };
     if (rev?.success) {
       const reviseNow = () => revise.mutate({ id: system.id, input: rev.data }, done);
-      if (draft.name !== system.name)
-        update.mutate({ id: system.id, input: { name: parsed.data.name } }, { onSuccess: reviseNow });
+      if (Object.keys(plain).length > 0) update.mutate({ id: system.id, input: plain }, { onSuccess: reviseNow });
       else reviseNow();
       return;
     }
-    // Without the right to revise (or with only the name changed), a plain edit: the server refuses
-    // a dated fact once records exist, naming the field.
-    const input = { ...(draft.name !== system.name ? { name: parsed.data.name } : {}), ...facts };
+    // Without the right to revise (or with only plain properties changed), a plain edit: the server
+    // refuses a dated fact once records exist, naming the field.
+    const input = { ...plain, ...facts };
     if (Object.keys(input).length === 0) return onDone();
     update.mutate({ id: system.id, input }, done);
   }
@@ -186,6 +197,21 @@ export function SystemForm({
           checked={draft.automaticLeakDetection}
           onChange={(e) => set("automaticLeakDetection", e.target.checked)}
         />
+        {rules === "eu" || draft.hermeticallySealed ? (
+          <div>
+            <Checkbox
+              label="Hermetically sealed (factory-sealed, labelled as such)"
+              aria-describedby="hermetic-hint"
+              checked={draft.hermeticallySealed}
+              onChange={(e) => set("hermeticallySealed", e.target.checked)}
+            />
+            <p id="hermetic-hint" className="text-sm text-muted">
+              Only a unit whose refrigerant circuit was sealed at the factory (joined for good, e.g. welded or brazed)
+              and that carries a label saying it is hermetically sealed. Below 10 t CO2e such a unit needs no periodic
+              leak check.
+            </p>
+          </div>
+        ) : null}
         <TextField
           label="In service since"
           type="date"

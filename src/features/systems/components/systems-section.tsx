@@ -13,6 +13,7 @@ import { formErrorMessage } from "../../../lib/form-errors";
 import { useDeleteSystem } from "../api/delete-system";
 import { useRetiredSystems, useSystems } from "../../../entities/systems/systems-api";
 import { RetiredSystems } from "./retired-systems";
+import { RetireSystemDialog } from "./retire-system-dialog";
 import { SystemForm } from "./system-form";
 import { CompanyRefrigerantsPanel } from "./company-refrigerants-panel";
 
@@ -21,6 +22,7 @@ export function SystemsSection({
   storeId,
   canEdit,
   canRevise = false,
+  rules = "us",
   massUnit,
   numberFormat = "1,234.5",
 }: {
@@ -28,6 +30,8 @@ export function SystemsSection({
   canEdit: boolean;
   /** Engineers and owners change dated facts by a revision (docs/decisions/0043-system-revisions.md). */
   canRevise?: boolean;
+  /** Whose rules the company works under (the EU profile asks about hermetically sealed units). */
+  rules?: "us" | "eu";
   massUnit: MassPreference;
   numberFormat?: NumberFormat;
 }) {
@@ -35,6 +39,7 @@ export function SystemsSection({
   const retired = useRetiredSystems(storeId);
   const [editing, setEditing] = useState<string | "new" | null>(null);
   const [confirmDelete, setConfirmDelete] = useState<string | null>(null);
+  const [retiring, setRetiring] = useState<System | null>(null);
   const del = useDeleteSystem();
   const editedSystem = systems.data?.find((s) => s.id === editing);
   const deleteError = formErrorMessage(del.error);
@@ -52,15 +57,7 @@ export function SystemsSection({
         <QueryError error={systems.error} what="the systems" onRetry={() => void systems.refetch()} />
       ) : null}
       {deleteError ? <Alert tone="error">{deleteError}</Alert> : null}
-      {del.data?.outcome === "retired" ? (
-        <Alert tone="success">
-          {del.data.system.name} has records, so it was retired instead of deleted: its records stay readable on{" "}
-          <a className="underline" href={`/systems/${del.data.system.id}`}>
-            its records page
-          </a>
-          .
-        </Alert>
-      ) : null}
+      <RetireSystemDialog system={retiring} onClose={() => setRetiring(null)} />
       {editing === "new" || editedSystem ? (
         <SystemForm
           key={editing}
@@ -69,6 +66,7 @@ export function SystemsSection({
           massUnit={massUnit}
           numberFormat={numberFormat}
           canRevise={canRevise}
+          rules={rules}
           onDone={() => setEditing(null)}
           onCancel={() => setEditing(null)}
         />
@@ -131,15 +129,18 @@ export function SystemsSection({
               filterValue: (s) => APPLIANCE_TYPE_NAMES[s.applianceType],
             },
             { header: "Automatic leak detection", cell: (s) => (s.automaticLeakDetection ? "Yes" : "No") },
+            ...(rules === "eu"
+              ? [{ header: "Hermetically sealed", cell: (s: System) => (s.hermeticallySealed ? "Yes" : "No") }]
+              : []),
             ...(canEdit || canRevise
               ? [
                   {
                     header: "Actions",
-                    className: "min-w-44",
+                    className: "min-w-72",
                     cell: (s: System) =>
                       confirmDelete === s.id ? (
                         <div className="flex flex-wrap items-center gap-2">
-                          <span className="text-sm text-muted">A system with records is retired, never deleted.</span>
+                          <span className="text-sm text-muted">No record names it: it is deleted for good.</span>
                           <Button
                             variant="danger"
                             busy={del.isPending}
@@ -159,6 +160,12 @@ export function SystemsSection({
                             Edit
                           </Button>
                           {canEdit ? (
+                            <Button variant="quiet" onClick={() => setRetiring(s)} aria-label={`Retire ${s.name}…`}>
+                              Retire system…
+                            </Button>
+                          ) : null}
+                          {/* Only a system no record names may be deleted (docs/decisions/0040, 0124). */}
+                          {canEdit && !s.hasRecords ? (
                             <Button
                               variant="quiet"
                               onClick={() => setConfirmDelete(s.id)}
@@ -166,6 +173,9 @@ export function SystemsSection({
                             >
                               Delete
                             </Button>
+                          ) : null}
+                          {canEdit && s.hasRecords ? (
+                            <span className="self-center text-sm text-muted">has records: retire, not delete</span>
                           ) : null}
                         </div>
                       ),

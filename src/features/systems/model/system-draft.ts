@@ -11,6 +11,8 @@ export interface SystemDraft {
   unit: MassPreference;
   applianceType: ApplianceType;
   automaticLeakDetection: boolean;
+  /** A property of the equipment, not a dated fact: changed by a plain edit (decision 0122). */
+  hermeticallySealed: boolean;
   inServiceOn: string;
 }
 
@@ -27,6 +29,7 @@ export function draftOf(system: System, unit: MassPreference, format: NumberForm
     unit,
     applianceType: system.applianceType,
     automaticLeakDetection: system.automaticLeakDetection,
+    hermeticallySealed: system.hermeticallySealed,
     inServiceOn: system.inServiceOn,
   };
 }
