@@ -10,6 +10,7 @@ import { delayDiagnostics, delayStage } from "./pipeline/delay-stage";
 import { diagnosticsStage } from "./pipeline/diagnostics-stage";
 import { fieldStage, type OtherAir } from "./pipeline/field-stage";
 import { lagStage } from "./pipeline/lag-stage";
+import { oneReadingSource } from "./pipeline/one-reading";
 import { placementStage } from "./pipeline/placement-stage";
 import { spotFitsPlume, type PassFit } from "./pipeline/retry-screen";
 import { round2 } from "./pipeline/numbers";
@@ -95,7 +96,10 @@ export function locate(
       levelColumns,
     );
     const rule = supportRule(field, zones, settings.sources);
-    const placement = placementStage(plan, grid, lag, field, sources, rule, settings);
+    const placement = placementStage(plan, grid, lag, field, sources, rule, settings, [
+      ...zones.columns,
+      ...levelColumns,
+    ]);
     return { lag, zones, field, sources, placement };
   };
   // The delay checked against the readings first: when they clearly fit another delay and nobody set
@@ -127,6 +131,24 @@ export function locate(
       }
     }
   }
+  // Nothing fits at any delay, yet one reading stands far above the alarm: list it as a spot of its own
+  // kind (one-reading.ts) rather than call the sweep clean.
+  const fitted = run.placement.candidates.length;
+  if (fitted === 0 && farAbove) {
+    const rule = supportRule(run.field, run.zones, settings.sources);
+    const one = oneReadingSource(
+      run.lag,
+      run.zones,
+      run.sources,
+      rule,
+      run.field.background.ppm,
+      FAR_ABOVE_ALARMS * instrument.alarmPpm,
+    );
+    if (one) {
+      const sources = { ...run.sources, found: [one] };
+      run = { ...run, sources, placement: placementStage(plan, grid, run.lag, run.field, sources, rule, settings) };
+    }
+  }
   const { lag, zones, field, sources, placement } = run;
   const report = diagnosticsStage(input, grid, lag, zones, field, sources, placement, usedS, settings, air);
   const delay: DelayFacts = {
@@ -137,14 +159,7 @@ export function locate(
     statedMisfit: check.statedMisfit === null ? null : round3(check.statedMisfit),
     estimatedMisfit: check.estimatedMisfit === null ? null : round3(check.estimatedMisfit),
   };
-  const delayNotes = delayDiagnostics(
-    delay,
-    usedS !== firstS,
-    placement.candidates.length,
-    plume,
-    instrument.alarmPpm,
-    farAbove,
-  );
+  const delayNotes = delayDiagnostics(delay, usedS !== firstS, fitted, plume, instrument.alarmPpm, farAbove);
 
   return {
     candidates: [...placement.candidates],

@@ -51,7 +51,7 @@ const riskPointKind = z.enum(locatorRiskPointKinds);
 
 /** Why a spot is listed (the locator's `SpotReason`, worded by core/domain/locator-words/). */
 const spotReason = z.object({
-  kind: z.enum(["fitted", "alternative"]),
+  kind: z.enum(["fitted", "alternative", "one-reading"]),
   supportCount: z.number(),
   peakPpm: z.number(),
   backgroundPpm: z.number(),

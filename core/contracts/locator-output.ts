@@ -16,8 +16,12 @@ export type SpotNextCheck =
 
 /** Why a spot is listed. */
 export interface SpotReason {
-  /** "fitted": one source here explains the readings best; "alternative": fits almost as well as a higher-ranked spot. */
-  kind: "fitted" | "alternative";
+  /**
+   * "fitted": one source here explains the readings best; "alternative": fits almost as well as a
+   * higher-ranked spot; "one-reading": one reading far above the alarm that nothing else nearby rises
+   * with, so no source could be fitted (re-check around it).
+   */
+  kind: "fitted" | "alternative" | "one-reading";
   /** Readings near the spot raised over the background, their peak and the background, ppm. */
   supportCount: number;
   peakPpm: number;

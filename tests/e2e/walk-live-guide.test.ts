@@ -11,7 +11,16 @@ import { signInThroughForm } from "../helpers/e2e-session";
 import { walkSuite } from "../helpers/walk-suite";
 import { PASSWORD } from "../helpers/fixtures";
 import { latestDemoTaps } from "../helpers/demo-sweep-taps";
-import { planToScreen, queueTapsOnDevice, until, waitForServiceWorker, waitForSteadyPlan } from "../helpers/walk-e2e";
+import {
+  inkNear,
+  planShare,
+  planToScreen,
+  shownInFull,
+  queueTapsOnDevice,
+  until,
+  waitForServiceWorker,
+  waitForSteadyPlan,
+} from "../helpers/walk-e2e";
 
 const suite = walkSuite("Ashgrove Pantry");
 const SCREENS = path.resolve(import.meta.dirname, "../../test-results/screens");
@@ -25,6 +34,25 @@ mkdirSync(SCREENS, { recursive: true });
 const JOINT = { x: 11.7, y: 8.8 };
 const airAt = (fansRunning: boolean, x: number, y: number) =>
   Math.round(demoConcentration({ leaks: [{ ...JOINT, peakPpm: fansRunning ? 16 : 40 }], fansRunning }, x, y));
+
+/**
+ * A screenshot for a person to look at, and the plan's share of the phone's height then: the banners
+ * fold to one line and the guide lies over the plan's edge, so the plan keeps about half the screen in
+ * every state this walk reaches (docs/decisions/0140).
+ */
+async function look(page: Page, name: string) {
+  await page.screenshot({ path: path.join(SCREENS, `${name}.png`) });
+  const share = await planShare(page);
+  console.log(`${name}: the plan keeps ${(share * 100).toFixed(0)} % of the screen's height`);
+  expect(share, name).toBeGreaterThanOrEqual(0.45);
+}
+
+/** Opens the folded banners (a tap on their line), if they are folded. */
+async function showNotices(page: Page) {
+  const toggle = page.getByRole("button", { name: "Show the notices in full" });
+  if (await toggle.isVisible()) await toggle.tap();
+  await page.getByRole("button", { name: "Fold the notices to one line" }).waitFor();
+}
 
 /** Types a value on the open keypad and saves it. */
 async function typePpm(page: Page, ppm: number) {
@@ -62,16 +90,35 @@ it("on a phone, offline, after the demo sweep's readings: live suspects and next
 
   // No signal from here on: the readings stay on the device and the estimate is made there.
   await context.setOffline(true);
-  const taps = latestDemoTaps();
-  await queueTapsOnDevice(
-    page,
-    sweepId,
-    taps.map((t) => ({
-      ...t,
-      x: Math.min(59.95, Math.max(0.05, t.x)),
-      y: Math.min(35.95, Math.max(0.05, t.y)),
-    })),
+  const taps = latestDemoTaps().map((t) => ({
+    ...t,
+    x: Math.min(59.95, Math.max(0.05, t.x)),
+    y: Math.min(35.95, Math.max(0.05, t.y)),
+  }));
+  // The walk up to its second alarm reading (3 and 6 ppm, where Dairy 2 meets Dairy 3): no spot is credible yet,
+  // and the guide leads to where the gas is strongest so far, drawn on the plan as a lead (a crosshair,
+  // not a suspect's circle) with the probe points that trace it.
+  const EARLY = 8;
+  await queueTapsOnDevice(page, sweepId, taps.slice(0, EARLY));
+  await page.reload();
+  await page
+    .getByTestId("walk-count")
+    .filter({ hasText: `${EARLY} readings` })
+    .waitFor();
+  await waitForSteadyPlan(page);
+  const lead = page.locator('[data-testid="live-first"][data-lead]');
+  await lead.waitFor();
+  await expect(lead.textContent()).resolves.toMatch(
+    /^No credible spot yet: the gas is strongest so far at Dairy [23]$/,
   );
+  await page.locator('[data-testid="live-guide"][data-suspects="0"]:not([data-probes="0"])').waitFor();
+  await waitForSteadyPlan(page);
+  const [leadX, leadY] = (await lead.getAttribute("data-lead"))!.split(" ").map(Number);
+  // the crosshair in the estimate's purple (#5b2d8c, model/plan-marks.ts) where the lead is (no suspect yet)
+  expect(await inkNear(page, await planToScreen(page, leadX, leadY), 20, [0x5b, 0x2d, 0x8c])).toBeGreaterThan(20);
+  await look(page, "walk-live-guide-lead");
+
+  await queueTapsOnDevice(page, sweepId, taps.slice(EARLY), 0, 2000);
   await context.clock.fastForward("10:00");
   // Reloaded offline: the service worker serves the app shell and the worker script from its cache.
   await page.reload();
@@ -86,7 +133,7 @@ it("on a phone, offline, after the demo sweep's readings: live suspects and next
   await page.locator('[data-testid="live-guide"]:not([data-suspects="0"]):not([data-probes="0"])').waitFor();
   // Folded to one line over the plan's bottom edge at first; opened, it lists the probe points.
   await expect(page.getByTestId("live-folded").textContent()).resolves.toMatch(/probe point/);
-  await page.screenshot({ path: path.join(SCREENS, "walk-live-guide-folded.png") });
+  await look(page, "walk-live-guide-folded");
   await page.getByRole("button", { name: "Show guide" }).tap();
   const first = await page.getByTestId("live-first").textContent();
   // The demo's latest leak is a brazed joint behind Dairy 3 (server/db/seed/demo-story.ts).
@@ -98,7 +145,7 @@ it("on a phone, offline, after the demo sweep's readings: live suspects and next
   expect(count).toBeLessThanOrEqual(3);
   for (let i = 0; i < count; i++)
     await expect(probes.nth(i).textContent()).resolves.toMatch(/^\d+Probe \d+: .+ away(Tells|Narrows)/);
-  await page.screenshot({ path: path.join(SCREENS, "walk-live-guide-phone-offline.png") });
+  await look(page, "walk-live-guide-phone-offline");
 
   const [px, py] = (await probes.first().getAttribute("data-at"))!.split(" ").map(Number);
   const estimates = async () => Number(await guide.getAttribute("data-estimates"));
@@ -123,7 +170,7 @@ it("on a phone, offline, after the demo sweep's readings: live suspects and next
   expect(open).toHaveLength(1);
   expect(open[0].x).toBeCloseTo(px, 6);
   expect(open[0].y).toBeCloseTo(py, 6);
-  await page.screenshot({ path: path.join(SCREENS, "walk-live-guide-probe-keypad.png") });
+  await look(page, "walk-live-guide-probe-keypad");
 
   // Two more readings at the next probe points: the first suspect holds, and the screen asks for the
   // supply-air check, which opens the keypad on the suspect with the sample point set to supply air.
@@ -153,7 +200,7 @@ it("on a phone, offline, after the demo sweep's readings: live suspects and next
     if (await settled.isVisible()) break;
   }
   await settled.waitFor();
-  await page.screenshot({ path: path.join(SCREENS, "walk-live-guide-supply-ask.png") });
+  await look(page, "walk-live-guide-supply-ask");
   await page.getByRole("button", { name: "Read the supply air here" }).tap();
   await page.getByRole("button", { name: /Sample point: Supply air/ }).waitFor();
   await page.getByRole("button", { name: "9", exact: true }).tap();
@@ -168,11 +215,17 @@ it("on a phone, offline, after the demo sweep's readings: live suspects and next
   const [, caseName] = (await offer.textContent())!.match(/^Suspect 1 holds at (.+?): its fans spread the gas/)!;
   // the joint is in Dairy 3 and the running fans spread its gas along the line (within the suspect's radius)
   expect(["Dairy 3", "Dairy 4"]).toContain(caseName);
-  await page.screenshot({ path: path.join(SCREENS, "walk-live-guide-still-air-offer.png") });
+  // on the banners' one line; a tap on it shows the offer in full with its buttons
+  await look(page, "walk-live-guide-still-air-offer");
+  await offer.tap();
+  await page.getByRole("button", { name: "Fold the notices to one line" }).waitFor();
+  await look(page, "walk-live-guide-notices-open");
   await offer.getByRole("button", { name: "Still-air pass…" }).tap();
   const dialog = page.getByRole("dialog", { name: `Still-air pass at ${caseName}` });
   await expect(dialog.textContent()).resolves.toMatch(/product warms up/);
   await expect(dialog.textContent()).resolves.toMatch(/local codes/);
+  // the cautions show in full as the pass starts: first in the dialog, nothing of them below the fold
+  expect(await shownInFull(page, '[data-testid="start-pass-cautions"]')).toBe(true);
   await page.screenshot({ path: path.join(SCREENS, "walk-live-guide-still-air-start.png") });
   await dialog.getByRole("button", { name: "Start still-air pass" }).tap();
   const banner = page.getByTestId("pass-banner");
@@ -185,8 +238,6 @@ it("on a phone, offline, after the demo sweep's readings: live suspects and next
   // each reading is the air of the stop before (5 s delay + 1.5 s time constant).
   await context.clock.fastForward("04:00");
   await expect(banner.textContent()).resolves.toMatch(/Restore the fans in 1[56]:\d\d/);
-  const lagHint = page.getByTestId("lag-hint");
-  if (await lagHint.isVisible()) await lagHint.getByRole("button", { name: "OK" }).tap();
   const box = demoFixtures({ "rack-mt": "", "rack-lt": "", "walk-ins": "" }).find((f) => f.label === caseName)!;
   if (!("polygon" in box)) throw new Error(`${caseName} has no outline`);
   const xs = box.polygon.map((p) => p[0]);
@@ -207,7 +258,14 @@ it("on a phone, offline, after the demo sweep's readings: live suspects and next
     (c) => Number(document.querySelector('[data-testid="live-guide"]')?.getAttribute("data-estimates")) > c,
     counted,
   );
-  await page.screenshot({ path: path.join(SCREENS, "walk-live-guide-still-air-pass.png") });
+  // the pass is one line of the folded banners (⚠: its cautions are one tap away)
+  const cautions = page.getByTestId("pass-cautions");
+  await expect(cautions.count()).resolves.toBe(0);
+  await expect(banner.textContent()).resolves.toMatch(/^⚠ Pass 2/);
+  await look(page, "walk-live-guide-still-air-pass");
+  await showNotices(page);
+  await expect(cautions.textContent()).resolves.toMatch(/product warms up.*local codes/);
+  await look(page, "walk-live-guide-pass-cautions");
   await banner.getByRole("button", { name: "Fans back on — end pass" }).tap();
   await banner.waitFor({ state: "detached" });
   // Nothing asked the network for the estimate.
@@ -238,7 +296,7 @@ it("on a phone, offline, after the demo sweep's readings: live suspects and next
   expect(liveFixture, seen).toBe(server.fixtureId);
   // The phone now points to the reference: the field map.
   await page.getByTestId("live-folded").filter({ hasText: "Submitted: see the field map" }).waitFor();
-  await page.screenshot({ path: path.join(SCREENS, "walk-live-guide-submitted.png") });
+  await look(page, "walk-live-guide-submitted");
   expect(failures).toEqual([]);
   await context.close();
 });

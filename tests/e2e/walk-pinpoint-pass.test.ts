@@ -8,7 +8,14 @@ import { newContext } from "../helpers/browser";
 import { signInThroughForm } from "../helpers/e2e-session";
 import { walkSuite } from "../helpers/walk-suite";
 import { PASSWORD } from "../helpers/fixtures";
-import { planToScreen, waitForServiceWorker, until, waitForSteadyPlan } from "../helpers/walk-e2e";
+import {
+  planShare,
+  planToScreen,
+  shownInFull,
+  waitForServiceWorker,
+  until,
+  waitForSteadyPlan,
+} from "../helpers/walk-e2e";
 
 const suite = walkSuite("Corrie Lane Foods");
 const SCREENS = path.resolve(import.meta.dirname, "../../test-results/screens");
@@ -25,6 +32,14 @@ const AISLE = [
 ];
 const FRONT = [2.3, 3.0, 3.7, 4.4, 5.1].map((x) => ({ x, y: 9.7 }));
 const PACE_MS = 7000;
+
+/** A screenshot for a person, and the plan keeps about half the phone's height (docs/decisions/0140). */
+async function look(page: Page, name: string) {
+  await page.screenshot({ path: path.join(SCREENS, `${name}.png`) });
+  const share = await planShare(page);
+  console.log(`${name}: the plan keeps ${(share * 100).toFixed(0)} % of the screen's height`);
+  expect(share, name).toBeGreaterThanOrEqual(0.45);
+}
 
 async function record(page: Page, spot: { x: number; y: number }, value: string, n: number) {
   await waitForSteadyPlan(page);
@@ -64,13 +79,17 @@ it("on a phone with touch: level readings along a case advise stopping its fans;
   }
   const advice = page.getByTestId("mixing-advice");
   await expect(advice.textContent()).resolves.toMatch(/across Dairy 1: its fans are mixing the gas/);
-  await page.screenshot({ path: path.join(SCREENS, "walk-pinpoint-advice.png") });
+  await look(page, "walk-pinpoint-advice");
 
-  // The still-air pass: the cautions first (product temperature, the refrigerant's, local codes).
+  // The still-air pass: the cautions first (product temperature, the refrigerant's, local codes). The
+  // advice is one line of the folded banners: a tap shows it in full.
+  await advice.tap();
   await advice.getByRole("button", { name: "Still-air pass…" }).tap();
   const dialog = page.getByRole("dialog", { name: "Still-air pass at Dairy 1" });
   await expect(dialog.textContent()).resolves.toMatch(/product warms up/);
   await expect(dialog.textContent()).resolves.toMatch(/local codes/);
+  // they come first and show in full on the phone as the pass starts
+  expect(await shownInFull(page, '[data-testid="start-pass-cautions"]')).toBe(true);
   await dialog.getByRole("button", { name: "5 minutes more" }).tap();
   await expect.poll(() => dialog.getByTestId("pass-minutes").textContent()).toBe("25 min");
   await page.screenshot({ path: path.join(SCREENS, "walk-pinpoint-start.png") });
@@ -79,13 +98,17 @@ it("on a phone with touch: level readings along a case advise stopping its fans;
   await expect(banner.textContent()).resolves.toMatch(
     /Pass 2: fans stopped at Dairy 1\. Restore the fans in 2[45]:\d\d/,
   );
+  // the running pass keeps its cautions one tap away: a tap on its line shows them
+  await banner.tap();
+  await expect(page.getByTestId("pass-cautions").textContent()).resolves.toMatch(/product warms up.*local codes/);
+  await look(page, "walk-pinpoint-pass-cautions");
 
   // Readings in still air peak at the leak, about the third tap.
   for (const [i, s] of FRONT.entries()) {
     await context.clock.fastForward(PACE_MS);
     await record(page, s, ["3", "9", "20", "12", "4"][i], ++n);
   }
-  await page.screenshot({ path: path.join(SCREENS, "walk-pinpoint-pass-timer.png") });
+  await look(page, "walk-pinpoint-pass-timer");
 
   // The reminder lives on the device: a reload brings the pass and its clock back.
   await page.reload();
@@ -95,6 +118,7 @@ it("on a phone with touch: level readings along a case advise stopping its fans;
     .waitFor();
   await expect(page.getByTestId("pass-banner").textContent()).resolves.toMatch(/Restore the fans in 2[345]:\d\d/);
 
+  await page.getByRole("button", { name: "Show the notices in full" }).tap();
   await page.getByTestId("pass-banner").getByRole("button", { name: "Fans back on — end pass" }).tap();
   await page.getByTestId("pass-banner").waitFor({ state: "detached" });
   await page.getByRole("navigation", { name: "Sweep tools" }).getByRole("button", { name: "Submit" }).tap();

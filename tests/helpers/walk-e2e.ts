@@ -89,11 +89,18 @@ export interface DeviceTap {
 /**
  * Writes taps straight into the device's IndexedDB for a sweep, queued for upload as the keypad
  * leaves them, in one transaction (quicker than tapping hundreds). Each is taken `t` seconds after
- * the sweep's start plus `offsetMs`. The page must be reloaded to show them.
+ * the sweep's start plus `offsetMs`; their numbers on the device start at `firstSeq` (a second batch
+ * goes after the first). The page must be reloaded to show them.
  */
-export async function queueTapsOnDevice(page: Page, sweepId: string, taps: readonly DeviceTap[], offsetMs = 0) {
+export async function queueTapsOnDevice(
+  page: Page,
+  sweepId: string,
+  taps: readonly DeviceTap[],
+  offsetMs = 0,
+  firstSeq = 1000,
+) {
   await page.evaluate(
-    async ({ sweepId, taps, offsetMs }) => {
+    async ({ sweepId, taps, offsetMs, firstSeq }) => {
       const db: IDBDatabase = await new Promise((resolve, reject) => {
         const r = indexedDB.open("plumeline-walk");
         r.onsuccess = () => resolve(r.result);
@@ -109,7 +116,7 @@ export async function queueTapsOnDevice(page: Page, sweepId: string, taps: reado
         tx.objectStore("readings").put({
           id: crypto.randomUUID(),
           sweepId,
-          seq: 1000 + i,
+          seq: firstSeq + i,
           x: tap.x,
           y: tap.y,
           takenAt: new Date(t0 + Math.round(tap.t * 1000)).toISOString(),
@@ -120,13 +127,72 @@ export async function queueTapsOnDevice(page: Page, sweepId: string, taps: reado
           sync: { kind: "queued-new" },
         }),
       );
-      tx.objectStore("meta").put(5000, "seq");
+      tx.objectStore("meta").put(firstSeq + 4000, "seq");
       await new Promise((resolve, reject) => {
         tx.oncomplete = resolve;
         tx.onerror = () => reject(tx.error);
       });
       db.close();
     },
-    { sweepId, taps, offsetMs },
+    { sweepId, taps, offsetMs, firstSeq },
+  );
+}
+
+/**
+ * The share of the screen's height the Walk plan keeps for itself: the plan's box less the part the
+ * live guide's panel covers (it lies over the plan's bottom edge), over the viewport's height.
+ */
+export async function planShare(page: Page): Promise<number> {
+  return page.evaluate(() => {
+    const plan = document.querySelector('[data-testid="walk-plan"]')!.getBoundingClientRect();
+    const guide = document.querySelector('[data-testid="live-guide"]')?.getBoundingClientRect();
+    const covered = guide ? Math.max(0, Math.min(plan.bottom, guide.bottom) - Math.max(plan.top, guide.top)) : 0;
+    return (plan.height - covered) / window.innerHeight;
+  });
+}
+
+/** Whether the element lies wholly within the viewport (shown in full, nothing to scroll to). */
+export async function shownInFull(page: Page, selector: string): Promise<boolean> {
+  return page.evaluate((sel) => {
+    const box = document.querySelector(sel)?.getBoundingClientRect();
+    return !!box && box.height > 0 && box.top >= 0 && box.bottom <= window.innerHeight;
+  }, selector);
+}
+
+/**
+ * How many pixels of the Walk plan's canvases within `radiusPx` of a screen point are drawn in `rgb`
+ * (each channel within 40): proof that a mark of that colour is drawn there, not only listed in words.
+ */
+export async function inkNear(
+  page: Page,
+  at: { x: number; y: number },
+  radiusPx: number,
+  rgb: [number, number, number],
+) {
+  return page.evaluate(
+    ({ at, radiusPx, rgb }) => {
+      let count = 0;
+      for (const canvas of document.querySelectorAll<HTMLCanvasElement>('[data-testid="walk-plan"] canvas')) {
+        const box = canvas.getBoundingClientRect();
+        const sx = canvas.width / box.width;
+        const sy = canvas.height / box.height;
+        const x0 = Math.max(0, Math.floor((at.x - radiusPx - box.left) * sx));
+        const y0 = Math.max(0, Math.floor((at.y - radiusPx - box.top) * sy));
+        const w = Math.min(canvas.width - x0, Math.ceil(2 * radiusPx * sx));
+        const h = Math.min(canvas.height - y0, Math.ceil(2 * radiusPx * sy));
+        if (w <= 0 || h <= 0) continue;
+        const data = canvas.getContext("2d")!.getImageData(x0, y0, w, h).data;
+        for (let i = 0; i < data.length; i += 4)
+          if (
+            data[i + 3] > 128 &&
+            Math.abs(data[i] - rgb[0]) <= 40 &&
+            Math.abs(data[i + 1] - rgb[1]) <= 40 &&
+            Math.abs(data[i + 2] - rgb[2]) <= 40
+          )
+            count++;
+      }
+      return count;
+    },
+    { at, radiusPx, rgb },
   );
 }

@@ -4,7 +4,7 @@ import { fieldStage } from "../pipeline/field-stage";
 import { lagStage } from "../pipeline/lag-stage";
 import { aisle, gridOf, plume, rect } from "../pipeline/stage-fixtures";
 import { zonesStage } from "../pipeline/zones-stage";
-import { relocateSources } from "./greedy-sources";
+import { orderFitted, relocateSources, type FoundSource } from "./greedy-sources";
 import { fitNonnegative } from "./nonnegative-fit";
 import { kernelColumn } from "./reading-fields";
 import { LOCATOR_SETTINGS as S } from "./settings";
@@ -66,5 +66,34 @@ describe("relocateSources", () => {
     expect(Math.abs(xs[0] - 2.5)).toBeLessThanOrEqual(4);
     expect(Math.abs(xs[1] - 9.5)).toBeLessThanOrEqual(4);
     expect(Math.abs(xs[1] - xs[0])).toBeGreaterThanOrEqual(4);
+  });
+});
+
+describe("orderFitted", () => {
+  // four readings; each source's kernel value at each of them
+  const source = (name: string, q: number, column: number[]): FoundSource & { name: string } => ({
+    name,
+    cell: 0,
+    delta: 0,
+    column: Float64Array.from(column),
+    alternate: false,
+    q,
+    surface: new Float64Array(0),
+  });
+  const names = (list: FoundSource[]) => list.map((s) => (s as FoundSource & { name: string }).name);
+
+  it("lists first the strongest source of the ranked rounds, then each by the highest reading share it explains", () => {
+    const leak = source("leak", 1, [1, 0.5, 0, 0]); // explains 1 ppm of reading 0
+    const mopUp = source("mop-up", 0.9, [0, 0.2, 0.2, 0.2]); // a little of three readings: 0.18 at most
+    const second = source("second", 0.5, [0, 0, 0, 1]); // its own peak: 0.5
+    expect(names(orderFitted([leak, mopUp, second], 3))).toEqual(["leak", "second", "mop-up"]);
+  });
+
+  it("never lists a source of a later round first, however strong", () => {
+    const a = source("a", 1, [1, 0, 0, 0]);
+    const b = source("b", 0.8, [0, 1, 0, 0]);
+    const late = source("late", 3, [0, 0, 1, 0]);
+    expect(names(orderFitted([a, b, late], 2))).toEqual(["a", "late", "b"]);
+    expect(orderFitted([], 3)).toEqual([]);
   });
 });

@@ -10,6 +10,8 @@ export interface FoundSource {
   column: Float64Array;
   /** True for an alternative spot of the first scan (e.g. the other side of a pass), not a fitted source. */
   alternate: boolean;
+  /** A spot from one strong reading that no fitted source explains (pipeline/one-reading.ts). */
+  oneReading?: boolean;
   q: number;
   /** The Δχ² map this spot was chosen on (its own round's scan), for refinement and radius. */
   surface: Float64Array;
@@ -182,6 +184,31 @@ export function relocateSources(
   return { sources, fit };
 }
 
+/** The highest reading a source's fitted share explains, ppm: q·g at the reading it reaches most. */
+export function explainedPeak(s: Pick<FoundSource, "q" | "column">): number {
+  let m = 0;
+  for (let i = 0; i < s.column.length; i++) m = Math.max(m, s.q * s.column[i]);
+  return m;
+}
+
+/**
+ * Fitted sources in list order (their strengths `q` from the final joint fit). First the strongest
+ * source of the first `rankedRounds` rounds: a weak source the greedy step picked early usually mops up
+ * far-field gas of a strong one that the truncated kernel cannot reach. After it, each by its own
+ * evidence: the highest reading its share explains. A source that mops up the shoulders of a shared
+ * plume explains a little of many readings, a second leak most of its own peak; by strength alone (q,
+ * the excess at the kernel's cut-off, extrapolated where no reading is close) the mop-ups often came
+ * first (docs/locator/benchmark-baseline.md, "Sixth round").
+ */
+export function orderFitted(sources: readonly FoundSource[], rankedRounds: number): FoundSource[] {
+  if (sources.length === 0) return [];
+  const ranked = sources.slice(0, rankedRounds);
+  const first = ranked.reduce((a, b) => (b.q > a.q ? b : a));
+  const peak = new Map(sources.map((s) => [s, explainedPeak(s)]));
+  const rest = sources.filter((s) => s !== first).sort((a, b) => peak.get(b)! - peak.get(a)!);
+  return [first, ...rest];
+}
+
 /**
  * Several leaks by greedy forward selection (in the spirit of Yee 2012): scan all cells against the
  * residual of the current joint fit, take the best credible cell, refit all strengths jointly, repeat
@@ -239,10 +266,7 @@ export function findSources(input: GreedyInput): GreedyResult {
   const nn = input.nuisance.length;
   sources.forEach((s, k) => (s.q = fit.q[nn + k]));
   const bestDelta = Math.max(0, ...sources.map((s) => s.delta));
-  // Rank fitted sources by strength: a weak source that the greedy step picked early usually mops up
-  // far-field gas of a strong one that the truncated kernel cannot reach.
-  const late = new Set(sources.slice(input.rankedRounds));
-  sources.sort((a, b) => Number(late.has(a)) - Number(late.has(b)) || b.q - a.q);
+  sources.splice(0, sources.length, ...orderFitted(sources, input.rankedRounds));
   if (firstScan && sources.length > 0 && sources.length < input.maxCandidates) {
     const sep2 = (input.separationM / input.cellSize) ** 2;
     const near = (a: number, b: number) => {

@@ -47,9 +47,9 @@ export interface SourceSettings {
   /** Leaks fitted at once, and spots listed at most. */
   readonly maxLeaks: number;
   /**
-   * Sources of the greedy rounds after these are listed after the independent spots of these rounds:
-   * the later rounds are there to reach a weaker second leak past the sources that mop up a strong
-   * plume, and their strengths are the least certain.
+   * The first spot is the strongest source of these greedy rounds: the later rounds are there to reach
+   * a weaker second leak past the sources that mop up a strong plume, and their strengths are the
+   * least certain (the spots after the first go by the peak each explains, greedy-sources.ts).
    */
   readonly rankedRounds: number;
   readonly maxCandidates: number;
@@ -95,6 +95,21 @@ export interface PlacementSettings {
   readonly radiusInflation: number;
   readonly radiusShare: number;
   readonly radiusReachM: number;
+  /**
+   * The radius of a spot from one reading, m: the tempered posterior of one reading is flat over every
+   * cell it sees, so the radius is the reach of its air instead (twice the kernel's screening length).
+   */
+  readonly oneReadingRadiusM: number;
+  /**
+   * Where most cases run their fans, the first spot is placed again within `upwindWindowM` of where the
+   * greedy fit put it, each cell taking one of these drift strengths (1/m) when it beats none by
+   * `upwindPenalty` times the residual variance (upwind-replace.ts, decision 0128); none = off.
+   */
+  readonly upwindStrengths: readonly number[];
+  readonly upwindPenalty: number;
+  readonly upwindWindowM: number;
+  readonly upwindMinMoveM: number;
+  readonly upwindMinGain: number;
 }
 
 export interface ReportSettings {
@@ -157,6 +172,12 @@ export const LOCATOR_SETTINGS: LocatorSettings = {
     radiusInflation: 25,
     radiusShare: 0.5,
     radiusReachM: 8,
+    oneReadingRadiusM: 3,
+    upwindStrengths: [0.4, 1, 2],
+    upwindPenalty: 3,
+    upwindWindowM: 6,
+    upwindMinMoveM: 1.5,
+    upwindMinGain: 8,
   },
   report: {
     coverageGapM: 3,

@@ -13,6 +13,7 @@ const IN_FAN_AIR_M = 0.5;
 
 export interface SpotGeometry {
   alternate: boolean;
+  oneReading: boolean;
   supportCount: number;
   peakPpm: number;
   backgroundPpm: number;
@@ -26,7 +27,7 @@ const r2 = (v: number) => Math.round(v * 100) / 100;
 
 export function spotReason(g: SpotGeometry): SpotReason {
   return {
-    kind: g.alternate ? "alternative" : "fitted",
+    kind: g.oneReading ? "one-reading" : g.alternate ? "alternative" : "fitted",
     supportCount: g.supportCount,
     peakPpm: r2(g.peakPpm),
     backgroundPpm: r2(g.backgroundPpm),

@@ -7,14 +7,15 @@ import { refineCell } from "../locator/local-refine";
 import { posteriorRadius } from "../locator/posterior-radius";
 import { nearestFixture, nearestRiskPoint } from "../locator/nearest-features";
 import { kernelColumn } from "../locator/reading-fields";
-import type { PlacementSettings, ReportSettings, SourceSettings } from "../locator/settings";
+import type { KernelSettings, PlacementSettings, ReportSettings, SourceSettings } from "../locator/settings";
+import { upwindReplace } from "../locator/upwind-replace";
 import { kernelArea } from "../locator/source-kernel";
 import { spotNextChecks, spotReason, type SpotGeometry } from "../locator/spot-facts";
 import { HOURS_PER_YEAR, ppmToMgPerM3, wellMixedEmission } from "../locator/units";
 import type { FieldResult } from "./field-stage";
 import type { LagResult } from "./lag-stage";
 import { cellDistance, round2 } from "./numbers";
-import { supportingReadings, type SourcesResult, type SupportRule } from "./sources-stage";
+import { outsideFanRooms, supportingReadings, type SourcesResult, type SupportRule } from "./sources-stage";
 
 /** Stage 5: where each found source is listed, how sure the list is, and the facts behind each spot. */
 export interface PlacementResult {
@@ -34,7 +35,14 @@ export function placementStage(
   field: FieldResult,
   sources: SourcesResult,
   rule: SupportRule,
-  settings: { placement: PlacementSettings; sources: SourceSettings; report: ReportSettings },
+  settings: {
+    placement: PlacementSettings;
+    sources: SourceSettings;
+    report: ReportSettings;
+    kernel: KernelSettings;
+  },
+  /** Fixed columns fitted with the sources: benign zones, then stilled fixtures' levels. */
+  nuisance: readonly Float64Array[] = [],
 ): PlacementResult {
   const p = settings.placement;
   const s0 = settings.sources;
@@ -106,8 +114,46 @@ export function placementStage(
     return [top, mirror, ...found.slice(1)].slice(0, s0.maxCandidates);
   };
 
+  let found = sources.found;
+  if (
+    p.upwindStrengths.length > 0 &&
+    field.fansStir &&
+    field.kernels.length === 1 &&
+    found.length > 0 &&
+    roomOf[found[0].cell] < 0
+  ) {
+    // a plume trailing along a fan-stirred lineup: its sharp upwind edge marks the leak (decision 0128). Not in
+    // still air (its own drift fit), nor in a fan-stirred room (level all over), nor with a pinpoint pass (it pins the leak)
+    const k = settings.kernel;
+    found = upwindReplace(
+      {
+        fields: field.fields,
+        y,
+        w: field.weights,
+        censored: lag.censored,
+        nuisance,
+        allowed: outsideFanRooms(allowed, grid, plan),
+        prior,
+        gridWidth: grid.width,
+        cellSize: grid.cellSize,
+        windowM: p.upwindWindowM,
+        minMoveM: p.upwindMinMoveM,
+        minGain: p.upwindMinGain,
+        separationM: s0.sourceSeparationM,
+        drift: {
+          screeningLengthM: k.screeningLengthM,
+          far: field.fansStir && k.farShare > 0 ? { lengthM: k.farScreeningLengthM, share: k.farShare } : null,
+          nearCutoffM: k.nearCutoffM,
+          truncationM: k.truncationM,
+          strengths: p.upwindStrengths,
+          penalty: p.upwindPenalty,
+        },
+      },
+      found,
+    );
+  }
   const placed: FoundSource[] = [];
-  for (const s of withMirror(sources.found)) {
+  for (const s of withMirror(found)) {
     const room = roomOf[s.cell];
     if (room < 0) {
       const cell = refineCell(
@@ -165,7 +211,7 @@ export function placementStage(
       y0,
     );
     if (rank === 0) topOneSided = side.oneSided;
-    const radius = Math.max(
+    const posteriorR = Math.max(
       p.minRadiusM,
       p.radiusScale *
         posteriorRadius(
@@ -180,10 +226,13 @@ export function placementStage(
           p.radiusShare,
         ),
     );
+    // one reading's posterior is flat over all it can see: its radius is the reach of its air instead
+    const radius = s.oneReading ? p.oneReadingRadiusM : posteriorR;
     const fixture = nearestFixture(plan.fixtures, x, y0);
     const riskPoint = nearestRiskPoint(plan.riskPoints, x, y0);
     const facts: SpotGeometry = {
       alternate: s.alternate,
+      oneReading: s.oneReading === true,
       supportCount: sup.length,
       peakPpm: sup.reduce((m, i) => Math.max(m, y[i]), 0),
       backgroundPpm: field.background.ppm,

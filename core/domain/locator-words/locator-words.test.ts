@@ -110,6 +110,20 @@ describe("the locator's words", () => {
     expect(JSON.stringify(unnamed)).not.toContain(CASE);
   });
 
+  it("words a spot from one reading as a place to re-check around, not as a fitted source", () => {
+    const one: SuspectSpotWithRefrigerant = {
+      ...spot,
+      radius: 3,
+      reason: { ...spot.reason, kind: "one-reading", supportCount: 1, peakPpm: 11 },
+    };
+    const m = presentAnalysis(facts([one]), reader("m", "kg")).spots[0];
+    expect(m.reason).toBe(
+      "One reading at 11 ppm against a background of 0.4 ppm, inside the open case Dairy 3, and no other reading nearby rises with it: too little to fit a source, too much to call the sweep clean, so re-check around it.",
+    );
+    // 3 m = 9 ft 10.1 in, shown to the inch (1 ft = 0.3048 m; NIST SP 811, B.8)
+    expect(presentAnalysis(facts([one]), reader("ft-in", "lb")).spots[0].where).toMatch(/within 9 ft 10 in$/);
+  });
+
   it("gives the strength as an order of magnitude in the reader's mass unit, in the system's refrigerant", () => {
     // 3703 mol/yr × 86.28 g/mol = 319,495 g/yr = 319 kg/yr = 704 lb/yr (1 lb = 453.59237 g; NIST SP 811, B.8)
     expect(gramsPerYear(spot, spot.refrigerant)).toBeCloseTo(3703 * molarMassOf(getRefrigerant("R-448A")), 6);

@@ -18,8 +18,13 @@ export function spotReasonWords(r: SpotReason, ctx: WordsContext): string {
   const lead =
     r.kind === "alternative"
       ? `Alternative spot ${where}: the readings fit a source here almost as well as at a higher-ranked spot`
-      : `${r.supportCount} readings nearby rise to ${ppm(r.peakPpm)} against a background of ${ppm(r.backgroundPpm)}; one source ${where} explains them best`;
-  return r.oneSided ? `${lead}. The readings come from one pass, so the side of the path is uncertain.` : `${lead}.`;
+      : r.kind === "one-reading"
+        ? `One reading at ${ppm(r.peakPpm)} against a background of ${ppm(r.backgroundPpm)}, ${where}, and no other reading nearby rises with it: too little to fit a source, too much to call the sweep clean, so re-check around it`
+        : `${r.supportCount} readings nearby rise to ${ppm(r.peakPpm)} against a background of ${ppm(r.backgroundPpm)}; one source ${where} explains them best`;
+  // one reading is from one pass by nature; its next checks already say to walk the other face
+  return r.oneSided && r.kind !== "one-reading"
+    ? `${lead}. The readings come from one pass, so the side of the path is uncertain.`
+    : `${lead}.`;
 }
 
 function nextCheckPart(c: SpotNextCheck, ctx: WordsContext): string {

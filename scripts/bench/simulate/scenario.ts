@@ -247,11 +247,24 @@ export function buildWorld(family: Family, key: number): World {
   };
 }
 
-export function buildScenario(family: Family, key: number): Scenario {
+/**
+ * Which case the technician stills in the pinpoint-pass family, given the first pass as the locator's
+ * input: a fixture id, or null for the trade's rule. Data handed in from outside, so this folder never
+ * imports locator code.
+ */
+export type PassCaseChoice = (firstPass: Scenario["input"]) => string | null;
+
+export function buildScenario(family: Family, key: number, passCase?: PassCaseChoice): Scenario {
   const world = buildWorld(family, key);
   for (const leg of world.layout.legs) world.technician.sweep(world.map, leg);
+  const chosen = () =>
+    passCase?.({
+      plan: world.plan,
+      instrument: world.instrument,
+      readings: world.technician.readings.map((r) => ({ ...r })),
+    }) ?? null;
   const passes =
-    family === "pinpoint-pass" ? [stillAirPass({ ...world, delayS: world.instrument.transportDelayS })] : [];
+    family === "pinpoint-pass" ? [stillAirPass({ ...world, delayS: world.instrument.transportDelayS }, chosen())] : [];
   return {
     input: {
       plan: world.plan,

@@ -1,8 +1,10 @@
 // The pinpoint-pass family's second pass. After sweeping every leg with the fans running, the
-// technician walks back one delay from the highest reading, takes the case nearest that tap, stops its fans at the controller and waits
-// 3–6 min for the air to settle, then re-checks that case's front at the re-check's spacing and pace
-// in still air (the gas field solved again without those fans). The pass's readings carry its id. The
-// choice of case is the trade's rule of thumb (common practice, no published source), never the locator's.
+// technician picks a case, stops its fans at the controller and waits 3–6 min for the air to settle,
+// then re-checks that case's front at the re-check's spacing and pace in still air (the gas field
+// solved again without those fans). The pass's readings carry its id. The case is either handed in as
+// data (a harness outside simulate/ may ask the product which case it advises: this folder never sees
+// locator code), or chosen by the trade's rule of thumb: walk back one delay from the highest reading
+// and take the case nearest that tap (common practice, no published source).
 import type { Rect } from "./grid";
 import type { Random } from "./random";
 import type { FixtureSpec, Leg, StoreLayout } from "./store-types";
@@ -22,18 +24,20 @@ interface PassWorld {
 
 export const PASS_ID = "p2";
 
-export function stillAirPass(world: PassWorld): { id: string; fans: "stopped"; fixture: string } {
+/**
+ * The second pass over `chosen` (a case's fixture id), or, when none is given or it names no case of
+ * the store, over the case the trade's rule picks.
+ */
+export function stillAirPass(
+  world: PassWorld,
+  chosen: string | null = null,
+): { id: string; fans: "stopped"; fixture: string } {
   const tech = world.technician;
   const readings = tech.readings;
-  const top = readings.reduce((a, r) => (r.ppm > a.ppm ? r : a), readings[0]);
-  // the trade's rule: the gas of the peak was drawn in about one (stated) delay earlier, so walk back
-  // to where the probe was then (common practice, no published source)
-  const back = top.t - world.delayS;
-  const peak = readings.reduce((a, r) => (r.t <= top.t && Math.abs(r.t - back) < Math.abs(a.t - back) ? r : a), top);
   const cases = world.layout.fixtures.filter(
     (f) => f.kind === "open-case" || f.kind === "door-case" || f.kind === "island-case",
   );
-  const target = cases.reduce((a, f) => (rectDistance(f.rect, peak) < rectDistance(a.rect, peak) ? f : a), cases[0]);
+  const target = cases.find((f) => f.id === chosen) ?? tradeRuleCase(world, cases);
   const { leg, fromS, toS } = frontOf(world.layout.legs, target);
   const first = readings.length;
   tech.pause(world.random.uniform(180, 360));
@@ -41,6 +45,15 @@ export function stillAirPass(world: PassWorld): { id: string; fans: "stopped"; f
   tech.recheckSpan(world.map, leg, fromS, toS);
   for (let i = first; i < readings.length; i++) readings[i].pass = PASS_ID;
   return { id: PASS_ID, fans: "stopped", fixture: target.id };
+}
+
+/** The trade's rule: the peak's gas was drawn in about one (stated) delay earlier; the case nearest where the probe was then. */
+function tradeRuleCase(world: PassWorld, cases: readonly FixtureSpec[]): FixtureSpec {
+  const readings = world.technician.readings;
+  const top = readings.reduce((a, r) => (r.ppm > a.ppm ? r : a), readings[0]);
+  const back = top.t - world.delayS;
+  const peak = readings.reduce((a, r) => (r.t <= top.t && Math.abs(r.t - back) < Math.abs(a.t - back) ? r : a), top);
+  return cases.reduce((a, f) => (rectDistance(f.rect, peak) < rectDistance(a.rect, peak) ? f : a), cases[0]);
 }
 
 function rectDistance(r: Rect, p: { x: number; y: number }): number {

@@ -56,7 +56,7 @@ export function LiveGuidePanel({
       data-suspects={e.kind === "suspects" ? e.suspects.length : 0}
       data-probes={state.probes.length}
       data-estimates={state.answered}
-      className="absolute inset-x-0 bottom-0 max-h-[34vh] overflow-y-auto border-t-2 border-[#5b2d8c] bg-surface/95 px-2 py-1"
+      className="absolute inset-x-0 bottom-0 max-h-[30vh] overflow-y-auto border-t-2 border-[#5b2d8c] bg-surface/95 px-2 py-1"
     >
       <div className="flex items-center justify-between gap-2">
         <p className="min-w-0 flex-1 leading-tight">
@@ -64,6 +64,7 @@ export function LiveGuidePanel({
             className="block truncate font-bold"
             data-testid="live-first"
             data-at={first ? `${first.x} ${first.y} ${first.radius}` : undefined}
+            data-lead={!first && e.kind === "no-spot" && e.lead ? `${e.lead.x} ${e.lead.y}` : undefined}
             data-fixture={first?.fixtureId ?? undefined}
           >
             {first

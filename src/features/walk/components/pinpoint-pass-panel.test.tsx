@@ -1,9 +1,11 @@
 import { fireEvent, render, screen } from "@testing-library/react";
+import { useState } from "react";
 import { beforeAll, describe, expect, it } from "vitest";
 import type { Fixture } from "#core/contracts/fixtures";
 import type { LocalReading, LocalSweep } from "../model/local-types";
 import { startPass } from "../model/pinpoint-pass";
 import { PinpointPassPanel } from "./pinpoint-pass-panel";
+import { NoticeStrip } from "./notice-strip";
 
 const CASE: Fixture = {
   id: "11111111-1111-4111-8111-111111111111",
@@ -149,5 +151,57 @@ describe("the still-air pass panel", () => {
     expect(due.textContent).toMatch(
       /Pass 2: in defrost at the whole store\. Restore the fans now: 5:0\d past the 20 min reminder\./,
     );
+  });
+
+  it("offers the case a settled live suspect holds to before the advice of level readings elsewhere", () => {
+    // level readings along Dairy 3, but the live first suspect has settled on Dairy 4 beside it
+    const next: Fixture = { ...CASE, id: "44444444-4444-4444-8444-444444444444", label: "Dairy 4" };
+    render(
+      <PinpointPassPanel
+        sweep={sweep}
+        fixtures={[CASE, next]}
+        committed={level}
+        systems={[]}
+        readOnly={false}
+        reload={async () => {}}
+        settled={{ rank: 1, x: 10, y: 2.5, radius: 2.5, score: 0.7, riskPointId: null, fixtureId: next.id }}
+      />,
+    );
+    expect(screen.getByTestId("still-air-offer").textContent).toMatch(/^Suspect 1 holds at Dairy 4/);
+    expect(screen.queryByTestId("mixing-advice")).toBeNull();
+  });
+
+  it("on the folded strip is one line without its buttons; a tap shows the open pass in full with its cautions", () => {
+    const open = startPass(sweep, { condition: "fans-stopped", fixtureId: CASE.id }, "p2", new Date().toISOString());
+    function Strip() {
+      const [shown, setShown] = useState(false);
+      return (
+        <NoticeStrip open={shown} onOpen={setShown}>
+          <PinpointPassPanel
+            sweep={open}
+            fixtures={[CASE]}
+            committed={level}
+            systems={[{ id: CASE.systemId!, refrigerant: R290 }]}
+            readOnly={false}
+            reload={async () => {}}
+          />
+        </NoticeStrip>
+      );
+    }
+    render(<Strip />);
+    const line = screen.getByTestId("pass-banner");
+    expect(line.textContent).toMatch(/^⚠ Pass 2: fans stopped at Dairy 3\. Restore the fans in (20:00|19:5\d)\./);
+    expect(screen.queryByRole("button", { name: "Fans back on — end pass" })).toBeNull();
+    expect(screen.queryByTestId("pass-cautions")).toBeNull();
+    // a tap anywhere on the line opens it
+    fireEvent.click(line);
+    expect(screen.getByRole("button", { name: "Fans back on — end pass" })).toBeTruthy();
+    const cautions = screen.getByTestId("pass-cautions").textContent ?? "";
+    // R-290 is flammable (ASHRAE 34 class A3); the last caution defers to the codes
+    expect(cautions).toMatch(/product warms up/);
+    expect(cautions).toMatch(/flammable/);
+    expect(cautions).toMatch(/local codes/);
+    fireEvent.click(screen.getByRole("button", { name: "Fold the notices to one line" }));
+    expect(screen.queryByTestId("pass-cautions")).toBeNull();
   });
 });

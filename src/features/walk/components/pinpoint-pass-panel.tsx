@@ -8,6 +8,9 @@ import type { LocalReading, LocalSweep } from "../model/local-types";
 import { mixingAdvice } from "../model/mixing-advice";
 import { stillAirOffer } from "../model/still-air-offer";
 import { clockText, passConditionText, passNumbers } from "../model/pinpoint-pass";
+import { passCautions } from "../model/pass-cautions";
+import { Cautions } from "../../../components/ui/cautions";
+import { StripChip, useFoldedStrip } from "./notice-strip";
 import { StartPassDialog } from "./start-pass-dialog";
 
 // The words over the whole width, the actions in a row under them: a phone's header stays short.
@@ -15,9 +18,10 @@ const BANNER = "flex flex-col gap-0 rounded-md border-l-4 px-3 pt-1 text-sm lead
 const ACTIONS = "flex flex-wrap justify-end gap-x-3";
 
 /**
- * The still-air pass on the Walk screen: the advice when readings say the fans are mixing the gas (or,
- * failing that, the offer once the live first suspect has settled at a fixture whose fans run), the
- * start dialog with its cautions, and while a pass is open, its reminder to restore the fans.
+ * The still-air pass on the Walk screen: the offer once the live first suspect has settled at a fixture
+ * whose fans run (or, failing that, the advice when readings say the fans are mixing the gas, the
+ * highest level first; docs/decisions/0139), the start dialog with its cautions, and while a pass is
+ * open, its reminder to restore the fans with the cautions. On the folded strip each is one line.
  */
 export function PinpointPassPanel({
   sweep,
@@ -40,6 +44,7 @@ export function PinpointPassPanel({
   /** A pass has just been started here (the screen makes room for the plan). */
   onPassStarted?: () => void;
 }) {
+  const folded = useFoldedStrip();
   const pass = usePinpointPass(sweep, reload);
   const [dismissed, setDismissed] = useState<readonly string[]>([]);
   const [starting, setStarting] = useState<Fixture | null>(null);
@@ -55,22 +60,27 @@ export function PinpointPassPanel({
   if (pass.open && pass.reminder) {
     const r = pass.reminder;
     const number = passNumbers(sweep).get(pass.open.id) ?? 2;
-    const where = name(fixtures.find((f) => f.id === pass.open!.fixtureId));
+    const stilled = fixtures.find((f) => f.id === pass.open!.fixtureId);
+    const title = `Pass ${number}: ${passConditionText(pass.open)} at ${name(stilled)}.`;
+    const timer = r.overdue
+      ? `Restore the fans now: ${clockText(r.leftMs)} past the ${pass.open.restoreAfterMin} min reminder.`
+      : `Restore the fans in ${clockText(r.leftMs)}.`;
+    const role = r.overdue ? "alert" : "status";
+    // the cautions are one tap away on the folded line (⚠), and in full with the pass's banner
+    if (folded)
+      return (
+        <StripChip tone={r.overdue ? "danger" : "accent"} role={role} data-testid="pass-banner">
+          ⚠ {title} <span data-testid="pass-timer">{timer}</span>
+        </StripChip>
+      );
     return (
       <div
-        role={r.overdue ? "alert" : "status"}
+        role={role}
         data-testid="pass-banner"
         className={`${BANNER} ${r.overdue ? "border-danger bg-danger-soft" : "border-accent bg-accent-soft"}`}
       >
         <span>
-          <strong className="text-base">
-            Pass {number}: {passConditionText(pass.open)} at {where}.
-          </strong>{" "}
-          <span data-testid="pass-timer">
-            {r.overdue
-              ? `Restore the fans now: ${clockText(r.leftMs)} past the ${pass.open.restoreAfterMin} min reminder.`
-              : `Restore the fans in ${clockText(r.leftMs)}.`}
-          </span>
+          <strong className="text-base">{title}</strong> <span data-testid="pass-timer">{timer}</span>
         </span>
         <span className={ACTIONS}>
           <button
@@ -84,13 +94,45 @@ export function PinpointPassPanel({
             Fans back on — end pass
           </button>
         </span>
+        <div className="pb-2 text-sm" data-testid="pass-cautions">
+          <Cautions items={passCautions(stilled, fixtures, systems)} title="While the air is still" />
+        </div>
       </div>
     );
   }
   const first = advice[0];
+  const dialog = starting ? (
+    <StartPassDialog
+      fixture={starting}
+      fixtures={fixtures}
+      systems={systems}
+      onClose={() => setStarting(null)}
+      onStart={(s) => {
+        setStarting(null);
+        void pass.start(s);
+        onPassStarted?.();
+      }}
+    />
+  ) : null;
+  if (folded)
+    return (
+      <>
+        {offer ? (
+          <StripChip tone="note" role="status" data-testid="still-air-offer">
+            Suspect 1 holds at {name(offer)}: its fans spread the gas. Still-air pass?
+          </StripChip>
+        ) : first ? (
+          <StripChip tone="note" role="status" data-testid="mixing-advice">
+            Level at about {first.levelPpm} ppm across {name(first.fixture)}: its fans are mixing the gas. Still-air
+            pass?
+          </StripChip>
+        ) : null}
+        {dialog}
+      </>
+    );
   return (
     <>
-      {first ? (
+      {offer ? null : first ? (
         <div role="status" data-testid="mixing-advice" className={`${BANNER} border-note bg-note-soft`}>
           <span>
             <strong className="text-base">
@@ -115,7 +157,8 @@ export function PinpointPassPanel({
             </button>
           </span>
         </div>
-      ) : offer ? (
+      ) : null}
+      {offer ? (
         <div role="status" data-testid="still-air-offer" className={`${BANNER} border-note bg-note-soft`}>
           <span>
             <strong className="text-base">Suspect 1 holds at {name(offer)}:</strong> its fans spread the gas. Stop them
@@ -135,19 +178,7 @@ export function PinpointPassPanel({
           </span>
         </div>
       ) : null}
-      {starting ? (
-        <StartPassDialog
-          fixture={starting}
-          fixtures={fixtures}
-          systems={systems}
-          onClose={() => setStarting(null)}
-          onStart={(s) => {
-            setStarting(null);
-            void pass.start(s);
-            onPassStarted?.();
-          }}
-        />
-      ) : null}
+      {dialog}
     </>
   );
 }

@@ -1,7 +1,16 @@
 import { useState } from "react";
 import { ALARM_DOT_FACTOR, markLooks, TRACE_DOT_FACTOR, type MarkLook } from "../model/plan-marks";
 
-type Swatch = "area" | "area-dashed" | "diamond" | "dot" | "ring" | "dashed-dot" | "dashed-ring" | "square";
+type Swatch =
+  | "area"
+  | "area-dashed"
+  | "diamond"
+  | "dot"
+  | "ring"
+  | "dashed-dot"
+  | "dashed-ring"
+  | "square"
+  | "crosshair";
 
 function SwatchIcon({ kind, look, scale = 1 }: { kind: Swatch; look: MarkLook; scale?: number }) {
   const r = 5 * scale;
@@ -37,6 +46,12 @@ function SwatchIcon({ kind, look, scale = 1 }: { kind: Swatch; look: MarkLook; s
       {kind === "dashed-ring" ? (
         <circle cx="14" cy="10" r="8" fill={look.fill} stroke={look.stroke} strokeWidth="2" strokeDasharray="4 3" />
       ) : null}
+      {kind === "crosshair" ? (
+        <g stroke={look.stroke} fill="none">
+          <circle cx="14" cy="10" r="6" strokeWidth="2" strokeDasharray="2 2" />
+          <path d="M4 10h20M14 1v18" strokeWidth="1.5" />
+        </g>
+      ) : null}
       {kind === "square" ? (
         <rect x="8" y="4" width="12" height="12" fill={look.fill} stroke={look.stroke} strokeWidth="2" />
       ) : null}
@@ -64,6 +79,7 @@ export function PlanLegend({ highContrast }: { highContrast: boolean }) {
     ["diamond", look.sampledAt, "Where the peak's air was sampled"],
     ["ring", look.recheck, "Re-check here"],
     ["dashed-ring", look.liveSuspect, "Live suspect and its radius (an estimate on this device)"],
+    ["crosshair", look.liveLead, "No credible spot yet: where the gas is strongest so far"],
     ["square", look.nextProbe, "Next probe point (numbered in walking order)"],
   ];
   return (

@@ -75,7 +75,7 @@ export function PpmKeypad(props: PpmKeypadProps) {
   return (
     <section
       aria-label="Enter the detector's reading"
-      className="flex flex-col gap-2 bg-surface p-2 edge border-x-0 border-b-0"
+      className="flex flex-col gap-1.5 bg-surface px-2 py-1.5 edge border-x-0 border-b-0"
       data-testid="ppm-keypad"
     >
       <div className="flex items-center gap-1.5">

@@ -1,9 +1,7 @@
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import type { Fixture } from "#core/contracts/fixtures";
 import { FIXTURE_KIND_NAMES } from "#core/contracts/fixture-kinds";
 import type { RefrigerantSummary } from "#core/contracts/systems";
-import { refrigerantOfSummary } from "#core/domain/refrigerants/company-refrigerant";
-import { pinpointPassCautions } from "#core/domain/safety/pinpoint-cautions";
 import { Button } from "../../../components/ui/button";
 import { Cautions } from "../../../components/ui/cautions";
 import { Dialog } from "../../../components/ui/dialog";
@@ -14,7 +12,7 @@ import {
   type PassCondition,
   type PassStart,
 } from "../model/pinpoint-pass";
-import { roomSystemIds } from "../model/room-entry";
+import { passCautions } from "../model/pass-cautions";
 
 /**
  * Starting a still-air pass over one fixture: fans stopped or a defrost, the reminder's minutes, and the
@@ -37,14 +35,17 @@ export function StartPassDialog({
 }) {
   const [condition, setCondition] = useState<PassCondition>("fans-stopped");
   const [minutes, setMinutes] = useState(DEFAULT_RESTORE_AFTER_MIN);
-  const room =
-    fixture.kind === "walk-in-cooler" || fixture.kind === "walk-in-freezer" || fixture.kind === "machine-room";
-  const ids = roomSystemIds(fixtures, fixture);
-  const refrigerants = systems.filter((s) => ids.includes(s.id)).map((s) => refrigerantOfSummary(s.refrigerant));
-  const place = fixture.kind === "machine-room" ? "machine-room" : room ? "walk-in" : "sales-floor";
+  // The dialog focuses its first control as it opens, scrolling the cautions above it out of sight on a
+  // phone: they take the focus instead (this runs after the dialog's own effect), so they show in full.
+  const cautionsRef = useRef<HTMLDivElement>(null);
+  useEffect(() => cautionsRef.current?.focus(), []);
   const name = fixture.label || FIXTURE_KIND_NAMES[fixture.kind];
   return (
     <Dialog title={`Still-air pass at ${name}`} open onClose={onClose}>
+      {/* first, so they show in full on a phone as the pass starts (the running pass keeps them one tap away) */}
+      <div data-testid="start-pass-cautions" ref={cautionsRef} tabIndex={-1} className="outline-none">
+        <Cautions items={passCautions(fixture, fixtures, systems)} title="Before you stop the fans" />
+      </div>
       <p>
         Stop the fans of {name} (or start its defrost) at the case or its controller, then start the pass. Readings you
         take now are marked as taken in still air.
@@ -91,7 +92,6 @@ export function StartPassDialog({
           +
         </Button>
       </div>
-      <Cautions items={pinpointPassCautions(place, refrigerants)} title="Before you stop the fans" />
       <div className="flex gap-2">
         <Button variant="secondary" className="flex-1" onClick={onClose}>
           Not now

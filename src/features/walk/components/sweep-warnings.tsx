@@ -1,9 +1,19 @@
 import { useState, type ReactNode } from "react";
 import type { SweepWarning } from "#core/contracts/sweeps";
+import { StripChip, useFoldedStrip } from "./notice-strip";
 
 /** The sync banner (children) with the sweep's warnings beside it, opened on a tap. */
 export function SweepWarnings({ warnings, children }: { warnings: readonly SweepWarning[]; children: ReactNode }) {
+  const folded = useFoldedStrip();
   const [open, setOpen] = useState(false);
+  const count = `${warnings.length} ${warnings.length === 1 ? "warning" : "warnings"}`;
+  if (folded)
+    return (
+      <>
+        {children}
+        {warnings.length ? <StripChip tone="note">{count}</StripChip> : null}
+      </>
+    );
   return (
     <>
       <div className="flex gap-2">
@@ -15,7 +25,7 @@ export function SweepWarnings({ warnings, children }: { warnings: readonly Sweep
             onClick={() => setOpen(!open)}
             className="min-h-12 shrink-0 rounded-md border-l-4 border-note bg-note-soft px-3 font-bold text-note edge"
           >
-            {warnings.length} {warnings.length === 1 ? "warning" : "warnings"}
+            {count}
           </button>
         ) : null}
       </div>

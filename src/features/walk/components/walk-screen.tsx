@@ -39,6 +39,8 @@ import { ReadingsDrawer } from "./readings-drawer";
 import { SubmitSummary } from "./submit-summary";
 import { SweepWarnings } from "./sweep-warnings";
 import { SyncBanner } from "./sync-banner";
+import { NoticeStrip } from "./notice-strip";
+import { DoneNotice, RefusedSweepNotice } from "./walk-notices";
 import { WalkTools } from "./walk-tools";
 
 const SUBMITTED_NOTICE = "Sweep submitted on this device. It goes to the server as soon as every reading is uploaded.";
@@ -139,6 +141,8 @@ export function WalkScreen({
   );
   // The live guide starts folded to one line over the plan's bottom edge: the plan stays the screen.
   const [guideOpen, setGuideOpen] = useState(false);
+  // The banners start folded to one line too.
+  const [noticesOpen, setNoticesOpen] = useState(false);
   const settled = useMemo(() => settledSuspect(live), [live]);
   const supply = useMemo(() => supplyCheckOf(settled, committed), [settled, committed]);
   const recent = useMemo(() => {
@@ -173,6 +177,8 @@ export function WalkScreen({
       return;
     }
     if (effect.kind !== "take-reading") return;
+    // the keypad takes the room: the banners fold to their line
+    setNoticesOpen(false);
     const open = draftRef.current;
     const before = readingsRef.current.filter((r) => r.sync.kind !== "draft" || r.id === open);
     const previous = before.length ? before[before.length - 1] : null;
@@ -238,7 +244,7 @@ export function WalkScreen({
 
   return (
     <div className="fixed inset-0 z-30 flex flex-col bg-paper" data-testid="walk-screen">
-      <header className="flex flex-col gap-2 bg-surface p-2 edge border-x-0 border-t-0">
+      <header className="flex flex-col gap-1 bg-surface px-2 py-1 edge border-x-0 border-t-0">
         <div className="flex items-center justify-between gap-2">
           <button
             type="button"
@@ -257,17 +263,52 @@ export function WalkScreen({
           </p>
           {contrastToggle}
         </div>
-        <SweepWarnings warnings={sweep.warnings}>
-          <SyncBanner status={sync} onShowRejected={() => setDialog("list")} />
-        </SweepWarnings>
-        {sweep.sync.kind === "refused" ? (
-          <Alert tone="error" title="The server refused this sweep">
-            {Object.entries(sweep.sync.reasons)
-              .map(([k, m]) => (k ? `${k} ${m}` : m))
-              .join("; ")}{" "}
-            Its readings stay on this device.
-          </Alert>
-        ) : null}
+        {/* Every banner folds into one line that a tap opens: the plan keeps the phone (decision 0140). */}
+        {/* The banners and the guide open one at a time: the two together would cover the plan. */}
+        <NoticeStrip
+          open={noticesOpen && !keypadFor}
+          onOpen={(open) => {
+            setNoticesOpen(open);
+            if (open) setGuideOpen(false);
+          }}
+        >
+          <PinpointPassPanel
+            sweep={sweep}
+            fixtures={fixtures}
+            committed={committed}
+            systems={storePack.data?.systems ?? []}
+            readOnly={readOnly}
+            reload={walk.reload}
+            settled={settled}
+            // the pass is walked on the plan: the guide folds to its line (the dialog showed the cautions in
+            // full; the pass's line keeps them one tap away)
+            onPassStarted={() => setGuideOpen(false)}
+          />
+          {showHint ? (
+            <LagHintBanner
+              hint={showHint}
+              ppm={peak?.ppm ?? 0}
+              atLeast={peak?.atLeast ?? false}
+              readingNumber={peak ? all.indexOf(peak) + 1 : 0}
+              place={peakPlace}
+              lengthUnit={lengthUnit}
+              compact={keypadFor !== null}
+              onDismiss={() => setDismissedAlarm(showHint.index)}
+            />
+          ) : null}
+          <RefusedSweepNotice sync={sweep.sync} />
+          <DoneNotice
+            text={
+              notice === SUBMITTED_NOTICE && sweep.status !== "in-progress"
+                ? "Sweep submitted: the server has it."
+                : notice
+            }
+            onDismiss={() => setNotice(null)}
+          />
+          <SweepWarnings warnings={sweep.warnings}>
+            <SyncBanner status={sync} onShowRejected={() => setDialog("list")} />
+          </SweepWarnings>
+        </NoticeStrip>
         {mode.kind === "placing-leak" ? <Alert tone="info">Tap the plan where the leak is.</Alert> : null}
         {mode.kind === "moving" ? (
           <div
@@ -285,41 +326,6 @@ export function WalkScreen({
               Cancel move
             </button>
           </div>
-        ) : null}
-        {notice ? (
-          <Alert tone="success">
-            <span>
-              {notice === SUBMITTED_NOTICE && sweep.status !== "in-progress"
-                ? "Sweep submitted: the server has it."
-                : notice}{" "}
-            </span>
-            <button type="button" className="min-h-12 underline" onClick={() => setNotice(null)}>
-              Dismiss
-            </button>
-          </Alert>
-        ) : null}
-        <PinpointPassPanel
-          sweep={sweep}
-          fixtures={fixtures}
-          committed={committed}
-          systems={storePack.data?.systems ?? []}
-          readOnly={readOnly}
-          reload={walk.reload}
-          settled={settled}
-          // the pass is walked on the plan: the guide folds to its one line
-          onPassStarted={() => setGuideOpen(false)}
-        />
-        {showHint ? (
-          <LagHintBanner
-            hint={showHint}
-            ppm={peak?.ppm ?? 0}
-            atLeast={peak?.atLeast ?? false}
-            readingNumber={peak ? all.indexOf(peak) + 1 : 0}
-            place={peakPlace}
-            lengthUnit={lengthUnit}
-            compact={keypadFor !== null}
-            onDismiss={() => setDismissedAlarm(showHint.index)}
-          />
         ) : null}
       </header>
       <div className="flex min-h-0 flex-1 flex-col landscape:md:flex-row">
@@ -340,6 +346,7 @@ export function WalkScreen({
             overlay={(zoom) => (
               <LiveMarks
                 suspects={live.estimate?.kind === "suspects" ? live.estimate.suspects : []}
+                lead={live.estimate?.kind === "no-spot" ? (live.estimate.lead ?? null) : null}
                 probes={live.probes}
                 zoom={zoom}
                 highContrast={highContrast}
@@ -357,7 +364,10 @@ export function WalkScreen({
                 onTap(s.x, s.y, Date.now(), { samplePoint: "supply", note: supplyAirNote(s, liveWords) })
               }
               folded={!guideOpen}
-              onFold={(folded) => setGuideOpen(!folded)}
+              onFold={(folded) => {
+                setGuideOpen(!folded);
+                if (!folded) setNoticesOpen(false);
+              }}
               fieldMapHref={
                 sweep.status === "submitted" && sweep.sync.kind === "on-server"
                   ? `/stores/${sweep.storeId}/sweeps/${sweep.id}/map`

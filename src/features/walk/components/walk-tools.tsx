@@ -14,7 +14,7 @@ export function WalkTools(props: {
   onSubmit(): void;
 }) {
   return (
-    <nav aria-label="Sweep tools" className="flex gap-2 bg-surface p-2 edge border-x-0 border-b-0">
+    <nav aria-label="Sweep tools" className="flex gap-2 bg-surface px-2 py-1 edge border-x-0 border-b-0">
       <button
         type="button"
         className={`${TOOL} bg-surface`}

@@ -46,6 +46,24 @@ describe("the advice to stop the fans", () => {
     expect(advice.map((a) => [a.fixture.id, a.count, a.levelPpm])).toEqual([[CASE.id, 7, 6.5]]);
   });
 
+  it("names the case with the highest level first when several read level (the fans spread one leak's gas)", () => {
+    // a second case across the aisle (y 8–9), its front at y = 7.8, level at 5 ppm; the first case at 6.5 ppm
+    const across: Fixture = {
+      ...CASE,
+      id: "33333333-3333-4333-8333-333333333333",
+      label: "Dairy 9",
+      polygon: [
+        [1, 8],
+        [9, 8],
+        [9, 9],
+        [1, 9],
+      ],
+    };
+    const readings = [...walk([6, 6.5, 6, 7, 6.5]), ...[5, 5.5, 5, 5, 5.5].map((ppm, i) => reading(1.5 + i, 7.8, ppm))];
+    const advice = mixingAdvice(sweep, [across, CASE], readings, 2);
+    expect(advice.map((a) => a.fixture.label)).toEqual(["Dairy 3", "Dairy 9"]);
+  });
+
   it("is not given for a plume that points at a spot, for level readings under the alarm, or with the fans stopped", () => {
     expect(mixingAdvice(sweep, [CASE], walk([1, 2, 6, 14, 6, 2, 1]), 2)).toEqual([]);
     expect(mixingAdvice(sweep, [CASE], walk([1.5, 1.5, 1.5, 1.5, 1.5]), 2)).toEqual([]);

@@ -30,7 +30,9 @@ function fansRanFor(
  * The fixtures whose readings are level and elevated all across while their fans run: the locator's own
  * mixing test (core/analysis/locator/diagnostics.ts, `fansMixing`) on the readings committed so far, over
  * the background of those readings. Stopping the fans or a defrost lets the gas settle where it leaks.
- * Fixtures a pass already stilled are not advised again.
+ * Fixtures a pass already stilled are not advised again. The highest level comes first: with fans in
+ * every case the gas of one leak reads level across several, and most of it where it leaks
+ * (docs/decisions/0139).
  */
 export function mixingAdvice(
   sweep: Pick<LocalSweep, "fans" | "passes">,
@@ -62,5 +64,5 @@ export function mixingAdvice(
     );
     if (d && d.kind === "fans-mixing") out.push({ fixture: { ...f, polygon }, count: d.count, levelPpm: d.levelPpm });
   }
-  return out;
+  return out.sort((a, b) => b.levelPpm - a.levelPpm);
 }

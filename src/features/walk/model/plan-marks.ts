@@ -22,9 +22,17 @@ export function markLooks(highContrast: boolean) {
     sampledAt: { fill: "#ffd600", stroke: "#000000" },
     recheck: { fill: "none", stroke: "#9b2c2c" },
     liveSuspect: { fill: "rgba(91,45,140,0.10)", stroke: highContrast ? "#000000" : "#5b2d8c" },
+    // no fill and no radius: a lead is not a suspect spot, only where the gas is strongest so far
+    liveLead: { fill: "none", stroke: highContrast ? "#000000" : "#5b2d8c" },
     nextProbe: { fill: highContrast ? "#ffffff" : "#e8f3ee", stroke: highContrast ? "#000000" : "#1d6b4f" },
   } satisfies Record<string, MarkLook>;
 }
+
+/**
+ * The provisional lead's crosshair on screen, px: a fixed size at every zoom (it has no radius to draw),
+ * a thumb's width, so it reads as a place to probe around and never as a suspect's circle.
+ */
+export const LEAD_MARK_PX = 14;
 
 /** How much bigger an alarm's dot is than a plain reading's: the eye finds it first. */
 export const ALARM_DOT_FACTOR = 1.4;
