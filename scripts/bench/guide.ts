@@ -30,12 +30,19 @@ const out = option("--out", "");
 /** Summarise saved results instead of running: --merge a.json,b.json */
 const merge = option("--merge", "");
 
+/**
+ * The median of counts where a run that never got within 0.6 m counts as more than the budget
+ * (Infinity): the middle value of the sorted list (for an even count, the mean of the two middle ones),
+ * so it is finite only when more than half the runs got there.
+ */
 const median = (xs: number[]) => {
   if (xs.length === 0) return Number.NaN;
   const s = [...xs].sort((a, b) => a - b);
   return s.length % 2 ? s[(s.length - 1) / 2] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
 };
-const fmt = (v: number, digits = 1) => (Number.isFinite(v) ? v.toFixed(digits) : "never");
+const fmt = (v: number, digits = 1) => (Number.isFinite(v) ? v.toFixed(digits) : `> ${READING_BUDGET}`);
+const fmtM = (v: number, digits = 1) => (Number.isFinite(v) ? v.toFixed(digits) : "never");
+const fmtError = (v: number) => (Number.isFinite(v) ? v.toFixed(2) : "no mark");
 
 function summarise(rows: LoopResult[]) {
   const alarmed = rows.filter((r) => r.alarmed);
@@ -45,11 +52,42 @@ function summarise(rows: LoopResult[]) {
   return {
     stores: rows.length,
     alarmed: alarmed.length,
+    found: found.length,
     medianReadings: median(readings),
     medianMetres: median(alarmed.map((r) => r.metresToFind ?? Number.POSITIVE_INFINITY)),
-    within40: alarmed.length ? found.length / alarmed.length : Number.NaN,
     medianFinalError: median(alarmed.map((r) => r.finalErrorM)),
+    within15: alarmed.filter((r) => r.finalErrorM <= 1.5).length,
+    medianTaken: median(alarmed.map((r) => r.readingsTaken)),
   };
+}
+
+/**
+ * Store by store, guided against the trade rule on the same store (never found counts as more than
+ * the budget): how often guided got within 0.6 m in fewer readings, in as many, or in more.
+ */
+function paired(rows: LoopResult[]) {
+  const byStore = new Map<number, { trade?: LoopResult; guided?: LoopResult }>();
+  for (const r of rows) {
+    const pair = byStore.get(r.store) ?? {};
+    if (r.policy === tradeRule.name) pair.trade = r;
+    if (r.policy === guided.name) pair.guided = r;
+    byStore.set(r.store, pair);
+  }
+  const count = (r: LoopResult) => r.readingsToFind ?? Number.POSITIVE_INFINITY;
+  let fewer = 0;
+  let same = 0;
+  let more = 0;
+  let closer = 0;
+  let farther = 0;
+  for (const { trade, guided: g } of byStore.values()) {
+    if (!trade?.alarmed || !g?.alarmed) continue;
+    if (count(g) < count(trade)) fewer++;
+    else if (count(g) === count(trade)) same++;
+    else more++;
+    if (g.finalErrorM < trade.finalErrorM) closer++;
+    else if (g.finalErrorM > trade.finalErrorM) farther++;
+  }
+  return { fewer, same, more, closer, farther };
 }
 
 const started = Date.now();
@@ -69,21 +107,32 @@ for (const family of merge ? [] : families) {
       all.push(r);
       if (out) writeFileSync(out, JSON.stringify(all));
       console.log(
-        `${family}-${n} ${policy.name}: ${r.alarmed ? `${r.readingsToFind ?? "not found"} readings to 0.6 m, final ${fmt(r.finalErrorM, 2)} m, ${r.readingsTaken} taken` : "no alarm"}`,
+        `${family}-${n} ${policy.name}: ${r.alarmed ? `${r.readingsToFind ?? "not found"} readings to 0.6 m, final ${fmtError(r.finalErrorM)}, ${r.readingsTaken} taken` : "no alarm"}`,
       );
     }
   }
 }
 console.log(
-  `\n| family | policy | alarmed | median readings to 0.6 m | median metres | found within ${READING_BUDGET} | median final error m |`,
+  `\n| family | policy | alarmed | found within ${READING_BUDGET} | median readings to 0.6 m | median metres to 0.6 m | median final error m | final within 1.5 m | median readings taken |`,
 );
-console.log("| --- | --- | ---: | ---: | ---: | ---: | ---: |");
+console.log("| --- | --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: |");
+const shown = merge ? [tradeRule, guided] : policies;
 for (const family of [...new Set(all.map((r) => r.family))]) {
-  for (const policy of merge ? [tradeRule, guided] : policies) {
+  for (const policy of shown) {
     const s = summarise(all.filter((r) => r.family === family && r.policy === policy.name));
     console.log(
-      `| ${family} | ${policy.name} | ${s.alarmed}/${s.stores} | ${fmt(s.medianReadings, 0)} | ${fmt(s.medianMetres)} | ${fmt(100 * s.within40, 0)}% | ${fmt(s.medianFinalError, 2)} |`,
+      `| ${family} | ${policy.name} | ${s.alarmed}/${s.stores} | ${s.found} of ${s.alarmed} | ${fmt(s.medianReadings, 1)} | ${fmtM(s.medianMetres)} | ${fmtError(s.medianFinalError)} | ${s.within15} of ${s.alarmed} | ${fmt(s.medianTaken, 1)} |`,
     );
+  }
+}
+if (shown.length === 2) {
+  console.log(
+    "\n| family | guided to 0.6 m in fewer / as many / more readings | guided's final error smaller / larger |",
+  );
+  console.log("| --- | ---: | ---: |");
+  for (const family of [...new Set(all.map((r) => r.family))]) {
+    const p = paired(all.filter((r) => r.family === family));
+    console.log(`| ${family} | ${p.fewer} / ${p.same} / ${p.more} | ${p.closer} / ${p.farther} |`);
   }
 }
 console.log(`\n${all.length} runs in ${((Date.now() - started) / 1000).toFixed(0)} s`);

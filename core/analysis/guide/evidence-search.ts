@@ -63,9 +63,9 @@ const ROOMS = new Set(["walk-in", "machine-room"]);
  * leaks are found at case backs, joints, coils and line-set drops): every SITE_SPACING_M along each
  * case side that no probe can reach (against a wall, a spine or another case), BACK_INSET_M inside;
  * for a case open on every side (an island), along its middle; each risk point; the middle and the
- * risk points of a walk-in or machine room whose walls come within reach.
+ * risk points of a walk-in or machine room whose walls come within `roomReachM`.
  */
-export function leakSites(plan: Plan, near: { x: number; y: number }, reachM: number): LeakSite[] {
+export function leakSites(plan: Plan, near: { x: number; y: number }, reachM: number, roomReachM = reachM): LeakSite[] {
   const within = (x: number, y: number) => Math.hypot(x - near.x, y - near.y) <= reachM;
   const open = isOpenFloor(plan);
   const out: LeakSite[] = [];
@@ -73,7 +73,7 @@ export function leakSites(plan: Plan, near: { x: number; y: number }, reachM: nu
     const ring = f.polygon;
     if (ROOMS.has(f.kind)) {
       // A room whose walls come within reach: its middle, and its risk points (coils, drops) below.
-      if (!roomWithin(ring, near, reachM)) continue;
+      if (!roomWithin(ring, near, roomReachM)) continue;
       const [cx, cy] = centroid(ring);
       out.push({ x: cx, y: cy, fixtureId: f.id, prior: 1 });
       for (const p of plan.riskPoints)
@@ -212,6 +212,8 @@ function centroid(ring: readonly (readonly number[])[]): [number, number] {
 export const ALARM_REACH_M = 3;
 /** Readings this far beyond the sites' reach still weigh them (the kernel's reach, about twice its screening length; m). */
 const EVIDENCE_REACH_M = 3;
+/** Rooms (walk-ins, machine rooms) are searched this much farther out than cases (m; tried on stores 6001-6010). */
+const ROOM_EXTRA_M = 2;
 /** A probe place this close to a place already read is not offered again (m). */
 const READ_WITHIN_M = 0.3;
 
@@ -250,9 +252,10 @@ export function searchAroundAlarm(args: {
   const discs = [{ at: centre, reach }];
   if (strongest) discs.push({ at: strongest, reach: ALARM_REACH_M });
   for (const a of args.also ?? []) discs.push({ at: a, reach: a.reach });
-  const sites = unique(discs.flatMap((d) => leakSites(plan, d.at, d.reach)));
+  // A room's gas leaves by its door and spreads along the corridor: rooms count from farther off.
+  const sites = unique(discs.flatMap((d) => leakSites(plan, d.at, d.reach, d.reach + ROOM_EXTRA_M)));
   const hypotheses = weighSites(sites, near, backgroundOf(near), kernel);
-  const places = unique(discs.flatMap((d) => probePlaces(plan, d.at, d.reach))).filter(
+  const places = unique(discs.flatMap((d) => probePlaces(plan, d.at, d.reach, 0.6, d.reach + ROOM_EXTRA_M))).filter(
     (p) => !read.some((r) => Math.hypot(r.x - p.x, r.y - p.y) < READ_WITHIN_M),
   );
   return {

@@ -47,6 +47,24 @@ describe("probePlaces", () => {
     expect(probePlaces(plan, { x: 5, y: 1 }, 2).some((p) => p.fixtureId === "walk-in")).toBe(false);
   });
 
+  it("offers a walk-in from farther off when asked (roomReachM), and high at each coil in it", () => {
+    const withCoil = {
+      ...plan,
+      riskPoints: [...plan.riskPoints, { id: "coil-1", kind: "coil" as const, x: 10, y: 0.35 }],
+    };
+    // the walk-in's west wall (x = 8) is 3 m from (5, 1): out of a 2 m reach, within a 4 m room reach
+    expect(probePlaces(withCoil, { x: 5, y: 1 }, 2).some((p) => p.fixtureId === "walk-in")).toBe(false);
+    expect(
+      probePlaces(withCoil, { x: 5, y: 1 }, 2, 0.6, 4)
+        .filter((p) => p.fixtureId === "walk-in")
+        .map((p) => [p.kind, p.x, p.y]),
+    ).toEqual([
+      ["room-low", 10, 1.5],
+      ["room-high", 10, 1.5],
+      ["room-high", 10, 0.35],
+    ]);
+  });
+
   it("offers the middle of a walk-in low and high, and line-set drops", () => {
     const all = probePlaces(plan, { x: 8, y: 1 }, 5);
     expect(all.filter((p) => p.fixtureId === "walk-in").map((p) => p.kind)).toEqual(["room-low", "room-high"]);

@@ -32,10 +32,16 @@ export function isOpenFloor(plan: Plan): (x: number, y: number) => boolean {
 /**
  * Probe places within `reachM` of `near`: every `spacingM` along the open sides of each case (not
  * inside a solid body or another fixture), the middle of each walk-in and machine room whose walls
- * come within reach (low and high), and each line-set drop. The trade re-checks case fronts every 0.6 m (common practice, no
+ * come within `roomReachM` (low and high) and each coil in it (high), and each line-set drop. The trade re-checks case fronts every 0.6 m (common practice, no
  * published source).
  */
-export function probePlaces(plan: Plan, near: { x: number; y: number }, reachM: number, spacingM = 0.6): ProbePlace[] {
+export function probePlaces(
+  plan: Plan,
+  near: { x: number; y: number },
+  reachM: number,
+  spacingM = 0.6,
+  roomReachM = reachM,
+): ProbePlace[] {
   const within = (x: number, y: number) => Math.hypot(x - near.x, y - near.y) <= reachM;
   const open = isOpenFloor(plan);
   const out: ProbePlace[] = [];
@@ -43,9 +49,13 @@ export function probePlaces(plan: Plan, near: { x: number; y: number }, reachM: 
     if (ROOMS.has(f.kind)) {
       const [cx, cy] = centroid(f.polygon);
       // A room counts when its walls come within reach: its gas leaves by the door, its fans mix it.
-      if (roomWithin(f.polygon, near, reachM)) {
+      if (roomWithin(f.polygon, near, roomReachM)) {
         out.push({ x: cx, y: cy, kind: "room-low", fixtureId: f.id });
         out.push({ x: cx, y: cy, kind: "room-high", fixtureId: f.id });
+        // at each coil in the room: evaporator coils hang high, and a leak there is read in their air
+        for (const p of plan.riskPoints)
+          if (p.kind === "coil" && pointInPolygon([p.x, p.y], f.polygon))
+            out.push({ x: p.x, y: p.y, kind: "room-high", fixtureId: f.id });
       }
       continue;
     }

@@ -58,19 +58,23 @@ export function runLoop(family: Family, store: number, policy: Policy): LoopResu
       continue;
     }
     from ??= { readings: tech.readings.length, metres: tech.walkedM };
+    // the truth, for the person reading a trace (the policy never sees it)
+    if (process.env.GUIDE_TRACE) console.log(JSON.stringify({ leaks: world.truth.leaks, alarm: tap }));
     const run = policy.run({ world, leg: legs[leg], alarmAtS });
     let outcome: IteratorResult<PolicyStep, "marked" | "nothing">;
     while (!(outcome = run.next()).done) {
       const mark = outcome.value.mark;
       finalErrorM = mark ? nearestLeakM(world, mark) : Number.POSITIVE_INFINITY;
-      if (readingsToFind === null && finalErrorM <= FOUND_WITHIN_M) {
+      // Found only within the budget: a sweep between alarms can carry the count past it.
+      if (readingsToFind === null && finalErrorM <= FOUND_WITHIN_M && taken() <= READING_BUDGET) {
         readingsToFind = taken();
         metresToFind = tech.walkedM - from.metres;
       }
       if (taken() >= READING_BUDGET) break;
     }
     if (outcome.done && outcome.value === "marked") break;
-    // A blip: the sweep goes on just past the stop that alarmed.
+    // A blip: the sweep goes on just past the stop that alarmed, and no mark of this search stands.
+    if (outcome.done) finalErrorM = Number.POSITIVE_INFINITY;
     fromS = alarmAtS + 0.01;
   }
   return {

@@ -97,7 +97,9 @@ export const tradeRule: Policy = {
         best = { x: r.x, y: r.y, ppm: r.ppm };
         falls = 0;
       } else if (best.ppm >= world.instrument.alarmPpm && r.ppm < best.ppm) falls++;
-      const step: PolicyStep = { mark: best ? markOnFixture(world.layout.fixtures, best) : null };
+      // Marked only once a re-check reaches the alarm: below it the rule has no peak to mark.
+      const peaked = best !== null && best.ppm >= world.instrument.alarmPpm;
+      const step: PolicyStep = { mark: peaked && best ? markOnFixture(world.layout.fixtures, best) : null };
       yield step;
       if (falls >= FALLS_AFTER_PEAK) return "marked";
     }
