@@ -50,8 +50,8 @@ export interface DelayCheckSettings {
   readonly minShareOfStated: number;
   /**
    * Less pair weight than `supportPairWeight` (but at least `minPairWeight`) still supports an estimate
-   * whose misfit is at most this share of the stated one (a deep, clear minimum: at the stated delay no
-   * benchmark store came under 0.35), ...
+   * whose misfit is at most this share of the stated one (a deep, clear minimum; at the stated delay the
+   * two benchmark stores under it are held by the minimum change), ...
    */
   readonly thinMaxMisfitRatio: number;
   /** ... and that is at most this many times the stated shift (decision 0068). */
