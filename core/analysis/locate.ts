@@ -4,6 +4,7 @@ import { createPlanGrid } from "./grid/plan-grid";
 import { DEFAULT_LOCATOR_OPTIONS, type LocatorOptions } from "./locator/locator-options";
 import { mixedLevel } from "./locator/mixed-level";
 import { readingAir } from "./locator/pass-air";
+import { passStartReadings, unfitted } from "./locator/pass-start";
 import { casesRunFans, fanStepScale } from "./locator/plan-masks";
 import { LOCATOR_SETTINGS, type LocatorSettings } from "./locator/settings";
 import { delayDiagnostics, delayStage } from "./pipeline/delay-stage";
@@ -75,11 +76,13 @@ export function locate(
     });
     return { lag, zones };
   };
-  // each pass in its own air, and a stilled fixture's mixed readings as its level (they depend on the lag)
+  // each pass in its own air, a stilled fixture's mixed readings as its level, and no source fitted to a
+  // pass's readings from before its first delay (all depend on the lag)
   const passFit = ({ lag, zones }: ReturnType<typeof lagAndZones>): PassFit => {
     const level = other ? mixedLevel(plan, air, lag, zones.zoneOfReading, instrument.alarmPpm) : null;
+    const levelOnly = other ? unfitted(level?.levelOnly, passStartReadings(air, lag.positions)) : undefined;
     return {
-      otherAir: other && level ? { ...other, levelOnly: level.levelOnly } : other,
+      otherAir: other && levelOnly ? { ...other, levelOnly } : other,
       levelColumns: level?.columns ?? [],
     };
   };
