@@ -99,6 +99,15 @@ describe("the joint fit of a first pass and a still-air pass", () => {
     });
   }
 
+  // One still-air reading says how much gas is there, not which way the leak lies: the stilled case's
+  // first-pass readings keep their kernel and the answer is the first pass's (decision 0133).
+  it("keeps the first pass's answer when the pass has a single reading", () => {
+    const alone = run(firstPass()).candidates[0];
+    const thin = stillPass(11.7).slice(2, 3);
+    const joint = run([...firstPass(), ...thin], [{ id: "p2", fans: "stopped", fixture: "case" }]);
+    expect(Math.hypot(joint.candidates[0].x - alone.x, joint.candidates[0].y - alone.y)).toBeLessThan(0.3);
+  });
+
   it("reads the mixing only from readings taken while the fixture's fans ran", () => {
     // every reading of the case in a pass with its fans stopped: no fans-mixing, whatever the levels
     const all = firstPass().map((r) => ({ ...r, pass: "p2" }));

@@ -4,7 +4,7 @@ import { createPlanGrid } from "./grid/plan-grid";
 import { DEFAULT_LOCATOR_OPTIONS, type LocatorOptions } from "./locator/locator-options";
 import { mixedLevel } from "./locator/mixed-level";
 import { readingAir } from "./locator/pass-air";
-import { passStartReadings, unfitted } from "./locator/pass-start";
+import { passStartReadings, thinPasses, unfitted } from "./locator/pass-start";
 import { casesRunFans, fanStepScale } from "./locator/plan-masks";
 import { LOCATOR_SETTINGS, type LocatorSettings } from "./locator/settings";
 import { delayDiagnostics, delayStage } from "./pipeline/delay-stage";
@@ -77,10 +77,12 @@ export function locate(
     return { lag, zones };
   };
   // each pass in its own air, a stilled fixture's mixed readings as its level, and no source fitted to a
-  // pass's readings from before its first delay (all depend on the lag)
+  // pass's readings from before its first delay nor to a pass too thin to place a spot (all depend on the lag)
   const passFit = ({ lag, zones }: ReturnType<typeof lagAndZones>): PassFit => {
-    const level = other ? mixedLevel(plan, air, lag, zones.zoneOfReading, instrument.alarmPpm) : null;
-    const levelOnly = other ? unfitted(level?.levelOnly, passStartReadings(air, lag.positions)) : undefined;
+    const early = other ? passStartReadings(air, lag.positions) : null;
+    const thin = other ? thinPasses(air, early) : null;
+    const level = other && !thin?.allThin ? mixedLevel(plan, air, lag, zones.zoneOfReading, instrument.alarmPpm) : null;
+    const levelOnly = other ? unfitted(unfitted(level?.levelOnly, early), thin?.readings) : undefined;
     return {
       otherAir: other && levelOnly ? { ...other, levelOnly } : other,
       levelColumns: level?.columns ?? [],

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { passStartReadings, unfitted } from "./pass-start";
+import { passStartReadings, thinPasses, unfitted } from "./pass-start";
 
 // Six readings: three of the first pass (model 0), three of a still-air pass (model 1).
 const air = { modelOfReading: Int32Array.from([0, 0, 0, 1, 1, 1]) };
@@ -29,5 +29,27 @@ describe("readings fitted by no point source", () => {
     expect(unfitted(null, early)).toBe(early);
     expect(unfitted(level, null)).toBe(level);
     expect(unfitted(undefined, null)).toBeUndefined();
+  });
+});
+
+describe("a pass too thin to place a spot", () => {
+  const models = [[], [], []] as never[][];
+  it("marks every reading of a still-air pass with fewer than two readings after its first delay", () => {
+    // model 1: four readings, two early (two left); model 2: three readings, two early (one left)
+    const twoPasses = { models, modelOfReading: Int32Array.from([0, 0, 1, 1, 1, 1, 2, 2, 2]) };
+    const early = Uint8Array.from([0, 0, 1, 1, 0, 0, 1, 1, 0]);
+    expect(thinPasses(twoPasses, early)).toEqual({
+      readings: Uint8Array.from([0, 0, 0, 0, 0, 0, 1, 1, 1]),
+      allThin: false,
+    });
+  });
+
+  it("says when every pass is thin, and is null when none is", () => {
+    const one = { models: models.slice(0, 2), modelOfReading: Int32Array.from([0, 0, 0, 1, 1, 1]) };
+    expect(thinPasses(one, null)).toBeNull();
+    expect(thinPasses(one, Uint8Array.from([0, 0, 0, 1, 1, 0]))).toEqual({
+      readings: Uint8Array.from([0, 0, 0, 1, 1, 1]),
+      allThin: true,
+    });
   });
 });
