@@ -181,6 +181,9 @@ it("an R-448A rack: a leak topped up twice before its repair is one figure on th
     expect.stringMatching(/^1 Mar 2027 · .*Chronic-leaker report for 2026: 132 % of the full charge added/),
   ]);
   expect(await leakRow(page, "2026").count()).toBe(3); // 16 Feb, 15 Jun and 21 Sept 2026, kept as they were
+  // Its findings stay listed; it takes no new one.
+  await page.getByText("Out of service: no new finding is recorded against it.").waitFor();
+  expect(await page.getByRole("button", { name: "Record a suspected leak" }).count()).toBe(0);
   await shot(page, "records-us-retired-1366");
 
   // The statement and the CSV still hold every record.

@@ -73,7 +73,10 @@ export function Component() {
               ))}
             </ul>
           )}
-          {canRecord ? (
+          {canRecord && r.system.retired ? (
+            // A system out of service takes no new entry (docs/decisions/0124); its findings stay listed.
+            <p className="text-muted">Out of service: no new finding is recorded against it.</p>
+          ) : canRecord ? (
             <NewFindingForm
               storeId={r.store.id}
               systemId={r.system.id}
