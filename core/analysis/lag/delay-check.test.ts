@@ -47,6 +47,21 @@ describe("delay check", () => {
     expect(checkDelay(sweep(1), 2.4, 1, undefined, undefined)).toMatchObject({ estimatedS: 1, supported: true });
   });
 
+  it("takes a clear minimum on thin overlap, but not one far above the stated delay", () => {
+    // every estimate counted as carried by too little pair weight, so only the thin-overlap rule can take it
+    const thin = { ...DELAY_CHECK_SETTINGS, supportPairWeight: Number.POSITIVE_INFINITY };
+    const halfStated = checkDelay(sweep(3), 6, 1, undefined, undefined, thin);
+    expect(halfStated).toMatchObject({ estimatedS: 3, supported: true });
+    expect(halfStated.estimatedMisfit!).toBeLessThanOrEqual(0.4 * halfStated.statedMisfit!);
+    // the same readings with the bar for a thin minimum set at nothing: not taken
+    expect(checkDelay(sweep(3), 6, 1, undefined, undefined, { ...thin, thinMaxMisfitRatio: 0 }).supported).toBe(false);
+    // 6 s against a stated 2 s is three times the stated shift: found, not taken on thin overlap ...
+    expect(checkDelay(sweep(6), 2, 1, undefined, undefined, thin)).toMatchObject({ estimatedS: 6, supported: false });
+    // ... but taken where enough overlap carries it (the test above) or the cap allows it
+    const wideCap = { ...thin, thinMaxShareOfStated: 3 };
+    expect(checkDelay(sweep(6), 2, 1, undefined, undefined, wideCap).supported).toBe(true);
+  });
+
   it("says nothing when no reading is raised or no spot is visited twice", () => {
     const flat = sweep(3).map((r) => ({ ...r, ppm: 1 }));
     expect(checkDelay(flat, 3, 1, undefined, undefined)).toMatchObject({ estimatedS: null, supported: false });

@@ -48,6 +48,14 @@ export interface DelayCheckSettings {
    * stated, and such estimates were wrong on every benchmark store where they came up (decision 0068).
    */
   readonly minShareOfStated: number;
+  /**
+   * Less pair weight than `supportPairWeight` (but at least `minPairWeight`) still supports an estimate
+   * whose misfit is at most this share of the stated one (a deep, clear minimum; at the stated delay the
+   * two benchmark stores under it are held by the minimum change), ...
+   */
+  readonly thinMaxMisfitRatio: number;
+  /** ... and that is at most this many times the stated shift (decision 0068). */
+  readonly thinMaxShareOfStated: number;
 }
 
 export const DELAY_CHECK_SETTINGS: DelayCheckSettings = {
@@ -62,6 +70,8 @@ export const DELAY_CHECK_SETTINGS: DelayCheckSettings = {
   supportPairWeight: 10,
   minChange: 0.35,
   minShareOfStated: 0.4,
+  thinMaxMisfitRatio: 0.4,
+  thinMaxShareOfStated: 2,
 };
 
 export function checkDelay(
@@ -148,8 +158,13 @@ export function checkDelay(
     if (m.weight >= settings.minPairWeight && m.misfit < best.misfit) best = { shift: s, ...m };
   }
   if (!Number.isFinite(best.misfit)) return none;
+  // much overlap, or a clear minimum not too far above the stated shift on less of it
+  const carried =
+    best.weight >= settings.supportPairWeight ||
+    (best.misfit <= settings.thinMaxMisfitRatio * stated.misfit &&
+      best.shift <= settings.thinMaxShareOfStated * statedS);
   const supported =
-    best.weight >= settings.supportPairWeight &&
+    carried &&
     Number.isFinite(stated.misfit) &&
     best.misfit <= settings.maxMisfitRatio * stated.misfit &&
     Math.abs(best.shift - statedS) >= Math.max(1, settings.minChange * statedS) &&
