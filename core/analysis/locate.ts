@@ -4,7 +4,6 @@ import { createPlanGrid } from "./grid/plan-grid";
 import { DEFAULT_LOCATOR_OPTIONS, type LocatorOptions } from "./locator/locator-options";
 import { mixedLevel } from "./locator/mixed-level";
 import { readingAir } from "./locator/pass-air";
-import { passStartReadings, thinPasses, unfitted } from "./locator/pass-start";
 import { casesRunFans, fanStepScale } from "./locator/plan-masks";
 import { LOCATOR_SETTINGS, type LocatorSettings } from "./locator/settings";
 import { delayDiagnostics, delayStage } from "./pipeline/delay-stage";
@@ -76,15 +75,11 @@ export function locate(
     });
     return { lag, zones };
   };
-  // each pass in its own air, a stilled fixture's mixed readings as its level, and no source fitted to a
-  // pass's readings from before its first delay nor to a pass too thin to place a spot (all depend on the lag)
+  // each pass in its own air, and a stilled fixture's mixed readings as its level (they depend on the lag)
   const passFit = ({ lag, zones }: ReturnType<typeof lagAndZones>): PassFit => {
-    const early = other ? passStartReadings(air, lag.positions) : null;
-    const thin = other ? thinPasses(air, early) : null;
-    const level = other && !thin?.allThin ? mixedLevel(plan, air, lag, zones.zoneOfReading, instrument.alarmPpm) : null;
-    const levelOnly = other ? unfitted(unfitted(level?.levelOnly, early), thin?.readings) : undefined;
+    const level = other ? mixedLevel(plan, air, lag, zones.zoneOfReading, instrument.alarmPpm) : null;
     return {
-      otherAir: other && levelOnly ? { ...other, levelOnly } : other,
+      otherAir: other && level ? { ...other, levelOnly: level.levelOnly } : other,
       levelColumns: level?.columns ?? [],
     };
   };

@@ -39,10 +39,7 @@ export interface OtherAir {
   /** Models 1, 2, …; model 0 is the plan's own (`stepScale`, `fansStir`). */
   readonly models: readonly AirModel[];
   readonly modelOfReading: Int32Array;
-  /**
-   * 1 for a reading no point source is fitted to, drawn on the map all the same: a stilled fixture's level
-   * (locator/mixed-level.ts), or a pass's reading from before its first delay (locator/pass-start.ts).
-   */
+  /** 1 for a reading that only says a stilled fixture's level (locator/mixed-level.ts): drawn on the map, fitted by no point source. */
   readonly levelOnly?: Uint8Array;
 }
 
