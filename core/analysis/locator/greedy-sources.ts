@@ -1,6 +1,6 @@
 import { fitNonnegative, type NonnegativeFit } from "./nonnegative-fit";
 import { kernelColumn, sumWeightedKernelTimes, type ReadingFields } from "./reading-fields";
-import { localOptima, scanSources, type ScanResult } from "./source-scan";
+import { localOptima, scanSources, scanTotals, type ScanResult } from "./source-scan";
 
 export interface FoundSource {
   cell: number;
@@ -156,14 +156,7 @@ export function relocateSources(
   for (let k = 0; k < sources.length; k++) {
     const others = columns.filter((_, j) => j !== nn + k);
     const residual = residualOf(y, others, fitNonnegative(y, w, others, censored).q);
-    let sw = 0,
-      swr = 0,
-      swrr = 0;
-    for (let i = 0; i < n; i++) {
-      sw += w[i];
-      swr += w[i] * residual[i];
-      swrr += w[i] * residual[i] * residual[i];
-    }
+    const totals = scanTotals(w, residual);
     sumWeightedKernelTimes(fields, w, residual, sumWGR);
     const near = new Uint8Array(cells);
     const height = cells / input.gridWidth;
@@ -173,7 +166,7 @@ export function relocateSources(
     sources.forEach((o, j) => {
       if (j !== k) blockAround(near, o.cell, input.gridWidth, input.cellSize, input.sourceSeparationM);
     });
-    const scan = scanSources(fields.sumWG, fields.sumWGG, sumWGR, { sumW: sw, sumWR: swr, sumWRR: swrr }, near);
+    const scan = scanSources(fields.sumWG, fields.sumWGG, sumWGR, totals, near);
     const best = bestWithPrior(scan, input.prior, n);
     if (best < 0 || best === sources[k].cell) continue;
     const column = kernelColumn(fields, best, n);
@@ -226,16 +219,9 @@ export function findSources(input: GreedyInput): GreedyResult {
   const roundAllowed = new Uint8Array(allowed);
   for (let round = 0; round < input.maxLeaks; round++) {
     const residual = residualOf(y, columns, fit.q);
-    let sw = 0,
-      swr = 0,
-      swrr = 0;
-    for (let i = 0; i < n; i++) {
-      sw += w[i];
-      swr += w[i] * residual[i];
-      swrr += w[i] * residual[i] * residual[i];
-    }
+    const totals = scanTotals(w, residual);
     sumWeightedKernelTimes(fields, w, residual, sumWGR);
-    const scan = scanSources(fields.sumWG, fields.sumWGG, sumWGR, { sumW: sw, sumWR: swr, sumWRR: swrr }, roundAllowed);
+    const scan = scanSources(fields.sumWG, fields.sumWGG, sumWGR, totals, roundAllowed);
     if (!firstScan) firstScan = scan;
     let best = bestWithPrior(scan, input.prior, n);
     if (best < 0) break;

@@ -9,6 +9,19 @@ export interface ScanTotals {
   sumWRR: number;
 }
 
+/** The scan's totals over the readings: Σw, Σw·r and Σw·r² of the residual `r`. */
+export function scanTotals(w: Float64Array, r: Float64Array): ScanTotals {
+  let sumW = 0,
+    sumWR = 0,
+    sumWRR = 0;
+  for (let i = 0; i < r.length; i++) {
+    sumW += w[i];
+    sumWR += w[i] * r[i];
+    sumWRR += w[i] * r[i] * r[i];
+  }
+  return { sumW, sumWR, sumWRR };
+}
+
 export interface ScanResult {
   delta: Float64Array;
   q: Float64Array;

@@ -3,7 +3,7 @@ import { residualOf } from "./greedy-sources";
 import { chooseLocalDrift, type DriftSettings } from "./local-drift";
 import { fitNonnegative } from "./nonnegative-fit";
 import { kernelColumn, sumWeightedKernelTimes, type ReadingFields } from "./reading-fields";
-import { scanSources } from "./source-scan";
+import { scanSources, scanTotals } from "./source-scan";
 
 /**
  * The first spot placed again near where the greedy fit put it, this time letting each cell take a
@@ -63,16 +63,9 @@ export function upwindReplace(input: UpwindInput, found: readonly FoundSource[])
   }
   if (!any) return out;
   const drifted = chooseLocalDrift(fields, width, input.cellSize, w, residual, window, input.drift).fields;
-  let sw = 0,
-    swr = 0,
-    swrr = 0;
-  for (let i = 0; i < n; i++) {
-    sw += w[i];
-    swr += w[i] * residual[i];
-    swrr += w[i] * residual[i] * residual[i];
-  }
+  const totals = scanTotals(w, residual);
   const sumWGR = sumWeightedKernelTimes(drifted, w, residual, new Float64Array(cells));
-  const scan = scanSources(drifted.sumWG, drifted.sumWGG, sumWGR, { sumW: sw, sumWR: swr, sumWRR: swrr }, window);
+  const scan = scanSources(drifted.sumWG, drifted.sumWGG, sumWGR, totals, window);
   let max = 0;
   for (let c = 0; c < cells; c++) if (scan.delta[c] > max) max = scan.delta[c];
   if (!(max > 0)) return out;
@@ -91,7 +84,7 @@ export function upwindReplace(input: UpwindInput, found: readonly FoundSource[])
   // the drifted fit must beat the best fit without drift in the window, not only its own cell's: a lineup's
   // plume spread evenly both ways (air curtains, no drift) is fitted a little better by any wider shape
   const plainSums = sumWeightedKernelTimes(fields, w, residual, new Float64Array(cells));
-  const plain = scanSources(fields.sumWG, fields.sumWGG, plainSums, { sumW: sw, sumWR: swr, sumWRR: swrr }, window);
+  const plain = scanSources(fields.sumWG, fields.sumWGG, plainSums, totals, window);
   let plainMax = 0;
   for (let c = 0; c < cells; c++) if (plain.delta[c] > plainMax) plainMax = plain.delta[c];
   if (scan.delta[best] - plainMax < input.minGain * s2) return out;
