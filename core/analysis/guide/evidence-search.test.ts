@@ -3,6 +3,12 @@ import { parseLocatorInput } from "../../contracts/locator-input";
 import { rect } from "../pipeline/stage-fixtures";
 import { backgroundOf, evidenceProbes, leakSites, provisionalMark, weighSites } from "./evidence-search";
 import { probePlaces } from "./probe-places";
+import { DRIFT_PENALTY, DRIFT_STRENGTHS, driftChoiceFor, driftKernels } from "./drift-kernels";
+import { LOCATOR_SETTINGS } from "../locator/settings";
+import { createSourceKernel } from "../locator/source-kernel";
+import { driftedKernel } from "../locator/local-drift";
+
+const driftChoice = { kernels: driftKernels(), penalty: DRIFT_PENALTY };
 
 // A 12 x 8 m aisle: a 6 m case against the north wall (y 0..1) and a 4 m island (y 4..5.2) open all
 // round, and a line-set drop at the case's back.
@@ -82,5 +88,49 @@ describe("evidenceProbes", () => {
     const away = Math.abs(next.x - 3.1);
     expect(away).toBeGreaterThanOrEqual(0.5);
     expect(away).toBeLessThanOrEqual(2.5);
+  });
+});
+
+describe("weighSites with a drift (decision 0149)", () => {
+  // The locator's own kernel and drifted kernels (locator/local-drift.ts), as the live guide uses them.
+  const k = LOCATOR_SETTINGS.kernel;
+  const plain = createSourceKernel(k.screeningLengthM, k.nearCutoffM, k.truncationM);
+  const g = (d: number) => plain.at(d);
+  const leak = { x: 2.95, y: 0.15 };
+  // A plume carried east along the case front, read every 0.3 m: level for metres downwind, falling fast upwind.
+  const carried = driftedKernel(k.screeningLengthM, k.nearCutoffM, k.truncationM, [1, 0]);
+  const evidence = Array.from({ length: 21 }, (_, i) => 0.7 + 0.3 * i).map((x) => {
+    const dx = x - leak.x;
+    const dy = 1.15 - leak.y;
+    return { x, y: 1.15, ppm: 0.4 + 30 * carried(Math.hypot(dx, dy), dx, dy) };
+  });
+  const sites = leakSites(plan, { x: 4, y: 1.5 }, 4).filter((s) => s.fixtureId === "case-1" && s.prior === 1);
+
+  it("marks the plume's upwind edge where the plain kernel marks the middle of its plateau", () => {
+    const plainMark = provisionalMark(weighSites(sites, evidence, 0.4, g))!;
+    const driftMark = provisionalMark(weighSites(sites, evidence, 0.4, g, 0.5, driftChoice))!;
+    expect(plainMark.x - leak.x).toBeGreaterThan(0.6);
+    expect(Math.hypot(driftMark.x - leak.x, driftMark.y - leak.y)).toBeLessThan(0.35);
+  });
+
+  it("keeps the plain kernel for a plume spread evenly both ways", () => {
+    const even = evidence.map((r) => ({ ...r, ppm: 0.4 + 30 * g(Math.hypot(r.x - leak.x, r.y - leak.y)) }));
+    const hypotheses = weighSites(sites, even, 0.4, g, 0.5, driftChoice);
+    const mark = provisionalMark(hypotheses)!;
+    expect(Math.hypot(mark.x - leak.x, mark.y - leak.y)).toBeLessThan(0.35);
+    const best = hypotheses.reduce((a, b) => (b.weight > a.weight ? b : a));
+    expect(best.shape).toBeUndefined();
+  });
+
+  it("weighs a walk-in's sites with the plain kernel only", () => {
+    const site = { x: 3, y: 0.15, fixtureId: "room", prior: 1 };
+    const [h] = weighSites([site], evidence, 0.4, g, 0.5, driftChoice, new Set(["room"]));
+    expect(h.shape).toBeUndefined();
+  });
+
+  it("offers drifts only where most cases run their fans", () => {
+    expect(driftChoiceFor(plan)).toBeUndefined();
+    const fans = { ...plan, fixtures: plan.fixtures.map((f) => ({ ...f, fans: true })) };
+    expect(driftChoiceFor(fans)?.kernels.length).toBe(8 * DRIFT_STRENGTHS.length);
   });
 });

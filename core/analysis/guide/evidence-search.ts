@@ -1,6 +1,7 @@
 import type { LocatorInput } from "../../contracts/locator-input";
 import type { CorrectedReading } from "../../contracts/locator-output";
 import { pointInPolygon } from "../geometry/point-in-polygon";
+import type { DriftChoice, DriftKernel } from "./drift-kernels";
 import type { Hypothesis, Kernel, ProbeSuggestion } from "./next-probes";
 import { nextProbes } from "./next-probes";
 import { isOpenFloor, probePlaces, roomWithin, type ProbePlace } from "./probe-places";
@@ -128,7 +129,10 @@ export function leakSites(plan: Plan, near: { x: number; y: number }, reachM: nu
  * Each site weighed by the readings: one source there, with the non-negative amplitude that best
  * fits the readings' excess over `background` (least squares), scored by the Gaussian misfit with the
  * reading spread of next-probes.ts, tempered by `temper` (neighbouring readings share the same gusts),
- * times the site's prior. Weights sum to 1; a site no reading reaches keeps its prior share.
+ * times the site's prior. With `drift`, a case site also tries each drifted kernel and keeps the one
+ * that fits best when it beats the plain kernel by `drift.penalty` (decision 0149): a plume carried
+ * along a lineup then favours the site at its upwind edge, not the middle of its plateau. Weights sum
+ * to 1; a site no reading reaches keeps its prior share.
  */
 export function weighSites(
   sites: readonly LeakSite[],
@@ -136,34 +140,57 @@ export function weighSites(
   background: number,
   kernel: Kernel,
   temper = 0.5,
+  drift?: DriftChoice,
+  rooms: ReadonlySet<string> = new Set(),
 ): Hypothesis[] {
-  const logs = sites.map((s) => {
+  const excess = evidence.map((r) => r.ppm - background);
+  const fitWith = (gs: number[]) => {
     let num = 0;
     let den = 0;
-    const gs = evidence.map((r) => kernel(Math.hypot(r.x - s.x, r.y - s.y)));
-    evidence.forEach((r, i) => {
-      num += gs[i] * (r.ppm - background);
+    for (let i = 0; i < gs.length; i++) {
+      num += gs[i] * excess[i];
       den += gs[i] * gs[i];
-    });
+    }
     const amplitude = den > 0 ? Math.max(0, num / den) : 0;
     let chi2 = 0;
-    evidence.forEach((r, i) => {
+    for (let i = 0; i < gs.length; i++) {
       const predicted = background + amplitude * gs[i];
-      chi2 += (r.ppm - predicted) ** 2 / readingVariance(predicted);
-    });
-    return { amplitude, log: Math.log(s.prior) - 0.5 * temper * chi2 };
+      chi2 += (evidence[i].ppm - predicted) ** 2 / readingVariance(predicted);
+    }
+    return { amplitude, chi2 };
+  };
+  const fits = sites.map((s) => {
+    const ds = evidence.map((r) => Math.hypot(r.x - s.x, r.y - s.y));
+    // score: the misfit, plus the penalty for a drift's two more parameters
+    let best: { amplitude: number; chi2: number; score: number; shape?: DriftKernel } = (() => {
+      const f = fitWith(ds.map((d) => kernel(d)));
+      return { ...f, score: f.chi2 };
+    })();
+    // A room's air is stirred level by its own fans: no drift there (as the locator's 0128).
+    if (drift && evidence.length > 0 && !(s.fixtureId && rooms.has(s.fixtureId))) {
+      for (const k of drift.kernels) {
+        const f = fitWith(evidence.map((r, i) => k.at(ds[i], r.x - s.x, r.y - s.y)));
+        if (f.chi2 + drift.penalty < best.score) best = { ...f, score: f.chi2 + drift.penalty, shape: k };
+      }
+    }
+    const log = Math.log(s.prior) - 0.5 * temper * best.score;
+    return { ...best, log };
   });
-  const top = Math.max(...logs.map((l) => l.log));
-  const raw = logs.map((l) => Math.exp(l.log - top));
+  const top = Math.max(...fits.map((l) => l.log));
+  const raw = fits.map((l) => Math.exp(l.log - top));
   const total = raw.reduce((a, b) => a + b, 0);
-  return sites.map((s, i) => ({
-    x: s.x,
-    y: s.y,
-    weight: raw[i] / total,
-    amplitude: logs[i].amplitude,
-    rank: 1,
-    fixtureId: s.fixtureId,
-  }));
+  return sites.map((s, i) => {
+    const shape = fits[i].shape;
+    return {
+      x: s.x,
+      y: s.y,
+      weight: raw[i] / total,
+      amplitude: fits[i].amplitude,
+      rank: 1,
+      fixtureId: s.fixtureId,
+      ...(shape ? { shape: (dx: number, dy: number) => shape.at(Math.hypot(dx, dy), dx, dy) } : {}),
+    };
+  });
 }
 
 /** Spread of one reading about a prediction: 30 % fluctuation plus about 1 ppm (next-probes.ts). */
@@ -240,6 +267,10 @@ export function searchAroundAlarm(args: {
   n?: number;
   /** More places to search around (a credible suspect spot and its radius). */
   also?: readonly { x: number; y: number; reach: number }[];
+  /** The drifts a case site may take (drift-kernels.ts driftChoiceFor); none = a plain kernel. */
+  drift?: DriftChoice;
+  /** How far around the strongest reading so far the search reaches (m). */
+  strongestReachM?: number;
 }): AlarmSearch {
   const { plan, origin, alarm, evidence, read, from, kernel } = args;
   const centre = { x: (origin.x + alarm.x) / 2, y: (origin.y + alarm.y) / 2 };
@@ -250,11 +281,12 @@ export function searchAroundAlarm(args: {
   // a case reads alike for metres, and its source may lie beyond.
   const strongest = near.reduce<EvidenceReading | null>((a, r) => (!a || r.ppm > a.ppm ? r : a), null);
   const discs = [{ at: centre, reach }];
-  if (strongest) discs.push({ at: strongest, reach: ALARM_REACH_M });
+  if (strongest) discs.push({ at: strongest, reach: args.strongestReachM ?? ALARM_REACH_M });
   for (const a of args.also ?? []) discs.push({ at: a, reach: a.reach });
   // A room's gas leaves by its door and spreads along the corridor: rooms count from farther off.
   const sites = unique(discs.flatMap((d) => leakSites(plan, d.at, d.reach, d.reach + ROOM_EXTRA_M)));
-  const hypotheses = weighSites(sites, near, backgroundOf(near), kernel);
+  const rooms = new Set(plan.fixtures.filter((f) => ROOMS.has(f.kind)).map((f) => f.id));
+  const hypotheses = weighSites(sites, near, backgroundOf(near), kernel, 0.5, args.drift, rooms);
   const places = unique(discs.flatMap((d) => probePlaces(plan, d.at, d.reach, 0.6, d.reach + ROOM_EXTRA_M))).filter(
     (p) => !read.some((r) => Math.hypot(r.x - p.x, r.y - p.y) < READ_WITHIN_M),
   );

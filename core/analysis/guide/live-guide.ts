@@ -3,6 +3,7 @@ import type { CorrectedReading, SuspectSpotFacts } from "../../contracts/locator
 import { locate, type LocatorOptions } from "../locate";
 import { LOCATOR_SETTINGS } from "../locator/settings";
 import { createSourceKernel } from "../locator/source-kernel";
+import { driftChoiceFor } from "./drift-kernels";
 import { evidenceOf, searchAroundAlarm } from "./evidence-search";
 import { cutToWindow, evidenceBox, type EvidenceWindow, type PlanBox } from "./evidence-window";
 import { hypothesesOf, nextProbes, type ProbeSuggestion } from "./next-probes";
@@ -170,6 +171,7 @@ function alarmSearch(window: EvidenceWindow, corrected: CorrectedReading[], from
     from,
     kernel,
     n,
+    drift: driftChoiceFor(window.input.plan),
   });
 }
 

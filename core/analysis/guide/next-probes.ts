@@ -11,6 +11,8 @@ export interface Hypothesis {
   /** The suspect spot it belongs to (its rank), so a reason can name what a reading tells apart. */
   rank: number;
   fixtureId: string | null;
+  /** The kernel g at displacement (dx, dy) from the site when a drift carries its gas (evidence-search.ts); else the plain kernel. */
+  shape?: (dx: number, dy: number) => number;
 }
 
 /** Why a probe place was chosen, as facts; the words are the presenter's. */
@@ -90,7 +92,9 @@ export function nextProbes(
   minSpacingM = 0.6,
 ): ProbeSuggestion[] {
   const scored = places.map((p) => {
-    const predicted = hypotheses.map((h) => h.amplitude * kernel(Math.hypot(p.x - h.x, p.y - h.y)));
+    const predicted = hypotheses.map(
+      (h) => h.amplitude * (h.shape ? h.shape(p.x - h.x, p.y - h.y) : kernel(Math.hypot(p.x - h.x, p.y - h.y))),
+    );
     let value = 0;
     let best = { v: -1, i: 0, j: 0 };
     for (let i = 0; i < hypotheses.length; i++) {

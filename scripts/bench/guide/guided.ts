@@ -6,6 +6,7 @@
 // best tells the likely places apart, held as long as the trade rule's re-checks. Stop when the mark
 // has settled (settledOn: the last looks' marks within 0.6 m, each holding enough of the weight there). If ORIGIN_PROBES probes never reach the alarm, it was a passing wisp and the sweep goes on.
 import { evidenceOf, searchAroundAlarm } from "#core/analysis/guide/evidence-search";
+import { DRIFT_PENALTY, driftChoiceFor } from "#core/analysis/guide/drift-kernels";
 import type { ProbeSuggestion } from "#core/analysis/guide/next-probes";
 import { createSourceKernel } from "#core/analysis/locator/source-kernel";
 import { LOCATOR_SETTINGS } from "#core/analysis/locator/settings";
@@ -26,6 +27,11 @@ const SETTLED_LOOKS = Number(process.env.GUIDE_SETTLED_LOOKS ?? 3);
 const SETTLED_SHARE = Number(process.env.GUIDE_SETTLED_SHARE ?? 0.5);
 /** The locator's suspects are those within this distance of the alarm that started the search (m). */
 const WINDOW_M = 8;
+/** `GUIDE_DRIFT=off` weighs every site with the plain kernel; `GUIDE_DRIFT_PENALTY` sets a drift's bar (exploring only). */
+const DRIFT_OFF = process.env.GUIDE_DRIFT === "off";
+const DRIFT_BAR = Number(process.env.GUIDE_DRIFT_PENALTY ?? DRIFT_PENALTY);
+const DRIFT_STRENGTHS = process.env.GUIDE_DRIFT_STRENGTHS?.split(",").map(Number);
+const STRONGEST_REACH = process.env.GUIDE_STRONGEST_REACH ? Number(process.env.GUIDE_STRONGEST_REACH) : undefined;
 /** Probes around the alarm that never reach the alarm before it counts as a wisp. */
 const ORIGIN_PROBES = 4;
 
@@ -76,6 +82,8 @@ export function guidedView(
     from: { x, y },
     kernel,
     also: first ? [{ x: first.x, y: first.y, reach: first.radius / 2 }] : [],
+    drift: DRIFT_OFF ? undefined : driftChoiceFor(input.plan, DRIFT_BAR, DRIFT_STRENGTHS),
+    strongestReachM: STRONGEST_REACH,
   });
   // Marked once a re-check has reached the alarm, as the trade rule marks only a peak at the alarm.
   const mark = confirmed && search.mark ? { x: search.mark.x, y: search.mark.y, share: search.mark.share } : null;
