@@ -269,8 +269,6 @@ export function searchAroundAlarm(args: {
   also?: readonly { x: number; y: number; reach: number }[];
   /** The drifts a case site may take (drift-kernels.ts driftChoiceFor); none = a plain kernel. */
   drift?: DriftChoice;
-  /** How far around the strongest reading so far the search reaches (m). */
-  strongestReachM?: number;
 }): AlarmSearch {
   const { plan, origin, alarm, evidence, read, from, kernel } = args;
   const centre = { x: (origin.x + alarm.x) / 2, y: (origin.y + alarm.y) / 2 };
@@ -281,7 +279,7 @@ export function searchAroundAlarm(args: {
   // a case reads alike for metres, and its source may lie beyond.
   const strongest = near.reduce<EvidenceReading | null>((a, r) => (!a || r.ppm > a.ppm ? r : a), null);
   const discs = [{ at: centre, reach }];
-  if (strongest) discs.push({ at: strongest, reach: args.strongestReachM ?? ALARM_REACH_M });
+  if (strongest) discs.push({ at: strongest, reach: ALARM_REACH_M });
   for (const a of args.also ?? []) discs.push({ at: a, reach: a.reach });
   // A room's gas leaves by its door and spreads along the corridor: rooms count from farther off.
   const sites = unique(discs.flatMap((d) => leakSites(plan, d.at, d.reach, d.reach + ROOM_EXTRA_M)));

@@ -30,8 +30,6 @@ const WINDOW_M = 8;
 /** `GUIDE_DRIFT=off` weighs every site with the plain kernel; `GUIDE_DRIFT_PENALTY` sets a drift's bar (exploring only). */
 const DRIFT_OFF = process.env.GUIDE_DRIFT === "off";
 const DRIFT_BAR = Number(process.env.GUIDE_DRIFT_PENALTY ?? DRIFT_PENALTY);
-const DRIFT_STRENGTHS = process.env.GUIDE_DRIFT_STRENGTHS?.split(",").map(Number);
-const STRONGEST_REACH = process.env.GUIDE_STRONGEST_REACH ? Number(process.env.GUIDE_STRONGEST_REACH) : undefined;
 /** Probes around the alarm that never reach the alarm before it counts as a wisp. */
 const ORIGIN_PROBES = 4;
 
@@ -82,8 +80,7 @@ export function guidedView(
     from: { x, y },
     kernel,
     also: first ? [{ x: first.x, y: first.y, reach: first.radius / 2 }] : [],
-    drift: DRIFT_OFF ? undefined : driftChoiceFor(input.plan, DRIFT_BAR, DRIFT_STRENGTHS),
-    strongestReachM: STRONGEST_REACH,
+    drift: DRIFT_OFF ? undefined : driftChoiceFor(input.plan, DRIFT_BAR),
   });
   // Marked once a re-check has reached the alarm, as the trade rule marks only a peak at the alarm.
   const mark = confirmed && search.mark ? { x: search.mark.x, y: search.mark.y, share: search.mark.share } : null;
