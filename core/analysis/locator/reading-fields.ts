@@ -51,7 +51,8 @@ export function accumulateReadingFields(
   searched: Uint8Array | null = null,
   /**
    * Only the cells of this circle are wanted (a retry screen's region): the searches do not step on
-   * from cells that cannot reach it, so cells outside it may hold fewer entries than a full field's.
+   * from cells that cannot reach it, and cells outside it get no entries, sums or nearest reading
+   * (Infinity, as out of every reading's reach), so the later steps work on the circle alone.
    */
   focus: SearchFocus | null = null,
 ): ReadingFields {
@@ -103,6 +104,7 @@ export function accumulateReadingFields(
   let distArr = new Float32Array(cap);
   let used = 0;
 
+  const wanted = focus ? cellsInFocus(grid, focus) : null;
   const search = borrowSearch(grid, stepScale);
   const mapCut = searched ? -1 : 3 * mapSigmaM;
   const inv2s2 = 1 / (2 * mapSigmaM * mapSigmaM);
@@ -133,6 +135,7 @@ export function accumulateReadingFields(
     const count = groupCount[g];
     for (let q = 0; q < settled; q++) {
       const c = list[q];
+      if (wanted && !wanted[c]) continue;
       const d = dist[c];
       if (d < nearestReading[c]) nearestReading[c] = d;
       const gv = kernel.at(d);
@@ -170,6 +173,23 @@ export function accumulateReadingFields(
     omegaY,
     nearestReading,
   };
+}
+
+/** 1 for the cells whose centre lies within the focus circle (the region a retry screen reads). */
+function cellsInFocus(grid: PlanGrid, focus: SearchFocus): Uint8Array {
+  const out = new Uint8Array(grid.width * grid.height);
+  const h = grid.cellSize;
+  const { x, y, radiusM } = focus;
+  const r2 = radiusM * radiusM;
+  const i0 = Math.max(0, Math.floor((x - radiusM) / h));
+  const i1 = Math.min(grid.width - 1, Math.floor((x + radiusM) / h));
+  const j0 = Math.max(0, Math.floor((y - radiusM) / h));
+  const j1 = Math.min(grid.height - 1, Math.floor((y + radiusM) / h));
+  for (let j = j0; j <= j1; j++) {
+    for (let i = i0; i <= i1; i++)
+      if (((i + 0.5) * h - x) ** 2 + ((j + 0.5) * h - y) ** 2 <= r2) out[j * grid.width + i] = 1;
+  }
+  return out;
 }
 
 /** Per cell Σ_i w_i·g_i(c)·r_i for a per-reading vector r (one pass over the stored entries). */

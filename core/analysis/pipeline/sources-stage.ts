@@ -4,7 +4,7 @@ import { findSources, residualOf, type FoundSource } from "../locator/greedy-sou
 import { broadKernel, diffuseBump, pointOverBroad, type DiffuseBump } from "../locator/diffuse-bump";
 import { chooseLocalDrift } from "../locator/local-drift";
 import type { NonnegativeFit } from "../locator/nonnegative-fit";
-import { driftTrials, equipmentMask, fanStepScale, riskPointPrior } from "../locator/plan-masks";
+import { driftTrials, equipmentMask, fanRoomsScale, fanStepScale, riskPointPrior } from "../locator/plan-masks";
 import type { ReadingFields } from "../locator/reading-fields";
 import type { KernelSettings, SourceSettings } from "../locator/settings";
 import type { ScanResult } from "../locator/source-scan";
@@ -68,7 +68,7 @@ export function supportRule(
  * drift inside says nothing and only lets a spot there explain readings outside (no drift is fitted).
  */
 export function outsideFanRooms(allowed: Uint8Array, grid: PlanGrid, plan: LocatorInput["plan"]): Uint8Array {
-  const rooms = fanStepScale(grid, plan, 0.5);
+  const rooms = fanRoomsScale(grid, plan, 0.5);
   if (!rooms) return allowed;
   const out = new Uint8Array(allowed);
   for (let c = 0; c < out.length; c++) if (rooms[c] < 1) out[c] = 0;
