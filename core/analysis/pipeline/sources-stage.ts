@@ -75,6 +75,34 @@ export function outsideFanRooms(allowed: Uint8Array, grid: PlanGrid, plan: Locat
   return out;
 }
 
+/**
+ * Cells where a spot may lie: free, outside benign-source zones and their margin, within reach of a
+ * reading, on equipment (when the plan draws any). A loop of its own, optimised on its own rather than
+ * in the middle of the stage (docs/decisions/0147).
+ */
+function allowedCells(
+  grid: PlanGrid,
+  zones: Pick<ZonesResult, "inside" | "distance">,
+  nearestReading: Float32Array,
+  onEquipment: Uint8Array | null,
+  zoneMarginM: number,
+  maxReachM: number,
+): Uint8Array {
+  const cells = grid.width * grid.height;
+  const allowed = new Uint8Array(cells);
+  for (let c = 0; c < cells; c++) {
+    allowed[c] =
+      !grid.blocked[c] &&
+      !zones.inside[c] &&
+      zones.distance[c] > zoneMarginM &&
+      nearestReading[c] <= maxReachM &&
+      (!onEquipment || onEquipment[c])
+        ? 1
+        : 0;
+  }
+  return allowed;
+}
+
 export function sourcesStage(
   plan: LocatorInput["plan"],
   grid: PlanGrid,
@@ -88,19 +116,14 @@ export function sourcesStage(
   const s = settings.sources;
   const y = lag.ppm;
   const n = y.length;
-  const cells = grid.width * grid.height;
-  const onEquipment = equipmentMask(grid, plan, s.equipmentMarginM);
-  const allowed = new Uint8Array(cells);
-  for (let c = 0; c < cells; c++) {
-    allowed[c] =
-      !grid.blocked[c] &&
-      !zones.inside[c] &&
-      zones.distance[c] > settings.zoneMarginM &&
-      field.fields.nearestReading[c] <= s.maxReachM &&
-      (!onEquipment || onEquipment[c])
-        ? 1
-        : 0;
-  }
+  const allowed = allowedCells(
+    grid,
+    zones,
+    field.fields.nearestReading,
+    equipmentMask(grid, plan, s.equipmentMarginM),
+    settings.zoneMarginM,
+    s.maxReachM,
+  );
   let fields = field.fields;
   const drift = driftTrials(s, field.fansStir);
   if (drift.strengths.length > 0) {
