@@ -3,7 +3,7 @@ import type { DelayFacts, LocatorResult } from "../contracts/locator-output";
 import { createPlanGrid } from "./grid/plan-grid";
 import { DEFAULT_LOCATOR_OPTIONS, type LocatorOptions } from "./locator/locator-options";
 import { mixedLevel } from "./locator/mixed-level";
-import { readingAir } from "./locator/pass-air";
+import { passesExplained, passWeighing, readingAir } from "./locator/pass-air";
 import { casesRunFans, fanStepScale } from "./locator/plan-masks";
 import { LOCATOR_SETTINGS, type LocatorSettings } from "./locator/settings";
 import { delayDiagnostics, delayStage } from "./pipeline/delay-stage";
@@ -75,11 +75,16 @@ export function locate(
     });
     return { lag, zones };
   };
-  // each pass in its own air, and a stilled fixture's mixed readings as its level (they depend on the lag)
+  // each pass in its own air, weighed by how well that air explains it, and a stilled fixture's mixed
+  // readings as its level where the pass explains itself well enough to place the leak (they depend on the lag)
   const passFit = ({ lag, zones }: ReturnType<typeof lagAndZones>): PassFit => {
-    const level = other ? mixedLevel(plan, air, lag, zones.zoneOfReading, instrument.alarmPpm) : null;
+    if (!other) return { otherAir: null, levelColumns: [] };
+    const { trusted, weightOfModel } = passWeighing(
+      passesExplained(grid, lag, zones.zoneOfReading, air, other, settings),
+    );
+    const level = mixedLevel(plan, air, lag, zones.zoneOfReading, instrument.alarmPpm, trusted);
     return {
-      otherAir: other && level ? { ...other, levelOnly: level.levelOnly } : other,
+      otherAir: { ...other, weightOfModel, ...(level ? { levelOnly: level.levelOnly } : {}) },
       levelColumns: level?.columns ?? [],
     };
   };
