@@ -173,10 +173,17 @@ it("on a phone the tools are one row at most 120 px tall that scrolls sideways, 
     const b = (await l.boundingBox())!;
     return b.x >= 0 && b.x + b.width <= 390;
   };
-  // The last control starts past the screen's edge; a tap brings it into view (Playwright scrolls
-  // the row to it, as a swipe would) and works it by touch.
+  // The last control starts past the screen's edge; a finger swiping the row leftwards scrolls it
+  // (the row scrolls on its own axis, not the page nor the plan).
   const snap = page.getByLabel("Snap to fixtures");
   expect(await inView(snap)).toBe(false);
+  const cdp = await touchSession(page);
+  const mid = Math.round(bar.y + bar.height / 2);
+  await touchDrag(cdp, { x: bar.x + bar.width - 6, y: mid }, { x: bar.x + 24, y: mid }, 30);
+  await expect.poll(() => toolbar.evaluate((el) => el.scrollLeft)).toBeGreaterThan(100);
+  expect(await page.evaluate(() => window.scrollX)).toBe(0);
+  // Back to the start, then a tap on the hidden control brings it into view and works it by touch.
+  await toolbar.evaluate((el) => el.scrollTo({ left: 0 }));
   const wasOn = await snap.isChecked();
   await snap.tap();
   await expect.poll(() => snap.isChecked()).toBe(!wasOn);

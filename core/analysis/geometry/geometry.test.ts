@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { polygonArea, polygonCentroid, signedArea } from "./polygon-area";
-import { pointInPolygon } from "./point-in-polygon";
+import { pointInPolygon, pointInVertices, vertexArrays } from "./point-in-polygon";
 import { distanceToSegment, isSelfIntersecting, lineIntersection, segmentsIntersect } from "./segments";
 import { applySimilarity, invertSimilarity, similarityFromTwoPoints } from "./similarity";
 
@@ -59,6 +59,17 @@ describe("point in polygon", () => {
     expect(pointInPolygon([3, 0.5], l)).toBe(true);
     expect(pointInPolygon([3, 3], l)).toBe(false);
     expect(pointInPolygon([-1, 0.5], l)).toBe(false);
+  });
+  it("on vertex arrays gives the same answer, also on edges and vertices, where either answer may come", () => {
+    const v = vertexArrays(l);
+    let inside = 0;
+    // a 0.25 m lattice from -0.5 to 4.5 m puts points on every edge and vertex of the L
+    for (let y = -0.5; y <= 4.5; y += 0.25)
+      for (let x = -0.5; x <= 4.5; x += 0.25) {
+        expect(pointInVertices(x, y, v)).toBe(pointInPolygon([x, y], l));
+        if (pointInVertices(x, y, v)) inside++;
+      }
+    expect(inside).toBeGreaterThan(50);
   });
 });
 

@@ -14,3 +14,30 @@ export function pointInPolygon(point: Vec, polygon: Polygon): boolean {
   }
   return inside;
 }
+
+/** A polygon's vertices as two arrays, for testing many points against it (`pointInVertices`). */
+export interface VertexArrays {
+  readonly xs: Float64Array;
+  readonly ys: Float64Array;
+}
+
+export function vertexArrays(polygon: Polygon): VertexArrays {
+  return { xs: Float64Array.from(polygon, (p) => p[0]), ys: Float64Array.from(polygon, (p) => p[1]) };
+}
+
+/**
+ * pointInPolygon on vertex arrays: the same test, term for term, so the same answer, without a point
+ * array per call (a plan's raster tests every cell of every solid body this way).
+ */
+export function pointInVertices(x: number, y: number, { xs, ys }: VertexArrays): boolean {
+  let inside = false;
+  const n = xs.length;
+  for (let i = 0, j = n - 1; i < n; j = i++) {
+    const xi = xs[i];
+    const yi = ys[i];
+    const xj = xs[j];
+    const yj = ys[j];
+    if (yi > y !== yj > y && x < ((xj - xi) * (y - yi)) / (yj - yi) + xi) inside = !inside;
+  }
+  return inside;
+}

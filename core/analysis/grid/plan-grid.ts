@@ -1,5 +1,5 @@
 import { polygonBounds } from "../geometry/bounds";
-import { pointInPolygon } from "../geometry/point-in-polygon";
+import { pointInVertices, vertexArrays, type VertexArrays } from "../geometry/point-in-polygon";
 import type { Polygon } from "../geometry/types";
 
 /**
@@ -41,20 +41,21 @@ function rasterise(poly: Polygon, grid: PlanGrid): void {
   const i1 = Math.min(width - 1, Math.floor(b.maxX / h));
   const j0 = Math.max(0, Math.floor(b.minY / h));
   const j1 = Math.min(height - 1, Math.floor(b.maxY / h));
+  const vertices = vertexArrays(poly);
   for (let j = j0; j <= j1; j++) {
     for (let i = i0; i <= i1; i++) {
       const k = j * width + i;
-      if (blocked[k]) continue;
-      hit: for (const sy of SUB) {
-        for (const sx of SUB) {
-          if (pointInPolygon([(i + sx) * h, (j + sy) * h], poly)) {
-            blocked[k] = 1;
-            break hit;
-          }
-        }
-      }
+      if (!blocked[k] && anySubSampleInside(i, j, h, vertices)) blocked[k] = 1;
     }
   }
+}
+
+/** Whether any of cell (i, j)'s 3 x 3 sub-samples lies inside the polygon. */
+function anySubSampleInside(i: number, j: number, h: number, vertices: VertexArrays): boolean {
+  for (let a = 0; a < 3; a++) {
+    for (let b = 0; b < 3; b++) if (pointInVertices((i + SUB[b]) * h, (j + SUB[a]) * h, vertices)) return true;
+  }
+  return false;
 }
 
 export function cellIndexOf(grid: PlanGrid, x: number, y: number): number {
@@ -108,9 +109,10 @@ export function cellsInside(grid: PlanGrid, poly: Polygon): number[] {
   const i1 = Math.min(grid.width - 1, Math.floor(b.maxX / h));
   const j0 = Math.max(0, Math.floor(b.minY / h));
   const j1 = Math.min(grid.height - 1, Math.floor(b.maxY / h));
+  const vertices = vertexArrays(poly);
   for (let j = j0; j <= j1; j++) {
     for (let i = i0; i <= i1; i++) {
-      if (pointInPolygon([(i + 0.5) * h, (j + 0.5) * h], poly)) out.push(j * grid.width + i);
+      if (pointInVertices((i + 0.5) * h, (j + 0.5) * h, vertices)) out.push(j * grid.width + i);
     }
   }
   return out;

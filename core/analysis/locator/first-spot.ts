@@ -5,7 +5,7 @@ import { explainedPeak, type FoundSource } from "./greedy-sources";
  * explains the highest reading, and the others keep their order after it. The drift carries a still-air
  * plume along the lineup for several metres; the greedy fit often puts its strongest source (by `q`, the
  * excess extrapolated to the kernel's cut-off) on that trail, downwind, and the source at the leak comes
- * second or third with the plume's own peak (docs/locator/benchmark-baseline.md, "Eighth round").
+ * second or third with the plume's own peak (docs/locator/benchmark-baseline.md, "Eighth round, first suspect").
  * Alternatives and spots from one reading are never moved up.
  */
 export function firstByExplainedPeak(found: readonly FoundSource[], among: number): readonly FoundSource[] {

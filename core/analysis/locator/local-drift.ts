@@ -91,29 +91,93 @@ export function chooseLocalDrift(
   allowed: Uint8Array,
   settings: DriftSettings,
 ): { fields: ReadingFields; strength: Uint8Array; direction: Uint8Array } {
-  const { dist, start, cell, groupX, groupY, groupOfReading } = fields;
   if (!(settings.penalty >= 0)) throw new Error(`drift penalty must be >= 0, got ${settings.penalty}`);
   for (const v of settings.strengths) if (!(v > 0)) throw new Error(`drift strength must be positive, got ${v}`);
   const cells = fields.sumWG.length;
-  const groups = fields.groupCell.length;
   const n = r.length;
+  // each long loop is a small function of its own, so the JIT optimises it on its own and no code after
+  // it throws the optimised loop away (docs/decisions/0147)
+  const { gw, gwr, totals } = groupTotals(fields.groupOfReading, fields.groupCell.length, w, r);
+  const chi0 = backgroundChi2(totals);
+  const slots = allowedSlots(fields, gridWidth, cellSize, allowed);
+  const far = settings.far ?? null;
+  const radial = settings.strengths.map((v) =>
+    radialPart(settings.screeningLengthM, settings.nearCutoffM, settings.truncationM, v, far),
+  );
+
+  // no drift: the fit every drift must beat
+  const best = noDriftFit(fields, slots, gwr, totals, chi0);
+  let max = 0;
+  for (let s = 0; s < slots.count; s++) max = Math.max(max, best[s]);
+  const bar = settings.penalty * Math.max(1, (chi0 - max) / Math.max(1, n - 2));
+  for (let s = 0; s < slots.count; s++) best[s] += bar;
+  const slotStrength = new Uint8Array(slots.count);
+  const slotDirection = new Uint8Array(slots.count);
+
+  // the sums of direction k for slot s at [s·8 + k]
+  const D = DRIFT_DIRECTIONS.length;
+  const sG = new Float64Array(slots.count * D);
+  const sGG = new Float64Array(slots.count * D);
+  const sGR = new Float64Array(slots.count * D);
+  for (let si = 0; si < radial.length; si++) {
+    sG.fill(0);
+    sGG.fill(0);
+    sGR.fill(0);
+    addDriftSums(fields.dist, slots, gw, gwr, radial[si], settings.strengths[si], sG, sGG, sGR);
+    chooseDirections(sG, sGG, sGR, slots.count, totals, chi0, si, best, slotStrength, slotDirection);
+  }
+  const strength = new Uint8Array(cells);
+  const direction = new Uint8Array(cells);
+  for (let s = 0; s < slots.count; s++) {
+    strength[slots.cell[s]] = slotStrength[s];
+    direction[slots.cell[s]] = slotDirection[s];
+  }
+  const kernel = driftedKernelValues(fields, slots, radial, settings.strengths, slotStrength, slotDirection);
+  const { sumWG, sumWGG } = kernelSums(fields, gw, kernel, cells);
+  return { fields: { ...fields, kernel, sumWG, sumWGG }, strength, direction };
+}
+
+/** Per group Σ w and Σ w·r, and the totals Σ w, Σ w·r, Σ w·r² over every reading. */
+function groupTotals(
+  groupOfReading: Int32Array,
+  groups: number,
+  w: Float64Array,
+  r: Float64Array,
+): { gw: Float64Array; gwr: Float64Array; totals: ScanTotals } {
   const gw = new Float64Array(groups);
   const gwr = new Float64Array(groups);
   let sw = 0,
     swr = 0,
     swrr = 0;
-  for (let i = 0; i < n; i++) {
+  for (let i = 0; i < r.length; i++) {
     gw[groupOfReading[i]] += w[i];
     gwr[groupOfReading[i]] += w[i] * r[i];
     sw += w[i];
     swr += w[i] * r[i];
     swrr += w[i] * r[i] * r[i];
   }
-  const totals: ScanTotals = { sumW: sw, sumWR: swr, sumWRR: swrr };
-  const chi0 = backgroundChi2(totals);
+  return { gw, gwr, totals: { sumW: sw, sumWR: swr, sumWRR: swrr } };
+}
 
-  // the allowed cells' slots, and the entries that reach them, group by group as stored
-  const slotOf = new Int32Array(cells).fill(-1);
+/** The allowed cells' slots, and the entries that reach them, group by group as stored. */
+interface Slots {
+  readonly count: number;
+  /** The cell of each slot. */
+  readonly cell: Int32Array;
+  /** Per listed entry: its index in the fields, its slot, the straight displacement reading − cell. */
+  readonly entry: Int32Array;
+  readonly slot: Int32Array;
+  readonly dxs: Float32Array;
+  readonly dys: Float32Array;
+  /** The listed entries of group g are [entryStart[g], entryStart[g + 1]). */
+  readonly entryStart: Int32Array;
+  readonly entries: number;
+}
+
+function allowedSlots(fields: ReadingFields, gridWidth: number, cellSize: number, allowed: Uint8Array): Slots {
+  const { start, cell, groupX, groupY } = fields;
+  const groups = fields.groupCell.length;
+  const slotOf = new Int32Array(fields.sumWG.length).fill(-1);
   const slotCell: number[] = [];
   let reaching = 0;
   for (let e = 0; e < cell.length; e++) {
@@ -125,7 +189,6 @@ export function chooseLocalDrift(
       slotCell.push(c);
     }
   }
-  const slots = slotCell.length;
   const entry = new Int32Array(reaching);
   const slot = new Int32Array(reaching);
   const entryStart = new Int32Array(groups + 1);
@@ -148,101 +211,136 @@ export function chooseLocalDrift(
     }
   }
   entryStart[groups] = m;
-  const far = settings.far ?? null;
-  const radial = settings.strengths.map((v) =>
-    radialPart(settings.screeningLengthM, settings.nearCutoffM, settings.truncationM, v, far),
-  );
+  return { count: slotCell.length, cell: Int32Array.from(slotCell), entry, slot, dxs, dys, entryStart, entries: m };
+}
 
-  // no drift: the fit every drift must beat
-  const sumGR = new Float64Array(slots);
-  for (let g = 0; g < groups; g++) {
+/** Each slot's Δχ² with the kernel the fields were built with. */
+function noDriftFit(
+  fields: ReadingFields,
+  slots: Slots,
+  gwr: Float64Array,
+  totals: ScanTotals,
+  chi0: number,
+): Float64Array {
+  const { entry, slot, entryStart } = slots;
+  const sumGR = new Float64Array(slots.count);
+  for (let g = 0; g < gwr.length; g++) {
     const ar = gwr[g];
     for (let k = entryStart[g]; k < entryStart[g + 1]; k++) sumGR[slot[k]] += ar * fields.kernel[entry[k]];
   }
-  const best = new Float64Array(slots);
-  let max = 0;
-  for (let s = 0; s < slots; s++) {
-    const c = slotCell[s];
+  const best = new Float64Array(slots.count);
+  for (let s = 0; s < slots.count; s++) {
+    const c = slots.cell[s];
     best[s] = fitOneCell(fields.sumWG[c], fields.sumWGG[c], sumGR[s], totals, chi0);
-    max = Math.max(max, best[s]);
   }
-  const bar = settings.penalty * Math.max(1, (chi0 - max) / Math.max(1, n - 2));
-  for (let s = 0; s < slots; s++) best[s] += bar;
-  const slotStrength = new Uint8Array(slots);
-  const slotDirection = new Uint8Array(slots);
+  return best;
+}
 
-  // eight directions per strength in one pass: exp(a·Δ) from four exponentials per entry; the sums of
-  // direction k for slot s at [s·8 + k]
+/** The eight directions' sums of one strength in one pass: exp(a·Δ) from four exponentials per entry. */
+function addDriftSums(
+  dist: Float32Array,
+  slots: Slots,
+  gw: Float64Array,
+  gwr: Float64Array,
+  { table, scale }: { table: SourceKernel; scale: number },
+  a: number,
+  sG: Float64Array,
+  sGG: Float64Array,
+  sGR: Float64Array,
+): void {
+  const { entry, slot, dxs, dys, entryStart } = slots;
   const D = DRIFT_DIRECTIONS.length;
-  const sG = new Float64Array(slots * D);
-  const sGG = new Float64Array(slots * D);
-  const sGR = new Float64Array(slots * D);
   const f = new Float64Array(D);
   const h = Math.SQRT1_2;
-  radial.forEach(({ table, scale }, si) => {
-    const a = settings.strengths[si];
-    sG.fill(0);
-    sGG.fill(0);
-    sGR.fill(0);
-    for (let g = 0; g < groups; g++) {
-      const aw = gw[g],
-        ar = gwr[g];
-      for (let k = entryStart[g]; k < entryStart[g + 1]; k++) {
-        const t = scale * table.at(dist[entry[k]]);
-        const ex = Math.exp(a * dxs[k]),
-          ey = Math.exp(a * dys[k]);
-        const hx = Math.exp(a * h * dxs[k]),
-          hy = Math.exp(a * h * dys[k]);
-        f[0] = t * ex;
-        f[1] = t * hx * hy;
-        f[2] = t * ey;
-        f[3] = (t * hy) / hx;
-        f[4] = t / ex;
-        f[5] = t / (hx * hy);
-        f[6] = t / ey;
-        f[7] = (t * hx) / hy;
-        const o = slot[k] * D;
-        for (let d = 0; d < D; d++) {
-          const v = f[d];
-          sG[o + d] += aw * v;
-          sGG[o + d] += aw * v * v;
-          sGR[o + d] += ar * v;
-        }
-      }
-    }
-    // directions in order within a strength, as the choice breaks ties towards the first tried
-    for (let s = 0; s < slots; s++) {
-      const o = s * D;
+  for (let g = 0; g < gw.length; g++) {
+    const aw = gw[g],
+      ar = gwr[g];
+    for (let k = entryStart[g]; k < entryStart[g + 1]; k++) {
+      const t = scale * table.at(dist[entry[k]]);
+      const ex = Math.exp(a * dxs[k]),
+        ey = Math.exp(a * dys[k]);
+      const hx = Math.exp(a * h * dxs[k]),
+        hy = Math.exp(a * h * dys[k]);
+      f[0] = t * ex;
+      f[1] = t * hx * hy;
+      f[2] = t * ey;
+      f[3] = (t * hy) / hx;
+      f[4] = t / ex;
+      f[5] = t / (hx * hy);
+      f[6] = t / ey;
+      f[7] = (t * hx) / hy;
+      const o = slot[k] * D;
       for (let d = 0; d < D; d++) {
-        const delta = fitOneCell(sG[o + d], sGG[o + d], sGR[o + d], totals, chi0);
-        if (delta > best[s]) {
-          best[s] = delta;
-          slotStrength[s] = si + 1;
-          slotDirection[s] = d;
-        }
+        const v = f[d];
+        sG[o + d] += aw * v;
+        sGG[o + d] += aw * v * v;
+        sGR[o + d] += ar * v;
       }
     }
-  });
-  const strength = new Uint8Array(cells);
-  const direction = new Uint8Array(cells);
-  for (let s = 0; s < slots; s++) {
-    strength[slotCell[s]] = slotStrength[s];
-    direction[slotCell[s]] = slotDirection[s];
   }
+}
 
-  // the chosen kernel, in new fields
+/** Directions in order within a strength, as the choice breaks ties towards the first tried. */
+function chooseDirections(
+  sG: Float64Array,
+  sGG: Float64Array,
+  sGR: Float64Array,
+  slots: number,
+  totals: ScanTotals,
+  chi0: number,
+  si: number,
+  best: Float64Array,
+  slotStrength: Uint8Array,
+  slotDirection: Uint8Array,
+): void {
+  const D = DRIFT_DIRECTIONS.length;
+  for (let s = 0; s < slots; s++) {
+    const o = s * D;
+    for (let d = 0; d < D; d++) {
+      const delta = fitOneCell(sG[o + d], sGG[o + d], sGR[o + d], totals, chi0);
+      if (delta > best[s]) {
+        best[s] = delta;
+        slotStrength[s] = si + 1;
+        slotDirection[s] = d;
+      }
+    }
+  }
+}
+
+/** The fields' kernel values with each drifted slot's chosen kernel in place of the plain one. */
+function driftedKernelValues(
+  fields: ReadingFields,
+  slots: Slots,
+  radial: readonly { table: SourceKernel; scale: number }[],
+  strengths: readonly number[],
+  slotStrength: Uint8Array,
+  slotDirection: Uint8Array,
+): Float32Array {
+  const { entry, slot, dxs, dys } = slots;
+  const { dist } = fields;
   const kernel = Float32Array.from(fields.kernel);
-  for (let k = 0; k < m; k++) {
+  for (let k = 0; k < slots.entries; k++) {
     const si = slotStrength[slot[k]];
     if (si === 0) continue;
-    const a = settings.strengths[si - 1];
+    const a = strengths[si - 1];
     const [ux, uy] = DRIFT_DIRECTIONS[slotDirection[slot[k]]];
     const e = entry[k];
     kernel[e] = radial[si - 1].scale * radial[si - 1].table.at(dist[e]) * Math.exp(a * (ux * dxs[k] + uy * dys[k]));
   }
+  return kernel;
+}
+
+/** Per cell Σ w·g and Σ w·g² with the given kernel values. */
+function kernelSums(
+  fields: ReadingFields,
+  gw: Float64Array,
+  kernel: Float32Array,
+  cells: number,
+): { sumWG: Float64Array; sumWGG: Float64Array } {
+  const { start, cell } = fields;
   const sumWG = new Float64Array(cells);
   const sumWGG = new Float64Array(cells);
-  for (let g = 0; g < groups; g++) {
+  for (let g = 0; g < gw.length; g++) {
     const aw = gw[g];
     for (let e = start[g], end = start[g + 1]; e < end; e++) {
       const c = cell[e];
@@ -250,5 +348,5 @@ export function chooseLocalDrift(
       sumWGG[c] += aw * kernel[e] * kernel[e];
     }
   }
-  return { fields: { ...fields, kernel, sumWG, sumWGG }, strength, direction };
+  return { sumWG, sumWGG };
 }

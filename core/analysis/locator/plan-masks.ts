@@ -10,6 +10,7 @@ import { cellsInside, nearestFreeCell, type PlanGrid } from "../grid/plan-grid";
 type Memo<T> = WeakMap<PlanGrid, { plan: LocatorInput["plan"]; value: number; layer: T }>;
 const equipmentMemo: Memo<Uint8Array | null> = new WeakMap();
 const priorMemo: Memo<Float64Array> = new WeakMap();
+const roomsMemo: Memo<Float32Array | null> = new WeakMap();
 
 function remembered<T>(memo: Memo<T>, grid: PlanGrid, plan: LocatorInput["plan"], value: number, draw: () => T): T {
   const hit = memo.get(grid);
@@ -56,6 +57,11 @@ export function fanStepScale(grid: PlanGrid, plan: LocatorInput["plan"], scale: 
   const out = new Float32Array(grid.width * grid.height).fill(1);
   for (const f of withFans) for (const k of cellsInside(grid, f.polygon)) out[k] = scale;
   return out;
+}
+
+/** `fanStepScale` drawn once per grid and plan (read only): the sources stage asks for it in every run. */
+export function fanRoomsScale(grid: PlanGrid, plan: LocatorInput["plan"], scale: number): Float32Array | null {
+  return remembered(roomsMemo, grid, plan, scale, () => fanStepScale(grid, plan, scale));
 }
 
 /** Log prior odds per cell: `logOdds` within 0.5 m of a line-set drop, valve or coil, where joints leak most. */

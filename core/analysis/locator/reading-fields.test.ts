@@ -40,4 +40,32 @@ describe("reading fields", () => {
       full.start[full.groupOfReading[0] + 1] - full.start[full.groupOfReading[0]],
     );
   });
+
+  it("focused on a circle, keeps the full field's sums, entries and nearest reading there and nothing elsewhere", () => {
+    const full = accumulateReadingFields(grid, xs, ys, y, w, kernel, 0.75);
+    const focus = { x: 5, y: 2, radiusM: 3 };
+    const part = accumulateReadingFields(grid, xs, ys, y, w, kernel, 0.75, null, new Uint8Array(29).fill(1), focus);
+    const h = grid.cellSize;
+    let inside = 0;
+    for (let c = 0; c < grid.width * grid.height; c++) {
+      const i = c % grid.width;
+      const j = (c - i) / grid.width;
+      if (((i + 0.5) * h - focus.x) ** 2 + ((j + 0.5) * h - focus.y) ** 2 <= 9) {
+        inside++;
+        expect(part.sumWG[c]).toBe(full.sumWG[c]);
+        expect(part.sumWGG[c]).toBe(full.sumWGG[c]);
+        expect(part.nearestReading[c]).toBe(full.nearestReading[c]);
+      } else {
+        expect(part.sumWG[c]).toBe(0);
+        expect(part.nearestReading[c]).toBe(Infinity);
+      }
+    }
+    expect(inside).toBeGreaterThan(300);
+    // each group's entries are the full field's inside the circle, in the same order
+    for (let g = 0; g < full.groupCell.length; g++) {
+      const want: number[] = [];
+      for (let e = full.start[g]; e < full.start[g + 1]; e++) if (part.sumWG[full.cell[e]] > 0) want.push(full.cell[e]);
+      expect(Array.from(part.cell.subarray(part.start[g], part.start[g + 1]))).toEqual(want);
+    }
+  });
 });

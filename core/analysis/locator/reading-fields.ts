@@ -51,7 +51,8 @@ export function accumulateReadingFields(
   searched: Uint8Array | null = null,
   /**
    * Only the cells of this circle are wanted (a retry screen's region): the searches do not step on
-   * from cells that cannot reach it, so cells outside it may hold fewer entries than a full field's.
+   * from cells that cannot reach it, and cells outside it get no entries, sums or nearest reading
+   * (Infinity, as out of every reading's reach), so the later steps work on the circle alone.
    */
   focus: SearchFocus | null = null,
 ): ReadingFields {
@@ -97,71 +98,57 @@ export function accumulateReadingFields(
   const nearestReading = new Float32Array(cells).fill(Infinity);
   const start = new Int32Array(groups + 1);
   const perSearch = Math.ceil((Math.PI * kernel.truncationM ** 2) / grid.cellSize ** 2);
-  let cap = Math.max(1024, (groupSearched ? groupSearched.reduce((a, b) => a + b, 0) : groups) * perSearch);
-  let cellArr = new Int32Array(cap);
-  let kernArr = new Float32Array(cap);
-  let distArr = new Float32Array(cap);
-  let used = 0;
-
+  const entries = new EntryList(
+    Math.max(1024, (groupSearched ? groupSearched.reduce((a, b) => a + b, 0) : groups) * perSearch),
+  );
+  const wanted = focus ? cellsInFocus(grid, focus) : null;
   const search = borrowSearch(grid, stepScale);
   const mapCut = searched ? -1 : 3 * mapSigmaM;
   const inv2s2 = 1 / (2 * mapSigmaM * mapSigmaM);
+  // each search's loops are small functions of their own, so the JIT optimises them on their own
+  // rather than in the middle of this loop (docs/decisions/0147)
   for (let g = 0; g < groups; g++) {
-    if (groupSearched && !groupSearched[g]) {
-      start[g] = used;
-      continue;
-    }
+    start[g] = entries.used;
+    if (groupSearched && !groupSearched[g]) continue;
     const i = groupFirst[g];
     const settled = search.reach(xs[i], ys[i], kernel.truncationM, focus);
-    const { dist } = search;
-    const list = search.settled;
-    if (used + settled > cap) {
-      cap = Math.max(cap * 2, used + settled);
-      const c2 = new Int32Array(cap);
-      c2.set(cellArr.subarray(0, used));
-      cellArr = c2;
-      const k2 = new Float32Array(cap);
-      k2.set(kernArr.subarray(0, used));
-      kernArr = k2;
-      const d2 = new Float32Array(cap);
-      d2.set(distArr.subarray(0, used));
-      distArr = d2;
-    }
-    start[g] = used;
-    const w = groupW[g];
-    const ySum = groupY[g];
-    const count = groupCount[g];
-    for (let q = 0; q < settled; q++) {
-      const c = list[q];
-      const d = dist[c];
-      if (d < nearestReading[c]) nearestReading[c] = d;
-      const gv = kernel.at(d);
-      if (gv > 0) {
-        sumWG[c] += w * gv;
-        sumWGG[c] += w * gv * gv;
-        cellArr[used] = c;
-        kernArr[used] = gv;
-        distArr[used] = d;
-        used++;
-      }
-      if (d <= mapCut) {
-        const om = Math.exp(-d * d * inv2s2);
-        if (om > 0) {
-          omega[c] += count * om;
-          omegaY[c] += ySum * om;
-        }
-      }
-    }
+    entries.reserve(settled);
+    addKernelEntries(
+      entries,
+      search.settled,
+      settled,
+      search.dist,
+      wanted,
+      kernel,
+      groupW[g],
+      sumWG,
+      sumWGG,
+      nearestReading,
+    );
+    if (mapCut >= 0)
+      addMapWeights(
+        search.settled,
+        settled,
+        search.dist,
+        wanted,
+        groupCount[g],
+        groupY[g],
+        mapCut,
+        inv2s2,
+        omega,
+        omegaY,
+      );
   }
+  const used = entries.used;
   start[groups] = used;
   giveBackSearch(search);
   return {
     groupCell: Int32Array.from(groupCellList),
     groupOfReading,
     start,
-    cell: cellArr.subarray(0, used),
-    kernel: kernArr.subarray(0, used),
-    dist: distArr.subarray(0, used),
+    cell: entries.cell.subarray(0, used),
+    kernel: entries.kernel.subarray(0, used),
+    dist: entries.dist.subarray(0, used),
     groupX: Float64Array.from(groupFirst, (i) => xs[i]),
     groupY: Float64Array.from(groupFirst, (i) => ys[i]),
     sumWG,
@@ -170,6 +157,111 @@ export function accumulateReadingFields(
     omegaY,
     nearestReading,
   };
+}
+
+/** The (cell, kernel value, distance) entries of the searches so far, grown as needed. */
+class EntryList {
+  cell: Int32Array;
+  kernel: Float32Array;
+  dist: Float32Array;
+  used = 0;
+  constructor(capacity: number) {
+    this.cell = new Int32Array(capacity);
+    this.kernel = new Float32Array(capacity);
+    this.dist = new Float32Array(capacity);
+  }
+  /** Room for `extra` more entries. */
+  reserve(extra: number): void {
+    if (this.used + extra <= this.cell.length) return;
+    const cap = Math.max(this.cell.length * 2, this.used + extra);
+    const cell = new Int32Array(cap);
+    cell.set(this.cell.subarray(0, this.used));
+    this.cell = cell;
+    const kernel = new Float32Array(cap);
+    kernel.set(this.kernel.subarray(0, this.used));
+    this.kernel = kernel;
+    const dist = new Float32Array(cap);
+    dist.set(this.dist.subarray(0, this.used));
+    this.dist = dist;
+  }
+}
+
+/** One search's cells within the kernel's reach: their entries, Σ w·g and Σ w·g², and the nearest reading. */
+function addKernelEntries(
+  entries: EntryList,
+  list: Int32Array,
+  settled: number,
+  dist: Float64Array,
+  wanted: Uint8Array | null,
+  kernel: SourceKernel,
+  w: number,
+  sumWG: Float64Array,
+  sumWGG: Float64Array,
+  nearestReading: Float32Array,
+): void {
+  const { cell, dist: entryDist } = entries;
+  const values = entries.kernel;
+  let used = entries.used;
+  for (let q = 0; q < settled; q++) {
+    const c = list[q];
+    if (wanted !== null && wanted[c] === 0) continue;
+    const d = dist[c];
+    if (d < nearestReading[c]) nearestReading[c] = d;
+    const gv = kernel.at(d);
+    if (gv > 0) {
+      sumWG[c] += w * gv;
+      sumWGG[c] += w * gv * gv;
+      cell[used] = c;
+      values[used] = gv;
+      entryDist[used] = d;
+      used++;
+    }
+  }
+  entries.used = used;
+}
+
+/** One search's Gaussian map weights Ω and Ω·y for the cells within `mapCut` (Kernel DM+V). */
+function addMapWeights(
+  list: Int32Array,
+  settled: number,
+  dist: Float64Array,
+  wanted: Uint8Array | null,
+  count: number,
+  ySum: number,
+  mapCut: number,
+  inv2s2: number,
+  omega: Float64Array,
+  omegaY: Float64Array,
+): void {
+  for (let q = 0; q < settled; q++) {
+    const c = list[q];
+    if (wanted !== null && wanted[c] === 0) continue;
+    const d = dist[c];
+    if (d <= mapCut) {
+      const om = Math.exp(-d * d * inv2s2);
+      if (om > 0) {
+        omega[c] += count * om;
+        omegaY[c] += ySum * om;
+      }
+    }
+  }
+}
+
+/** 1 for the cells whose centre lies within the focus circle (the region a retry screen reads). */
+function cellsInFocus(grid: PlanGrid, focus: SearchFocus): Uint8Array {
+  const out = new Uint8Array(grid.width * grid.height);
+  const h = grid.cellSize;
+  const { x, y, radiusM } = focus;
+  const r2 = radiusM * radiusM;
+  const i0 = Math.max(0, Math.floor((x - radiusM) / h));
+  const i1 = Math.min(grid.width - 1, Math.floor((x + radiusM) / h));
+  const j0 = Math.max(0, Math.floor((y - radiusM) / h));
+  const j1 = Math.min(grid.height - 1, Math.floor((y + radiusM) / h));
+  for (let j = j0; j <= j1; j++) {
+    for (let i = i0; i <= i1; i++)
+      if (((i + 0.5) * h - x) ** 2 + ((j + 0.5) * h - y) ** 2 <= r2) out[j * grid.width + i] = 1;
+  }
+  return out;
 }
 
 /** Per cell Σ_i w_i·g_i(c)·r_i for a per-reading vector r (one pass over the stored entries). */

@@ -52,7 +52,9 @@ export function spotFitsPlume(
   const reachM = PLUME_REGION_M + k.truncationM + 2 * grid.cellSize;
   const searched = new Uint8Array(n);
   for (let i = 0; i < n; i++) searched[i] = Math.hypot(lag.xs[i] - px, lag.ys[i] - py) <= reachM ? 1 : 0;
-  // only the region's cells are read below, so the searches need not step on from cells that cannot reach it
+  // only the region's cells are read below, so the searches need not step on from cells that cannot reach
+  // it, and the field keeps nothing outside it: cells there are ruled out as a spot out of every
+  // reading's reach is (their nearest reading is Infinity)
   const focus = { x: px, y: py, radiusM: PLUME_REGION_M };
   const field = fieldStage(
     grid,
@@ -65,30 +67,16 @@ export function spotFitsPlume(
     passes.otherAir,
     focus,
   );
-  // cells outside the region are ruled out as they are for a spot out of every reading's reach
-  const nearestReading = new Float32Array(field.fields.nearestReading.length).fill(Infinity);
-  const h = grid.cellSize;
-  const r2 = PLUME_REGION_M * PLUME_REGION_M;
-  const i0 = Math.max(0, Math.floor((px - PLUME_REGION_M) / h));
-  const i1 = Math.min(grid.width - 1, Math.floor((px + PLUME_REGION_M) / h));
-  const j0 = Math.max(0, Math.floor((py - PLUME_REGION_M) / h));
-  const j1 = Math.min(grid.height - 1, Math.floor((py + PLUME_REGION_M) / h));
-  for (let j = j0; j <= j1; j++) {
-    for (let i = i0; i <= i1; i++) {
-      const c = j * grid.width + i;
-      if (((i + 0.5) * h - px) ** 2 + ((j + 0.5) * h - py) ** 2 <= r2)
-        nearestReading[c] = field.fields.nearestReading[c];
-    }
-  }
   const sources = sourcesStage(
     plan,
     grid,
     lag,
     zones,
-    { ...field, fields: { ...field.fields, nearestReading } },
+    field,
     {
       kernel: k,
-      sources: settings.sources,
+      // only whether a first source is credible is read: no further rounds or alternatives
+      sources: { ...settings.sources, maxLeaks: 1, maxCandidates: 1 },
       zoneMarginM: settings.zones.marginM,
     },
     passes.levelColumns,

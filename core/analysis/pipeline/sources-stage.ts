@@ -4,7 +4,7 @@ import { findSources, residualOf, type FoundSource } from "../locator/greedy-sou
 import { broadKernel, diffuseBump, pointOverBroad, type DiffuseBump } from "../locator/diffuse-bump";
 import { chooseLocalDrift } from "../locator/local-drift";
 import type { NonnegativeFit } from "../locator/nonnegative-fit";
-import { driftTrials, equipmentMask, fanStepScale, riskPointPrior } from "../locator/plan-masks";
+import { driftTrials, equipmentMask, fanRoomsScale, fanStepScale, riskPointPrior } from "../locator/plan-masks";
 import type { ReadingFields } from "../locator/reading-fields";
 import type { KernelSettings, SourceSettings } from "../locator/settings";
 import type { ScanResult } from "../locator/source-scan";
@@ -68,11 +68,39 @@ export function supportRule(
  * drift inside says nothing and only lets a spot there explain readings outside (no drift is fitted).
  */
 export function outsideFanRooms(allowed: Uint8Array, grid: PlanGrid, plan: LocatorInput["plan"]): Uint8Array {
-  const rooms = fanStepScale(grid, plan, 0.5);
+  const rooms = fanRoomsScale(grid, plan, 0.5);
   if (!rooms) return allowed;
   const out = new Uint8Array(allowed);
   for (let c = 0; c < out.length; c++) if (rooms[c] < 1) out[c] = 0;
   return out;
+}
+
+/**
+ * Cells where a spot may lie: free, outside benign-source zones and their margin, within reach of a
+ * reading, on equipment (when the plan draws any). A loop of its own, optimised on its own rather than
+ * in the middle of the stage (docs/decisions/0147).
+ */
+function allowedCells(
+  grid: PlanGrid,
+  zones: Pick<ZonesResult, "inside" | "distance">,
+  nearestReading: Float32Array,
+  onEquipment: Uint8Array | null,
+  zoneMarginM: number,
+  maxReachM: number,
+): Uint8Array {
+  const cells = grid.width * grid.height;
+  const allowed = new Uint8Array(cells);
+  for (let c = 0; c < cells; c++) {
+    allowed[c] =
+      !grid.blocked[c] &&
+      !zones.inside[c] &&
+      zones.distance[c] > zoneMarginM &&
+      nearestReading[c] <= maxReachM &&
+      (!onEquipment || onEquipment[c])
+        ? 1
+        : 0;
+  }
+  return allowed;
 }
 
 export function sourcesStage(
@@ -88,19 +116,14 @@ export function sourcesStage(
   const s = settings.sources;
   const y = lag.ppm;
   const n = y.length;
-  const cells = grid.width * grid.height;
-  const onEquipment = equipmentMask(grid, plan, s.equipmentMarginM);
-  const allowed = new Uint8Array(cells);
-  for (let c = 0; c < cells; c++) {
-    allowed[c] =
-      !grid.blocked[c] &&
-      !zones.inside[c] &&
-      zones.distance[c] > settings.zoneMarginM &&
-      field.fields.nearestReading[c] <= s.maxReachM &&
-      (!onEquipment || onEquipment[c])
-        ? 1
-        : 0;
-  }
+  const allowed = allowedCells(
+    grid,
+    zones,
+    field.fields.nearestReading,
+    equipmentMask(grid, plan, s.equipmentMarginM),
+    settings.zoneMarginM,
+    s.maxReachM,
+  );
   let fields = field.fields;
   const drift = driftTrials(s, field.fansStir);
   if (drift.strengths.length > 0) {

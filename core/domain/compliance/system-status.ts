@@ -15,7 +15,7 @@ import { leakDetectionCheckDue } from "./leak-detection-check";
 import type { ChargeAddition } from "./leak-rate";
 import type { ApplianceType, LeakRateMethod, RuleProfile } from "./rule-profile";
 import { formatCalendarDay as day } from "../dates/format-in-zone";
-import { DEFAULT_NUMBER_FORMAT, type NumberFormat } from "../numbers/number-format";
+import { DEFAULT_NUMBER_FORMAT, formatGrouped, formatQuantity, type NumberFormat } from "../numbers/number-format";
 
 /** What one system's records say, on one day of the store's calendar. Pure: the caller loads the rows. */
 export interface SystemRecords {
@@ -153,7 +153,7 @@ export function systemStatus(
     due.push({
       kind: "repair",
       dueOn: unrepairedBreach.repairDue,
-      what: `Repair: leak rate ${unrepairedBreach.percent.toFixed(1)} % on ${day(unrepairedBreach.date)} is above ${unrepairedBreach.thresholdPercent} %${repairClockNote(open!)}`,
+      what: `Repair: leak rate ${formatGrouped(unrepairedBreach.percent, numberFormat, 1)} % on ${day(unrepairedBreach.date)} is above ${unrepairedBreach.thresholdPercent === null ? "the threshold" : `${formatQuantity(unrepairedBreach.thresholdPercent, numberFormat, 3)} %`}${repairClockNote(open!)}`,
       source: `${breachPart.title}; ${breachPart.repairDays.source}`,
     });
   }
@@ -234,7 +234,7 @@ export function systemStatus(
         kind: "chronic-leaker-report",
         dueOn: y.reportDue,
         year: y.year,
-        what: `Chronic-leaker report for ${y.year}: ${y.percent.toFixed(0)} % of the full charge added`,
+        what: `Chronic-leaker report for ${y.year}: ${formatGrouped(y.percent, numberFormat, 0)} % of the full charge added`,
         source: `${yearPart.chronicLeaker.percentOfFullCharge.source}; ${yearPart.chronicLeaker.reportBy.source}`,
       });
     }

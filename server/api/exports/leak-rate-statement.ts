@@ -172,7 +172,22 @@ function profileSection(doc: Doc, r: SystemRecordsView, cite: Cite) {
     );
 }
 
-function leakRateSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string, cite: Cite) {
+/** A percentage in the company's number format: one place for a computed rate, every place given for a rule's threshold. */
+function percentWords(format: NumberFormat) {
+  const givenPlaces = (p: number) => Math.min(3, (String(p).split(".")[1] ?? "").length);
+  return {
+    rate: (p: number) => `${formatGrouped(p, format, 1)} %`,
+    rule: (p: number) => `${formatGrouped(p, format, givenPlaces(p))} %`,
+  };
+}
+
+function leakRateSection(
+  doc: Doc,
+  r: SystemRecordsView,
+  mass: (kg: number) => string,
+  cite: Cite,
+  pct: ReturnType<typeof percentWords>,
+) {
   heading(doc, "Leak rate at every addition");
   const byId = new Map(r.additions.map((a) => [a.id, a]));
   const rows = r.leakRates.map((p) => [
@@ -180,11 +195,11 @@ function leakRateSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => s
     mass(p.additionIds.reduce((s, id) => s + (byId.get(id)?.amountKg ?? 0), 0)),
     p.method === "annualizing" ? `${p.days} d` : `from ${day(p.windowStart)}`,
     mass(p.countedKg),
-    `${p.percent.toFixed(1)} %${p.exceeds ? " (above)" : ""}`,
+    `${pct.rate(p.percent)}${p.exceeds ? " (above)" : ""}`,
     // Each figure cites the part in force on its own date (after a retrofit, earlier figures keep theirs).
     p.thresholdPercent === null
       ? "none"
-      : `${p.thresholdPercent} %${p.thresholdSource ? ` (${cite(p.thresholdSource)})` : ""}`,
+      : `${pct.rule(p.thresholdPercent)}${p.thresholdSource ? ` (${cite(p.thresholdSource)})` : ""}`,
     day(p.repairDue),
   ]);
   if (rows.length)
@@ -295,7 +310,13 @@ function ldsChecksSection(doc: Doc, r: SystemRecordsView) {
     );
 }
 
-function chronicSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => string, cite: Cite) {
+function chronicSection(
+  doc: Doc,
+  r: SystemRecordsView,
+  mass: (kg: number) => string,
+  cite: Cite,
+  pct: ReturnType<typeof percentWords>,
+) {
   if (!r.chronic.length) return;
   heading(doc, "Added per calendar year");
   table(
@@ -313,7 +334,7 @@ function chronicSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => st
         : [
             String(y.year),
             mass(y.addedKg),
-            `${y.percent.toFixed(1)} %`,
+            pct.rate(y.percent),
             `${
               y.chronic
                 ? y.filed
@@ -327,7 +348,7 @@ function chronicSection(doc: Doc, r: SystemRecordsView, mass: (kg: number) => st
   if (r.chronicRule)
     para(
       doc,
-      `Chronic leaker from ${r.chronicRule.percent} % of the full charge in a calendar year, reported by ${r.chronicRule.reportBy} (${cite(r.chronicRule.source)}).`,
+      `Chronic leaker from ${pct.rule(r.chronicRule.percent)} of the full charge in a calendar year, reported by ${r.chronicRule.reportBy} (${cite(r.chronicRule.source)}).`,
     );
 }
 
@@ -484,6 +505,7 @@ export function leakRateStatementPdf(
     doc.on("error", reject);
   });
   const mass = (kg: number) => statementMass(kg, options.massUnit, options.numberFormat);
+  const pct = percentWords(options.numberFormat ?? "1,234.5");
   const cite = (source: string) => citedWithAcceptance(source, options.acceptedReadings ?? null);
   const generated = `made ${formatInZone(options.generatedAt ?? new Date(), r.store.timeZone, "dateTime")}`;
 
@@ -501,9 +523,9 @@ export function leakRateStatementPdf(
   profileSection(doc, r, cite);
   if (r.profile.leakRateRules) {
     additionsSection(doc, r, mass);
-    leakRateSection(doc, r, mass, cite);
+    leakRateSection(doc, r, mass, cite, pct);
   } else euRecordsSection(doc, r, mass);
-  chronicSection(doc, r, mass, cite);
+  chronicSection(doc, r, mass, cite, pct);
   voidedSection(doc, r, mass);
   findingsSection(doc, findingList);
   dueSection(doc, r, cite);

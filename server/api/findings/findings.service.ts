@@ -65,7 +65,7 @@ export function eventDay(given: string | undefined, store: StoreRow, field = "on
 async function checkReferences(ctx: AppContext, viewer: Viewer, storeId: string, input: CreateInput): Promise<void> {
   if (input.systemId) {
     const [s] = await ctx.db
-      .select({ id: systems.id })
+      .select({ name: systems.name, retiredAt: systems.retiredAt, retiredOn: systems.retiredOn })
       .from(systems)
       .where(
         and(eq(systems.id, input.systemId), eq(systems.storeId, storeId), eq(systems.companyId, viewer.companyId)),
@@ -74,6 +74,12 @@ async function checkReferences(ctx: AppContext, viewer: Viewer, storeId: string,
       throw badRequest("Please check: systemId is not a system of this store.", {
         systemId: "is not a system of this store",
       });
+    // A retired system's records are kept as they are (docs/decisions/0124): a new leak on it would
+    // start a repair clock on equipment no longer in service.
+    if (s.retiredAt) {
+      const why = `${s.name} was retired on ${s.retiredOn ?? s.retiredAt.toISOString().slice(0, 10)}: record the leak without a system, or on the system that replaced it`;
+      throw badRequest(`Please check: systemId ${why}.`, { systemId: why });
+    }
   }
   if (input.planId) {
     const [p] = await ctx.db

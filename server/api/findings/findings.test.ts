@@ -108,6 +108,32 @@ describe("findings: create, list, read", () => {
     expect(confirmedBare.body.error.fields.component).toMatch(/required/);
   });
 
+  it("refuses a finding on a retired system with the reason, and takes the same leak without the system", async () => {
+    const lead = await signedIn("lead-tech");
+    const old = (
+      await lead.post(`/api/stores/${co.store.id}/systems`, {
+        name: "Rack Z",
+        refrigerantId: "R-404A",
+        fullCharge: { value: 120, unit: "lb" },
+        applianceType: "commercial-refrigeration",
+        automaticLeakDetection: false,
+        inServiceOn: "2020-01-01",
+      })
+    ).body.id;
+    const retired = await lead.post(`/api/systems/${old}/retire`, { retiredOn: "2026-03-31", reasonKind: "removed" });
+    expect(retired.status, JSON.stringify(retired.body)).toBe(200);
+    const tech = await signedIn("technician");
+    const clientId = randomUUID();
+    const refused = await tech.post(`/api/stores/${co.store.id}/findings`, newFinding({ systemId: old, clientId }));
+    expect(refused.status).toBe(400);
+    expect(refused.body.error.fields.systemId).toBe(
+      "Rack Z was retired on 2026-03-31: record the leak without a system, or on the system that replaced it",
+    );
+    const kept = await tech.post(`/api/stores/${co.store.id}/findings`, newFinding({ systemId: null, clientId }));
+    expect(kept.status, JSON.stringify(kept.body)).toBe(201);
+    expect(kept.body.systemId).toBeNull();
+  });
+
   it("keeps companies apart: another company's finding and store are 404, store contacts see only their store", async () => {
     const tech = await signedIn("technician");
     const f = (await tech.post(`/api/stores/${co.store.id}/findings`, newFinding())).body;

@@ -9,6 +9,7 @@ import { Dialog } from "../../../components/ui/dialog";
 import { Select } from "../../../components/ui/select";
 import { refreshCounts, syncSoon } from "../hooks/sync-loop";
 import { queueFinding } from "../model/finding-queue";
+import { findingSystemId } from "../model/finding-system";
 import { walkDb } from "../model/walk-db";
 import type { LeakSpot } from "../model/walk-mode";
 
@@ -19,6 +20,8 @@ export function LeakForm(props: {
   planId: string;
   sweepId: string;
   fixtures: readonly Fixture[];
+  /** The store's systems in service (the device's copy): a leak is never recorded on a retired one. */
+  inServiceSystemIds: ReadonlySet<string>;
   lengthUnit?: LengthPreference;
   onClose(): void;
   onSaved(id: string): void;
@@ -61,7 +64,7 @@ export function LeakForm(props: {
           planId: props.planId,
           sweepId: props.sweepId,
           fixtureId: fixtureId || null,
-          systemId: props.fixtures.find((x) => x.id === fixtureId)?.systemId ?? null,
+          systemId: findingSystemId(props.fixtures, fixtureId || null, props.inServiceSystemIds),
           x: props.spot.x,
           y: props.spot.y,
           component: (component || null) as never,

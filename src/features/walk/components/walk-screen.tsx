@@ -473,6 +473,7 @@ export function WalkScreen({
           planId={plan.id}
           sweepId={sweep.id}
           fixtures={fixtures}
+          inServiceSystemIds={new Set((storePack.data?.systems ?? []).map((x) => x.id))}
           lengthUnit={lengthUnit}
           onClose={() => send({ type: "cancel" })}
           onSaved={() => {
