@@ -2,7 +2,6 @@ import { gridCellCount, LocatorInputError, MAX_GRID_CELLS, type LocatorInput } f
 import type { DelayFacts, LocatorResult } from "../contracts/locator-output";
 import { createPlanGrid } from "./grid/plan-grid";
 import { DEFAULT_LOCATOR_OPTIONS, type LocatorOptions } from "./locator/locator-options";
-import { mixedLevel } from "./locator/mixed-level";
 import { readingAir } from "./locator/pass-air";
 import { casesRunFans, fanStepScale } from "./locator/plan-masks";
 import { LOCATOR_SETTINGS, type LocatorSettings } from "./locator/settings";
@@ -11,6 +10,7 @@ import { diagnosticsStage } from "./pipeline/diagnostics-stage";
 import { fieldStage, type OtherAir } from "./pipeline/field-stage";
 import { lagStage } from "./pipeline/lag-stage";
 import { oneReadingSource } from "./pipeline/one-reading";
+import { passFitOf } from "./pipeline/pass-fit";
 import { placementStage } from "./pipeline/placement-stage";
 import { spotFitsPlume, type PassFit } from "./pipeline/retry-screen";
 import { round2 } from "./pipeline/numbers";
@@ -75,14 +75,8 @@ export function locate(
     });
     return { lag, zones };
   };
-  // each pass in its own air, and a stilled fixture's mixed readings as its level (they depend on the lag)
-  const passFit = ({ lag, zones }: ReturnType<typeof lagAndZones>): PassFit => {
-    const level = other ? mixedLevel(plan, air, lag, zones.zoneOfReading, instrument.alarmPpm) : null;
-    return {
-      otherAir: other && level ? { ...other, levelOnly: level.levelOnly } : other,
-      levelColumns: level?.columns ?? [],
-    };
-  };
+  const passFit = ({ lag, zones }: ReturnType<typeof lagAndZones>): PassFit =>
+    passFitOf(plan, grid, air, other, lag, zones, instrument.alarmPpm, settings);
   const stages = ({ lag, zones }: ReturnType<typeof lagAndZones>) => {
     const { otherAir, levelColumns } = passFit({ lag, zones });
     const field = fieldStage(grid, stepScale, casesRunFans(plan.fixtures), lag, zones, settings, null, otherAir);

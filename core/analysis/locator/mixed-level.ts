@@ -28,6 +28,8 @@ export function mixedLevel(
   lag: { xs: Float64Array; ys: Float64Array; ppm: Float64Array; censored: Uint8Array },
   zoneOfReading: Int32Array,
   alarmPpm: number,
+  /** Per air model: whether its readings may take over placing the leak (pass-explained.ts); all when absent. */
+  trusted: readonly boolean[] | null = null,
 ): MixedLevel | null {
   if (air.models.length < 2) return null;
   const { xs, ys, ppm: y } = lag;
@@ -39,7 +41,7 @@ export function mixedLevel(
   const columns: Float64Array[] = [];
   const levelOnly = new Uint8Array(n);
   plan.fixtures.forEach((f, k) => {
-    if (!stilledByAPass(air, k)) return;
+    if (!stilledByAPass(air, k, trusted)) return;
     const keep = readingsWithFansOn(air, k);
     const pick = (v: Float64Array) => Float64Array.from(keep, (i) => v[i]);
     if (!fansMixing(f, pick(xs), pick(ys), pick(y), background, alarmPpm)) return;

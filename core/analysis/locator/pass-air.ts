@@ -1,4 +1,9 @@
 import type { LocatorFixture, LocatorInput, LocatorPass } from "../../contracts/locator-input";
+import type { PlanGrid } from "../grid/plan-grid";
+import { readingWeights } from "../pipeline/numbers";
+import { passExplained } from "./pass-explained";
+import type { LocatorSettings } from "./settings";
+import { createSourceKernel } from "./source-kernel";
 
 /**
  * The air each reading was taken in. Model 0 is the plan as given (the first pass, and every reading
@@ -54,7 +59,63 @@ export function readingsWithFansOn(air: ReadingAir, k: number): number[] {
   return keep;
 }
 
-/** Whether a pass stilled fixture `k` whose fans run in the plan's own air. */
-export function stilledByAPass(air: ReadingAir, k: number): boolean {
-  return air.models[0][k].fans && air.models.some((m) => !m[k].fans);
+/** Whether a pass (of the `only` models, when given) stilled fixture `k` whose fans run in the plan's own air. */
+export function stilledByAPass(air: ReadingAir, k: number, only: readonly boolean[] | null = null): boolean {
+  return air.models[0][k].fans && air.models.some((m, j) => !m[k].fans && (!only || only[j]));
+}
+
+/** How well each air model's own readings are explained by one source in that air (model 0: 1). */
+export function passesExplained(
+  grid: PlanGrid,
+  lag: { xs: Float64Array; ys: Float64Array; ppm: Float64Array; censored: Uint8Array },
+  zoneOfReading: Int32Array,
+  air: ReadingAir,
+  other: { models: readonly { fansStir: boolean; stepScale: Float32Array | null }[] },
+  settings: Pick<LocatorSettings, "kernel" | "noise">,
+): number[] {
+  const k = settings.kernel;
+  const weights = readingWeights(lag.ppm, settings.noise);
+  return air.models.map((_, m) => {
+    if (m === 0) return 1;
+    const model = other.models[m - 1];
+    const own: number[] = [];
+    for (let i = 0; i < lag.ppm.length; i++)
+      if (air.modelOfReading[i] === m && !lag.censored[i] && zoneOfReading[i] < 0) own.push(i);
+    const pick = (v: Float64Array) => Float64Array.from(own, (i) => v[i]);
+    const kernel = createSourceKernel(
+      k.screeningLengthM,
+      k.nearCutoffM,
+      k.truncationM,
+      model.fansStir && k.farShare > 0 ? { lengthM: k.farScreeningLengthM, share: k.farShare } : null,
+    );
+    return passExplained(
+      grid,
+      { xs: pick(lag.xs), ys: pick(lag.ys), ppm: pick(lag.ppm), w: pick(weights) },
+      kernel,
+      k.mapSigmaM,
+      model.stepScale,
+    );
+  });
+}
+
+/**
+ * A pass's readings count in the joint fit by the share of their scatter one source in their own air
+ * explains, to this power: a stilled case whose front reads nothing at first and then rises, or a stilled
+ * neighbour that collected the leaking case's gas, explains itself poorly and barely moves the first
+ * pass's spot. Tuned on the pinpoint-pass stores 1–12, 8601–8645 and 8801–8830 (docs/benchmarks.md).
+ */
+export const PASS_WEIGHT_POWER = 3;
+/**
+ * Only a pass that explains itself at least this well takes over placing the leak in the fixture it
+ * stilled (that fixture's mixed first-pass readings then count as its level only, mixed-level.ts);
+ * otherwise those readings keep saying where along the fixture the gas is. Tuned as above.
+ */
+export const PASS_TRUSTED_SHARE = 0.9;
+
+/** Per air model: whether its readings may take over placing the leak, and its readings' weight factor. */
+export function passWeighing(explained: readonly number[]): { trusted: boolean[]; weightOfModel: number[] } {
+  return {
+    trusted: explained.map((r, m) => m === 0 || r >= PASS_TRUSTED_SHARE),
+    weightOfModel: explained.map((r, m) => (m === 0 ? 1 : r ** PASS_WEIGHT_POWER)),
+  };
 }

@@ -41,6 +41,8 @@ export interface OtherAir {
   readonly modelOfReading: Int32Array;
   /** 1 for a reading that only says a stilled fixture's level (locator/mixed-level.ts): drawn on the map, fitted by no point source. */
   readonly levelOnly?: Uint8Array;
+  /** Each model's weight on its readings' fit weights (1 for model 0): a pass weighed by how well its own air explains it. */
+  readonly weightOfModel?: readonly number[];
 }
 
 /**
@@ -78,6 +80,8 @@ export function fieldStage(
   const usable = new Uint8Array(n);
   for (let i = 0; i < n; i++) usable[i] = !lag.censored[i] && zones.zoneOfReading[i] < 0 ? 1 : 0;
   const weights = readingWeights(lag.ppm, settings.noise);
+  const scale = other?.weightOfModel;
+  if (scale) for (let i = 0; i < n; i++) weights[i] *= scale[modelOfReading[i]];
   const fields = fieldsByModel(
     grid,
     lag,

@@ -1,11 +1,11 @@
 import { describe, expect, it } from "vitest";
 import { parseLocatorInput, type LocatorInputRaw } from "../../contracts/locator-input";
 import { locate } from "../locate";
-import { mixedLevel } from "../locator/mixed-level";
 import { readingAir } from "../locator/pass-air";
 import { casesRunFans, fanStepScale } from "../locator/plan-masks";
 import { LOCATOR_SETTINGS } from "../locator/settings";
 import { lagStage } from "./lag-stage";
+import { passFitOf } from "./pass-fit";
 import { NO_PASSES, spotFitsPlume } from "./retry-screen";
 import { gridOf, rect } from "./stage-fixtures";
 import { zonesStage } from "./zones-stage";
@@ -55,11 +55,17 @@ function screen(input: ReturnType<typeof store>, seePasses: boolean) {
     fansStir: casesRunFans([...fixtures]),
     stepScale: fanStepScale(grid, { ...plan, fixtures: [...fixtures] }, s.kernel.fanMixingScale),
   }));
-  const level = mixedLevel(plan, air, lag, zones.zoneOfReading, instrument.alarmPpm);
-  const passes = {
-    otherAir: { models, modelOfReading: air.modelOfReading, levelOnly: level?.levelOnly },
-    levelColumns: level?.columns ?? [],
-  };
+  // built as locate() builds it (each pass weighed by its own fit, the level where it explains itself)
+  const passes = passFitOf(
+    plan,
+    grid,
+    air,
+    { models, modelOfReading: air.modelOfReading },
+    lag,
+    zones,
+    instrument.alarmPpm,
+    s,
+  );
   return spotFitsPlume(plan, grid, stepScale, lag, zones, peak, s, seePasses ? passes : NO_PASSES);
 }
 
@@ -74,7 +80,7 @@ describe("the retry screen sees every pass", () => {
     [[4, 4.5], 8, 20, 3, true],
     [[3, 2], 2.5, 20, 0, true],
     [[5, 3], 4, 20, 0, false],
-    [[7, 4], 8, 8, 5, false],
+    [[7, 4], 8, 8, 5, true],
   ];
   for (const [leak, level, peak, delayS, fits] of cases) {
     it(`judges a still-air pass in its own air as the full run does (leak at ${leak}, ${delayS} s)`, () => {

@@ -196,11 +196,16 @@ describe("the still-air pass panel", () => {
     // a tap anywhere on the line opens it
     fireEvent.click(line);
     expect(screen.getByRole("button", { name: "Fans back on — end pass" })).toBeTruthy();
+    // the cautions open over the whole screen, not inside the banners' short scrolling box
+    expect(screen.queryByTestId("pass-cautions")).toBeNull();
+    fireEvent.click(screen.getByRole("button", { name: "⚠ Cautions while the air is still" }));
     const cautions = screen.getByTestId("pass-cautions").textContent ?? "";
     // R-290 is flammable (ASHRAE 34 class A3); the last caution defers to the codes
     expect(cautions).toMatch(/product warms up/);
     expect(cautions).toMatch(/flammable/);
     expect(cautions).toMatch(/local codes/);
+    fireEvent.click(screen.getByRole("button", { name: "Back to the pass" }));
+    expect(screen.queryByTestId("pass-cautions")).toBeNull();
     fireEvent.click(screen.getByRole("button", { name: "Fold the notices to one line" }));
     expect(screen.queryByTestId("pass-cautions")).toBeNull();
   });

@@ -9,7 +9,9 @@ import { mixingAdvice } from "../model/mixing-advice";
 import { stillAirOffer } from "../model/still-air-offer";
 import { clockText, passConditionText, passNumbers } from "../model/pinpoint-pass";
 import { passCautions } from "../model/pass-cautions";
+import { Button } from "../../../components/ui/button";
 import { Cautions } from "../../../components/ui/cautions";
+import { Dialog } from "../../../components/ui/dialog";
 import { StripChip, useFoldedStrip } from "./notice-strip";
 import { StartPassDialog } from "./start-pass-dialog";
 
@@ -48,6 +50,7 @@ export function PinpointPassPanel({
   const pass = usePinpointPass(sweep, reload);
   const [dismissed, setDismissed] = useState<readonly string[]>([]);
   const [starting, setStarting] = useState<Fixture | null>(null);
+  const [readingCautions, setReadingCautions] = useState(false);
   const advice = useMemo(
     () => mixingAdvice(sweep, fixtures, committed, sweep.alarmPpm),
     [sweep, fixtures, committed],
@@ -94,9 +97,26 @@ export function PinpointPassPanel({
             Fans back on — end pass
           </button>
         </span>
-        <div className="pb-2 text-sm" data-testid="pass-cautions">
-          <Cautions items={passCautions(stilled, fixtures, systems)} title="While the air is still" />
-        </div>
+        <button
+          type="button"
+          className="min-h-12 self-start px-0 text-left font-bold underline"
+          onClick={() => setReadingCautions(true)}
+        >
+          ⚠ Cautions while the air is still
+        </button>
+        {/* a dialog over the whole screen, not the banners' short scrolling box: read in full on a phone */}
+        <Dialog
+          title={`While the air is still at ${name(stilled)}`}
+          open={readingCautions}
+          onClose={() => setReadingCautions(false)}
+        >
+          <div className="text-sm" data-testid="pass-cautions">
+            <Cautions items={passCautions(stilled, fixtures, systems)} title="Keep in mind" />
+          </div>
+          <Button className="min-h-12" onClick={() => setReadingCautions(false)}>
+            Back to the pass
+          </Button>
+        </Dialog>
       </div>
     );
   }
