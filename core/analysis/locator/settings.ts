@@ -110,6 +110,18 @@ export interface PlacementSettings {
   readonly upwindWindowM: number;
   readonly upwindMinMoveM: number;
   readonly upwindMinGain: number;
+  /**
+   * In still air the first spot is the fitted source that explains the highest reading, not the
+   * strongest (first-spot.ts); off = the strongest.
+   */
+  readonly stillFirstByPeak: boolean;
+  /** A spot inside a display case, off the risk-point prior, is moved across to the case's back line (case-back.ts). */
+  readonly toCaseBack: boolean;
+  /**
+   * A spot placed in a fan-stirred walk-in or machine room is named at the fitting within this reach of
+   * its cell's centre (at-fitting.ts): the prior's 0.5 m plus half a 0.25 m cell; 0 = off.
+   */
+  readonly fittingReachM: number;
 }
 
 export interface ReportSettings {
@@ -178,6 +190,9 @@ export const LOCATOR_SETTINGS: LocatorSettings = {
     upwindWindowM: 6,
     upwindMinMoveM: 1.5,
     upwindMinGain: 8,
+    stillFirstByPeak: true,
+    toCaseBack: true,
+    fittingReachM: 0.625,
   },
   report: {
     coverageGapM: 3,

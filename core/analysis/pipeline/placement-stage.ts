@@ -1,7 +1,10 @@
 import type { LocatorInput } from "../../contracts/locator-input";
 import type { SuspectSpotFacts } from "../../contracts/locator-output";
 import { cellCentre, cellIndexOf, cellsInside, type PlanGrid } from "../grid/plan-grid";
+import { fittingAt } from "../locator/at-fitting";
+import { onCaseBack } from "../locator/case-back";
 import { oneSidedPass } from "../locator/diagnostics";
+import { firstByExplainedPeak } from "../locator/first-spot";
 import type { FoundSource } from "../locator/greedy-sources";
 import { refineCell } from "../locator/local-refine";
 import { posteriorRadius } from "../locator/posterior-radius";
@@ -114,7 +117,9 @@ export function placementStage(
     return [top, mirror, ...found.slice(1)].slice(0, s0.maxCandidates);
   };
 
-  let found = sources.found;
+  // still air: the spot at the plume's own peak first, not the strongest source on its trail (first-spot.ts)
+  let found =
+    p.stillFirstByPeak && !field.fansStir ? firstByExplainedPeak(sources.found, s0.rankedRounds) : sources.found;
   if (
     p.upwindStrengths.length > 0 &&
     field.fansStir &&
@@ -153,6 +158,26 @@ export function placementStage(
     );
   }
   const placed: FoundSource[] = [];
+  // spots named at a point of their cell rather than its centre: at a fitting, on a case's back line
+  const namedAt = new Map<FoundSource, readonly [number, number]>();
+  const moveTo = (s: FoundSource, x: number, y0: number): FoundSource => {
+    const cell = cellIndexOf(grid, x, y0);
+    const out = cell === s.cell ? { ...s } : { ...s, cell, column: kernelColumn(fields, cell, n) };
+    namedAt.set(out, [x, y0]);
+    return out;
+  };
+  const allowedAt = (x: number, y0: number) => allowed[cellIndexOf(grid, x, y0)] === 1;
+  const atFitting = (s: FoundSource): FoundSource => {
+    const [x, y0] = cellCentre(grid, s.cell);
+    const fitting = p.fittingReachM > 0 ? fittingAt(plan.riskPoints, x, y0, p.fittingReachM, allowedAt) : null;
+    return fitting ? moveTo(s, fitting.x, fitting.y) : s;
+  };
+  // a case spot the prior did not place goes to the case's back, where its piping runs (case-back.ts)
+  const atCaseBack = (s: FoundSource): FoundSource => {
+    if (!p.toCaseBack || (prior && prior[s.cell] > 0)) return s;
+    const back = onCaseBack(plan.fixtures, grid, ...cellCentre(grid, s.cell));
+    return back && allowedAt(...back) ? moveTo(s, ...back) : s;
+  };
   for (const s of withMirror(found)) {
     const room = roomOf[s.cell];
     if (room < 0) {
@@ -166,20 +191,22 @@ export function placementStage(
         p.refineInflation * s2,
         prior,
       );
-      placed.push(cell === s.cell ? s : { ...s, cell, column: kernelColumn(fields, cell, n) });
-      taken.push(cell);
+      const spot = atCaseBack(cell === s.cell ? s : { ...s, cell, column: kernelColumn(fields, cell, n) });
+      placed.push(spot);
+      taken.push(spot.cell);
       continue;
     }
     const best = roomBest(s, room);
     if (best < 0) continue; // every cell of the room is already listed
-    placed.push(best === s.cell ? s : { ...s, cell: best, column: kernelColumn(fields, best, n) });
-    taken.push(best);
+    const spot = atFitting(best === s.cell ? s : { ...s, cell: best, column: kernelColumn(fields, best, n) });
+    placed.push(spot);
+    taken.push(spot.cell);
     if (s.alternate) continue;
     // the room's next most probable risk point (else cell) follows a fitted spot placed in a fan-stirred room
     let next = roomBest(s, room, true);
     if (next < 0) next = roomBest(s, room);
     if (next >= 0) {
-      placed.push({
+      const alternative = atFitting({
         cell: next,
         delta: s.surface[next],
         column: kernelColumn(fields, next, n),
@@ -187,7 +214,8 @@ export function placementStage(
         q: s.q,
         surface: s.surface,
       });
-      taken.push(next);
+      placed.push(alternative);
+      taken.push(alternative.cell);
     }
   }
   placed.splice(s0.maxCandidates);
@@ -202,7 +230,7 @@ export function placementStage(
   const candidates: SuspectSpotFacts[] = [];
   let topOneSided = false;
   placed.forEach((s, rank) => {
-    const [x, y0] = cellCentre(grid, s.cell);
+    const [x, y0] = namedAt.get(s) ?? cellCentre(grid, s.cell);
     const sup = support(s.column, y);
     const side = oneSidedPass(
       sup.map((i) => xs[i]),
