@@ -258,14 +258,17 @@ it("on a phone, offline, after the demo sweep's readings: live suspects and next
     (c) => Number(document.querySelector('[data-testid="live-guide"]')?.getAttribute("data-estimates")) > c,
     counted,
   );
-  // the pass is one line of the folded banners (⚠: its cautions are one tap away)
+  // the pass is one line of the folded banners (⚠: its cautions open from the unfolded banner)
   const cautions = page.getByTestId("pass-cautions");
   await expect(cautions.count()).resolves.toBe(0);
   await expect(banner.textContent()).resolves.toMatch(/^⚠ Pass 2/);
   await look(page, "walk-live-guide-still-air-pass");
   await showNotices(page);
+  await banner.getByRole("button", { name: /Cautions while the air is still/ }).tap();
   await expect(cautions.textContent()).resolves.toMatch(/product warms up.*local codes/);
   await look(page, "walk-live-guide-pass-cautions");
+  await page.getByRole("button", { name: "Back to the pass" }).tap();
+  await cautions.waitFor({ state: "detached" });
   await banner.getByRole("button", { name: "Fans back on — end pass" }).tap();
   await banner.waitFor({ state: "detached" });
   // Nothing asked the network for the estimate.
