@@ -4,15 +4,7 @@ import { seedCompany } from "../../../tests/helpers/fixtures";
 import type { Role } from "#core/domain/roles";
 import { pdfText } from "../../../tests/helpers/pdf-text";
 import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
-
-const binary = (
-  res: { on(e: string, f: (c?: Buffer) => void): void },
-  cb: (err: Error | null, body: Buffer) => void,
-) => {
-  const chunks: Buffer[] = [];
-  res.on("data", (c) => chunks.push(c!));
-  res.on("end", () => cb(null, Buffer.concat(chunks)));
-};
+import { binaryBody } from "../../../tests/helpers/binary-body";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;
@@ -123,7 +115,10 @@ describe("filing the chronic-leaker report", () => {
     });
 
     // The leak-rate statement carries the filing.
-    const pdf = await engineer.agent.get(`/api/systems/${systemId}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+    const pdf = await engineer.agent
+      .get(`/api/systems/${systemId}/leak-rate-statement.pdf`)
+      .buffer(true)
+      .parse(binaryBody);
     // The "Chronic leaker" cell of the year; cells wrap ("EPA- CL-0042"), so words are compared without spacing.
     const text = (await pdfText(pdf.body as Buffer)).join("").replace(/\s+/g, "");
     const filing = `yes; report filed on ${formatCalendarDay(`${year + 1}-01-01`)} by engineer of Wrenfield Markets (reference EPA-CL-0042)`;

@@ -5,6 +5,7 @@ import { seedCompany } from "../../../tests/helpers/fixtures";
 import { pdfText } from "../../../tests/helpers/pdf-text";
 import { unzip } from "../../../tests/helpers/unzip";
 import type { Role } from "#core/domain/roles";
+import { binaryBody } from "../../../tests/helpers/binary-body";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;
@@ -31,15 +32,6 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 const signedIn = (role: Role): Promise<Agent> => signInOnceAs(co.people[role]);
-const binary = (
-  res: { on(e: string, f: (c?: Buffer) => void): void },
-  cb: (err: Error | null, body: Buffer) => void,
-) => {
-  const chunks: Buffer[] = [];
-  res.on("data", (c) => chunks.push(c!));
-  res.on("end", () => cb(null, Buffer.concat(chunks)));
-};
-
 async function newSystem(body: Record<string, unknown>) {
   const res = await (await signedIn("lead-tech")).post(`/api/stores/${co.store.id}/systems`, {
     refrigerantId: "R-404A",
@@ -97,7 +89,10 @@ describe("hermetically sealed equipment under EU F-gas (docs/reference/standards
     ]);
 
     // The statement says so (the CSV too, on every row: see the retired bottle cooler below).
-    const pdf = await engineer.agent.get(`/api/systems/${sealed}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+    const pdf = await engineer.agent
+      .get(`/api/systems/${sealed}/leak-rate-statement.pdf`)
+      .buffer(true)
+      .parse(binaryBody);
     const text = (await pdfText(pdf.body as Buffer)).join(" ").replace(/\s+/g, " ");
     expect(text).toContain("hermetically sealed: yes (factory-sealed, labelled as such)");
     expect(text).toContain("hermetically sealed and below 10 t CO2e");
@@ -202,7 +197,7 @@ describe("the leak detection system's own check (2024/573 Art. 5, docs/reference
       ["2026-03-01", "leak detection system check (working)", "Sensors bump-tested, alarm relay tripped", "no"],
       ["2026-06-10", "leak detection system check (fault found)", "", "no"],
     ]);
-    const pdf = await engineer.agent.get(`/api/systems/${id}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+    const pdf = await engineer.agent.get(`/api/systems/${id}/leak-rate-statement.pdf`).buffer(true).parse(binaryBody);
     const text = (await pdfText(pdf.body as Buffer)).join(" ").replace(/\s+/g, " ");
     expect(text).toContain("Checks of the leak detection system");
     expect(text).toContain("Sensors bump-tested, alarm relay tripped");
@@ -254,7 +249,7 @@ describe("a retired system's day and reason in its CSV and statement (decision 0
     expect(
       csv.data.filter((r) => r.record === "system retired").map((r) => [r.date, r.reason, r.hermetically_sealed]),
     ).toEqual([["2026-03-31", "Replaced by another system: by Rack 1", "yes"]]);
-    const pdf = await engineer.agent.get(`/api/systems/${id}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+    const pdf = await engineer.agent.get(`/api/systems/${id}/leak-rate-statement.pdf`).buffer(true).parse(binaryBody);
     const text = (await pdfText(pdf.body as Buffer)).join(" ").replace(/\s+/g, " ");
     // Kept 5 years from the day it left service (2024/573 Art. 7, docs/reference/standards.md §2 [S:E8b]).
     expect(text).toContain("Retired on 31 Mar 2026 (Replaced by another system: by Rack 1)");
@@ -265,7 +260,7 @@ describe("a retired system's day and reason in its CSV and statement (decision 0
 describe("the owner's archive holds the system's own facts (docs/decisions/0046, 0122–0124)", () => {
   it("lists every detection system check, and each system's hermetic mark, retirement day and reason", async () => {
     const owner = await signedIn("owner");
-    const zip = await owner.agent.get("/api/company/records-archive.zip").buffer(true).parse(binary);
+    const zip = await owner.agent.get("/api/company/records-archive.zip").buffer(true).parse(binaryBody);
     expect(zip.status).toBe(200);
     const files = await unzip(zip.body as Buffer);
     const table = (name: string) =>

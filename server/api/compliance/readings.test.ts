@@ -4,6 +4,7 @@ import { complianceAudit, readingAcceptances } from "../../db/schema/index";
 import { createTestApp, type TestApp, signIn } from "../../../tests/helpers/test-app";
 import { seedCompany } from "../../../tests/helpers/fixtures";
 import { pdfText } from "../../../tests/helpers/pdf-text";
+import { binaryBody } from "../../../tests/helpers/binary-body";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;
@@ -13,15 +14,6 @@ beforeAll(async () => {
   co = await seedCompany(t.ctx, "Fernhollow Market");
 });
 afterAll(() => t.close());
-
-const binary = (
-  res: { on(e: string, f: (c?: Buffer) => void): void },
-  cb: (err: Error | null, body: Buffer) => void,
-) => {
-  const chunks: Buffer[] = [];
-  res.on("data", (c) => chunks.push(c!));
-  res.on("end", () => cb(null, Buffer.concat(chunks)));
-};
 
 describe("research notes never reach a customer (docs/decisions/0044-readings-and-research-notes.md)", () => {
   it("lists the profile's readings once and prints only citations and the 'reading' marker", async () => {
@@ -48,7 +40,10 @@ describe("research notes never reach a customer (docs/decisions/0044-readings-an
       reason: "Top-up",
     });
     const rec = (await tech.get(`/api/systems/${sys.body.id}/records`)).body;
-    const pdf = await tech.agent.get(`/api/systems/${sys.body.id}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+    const pdf = await tech.agent
+      .get(`/api/systems/${sys.body.id}/leak-rate-statement.pdf`)
+      .buffer(true)
+      .parse(binaryBody);
     const text = (await pdfText(pdf.body as Buffer)).join(" ").replace(/\s+/g, " ");
     for (const out of [text, JSON.stringify(rec.due)])
       expect(out).not.toMatch(/from memory|study guide|ACHR|magazine|Legal Register|not yet confirmed/i);
@@ -201,7 +196,7 @@ describe("a printed statement says whether each reading is accepted (docs/decisi
       const pdf = await owner.agent
         .get(`/api/systems/${sys.body.id}/leak-rate-statement.pdf`)
         .buffer(true)
-        .parse(binary);
+        .parse(binaryBody);
       return (await pdfText(pdf.body as Buffer)).join(" ").replace(/\s+/g, " ");
     };
     const before = await statement();

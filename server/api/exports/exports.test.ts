@@ -5,21 +5,13 @@ import { agentFor, createTestApp, type Agent, type TestApp } from "../../../test
 import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 import { pdfText } from "../../../tests/helpers/pdf-text";
 import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
+import { binaryBody } from "../../../tests/helpers/binary-body";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;
 let other: Awaited<ReturnType<typeof seedCompany>>;
 let tech: Agent;
 let systemId: string;
-
-const binary = (
-  res: { on(e: string, f: (c?: Buffer) => void): void },
-  cb: (err: Error | null, body: Buffer) => void,
-) => {
-  const chunks: Buffer[] = [];
-  res.on("data", (c) => chunks.push(c!));
-  res.on("end", () => cb(null, Buffer.concat(chunks)));
-};
 
 beforeAll(async () => {
   t = await createTestApp();
@@ -91,7 +83,7 @@ describe("records export", () => {
   });
 
   it("makes a PDF statement with the Atkinson Hyperlegible font embedded, for members only", async () => {
-    const res = await tech.agent.get(`/api/systems/${systemId}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+    const res = await tech.agent.get(`/api/systems/${systemId}/leak-rate-statement.pdf`).buffer(true).parse(binaryBody);
     expect(res.status).toBe(200);
     expect(res.headers["content-type"]).toBe("application/pdf");
     const bytes = res.body as Buffer;
@@ -128,7 +120,10 @@ describe("records export", () => {
     });
     expect((await owner.put("/api/company/settings", settings("eu-fgas"))).status).toBe(200);
     try {
-      const res = await tech.agent.get(`/api/systems/${systemId}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+      const res = await tech.agent
+        .get(`/api/systems/${systemId}/leak-rate-statement.pdf`)
+        .buffer(true)
+        .parse(binaryBody);
       const text = (await pdfText(res.body as Buffer)).join(" ").replace(/\s+/g, " ");
       expect(text).not.toMatch(/CFR|EPA|Section 608|leak-rate method|No refrigerant has been added/);
       // EU F-gas sets leak checks, not a leak rate: the statement is named for what it holds.
@@ -184,7 +179,7 @@ describe("records export", () => {
       reason: "Replaced by a CO2 booster",
     });
     expect(retired.status).toBe(200);
-    const res = await tech.agent.get(`/api/systems/${id}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+    const res = await tech.agent.get(`/api/systems/${id}/leak-rate-statement.pdf`).buffer(true).parse(binaryBody);
     const text = (await pdfText(res.body as Buffer)).join(" ").replace(/\s+/g, " ");
     const records = (await tech.get(`/api/systems/${id}/records`)).body;
     // Kept 3 years after the retirement day (docs/reference/standards.md §1 [S:R6,R7]; docs/decisions/0040).
@@ -252,7 +247,7 @@ describe("records export", () => {
       ["2026-05-12", "", ""],
       ["2026-08-01", "100.14", "40 CFR 84.106, commercial refrigeration"],
     ]);
-    const res = await tech.agent.get(`/api/systems/${id}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+    const res = await tech.agent.get(`/api/systems/${id}/leak-rate-statement.pdf`).buffer(true).parse(binaryBody);
     const text = (await pdfText(res.body as Buffer)).join(" ").replace(/\s+/g, " ");
     expect(text).toMatch(/25\.0 % \(above\) 20 % \(40 CFR 82\.157\(c\), commercial refrigeration\)/);
     expect(text).toMatch(/100\.1 % \(above\) 20 % \(40 CFR 84\.106, commercial refrigeration\)/);

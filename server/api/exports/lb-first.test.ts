@@ -5,19 +5,11 @@ import { createTestApp, signIn, type Agent, type TestApp } from "../../../tests/
 import { seedCompany } from "../../../tests/helpers/fixtures";
 import { pdfText } from "../../../tests/helpers/pdf-text";
 import { companies } from "../../db/schema/index";
+import { binaryBody } from "../../../tests/helpers/binary-body";
 
 let t: TestApp;
 let tech: Agent;
 let systemId: string;
-
-const binary = (
-  res: { on(e: string, f: (c?: Buffer) => void): void },
-  cb: (err: Error | null, body: Buffer) => void,
-) => {
-  const chunks: Buffer[] = [];
-  res.on("data", (c) => chunks.push(c!));
-  res.on("end", () => cb(null, Buffer.concat(chunks)));
-};
 
 beforeAll(async () => {
   t = await createTestApp();
@@ -40,7 +32,7 @@ afterAll(() => t.close());
 
 describe("an lb company reads lb first, grouped", () => {
   it("prints lb first on the statement, with thousands grouped", async () => {
-    const pdf = await tech.agent.get(`/api/systems/${systemId}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+    const pdf = await tech.agent.get(`/api/systems/${systemId}/leak-rate-statement.pdf`).buffer(true).parse(binaryBody);
     const text = (await pdfText(pdf.body as Buffer)).join(" ").replace(/\s+/g, " ");
     // 1,500 lb × 0.45359237 kg/lb = 680.39 kg; 10 lb = 4.54 kg (NIST SP 811, appendix B.8).
     expect(text).toContain("full charge 1,500.0 lb (680.39 kg)");

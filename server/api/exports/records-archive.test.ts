@@ -17,19 +17,11 @@ import {
   systemRevisions,
   systems,
 } from "../../db/schema/index";
+import { binaryBody } from "../../../tests/helpers/binary-body";
 
 let t: TestApp;
 let a: CompanyFixture;
 let b: CompanyFixture;
-
-const binary = (
-  res: { on(e: string, f: (c?: Buffer) => void): void },
-  cb: (err: Error | null, body: Buffer) => void,
-) => {
-  const chunks: Buffer[] = [];
-  res.on("data", (c) => chunks.push(c!));
-  res.on("end", () => cb(null, Buffer.concat(chunks)));
-};
 
 const csvRows = (files: Map<string, Buffer>, name: string) => {
   const parsed = Papa.parse<Record<string, string>>(files.get(`tables/${name}`)!.toString("utf8"), {
@@ -41,7 +33,7 @@ const csvRows = (files: Map<string, Buffer>, name: string) => {
 };
 
 async function download(agent: Agent) {
-  return agent.agent.get("/api/company/records-archive.zip").buffer(true).parse(binary);
+  return agent.agent.get("/api/company/records-archive.zip").buffer(true).parse(binaryBody);
 }
 
 /** The fixture's stores keep New York time. */

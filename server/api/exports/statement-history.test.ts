@@ -5,6 +5,7 @@ import { agentFor, createTestApp, type Agent, type TestApp } from "../../../test
 import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 import { pdfText } from "../../../tests/helpers/pdf-text";
 import { companies, complianceAudit } from "../../db/schema/index";
+import { binaryBody } from "../../../tests/helpers/binary-body";
 
 // The statement and the records CSV show an auditor the system's dated revisions (why a figure uses
 // the charge it uses, docs/decisions/0126) and its audit trail on the store's clock, the UTC instant
@@ -12,15 +13,6 @@ import { companies, complianceAudit } from "../../db/schema/index";
 let t: TestApp;
 let engineer: Agent;
 let systemId: string;
-
-const binary = (
-  res: { on(e: string, f: (c?: Buffer) => void): void },
-  cb: (err: Error | null, body: Buffer) => void,
-) => {
-  const chunks: Buffer[] = [];
-  res.on("data", (c) => chunks.push(c!));
-  res.on("end", () => cb(null, Buffer.concat(chunks)));
-};
 
 beforeAll(async () => {
   t = await createTestApp();
@@ -58,7 +50,10 @@ afterAll(() => t.close());
 
 describe("the statement's system history and audit trail", () => {
   it("lists each revision with its day, what it set, the reason and who recorded it", async () => {
-    const res = await engineer.agent.get(`/api/systems/${systemId}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+    const res = await engineer.agent
+      .get(`/api/systems/${systemId}/leak-rate-statement.pdf`)
+      .buffer(true)
+      .parse(binaryBody);
     expect(res.status).toBe(200);
     const text = (await pdfText(res.body as Buffer)).join(" ").replace(/\s+/g, " ");
     const history = text.slice(text.indexOf("System history"), text.indexOf("Rule profile"));
@@ -81,7 +76,10 @@ describe("the statement's system history and audit trail", () => {
 
   it("prints the audit trail on the store's clock, its days as every other day", async () => {
     const [row] = await t.ctx.db.select().from(complianceAudit).where(eq(complianceAudit.systemId, systemId));
-    const res = await engineer.agent.get(`/api/systems/${systemId}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+    const res = await engineer.agent
+      .get(`/api/systems/${systemId}/leak-rate-statement.pdf`)
+      .buffer(true)
+      .parse(binaryBody);
     const text = (await pdfText(res.body as Buffer)).join(" ").replace(/\s+/g, " ");
     const trail = text.slice(text.indexOf("Audit trail"), text.indexOf("Record keeping"));
     expect(trail).toContain("When (store time)");
@@ -130,7 +128,10 @@ describe("the statement's list of refrigerant added", () => {
       excluded: "retrofit",
     });
     expect(fill.status, JSON.stringify(fill.body)).toBe(201);
-    const res = await engineer.agent.get(`/api/systems/${systemId}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+    const res = await engineer.agent
+      .get(`/api/systems/${systemId}/leak-rate-statement.pdf`)
+      .buffer(true)
+      .parse(binaryBody);
     const text = (await pdfText(res.body as Buffer)).join(" ").replace(/\s+/g, " ");
     const added = text.slice(text.indexOf("Refrigerant added"), text.indexOf("Leak rate at every addition"));
     // 12 lb = 5.44 kg and 165 lb = 74.84 kg (NIST SP 811).

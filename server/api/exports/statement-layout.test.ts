@@ -8,6 +8,7 @@ import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 import { overlappingText, pdfLayout, type PdfPage } from "../../../tests/helpers/pdf-text";
 import { renderPdfPages } from "../../../tests/helpers/pdf-pages";
 import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
+import { binaryBody } from "../../../tests/helpers/binary-body";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;
@@ -19,17 +20,8 @@ const ADDITIONS = 36;
 const LONG_REASON =
   "Low suction pressure on the medium-temperature rack after the overnight defrost; topped up while the cases recovered and the receiver level was watched";
 
-const binary = (
-  res: { on(e: string, f: (c?: Buffer) => void): void },
-  cb: (err: Error | null, body: Buffer) => void,
-) => {
-  const chunks: Buffer[] = [];
-  res.on("data", (c) => chunks.push(c!));
-  res.on("end", () => cb(null, Buffer.concat(chunks)));
-};
-
 async function statement(): Promise<{ bytes: Buffer; pages: PdfPage[] }> {
-  const res = await tech.agent.get(`/api/systems/${systemId}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+  const res = await tech.agent.get(`/api/systems/${systemId}/leak-rate-statement.pdf`).buffer(true).parse(binaryBody);
   expect(res.status).toBe(200);
   const bytes = res.body as Buffer;
   return { bytes, pages: await pdfLayout(bytes) };

@@ -4,19 +4,11 @@ import { createTestApp, signIn, type Agent, type TestApp } from "../../../tests/
 import { seedCompany } from "../../../tests/helpers/fixtures";
 import { pdfText } from "../../../tests/helpers/pdf-text";
 import { companies } from "../../db/schema/index";
+import { binaryBody } from "../../../tests/helpers/binary-body";
 
 let t: TestApp;
 let tech: Agent;
 let systemId: string;
-
-const binary = (
-  res: { on(e: string, f: (c?: Buffer) => void): void },
-  cb: (err: Error | null, body: Buffer) => void,
-) => {
-  const chunks: Buffer[] = [];
-  res.on("data", (c) => chunks.push(c!));
-  res.on("end", () => cb(null, Buffer.concat(chunks)));
-};
 
 beforeAll(async () => {
   t = await createTestApp();
@@ -43,7 +35,7 @@ afterAll(() => t.close());
 
 describe("the statement's percentages follow the company's number format", () => {
   it("writes the year's share of the full charge and the chronic rule with a decimal comma", async () => {
-    const pdf = await tech.agent.get(`/api/systems/${systemId}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+    const pdf = await tech.agent.get(`/api/systems/${systemId}/leak-rate-statement.pdf`).buffer(true).parse(binaryBody);
     const text = (await pdfText(pdf.body as Buffer)).join(" ").replace(/\s+/g, " ");
     // 150 kg added to a 10 kg full charge in one calendar year: 150 / 10 × 100 = 1,500 % (arithmetic),
     // grouped and with a decimal comma in the "1.234,5" format.

@@ -8,6 +8,7 @@ import { pdfText } from "../../../tests/helpers/pdf-text";
 import type { Role } from "#core/domain/roles";
 import { archiveTables } from "../exports/archive-tables";
 import { US_FEDERAL_PROFILE } from "#core/domain/compliance/us-federal-profile";
+import { binaryBody } from "../../../tests/helpers/binary-body";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;
@@ -21,15 +22,6 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 const signedIn = (role: Role, company = co): Promise<Agent> => signIn(t.app, company.people[role]);
-
-const binary = (
-  res: { on(e: string, f: (c?: Buffer) => void): void },
-  cb: (err: Error | null, body: Buffer) => void,
-) => {
-  const chunks: Buffer[] = [];
-  res.on("data", (c) => chunks.push(c!));
-  res.on("end", () => cb(null, Buffer.concat(chunks)));
-};
 
 /** R-404A's composition, 125/143a/134a 44/52/4 (ASHRAE 34 [S:G3], docs/reference/standards.md §3). */
 const like404A = {
@@ -177,7 +169,7 @@ describe("a company's own refrigerants (docs/decisions/0073)", () => {
         amount: { value: 1, unit: "kg" },
         reason: "Top-up",
       });
-      const csv2 = await owner.agent.get(`/api/systems/${s.body.id}/records.csv`).buffer(true).parse(binary);
+      const csv2 = await owner.agent.get(`/api/systems/${s.body.id}/records.csv`).buffer(true).parse(binaryBody);
       const parsed = Papa.parse<Record<string, string>>((csv2.body as Buffer).toString("utf8"), {
         header: true,
         skipEmptyLines: true,
@@ -191,7 +183,10 @@ describe("a company's own refrigerants (docs/decisions/0073)", () => {
         co2e_tonnes: "50",
       });
 
-      const pdf = await owner.agent.get(`/api/systems/${s.body.id}/leak-rate-statement.pdf`).buffer(true).parse(binary);
+      const pdf = await owner.agent
+        .get(`/api/systems/${s.body.id}/leak-rate-statement.pdf`)
+        .buffer(true)
+        .parse(binaryBody);
       const text = (await pdfText(pdf.body as Buffer)).join(" ").replace(/\s+/g, " ");
       expect(text).toContain("Refrigerant Imported HFC mix (entered by the company)");
       expect(text).toContain("GWP 2,500 on AR4");

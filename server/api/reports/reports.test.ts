@@ -13,6 +13,7 @@ import { createJobQueue, JOBS_DEAD_LETTER, type JobQueue } from "../../jobs/job-
 import { startJobs } from "../../jobs/job-kinds";
 import { prepareReports, REPORT_PDF_JOB } from "./report-pdf-job";
 import type { Role } from "#core/domain/roles";
+import { binaryBody } from "../../../tests/helpers/binary-body";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;
@@ -27,16 +28,6 @@ async function as(role: Role): Promise<Agent> {
   await a.post("/api/auth/sign-in", { email: co.people[role].email, password: PASSWORD });
   return a;
 }
-
-/** supertest collects binary bodies as Buffers with this parser. */
-const binary = (
-  res: NodeJS.ReadableStream & { setEncoding(e: string): void; on: Function },
-  cb: (e: Error | null, b: Buffer) => void,
-) => {
-  const chunks: Buffer[] = [];
-  res.on("data", (c: Buffer) => chunks.push(c));
-  res.on("end", () => cb(null, Buffer.concat(chunks)));
-};
 
 beforeAll(async () => {
   t = await createTestApp();
@@ -92,10 +83,7 @@ describe("sweep report PDF", () => {
     const analysis = await eng.get(`/api/sweeps/${sweepId}/analysis`);
     const top = analysis.body.candidates[0];
     expect(top.fixtureId).toBe(caseId);
-    const res = await eng.agent
-      .get(`/api/sweeps/${sweepId}/report.pdf`)
-      .buffer(true)
-      .parse(binary as never);
+    const res = await eng.agent.get(`/api/sweeps/${sweepId}/report.pdf`).buffer(true).parse(binaryBody);
     expect(res.status).toBe(200);
     expect(res.headers["content-type"]).toMatch(/application\/pdf/);
     expect(res.headers["content-disposition"]).toMatch(/attachment; filename="sweep-.*\.pdf"/);
@@ -331,7 +319,7 @@ describe("e-mailing the report", () => {
       const res = await (await as("engineer")).agent
         .get(`/api/sweeps/${sweepId}/report.pdf`)
         .buffer(true)
-        .parse(binary as never);
+        .parse(binaryBody);
       const page = (await PDFDocument.load(res.body as Buffer)).getPage(0);
       return [Math.round(page.getWidth()), Math.round(page.getHeight())];
     };

@@ -5,6 +5,7 @@ import { caseLineFixtures } from "../../../tests/helpers/sweep-walk";
 import { pdfText } from "../../../tests/helpers/pdf-text";
 import { detectors } from "../../db/schema/index";
 import type { Role } from "#core/domain/roles";
+import { binaryBody } from "../../../tests/helpers/binary-body";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;
@@ -197,16 +198,6 @@ describe("readings in a pass", () => {
   });
 });
 
-/** Reads a binary answer (the PDF) whole. */
-const binary = (
-  res: NodeJS.ReadableStream & { setEncoding(e: string): void; on: Function },
-  cb: (e: Error | null, b: Buffer) => void,
-) => {
-  const chunks: Buffer[] = [];
-  res.on("data", (c: Buffer) => chunks.push(c));
-  res.on("end", () => cb(null, Buffer.concat(chunks)));
-};
-
 /** The ppm at each tap: `c` where the probe was 6.5 s earlier, by time between taps, to a tenth of a ppm. */
 function sampled(taps: { x: number; y: number; s: number }[], c: (x: number, y: number) => number) {
   return taps.map((tap) => {
@@ -262,7 +253,7 @@ describe("the analysis of a sweep with a pinpoint pass", () => {
     const pdf = await (await as("engineer")).agent
       .get(`/api/sweeps/${sweepId}/report.pdf`)
       .buffer(true)
-      .parse(binary as never);
+      .parse(binaryBody);
     expect(pdf.status).toBe(200);
     const text = (await pdfText(pdf.body as Buffer)).join("\n");
     expect(text).toMatch(/pass 1: fans running; pass 2: fans stopped at Dairy 1–4, [\d:]+–not ended/);
