@@ -1,4 +1,5 @@
 import type { LaggedPosition, Route, Tap } from "./lag-correct";
+import { rememberedByTap } from "./remembered-route";
 import { walkLag } from "./walk-lag";
 
 /**
@@ -96,19 +97,8 @@ export function checkDelay(
   const raisedIdx: number[] = [];
   for (let i = 0; i < n; i++) if (raised[i]) raisedIdx.push(i);
   if (raisedIdx.length === 0) return none;
-  // Every trial shift asks for the same legs between consecutive taps: remembered by the tap objects
-  // (a string key per call cost more than the rest of the check).
-  const memo = new Map<Tap, { to: Tap; route: ReturnType<Route> }[]>();
-  const cachedRoute: Route | undefined = route
-    ? (a, b) => {
-        let legs = memo.get(a);
-        if (!legs) memo.set(a, (legs = []));
-        for (const leg of legs) if (leg.to === b) return leg.route;
-        const found = route(a, b);
-        legs.push({ to: b, route: found });
-        return found;
-      }
-    : undefined;
+  // Every trial shift asks for the same legs between consecutive taps.
+  const cachedRoute: Route | undefined = route ? rememberedByTap(route) : undefined;
   const r2 = 2 * settings.radiusM * settings.radiusM;
   const cut2 = 9 * settings.radiusM * settings.radiusM;
   const misfitAt = (shift: number): { misfit: number; weight: number } => {

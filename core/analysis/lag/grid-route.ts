@@ -1,7 +1,8 @@
 import { GeodesicSearch } from "../grid/geodesic-distance";
 import { routeBetween } from "../grid/grid-path";
 import type { PlanGrid } from "../grid/plan-grid";
-import type { Route, Tap } from "./lag-correct";
+import type { Route } from "./lag-correct";
+import { rememberedByTap } from "./remembered-route";
 
 // One route per grid: the delay check and the lag stage of every delay an analysis tries ask for the
 // same legs between the same taps, so each leg is searched once and then shared (read only).
@@ -26,17 +27,5 @@ function searchedRoute(grid: PlanGrid): Route {
   return (a, b) => {
     const straight = Math.hypot(b.x - a.x, b.y - a.y);
     return routeBetween(search, a.x, a.y, b.x, b.y, Math.max(10, 4 * straight));
-  };
-}
-
-function rememberedByTap(route: Route): Route {
-  const legs = new WeakMap<Tap, { to: Tap; route: ReturnType<Route> }[]>();
-  return (a, b) => {
-    let from = legs.get(a);
-    if (!from) legs.set(a, (from = []));
-    for (const leg of from) if (leg.to === b) return leg.route;
-    const found = route(a, b);
-    from.push({ to: b, route: found });
-    return found;
   };
 }
