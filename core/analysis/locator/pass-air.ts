@@ -1,9 +1,4 @@
 import type { LocatorFixture, LocatorInput, LocatorPass } from "../../contracts/locator-input";
-import type { PlanGrid } from "../grid/plan-grid";
-import { readingWeights } from "../pipeline/numbers";
-import { passExplained } from "./pass-explained";
-import type { LocatorSettings } from "./settings";
-import { createSourceKernel } from "./source-kernel";
 
 /**
  * The air each reading was taken in. Model 0 is the plan as given (the first pass, and every reading
@@ -62,40 +57,6 @@ export function readingsWithFansOn(air: ReadingAir, k: number): number[] {
 /** Whether a pass (of the `only` models, when given) stilled fixture `k` whose fans run in the plan's own air. */
 export function stilledByAPass(air: ReadingAir, k: number, only: readonly boolean[] | null = null): boolean {
   return air.models[0][k].fans && air.models.some((m, j) => !m[k].fans && (!only || only[j]));
-}
-
-/** How well each air model's own readings are explained by one source in that air (model 0: 1). */
-export function passesExplained(
-  grid: PlanGrid,
-  lag: { xs: Float64Array; ys: Float64Array; ppm: Float64Array; censored: Uint8Array },
-  zoneOfReading: Int32Array,
-  air: ReadingAir,
-  other: { models: readonly { fansStir: boolean; stepScale: Float32Array | null }[] },
-  settings: Pick<LocatorSettings, "kernel" | "noise">,
-): number[] {
-  const k = settings.kernel;
-  const weights = readingWeights(lag.ppm, settings.noise);
-  return air.models.map((_, m) => {
-    if (m === 0) return 1;
-    const model = other.models[m - 1];
-    const own: number[] = [];
-    for (let i = 0; i < lag.ppm.length; i++)
-      if (air.modelOfReading[i] === m && !lag.censored[i] && zoneOfReading[i] < 0) own.push(i);
-    const pick = (v: Float64Array) => Float64Array.from(own, (i) => v[i]);
-    const kernel = createSourceKernel(
-      k.screeningLengthM,
-      k.nearCutoffM,
-      k.truncationM,
-      model.fansStir && k.farShare > 0 ? { lengthM: k.farScreeningLengthM, share: k.farShare } : null,
-    );
-    return passExplained(
-      grid,
-      { xs: pick(lag.xs), ys: pick(lag.ys), ppm: pick(lag.ppm), w: pick(weights) },
-      kernel,
-      k.mapSigmaM,
-      model.stepScale,
-    );
-  });
 }
 
 /**
