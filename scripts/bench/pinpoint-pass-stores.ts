@@ -6,23 +6,12 @@
 import { mkdirSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { buildScenario } from "./simulate/scenario";
-import { FAMILIES } from "./simulate/store-types";
+import { cliArgs } from "./cli-args";
+import { storeName, storeStream } from "./simulate/store-types";
 import { advisedPassCase, type AdvisedCase } from "./pinpoint-pass/advised-case";
 
 const usage = "usage: tsx scripts/bench/pinpoint-pass-stores.ts N --first F --out DIR [--first-pass-out DIR2]";
-const args = process.argv.slice(2);
-const option = (name: string): string | undefined => {
-  const k = args.indexOf(name);
-  if (k < 0) return undefined;
-  const v = args[k + 1];
-  if (v === undefined) fail(`${name} needs a value`);
-  args.splice(k, 2);
-  return v;
-};
-function fail(message: string): never {
-  console.error(`pinpoint-pass generate: ${message}\n${usage}`);
-  process.exit(2);
-}
+const { args, option, fail } = cliArgs("pinpoint-pass generate", usage);
 const outDir = option("--out") ?? fail("--out is needed");
 const firstPassDir = option("--first-pass-out");
 const first = Number(option("--first") ?? 1);
@@ -31,17 +20,15 @@ if (!Number.isInteger(count) || count < 1 || count > 100) fail(`N must be an int
 if (!Number.isInteger(first) || first < 1 || first > 9000) fail(`--first must be an integer 1..9000, got ${first}`);
 for (const d of [outDir, firstPassDir]) if (d) mkdirSync(d, { recursive: true });
 
-// The family's index in FAMILIES fixes its streams, as in simulate/generate.ts.
-const fi = FAMILIES.indexOf("pinpoint-pass");
 const tally = { own: 0, "settled-suspect": 0, mixing: 0, "no-advice": 0 };
 for (let n = first; n < first + count; n++) {
   const t0 = Date.now();
   let advice = { why: "no-advice", fixtureId: null } as AdvisedCase;
-  const s = buildScenario("pinpoint-pass", 7919 * (fi + 1) + 104729 * n, (firstPass) => {
+  const s = buildScenario("pinpoint-pass", storeStream("pinpoint-pass", n), (firstPass) => {
     advice = advisedPassCase(firstPass);
     return advice.fixtureId;
   });
-  const name = `pinpoint-pass-${String(n).padStart(2, "0")}`;
+  const name = storeName("pinpoint-pass", n);
   writeFileSync(join(outDir, `${name}.json`), JSON.stringify(s.input) + "\n");
   writeFileSync(join(outDir, `${name}.truth.json`), JSON.stringify(s.truth, null, 1) + "\n");
   if (firstPassDir) {

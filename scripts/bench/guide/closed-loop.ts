@@ -2,7 +2,7 @@
 // reaches the alarm, then the policy decides every next reading. After each one we note where the
 // leak would be marked and how far that is from the nearest true leak.
 import { buildWorld, type World } from "../simulate/scenario";
-import { FAMILIES, type Family } from "../simulate/store-types";
+import { storeStream, type Family } from "../simulate/store-types";
 import type { Policy, PolicyStep } from "./policy";
 
 /** The benchmark stops a policy after this many readings from the first alarm. */
@@ -29,11 +29,8 @@ const PLUME_REACH_M = 10;
 const nearestLeakM = (world: World, p: { x: number; y: number }) =>
   Math.min(...world.truth.leaks.map((l) => Math.hypot(l.x - p.x, l.y - p.y)));
 
-/** The same stream per (family, number) as the committed benchmark stores (simulate/generate.ts). */
-export const storeKey = (family: Family, n: number) => 7919 * (FAMILIES.indexOf(family) + 1) + 104729 * n;
-
 export function runLoop(family: Family, store: number, policy: Policy): LoopResult {
-  const world = buildWorld(family, storeKey(family, store));
+  const world = buildWorld(family, storeStream(family, store));
   const tech = world.technician;
   let from: { readings: number; metres: number } | null = null;
   let readingsToFind: number | null = null;

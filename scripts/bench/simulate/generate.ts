@@ -4,23 +4,12 @@ import { mkdirSync, writeFileSync } from "node:fs";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { buildScenario } from "./scenario";
-import { FAMILIES, ON_REQUEST_FAMILIES } from "./store-types";
+import { cliArgs } from "../cli-args";
+import { FAMILIES, ON_REQUEST_FAMILIES, storeName, storeStream } from "./store-types";
 
 const here = dirname(fileURLToPath(import.meta.url));
 const usage = "usage: tsx scripts/bench/simulate/generate.ts [storesPerFamily] [--first N] [--out DIR] [--family NAME]";
-const args = process.argv.slice(2);
-const option = (name: string): string | undefined => {
-  const k = args.indexOf(name);
-  if (k < 0) return undefined;
-  const v = args[k + 1];
-  if (v === undefined) fail(`${name} needs a value`);
-  args.splice(k, 2);
-  return v;
-};
-function fail(message: string): never {
-  console.error(`generate: ${message}\n${usage}`);
-  process.exit(2);
-}
+const { args, option, fail } = cliArgs("generate", usage);
 // A held-out set (e.g. --first 13 --out /tmp/holdout) uses store numbers the committed set does not,
 // so a radius calibrated on the committed stores can be checked on stores it has never seen.
 const outDir = option("--out") ?? join(here, "..", "scenarios");
@@ -38,13 +27,12 @@ mkdirSync(outDir, { recursive: true });
 let bytes = 0;
 const faulty: string[] = [];
 const started = Date.now();
-FAMILIES.forEach((family, fi) => {
+FAMILIES.forEach((family) => {
   if (onlyFamily !== undefined ? family !== onlyFamily : ON_REQUEST_FAMILIES.includes(family)) return;
   for (let n = first; n < first + perFamily; n++) {
     const t0 = Date.now();
-    // A fixed, distinct stream per (family, number): adding stores never changes existing ones.
-    const s = buildScenario(family, 7919 * (fi + 1) + 104729 * n);
-    const name = `${family}-${String(n).padStart(2, "0")}`;
+    const s = buildScenario(family, storeStream(family, n));
+    const name = storeName(family, n);
     const input = JSON.stringify(s.input);
     writeFileSync(join(outDir, `${name}.json`), input + "\n");
     writeFileSync(join(outDir, `${name}.truth.json`), JSON.stringify(s.truth, null, 1) + "\n");

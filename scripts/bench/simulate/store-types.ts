@@ -67,3 +67,13 @@ export interface StoreLayout {
   zone: ZoneSpec;
   legs: Leg[];
 }
+
+/** The random stream of store `n` of a family: fixed per (family, number), so adding stores never changes existing ones. */
+export function storeStream(family: Family, n: number): number {
+  return 7919 * (FAMILIES.indexOf(family) + 1) + 104729 * n;
+}
+
+/** A benchmark store's file name without its extension: `single-fans-07`. */
+export function storeName(family: Family, n: number): string {
+  return `${family}-${String(n).padStart(2, "0")}`;
+}
