@@ -311,25 +311,27 @@ function movesOf(grid: PlanGrid): Uint8Array {
   return moves;
 }
 
-const DI = [1, -1, 0, 0, 1, 1, -1, -1];
-const DJ = [0, 0, 1, -1, 1, -1, 1, -1];
-
+// Bit m of a cell's moves, m = 0..7: right, left, down, up, then the diagonals down-right, up-right,
+// down-left, up-left, each only when both orthogonal neighbours beside it are free. Straight-line code
+// per cell, without a closure or an inner loop: it runs once per grid over every cell, before the JIT
+// has optimised anything (docs/decisions/0160).
 function allowedMoves(grid: PlanGrid): Uint8Array {
   const { width, height, blocked } = grid;
   const out = new Uint8Array(width * height);
-  const free = (i: number, j: number) => i >= 0 && j >= 0 && i < width && j < height && !blocked[j * width + i];
   for (let j = 0; j < height; j++) {
     for (let i = 0; i < width; i++) {
-      if (blocked[j * width + i]) continue;
-      let mask = 0;
-      for (let m = 0; m < 8; m++) {
-        const vi = i + DI[m];
-        const vj = j + DJ[m];
-        if (!free(vi, vj)) continue;
-        if (m >= 4 && (!free(vi, j) || !free(i, vj))) continue;
-        mask |= 1 << m;
-      }
-      out[j * width + i] = mask;
+      const k = j * width + i;
+      if (blocked[k]) continue;
+      const right = i + 1 < width && !blocked[k + 1];
+      const left = i > 0 && !blocked[k - 1];
+      const down = j + 1 < height && !blocked[k + width];
+      const up = j > 0 && !blocked[k - width];
+      let mask = (right ? 1 : 0) | (left ? 2 : 0) | (down ? 4 : 0) | (up ? 8 : 0);
+      if (right && down && !blocked[k + width + 1]) mask |= 16;
+      if (right && up && !blocked[k - width + 1]) mask |= 32;
+      if (left && down && !blocked[k + width - 1]) mask |= 64;
+      if (left && up && !blocked[k - width - 1]) mask |= 128;
+      out[k] = mask;
     }
   }
   return out;
