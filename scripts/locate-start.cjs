@@ -5,12 +5,13 @@
 // written after the first successful run (and again whenever V8 rejects it: another Node, other flags).
 // Its name carries the body's content hash, because V8 checks only the source's length, not its text.
 // __LOCATE_BODY__ and __LOCATE_CACHE__ are file names the build defines.
-import { readFileSync, renameSync, writeFileSync } from "node:fs";
-import { createRequire } from "node:module";
-import path from "node:path";
-import { Script } from "node:vm";
+// CommonJS (dist/scripts/package.json says so): Node starts a CommonJS entry without its ES module loader.
+const { readFileSync, renameSync, writeFileSync } = require("node:fs");
+const { createRequire } = require("node:module");
+const path = require("node:path");
+const { Script } = require("node:vm");
 
-const dir = import.meta.dirname;
+const dir = __dirname;
 const bodyFile = path.join(dir, __LOCATE_BODY__);
 const cacheFile = path.join(dir, __LOCATE_CACHE__);
 let cachedData;
@@ -35,5 +36,5 @@ if (cachedData === undefined || script.cachedDataRejected) {
     }
   });
 }
-const module = { exports: {} };
-script.runInThisContext()(module.exports, createRequire(bodyFile), module, bodyFile, dir);
+const body = { exports: {} };
+script.runInThisContext()(body.exports, createRequire(bodyFile), body, bodyFile, dir);
