@@ -58,9 +58,11 @@ export class GeodesicSearch {
     this.offsets = Int32Array.from([1, -1, w, -w, w + 1, -w + 1, w - 1, -w - 1]);
     this.steps = Float64Array.from([h, h, h, h, h * Math.SQRT2, h * Math.SQRT2, h * Math.SQRT2, h * Math.SQRT2]);
     let minScale = 1;
+    let notShortened = 0;
     const box = [Infinity, Infinity, -Infinity, -Infinity];
     if (stepScale)
       for (let k = 0; k < stepScale.length; k++) {
+        if (!(stepScale[k] <= 1)) notShortened++;
         if (stepScale[k] < minScale) minScale = stepScale[k];
         if (stepScale[k] < 1) {
           const [cx, cy] = cellCentre(grid, k);
@@ -73,7 +75,11 @@ export class GeodesicSearch {
     this.bucketWidth = (h * minScale) / 2;
     this.minScale = minScale;
     this.shortBox = box;
+    this.onlyShortened = notShortened === 0;
   }
+
+  /** Every cell's step scale is 1 except the shortened ones (scale < 1) of `shortBox`. */
+  private readonly onlyShortened: boolean;
 
   /** The smallest step scale (at most 1): no path is shorter than this times the straight line. */
   private readonly minScale: number;
@@ -115,7 +121,11 @@ export class GeodesicSearch {
       return this.fromPoint(x, y, maxDistance);
     const seeds = this.seedPoint(x, y);
     if (seeds === 0) return 0;
-    return this.runBuckets(maxDistance, true, focus, focus ? this.floorFrom(x, y, maxDistance) : 1);
+    const floor = this.stepScale ? this.floorFrom(x, y, maxDistance) : 1;
+    // No shortened cell within reach: every step this search takes costs its length times (1 + 1) / 2,
+    // exactly its length, so the steps' scales need not be read (docs/decisions/0160).
+    const plain = this.stepScale !== null && floor === 1 && this.onlyShortened;
+    return this.runBuckets(maxDistance, true, focus, focus ? floor : 1, plain);
   }
 
   /** Resets, then seeds the point's own cell and its free neighbours at their Euclidean distance; the seed count. */
@@ -211,9 +221,15 @@ export class GeodesicSearch {
   }
 
   /** `fromHeap`: the seeds are in the heap (seedPoint), else already in the buckets. */
-  private runBuckets(maxDistance: number, fromHeap = true, focus: SearchFocus | null = null, floor = 1): number {
+  private runBuckets(
+    maxDistance: number,
+    fromHeap = true,
+    focus: SearchFocus | null = null,
+    floor = 1,
+    plain = false,
+  ): number {
     const { heap, dist, offsets, steps, moves, buckets } = this;
-    const scale = this.stepScale;
+    const scale = plain ? null : this.stepScale;
     const width = this.bucketWidth;
     const gw = this.grid.width;
     const h = this.grid.cellSize;
