@@ -230,6 +230,7 @@ export class GeodesicSearch {
   ): number {
     const { heap, dist, offsets, steps, moves, buckets } = this;
     const scale = plain ? null : this.stepScale;
+    const toFocus = focus ? this.offsetsTo(focus) : null;
     const width = this.bucketWidth;
     const gw = this.grid.width;
     const h = this.grid.cellSize;
@@ -248,11 +249,15 @@ export class GeodesicSearch {
         if (key !== dist[u]) continue; // stale entry
         if (this.settledCount === this.settled.length) this.settled = growInt32(this.settled);
         this.settled[this.settledCount++] = u;
-        if (focus) {
+        if (focus && toFocus) {
           // no step from here can still reach the focus circle within maxDistance: no path is shorter
           // than `floor` times the straight line (a small margin keeps rounding on the safe side)
-          const ui = u % gw;
-          const off = Math.hypot((ui + 0.5) * h - focus.x, ((u - ui) / gw + 0.5) * h - focus.y) - focus.radiusM;
+          let off = toFocus[u];
+          if (off !== off) {
+            const ui = u % gw;
+            off = Math.hypot((ui + 0.5) * h - focus.x, ((u - ui) / gw + 0.5) * h - focus.y) - focus.radiusM;
+            toFocus[u] = off;
+          }
           if (key + floor * off > maxDistance + 1e-9) continue;
         }
         const mask = moves[u];
@@ -276,6 +281,22 @@ export class GeodesicSearch {
     }
     return this.settledCount;
   }
+
+  /**
+   * Per cell, the straight line from its centre to the focus circle (NaN until a search asks): a retry
+   * screen searches from a hundred readings with one focus, and each would otherwise work out the same
+   * square roots again for the cells they share (docs/decisions/0160).
+   */
+  private offsetsTo(focus: SearchFocus): Float64Array {
+    if (this.focusOfOffsets !== focus || !this.focusOffsets) {
+      this.focusOffsets = (this.focusOffsets ?? new Float64Array(this.dist.length)).fill(NaN);
+      this.focusOfOffsets = focus;
+    }
+    return this.focusOffsets;
+  }
+
+  private focusOffsets: Float64Array | null = null;
+  private focusOfOffsets: SearchFocus | null = null;
 
   private markDirty(k: number): void {
     if (this.dirtyCount === this.dirty.length) this.dirty = growInt32(this.dirty);
