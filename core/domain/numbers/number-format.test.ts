@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { roundHalfUp } from "./round-half-up";
 import {
+  formatAsGiven,
   formatGrouped,
   formatQuantity,
   formatShort,
@@ -115,6 +116,25 @@ describe("formatShort and formatSignificant (the locator's figures)", () => {
       }
       const short = new Intl.NumberFormat(LOCALE[format], { maximumFractionDigits: 1 });
       for (const v of [12, 2.5, 0.3, 1234.56, 6.04]) expect(formatShort(v, format)).toBe(short.format(v));
+    }
+  });
+});
+
+describe("formatAsGiven (a typed figure, every place kept)", () => {
+  it("writes as many places as were given, grouped as CLDR writes each locale (Intl.NumberFormat)", () => {
+    for (const format of NUMBER_FORMATS) {
+      for (const [v, places] of [
+        [65.1, 1],
+        [2500, 0],
+        [12.125, 3],
+        [1234.5, 1],
+      ] as const) {
+        const nf = new Intl.NumberFormat(LOCALE[format], {
+          minimumFractionDigits: places,
+          maximumFractionDigits: places,
+        });
+        expect(formatAsGiven(v, format)).toBe(nf.format(v));
+      }
     }
   });
 });

@@ -107,6 +107,12 @@ export function formatGrouped(value: number, format: NumberFormat, decimals: num
   return `${negative ? "-" : ""}${grouped}${fraction !== undefined ? m.decimal + fraction : ""}`;
 }
 
+/** A number someone typed, in the company's format with every place they gave (up to six): 12.5 → "12,5". */
+export function formatAsGiven(value: number, format: NumberFormat): string {
+  const places = Math.min(6, (String(value).split(".")[1] ?? "").length);
+  return formatGrouped(value, format, places);
+}
+
 /**
  * Places worth showing for a measured quantity: whole numbers from 1,000, one place from 10, two
  * from 1, three below (723.50251 t → 723.5 t; 0.04536 kg → 0.045 kg). Common practice, no

@@ -1,3 +1,4 @@
+import { formatGrouped, type NumberFormat } from "../numbers/number-format";
 import { formatFixed } from "../numbers/round-half-up";
 import { formatFeetInches, type InchDenominator } from "./length";
 import { kgToPounds } from "./mass";
@@ -23,4 +24,15 @@ export function formatLength(metres: number, preference: LengthPreference, optio
 /** `12.50 kg` or `27.56 lb`, following the user's preference (2 decimals unless told). */
 export function formatMass(kg: number, preference: MassPreference, decimals = 2): string {
   return preference === "lb" ? `${formatFixed(kgToPounds(kg), decimals)} lb` : `${formatFixed(kg, decimals)} kg`;
+}
+
+/**
+ * A mass as the records write it: both units, the company's first, grouped in its number format
+ * (`4.54 kg (10.0 lb)`, `1.500,0 lb (680,39 kg)`), so a record reads the same whichever unit a later
+ * reader prefers.
+ */
+export function formatRecordMass(kg: number, first: MassPreference, format: NumberFormat = "1,234.5"): string {
+  const metric = `${formatGrouped(kg, format, 2)} kg`;
+  const pounds = `${formatGrouped(kgToPounds(kg), format, 1)} lb`;
+  return first === "lb" ? `${pounds} (${metric})` : `${metric} (${pounds})`;
 }

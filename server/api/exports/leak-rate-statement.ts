@@ -9,10 +9,9 @@ import { readableAuditEntry } from "#core/domain/compliance/audit-entry";
 import { retireReasonWords } from "#core/domain/compliance/retirement-words";
 import { statementTitle } from "#core/domain/compliance/company-profile";
 import { formatCalendarDay as day, formatInZone } from "#core/domain/dates/format-in-zone";
-import { formatGrouped, formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
+import { formatAsGiven, formatGrouped, formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
 import type { Paper } from "#core/domain/reports/paper";
-import { kgToPounds } from "#core/domain/units/mass";
-import type { MassPreference } from "#core/domain/units/format-units";
+import { formatRecordMass, type MassPreference } from "#core/domain/units/format-units";
 import { drawTable, type PdfColumn } from "../../reports/pdf-table";
 import { reportDocument } from "../../reports/report-document";
 
@@ -45,13 +44,6 @@ export interface StatementOptions {
 
 /** A rule source as the page prints it. */
 type Cite = (source: string) => string;
-
-/** `4.54 kg (10.0 lb)` or `1,500.0 lb (680.39 kg)`: the company's unit first, grouped in its number format. */
-export function statementMass(kg: number, first: MassPreference, format: NumberFormat = "1,234.5"): string {
-  const metric = `${formatGrouped(kg, format, 2)} kg`;
-  const pounds = `${formatGrouped(kgToPounds(kg), format, 1)} lb`;
-  return first === "lb" ? `${pounds} (${metric})` : `${metric} (${pounds})`;
-}
 
 function heading(doc: Doc, text: string) {
   // Keep a heading with at least a few lines of what follows it.
@@ -174,10 +166,9 @@ function profileSection(doc: Doc, r: SystemRecordsView, cite: Cite) {
 
 /** A percentage in the company's number format: one place for a computed rate, every place given for a rule's threshold. */
 function percentWords(format: NumberFormat) {
-  const givenPlaces = (p: number) => Math.min(3, (String(p).split(".")[1] ?? "").length);
   return {
     rate: (p: number) => `${formatGrouped(p, format, 1)} %`,
-    rule: (p: number) => `${formatGrouped(p, format, givenPlaces(p))} %`,
+    rule: (p: number) => `${formatAsGiven(p, format)} %`,
   };
 }
 
@@ -504,7 +495,7 @@ export function leakRateStatementPdf(
     doc.on("end", () => resolve(Buffer.concat(chunks)));
     doc.on("error", reject);
   });
-  const mass = (kg: number) => statementMass(kg, options.massUnit, options.numberFormat);
+  const mass = (kg: number) => formatRecordMass(kg, options.massUnit, options.numberFormat);
   const pct = percentWords(options.numberFormat ?? "1,234.5");
   const cite = (source: string) => citedWithAcceptance(source, options.acceptedReadings ?? null);
   const generated = `made ${formatInZone(options.generatedAt ?? new Date(), r.store.timeZone, "dateTime")}`;

@@ -8,7 +8,15 @@ import {
 } from "#core/domain/refrigerants/company-refrigerant";
 import { summarizeRefrigerant } from "#core/domain/refrigerants/refrigerant-summary";
 import { DomainInputError } from "#core/domain/input-error";
-import { companyRefrigerants, complianceAudit, systemRevisions, systems, users } from "../../db/schema/index";
+import { formatAsGiven, type NumberFormat } from "#core/domain/numbers/number-format";
+import {
+  companies,
+  companyRefrigerants,
+  complianceAudit,
+  systemRevisions,
+  systems,
+  users,
+} from "../../db/schema/index";
 import { badRequest, conflict, notFound } from "../../lib/http-error";
 import { companyGwpBases } from "../systems/systems.service";
 import type { DbOrTx } from "../../db/tx";
@@ -115,6 +123,11 @@ export async function createCompanyRefrigerant(
     .from(companyRefrigerants)
     .where(and(eq(companyRefrigerants.companyId, companyId), eq(companyRefrigerants.nameKey, nameKey)));
   if (taken) throw badRequest(`Please check: name ${NAME_TAKEN}.`, { name: NAME_TAKEN });
+  const [company] = await ctx.db
+    .select({ number: companies.numberFormat })
+    .from(companies)
+    .where(eq(companies.id, companyId));
+  const format = company?.number ?? "1,234.5";
   const row = await ctx.db.transaction(async (tx) => {
     const [created] = await tx
       .insert(companyRefrigerants)
@@ -139,7 +152,7 @@ export async function createCompanyRefrigerant(
       systemId: null,
       action: "refrigerant-entered",
       byId: userId,
-      summary: `Refrigerant entered by the company: ${describe(checked)}`,
+      summary: `Refrigerant entered by the company: ${describe(checked, format)}`,
     });
     return created;
   });
@@ -148,10 +161,11 @@ export async function createCompanyRefrigerant(
   return (await views(ctx, companyId, [row]))[0];
 }
 
-function describe(c: ReturnType<typeof checkCompanyRefrigerant>): string {
+/** The audit's words for a refrigerant the company entered, its figures in the company's number format. */
+function describe(c: ReturnType<typeof checkCompanyRefrigerant>, format: NumberFormat): string {
   const what = c.components
-    ? c.components.map((k) => `${k.id} ${k.massPercent} %`).join(", ")
-    : `GWP ${c.statedGwp!.value} (${c.statedGwp!.basis}; ${c.statedGwp!.source})`;
+    ? c.components.map((k) => `${k.id} ${formatAsGiven(k.massPercent, format)} %`).join(", ")
+    : `GWP ${formatAsGiven(c.statedGwp!.value, format)} (${c.statedGwp!.basis}; ${c.statedGwp!.source})`;
   return `${c.name}, ${c.safetyClass}, ${what}`;
 }
 

@@ -1,7 +1,7 @@
 import Papa from "papaparse";
 import { and, eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { complianceAudit } from "../../db/schema/index";
+import { companies, complianceAudit } from "../../db/schema/index";
 import { createTestApp, type Agent, type TestApp, signIn } from "../../../tests/helpers/test-app";
 import { seedCompany } from "../../../tests/helpers/fixtures";
 import { pdfText } from "../../../tests/helpers/pdf-text";
@@ -83,6 +83,32 @@ describe("a company's own refrigerants (docs/decisions/0073)", () => {
       .from(complianceAudit)
       .where(and(eq(complianceAudit.companyId, co.company.id), eq(complianceAudit.action, "refrigerant-entered")));
     expect(audit.map((a) => a.summary)).toContainEqual(expect.stringContaining("Freezer blend 44"));
+  });
+
+  it("writes the audit's figures in the company's number format", async () => {
+    const comma = await seedCompany(t.ctx, "Fenwick Larder");
+    await t.ctx.db.update(companies).set({ numberFormat: "1.234,5" }).where(eq(companies.id, comma.company.id));
+    const owner = await signedIn("owner", comma);
+    // The figures only need decimals and thousands here (R-422D's composition, from memory).
+    const mix = await owner.post("/api/company-refrigerants", {
+      name: "Retrofit mix 65",
+      safetyClass: "A1",
+      composition: [
+        { refrigerantId: "R-125", massPercent: 65.1 },
+        { refrigerantId: "R-134a", massPercent: 31.5 },
+        { refrigerantId: "R-600a", massPercent: 3.4 },
+      ],
+    });
+    expect(mix.status, JSON.stringify(mix.body)).toBe(201);
+    expect((await owner.post("/api/company-refrigerants", stated2500)).status).toBe(201);
+    const audit = await t.ctx.db
+      .select()
+      .from(complianceAudit)
+      .where(and(eq(complianceAudit.companyId, comma.company.id), eq(complianceAudit.action, "refrigerant-entered")));
+    expect(audit.map((a) => a.summary).sort()).toEqual([
+      "Refrigerant entered by the company: Imported HFC mix, A1, GWP 2.500 (AR4; maker's safety data sheet, section 12)",
+      "Refrigerant entered by the company: Retrofit mix 65, A1, R-125 65,1 %, R-134a 31,5 %, R-600a 3,4 %",
+    ]);
   });
 
   it("refuses bad entries with the field and the reason, and saves nothing", async () => {

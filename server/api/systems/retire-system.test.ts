@@ -166,6 +166,23 @@ describe("no record is ever lost (docs/decisions/0040-no-record-is-lost.md, 0124
     expect((await refused({ retiredOn: "2026-03-09", reasonKind: "removed" })).retiredOn).toBe(
       "must not be before 10 Mar 2026, when refrigerant was added",
     );
+    // A leak record counts by its latest event: found on 12 Mar, repaired on 14 Mar.
+    const tech = await signedIn("technician");
+    const leak = await tech.post(`/api/stores/${co.store.id}/findings`, {
+      systemId: id,
+      component: "flare",
+      foundAt: "2026-03-12T15:00:00Z",
+    });
+    expect(leak.status, JSON.stringify(leak.body)).toBe(201);
+    expect(
+      (await tech.post(`/api/findings/${leak.body.id}/events`, { action: "confirm", on: "2026-03-13" })).status,
+    ).toBe(200);
+    expect(
+      (await lead.post(`/api/findings/${leak.body.id}/events`, { action: "repair", on: "2026-03-14" })).status,
+    ).toBe(200);
+    expect((await refused({ retiredOn: "2026-03-13", reasonKind: "removed" })).retiredOn).toBe(
+      "must not be before 14 Mar 2026, when a leak was repaired",
+    );
     expect(row.retiredAt).toBeNull();
     // Nothing was changed by the refusals: still in service, no audit row.
     const rec = await lead.get(`/api/systems/${id}/records`);
@@ -173,14 +190,14 @@ describe("no record is ever lost (docs/decisions/0040-no-record-is-lost.md, 0124
     expect(rec.body.audit).toEqual([]);
 
     const ok = await lead.post(`/api/systems/${id}/retire`, {
-      retiredOn: "2026-03-10",
+      retiredOn: "2026-03-14",
       reasonKind: "other",
       reason: "Unit stolen from the yard",
     });
     expect(ok.status).toBe(200);
     expect(ok.body).toMatchObject({
       outcome: "retired",
-      system: { retired: { on: "2026-03-10", reasonKind: "other", reason: "Unit stolen from the yard" } },
+      system: { retired: { on: "2026-03-14", reasonKind: "other", reason: "Unit stolen from the yard" } },
     });
   });
 

@@ -6,6 +6,8 @@ import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 import {
   chargeAdditions,
   complianceAudit,
+  findingEvents,
+  findings,
   leakChecks,
   leakDetectionChecks,
   stores,
@@ -19,6 +21,17 @@ import { hasRecords } from "./system-has-records";
 import { companyGwpBases, loadSystem, refuseRetired, toSystem } from "./systems.service";
 
 const FOREIGN_KEY_VIOLATION = "23503";
+
+/** How the refusal names a leak record's latest event ("must not be before 4 Apr 2026, when …"). */
+const LEAK_EVENT_WORDS: Record<(typeof findingEvents.$inferSelect)["kind"], string> = {
+  found: "a leak was recorded",
+  confirmed: "a leak was confirmed",
+  repaired: "a leak was repaired",
+  "initial-test": "a repair's initial verification test was recorded",
+  "follow-up-test": "a repair's follow-up verification test was recorded",
+  closed: "a leak record was closed",
+  dismissed: "a suspected leak was dismissed",
+};
 
 function isForeignKeyViolation(e: unknown): boolean {
   const cause = (e as { cause?: { code?: string }; code?: string }) ?? {};
@@ -54,9 +67,13 @@ export async function deleteSystem(ctx: AppContext, viewer: Viewer, systemId: st
   return { outcome: "deleted", system: null };
 }
 
-/** The latest day any dated record of the system names: a retirement before it would leave a record after it. */
+/**
+ * The latest day any dated record of the system names: a retirement before it would leave a record
+ * after it. A leak finding counts by each of its events (found, repaired, tested, closed…), on the
+ * store's calendar.
+ */
 async function lastRecordDay(ctx: AppContext, systemId: string): Promise<{ on: string; what: string } | null> {
-  const [add, check, lds] = await Promise.all([
+  const [add, check, lds, leak] = await Promise.all([
     ctx.db
       .select({ on: chargeAdditions.addedOn })
       .from(chargeAdditions)
@@ -75,11 +92,19 @@ async function lastRecordDay(ctx: AppContext, systemId: string): Promise<{ on: s
       .where(eq(leakDetectionChecks.systemId, systemId))
       .orderBy(desc(leakDetectionChecks.checkedOn))
       .limit(1),
+    ctx.db
+      .select({ on: findingEvents.on, kind: findingEvents.kind })
+      .from(findingEvents)
+      .innerJoin(findings, eq(findings.id, findingEvents.findingId))
+      .where(eq(findings.systemId, systemId))
+      .orderBy(desc(findingEvents.on))
+      .limit(1),
   ]);
   const found = [
     ...add.map((r) => ({ on: r.on, what: "refrigerant was added" })),
     ...check.map((r) => ({ on: r.on, what: "a leak check was recorded" })),
     ...lds.map((r) => ({ on: r.on, what: "its leak detection system was checked" })),
+    ...leak.map((r) => ({ on: r.on, what: LEAK_EVENT_WORDS[r.kind] })),
   ].sort((a, b) => compareDates(b.on, a.on));
   return found[0] ?? null;
 }

@@ -2,12 +2,13 @@ import { asc, eq } from "drizzle-orm";
 import { orderedRevisions, revisionsOf } from "./revision-rows";
 import type { AppContext } from "../../context";
 import type { RevisionInput, System } from "#core/contracts/systems";
-import { complianceAudit, systemRevisions, systems, users } from "../../db/schema/index";
+import { companies, complianceAudit, systemRevisions, systems, users } from "../../db/schema/index";
 import { compareDates, type IsoDate } from "#core/domain/dates/calendar-date";
 import { badRequest } from "../../lib/http-error";
 import { eventDay } from "../findings/findings.service";
 import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { designationOf } from "#core/domain/refrigerants/types";
+import { formatRecordMass } from "#core/domain/units/format-units";
 import { holdRefrigerant, lookupFor, resolveStored } from "../refrigerants/company-refrigerant-lookup";
 import { chargeToKg, companyGwpBases, knownRefrigerant, loadSystem, refuseRetired, toSystem } from "./systems.service";
 
@@ -103,6 +104,11 @@ export async function addRevision(
     throw badRequest("Please check: the system must be in service on the day the revision takes effect.", {
       effectiveFrom: `must be on or after the in-service day ${facts.inServiceOn}`,
     });
+  const [company] = await ctx.db
+    .select({ mass: companies.massUnit, number: companies.numberFormat })
+    .from(companies)
+    .where(eq(companies.id, viewer.companyId));
+  const mass = (kg: number) => formatRecordMass(kg, company?.mass ?? "kg", company?.number);
   const updated = await ctx.db.transaction(async (tx) => {
     if (newRefrigerant) await holdRefrigerant(tx, viewer.companyId, facts.refrigerantId);
     const [row] = await tx
@@ -135,19 +141,25 @@ export async function addRevision(
       systemId,
       action: "system-revised",
       byId: userId,
-      summary: `${input.kind === "retrofit" ? "Retrofit" : input.kind === "correction" ? "Correction" : "Change"} from ${effectiveFrom}: ${describeChange(base, facts, named)}; reason: ${input.reason}`,
+      summary: `${input.kind === "retrofit" ? "Retrofit" : input.kind === "correction" ? "Correction" : "Change"} from ${effectiveFrom}: ${describeChange(base, facts, named, mass)}; reason: ${input.reason}`,
     });
     return s;
   });
   return toSystem(updated, choice, true);
 }
 
-function describeChange(before: Facts, after: Facts, named: (id: string) => string): string {
+/** The audit's words for a revision; a mass in both units and the company's number format, as the records write it. */
+function describeChange(
+  before: Facts,
+  after: Facts,
+  named: (id: string) => string,
+  mass: (kg: number) => string,
+): string {
   const parts: string[] = [];
   if (before.refrigerantId !== after.refrigerantId)
     parts.push(`refrigerant ${named(before.refrigerantId)} → ${named(after.refrigerantId)}`);
   if (before.fullChargeKg !== after.fullChargeKg)
-    parts.push(`full charge ${before.fullChargeKg.toFixed(2)} kg → ${after.fullChargeKg.toFixed(2)} kg`);
+    parts.push(`full charge ${mass(before.fullChargeKg)} → ${mass(after.fullChargeKg)}`);
   if (before.applianceType !== after.applianceType)
     parts.push(`appliance type ${before.applianceType} → ${after.applianceType}`);
   if (before.automaticLeakDetection !== after.automaticLeakDetection)

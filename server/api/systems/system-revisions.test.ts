@@ -1,4 +1,6 @@
+import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { companies } from "../../db/schema/index";
 import { createTestApp, type Agent, type TestApp, signInOnce } from "../../../tests/helpers/test-app";
 import { seedCompany } from "../../../tests/helpers/fixtures";
 import type { Role } from "#core/domain/roles";
@@ -101,7 +103,7 @@ describe("dated revisions of a system (docs/decisions/0043-system-revisions.md)"
     );
     expect(rec.audit.map((a: { action: string }) => a.action)).toContain("system-revised");
     expect(rec.audit.find((a: { action: string }) => a.action === "system-revised").summary).toMatch(
-      /^Retrofit from 2026-05-01: refrigerant R-22 → R-448A, full charge 45\.36 kg → 40\.82 kg; reason: Converted/,
+      /^Retrofit from 2026-05-01: refrigerant R-22 → R-448A, full charge 45\.36 kg \(100\.0 lb\) → 40\.82 kg \(90\.0 lb\); reason: Converted/,
     );
 
     const list = await tech.get(`/api/systems/${id}/revisions`);
@@ -110,6 +112,27 @@ describe("dated revisions of a system (docs/decisions/0043-system-revisions.md)"
       ["retrofit", "R-448A"],
     ]);
     expect(list.body.revisions[1].by).toBe("engineer of Hollybrook Provisions");
+  });
+
+  it("writes the audit's masses in both units, the company's first, in its number format", async () => {
+    await t.ctx.db
+      .update(companies)
+      .set({ massUnit: "lb", numberFormat: "1.234,5" })
+      .where(eq(companies.id, co.company.id));
+    const engineer = await signedIn("engineer");
+    const r = await engineer.post(`/api/systems/${id}/revisions`, {
+      effectiveFrom: "2026-08-01",
+      kind: "change",
+      reason: "Larger receiver fitted",
+      fullCharge: lb(1500),
+    });
+    expect(r.status, JSON.stringify(r.body)).toBe(201);
+    const audit = (await engineer.get(`/api/systems/${id}/records`)).body.audit as { summary: string }[];
+    // 1 lb = 0.45359237 kg exactly (NIST SP 811, appendix B): 90 lb = 40.82 kg, 1,500 lb = 680.39 kg.
+    // (Days stay ISO in the stored words; the records page and the PDF write them readably.)
+    expect(audit.map((a) => a.summary)).toContain(
+      "Change from 2026-08-01: full charge 90,0 lb (40,82 kg) → 1.500,0 lb (680,39 kg); reason: Larger receiver fitted",
+    );
   });
 
   it("lets the facts change freely before any record, as a correction from the in-service day", async () => {

@@ -17,7 +17,7 @@ import { StartPassDialog } from "./start-pass-dialog";
 
 // The words over the whole width, the actions in a row under them: a phone's header stays short.
 const BANNER = "flex flex-col gap-0 rounded-md border-l-4 px-3 pt-1 text-sm leading-snug edge";
-const ACTIONS = "flex flex-wrap justify-end gap-x-3";
+const ACTIONS = "flex flex-wrap items-center justify-end gap-2 pt-1";
 
 /**
  * The still-air pass on the Walk screen: the offer once the live first suspect has settled at a fixture
@@ -80,30 +80,32 @@ export function PinpointPassPanel({
       <div
         role={role}
         data-testid="pass-banner"
-        className={`${BANNER} ${r.overdue ? "border-danger bg-danger-soft" : "border-accent bg-accent-soft"}`}
+        className={`${BANNER} pb-2 ${r.overdue ? "border-danger bg-danger-soft" : "border-accent bg-accent-soft"}`}
       >
         <span>
           <strong className="text-base">{title}</strong> <span data-testid="pass-timer">{timer}</span>
         </span>
+        {/* drawn as buttons: a row of bare words in 48 px targets reads as an empty row on a phone */}
         <span className={ACTIONS}>
-          <button
-            type="button"
-            className="min-h-12 px-2 font-bold underline"
+          <Button
+            variant="secondary"
+            aria-label="Cautions while the air is still"
+            className="mr-auto min-h-12 px-3"
+            onClick={() => setReadingCautions(true)}
+          >
+            ⚠ Cautions
+          </Button>
+          <Button
+            variant="secondary"
+            className="min-h-12 px-3"
             onClick={() => void pass.setMinutes(pass.open!.id, pass.open!.restoreAfterMin + 5)}
           >
             +5 min
-          </button>
-          <button type="button" className="min-h-12 px-2 font-bold underline" onClick={() => void pass.end()}>
+          </Button>
+          <Button className="min-h-12 px-3" onClick={() => void pass.end()}>
             Fans back on — end pass
-          </button>
+          </Button>
         </span>
-        <button
-          type="button"
-          className="min-h-12 self-start px-0 text-left font-bold underline"
-          onClick={() => setReadingCautions(true)}
-        >
-          ⚠ Cautions while the air is still
-        </button>
         {/* a dialog over the whole screen, not the banners' short scrolling box: read in full on a phone */}
         <Dialog
           title={`While the air is still at ${name(stilled)}`}
