@@ -20,7 +20,7 @@ import { sourcesStage } from "#core/analysis/pipeline/sources-stage";
 import { zonesStage } from "#core/analysis/pipeline/zones-stage";
 import { parseLocatorInput } from "#core/contracts/locator-input";
 import { buildWorld } from "./simulate/scenario";
-import { storeStream } from "./simulate/store-types";
+import { storeName, storeStream } from "./simulate/store-types";
 
 const args = process.argv.slice(2);
 const take = (flag: string) => {
@@ -97,7 +97,7 @@ const noiseSd = (mean: number) => Math.sqrt(0.5 ** 2 + 1 / 12 + (0.3 * mean) ** 
 let findable = 0;
 let failing = 0;
 for (let n = first; n <= last; n++) {
-  const name = `two-leaks-${n}`;
+  const name = storeName("two-leaks", n);
   const raw = JSON.parse(readFileSync(join(dir, `${name}.json`), "utf8"));
   const truth = JSON.parse(readFileSync(join(dir, `${name}.truth.json`), "utf8"));
   const input = parseLocatorInput(raw);
