@@ -29,6 +29,13 @@ export interface World {
   stopFans: (fixtureId: string) => void;
   /** Each leak's own mean concentration at a point, ppm, at the strength it was given (diagnostic oracles only). */
   leakAir: (x: number, y: number) => number[];
+  /**
+   * The physics for a diagnostic ceiling (scripts/bench/oracle-along-case.ts): the steady field of a unit
+   * leak at (x, y) in the sweep's air, as a sampler of the plan. Draws nothing from the random stream.
+   */
+  unitLeakAir: (x: number, y: number) => (px: number, py: number) => number;
+  /** The instrument's noise and the ambient level the probe sees, as drawn for this store. */
+  noise: { sigma: number; slowShare: number; slowCorrelationS: number; displayNoisePpm: number; ambientPpm: number };
 }
 
 export interface Scenario {
@@ -202,6 +209,7 @@ export function buildWorld(family: Family, key: number): World {
     random,
   );
   const speed = random.uniform(0.7, 1.2);
+  const ambientPpm = random.uniform(0, 0.6);
   let samplesInSolid = 0; // probe positions on a solid cell: should stay zero (a routing fault otherwise)
   const tech = new Technician(
     {
@@ -220,7 +228,7 @@ export function buildWorld(family: Family, key: number): World {
       if (grid.solid[cellOf(grid, x, y)]) samplesInSolid++;
       return sampleField(grid, air, x, y);
     },
-    random.uniform(0, 0.6),
+    ambientPpm,
     random,
     layout,
     layout.legs[0].points[0],
@@ -249,6 +257,11 @@ export function buildWorld(family: Family, key: number): World {
     random,
     stopFans,
     leakAir: (x, y) => leakFields.map((f) => sampleField(grid, f, x, y)),
+    unitLeakAir: (x, y) => {
+      const g = solveFor(op, grid, [cellOf(grid, x, y)], []);
+      return (px, py) => sampleField(grid, g, px, py);
+    },
+    noise: { ...sensor.noise, ambientPpm },
   };
 }
 
