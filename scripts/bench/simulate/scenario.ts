@@ -27,6 +27,8 @@ export interface World {
   random: Random;
   /** Stops the fans of one fixture: the technician from now on samples the air solved without them. */
   stopFans: (fixtureId: string) => void;
+  /** Each leak's own mean concentration at a point, ppm, at the strength it was given (diagnostic oracles only). */
+  leakAir: (x: number, y: number) => number[];
   /**
    * The physics for a diagnostic ceiling (scripts/bench/oracle-along-case.ts): the steady field of a unit
    * leak at (x, y) in the sweep's air, as a sampler of the plan. Draws nothing from the random stream.
@@ -144,12 +146,14 @@ export function buildWorld(family: Family, key: number): World {
   const peaks: number[] = [];
   const total = new Float64Array(grid.nx * grid.ny);
   const scales: number[] = [];
+  const leakFields: Float64Array[] = [];
   for (const leak of leaks) {
     const g = solveFor(op, grid, [cellOf(grid, leak.x, leak.y)], iterations);
     // Strength is set by what the sweep could see, so every benchmark leak is findable in principle.
     const target = family === "single-still" ? logUniform(random, 5, 40) : logUniform(random, 3, 25);
     const scale = target / peakAlongLegs(layout, grid, g);
     for (let k = 0; k < total.length; k++) total[k] += scale * g[k];
+    leakFields.push(g.map((v) => scale * v));
     scales.push(scale);
     peaks.push(round(target));
   }
@@ -252,6 +256,7 @@ export function buildWorld(family: Family, key: number): World {
     samplesInSolid: () => samplesInSolid,
     random,
     stopFans,
+    leakAir: (x, y) => leakFields.map((f) => sampleField(grid, f, x, y)),
     unitLeakAir: (x, y) => {
       const g = solveFor(op, grid, [cellOf(grid, x, y)], []);
       return (px, py) => sampleField(grid, g, px, py);
