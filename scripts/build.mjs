@@ -6,7 +6,8 @@
 //   node scripts/build.mjs            server, workers and tools
 //   node scripts/build.mjs locate     only dist/scripts/locate.js (the locate command builds on demand)
 import { build } from "esbuild";
-import { readdirSync } from "node:fs";
+import { createHash } from "node:crypto";
+import { readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import path from "node:path";
 
 const root = path.resolve(import.meta.dirname, "..");
@@ -36,15 +37,36 @@ const common = {
 // The command line is started afresh for every file, so its start-up counts: one minified file with its
 // npm packages (zod, simple-statistics) inside, which Node reads and compiles without resolving and
 // loading a hundred modules of node_modules (about 90 ms of CPU of a 3-reading run; docs/benchmarks.md).
+// That body is CommonJS so that scripts/locate-start.cjs can run it through node:vm with V8's code
+// cache, named by the body's hash (docs/decisions/0160); caches of earlier bodies are deleted.
 export async function buildLocate() {
+  const outDir = path.join(root, "dist/scripts");
   await build({
     ...common,
+    banner: undefined,
     packages: undefined,
+    format: "cjs",
     minify: true,
     sourcemap: "linked",
     entryPoints: ["scripts/locate.ts"],
-    outfile: "dist/scripts/locate.js",
+    outfile: "dist/scripts/locate-body.cjs",
   });
+  const hash = createHash("sha256")
+    .update(readFileSync(path.join(outDir, "locate-body.cjs")))
+    .digest("hex")
+    .slice(0, 16);
+  const cacheName = `locate-body.${hash}.v8cache`;
+  for (const f of readdirSync(outDir)) if (f.endsWith(".v8cache") && f !== cacheName) rmSync(path.join(outDir, f));
+  await build({
+    ...common,
+    banner: undefined,
+    format: "cjs",
+    entryPoints: ["scripts/locate-start.cjs"],
+    outfile: "dist/scripts/locate.js",
+    define: { __LOCATE_BODY__: JSON.stringify("locate-body.cjs"), __LOCATE_CACHE__: JSON.stringify(cacheName) },
+  });
+  // locate.js is CommonJS although the repository's package.json says "module"
+  writeFileSync(path.join(outDir, "package.json"), `${JSON.stringify({ type: "commonjs" })}\n`);
 }
 
 export async function buildServer() {

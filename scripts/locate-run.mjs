@@ -14,6 +14,7 @@ function newestSource() {
   let newest = Math.max(
     statSync(path.join(root, "scripts/locate.ts")).mtimeMs,
     statSync(path.join(root, "scripts/build.mjs")).mtimeMs,
+    statSync(path.join(root, "scripts/locate-start.cjs")).mtimeMs,
   );
   for (const f of readdirSync(path.join(root, "core"), { recursive: true })) {
     if (!String(f).endsWith(".ts")) continue;

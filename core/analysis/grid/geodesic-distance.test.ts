@@ -117,6 +117,26 @@ describe("geodesic distance on the plan grid", () => {
     expect(s.dist[cellIndexOf(grid, 5.0, 3.0)]).toBe(Infinity); // the wall itself
   });
 
+  it("a search that cannot reach a fan-stirred room gives exactly the distances of a search without step scales", () => {
+    const grid = createPlanGrid(20, 10, h, []);
+    // the room's cells (x 16-20 m) cost 0.35 of their length; a 6 m search from x = 3 m stops 7 m short of it
+    const scale = new Float32Array(grid.width * grid.height).fill(1);
+    for (let k = 0; k < scale.length; k++) if (k % grid.width >= 64) scale[k] = 0.35;
+    const withScale = new GeodesicSearch(grid, scale);
+    const without = new GeodesicSearch(grid);
+    const settled = without.reach(3.1, 4.9, 6);
+    expect(withScale.reach(3.1, 4.9, 6)).toBe(settled);
+    for (let q = 0; q < settled; q++) {
+      const c = without.settled[q];
+      expect(withScale.dist[c]).toBe(without.dist[c]);
+    }
+    // beside the room the scales count: a cell inside it is nearer than without them
+    withScale.reach(15.1, 4.9, 6);
+    without.reach(15.1, 4.9, 6);
+    const inRoom = cellIndexOf(grid, 19.1, 4.9);
+    expect(withScale.dist[inRoom]).toBeLessThan(without.dist[inRoom]);
+  });
+
   it("the bucket search from many cells (reachFromCells) settles the heap's cells at the heap's distances", () => {
     const grid = createPlanGrid(10, 10, h, [
       [

@@ -58,9 +58,11 @@ export class GeodesicSearch {
     this.offsets = Int32Array.from([1, -1, w, -w, w + 1, -w + 1, w - 1, -w - 1]);
     this.steps = Float64Array.from([h, h, h, h, h * Math.SQRT2, h * Math.SQRT2, h * Math.SQRT2, h * Math.SQRT2]);
     let minScale = 1;
+    let notShortened = 0;
     const box = [Infinity, Infinity, -Infinity, -Infinity];
     if (stepScale)
       for (let k = 0; k < stepScale.length; k++) {
+        if (!(stepScale[k] <= 1)) notShortened++;
         if (stepScale[k] < minScale) minScale = stepScale[k];
         if (stepScale[k] < 1) {
           const [cx, cy] = cellCentre(grid, k);
@@ -73,7 +75,11 @@ export class GeodesicSearch {
     this.bucketWidth = (h * minScale) / 2;
     this.minScale = minScale;
     this.shortBox = box;
+    this.onlyShortened = notShortened === 0;
   }
+
+  /** Every cell's step scale is 1 except the shortened ones (scale < 1) of `shortBox`. */
+  private readonly onlyShortened: boolean;
 
   /** The smallest step scale (at most 1): no path is shorter than this times the straight line. */
   private readonly minScale: number;
@@ -115,7 +121,11 @@ export class GeodesicSearch {
       return this.fromPoint(x, y, maxDistance);
     const seeds = this.seedPoint(x, y);
     if (seeds === 0) return 0;
-    return this.runBuckets(maxDistance, true, focus, focus ? this.floorFrom(x, y, maxDistance) : 1);
+    const floor = this.stepScale ? this.floorFrom(x, y, maxDistance) : 1;
+    // No shortened cell within reach: every step this search takes costs its length times (1 + 1) / 2,
+    // exactly its length, so the steps' scales need not be read (docs/decisions/0160).
+    const plain = this.stepScale !== null && floor === 1 && this.onlyShortened;
+    return this.runBuckets(maxDistance, true, focus, focus ? floor : 1, plain);
   }
 
   /** Resets, then seeds the point's own cell and its free neighbours at their Euclidean distance; the seed count. */
@@ -211,9 +221,16 @@ export class GeodesicSearch {
   }
 
   /** `fromHeap`: the seeds are in the heap (seedPoint), else already in the buckets. */
-  private runBuckets(maxDistance: number, fromHeap = true, focus: SearchFocus | null = null, floor = 1): number {
+  private runBuckets(
+    maxDistance: number,
+    fromHeap = true,
+    focus: SearchFocus | null = null,
+    floor = 1,
+    plain = false,
+  ): number {
     const { heap, dist, offsets, steps, moves, buckets } = this;
-    const scale = this.stepScale;
+    const scale = plain ? null : this.stepScale;
+    const toFocus = focus ? this.offsetsTo(focus) : null;
     const width = this.bucketWidth;
     const gw = this.grid.width;
     const h = this.grid.cellSize;
@@ -232,11 +249,15 @@ export class GeodesicSearch {
         if (key !== dist[u]) continue; // stale entry
         if (this.settledCount === this.settled.length) this.settled = growInt32(this.settled);
         this.settled[this.settledCount++] = u;
-        if (focus) {
+        if (focus && toFocus) {
           // no step from here can still reach the focus circle within maxDistance: no path is shorter
           // than `floor` times the straight line (a small margin keeps rounding on the safe side)
-          const ui = u % gw;
-          const off = Math.hypot((ui + 0.5) * h - focus.x, ((u - ui) / gw + 0.5) * h - focus.y) - focus.radiusM;
+          let off = toFocus[u];
+          if (off !== off) {
+            const ui = u % gw;
+            off = Math.hypot((ui + 0.5) * h - focus.x, ((u - ui) / gw + 0.5) * h - focus.y) - focus.radiusM;
+            toFocus[u] = off;
+          }
           if (key + floor * off > maxDistance + 1e-9) continue;
         }
         const mask = moves[u];
@@ -260,6 +281,22 @@ export class GeodesicSearch {
     }
     return this.settledCount;
   }
+
+  /**
+   * Per cell, the straight line from its centre to the focus circle (NaN until a search asks): a retry
+   * screen searches from a hundred readings with one focus, and each would otherwise work out the same
+   * square roots again for the cells they share (docs/decisions/0160).
+   */
+  private offsetsTo(focus: SearchFocus): Float64Array {
+    if (this.focusOfOffsets !== focus || !this.focusOffsets) {
+      this.focusOffsets = (this.focusOffsets ?? new Float64Array(this.dist.length)).fill(NaN);
+      this.focusOfOffsets = focus;
+    }
+    return this.focusOffsets;
+  }
+
+  private focusOffsets: Float64Array | null = null;
+  private focusOfOffsets: SearchFocus | null = null;
 
   private markDirty(k: number): void {
     if (this.dirtyCount === this.dirty.length) this.dirty = growInt32(this.dirty);
@@ -311,25 +348,27 @@ function movesOf(grid: PlanGrid): Uint8Array {
   return moves;
 }
 
-const DI = [1, -1, 0, 0, 1, 1, -1, -1];
-const DJ = [0, 0, 1, -1, 1, -1, 1, -1];
-
+// Bit m of a cell's moves, m = 0..7: right, left, down, up, then the diagonals down-right, up-right,
+// down-left, up-left, each only when both orthogonal neighbours beside it are free. Straight-line code
+// per cell, without a closure or an inner loop: it runs once per grid over every cell, before the JIT
+// has optimised anything (docs/decisions/0160).
 function allowedMoves(grid: PlanGrid): Uint8Array {
   const { width, height, blocked } = grid;
   const out = new Uint8Array(width * height);
-  const free = (i: number, j: number) => i >= 0 && j >= 0 && i < width && j < height && !blocked[j * width + i];
   for (let j = 0; j < height; j++) {
     for (let i = 0; i < width; i++) {
-      if (blocked[j * width + i]) continue;
-      let mask = 0;
-      for (let m = 0; m < 8; m++) {
-        const vi = i + DI[m];
-        const vj = j + DJ[m];
-        if (!free(vi, vj)) continue;
-        if (m >= 4 && (!free(vi, j) || !free(i, vj))) continue;
-        mask |= 1 << m;
-      }
-      out[j * width + i] = mask;
+      const k = j * width + i;
+      if (blocked[k]) continue;
+      const right = i + 1 < width && !blocked[k + 1];
+      const left = i > 0 && !blocked[k - 1];
+      const down = j + 1 < height && !blocked[k + width];
+      const up = j > 0 && !blocked[k - width];
+      let mask = (right ? 1 : 0) | (left ? 2 : 0) | (down ? 4 : 0) | (up ? 8 : 0);
+      if (right && down && !blocked[k + width + 1]) mask |= 16;
+      if (right && up && !blocked[k - width + 1]) mask |= 32;
+      if (left && down && !blocked[k + width - 1]) mask |= 64;
+      if (left && up && !blocked[k - width - 1]) mask |= 128;
+      out[k] = mask;
     }
   }
   return out;

@@ -143,7 +143,8 @@ export function checkDelay(
   const top = Math.max(settings.maxS, settings.maxFactor * statedS);
   let best = { shift: statedS, ...stated };
   for (let s = 0; s <= top + 1e-9; s += settings.stepS) {
-    const m = misfitAt(s);
+    // the stated shift is often one of the trial shifts: its misfit is already known
+    const m = s === statedS ? stated : misfitAt(s);
     // a misfit carried by too little overlap says nothing
     if (m.weight >= settings.minPairWeight && m.misfit < best.misfit) best = { shift: s, ...m };
   }

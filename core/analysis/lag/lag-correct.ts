@@ -96,7 +96,7 @@ export function lagCorrect(
     const newPass = (taps[k].pass ?? null) !== (taps[k - 1].pass ?? null);
     // the route is asked for only when the gap alone could be a pause
     const paused =
-      gap > pauseS && gap - (walkSpeedMps !== undefined ? polylineLength(routeOf(k - 1)) / walkSpeedMps : 0) > pauseS;
+      gap > pauseS && gap - (walkSpeedMps !== undefined ? lengthOf(routeOf(k - 1)) / walkSpeedMps : 0) > pauseS;
     firstOf[k] = newPass || paused ? k : firstOf[k - 1];
   }
   const lastOf = new Int32Array(taps.length);
@@ -113,12 +113,13 @@ export function lagCorrect(
     const path = routeOf(j);
     const span = b.t - a.t;
     let f = span > 0 ? (s - a.t) / span : 0;
+    const length = lengthOf(path);
     if (walkSpeedMps !== undefined && span > 0) {
-      const walkS = Math.min(span, polylineLength(path) / walkSpeedMps);
+      const walkS = Math.min(span, length / walkSpeedMps);
       const leave = b.t - walkS;
       f = s <= leave ? 0 : walkS > 0 ? (s - leave) / walkS : 1;
     }
-    const [x, y] = alongPolyline(path, f);
+    const [x, y] = alongPolyline(path, f, length);
     return { x, y, beforeDelay: false, pathGap: Math.hypot(b.x - a.x, b.y - a.y) > maxStepM };
   });
 }
@@ -135,6 +136,19 @@ function lastTapAtOrBefore(taps: readonly Tap[], s: number): number {
   return lo;
 }
 
+// A remembered route hands out the same polyline for a leg every time, and the delay check corrects the
+// same walk for 33 trial shifts: each polyline's length is worked out once (docs/decisions/0160).
+const lengths = new WeakMap<readonly (readonly [number, number])[], number>();
+
+function lengthOf(points: readonly (readonly [number, number])[]): number {
+  let length = lengths.get(points);
+  if (length === undefined) {
+    length = polylineLength(points);
+    lengths.set(points, length);
+  }
+  return length;
+}
+
 function polylineLength(points: readonly (readonly [number, number])[]): number {
   let total = 0;
   for (let i = 1; i < points.length; i++)
@@ -142,10 +156,14 @@ function polylineLength(points: readonly (readonly [number, number])[]): number 
   return total;
 }
 
-/** The point a fraction f (0..1) of the way along a polyline, by arc length. */
-export function alongPolyline(points: readonly (readonly [number, number])[], f: number): [number, number] {
+/** The point a fraction f (0..1) of the way along a polyline, by arc length (`length`: the polyline's, when known). */
+export function alongPolyline(
+  points: readonly (readonly [number, number])[],
+  f: number,
+  length = polylineLength(points),
+): [number, number] {
   if (points.length === 1) return [points[0][0], points[0][1]];
-  let left = Math.max(0, Math.min(1, f)) * polylineLength(points);
+  let left = Math.max(0, Math.min(1, f)) * length;
   for (let i = 1; i < points.length; i++) {
     const [ax, ay] = points[i - 1];
     const [bx, by] = points[i];

@@ -45,4 +45,19 @@ describe("benign-zone stage", () => {
     expect(Array.from(zones.zoneOfReading).every((z) => z === -1)).toBe(true);
     expect(zones.nearest.every((z) => z === -1)).toBe(true);
   });
+
+  it("with no zone on the plan explains nothing and keeps no cell from a spot", () => {
+    const input = aisle([0, 0, 3, 8, 3, 0, 0, 0, 0, 0, 0, 0]);
+    const grid = gridOf(input);
+    const lag = lagStage(input.readings, input.instrument, grid, 0);
+    const zones = zonesStage([], 2, grid, null, lag, settings);
+    expect(zones.columns).toEqual([]);
+    expect(zones.active).toEqual([]);
+    expect(Array.from(zones.zoneOfReading)).toEqual(new Array(12).fill(-1));
+    expect(zones.inside.every((v) => v === 0)).toBe(true);
+    expect(zones.distance.every((d) => d === Infinity)).toBe(true);
+    expect(zones.nearest.every((z) => z === -1)).toBe(true);
+    // a zone's gas is fitted out to twice its screening length (12 m) plus the 1.5 m margin
+    expect(zones.reachM).toBe(25.5);
+  });
 });

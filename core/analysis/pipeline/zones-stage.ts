@@ -41,6 +41,9 @@ export function zonesStage(
   const n = y.length;
   const cells = grid.width * grid.height;
   const z0 = settings.zones;
+  // No zone on the plan (most plans): nothing to search or fit, on every delay an analysis tries
+  // (docs/decisions/0160). The same result as the general path below gives with no zone.
+  if (zones.length === 0) return noZones(n, cells, 2 * z0.screeningLengthM + z0.marginM);
   // a zone is a spread-out source whose gas drifts far, so it gets a longer kernel
   const kernel = createSourceKernel(z0.screeningLengthM, settings.nearCutoffM, 2 * z0.screeningLengthM + z0.marginM);
   const search = borrowSearch(grid, stepScale);
@@ -103,5 +106,19 @@ export function zonesStage(
     zoneOfReading,
     level,
     reachM: kernel.truncationM,
+  };
+}
+
+function noZones(readings: number, cells: number, reachM: number): ZonesResult {
+  return {
+    columns: [],
+    zoneOnlyQ: [],
+    active: [],
+    distance: new Float32Array(cells).fill(Infinity),
+    nearest: new Int32Array(cells).fill(-1),
+    inside: new Uint8Array(cells),
+    zoneOfReading: new Int32Array(readings).fill(-1),
+    level: [],
+    reachM,
   };
 }

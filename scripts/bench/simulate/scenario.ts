@@ -27,6 +27,15 @@ export interface World {
   random: Random;
   /** Stops the fans of one fixture: the technician from now on samples the air solved without them. */
   stopFans: (fixtureId: string) => void;
+  /** Each leak's own mean concentration at a point, ppm, at the strength it was given (diagnostic oracles only). */
+  leakAir: (x: number, y: number) => number[];
+  /**
+   * The physics for a diagnostic ceiling (scripts/bench/oracle-along-case.ts): the steady field of a unit
+   * leak at (x, y) in the sweep's air, as a sampler of the plan. Draws nothing from the random stream.
+   */
+  unitLeakAir: (x: number, y: number) => (px: number, py: number) => number;
+  /** The instrument's noise and the ambient level the probe sees, as drawn for this store. */
+  noise: { sigma: number; slowShare: number; slowCorrelationS: number; displayNoisePpm: number; ambientPpm: number };
 }
 
 export interface Scenario {
@@ -137,12 +146,14 @@ export function buildWorld(family: Family, key: number): World {
   const peaks: number[] = [];
   const total = new Float64Array(grid.nx * grid.ny);
   const scales: number[] = [];
+  const leakFields: Float64Array[] = [];
   for (const leak of leaks) {
     const g = solveFor(op, grid, [cellOf(grid, leak.x, leak.y)], iterations);
     // Strength is set by what the sweep could see, so every benchmark leak is findable in principle.
     const target = family === "single-still" ? logUniform(random, 5, 40) : logUniform(random, 3, 25);
     const scale = target / peakAlongLegs(layout, grid, g);
     for (let k = 0; k < total.length; k++) total[k] += scale * g[k];
+    leakFields.push(g.map((v) => scale * v));
     scales.push(scale);
     peaks.push(round(target));
   }
@@ -198,6 +209,7 @@ export function buildWorld(family: Family, key: number): World {
     random,
   );
   const speed = random.uniform(0.7, 1.2);
+  const ambientPpm = random.uniform(0, 0.6);
   let samplesInSolid = 0; // probe positions on a solid cell: should stay zero (a routing fault otherwise)
   const tech = new Technician(
     {
@@ -216,7 +228,7 @@ export function buildWorld(family: Family, key: number): World {
       if (grid.solid[cellOf(grid, x, y)]) samplesInSolid++;
       return sampleField(grid, air, x, y);
     },
-    random.uniform(0, 0.6),
+    ambientPpm,
     random,
     layout,
     layout.legs[0].points[0],
@@ -244,6 +256,12 @@ export function buildWorld(family: Family, key: number): World {
     samplesInSolid: () => samplesInSolid,
     random,
     stopFans,
+    leakAir: (x, y) => leakFields.map((f) => sampleField(grid, f, x, y)),
+    unitLeakAir: (x, y) => {
+      const g = solveFor(op, grid, [cellOf(grid, x, y)], []);
+      return (px, py) => sampleField(grid, g, px, py);
+    },
+    noise: { ...sensor.noise, ambientPpm },
   };
 }
 

@@ -46,6 +46,12 @@ export class Sensor {
     this.gain = 1 - Math.exp(-dt / timeConstantS);
   }
 
+  /** The noise settings as drawn (for a diagnostic ceiling that knows the physics). */
+  get noise(): { sigma: number; slowShare: number; slowCorrelationS: number; displayNoisePpm: number } {
+    const { sigma, slowShare, slowCorrelationS, displayNoisePpm } = this.settings;
+    return { sigma, slowShare, slowCorrelationS, displayNoisePpm };
+  }
+
   /** The multiplier applied to the air's mean concentration at this instant (mean 1). */
   private fluctuation(): number {
     const { dt, sigma, slowShare, slowCorrelationS } = this.settings;
