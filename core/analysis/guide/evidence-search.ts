@@ -188,7 +188,7 @@ export function weighSites(
       amplitude: fits[i].amplitude,
       rank: 1,
       fixtureId: s.fixtureId,
-      ...(shape ? { shape: (dx: number, dy: number) => shape.at(Math.hypot(dx, dy), dx, dy) } : {}),
+      ...(shape ? { shape: (dx: number, dy: number) => shape.at(Math.hypot(dx, dy), dx, dy), drift: shape.a } : {}),
     };
   });
 }
@@ -241,6 +241,12 @@ export const ALARM_REACH_M = 3;
 const EVIDENCE_REACH_M = 3;
 /** Rooms (walk-ins, machine rooms) are searched this much farther out than cases (m; tried on stores 6001-6010). */
 const ROOM_EXTRA_M = 2;
+/** How many times a stronger reading near the strongest one moves the search on (each at most 6 m; tried on stores 6001-6010). */
+const STRONGEST_HOPS = 3;
+/** How far upwind of the strongest reading the search's next disc is centred (m; its reach is ALARM_REACH_M). */
+const UPWIND_M = 3;
+/** The readings' rise says a way once the strongest reading lies this far from the alarm (m). */
+const RISE_MIN_M = 1.5;
 /** A probe place this close to a place already read is not offered again (m). */
 const READ_WITHIN_M = 0.3;
 
@@ -269,22 +275,39 @@ export function searchAroundAlarm(args: {
   also?: readonly { x: number; y: number; reach: number }[];
   /** The drifts a case site may take (drift-kernels.ts driftChoiceFor); none = a plain kernel. */
   drift?: DriftChoice;
+  /** Reach on upwind of the strongest reading too (upwindOf; decision 0162; the live guide does). */
+  upwind?: boolean;
 }): AlarmSearch {
   const { plan, origin, alarm, evidence, read, from, kernel } = args;
   const centre = { x: (origin.x + alarm.x) / 2, y: (origin.y + alarm.y) / 2 };
   const reach = Math.hypot(alarm.x - origin.x, alarm.y - origin.y) / 2 + ALARM_REACH_M;
   // Readings farther out than a plume carries say nothing about these sites.
-  const near = evidence.filter((r) => Math.hypot(r.x - centre.x, r.y - centre.y) <= reach + EVIDENCE_REACH_M);
+  const nearTo = (ds: readonly Disc[]) =>
+    evidence.filter((r) => ds.some((d) => Math.hypot(r.x - d.at.x, r.y - d.at.y) <= d.reach + EVIDENCE_REACH_M));
   // Where the gas is strongest so far, the search reaches on past the stretch: a plume mixed along
-  // a case reads alike for metres, and its source may lie beyond.
-  const strongest = near.reduce<EvidenceReading | null>((a, r) => (!a || r.ppm > a.ppm ? r : a), null);
-  const discs = [{ at: centre, reach }];
+  // a case reads alike for metres, and its source may lie beyond. A stronger reading around it moves
+  // it on, so the search follows the readings' rise (decision 0162).
+  let strongest = strongestOf(nearTo([{ at: centre, reach }]));
+  for (let hop = 0; strongest && hop < STRONGEST_HOPS; hop++) {
+    const next = strongestOf(nearTo([{ at: strongest, reach: ALARM_REACH_M }]));
+    if (!next || next.ppm <= strongest.ppm) break;
+    strongest = next;
+  }
+  const discs: Disc[] = [{ at: centre, reach }];
   if (strongest) discs.push({ at: strongest, reach: ALARM_REACH_M });
+  let near = nearTo(discs);
   for (const a of args.also ?? []) discs.push({ at: a, reach: a.reach });
   // A room's gas leaves by its door and spreads along the corridor: rooms count from farther off.
-  const sites = unique(discs.flatMap((d) => leakSites(plan, d.at, d.reach, d.reach + ROOM_EXTRA_M)));
+  const sitesOf = (ds: readonly Disc[]) =>
+    unique(ds.flatMap((d) => leakSites(plan, d.at, d.reach, d.reach + ROOM_EXTRA_M)));
   const rooms = new Set(plan.fixtures.filter((f) => ROOMS.has(f.kind)).map((f) => f.id));
-  const hypotheses = weighSites(sites, near, backgroundOf(near), kernel, 0.5, args.drift, rooms);
+  let hypotheses = weighSites(sitesOf(discs), near, backgroundOf(near), kernel, 0.5, args.drift, rooms);
+  const ahead = args.upwind && strongest ? upwindOf(hypotheses, centre, strongest) : null;
+  if (ahead) {
+    discs.push({ at: ahead, reach: ALARM_REACH_M });
+    near = nearTo(discs);
+    hypotheses = weighSites(sitesOf(discs), near, backgroundOf(near), kernel, 0.5, args.drift, rooms);
+  }
   const places = unique(discs.flatMap((d) => probePlaces(plan, d.at, d.reach, 0.6, d.reach + ROOM_EXTRA_M))).filter(
     (p) => !read.some((r) => Math.hypot(r.x - p.x, r.y - p.y) < READ_WITHIN_M),
   );
@@ -292,6 +315,31 @@ export function searchAroundAlarm(args: {
     mark: provisionalMark(hypotheses),
     probes: evidenceProbes(hypotheses, places, kernel, from, args.n ?? 3),
   };
+}
+
+interface Disc {
+  at: { x: number; y: number };
+  reach: number;
+}
+
+const strongestOf = (rs: readonly EvidenceReading[]) =>
+  rs.reduce<EvidenceReading | null>((a, r) => (!a || r.ppm > a.ppm ? r : a), null);
+
+/**
+ * Where the search reaches on upwind of the strongest reading (decision 0162): UPWIND_M against the
+ * likeliest site's drift when it took one, else on along the way the readings rose from the alarm to
+ * the strongest one when that lies RISE_MIN_M or more from the alarm; null when neither says a way.
+ */
+function upwindOf(
+  hypotheses: readonly Hypothesis[],
+  centre: { x: number; y: number },
+  strongest: { x: number; y: number },
+): { x: number; y: number } | null {
+  const lead = hypotheses.reduce<Hypothesis | null>((a, h) => (!a || h.weight > a.weight ? h : a), null);
+  const [dx, dy] = lead?.drift ? [-lead.drift[0], -lead.drift[1]] : [strongest.x - centre.x, strongest.y - centre.y];
+  const length = Math.hypot(dx, dy);
+  if (length === 0 || (!lead?.drift && length < RISE_MIN_M)) return null;
+  return { x: strongest.x + (dx / length) * UPWIND_M, y: strongest.y + (dy / length) * UPWIND_M };
 }
 
 /** The same place found from two discs once. */

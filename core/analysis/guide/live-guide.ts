@@ -172,6 +172,7 @@ function alarmSearch(window: EvidenceWindow, corrected: CorrectedReading[], from
     kernel,
     n,
     drift: driftChoiceFor(window.input.plan),
+    upwind: true,
   });
 }
 

@@ -13,6 +13,8 @@ export interface Hypothesis {
   fixtureId: string | null;
   /** The kernel g at displacement (dx, dy) from the site when a drift carries its gas (evidence-search.ts); else the plain kernel. */
   shape?: (dx: number, dy: number) => number;
+  /** That drift, a = u/(2K) (1/m), pointing downwind. */
+  drift?: readonly [number, number];
 }
 
 /** Why a probe place was chosen, as facts; the words are the presenter's. */

@@ -29,6 +29,8 @@ const SETTLED_SHARE = Number(process.env.GUIDE_SETTLED_SHARE ?? 0.5);
 const WINDOW_M = 8;
 /** `GUIDE_DRIFT=off` weighs every site with the plain kernel; `GUIDE_DRIFT_PENALTY` sets a drift's bar (exploring only). */
 const DRIFT_OFF = process.env.GUIDE_DRIFT === "off";
+/** `GUIDE_UPWIND=off` keeps the search from reaching on upwind of the strongest reading (decision 0162; for comparison). */
+const UPWIND_OFF = process.env.GUIDE_UPWIND === "off";
 const DRIFT_BAR = Number(process.env.GUIDE_DRIFT_PENALTY ?? DRIFT_PENALTY);
 /** Probes around the alarm that never reach the alarm before it counts as a wisp. */
 const ORIGIN_PROBES = 4;
@@ -81,6 +83,7 @@ export function guidedView(
     kernel,
     also: first ? [{ x: first.x, y: first.y, reach: first.radius / 2 }] : [],
     drift: DRIFT_OFF ? undefined : driftChoiceFor(input.plan, DRIFT_BAR),
+    upwind: !UPWIND_OFF,
   });
   // Marked once a re-check has reached the alarm, as the trade rule marks only a peak at the alarm.
   const mark = confirmed && search.mark ? { x: search.mark.x, y: search.mark.y, share: search.mark.share } : null;
