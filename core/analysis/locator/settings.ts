@@ -122,6 +122,13 @@ export interface PlacementSettings {
    * its cell's centre (at-fitting.ts): the prior's 0.5 m plus half a 0.25 m cell; 0 = off.
    */
   readonly fittingReachM: number;
+  /**
+   * Where most display cases run their fans, the spots after the first come from a second fit whose
+   * geodesic steps inside each such case count this share of their length (case-unit-scale.ts,
+   * decision 0157): the fans mix the case, so a second leak is placed on its case, not on the plume's
+   * downwind stretch. The first spot stays the plain fit's. 0 = off.
+   */
+  readonly laterSpotsCaseScale: number;
 }
 
 export interface ReportSettings {
@@ -193,6 +200,7 @@ export const LOCATOR_SETTINGS: LocatorSettings = {
     stillFirstByPeak: true,
     toCaseBack: true,
     fittingReachM: 0.625,
+    laterSpotsCaseScale: 0.5,
   },
   report: {
     coverageGapM: 3,
