@@ -7,7 +7,7 @@ import { join } from "node:path";
 import { pointInPolygon } from "#core/analysis/geometry/point-in-polygon";
 import type { Polygon, Vec } from "#core/analysis/geometry/types";
 import { locate } from "#core/analysis/locate";
-import { LOCATOR_SETTINGS, type LocatorSettings } from "#core/analysis/locator/settings";
+import { settingsWith } from "./settings-override";
 import { parseLocatorInput } from "#core/contracts/locator-input";
 
 const args = process.argv.slice(2);
@@ -16,16 +16,10 @@ const take = (flag: string) => {
   return i >= 0 ? args.splice(i, 2)[1] : undefined;
 };
 const scale = Number(take("--delay-scale") ?? "1");
-const overrides = JSON.parse(take("--settings") ?? "{}");
+const settingsJson = take("--settings");
 const [dir, ...families] = args;
 
-const merge = (a: unknown, b: unknown): unknown =>
-  b && typeof b === "object" && !Array.isArray(b) && a && typeof a === "object"
-    ? Object.fromEntries(
-        Object.entries(a as object).map(([k, v]) => [k, k in (b as object) ? merge(v, (b as never)[k]) : v]),
-      )
-    : (b ?? a);
-const settings = merge(LOCATOR_SETTINGS, overrides) as LocatorSettings;
+const settings = settingsWith(settingsJson);
 
 interface Fixture {
   id: string;

@@ -11,7 +11,7 @@ import { createPlanGrid } from "#core/analysis/grid/plan-grid";
 import { locate } from "#core/analysis/locate";
 import { readingAir } from "#core/analysis/locator/pass-air";
 import { casesRunFans, fanStepScale } from "#core/analysis/locator/plan-masks";
-import { LOCATOR_SETTINGS, type LocatorSettings } from "#core/analysis/locator/settings";
+import { settingsWith } from "./settings-override";
 import { residualOf } from "#core/analysis/locator/greedy-sources";
 import { fieldStage } from "#core/analysis/pipeline/field-stage";
 import { lagStage } from "#core/analysis/pipeline/lag-stage";
@@ -28,17 +28,11 @@ const take = (flag: string) => {
   return i >= 0 ? args.splice(i, 2)[1] : undefined;
 };
 const all = args.includes("--all") ? (args.splice(args.indexOf("--all"), 1), true) : false;
-const overrides = JSON.parse(take("--settings") ?? "{}");
+const settingsJson = take("--settings");
 const [dir, firstArg, lastArg] = args;
 const first = Number(firstArg ?? 1001);
 const last = Number(lastArg ?? 1030);
-const merge = (a: unknown, b: unknown): unknown =>
-  b && typeof b === "object" && !Array.isArray(b) && a && typeof a === "object"
-    ? Object.fromEntries(
-        Object.entries(a as object).map(([k, v]) => [k, k in (b as object) ? merge(v, (b as never)[k]) : v]),
-      )
-    : (b ?? a);
-const settings = merge(LOCATOR_SETTINGS, overrides) as LocatorSettings;
+const settings = settingsWith(settingsJson);
 
 type P = { x: number; y: number };
 const dist = (a: P, b: P) => Math.hypot(a.x - b.x, a.y - b.y);
