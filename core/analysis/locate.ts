@@ -1,16 +1,15 @@
 import { gridCellCount, LocatorInputError, MAX_GRID_CELLS, type LocatorInput } from "../contracts/locator-input";
 import type { DelayFacts, LocatorResult } from "../contracts/locator-output";
-import { cellIndexOf, createPlanGrid } from "./grid/plan-grid";
+import { createPlanGrid } from "./grid/plan-grid";
 import { DEFAULT_LOCATOR_OPTIONS, type LocatorOptions } from "./locator/locator-options";
-import { caseUnitStepScale } from "./locator/case-unit-scale";
 import { readingAir } from "./locator/pass-air";
-import { casesRunFans, fanRoomsScale, fanStepScale } from "./locator/plan-masks";
+import { casesRunFans, fanStepScale } from "./locator/plan-masks";
 import { LOCATOR_SETTINGS, type LocatorSettings } from "./locator/settings";
 import { delayDiagnostics, delayStage } from "./pipeline/delay-stage";
 import { diagnosticsStage } from "./pipeline/diagnostics-stage";
 import { fieldStage, type OtherAir } from "./pipeline/field-stage";
 import { lagStage } from "./pipeline/lag-stage";
-import { withLaterSpots } from "./pipeline/later-spots";
+import { laterSpotsStage } from "./pipeline/later-spots";
 import { oneReadingSource } from "./pipeline/one-reading";
 import { passFitOf } from "./pipeline/pass-fit";
 import { placementStage } from "./pipeline/placement-stage";
@@ -145,32 +144,19 @@ export function locate(
       run = { ...run, sources, placement: placementStage(plan, grid, run.lag, run.field, sources, rule, settings) };
     }
   }
-  // Where the display cases run their fans, the spots after the first take turns between this fit and
-  // one that reads each case as one mixed unit (decision 0157); not with pinpoint passes, whose air the
-  // joint fit models.
-  const caseScale = settings.placement.laterSpotsCaseScale;
-  const first = run.placement.candidates[0];
-  // Nor when the first spot lies in a fan-stirred room: the room's next fitting follows it as its
-  // alternative (placement-stage.ts). A mirror across a one-sided pass gives way to the later spots; the
-  // first spot's own next checks still say to walk the other face.
-  const rooms = fanRoomsScale(grid, plan, 0.5);
-  const firstInRoom = first !== undefined && rooms !== null && rooms[cellIndexOf(grid, first.x, first.y)] < 1;
-  if (
-    caseScale > 0 &&
-    !other &&
-    first &&
-    !firstInRoom &&
-    !run.sources.found[0]?.oneReading &&
-    casesRunFans(plan.fixtures)
-  ) {
-    const unitScale = caseUnitStepScale(grid, plan, stepScale, caseScale);
-    if (unitScale) {
-      const later = stages({ lag: run.lag, zones: run.zones }, unitScale).placement.candidates;
-      const s = settings.sources;
-      const candidates = withLaterSpots(first, later, s.separationM, s.maxCandidates, run.placement.candidates);
-      run = { ...run, placement: { ...run.placement, candidates } };
-    }
-  }
+  // Where the display cases run their fans, the spots after the first take turns with a fit that
+  // reads each case as one mixed unit (decision 0157).
+  const candidates = laterSpotsStage({
+    plan,
+    grid,
+    stepScale,
+    settings,
+    plain: run.placement.candidates,
+    passes: other !== null,
+    oneReading: run.sources.found[0]?.oneReading === true,
+    rerun: (unitScale) => stages({ lag: run.lag, zones: run.zones }, unitScale).placement.candidates,
+  });
+  if (candidates) run = { ...run, placement: { ...run.placement, candidates } };
   const { lag, zones, field, sources, placement } = run;
   const report = diagnosticsStage(input, grid, lag, zones, field, sources, placement, usedS, settings, air);
   const delay: DelayFacts = {

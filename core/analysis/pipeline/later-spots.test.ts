@@ -1,6 +1,8 @@
 import { describe, expect, it } from "vitest";
 import type { SuspectSpotFacts } from "../../contracts/locator-output";
-import { withLaterSpots } from "./later-spots";
+import { createPlanGrid } from "../grid/plan-grid";
+import { LOCATOR_SETTINGS } from "../locator/settings";
+import { laterSpotsStage, withLaterSpots } from "./later-spots";
 
 const spot = (x: number, y: number, score: number, molPerYear: number): SuspectSpotFacts => ({
   rank: 1,
@@ -52,5 +54,57 @@ describe("the first spot, then the case-unit fit's later spots", () => {
     const later = [spot(12, 0, 0.8, 2), spot(5.5, 0, 0.6, 1), spot(30, 0, 0.3, 1)];
     const out = withLaterSpots(first, later, 2, 5, plain);
     expect(out.map((s) => s.x)).toEqual([0, 12, 5, 20, 30]);
+  });
+});
+
+describe("when the case-unit fit runs", () => {
+  const square = (x0: number, y0: number, x1: number, y1: number) => [
+    [x0, y0],
+    [x1, y0],
+    [x1, y1],
+    [x0, y1],
+  ];
+  const grid = createPlanGrid(12, 8, 0.25, []);
+  const plan = {
+    width: 12,
+    height: 8,
+    fixtures: [
+      { id: "case", kind: "open-case", polygon: square(1, 1, 5, 2), fans: true },
+      { id: "room", kind: "walk-in", polygon: square(7, 4, 11, 7), fans: true },
+    ],
+    backgroundZones: [],
+  } as never;
+  const stage = (first: SuspectSpotFacts, extra: { passes?: boolean; oneReading?: boolean } = {}) => {
+    const asked: Float32Array[] = [];
+    const out = laterSpotsStage({
+      plan,
+      grid,
+      stepScale: null,
+      settings: LOCATOR_SETTINGS,
+      plain: [first, spot(6, 3.5, 0.5, 1)],
+      passes: extra.passes ?? false,
+      oneReading: extra.oneReading ?? false,
+      rerun: (scale) => {
+        asked.push(scale);
+        return [spot(10, 1, 0.6, 2)];
+      },
+    });
+    return { out, asked };
+  };
+
+  it("where the cases run their fans: the plain first spot, then turns with the case-unit fit's", () => {
+    const { out, asked } = stage(spot(2, 1.5, 0.8, 4));
+    expect(out?.map((s) => [s.x, s.y])).toEqual([
+      [2, 1.5],
+      [10, 1],
+      [6, 3.5],
+    ]);
+    expect(asked).toHaveLength(1);
+  });
+
+  it("leaves the plain list with pinpoint passes, a one-reading spot, or a first spot in a fan-stirred room", () => {
+    expect(stage(spot(2, 1.5, 0.8, 4), { passes: true })).toEqual({ out: null, asked: [] });
+    expect(stage(spot(2, 1.5, 0.8, 4), { oneReading: true })).toEqual({ out: null, asked: [] });
+    expect(stage(spot(9, 5.5, 0.8, 4))).toEqual({ out: null, asked: [] });
   });
 });

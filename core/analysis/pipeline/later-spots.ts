@@ -1,4 +1,40 @@
+import type { LocatorInput } from "../../contracts/locator-input";
 import type { SuspectSpotFacts } from "../../contracts/locator-output";
+import { cellIndexOf, type PlanGrid } from "../grid/plan-grid";
+import { caseUnitStepScale } from "../locator/case-unit-scale";
+import { casesRunFans, fanRoomsScale } from "../locator/plan-masks";
+import type { LocatorSettings } from "../locator/settings";
+
+/**
+ * The list of spots where most display cases run their fans (decision 0157): the plain fit's first,
+ * then turns between its later spots and those of a second run whose field reads each case as one
+ * mixed unit (`rerun` with that step scale). Null, and the plain list stands, with pinpoint passes
+ * (their air the joint fit models), without a first spot, for a one-reading spot, or when the first
+ * spot lies in a fan-stirred room: its room's next fitting follows it there as its alternative
+ * (placement-stage.ts). A mirror across a one-sided pass gives way to the later spots; the first
+ * spot's own next checks still say to walk the other face.
+ */
+export function laterSpotsStage(args: {
+  plan: LocatorInput["plan"];
+  grid: PlanGrid;
+  stepScale: Float32Array | null;
+  settings: LocatorSettings;
+  plain: readonly SuspectSpotFacts[];
+  passes: boolean;
+  oneReading: boolean;
+  rerun: (fieldScale: Float32Array) => readonly SuspectSpotFacts[];
+}): SuspectSpotFacts[] | null {
+  const { plan, grid, settings, plain } = args;
+  const caseScale = settings.placement.laterSpotsCaseScale;
+  const first = plain[0];
+  if (!(caseScale > 0) || args.passes || !first || args.oneReading || !casesRunFans(plan.fixtures)) return null;
+  const rooms = fanRoomsScale(grid, plan, 0.5);
+  if (rooms !== null && rooms[cellIndexOf(grid, first.x, first.y)] < 1) return null;
+  const unitScale = caseUnitStepScale(grid, plan, args.stepScale, caseScale);
+  if (!unitScale) return null;
+  const s = settings.sources;
+  return withLaterSpots(first, args.rerun(unitScale), s.separationM, s.maxCandidates, plain);
+}
 
 /**
  * The first spot of the plain fit, then the spots of a second fit (the case-unit kernel, decision 0157)
