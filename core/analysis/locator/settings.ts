@@ -123,10 +123,10 @@ export interface PlacementSettings {
    */
   readonly fittingReachM: number;
   /**
-   * Where most display cases run their fans, the spots after the first come from a second fit whose
-   * geodesic steps inside each such case count this share of their length (case-unit-scale.ts,
-   * decision 0157): the fans mix the case, so a second leak is placed on its case, not on the plume's
-   * downwind stretch. The first spot stays the plain fit's. 0 = off.
+   * Where most display cases run their fans, the spots after the first take turns with those of a
+   * second fit whose geodesic steps inside each such case count this share of their length
+   * (case-unit-scale.ts, later-spots.ts, decision 0157): the fans mix the case, so a second leak is
+   * placed on its case, not on the plume's downwind stretch. The first spot stays the plain fit's. 0 = off.
    */
   readonly laterSpotsCaseScale: number;
 }
