@@ -6,6 +6,7 @@ import { companies, complianceAudit, systemRevisions, systems, users } from "../
 import { compareDates, type IsoDate } from "#core/domain/dates/calendar-date";
 import { badRequest } from "../../lib/http-error";
 import { eventDay } from "../findings/findings.service";
+import { rulesOfSettings } from "../compliance/system-records";
 import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { designationOf } from "#core/domain/refrigerants/types";
 import { formatRecordMass } from "#core/domain/units/format-units";
@@ -77,7 +78,17 @@ export async function addRevision(
     automaticLeakDetection: system.automaticLeakDetection,
     inServiceOn: system.inServiceOn ?? effectiveFrom,
   };
-  const choice = await companyGwpBases(ctx, viewer.companyId);
+  // One read of the company's row: its rules for the refrigerant choice, its units for the audit's words.
+  const [company] = await ctx.db
+    .select({
+      ruleProfile: companies.ruleProfile,
+      method: companies.leakRateMethod,
+      number: companies.numberFormat,
+      mass: companies.massUnit,
+    })
+    .from(companies)
+    .where(eq(companies.id, viewer.companyId));
+  const choice = await companyGwpBases(ctx, viewer.companyId, await rulesOfSettings(ctx, viewer.companyId, company));
   const named = (id: string) => {
     const r = choice.lookup(id);
     return r ? designationOf(r) : id;
@@ -104,10 +115,6 @@ export async function addRevision(
     throw badRequest("Please check: the system must be in service on the day the revision takes effect.", {
       effectiveFrom: `must be on or after the in-service day ${facts.inServiceOn}`,
     });
-  const [company] = await ctx.db
-    .select({ mass: companies.massUnit, number: companies.numberFormat })
-    .from(companies)
-    .where(eq(companies.id, viewer.companyId));
   const mass = (kg: number) => formatRecordMass(kg, company?.mass ?? "kg", company?.number);
   const updated = await ctx.db.transaction(async (tx) => {
     if (newRefrigerant) await holdRefrigerant(tx, viewer.companyId, facts.refrigerantId);
