@@ -1,6 +1,6 @@
 import type { LaggedPosition, Route, Tap } from "./lag-correct";
 import { rememberedByTap } from "./remembered-route";
-import { walkLag } from "./walk-lag";
+import { walkLagCorrector } from "./walk-lag";
 
 /**
  * The delay checked against the readings. A wrong delay moves the readings of passes in opposite
@@ -101,8 +101,10 @@ export function checkDelay(
   const cachedRoute: Route | undefined = route ? rememberedByTap(route) : undefined;
   const r2 = 2 * settings.radiusM * settings.radiusM;
   const cut2 = 9 * settings.radiusM * settings.radiusM;
+  // the walk is cut and its legs routed once for every trial shift (docs/decisions/0163)
+  const lagOf = walkLagCorrector(readings, cachedRoute, walkSpeedMps);
   const misfitAt = (shift: number): { misfit: number; weight: number } => {
-    const p: LaggedPosition[] = walkLag(readings, shift, 0, cachedRoute, walkSpeedMps);
+    const p: LaggedPosition[] = lagOf(shift, 0);
     // readings in square buckets as wide as the closeness cut-off, so each raised reading meets only
     // its neighbours (the pairs and their order are those of a full scan over j)
     const size = Math.sqrt(cut2);

@@ -1,7 +1,7 @@
 import type { Polygon } from "../geometry/types";
 import { createPlanGrid } from "../grid/plan-grid";
 import { gridRoute } from "./grid-route";
-import { lagCorrect, type LaggedPosition, type Route, type Tap } from "./lag-correct";
+import { lagCorrect, lagCorrector, type LaggedPosition, type Route, type Tap } from "./lag-correct";
 
 // The one lag correction of a walk, used by the server's locator (locate.ts, step 1) and by the
 // Walk screen's lag hint, so the hint marks the very point the field map will use. Pure TypeScript.
@@ -19,6 +19,18 @@ export function walkLag(
   walkSpeedMps: number | undefined,
 ): LaggedPosition[] {
   return lagCorrect(taps, delayS, timeConstantS, {
+    route,
+    walkSpeedMps: walkSpeedMps !== undefined && walkSpeedMps > 0 ? walkSpeedMps : undefined,
+  });
+}
+
+/** walkLag for many shifts of the same walk (the delay check's trial shifts): the same positions. */
+export function walkLagCorrector(
+  taps: readonly Tap[],
+  route: Route | undefined,
+  walkSpeedMps: number | undefined,
+): (delayS: number, timeConstantS: number) => LaggedPosition[] {
+  return lagCorrector(taps, {
     route,
     walkSpeedMps: walkSpeedMps !== undefined && walkSpeedMps > 0 ? walkSpeedMps : undefined,
   });
