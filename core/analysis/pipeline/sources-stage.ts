@@ -83,14 +83,18 @@ export function outsideFanRooms(allowed: Uint8Array, grid: PlanGrid, plan: Locat
 function allowedCells(
   grid: PlanGrid,
   zones: Pick<ZonesResult, "inside" | "distance">,
-  nearestReading: Float32Array,
+  fields: Pick<ReadingFields, "nearestReading" | "reach">,
   onEquipment: Uint8Array | null,
   zoneMarginM: number,
   maxReachM: number,
 ): Uint8Array {
   const cells = grid.width * grid.height;
   const allowed = new Uint8Array(cells);
-  for (let c = 0; c < cells; c++) {
+  const nearestReading = fields.nearestReading;
+  // a retry screen's field reaches the rows of its circle only: no cell elsewhere is within reach
+  const from = fields.reach?.from ?? 0;
+  const to = fields.reach?.to ?? cells;
+  for (let c = from; c < to; c++) {
     allowed[c] =
       !grid.blocked[c] &&
       !zones.inside[c] &&
@@ -119,7 +123,7 @@ export function sourcesStage(
   const allowed = allowedCells(
     grid,
     zones,
-    field.fields.nearestReading,
+    field.fields,
     equipmentMask(grid, plan, s.equipmentMarginM),
     settings.zoneMarginM,
     s.maxReachM,
