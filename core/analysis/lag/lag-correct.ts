@@ -85,6 +85,41 @@ export function lagCorrector(
   taps: readonly Tap[],
   options: LagOptions = {},
 ): (delayS: number, timeConstantS: number) => LaggedPosition[] {
+  const into = lagCorrectorInto(taps, options);
+  const n = taps.length;
+  return (delayS, timeConstantS) => {
+    const out = {
+      xs: new Float64Array(n),
+      ys: new Float64Array(n),
+      beforeDelay: new Uint8Array(n),
+      pathGap: new Uint8Array(n),
+    };
+    into(delayS, timeConstantS, out);
+    return Array.from({ length: n }, (_, k) => ({
+      x: out.xs[k],
+      y: out.ys[k],
+      beforeDelay: out.beforeDelay[k] === 1,
+      pathGap: out.pathGap[k] === 1,
+    }));
+  };
+}
+
+/** Lagged positions as arrays, one entry per tap (1 = true in the flags). */
+export interface LaggedArrays {
+  readonly xs: Float64Array;
+  readonly ys: Float64Array;
+  readonly beforeDelay: Uint8Array;
+  readonly pathGap: Uint8Array;
+}
+
+/**
+ * lagCorrector writing into arrays the caller keeps: the delay check's 33 trial shifts allocate no
+ * object or point per tap (docs/decisions/0163). The same numbers as lagCorrect.
+ */
+export function lagCorrectorInto(
+  taps: readonly Tap[],
+  options: LagOptions = {},
+): (delayS: number, timeConstantS: number, out: LaggedArrays) => void {
   const { route, maxStepM = 5, walkSpeedMps } = options;
   if (walkSpeedMps !== undefined && !(walkSpeedMps > 0))
     throw new Error(`walking speed must be positive, got ${walkSpeedMps} m/s`);
@@ -128,16 +163,29 @@ export function lagCorrector(
     }
     return walks;
   };
-  return (delayS, timeConstantS) => {
+  const point: [number, number] = [0, 0];
+  return (delayS, timeConstantS, out) => {
     checkShift(delayS, timeConstantS);
     const shift = delayS + timeConstantS;
     const { firstOf, lastOf } = walksOf(Math.max(NEW_WALK_PAUSE.minS, NEW_WALK_PAUSE.shifts * shift));
-    return taps.map((tap, k) => {
-      const s = tap.t - shift;
+    const { xs, ys, beforeDelay, pathGap } = out;
+    for (let k = 0; k < taps.length; k++) {
+      const s = taps[k].t - shift;
       const first = taps[firstOf[k]];
-      if (s < first.t) return { x: first.x, y: first.y, beforeDelay: true, pathGap: false };
+      beforeDelay[k] = 0;
+      pathGap[k] = 0;
+      if (s < first.t) {
+        xs[k] = first.x;
+        ys[k] = first.y;
+        beforeDelay[k] = 1;
+        continue;
+      }
       const j = Math.min(lastTapAtOrBefore(taps, s), lastOf[k]);
-      if (j >= lastOf[k]) return { x: taps[j].x, y: taps[j].y, beforeDelay: false, pathGap: false };
+      if (j >= lastOf[k]) {
+        xs[k] = taps[j].x;
+        ys[k] = taps[j].y;
+        continue;
+      }
       const a = taps[j];
       const b = taps[j + 1];
       const path = routeOf(j);
@@ -149,9 +197,11 @@ export function lagCorrector(
         const leave = b.t - walkS;
         f = s <= leave ? 0 : walkS > 0 ? (s - leave) / walkS : 1;
       }
-      const [x, y] = alongPolyline(path, f, length);
-      return { x, y, beforeDelay: false, pathGap: Math.hypot(b.x - a.x, b.y - a.y) > maxStepM };
-    });
+      pointAlong(path, f, length, point);
+      xs[k] = point[0];
+      ys[k] = point[1];
+      pathGap[k] = Math.hypot(b.x - a.x, b.y - a.y) > maxStepM ? 1 : 0;
+    }
   };
 }
 
@@ -193,18 +243,36 @@ export function alongPolyline(
   f: number,
   length = polylineLength(points),
 ): [number, number] {
-  if (points.length === 1) return [points[0][0], points[0][1]];
+  return pointAlong(points, f, length, [0, 0]);
+}
+
+/** alongPolyline into `out` (returned). */
+function pointAlong(
+  points: readonly (readonly [number, number])[],
+  f: number,
+  length: number,
+  out: [number, number],
+): [number, number] {
+  if (points.length === 1) {
+    out[0] = points[0][0];
+    out[1] = points[0][1];
+    return out;
+  }
   let left = Math.max(0, Math.min(1, f)) * length;
   for (let i = 1; i < points.length; i++) {
-    const [ax, ay] = points[i - 1];
-    const [bx, by] = points[i];
-    const len = Math.hypot(bx - ax, by - ay);
+    const a = points[i - 1];
+    const b = points[i];
+    const len = Math.hypot(b[0] - a[0], b[1] - a[1]);
     if (left <= len || i === points.length - 1) {
       const g = len > 0 ? Math.min(1, left / len) : 0;
-      return [ax + g * (bx - ax), ay + g * (by - ay)];
+      out[0] = a[0] + g * (b[0] - a[0]);
+      out[1] = a[1] + g * (b[1] - a[1]);
+      return out;
     }
     left -= len;
   }
   const last = points[points.length - 1];
-  return [last[0], last[1]];
+  out[0] = last[0];
+  out[1] = last[1];
+  return out;
 }
