@@ -64,14 +64,16 @@ export function supportRule(
 }
 
 /**
- * The allowed cells minus walk-ins and machine rooms whose fans run: their fans mix the room, so a
- * drift inside says nothing and only lets a spot there explain readings outside (no drift is fitted).
+ * The allowed cells (1, else 0) minus walk-ins and machine rooms whose fans run: their fans mix the room,
+ * so a drift inside says nothing and only lets a spot there explain readings outside (no drift is fitted).
  */
 export function outsideFanRooms(allowed: Uint8Array, grid: PlanGrid, plan: LocatorInput["plan"]): Uint8Array {
   const rooms = fanRoomsScale(grid, plan, 0.5);
   if (!rooms) return allowed;
   const out = new Uint8Array(allowed);
-  for (let c = 0; c < out.length; c++) if (rooms[c] < 1) out[c] = 0;
+  // only the allowed cells' span can lose one (a retry screen's is its circle's; decision 0163)
+  const to = allowed.lastIndexOf(1) + 1;
+  for (let c = Math.max(0, allowed.indexOf(1)); c < to; c++) if (rooms[c] < 1) out[c] = 0;
   return out;
 }
 
