@@ -203,7 +203,12 @@ export function TodayView({
               },
               {
                 header: "Status",
-                cell: (r) => (r.status === "verified" ? "verified, ready to close" : r.status),
+                cell: (r) =>
+                  r.systemRetiredOn
+                    ? `${r.status}; the system left service on ${formatCalendarDay(r.systemRetiredOn)}: to be closed`
+                    : r.status === "verified"
+                      ? "verified, ready to close"
+                      : r.status,
                 filterValue: (r) => r.status,
               },
               { header: "Store", cell: (r) => r.storeName },

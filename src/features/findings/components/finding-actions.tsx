@@ -29,6 +29,13 @@ export function FindingActions({ finding, role, today }: { finding: FindingDetai
   const current = action && allowed.includes(action) ? action : (allowed[0] ?? null);
   if (!current) return null;
   const fields = serverFieldErrors(m.error);
+  // Once the system has left service, its closing is dated on or after that day and every other step by then.
+  const retiredOn = finding.systemRetiredOn;
+  const pick = (a: FindingAction) => {
+    setAction(a);
+    if (retiredOn && a !== "close-left-service" && on > retiredOn) setOn(retiredOn);
+    if (retiredOn && a === "close-left-service" && on < retiredOn) setOn(today);
+  };
   const submit = (e: FormEvent) => {
     e.preventDefault();
     const base = { on, note };
@@ -57,7 +64,7 @@ export function FindingActions({ finding, role, today }: { finding: FindingDetai
             key={a}
             variant={a === current ? "primary" : "secondary"}
             aria-pressed={a === current}
-            onClick={() => setAction(a)}
+            onClick={() => pick(a)}
           >
             {ACTION_LABELS[a]}
           </Button>
@@ -67,7 +74,8 @@ export function FindingActions({ finding, role, today }: { finding: FindingDetai
         <TextField
           label="Date"
           type="date"
-          max={today}
+          max={retiredOn && current !== "close-left-service" && retiredOn < today ? retiredOn : today}
+          min={retiredOn && current === "close-left-service" ? retiredOn : undefined}
           value={on}
           onChange={(e) => setOn(e.target.value)}
           error={fields.on}
