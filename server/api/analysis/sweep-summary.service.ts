@@ -6,7 +6,7 @@
 import { and, count, desc, eq, inArray, max, ne, sql } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import type { SweepSummaryItem } from "#core/contracts/sweep-summary";
-import { analyses, findingEvents, findings, readings, sweeps, users } from "../../db/schema/index";
+import { analyses, findings, readings, sweeps, users } from "../../db/schema/index";
 import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { sweepParams } from "./analysis.service";
 import { paramsKey } from "./analysis-inputs";
@@ -14,7 +14,7 @@ import { paramsKey } from "./analysis-inputs";
 export const SWEEP_SUMMARY_COUNT = 8;
 const CONFIRMED_OR_LATER = new Set(["confirmed", "repaired", "verified", "closed"]);
 // A finding closed because its system left service may never have been confirmed (docs/decisions/0166).
-const everConfirmed = sql<boolean>`exists (select 1 from ${findingEvents} where ${findingEvents.findingId} = ${findings.id} and ${findingEvents.kind} = 'confirmed')`;
+const everConfirmed = sql<boolean>`exists (select 1 from "finding_events" e where e."finding_id" = "findings"."id" and e."kind" = 'confirmed')`;
 
 export async function sweepSummary(ctx: AppContext, viewer: Viewer, storeId: string): Promise<SweepSummaryItem[]> {
   await loadVisibleStore(ctx, viewer, storeId);

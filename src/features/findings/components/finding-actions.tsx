@@ -34,7 +34,8 @@ export function FindingActions({ finding, role, today }: { finding: FindingDetai
   const pick = (a: FindingAction) => {
     setAction(a);
     if (retiredOn && a !== "close-left-service" && on > retiredOn) setOn(retiredOn);
-    if (retiredOn && a === "close-left-service" && on < retiredOn) setOn(today);
+    // The closing is recorded on the day it is done.
+    if (retiredOn && a === "close-left-service") setOn(today);
   };
   const submit = (e: FormEvent) => {
     e.preventDefault();
@@ -55,7 +56,7 @@ export function FindingActions({ finding, role, today }: { finding: FindingDetai
   };
   const message = formErrorMessage(m.error);
   return (
-    <form onSubmit={submit} aria-label="Next step" className="space-y-3 rounded-md bg-surface p-4 edge">
+    <form onSubmit={submit} noValidate aria-label="Next step" className="space-y-3 rounded-md bg-surface p-4 edge">
       <h2 className="text-lg font-bold">Next step</h2>
       {message ? <Alert tone="error">{message}</Alert> : null}
       <div className="flex flex-wrap gap-2" role="group" aria-label="Step">
@@ -73,6 +74,7 @@ export function FindingActions({ finding, role, today }: { finding: FindingDetai
       <div className="grid gap-3 sm:grid-cols-2">
         <TextField
           label="Date"
+          name="on"
           type="date"
           max={retiredOn && current !== "close-left-service" && retiredOn < today ? retiredOn : today}
           min={retiredOn && current === "close-left-service" ? retiredOn : undefined}
