@@ -4,6 +4,7 @@ import { createTestApp, type Agent, type TestApp, signInOnce } from "../../../te
 import { seedCompany } from "../../../tests/helpers/fixtures";
 import { binaryBody } from "../../../tests/helpers/binary-body";
 import { pdfText } from "../../../tests/helpers/pdf-text";
+import { unzip } from "../../../tests/helpers/unzip";
 import { addMonths } from "#core/domain/dates/calendar-date";
 import { localDateOf } from "#core/domain/dates/time-zone";
 import type { Role } from "#core/domain/roles";
@@ -195,6 +196,27 @@ describe("a finding closed because its system left service (docs/decisions/0166)
         [repairedOne, "closed"],
       ]),
     );
+
+    // The owner's archive keeps the step's kind and the audit row as stored (docs/decisions/0046).
+    const zip = await (await signedIn("owner")).agent
+      .get("/api/company/records-archive.zip")
+      .buffer(true)
+      .parse(binaryBody);
+    expect(zip.status).toBe(200);
+    const files = await unzip(zip.body as Buffer);
+    const table = (name: string) =>
+      Papa.parse<Record<string, string>>(files.get(`tables/${name}`)!.toString("utf8"), {
+        header: true,
+        skipEmptyLines: true,
+      }).data;
+    const steps = table("finding-steps.csv").filter((r) => r.kind === "closed-left-service");
+    expect(steps.map((r) => [r.finding_id, r.status, r.on]).sort()).toEqual(
+      [
+        [unrepaired, "closed", storeToday],
+        [repairedOne, "closed", RETIRED],
+      ].sort(),
+    );
+    expect(table("compliance-audit.csv").filter((r) => r.action === "finding-closed-left-service")).toHaveLength(2);
   });
 
   it("is refused while the system is in service (409 with the reason), and no step lands", async () => {
