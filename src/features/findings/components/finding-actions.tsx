@@ -20,7 +20,12 @@ const REASON_LABELS: Record<(typeof DISMISS_REASONS)[number], string> = {
 export function FindingActions({ finding, role, today }: { finding: FindingDetail; role: Role; today: string }) {
   const allowed = finding.nextActions.filter((a) => can(role, ACTION_PERMISSION[a]));
   const [action, setAction] = useState<FindingAction | null>(allowed[0] ?? null);
-  const [on, setOn] = useState(today);
+  // Once the system has left service, a step other than its closing is dated by that day.
+  const retiredBy = (a: FindingAction | null) =>
+    finding.systemRetiredOn && a !== "close-left-service" && finding.systemRetiredOn < today
+      ? finding.systemRetiredOn
+      : today;
+  const [on, setOn] = useState(() => retiredBy(allowed[0] ?? null));
   const [note, setNote] = useState("");
   const [component, setComponent] = useState(finding.component ?? "");
   const [result, setResult] = useState<"passed" | "failed">("passed");
@@ -29,13 +34,12 @@ export function FindingActions({ finding, role, today }: { finding: FindingDetai
   const current = action && allowed.includes(action) ? action : (allowed[0] ?? null);
   if (!current) return null;
   const fields = serverFieldErrors(m.error);
-  // Once the system has left service, its closing is dated on or after that day and every other step by then.
+  // Once the system has left service, its closing is dated on or after that day (the day it is done by
+  // default) and every other step by then.
   const retiredOn = finding.systemRetiredOn;
   const pick = (a: FindingAction) => {
     setAction(a);
-    if (retiredOn && a !== "close-left-service" && on > retiredOn) setOn(retiredOn);
-    // The closing is recorded on the day it is done.
-    if (retiredOn && a === "close-left-service") setOn(today);
+    if (retiredOn && (a === "close-left-service" || on > retiredOn)) setOn(retiredBy(a));
   };
   const submit = (e: FormEvent) => {
     e.preventDefault();
