@@ -76,10 +76,13 @@ describe("the day of a step on a finding whose system left service", () => {
   });
 
   it("refuses any other step dated after the retirement day, and takes one dated by then (docs/decisions/0124)", () => {
-    for (const action of ["confirm", "repair", "initial-test", "follow-up-test", "close", "dismiss"] as const)
+    for (const action of ["confirm", "repair", "initial-test", "follow-up-test", "dismiss"] as const)
       expect(leftServiceDayError(action, "2026-05-01", rack)).toBe(
         "must not be after 30 Apr 2026, the day Rack C left service: record a step taken by then, or close the finding because the system left service",
       );
+    expect(leftServiceDayError("close", "2026-05-01", rack)).toBe(
+      "must not be after 30 Apr 2026, the day Rack C left service: date the closing of the verified repair by then",
+    );
     expect(leftServiceDayError("repair", RETIRED, rack)).toBeNull();
     expect(leftServiceDayError("repair", "2026-05-01", { name: "Rack C", retiredOn: null })).toBeNull();
   });

@@ -20,7 +20,10 @@ export function leftServiceDayError(
       : null;
   }
   if (retiredOn === null || compareDates(on, retiredOn) <= 0) return null;
-  return `must not be after ${day(retiredOn)}, the day ${name} left service: record a step taken by then, or close the finding because the system left service`;
+  const limit = `must not be after ${day(retiredOn)}, the day ${name} left service`;
+  // A verified repair closes as verified, dated by then; the closing as left service is not offered for it.
+  if (action === "close") return `${limit}: date the closing of the verified repair by then`;
+  return `${limit}: record a step taken by then, or close the finding because the system left service`;
 }
 
 /**
