@@ -263,6 +263,8 @@ export const todayResponse = z.object({
       foundOn: text(),
       deadline: text().nullable(),
       deadlineSource: text().nullable(),
+      /** The day its system left service: nothing more is owed and it waits to be closed (docs/decisions/0166). */
+      systemRetiredOn: text().nullable().optional(),
       link: text(),
     }),
   ),

@@ -25,6 +25,8 @@ export const findingActionInput = z.discriminatedUnion(
     z.object({ action: z.literal("initial-test"), on, note, result }),
     z.object({ action: z.literal("follow-up-test"), on, note, result }),
     z.object({ action: z.literal("close"), on, note }),
+    // The system was retired with the finding still open (docs/decisions/0166): dated on or after that day.
+    z.object({ action: z.literal("close-left-service"), on, note }),
     z.object({
       action: z.literal("dismiss"),
       on,
@@ -32,7 +34,7 @@ export const findingActionInput = z.discriminatedUnion(
       reason: z.enum(DISMISS_REASONS, { error: `must be one of: ${DISMISS_REASONS.join(", ")}` }),
     }),
   ],
-  { error: "must be one of: confirm, repair, initial-test, follow-up-test, close, dismiss" },
+  { error: "must be one of: confirm, repair, initial-test, follow-up-test, close, close-left-service, dismiss" },
 );
 export type FindingActionInput = z.input<typeof findingActionInput>;
 
@@ -60,7 +62,11 @@ export const findingDetail = finding.extend({
   fixtureLabel: text().nullable(),
   refrigerantId: text().nullable(),
   dismissReason: z.enum(DISMISS_REASONS).nullable(),
-  nextActions: z.array(z.enum(["confirm", "repair", "initial-test", "follow-up-test", "close", "dismiss"])),
+  nextActions: z.array(
+    z.enum(["confirm", "repair", "initial-test", "follow-up-test", "close", "close-left-service", "dismiss"]),
+  ),
+  /** The day the finding's system left service (store calendar), or null while it is in service or has none. */
+  systemRetiredOn: text().nullable(),
   deadlines: z.array(findingDeadline),
   cautions: z.array(z.object({ id: text(), level: z.enum(["warning", "notice"]), text: text(), source: text() })),
 });

@@ -2,7 +2,8 @@ import { z } from "zod";
 import { text } from "./text";
 import { PLAN_COORD_MAX_M } from "./quantities";
 
-// A finding is a leak record: suspected → confirmed → repaired → verified → closed, or dismissed.
+// A finding is a leak record: suspected → confirmed → repaired → verified → closed, or dismissed; one still
+// open when its system is retired is closed as "left service" (docs/decisions/0166).
 // The Walk screen creates one at a pinpointed leak, the field map from a suspect spot, anyone by hand.
 export const FINDING_STATUSES = ["suspected", "confirmed", "repaired", "verified", "closed", "dismissed"] as const;
 export const FINDING_COMPONENTS = ["brazed-joint", "flare", "valve", "coil", "gasket", "fitting", "other"] as const;
@@ -16,6 +17,7 @@ export const FINDING_EVENT_KINDS = [
   "initial-test",
   "follow-up-test",
   "closed",
+  "closed-left-service",
   "dismissed",
 ] as const;
 export const FINDING_EVENT_LABELS: Record<(typeof FINDING_EVENT_KINDS)[number], string> = {
@@ -25,6 +27,7 @@ export const FINDING_EVENT_LABELS: Record<(typeof FINDING_EVENT_KINDS)[number], 
   "initial-test": "Initial verification test",
   "follow-up-test": "Follow-up verification test",
   closed: "Closed",
+  "closed-left-service": "Closed: the system left service",
   dismissed: "Dismissed",
 };
 

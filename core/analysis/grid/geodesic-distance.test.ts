@@ -155,7 +155,8 @@ describe("geodesic distance on the plan grid", () => {
     for (let j = 30; j < 34; j++) for (let i = 22; i < 36; i++) seeds.push(j * grid.width + i);
     seeds.push(seeds[5]);
     for (const stepScale of [null, scale]) {
-      for (const margin of [0, 0.3, 1.7]) {
+      // 0.25, 0.3 and 0.35 are within a diagonal step (0.354 m): seeds and orthogonal neighbours, no search
+      for (const margin of [0, 0.2, 0.25, 0.3, 0.35, 0.36, 1.7]) {
         const heap = new GeodesicSearch(grid, stepScale);
         const buckets = new GeodesicSearch(grid, stepScale);
         const settled = heap.fromCells(seeds, margin);

@@ -169,6 +169,7 @@ export class GeodesicSearch {
     if (!(this.bucketWidth > 0) || !Number.isFinite(maxDistance / this.bucketWidth) || !(maxDistance >= 0))
       return this.fromCells(cells, maxDistance);
     this.reset();
+    if (this.stepScale === null && maxDistance < this.steps[4]) return this.seedsAndNeighbours(cells, maxDistance);
     this.buckets.reset(Math.floor(maxDistance / this.bucketWidth) + 1);
     for (const k of cells) {
       if (this.grid.blocked[k] || this.dist[k] === 0) continue;
@@ -177,6 +178,44 @@ export class GeodesicSearch {
       this.buckets.push(0, 0, k);
     }
     return this.runBuckets(maxDistance, false);
+  }
+
+  /**
+   * reachFromCells within less than a diagonal step and without step scales (the equipment mask's 0.3 m
+   * at 0.25 m cells): the seeds at 0 and, when a cell's width is within reach, their free orthogonal
+   * neighbours at that width, the same sums the buckets would settle (0 + h; a second step costs more
+   * than the reach). One pass instead of a search, whose first runs are cold (docs/decisions/0163).
+   */
+  private seedsAndNeighbours(cells: readonly number[], maxDistance: number): number {
+    const { dist, moves, offsets, steps } = this;
+    const blocked = this.grid.blocked;
+    for (let q = 0; q < cells.length; q++) {
+      const k = cells[q];
+      if (blocked[k] || dist[k] === 0) continue;
+      this.markDirty(k);
+      dist[k] = 0;
+      this.settle(k);
+    }
+    if (!(0 + steps[0] <= maxDistance)) return this.settledCount;
+    const seeds = this.settledCount;
+    for (let q = 0; q < seeds; q++) {
+      const u = this.settled[q];
+      const mask = moves[u];
+      for (let m = 0; m < 4; m++) {
+        if (!(mask & (1 << m))) continue;
+        const v = u + offsets[m];
+        if (dist[v] !== Infinity) continue;
+        this.markDirty(v);
+        dist[v] = 0 + steps[m];
+        this.settle(v);
+      }
+    }
+    return this.settledCount;
+  }
+
+  private settle(k: number): void {
+    if (this.settledCount === this.settled.length) this.settled = growInt32(this.settled);
+    this.settled[this.settledCount++] = k;
   }
 
   private seed(k: number, d: number, from: number): void {

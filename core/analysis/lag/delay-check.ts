@@ -1,6 +1,6 @@
-import type { LaggedPosition, Route, Tap } from "./lag-correct";
+import type { Route, Tap } from "./lag-correct";
 import { rememberedByTap } from "./remembered-route";
-import { walkLag } from "./walk-lag";
+import { walkLagCorrectorInto } from "./walk-lag";
 
 /**
  * The delay checked against the readings. A wrong delay moves the readings of passes in opposite
@@ -101,16 +101,25 @@ export function checkDelay(
   const cachedRoute: Route | undefined = route ? rememberedByTap(route) : undefined;
   const r2 = 2 * settings.radiusM * settings.radiusM;
   const cut2 = 9 * settings.radiusM * settings.radiusM;
+  // the walk is cut and its legs routed once for every trial shift (docs/decisions/0163)
+  const lagInto = walkLagCorrectorInto(readings, cachedRoute, walkSpeedMps);
+  const p = {
+    xs: new Float64Array(n),
+    ys: new Float64Array(n),
+    beforeDelay: new Uint8Array(n),
+    pathGap: new Uint8Array(n),
+  };
+  const { xs, ys, beforeDelay } = p;
   const misfitAt = (shift: number): { misfit: number; weight: number } => {
-    const p: LaggedPosition[] = walkLag(readings, shift, 0, cachedRoute, walkSpeedMps);
+    lagInto(shift, 0, p);
     // readings in square buckets as wide as the closeness cut-off, so each raised reading meets only
     // its neighbours (the pairs and their order are those of a full scan over j)
     const size = Math.sqrt(cut2);
     const buckets = new Map<number, number[]>();
     const keyOf = (bx: number, by: number) => bx * 1_000_003 + by;
     for (let j = 0; j < n; j++) {
-      if (p[j].beforeDelay) continue;
-      const k = keyOf(Math.floor(p[j].x / size), Math.floor(p[j].y / size));
+      if (beforeDelay[j]) continue;
+      const k = keyOf(Math.floor(xs[j] / size), Math.floor(ys[j] / size));
       const list = buckets.get(k);
       if (list) list.push(j);
       else buckets.set(k, [j]);
@@ -119,18 +128,23 @@ export function checkDelay(
     let swd = 0;
     const near: number[] = [];
     // every pair with at least one raised reading, once (a pair of two raised readings from the lower index)
-    for (const i of raisedIdx) {
-      if (p[i].beforeDelay) continue;
-      const bx = Math.floor(p[i].x / size);
-      const by = Math.floor(p[i].y / size);
+    for (let r = 0; r < raisedIdx.length; r++) {
+      const i = raisedIdx[r];
+      if (beforeDelay[i]) continue;
+      const bx = Math.floor(xs[i] / size);
+      const by = Math.floor(ys[i] / size);
       near.length = 0;
       for (let dx = -1; dx <= 1; dx++)
-        for (let dy = -1; dy <= 1; dy++) for (const j of buckets.get(keyOf(bx + dx, by + dy)) ?? []) near.push(j);
+        for (let dy = -1; dy <= 1; dy++) {
+          const list = buckets.get(keyOf(bx + dx, by + dy));
+          if (list) for (let q = 0; q < list.length; q++) near.push(list[q]);
+        }
       near.sort((a, b) => a - b);
-      for (const j of near) {
+      for (let q = 0; q < near.length; q++) {
+        const j = near[q];
         if (j === i || (raised[j] && j < i)) continue;
         if (Math.abs(readings[j].t - readings[i].t) < settings.minGapS) continue;
-        const d2 = (p[i].x - p[j].x) ** 2 + (p[i].y - p[j].y) ** 2;
+        const d2 = (xs[i] - xs[j]) ** 2 + (ys[i] - ys[j]) ** 2;
         if (d2 > cut2) continue;
         const w = Math.exp(-d2 / r2);
         sw += w;

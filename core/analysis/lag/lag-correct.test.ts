@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { createPlanGrid } from "../grid/plan-grid";
 import { gridRoute } from "./grid-route";
-import { lagCorrect, NEW_WALK_PAUSE, type Tap } from "./lag-correct";
+import { lagCorrect, lagCorrector, NEW_WALK_PAUSE, type Tap } from "./lag-correct";
 
 // Worked example (docs/locator/method.md, lag correction): walking 1 m/s with 5 s of delay, a reading describes the air 5 m back.
 describe("lag correction", () => {
@@ -92,6 +92,25 @@ describe("lag correction", () => {
         0,
       ),
     ).toThrow(/time order/);
+  });
+
+  it("corrects one walk for many shifts as lagCorrect does for each (the delay check's trial shifts)", () => {
+    // a turn, a stop, a pass and a 70 s gap that is a pause for short shifts only (the pause grows with the shift)
+    const taps: Tap[] = [
+      ...Array.from({ length: 8 }, (_, k) => ({ x: k < 4 ? k : 3, y: k < 4 ? 0 : k - 3, t: 2 * k })),
+      { x: 3, y: 6, t: 86 },
+      { x: 3, y: 7, t: 87, pass: "p2" },
+      { x: 4, y: 7, t: 89, pass: "p2" },
+    ];
+    const grid = createPlanGrid(10, 10, 0.25, []);
+    for (const walkSpeedMps of [undefined, 1]) {
+      const options = { route: gridRoute(grid), walkSpeedMps };
+      const correct = lagCorrector(taps, options);
+      for (let shift = 0; shift <= 9; shift += 0.5)
+        expect(correct(shift, 0.5)).toEqual(lagCorrect(taps, shift, 0.5, options));
+    }
+    expect(() => lagCorrector(taps)(-1, 0)).toThrow(/non-negative/);
+    expect(() => lagCorrector([taps[1], taps[0]])).toThrow(/time order/);
   });
 
   describe("a pinpoint pass or a long pause starts a new walk", () => {

@@ -64,19 +64,72 @@ export function lagCorrect(
   timeConstantS: number,
   options: LagOptions = {},
 ): LaggedPosition[] {
+  const { walkSpeedMps } = options;
+  if (walkSpeedMps !== undefined && !(walkSpeedMps > 0))
+    throw new Error(`walking speed must be positive, got ${walkSpeedMps} m/s`);
+  checkShift(delayS, timeConstantS);
+  return lagCorrector(taps, options)(delayS, timeConstantS);
+}
+
+function checkShift(delayS: number, timeConstantS: number): void {
+  if (!(delayS >= 0) || !(timeConstantS >= 0))
+    throw new Error(`delay and time constant must be non-negative, got ${delayS} s and ${timeConstantS} s`);
+}
+
+/**
+ * lagCorrect for one walk and many shifts: the delay check corrects the same taps for 33 trial shifts,
+ * so the taps' order is checked, each leg's route and length found and each pause's walks cut once,
+ * not once per shift (docs/decisions/0163). Every position is the same number lagCorrect gives.
+ */
+export function lagCorrector(
+  taps: readonly Tap[],
+  options: LagOptions = {},
+): (delayS: number, timeConstantS: number) => LaggedPosition[] {
+  const into = lagCorrectorInto(taps, options);
+  const n = taps.length;
+  return (delayS, timeConstantS) => {
+    const out = {
+      xs: new Float64Array(n),
+      ys: new Float64Array(n),
+      beforeDelay: new Uint8Array(n),
+      pathGap: new Uint8Array(n),
+    };
+    into(delayS, timeConstantS, out);
+    return Array.from({ length: n }, (_, k) => ({
+      x: out.xs[k],
+      y: out.ys[k],
+      beforeDelay: out.beforeDelay[k] === 1,
+      pathGap: out.pathGap[k] === 1,
+    }));
+  };
+}
+
+/** Lagged positions as arrays, one entry per tap (1 = true in the flags). */
+export interface LaggedArrays {
+  readonly xs: Float64Array;
+  readonly ys: Float64Array;
+  readonly beforeDelay: Uint8Array;
+  readonly pathGap: Uint8Array;
+}
+
+/**
+ * lagCorrector writing into arrays the caller keeps: the delay check's 33 trial shifts allocate no
+ * object or point per tap (docs/decisions/0163). The same numbers as lagCorrect.
+ */
+export function lagCorrectorInto(
+  taps: readonly Tap[],
+  options: LagOptions = {},
+): (delayS: number, timeConstantS: number, out: LaggedArrays) => void {
   const { route, maxStepM = 5, walkSpeedMps } = options;
   if (walkSpeedMps !== undefined && !(walkSpeedMps > 0))
     throw new Error(`walking speed must be positive, got ${walkSpeedMps} m/s`);
-  if (!(delayS >= 0) || !(timeConstantS >= 0))
-    throw new Error(`delay and time constant must be non-negative, got ${delayS} s and ${timeConstantS} s`);
   for (let k = 1; k < taps.length; k++) {
     if (taps[k].t < taps[k - 1].t)
       throw new Error(`taps must be in time order: tap ${k} at ${taps[k].t} s follows ${taps[k - 1].t} s`);
   }
-  const shift = delayS + timeConstantS;
-  const routes = new Map<number, readonly (readonly [number, number])[]>();
+  const routes: (readonly (readonly [number, number])[] | undefined)[] = [];
   const routeOf = (j: number) => {
-    let r = routes.get(j);
+    let r = routes[j];
     if (!r) {
       const a = taps[j];
       const b = taps[j + 1];
@@ -84,44 +137,72 @@ export function lagCorrect(
         [a.x, a.y],
         [b.x, b.y],
       ];
-      routes.set(j, r);
+      routes[j] = r;
     }
     return r;
   };
-  const pauseS = Math.max(NEW_WALK_PAUSE.minS, NEW_WALK_PAUSE.shifts * shift);
-  // the first and last tap of each tap's walk
-  const firstOf = new Int32Array(taps.length);
-  for (let k = 1; k < taps.length; k++) {
-    const gap = taps[k].t - taps[k - 1].t;
-    const newPass = (taps[k].pass ?? null) !== (taps[k - 1].pass ?? null);
-    // the route is asked for only when the gap alone could be a pause
-    const paused =
-      gap > pauseS && gap - (walkSpeedMps !== undefined ? lengthOf(routeOf(k - 1)) / walkSpeedMps : 0) > pauseS;
-    firstOf[k] = newPass || paused ? k : firstOf[k - 1];
-  }
-  const lastOf = new Int32Array(taps.length);
-  for (let k = taps.length - 1; k >= 0; k--)
-    lastOf[k] = k + 1 < taps.length && firstOf[k + 1] === firstOf[k] ? lastOf[k + 1] : k;
-  return taps.map((tap, k) => {
-    const s = tap.t - shift;
-    const first = taps[firstOf[k]];
-    if (s < first.t) return { x: first.x, y: first.y, beforeDelay: true, pathGap: false };
-    const j = Math.min(lastTapAtOrBefore(taps, s), lastOf[k]);
-    if (j >= lastOf[k]) return { x: taps[j].x, y: taps[j].y, beforeDelay: false, pathGap: false };
-    const a = taps[j];
-    const b = taps[j + 1];
-    const path = routeOf(j);
-    const span = b.t - a.t;
-    let f = span > 0 ? (s - a.t) / span : 0;
-    const length = lengthOf(path);
-    if (walkSpeedMps !== undefined && span > 0) {
-      const walkS = Math.min(span, length / walkSpeedMps);
-      const leave = b.t - walkS;
-      f = s <= leave ? 0 : walkS > 0 ? (s - leave) / walkS : 1;
+  // the first and last tap of each tap's walk, by the pause that cuts walks (it grows with the shift)
+  const walksByPause = new Map<number, { firstOf: Int32Array; lastOf: Int32Array }>();
+  const walksOf = (pauseS: number) => {
+    let walks = walksByPause.get(pauseS);
+    if (!walks) {
+      const firstOf = new Int32Array(taps.length);
+      for (let k = 1; k < taps.length; k++) {
+        const gap = taps[k].t - taps[k - 1].t;
+        const newPass = (taps[k].pass ?? null) !== (taps[k - 1].pass ?? null);
+        // the route is asked for only when the gap alone could be a pause
+        const paused =
+          gap > pauseS && gap - (walkSpeedMps !== undefined ? lengthOf(routeOf(k - 1)) / walkSpeedMps : 0) > pauseS;
+        firstOf[k] = newPass || paused ? k : firstOf[k - 1];
+      }
+      const lastOf = new Int32Array(taps.length);
+      for (let k = taps.length - 1; k >= 0; k--)
+        lastOf[k] = k + 1 < taps.length && firstOf[k + 1] === firstOf[k] ? lastOf[k + 1] : k;
+      walks = { firstOf, lastOf };
+      walksByPause.set(pauseS, walks);
     }
-    const [x, y] = alongPolyline(path, f, length);
-    return { x, y, beforeDelay: false, pathGap: Math.hypot(b.x - a.x, b.y - a.y) > maxStepM };
-  });
+    return walks;
+  };
+  const point: [number, number] = [0, 0];
+  return (delayS, timeConstantS, out) => {
+    checkShift(delayS, timeConstantS);
+    const shift = delayS + timeConstantS;
+    const { firstOf, lastOf } = walksOf(Math.max(NEW_WALK_PAUSE.minS, NEW_WALK_PAUSE.shifts * shift));
+    const { xs, ys, beforeDelay, pathGap } = out;
+    for (let k = 0; k < taps.length; k++) {
+      const s = taps[k].t - shift;
+      const first = taps[firstOf[k]];
+      beforeDelay[k] = 0;
+      pathGap[k] = 0;
+      if (s < first.t) {
+        xs[k] = first.x;
+        ys[k] = first.y;
+        beforeDelay[k] = 1;
+        continue;
+      }
+      const j = Math.min(lastTapAtOrBefore(taps, s), lastOf[k]);
+      if (j >= lastOf[k]) {
+        xs[k] = taps[j].x;
+        ys[k] = taps[j].y;
+        continue;
+      }
+      const a = taps[j];
+      const b = taps[j + 1];
+      const path = routeOf(j);
+      const span = b.t - a.t;
+      let f = span > 0 ? (s - a.t) / span : 0;
+      const length = lengthOf(path);
+      if (walkSpeedMps !== undefined && span > 0) {
+        const walkS = Math.min(span, length / walkSpeedMps);
+        const leave = b.t - walkS;
+        f = s <= leave ? 0 : walkS > 0 ? (s - leave) / walkS : 1;
+      }
+      pointAlong(path, f, length, point);
+      xs[k] = point[0];
+      ys[k] = point[1];
+      pathGap[k] = Math.hypot(b.x - a.x, b.y - a.y) > maxStepM ? 1 : 0;
+    }
+  };
 }
 
 /** Index of the last tap with t ≤ s (binary search); taps[0].t ≤ s is assumed. */
@@ -162,18 +243,36 @@ export function alongPolyline(
   f: number,
   length = polylineLength(points),
 ): [number, number] {
-  if (points.length === 1) return [points[0][0], points[0][1]];
+  return pointAlong(points, f, length, [0, 0]);
+}
+
+/** alongPolyline into `out` (returned). */
+function pointAlong(
+  points: readonly (readonly [number, number])[],
+  f: number,
+  length: number,
+  out: [number, number],
+): [number, number] {
+  if (points.length === 1) {
+    out[0] = points[0][0];
+    out[1] = points[0][1];
+    return out;
+  }
   let left = Math.max(0, Math.min(1, f)) * length;
   for (let i = 1; i < points.length; i++) {
-    const [ax, ay] = points[i - 1];
-    const [bx, by] = points[i];
-    const len = Math.hypot(bx - ax, by - ay);
+    const a = points[i - 1];
+    const b = points[i];
+    const len = Math.hypot(b[0] - a[0], b[1] - a[1]);
     if (left <= len || i === points.length - 1) {
       const g = len > 0 ? Math.min(1, left / len) : 0;
-      return [ax + g * (bx - ax), ay + g * (by - ay)];
+      out[0] = a[0] + g * (b[0] - a[0]);
+      out[1] = a[1] + g * (b[1] - a[1]);
+      return out;
     }
     left -= len;
   }
   const last = points[points.length - 1];
-  return [last[0], last[1]];
+  out[0] = last[0];
+  out[1] = last[1];
+  return out;
 }

@@ -1,7 +1,14 @@
 import type { Polygon } from "../geometry/types";
 import { createPlanGrid } from "../grid/plan-grid";
 import { gridRoute } from "./grid-route";
-import { lagCorrect, type LaggedPosition, type Route, type Tap } from "./lag-correct";
+import {
+  lagCorrect,
+  lagCorrectorInto,
+  type LaggedArrays,
+  type LaggedPosition,
+  type Route,
+  type Tap,
+} from "./lag-correct";
 
 // The one lag correction of a walk, used by the server's locator (locate.ts, step 1) and by the
 // Walk screen's lag hint, so the hint marks the very point the field map will use. Pure TypeScript.
@@ -19,6 +26,18 @@ export function walkLag(
   walkSpeedMps: number | undefined,
 ): LaggedPosition[] {
   return lagCorrect(taps, delayS, timeConstantS, {
+    route,
+    walkSpeedMps: walkSpeedMps !== undefined && walkSpeedMps > 0 ? walkSpeedMps : undefined,
+  });
+}
+
+/** walkLag for many shifts of the same walk (the delay check's trial shifts), into arrays: the same positions. */
+export function walkLagCorrectorInto(
+  taps: readonly Tap[],
+  route: Route | undefined,
+  walkSpeedMps: number | undefined,
+): (delayS: number, timeConstantS: number, out: LaggedArrays) => void {
+  return lagCorrectorInto(taps, {
     route,
     walkSpeedMps: walkSpeedMps !== undefined && walkSpeedMps > 0 ? walkSpeedMps : undefined,
   });

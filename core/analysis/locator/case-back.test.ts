@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { createPlanGrid } from "../grid/plan-grid";
-import { caseBack, onCaseBack } from "./case-back";
+import { cellIndexOf, createPlanGrid } from "../grid/plan-grid";
+import { allowedTowardFront, caseBack, onCaseBack } from "./case-back";
 
 // A 10 m x 6 m plan of 0.25 m cells with a wall along y = 0..0.3 and a 0.15 m spine at x = 6..6.15.
 const wall: [number, number][] = [
@@ -65,5 +65,16 @@ describe("the back of a display case", () => {
     expect(y).toBeCloseTo(0.45, 9);
     expect(onCaseBack(fixtures, grid, 8, 1)).toBeNull(); // a walk-in has no case back
     expect(onCaseBack(fixtures, grid, 5, 1)).toBeNull(); // in no fixture
+  });
+
+  it("takes the first free cell toward the front when the wall behind the case blocks the back line's cell", () => {
+    // the wall case's back line (y 0.45) lies in the cell row 0.25-0.5 m, which the wall (to 0.3 m) blocks
+    const free = (x: number, y: number) => grid.blocked[cellIndexOf(grid, x, y)] === 0;
+    expect(free(2, 0.45)).toBe(false);
+    const at = allowedTowardFront([2, 0.45], [2, 0.875], 0.125, free);
+    expect(at?.[0]).toBe(2);
+    expect(Math.floor(at![1] / 0.25)).toBe(2); // the next row, 0.5-0.75 m
+    expect(allowedTowardFront([2, 0.45], [2, 0.875], 0.125, () => false)).toBeNull();
+    expect(allowedTowardFront([2, 0.875], [2, 0.875], 0.125, free)).toEqual([2, 0.875]); // the back line is free
   });
 });

@@ -71,3 +71,25 @@ export function onCaseBack(
   if (!back) return null;
   return back.axis === 0 ? [x, back.at] : [back.at, y];
 }
+
+/**
+ * The first point on the segment from `back` toward `from`, in steps of `step`, that `isAllowed` accepts:
+ * the cell a spot named on the back line takes when the back line's own cell is one the wall or spine
+ * behind the case overlaps (the grid blocks every cell a solid body touches). Null when none is.
+ */
+export function allowedTowardFront(
+  back: readonly [number, number],
+  from: readonly [number, number],
+  step: number,
+  isAllowed: (x: number, y: number) => boolean,
+): [number, number] | null {
+  const length = Math.hypot(from[0] - back[0], from[1] - back[1]);
+  const steps = Math.ceil(length / step);
+  for (let k = 0; k <= steps; k++) {
+    const f = steps === 0 ? 0 : k / steps;
+    const x = back[0] + f * (from[0] - back[0]);
+    const y = back[1] + f * (from[1] - back[1]);
+    if (isAllowed(x, y)) return [x, y];
+  }
+  return null;
+}

@@ -66,7 +66,9 @@ export interface GreedyResult {
 function bestWithPrior(scan: ScanResult, prior: Float64Array | null, n: number): number {
   let best = -1;
   let max = 0;
-  for (let c = 0; c < scan.delta.length; c++)
+  const from = scan.from ?? 0;
+  const to = scan.to ?? scan.delta.length;
+  for (let c = from; c < to; c++)
     if (scan.delta[c] > max) {
       max = scan.delta[c];
       best = c;
@@ -74,7 +76,7 @@ function bestWithPrior(scan: ScanResult, prior: Float64Array | null, n: number):
   if (best < 0 || !prior) return best;
   const s2 = Math.max(1, (scan.chi2Background - max) / Math.max(1, n - 2));
   let bestScore = -Infinity;
-  for (let c = 0; c < scan.delta.length; c++) {
+  for (let c = from; c < to; c++) {
     if (!(scan.delta[c] > 0)) continue;
     const score = scan.delta[c] + 2 * s2 * prior[c];
     if (score > bestScore) {

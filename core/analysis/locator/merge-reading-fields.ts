@@ -37,6 +37,8 @@ export function mergeReadingFields(parts: readonly FieldsPart[], readings: numbe
     omega: new Float64Array(cells),
     omegaY: new Float64Array(cells),
     nearestReading: new Float32Array(cells).fill(Infinity),
+    // every part was searched with the same focus
+    reach: parts[0]?.fields.reach ?? null,
   };
   let g0 = 0;
   let e0 = 0;

@@ -31,6 +31,8 @@ export interface ReadingFields {
   omegaY: Float64Array;
   /** Geodesic distance from each cell to the nearest reading (Infinity beyond the truncation radius). */
   nearestReading: Float32Array;
+  /** Cells [from, to) hold every finite nearest reading, when the field was focused on a circle (its rows); null: any cell may. */
+  reach: { readonly from: number; readonly to: number } | null;
 }
 
 export function accumulateReadingFields(
@@ -156,7 +158,16 @@ export function accumulateReadingFields(
     omega,
     omegaY,
     nearestReading,
+    reach: focus ? rowsOf(grid, focus) : null,
   };
+}
+
+/** The cells of the rows the focus circle's cells lie on (cellsInFocus's rows). */
+function rowsOf(grid: PlanGrid, focus: SearchFocus): { from: number; to: number } {
+  const h = grid.cellSize;
+  const j0 = Math.max(0, Math.floor((focus.y - focus.radiusM) / h));
+  const j1 = Math.min(grid.height - 1, Math.floor((focus.y + focus.radiusM) / h));
+  return j1 < j0 ? { from: 0, to: 0 } : { from: j0 * grid.width, to: (j1 + 1) * grid.width };
 }
 
 /** The (cell, kernel value, distance) entries of the searches so far, grown as needed. */

@@ -92,6 +92,20 @@ describe("per-cell source fit", () => {
     expect(r2.delta[0]).toBe(0);
   });
 
+  it("visits only the span of allowed cells and gives it as [from, to)", () => {
+    const t = sums(g);
+    const five = (v: number) => Float64Array.of(v, v, v, v, v);
+    const r = scanSources(five(t.swg), five(t.swgg), five(t.swgr), t.totals, Uint8Array.of(0, 1, 0, 1, 0));
+    expect([r.from, r.to]).toEqual([1, 4]);
+    expect(Array.from(r.delta, (d) => d > 0)).toEqual([false, true, false, true, false]);
+    // the same fit in every allowed cell as with that cell alone allowed
+    const one = scanSources(five(t.swg), five(t.swgg), five(t.swgr), t.totals, Uint8Array.of(0, 0, 0, 1, 0));
+    expect(r.delta[3]).toBe(one.delta[3]);
+    const none = scanSources(five(t.swg), five(t.swgg), five(t.swgr), t.totals, new Uint8Array(5));
+    expect([none.from, none.to]).toEqual([0, 0]);
+    expect(Array.from(none.delta)).toEqual([0, 0, 0, 0, 0]);
+  });
+
   it("counts censored readings only while the prediction falls short of them", () => {
     // the peak reading saturated at 3 ppm ("at least 3") while its neighbours read 6 and 4
     const yc = Float64Array.from([0, 0, 6, 3, 4, 0]);

@@ -27,6 +27,9 @@ export interface ScanResult {
   q: Float64Array;
   b: Float64Array;
   chi2Background: number;
+  /** Every Δχ² outside cells [from, to) is 0 (absent: any cell may hold one). */
+  from?: number;
+  to?: number;
 }
 
 export function scanSources(
@@ -34,6 +37,7 @@ export function scanSources(
   sumWGG: Float64Array,
   sumWGR: Float64Array,
   totals: ScanTotals,
+  /** 1 for a cell that may hold a source, else 0. */
   allowed: Uint8Array,
 ): ScanResult {
   const n = sumWG.length;
@@ -41,7 +45,10 @@ export function scanSources(
   const q = new Float64Array(n);
   const b = new Float64Array(n);
   const chi0 = backgroundChi2(totals);
-  for (let c = 0; c < n; c++) {
+  // only the allowed cells' span is visited: a retry screen allows the cells of a small circle only
+  const from = Math.max(0, allowed.indexOf(1));
+  const to = allowed.lastIndexOf(1) + 1;
+  for (let c = from; c < to; c++) {
     if (!allowed[c]) continue;
     const d = fitOneCell(sumWG[c], sumWGG[c], sumWGR[c], totals, chi0);
     if (d > 0) {
@@ -50,7 +57,7 @@ export function scanSources(
       b[c] = cellFit.b;
     }
   }
-  return { delta, q, b, chi2Background: chi0 };
+  return { delta, q, b, chi2Background: chi0, from, to };
 }
 
 /** χ² of the background-only model b₀ = max(0, Σwr/Σw). */

@@ -94,15 +94,22 @@ export function fieldStage(
     searched,
     focus,
   );
+  // the background and the map are worked out when first read: a retry screen reads neither (decision 0163)
+  let background: FieldResult["background"] | undefined;
+  let map: FieldGrid | undefined;
   return {
-    background: estimateBackground(lag.ppm, usable),
+    get background() {
+      return (background ??= estimateBackground(lag.ppm, usable));
+    },
     weights,
     kernel: kernels[0],
     fansStir,
     kernels,
     modelOfReading,
     fields,
-    map: fieldMap(fields, grid.width, grid.height, grid.cellSize),
+    get map() {
+      return (map ??= fieldMap(fields, grid.width, grid.height, grid.cellSize));
+    },
   };
 }
 

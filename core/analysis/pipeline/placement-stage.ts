@@ -2,7 +2,7 @@ import type { LocatorInput } from "../../contracts/locator-input";
 import type { SuspectSpotFacts } from "../../contracts/locator-output";
 import { cellCentre, cellIndexOf, cellsInside, type PlanGrid } from "../grid/plan-grid";
 import { fittingAt } from "../locator/at-fitting";
-import { onCaseBack } from "../locator/case-back";
+import { allowedTowardFront, onCaseBack } from "../locator/case-back";
 import { oneSidedPass } from "../locator/diagnostics";
 import { firstByExplainedPeak } from "../locator/first-spot";
 import type { FoundSource } from "../locator/greedy-sources";
@@ -160,8 +160,7 @@ export function placementStage(
   const placed: FoundSource[] = [];
   // spots named at a point of their cell rather than its centre: at a fitting, on a case's back line
   const namedAt = new Map<FoundSource, readonly [number, number]>();
-  const moveTo = (s: FoundSource, x: number, y0: number): FoundSource => {
-    const cell = cellIndexOf(grid, x, y0);
+  const moveTo = (s: FoundSource, x: number, y0: number, cell = cellIndexOf(grid, x, y0)): FoundSource => {
     const out = cell === s.cell ? { ...s } : { ...s, cell, column: kernelColumn(fields, cell, n) };
     namedAt.set(out, [x, y0]);
     return out;
@@ -175,8 +174,11 @@ export function placementStage(
   // a case spot the prior did not place goes to the case's back, where its piping runs (case-back.ts)
   const atCaseBack = (s: FoundSource): FoundSource => {
     if (!p.toCaseBack || (prior && prior[s.cell] > 0)) return s;
-    const back = onCaseBack(plan.fixtures, grid, ...cellCentre(grid, s.cell));
-    return back && allowedAt(...back) ? moveTo(s, ...back) : s;
+    const centre = cellCentre(grid, s.cell);
+    const back = onCaseBack(plan.fixtures, grid, ...centre);
+    // named on the back line; its cell the nearest allowed one toward the front when a spine overlaps it
+    const cell = back && allowedTowardFront(back, centre, grid.cellSize / 2, allowedAt);
+    return back && cell ? moveTo(s, ...back, cellIndexOf(grid, ...cell)) : s;
   };
   for (const s of withMirror(found)) {
     const room = roomOf[s.cell];

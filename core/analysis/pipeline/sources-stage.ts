@@ -64,14 +64,16 @@ export function supportRule(
 }
 
 /**
- * The allowed cells minus walk-ins and machine rooms whose fans run: their fans mix the room, so a
- * drift inside says nothing and only lets a spot there explain readings outside (no drift is fitted).
+ * The allowed cells (1, else 0) minus walk-ins and machine rooms whose fans run: their fans mix the room,
+ * so a drift inside says nothing and only lets a spot there explain readings outside (no drift is fitted).
  */
 export function outsideFanRooms(allowed: Uint8Array, grid: PlanGrid, plan: LocatorInput["plan"]): Uint8Array {
   const rooms = fanRoomsScale(grid, plan, 0.5);
   if (!rooms) return allowed;
   const out = new Uint8Array(allowed);
-  for (let c = 0; c < out.length; c++) if (rooms[c] < 1) out[c] = 0;
+  // only the allowed cells' span can lose one (a retry screen's is its circle's; decision 0163)
+  const to = allowed.lastIndexOf(1) + 1;
+  for (let c = Math.max(0, allowed.indexOf(1)); c < to; c++) if (rooms[c] < 1) out[c] = 0;
   return out;
 }
 
@@ -83,14 +85,18 @@ export function outsideFanRooms(allowed: Uint8Array, grid: PlanGrid, plan: Locat
 function allowedCells(
   grid: PlanGrid,
   zones: Pick<ZonesResult, "inside" | "distance">,
-  nearestReading: Float32Array,
+  fields: Pick<ReadingFields, "nearestReading" | "reach">,
   onEquipment: Uint8Array | null,
   zoneMarginM: number,
   maxReachM: number,
 ): Uint8Array {
   const cells = grid.width * grid.height;
   const allowed = new Uint8Array(cells);
-  for (let c = 0; c < cells; c++) {
+  const nearestReading = fields.nearestReading;
+  // a retry screen's field reaches the rows of its circle only: no cell elsewhere is within reach
+  const from = fields.reach?.from ?? 0;
+  const to = fields.reach?.to ?? cells;
+  for (let c = from; c < to; c++) {
     allowed[c] =
       !grid.blocked[c] &&
       !zones.inside[c] &&
@@ -119,7 +125,7 @@ export function sourcesStage(
   const allowed = allowedCells(
     grid,
     zones,
-    field.fields.nearestReading,
+    field.fields,
     equipmentMask(grid, plan, s.equipmentMarginM),
     settings.zoneMarginM,
     s.maxReachM,

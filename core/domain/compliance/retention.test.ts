@@ -14,6 +14,12 @@ describe("record retention follows the rule profile", () => {
     expect(recordRetention(US_FEDERAL_PROFILE, null).keptUntil).toBeNull();
   });
 
+  it("counts from a finding closed after the retirement because the system left service (docs/decisions/0166)", () => {
+    // The same 3 years [S:R6,R7], from the closing's day when it is later than the retirement day.
+    expect(recordRetention(US_FEDERAL_PROFILE, "2026-04-30", "2026-06-15").keptUntil).toBe("2029-06-15");
+    expect(recordRetention(US_FEDERAL_PROFILE, "2026-04-30", "2026-03-01").keptUntil).toBe("2029-04-30");
+  });
+
   it("a retired system still owes the chronic-leaker report for a year it served, and nothing else", () => {
     const lb = (n: number) => n * KG_PER_POUND; // NIST SP 811: 0.45359237 kg per lb exactly
     const rec = {

@@ -1,4 +1,4 @@
-import { addMonths, type IsoDate } from "../dates/calendar-date";
+import { addMonths, compareDates, type IsoDate } from "../dates/calendar-date";
 import type { RuleProfile } from "./rule-profile";
 
 export interface Retention {
@@ -10,14 +10,20 @@ export interface Retention {
 
 /**
  * How long a system's records are kept, from the rule profile (US 3 years [S:R6,R7]; EU at least
- * 5 years [S:E8b]). No record is dated after the retirement, so counting the years from the
- * retirement day keeps every record at least that long after its own date.
+ * 5 years [S:E8b]). No record is dated after the retirement but the closing of a finding because the
+ * system left service (docs/decisions/0166), so counting the years from the later of the retirement
+ * day and the latest record keeps every record at least that long after its own date.
  */
-export function recordRetention(profile: RuleProfile, retiredOn: IsoDate | null): Retention {
+export function recordRetention(
+  profile: RuleProfile,
+  retiredOn: IsoDate | null,
+  latestRecordOn: IsoDate | null = null,
+): Retention {
   const years = profile.recordRetentionYears.value;
+  const from = retiredOn && latestRecordOn && compareDates(latestRecordOn, retiredOn) > 0 ? latestRecordOn : retiredOn;
   return {
     years,
     source: profile.recordRetentionYears.source,
-    keptUntil: retiredOn ? addMonths(retiredOn, years * 12) : null,
+    keptUntil: from ? addMonths(from, years * 12) : null,
   };
 }

@@ -6,7 +6,8 @@ import type { Permission } from "../roles";
  * sends the finding back to confirmed: the leak is still there and needs another repair
  * (40 CFR 82.152 "verification test" definitions [S:R8]; the loop back is our reading). Under EU F-gas
  * rules there are no verification tests: a repaired finding closes once a leak check of its system
- * found no leak on or after the repair day (the re-check, Regulation (EU) 2024/573 [S:E6]).
+ * found no leak on or after the repair day (the re-check, Regulation (EU) 2024/573 [S:E6]). A finding
+ * still open when its system is retired closes as "left service" instead (docs/decisions/0166).
  */
 export type FindingStatus = "suspected" | "confirmed" | "repaired" | "verified" | "closed" | "dismissed";
 export type FindingEventKind =
@@ -16,9 +17,19 @@ export type FindingEventKind =
   | "initial-test"
   | "follow-up-test"
   | "closed"
+  | "closed-left-service"
   | "dismissed";
-export type FindingAction = "confirm" | "repair" | "initial-test" | "follow-up-test" | "close" | "dismiss";
+export type FindingAction =
+  | "confirm"
+  | "repair"
+  | "initial-test"
+  | "follow-up-test"
+  | "close"
+  | "close-left-service"
+  | "dismiss";
+/** In the order the finding screen offers them: closing because the system left service comes first once it has. */
 export const FINDING_ACTIONS: readonly FindingAction[] = [
+  "close-left-service",
   "confirm",
   "repair",
   "initial-test",
@@ -41,6 +52,7 @@ export const ACTION_PERMISSION: Record<FindingAction, Permission> = {
   "initial-test": "findings.record",
   "follow-up-test": "findings.record",
   close: "findings.close",
+  "close-left-service": "findings.close",
   dismiss: "findings.close",
 };
 
@@ -50,6 +62,7 @@ export const ACTION_LABELS: Record<FindingAction, string> = {
   "initial-test": "Record the initial verification test",
   "follow-up-test": "Record the follow-up verification test",
   close: "Close the finding",
+  "close-left-service": "Close: the system left service",
   dismiss: "Dismiss the finding",
 };
 
@@ -91,9 +104,12 @@ export function transition(
   action: FindingAction,
   result?: "passed" | "failed",
   verification: Verification = BY_TESTS,
+  /** The day the finding's system left service (store calendar), or null while it is in service. */
+  retiredOn: string | null = null,
 ): Transition {
   const status = currentStatus(events);
   const refuse = (why: string): Transition => ({ ok: false, message: `This finding is ${status}: ${why}` });
+  if (action === "close-left-service") return closeLeftService(events, verification, retiredOn, refuse);
   if (verification.by === "recheck") {
     if (action === "initial-test" || action === "follow-up-test")
       return refuse("under these rules a repair is verified by a leak check after it, not by verification tests.");
@@ -140,9 +156,34 @@ export function transition(
   }
 }
 
+/**
+ * Closing a finding because its system left service (docs/decisions/0166): once the system is retired,
+ * a leak still open on it can no longer be repaired and verified there, and the rules owe no more
+ * repair, test or leak check on equipment out of service. Not for a finding whose repair is verified
+ * (it closes as verified) nor one already closed or dismissed.
+ */
+function closeLeftService(
+  events: readonly LifecycleEvent[],
+  verification: Verification,
+  retiredOn: string | null,
+  refuse: (why: string) => Transition,
+): Transition {
+  const status = currentStatus(events);
+  if (status === "closed" || status === "dismissed") return refuse("it needs no closing.");
+  if (transition(events, "close", undefined, verification).ok)
+    return refuse("its repair is verified, so close it as verified (Close the finding).");
+  if (retiredOn === null)
+    return refuse("its system is in service; a finding closes this way only once its system has been retired.");
+  return { ok: true, kind: "closed-left-service", status: "closed" };
+}
+
 /** Actions that make sense next, for the buttons on the finding screen. */
-export function nextActions(events: readonly LifecycleEvent[], verification: Verification = BY_TESTS): FindingAction[] {
-  return FINDING_ACTIONS.filter((a) => transition(events, a, "passed", verification).ok);
+export function nextActions(
+  events: readonly LifecycleEvent[],
+  verification: Verification = BY_TESTS,
+  retiredOn: string | null = null,
+): FindingAction[] {
+  return FINDING_ACTIONS.filter((a) => transition(events, a, "passed", verification, retiredOn).ok);
 }
 
 export function isOpen(status: FindingStatus): boolean {

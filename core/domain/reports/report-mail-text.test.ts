@@ -73,4 +73,18 @@ describe("report e-mail summary", () => {
       "Confirmed leak: Dairy 2, found 3 Nov — Traced to a brazed joint.",
     ]);
   });
+
+  it("says a leak closed because its system left service so, after the other closed ones (docs/decisions/0166)", () => {
+    const findings: ReportFinding[] = [
+      { status: "closed-left-service", found: "4 Nov 2026, 07:30 GMT-6", where: "Dairy 2", note: "" },
+      { status: "suspected", found: "4 Nov 2026, 07:35 GMT-6", where: "Produce 1", note: "" },
+      { status: "closed", found: "4 Nov 2026, 07:41 GMT-6", where: "Frozen reach-in 4", note: "" },
+    ];
+    expect(reportMailFindings(findings, []).map((l) => l.split(":")[0])).toEqual([
+      "Closed",
+      "Closed",
+      "Suspected, not yet confirmed",
+    ]);
+    expect(reportMailFindings(findings, [])[1]).toMatch(/^Closed: the system left service: Dairy 2, found/);
+  });
 });

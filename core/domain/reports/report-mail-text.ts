@@ -6,12 +6,14 @@ import type { ReportFinding, ReportSuspect } from "./sweep-report-model";
  * then the suspect spots no finding answers yet. A suspect spot answers to a finding placed inside its
  * search radius, the same test the field map uses to show "Finding recorded".
  */
-const ORDER = ["confirmed", "repaired", "verified", "closed", "suspected", "dismissed"];
+const ORDER = ["confirmed", "repaired", "verified", "closed", "closed-left-service", "suspected", "dismissed"];
 const HEADINGS: Record<string, string> = {
   confirmed: "Confirmed leak",
   repaired: "Repaired leak",
   verified: "Repaired and verified",
   closed: "Closed",
+  // docs/decisions/0166
+  "closed-left-service": "Closed: the system left service",
   suspected: "Suspected, not yet confirmed",
   dismissed: "Checked, no leak",
 };

@@ -3,7 +3,7 @@
  * per sweep. Suspect spots come from an analysis already made at the sweep's own settings and
  * revision; nothing is computed here, so the store page never waits on the locator.
  */
-import { and, count, desc, eq, inArray, max, ne } from "drizzle-orm";
+import { and, count, desc, eq, inArray, max, ne, sql } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import type { SweepSummaryItem } from "#core/contracts/sweep-summary";
 import { analyses, findings, readings, sweeps, users } from "../../db/schema/index";
@@ -13,6 +13,8 @@ import { paramsKey } from "./analysis-inputs";
 
 export const SWEEP_SUMMARY_COUNT = 8;
 const CONFIRMED_OR_LATER = new Set(["confirmed", "repaired", "verified", "closed"]);
+// A finding closed because its system left service may never have been confirmed (docs/decisions/0166).
+const everConfirmed = sql<boolean>`exists (select 1 from "finding_events" e where e."finding_id" = "findings"."id" and e."kind" = 'confirmed')`;
 
 export async function sweepSummary(ctx: AppContext, viewer: Viewer, storeId: string): Promise<SweepSummaryItem[]> {
   await loadVisibleStore(ctx, viewer, storeId);
@@ -32,10 +34,10 @@ export async function sweepSummary(ctx: AppContext, viewer: Viewer, storeId: str
       .where(inArray(readings.sweepId, ids))
       .groupBy(readings.sweepId),
     ctx.db
-      .select({ sweepId: findings.sweepId, status: findings.status, n: count() })
+      .select({ sweepId: findings.sweepId, status: findings.status, confirmed: everConfirmed, n: count() })
       .from(findings)
       .where(and(inArray(findings.sweepId, ids), eq(findings.companyId, viewer.companyId)))
-      .groupBy(findings.sweepId, findings.status),
+      .groupBy(findings.sweepId, findings.status, everConfirmed),
     ctx.db
       .select({
         sweepId: analyses.sweepId,
@@ -68,7 +70,9 @@ export async function sweepSummary(ctx: AppContext, viewer: Viewer, storeId: str
         peakAtLeast: peggedAtPeak.some((p) => p.sweepId === sweep.id && peak?.peak != null && p.ppm >= peak.peak),
         suspects: analysis ? analysis.result.candidates.length : null,
         findings: mine.reduce((s, f) => s + f.n, 0),
-        confirmed: mine.filter((f) => CONFIRMED_OR_LATER.has(f.status)).reduce((s, f) => s + f.n, 0),
+        confirmed: mine
+          .filter((f) => CONFIRMED_OR_LATER.has(f.status) && (f.status !== "closed" || f.confirmed))
+          .reduce((s, f) => s + f.n, 0),
       };
     })
     .reverse();

@@ -4,6 +4,7 @@ import { PASSWORD, seedCompany } from "../../../tests/helpers/fixtures";
 import { caseLineFixtures, caseWalkReadings } from "../../../tests/helpers/sweep-walk";
 import { detectors } from "../../db/schema/index";
 import type { Role } from "#core/domain/roles";
+import { localDateOf } from "#core/domain/dates/time-zone";
 
 let t: TestApp;
 let co: Awaited<ReturnType<typeof seedCompany>>;
@@ -92,6 +93,35 @@ describe("store sweep summary", () => {
     const after = await eng.get(`/api/stores/${co.store.id}/sweep-summary`);
     expect(after.body.sweeps[0].suspects).toBe(analysis.body.candidates.length);
     expect(after.body.sweeps[0].suspects).toBeGreaterThan(0);
+  });
+
+  it("counts a finding closed because its system left service as confirmed only if it was (docs/decisions/0166)", async () => {
+    const lead = await as("lead-tech");
+    const sys = await lead.post(`/api/stores/${co.store.id}/systems`, {
+      name: "Rack K",
+      refrigerantId: "R-448A",
+      fullCharge: { value: 300, unit: "lb" },
+      applianceType: "commercial-refrigeration",
+      automaticLeakDetection: false,
+      inServiceOn: "2026-01-01",
+    });
+    expect(sys.status).toBe(201);
+    const tech = await as("technician");
+    const ids: string[] = [];
+    for (const f of [
+      { status: "confirmed", component: "valve", sweepId: sweepIds[1], systemId: sys.body.id },
+      { status: "suspected", sweepId: sweepIds[1], systemId: sys.body.id },
+    ])
+      ids.push((await tech.post(`/api/stores/${co.store.id}/findings`, f)).body.id);
+    const today = localDateOf(new Date(), co.store.timeZone);
+    expect(
+      (await lead.post(`/api/systems/${sys.body.id}/retire`, { retiredOn: today, reasonKind: "removed" })).status,
+    ).toBe(200);
+    const eng = await as("engineer");
+    for (const id of ids)
+      expect((await eng.post(`/api/findings/${id}/events`, { action: "close-left-service" })).status).toBe(200);
+    const second = (await eng.get(`/api/stores/${co.store.id}/sweep-summary`)).body.sweeps[1];
+    expect(second).toMatchObject({ findings: 2, confirmed: 1 });
   });
 
   it("is another company's 404 and a bad id's field error", async () => {

@@ -1,4 +1,4 @@
-import { and, asc, desc, eq, inArray, isNull } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, isNull, max } from "drizzle-orm";
 import type { z } from "zod";
 import type { AppContext } from "../../context";
 import type {
@@ -14,6 +14,7 @@ import {
   chargeAdditions,
   chronicLeakerReports,
   complianceAudit,
+  findingEvents,
   findings,
   leakChecks,
   leakDetectionChecks,
@@ -121,7 +122,7 @@ export async function getSystemRecords(
   const [s] = await statusesOf(ctx, rules, [row], now);
   const st = s.status;
   // Independent reads of the system's records: asked together, not one after another.
-  const [checks, ldsChecks, reports, audit, withRecords] = await Promise.all([
+  const [checks, ldsChecks, reports, audit, withRecords, latestStep] = await Promise.all([
     ctx.db
       .select({ c: leakChecks, by: users.name })
       .from(leakChecks)
@@ -146,6 +147,12 @@ export async function getSystemRecords(
       .where(eq(complianceAudit.systemId, systemId))
       .orderBy(desc(complianceAudit.at), desc(complianceAudit.id)),
     hasRecords(ctx, systemId),
+    // A finding closed because the system left service is dated after the retirement (docs/decisions/0166).
+    ctx.db
+      .select({ on: max(findingEvents.on) })
+      .from(findingEvents)
+      .innerJoin(findings, eq(findings.id, findingEvents.findingId))
+      .where(eq(findings.systemId, systemId)),
   ]);
   const system = toSystem(
     row.system,
@@ -167,7 +174,7 @@ export async function getSystemRecords(
       wording: profileWording(rules.profile),
       leakRateRules: rules.profile.leakRateParts.length > 0,
     },
-    retention: recordRetention(rules.profile, retiredOnOf(row.system, row.store.timeZone)),
+    retention: recordRetention(rules.profile, retiredOnOf(row.system, row.store.timeZone), latestStep[0]?.on ?? null),
     applicability: st.applicability,
     automaticLeakDetection: st.automaticLeakDetection,
     leakRates: st.points.map(toRow),

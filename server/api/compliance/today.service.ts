@@ -9,7 +9,7 @@ import { isStoreScoped } from "#core/domain/roles";
 import { checkStatus } from "../detectors/detectors.service";
 import { visibleStores, type Viewer } from "../../access/store-access";
 import { systemDueItems } from "./due-items";
-import { companyRules, statusesOf } from "./system-records";
+import { companyRules, retiredOnOf, statusesOf } from "./system-records";
 import { profileWording } from "#core/domain/compliance/company-profile";
 
 /** Overdue first, then by date; undated (never checked) at the top of what is overdue. */
@@ -118,10 +118,12 @@ export async function today(
         )
     : [];
   const systemNames = new Map(sysRows.map((s) => [s.id, s.name]));
+  const systemsById = new Map(sysRows.map((s) => [s.id, s]));
   const statusBySystem = new Map(statuses.map((s) => [s.system.id, s]));
   const openFindings = open.map((f) => {
     const store = storesById.get(f.storeId)!;
     const st = f.systemId ? statusBySystem.get(f.systemId) : undefined;
+    const sys = f.systemId ? systemsById.get(f.systemId) : undefined;
     const mine =
       st?.status.due.filter((d) =>
         d.findingId
@@ -140,6 +142,8 @@ export async function today(
       foundOn: localDateOf(f.foundAt, store.timeZone),
       deadline: first?.dueOn ?? null,
       deadlineSource: first?.source ?? null,
+      // Open on a retired system: it owes nothing more and waits to be closed as left service (docs/decisions/0166).
+      systemRetiredOn: sys ? retiredOnOf(sys, store.timeZone) : null,
       link: `/findings/${f.id}`,
     };
   });

@@ -7,6 +7,7 @@ import { revisionHistory, type RevisionRow } from "#core/domain/compliance/revis
 import { citedWithAcceptance } from "#core/domain/compliance/readings";
 import { readableAuditEntry } from "#core/domain/compliance/audit-entry";
 import { retireReasonWords } from "#core/domain/compliance/retirement-words";
+import { findingStateWords } from "#core/domain/findings/left-service";
 import { statementTitle } from "#core/domain/compliance/company-profile";
 import { formatCalendarDay as day, formatInZone } from "#core/domain/dates/format-in-zone";
 import { formatAsGiven, formatGrouped, formatQuantity, type NumberFormat } from "#core/domain/numbers/number-format";
@@ -377,7 +378,7 @@ function findingsSection(doc: Doc, findingList: FindingDetail[]) {
       .fontSize(9.5)
       .fillColor(INK)
       .text(
-        `${f.component ? COMPONENT_LABELS[f.component] : "Component not recorded"} – ${f.status}${f.dismissReason ? ` (${DISMISS_REASON_WORDS[f.dismissReason] ?? f.dismissReason})` : ""}`,
+        `${f.component ? COMPONENT_LABELS[f.component] : "Component not recorded"} – ${findingStateWords(f)}${f.dismissReason ? ` (${DISMISS_REASON_WORDS[f.dismissReason] ?? f.dismissReason})` : ""}`,
         MARGIN,
       );
     table(

@@ -6,7 +6,7 @@ import { dueStatus } from "#core/domain/compliance/deadlines";
 import { nextActions, type LifecycleEvent } from "#core/domain/findings/lifecycle";
 import { lookupFor } from "../refrigerants/company-refrigerant-lookup";
 import { cautionsFor, type CautionPlace } from "#core/domain/safety/cautions";
-import { companyRules, type StoreRow, type SystemWithStatus } from "../compliance/system-records";
+import { companyRules, retiredOnOf, type StoreRow, type SystemWithStatus } from "../compliance/system-records";
 import { profileWording } from "#core/domain/compliance/company-profile";
 import { repairVerification } from "./repair-verification";
 
@@ -42,7 +42,13 @@ export async function toFindingDetails(
       .where(inArray(findingPhotos.findingId, ids))
       .orderBy(asc(findingPhotos.takenAt)),
     ctx.db
-      .select({ id: systems.id, name: systems.name, refrigerantId: systems.refrigerantId })
+      .select({
+        id: systems.id,
+        name: systems.name,
+        refrigerantId: systems.refrigerantId,
+        retiredAt: systems.retiredAt,
+        retiredOn: systems.retiredOn,
+      })
       .from(systems)
       .where(
         inArray(
@@ -81,6 +87,7 @@ export async function toFindingDetails(
       result: x.e.result,
     }));
     const system = sys.find((s) => s.id === row.systemId) ?? null;
+    const systemRetiredOn = system ? retiredOnOf(system, store.timeZone) : null;
     const st = row.systemId ? statuses.get(row.systemId) : undefined;
     const deadlines: FindingDetail["deadlines"] = [];
     if (st) {
@@ -143,7 +150,8 @@ export async function toFindingDetails(
       fixtureLabel: fixture?.label || null,
       refrigerantId: system?.refrigerantId ?? null,
       dismissReason: row.dismissReason,
-      nextActions: nextActions(lifecycle, verification(row.systemId)),
+      nextActions: nextActions(lifecycle, verification(row.systemId), systemRetiredOn),
+      systemRetiredOn,
       deadlines,
       cautions: cautionsFor({ refrigerant, place, rules }).map((c) => ({
         id: c.id,

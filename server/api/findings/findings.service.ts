@@ -4,14 +4,31 @@ import type { z } from "zod";
 import type { AppContext } from "../../context";
 import type { FindingActionInput, FindingDetail } from "#core/contracts/finding-actions";
 import type { createFindingInput } from "#core/contracts/findings";
-import { findingEvents, findings, fixtures, plans, stores, sweeps, systems } from "../../db/schema/index";
+import {
+  complianceAudit,
+  findingEvents,
+  findings,
+  fixtures,
+  plans,
+  stores,
+  sweeps,
+  systems,
+} from "../../db/schema/index";
 import { compareDates, parseIsoDate } from "#core/domain/dates/calendar-date";
 import { localDateOf } from "#core/domain/dates/time-zone";
 import { DomainInputError } from "#core/domain/input-error";
 import { ACTION_PERMISSION, transition, type LifecycleEvent } from "#core/domain/findings/lifecycle";
 import { can } from "#core/domain/roles";
 import { badRequest, conflict, forbidden, notFound, HttpError } from "../../lib/http-error";
-import { companyRules, statusesOf, type StoreRow, type SystemWithStatus } from "../compliance/system-records";
+import {
+  companyRules,
+  retiredOnOf,
+  statusesOf,
+  type StoreRow,
+  type SystemWithStatus,
+} from "../compliance/system-records";
+import { leftServiceDayError } from "#core/domain/findings/left-service";
+import { COMPONENT_LABELS } from "#core/contracts/findings";
 import { loadVisibleStore, type Viewer } from "../../access/store-access";
 import { toFindingDetails, type FindingRow } from "./finding-view";
 import { repairVerification } from "./repair-verification";
@@ -257,12 +274,13 @@ export async function addFindingEvent(
   const { row, store } = await loadFindingRow(ctx, viewer, id);
   if (!can(viewer.role, ACTION_PERMISSION[input.action])) {
     throw forbidden(
-      input.action === "close" || input.action === "dismiss"
+      ACTION_PERMISSION[input.action] === "findings.close"
         ? "Only engineers and owners close or dismiss findings."
         : "Your role does not allow recording findings.",
     );
   }
   const on = eventDay(input.on, store);
+  const system = await findingSystem(ctx, row.systemId, store);
   const verification = (
     await repairVerification(ctx, profileWording((await companyRules(ctx, viewer.companyId)).profile), [row.systemId])
   )(row.systemId);
@@ -281,8 +299,13 @@ export async function addFindingEvent(
       result: e.result,
     }));
     const result = "result" in input ? input.result : undefined;
-    const t = transition(lifecycle, input.action, result, verification);
+    const t = transition(lifecycle, input.action, result, verification, system?.retiredOn ?? null);
     if (!t.ok) throw conflict(t.message);
+    const afterRetirement = system ? leftServiceDayError(input.action, on, system) : null;
+    if (afterRetirement)
+      throw badRequest(`Please check: on ${afterRetirement}.`, {
+        on: afterRetirement,
+      });
     const last = events.at(-1);
     if (last && compareDates(on, last.on) < 0) {
       // Days written as every screen writes them: the form shows this under its date field.
@@ -318,6 +341,30 @@ export async function addFindingEvent(
         ...(input.action === "dismiss" ? { dismissReason: input.reason } : {}),
       })
       .where(eq(findings.id, row.id));
+    if (t.kind === "closed-left-service" && system?.retiredOn) {
+      // The audit trail says who closed it this way and when (docs/decisions/0166).
+      const what = row.component
+        ? COMPONENT_LABELS[row.component as keyof typeof COMPONENT_LABELS]
+        : "component not recorded";
+      await tx.insert(complianceAudit).values({
+        companyId: viewer.companyId,
+        systemId: system.id,
+        action: "finding-closed-left-service",
+        byId: userId,
+        at,
+        summary: `Finding of ${lifecycle[0]?.on ?? on} (${what.toLowerCase()}, ${lifecycle.at(-1)?.status ?? "suspected"}) closed on ${on}: ${system.name} left service on ${system.retiredOn}; no repair, verification or leak check is owed on it`,
+      });
+    }
   });
   return getFinding(ctx, viewer, id);
+}
+
+/** The finding's system with the day it left service (null while in service), or null when it names none. */
+async function findingSystem(ctx: AppContext, systemId: string | null, store: StoreRow) {
+  if (!systemId) return null;
+  const [s] = await ctx.db
+    .select({ id: systems.id, name: systems.name, retiredAt: systems.retiredAt, retiredOn: systems.retiredOn })
+    .from(systems)
+    .where(eq(systems.id, systemId));
+  return s ? { id: s.id, name: s.name, retiredOn: retiredOnOf(s, store.timeZone) } : null;
 }

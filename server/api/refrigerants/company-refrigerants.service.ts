@@ -19,6 +19,7 @@ import {
 } from "../../db/schema/index";
 import { badRequest, conflict, notFound } from "../../lib/http-error";
 import { companyGwpBases } from "../systems/systems.service";
+import { rulesOfSettings, type CompanyRules } from "../compliance/system-records";
 import type { DbOrTx } from "../../db/tx";
 import { rowFacts, type RefrigerantRow } from "./company-refrigerant-lookup";
 
@@ -46,8 +47,13 @@ async function usage(db: DbOrTx, companyId: string, keys: string[]): Promise<Map
   return new Map([...seen].map(([k, s]) => [k, s.size]));
 }
 
-async function views(ctx: AppContext, companyId: string, rows: RefrigerantRow[]): Promise<CompanyRefrigerantView[]> {
-  const choice = await companyGwpBases(ctx, companyId);
+async function views(
+  ctx: AppContext,
+  companyId: string,
+  rows: RefrigerantRow[],
+  rules?: CompanyRules,
+): Promise<CompanyRefrigerantView[]> {
+  const choice = await companyGwpBases(ctx, companyId, rules);
   const used = await usage(
     ctx.db,
     companyId,
@@ -123,11 +129,13 @@ export async function createCompanyRefrigerant(
     .from(companyRefrigerants)
     .where(and(eq(companyRefrigerants.companyId, companyId), eq(companyRefrigerants.nameKey, nameKey)));
   if (taken) throw badRequest(`Please check: name ${NAME_TAKEN}.`, { name: NAME_TAKEN });
+  // One read of the company's row: its number format for the audit's words, its rules for the view.
   const [company] = await ctx.db
-    .select({ number: companies.numberFormat })
+    .select({ ruleProfile: companies.ruleProfile, method: companies.leakRateMethod, number: companies.numberFormat })
     .from(companies)
     .where(eq(companies.id, companyId));
   const format = company?.number ?? "1,234.5";
+  const rules = await rulesOfSettings(ctx, companyId, company);
   const row = await ctx.db.transaction(async (tx) => {
     const [created] = await tx
       .insert(companyRefrigerants)
@@ -158,7 +166,7 @@ export async function createCompanyRefrigerant(
   });
   // Two people saving the same name at once: the second is told, not given a 500.
   if (!row) throw badRequest(`Please check: name ${NAME_TAKEN}.`, { name: NAME_TAKEN });
-  return (await views(ctx, companyId, [row]))[0];
+  return (await views(ctx, companyId, [row], rules))[0];
 }
 
 /** The audit's words for a refrigerant the company entered, its figures in the company's number format. */

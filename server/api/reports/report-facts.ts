@@ -8,6 +8,7 @@ import type { AppContext } from "../../context";
 import {
   companies,
   detectors,
+  findingEvents,
   findings,
   fixtures,
   plans,
@@ -116,6 +117,25 @@ export async function loadReportFacts(
       .where(eq(sweepPasses.sweepId, sweep.id))
       .orderBy(asc(sweepPasses.startedAt), asc(sweepPasses.id)),
   ]);
+  // A finding closed because its system left service reads so in the report (docs/decisions/0166).
+  const leftService = findingRows.length
+    ? new Set(
+        (
+          await ctx.db
+            .select({ id: findingEvents.findingId })
+            .from(findingEvents)
+            .where(
+              and(
+                inArray(
+                  findingEvents.findingId,
+                  findingRows.map((f) => f.id),
+                ),
+                eq(findingEvents.kind, "closed-left-service"),
+              ),
+            )
+        ).map((r) => r.id),
+      )
+    : new Set<string>();
   const passOf = passNumberOf(passRows);
   const label = new Map(fixtureRows.map((f) => [f.id, f.label || f.kind]));
   const fmt = units.number;
@@ -210,7 +230,7 @@ export async function loadReportFacts(
     assumptions: words?.assumptions ?? [],
     diagnostics: [...(analysisProblem ? [analysisProblem] : []), ...(words?.diagnostics.map((d) => d.text) ?? [])],
     findings: findingRows.map((f) => ({
-      status: f.status,
+      status: leftService.has(f.id) ? "closed-left-service" : f.status,
       found: zonedDateTime(f.foundAt, tz),
       where:
         [

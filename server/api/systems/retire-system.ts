@@ -30,6 +30,7 @@ const LEAK_EVENT_WORDS: Record<(typeof findingEvents.$inferSelect)["kind"], stri
   "initial-test": "a repair's initial verification test was recorded",
   "follow-up-test": "a repair's follow-up verification test was recorded",
   closed: "a leak record was closed",
+  "closed-left-service": "a leak record was closed as its system left service",
   dismissed: "a suspected leak was dismissed",
 };
 

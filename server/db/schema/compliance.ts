@@ -188,6 +188,7 @@ export const COMPLIANCE_AUDIT_ACTIONS = [
   "refrigerant-retired",
   "refrigerant-restored",
   "refrigerant-deleted",
+  "finding-closed-left-service",
 ] as const;
 
 /** What was done to a system's compliance records, by whom and when (append-only). */

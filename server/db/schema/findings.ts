@@ -13,6 +13,7 @@ export const FINDING_EVENT_KINDS = [
   "initial-test",
   "follow-up-test",
   "closed",
+  "closed-left-service",
   "dismissed",
 ] as const;
 

@@ -2,6 +2,8 @@ import { useNavigate, useParams } from "react-router";
 import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 import { COMPONENT_LABELS } from "#core/contracts/findings";
 import { can } from "#core/domain/roles";
+import { findingStateWords } from "#core/domain/findings/left-service";
+import { ACTION_LABELS } from "#core/domain/findings/lifecycle";
 import { PageHeader } from "../../components/ui/page-header";
 import { QueryError } from "../../components/ui/query-error";
 import { Spinner } from "../../components/ui/spinner";
@@ -66,13 +68,19 @@ export function Component() {
                 <li key={f.id}>
                   <Link className="text-accent underline" to={`/findings/${f.id}`}>
                     {formatCalendarDay(f.events[0]?.on ?? null)} ·{" "}
-                    {f.component ? COMPONENT_LABELS[f.component] : "component not yet known"} · {f.status}
+                    {f.component ? COMPONENT_LABELS[f.component] : "component not yet known"} · {findingStateWords(f)}
                   </Link>
                   {f.deadlines[0] ? ` · due ${formatCalendarDay(f.deadlines[0].dueOn)}` : ""}
                 </li>
               ))}
             </ul>
           )}
+          {r.system.retired && list.some((f) => f.nextActions.includes("close-left-service")) ? (
+            <p data-testid="left-service-open">
+              Still open on a system out of service: an engineer or owner closes each with "
+              {ACTION_LABELS["close-left-service"]}" on its page. Nothing more is owed on them.
+            </p>
+          ) : null}
           {canRecord && r.system.retired ? (
             // A system out of service takes no new entry (docs/decisions/0124); its findings stay listed.
             <p className="text-muted">Out of service: no new finding is recorded against it.</p>

@@ -1,4 +1,6 @@
 import { Link } from "react-router";
+import { findingStateWords } from "#core/domain/findings/left-service";
+import type { FindingStatus } from "#core/domain/findings/lifecycle";
 import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 import { COMPONENT_LABELS, type FINDING_COMPONENTS } from "#core/contracts/findings";
 import { QueryError } from "../../../components/ui/query-error";
@@ -81,7 +83,12 @@ export function StoreRecordsSection({ storeId, numberFormat }: { storeId: string
                       {f.component ? COMPONENT_LABELS[f.component as (typeof FINDING_COMPONENTS)[number]] : "Leak"} on{" "}
                       {f.systemName ?? "no system"}
                     </Link>{" "}
-                    · {f.status}
+                    ·{" "}
+                    {findingStateWords({
+                      status: f.status as FindingStatus,
+                      events: [],
+                      systemRetiredOn: f.systemRetiredOn,
+                    })}
                     {f.deadline ? ` · due ${formatCalendarDay(f.deadline)}` : ""}
                   </li>
                 ))}

@@ -1,4 +1,6 @@
 import { useState } from "react";
+import { findingStateWords } from "#core/domain/findings/left-service";
+import type { FindingStatus } from "#core/domain/findings/lifecycle";
 import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 import { Link } from "react-router";
 import { COMPONENT_LABELS, type FINDING_COMPONENTS } from "#core/contracts/findings";
@@ -203,7 +205,16 @@ export function TodayView({
               },
               {
                 header: "Status",
-                cell: (r) => (r.status === "verified" ? "verified, ready to close" : r.status),
+                cell: (r) =>
+                  r.systemRetiredOn
+                    ? findingStateWords({
+                        status: r.status as FindingStatus,
+                        events: [],
+                        systemRetiredOn: r.systemRetiredOn,
+                      })
+                    : r.status === "verified"
+                      ? "verified, ready to close"
+                      : r.status,
                 filterValue: (r) => r.status,
               },
               { header: "Store", cell: (r) => r.storeName },

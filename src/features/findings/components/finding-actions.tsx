@@ -20,7 +20,12 @@ const REASON_LABELS: Record<(typeof DISMISS_REASONS)[number], string> = {
 export function FindingActions({ finding, role, today }: { finding: FindingDetail; role: Role; today: string }) {
   const allowed = finding.nextActions.filter((a) => can(role, ACTION_PERMISSION[a]));
   const [action, setAction] = useState<FindingAction | null>(allowed[0] ?? null);
-  const [on, setOn] = useState(today);
+  // Once the system has left service, a step other than its closing is dated by that day.
+  const retiredBy = (a: FindingAction | null) =>
+    finding.systemRetiredOn && a !== "close-left-service" && finding.systemRetiredOn < today
+      ? finding.systemRetiredOn
+      : today;
+  const [on, setOn] = useState(() => retiredBy(allowed[0] ?? null));
   const [note, setNote] = useState("");
   const [component, setComponent] = useState(finding.component ?? "");
   const [result, setResult] = useState<"passed" | "failed">("passed");
@@ -29,6 +34,13 @@ export function FindingActions({ finding, role, today }: { finding: FindingDetai
   const current = action && allowed.includes(action) ? action : (allowed[0] ?? null);
   if (!current) return null;
   const fields = serverFieldErrors(m.error);
+  // Once the system has left service, its closing is dated on or after that day (the day it is done by
+  // default) and every other step by then.
+  const retiredOn = finding.systemRetiredOn;
+  const pick = (a: FindingAction) => {
+    setAction(a);
+    if (retiredOn && (a === "close-left-service" || on > retiredOn)) setOn(retiredBy(a));
+  };
   const submit = (e: FormEvent) => {
     e.preventDefault();
     const base = { on, note };
@@ -48,7 +60,7 @@ export function FindingActions({ finding, role, today }: { finding: FindingDetai
   };
   const message = formErrorMessage(m.error);
   return (
-    <form onSubmit={submit} aria-label="Next step" className="space-y-3 rounded-md bg-surface p-4 edge">
+    <form onSubmit={submit} noValidate aria-label="Next step" className="space-y-3 rounded-md bg-surface p-4 edge">
       <h2 className="text-lg font-bold">Next step</h2>
       {message ? <Alert tone="error">{message}</Alert> : null}
       <div className="flex flex-wrap gap-2" role="group" aria-label="Step">
@@ -57,7 +69,7 @@ export function FindingActions({ finding, role, today }: { finding: FindingDetai
             key={a}
             variant={a === current ? "primary" : "secondary"}
             aria-pressed={a === current}
-            onClick={() => setAction(a)}
+            onClick={() => pick(a)}
           >
             {ACTION_LABELS[a]}
           </Button>
@@ -66,8 +78,10 @@ export function FindingActions({ finding, role, today }: { finding: FindingDetai
       <div className="grid gap-3 sm:grid-cols-2">
         <TextField
           label="Date"
+          name="on"
           type="date"
-          max={today}
+          max={retiredOn && current !== "close-left-service" && retiredOn < today ? retiredOn : today}
+          min={retiredOn && current === "close-left-service" ? retiredOn : undefined}
           value={on}
           onChange={(e) => setOn(e.target.value)}
           error={fields.on}

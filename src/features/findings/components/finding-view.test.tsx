@@ -29,6 +29,7 @@ const finding: FindingDetail = {
   refrigerantId: null,
   dismissReason: null,
   nextActions: [],
+  systemRetiredOn: null,
   deadlines: [
     {
       what: "Repair",

@@ -8,6 +8,7 @@ import { formErrorMessage } from "../../../lib/form-errors";
 import { useChangeFinding } from "../api/change-finding";
 import { SourceText } from "../../../components/ui/source-text";
 import { formatLength, type LengthPreference } from "#core/domain/units/format-units";
+import { findingStateWords } from "#core/domain/findings/left-service";
 
 /** A finding: where and what, its deadlines with their rules, the signed history and photos. */
 export function FindingView({
@@ -28,7 +29,7 @@ export function FindingView({
         <div className="rounded-md bg-surface p-3 edge">
           <dt className="text-sm text-muted">Status</dt>
           <dd className="font-bold" data-testid="finding-status">
-            {finding.status}
+            {findingStateWords(finding)}
             {finding.dismissReason ? ` (${finding.dismissReason})` : ""}
           </dd>
         </div>
@@ -50,6 +51,18 @@ export function FindingView({
         </div>
       </dl>
       {finding.note ? <p>{finding.note}</p> : null}
+      {finding.systemRetiredOn && finding.status !== "closed" && finding.status !== "dismissed" ? (
+        <Alert
+          tone="note"
+          title={`${finding.systemName} left service on ${formatCalendarDay(finding.systemRetiredOn)}`}
+        >
+          <p className="text-sm">
+            No repair, verification test or leak check is owed on it any more, and no step of this finding may be dated
+            after that day. An engineer or owner closes it with "Close: the system left service" (or closes a verified
+            repair as verified).
+          </p>
+        </Alert>
+      ) : null}
       {finding.fixtureLabel || finding.x !== null ? (
         <p className="text-sm text-muted">
           {finding.fixtureLabel ? `At ${finding.fixtureLabel}` : "On the plan"}

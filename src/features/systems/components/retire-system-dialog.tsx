@@ -8,6 +8,10 @@ import { TextField } from "../../../components/ui/text-field";
 import { formErrorMessage, serverFieldErrors, type FieldErrors } from "../../../lib/form-errors";
 import { useRetireSystem } from "../api/retire-system";
 import { readRetireDraft, type RetireDraft } from "../model/retire-draft";
+import { useFindings } from "../../../entities/findings/findings-api";
+import { COMPONENT_LABELS } from "#core/contracts/findings";
+import { ACTION_LABELS } from "#core/domain/findings/lifecycle";
+import { formatCalendarDay } from "#core/domain/dates/format-in-zone";
 
 const localToday = () => new Date().toLocaleDateString("sv-SE");
 
@@ -48,6 +52,7 @@ function RetireForm({ system, onClose }: { system: System; onClose(): void }) {
         Its records stay readable and are kept for the rule profile's period from the day it left service. It takes no
         new entry once retired.
       </p>
+      <OpenFindings system={system} />
       {message ? <Alert tone="error">{message}</Alert> : null}
       <TextField
         label="Retired on"
@@ -86,5 +91,32 @@ function RetireForm({ system, onClose }: { system: System; onClose(): void }) {
         </Button>
       </div>
     </form>
+  );
+}
+
+/**
+ * The findings still open on the system: once it is retired each is closed as "left service" by an
+ * engineer or owner, as its own signed step, rather than here (docs/decisions/0166: retiring is a lead
+ * tech's step, closing a finding is not).
+ */
+function OpenFindings({ system }: { system: System }) {
+  const findings = useFindings(system.storeId, system.id);
+  const open = (findings.data ?? []).filter((f) => f.status !== "closed" && f.status !== "dismissed");
+  if (open.length === 0) return null;
+  return (
+    <Alert tone="note" title={`${open.length === 1 ? "One finding is" : `${open.length} findings are`} still open`}>
+      <ul className="list-disc pl-5 text-sm" aria-label="Open findings">
+        {open.map((f) => (
+          <li key={f.id}>
+            {formatCalendarDay(f.events[0]?.on ?? null)} · {f.component ? COMPONENT_LABELS[f.component] : "leak"} ·{" "}
+            {f.status}
+          </li>
+        ))}
+      </ul>
+      <p className="text-sm">
+        Once {system.name} is retired they owe no repair, test or leak check; an engineer or owner then closes each with
+        "{ACTION_LABELS["close-left-service"]}". A step taken before it left service is recorded first, dated by then.
+      </p>
+    </Alert>
   );
 }
