@@ -148,7 +148,7 @@ export async function statusesOf(
         fullChargeKg: system.fullChargeKg,
         applianceType: system.applianceType,
         automaticLeakDetection: system.automaticLeakDetection,
-        enteredOn: system.inServiceOn ?? localDateOf(system.createdAt, store.timeZone),
+        enteredOn: inServiceOnOf(system, store.timeZone),
         // Every figure uses the values in force on its date (docs/decisions/0043-system-revisions.md).
         revisions: revisions
           .filter((r) => r.systemId === system.id)
@@ -190,6 +190,15 @@ export async function statusesOf(
       refrigerantName: designationOf(resolveStored(lookup, system.refrigerantId)),
     };
   });
+}
+
+/**
+ * The day a system entered service: as entered, else (a row written without one) the store's day it was
+ * created, as the backfill of migration 0010 set it. Never the UTC day: an evening entry in New York is
+ * already tomorrow in UTC.
+ */
+export function inServiceOnOf(system: Pick<SystemRow, "inServiceOn" | "createdAt">, timeZone: string): string {
+  return system.inServiceOn ?? localDateOf(system.createdAt, timeZone);
 }
 
 /** The day a system left service: as asked since it was (decision 0124), else the store's day of the retirement. */

@@ -69,7 +69,7 @@ async function recordsFor(f: CompanyFixture) {
     retiredOn: storeToday(),
     reasonKind: "store-closed",
   });
-  expect(removed.body.outcome).toBe("retired");
+  expect(removed.body.outcome, JSON.stringify(removed.body)).toBe("retired");
 }
 
 beforeAll(async () => {

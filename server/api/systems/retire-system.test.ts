@@ -201,6 +201,35 @@ describe("no record is ever lost (docs/decisions/0040-no-record-is-lost.md, 0124
     });
   });
 
+  it("a system row written without an in-service day entered service on the store's day it was created, not the UTC day", async () => {
+    // 03:00 UTC on 1 March is 22:00 on 28 February in New York (EST, UTC-5): the store's day is the 28th.
+    const [row] = await t.ctx.db
+      .insert(systems)
+      .values({
+        companyId: co.company.id,
+        storeId: co.store.id,
+        name: "Rack F (legacy row)",
+        refrigerantId: "R-404A",
+        fullChargeKg: 90,
+        applianceType: "commercial-refrigeration",
+        createdAt: new Date("2026-03-01T03:00:00Z"),
+      })
+      .returning();
+    const lead = await signedIn("lead-tech");
+    expect((await lead.get(`/api/systems/${row.id}`)).body.inServiceOn).toBe("2026-02-28");
+    // An edit that leaves the day alone does not count as changing it.
+    const renamed = await lead.patch(`/api/systems/${row.id}`, { name: "Rack F" });
+    expect(renamed.status, JSON.stringify(renamed.body)).toBe(200);
+    expect(renamed.body.inServiceOn).toBe("2026-02-28");
+    const retired = await lead.post(`/api/systems/${row.id}/retire`, {
+      retiredOn: "2026-02-28",
+      reasonKind: "other",
+      reason: "Removed the day it was entered",
+    });
+    expect(retired.status, JSON.stringify(retired.body)).toBe(200);
+    expect(retired.body.system.retired.on).toBe("2026-02-28");
+  });
+
   it("the database itself refuses to delete a system with records (foreign keys restrict, never cascade)", async () => {
     const id = await newSystem("Rack E");
     const tech = await signedIn("technician");

@@ -18,6 +18,7 @@ import type { Viewer } from "../../access/store-access";
 import { badRequest, conflict, HttpError } from "../../lib/http-error";
 import { eventDay } from "../findings/findings.service";
 import { hasRecords } from "./system-has-records";
+import { inServiceOnOf } from "../compliance/system-records";
 import { companyGwpBases, loadSystem, refuseRetired, toSystem } from "./systems.service";
 
 const FOREIGN_KEY_VIOLATION = "23503";
@@ -126,7 +127,7 @@ export async function retireSystem(
   refuseRetired(row);
   const [store] = await ctx.db.select().from(stores).where(eq(stores.id, row.storeId));
   const retiredOn = eventDay(input.retiredOn, store, "retiredOn");
-  const inService = row.inServiceOn ?? row.createdAt.toISOString().slice(0, 10);
+  const inService = inServiceOnOf(row, store.timeZone);
   if (compareDates(retiredOn, inService) < 0)
     throw badRequest(`Please check: retiredOn ${retiredOn} is before the system entered service (${inService}).`, {
       retiredOn: `must not be before the day it entered service (${formatCalendarDay(inService)})`,

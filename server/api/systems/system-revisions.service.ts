@@ -152,7 +152,7 @@ export async function addRevision(
     });
     return s;
   });
-  return toSystem(updated, choice, true);
+  return toSystem(updated, choice, true, store.timeZone);
 }
 
 /** The audit's words for a revision; a mass in both units and the company's number format, as the records write it. */

@@ -2,7 +2,7 @@ import { and, asc, eq, isNull } from "drizzle-orm";
 import type { AppContext } from "../../context";
 import type { ChargeInput, System, SystemInput, SystemUpdateInput } from "#core/contracts/systems";
 import { complianceAudit, systemRevisions, systems } from "../../db/schema/index";
-import { companyRules, type CompanyRules } from "../compliance/system-records";
+import { companyRules, inServiceOnOf, type CompanyRules } from "../compliance/system-records";
 import type { Refrigerant } from "#core/domain/refrigerants/types";
 import { KG_PER_POUND } from "#core/domain/units/mass";
 import { badRequest, conflict, HttpError, notFound } from "../../lib/http-error";
@@ -66,7 +66,7 @@ export async function companyGwpBases(ctx: AppContext, companyId: string, rules?
 }
 
 /** A system as the API shows it; `hasRecords` says whether it can still be deleted or only retired. */
-export function toSystem(row: SystemRow, bases: Bases, hasRecords: boolean, storeTimeZone = "UTC"): System {
+export function toSystem(row: SystemRow, bases: Bases, hasRecords: boolean, storeTimeZone: string): System {
   // Rows only hold ids checked on write; a missing one is a regression, not bad input.
   const r = resolveStored(bases.lookup, row.refrigerantId);
   return {
@@ -78,7 +78,7 @@ export function toSystem(row: SystemRow, bases: Bases, hasRecords: boolean, stor
     applianceType: row.applianceType,
     automaticLeakDetection: row.automaticLeakDetection,
     hermeticallySealed: row.hermeticallySealed,
-    inServiceOn: row.inServiceOn ?? row.createdAt.toISOString().slice(0, 10),
+    inServiceOn: inServiceOnOf(row, storeTimeZone),
     retired: row.retiredAt
       ? {
           at: row.retiredAt.toISOString(),
@@ -134,11 +134,9 @@ export async function loadSystem(ctx: AppContext, viewer: Viewer, systemId: stri
 }
 
 export async function getSystem(ctx: AppContext, viewer: Viewer, systemId: string): Promise<System> {
-  return toSystem(
-    await loadSystem(ctx, viewer, systemId),
-    await companyGwpBases(ctx, viewer.companyId),
-    await hasRecords(ctx, systemId),
-  );
+  const row = await loadSystem(ctx, viewer, systemId);
+  const store = await loadVisibleStore(ctx, viewer, row.storeId);
+  return toSystem(row, await companyGwpBases(ctx, viewer.companyId), await hasRecords(ctx, systemId), store.timeZone);
 }
 
 export async function createSystem(
@@ -177,7 +175,7 @@ export async function createSystem(
     });
     return created;
   });
-  return toSystem(row, choice, false);
+  return toSystem(row, choice, false, store.timeZone);
 }
 
 /**
@@ -193,8 +191,11 @@ export async function updateSystem(
   systemId: string,
   input: SystemUpdateInput,
 ): Promise<System> {
-  const current = await loadSystem(ctx, viewer, systemId);
-  refuseRetired(current);
+  const loaded = await loadSystem(ctx, viewer, systemId);
+  refuseRetired(loaded);
+  const store = await loadVisibleStore(ctx, viewer, loaded.storeId);
+  // A row written without an in-service day has the store's day it was created: not a change to make.
+  const current = { ...loaded, inServiceOn: inServiceOnOf(loaded, store.timeZone) };
   const { name, fullCharge, refrigerantId, hermeticallySealed, ...rest } = input;
   const choice = await companyGwpBases(ctx, viewer.companyId);
   const sameRefrigerant = refrigerantId === undefined || choice.lookup(refrigerantId)?.id === current.refrigerantId;
@@ -203,7 +204,7 @@ export async function updateSystem(
     fullChargeKg: fullCharge !== undefined ? chargeToKg(fullCharge) : current.fullChargeKg,
     applianceType: rest.applianceType ?? current.applianceType,
     automaticLeakDetection: rest.automaticLeakDetection ?? current.automaticLeakDetection,
-    inServiceOn: rest.inServiceOn ?? current.inServiceOn ?? current.createdAt.toISOString().slice(0, 10),
+    inServiceOn: rest.inServiceOn ?? current.inServiceOn,
   };
   const changed = (Object.keys(facts) as (keyof typeof facts)[]).filter((k) => facts[k] !== current[k]);
   const withRecords = await hasRecords(ctx, systemId);
@@ -216,10 +217,7 @@ export async function updateSystem(
       Object.fromEntries(changed.map((k) => [k, "changes by a dated revision once the system has records"])),
     );
   }
-  if (changed.includes("inServiceOn")) {
-    const store = await loadVisibleStore(ctx, viewer, current.storeId);
-    eventDay(facts.inServiceOn, store, "inServiceOn");
-  }
+  if (changed.includes("inServiceOn")) eventDay(facts.inServiceOn, store, "inServiceOn");
   const row = await ctx.db.transaction(async (tx) => {
     if (changed.includes("refrigerantId")) await holdRefrigerant(tx, viewer.companyId, facts.refrigerantId);
     const [updated] = await tx
@@ -253,7 +251,7 @@ export async function updateSystem(
       });
     return updated;
   });
-  return toSystem(row, choice, withRecords);
+  return toSystem(row, choice, withRecords, store.timeZone);
 }
 
 /** A retired system's facts are history: no edit and no new record changes them. */
