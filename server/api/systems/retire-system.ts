@@ -10,7 +10,6 @@ import {
   findings,
   leakChecks,
   leakDetectionChecks,
-  stores,
   systemRevisions,
   systems,
 } from "../../db/schema/index";
@@ -19,7 +18,7 @@ import { badRequest, conflict, HttpError } from "../../lib/http-error";
 import { eventDay } from "../findings/findings.service";
 import { hasRecords } from "./system-has-records";
 import { inServiceOnOf } from "../compliance/system-records";
-import { companyGwpBases, loadSystem, refuseRetired, toSystem } from "./systems.service";
+import { companyGwpBases, loadSystem, loadSystemWithStore, refuseRetired, toSystem } from "./systems.service";
 
 const FOREIGN_KEY_VIOLATION = "23503";
 
@@ -123,9 +122,8 @@ export async function retireSystem(
   systemId: string,
   input: RetireInput,
 ): Promise<SystemRemoval> {
-  const row = await loadSystem(ctx, viewer, systemId);
+  const { row, store } = await loadSystemWithStore(ctx, viewer, systemId);
   refuseRetired(row);
-  const [store] = await ctx.db.select().from(stores).where(eq(stores.id, row.storeId));
   const retiredOn = eventDay(input.retiredOn, store, "retiredOn");
   const inService = inServiceOnOf(row, store.timeZone);
   if (compareDates(retiredOn, inService) < 0)

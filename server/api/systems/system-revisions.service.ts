@@ -7,11 +7,19 @@ import { compareDates, type IsoDate } from "#core/domain/dates/calendar-date";
 import { badRequest } from "../../lib/http-error";
 import { eventDay } from "../findings/findings.service";
 import { rulesOfSettings } from "../compliance/system-records";
-import { loadVisibleStore, type Viewer } from "../../access/store-access";
+import type { Viewer } from "../../access/store-access";
 import { designationOf } from "#core/domain/refrigerants/types";
 import { formatRecordMass } from "#core/domain/units/format-units";
 import { holdRefrigerant, lookupFor, resolveStored } from "../refrigerants/company-refrigerant-lookup";
-import { chargeToKg, companyGwpBases, knownRefrigerant, loadSystem, refuseRetired, toSystem } from "./systems.service";
+import {
+  chargeToKg,
+  companyGwpBases,
+  knownRefrigerant,
+  loadSystem,
+  loadSystemWithStore,
+  refuseRetired,
+  toSystem,
+} from "./systems.service";
 
 type RevisionRow = typeof systemRevisions.$inferSelect;
 type Facts = Pick<
@@ -65,9 +73,8 @@ export async function addRevision(
   systemId: string,
   input: RevisionInput,
 ): Promise<System> {
-  const system = await loadSystem(ctx, viewer, systemId);
+  const { row: system, store } = await loadSystemWithStore(ctx, viewer, systemId);
   refuseRetired(system);
-  const store = await loadVisibleStore(ctx, viewer, system.storeId);
   const effectiveFrom = eventDay(input.effectiveFrom, store, "effectiveFrom");
   const today = eventDay(undefined, store);
   const existing = await revisionsOf(ctx, [systemId]);

@@ -117,25 +117,28 @@ export async function listSystems(
   return rows.map((r) => toSystem(r, bases, withRecords.has(r.id), store.timeZone));
 }
 
-export async function loadSystem(ctx: AppContext, viewer: Viewer, systemId: string): Promise<SystemRow> {
+/** A system of the viewer's company in a store they may see, with that store (its calendar dates the system's days). */
+export async function loadSystemWithStore(ctx: AppContext, viewer: Viewer, systemId: string) {
   const [row] = await ctx.db
     .select()
     .from(systems)
     .where(and(eq(systems.id, systemId), eq(systems.companyId, viewer.companyId)));
   if (!row) throw notFound("That system");
   try {
-    await loadVisibleStore(ctx, viewer, row.storeId);
+    return { row, store: await loadVisibleStore(ctx, viewer, row.storeId) };
   } catch (err) {
     // Only "not your store" becomes "not found"; a database outage stays a 503.
     if (err instanceof HttpError) throw notFound("That system");
     throw err;
   }
-  return row;
+}
+
+export async function loadSystem(ctx: AppContext, viewer: Viewer, systemId: string): Promise<SystemRow> {
+  return (await loadSystemWithStore(ctx, viewer, systemId)).row;
 }
 
 export async function getSystem(ctx: AppContext, viewer: Viewer, systemId: string): Promise<System> {
-  const row = await loadSystem(ctx, viewer, systemId);
-  const store = await loadVisibleStore(ctx, viewer, row.storeId);
+  const { row, store } = await loadSystemWithStore(ctx, viewer, systemId);
   return toSystem(row, await companyGwpBases(ctx, viewer.companyId), await hasRecords(ctx, systemId), store.timeZone);
 }
 
@@ -191,9 +194,8 @@ export async function updateSystem(
   systemId: string,
   input: SystemUpdateInput,
 ): Promise<System> {
-  const loaded = await loadSystem(ctx, viewer, systemId);
+  const { row: loaded, store } = await loadSystemWithStore(ctx, viewer, systemId);
   refuseRetired(loaded);
-  const store = await loadVisibleStore(ctx, viewer, loaded.storeId);
   // A row written without an in-service day has the store's day it was created: not a change to make.
   const current = { ...loaded, inServiceOn: inServiceOnOf(loaded, store.timeZone) };
   const { name, fullCharge, refrigerantId, hermeticallySealed, ...rest } = input;
